@@ -1,0 +1,2 @@
+/** Placeholder package description. */
+package org.convgrid.cli;

@@ -1,0 +1,24 @@
+package org.convgrid.engine.physics;
+
+import org.convgrid.engine.convection.ConvectiveTransport;
+import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.engine.physics.atmosphere.SurfaceBoundary;
+import org.convgrid.engine.physics.eos.EquationOfState;
+import org.convgrid.engine.physics.nuclear.NuclearNetwork;
+import org.convgrid.engine.physics.opacity.Opacity;
+
+/**
+ * Everything the structure solver needs to know about the physics, as one immutable bundle.
+ *
+ * @param eos equation of state
+ * @param opacity Rosseland-mean opacity
+ * @param nuclear hydrogen-burning network
+ * @param convection actual gradient in unstable layers (mixing-length theory with its alpha)
+ * @param criterion Schwarzschild or Ledoux
+ * @param surface outer boundary condition
+ * @param overshootHp step overshoot distance in pressure scale heights (0 for none)
+ */
+public record PhysicsSet(EquationOfState eos, Opacity opacity, NuclearNetwork nuclear,
+                         ConvectiveTransport convection, StabilityCriterion criterion, SurfaceBoundary surface,
+                         double overshootHp) {
+}

@@ -1,0 +1,22 @@
+package org.convgrid.engine.physics.nuclear;
+
+import org.convgrid.engine.state.Composition;
+
+/** Hydrogen burning: energy generation and composition rates. Implementations are immutable and thread-safe. */
+public interface NuclearNetwork {
+
+    /**
+     * @param density g cm^-3
+     * @param temperature K
+     * @param composition mass fractions
+     * @return energy generation (net of neutrino losses) and composition rates
+     */
+    BurningRate burn(double density, double temperature, Composition composition);
+
+    /**
+     * The composition with 3He and the CN isotopes at their local equilibrium abundances where these are reached
+     * (used for zero-age models); hydrogen, 4He, oxygen and the other metals are unchanged apart from the
+     * mass moved between them to keep the sum one.
+     */
+    Composition equilibrium(double density, double temperature, Composition composition);
+}
