@@ -1,0 +1,117 @@
+package org.convgrid.engine.zams;
+
+import org.convgrid.engine.physics.PhysicsSet;
+import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.structure.ExtraEnergy;
+import org.convgrid.engine.structure.HenyeySolver;
+import org.convgrid.engine.structure.MeshPlanner;
+import org.convgrid.engine.structure.ModelState;
+import org.convgrid.engine.structure.SolveFailedException;
+import org.convgrid.engine.structure.StellarModel;
+import org.convgrid.engine.structure.StructureSolver;
+
+/**
+ * Builds one homogeneous zero-age main-sequence model in thermal equilibrium from a starting state: relax,
+ * redistribute the mesh while it is uneven ({@link MeshPlanner}), then put 3He and the CN isotopes at their
+ * local equilibrium abundances ({@link org.convgrid.engine.physics.nuclear.NuclearNetwork#equilibrium}) shell
+ * by shell and relax again until the luminosity no longer changes. Immutable and thread-safe.
+ */
+public final class ZamsBuilder {
+
+    /** Composition-equilibrium passes allowed. */
+    public static final int MAX_COMPOSITION_PASSES = 4;
+    /** The composition passes stop when L changes by less than this fraction. */
+    public static final double COMPOSITION_TOLERANCE = 1.0e-5;
+    /** Remesh-and-relax passes allowed. */
+    public static final int MAX_REMESH_PASSES = 3;
+    /** Newton budget of a relaxation that starts from the polytropic guess. */
+    public static final int COLD_START_BUDGET = 200;
+    /** Largest ln step per Newton iteration from the polytropic guess. */
+    public static final double COLD_START_MAX_STEP = 0.3;
+
+    private final PhysicsSet physics;
+    private final MeshPlanner planner;
+    private final HenyeySolver.Settings settings;
+    private final StructureSolver solver;
+
+    public ZamsBuilder(PhysicsSet physics, MeshPlanner planner, HenyeySolver.Settings settings) {
+        this.physics = physics;
+        this.planner = planner;
+        this.settings = settings;
+        this.solver = new StructureSolver(physics, settings);
+    }
+
+    public ZamsBuilder(PhysicsSet physics) {
+        this(physics, new MeshPlanner(MeshPlanner.DEFAULT_POINTS), HenyeySolver.Settings.DEFAULT);
+    }
+
+    public PhysicsSet physics() {
+        return physics;
+    }
+
+    /**
+     * A model from the polytropic guess.
+     *
+     * @param mass g
+     * @throws SolveFailedException when a relaxation fails (its report counts every iteration spent)
+     */
+    public ZamsModel coldStart(double mass, Composition composition) {
+        ModelState guess = new PolytropicGuess(planner.points()).guess(mass, composition);
+        HenyeySolver.Settings cold = new HenyeySolver.Settings(settings.tolerance(), COLD_START_MAX_STEP,
+                COLD_START_BUDGET);
+        return build(guess, composition, cold, true);
+    }
+
+    /**
+     * A model from a seed state (e.g. {@link HomologySeeder#seed}) for the seed's mass.
+     *
+     * @throws SolveFailedException when a relaxation fails (its report counts every iteration spent)
+     */
+    public ZamsModel fromSeed(ModelState seed, Composition composition) {
+        return build(seed, composition, settings, false);
+    }
+
+    private ZamsModel build(ModelState start, Composition composition, HenyeySolver.Settings first,
+                            boolean cold) {
+        int spent = 0;
+        StellarModel model;
+        try {
+            model = solver.relax(start, ExtraEnergy.NONE, null, first);
+            spent += model.report().iterations();
+            for (int pass = 0; pass < MAX_REMESH_PASSES && planner.needsRemesh(model); pass++) {
+                model = solver.relax(planner.remesh(model), ExtraEnergy.NONE, null, settings);
+                spent += model.report().iterations();
+            }
+            for (int pass = 0; pass < MAX_COMPOSITION_PASSES; pass++) {
+                Composition[] equilibrium = equilibriumCompositions(model, composition);
+                if (equilibrium == null) {
+                    break;
+                }
+                double before = model.global().luminosity();
+                model = solver.relax(model.state().withCompositions(equilibrium), ExtraEnergy.NONE, null,
+                        settings);
+                spent += model.report().iterations();
+                if (Math.abs(model.global().luminosity() / before - 1.0) < COMPOSITION_TOLERANCE) {
+                    break;
+                }
+            }
+        } catch (SolveFailedException e) {
+            throw new SolveFailedException("zero-age model of " + start.mesh().totalMass() + " g",
+                    e.report().plusIterations(spent));
+        }
+        return new ZamsModel(model, composition, spent, cold);
+    }
+
+    /** Equilibrium compositions per shell, or null when they equal the current ones. */
+    private Composition[] equilibriumCompositions(StellarModel model, Composition initial) {
+        int n = model.state().size();
+        Composition[] result = new Composition[n];
+        boolean changed = false;
+        for (int k = 0; k < n; k++) {
+            result[k] = physics.nuclear().equilibrium(model.profile().density(k), model.profile().temperature(k),
+                    initial);
+            changed |= !result[k].equals(model.state().composition(k));
+        }
+        return changed ? result : null;
+    }
+}
