@@ -1,2 +1,2 @@
-/** Placeholder package description. */
+/** The convgrid command line: picocli subcommands, console output and exit codes. */
 package org.convgrid.cli;

@@ -1,0 +1,16 @@
+package org.convgrid.cli;
+
+/** Process exit codes, fixed in the conventions. */
+final class ExitCodes {
+    /** All good. */
+    static final int OK = 0;
+    /** Software or I/O failure. */
+    static final int FAILURE = 1;
+    /** Bad usage or bad grid file. */
+    static final int USAGE = 2;
+    /** The run finished but some models failed. */
+    static final int SOME_MODELS_FAILED = 3;
+
+    private ExitCodes() {
+    }
+}

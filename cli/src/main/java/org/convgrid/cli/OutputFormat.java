@@ -1,0 +1,6 @@
+package org.convgrid.cli;
+
+/** How a command prints its result. */
+enum OutputFormat {
+    TABLE, CSV
+}

@@ -1,0 +1,17 @@
+package org.convgrid.engine.batch;
+
+import java.util.List;
+
+/**
+ * Computes one chunk: consecutive requests of one line of constant composition and physics, in increasing mass
+ * (all ages of a mass together). Each chunk starts from its own seed, so the result of a chunk does not depend on
+ * which thread or which shard computes it. Implementations must be thread-safe.
+ */
+public interface ChunkSolver {
+
+    /**
+     * @param chunk requests in grid order
+     * @return one outcome per request, in the same order; failures are outcomes with a status, not exceptions
+     */
+    List<ModelOutcome> solve(List<ModelRequest> chunk);
+}
