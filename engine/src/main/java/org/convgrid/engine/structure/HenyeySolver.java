@@ -23,6 +23,11 @@ public final class HenyeySolver {
     public static final int DEFAULT_ITERATION_BUDGET = 60;
     /** Step cuts tried when the physics rejects a damped state. */
     public static final int MAX_BACKTRACKS = 6;
+    /**
+     * The residual-decrease test is applied only when the undamped correction exceeds this many times the step
+     * cap, i.e. far from the solution; near it plain Newton steps are taken.
+     */
+    public static final double LINE_SEARCH_THRESHOLD = 3.0;
     /** Factor applied to the step at each cut. */
     public static final double BACKTRACK_FACTOR = 0.25;
 
@@ -94,8 +99,10 @@ public final class HenyeySolver {
                         worst % nv, "non-finite correction"));
             }
             double lambda = Math.min(1.0, settings.maxStep() / largest);
+            double norm = sumOfSquares(residual);
             String rejection = null;
             boolean accepted = false;
+            boolean searching = largest > settings.maxStep() * LINE_SEARCH_THRESHOLD;
             for (int cut = 0; cut <= MAX_BACKTRACKS && !accepted; cut++) {
                 for (int i = 0; i < n; i++) {
                     trial[i] = y[i] + lambda * delta[i];
@@ -105,6 +112,11 @@ public final class HenyeySolver {
                     system.evaluate(trial, residual, jacobian);
                     accepted = allFinite(residual);
                     rejection = accepted ? null : "non-finite residual";
+                    // far from the solution, also ask the residuals to shrink (the last cut is taken anyway)
+                    if (accepted && searching && cut < MAX_BACKTRACKS && sumOfSquares(residual) > norm) {
+                        accepted = false;
+                        rejection = "residuals grew";
+                    }
                 } catch (ConvgridException e) {
                     rejection = e.getMessage();
                 }
@@ -124,6 +136,14 @@ public final class HenyeySolver {
         }
         return new Result(y, new SolveReport(StopReason.ITERATION_BUDGET, settings.iterationBudget(), largest,
                 worst / nv, worst % nv, ""));
+    }
+
+    private static double sumOfSquares(double[] values) {
+        double sum = 0.0;
+        for (double v : values) {
+            sum += v * v;
+        }
+        return sum;
     }
 
     private static boolean allFinite(double[] values) {

@@ -55,15 +55,19 @@ public final class PolytropicProfile {
         List<double[]> fine = new ArrayList<>();
         double x0 = Math.cbrt(3.0 * centralFraction * total);
         fine.add(new double[] {x0, 1.0 - x0 * x0 / 6.0, centralFraction, 1.0 - centralFraction});
+        double th = 1.0;
         for (int i = 1; i <= last; i++) {
             if (le.xi(i) <= x0) {
                 continue;
             }
+            if (le.theta(i) <= surfaceTheta) {
+                break;
+            }
+            th = le.theta(i);
             double qi = le.mass(i) / total;
             double ei = ext[i] / total;
             fine.add(new double[] {le.xi(i), le.theta(i), qi < 0.5 ? qi : 1.0 - ei, qi < 0.5 ? 1.0 - qi : ei});
         }
-        double th = le.theta(last);
         while (th > surfaceTheta) {
             th = Math.max(surfaceTheta, th * Math.exp(-OUTER_LN_THETA_STEP));
             double x = x1 - th / Math.abs(slope1);
