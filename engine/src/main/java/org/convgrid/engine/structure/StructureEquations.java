@@ -49,6 +49,7 @@ public final class StructureEquations implements DifferenceSystem {
     private final double luminosityScale;
     private final double[] nablaMu;
     private final ExtraEnergy extra;
+    private final double burningFactor;
     private final int n;
 
     private final EosState[] eos;
@@ -72,6 +73,17 @@ public final class StructureEquations implements DifferenceSystem {
      */
     public StructureEquations(MassMesh mesh, Composition[] composition, PhysicsSet physics, double luminosityScale,
                               double[] nablaMu, ExtraEnergy extra) {
+        this(mesh, composition, physics, luminosityScale, nablaMu, extra, 1.0);
+    }
+
+    /**
+     * As above, with the nuclear energy generation multiplied by {@code burningFactor}: a homotopy parameter for
+     * cold starts (a guess is first relaxed with the burning rescaled to match its luminosity, then the factor is
+     * walked back to one). Models are only physical with the factor one.
+     */
+    public StructureEquations(MassMesh mesh, Composition[] composition, PhysicsSet physics, double luminosityScale,
+                              double[] nablaMu, ExtraEnergy extra, double burningFactor) {
+        this.burningFactor = burningFactor;
         this.mesh = mesh;
         this.composition = composition.clone();
         this.physics = physics;
@@ -172,12 +184,13 @@ public final class StructureEquations implements DifferenceSystem {
         double r = Math.exp(lnR);
         nabla[k] = localNabla(k, r, lum, s, op.kappa(), true);
         double ex = extra.at(k, s);
-        eps[k] = burn.eps() + ex;
+        double nuclear = burningFactor * burn.eps();
+        eps[k] = nuclear + ex;
         if (!derivatives) {
             return;
         }
-        dEps[2 * k] = burn.eps() * burn.dlnEpsDlnRho();
-        dEps[2 * k + 1] = burn.eps() * burn.dlnEpsDlnT();
+        dEps[2 * k] = nuclear * burn.dlnEpsDlnRho();
+        dEps[2 * k + 1] = nuclear * burn.dlnEpsDlnT();
         boolean convective = convection[k] != null && convection[k].convective();
         if (!convective && extra == ExtraEnergy.NONE) {
             // radiative: nabla = C kappa L P / (m T^4), differentiated analytically
@@ -367,6 +380,15 @@ public final class StructureEquations implements DifferenceSystem {
 
     double nablaStabilityAt(int k) {
         return nablaStability[k];
+    }
+
+    /** Total nuclear luminosity of the last evaluation with the burning factor one, erg s^-1 (trapezoid rule). */
+    double nuclearLuminosity() {
+        double sum = epsNuclear[0] * mesh.mass(0);
+        for (int k = 0; k < n - 1; k++) {
+            sum += 0.5 * (epsNuclear[k] + epsNuclear[k + 1]) * mesh.intervalMass(k);
+        }
+        return sum;
     }
 
     double epsNuclearAt(int k) {

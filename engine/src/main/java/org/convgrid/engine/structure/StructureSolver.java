@@ -21,6 +21,18 @@ public final class StructureSolver {
         this(physics, HenyeySolver.Settings.DEFAULT);
     }
 
+    /**
+     * The burning factor that makes the guess's nuclear luminosity equal its surface luminosity: the starting
+     * point of the cold-start homotopy.
+     */
+    public double matchingBurningFactor(ModelState guess) {
+        StructureEquations eq = new StructureEquations(guess.mesh(), guess.compositions(), physics,
+                Math.abs(guess.surfaceLuminosity()), null, ExtraEnergy.NONE);
+        double[] y = eq.unknowns(guess);
+        eq.evaluate(y, new double[y.length], null);
+        return guess.surfaceLuminosity() / eq.nuclearLuminosity();
+    }
+
     public PhysicsSet physics() {
         return physics;
     }
@@ -46,9 +58,20 @@ public final class StructureSolver {
      */
     public StellarModel relax(ModelState guess, ExtraEnergy extra, double[] nablaMu,
                               HenyeySolver.Settings solveSettings) {
+        return relax(guess, extra, nablaMu, solveSettings, 1.0);
+    }
+
+    /**
+     * Relaxes with the nuclear energy generation multiplied by {@code burningFactor} (a cold-start homotopy
+     * parameter; see {@link StructureEquations}); the result is a physical model only when it is one.
+     *
+     * @throws SolveFailedException with the report when the relaxation does not converge
+     */
+    public StellarModel relax(ModelState guess, ExtraEnergy extra, double[] nablaMu,
+                              HenyeySolver.Settings solveSettings, double burningFactor) {
         double scale = Math.abs(guess.surfaceLuminosity());
         StructureEquations eq = new StructureEquations(guess.mesh(), guess.compositions(), physics, scale,
-                nablaMu, extra);
+                nablaMu, extra, burningFactor);
         HenyeySolver.Result result = henyey.solve(eq, eq.unknowns(guess), solveSettings);
         if (!result.report().converged()) {
             throw new SolveFailedException("structure relaxation failed", result.report());

@@ -25,9 +25,16 @@ public final class ZamsBuilder {
     /** Remesh-and-relax passes allowed. */
     public static final int MAX_REMESH_PASSES = 3;
     /** Newton budget of a relaxation that starts from the polytropic guess. */
-    public static final int COLD_START_BUDGET = 200;
+    public static final int COLD_START_BUDGET = 150;
     /** Largest ln step per Newton iteration from the polytropic guess. */
     public static final double COLD_START_MAX_STEP = 0.3;
+
+    /** Largest ln change of the cold-start burning factor per relaxation. */
+    public static final double HOMOTOPY_STEP = 1.5;
+    /** Smallest ln step of the burning factor tried before a cold start is given up. */
+    public static final double MIN_HOMOTOPY_STEP = 0.05;
+    /** Bound on the initial burning factor (and its inverse). */
+    public static final double MAX_BURNING_FACTOR = 1.0e6;
 
     private final PhysicsSet physics;
     private final MeshPlanner planner;
@@ -50,7 +57,8 @@ public final class ZamsBuilder {
     }
 
     /**
-     * A model from the polytropic guess.
+     * A model from the polytropic guess: first relaxed directly; if that fails, by a homotopy in the burning
+     * rate (relaxed with eps scaled to the guessed luminosity, then the factor walked back to one).
      *
      * @param mass g
      * @throws SolveFailedException when a relaxation fails (its report counts every iteration spent)
@@ -59,7 +67,52 @@ public final class ZamsBuilder {
         ModelState guess = new PolytropicGuess(planner.points()).guess(mass, composition);
         HenyeySolver.Settings cold = new HenyeySolver.Settings(settings.tolerance(), COLD_START_MAX_STEP,
                 COLD_START_BUDGET);
-        return build(guess, composition, cold, true);
+        int direct;
+        try {
+            return build(guess, composition, cold, true);
+        } catch (SolveFailedException e) {
+            direct = e.report().iterations();
+        }
+        try {
+            ZamsModel z = homotopy(guess, composition, cold);
+            return new ZamsModel(z.model(), composition, z.iterations() + direct, true);
+        } catch (SolveFailedException e) {
+            throw new SolveFailedException("cold start of " + mass + " g", e.report().plusIterations(direct));
+        }
+    }
+
+    private ZamsModel homotopy(ModelState guess, Composition composition, HenyeySolver.Settings cold) {
+        // homotopy in the burning rate: first relax with the burning scaled to the guessed luminosity, then
+        // walk the factor back to one in steps of at most HOMOTOPY_STEP in ln, halving a step that fails
+        double lnFactor = Math.log(Math.min(MAX_BURNING_FACTOR, Math.max(1.0 / MAX_BURNING_FACTOR,
+                solver.matchingBurningFactor(guess))));
+        int spent = 0;
+        StellarModel model;
+        try {
+            model = solver.relax(guess, ExtraEnergy.NONE, null, cold, Math.exp(lnFactor));
+        } catch (SolveFailedException e) {
+            throw new SolveFailedException("cold start at burning factor " + Math.exp(lnFactor), e.report());
+        }
+        spent += model.report().iterations();
+        double step = HOMOTOPY_STEP;
+        while (lnFactor != 0.0) {
+            double next = Math.abs(lnFactor) <= step ? 0.0 : lnFactor - Math.copySign(step, lnFactor);
+            try {
+                model = solver.relax(model.state(), ExtraEnergy.NONE, null, settings, Math.exp(next));
+                spent += model.report().iterations();
+                lnFactor = next;
+                step = Math.min(HOMOTOPY_STEP, 2.0 * step);
+            } catch (SolveFailedException e) {
+                spent += e.report().iterations();
+                step *= 0.5;
+                if (step < MIN_HOMOTOPY_STEP) {
+                    throw new SolveFailedException("cold start at burning factor " + Math.exp(next),
+                            e.report().plusIterations(spent - e.report().iterations()));
+                }
+            }
+        }
+        ZamsModel z = build(model.state(), composition, settings, true);
+        return new ZamsModel(z.model(), composition, z.iterations() + spent, true);
     }
 
     /**

@@ -17,7 +17,7 @@ class ScratchMeshTest {
         for (double m : new double[] {1.0, 3.0, 0.3}) {
             for (int n : new int[] {300, 500, 1000, 2000}) {
                 ZamsBuilder b = new ZamsBuilder(physics, new MeshPlanner(n), HenyeySolver.Settings.DEFAULT);
-                ZamsModel z = b.coldStart(m * Constants.M_SUN, c);
+                ZamsModel z = new ZamsTrack(b, c).solve(m * Constants.M_SUN).model();
                 var g = z.model().global();
                 StellarProfile p = z.model().profile();
                 int k = p.size() - 1;
