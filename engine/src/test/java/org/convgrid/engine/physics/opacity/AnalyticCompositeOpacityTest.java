@@ -65,6 +65,10 @@ class AnalyticCompositeOpacityTest extends OpacityContractTest {
                 double predicted = 0.5 * (a.dlnKappaDlnT() + b.dlnKappaDlnT()) * step;
                 assertThat(Math.log(b.kappa() / a.kappa()) - predicted).as("T jump at logT %s logR %s", logT, logR)
                         .isBetween(-MAX_STEP_JUMP, MAX_STEP_JUMP);
+                OpacityValue d = composite.rosselandMean(rho * Math.exp(step), t, c);
+                double predictedRho = 0.5 * (a.dlnKappaDlnRho() + d.dlnKappaDlnRho()) * step;
+                assertThat(Math.log(d.kappa() / a.kappa()) - predictedRho).as("rho jump at logT %s logR %s", logT, logR)
+                        .isBetween(-MAX_STEP_JUMP, MAX_STEP_JUMP);
             }
         }
     }
