@@ -138,9 +138,10 @@ class HydrogenBurningNetworkTest {
             assertThat(Math.abs(sum)).isLessThanOrEqualTo(1e-14 * scale);
             assertThat(r.dhe4Dt()).isPositive();
         }
-        // At 5 MK this 3He is far above its equilibrium: 3He + 3He returns protons faster than p + p uses them.
-        assertThat(DEFAULT.burn(80.0, 5e6, c).dh1Dt()).isPositive();
-        assertThat(DEFAULT.burn(80.0, 1.5e7, c).dh1Dt()).isNegative();
+        // At 15 MK this 3He is ~8x its equilibrium: 3He + 3He returns protons faster than p + p uses them.
+        assertThat(DEFAULT.burn(80.0, 1.5e7, c).dh1Dt()).isPositive();
+        Composition fresh = new Composition(0.6, 0.0, 0.38, 0.003, 0.002, 0.009, 0.006);
+        assertThat(DEFAULT.burn(80.0, 1.5e7, fresh).dh1Dt()).isNegative();
     }
 
     @Test
