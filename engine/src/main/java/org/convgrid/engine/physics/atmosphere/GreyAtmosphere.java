@@ -33,12 +33,15 @@ public final class GreyAtmosphere implements SurfaceBoundary {
     /** Optical depth where the integration starts. */
     public static final double DEFAULT_OUTER_DEPTH = 1.0e-4;
     /** Relative and absolute (in ln P) tolerance of the step-size control. */
-    public static final double INTEGRATION_TOLERANCE = 1.0e-10;
+    public static final double INTEGRATION_TOLERANCE = 1.0e-8;
     /** Budget of right-hand-side evaluations per integration. */
     public static final int MAX_EVALUATIONS = 20_000;
     /** Newton budget and tolerance (in ln P) for the outer boundary pressure. */
     public static final int MAX_START_ITERATIONS = 50;
     public static final double START_TOLERANCE = 1.0e-13;
+
+    /** Below this P_gas/P with the radiative force winning, the atmosphere is declared super-Eddington. */
+    public static final double MIN_GAS_PRESSURE_FRACTION = 1.0e-8;
 
     private final EquationOfState eos;
     private final Opacity opacity;
@@ -130,6 +133,9 @@ public final class GreyAtmosphere implements SurfaceBoundary {
             double b = pGas / (pGas + pRad);
             double a = tau * gravity / (k[0] * pGas);
             double r = tau * fluxOverC * (1.0 + relation.hopfDerivative(tau)) / pGas;
+            if (r > a && b < MIN_GAS_PRESSURE_FRACTION) {
+                throw superEddington(tau, k[0]);
+            }
             yDot[0] = a - r;
             yDot[1] = a * (-k[1] * (b * y[1] + 4.0 * (1.0 - b)) - k[2] - y[1]) - r * (4.0 - y[1]);
             yDot[2] = a * (1.0 - (1.0 + k[1] * b) * y[2]) + r * y[2];
@@ -140,6 +146,7 @@ public final class GreyAtmosphere implements SurfaceBoundary {
             double t0 = relation.temperature(tau0, teff);
             double pRad = radiationPressure(t0);
             double lnPg = Math.log(tau0 * gravity / 0.2); // electron scattering guess, kappa ~ 0.2 (1+X)
+            double radiativeForce = fluxOverC * (1.0 + relation.hopfDerivative(tau0));
             for (int i = 0; i < MAX_START_ITERATIONS; i++) {
                 double pGas = Math.exp(lnPg);
                 double[] k = kappa(pGas + pRad, t0);
@@ -148,6 +155,9 @@ public final class GreyAtmosphere implements SurfaceBoundary {
                 double step = (lnPg - Math.log(tau0 * gravity / k[0])) / denominator;
                 lnPg -= step;
                 if (Math.abs(step) < START_TOLERANCE) {
+                    if (gravity / k[0] <= radiativeForce) {
+                        throw superEddington(tau0, k[0]);
+                    }
                     // Differentiating P_gas = tau0 g/kappa(P, T) with T proportional to Teff.
                     return new double[] {lnPg, -(4.0 * k[1] * (1.0 - b) + k[2]) / denominator, 1.0 / denominator};
                 }
@@ -155,6 +165,12 @@ public final class GreyAtmosphere implements SurfaceBoundary {
             throw new ConvgridException(ErrorKind.NOT_CONVERGED, String.format(
                     "outer atmosphere pressure did not converge in %d iterations (Teff = %s K, g = %s cm s^-2)",
                     MAX_START_ITERATIONS, teff, gravity), MAX_START_ITERATIONS, teff, gravity);
+        }
+
+        private ConvgridException superEddington(double tau, double kappa) {
+            return new ConvgridException(ErrorKind.OUT_OF_RANGE, String.format(
+                    "radiative force exceeds gravity at tau = %s (Teff = %s K, g = %s cm s^-2, kappa = %s cm^2/g)",
+                    tau, teff, gravity, kappa), "gravity", gravity, kappa * fluxOverC, Double.POSITIVE_INFINITY);
         }
 
         /** kappa, (dln kappa/dln P)_T and (dln kappa/dln T)_P at total pressure p and temperature t. */
