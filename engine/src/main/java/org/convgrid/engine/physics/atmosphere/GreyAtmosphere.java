@@ -24,8 +24,9 @@ import org.convgrid.engine.units.Constants;
  * at its hydrostatic value without the radiative force, an error of at most tau_0 F/c in P. The sensitivities
  * d ln P/d ln Teff and d ln P/d ln g are integrated with the pressure (variational equations), using the
  * EOS's chi_rho and delta and the opacity's logarithmic derivatives;
- * ln T at the fitting depth is ln Teff + ln(3/4 (tau + q))/4 exactly. Fails with the EOS's or opacity's
- * exception where they fail, e.g. where the radiation force exceeds gravity (P_gas &lt; 0).
+ * ln T at the fitting depth is ln Teff + ln(3/4 (tau + q))/4 exactly. Fails with OUT_OF_RANGE where the
+ * radiative force outweighs gravity (P_gas driven below {@value #MIN_GAS_PRESSURE_FRACTION} of P), with
+ * NOT_CONVERGED when the integration budget runs out, and with the EOS's or opacity's exception where they fail.
  * Immutable and thread-safe when the EOS and opacity are.
  */
 public final class GreyAtmosphere implements SurfaceBoundary {

@@ -39,16 +39,20 @@ class GreyAtmosphereTest {
     @Test
     void sensitivitiesMatchFiniteDifferences() {
         // Variational equations vs centred differences (derived, no published value).
-        GreyAtmosphere atm = new GreyAtmosphere(new TestIdealGasEos(1.3), TestOpacities.blend());
-        for (double[] c : new double[][] {{5772, 27400}, {3500, 1e5}, {9000, 1e4}, {40000, 1e4}}) {
-            SurfaceCondition s = atm.at(c[0], c[1], SOLAR);
-            double e = 1e-4;
-            double dT = (atm.at(c[0] * Math.exp(e), c[1], SOLAR).lnPressure()
-                    - atm.at(c[0] * Math.exp(-e), c[1], SOLAR).lnPressure()) / (2 * e);
-            double dG = (atm.at(c[0], c[1] * Math.exp(e), SOLAR).lnPressure()
-                    - atm.at(c[0], c[1] * Math.exp(-e), SOLAR).lnPressure()) / (2 * e);
-            assertThat(s.dlnPDlnTeff()).as("Teff %s", c[0]).isCloseTo(dT, within(1e-5));
-            assertThat(s.dlnPDlnG()).as("Teff %s", c[0]).isCloseTo(dG, within(1e-5));
+        KrishnaSwamy ks = new KrishnaSwamy();
+        for (GreyAtmosphere atm : new GreyAtmosphere[] {
+                new GreyAtmosphere(new TestIdealGasEos(1.3), TestOpacities.blend()),
+                new GreyAtmosphere(new TestIdealGasEos(1.3), TestOpacities.blend(), ks, ks.photosphericDepth())}) {
+            for (double[] c : new double[][] {{5772, 27400}, {3500, 1e5}, {9000, 1e4}, {40000, 1e4}}) {
+                SurfaceCondition s = atm.at(c[0], c[1], SOLAR);
+                double e = 1e-4;
+                double dT = (atm.at(c[0] * Math.exp(e), c[1], SOLAR).lnPressure()
+                        - atm.at(c[0] * Math.exp(-e), c[1], SOLAR).lnPressure()) / (2 * e);
+                double dG = (atm.at(c[0], c[1] * Math.exp(e), SOLAR).lnPressure()
+                        - atm.at(c[0], c[1] * Math.exp(-e), SOLAR).lnPressure()) / (2 * e);
+                assertThat(s.dlnPDlnTeff()).as("Teff %s", c[0]).isCloseTo(dT, within(1e-5));
+                assertThat(s.dlnPDlnG()).as("Teff %s", c[0]).isCloseTo(dG, within(1e-5));
+            }
         }
     }
 
