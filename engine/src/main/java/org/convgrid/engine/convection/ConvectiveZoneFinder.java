@@ -30,9 +30,11 @@ import org.convgrid.engine.error.ConvgridException;
  * </ul>
  * A fully convective star reports core mass fraction 1 and envelope base 0, as the catalogue requires.
  *
- * <p>Turnover times (formulas.md 4.3): the local time is l_m/v_c with l_m = alpha H_P, evaluated half a mixing
- * length above the envelope base, r = r_base + alpha H_P(r_base)/2 (Gilliland 1985, ApJ 299, 286; Kim &amp;
- * Demarque 1996, ApJ 457, 340), H_P and v_c linearly interpolated in r; when that point lies above the top of
+ * <p>Turnover times (formulas.md 4.3): the local time is l_m/v_c with l_m = alpha H_P, evaluated half a pressure
+ * scale height above the envelope base, r = r_base + H_P(r_base)/2, as the catalogue column
+ * {@code turnover_time_days} is defined (conventions.md). Gilliland 1985 (ApJ 299, 286) and Kim &amp; Demarque
+ * 1996 (ApJ 457, 340) evaluate it half a mixing length above the base instead; the two points coincide for
+ * alpha = 1 and differ by under one scale height for the usual alpha; H_P and v_c are linearly interpolated in r; when that point lies above the top of
  * the envelope (very thin envelopes) the envelope's radial midpoint is used. For a fully convective star there is
  * no base and the local time is evaluated at r = R/2. The global time is the trapezoid integral of dr/v_c over
  * the consecutive mesh points of the envelope where v_c &gt; 0 (Kim &amp; Demarque 1996); the partial intervals at
@@ -45,8 +47,8 @@ public final class ConvectiveZoneFinder {
     public static final double DEFAULT_MIN_CORE_MASS_FRACTION = 1.0e-4;
     /** Default largest mass fraction above the top of a zone for it to count as reaching the surface. */
     public static final double DEFAULT_SURFACE_SKIN_MASS_FRACTION = 1.0e-6;
-    /** Height of the local turnover point above the envelope base, in mixing lengths (Gilliland 1985). */
-    public static final double TURNOVER_HEIGHT_MIXING_LENGTHS = 0.5;
+    /** Height of the local turnover point above the envelope base, in pressure scale heights (conventions.md). */
+    public static final double TURNOVER_HEIGHT_SCALE_HEIGHTS = 0.5;
 
     private final double minCoreMassFraction;
     private final double surfaceSkinMassFraction;
@@ -112,8 +114,7 @@ public final class ConvectiveZoneFinder {
         }
         double rBase = outermost.innerRadiusFraction() * profile.totalRadius();
         double rTop = outermost.outerRadiusFraction() * profile.totalRadius();
-        double rTurn = rBase + TURNOVER_HEIGHT_MIXING_LENGTHS * profile.mixingLengthAlpha()
-                * p.scaleHeightAtCrossing(envSpan[0] - 1);
+        double rTurn = rBase + TURNOVER_HEIGHT_SCALE_HEIGHTS * p.scaleHeightAtCrossing(envSpan[0] - 1);
         if (rTurn > rTop) {
             rTurn = 0.5 * (rBase + rTop);
         }

@@ -156,7 +156,8 @@ class ConvectiveZoneFinderTest {
     @Test
     void turnoverTimesOnAnAnalyticEnvelope() {
         // Derived: base q_b = 0.7123 (r = q R), v = v0 (1 + 2 (r - r_b)/R), H_P = H0 (1 - (r - r_b)/(2R)), all
-        // linear in r so the interpolation is exact. Local: r* = r_b + alpha H0/2, tau = alpha H_P(r*)/v(r*).
+        // linear in r so the interpolation is exact. Local: r* = r_b + H0/2 (half a pressure scale height,
+        // conventions.md), tau = alpha H_P(r*)/v(r*).
         // Global: int dr/v from the first mesh point above the base to R = (R/2v0) ln(v(R)/v(r_1)).
         double qb = 0.7123;
         double v0 = 3e4;
@@ -165,7 +166,7 @@ class ConvectiveZoneFinderTest {
         ZoneProfile p = profile(q, x -> x - qb, x -> v0 * (1 + 2 * (x - qb)), x -> h0 * (1 - (x - qb) / 2));
         ConvectiveStructure s = finder.find(p);
         double rb = qb * R;
-        double rStar = rb + ALPHA * h0 / 2;
+        double rStar = rb + h0 / 2;
         double dr = (rStar - rb) / R;
         double local = ALPHA * h0 * (1 - dr / 2) / (v0 * (1 + 2 * dr));
         assertThat(s.turnoverTimeLocal()).isCloseTo(local, within(1e-10 * local));
@@ -176,7 +177,7 @@ class ConvectiveZoneFinderTest {
 
     @Test
     void veryThinEnvelopeUsesItsMidpoint() {
-        // Half a mixing length (0.9 * 0.1 R) overshoots the 0.001 R deep envelope: evaluated at its middle.
+        // Half a scale height (0.05 R) overshoots the 0.001 R deep envelope: evaluated at its middle.
         ConvectiveStructure s = finder.find(profile(uniform(100001), x -> x - 0.999, x -> 2e5 * x, x -> 0.1 * R));
         double mid = 0.9995;
         assertThat(s.turnoverTimeLocal()).isCloseTo(ALPHA * 0.1 * R / (2e5 * mid), within(1e-9));
