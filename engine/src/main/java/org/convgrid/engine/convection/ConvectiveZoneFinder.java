@@ -1,0 +1,201 @@
+package org.convgrid.engine.convection;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.convgrid.engine.error.ConvgridException;
+
+/**
+ * Finds the convective zones of a model and the catalogue quantities derived from them (conventions.md,
+ * {@code catalogue.csv}). Immutable and thread-safe.
+ *
+ * <p>A mesh point is convective where the stability excess nabla_rad - nabla_stability is positive. Each zone
+ * boundary lies where the linear interpolant of the excess between two mesh points changes sign; mass, radius
+ * and H_P there are interpolated with the same weight (KWW 2012 ch. 6; formulas.md 4.1). A zone that contains
+ * the innermost point starts at the centre (m = r = 0); one that contains the outermost point ends at m/M =
+ * r/R = 1. Every zone, however thin, is listed.
+ *
+ * <p>Roles and class:
+ * <ul>
+ * <li>The <em>core</em> is the zone that starts at the centre, provided its top exceeds the minimum core mass
+ * fraction (default {@value #DEFAULT_MIN_CORE_MASS_FRACTION}, common practice: below it the "core" is a few
+ * central mesh points, comparable with where the first mesh point sits, formulas.md 6.2).</li>
+ * <li>The <em>envelope</em> is the outermost zone if it reaches the surface, i.e. the mass above its top is at
+ * most the surface skin fraction (default {@value #DEFAULT_SURFACE_SKIN_MASS_FRACTION}). The skin exists because
+ * in real envelopes the convective top lies a little below the fitting point, where the atmosphere T(tau) keeps
+ * the layers just under the photosphere radiative; the skin is far below any envelope of interest.</li>
+ * <li>The star is <em>fully convective</em> when one zone both starts at the centre and reaches the surface.
+ * Any radiative shell between a core and an envelope, however thin, makes it conv_core_and_envelope: near the
+ * fully convective limit such shells are physical (van Saders &amp; Pinsonneault 2012, ApJ 751, 98).</li>
+ * </ul>
+ * A fully convective star reports core mass fraction 1 and envelope base 0, as the catalogue requires.
+ *
+ * <p>Turnover times (formulas.md 4.3): the local time is l_m/v_c with l_m = alpha H_P, evaluated half a pressure
+ * scale height above the envelope base, r = r_base + H_P(r_base)/2, as the catalogue column
+ * {@code turnover_time_days} is defined (conventions.md). Gilliland 1985 (ApJ 299, 286) and Kim &amp; Demarque
+ * 1996 (ApJ 457, 340) evaluate it half a mixing length above the base instead; the two points coincide for
+ * alpha = 1 and differ by under one scale height for the usual alpha; H_P and v_c are linearly interpolated in r; when that point lies above the top of
+ * the envelope (very thin envelopes) the envelope's radial midpoint is used. For a fully convective star there is
+ * no base and the local time is evaluated at r = R/2. The global time is the trapezoid integral of dr/v_c over
+ * the consecutive mesh points of the envelope where v_c &gt; 0 (Kim &amp; Demarque 1996); the partial intervals at
+ * the boundaries, where v_c tends to 0 and 1/v_c is integrable but not trapezoid-friendly, are left out. Both are
+ * NaN when there is no envelope, and the local time is NaN when v_c vanishes at its evaluation point.
+ */
+public final class ConvectiveZoneFinder {
+
+    /** Default smallest m/M at the top of a central zone for it to count as a convective core. */
+    public static final double DEFAULT_MIN_CORE_MASS_FRACTION = 1.0e-4;
+    /** Default largest mass fraction above the top of a zone for it to count as reaching the surface. */
+    public static final double DEFAULT_SURFACE_SKIN_MASS_FRACTION = 1.0e-6;
+    /** Height of the local turnover point above the envelope base, in pressure scale heights (conventions.md). */
+    public static final double TURNOVER_HEIGHT_SCALE_HEIGHTS = 0.5;
+
+    private final double minCoreMassFraction;
+    private final double surfaceSkinMassFraction;
+
+    /** A finder with the default core threshold and surface skin. */
+    public ConvectiveZoneFinder() {
+        this(DEFAULT_MIN_CORE_MASS_FRACTION, DEFAULT_SURFACE_SKIN_MASS_FRACTION);
+    }
+
+    /**
+     * @param minCoreMassFraction smallest m/M at the top of a central zone for a convective core, in [0, 1)
+     * @param surfaceSkinMassFraction largest mass fraction above a zone that still reaches the surface, in [0, 1)
+     */
+    public ConvectiveZoneFinder(double minCoreMassFraction, double surfaceSkinMassFraction) {
+        this.minCoreMassFraction = ConvgridException.requireInRange("minCoreMassFraction", minCoreMassFraction,
+                0.0, 0.5, "");
+        this.surfaceSkinMassFraction = ConvgridException.requireInRange("surfaceSkinMassFraction",
+                surfaceSkinMassFraction, 0.0, 0.5, "");
+    }
+
+    /** The convective structure of a profile. */
+    public ConvectiveStructure find(ZoneProfile profile) {
+        ProfileView p = new ProfileView(profile);
+        List<ConvectiveZone> zones = new ArrayList<>();
+        List<int[]> spans = new ArrayList<>(); // first and last convective mesh index of each zone
+        int n = p.excess.length;
+        int k = 0;
+        while (k < n) {
+            if (!(p.excess[k] > 0.0)) {
+                k++;
+                continue;
+            }
+            int first = k;
+            while (k + 1 < n && p.excess[k + 1] > 0.0) {
+                k++;
+            }
+            int last = k;
+            double[] inner = first == 0 ? new double[] {0.0, 0.0} : p.crossing(first - 1);
+            double[] outer = last == n - 1 ? new double[] {1.0, 1.0} : p.crossing(last);
+            zones.add(new ConvectiveZone(inner[0], outer[0], inner[1], outer[1]));
+            spans.add(new int[] {first, last});
+            k++;
+        }
+        if (zones.isEmpty()) {
+            return new ConvectiveStructure(zones, StructureClass.RADIATIVE, 0.0, 1.0, 1.0, 0.0, Double.NaN,
+                    Double.NaN);
+        }
+        ConvectiveZone innermost = zones.get(0);
+        ConvectiveZone outermost = zones.get(zones.size() - 1);
+        boolean startsAtCentre = spans.get(0)[0] == 0;
+        boolean hasCore = startsAtCentre && innermost.outerMassFraction() > minCoreMassFraction;
+        boolean hasEnvelope = 1.0 - outermost.outerMassFraction() <= surfaceSkinMassFraction;
+        int[] envSpan = spans.get(spans.size() - 1);
+        if (hasEnvelope && startsAtCentre && zones.size() == 1) {
+            return new ConvectiveStructure(zones, StructureClass.FULLY_CONVECTIVE, 1.0, 0.0, 0.0,
+                    profile.totalMass() * innermost.outerMassFraction(),
+                    p.localTurnover(0.5 * profile.totalRadius()), p.globalTurnover(envSpan));
+        }
+        double core = hasCore ? innermost.outerMassFraction() : 0.0;
+        if (!hasEnvelope) {
+            return new ConvectiveStructure(zones, hasCore ? StructureClass.CONV_CORE : StructureClass.RADIATIVE,
+                    core, 1.0, 1.0, 0.0, Double.NaN, Double.NaN);
+        }
+        double rBase = outermost.innerRadiusFraction() * profile.totalRadius();
+        double rTop = outermost.outerRadiusFraction() * profile.totalRadius();
+        double rTurn = rBase + TURNOVER_HEIGHT_SCALE_HEIGHTS * p.scaleHeightAtCrossing(envSpan[0] - 1);
+        if (rTurn > rTop) {
+            rTurn = 0.5 * (rBase + rTop);
+        }
+        return new ConvectiveStructure(zones,
+                hasCore ? StructureClass.CONV_CORE_AND_ENVELOPE : StructureClass.CONV_ENVELOPE, core,
+                outermost.innerMassFraction(), outermost.innerRadiusFraction(),
+                profile.totalMass() * (outermost.outerMassFraction() - outermost.innerMassFraction()),
+                p.localTurnover(rTurn), p.globalTurnover(envSpan));
+    }
+
+    /** The profile's arrays, read once, with the interpolations the finder needs. */
+    private static final class ProfileView {
+        private final double totalMass;
+        private final double totalRadius;
+        private final double alpha;
+        private final double[] mass;
+        private final double[] radius;
+        private final double[] excess;
+        private final double[] velocity;
+        private final double[] scaleHeight;
+
+        ProfileView(ZoneProfile p) {
+            totalMass = p.totalMass();
+            totalRadius = p.totalRadius();
+            alpha = p.mixingLengthAlpha();
+            mass = p.mass();
+            radius = p.radius();
+            excess = p.stabilityExcess();
+            velocity = p.convectiveVelocity();
+            scaleHeight = p.pressureScaleHeight();
+        }
+
+        /** Weight of point k + 1 where the excess interpolated between k and k + 1 vanishes. */
+        private double weight(int k) {
+            return excess[k] / (excess[k] - excess[k + 1]);
+        }
+
+        /** m/M and r/R where the excess changes sign between k and k + 1. */
+        double[] crossing(int k) {
+            double t = weight(k);
+            return new double[] {lerp(mass, k, t) / totalMass, lerp(radius, k, t) / totalRadius};
+        }
+
+        /** H_P, cm, at the sign change between k and k + 1 (or at point 0 when k &lt; 0). */
+        double scaleHeightAtCrossing(int k) {
+            return k < 0 ? scaleHeight[0] : lerp(scaleHeight, k, weight(k));
+        }
+
+        /** alpha H_P / v_c, s, at radius r (cm), both linearly interpolated in r; NaN where v_c &lt;= 0. */
+        double localTurnover(double r) {
+            int k = 0;
+            int hi = radius.length - 1;
+            while (hi - k > 1) { // bisection for radius[k] <= r < radius[k + 1]
+                int mid = (k + hi) >>> 1;
+                if (radius[mid] <= r) {
+                    k = mid;
+                } else {
+                    hi = mid;
+                }
+            }
+            double dr = radius[k + 1] - radius[k];
+            double t = dr > 0.0 ? Math.min(1.0, Math.max(0.0, (r - radius[k]) / dr)) : 0.0;
+            double v = lerp(velocity, k, t);
+            return v > 0.0 ? alpha * lerp(scaleHeight, k, t) / v : Double.NaN;
+        }
+
+        /** Trapezoid integral of dr/v_c, s, over consecutive points of span where both have v_c &gt; 0; NaN if none. */
+        double globalTurnover(int[] span) {
+            double sum = 0.0;
+            int intervals = 0;
+            for (int k = span[0]; k < span[1]; k++) {
+                if (velocity[k] > 0.0 && velocity[k + 1] > 0.0) {
+                    sum += 0.5 * (radius[k + 1] - radius[k]) * (1.0 / velocity[k] + 1.0 / velocity[k + 1]);
+                    intervals++;
+                }
+            }
+            return intervals > 0 ? sum : Double.NaN;
+        }
+
+        private static double lerp(double[] a, int k, double t) {
+            return a[k] + t * (a[k + 1] - a[k]);
+        }
+    }
+}

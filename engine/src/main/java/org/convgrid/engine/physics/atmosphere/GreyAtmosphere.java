@@ -1,0 +1,189 @@
+package org.convgrid.engine.physics.atmosphere;
+
+import org.apache.commons.math3.exception.MathIllegalArgumentException;
+import org.apache.commons.math3.exception.MathIllegalStateException;
+import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
+import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
+import org.convgrid.engine.error.ConvgridException;
+import org.convgrid.engine.error.ErrorKind;
+import org.convgrid.engine.physics.eos.EosState;
+import org.convgrid.engine.physics.eos.EquationOfState;
+import org.convgrid.engine.physics.opacity.Opacity;
+import org.convgrid.engine.physics.opacity.OpacityValue;
+import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.units.Constants;
+
+/**
+ * Pressure and temperature at a fitting optical depth from hydrostatic equilibrium in a plane-parallel grey
+ * atmosphere, dP/dtau = g/kappa(P, T(tau)), with T(tau) from a {@link TemperatureTauRelation} and P the total
+ * (gas + radiation) pressure (formulas.md 5.2; e.g. Kippenhahn, Weigert &amp; Weiss 2012, ch. 10).
+ *
+ * <p>Radiation pressure is the aT^4/3 of the EOS, exact in the Eddington approximation, and the integration
+ * follows the gas pressure in ln tau from an outer depth tau_0 = {@value #DEFAULT_OUTER_DEPTH}, where
+ * P_gas(tau_0) = tau_0 g/kappa(P(tau_0), T(tau_0)) is solved by Newton: the gas column above tau_0 is taken
+ * at its hydrostatic value without the radiative force, an error of at most tau_0 F/c in P. The sensitivities
+ * d ln P/d ln Teff and d ln P/d ln g are integrated with the pressure (variational equations), using the
+ * EOS's chi_rho and delta and the opacity's logarithmic derivatives;
+ * ln T at the fitting depth is ln Teff + ln(3/4 (tau + q))/4 exactly. Fails with OUT_OF_RANGE where the
+ * radiative force outweighs gravity (P_gas driven below {@value #MIN_GAS_PRESSURE_FRACTION} of P), with
+ * NOT_CONVERGED when the integration budget runs out, and with the EOS's or opacity's exception where they fail.
+ * Immutable and thread-safe when the EOS and opacity are.
+ */
+public final class GreyAtmosphere implements SurfaceBoundary {
+
+    /** Optical depth where the integration starts. */
+    public static final double DEFAULT_OUTER_DEPTH = 1.0e-4;
+    /** Relative and absolute (in ln P) tolerance of the step-size control. */
+    public static final double INTEGRATION_TOLERANCE = 1.0e-8;
+    /** Budget of right-hand-side evaluations per integration. */
+    public static final int MAX_EVALUATIONS = 20_000;
+    /** Newton budget and tolerance (in ln P) for the outer boundary pressure. */
+    public static final int MAX_START_ITERATIONS = 50;
+    public static final double START_TOLERANCE = 1.0e-13;
+
+    /** Below this P_gas/P with the radiative force winning, the atmosphere is declared super-Eddington. */
+    public static final double MIN_GAS_PRESSURE_FRACTION = 1.0e-8;
+
+    private final EquationOfState eos;
+    private final Opacity opacity;
+    private final TemperatureTauRelation relation;
+    private final double fittingDepth;
+
+    /** Eddington grey atmosphere fitted at its photosphere, tau = 2/3. */
+    public GreyAtmosphere(EquationOfState eos, Opacity opacity) {
+        this(eos, opacity, new EddingtonGrey(), EddingtonGrey.HOPF);
+    }
+
+    /**
+     * @param fittingDepth optical depth of the fitting point, in (tau_0, 100]; the relation's
+     *        {@link TemperatureTauRelation#photosphericDepth()} fits at its photosphere
+     */
+    public GreyAtmosphere(EquationOfState eos, Opacity opacity, TemperatureTauRelation relation,
+                          double fittingDepth) {
+        this.eos = eos;
+        this.opacity = opacity;
+        this.relation = relation;
+        this.fittingDepth = ConvgridException.requireInRange("fittingDepth", fittingDepth,
+                10.0 * DEFAULT_OUTER_DEPTH, 100.0, "");
+    }
+
+    /** Optical depth of the fitting point. */
+    public double fittingDepth() {
+        return fittingDepth;
+    }
+
+    @Override
+    public SurfaceCondition at(double effectiveTemperature, double gravity, Composition composition) {
+        ConvgridException.requireInRange("effectiveTemperature", effectiveTemperature, 1.0e3, 1.0e6, "K");
+        ConvgridException.requireInRange("gravity", gravity, 1.0, 1.0e10, "cm s^-2");
+        Column column = new Column(effectiveTemperature, gravity, composition);
+        double[] y = column.start(DEFAULT_OUTER_DEPTH);
+        DormandPrince853Integrator integrator = new DormandPrince853Integrator(1.0e-8, 10.0,
+                INTEGRATION_TOLERANCE, INTEGRATION_TOLERANCE);
+        integrator.setMaxEvaluations(MAX_EVALUATIONS);
+        try {
+            integrator.integrate(column, Math.log(DEFAULT_OUTER_DEPTH), y, Math.log(fittingDepth), y);
+        } catch (MathIllegalStateException | MathIllegalArgumentException e) {
+            // Budget exhausted or step size collapsed: typically P_gas driven to 0 where radiation outweighs gravity.
+            throw new ConvgridException(ErrorKind.NOT_CONVERGED, String.format(
+                    "atmosphere integration failed within %d evaluations (Teff = %s K, g = %s cm s^-2): %s",
+                    MAX_EVALUATIONS, effectiveTemperature, gravity, e.getMessage()), MAX_EVALUATIONS,
+                    effectiveTemperature, gravity);
+        }
+        double t = relation.temperature(fittingDepth, effectiveTemperature);
+        double pGas = Math.exp(y[0]);
+        double pRad = radiationPressure(t);
+        double p = pGas + pRad;
+        return new SurfaceCondition(Math.log(p), Math.log(t), (pGas * y[1] + 4.0 * pRad) / p, pGas * y[2] / p,
+                1.0, 0.0);
+    }
+
+    /**
+     * The ODE in s = ln tau for y = (ln P_gas, d ln P_gas/d ln Teff, d ln P_gas/d ln g), one atmosphere.
+     * Gas pressure is the variable because near the top of hot atmospheres it is a small part of P, and
+     * dP_gas/dtau = g/kappa - dP_rad/dtau with dP_rad/dtau = (a/3) dT^4/dtau = (sigma Teff^4/c)(1 + q'(tau)).
+     * Writing A = tau g/(kappa P_gas), B = tau (dP_rad/dtau)/P_gas, k_P = (dln kappa/dln P)_T =
+     * kappa_rho/chi_rho, k_T = (dln kappa/dln T)_P = kappa_T - kappa_rho delta and b = P_gas/P:
+     * y0' = A - B, y1' = A(-k_P(b y1 + 4(1 - b)) - k_T - y1) - B(4 - y1), y2' = A(1 - (1 + k_P b) y2) + B y2.
+     */
+    private final class Column implements FirstOrderDifferentialEquations {
+        private final double teff;
+        private final double gravity;
+        private final Composition composition;
+        private final double fluxOverC;
+
+        Column(double teff, double gravity, Composition composition) {
+            this.teff = teff;
+            this.gravity = gravity;
+            this.composition = composition;
+            this.fluxOverC = Constants.SIGMA_SB * teff * teff * teff * teff / Constants.C;
+        }
+
+        @Override
+        public int getDimension() {
+            return 3;
+        }
+
+        @Override
+        public void computeDerivatives(double s, double[] y, double[] yDot) {
+            double tau = Math.exp(s);
+            double pGas = Math.exp(y[0]);
+            double t = relation.temperature(tau, teff);
+            double pRad = radiationPressure(t);
+            double[] k = kappa(pGas + pRad, t);
+            double b = pGas / (pGas + pRad);
+            double a = tau * gravity / (k[0] * pGas);
+            double r = tau * fluxOverC * (1.0 + relation.hopfDerivative(tau)) / pGas;
+            if (r > a && b < MIN_GAS_PRESSURE_FRACTION) {
+                throw superEddington(tau, k[0]);
+            }
+            yDot[0] = a - r;
+            yDot[1] = a * (-k[1] * (b * y[1] + 4.0 * (1.0 - b)) - k[2] - y[1]) - r * (4.0 - y[1]);
+            yDot[2] = a * (1.0 - (1.0 + k[1] * b) * y[2]) + r * y[2];
+        }
+
+        /** Initial y at tau0 by Newton on ln P_gas = ln(tau0 g/kappa(P_gas + P_rad)). */
+        double[] start(double tau0) {
+            double t0 = relation.temperature(tau0, teff);
+            double pRad = radiationPressure(t0);
+            double lnPg = Math.log(tau0 * gravity / 0.2); // electron scattering guess, kappa ~ 0.2 (1+X)
+            double radiativeForce = fluxOverC * (1.0 + relation.hopfDerivative(tau0));
+            for (int i = 0; i < MAX_START_ITERATIONS; i++) {
+                double pGas = Math.exp(lnPg);
+                double[] k = kappa(pGas + pRad, t0);
+                double b = pGas / (pGas + pRad);
+                double denominator = 1.0 + k[1] * b;
+                double step = (lnPg - Math.log(tau0 * gravity / k[0])) / denominator;
+                lnPg -= step;
+                if (Math.abs(step) < START_TOLERANCE) {
+                    if (gravity / k[0] <= radiativeForce) {
+                        throw superEddington(tau0, k[0]);
+                    }
+                    // Differentiating P_gas = tau0 g/kappa(P, T) with T proportional to Teff.
+                    return new double[] {lnPg, -(4.0 * k[1] * (1.0 - b) + k[2]) / denominator, 1.0 / denominator};
+                }
+            }
+            throw new ConvgridException(ErrorKind.NOT_CONVERGED, String.format(
+                    "outer atmosphere pressure did not converge in %d iterations (Teff = %s K, g = %s cm s^-2)",
+                    MAX_START_ITERATIONS, teff, gravity), MAX_START_ITERATIONS, teff, gravity);
+        }
+
+        private ConvgridException superEddington(double tau, double kappa) {
+            return new ConvgridException(ErrorKind.OUT_OF_RANGE, String.format(
+                    "radiative force exceeds gravity at tau = %s (Teff = %s K, g = %s cm s^-2, kappa = %s cm^2/g)",
+                    tau, teff, gravity, kappa), "gravity", gravity, kappa * fluxOverC, Double.POSITIVE_INFINITY);
+        }
+
+        /** kappa, (dln kappa/dln P)_T and (dln kappa/dln T)_P at total pressure p and temperature t. */
+        private double[] kappa(double p, double t) {
+            EosState state = eos.atPressure(p, t, composition);
+            OpacityValue k = opacity.rosselandMean(state.density(), t, composition);
+            return new double[] {k.kappa(), k.dlnKappaDlnRho() / state.chiRho(),
+                    k.dlnKappaDlnT() - k.dlnKappaDlnRho() * state.delta()};
+        }
+    }
+
+    private static double radiationPressure(double t) {
+        return Constants.A_RAD * t * t * t * t / 3.0;
+    }
+}

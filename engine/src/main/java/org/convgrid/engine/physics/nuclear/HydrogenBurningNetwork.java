@@ -1,0 +1,215 @@
+package org.convgrid.engine.physics.nuclear;
+
+import org.convgrid.engine.error.ConvgridException;
+import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.state.MetalMixture;
+import org.convgrid.engine.units.Constants;
+
+/**
+ * The default {@link NuclearNetwork}: pp chains with explicit 3He and the PP-I/II/III branches, and the CN cycle
+ * plus the 16O leak as lumped steps, with electron screening.
+ *
+ * <p>Reactions (our physics sheet, sections 3.1-3.5; rates from {@link SolarFusionRates}):
+ * <pre>
+ *   p + p (+ p)      -&gt; 3He               6.671 MeV  (d(p,g) instantaneous)
+ *   3He + 3He        -&gt; 4He + 2p          12.860 MeV (PP-I)
+ *   3He + 4He (+ p)  -&gt; 2 4He             18.981 MeV via 7Be(e-,nu) (PP-II) or 13.083 MeV via 7Be(p,g) (PP-III)
+ *   12C + 2p         -&gt; 14N               11.009 MeV
+ *   14N + 2p         -&gt; 12C + 4He         14.020 MeV
+ *   16O + 2p         -&gt; 14N + 4He          3.554 MeV
+ * </pre>
+ * Energies are net of the neutrino losses ({@link ReactionEnergy}). The 7Be branch fraction is
+ * {@code lambda_ec/(lambda_ec + rho Y_p N_A<sv>_17)}. Abundances are counted with mass numbers, so the
+ * composition rates conserve mass exactly. Derivatives of eps are analytic, at fixed composition.
+ *
+ * <p>{@link #burn} is instantaneous: with X(3He) = 0 the pp chains release only the 6.67 MeV of the first step
+ * per p+p reaction, about half of the equilibrium value, which is the physically correct rate for such a
+ * composition. Structure models of a given age should therefore pass the evolved 3He, and zero-age models the
+ * output of {@link #equilibrium}. Allocation: one {@link PlasmaState} and the result record per call.
+ */
+public final class HydrogenBurningNetwork implements NuclearNetwork {
+
+    /**
+     * Default time over which {@link #equilibrium} lets 3He and the CN pair relax: 1e8 yr, about the
+     * pre-main-sequence contraction time of 0.5-1 Msun stars (from memory), i.e. the processing a zero-age
+     * star has had time for.
+     */
+    public static final double DEFAULT_EQUILIBRATION_TIME = 1.0e8 * Constants.YEAR;
+    /** Highest temperature accepted, K: beyond it the non-resonant S-factor expansions are meaningless. */
+    public static final double MAX_TEMPERATURE = 1.0e9;
+
+    private static final double MEV_PER_MOLE = Constants.N_A * Constants.MEV;
+
+    private final Screening screening;
+    private final MetalCharges metals;
+    private final double equilibrationTime;
+
+    /** Salpeter screening, GS98 metals, {@link #DEFAULT_EQUILIBRATION_TIME}. */
+    public HydrogenBurningNetwork() {
+        this(SalpeterScreening.INSTANCE, MetalMixture.GS98, DEFAULT_EQUILIBRATION_TIME);
+    }
+
+    /**
+     * @param screening electron screening
+     * @param mixture metal mixture, for the charges of the metals other than C, N, O
+     * @param equilibrationTime time over which {@link #equilibrium} relaxes 3He and CN, s
+     */
+    public HydrogenBurningNetwork(Screening screening, MetalMixture mixture, double equilibrationTime) {
+        this.screening = screening;
+        this.metals = MetalCharges.of(mixture);
+        this.equilibrationTime = ConvgridException.requireInRange("equilibration time", equilibrationTime,
+                0.0, 1.0e20, "s");
+    }
+
+    @Override
+    public BurningRate burn(double density, double temperature, Composition composition) {
+        checkState(density, temperature);
+        PlasmaState plasma = plasma(density, temperature, composition);
+        double t9 = temperature * 1.0e-9;
+        double cbrtT9 = Math.cbrt(t9);
+        double y1 = composition.h1();
+        double y3 = composition.he3() / 3.0;
+        double y4 = composition.he4() / 4.0;
+        double y12 = composition.c12() / 12.0;
+        double y14 = composition.n14() / 14.0;
+        double y16 = composition.o16() / 16.0;
+
+        // Reactions per gram per second, in moles: rho Y_j Y_k N_A<sv> / (1 + delta_jk).
+        double r11 = 0.5 * density * y1 * y1 * screened(SolarFusionRates.PP, t9, cbrtT9, plasma);
+        double r33 = 0.5 * density * y3 * y3 * screened(SolarFusionRates.HE3_HE3, t9, cbrtT9, plasma);
+        double r34 = density * y3 * y4 * screened(SolarFusionRates.HE3_HE4, t9, cbrtT9, plasma);
+        double r12 = density * y1 * y12 * screened(SolarFusionRates.C12_P, t9, cbrtT9, plasma);
+        double r14 = density * y1 * y14 * screened(SolarFusionRates.N14_P, t9, cbrtT9, plasma);
+        double r16 = density * y1 * y16 * screened(SolarFusionRates.O16_P, t9, cbrtT9, plasma);
+
+        // 7Be: electron capture (PP-II) against proton capture (PP-III).
+        double t6 = temperature * 1.0e-6;
+        double capture = BerylliumCapture.rate(density, electronsPerBaryon(composition), t6);
+        double protonCapture = density * y1 * screened(SolarFusionRates.BE7_P, t9, cbrtT9, plasma);
+        double sum7 = capture + protonCapture;
+        double pp2 = sum7 > 0.0 ? capture / sum7 : 1.0;
+        double q34 = pp2 * ReactionEnergy.PP2_BRANCH + (1.0 - pp2) * ReactionEnergy.PP3_BRANCH;
+
+        double e11 = MEV_PER_MOLE * r11 * ReactionEnergy.PP_TO_HE3;
+        double e33 = MEV_PER_MOLE * r33 * ReactionEnergy.HE3_HE3;
+        double e34 = MEV_PER_MOLE * r34 * q34;
+        double e12 = MEV_PER_MOLE * r12 * ReactionEnergy.C12_TO_N14;
+        double e14 = MEV_PER_MOLE * r14 * ReactionEnergy.N14_TO_C12;
+        double e16 = MEV_PER_MOLE * r16 * ReactionEnergy.O16_TO_N14;
+        double epsPp = e11 + e33 + e34;
+        double epsCno = e12 + e14 + e16;
+        double eps = epsPp + epsCno;
+
+        // d eps/d ln x = sum e_k dln r_k/dln x + (energy of the 7Be branch shift).
+        double branchWeight = MEV_PER_MOLE * r34 * (ReactionEnergy.PP2_BRANCH - ReactionEnergy.PP3_BRANCH)
+                * pp2 * (1.0 - pp2);
+        double dEpsDlnT = e11 * dlnT(SolarFusionRates.PP, t9, cbrtT9, plasma)
+                + e33 * dlnT(SolarFusionRates.HE3_HE3, t9, cbrtT9, plasma)
+                + e34 * dlnT(SolarFusionRates.HE3_HE4, t9, cbrtT9, plasma)
+                + e12 * dlnT(SolarFusionRates.C12_P, t9, cbrtT9, plasma)
+                + e14 * dlnT(SolarFusionRates.N14_P, t9, cbrtT9, plasma)
+                + e16 * dlnT(SolarFusionRates.O16_P, t9, cbrtT9, plasma)
+                + branchWeight * (BerylliumCapture.dlnRateDlnT(t6) - dlnT(SolarFusionRates.BE7_P, t9, cbrtT9, plasma));
+        double dEpsDlnRho = e11 * (1.0 + dlnRho(SolarFusionRates.PP, plasma))
+                + e33 * (1.0 + dlnRho(SolarFusionRates.HE3_HE3, plasma))
+                + e34 * (1.0 + dlnRho(SolarFusionRates.HE3_HE4, plasma))
+                + e12 * (1.0 + dlnRho(SolarFusionRates.C12_P, plasma))
+                + e14 * (1.0 + dlnRho(SolarFusionRates.N14_P, plasma))
+                + e16 * (1.0 + dlnRho(SolarFusionRates.O16_P, plasma))
+                - branchWeight * dlnRho(SolarFusionRates.BE7_P, plasma);
+
+        double cno = r12 + r14 + r16;
+        double dy1 = -3.0 * r11 + 2.0 * r33 - r34 - 2.0 * cno;
+        double dy3 = r11 - 2.0 * r33 - r34;
+        double dy4 = r33 + r34 + r14 + r16;
+        return new BurningRate(eps, epsPp, epsCno,
+                eps > 0.0 ? dEpsDlnRho / eps : 0.0, eps > 0.0 ? dEpsDlnT / eps : 0.0,
+                dy1, 3.0 * dy3, 4.0 * dy4, 12.0 * (r14 - r12), 14.0 * (r12 - r14 + r16), -16.0 * r16);
+    }
+
+    /**
+     * 3He and the CN pair after {@code equilibrationTime} of burning at this density and temperature, starting
+     * from the given abundances: the local equilibrium wherever it is reached within that time, the given
+     * abundances wherever the equilibration time is much longer, and the exact intermediate solution between
+     * ({@link AbundanceRelaxation}). Hydrogen pays (or receives) the mass moved; 4He, 16O and the other metals
+     * are unchanged. Call it on the initial composition, not on its own output (each call adds the time again).
+     */
+    @Override
+    public Composition equilibrium(double density, double temperature, Composition composition) {
+        checkState(density, temperature);
+        PlasmaState plasma = plasma(density, temperature, composition);
+        double t9 = temperature * 1.0e-9;
+        double cbrtT9 = Math.cbrt(t9);
+        double y1 = composition.h1();
+        double y4 = composition.he4() / 4.0;
+
+        // dY3/dt = rho Y1^2 <11>/2 - rho <33> Y3^2 - rho <34> Y4 Y3.
+        double a = 0.5 * density * y1 * y1 * screened(SolarFusionRates.PP, t9, cbrtT9, plasma);
+        double b = density * screened(SolarFusionRates.HE3_HE3, t9, cbrtT9, plasma);
+        double c = density * y4 * screened(SolarFusionRates.HE3_HE4, t9, cbrtT9, plasma);
+        double he3 = 3.0 * AbundanceRelaxation.quadratic(a, b, c, composition.he3() / 3.0, equilibrationTime);
+
+        double k12 = density * y1 * screened(SolarFusionRates.C12_P, t9, cbrtT9, plasma);
+        double k14 = density * y1 * screened(SolarFusionRates.N14_P, t9, cbrtT9, plasma);
+        double y12 = composition.c12() / 12.0;
+        double y14 = composition.n14() / 14.0;
+        double newY12 = AbundanceRelaxation.linearPair(k12, k14, y12, y14, equilibrationTime);
+        double c12 = 12.0 * newY12;
+        double n14 = 14.0 * (y12 + y14 - newY12);
+
+        double moved = (he3 - composition.he3()) + (c12 - composition.c12()) + (n14 - composition.n14());
+        double h1 = composition.h1() - moved;
+        double he4 = composition.he4();
+        if (h1 < 0.0) {
+            // Only for hydrogen-free matter with 3He or C to process; helium absorbs the deficit.
+            he4 += h1;
+            h1 = 0.0;
+        }
+        return new Composition(h1, he3, he4, c12, n14, composition.o16(), composition.otherMetals());
+    }
+
+    /**
+     * The classical 3He equilibrium {@code X_3 = 3 X [<sv>_11/(2<sv>_33)]^(1/2)}, 3He+4He neglected
+     * (our physics sheet, section 3.5), with screening; mass fraction.
+     */
+    public double helium3Equilibrium(double density, double temperature, Composition composition) {
+        checkState(density, temperature);
+        PlasmaState plasma = plasma(density, temperature, composition);
+        double t9 = temperature * 1.0e-9;
+        double cbrtT9 = Math.cbrt(t9);
+        double l11 = screened(SolarFusionRates.PP, t9, cbrtT9, plasma);
+        double l33 = screened(SolarFusionRates.HE3_HE3, t9, cbrtT9, plasma);
+        return l33 > 0.0 ? 3.0 * composition.h1() * Math.sqrt(l11 / (2.0 * l33)) : 0.0;
+    }
+
+    /** The screening and ionization state used for the rates at this point. */
+    public PlasmaState plasma(double density, double temperature, Composition composition) {
+        double zetaSquared = 2.0 * composition.h1() + 2.0 * composition.he3() + 1.5 * composition.he4()
+                + 3.5 * composition.c12() + 4.0 * composition.n14() + 4.5 * composition.o16()
+                + metals.chargeSquaredPlusChargePerMass() * composition.otherMetals();
+        return PlasmaState.of(density, temperature, zetaSquared, electronsPerBaryon(composition));
+    }
+
+    private double electronsPerBaryon(Composition composition) {
+        return composition.h1() + (2.0 / 3.0) * composition.he3() + 0.5 * composition.he4()
+                + 0.5 * (composition.c12() + composition.n14() + composition.o16())
+                + metals.chargePerMass() * composition.otherMetals();
+    }
+
+    private double screened(ChargedParticleRate rate, double t9, double cbrtT9, PlasmaState plasma) {
+        return rate.rate(t9, cbrtT9, screening.exponent(rate.z1(), rate.z2(), plasma));
+    }
+
+    private double dlnT(ChargedParticleRate rate, double t9, double cbrtT9, PlasmaState plasma) {
+        return rate.dlnRateDlnT(t9, cbrtT9) + screening.dExponentDlnT(rate.z1(), rate.z2(), plasma);
+    }
+
+    private double dlnRho(ChargedParticleRate rate, PlasmaState plasma) {
+        return screening.dExponentDlnRho(rate.z1(), rate.z2(), plasma);
+    }
+
+    private static void checkState(double density, double temperature) {
+        ConvgridException.requireInRange("density", density, Double.MIN_NORMAL, Double.MAX_VALUE, "g cm^-3");
+        ConvgridException.requireInRange("temperature", temperature, Double.MIN_NORMAL, MAX_TEMPERATURE, "K");
+    }
+}

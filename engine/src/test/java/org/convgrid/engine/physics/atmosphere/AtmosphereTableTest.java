@@ -1,0 +1,96 @@
+package org.convgrid.engine.physics.atmosphere;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
+
+import org.convgrid.engine.error.ConvgridException;
+import org.convgrid.engine.error.ErrorKind;
+import org.convgrid.engine.state.Composition;
+import org.junit.jupiter.api.Test;
+
+class AtmosphereTableTest {
+
+    private static final Composition SOLAR = Composition.scaledSolar(0.70, 0.02);
+    private static final GreyAtmosphere DIRECT = new GreyAtmosphere(new TestIdealGasEos(1.3),
+            TestOpacities.blend());
+
+    @Test
+    void tableMatchesDirectIntegrationBetweenNodes() {
+        // Interpolation accuracy requirement of the solver (1e-3 in ln P); no published value involved.
+        AtmosphereTable table = new AtmosphereTable(DIRECT);
+        long start = System.nanoTime();
+        SurfaceBoundary built = table.tabulate(SOLAR);
+        double seconds = (System.nanoTime() - start) * 1e-9;
+        assertThat(seconds).as("build time, s").isLessThan(5.0); // ~0.15 s measured; loose for a shared machine
+        TableAxis tx = AtmosphereTable.DEFAULT_TEFF_AXIS;
+        TableAxis ty = AtmosphereTable.DEFAULT_GRAVITY_AXIS;
+        int compared = 0;
+        for (int i = 0; i < tx.points() - 1; i++) {
+            for (int j = 0; j < ty.points() - 1; j++) {
+                double teff = Math.pow(10, tx.node(i) + 0.43 * tx.step());
+                double g = Math.pow(10, ty.node(j) + 0.57 * ty.step());
+                SurfaceCondition direct;
+                try {
+                    direct = DIRECT.at(teff, g, SOLAR);
+                } catch (ConvgridException e) {
+                    continue; // no atmosphere here (radiation outweighs gravity); the table refuses it too
+                }
+                SurfaceCondition s;
+                try {
+                    s = built.at(teff, g, SOLAR);
+                } catch (ConvgridException e) {
+                    continue; // a corner of this cell is super-Eddington
+                }
+                assertThat(s.lnPressure()).as("Teff %s g %s", teff, g).isCloseTo(direct.lnPressure(), within(1e-3));
+                assertThat(s.lnTemperature()).isCloseTo(direct.lnTemperature(), within(1e-6));
+                assertThat(s.dlnPDlnG()).isCloseTo(direct.dlnPDlnG(), within(0.02));
+                assertThat(s.dlnPDlnTeff()).isCloseTo(direct.dlnPDlnTeff(), within(0.05));
+                compared++;
+            }
+        }
+        assertThat(compared).isGreaterThan(350);
+    }
+
+    @Test
+    void nodesAreReproducedAndDerivativesAreContinuousAcrossCellEdges() {
+        SurfaceBoundary built = new AtmosphereTable(DIRECT).tabulate(SOLAR);
+        double teff = Math.pow(10, AtmosphereTable.DEFAULT_TEFF_AXIS.node(20));
+        double g = Math.pow(10, AtmosphereTable.DEFAULT_GRAVITY_AXIS.node(5));
+        SurfaceCondition node = built.at(teff, g, SOLAR);
+        SurfaceCondition direct = DIRECT.at(teff, g, SOLAR);
+        assertThat(node.lnPressure()).isCloseTo(direct.lnPressure(), within(1e-12));
+        assertThat(node.dlnPDlnTeff()).isCloseTo(direct.dlnPDlnTeff(), within(1e-10));
+        double e = 1e-9;
+        SurfaceCondition below = built.at(teff * (1 - e), g, SOLAR);
+        SurfaceCondition above = built.at(teff * (1 + e), g, SOLAR);
+        assertThat(above.dlnPDlnTeff()).isCloseTo(below.dlnPDlnTeff(), within(1e-6));
+        assertThat(above.dlnPDlnG()).isCloseTo(below.dlnPDlnG(), within(1e-6));
+        // The reported derivative is the interpolant's own slope.
+        double fd = (above.lnPressure() - below.lnPressure()) / (2 * e);
+        assertThat(node.dlnPDlnTeff()).isCloseTo(fd, within(1e-5));
+    }
+
+    @Test
+    void offTableRequestsFailWithTheirCoordinates() {
+        AtmosphereTable table = new AtmosphereTable(DIRECT);
+        assertThatThrownBy(() -> table.at(1500, 1e4, SOLAR)).isInstanceOf(ConvgridException.class)
+                .satisfies(ex -> {
+                    ConvgridException c = (ConvgridException) ex;
+                    assertThat(c.kind()).isEqualTo(ErrorKind.OFF_TABLE);
+                    assertThat(c.parameters()).containsExactly("atmosphere", 1500.0, 1e4);
+                });
+        assertThatThrownBy(() -> table.at(5772, 1e7, SOLAR)).isInstanceOf(ConvgridException.class);
+    }
+
+    @Test
+    void cachedTablesGiveIdenticalResultsPerComposition() {
+        AtmosphereTable table = new AtmosphereTable(DIRECT, new TableAxis(3.5, 3.9, 9), new TableAxis(4.0, 5.0, 5));
+        Composition poor = Composition.scaledSolar(0.75, 0.001);
+        SurfaceCondition first = table.at(5000, 3e4, SOLAR);
+        SurfaceCondition other = table.at(5000, 3e4, poor);
+        assertThat(table.at(5000, 3e4, SOLAR)).isEqualTo(first);
+        // Fewer metals, fewer H^- electrons in the test opacity: lower kappa, higher photospheric pressure.
+        assertThat(other.lnPressure()).isGreaterThan(first.lnPressure());
+    }
+}

@@ -1,0 +1,79 @@
+package org.convgrid.engine.physics.nuclear;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import org.convgrid.engine.state.Composition;
+import org.junit.jupiter.api.Test;
+
+/** Contract every {@link NuclearNetwork} must meet; subclass it per implementation. */
+abstract class NuclearNetworkContractTest {
+
+    private static final Composition SOLAR = Composition.scaledSolar(0.70, 0.02);
+
+    /** The implementation under test. */
+    abstract NuclearNetwork network();
+
+    @Test
+    void compositionRatesConserveMass() {
+        // Nucleon-number bookkeeping of the lumped reactions (formulas.md 3.5, derived): sum of dX/dt = 0.
+        Composition c = new Composition(0.6, 2e-4, 0.3798, 0.003, 0.002, 0.009, 0.006);
+        for (double t : new double[] {5e6, 1.5e7, 3e7}) {
+            BurningRate r = network().burn(80.0, t, c);
+            double[] rates = {r.dh1Dt(), r.dhe3Dt(), r.dhe4Dt(), r.dc12Dt(), r.dn14Dt(), r.do16Dt()};
+            double sum = 0.0;
+            double scale = 0.0;
+            for (double x : rates) {
+                sum += x;
+                scale = Math.max(scale, Math.abs(x));
+            }
+            assertThat(Math.abs(sum)).isLessThanOrEqualTo(1e-14 * scale);
+            assertThat(r.dhe4Dt()).isPositive();
+        }
+        // At 15 MK this 3He is ~8x its equilibrium: 3He + 3He returns protons faster than p + p uses them.
+        assertThat(network().burn(80.0, 1.5e7, c).dh1Dt()).isPositive();
+        Composition fresh = new Composition(0.6, 0.0, 0.38, 0.003, 0.002, 0.009, 0.006);
+        assertThat(network().burn(80.0, 1.5e7, fresh).dh1Dt()).isNegative();
+    }
+
+    @Test
+    void derivativesMatchFiniteDifferences() {
+        // Analytic dln eps/dln rho and dln eps/dln T against centred differences at fixed composition.
+        Composition withHe3 = SOLAR.withHydrogenAndHelium(0.70 - 1e-4, 1e-4, SOLAR.he4());
+        double[][] points = {{152.9, 1.567e7}, {500.0, 4.0e6}, {30.0, 2.8e7}, {80.0, 1.8e7}};
+        double h = 1.0e-4;
+        for (double[] p : points) {
+            double rho = p[0];
+            double t = p[1];
+            BurningRate r = network().burn(rho, t, withHe3);
+            double dT = Math.log(network().burn(rho, t * Math.exp(h), withHe3).eps()
+                    / network().burn(rho, t * Math.exp(-h), withHe3).eps()) / (2 * h);
+            double dRho = Math.log(network().burn(rho * Math.exp(h), t, withHe3).eps()
+                    / network().burn(rho * Math.exp(-h), t, withHe3).eps()) / (2 * h);
+            assertThat(r.dlnEpsDlnT()).as("T at " + t).isCloseTo(dT, within(1e-5 * Math.abs(dT)));
+            assertThat(r.dlnEpsDlnRho()).as("rho at " + t).isCloseTo(dRho, within(1e-5 * Math.abs(dRho)));
+        }
+    }
+
+    @Test
+    void equilibriumKeepsTheMassFractionsSummingToOne() {
+        // Composition's constructor enforces the sum; also hydrogen only pays for what 3He and CN gained.
+        for (double t : new double[] {4e6, 1.2e7, 3e7}) {
+            Composition e = network().equilibrium(60.0, t, SOLAR);
+            assertThat(e.h1() + e.he3() + e.he4() + e.z()).isCloseTo(1.0, within(1e-12));
+            assertThat(e.he4()).isEqualTo(SOLAR.he4());
+            assertThat(e.o16()).isEqualTo(SOLAR.o16());
+        }
+    }
+
+    @Test
+    void burningIsDeterministicAcrossThreads() throws Exception {
+        // No hidden state: the same call from another thread gives bit-identical results.
+        BurningRate here = network().burn(120.0, 1.4e7, SOLAR);
+        BurningRate[] there = new BurningRate[1];
+        Thread thread = new Thread(() -> there[0] = network().burn(120.0, 1.4e7, SOLAR));
+        thread.start();
+        thread.join();
+        assertThat(there[0]).isEqualTo(here);
+    }
+}

@@ -1,0 +1,33 @@
+package org.convgrid.engine.physics.opacity;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import org.convgrid.engine.state.Composition;
+import org.junit.jupiter.api.Test;
+
+class KramersBoundFreeTest extends OpacityContractTest {
+
+    @Override
+    Opacity opacity() {
+        return new KramersBoundFree();
+    }
+
+    @Test
+    void constantGuillotineReproducesCarrollAndOstlieCoefficient() {
+        // Carroll & Ostlie 1996, p. 274 (check-values 7c, C): kappa_bf = 4.34e25 (g_bf/t) Z (1+X) rho T^-3.5;
+        // slope 0 makes t = 2^(1/s) constant, here s = 50 so t = 1.0140.
+        KramersBoundFree plain = new KramersBoundFree(1e7, 0.0, 50.0);
+        double k = plain.rosselandMean(1.0, 1e6, Composition.scaledSolar(0.7, 0.02)).kappa();
+        assertThat(k * Math.pow(2.0, 1.0 / 50.0)).isCloseTo(4.34e25 * 0.02 * 1.7 * 1e-21, within(1e-9 * k));
+    }
+
+    @Test
+    void guillotineIsOneBelowTheKneeAndGrowsAboveIt() {
+        // formulas.md 2.3 (D, own arithmetic): t = 1 suits the CZ base, t ~ 20 the solar centre.
+        KramersBoundFree bf = new KramersBoundFree();
+        assertThat(bf.guillotine(2.2e6)).isBetween(1.0, 1.1);
+        assertThat(bf.guillotine(1.57e7)).isBetween(15.0, 30.0);
+        assertThat(bf.guillotine(1e5)).isCloseTo(1.0, within(1e-6));
+    }
+}

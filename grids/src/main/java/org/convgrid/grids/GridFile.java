@@ -1,0 +1,26 @@
+package org.convgrid.grids;
+
+import java.util.Objects;
+
+/**
+ * A grid file as read: its name, its text (for the run manifest), the SHA-256 of its bytes and the spec it holds.
+ *
+ * @param name the file name as given to the reader
+ * @param text the file's text
+ * @param fileSha256 lower-case hex SHA-256 of the file's bytes
+ * @param spec the validated grid
+ */
+public record GridFile(String name, String text, String fileSha256, GridSpec spec) {
+
+    public GridFile {
+        Objects.requireNonNull(name, "name");
+        Objects.requireNonNull(text, "text");
+        Objects.requireNonNull(fileSha256, "fileSha256");
+        Objects.requireNonNull(spec, "spec");
+    }
+
+    /** The fingerprint of the models only; see {@link GridHash#ofModels}. */
+    public String modelsSha256() {
+        return GridHash.ofModels(spec);
+    }
+}

@@ -1,0 +1,30 @@
+package org.convgrid.grids;
+
+import java.util.List;
+import java.util.stream.Collectors;
+
+/** A grid file that cannot be used; carries every problem found in it, in file order. */
+public final class GridFileException extends RuntimeException {
+
+    private static final long serialVersionUID = 1L;
+
+    private final transient List<GridProblem> problems;
+
+    /** @param problems at least one problem */
+    public GridFileException(List<GridProblem> problems) {
+        super(describe(problems));
+        if (problems.isEmpty()) {
+            throw new IllegalArgumentException("a grid file exception needs at least one problem");
+        }
+        this.problems = List.copyOf(problems);
+    }
+
+    /** Every problem, ordered by line then column. */
+    public List<GridProblem> problems() {
+        return problems;
+    }
+
+    private static String describe(List<GridProblem> problems) {
+        return problems.stream().map(GridProblem::toString).collect(Collectors.joining(System.lineSeparator()));
+    }
+}

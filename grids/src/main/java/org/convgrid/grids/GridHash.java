@@ -1,0 +1,47 @@
+package org.convgrid.grids;
+
+import java.nio.charset.StandardCharsets;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.HexFormat;
+
+/**
+ * SHA-256 fingerprints of a grid. {@link #ofBytes} fingerprints the file exactly as read; {@link #ofModels}
+ * fingerprints only what decides the models (axes and physics, not title, comments, layout or output settings), so
+ * a resumed run can accept an edited comment yet refuse a changed axis.
+ */
+public final class GridHash {
+
+    private GridHash() {
+    }
+
+    /** Lower-case hex SHA-256 of the bytes. */
+    public static String ofBytes(byte[] bytes) {
+        try {
+            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("every Java platform provides SHA-256", e);
+        }
+    }
+
+    /** Lower-case hex SHA-256 of {@link #canonicalModels(GridSpec)}. */
+    public static String ofModels(GridSpec spec) {
+        return ofBytes(canonicalModels(spec).getBytes(StandardCharsets.UTF_8));
+    }
+
+    /** A text form of the axes that decide the models, one axis per line, values in Java's shortest round-trip form. */
+    public static String canonicalModels(GridSpec spec) {
+        StringBuilder text = new StringBuilder();
+        text.append("mass_msun=").append(spec.massesMsun()).append('\n');
+        text.append("z_y=");
+        spec.metallicities().forEach(p -> text.append('[').append(p.z()).append(',').append(p.y()).append(']'));
+        text.append('\n');
+        text.append("age_gyr=").append(spec.agesGyr()).append('\n');
+        PhysicsAxes physics = spec.physics();
+        text.append("mixing_length=").append(physics.mixingLengths()).append('\n');
+        text.append("overshoot=").append(physics.overshoots()).append('\n');
+        text.append("criterion=").append(physics.criteria()).append('\n');
+        text.append("opacity_factor=").append(physics.opacityFactors()).append('\n');
+        return text.toString();
+    }
+}

@@ -1,0 +1,58 @@
+package org.convgrid.grids;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.convection.StabilityCriterion;
+
+/**
+ * The physics options a grid varies; each is a list of one or more values. Their product is the physics axis of the
+ * grid, enumerated with mixing length outermost, then overshoot, criterion and opacity factor innermost.
+ *
+ * @param mixingLengths alpha values, pressure scale heights, each &gt; 0
+ * @param overshoots step overshoot distances, pressure scale heights, each &gt;= 0
+ * @param criteria stability criteria
+ * @param opacityFactors opacity multipliers, each &gt; 0
+ */
+public record PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, List<StabilityCriterion> criteria,
+                          List<Double> opacityFactors) {
+
+    /** One value per axis: the engine defaults. */
+    public static final PhysicsAxes DEFAULT = new PhysicsAxes(List.of(PhysicsOptions.DEFAULT.mixingLength()),
+            List.of(PhysicsOptions.DEFAULT.overshoot()), List.of(PhysicsOptions.DEFAULT.criterion()),
+            List.of(PhysicsOptions.DEFAULT.opacityFactor()));
+
+    public PhysicsAxes {
+        mixingLengths = nonEmpty(mixingLengths, "mixing_length");
+        overshoots = nonEmpty(overshoots, "overshoot");
+        criteria = nonEmpty(criteria, "criterion");
+        opacityFactors = nonEmpty(opacityFactors, "opacity_factor");
+    }
+
+    /** Number of physics combinations. */
+    public int size() {
+        return mixingLengths.size() * overshoots.size() * criteria.size() * opacityFactors.size();
+    }
+
+    /** Every combination, in the documented order; index i of this list is the {@code p} index of model ids. */
+    public List<PhysicsOptions> combinations() {
+        List<PhysicsOptions> all = new ArrayList<>(size());
+        for (double alpha : mixingLengths) {
+            for (double overshoot : overshoots) {
+                for (StabilityCriterion criterion : criteria) {
+                    for (double factor : opacityFactors) {
+                        all.add(new PhysicsOptions(alpha, overshoot, criterion, factor));
+                    }
+                }
+            }
+        }
+        return List.copyOf(all);
+    }
+
+    private static <T> List<T> nonEmpty(List<T> values, String name) {
+        if (values.isEmpty()) {
+            throw new IllegalArgumentException(name + " needs at least one value");
+        }
+        return List.copyOf(values);
+    }
+}

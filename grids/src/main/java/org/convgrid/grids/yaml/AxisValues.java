@@ -1,0 +1,58 @@
+package org.convgrid.grids.yaml;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.snakeyaml.engine.v2.nodes.Node;
+
+/** Lists of numbers (a lone scalar counts as a one-item list), each value checked at its own node. */
+final class AxisValues {
+
+    private AxisValues() {
+    }
+
+    /** Numbers in range and strictly increasing; null when any has a problem. */
+    static List<Double> increasing(Node node, String what, Range range, NodeReader reader) {
+        return numbers(node, what, range, Order.INCREASING, reader);
+    }
+
+    /** Numbers in range, each different from the others, in the file's order; null when any has a problem. */
+    static List<Double> distinct(Node node, String what, Range range, NodeReader reader) {
+        return numbers(node, what, range, Order.DISTINCT, reader);
+    }
+
+    /** Numbers in range, repeats allowed, in the file's order; null when any has a problem. */
+    static List<Double> any(Node node, String what, Range range, NodeReader reader) {
+        return numbers(node, what, range, Order.ANY, reader);
+    }
+
+    private enum Order { INCREASING, DISTINCT, ANY }
+
+    private static List<Double> numbers(Node node, String what, Range range, Order order,
+                                        NodeReader reader) {
+        List<Node> items = reader.items(node, what);
+        if (items == null) {
+            return null;
+        }
+        List<Double> values = new ArrayList<>();
+        boolean ok = true;
+        for (Node item : items) {
+            Double v = reader.number(item, what);
+            if (v == null) {
+                ok = false;
+            } else if (!range.contains(v)) {
+                reader.problem(item, what + " must lie in " + range + ", got " + v);
+                ok = false;
+            } else if (order != Order.ANY && values.contains(v)) {
+                reader.problem(item, "duplicate " + what + " " + v);
+                ok = false;
+            } else if (order == Order.INCREASING && !values.isEmpty() && v < values.get(values.size() - 1)) {
+                reader.problem(item, what + "s must increase: " + v + " follows " + values.get(values.size() - 1));
+                ok = false;
+            }
+            if (v != null) {
+                values.add(v);
+            }
+        }
+        return ok ? values : null;
+    }
+}

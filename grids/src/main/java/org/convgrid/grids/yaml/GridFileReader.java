@@ -1,0 +1,170 @@
+package org.convgrid.grids.yaml;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.ByteBuffer;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import org.convgrid.grids.GridFile;
+import org.convgrid.grids.GridFileException;
+import org.convgrid.grids.GridHash;
+import org.convgrid.grids.GridProblem;
+import org.convgrid.grids.GridSpec;
+import org.convgrid.grids.MetallicityPoint;
+import org.convgrid.grids.PhysicsAxes;
+import org.snakeyaml.engine.v2.api.LoadSettings;
+import org.snakeyaml.engine.v2.api.lowlevel.Compose;
+import org.snakeyaml.engine.v2.exceptions.MarkedYamlEngineException;
+import org.snakeyaml.engine.v2.exceptions.YamlEngineException;
+import org.snakeyaml.engine.v2.nodes.MappingNode;
+import org.snakeyaml.engine.v2.nodes.Node;
+
+/**
+ * Reads a grid file (format in conventions.md) into a validated {@link GridSpec}. The YAML is composed into nodes
+ * and walked by hand so every problem carries its file:line:column; all problems of a file are collected and thrown
+ * together as one {@link GridFileException}. Required sections: {@code mass}, {@code metallicity}. Defaults:
+ * {@code title} = the file name, {@code age: {gyr: [0]}} (ZAMS), physics = engine defaults,
+ * {@code output: {dir: runs/<file name without extension>, profiles: false}}. Thread-safe (stateless).
+ */
+public final class GridFileReader {
+
+    /** Oldest age accepted, Gyr: older than the universe, so a larger value is a unit mistake. */
+    public static final double MAX_AGE_GYR = 20.0;
+    /** Alias expansions allowed in one file (defends against alias bombs). */
+    private static final int MAX_ALIASES = 50;
+
+    private static final List<String> KEYS = List.of("title", "mass", "metallicity", "age", "physics", "output");
+    private static final List<String> AGE_KEYS = List.of("gyr");
+    private static final List<String> OUTPUT_KEYS = List.of("dir", "profiles");
+
+    /**
+     * Reads and validates a grid file.
+     *
+     * @throws GridFileException listing every problem in the file
+     * @throws UncheckedIOException when the file cannot be read
+     */
+    public GridFile read(Path path) {
+        try {
+            return read(path.toString(), Files.readAllBytes(path));
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot read grid file " + path, e);
+        }
+    }
+
+    /**
+     * Validates grid-file bytes (UTF-8).
+     *
+     * @param name the file name used in problems and for the default output directory
+     * @throws GridFileException listing every problem in the file
+     */
+    public GridFile read(String name, byte[] bytes) {
+        String text;
+        try {
+            text = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
+                    .onUnmappableCharacter(CodingErrorAction.REPORT).decode(ByteBuffer.wrap(bytes)).toString();
+        } catch (CharacterCodingException e) {
+            throw new GridFileException(List.of(new GridProblem(name, 1, 1, "the file is not UTF-8 text")));
+        }
+        return new GridFile(name, text, GridHash.ofBytes(bytes), parse(name, text));
+    }
+
+    /**
+     * Validates grid-file text.
+     *
+     * @throws GridFileException listing every problem in the text
+     */
+    public GridSpec parse(String name, String text) {
+        NodeReader reader = new NodeReader(name);
+        Optional<Node> root = compose(name, text, reader);
+        GridSpec spec = null;
+        if (root.isEmpty() && reader.problems().isEmpty()) {
+            reader.problem(Optional.empty(), "the grid file is empty; it needs at least 'mass' and 'metallicity'");
+        } else if (root.isPresent()) {
+            spec = spec(root.get(), reader);
+        }
+        if (!reader.problems().isEmpty()) {
+            throw new GridFileException(reader.problems());
+        }
+        return spec;
+    }
+
+    private static Optional<Node> compose(String name, String text, NodeReader reader) {
+        LoadSettings settings = LoadSettings.builder().setLabel(name).setMaxAliasesForCollections(MAX_ALIASES)
+                .setAllowRecursiveKeys(false).build();
+        try {
+            return new Compose(settings).composeString(text);
+        } catch (MarkedYamlEngineException e) {
+            String context = e.getContext() == null ? "" : e.getContext() + ": ";
+            reader.problem(e.getProblemMark().or(e::getContextMark), "YAML syntax: " + context + e.getProblem());
+        } catch (YamlEngineException e) {
+            reader.problem(Optional.empty(), "YAML syntax: " + e.getMessage());
+        }
+        return Optional.empty();
+    }
+
+    private static GridSpec spec(Node root, NodeReader reader) {
+        MappingNode map = reader.mapping(root, "the grid file");
+        if (map == null) {
+            return null;
+        }
+        MappingFields fields = new MappingFields(map, "the grid file", KEYS, reader);
+        String title = fields.has("title") ? reader.text(fields.value("title"), "title") : baseName(reader.file());
+        List<Double> masses = null;
+        List<MetallicityPoint> metallicities = null;
+        for (String required : List.of("mass", "metallicity")) {
+            if (!fields.has(required)) {
+                reader.problem(map, "the grid file needs a '" + required + "' section");
+            }
+        }
+        if (fields.has("mass")) {
+            masses = MassAxisReader.read(fields.value("mass"), reader);
+        }
+        if (fields.has("metallicity")) {
+            metallicities = MetallicityReader.read(fields.value("metallicity"), reader);
+        }
+        List<Double> ages = fields.has("age") ? ages(fields.value("age"), reader) : List.of(0.0);
+        PhysicsAxes physics = PhysicsReader.read(fields.value("physics"), reader);
+        String outputDir = "runs/" + baseName(reader.file());
+        Boolean profiles = Boolean.FALSE;
+        if (fields.has("output")) {
+            MappingNode output = reader.mapping(fields.value("output"), "output");
+            MappingFields out = output == null ? null : new MappingFields(output, "output", OUTPUT_KEYS, reader);
+            if (out != null && out.has("dir")) {
+                outputDir = reader.text(out.value("dir"), "output dir");
+            }
+            if (out != null && out.has("profiles")) {
+                profiles = reader.bool(out.value("profiles"), "output profiles");
+            }
+        }
+        if (title == null || masses == null || metallicities == null || ages == null || physics == null
+                || outputDir == null || profiles == null) {
+            return null;
+        }
+        return new GridSpec(title, masses, metallicities, ages, physics, outputDir, profiles);
+    }
+
+    private static List<Double> ages(Node node, NodeReader reader) {
+        MappingNode map = reader.mapping(node, "age");
+        if (map == null) {
+            return null;
+        }
+        MappingFields fields = new MappingFields(map, "age", AGE_KEYS, reader);
+        if (!fields.has("gyr")) {
+            reader.problem(map, "age needs 'gyr', the ages since the ZAMS in Gyr (0 = ZAMS)");
+            return null;
+        }
+        return AxisValues.increasing(fields.value("gyr"), "age", Range.closed(0.0, MAX_AGE_GYR), reader);
+    }
+
+    /** The file name without directories and without its .yaml or .yml extension. */
+    static String baseName(String file) {
+        Path fileName = Path.of(file).getFileName();
+        String base = fileName == null ? file : fileName.toString();
+        return base.replaceFirst("\\.(yaml|yml)$", "");
+    }
+}

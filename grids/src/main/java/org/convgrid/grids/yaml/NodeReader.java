@@ -1,0 +1,161 @@
+package org.convgrid.grids.yaml;
+
+import java.math.BigDecimal;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Optional;
+import org.convgrid.grids.GridProblem;
+import org.snakeyaml.engine.v2.common.ScalarStyle;
+import org.snakeyaml.engine.v2.exceptions.Mark;
+import org.snakeyaml.engine.v2.nodes.MappingNode;
+import org.snakeyaml.engine.v2.nodes.Node;
+import org.snakeyaml.engine.v2.nodes.ScalarNode;
+import org.snakeyaml.engine.v2.nodes.SequenceNode;
+
+/**
+ * Typed reads of YAML nodes that never throw: each problem is recorded with its node's position and the read
+ * returns null, so one pass over the file finds every problem. Numbers and booleans must be plain (unquoted)
+ * scalars; numbers are read as exact decimals so that axis arithmetic does not drift.
+ */
+final class NodeReader {
+
+    private final String file;
+    private final List<GridProblem> problems = new ArrayList<>();
+
+    NodeReader(String file) {
+        this.file = file;
+    }
+
+    String file() {
+        return file;
+    }
+
+    /** Records a problem at the start of {@code node}. */
+    void problem(Node node, String message) {
+        problem(node == null ? Optional.empty() : node.getStartMark(), message);
+    }
+
+    /** Records a problem at a mark (1:1 when there is none). */
+    void problem(Optional<Mark> mark, String message) {
+        int line = mark.map(m -> m.getLine() + 1).orElse(1);
+        int column = mark.map(m -> m.getColumn() + 1).orElse(1);
+        problems.add(new GridProblem(file, line, column, message));
+    }
+
+    /** Every problem so far, in file order. */
+    List<GridProblem> problems() {
+        List<GridProblem> sorted = new ArrayList<>(problems);
+        sorted.sort(Comparator.comparingInt(GridProblem::line).thenComparingInt(GridProblem::column));
+        return sorted;
+    }
+
+    MappingNode mapping(Node node, String what) {
+        if (node instanceof MappingNode map) {
+            return map;
+        }
+        problem(node, what + " must be a mapping of keys to values" + got(node));
+        return null;
+    }
+
+    /** The items of a sequence, or a lone scalar as a one-item list; null (with a problem) otherwise. */
+    List<Node> items(Node node, String what) {
+        if (node instanceof SequenceNode sequence) {
+            if (sequence.getValue().isEmpty()) {
+                problem(node, what + " must not be an empty list");
+                return null;
+            }
+            return sequence.getValue();
+        }
+        if (node instanceof ScalarNode && !isNull(node)) {
+            return List.of(node);
+        }
+        problem(node, what + " must be a value or a list of values" + got(node));
+        return null;
+    }
+
+    BigDecimal decimal(Node node, String what) {
+        String text = plainScalar(node, what, "a number");
+        if (text == null) {
+            return null;
+        }
+        try {
+            return new BigDecimal(text);
+        } catch (NumberFormatException e) {
+            problem(node, what + " must be a number, got '" + text + "'");
+            return null;
+        }
+    }
+
+    Double number(Node node, String what) {
+        BigDecimal value = decimal(node, what);
+        return value == null ? null : value.doubleValue();
+    }
+
+    Integer integer(Node node, String what) {
+        BigDecimal value = decimal(node, what);
+        if (value == null) {
+            return null;
+        }
+        try {
+            return value.intValueExact();
+        } catch (ArithmeticException e) {
+            problem(node, what + " must be a whole number, got " + value.toPlainString());
+            return null;
+        }
+    }
+
+    Boolean bool(Node node, String what) {
+        String text = plainScalar(node, what, "true or false");
+        if (text == null) {
+            return null;
+        }
+        if (text.equals("true") || text.equals("false")) {
+            return Boolean.valueOf(text);
+        }
+        problem(node, what + " must be true or false, got '" + text + "'");
+        return null;
+    }
+
+    String text(Node node, String what) {
+        if (node instanceof ScalarNode scalar && !isNull(node) && !scalar.getValue().isBlank()) {
+            return scalar.getValue();
+        }
+        problem(node, what + " must be a non-empty text" + got(node));
+        return null;
+    }
+
+    private String plainScalar(Node node, String what, String expected) {
+        if (node instanceof ScalarNode scalar && !isNull(node)) {
+            if (scalar.getScalarStyle() != ScalarStyle.PLAIN) {
+                problem(node, what + " must be " + expected + ", got the quoted text '" + scalar.getValue() + "'");
+                return null;
+            }
+            return scalar.getValue();
+        }
+        problem(node, what + " must be " + expected + got(node));
+        return null;
+    }
+
+    /** An empty value, ~ or null written without quotes. */
+    static boolean isNull(Node node) {
+        if (node instanceof ScalarNode scalar && scalar.getScalarStyle() == ScalarStyle.PLAIN) {
+            String v = scalar.getValue();
+            return v.isEmpty() || v.equals("~") || v.equals("null") || v.equals("Null") || v.equals("NULL");
+        }
+        return false;
+    }
+
+    private static String got(Node node) {
+        if (node == null || isNull(node)) {
+            return ", but it has no value";
+        }
+        if (node instanceof MappingNode) {
+            return ", got a mapping";
+        }
+        if (node instanceof SequenceNode) {
+            return ", got a list";
+        }
+        return ", got '" + ((ScalarNode) node).getValue() + "'";
+    }
+}

@@ -1,0 +1,81 @@
+package org.convgrid.grids.yaml;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.grids.PhysicsAxes;
+import org.snakeyaml.engine.v2.nodes.MappingNode;
+import org.snakeyaml.engine.v2.nodes.Node;
+
+/**
+ * The {@code physics:} section. Each option is a value or a list of distinct values (a physics axis); an option
+ * left out takes the engine default ({@link PhysicsOptions#DEFAULT}).
+ */
+final class PhysicsReader {
+
+    private static final List<String> KEYS = List.of("mixing_length", "overshoot", "criterion", "opacity_factor");
+    private static final Range POSITIVE = Range.open(0.0, Double.POSITIVE_INFINITY);
+    private static final Range NON_NEGATIVE = new Range(0.0, true, Double.POSITIVE_INFINITY, false);
+
+    private PhysicsReader() {
+    }
+
+    /** The physics axes, or null when the section has problems (they are recorded). */
+    static PhysicsAxes read(Node node, NodeReader reader) {
+        if (node == null) {
+            return PhysicsAxes.DEFAULT;
+        }
+        MappingNode map = reader.mapping(node, "physics");
+        if (map == null) {
+            return null;
+        }
+        MappingFields fields = new MappingFields(map, "physics", KEYS, reader);
+        PhysicsOptions d = PhysicsOptions.DEFAULT;
+        List<Double> alphas = fields.has("mixing_length")
+                ? AxisValues.distinct(fields.value("mixing_length"), "mixing_length", POSITIVE, reader)
+                : List.of(d.mixingLength());
+        List<Double> overshoots = fields.has("overshoot")
+                ? AxisValues.distinct(fields.value("overshoot"), "overshoot", NON_NEGATIVE, reader)
+                : List.of(d.overshoot());
+        List<StabilityCriterion> criteria = fields.has("criterion")
+                ? criteria(fields.value("criterion"), reader)
+                : List.of(d.criterion());
+        List<Double> factors = fields.has("opacity_factor")
+                ? AxisValues.distinct(fields.value("opacity_factor"), "opacity_factor", POSITIVE, reader)
+                : List.of(d.opacityFactor());
+        if (alphas == null || overshoots == null || criteria == null || factors == null) {
+            return null;
+        }
+        return new PhysicsAxes(alphas, overshoots, criteria, factors);
+    }
+
+    private static List<StabilityCriterion> criteria(Node node, NodeReader reader) {
+        List<Node> items = reader.items(node, "criterion");
+        if (items == null) {
+            return null;
+        }
+        List<StabilityCriterion> criteria = new ArrayList<>();
+        boolean ok = true;
+        for (Node item : items) {
+            String text = reader.text(item, "criterion");
+            StabilityCriterion criterion = text == null ? null : switch (text) {
+                case "schwarzschild" -> StabilityCriterion.SCHWARZSCHILD;
+                case "ledoux" -> StabilityCriterion.LEDOUX;
+                default -> null;
+            };
+            if (text != null && criterion == null) {
+                reader.problem(item, "criterion must be schwarzschild or ledoux, got '" + text + "'");
+            } else if (criterion != null && criteria.contains(criterion)) {
+                reader.problem(item, "duplicate criterion " + criterion.name().toLowerCase(Locale.ROOT));
+                criterion = null;
+            }
+            ok &= criterion != null;
+            if (criterion != null) {
+                criteria.add(criterion);
+            }
+        }
+        return ok ? criteria : null;
+    }
+}

@@ -1,0 +1,73 @@
+package org.convgrid.output;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.io.Writer;
+import java.nio.channels.Channels;
+import java.nio.channels.FileChannel;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+
+/**
+ * Replaces files atomically: the content goes to a temporary file in the target's directory, is forced to disk,
+ * then renamed over the target, so a reader (or a crash) never sees a half-written file. Where the file system
+ * cannot rename atomically, a plain replacing move is used.
+ */
+public final class AtomicFiles {
+
+    /** Writes the content of a text file. */
+    @FunctionalInterface
+    public interface TextBody {
+        void write(Writer out) throws IOException;
+    }
+
+    /** Writes the content of a binary file. */
+    @FunctionalInterface
+    public interface BinaryBody {
+        void write(OutputStream out) throws IOException;
+    }
+
+    private AtomicFiles() {
+    }
+
+    /** Writes UTF-8 text through {@code body}, then moves it into place. */
+    public static void write(Path target, TextBody body) throws IOException {
+        writeBinary(target, out -> {
+            Writer writer = Channels.newWriter(Channels.newChannel(out), StandardCharsets.UTF_8);
+            body.write(writer);
+            writer.flush();
+        });
+    }
+
+    /** Writes a string as UTF-8. */
+    public static void writeString(Path target, CharSequence text) throws IOException {
+        write(target, out -> out.append(text));
+    }
+
+    /** Writes bytes through {@code body} (for example a PNG), then moves them into place. */
+    public static void writeBinary(Path target, BinaryBody body) throws IOException {
+        Path absolute = target.toAbsolutePath();
+        Path dir = absolute.getParent();
+        Files.createDirectories(dir);
+        Path temp = Files.createTempFile(dir, "." + absolute.getFileName(), ".tmp");
+        try {
+            try (FileChannel channel = FileChannel.open(temp, StandardOpenOption.WRITE,
+                    StandardOpenOption.TRUNCATE_EXISTING); OutputStream out = Channels.newOutputStream(channel)) {
+                body.write(out);
+                out.flush();
+                channel.force(true);
+            }
+            try {
+                Files.move(temp, absolute, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException e) {
+                Files.move(temp, absolute, StandardCopyOption.REPLACE_EXISTING);
+            }
+        } finally {
+            Files.deleteIfExists(temp);
+        }
+    }
+}

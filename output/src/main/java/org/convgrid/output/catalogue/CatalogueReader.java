@@ -1,0 +1,117 @@
+package org.convgrid.output.catalogue;
+
+import java.io.IOException;
+import java.io.Reader;
+import java.io.StringReader;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVRecord;
+import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.engine.convection.StructureClass;
+import org.convgrid.output.CsvNumbers;
+import org.convgrid.output.OutputFormatException;
+import org.convgrid.output.Span;
+
+/**
+ * Reads catalogues by column name, so it accepts columns in any order, ignores columns it does not know (later
+ * extensions, trailing extras) and fills missing {@link CatalogueColumns#EXTENSIONS} with "not applicable" (an
+ * opacity factor of 1). Every {@link CatalogueColumns#FIXED} column must be present.
+ */
+public final class CatalogueReader {
+
+    private static final CSVFormat FORMAT = CatalogueWriter.FORMAT.builder().setHeader().setSkipHeaderRecord(true)
+            .setAllowMissingColumnNames(true).get();
+
+    private CatalogueReader() {
+    }
+
+    /** Every row of a catalogue file. */
+    public static List<CatalogueRow> read(Path file) throws IOException {
+        try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
+            return read(in);
+        }
+    }
+
+    /**
+     * The rows of a catalogue whose last line may have been cut short by an interrupted run: text after the last
+     * line break is ignored. The caller can truncate the file to {@code text.lastIndexOf('\n') + 1} chars.
+     */
+    public static List<CatalogueRow> readCompleteLines(String text) throws IOException {
+        return read(new StringReader(text.substring(0, text.lastIndexOf('\n') + 1)));
+    }
+
+    /**
+     * Every row of a catalogue.
+     *
+     * @throws OutputFormatException when a fixed column is missing or a cell cannot be read
+     */
+    public static List<CatalogueRow> read(Reader in) throws IOException {
+        try (CSVParser parser = CSVParser.builder().setReader(in).setFormat(FORMAT).get()) {
+            List<String> header = parser.getHeaderNames();
+            for (String column : CatalogueColumns.FIXED) {
+                if (!header.contains(column)) {
+                    throw new OutputFormatException("catalogue misses the column '" + column + "'");
+                }
+            }
+            List<CatalogueRow> rows = new ArrayList<>();
+            for (CSVRecord record : parser) {
+                rows.add(row(record));
+            }
+            return rows;
+        }
+    }
+
+    private static CatalogueRow row(CSVRecord r) {
+        Cells c = new Cells(r);
+        try {
+            String criterion = c.text(CatalogueColumns.CRITERION);
+            String structure = c.text(CatalogueColumns.STRUCTURE_CLASS);
+            double opacity = c.number(CatalogueColumns.OPACITY_FACTOR);
+            return new CatalogueRow(c.text(CatalogueColumns.MODEL_ID), c.number(CatalogueColumns.MASS_MSUN),
+                    c.number(CatalogueColumns.Z_INIT), c.number(CatalogueColumns.Y_INIT),
+                    c.number(CatalogueColumns.MIXING_LENGTH), c.number(CatalogueColumns.OVERSHOOT_HP),
+                    c.number(CatalogueColumns.AGE_GYR), ModelStatus.fromLabel(c.text(CatalogueColumns.STATUS)),
+                    c.text(CatalogueColumns.STATUS_DETAIL), c.number(CatalogueColumns.LUMINOSITY_LSUN),
+                    c.number(CatalogueColumns.RADIUS_RSUN), c.number(CatalogueColumns.TEFF_K),
+                    c.number(CatalogueColumns.LOG_G_CGS), c.number(CatalogueColumns.CENTER_TEMP_K),
+                    c.number(CatalogueColumns.CENTER_DENSITY_CGS), c.number(CatalogueColumns.CENTER_H_FRAC),
+                    structure.isEmpty() ? null : StructureClass.fromLabel(structure),
+                    c.number(CatalogueColumns.CORE_CZ_MASS_FRAC), c.number(CatalogueColumns.ENV_CZ_BASE_MASS_FRAC),
+                    c.number(CatalogueColumns.ENV_CZ_BASE_RADIUS_FRAC), c.number(CatalogueColumns.ENV_CZ_MASS_MSUN),
+                    c.number(CatalogueColumns.TURNOVER_TIME_DAYS),
+                    Span.parseList(c.text(CatalogueColumns.CONV_ZONES_MASS_FRAC)),
+                    Integer.parseInt(c.text(CatalogueColumns.SOLVER_ITERATIONS)),
+                    criterion.isEmpty() ? null : StabilityCriterion.valueOf(criterion.toUpperCase(Locale.ROOT)),
+                    Double.isNaN(opacity) ? 1.0 : opacity, c.number(CatalogueColumns.TURNOVER_TIME_GLOBAL_DAYS));
+        } catch (IllegalArgumentException e) {
+            throw new OutputFormatException("catalogue row " + r.getRecordNumber() + " (line "
+                    + (r.getRecordNumber() + 1) + "), column '" + c.current + "': " + e.getMessage(), e);
+        }
+    }
+
+    /** Cell access by name that remembers the column being read, for error messages. */
+    private static final class Cells {
+        private final CSVRecord record;
+        private String current = "";
+
+        Cells(CSVRecord record) {
+            this.record = record;
+        }
+
+        String text(String column) {
+            current = column;
+            return record.isSet(column) ? record.get(column) : "";
+        }
+
+        double number(String column) {
+            return CsvNumbers.parse(text(column));
+        }
+    }
+}

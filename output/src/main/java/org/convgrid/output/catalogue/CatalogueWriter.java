@@ -1,0 +1,91 @@
+package org.convgrid.output.catalogue;
+
+import java.io.Closeable;
+import java.io.Flushable;
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+import org.convgrid.output.CsvNumbers;
+import org.convgrid.output.Span;
+
+/**
+ * Writes catalogue rows as CSV (comma, {@code \n} line ends, RFC 4180 quoting when a cell needs it) with the
+ * numbers of {@link CsvNumbers}. {@link #startingWithHeader} writes the header first; {@link #continuing} writes
+ * none, to grow an existing catalogue on resume. Not thread-safe: one writer per file, rows in grid order.
+ */
+public final class CatalogueWriter implements Flushable, Closeable {
+
+    /** The CSV dialect of every convgrid table. */
+    public static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get();
+
+    private final CSVPrinter printer;
+
+    private CatalogueWriter(Appendable out) throws IOException {
+        this.printer = new CSVPrinter(out, FORMAT);
+    }
+
+    /** A writer that first writes the header row. */
+    public static CatalogueWriter startingWithHeader(Appendable out) throws IOException {
+        CatalogueWriter writer = new CatalogueWriter(out);
+        writer.printer.printRecord(CatalogueColumns.HEADER);
+        return writer;
+    }
+
+    /** A writer for rows after an existing header. */
+    public static CatalogueWriter continuing(Appendable out) throws IOException {
+        return new CatalogueWriter(out);
+    }
+
+    /** Writes one row. */
+    public void write(CatalogueRow row) throws IOException {
+        printer.printRecord(cells(row));
+    }
+
+    /** Writes rows in the given order. */
+    public void writeAll(Iterable<CatalogueRow> rows) throws IOException {
+        for (CatalogueRow row : rows) {
+            write(row);
+        }
+    }
+
+    /** The cells of a row, in {@link CatalogueColumns#HEADER} order. */
+    public static List<String> cells(CatalogueRow r) {
+        List<String> cells = new ArrayList<>(CatalogueColumns.HEADER.size());
+        cells.add(r.modelId());
+        for (double v : new double[] {r.massMsun(), r.zInit(), r.yInit(), r.mixingLength(), r.overshootHp(),
+                r.ageGyr()}) {
+            cells.add(CsvNumbers.format(v));
+        }
+        cells.add(r.status().label());
+        cells.add(r.statusDetail());
+        for (double v : new double[] {r.luminosityLsun(), r.radiusRsun(), r.teffK(), r.logGCgs(), r.centerTempK(),
+                r.centerDensityCgs(), r.centerHFrac()}) {
+            cells.add(CsvNumbers.format(v));
+        }
+        cells.add(r.structureClass() == null ? "" : r.structureClass().label());
+        for (double v : new double[] {r.coreCzMassFrac(), r.envCzBaseMassFrac(), r.envCzBaseRadiusFrac(),
+                r.envCzMassMsun(), r.turnoverTimeDays()}) {
+            cells.add(CsvNumbers.format(v));
+        }
+        cells.add(Span.join(r.convZones()));
+        cells.add(Integer.toString(r.solverIterations()));
+        cells.add(r.criterion() == null ? "" : r.criterion().name().toLowerCase(Locale.ROOT));
+        cells.add(CsvNumbers.format(r.opacityFactor()));
+        cells.add(CsvNumbers.format(r.turnoverTimeGlobalDays()));
+        return cells;
+    }
+
+    @Override
+    public void flush() throws IOException {
+        printer.flush();
+    }
+
+    /** Flushes, and closes the target when it is closeable. */
+    @Override
+    public void close() throws IOException {
+        printer.close(true);
+    }
+}

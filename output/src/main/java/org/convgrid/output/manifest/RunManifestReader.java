@@ -1,0 +1,68 @@
+package org.convgrid.output.manifest;
+
+import java.time.Instant;
+import java.time.format.DateTimeParseException;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.output.OutputFormatException;
+import org.snakeyaml.engine.v2.api.Load;
+import org.snakeyaml.engine.v2.api.LoadSettings;
+import org.snakeyaml.engine.v2.exceptions.YamlEngineException;
+
+/** Reads a manifest written by {@link RunManifestWriter} (for resume and merge checks). */
+public final class RunManifestReader {
+
+    private RunManifestReader() {
+    }
+
+    /**
+     * Parses manifest YAML.
+     *
+     * @throws OutputFormatException when the text is not a manifest
+     */
+    public static RunManifest read(String yaml) {
+        try {
+            Map<?, ?> root = map(new Load(LoadSettings.builder().build()).loadFromString(yaml), "manifest");
+            Map<?, ?> grid = map(root.get("grid"), "grid");
+            List<PhysicsOptions> physics = new ArrayList<>();
+            for (Object item : (List<?>) root.get("physics")) {
+                Map<?, ?> p = map(item, "physics");
+                physics.add(new PhysicsOptions(number(p, "mixing_length"), number(p, "overshoot"),
+                        StabilityCriterion.valueOf(((String) p.get("criterion")).toUpperCase(Locale.ROOT)),
+                        number(p, "opacity_factor")));
+            }
+            Map<?, ?> models = map(root.get("models"), "models");
+            Map<ModelStatus, Long> counts = new EnumMap<>(ModelStatus.class);
+            for (ModelStatus status : ModelStatus.values()) {
+                counts.put(status, ((Number) models.get(status.label())).longValue());
+            }
+            Object finished = root.get("finished");
+            return new RunManifest((String) root.get("tool_version"), (String) grid.get("file"),
+                    (String) grid.get("text"), (String) grid.get("sha256"), (String) grid.get("models_sha256"),
+                    physics, Instant.parse((String) root.get("started")),
+                    finished == null ? null : Instant.parse((String) finished),
+                    ((Number) root.get("threads")).intValue(), (String) root.get("shard"), counts,
+                    number(root, "median_seconds_per_model"));
+        } catch (YamlEngineException | ClassCastException | NullPointerException | DateTimeParseException
+                 | IllegalArgumentException e) {
+            throw new OutputFormatException("not a convgrid manifest: " + e.getMessage(), e);
+        }
+    }
+
+    private static Map<?, ?> map(Object value, String what) {
+        if (value instanceof Map<?, ?> m) {
+            return m;
+        }
+        throw new OutputFormatException("manifest: '" + what + "' is not a mapping");
+    }
+
+    private static double number(Map<?, ?> map, String key) {
+        return ((Number) map.get(key)).doubleValue();
+    }
+}

@@ -1,0 +1,66 @@
+package org.convgrid.output.manifest;
+
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.batch.PhysicsOptions;
+import org.snakeyaml.engine.v2.api.Dump;
+import org.snakeyaml.engine.v2.api.DumpSettings;
+import org.snakeyaml.engine.v2.common.FlowStyle;
+
+/**
+ * Writes a {@link RunManifest} as YAML (block style; the grid file's text as a multi-line string). Keys, in order:
+ * {@code tool_version}, {@code grid} ({@code file}, {@code sha256}, {@code models_sha256}, {@code text}),
+ * {@code physics} (list of {@code mixing_length}, {@code overshoot}, {@code criterion}, {@code opacity_factor}),
+ * {@code started}, {@code finished} (ISO-8601 UTC instants), {@code threads}, {@code shard}, {@code models}
+ * ({@code total} and one count per status label), {@code median_seconds_per_model}.
+ */
+public final class RunManifestWriter {
+
+    private RunManifestWriter() {
+    }
+
+    /** Writes the manifest. */
+    public static void write(RunManifest manifest, Appendable out) throws IOException {
+        out.append(toYaml(manifest));
+    }
+
+    /** The manifest as YAML text. */
+    public static String toYaml(RunManifest m) {
+        Map<String, Object> grid = new LinkedHashMap<>();
+        grid.put("file", m.gridFile());
+        grid.put("sha256", m.gridFileSha256());
+        grid.put("models_sha256", m.gridModelsSha256());
+        grid.put("text", m.gridText());
+        List<Map<String, Object>> physics = new ArrayList<>();
+        for (PhysicsOptions p : m.physics()) {
+            Map<String, Object> options = new LinkedHashMap<>();
+            options.put("mixing_length", p.mixingLength());
+            options.put("overshoot", p.overshoot());
+            options.put("criterion", p.criterion().name().toLowerCase(Locale.ROOT));
+            options.put("opacity_factor", p.opacityFactor());
+            physics.add(options);
+        }
+        Map<String, Object> models = new LinkedHashMap<>();
+        models.put("total", m.total());
+        for (ModelStatus status : ModelStatus.values()) {
+            models.put(status.label(), m.counts().get(status));
+        }
+        Map<String, Object> root = new LinkedHashMap<>();
+        root.put("tool_version", m.toolVersion());
+        root.put("grid", grid);
+        root.put("physics", physics);
+        root.put("started", m.started().toString());
+        root.put("finished", m.finished() == null ? null : m.finished().toString());
+        root.put("threads", m.threads());
+        root.put("shard", m.shard());
+        root.put("models", models);
+        root.put("median_seconds_per_model", m.medianSecondsPerModel());
+        DumpSettings settings = DumpSettings.builder().setDefaultFlowStyle(FlowStyle.BLOCK).setWidth(120).build();
+        return new Dump(settings).dumpToString(root);
+    }
+}

@@ -1,0 +1,29 @@
+package org.convgrid.output.profile;
+
+import java.util.List;
+
+/** The column names of a profile file, centre-to-surface rows; the only place they are spelled. */
+public final class ProfileColumns {
+
+    public static final String MASS_FRAC = "mass_frac";
+    public static final String RADIUS_FRAC = "radius_frac";
+    public static final String PRESSURE_CGS = "pressure_cgs";
+    public static final String TEMP_K = "temp_k";
+    public static final String DENSITY_CGS = "density_cgs";
+    public static final String LUMINOSITY_LSUN = "luminosity_lsun";
+    public static final String KAPPA_CGS = "kappa_cgs";
+    public static final String EPS_NUC_CGS = "eps_nuc_cgs";
+    public static final String NABLA = "nabla";
+    public static final String NABLA_AD = "nabla_ad";
+    public static final String NABLA_RAD = "nabla_rad";
+    /** 1 where convective, 0 where radiative (numeric so that charts can plot it). */
+    public static final String CONVECTIVE = "convective";
+    public static final String CONV_VELOCITY_CGS = "conv_velocity_cgs";
+
+    /** The header, in order. */
+    public static final List<String> HEADER = List.of(MASS_FRAC, RADIUS_FRAC, PRESSURE_CGS, TEMP_K, DENSITY_CGS,
+            LUMINOSITY_LSUN, KAPPA_CGS, EPS_NUC_CGS, NABLA, NABLA_AD, NABLA_RAD, CONVECTIVE, CONV_VELOCITY_CGS);
+
+    private ProfileColumns() {
+    }
+}

@@ -1,0 +1,2 @@
+/** Transition masses ({@code transitions.csv}): the fully convective limit and the convective-core onset per slice. */
+package org.convgrid.output.transitions;

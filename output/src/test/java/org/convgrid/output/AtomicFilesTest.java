@@ -1,0 +1,42 @@
+package org.convgrid.output;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class AtomicFilesTest {
+
+    @TempDir
+    Path dir;
+
+    @Test
+    void writesAndReplacesLeavingNoTemporaryFile() throws IOException {
+        Path target = dir.resolve("sub/catalogue.csv");
+        AtomicFiles.writeString(target, "first\n");
+        AtomicFiles.write(target, out -> out.append("second, caf\u00e9\n"));
+        assertThat(Files.readString(target)).isEqualTo("second, caf\u00e9\n");
+        try (Stream<Path> files = Files.list(target.getParent())) {
+            assertThat(files).containsExactly(target);
+        }
+    }
+
+    @Test
+    void failedWriteKeepsTheOldContent() throws IOException {
+        Path target = dir.resolve("manifest.yaml");
+        AtomicFiles.writeString(target, "old\n");
+        assertThatThrownBy(() -> AtomicFiles.write(target, out -> {
+            out.append("half");
+            throw new IOException("disk full");
+        })).hasMessage("disk full");
+        assertThat(Files.readString(target)).isEqualTo("old\n");
+        try (Stream<Path> files = Files.list(dir)) {
+            assertThat(files).containsExactly(target);
+        }
+    }
+}

@@ -1,0 +1,140 @@
+package org.convgrid.output.catalogue;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
+
+import java.io.IOException;
+import java.io.StringReader;
+import java.util.List;
+import org.convgrid.engine.batch.GlobalProperties;
+import org.convgrid.engine.batch.ModelOutcome;
+import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.convection.ConvectiveStructure;
+import org.convgrid.engine.convection.ConvectiveZone;
+import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.engine.convection.StructureClass;
+import org.convgrid.engine.units.Constants;
+import org.convgrid.output.OutputFormatException;
+import org.convgrid.output.Span;
+import org.junit.jupiter.api.Test;
+
+class CatalogueRoundTripTest {
+
+    /** A solar-like outcome in cgs; the numbers are illustrative, not a computed model. */
+    static ModelOutcome sunLike() {
+        ModelRequest request = new ModelRequest("p0-z01-m009-a00", 1.0 * Constants.M_SUN, 0.014, 0.268,
+                4.57 * Constants.GYR, PhysicsOptions.DEFAULT);
+        double g = Constants.GM_SUN / (Constants.R_SUN * Constants.R_SUN);
+        GlobalProperties global = new GlobalProperties(Constants.L_SUN, Constants.R_SUN, 5772.0, g, 1.57e7, 150.0,
+                0.34);
+        ConvectiveStructure convection = new ConvectiveStructure(
+                List.of(new ConvectiveZone(0.9755, 1.0, 0.713, 1.0)), StructureClass.CONV_ENVELOPE, 0.0, 0.9755,
+                0.713, 0.0245 * Constants.M_SUN, 25.0 * Constants.DAY, 40.0 * Constants.DAY);
+        return new ModelOutcome(request, ModelStatus.OK, "", global, convection, 7);
+    }
+
+    static ModelOutcome failed() {
+        ModelRequest request = new ModelRequest("p0-z01-m010-a00", 1.1 * Constants.M_SUN, 0.014, 0.268, 0.0,
+                new PhysicsOptions(2.0, 0.1, StabilityCriterion.LEDOUX, 1.0));
+        return new ModelOutcome(request, ModelStatus.NOT_CONVERGED, "residual 3e-2 after 40 iterations, shell 512",
+                null, null, 40);
+    }
+
+    @Test
+    void outcomeMapsToSolarUnits() {
+        CatalogueRow row = OutcomeRows.toRow(sunLike());
+        assertThat(row.massMsun()).isCloseTo(1.0, within(1e-15));
+        assertThat(row.ageGyr()).isCloseTo(4.57, within(1e-14));
+        assertThat(row.luminosityLsun()).isEqualTo(1.0);
+        assertThat(row.radiusRsun()).isEqualTo(1.0);
+        // log g of the Sun = 4.438 (IAU 2015 B3 nominal GM and R: g = 27400 cm s^-2)
+        assertThat(row.logGCgs()).isCloseTo(4.438, within(5e-4));
+        assertThat(row.envCzMassMsun()).isCloseTo(0.0245, within(1e-15));
+        assertThat(row.turnoverTimeDays()).isCloseTo(25.0, within(1e-12));
+        assertThat(row.convZones()).containsExactly(new Span(0.9755, 1.0));
+        assertThat(row.criterion()).isEqualTo(StabilityCriterion.SCHWARZSCHILD);
+    }
+
+    @Test
+    void writesHeaderOnceAndCellsInConventionsOrder() throws IOException {
+        StringBuilder out = new StringBuilder();
+        CatalogueWriter writer = CatalogueWriter.startingWithHeader(out);
+        writer.write(OutcomeRows.toRow(sunLike()));
+        writer.write(OutcomeRows.toRow(failed()));
+        writer.flush();
+        String[] lines = out.toString().split("\n");
+        assertThat(lines).hasSize(3);
+        assertThat(lines[0]).startsWith("model_id,mass_msun,z_init,y_init,mixing_length,overshoot_hp,age_gyr,status,"
+                + "status_detail,luminosity_lsun,radius_rsun,teff_k,log_g_cgs,center_temp_k,center_density_cgs,"
+                + "center_h_frac,structure_class,core_cz_mass_frac,env_cz_base_mass_frac,env_cz_base_radius_frac,"
+                + "env_cz_mass_msun,turnover_time_days,conv_zones_mass_frac,solver_iterations");
+        assertThat(lines[1]).isEqualTo("p0-z01-m009-a00,1,0.014,0.268,1.8,0,4.57,ok,,1,1,5772,4.438068,"
+                + "1.57e+07,150,0.34,conv_envelope,0,0.9755,0.713,0.0245,25,0.9755-1,7,schwarzschild,1,40");
+        assertThat(lines[2]).isEqualTo("p0-z01-m010-a00,1.1,0.014,0.268,2,0.1,0,not_converged,"
+                + "\"residual 3e-2 after 40 iterations, shell 512\",,,,,,,,,,,,,,,40,ledoux,1,");
+    }
+
+    @Test
+    void readBackAndRewriteGivesTheSameText() throws IOException {
+        String text = write(List.of(OutcomeRows.toRow(sunLike()), OutcomeRows.toRow(failed())));
+        List<CatalogueRow> rows = CatalogueReader.read(new StringReader(text));
+        assertThat(write(rows)).isEqualTo(text);
+        assertThat(rows.get(1).status()).isEqualTo(ModelStatus.NOT_CONVERGED);
+        assertThat(rows.get(1).luminosityLsun()).isNaN();
+        assertThat(rows.get(1).structureClass()).isNull();
+        assertThat(rows.get(0).convZones()).containsExactly(new Span(0.9755, 1.0));
+        assertThat(rows.get(0).centerTempK()).isEqualTo(1.57e7);
+        assertThat(rows.get(0).structureClass()).isEqualTo(StructureClass.CONV_ENVELOPE);
+    }
+
+    @Test
+    void toleratesExtraColumnsAndOlderCataloguesWithoutExtensions() throws IOException {
+        String text = write(List.of(OutcomeRows.toRow(sunLike())));
+        String[] lines = text.split("\n");
+        String withExtra = lines[0] + ",shard_note\n" + lines[1] + ",from shard 2\n";
+        assertThat(CatalogueReader.read(new StringReader(withExtra))).singleElement()
+                .extracting(CatalogueRow::modelId).isEqualTo("p0-z01-m009-a00");
+        String older = cut(lines[0], 3) + "\n" + cut(lines[1], 3) + "\n";
+        CatalogueRow row = CatalogueReader.read(new StringReader(older)).get(0);
+        assertThat(row.criterion()).isNull();
+        assertThat(row.opacityFactor()).isEqualTo(1.0);
+        assertThat(row.turnoverTimeGlobalDays()).isNaN();
+        assertThat(row.turnoverTimeDays()).isEqualTo(25.0);
+    }
+
+    @Test
+    void interruptedLastLineIsDropped() throws IOException {
+        String text = write(List.of(OutcomeRows.toRow(sunLike()), OutcomeRows.toRow(failed())));
+        String cutShort = text.substring(0, text.length() - 20);
+        assertThat(CatalogueReader.readCompleteLines(cutShort)).extracting(CatalogueRow::modelId)
+                .containsExactly("p0-z01-m009-a00");
+    }
+
+    @Test
+    void missingFixedColumnOrBadCellIsReported() throws IOException {
+        assertThatThrownBy(() -> CatalogueReader.read(new StringReader("model_id,mass_msun\nx,1\n")))
+                .isInstanceOf(OutputFormatException.class).hasMessageContaining("z_init");
+        String text = write(List.of(OutcomeRows.toRow(sunLike()))).replace(",5772,", ",hot,");
+        assertThatThrownBy(() -> CatalogueReader.read(new StringReader(text)))
+                .isInstanceOf(OutputFormatException.class).hasMessageContaining("teff_k");
+    }
+
+    private static String cut(String line, int trailingColumns) {
+        String result = line;
+        for (int i = 0; i < trailingColumns; i++) {
+            result = result.substring(0, result.lastIndexOf(','));
+        }
+        return result;
+    }
+
+    private static String write(List<CatalogueRow> rows) throws IOException {
+        StringBuilder out = new StringBuilder();
+        CatalogueWriter writer = CatalogueWriter.startingWithHeader(out);
+        writer.writeAll(rows);
+        writer.flush();
+        return out.toString();
+    }
+}

@@ -1,0 +1,59 @@
+package org.convgrid.output.manifest;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+import java.time.Instant;
+import java.util.List;
+import java.util.Map;
+import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.output.OutputFormatException;
+import org.junit.jupiter.api.Test;
+
+class RunManifestTest {
+
+    private static final String GRID = "title: Demo\nmass:\n  values: [0.5, 1.0]   # solar masses\n"
+            + "metallicity: {z: 0.014, y: 0.27}\n";
+
+    private static RunManifest manifest() {
+        return new RunManifest("0.1.0", "grids/demo.yaml", GRID, "ab".repeat(32), "cd".repeat(32),
+                List.of(PhysicsOptions.DEFAULT, new PhysicsOptions(2.0, 0.1, StabilityCriterion.LEDOUX, 1.0)),
+                Instant.parse("2026-03-01T10:00:00Z"), null, 2, "1/3", Map.of(ModelStatus.OK, 3L), Double.NaN);
+    }
+
+    @Test
+    void writesReadableYamlAndReadsItBack() {
+        RunManifest finished = manifest().finishedAt(Instant.parse("2026-03-01T10:05:30.250Z"),
+                Map.of(ModelStatus.OK, 58L, ModelStatus.FAILED, 2L), 1.75);
+        String yaml = RunManifestWriter.toYaml(finished);
+        assertThat(yaml).contains("tool_version: 0.1.0", "started: 2026-03-01T10:00:00Z",
+                "criterion: ledoux", "total: 60", "failed: 2", "median_seconds_per_model: 1.75");
+        assertThat(yaml).contains("  text: |");
+        RunManifest back = RunManifestReader.read(yaml);
+        assertThat(back).isEqualTo(finished);
+        assertThat(back.gridText()).isEqualTo(GRID);
+    }
+
+    @Test
+    void unfinishedRunHasNoEndAndNoMedian() {
+        RunManifest back = RunManifestReader.read(RunManifestWriter.toYaml(manifest()));
+        assertThat(back.finished()).isNull();
+        assertThat(back.medianSecondsPerModel()).isNaN();
+        assertThat(back.counts()).containsEntry(ModelStatus.PAST_MAIN_SEQUENCE, 0L);
+    }
+
+    @Test
+    void medianOfOddAndEvenCounts() {
+        assertThat(RunManifest.median(new double[] {3, 1, 2})).isEqualTo(2.0);
+        assertThat(RunManifest.median(new double[] {4, 1, 2, 3})).isEqualTo(2.5);
+        assertThat(RunManifest.median(new double[0])).isNaN();
+    }
+
+    @Test
+    void rejectsSomethingElse() {
+        assertThatThrownBy(() -> RunManifestReader.read("- just\n- a list\n"))
+                .isInstanceOf(OutputFormatException.class);
+    }
+}

@@ -1,0 +1,32 @@
+package org.convgrid.output.profile;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.io.IOException;
+import java.io.StringReader;
+import java.util.List;
+import org.convgrid.engine.units.Constants;
+import org.junit.jupiter.api.Test;
+
+class ProfileRoundTripTest {
+
+    @Test
+    void writesHeaderAndShellsAndReadsThemBack() throws IOException {
+        // illustrative shells (centre and surface of a Sun-like model), not computed values
+        List<ProfileRow> shells = List.of(
+                new ProfileRow(0.0, 0.0, 2.34e17, 1.57e7, 150.0, 0.0, 1.2, 17.5, 0.39, 0.40, 0.38, false, 0.0),
+                new ProfileRow(1.0, 1.0, 1.1e5, 5772.0, 2.0e-7, Constants.L_SUN, 0.35, 0.0, 0.2, 0.18, 3.5, true,
+                        1.5e5));
+        StringBuilder out = new StringBuilder();
+        ProfileWriter.write(shells, out);
+        String[] lines = out.toString().split("\n");
+        assertThat(lines[0]).isEqualTo(String.join(",", ProfileColumns.HEADER));
+        assertThat(lines[1]).isEqualTo("0,0,2.34e+17,1.57e+07,150,0,1.2,17.5,0.39,0.4,0.38,0,0");
+        assertThat(lines[2]).isEqualTo("1,1,110000,5772,2e-07,1,0.35,0,0.2,0.18,3.5,1,150000");
+        List<ProfileRow> back = ProfileReader.read(new StringReader(out.toString()));
+        assertThat(back.get(0)).isEqualTo(shells.get(0));
+        assertThat(back.get(1).luminosity()).isCloseTo(Constants.L_SUN, within(1e-12 * Constants.L_SUN));
+        assertThat(back.get(1).convective()).isTrue();
+    }
+}

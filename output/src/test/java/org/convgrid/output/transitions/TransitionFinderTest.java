@@ -1,0 +1,115 @@
+package org.convgrid.output.transitions;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.engine.convection.StructureClass;
+import org.convgrid.output.Span;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.junit.jupiter.api.Test;
+
+/** Synthetic catalogues: only mass, status, class and core size matter to the finder. */
+class TransitionFinderTest {
+
+    private static final StructureClass FC = StructureClass.FULLY_CONVECTIVE;
+    private static final StructureClass ENV = StructureClass.CONV_ENVELOPE;
+    private static final StructureClass BOTH = StructureClass.CONV_CORE_AND_ENVELOPE;
+
+    private final TransitionFinder finder = TransitionFinder.withDefaults();
+
+    static CatalogueRow row(double z, double mass, StructureClass c, double core, ModelStatus status) {
+        double nan = Double.NaN;
+        return new CatalogueRow("m" + mass, mass, z, 0.27, 1.8, 0.0, 0.0, status, "", nan, nan, nan, nan, nan, nan,
+                nan, status == ModelStatus.OK ? c : null, core, c == FC ? 0.0 : 0.5, 0.7, nan, nan, List.of(), 5,
+                StabilityCriterion.SCHWARZSCHILD, 1.0, nan);
+    }
+
+    static CatalogueRow ok(double mass, StructureClass c, double core) {
+        return row(0.02, mass, c, core, ModelStatus.OK);
+    }
+
+    static CatalogueRow failedAt(double mass) {
+        return row(0.02, mass, ENV, 0.0, ModelStatus.FAILED);
+    }
+
+    @Test
+    void oneCleanCrossingOfEach() {
+        List<CatalogueRow> rows = List.of(ok(0.2, FC, 1), ok(0.3, FC, 1), ok(0.4, ENV, 0), ok(1.0, ENV, 0),
+                ok(1.2, BOTH, 0.05), ok(1.4, BOTH, 0.08));
+        TransitionRow t = finder.find(rows).get(0);
+        assertThat(t.fullyConvective().massMsun()).isEqualTo(0.3);
+        assertThat(t.fullyConvective().bracket()).isEqualTo(new Span(0.3, 0.4));
+        assertThat(t.fullyConvective().crossings()).hasSize(1);
+        assertThat(t.convCore().massMsun()).isEqualTo(1.2);
+        assertThat(t.convCore().bracket()).isEqualTo(new Span(1.0, 1.2));
+        assertThat(t.method()).isEqualTo(TransitionMethod.GRID);
+        assertThat(t.notes()).isEmpty();
+    }
+
+    @Test
+    void noCrossingLeavesTheMassEmptyAndSaysWhy() {
+        TransitionRow allFc = finder.find(List.of(ok(0.1, FC, 1), ok(0.2, FC, 1))).get(0);
+        assertThat(allFc.fullyConvective().found()).isFalse();
+        assertThat(allFc.fullyConvective().massMsun()).isNaN();
+        assertThat(allFc.convCore().found()).isFalse();
+        assertThat(allFc.notes()).contains("fully convective at every usable mass",
+                "no convective core at any usable mass");
+        TransitionRow massive = finder.find(List.of(ok(1.5, BOTH, 0.1), ok(2.0, BOTH, 0.15))).get(0);
+        assertThat(massive.notes()).contains("no fully convective at any usable mass",
+                "convective core at every usable mass");
+    }
+
+    @Test
+    void severalCrossingsAreAllReported() {
+        // flicker: FC, not, FC, not -> limit is the highest fully convective mass below a non-FC neighbour
+        List<CatalogueRow> rows = List.of(ok(0.30, FC, 1), ok(0.32, ENV, 0), ok(0.34, FC, 1), ok(0.36, ENV, 0),
+                ok(1.10, BOTH, 0.01), ok(1.15, ENV, 0), ok(1.20, BOTH, 0.03));
+        TransitionRow t = finder.find(rows).get(0);
+        assertThat(t.fullyConvective().crossings()).containsExactly(new Span(0.30, 0.32), new Span(0.32, 0.34),
+                new Span(0.34, 0.36));
+        assertThat(t.fullyConvective().massMsun()).isEqualTo(0.34);
+        assertThat(t.convCore().crossings()).containsExactly(new Span(0.36, 1.10), new Span(1.10, 1.15),
+                new Span(1.15, 1.20));
+        assertThat(t.convCore().massMsun()).isEqualTo(1.10);
+        assertThat(t.notes()).contains("fully convective changes 3 times with mass",
+                "convective core changes 3 times with mass");
+    }
+
+    @Test
+    void failedModelsAtTheBracketAreSkippedAndCounted() {
+        List<CatalogueRow> rows = List.of(ok(0.30, FC, 1), failedAt(0.32), failedAt(0.34), ok(0.36, ENV, 0),
+                ok(1.0, ENV, 0), failedAt(1.1), ok(1.2, BOTH, 0.04), failedAt(1.3));
+        TransitionRow t = finder.find(rows).get(0);
+        assertThat(t.fullyConvective().bracket()).isEqualTo(new Span(0.30, 0.36));
+        assertThat(t.fullyConvective().skippedInBracket()).isEqualTo(2);
+        assertThat(t.convCore().bracket()).isEqualTo(new Span(1.0, 1.2));
+        assertThat(t.convCore().skippedInBracket()).isEqualTo(1);
+        assertThat(t.notes()).contains("fully convective bracket widened past 2 unusable model(s)",
+                "convective core bracket widened past 1 unusable model(s)");
+    }
+
+    @Test
+    void tinyCoresBelowTheThresholdDoNotCount() {
+        List<CatalogueRow> rows = List.of(ok(1.0, ENV, 0), ok(1.1, BOTH, 5e-4), ok(1.2, BOTH, 0.02));
+        assertThat(finder.find(rows).get(0).convCore().massMsun()).isEqualTo(1.2);
+        assertThat(new TransitionFinder(1e-4).find(rows).get(0).convCore().massMsun()).isEqualTo(1.1);
+    }
+
+    @Test
+    void oneRowPerSliceInOrderOfFirstAppearanceWithMassesSorted() {
+        List<CatalogueRow> rows = new ArrayList<>();
+        rows.add(row(0.001, 0.4, ENV, 0, ModelStatus.OK));
+        rows.add(row(0.001, 0.3, FC, 1, ModelStatus.OK));
+        rows.add(row(0.02, 0.2, FC, 1, ModelStatus.OK));
+        rows.add(row(0.02, 0.3, ENV, 0, ModelStatus.OK));
+        rows.add(row(0.03, 0.3, ENV, 0, ModelStatus.FAILED));
+        List<TransitionRow> found = finder.find(rows);
+        assertThat(found).extracting(t -> t.slice().zInit()).containsExactly(0.001, 0.02, 0.03);
+        assertThat(found.get(0).fullyConvective().massMsun()).isEqualTo(0.3);
+        assertThat(found.get(1).fullyConvective().massMsun()).isEqualTo(0.2);
+        assertThat(found.get(2).notes()).isEqualTo("no usable model in this slice");
+    }
+}
