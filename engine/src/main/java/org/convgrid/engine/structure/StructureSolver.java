@@ -77,6 +77,6 @@ public final class StructureSolver {
             throw new SolveFailedException("structure relaxation failed", result.report());
         }
         // the solver's last evaluation was at the returned state, so the scratch values describe it
-        return StellarModel.of(eq, result.solution(), result.report());
+        return StellarModel.of(eq, result.solution(), result.report(), physics);
     }
 }
