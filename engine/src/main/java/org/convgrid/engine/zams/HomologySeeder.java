@@ -24,12 +24,13 @@ public final class HomologySeeder {
     private static final double MAX_LUMINOSITY_EXPONENT = 6.0;
 
     /**
-     * Scales {@code nearest} to {@code mass}, with exponents measured against {@code other} when not null.
+     * Scales {@code nearest} to {@code mass}, with exponents measured against {@code other} when not null. The
+     * shells keep the neighbour's compositions (with 3He and CN already near their equilibrium values), which
+     * starts the new model closer to its own zero-age state than the initial composition would.
      *
      * @param mass target mass, g
-     * @param composition the homogeneous starting composition of the new model
      */
-    public ModelState seed(StellarModel nearest, StellarModel other, double mass, Composition composition) {
+    public ModelState seed(StellarModel nearest, StellarModel other, double mass) {
         double xR = DEFAULT_RADIUS_EXPONENT;
         double xL = DEFAULT_LUMINOSITY_EXPONENT;
         if (other != null && other.mass() != nearest.mass()) {
@@ -39,10 +40,14 @@ public final class HomologySeeder {
             xL = clamp(Math.log(nearest.global().luminosity() / other.global().luminosity()) / dlnM,
                     MIN_LUMINOSITY_EXPONENT, MAX_LUMINOSITY_EXPONENT);
         }
-        return scale(nearest.state(), mass, xR, xL, composition);
+        return scale(nearest.state(), mass, xR, xL, null);
     }
 
-    /** Homology scaling of a state to {@code mass} with the given exponents. */
+    /**
+     * Homology scaling of a state to {@code mass} with the given exponents.
+     *
+     * @param composition the homogeneous composition of the new state, or null to keep the state's compositions
+     */
     public static ModelState scale(ModelState state, double mass, double xR, double xL, Composition composition) {
         double lnS = Math.log(mass / state.mesh().totalMass());
         MassMesh mesh = state.mesh().scaledTo(mass);
@@ -58,7 +63,7 @@ public final class HomologySeeder {
             lnRho[k] += (1.0 - 3.0 * xR) * lnS;
             lnT[k] += (1.0 - xR) * lnS;
             lum[k] *= fL;
-            comp[k] = composition;
+            comp[k] = composition == null ? state.composition(k) : composition;
         }
         return new ModelState(mesh, comp, lnR, lnRho, lnT, lum);
     }

@@ -88,7 +88,7 @@ public final class ZamsTrack {
             ZamsModel other = nearest(nearest.model().mass(), nearest);
             try {
                 ZamsModel z = builder.fromSeed(seeder.seed(nearest.model(), other == null ? null : other.model(),
-                        target, composition), composition);
+                        target), composition);
                 add(z);
                 spent += z.iterations();
                 if (target == mass) {

@@ -9,7 +9,11 @@ import org.junit.jupiter.api.Test;
 class ScratchZamsTest {
     @Test
     void walk() {
-        PhysicsSet physics = StandInPhysics.create(1.8);
+        var eos = new StandInPhysics.IdealGas();
+        var opacity = org.convgrid.engine.physics.opacity.AnalyticCompositeOpacity.standard();
+        PhysicsSet physics = new PhysicsSet(eos, opacity, new org.convgrid.engine.physics.nuclear.HydrogenBurningNetwork(),
+                new org.convgrid.engine.convection.MixingLengthTheory(1.8), org.convgrid.engine.convection.StabilityCriterion.SCHWARZSCHILD,
+                new org.convgrid.engine.physics.atmosphere.AtmosphereTable(new org.convgrid.engine.physics.atmosphere.GreyAtmosphere(eos, opacity)), 0.0);
         for (double z : new double[] {0.02, 1e-4, 0.04}) {
             ZamsTrack track = new ZamsTrack(new ZamsBuilder(physics), Composition.scaledSolar(0.74 - 2 * z, z));
             for (double m : new double[] {1.0, 1.3, 2, 3, 5, 10, 20, 40, 70, 100}) {
@@ -27,9 +31,9 @@ class ScratchZamsTest {
         double ms = (System.nanoTime() - t0) / 1e6;
         if (r.converged()) {
             var g = r.model().model().global();
-            System.out.printf("M=%6.2f L=%.4e R=%.4f Teff=%6.0f Tc=%.3e rhoc=%8.2f it=%3d %6.0f ms%n", m,
+            System.out.printf("M=%6.2f L=%.4e R=%.4f Teff=%6.0f Tc=%.3e rhoc=%8.2f it=%3d %6.0f ms %s%n", m,
                     g.luminosity() / Constants.L_SUN, g.radius() / Constants.R_SUN, g.effectiveTemperature(),
-                    g.centralTemperature(), g.centralDensity(), r.iterations(), ms);
+                    g.centralTemperature(), g.centralDensity(), r.iterations(), ms, r.model().model().convection().zones());
         } else {
             System.out.printf("M=%6.2f FAILED %s it=%d %.0f ms%n", m, r.failure(), r.iterations(), ms);
         }
