@@ -95,6 +95,37 @@ public final class FermiDirac {
         }
     }
 
+    /**
+     * dF_{-1/2}/deta: the derivative of the table interpolant inside the table (so it is consistent with
+     * {@link #minusHalf}), the term-by-term derivative of the series below it and -F_{-3/2}/2 from the Sommerfeld
+     * expansion above it.
+     */
+    public static double minusHalfSlope(double eta) {
+        if (eta > TABLE_MAX) {
+            return -0.5 * sommerfeld(-1.5, eta);
+        }
+        if (eta < TABLE_MIN) {
+            double z = Math.exp(eta);
+            double sum = 0.0;
+            double power = 1.0;
+            for (int n = 1; n <= 400; n++) {
+                power *= z;
+                double term = power * Math.sqrt(n);
+                sum += (n % 2 == 1) ? term : -term;
+                if (term < 1e-17 * sum) {
+                    break;
+                }
+            }
+            return SQRT_PI * sum;
+        }
+        double s = (eta - TABLE_MIN) / TABLE_STEP;
+        int i = Math.min((int) s, NODES - 2);
+        double t = s - i;
+        double t2 = t * t;
+        return ((6.0 * t2 - 6.0 * t) * (VALUES[0][i] - VALUES[0][i + 1])) / TABLE_STEP
+                + (3.0 * t2 - 4.0 * t + 1.0) * SLOPES[0][i] + (3.0 * t2 - 2.0 * t) * SLOPES[0][i + 1];
+    }
+
     /** Non-degenerate series, exact for eta &lt; 0 (formulas.md 1.3). */
     public static double series(double order, double eta) {
         double gamma = order == -0.5 ? GAMMA[0] : order == 0.5 ? GAMMA[1] : GAMMA[2];
