@@ -12,8 +12,8 @@ final class DensityInversion {
 
     /** Iteration budget of the inversion. */
     static final int BUDGET = 60;
-    /** Convergence: |d ln rho| below this. */
-    static final double TOLERANCE = 1.0e-13;
+    /** Convergence: |d ln rho| below this (the EOS's own solve noise is ~1e-12 in ln P). */
+    static final double TOLERANCE = 1.0e-11;
     /** Largest Newton step in ln rho. */
     private static final double MAX_STEP = 3.0;
 
@@ -38,11 +38,12 @@ final class DensityInversion {
             step = s.chiRho() > 0.0 ? -mismatch / s.chiRho() : -Math.signum(mismatch);
             step = Math.max(-MAX_STEP, Math.min(MAX_STEP, step));
             double next = lnRho + step;
+            if (Math.abs(step) < TOLERANCE) {
+                // Converged; tested before the bracket because a step below one ulp leaves next on its edge.
+                return Math.abs(mismatch) < 1e-13 ? s : eos.atDensity(Math.exp(next), temperature, composition);
+            }
             if (!(next > lo && next < hi) && Double.isFinite(lo) && Double.isFinite(hi)) {
                 next = 0.5 * (lo + hi);
-            }
-            if (Math.abs(next - lnRho) < TOLERANCE) {
-                return Math.abs(mismatch) < 1e-12 ? s : eos.atDensity(Math.exp(next), temperature, composition);
             }
             lnRho = next;
         }
