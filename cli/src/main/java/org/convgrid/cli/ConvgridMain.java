@@ -9,7 +9,7 @@ import picocli.CommandLine.Option;
 @Command(name = "convgrid", mixinStandardHelpOptions = true, versionProvider = ToolVersion.class,
         description = "Where convection operates inside main-sequence stars, across a grid of mass, "
                 + "metallicity and age.",
-        subcommands = {})
+        subcommands = {ProbeCommand.class})
 public final class ConvgridMain implements Runnable {
 
     @Option(names = "--verbose", scope = CommandLine.ScopeType.INHERIT,
@@ -29,6 +29,7 @@ public final class ConvgridMain implements Runnable {
         CommandLine cli = new CommandLine(new ConvgridMain());
         cli.setOut(out);
         cli.setErr(err);
+        cli.setCaseInsensitiveEnumValuesAllowed(true);
         cli.setParameterExceptionHandler(new UsageErrorHandler());
         cli.setExecutionExceptionHandler(new FailureHandler());
         return cli;

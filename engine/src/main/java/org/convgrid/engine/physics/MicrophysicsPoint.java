@@ -11,12 +11,13 @@ import org.convgrid.engine.state.Composition;
 /**
  * The microphysics at one (density, temperature, composition) point, as the structure solver sees it.
  *
- * @param composition the composition used, with 3He and CN at local equilibrium
+ * @param requested the composition asked for
+ * @param composition the composition used: the requested one with 3He and CN at local equilibrium
  * @param eos thermodynamic state
  * @param opacity Rosseland-mean opacity
  * @param burning hydrogen burning
  */
-public record MicrophysicsPoint(Composition composition, EosState eos, OpacityValue opacity, BurningRate burning) {
+public record MicrophysicsPoint(Composition requested, Composition composition, EosState eos, OpacityValue opacity, BurningRate burning) {
 
     /**
      * Evaluates every component at one point; 3He and the CN isotopes are first set to their local equilibrium
@@ -28,7 +29,7 @@ public record MicrophysicsPoint(Composition composition, EosState eos, OpacityVa
     public static MicrophysicsPoint evaluate(EquationOfState eos, Opacity opacity, NuclearNetwork nuclear,
                                              double density, double temperature, Composition composition) {
         Composition burning = nuclear.equilibrium(density, temperature, composition);
-        return new MicrophysicsPoint(burning, eos.atDensity(density, temperature, burning),
+        return new MicrophysicsPoint(composition, burning, eos.atDensity(density, temperature, burning),
                 opacity.rosselandMean(density, temperature, burning),
                 nuclear.burn(density, temperature, burning));
     }

@@ -7,6 +7,7 @@ import java.util.Locale;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.convgrid.engine.physics.MicrophysicsPoint;
+import org.convgrid.output.CsvNumbers;
 
 /** Writes the {@code probe} columns (conventions.md, "probe output") as CSV or as a readable table. */
 public final class MicrophysicsPointWriter {
@@ -41,8 +42,8 @@ public final class MicrophysicsPointWriter {
         List<Double> v = new ArrayList<>();
         v.add(p.eos().temperature());
         v.add(p.eos().density());
-        v.add(p.composition().x());
-        v.add(p.composition().z());
+        v.add(p.requested().x());
+        v.add(p.requested().z());
         v.add(p.eos().pressure());
         v.add(p.eos().gasPressureFraction());
         v.add(p.eos().mu());
@@ -57,7 +58,7 @@ public final class MicrophysicsPointWriter {
         v.add(p.burning().epsPp());
         v.add(p.burning().epsCno());
         v.add(p.eos().eta());
-        v.add(p.composition().y());
+        v.add(p.requested().y());
         v.add(p.composition().he3());
         v.add(p.eos().internalEnergy());
         v.add(p.eos().cv());
@@ -69,6 +70,6 @@ public final class MicrophysicsPointWriter {
     }
 
     private static String format(double value) {
-        return String.format(Locale.ROOT, "%.6g", value);
+        return CsvNumbers.format(value);
     }
 }

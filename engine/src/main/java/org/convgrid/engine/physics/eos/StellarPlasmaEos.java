@@ -1,0 +1,194 @@
+package org.convgrid.engine.physics.eos;
+
+import org.convgrid.engine.error.ConvgridException;
+import org.convgrid.engine.error.ErrorKind;
+import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.state.MetalMixture;
+import org.convgrid.engine.units.Constants;
+
+/**
+ * The default equation of state for main-sequence stars: ideal ions (and neutral atoms) + black-body radiation +
+ * non-relativistic electrons of arbitrary degeneracy (Fermi-Dirac, formulas.md 1.3) + ionisation equilibrium of H,
+ * He and the metals + pressure ionisation + a Coulomb correction.
+ *
+ * <p><b>Ionisation.</b> Saha with the degeneracy-aware electron factor, n_{r+1}/n_r = (U_{r+1}/U_r)
+ * exp(-eta - chi_r/kT) (formulas.md 1.4; the coupling used by Eggleton, Faulkner &amp; Flannery 1973), with
+ * ground-state partition functions; metals as described in {@link PlasmaElements}. eta is found from charge
+ * neutrality by safeguarded Newton iteration on ln n_e(FD) - ln n_e(ions), which is monotonic in eta.
+ *
+ * <p><b>Pressure ionisation.</b> Occupation probabilities in the spirit of Hummer &amp; Mihalas 1988 (ApJ 331, 794):
+ * the weight of every bound state is multiplied by w = exp(-(4 pi/3) r^3 n_nuc), a hard-sphere term with all nuclei
+ * as point perturbers (the simplest form of their neutral-perturber term; the charged-microfield term is omitted).
+ * Because w depends on density only through n_nuc, the free energy is F_ideal + kT sum_s N_s xi_s with
+ * xi_s = -ln w_s, and consistency requires the extra pressure kT sum_s n_s xi_s (and no extra energy), which is
+ * included. Bound hydrogen (r = 1.5 a_0) disappears near rho ~ 1-10 g cm^-3, so M-dwarf interiors are ionised.
+ *
+ * <p><b>Coulomb.</b> Chabrier &amp; Potekhin 1998 one-component-plasma free energy (see {@link CoulombPlasma}) per
+ * nucleus, at an effective coupling whose Debye-Huckel limit equals the full Debye-Huckel correction with ion and
+ * (partially degenerate) electron screening (formulas.md 1.7); so it is Debye-Huckel at small Gamma and saturates
+ * like the OCP (~ -0.9 Gamma) at large Gamma instead of diverging. The ions' sum n_j Z_j^2 is approximated by
+ * z2 n_e with z2 = sum Y_j Z_j^2 / sum Y_j Z_j at full ionisation, so the term depends on the state only through
+ * the free-electron density: it vanishes in neutral gas, and its chemical potential dF_C/dN_e enters the Saha
+ * balance (a Debye-type lowering of every ionisation potential), which keeps P and u exactly consistent.
+ *
+ * <p><b>Energy zero</b>: neutral atoms at rest, so u includes the ionisation energy. <b>Derivatives</b>: implicit
+ * differentiation of the neutrality condition, d eta = -(dR/dx)/(dR/d eta) dx, with partial derivatives at fixed
+ * eta taken by centred differences of the closed-form P, u and R (no re-solve, so no solver noise); the remaining
+ * quantities follow from the identities of formulas.md 1.5. Immutable and thread-safe.
+ */
+public final class StellarPlasmaEos implements EquationOfState {
+
+    /** Newton budget of the neutrality solve. */
+    public static final int SOLVE_BUDGET = 100;
+    /** Convergence of the neutrality solve: |d eta| below this. */
+    public static final double ETA_TOLERANCE = 1.0e-11;
+    /** Domain: density, g cm^-3. */
+    public static final double MIN_DENSITY = 1.0e-16;
+    public static final double MAX_DENSITY = 1.0e7;
+    /** Domain: temperature, K. */
+    public static final double MIN_TEMPERATURE = 1.0e3;
+    public static final double MAX_TEMPERATURE = 1.0e9;
+    /** Step of the centred differences at fixed eta (in eta, ln rho and ln T). */
+    static final double STEP = 1.0e-5;
+    private static final double MAX_NEWTON_STEP = 30.0;
+    /** Re-reference the Saha constants when eta moves this far (see PlasmaPoint.LN_CLIP). */
+    private static final double REREFERENCE = 100.0;
+
+    private final PlasmaElements elements;
+    private final boolean pressureIonisation;
+    private final boolean coulombCorrection;
+
+    /** Grevesse &amp; Sauval 1998 metals, pressure ionisation and Coulomb correction on. */
+    public StellarPlasmaEos() {
+        this(MetalMixture.GS98, true, true);
+    }
+
+    /**
+     * @param mixture metal mixture (every element must have ionisation data)
+     * @param pressureIonisation include the occupation-probability term
+     * @param coulombCorrection include the Coulomb correction
+     */
+    public StellarPlasmaEos(MetalMixture mixture, boolean pressureIonisation, boolean coulombCorrection) {
+        this.elements = new PlasmaElements(mixture);
+        this.pressureIonisation = pressureIonisation;
+        this.coulombCorrection = coulombCorrection;
+    }
+
+    /** Ideal plasma with Saha ionisation only: no pressure ionisation and no Coulomb term. */
+    public static StellarPlasmaEos idealSaha() {
+        return new StellarPlasmaEos(MetalMixture.GS98, false, false);
+    }
+
+    @Override
+    public EosState atDensity(double density, double temperature, Composition composition) {
+        PlasmaPoint p = solved(density, temperature, composition);
+        double eta = p.lastEta;
+        double pressure = p.pressure;
+        double energy = p.energy;
+        double electrons = p.electrons;
+        double radiation = p.radiationPressure();
+
+        p.evaluate(eta + STEP);
+        double pUp = p.pressure;
+        double uUp = p.energy;
+        double rUp = p.residual;
+        p.evaluate(eta - STEP);
+        double slope = (rUp - p.residual) / (2 * STEP);
+        double dPdEta = (pUp - p.pressure) / (2 * STEP);
+        double dudEta = (uUp - p.energy) / (2 * STEP);
+
+        p.prepare(density * Math.exp(STEP), temperature, p.reference);
+        p.evaluate(eta);
+        rUp = p.residual;
+        pUp = p.pressure;
+        p.prepare(density * Math.exp(-STEP), temperature, p.reference);
+        p.evaluate(eta);
+        double dEtaDlnRho = -(rUp - p.residual) / (2 * STEP) / slope;
+        double chiRho = ((pUp - p.pressure) / (2 * STEP) + dPdEta * dEtaDlnRho) / pressure;
+
+        p.prepare(density, temperature * Math.exp(STEP), p.reference);
+        p.evaluate(eta);
+        rUp = p.residual;
+        pUp = p.pressure;
+        uUp = p.energy;
+        p.prepare(density, temperature * Math.exp(-STEP), p.reference);
+        p.evaluate(eta);
+        double dEtaDlnT = -(rUp - p.residual) / (2 * STEP) / slope;
+        double chiT = ((pUp - p.pressure) / (2 * STEP) + dPdEta * dEtaDlnT) / pressure;
+        double cv = ((uUp - p.energy) / (2 * STEP) + dudEta * dEtaDlnT) / temperature;
+
+        return ThermoIdentities.complete(density, temperature, pressure, energy, chiRho, chiT, cv,
+                1.0 / (p.nuclei() + electrons), electrons, eta, (pressure - radiation) / pressure);
+    }
+
+    @Override
+    public EosState atPressure(double pressure, double temperature, Composition composition) {
+        ConvgridException.requireInRange("temperature", temperature, MIN_TEMPERATURE, MAX_TEMPERATURE, "K");
+        double radiation = Constants.A_RAD * Math.pow(temperature, 4) / 3.0;
+        if (!(pressure > radiation)) {
+            throw new ConvgridException(ErrorKind.OUT_OF_RANGE, String.format(
+                    "pressure %s dyn cm^-2 does not exceed the radiation pressure %s dyn cm^-2 at T = %s K",
+                    pressure, radiation, temperature), "pressure", pressure, radiation, Double.MAX_VALUE);
+        }
+        PlasmaPoint p = new PlasmaPoint(elements, pressureIonisation, coulombCorrection, composition);
+        // Ideal fully ionised gas as the first guess (the inversion brackets and corrects it).
+        double guess = (pressure - radiation) * Constants.M_U
+                / (Constants.K_B * temperature * (p.nuclei() + p.electronsFullyIonised()));
+        guess = Math.max(MIN_DENSITY, Math.min(MAX_DENSITY, guess));
+        return DensityInversion.invert(this, pressure, temperature, composition, guess);
+    }
+
+    /** The ionisation equilibrium at (rho, T): degeneracy, H and He ionisation fractions, free electrons. */
+    public IonisationState ionisation(double density, double temperature, Composition composition) {
+        PlasmaPoint p = solved(density, temperature, composition);
+        return new IonisationState(p.lastEta, p.hydrogenIonised, p.heliumSingle, p.heliumDouble, p.electrons);
+    }
+
+    private PlasmaPoint solved(double density, double temperature, Composition composition) {
+        ConvgridException.requireInRange("density", density, MIN_DENSITY, MAX_DENSITY, "g cm^-3");
+        ConvgridException.requireInRange("temperature", temperature, MIN_TEMPERATURE, MAX_TEMPERATURE, "K");
+        PlasmaPoint p = new PlasmaPoint(elements, pressureIonisation, coulombCorrection, composition);
+        double eta = initialEta(p.electronsFullyIonised() * density
+                / (Constants.M_U * PlasmaPoint.ELECTRON_DENSITY_CONSTANT * Math.pow(temperature, 1.5)));
+        p.prepare(density, temperature, eta);
+        double lo = -PlasmaPoint.ETA_LIMIT;
+        double hi = PlasmaPoint.ETA_LIMIT;
+        double step = Double.NaN;
+        for (int i = 0; i < SOLVE_BUDGET; i++) {
+            p.evaluate(eta);
+            if (p.residual > 0.0) {
+                hi = eta;
+            } else {
+                lo = eta;
+            }
+            step = -p.residual / p.residualSlope;
+            step = Math.max(-MAX_NEWTON_STEP, Math.min(MAX_NEWTON_STEP, step));
+            double next = eta + step;
+            if (!(next > lo && next < hi)) {
+                next = 0.5 * (lo + hi);
+            }
+            if (Math.abs(next - p.reference) > REREFERENCE) {
+                p.prepare(density, temperature, next);
+            }
+            if (Math.abs(next - eta) < ETA_TOLERANCE) {
+                p.evaluate(next);
+                p.lastEta = next;
+                return p;
+            }
+            eta = next;
+        }
+        throw new ConvgridException(ErrorKind.NOT_CONVERGED, String.format(
+                "charge neutrality not solved in %d iterations at rho = %s g cm^-3, T = %s K (eta %s, step %s)",
+                SOLVE_BUDGET, density, temperature, eta, step), density, temperature, eta, step);
+    }
+
+    /**
+     * Approximate inverse of F_{1/2}: ln u + u/sqrt(8) with u = 2F/sqrt(pi) (leading terms of Joyce &amp; Dixon
+     * 1977, Appl. Phys. Lett. 31, 354) when non-degenerate, (3F/2)^(2/3) (Sommerfeld leading term) otherwise.
+     */
+    static double initialEta(double f) {
+        double u = 2.0 * f / Math.sqrt(Math.PI);
+        double eta = u < 4.0 ? Math.log(u) + u / Math.sqrt(8.0) : Math.pow(1.5 * f, 2.0 / 3.0);
+        return Math.max(-PlasmaPoint.ETA_LIMIT + 1.0, Math.min(PlasmaPoint.ETA_LIMIT - 1.0, eta));
+    }
+}
