@@ -50,6 +50,7 @@ public final class StructureEquations implements DifferenceSystem {
     private final double[] nablaMu;
     private final ExtraEnergy extra;
     private final double burningFactor;
+    private final ShellComposition compositionRule;
     private final int n;
 
     private final EosState[] eos;
@@ -83,6 +84,19 @@ public final class StructureEquations implements DifferenceSystem {
      */
     public StructureEquations(MassMesh mesh, Composition[] composition, PhysicsSet physics, double luminosityScale,
                               double[] nablaMu, ExtraEnergy extra, double burningFactor) {
+        this(mesh, composition, physics, luminosityScale, nablaMu, extra, burningFactor, null);
+    }
+
+    /**
+     * As above, with the composition of every shell recomputed from its trial state at each evaluation
+     * ({@code compositionRule}, e.g. 3He and CN at local equilibrium for a zero-age model), or kept fixed when
+     * the rule is null. The Jacobian ignores the composition's dependence on the state (it is weak for the
+     * equilibrium abundances), so the Newton iteration converges to the self-consistent model.
+     */
+    public StructureEquations(MassMesh mesh, Composition[] composition, PhysicsSet physics, double luminosityScale,
+                              double[] nablaMu, ExtraEnergy extra, double burningFactor,
+                              ShellComposition compositionRule) {
+        this.compositionRule = compositionRule;
         this.burningFactor = burningFactor;
         this.mesh = mesh;
         this.composition = composition.clone();
@@ -174,7 +188,8 @@ public final class StructureEquations implements DifferenceSystem {
         double lum = y[4 * k + 3] * luminosityScale;
         double rho = Math.exp(lnRho);
         double t = Math.exp(lnT);
-        Composition c = composition[k];
+        Composition c = compositionRule == null ? composition[k] : compositionRule.at(k, rho, t);
+        composition[k] = c;
         EosState s = physics.eos().atDensity(rho, t, c);
         OpacityValue op = physics.opacity().rosselandMean(rho, t, c);
         BurningRate burn = physics.nuclear().burn(rho, t, c);

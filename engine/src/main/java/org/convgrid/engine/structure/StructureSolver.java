@@ -69,9 +69,21 @@ public final class StructureSolver {
      */
     public StellarModel relax(ModelState guess, ExtraEnergy extra, double[] nablaMu,
                               HenyeySolver.Settings solveSettings, double burningFactor) {
+        return relax(guess, extra, nablaMu, solveSettings, burningFactor, null);
+    }
+
+    /**
+     * Relaxes with the shell compositions recomputed from the trial state at every evaluation
+     * ({@code compositionRule}; null keeps the guess's compositions).
+     *
+     * @throws SolveFailedException with the report when the relaxation does not converge
+     */
+    public StellarModel relax(ModelState guess, ExtraEnergy extra, double[] nablaMu,
+                              HenyeySolver.Settings solveSettings, double burningFactor,
+                              ShellComposition compositionRule) {
         double scale = Math.abs(guess.surfaceLuminosity());
         StructureEquations eq = new StructureEquations(guess.mesh(), guess.compositions(), physics, scale,
-                nablaMu, extra, burningFactor);
+                nablaMu, extra, burningFactor, compositionRule);
         HenyeySolver.Result result = henyey.solve(eq, eq.unknowns(guess), solveSettings);
         if (!result.report().converged()) {
             throw new SolveFailedException("structure relaxation failed", result.report());

@@ -6,22 +6,21 @@ import org.convgrid.engine.structure.ExtraEnergy;
 import org.convgrid.engine.structure.HenyeySolver;
 import org.convgrid.engine.structure.MeshPlanner;
 import org.convgrid.engine.structure.ModelState;
+import org.convgrid.engine.structure.ShellComposition;
 import org.convgrid.engine.structure.SolveFailedException;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.structure.StructureSolver;
 
 /**
- * Builds one homogeneous zero-age main-sequence model in thermal equilibrium from a starting state: relax,
- * redistribute the mesh while it is uneven ({@link MeshPlanner}), then put 3He and the CN isotopes at their
- * local equilibrium abundances ({@link org.convgrid.engine.physics.nuclear.NuclearNetwork#equilibrium}) shell
- * by shell and relax again until the luminosity no longer changes. Immutable and thread-safe.
+ * Builds one homogeneous zero-age main-sequence model in thermal equilibrium from a starting state, with 3He
+ * and the CN isotopes at their local equilibrium abundances
+ * ({@link org.convgrid.engine.physics.nuclear.NuclearNetwork#equilibrium}) recomputed from the trial state of
+ * every shell at each Newton iteration (so structure and abundances converge together), and the mesh
+ * redistributed and the model relaxed again while the mesh is uneven ({@link MeshPlanner}). Immutable and
+ * thread-safe.
  */
 public final class ZamsBuilder {
 
-    /** Composition-equilibrium passes allowed. */
-    public static final int MAX_COMPOSITION_PASSES = 4;
-    /** The composition passes stop when L changes by less than this fraction. */
-    public static final double COMPOSITION_TOLERANCE = 1.0e-5;
     /** Remesh-and-relax passes allowed. */
     public static final int MAX_REMESH_PASSES = 3;
     /** Newton budget of a relaxation that starts from the polytropic guess. */
@@ -89,7 +88,7 @@ public final class ZamsBuilder {
         int spent = 0;
         StellarModel model;
         try {
-            model = solver.relax(guess, ExtraEnergy.NONE, null, cold, Math.exp(lnFactor));
+            model = solver.relax(guess, ExtraEnergy.NONE, null, cold, Math.exp(lnFactor), equilibrium(composition));
         } catch (SolveFailedException e) {
             throw new SolveFailedException("cold start at burning factor " + Math.exp(lnFactor), e.report());
         }
@@ -98,7 +97,8 @@ public final class ZamsBuilder {
         while (lnFactor != 0.0) {
             double next = Math.abs(lnFactor) <= step ? 0.0 : lnFactor - Math.copySign(step, lnFactor);
             try {
-                model = solver.relax(model.state(), ExtraEnergy.NONE, null, settings, Math.exp(next));
+                model = solver.relax(model.state(), ExtraEnergy.NONE, null, settings, Math.exp(next),
+                        equilibrium(composition));
                 spent += model.report().iterations();
                 lnFactor = next;
                 step = Math.min(HOMOTOPY_STEP, 2.0 * step);
@@ -126,27 +126,15 @@ public final class ZamsBuilder {
 
     private ZamsModel build(ModelState start, Composition composition, HenyeySolver.Settings first,
                             boolean cold) {
+        ShellComposition rule = equilibrium(composition);
         int spent = 0;
         StellarModel model;
         try {
-            model = solver.relax(start, ExtraEnergy.NONE, null, first);
+            model = solver.relax(start, ExtraEnergy.NONE, null, first, 1.0, rule);
             spent += model.report().iterations();
             for (int pass = 0; pass < MAX_REMESH_PASSES && planner.needsRemesh(model); pass++) {
-                model = solver.relax(planner.remesh(model), ExtraEnergy.NONE, null, settings);
+                model = solver.relax(planner.remesh(model), ExtraEnergy.NONE, null, settings, 1.0, rule);
                 spent += model.report().iterations();
-            }
-            for (int pass = 0; pass < MAX_COMPOSITION_PASSES; pass++) {
-                Composition[] equilibrium = equilibriumCompositions(model, composition);
-                if (equilibrium == null) {
-                    break;
-                }
-                double before = model.global().luminosity();
-                model = solver.relax(model.state().withCompositions(equilibrium), ExtraEnergy.NONE, null,
-                        settings);
-                spent += model.report().iterations();
-                if (Math.abs(model.global().luminosity() / before - 1.0) < COMPOSITION_TOLERANCE) {
-                    break;
-                }
             }
         } catch (SolveFailedException e) {
             throw new SolveFailedException("zero-age model of " + start.mesh().totalMass() + " g",
@@ -155,16 +143,8 @@ public final class ZamsBuilder {
         return new ZamsModel(model, composition, spent, cold);
     }
 
-    /** Equilibrium compositions per shell, or null when they equal the current ones. */
-    private Composition[] equilibriumCompositions(StellarModel model, Composition initial) {
-        int n = model.state().size();
-        Composition[] result = new Composition[n];
-        boolean changed = false;
-        for (int k = 0; k < n; k++) {
-            result[k] = physics.nuclear().equilibrium(model.profile().density(k), model.profile().temperature(k),
-                    initial);
-            changed |= !result[k].equals(model.state().composition(k));
-        }
-        return changed ? result : null;
+    /** 3He and CN at local equilibrium from the initial composition (the zero-age assumption). */
+    private ShellComposition equilibrium(Composition initial) {
+        return (shell, density, temperature) -> physics.nuclear().equilibrium(density, temperature, initial);
     }
 }

@@ -9,13 +9,13 @@ import org.junit.jupiter.api.Test;
 class ScratchZamsTest {
     @Test
     void walk() {
-        var eos = new StandInPhysics.IdealGas();
-        var opacity = org.convgrid.engine.physics.opacity.AnalyticCompositeOpacity.standard();
-        PhysicsSet physics = new PhysicsSet(eos, opacity, new org.convgrid.engine.physics.nuclear.HydrogenBurningNetwork(),
-                new org.convgrid.engine.convection.MixingLengthTheory(1.8), org.convgrid.engine.convection.StabilityCriterion.SCHWARZSCHILD,
-                new org.convgrid.engine.physics.atmosphere.AtmosphereTable(new org.convgrid.engine.physics.atmosphere.GreyAtmosphere(eos, opacity)), 0.0);
+        PhysicsSet physics = null;
         for (double z : new double[] {0.02, 1e-4, 0.04}) {
-            ZamsTrack track = new ZamsTrack(new ZamsBuilder(physics), Composition.scaledSolar(0.74 - 2 * z, z));
+            Composition comp = Composition.scaledSolar(0.74 - 2 * z, z);
+            long t0 = System.nanoTime();
+            physics = org.convgrid.engine.physics.StandardPhysics.create(org.convgrid.engine.batch.PhysicsOptions.DEFAULT, comp);
+            System.out.printf("physics %.0f ms%n", (System.nanoTime() - t0) / 1e6);
+            ZamsTrack track = new ZamsTrack(new ZamsBuilder(physics), comp);
             for (double m : new double[] {1.0, 1.3, 2, 3, 5, 10, 20, 40, 70, 100}) {
                 run(track, m);
             }
