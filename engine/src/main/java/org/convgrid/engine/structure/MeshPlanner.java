@@ -26,9 +26,8 @@ public final class MeshPlanner {
     private static final double STEP_LUMINOSITY = 0.02;
     private static final double BOUNDARY_COST = 2.0;
     private static final double MINIMUM_COST = 1.0e-6;
-    /** Bounds of the ln(1 - m/M) span given to the outermost interval when it is split. */
-    private static final double MIN_OUTER_SPAN = 0.1;
-    private static final double MAX_OUTER_SPAN = 10.0;
+    /** Smallest D ln P assumed for the outermost interval when it is split. */
+    private static final double MIN_OUTER_SPAN = 1.0e-3;
 
     private final int points;
 
@@ -65,10 +64,11 @@ public final class MeshPlanner {
             cumulative[k] = cumulative[k - 1] + cost[k - 1];
         }
         MassMesh mesh = old.mesh();
-        // in the outer envelope P ~ g (M - m)/(4 pi R^2): the outermost interval spans about D ln P in ln(M - m)
+        // in the outermost interval P - P_surface grows in proportion to M - m (hydrostatic equilibrium at
+        // nearly constant g and r), so a point a fraction w of the way in ln P lies at
+        // (M - m) = (M - m_{n-2}) (exp((1 - w) d) - 1)/(exp(d) - 1), d = ln(P_{n-2}/P_surface)
         StellarProfile p = model.profile();
-        double outerSpan = Math.min(MAX_OUTER_SPAN, Math.max(MIN_OUTER_SPAN,
-                Math.abs(Math.log(p.pressure(n - 2) / p.pressure(n - 1)))));
+        double outerSpan = Math.max(MIN_OUTER_SPAN, Math.log(p.pressure(n - 2) / p.pressure(n - 1)));
         double[] q = new double[points];
         double[] e = new double[points];
         Composition[] comp = new Composition[points];
@@ -88,8 +88,8 @@ public final class MeshPlanner {
             }
             if (k == n - 2) {
                 // outermost interval: ln(1 - m/M) runs on past the last interior point
-                double lnE = Math.log(mesh.exteriorFraction(k)) - w * outerSpan;
-                e[j] = j == points - 1 ? 0.0 : Math.exp(lnE);
+                e[j] = j == points - 1 ? 0.0 : mesh.exteriorFraction(k)
+                        * Math.expm1((1.0 - w) * outerSpan) / Math.expm1(outerSpan);
                 q[j] = 1.0 - e[j];
             } else {
                 double u = (1 - w) * mesh.logit(k) + w * mesh.logit(k + 1);

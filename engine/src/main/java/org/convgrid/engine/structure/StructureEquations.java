@@ -39,6 +39,11 @@ public final class StructureEquations implements DifferenceSystem {
 
     /** Relative step of the one-sided differences in ln rho, ln T and ln r. */
     static final double DIFFERENCE_STEP = 1.0e-6;
+    /**
+     * Where eps M / L_scale exceeds this, the derivatives of eps include the change of slaved abundances
+     * (one-sided differences); elsewhere burning is too weak for it to matter.
+     */
+    static final double SLAVED_BURNING_THRESHOLD = 1.0e-4;
     private static final double FOUR_PI = 4.0 * Math.PI;
     private static final double RADIATIVE_CONSTANT = 3.0 / (16.0 * Math.PI * Constants.A_RAD * Constants.C
             * Constants.G);
@@ -206,6 +211,16 @@ public final class StructureEquations implements DifferenceSystem {
         }
         dEps[2 * k] = nuclear * burn.dlnEpsDlnRho();
         dEps[2 * k + 1] = nuclear * burn.dlnEpsDlnT();
+        if (compositionRule != null && nuclear * mesh.totalMass() > SLAVED_BURNING_THRESHOLD * luminosityScale) {
+            // the slaved abundances (e.g. equilibrium 3He) change eps with the state: differentiate through them
+            double h = DIFFERENCE_STEP;
+            double rhoUp = rho * Math.exp(h);
+            double tUp = t * Math.exp(h);
+            dEps[2 * k] = (burningFactor * physics.nuclear().burn(rhoUp, t, compositionRule.at(k, rhoUp, t)).eps()
+                    - nuclear) / h;
+            dEps[2 * k + 1] = (burningFactor * physics.nuclear().burn(rho, tUp, compositionRule.at(k, rho, tUp)).eps()
+                    - nuclear) / h;
+        }
         boolean convective = convection[k] != null && convection[k].convective();
         if (!convective && extra == ExtraEnergy.NONE) {
             // radiative: nabla = C kappa L P / (m T^4), differentiated analytically

@@ -19,7 +19,7 @@ import org.convgrid.engine.units.Constants;
 public final class ZamsTrack {
 
     /** Largest |ln(M'/M)| of one homology step. */
-    public static final double MAX_STEP = 0.15;
+    public static final double MAX_STEP = 0.3;
     /** Smallest step tried before a request is given up. */
     public static final double MIN_STEP = 0.004;
     /** Mass of the fallback cold start, g (the Sun: the polytropic guess suits it best). */

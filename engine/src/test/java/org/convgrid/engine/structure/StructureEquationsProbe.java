@@ -3,9 +3,9 @@ package org.convgrid.engine.structure;
 import org.convgrid.engine.units.Constants;
 
 public final class StructureEquationsProbe {
-    public static void trace(org.convgrid.engine.physics.PhysicsSet physics, ModelState guess, int its, double step) {
+    public static void trace(org.convgrid.engine.physics.PhysicsSet physics, ModelState guess, int its, double step, ShellComposition rule) {
         StructureEquations eq = new StructureEquations(guess.mesh(), guess.compositions(), physics,
-                guess.surfaceLuminosity(), null, ExtraEnergy.NONE);
+                guess.surfaceLuminosity(), null, ExtraEnergy.NONE, 1.0, rule);
         double[] y = eq.unknowns(guess);
         HenyeySolver h = new HenyeySolver();
         int n = guess.size();
