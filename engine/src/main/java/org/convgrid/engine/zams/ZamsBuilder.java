@@ -23,6 +23,8 @@ public final class ZamsBuilder {
 
     /** Remesh-and-relax passes allowed. */
     public static final int MAX_REMESH_PASSES = 3;
+    /** Newton budget of the first relaxation from a neighbour's seed: fail fast so the walk can halve its step. */
+    public static final int SEEDED_BUDGET = 25;
     /** Newton budget of a relaxation that starts from the polytropic guess. */
     public static final int COLD_START_BUDGET = 150;
     /** Largest ln step per Newton iteration from the polytropic guess. */
@@ -121,7 +123,9 @@ public final class ZamsBuilder {
      * @throws SolveFailedException when a relaxation fails (its report counts every iteration spent)
      */
     public ZamsModel fromSeed(ModelState seed, Composition composition) {
-        return build(seed, composition, settings, false);
+        // a good seed converges in a handful of iterations; a poor one is better retried with a smaller step
+        return build(seed, composition,
+                settings.withIterationBudget(Math.min(settings.iterationBudget(), SEEDED_BUDGET)), false);
     }
 
     private ZamsModel build(ModelState start, Composition composition, HenyeySolver.Settings first,

@@ -24,6 +24,6 @@ class ScratchTraceTest {
                     p.nabla(k), p.nablaRad(k), p.nablaAd(k), p.eps(k));
         }
         ModelState seed = HomologySeeder.scale(z.model().state(), Double.parseDouble(System.getProperty("m1", "1.05")) * Constants.M_SUN, 0.8, 3.5, null);
-        StructureEquationsProbe.trace(physics, seed, 30, 0.2, (k, rho, t) -> physics.nuclear().equilibrium(rho, t, c));
+        StructureEquationsProbe.trace(physics, seed, 30, Double.parseDouble(System.getProperty("step", "0.2")), (k, rho, t) -> physics.nuclear().equilibrium(rho, t, c));
     }
 }
