@@ -26,7 +26,9 @@ public final class ZamsBuilder {
     /** Newton budget of the first relaxation from a neighbour's seed: fail fast so the walk can halve its step. */
     public static final int SEEDED_BUDGET = 25;
     /** Newton budget of a relaxation that starts from the polytropic guess. */
-    public static final int COLD_START_BUDGET = 150;
+    public static final int COLD_START_BUDGET = 80;
+    /** Above this mass (g) a cold start tries the burning-rate homotopy before the direct relaxation. */
+    public static final double HOMOTOPY_FIRST_MASS = 1.8 * org.convgrid.engine.units.Constants.M_SUN;
     /** Largest ln step per Newton iteration from the polytropic guess. */
     public static final double COLD_START_MAX_STEP = 0.3;
 
@@ -58,8 +60,9 @@ public final class ZamsBuilder {
     }
 
     /**
-     * A model from the polytropic guess: first relaxed directly; if that fails, by a homotopy in the burning
-     * rate (relaxed with eps scaled to the guessed luminosity, then the factor walked back to one).
+     * A model from the polytropic guess, relaxed directly or by a homotopy in the burning rate (relaxed with eps
+     * scaled to the guessed luminosity, then the factor walked back to one); the other way is tried when the
+     * first fails.
      *
      * @param mass g
      * @throws SolveFailedException when a relaxation fails (its report counts every iteration spent)
@@ -68,18 +71,22 @@ public final class ZamsBuilder {
         ModelState guess = new PolytropicGuess(planner.points()).guess(mass, composition);
         HenyeySolver.Settings cold = new HenyeySolver.Settings(settings.tolerance(), COLD_START_MAX_STEP,
                 COLD_START_BUDGET);
-        int direct;
-        try {
-            return build(guess, composition, cold, true);
-        } catch (SolveFailedException e) {
-            direct = e.report().iterations();
+        // the direct relaxation works best for low masses, the homotopy for high ones (measured)
+        boolean homotopyFirst = mass > HOMOTOPY_FIRST_MASS;
+        int spent = 0;
+        SolveFailedException last = null;
+        for (int attempt = 0; attempt < 2; attempt++) {
+            try {
+                ZamsModel z = (attempt == 0) == homotopyFirst ? homotopy(guess, composition, cold)
+                        : build(guess, composition, cold, true);
+                return new ZamsModel(z.model(), composition, z.iterations() + spent, true);
+            } catch (SolveFailedException e) {
+                spent += e.report().iterations();
+                last = e;
+            }
         }
-        try {
-            ZamsModel z = homotopy(guess, composition, cold);
-            return new ZamsModel(z.model(), composition, z.iterations() + direct, true);
-        } catch (SolveFailedException e) {
-            throw new SolveFailedException("cold start of " + mass + " g", e.report().plusIterations(direct));
-        }
+        throw new SolveFailedException("cold start of " + mass + " g",
+                last.report().plusIterations(spent - last.report().iterations()));
     }
 
     private ZamsModel homotopy(ModelState guess, Composition composition, HenyeySolver.Settings cold) {

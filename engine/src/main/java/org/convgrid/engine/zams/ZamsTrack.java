@@ -20,6 +20,8 @@ public final class ZamsTrack {
 
     /** Largest |ln(M'/M)| of one homology step. */
     public static final double MAX_STEP = 0.3;
+    /** A step that converged within this many iterations lets the next step double. */
+    public static final int EASY_ITERATIONS = 8;
     /** Smallest step tried before a request is given up. */
     public static final double MIN_STEP = 0.004;
     /** Mass of the fallback cold start, g (the Sun: the polytropic guess suits it best). */
@@ -94,7 +96,9 @@ public final class ZamsTrack {
                 if (target == mass) {
                     return ZamsResult.success(z, spent);
                 }
-                step = Math.min(MAX_STEP, 2.0 * step);
+                if (z.iterations() <= EASY_ITERATIONS) {
+                    step = Math.min(MAX_STEP, 2.0 * step);
+                }
             } catch (SolveFailedException e) {
                 spent += e.report().iterations();
                 step *= 0.5;
