@@ -9,8 +9,9 @@ import org.convgrid.engine.structure.StellarModel;
  * Starting guesses for a new mass from converged neighbours by homology scaling at fixed m/M
  * (Kippenhahn, Weigert &amp; Weiss 2012, ch. 20; formulas.md 6.5): with s = M'/M,
  * r' = r s^xR, P' = P s^(2 - 4 xR), T' = T s^(1 - xR), rho' = rho s^(1 - 3 xR), L' = L s^xL.
- * The exponents are measured from the two nearest converged models (finite differences in ln M) when two are
- * given, otherwise the defaults below are used. Immutable and thread-safe.
+ * The exponents are measured from the two nearest converged models (finite differences in ln M), shell by shell
+ * when the second model is close enough ({@link #extrapolate}), otherwise globally from their radii and
+ * luminosities, or the defaults below when only one model is known. Immutable and thread-safe.
  */
 public final class HomologySeeder {
 
@@ -18,19 +19,32 @@ public final class HomologySeeder {
     public static final double DEFAULT_RADIUS_EXPONENT = 0.8;
     /** Luminosity exponent when only one neighbour is known (rounded textbook mass-luminosity slope). */
     public static final double DEFAULT_LUMINOSITY_EXPONENT = 3.5;
+    /** Neighbours closer than this in ln M are not used to measure exponents shell by shell. */
+    public static final double MIN_NEIGHBOUR_SPACING = 1.0e-3;
+    /** Shell-by-shell extrapolation reaches at most this many neighbour spacings; beyond, global homology. */
+    public static final double MAX_EXTRAPOLATION = 2.0;
     private static final double MIN_RADIUS_EXPONENT = 0.0;
     private static final double MAX_RADIUS_EXPONENT = 1.5;
     private static final double MIN_LUMINOSITY_EXPONENT = 0.5;
     private static final double MAX_LUMINOSITY_EXPONENT = 6.0;
 
     /**
-     * Scales {@code nearest} to {@code mass}, with exponents measured against {@code other} when not null. The
+     * Scales {@code nearest} to {@code mass}. With a second neighbour {@code other} not too far away the
+     * exponents are measured shell by shell ({@link #extrapolate}); otherwise the global homology relations are
+     * used with xR and xL measured from the two models' radii and luminosities (or the defaults). The
      * shells keep the neighbour's compositions (with 3He and CN already near their equilibrium values), which
      * starts the new model closer to its own zero-age state than the initial composition would.
      *
      * @param mass target mass, g
      */
     public ModelState seed(StellarModel nearest, StellarModel other, double mass) {
+        if (other != null) {
+            double spacing = Math.abs(Math.log(nearest.mass() / other.mass()));
+            double reach = Math.abs(Math.log(mass / nearest.mass()));
+            if (spacing >= MIN_NEIGHBOUR_SPACING && reach <= MAX_EXTRAPOLATION * spacing) {
+                return extrapolate(nearest, other, mass);
+            }
+        }
         double xR = DEFAULT_RADIUS_EXPONENT;
         double xL = DEFAULT_LUMINOSITY_EXPONENT;
         if (other != null && other.mass() != nearest.mass()) {
@@ -66,6 +80,51 @@ public final class HomologySeeder {
             comp[k] = composition == null ? state.composition(k) : composition;
         }
         return new ModelState(mesh, comp, lnR, lnRho, lnT, lum);
+    }
+
+    /**
+     * Per-shell linear extrapolation in ln M at fixed m/M from the two nearest models (the homology relations
+     * with exponents measured shell by shell): ln r, ln rho, ln T and L of {@code nearest} are moved along the
+     * difference to {@code other}, interpolated onto the nearest model's mesh in ln(m/(M - m)).
+     *
+     * @param mass target mass, g
+     */
+    public ModelState extrapolate(StellarModel nearest, StellarModel other, double mass) {
+        ModelState a = nearest.state();
+        ModelState b = other.state();
+        double ratio = Math.log(mass / a.mesh().totalMass()) / Math.log(a.mesh().totalMass() / b.mesh().totalMass());
+        int n = a.size();
+        double[] lnR = a.lnRadii();
+        double[] lnRho = a.lnDensities();
+        double[] lnT = a.lnTemperatures();
+        double[] lum = a.luminosities();
+        Composition[] comp = a.compositions();
+        int j = 0;
+        for (int k = 0; k < n; k++) {
+            double[] other4;
+            if (k == n - 1) {
+                int s = b.size() - 1;
+                other4 = new double[] {b.lnRadius(s), b.lnDensity(s), b.lnTemperature(s), b.luminosity(s)};
+            } else {
+                double u = a.mesh().logit(k);
+                while (j < b.size() - 2 && b.mesh().logit(j + 1) < u) {
+                    j++;
+                }
+                double ua = b.mesh().logit(j);
+                double ub = j + 1 == b.size() - 1 ? Double.POSITIVE_INFINITY : b.mesh().logit(j + 1);
+                double w = Double.isInfinite(ub) ? 0.0 : Math.max(0.0, Math.min(1.0, (u - ua) / (ub - ua)));
+                other4 = new double[] {
+                    (1 - w) * b.lnRadius(j) + w * b.lnRadius(j + 1),
+                    (1 - w) * b.lnDensity(j) + w * b.lnDensity(j + 1),
+                    (1 - w) * b.lnTemperature(j) + w * b.lnTemperature(j + 1),
+                    (1 - w) * b.luminosity(j) + w * b.luminosity(j + 1)};
+            }
+            lnR[k] += ratio * (lnR[k] - other4[0]);
+            lnRho[k] += ratio * (lnRho[k] - other4[1]);
+            lnT[k] += ratio * (lnT[k] - other4[2]);
+            lum[k] += ratio * (lum[k] - other4[3]);
+        }
+        return new ModelState(a.mesh().scaledTo(mass), comp, lnR, lnRho, lnT, lum);
     }
 
     private static double clamp(double v, double lo, double hi) {

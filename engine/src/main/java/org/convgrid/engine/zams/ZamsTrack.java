@@ -5,6 +5,7 @@ import java.util.Comparator;
 import java.util.List;
 
 import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.structure.ModelState;
 import org.convgrid.engine.structure.SolveFailedException;
 import org.convgrid.engine.structure.SolveReport;
 import org.convgrid.engine.units.Constants;
@@ -15,6 +16,9 @@ import org.convgrid.engine.units.Constants;
  * halved when a step fails. The first model comes from the polytropic guess at the requested mass, or, if that
  * fails, at {@link #ANCHOR_MASS} and is walked from there. The walk depends only on the requests and their
  * order, never on timing, so results are reproducible. Not thread-safe: one track per line and thread.
+ *
+ * <p>Typical use by a grid: one track per chunk of a line of constant composition and physics, masses requested
+ * in increasing order ({@link #solve}); {@link #solveOne} for a single request with an optional seed.
  */
 public final class ZamsTrack {
 
@@ -26,6 +30,8 @@ public final class ZamsTrack {
     public static final double MIN_STEP = 0.004;
     /** Mass of the fallback cold start, g (the Sun: the polytropic guess suits it best). */
     public static final double ANCHOR_MASS = Constants.M_SUN;
+    /** Masses closer than this relative difference are the same model. */
+    public static final double SAME_MASS = 1.0e-9;
     /** Relaxations allowed for one request (cold starts, intermediate masses and retries together). */
     public static final int ATTEMPT_BUDGET = 150;
 
@@ -37,6 +43,20 @@ public final class ZamsTrack {
     public ZamsTrack(ZamsBuilder builder, Composition composition) {
         this.builder = builder;
         this.composition = composition;
+    }
+
+    /**
+     * One request on its own: the zero-age model of {@code mass} (g), seeded from {@code seed} when given (a
+     * converged model of the same composition and physics, e.g. the previous mass of a grid line), otherwise
+     * from the polytropic guess (falling back to a walk from {@link #ANCHOR_MASS}). Never throws for a
+     * non-converging model: the result carries the report.
+     */
+    public static ZamsResult solveOne(ZamsBuilder builder, Composition composition, double mass, ZamsModel seed) {
+        ZamsTrack track = new ZamsTrack(builder, composition);
+        if (seed != null) {
+            track.add(seed);
+        }
+        return track.solve(mass);
     }
 
     /** Adds an externally converged model (same composition and physics) as a neighbour for seeding. */
@@ -55,7 +75,7 @@ public final class ZamsTrack {
      */
     public ZamsResult solve(double mass) {
         for (ZamsModel z : converged) {
-            if (z.model().mass() == mass) {
+            if (Math.abs(z.model().mass() / mass - 1.0) <= SAME_MASS) {
                 return ZamsResult.success(z, 0);
             }
         }
@@ -89,8 +109,8 @@ public final class ZamsTrack {
                     : nearest.model().mass() * Math.exp(Math.copySign(step, remaining));
             ZamsModel other = nearest(nearest.model().mass(), nearest);
             try {
-                ZamsModel z = builder.fromSeed(seeder.seed(nearest.model(), other == null ? null : other.model(),
-                        target), composition);
+                ModelState seed = seeder.seed(nearest.model(), other == null ? null : other.model(), target);
+                ZamsModel z = builder.fromSeed(seed, composition);
                 add(z);
                 spent += z.iterations();
                 if (target == mass) {
