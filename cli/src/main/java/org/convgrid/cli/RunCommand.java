@@ -132,14 +132,14 @@ final class RunCommand implements Callable<Integer> {
             line.append(" (shard ").append(plan.shard().index()).append('/').append(plan.shard().count())
                     .append(": ").append(plan.owned()).append(" of the grid's ").append(gridCount).append(')');
         }
+        line.append(" on ").append(threads).append(" thread(s) into ").append(plan.settings().directory().root());
         if (!plan.kept().ids().isEmpty()) {
-            line.append(", ").append(plan.kept().ids().size()).append(" already in the catalogue");
+            line.append("; ").append(plan.kept().ids().size()).append(" already in the catalogue");
         }
         if (plan.kept().droppedBytes() > 0) {
-            line.append(", a half-written last row (").append(plan.kept().droppedBytes()).append(" bytes) dropped");
+            line.append("; a half-written last row (").append(plan.kept().droppedBytes()).append(" bytes) dropped");
         }
-        return line.append(", on ").append(threads).append(" thread(s) into ")
-                .append(plan.settings().directory().root()).toString();
+        return line.toString();
     }
 
     static String describe(Map<ModelStatus, Long> counts) {

@@ -16,8 +16,8 @@ import org.convgrid.engine.units.Constants;
 /**
  * A stand-in for the structure solver with made-up, smooth numbers (not physics). Like homology seeding, every
  * outcome depends on the chunk's first model and on the position in the chunk, so a change in how a grid is cut
- * into chunks (threads, shards, resumes) changes the catalogue's bytes. Fully convective below 0.35 Msun, a
- * convective envelope up to 1.2 Msun, a convective core above.
+ * into chunks (threads, shards, resumes) changes the catalogue's bytes. Fully convective below 0.375 Msun, a
+ * convective envelope up to 1.225 Msun, a convective core above (between grid masses, so round-off cannot move them).
  */
 final class FakeChunkSolver implements ChunkSolver {
 
@@ -64,11 +64,11 @@ final class FakeChunkSolver implements ChunkSolver {
 
     private static ConvectiveStructure convection(ModelRequest r) {
         double m = r.mass() / Constants.M_SUN;
-        if (m < 0.35) {
+        if (m < 0.375) {
             return new ConvectiveStructure(List.of(new ConvectiveZone(0, 1, 0, 1)), StructureClass.FULLY_CONVECTIVE,
                     1, 0, 0, r.mass(), 60 * Constants.DAY, 90 * Constants.DAY);
         }
-        if (m < 1.2) {
+        if (m < 1.225) {
             double base = 0.5 + 0.49 * (m - 0.35) / 0.85;
             double radiusBase = 0.6 + 0.3 * (m - 0.35);
             return new ConvectiveStructure(List.of(new ConvectiveZone(base, 1, radiusBase, 1)),

@@ -25,7 +25,7 @@ public final class ProgressReporter implements ProgressListener {
     private final LongSupplier nanoTime;
     private final long start;
     private long lastShown;
-    private long lastPercentStep = -1;
+    private long lastPercentStep;
     private boolean drawn;
 
     /**
