@@ -23,7 +23,7 @@ public final class IoMessages {
             } else if (e instanceof AccessDeniedException) {
                 why = "permission denied";
             } else if (e instanceof FileAlreadyExistsException) {
-                why = "a file already exists there";
+                why = "already exists";
             } else if (e instanceof NotDirectoryException) {
                 why = "not a directory";
             } else {

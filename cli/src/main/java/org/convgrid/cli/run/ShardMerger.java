@@ -1,20 +1,14 @@
 package org.convgrid.cli.run;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Clock;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.Comparator;
-import java.util.HashMap;
-import java.util.LinkedHashSet;
 import java.util.List;
-import java.util.Map;
 import java.util.Objects;
-import java.util.Set;
-import org.convgrid.engine.batch.ModelRequest;
 import org.convgrid.grids.GridHash;
 import org.convgrid.grids.GridSpec;
 import org.convgrid.grids.yaml.GridFileReader;
@@ -31,9 +25,6 @@ import org.convgrid.output.manifest.RunManifestReader;
  * grid stops the merge before anything is written.
  */
 public final class ShardMerger {
-
-    /** Model ids listed per kind of problem in a refusal message. */
-    static final int IDS_SHOWN = 10;
 
     private final String toolVersion;
     private final Clock clock;
@@ -63,23 +54,11 @@ public final class ShardMerger {
             manifests.add(RunManifestReader.read(Files.readString(dir.manifest())));
         }
         GridSpec grid = commonGrid(shards, manifests);
-        Map<String, String> lines = new HashMap<>();
-        Map<String, Path> origin = new HashMap<>();
-        Set<String> duplicates = new LinkedHashSet<>();
+        ShardRows rows = new ShardRows();
         for (Path shard : shards) {
-            collect(new RunDirectory(shard).catalogue(), shard, lines, origin, duplicates);
+            rows.add(new RunDirectory(shard).catalogue(), shard);
         }
-        List<String> missing = new ArrayList<>();
-        List<String> ordered = new ArrayList<>(lines.size());
-        for (ModelRequest request : grid.requests()) {
-            String line = lines.remove(request.modelId());
-            if (line == null) {
-                missing.add(request.modelId());
-            } else {
-                ordered.add(line);
-            }
-        }
-        refuseIfIncomplete(missing, duplicates, origin, lines.keySet());
+        List<String> ordered = rows.inGridOrder(grid);
         if (out.holdsRun()) {
             throw new RunSetupException(out.root() + " already holds a run; merge into a new directory");
         }
@@ -92,8 +71,8 @@ public final class ShardMerger {
                     w.append(line).append('\n');
                 }
             });
-            List<CatalogueRow> rows = CatalogueReader.read(out.catalogue());
-            run = RunFinishing.writeTables(out, grid, merged(manifests, rows), rows);
+            List<CatalogueRow> mergedRows = CatalogueReader.read(out.catalogue());
+            run = RunFinishing.writeTables(out, grid, merged(manifests, mergedRows), mergedRows);
         } catch (IOException e) {
             if (top != null) {
                 RunDirectory.deleteTree(top);
@@ -121,54 +100,6 @@ public final class ShardMerger {
                     + "models_sha256; the manifest was edited");
         }
         return grid;
-    }
-
-    /** Reads one catalogue's complete lines, keyed by model id (checked by the catalogue reader). */
-    private static void collect(Path catalogue, Path shard, Map<String, String> lines, Map<String, Path> origin,
-                                Set<String> duplicates) throws IOException {
-        byte[] bytes = Files.readAllBytes(catalogue);
-        String text = new String(bytes, 0, KeptCatalogue.lastLineEnd(bytes), StandardCharsets.UTF_8);
-        String header = RunDirectory.catalogueHeader();
-        if (!text.startsWith(header)) {
-            throw new RunSetupException(catalogue + " has another header than this version writes");
-        }
-        List<CatalogueRow> rows = CatalogueReader.readCompleteLines(text);
-        String[] raw = text.substring(header.length()).split("\n");
-        int count = text.length() == header.length() ? 0 : raw.length;
-        if (count != rows.size()) {
-            throw new RunSetupException(catalogue + " has rows that span several lines; cannot merge it");
-        }
-        for (int i = 0; i < count; i++) {
-            String id = rows.get(i).modelId();
-            if (lines.putIfAbsent(id, raw[i]) != null) {
-                duplicates.add(id + " (" + origin.get(id) + " and " + shard + ")");
-            } else {
-                origin.put(id, shard);
-            }
-        }
-    }
-
-    private static void refuseIfIncomplete(List<String> missing, Set<String> duplicates, Map<String, Path> origin,
-                                           Set<String> unknown) {
-        List<String> problems = new ArrayList<>();
-        if (!missing.isEmpty()) {
-            problems.add(missing.size() + " model(s) missing from every shard: " + firstIds(missing));
-        }
-        if (!duplicates.isEmpty()) {
-            problems.add(duplicates.size() + " model(s) in more than one shard: " + firstIds(duplicates));
-        }
-        if (!unknown.isEmpty()) {
-            List<String> strays = unknown.stream().sorted().map(id -> id + " (" + origin.get(id) + ")").toList();
-            problems.add(strays.size() + " row(s) not in the grid: " + firstIds(strays));
-        }
-        if (!problems.isEmpty()) {
-            throw new RunSetupException("cannot merge: " + String.join("; ", problems));
-        }
-    }
-
-    private static String firstIds(java.util.Collection<String> ids) {
-        List<String> shown = ids.stream().limit(IDS_SHOWN).toList();
-        return String.join(", ", shown) + (ids.size() > IDS_SHOWN ? ", ..." : "");
     }
 
     /**

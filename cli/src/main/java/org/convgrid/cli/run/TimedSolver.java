@@ -2,6 +2,7 @@ package org.convgrid.cli.run;
 
 import java.util.List;
 import java.util.concurrent.ConcurrentLinkedQueue;
+import java.util.stream.DoubleStream;
 import org.convgrid.engine.batch.ChunkSolver;
 import org.convgrid.engine.batch.ModelOutcome;
 import org.convgrid.engine.batch.ModelRequest;
@@ -33,8 +34,8 @@ final class TimedSolver implements ChunkSolver {
 
     /** Median seconds per model over every chunk solved so far; NaN when none. */
     double medianSecondsPerModel() {
-        double[] all = chunks.stream().flatMapToDouble(c -> java.util.stream.DoubleStream.generate(() -> c[0])
-                .limit((long) c[1])).toArray();
+        double[] all = chunks.stream()
+                .flatMapToDouble(c -> DoubleStream.generate(() -> c[0]).limit((long) c[1])).toArray();
         return RunManifest.median(all);
     }
 }

@@ -21,7 +21,8 @@ class ProgressReporterTest {
         reporter.progress(50, 200);
         clock.set(10 * SECOND + 1000);
         reporter.progress(51, 200);
-        assertThat(text.toString()).isEqualTo("\r[######..................] 50/200 models (25%), 5.00 models/s, 30 s left");
+        assertThat(text.toString())
+                .isEqualTo("\r[######..................] 50/200 models (25%), 5.00 models/s, 30 s left");
         clock.set(40 * SECOND);
         reporter.progress(200, 200);
         reporter.finish();
