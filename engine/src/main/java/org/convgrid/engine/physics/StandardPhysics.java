@@ -9,7 +9,9 @@ import org.convgrid.engine.physics.eos.StellarPlasmaEos;
 import org.convgrid.engine.physics.nuclear.HydrogenBurningNetwork;
 import org.convgrid.engine.physics.nuclear.NuclearNetwork;
 import org.convgrid.engine.physics.opacity.AnalyticCompositeOpacity;
+import java.nio.file.Path;
 import org.convgrid.engine.physics.opacity.Opacity;
+import org.convgrid.engine.physics.opacity.OpacityTableReader;
 import org.convgrid.engine.physics.opacity.ScaledOpacity;
 
 /**
@@ -41,9 +43,15 @@ public final class StandardPhysics {
         return NUCLEAR;
     }
 
-    /** The whole bundle for one set of physics options. */
+    /**
+     * The whole bundle for one set of physics options; a user opacity table, when named, is read here.
+     *
+     * @throws org.convgrid.engine.error.ConvgridException BAD_DATA when the table cannot be read
+     */
     public static PhysicsSet create(PhysicsOptions options) {
-        Opacity opacity = opacity(options.opacityFactor());
+        Opacity opacity = options.usesOpacityTable()
+                ? ScaledOpacity.of(OpacityTableReader.read(Path.of(options.opacityTable())), options.opacityFactor())
+                : opacity(options.opacityFactor());
         return new PhysicsSet(EOS, opacity, NUCLEAR, new MixingLengthTheory(options.mixingLength()),
                 options.criterion(), new AtmosphereTable(new GreyAtmosphere(EOS, opacity)), options.overshoot());
     }
