@@ -1,6 +1,7 @@
 package org.convgrid.plotting;
 
 import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -40,22 +41,37 @@ public final class RunMaps {
         return drawAll(runDir, Set.of());
     }
 
-    /** Draws every PNG of the run and, for each chart, one file per requested vector format. */
+    /**
+     * Draws every PNG of the run and, for each chart, one file per requested vector format. Charts are independent,
+     * so they are drawn in parallel (common fork-join pool); each file is written atomically and the list comes
+     * back in report order whatever the thread count.
+     */
     public static List<Path> drawAll(Path runDir, Set<ChartFiles.VectorFormat> vectorFormats) throws IOException {
         Path maps = runDir.resolve(MAPS_DIR);
-        List<Path> written = new ArrayList<>();
-        for (MapEntry entry : plan(RunData.read(runDir))) {
+        try {
+            return plan(RunData.read(runDir)).parallelStream().map(entry -> draw(entry, maps, vectorFormats))
+                    .flatMap(List::stream).toList();
+        } catch (UncheckedIOException e) {
+            throw e.getCause();
+        }
+    }
+
+    private static List<Path> draw(MapEntry entry, Path maps, Set<ChartFiles.VectorFormat> vectorFormats) {
+        try {
+            List<Path> written = new ArrayList<>(1 + vectorFormats.size());
             StyledChart chart = entry.chart().get();
             Path png = maps.resolve(entry.fileName());
             ChartFiles.writePng(chart, png);
             written.add(png);
-            for (ChartFiles.VectorFormat format : vectorFormats) {
+            for (ChartFiles.VectorFormat format : vectorFormats.stream().sorted().toList()) {
                 Path vector = maps.resolve(entry.stem() + "." + format.extension());
                 ChartFiles.writeVector(chart, vector, format);
                 written.add(vector);
             }
+            return written;
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
         }
-        return written;
     }
 
     /** The charts of a run, in report order, without drawing them. */

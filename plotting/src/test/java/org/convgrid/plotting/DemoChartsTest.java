@@ -9,14 +9,14 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Writes the demo run (charts and report) for people to look at, only when asked:
- * {@code -Dconvgrid.demoDir=/tmp/plots-demo}.
+ * environment variable {@code CONVGRID_DEMO_DIR=/tmp/plots-demo} (the forked test JVM inherits it).
  */
 class DemoChartsTest {
 
     @Test
     void writeDemoRun() throws Exception {
-        String target = System.getProperty("convgrid.demoDir");
-        Assumptions.assumeTrue(target != null, "set -Dconvgrid.demoDir=DIR to write the demo charts");
+        String target = System.getenv("CONVGRID_DEMO_DIR");
+        Assumptions.assumeTrue(target != null, "set CONVGRID_DEMO_DIR=DIR to write the demo charts");
         Path dir = TestRuns.write(Path.of(target, "run"), TestRuns.demoRows());
         assertThat(RunMaps.drawAll(dir)).isNotEmpty();
         assertThat(ReportPage.write(dir)).isRegularFile();

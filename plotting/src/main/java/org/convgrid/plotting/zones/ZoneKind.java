@@ -1,13 +1,13 @@
 package org.convgrid.plotting.zones;
 
-/** What a shaded rectangle of a zone map stands for, told apart by where the zone lies. */
+/** What a shaded rectangle of a zone map stands for, told apart by where the zone lies; declaration order is legend order. */
 public enum ZoneKind {
     /** The zone spans the whole star (centre to surface). */
     WHOLE_STAR("fully convective star"),
-    /** The zone starts at the centre. */
-    CORE("convective core"),
     /** The zone reaches the surface. */
     ENVELOPE("convective envelope"),
+    /** The zone starts at the centre. */
+    CORE("convective core"),
     /** A detached convective shell, touching neither centre nor surface. */
     SHELL("convective shell"),
     /** No usable model at this mass (failed, not converged, past the main sequence): not radiative, unknown. */
