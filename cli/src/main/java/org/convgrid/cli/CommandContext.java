@@ -4,9 +4,12 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.EnumSet;
 import org.convgrid.cli.run.ChunkSolverFactory;
+import org.convgrid.cli.run.MapsAndReport;
 import org.convgrid.cli.run.ProductionSolvers;
 import org.convgrid.cli.run.RunFinisher;
+import org.convgrid.plotting.style.ChartFiles;
 
 /**
  * What the commands take from the world, gathered so tests can replace it: the solver seam, the finishers run at
@@ -28,9 +31,10 @@ public record CommandContext(ChunkSolverFactory solvers, List<RunFinisher> finis
         workingDirectory = workingDirectory.toAbsolutePath();
     }
 
-    /** The real process: production solver, no finishers yet, the process environment and directory. */
+    /** The real process: production solver, maps and report at the end, the process environment and directory. */
     public static CommandContext production() {
-        return new CommandContext(ProductionSolvers.factory(), List.of(), System.getenv(),
+        return new CommandContext(ProductionSolvers.factory(),
+                List.of(new MapsAndReport(EnumSet.noneOf(ChartFiles.VectorFormat.class))), System.getenv(),
                 Path.of("").toAbsolutePath(), System.console() != null);
     }
 

@@ -13,6 +13,7 @@ import picocli.CommandLine.Option;
             CheckCommand.class,
             RunCommand.class,
             MergeCommand.class,
+            PlotCommand.class,
             ProbeCommand.class,
         })
 public final class ConvgridMain implements Runnable {
