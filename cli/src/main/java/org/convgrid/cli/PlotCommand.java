@@ -6,7 +6,7 @@ import java.util.EnumSet;
 import java.util.List;
 import java.util.Set;
 import java.util.concurrent.Callable;
-import org.convgrid.plotting.ReportPage;
+import org.convgrid.plotting.report.ReportPage;
 import org.convgrid.plotting.RunMaps;
 import org.convgrid.plotting.style.ChartFiles;
 import picocli.CommandLine.Command;

@@ -2,7 +2,7 @@ package org.convgrid.cli.run;
 
 import java.io.IOException;
 import java.util.Set;
-import org.convgrid.plotting.ReportPage;
+import org.convgrid.plotting.report.ReportPage;
 import org.convgrid.plotting.RunMaps;
 import org.convgrid.plotting.style.ChartFiles;
 
