@@ -1,23 +1,30 @@
 package org.convgrid.engine.physics;
 
+import java.nio.file.Path;
 import org.convgrid.engine.batch.PhysicsOptions;
 import org.convgrid.engine.convection.MixingLengthTheory;
+import org.convgrid.engine.error.ConvgridException;
+import org.convgrid.engine.error.ErrorKind;
 import org.convgrid.engine.physics.atmosphere.AtmosphereTable;
 import org.convgrid.engine.physics.atmosphere.GreyAtmosphere;
+import org.convgrid.engine.physics.atmosphere.SurfaceBoundary;
+import org.convgrid.engine.physics.atmosphere.SurfaceCondition;
 import org.convgrid.engine.physics.eos.EquationOfState;
 import org.convgrid.engine.physics.eos.StellarPlasmaEos;
 import org.convgrid.engine.physics.nuclear.HydrogenBurningNetwork;
 import org.convgrid.engine.physics.nuclear.NuclearNetwork;
 import org.convgrid.engine.physics.opacity.AnalyticCompositeOpacity;
-import java.nio.file.Path;
 import org.convgrid.engine.physics.opacity.Opacity;
 import org.convgrid.engine.physics.opacity.OpacityTableReader;
 import org.convgrid.engine.physics.opacity.ScaledOpacity;
+import org.convgrid.engine.state.Composition;
 
 /**
- * convgrid's default physics: the stellar-plasma equation of state, the analytic composite opacity, the
- * hydrogen-burning network, mixing-length convection and a tabulated grey Eddington atmosphere. Every component
- * is immutable and thread-safe, so the instances are shared.
+ * The default physics of zero-age and main-sequence models: {@link StellarPlasmaEos},
+ * {@link AnalyticCompositeOpacity} or a user table (times the options' opacity factor),
+ * {@link HydrogenBurningNetwork}, {@link MixingLengthTheory} with the options' alpha, the options' stability
+ * criterion, and a grey atmosphere tabulated once for the surface composition, with the direct integration where
+ * the table has no answer. Every component is immutable and thread-safe, so the stateless ones are shared.
  */
 public final class StandardPhysics {
 
@@ -38,21 +45,53 @@ public final class StandardPhysics {
         return ScaledOpacity.of(OPACITY, factor);
     }
 
+    /**
+     * The opacity the options ask for: a user table when one is named (read here), else the analytic composite;
+     * times the opacity factor.
+     *
+     * @throws ConvgridException BAD_DATA when the table cannot be read
+     */
+    public static Opacity opacity(PhysicsOptions options) {
+        return options.usesOpacityTable()
+                ? ScaledOpacity.of(OpacityTableReader.read(Path.of(options.opacityTable())), options.opacityFactor())
+                : opacity(options.opacityFactor());
+    }
+
     /** pp chains and CNO cycle with Salpeter screening. */
     public static NuclearNetwork nuclearNetwork() {
         return NUCLEAR;
     }
 
     /**
-     * The whole bundle for one set of physics options; a user opacity table, when named, is read here.
-     *
-     * @throws org.convgrid.engine.error.ConvgridException BAD_DATA when the table cannot be read
+     * @param options mixing length, overshoot, criterion, opacity factor and table
+     * @param surfaceComposition the composition the atmosphere table is built for (a homogeneous star's
+     *                           initial composition); the table answers for that composition whatever it is
+     *                           asked with
      */
-    public static PhysicsSet create(PhysicsOptions options) {
-        Opacity opacity = options.usesOpacityTable()
-                ? ScaledOpacity.of(OpacityTableReader.read(Path.of(options.opacityTable())), options.opacityFactor())
-                : opacity(options.opacityFactor());
+    public static PhysicsSet create(PhysicsOptions options, Composition surfaceComposition) {
+        Opacity opacity = opacity(options);
+        GreyAtmosphere atmosphere = new GreyAtmosphere(EOS, opacity);
+        SurfaceBoundary table = new AtmosphereTable(atmosphere).tabulate(surfaceComposition);
         return new PhysicsSet(EOS, opacity, NUCLEAR, new MixingLengthTheory(options.mixingLength()),
-                options.criterion(), new AtmosphereTable(new GreyAtmosphere(EOS, opacity)), options.overshoot());
+                options.criterion(), new TableWithFallback(table, atmosphere), options.overshoot());
+    }
+
+    /**
+     * The table where it answers; the direct integration outside it or in a cell with a missing node (which
+     * happens where the table's own integration failed at one node). The two agree to the table's
+     * interpolation error (~3e-4 in ln P).
+     */
+    private record TableWithFallback(SurfaceBoundary table, SurfaceBoundary direct) implements SurfaceBoundary {
+        @Override
+        public SurfaceCondition at(double effectiveTemperature, double gravity, Composition composition) {
+            try {
+                return table.at(effectiveTemperature, gravity, composition);
+            } catch (ConvgridException e) {
+                if (e.kind() != ErrorKind.OFF_TABLE) {
+                    throw e;
+                }
+                return direct.at(effectiveTemperature, gravity, composition);
+            }
+        }
     }
 }

@@ -1,0 +1,157 @@
+package org.convgrid.engine.structure;
+
+import org.convgrid.engine.error.ConvgridException;
+
+/**
+ * Newton-Raphson relaxation of a {@link DifferenceSystem} (the Henyey method: Henyey et al. 1959, ApJ 129, 628;
+ * Henyey, Forbes &amp; Gould 1964, ApJ 139, 306; Kippenhahn, Weigert &amp; Weiss 2012, ch. 12), with the linear
+ * system solved by a banded LU factorisation.
+ *
+ * <p>Each correction is scaled down so that no unknown moves by more than {@link Settings#maxStep()} (in ln
+ * units); when the physics rejects the damped state, or gives non-finite residuals, the step is cut by
+ * {@link #BACKTRACK_FACTOR} up to {@link #MAX_BACKTRACKS} times. The relaxation stops when the largest undamped
+ * correction is below {@link Settings#tolerance()} (the state after applying it is returned), or with a failed
+ * {@link SolveReport} when the budget runs out. Stateless and thread-safe.
+ */
+public final class HenyeySolver {
+
+    /** Largest correction accepted as converged, ln units (common practice: 1e-8, formulas.md 6.2). */
+    public static final double DEFAULT_TOLERANCE = 1.0e-8;
+    /** Largest change of any ln unknown per iteration (common practice 0.1-0.3, formulas.md 6.2). */
+    public static final double DEFAULT_MAX_STEP = 0.2;
+    /** Newton iterations allowed for one relaxation. */
+    public static final int DEFAULT_ITERATION_BUDGET = 60;
+    /** Step cuts tried when the physics rejects a damped state. */
+    public static final int MAX_BACKTRACKS = 6;
+    /**
+     * The residual-decrease test is applied only when the undamped correction exceeds this many times the step
+     * cap, i.e. far from the solution; near it plain Newton steps are taken.
+     */
+    public static final double LINE_SEARCH_THRESHOLD = 3.0;
+    /** Factor applied to the step at each cut. */
+    public static final double BACKTRACK_FACTOR = 0.25;
+
+    /**
+     * @param tolerance largest correction accepted as converged
+     * @param maxStep largest correction applied in one iteration
+     * @param iterationBudget Newton iterations allowed
+     */
+    public record Settings(double tolerance, double maxStep, int iterationBudget) {
+        public static final Settings DEFAULT = new Settings(DEFAULT_TOLERANCE, DEFAULT_MAX_STEP,
+                DEFAULT_ITERATION_BUDGET);
+
+        public Settings withIterationBudget(int budget) {
+            return new Settings(tolerance, maxStep, budget);
+        }
+    }
+
+    /**
+     * The outcome of a relaxation.
+     *
+     * @param solution the last state (the converged one when the report says so)
+     * @param report how it went
+     */
+    public record Result(double[] solution, SolveReport report) {
+    }
+
+    /**
+     * Relaxes {@code system} from {@code start} (not modified).
+     */
+    public Result solve(DifferenceSystem system, double[] start, Settings settings) {
+        int n = system.points() * system.variables();
+        if (start.length != n) {
+            throw new IllegalArgumentException("start vector has " + start.length + " entries, expected " + n);
+        }
+        BandMatrix jacobian = new BandMatrix(n, system.lowerBandwidth(), system.upperBandwidth());
+        double[] y = start.clone();
+        double[] residual = new double[n];
+        double[] delta = new double[n];
+        double[] trial = new double[n];
+        try {
+            system.evaluate(y, residual, jacobian);
+        } catch (ConvgridException e) {
+            return new Result(y, new SolveReport(StopReason.BAD_STATE, 0, Double.NaN, -1, -1,
+                    "start state rejected: " + e.getMessage()));
+        }
+        int nv = system.variables();
+        double largest = Double.NaN;
+        int worst = -1;
+        for (int iteration = 1; iteration <= settings.iterationBudget(); iteration++) {
+            if (!jacobian.factor()) {
+                return new Result(y, new SolveReport(StopReason.SINGULAR_JACOBIAN, iteration, largest,
+                        worst < 0 ? -1 : worst / nv, worst < 0 ? -1 : worst % nv, ""));
+            }
+            for (int i = 0; i < n; i++) {
+                delta[i] = -residual[i];
+            }
+            jacobian.solve(delta);
+            largest = 0.0;
+            worst = 0;
+            for (int i = 0; i < n; i++) {
+                double size = system.correctionSize(y, i, delta[i]);
+                if (!(size <= largest)) {
+                    largest = size;
+                    worst = i;
+                }
+            }
+            if (!Double.isFinite(largest)) {
+                return new Result(y, new SolveReport(StopReason.BAD_STATE, iteration, largest, worst / nv,
+                        worst % nv, "non-finite correction"));
+            }
+            double lambda = Math.min(1.0, settings.maxStep() / largest);
+            double norm = sumOfSquares(residual);
+            String rejection = null;
+            boolean accepted = false;
+            boolean searching = largest > settings.maxStep() * LINE_SEARCH_THRESHOLD;
+            for (int cut = 0; cut <= MAX_BACKTRACKS && !accepted; cut++) {
+                for (int i = 0; i < n; i++) {
+                    trial[i] = y[i] + lambda * delta[i];
+                }
+                jacobian.clear();
+                try {
+                    system.evaluate(trial, residual, jacobian);
+                    accepted = allFinite(residual);
+                    rejection = accepted ? null : "non-finite residual";
+                    // far from the solution, also ask the residuals to shrink (the last cut is taken anyway)
+                    if (accepted && searching && cut < MAX_BACKTRACKS && sumOfSquares(residual) > norm) {
+                        accepted = false;
+                        rejection = "residuals grew";
+                    }
+                } catch (ConvgridException e) {
+                    rejection = e.getMessage();
+                }
+                if (!accepted) {
+                    lambda *= BACKTRACK_FACTOR;
+                }
+            }
+            if (!accepted) {
+                return new Result(y, new SolveReport(StopReason.BAD_STATE, iteration, largest, worst / nv,
+                        worst % nv, "every damped step was rejected: " + rejection));
+            }
+            System.arraycopy(trial, 0, y, 0, n);
+            if (largest <= settings.tolerance()) {
+                return new Result(y, new SolveReport(StopReason.CONVERGED, iteration, largest, worst / nv,
+                        worst % nv, ""));
+            }
+        }
+        return new Result(y, new SolveReport(StopReason.ITERATION_BUDGET, settings.iterationBudget(), largest,
+                worst / nv, worst % nv, ""));
+    }
+
+    private static double sumOfSquares(double[] values) {
+        double sum = 0.0;
+        for (double v : values) {
+            sum += v * v;
+        }
+        return sum;
+    }
+
+    private static boolean allFinite(double[] values) {
+        for (double v : values) {
+            if (!Double.isFinite(v)) {
+                return false;
+            }
+        }
+        return true;
+    }
+}

@@ -1,0 +1,132 @@
+package org.convgrid.engine.structure;
+
+import org.convgrid.engine.state.Composition;
+
+/**
+ * Places mesh points where the structure changes fast (Eggleton 1971, MNRAS 151, 351, for the idea of an
+ * adaptive mesh; the weights are practice, formulas.md 6.3): every old interval gets a cost
+ * |D ln P|/0.05 + |D ln T|/0.03 + |D ln r|/0.08 + |D(m/M)|/0.01 + |D ln(1 - m/M)|/1 (not for the
+ * outermost interval, which reaches m = M) + |D L/L_s|/0.02
+ * + 2 at a change of convective state, and the new points divide the cumulative cost evenly. The structure is
+ * carried over by linear interpolation in that cost coordinate (equivalently in ln P, ln T, ... where they
+ * dominate). Immutable and thread-safe.
+ */
+public final class MeshPlanner {
+
+    /** Default number of mesh points. */
+    public static final int DEFAULT_POINTS = 500;
+    /** Remesh when some interval costs more than this many times the even share. */
+    public static final double UNEVENNESS_LIMIT = 2.5;
+
+    private static final double STEP_LN_P = 0.05;
+    private static final double STEP_LN_T = 0.03;
+    private static final double STEP_LN_R = 0.08;
+    private static final double STEP_MASS = 0.01;
+    private static final double STEP_LN_EXTERIOR = 1.0;
+    private static final double STEP_LUMINOSITY = 0.02;
+    private static final double BOUNDARY_COST = 2.0;
+    private static final double MINIMUM_COST = 1.0e-6;
+    /** Bounds of the ln(1 - m/M) span given to the outermost interval when it is split. */
+    private static final double MIN_OUTER_SPAN = 0.1;
+    private static final double MAX_OUTER_SPAN = 10.0;
+
+    private final int points;
+
+    public MeshPlanner(int points) {
+        if (points < 10) {
+            throw new IllegalArgumentException("need at least 10 mesh points, got " + points);
+        }
+        this.points = points;
+    }
+
+    public int points() {
+        return points;
+    }
+
+    /** Whether the model's mesh is uneven enough (or of the wrong size) to be worth redistributing. */
+    public boolean needsRemesh(StellarModel model) {
+        double[] cost = costs(model);
+        double total = 0.0;
+        double largest = 0.0;
+        for (double c : cost) {
+            total += c;
+            largest = Math.max(largest, c);
+        }
+        return model.state().size() != points || largest > UNEVENNESS_LIMIT * total / (points - 1);
+    }
+
+    /** The model's state interpolated onto a new mesh of {@link #points()} points. */
+    public ModelState remesh(StellarModel model) {
+        ModelState old = model.state();
+        double[] cost = costs(model);
+        int n = old.size();
+        double[] cumulative = new double[n];
+        for (int k = 1; k < n; k++) {
+            cumulative[k] = cumulative[k - 1] + cost[k - 1];
+        }
+        MassMesh mesh = old.mesh();
+        // in the outer envelope P ~ g (M - m)/(4 pi R^2): the outermost interval spans about D ln P in ln(M - m)
+        StellarProfile p = model.profile();
+        double outerSpan = Math.min(MAX_OUTER_SPAN, Math.max(MIN_OUTER_SPAN,
+                Math.abs(Math.log(p.pressure(n - 2) / p.pressure(n - 1)))));
+        double[] q = new double[points];
+        double[] e = new double[points];
+        Composition[] comp = new Composition[points];
+        double[] lnR = new double[points];
+        double[] lnRho = new double[points];
+        double[] lnT = new double[points];
+        double[] lum = new double[points];
+        int k = 0;
+        for (int j = 0; j < points; j++) {
+            double target = cumulative[n - 1] * j / (points - 1);
+            while (k < n - 2 && cumulative[k + 1] <= target) {
+                k++;
+            }
+            double w = Math.min(1.0, Math.max(0.0, (target - cumulative[k]) / (cumulative[k + 1] - cumulative[k])));
+            if (j == points - 1) {
+                w = 1.0;
+            }
+            if (k == n - 2) {
+                // outermost interval: ln(1 - m/M) runs on past the last interior point
+                double lnE = Math.log(mesh.exteriorFraction(k)) - w * outerSpan;
+                e[j] = j == points - 1 ? 0.0 : Math.exp(lnE);
+                q[j] = 1.0 - e[j];
+            } else {
+                double u = (1 - w) * mesh.logit(k) + w * mesh.logit(k + 1);
+                q[j] = 1.0 / (1.0 + Math.exp(-u));
+                e[j] = 1.0 / (1.0 + Math.exp(u));
+            }
+            comp[j] = old.composition(w < 0.5 ? k : k + 1);
+            lnR[j] = (1 - w) * old.lnRadius(k) + w * old.lnRadius(k + 1);
+            lnRho[j] = (1 - w) * old.lnDensity(k) + w * old.lnDensity(k + 1);
+            lnT[j] = (1 - w) * old.lnTemperature(k) + w * old.lnTemperature(k + 1);
+            lum[j] = (1 - w) * old.luminosity(k) + w * old.luminosity(k + 1);
+        }
+        q[0] = mesh.fraction(0);
+        e[0] = mesh.exteriorFraction(0);
+        return new ModelState(MassMesh.ofFractions(mesh.totalMass(), q, e), comp, lnR, lnRho, lnT, lum);
+    }
+
+    private static double[] costs(StellarModel model) {
+        StellarProfile p = model.profile();
+        MassMesh mesh = model.state().mesh();
+        int n = p.size();
+        double lumScale = Math.abs(p.luminosity(n - 1));
+        double[] cost = new double[n - 1];
+        for (int k = 0; k < n - 1; k++) {
+            double c = Math.abs(Math.log(p.pressure(k + 1) / p.pressure(k))) / STEP_LN_P
+                    + Math.abs(Math.log(p.temperature(k + 1) / p.temperature(k))) / STEP_LN_T
+                    + Math.abs(Math.log(p.radius(k + 1) / p.radius(k))) / STEP_LN_R
+                    + Math.abs(mesh.fraction(k + 1) - mesh.fraction(k)) / STEP_MASS
+                    + Math.abs(p.luminosity(k + 1) - p.luminosity(k)) / lumScale / STEP_LUMINOSITY;
+            if (k < n - 2) {
+                c += Math.abs(Math.log(mesh.exteriorFraction(k) / mesh.exteriorFraction(k + 1))) / STEP_LN_EXTERIOR;
+            }
+            if (p.convective(k) != p.convective(k + 1)) {
+                c += BOUNDARY_COST;
+            }
+            cost[k] = c + MINIMUM_COST;
+        }
+        return cost;
+    }
+}

@@ -1,0 +1,420 @@
+package org.convgrid.engine.structure;
+
+import org.convgrid.engine.convection.ConvectiveGradient;
+import org.convgrid.engine.convection.LocalConvectionState;
+import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.engine.error.ConvgridException;
+import org.convgrid.engine.error.ErrorKind;
+import org.convgrid.engine.physics.PhysicsSet;
+import org.convgrid.engine.physics.atmosphere.SurfaceCondition;
+import org.convgrid.engine.physics.eos.EosState;
+import org.convgrid.engine.physics.nuclear.BurningRate;
+import org.convgrid.engine.physics.opacity.OpacityValue;
+import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.units.Constants;
+
+/**
+ * The four stellar-structure equations in mass (Kippenhahn, Weigert &amp; Weiss 2012, ch. 10-12) as a
+ * {@link DifferenceSystem}; unknowns per point: ln r, ln rho, ln T and L / L_scale. Density rather than pressure
+ * is the unknown so the equation of state is only called in its cheap direction (rho, T) -&gt; P.
+ *
+ * <p>On interval (a, b) = (k, k + 1), with Dm its mass, bars meaning the mean of ln quantities (formulas.md 6.2):
+ * <ol>
+ * <li>mass: (r_b^3 - r_a^3) 4 pi rho_bar / (3 Dm) - 1 = 0</li>
+ * <li>hydrostatic: ln P_b - ln P_a + G m_bar Dm / (4 pi r_a^2 r_b^2 P_bar) = 0</li>
+ * <li>energy: (L_b - L_a - Dm (eps_a + eps_b)/2) / L_scale = 0, eps = eps_nuc + extra (e.g. eps_grav)</li>
+ * <li>transport: ln T_b - ln T_a - (nabla_a + nabla_b)/2 (ln P_b - ln P_a) = 0</li>
+ * </ol>
+ * Centre (point 0 at a small mass m_0): 4 pi r_0^3 rho_0 / (3 m_0) = 1 and L_0 = eps_0 m_0 (the leading terms
+ * of the central series, formulas.md 6.2). Surface: ln P and ln T equal the {@link
+ * org.convgrid.engine.physics.atmosphere.SurfaceBoundary} values at Teff = (L/(4 pi R^2 sigma))^(1/4) and
+ * g = G M/R^2.
+ *
+ * <p>nabla = nabla_rad = 3 kappa L P/(16 pi a c G m T^4) where stable; where nabla_rad exceeds nabla_ad
+ * (Schwarzschild) or nabla_ad + nabla_mu/delta (Ledoux, ideal-gas phi = 1) the convection model gives nabla.
+ * Jacobians: analytic in radiative points (from the EOS chi's and the opacity/rate logarithmic derivatives),
+ * one-sided differences of the whole local evaluation in convective points. Not thread-safe (scratch space).
+ */
+public final class StructureEquations implements DifferenceSystem {
+
+    /** Relative step of the one-sided differences in ln rho, ln T and ln r. */
+    static final double DIFFERENCE_STEP = 1.0e-6;
+    private static final double FOUR_PI = 4.0 * Math.PI;
+    private static final double RADIATIVE_CONSTANT = 3.0 / (16.0 * Math.PI * Constants.A_RAD * Constants.C
+            * Constants.G);
+
+    private final MassMesh mesh;
+    private final Composition[] composition;
+    private final PhysicsSet physics;
+    private final double luminosityScale;
+    private final double[] nablaMu;
+    private final ExtraEnergy extra;
+    private final double burningFactor;
+    private final ShellComposition compositionRule;
+    private final int n;
+
+    private final EosState[] eos;
+    private final OpacityValue[] opacity;
+    private final ConvectiveGradient[] convection;
+    private final double[] nablaRad;
+    private final double[] nablaStability;
+    private final double[] epsNuclear;
+    private final double[] eps;
+    private final double[] dEps;
+    private final double[] nabla;
+    private final double[] dNabla;
+
+    /**
+     * @param mesh mass coordinates
+     * @param composition per point (fixed during the solve)
+     * @param physics microphysics, convection and surface boundary
+     * @param luminosityScale L_scale, erg s^-1: a typical luminosity (e.g. the guess's surface value)
+     * @param nablaMu dln mu/dln P per point for the Ledoux criterion, or null for zero (homogeneous star)
+     * @param extra energy source besides burning, {@link ExtraEnergy#NONE} for thermal equilibrium
+     */
+    public StructureEquations(MassMesh mesh, Composition[] composition, PhysicsSet physics, double luminosityScale,
+                              double[] nablaMu, ExtraEnergy extra) {
+        this(mesh, composition, physics, luminosityScale, nablaMu, extra, 1.0);
+    }
+
+    /**
+     * As above, with the nuclear energy generation multiplied by {@code burningFactor}: a homotopy parameter for
+     * cold starts (a guess is first relaxed with the burning rescaled to match its luminosity, then the factor is
+     * walked back to one). Models are only physical with the factor one.
+     */
+    public StructureEquations(MassMesh mesh, Composition[] composition, PhysicsSet physics, double luminosityScale,
+                              double[] nablaMu, ExtraEnergy extra, double burningFactor) {
+        this(mesh, composition, physics, luminosityScale, nablaMu, extra, burningFactor, null);
+    }
+
+    /**
+     * As above, with the composition of every shell recomputed from its trial state at each evaluation
+     * ({@code compositionRule}, e.g. 3He and CN at local equilibrium for a zero-age model), or kept fixed when
+     * the rule is null. The Jacobian ignores the composition's dependence on the state (it is weak for the
+     * equilibrium abundances), so the Newton iteration converges to the self-consistent model.
+     */
+    public StructureEquations(MassMesh mesh, Composition[] composition, PhysicsSet physics, double luminosityScale,
+                              double[] nablaMu, ExtraEnergy extra, double burningFactor,
+                              ShellComposition compositionRule) {
+        this.compositionRule = compositionRule;
+        this.burningFactor = burningFactor;
+        this.mesh = mesh;
+        this.composition = composition.clone();
+        this.physics = physics;
+        this.luminosityScale = luminosityScale;
+        this.n = mesh.size();
+        this.nablaMu = nablaMu == null ? new double[n] : nablaMu.clone();
+        this.extra = extra;
+        this.eos = new EosState[n];
+        this.opacity = new OpacityValue[n];
+        this.convection = new ConvectiveGradient[n];
+        this.nablaRad = new double[n];
+        this.nablaStability = new double[n];
+        this.epsNuclear = new double[n];
+        this.eps = new double[n];
+        this.dEps = new double[2 * n];
+        this.nabla = new double[n];
+        this.dNabla = new double[4 * n];
+    }
+
+    /** The unknown vector of a model state, L scaled by this system's L_scale. */
+    public double[] unknowns(ModelState state) {
+        double[] y = new double[4 * n];
+        for (int k = 0; k < n; k++) {
+            y[4 * k] = state.lnRadius(k);
+            y[4 * k + 1] = state.lnDensity(k);
+            y[4 * k + 2] = state.lnTemperature(k);
+            y[4 * k + 3] = state.luminosity(k) / luminosityScale;
+        }
+        return y;
+    }
+
+    /** The model state of an unknown vector. */
+    public ModelState state(double[] y) {
+        double[] lnR = new double[n];
+        double[] lnRho = new double[n];
+        double[] lnT = new double[n];
+        double[] lum = new double[n];
+        for (int k = 0; k < n; k++) {
+            lnR[k] = y[4 * k];
+            lnRho[k] = y[4 * k + 1];
+            lnT[k] = y[4 * k + 2];
+            lum[k] = y[4 * k + 3] * luminosityScale;
+        }
+        return new ModelState(mesh, composition, lnR, lnRho, lnT, lum);
+    }
+
+    @Override
+    public int points() {
+        return n;
+    }
+
+    @Override
+    public int variables() {
+        return 4;
+    }
+
+    @Override
+    public int centralConditions() {
+        return 2;
+    }
+
+    @Override
+    public double correctionSize(double[] y, int index, double delta) {
+        if (index % 4 != 3) {
+            return Math.abs(delta);
+        }
+        // L is linear (it may be ~0 near the centre): relative change, floored at a tenth of the surface value
+        double floor = 0.1 * Math.max(Math.abs(y[4 * n - 1]), 1.0e-3);
+        return Math.abs(delta) / Math.max(Math.abs(y[index]), floor);
+    }
+
+    @Override
+    public void evaluate(double[] y, double[] f, BandMatrix jac) {
+        for (int k = 0; k < n; k++) {
+            evaluatePoint(k, y, jac != null);
+        }
+        central(y, f, jac);
+        for (int k = 0; k < n - 1; k++) {
+            interval(k, y, f, jac);
+        }
+        surface(y, f, jac);
+    }
+
+    private void evaluatePoint(int k, double[] y, boolean derivatives) {
+        double lnR = y[4 * k];
+        double lnRho = y[4 * k + 1];
+        double lnT = y[4 * k + 2];
+        double lum = y[4 * k + 3] * luminosityScale;
+        double rho = Math.exp(lnRho);
+        double t = Math.exp(lnT);
+        Composition c = compositionRule == null ? composition[k] : compositionRule.at(k, rho, t);
+        composition[k] = c;
+        EosState s = physics.eos().atDensity(rho, t, c);
+        OpacityValue op = physics.opacity().rosselandMean(rho, t, c);
+        BurningRate burn = physics.nuclear().burn(rho, t, c);
+        eos[k] = s;
+        opacity[k] = op;
+        epsNuclear[k] = burn.eps();
+        double r = Math.exp(lnR);
+        nabla[k] = localNabla(k, r, lum, s, op.kappa(), true);
+        double ex = extra.at(k, s);
+        double nuclear = burningFactor * burn.eps();
+        eps[k] = nuclear + ex;
+        if (!derivatives) {
+            return;
+        }
+        dEps[2 * k] = nuclear * burn.dlnEpsDlnRho();
+        dEps[2 * k + 1] = nuclear * burn.dlnEpsDlnT();
+        boolean convective = convection[k] != null && convection[k].convective();
+        if (!convective && extra == ExtraEnergy.NONE) {
+            // radiative: nabla = C kappa L P / (m T^4), differentiated analytically
+            double nr = nabla[k];
+            dNabla[4 * k] = 0.0;
+            dNabla[4 * k + 1] = nr * (op.dlnKappaDlnRho() + s.chiRho());
+            dNabla[4 * k + 2] = nr * (op.dlnKappaDlnT() + s.chiT() - 4.0);
+            dNabla[4 * k + 3] = RADIATIVE_CONSTANT * op.kappa() * luminosityScale * s.pressure()
+                    / (mesh.mass(k) * t * t * t * t);
+            return;
+        }
+        double h = DIFFERENCE_STEP;
+        EosState sRho = physics.eos().atDensity(rho * Math.exp(h), t, c);
+        OpacityValue opRho = physics.opacity().rosselandMean(rho * Math.exp(h), t, c);
+        EosState sT = physics.eos().atDensity(rho, t * Math.exp(h), c);
+        OpacityValue opT = physics.opacity().rosselandMean(rho, t * Math.exp(h), c);
+        double base = nabla[k];
+        dNabla[4 * k] = (localNabla(k, r * Math.exp(h), lum, s, op.kappa(), false) - base) / h;
+        dNabla[4 * k + 1] = (localNabla(k, r, lum, sRho, opRho.kappa(), false) - base) / h;
+        dNabla[4 * k + 2] = (localNabla(k, r, lum, sT, opT.kappa(), false) - base) / h;
+        double dl = h * Math.max(Math.abs(y[4 * k + 3]), 1.0e-3);
+        dNabla[4 * k + 3] = (localNabla(k, r, lum + dl * luminosityScale, s, op.kappa(), false) - base) / dl;
+        if (extra != ExtraEnergy.NONE) {
+            dEps[2 * k] += (extra.at(k, sRho) - ex) / h;
+            dEps[2 * k + 1] += (extra.at(k, sT) - ex) / h;
+        }
+    }
+
+    /** The actual gradient at point k for the given local state; records the convection result when asked. */
+    private double localNabla(int k, double r, double lum, EosState s, double kappa, boolean record) {
+        double m = mesh.mass(k);
+        double t = s.temperature();
+        double p = s.pressure();
+        double rad = RADIATIVE_CONSTANT * kappa * lum * p / (m * t * t * t * t);
+        double stability = s.nablaAd();
+        if (physics.criterion() == StabilityCriterion.LEDOUX && nablaMu[k] != 0.0) {
+            stability += nablaMu[k] / s.delta();
+        }
+        ConvectiveGradient g = null;
+        double result = rad;
+        if (rad > stability) {
+            double gravity = Constants.G * m / (r * r);
+            g = physics.convection().gradient(new LocalConvectionState(t, s.density(), p, gravity, kappa, s.cp(),
+                    s.delta(), rad, s.nablaAd(), stability));
+            result = g.nabla();
+        }
+        if (record) {
+            nablaRad[k] = rad;
+            nablaStability[k] = stability;
+            convection[k] = g;
+        }
+        return result;
+    }
+
+    private void central(double[] y, double[] f, BandMatrix jac) {
+        double r0 = Math.exp(y[0]);
+        double m0 = mesh.mass(0);
+        double ratio = FOUR_PI * r0 * r0 * r0 * Math.exp(y[1]) / (3.0 * m0);
+        f[0] = ratio - 1.0;
+        f[1] = y[3] - eps[0] * m0 / luminosityScale;
+        if (jac != null) {
+            jac.add(0, 0, 3.0 * ratio);
+            jac.add(0, 1, ratio);
+            jac.add(1, 3, 1.0);
+            jac.add(1, 1, -dEps[0] * m0 / luminosityScale);
+            jac.add(1, 2, -dEps[1] * m0 / luminosityScale);
+        }
+    }
+
+    private void interval(int k, double[] y, double[] f, BandMatrix jac) {
+        int a = 4 * k;
+        int b = a + 4;
+        double dm = mesh.intervalMass(k);
+        double ra = Math.exp(y[a]);
+        double rb = Math.exp(y[b]);
+        // r_b^3 - r_a^3 without cancellation in the thin outer shells
+        double volume = ra * Math.expm1(y[b] - y[a]) * (ra * ra + ra * rb + rb * rb);
+        double rhoBar = Math.exp(0.5 * (y[a + 1] + y[b + 1]));
+        double massTerm = FOUR_PI * rhoBar / (3.0 * dm);
+        int row = intervalRow(k, 0);
+        f[row] = volume * massTerm - 1.0;
+
+        double lnPa = Math.log(eos[k].pressure());
+        double lnPb = Math.log(eos[k + 1].pressure());
+        double mBar = 0.5 * (mesh.mass(k) + mesh.mass(k + 1));
+        double hydro = Constants.G * mBar * dm / (FOUR_PI * ra * ra * rb * rb * Math.exp(0.5 * (lnPa + lnPb)));
+        f[row + 1] = lnPb - lnPa + hydro;
+
+        f[row + 2] = y[b + 3] - y[a + 3] - 0.5 * (eps[k] + eps[k + 1]) * dm / luminosityScale;
+
+        double nablaBar = 0.5 * (nabla[k] + nabla[k + 1]);
+        double dLnP = lnPb - lnPa;
+        f[row + 3] = y[b + 2] - y[a + 2] - nablaBar * dLnP;
+
+        if (jac == null) {
+            return;
+        }
+        int ca = column(k, 0);
+        int cb = column(k + 1, 0);
+        jac.add(row, ca, -3.0 * ra * ra * ra * massTerm);
+        jac.add(row, cb, 3.0 * rb * rb * rb * massTerm);
+        jac.add(row, ca + 1, 0.5 * volume * massTerm);
+        jac.add(row, cb + 1, 0.5 * volume * massTerm);
+
+        double pRhoA = eos[k].chiRho();
+        double pTA = eos[k].chiT();
+        double pRhoB = eos[k + 1].chiRho();
+        double pTB = eos[k + 1].chiT();
+        jac.add(row + 1, ca, -2.0 * hydro);
+        jac.add(row + 1, cb, -2.0 * hydro);
+        jac.add(row + 1, ca + 1, -(1.0 + 0.5 * hydro) * pRhoA);
+        jac.add(row + 1, ca + 2, -(1.0 + 0.5 * hydro) * pTA);
+        jac.add(row + 1, cb + 1, (1.0 - 0.5 * hydro) * pRhoB);
+        jac.add(row + 1, cb + 2, (1.0 - 0.5 * hydro) * pTB);
+
+        double e = 0.5 * dm / luminosityScale;
+        jac.add(row + 2, ca + 3, -1.0);
+        jac.add(row + 2, cb + 3, 1.0);
+        jac.add(row + 2, ca + 1, -e * dEps[2 * k]);
+        jac.add(row + 2, ca + 2, -e * dEps[2 * k + 1]);
+        jac.add(row + 2, cb + 1, -e * dEps[2 * k + 2]);
+        jac.add(row + 2, cb + 2, -e * dEps[2 * k + 3]);
+
+        jac.add(row + 3, ca + 2, -1.0);
+        jac.add(row + 3, cb + 2, 1.0);
+        for (int j = 0; j < 4; j++) {
+            jac.add(row + 3, ca + j, -0.5 * dNabla[a + j] * dLnP);
+            jac.add(row + 3, cb + j, -0.5 * dNabla[b + j] * dLnP);
+        }
+        jac.add(row + 3, ca + 1, nablaBar * pRhoA);
+        jac.add(row + 3, ca + 2, nablaBar * pTA);
+        jac.add(row + 3, cb + 1, -nablaBar * pRhoB);
+        jac.add(row + 3, cb + 2, -nablaBar * pTB);
+    }
+
+    private void surface(double[] y, double[] f, BandMatrix jac) {
+        int s = n - 1;
+        double r = Math.exp(y[4 * s]);
+        double lum = y[4 * s + 3] * luminosityScale;
+        if (!(lum > 0.0)) {
+            throw new ConvgridException(ErrorKind.OUT_OF_RANGE, "surface luminosity must be positive, got " + lum,
+                    "L", lum, 0.0, Double.POSITIVE_INFINITY);
+        }
+        double teff = Math.pow(lum / (FOUR_PI * r * r * Constants.SIGMA_SB), 0.25);
+        double gravity = Constants.G * mesh.totalMass() / (r * r);
+        SurfaceCondition bc = physics.surface().at(teff, gravity, composition[s]);
+        int row0 = surfaceRow(0);
+        f[row0] = Math.log(eos[s].pressure()) - bc.lnPressure();
+        f[row0 + 1] = y[4 * s + 2] - bc.lnTemperature();
+        if (jac == null) {
+            return;
+        }
+        int c = column(s, 0);
+        // dln Teff = dlnL/4 - dln r/2, dln g = -2 dln r
+        double dTeffDl = 0.25 / y[4 * s + 3];
+        jac.add(row0, c, -(-0.5 * bc.dlnPDlnTeff() - 2.0 * bc.dlnPDlnG()));
+        jac.add(row0, c + 1, eos[s].chiRho());
+        jac.add(row0, c + 2, eos[s].chiT());
+        jac.add(row0, c + 3, -bc.dlnPDlnTeff() * dTeffDl);
+        jac.add(row0 + 1, c, -(-0.5 * bc.dlnTDlnTeff() - 2.0 * bc.dlnTDlnG()));
+        jac.add(row0 + 1, c + 2, 1.0);
+        jac.add(row0 + 1, c + 3, -bc.dlnTDlnTeff() * dTeffDl);
+    }
+
+    // --- read-out of the last evaluation, for building profiles -------------------------------------------
+
+    EosState eosAt(int k) {
+        return eos[k];
+    }
+
+    OpacityValue opacityAt(int k) {
+        return opacity[k];
+    }
+
+    /** The convection result at point k, null where the point is stable. */
+    ConvectiveGradient convectionAt(int k) {
+        return convection[k];
+    }
+
+    double nablaAt(int k) {
+        return nabla[k];
+    }
+
+    double nablaRadAt(int k) {
+        return nablaRad[k];
+    }
+
+    double nablaStabilityAt(int k) {
+        return nablaStability[k];
+    }
+
+    /** Total nuclear luminosity of the last evaluation with the burning factor one, erg s^-1 (trapezoid rule). */
+    double nuclearLuminosity() {
+        double sum = epsNuclear[0] * mesh.mass(0);
+        for (int k = 0; k < n - 1; k++) {
+            sum += 0.5 * (epsNuclear[k] + epsNuclear[k + 1]) * mesh.intervalMass(k);
+        }
+        return sum;
+    }
+
+    double epsNuclearAt(int k) {
+        return epsNuclear[k];
+    }
+
+    double luminosityScale() {
+        return luminosityScale;
+    }
+
+    MassMesh mesh() {
+        return mesh;
+    }
+}

@@ -1,0 +1,94 @@
+package org.convgrid.engine.structure;
+
+import org.convgrid.engine.physics.PhysicsSet;
+
+/**
+ * Solves the structure equations for one composition profile by Henyey relaxation, starting from a guess on a
+ * given mesh. Immutable and thread-safe (each call builds its own equations and scratch space).
+ */
+public final class StructureSolver {
+
+    private final PhysicsSet physics;
+    private final HenyeySolver.Settings settings;
+    private final HenyeySolver henyey = new HenyeySolver();
+
+    public StructureSolver(PhysicsSet physics, HenyeySolver.Settings settings) {
+        this.physics = physics;
+        this.settings = settings;
+    }
+
+    public StructureSolver(PhysicsSet physics) {
+        this(physics, HenyeySolver.Settings.DEFAULT);
+    }
+
+    /**
+     * The burning factor that makes the guess's nuclear luminosity equal its surface luminosity: the starting
+     * point of the cold-start homotopy.
+     */
+    public double matchingBurningFactor(ModelState guess) {
+        StructureEquations eq = new StructureEquations(guess.mesh(), guess.compositions(), physics,
+                Math.abs(guess.surfaceLuminosity()), null, ExtraEnergy.NONE);
+        double[] y = eq.unknowns(guess);
+        eq.evaluate(y, new double[y.length], null);
+        return guess.surfaceLuminosity() / eq.nuclearLuminosity();
+    }
+
+    public PhysicsSet physics() {
+        return physics;
+    }
+
+    public HenyeySolver.Settings settings() {
+        return settings;
+    }
+
+    /**
+     * Relaxes {@code guess} (mesh and composition kept) to a solution in thermal equilibrium.
+     *
+     * @throws SolveFailedException with the report when the relaxation does not converge
+     */
+    public StellarModel relax(ModelState guess) {
+        return relax(guess, ExtraEnergy.NONE, null, settings);
+    }
+
+    /**
+     * Relaxes {@code guess} with an extra energy source and a composition-gradient term.
+     *
+     * @param nablaMu dln mu/dln P per point for the Ledoux criterion, null for none
+     * @throws SolveFailedException with the report when the relaxation does not converge
+     */
+    public StellarModel relax(ModelState guess, ExtraEnergy extra, double[] nablaMu,
+                              HenyeySolver.Settings solveSettings) {
+        return relax(guess, extra, nablaMu, solveSettings, 1.0);
+    }
+
+    /**
+     * Relaxes with the nuclear energy generation multiplied by {@code burningFactor} (a cold-start homotopy
+     * parameter; see {@link StructureEquations}); the result is a physical model only when it is one.
+     *
+     * @throws SolveFailedException with the report when the relaxation does not converge
+     */
+    public StellarModel relax(ModelState guess, ExtraEnergy extra, double[] nablaMu,
+                              HenyeySolver.Settings solveSettings, double burningFactor) {
+        return relax(guess, extra, nablaMu, solveSettings, burningFactor, null);
+    }
+
+    /**
+     * Relaxes with the shell compositions recomputed from the trial state at every evaluation
+     * ({@code compositionRule}; null keeps the guess's compositions).
+     *
+     * @throws SolveFailedException with the report when the relaxation does not converge
+     */
+    public StellarModel relax(ModelState guess, ExtraEnergy extra, double[] nablaMu,
+                              HenyeySolver.Settings solveSettings, double burningFactor,
+                              ShellComposition compositionRule) {
+        double scale = Math.abs(guess.surfaceLuminosity());
+        StructureEquations eq = new StructureEquations(guess.mesh(), guess.compositions(), physics, scale,
+                nablaMu, extra, burningFactor, compositionRule);
+        HenyeySolver.Result result = henyey.solve(eq, eq.unknowns(guess), solveSettings);
+        if (!result.report().converged()) {
+            throw new SolveFailedException("structure relaxation failed", result.report());
+        }
+        // the solver's last evaluation was at the returned state, so the scratch values describe it
+        return StellarModel.of(eq, result.solution(), result.report(), physics);
+    }
+}

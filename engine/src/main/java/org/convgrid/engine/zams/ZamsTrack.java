@@ -1,0 +1,123 @@
+package org.convgrid.engine.zams;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+
+import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.structure.SolveFailedException;
+import org.convgrid.engine.structure.SolveReport;
+import org.convgrid.engine.units.Constants;
+
+/**
+ * Zero-age models along one line of constant composition and physics, each seeded by homology from the nearest
+ * converged neighbours ({@link HomologySeeder}) and walked there in steps of at most {@link #MAX_STEP} in ln M,
+ * halved when a step fails. The first model comes from the polytropic guess at the requested mass, or, if that
+ * fails, at {@link #ANCHOR_MASS} and is walked from there. The walk depends only on the requests and their
+ * order, never on timing, so results are reproducible. Not thread-safe: one track per line and thread.
+ */
+public final class ZamsTrack {
+
+    /** Largest |ln(M'/M)| of one homology step. */
+    public static final double MAX_STEP = 0.15;
+    /** Smallest step tried before a request is given up. */
+    public static final double MIN_STEP = 0.004;
+    /** Mass of the fallback cold start, g (the Sun: the polytropic guess suits it best). */
+    public static final double ANCHOR_MASS = Constants.M_SUN;
+    /** Relaxations allowed for one request (cold starts, intermediate masses and retries together). */
+    public static final int ATTEMPT_BUDGET = 150;
+
+    private final ZamsBuilder builder;
+    private final Composition composition;
+    private final HomologySeeder seeder = new HomologySeeder();
+    private final List<ZamsModel> converged = new ArrayList<>();
+
+    public ZamsTrack(ZamsBuilder builder, Composition composition) {
+        this.builder = builder;
+        this.composition = composition;
+    }
+
+    /** Adds an externally converged model (same composition and physics) as a neighbour for seeding. */
+    public void add(ZamsModel model) {
+        converged.add(model);
+        converged.sort(Comparator.comparingDouble(z -> z.model().mass()));
+    }
+
+    /** The converged models so far, by increasing mass. */
+    public List<ZamsModel> models() {
+        return List.copyOf(converged);
+    }
+
+    /**
+     * The zero-age model of {@code mass} (g), never throwing for a non-converging model.
+     */
+    public ZamsResult solve(double mass) {
+        for (ZamsModel z : converged) {
+            if (z.model().mass() == mass) {
+                return ZamsResult.success(z, 0);
+            }
+        }
+        int spent = 0;
+        SolveReport coldFailure = null;
+        if (converged.isEmpty()) {
+            try {
+                ZamsModel z = builder.coldStart(mass, composition);
+                add(z);
+                return ZamsResult.success(z, z.iterations());
+            } catch (SolveFailedException e) {
+                coldFailure = e.report();
+                spent += e.report().iterations();
+            }
+            if (Math.abs(Math.log(mass / ANCHOR_MASS)) < MIN_STEP) {
+                return ZamsResult.failed(coldFailure, spent);
+            }
+            try {
+                ZamsModel z = builder.coldStart(ANCHOR_MASS, composition);
+                add(z);
+                spent += z.iterations();
+            } catch (SolveFailedException e) {
+                return ZamsResult.failed(coldFailure, spent + e.report().iterations());
+            }
+        }
+        double step = MAX_STEP;
+        for (int attempt = 0; attempt < ATTEMPT_BUDGET; attempt++) {
+            ZamsModel nearest = nearest(mass, null);
+            double remaining = Math.log(mass / nearest.model().mass());
+            double target = Math.abs(remaining) <= step ? mass
+                    : nearest.model().mass() * Math.exp(Math.copySign(step, remaining));
+            ZamsModel other = nearest(nearest.model().mass(), nearest);
+            try {
+                ZamsModel z = builder.fromSeed(seeder.seed(nearest.model(), other == null ? null : other.model(),
+                        target), composition);
+                add(z);
+                spent += z.iterations();
+                if (target == mass) {
+                    return ZamsResult.success(z, spent);
+                }
+                step = Math.min(MAX_STEP, 2.0 * step);
+            } catch (SolveFailedException e) {
+                spent += e.report().iterations();
+                step *= 0.5;
+                if (step < MIN_STEP) {
+                    return ZamsResult.failed(e.report(), spent);
+                }
+            }
+        }
+        return ZamsResult.failed(new SolveReport(org.convgrid.engine.structure.StopReason.ITERATION_BUDGET,
+                spent, Double.NaN, -1, -1, "homology walk used its " + ATTEMPT_BUDGET + " relaxations"), spent);
+    }
+
+    /** The converged model nearest to {@code mass} in ln M, other than {@code excluded}; null if none. */
+    private ZamsModel nearest(double mass, ZamsModel excluded) {
+        ZamsModel best = null;
+        double distance = Double.POSITIVE_INFINITY;
+        for (ZamsModel z : converged) {
+            double d = Math.abs(Math.log(z.model().mass() / mass));
+            if (z != excluded && d < distance) {
+                best = z;
+                distance = d;
+            }
+        }
+        return best;
+    }
+}
