@@ -15,6 +15,7 @@ import picocli.CommandLine.Option;
             MergeCommand.class,
             PlotCommand.class,
             ProbeCommand.class,
+            StarCommand.class,
         })
 public final class ConvgridMain implements Runnable {
 
