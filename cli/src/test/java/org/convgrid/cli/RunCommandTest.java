@@ -168,13 +168,21 @@ class RunCommandTest {
     }
 
     @Test
-    void theProductionSeamRefusesUntilTheSolverIsWiredAndWritesNothing() throws Exception {
-        Path grid = grid();
+    void theProductionSolverComputesRealZeroAgeModels() throws Exception {
+        Path grid = work.resolve("two-stars.yaml");
+        Files.writeString(grid, """
+                title: two stars
+                mass: {values: [0.9, 1.0]}
+                metallicity: {z: [0.0188], y: [0.275]}
+                output: {dir: runs/two-stars}
+                """);
         CliHarness cli = CliHarness.in(work, FakeChunkSolver.fast());
         cli = cli.with(cli.context().withSolvers(org.convgrid.cli.run.ProductionSolvers.factory()));
-        CliHarness.Execution refused = cli.execute("run", grid.toString());
-        assertThat(refused.code()).isEqualTo(1);
-        assertThat(refused.err()).contains("structure solver not yet wired");
-        assertThat(Files.exists(work.resolve("runs"))).isFalse();
+        CliHarness.Execution run = cli.execute("run", grid.toString(), "--threads", "1", "--quiet");
+        assertThat(run.code()).as(run.err()).isZero();
+        java.util.List<String> lines = Files.readAllLines(work.resolve("runs/two-stars/catalogue.csv"));
+        assertThat(lines).hasSize(3);
+        assertThat(lines.get(1)).contains(",ok,").contains("conv_envelope");
+        assertThat(lines.get(2)).contains(",ok,").contains("conv_envelope");
     }
 }
