@@ -38,7 +38,7 @@ final class MergeCommand implements Callable<Integer> {
         CommandContext context = parent.context();
         List<Path> dirs = shards.stream().map(context::resolve).toList();
         RunDirectory target = new RunDirectory(context.resolve(out));
-        FinishedRun run = new ShardMerger(ToolVersion.current(), Clock.systemUTC())
+        FinishedRun run = new ShardMerger(ToolVersion.current(), Clock.tickSeconds(java.time.ZoneOffset.UTC))
                 .merge(dirs, target, context.finishers());
         Map<ModelStatus, Long> counts = RunFinishing.countByStatus(run.catalogue());
         parent.out().println(target.root() + ": merged " + dirs.size() + " shard directories, "

@@ -81,7 +81,7 @@ final class RunCommand implements Callable<Integer> {
         Shard chosen = ShardChoice.choose(shard, context.environment()).orElse(null);
         ChunkSolver solver = context.solvers().solverFor(file.spec());
         RunDirectory dir = new RunDirectory(context.resolve(out != null ? out : defaultDirectory(file, chosen)));
-        GridRun runner = new GridRun(ToolVersion.current(), Clock.systemUTC());
+        GridRun runner = new GridRun(ToolVersion.current(), Clock.tickSeconds(java.time.ZoneOffset.UTC));
         long start = System.nanoTime();
         GridRun.Plan plan = runner.prepare(new GridRun.Settings(file, dir, n, chosen, resume, force));
         PrintWriter err = parent.err();
