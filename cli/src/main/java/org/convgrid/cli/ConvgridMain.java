@@ -9,7 +9,14 @@ import picocli.CommandLine.Option;
 @Command(name = "convgrid", mixinStandardHelpOptions = true, versionProvider = ToolVersion.class,
         description = "Where convection operates inside main-sequence stars, across a grid of mass, "
                 + "metallicity and age.",
-        subcommands = {ProbeCommand.class})
+        subcommands = {
+            CheckCommand.class,
+            RunCommand.class,
+            MergeCommand.class,
+            PlotCommand.class,
+            ProbeCommand.class,
+            StarCommand.class,
+        })
 public final class ConvgridMain implements Runnable {
 
     @Option(names = "--verbose", scope = CommandLine.ScopeType.INHERIT,
@@ -19,14 +26,40 @@ public final class ConvgridMain implements Runnable {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
+    private final CommandContext context;
+
+    ConvgridMain(CommandContext context) {
+        this.context = context;
+    }
+
     @Override
     public void run() {
         spec.commandLine().usage(spec.commandLine().getOut());
     }
 
-    /** Builds the command line with convgrid's error handling; used by {@link #main} and by tests. */
+    /** What the subcommands take from the world (solver seam, finishers, environment). */
+    CommandContext context() {
+        return context;
+    }
+
+    /** Standard output of the command line (the results). */
+    PrintWriter out() {
+        return spec.commandLine().getOut();
+    }
+
+    /** Error output of the command line (messages, progress). */
+    PrintWriter err() {
+        return spec.commandLine().getErr();
+    }
+
+    /** Builds the command line with convgrid's error handling and the production context; used by {@link #main}. */
     public static CommandLine commandLine(PrintWriter out, PrintWriter err) {
-        CommandLine cli = new CommandLine(new ConvgridMain());
+        return commandLine(out, err, CommandContext.production());
+    }
+
+    /** Builds the command line with convgrid's error handling and the given context (tests inject fakes here). */
+    public static CommandLine commandLine(PrintWriter out, PrintWriter err, CommandContext context) {
+        CommandLine cli = new CommandLine(new ConvgridMain(context));
         cli.setOut(out);
         cli.setErr(err);
         cli.setCaseInsensitiveEnumValuesAllowed(true);

@@ -1,6 +1,10 @@
 package org.convgrid.grids;
 
+import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.HexFormat;
@@ -15,7 +19,16 @@ public final class GridHash {
     private GridHash() {
     }
 
-    /** Lower-case hex SHA-256 of the bytes. */
+    /** Lower-case hex SHA-256 of a file's bytes. */
+    public static String ofFile(String path) {
+        try {
+            return ofBytes(Files.readAllBytes(Path.of(path)));
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot read " + path, e);
+        }
+    }
+
+    /** SHA-256 of the bytes, lower-case hex. */
     public static String ofBytes(byte[] bytes) {
         try {
             return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
@@ -42,6 +55,10 @@ public final class GridHash {
         text.append("overshoot=").append(physics.overshoots()).append('\n');
         text.append("criterion=").append(physics.criteria()).append('\n');
         text.append("opacity_factor=").append(physics.opacityFactors()).append('\n');
+        if (!physics.opacityTable().isEmpty()) {
+            // The table's content decides the models, not its name: hash the bytes.
+            text.append("opacity_table=").append(ofFile(physics.opacityTable())).append('\n');
+        }
         return text.toString();
     }
 }

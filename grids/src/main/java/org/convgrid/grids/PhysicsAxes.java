@@ -13,9 +13,16 @@ import org.convgrid.engine.convection.StabilityCriterion;
  * @param overshoots step overshoot distances, pressure scale heights, each &gt;= 0
  * @param criteria stability criteria
  * @param opacityFactors opacity multipliers, each &gt; 0
+ * @param opacityTable path of a user opacity table (resolved against the grid file's folder); empty for none
  */
 public record PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, List<StabilityCriterion> criteria,
-                          List<Double> opacityFactors) {
+                          List<Double> opacityFactors, String opacityTable) {
+
+    /** Axes with the analytic opacity. */
+    public PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, List<StabilityCriterion> criteria,
+                       List<Double> opacityFactors) {
+        this(mixingLengths, overshoots, criteria, opacityFactors, "");
+    }
 
     /** One value per axis: the engine defaults. */
     public static final PhysicsAxes DEFAULT = new PhysicsAxes(List.of(PhysicsOptions.DEFAULT.mixingLength()),
@@ -41,7 +48,7 @@ public record PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, L
             for (double overshoot : overshoots) {
                 for (StabilityCriterion criterion : criteria) {
                     for (double factor : opacityFactors) {
-                        all.add(new PhysicsOptions(alpha, overshoot, criterion, factor));
+                        all.add(new PhysicsOptions(alpha, overshoot, criterion, factor, opacityTable));
                     }
                 }
             }

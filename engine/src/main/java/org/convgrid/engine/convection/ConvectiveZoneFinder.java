@@ -20,7 +20,8 @@ import org.convgrid.engine.error.ConvgridException;
  * <li>The <em>core</em> is the zone that starts at the centre, provided its top exceeds the minimum core mass
  * fraction (default {@value #DEFAULT_MIN_CORE_MASS_FRACTION}, common practice: below it the "core" is a few
  * central mesh points, comparable with where the first mesh point sits, formulas.md 6.2).</li>
- * <li>The <em>envelope</em> is the outermost zone if it reaches the surface, i.e. the mass above its top is at
+ * <li>The <em>envelope</em> is the outermost zone if it holds at least the minimum envelope mass fraction (default
+ * {@value #DEFAULT_MIN_ENVELOPE_MASS_FRACTION}) and reaches the surface, i.e. the mass above its top is at
  * most the surface skin fraction (default {@value #DEFAULT_SURFACE_SKIN_MASS_FRACTION}). The skin exists because
  * in real envelopes the convective top lies a little below the fitting point, where the atmosphere T(tau) keeps
  * the layers just under the photosphere radiative; the skin is far below any envelope of interest.</li>
@@ -45,6 +46,13 @@ public final class ConvectiveZoneFinder {
 
     /** Default smallest m/M at the top of a central zone for it to count as a convective core. */
     public static final double DEFAULT_MIN_CORE_MASS_FRACTION = 1.0e-4;
+    /**
+     * Default smallest mass fraction of a surface zone for it to count as a convective envelope. The thin
+     * hydrogen and helium ionisation zones of A and B stars hold ~1e-9 to 1e-7 of the mass (from memory): they
+     * are listed among the zones but do not make the star a convective-envelope star; F-star envelopes, 1e-5 of
+     * the mass and more, do count (common practice draws the line in this range; no single source).
+     */
+    public static final double DEFAULT_MIN_ENVELOPE_MASS_FRACTION = 1.0e-6;
     /** Default largest mass fraction above the top of a zone for it to count as reaching the surface. */
     public static final double DEFAULT_SURFACE_SKIN_MASS_FRACTION = 1.0e-6;
     /** Height of the local turnover point above the envelope base, in pressure scale heights (conventions.md). */
@@ -52,17 +60,27 @@ public final class ConvectiveZoneFinder {
 
     private final double minCoreMassFraction;
     private final double surfaceSkinMassFraction;
+    private final double minEnvelopeMassFraction;
 
     /** A finder with the default core threshold and surface skin. */
     public ConvectiveZoneFinder() {
         this(DEFAULT_MIN_CORE_MASS_FRACTION, DEFAULT_SURFACE_SKIN_MASS_FRACTION);
     }
 
+    /** A finder with the default minimum envelope mass. */
+    public ConvectiveZoneFinder(double minCoreMassFraction, double surfaceSkinMassFraction) {
+        this(minCoreMassFraction, surfaceSkinMassFraction, DEFAULT_MIN_ENVELOPE_MASS_FRACTION);
+    }
+
     /**
      * @param minCoreMassFraction smallest m/M at the top of a central zone for a convective core, in [0, 1)
      * @param surfaceSkinMassFraction largest mass fraction above a zone that still reaches the surface, in [0, 1)
+     * @param minEnvelopeMassFraction smallest mass fraction of a surface zone for a convective envelope
      */
-    public ConvectiveZoneFinder(double minCoreMassFraction, double surfaceSkinMassFraction) {
+    public ConvectiveZoneFinder(double minCoreMassFraction, double surfaceSkinMassFraction,
+                                double minEnvelopeMassFraction) {
+        this.minEnvelopeMassFraction = ConvgridException.requireInRange("minEnvelopeMassFraction",
+                minEnvelopeMassFraction, 0.0, 0.5, "");
         this.minCoreMassFraction = ConvgridException.requireInRange("minCoreMassFraction", minCoreMassFraction,
                 0.0, 0.5, "");
         this.surfaceSkinMassFraction = ConvgridException.requireInRange("surfaceSkinMassFraction",
@@ -100,7 +118,8 @@ public final class ConvectiveZoneFinder {
         ConvectiveZone outermost = zones.get(zones.size() - 1);
         boolean startsAtCentre = spans.get(0)[0] == 0;
         boolean hasCore = startsAtCentre && innermost.outerMassFraction() > minCoreMassFraction;
-        boolean hasEnvelope = 1.0 - outermost.outerMassFraction() <= surfaceSkinMassFraction;
+        boolean hasEnvelope = 1.0 - outermost.outerMassFraction() <= surfaceSkinMassFraction
+                && outermost.outerMassFraction() - outermost.innerMassFraction() >= minEnvelopeMassFraction;
         int[] envSpan = spans.get(spans.size() - 1);
         if (hasEnvelope && startsAtCentre && zones.size() == 1) {
             return new ConvectiveStructure(zones, StructureClass.FULLY_CONVECTIVE, 1.0, 0.0, 0.0,

@@ -1,5 +1,6 @@
 package org.convgrid.engine.physics;
 
+import java.nio.file.Path;
 import org.convgrid.engine.batch.PhysicsOptions;
 import org.convgrid.engine.convection.MixingLengthTheory;
 import org.convgrid.engine.error.ConvgridException;
@@ -11,36 +12,68 @@ import org.convgrid.engine.physics.atmosphere.SurfaceCondition;
 import org.convgrid.engine.physics.eos.EquationOfState;
 import org.convgrid.engine.physics.eos.StellarPlasmaEos;
 import org.convgrid.engine.physics.nuclear.HydrogenBurningNetwork;
+import org.convgrid.engine.physics.nuclear.NuclearNetwork;
 import org.convgrid.engine.physics.opacity.AnalyticCompositeOpacity;
 import org.convgrid.engine.physics.opacity.Opacity;
+import org.convgrid.engine.physics.opacity.OpacityTableReader;
 import org.convgrid.engine.physics.opacity.ScaledOpacity;
 import org.convgrid.engine.state.Composition;
 
 /**
  * The default physics of zero-age and main-sequence models: {@link StellarPlasmaEos},
- * {@link AnalyticCompositeOpacity} (times the options' opacity factor), {@link HydrogenBurningNetwork},
- * {@link MixingLengthTheory} with the options' alpha, the options' stability criterion, and a grey atmosphere
- * tabulated once for the surface composition, with the direct integration where the table has no answer.
+ * {@link AnalyticCompositeOpacity} or a user table (times the options' opacity factor),
+ * {@link HydrogenBurningNetwork}, {@link MixingLengthTheory} with the options' alpha, the options' stability
+ * criterion, and a grey atmosphere tabulated once for the surface composition, with the direct integration where
+ * the table has no answer. Every component is immutable and thread-safe, so the stateless ones are shared.
  */
 public final class StandardPhysics {
+
+    private static final EquationOfState EOS = new StellarPlasmaEos();
+    private static final Opacity OPACITY = AnalyticCompositeOpacity.standard();
+    private static final NuclearNetwork NUCLEAR = new HydrogenBurningNetwork();
 
     private StandardPhysics() {
     }
 
+    /** Ideal ions, radiation, electrons of any degeneracy, Saha ionisation with pressure ionisation, Coulomb term. */
+    public static EquationOfState equationOfState() {
+        return EOS;
+    }
+
+    /** The analytic composite Rosseland mean multiplied by {@code factor} (1 = as published). */
+    public static Opacity opacity(double factor) {
+        return ScaledOpacity.of(OPACITY, factor);
+    }
+
     /**
-     * @param options mixing length, overshoot, criterion and opacity factor
+     * The opacity the options ask for: a user table when one is named (read here), else the analytic composite;
+     * times the opacity factor.
+     *
+     * @throws ConvgridException BAD_DATA when the table cannot be read
+     */
+    public static Opacity opacity(PhysicsOptions options) {
+        return options.usesOpacityTable()
+                ? ScaledOpacity.of(OpacityTableReader.read(Path.of(options.opacityTable())), options.opacityFactor())
+                : opacity(options.opacityFactor());
+    }
+
+    /** pp chains and CNO cycle with Salpeter screening. */
+    public static NuclearNetwork nuclearNetwork() {
+        return NUCLEAR;
+    }
+
+    /**
+     * @param options mixing length, overshoot, criterion, opacity factor and table
      * @param surfaceComposition the composition the atmosphere table is built for (a homogeneous star's
      *                           initial composition); the table answers for that composition whatever it is
      *                           asked with
      */
     public static PhysicsSet create(PhysicsOptions options, Composition surfaceComposition) {
-        EquationOfState eos = new StellarPlasmaEos();
-        Opacity opacity = ScaledOpacity.of(AnalyticCompositeOpacity.standard(), options.opacityFactor());
-        GreyAtmosphere atmosphere = new GreyAtmosphere(eos, opacity);
+        Opacity opacity = opacity(options);
+        GreyAtmosphere atmosphere = new GreyAtmosphere(EOS, opacity);
         SurfaceBoundary table = new AtmosphereTable(atmosphere).tabulate(surfaceComposition);
-        return new PhysicsSet(eos, opacity, new HydrogenBurningNetwork(),
-                new MixingLengthTheory(options.mixingLength()), options.criterion(),
-                new TableWithFallback(table, atmosphere), options.overshoot());
+        return new PhysicsSet(EOS, opacity, NUCLEAR, new MixingLengthTheory(options.mixingLength()),
+                options.criterion(), new TableWithFallback(table, atmosphere), options.overshoot());
     }
 
     /**

@@ -53,6 +53,28 @@ class ConvectiveZoneFinderTest {
     }
 
     @Test
+    void aThinSurfaceIonisationZoneIsListedButIsNoEnvelope() {
+        // A hot star: convective core to m/M = 0.2 and a surface zone holding 1e-7 of the mass (A-star-like
+        // ionisation zone; DEFAULT_MIN_ENVELOPE_MASS_FRACTION = 1e-6).
+        double[] q = new double[2001];
+        for (int k = 0; k < 1001; k++) {
+            q[k] = 0.999 * k / 1000.0;
+        }
+        for (int k = 1; k <= 1000; k++) {
+            q[1000 + k] = 1.0 - 1.0e-3 * Math.pow(10.0, -9.0 * k / 1000.0); // down to 1e-12 below the surface
+        }
+        q[2000] = 1.0;
+        ConvectiveStructure s = finder.find(profile(q, x -> x < 0.2 ? 0.1 : (1 - x < 1e-7 ? 0.1 : -0.1),
+                x -> 1e4, x -> 0.05 * R));
+        assertThat(s.zones()).hasSize(2);
+        assertThat(s.structureClass()).isEqualTo(StructureClass.CONV_CORE);
+        assertThat(s.envelopeBaseMassFraction()).isEqualTo(1.0);
+        ConvectiveStructure permissive = new ConvectiveZoneFinder(1e-4, 1e-6, 1e-8)
+                .find(profile(q, x -> x < 0.2 ? 0.1 : (1 - x < 1e-7 ? 0.1 : -0.1), x -> 1e4, x -> 0.05 * R));
+        assertThat(permissive.structureClass()).isEqualTo(StructureClass.CONV_CORE_AND_ENVELOPE);
+    }
+
+    @Test
     void radiativeStarHasNoZones() {
         ConvectiveStructure s = finder.find(simple(q -> -0.1));
         assertThat(s.structureClass()).isEqualTo(StructureClass.RADIATIVE);

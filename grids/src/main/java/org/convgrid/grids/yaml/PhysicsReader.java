@@ -1,10 +1,13 @@
 package org.convgrid.grids.yaml;
 
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.convgrid.engine.batch.PhysicsOptions;
 import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.engine.error.ConvgridException;
+import org.convgrid.engine.physics.opacity.OpacityTableReader;
 import org.convgrid.grids.PhysicsAxes;
 import org.snakeyaml.engine.v2.nodes.MappingNode;
 import org.snakeyaml.engine.v2.nodes.Node;
@@ -15,7 +18,8 @@ import org.snakeyaml.engine.v2.nodes.Node;
  */
 final class PhysicsReader {
 
-    private static final List<String> KEYS = List.of("mixing_length", "overshoot", "criterion", "opacity_factor");
+    private static final List<String> KEYS = List.of("mixing_length", "overshoot", "criterion", "opacity_factor",
+            "opacity_table");
     private static final Range POSITIVE = Range.open(0.0, Double.POSITIVE_INFINITY);
     private static final Range NON_NEGATIVE = new Range(0.0, true, Double.POSITIVE_INFINITY, false);
 
@@ -45,10 +49,31 @@ final class PhysicsReader {
         List<Double> factors = fields.has("opacity_factor")
                 ? AxisValues.distinct(fields.value("opacity_factor"), "opacity_factor", POSITIVE, reader)
                 : List.of(d.opacityFactor());
-        if (alphas == null || overshoots == null || criteria == null || factors == null) {
+        String table = fields.has("opacity_table") ? opacityTable(fields.value("opacity_table"), reader) : "";
+        if (alphas == null || overshoots == null || criteria == null || factors == null || table == null) {
             return null;
         }
-        return new PhysicsAxes(alphas, overshoots, criteria, factors);
+        return new PhysicsAxes(alphas, overshoots, criteria, factors, table);
+    }
+
+    /**
+     * A user opacity table, resolved against the grid file's folder and read once here so that a bad table is
+     * reported with the grid file's line and column, before anything runs.
+     */
+    private static String opacityTable(Node node, NodeReader reader) {
+        String text = reader.text(node, "opacity_table");
+        if (text == null) {
+            return null;
+        }
+        Path folder = Path.of(reader.file()).toAbsolutePath().getParent();
+        Path table = folder == null ? Path.of(text) : folder.resolve(text);
+        try {
+            OpacityTableReader.read(table);
+        } catch (ConvgridException e) {
+            reader.problem(node, "opacity_table: " + e.getMessage());
+            return null;
+        }
+        return table.normalize().toString();
     }
 
     private static List<StabilityCriterion> criteria(Node node, NodeReader reader) {

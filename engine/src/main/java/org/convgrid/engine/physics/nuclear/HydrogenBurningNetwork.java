@@ -30,11 +30,14 @@ import org.convgrid.engine.units.Constants;
 public final class HydrogenBurningNetwork implements NuclearNetwork {
 
     /**
-     * Default time over which {@link #equilibrium} lets 3He and the CN pair relax: 1e8 yr, about the
-     * pre-main-sequence contraction time of 0.5-1 Msun stars (from memory), i.e. the processing a zero-age
-     * star has had time for.
+     * Default time over which {@link #equilibrium} lets 3He and the CN pair relax: 1e9 yr. A zero-age model has
+     * 3He and CN "at their equilibrium abundances where they burn": over 1e9 yr every layer whose burning matters
+     * on the main sequence reaches it, while layers too cool to burn keep their initial abundances. A shorter
+     * time (1e8 yr, about the pre-main-sequence contraction of 0.5-1 Msun stars, from memory) leaves 3He at
+     * equilibrium only at the very centre of K dwarfs, and the steep central energy release that results gave
+     * spurious convective cores of a few 1e-3 of the mass at 0.5-0.6 Msun; models of such stars have none.
      */
-    public static final double DEFAULT_EQUILIBRATION_TIME = 1.0e8 * Constants.YEAR;
+    public static final double DEFAULT_EQUILIBRATION_TIME = 1.0e9 * Constants.YEAR;
     /** Highest temperature accepted, K: beyond it the non-resonant S-factor expansions are meaningless. */
     public static final double MAX_TEMPERATURE = 1.0e9;
 

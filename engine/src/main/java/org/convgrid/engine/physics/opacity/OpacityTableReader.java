@@ -5,7 +5,6 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.InputStreamReader;
 import java.io.Reader;
-import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -59,12 +58,17 @@ public final class OpacityTableReader {
         return read(new InputStreamReader(in, StandardCharsets.UTF_8), source);
     }
 
-    /** Thin wrapper: reads a file. */
+    /**
+     * Thin wrapper: reads a file.
+     *
+     * @throws ConvgridException BAD_DATA when the file cannot be read or understood
+     */
     public static TabulatedOpacity read(Path file) {
         try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
             return read(in, file.toString());
         } catch (IOException e) {
-            throw new UncheckedIOException(e);
+            throw new ConvgridException(ErrorKind.BAD_DATA, "cannot read opacity table " + file + ": "
+                    + e.getClass().getSimpleName() + (e.getMessage() == null ? "" : " " + e.getMessage()), file);
         }
     }
 

@@ -16,6 +16,12 @@ class AnalyticCompositeOpacityTest extends OpacityContractTest {
 
     /** Largest allowed jump of ln kappa between neighbouring points 0.002 dex apart in T or rho. */
     static final double MAX_STEP_JUMP = 0.03;
+    /** Allowed |log kappa - log kappa_OPAL| in main-sequence interiors, dex. */
+    static final double INTERIOR_DEX = 0.2;
+    /** Allowed |log kappa - log kappa_OPAL| in the photospheric H^- regime, dex. */
+    static final double PHOTOSPHERE_DEX = 0.25;
+    /** Table entries above this are the "outside the table" marker 9.999. */
+    static final double OUT_OF_TABLE = 9.0;
 
     private final AnalyticCompositeOpacity composite = AnalyticCompositeOpacity.standard();
 
@@ -37,6 +43,54 @@ class AnalyticCompositeOpacityTest extends OpacityContractTest {
             double k = composite.rosselandMean(rho, t, c).kappa();
             assertThat(k).as("%s: kappa %s vs published %s", row[0], k, ref).isBetween(ref / factor, ref * factor);
         }
+    }
+
+    @Test
+    void followsOpalThroughMainSequenceInteriors() throws IOException {
+        // Iglesias & Rogers 1996 (ApJ 464, 943), OPAL GN93 tables for Z = 0.02, X = 0.70 and 0.35, copied in
+        // reference/opacity/opal-gn93-*.txt. The bound-free guillotine and the Pauli-blocking coefficient were
+        // fitted to these tables over 6.0 <= log T <= 7.5, -3.5 <= log R <= -0.5 (largest misfit 0.2 dex, at
+        // log T 6.2-6.3, log R -2, where metal lines are missing; mostly < 0.1 dex), so this checks the fit and
+        // its implementation: |log kappa - log kappa_OPAL| <= INTERIOR_DEX over
+        // 6.3 <= log T <= 7.3, -2 <= log R <= -0.5 (the 0.6-1.5 Msun radiative interiors; hotter and denser
+        // points are degenerate, where conduction takes over).
+        assertWithinDex("opal-gn93-x070-z002.txt", 0.70, 6.3, 7.3, -2.0, -0.5, INTERIOR_DEX);
+        // hydrogen-depleted (X = 0.35) matter exists on the main sequence only in burning cores, log T >= 6.9
+        assertWithinDex("opal-gn93-x035-z002.txt", 0.35, 6.9, 7.3, -2.0, -0.5, INTERIOR_DEX);
+    }
+
+    @Test
+    void followsOpalInThePhotosphericHydrogenMinusRegime() throws IOException {
+        // Same OPAL table (X = 0.70, Z = 0.02): 5600-7100 K, -1.5 <= log R <= 0 (the solar photosphere has log R 0.05), where H^- dominates and where the
+        // H^- power law was fitted (rms 0.15 dex over its wider fit window -3 <= log R <= 1).
+        assertWithinDex("opal-gn93-x070-z002.txt", 0.70, 3.75, 3.85, -1.5, 0.0, PHOTOSPHERE_DEX);
+    }
+
+    private void assertWithinDex(String table, double x, double logTMin, double logTMax, double logRMin,
+                                 double logRMax, double dex) throws IOException {
+        List<String[]> rows = rows("/reference/opacity/" + table);
+        String[] header = rows.get(0);
+        Composition c = Composition.scaledSolar(x, 0.02);
+        int checked = 0;
+        for (String[] row : rows.subList(1, rows.size())) {
+            double logT = Double.parseDouble(row[0]);
+            if (logT < logTMin - 1e-9 || logT > logTMax + 1e-9) {
+                continue;
+            }
+            for (int j = 1; j < header.length; j++) {
+                double logR = Double.parseDouble(header[j]);
+                double logK = Double.parseDouble(row[j]);
+                if (logR < logRMin - 1e-9 || logR > logRMax + 1e-9 || logK > OUT_OF_TABLE) {
+                    continue;
+                }
+                double t = Math.pow(10.0, logT);
+                double rho = Math.pow(10.0, logR) * Math.pow(t * 1e-6, 3);
+                double model = Math.log10(composite.rosselandMean(rho, t, c).kappa());
+                assertThat(model - logK).as("%s log T %s log R %s", table, logT, logR).isBetween(-dex, dex);
+                checked++;
+            }
+        }
+        assertThat(checked).isGreaterThan(10);
     }
 
     @Test
@@ -74,10 +128,15 @@ class AnalyticCompositeOpacityTest extends OpacityContractTest {
     }
 
     static List<String[]> referenceRows() throws IOException {
+        List<String[]> rows = rows("/reference/opacity/solar-interior-opal.txt");
+        assertThat(rows).hasSizeGreaterThanOrEqualTo(5);
+        return rows;
+    }
+
+    static List<String[]> rows(String resource) throws IOException {
         List<String[]> rows = new ArrayList<>();
         try (BufferedReader r = new BufferedReader(new InputStreamReader(Objects.requireNonNull(
-                AnalyticCompositeOpacityTest.class.getResourceAsStream("/reference/opacity/solar-interior-opal.txt")),
-                StandardCharsets.UTF_8))) {
+                AnalyticCompositeOpacityTest.class.getResourceAsStream(resource)), StandardCharsets.UTF_8))) {
             String line;
             while ((line = r.readLine()) != null) {
                 if (!line.isBlank() && !line.startsWith("#")) {
@@ -85,7 +144,6 @@ class AnalyticCompositeOpacityTest extends OpacityContractTest {
                 }
             }
         }
-        assertThat(rows).hasSizeGreaterThanOrEqualTo(5);
         return rows;
     }
 }

@@ -24,10 +24,24 @@ class KramersBoundFreeTest extends OpacityContractTest {
 
     @Test
     void guillotineIsOneBelowTheKneeAndGrowsAboveIt() {
-        // formulas.md 2.3 (D, own arithmetic): t = 1 suits the CZ base, t ~ 20 the solar centre.
+        // formulas.md 2.3 (D, own arithmetic): t ~ 1 suits the CZ base (T = 2.2e6, rho = 0.19), t ~ 20 the solar
+        // centre (T = 1.57e7, rho = 150). The fitted knee now moves with density, so the checks use those densities.
         KramersBoundFree bf = new KramersBoundFree();
-        assertThat(bf.guillotine(2.2e6)).isBetween(1.0, 1.1);
-        assertThat(bf.guillotine(1.57e7)).isBetween(15.0, 30.0);
-        assertThat(bf.guillotine(1e5)).isCloseTo(1.0, within(1e-6));
+        assertThat(bf.guillotine(0.19, 2.2e6)).isBetween(1.0, 1.1);
+        assertThat(bf.guillotine(150, 1.57e7)).isBetween(15.0, 30.0);
+        assertThat(bf.guillotine(1e-6, 1e5)).isCloseTo(1.0, within(1e-6));
+    }
+
+    @Test
+    void denserGasStripsLaterSoTheGuillotineFallsWithDensityAtFixedTemperature() {
+        // OPAL (Iglesias & Rogers 1996, GN93 X = 0.70, Z = 0.02; reference/opacity/opal-gn93-x070-z002.txt): at
+        // log T = 6.7, kappa grows by only 0.37 dex from log R = -2 to -1 (log kappa 0.558 -> 0.931), less than the
+        // full decade a rho-linear Kramers law gives; the fitted guillotine supplies the missing density dependence.
+        KramersBoundFree bf = new KramersBoundFree();
+        double t = Math.pow(10.0, 6.7);
+        double rhoLow = 1e-2 * Math.pow(t * 1e-6, 3);
+        assertThat(bf.guillotine(10.0 * rhoLow, t)).isGreaterThan(bf.guillotine(rhoLow, t));
+        KramersBoundFree blind = new KramersBoundFree(2e6, 1.5, 0.0, 11.0);
+        assertThat(blind.guillotine(10.0 * rhoLow, t)).isCloseTo(blind.guillotine(rhoLow, t), within(1e-12));
     }
 }

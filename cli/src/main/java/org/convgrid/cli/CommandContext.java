@@ -1,0 +1,64 @@
+package org.convgrid.cli;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.EnumSet;
+import org.convgrid.cli.run.ChunkSolverFactory;
+import org.convgrid.cli.run.MapsAndReport;
+import org.convgrid.cli.run.ProductionSolvers;
+import org.convgrid.cli.run.RunFinisher;
+import org.convgrid.plotting.style.ChartFiles;
+
+/**
+ * What the commands take from the world, gathered so tests can replace it: the solver seam, the finishers run at
+ * the end of {@code run} and {@code merge}, the environment (Slurm variables), the directory relative paths are
+ * resolved against, and whether the error stream is a terminal (progress redrawn in place).
+ *
+ * @param solvers makes the chunk solver of a grid
+ * @param finishers last steps after a run directory is complete, in order
+ * @param environment process environment variables
+ * @param workingDirectory absolute directory that relative paths are resolved against
+ * @param terminal whether progress may redraw one line in place
+ */
+public record CommandContext(ChunkSolverFactory solvers, List<RunFinisher> finishers, Map<String, String> environment,
+                             Path workingDirectory, boolean terminal) {
+
+    public CommandContext {
+        finishers = List.copyOf(finishers);
+        environment = Map.copyOf(environment);
+        workingDirectory = workingDirectory.toAbsolutePath();
+    }
+
+    /** The real process: production solver, maps and report at the end, the process environment and directory. */
+    public static CommandContext production() {
+        return new CommandContext(ProductionSolvers.factory(),
+                List.of(new MapsAndReport(EnumSet.noneOf(ChartFiles.VectorFormat.class))), System.getenv(),
+                Path.of("").toAbsolutePath(), System.console() != null);
+    }
+
+    public CommandContext withSolvers(ChunkSolverFactory newSolvers) {
+        return new CommandContext(newSolvers, finishers, environment, workingDirectory, terminal);
+    }
+
+    /** The same context with one more finisher at the end of the list. */
+    public CommandContext withFinisher(RunFinisher finisher) {
+        List<RunFinisher> all = new ArrayList<>(finishers);
+        all.add(finisher);
+        return new CommandContext(solvers, all, environment, workingDirectory, terminal);
+    }
+
+    public CommandContext withEnvironment(Map<String, String> newEnvironment) {
+        return new CommandContext(solvers, finishers, newEnvironment, workingDirectory, terminal);
+    }
+
+    public CommandContext withWorkingDirectory(Path directory) {
+        return new CommandContext(solvers, finishers, environment, directory, terminal);
+    }
+
+    /** A path from the command line, relative ones taken from {@link #workingDirectory}. */
+    Path resolve(Path path) {
+        return workingDirectory.resolve(path).normalize();
+    }
+}

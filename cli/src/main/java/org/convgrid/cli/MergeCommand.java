@@ -1,0 +1,49 @@
+package org.convgrid.cli;
+
+import java.nio.file.Path;
+import java.time.Clock;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.convgrid.cli.run.FinishedRun;
+import org.convgrid.cli.run.RunDirectory;
+import org.convgrid.cli.run.RunFinishing;
+import org.convgrid.cli.run.ShardMerger;
+import org.convgrid.engine.batch.ModelStatus;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.ParentCommand;
+
+/** {@code convgrid merge DIR... --out DIR}: joins shard run directories into one. */
+@Command(name = "merge", mixinStandardHelpOptions = true,
+        description = {"Join the run directories of the shards of one grid into one run directory, identical to "
+                + "a single run of the grid: rows in grid order, transitions.csv and a merged manifest.yaml.",
+            "Refused (exit code 2, nothing written) when the shards come from different grids, or when a model is "
+                + "missing from every shard or present in several. Exit code 3 when some merged models are not ok."})
+final class MergeCommand implements Callable<Integer> {
+
+    @ParentCommand
+    ConvgridMain parent;
+
+    @Parameters(arity = "1..*", paramLabel = "DIR", description = "Shard run directories (paths).")
+    List<Path> shards;
+
+    @Option(names = "--out", required = true, paramLabel = "DIR",
+            description = "Merged run directory (path; created; must not hold a run yet).")
+    Path out;
+
+    @Override
+    public Integer call() throws Exception {
+        CommandContext context = parent.context();
+        List<Path> dirs = shards.stream().map(context::resolve).toList();
+        RunDirectory target = new RunDirectory(context.resolve(out));
+        FinishedRun run = new ShardMerger(ToolVersion.current(), Clock.tickSeconds(java.time.ZoneOffset.UTC))
+                .merge(dirs, target, context.finishers());
+        Map<ModelStatus, Long> counts = RunFinishing.countByStatus(run.catalogue());
+        parent.out().println(target.root() + ": merged " + dirs.size() + " shard directories, "
+                + run.catalogue().size() + " models (" + RunCommand.describe(counts) + ")");
+        parent.out().flush();
+        return RunFinishing.someModelsFailed(counts) ? ExitCodes.SOME_MODELS_FAILED : ExitCodes.OK;
+    }
+}

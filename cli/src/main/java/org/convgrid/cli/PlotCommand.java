@@ -1,0 +1,46 @@
+package org.convgrid.cli;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Set;
+import java.util.concurrent.Callable;
+import org.convgrid.plotting.report.ReportPage;
+import org.convgrid.plotting.RunMaps;
+import org.convgrid.plotting.style.ChartFiles;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.ParentCommand;
+
+/** {@code convgrid plot}: redraw the maps and the report page of a run from its files alone. */
+@Command(name = "plot", mixinStandardHelpOptions = true,
+        description = "Redraw the PNG maps (RUN_DIR/maps/) and report.html of a run from its catalogue, "
+                + "transitions and manifest.")
+final class PlotCommand implements Callable<Integer> {
+
+    @ParentCommand
+    ConvgridMain main;
+
+    @Parameters(index = "0", paramLabel = "RUN_DIR", description = "A run directory (holds catalogue.csv).")
+    Path runDirectory;
+
+    @Option(names = "--vector", split = ",", paramLabel = "svg|pdf",
+            description = "Also write every chart as SVG and/or PDF (comma-separated).")
+    List<ChartFiles.VectorFormat> vector = List.of();
+
+    @Override
+    public Integer call() throws Exception {
+        Path dir = main.context().resolve(runDirectory);
+        if (!Files.isRegularFile(dir.resolve("catalogue.csv"))) {
+            throw new UsageException(dir + " is not a run directory (no catalogue.csv)");
+        }
+        Set<ChartFiles.VectorFormat> formats = vector.isEmpty()
+                ? EnumSet.noneOf(ChartFiles.VectorFormat.class) : EnumSet.copyOf(vector);
+        List<Path> maps = RunMaps.drawAll(dir, formats);
+        Path report = ReportPage.write(dir);
+        main.out().println("wrote " + maps.size() + " charts to " + dir.resolve(RunMaps.MAPS_DIR) + " and " + report);
+        return ExitCodes.OK;
+    }
+}

@@ -1,0 +1,149 @@
+package org.convgrid.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.time.Clock;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import java.util.stream.Collectors;
+import org.convgrid.cli.run.Durations;
+import org.convgrid.cli.run.GridRun;
+import org.convgrid.cli.run.ProgressReporter;
+import org.convgrid.cli.run.RunDirectory;
+import org.convgrid.cli.run.RunFinishing;
+import org.convgrid.cli.run.ShardChoice;
+import org.convgrid.engine.batch.ChunkSolver;
+import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.batch.ProgressListener;
+import org.convgrid.engine.batch.Shard;
+import org.convgrid.grids.GridFile;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.ParentCommand;
+
+/** {@code convgrid run GRID.yaml}: sweeps a grid into a run directory, resumable and shardable. */
+@Command(name = "run", mixinStandardHelpOptions = true,
+        description = {"Compute every model of a grid and write a run directory: catalogue.csv (grown row by row in "
+                + "grid order), transitions.csv and manifest.yaml.",
+            "Exit codes: 0 all models ok, 3 some models failed or did not converge (they are in the catalogue with "
+                + "their status), 2 bad grid file or usage, 1 I/O or software failure."})
+final class RunCommand implements Callable<Integer> {
+
+    /** Grids larger than this many models need --yes: a typo in a step can ask for days of computing. */
+    static final long LARGE_GRID_MODELS = 100_000L;
+
+    @ParentCommand
+    ConvgridMain parent;
+
+    @Parameters(index = "0", paramLabel = "GRID.yaml", description = "Grid file (YAML).")
+    Path grid;
+
+    @Option(names = "--out", paramLabel = "DIR", description = {"Run directory (path; default: the grid's output.dir, "
+            + "relative to the current directory; a shard K of N without --out writes to <output.dir>-shard-K-of-N)."})
+    Path out;
+
+    @Option(names = "--threads", paramLabel = "N",
+            description = "Worker threads (count; default: available processors).")
+    Integer threads;
+
+    @Option(names = "--shard", paramLabel = "K/N", description = {"Compute only share K of N of the grid (1-based; "
+            + "default: from SLURM_ARRAY_TASK_ID/_COUNT/_MIN when set, else the whole grid). Join shards with merge."})
+    String shard;
+
+    @Option(names = "--resume", description = "Continue the run in the directory: keep its complete rows, compute "
+            + "the missing ones (the grid's models must match its manifest).")
+    boolean resume;
+
+    @Option(names = "--force", description = "Start over in a directory that already holds a run, replacing its "
+            + "catalogue.csv, transitions.csv and manifest.yaml (without it such a directory is refused).")
+    boolean force;
+
+    @Option(names = "--yes", description = "Allow grids of more than " + LARGE_GRID_MODELS + " models.")
+    boolean yes;
+
+    @Option(names = "--quiet", description = "No progress or start messages on stderr (errors still are).")
+    boolean quiet;
+
+    @Override
+    public Integer call() throws Exception {
+        CommandContext context = parent.context();
+        int n = threads(threads);
+        if (resume && force) {
+            throw new UsageException("--resume and --force exclude each other");
+        }
+        GridFile file = GridFiles.read(grid, context);
+        long count = file.spec().count();
+        if (count > LARGE_GRID_MODELS && !yes) {
+            throw new UsageException("the grid asks for " + count + " models, more than " + LARGE_GRID_MODELS
+                    + "; check it with 'convgrid check' and add --yes to run it");
+        }
+        Shard chosen = ShardChoice.choose(shard, context.environment()).orElse(null);
+        ChunkSolver solver = context.solvers().solverFor(file.spec());
+        RunDirectory dir = new RunDirectory(context.resolve(out != null ? out : defaultDirectory(file, chosen)));
+        GridRun runner = new GridRun(ToolVersion.current(), Clock.tickSeconds(java.time.ZoneOffset.UTC));
+        long start = System.nanoTime();
+        GridRun.Plan plan = runner.prepare(new GridRun.Settings(file, dir, n, chosen, resume, force));
+        PrintWriter err = parent.err();
+        ProgressReporter reporter = quiet ? null : new ProgressReporter(err, context.terminal(), System::nanoTime);
+        if (!quiet) {
+            err.println("convgrid: " + startLine(plan, count, n));
+            err.flush();
+        }
+        GridRun.Result result = runner.execute(plan, solver, reporter == null ? ProgressListener.NONE : reporter,
+                context.finishers());
+        if (reporter != null) {
+            reporter.finish();
+        }
+        double seconds = (System.nanoTime() - start) * 1e-9;
+        parent.out().println(dir.root() + ": " + result.run().catalogue().size() + " models in "
+                + RunDirectory.CATALOGUE + " (" + describe(result.counts()) + "); " + result.computed()
+                + " computed now in " + Durations.describe(seconds));
+        parent.out().flush();
+        if (RunFinishing.someModelsFailed(result.counts())) {
+            err.println("convgrid: some models failed or did not converge; their status_detail in "
+                    + RunDirectory.CATALOGUE + " says why");
+            err.flush();
+            return ExitCodes.SOME_MODELS_FAILED;
+        }
+        return ExitCodes.OK;
+    }
+
+    /** The thread count asked for, or the available processors. */
+    static int threads(Integer asked) {
+        if (asked == null) {
+            return Runtime.getRuntime().availableProcessors();
+        }
+        if (asked < 1) {
+            throw new UsageException("--threads must be at least 1, got " + asked);
+        }
+        return asked;
+    }
+
+    private static Path defaultDirectory(GridFile file, Shard shard) {
+        String dir = file.spec().outputDir();
+        return Path.of(shard == null || shard.count() == 1 ? dir
+                : dir + "-shard-" + shard.index() + "-of-" + shard.count());
+    }
+
+    private static String startLine(GridRun.Plan plan, long gridCount, int threads) {
+        StringBuilder line = new StringBuilder("computing ").append(plan.remaining()).append(" models");
+        if (plan.shard().count() > 1) {
+            line.append(" (shard ").append(plan.shard().index()).append('/').append(plan.shard().count())
+                    .append(": ").append(plan.owned()).append(" of the grid's ").append(gridCount).append(')');
+        }
+        line.append(" on ").append(threads).append(" thread(s) into ").append(plan.settings().directory().root());
+        if (!plan.kept().ids().isEmpty()) {
+            line.append("; ").append(plan.kept().ids().size()).append(" already in the catalogue");
+        }
+        if (plan.kept().droppedBytes() > 0) {
+            line.append("; a half-written last row (").append(plan.kept().droppedBytes()).append(" bytes) dropped");
+        }
+        return line.toString();
+    }
+
+    static String describe(Map<ModelStatus, Long> counts) {
+        return counts.entrySet().stream().map(e -> e.getValue() + " " + e.getKey().label())
+                .collect(Collectors.joining(", "));
+    }
+}

@@ -1,0 +1,131 @@
+package org.convgrid.cli;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import org.convgrid.engine.batch.ModelOutcome;
+import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.engine.physics.StandardPhysics;
+import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.structure.StellarModel;
+import org.convgrid.engine.units.Constants;
+import org.convgrid.engine.zams.ZamsBuilder;
+import org.convgrid.engine.zams.ZamsResult;
+import org.convgrid.engine.zams.ZamsTrack;
+import org.convgrid.engine.zams.ZeroAgeRequests;
+import org.convgrid.grids.HeliumLaw;
+import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.catalogue.CatalogueWriter;
+import org.convgrid.output.catalogue.OutcomeRows;
+import org.convgrid.output.profile.ProfileRows;
+import org.convgrid.output.profile.ProfileWriter;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
+
+/** {@code convgrid star}: one model, its global properties and its convective zones. */
+@Command(name = "star", mixinStandardHelpOptions = true,
+        description = {"One zero-age main-sequence model: its global properties and its convective zones.",
+            "Exit code 3 when the model does not converge (the solver's report is printed on one line)."})
+final class StarCommand implements Callable<Integer> {
+
+    @ParentCommand
+    ConvgridMain main;
+
+    @Option(names = "--mass", required = true, paramLabel = "M", description = "Total mass, solar masses.")
+    double massMsun;
+
+    @Option(names = "--z", required = true, paramLabel = "Z", description = "Initial metal mass fraction.")
+    double metals;
+
+    @Option(names = "--y", paramLabel = "Y",
+            description = "Initial helium mass fraction (default: Y = 0.2471 + 1.5 Z).")
+    Double helium;
+
+    @Option(names = "--age-gyr", defaultValue = "0", paramLabel = "A",
+            description = "Age since the zero-age main sequence, Gyr (only 0 for now; default ${DEFAULT-VALUE}).")
+    double ageGyr;
+
+    @Option(names = "--mixing-length", defaultValue = "1.8", paramLabel = "ALPHA",
+            description = "Mixing length, pressure scale heights (default ${DEFAULT-VALUE}).")
+    double mixingLength;
+
+    @Option(names = "--criterion", defaultValue = "schwarzschild", paramLabel = "schwarzschild|ledoux",
+            description = "Convective stability criterion (default ${DEFAULT-VALUE}).")
+    StabilityCriterion criterion;
+
+    @Option(names = "--opacity-factor", defaultValue = "1", paramLabel = "F",
+            description = "Multiplies every opacity (dimensionless; default ${DEFAULT-VALUE}).")
+    double opacityFactor;
+
+    @Option(names = "--opacity-table", paramLabel = "FILE",
+            description = "Use this opacity table (convgrid table layout, see README) instead of the analytic one.")
+    Path opacityTable;
+
+    @Option(names = "--profile", paramLabel = "FILE",
+            description = "Also write one CSV row per shell (m/M, r/R, P, T, rho, L, kappa, eps, gradients, "
+                    + "convective flag, convective velocity) to FILE.")
+    Path profile;
+
+    @Option(names = "--format", defaultValue = "table", paramLabel = "table|csv",
+            description = "table (readable) or csv (the catalogue header and this model's row). "
+                    + "Default ${DEFAULT-VALUE}.")
+    OutputFormat format;
+
+    @Override
+    public Integer call() throws IOException {
+        PhysicsOptions options = options();
+        double y = helium != null ? helium : HeliumLaw.DEFAULT.helium(metals);
+        if (!(y >= 0 && y + metals < 1)) {
+            throw new UsageException(String.format("need Y >= 0 and Y + Z < 1; got Y = %s, Z = %s", y, metals));
+        }
+        String id = String.format(java.util.Locale.ROOT, "star-m%.4f-z%.5f", massMsun, metals);
+        ModelRequest request = new ModelRequest(id, massMsun * Constants.M_SUN, metals, y, 0.0, options);
+        Composition composition = ZeroAgeRequests.initialComposition(request);
+        ZamsTrack track = new ZamsTrack(new ZamsBuilder(StandardPhysics.create(options, composition)), composition);
+        ZamsResult result = track.solve(request.mass());
+        ModelOutcome outcome = ZeroAgeRequests.outcome(request, result);
+        if (format == OutputFormat.CSV) {
+            try (CatalogueWriter writer = CatalogueWriter.startingWithHeader(main.out())) {
+                writer.write(OutcomeRows.toRow(outcome));
+            }
+        } else {
+            StarReport.write(outcome, composition, main.out());
+        }
+        main.out().flush();
+        if (outcome.status() != ModelStatus.OK) {
+            main.err().println("convgrid: model not converged: " + outcome.statusDetail());
+            return ExitCodes.SOME_MODELS_FAILED;
+        }
+        if (profile != null) {
+            StellarModel model = result.model().model();
+            Path target = main.context().resolve(profile);
+            AtomicFiles.write(target, out -> ProfileWriter.write(ProfileRows.of(model), out));
+            main.err().println("profile: " + model.profile().size() + " shells written to " + target);
+        }
+        return ExitCodes.OK;
+    }
+
+    private PhysicsOptions options() {
+        if (!(massMsun > 0 && massMsun <= 300)) {
+            throw new UsageException("--mass must lie in (0, 300] solar masses, got " + massMsun);
+        }
+        if (!(metals >= 0 && metals < 0.1)) {
+            throw new UsageException("--z must lie in [0, 0.1), got " + metals);
+        }
+        if (ageGyr != 0) {
+            throw new UsageException("--age-gyr: evolution in age is not available yet; only 0 (zero-age) works");
+        }
+        if (!(mixingLength > 0 && mixingLength < 10)) {
+            throw new UsageException("--mixing-length must lie in (0, 10) pressure scale heights, got " + mixingLength);
+        }
+        if (!(opacityFactor > 0 && opacityFactor <= 100)) {
+            throw new UsageException("--opacity-factor must lie in (0, 100], got " + opacityFactor);
+        }
+        String table = opacityTable == null ? "" : main.context().resolve(opacityTable).toString();
+        return new PhysicsOptions(mixingLength, 0.0, criterion, opacityFactor, table);
+    }
+}

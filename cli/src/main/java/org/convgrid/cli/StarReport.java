@@ -1,0 +1,69 @@
+package org.convgrid.cli;
+
+import java.io.PrintWriter;
+import java.util.List;
+import java.util.Locale;
+import org.convgrid.engine.batch.GlobalProperties;
+import org.convgrid.engine.batch.ModelOutcome;
+import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.convection.ConvectiveStructure;
+import org.convgrid.engine.convection.ConvectiveZone;
+import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.units.Constants;
+
+/** The readable form of one model for {@code convgrid star}: a block of properties, then the zone list. */
+final class StarReport {
+
+    private StarReport() {
+    }
+
+    static void write(ModelOutcome outcome, Composition composition, PrintWriter out) {
+        var r = outcome.request();
+        out.printf(Locale.ROOT, "Zero-age model: %.4f Msun, X = %.4f, Y = %.4f, Z = %.5f%n", r.mass() / Constants.M_SUN,
+                composition.x(), composition.y(), composition.z());
+        out.printf(Locale.ROOT, "Physics: mixing length %.3f Hp, %s, opacity x %.3g%s%n", r.physics().mixingLength(),
+                r.physics().criterion().name().toLowerCase(Locale.ROOT), r.physics().opacityFactor(),
+                r.physics().usesOpacityTable() ? " (table " + r.physics().opacityTable() + ")" : "");
+        if (outcome.status() != ModelStatus.OK) {
+            out.printf(Locale.ROOT, "Status: %s (%s)%n", outcome.status().label(), outcome.statusDetail());
+            return;
+        }
+        GlobalProperties g = outcome.global();
+        ConvectiveStructure c = outcome.convection();
+        out.println();
+        line(out, "luminosity", g.luminosity() / Constants.L_SUN, "Lsun");
+        line(out, "radius", g.radius() / Constants.R_SUN, "Rsun");
+        line(out, "effective temperature", g.effectiveTemperature(), "K");
+        line(out, "log surface gravity", Math.log10(g.surfaceGravity()), "cgs");
+        line(out, "central temperature", g.centralTemperature(), "K");
+        line(out, "central density", g.centralDensity(), "g/cm^3");
+        line(out, "central hydrogen", g.centralHydrogen(), "");
+        out.println();
+        out.printf(Locale.ROOT, "  %-32s %s%n", "structure", c.structureClass().label().replace('_', ' '));
+        line(out, "convective core, top", c.coreMassFraction(), "m/M");
+        line(out, "convective envelope, base", c.envelopeBaseMassFraction(), "m/M");
+        line(out, "convective envelope, base", c.envelopeBaseRadiusFraction(), "r/R");
+        line(out, "convective envelope, mass", c.envelopeMass() / Constants.M_SUN, "Msun");
+        line(out, "turnover time, local", c.turnoverTimeLocal() / Constants.DAY, "days");
+        line(out, "turnover time, integrated", c.turnoverTimeGlobal() / Constants.DAY, "days");
+        out.println();
+        List<ConvectiveZone> zones = c.zones();
+        out.printf(Locale.ROOT, "Convective zones (%d):%n", zones.size());
+        if (zones.isEmpty()) {
+            out.println("  none: radiative throughout");
+        }
+        out.printf(Locale.ROOT, "  %4s  %-21s  %-21s%n", "#", "m/M from - to", "r/R from - to");
+        for (int i = 0; i < zones.size(); i++) {
+            ConvectiveZone z = zones.get(i);
+            out.printf(Locale.ROOT, "  %4d  %9.6f - %-9.6f  %9.6f - %-9.6f%n", i + 1, z.innerMassFraction(),
+                    z.outerMassFraction(), z.innerRadiusFraction(), z.outerRadiusFraction());
+        }
+        out.println();
+        out.printf(Locale.ROOT, "Solved in %d Newton iterations.%n", outcome.solverIterations());
+    }
+
+    private static void line(PrintWriter out, String name, double value, String unit) {
+        String text = Double.isNaN(value) ? "-" : String.format(Locale.ROOT, "%.6g", value);
+        out.printf(Locale.ROOT, "  %-32s %-14s %s%n", name, text, unit);
+    }
+}

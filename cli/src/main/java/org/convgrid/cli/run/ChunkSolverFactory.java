@@ -1,0 +1,19 @@
+package org.convgrid.cli.run;
+
+import org.convgrid.engine.batch.ChunkSolver;
+import org.convgrid.grids.GridSpec;
+
+/**
+ * The seam between the command line and the structure solver: makes the chunk solver that computes a grid's models.
+ * Production uses {@link ProductionSolvers#factory()}; tests inject fakes. Called once per run, before anything is
+ * written to disk, so a factory that cannot serve a grid leaves no run directory behind.
+ */
+@FunctionalInterface
+public interface ChunkSolverFactory {
+
+    /**
+     * @param grid the validated grid (every request the solver will see carries its own physics options)
+     * @return a thread-safe solver whose outcome for a chunk depends only on that chunk
+     */
+    ChunkSolver solverFor(GridSpec grid);
+}

@@ -1,0 +1,28 @@
+package org.convgrid.cli.run;
+
+import java.util.Locale;
+
+/** Short human forms of durations, such as {@code 45 s}, {@code 3 min 12 s}, {@code 2 h 05 min}, {@code 3.5 d}. */
+public final class Durations {
+
+    private Durations() {
+    }
+
+    /** @param seconds a duration, s */
+    public static String describe(double seconds) {
+        if (!Double.isFinite(seconds) || seconds < 0) {
+            return "unknown time";
+        }
+        long s = Math.round(seconds);
+        if (s < 60) {
+            return s + " s";
+        }
+        if (s < 3600) {
+            return (s / 60) + " min " + String.format(Locale.ROOT, "%02d", s % 60) + " s";
+        }
+        if (s < 2 * 86400) {
+            return (s / 3600) + " h " + String.format(Locale.ROOT, "%02d", (s % 3600) / 60) + " min";
+        }
+        return String.format(Locale.ROOT, "%.1f d", seconds / 86400.0);
+    }
+}

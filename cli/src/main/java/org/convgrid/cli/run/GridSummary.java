@@ -1,0 +1,63 @@
+package org.convgrid.cli.run;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.stream.Collectors;
+import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.grids.GridFile;
+import org.convgrid.grids.GridSpec;
+import org.convgrid.grids.ModelCost;
+import org.convgrid.output.CsvNumbers;
+
+/** The text {@code convgrid check} prints about a valid grid: its axes, model count and a run-time estimate. */
+public final class GridSummary {
+
+    /** Axis values listed one by one up to this many; longer axes are shown as a range. */
+    static final int LISTED_VALUES = 8;
+
+    private GridSummary() {
+    }
+
+    /**
+     * @param file the grid file as read
+     * @param secondsPerModel the assumed cost of one model on one thread, s
+     * @param costSource where that cost comes from, for the reader
+     * @param threads threads the estimate assumes
+     * @param runDirectory where {@code run} would write
+     */
+    public static List<String> lines(GridFile file, double secondsPerModel, String costSource, int threads,
+                                     String runDirectory) {
+        GridSpec g = file.spec();
+        List<String> lines = new ArrayList<>();
+        lines.add("grid:          " + g.title() + " (" + file.name() + ")");
+        lines.add("masses:        " + axis(g.massesMsun(), "Msun"));
+        lines.add("metallicities: " + g.metallicities().size() + ": " + g.metallicities().stream()
+                .map(p -> "Z=" + n(p.z()) + " Y=" + n(p.y())).collect(Collectors.joining(", ")));
+        lines.add("ages:          " + axis(g.agesGyr(), "Gyr") + " (0 = ZAMS)");
+        List<PhysicsOptions> physics = g.physics().combinations();
+        lines.add("physics:       " + physics.size() + (physics.size() == 1 ? " combination" : " combinations"));
+        for (PhysicsOptions p : physics) {
+            lines.add("  mixing length " + n(p.mixingLength()) + " Hp, overshoot " + n(p.overshoot()) + " Hp, "
+                    + p.criterion().name().toLowerCase(Locale.ROOT) + ", opacity x" + n(p.opacityFactor()));
+        }
+        lines.add("models:        " + g.count());
+        double seconds = g.estimateSeconds(ModelCost.constant(secondsPerModel), threads);
+        lines.add("estimate:      about " + Durations.describe(seconds) + " on " + threads + " thread(s), at "
+                + n(secondsPerModel) + " s per model (" + costSource + ")");
+        lines.add("run directory: " + runDirectory);
+        return lines;
+    }
+
+    private static String axis(List<Double> values, String unit) {
+        String head = values.size() + ": ";
+        if (values.size() <= LISTED_VALUES) {
+            return head + values.stream().map(GridSummary::n).collect(Collectors.joining(", ")) + " " + unit;
+        }
+        return head + "from " + n(values.get(0)) + " to " + n(values.get(values.size() - 1)) + " " + unit;
+    }
+
+    private static String n(double value) {
+        return CsvNumbers.format(value);
+    }
+}

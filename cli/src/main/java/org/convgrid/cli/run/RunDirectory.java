@@ -1,0 +1,121 @@
+package org.convgrid.cli.run;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
+import java.util.Comparator;
+import java.util.List;
+import java.util.stream.Stream;
+import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.catalogue.CatalogueWriter;
+
+/**
+ * The files of one run directory (names fixed in conventions.md) and its creation. A new directory is created
+ * all-or-nothing: when the directory, the start manifest or the catalogue header cannot be written, whatever this
+ * class created is removed again, so a refused run leaves nothing behind.
+ */
+public final class RunDirectory {
+
+    public static final String CATALOGUE = "catalogue.csv";
+    public static final String TRANSITIONS = "transitions.csv";
+    public static final String MANIFEST = "manifest.yaml";
+
+    private final Path root;
+
+    public RunDirectory(Path root) {
+        this.root = root.toAbsolutePath().normalize();
+    }
+
+    public Path root() {
+        return root;
+    }
+
+    public Path catalogue() {
+        return root.resolve(CATALOGUE);
+    }
+
+    public Path transitions() {
+        return root.resolve(TRANSITIONS);
+    }
+
+    public Path manifest() {
+        return root.resolve(MANIFEST);
+    }
+
+    /** Whether a catalogue or a manifest is already there. */
+    public boolean holdsRun() {
+        return Files.exists(catalogue()) || Files.exists(manifest());
+    }
+
+    /** The catalogue's header line, with its line end, exactly as {@link CatalogueWriter} writes it. */
+    public static String catalogueHeader() {
+        StringBuilder header = new StringBuilder();
+        try {
+            CatalogueWriter.startingWithHeader(header).flush();
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return header.toString();
+    }
+
+    /**
+     * Creates the directory (and missing parents), writes the start manifest and a catalogue holding only its
+     * header. On failure removes what it created and throws one message naming the directory and the reason.
+     */
+    public void create(String manifestYaml) throws IOException {
+        Path top = topMissing(root);
+        try {
+            Files.createDirectories(root);
+            AtomicFiles.writeString(manifest(), manifestYaml);
+            Files.writeString(catalogue(), catalogueHeader(), StandardCharsets.UTF_8, StandardOpenOption.CREATE_NEW,
+                    StandardOpenOption.WRITE);
+        } catch (IOException e) {
+            undo(top);
+            throw new IOException("cannot create run directory " + root + ": " + IoMessages.reason(e), e);
+        }
+    }
+
+    /** Removes the run's own tables (catalogue, transitions, manifest), for {@code --force}. */
+    public void clear() throws IOException {
+        for (Path file : List.of(catalogue(), transitions(), manifest())) {
+            Files.deleteIfExists(file);
+        }
+    }
+
+    private void undo(Path top) {
+        try {
+            if (top != null) {
+                deleteTree(top);
+            } else {
+                Files.deleteIfExists(catalogue());
+                Files.deleteIfExists(manifest());
+            }
+        } catch (IOException | UncheckedIOException e) {
+            // best effort: the original failure is what the user needs to see
+        }
+    }
+
+    /** The highest ancestor of {@code dir} (or dir itself) that does not exist yet, null when dir exists. */
+    static Path topMissing(Path dir) {
+        Path top = null;
+        for (Path p = dir; p != null && !Files.exists(p); p = p.getParent()) {
+            top = p;
+        }
+        return top;
+    }
+
+    /** Deletes a tree this class created (no symbolic links are followed). */
+    static void deleteTree(Path top) throws IOException {
+        if (!Files.exists(top)) {
+            return;
+        }
+        try (Stream<Path> all = Files.walk(top)) {
+            for (Path p : all.sorted(Comparator.reverseOrder()).toList()) {
+                Files.deleteIfExists(p);
+            }
+        }
+    }
+}

@@ -1,0 +1,64 @@
+package org.convgrid.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class CheckCommandTest {
+
+    @TempDir
+    Path work;
+
+    @Test
+    void printsTheAxesAndTheModelCountAndRunsNothing() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        CliHarness.Execution check = CliHarness.in(work, FakeChunkSolver.fast())
+                .execute("check", grid.toString(), "--threads", "2");
+        assertThat(check.code()).isEqualTo(0);
+        assertThat(check.out()).contains("models:        156")
+                .contains("masses:        39: from 0.1 to 2 Msun")
+                .contains("Z=0.004 Y=0.2545", "Z=0.02 Y=0.2785")
+                .contains("ages:          2: 0, 2 Gyr")
+                .contains("mixing length 1.8 Hp, overshoot 0 Hp, schwarzschild")
+                // 156 models x 1 s (assumed) / 2 threads
+                .contains("about 1 min 18 s on 2 thread(s)");
+        assertThat(Files.exists(work.resolve("runs"))).isFalse();
+    }
+
+    @Test
+    void badGridListsEveryProblemWithFileLineAndColumn() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "bad.yaml", """
+                mass:
+                  from: 0.1
+                  to: 2.0
+                  stepp: 0.05
+                metallicity:
+                  z: [0.004, -0.02]
+                  y: [0.25, 0.27]
+                """);
+        CliHarness.Execution check = CliHarness.in(work, FakeChunkSolver.fast()).execute("check", grid.toString());
+        assertThat(check.code()).isEqualTo(2);
+        assertThat(check.err()).contains(grid + ":4:3: ").contains(grid + ":6:");
+        assertThat(check.err().lines().filter(l -> l.startsWith(grid + ":"))).hasSizeGreaterThanOrEqualTo(2);
+        assertThat(check.out()).isEmpty();
+    }
+
+    @Test
+    void missingGridFileIsAUsageError() {
+        CliHarness.Execution check = CliHarness.in(work, FakeChunkSolver.fast()).execute("check", "nowhere.yaml");
+        assertThat(check.code()).isEqualTo(2);
+        assertThat(check.err()).contains("grid file nowhere.yaml not found");
+    }
+
+    @Test
+    void everyOptionOfTheGridCommandsHasAHelpLineWithItsUnit() {
+        CliHarness cli = CliHarness.in(work, FakeChunkSolver.fast());
+        assertThat(cli.execute("run", "--help").out()).contains("--threads=N", "(count;", "--out=DIR", "(path;",
+                "--shard=K/N", "--resume", "--force", "--yes", "--quiet");
+        assertThat(cli.execute("merge", "--help").out()).contains("--out=DIR", "(path;");
+        assertThat(cli.execute("check", "--help").out()).contains("--threads=N", "(count;");
+    }
+}

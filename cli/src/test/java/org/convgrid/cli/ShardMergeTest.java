@@ -1,0 +1,124 @@
+package org.convgrid.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.output.catalogue.CatalogueReader;
+import org.convgrid.output.manifest.RunManifest;
+import org.convgrid.output.manifest.RunManifestReader;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class ShardMergeTest {
+
+    @TempDir
+    Path work;
+
+    private CliHarness.Execution run(String... args) {
+        return CliHarness.in(work, FakeChunkSolver.fast()).execute(args);
+    }
+
+    private Path grid() throws Exception {
+        return CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+    }
+
+    private void runShards(Path grid, int count) {
+        for (int k = 1; k <= count; k++) {
+            CliHarness.Execution shard = run("run", grid.toString(), "--shard", k + "/" + count, "--quiet");
+            assertThat(shard.code()).isEqualTo(0);
+        }
+    }
+
+    @Test
+    void mergedShardsAreByteIdenticalToASingleRun() throws Exception {
+        Path grid = grid();
+        assertThat(run("run", grid.toString(), "--out", "single", "--quiet").code()).isEqualTo(0);
+        runShards(grid, 3);
+        Path shard2 = work.resolve("runs/test-survey-shard-2-of-3");
+        RunManifest second = RunManifestReader.read(Files.readString(shard2.resolve("manifest.yaml")));
+        assertThat(second.shard()).isEqualTo("2/3");
+        long shardRows = CatalogueReader.read(shard2.resolve("catalogue.csv")).size();
+        assertThat(shardRows).isEqualTo(second.total()).isBetween(1L, CliHarness.GRID_MODELS - 1);
+
+        CliHarness.Execution merged = run("merge", "runs/test-survey-shard-3-of-3", "runs/test-survey-shard-1-of-3",
+                "runs/test-survey-shard-2-of-3", "--out", "merged");
+        assertThat(merged.code()).isEqualTo(0);
+        assertThat(merged.out()).contains("merged 3 shard directories, 156 models (156 ok");
+        for (String file : List.of("catalogue.csv", "transitions.csv")) {
+            assertThat(Files.readAllBytes(work.resolve("merged").resolve(file)))
+                    .isEqualTo(Files.readAllBytes(work.resolve("single").resolve(file)));
+        }
+        RunManifest manifest = RunManifestReader.read(Files.readString(work.resolve("merged/manifest.yaml")));
+        assertThat(manifest.shard()).isNull();
+        assertThat(manifest.total()).isEqualTo(156);
+        assertThat(manifest.gridModelsSha256()).isEqualTo(second.gridModelsSha256());
+    }
+
+    @Test
+    void aMissingShardIsReportedAndNothingIsWritten() throws Exception {
+        runShards(grid(), 3);
+        CliHarness.Execution merged = run("merge", "runs/test-survey-shard-1-of-3", "runs/test-survey-shard-3-of-3",
+                "--out", "merged");
+        assertThat(merged.code()).isEqualTo(2);
+        // shard 2 of 3 owns chunks 1, 4, 7: the first is masses 8..15 of Z index 0
+        assertThat(merged.err()).contains("model(s) missing from every shard: p0-z00-m008-a00, p0-z00-m008-a01");
+        assertThat(Files.exists(work.resolve("merged"))).isFalse();
+    }
+
+    @Test
+    void aShardGivenTwiceIsReportedAsDuplicateRows() throws Exception {
+        runShards(grid(), 2);
+        CliHarness.Execution merged = run("merge", "runs/test-survey-shard-1-of-2", "runs/test-survey-shard-2-of-2",
+                "runs/test-survey-shard-2-of-2", "--out", "merged");
+        assertThat(merged.code()).isEqualTo(2);
+        assertThat(merged.err()).contains("model(s) in more than one shard: p0-z00-m008-a00");
+        assertThat(Files.exists(work.resolve("merged"))).isFalse();
+    }
+
+    @Test
+    void shardsOfDifferentGridsAreRefused() throws Exception {
+        Path grid = grid();
+        Path other = CliHarness.writeGrid(work, "other.yaml", CliHarness.GRID.replace("to: 2.0", "to: 1.9"));
+        assertThat(run("run", grid.toString(), "--shard", "1/2", "--out", "a", "--quiet").code()).isEqualTo(0);
+        assertThat(run("run", other.toString(), "--shard", "2/2", "--out", "b", "--quiet").code()).isEqualTo(0);
+        CliHarness.Execution merged = run("merge", "a", "b", "--out", "merged");
+        assertThat(merged.code()).isEqualTo(2);
+        assertThat(merged.err()).contains("was run from another grid");
+    }
+
+    @Test
+    void slurmArrayVariablesChooseTheShard() throws Exception {
+        Path grid = grid();
+        CliHarness cli = CliHarness.in(work, FakeChunkSolver.fast());
+        // --array=1-2: task 2 of a 1-based array is shard 2/2
+        CliHarness slurm = cli.with(cli.context().withEnvironment(Map.of("SLURM_ARRAY_TASK_ID", "2",
+                "SLURM_ARRAY_TASK_COUNT", "2", "SLURM_ARRAY_TASK_MIN", "1")));
+        assertThat(slurm.execute("run", grid.toString(), "--quiet").code()).isEqualTo(0);
+        RunManifest manifest = RunManifestReader.read(
+                Files.readString(work.resolve("runs/test-survey-shard-2-of-2/manifest.yaml")));
+        assertThat(manifest.shard()).isEqualTo("2/2");
+        // an explicit --shard wins over Slurm
+        assertThat(slurm.execute("run", grid.toString(), "--shard", "1/2", "--quiet").code()).isEqualTo(0);
+        assertThat(run("merge", "runs/test-survey-shard-1-of-2", "runs/test-survey-shard-2-of-2", "--out", "m")
+                .code()).isEqualTo(0);
+        assertThat(CatalogueReader.read(work.resolve("m/catalogue.csv"))).hasSize(156);
+    }
+
+    @Test
+    void mergeOfFailedModelsExitsWithThree() throws Exception {
+        Path grid = grid();
+        CliHarness failing = CliHarness.in(work, new FakeChunkSolver(java.util.Set.of("p0-z01-m030-a00"), 0));
+        // Z index 1 starts at chunk 5; mass 30 is in its 4th chunk, position 8: shard 1 of 2 owns it
+        assertThat(failing.execute("run", grid.toString(), "--shard", "1/2", "--quiet").code()).isEqualTo(3);
+        assertThat(failing.execute("run", grid.toString(), "--shard", "2/2", "--quiet").code()).isEqualTo(0);
+        CliHarness.Execution merged = run("merge", "runs/test-survey-shard-1-of-2", "runs/test-survey-shard-2-of-2",
+                "--out", "m");
+        assertThat(merged.code()).isEqualTo(3);
+        RunManifest manifest = RunManifestReader.read(Files.readString(work.resolve("m/manifest.yaml")));
+        assertThat(manifest.counts()).containsEntry(ModelStatus.FAILED, 1L).containsEntry(ModelStatus.OK, 155L);
+    }
+}

@@ -1,0 +1,50 @@
+package org.convgrid.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.List;
+import org.convgrid.output.catalogue.CatalogueColumns;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class StarCommandTest {
+
+    @TempDir
+    Path dir;
+
+    private final StringWriter out = new StringWriter();
+    private final StringWriter err = new StringWriter();
+
+    private int run(String... args) {
+        return ConvgridMain.commandLine(new PrintWriter(out), new PrintWriter(err),
+                CommandContext.production().withWorkingDirectory(dir)).execute(args);
+    }
+
+    @Test
+    void csvIsTheCatalogueHeaderAndOneRowAndTheProfileHasEveryShell() throws Exception {
+        int code = run("star", "--mass", "0.8", "--z", "0.0188", "--y", "0.275", "--format", "csv",
+                "--profile", "p.csv");
+        assertThat(code).as(err.toString()).isZero();
+        String[] lines = out.toString().split("\n");
+        assertThat(lines).hasSize(2);
+        List<String> header = Arrays.asList(lines[0].split(","));
+        assertThat(header).startsWith(CatalogueColumns.FIXED.toArray(String[]::new));
+        assertThat(lines[1]).contains(",ok,").contains(",conv_envelope,");
+        List<String> profile = Files.readAllLines(dir.resolve("p.csv"));
+        assertThat(profile.size()).isGreaterThan(300);
+        assertThat(profile.get(0)).startsWith("mass_frac,radius_frac");
+    }
+
+    @Test
+    void impossibleRequestsAreUsageErrors() {
+        assertThat(run("star", "--mass", "-1", "--z", "0.02")).isEqualTo(2);
+        assertThat(run("star", "--mass", "1", "--z", "0.02", "--age-gyr", "1")).isEqualTo(2);
+        assertThat(err.toString()).contains("--mass").contains("--age-gyr");
+        assertThat(run("star", "--mass", "1", "--z", "0.02", "--y", "0.99")).isEqualTo(2);
+    }
+}

@@ -1,0 +1,27 @@
+package org.convgrid.output.profile;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.convgrid.engine.structure.StellarModel;
+import org.convgrid.engine.structure.StellarProfile;
+
+/** The shells of a solved model as profile rows, centre to surface. */
+public final class ProfileRows {
+
+    private ProfileRows() {
+    }
+
+    public static List<ProfileRow> of(StellarModel model) {
+        StellarProfile p = model.profile();
+        int n = p.size();
+        double mass = p.mass(n - 1);
+        double radius = p.radius(n - 1);
+        List<ProfileRow> rows = new ArrayList<>(n);
+        for (int k = 0; k < n; k++) {
+            rows.add(new ProfileRow(p.mass(k) / mass, p.radius(k) / radius, p.pressure(k), p.temperature(k),
+                    p.density(k), p.luminosity(k), p.opacity(k), p.eps(k), p.nabla(k), p.nablaAd(k), p.nablaRad(k),
+                    p.convective(k), p.convectiveVelocity(k)));
+        }
+        return rows;
+    }
+}

@@ -1,0 +1,25 @@
+package org.convgrid.plotting;
+
+import java.util.function.Supplier;
+import org.convgrid.plotting.style.StyledChart;
+
+/**
+ * One chart of a run: its file name under maps/, where it belongs in the report, a caption, and how to draw it.
+ *
+ * @param fileName PNG file name (ASCII, no directory)
+ * @param section report section: {@link #ZONES_MASS}, {@link #ZONES_RADIUS}, {@link #HR} or {@link #TRENDS}
+ * @param caption one sentence for people
+ * @param chart draws the chart (called once per file written)
+ */
+public record MapEntry(String fileName, String section, String caption, Supplier<StyledChart> chart) {
+
+    public static final String ZONES_MASS = "Convective zones in mass";
+    public static final String ZONES_RADIUS = "Convective zones in radius";
+    public static final String HR = "HR diagrams";
+    public static final String TRENDS = "Transition masses against metallicity";
+
+    /** The file name without {@code .png}. */
+    public String stem() {
+        return fileName.substring(0, fileName.length() - ".png".length());
+    }
+}

@@ -1,0 +1,108 @@
+package org.convgrid.plotting;
+
+import java.io.IOException;
+import java.io.Reader;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import org.convgrid.output.Span;
+import org.convgrid.output.catalogue.CatalogueReader;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.manifest.RunManifest;
+import org.convgrid.output.manifest.RunManifestReader;
+import org.convgrid.output.profile.ProfileReader;
+import org.convgrid.output.profile.ProfileRow;
+import org.convgrid.output.transitions.TransitionFinder;
+import org.convgrid.output.transitions.TransitionReader;
+import org.convgrid.output.transitions.TransitionRow;
+
+/**
+ * What the charts and the report read from a run directory (layout: conventions.md).
+ *
+ * @param catalogue every catalogue row, in file order
+ * @param transitions the rows of transitions.csv, or, when that file is absent, found from the catalogue
+ * @param transitionsFromFile whether {@code transitions} came from transitions.csv
+ * @param manifest the manifest, null when manifest.yaml is absent
+ * @param radiusZones convective intervals in r/R by model id, from profiles/ (empty when there are none)
+ * @param hasTracks whether a tracks/ directory with files exists
+ */
+public record RunData(List<CatalogueRow> catalogue, List<TransitionRow> transitions, boolean transitionsFromFile,
+                      RunManifest manifest, Map<String, List<Span>> radiusZones, boolean hasTracks) {
+
+    public RunData {
+        catalogue = List.copyOf(catalogue);
+        transitions = List.copyOf(transitions);
+        radiusZones = Map.copyOf(radiusZones);
+    }
+
+    /** Reads a run directory; catalogue.csv must exist, everything else is optional. */
+    public static RunData read(Path runDir) throws IOException {
+        List<CatalogueRow> catalogue = CatalogueReader.read(runDir.resolve("catalogue.csv"));
+        Path transitionsFile = runDir.resolve("transitions.csv");
+        boolean fromFile = Files.isRegularFile(transitionsFile);
+        List<TransitionRow> transitions;
+        if (fromFile) {
+            try (Reader in = Files.newBufferedReader(transitionsFile, StandardCharsets.UTF_8)) {
+                transitions = TransitionReader.read(in);
+            }
+        } else {
+            transitions = TransitionFinder.withDefaults().find(catalogue);
+        }
+        Path manifestFile = runDir.resolve("manifest.yaml");
+        RunManifest manifest = Files.isRegularFile(manifestFile)
+                ? RunManifestReader.read(Files.readString(manifestFile, StandardCharsets.UTF_8)) : null;
+        return new RunData(catalogue, transitions, fromFile, manifest, radiusZones(runDir, catalogue),
+                hasFiles(runDir.resolve("tracks")));
+    }
+
+    private static Map<String, List<Span>> radiusZones(Path runDir, List<CatalogueRow> catalogue) throws IOException {
+        Path dir = runDir.resolve("profiles");
+        Map<String, List<Span>> zones = new HashMap<>();
+        if (!Files.isDirectory(dir)) {
+            return zones;
+        }
+        for (CatalogueRow row : catalogue) {
+            Path file = dir.resolve(row.modelId() + ".csv");
+            if (row.isOk() && Files.isRegularFile(file)) {
+                try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
+                    zones.put(row.modelId(), convectiveRadii(ProfileReader.read(in)));
+                }
+            }
+        }
+        return zones;
+    }
+
+    /**
+     * The convective runs of a profile (centre to surface) as r/R intervals: a run starts at its first convective
+     * shell (at 0 when that is the centre) and ends at its last one (at 1 when that is the surface shell).
+     */
+    static List<Span> convectiveRadii(List<ProfileRow> shells) {
+        List<Span> spans = new ArrayList<>();
+        int start = -1;
+        for (int i = 0; i <= shells.size(); i++) {
+            boolean convective = i < shells.size() && shells.get(i).convective();
+            if (convective && start < 0) {
+                start = i;
+            } else if (!convective && start >= 0) {
+                double lo = start == 0 ? 0.0 : shells.get(start).radiusFrac();
+                double hi = i == shells.size() ? 1.0 : shells.get(i - 1).radiusFrac();
+                spans.add(new Span(Math.max(lo, 0.0), Math.min(Math.max(hi, lo), 1.0)));
+                start = -1;
+            }
+        }
+        return spans;
+    }
+
+    private static boolean hasFiles(Path dir) throws IOException {
+        if (!Files.isDirectory(dir)) {
+            return false;
+        }
+        try (var entries = Files.list(dir)) {
+            return entries.findAny().isPresent();
+        }
+    }
+}

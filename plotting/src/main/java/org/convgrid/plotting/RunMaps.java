@@ -1,0 +1,116 @@
+package org.convgrid.plotting;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.transitions.Slice;
+import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.plotting.hr.HrDiagram;
+import org.convgrid.plotting.hr.HrDiagramRenderer;
+import org.convgrid.plotting.style.ChartFiles;
+import org.convgrid.plotting.style.StyledChart;
+import org.convgrid.plotting.trend.TransitionTrend;
+import org.convgrid.plotting.trend.TransitionTrendRenderer;
+import org.convgrid.plotting.zones.ZoneMap;
+import org.convgrid.plotting.zones.ZoneMapRenderer;
+
+/**
+ * Draws every chart of a run into {@code RUN_DIR/maps/}: per slice a zone map in m/M
+ * ({@code zones-mass_<slice>.png}) and in r/R ({@code zones-radius_<slice>.png}); per physics combination an HR
+ * diagram ({@code hr_<physics>.png}) and, when the run has transitions, the transition masses against Z
+ * ({@code transitions-vs-z_<physics>.png}). Charts of age against zones need evolution tracks, which runs do not
+ * write yet; none is drawn.
+ */
+public final class RunMaps {
+
+    /** The maps directory under a run directory. */
+    public static final String MAPS_DIR = "maps";
+
+    private RunMaps() {
+    }
+
+    /** Draws every PNG of the run; returns the files written, in report order. */
+    public static List<Path> drawAll(Path runDir) throws IOException {
+        return drawAll(runDir, Set.of());
+    }
+
+    /**
+     * Draws every PNG of the run and, for each chart, one file per requested vector format. Charts are independent,
+     * so they are drawn in parallel (common fork-join pool); each file is written atomically and the list comes
+     * back in report order whatever the thread count.
+     */
+    public static List<Path> drawAll(Path runDir, Set<ChartFiles.VectorFormat> vectorFormats) throws IOException {
+        Path maps = runDir.resolve(MAPS_DIR);
+        try {
+            return plan(RunData.read(runDir)).parallelStream().map(entry -> draw(entry, maps, vectorFormats))
+                    .flatMap(List::stream).toList();
+        } catch (UncheckedIOException e) {
+            throw e.getCause();
+        }
+    }
+
+    private static List<Path> draw(MapEntry entry, Path maps, Set<ChartFiles.VectorFormat> vectorFormats) {
+        try {
+            List<Path> written = new ArrayList<>(1 + vectorFormats.size());
+            StyledChart chart = entry.chart().get();
+            Path png = maps.resolve(entry.fileName());
+            ChartFiles.writePng(chart, png);
+            written.add(png);
+            for (ChartFiles.VectorFormat format : vectorFormats.stream().sorted().toList()) {
+                Path vector = maps.resolve(entry.stem() + "." + format.extension());
+                ChartFiles.writeVector(chart, vector, format);
+                written.add(vector);
+            }
+            return written;
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    /** The charts of a run, in report order, without drawing them. */
+    public static List<MapEntry> plan(RunData run) {
+        Map<Slice, TransitionRow> transitions = new LinkedHashMap<>();
+        run.transitions().forEach(t -> transitions.put(t.slice(), t));
+        Set<Slice> slices = new LinkedHashSet<>();
+        Set<PhysicsKey> physics = new LinkedHashSet<>();
+        for (CatalogueRow row : run.catalogue()) {
+            slices.add(Slice.of(row));
+            physics.add(PhysicsKey.of(row));
+        }
+        List<CatalogueRow> rows = run.catalogue();
+        List<MapEntry> mass = new ArrayList<>();
+        List<MapEntry> radius = new ArrayList<>();
+        for (Slice s : slices) {
+            TransitionRow t = transitions.get(s);
+            String stem = SliceLabels.fileStem(s);
+            mass.add(new MapEntry("zones-mass_" + stem + ".png", MapEntry.ZONES_MASS,
+                    "Convective zones in m/M, " + SliceLabels.describe(s) + ".",
+                    () -> ZoneMapRenderer.render(ZoneMap.inMass(s, rows, t))));
+            radius.add(new MapEntry("zones-radius_" + stem + ".png", MapEntry.ZONES_RADIUS,
+                    "Convective zones in r/R, " + SliceLabels.describe(s) + ".",
+                    () -> ZoneMapRenderer.render(ZoneMap.inRadius(s, rows, t, run.radiusZones()))));
+        }
+        List<MapEntry> entries = new ArrayList<>(mass);
+        entries.addAll(radius);
+        for (PhysicsKey p : physics) {
+            entries.add(new MapEntry("hr_" + p.fileStem() + ".png", MapEntry.HR,
+                    "HR diagram of every usable model, " + p.describe() + ".",
+                    () -> HrDiagramRenderer.render(HrDiagram.build(p, rows))));
+        }
+        for (PhysicsKey p : physics) {
+            if (run.transitions().stream().anyMatch(t -> PhysicsKey.of(t.slice()).equals(p))) {
+                entries.add(new MapEntry("transitions-vs-z_" + p.fileStem() + ".png", MapEntry.TRENDS,
+                        "Transition masses against Z, bars span the bracketing grid masses, " + p.describe() + ".",
+                        () -> TransitionTrendRenderer.render(TransitionTrend.build(p, run.transitions()))));
+            }
+        }
+        return entries;
+    }
+}

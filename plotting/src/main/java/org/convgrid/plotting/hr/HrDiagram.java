@@ -1,0 +1,56 @@
+package org.convgrid.plotting.hr;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.TreeMap;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.plotting.PhysicsKey;
+
+/**
+ * Builds HR-diagram data from catalogue rows of one physics combination: a pure function, no drawing. Models
+ * without a usable result (status not ok, missing L or Teff, no structure class) are left out.
+ */
+public final class HrDiagram {
+
+    /** Masses we try to label (solar masses); each gets the nearest grid mass within {@link #LABEL_TOLERANCE}. */
+    static final double[] LABEL_TARGETS = {0.1, 0.2, 0.5, 1.0, 1.5, 2.0, 3.0, 5.0, 10.0, 20.0};
+    /** Relative distance from a target within which a grid mass counts as "that mass". */
+    static final double LABEL_TOLERANCE = 0.06;
+
+    private HrDiagram() {
+    }
+
+    /** The diagram of the rows whose physics is {@code physics}. */
+    public static HrDiagramData build(PhysicsKey physics, List<CatalogueRow> rows) {
+        List<HrPoint> points = rows.stream()
+                .filter(r -> PhysicsKey.of(r).equals(physics) && r.isOk() && r.structureClass() != null
+                        && r.luminosityLsun() > 0 && r.teffK() > 0)
+                .map(r -> new HrPoint(r.modelId(), r.massMsun(), r.zInit(), r.ageGyr(), Math.log10(r.teffK()),
+                        Math.log10(r.luminosityLsun()), r.structureClass()))
+                .toList();
+        TreeMap<Double, List<HrPoint>> byZ = new TreeMap<>();
+        points.forEach(p -> byZ.computeIfAbsent(p.zInit(), z -> new ArrayList<>()).add(p));
+        List<HrDiagramData.ZeroAgeLine> lines = new ArrayList<>();
+        byZ.forEach((z, members) -> {
+            double youngest = members.stream().mapToDouble(HrPoint::ageGyr).min().orElseThrow();
+            lines.add(new HrDiagramData.ZeroAgeLine(z, youngest, members.stream()
+                    .filter(p -> p.ageGyr() == youngest).sorted(Comparator.comparingDouble(HrPoint::massMsun))
+                    .toList()));
+        });
+        List<HrPoint> labels = lines.isEmpty() ? List.of() : massLabels(lines.get(lines.size() / 2).points());
+        List<Double> ages = points.stream().map(HrPoint::ageGyr).distinct().sorted().toList();
+        return new HrDiagramData(physics, List.copyOf(byZ.keySet()), ages, points, lines, labels);
+    }
+
+    private static List<HrPoint> massLabels(List<HrPoint> line) {
+        List<HrPoint> labels = new ArrayList<>();
+        for (double target : LABEL_TARGETS) {
+            line.stream().min(Comparator.comparingDouble(p -> Math.abs(p.massMsun() - target)))
+                    .filter(p -> Math.abs(p.massMsun() - target) <= LABEL_TOLERANCE * target)
+                    .filter(p -> !labels.contains(p))
+                    .ifPresent(labels::add);
+        }
+        return labels;
+    }
+}

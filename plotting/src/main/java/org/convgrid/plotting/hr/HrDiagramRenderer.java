@@ -1,0 +1,84 @@
+package org.convgrid.plotting.hr;
+
+import java.awt.FontMetrics;
+import java.util.List;
+import java.util.Locale;
+import org.convgrid.engine.convection.StructureClass;
+import org.convgrid.plotting.SliceLabels;
+import org.convgrid.plotting.style.ChartStyle;
+import org.convgrid.plotting.style.StyledChart;
+import org.knowm.xchart.XYSeries;
+import org.knowm.xchart.style.markers.SeriesMarkers;
+
+/**
+ * Turns {@link HrDiagramData} into a chart: log Teff on a reversed x axis (hot stars left), log L/Lsun up. XChart
+ * cannot reverse an axis, so the x values are -log Teff and the tick labels drop the sign.
+ */
+public final class HrDiagramRenderer {
+
+    /** Margin added around the data range, in dex. */
+    private static final double PAD_DEX = 0.04;
+    /** Pixel spacing hint for the luminosity ticks (XChart's default gives 0.2 dex steps, too dense). */
+    private static final int Y_TICK_SPACING = 90;
+
+    private HrDiagramRenderer() {
+    }
+
+    /** The chart of an HR diagram. */
+    public static StyledChart render(HrDiagramData data) {
+        StyledChart chart = ChartStyle.newChart("HR diagram, Z = " + SliceLabels.values(data.metallicities()) + ", "
+                        + SliceLabels.ages(data.ages()), data.physics().describe(),
+                "log10(Teff / K)   (hotter to the left)", "log10(L / L\u2609)");
+        ChartStyle.legendRight(chart);
+        chart.getStyler().setxAxisTickLabelsFormattingFunction(v -> String.format(Locale.ROOT, "%.1f", -v + 0.0));
+        chart.getStyler().setYAxisDecimalPattern("0.0");
+        chart.getStyler().setYAxisTickMarkSpacingHint(Y_TICK_SPACING);
+        if (!data.points().isEmpty()) {
+            chart.getStyler().setXAxisMin(-data.points().stream().mapToDouble(HrPoint::logTeff).max().orElseThrow()
+                    - PAD_DEX);
+            chart.getStyler().setXAxisMax(-data.points().stream().mapToDouble(HrPoint::logTeff).min().orElseThrow()
+                    + PAD_DEX);
+            chart.getStyler().setYAxisMin(data.points().stream().mapToDouble(HrPoint::logL).min().orElseThrow()
+                    - 2 * PAD_DEX);
+            chart.getStyler().setYAxisMax(data.points().stream().mapToDouble(HrPoint::logL).max().orElseThrow()
+                    + 2 * PAD_DEX);
+        }
+        int index = 0;
+        for (HrDiagramData.ZeroAgeLine line : data.zeroAgeLines()) {
+            XYSeries s = chart.addSeries((line.ageGyr() == 0 ? "zero age" : SliceLabels.age(line.ageGyr()))
+                            + ", Z = " + SliceLabels.number(line.zInit()),
+                    line.points().stream().mapToDouble(p -> -p.logTeff()).toArray(),
+                    line.points().stream().mapToDouble(HrPoint::logL).toArray());
+            s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+            s.setMarker(SeriesMarkers.NONE);
+            s.setLineColor(ChartStyle.BLACK);
+            s.setLineStyle(ChartStyle.dashed(index++, 2.0f));
+        }
+        for (StructureClass c : StructureClass.values()) {
+            List<HrPoint> members = data.points().stream().filter(p -> p.structureClass() == c).toList();
+            if (members.isEmpty()) {
+                continue;
+            }
+            XYSeries s = chart.addSeries(ChartStyle.classLabel(c),
+                    members.stream().mapToDouble(p -> -p.logTeff()).toArray(),
+                    members.stream().mapToDouble(HrPoint::logL).toArray());
+            s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+            s.setMarker(ChartStyle.classMarker(c));
+            s.setMarkerColor(ChartStyle.classColor(c));
+        }
+        List<HrPoint> labels = data.massLabels();
+        chart.addOverlay((g, c) -> {
+            g.setFont(ChartStyle.ANNOTATION_FONT);
+            g.setColor(ChartStyle.BLACK);
+            FontMetrics fm = g.getFontMetrics();
+            for (HrPoint p : labels) {
+                String text = SliceLabels.number(p.massMsun()) + " M\u2609";
+                double x = c.getScreenXFromChart(-p.logTeff());
+                double y = c.getScreenYFromChart(p.logL());
+                // Left of and below the point: the hot, faint side of the zero-age line holds no models.
+                g.drawString(text, (float) (x - fm.stringWidth(text) - 14), (float) (y + fm.getAscent() + 4));
+            }
+        });
+        return chart;
+    }
+}

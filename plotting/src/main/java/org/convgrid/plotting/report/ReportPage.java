@@ -1,0 +1,176 @@
+package org.convgrid.plotting.report;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.Span;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.manifest.RunManifest;
+import org.convgrid.output.transitions.TransitionEstimate;
+import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.plotting.MapEntry;
+import org.convgrid.plotting.RunData;
+import org.convgrid.plotting.RunMaps;
+import org.convgrid.plotting.SliceLabels;
+
+/**
+ * Writes {@code RUN_DIR/report.html}: one static page that opens offline (images by relative link into maps/,
+ * inline CSS, no script): run summary from the manifest, counts by status, the maps present in maps/, the
+ * transition table, and every model without a usable result with its reason. Maps not yet drawn are listed as
+ * missing rather than linked.
+ */
+public final class ReportPage {
+
+    /** The report's file name in the run directory. */
+    public static final String FILE_NAME = "report.html";
+
+    private ReportPage() {
+    }
+
+    /** Writes the report of a run directory; returns its path. */
+    public static Path write(Path runDir) throws IOException {
+        RunData run = RunData.read(runDir);
+        Path target = runDir.resolve(FILE_NAME);
+        AtomicFiles.writeString(target, html(run, runDir));
+        return target;
+    }
+
+    /** The page's HTML. */
+    static String html(RunData run, Path runDir) {
+        StringBuilder b = new StringBuilder(16_384);
+        RunManifest m = run.manifest();
+        String title = "convgrid run" + (m == null ? "" : ": " + m.gridFile());
+        b.append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n<title>")
+                .append(Html.escape(title)).append("</title>\n<style>\n").append(ReportStyle.CSS)
+                .append("</style>\n</head>\n<body>\n<h1>").append(Html.escape(title)).append("</h1>\n");
+        summary(b, run);
+        counts(b, run);
+        maps(b, run, runDir);
+        transitions(b, run);
+        failures(b, run);
+        b.append("<h2>Convective zones against age</h2>\n<p>")
+                .append(run.hasTracks() ? "Evolution tracks exist in tracks/ but are not charted yet."
+                        : "No evolution tracks in this run.").append("</p>\n</body>\n</html>\n");
+        return b.toString();
+    }
+
+    private static void summary(StringBuilder b, RunData run) {
+        b.append("<h2>Run</h2>\n<table class=\"facts\">\n");
+        RunManifest m = run.manifest();
+        if (m == null) {
+            row(b, "manifest", "manifest.yaml not found");
+        } else {
+            row(b, "grid file", m.gridFile());
+            row(b, "convgrid version", m.toolVersion());
+            row(b, "started", m.started().toString());
+            row(b, "finished", m.finished() == null ? "not finished" : m.finished().toString());
+            row(b, "threads", Integer.toString(m.threads()));
+            if (m.shard() != null) {
+                row(b, "shard", m.shard());
+            }
+            row(b, "median time per model", Double.isNaN(m.medianSecondsPerModel()) ? "n/a"
+                    : SliceLabels.number(m.medianSecondsPerModel()) + " s");
+            m.physics().forEach(p -> row(b, "physics", SliceLabels.physics(p.mixingLength(), p.overshoot(),
+                    p.criterion(), p.opacityFactor())));
+        }
+        row(b, "catalogue rows", Integer.toString(run.catalogue().size()));
+        row(b, "transitions", run.transitionsFromFile() ? "from transitions.csv"
+                : "transitions.csv not found: read off the catalogue");
+        b.append("</table>\n");
+        if (m != null) {
+            b.append("<details><summary>grid file as read</summary>\n<pre>").append(Html.escape(m.gridText()))
+                    .append("</pre></details>\n");
+        }
+    }
+
+    private static void counts(StringBuilder b, RunData run) {
+        Map<ModelStatus, Long> counts = new EnumMap<>(ModelStatus.class);
+        for (ModelStatus s : ModelStatus.values()) {
+            counts.put(s, 0L);
+        }
+        run.catalogue().forEach(r -> counts.merge(r.status(), 1L, Long::sum));
+        b.append("<h2>Models by status</h2>\n<table>\n<tr><th>status</th><th>in catalogue</th>");
+        if (run.manifest() != null) {
+            b.append("<th>in manifest</th>");
+        }
+        b.append("</tr>\n");
+        for (ModelStatus s : ModelStatus.values()) {
+            b.append("<tr><td>").append(s.label()).append("</td><td class=\"num\">").append(counts.get(s));
+            if (run.manifest() != null) {
+                b.append("</td><td class=\"num\">").append(run.manifest().counts().get(s));
+            }
+            b.append("</td></tr>\n");
+        }
+        b.append("</table>\n");
+    }
+
+    private static void maps(StringBuilder b, RunData run, Path runDir) {
+        String section = null;
+        for (MapEntry e : RunMaps.plan(run)) {
+            if (!e.section().equals(section)) {
+                section = e.section();
+                b.append("<h2>").append(Html.escape(section)).append("</h2>\n");
+            }
+            String href = RunMaps.MAPS_DIR + "/" + e.fileName();
+            if (Files.isRegularFile(runDir.resolve(RunMaps.MAPS_DIR).resolve(e.fileName()))) {
+                b.append("<figure><a href=\"").append(Html.escape(href)).append("\"><img src=\"")
+                        .append(Html.escape(href)).append("\" alt=\"").append(Html.escape(e.caption()))
+                        .append("\" width=\"1200\" height=\"800\"></a><figcaption>").append(Html.escape(e.caption()))
+                        .append("</figcaption></figure>\n");
+            } else {
+                b.append("<p class=\"missing\">Not drawn yet: ").append(Html.escape(href))
+                        .append(" (run convgrid plot).</p>\n");
+            }
+        }
+    }
+
+    private static void transitions(StringBuilder b, RunData run) {
+        b.append("<h2>Transition masses</h2>\n<table>\n<tr><th>Z</th><th>age / Gyr</th><th>physics</th>"
+                + "<th>fully convective up to / M\u2609</th><th>bracket / M\u2609</th>"
+                + "<th>convective core from / M\u2609</th><th>bracket / M\u2609</th><th>method</th><th>notes</th></tr>\n");
+        for (TransitionRow t : run.transitions()) {
+            b.append("<tr><td class=\"num\">").append(SliceLabels.number(t.slice().zInit()))
+                    .append("</td><td class=\"num\">").append(SliceLabels.number(t.slice().ageGyr()))
+                    .append("</td><td>").append(Html.escape(SliceLabels.physics(t.slice()))).append("</td>");
+            estimate(b, t.fullyConvective());
+            estimate(b, t.convCore());
+            b.append("<td>").append(t.method().label()).append("</td><td>").append(Html.escape(t.notes()))
+                    .append("</td></tr>\n");
+        }
+        b.append("</table>\n");
+    }
+
+    private static void estimate(StringBuilder b, TransitionEstimate e) {
+        b.append("<td class=\"num\">").append(e.found() ? SliceLabels.number(e.massMsun()) : "not found")
+                .append("</td><td class=\"num\">").append(Html.escape(Span.format(e.bracket()))).append("</td>");
+    }
+
+    private static void failures(StringBuilder b, RunData run) {
+        List<CatalogueRow> failed = run.catalogue().stream().filter(r -> !r.isOk()).toList();
+        b.append("<h2>Models without a usable result</h2>\n");
+        if (failed.isEmpty()) {
+            b.append("<p>None: every model converged.</p>\n");
+            return;
+        }
+        b.append("<table>\n<tr><th>model</th><th>mass / M\u2609</th><th>Z</th><th>age / Gyr</th><th>status</th>"
+                + "<th>reason</th></tr>\n");
+        for (CatalogueRow r : failed) {
+            b.append("<tr><td>").append(Html.escape(r.modelId())).append("</td><td class=\"num\">")
+                    .append(SliceLabels.number(r.massMsun())).append("</td><td class=\"num\">")
+                    .append(SliceLabels.number(r.zInit())).append("</td><td class=\"num\">")
+                    .append(SliceLabels.number(r.ageGyr())).append("</td><td>").append(r.status().label())
+                    .append("</td><td>").append(Html.escape(r.statusDetail())).append("</td></tr>\n");
+        }
+        b.append("</table>\n");
+    }
+
+    private static void row(StringBuilder b, String key, String value) {
+        b.append("<tr><th>").append(Html.escape(key)).append("</th><td>").append(Html.escape(value))
+                .append("</td></tr>\n");
+    }
+}

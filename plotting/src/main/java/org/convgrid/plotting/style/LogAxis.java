@@ -1,0 +1,60 @@
+package org.convgrid.plotting.style;
+
+import java.awt.Color;
+import java.awt.FontMetrics;
+import java.awt.Graphics2D;
+import java.util.ArrayList;
+import java.util.List;
+import org.convgrid.plotting.SliceLabels;
+
+/**
+ * A logarithmic x axis labelled at chosen values. XChart labels every tick at 1..9 x 10^n, which collide on a
+ * narrow plot, and its label callback does not work on log axes; so XChart's labels are made transparent (they
+ * keep their space and tick marks) and an overlay writes our labels at the same height.
+ */
+public final class LogAxis {
+
+    private static final int[] ROUND_MANTISSAS = {1, 2, 3, 5};
+    private static final Color TRANSPARENT = new Color(0, 0, 0, 0);
+
+    private LogAxis() {
+    }
+
+    /** Makes the x axis logarithmic over [min, max], labelled at {@code labelled} (values outside are dropped). */
+    public static void applyX(StyledChart chart, double min, double max, List<Double> labelled) {
+        chart.getStyler().setXAxisLogarithmic(true);
+        chart.getStyler().setXAxisLogarithmicDecadeOnly(false);
+        chart.getStyler().setXAxisMin(min).setXAxisMax(max);
+        chart.getStyler().setXAxisTickLabelsColor(TRANSPARENT);
+        List<Double> inside = labelled.stream().filter(v -> v >= min && v <= max).toList();
+        chart.addOverlay((g, c) -> paintLabels(g, c, inside));
+    }
+
+    /** The round values 1, 2, 3 and 5 x 10^n in [min, max]. */
+    public static List<Double> roundValues(double min, double max) {
+        List<Double> ticks = new ArrayList<>();
+        for (int decade = (int) Math.floor(Math.log10(min)); decade <= (int) Math.ceil(Math.log10(max)); decade++) {
+            for (int m : ROUND_MANTISSAS) {
+                double value = Double.parseDouble(m + "e" + decade);
+                if (value >= min && value <= max) {
+                    ticks.add(value);
+                }
+            }
+        }
+        return ticks;
+    }
+
+    private static void paintLabels(Graphics2D g, StyledChart chart, List<Double> ticks) {
+        g.setFont(ChartStyle.TICK_FONT);
+        g.setColor(ChartStyle.TEXT);
+        FontMetrics fm = g.getFontMetrics();
+        double axisY = chart.getScreenYFromChart(chart.getStyler().getYAxisMin());
+        float baseline = (float) (axisY + chart.getStyler().getAxisTickMarkLength()
+                + chart.getStyler().getAxisTickPadding() + fm.getAscent());
+        for (double tick : ticks) {
+            String text = SliceLabels.number(tick);
+            double x = chart.getScreenXFromChart(tick);
+            g.drawString(text, (float) (x - fm.stringWidth(text) / 2.0), baseline);
+        }
+    }
+}

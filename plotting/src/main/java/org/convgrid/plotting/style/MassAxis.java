@@ -1,0 +1,16 @@
+package org.convgrid.plotting.style;
+
+/** The logarithmic stellar-mass axis shared by the mass charts, labelled at 1, 2, 3 and 5 x 10^n. */
+public final class MassAxis {
+
+    /** Axis title with unit. */
+    public static final String TITLE = "stellar mass M / M\u2609";
+
+    private MassAxis() {
+    }
+
+    /** Makes the x axis logarithmic over [min, max] solar masses (needs a y-axis minimum set). */
+    public static void apply(StyledChart chart, double min, double max) {
+        LogAxis.applyX(chart, min, max, LogAxis.roundValues(min, max));
+    }
+}

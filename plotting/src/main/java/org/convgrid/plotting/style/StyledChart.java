@@ -1,0 +1,42 @@
+package org.convgrid.plotting.style;
+
+import java.awt.Graphics2D;
+import java.awt.RenderingHints;
+import java.util.ArrayList;
+import java.util.List;
+import org.knowm.xchart.XYChart;
+
+/**
+ * An XChart chart that paints our overlays (tick labels XChart cannot place, notes) after XChart has painted
+ * itself, so the overlays appear in every output that paints the chart (PNG and vector files alike).
+ */
+public final class StyledChart extends XYChart {
+
+    /** Something drawn over the finished chart, in screen coordinates. */
+    @FunctionalInterface
+    public interface Overlay {
+        /** Paints onto {@code g}; {@code chart} converts data values to screen positions. */
+        void paint(Graphics2D g, StyledChart chart);
+    }
+
+    private final List<Overlay> overlays = new ArrayList<>();
+
+    StyledChart(int width, int height) {
+        super(width, height);
+    }
+
+    /** Adds an overlay, painted after the chart and earlier overlays. */
+    public void addOverlay(Overlay overlay) {
+        overlays.add(overlay);
+    }
+
+    @Override
+    public void paint(Graphics2D g, int width, int height) {
+        super.paint(g, width, height);
+        g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+        for (Overlay overlay : overlays) {
+            overlay.paint(g, this);
+        }
+    }
+}

@@ -1,0 +1,40 @@
+package org.convgrid.plotting.trend;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.function.Function;
+import org.convgrid.output.transitions.TransitionEstimate;
+import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.plotting.PhysicsKey;
+import org.convgrid.plotting.zones.TransitionMarker;
+
+/** Builds the transition-mass-against-Z data from transitions.csv rows of one physics: a pure function. */
+public final class TransitionTrend {
+
+    private TransitionTrend() {
+    }
+
+    /** The chart data of the rows whose physics is {@code physics}; unbracketed transitions are left out. */
+    public static TransitionTrendData build(PhysicsKey physics, List<TransitionRow> rows) {
+        List<TransitionRow> mine = rows.stream().filter(r -> PhysicsKey.of(r.slice()).equals(physics)).toList();
+        List<Double> ages = mine.stream().map(r -> r.slice().ageGyr()).distinct().sorted().toList();
+        List<TransitionTrendData.Series> series = new ArrayList<>();
+        addAll(series, TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT, TransitionRow::fullyConvective, mine, ages);
+        addAll(series, TransitionMarker.Kind.CONV_CORE_ONSET, TransitionRow::convCore, mine, ages);
+        List<Double> zs = mine.stream().map(r -> r.slice().zInit()).distinct().sorted().toList();
+        return new TransitionTrendData(physics, zs, series);
+    }
+
+    private static void addAll(List<TransitionTrendData.Series> out, TransitionMarker.Kind kind,
+                               Function<TransitionRow, TransitionEstimate> which, List<TransitionRow> rows,
+                               List<Double> ages) {
+        for (double age : ages) {
+            List<TrendPoint> points = rows.stream().filter(r -> r.slice().ageGyr() == age)
+                    .filter(r -> which.apply(r).found() && Double.isFinite(which.apply(r).massMsun()))
+                    .map(r -> new TrendPoint(r.slice().zInit(), which.apply(r).massMsun(), which.apply(r).bracket()))
+                    .sorted(Comparator.comparingDouble(TrendPoint::zInit)).toList();
+            out.add(new TransitionTrendData.Series(kind, age, points));
+        }
+    }
+}

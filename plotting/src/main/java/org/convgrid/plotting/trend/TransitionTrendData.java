@@ -1,0 +1,33 @@
+package org.convgrid.plotting.trend;
+
+import java.util.List;
+import org.convgrid.plotting.PhysicsKey;
+import org.convgrid.plotting.zones.TransitionMarker;
+
+/**
+ * Everything the transition-mass chart shows.
+ *
+ * @param physics the physics of every slice shown
+ * @param metallicities every Z of these slices, increasing (including those where no transition was found)
+ * @param series one series per (transition, age), ages increasing, fully convective limit first
+ */
+public record TransitionTrendData(PhysicsKey physics, List<Double> metallicities, List<Series> series) {
+
+    public TransitionTrendData {
+        metallicities = List.copyOf(metallicities);
+        series = List.copyOf(series);
+    }
+
+    /**
+     * One transition at one age across metallicity.
+     *
+     * @param kind which transition
+     * @param ageGyr the age, Gyr
+     * @param points the slices where the grid brackets the transition, increasing Z
+     */
+    public record Series(TransitionMarker.Kind kind, double ageGyr, List<TrendPoint> points) {
+        public Series {
+            points = List.copyOf(points);
+        }
+    }
+}

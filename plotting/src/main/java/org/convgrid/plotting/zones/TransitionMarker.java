@@ -1,0 +1,37 @@
+package org.convgrid.plotting.zones;
+
+import org.convgrid.output.Span;
+
+/**
+ * A transition mass marked on a zone map by a vertical line, as transitions.csv gives it.
+ *
+ * @param kind which transition
+ * @param massMsun where the line is drawn, solar masses
+ * @param bracket the two grid masses that bracket it, solar masses
+ */
+public record TransitionMarker(Kind kind, double massMsun, Span bracket) {
+
+    /** The two transitions of conventions.md. */
+    public enum Kind {
+        FULLY_CONVECTIVE_LIMIT("fully convective limit", "fully convective\nup to "),
+        CONV_CORE_ONSET("convective core onset", "convective core\nfrom ");
+
+        private final String label;
+        private final String legendPrefix;
+
+        Kind(String label, String legendPrefix) {
+            this.label = label;
+            this.legendPrefix = legendPrefix;
+        }
+
+        /** A two-line legend entry ending with the given mass text. */
+        public String legendLabel(String mass) {
+            return legendPrefix + mass;
+        }
+
+        /** In words, for legends. */
+        public String label() {
+            return label;
+        }
+    }
+}

@@ -1,0 +1,27 @@
+package org.convgrid.plotting.zones;
+
+/** The vertical coordinate of a zone map. */
+public enum ZoneAxis {
+    /** Mass coordinate m/M, from the catalogue's {@code conv_zones_mass_frac}. */
+    MASS_FRACTION("m/M (mass coordinate over total mass)", "mass"),
+    /** Radius coordinate r/R, from the envelope base radius (or profile files when present). */
+    RADIUS_FRACTION("r/R (radius over stellar radius)", "radius");
+
+    private final String title;
+    private final String stem;
+
+    ZoneAxis(String title, String stem) {
+        this.title = title;
+        this.stem = stem;
+    }
+
+    /** Axis title with its meaning. */
+    public String title() {
+        return title;
+    }
+
+    /** Word used in file names. */
+    public String stem() {
+        return stem;
+    }
+}

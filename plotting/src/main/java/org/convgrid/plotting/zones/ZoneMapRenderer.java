@@ -1,0 +1,70 @@
+package org.convgrid.plotting.zones;
+
+import java.awt.Color;
+import java.util.EnumSet;
+import java.util.Set;
+import org.convgrid.plotting.SliceLabels;
+import org.convgrid.plotting.style.ChartNotes;
+import org.convgrid.plotting.style.ChartStyle;
+import org.convgrid.plotting.style.MassAxis;
+import org.convgrid.plotting.style.StyledChart;
+import org.knowm.xchart.XYSeries;
+import org.knowm.xchart.style.markers.SeriesMarkers;
+
+/** Turns {@link ZoneMapData} into an XChart chart in {@link ChartStyle}. */
+public final class ZoneMapRenderer {
+
+    private ZoneMapRenderer() {
+    }
+
+    /** The chart of a zone map. */
+    public static StyledChart render(ZoneMapData data) {
+        StyledChart chart = ChartStyle.newChart("Convective zones, Z = "
+                        + SliceLabels.number(data.slice().zInit()) + ", " + SliceLabels.age(data.slice().ageGyr()),
+                SliceLabels.physics(data.slice()),
+                MassAxis.TITLE, data.axis().title());
+        ChartStyle.legendRight(chart);
+        MassAxis.apply(chart, data.massMin(), data.massMax());
+        ChartStyle.unitYAxis(chart);
+        chart.getStyler().setPlotGridLinesVisible(false);
+        Set<ZoneKind> inLegend = EnumSet.noneOf(ZoneKind.class);
+        int i = 0;
+        // Kind order fixes the legend order; rectangles never overlap, so drawing order does not matter.
+        for (ZoneRect r : data.rects().stream().sorted(java.util.Comparator.comparing(ZoneRect::kind)).toList()) {
+            boolean first = inLegend.add(r.kind());
+            String name = first ? r.kind().label() : "zone " + i;
+            XYSeries s = chart.addSeries(name, new double[] {r.left(), r.right(), r.right(), r.left(), r.left()},
+                    new double[] {r.lo(), r.lo(), r.hi(), r.hi(), r.lo()});
+            s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.PolygonArea);
+            Color fill = fill(r.kind());
+            s.setFillColor(fill);
+            s.setLineColor(fill);
+            s.setLineWidth(1.0f);
+            s.setMarker(SeriesMarkers.NONE);
+            s.setShowInLegend(first);
+            i++;
+        }
+        for (TransitionMarker m : data.markers()) {
+            boolean fullyConvective = m.kind() == TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT;
+            String label = m.kind().legendLabel(SliceLabels.number(m.massMsun()) + " M\u2609");
+            XYSeries s = chart.addSeries(label, new double[] {m.massMsun(), m.massMsun()}, new double[] {0.0, 1.0});
+            s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+            s.setLineColor(ChartStyle.BLACK);
+            s.setLineStyle(fullyConvective ? ChartStyle.REFERENCE_SOLID : ChartStyle.REFERENCE_DASHED);
+            s.setMarker(SeriesMarkers.NONE);
+        }
+        ChartNotes.addRightOfPlot(chart, data.notes());
+        return chart;
+    }
+
+    /** Fill colour of a zone kind: the hue of the matching structure class, lightened for large areas. */
+    static Color fill(ZoneKind kind) {
+        return switch (kind) {
+            case WHOLE_STAR -> ChartStyle.tint(ChartStyle.VERMILLION, 0.35);
+            case CORE -> ChartStyle.tint(ChartStyle.BLUISH_GREEN, 0.35);
+            case ENVELOPE -> ChartStyle.tint(ChartStyle.BLUE, 0.35);
+            case SHELL -> ChartStyle.tint(ChartStyle.REDDISH_PURPLE, 0.2);
+            case NO_RESULT -> ChartStyle.NO_RESULT_GREY;
+        };
+    }
+}

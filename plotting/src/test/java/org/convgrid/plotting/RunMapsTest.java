@@ -1,0 +1,68 @@
+package org.convgrid.plotting;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.awt.image.BufferedImage;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Set;
+import javax.imageio.ImageIO;
+import org.convgrid.plotting.style.ChartFiles;
+import org.convgrid.plotting.style.ChartStyle;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class RunMapsTest {
+
+    /**
+     * Budget for drawing every map of a 1000-model run. The target is 10 s (measured 3-5 s warm on 2 cores); the
+     * assertion allows twice that because CI cores are shared with other jobs.
+     */
+    private static final double THOUSAND_MODEL_BUDGET_SECONDS = 20.0;
+
+    @Test
+    void drawsEveryChartAsAPngOfTheStatedSize(@TempDir Path dir) throws Exception {
+        TestRuns.write(dir, TestRuns.demoRows());
+        List<Path> files = RunMaps.drawAll(dir);
+        // 9 slices x (mass + radius) + 1 HR diagram + 1 transition chart.
+        assertThat(files).hasSize(20).allSatisfy(f -> {
+            assertThat(f.getParent()).isEqualTo(dir.resolve("maps"));
+            BufferedImage image = ImageIO.read(f.toFile());
+            assertThat(image).as(f.toString()).isNotNull();
+            assertThat(image.getWidth()).isEqualTo(ChartStyle.WIDTH);
+            assertThat(image.getHeight()).isEqualTo(ChartStyle.HEIGHT);
+        });
+        assertThat(files).extracting(f -> f.getFileName().toString()).contains(
+                "zones-mass_z0.014_age4.57_a1.8_ov0_schwarzschild.png",
+                "zones-radius_z0.004_age0_a1.8_ov0_schwarzschild.png", "hr_a1.8_ov0_schwarzschild.png",
+                "transitions-vs-z_a1.8_ov0_schwarzschild.png");
+        try (var left = Files.list(dir.resolve("maps"))) {
+            assertThat(left.filter(f -> f.getFileName().toString().endsWith(".tmp"))).isEmpty();
+        }
+    }
+
+    @Test
+    void writesVectorFilesWhenAsked(@TempDir Path dir) throws Exception {
+        TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.2, 1.6, 8), new double[] {0.014}, new double[] {0}));
+        List<Path> files = RunMaps.drawAll(dir, Set.of(ChartFiles.VectorFormat.SVG, ChartFiles.VectorFormat.PDF));
+        Path svg = dir.resolve("maps/hr_a1.8_ov0_schwarzschild.svg");
+        Path pdf = dir.resolve("maps/hr_a1.8_ov0_schwarzschild.pdf");
+        assertThat(files).contains(svg, pdf);
+        assertThat(Files.readString(svg)).contains("<svg");
+        assertThat(new String(Files.readAllBytes(pdf), 0, 5, java.nio.charset.StandardCharsets.US_ASCII))
+                .isEqualTo("%PDF-");
+    }
+
+    @Test
+    void thousandModelRunIsDrawnWithinBudget(@TempDir Path dir) throws Exception {
+        // 56 masses x 6 metallicities x 3 ages = 1008 models.
+        TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.1, 2.85, 56),
+                new double[] {0.002, 0.004, 0.008, 0.014, 0.02, 0.03}, new double[] {0, 1, 4.57}));
+        long start = System.nanoTime();
+        List<Path> files = RunMaps.drawAll(dir);
+        double seconds = (System.nanoTime() - start) / 1e9;
+        assertThat(files).hasSize(2 * 18 + 2);
+        assertThat(seconds).as("seconds for %d maps", files.size()).isLessThan(THOUSAND_MODEL_BUDGET_SECONDS);
+    }
+}

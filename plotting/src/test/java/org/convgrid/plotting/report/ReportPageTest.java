@@ -1,0 +1,55 @@
+package org.convgrid.plotting.report;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.plotting.RunMaps;
+import org.convgrid.plotting.TestRuns;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class ReportPageTest {
+
+    static final Pattern IMG_SRC = Pattern.compile("<img src=\"([^\"]+)\"");
+
+    @Test
+    void staticOfflinePageWithSummaryMapsTransitionsAndFailures(@TempDir Path dir) throws Exception {
+        List<CatalogueRow> rows = TestRuns.rows(TestRuns.masses(0.1, 2.0, 12), new double[] {0.004, 0.014},
+                new double[] {0, 4.57});
+        TestRuns.write(dir, rows);
+        RunMaps.drawAll(dir);
+        String html = Files.readString(ReportPage.write(dir));
+        assertThat(html).startsWith("<!DOCTYPE html>").contains("<style>", "grids/synthetic.yaml",
+                "Models by status", "past_main_sequence", "Transition masses", "No evolution tracks in this run.");
+        assertThat(html).doesNotContain("<script", "http://", "https://", "<link");
+        Matcher m = IMG_SRC.matcher(html);
+        int images = 0;
+        while (m.find()) {
+            images++;
+            assertThat(m.group(1)).startsWith("maps/");
+            assertThat(dir.resolve(m.group(1))).isRegularFile();
+        }
+        assertThat(images).isEqualTo(2 * 4 + 2);
+        for (CatalogueRow failed : rows.stream().filter(r -> !r.isOk()).toList()) {
+            assertThat(html).contains(failed.modelId(), Html.escape(failed.statusDetail()));
+        }
+    }
+
+    @Test
+    void mapsNotYetDrawnAreListedNotLinked(@TempDir Path dir) throws Exception {
+        TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.2, 1.4, 5), new double[] {0.014}, new double[] {0}));
+        Files.delete(dir.resolve("manifest.yaml"));
+        String html = Files.readString(ReportPage.write(dir));
+        assertThat(html).doesNotContain("<img").contains("Not drawn yet", "manifest.yaml not found");
+    }
+
+    @Test
+    void escapesText() {
+        assertThat(Html.escape("a<b & \"c\"")).isEqualTo("a&lt;b &amp; &quot;c&quot;");
+    }
+}

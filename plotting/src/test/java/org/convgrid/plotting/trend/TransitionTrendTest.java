@@ -1,0 +1,43 @@
+package org.convgrid.plotting.trend;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.util.List;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.transitions.TransitionFinder;
+import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.plotting.PhysicsKey;
+import org.convgrid.plotting.TestRuns;
+import org.convgrid.plotting.zones.TransitionMarker;
+import org.junit.jupiter.api.Test;
+
+class TransitionTrendTest {
+
+    @Test
+    void pointsAndBracketsAreThoseOfTheTransitionsFile() {
+        List<CatalogueRow> rows = TestRuns.demoRows();
+        List<TransitionRow> transitions = TransitionFinder.withDefaults().find(rows);
+        TransitionTrendData data = TransitionTrend.build(PhysicsKey.of(rows.get(0)), transitions);
+        assertThat(data.metallicities()).containsExactly(0.004, 0.014, 0.02);
+        assertThat(data.series()).hasSize(6);
+        for (TransitionTrendData.Series s : data.series()) {
+            assertThat(s.points()).hasSize(3);
+            for (TrendPoint p : s.points()) {
+                TransitionRow t = transitions.stream().filter(r -> r.slice().zInit() == p.zInit()
+                        && r.slice().ageGyr() == s.ageGyr()).findFirst().orElseThrow();
+                var estimate = s.kind() == TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT ? t.fullyConvective()
+                        : t.convCore();
+                assertThat(p.massMsun()).isEqualTo(estimate.massMsun());
+                assertThat(p.bracket()).isEqualTo(estimate.bracket());
+            }
+        }
+    }
+
+    @Test
+    void otherPhysicsIsLeftOut() {
+        List<TransitionRow> transitions = TransitionFinder.withDefaults().find(TestRuns.demoRows());
+        TransitionTrendData data = TransitionTrend.build(new PhysicsKey(2.0, 0.0, null, 1.0), transitions);
+        assertThat(data.metallicities()).isEmpty();
+        assertThat(data.series()).isEmpty();
+    }
+}

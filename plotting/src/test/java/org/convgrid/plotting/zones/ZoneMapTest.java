@@ -1,0 +1,112 @@
+package org.convgrid.plotting.zones;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.List;
+import java.util.Map;
+import org.convgrid.output.Span;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.transitions.Slice;
+import org.convgrid.output.transitions.TransitionFinder;
+import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.plotting.TestRuns;
+import org.junit.jupiter.api.Test;
+
+class ZoneMapTest {
+
+    private final List<CatalogueRow> rows = TestRuns.demoRows();
+    private final List<TransitionRow> transitions = TransitionFinder.withDefaults().find(rows);
+
+    @Test
+    void shadedIntervalsInMassAreExactlyTheCatalogueZones() {
+        for (TransitionRow t : transitions) {
+            ZoneMapData map = ZoneMap.inMass(t.slice(), rows, t);
+            for (CatalogueRow r : rows.stream().filter(r -> Slice.of(r).equals(t.slice())).toList()) {
+                List<ZoneRect> mine = map.rects().stream().filter(z -> z.modelId().equals(r.modelId())).toList();
+                if (r.isOk()) {
+                    assertThat(mine.stream().map(z -> new Span(z.lo(), z.hi())).toList())
+                            .as(r.modelId()).isEqualTo(r.convZones());
+                } else {
+                    assertThat(mine).singleElement().satisfies(z -> {
+                        assertThat(z.kind()).isEqualTo(ZoneKind.NO_RESULT);
+                        assertThat(z.lo()).isZero();
+                        assertThat(z.hi()).isEqualTo(1.0);
+                    });
+                }
+            }
+            long zonesInSlice = rows.stream().filter(r -> Slice.of(r).equals(t.slice()))
+                    .mapToLong(r -> r.isOk() ? r.convZones().size() : 1).sum();
+            assertThat(map.rects()).hasSize((int) zonesInSlice);
+        }
+    }
+
+    @Test
+    void markedTransitionMassesAreThoseOfTheTransitionsFile() {
+        for (TransitionRow t : transitions) {
+            ZoneMapData map = ZoneMap.inMass(t.slice(), rows, t);
+            assertThat(map.markers()).extracting(TransitionMarker::kind).containsExactly(
+                    TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT, TransitionMarker.Kind.CONV_CORE_ONSET);
+            assertThat(map.markers().get(0).massMsun()).isEqualTo(t.fullyConvective().massMsun());
+            assertThat(map.markers().get(0).bracket()).isEqualTo(t.fullyConvective().bracket());
+            assertThat(map.markers().get(1).massMsun()).isEqualTo(t.convCore().massMsun());
+        }
+        // The synthetic run puts the limit near 0.35 Msun and the onset near 1.1 Msun at Z = 0.014.
+        TransitionRow solar = transitions.stream().filter(t -> t.slice().zInit() == 0.014).findFirst().orElseThrow();
+        assertThat(solar.fullyConvective().massMsun()).isEqualTo(0.35);
+        assertThat(solar.convCore().massMsun()).isEqualTo(1.1);
+    }
+
+    @Test
+    void columnsMeetAtGeometricMidpointsAndTileTheAxis() {
+        double[] edges = ZoneMap.columnEdges(new double[] {0.1, 0.4, 1.6});
+        assertThat(edges[1]).isCloseTo(0.2, within(1e-12));
+        assertThat(edges[2]).isCloseTo(0.8, within(1e-12));
+        assertThat(edges[0]).isCloseTo(0.05, within(1e-12));
+        assertThat(edges[3]).isCloseTo(3.2, within(1e-12));
+        TransitionRow t = transitions.get(0);
+        ZoneMapData map = ZoneMap.inMass(t.slice(), rows, t);
+        assertThat(map.rects()).allSatisfy(z -> {
+            assertThat(z.left()).isLessThan(z.massMsun());
+            assertThat(z.right()).isGreaterThan(z.massMsun());
+        });
+        assertThat(map.massMin()).isLessThan(0.1);
+        assertThat(map.massMax()).isGreaterThan(2.0);
+    }
+
+    @Test
+    void radiusMapDrawsOnlyWhatTheCatalogueSupportsAndSaysSo() {
+        TransitionRow t = transitions.get(1);
+        ZoneMapData map = ZoneMap.inRadius(t.slice(), rows, t, Map.of());
+        assertThat(map.axis()).isEqualTo(ZoneAxis.RADIUS_FRACTION);
+        assertThat(map.notes()).containsExactly(ZoneMap.CORE_RADIUS_NOTE);
+        assertThat(map.rects()).extracting(ZoneRect::kind).doesNotContain(ZoneKind.CORE, ZoneKind.SHELL);
+        CatalogueRow sunLike = rows.stream().filter(r -> Slice.of(r).equals(t.slice()) && r.massMsun() == 1.0)
+                .findFirst().orElseThrow();
+        assertThat(map.rects().stream().filter(z -> z.modelId().equals(sunLike.modelId())))
+                .singleElement().satisfies(z -> {
+                    assertThat(z.lo()).isEqualTo(sunLike.envCzBaseRadiusFrac());
+                    assertThat(z.hi()).isEqualTo(1.0);
+                    assertThat(z.kind()).isEqualTo(ZoneKind.ENVELOPE);
+                });
+    }
+
+    @Test
+    void radiusMapPrefersProfileZonesAndThenNeedsNoNote() {
+        TransitionRow t = transitions.get(1);
+        List<CatalogueRow> slice = rows.stream().filter(r -> Slice.of(r).equals(t.slice()) && r.isOk()).toList();
+        Map<String, List<Span>> fromProfiles = new java.util.HashMap<>();
+        slice.forEach(r -> fromProfiles.put(r.modelId(), List.of(new Span(0, 0.1), new Span(0.8, 1))));
+        ZoneMapData map = ZoneMap.inRadius(t.slice(), rows, t, fromProfiles);
+        assertThat(map.notes()).isEmpty();
+        assertThat(map.rects().stream().filter(z -> z.kind() == ZoneKind.CORE)).hasSize(slice.size());
+    }
+
+    @Test
+    void zoneKindsFollowWhereTheZoneLies() {
+        assertThat(ZoneKind.of(0, 1)).isEqualTo(ZoneKind.WHOLE_STAR);
+        assertThat(ZoneKind.of(0, 0.1)).isEqualTo(ZoneKind.CORE);
+        assertThat(ZoneKind.of(0.7, 1)).isEqualTo(ZoneKind.ENVELOPE);
+        assertThat(ZoneKind.of(0.3, 0.4)).isEqualTo(ZoneKind.SHELL);
+    }
+}
