@@ -1,8 +1,5 @@
 package org.convgrid.engine.zams;
 
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelRequest;
-import org.convgrid.engine.batch.ModelStatus;
 import org.convgrid.engine.structure.SolveReport;
 
 /**
@@ -16,15 +13,6 @@ public record ZamsResult(ZamsModel model, SolveReport failure, int iterations) {
 
     public boolean converged() {
         return model != null;
-    }
-
-    /** The catalogue outcome of this result for {@code request} (status OK or NOT_CONVERGED with the report). */
-    public ModelOutcome outcome(ModelRequest request) {
-        if (model != null) {
-            return new ModelOutcome(request, ModelStatus.OK, "", model.model().global(), model.model().convection(),
-                    iterations);
-        }
-        return new ModelOutcome(request, ModelStatus.NOT_CONVERGED, failure.toString(), null, null, iterations);
     }
 
     static ZamsResult success(ZamsModel model, int iterations) {
