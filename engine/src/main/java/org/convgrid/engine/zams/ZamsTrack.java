@@ -13,8 +13,9 @@ import org.convgrid.engine.units.Constants;
 /**
  * Zero-age models along one line of constant composition and physics, each seeded by homology from the nearest
  * converged neighbours ({@link HomologySeeder}) and walked there in steps of at most {@link #MAX_STEP} in ln M,
- * halved when a step fails. The first model comes from the polytropic guess at the requested mass, or, if that
- * fails, at {@link #ANCHOR_MASS} and is walked from there. The walk depends only on the requests and their
+ * halved when a step fails. The first model comes from the polytropic guess at the requested mass where that is
+ * reliable ({@link #coldStartReliable}), otherwise (or if it fails) at {@link #ANCHOR_MASS}, and is walked from
+ * there. The walk depends only on the requests and their
  * order, never on timing, so results are reproducible. Not thread-safe: one track per line and thread.
  *
  * <p>Typical use by a grid: one track per chunk of a line of constant composition and physics, masses requested
@@ -30,6 +31,11 @@ public final class ZamsTrack {
     public static final double MIN_STEP = 0.004;
     /** Mass of the fallback cold start, g (the Sun: the polytropic guess suits it best). */
     public static final double ANCHOR_MASS = Constants.M_SUN;
+    /** Cold starts are tried at or above this mass, Msun. */
+    public static final double COLD_START_MIN_MASS = 0.18;
+    /** No cold starts strictly between these masses, Msun. */
+    public static final double COLD_START_GAP_LOW = 1.6;
+    public static final double COLD_START_GAP_HIGH = 4.0;
     /** Masses closer than this relative difference are the same model. */
     public static final double SAME_MASS = 1.0e-9;
     /** Relaxations allowed for one request (cold starts, intermediate masses and retries together). */
@@ -81,6 +87,15 @@ public final class ZamsTrack {
         }
         int spent = 0;
         SolveReport coldFailure = null;
+        if (converged.isEmpty() && !coldStartReliable(mass)) {
+            try {
+                ZamsModel z = builder.coldStart(ANCHOR_MASS, composition);
+                add(z);
+                spent += z.iterations();
+            } catch (SolveFailedException e) {
+                return ZamsResult.failed(e.report(), e.report().iterations());
+            }
+        }
         if (converged.isEmpty()) {
             try {
                 ZamsModel z = builder.coldStart(mass, composition);
@@ -129,6 +144,16 @@ public final class ZamsTrack {
         }
         return ZamsResult.failed(new SolveReport(org.convgrid.engine.structure.StopReason.ITERATION_BUDGET,
                 spent, Double.NaN, -1, -1, "homology walk used its " + ATTEMPT_BUDGET + " relaxations"), spent);
+    }
+
+    /**
+     * Whether a cold start at this mass usually converges (measured with the standard physics: it fails below
+     * ~0.12 Msun and is slow or fails between ~1.8 and ~4 Msun, where the convective core appears); elsewhere
+     * the track starts at {@link #ANCHOR_MASS} and walks.
+     */
+    static boolean coldStartReliable(double mass) {
+        double m = mass / Constants.M_SUN;
+        return m >= COLD_START_MIN_MASS && (m <= COLD_START_GAP_LOW || m >= COLD_START_GAP_HIGH);
     }
 
     /** The converged model nearest to {@code mass} in ln M, other than {@code excluded}; null if none. */
