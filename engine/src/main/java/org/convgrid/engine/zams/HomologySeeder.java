@@ -42,7 +42,7 @@ public final class HomologySeeder {
             double spacing = Math.abs(Math.log(nearest.mass() / other.mass()));
             double reach = Math.abs(Math.log(mass / nearest.mass()));
             if (spacing >= MIN_NEIGHBOUR_SPACING && reach <= MAX_EXTRAPOLATION * spacing) {
-                return extrapolate(nearest, other, mass);
+                return extrapolate(nearest.state(), other.state(), mass);
             }
         }
         double xR = DEFAULT_RADIUS_EXPONENT;
@@ -89,9 +89,9 @@ public final class HomologySeeder {
      *
      * @param mass target mass, g
      */
-    public ModelState extrapolate(StellarModel nearest, StellarModel other, double mass) {
-        ModelState a = nearest.state();
-        ModelState b = other.state();
+    public ModelState extrapolate(ModelState nearest, ModelState other, double mass) {
+        ModelState a = nearest;
+        ModelState b = other;
         double ratio = Math.log(mass / a.mesh().totalMass()) / Math.log(a.mesh().totalMass() / b.mesh().totalMass());
         int n = a.size();
         double[] lnR = a.lnRadii();
