@@ -33,7 +33,8 @@ import org.convgrid.engine.units.Constants;
  * <p>nabla = nabla_rad = 3 kappa L P/(16 pi a c G m T^4) where stable; where nabla_rad exceeds nabla_ad
  * (Schwarzschild) or nabla_ad + nabla_mu/delta (Ledoux, ideal-gas phi = 1) the convection model gives nabla.
  * Jacobians: analytic in radiative points (from the EOS chi's and the opacity/rate logarithmic derivatives),
- * one-sided differences of the whole local evaluation in convective points. Not thread-safe (scratch space).
+ * one-sided differences of the whole local evaluation in convective points, and of eps through the slaved
+ * abundances where burning matters (so the iteration stays quadratic). Not thread-safe (scratch space).
  */
 public final class StructureEquations implements DifferenceSystem {
 
