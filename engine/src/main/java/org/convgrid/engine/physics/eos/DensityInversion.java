@@ -20,15 +20,26 @@ final class DensityInversion {
     private DensityInversion() {
     }
 
+    /** The forward equation of state at fixed temperature and composition, as a function of ln rho. */
+    interface Isotherm {
+        EosState at(double lnRho);
+    }
+
     static EosState invert(EquationOfState eos, double pressure, double temperature, Composition composition,
                            double densityGuess) {
+        return invert(lnRho -> eos.atDensity(Math.exp(lnRho), temperature, composition), pressure, temperature,
+                densityGuess);
+    }
+
+    /** Same with the forward equation of state given as an isotherm at {@code temperature} (K). */
+    static EosState invert(Isotherm eos, double pressure, double temperature, double densityGuess) {
         double target = Math.log(pressure);
         double lnRho = Math.log(densityGuess);
         double lo = Double.NEGATIVE_INFINITY;
         double hi = Double.POSITIVE_INFINITY;
         double step = Double.NaN;
         for (int i = 0; i < BUDGET; i++) {
-            EosState s = eos.atDensity(Math.exp(lnRho), temperature, composition);
+            EosState s = eos.at(lnRho);
             double mismatch = Math.log(s.pressure()) - target;
             if (mismatch > 0.0) {
                 hi = Math.min(hi, lnRho);
@@ -40,7 +51,7 @@ final class DensityInversion {
             double next = lnRho + step;
             if (Math.abs(step) < TOLERANCE) {
                 // Converged; tested before the bracket because a step below one ulp leaves next on its edge.
-                return Math.abs(mismatch) < 1e-13 ? s : eos.atDensity(Math.exp(next), temperature, composition);
+                return Math.abs(mismatch) < 1e-13 ? s : eos.at(next);
             }
             if (!(next > lo && next < hi) && Double.isFinite(lo) && Double.isFinite(hi)) {
                 next = 0.5 * (lo + hi);
