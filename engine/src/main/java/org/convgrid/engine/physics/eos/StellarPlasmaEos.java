@@ -166,19 +166,21 @@ public final class StellarPlasmaEos implements EquationOfState {
             }
             step = -p.residual / p.residualSlope;
             step = Math.max(-MAX_NEWTON_STEP, Math.min(MAX_NEWTON_STEP, step));
+            if (Math.abs(step) < ETA_TOLERANCE) {
+                // Converged: eta is within the tolerance of the root, and fd and the Coulomb term are set for it.
+                // Tested before the bracket: a step below one ulp leaves eta + step on the bracket's edge, which
+                // would send it to the bisection point far away.
+                p.evaluate(eta);
+                p.lastEta = eta;
+                p.iterations = i + 1;
+                return;
+            }
             double next = eta + step;
             if (!(next > lo && next < hi)) {
                 next = 0.5 * (lo + hi);
             }
             if (Math.abs(next - p.reference) > REREFERENCE) {
                 p.prepare(density, temperature, next);
-            }
-            if (Math.abs(next - eta) < ETA_TOLERANCE) {
-                p.solveStep(next);
-                p.evaluate(next);
-                p.lastEta = next;
-                p.iterations = i + 1;
-                return;
             }
             eta = next;
         }
