@@ -127,6 +127,37 @@ final class PlasmaPoint {
     }
 
     /**
+     * A starting eta for the neutrality solve at the prepared (rho, T) that accounts for incomplete ionisation:
+     * with non-degenerate electrons, n_e m_u/rho = Q/x (x as in {@link #ratio}, Q = sqrt(pi)/2 n_Q m_u e^eta_ref/rho),
+     * and the true root x* is at least each of the roots obtained by over-estimating the ions' electrons: all
+     * species fully ionised (Q/x = ye_max); every stage in its weak-ionisation limit (ye <= S x, S the sum of
+     * a K); hydrogen exact and everything else fully ionised (a quadratic). The largest of these lower bounds is
+     * returned as eta = eta_ref - ln x; it is exact for neutral gas ionised by metals and for pure hydrogen.
+     * Degeneracy and the Coulomb shift are ignored: the Newton iteration corrects them.
+     */
+    double ionisationGuess() {
+        double t = temperature;
+        double q = 0.5 * Math.sqrt(Math.PI) * ELECTRON_DENSITY_CONSTANT * (t * Math.sqrt(t)) * Constants.M_U
+                / density * Math.exp(reference);
+        double hydrogen = abundance[0];
+        double linear = hydrogen * kH + abundance[1] * kHe0;
+        for (int m = 0; m < el.metalCount; m++) {
+            linear += abundance[2 + m] * (kFirst[m] + (el.charge[m] - 1) * kInner[m]);
+        }
+        double x = Math.max(q / yeMax, Math.sqrt(q / linear));
+        // Q/x = a k x/(1 + k x) + rest: (a + rest) k x^2 + (rest - Q k) x - Q = 0.
+        double rest = yeMax - hydrogen;
+        double b = rest - q * kH;
+        double twoA = 2.0 * yeMax * kH;
+        double root = b < 0.0 ? (-b + Math.sqrt(b * b + 2.0 * twoA * q)) / twoA
+                : 2.0 * q / (b + Math.sqrt(b * b + 2.0 * twoA * q));
+        if (root > x) {
+            x = root;
+        }
+        return reference - Math.log(x);
+    }
+
+    /**
      * The Newton part at this eta for the prepared (rho, T): residual, its full eta-slope (Coulomb shift
      * included), free electrons and the H and He fractions. Leaves fd and the Coulomb term set for
      * {@link #evaluate}.

@@ -50,6 +50,8 @@ public final class StellarPlasmaEos implements EquationOfState {
     public static final double MIN_TEMPERATURE = 1.0e3;
     public static final double MAX_TEMPERATURE = 1.0e9;
     private static final double MAX_NEWTON_STEP = 30.0;
+    /** Below this starting eta the electrons are treated as non-degenerate for the ionisation-aware guess. */
+    private static final double NON_DEGENERATE = -2.0;
     /** Re-reference the Saha constants when eta moves this far (see PlasmaPoint.LN_CLIP). */
     private static final double REREFERENCE = 100.0;
 
@@ -154,6 +156,15 @@ public final class StellarPlasmaEos implements EquationOfState {
     private static void solve(PlasmaPoint p, double density, double temperature, double etaGuess) {
         double eta = etaGuess;
         p.prepare(density, temperature, eta);
+        if (eta < NON_DEGENERATE) {
+            double better = p.ionisationGuess();
+            if (Double.isFinite(better)) {
+                eta = Math.max(-PlasmaPoint.ETA_LIMIT + 1.0, Math.min(eta, better));
+                if (Math.abs(eta - p.reference) > REREFERENCE) {
+                    p.prepare(density, temperature, eta);
+                }
+            }
+        }
         double lo = -PlasmaPoint.ETA_LIMIT;
         double hi = PlasmaPoint.ETA_LIMIT;
         double step = Double.NaN;
