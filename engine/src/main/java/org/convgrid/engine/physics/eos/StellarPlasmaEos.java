@@ -134,7 +134,7 @@ public final class StellarPlasmaEos implements EquationOfState {
         ConvgridException.requireInRange("temperature", temperature, MIN_TEMPERATURE, MAX_TEMPERATURE, "K");
     }
 
-    private static double fullyIonisedEta(PlasmaPoint p, double density, double temperature) {
+    static double fullyIonisedEta(PlasmaPoint p, double density, double temperature) {
         return initialEta(p.electronsFullyIonised() * density
                 / (Constants.M_U * PlasmaPoint.ELECTRON_DENSITY_CONSTANT * Math.pow(temperature, 1.5)));
     }
@@ -153,7 +153,7 @@ public final class StellarPlasmaEos implements EquationOfState {
     }
 
     /** Solves charge neutrality at (rho, T) from etaGuess and completes P, u and the partials at the root. */
-    private static void solve(PlasmaPoint p, double density, double temperature, double etaGuess) {
+    static void solve(PlasmaPoint p, double density, double temperature, double etaGuess) {
         double eta = etaGuess;
         p.prepare(density, temperature, eta);
         if (eta < NON_DEGENERATE) {
