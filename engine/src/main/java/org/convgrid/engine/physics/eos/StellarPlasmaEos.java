@@ -34,8 +34,8 @@ import org.convgrid.engine.units.Constants;
  * <p><b>Energy zero</b>: neutral atoms at rest, so u includes the ionisation energy. <b>Derivatives</b>: implicit
  * differentiation of the neutrality condition, d eta = -(dR/dx)/(dR/d eta) dx, with partial derivatives at fixed
  * eta taken analytically from the closed-form P, u and R (see {@link PlasmaPoint}; no re-solve, so no solver noise);
- * the remaining quantities follow from the identities of formulas.md 1.5. Thread-safe: the only mutable field is a
- * one-entry cache of composition constants that never changes a result.
+ * the remaining quantities follow from the identities of formulas.md 1.5. Thread-safe: the only mutable state is a
+ * per-thread one-entry cache of composition constants that never changes a result.
  */
 public final class StellarPlasmaEos implements EquationOfState {
 
@@ -58,8 +58,9 @@ public final class StellarPlasmaEos implements EquationOfState {
     private final PlasmaElements elements;
     private final boolean pressureIonisation;
     private final boolean coulombCorrection;
-    /** Constants of the last composition seen (see {@link #point}); any thread may replace it. */
-    private volatile PlasmaComposition lastComposition;
+    /** Per thread, the constants of the last composition that thread used (see {@link #point}). */
+    private final ThreadLocal<PlasmaComposition[]> lastComposition =
+            ThreadLocal.withInitial(() -> new PlasmaComposition[1]);
 
     /** Grevesse &amp; Sauval 1998 metals, pressure ionisation and Coulomb correction on. */
     public StellarPlasmaEos() {
@@ -116,15 +117,16 @@ public final class StellarPlasmaEos implements EquationOfState {
     }
 
     /**
-     * A fresh scratch point for this composition; the composition constants are reused while consecutive calls
-     * share a composition (a one-entry cache: an immutable value published through a volatile field, so any
-     * thread sees either a complete entry or none, and the constants are the same pure function either way).
+     * A fresh scratch point for this composition; the composition constants are reused while a thread's
+     * consecutive calls share a composition (a one-entry cache per thread, so threads never contend for it; the
+     * constants are a pure function of the composition, so no result depends on what the cache holds).
      */
     private PlasmaPoint point(Composition composition) {
-        PlasmaComposition constants = lastComposition;
+        PlasmaComposition[] last = lastComposition.get();
+        PlasmaComposition constants = last[0];
         if (constants == null || !constants.composition.equals(composition)) {
             constants = new PlasmaComposition(elements, composition);
-            lastComposition = constants;
+            last[0] = constants;
         }
         return new PlasmaPoint(elements, pressureIonisation, coulombCorrection, constants);
     }

@@ -90,6 +90,40 @@ class PlasmaPointTest {
         }
     }
 
+    @Test
+    void threadsSharingOneInstanceGetTheSameResults() throws Exception {
+        StellarPlasmaEos shared = new StellarPlasmaEos();
+        Composition[] mixes = {Composition.scaledSolar(0.7, 0.0188), Composition.scaledSolar(0.1, 0.03),
+            Composition.scaledSolar(0.5, 0.001), Composition.scaledSolar(0.74, 0.01)};
+        EosState[][] expected = new EosState[mixes.length][POINTS.length];
+        for (int c = 0; c < mixes.length; c++) {
+            for (int i = 0; i < POINTS.length; i++) {
+                expected[c][i] = new StellarPlasmaEos().atDensity(POINTS[i][0], POINTS[i][1], mixes[c]);
+            }
+        }
+        var pool = java.util.concurrent.Executors.newFixedThreadPool(4);
+        try {
+            var futures = new java.util.ArrayList<java.util.concurrent.Future<Boolean>>();
+            for (int task = 0; task < 16; task++) {
+                int c = task % mixes.length;
+                futures.add(pool.submit(() -> {
+                    boolean same = true;
+                    for (int rep = 0; rep < 50; rep++) {
+                        for (int i = 0; i < POINTS.length; i++) {
+                            same &= shared.atDensity(POINTS[i][0], POINTS[i][1], mixes[c]).equals(expected[c][i]);
+                        }
+                    }
+                    return same;
+                }));
+            }
+            for (var f : futures) {
+                assertThat(f.get()).isTrue();
+            }
+        } finally {
+            pool.shutdownNow();
+        }
+    }
+
     private static PlasmaPoint point(Composition c) {
         return new PlasmaPoint(ELEMENTS, true, true, new PlasmaComposition(ELEMENTS, c));
     }
