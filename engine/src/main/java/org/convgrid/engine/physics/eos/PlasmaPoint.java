@@ -52,7 +52,6 @@ final class PlasmaPoint {
     /** Newton steps of the last neutrality solve (diagnostics). */
     int iterations;
     private double kT;
-    private double yeFd;
     private double kH;
     private double kHe0;
     private double kHe1;
@@ -166,7 +165,7 @@ final class PlasmaPoint {
         FermiDirac.withSlopes(eta, fd);
         double t = temperature;
         double rho = density;
-        yeFd = ELECTRON_DENSITY_CONSTANT * (t * Math.sqrt(t)) * fd[1] * Constants.M_U / rho;
+        double yeFd = ELECTRON_DENSITY_CONSTANT * (t * Math.sqrt(t)) * fd[1] * Constants.M_U / rho;
         if (coulomb && yeFd > 0.0) {
             coulombTerm.evaluate(fd, rho, kT, yeFd, nuclei, chargeRatio);
         } else {
