@@ -2,7 +2,6 @@ package org.convgrid.engine.physics.eos;
 
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
-import org.convgrid.engine.state.Composition;
 
 /**
  * Solves P(rho, T) = P_target for rho by Newton's method in ln rho with the slope chi_rho, safeguarded by a
@@ -25,13 +24,7 @@ final class DensityInversion {
         EosState at(double lnRho);
     }
 
-    static EosState invert(EquationOfState eos, double pressure, double temperature, Composition composition,
-                           double densityGuess) {
-        return invert(lnRho -> eos.atDensity(Math.exp(lnRho), temperature, composition), pressure, temperature,
-                densityGuess);
-    }
-
-    /** Same with the forward equation of state given as an isotherm at {@code temperature} (K). */
+    /** @param eos the forward equation of state along the isotherm at {@code temperature} (K) */
     static EosState invert(Isotherm eos, double pressure, double temperature, double densityGuess) {
         double target = Math.log(pressure);
         double lnRho = Math.log(densityGuess);
