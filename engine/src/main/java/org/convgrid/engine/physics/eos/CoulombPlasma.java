@@ -31,4 +31,13 @@ final class CoulombPlasma {
     static double energy(double gamma) {
         return gamma * Math.sqrt(gamma) * (A1 / Math.sqrt(A2 + gamma) + A3 / (1.0 + gamma));
     }
+
+    /** d(energy)/d ln Gamma, the analytic derivative of {@link #energy}. */
+    static double energySlope(double gamma) {
+        double root = Math.sqrt(A2 + gamma);
+        double inverse = 1.0 / (1.0 + gamma);
+        double g15 = gamma * Math.sqrt(gamma);
+        return g15 * (1.5 * (A1 / root + A3 * inverse) - 0.5 * A1 * gamma / (root * root * root)
+                - A3 * gamma * inverse * inverse);
+    }
 }

@@ -2,7 +2,6 @@ package org.convgrid.engine.physics.eos;
 
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
-import org.convgrid.engine.state.Composition;
 
 /**
  * Solves P(rho, T) = P_target for rho by Newton's method in ln rho with the slope chi_rho, safeguarded by a
@@ -20,15 +19,20 @@ final class DensityInversion {
     private DensityInversion() {
     }
 
-    static EosState invert(EquationOfState eos, double pressure, double temperature, Composition composition,
-                           double densityGuess) {
+    /** The forward equation of state at fixed temperature and composition, as a function of ln rho. */
+    interface Isotherm {
+        EosState at(double lnRho);
+    }
+
+    /** @param eos the forward equation of state along the isotherm at {@code temperature} (K) */
+    static EosState invert(Isotherm eos, double pressure, double temperature, double densityGuess) {
         double target = Math.log(pressure);
         double lnRho = Math.log(densityGuess);
         double lo = Double.NEGATIVE_INFINITY;
         double hi = Double.POSITIVE_INFINITY;
         double step = Double.NaN;
         for (int i = 0; i < BUDGET; i++) {
-            EosState s = eos.atDensity(Math.exp(lnRho), temperature, composition);
+            EosState s = eos.at(lnRho);
             double mismatch = Math.log(s.pressure()) - target;
             if (mismatch > 0.0) {
                 hi = Math.min(hi, lnRho);
@@ -40,7 +44,7 @@ final class DensityInversion {
             double next = lnRho + step;
             if (Math.abs(step) < TOLERANCE) {
                 // Converged; tested before the bracket because a step below one ulp leaves next on its edge.
-                return Math.abs(mismatch) < 1e-13 ? s : eos.atDensity(Math.exp(next), temperature, composition);
+                return Math.abs(mismatch) < 1e-13 ? s : eos.at(next);
             }
             if (!(next > lo && next < hi) && Double.isFinite(lo) && Double.isFinite(hi)) {
                 next = 0.5 * (lo + hi);

@@ -96,6 +96,84 @@ public final class FermiDirac {
     }
 
     /**
+     * Values and eta-derivatives in one call, for the equation of state's analytic derivatives: out[0..2] =
+     * F_{-1/2}, F_{1/2}, F_{3/2} (identical to {@link #all}), out[3..5] their first derivatives and out[6] the
+     * second derivative of F_{-1/2}. Inside the table these are the derivatives of the Hermite interpolant itself
+     * (so they are consistent with the values to rounding); below it the term-by-term derivatives of the series
+     * (dF_k/deta = k F_{k-1}); above it those of the Sommerfeld expansion. No allocation.
+     */
+    static void withSlopes(double eta, double[] out) {
+        if (eta > TABLE_MAX) {
+            for (int k = 0; k < 3; k++) {
+                out[k] = sommerfeld(ORDER[k], eta);
+                out[3 + k] = ORDER[k] * sommerfeld(ORDER[k] - 1.0, eta);
+            }
+            out[6] = 0.75 * sommerfeld(-2.5, eta);
+            return;
+        }
+        if (eta < TABLE_MIN) {
+            seriesWithSlopes(eta, out);
+            return;
+        }
+        double s = (eta - TABLE_MIN) / TABLE_STEP;
+        int i = Math.min((int) s, NODES - 2);
+        double t = s - i;
+        double t2 = t * t;
+        double t3 = t2 * t;
+        double h00 = 2.0 * t3 - 3.0 * t2 + 1.0;
+        double h10 = (t3 - 2.0 * t2 + t) * TABLE_STEP;
+        double h01 = -2.0 * t3 + 3.0 * t2;
+        double h11 = (t3 - t2) * TABLE_STEP;
+        double d00 = (6.0 * t2 - 6.0 * t) / TABLE_STEP;
+        double d10 = 3.0 * t2 - 4.0 * t + 1.0;
+        double d11 = 3.0 * t2 - 2.0 * t;
+        for (int k = 0; k < 3; k++) {
+            double[] v = VALUES[k];
+            double[] g = SLOPES[k];
+            out[k] = h00 * v[i] + h10 * g[i] + h01 * v[i + 1] + h11 * g[i + 1];
+            out[3 + k] = d00 * (v[i] - v[i + 1]) + d10 * g[i] + d11 * g[i + 1];
+        }
+        out[6] = (12.0 * t - 6.0) * (VALUES[0][i] - VALUES[0][i + 1]) / (TABLE_STEP * TABLE_STEP)
+                + ((6.0 * t - 4.0) * SLOPES[0][i] + (6.0 * t - 2.0) * SLOPES[0][i + 1]) / TABLE_STEP;
+    }
+
+    /**
+     * The alternating series of {@link #series} for all three orders and the first two derivatives of F_{-1/2}
+     * with one exponential: the powers n^(k+1) are built from sqrt(n) instead of pow, and the sum stops when the
+     * fastest-growing term (n^(3/2) z^n, of the second derivative) falls below 1e-17 of its sum.
+     */
+    private static void seriesWithSlopes(double eta, double[] out) {
+        double z = Math.exp(eta);
+        double s0 = 0.0;
+        double s1 = 0.0;
+        double s2 = 0.0;
+        double d1 = 0.0;
+        double d2 = 0.0;
+        double power = 1.0;
+        for (int n = 1; n <= 400; n++) {
+            power *= z;
+            double root = Math.sqrt(n);
+            double sign = (n % 2 == 1) ? power : -power;
+            s0 += sign / root;
+            s1 += sign / (n * root);
+            s2 += sign / (n * (double) n * root);
+            d1 += sign * root;
+            double fastest = sign * n * root;
+            d2 += fastest;
+            if (power * n * root < 1e-17 * d2) {
+                break;
+            }
+        }
+        out[0] = GAMMA[0] * s0;
+        out[1] = GAMMA[1] * s1;
+        out[2] = GAMMA[2] * s2;
+        out[3] = SQRT_PI * d1;
+        out[4] = 0.5 * out[0];
+        out[5] = 1.5 * out[1];
+        out[6] = SQRT_PI * d2;
+    }
+
+    /**
      * dF_{-1/2}/deta: the derivative of the table interpolant inside the table (so it is consistent with
      * {@link #minusHalf}), the term-by-term derivative of the series below it and -F_{-3/2}/2 from the Sommerfeld
      * expansion above it.

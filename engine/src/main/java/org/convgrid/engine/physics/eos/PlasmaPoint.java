@@ -1,13 +1,18 @@
 package org.convgrid.engine.physics.eos;
 
-import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.units.Constants;
 
 /**
  * Scratch space of one {@link StellarPlasmaEos} call: given (rho, T) and a trial degeneracy parameter eta, evaluates
- * the charge-neutrality residual and P, u in closed form. Not thread-safe; each call makes its own. Splitting
- * {@link #prepare} (all exponentials that depend on rho and T) from {@link #evaluate} (one exponential per trial
- * eta) keeps the Newton iteration cheap.
+ * the charge-neutrality residual and P, u in closed form, with their analytic partial derivatives in eta, ln rho
+ * and ln T at fixed eta. Not thread-safe; each call makes its own. Splitting {@link #prepare} (all exponentials
+ * that depend on rho and T) from {@link #solveStep} (one exponential per trial eta) keeps the Newton iteration
+ * cheap; {@link #evaluate} adds P, u and the partials once eta is known.
+ *
+ * <p>Every ionisation stage is a ratio r = K x with x = e^(eta_ref - eta - mu_C/kT), so d ln r = d ln K + d ln x,
+ * with d ln K/d ln T = chi/kT (from e^(-chi/kT)) and d ln K/d ln rho = the excluded-volume term xi of the stage
+ * (xi is proportional to rho); a fraction f = r/(1+r) then moves by f(1-f) d ln r, and a three-stage helium by
+ * h_j (d ln w_j - sum_i h_i d ln w_i).
  */
 final class PlasmaPoint {
 
@@ -22,7 +27,8 @@ final class PlasmaPoint {
      * e^(+-300), which are saturated, as long as eta stays within ~300 of eta_ref (the solver re-references).
      */
     static final double LN_CLIP = 350.0;
-    private static final double FOUR_PI_E2 = 4.0 * Math.PI * Constants.E_CHARGE * Constants.E_CHARGE;
+    private static final double CLIP_LOW = Math.exp(-LN_CLIP);
+    private static final double CLIP_HIGH = Math.exp(LN_CLIP);
 
     private final PlasmaElements el;
     private final boolean pressureIonisation;
@@ -32,55 +38,61 @@ final class PlasmaPoint {
     private final double[] kInner;
     private final double[] xiNeutral;
     private final double[] xiInner;
-    private final double[] fd = new double[3];
+    private final double[] fd = new double[7];
+    private final CoulombTerm coulombTerm = new CoulombTerm();
+    private final double nuclei;
+    private final double yeMax;
+    private final double chargeRatio;
 
     double density;
     double lastEta;
     double temperature;
+    /** Reference eta of the stored Saha constants. */
+    double reference;
+    /** Newton steps of the last neutrality solve (diagnostics). */
+    int iterations;
     private double kT;
-    private double nuclei;
-    private double yeMax;
-    /** sum a Z^2 / sum a Z at full ionisation: ion charge-squared per free electron in the Coulomb term. */
-    private double chargeRatio;
-    private double nucleusDensity;
     private double kH;
     private double kHe0;
     private double kHe1;
     private double xiH;
     private double xiHe0;
     private double xiHe1;
+    private double heliumNeutral;
+    private double dh0;
+    private double dh1;
+    private double dh2;
 
-    /** Outputs of {@link #evaluate}. */
+    /** Outputs of {@link #solveStep}: residual ln n_e(FD) - ln n_e(ions), its eta-slope, ionisation fractions. */
     double residual;
     double residualSlope;
-    double pressure;
-    double energy;
     double electrons;
     double hydrogenIonised;
     double heliumSingle;
     double heliumDouble;
+    /** Outputs of {@link #evaluate}: P (dyn cm^-2), u (erg g^-1) and partials at fixed eta. */
+    double pressure;
+    double energy;
+    double residualRho;
+    double residualT;
+    double pressureEta;
+    double pressureRho;
+    double pressureT;
+    double energyEta;
+    double energyT;
 
-    PlasmaPoint(PlasmaElements el, boolean pressureIonisation, boolean coulomb, Composition composition) {
+    PlasmaPoint(PlasmaElements el, boolean pressureIonisation, boolean coulomb, PlasmaComposition composition) {
         this.el = el;
         this.pressureIonisation = pressureIonisation;
         this.coulomb = coulomb;
-        abundance = new double[2 + el.metalCount];
+        abundance = composition.abundance;
+        nuclei = composition.nuclei;
+        yeMax = composition.yeMax;
+        chargeRatio = composition.chargeRatio;
         kFirst = new double[el.metalCount];
         kInner = new double[el.metalCount];
         xiNeutral = new double[el.metalCount];
         xiInner = new double[el.metalCount];
-        el.abundances(composition, abundance);
-        double sum = 0.0;
-        for (double a : abundance) {
-            sum += a;
-        }
-        nuclei = sum;
-        yeMax = el.electronsFullyIonised(composition);
-        double z2 = abundance[0] + 4.0 * abundance[1];
-        for (int m = 0; m < el.metalCount; m++) {
-            z2 += (double) el.charge[m] * el.charge[m] * abundance[2 + m];
-        }
-        chargeRatio = yeMax > 0.0 ? z2 / yeMax : 1.0;
     }
 
     double nuclei() {
@@ -91,16 +103,13 @@ final class PlasmaPoint {
         return yeMax;
     }
 
-    /** Reference eta of the stored Saha constants. */
-    double reference;
-
     /** Computes every rho- and T-dependent Saha constant K (n_{r+1}/n_r = K e^-eta), relative to etaReference. */
     void prepare(double rho, double t, double etaReference) {
         reference = etaReference;
         density = rho;
         temperature = t;
         kT = Constants.K_B * t;
-        nucleusDensity = pressureIonisation ? rho * nuclei / Constants.M_U : 0.0;
+        double nucleusDensity = pressureIonisation ? rho * nuclei / Constants.M_U : 0.0;
         xiH = el.hydrogenVolume * nucleusDensity;
         xiHe0 = el.heliumVolume0 * nucleusDensity;
         xiHe1 = el.heliumVolume1 * nucleusDensity;
@@ -116,103 +125,207 @@ final class PlasmaPoint {
         }
     }
 
-    /** Evaluates residual, its eta-slope, P, u and the free electrons at this eta for the prepared (rho, T). */
-    void evaluate(double eta) {
-        FermiDirac.all(eta, fd);
+    /**
+     * A starting eta for the neutrality solve at the prepared (rho, T) that accounts for incomplete ionisation:
+     * with non-degenerate electrons, n_e m_u/rho = Q/x (x as in {@link #ratio}, Q = sqrt(pi)/2 n_Q m_u e^eta_ref/rho),
+     * and the true root x* is at least each of the roots obtained by over-estimating the ions' electrons: all
+     * species fully ionised (Q/x = ye_max); every stage in its weak-ionisation limit (ye <= S x, S the sum of
+     * a K); hydrogen exact and everything else fully ionised (a quadratic). The largest of these lower bounds is
+     * returned as eta = eta_ref - ln x; it is exact for neutral gas ionised by metals and for pure hydrogen.
+     * Degeneracy and the Coulomb shift are ignored: the Newton iteration corrects them.
+     */
+    double ionisationGuess() {
+        double t = temperature;
+        double q = 0.5 * Math.sqrt(Math.PI) * ELECTRON_DENSITY_CONSTANT * (t * Math.sqrt(t)) * Constants.M_U
+                / density * Math.exp(reference);
+        double hydrogen = abundance[0];
+        double linear = hydrogen * kH + abundance[1] * kHe0;
+        for (int m = 0; m < el.metalCount; m++) {
+            linear += abundance[2 + m] * (kFirst[m] + (el.charge[m] - 1) * kInner[m]);
+        }
+        double x = Math.max(q / yeMax, Math.sqrt(q / linear));
+        // Q/x = a k x/(1 + k x) + rest: (a + rest) k x^2 + (rest - Q k) x - Q = 0.
+        double rest = yeMax - hydrogen;
+        double b = rest - q * kH;
+        double twoA = 2.0 * yeMax * kH;
+        double root = b < 0.0 ? (-b + Math.sqrt(b * b + 2.0 * twoA * q)) / twoA
+                : 2.0 * q / (b + Math.sqrt(b * b + 2.0 * twoA * q));
+        if (root > x) {
+            x = root;
+        }
+        return reference - Math.log(x);
+    }
+
+    /**
+     * The Newton part at this eta for the prepared (rho, T): residual, its full eta-slope (Coulomb shift
+     * included), free electrons and the H and He fractions. Leaves fd and the Coulomb term set for
+     * {@link #evaluate}.
+     */
+    void solveStep(double eta) {
+        FermiDirac.withSlopes(eta, fd);
         double t = temperature;
         double rho = density;
-        double t15 = t * Math.sqrt(t);
-        double yeFd = ELECTRON_DENSITY_CONSTANT * t15 * fd[1] * Constants.M_U / rho;
-        double theta = 0.5 * fd[0] / fd[1];
-        double perMass = kT / Constants.M_U;
-
-        // Coulomb free energy F_C = N_nuc kT f(Gamma) of an effective one-component plasma whose Debye-Huckel limit
-        // is the full Debye-Huckel result, kappa^2 = (4 pi e^2/kT) n_e (z2 + theta_e) (formulas.md 1.7), with the
-        // ion term sum n_j Z_j^2 written as z2 n_e (z2 fixed by the composition). F_C then depends on the state
-        // only through n_e, so it shifts the electron chemical potential in the Saha balance by
-        // mu_C = dF_C/dN_e, and P, u follow from F_C exactly: everything stays thermodynamically consistent.
-        double coulombPressure = 0.0;
-        double coulombEnergy = 0.0;
-        double coulombShift = 0.0;
+        double yeFd = ELECTRON_DENSITY_CONSTANT * (t * Math.sqrt(t)) * fd[1] * Constants.M_U / rho;
         if (coulomb && yeFd > 0.0) {
-            double screening = chargeRatio + theta;
-            double kappa2 = FOUR_PI_E2 * rho * yeFd * screening / (Constants.M_U * kT);
-            double nNuc = rho * nuclei / Constants.M_U;
-            double g32 = Math.sqrt(3.0) * kappa2 * Math.sqrt(kappa2) / (12.0 * Math.PI * nNuc);
-            double uEx = CoulombPlasma.energy(Math.cbrt(g32 * g32));
-            double thetaSlope = 0.5 * FermiDirac.minusHalfSlope(eta) / fd[1] - theta * theta;
-            // d ln Gamma/d ln n_e at fixed T (d eta/d ln n_e = 1/theta).
-            double d = 1.0 + thetaSlope / (theta * screening);
-            coulombShift = nuclei / yeFd * uEx * d;
-            coulombPressure = rho * perMass * nuclei * uEx * (d - 2.0 / 3.0);
-            coulombEnergy = perMass * nuclei * uEx * (1.0 + 1.5 * (d - 1.0));
+            coulombTerm.evaluate(fd, rho, kT, yeFd, nuclei, chargeRatio);
+        } else {
+            coulombTerm.clear();
         }
-
-        double x = Math.exp(Math.max(-LN_CLIP, Math.min(LN_CLIP, reference - eta - coulombShift)));
+        double x = ratio(eta);
         double ye = 0.0;
         double spread = 0.0;
-        double ionEnergy = 0.0;
-        double excluded = 0.0;
+
+        double r = kH * x;
+        double f1 = r / (1.0 + r);
+        double a = abundance[0];
+        ye += a * f1;
+        spread += a * f1 * (1.0 - f1);
+        hydrogenIonised = f1;
+
+        heliumFractions(x);
+        a = abundance[1];
+        double mean = heliumSingle + 2.0 * heliumDouble;
+        ye += a * mean;
+        spread += a * (heliumSingle + 4.0 * heliumDouble - mean * mean);
+
+        for (int m = 0; m < el.metalCount; m++) {
+            double rf = kFirst[m] * x;
+            double g1 = rf / (1.0 + rf);
+            double ri = kInner[m] * x;
+            double y = ri / (1.0 + ri);
+            int sites = el.charge[m] - 1;
+            a = abundance[2 + m];
+            ye += a * (g1 + sites * y);
+            spread += a * (g1 * (1.0 - g1) + sites * y * (1.0 - y));
+        }
+        ye = Math.max(ye, Double.MIN_NORMAL);
+        residual = Math.log(yeFd / ye);
+        // d ln x/d eta = -(1 + d(mu_C/kT)/d eta), and d ln ye/d ln x = spread/ye.
+        residualSlope = fd[4] / fd[1] + spread / ye * (1.0 + coulombTerm.shiftEta);
+        electrons = yeFd;
+    }
+
+    /**
+     * Completes the state at the eta of the last {@link #solveStep}: P, u and their partials in eta, ln rho and
+     * ln T at fixed eta, and the residual's partials in ln rho and ln T.
+     */
+    void evaluate(double eta) {
+        double t = temperature;
+        double rho = density;
+        double perMass = kT / Constants.M_U;
+        double betaChi = 1.0 / kT;
+        CoulombTerm c = coulombTerm;
+        double x = ratio(eta);
+        double lxEta = -(1.0 + c.shiftEta);
+        double lxRho = -c.shiftRho;
+        double lxT = -c.shiftT;
+        // Accumulators: value, d/d eta, d/d ln rho, d/d ln T of ye, ionisation energy and excluded volume.
+        double ye = 0.0;
+        double yeEta = 0.0;
+        double yeRho = 0.0;
+        double yeT = 0.0;
+        double ion = 0.0;
+        double ionEta = 0.0;
+        double ionT = 0.0;
+        double ex = 0.0;
+        double exEta = 0.0;
+        double exRho = 0.0;
+        double exT = 0.0;
 
         double r = kH * x;
         double f1 = r / (1.0 + r);
         double f0 = 1.0 / (1.0 + r);
         double a = abundance[0];
+        double w = a * f1 * f0;
+        double chi = el.hydrogenChi;
+        double lrT = chi * betaChi + lxT;
+        double lrRho = xiH + lxRho;
         ye += a * f1;
-        spread += a * f0 * f1;
-        ionEnergy += a * f1 * el.hydrogenChi;
-        excluded += a * f0 * xiH;
-        hydrogenIonised = f1;
+        yeEta += w * lxEta;
+        yeRho += w * lrRho;
+        yeT += w * lrT;
+        ion += a * f1 * chi;
+        ionEta += w * chi * lxEta;
+        ionT += w * chi * lrT;
+        ex += a * f0 * xiH;
+        exEta -= w * xiH * lxEta;
+        exRho += a * f0 * xiH - w * xiH * lrRho;
+        exT -= w * xiH * lrT;
 
-        double r0 = kHe0 * x;
-        double r01 = r0 * kHe1 * x;
-        double h0;
-        double h1;
-        double h2;
-        if (r01 < 1e300) {
-            double norm = 1.0 / (1.0 + r0 + r01);
-            h0 = norm;
-            h1 = r0 * norm;
-            h2 = r01 * norm;
-        } else {
-            h0 = 0.0;
-            h1 = 1.0 / (kHe1 * x);
-            h2 = 1.0 - h1;
-        }
+        double h0 = heliumNeutral;
+        double h1 = heliumSingle;
+        double h2 = heliumDouble;
+        double chi0 = el.heliumChi0;
+        double chi01 = el.heliumChi0 + el.heliumChi1;
         a = abundance[1];
-        double mean = h1 + 2.0 * h2;
-        ye += a * mean;
-        spread += a * (h1 + 4.0 * h2 - mean * mean);
-        ionEnergy += a * (h1 * el.heliumChi0 + h2 * (el.heliumChi0 + el.heliumChi1));
-        excluded += a * (h0 * xiHe0 + h1 * xiHe1);
-        heliumSingle = h1;
-        heliumDouble = h2;
+        ye += a * (h1 + 2.0 * h2);
+        ion += a * (h1 * chi0 + h2 * chi01);
+        double exHe = a * (h0 * xiHe0 + h1 * xiHe1);
+        ex += exHe;
+        // Statistical weights w_1 = K0 x, w_2 = K0 K1 x^2 relative to He0: pass their log-partials.
+        heliumShift(lxEta, 2.0 * lxEta);
+        yeEta += a * (dh1 + 2.0 * dh2);
+        ionEta += a * (dh1 * chi0 + dh2 * chi01);
+        exEta += a * (dh0 * xiHe0 + dh1 * xiHe1);
+        heliumShift(xiHe0 - xiHe1 + lxRho, xiHe0 + 2.0 * lxRho);
+        yeRho += a * (dh1 + 2.0 * dh2);
+        exRho += exHe + a * (dh0 * xiHe0 + dh1 * xiHe1);
+        heliumShift(chi0 * betaChi + lxT, chi01 * betaChi + 2.0 * lxT);
+        yeT += a * (dh1 + 2.0 * dh2);
+        ionT += a * (dh1 * chi0 + dh2 * chi01);
+        exT += a * (dh0 * xiHe0 + dh1 * xiHe1);
 
         for (int m = 0; m < el.metalCount; m++) {
             a = abundance[2 + m];
-            double rf = kFirst[m] * x;
-            double g1 = rf / (1.0 + rf);
-            double g0 = 1.0 / (1.0 + rf);
-            double ri = kInner[m] * x;
-            double y = ri / (1.0 + ri);
             int sites = el.charge[m] - 1;
+            double rf = kFirst[m] * x;
+            double g0 = 1.0 / (1.0 + rf);
+            double g1 = rf * g0;
+            double ri = kInner[m] * x;
+            double y0 = 1.0 / (1.0 + ri);
+            double y = ri * y0;
+            double wf = a * g1 * g0;
+            double wi = a * sites * y * y0;
+            double chiF = el.firstChi[m];
+            double chiI = el.innerChi[m];
+            double xiN = xiNeutral[m];
+            double xiI = xiInner[m];
+            double lfRho = xiN + lxRho;
+            double lfT = chiF * betaChi + lxT;
+            double liRho = xiI + lxRho;
+            double liT = chiI * betaChi + lxT;
             ye += a * (g1 + sites * y);
-            spread += a * (g1 * g0 + sites * y * (1.0 - y));
-            ionEnergy += a * (g1 * el.firstChi[m] + sites * y * el.innerChi[m]);
-            excluded += a * (g0 * xiNeutral[m] + sites * (1.0 - y) * xiInner[m]);
+            yeEta += (wf + wi) * lxEta;
+            yeRho += wf * lfRho + wi * liRho;
+            yeT += wf * lfT + wi * liT;
+            ion += a * (g1 * chiF + sites * y * chiI);
+            ionEta += (wf * chiF + wi * chiI) * lxEta;
+            ionT += wf * chiF * lfT + wi * chiI * liT;
+            double exM = a * (g0 * xiN + sites * y0 * xiI);
+            ex += exM;
+            exEta -= (wf * xiN + wi * xiI) * lxEta;
+            exRho += exM - wf * xiN * lfRho - wi * xiI * liRho;
+            exT -= wf * xiN * lfT + wi * xiI * liT;
         }
-
         ye = Math.max(ye, Double.MIN_NORMAL);
-        residual = Math.log(yeFd) - Math.log(ye);
-        // Exact without the Coulomb shift; with it, a good enough Newton slope (the shift varies slowly with eta).
-        residualSlope = theta + spread / ye;
-        electrons = yeFd;
 
+        double t15 = t * Math.sqrt(t);
         double electronPressure = (2.0 / 3.0) * ELECTRON_DENSITY_CONSTANT * kT * t15 * fd[2];
         double aT4 = Constants.A_RAD * t * t * t * t;
-        pressure = rho * perMass * (nuclei + excluded) + electronPressure + aT4 / 3.0 + coulombPressure;
-        energy = 1.5 * perMass * nuclei + 1.5 * electronPressure / rho + aT4 / rho + ionEnergy / Constants.M_U
-                + coulombEnergy;
+        double ideal = rho * perMass * (nuclei + ex);
+        pressure = ideal + electronPressure + aT4 / 3.0 + c.pressure;
+        energy = 1.5 * perMass * nuclei + 1.5 * electronPressure / rho + aT4 / rho + ion / Constants.M_U + c.energy;
+
+        double electronPressureEta = electronPressure * fd[5] / fd[2];
+        pressureEta = rho * perMass * exEta + electronPressureEta + c.pressureEta;
+        pressureRho = ideal + rho * perMass * exRho + c.pressureRho;
+        pressureT = ideal + rho * perMass * exT + 2.5 * electronPressure + (4.0 / 3.0) * aT4 + c.pressureT;
+        energyEta = 1.5 * electronPressureEta / rho + ionEta / Constants.M_U + c.energyEta;
+        energyT = 1.5 * perMass * nuclei + 3.75 * electronPressure / rho + 4.0 * aT4 / rho + ionT / Constants.M_U
+                + c.energyT;
+        residualSlope = fd[4] / fd[1] - yeEta / ye;
+        residualRho = -1.0 - yeRho / ye;
+        residualT = 1.5 - yeT / ye;
     }
 
     /** Radiation pressure a T^4/3 at the prepared temperature. */
@@ -220,7 +333,44 @@ final class PlasmaPoint {
         return Constants.A_RAD * Math.pow(temperature, 4) / 3.0;
     }
 
+    /** x = e^(eta_ref - eta - mu_C/kT), clipped (see {@link #LN_CLIP}). */
+    private double ratio(double eta) {
+        return Math.exp(Math.max(-LN_CLIP, Math.min(LN_CLIP, reference - eta - coulombTerm.shift)));
+    }
+
+    /** He0, He+ and He++ fractions at ratio x; the ratio product saturates to pure He++ / He+ beyond 1e300. */
+    private void heliumFractions(double x) {
+        double r0 = kHe0 * x;
+        double r01 = r0 * kHe1 * x;
+        if (r01 < 1e300) {
+            double norm = 1.0 / (1.0 + r0 + r01);
+            heliumNeutral = norm;
+            heliumSingle = r0 * norm;
+            heliumDouble = r01 * norm;
+        } else {
+            heliumNeutral = 0.0;
+            heliumSingle = 1.0 / (kHe1 * x);
+            heliumDouble = 1.0 - heliumSingle;
+        }
+    }
+
+    /** Changes of the helium fractions, d h_j = h_j (d ln w_j - sum_i h_i d ln w_i), w_0 = 1. */
+    private void heliumShift(double lnW1, double lnW2) {
+        double mean = heliumSingle * lnW1 + heliumDouble * lnW2;
+        dh0 = -heliumNeutral * mean;
+        dh1 = heliumSingle * (lnW1 - mean);
+        dh2 = heliumDouble * (lnW2 - mean);
+    }
+
+    /** e^(lnK - eta_ref) clipped to e^(+-LN_CLIP); stages beyond the clip skip the exponential (same value). */
     private double expK(double lnK) {
-        return Math.exp(Math.max(-LN_CLIP, Math.min(LN_CLIP, lnK - reference)));
+        double arg = lnK - reference;
+        if (arg <= -LN_CLIP) {
+            return CLIP_LOW;
+        }
+        if (arg >= LN_CLIP) {
+            return CLIP_HIGH;
+        }
+        return Math.exp(arg);
     }
 }

@@ -33,8 +33,9 @@ import org.convgrid.engine.units.Constants;
  *
  * <p><b>Energy zero</b>: neutral atoms at rest, so u includes the ionisation energy. <b>Derivatives</b>: implicit
  * differentiation of the neutrality condition, d eta = -(dR/dx)/(dR/d eta) dx, with partial derivatives at fixed
- * eta taken by centred differences of the closed-form P, u and R (no re-solve, so no solver noise); the remaining
- * quantities follow from the identities of formulas.md 1.5. Immutable and thread-safe.
+ * eta taken analytically from the closed-form P, u and R (see {@link PlasmaPoint}; no re-solve, so no solver noise);
+ * the remaining quantities follow from the identities of formulas.md 1.5. Thread-safe: the only mutable state is a
+ * per-thread one-entry cache of composition constants that never changes a result.
  */
 public final class StellarPlasmaEos implements EquationOfState {
 
@@ -48,15 +49,18 @@ public final class StellarPlasmaEos implements EquationOfState {
     /** Domain: temperature, K. */
     public static final double MIN_TEMPERATURE = 1.0e3;
     public static final double MAX_TEMPERATURE = 1.0e9;
-    /** Step of the centred differences at fixed eta (in eta, ln rho and ln T). */
-    static final double STEP = 1.0e-5;
     private static final double MAX_NEWTON_STEP = 30.0;
+    /** Below this starting eta the electrons are treated as non-degenerate for the ionisation-aware guess. */
+    private static final double NON_DEGENERATE = -2.0;
     /** Re-reference the Saha constants when eta moves this far (see PlasmaPoint.LN_CLIP). */
     private static final double REREFERENCE = 100.0;
 
     private final PlasmaElements elements;
     private final boolean pressureIonisation;
     private final boolean coulombCorrection;
+    /** Per thread, the constants of the last composition that thread used (see {@link #point}). */
+    private final ThreadLocal<PlasmaComposition[]> lastComposition =
+            ThreadLocal.withInitial(() -> new PlasmaComposition[1]);
 
     /** Grevesse &amp; Sauval 1998 metals, pressure ionisation and Coulomb correction on. */
     public StellarPlasmaEos() {
@@ -81,44 +85,10 @@ public final class StellarPlasmaEos implements EquationOfState {
 
     @Override
     public EosState atDensity(double density, double temperature, Composition composition) {
-        PlasmaPoint p = solved(density, temperature, composition);
-        double eta = p.lastEta;
-        double pressure = p.pressure;
-        double energy = p.energy;
-        double electrons = p.electrons;
-        double radiation = p.radiationPressure();
-
-        p.evaluate(eta + STEP);
-        double pUp = p.pressure;
-        double uUp = p.energy;
-        double rUp = p.residual;
-        p.evaluate(eta - STEP);
-        double slope = (rUp - p.residual) / (2 * STEP);
-        double dPdEta = (pUp - p.pressure) / (2 * STEP);
-        double dudEta = (uUp - p.energy) / (2 * STEP);
-
-        p.prepare(density * Math.exp(STEP), temperature, p.reference);
-        p.evaluate(eta);
-        rUp = p.residual;
-        pUp = p.pressure;
-        p.prepare(density * Math.exp(-STEP), temperature, p.reference);
-        p.evaluate(eta);
-        double dEtaDlnRho = -(rUp - p.residual) / (2 * STEP) / slope;
-        double chiRho = ((pUp - p.pressure) / (2 * STEP) + dPdEta * dEtaDlnRho) / pressure;
-
-        p.prepare(density, temperature * Math.exp(STEP), p.reference);
-        p.evaluate(eta);
-        rUp = p.residual;
-        pUp = p.pressure;
-        uUp = p.energy;
-        p.prepare(density, temperature * Math.exp(-STEP), p.reference);
-        p.evaluate(eta);
-        double dEtaDlnT = -(rUp - p.residual) / (2 * STEP) / slope;
-        double chiT = ((pUp - p.pressure) / (2 * STEP) + dPdEta * dEtaDlnT) / pressure;
-        double cv = ((uUp - p.energy) / (2 * STEP) + dudEta * dEtaDlnT) / temperature;
-
-        return ThermoIdentities.complete(density, temperature, pressure, energy, chiRho, chiT, cv,
-                1.0 / (p.nuclei() + electrons), electrons, eta, (pressure - radiation) / pressure);
+        checkDomain(density, temperature);
+        PlasmaPoint p = point(composition);
+        solve(p, density, temperature, fullyIonisedEta(p, density, temperature));
+        return state(p);
     }
 
     @Override
@@ -130,32 +100,78 @@ public final class StellarPlasmaEos implements EquationOfState {
                     "pressure %s dyn cm^-2 does not exceed the radiation pressure %s dyn cm^-2 at T = %s K",
                     pressure, radiation, temperature), "pressure", pressure, radiation, Double.MAX_VALUE);
         }
-        PlasmaPoint p = new PlasmaPoint(elements, pressureIonisation, coulombCorrection, composition);
+        PlasmaPoint p = point(composition);
         // Ideal fully ionised gas as the first guess (the inversion brackets and corrects it).
         double guess = (pressure - radiation) * Constants.M_U
                 / (Constants.K_B * temperature * (p.nuclei() + p.electronsFullyIonised()));
         guess = Math.max(MIN_DENSITY, Math.min(MAX_DENSITY, guess));
-        return DensityInversion.invert(this, pressure, temperature, composition, guess);
+        return DensityInversion.invert(new WarmStart(p, temperature), pressure, temperature, guess);
     }
 
     /** The ionisation equilibrium at (rho, T): degeneracy, H and He ionisation fractions, free electrons. */
     public IonisationState ionisation(double density, double temperature, Composition composition) {
-        PlasmaPoint p = solved(density, temperature, composition);
+        checkDomain(density, temperature);
+        PlasmaPoint p = point(composition);
+        solve(p, density, temperature, fullyIonisedEta(p, density, temperature));
         return new IonisationState(p.lastEta, p.hydrogenIonised, p.heliumSingle, p.heliumDouble, p.electrons);
     }
 
-    private PlasmaPoint solved(double density, double temperature, Composition composition) {
+    /**
+     * A fresh scratch point for this composition; the composition constants are reused while a thread's
+     * consecutive calls share a composition (a one-entry cache per thread, so threads never contend for it; the
+     * constants are a pure function of the composition, so no result depends on what the cache holds).
+     */
+    private PlasmaPoint point(Composition composition) {
+        PlasmaComposition[] last = lastComposition.get();
+        PlasmaComposition constants = last[0];
+        if (constants == null || !constants.composition.equals(composition)) {
+            constants = new PlasmaComposition(elements, composition);
+            last[0] = constants;
+        }
+        return new PlasmaPoint(elements, pressureIonisation, coulombCorrection, constants);
+    }
+
+    private static void checkDomain(double density, double temperature) {
         ConvgridException.requireInRange("density", density, MIN_DENSITY, MAX_DENSITY, "g cm^-3");
         ConvgridException.requireInRange("temperature", temperature, MIN_TEMPERATURE, MAX_TEMPERATURE, "K");
-        PlasmaPoint p = new PlasmaPoint(elements, pressureIonisation, coulombCorrection, composition);
-        double eta = initialEta(p.electronsFullyIonised() * density
+    }
+
+    static double fullyIonisedEta(PlasmaPoint p, double density, double temperature) {
+        return initialEta(p.electronsFullyIonised() * density
                 / (Constants.M_U * PlasmaPoint.ELECTRON_DENSITY_CONSTANT * Math.pow(temperature, 1.5)));
+    }
+
+    /** The state of a solved point: partials at fixed eta combined by implicit differentiation of neutrality. */
+    private static EosState state(PlasmaPoint p) {
+        double pressure = p.pressure;
+        double dEtaDlnRho = -p.residualRho / p.residualSlope;
+        double dEtaDlnT = -p.residualT / p.residualSlope;
+        double chiRho = (p.pressureRho + p.pressureEta * dEtaDlnRho) / pressure;
+        double chiT = (p.pressureT + p.pressureEta * dEtaDlnT) / pressure;
+        double cv = (p.energyT + p.energyEta * dEtaDlnT) / p.temperature;
+        return ThermoIdentities.complete(p.density, p.temperature, pressure, p.energy, chiRho, chiT, cv,
+                1.0 / (p.nuclei() + p.electrons), p.electrons, p.lastEta,
+                (pressure - p.radiationPressure()) / pressure);
+    }
+
+    /** Solves charge neutrality at (rho, T) from etaGuess and completes P, u and the partials at the root. */
+    static void solve(PlasmaPoint p, double density, double temperature, double etaGuess) {
+        double eta = etaGuess;
         p.prepare(density, temperature, eta);
+        if (eta < NON_DEGENERATE) {
+            double better = p.ionisationGuess();
+            if (Double.isFinite(better)) {
+                eta = Math.max(-PlasmaPoint.ETA_LIMIT + 1.0, Math.min(eta, better));
+                if (Math.abs(eta - p.reference) > REREFERENCE) {
+                    p.prepare(density, temperature, eta);
+                }
+            }
+        }
         double lo = -PlasmaPoint.ETA_LIMIT;
         double hi = PlasmaPoint.ETA_LIMIT;
         double step = Double.NaN;
         for (int i = 0; i < SOLVE_BUDGET; i++) {
-            p.evaluate(eta);
+            p.solveStep(eta);
             if (p.residual > 0.0) {
                 hi = eta;
             } else {
@@ -163,6 +179,15 @@ public final class StellarPlasmaEos implements EquationOfState {
             }
             step = -p.residual / p.residualSlope;
             step = Math.max(-MAX_NEWTON_STEP, Math.min(MAX_NEWTON_STEP, step));
+            if (Math.abs(step) < ETA_TOLERANCE) {
+                // Converged: eta is within the tolerance of the root, and fd and the Coulomb term are set for it.
+                // Tested before the bracket: a step below one ulp leaves eta + step on the bracket's edge, which
+                // would send it to the bisection point far away.
+                p.evaluate(eta);
+                p.lastEta = eta;
+                p.iterations = i + 1;
+                return;
+            }
             double next = eta + step;
             if (!(next > lo && next < hi)) {
                 next = 0.5 * (lo + hi);
@@ -170,16 +195,42 @@ public final class StellarPlasmaEos implements EquationOfState {
             if (Math.abs(next - p.reference) > REREFERENCE) {
                 p.prepare(density, temperature, next);
             }
-            if (Math.abs(next - eta) < ETA_TOLERANCE) {
-                p.evaluate(next);
-                p.lastEta = next;
-                return p;
-            }
             eta = next;
         }
         throw new ConvgridException(ErrorKind.NOT_CONVERGED, String.format(
                 "charge neutrality not solved in %d iterations at rho = %s g cm^-3, T = %s K (eta %s, step %s)",
                 SOLVE_BUDGET, density, temperature, eta, step), density, temperature, eta, step);
+    }
+
+    /**
+     * The forward EOS along one isotherm for {@link DensityInversion}, started at each new density from the last
+     * eta moved by the known d eta/d ln rho, so the neutrality solve needs one or two Newton steps.
+     */
+    private static final class WarmStart implements DensityInversion.Isotherm {
+        private final PlasmaPoint point;
+        private final double temperature;
+        private double lastLnRho = Double.NaN;
+        private double lastEta;
+        private double etaSlope;
+
+        WarmStart(PlasmaPoint point, double temperature) {
+            this.point = point;
+            this.temperature = temperature;
+        }
+
+        @Override
+        public EosState at(double lnRho) {
+            double density = Math.exp(lnRho);
+            checkDomain(density, temperature);
+            double guess = Double.isNaN(lastLnRho) ? fullyIonisedEta(point, density, temperature)
+                    : lastEta + etaSlope * (lnRho - lastLnRho);
+            guess = Math.max(-PlasmaPoint.ETA_LIMIT + 1.0, Math.min(PlasmaPoint.ETA_LIMIT - 1.0, guess));
+            solve(point, density, temperature, guess);
+            lastLnRho = lnRho;
+            lastEta = point.lastEta;
+            etaSlope = -point.residualRho / point.residualSlope;
+            return state(point);
+        }
     }
 
     /**
