@@ -13,6 +13,12 @@ import org.convgrid.engine.units.Constants;
  * with d ln K/d ln T = chi/kT (from e^(-chi/kT)) and d ln K/d ln rho = the excluded-volume term xi of the stage
  * (xi is proportional to rho); a fraction f = r/(1+r) then moves by f(1-f) d ln r, and a three-stage helium by
  * h_j (d ln w_j - sum_i h_i d ln w_i).
+ *
+ * <p>Hydrogen below {@link MolecularHydrogen#MAX_TEMPERATURE} is split between H+, H and H2: with r = n_H+/n_H,
+ * s = 1 + r and the pairing p = n_H,tot/K_H2, the atomic fraction f0 solves 2 p f0^2 + s f0 - 1 = 0, the ionised
+ * fraction is f1 = r f0 and the molecular one fm = 2 p f0^2. Differentiating the quadratic, with D = s + 4 p f0:
+ * d ln f0 = -(r d ln r + 2 p f0 d ln p)/D, so d ln f1 = ((1 + 4 p f0) d ln r - 2 p f0 d ln p)/D and
+ * d ln fm = (s d ln p - 2 r d ln r)/D; d ln p = d ln rho - (d ln K_H2/d ln T) d ln T (no eta dependence).
  */
 final class PlasmaPoint {
 
@@ -62,12 +68,19 @@ final class PlasmaPoint {
     private double dh0;
     private double dh1;
     private double dh2;
+    /** n_H,tot/K_H2 (0 where molecules are ignored), d ln of it/d ln T, and a molecule's energy and its T-slope. */
+    private double pairing;
+    private double pairingT;
+    private double moleculeEnergy;
+    private double moleculeEnergyT;
 
     /** Outputs of {@link #solveStep}: residual ln n_e(FD) - ln n_e(ions), its eta-slope, ionisation fractions. */
     double residual;
     double residualSlope;
     double electrons;
     double hydrogenIonised;
+    /** Fraction of the hydrogen nuclei bound in H2. */
+    double hydrogenMolecular;
     double heliumSingle;
     double heliumDouble;
     /** Outputs of {@link #evaluate}: P (dyn cm^-2), u (erg g^-1) and partials at fixed eta. */
@@ -80,6 +93,8 @@ final class PlasmaPoint {
     double pressureT;
     double energyEta;
     double energyT;
+    /** Free heavy particles (nuclei, atoms, ions and molecules) per atomic mass unit, set by {@link #evaluate}. */
+    double heavyParticles;
 
     PlasmaPoint(PlasmaElements el, boolean pressureIonisation, boolean coulomb, PlasmaComposition composition) {
         this.el = el;
@@ -115,6 +130,16 @@ final class PlasmaPoint {
         xiHe1 = el.heliumVolume1 * nucleusDensity;
         // Ground-state weights: U(HI) = 2, U(HII) = 1, U(HeI) = 1, U(HeII) = 2, U(HeIII) = 1 (formulas.md 1.4).
         kH = expK(Math.log(0.5) - el.hydrogenChi / kT + xiH);
+        // H2: each molecule excludes twice the atom's volume, so the occupation factors cancel in K_H2. Skipped in
+        // hot gas (the switch-off leaves no molecules there), which keeps the interior cost unchanged.
+        pairing = 0.0;
+        if (t < MolecularHydrogen.MAX_TEMPERATURE && abundance[0] > 0.0) {
+            pairing = Math.exp(Math.log(rho * abundance[0] / Constants.M_U) - MolecularHydrogen.lnSwitchedConstant(t));
+            pairingT = -MolecularHydrogen.lnSwitchedConstantSlope(t);
+            moleculeEnergy = MolecularHydrogen.switchedInternalEnergy(t)
+                    - MolecularHydrogen.DISSOCIATION_ENERGY_EV * Constants.EV;
+            moleculeEnergyT = MolecularHydrogen.switchedInternalEnergySlope(t);
+        }
         kHe0 = expK(Math.log(2.0) - el.heliumChi0 / kT + xiHe0 - xiHe1);
         kHe1 = expK(Math.log(0.5) - el.heliumChi1 / kT + xiHe1);
         for (int m = 0; m < el.metalCount; m++) {
@@ -139,7 +164,9 @@ final class PlasmaPoint {
         double q = 0.5 * Math.sqrt(Math.PI) * ELECTRON_DENSITY_CONSTANT * (t * Math.sqrt(t)) * Constants.M_U
                 / density * Math.exp(reference);
         double hydrogen = abundance[0];
-        double linear = hydrogen * kH + abundance[1] * kHe0;
+        // With molecules, r f0(r) <= r f0(0): the weak-ionisation bound of hydrogen uses the atoms left at r = 0.
+        double atoms = pairing > 0.0 ? 2.0 / (1.0 + Math.sqrt(1.0 + 8.0 * pairing)) : 1.0;
+        double linear = hydrogen * kH * atoms + abundance[1] * kHe0;
         for (int m = 0; m < el.metalCount; m++) {
             linear += abundance[2 + m] * (kFirst[m] + (el.charge[m] - 1) * kInner[m]);
         }
@@ -176,10 +203,20 @@ final class PlasmaPoint {
         double spread = 0.0;
 
         double r = kH * x;
-        double f1 = r / (1.0 + r);
         double a = abundance[0];
+        double f1;
+        if (pairing > 0.0) {
+            double s = 1.0 + r;
+            double f0 = 2.0 / (s + Math.sqrt(s * s + 8.0 * pairing));
+            f1 = r * f0;
+            spread += a * f1 * (1.0 + 4.0 * pairing * f0) / (s + 4.0 * pairing * f0);
+            hydrogenMolecular = 2.0 * pairing * f0 * f0;
+        } else {
+            f1 = r / (1.0 + r);
+            spread += a * f1 * (1.0 - f1);
+            hydrogenMolecular = 0.0;
+        }
         ye += a * f1;
-        spread += a * f1 * (1.0 - f1);
         hydrogenIonised = f1;
 
         heliumFractions(x);
@@ -232,25 +269,53 @@ final class PlasmaPoint {
         double exRho = 0.0;
         double exT = 0.0;
 
+        // Hydrogen: d(a f1) = w d ln r + wp d ln p, d(a fm) = wm d ln r + wmp d ln p (see the class comment);
+        // molecules (a fm/2 per m_u) replace two atoms by one particle and carry the energy E_m each.
         double r = kH * x;
-        double f1 = r / (1.0 + r);
-        double f0 = 1.0 / (1.0 + r);
         double a = abundance[0];
-        double w = a * f1 * f0;
+        double f1;
+        double f0;
+        double fm = 0.0;
+        double w;
+        double wp = 0.0;
+        double wm = 0.0;
+        double wmp = 0.0;
+        if (pairing > 0.0) {
+            double s = 1.0 + r;
+            f0 = 2.0 / (s + Math.sqrt(s * s + 8.0 * pairing));
+            f1 = r * f0;
+            fm = 2.0 * pairing * f0 * f0;
+            double pf = pairing * f0;
+            double inv = 1.0 / (s + 4.0 * pf);
+            w = a * f1 * (1.0 + 4.0 * pf) * inv;
+            wp = -2.0 * a * f1 * pf * inv;
+            wm = -2.0 * a * fm * r * inv;
+            wmp = a * fm * s * inv;
+        } else {
+            f1 = r / (1.0 + r);
+            f0 = 1.0 / (1.0 + r);
+            w = a * f1 * f0;
+        }
         double chi = el.hydrogenChi;
         double lrT = chi * betaChi + lxT;
         double lrRho = xiH + lxRho;
+        double f1Rho = w * lrRho + wp;
+        double f1T = w * lrT + wp * pairingT;
         ye += a * f1;
         yeEta += w * lxEta;
-        yeRho += w * lrRho;
-        yeT += w * lrT;
+        yeRho += f1Rho;
+        yeT += f1T;
         ion += a * f1 * chi;
         ionEta += w * chi * lxEta;
-        ionT += w * chi * lrT;
-        ex += a * f0 * xiH;
+        ionT += f1T * chi;
+        ex += a * (f0 + fm) * xiH;
         exEta -= w * xiH * lxEta;
-        exRho += a * f0 * xiH - w * xiH * lrRho;
-        exT -= w * xiH * lrT;
+        exRho += a * (f0 + fm) * xiH - f1Rho * xiH;
+        exT -= f1T * xiH;
+        double mol = 0.5 * a * fm;
+        double molEta = 0.5 * wm * lxEta;
+        double molRho = 0.5 * (wm * lrRho + wmp);
+        double molT = 0.5 * (wm * lrT + wmp * pairingT);
 
         double h0 = heliumNeutral;
         double h1 = heliumSingle;
@@ -312,17 +377,21 @@ final class PlasmaPoint {
         double t15 = t * Math.sqrt(t);
         double electronPressure = (2.0 / 3.0) * ELECTRON_DENSITY_CONSTANT * kT * t15 * fd[2];
         double aT4 = Constants.A_RAD * t * t * t * t;
-        double ideal = rho * perMass * (nuclei + ex);
+        double heavy = nuclei - mol;
+        heavyParticles = heavy;
+        double ideal = rho * perMass * (heavy + ex);
         pressure = ideal + electronPressure + aT4 / 3.0 + c.pressure;
-        energy = 1.5 * perMass * nuclei + 1.5 * electronPressure / rho + aT4 / rho + ion / Constants.M_U + c.energy;
+        energy = 1.5 * perMass * heavy + 1.5 * electronPressure / rho + aT4 / rho + ion / Constants.M_U + c.energy
+                + mol * moleculeEnergy / Constants.M_U;
 
         double electronPressureEta = electronPressure * fd[5] / fd[2];
-        pressureEta = rho * perMass * exEta + electronPressureEta + c.pressureEta;
-        pressureRho = ideal + rho * perMass * exRho + c.pressureRho;
-        pressureT = ideal + rho * perMass * exT + 2.5 * electronPressure + (4.0 / 3.0) * aT4 + c.pressureT;
-        energyEta = 1.5 * electronPressureEta / rho + ionEta / Constants.M_U + c.energyEta;
-        energyT = 1.5 * perMass * nuclei + 3.75 * electronPressure / rho + 4.0 * aT4 / rho + ionT / Constants.M_U
-                + c.energyT;
+        pressureEta = rho * perMass * (exEta - molEta) + electronPressureEta + c.pressureEta;
+        pressureRho = ideal + rho * perMass * (exRho - molRho) + c.pressureRho;
+        pressureT = ideal + rho * perMass * (exT - molT) + 2.5 * electronPressure + (4.0 / 3.0) * aT4 + c.pressureT;
+        energyEta = 1.5 * electronPressureEta / rho + ionEta / Constants.M_U + c.energyEta
+                + molEta * (moleculeEnergy - 1.5 * kT) / Constants.M_U;
+        energyT = 1.5 * perMass * heavy + 3.75 * electronPressure / rho + 4.0 * aT4 / rho + ionT / Constants.M_U
+                + c.energyT + (molT * (moleculeEnergy - 1.5 * kT) + mol * moleculeEnergyT) / Constants.M_U;
         residualSlope = fd[4] / fd[1] - yeEta / ye;
         residualRho = -1.0 - yeRho / ye;
         residualT = 1.5 - yeT / ye;

@@ -16,6 +16,11 @@ import org.convgrid.engine.units.Constants;
  * ground-state partition functions; metals as described in {@link PlasmaElements}. eta is found from charge
  * neutrality by safeguarded Newton iteration on ln n_e(FD) - ln n_e(ions), which is monotonic in eta.
  *
+ * <p><b>Molecular hydrogen.</b> Below {@link MolecularHydrogen#MAX_TEMPERATURE} neutral hydrogen atoms pair into
+ * H2 by the law of mass action of {@link MolecularHydrogen}; molecules count as one particle in P, and carry
+ * their binding (-D0) and rotation-vibration energy in u. This is what lowers nabla_ad and mu in M-dwarf envelopes
+ * below ~4000 K (formulas.md 1.4, 1.8). Above that temperature molecules are skipped altogether.
+ *
  * <p><b>Pressure ionisation.</b> Occupation probabilities in the spirit of Hummer &amp; Mihalas 1988 (ApJ 331, 794):
  * the weight of every bound state is multiplied by w = exp(-(4 pi/3) r^3 n_nuc), a hard-sphere term with all nuclei
  * as point perturbers (the simplest form of their neutral-perturber term; the charged-microfield term is omitted).
@@ -43,11 +48,16 @@ public final class StellarPlasmaEos implements EquationOfState {
     public static final int SOLVE_BUDGET = 100;
     /** Convergence of the neutrality solve: |d eta| below this. */
     public static final double ETA_TOLERANCE = 1.0e-11;
+    /**
+     * Also converged when |ln n_e(FD) - ln n_e(ions)| is below this: the residual is then at its rounding floor, and
+     * where its eta-slope is small that floor alone can keep the Newton step just above {@link #ETA_TOLERANCE}.
+     */
+    static final double RESIDUAL_TOLERANCE = 1.0e-13;
     /** Domain: density, g cm^-3. */
     public static final double MIN_DENSITY = 1.0e-16;
     public static final double MAX_DENSITY = 1.0e7;
     /** Domain: temperature, K. */
-    public static final double MIN_TEMPERATURE = 1.0e3;
+    public static final double MIN_TEMPERATURE = 5.0e2;
     public static final double MAX_TEMPERATURE = 1.0e9;
     private static final double MAX_NEWTON_STEP = 30.0;
     /** Below this starting eta the electrons are treated as non-degenerate for the ionisation-aware guess. */
@@ -116,6 +126,14 @@ public final class StellarPlasmaEos implements EquationOfState {
         return new IonisationState(p.lastEta, p.hydrogenIonised, p.heliumSingle, p.heliumDouble, p.electrons);
     }
 
+    /** Fraction of the hydrogen nuclei bound in H2 at (rho, T) (see {@link MolecularHydrogen}). */
+    public double molecularHydrogenFraction(double density, double temperature, Composition composition) {
+        checkDomain(density, temperature);
+        PlasmaPoint p = point(composition);
+        solve(p, density, temperature, fullyIonisedEta(p, density, temperature));
+        return p.hydrogenMolecular;
+    }
+
     /**
      * A fresh scratch point for this composition; the composition constants are reused while a thread's
      * consecutive calls share a composition (a one-entry cache per thread, so threads never contend for it; the
@@ -150,7 +168,7 @@ public final class StellarPlasmaEos implements EquationOfState {
         double chiT = (p.pressureT + p.pressureEta * dEtaDlnT) / pressure;
         double cv = (p.energyT + p.energyEta * dEtaDlnT) / p.temperature;
         return ThermoIdentities.complete(p.density, p.temperature, pressure, p.energy, chiRho, chiT, cv,
-                1.0 / (p.nuclei() + p.electrons), p.electrons, p.lastEta,
+                1.0 / (p.heavyParticles + p.electrons), p.electrons, p.lastEta,
                 (pressure - p.radiationPressure()) / pressure);
     }
 
@@ -179,7 +197,7 @@ public final class StellarPlasmaEos implements EquationOfState {
             }
             step = -p.residual / p.residualSlope;
             step = Math.max(-MAX_NEWTON_STEP, Math.min(MAX_NEWTON_STEP, step));
-            if (Math.abs(step) < ETA_TOLERANCE) {
+            if (converged(step, p.residual)) {
                 // Converged: eta is within the tolerance of the root, and fd and the Coulomb term are set for it.
                 // Tested before the bracket: a step below one ulp leaves eta + step on the bracket's edge, which
                 // would send it to the bisection point far away.
@@ -200,6 +218,15 @@ public final class StellarPlasmaEos implements EquationOfState {
         throw new ConvgridException(ErrorKind.NOT_CONVERGED, String.format(
                 "charge neutrality not solved in %d iterations at rho = %s g cm^-3, T = %s K (eta %s, step %s)",
                 SOLVE_BUDGET, density, temperature, eta, step), density, temperature, eta, step);
+    }
+
+    /**
+     * Convergence test of the neutrality solve: the Newton step is below {@link #ETA_TOLERANCE}, or the residual (a
+     * relative mismatch of the electron densities) is below {@link #RESIDUAL_TOLERANCE}, where rounding alone can
+     * hold the step at ~1e-11 (reported near rho 0.06-0.1 g cm^-3, T ~ 1.5e4 K in 0.08-0.10 Msun models).
+     */
+    static boolean converged(double step, double residual) {
+        return Math.abs(step) < ETA_TOLERANCE || Math.abs(residual) < RESIDUAL_TOLERANCE;
     }
 
     /**

@@ -1,0 +1,98 @@
+package org.convgrid.engine.physics.eos;
+
+import org.convgrid.engine.units.Constants;
+
+/**
+ * Dissociation equilibrium of molecular hydrogen, H2 = 2 H (formulas.md 1.4), for cool envelopes and
+ * photospheres of M dwarfs. Law of mass action with ideal-gas partition functions:
+ * <pre>
+ *   n_H^2 / n_H2 = K(T) = (pi m_H k T/h^2)^(3/2) (U_H^2/U_H2) exp(-D0/kT)
+ * </pre>
+ * (reduced mass m_H/2; U_H = 2, the electron spin; U_H2 = U_rot U_vib with the rigid-rotor high-temperature
+ * limit U_rot = T/(2 theta_rot), symmetry number 2, and the harmonic oscillator U_vib = 1/(1 - exp(-theta_vib/T))
+ * counted from v = 0, so D0 is the dissociation energy from the ground vibrational level). The internal energy of
+ * a molecule above its ground level is kT (rotation) + k theta_vib/(exp(theta_vib/T) - 1) (vibration), and
+ * T dlnU_H2/dT = 1 + (theta_vib/T)/(exp(theta_vib/T) - 1) is the same thing divided by kT, as consistency demands.
+ *
+ * <p>Data (Huber &amp; Herzberg 1979, Constants of Diatomic Molecules; from memory): D0 = 4.478 eV,
+ * B_e = 60.85 cm^-1 (theta_rot = hcB/k = 87.6 K), omega_e = 4401 cm^-1 (theta_vib = 6332 K). The rigid-rotor,
+ * harmonic U_H2 is too small by tens of per cent above ~3000 K (rotation-vibration coupling, anharmonicity), which
+ * makes K too large by the same factor: dissociation is placed a few per cent too low in temperature.
+ */
+final class MolecularHydrogen {
+
+    /** Dissociation energy from v = 0, eV (Huber &amp; Herzberg 1979; from memory; checked in tests). */
+    static final double DISSOCIATION_ENERGY_EV = 4.478;
+    /** Rotational temperature, K. */
+    static final double THETA_ROT = 87.6;
+    /** Vibrational temperature, K. */
+    static final double THETA_VIB = 6332.0;
+    /** Mass of the hydrogen atom, g (1H atomic mass, CODATA/AME). */
+    static final double ATOM_MASS = Constants.MASS_H1_AMU * Constants.M_U;
+    /**
+     * Temperature scale of the switch-off S(T) = exp(-(T/T_s)^4), K. Our choice, not physics: it stands in for the
+     * pressure dissociation of H2 (not modelled) so that no molecules survive in hot dense envelopes; it changes K
+     * by less than 3 % below 4000 K (6 % at 5000 K). S is part of the molecule's partition function, so its energy carries
+     * kT T dlnS/dT and P, u stay consistent.
+     */
+    static final double SWITCH_TEMPERATURE = 1.0e4;
+    /** Above this temperature molecules are ignored (S &lt; 1e-100 there). */
+    static final double MAX_TEMPERATURE = 4.0e4;
+
+    private static final double TRANSLATIONAL = Math.PI * ATOM_MASS * Constants.K_B / (Constants.H * Constants.H);
+
+    private MolecularHydrogen() {
+    }
+
+    /** ln K(T), K = n_H^2/n_H2 in cm^-3. */
+    static double lnDissociationConstant(double temperature) {
+        double lnTranslational = 1.5 * Math.log(TRANSLATIONAL * temperature);
+        double lnRot = Math.log(temperature / (2.0 * THETA_ROT));
+        double lnVib = -Math.log1p(-Math.exp(-THETA_VIB / temperature));
+        return lnTranslational + Math.log(4.0) - lnRot - lnVib
+                - DISSOCIATION_ENERGY_EV * Constants.EV / (Constants.K_B * temperature);
+    }
+
+    /** ln K(T) of the EOS: the ideal-gas constant divided by the switch-off S(T). */
+    static double lnSwitchedConstant(double temperature) {
+        return lnDissociationConstant(temperature) + switchExponent(temperature);
+    }
+
+    /** Internal (rotation + vibration) energy of one molecule above its ground level, erg, ideal gas. */
+    static double internalEnergy(double temperature) {
+        double v = THETA_VIB / temperature;
+        return Constants.K_B * temperature * (1.0 + v / Math.expm1(v));
+    }
+
+    /**
+     * d ln K/d ln T of {@link #lnSwitchedConstant}: 3/2 - 1 (translation, rotation) - (theta_vib/T)/(exp(theta_vib/T)
+     * - 1) (vibration) + D0/kT + 4 (T/T_s)^4 (switch-off). Equals (3/2 kT - E_m)/kT with E_m the molecule's energy
+     * {@link #switchedInternalEnergy} - D0 (van 't Hoff: the reaction energy of H2 = 2 H at fixed volume).
+     */
+    static double lnSwitchedConstantSlope(double temperature) {
+        double v = THETA_VIB / temperature;
+        return 0.5 - v / Math.expm1(v) + DISSOCIATION_ENERGY_EV * Constants.EV / (Constants.K_B * temperature)
+                + 4.0 * switchExponent(temperature);
+    }
+
+    /**
+     * d/d ln T of {@link #switchedInternalEnergy}, erg: kT (1 + v^2 e^v/(e^v - 1)^2 - 20 (T/T_s)^4), v = theta_vib/T
+     * (rotation, the harmonic-oscillator heat capacity, and the switch-off term).
+     */
+    static double switchedInternalEnergySlope(double temperature) {
+        double v = THETA_VIB / temperature;
+        double q = v / Math.expm1(v);
+        return Constants.K_B * temperature * (1.0 + q * q * Math.exp(v) - 20.0 * switchExponent(temperature));
+    }
+
+    /** Internal energy including the switch-off term kT T dlnS/dT = -4 kT (T/T_s)^4, erg. */
+    static double switchedInternalEnergy(double temperature) {
+        return internalEnergy(temperature) - 4.0 * Constants.K_B * temperature * switchExponent(temperature);
+    }
+
+    private static double switchExponent(double temperature) {
+        double w = temperature / SWITCH_TEMPERATURE;
+        double w2 = w * w;
+        return w2 * w2;
+    }
+}
