@@ -34,8 +34,10 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
      * 3He and CN "at their equilibrium abundances where they burn": over 1e9 yr every layer whose burning matters
      * on the main sequence reaches it, while layers too cool to burn keep their initial abundances. A shorter
      * time (1e8 yr, about the pre-main-sequence contraction of 0.5-1 Msun stars, from memory) leaves 3He at
-     * equilibrium only at the very centre of K dwarfs, and the steep central energy release that results gave
-     * spurious convective cores of a few 1e-3 of the mass at 0.5-0.6 Msun; models of such stars have none.
+     * equilibrium only at the very centre of K and early-M dwarfs, and the steep central energy release that
+     * results gives 3He-driven convective cores of several per cent of the mass at 0.45-0.6 Msun, which
+     * zero-age models of such stars do not have (the 3He-driven cores near the fully convective limit develop
+     * over Gyr: van Saders &amp; Pinsonneault 2012, ApJ 751, 98).
      */
     public static final double DEFAULT_EQUILIBRATION_TIME = 1.0e9 * Constants.YEAR;
     /** Highest temperature accepted, K: beyond it the non-resonant S-factor expansions are meaningless. */
