@@ -1,0 +1,221 @@
+package org.convgrid.cli.run;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ForkJoinPool;
+import java.util.function.Predicate;
+import org.convgrid.engine.batch.ModelOutcome;
+import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.refine.MassBisection;
+import org.convgrid.engine.refine.MassLine;
+import org.convgrid.engine.refine.MassLineFactory;
+import org.convgrid.engine.refine.Refinement;
+import org.convgrid.engine.units.Constants;
+import org.convgrid.grids.GridSpec;
+import org.convgrid.grids.MetallicityPoint;
+import org.convgrid.output.CsvNumbers;
+import org.convgrid.output.Span;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.catalogue.OutcomeRows;
+import org.convgrid.output.transitions.RefinedModelIds;
+import org.convgrid.output.transitions.Slice;
+import org.convgrid.output.transitions.TransitionEstimate;
+import org.convgrid.output.transitions.TransitionFinder;
+import org.convgrid.output.transitions.TransitionRow;
+
+/**
+ * Narrows the grid brackets of a catalogue's transitions by bisection with new zero-age models
+ * ({@link MassBisection}). One search per (slice, transition) still wider than the tolerance, each on its own fresh
+ * {@link MassLine} (so it depends on nothing but its slice and bracket; two searches of the same bracket share one);
+ * the searches run in parallel on a pool of the given size and are gathered in slice order, fully convective limit
+ * first, so the result is the same for any thread count. Only the crossing the table reports is refined (the highest one for the
+ * fully convective limit, the lowest for the core onset); slices at ages above zero are left at grid resolution.
+ * Midpoints are rounded to masses the catalogue writes exactly, so a catalogue row's mass is the mass computed.
+ */
+public final class TransitionRefiner {
+
+    /**
+     * The new models, ready to append, and what the table should say about each slice.
+     *
+     * @param newModels every new model, in slice order then increasing mass, with its final refinement id
+     * @param notes remarks per slice (stops, unrefinable ages), in slice order
+     * @param searches bisections run
+     */
+    public record Result(List<ModelOutcome> newModels, Map<Slice, List<String>> notes, int searches) {
+    }
+
+    private enum Kind {
+        FULLY_CONVECTIVE("fully convective"), CONV_CORE("convective core");
+
+        final String label;
+
+        Kind(String label) {
+            this.label = label;
+        }
+    }
+
+    private record Search(Slice slice, Kind kind, Span bracket, PhysicsOptions physics, MetallicityPoint point) {
+    }
+
+    private final MassLineFactory lines;
+    private final TransitionFinder finder;
+    private final MassBisection bisection;
+    private final int threads;
+
+    /**
+     * @param lines opens the line of each search
+     * @param finder decides each model's side of a transition (its core threshold)
+     * @param toleranceMsun the refined brackets must be narrower than this, solar masses
+     * @param threads searches run at once, &gt;= 1
+     */
+    public TransitionRefiner(MassLineFactory lines, TransitionFinder finder, double toleranceMsun, int threads) {
+        if (threads < 1) {
+            throw new IllegalArgumentException("threads must be >= 1, got " + threads);
+        }
+        this.lines = lines;
+        this.finder = finder;
+        this.bisection = new MassBisection(toleranceMsun * Constants.M_SUN, TransitionRefiner::catalogueMass);
+        this.threads = threads;
+    }
+
+    /**
+     * @param grid the grid of the run (its metallicity points and physics combinations, by the ids' indices)
+     * @param catalogue every row of the run's catalogue, grid and earlier refinement rows alike
+     */
+    public Result refine(GridSpec grid, List<CatalogueRow> catalogue) throws InterruptedException {
+        Map<Slice, List<CatalogueRow>> members = new LinkedHashMap<>();
+        catalogue.forEach(r -> members.computeIfAbsent(Slice.of(r), s -> new ArrayList<>()).add(r));
+        Map<Slice, List<String>> notes = new LinkedHashMap<>();
+        List<Search> searches = new ArrayList<>();
+        for (TransitionRow row : finder.find(catalogue)) {
+            Slice slice = row.slice();
+            notes.put(slice, new ArrayList<>());
+            CatalogueRow gridRow = members.get(slice).stream().filter(r -> !RefinedModelIds.isRefined(r.modelId()))
+                    .findFirst().orElseThrow(() -> new RunSetupException("slice at Z = " + slice.zInit()
+                            + " has no grid model; the catalogue was edited"));
+            int[] indices = ModelIds.physicsAndMetallicity(gridRow.modelId());
+            if (indices[0] >= grid.physics().size() || indices[1] >= grid.metallicities().size()) {
+                throw new RunSetupException("model " + gridRow.modelId() + " is not in the run's grid");
+            }
+            for (Kind kind : Kind.values()) {
+                TransitionEstimate e = kind == Kind.FULLY_CONVECTIVE ? row.fullyConvective() : row.convCore();
+                if (!e.found() || e.bracket().hi() - e.bracket().lo() < bisection.tolerance() / Constants.M_SUN) {
+                    continue;
+                }
+                if (slice.ageGyr() != 0.0) {
+                    notes.get(slice).add(kind.label + " not refined: only zero-age slices can be refined");
+                    continue;
+                }
+                if (e.crossings().size() > 1) {
+                    notes.get(slice).add(kind.label + ": only the reported crossing was refined, the other "
+                            + (e.crossings().size() - 1) + " stay at grid resolution");
+                }
+                searches.add(new Search(slice, kind, e.bracket(), grid.physics().combinations().get(indices[0]),
+                        grid.metallicities().get(indices[1])));
+            }
+        }
+        List<Search> flat = tasks(searches).stream().flatMap(List::stream).toList();
+        List<Refinement> done = runAll(tasks(searches)).stream().flatMap(List::stream).toList();
+        Map<Slice, Map<Double, ModelOutcome>> added = new LinkedHashMap<>();
+        for (int i = 0; i < flat.size(); i++) {
+            Search s = flat.get(i);
+            Map<Double, ModelOutcome> byMass = added.computeIfAbsent(s.slice(), k -> new LinkedHashMap<>());
+            // two searches of one bracket share their line: the second one's models repeat the first one's
+            done.get(i).newModels().forEach(o -> byMass.putIfAbsent(o.request().mass(), o));
+            describe(s, done.get(i), notes.get(s.slice()));
+        }
+        return new Result(named(added, members), notes, searches.size());
+    }
+
+    /**
+     * Searches grouped by line: both transitions of a slice share one line when their grid brackets coincide (a
+     * star that leaves full convection straight into a convective core), so the second search reuses the first
+     * one's converged models instead of computing them again.
+     */
+    private static List<List<Search>> tasks(List<Search> searches) {
+        Map<List<Object>, List<Search>> byBracket = new LinkedHashMap<>();
+        searches.forEach(s -> byBracket.computeIfAbsent(List.of(s.slice(), s.bracket()), k -> new ArrayList<>())
+                .add(s));
+        return List.copyOf(byBracket.values());
+    }
+
+    private List<List<Refinement>> runAll(List<List<Search>> tasks) throws InterruptedException {
+        ForkJoinPool pool = new ForkJoinPool(threads);
+        try {
+            // parallel streams keep the encounter order in toList(), whatever thread ran each task
+            return pool.submit(() -> tasks.parallelStream().map(this::run).toList()).get();
+        } catch (ExecutionException e) {
+            throw e.getCause() instanceof RuntimeException r ? r : new IllegalStateException(e.getCause());
+        } finally {
+            pool.shutdown();
+        }
+    }
+
+    /** The searches of one task, in order, on one fresh line. */
+    private List<Refinement> run(List<Search> task) {
+        Search first = task.get(0);
+        MetallicityPoint p = first.point();
+        MassLine line = lines.open(first.physics(), p.z(), p.y());
+        List<Refinement> done = new ArrayList<>(task.size());
+        for (Search s : task) {
+            Predicate<ModelOutcome> lowSide = s.kind() == Kind.FULLY_CONVECTIVE
+                    ? o -> TransitionFinder.isFullyConvective(OutcomeRows.toRow(o))
+                    : o -> !finder.hasConvectiveCore(OutcomeRows.toRow(o));
+            done.add(bisection.refine(line, mass -> new ModelRequest("pending", mass, p.z(), p.y(), 0.0,
+                    s.physics()), s.bracket().lo() * Constants.M_SUN, s.bracket().hi() * Constants.M_SUN, lowSide));
+        }
+        return done;
+    }
+
+    /** The new models of each slice by mass, numbered after the slice's highest refinement counter. */
+    private static List<ModelOutcome> named(Map<Slice, Map<Double, ModelOutcome>> added,
+                                            Map<Slice, List<CatalogueRow>> members) {
+        List<ModelOutcome> all = new ArrayList<>();
+        added.forEach((slice, outcomes) -> {
+            List<CatalogueRow> rows = members.get(slice);
+            String gridId = rows.stream().map(CatalogueRow::modelId).filter(id -> !RefinedModelIds.isRefined(id))
+                    .findFirst().orElseThrow();
+            int next = 1 + rows.stream().mapToInt(r -> RefinedModelIds.counter(r.modelId())).max().orElse(-1);
+            List<ModelOutcome> byMass = new ArrayList<>(outcomes.values());
+            byMass.sort(Comparator.comparingDouble(o -> o.request().mass()));
+            for (ModelOutcome o : byMass) {
+                ModelRequest r = o.request();
+                ModelRequest named = new ModelRequest(RefinedModelIds.of(gridId, next++), r.mass(),
+                        r.initialMetals(), r.initialHelium(), r.age(), r.physics());
+                all.add(new ModelOutcome(named, o.status(), o.statusDetail(), o.global(), o.convection(),
+                        o.solverIterations()));
+            }
+        });
+        return all;
+    }
+
+    private static void describe(Search s, Refinement r, List<String> notes) {
+        String what = s.kind().label;
+        String at = CsvNumbers.format(r.stoppedAt() / Constants.M_SUN) + " Msun";
+        String width = CsvNumbers.format(r.width() / Constants.M_SUN) + " Msun";
+        String detail = r.detail().isEmpty() ? "" : " (" + CatalogueAppender.oneLine(r.detail()) + ")";
+        switch (r.stop()) {
+            case NARROW_ENOUGH -> { }
+            case END_NOT_USABLE -> notes.add(what + " not refined: the bracket end at " + at
+                    + " could not be recomputed" + detail);
+            case END_DISAGREES -> notes.add(what + " not refined: recomputed, the bracket end at " + at
+                    + " falls on the other side");
+            case MODEL_NOT_USABLE -> notes.add(what + " refinement stopped at a bracket of " + width
+                    + ": the model at " + at + " failed" + detail);
+            case RESOLUTION -> notes.add(what + " refinement stopped at a bracket of " + width
+                    + ": no mass the catalogue can write lies inside");
+            case BUDGET -> notes.add(what + " refinement stopped at a bracket of " + width + ": step budget spent");
+            default -> throw new IllegalStateException("unknown stop " + r.stop());
+        }
+    }
+
+    /** The mass (g) nearest to {@code mass} whose catalogue text reads back exactly. */
+    static double catalogueMass(double mass) {
+        return CsvNumbers.parse(CsvNumbers.format(mass / Constants.M_SUN)) * Constants.M_SUN;
+    }
+}

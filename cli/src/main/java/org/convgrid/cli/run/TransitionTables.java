@@ -1,0 +1,130 @@
+package org.convgrid.cli.run;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import org.convgrid.engine.batch.ModelOutcome;
+import org.convgrid.grids.GridSpec;
+import org.convgrid.grids.yaml.GridFileReader;
+import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.catalogue.CatalogueReader;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.manifest.RunManifest;
+import org.convgrid.output.manifest.RunManifestReader;
+import org.convgrid.output.manifest.RunManifestWriter;
+import org.convgrid.output.transitions.Slice;
+import org.convgrid.output.transitions.TransitionFinder;
+import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.output.transitions.TransitionWriter;
+
+/**
+ * {@code convgrid transitions}: rewrites a run directory's transitions.csv from its catalogue, after appending the
+ * new models of a refinement when asked. Refinement needs a finished, unsharded run (its manifest gives the grid);
+ * the new rows are appended in one go once every search has ended, then the table and the manifest's counts are
+ * rewritten atomically.
+ */
+public final class TransitionTables {
+
+    /**
+     * What was written.
+     *
+     * @param transitions the rows of transitions.csv
+     * @param catalogue every catalogue row after the update
+     * @param added models appended to the catalogue
+     * @param searches bisections run
+     * @param finished the directory for the finishers, null when the run has no finished manifest
+     */
+    public record Update(List<TransitionRow> transitions, List<CatalogueRow> catalogue, List<ModelOutcome> added,
+                         int searches, FinishedRun finished) {
+    }
+
+    private TransitionTables() {
+    }
+
+    /** Recomputes transitions.csv from the catalogue as it stands (no model computed). */
+    public static Update recompute(RunDirectory dir, TransitionFinder finder) throws IOException {
+        requireCatalogue(dir);
+        List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
+        List<TransitionRow> transitions = finder.find(rows);
+        AtomicFiles.write(dir.transitions(), out -> TransitionWriter.write(transitions, out));
+        return new Update(transitions, rows, List.of(), 0, finished(dir, rows, transitions));
+    }
+
+    /**
+     * Refines the transitions, appends the new models to the catalogue, rewrites transitions.csv and the manifest's
+     * counts.
+     *
+     * @throws RunSetupException when the directory is not a finished, unsharded run (nothing changed)
+     */
+    public static Update refine(RunDirectory dir, TransitionFinder finder, TransitionRefiner refiner)
+            throws IOException, InterruptedException {
+        requireCatalogue(dir);
+        if (!Files.isRegularFile(dir.manifest())) {
+            throw new RunSetupException(dir.root() + " has no " + RunDirectory.MANIFEST
+                    + ", so the grid of its models is unknown; cannot refine");
+        }
+        RunManifest manifest = RunManifestReader.read(Files.readString(dir.manifest()));
+        if (manifest.finished() == null) {
+            throw new RunSetupException("the run in " + dir.root() + " has not finished; complete it with "
+                    + "'convgrid run --resume' before refining");
+        }
+        if (manifest.shard() != null) {
+            throw new RunSetupException(dir.root() + " holds shard " + manifest.shard() + " of a grid; merge the "
+                    + "shards with 'convgrid merge' and refine the merged directory");
+        }
+        GridSpec grid = new GridFileReader().parse(manifest.gridFile(), manifest.gridText());
+        List<CatalogueRow> before = CatalogueReader.read(dir.catalogue());
+        TransitionRefiner.Result result = refiner.refine(grid, before);
+        if (!result.newModels().isEmpty()) {
+            try (CatalogueAppender sink = CatalogueAppender.open(dir.catalogue(), false)) {
+                for (ModelOutcome o : result.newModels()) {
+                    sink.accept(o);
+                }
+            }
+        }
+        List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
+        List<TransitionRow> transitions = withNotes(finder.find(rows), result.notes());
+        AtomicFiles.write(dir.transitions(), out -> TransitionWriter.write(transitions, out));
+        RunManifest updated = manifest.finishedAt(manifest.finished(), RunFinishing.countByStatus(rows),
+                manifest.medianSecondsPerModel());
+        AtomicFiles.writeString(dir.manifest(), RunManifestWriter.toYaml(updated));
+        return new Update(transitions, rows, result.newModels(), result.searches(),
+                new FinishedRun(dir.root(), grid, updated, rows, transitions));
+    }
+
+    private static List<TransitionRow> withNotes(List<TransitionRow> rows, Map<Slice, List<String>> notes) {
+        List<TransitionRow> out = new ArrayList<>(rows.size());
+        for (TransitionRow row : rows) {
+            List<String> all = new ArrayList<>();
+            if (!row.notes().isEmpty()) {
+                all.add(row.notes());
+            }
+            all.addAll(notes.getOrDefault(row.slice(), List.of()));
+            out.add(new TransitionRow(row.slice(), row.fullyConvective(), row.convCore(), row.method(),
+                    String.join("; ", all)));
+        }
+        return out;
+    }
+
+    private static void requireCatalogue(RunDirectory dir) {
+        if (!Files.isRegularFile(dir.catalogue())) {
+            throw new RunSetupException(dir.root() + " is not a run directory (no " + RunDirectory.CATALOGUE + ")");
+        }
+    }
+
+    /** The directory for the finishers when its manifest says the run finished; null otherwise. */
+    private static FinishedRun finished(RunDirectory dir, List<CatalogueRow> rows, List<TransitionRow> transitions)
+            throws IOException {
+        if (!Files.isRegularFile(dir.manifest())) {
+            return null;
+        }
+        RunManifest manifest = RunManifestReader.read(Files.readString(dir.manifest()));
+        if (manifest.finished() == null) {
+            return null;
+        }
+        GridSpec grid = new GridFileReader().parse(manifest.gridFile(), manifest.gridText());
+        return new FinishedRun(dir.root(), grid, manifest, rows, transitions);
+    }
+}
