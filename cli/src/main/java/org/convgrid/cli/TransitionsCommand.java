@@ -27,7 +27,8 @@ import picocli.CommandLine.ParentCommand;
                 + "crossing out of fully convective, the onset the lowest crossing into a core.",
             "With --refine, each bracket of a zero-age slice wider than --tolerance is narrowed by bisection with "
                 + "new zero-age models, each seeded by homology from its converged neighbours, until it is narrower "
-                + "than the tolerance (method refined). The new models are appended to catalogue.csv with ids "
+                + "than the tolerance (method refined); only the crossing the table reports is refined unless "
+                + "--all-crossings is given. The new models are appended to catalogue.csv with ids "
                 + "p<i>-z<i>-r<n>-a<i> (r: refined, n counts per slice); slices at ages above 0 keep their grid "
                 + "brackets. A refined run cannot be resumed with 'run --resume'. Needs a finished, merged run.",
             "Exit codes: 0 done, 3 some new models failed (in the catalogue with their status; notes says where "
@@ -55,6 +56,10 @@ final class TransitionsCommand implements Callable<Integer> {
             + TransitionFinder.DEFAULT_CORE_MASS_FRACTION_THRESHOLD + ").")
     double coreThreshold = TransitionFinder.DEFAULT_CORE_MASS_FRACTION_THRESHOLD;
 
+    @Option(names = "--all-crossings", description = "With --refine: when a slice's structure changes back and forth "
+            + "with mass, refine every crossing, not only the one the table reports (more models).")
+    boolean allCrossings;
+
     @Option(names = "--threads", paramLabel = "N",
             description = "With --refine: bisections run at once (count; default: available processors).")
     Integer threads;
@@ -73,7 +78,8 @@ final class TransitionsCommand implements Callable<Integer> {
         TransitionFinder finder = new TransitionFinder(coreThreshold);
         long start = System.nanoTime();
         TransitionTables.Update update = refine
-                ? TransitionTables.refine(dir, finder, new TransitionRefiner(context.lines(), finder, tolerance, n))
+                ? TransitionTables.refine(dir, finder, new TransitionRefiner(context.lines(), finder, tolerance, n,
+                        allCrossings))
                 : TransitionTables.recompute(dir, finder);
         if (update.finished() != null) {
             RunFinishing.callFinishers(update.finished(), context.finishers());

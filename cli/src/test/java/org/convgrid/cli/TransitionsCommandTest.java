@@ -161,6 +161,33 @@ class TransitionsCommandTest {
     }
 
     @Test
+    void everyCrossingOfAFlickeringSliceCanBeRefined() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        FlickeringFake fake = new FlickeringFake();
+        CliHarness h = CliHarness.in(work, FakeChunkSolver.fast());
+        h = h.with(h.context().withSolvers(g -> fake).withLines(fake));
+        assertThat(h.execute("run", grid.toString(), "--out", "flicker", "--quiet").code()).isEqualTo(0);
+        Path dir = work.resolve("flicker");
+        TransitionRow before = transitions(dir).get(0);
+        assertThat(before.convCore().crossings()).hasSize(3);
+        assertThat(before.convCore().bracket().hi()).isEqualTo(0.45);
+
+        assertThat(h.execute("transitions", "flicker", "--refine", "--all-crossings").code()).isEqualTo(0);
+        TransitionRow z0 = transitions(dir).get(0);
+        List<Double> edges = List.of(FlickeringFake.WINDOW_LO, FlickeringFake.WINDOW_HI, FlickeringFake.CORE_EDGE);
+        assertThat(z0.convCore().crossings()).hasSize(3);
+        for (int i = 0; i < 3; i++) {
+            double lo = z0.convCore().crossings().get(i).lo();
+            double hi = z0.convCore().crossings().get(i).hi();
+            assertThat(hi - lo).isLessThan(0.002);
+            assertThat(edges.get(i)).isGreaterThan(lo).isLessThanOrEqualTo(hi);
+        }
+        assertThat(z0.convCore().massMsun()).isCloseTo(FlickeringFake.WINDOW_LO, within(0.002));
+        assertThat(z0.notes()).contains("convective core changes 3 times with mass")
+                .doesNotContain("only the reported crossing");
+    }
+
+    @Test
     void aRefinedRunRefusesResumeAndMerge() throws Exception {
         Path dir = finishedRun("done");
         assertThat(harness(new FakeMassLines(Set.of())).execute("transitions", "done", "--refine").code())
@@ -199,9 +226,10 @@ class TransitionsCommandTest {
 
     @Test
     void helpStatesUnitsAndDefinitions() {
-        String help = harness(new FakeMassLines(Set.of())).execute("transitions", "--help").out();
+        String help = harness(new FakeMassLines(Set.of())).execute("transitions", "--help").out()
+                .replaceAll("\\s+", " ");
         assertThat(help).contains("--tolerance=MSUN", "solar masses", "0.002", "--core-threshold", "0.001",
                 "mass fraction m/M", "criterion is the one the run used", "every crossing is listed",
-                "p<i>-z<i>-r<n>-a<i>", "zero-age");
+                "p<i>-z<i>-r<n>-a<i>", "zero-age", "refine every crossing");
     }
 }

@@ -33,8 +33,9 @@ import org.convgrid.output.transitions.TransitionRow;
  * ({@link MassBisection}). One search per (slice, transition) still wider than the tolerance, each on its own fresh
  * {@link MassLine} (so it depends on nothing but its slice and bracket; two searches of the same bracket share one);
  * the searches run in parallel on a pool of the given size and are gathered in slice order, fully convective limit
- * first, so the result is the same for any thread count. Only the crossing the table reports is refined (the highest one for the
- * fully convective limit, the lowest for the core onset); slices at ages above zero are left at grid resolution.
+ * first, so the result is the same for any thread count. By default only the crossing the table reports is refined
+ * (the highest one for the fully convective limit, the lowest for the core onset); on request every crossing of a
+ * slice whose structure flickers with mass. Slices at ages above zero are left at grid resolution.
  * Midpoints are rounded to masses the catalogue writes exactly, so a catalogue row's mass is the mass computed.
  */
 public final class TransitionRefiner {
@@ -59,21 +60,26 @@ public final class TransitionRefiner {
         }
     }
 
-    private record Search(Slice slice, Kind kind, Span bracket, PhysicsOptions physics, MetallicityPoint point) {
+    /** One bisection; {@code lowState} is the kind's state (fully convective, has a core) below the crossing. */
+    private record Search(Slice slice, Kind kind, Span bracket, boolean lowState, PhysicsOptions physics,
+                          MetallicityPoint point) {
     }
 
     private final MassLineFactory lines;
     private final TransitionFinder finder;
     private final MassBisection bisection;
     private final int threads;
+    private final boolean allCrossings;
 
     /**
      * @param lines opens the line of each search
      * @param finder decides each model's side of a transition (its core threshold)
      * @param toleranceMsun the refined brackets must be narrower than this, solar masses
      * @param threads searches run at once, &gt;= 1
+     * @param allCrossings refine every crossing of a slice that flickers, not only the one the table reports
      */
-    public TransitionRefiner(MassLineFactory lines, TransitionFinder finder, double toleranceMsun, int threads) {
+    public TransitionRefiner(MassLineFactory lines, TransitionFinder finder, double toleranceMsun, int threads,
+                             boolean allCrossings) {
         if (threads < 1) {
             throw new IllegalArgumentException("threads must be >= 1, got " + threads);
         }
@@ -81,6 +87,7 @@ public final class TransitionRefiner {
         this.finder = finder;
         this.bisection = new MassBisection(toleranceMsun * Constants.M_SUN, TransitionRefiner::catalogueMass);
         this.threads = threads;
+        this.allCrossings = allCrossings;
     }
 
     /**
@@ -111,12 +118,25 @@ public final class TransitionRefiner {
                     notes.get(slice).add(kind.label + " not refined: only zero-age slices can be refined");
                     continue;
                 }
-                if (e.crossings().size() > 1) {
-                    notes.get(slice).add(kind.label + ": only the reported crossing was refined, the other "
-                            + (e.crossings().size() - 1) + " stay at grid resolution");
+                PhysicsOptions physics = grid.physics().combinations().get(indices[0]);
+                MetallicityPoint point = grid.metallicities().get(indices[1]);
+                if (!allCrossings) {
+                    if (e.crossings().size() > 1) {
+                        notes.get(slice).add(kind.label + ": only the reported crossing was refined, the other "
+                                + (e.crossings().size() - 1) + " stay at grid resolution");
+                    }
+                    // below the reported crossing: fully convective, or without a core
+                    searches.add(new Search(slice, kind, e.bracket(), kind == Kind.FULLY_CONVECTIVE, physics, point));
+                    continue;
                 }
-                searches.add(new Search(slice, kind, e.bracket(), grid.physics().combinations().get(indices[0]),
-                        grid.metallicities().get(indices[1])));
+                for (Span crossing : e.crossings()) {
+                    if (crossing.hi() - crossing.lo() >= bisection.tolerance() / Constants.M_SUN) {
+                        CatalogueRow below = members.get(slice).stream().filter(r -> r.isOk()
+                                && r.structureClass() != null && r.massMsun() == crossing.lo()).findFirst()
+                                .orElseThrow();
+                        searches.add(new Search(slice, kind, crossing, inState(kind, below), physics, point));
+                    }
+                }
             }
         }
         List<Search> flat = tasks(searches).stream().flatMap(List::stream).toList();
@@ -163,13 +183,15 @@ public final class TransitionRefiner {
         MassLine line = lines.open(first.physics(), p.z(), p.y());
         List<Refinement> done = new ArrayList<>(task.size());
         for (Search s : task) {
-            Predicate<ModelOutcome> lowSide = s.kind() == Kind.FULLY_CONVECTIVE
-                    ? o -> TransitionFinder.isFullyConvective(OutcomeRows.toRow(o))
-                    : o -> !finder.hasConvectiveCore(OutcomeRows.toRow(o));
+            Predicate<ModelOutcome> lowSide = o -> inState(s.kind(), OutcomeRows.toRow(o)) == s.lowState();
             done.add(bisection.refine(line, mass -> new ModelRequest("pending", mass, p.z(), p.y(), 0.0,
                     s.physics()), s.bracket().lo() * Constants.M_SUN, s.bracket().hi() * Constants.M_SUN, lowSide));
         }
         return done;
+    }
+
+    private boolean inState(Kind kind, CatalogueRow row) {
+        return kind == Kind.FULLY_CONVECTIVE ? TransitionFinder.isFullyConvective(row) : finder.hasConvectiveCore(row);
     }
 
     /** The new models of each slice by mass, numbered after the slice's highest refinement counter. */

@@ -3,6 +3,7 @@ package org.convgrid.cli.run;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import org.convgrid.engine.batch.ModelOutcome;
@@ -15,6 +16,7 @@ import org.convgrid.output.manifest.RunManifest;
 import org.convgrid.output.manifest.RunManifestReader;
 import org.convgrid.output.manifest.RunManifestWriter;
 import org.convgrid.output.transitions.Slice;
+import org.convgrid.output.transitions.TransitionEstimate;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.output.transitions.TransitionWriter;
@@ -85,7 +87,7 @@ public final class TransitionTables {
             }
         }
         List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
-        List<TransitionRow> transitions = withNotes(finder.find(rows), result.notes());
+        List<TransitionRow> transitions = withNotes(finder.find(rows), result.notes(), finder.find(before));
         AtomicFiles.write(dir.transitions(), out -> TransitionWriter.write(transitions, out));
         RunManifest updated = manifest.finishedAt(manifest.finished(), RunFinishing.countByStatus(rows),
                 manifest.medianSecondsPerModel());
@@ -94,7 +96,14 @@ public final class TransitionTables {
                 new FinishedRun(dir.root(), grid, updated, rows, transitions));
     }
 
-    private static List<TransitionRow> withNotes(List<TransitionRow> rows, Map<Slice, List<String>> notes) {
+    /**
+     * The refined rows with the refinement's remarks, and a remark wherever a transition left its earlier bracket: the
+     * new models found a crossing between two earlier masses that the coarser sampling had missed.
+     */
+    private static List<TransitionRow> withNotes(List<TransitionRow> rows, Map<Slice, List<String>> notes,
+                                                 List<TransitionRow> earlier) {
+        Map<Slice, TransitionRow> before = new HashMap<>();
+        earlier.forEach(r -> before.put(r.slice(), r));
         List<TransitionRow> out = new ArrayList<>(rows.size());
         for (TransitionRow row : rows) {
             List<String> all = new ArrayList<>();
@@ -102,10 +111,23 @@ public final class TransitionTables {
                 all.add(row.notes());
             }
             all.addAll(notes.getOrDefault(row.slice(), List.of()));
+            TransitionRow old = before.get(row.slice());
+            if (old != null) {
+                moved("fully convective limit", old.fullyConvective(), row.fullyConvective(), all);
+                moved("convective core onset", old.convCore(), row.convCore(), all);
+            }
             out.add(new TransitionRow(row.slice(), row.fullyConvective(), row.convCore(), row.method(),
                     String.join("; ", all)));
         }
         return out;
+    }
+
+    private static void moved(String what, TransitionEstimate before, TransitionEstimate after, List<String> notes) {
+        if (before.found() && after.found() && (after.bracket().lo() < before.bracket().lo()
+                || after.bracket().hi() > before.bracket().hi())) {
+            notes.add(what + " moved out of the earlier bracket " + before.bracket() + " Msun: the new models "
+                    + "found a crossing between masses the grid had not resolved");
+        }
     }
 
     private static void requireCatalogue(RunDirectory dir) {
