@@ -25,20 +25,36 @@ final class FlickeringFake implements ChunkSolver, MassLineFactory {
     static final double WINDOW_HI = 0.47;
     static final double CORE_EDGE = 1.225;
 
+    private final double fcEdge;
+    private final double windowLo;
+    private final double windowHi;
+
+    /** The structure described above. */
+    FlickeringFake() {
+        this(FC_EDGE, WINDOW_LO, WINDOW_HI);
+    }
+
+    /** Fully convective below {@code fcEdge}, a core in [windowLo, windowHi) and from {@link #CORE_EDGE}. */
+    FlickeringFake(double fcEdge, double windowLo, double windowHi) {
+        this.fcEdge = fcEdge;
+        this.windowLo = windowLo;
+        this.windowHi = windowHi;
+    }
+
     @Override
     public List<ModelOutcome> solve(List<ModelRequest> chunk) {
-        return chunk.stream().map(FlickeringFake::outcome).toList();
+        return chunk.stream().map(this::outcome).toList();
     }
 
     @Override
     public MassLine open(PhysicsOptions physics, double initialMetals, double initialHelium) {
-        return FlickeringFake::outcome;
+        return this::outcome;
     }
 
-    static ModelOutcome outcome(ModelRequest r) {
+    ModelOutcome outcome(ModelRequest r) {
         double m = r.mass() / Constants.M_SUN;
-        boolean fc = m < FC_EDGE;
-        double core = fc ? 1 : (m >= WINDOW_LO && m < WINDOW_HI) ? 0.05 : m >= CORE_EDGE ? 0.08 : 0;
+        boolean fc = m < fcEdge;
+        double core = fc ? 1 : (m >= windowLo && m < windowHi) ? 0.05 : m >= CORE_EDGE ? 0.08 : 0;
         StructureClass c = fc ? StructureClass.FULLY_CONVECTIVE
                 : core > 0 ? StructureClass.CONV_CORE_AND_ENVELOPE : StructureClass.CONV_ENVELOPE;
         List<ConvectiveZone> zones = fc ? List.of(new ConvectiveZone(0, 1, 0, 1))

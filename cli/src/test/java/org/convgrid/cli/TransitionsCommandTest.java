@@ -188,6 +188,25 @@ class TransitionsCommandTest {
     }
 
     @Test
+    void aCrossingTheGridMissedIsReportedAndSaidToLieOutsideTheGridBracket() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        // a core window between grid masses, found by the bisection of the fully convective limit 0.35-0.4
+        FlickeringFake fake = new FlickeringFake(0.355, 0.36, 0.37);
+        CliHarness h = CliHarness.in(work, FakeChunkSolver.fast());
+        h = h.with(h.context().withSolvers(g -> fake).withLines(fake));
+        assertThat(h.execute("run", grid.toString(), "--out", "missed", "--quiet").code()).isEqualTo(0);
+        Path dir = work.resolve("missed");
+        assertThat(transitions(dir).get(0).convCore().bracket().lo()).isEqualTo(1.2);
+        assertThat(h.execute("transitions", "missed", "--refine").code()).isEqualTo(0);
+        TransitionRow z0 = transitions(dir).get(0);
+        assertThat(z0.convCore().massMsun()).isBetween(0.36, 0.37);
+        assertThat(z0.notes()).contains("convective core onset lies outside the grid bracket 1.2-1.25 Msun");
+        // the remark depends on the catalogue alone: a plain recompute repeats it
+        assertThat(h.execute("transitions", "missed").code()).isEqualTo(0);
+        assertThat(transitions(dir).get(0).notes()).contains("lies outside the grid bracket 1.2-1.25 Msun");
+    }
+
+    @Test
     void aRefinedRunRefusesResumeAndMerge() throws Exception {
         Path dir = finishedRun("done");
         assertThat(harness(new FakeMassLines(Set.of())).execute("transitions", "done", "--refine").code())

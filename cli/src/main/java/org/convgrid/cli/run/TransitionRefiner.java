@@ -111,30 +111,26 @@ public final class TransitionRefiner {
             }
             for (Kind kind : Kind.values()) {
                 TransitionEstimate e = kind == Kind.FULLY_CONVECTIVE ? row.fullyConvective() : row.convCore();
-                if (!e.found() || e.bracket().hi() - e.bracket().lo() < bisection.tolerance() / Constants.M_SUN) {
+                List<Span> spans = allCrossings ? e.crossings() : e.found() ? List.of(e.bracket()) : List.of();
+                if (spans.isEmpty()) {
                     continue;
                 }
                 if (slice.ageGyr() != 0.0) {
                     notes.get(slice).add(kind.label + " not refined: only zero-age slices can be refined");
                     continue;
                 }
+                if (!allCrossings && e.crossings().size() > 1) {
+                    notes.get(slice).add(kind.label + ": only the reported crossing is refined, the other "
+                            + (e.crossings().size() - 1) + " stay at grid resolution");
+                }
                 PhysicsOptions physics = grid.physics().combinations().get(indices[0]);
                 MetallicityPoint point = grid.metallicities().get(indices[1]);
-                if (!allCrossings) {
-                    if (e.crossings().size() > 1) {
-                        notes.get(slice).add(kind.label + ": only the reported crossing was refined, the other "
-                                + (e.crossings().size() - 1) + " stay at grid resolution");
-                    }
-                    // below the reported crossing: fully convective, or without a core
-                    searches.add(new Search(slice, kind, e.bracket(), kind == Kind.FULLY_CONVECTIVE, physics, point));
-                    continue;
-                }
-                for (Span crossing : e.crossings()) {
-                    if (crossing.hi() - crossing.lo() >= bisection.tolerance() / Constants.M_SUN) {
+                for (Span span : spans) {
+                    if (span.hi() - span.lo() >= bisection.tolerance() / Constants.M_SUN) {
                         CatalogueRow below = members.get(slice).stream().filter(r -> r.isOk()
-                                && r.structureClass() != null && r.massMsun() == crossing.lo()).findFirst()
+                                && r.structureClass() != null && r.massMsun() == span.lo()).findFirst()
                                 .orElseThrow();
-                        searches.add(new Search(slice, kind, crossing, inState(kind, below), physics, point));
+                        searches.add(new Search(slice, kind, span, inState(kind, below), physics, point));
                     }
                 }
             }

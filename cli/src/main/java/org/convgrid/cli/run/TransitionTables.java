@@ -15,6 +15,7 @@ import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.manifest.RunManifest;
 import org.convgrid.output.manifest.RunManifestReader;
 import org.convgrid.output.manifest.RunManifestWriter;
+import org.convgrid.output.transitions.RefinedModelIds;
 import org.convgrid.output.transitions.Slice;
 import org.convgrid.output.transitions.TransitionEstimate;
 import org.convgrid.output.transitions.TransitionFinder;
@@ -49,7 +50,7 @@ public final class TransitionTables {
     public static Update recompute(RunDirectory dir, TransitionFinder finder) throws IOException {
         requireCatalogue(dir);
         List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
-        List<TransitionRow> transitions = finder.find(rows);
+        List<TransitionRow> transitions = withNotes(finder, rows, Map.of());
         AtomicFiles.write(dir.transitions(), out -> TransitionWriter.write(transitions, out));
         return new Update(transitions, rows, List.of(), 0, finished(dir, rows, transitions));
     }
@@ -87,7 +88,7 @@ public final class TransitionTables {
             }
         }
         List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
-        List<TransitionRow> transitions = withNotes(finder.find(rows), result.notes(), finder.find(before));
+        List<TransitionRow> transitions = withNotes(finder, rows, result.notes());
         AtomicFiles.write(dir.transitions(), out -> TransitionWriter.write(transitions, out));
         RunManifest updated = manifest.finishedAt(manifest.finished(), RunFinishing.countByStatus(rows),
                 manifest.medianSecondsPerModel());
@@ -97,13 +98,18 @@ public final class TransitionTables {
     }
 
     /**
-     * The refined rows with the refinement's remarks, and a remark wherever a transition left its earlier bracket: the
-     * new models found a crossing between two earlier masses that the coarser sampling had missed.
+     * The table of the catalogue with the refinement's remarks, and, when the catalogue holds refinement models, a
+     * remark wherever a transition lies outside the bracket the grid models alone give: the new models found a
+     * crossing between grid masses that the grid had missed. Depends on the catalogue alone (plus the remarks).
      */
-    private static List<TransitionRow> withNotes(List<TransitionRow> rows, Map<Slice, List<String>> notes,
-                                                 List<TransitionRow> earlier) {
+    static List<TransitionRow> withNotes(TransitionFinder finder, List<CatalogueRow> catalogue,
+                                         Map<Slice, List<String>> notes) {
+        List<TransitionRow> rows = finder.find(catalogue);
         Map<Slice, TransitionRow> before = new HashMap<>();
-        earlier.forEach(r -> before.put(r.slice(), r));
+        if (catalogue.stream().anyMatch(r -> RefinedModelIds.isRefined(r.modelId()))) {
+            finder.find(catalogue.stream().filter(r -> !RefinedModelIds.isRefined(r.modelId())).toList())
+                    .forEach(r -> before.put(r.slice(), r));
+        }
         List<TransitionRow> out = new ArrayList<>(rows.size());
         for (TransitionRow row : rows) {
             List<String> all = new ArrayList<>();
@@ -125,8 +131,8 @@ public final class TransitionTables {
     private static void moved(String what, TransitionEstimate before, TransitionEstimate after, List<String> notes) {
         if (before.found() && after.found() && (after.bracket().lo() < before.bracket().lo()
                 || after.bracket().hi() > before.bracket().hi())) {
-            notes.add(what + " moved out of the earlier bracket " + before.bracket() + " Msun: the new models "
-                    + "found a crossing between masses the grid had not resolved");
+            notes.add(what + " lies outside the grid bracket " + before.bracket() + " Msun: the refinement "
+                    + "models found a crossing between grid masses that the grid had missed");
         }
     }
 
