@@ -158,6 +158,13 @@ class TransitionsCommandTest {
                 + "at 0.375 Msun failed (fake line gave up)");
         assertThat(z0.method()).isEqualTo(TransitionMethod.REFINED);
         assertThat(done.err()).contains("the model at 0.375 Msun failed");
+        // again: the known failure is neither recomputed nor appended twice, and the table says the same
+        byte[] catalogue = Files.readAllBytes(dir.resolve("catalogue.csv"));
+        byte[] table = Files.readAllBytes(dir.resolve("transitions.csv"));
+        FakeMassLines lines = new FakeMassLines(Set.of(0.375));
+        assertThat(harness(lines).execute("transitions", "failing", "--refine").code()).isEqualTo(0);
+        assertThat(Files.readAllBytes(dir.resolve("catalogue.csv"))).isEqualTo(catalogue);
+        assertThat(Files.readAllBytes(dir.resolve("transitions.csv"))).isEqualTo(table);
     }
 
     @Test

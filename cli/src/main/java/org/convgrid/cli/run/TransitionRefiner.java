@@ -2,6 +2,7 @@ package org.convgrid.cli.run;
 
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -60,9 +61,12 @@ public final class TransitionRefiner {
         }
     }
 
-    /** One bisection; {@code lowState} is the kind's state (fully convective, has a core) below the crossing. */
+    /**
+     * One bisection; {@code lowState} is the kind's state (fully convective, has a core) below the crossing;
+     * {@code failed} the slice's catalogue rows that are not usable, by mass in g.
+     */
     private record Search(Slice slice, Kind kind, Span bracket, boolean lowState, PhysicsOptions physics,
-                          MetallicityPoint point) {
+                          MetallicityPoint point, Map<Double, CatalogueRow> failed) {
     }
 
     private final MassLineFactory lines;
@@ -125,12 +129,16 @@ public final class TransitionRefiner {
                 }
                 PhysicsOptions physics = grid.physics().combinations().get(indices[0]);
                 MetallicityPoint point = grid.metallicities().get(indices[1]);
+                Map<Double, CatalogueRow> failed = new HashMap<>();
+                members.get(slice).stream().filter(r -> !r.isOk() || r.structureClass() == null)
+                        .forEach(r -> failed.put(r.massMsun() * Constants.M_SUN, r));
                 for (Span span : spans) {
                     if (span.hi() - span.lo() >= bisection.tolerance() / Constants.M_SUN) {
                         CatalogueRow below = members.get(slice).stream().filter(r -> r.isOk()
                                 && r.structureClass() != null && r.massMsun() == span.lo()).findFirst()
                                 .orElseThrow();
-                        searches.add(new Search(slice, kind, span, inState(kind, below), physics, point));
+                        searches.add(new Search(slice, kind, span, inState(kind, below), physics, point,
+                                failed));
                     }
                 }
             }
@@ -143,7 +151,7 @@ public final class TransitionRefiner {
             Map<Double, ModelOutcome> byMass = added.computeIfAbsent(s.slice(), k -> new LinkedHashMap<>());
             // two searches of one bracket share their line: the second one's models repeat the first one's
             done.get(i).newModels().forEach(o -> byMass.putIfAbsent(o.request().mass(), o));
-            describe(s, done.get(i), notes.get(s.slice()));
+            RefinementRemarks.describe(s.kind().label, done.get(i), notes.get(s.slice()));
         }
         return new Result(named(added, members), notes, searches.size());
     }
@@ -176,7 +184,7 @@ public final class TransitionRefiner {
     private List<Refinement> run(List<Search> task) {
         Search first = task.get(0);
         MetallicityPoint p = first.point();
-        MassLine line = lines.open(first.physics(), p.z(), p.y());
+        MassLine line = skippingKnownFailures(lines.open(first.physics(), p.z(), p.y()), first.failed());
         List<Refinement> done = new ArrayList<>(task.size());
         for (Search s : task) {
             Predicate<ModelOutcome> lowSide = o -> inState(s.kind(), OutcomeRows.toRow(o)) == s.lowState();
@@ -184,6 +192,18 @@ public final class TransitionRefiner {
                     s.physics()), s.bracket().lo() * Constants.M_SUN, s.bracket().hi() * Constants.M_SUN, lowSide));
         }
         return done;
+    }
+
+    /**
+     * A model an earlier refinement found unusable is answered from the catalogue instead of being computed and
+     * appended again, so refining a run twice stops where the first refinement stopped.
+     */
+    private static MassLine skippingKnownFailures(MassLine line, Map<Double, CatalogueRow> failed) {
+        return request -> {
+            CatalogueRow known = failed.get(request.mass());
+            return known == null ? line.solve(request)
+                    : new ModelOutcome(request, known.status(), known.statusDetail(), null, null, 0);
+        };
     }
 
     private boolean inState(Kind kind, CatalogueRow row) {
@@ -203,6 +223,9 @@ public final class TransitionRefiner {
             byMass.sort(Comparator.comparingDouble(o -> o.request().mass()));
             for (ModelOutcome o : byMass) {
                 ModelRequest r = o.request();
+                if (rows.stream().anyMatch(row -> row.massMsun() * Constants.M_SUN == r.mass())) {
+                    continue;
+                }
                 ModelRequest named = new ModelRequest(RefinedModelIds.of(gridId, next++), r.mass(),
                         r.initialMetals(), r.initialHelium(), r.age(), r.physics());
                 all.add(new ModelOutcome(named, o.status(), o.statusDetail(), o.global(), o.convection(),
@@ -210,26 +233,6 @@ public final class TransitionRefiner {
             }
         });
         return all;
-    }
-
-    private static void describe(Search s, Refinement r, List<String> notes) {
-        String what = s.kind().label;
-        String at = CsvNumbers.format(r.stoppedAt() / Constants.M_SUN) + " Msun";
-        String width = CsvNumbers.format(r.width() / Constants.M_SUN) + " Msun";
-        String detail = r.detail().isEmpty() ? "" : " (" + CatalogueAppender.oneLine(r.detail()) + ")";
-        switch (r.stop()) {
-            case NARROW_ENOUGH -> { }
-            case END_NOT_USABLE -> notes.add(what + " not refined: the bracket end at " + at
-                    + " could not be recomputed" + detail);
-            case END_DISAGREES -> notes.add(what + " not refined: recomputed, the bracket end at " + at
-                    + " falls on the other side");
-            case MODEL_NOT_USABLE -> notes.add(what + " refinement stopped at a bracket of " + width
-                    + ": the model at " + at + " failed" + detail);
-            case RESOLUTION -> notes.add(what + " refinement stopped at a bracket of " + width
-                    + ": no mass the catalogue can write lies inside");
-            case BUDGET -> notes.add(what + " refinement stopped at a bracket of " + width + ": step budget spent");
-            default -> throw new IllegalStateException("unknown stop " + r.stop());
-        }
     }
 
     /** The mass (g) nearest to {@code mass} whose catalogue text reads back exactly. */
