@@ -178,6 +178,12 @@ class TransitionsCommandTest {
         TransitionRow before = transitions(dir).get(0);
         assertThat(before.convCore().crossings()).hasSize(3);
         assertThat(before.convCore().bracket().hi()).isEqualTo(0.45);
+        // a copy refined at the reported crossings only says which crossings stay wide
+        CliHarness.Execution copy = h.execute("run", grid.toString(), "--out", "reported", "--quiet");
+        assertThat(copy.code()).isEqualTo(0);
+        assertThat(h.execute("transitions", "reported", "--refine").code()).isEqualTo(0);
+        assertThat(transitions(work.resolve("reported")).get(0).notes()).contains("convective core: 2 other "
+                + "crossing(s) wider than the tolerance, not refined (--all-crossings refines them)");
 
         assertThat(h.execute("transitions", "flicker", "--refine", "--all-crossings").code()).isEqualTo(0);
         TransitionRow z0 = transitions(dir).get(0);
@@ -191,7 +197,7 @@ class TransitionsCommandTest {
         }
         assertThat(z0.convCore().massMsun()).isCloseTo(FlickeringFake.WINDOW_LO, within(0.002));
         assertThat(z0.notes()).contains("convective core changes 3 times with mass")
-                .doesNotContain("only the reported crossing");
+                .doesNotContain("other crossing(s)");
     }
 
     @Test

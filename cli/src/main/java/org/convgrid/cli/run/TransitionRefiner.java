@@ -94,6 +94,16 @@ public final class TransitionRefiner {
         this.allCrossings = allCrossings;
     }
 
+    /** The tolerance, solar masses. */
+    public double toleranceMsun() {
+        return bisection.tolerance() / Constants.M_SUN;
+    }
+
+    /** Whether every crossing is refined, not only the reported one. */
+    public boolean allCrossings() {
+        return allCrossings;
+    }
+
     /**
      * @param grid the grid of the run (its metallicity points and physics combinations, by the ids' indices)
      * @param catalogue every row of the run's catalogue, grid and earlier refinement rows alike
@@ -122,10 +132,6 @@ public final class TransitionRefiner {
                 if (slice.ageGyr() != 0.0) {
                     notes.get(slice).add(kind.label + " not refined: only zero-age slices can be refined");
                     continue;
-                }
-                if (!allCrossings && e.crossings().size() > 1) {
-                    notes.get(slice).add(kind.label + ": only the reported crossing is refined, the other "
-                            + (e.crossings().size() - 1) + " stay at grid resolution");
                 }
                 PhysicsOptions physics = grid.physics().combinations().get(indices[0]);
                 MetallicityPoint point = grid.metallicities().get(indices[1]);

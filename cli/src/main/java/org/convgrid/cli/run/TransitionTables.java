@@ -88,7 +88,8 @@ public final class TransitionTables {
             }
         }
         List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
-        List<TransitionRow> transitions = withNotes(finder, rows, result.notes());
+        List<TransitionRow> transitions = withNotes(finder, rows, result.notes()).stream()
+                .map(t -> refiner.allCrossings() ? t : withWideCrossings(t, refiner.toleranceMsun())).toList();
         AtomicFiles.write(dir.transitions(), out -> TransitionWriter.write(transitions, out));
         RunManifest updated = manifest.finishedAt(manifest.finished(), RunFinishing.countByStatus(rows),
                 manifest.medianSecondsPerModel());
@@ -126,6 +127,29 @@ public final class TransitionTables {
                     String.join("; ", all)));
         }
         return out;
+    }
+
+    /** A zero-age row with a remark for each transition whose other crossings are still wider than the tolerance. */
+    private static TransitionRow withWideCrossings(TransitionRow t, double toleranceMsun) {
+        if (t.slice().ageGyr() != 0.0) {
+            return t;
+        }
+        List<String> notes = new ArrayList<>();
+        if (!t.notes().isEmpty()) {
+            notes.add(t.notes());
+        }
+        wide("fully convective", t.fullyConvective(), toleranceMsun, notes);
+        wide("convective core", t.convCore(), toleranceMsun, notes);
+        return new TransitionRow(t.slice(), t.fullyConvective(), t.convCore(), t.method(), String.join("; ", notes));
+    }
+
+    private static void wide(String what, TransitionEstimate e, double toleranceMsun, List<String> notes) {
+        long wide = e.crossings().stream().filter(c -> !c.equals(e.bracket()) && c.hi() - c.lo() >= toleranceMsun)
+                .count();
+        if (wide > 0) {
+            notes.add(what + ": " + wide + " other crossing(s) wider than the tolerance, not refined "
+                    + "(--all-crossings refines them)");
+        }
     }
 
     private static void moved(String what, TransitionEstimate before, TransitionEstimate after, List<String> notes) {
