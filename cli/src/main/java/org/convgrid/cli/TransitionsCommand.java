@@ -28,7 +28,8 @@ import picocli.CommandLine.ParentCommand;
             "With --refine, each bracket of a zero-age slice wider than --tolerance is narrowed by bisection with "
                 + "new zero-age models, each seeded by homology from its converged neighbours, until it is narrower "
                 + "than the tolerance (method refined); only the crossing the table reports is refined unless "
-                + "--all-crossings is given. The new models are appended to catalogue.csv with ids "
+                + "--all-crossings is given; when new models reveal crossings between earlier masses, further "
+                + "rounds refine them (at most " + TransitionTables.MAX_ROUNDS + "). The new models are appended to catalogue.csv with ids "
                 + "p<i>-z<i>-r<n>-a<i> (r: refined, n counts per slice); slices at ages above 0 keep their grid "
                 + "brackets. A refined run cannot be resumed with 'run --resume'. Needs a finished, merged run.",
             "Exit codes: 0 done, 3 some new models failed (in the catalogue with their status; notes says where "

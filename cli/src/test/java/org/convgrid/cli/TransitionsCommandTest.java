@@ -217,6 +217,14 @@ class TransitionsCommandTest {
         // the remark depends on the catalogue alone: a plain recompute repeats it
         assertThat(h.execute("transitions", "missed").code()).isEqualTo(0);
         assertThat(transitions(dir).get(0).notes()).contains("lies outside the grid bracket 1.2-1.25 Msun");
+        // with every crossing asked for, a second round refines the crossings the first round revealed
+        assertThat(h.execute("run", grid.toString(), "--out", "every", "--quiet").code()).isEqualTo(0);
+        assertThat(h.execute("transitions", "every", "--refine", "--all-crossings").code()).isEqualTo(0);
+        TransitionRow every = transitions(work.resolve("every")).get(0);
+        assertThat(every.convCore().crossings()).hasSize(3)
+                .allSatisfy(c -> assertThat(c.hi() - c.lo()).isLessThan(0.002));
+        assertThat(every.convCore().crossings().get(0).hi()).isCloseTo(0.36, within(0.002));
+        assertThat(every.convCore().crossings().get(1).hi()).isCloseTo(0.37, within(0.002));
     }
 
     @Test

@@ -25,8 +25,8 @@ import org.convgrid.output.transitions.TransitionWriter;
 /**
  * {@code convgrid transitions}: rewrites a run directory's transitions.csv from its catalogue, after appending the
  * new models of a refinement when asked. Refinement needs a finished, unsharded run (its manifest gives the grid);
- * the new rows are appended in one go once every search has ended, then the table and the manifest's counts are
- * rewritten atomically.
+ * each round's new rows are appended in one go once all its searches have ended, then the table and the manifest's
+ * counts are rewritten atomically.
  */
 public final class TransitionTables {
 
@@ -42,6 +42,12 @@ public final class TransitionTables {
     public record Update(List<TransitionRow> transitions, List<CatalogueRow> catalogue, List<ModelOutcome> added,
                          int searches, FinishedRun finished) {
     }
+
+    /**
+     * Refinement rounds at most: a round's new models can reveal crossings between earlier masses (a structure that
+     * flickers with mass), which the next round refines; rounds stop early once one adds no model.
+     */
+    public static final int MAX_ROUNDS = 4;
 
     private TransitionTables() {
     }
@@ -78,23 +84,33 @@ public final class TransitionTables {
                     + "shards with 'convgrid merge' and refine the merged directory");
         }
         GridSpec grid = new GridFileReader().parse(manifest.gridFile(), manifest.gridText());
-        List<CatalogueRow> before = CatalogueReader.read(dir.catalogue());
-        TransitionRefiner.Result result = refiner.refine(grid, before);
-        if (!result.newModels().isEmpty()) {
+        List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
+        List<ModelOutcome> added = new ArrayList<>();
+        int searches = 0;
+        Map<Slice, List<String>> notes = Map.of();
+        for (int round = 0; round < MAX_ROUNDS; round++) {
+            TransitionRefiner.Result result = refiner.refine(grid, rows);
+            searches += result.searches();
+            notes = result.notes();
+            if (result.newModels().isEmpty()) {
+                break;
+            }
             try (CatalogueAppender sink = CatalogueAppender.open(dir.catalogue(), false)) {
                 for (ModelOutcome o : result.newModels()) {
                     sink.accept(o);
                 }
             }
+            added.addAll(result.newModels());
+            rows = CatalogueReader.read(dir.catalogue());
         }
-        List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
-        List<TransitionRow> transitions = withNotes(finder, rows, result.notes()).stream()
+        Map<Slice, List<String>> remarks = notes;
+        List<TransitionRow> transitions = withNotes(finder, rows, remarks).stream()
                 .map(t -> refiner.allCrossings() ? t : withWideCrossings(t, refiner.toleranceMsun())).toList();
         AtomicFiles.write(dir.transitions(), out -> TransitionWriter.write(transitions, out));
         RunManifest updated = manifest.finishedAt(manifest.finished(), RunFinishing.countByStatus(rows),
                 manifest.medianSecondsPerModel());
         AtomicFiles.writeString(dir.manifest(), RunManifestWriter.toYaml(updated));
-        return new Update(transitions, rows, result.newModels(), result.searches(),
+        return new Update(transitions, rows, added, searches,
                 new FinishedRun(dir.root(), grid, updated, rows, transitions));
     }
 
