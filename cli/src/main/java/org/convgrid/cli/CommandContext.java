@@ -5,14 +5,17 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.EnumSet;
+import java.util.Objects;
 import org.convgrid.cli.run.ChunkSolverFactory;
 import org.convgrid.cli.run.MapsAndReport;
 import org.convgrid.cli.run.ProductionSolvers;
 import org.convgrid.cli.run.RunFinisher;
+import org.convgrid.engine.refine.MassLineFactory;
+import org.convgrid.engine.refine.ZamsMassLines;
 import org.convgrid.plotting.style.ChartFiles;
 
 /**
- * What the commands take from the world, gathered so tests can replace it: the solver seam, the finishers run at
+ * What the commands take from the world, gathered so tests can replace it: the solver seams (grid runs, refinement), the finishers run at
  * the end of {@code run} and {@code merge}, the environment (Slurm variables), the directory relative paths are
  * resolved against, and whether the error stream is a terminal (progress redrawn in place).
  *
@@ -21,14 +24,22 @@ import org.convgrid.plotting.style.ChartFiles;
  * @param environment process environment variables
  * @param workingDirectory absolute directory that relative paths are resolved against
  * @param terminal whether progress may redraw one line in place
+ * @param lines opens the mass lines {@code transitions --refine} computes its new models on
  */
 public record CommandContext(ChunkSolverFactory solvers, List<RunFinisher> finishers, Map<String, String> environment,
-                             Path workingDirectory, boolean terminal) {
+                             Path workingDirectory, boolean terminal, MassLineFactory lines) {
 
     public CommandContext {
         finishers = List.copyOf(finishers);
         environment = Map.copyOf(environment);
         workingDirectory = workingDirectory.toAbsolutePath();
+        Objects.requireNonNull(lines, "lines");
+    }
+
+    /** A context whose refinement uses the production solver. */
+    public CommandContext(ChunkSolverFactory solvers, List<RunFinisher> finishers, Map<String, String> environment,
+                          Path workingDirectory, boolean terminal) {
+        this(solvers, finishers, environment, workingDirectory, terminal, new ZamsMassLines());
     }
 
     /** The real process: production solver, maps and report at the end, the process environment and directory. */
@@ -39,22 +50,26 @@ public record CommandContext(ChunkSolverFactory solvers, List<RunFinisher> finis
     }
 
     public CommandContext withSolvers(ChunkSolverFactory newSolvers) {
-        return new CommandContext(newSolvers, finishers, environment, workingDirectory, terminal);
+        return new CommandContext(newSolvers, finishers, environment, workingDirectory, terminal, lines);
+    }
+
+    public CommandContext withLines(MassLineFactory newLines) {
+        return new CommandContext(solvers, finishers, environment, workingDirectory, terminal, newLines);
     }
 
     /** The same context with one more finisher at the end of the list. */
     public CommandContext withFinisher(RunFinisher finisher) {
         List<RunFinisher> all = new ArrayList<>(finishers);
         all.add(finisher);
-        return new CommandContext(solvers, all, environment, workingDirectory, terminal);
+        return new CommandContext(solvers, all, environment, workingDirectory, terminal, lines);
     }
 
     public CommandContext withEnvironment(Map<String, String> newEnvironment) {
-        return new CommandContext(solvers, finishers, newEnvironment, workingDirectory, terminal);
+        return new CommandContext(solvers, finishers, newEnvironment, workingDirectory, terminal, lines);
     }
 
     public CommandContext withWorkingDirectory(Path directory) {
-        return new CommandContext(solvers, finishers, environment, directory, terminal);
+        return new CommandContext(solvers, finishers, environment, directory, terminal, lines);
     }
 
     /** A path from the command line, relative ones taken from {@link #workingDirectory}. */

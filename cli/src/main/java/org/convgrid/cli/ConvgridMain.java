@@ -16,6 +16,7 @@ import picocli.CommandLine.Option;
             PlotCommand.class,
             ProbeCommand.class,
             StarCommand.class,
+            TransitionsCommand.class,
         })
 public final class ConvgridMain implements Runnable {
 

@@ -13,6 +13,7 @@ import java.util.Set;
 import org.convgrid.engine.batch.ModelRequest;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.transitions.RefinedModelIds;
 
 /**
  * What an interrupted run left in its catalogue: the complete lines, checked to be exactly the first rows the
@@ -47,6 +48,7 @@ public record KeptCatalogue(Set<String> ids, boolean hasHeader, long droppedByte
                         + "cannot continue it");
             }
             List<CatalogueRow> rows = CatalogueReader.readCompleteLines(text);
+            refuseRefined(catalogue, rows);
             Iterator<ModelRequest> expected = plan.iterator();
             for (int i = 0; i < rows.size(); i++) {
                 String id = rows.get(i).modelId();
@@ -68,6 +70,18 @@ public record KeptCatalogue(Set<String> ids, boolean hasHeader, long droppedByte
             }
         }
         return new KeptCatalogue(Set.copyOf(ids), complete > 0, bytes.length - complete);
+    }
+
+    /**
+     * A refinement appends models after the grid's rows of a finished run, so such a catalogue is no prefix of the
+     * plan and a resume would throw the refined transitions away: refuse it, naming the way out.
+     */
+    private static void refuseRefined(Path catalogue, List<CatalogueRow> rows) {
+        rows.stream().map(CatalogueRow::modelId).filter(RefinedModelIds::isRefined).findFirst().ifPresent(id -> {
+            throw new RunSetupException(catalogue + " holds models added by 'convgrid transitions --refine' (" + id
+                    + "): a refined run is finished and cannot be resumed; recompute its tables with 'convgrid "
+                    + "transitions', or start over with --force or a new --out");
+        });
     }
 
     /** Length of the text up to and including its last line feed (UTF-8 never uses 0x0A inside a character). */

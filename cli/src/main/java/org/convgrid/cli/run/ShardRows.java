@@ -15,6 +15,7 @@ import org.convgrid.engine.batch.ModelRequest;
 import org.convgrid.grids.GridSpec;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.transitions.RefinedModelIds;
 
 /**
  * The catalogue lines of several shards, keyed by model id and kept byte for byte, then put back in grid order.
@@ -76,6 +77,13 @@ final class ShardRows {
         }
         if (!duplicates.isEmpty()) {
             problems.add(duplicates.size() + " model(s) in more than one shard: " + firstIds(duplicates));
+        }
+        List<String> refined = left.keySet().stream().filter(RefinedModelIds::isRefined).sorted()
+                .map(id -> id + " (" + origin.get(id) + ")").toList();
+        if (!refined.isEmpty()) {
+            problems.add(refined.size() + " model(s) added by 'convgrid transitions --refine': " + firstIds(refined)
+                    + "; merge unrefined shards, then refine the merged directory");
+            left.keySet().removeIf(RefinedModelIds::isRefined);
         }
         if (!left.isEmpty()) {
             List<String> strays = left.keySet().stream().sorted().map(id -> id + " (" + origin.get(id) + ")").toList();

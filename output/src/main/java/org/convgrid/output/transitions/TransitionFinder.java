@@ -20,7 +20,9 @@ import org.convgrid.output.catalogue.CatalogueRow;
  * the lowest mass with a convective core. A model has a convective core when it is not fully convective and
  * {@code core_cz_mass_frac} exceeds {@link #coreMassFractionThreshold()}. Unusable models between two usable
  * neighbours are skipped, widening the bracket; the estimate counts them. Slices come out in order of first
- * appearance, which for a catalogue in grid order is physics, then Z, then age.
+ * appearance, which for a catalogue in grid order is physics, then Z, then age. The method is {@code refined} when an
+ * end of either bracket is a model that a refinement added ({@link RefinedModelIds}), {@code grid} otherwise, so
+ * recomputing the table from a refined catalogue gives the refined answer again.
  *
  * @param coreMassFractionThreshold smallest m/M of a convective core that counts as a core, in [0, 1)
  */
@@ -77,7 +79,15 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         TransitionEstimate core = estimate(byMass, usable, r -> !hasConvectiveCore(r), false);
         describe("fully convective", fc, usable, TransitionFinder::isFullyConvective, notes);
         describe("convective core", core, usable, this::hasConvectiveCore, notes);
-        return new TransitionRow(slice, fc, core, TransitionMethod.GRID, String.join("; ", notes));
+        TransitionMethod method = endsAtRefinedModel(fc, usable) || endsAtRefinedModel(core, usable)
+                ? TransitionMethod.REFINED : TransitionMethod.GRID;
+        return new TransitionRow(slice, fc, core, method, String.join("; ", notes));
+    }
+
+    /** Whether a bracket end of the estimate is a model a refinement added. */
+    private static boolean endsAtRefinedModel(TransitionEstimate estimate, List<CatalogueRow> usable) {
+        return estimate.found() && usable.stream().anyMatch(r -> RefinedModelIds.isRefined(r.modelId())
+                && (r.massMsun() == estimate.bracket().lo() || r.massMsun() == estimate.bracket().hi()));
     }
 
     /**

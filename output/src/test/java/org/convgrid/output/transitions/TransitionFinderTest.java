@@ -92,6 +92,31 @@ class TransitionFinderTest {
     }
 
     @Test
+    void aFailedModelBetweenNeighboursOfOneStateIsNoCrossing() {
+        List<CatalogueRow> rows = List.of(ok(0.2, FC, 1), failedAt(0.25), ok(0.3, FC, 1), ok(0.4, ENV, 0),
+                failedAt(0.45));
+        TransitionRow t = finder.find(rows).get(0);
+        assertThat(t.fullyConvective().crossings()).containsExactly(new Span(0.3, 0.4));
+        assertThat(t.fullyConvective().skippedInBracket()).isZero();
+        assertThat(t.notes()).doesNotContain("widened");
+    }
+
+    @Test
+    void theMethodIsRefinedWhenABracketEndIsARefinementModel() {
+        CatalogueRow refinedEnd = new CatalogueRow("p0-z00-r003-a00", 0.3125, 0.02, 0.27, 1.8, 0.0, 0.0,
+                ModelStatus.OK, "", Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN,
+                Double.NaN, ENV, 0, 0.5, 0.7, Double.NaN, Double.NaN, List.of(), 5,
+                StabilityCriterion.SCHWARZSCHILD, 1.0, Double.NaN);
+        List<CatalogueRow> grid = List.of(ok(0.3, FC, 1), ok(0.4, ENV, 0), ok(1.0, ENV, 0), ok(1.2, BOTH, 0.05));
+        assertThat(finder.find(grid).get(0).method()).isEqualTo(TransitionMethod.GRID);
+        List<CatalogueRow> refined = new ArrayList<>(grid);
+        refined.add(refinedEnd);
+        TransitionRow t = finder.find(refined).get(0);
+        assertThat(t.fullyConvective().bracket()).isEqualTo(new Span(0.3, 0.3125));
+        assertThat(t.method()).isEqualTo(TransitionMethod.REFINED);
+    }
+
+    @Test
     void tinyCoresBelowTheThresholdDoNotCount() {
         List<CatalogueRow> rows = List.of(ok(1.0, ENV, 0), ok(1.1, BOTH, 5e-4), ok(1.2, BOTH, 0.02));
         assertThat(finder.find(rows).get(0).convCore().massMsun()).isEqualTo(1.2);

@@ -1,0 +1,108 @@
+package org.convgrid.cli;
+
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import org.convgrid.cli.run.Durations;
+import org.convgrid.cli.run.RunDirectory;
+import org.convgrid.cli.run.RunFinishing;
+import org.convgrid.cli.run.TransitionRefiner;
+import org.convgrid.cli.run.TransitionTables;
+import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.output.transitions.TransitionFinder;
+import org.convgrid.output.transitions.TransitionMethod;
+import org.convgrid.output.transitions.TransitionRow;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.ParentCommand;
+
+/** {@code convgrid transitions RUN_DIR [--refine]}: the transition masses of a run, refined on request. */
+@Command(name = "transitions", mixinStandardHelpOptions = true,
+        description = {"Rewrite RUN_DIR/transitions.csv from its catalogue: per (Z, age, physics) slice the highest "
+                + "fully convective mass and the lowest mass with a convective core, each with the two masses that "
+                + "bracket it (method grid).",
+            "A convective core is a central convective zone whose top lies above --core-threshold of the mass; "
+                + "the convective criterion is the one the run used. When the structure is not monotonic in mass "
+                + "every crossing is listed (*_crossings columns) and notes says so; the limit is the highest "
+                + "crossing out of fully convective, the onset the lowest crossing into a core.",
+            "With --refine, each bracket of a zero-age slice wider than --tolerance is narrowed by bisection with "
+                + "new zero-age models, each seeded by homology from its converged neighbours, until it is narrower "
+                + "than the tolerance (method refined); only the crossing the table reports is refined unless "
+                + "--all-crossings is given; when new models reveal crossings between earlier masses, further "
+                + "rounds refine them (at most " + TransitionTables.MAX_ROUNDS + "). The new models are appended to catalogue.csv with ids "
+                + "p<i>-z<i>-r<n>-a<i> (r: refined, n counts per slice); slices at ages above 0 keep their grid "
+                + "brackets. A refined run cannot be resumed with 'run --resume'. Needs a finished, merged run.",
+            "Exit codes: 0 done, 3 some new models failed (in the catalogue with their status; notes says where "
+                + "a bisection stopped), 2 bad usage or not a run directory, 1 I/O or software failure."})
+final class TransitionsCommand implements Callable<Integer> {
+
+    /** Default width below which a refined bracket stops, solar masses. */
+    static final double DEFAULT_TOLERANCE_MSUN = 0.002;
+
+    @ParentCommand
+    ConvgridMain parent;
+
+    @Parameters(index = "0", paramLabel = "RUN_DIR", description = "A run directory (holds catalogue.csv).")
+    Path runDirectory;
+
+    @Option(names = "--refine", description = "Narrow the brackets by bisection with new zero-age models.")
+    boolean refine;
+
+    @Option(names = "--tolerance", paramLabel = "MSUN", description = "With --refine: stop when a bracket is "
+            + "narrower than this (solar masses; default: " + DEFAULT_TOLERANCE_MSUN + ").")
+    double tolerance = DEFAULT_TOLERANCE_MSUN;
+
+    @Option(names = "--core-threshold", paramLabel = "FRACTION", description = "Smallest convective core that "
+            + "counts, as the mass fraction m/M at its top (fraction of the stellar mass, in [0, 1); default: "
+            + TransitionFinder.DEFAULT_CORE_MASS_FRACTION_THRESHOLD + ").")
+    double coreThreshold = TransitionFinder.DEFAULT_CORE_MASS_FRACTION_THRESHOLD;
+
+    @Option(names = "--all-crossings", description = "With --refine: when a slice's structure changes back and forth "
+            + "with mass, refine every crossing, not only the one the table reports (more models).")
+    boolean allCrossings;
+
+    @Option(names = "--threads", paramLabel = "N",
+            description = "With --refine: bisections run at once (count; default: available processors).")
+    Integer threads;
+
+    @Override
+    public Integer call() throws Exception {
+        CommandContext context = parent.context();
+        if (!(tolerance > 0.0 && Double.isFinite(tolerance))) {
+            throw new UsageException("--tolerance must be a positive mass in Msun, got " + tolerance);
+        }
+        if (!(coreThreshold >= 0.0 && coreThreshold < 1.0)) {
+            throw new UsageException("--core-threshold must be a mass fraction in [0, 1), got " + coreThreshold);
+        }
+        int n = RunCommand.threads(threads);
+        RunDirectory dir = new RunDirectory(context.resolve(runDirectory));
+        TransitionFinder finder = new TransitionFinder(coreThreshold);
+        long start = System.nanoTime();
+        TransitionTables.Update update = refine
+                ? TransitionTables.refine(dir, finder, new TransitionRefiner(context.lines(), finder, tolerance, n,
+                        allCrossings))
+                : TransitionTables.recompute(dir, finder);
+        if (update.finished() != null) {
+            RunFinishing.callFinishers(update.finished(), context.finishers());
+        }
+        long refined = update.transitions().stream().filter(t -> t.method() == TransitionMethod.REFINED).count();
+        long failed = update.added().stream().filter(o -> o.status() != ModelStatus.OK).count();
+        StringBuilder line = new StringBuilder(dir.transitions() + ": " + update.transitions().size() + " slice(s)");
+        if (refine) {
+            line.append(", ").append(refined).append(" refined; ").append(update.searches()).append(" bisection(s), ")
+                    .append(update.added().size()).append(" new model(s) in ").append(RunDirectory.CATALOGUE)
+                    .append(failed > 0 ? " (" + failed + " not ok)" : "").append(" in ")
+                    .append(Durations.describe((System.nanoTime() - start) * 1e-9));
+        }
+        parent.out().println(line);
+        parent.out().flush();
+        for (TransitionRow t : update.transitions()) {
+            if (!t.notes().isEmpty() && refine) {
+                parent.err().println("convgrid: Z = " + t.slice().zInit() + ", age " + t.slice().ageGyr() + " Gyr: "
+                        + t.notes());
+            }
+        }
+        parent.err().flush();
+        return failed > 0 ? ExitCodes.SOME_MODELS_FAILED : ExitCodes.OK;
+    }
+}

@@ -1,0 +1,275 @@
+package org.convgrid.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.io.StringReader;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Set;
+import org.convgrid.output.catalogue.CatalogueReader;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.manifest.RunManifestReader;
+import org.convgrid.output.transitions.RefinedModelIds;
+import org.convgrid.output.transitions.TransitionMethod;
+import org.convgrid.output.transitions.TransitionReader;
+import org.convgrid.output.transitions.TransitionRow;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** {@code convgrid transitions} on runs of the fake solver (edges at 0.375 and 1.225 Msun, grid step 0.05 Msun). */
+class TransitionsCommandTest {
+
+    private static final double FC_EDGE = 0.375;
+    private static final double CORE_EDGE = 1.225;
+
+    @TempDir
+    Path work;
+
+    private CliHarness harness(FakeMassLines lines) {
+        CliHarness plain = CliHarness.in(work, FakeChunkSolver.fast());
+        return plain.with(plain.context().withLines(lines));
+    }
+
+    private Path finishedRun(String name) throws Exception {
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        assertThat(harness(new FakeMassLines(Set.of())).execute("run", grid.toString(), "--out", name, "--quiet")
+                .code()).isEqualTo(0);
+        return work.resolve(name);
+    }
+
+    private static List<TransitionRow> transitions(Path dir) throws Exception {
+        return TransitionReader.read(new StringReader(Files.readString(dir.resolve("transitions.csv"))));
+    }
+
+    @Test
+    void withoutRefineTheTableIsRecomputedFromTheCatalogueAlone() throws Exception {
+        Path dir = finishedRun("plain");
+        byte[] written = Files.readAllBytes(dir.resolve("transitions.csv"));
+        Files.delete(dir.resolve("transitions.csv"));
+        FakeMassLines lines = new FakeMassLines(Set.of());
+        CliHarness.Execution done = harness(lines).execute("transitions", "plain");
+        assertThat(done.code()).isEqualTo(0);
+        assertThat(Files.readAllBytes(dir.resolve("transitions.csv"))).isEqualTo(written);
+        assertThat(lines.solved.get()).isZero();
+        CliHarness.Execution loose = harness(lines).execute("transitions", "plain", "--core-threshold", "0.2");
+        assertThat(loose.code()).isEqualTo(0);
+        // the fake's cores reach m/M = 0.2 only at 3.5 Msun, beyond the grid
+        assertThat(transitions(dir).get(0).convCore().found()).isFalse();
+    }
+
+    @Test
+    void refinementNarrowsZeroAgeBracketsBelowTheToleranceInsideTheGridBrackets() throws Exception {
+        Path dir = finishedRun("refined");
+        List<TransitionRow> grid = transitions(dir);
+        byte[] gridCatalogue = Files.readAllBytes(dir.resolve("catalogue.csv"));
+        CliHarness.Execution done = harness(new FakeMassLines(Set.of())).execute("transitions", "refined",
+                "--refine", "--tolerance", "0.002", "--threads", "2");
+        assertThat(done.code()).as(done.err()).isEqualTo(0);
+        List<TransitionRow> refined = transitions(dir);
+        assertThat(refined).hasSize(grid.size());
+        for (int i = 0; i < refined.size(); i++) {
+            TransitionRow r = refined.get(i);
+            TransitionRow g = grid.get(i);
+            if (r.slice().ageGyr() != 0.0) {
+                assertThat(r).usingRecursiveComparison().ignoringFields("notes").isEqualTo(g);
+                assertThat(r.notes()).contains("not refined: only zero-age slices can be refined");
+                continue;
+            }
+            assertThat(r.method()).isEqualTo(TransitionMethod.REFINED);
+            assertThat(r.fullyConvective().bracket().hi() - r.fullyConvective().bracket().lo()).isLessThan(0.002);
+            assertThat(r.fullyConvective().massMsun()).isLessThan(FC_EDGE).isGreaterThan(FC_EDGE - 0.002)
+                    .isBetween(g.fullyConvective().bracket().lo(), g.fullyConvective().bracket().hi());
+            assertThat(r.convCore().bracket().hi() - r.convCore().bracket().lo()).isLessThan(0.002);
+            assertThat(r.convCore().massMsun()).isGreaterThanOrEqualTo(CORE_EDGE).isLessThan(CORE_EDGE + 0.002)
+                    .isBetween(g.convCore().bracket().lo(), g.convCore().bracket().hi());
+        }
+        // the grid rows stay as they were; the new rows follow them, slice by slice in increasing mass
+        byte[] now = Files.readAllBytes(dir.resolve("catalogue.csv"));
+        assertThat(java.util.Arrays.copyOf(now, gridCatalogue.length)).isEqualTo(gridCatalogue);
+        List<CatalogueRow> added = CatalogueReader.read(dir.resolve("catalogue.csv")).stream()
+                .filter(r -> RefinedModelIds.isRefined(r.modelId())).toList();
+        // 0.05 Msun -> below 0.002 Msun takes 5 halvings, per transition and metallicity
+        assertThat(added).hasSize(2 * 2 * 5);
+        assertThat(added.get(0).modelId()).isEqualTo("p0-z00-r000-a00");
+        assertThat(added.get(9).modelId()).isEqualTo("p0-z00-r009-a00");
+        assertThat(added.get(10).modelId()).isEqualTo("p0-z01-r000-a00");
+        assertThat(added.subList(0, 10)).extracting(CatalogueRow::massMsun).isSorted();
+        assertThat(RunManifestReader.read(Files.readString(dir.resolve("manifest.yaml"))).total())
+                .isEqualTo(CliHarness.GRID_MODELS + added.size());
+        assertThat(done.out()).contains("2 refined; 4 bisection(s), 20 new model(s)");
+    }
+
+    @Test
+    void refiningTwiceKeepsTheAnswerAndAFinerToleranceContinuesTheIds() throws Exception {
+        Path dir = finishedRun("twice");
+        FakeMassLines lines = new FakeMassLines(Set.of());
+        assertThat(harness(lines).execute("transitions", "twice", "--refine").code()).isEqualTo(0);
+        byte[] catalogue = Files.readAllBytes(dir.resolve("catalogue.csv"));
+        byte[] table = Files.readAllBytes(dir.resolve("transitions.csv"));
+        List<TransitionRow> first = transitions(dir);
+        int solved = lines.solved.get();
+        assertThat(harness(lines).execute("transitions", "twice", "--refine").code()).isEqualTo(0);
+        assertThat(lines.solved.get()).isEqualTo(solved);
+        assertThat(Files.readAllBytes(dir.resolve("catalogue.csv"))).isEqualTo(catalogue);
+        assertThat(Files.readAllBytes(dir.resolve("transitions.csv"))).isEqualTo(table);
+
+        assertThat(harness(lines).execute("transitions", "twice", "--refine", "--tolerance", "0.0005").code())
+                .isEqualTo(0);
+        List<TransitionRow> finer = transitions(dir);
+        assertThat(finer.get(0).fullyConvective().massMsun())
+                .isCloseTo(first.get(0).fullyConvective().massMsun(), within(0.002));
+        assertThat(finer.get(0).convCore().massMsun()).isCloseTo(first.get(0).convCore().massMsun(), within(0.002));
+        assertThat(CatalogueReader.read(dir.resolve("catalogue.csv")).stream().map(CatalogueRow::modelId))
+                .contains("p0-z00-r010-a00").doesNotHaveDuplicates();
+        // a plain recompute of a refined catalogue gives the refined answer again
+        assertThat(harness(lines).execute("transitions", "twice").code()).isEqualTo(0);
+        assertThat(transitions(dir)).usingRecursiveFieldByFieldElementComparatorIgnoringFields("notes")
+                .isEqualTo(finer);
+    }
+
+    @Test
+    void theResultDoesNotDependOnTheThreadCount() throws Exception {
+        finishedRun("one");
+        finishedRun("two");
+        assertThat(harness(new FakeMassLines(Set.of())).execute("transitions", "one", "--refine", "--threads", "1")
+                .code()).isEqualTo(0);
+        assertThat(harness(new FakeMassLines(Set.of())).execute("transitions", "two", "--refine", "--threads", "3")
+                .code()).isEqualTo(0);
+        for (String file : List.of("catalogue.csv", "transitions.csv")) {
+            assertThat(Files.readAllBytes(work.resolve("two").resolve(file)))
+                    .isEqualTo(Files.readAllBytes(work.resolve("one").resolve(file)));
+        }
+    }
+
+    @Test
+    void aFailedNewModelStopsItsBisectionSaysWhereAndExitsThree() throws Exception {
+        Path dir = finishedRun("failing");
+        // the first midpoint of the fully convective bracket 0.35-0.4
+        CliHarness.Execution done = harness(new FakeMassLines(Set.of(0.375))).execute("transitions", "failing",
+                "--refine");
+        assertThat(done.code()).isEqualTo(3);
+        TransitionRow z0 = transitions(dir).get(0);
+        assertThat(z0.fullyConvective().bracket().lo()).isEqualTo(0.35);
+        assertThat(z0.fullyConvective().bracket().hi()).isEqualTo(0.4);
+        assertThat(z0.fullyConvective().skippedInBracket()).isEqualTo(1);
+        assertThat(z0.notes()).contains("fully convective refinement stopped at a bracket of 0.05 Msun: the model "
+                + "at 0.375 Msun failed (fake line gave up)");
+        assertThat(z0.method()).isEqualTo(TransitionMethod.REFINED);
+        assertThat(done.err()).contains("the model at 0.375 Msun failed");
+        // again: the known failure is neither recomputed nor appended twice, and the table says the same
+        byte[] catalogue = Files.readAllBytes(dir.resolve("catalogue.csv"));
+        byte[] table = Files.readAllBytes(dir.resolve("transitions.csv"));
+        FakeMassLines lines = new FakeMassLines(Set.of(0.375));
+        assertThat(harness(lines).execute("transitions", "failing", "--refine").code()).isEqualTo(0);
+        assertThat(Files.readAllBytes(dir.resolve("catalogue.csv"))).isEqualTo(catalogue);
+        assertThat(Files.readAllBytes(dir.resolve("transitions.csv"))).isEqualTo(table);
+    }
+
+    @Test
+    void everyCrossingOfAFlickeringSliceCanBeRefined() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        FlickeringFake fake = new FlickeringFake();
+        CliHarness h = CliHarness.in(work, FakeChunkSolver.fast());
+        h = h.with(h.context().withSolvers(g -> fake).withLines(fake));
+        assertThat(h.execute("run", grid.toString(), "--out", "flicker", "--quiet").code()).isEqualTo(0);
+        Path dir = work.resolve("flicker");
+        TransitionRow before = transitions(dir).get(0);
+        assertThat(before.convCore().crossings()).hasSize(3);
+        assertThat(before.convCore().bracket().hi()).isEqualTo(0.45);
+        // a copy refined at the reported crossings only says which crossings stay wide
+        CliHarness.Execution copy = h.execute("run", grid.toString(), "--out", "reported", "--quiet");
+        assertThat(copy.code()).isEqualTo(0);
+        assertThat(h.execute("transitions", "reported", "--refine").code()).isEqualTo(0);
+        assertThat(transitions(work.resolve("reported")).get(0).notes()).contains("convective core: 2 other "
+                + "crossing(s) wider than the tolerance, not refined (--all-crossings refines them)");
+
+        assertThat(h.execute("transitions", "flicker", "--refine", "--all-crossings").code()).isEqualTo(0);
+        TransitionRow z0 = transitions(dir).get(0);
+        List<Double> edges = List.of(FlickeringFake.WINDOW_LO, FlickeringFake.WINDOW_HI, FlickeringFake.CORE_EDGE);
+        assertThat(z0.convCore().crossings()).hasSize(3);
+        for (int i = 0; i < 3; i++) {
+            double lo = z0.convCore().crossings().get(i).lo();
+            double hi = z0.convCore().crossings().get(i).hi();
+            assertThat(hi - lo).isLessThan(0.002);
+            assertThat(edges.get(i)).isGreaterThan(lo).isLessThanOrEqualTo(hi);
+        }
+        assertThat(z0.convCore().massMsun()).isCloseTo(FlickeringFake.WINDOW_LO, within(0.002));
+        assertThat(z0.notes()).contains("convective core changes 3 times with mass")
+                .doesNotContain("other crossing(s)");
+    }
+
+    @Test
+    void aCrossingTheGridMissedIsReportedAndSaidToLieOutsideTheGridBracket() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        // a core window between grid masses, found by the bisection of the fully convective limit 0.35-0.4
+        FlickeringFake fake = new FlickeringFake(0.355, 0.36, 0.37);
+        CliHarness h = CliHarness.in(work, FakeChunkSolver.fast());
+        h = h.with(h.context().withSolvers(g -> fake).withLines(fake));
+        assertThat(h.execute("run", grid.toString(), "--out", "missed", "--quiet").code()).isEqualTo(0);
+        Path dir = work.resolve("missed");
+        assertThat(transitions(dir).get(0).convCore().bracket().lo()).isEqualTo(1.2);
+        assertThat(h.execute("transitions", "missed", "--refine").code()).isEqualTo(0);
+        TransitionRow z0 = transitions(dir).get(0);
+        assertThat(z0.convCore().massMsun()).isBetween(0.36, 0.37);
+        assertThat(z0.notes()).contains("convective core onset lies outside the grid bracket 1.2-1.25 Msun");
+        // the remark depends on the catalogue alone: a plain recompute repeats it
+        assertThat(h.execute("transitions", "missed").code()).isEqualTo(0);
+        assertThat(transitions(dir).get(0).notes()).contains("lies outside the grid bracket 1.2-1.25 Msun");
+        // with every crossing asked for, a second round refines the crossings the first round revealed
+        assertThat(h.execute("run", grid.toString(), "--out", "every", "--quiet").code()).isEqualTo(0);
+        assertThat(h.execute("transitions", "every", "--refine", "--all-crossings").code()).isEqualTo(0);
+        TransitionRow every = transitions(work.resolve("every")).get(0);
+        assertThat(every.convCore().crossings()).hasSize(3)
+                .allSatisfy(c -> assertThat(c.hi() - c.lo()).isLessThan(0.002));
+        assertThat(every.convCore().crossings().get(0).hi()).isCloseTo(0.36, within(0.002));
+        assertThat(every.convCore().crossings().get(1).hi()).isCloseTo(0.37, within(0.002));
+    }
+
+    @Test
+    void aRefinedRunRefusesResumeAndMerge() throws Exception {
+        Path dir = finishedRun("done");
+        assertThat(harness(new FakeMassLines(Set.of())).execute("transitions", "done", "--refine").code())
+                .isEqualTo(0);
+        byte[] catalogue = Files.readAllBytes(dir.resolve("catalogue.csv"));
+        CliHarness.Execution resumed = harness(new FakeMassLines(Set.of())).execute("run",
+                work.resolve("survey.yaml").toString(), "--out", "done", "--resume", "--quiet");
+        assertThat(resumed.code()).isEqualTo(2);
+        assertThat(resumed.err()).contains("holds models added by 'convgrid transitions --refine'")
+                .contains("cannot be resumed");
+        assertThat(Files.readAllBytes(dir.resolve("catalogue.csv"))).isEqualTo(catalogue);
+        CliHarness.Execution merged = harness(new FakeMassLines(Set.of())).execute("merge", "done", "--out", "m");
+        assertThat(merged.code()).isEqualTo(2);
+        assertThat(merged.err()).contains("20 model(s) added by 'convgrid transitions --refine'");
+    }
+
+    @Test
+    void refusesShardsAndUnfinishedRunsAndBadOptions() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        FakeMassLines lines = new FakeMassLines(Set.of());
+        assertThat(harness(lines).execute("run", grid.toString(), "--shard", "1/2", "--out", "s1", "--quiet").code())
+                .isEqualTo(0);
+        CliHarness.Execution shard = harness(lines).execute("transitions", "s1", "--refine");
+        assertThat(shard.code()).isEqualTo(2);
+        assertThat(shard.err()).contains("holds shard 1/2").contains("convgrid merge");
+        Path dir = finishedRun("open");
+        Files.writeString(dir.resolve("manifest.yaml"), Files.readString(dir.resolve("manifest.yaml"))
+                .replaceFirst("finished: .*", "finished: null"));
+        assertThat(harness(lines).execute("transitions", "open", "--refine").err()).contains("has not finished");
+        assertThat(harness(lines).execute("transitions", "open", "--refine", "--tolerance", "0").code())
+                .isEqualTo(2);
+        assertThat(harness(lines).execute("transitions", "open", "--core-threshold", "1").code()).isEqualTo(2);
+        assertThat(harness(lines).execute("transitions", "nowhere").code()).isEqualTo(2);
+        assertThat(lines.solved.get()).isZero();
+    }
+
+    @Test
+    void helpStatesUnitsAndDefinitions() {
+        String help = harness(new FakeMassLines(Set.of())).execute("transitions", "--help").out()
+                .replaceAll("\\s+", " ");
+        assertThat(help).contains("--tolerance=MSUN", "solar masses", "0.002", "--core-threshold", "0.001",
+                "mass fraction m/M", "criterion is the one the run used", "every crossing is listed",
+                "p<i>-z<i>-r<n>-a<i>", "zero-age", "refine every crossing");
+    }
+}

@@ -1,0 +1,136 @@
+package org.convgrid.engine.refine;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+import java.util.function.DoubleUnaryOperator;
+import java.util.function.Predicate;
+import org.convgrid.engine.batch.ModelOutcome;
+import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.convection.ConvectiveStructure;
+import org.convgrid.engine.convection.ConvectiveZone;
+import org.convgrid.engine.convection.StructureClass;
+import org.convgrid.engine.units.Constants;
+import org.junit.jupiter.api.Test;
+
+/** The bisection's logic on a made-up line (fully convective below a chosen mass); no physics. */
+class MassBisectionTest {
+
+    private static final double MSUN = Constants.M_SUN;
+    private static final double EDGE = 0.3456789 * MSUN;
+    private static final Predicate<ModelOutcome> FULLY_CONVECTIVE =
+            o -> o.convection().structureClass() == StructureClass.FULLY_CONVECTIVE;
+
+    /** A line that is fully convective below {@code edge}, fails at the listed masses and records every request. */
+    static final class StepLine implements MassLine {
+        final List<Double> asked = new ArrayList<>();
+        private final double edge;
+        private final Set<Double> failing;
+
+        StepLine(double edge, Set<Double> failing) {
+            this.edge = edge;
+            this.failing = failing;
+        }
+
+        @Override
+        public ModelOutcome solve(ModelRequest r) {
+            asked.add(r.mass());
+            if (failing.contains(r.mass())) {
+                return new ModelOutcome(r, ModelStatus.NOT_CONVERGED, "gave up\nat shell 3", null, null, 40);
+            }
+            boolean fc = r.mass() < edge;
+            ConvectiveStructure c = new ConvectiveStructure(List.of(new ConvectiveZone(fc ? 0 : 0.6, 1, 0, 1)),
+                    fc ? StructureClass.FULLY_CONVECTIVE : StructureClass.CONV_ENVELOPE, fc ? 1 : 0, fc ? 0 : 0.6,
+                    0.7, 0.4 * r.mass(), 1, 1);
+            return new ModelOutcome(r, ModelStatus.OK, "", null, c, 5);
+        }
+    }
+
+    private static ModelRequest request(double mass) {
+        return new ModelRequest("x", mass, 0.02, 0.28, 0.0, PhysicsOptions.DEFAULT);
+    }
+
+    private static Refinement refine(StepLine line, double tolerance, double lo, double hi) {
+        return new MassBisection(tolerance, DoubleUnaryOperator.identity())
+                .refine(line, MassBisectionTest::request, lo, hi, FULLY_CONVECTIVE);
+    }
+
+    @Test
+    void endsNarrowerThanTheToleranceAroundTheEdgeAndInsideTheGridBracket() {
+        StepLine line = new StepLine(EDGE, Set.of());
+        double tolerance = 0.002 * MSUN;
+        Refinement r = refine(line, tolerance, 0.30 * MSUN, 0.40 * MSUN);
+        assertThat(r.narrowEnough()).isTrue();
+        assertThat(r.width()).isLessThan(tolerance);
+        assertThat(r.lowMass()).isLessThan(EDGE).isGreaterThanOrEqualTo(0.30 * MSUN);
+        assertThat(r.highMass()).isGreaterThanOrEqualTo(EDGE).isLessThanOrEqualTo(0.40 * MSUN);
+        // 0.1 -> 0.05 -> ... -> 0.0015625 Msun: six halvings, the least that get below 0.002
+        assertThat(r.newModels()).hasSize(6);
+        // the ends first (lower, upper), so each midpoint has converged neighbours on both sides
+        assertThat(line.asked.subList(0, 3)).containsExactly(0.30 * MSUN, 0.40 * MSUN, 0.5 * (0.30 * MSUN + 0.40 * MSUN));
+    }
+
+    @Test
+    void refiningTheRefinedBracketAgainAddsNothing() {
+        double tolerance = 0.002 * MSUN;
+        Refinement first = refine(new StepLine(EDGE, Set.of()), tolerance, 0.30 * MSUN, 0.40 * MSUN);
+        Refinement again = refine(new StepLine(EDGE, Set.of()), tolerance, first.lowMass(), first.highMass());
+        assertThat(again.newModels()).isEmpty();
+        assertThat(again.lowMass()).isEqualTo(first.lowMass());
+        assertThat(again.highMass()).isEqualTo(first.highMass());
+    }
+
+    @Test
+    void aFailedMidpointStopsWithTheBracketAsItWasBeforeIt() {
+        double first = 0.5 * (0.30 * MSUN + 0.40 * MSUN);
+        double second = 0.5 * (0.30 * MSUN + first);
+        StepLine line = new StepLine(EDGE, Set.of(second));
+        Refinement r = refine(line, 0.002 * MSUN, 0.30 * MSUN, 0.40 * MSUN);
+        assertThat(r.stop()).isEqualTo(BisectionStop.MODEL_NOT_USABLE);
+        assertThat(r.stoppedAt()).isEqualTo(second);
+        assertThat(r.detail()).contains("gave up");
+        assertThat(r.lowMass()).isEqualTo(0.30 * MSUN);
+        assertThat(r.highMass()).isEqualTo(first);
+        assertThat(r.newModels()).extracting(ModelOutcome::status).containsExactly(ModelStatus.OK,
+                ModelStatus.NOT_CONVERGED);
+    }
+
+    @Test
+    void endsThatCannotBeRecomputedOrSitOnTheWrongSideStopBeforeAnyNewModel() {
+        Refinement failedEnd = refine(new StepLine(EDGE, Set.of(0.40 * MSUN)), 0.002 * MSUN, 0.30 * MSUN,
+                0.40 * MSUN);
+        assertThat(failedEnd.stop()).isEqualTo(BisectionStop.END_NOT_USABLE);
+        assertThat(failedEnd.stoppedAt()).isEqualTo(0.40 * MSUN);
+        assertThat(failedEnd.newModels()).isEmpty();
+        Refinement wrongSide = refine(new StepLine(0.29 * MSUN, Set.of()), 0.002 * MSUN, 0.30 * MSUN, 0.40 * MSUN);
+        assertThat(wrongSide.stop()).isEqualTo(BisectionStop.END_DISAGREES);
+        assertThat(wrongSide.stoppedAt()).isEqualTo(0.30 * MSUN);
+        assertThat(wrongSide.newModels()).isEmpty();
+    }
+
+    @Test
+    void midpointsAreRoundedToRepresentableMassesAndStopWhenNoneIsLeft() {
+        double quantum = 0.01 * MSUN;
+        DoubleUnaryOperator coarse = m -> Math.round(m / quantum) * quantum;
+        StepLine line = new StepLine(EDGE, Set.of());
+        Refinement r = new MassBisection(1e-6 * MSUN, coarse).refine(line, MassBisectionTest::request, 0.30 * MSUN,
+                0.40 * MSUN, FULLY_CONVECTIVE);
+        assertThat(r.stop()).isEqualTo(BisectionStop.RESOLUTION);
+        assertThat(r.width()).isEqualTo(quantum, org.assertj.core.data.Offset.offset(1e-9 * quantum));
+        assertThat(line.asked).allSatisfy(m -> assertThat(m / quantum).isCloseTo(Math.rint(m / quantum),
+                org.assertj.core.data.Offset.offset(1e-9)));
+    }
+
+    @Test
+    void refusesEmptyBracketsAndNonPositiveTolerances() {
+        assertThatThrownBy(() -> new MassBisection(0.0, DoubleUnaryOperator.identity()))
+                .isInstanceOf(IllegalArgumentException.class);
+        assertThatThrownBy(() -> refine(new StepLine(EDGE, Set.of()), 1.0, 0.4 * MSUN, 0.3 * MSUN))
+                .isInstanceOf(IllegalArgumentException.class);
+    }
+}

@@ -1,0 +1,48 @@
+package org.convgrid.engine.refine;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.util.function.DoubleUnaryOperator;
+import java.util.function.Predicate;
+import org.convgrid.engine.batch.ModelOutcome;
+import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.units.Constants;
+import org.junit.jupiter.api.Test;
+
+/**
+ * One small real refinement with the production solver: the convective-core onset of a metal-poor zero-age line
+ * between 1.0 and 1.1 Msun. A contract test of the bisection on real models (bracket, sides, seeding order), not a
+ * check of the onset mass against the literature.
+ */
+class ZamsMassLinesTest {
+
+    private static final double MSUN = Constants.M_SUN;
+    private static final double Z = 1.0e-4;
+    private static final double Y = 0.2485 + 1.5 * Z;
+    /** The finder's default core threshold (m/M at the core's top). */
+    private static final double CORE_THRESHOLD = 1.0e-3;
+
+    @Test
+    void narrowsTheCoreOnsetBracketWithConvergedSeededModels() {
+        Predicate<ModelOutcome> noCore = o -> !(o.convection().coreMassFraction() > CORE_THRESHOLD);
+        MassLine line = new ZamsMassLines().open(PhysicsOptions.DEFAULT, Z, Y);
+        double tolerance = 0.03 * MSUN;
+        Refinement r = new MassBisection(tolerance, DoubleUnaryOperator.identity()).refine(line,
+                m -> new ModelRequest("r", m, Z, Y, 0.0, PhysicsOptions.DEFAULT), 1.0 * MSUN, 1.1 * MSUN, noCore);
+        assertThat(r.stop()).as(r.detail()).isEqualTo(BisectionStop.NARROW_ENOUGH);
+        assertThat(r.width()).isLessThan(tolerance);
+        assertThat(r.lowMass()).isGreaterThanOrEqualTo(1.0 * MSUN);
+        assertThat(r.highMass()).isLessThanOrEqualTo(1.1 * MSUN);
+        // 0.1 -> 0.05 -> 0.025 Msun: two midpoints
+        assertThat(r.newModels()).hasSize(2).allSatisfy(o -> assertThat(o.status()).isEqualTo(ModelStatus.OK));
+        for (ModelOutcome o : r.newModels()) {
+            double m = o.request().mass();
+            assertThat(noCore.test(o)).isEqualTo(m <= r.lowMass());
+        }
+        // a request at an age above zero is refused, not evolved
+        ModelOutcome aged = line.solve(new ModelRequest("a", MSUN, Z, Y, Constants.GYR, PhysicsOptions.DEFAULT));
+        assertThat(aged.status()).isEqualTo(ModelStatus.FAILED);
+    }
+}
