@@ -121,6 +121,8 @@ public final class MainSequenceEvolver {
         double exhaustion = Double.NaN;
         double lastXc = current.global().centralHydrogen();
         int spent = 0;
+        StellarModel before = null;
+        double previousStep = 0.0;
         for (int accepted = 0; end == null; ) {
             double xc = current.global().centralHydrogen();
             if (xc < settings.endCentralHydrogen()) {
@@ -145,7 +147,7 @@ public final class MainSequenceEvolver {
             }
             StellarModel trial;
             try {
-                trial = advance(current, h);
+                trial = advance(current, before, previousStep, h);
             } catch (ConvgridException e) {
                 if (e instanceof SolveFailedException f) {
                     spent += f.report().iterations();
@@ -169,6 +171,8 @@ public final class MainSequenceEvolver {
             accepted++;
             age = landing ? sorted[next] : age + h;
             lastXc = xc;
+            before = current;
+            previousStep = h;
             current = trial;
             steps.add(summary(current, age, h, current.report().iterations() + spent));
             spent = 0;
@@ -188,15 +192,32 @@ public final class MainSequenceEvolver {
                 end == EvolutionResult.EndReason.FAILED ? detail : "");
     }
 
-    /** One step of length dt from {@code previous}. */
-    private StellarModel advance(StellarModel previous, double dt) {
-        StepStart start = planner.needsRemesh(previous, compositionCost(previous))
-                ? StepStart.remeshed(previous, planner, compositionCost(previous), physics)
-                : StepStart.of(previous);
+    /**
+     * One step of length dt from {@code previous}. The network runs at the density and temperature of the
+     * middle of the step, extrapolated linearly in ln rho and ln T from the previous two models when they share
+     * a mesh (which makes the operator split second order in time), else at the previous model's.
+     *
+     * @param older the model before {@code previous}, or null
+     * @param olderStep the step from {@code older} to {@code previous}, s
+     */
+    private StellarModel advance(StellarModel previous, StellarModel older, double olderStep, double dt) {
+        double[] cost = compositionCost(previous);
+        boolean remesh = planner.needsRemesh(previous, cost);
+        StepStart start = remesh ? StepStart.remeshed(previous, planner, cost, physics) : StepStart.of(previous);
         int n = start.state().size();
+        double[] rho = start.density().clone();
+        double[] t = start.temperature().clone();
+        if (!remesh && older != null && older.state().mesh() == previous.state().mesh() && olderStep > 0.0) {
+            double w = 0.5 * dt / olderStep;
+            StellarProfile p = older.profile();
+            for (int k = 0; k < n; k++) {
+                rho[k] *= Math.pow(rho[k] / p.density(k), w);
+                t[k] *= Math.pow(t[k] / p.temperature(k), w);
+            }
+        }
         Composition[] comp = new Composition[n];
         for (int k = 0; k < n; k++) {
-            comp[k] = network.advance(start.density()[k], start.temperature()[k], start.state().composition(k), dt);
+            comp[k] = network.advance(rho[k], t[k], start.state().composition(k), dt);
         }
         comp = ConvectiveMixing.mix(start.state().mesh(), comp, start.convective());
         double[] lnT = start.state().lnTemperatures();
