@@ -44,7 +44,17 @@ public final class MeshPlanner {
 
     /** Whether the model's mesh is uneven enough (or of the wrong size) to be worth redistributing. */
     public boolean needsRemesh(StellarModel model) {
-        double[] cost = costs(model);
+        return needsRemesh(model, null);
+    }
+
+    /**
+     * As {@link #needsRemesh(StellarModel)}, with an extra cost per interval added to the structure's (e.g. a
+     * composition gradient |D X|/0.01, formulas.md 6.3); null for none.
+     *
+     * @param extraCost one non-negative entry per interval (k, k + 1), or null
+     */
+    public boolean needsRemesh(StellarModel model, double[] extraCost) {
+        double[] cost = costs(model, extraCost);
         double total = 0.0;
         double largest = 0.0;
         for (double c : cost) {
@@ -56,8 +66,17 @@ public final class MeshPlanner {
 
     /** The model's state interpolated onto a new mesh of {@link #points()} points. */
     public ModelState remesh(StellarModel model) {
+        return remesh(model, null);
+    }
+
+    /**
+     * As {@link #remesh(StellarModel)}, with an extra cost per interval (see {@link #needsRemesh(StellarModel,
+     * double[])}). Compositions are still copied from the nearest old point; callers that need conservation
+     * remap them afterwards.
+     */
+    public ModelState remesh(StellarModel model, double[] extraCost) {
         ModelState old = model.state();
-        double[] cost = costs(model);
+        double[] cost = costs(model, extraCost);
         int n = old.size();
         double[] cumulative = new double[n];
         for (int k = 1; k < n; k++) {
@@ -107,7 +126,7 @@ public final class MeshPlanner {
         return new ModelState(MassMesh.ofFractions(mesh.totalMass(), q, e), comp, lnR, lnRho, lnT, lum);
     }
 
-    private static double[] costs(StellarModel model) {
+    private static double[] costs(StellarModel model, double[] extraCost) {
         StellarProfile p = model.profile();
         MassMesh mesh = model.state().mesh();
         int n = p.size();
@@ -125,7 +144,7 @@ public final class MeshPlanner {
             if (p.convective(k) != p.convective(k + 1)) {
                 c += BOUNDARY_COST;
             }
-            cost[k] = c + MINIMUM_COST;
+            cost[k] = c + MINIMUM_COST + (extraCost == null ? 0.0 : extraCost[k]);
         }
         return cost;
     }

@@ -1,0 +1,168 @@
+package org.convgrid.engine.evolution;
+
+import org.convgrid.engine.error.ConvgridException;
+import org.convgrid.engine.error.ErrorKind;
+import org.convgrid.engine.physics.nuclear.BurningRate;
+import org.convgrid.engine.physics.nuclear.NuclearNetwork;
+import org.convgrid.engine.state.Composition;
+
+/**
+ * Advances the composition of one shell over a time step at fixed density and temperature by the backward
+ * (implicit) Euler method, x_new = x_old + dt f(x_new), f the composition rates of the {@link NuclearNetwork}
+ * (our physics sheet, formulas.md 3.5 and 6.4: an implicit network step keeps the fast 3He and CN relaxations
+ * stable at main-sequence time steps). Each sub-step is solved by Newton's method with a finite-difference
+ * Jacobian taken once at the start of the sub-step; a sub-step that does not converge, or that changes some
+ * mass fraction by more than {@link #MAX_SUBSTEP_CHANGE}, is halved. Newton corrections are damped so that no
+ * mass fraction goes negative. The rates conserve mass (abundances counted with mass numbers), and the result is
+ * renormalised so the seven fractions sum to one to rounding. Immutable and thread-safe.
+ */
+public final class CompositionStep {
+
+    /** Largest change of any mass fraction in one sub-step (keeps the first-order method accurate). */
+    public static final double MAX_SUBSTEP_CHANGE = 0.005;
+    /** Newton converged when no mass fraction moves by more than this (absolute). */
+    public static final double NEWTON_TOLERANCE = 1.0e-14;
+    /** Newton iterations per sub-step. */
+    public static final int NEWTON_BUDGET = 30;
+    /** Sub-steps (accepted and rejected together) allowed for one step. */
+    public static final int SUBSTEP_BUDGET = 400;
+    /** Below this largest explicit change over the whole step, one explicit Euler step is exact enough. */
+    public static final double NEGLIGIBLE_CHANGE = 1.0e-12;
+    /**
+     * Relative size of the finite-difference perturbation of a mass fraction: small enough that the perturbed
+     * fractions still sum to one within {@link Composition#SUM_TOLERANCE}.
+     */
+    private static final double DIFFERENCE_STEP = 1.0e-9;
+    /** Absolute floor of that perturbation. */
+    private static final double DIFFERENCE_FLOOR = 1.0e-15;
+    /** A Newton correction may take a fraction at most this close to zero in one iteration. */
+    private static final double POSITIVITY_MARGIN = 0.9;
+
+    private static final int N = MassFractions.BURNING;
+    private static final int HELIUM4 = 2;
+
+    private final NuclearNetwork network;
+
+    public CompositionStep(NuclearNetwork network) {
+        this.network = network;
+    }
+
+    /**
+     * @param density g cm^-3
+     * @param temperature K
+     * @param start composition at the start of the step
+     * @param dt time step, s (&gt;= 0)
+     * @return the composition after dt; mass fractions non-negative and summing to one
+     * @throws ConvgridException NOT_CONVERGED when the sub-step budget is exhausted
+     */
+    public Composition advance(double density, double temperature, Composition start, double dt) {
+        ConvgridException.requireInRange("time step", dt, 0.0, Double.MAX_VALUE, "s");
+        double[] x = MassFractions.of(start);
+        double[] f = rates(density, temperature, x);
+        double largest = 0.0;
+        for (int i = 0; i < N; i++) {
+            largest = Math.max(largest, Math.abs(f[i]) * dt);
+        }
+        if (largest < NEGLIGIBLE_CHANGE) {
+            // burning too slow to matter over this step: explicit Euler is accurate to ~largest^2
+            for (int i = 0; i < N; i++) {
+                x[i] += dt * f[i];
+            }
+            return normalised(x);
+        }
+        double remaining = dt;
+        double sub = dt;
+        for (int attempt = 0; attempt < SUBSTEP_BUDGET; attempt++) {
+            double[] next = implicitSubstep(density, temperature, x, sub);
+            if (next != null) {
+                x = next;
+                remaining -= sub;
+                if (remaining <= 0.0 || remaining <= 1.0e-14 * dt) {
+                    return normalised(x);
+                }
+                sub = Math.min(remaining, 2.0 * sub);
+            } else {
+                sub *= 0.5;
+            }
+        }
+        throw new ConvgridException(ErrorKind.NOT_CONVERGED, String.format(
+                "composition step of %.3g s at rho = %.3g g cm^-3, T = %.3g K used its %d sub-steps",
+                dt, density, temperature, SUBSTEP_BUDGET), dt, density, temperature);
+    }
+
+    /** One backward-Euler sub-step, or null when Newton fails or the change is too large. */
+    private double[] implicitSubstep(double density, double temperature, double[] x0, double h) {
+        double[] x = x0.clone();
+        double[] f0 = rates(density, temperature, x);
+        double[][] jac = new double[N][N];
+        for (int j = 0; j < N; j++) {
+            double step = Math.max(DIFFERENCE_STEP * x[j], DIFFERENCE_FLOOR);
+            double[] xp = x.clone();
+            xp[j] += step;
+            double[] fp = rates(density, temperature, xp);
+            for (int i = 0; i < N; i++) {
+                jac[i][j] = (i == j ? 1.0 : 0.0) - h * (fp[i] - f0[i]) / step;
+            }
+            // the 4He row is replaced by mass conservation (sum of the six = their initial sum), which the
+            // difference Jacobian of a stiff step would only keep to its rounding error times h |df/dx|
+            jac[HELIUM4][j] = 1.0;
+        }
+        double[] f = f0;
+        for (int iteration = 0; iteration < NEWTON_BUDGET; iteration++) {
+            double[] delta = new double[N];
+            double drift = 0.0;
+            for (int i = 0; i < N; i++) {
+                delta[i] = -(x[i] - x0[i] - h * f[i]);
+                drift += x[i] - x0[i];
+            }
+            delta[HELIUM4] = -drift;
+            double[][] work = new double[N][];
+            for (int i = 0; i < N; i++) {
+                work[i] = jac[i].clone();
+            }
+            if (!SmallLinearSolver.solve(work, delta)) {
+                return null;
+            }
+            double lambda = 1.0;
+            double size = 0.0;
+            for (int i = 0; i < N; i++) {
+                size = Math.max(size, Math.abs(delta[i]));
+                if (delta[i] < 0.0 && x[i] + delta[i] < 0.0) {
+                    lambda = Math.min(lambda, POSITIVITY_MARGIN * x[i] / -delta[i]);
+                }
+            }
+            for (int i = 0; i < N; i++) {
+                x[i] = Math.max(0.0, x[i] + lambda * delta[i]);
+            }
+            if (lambda == 1.0 && size <= NEWTON_TOLERANCE) {
+                for (int i = 0; i < N; i++) {
+                    if (Math.abs(x[i] - x0[i]) > MAX_SUBSTEP_CHANGE) {
+                        return null;
+                    }
+                }
+                return x;
+            }
+            f = rates(density, temperature, x);
+        }
+        return null;
+    }
+
+    private double[] rates(double density, double temperature, double[] x) {
+        BurningRate r = network.burn(density, temperature, MassFractions.composition(x));
+        return new double[] {r.dh1Dt(), r.dhe3Dt(), r.dhe4Dt(), r.dc12Dt(), r.dn14Dt(), r.do16Dt()};
+    }
+
+    /** Clips rounding-level negatives and rescales the burning species so the seven fractions sum to one. */
+    private static Composition normalised(double[] x) {
+        double sum = 0.0;
+        for (int i = 0; i < N; i++) {
+            x[i] = Math.max(0.0, x[i]);
+            sum += x[i];
+        }
+        double scale = (1.0 - x[N]) / sum;
+        for (int i = 0; i < N; i++) {
+            x[i] *= scale;
+        }
+        return MassFractions.composition(x);
+    }
+}

@@ -1,0 +1,38 @@
+package org.convgrid.engine.evolution;
+
+import java.util.List;
+
+import org.convgrid.engine.convection.ConvectiveZone;
+
+/**
+ * Summary of one accepted evolution step (one row of a track), cgs units.
+ *
+ * @param age time since the zero-age main sequence, s
+ * @param timeStep the step that led here, s (0 for the zero-age model)
+ * @param luminosity surface luminosity, erg s^-1
+ * @param radius cm
+ * @param effectiveTemperature K
+ * @param centralTemperature K
+ * @param centralDensity g cm^-3
+ * @param centralHydrogen central hydrogen mass fraction
+ * @param convectiveZones every convective zone (m/M and r/R boundaries), centre outwards
+ * @param burningInner m/M of the innermost point where eps_nuc exceeds
+ *                     {@link MainSequenceEvolver#BURNING_THRESHOLD} times its maximum
+ * @param burningOuter m/M of the outermost such point
+ * @param iterations Newton iterations of the structure relaxation of this step (failed tries included)
+ */
+public record EvolutionStep(double age, double timeStep, double luminosity, double radius,
+                            double effectiveTemperature, double centralTemperature, double centralDensity,
+                            double centralHydrogen, List<ConvectiveZone> convectiveZones, double burningInner,
+                            double burningOuter, int iterations) {
+
+    public EvolutionStep {
+        convectiveZones = List.copyOf(convectiveZones);
+    }
+
+    /** m/M at the top of the convective core, 0 when the centre is radiative. */
+    public double convectiveCoreMassFraction() {
+        return !convectiveZones.isEmpty() && convectiveZones.get(0).innerMassFraction() == 0.0
+                ? convectiveZones.get(0).outerMassFraction() : 0.0;
+    }
+}

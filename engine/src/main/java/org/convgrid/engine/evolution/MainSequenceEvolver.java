@@ -1,0 +1,299 @@
+package org.convgrid.engine.evolution;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+
+import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.error.ConvgridException;
+import org.convgrid.engine.physics.PhysicsSet;
+import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.structure.HenyeySolver;
+import org.convgrid.engine.structure.MeshPlanner;
+import org.convgrid.engine.structure.SolveFailedException;
+import org.convgrid.engine.structure.StellarModel;
+import org.convgrid.engine.structure.StellarProfile;
+import org.convgrid.engine.structure.StructureSolver;
+import org.convgrid.engine.units.Constants;
+
+/**
+ * Evolves a zero-age main-sequence model in time until core-hydrogen exhaustion (central X below
+ * {@link Settings#endCentralHydrogen()}) or the age limit. Each step, operator split (formulas.md 6.4): (1) the
+ * composition of every point is advanced over dt by {@link CompositionStep} at the previous model's density and
+ * temperature; (2) convective zones of the previous model are homogenised ({@link ConvectiveMixing}); (3) the
+ * structure is relaxed with that composition and the gravothermal term eps_grav from the difference with the
+ * previous model ({@link GravothermalEnergy}). Between steps the mesh is redistributed when uneven, with a cost
+ * for composition gradients (|D X|/{@link #COMPOSITION_MESH_STEP} per interval, formulas.md 6.3) and the
+ * composition remapped conservatively ({@link MassRemap}).
+ *
+ * <p>Time steps (formulas.md 6.4, practice): |D X_c| at most {@link Settings#maxCentralHydrogenChange()} while
+ * X_c &gt; 0.1, at most {@link Settings#exhaustionFraction()} X_c below; |D ln L| at most
+ * {@link Settings#maxLuminosityChange()}; growth at most {@link Settings#maxGrowth()} per step; a step that
+ * exceeds a limit by more than {@link #REJECTION_RATIO} is redone shorter, a failed relaxation is redone with
+ * half the step, within {@link Settings#retryBudget()}. Requested ages are reached by landing a step exactly on
+ * them (no interpolation). Deterministic; immutable and thread-safe (each call has its own state).
+ */
+public final class MainSequenceEvolver {
+
+    /** The burning zone is where eps_nuc exceeds this fraction of its maximum. */
+    public static final double BURNING_THRESHOLD = 0.01;
+    /** Composition change per mesh interval worth one unit of mesh cost (formulas.md 6.3: |D X| &lt; 0.01-0.02). */
+    public static final double COMPOSITION_MESH_STEP = 0.01;
+    /** A step whose change exceeds its limit by more than this factor is rejected and redone shorter. */
+    public static final double REJECTION_RATIO = 1.5;
+    /** First step as a fraction of the step the central burning rate allows. */
+    public static final double FIRST_STEP_FRACTION = 0.1;
+    /** Newton budget of one step's structure relaxation (a failure halves the step). */
+    public static final int RELAXATION_BUDGET = 30;
+
+    /**
+     * Time-step and stopping settings.
+     *
+     * @param maxCentralHydrogenChange largest |D X_c| per step while X_c &gt; 0.1 (0.01-0.02 in practice)
+     * @param exhaustionFraction largest |D X_c|/X_c per step below X_c = 0.1
+     * @param maxLuminosityChange largest |D ln L| per step
+     * @param maxGrowth largest ratio of consecutive steps
+     * @param endCentralHydrogen central hydrogen that ends the main sequence
+     * @param maxAge age limit, s
+     * @param stepBudget accepted steps allowed
+     * @param retryBudget rejected or failed steps allowed
+     */
+    public record Settings(double maxCentralHydrogenChange, double exhaustionFraction, double maxLuminosityChange,
+                           double maxGrowth, double endCentralHydrogen, double maxAge, int stepBudget,
+                           int retryBudget) {
+
+        /** 0.01, 0.1 X_c, 0.05 in ln L, x1.25, X_c &lt; 1e-4, 20 Gyr (the limits), 3000 steps, 100 retries. */
+        public static final Settings DEFAULT = new Settings(0.01, 0.1, 0.05, 1.25, 1.0e-4, 20.0 * Constants.GYR,
+                3000, 100);
+
+        /** All change limits multiplied by {@code factor} (e.g. 0.5 to halve the steps, 2 for a coarse test). */
+        public Settings scaled(double factor) {
+            return new Settings(factor * maxCentralHydrogenChange, factor * exhaustionFraction,
+                    factor * maxLuminosityChange, maxGrowth, endCentralHydrogen, maxAge, stepBudget, retryBudget);
+        }
+    }
+
+    private final PhysicsSet physics;
+    private final MeshPlanner planner;
+    private final StructureSolver solver;
+    private final HenyeySolver.Settings solveSettings;
+    private final CompositionStep network;
+    private final Settings settings;
+
+    public MainSequenceEvolver(PhysicsSet physics, MeshPlanner planner, HenyeySolver.Settings solveSettings,
+                               Settings settings) {
+        this.physics = physics;
+        this.planner = planner;
+        this.solveSettings = solveSettings;
+        this.solver = new StructureSolver(physics, solveSettings);
+        this.network = new CompositionStep(physics.nuclear());
+        this.settings = settings;
+    }
+
+    public MainSequenceEvolver(PhysicsSet physics, Settings settings) {
+        this(physics, new MeshPlanner(MeshPlanner.DEFAULT_POINTS),
+                HenyeySolver.Settings.DEFAULT.withIterationBudget(RELAXATION_BUDGET), settings);
+    }
+
+    /**
+     * @param zeroAge a converged zero-age model (its per-point compositions are the starting abundances)
+     * @param ages requested ages, s (any order; 0 gives the zero-age model)
+     * @return the models at the requested ages and every step
+     */
+    public EvolutionResult evolve(StellarModel zeroAge, double[] ages) {
+        double[] sorted = ages.clone();
+        Arrays.sort(sorted);
+        List<Double> landedAges = new ArrayList<>();
+        List<StellarModel> landed = new ArrayList<>();
+        List<EvolutionStep> steps = new ArrayList<>();
+        steps.add(summary(zeroAge, 0.0, 0.0, 0));
+        StellarModel current = zeroAge;
+        double age = 0.0;
+        int next = 0;
+        while (next < sorted.length && sorted[next] <= 0.0) {
+            landedAges.add(sorted[next++]);
+            landed.add(zeroAge);
+        }
+        double dt = firstStep(zeroAge);
+        int retries = 0;
+        EvolutionResult.EndReason end = null;
+        String detail = "";
+        double exhaustion = Double.NaN;
+        double lastXc = current.global().centralHydrogen();
+        int spent = 0;
+        StellarModel before = null;
+        double previousStep = 0.0;
+        for (int accepted = 0; end == null; ) {
+            double xc = current.global().centralHydrogen();
+            if (xc < settings.endCentralHydrogen()) {
+                end = EvolutionResult.EndReason.HYDROGEN_EXHAUSTED;
+                break;
+            }
+            if (age >= settings.maxAge() * (1.0 - 1.0e-12)) {
+                end = EvolutionResult.EndReason.AGE_LIMIT;
+                break;
+            }
+            if (accepted >= settings.stepBudget() || retries > settings.retryBudget()) {
+                end = EvolutionResult.EndReason.FAILED;
+                detail = String.format("budget used: %d steps, %d retries, at age %.4g Gyr, X_c = %.3g",
+                        accepted, retries, age / Constants.GYR, xc);
+                break;
+            }
+            double h = Math.min(dt, settings.maxAge() - age);
+            boolean landing = false;
+            if (next < sorted.length && age + h >= sorted[next] * (1.0 - 1.0e-12)) {
+                h = sorted[next] - age;
+                landing = true;
+            }
+            StellarModel trial;
+            try {
+                trial = advance(current, before, previousStep, h);
+            } catch (ConvgridException e) {
+                if (e instanceof SolveFailedException f) {
+                    spent += f.report().iterations();
+                }
+                retries++;
+                dt = 0.5 * h;
+                detail = e.getMessage();
+                continue;
+            }
+            double limit = xc > 0.1 ? settings.maxCentralHydrogenChange()
+                    : Math.min(settings.maxCentralHydrogenChange(), settings.exhaustionFraction() * xc);
+            double dLnL = Math.abs(Math.log(trial.global().luminosity() / current.global().luminosity()));
+            double ratio = Math.max(Math.abs(xc - trial.global().centralHydrogen()) / limit,
+                    dLnL / settings.maxLuminosityChange());
+            if (ratio > REJECTION_RATIO) {
+                spent += trial.report().iterations();
+                retries++;
+                dt = h * 0.8 / ratio;
+                continue;
+            }
+            accepted++;
+            age = landing ? sorted[next] : age + h;
+            lastXc = xc;
+            before = current;
+            previousStep = h;
+            current = trial;
+            steps.add(summary(current, age, h, current.report().iterations() + spent));
+            spent = 0;
+            double newXc = current.global().centralHydrogen();
+            if (newXc < settings.endCentralHydrogen()) {
+                exhaustion = age - h + h * crossing(lastXc, newXc, settings.endCentralHydrogen());
+            }
+            while (landing && next < sorted.length && sorted[next] <= age) {
+                landedAges.add(sorted[next++]);
+                landed.add(current);
+            }
+            double grown = h * Math.min(settings.maxGrowth(), 0.9 / Math.max(ratio, 1.0e-3));
+            dt = landing ? Math.max(dt, grown) : grown;
+        }
+        List<AgedModel> answers = answers(ages, landedAges, landed, end, age, detail);
+        return new EvolutionResult(answers, steps, end, age, exhaustion,
+                end == EvolutionResult.EndReason.FAILED ? detail : "");
+    }
+
+    /**
+     * One step of length dt from {@code previous}. The network runs at the density and temperature of the
+     * middle of the step, extrapolated linearly in ln rho and ln T from the previous two models when they share
+     * a mesh (which makes the operator split second order in time), else at the previous model's.
+     *
+     * @param older the model before {@code previous}, or null
+     * @param olderStep the step from {@code older} to {@code previous}, s
+     */
+    private StellarModel advance(StellarModel previous, StellarModel older, double olderStep, double dt) {
+        double[] cost = compositionCost(previous);
+        boolean remesh = planner.needsRemesh(previous, cost);
+        StepStart start = remesh ? StepStart.remeshed(previous, planner, cost, physics) : StepStart.of(previous);
+        int n = start.state().size();
+        double[] rho = start.density().clone();
+        double[] t = start.temperature().clone();
+        if (!remesh && older != null && older.state().mesh() == previous.state().mesh() && olderStep > 0.0) {
+            double w = 0.5 * dt / olderStep;
+            StellarProfile p = older.profile();
+            for (int k = 0; k < n; k++) {
+                rho[k] *= Math.pow(rho[k] / p.density(k), w);
+                t[k] *= Math.pow(t[k] / p.temperature(k), w);
+            }
+        }
+        Composition[] comp = new Composition[n];
+        for (int k = 0; k < n; k++) {
+            comp[k] = network.advance(rho[k], t[k], start.state().composition(k), dt);
+        }
+        comp = ConvectiveMixing.mix(start.state().mesh(), comp, start.convective());
+        double[] lnT = start.state().lnTemperatures();
+        GravothermalEnergy grav = new GravothermalEnergy(lnT, start.lnPressure(), dt);
+        return solver.relax(start.state().withCompositions(comp), grav, null, solveSettings);
+    }
+
+    /** |D X| / {@link #COMPOSITION_MESH_STEP} per interval: the mesh cost of composition gradients. */
+    private static double[] compositionCost(StellarModel model) {
+        StellarProfile p = model.profile();
+        double[] cost = new double[p.size() - 1];
+        for (int k = 0; k < cost.length; k++) {
+            cost[k] = Math.abs(p.hydrogen(k + 1) - p.hydrogen(k)) / COMPOSITION_MESH_STEP;
+        }
+        return cost;
+    }
+
+    private double firstStep(StellarModel zeroAge) {
+        StellarProfile p = zeroAge.profile();
+        double rate = Math.abs(physics.nuclear().burn(p.density(0), p.temperature(0),
+                zeroAge.state().composition(0)).dh1Dt());
+        double step = FIRST_STEP_FRACTION * settings.maxCentralHydrogenChange() / Math.max(rate, 1.0e-30);
+        return Math.min(step, 0.01 * settings.maxAge());
+    }
+
+    /** Fraction of the step at which X_c crossed {@code end}, interpolated in ln X_c (linear if X_c hit 0). */
+    private static double crossing(double before, double after, double end) {
+        if (after <= 0.0) {
+            return (before - end) / (before - after);
+        }
+        return Math.log(before / end) / Math.log(before / after);
+    }
+
+    private List<AgedModel> answers(double[] ages, List<Double> landedAges, List<StellarModel> landed,
+                                    EvolutionResult.EndReason end, double endAge, String detail) {
+        List<AgedModel> out = new ArrayList<>();
+        for (double a : ages) {
+            int i = landedAges.indexOf(a);
+            if (i >= 0 && landed.get(i).global().centralHydrogen() >= settings.endCentralHydrogen()) {
+                out.add(new AgedModel(a, ModelStatus.OK, landed.get(i), ""));
+            } else if (i >= 0 || end == EvolutionResult.EndReason.HYDROGEN_EXHAUSTED) {
+                out.add(new AgedModel(a, ModelStatus.PAST_MAIN_SEQUENCE, null, String.format(
+                        "core hydrogen exhausted (X_c < %.3g) by %.4g Gyr", settings.endCentralHydrogen(),
+                        endAge / Constants.GYR)));
+            } else if (end == EvolutionResult.EndReason.AGE_LIMIT) {
+                out.add(new AgedModel(a, ModelStatus.FAILED, null, String.format(
+                        "age beyond the evolution limit of %.4g Gyr", settings.maxAge() / Constants.GYR)));
+            } else {
+                out.add(new AgedModel(a, ModelStatus.NOT_CONVERGED, null, String.format(
+                        "evolution stopped at %.4g Gyr: %s", endAge / Constants.GYR, detail)));
+            }
+        }
+        return out;
+    }
+
+    /** The track row of a model. */
+    private static EvolutionStep summary(StellarModel model, double age, double dt, int iterations) {
+        StellarProfile p = model.profile();
+        double top = 0.0;
+        for (int k = 0; k < p.size(); k++) {
+            top = Math.max(top, p.eps(k));
+        }
+        double inner = Double.NaN;
+        double outer = Double.NaN;
+        double mass = model.mass();
+        for (int k = 0; k < p.size(); k++) {
+            if (top > 0.0 && p.eps(k) >= BURNING_THRESHOLD * top) {
+                if (Double.isNaN(inner)) {
+                    inner = k == 0 ? 0.0 : p.mass(k) / mass;
+                }
+                outer = p.mass(k) / mass;
+            }
+        }
+        var g = model.global();
+        return new EvolutionStep(age, dt, g.luminosity(), g.radius(), g.effectiveTemperature(),
+                g.centralTemperature(), g.centralDensity(), g.centralHydrogen(), model.convection().zones(), inner,
+                outer, iterations);
+    }
+}

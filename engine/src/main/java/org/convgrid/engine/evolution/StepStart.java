@@ -1,0 +1,76 @@
+package org.convgrid.engine.evolution;
+
+import java.util.Arrays;
+
+import org.convgrid.engine.physics.PhysicsSet;
+import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.structure.MassMesh;
+import org.convgrid.engine.structure.MeshPlanner;
+import org.convgrid.engine.structure.ModelState;
+import org.convgrid.engine.structure.StellarModel;
+import org.convgrid.engine.structure.StellarProfile;
+
+/**
+ * The previous model as a time step needs it, on the mesh the step will use: the state (starting guess), the
+ * density, temperature and ln P of every point (for the network and for eps_grav) and which points are
+ * convective (for mixing). Either the converged model itself, or the model moved onto a new mesh: structure
+ * interpolated by {@link MeshPlanner}, composition remapped conservatively by {@link MassRemap}, pressure
+ * recomputed from the interpolated density and temperature, convective flags from the nearest old point.
+ */
+record StepStart(ModelState state, double[] density, double[] temperature, double[] lnPressure,
+                 boolean[] convective) {
+
+    /** The model on its own mesh. */
+    static StepStart of(StellarModel model) {
+        StellarProfile p = model.profile();
+        int n = p.size();
+        double[] rho = new double[n];
+        double[] t = new double[n];
+        double[] lnP = new double[n];
+        boolean[] conv = new boolean[n];
+        for (int k = 0; k < n; k++) {
+            rho[k] = p.density(k);
+            t[k] = p.temperature(k);
+            lnP[k] = Math.log(p.pressure(k));
+            conv[k] = p.convective(k);
+        }
+        return new StepStart(model.state(), rho, t, lnP, conv);
+    }
+
+    /** The model moved onto the mesh {@code planner} chooses with the given extra interval costs. */
+    static StepStart remeshed(StellarModel model, MeshPlanner planner, double[] extraCost, PhysicsSet physics) {
+        ModelState old = model.state();
+        ModelState moved = planner.remesh(model, extraCost);
+        Composition[] comp = MassRemap.remap(old.mesh(), old.compositions(), moved.mesh());
+        moved = moved.withCompositions(comp);
+        int n = moved.size();
+        double[] rho = new double[n];
+        double[] t = new double[n];
+        double[] lnP = new double[n];
+        boolean[] conv = new boolean[n];
+        double[] oldMass = model.profile().masses();
+        MassMesh mesh = moved.mesh();
+        for (int k = 0; k < n; k++) {
+            rho[k] = Math.exp(moved.lnDensity(k));
+            t[k] = Math.exp(moved.lnTemperature(k));
+            lnP[k] = Math.log(physics.eos().atDensity(rho[k], t[k], comp[k]).pressure());
+            conv[k] = model.profile().convective(nearest(oldMass, mesh.mass(k)));
+        }
+        return new StepStart(moved, rho, t, lnP, conv);
+    }
+
+    private static int nearest(double[] sorted, double value) {
+        int i = Arrays.binarySearch(sorted, value);
+        if (i >= 0) {
+            return i;
+        }
+        int above = -i - 1;
+        if (above == 0) {
+            return 0;
+        }
+        if (above == sorted.length) {
+            return sorted.length - 1;
+        }
+        return value - sorted[above - 1] <= sorted[above] - value ? above - 1 : above;
+    }
+}

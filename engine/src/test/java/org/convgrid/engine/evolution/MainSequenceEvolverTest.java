@@ -1,0 +1,98 @@
+package org.convgrid.engine.evolution;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.List;
+
+import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.units.Constants;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Main-sequence tracks with the standard physics (Z = 0.0188, Y = 0.275, alpha = 1.8, Schwarzschild, no
+ * overshoot). The 2 Msun track uses time-step limits twice the default (|D X_c| &lt;= 0.02) to keep the test
+ * fast; the 1 Msun track uses the defaults.
+ */
+class MainSequenceEvolverTest {
+
+    private static final double GYR = Constants.GYR;
+
+    @Test
+    void oneSolarMassExhaustsItsCoreHydrogenAtAboutElevenGyr() {
+        var zeroAge = EvolutionFixtures.zeroAge(EvolutionFixtures.SOLAR, 1.0);
+        var evolver = new MainSequenceEvolver(EvolutionFixtures.physics(EvolutionFixtures.SOLAR),
+                MainSequenceEvolver.Settings.DEFAULT);
+        EvolutionResult r = evolver.evolve(zeroAge.model(), new double[] {4.57 * GYR, 0.0, 15.0 * GYR});
+
+        assertThat(r.end()).isEqualTo(EvolutionResult.EndReason.HYDROGEN_EXHAUSTED);
+        // Sackmann, Boothroyd & Kraemer 1993, ApJ 418, 457: the Sun's core-hydrogen exhaustion at ~11 Gyr
+        // (main-sequence span 10-11 Gyr); the issue accepts 9-12 Gyr for our analytic physics
+        assertThat(r.exhaustionAge() / GYR).isBetween(9.0, 12.0);
+        // non-regression (this code, standard physics, default steps): 10.85 Gyr; with half the steps 10.75
+        assertThat(r.exhaustionAge() / GYR).isCloseTo(10.85, within(0.05));
+
+        List<EvolutionStep> steps = r.steps();
+        // the Sun brightens on the main sequence: L(4.57 Gyr)/L(0) = 1/0.70 (Sackmann et al. 1993) or 1.40
+        // (Gough 1981, Sol. Phys. 74, 21); loose, since our zero-age model is not a calibrated solar model
+        EvolutionStep present = steps.stream().filter(s -> s.age() == 4.57 * GYR).findFirst().orElseThrow();
+        assertThat(present.luminosity() / steps.get(0).luminosity()).isBetween(1.25, 1.50);
+        for (int i = 1; i < steps.size(); i++) {
+            assertThat(steps.get(i).luminosity()).isGreaterThan(steps.get(i - 1).luminosity());
+        }
+        // Sackmann et al. 1993: L grows to ~2.2 Lsun by the end of the main sequence (their end is later than
+        // X_c = 1e-4); at X_c = 1e-4 we ask for a clear rise above the zero-age value only
+        assertThat(steps.get(steps.size() - 1).luminosity() / steps.get(0).luminosity()).isBetween(2.0, 3.0);
+        // the Sun has a radiative core throughout (no lasting convective core, common knowledge of solar models)
+        assertThat(steps).allSatisfy(s -> assertThat(s.convectiveCoreMassFraction()).isZero());
+
+        // requested ages: landed exactly (no interpolation); the zero-age request gets the zero-age model;
+        // an age beyond exhaustion is past the main sequence
+        assertThat(r.models().get(0).status()).isEqualTo(ModelStatus.OK);
+        assertThat(r.models().get(0).model().global().centralHydrogen()).isBetween(0.3, 0.5);
+        assertThat(r.models().get(1).model()).isSameAs(zeroAge.model());
+        assertThat(r.models().get(2).status()).isEqualTo(ModelStatus.PAST_MAIN_SEQUENCE);
+        // the time-step control: ~100-300 steps to exhaustion (formulas.md 6.4, practice)
+        assertThat(steps.size()).isBetween(100, 300);
+    }
+
+    @Test
+    void twoSolarMassesKeepAConvectiveCoreThatShrinksInMass() {
+        var zeroAge = EvolutionFixtures.zeroAge(EvolutionFixtures.SOLAR, 2.0);
+        var evolver = new MainSequenceEvolver(EvolutionFixtures.physics(EvolutionFixtures.SOLAR),
+                MainSequenceEvolver.Settings.DEFAULT.scaled(2.0));
+        EvolutionResult r = evolver.evolve(zeroAge.model(), new double[] {0.3 * GYR});
+        assertThat(r.end()).isEqualTo(EvolutionResult.EndReason.HYDROGEN_EXHAUSTED);
+        List<EvolutionStep> steps = r.steps();
+        // upper main-sequence stars burn by CNO in a convective core that recedes in mass as hydrogen is
+        // used (Kippenhahn, Weigert & Weiss 2012, ch. 30-31: the opacity, dominated by electron scattering,
+        // falls with X); checked while X_c > 0.05, after the core has settled (first 10 % of the life)
+        double life = r.exhaustionAge();
+        double previousCore = Double.POSITIVE_INFINITY;
+        int checked = 0;
+        for (EvolutionStep s : steps) {
+            if (s.age() < 0.1 * life || s.centralHydrogen() < 0.05) {
+                continue;
+            }
+            assertThat(s.convectiveCoreMassFraction()).isPositive();
+            assertThat(s.convectiveCoreMassFraction()).isLessThanOrEqualTo(previousCore + 1e-3);
+            previousCore = s.convectiveCoreMassFraction();
+            checked++;
+        }
+        assertThat(checked).isGreaterThan(10);
+        double early = core(steps, 0.6);
+        double late = core(steps, 0.1);
+        assertThat(late).isLessThan(0.7 * early);
+        // a convective core mixes its hydrogen: the central X of a cored star falls at a near-constant rate,
+        // and the lifetime is far shorter than the Sun's (textbook scaling 10 Gyr M^-2.5 = 1.77 Gyr, common
+        // practice; loose because our zero-age 2 Msun model is ~16 Lsun)
+        assertThat(life / GYR).isBetween(0.5, 1.8);
+        assertThat(r.models().get(0).status()).isEqualTo(ModelStatus.OK);
+    }
+
+    /** Convective-core mass fraction at the first step with X_c below {@code xc}. */
+    private static double core(List<EvolutionStep> steps, double xc) {
+        return steps.stream().filter(s -> s.centralHydrogen() < xc).findFirst().orElseThrow()
+                .convectiveCoreMassFraction();
+    }
+}
