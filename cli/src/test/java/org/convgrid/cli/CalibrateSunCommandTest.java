@@ -60,6 +60,15 @@ class CalibrateSunCommandTest {
     }
 
     @Test
+    void tableNamesEveryCalibratedQuantityWithItsUnit() throws Exception {
+        StringWriter table = new StringWriter();
+        SolarCalibrationReport.writeTable(syntheticSun(), table);
+        assertThat(table.toString()).contains("mixing length alpha       1.90000 pressure scale heights")
+                .contains("envelope base r/R         0.7200").contains("main-sequence lifetime    10.500 Gyr")
+                .contains("zero-age L / L_sun        0.7000");
+    }
+
+    @Test
     void presetNamesTheMixingLengthAndTheCalibratedComposition() {
         String text = SolarCalibrationReport.preset(syntheticSun(), "1.2.3");
         assertThat(text).contains("\nmixing_length: 1.9\n").contains("\ny_init: 0.27\n")
