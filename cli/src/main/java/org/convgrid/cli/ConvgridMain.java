@@ -10,6 +10,7 @@ import picocli.CommandLine.Option;
         description = "Where convection operates inside main-sequence stars, across a grid of mass, "
                 + "metallicity and age.",
         subcommands = {
+            CalibrateSunCommand.class,
             CheckCommand.class,
             RunCommand.class,
             MergeCommand.class,

@@ -14,12 +14,14 @@ import org.snakeyaml.engine.v2.nodes.Node;
 
 /**
  * The {@code physics:} section. Each option is a value or a list of distinct values (a physics axis); an option
- * left out takes the engine default ({@link PhysicsOptions#DEFAULT}).
+ * left out takes the engine default ({@link PhysicsOptions#DEFAULT}). {@code preset: FILE} takes the mixing
+ * length from a physics preset ({@link PresetReader}; only the mixing length, not Y or Z) and excludes
+ * {@code mixing_length}.
  */
 final class PhysicsReader {
 
     private static final List<String> KEYS = List.of("mixing_length", "overshoot", "criterion", "opacity_factor",
-            "opacity_table");
+            "opacity_table", "preset");
     private static final Range POSITIVE = Range.open(0.0, Double.POSITIVE_INFINITY);
     private static final Range NON_NEGATIVE = new Range(0.0, true, Double.POSITIVE_INFINITY, false);
 
@@ -40,6 +42,16 @@ final class PhysicsReader {
         List<Double> alphas = fields.has("mixing_length")
                 ? AxisValues.distinct(fields.value("mixing_length"), "mixing_length", POSITIVE, reader)
                 : List.of(d.mixingLength());
+        if (fields.has("preset")) {
+            Double preset = PresetReader.mixingLength(fields.value("preset"), reader);
+            if (fields.has("mixing_length")) {
+                reader.problem(fields.key("preset"), "give either preset or mixing_length, not both "
+                        + "(a preset sets the mixing length)");
+                alphas = null;
+            } else {
+                alphas = preset == null ? null : List.of(preset);
+            }
+        }
         List<Double> overshoots = fields.has("overshoot")
                 ? AxisValues.distinct(fields.value("overshoot"), "overshoot", NON_NEGATIVE, reader)
                 : List.of(d.overshoot());

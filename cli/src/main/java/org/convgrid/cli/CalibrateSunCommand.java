@@ -1,0 +1,77 @@
+package org.convgrid.cli;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.convgrid.engine.calibration.CalibratedSun;
+import org.convgrid.engine.calibration.CalibrationSettings;
+import org.convgrid.engine.calibration.SolarCalibration;
+import org.convgrid.engine.units.Constants;
+import org.convgrid.output.AtomicFiles;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
+
+/** {@code convgrid calibrate-sun}: the mixing length and initial helium of a 1 Msun model matching the Sun. */
+@Command(name = "calibrate-sun", mixinStandardHelpOptions = true,
+        description = {"Find the mixing length and initial helium that give a 1 Msun model the Sun's radius and "
+                + "luminosity (IAU 2015 nominal values) at its age, with Z from the present Z/X (no diffusion, so "
+                + "initial Z/X = surface Z/X). Prints them and writes a physics preset for grid files.",
+            "Takes several full evolutions (about half a minute or more)."})
+final class CalibrateSunCommand implements Callable<Integer> {
+
+    /** Oldest age accepted, Gyr (older than the Universe is not a Sun). */
+    static final double MAX_AGE_GYR = 13.0;
+
+    @ParentCommand
+    ConvgridMain main;
+
+    @Option(names = "--age-gyr", defaultValue = "4.57", paramLabel = "A",
+            description = "Age of the Sun since the zero-age main sequence, Gyr, in (0, 13] (default ${DEFAULT-VALUE}).")
+    double ageGyr;
+
+    @Option(names = "--z-over-x", defaultValue = "0.0231", paramLabel = "RATIO",
+            description = "Present surface metal-to-hydrogen mass ratio Z/X, dimensionless "
+                    + "(default ${DEFAULT-VALUE}, Grevesse & Sauval 1998).")
+    double metalsToHydrogen;
+
+    @Option(names = "--format", defaultValue = "table", paramLabel = "table|csv",
+            description = "table (readable) or csv (header and one row: mixing_length, y_init, z_init, the "
+                    + "catalogue columns, zams_luminosity_lsun, ms_lifetime_gyr). Default ${DEFAULT-VALUE}.")
+    OutputFormat format;
+
+    @Option(names = "--preset", defaultValue = "calibrated-sun.yaml", paramLabel = "FILE",
+            description = "Physics preset file to write (YAML; default ${DEFAULT-VALUE} in the current directory).")
+    Path preset;
+
+    @Override
+    public Integer call() throws IOException {
+        if (!(ageGyr > 0 && ageGyr <= MAX_AGE_GYR)) {
+            throw new UsageException("--age-gyr must lie in (0, " + MAX_AGE_GYR + "] Gyr, got " + ageGyr);
+        }
+        if (!(metalsToHydrogen > 0 && metalsToHydrogen < 0.1)) {
+            throw new UsageException("--z-over-x must lie in (0, 0.1), got " + metalsToHydrogen);
+        }
+        Path target = main.context().resolve(preset);
+        CalibrationSettings settings = CalibrationSettings.DEFAULT.withAge(ageGyr * Constants.GYR)
+                .withMetalsToHydrogen(metalsToHydrogen);
+        int[] count = {0};
+        CalibratedSun sun = new SolarCalibration(settings).calibrate(t -> {
+            main.err().println(String.format(Locale.ROOT, "evolution %d: alpha = %.5f, Y = %.5f: "
+                    + "ln(R/R_sun) = %+.3e, ln(L/L_sun) = %+.3e", ++count[0], t.mixingLength(), t.helium(),
+                    t.radiusResidual(), t.luminosityResidual()));
+            main.err().flush();
+        });
+        if (format == OutputFormat.CSV) {
+            SolarCalibrationReport.writeCsv(sun, main.out());
+        } else {
+            SolarCalibrationReport.writeTable(sun, main.out());
+        }
+        main.out().flush();
+        AtomicFiles.writeString(target, SolarCalibrationReport.preset(sun, ToolVersion.current()));
+        main.err().println("preset: mixing length " + String.format(Locale.ROOT, "%.5f", sun.mixingLength())
+                + " written to " + target);
+        return ExitCodes.OK;
+    }
+}

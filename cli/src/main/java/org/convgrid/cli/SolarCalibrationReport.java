@@ -1,0 +1,96 @@
+package org.convgrid.cli;
+
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.apache.commons.csv.CSVPrinter;
+import org.convgrid.engine.calibration.CalibratedSun;
+import org.convgrid.engine.units.Constants;
+import org.convgrid.output.CsvNumbers;
+import org.convgrid.output.catalogue.CatalogueColumns;
+import org.convgrid.output.catalogue.CatalogueWriter;
+import org.convgrid.output.catalogue.OutcomeRows;
+
+/**
+ * The three renderings of a calibrated Sun: the readable table, the conventions' CSV row, and the physics preset
+ * file that grid files name with {@code physics: {preset: FILE}}.
+ */
+final class SolarCalibrationReport {
+
+    /** CSV column after the catalogue columns: zero-age luminosity, solar units. */
+    static final String ZAMS_LUMINOSITY_LSUN = "zams_luminosity_lsun";
+    /** CSV column after the catalogue columns: core-hydrogen exhaustion age, Gyr. */
+    static final String MS_LIFETIME_GYR = "ms_lifetime_gyr";
+
+    private SolarCalibrationReport() {
+    }
+
+    /** mixing_length, y_init, z_init, the catalogue header, zams_luminosity_lsun, ms_lifetime_gyr. */
+    static List<String> csvHeader() {
+        List<String> header = new ArrayList<>(List.of(CatalogueColumns.MIXING_LENGTH, CatalogueColumns.Y_INIT,
+                CatalogueColumns.Z_INIT));
+        header.addAll(CatalogueColumns.HEADER);
+        header.add(ZAMS_LUMINOSITY_LSUN);
+        header.add(MS_LIFETIME_GYR);
+        return header;
+    }
+
+    /** The header row and the calibrated Sun's row. */
+    static void writeCsv(CalibratedSun sun, Appendable out) throws IOException {
+        List<String> row = new ArrayList<>(List.of(CsvNumbers.format(sun.mixingLength()),
+                CsvNumbers.format(sun.helium()), CsvNumbers.format(sun.metals())));
+        row.addAll(CatalogueWriter.cells(OutcomeRows.toRow(sun.sun())));
+        row.add(CsvNumbers.format(sun.zeroAgeLuminosity() / Constants.L_SUN));
+        row.add(CsvNumbers.format(sun.exhaustionAge() / Constants.GYR));
+        CSVPrinter printer = new CSVPrinter(out, CatalogueWriter.FORMAT);
+        printer.printRecord(csvHeader());
+        printer.printRecord(row);
+        printer.flush();
+    }
+
+    /** A readable summary. */
+    static void writeTable(CalibratedSun sun, Appendable out) throws IOException {
+        var g = sun.sun().global();
+        out.append(String.format(Locale.ROOT, """
+                Calibrated Sun (1 Msun, %.4g Gyr, Z/X = %.4g; no diffusion: initial Z/X = present surface Z/X)
+                  mixing length alpha       %.5f pressure scale heights
+                  initial Y                 %.5f
+                  initial Z                 %.6f
+                  R / R_sun                 %.6f   (ln residual %+.2e)
+                  L / L_sun                 %.6f   (ln residual %+.2e)
+                  Teff                      %.1f K
+                  envelope base r/R         %.4f
+                  central temperature       %.4e K
+                  central density           %.2f g/cm^3
+                  central X                 %.4f
+                  zero-age L / L_sun        %.4f
+                  main-sequence lifetime    %.3f Gyr (central X < 1e-4)
+                  evolutions computed       %d
+                """, sun.age() / Constants.GYR, sun.metalsToHydrogen(), sun.mixingLength(), sun.helium(),
+                sun.metals(), g.radius() / Constants.R_SUN, sun.radiusResidual(), g.luminosity() / Constants.L_SUN,
+                sun.luminosityResidual(), g.effectiveTemperature(), sun.envelopeBaseRadiusFraction(),
+                sun.centralTemperature(), sun.centralDensity(), g.centralHydrogen(),
+                sun.zeroAgeLuminosity() / Constants.L_SUN, sun.exhaustionAge() / Constants.GYR, sun.evolutions()));
+    }
+
+    /** The physics preset file (our own small YAML layout; grids' PhysicsReader reads it). */
+    static String preset(CalibratedSun sun, String toolVersion) {
+        return String.format(Locale.ROOT, """
+                # convgrid physics preset from a solar calibration (convgrid calibrate-sun).
+                # A grid file that names this preset takes its mixing_length; y_init and z_init are what the
+                # calibration found, for reference: the grid's metallicity section still sets each model's Y and Z.
+                mixing_length: %s
+                y_init: %s
+                z_init: %s
+                z_over_x: %s
+                age_gyr: %s
+                tool_version: "%s"
+                residual_ln_radius: %s
+                residual_ln_luminosity: %s
+                """, CsvNumbers.format(sun.mixingLength()), CsvNumbers.format(sun.helium()),
+                CsvNumbers.format(sun.metals()), CsvNumbers.format(sun.metalsToHydrogen()),
+                CsvNumbers.format(sun.age() / Constants.GYR), toolVersion.replace("\"", ""),
+                CsvNumbers.format(sun.radiusResidual()), CsvNumbers.format(sun.luminosityResidual()));
+    }
+}

@@ -1,0 +1,112 @@
+package org.convgrid.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import org.convgrid.engine.batch.GlobalProperties;
+import org.convgrid.engine.batch.ModelOutcome;
+import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.calibration.CalibratedSun;
+import org.convgrid.engine.convection.ConvectiveStructure;
+import org.convgrid.engine.convection.ConvectiveZone;
+import org.convgrid.engine.convection.StructureClass;
+import org.convgrid.engine.units.Constants;
+import org.convgrid.output.catalogue.CatalogueColumns;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class CalibrateSunCommandTest {
+
+    @TempDir
+    Path dir;
+
+    private final StringWriter out = new StringWriter();
+    private final StringWriter err = new StringWriter();
+
+    private int run(String... args) {
+        return ConvgridMain.commandLine(new PrintWriter(out), new PrintWriter(err),
+                CommandContext.production().withWorkingDirectory(dir)).execute(args);
+    }
+
+    /** The conventions' row: mixing_length, y_init, z_init, the catalogue columns, then the two extras. */
+    static List<String> expectedHeader() {
+        List<String> h = new ArrayList<>(List.of("mixing_length", "y_init", "z_init"));
+        h.addAll(CatalogueColumns.HEADER);
+        h.addAll(List.of("zams_luminosity_lsun", "ms_lifetime_gyr"));
+        return h;
+    }
+
+    @Test
+    void csvHeaderFollowsTheConventionsAndTheRowFillsIt() throws Exception {
+        StringWriter csv = new StringWriter();
+        SolarCalibrationReport.writeCsv(syntheticSun(), csv);
+        String[] lines = csv.toString().split("\n");
+        assertThat(lines).hasSize(2);
+        assertThat(Arrays.asList(lines[0].split(","))).containsExactlyElementsOf(expectedHeader());
+        String[] cells = lines[1].split(",", -1);
+        assertThat(cells).hasSize(expectedHeader().size());
+        assertThat(cells[0]).isEqualTo("1.9");
+        assertThat(cells[cells.length - 2]).isEqualTo("0.7");
+        assertThat(cells[cells.length - 1]).isEqualTo("10.5");
+        assertThat(lines[1]).contains(",calibrated-sun,").contains(",ok,").contains(",conv_envelope,");
+    }
+
+    @Test
+    void tableNamesEveryCalibratedQuantityWithItsUnit() throws Exception {
+        StringWriter table = new StringWriter();
+        SolarCalibrationReport.writeTable(syntheticSun(), table);
+        assertThat(table.toString()).contains("mixing length alpha       1.90000 pressure scale heights")
+                .contains("envelope base r/R         0.7200").contains("main-sequence lifetime    10.500 Gyr")
+                .contains("zero-age L / L_sun        0.7000");
+    }
+
+    @Test
+    void presetNamesTheMixingLengthAndTheCalibratedComposition() {
+        String text = SolarCalibrationReport.preset(syntheticSun(), "1.2.3");
+        assertThat(text).contains("\nmixing_length: 1.9\n").contains("\ny_init: 0.27\n")
+                .contains("\nz_over_x: 0.0231\n").contains("\nage_gyr: 4.57\n").contains("tool_version: \"1.2.3\"");
+    }
+
+    @Test
+    void ageOutsideZeroToThirteenGyrIsAUsageError() {
+        assertThat(run("calibrate-sun", "--age-gyr", "0")).isEqualTo(2);
+        assertThat(run("calibrate-sun", "--age-gyr", "-1")).isEqualTo(2);
+        assertThat(run("calibrate-sun", "--age-gyr", "13.5")).isEqualTo(2);
+        assertThat(run("calibrate-sun", "--z-over-x", "0")).isEqualTo(2);
+        assertThat(err.toString()).contains("--age-gyr").contains("--z-over-x");
+        assertThat(dir.resolve("calibrated-sun.yaml")).doesNotExist();
+    }
+
+    @Test
+    void calibratesAndWritesTheCsvRowAndThePreset() throws Exception {
+        // the whole calibration (several evolutions, ~20-40 s): the command end to end
+        int code = run("calibrate-sun", "--format", "csv", "--preset", "sun.yaml");
+        assertThat(code).as(err.toString()).isZero();
+        String[] lines = out.toString().split("\n");
+        assertThat(lines).hasSize(2);
+        assertThat(Arrays.asList(lines[0].split(","))).containsExactlyElementsOf(expectedHeader());
+        assertThat(lines[1]).contains(",calibrated-sun,").contains(",ok,");
+        String preset = Files.readString(dir.resolve("sun.yaml"));
+        assertThat(preset).contains("mixing_length: ").contains("residual_ln_radius: ");
+        assertThat(err.toString()).contains("evolution 1: alpha = 1.80000, Y = 0.27000");
+    }
+
+    private static CalibratedSun syntheticSun() {
+        var request = new ModelRequest(CalibratedSun.MODEL_ID, Constants.M_SUN, 0.0165, 0.27, 4.57 * Constants.GYR,
+                new PhysicsOptions(1.9, 0.0, org.convgrid.engine.convection.StabilityCriterion.SCHWARZSCHILD, 1.0));
+        var global = new GlobalProperties(Constants.L_SUN, Constants.R_SUN, 5772.0, 27420.0, 1.55e7, 150.0, 0.35);
+        var convection = new ConvectiveStructure(List.of(new ConvectiveZone(0.98, 1.0, 0.72, 1.0)),
+                StructureClass.CONV_ENVELOPE, 0.0, 0.98, 0.72, 0.02 * Constants.M_SUN, 2.0e6, 3.0e6);
+        var outcome = new ModelOutcome(request, ModelStatus.OK, "", global, convection, 1234);
+        return new CalibratedSun(1.9, 0.27, 0.0165, 0.0231, 4.57 * Constants.GYR, outcome, 1e-6, -2e-6,
+                0.7 * Constants.L_SUN, 10.5 * Constants.GYR, 0.72, 1.55e7, 150.0, 9, 5);
+    }
+}

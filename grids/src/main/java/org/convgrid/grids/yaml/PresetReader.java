@@ -1,0 +1,94 @@
+package org.convgrid.grids.yaml;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import org.convgrid.grids.GridProblem;
+import org.snakeyaml.engine.v2.api.LoadSettings;
+import org.snakeyaml.engine.v2.api.lowlevel.Compose;
+import org.snakeyaml.engine.v2.exceptions.MarkedYamlEngineException;
+import org.snakeyaml.engine.v2.exceptions.YamlEngineException;
+import org.snakeyaml.engine.v2.nodes.MappingNode;
+import org.snakeyaml.engine.v2.nodes.Node;
+
+/**
+ * A physics preset named by {@code physics: {preset: FILE}} (FILE relative to the grid file's folder), as written
+ * by {@code convgrid calibrate-sun}. A preset sets the mixing length only: its {@code y_init}, {@code z_init} and
+ * the rest are a record of the calibration, and the grid's metallicity section still sets every model's Y and Z.
+ * Problems inside the preset are reported at the grid file's {@code preset} value, followed by the preset's own
+ * file:line:column.
+ */
+final class PresetReader {
+
+    private static final List<String> KEYS = List.of("mixing_length", "y_init", "z_init", "z_over_x", "age_gyr",
+            "tool_version", "residual_ln_radius", "residual_ln_luminosity");
+    private static final List<String> RECORD_NUMBERS = List.of("y_init", "z_init", "z_over_x", "age_gyr",
+            "residual_ln_radius", "residual_ln_luminosity");
+    private static final Range POSITIVE = Range.open(0.0, Double.POSITIVE_INFINITY);
+
+    private PresetReader() {
+    }
+
+    /** The preset's mixing length, or null when it has problems (recorded at {@code node}). */
+    static Double mixingLength(Node node, NodeReader reader) {
+        String name = reader.text(node, "preset");
+        if (name == null) {
+            return null;
+        }
+        Path folder = Path.of(reader.file()).toAbsolutePath().getParent();
+        Path file = (folder == null ? Path.of(name) : folder.resolve(name)).normalize();
+        String text;
+        try {
+            text = Files.readString(file);
+        } catch (IOException e) {
+            reader.problem(node, "preset: cannot read " + file + " (" + e.getClass().getSimpleName() + ")");
+            return null;
+        }
+        NodeReader inner = new NodeReader(file.toString());
+        Double alpha = read(text, inner);
+        for (GridProblem p : inner.problems()) {
+            reader.problem(node, "preset " + p);
+        }
+        return inner.problems().isEmpty() ? alpha : null;
+    }
+
+    private static Double read(String text, NodeReader inner) {
+        Optional<Node> root;
+        try {
+            root = new Compose(LoadSettings.builder().setLabel(inner.file()).setMaxAliasesForCollections(0).build())
+                    .composeString(text);
+        } catch (MarkedYamlEngineException e) {
+            inner.problem(e.getProblemMark().or(e::getContextMark), "YAML syntax: " + e.getProblem());
+            return null;
+        } catch (YamlEngineException e) {
+            inner.problem(Optional.empty(), "YAML syntax: " + e.getMessage());
+            return null;
+        }
+        if (root.isEmpty()) {
+            inner.problem(Optional.empty(), "the preset is empty; it needs at least 'mixing_length'");
+            return null;
+        }
+        MappingNode map = inner.mapping(root.get(), "the preset");
+        if (map == null) {
+            return null;
+        }
+        MappingFields fields = new MappingFields(map, "the preset", KEYS, inner);
+        for (String key : RECORD_NUMBERS) {
+            if (fields.has(key)) {
+                inner.number(fields.value(key), key);
+            }
+        }
+        if (!fields.has("mixing_length")) {
+            inner.problem(map, "the preset needs 'mixing_length'");
+            return null;
+        }
+        List<Double> alpha = AxisValues.distinct(fields.value("mixing_length"), "mixing_length", POSITIVE, inner);
+        if (alpha != null && alpha.size() != 1) {
+            inner.problem(fields.value("mixing_length"), "mixing_length in a preset must be one value");
+            return null;
+        }
+        return alpha == null ? null : alpha.get(0);
+    }
+}

@@ -1,0 +1,95 @@
+package org.convgrid.grids;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.convgrid.grids.yaml.GridFileReader;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class PhysicsPresetKeyTest {
+
+    @TempDir
+    Path dir;
+
+    private static final String GRID = """
+            mass: {values: [1.0]}
+            metallicity: {z: [0.02], y: [0.28]}
+            physics:
+              preset: %s
+            """;
+
+    /** The layout convgrid calibrate-sun writes. */
+    private static final String PRESET = """
+            # convgrid physics preset from a solar calibration
+            mixing_length: 1.93
+            y_init: 0.2712
+            z_init: 0.01689
+            z_over_x: 0.0231
+            age_gyr: 4.57
+            tool_version: "development"
+            residual_ln_radius: -6.9e-06
+            residual_ln_luminosity: 2.9e-05
+            """;
+
+    private Path grid(String preset, String extra) throws Exception {
+        Path grid = dir.resolve("g.yaml");
+        Files.writeString(grid, GRID.formatted(preset) + extra);
+        return grid;
+    }
+
+    @Test
+    void aPresetSetsTheMixingLengthButNotTheComposition() throws Exception {
+        Files.createDirectories(dir.resolve("presets"));
+        Files.writeString(dir.resolve("presets/sun.yaml"), PRESET);
+        GridSpec spec = new GridFileReader().read(grid("presets/sun.yaml", "")).spec();
+        var request = spec.requests().iterator().next();
+        assertThat(request.physics().mixingLength()).isEqualTo(1.93);
+        assertThat(request.initialHelium()).isEqualTo(0.28);
+        assertThat(request.initialMetals()).isEqualTo(0.02);
+    }
+
+    @Test
+    void aMissingPresetIsAProblemAtItsLineAndColumn() throws Exception {
+        Path grid = grid("nowhere.yaml", "");
+        assertThatThrownBy(() -> new GridFileReader().read(grid))
+                .isInstanceOfSatisfying(GridFileException.class, e -> assertThat(e.problems()).singleElement()
+                        .satisfies(p -> {
+                            assertThat(p.line()).isEqualTo(4);
+                            assertThat(p.column()).isEqualTo(11);
+                            assertThat(p.message()).contains("preset").contains("nowhere.yaml");
+                        }));
+    }
+
+    @Test
+    void aBadPresetNamesItsOwnLineToo() throws Exception {
+        Files.writeString(dir.resolve("bad.yaml"), PRESET.replace("mixing_length: 1.93", "mixing_length: -1")
+                .replace("age_gyr: 4.57", "age_gyr: old\nflavour: sweet"));
+        Path grid = grid("bad.yaml", "");
+        assertThatThrownBy(() -> new GridFileReader().read(grid))
+                .isInstanceOfSatisfying(GridFileException.class, e -> {
+                    assertThat(e.problems()).hasSize(3).allSatisfy(p -> assertThat(p.line()).isEqualTo(4));
+                    assertThat(e.problems()).anySatisfy(p -> assertThat(p.message()).contains("bad.yaml:2:")
+                            .contains("mixing_length"));
+                    assertThat(e.problems()).anySatisfy(p -> assertThat(p.message()).contains("bad.yaml:6:")
+                            .contains("age_gyr"));
+                    assertThat(e.problems()).anySatisfy(p -> assertThat(p.message()).contains("bad.yaml:7:")
+                            .contains("flavour"));
+                });
+    }
+
+    @Test
+    void presetAndMixingLengthTogetherConflict() throws Exception {
+        Files.writeString(dir.resolve("sun.yaml"), PRESET);
+        Path grid = grid("sun.yaml", "  mixing_length: 1.8\n");
+        assertThatThrownBy(() -> new GridFileReader().read(grid))
+                .isInstanceOfSatisfying(GridFileException.class, e -> assertThat(e.problems()).singleElement()
+                        .satisfies(p -> {
+                            assertThat(p.line()).isEqualTo(4);
+                            assertThat(p.column()).isEqualTo(3);
+                            assertThat(p.message()).contains("preset").contains("mixing_length");
+                        }));
+    }
+}
