@@ -19,8 +19,10 @@ final class StarReport {
 
     static void write(ModelOutcome outcome, Composition composition, PrintWriter out) {
         var r = outcome.request();
-        out.printf(Locale.ROOT, "Zero-age model: %.4f Msun, X = %.4f, Y = %.4f, Z = %.5f%n", r.mass() / Constants.M_SUN,
-                composition.x(), composition.y(), composition.z());
+        String title = r.age() > 0.0 ? String.format(Locale.ROOT, "Model at %.4g Gyr", r.age() / Constants.GYR)
+                : "Zero-age model";
+        out.printf(Locale.ROOT, "%s: %.4f Msun, X = %.4f, Y = %.4f, Z = %.5f (initial)%n", title,
+                r.mass() / Constants.M_SUN, composition.x(), composition.y(), composition.z());
         out.printf(Locale.ROOT, "Physics: mixing length %.3f Hp, %s, opacity x %.3g%s%n", r.physics().mixingLength(),
                 r.physics().criterion().name().toLowerCase(Locale.ROOT), r.physics().opacityFactor(),
                 r.physics().usesOpacityTable() ? " (table " + r.physics().opacityTable() + ")" : "");
