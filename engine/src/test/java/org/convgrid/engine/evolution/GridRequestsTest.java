@@ -14,7 +14,7 @@ import org.convgrid.engine.units.Constants;
 import org.junit.jupiter.api.Test;
 
 /**
- * Grid requests in age (Z = 0.0188, Y = 0.275, standard physics), with time-step limits twice the default to keep
+ * Grid requests in age (Z = 0.0188, Y = 0.275, standard physics), with time-step limits three times the default to keep
  * the test fast: each mass is evolved once, lands on every requested age, and hands its track over.
  */
 class GridRequestsTest {
@@ -30,7 +30,7 @@ class GridRequestsTest {
     void oneChunkAnswersEveryAgeOfEveryMassAndHandsOverOneTrackPerMass() {
         Map<String, List<EvolutionStep>> tracks = new ConcurrentHashMap<>();
         GridRequests solver = new GridRequests((first, steps) -> tracks.put(first.modelId(), steps),
-                MainSequenceEvolver.Settings.DEFAULT.scaled(2.0));
+                MainSequenceEvolver.Settings.DEFAULT.scaled(3.0));
         List<ModelOutcome> out = solver.solve(List.of(request("m0-a0", 1.0, 0.0), request("m0-a1", 1.0, 1.0),
                 request("m0-a2", 1.0, 5.0), request("m1-a0", 2.0, 0.0), request("m1-a1", 2.0, 3.0)));
 
