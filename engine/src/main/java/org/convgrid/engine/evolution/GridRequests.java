@@ -131,7 +131,7 @@ public final class GridRequests implements ChunkSolver {
         }
         String detail = aged.detail();
         if (aged.status() == ModelStatus.PAST_MAIN_SEQUENCE && Double.isFinite(result.exhaustionAge())) {
-            detail = String.format(Locale.ROOT, "core hydrogen exhausted (X_c < %.3g) at %.4g Gyr",
+            detail = String.format(Locale.ROOT, "core hydrogen exhausted (X_c < %.1e) at %.4g Gyr",
                     settings.endCentralHydrogen(), result.exhaustionAge() / Constants.GYR);
         }
         return new Answer(failed(request, aged.status(), detail), null);
