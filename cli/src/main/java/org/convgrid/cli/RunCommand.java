@@ -12,6 +12,7 @@ import org.convgrid.cli.run.ProgressReporter;
 import org.convgrid.cli.run.RunDirectory;
 import org.convgrid.cli.run.RunFinishing;
 import org.convgrid.cli.run.ShardChoice;
+import org.convgrid.cli.run.TrackFiles;
 import org.convgrid.engine.batch.ChunkSolver;
 import org.convgrid.engine.batch.ModelStatus;
 import org.convgrid.engine.batch.ProgressListener;
@@ -79,8 +80,11 @@ final class RunCommand implements Callable<Integer> {
                     + "; check it with 'convgrid check' and add --yes to run it");
         }
         Shard chosen = ShardChoice.choose(shard, context.environment()).orElse(null);
-        ChunkSolver solver = context.solvers().solverFor(file.spec());
         RunDirectory dir = new RunDirectory(context.resolve(out != null ? out : defaultDirectory(file, chosen)));
+        boolean evolves = file.spec().agesGyr().stream().anyMatch(a -> a > 0.0);
+        TrackFiles tracks = new TrackFiles(dir.tracks());
+        ChunkSolver solver = evolves ? context.solvers().solverFor(file.spec(), tracks)
+                : context.solvers().solverFor(file.spec());
         GridRun runner = new GridRun(ToolVersion.current(), Clock.tickSeconds(java.time.ZoneOffset.UTC));
         long start = System.nanoTime();
         GridRun.Plan plan = runner.prepare(new GridRun.Settings(file, dir, n, chosen, resume, force));
@@ -94,6 +98,9 @@ final class RunCommand implements Callable<Integer> {
                 context.finishers());
         if (reporter != null) {
             reporter.finish();
+        }
+        if (tracks.failure() != null) {
+            throw tracks.failure();
         }
         double seconds = (System.nanoTime() - start) * 1e-9;
         parent.out().println(dir.root() + ": " + result.run().catalogue().size() + " models in "

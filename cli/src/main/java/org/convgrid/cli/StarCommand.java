@@ -2,19 +2,19 @@ package org.convgrid.cli;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.concurrent.Callable;
 import org.convgrid.engine.batch.ModelOutcome;
 import org.convgrid.engine.batch.ModelRequest;
 import org.convgrid.engine.batch.ModelStatus;
 import org.convgrid.engine.batch.PhysicsOptions;
 import org.convgrid.engine.convection.StabilityCriterion;
-import org.convgrid.engine.physics.StandardPhysics;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.units.Constants;
-import org.convgrid.engine.zams.ZamsBuilder;
-import org.convgrid.engine.zams.ZamsResult;
-import org.convgrid.engine.zams.ZamsTrack;
+import org.convgrid.engine.evolution.GridRequests;
+import org.convgrid.engine.evolution.MainSequenceEvolver;
+import org.convgrid.engine.evolution.TrackSink;
 import org.convgrid.engine.zams.ZeroAgeRequests;
 import org.convgrid.grids.HeliumLaw;
 import org.convgrid.output.AtomicFiles;
@@ -28,9 +28,14 @@ import picocli.CommandLine.ParentCommand;
 
 /** {@code convgrid star}: one model, its global properties and its convective zones. */
 @Command(name = "star", mixinStandardHelpOptions = true,
-        description = {"One zero-age main-sequence model: its global properties and its convective zones.",
-            "Exit code 3 when the model does not converge (the solver's report is printed on one line)."})
+        description = {"One main-sequence model (zero-age, or evolved to --age-gyr): its global properties and its "
+                + "convective zones.",
+            "Exit code 3 when the model does not converge or the age lies beyond core-hydrogen exhaustion (the reason "
+                + "is printed on one line)."})
 final class StarCommand implements Callable<Integer> {
+
+    /** Oldest age accepted, Gyr: the evolver's age limit. */
+    static final double MAX_AGE_GYR = MainSequenceEvolver.Settings.DEFAULT.maxAge() / Constants.GYR;
 
     @ParentCommand
     ConvgridMain main;
@@ -46,7 +51,8 @@ final class StarCommand implements Callable<Integer> {
     Double helium;
 
     @Option(names = "--age-gyr", defaultValue = "0", paramLabel = "A",
-            description = "Age since the zero-age main sequence, Gyr (only 0 for now; default ${DEFAULT-VALUE}).")
+            description = "Age since the zero-age main sequence, Gyr (default ${DEFAULT-VALUE}: the zero-age model; "
+                    + "older models are evolved from it, exit 3 past core-hydrogen exhaustion).")
     double ageGyr;
 
     @Option(names = "--mixing-length", defaultValue = "1.8", paramLabel = "ALPHA",
@@ -83,11 +89,11 @@ final class StarCommand implements Callable<Integer> {
             throw new UsageException(String.format("need Y >= 0 and Y + Z < 1; got Y = %s, Z = %s", y, metals));
         }
         String id = String.format(java.util.Locale.ROOT, "star-m%.4f-z%.5f", massMsun, metals);
-        ModelRequest request = new ModelRequest(id, massMsun * Constants.M_SUN, metals, y, 0.0, options);
+        ModelRequest request = new ModelRequest(id, massMsun * Constants.M_SUN, metals, y, ageGyr * Constants.GYR,
+                options);
         Composition composition = ZeroAgeRequests.initialComposition(request);
-        ZamsTrack track = new ZamsTrack(new ZamsBuilder(StandardPhysics.create(options, composition)), composition);
-        ZamsResult result = track.solve(request.mass());
-        ModelOutcome outcome = ZeroAgeRequests.outcome(request, result);
+        GridRequests.Answer answer = new GridRequests(TrackSink.NONE).answers(List.of(request)).get(0);
+        ModelOutcome outcome = answer.outcome();
         if (format == OutputFormat.CSV) {
             try (CatalogueWriter writer = CatalogueWriter.startingWithHeader(main.out())) {
                 writer.write(OutcomeRows.toRow(outcome));
@@ -97,11 +103,13 @@ final class StarCommand implements Callable<Integer> {
         }
         main.out().flush();
         if (outcome.status() != ModelStatus.OK) {
-            main.err().println("convgrid: model not converged: " + outcome.statusDetail());
+            String what = outcome.status() == ModelStatus.PAST_MAIN_SEQUENCE ? "past the main sequence"
+                    : "model " + outcome.status().label().replace('_', ' ');
+            main.err().println("convgrid: " + what + ": " + outcome.statusDetail());
             return ExitCodes.SOME_MODELS_FAILED;
         }
         if (profile != null) {
-            StellarModel model = result.model().model();
+            StellarModel model = answer.model();
             Path target = main.context().resolve(profile);
             AtomicFiles.write(target, out -> ProfileWriter.write(ProfileRows.of(model), out));
             main.err().println("profile: " + model.profile().size() + " shells written to " + target);
@@ -116,8 +124,8 @@ final class StarCommand implements Callable<Integer> {
         if (!(metals >= 0 && metals < 0.1)) {
             throw new UsageException("--z must lie in [0, 0.1), got " + metals);
         }
-        if (ageGyr != 0) {
-            throw new UsageException("--age-gyr: evolution in age is not available yet; only 0 (zero-age) works");
+        if (!(ageGyr >= 0 && ageGyr <= MAX_AGE_GYR)) {
+            throw new UsageException("--age-gyr must lie in [0, " + MAX_AGE_GYR + "] Gyr, got " + ageGyr);
         }
         if (!(mixingLength > 0 && mixingLength < 10)) {
             throw new UsageException("--mixing-length must lie in (0, 10) pressure scale heights, got " + mixingLength);

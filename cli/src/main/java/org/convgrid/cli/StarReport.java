@@ -10,6 +10,7 @@ import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.units.Constants;
+import org.convgrid.output.CsvNumbers;
 
 /** The readable form of one model for {@code convgrid star}: a block of properties, then the zone list. */
 final class StarReport {
@@ -19,8 +20,10 @@ final class StarReport {
 
     static void write(ModelOutcome outcome, Composition composition, PrintWriter out) {
         var r = outcome.request();
-        out.printf(Locale.ROOT, "Zero-age model: %.4f Msun, X = %.4f, Y = %.4f, Z = %.5f%n", r.mass() / Constants.M_SUN,
-                composition.x(), composition.y(), composition.z());
+        String title = r.age() > 0.0 ? "Model at " + CsvNumbers.format(r.age() / Constants.GYR) + " Gyr"
+                : "Zero-age model";
+        out.printf(Locale.ROOT, "%s: %.4f Msun, X = %.4f, Y = %.4f, Z = %.5f (initial)%n", title,
+                r.mass() / Constants.M_SUN, composition.x(), composition.y(), composition.z());
         out.printf(Locale.ROOT, "Physics: mixing length %.3f Hp, %s, opacity x %.3g%s%n", r.physics().mixingLength(),
                 r.physics().criterion().name().toLowerCase(Locale.ROOT), r.physics().opacityFactor(),
                 r.physics().usesOpacityTable() ? " (table " + r.physics().opacityTable() + ")" : "");

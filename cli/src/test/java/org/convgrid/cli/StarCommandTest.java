@@ -43,8 +43,17 @@ class StarCommandTest {
     @Test
     void impossibleRequestsAreUsageErrors() {
         assertThat(run("star", "--mass", "-1", "--z", "0.02")).isEqualTo(2);
-        assertThat(run("star", "--mass", "1", "--z", "0.02", "--age-gyr", "1")).isEqualTo(2);
+        assertThat(run("star", "--mass", "1", "--z", "0.02", "--age-gyr", "-1")).isEqualTo(2);
         assertThat(err.toString()).contains("--mass").contains("--age-gyr");
         assertThat(run("star", "--mass", "1", "--z", "0.02", "--y", "0.99")).isEqualTo(2);
+    }
+
+    @Test
+    void anAgeBeyondCoreHydrogenExhaustionIsExitCodeThreeWithTheReason() {
+        // a 2 Msun star lives ~1.1 Gyr on the main sequence (Schaller et al. 1992, A&A Suppl. 96, 269, Table 47)
+        int code = run("star", "--mass", "2", "--z", "0.0188", "--y", "0.275", "--age-gyr", "3");
+        assertThat(code).as(err.toString()).isEqualTo(3);
+        assertThat(err.toString()).contains("past the main sequence").contains("core hydrogen exhausted");
+        assertThat(out.toString()).startsWith("Model at 3 Gyr").contains("past_main_sequence");
     }
 }

@@ -1,6 +1,7 @@
 package org.convgrid.cli.run;
 
 import org.convgrid.engine.batch.ChunkSolver;
+import org.convgrid.engine.evolution.TrackSink;
 import org.convgrid.grids.GridSpec;
 
 /**
@@ -16,4 +17,15 @@ public interface ChunkSolverFactory {
      * @return a thread-safe solver whose outcome for a chunk depends only on that chunk
      */
     ChunkSolver solverFor(GridSpec grid);
+
+    /**
+     * A solver that also hands the evolution track of every star evolved beyond age 0 to {@code tracks}. The
+     * default ignores the tracks (fakes that do not evolve).
+     *
+     * @param grid the validated grid
+     * @param tracks thread-safe receiver of the tracks
+     */
+    default ChunkSolver solverFor(GridSpec grid, TrackSink tracks) {
+        return solverFor(grid);
+    }
 }

@@ -1,6 +1,9 @@
 package org.convgrid.cli.run;
 
-import org.convgrid.engine.zams.ZeroAgeRequests;
+import org.convgrid.engine.batch.ChunkSolver;
+import org.convgrid.engine.evolution.GridRequests;
+import org.convgrid.engine.evolution.TrackSink;
+import org.convgrid.grids.GridSpec;
 
 /** Where the production structure solver is plugged into the command line. */
 public final class ProductionSolvers {
@@ -8,8 +11,21 @@ public final class ProductionSolvers {
     private ProductionSolvers() {
     }
 
-    /** The chunk solver factory {@code convgrid run} uses outside tests: zero-age models seeded by homology. */
+    /**
+     * The chunk solver factory {@code convgrid run} uses outside tests: zero-age models seeded by homology, evolved
+     * in age with the main-sequence evolver when the grid asks for ages above 0.
+     */
     public static ChunkSolverFactory factory() {
-        return grid -> new ZeroAgeRequests();
+        return new ChunkSolverFactory() {
+            @Override
+            public ChunkSolver solverFor(GridSpec grid) {
+                return new GridRequests(TrackSink.NONE);
+            }
+
+            @Override
+            public ChunkSolver solverFor(GridSpec grid, TrackSink tracks) {
+                return new GridRequests(tracks);
+            }
+        };
     }
 }

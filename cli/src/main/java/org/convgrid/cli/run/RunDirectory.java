@@ -22,6 +22,8 @@ public final class RunDirectory {
     public static final String CATALOGUE = "catalogue.csv";
     public static final String TRANSITIONS = "transitions.csv";
     public static final String MANIFEST = "manifest.yaml";
+    /** One CSV per star evolved beyond age 0 ({@link TrackFiles}). */
+    public static final String TRACKS = "tracks";
 
     private final Path root;
 
@@ -43,6 +45,10 @@ public final class RunDirectory {
 
     public Path manifest() {
         return root.resolve(MANIFEST);
+    }
+
+    public Path tracks() {
+        return root.resolve(TRACKS);
     }
 
     /** Whether a catalogue or a manifest is already there. */

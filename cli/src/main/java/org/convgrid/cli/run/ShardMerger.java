@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Objects;
+import java.util.stream.Stream;
 import org.convgrid.grids.GridHash;
 import org.convgrid.grids.GridSpec;
 import org.convgrid.grids.yaml.GridFileReader;
@@ -22,7 +23,7 @@ import org.convgrid.output.manifest.RunManifestReader;
  * Joins shard run directories into one run directory whose catalogue is byte for byte the one a single run of the
  * grid writes: the grid text recorded in the manifests gives the grid order, each row's line is copied unchanged.
  * Every shard must record the same models_sha256; a model missing from every shard, present twice, or not in the
- * grid stops the merge before anything is written.
+ * grid stops the merge before anything is written. Track files of the shards are copied into the merged {@code tracks}.
  */
 public final class ShardMerger {
 
@@ -71,6 +72,7 @@ public final class ShardMerger {
                     w.append(line).append('\n');
                 }
             });
+            copyTracks(shards, out);
             List<CatalogueRow> mergedRows = CatalogueReader.read(out.catalogue());
             run = RunFinishing.writeTables(out, grid, merged(manifests, mergedRows), mergedRows);
         } catch (IOException e) {
@@ -83,6 +85,24 @@ public final class ShardMerger {
         }
         RunFinishing.callFinishers(run, finishers);
         return run;
+    }
+
+    /** Copies every shard's track files (each star is computed by one shard only) into the merged directory. */
+    private static void copyTracks(List<Path> shards, RunDirectory out) throws IOException {
+        for (Path shard : shards) {
+            Path tracks = new RunDirectory(shard).tracks();
+            if (!Files.isDirectory(tracks)) {
+                continue;
+            }
+            List<Path> files;
+            try (Stream<Path> listed = Files.list(tracks)) {
+                files = listed.filter(p -> p.getFileName().toString().endsWith(".csv")).sorted().toList();
+            }
+            for (Path file : files) {
+                AtomicFiles.writeBinary(out.tracks().resolve(file.getFileName().toString()),
+                        o -> Files.copy(file, o));
+            }
+        }
     }
 
     private static GridSpec commonGrid(List<Path> shards, List<RunManifest> manifests) {

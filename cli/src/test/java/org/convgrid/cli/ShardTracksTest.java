@@ -1,0 +1,81 @@
+package org.convgrid.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Stream;
+import org.convgrid.cli.run.ChunkSolverFactory;
+import org.convgrid.engine.batch.ChunkSolver;
+import org.convgrid.engine.batch.ModelOutcome;
+import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.evolution.EvolutionStep;
+import org.convgrid.engine.evolution.TrackSink;
+import org.convgrid.engine.units.Constants;
+import org.convgrid.grids.GridSpec;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** Track files of shard runs are joined by {@code merge} into the same set a single run writes. */
+class ShardTracksTest {
+
+    @TempDir
+    Path work;
+
+    /** The fake solver, handing one made-up step per star (its first request) to the track sink. */
+    private static final ChunkSolverFactory FAKE_WITH_TRACKS = new ChunkSolverFactory() {
+        @Override
+        public ChunkSolver solverFor(GridSpec grid) {
+            return FakeChunkSolver.fast();
+        }
+
+        @Override
+        public ChunkSolver solverFor(GridSpec grid, TrackSink tracks) {
+            return chunk -> {
+                List<ModelOutcome> out = FakeChunkSolver.fast().solve(chunk);
+                for (ModelRequest r : chunk) {
+                    if (r.age() == 0.0) {
+                        double m = r.mass() / Constants.M_SUN;
+                        tracks.accept(r, List.of(new EvolutionStep(0.0, 0.0, m * Constants.L_SUN,
+                                m * Constants.R_SUN, 5000.0 + m, 1.5e7, 100.0, 0.7, List.of(), 0.0, 0.1, 3)));
+                    }
+                }
+                return out;
+            };
+        }
+    };
+
+    private CliHarness.Execution run(String... args) {
+        return new CliHarness(new CommandContext(FAKE_WITH_TRACKS, List.of(), Map.of(), work, false)).execute(args);
+    }
+
+    private static List<Path> tracks(Path dir) throws Exception {
+        try (Stream<Path> files = Files.list(dir.resolve("tracks"))) {
+            return files.sorted().toList();
+        }
+    }
+
+    @Test
+    void mergedShardsHoldEveryTrackOfASingleRun() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        assertThat(run("run", grid.toString(), "--out", "single", "--quiet").code()).isZero();
+        for (int k = 1; k <= 3; k++) {
+            assertThat(run("run", grid.toString(), "--shard", k + "/3", "--quiet").code()).isZero();
+        }
+        assertThat(run("merge", "runs/test-survey-shard-1-of-3", "runs/test-survey-shard-2-of-3",
+                "runs/test-survey-shard-3-of-3", "--out", "merged").code()).isZero();
+
+        List<Path> single = tracks(work.resolve("single"));
+        // 2 metallicities x 39 masses, one track each, named by the model id without its age part
+        assertThat(single).hasSize(78);
+        assertThat(single.get(0).getFileName().toString()).isEqualTo("p0-z00-m000.csv");
+        List<Path> merged = tracks(work.resolve("merged"));
+        assertThat(merged).extracting(Path::getFileName).isEqualTo(single.stream().map(Path::getFileName).toList());
+        for (Path t : single) {
+            assertThat(Files.readAllBytes(work.resolve("merged/tracks").resolve(t.getFileName())))
+                    .isEqualTo(Files.readAllBytes(t));
+        }
+    }
+}

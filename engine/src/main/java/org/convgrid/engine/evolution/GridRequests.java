@@ -1,0 +1,169 @@
+package org.convgrid.engine.evolution;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
+
+import org.convgrid.engine.batch.ChunkSolver;
+import org.convgrid.engine.batch.ModelOutcome;
+import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.error.ConvgridException;
+import org.convgrid.engine.physics.PhysicsSet;
+import org.convgrid.engine.physics.StandardPhysics;
+import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.structure.StellarModel;
+import org.convgrid.engine.units.Constants;
+import org.convgrid.engine.zams.ZamsBuilder;
+import org.convgrid.engine.zams.ZamsResult;
+import org.convgrid.engine.zams.ZamsTrack;
+import org.convgrid.engine.zams.ZeroAgeRequests;
+
+/**
+ * Solves grid requests at any age. A chunk walks its masses in order on a fresh {@link ZamsTrack} (each zero-age
+ * model seeded by homology from its converged neighbours, as in {@link ZeroAgeRequests}); the requests of one mass
+ * (consecutive in a chunk) are answered by one {@link MainSequenceEvolver} run from that zero-age model, stopped at
+ * the largest requested age, with a step landing exactly on every requested age (no interpolation). Age 0 is the
+ * zero-age model itself. Ages beyond core-hydrogen exhaustion are {@link ModelStatus#PAST_MAIN_SEQUENCE} with the
+ * exhaustion age in the detail; a failed evolution leaves the ages it did not reach
+ * {@link ModelStatus#NOT_CONVERGED}. Each star with an age above zero hands its track to the {@link TrackSink}.
+ *
+ * <p>An outcome depends only on its chunk, never on threads. Thread-safe: the physics bundle of each
+ * (options, composition) line is built once per instance and shared; the bundles are immutable.
+ */
+public final class GridRequests implements ChunkSolver {
+
+    /**
+     * One answer with its model.
+     *
+     * @param outcome the catalogue outcome
+     * @param model the model at the requested age, null unless the outcome is OK
+     */
+    public record Answer(ModelOutcome outcome, StellarModel model) {
+    }
+
+    private final Map<Line, PhysicsSet> physics = new ConcurrentHashMap<>();
+    private final TrackSink tracks;
+    private final MainSequenceEvolver.Settings settings;
+
+    /**
+     * @param tracks receives the track of every star evolved beyond age 0
+     * @param settings time-step settings; {@code maxAge} caps the ages answered (older ones fail)
+     */
+    public GridRequests(TrackSink tracks, MainSequenceEvolver.Settings settings) {
+        this.tracks = tracks;
+        this.settings = settings;
+    }
+
+    /** Default time steps ({@link MainSequenceEvolver.Settings#DEFAULT}). */
+    public GridRequests(TrackSink tracks) {
+        this(tracks, MainSequenceEvolver.Settings.DEFAULT);
+    }
+
+    @Override
+    public List<ModelOutcome> solve(List<ModelRequest> chunk) {
+        return answers(chunk).stream().map(Answer::outcome).toList();
+    }
+
+    /** As {@link #solve}, keeping the models (for profiles). */
+    public List<Answer> answers(List<ModelRequest> chunk) {
+        List<Answer> out = new ArrayList<>(chunk.size());
+        if (chunk.isEmpty()) {
+            return out;
+        }
+        ModelRequest first = chunk.get(0);
+        Composition composition = ZeroAgeRequests.initialComposition(first);
+        PhysicsSet set = physics.computeIfAbsent(new Line(first.physics(), composition),
+                line -> StandardPhysics.create(line.options(), line.composition()));
+        ZamsTrack track = new ZamsTrack(new ZamsBuilder(set), composition);
+        int start = 0;
+        while (start < chunk.size()) {
+            int end = start + 1;
+            while (end < chunk.size() && chunk.get(end).mass() == chunk.get(start).mass()) {
+                end++;
+            }
+            List<ModelRequest> star = chunk.subList(start, end);
+            out.addAll(star(set, star, track.solve(star.get(0).mass())));
+            start = end;
+        }
+        return out;
+    }
+
+    /** The answers for the requests of one star (one mass), in their order. */
+    private List<Answer> star(PhysicsSet set, List<ModelRequest> star, ZamsResult zeroAge) {
+        List<Answer> out = new ArrayList<>(star.size());
+        double oldest = star.stream().mapToDouble(ModelRequest::age).max().orElse(0.0);
+        if (!zeroAge.converged() || oldest <= 0.0) {
+            for (ModelRequest r : star) {
+                ModelOutcome zams = ZeroAgeRequests.outcome(r, zeroAge);
+                out.add(r.age() <= 0.0 || !zeroAge.converged() ? new Answer(zams, modelOf(zeroAge))
+                        : new Answer(failed(r, ModelStatus.NOT_CONVERGED, "no zero-age model to evolve"), null));
+            }
+            return out;
+        }
+        double[] ages = star.stream().mapToDouble(ModelRequest::age).toArray();
+        EvolutionResult result;
+        try {
+            result = new MainSequenceEvolver(set, stoppingAt(oldest)).evolve(zeroAge.model().model(), ages);
+        } catch (ConvgridException e) {
+            for (ModelRequest r : star) {
+                out.add(r.age() <= 0.0 ? new Answer(ZeroAgeRequests.outcome(r, zeroAge), modelOf(zeroAge))
+                        : new Answer(failed(r, ModelStatus.NOT_CONVERGED, "evolution failed: " + e.getMessage()),
+                        null));
+            }
+            return out;
+        }
+        tracks.accept(star.get(0), result.steps());
+        for (int i = 0; i < star.size(); i++) {
+            out.add(answer(star.get(i), result.models().get(i), result, zeroAge.iterations()));
+        }
+        return out;
+    }
+
+    private Answer answer(ModelRequest request, AgedModel aged, EvolutionResult result, int zeroAgeIterations) {
+        if (aged.status() == ModelStatus.OK) {
+            StellarModel m = aged.model();
+            return new Answer(new ModelOutcome(request, ModelStatus.OK, "", m.global(), m.convection(),
+                    zeroAgeIterations + iterationsUpTo(result, aged.age())), m);
+        }
+        String detail = aged.detail();
+        if (aged.status() == ModelStatus.PAST_MAIN_SEQUENCE && Double.isFinite(result.exhaustionAge())) {
+            detail = String.format(Locale.ROOT, "core hydrogen exhausted (X_c < %.1e) at %.4g Gyr",
+                    settings.endCentralHydrogen(), result.exhaustionAge() / Constants.GYR);
+        }
+        return new Answer(failed(request, aged.status(), detail), null);
+    }
+
+    /** Newton iterations of every step up to and including {@code age}: the cost of reaching it. */
+    private static int iterationsUpTo(EvolutionResult result, double age) {
+        int sum = 0;
+        for (EvolutionStep s : result.steps()) {
+            if (s.age() <= age) {
+                sum += s.iterations();
+            }
+        }
+        return sum;
+    }
+
+    /** The settings stopped at the oldest requested age (no steps beyond what the catalogue asks for). */
+    private MainSequenceEvolver.Settings stoppingAt(double oldest) {
+        MainSequenceEvolver.Settings s = settings;
+        return new MainSequenceEvolver.Settings(s.maxCentralHydrogenChange(), s.exhaustionFraction(),
+                s.maxLuminosityChange(), s.maxGrowth(), s.endCentralHydrogen(), Math.min(oldest, s.maxAge()),
+                s.stepBudget(), s.retryBudget());
+    }
+
+    private static StellarModel modelOf(ZamsResult r) {
+        return r.converged() ? r.model().model() : null;
+    }
+
+    private static ModelOutcome failed(ModelRequest r, ModelStatus status, String detail) {
+        return new ModelOutcome(r, status, detail, null, null, 0);
+    }
+
+    private record Line(PhysicsOptions options, Composition composition) {
+    }
+}

@@ -1,0 +1,73 @@
+package org.convgrid.engine.evolution;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
+
+import org.convgrid.engine.batch.ModelOutcome;
+import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.units.Constants;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Grid requests in age (Z = 0.0188, Y = 0.275, standard physics), with time-step limits three times the default to keep
+ * the test fast: each mass is evolved once, lands on every requested age, and hands its track over.
+ */
+class GridRequestsTest {
+
+    private static final double GYR = Constants.GYR;
+
+    private static ModelRequest request(String id, double massInSun, double ageInGyr) {
+        return new ModelRequest(id, massInSun * Constants.M_SUN, 0.0188, 0.275, ageInGyr * GYR,
+                PhysicsOptions.DEFAULT);
+    }
+
+    @Test
+    void oneChunkAnswersEveryAgeOfEveryMassAndHandsOverOneTrackPerMass() {
+        Map<String, List<EvolutionStep>> tracks = new ConcurrentHashMap<>();
+        GridRequests solver = new GridRequests((first, steps) -> tracks.put(first.modelId(), steps),
+                MainSequenceEvolver.Settings.DEFAULT.scaled(3.0));
+        List<ModelOutcome> out = solver.solve(List.of(request("m0-a0", 1.0, 0.0), request("m0-a1", 1.0, 1.0),
+                request("m0-a2", 1.0, 5.0), request("m1-a0", 2.0, 0.0), request("m1-a1", 2.0, 3.0)));
+
+        assertThat(out).extracting(o -> o.request().modelId())
+                .containsExactly("m0-a0", "m0-a1", "m0-a2", "m1-a0", "m1-a1");
+        assertThat(out.subList(0, 4)).allSatisfy(o -> assertThat(o.status()).as(o.statusDetail())
+                .isEqualTo(ModelStatus.OK));
+        // the Sun brightens on the main sequence (Sackmann, Boothroyd & Kraemer 1993, ApJ 418, 457, Table 2:
+        // L grows monotonically from the ZAMS); central hydrogen falls as it burns
+        assertThat(out.get(1).global().luminosity()).isGreaterThan(out.get(0).global().luminosity());
+        assertThat(out.get(2).global().luminosity()).isGreaterThan(out.get(1).global().luminosity());
+        assertThat(out.get(2).global().centralHydrogen()).isLessThan(out.get(1).global().centralHydrogen());
+        // a 2 Msun star leaves the main sequence after ~1 Gyr (Schaller et al. 1992, A&A Suppl. 96, 269, Table 47:
+        // H-burning lifetime 1.1 Gyr at Z = 0.02), so 3 Gyr is past it
+        assertThat(out.get(4).status()).isEqualTo(ModelStatus.PAST_MAIN_SEQUENCE);
+        assertThat(out.get(4).statusDetail()).startsWith("core hydrogen exhausted").contains("Gyr");
+
+        // one track per mass, named by the star's first request, from age 0 in increasing age, ending at the
+        // oldest requested age (1 Msun) or at exhaustion (2 Msun)
+        assertThat(tracks.keySet()).containsExactlyInAnyOrder("m0-a0", "m1-a0");
+        List<EvolutionStep> sun = tracks.get("m0-a0");
+        assertThat(sun.get(0).age()).isZero();
+        for (int i = 1; i < sun.size(); i++) {
+            assertThat(sun.get(i).age()).isGreaterThan(sun.get(i - 1).age());
+        }
+        assertThat(sun.get(sun.size() - 1).age()).isEqualTo(5.0 * GYR);
+        assertThat(sun).anySatisfy(s -> assertThat(s.age()).isEqualTo(1.0 * GYR));
+        assertThat(tracks.get("m1-a0").get(tracks.get("m1-a0").size() - 1).centralHydrogen())
+                .isLessThan(MainSequenceEvolver.Settings.DEFAULT.endCentralHydrogen());
+    }
+
+    @Test
+    void aZeroAgeChunkEvolvesNothingAndHandsOverNoTrack() {
+        Map<String, List<EvolutionStep>> tracks = new ConcurrentHashMap<>();
+        List<ModelOutcome> out = new GridRequests((first, steps) -> tracks.put(first.modelId(), steps))
+                .solve(List.of(request("m0-a0", 0.8, 0.0), request("m1-a0", 0.9, 0.0)));
+        assertThat(out).allSatisfy(o -> assertThat(o.status()).isEqualTo(ModelStatus.OK));
+        assertThat(tracks).isEmpty();
+    }
+}
