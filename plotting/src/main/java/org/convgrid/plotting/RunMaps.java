@@ -13,6 +13,10 @@ import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.Slice;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.plotting.hr.HrDiagram;
+import org.convgrid.plotting.kippenhahn.Kippenhahn;
+import org.convgrid.plotting.kippenhahn.KippenhahnRenderer;
+import org.convgrid.plotting.tracks.TrackOrigin;
+import org.convgrid.plotting.tracks.TrackedModel;
 import org.convgrid.plotting.hr.HrDiagramRenderer;
 import org.convgrid.plotting.style.ChartFiles;
 import org.convgrid.plotting.style.StyledChart;
@@ -110,6 +114,22 @@ public final class RunMaps {
                         "Transition masses against Z, bars span the bracketing grid masses, " + p.describe() + ".",
                         () -> TransitionTrendRenderer.render(TransitionTrend.build(p, run.transitions()))));
             }
+        }
+        entries.addAll(zonesAgainstAge(run));
+        return entries;
+    }
+
+    /** One zones-against-age chart per track the catalogue names, by physics, then Z, then mass. */
+    private static List<MapEntry> zonesAgainstAge(RunData run) {
+        List<MapEntry> entries = new ArrayList<>();
+        for (TrackedModel t : run.trackedModels()) {
+            TrackOrigin o = t.origin();
+            String what = "M = " + SliceLabels.number(o.massMsun()) + " M\u2609, Z = " + SliceLabels.number(o.zInit());
+            entries.add(new MapEntry("zones-age_m" + SliceLabels.number(o.massMsun()) + "_z"
+                    + SliceLabels.number(o.zInit()) + "_" + o.physics().fileStem() + ".png", MapEntry.ZONES_AGE,
+                    "Convective zones (shaded) and the hydrogen-burning region (outlined) against age, " + what + ", "
+                            + o.physics().describe() + ".",
+                    () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track()))));
         }
         return entries;
     }
