@@ -7,7 +7,8 @@ import org.convgrid.plotting.style.StyledChart;
  * One chart of a run: its file name under maps/, where it belongs in the report, a caption, and how to draw it.
  *
  * @param fileName PNG file name (ASCII, no directory)
- * @param section report section: {@link #ZONES_MASS}, {@link #ZONES_RADIUS}, {@link #HR} or {@link #TRENDS}
+ * @param section report section: {@link #ZONES_MASS}, {@link #ZONES_RADIUS}, {@link #HR}, {@link #TRENDS},
+ *     {@link #TRENDS_AGE} or {@link #ZONES_AGE}
  * @param caption one sentence for people
  * @param chart draws the chart (called once per file written)
  */
@@ -17,6 +18,8 @@ public record MapEntry(String fileName, String section, String caption, Supplier
     public static final String ZONES_RADIUS = "Convective zones in radius";
     public static final String HR = "HR diagrams";
     public static final String TRENDS = "Transition masses against metallicity";
+    public static final String TRENDS_AGE = "Transition masses against age";
+    public static final String ZONES_AGE = "Convective zones against age";
 
     /** The file name without {@code .png}. */
     public String stem() {

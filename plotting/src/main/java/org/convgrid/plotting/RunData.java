@@ -19,6 +19,10 @@ import org.convgrid.output.profile.ProfileRow;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionReader;
 import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.plotting.tracks.Track;
+import org.convgrid.plotting.tracks.TrackOrigin;
+import org.convgrid.plotting.tracks.TrackReader;
+import org.convgrid.plotting.tracks.TrackedModel;
 
 /**
  * What the charts and the report read from a run directory (layout: conventions.md).
@@ -28,15 +32,36 @@ import org.convgrid.output.transitions.TransitionRow;
  * @param transitionsFromFile whether {@code transitions} came from transitions.csv
  * @param manifest the manifest, null when manifest.yaml is absent
  * @param radiusZones convective intervals in r/R by model id, from profiles/ (empty when there are none)
- * @param hasTracks whether a tracks/ directory with files exists
+ * @param tracks the evolution tracks in tracks/, by track id (empty when there are none)
  */
 public record RunData(List<CatalogueRow> catalogue, List<TransitionRow> transitions, boolean transitionsFromFile,
-                      RunManifest manifest, Map<String, List<Span>> radiusZones, boolean hasTracks) {
+                      RunManifest manifest, Map<String, List<Span>> radiusZones, List<Track> tracks) {
 
     public RunData {
         catalogue = List.copyOf(catalogue);
         transitions = List.copyOf(transitions);
         radiusZones = Map.copyOf(radiusZones);
+        tracks = List.copyOf(tracks);
+    }
+
+    /** Whether the run has evolution tracks. */
+    public boolean hasTracks() {
+        return !tracks.isEmpty();
+    }
+
+    /** The tracks whose mass, Z and physics the catalogue names, in catalogue order of their first model. */
+    public List<TrackedModel> trackedModels() {
+        Map<String, Track> byId = new HashMap<>();
+        tracks.forEach(t -> byId.put(t.trackId(), t));
+        Map<String, TrackedModel> found = new java.util.LinkedHashMap<>();
+        for (CatalogueRow r : catalogue) {
+            String id = Track.trackIdOf(r.modelId());
+            Track t = byId.get(id);
+            if (t != null && !found.containsKey(id)) {
+                found.put(id, new TrackedModel(new TrackOrigin(id, r.massMsun(), r.zInit(), PhysicsKey.of(r)), t));
+            }
+        }
+        return List.copyOf(found.values());
     }
 
     /** Reads a run directory; catalogue.csv must exist, everything else is optional. */
@@ -56,7 +81,7 @@ public record RunData(List<CatalogueRow> catalogue, List<TransitionRow> transiti
         RunManifest manifest = Files.isRegularFile(manifestFile)
                 ? RunManifestReader.read(Files.readString(manifestFile, StandardCharsets.UTF_8)) : null;
         return new RunData(catalogue, transitions, fromFile, manifest, radiusZones(runDir, catalogue),
-                hasFiles(runDir.resolve("tracks")));
+                TrackReader.readAll(runDir.resolve("tracks")));
     }
 
     private static Map<String, List<Span>> radiusZones(Path runDir, List<CatalogueRow> catalogue) throws IOException {
@@ -95,14 +120,5 @@ public record RunData(List<CatalogueRow> catalogue, List<TransitionRow> transiti
             }
         }
         return spans;
-    }
-
-    private static boolean hasFiles(Path dir) throws IOException {
-        if (!Files.isDirectory(dir)) {
-            return false;
-        }
-        try (var entries = Files.list(dir)) {
-            return entries.findAny().isPresent();
-        }
     }
 }

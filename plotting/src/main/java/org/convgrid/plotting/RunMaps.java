@@ -13,9 +13,15 @@ import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.Slice;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.plotting.hr.HrDiagram;
+import org.convgrid.plotting.kippenhahn.Kippenhahn;
+import org.convgrid.plotting.kippenhahn.KippenhahnRenderer;
+import org.convgrid.plotting.tracks.TrackOrigin;
+import org.convgrid.plotting.tracks.TrackedModel;
 import org.convgrid.plotting.hr.HrDiagramRenderer;
 import org.convgrid.plotting.style.ChartFiles;
 import org.convgrid.plotting.style.StyledChart;
+import org.convgrid.plotting.trend.TransitionAgeTrend;
+import org.convgrid.plotting.trend.TransitionAgeTrendRenderer;
 import org.convgrid.plotting.trend.TransitionTrend;
 import org.convgrid.plotting.trend.TransitionTrendRenderer;
 import org.convgrid.plotting.zones.ZoneMap;
@@ -25,8 +31,10 @@ import org.convgrid.plotting.zones.ZoneMapRenderer;
  * Draws every chart of a run into {@code RUN_DIR/maps/}: per slice a zone map in m/M
  * ({@code zones-mass_<slice>.png}) and in r/R ({@code zones-radius_<slice>.png}); per physics combination an HR
  * diagram ({@code hr_<physics>.png}) and, when the run has transitions, the transition masses against Z
- * ({@code transitions-vs-z_<physics>.png}). Charts of age against zones need evolution tracks, which runs do not
- * write yet; none is drawn.
+ * ({@code transitions-vs-z_<physics>.png}); when the run has several ages, the transition masses against age
+ * ({@code transitions-vs-age_<physics>.png}); per evolution track in tracks/ that the catalogue names, its
+ * convective zones against age ({@code zones-age_m<mass>_z<Z>_<physics>.png}). With tracks, the HR diagrams also
+ * show the tracks and the isochrones at the grid's ages.
  */
 public final class RunMaps {
 
@@ -101,8 +109,10 @@ public final class RunMaps {
         entries.addAll(radius);
         for (PhysicsKey p : physics) {
             entries.add(new MapEntry("hr_" + p.fileStem() + ".png", MapEntry.HR,
-                    "HR diagram of every usable model, " + p.describe() + ".",
-                    () -> HrDiagramRenderer.render(HrDiagram.build(p, rows))));
+                    (run.hasTracks() ? "HR diagram of every usable model with the evolution tracks (grey) and "
+                            + "isochrones at the grid's ages (black), " : "HR diagram of every usable model, ")
+                            + p.describe() + ".",
+                    () -> HrDiagramRenderer.render(HrDiagram.build(p, rows, run.trackedModels()))));
         }
         for (PhysicsKey p : physics) {
             if (run.transitions().stream().anyMatch(t -> PhysicsKey.of(t.slice()).equals(p))) {
@@ -110,6 +120,32 @@ public final class RunMaps {
                         "Transition masses against Z, bars span the bracketing grid masses, " + p.describe() + ".",
                         () -> TransitionTrendRenderer.render(TransitionTrend.build(p, run.transitions()))));
             }
+        }
+        for (PhysicsKey p : physics) {
+            long ages = run.transitions().stream().filter(t -> PhysicsKey.of(t.slice()).equals(p))
+                    .mapToDouble(t -> t.slice().ageGyr()).distinct().count();
+            if (ages >= 2) {
+                entries.add(new MapEntry("transitions-vs-age_" + p.fileStem() + ".png", MapEntry.TRENDS_AGE,
+                        "Transition masses against age, one line per Z, bars span the bracketing grid masses, "
+                                + p.describe() + ".",
+                        () -> TransitionAgeTrendRenderer.render(TransitionAgeTrend.build(p, run.transitions()))));
+            }
+        }
+        entries.addAll(zonesAgainstAge(run));
+        return entries;
+    }
+
+    /** One zones-against-age chart per track the catalogue names, by physics, then Z, then mass. */
+    private static List<MapEntry> zonesAgainstAge(RunData run) {
+        List<MapEntry> entries = new ArrayList<>();
+        for (TrackedModel t : run.trackedModels()) {
+            TrackOrigin o = t.origin();
+            String what = "M = " + SliceLabels.number(o.massMsun()) + " M\u2609, Z = " + SliceLabels.number(o.zInit());
+            entries.add(new MapEntry("zones-age_m" + SliceLabels.number(o.massMsun()) + "_z"
+                    + SliceLabels.number(o.zInit()) + "_" + o.physics().fileStem() + ".png", MapEntry.ZONES_AGE,
+                    "Convective zones (shaded) and the hydrogen-burning region (outlined) against age, " + what + ", "
+                            + o.physics().describe() + ".",
+                    () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track()))));
         }
         return entries;
     }

@@ -8,8 +8,9 @@ import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 
 /**
- * Writes the demo run (charts and report) for people to look at, only when asked:
- * environment variable {@code CONVGRID_DEMO_DIR=/tmp/plots-demo} (the forked test JVM inherits it).
+ * Writes the demo runs (charts and report) for people to look at, only when asked:
+ * environment variable {@code CONVGRID_DEMO_DIR=/tmp/plots-demo} (the forked test JVM inherits it). {@code run}
+ * has no tracks; {@code run-tracks} is a smaller run with evolution tracks.
  */
 class DemoChartsTest {
 
@@ -20,5 +21,10 @@ class DemoChartsTest {
         Path dir = TestRuns.write(Path.of(target, "run"), TestRuns.demoRows());
         assertThat(RunMaps.drawAll(dir)).isNotEmpty();
         assertThat(ReportPage.write(dir)).isRegularFile();
+        var rows = TestRuns.rows(TestRuns.masses(0.3, 2.0, 18), new double[] {0.004, 0.014}, new double[] {0, 1, 4.57});
+        Path tracked = TestRuns.write(Path.of(target, "run-tracks"), rows);
+        TestTracks.write(tracked, rows, 120);
+        assertThat(RunMaps.drawAll(tracked)).isNotEmpty();
+        assertThat(ReportPage.write(tracked)).isRegularFile();
     }
 }

@@ -8,6 +8,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Set;
 import javax.imageio.ImageIO;
+import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.plotting.style.ChartFiles;
 import org.convgrid.plotting.style.ChartStyle;
 import org.junit.jupiter.api.Test;
@@ -25,8 +26,8 @@ class RunMapsTest {
     void drawsEveryChartAsAPngOfTheStatedSize(@TempDir Path dir) throws Exception {
         TestRuns.write(dir, TestRuns.demoRows());
         List<Path> files = RunMaps.drawAll(dir);
-        // 9 slices x (mass + radius) + 1 HR diagram + 1 transition chart.
-        assertThat(files).hasSize(20).allSatisfy(f -> {
+        // 9 slices x (mass + radius) + 1 HR diagram + transitions against Z and against age.
+        assertThat(files).hasSize(21).allSatisfy(f -> {
             assertThat(f.getParent()).isEqualTo(dir.resolve("maps"));
             BufferedImage image = ImageIO.read(f.toFile());
             assertThat(image).as(f.toString()).isNotNull();
@@ -36,10 +37,34 @@ class RunMapsTest {
         assertThat(files).extracting(f -> f.getFileName().toString()).contains(
                 "zones-mass_z0.014_age4.57_a1.8_ov0_schwarzschild.png",
                 "zones-radius_z0.004_age0_a1.8_ov0_schwarzschild.png", "hr_a1.8_ov0_schwarzschild.png",
-                "transitions-vs-z_a1.8_ov0_schwarzschild.png");
+                "transitions-vs-z_a1.8_ov0_schwarzschild.png", "transitions-vs-age_a1.8_ov0_schwarzschild.png");
         try (var left = Files.list(dir.resolve("maps"))) {
             assertThat(left.filter(f -> f.getFileName().toString().endsWith(".tmp"))).isEmpty();
         }
+    }
+
+    @Test
+    void tracksAddOneZonesAgainstAgeChartPerTrack(@TempDir Path dir) throws Exception {
+        List<CatalogueRow> rows = TestRuns.rows(new double[] {1.0, 2.0}, new double[] {0.014}, new double[] {0, 1});
+        TestRuns.write(dir, rows);
+        TestTracks.write(dir, rows, 40);
+        List<MapEntry> plan = RunMaps.plan(RunData.read(dir));
+        assertThat(plan.stream().filter(e -> e.section().equals(MapEntry.ZONES_AGE))).extracting(MapEntry::fileName)
+                .containsExactly("zones-age_m1_z0.014_a1.8_ov0_schwarzschild.png",
+                        "zones-age_m2_z0.014_a1.8_ov0_schwarzschild.png");
+        List<Path> files = RunMaps.drawAll(dir);
+        assertThat(files).hasSize(plan.size()).allSatisfy(f -> {
+            BufferedImage image = ImageIO.read(f.toFile());
+            assertThat(image.getWidth()).isEqualTo(ChartStyle.WIDTH);
+            assertThat(image.getHeight()).isEqualTo(ChartStyle.HEIGHT);
+        });
+    }
+
+    @Test
+    void noTracksNoZonesAgainstAgeAndOneAgeNoAgeTrend(@TempDir Path dir) throws Exception {
+        TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.2, 1.6, 8), new double[] {0.014}, new double[] {0}));
+        assertThat(RunMaps.plan(RunData.read(dir))).extracting(MapEntry::section)
+                .doesNotContain(MapEntry.ZONES_AGE, MapEntry.TRENDS_AGE);
     }
 
     @Test
@@ -62,7 +87,7 @@ class RunMapsTest {
         long start = System.nanoTime();
         List<Path> files = RunMaps.drawAll(dir);
         double seconds = (System.nanoTime() - start) / 1e9;
-        assertThat(files).hasSize(2 * 18 + 2);
+        assertThat(files).hasSize(2 * 18 + 3);
         assertThat(seconds).as("seconds for %d maps", files.size()).isLessThan(THOUSAND_MODEL_BUDGET_SECONDS);
     }
 }

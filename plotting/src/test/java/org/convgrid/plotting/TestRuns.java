@@ -50,7 +50,7 @@ public final class TestRuns {
         for (int iz = 0; iz < zs.length; iz++) {
             for (int ia = 0; ia < ages.length; ia++) {
                 for (int im = 0; im < masses.length; im++) {
-                    String id = String.format("m%03d-z%d-a%d-p0", im, iz, ia);
+                    String id = String.format("p0-z%02d-m%03d-a%02d", iz, im, ia);
                     rows.add(row(id, masses[im], zs[iz], ages[ia], im == masses.length / 3 && ia == 1 && iz == 0));
                 }
             }

@@ -6,10 +6,13 @@ import java.util.List;
 import java.util.TreeMap;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.plotting.PhysicsKey;
+import org.convgrid.plotting.tracks.TrackStep;
+import org.convgrid.plotting.tracks.TrackedModel;
 
 /**
- * Builds HR-diagram data from catalogue rows of one physics combination: a pure function, no drawing. Models
- * without a usable result (status not ok, missing L or Teff, no structure class) are left out.
+ * Builds HR-diagram data from catalogue rows (and evolution tracks, when the run has them) of one physics
+ * combination: a pure function, no drawing. Models without a usable result (status not ok, missing L or Teff, no
+ * structure class) are left out.
  */
 public final class HrDiagram {
 
@@ -21,8 +24,17 @@ public final class HrDiagram {
     private HrDiagram() {
     }
 
-    /** The diagram of the rows whose physics is {@code physics}. */
+    /** The diagram of the rows whose physics is {@code physics}, without tracks. */
     public static HrDiagramData build(PhysicsKey physics, List<CatalogueRow> rows) {
+        return build(physics, rows, List.of());
+    }
+
+    /**
+     * The diagram of the rows and tracks whose physics is {@code physics}. With tracks it also holds, per Z, one
+     * isochrone per catalogue age (the usable models of that age joined in mass order; an age with fewer than two
+     * such models has none); track steps without a positive L and Teff are left out.
+     */
+    public static HrDiagramData build(PhysicsKey physics, List<CatalogueRow> rows, List<TrackedModel> tracked) {
         List<HrPoint> points = rows.stream()
                 .filter(r -> PhysicsKey.of(r).equals(physics) && r.isOk() && r.structureClass() != null
                         && r.luminosityLsun() > 0 && r.teffK() > 0)
@@ -40,7 +52,29 @@ public final class HrDiagram {
         });
         List<HrPoint> labels = lines.isEmpty() ? List.of() : massLabels(lines.get(lines.size() / 2).points());
         List<Double> ages = points.stream().map(HrPoint::ageGyr).distinct().sorted().toList();
-        return new HrDiagramData(physics, List.copyOf(byZ.keySet()), ages, points, lines, labels);
+        List<HrDiagramData.TrackLine> tracks = tracked.stream().filter(t -> t.origin().physics().equals(physics))
+                .sorted(Comparator.comparingDouble((TrackedModel t) -> t.origin().zInit())
+                        .thenComparingDouble(t -> t.origin().massMsun()))
+                .map(HrDiagram::trackLine).filter(t -> t.logL().size() >= 2).toList();
+        List<HrDiagramData.ZeroAgeLine> isochrones = new ArrayList<>();
+        if (!tracks.isEmpty()) {
+            byZ.forEach((z, members) -> ages.forEach(age -> {
+                List<HrPoint> at = members.stream().filter(p -> p.ageGyr() == age)
+                        .sorted(Comparator.comparingDouble(HrPoint::massMsun)).toList();
+                if (at.size() >= 2) {
+                    isochrones.add(new HrDiagramData.ZeroAgeLine(z, age, at));
+                }
+            }));
+        }
+        return new HrDiagramData(physics, List.copyOf(byZ.keySet()), ages, points, lines, labels, tracks,
+                isochrones);
+    }
+
+    private static HrDiagramData.TrackLine trackLine(TrackedModel t) {
+        List<TrackStep> steps = t.track().steps().stream().filter(TrackStep::hasSurface).toList();
+        return new HrDiagramData.TrackLine(t.origin().massMsun(), t.origin().zInit(),
+                steps.stream().map(s -> Math.log10(s.teffK())).toList(),
+                steps.stream().map(s -> Math.log10(s.luminosityLsun())).toList());
     }
 
     private static List<HrPoint> massLabels(List<HrPoint> line) {

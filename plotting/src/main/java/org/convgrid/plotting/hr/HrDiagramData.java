@@ -12,9 +12,18 @@ import org.convgrid.plotting.PhysicsKey;
  * @param points every usable model (status ok, with L, Teff and a structure class)
  * @param zeroAgeLines one line per Z through its youngest models (age 0 when the run has it), by mass
  * @param massLabels the points that get a mass label (on one zero-age line)
+ * @param tracks one evolution track per (mass, Z) of this physics, by Z then mass; empty when the run has none
+ * @param isochrones per Z and age, the models of that age in mass order; only when there are tracks
  */
 public record HrDiagramData(PhysicsKey physics, List<Double> metallicities, List<Double> ages, List<HrPoint> points,
-                            List<ZeroAgeLine> zeroAgeLines, List<HrPoint> massLabels) {
+                            List<ZeroAgeLine> zeroAgeLines, List<HrPoint> massLabels, List<TrackLine> tracks,
+                            List<ZeroAgeLine> isochrones) {
+
+    /** A diagram without tracks or isochrones. */
+    public HrDiagramData(PhysicsKey physics, List<Double> metallicities, List<Double> ages, List<HrPoint> points,
+                         List<ZeroAgeLine> zeroAgeLines, List<HrPoint> massLabels) {
+        this(physics, metallicities, ages, points, zeroAgeLines, massLabels, List.of(), List.of());
+    }
 
     public HrDiagramData {
         metallicities = List.copyOf(metallicities);
@@ -22,13 +31,31 @@ public record HrDiagramData(PhysicsKey physics, List<Double> metallicities, List
         points = List.copyOf(points);
         zeroAgeLines = List.copyOf(zeroAgeLines);
         massLabels = List.copyOf(massLabels);
+        tracks = List.copyOf(tracks);
+        isochrones = List.copyOf(isochrones);
     }
 
     /**
-     * The youngest models of one metallicity, joined in mass order.
+     * One evolution track in the diagram.
+     *
+     * @param massMsun total mass, solar masses
+     * @param zInit initial metal mass fraction
+     * @param logTeff log10 of Teff in K, one per step with a surface, in age order
+     * @param logL log10 of L / L_sun, same steps
+     */
+    public record TrackLine(double massMsun, double zInit, List<Double> logTeff, List<Double> logL) {
+        public TrackLine {
+            logTeff = List.copyOf(logTeff);
+            logL = List.copyOf(logL);
+        }
+    }
+
+    /**
+     * The models of one metallicity and one age, joined in mass order: the zero-age line (the youngest models) and
+     * the isochrones.
      *
      * @param zInit initial metal mass fraction
-     * @param ageGyr the age of the line (0 = ZAMS)
+     * @param ageGyr the age of the line, Gyr (0 = ZAMS)
      * @param points the models on the line, increasing mass
      */
     public record ZeroAgeLine(double zInit, double ageGyr, List<HrPoint> points) {

@@ -1,6 +1,7 @@
 package org.convgrid.plotting.hr;
 
 import java.awt.FontMetrics;
+import java.util.DoubleSummaryStatistics;
 import java.util.List;
 import java.util.Locale;
 import org.convgrid.engine.convection.StructureClass;
@@ -11,7 +12,8 @@ import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
- * Turns {@link HrDiagramData} into a chart: log Teff on a reversed x axis (hot stars left), log L/Lsun up. XChart
+ * Turns {@link HrDiagramData} into a chart: log Teff on a reversed x axis (hot stars left), log L/Lsun up; evolution
+ * tracks (grey) and isochrones (black) under the models when the run has tracks. XChart
  * cannot reverse an axis, so the x values are -log Teff and the tick labels drop the sign.
  */
 public final class HrDiagramRenderer {
@@ -20,6 +22,10 @@ public final class HrDiagramRenderer {
     private static final double PAD_DEX = 0.04;
     /** Pixel spacing hint for the luminosity ticks (XChart's default gives 0.2 dex steps, too dense). */
     private static final int Y_TICK_SPACING = 90;
+
+    /** Track lines: grey, thinner than the isochrones. */
+    private static final java.awt.Color TRACK_GREY = new java.awt.Color(110, 110, 110);
+    private static final float TRACK_WIDTH = 2.0f;
 
     private HrDiagramRenderer() {
     }
@@ -34,17 +40,22 @@ public final class HrDiagramRenderer {
         chart.getStyler().setYAxisDecimalPattern("0.0");
         chart.getStyler().setYAxisTickMarkSpacingHint(Y_TICK_SPACING);
         if (!data.points().isEmpty()) {
-            chart.getStyler().setXAxisMin(-data.points().stream().mapToDouble(HrPoint::logTeff).max().orElseThrow()
-                    - PAD_DEX);
-            chart.getStyler().setXAxisMax(-data.points().stream().mapToDouble(HrPoint::logTeff).min().orElseThrow()
-                    + PAD_DEX);
-            chart.getStyler().setYAxisMin(data.points().stream().mapToDouble(HrPoint::logL).min().orElseThrow()
-                    - 2 * PAD_DEX);
-            chart.getStyler().setYAxisMax(data.points().stream().mapToDouble(HrPoint::logL).max().orElseThrow()
-                    + 2 * PAD_DEX);
+            DoubleSummaryStatistics teff = data.points().stream().mapToDouble(HrPoint::logTeff).summaryStatistics();
+            DoubleSummaryStatistics lum = data.points().stream().mapToDouble(HrPoint::logL).summaryStatistics();
+            data.tracks().forEach(t -> {
+                t.logTeff().forEach(teff::accept);
+                t.logL().forEach(lum::accept);
+            });
+            chart.getStyler().setXAxisMin(-teff.getMax() - PAD_DEX);
+            chart.getStyler().setXAxisMax(-teff.getMin() + PAD_DEX);
+            chart.getStyler().setYAxisMin(lum.getMin() - 2 * PAD_DEX);
+            chart.getStyler().setYAxisMax(lum.getMax() + 2 * PAD_DEX);
         }
+        addTracks(chart, data);
         int index = 0;
-        for (HrDiagramData.ZeroAgeLine line : data.zeroAgeLines()) {
+        // With isochrones, the youngest one is the zero-age line: drawn once, as an isochrone.
+        List<HrDiagramData.ZeroAgeLine> zeroAge = data.isochrones().isEmpty() ? data.zeroAgeLines() : List.of();
+        for (HrDiagramData.ZeroAgeLine line : zeroAge) {
             XYSeries s = chart.addSeries((line.ageGyr() == 0 ? "zero age" : SliceLabels.age(line.ageGyr()))
                             + ", Z = " + SliceLabels.number(line.zInit()),
                     line.points().stream().mapToDouble(p -> -p.logTeff()).toArray(),
@@ -66,6 +77,7 @@ public final class HrDiagramRenderer {
             s.setMarker(ChartStyle.classMarker(c));
             s.setMarkerColor(ChartStyle.classColor(c));
         }
+        addIsochrones(chart, data);
         List<HrPoint> labels = data.massLabels();
         chart.addOverlay((g, c) -> {
             g.setFont(ChartStyle.ANNOTATION_FONT);
@@ -80,5 +92,39 @@ public final class HrDiagramRenderer {
             }
         });
         return chart;
+    }
+
+    /** Tracks in grey (they are context for the coloured models), one dash pattern per Z, one legend entry per Z. */
+    private static void addTracks(StyledChart chart, HrDiagramData data) {
+        int n = 0;
+        for (HrDiagramData.TrackLine t : data.tracks()) {
+            int zIndex = data.metallicities().indexOf(t.zInit());
+            boolean first = data.tracks().stream().filter(o -> o.zInit() == t.zInit()).findFirst().get() == t;
+            XYSeries s = chart.addSeries(first ? "tracks, Z = " + SliceLabels.number(t.zInit()) : "track " + n++,
+                    t.logTeff().stream().mapToDouble(v -> -v).toArray(),
+                    t.logL().stream().mapToDouble(Double::doubleValue).toArray());
+            s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+            s.setMarker(SeriesMarkers.NONE);
+            s.setLineColor(TRACK_GREY);
+            s.setLineStyle(ChartStyle.dashed(Math.max(zIndex, 0), TRACK_WIDTH));
+            s.setShowInLegend(first);
+        }
+    }
+
+    /** Isochrones in black, one dash pattern per age, one legend entry per age. */
+    private static void addIsochrones(StyledChart chart, HrDiagramData data) {
+        int n = 0;
+        for (HrDiagramData.ZeroAgeLine line : data.isochrones()) {
+            boolean first = data.isochrones().stream().filter(o -> o.ageGyr() == line.ageGyr()).findFirst()
+                    .get() == line;
+            XYSeries s = chart.addSeries(first ? "isochrone, " + SliceLabels.age(line.ageGyr()) : "isochrone " + n++,
+                    line.points().stream().mapToDouble(p -> -p.logTeff()).toArray(),
+                    line.points().stream().mapToDouble(HrPoint::logL).toArray());
+            s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+            s.setMarker(SeriesMarkers.NONE);
+            s.setLineColor(ChartStyle.BLACK);
+            s.setLineStyle(ChartStyle.dashed(data.ages().indexOf(line.ageGyr()), 2.0f));
+            s.setShowInLegend(first);
+        }
     }
 }

@@ -53,9 +53,14 @@ public final class ReportPage {
         maps(b, run, runDir);
         transitions(b, run);
         failures(b, run);
-        b.append("<h2>Convective zones against age</h2>\n<p>")
-                .append(run.hasTracks() ? "Evolution tracks exist in tracks/ but are not charted yet."
-                        : "No evolution tracks in this run.").append("</p>\n</body>\n</html>\n");
+        if (!run.hasTracks()) {
+            b.append("<h2>").append(Html.escape(MapEntry.ZONES_AGE))
+                    .append("</h2>\n<p>No evolution tracks in this run.</p>\n");
+        } else if (run.trackedModels().size() < run.tracks().size()) {
+            b.append("<p class=\"missing\">").append(run.tracks().size() - run.trackedModels().size())
+                    .append(" track file(s) in tracks/ match no catalogue model and are not charted.</p>\n");
+        }
+        b.append("</body>\n</html>\n");
         return b.toString();
     }
 

@@ -58,7 +58,7 @@ public final class ZoneMapRenderer {
     }
 
     /** Fill colour of a zone kind: the hue of the matching structure class, lightened for large areas. */
-    static Color fill(ZoneKind kind) {
+    public static Color fill(ZoneKind kind) {
         return switch (kind) {
             case WHOLE_STAR -> ChartStyle.tint(ChartStyle.VERMILLION, 0.35);
             case CORE -> ChartStyle.tint(ChartStyle.BLUISH_GREEN, 0.35);

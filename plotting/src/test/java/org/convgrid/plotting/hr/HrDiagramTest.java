@@ -7,6 +7,12 @@ import java.util.List;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.plotting.PhysicsKey;
 import org.convgrid.plotting.TestRuns;
+import org.convgrid.plotting.TestTracks;
+import org.convgrid.plotting.tracks.Track;
+import org.convgrid.plotting.tracks.TrackOrigin;
+import org.convgrid.plotting.tracks.TrackReader;
+import org.convgrid.plotting.tracks.TrackStep;
+import org.convgrid.plotting.tracks.TrackedModel;
 import org.junit.jupiter.api.Test;
 
 class HrDiagramTest {
@@ -44,5 +50,32 @@ class HrDiagramTest {
     void aFewRoundMassesAreLabelled() {
         assertThat(data.massLabels()).extracting(HrPoint::massMsun).containsExactly(0.1, 0.2, 0.5, 1.0, 1.5, 2.0);
         assertThat(data.massLabels()).allSatisfy(p -> assertThat(p.zInit()).isEqualTo(0.014));
+    }
+
+    @Test
+    void tracksAndIsochronesOnlyWithTracks() throws Exception {
+        assertThat(data.tracks()).isEmpty();
+        assertThat(data.isochrones()).isEmpty();
+        List<CatalogueRow> small = TestRuns.rows(new double[] {0.5, 1.0, 2.0}, new double[] {0.014},
+                new double[] {0, 1});
+        List<TrackedModel> tracked = new java.util.ArrayList<>();
+        for (CatalogueRow r : small.subList(0, 3)) {
+            Track t = new Track(Track.trackIdOf(r.modelId()), TrackReader.read(new java.io.StringReader(
+                    TestTracks.text(r.massMsun(), r.zInit(), 10))));
+            tracked.add(new TrackedModel(new TrackOrigin(t.trackId(), r.massMsun(), r.zInit(), PhysicsKey.of(r)), t));
+        }
+        HrDiagramData withTracks = HrDiagram.build(PhysicsKey.of(small.get(0)), small, tracked);
+        assertThat(withTracks.tracks()).extracting(HrDiagramData.TrackLine::massMsun).containsExactly(0.5, 1.0, 2.0);
+        HrDiagramData.TrackLine sun = withTracks.tracks().get(1);
+        TrackStep last = tracked.get(1).track().steps().get(10);
+        assertThat(sun.logL()).hasSize(11);
+        assertThat(sun.logL().get(10)).isCloseTo(Math.log10(last.luminosityLsun()), within(1e-12));
+        assertThat(sun.logTeff().get(10)).isCloseTo(Math.log10(last.teffK()), within(1e-12));
+        // Isochrones at both ages, the usable models of that age in mass order (TestRuns fails 1 Msun at 1 Gyr).
+        assertThat(withTracks.isochrones()).extracting(HrDiagramData.ZeroAgeLine::ageGyr).containsExactly(0.0, 1.0);
+        assertThat(withTracks.isochrones().get(0).points()).extracting(HrPoint::massMsun)
+                .containsExactly(0.5, 1.0, 2.0);
+        assertThat(withTracks.isochrones().get(1).points()).extracting(HrPoint::massMsun).containsExactly(0.5, 2.0);
+        assertThat(HrDiagram.build(new PhysicsKey(2.0, 0.0, null, 1.0), small, tracked).tracks()).isEmpty();
     }
 }

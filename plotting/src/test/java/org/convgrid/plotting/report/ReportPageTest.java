@@ -10,6 +10,7 @@ import java.util.regex.Pattern;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.plotting.RunMaps;
 import org.convgrid.plotting.TestRuns;
+import org.convgrid.plotting.TestTracks;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -34,10 +35,22 @@ class ReportPageTest {
             assertThat(m.group(1)).startsWith("maps/");
             assertThat(dir.resolve(m.group(1))).isRegularFile();
         }
-        assertThat(images).isEqualTo(2 * 4 + 2);
+        assertThat(images).isEqualTo(2 * 4 + 3);
         for (CatalogueRow failed : rows.stream().filter(r -> !r.isOk()).toList()) {
             assertThat(html).contains(failed.modelId(), Html.escape(failed.statusDetail()));
         }
+    }
+
+    @Test
+    void tracksGetTheirSectionInsteadOfTheNote(@TempDir Path dir) throws Exception {
+        List<CatalogueRow> rows = TestRuns.rows(new double[] {1.0, 2.0}, new double[] {0.014}, new double[] {0, 1});
+        TestRuns.write(dir, rows);
+        TestTracks.write(dir, rows, 30);
+        Files.writeString(dir.resolve("tracks/p9-z00-m000.csv"), TestTracks.text(1.0, 0.014, 3));
+        RunMaps.drawAll(dir);
+        String html = Files.readString(ReportPage.write(dir));
+        assertThat(html).contains("<h2>Convective zones against age</h2>", "maps/zones-age_m2_z0.014",
+                "1 track file(s) in tracks/ match no catalogue model").doesNotContain("No evolution tracks");
     }
 
     @Test

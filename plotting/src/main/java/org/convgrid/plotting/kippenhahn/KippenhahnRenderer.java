@@ -1,0 +1,130 @@
+package org.convgrid.plotting.kippenhahn;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.FontMetrics;
+import java.awt.Graphics2D;
+import java.awt.Shape;
+import java.awt.geom.Line2D;
+import java.awt.geom.Path2D;
+import java.awt.geom.Rectangle2D;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Set;
+import org.convgrid.plotting.SliceLabels;
+import org.convgrid.plotting.style.ChartNotes;
+import org.convgrid.plotting.style.ChartStyle;
+import org.convgrid.plotting.style.StyledChart;
+import org.convgrid.plotting.zones.ZoneAxis;
+import org.convgrid.plotting.zones.ZoneKind;
+import org.convgrid.plotting.zones.ZoneMapRenderer;
+import org.knowm.xchart.XYSeries;
+import org.knowm.xchart.style.markers.SeriesMarkers;
+
+/**
+ * Turns {@link KippenhahnData} into a chart: age along x, m/M up; convective zones filled in the zone-map colours
+ * (one staircase polygon per band of consecutive steps, see {@link Bands}); the hydrogen-burning region outlined
+ * in black and hatched, not filled, so the convective colours under it stay true and it reads in grey print.
+ */
+public final class KippenhahnRenderer {
+
+    static final String BURNING_LABEL = "hydrogen burning (hatched)";
+    private static final Color TRANSPARENT = new Color(0, 0, 0, 0);
+    private static final float BURNING_EDGE_WIDTH = 2.0f;
+    /** Hatch: 45-degree lines this many pixels apart, this wide. */
+    private static final int HATCH_SPACING = 11;
+    private static final BasicStroke HATCH_STROKE = new BasicStroke(1.3f);
+
+    private KippenhahnRenderer() {
+    }
+
+    /** The chart of one track. */
+    public static StyledChart render(KippenhahnData data) {
+        StyledChart chart = ChartStyle.newChart("Convective zones against age, M = "
+                        + SliceLabels.number(data.origin().massMsun()) + " M\u2609, Z = "
+                        + SliceLabels.number(data.origin().zInit()), data.origin().physics().describe(),
+                "age since the zero-age main sequence / Gyr", ZoneAxis.MASS_FRACTION.title());
+        ChartStyle.legendRight(chart);
+        double span = data.ageMax() - data.ageMin();
+        double xMax = span > 0 ? data.ageMax() : data.ageMin() + 1.0;
+        chart.getStyler().setXAxisMin(data.ageMin()).setXAxisMax(xMax);
+        chart.getStyler().setXAxisDecimalPattern(span < 0.5 ? "0.00" : span < 5 ? "0.0" : "0");
+        ChartStyle.unitYAxis(chart);
+        chart.getStyler().setPlotGridLinesVisible(false);
+        Set<ZoneKind> inLegend = EnumSet.noneOf(ZoneKind.class);
+        int n = 0;
+        List<List<AgeRect>> zoneBands = Bands.join(data.zones(), true);
+        for (ZoneKind kind : ZoneKind.values()) {
+            for (List<AgeRect> band : zoneBands) {
+                if (band.get(0).kind() != kind) {
+                    continue;
+                }
+                boolean first = inLegend.add(kind);
+                Color fill = ZoneMapRenderer.fill(kind);
+                XYSeries s = polygon(chart, first ? kind.label() : "zone band " + n++, band, fill);
+                s.setLineColor(fill);
+                s.setLineWidth(1.0f);
+                s.setShowInLegend(first);
+            }
+        }
+        List<List<AgeRect>> burning = Bands.join(data.burning(), false);
+        for (int i = 0; i < burning.size(); i++) {
+            XYSeries s = polygon(chart, i == 0 ? BURNING_LABEL : "burning band " + i, burning.get(i), TRANSPARENT);
+            s.setLineColor(ChartStyle.BLACK);
+            s.setLineWidth(BURNING_EDGE_WIDTH);
+            s.setShowInLegend(i == 0);
+        }
+        chart.addOverlay((g, c) -> burning.forEach(band -> hatch(g, c, band)));
+        if (data.ageMin() == 0.0) {
+            chart.addOverlay(KippenhahnRenderer::labelZeroAge);
+        }
+        ChartNotes.addRightOfPlot(chart, data.notes());
+        return chart;
+    }
+
+    private static XYSeries polygon(StyledChart chart, String name, List<AgeRect> band, Color fill) {
+        double[][] outline = Bands.outline(band);
+        XYSeries s = chart.addSeries(name, outline[0], outline[1]);
+        s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.PolygonArea);
+        s.setFillColor(fill);
+        s.setMarker(SeriesMarkers.NONE);
+        return s;
+    }
+
+    /** Diagonal lines clipped to the band's outline (drawn as lines, so vector files stay crisp). */
+    private static void hatch(Graphics2D g, StyledChart c, List<AgeRect> band) {
+        double[][] outline = Bands.outline(band);
+        Path2D.Double path = new Path2D.Double();
+        for (int i = 0; i < outline[0].length; i++) {
+            double x = c.getScreenXFromChart(outline[0][i]);
+            double y = c.getScreenYFromChart(outline[1][i]);
+            if (i == 0) {
+                path.moveTo(x, y);
+            } else {
+                path.lineTo(x, y);
+            }
+        }
+        path.closePath();
+        Shape oldClip = g.getClip();
+        g.clip(path);
+        Rectangle2D box = path.getBounds2D();
+        g.setColor(ChartStyle.BLACK);
+        g.setStroke(HATCH_STROKE);
+        // Lines x - y = const, spaced along x, covering the box.
+        for (double start = box.getMinX() - box.getHeight(); start < box.getMaxX(); start += HATCH_SPACING) {
+            g.draw(new Line2D.Double(start, box.getMaxY(), start + box.getHeight(), box.getMinY()));
+        }
+        g.setClip(oldClip);
+    }
+
+    /** XChart leaves the tick at the axis start unlabelled; an age axis that starts at the ZAMS says 0 there. */
+    private static void labelZeroAge(Graphics2D g, StyledChart c) {
+        g.setFont(ChartStyle.TICK_FONT);
+        g.setColor(ChartStyle.BLACK);
+        FontMetrics fm = g.getFontMetrics();
+        double x = c.getScreenXFromChart(0.0);
+        double y = c.getScreenYFromChart(c.getStyler().getYAxisMin()) + c.getStyler().getAxisTickMarkLength()
+                + c.getStyler().getAxisTickPadding() + fm.getAscent();
+        g.drawString("0", (float) (x - fm.stringWidth("0") / 2.0), (float) y);
+    }
+}

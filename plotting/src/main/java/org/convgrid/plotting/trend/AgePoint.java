@@ -1,0 +1,13 @@
+package org.convgrid.plotting.trend;
+
+import org.convgrid.output.Span;
+
+/**
+ * One transition mass at one age, as transitions.csv gives it.
+ *
+ * @param ageGyr age since the zero-age main sequence, Gyr
+ * @param massMsun the transition mass, solar masses
+ * @param bracket the grid masses around it, solar masses (null when the file gives none)
+ */
+public record AgePoint(double ageGyr, double massMsun, Span bracket) {
+}

@@ -1,0 +1,43 @@
+package org.convgrid.plotting.trend;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.function.Function;
+import org.convgrid.output.transitions.TransitionEstimate;
+import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.plotting.PhysicsKey;
+import org.convgrid.plotting.zones.TransitionMarker;
+
+/** Builds the transition-mass-against-age data from transitions.csv rows of one physics: a pure function. */
+public final class TransitionAgeTrend {
+
+    private TransitionAgeTrend() {
+    }
+
+    /**
+     * The chart data of the rows whose physics is {@code physics}: per transition and Z, the found masses in age
+     * order (unbracketed transitions are left out, so a series may have gaps in age).
+     */
+    public static TransitionAgeTrendData build(PhysicsKey physics, List<TransitionRow> rows) {
+        List<TransitionRow> mine = rows.stream().filter(r -> PhysicsKey.of(r.slice()).equals(physics)).toList();
+        List<Double> zs = mine.stream().map(r -> r.slice().zInit()).distinct().sorted().toList();
+        List<TransitionAgeTrendData.Series> series = new ArrayList<>();
+        addAll(series, TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT, TransitionRow::fullyConvective, mine, zs);
+        addAll(series, TransitionMarker.Kind.CONV_CORE_ONSET, TransitionRow::convCore, mine, zs);
+        List<Double> ages = mine.stream().map(r -> r.slice().ageGyr()).distinct().sorted().toList();
+        return new TransitionAgeTrendData(physics, ages, zs, series);
+    }
+
+    private static void addAll(List<TransitionAgeTrendData.Series> out, TransitionMarker.Kind kind,
+                               Function<TransitionRow, TransitionEstimate> which, List<TransitionRow> rows,
+                               List<Double> zs) {
+        for (double z : zs) {
+            List<AgePoint> points = rows.stream().filter(r -> r.slice().zInit() == z)
+                    .filter(r -> which.apply(r).found() && Double.isFinite(which.apply(r).massMsun()))
+                    .map(r -> new AgePoint(r.slice().ageGyr(), which.apply(r).massMsun(), which.apply(r).bracket()))
+                    .sorted(Comparator.comparingDouble(AgePoint::ageGyr)).toList();
+            out.add(new TransitionAgeTrendData.Series(kind, z, points));
+        }
+    }
+}

@@ -1,0 +1,118 @@
+package org.convgrid.plotting.kippenhahn;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.awt.image.BufferedImage;
+import java.io.StringReader;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import javax.imageio.ImageIO;
+import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.output.Span;
+import org.convgrid.plotting.PhysicsKey;
+import org.convgrid.plotting.TestTracks;
+import org.convgrid.plotting.style.ChartFiles;
+import org.convgrid.plotting.style.ChartStyle;
+import org.convgrid.plotting.tracks.Track;
+import org.convgrid.plotting.tracks.TrackOrigin;
+import org.convgrid.plotting.tracks.TrackReader;
+import org.convgrid.plotting.tracks.TrackStep;
+import org.convgrid.plotting.zones.ZoneKind;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class KippenhahnTest {
+
+    private static final PhysicsKey PHYSICS = new PhysicsKey(1.8, 0.0, StabilityCriterion.SCHWARZSCHILD, 1.0);
+
+    private static Track track(double m) throws Exception {
+        return new Track("t", TrackReader.read(new StringReader(TestTracks.text(m, 0.014, 60))));
+    }
+
+    private static KippenhahnData data(double m) throws Exception {
+        return Kippenhahn.build(new TrackOrigin("t", m, 0.014, PHYSICS), track(m));
+    }
+
+    @Test
+    void shadedIntervalsAreTheTrackZonesHeldToTheNextStep() throws Exception {
+        for (double m : new double[] {1.0, 2.0}) {
+            List<TrackStep> steps = track(m).steps();
+            KippenhahnData data = data(m);
+            for (int i = 0; i + 1 < steps.size(); i++) {
+                int step = i;
+                List<AgeRect> mine = data.zones().stream().filter(r -> r.step() == step).toList();
+                assertThat(mine.stream().map(r -> new Span(r.lo(), r.hi())).toList()).as("step %d", i)
+                        .isEqualTo(steps.get(i).convZones());
+                assertThat(mine).allSatisfy(r -> {
+                    assertThat(r.left()).isEqualTo(steps.get(step).ageGyr());
+                    assertThat(r.right()).isEqualTo(steps.get(step + 1).ageGyr());
+                });
+            }
+            int last = steps.size() - 1;
+            assertThat(data.zones()).noneMatch(r -> r.step() == last);
+            assertThat(data.ageMin()).isEqualTo(steps.get(0).ageGyr());
+            assertThat(data.ageMax()).isEqualTo(steps.get(last).ageGyr());
+            assertThat(data.notes()).isEmpty();
+        }
+    }
+
+    @Test
+    void burningBandIsTheTrackBurningZone() throws Exception {
+        List<TrackStep> steps = track(1.0).steps();
+        KippenhahnData data = data(1.0);
+        assertThat(data.burning()).hasSize(steps.size() - 1);
+        for (AgeRect r : data.burning()) {
+            assertThat(new Span(r.lo(), r.hi())).isEqualTo(steps.get(r.step()).burningZone());
+        }
+        // The synthetic burning region leaves the centre near exhaustion: a shell, still one band.
+        assertThat(data.burning().get(data.burning().size() - 1).lo()).isGreaterThan(0.0);
+        assertThat(Bands.join(data.burning(), false)).hasSize(1);
+    }
+
+    @Test
+    void bandsFollowTheZonesThroughTheSteps() throws Exception {
+        // 1 Msun: a deepening envelope (one band) and an early transient core (one band).
+        List<List<AgeRect>> sun = Bands.join(data(1.0).zones(), true);
+        assertThat(sun).hasSize(2);
+        List<AgeRect> envelope = sun.stream().filter(b -> b.get(0).kind() == ZoneKind.ENVELOPE).findFirst()
+                .orElseThrow();
+        assertThat(envelope.get(envelope.size() - 1).lo()).isLessThan(envelope.get(0).lo());
+        // 2 Msun: one shrinking core.
+        List<List<AgeRect>> massive = Bands.join(data(2.0).zones(), true);
+        assertThat(massive).singleElement().satisfies(core -> {
+            assertThat(core.get(0).kind()).isEqualTo(ZoneKind.CORE);
+            assertThat(core.get(core.size() - 1).hi()).isLessThan(core.get(0).hi());
+        });
+        double[][] outline = Bands.outline(massive.get(0));
+        assertThat(outline[0]).hasSize(4 * massive.get(0).size() + 1);
+        assertThat(outline[0][0]).isEqualTo(outline[0][outline[0].length - 1]);
+    }
+
+    @Test
+    void aSplittingZoneStartsNewBands() {
+        List<AgeRect> rects = new ArrayList<>(List.of(new AgeRect(0, 0, 1, 0.5, 0.8), new AgeRect(1, 1, 2, 0.5, 0.6),
+                new AgeRect(1, 1, 2, 0.7, 0.8)));
+        assertThat(Bands.join(rects, true)).hasSize(3);
+    }
+
+    @Test
+    void equalAgesAndSingleStepsAreHandled() throws Exception {
+        String text = "age_gyr,conv_zones_mass_frac,burning_zone_mass_frac\n0,0-0.1,0-0.2\n0,0-0.3,0-0.2\n1,0-0.2,\n";
+        Track t = new Track("t", TrackReader.read(new StringReader(text)));
+        KippenhahnData data = Kippenhahn.build(new TrackOrigin("t", 1.5, 0.014, PHYSICS), t);
+        assertThat(data.zones()).singleElement().satisfies(r -> assertThat(r.hi()).isEqualTo(0.3));
+        Track single = new Track("t", t.steps().subList(2, 3));
+        assertThat(Kippenhahn.build(new TrackOrigin("t", 1.5, 0.014, PHYSICS), single).notes())
+                .containsExactly(Kippenhahn.TOO_SHORT_NOTE);
+    }
+
+    @Test
+    void chartIsAPngOfTheStatedSize(@TempDir Path dir) throws Exception {
+        Path png = dir.resolve("k.png");
+        ChartFiles.writePng(KippenhahnRenderer.render(data(2.0)), png);
+        BufferedImage image = ImageIO.read(png.toFile());
+        assertThat(image.getWidth()).isEqualTo(ChartStyle.WIDTH);
+        assertThat(image.getHeight()).isEqualTo(ChartStyle.HEIGHT);
+    }
+}
