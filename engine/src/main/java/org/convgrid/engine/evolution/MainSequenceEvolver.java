@@ -10,6 +10,7 @@ import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.HenyeySolver;
 import org.convgrid.engine.structure.MeshPlanner;
+import org.convgrid.engine.structure.ModelState;
 import org.convgrid.engine.structure.SolveFailedException;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.structure.StellarProfile;
@@ -207,7 +208,9 @@ public final class MainSequenceEvolver {
         int n = start.state().size();
         double[] rho = start.density().clone();
         double[] t = start.temperature().clone();
-        if (!remesh && older != null && older.state().mesh() == previous.state().mesh() && olderStep > 0.0) {
+        boolean sameMesh = !remesh && older != null && older.state().mesh() == previous.state().mesh()
+                && olderStep > 0.0;
+        if (sameMesh) {
             double w = 0.5 * dt / olderStep;
             StellarProfile p = older.profile();
             for (int k = 0; k < n; k++) {
@@ -222,7 +225,37 @@ public final class MainSequenceEvolver {
         comp = ConvectiveMixing.mix(start.state().mesh(), comp, start.convective());
         double[] lnT = start.state().lnTemperatures();
         GravothermalEnergy grav = new GravothermalEnergy(lnT, start.lnPressure(), dt);
-        return solver.relax(start.state().withCompositions(comp), grav, null, solveSettings);
+        ModelState guess = start.state().withCompositions(comp);
+        if (sameMesh) {
+            try {
+                return solver.relax(extrapolated(older.state(), guess, dt / olderStep), grav, null, solveSettings);
+            } catch (SolveFailedException e) {
+                // an extrapolation that overshoots (e.g. across a change of the convective zones) is no worse
+                // than no extrapolation: fall back to the previous model as the guess
+            }
+        }
+        return solver.relax(guess, grav, null, solveSettings);
+    }
+
+    /**
+     * The starting guess of a step: the unknowns extrapolated linearly in time from the model before
+     * ({@code older}) through the previous one ({@code previous}, with the step's composition), by
+     * {@code ratio} = this step / the step before. Both share a mesh. The structure drifts smoothly on the main
+     * sequence, so this removes the first-order part of the change and saves Newton iterations.
+     */
+    private static ModelState extrapolated(ModelState older, ModelState previous, double ratio) {
+        int n = previous.size();
+        double[] lnR = previous.lnRadii();
+        double[] lnRho = previous.lnDensities();
+        double[] lnT = previous.lnTemperatures();
+        double[] lum = previous.luminosities();
+        for (int k = 0; k < n; k++) {
+            lnR[k] += ratio * (lnR[k] - older.lnRadius(k));
+            lnRho[k] += ratio * (lnRho[k] - older.lnDensity(k));
+            lnT[k] += ratio * (lnT[k] - older.lnTemperature(k));
+            lum[k] += ratio * (lum[k] - older.luminosity(k));
+        }
+        return new ModelState(previous.mesh(), previous.compositions(), lnR, lnRho, lnT, lum);
     }
 
     /** |D X| / {@link #COMPOSITION_MESH_STEP} per interval: the mesh cost of composition gradients. */

@@ -103,13 +103,16 @@ public final class HenyeySolver {
             String rejection = null;
             boolean accepted = false;
             boolean searching = largest > settings.maxStep() * LINE_SEARCH_THRESHOLD;
+            // the state after a converged correction is returned without another factorisation: its residuals
+            // (and the system's scratch values) are needed, its Jacobian is not
+            boolean last = largest <= settings.tolerance();
             for (int cut = 0; cut <= MAX_BACKTRACKS && !accepted; cut++) {
                 for (int i = 0; i < n; i++) {
                     trial[i] = y[i] + lambda * delta[i];
                 }
                 jacobian.clear();
                 try {
-                    system.evaluate(trial, residual, jacobian);
+                    system.evaluate(trial, residual, last ? null : jacobian);
                     accepted = allFinite(residual);
                     rejection = accepted ? null : "non-finite residual";
                     // far from the solution, also ask the residuals to shrink (the last cut is taken anyway)
@@ -129,7 +132,7 @@ public final class HenyeySolver {
                         worst % nv, "every damped step was rejected: " + rejection));
             }
             System.arraycopy(trial, 0, y, 0, n);
-            if (largest <= settings.tolerance()) {
+            if (last) {
                 return new Result(y, new SolveReport(StopReason.CONVERGED, iteration, largest, worst / nv,
                         worst % nv, ""));
             }

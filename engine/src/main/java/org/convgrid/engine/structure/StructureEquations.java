@@ -32,9 +32,10 @@ import org.convgrid.engine.units.Constants;
  *
  * <p>nabla = nabla_rad = 3 kappa L P/(16 pi a c G m T^4) where stable; where nabla_rad exceeds nabla_ad
  * (Schwarzschild) or nabla_ad + nabla_mu/delta (Ledoux, ideal-gas phi = 1) the convection model gives nabla.
- * Jacobians: analytic in radiative points (from the EOS chi's and the opacity/rate logarithmic derivatives),
- * one-sided differences of the whole local evaluation in convective points, and of eps through the slaved
- * abundances where burning matters (so the iteration stays quadratic). Not thread-safe (scratch space).
+ * Jacobians: analytic in radiative points (from the EOS chi's, the opacity/rate logarithmic derivatives and
+ * {@link ExtraEnergy#withSlopes}), one-sided differences of the whole local evaluation in convective points (and
+ * of an extra source without analytic slopes, everywhere), and of eps through the slaved abundances where
+ * burning matters (so the iteration stays quadratic). Not thread-safe (scratch space).
  */
 public final class StructureEquations implements DifferenceSystem {
 
@@ -204,7 +205,9 @@ public final class StructureEquations implements DifferenceSystem {
         epsNuclear[k] = burn.eps();
         double r = Math.exp(lnR);
         nabla[k] = localNabla(k, r, lum, s, op.kappa(), true);
-        double ex = extra.at(k, s);
+        // the extra source with its analytic derivatives when it has them (null: differentiated numerically below)
+        ExtraEnergy.Rate extraRate = derivatives ? extra.withSlopes(k, s) : null;
+        double ex = extraRate != null ? extraRate.value() : extra.at(k, s);
         double nuclear = burningFactor * burn.eps();
         eps[k] = nuclear + ex;
         if (!derivatives) {
@@ -222,8 +225,12 @@ public final class StructureEquations implements DifferenceSystem {
             dEps[2 * k + 1] = (burningFactor * physics.nuclear().burn(rho, tUp, compositionRule.at(k, rho, tUp)).eps()
                     - nuclear) / h;
         }
+        if (extraRate != null) {
+            dEps[2 * k] += extraRate.dLnRho();
+            dEps[2 * k + 1] += extraRate.dLnT();
+        }
         boolean convective = convection[k] != null && convection[k].convective();
-        if (!convective && extra == ExtraEnergy.NONE) {
+        if (!convective && extraRate != null) {
             // radiative: nabla = C kappa L P / (m T^4), differentiated analytically
             double nr = nabla[k];
             dNabla[4 * k] = 0.0;
@@ -244,7 +251,7 @@ public final class StructureEquations implements DifferenceSystem {
         dNabla[4 * k + 2] = (localNabla(k, r, lum, sT, opT.kappa(), false) - base) / h;
         double dl = h * Math.max(Math.abs(y[4 * k + 3]), 1.0e-3);
         dNabla[4 * k + 3] = (localNabla(k, r, lum + dl * luminosityScale, s, op.kappa(), false) - base) / dl;
-        if (extra != ExtraEnergy.NONE) {
+        if (extraRate == null) {
             dEps[2 * k] += (extra.at(k, sRho) - ex) / h;
             dEps[2 * k + 1] += (extra.at(k, sT) - ex) / h;
         }

@@ -1,0 +1,149 @@
+package org.convgrid.engine.evolution;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import org.convgrid.engine.physics.PhysicsSet;
+import org.convgrid.engine.physics.eos.EosState;
+import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.structure.BandMatrix;
+import org.convgrid.engine.structure.ExtraEnergy;
+import org.convgrid.engine.structure.HenyeySolver;
+import org.convgrid.engine.structure.ModelState;
+import org.convgrid.engine.structure.StellarModel;
+import org.convgrid.engine.structure.StructureEquations;
+import org.convgrid.engine.structure.StructureSolver;
+import org.convgrid.engine.units.Constants;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The analytic derivatives of eps_grav against central differences, at the model one evolution step (1e8 yr)
+ * after the 1 Msun zero-age model, where eps_grav is non-zero everywhere. Differences through the real
+ * equation of state are the reference (common practice for checking a Newton Jacobian). The analytic slopes
+ * hold c_P and nabla_ad fixed, so they differ from the differences by |A| dln c_P, A = D lnT - nabla_ad D lnP
+ * ~ 1e-4-1e-3 over this step: ~1e-5 of c_P T/dt in the radiative interior, up to ~1e-3 in the ionisation zones
+ * of the convective envelope, where c_P varies fast (measured; the tolerances below leave a factor 2-3).
+ */
+class GravothermalEnergyTest {
+
+    private static final double STEP = 1.0e8 * Constants.YEAR;
+    /** Step of the central differences in ln rho, ln T (relative for L). */
+    private static final double H = 1.0e-5;
+    /** Allowed error of the slopes, in units of c_P T/dt, in radiative points. */
+    private static final double RADIATIVE_TOLERANCE = 1.0e-4;
+    /** The same in convective points (ionisation zones). */
+    private static final double CONVECTIVE_TOLERANCE = 3.0e-3;
+
+    private static PhysicsSet physics;
+    private static GravothermalEnergy grav;
+    private static StellarModel stepped;
+
+    @BeforeAll
+    static void oneStep() {
+        physics = EvolutionFixtures.physics(EvolutionFixtures.SOLAR);
+        StellarModel zeroAge = EvolutionFixtures.zeroAge(EvolutionFixtures.SOLAR, 1.0).model();
+        StepStart start = StepStart.of(zeroAge);
+        CompositionStep network = new CompositionStep(physics.nuclear());
+        Composition[] comp = new Composition[start.state().size()];
+        for (int k = 0; k < comp.length; k++) {
+            comp[k] = network.advance(start.density()[k], start.temperature()[k], start.state().composition(k),
+                    STEP);
+        }
+        grav = new GravothermalEnergy(start.state().lnTemperatures(), start.lnPressure(), STEP);
+        stepped = new StructureSolver(physics).relax(start.state().withCompositions(comp), grav, null,
+                HenyeySolver.Settings.DEFAULT);
+    }
+
+    @Test
+    void slopesMatchDifferencesThroughTheEquationOfState() {
+        var p = stepped.profile();
+        for (int k = 0; k < p.size(); k += 10) {
+            double rho = p.density(k);
+            double t = p.temperature(k);
+            Composition c = stepped.state().composition(k);
+            EosState s = physics.eos().atDensity(rho, t, c);
+            ExtraEnergy.Rate rate = grav.withSlopes(k, s);
+            double dRho = (grav.at(k, physics.eos().atDensity(rho * Math.exp(H), t, c))
+                    - grav.at(k, physics.eos().atDensity(rho * Math.exp(-H), t, c))) / (2.0 * H);
+            double dT = (grav.at(k, physics.eos().atDensity(rho, t * Math.exp(H), c))
+                    - grav.at(k, physics.eos().atDensity(rho, t * Math.exp(-H), c))) / (2.0 * H);
+            double scale = s.cp() * t / STEP;
+            double tolerance = (p.convective(k) ? CONVECTIVE_TOLERANCE : RADIATIVE_TOLERANCE) * scale;
+            assertThat(rate.value()).isEqualTo(grav.at(k, s));
+            // eps_grav is non-zero at every point after the step (the star contracts and heats)
+            assertThat(Math.abs(rate.value())).isGreaterThan(1.0e-6 * scale);
+            assertThat(rate.dLnRho()).as("d eps_grav/dln rho at point %d", k).isCloseTo(dRho, within(tolerance));
+            assertThat(rate.dLnT()).as("d eps_grav/dlnT at point %d", k).isCloseTo(dT, within(tolerance));
+        }
+    }
+
+    @Test
+    void structureJacobianWithEpsGravMatchesDifferencesOfTheResiduals() {
+        ModelState state = stepped.state();
+        int n = state.size();
+        StructureEquations eq = new StructureEquations(state.mesh(), state.compositions(), physics,
+                state.surfaceLuminosity(), null, grav);
+        double[] y = eq.unknowns(state);
+        int size = y.length;
+        BandMatrix jac = new BandMatrix(size, eq.lowerBandwidth(), eq.upperBandwidth());
+        eq.evaluate(y, new double[size], jac);
+        double[] up = new double[size];
+        double[] down = new double[size];
+        int checkedEnergy = 0;
+        for (int k = 0; k < n; k += 23) {
+            EosState s = physics.eos().atDensity(Math.exp(y[eq.column(k, 1)]), Math.exp(y[eq.column(k, 2)]),
+                    state.composition(k));
+            double gravScale = s.cp() * s.temperature() / STEP;
+            double tolerance = stepped.profile().convective(k) ? CONVECTIVE_TOLERANCE : RADIATIVE_TOLERANCE;
+            for (int j = 0; j < 4; j++) {
+                int col = eq.column(k, j);
+                double h = j == 3 ? H * Math.max(Math.abs(y[col]), 1.0e-3) : H;
+                double[] shifted = y.clone();
+                shifted[col] = y[col] + h;
+                eq.evaluate(shifted, up, null);
+                shifted[col] = y[col] - h;
+                eq.evaluate(shifted, down, null);
+                int lo = Math.max(0, col - eq.upperBandwidth());
+                int hi = Math.min(size - 1, col + eq.lowerBandwidth());
+                for (int row = lo; row <= hi; row++) {
+                    double fd = (up[row] - down[row]) / (2.0 * h);
+                    double analytic = jac.get(row, col);
+                    // every entry, against the largest of its row (one-sided differences in convective points)
+                    assertThat(analytic).as("row %d, point %d, unknown %d", row, k, j)
+                            .isCloseTo(fd, within(1.0e-5 * rowScale(jac, eq, row, size)));
+                    // energy rows in ln rho and ln T, where eps_grav enters: against the eps_grav term itself
+                    // (dm/(2 L_scale) c_P T/dt), which is ~1e-3 and less of the row's largest entry
+                    if (isEnergyRowOfInterval(row, n) && (j == 1 || j == 2) && touches(row, k)) {
+                        int interval = (row - eq.centralConditions()) / 4;
+                        double e = 0.5 * state.mesh().intervalMass(interval) / state.surfaceLuminosity();
+                        assertThat(analytic).as("energy row %d, point %d, unknown %d", row, k, j)
+                                .isCloseTo(fd, within(tolerance * e * gravScale));
+                        checkedEnergy++;
+                    }
+                }
+            }
+        }
+        assertThat(checkedEnergy).isGreaterThan(80);
+    }
+
+    private static boolean isEnergyRowOfInterval(int row, int points) {
+        return row >= 2 && row < 2 + 4 * (points - 1) && (row - 2) % 4 == 2;
+    }
+
+    /** Whether the interval of this energy row has point k at one of its ends. */
+    private static boolean touches(int row, int k) {
+        int interval = (row - 2) / 4;
+        return interval == k || interval == k - 1;
+    }
+
+    private static double rowScale(BandMatrix jac, StructureEquations eq, int row, int size) {
+        double largest = 0.0;
+        int first = Math.max(0, row - eq.lowerBandwidth());
+        int last = Math.min(size - 1, row + eq.upperBandwidth());
+        for (int c = first; c <= last; c++) {
+            largest = Math.max(largest, Math.abs(jac.get(row, c)));
+        }
+        return largest;
+    }
+}
