@@ -20,6 +20,10 @@ class AnalyticCompositeOpacityTest extends OpacityContractTest {
     static final double INTERIOR_DEX = 0.2;
     /** Allowed |log kappa - log kappa_OPAL| in the photospheric H^- regime, dex. */
     static final double PHOTOSPHERE_DEX = 0.25;
+    /** Allowed rms of log kappa - log kappa_OPAL over the envelope window 4.0-6.0, -6..-1, dex. */
+    static final double ENVELOPE_RMS_DEX = 0.2;
+    /** Allowed worst |log kappa - log kappa_OPAL| over the envelope window, dex. */
+    static final double ENVELOPE_WORST_DEX = 0.45;
     /** Table entries above this are the "outside the table" marker 9.999. */
     static final double OUT_OF_TABLE = 9.0;
 
@@ -64,6 +68,46 @@ class AnalyticCompositeOpacityTest extends OpacityContractTest {
         // Same OPAL table (X = 0.70, Z = 0.02): 5600-7100 K, -1.5 <= log R <= 0 (the solar photosphere has log R 0.05), where H^- dominates and where the
         // H^- power law was fitted (rms 0.15 dex over its wider fit window -3 <= log R <= 1).
         assertWithinDex("opal-gn93-x070-z002.txt", 0.70, 3.75, 3.85, -1.5, 0.0, PHOTOSPHERE_DEX);
+    }
+
+    @Test
+    void followsOpalThroughTheEnvelopeHydrogenAndZBumpRegion() throws IOException {
+        // Iglesias & Rogers 1996 (ApJ 464, 943), OPAL GN93, X = 0.70, Z = 0.02. The envelope term
+        // (EnvelopeAbsorption) was fitted over 4.0 <= log T <= 6.0, -6 <= log R <= -1: 0.15 dex rms, 0.43 dex worst
+        // (log T 4.65, log R -1); without it 0.54 rms, 1.04 worst (log T 5.3, log R -4, the Z bump).
+        List<Double> d = residuals("opal-gn93-x070-z002.txt", 0.70, 4.0, 6.0, -6.0, -1.0);
+        double rms = Math.sqrt(d.stream().mapToDouble(v -> v * v).average().orElseThrow());
+        assertThat(d).hasSizeGreaterThan(300).allSatisfy(v -> assertThat(v).isBetween(-ENVELOPE_WORST_DEX,
+                ENVELOPE_WORST_DEX));
+        assertThat(rms).isLessThan(ENVELOPE_RMS_DEX);
+        // the Z bump itself (log T 5.2-5.4, log R -5..-3) was 0.5-1 dex low; now within 0.35 dex
+        assertThat(residuals("opal-gn93-x070-z002.txt", 0.70, 5.2, 5.4, -5.0, -3.0))
+                .allSatisfy(v -> assertThat(v).isBetween(-0.35, 0.35));
+    }
+
+    private List<Double> residuals(String table, double x, double logTMin, double logTMax, double logRMin,
+                                   double logRMax) throws IOException {
+        List<String[]> rows = rows("/reference/opacity/" + table);
+        String[] header = rows.get(0);
+        Composition c = Composition.scaledSolar(x, 0.02);
+        List<Double> out = new ArrayList<>();
+        for (String[] row : rows.subList(1, rows.size())) {
+            double logT = Double.parseDouble(row[0]);
+            if (logT < logTMin - 1e-9 || logT > logTMax + 1e-9) {
+                continue;
+            }
+            for (int j = 1; j < header.length; j++) {
+                double logR = Double.parseDouble(header[j]);
+                double logK = Double.parseDouble(row[j]);
+                if (logR < logRMin - 1e-9 || logR > logRMax + 1e-9 || logK > OUT_OF_TABLE) {
+                    continue;
+                }
+                double t = Math.pow(10.0, logT);
+                double rho = Math.pow(10.0, logR) * Math.pow(t * 1e-6, 3);
+                out.add(Math.log10(composite.rosselandMean(rho, t, c).kappa()) - logK);
+            }
+        }
+        return out;
     }
 
     private void assertWithinDex(String table, double x, double logTMin, double logTMax, double logRMin,
