@@ -81,7 +81,7 @@ final class RunCommand implements Callable<Integer> {
         }
         Shard chosen = ShardChoice.choose(shard, context.environment()).orElse(null);
         RunDirectory dir = new RunDirectory(context.resolve(out != null ? out : defaultDirectory(file, chosen)));
-        boolean evolves = file.spec().agesGyr().stream().anyMatch(a -> a > 0.0);
+        boolean evolves = file.spec().ages().evolves();
         TrackFiles tracks = new TrackFiles(dir.tracks());
         ChunkSolver solver = evolves ? context.solvers().solverFor(file.spec(), tracks)
                 : context.solvers().solverFor(file.spec());

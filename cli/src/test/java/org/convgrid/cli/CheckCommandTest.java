@@ -29,6 +29,20 @@ class CheckCommandTest {
     }
 
     @Test
+    void printsMainSequenceFractions() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "fractions.yaml", """
+                mass: {values: [1.0, 2.0]}
+                metallicity: {z: 0.014, y: 0.27}
+                age: {ms_fraction: [0, 0.25, 0.5, 0.9]}
+                """);
+        CliHarness.Execution check = CliHarness.in(work, FakeChunkSolver.fast()).execute("check", grid.toString());
+        assertThat(check.code()).as(check.err()).isEqualTo(0);
+        assertThat(check.out()).contains("models:        8")
+                .contains("ages:          4: 0, 0.25, 0.5, 0.9 of each star's main-sequence lifetime (0 = ZAMS, "
+                        + "1 = core-hydrogen exhaustion at X_c = 1e-4)");
+    }
+
+    @Test
     void badGridListsEveryProblemWithFileLineAndColumn() throws Exception {
         Path grid = CliHarness.writeGrid(work, "bad.yaml", """
                 mass:

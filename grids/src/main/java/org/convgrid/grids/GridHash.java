@@ -49,7 +49,9 @@ public final class GridHash {
         text.append("z_y=");
         spec.metallicities().forEach(p -> text.append('[').append(p.z()).append(',').append(p.y()).append(']'));
         text.append('\n');
-        text.append("age_gyr=").append(spec.agesGyr()).append('\n');
+        // Gyr grids keep their original line, so the fingerprints of existing runs do not change.
+        text.append(spec.ages().fractions() ? "age_ms_fraction=" : "age_gyr=").append(spec.ages().values())
+                .append('\n');
         PhysicsAxes physics = spec.physics();
         text.append("mixing_length=").append(physics.mixingLengths()).append('\n');
         text.append("overshoot=").append(physics.overshoots()).append('\n');

@@ -21,13 +21,15 @@ import org.convgrid.engine.units.Constants;
  * @param title free text
  * @param massesMsun total masses, solar masses, strictly increasing
  * @param metallicities initial compositions, strictly increasing in Z
- * @param agesGyr ages since the ZAMS, Gyr, strictly increasing
+ * @param ages the age axis, strictly increasing: Gyr since the ZAMS, or fractions of each star's main-sequence
+ *             lifetime (then every request's age field holds the bare fraction, to be read by a solver built with
+ *             {@link AgeAxis#meaning()}; see {@code org.convgrid.engine.evolution.AgeMeaning})
  * @param physics the physics axes
  * @param outputDir the run directory as written in the file (relative paths are the caller's to resolve)
  * @param profiles whether one profile file per model is wanted
  */
 public record GridSpec(String title, List<Double> massesMsun, List<MetallicityPoint> metallicities,
-                       List<Double> agesGyr, PhysicsAxes physics, String outputDir, boolean profiles) {
+                       AgeAxis ages, PhysicsAxes physics, String outputDir, boolean profiles) {
 
     /** Largest grid {@link #expand()} materialises; iterate {@link #requests()} beyond it. */
     public static final long MAX_EXPANDED = 1_000_000L;
@@ -37,21 +39,40 @@ public record GridSpec(String title, List<Double> massesMsun, List<MetallicityPo
         Objects.requireNonNull(outputDir, "outputDir");
         massesMsun = increasing(massesMsun, "mass");
         metallicities = List.copyOf(metallicities);
-        agesGyr = increasing(agesGyr, "age");
+        Objects.requireNonNull(ages, "ages");
+        ages = new AgeAxis(ages.meaning(), increasing(ages.values(), "age"));
         Objects.requireNonNull(physics, "physics");
         if (metallicities.isEmpty()) {
             throw new IllegalArgumentException("metallicity axis is empty");
         }
     }
 
+    /** A grid with ages in Gyr. */
+    public GridSpec(String title, List<Double> massesMsun, List<MetallicityPoint> metallicities, List<Double> agesGyr,
+                    PhysicsAxes physics, String outputDir, boolean profiles) {
+        this(title, massesMsun, metallicities, AgeAxis.gyr(agesGyr), physics, outputDir, profiles);
+    }
+
+    /**
+     * The ages in Gyr.
+     *
+     * @throws IllegalStateException when the grid gives its ages as main-sequence fractions
+     */
+    public List<Double> agesGyr() {
+        if (ages.fractions()) {
+            throw new IllegalStateException("this grid gives its ages as main-sequence fractions: " + ages.values());
+        }
+        return ages.values();
+    }
+
     /** Number of models, without expanding the grid. */
     public long count() {
-        return (long) physics.size() * metallicities.size() * massesMsun.size() * agesGyr.size();
+        return (long) physics.size() * metallicities.size() * massesMsun.size() * ages.values().size();
     }
 
     /** The id format of this grid. */
     public ModelIdFormat idFormat() {
-        return ModelIdFormat.forAxes(physics.size(), metallicities.size(), massesMsun.size(), agesGyr.size());
+        return ModelIdFormat.forAxes(physics.size(), metallicities.size(), massesMsun.size(), ages.values().size());
     }
 
     /** The model at position {@code index} of the grid order, in cgs. */
@@ -59,8 +80,8 @@ public record GridSpec(String title, List<Double> massesMsun, List<MetallicityPo
         if (index < 0 || index >= count()) {
             throw new IndexOutOfBoundsException("model " + index + " of " + count());
         }
-        int a = (int) (index % agesGyr.size());
-        long rest = index / agesGyr.size();
+        int a = (int) (index % ages.values().size());
+        long rest = index / ages.values().size();
         int m = (int) (rest % massesMsun.size());
         rest /= massesMsun.size();
         int z = (int) (rest % metallicities.size());
@@ -108,7 +129,7 @@ public record GridSpec(String title, List<Double> massesMsun, List<MetallicityPo
     private ModelRequest request(ModelIdFormat ids, int p, int z, int m, int a, PhysicsOptions options) {
         MetallicityPoint point = metallicities.get(z);
         return new ModelRequest(ids.modelId(p, z, m, a), massesMsun.get(m) * Constants.M_SUN, point.z(),
-                point.y(), agesGyr.get(a) * Constants.GYR, options);
+                point.y(), ages.requestAge(a), options);
     }
 
     private static List<Double> increasing(List<Double> values, String name) {
@@ -148,7 +169,7 @@ public record GridSpec(String title, List<Double> massesMsun, List<MetallicityPo
         }
 
         private void advance() {
-            if (++a < agesGyr.size()) {
+            if (++a < ages.values().size()) {
                 return;
             }
             a = 0;

@@ -34,7 +34,10 @@ public final class GridSummary {
         lines.add("masses:        " + axis(g.massesMsun(), "Msun"));
         lines.add("metallicities: " + g.metallicities().size() + ": " + g.metallicities().stream()
                 .map(p -> "Z=" + n(p.z()) + " Y=" + n(p.y())).collect(Collectors.joining(", ")));
-        lines.add("ages:          " + axis(g.agesGyr(), "Gyr") + " (0 = ZAMS)");
+        lines.add(g.ages().fractions()
+                ? "ages:          " + axis(g.ages().values(), "of each star's main-sequence lifetime")
+                        + " (0 = ZAMS, 1 = core-hydrogen exhaustion at X_c = 1e-4)"
+                : "ages:          " + axis(g.ages().values(), "Gyr") + " (0 = ZAMS)");
         List<PhysicsOptions> physics = g.physics().combinations();
         lines.add("physics:       " + physics.size() + (physics.size() == 1 ? " combination" : " combinations"));
         for (PhysicsOptions p : physics) {

@@ -31,6 +31,14 @@ import org.convgrid.engine.zams.ZeroAgeRequests;
  * exhaustion age in the detail; a failed evolution leaves the ages it did not reach
  * {@link ModelStatus#NOT_CONVERGED}. Each star with an age above zero hands its track to the {@link TrackSink}.
  *
+ * <p>With {@link AgeMeaning#MS_FRACTION} the request ages are fractions f of each star's main-sequence lifetime:
+ * the star is first evolved to core-hydrogen exhaustion ({@link LifetimeSearch}) to find t_MS, then evolved again
+ * from its zero-age model landing exactly on every t = f t_MS (f = 1: the exhaustion age, X_c = 1e-4 by default, to
+ * within the second run's steps); the outcomes carry the request with t in s. The track handed over is the second
+ * run's, and the iteration counts are those of the second run. A star whose lifetime cannot be found (evolution
+ * failed, or X_c still above the end value at the age limit, as for stars below about 0.9 Msun with the default
+ * 20 Gyr) answers its non-zero fractions {@link ModelStatus#NOT_CONVERGED} with age NaN and the reason.
+ *
  * <p>An outcome depends only on its chunk, never on threads. Thread-safe: the physics bundle of each
  * (options, composition) line is built once per instance and shared; the bundles are immutable.
  */
@@ -48,14 +56,22 @@ public final class GridRequests implements ChunkSolver {
     private final Map<Line, PhysicsSet> physics = new ConcurrentHashMap<>();
     private final TrackSink tracks;
     private final MainSequenceEvolver.Settings settings;
+    private final AgeMeaning meaning;
 
     /**
      * @param tracks receives the track of every star evolved beyond age 0
      * @param settings time-step settings; {@code maxAge} caps the ages answered (older ones fail)
+     * @param meaning how the request ages are read (the grid's age axis)
      */
-    public GridRequests(TrackSink tracks, MainSequenceEvolver.Settings settings) {
+    public GridRequests(TrackSink tracks, MainSequenceEvolver.Settings settings, AgeMeaning meaning) {
         this.tracks = tracks;
         this.settings = settings;
+        this.meaning = meaning;
+    }
+
+    /** Ages in seconds. */
+    public GridRequests(TrackSink tracks, MainSequenceEvolver.Settings settings) {
+        this(tracks, settings, AgeMeaning.SECONDS);
     }
 
     /** Default time steps ({@link MainSequenceEvolver.Settings#DEFAULT}). */
@@ -86,14 +102,20 @@ public final class GridRequests implements ChunkSolver {
                 end++;
             }
             List<ModelRequest> star = chunk.subList(start, end);
-            out.addAll(star(set, star, track.solve(star.get(0).mass())));
+            ZamsResult zeroAge = track.solve(star.get(0).mass());
+            out.addAll(meaning == AgeMeaning.MS_FRACTION ? FractionAges.answers(this, set, star, zeroAge)
+                    : star(set, star, zeroAge, settings));
             start = end;
         }
         return out;
     }
 
-    /** The answers for the requests of one star (one mass), in their order. */
-    private List<Answer> star(PhysicsSet set, List<ModelRequest> star, ZamsResult zeroAge) {
+    /**
+     * The answers for the requests of one star (one mass, ages in s), in their order.
+     *
+     * @param base the evolution settings, before stopping at the oldest requested age
+     */
+    List<Answer> star(PhysicsSet set, List<ModelRequest> star, ZamsResult zeroAge, MainSequenceEvolver.Settings base) {
         List<Answer> out = new ArrayList<>(star.size());
         double oldest = star.stream().mapToDouble(ModelRequest::age).max().orElse(0.0);
         if (!zeroAge.converged() || oldest <= 0.0) {
@@ -107,7 +129,7 @@ public final class GridRequests implements ChunkSolver {
         double[] ages = star.stream().mapToDouble(ModelRequest::age).toArray();
         EvolutionResult result;
         try {
-            result = new MainSequenceEvolver(set, stoppingAt(oldest)).evolve(zeroAge.model().model(), ages);
+            result = new MainSequenceEvolver(set, stoppingAt(base, oldest)).evolve(zeroAge.model().model(), ages);
         } catch (ConvgridException e) {
             for (ModelRequest r : star) {
                 out.add(r.age() <= 0.0 ? new Answer(ZeroAgeRequests.outcome(r, zeroAge), modelOf(zeroAge))
@@ -149,18 +171,22 @@ public final class GridRequests implements ChunkSolver {
     }
 
     /** The settings stopped at the oldest requested age (no steps beyond what the catalogue asks for). */
-    private MainSequenceEvolver.Settings stoppingAt(double oldest) {
-        MainSequenceEvolver.Settings s = settings;
+    private static MainSequenceEvolver.Settings stoppingAt(MainSequenceEvolver.Settings s, double oldest) {
         return new MainSequenceEvolver.Settings(s.maxCentralHydrogenChange(), s.exhaustionFraction(),
                 s.maxLuminosityChange(), s.maxGrowth(), s.endCentralHydrogen(), Math.min(oldest, s.maxAge()),
                 s.stepBudget(), s.retryBudget());
     }
 
-    private static StellarModel modelOf(ZamsResult r) {
+    /** The time-step settings given at construction. */
+    MainSequenceEvolver.Settings settings() {
+        return settings;
+    }
+
+    static StellarModel modelOf(ZamsResult r) {
         return r.converged() ? r.model().model() : null;
     }
 
-    private static ModelOutcome failed(ModelRequest r, ModelStatus status, String detail) {
+    static ModelOutcome failed(ModelRequest r, ModelStatus status, String detail) {
         return new ModelOutcome(r, status, detail, null, null, 0);
     }
 

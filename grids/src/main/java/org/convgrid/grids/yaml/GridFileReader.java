@@ -10,6 +10,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
+import org.convgrid.grids.AgeAxis;
 import org.convgrid.grids.GridFile;
 import org.convgrid.grids.GridFileException;
 import org.convgrid.grids.GridHash;
@@ -28,7 +29,8 @@ import org.snakeyaml.engine.v2.nodes.Node;
  * Reads a grid file (format in conventions.md) into a validated {@link GridSpec}. The YAML is composed into nodes
  * and walked by hand so every problem carries its file:line:column; all problems of a file are collected and thrown
  * together as one {@link GridFileException}. Required sections: {@code mass}, {@code metallicity}. Defaults:
- * {@code title} = the file name, {@code age: {gyr: [0]}} (ZAMS), physics = engine defaults,
+ * {@code title} = the file name, {@code age: {gyr: [0]}} (ZAMS; {@code age: {ms_fraction: [...]}} instead gives
+ * fractions in [0, 1] of each star's main-sequence lifetime), physics = engine defaults,
  * {@code output: {dir: runs/<file name without extension>, profiles: false}}. Thread-safe (stateless).
  */
 public final class GridFileReader {
@@ -39,7 +41,7 @@ public final class GridFileReader {
     private static final int MAX_ALIASES = 50;
 
     private static final List<String> KEYS = List.of("title", "mass", "metallicity", "age", "physics", "output");
-    private static final List<String> AGE_KEYS = List.of("gyr");
+    private static final List<String> AGE_KEYS = List.of("gyr", "ms_fraction");
     private static final List<String> OUTPUT_KEYS = List.of("dir", "profiles");
 
     /**
@@ -127,7 +129,7 @@ public final class GridFileReader {
         if (fields.has("metallicity")) {
             metallicities = MetallicityReader.read(fields.value("metallicity"), reader);
         }
-        List<Double> ages = fields.has("age") ? ages(fields.value("age"), reader) : List.of(0.0);
+        AgeAxis ages = fields.has("age") ? ages(fields.value("age"), reader) : AgeAxis.gyr(List.of(0.0));
         PhysicsAxes physics = PhysicsReader.read(fields.value("physics"), reader);
         String outputDir = "runs/" + baseName(reader.file());
         Boolean profiles = Boolean.FALSE;
@@ -148,17 +150,29 @@ public final class GridFileReader {
         return new GridSpec(title, masses, metallicities, ages, physics, outputDir, profiles);
     }
 
-    private static List<Double> ages(Node node, NodeReader reader) {
+    /** Exactly one of {@code gyr} (ages in Gyr) and {@code ms_fraction} (fractions of each star's lifetime). */
+    private static AgeAxis ages(Node node, NodeReader reader) {
         MappingNode map = reader.mapping(node, "age");
         if (map == null) {
             return null;
         }
         MappingFields fields = new MappingFields(map, "age", AGE_KEYS, reader);
-        if (!fields.has("gyr")) {
-            reader.problem(map, "age needs 'gyr', the ages since the ZAMS in Gyr (0 = ZAMS)");
+        if (fields.has("gyr") && fields.has("ms_fraction")) {
+            reader.problem(fields.key("ms_fraction"), "age takes either 'gyr' or 'ms_fraction', not both");
             return null;
         }
-        return AxisValues.increasing(fields.value("gyr"), "age", Range.closed(0.0, MAX_AGE_GYR), reader);
+        if (fields.has("ms_fraction")) {
+            List<Double> fractions = AxisValues.increasing(fields.value("ms_fraction"), "main-sequence fraction",
+                    Range.closed(0.0, 1.0), reader);
+            return fractions == null ? null : AgeAxis.msFractions(fractions);
+        }
+        if (!fields.has("gyr")) {
+            reader.problem(map, "age needs 'gyr', the ages since the ZAMS in Gyr (0 = ZAMS), or 'ms_fraction', "
+                    + "fractions of each star's main-sequence lifetime (0 = ZAMS, 1 = core-hydrogen exhaustion)");
+            return null;
+        }
+        List<Double> gyr = AxisValues.increasing(fields.value("gyr"), "age", Range.closed(0.0, MAX_AGE_GYR), reader);
+        return gyr == null ? null : AgeAxis.gyr(gyr);
     }
 
     /** The file name without directories and without its .yaml or .yml extension. */
