@@ -13,8 +13,8 @@ import org.convgrid.engine.units.Constants;
  * T^3/(3 kappa rho), nabla = nabla_rad there (Langer, Sugimoto &amp; Fricke 1983, A&amp;A 126, 207;
  * formulas.md 4.1). Each species obeys dX/dt = d/dm (S dX/dm), S = (4 pi r^2 rho)^2 D, advanced over the step
  * by one backward-Euler step on the point cells of the mass mesh ({@link PointCells}): the fluxes between
- * cells telescope, so the mass of every species is conserved to rounding, and the same matrix for every
- * species keeps the fractions summing to one. D is evaluated on the previous model and carried onto the step
+ * cells telescope, so the mass of every species is conserved to rounding (the elimination's rounding grows
+ * with S dt/(Dm^2), ~1e-16 times it), and the same matrix for every species keeps the fractions summing to one. D is evaluated on the previous model and carried onto the step
  * mesh by linear interpolation of S in mass; an interface takes the mean of its two points. Stateless.
  */
 final class SemiconvectiveMixing {
@@ -117,7 +117,20 @@ final class SemiconvectiveMixing {
             }
         }
         for (int k = 0; k < n; k++) {
-            out[k] = touches(k, coupling) ? MassFractions.composition(solved[k]) : composition[k];
+            if (!touches(k, coupling)) {
+                out[k] = composition[k];
+                continue;
+            }
+            // the elimination loses digits in proportion to the coupling over the cell mass; rescaling to a sum
+            // of one keeps Composition's check, at a cost in conservation of that rounding size
+            double sum = 0.0;
+            for (double v : solved[k]) {
+                sum += v;
+            }
+            for (int i = 0; i < MassFractions.ALL; i++) {
+                solved[k][i] /= sum;
+            }
+            out[k] = MassFractions.composition(solved[k]);
         }
         return out;
     }
