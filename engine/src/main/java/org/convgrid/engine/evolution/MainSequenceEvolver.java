@@ -5,10 +5,12 @@ import java.util.Arrays;
 import java.util.List;
 
 import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.HenyeySolver;
+import org.convgrid.engine.structure.MassMesh;
 import org.convgrid.engine.structure.MeshPlanner;
 import org.convgrid.engine.structure.ModelState;
 import org.convgrid.engine.structure.SolveFailedException;
@@ -23,7 +25,10 @@ import org.convgrid.engine.units.Constants;
  * composition of every point is advanced over dt by {@link CompositionStep} at the previous model's density and
  * temperature; (2) convective zones of the previous model are homogenised ({@link ConvectiveMixing}); (3) the
  * structure is relaxed with that composition and the gravothermal term eps_grav from the difference with the
- * previous model ({@link GravothermalEnergy}). Between steps the mesh is redistributed when uneven, with a cost
+ * previous model ({@link GravothermalEnergy}). Mixing (2) covers the convective zones extended by step overshoot
+ * of {@link PhysicsSet#overshootHp()} pressure scale heights ({@link StepOvershoot}); under the Ledoux criterion
+ * semiconvective layers are then mixed by diffusion ({@link SemiconvectiveMixing}) and the relaxation gets
+ * nabla_mu from the mixed composition ({@link MuGradient}). Between steps the mesh is redistributed when uneven, with a cost
  * for composition gradients (|D X|/{@link #COMPOSITION_MESH_STEP} per interval, formulas.md 6.3) and the
  * composition remapped conservatively ({@link MassRemap}).
  *
@@ -44,6 +49,11 @@ public final class MainSequenceEvolver {
     public static final double REJECTION_RATIO = 1.5;
     /** First step as a fraction of the step the central burning rate allows. */
     public static final double FIRST_STEP_FRACTION = 0.1;
+    /**
+     * alpha_sc of the semiconvective diffusion coefficient under the Ledoux criterion (Langer, Sugimoto &amp;
+     * Fricke 1983; values 0.01-0.1 are in use in the literature, from memory).
+     */
+    public static final double SEMICONVECTION_EFFICIENCY = 0.1;
     /** Newton budget of one step's structure relaxation (a failure halves the step). */
     public static final int RELAXATION_BUDGET = 30;
 
@@ -222,19 +232,30 @@ public final class MainSequenceEvolver {
         for (int k = 0; k < n; k++) {
             comp[k] = network.advance(rho[k], t[k], start.state().composition(k), dt);
         }
-        comp = ConvectiveMixing.mix(start.state().mesh(), comp, start.convective());
+        MassMesh mesh = start.state().mesh();
+        boolean[] mixed = StepOvershoot.mixedPoints(mesh, start.convective(), previous.profile(),
+                physics.overshootHp());
+        comp = ConvectiveMixing.mix(mesh, comp, mixed);
+        double[] nablaMu = null;
+        if (physics.criterion() == StabilityCriterion.LEDOUX) {
+            double[] s = SemiconvectiveMixing.coefficients(previous, physics.eos(), SEMICONVECTION_EFFICIENCY);
+            comp = SemiconvectiveMixing.diffuse(mesh, comp,
+                    remesh ? SemiconvectiveMixing.onMesh(previous.profile(), s, mesh) : s, dt);
+            nablaMu = MuGradient.of(comp, start.lnPressure());
+        }
         double[] lnT = start.state().lnTemperatures();
         GravothermalEnergy grav = new GravothermalEnergy(lnT, start.lnPressure(), dt);
         ModelState guess = start.state().withCompositions(comp);
         if (sameMesh) {
             try {
-                return solver.relax(extrapolated(older.state(), guess, dt / olderStep), grav, null, solveSettings);
+                return solver.relax(extrapolated(older.state(), guess, dt / olderStep), grav, nablaMu,
+                        solveSettings);
             } catch (SolveFailedException e) {
                 // an extrapolation that overshoots (e.g. across a change of the convective zones) is no worse
                 // than no extrapolation: fall back to the previous model as the guess
             }
         }
-        return solver.relax(guess, grav, null, solveSettings);
+        return solver.relax(guess, grav, nablaMu, solveSettings);
     }
 
     /**

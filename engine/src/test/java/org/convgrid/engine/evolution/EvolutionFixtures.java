@@ -4,6 +4,7 @@ import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 
 import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.physics.StandardPhysics;
 import org.convgrid.engine.state.Composition;
@@ -27,6 +28,13 @@ final class EvolutionFixtures {
 
     static PhysicsSet physics(Composition c) {
         return PHYSICS.computeIfAbsent(c, x -> StandardPhysics.create(PhysicsOptions.DEFAULT, x));
+    }
+
+    /** The standard physics of {@code c} with another overshoot distance and stability criterion. */
+    static PhysicsSet physics(Composition c, double overshootHp, StabilityCriterion criterion) {
+        PhysicsSet p = physics(c);
+        return new PhysicsSet(p.eos(), p.opacity(), p.nuclear(), p.convection(), criterion, p.surface(),
+                overshootHp);
     }
 
     static synchronized ZamsModel zeroAge(Composition c, double massInSun) {

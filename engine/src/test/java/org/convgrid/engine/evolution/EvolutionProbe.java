@@ -1,5 +1,6 @@
 package org.convgrid.engine.evolution;
 
+import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.units.Constants;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.condition.EnabledIfSystemProperty;
@@ -13,7 +14,10 @@ class EvolutionProbe {
         double mass = Double.parseDouble(System.getProperty("probe.mass", "1"));
         double scale = Double.parseDouble(System.getProperty("probe.scale", "1"));
         var z = EvolutionFixtures.zeroAge(EvolutionFixtures.SOLAR, mass);
-        var evolver = new MainSequenceEvolver(EvolutionFixtures.physics(EvolutionFixtures.SOLAR),
+        double overshoot = Double.parseDouble(System.getProperty("probe.overshoot", "0"));
+        var criterion = StabilityCriterion.valueOf(System.getProperty("probe.criterion", "SCHWARZSCHILD"));
+        var evolver = new MainSequenceEvolver(EvolutionFixtures.physics(EvolutionFixtures.SOLAR, overshoot,
+                criterion),
                 MainSequenceEvolver.Settings.DEFAULT.scaled(scale));
         long t0 = System.nanoTime();
         EvolutionResult r = evolver.evolve(z.model(), new double[] {4.57 * Constants.GYR});
