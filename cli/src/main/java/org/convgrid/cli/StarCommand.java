@@ -8,6 +8,7 @@ import org.convgrid.engine.batch.ModelOutcome;
 import org.convgrid.engine.batch.ModelRequest;
 import org.convgrid.engine.batch.ModelStatus;
 import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.StellarModel;
@@ -70,6 +71,10 @@ final class StarCommand implements Callable<Integer> {
     @Option(names = "--opacity-table", paramLabel = "FILE",
             description = "Use this opacity table (convgrid table layout, see README) instead of the analytic one.")
     Path opacityTable;
+
+    @Option(names = "--atmosphere", defaultValue = "eddington", paramLabel = "eddington|krishna_swamy",
+            description = "Grey T(tau) relation of the surface boundary (default ${DEFAULT-VALUE}).")
+    AtmosphereChoice atmosphere;
 
     @Option(names = "--profile", paramLabel = "FILE",
             description = "Also write one CSV row per shell (m/M, r/R, P, T, rho, L, kappa, eps, gradients, "
@@ -134,6 +139,6 @@ final class StarCommand implements Callable<Integer> {
             throw new UsageException("--opacity-factor must lie in (0, 100], got " + opacityFactor);
         }
         String table = opacityTable == null ? "" : main.context().resolve(opacityTable).toString();
-        return new PhysicsOptions(mixingLength, 0.0, criterion, opacityFactor, table);
+        return new PhysicsOptions(mixingLength, 0.0, criterion, opacityFactor, table, atmosphere);
     }
 }

@@ -8,6 +8,7 @@ import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.HexFormat;
+import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 
 /**
  * SHA-256 fingerprints of a grid. {@link #ofBytes} fingerprints the file exactly as read; {@link #ofModels}
@@ -57,6 +58,9 @@ public final class GridHash {
         text.append("overshoot=").append(physics.overshoots()).append('\n');
         text.append("criterion=").append(physics.criteria()).append('\n');
         text.append("opacity_factor=").append(physics.opacityFactors()).append('\n');
+        if (physics.atmosphere() != AtmosphereChoice.EDDINGTON) {
+            text.append("atmosphere=").append(physics.atmosphere().label()).append('\n');
+        }
         if (!physics.opacityTable().isEmpty()) {
             // The table's content decides the models, not its name: hash the bytes.
             text.append("opacity_table=").append(ofFile(physics.opacityTable())).append('\n');

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.convgrid.engine.batch.PhysicsOptions;
 import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 
 /**
  * The physics options a grid varies; each is a list of one or more values. Their product is the physics axis of the
@@ -14,9 +15,16 @@ import org.convgrid.engine.convection.StabilityCriterion;
  * @param criteria stability criteria
  * @param opacityFactors opacity multipliers, each &gt; 0
  * @param opacityTable path of a user opacity table (resolved against the grid file's folder); empty for none
+ * @param atmosphere the grey T(tau) relation of the surface boundary (one value for the whole grid)
  */
 public record PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, List<StabilityCriterion> criteria,
-                          List<Double> opacityFactors, String opacityTable) {
+                          List<Double> opacityFactors, String opacityTable, AtmosphereChoice atmosphere) {
+
+    /** Axes with the Eddington grey atmosphere. */
+    public PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, List<StabilityCriterion> criteria,
+                       List<Double> opacityFactors, String opacityTable) {
+        this(mixingLengths, overshoots, criteria, opacityFactors, opacityTable, AtmosphereChoice.EDDINGTON);
+    }
 
     /** Axes with the analytic opacity. */
     public PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, List<StabilityCriterion> criteria,
@@ -48,7 +56,7 @@ public record PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, L
             for (double overshoot : overshoots) {
                 for (StabilityCriterion criterion : criteria) {
                     for (double factor : opacityFactors) {
-                        all.add(new PhysicsOptions(alpha, overshoot, criterion, factor, opacityTable));
+                        all.add(new PhysicsOptions(alpha, overshoot, criterion, factor, opacityTable, atmosphere));
                     }
                 }
             }

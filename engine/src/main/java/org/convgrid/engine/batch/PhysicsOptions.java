@@ -1,6 +1,7 @@
 package org.convgrid.engine.batch;
 
 import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 
 /**
  * The physics choices a grid may vary.
@@ -10,17 +11,27 @@ import org.convgrid.engine.convection.StabilityCriterion;
  * @param criterion Schwarzschild or Ledoux
  * @param opacityFactor multiplies every opacity (1 = as published)
  * @param opacityTable path of a user opacity table in convgrid's table layout; empty for the analytic opacity
+ * @param atmosphere the grey T(tau) relation of the surface boundary
  */
 public record PhysicsOptions(double mixingLength, double overshoot, StabilityCriterion criterion,
-                             double opacityFactor, String opacityTable) {
+                             double opacityFactor, String opacityTable, AtmosphereChoice atmosphere) {
 
     public PhysicsOptions {
         if (opacityTable == null) {
             throw new IllegalArgumentException("opacityTable must not be null; use \"\" for none");
         }
+        if (atmosphere == null) {
+            throw new IllegalArgumentException("atmosphere must not be null");
+        }
     }
 
-    /** Options with the analytic opacity. */
+    /** Options with the Eddington grey atmosphere. */
+    public PhysicsOptions(double mixingLength, double overshoot, StabilityCriterion criterion, double opacityFactor,
+                          String opacityTable) {
+        this(mixingLength, overshoot, criterion, opacityFactor, opacityTable, AtmosphereChoice.EDDINGTON);
+    }
+
+    /** Options with the analytic opacity and the Eddington grey atmosphere. */
     public PhysicsOptions(double mixingLength, double overshoot, StabilityCriterion criterion, double opacityFactor) {
         this(mixingLength, overshoot, criterion, opacityFactor, "");
     }
@@ -30,6 +41,11 @@ public record PhysicsOptions(double mixingLength, double overshoot, StabilityCri
         return !opacityTable.isEmpty();
     }
 
-    /** Defaults: alpha = 1.8, no overshoot, Schwarzschild, opacity as published. */
+    /** The same options with another atmosphere. */
+    public PhysicsOptions withAtmosphere(AtmosphereChoice choice) {
+        return new PhysicsOptions(mixingLength, overshoot, criterion, opacityFactor, opacityTable, choice);
+    }
+
+    /** Defaults: alpha = 1.8, no overshoot, Schwarzschild, opacity as published, Eddington atmosphere. */
     public static final PhysicsOptions DEFAULT = new PhysicsOptions(1.8, 0.0, StabilityCriterion.SCHWARZSCHILD, 1.0);
 }

@@ -9,6 +9,7 @@ import org.convgrid.engine.physics.atmosphere.AtmosphereTable;
 import org.convgrid.engine.physics.atmosphere.GreyAtmosphere;
 import org.convgrid.engine.physics.atmosphere.SurfaceBoundary;
 import org.convgrid.engine.physics.atmosphere.SurfaceCondition;
+import org.convgrid.engine.physics.atmosphere.TemperatureTauRelation;
 import org.convgrid.engine.physics.eos.EquationOfState;
 import org.convgrid.engine.physics.eos.StellarPlasmaEos;
 import org.convgrid.engine.physics.nuclear.HydrogenBurningNetwork;
@@ -70,7 +71,8 @@ public final class StandardPhysics {
      */
     public static PhysicsSet create(PhysicsOptions options, Composition surfaceComposition) {
         Opacity opacity = opacity(options);
-        GreyAtmosphere atmosphere = new GreyAtmosphere(EOS, opacity);
+        TemperatureTauRelation relation = options.atmosphere().relation();
+        GreyAtmosphere atmosphere = new GreyAtmosphere(EOS, opacity, relation, relation.photosphericDepth());
         SurfaceBoundary table = new AtmosphereTable(atmosphere).tabulate(surfaceComposition);
         return new PhysicsSet(EOS, opacity, NUCLEAR, new MixingLengthTheory(options.mixingLength()),
                 options.criterion(), new TableWithFallback(table, atmosphere), options.overshoot());

@@ -7,6 +7,7 @@ import java.util.Locale;
 import org.convgrid.engine.batch.PhysicsOptions;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.error.ConvgridException;
+import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.physics.opacity.OpacityTableReader;
 import org.convgrid.grids.PhysicsAxes;
 import org.snakeyaml.engine.v2.nodes.MappingNode;
@@ -21,7 +22,7 @@ import org.snakeyaml.engine.v2.nodes.Node;
 final class PhysicsReader {
 
     private static final List<String> KEYS = List.of("mixing_length", "overshoot", "criterion", "opacity_factor",
-            "opacity_table", "preset");
+            "opacity_table", "atmosphere", "preset");
     private static final Range POSITIVE = Range.open(0.0, Double.POSITIVE_INFINITY);
     private static final Range NON_NEGATIVE = new Range(0.0, true, Double.POSITIVE_INFINITY, false);
 
@@ -62,10 +63,26 @@ final class PhysicsReader {
                 ? AxisValues.distinct(fields.value("opacity_factor"), "opacity_factor", POSITIVE, reader)
                 : List.of(d.opacityFactor());
         String table = fields.has("opacity_table") ? opacityTable(fields.value("opacity_table"), reader) : "";
-        if (alphas == null || overshoots == null || criteria == null || factors == null || table == null) {
+        AtmosphereChoice atmosphere = fields.has("atmosphere") ? atmosphere(fields.value("atmosphere"), reader)
+                : AtmosphereChoice.EDDINGTON;
+        if (alphas == null || overshoots == null || criteria == null || factors == null || table == null
+                || atmosphere == null) {
             return null;
         }
-        return new PhysicsAxes(alphas, overshoots, criteria, factors, table);
+        return new PhysicsAxes(alphas, overshoots, criteria, factors, table, atmosphere);
+    }
+
+    /** The grey T(tau) relation: eddington (default) or krishna_swamy. */
+    private static AtmosphereChoice atmosphere(Node node, NodeReader reader) {
+        String text = reader.text(node, "atmosphere");
+        if (text == null) {
+            return null;
+        }
+        AtmosphereChoice choice = AtmosphereChoice.fromLabel(text);
+        if (choice == null) {
+            reader.problem(node, "atmosphere must be eddington or krishna_swamy, got '" + text + "'");
+        }
+        return choice;
     }
 
     /**
