@@ -29,8 +29,9 @@ import org.convgrid.engine.units.Constants;
  * of {@link PhysicsSet#overshootHp()} pressure scale heights ({@link StepOvershoot}); under the Ledoux criterion
  * semiconvective layers are then mixed by diffusion ({@link SemiconvectiveMixing}) and the relaxation gets
  * nabla_mu from the mixed composition ({@link MuGradient}). Between steps the mesh is redistributed when uneven, with a cost
- * for composition gradients (|D X|/{@link #COMPOSITION_MESH_STEP} per interval, formulas.md 6.3) and the
- * composition remapped conservatively ({@link MassRemap}).
+ * for composition gradients (|D X|/{@link #COMPOSITION_MESH_STEP} per interval, formulas.md 6.3, capped so that a
+ * jump in X cannot shrink its interval below ~{@link #COMPOSITION_MESH_RESOLUTION} in m/M) and the composition
+ * remapped conservatively ({@link MassRemap}); a redistribution that cannot be built keeps the previous mesh.
  *
  * <p>Time steps (formulas.md 6.4, practice): |D X_c| at most {@link Settings#maxCentralHydrogenChange()} while
  * X_c &gt; 0.1, at most {@link Settings#exhaustionFraction()} X_c below; |D ln L| at most
