@@ -29,11 +29,13 @@ import org.convgrid.engine.units.Constants;
  * of {@link PhysicsSet#overshootHp()} pressure scale heights ({@link StepOvershoot}); under the Ledoux criterion
  * semiconvective layers are then mixed by diffusion ({@link SemiconvectiveMixing}) and the relaxation gets
  * nabla_mu from the mixed composition ({@link MuGradient}). Between steps the mesh is redistributed when uneven, with a cost
- * for composition gradients (|D X|/{@link #COMPOSITION_MESH_STEP} per interval, formulas.md 6.3) and the
- * composition remapped conservatively ({@link MassRemap}).
+ * for composition gradients (|D X|/{@link #COMPOSITION_MESH_STEP} per interval, formulas.md 6.3, capped so that a
+ * jump in X cannot shrink its interval below ~{@link #COMPOSITION_MESH_RESOLUTION} in m/M) and the composition
+ * remapped conservatively ({@link MassRemap}); a redistribution that cannot be built keeps the previous mesh.
  *
- * <p>Time steps (formulas.md 6.4, practice): |D X_c| at most {@link Settings#maxCentralHydrogenChange()} while
- * X_c &gt; 0.1, at most {@link Settings#exhaustionFraction()} X_c below; |D ln L| at most
+ * <p>Time steps (formulas.md 6.4, practice): the fall of X_c (a rise, from mixing, is not limited) at most
+ * {@link Settings#maxCentralHydrogenChange()} while X_c &gt; 0.1, at most {@link Settings#exhaustionFraction()} X_c
+ * below; |D ln L| at most
  * {@link Settings#maxLuminosityChange()}; growth at most {@link Settings#maxGrowth()} per step; a step that
  * exceeds a limit by more than {@link #REJECTION_RATIO} is redone shorter, a failed relaxation is redone with
  * half the step, within {@link Settings#retryBudget()}. Requested ages are reached by landing a step exactly on
@@ -45,6 +47,12 @@ public final class MainSequenceEvolver {
     public static final double BURNING_THRESHOLD = 0.01;
     /** Composition change per mesh interval worth one unit of mesh cost (formulas.md 6.3: |D X| &lt; 0.01-0.02). */
     public static final double COMPOSITION_MESH_STEP = 0.01;
+    /**
+     * Narrowest interval, in m/M, that a composition gradient may ask for: the composition cost of an interval is
+     * capped at its width over this (see {@link #compositionCost}). Practice, chosen here: far below the widths
+     * smooth burning profiles need, far above double-precision rounding of m/M.
+     */
+    public static final double COMPOSITION_MESH_RESOLUTION = 1.0e-5;
     /** A step whose change exceeds its limit by more than this factor is rejected and redone shorter. */
     public static final double REJECTION_RATIO = 1.5;
     /** First step as a fraction of the step the central burning rate allows. */
@@ -171,7 +179,11 @@ public final class MainSequenceEvolver {
             double limit = xc > 0.1 ? settings.maxCentralHydrogenChange()
                     : Math.min(settings.maxCentralHydrogenChange(), settings.exhaustionFraction() * xc);
             double dLnL = Math.abs(Math.log(trial.global().luminosity() / current.global().luminosity()));
-            double ratio = Math.max(Math.abs(xc - trial.global().centralHydrogen()) / limit,
+            // only the fall of X_c (burning) is limited: a rise comes from mixing a convective core with a
+            // richer zone it has reached (seen at 20 Msun: +0.024 in one step), which is instantaneous in this
+            // scheme, so a shorter step cannot make it smaller and rejecting it would only spend the retry budget
+            double burned = Math.max(0.0, xc - trial.global().centralHydrogen());
+            double ratio = Math.max(burned / limit,
                     dLnL / settings.maxLuminosityChange());
             if (ratio > REJECTION_RATIO) {
                 spent += trial.report().iterations();
@@ -214,7 +226,16 @@ public final class MainSequenceEvolver {
     private StellarModel advance(StellarModel previous, StellarModel older, double olderStep, double dt) {
         double[] cost = compositionCost(previous);
         boolean remesh = planner.needsRemesh(previous, cost);
-        StepStart start = remesh ? StepStart.remeshed(previous, planner, cost, physics) : StepStart.of(previous);
+        StepStart start = StepStart.of(previous);
+        if (remesh) {
+            try {
+                start = StepStart.remeshed(previous, planner, cost, physics);
+            } catch (ConvgridException e) {
+                // a redistribution that cannot be built (degenerate mesh) does not depend on the step length, so
+                // halving the step would only burn the retry budget; the previous mesh is valid: keep it
+                remesh = false;
+            }
+        }
         int n = start.state().size();
         double[] rho = start.density().clone();
         double[] t = start.temperature().clone();
@@ -279,12 +300,23 @@ public final class MainSequenceEvolver {
         return new ModelState(previous.mesh(), previous.compositions(), lnR, lnRho, lnT, lum);
     }
 
-    /** |D X| / {@link #COMPOSITION_MESH_STEP} per interval: the mesh cost of composition gradients. */
+    /**
+     * |D X| / {@link #COMPOSITION_MESH_STEP} per interval, at most D(m/M) / {@link #COMPOSITION_MESH_RESOLUTION}:
+     * the mesh cost of composition gradients. Without the cap a jump in X (left where a convective zone stopped
+     * mixing, e.g. at the edge of the receding core of a massive star) costs the same however narrow the interval
+     * holding it, so every remesh packs points into it and the interval shrinks geometrically until two points
+     * coincide in double precision (seen at 15 Msun: D(m/M) 7e-12, 3e-13, 1e-14, 2e-15, then a mesh that is not
+     * increasing). With the cap a discontinuity is resolved down to a few times that width and no further; smooth
+     * gradients (|dX/d(m/M)| far below 0.01/1e-5 = 1000) are untouched.
+     */
     private static double[] compositionCost(StellarModel model) {
         StellarProfile p = model.profile();
+        MassMesh mesh = model.state().mesh();
         double[] cost = new double[p.size() - 1];
         for (int k = 0; k < cost.length; k++) {
-            cost[k] = Math.abs(p.hydrogen(k + 1) - p.hydrogen(k)) / COMPOSITION_MESH_STEP;
+            double width = mesh.fraction(k + 1) - mesh.fraction(k);
+            cost[k] = Math.min(Math.abs(p.hydrogen(k + 1) - p.hydrogen(k)) / COMPOSITION_MESH_STEP,
+                    width / COMPOSITION_MESH_RESOLUTION);
         }
         return cost;
     }
