@@ -20,7 +20,8 @@ class GridFileReaderTest {
     void readsTheDemoClusterGrid() {
         GridFile file = reader.read(Path.of("demo-cluster.yaml"));
         GridSpec spec = file.spec();
-        assertThat(spec.count()).isEqualTo(60);
+        assertThat(spec.count()).isEqualTo(180);
+        assertThat(spec.agesGyr()).containsExactly(0.0, 0.15, 0.6);
         assertThat(spec.massesMsun()).hasSize(20).startsWith(0.1, 0.2, 0.3).endsWith(2.0);
         // Y = 0.2471 + 1.5 Z: the law written in the file
         assertThat(spec.metallicities().get(1).y()).isCloseTo(0.2471 + 1.5 * 0.014, within(1e-15));
