@@ -27,6 +27,14 @@ public final class TransitionColumns {
     public static final String CONV_CORE_CROSSINGS = "conv_core_crossings";
     public static final String CONV_CORE_CROSSINGS_MSUN = "conv_core_crossings_msun";
     public static final String CONV_CORE_BRACKET_SKIPPED = "conv_core_bracket_skipped";
+    /**
+     * The lowest mass above which every usable model has a convective core (the upper end of the last crossing
+     * into a core); differs from {@link #CONV_CORE_ONSET_MSUN} when small cores come and go at lower mass, as
+     * just above the fully convective limit; empty when the highest masses have no core.
+     */
+    public static final String LASTING_CORE_ONSET_MSUN = "lasting_core_onset_msun";
+    /** The two masses that bracket it, {@code lo-hi}. */
+    public static final String LASTING_CORE_BRACKET_MSUN = "lasting_core_bracket_msun";
     public static final String NOTES = "notes";
 
     /** The columns conventions.md fixes, in order. */
@@ -36,7 +44,8 @@ public final class TransitionColumns {
     /** Our columns after them, in order. */
     public static final List<String> EXTENSIONS = List.of(MIXING_LENGTH, OVERSHOOT_HP, CRITERION, OPACITY_FACTOR,
             FULLY_CONVECTIVE_CROSSINGS, FULLY_CONVECTIVE_CROSSINGS_MSUN, FULLY_CONVECTIVE_BRACKET_SKIPPED,
-            CONV_CORE_CROSSINGS, CONV_CORE_CROSSINGS_MSUN, CONV_CORE_BRACKET_SKIPPED, NOTES);
+            CONV_CORE_CROSSINGS, CONV_CORE_CROSSINGS_MSUN, CONV_CORE_BRACKET_SKIPPED, LASTING_CORE_ONSET_MSUN,
+            LASTING_CORE_BRACKET_MSUN, NOTES);
 
     /** The header convgrid writes. */
     public static final List<String> HEADER = Stream.concat(FIXED.stream(), EXTENSIONS.stream()).toList();

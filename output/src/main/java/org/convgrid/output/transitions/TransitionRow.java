@@ -1,6 +1,8 @@
 package org.convgrid.output.transitions;
 
+import java.util.List;
 import java.util.Objects;
+import org.convgrid.output.Span;
 
 /**
  * One row of {@code transitions.csv}.
@@ -20,5 +22,20 @@ public record TransitionRow(Slice slice, TransitionEstimate fullyConvective, Tra
         Objects.requireNonNull(convCore, "convCore");
         Objects.requireNonNull(method, "method");
         notes = notes == null ? "" : notes;
+    }
+
+    /**
+     * The onset of the lasting convective core: the upper end of the last crossing into a core. The lowest
+     * masses of a slice have no core (fully convective stars do not count as having one), so the crossings
+     * alternate starting with "into a core": an odd count means the highest masses have a core. Derived from the
+     * crossings, so it needs no column of its own to be read back.
+     */
+    public TransitionEstimate lastingCoreOnset() {
+        List<Span> crossings = convCore.crossings();
+        if (crossings.size() % 2 == 0) {
+            return TransitionEstimate.NONE;
+        }
+        Span last = crossings.get(crossings.size() - 1);
+        return new TransitionEstimate(last.hi(), last, List.of(last), 0);
     }
 }

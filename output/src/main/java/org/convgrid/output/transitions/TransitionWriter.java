@@ -48,6 +48,9 @@ public final class TransitionWriter {
         cells.add(Integer.toString(core.crossings().size()));
         cells.add(Span.join(core.crossings()));
         cells.add(Integer.toString(core.skippedInBracket()));
+        TransitionEstimate lasting = row.lastingCoreOnset();
+        cells.add(CsvNumbers.format(lasting.massMsun()));
+        cells.add(Span.format(lasting.bracket()));
         cells.add(row.notes());
         return cells;
     }

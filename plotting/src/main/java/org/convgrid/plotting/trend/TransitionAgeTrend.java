@@ -24,7 +24,7 @@ public final class TransitionAgeTrend {
         List<Double> zs = mine.stream().map(r -> r.slice().zInit()).distinct().sorted().toList();
         List<TransitionAgeTrendData.Series> series = new ArrayList<>();
         addAll(series, TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT, TransitionRow::fullyConvective, mine, zs);
-        addAll(series, TransitionMarker.Kind.CONV_CORE_ONSET, TransitionRow::convCore, mine, zs);
+        addAll(series, TransitionMarker.Kind.CONV_CORE_ONSET, TransitionRow::lastingCoreOnset, mine, zs);
         List<Double> ages = mine.stream().map(r -> r.slice().ageGyr()).distinct().sorted().toList();
         return new TransitionAgeTrendData(physics, ages, zs, series);
     }

@@ -58,7 +58,7 @@ public final class TransitionAgeTrendRenderer {
                 b.setLineStyle(new BasicStroke(ChartStyle.LINE_WIDTH * 2));
                 b.setShowInLegend(false);
             }
-            XYSeries line = chart.addSeries((fc ? "fully convective, Z = " : "core onset, Z = ")
+            XYSeries line = chart.addSeries((fc ? "fully convective, Z = " : "lasting core onset, Z = ")
                             + SliceLabels.number(s.zInit()),
                     s.points().stream().mapToDouble(p -> p.ageGyr() + shift).toArray(),
                     s.points().stream().mapToDouble(AgePoint::massMsun).toArray());

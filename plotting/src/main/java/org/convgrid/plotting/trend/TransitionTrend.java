@@ -21,7 +21,7 @@ public final class TransitionTrend {
         List<Double> ages = mine.stream().map(r -> r.slice().ageGyr()).distinct().sorted().toList();
         List<TransitionTrendData.Series> series = new ArrayList<>();
         addAll(series, TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT, TransitionRow::fullyConvective, mine, ages);
-        addAll(series, TransitionMarker.Kind.CONV_CORE_ONSET, TransitionRow::convCore, mine, ages);
+        addAll(series, TransitionMarker.Kind.CONV_CORE_ONSET, TransitionRow::lastingCoreOnset, mine, ages);
         List<Double> zs = mine.stream().map(r -> r.slice().zInit()).distinct().sorted().toList();
         return new TransitionTrendData(physics, zs, series);
     }

@@ -62,7 +62,7 @@ public final class TransitionTrendRenderer {
                 b.setLineStyle(new java.awt.BasicStroke(ChartStyle.LINE_WIDTH * 2));
                 b.setShowInLegend(false);
             }
-            XYSeries line = chart.addSeries((fc ? "fully convective, " : "core onset, ")
+            XYSeries line = chart.addSeries((fc ? "fully convective, " : "lasting core onset, ")
                             + SliceLabels.age(s.ageGyr()),
                     s.points().stream().mapToDouble(p -> p.zInit() * shift).toArray(),
                     s.points().stream().mapToDouble(TrendPoint::massMsun).toArray());

@@ -14,7 +14,7 @@ public record TransitionMarker(Kind kind, double massMsun, Span bracket) {
     /** The two transitions of conventions.md. */
     public enum Kind {
         FULLY_CONVECTIVE_LIMIT("fully convective limit", "fully convective\nup to "),
-        CONV_CORE_ONSET("convective core onset", "convective core\nfrom ");
+        CONV_CORE_ONSET("lasting convective core onset", "lasting convective\ncore from ");
 
         private final String label;
         private final String legendPrefix;

@@ -124,7 +124,7 @@ public final class ZoneMap {
         List<TransitionMarker> markers = new ArrayList<>(2);
         if (t != null) {
             add(markers, TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT, t.fullyConvective());
-            add(markers, TransitionMarker.Kind.CONV_CORE_ONSET, t.convCore());
+            add(markers, TransitionMarker.Kind.CONV_CORE_ONSET, t.lastingCoreOnset());
         }
         return markers;
     }

@@ -28,7 +28,7 @@ class TransitionAgeTrendTest {
                 TransitionRow t = transitions.stream().filter(r -> r.slice().zInit() == s.zInit()
                         && r.slice().ageGyr() == p.ageGyr()).findFirst().orElseThrow();
                 var estimate = s.kind() == TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT ? t.fullyConvective()
-                        : t.convCore();
+                        : t.lastingCoreOnset();
                 assertThat(p.massMsun()).isEqualTo(estimate.massMsun());
                 assertThat(p.bracket()).isEqualTo(estimate.bracket());
             }
