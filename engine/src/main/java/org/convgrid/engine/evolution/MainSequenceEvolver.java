@@ -81,7 +81,7 @@ public final class MainSequenceEvolver {
                            double maxGrowth, double endCentralHydrogen, double maxAge, int stepBudget,
                            int retryBudget) {
 
-        /** 0.01, 0.1 X_c, 0.05 in ln L, x1.25, X_c &lt; 1e-4, 20 Gyr (the limits), 3000 steps, 100 retries. */
+        /** 0.01, 0.1 X_c, 0.05 in ln L, x1.25, X_c &lt; 1e-4, 20 Gyr (common practice, formulas.md 6.4), 3000 steps, 100 retries. */
         public static final Settings DEFAULT = new Settings(0.01, 0.1, 0.05, 1.25, 1.0e-4, 20.0 * Constants.GYR,
                 3000, 100);
 

@@ -31,6 +31,8 @@ class ZeroAgeModelsTest {
         assertThat(c.structureClass()).isEqualTo(StructureClass.CONV_ENVELOPE);
         // present Sun r_cz = 0.713 R (Basu & Antia 1997); the zero-age envelope is similar (from memory; loose)
         assertThat(c.envelopeBaseRadiusFraction()).isBetween(0.6, 0.8);
+        // zero age: the centre keeps the initial X = 0.7062 apart from the little hydrogen moved into 3He and
+        // 14N by the equilibrium abundances (by definition of the zero-age model)
         assertThat(g.centralHydrogen()).isCloseTo(0.7062, within(1e-3));
     }
 

@@ -40,7 +40,8 @@ class ElectronScatteringTest extends OpacityContractTest {
 
     @Test
     void comptonFactorReducesByAboutTwentyPercentAt1e8K() {
-        // formulas.md 2.2: ~21 % reduction at 1e8 K from the Compton factor (teaching notes quote ~20 %).
+        // Buchler & Yueh 1976 (ApJ 210, 440) Compton factor [1 + (T/4.5e8)^0.86]^-1: ~21 % reduction at 1e8 K
+        // (derived from the fit as formulas.md 2.2 quotes it; the coefficients are from memory there).
         double k = es.rosselandMean(1e-3, 1e8, Composition.scaledSolar(0.7, 0.02)).kappa();
         assertThat(k / (ElectronScattering.THOMSON_PER_ONE_PLUS_X * 1.7)).isCloseTo(0.79, within(0.01));
     }
