@@ -19,6 +19,19 @@ class MainSequenceEvolverTest {
     private static final double GYR = Constants.GYR;
 
     @Test
+    void halvingTheTimeStepLimitsMovesTheSolarLifetimeByUnderOnePercent() {
+        // Numerical convergence in time (practice, formulas.md 6.4): the main-sequence lifetime of 1 Msun with
+        // every step limit halved stays within 1 % of the default-step value.
+        var zeroAge = EvolutionFixtures.zeroAge(EvolutionFixtures.SOLAR, 1.0);
+        var physics = EvolutionFixtures.physics(EvolutionFixtures.SOLAR);
+        double normal = new MainSequenceEvolver(physics, MainSequenceEvolver.Settings.DEFAULT)
+                .evolve(zeroAge.model(), new double[] {0.0}).exhaustionAge();
+        double fine = new MainSequenceEvolver(physics, MainSequenceEvolver.Settings.DEFAULT.scaled(0.5))
+                .evolve(zeroAge.model(), new double[] {0.0}).exhaustionAge();
+        assertThat(Math.abs(fine / normal - 1.0)).isLessThan(0.01);
+    }
+
+    @Test
     void theConvectiveEnvelopeOfALowMassStarDeepensWithAge() {
         // The base of the solar convective envelope sinks from r/R ~0.73 on the zero-age main sequence to 0.713
         // today in standard solar models (present value: Basu & Antia 1997; the zero-age value from memory):
