@@ -8,6 +8,7 @@ import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.HexFormat;
+import org.convgrid.engine.physics.OvershootScheme;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 
 /**
@@ -58,6 +59,10 @@ public final class GridHash {
         text.append("overshoot=").append(physics.overshoots()).append('\n');
         text.append("criterion=").append(physics.criteria()).append('\n');
         text.append("opacity_factor=").append(physics.opacityFactors()).append('\n');
+        if (physics.overshootScheme() != OvershootScheme.STEP) {
+            // step grids keep their original lines, so the fingerprints of existing runs do not change
+            text.append("overshoot_scheme=").append(physics.overshootScheme().label()).append('\n');
+        }
         if (physics.atmosphere() != AtmosphereChoice.EDDINGTON) {
             text.append("atmosphere=").append(physics.atmosphere().label()).append('\n');
         }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.convgrid.engine.batch.PhysicsOptions;
 import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.engine.physics.OvershootScheme;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 
 /**
@@ -11,14 +12,23 @@ import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
  * grid, enumerated with mixing length outermost, then overshoot, criterion and opacity factor innermost.
  *
  * @param mixingLengths alpha values, pressure scale heights, each &gt; 0
- * @param overshoots step overshoot distances, pressure scale heights, each &gt;= 0
+ * @param overshoots overshoot parameters, each &gt;= 0: alpha_ov (pressure scale heights) for the step scheme, f for
+ *                   the exponential one
  * @param criteria stability criteria
  * @param opacityFactors opacity multipliers, each &gt; 0
  * @param opacityTable path of a user opacity table (resolved against the grid file's folder); empty for none
  * @param atmosphere the grey T(tau) relation of the surface boundary (one value for the whole grid)
+ * @param overshootScheme step or exponential overshoot (one value for the whole grid)
  */
 public record PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, List<StabilityCriterion> criteria,
-                          List<Double> opacityFactors, String opacityTable, AtmosphereChoice atmosphere) {
+                          List<Double> opacityFactors, String opacityTable, AtmosphereChoice atmosphere,
+                          OvershootScheme overshootScheme) {
+
+    /** Axes with step overshoot. */
+    public PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, List<StabilityCriterion> criteria,
+                       List<Double> opacityFactors, String opacityTable, AtmosphereChoice atmosphere) {
+        this(mixingLengths, overshoots, criteria, opacityFactors, opacityTable, atmosphere, OvershootScheme.STEP);
+    }
 
     /** Axes with the Eddington grey atmosphere. */
     public PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, List<StabilityCriterion> criteria,
@@ -42,6 +52,9 @@ public record PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, L
         overshoots = nonEmpty(overshoots, "overshoot");
         criteria = nonEmpty(criteria, "criterion");
         opacityFactors = nonEmpty(opacityFactors, "opacity_factor");
+        if (overshootScheme == null) {
+            throw new IllegalArgumentException("overshoot_scheme must not be null");
+        }
     }
 
     /** Number of physics combinations. */
@@ -56,7 +69,8 @@ public record PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, L
             for (double overshoot : overshoots) {
                 for (StabilityCriterion criterion : criteria) {
                     for (double factor : opacityFactors) {
-                        all.add(new PhysicsOptions(alpha, overshoot, criterion, factor, opacityTable, atmosphere));
+                        all.add(new PhysicsOptions(alpha, overshoot, criterion, factor, opacityTable, atmosphere,
+                                overshootScheme));
                     }
                 }
             }

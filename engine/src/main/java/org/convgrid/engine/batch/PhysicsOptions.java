@@ -1,20 +1,24 @@
 package org.convgrid.engine.batch;
 
 import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.engine.physics.OvershootScheme;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 
 /**
  * The physics choices a grid may vary.
  *
  * @param mixingLength alpha, mixing length in pressure scale heights
- * @param overshoot step overshoot distance, pressure scale heights
+ * @param overshoot overshoot parameter: alpha_ov (pressure scale heights) for the step scheme, f for the
+ *                  exponential one
  * @param criterion Schwarzschild or Ledoux
  * @param opacityFactor multiplies every opacity (1 = as published)
  * @param opacityTable path of a user opacity table in convgrid's table layout; empty for the analytic opacity
  * @param atmosphere the grey T(tau) relation of the surface boundary
+ * @param overshootScheme step (default) or exponential overshoot
  */
 public record PhysicsOptions(double mixingLength, double overshoot, StabilityCriterion criterion,
-                             double opacityFactor, String opacityTable, AtmosphereChoice atmosphere) {
+                             double opacityFactor, String opacityTable, AtmosphereChoice atmosphere,
+                             OvershootScheme overshootScheme) {
 
     public PhysicsOptions {
         if (opacityTable == null) {
@@ -23,6 +27,15 @@ public record PhysicsOptions(double mixingLength, double overshoot, StabilityCri
         if (atmosphere == null) {
             throw new IllegalArgumentException("atmosphere must not be null");
         }
+        if (overshootScheme == null) {
+            throw new IllegalArgumentException("overshootScheme must not be null");
+        }
+    }
+
+    /** Options with step overshoot. */
+    public PhysicsOptions(double mixingLength, double overshoot, StabilityCriterion criterion, double opacityFactor,
+                          String opacityTable, AtmosphereChoice atmosphere) {
+        this(mixingLength, overshoot, criterion, opacityFactor, opacityTable, atmosphere, OvershootScheme.STEP);
     }
 
     /** Options with the Eddington grey atmosphere. */
@@ -43,9 +56,17 @@ public record PhysicsOptions(double mixingLength, double overshoot, StabilityCri
 
     /** The same options with another atmosphere. */
     public PhysicsOptions withAtmosphere(AtmosphereChoice choice) {
-        return new PhysicsOptions(mixingLength, overshoot, criterion, opacityFactor, opacityTable, choice);
+        return new PhysicsOptions(mixingLength, overshoot, criterion, opacityFactor, opacityTable, choice,
+                overshootScheme);
     }
 
-    /** Defaults: alpha = 1.8, no overshoot, Schwarzschild, opacity as published, Eddington atmosphere. */
+    /** The same options with another overshoot scheme. */
+    public PhysicsOptions withOvershootScheme(OvershootScheme scheme) {
+        return new PhysicsOptions(mixingLength, overshoot, criterion, opacityFactor, opacityTable, atmosphere,
+                scheme);
+    }
+
+    /** Defaults: alpha = 1.8, no overshoot (step scheme), Schwarzschild, opacity as published, Eddington
+     * atmosphere. */
     public static final PhysicsOptions DEFAULT = new PhysicsOptions(1.8, 0.0, StabilityCriterion.SCHWARZSCHILD, 1.0);
 }

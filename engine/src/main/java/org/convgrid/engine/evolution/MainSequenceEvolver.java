@@ -5,8 +5,10 @@ import java.util.Arrays;
 import java.util.List;
 
 import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.convection.MixingLengthTheory;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.error.ConvgridException;
+import org.convgrid.engine.physics.OvershootScheme;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.HenyeySolver;
@@ -26,7 +28,9 @@ import org.convgrid.engine.units.Constants;
  * temperature; (2) convective zones of the previous model are homogenised ({@link ConvectiveMixing}); (3) the
  * structure is relaxed with that composition and the gravothermal term eps_grav from the difference with the
  * previous model ({@link GravothermalEnergy}). Mixing (2) covers the convective zones extended by step overshoot
- * of {@link PhysicsSet#overshootHp()} pressure scale heights ({@link StepOvershoot}); under the Ledoux criterion
+ * of {@link PhysicsSet#overshootHp()} pressure scale heights ({@link StepOvershoot}), or, with the exponential
+ * scheme, the convective zones followed by diffusion with D_ov = D_0 exp(-2 z/(f H_P)), f = overshootHp
+ * ({@link ExponentialOvershoot}); under the Ledoux criterion
  * semiconvective layers are then mixed by diffusion ({@link SemiconvectiveMixing}) and the relaxation gets
  * nabla_mu from the mixed composition ({@link MuGradient}). Between steps the mesh is redistributed when uneven, with a cost
  * for composition gradients (|D X|/{@link #COMPOSITION_MESH_STEP} per interval, formulas.md 6.3, capped so that a
@@ -254,9 +258,20 @@ public final class MainSequenceEvolver {
             comp[k] = network.advance(rho[k], t[k], start.state().composition(k), dt);
         }
         MassMesh mesh = start.state().mesh();
+        boolean exponential = physics.overshootScheme() == OvershootScheme.EXPONENTIAL;
         boolean[] mixed = StepOvershoot.mixedPoints(mesh, start.convective(), previous.profile(),
-                physics.overshootHp());
+                exponential ? 0.0 : physics.overshootHp());
         comp = ConvectiveMixing.mix(mesh, comp, mixed);
+        if (exponential && physics.overshootHp() > 0.0) {
+            // D_0 = v_c l_m/3 needs the mixing length: only mixing-length transport defines one
+            if (!(physics.convection() instanceof MixingLengthTheory mlt)) {
+                throw new IllegalArgumentException("exponential overshoot needs mixing-length convection, got "
+                        + physics.convection().getClass().getSimpleName());
+            }
+            double[] s = ExponentialOvershoot.coefficients(previous.profile(), mlt.alpha(), physics.overshootHp());
+            comp = SemiconvectiveMixing.diffuse(mesh, comp, ExponentialOvershoot.capped(mesh,
+                    remesh ? SemiconvectiveMixing.onMesh(previous.profile(), s, mesh) : s, dt), dt);
+        }
         double[] nablaMu = null;
         if (physics.criterion() == StabilityCriterion.LEDOUX) {
             double[] s = SemiconvectiveMixing.coefficients(previous, physics.eos(), SEMICONVECTION_EFFICIENCY);

@@ -67,12 +67,12 @@ final class StepOvershoot {
         return Double.isFinite(f) && f >= 0.0 && f <= 1.0 ? f : 0.5;
     }
 
-    private static double boundaryRadius(StellarProfile p, int k) {
+    static double boundaryRadius(StellarProfile p, int k) {
         double f = crossing(p, k);
         return p.radius(k) + f * (p.radius(k + 1) - p.radius(k));
     }
 
-    private static double boundaryScaleHeight(StellarProfile p, int k) {
+    static double boundaryScaleHeight(StellarProfile p, int k) {
         double f = crossing(p, k);
         return p.pressureScaleHeight(k) + f * (p.pressureScaleHeight(k + 1) - p.pressureScaleHeight(k));
     }

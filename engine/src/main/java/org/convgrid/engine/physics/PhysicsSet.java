@@ -16,9 +16,23 @@ import org.convgrid.engine.physics.opacity.Opacity;
  * @param convection actual gradient in unstable layers (mixing-length theory with its alpha)
  * @param criterion Schwarzschild or Ledoux
  * @param surface outer boundary condition
- * @param overshootHp step overshoot distance in pressure scale heights (0 for none)
+ * @param overshootHp overshoot parameter (0 for none): alpha_ov in pressure scale heights for the step scheme,
+ *                    f for the exponential one
+ * @param overshootScheme step or exponential overshoot
  */
 public record PhysicsSet(EquationOfState eos, Opacity opacity, NuclearNetwork nuclear,
                          ConvectiveTransport convection, StabilityCriterion criterion, SurfaceBoundary surface,
-                         double overshootHp) {
+                         double overshootHp, OvershootScheme overshootScheme) {
+
+    public PhysicsSet {
+        if (overshootScheme == null) {
+            throw new IllegalArgumentException("overshootScheme must not be null");
+        }
+    }
+
+    /** A set with step overshoot. */
+    public PhysicsSet(EquationOfState eos, Opacity opacity, NuclearNetwork nuclear, ConvectiveTransport convection,
+                      StabilityCriterion criterion, SurfaceBoundary surface, double overshootHp) {
+        this(eos, opacity, nuclear, convection, criterion, surface, overshootHp, OvershootScheme.STEP);
+    }
 }

@@ -75,7 +75,8 @@ public final class StandardPhysics {
         GreyAtmosphere atmosphere = new GreyAtmosphere(EOS, opacity, relation, relation.photosphericDepth());
         SurfaceBoundary table = new AtmosphereTable(atmosphere).tabulate(surfaceComposition);
         return new PhysicsSet(EOS, opacity, NUCLEAR, new MixingLengthTheory(options.mixingLength()),
-                options.criterion(), new TableWithFallback(table, atmosphere), options.overshoot());
+                options.criterion(), new TableWithFallback(table, atmosphere), options.overshoot(),
+                options.overshootScheme());
     }
 
     /**

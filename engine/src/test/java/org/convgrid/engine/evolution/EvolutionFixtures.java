@@ -37,6 +37,13 @@ final class EvolutionFixtures {
                 overshootHp);
     }
 
+    /** The standard physics of {@code c} with exponential overshoot of parameter {@code f}. */
+    static PhysicsSet exponentialOvershoot(Composition c, double f) {
+        PhysicsSet p = physics(c);
+        return new PhysicsSet(p.eos(), p.opacity(), p.nuclear(), p.convection(), p.criterion(), p.surface(), f,
+                org.convgrid.engine.physics.OvershootScheme.EXPONENTIAL);
+    }
+
     static synchronized ZamsModel zeroAge(Composition c, double massInSun) {
         ZamsTrack track = TRACKS.computeIfAbsent(c, x -> new ZamsTrack(new ZamsBuilder(physics(x)), x));
         ZamsResult r = track.solve(massInSun * Constants.M_SUN);

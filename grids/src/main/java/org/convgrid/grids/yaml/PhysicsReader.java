@@ -7,6 +7,7 @@ import java.util.Locale;
 import org.convgrid.engine.batch.PhysicsOptions;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.error.ConvgridException;
+import org.convgrid.engine.physics.OvershootScheme;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.physics.opacity.OpacityTableReader;
 import org.convgrid.grids.PhysicsAxes;
@@ -17,12 +18,13 @@ import org.snakeyaml.engine.v2.nodes.Node;
  * The {@code physics:} section. Each option is a value or a list of distinct values (a physics axis); an option
  * left out takes the engine default ({@link PhysicsOptions#DEFAULT}). {@code preset: FILE} takes the mixing
  * length from a physics preset ({@link PresetReader}; only the mixing length, not Y or Z) and excludes
- * {@code mixing_length}.
+ * {@code mixing_length}. {@code overshoot_scheme: step|exponential} (one value, default step) says what
+ * {@code overshoot} means: alpha_ov in pressure scale heights, or f of the exponential profile.
  */
 final class PhysicsReader {
 
     private static final List<String> KEYS = List.of("mixing_length", "overshoot", "criterion", "opacity_factor",
-            "opacity_table", "atmosphere", "preset");
+            "opacity_table", "atmosphere", "overshoot_scheme", "preset");
     private static final Range POSITIVE = Range.open(0.0, Double.POSITIVE_INFINITY);
     private static final Range NON_NEGATIVE = new Range(0.0, true, Double.POSITIVE_INFINITY, false);
 
@@ -65,11 +67,26 @@ final class PhysicsReader {
         String table = fields.has("opacity_table") ? opacityTable(fields.value("opacity_table"), reader) : "";
         AtmosphereChoice atmosphere = fields.has("atmosphere") ? atmosphere(fields.value("atmosphere"), reader)
                 : AtmosphereChoice.EDDINGTON;
+        OvershootScheme scheme = fields.has("overshoot_scheme")
+                ? overshootScheme(fields.value("overshoot_scheme"), reader) : OvershootScheme.STEP;
         if (alphas == null || overshoots == null || criteria == null || factors == null || table == null
-                || atmosphere == null) {
+                || atmosphere == null || scheme == null) {
             return null;
         }
-        return new PhysicsAxes(alphas, overshoots, criteria, factors, table, atmosphere);
+        return new PhysicsAxes(alphas, overshoots, criteria, factors, table, atmosphere, scheme);
+    }
+
+    /** The overshoot scheme: step (default) or exponential, one value. */
+    private static OvershootScheme overshootScheme(Node node, NodeReader reader) {
+        String text = reader.text(node, "overshoot_scheme");
+        if (text == null) {
+            return null;
+        }
+        OvershootScheme scheme = OvershootScheme.fromLabel(text);
+        if (scheme == null) {
+            reader.problem(node, "overshoot_scheme must be step or exponential, got '" + text + "'");
+        }
+        return scheme;
     }
 
     /** The grey T(tau) relation: eddington (default) or krishna_swamy. */

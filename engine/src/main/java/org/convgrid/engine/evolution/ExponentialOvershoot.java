@@ -1,0 +1,120 @@
+package org.convgrid.engine.evolution;
+
+import org.convgrid.engine.structure.MassMesh;
+import org.convgrid.engine.structure.StellarProfile;
+
+/**
+ * Exponential diffusive overshoot (Freytag, Ludwig &amp; Steffen 1996, A&amp;A 313, 497; Herwig 2000, A&amp;A 360,
+ * 952; formulas.md 4.4): beyond every formal boundary of a convective zone of the previous model that is not the
+ * centre or the surface, D_ov(z) = D_0 exp(-2 z/(f H_P)), z the radial distance from the boundary, H_P the
+ * pressure scale height at the boundary and D_0 = v_c l_m/3 (l_m = alpha H_P) the mixing-length diffusion
+ * coefficient a distance f0 H_P inside the boundary, here with f0 = f (a choice; Herwig 2000 leaves f0 open).
+ * Boundaries are located as in {@link StepOvershoot}. Where zones overlap the larger D wins. The returned S =
+ * (4 pi r^2 rho)^2 D feeds the implicit diffusion step of {@link SemiconvectiveMixing}; the convective points
+ * themselves are left to {@link ConvectiveMixing}. Stateless.
+ */
+final class ExponentialOvershoot {
+
+    private static final double FOUR_PI = 4.0 * Math.PI;
+    /**
+     * Largest S dt/Dm^2 kept: a coupling this strong already homogenises the cells within the step, and a
+     * stronger one only costs conservation (the elimination rounds at ~1e-16 times it).
+     */
+    static final double MAX_COUPLING = 1.0e6;
+
+    private ExponentialOvershoot() {
+    }
+
+    /**
+     * S = (4 pi r^2 rho)^2 D_ov per point of {@code previous}, g^2 s^-1 (0 inside convective zones and where no
+     * boundary reaches).
+     *
+     * @param alpha mixing length, pressure scale heights
+     * @param f e-folding parameter of the exponential, pressure scale heights (0 returns all zeros)
+     */
+    static double[] coefficients(StellarProfile previous, double alpha, double f) {
+        int n = previous.size();
+        double[] d = new double[n];
+        if (!(f > 0.0)) {
+            return d;
+        }
+        int k = 0;
+        while (k < n) {
+            if (!previous.convective(k)) {
+                k++;
+                continue;
+            }
+            int end = k;
+            while (end + 1 < n && previous.convective(end + 1)) {
+                end++;
+            }
+            if (k > 0) {
+                boundary(previous, k - 1, -1.0, alpha, f, d);
+            }
+            if (end < n - 1) {
+                boundary(previous, end, 1.0, alpha, f, d);
+            }
+            k = end + 1;
+        }
+        double[] s = new double[n];
+        for (int j = 0; j < n; j++) {
+            double area = FOUR_PI * previous.radius(j) * previous.radius(j) * previous.density(j);
+            s[j] = area * area * d[j];
+        }
+        return s;
+    }
+
+    /**
+     * Adds the profile of the boundary in interval (k, k + 1); {@code outward} +1 when the stable side is outside
+     * (the zone's upper edge), -1 when it is inside.
+     */
+    private static void boundary(StellarProfile p, int k, double outward, double alpha, double f, double[] d) {
+        double rb = StepOvershoot.boundaryRadius(p, k);
+        double hb = StepOvershoot.boundaryScaleHeight(p, k);
+        double r0 = rb - outward * f * hb;
+        double d0 = at(p, p.convectiveVelocities(), r0) * alpha * at(p, p.pressureScaleHeights(), r0) / 3.0;
+        if (!(d0 > 0.0)) {
+            return;
+        }
+        for (int j = 0; j < p.size(); j++) {
+            double z = outward * (p.radius(j) - rb);
+            if (z > 0.0 && !p.convective(j)) {
+                d[j] = Math.max(d[j], d0 * Math.exp(-2.0 * z / (f * hb)));
+            }
+        }
+    }
+
+    /** {@code values} (on the points of p) interpolated linearly in radius, clamped to the mesh. */
+    private static double at(StellarProfile p, double[] values, double r) {
+        int n = p.size();
+        if (r <= p.radius(0)) {
+            return values[0];
+        }
+        if (r >= p.radius(n - 1)) {
+            return values[n - 1];
+        }
+        int lo = 0;
+        while (lo < n - 2 && p.radius(lo + 1) <= r) {
+            lo++;
+        }
+        double w = (r - p.radius(lo)) / (p.radius(lo + 1) - p.radius(lo));
+        return values[lo] + w * (values[lo + 1] - values[lo]);
+    }
+
+    /** {@code s} on {@code mesh} with every S dt/Dm^2 held to {@link #MAX_COUPLING} (a new array). */
+    static double[] capped(MassMesh mesh, double[] s, double dt) {
+        int n = mesh.size();
+        double[] out = s.clone();
+        for (int j = 0; j < n; j++) {
+            double dm = Double.POSITIVE_INFINITY;
+            if (j > 0) {
+                dm = Math.min(dm, mesh.mass(j) - mesh.mass(j - 1));
+            }
+            if (j < n - 1) {
+                dm = Math.min(dm, mesh.mass(j + 1) - mesh.mass(j));
+            }
+            out[j] = Math.min(out[j], MAX_COUPLING * dm * dm / dt);
+        }
+        return out;
+    }
+}
