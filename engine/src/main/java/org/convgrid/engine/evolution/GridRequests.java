@@ -3,17 +3,14 @@ package org.convgrid.engine.evolution;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
-import java.util.concurrent.ConcurrentHashMap;
 
 import org.convgrid.engine.batch.ChunkSolver;
 import org.convgrid.engine.batch.ModelOutcome;
 import org.convgrid.engine.batch.ModelRequest;
 import org.convgrid.engine.batch.ModelStatus;
-import org.convgrid.engine.batch.PhysicsOptions;
 import org.convgrid.engine.error.ConvgridException;
+import org.convgrid.engine.physics.PhysicsBundles;
 import org.convgrid.engine.physics.PhysicsSet;
-import org.convgrid.engine.physics.StandardPhysics;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.units.Constants;
@@ -24,7 +21,7 @@ import org.convgrid.engine.zams.ZeroAgeRequests;
 
 /**
  * Solves grid requests at any age. A chunk walks its masses in order on a fresh {@link ZamsTrack} (each zero-age
- * model seeded by homology from its converged neighbours, as in {@link ZeroAgeRequests}); the requests of one mass
+ * model seeded by homology from its converged neighbours, a {@link ZamsTrack} per chunk); the requests of one mass
  * (consecutive in a chunk) are answered by one {@link MainSequenceEvolver} run from that zero-age model, stopped at
  * the largest requested age, with a step landing exactly on every requested age (no interpolation). Age 0 is the
  * zero-age model itself. Ages beyond core-hydrogen exhaustion are {@link ModelStatus#PAST_MAIN_SEQUENCE} with the
@@ -53,7 +50,7 @@ public final class GridRequests implements ChunkSolver {
     public record Answer(ModelOutcome outcome, StellarModel model) {
     }
 
-    private final Map<Line, PhysicsSet> physics = new ConcurrentHashMap<>();
+    private final PhysicsBundles physics = new PhysicsBundles();
     private final TrackSink tracks;
     private final MainSequenceEvolver.Settings settings;
     private final AgeMeaning meaning;
@@ -92,8 +89,7 @@ public final class GridRequests implements ChunkSolver {
         }
         ModelRequest first = chunk.get(0);
         Composition composition = ZeroAgeRequests.initialComposition(first);
-        PhysicsSet set = physics.computeIfAbsent(new Line(first.physics(), composition),
-                line -> StandardPhysics.create(line.options(), line.composition()));
+        PhysicsSet set = physics.of(first.physics(), composition);
         ZamsTrack track = new ZamsTrack(new ZamsBuilder(set), composition);
         int start = 0;
         while (start < chunk.size()) {
@@ -190,6 +186,4 @@ public final class GridRequests implements ChunkSolver {
         return new ModelOutcome(r, status, detail, null, null, 0);
     }
 
-    private record Line(PhysicsOptions options, Composition composition) {
-    }
 }

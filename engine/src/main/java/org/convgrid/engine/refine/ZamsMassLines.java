@@ -1,12 +1,10 @@
 package org.convgrid.engine.refine;
 
-import java.util.Map;
-import java.util.concurrent.ConcurrentHashMap;
 import org.convgrid.engine.batch.ModelOutcome;
 import org.convgrid.engine.batch.ModelStatus;
 import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.physics.PhysicsBundles;
 import org.convgrid.engine.physics.PhysicsSet;
-import org.convgrid.engine.physics.StandardPhysics;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.zams.ZamsBuilder;
 import org.convgrid.engine.zams.ZamsTrack;
@@ -14,28 +12,24 @@ import org.convgrid.engine.zams.ZeroAgeRequests;
 
 /**
  * The production lines: each line is a fresh {@link ZamsTrack}, so every model after the first is seeded by
- * homology from the nearest converged models of the line, as in a grid chunk ({@link ZeroAgeRequests}). The
- * composition is homogeneous and scaled solar, X = 1 - Y - Z, as for grid models. Requests at ages above zero are
- * answered with a failed outcome (no evolution in age yet).
+ * homology from the nearest converged models of the line, as in a grid chunk. The composition is homogeneous
+ * and scaled solar, X = 1 - Y - Z, as for grid models ({@link ZeroAgeRequests#initialComposition}). Requests at
+ * ages above zero are answered with a failed outcome: refinement builds zero-age models only.
  *
- * <p>Thread-safe: the physics bundle of each (options, composition) is built once (its atmosphere table is the costly
- * part) and shared; bundles are immutable, so which thread builds one does not change any result.
+ * <p>Thread-safe: the physics bundles are shared through {@link PhysicsBundles}.
  */
 public final class ZamsMassLines implements MassLineFactory {
 
-    private final Map<Line, PhysicsSet> physics = new ConcurrentHashMap<>();
+    private final PhysicsBundles physics = new PhysicsBundles();
 
     @Override
     public MassLine open(PhysicsOptions options, double initialMetals, double initialHelium) {
-        Composition composition = Composition.scaledSolar(1.0 - initialHelium - initialMetals, initialMetals);
-        PhysicsSet set = physics.computeIfAbsent(new Line(options, composition),
-                line -> StandardPhysics.create(line.options(), line.composition()));
+        Composition composition = ZeroAgeRequests.initialComposition(initialMetals, initialHelium);
+        PhysicsSet set = physics.of(options, composition);
         ZamsTrack track = new ZamsTrack(new ZamsBuilder(set), composition);
         return request -> request.age() != 0.0
                 ? new ModelOutcome(request, ModelStatus.FAILED, ZeroAgeRequests.NO_EVOLUTION, null, null, 0)
                 : ZeroAgeRequests.outcome(request, track.solve(request.mass()));
     }
 
-    private record Line(PhysicsOptions options, Composition composition) {
-    }
 }
