@@ -21,7 +21,7 @@ import org.convgrid.engine.zams.ZeroAgeRequests;
 
 /**
  * Solves grid requests at any age. A chunk walks its masses in order on a fresh {@link ZamsTrack} (each zero-age
- * model seeded by homology from its converged neighbours, a {@link ZamsTrack} per chunk); the requests of one mass
+ * model seeded by homology from its converged neighbours); the requests of one mass
  * (consecutive in a chunk) are answered by one {@link MainSequenceEvolver} run from that zero-age model, stopped at
  * the largest requested age, with a step landing exactly on every requested age (no interpolation). Age 0 is the
  * zero-age model itself. Ages beyond core-hydrogen exhaustion are {@link ModelStatus#PAST_MAIN_SEQUENCE} with the
