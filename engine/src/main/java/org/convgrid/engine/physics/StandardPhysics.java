@@ -17,12 +17,14 @@ import org.convgrid.engine.physics.nuclear.NuclearNetwork;
 import org.convgrid.engine.physics.opacity.AnalyticCompositeOpacity;
 import org.convgrid.engine.physics.opacity.Opacity;
 import org.convgrid.engine.physics.opacity.OpacityTableReader;
+import org.convgrid.engine.physics.opacity.ReferenceCorrectedOpacity;
 import org.convgrid.engine.physics.opacity.ScaledOpacity;
 import org.convgrid.engine.state.Composition;
 
 /**
  * The default physics of zero-age and main-sequence models: {@link StellarPlasmaEos},
- * {@link AnalyticCompositeOpacity} or a user table (times the options' opacity factor),
+ * {@link AnalyticCompositeOpacity} corrected to the OPAL GN93 tables ({@link ReferenceCorrectedOpacity}) or a user
+ * table (times the options' opacity factor),
  * {@link HydrogenBurningNetwork}, {@link MixingLengthTheory} with the options' alpha, the options' stability
  * criterion, and a grey atmosphere tabulated once for the surface composition, with the direct integration where
  * the table has no answer. Every component is immutable and thread-safe, so the stateless ones are shared.
@@ -30,7 +32,7 @@ import org.convgrid.engine.state.Composition;
 public final class StandardPhysics {
 
     private static final EquationOfState EOS = new StellarPlasmaEos();
-    private static final Opacity OPACITY = AnalyticCompositeOpacity.standard();
+    private static final Opacity OPACITY = ReferenceCorrectedOpacity.opalGn93(AnalyticCompositeOpacity.standard());
     private static final NuclearNetwork NUCLEAR = new HydrogenBurningNetwork();
 
     private StandardPhysics() {
@@ -41,13 +43,13 @@ public final class StandardPhysics {
         return EOS;
     }
 
-    /** The analytic composite Rosseland mean multiplied by {@code factor} (1 = as published). */
+    /** The analytic composite corrected to OPAL GN93, multiplied by {@code factor} (1 = as published). */
     public static Opacity opacity(double factor) {
         return ScaledOpacity.of(OPACITY, factor);
     }
 
     /**
-     * The opacity the options ask for: a user table when one is named (read here), else the analytic composite;
+     * The opacity the options ask for: a user table when one is named (read here), else the OPAL-corrected analytic composite;
      * times the opacity factor.
      *
      * @throws ConvgridException BAD_DATA when the table cannot be read
