@@ -7,6 +7,7 @@ import java.util.concurrent.Callable;
 import org.convgrid.engine.calibration.CalibratedSun;
 import org.convgrid.engine.calibration.CalibrationSettings;
 import org.convgrid.engine.calibration.SolarCalibration;
+import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.output.AtomicFiles;
 import picocli.CommandLine.Command;
@@ -41,6 +42,11 @@ final class CalibrateSunCommand implements Callable<Integer> {
                     + "catalogue columns, zams_luminosity_lsun, ms_lifetime_gyr). Default ${DEFAULT-VALUE}.")
     OutputFormat format;
 
+    @Option(names = "--atmosphere", defaultValue = "krishna_swamy", paramLabel = "eddington|krishna_swamy",
+            description = "Grey T(tau) relation of the surface boundary; the calibrated mixing length belongs to it "
+                    + "and the preset records it (default ${DEFAULT-VALUE}).")
+    AtmosphereChoice atmosphere;
+
     @Option(names = "--preset", defaultValue = "calibrated-sun.yaml", paramLabel = "FILE",
             description = "Physics preset file to write (YAML; default ${DEFAULT-VALUE} in the current directory).")
     Path preset;
@@ -55,7 +61,7 @@ final class CalibrateSunCommand implements Callable<Integer> {
         }
         Path target = main.context().resolve(preset);
         CalibrationSettings settings = CalibrationSettings.DEFAULT.withAge(ageGyr * Constants.GYR)
-                .withMetalsToHydrogen(metalsToHydrogen);
+                .withMetalsToHydrogen(metalsToHydrogen).withAtmosphere(atmosphere);
         int[] count = {0};
         CalibratedSun sun = new SolarCalibration(settings).calibrate(t -> {
             main.err().println(String.format(Locale.ROOT, "evolution %d: alpha = %.5f, Y = %.5f: "
@@ -69,7 +75,7 @@ final class CalibrateSunCommand implements Callable<Integer> {
             SolarCalibrationReport.writeTable(sun, main.out());
         }
         main.out().flush();
-        AtomicFiles.writeString(target, SolarCalibrationReport.preset(sun, ToolVersion.current()));
+        AtomicFiles.writeString(target, SolarCalibrationReport.preset(sun, atmosphere, ToolVersion.current()));
         main.err().println("preset: mixing length " + String.format(Locale.ROOT, "%.5f", sun.mixingLength())
                 + " written to " + target);
         return ExitCodes.OK;

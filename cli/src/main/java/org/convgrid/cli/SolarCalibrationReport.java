@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import org.apache.commons.csv.CSVPrinter;
 import org.convgrid.engine.calibration.CalibratedSun;
+import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.catalogue.CatalogueColumns;
@@ -75,12 +76,14 @@ final class SolarCalibrationReport {
     }
 
     /** The physics preset file (our own small YAML layout; grids' PhysicsReader reads it). */
-    static String preset(CalibratedSun sun, String toolVersion) {
+    static String preset(CalibratedSun sun, AtmosphereChoice atmosphere, String toolVersion) {
         return String.format(Locale.ROOT, """
                 # convgrid physics preset from a solar calibration (convgrid calibrate-sun).
-                # A grid file that names this preset takes its mixing_length; y_init and z_init are what the
-                # calibration found, for reference: the grid's metallicity section still sets each model's Y and Z.
+                # A grid file that names this preset takes its mixing_length and atmosphere; y_init and z_init are
+                # what the calibration found, for reference: the grid's metallicity section still sets each
+                # model's Y and Z.
                 mixing_length: %s
+                atmosphere: %s
                 y_init: %s
                 z_init: %s
                 z_over_x: %s
@@ -88,7 +91,7 @@ final class SolarCalibrationReport {
                 tool_version: "%s"
                 residual_ln_radius: %s
                 residual_ln_luminosity: %s
-                """, CsvNumbers.format(sun.mixingLength()), CsvNumbers.format(sun.helium()),
+                """, CsvNumbers.format(sun.mixingLength()), atmosphere.label(), CsvNumbers.format(sun.helium()),
                 CsvNumbers.format(sun.metals()), CsvNumbers.format(sun.metalsToHydrogen()),
                 CsvNumbers.format(sun.age() / Constants.GYR), toolVersion.replace("\"", ""),
                 CsvNumbers.format(sun.radiusResidual()), CsvNumbers.format(sun.luminosityResidual()));

@@ -72,7 +72,7 @@ final class StarCommand implements Callable<Integer> {
             description = "Use this opacity table (convgrid table layout, see README) instead of the analytic one.")
     Path opacityTable;
 
-    @Option(names = "--atmosphere", defaultValue = "eddington", paramLabel = "eddington|krishna_swamy",
+    @Option(names = "--atmosphere", defaultValue = "krishna_swamy", paramLabel = "eddington|krishna_swamy",
             description = "Grey T(tau) relation of the surface boundary (default ${DEFAULT-VALUE}).")
     AtmosphereChoice atmosphere;
 

@@ -18,6 +18,7 @@ import org.convgrid.engine.calibration.CalibratedSun;
 import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.convection.StructureClass;
+import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.output.catalogue.CatalogueColumns;
 import org.junit.jupiter.api.Test;
@@ -70,9 +71,10 @@ class CalibrateSunCommandTest {
 
     @Test
     void presetNamesTheMixingLengthAndTheCalibratedComposition() {
-        String text = SolarCalibrationReport.preset(syntheticSun(), "1.2.3");
+        String text = SolarCalibrationReport.preset(syntheticSun(), AtmosphereChoice.KRISHNA_SWAMY, "1.2.3");
         assertThat(text).contains("\nmixing_length: 1.9\n").contains("\ny_init: 0.27\n")
-                .contains("\nz_over_x: 0.0231\n").contains("\nage_gyr: 4.57\n").contains("tool_version: \"1.2.3\"");
+                .contains("\nz_over_x: 0.0231\n").contains("\nage_gyr: 4.57\n").contains("tool_version: \"1.2.3\"")
+                .contains("\natmosphere: krishna_swamy\n");
     }
 
     @Test

@@ -30,10 +30,10 @@ public record PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, L
         this(mixingLengths, overshoots, criteria, opacityFactors, opacityTable, atmosphere, OvershootScheme.STEP);
     }
 
-    /** Axes with the Eddington grey atmosphere. */
+    /** Axes with the default atmosphere. */
     public PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, List<StabilityCriterion> criteria,
                        List<Double> opacityFactors, String opacityTable) {
-        this(mixingLengths, overshoots, criteria, opacityFactors, opacityTable, AtmosphereChoice.EDDINGTON);
+        this(mixingLengths, overshoots, criteria, opacityFactors, opacityTable, AtmosphereChoice.DEFAULT);
     }
 
     /** Axes with the analytic opacity. */

@@ -38,13 +38,13 @@ public record PhysicsOptions(double mixingLength, double overshoot, StabilityCri
         this(mixingLength, overshoot, criterion, opacityFactor, opacityTable, atmosphere, OvershootScheme.STEP);
     }
 
-    /** Options with the Eddington grey atmosphere. */
+    /** Options with the default atmosphere ({@link AtmosphereChoice#DEFAULT}). */
     public PhysicsOptions(double mixingLength, double overshoot, StabilityCriterion criterion, double opacityFactor,
                           String opacityTable) {
-        this(mixingLength, overshoot, criterion, opacityFactor, opacityTable, AtmosphereChoice.EDDINGTON);
+        this(mixingLength, overshoot, criterion, opacityFactor, opacityTable, AtmosphereChoice.DEFAULT);
     }
 
-    /** Options with the analytic opacity and the Eddington grey atmosphere. */
+    /** Options with the built-in opacity and the default atmosphere. */
     public PhysicsOptions(double mixingLength, double overshoot, StabilityCriterion criterion, double opacityFactor) {
         this(mixingLength, overshoot, criterion, opacityFactor, "");
     }
@@ -66,7 +66,7 @@ public record PhysicsOptions(double mixingLength, double overshoot, StabilityCri
                 scheme);
     }
 
-    /** Defaults: alpha = 1.8, no overshoot (step scheme), Schwarzschild, opacity as published, Eddington
+    /** Defaults: alpha = 1.8, no overshoot (step scheme), Schwarzschild, opacity as built in, the default
      * atmosphere. */
     public static final PhysicsOptions DEFAULT = new PhysicsOptions(1.8, 0.0, StabilityCriterion.SCHWARZSCHILD, 1.0);
 }

@@ -2,6 +2,7 @@ package org.convgrid.engine.calibration;
 
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
+import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.units.Constants;
 
 /**
@@ -22,30 +23,40 @@ import org.convgrid.engine.units.Constants;
  * @param evolutionBudget full evolutions to the solar age allowed (the Jacobian's included)
  * @param evolution time-step settings of every evolution (the same for all, so residuals are smooth in the
  *                  unknowns)
+ * @param atmosphere the grey T(tau) relation of the surface boundary; the calibrated mixing length belongs to it
  */
 public record CalibrationSettings(double age, double metalsToHydrogen, double startMixingLength,
                                   double startHelium, double tolerance, int evolutionBudget,
-                                  MainSequenceEvolver.Settings evolution) {
+                                  MainSequenceEvolver.Settings evolution, AtmosphereChoice atmosphere) {
 
-    /** 4.57 Gyr, Z/X = 0.0231 (GS98), start alpha = 1.8, Y = 0.27, tolerance 1e-4, 16 evolutions. */
+    /**
+     * 4.57 Gyr, Z/X = 0.0231 (GS98), start alpha = 1.8, Y = 0.27, tolerance 1e-4, 16 evolutions, the default
+     * atmosphere.
+     */
     public static final CalibrationSettings DEFAULT = new CalibrationSettings(4.57 * Constants.GYR, 0.0231, 1.8,
-            0.27, 1.0e-4, 16, MainSequenceEvolver.Settings.DEFAULT);
+            0.27, 1.0e-4, 16, MainSequenceEvolver.Settings.DEFAULT, AtmosphereChoice.DEFAULT);
 
     public CalibrationSettings {
         ConvgridException.requireInRange("age", age / Constants.GYR, 1.0e-3, 13.0, "Gyr");
         ConvgridException.requireInRange("Z/X", metalsToHydrogen, 0.0, 0.1, "");
         ConvgridException.requireInRange("start alpha", startMixingLength, 0.3, 4.0, "H_P");
         ConvgridException.requireInRange("start Y", startHelium, 0.2, 0.4, "");
+        java.util.Objects.requireNonNull(atmosphere, "atmosphere");
     }
 
     public CalibrationSettings withAge(double newAge) {
         return new CalibrationSettings(newAge, metalsToHydrogen, startMixingLength, startHelium, tolerance,
-                evolutionBudget, evolution);
+                evolutionBudget, evolution, atmosphere);
     }
 
     public CalibrationSettings withMetalsToHydrogen(double ratio) {
         return new CalibrationSettings(age, ratio, startMixingLength, startHelium, tolerance, evolutionBudget,
-                evolution);
+                evolution, atmosphere);
+    }
+
+    public CalibrationSettings withAtmosphere(AtmosphereChoice choice) {
+        return new CalibrationSettings(age, metalsToHydrogen, startMixingLength, startHelium, tolerance,
+                evolutionBudget, evolution, choice);
     }
 
     /** Initial hydrogen mass fraction for initial helium {@code y}: X = (1 - Y)/(1 + Z/X). */

@@ -101,7 +101,7 @@ public final class SolarCalibration {
                     "residual", t.worstResidual());
         }
         ModelRequest request = new ModelRequest(CalibratedSun.MODEL_ID, Constants.M_SUN, t.metals(), t.helium(),
-                settings.age(), SolarTrack.options(t.mixingLength()));
+                settings.age(), SolarTrack.options(t.mixingLength(), settings));
         var m = t.model();
         ModelOutcome outcome = new ModelOutcome(request, ModelStatus.OK, "", m.global(), m.convection(),
                 t.iterationsToAge());

@@ -31,9 +31,9 @@ final class SolarTrack {
         this.settings = settings;
     }
 
-    /** The physics options of a trial with mixing length {@code alpha}. */
-    static PhysicsOptions options(double alpha) {
-        return new PhysicsOptions(alpha, 0.0, StabilityCriterion.SCHWARZSCHILD, 1.0);
+    /** The physics options of a trial with mixing length {@code alpha} and the settings' atmosphere. */
+    static PhysicsOptions options(double alpha, CalibrationSettings settings) {
+        return new PhysicsOptions(alpha, 0.0, StabilityCriterion.SCHWARZSCHILD, 1.0, "", settings.atmosphere());
     }
 
     /**
@@ -46,7 +46,7 @@ final class SolarTrack {
         double x = settings.hydrogen(y);
         double z = settings.metals(y);
         Composition composition = Composition.scaledSolar(x, z);
-        PhysicsSet physics = StandardPhysics.create(options(alpha), composition);
+        PhysicsSet physics = StandardPhysics.create(options(alpha, settings), composition);
         ZamsResult zams = ZamsTrack.solveOne(new ZamsBuilder(physics), composition, Constants.M_SUN, null);
         if (!zams.converged()) {
             throw new ConvgridException(ErrorKind.NOT_CONVERGED, String.format(

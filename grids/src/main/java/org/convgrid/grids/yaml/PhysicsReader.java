@@ -45,14 +45,15 @@ final class PhysicsReader {
         List<Double> alphas = fields.has("mixing_length")
                 ? AxisValues.distinct(fields.value("mixing_length"), "mixing_length", POSITIVE, reader)
                 : List.of(d.mixingLength());
+        PresetReader.Preset preset = null;
         if (fields.has("preset")) {
-            Double preset = PresetReader.mixingLength(fields.value("preset"), reader);
+            preset = PresetReader.read(fields.value("preset"), reader);
             if (fields.has("mixing_length")) {
                 reader.problem(fields.key("preset"), "give either preset or mixing_length, not both "
                         + "(a preset sets the mixing length)");
                 alphas = null;
             } else {
-                alphas = preset == null ? null : List.of(preset);
+                alphas = preset == null ? null : List.of(preset.mixingLength());
             }
         }
         List<Double> overshoots = fields.has("overshoot")
@@ -66,7 +67,18 @@ final class PhysicsReader {
                 : List.of(d.opacityFactor());
         String table = fields.has("opacity_table") ? opacityTable(fields.value("opacity_table"), reader) : "";
         AtmosphereChoice atmosphere = fields.has("atmosphere") ? atmosphere(fields.value("atmosphere"), reader)
-                : AtmosphereChoice.EDDINGTON;
+                : AtmosphereChoice.DEFAULT;
+        if (preset != null && preset.atmosphere() != null) {
+            // a calibrated mixing length belongs to the atmosphere it was calibrated with
+            if (fields.has("atmosphere") && atmosphere != null && atmosphere != preset.atmosphere()) {
+                reader.problem(fields.value("atmosphere"), "the preset's mixing length was calibrated with atmosphere "
+                        + preset.atmosphere().label() + ", this grid asks for " + atmosphere.label()
+                        + ": drop 'atmosphere' or calibrate again with --atmosphere " + atmosphere.label());
+                atmosphere = null;
+            } else if (!fields.has("atmosphere")) {
+                atmosphere = preset.atmosphere();
+            }
+        }
         OvershootScheme scheme = fields.has("overshoot_scheme")
                 ? overshootScheme(fields.value("overshoot_scheme"), reader) : OvershootScheme.STEP;
         if (alphas == null || overshoots == null || criteria == null || factors == null || table == null
@@ -89,7 +101,7 @@ final class PhysicsReader {
         return scheme;
     }
 
-    /** The grey T(tau) relation: eddington (default) or krishna_swamy. */
+    /** The grey T(tau) relation: eddington or krishna_swamy (default). */
     private static AtmosphereChoice atmosphere(Node node, NodeReader reader) {
         String text = reader.text(node, "atmosphere");
         if (text == null) {

@@ -5,6 +5,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
+import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.grids.GridProblem;
 import org.snakeyaml.engine.v2.api.LoadSettings;
 import org.snakeyaml.engine.v2.api.lowlevel.Compose;
@@ -15,15 +16,16 @@ import org.snakeyaml.engine.v2.nodes.Node;
 
 /**
  * A physics preset named by {@code physics: {preset: FILE}} (FILE relative to the grid file's folder), as written
- * by {@code convgrid calibrate-sun}. A preset sets the mixing length only: its {@code y_init}, {@code z_init} and
- * the rest are a record of the calibration, and the grid's metallicity section still sets every model's Y and Z.
+ * by {@code convgrid calibrate-sun}. A preset sets the mixing length and, when it names one, the atmosphere the
+ * mixing length was calibrated with: its {@code y_init}, {@code z_init} and the rest are a record of the
+ * calibration, and the grid's metallicity section still sets every model's Y and Z.
  * Problems inside the preset are reported at the grid file's {@code preset} value, followed by the preset's own
  * file:line:column.
  */
 final class PresetReader {
 
     private static final List<String> KEYS = List.of("mixing_length", "y_init", "z_init", "z_over_x", "age_gyr",
-            "tool_version", "residual_ln_radius", "residual_ln_luminosity");
+            "tool_version", "residual_ln_radius", "residual_ln_luminosity", "atmosphere");
     private static final List<String> RECORD_NUMBERS = List.of("y_init", "z_init", "z_over_x", "age_gyr",
             "residual_ln_radius", "residual_ln_luminosity");
     private static final Range POSITIVE = Range.open(0.0, Double.POSITIVE_INFINITY);
@@ -31,8 +33,12 @@ final class PresetReader {
     private PresetReader() {
     }
 
-    /** The preset's mixing length, or null when it has problems (recorded at {@code node}). */
-    static Double mixingLength(Node node, NodeReader reader) {
+    /** What a preset sets: the mixing length, and the atmosphere it belongs to (null when the preset names none). */
+    record Preset(double mixingLength, AtmosphereChoice atmosphere) {
+    }
+
+    /** The preset, or null when it has problems (recorded at {@code node}). */
+    static Preset read(Node node, NodeReader reader) {
         String name = reader.text(node, "preset");
         if (name == null) {
             return null;
@@ -47,14 +53,14 @@ final class PresetReader {
             return null;
         }
         NodeReader inner = new NodeReader(file.toString());
-        Double alpha = read(text, inner);
+        Preset preset = parse(text, inner);
         for (GridProblem p : inner.problems()) {
             reader.problem(node, "preset " + p);
         }
-        return inner.problems().isEmpty() ? alpha : null;
+        return inner.problems().isEmpty() ? preset : null;
     }
 
-    private static Double read(String text, NodeReader inner) {
+    private static Preset parse(String text, NodeReader inner) {
         Optional<Node> root;
         try {
             root = new Compose(LoadSettings.builder().setLabel(inner.file()).setMaxAliasesForCollections(0).build())
@@ -89,6 +95,16 @@ final class PresetReader {
             inner.problem(fields.value("mixing_length"), "mixing_length in a preset must be one value");
             return null;
         }
-        return alpha == null ? null : alpha.get(0);
+        AtmosphereChoice atmosphere = null;
+        if (fields.has("atmosphere")) {
+            String label = inner.text(fields.value("atmosphere"), "atmosphere");
+            atmosphere = label == null ? null : AtmosphereChoice.fromLabel(label);
+            if (atmosphere == null) {
+                inner.problem(fields.value("atmosphere"), "atmosphere must be eddington or krishna_swamy, got '"
+                        + label + "'");
+                return null;
+            }
+        }
+        return alpha == null ? null : new Preset(alpha.get(0), atmosphere);
     }
 }

@@ -7,6 +7,12 @@ public enum AtmosphereChoice {
     /** Krishna Swamy 1966 (ApJ 145, 174) fit to the solar atmosphere (coefficients from memory). */
     KRISHNA_SWAMY("krishna_swamy");
 
+    /**
+     * The relation used when a grid file or command names none: the solar-fitted one, with which our solar
+     * calibration gives a mixing length inside the published range (the Eddington relation gives ~0.2 less).
+     */
+    public static final AtmosphereChoice DEFAULT = KRISHNA_SWAMY;
+
     private final String label;
 
     AtmosphereChoice(String label) {

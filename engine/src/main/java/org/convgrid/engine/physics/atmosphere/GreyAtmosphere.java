@@ -18,8 +18,12 @@ import org.convgrid.engine.units.Constants;
  * atmosphere, dP/dtau = g/kappa(P, T(tau)), with T(tau) from a {@link TemperatureTauRelation} and P the total
  * (gas + radiation) pressure (formulas.md 5.2; e.g. Kippenhahn, Weigert &amp; Weiss 2012, ch. 10).
  *
- * <p>Radiation pressure is the aT^4/3 of the EOS, exact in the Eddington approximation, and the integration
- * follows the gas pressure in ln tau from an outer depth tau_0 = {@value #DEFAULT_OUTER_DEPTH}, where
+ * <p>The radiative force on the gas is kappa F/c with the constant flux F = sigma Teff^4, so the gas pressure
+ * obeys dP_gas/dtau = g/kappa - F/c whatever the relation; the total pressure handed to the interior is P_gas +
+ * aT^4/3, the EOS's radiation pressure, which in the Eddington approximation has exactly the gradient F/c.
+ * (Differentiating aT^4/3 along a relation with a steep Hopf function near tau = 0, such as Krishna Swamy's, would
+ * give a spurious force (1 + q') F/c, up to 3.8 F/c, that pushes hot ~50 000 K atmospheres past gravity.)
+ * The integration follows the gas pressure in ln tau from an outer depth tau_0 = {@value #DEFAULT_OUTER_DEPTH}, where
  * P_gas(tau_0) = tau_0 g/kappa(P(tau_0), T(tau_0)) is solved by Newton: the gas column above tau_0 is taken
  * at its hydrostatic value without the radiative force, an error of at most tau_0 F/c in P. The sensitivities
  * d ln P/d ln Teff and d ln P/d ln g are integrated with the pressure (variational equations), using the
@@ -101,8 +105,8 @@ public final class GreyAtmosphere implements SurfaceBoundary {
     /**
      * The ODE in s = ln tau for y = (ln P_gas, d ln P_gas/d ln Teff, d ln P_gas/d ln g), one atmosphere.
      * Gas pressure is the variable because near the top of hot atmospheres it is a small part of P, and
-     * dP_gas/dtau = g/kappa - dP_rad/dtau with dP_rad/dtau = (a/3) dT^4/dtau = (sigma Teff^4/c)(1 + q'(tau)).
-     * Writing A = tau g/(kappa P_gas), B = tau (dP_rad/dtau)/P_gas, k_P = (dln kappa/dln P)_T =
+     * dP_gas/dtau = g/kappa - F/c with F/c = sigma Teff^4/c.
+     * Writing A = tau g/(kappa P_gas), B = tau (F/c)/P_gas, k_P = (dln kappa/dln P)_T =
      * kappa_rho/chi_rho, k_T = (dln kappa/dln T)_P = kappa_T - kappa_rho delta and b = P_gas/P:
      * y0' = A - B, y1' = A(-k_P(b y1 + 4(1 - b)) - k_T - y1) - B(4 - y1), y2' = A(1 - (1 + k_P b) y2) + B y2.
      */
@@ -133,7 +137,7 @@ public final class GreyAtmosphere implements SurfaceBoundary {
             double[] k = kappa(pGas + pRad, t);
             double b = pGas / (pGas + pRad);
             double a = tau * gravity / (k[0] * pGas);
-            double r = tau * fluxOverC * (1.0 + relation.hopfDerivative(tau)) / pGas;
+            double r = tau * fluxOverC / pGas;
             if (r > a && b < MIN_GAS_PRESSURE_FRACTION) {
                 throw superEddington(tau, k[0]);
             }
@@ -147,7 +151,7 @@ public final class GreyAtmosphere implements SurfaceBoundary {
             double t0 = relation.temperature(tau0, teff);
             double pRad = radiationPressure(t0);
             double lnPg = Math.log(tau0 * gravity / 0.2); // electron scattering guess, kappa ~ 0.2 (1+X)
-            double radiativeForce = fluxOverC * (1.0 + relation.hopfDerivative(tau0));
+            double radiativeForce = fluxOverC;
             for (int i = 0; i < MAX_START_ITERATIONS; i++) {
                 double pGas = Math.exp(lnPg);
                 double[] k = kappa(pGas + pRad, t0);
