@@ -24,8 +24,9 @@ import org.convgrid.engine.units.Constants;
 /**
  * Evolves a zero-age main-sequence model in time until core-hydrogen exhaustion (central X below
  * {@link Settings#endCentralHydrogen()}) or the age limit. Each step, operator split (formulas.md 6.4): (1) the
- * composition of every point is advanced over dt by {@link CompositionStep} at the previous model's density and
- * temperature; (2) convective zones of the previous model are homogenised ({@link ConvectiveMixing}); (3) the
+ * convective zones of the previous model are homogenised ({@link ConvectiveMixing}); (2) the composition is
+ * advanced over dt by {@link CompositionStep} at the previous model's density and temperature, each mixed zone as
+ * one composition with its mass-weighted rates, every other point on its own; (3) the
  * structure is relaxed with that composition and the gravothermal term eps_grav from the difference with the
  * previous model ({@link GravothermalEnergy}). Mixing (2) covers the convective zones extended by step overshoot
  * of {@link PhysicsSet#overshootHp()} pressure scale heights ({@link StepOvershoot}), or, with the exponential
@@ -253,15 +254,11 @@ public final class MainSequenceEvolver {
                 t[k] *= Math.pow(t[k] / p.temperature(k), w);
             }
         }
-        Composition[] comp = new Composition[n];
-        for (int k = 0; k < n; k++) {
-            comp[k] = network.advance(rho[k], t[k], start.state().composition(k), dt);
-        }
         MassMesh mesh = start.state().mesh();
         boolean exponential = physics.overshootScheme() == OvershootScheme.EXPONENTIAL;
         boolean[] mixed = StepOvershoot.mixedPoints(mesh, start.convective(), previous.profile(),
                 exponential ? 0.0 : physics.overshootHp());
-        comp = ConvectiveMixing.mix(mesh, comp, mixed);
+        Composition[] comp = burn(start.state(), mixed, rho, t, dt);
         if (exponential && physics.overshootHp() > 0.0) {
             // D_0 = v_c l_m/3 needs the mixing length: only mixing-length transport defines one
             if (!(physics.convection() instanceof MixingLengthTheory mlt)) {
@@ -292,6 +289,39 @@ public final class MainSequenceEvolver {
             }
         }
         return solver.relax(guess, grav, nablaMu, solveSettings);
+    }
+
+    /**
+     * The compositions after dt: each instantaneously mixed zone (a run of mixed points, convective or overshoot)
+     * first homogenised ({@link ConvectiveMixing}, which also takes in material the zone has just engulfed) and
+     * then burnt as one composition with the zone's mass-weighted rates ({@link CompositionStep#advanceMixed}),
+     * every other point burnt on its own.
+     */
+    private Composition[] burn(ModelState state, boolean[] mixed, double[] rho, double[] t, double dt) {
+        int n = state.size();
+        double[] w = PointCells.masses(state.mesh());
+        Composition[] comp = new Composition[n];
+        int k = 0;
+        while (k < n) {
+            int end = k;
+            while (mixed[k] && end + 1 < n && mixed[end + 1]) {
+                end++;
+            }
+            if (end == k) {
+                comp[k] = network.advance(rho[k], t[k], state.composition(k), dt);
+            } else {
+                Composition[] start = new Composition[n];
+                for (int j = k; j <= end; j++) {
+                    start[j] = state.composition(j);
+                }
+                Composition mean = ConvectiveMixing.mean(w, start, k, end);
+                Composition burnt = network.advanceMixed(Arrays.copyOfRange(rho, k, end + 1),
+                        Arrays.copyOfRange(t, k, end + 1), Arrays.copyOfRange(w, k, end + 1), mean, dt);
+                Arrays.fill(comp, k, end + 1, burnt);
+            }
+            k = end + 1;
+        }
+        return comp;
     }
 
     /**

@@ -51,10 +51,12 @@ class OvershootEvolutionTest {
         // hydrogen bookkeeping: the hydrogen burnt, turned into energy, against the energy radiated
         double ratioLedoux = energyRatio(ledoux);
         double ratioSchwarzschild = energyRatio(schwarzschild);
-        // measured 0.924 (Ledoux; Schwarzschild within 1 %): not 1 because part of the energy is not from completed CNO cycles (pp chains
-        // with 3He left unburnt, CN processing of the initial 12C outside the core) and eps_grav; the check
-        // is that semiconvective mixing and nabla_mu leave the bookkeeping as it is without them (1 %)
-        assertThat(ratioLedoux).isBetween(0.9, 1.05);
+        // energy conservation: every erg radiated comes from hydrogen burnt (eps_grav is ~1e-3 of L on the main
+        // sequence). The ratio is a few per cent below 1 because the pp chains release 26.2 MeV per 4 protons
+        // against the CNO 25.0 used here (check-values 7d). Measured 0.98; it was 0.85 while convective cores
+        // burnt each shell on its own before mixing (3He then burnt at the centre at several times its steady
+        // abundance), which this check now guards against.
+        assertThat(ratioLedoux).isBetween(0.96, 1.02);
         assertThat(ratioLedoux).isCloseTo(ratioSchwarzschild, within(0.01));
     }
 
