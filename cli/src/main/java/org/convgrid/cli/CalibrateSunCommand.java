@@ -17,9 +17,10 @@ import picocli.CommandLine.ParentCommand;
 /** {@code convgrid calibrate-sun}: the mixing length and initial helium of a 1 Msun model matching the Sun. */
 @Command(name = "calibrate-sun", mixinStandardHelpOptions = true,
         description = {"Find the mixing length and initial helium that give a 1 Msun model the Sun's radius and "
-                + "luminosity (IAU 2015 nominal values) at its age, with Z from the present Z/X (no diffusion, so "
-                + "initial Z/X = surface Z/X). Prints them and writes a physics preset for grid files.",
-            "Takes several full evolutions (about half a minute or more)."})
+                + "luminosity (IAU 2015 nominal values) at its age, and the initial Z/X that leaves the envelope at "
+                + "the present Z/X after helium and metals have settled. Prints them and writes a physics preset "
+                + "for grid files.",
+            "Takes a dozen or more full evolutions (about a minute)."})
 final class CalibrateSunCommand implements Callable<Integer> {
 
     /** Oldest age accepted, Gyr (older than the Universe is not a Sun). */
@@ -47,6 +48,11 @@ final class CalibrateSunCommand implements Callable<Integer> {
                     + "and the preset records it (default ${DEFAULT-VALUE}).")
     AtmosphereChoice atmosphere;
 
+    @Option(names = "--no-settling", negatable = false,
+            description = "Keep the composition free of microscopic diffusion (by default helium and metals settle "
+                    + "and the initial Z/X is found so that the envelope ends at the given present Z/X).")
+    boolean noSettling;
+
     @Option(names = "--preset", defaultValue = "calibrated-sun.yaml", paramLabel = "FILE",
             description = "Physics preset file to write (YAML; default ${DEFAULT-VALUE} in the current directory).")
     Path preset;
@@ -61,7 +67,7 @@ final class CalibrateSunCommand implements Callable<Integer> {
         }
         Path target = main.context().resolve(preset);
         CalibrationSettings settings = CalibrationSettings.DEFAULT.withAge(ageGyr * Constants.GYR)
-                .withMetalsToHydrogen(metalsToHydrogen).withAtmosphere(atmosphere);
+                .withMetalsToHydrogen(metalsToHydrogen).withAtmosphere(atmosphere).withSettling(!noSettling);
         int[] count = {0};
         CalibratedSun sun = new SolarCalibration(settings).calibrate(t -> {
             main.err().println(String.format(Locale.ROOT, "evolution %d: alpha = %.5f, Y = %.5f: "
@@ -72,10 +78,10 @@ final class CalibrateSunCommand implements Callable<Integer> {
         if (format == OutputFormat.CSV) {
             SolarCalibrationReport.writeCsv(sun, main.out());
         } else {
-            SolarCalibrationReport.writeTable(sun, main.out());
+            SolarCalibrationReport.writeTable(sun, !noSettling, main.out());
         }
         main.out().flush();
-        AtomicFiles.writeString(target, SolarCalibrationReport.preset(sun, atmosphere, ToolVersion.current()));
+        AtomicFiles.writeString(target, SolarCalibrationReport.preset(sun, atmosphere, !noSettling, ToolVersion.current()));
         main.err().println("preset: mixing length " + String.format(Locale.ROOT, "%.5f", sun.mixingLength())
                 + " written to " + target);
         return ExitCodes.OK;

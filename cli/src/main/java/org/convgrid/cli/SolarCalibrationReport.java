@@ -23,17 +23,27 @@ final class SolarCalibrationReport {
     static final String ZAMS_LUMINOSITY_LSUN = "zams_luminosity_lsun";
     /** CSV column after the catalogue columns: core-hydrogen exhaustion age, Gyr. */
     static final String MS_LIFETIME_GYR = "ms_lifetime_gyr";
+    /** Extension column: the initial Z/X found (higher than the present one with settling). */
+    static final String Z_OVER_X_INIT = "z_over_x_init";
+    /** Extension column: Y of the convective envelope at the solar age. */
+    static final String Y_SURFACE = "y_surface";
+    /** Extension column: Z/X of the convective envelope at the solar age. */
+    static final String Z_OVER_X_SURFACE = "z_over_x_surface";
 
     private SolarCalibrationReport() {
     }
 
-    /** mixing_length, y_init, z_init, the catalogue header, zams_luminosity_lsun, ms_lifetime_gyr. */
+    /**
+     * mixing_length, y_init, z_init, the catalogue header, zams_luminosity_lsun, ms_lifetime_gyr, then our
+     * extensions z_over_x_init, y_surface, z_over_x_surface.
+     */
     static List<String> csvHeader() {
         List<String> header = new ArrayList<>(List.of(CatalogueColumns.MIXING_LENGTH, CatalogueColumns.Y_INIT,
                 CatalogueColumns.Z_INIT));
         header.addAll(CatalogueColumns.HEADER);
         header.add(ZAMS_LUMINOSITY_LSUN);
         header.add(MS_LIFETIME_GYR);
+        header.addAll(List.of(Z_OVER_X_INIT, Y_SURFACE, Z_OVER_X_SURFACE));
         return header;
     }
 
@@ -44,6 +54,9 @@ final class SolarCalibrationReport {
         row.addAll(CatalogueWriter.cells(OutcomeRows.toRow(sun.sun())));
         row.add(CsvNumbers.format(sun.zeroAgeLuminosity() / Constants.L_SUN));
         row.add(CsvNumbers.format(sun.exhaustionAge() / Constants.GYR));
+        row.add(CsvNumbers.format(sun.initialMetalsToHydrogen()));
+        row.add(CsvNumbers.format(sun.envelopeHelium()));
+        row.add(CsvNumbers.format(sun.envelopeMetalsToHydrogen()));
         CSVPrinter printer = new CSVPrinter(out, CatalogueWriter.FORMAT);
         printer.printRecord(csvHeader());
         printer.printRecord(row);
@@ -51,10 +64,10 @@ final class SolarCalibrationReport {
     }
 
     /** A readable summary. */
-    static void writeTable(CalibratedSun sun, Appendable out) throws IOException {
+    static void writeTable(CalibratedSun sun, boolean settling, Appendable out) throws IOException {
         var g = sun.sun().global();
         out.append(String.format(Locale.ROOT, """
-                Calibrated Sun (1 Msun, %.4g Gyr, Z/X = %.4g; no diffusion: initial Z/X = present surface Z/X)
+                Calibrated Sun (1 Msun, %.4g Gyr, present surface Z/X = %.4g, %s)
                   mixing length alpha       %.5f pressure scale heights
                   initial Y                 %.5f
                   initial Z                 %.6f
@@ -67,32 +80,42 @@ final class SolarCalibrationReport {
                   central X                 %.4f
                   zero-age L / L_sun        %.4f
                   main-sequence lifetime    %.3f Gyr (central X < 1e-4)
+                  initial Z/X               %.5f
+                  surface Y, Z/X now        %.4f, %.5f
                   evolutions computed       %d
-                """, sun.age() / Constants.GYR, sun.metalsToHydrogen(), sun.mixingLength(), sun.helium(),
+                """, sun.age() / Constants.GYR, sun.metalsToHydrogen(),
+                settling ? "helium and metals settling" : "no settling: initial Z/X = present surface Z/X",
+                sun.mixingLength(), sun.helium(),
                 sun.metals(), g.radius() / Constants.R_SUN, sun.radiusResidual(), g.luminosity() / Constants.L_SUN,
                 sun.luminosityResidual(), g.effectiveTemperature(), sun.envelopeBaseRadiusFraction(),
                 sun.centralTemperature(), sun.centralDensity(), g.centralHydrogen(),
-                sun.zeroAgeLuminosity() / Constants.L_SUN, sun.exhaustionAge() / Constants.GYR, sun.evolutions()));
+                sun.zeroAgeLuminosity() / Constants.L_SUN, sun.exhaustionAge() / Constants.GYR,
+                sun.initialMetalsToHydrogen(), sun.envelopeHelium(), sun.envelopeMetalsToHydrogen(),
+                sun.evolutions()));
     }
 
     /** The physics preset file (our own small YAML layout; grids' PhysicsReader reads it). */
-    static String preset(CalibratedSun sun, AtmosphereChoice atmosphere, String toolVersion) {
+    static String preset(CalibratedSun sun, AtmosphereChoice atmosphere, boolean settling, String toolVersion) {
         return String.format(Locale.ROOT, """
                 # convgrid physics preset from a solar calibration (convgrid calibrate-sun).
                 # A grid file that names this preset takes its mixing_length and atmosphere; y_init and z_init are
                 # what the calibration found, for reference: the grid's metallicity section still sets each
-                # model's Y and Z.
+                # model's Y and Z. settling says whether helium and metals settled in the calibration (grids
+                # evolve without settling).
                 mixing_length: %s
                 atmosphere: %s
+                settling: %s
                 y_init: %s
                 z_init: %s
                 z_over_x: %s
+                z_over_x_init: %s
                 age_gyr: %s
                 tool_version: "%s"
                 residual_ln_radius: %s
                 residual_ln_luminosity: %s
-                """, CsvNumbers.format(sun.mixingLength()), atmosphere.label(), CsvNumbers.format(sun.helium()),
-                CsvNumbers.format(sun.metals()), CsvNumbers.format(sun.metalsToHydrogen()),
+                """, CsvNumbers.format(sun.mixingLength()), atmosphere.label(), settling,
+                CsvNumbers.format(sun.helium()), CsvNumbers.format(sun.metals()),
+                CsvNumbers.format(sun.metalsToHydrogen()), CsvNumbers.format(sun.initialMetalsToHydrogen()),
                 CsvNumbers.format(sun.age() / Constants.GYR), toolVersion.replace("\"", ""),
                 CsvNumbers.format(sun.radiusResidual()), CsvNumbers.format(sun.luminosityResidual()));
     }

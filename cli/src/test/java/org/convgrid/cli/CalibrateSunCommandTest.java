@@ -37,11 +37,15 @@ class CalibrateSunCommandTest {
                 CommandContext.production().withWorkingDirectory(dir)).execute(args);
     }
 
-    /** The conventions' row: mixing_length, y_init, z_init, the catalogue columns, then the two extras. */
+    /**
+     * The conventions' row: mixing_length, y_init, z_init, the catalogue columns, the two extras; then our
+     * extensions (conventions allow more columns after the fixed ones).
+     */
     static List<String> expectedHeader() {
         List<String> h = new ArrayList<>(List.of("mixing_length", "y_init", "z_init"));
         h.addAll(CatalogueColumns.HEADER);
-        h.addAll(List.of("zams_luminosity_lsun", "ms_lifetime_gyr"));
+        h.addAll(List.of("zams_luminosity_lsun", "ms_lifetime_gyr", "z_over_x_init", "y_surface",
+                "z_over_x_surface"));
         return h;
     }
 
@@ -55,15 +59,17 @@ class CalibrateSunCommandTest {
         String[] cells = lines[1].split(",", -1);
         assertThat(cells).hasSize(expectedHeader().size());
         assertThat(cells[0]).isEqualTo("1.9");
-        assertThat(cells[cells.length - 2]).isEqualTo("0.7");
-        assertThat(cells[cells.length - 1]).isEqualTo("10.5");
+        assertThat(cells[cells.length - 5]).isEqualTo("0.7");
+        assertThat(cells[cells.length - 4]).isEqualTo("10.5");
+        assertThat(cells[cells.length - 3]).isEqualTo("0.0255");
+        assertThat(cells[cells.length - 2]).isEqualTo("0.245");
         assertThat(lines[1]).contains(",calibrated-sun,").contains(",ok,").contains(",conv_envelope,");
     }
 
     @Test
     void tableNamesEveryCalibratedQuantityWithItsUnit() throws Exception {
         StringWriter table = new StringWriter();
-        SolarCalibrationReport.writeTable(syntheticSun(), table);
+        SolarCalibrationReport.writeTable(syntheticSun(), true, table);
         assertThat(table.toString()).contains("mixing length alpha       1.90000 pressure scale heights")
                 .contains("envelope base r/R         0.7200").contains("main-sequence lifetime    10.500 Gyr")
                 .contains("zero-age L / L_sun        0.7000");
@@ -71,10 +77,11 @@ class CalibrateSunCommandTest {
 
     @Test
     void presetNamesTheMixingLengthAndTheCalibratedComposition() {
-        String text = SolarCalibrationReport.preset(syntheticSun(), AtmosphereChoice.KRISHNA_SWAMY, "1.2.3");
+        String text = SolarCalibrationReport.preset(syntheticSun(), AtmosphereChoice.KRISHNA_SWAMY, true, "1.2.3");
         assertThat(text).contains("\nmixing_length: 1.9\n").contains("\ny_init: 0.27\n")
                 .contains("\nz_over_x: 0.0231\n").contains("\nage_gyr: 4.57\n").contains("tool_version: \"1.2.3\"")
-                .contains("\natmosphere: krishna_swamy\n");
+                .contains("\natmosphere: krishna_swamy\n").contains("\nsettling: true\n")
+                .contains("\nz_over_x_init: 0.0255\n");
     }
 
     @Test
@@ -89,15 +96,16 @@ class CalibrateSunCommandTest {
 
     @Test
     void calibratesAndWritesTheCsvRowAndThePreset() throws Exception {
-        // the whole calibration (several evolutions, ~20-40 s): the command end to end
-        int code = run("calibrate-sun", "--format", "csv", "--preset", "sun.yaml");
+        // the whole calibration (several evolutions, ~20-40 s without settling): the command end to end; the
+        // settling calibration's figures are checked in the engine's SolarCalibrationTest
+        int code = run("calibrate-sun", "--format", "csv", "--no-settling", "--preset", "sun.yaml");
         assertThat(code).as(err.toString()).isZero();
         String[] lines = out.toString().split("\n");
         assertThat(lines).hasSize(2);
         assertThat(Arrays.asList(lines[0].split(","))).containsExactlyElementsOf(expectedHeader());
         assertThat(lines[1]).contains(",calibrated-sun,").contains(",ok,");
         String preset = Files.readString(dir.resolve("sun.yaml"));
-        assertThat(preset).contains("mixing_length: ").contains("residual_ln_radius: ");
+        assertThat(preset).contains("mixing_length: ").contains("residual_ln_radius: ").contains("settling: false");
         assertThat(err.toString()).contains("evolution 1: alpha = 1.80000, Y = 0.27000");
     }
 
@@ -109,6 +117,6 @@ class CalibrateSunCommandTest {
                 StructureClass.CONV_ENVELOPE, 0.0, 0.98, 0.72, 0.02 * Constants.M_SUN, 2.0e6, 3.0e6);
         var outcome = new ModelOutcome(request, ModelStatus.OK, "", global, convection, 1234);
         return new CalibratedSun(1.9, 0.27, 0.0165, 0.0231, 4.57 * Constants.GYR, outcome, 1e-6, -2e-6,
-                0.7 * Constants.L_SUN, 10.5 * Constants.GYR, 0.72, 1.55e7, 150.0, 9, 5);
+                0.7 * Constants.L_SUN, 10.5 * Constants.GYR, 0.72, 1.55e7, 150.0, 9, 5, 0.0255, 0.245, 0.0231);
     }
 }

@@ -24,17 +24,19 @@ import org.convgrid.engine.units.Constants;
  * @param evolution time-step settings of every evolution (the same for all, so residuals are smooth in the
  *                  unknowns)
  * @param atmosphere the grey T(tau) relation of the surface boundary; the calibrated mixing length belongs to it
+ * @param settling whether helium and metals settle by microscopic diffusion during the evolution
  */
 public record CalibrationSettings(double age, double metalsToHydrogen, double startMixingLength,
                                   double startHelium, double tolerance, int evolutionBudget,
-                                  MainSequenceEvolver.Settings evolution, AtmosphereChoice atmosphere) {
+                                  MainSequenceEvolver.Settings evolution, AtmosphereChoice atmosphere,
+                                  boolean settling) {
 
     /**
      * 4.57 Gyr, Z/X = 0.0231 (GS98), start alpha = 1.8, Y = 0.27, tolerance 1e-4, 16 evolutions, the default
      * atmosphere.
      */
     public static final CalibrationSettings DEFAULT = new CalibrationSettings(4.57 * Constants.GYR, 0.0231, 1.8,
-            0.27, 1.0e-4, 16, MainSequenceEvolver.Settings.DEFAULT, AtmosphereChoice.DEFAULT);
+            0.27, 1.0e-4, 16, MainSequenceEvolver.Settings.DEFAULT, AtmosphereChoice.DEFAULT, true);
 
     public CalibrationSettings {
         ConvgridException.requireInRange("age", age / Constants.GYR, 1.0e-3, 13.0, "Gyr");
@@ -46,17 +48,28 @@ public record CalibrationSettings(double age, double metalsToHydrogen, double st
 
     public CalibrationSettings withAge(double newAge) {
         return new CalibrationSettings(newAge, metalsToHydrogen, startMixingLength, startHelium, tolerance,
-                evolutionBudget, evolution, atmosphere);
+                evolutionBudget, evolution, atmosphere, settling);
     }
 
     public CalibrationSettings withMetalsToHydrogen(double ratio) {
         return new CalibrationSettings(age, ratio, startMixingLength, startHelium, tolerance, evolutionBudget,
-                evolution, atmosphere);
+                evolution, atmosphere, settling);
+    }
+
+    /** The same aims with another starting point of the search. */
+    public CalibrationSettings withStart(double alpha, double y) {
+        return new CalibrationSettings(age, metalsToHydrogen, alpha, y, tolerance, evolutionBudget, evolution,
+                atmosphere, settling);
+    }
+
+    public CalibrationSettings withSettling(boolean on) {
+        return new CalibrationSettings(age, metalsToHydrogen, startMixingLength, startHelium, tolerance,
+                evolutionBudget, evolution, atmosphere, on);
     }
 
     public CalibrationSettings withAtmosphere(AtmosphereChoice choice) {
         return new CalibrationSettings(age, metalsToHydrogen, startMixingLength, startHelium, tolerance,
-                evolutionBudget, evolution, choice);
+                evolutionBudget, evolution, choice, settling);
     }
 
     /** Initial hydrogen mass fraction for initial helium {@code y}: X = (1 - Y)/(1 + Z/X). */

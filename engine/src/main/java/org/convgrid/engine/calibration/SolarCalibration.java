@@ -7,6 +7,7 @@ import org.convgrid.engine.batch.ModelRequest;
 import org.convgrid.engine.batch.ModelStatus;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
+import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.units.Constants;
 
 /**
@@ -23,7 +24,11 @@ import org.convgrid.engine.units.Constants;
  * {@link #MIN_DAMPING} the Jacobian is recomputed by differences. Converged when both residuals are within the
  * tolerance; the whole search is limited to {@link CalibrationSettings#evolutionBudget()} evolutions and fails
  * with {@link ErrorKind#NOT_CONVERGED} and the best point found. A last evolution of the calibrated star to
- * core-hydrogen exhaustion gives the main-sequence lifetime. Deterministic; immutable and thread-safe.
+ * core-hydrogen exhaustion gives the main-sequence lifetime. With settling ({@link CalibrationSettings#settling()})
+ * the envelope loses metals to the interior, so the Z/X aimed at is the envelope's at the solar age and the
+ * initial Z/X is found around the calibration by fixed-point passes ({@link #MAX_RATIO_ITERATIONS},
+ * {@link #RATIO_TOLERANCE}), each pass starting from the previous alpha and Y. Deterministic; immutable and
+ * thread-safe.
  */
 public final class SolarCalibration {
 
@@ -44,6 +49,11 @@ public final class SolarCalibration {
     public static final double MIN_HELIUM = 0.2;
     public static final double MAX_HELIUM = 0.4;
 
+    /** Passes of the initial-Z/X iteration allowed with settling. */
+    public static final int MAX_RATIO_ITERATIONS = 5;
+    /** Relative tolerance on the envelope Z/X with settling. */
+    public static final double RATIO_TOLERANCE = 1.0e-3;
+
     private final CalibrationSettings settings;
     private final SolarTrack track;
 
@@ -63,6 +73,38 @@ public final class SolarCalibration {
      *                           residual, evolutions) or when the first trial cannot be computed
      */
     public CalibratedSun calibrate(Consumer<SolarTrial> progress) {
+        if (!settings.settling()) {
+            return calibrateAtFixedRatio(progress, settings.metalsToHydrogen());
+        }
+        // settling lowers the envelope's Z/X over the Sun's life: find the initial Z/X whose envelope ends at the
+        // aim by fixed-point iteration (the drop is nearly proportional, so two or three passes suffice)
+        double target = settings.metalsToHydrogen();
+        double initial = target;
+        SolarCalibration pass = this;
+        int evolutions = 0;
+        for (int i = 0; i < MAX_RATIO_ITERATIONS; i++) {
+            CalibratedSun sun = pass.calibrateAtFixedRatio(progress, target);
+            evolutions += sun.evolutions();
+            double miss = sun.envelopeMetalsToHydrogen() / target - 1.0;
+            if (Math.abs(miss) <= RATIO_TOLERANCE) {
+                return sun.withEvolutions(evolutions);
+            }
+            initial /= 1.0 + miss;
+            pass = new SolarCalibration(settings.withMetalsToHydrogen(initial)
+                    .withStart(sun.mixingLength(), sun.helium()));
+        }
+        throw new ConvgridException(ErrorKind.NOT_CONVERGED, String.format(
+                "the envelope Z/X of the calibrated Sun did not settle to %.5f within %d passes (last initial Z/X "
+                        + "%.5f)", target, MAX_RATIO_ITERATIONS, initial), "Z/X", target, "passes",
+                MAX_RATIO_ITERATIONS);
+    }
+
+    /**
+     * One calibration of alpha and Y at this instance's initial Z/X ({@code settings.metalsToHydrogen()}).
+     *
+     * @param target the present surface Z/X the result reports as its aim
+     */
+    private CalibratedSun calibrateAtFixedRatio(Consumer<SolarTrial> progress, double target) {
         Search search = new Search(progress);
         SolarTrial current = search.trial(settings.startMixingLength(), settings.startHelium());
         double[][] jacobian = search.jacobian(current);
@@ -89,10 +131,10 @@ public final class SolarCalibration {
         SolarTrial whole = track.run(current.mixingLength(), current.helium(), true);
         search.evolutions++;
         progress.accept(whole);
-        return result(whole, search.evolutions, steps);
+        return result(whole, search.evolutions, steps, target);
     }
 
-    private CalibratedSun result(SolarTrial t, int evolutions, int steps) {
+    private CalibratedSun result(SolarTrial t, int evolutions, int steps, double target) {
         if (t.worstResidual() > settings.tolerance()) {
             // the whole-life run lands on the same steps as the trial; a difference means that assumption broke
             throw new ConvgridException(ErrorKind.NOT_CONVERGED, String.format(
@@ -105,10 +147,13 @@ public final class SolarCalibration {
         var m = t.model();
         ModelOutcome outcome = new ModelOutcome(request, ModelStatus.OK, "", m.global(), m.convection(),
                 t.iterationsToAge());
-        return new CalibratedSun(t.mixingLength(), t.helium(), t.metals(), settings.metalsToHydrogen(),
+        Composition envelope = EnvelopeComposition.of(m);
+        return new CalibratedSun(t.mixingLength(), t.helium(), t.metals(), target,
                 settings.age(), outcome, t.radiusResidual(), t.luminosityResidual(), t.zeroAgeLuminosity(),
                 t.evolution().exhaustionAge(), m.convection().envelopeBaseRadiusFraction(),
-                m.global().centralTemperature(), m.global().centralDensity(), evolutions, steps);
+                m.global().centralTemperature(), m.global().centralDensity(), evolutions, steps,
+                settings.metalsToHydrogen(), envelope.he3() + envelope.he4(),
+                EnvelopeComposition.metalsToHydrogen(envelope));
     }
 
     private static double[] residuals(SolarTrial t) {

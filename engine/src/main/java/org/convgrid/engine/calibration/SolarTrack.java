@@ -59,7 +59,7 @@ final class SolarTrack {
                     s.maxLuminosityChange(), s.maxGrowth(), s.endCentralHydrogen(), settings.age(),
                     s.stepBudget(), s.retryBudget());
         }
-        EvolutionResult r = new MainSequenceEvolver(physics, s).evolve(zams.model().model(),
+        EvolutionResult r = new MainSequenceEvolver(physics, s).withSettling(settings.settling()).evolve(zams.model().model(),
                 new double[] {settings.age()});
         AgedModel at = r.models().get(0);
         if (at.status() != ModelStatus.OK) {

@@ -103,20 +103,35 @@ public final class MainSequenceEvolver {
     private final HenyeySolver.Settings solveSettings;
     private final CompositionStep network;
     private final Settings settings;
+    private final boolean settling;
 
     public MainSequenceEvolver(PhysicsSet physics, MeshPlanner planner, HenyeySolver.Settings solveSettings,
                                Settings settings) {
+        this(physics, planner, solveSettings, settings, false);
+    }
+
+    private MainSequenceEvolver(PhysicsSet physics, MeshPlanner planner, HenyeySolver.Settings solveSettings,
+                                Settings settings, boolean settling) {
         this.physics = physics;
         this.planner = planner;
         this.solveSettings = solveSettings;
         this.solver = new StructureSolver(physics, solveSettings);
         this.network = new CompositionStep(physics.nuclear());
         this.settings = settings;
+        this.settling = settling;
     }
 
     public MainSequenceEvolver(PhysicsSet physics, Settings settings) {
         this(physics, new MeshPlanner(MeshPlanner.DEFAULT_POINTS),
                 HenyeySolver.Settings.DEFAULT.withIterationBudget(RELAXATION_BUDGET), settings);
+    }
+
+    /**
+     * The same evolver with microscopic diffusion of helium and metals ({@link GravitationalSettling},
+     * {@link SettlingStep}) after each step's burning and mixing, when {@code on}.
+     */
+    public MainSequenceEvolver withSettling(boolean on) {
+        return new MainSequenceEvolver(physics, planner, solveSettings, settings, on);
     }
 
     /**
@@ -259,6 +274,10 @@ public final class MainSequenceEvolver {
         boolean[] mixed = StepOvershoot.mixedPoints(mesh, start.convective(), previous.profile(),
                 exponential ? 0.0 : physics.overshootHp());
         Composition[] comp = burn(start.state(), mixed, rho, t, dt);
+        if (settling) {
+            // settling is driven by the previous structure; the zones it reaches are mixed again at once
+            comp = ConvectiveMixing.mix(mesh, SettlingStep.apply(previous, mesh, remesh, comp, dt), mixed);
+        }
         if (exponential && physics.overshootHp() > 0.0) {
             // D_0 = v_c l_m/3 needs the mixing length: only mixing-length transport defines one
             if (!(physics.convection() instanceof MixingLengthTheory mlt)) {

@@ -25,8 +25,8 @@ import org.snakeyaml.engine.v2.nodes.Node;
 final class PresetReader {
 
     private static final List<String> KEYS = List.of("mixing_length", "y_init", "z_init", "z_over_x", "age_gyr",
-            "tool_version", "residual_ln_radius", "residual_ln_luminosity", "atmosphere");
-    private static final List<String> RECORD_NUMBERS = List.of("y_init", "z_init", "z_over_x", "age_gyr",
+            "tool_version", "residual_ln_radius", "residual_ln_luminosity", "atmosphere", "settling", "z_over_x_init");
+    private static final List<String> RECORD_NUMBERS = List.of("y_init", "z_init", "z_over_x", "z_over_x_init", "age_gyr",
             "residual_ln_radius", "residual_ln_luminosity");
     private static final Range POSITIVE = Range.open(0.0, Double.POSITIVE_INFINITY);
 

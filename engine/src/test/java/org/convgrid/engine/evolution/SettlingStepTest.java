@@ -1,0 +1,55 @@
+package org.convgrid.engine.evolution;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.structure.MassMesh;
+import org.junit.jupiter.api.Test;
+
+class SettlingStepTest {
+
+    @Test
+    void settlingConservesEverySpeciesAndMovesHeliumAndMetalsInward() {
+        MassMesh mesh = TestMeshes.logit(40, -4.0, 4.0);
+        int n = mesh.size();
+        Composition[] c = new Composition[n];
+        double[] area = new double[n];
+        double[] vHe = new double[n];
+        double[] vZ = new double[n];
+        for (int k = 0; k < n; k++) {
+            c[k] = Composition.scaledSolar(0.70, 0.02);
+            area[k] = 1.0e20;
+            vHe[k] = -1.0e-9;
+            vZ[k] = -1.5e-9;
+        }
+        double dt = 1.0e16;
+        Composition[] out = SettlingStep.settle(mesh, c, area, vHe, vZ, dt);
+        double[] before = TestMeshes.totals(mesh, c);
+        double[] after = TestMeshes.totals(mesh, out);
+        for (int i = 0; i < before.length; i++) {
+            assertThat(after[i]).isCloseTo(before[i], within(1e-12 * mesh.totalMass()));
+        }
+        // the innermost cell gains helium and metals, the outermost loses them; hydrogen the other way
+        assertThat(out[0].he4()).isGreaterThan(c[0].he4());
+        assertThat(out[n - 1].he4()).isLessThan(c[n - 1].he4());
+        assertThat(out[0].o16()).isGreaterThan(c[0].o16());
+        assertThat(out[n - 1].h1()).isGreaterThan(c[n - 1].h1());
+        // uniform flow: the cells in between only pass material on
+        assertThat(out[n / 2].he4()).isCloseTo(c[n / 2].he4(), within(1e-12));
+    }
+
+    @Test
+    void noVelocityNoChange() {
+        MassMesh mesh = TestMeshes.logit(10, -3.0, 3.0);
+        int n = mesh.size();
+        Composition[] c = new Composition[n];
+        for (int k = 0; k < n; k++) {
+            c[k] = Composition.scaledSolar(0.70 - 0.01 * k, 0.02);
+        }
+        Composition[] out = SettlingStep.settle(mesh, c, new double[n], new double[n], new double[n], 1e16);
+        for (int k = 0; k < n; k++) {
+            assertThat(out[k].h1()).isCloseTo(c[k].h1(), within(1e-15));
+        }
+    }
+}
