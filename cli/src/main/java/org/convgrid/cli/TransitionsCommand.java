@@ -27,8 +27,8 @@ import picocli.CommandLine.ParentCommand;
                 + "crossing out of fully convective, the onset the lowest crossing into a core.",
             "With --refine, each bracket of a zero-age slice wider than --tolerance is narrowed by bisection with "
                 + "new zero-age models, each seeded by homology from its converged neighbours, until it is narrower "
-                + "than the tolerance (method refined); only the crossing the table reports is refined unless "
-                + "--all-crossings is given; when new models reveal crossings between earlier masses, further "
+                + "than the tolerance (method refined); the crossings the table reports are refined (the limit, the "
+                + "lowest core onset and the lasting core's onset), the others only with --all-crossings; when new models reveal crossings between earlier masses, further "
                 + "rounds refine them (at most " + TransitionTables.MAX_ROUNDS + "). The new models are appended to catalogue.csv with ids "
                 + "p<i>-z<i>-r<n>-a<i> (r: refined, n counts per slice); slices at ages above 0 keep their grid "
                 + "brackets. A refined run cannot be resumed with 'run --resume'. Needs a finished, merged run.",

@@ -8,6 +8,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Set;
+import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.manifest.RunManifestReader;
@@ -178,12 +179,17 @@ class TransitionsCommandTest {
         TransitionRow before = transitions(dir).get(0);
         assertThat(before.convCore().crossings()).hasSize(3);
         assertThat(before.convCore().bracket().hi()).isEqualTo(0.45);
-        // a copy refined at the reported crossings only says which crossings stay wide
+        // a copy refined at the reported crossings (the lowest core onset and the lasting core's onset) says
+        // which crossing stays wide: the upper end of the window
         CliHarness.Execution copy = h.execute("run", grid.toString(), "--out", "reported", "--quiet");
         assertThat(copy.code()).isEqualTo(0);
         assertThat(h.execute("transitions", "reported", "--refine").code()).isEqualTo(0);
-        assertThat(transitions(work.resolve("reported")).get(0).notes()).contains("convective core: 2 other "
+        TransitionRow reported = transitions(work.resolve("reported")).get(0);
+        assertThat(reported.notes()).contains("convective core: 1 other "
                 + "crossing(s) wider than the tolerance, not refined (--all-crossings refines them)");
+        Span lasting = reported.lastingCoreOnset().bracket();
+        assertThat(lasting.hi() - lasting.lo()).isLessThan(0.002);
+        assertThat(FlickeringFake.CORE_EDGE).isGreaterThan(lasting.lo()).isLessThanOrEqualTo(lasting.hi());
 
         assertThat(h.execute("transitions", "flicker", "--refine", "--all-crossings").code()).isEqualTo(0);
         TransitionRow z0 = transitions(dir).get(0);

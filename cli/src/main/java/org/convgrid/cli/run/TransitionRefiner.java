@@ -125,7 +125,7 @@ public final class TransitionRefiner {
             }
             for (Kind kind : Kind.values()) {
                 TransitionEstimate e = kind == Kind.FULLY_CONVECTIVE ? row.fullyConvective() : row.convCore();
-                List<Span> spans = allCrossings ? e.crossings() : e.found() ? List.of(e.bracket()) : List.of();
+                List<Span> spans = allCrossings ? e.crossings() : reported(kind, e, row);
                 if (spans.isEmpty()) {
                     continue;
                 }
@@ -160,6 +160,24 @@ public final class TransitionRefiner {
             RefinementRemarks.describe(s.kind().label, done.get(i), notes.get(s.slice()));
         }
         return new Result(named(added, members), notes, searches.size());
+    }
+
+    /**
+     * The crossings the table reports: the fully convective limit, or the lowest core onset and, when it differs,
+     * the onset of the lasting core (the one users compare with the literature), in mass order.
+     */
+    private static List<Span> reported(Kind kind, TransitionEstimate e, TransitionRow row) {
+        List<Span> spans = new ArrayList<>();
+        if (e.found()) {
+            spans.add(e.bracket());
+        }
+        if (kind == Kind.CONV_CORE) {
+            TransitionEstimate lasting = row.lastingCoreOnset();
+            if (lasting.found() && !spans.contains(lasting.bracket())) {
+                spans.add(lasting.bracket());
+            }
+        }
+        return spans;
     }
 
     /**

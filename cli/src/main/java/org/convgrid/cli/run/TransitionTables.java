@@ -154,14 +154,15 @@ public final class TransitionTables {
         if (!t.notes().isEmpty()) {
             notes.add(t.notes());
         }
-        wide("fully convective", t.fullyConvective(), toleranceMsun, notes);
-        wide("convective core", t.convCore(), toleranceMsun, notes);
+        wide("fully convective", t.fullyConvective(), TransitionEstimate.NONE, toleranceMsun, notes);
+        wide("convective core", t.convCore(), t.lastingCoreOnset(), toleranceMsun, notes);
         return new TransitionRow(t.slice(), t.fullyConvective(), t.convCore(), t.method(), String.join("; ", notes));
     }
 
-    private static void wide(String what, TransitionEstimate e, double toleranceMsun, List<String> notes) {
-        long wide = e.crossings().stream().filter(c -> !c.equals(e.bracket()) && c.hi() - c.lo() >= toleranceMsun)
-                .count();
+    private static void wide(String what, TransitionEstimate e, TransitionEstimate alsoRefined, double toleranceMsun,
+                             List<String> notes) {
+        long wide = e.crossings().stream().filter(c -> !c.equals(e.bracket()) && !c.equals(alsoRefined.bracket())
+                && c.hi() - c.lo() >= toleranceMsun).count();
         if (wide > 0) {
             notes.add(what + ": " + wide + " other crossing(s) wider than the tolerance, not refined "
                     + "(--all-crossings refines them)");
