@@ -10,7 +10,8 @@ import org.convgrid.plotting.SliceLabels;
 /**
  * A logarithmic x axis labelled at chosen values. XChart labels every tick at 1..9 x 10^n, which collide on a
  * narrow plot, and its label callback does not work on log axes; so XChart's labels are made transparent (they
- * keep their space and tick marks) and an overlay writes our labels at the same height.
+ * keep their space and tick marks) and an overlay writes our labels at the same height, leaving out any label
+ * that would run into the one before it.
  */
 public final class LogAxis {
 
@@ -51,10 +52,19 @@ public final class LogAxis {
         double axisY = chart.getScreenYFromChart(chart.getStyler().getYAxisMin());
         float baseline = (float) (axisY + chart.getStyler().getAxisTickMarkLength()
                 + chart.getStyler().getAxisTickPadding() + fm.getAscent());
-        for (double tick : ticks) {
+        // left to right, a label that would touch the one before it is left out (dense values at the top of a
+        // log range would otherwise run together); every value keeps its tick mark
+        double lastRight = Double.NEGATIVE_INFINITY;
+        double gap = fm.stringWidth(" ");
+        for (double tick : ticks.stream().sorted().toList()) {
             String text = SliceLabels.number(tick);
             double x = chart.getScreenXFromChart(tick);
-            g.drawString(text, (float) (x - fm.stringWidth(text) / 2.0), baseline);
+            double left = x - fm.stringWidth(text) / 2.0;
+            if (left < lastRight + gap) {
+                continue;
+            }
+            g.drawString(text, (float) left, baseline);
+            lastRight = left + fm.stringWidth(text);
         }
     }
 }
