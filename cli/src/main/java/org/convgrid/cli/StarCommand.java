@@ -69,7 +69,7 @@ final class StarCommand implements Callable<Integer> {
     double opacityFactor;
 
     @Option(names = "--opacity-table", paramLabel = "FILE",
-            description = "Use this opacity table (convgrid table layout, see README) instead of the analytic one.")
+            description = "Use this opacity table (convgrid table layout, see README) instead of the built-in OPAL-corrected analytic one.")
     Path opacityTable;
 
     @Option(names = "--atmosphere", defaultValue = "krishna_swamy", paramLabel = "eddington|krishna_swamy",

@@ -36,7 +36,7 @@ public record PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, L
         this(mixingLengths, overshoots, criteria, opacityFactors, opacityTable, AtmosphereChoice.DEFAULT);
     }
 
-    /** Axes with the analytic opacity. */
+    /** Axes with the built-in opacity. */
     public PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, List<StabilityCriterion> criteria,
                        List<Double> opacityFactors) {
         this(mixingLengths, overshoots, criteria, opacityFactors, "");

@@ -12,7 +12,7 @@ import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
  *                  exponential one
  * @param criterion Schwarzschild or Ledoux
  * @param opacityFactor multiplies every opacity (1 = as published)
- * @param opacityTable path of a user opacity table in convgrid's table layout; empty for the analytic opacity
+ * @param opacityTable path of a user opacity table in convgrid's table layout; empty for the built-in opacity
  * @param atmosphere the grey T(tau) relation of the surface boundary
  * @param overshootScheme step (default) or exponential overshoot
  */
@@ -49,7 +49,7 @@ public record PhysicsOptions(double mixingLength, double overshoot, StabilityCri
         this(mixingLength, overshoot, criterion, opacityFactor, "");
     }
 
-    /** Whether a user opacity table replaces the analytic opacity. */
+    /** Whether a user opacity table replaces the built-in opacity. */
     public boolean usesOpacityTable() {
         return !opacityTable.isEmpty();
     }
