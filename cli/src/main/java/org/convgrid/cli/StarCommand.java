@@ -38,6 +38,9 @@ final class StarCommand implements Callable<Integer> {
     /** Oldest age accepted, Gyr: the evolver's age limit. */
     static final double MAX_AGE_GYR = MainSequenceEvolver.Settings.DEFAULT.maxAge() / Constants.GYR;
 
+    /** Below this mass a failed zero-age model gets a note on the hydrogen-burning limit, Msun. */
+    static final double NEAR_BURNING_LIMIT_MSUN = 0.1;
+
     @ParentCommand
     ConvgridMain main;
 
@@ -111,6 +114,12 @@ final class StarCommand implements Callable<Integer> {
             String what = outcome.status() == ModelStatus.PAST_MAIN_SEQUENCE ? "past the main sequence"
                     : "model " + outcome.status().label().replace('_', ' ');
             main.err().println("convgrid: " + what + ": " + outcome.statusDetail());
+            if (outcome.status() == ModelStatus.NOT_CONVERGED && massMsun < NEAR_BURNING_LIMIT_MSUN) {
+                main.err().println("convgrid: note: " + massMsun + " Msun is near the hydrogen-burning limit "
+                        + "(~0.07-0.09 Msun, higher at low Z: Chabrier & Baraffe 1997), below which no zero-age "
+                        + "main sequence exists; our models reach down to ~0.08 Msun at Z = 0.02 and ~0.095 Msun "
+                        + "at Z = 1e-4");
+            }
             return ExitCodes.SOME_MODELS_FAILED;
         }
         if (profile != null) {
