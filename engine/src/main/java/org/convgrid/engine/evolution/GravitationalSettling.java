@@ -21,14 +21,16 @@ import org.convgrid.engine.units.Constants;
  * K_st = (4/3) sqrt(2 pi mu_st) n_s n_t (Z_s Z_t e^2)^2 ln Lambda_st/(kT)^(3/2), from K_st = (16/3) n_s n_t mu_st
  * Omega_st^(1,1) (Burgers 1969) with the Chapman-Cowling collision integral of the screened Coulomb cross
  * section Q^(1) = 4 pi b_0^2 ln Lambda, b_0 = Z_s Z_t e^2/(mu g^2) (derived here); ln Lambda_st =
- * ln(2 kT lambda/(Z_s Z_t e^2)), at least 1, with lambda the larger of the Debye length (electrons and ions) and
- * the mean ion spacing (common practice). Thoul, Bahcall &amp; Loeb (1994, ApJ 421, 828) solve the full system
+ * ln(1.123 kT lambda/(Z_s Z_t e^2)) (the speed average of ln(lambda/b_0)), at least 1, with lambda the larger of
+ * the Debye length (electrons and ions) and the mean ion spacing (common practice). Thoul, Bahcall &amp; Loeb (1994, ApJ 421, 828) solve the full system
  * with heat flow and find it raises the diffusion velocities; without it ours are expected slower by ~20-30 %.
  *
  * <p>The velocity is split into a settling part (all concentration gradients set to zero) and a diffusion part
- * -D dln X/dr, with D = (rho_H/rho) P_He/K_HHe the concentration-diffusion coefficient of helium in hydrogen,
- * used for every species (an approximation: the metals' own coefficient is a few times smaller). Gradients:
- * dln P/dr = -rho g/P (hydrostatic), dln T/dr = nabla dln P/dr, dln rho/dr from neighbouring points. Stateless.
+ * -D dln X/dr, with D = (rho_H/rho) (P_He/K_HHe) [1 + Y(3.75 mu - 2/(1 + X))] the concentration-diffusion
+ * coefficient of helium in hydrogen (the bracket gathers the composition terms of the mean molecular weight and
+ * of the electrons), used for every species (an approximation: the metals' own coefficient is a few times
+ * smaller). Gradients: dln P/dr = -rho g/P (hydrostatic), dln T/dr = nabla dln P/dr, and at uniform
+ * concentrations every partial pressure follows the gas pressure. Stateless.
  */
 final class GravitationalSettling {
 
@@ -44,6 +46,12 @@ final class GravitationalSettling {
     static final double MIN_TEMPERATURE = 1.0e5;
 
     private static final double E2 = Constants.E_CHARGE * Constants.E_CHARGE;
+    /**
+     * ln Lambda averaged over the collision integral's speed weight gamma e^(-gamma^2): with b_0 = Z_s Z_t e^2/(2 kT
+     * gamma^2), the mean of ln(lambda/b_0) is ln(2 kT lambda/(Z_s Z_t e^2)) - gamma_Euler = ln(1.123 kT lambda/...)
+     * (derived here).
+     */
+    private static final double SPEED_AVERAGED_IMPACT = 2.0 * Math.exp(-0.5772156649015329);
 
     private GravitationalSettling() {
     }
@@ -73,14 +81,16 @@ final class GravitationalSettling {
                 continue;
             }
             double pressure = p.pressure(k);
+            double radiation = Constants.A_RAD * t * t * t * t / 3.0;
+            double gasPressure = pressure - radiation;
             double g = Constants.G * p.mass(k) / (r * r);
             double dlnP = -rho * g / pressure;
             double dlnT = p.nabla(k) * dlnP;
-            int lo = k - 1;
-            int hi = Math.min(k + 1, n - 1);
-            double dlnRho = (Math.log(p.density(hi)) - Math.log(p.density(lo))) / (p.radius(hi) - p.radius(lo));
+            // at uniform concentrations every partial pressure follows the gas pressure, whose gradient is
+            // hydrostatic (radiation taking its share): no finite difference, so a mu jump gives no spike
+            double dlnPartial = (-rho * g - 4.0 * radiation * dlnT) / gasPressure;
             Composition c = model.state().composition(k);
-            double[] v = velocities(rho, t, g, dlnRho, dlnT, c.h1(), c.he3() + c.he4(),
+            double[] v = velocities(rho, t, g, dlnPartial - dlnT, dlnT, c.h1(), c.he3() + c.he4(),
                     Math.max(0.0, 1.0 - c.h1() - c.he3() - c.he4()));
             vHe[k] = v[0];
             vZ[k] = v[1];
@@ -128,7 +138,12 @@ final class GravitationalSettling {
             double forceZ = nZ * kt * dlnPs + rhoZ * g + (METAL_CHARGE * nZ / ne) * dPeDr;
             v = (kHZ * vH + kHeZ * vHe - forceZ) / (kHZ + kHeZ);
         }
-        double diffusion = rhoH / (rhoH + rhoHe) * nHe * kt / kHHe;
+        // the concentration terms of the helium force, P_He dln Y/dr [1 + Y(3.75 mu - 2/(1 + X))]: its own partial
+        // pressure, the mean molecular weight in rho (mu^-1 = 2X + 3Y/4 + Z/2 at fixed Z) and the electrons
+        // (n_e/rho proportional to 1 + X) (derived here)
+        double mu = 1.0 / (2.0 * x + 0.75 * y + 0.5 * z);
+        double concentration = 1.0 + y * (3.75 * mu - 2.0 / (1.0 + x));
+        double diffusion = rhoH / (rhoH + rhoHe) * nHe * kt / kHHe * concentration;
         return new double[] {vHe, v, diffusion};
     }
 
@@ -137,7 +152,7 @@ final class GravitationalSettling {
                              double lambda) {
         double mu = a1 * a2 / (a1 + a2) * Constants.M_U;
         double zz = z1 * z2 * E2;
-        double lnLambda = Math.max(1.0, Math.log(2.0 * kt * lambda / zz));
+        double lnLambda = Math.max(1.0, Math.log(SPEED_AVERAGED_IMPACT * kt * lambda / zz));
         return 4.0 / 3.0 * Math.sqrt(2.0 * Math.PI * mu) * n1 * n2 * zz * zz * lnLambda / (kt * Math.sqrt(kt));
     }
 }

@@ -276,7 +276,7 @@ public final class MainSequenceEvolver {
         Composition[] comp = burn(start.state(), mixed, rho, t, dt);
         if (settling) {
             // settling is driven by the previous structure; the zones it reaches are mixed again at once
-            comp = ConvectiveMixing.mix(mesh, SettlingStep.apply(previous, mesh, remesh, comp, dt), mixed);
+            comp = ConvectiveMixing.mix(mesh, SettlingStep.apply(previous, mesh, remesh, comp, mixed, dt), mixed);
         }
         if (exponential && physics.overshootHp() > 0.0) {
             // D_0 = v_c l_m/3 needs the mixing length: only mixing-length transport defines one

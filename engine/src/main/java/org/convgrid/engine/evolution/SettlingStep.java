@@ -8,7 +8,7 @@ import org.convgrid.engine.structure.StellarModel;
  * Moves the composition by microscopic diffusion ({@link GravitationalSettling}) over a time step, on the point
  * cells of the mass mesh: first the settling, as explicit upwind fluxes 4 pi r^2 rho X_s v_s through the cell
  * boundaries (helium and the metals sink, hydrogen takes the balancing flux so that no mass moves in all), in as
- * many sub-steps as keep every cell's outflow below half its content; then the concentration diffusion, one
+ * many sub-steps as keep each boundary's flow below half the content of the smaller cell beside it; then the concentration diffusion, one
  * backward-Euler step of dX/dt = d/dm((4 pi r^2 rho)^2 D dX/dm) ({@link SemiconvectiveMixing#diffuse}). Both
  * conserve the mass of every species to rounding (the fluxes telescope); no flux crosses the centre or the
  * surface. Stateless.
@@ -18,8 +18,8 @@ final class SettlingStep {
     /** Largest fraction of a cell's content that one sub-step may carry out. */
     static final double MAX_COURANT = 0.5;
     /**
-     * Sub-step budget. Where more would be needed (thin, fast-settling outer layers) the flows are scaled down to
-     * what this many sub-steps carry stably, so settling there is slowed, never unstable.
+     * Sub-step budget. At a boundary that would need more (thin, fast-settling outer layers) the flows are scaled
+     * down to what this many sub-steps carry stably, so settling there is slowed, never unstable.
      */
     static final int MAX_SUBSTEPS = 200;
 
@@ -38,7 +38,7 @@ final class SettlingStep {
      * @param dt s
      */
     static Composition[] apply(StellarModel previous, MassMesh mesh, boolean remeshed, Composition[] composition,
-                               double dt) {
+                               boolean[] mixed, double dt) {
         GravitationalSettling.Coefficients c = GravitationalSettling.of(previous);
         var profile = previous.profile();
         int m = profile.size();
@@ -56,13 +56,19 @@ final class SettlingStep {
             vHe = SemiconvectiveMixing.onMesh(profile, vHe, mesh);
             vZ = SemiconvectiveMixing.onMesh(profile, vZ, mesh);
         }
-        Composition[] settled = settle(mesh, composition, area, vHe, vZ, dt);
+        Composition[] settled = settle(mesh, composition, area, vHe, vZ, mixed, dt);
         return SemiconvectiveMixing.diffuse(mesh, settled, s, dt);
     }
 
-    /** The explicit upwind settling of helium and metals, hydrogen balancing. */
+    /**
+     * The explicit upwind settling of helium and metals, hydrogen balancing. No flow is computed between two mixed
+     * points (a mixed zone is homogenised right after, so flows inside it would change nothing); a zone exchanges
+     * matter only through its edges.
+     *
+     * @param mixed per point, whether it belongs to an instantaneously mixed zone
+     */
     static Composition[] settle(MassMesh mesh, Composition[] composition, double[] area, double[] vHe,
-                                double[] vZ, double dt) {
+                                double[] vZ, boolean[] mixed, double dt) {
         int n = mesh.size();
         double[] w = PointCells.masses(mesh);
         double[][] x = new double[n][];
@@ -73,20 +79,23 @@ final class SettlingStep {
         double[] flowHe = new double[n - 1];
         double[] flowZ = new double[n - 1];
         double courant = 0.0;
+        double limit = MAX_COURANT * MAX_SUBSTEPS;
         for (int k = 0; k < n - 1; k++) {
+            if (mixed[k] && mixed[k + 1]) {
+                continue;
+            }
             double a = 0.5 * (area[k] + area[k + 1]);
             flowHe[k] = a * 0.5 * (vHe[k] + vHe[k + 1]);
             flowZ[k] = a * 0.5 * (vZ[k] + vZ[k + 1]);
             double donor = Math.min(w[k], w[k + 1]);
-            courant = Math.max(courant, Math.max(Math.abs(flowHe[k]), Math.abs(flowZ[k])) * dt / donor);
-        }
-        if (courant > MAX_COURANT * MAX_SUBSTEPS) {
-            double scale = MAX_COURANT * MAX_SUBSTEPS / courant;
-            for (int k = 0; k < n - 1; k++) {
-                flowHe[k] *= scale;
-                flowZ[k] *= scale;
+            double c = Math.max(Math.abs(flowHe[k]), Math.abs(flowZ[k])) * dt / donor;
+            if (c > limit) {
+                // a thin, fast-settling layer: slowed at this boundary alone
+                flowHe[k] *= limit / c;
+                flowZ[k] *= limit / c;
+                c = limit;
             }
-            courant = MAX_COURANT * MAX_SUBSTEPS;
+            courant = Math.max(courant, c);
         }
         int substeps = (int) Math.max(1, Math.ceil(courant / MAX_COURANT));
         double h = dt / substeps;
@@ -107,6 +116,17 @@ final class SettlingStep {
                     total += flux[i];
                 }
                 flux[H1] = -total;
+                // hydrogen's counter-flow cannot take more than half the hydrogen its donor cell holds (an
+                // exhausted core has none to give): the boundary's flows shrink together, so mass stays conserved
+                int donorH = flux[H1] >= 0.0 ? k : k + 1;
+                double hOut = Math.abs(flux[H1]) * h / w[donorH];
+                double hHeld = MAX_COURANT * x[donorH][H1];
+                if (hOut > hHeld) {
+                    double shrink = hHeld / hOut;
+                    for (int i = 0; i < MassFractions.ALL; i++) {
+                        flux[i] *= shrink;
+                    }
+                }
                 for (int i = 0; i < MassFractions.ALL; i++) {
                     next[k][i] -= h * flux[i] / w[k];
                     next[k + 1][i] += h * flux[i] / w[k + 1];
