@@ -10,6 +10,8 @@ import java.util.Map;
 import org.convgrid.engine.batch.ModelStatus;
 import org.convgrid.engine.batch.PhysicsOptions;
 import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.engine.physics.OvershootScheme;
+import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.output.OutputFormatException;
 import org.snakeyaml.engine.v2.api.Load;
 import org.snakeyaml.engine.v2.api.LoadSettings;
@@ -33,9 +35,19 @@ public final class RunManifestReader {
             List<PhysicsOptions> physics = new ArrayList<>();
             for (Object item : (List<?>) root.get("physics")) {
                 Map<?, ?> p = map(item, "physics");
+                // manifests written before atmosphere, overshoot_scheme and opacity_table were recorded come from
+                // versions whose defaults were the Eddington relation, step overshoot and the built-in opacity
+                AtmosphereChoice atmosphere = p.containsKey("atmosphere")
+                        ? AtmosphereChoice.fromLabel((String) p.get("atmosphere")) : AtmosphereChoice.EDDINGTON;
+                OvershootScheme scheme = p.containsKey("overshoot_scheme")
+                        ? OvershootScheme.fromLabel((String) p.get("overshoot_scheme")) : OvershootScheme.STEP;
+                if (atmosphere == null || scheme == null) {
+                    throw new IllegalArgumentException("unknown atmosphere or overshoot_scheme in " + p);
+                }
+                String table = p.containsKey("opacity_table") ? (String) p.get("opacity_table") : "";
                 physics.add(new PhysicsOptions(number(p, "mixing_length"), number(p, "overshoot"),
                         StabilityCriterion.valueOf(((String) p.get("criterion")).toUpperCase(Locale.ROOT)),
-                        number(p, "opacity_factor")));
+                        number(p, "opacity_factor"), table, atmosphere, scheme));
             }
             Map<?, ?> models = map(root.get("models"), "models");
             Map<ModelStatus, Long> counts = new EnumMap<>(ModelStatus.class);

@@ -9,6 +9,8 @@ import java.util.Map;
 import org.convgrid.engine.batch.ModelStatus;
 import org.convgrid.engine.batch.PhysicsOptions;
 import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.engine.physics.OvershootScheme;
+import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.output.OutputFormatException;
 import org.junit.jupiter.api.Test;
 
@@ -19,7 +21,9 @@ class RunManifestTest {
 
     private static RunManifest manifest() {
         return new RunManifest("0.1.0", "grids/demo.yaml", GRID, "ab".repeat(32), "cd".repeat(32),
-                List.of(PhysicsOptions.DEFAULT, new PhysicsOptions(2.0, 0.1, StabilityCriterion.LEDOUX, 1.0)),
+                List.of(PhysicsOptions.DEFAULT, new PhysicsOptions(2.0, 0.1, StabilityCriterion.LEDOUX, 1.0),
+                        new PhysicsOptions(1.7, 0.016, StabilityCriterion.SCHWARZSCHILD, 1.0, "tables/mine.txt",
+                                AtmosphereChoice.EDDINGTON, OvershootScheme.EXPONENTIAL)),
                 Instant.parse("2026-03-01T10:00:00Z"), null, 2, "1/3", Map.of(ModelStatus.OK, 3L), Double.NaN);
     }
 
@@ -29,11 +33,27 @@ class RunManifestTest {
                 Map.of(ModelStatus.OK, 58L, ModelStatus.FAILED, 2L), 1.75);
         String yaml = RunManifestWriter.toYaml(finished);
         assertThat(yaml).contains("tool_version: 0.1.0", "started: 2026-03-01T10:00:00Z",
-                "criterion: ledoux", "total: 60", "failed: 2", "median_seconds_per_model: 1.75");
+                "criterion: ledoux", "total: 60", "failed: 2", "median_seconds_per_model: 1.75",
+                "atmosphere: krishna_swamy", "atmosphere: eddington", "overshoot_scheme: exponential",
+                "opacity_table: tables/mine.txt");
         assertThat(yaml).contains("  text: |");
         RunManifest back = RunManifestReader.read(yaml);
         assertThat(back).isEqualTo(finished);
         assertThat(back.gridText()).isEqualTo(GRID);
+    }
+
+    @Test
+    void aManifestWithoutTheLaterPhysicsKeysReadsAsTheOldDefaults() {
+        // manifests of earlier versions had no atmosphere / overshoot_scheme / opacity_table keys
+        String yaml = RunManifestWriter.toYaml(manifest())
+                .replaceAll("(?m)^\\s+(atmosphere|overshoot_scheme|opacity_table): .*\\n", "");
+        assertThat(yaml).doesNotContain("atmosphere:");
+        RunManifest back = RunManifestReader.read(yaml);
+        assertThat(back.physics()).allSatisfy(p -> {
+            assertThat(p.atmosphere()).isEqualTo(AtmosphereChoice.EDDINGTON);
+            assertThat(p.overshootScheme()).isEqualTo(OvershootScheme.STEP);
+            assertThat(p.usesOpacityTable()).isFalse();
+        });
     }
 
     @Test
