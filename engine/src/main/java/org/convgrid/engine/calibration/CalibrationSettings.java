@@ -1,5 +1,6 @@
 package org.convgrid.engine.calibration;
 
+import java.util.Objects;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
@@ -43,7 +44,7 @@ public record CalibrationSettings(double age, double metalsToHydrogen, double st
         ConvgridException.requireInRange("Z/X", metalsToHydrogen, 0.0, 0.1, "");
         ConvgridException.requireInRange("start alpha", startMixingLength, 0.3, 4.0, "H_P");
         ConvgridException.requireInRange("start Y", startHelium, 0.2, 0.4, "");
-        java.util.Objects.requireNonNull(atmosphere, "atmosphere");
+        Objects.requireNonNull(atmosphere, "atmosphere");
     }
 
     public CalibrationSettings withAge(double newAge) {

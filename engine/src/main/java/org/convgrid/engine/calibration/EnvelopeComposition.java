@@ -26,6 +26,6 @@ final class EnvelopeComposition {
 
     /** Z/X of a composition. */
     static double metalsToHydrogen(Composition c) {
-        return (1.0 - c.h1() - c.he3() - c.he4()) / c.h1();
+        return c.z() / c.x();
     }
 }

@@ -152,7 +152,7 @@ public final class SolarCalibration {
                 settings.age(), outcome, t.radiusResidual(), t.luminosityResidual(), t.zeroAgeLuminosity(),
                 t.evolution().exhaustionAge(), m.convection().envelopeBaseRadiusFraction(),
                 m.global().centralTemperature(), m.global().centralDensity(), evolutions, steps,
-                settings.metalsToHydrogen(), envelope.he3() + envelope.he4(),
+                settings.metalsToHydrogen(), envelope.y(),
                 EnvelopeComposition.metalsToHydrogen(envelope));
     }
 

@@ -30,14 +30,7 @@ public final class ConvectiveMixing {
         Composition[] out = composition.clone();
         int k = 0;
         while (k < n) {
-            if (!convective[k]) {
-                k++;
-                continue;
-            }
-            int end = k;
-            while (end + 1 < n && convective[end + 1]) {
-                end++;
-            }
+            int end = runEnd(convective, k);
             if (end > k) {
                 Composition mean = mean(w, composition, k, end);
                 for (int j = k; j <= end; j++) {
@@ -47,6 +40,18 @@ public final class ConvectiveMixing {
             k = end + 1;
         }
         return out;
+    }
+
+    /**
+     * The last point of the run of mixed points that starts at {@code k}: {@code k} itself when the point is not
+     * mixed or stands alone.
+     */
+    static int runEnd(boolean[] mixed, int k) {
+        int end = k;
+        while (mixed[k] && end + 1 < mixed.length && mixed[end + 1]) {
+            end++;
+        }
+        return end;
     }
 
     /** Mass-weighted mean composition of points lo..hi (inclusive). */

@@ -90,8 +90,7 @@ final class GravitationalSettling {
             // hydrostatic (radiation taking its share): no finite difference, so a mu jump gives no spike
             double dlnPartial = (-rho * g - 4.0 * radiation * dlnT) / gasPressure;
             Composition c = model.state().composition(k);
-            double[] v = velocities(rho, t, g, dlnPartial - dlnT, dlnT, c.h1(), c.he3() + c.he4(),
-                    Math.max(0.0, 1.0 - c.h1() - c.he3() - c.he4()));
+            double[] v = velocities(rho, t, g, dlnPartial - dlnT, dlnT, c.x(), c.y(), c.z());
             vHe[k] = v[0];
             vZ[k] = v[1];
             d[k] = v[2];

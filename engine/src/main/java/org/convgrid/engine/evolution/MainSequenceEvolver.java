@@ -319,20 +319,14 @@ public final class MainSequenceEvolver {
     private Composition[] burn(ModelState state, boolean[] mixed, double[] rho, double[] t, double dt) {
         int n = state.size();
         double[] w = PointCells.masses(state.mesh());
+        Composition[] start = state.compositions();
         Composition[] comp = new Composition[n];
         int k = 0;
         while (k < n) {
-            int end = k;
-            while (mixed[k] && end + 1 < n && mixed[end + 1]) {
-                end++;
-            }
+            int end = ConvectiveMixing.runEnd(mixed, k);
             if (end == k) {
-                comp[k] = network.advance(rho[k], t[k], state.composition(k), dt);
+                comp[k] = network.advance(rho[k], t[k], start[k], dt);
             } else {
-                Composition[] start = new Composition[n];
-                for (int j = k; j <= end; j++) {
-                    start[j] = state.composition(j);
-                }
                 Composition mean = ConvectiveMixing.mean(w, start, k, end);
                 Composition burnt = network.advanceMixed(Arrays.copyOfRange(rho, k, end + 1),
                         Arrays.copyOfRange(t, k, end + 1), Arrays.copyOfRange(w, k, end + 1), mean, dt);

@@ -102,7 +102,7 @@ final class PhysicsReader {
     }
 
     /** The grey T(tau) relation: eddington or krishna_swamy (default). */
-    private static AtmosphereChoice atmosphere(Node node, NodeReader reader) {
+    static AtmosphereChoice atmosphere(Node node, NodeReader reader) {
         String text = reader.text(node, "atmosphere");
         if (text == null) {
             return null;

@@ -97,11 +97,8 @@ final class PresetReader {
         }
         AtmosphereChoice atmosphere = null;
         if (fields.has("atmosphere")) {
-            String label = inner.text(fields.value("atmosphere"), "atmosphere");
-            atmosphere = label == null ? null : AtmosphereChoice.fromLabel(label);
+            atmosphere = PhysicsReader.atmosphere(fields.value("atmosphere"), inner);
             if (atmosphere == null) {
-                inner.problem(fields.value("atmosphere"), "atmosphere must be eddington or krishna_swamy, got '"
-                        + label + "'");
                 return null;
             }
         }

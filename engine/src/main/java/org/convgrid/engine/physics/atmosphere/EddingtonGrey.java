@@ -15,11 +15,6 @@ public record EddingtonGrey() implements TemperatureTauRelation {
     }
 
     @Override
-    public double hopfDerivative(double tau) {
-        return 0.0;
-    }
-
-    @Override
     public double photosphericDepth() {
         return HOPF;
     }

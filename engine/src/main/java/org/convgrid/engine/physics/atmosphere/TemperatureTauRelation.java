@@ -10,9 +10,6 @@ public interface TemperatureTauRelation {
     /** The Hopf function q(tau), dimensionless; tau &gt;= 0. */
     double hopf(double tau);
 
-    /** dq/dtau. */
-    double hopfDerivative(double tau);
-
     /** Optical depth of the photosphere, where T = Teff, i.e. tau + q(tau) = 4/3. */
     double photosphericDepth();
 

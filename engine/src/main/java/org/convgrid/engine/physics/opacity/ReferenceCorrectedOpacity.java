@@ -6,6 +6,7 @@ import java.io.InputStream;
 import java.io.InputStreamReader;
 import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Objects;
 import org.convgrid.engine.error.ConvgridException;
@@ -201,13 +202,13 @@ public final class ReferenceCorrectedOpacity implements Opacity {
 
         /** This window on the wider table's grid: rows it lacks are NaN (filled later from the wider table). */
         ReferenceTable embeddedIn(ReferenceTable wider) {
-            if (!java.util.Arrays.equals(logR, wider.logR)) {
+            if (!Arrays.equals(logR, wider.logR)) {
                 throw new ConvgridException(ErrorKind.BAD_DATA, name + ": log R grid differs from " + wider.name,
                         name);
             }
             double[][] values = new double[wider.logT.length][logR.length];
             for (int i = 0; i < wider.logT.length; i++) {
-                java.util.Arrays.fill(values[i], Double.NaN);
+                Arrays.fill(values[i], Double.NaN);
                 for (int k = 0; k < logT.length; k++) {
                     if (Math.abs(logT[k] - wider.logT[i]) < 1e-9) {
                         values[i] = logKappa[k].clone();
