@@ -98,52 +98,24 @@ class AnalyticCompositeOpacityTest extends OpacityContractTest {
 
     private List<Double> residuals(String table, double x, double logTMin, double logTMax, double logRMin,
                                    double logRMax) throws IOException {
-        List<String[]> rows = rows("/reference/opacity/" + table);
-        String[] header = rows.get(0);
         Composition c = Composition.scaledSolar(x, 0.02);
         List<Double> out = new ArrayList<>();
-        for (String[] row : rows.subList(1, rows.size())) {
-            double logT = Double.parseDouble(row[0]);
-            if (logT < logTMin - 1e-9 || logT > logTMax + 1e-9) {
-                continue;
-            }
-            for (int j = 1; j < header.length; j++) {
-                double logR = Double.parseDouble(header[j]);
-                double logK = Double.parseDouble(row[j]);
-                if (logR < logRMin - 1e-9 || logR > logRMax + 1e-9 || logK > OUT_OF_TABLE) {
-                    continue;
-                }
-                double t = Math.pow(10.0, logT);
-                double rho = Math.pow(10.0, logR) * Math.pow(t * 1e-6, 3);
-                out.add(Math.log10(composite.rosselandMean(rho, t, c).kappa()) - logK);
-            }
+        for (OpalTableNodes.Node node : OpalTableNodes.in(table, logTMin, logTMax, logRMin, logRMax)) {
+            out.add(Math.log10(composite.rosselandMean(node.density(), node.temperature(), c).kappa())
+                    - node.logKappa());
         }
         return out;
     }
 
     private void assertWithinDex(String table, double x, double logTMin, double logTMax, double logRMin,
                                  double logRMax, double dex) throws IOException {
-        List<String[]> rows = rows("/reference/opacity/" + table);
-        String[] header = rows.get(0);
         Composition c = Composition.scaledSolar(x, 0.02);
         int checked = 0;
-        for (String[] row : rows.subList(1, rows.size())) {
-            double logT = Double.parseDouble(row[0]);
-            if (logT < logTMin - 1e-9 || logT > logTMax + 1e-9) {
-                continue;
-            }
-            for (int j = 1; j < header.length; j++) {
-                double logR = Double.parseDouble(header[j]);
-                double logK = Double.parseDouble(row[j]);
-                if (logR < logRMin - 1e-9 || logR > logRMax + 1e-9 || logK > OUT_OF_TABLE) {
-                    continue;
-                }
-                double t = Math.pow(10.0, logT);
-                double rho = Math.pow(10.0, logR) * Math.pow(t * 1e-6, 3);
-                double model = Math.log10(composite.rosselandMean(rho, t, c).kappa());
-                assertThat(model - logK).as("%s log T %s log R %s", table, logT, logR).isBetween(-dex, dex);
-                checked++;
-            }
+        for (OpalTableNodes.Node node : OpalTableNodes.in(table, logTMin, logTMax, logRMin, logRMax)) {
+            double model = Math.log10(composite.rosselandMean(node.density(), node.temperature(), c).kappa());
+            assertThat(model - node.logKappa()).as("%s log T %s log R %s", table, node.logT(), node.logR())
+                    .isBetween(-dex, dex);
+            checked++;
         }
         assertThat(checked).isGreaterThan(10);
     }

@@ -4,7 +4,6 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
 import java.io.IOException;
-import java.util.List;
 import org.convgrid.engine.state.Composition;
 import org.junit.jupiter.api.Test;
 
@@ -22,23 +21,16 @@ class ReferenceCorrectedOpacityTest {
     }
 
     private static void assertNodes(String table, double x) throws IOException {
-        List<String[]> rows = AnalyticCompositeOpacityTest.rows("/reference/opacity/" + table);
-        String[] header = rows.get(0);
         Composition composition = Composition.scaledSolar(x, 0.02);
         int checked = 0;
-        for (String[] row : rows.subList(1, rows.size())) {
-            double logT = Double.parseDouble(row[0]);
-            for (int j = 1; j < row.length; j++) {
-                double logK = Double.parseDouble(row[j]);
-                double logR = Double.parseDouble(header[j]);
-                if (logK > 9.0 || logR > ReferenceCorrectedOpacity.FADE_LOG_R_LOW) {
-                    continue;
-                }
-                double rho = Math.pow(10.0, logR + 3.0 * logT - 18.0);
-                double model = Math.log10(OPACITY.rosselandMean(rho, Math.pow(10.0, logT), composition).kappa());
-                assertThat(model).as("%s log T %s log R %s", table, logT, logR).isCloseTo(logK, within(1e-9));
-                checked++;
-            }
+        // every node up to log R = FADE_LOG_R_LOW, where the correction is whole
+        for (OpalTableNodes.Node node : OpalTableNodes.in(table, -100.0, 100.0, -100.0,
+                ReferenceCorrectedOpacity.FADE_LOG_R_LOW)) {
+            double model = Math.log10(OPACITY.rosselandMean(node.density(), node.temperature(), composition)
+                    .kappa());
+            assertThat(model).as("%s log T %s log R %s", table, node.logT(), node.logR())
+                    .isCloseTo(node.logKappa(), within(1e-9));
+            checked++;
         }
         assertThat(checked).isGreaterThan(200);
     }
