@@ -11,15 +11,15 @@ import org.convgrid.engine.error.ConvgridException;
  *
  * <p>A mesh point is convective where the stability excess nabla_rad - nabla_stability is positive. Each zone
  * boundary lies where the linear interpolant of the excess between two mesh points changes sign; mass, radius
- * and H_P there are interpolated with the same weight (KWW 2012 ch. 6; formulas.md 4.1). A zone that contains
- * the innermost point starts at the centre (m = r = 0); one that contains the outermost point ends at m/M =
+ * and H_P there are interpolated with the same weight (Kippenhahn, Weigert &amp; Weiss 2012, ch. 6). A zone that
+ * contains the innermost point starts at the centre (m = r = 0); one that contains the outermost point ends at m/M =
  * r/R = 1. Every zone, however thin, is listed.
  *
  * <p>Roles and class:
  * <ul>
  * <li>The <em>core</em> is the zone that starts at the centre, provided its top exceeds the minimum core mass
  * fraction (default {@value #DEFAULT_MIN_CORE_MASS_FRACTION}, common practice: below it the "core" is a few
- * central mesh points, comparable with where the first mesh point sits, formulas.md 6.2).</li>
+ * central mesh points, comparable with where the first mesh point sits).</li>
  * <li>The <em>envelope</em> is the outermost zone if it holds at least the minimum envelope mass fraction (default
  * {@value #DEFAULT_MIN_ENVELOPE_MASS_FRACTION}) and reaches the surface, i.e. the mass above its top is at
  * most the surface skin fraction (default {@value #DEFAULT_SURFACE_SKIN_MASS_FRACTION}). The skin exists because
@@ -31,7 +31,7 @@ import org.convgrid.engine.error.ConvgridException;
  * </ul>
  * A fully convective star reports core mass fraction 1 and envelope base 0, as the catalogue requires.
  *
- * <p>Turnover times (formulas.md 4.3): the local time is l_m/v_c with l_m = alpha H_P, evaluated half a pressure
+ * <p>Turnover times: the local time is l_m/v_c with l_m = alpha H_P, evaluated half a pressure
  * scale height above the envelope base, r = r_base + H_P(r_base)/2, as the catalogue column
  * {@code turnover_time_days} is defined (conventions.md). Gilliland 1985 (ApJ 299, 286) and Kim &amp; Demarque
  * 1996 (ApJ 457, 340) evaluate it half a mixing length above the base instead; the two points coincide for

@@ -9,7 +9,7 @@ import org.convgrid.engine.state.Composition;
 /**
  * Advances the composition of one shell over a time step at fixed density and temperature by the backward
  * (implicit) Euler method, x_new = x_old + dt f(x_new), f the composition rates of the {@link NuclearNetwork}
- * (our physics sheet, formulas.md 3.5 and 6.4: an implicit network step keeps the fast 3He and CN relaxations
+ * (common practice: an implicit network step keeps the fast 3He and CN relaxations
  * stable at main-sequence time steps). Each sub-step is solved by Newton's method with a finite-difference
  * Jacobian taken once at the start of the sub-step; a sub-step that does not converge, or that changes some
  * mass fraction by more than {@link #MAX_SUBSTEP_CHANGE}, is halved. Newton corrections are damped so that no

@@ -7,7 +7,7 @@ import org.convgrid.engine.structure.MassMesh;
  * Instantaneous mixing of convective zones: every maximal run of convective mesh points gets the mass-weighted
  * mean composition of its cells ({@link PointCells}), so each species' total mass in the zone is unchanged.
  * Convective turnover (days to months) is far shorter than main-sequence time steps, which is why the
- * homogenisation is taken as instantaneous (common practice, formulas.md 6.4; Kippenhahn, Weigert &amp; Weiss
+ * homogenisation is taken as instantaneous (common practice; Kippenhahn, Weigert &amp; Weiss
  * 2012, ch. 30). Stateless.
  */
 public final class ConvectiveMixing {

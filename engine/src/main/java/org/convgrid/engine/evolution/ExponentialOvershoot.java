@@ -5,7 +5,7 @@ import org.convgrid.engine.structure.StellarProfile;
 
 /**
  * Exponential diffusive overshoot (Freytag, Ludwig &amp; Steffen 1996, A&amp;A 313, 497; Herwig 2000, A&amp;A 360,
- * 952; formulas.md 4.4): beyond every formal boundary of a convective zone of the previous model that is not the
+ * 952): beyond every formal boundary of a convective zone of the previous model that is not the
  * centre or the surface, D_ov(z) = D_0 exp(-2 z/(f H_P)), z the radial distance from the boundary, H_P the
  * pressure scale height at the boundary and D_0 = v_c l_m/3 (l_m = alpha H_P) the mixing-length diffusion
  * coefficient a distance f0 H_P inside the boundary, here with f0 = f (a choice; Herwig 2000 leaves f0 open).

@@ -5,7 +5,7 @@ import org.convgrid.engine.structure.ExtraEnergy;
 
 /**
  * The gravothermal energy release eps_grav = -c_P T (dlnT/dt - nabla_ad dlnP/dt) (Kippenhahn, Weigert &amp;
- * Weiss 2012, ch. 4; formulas.md 6.1), with the Lagrangian time derivatives taken as backward differences
+ * Weiss 2012, ch. 4), with the Lagrangian time derivatives taken as backward differences
  * between the previous model (same mesh, same mass coordinates) and the trial state of the step: first order
  * in time, implicit in the new state. c_P and nabla_ad are those of the trial state. Immutable and thread-safe.
  *

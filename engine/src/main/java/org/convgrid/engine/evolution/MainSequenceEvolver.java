@@ -23,7 +23,7 @@ import org.convgrid.engine.units.Constants;
 
 /**
  * Evolves a zero-age main-sequence model in time until core-hydrogen exhaustion (central X below
- * {@link Settings#endCentralHydrogen()}) or the age limit. Each step, operator split (formulas.md 6.4): (1) the
+ * {@link Settings#endCentralHydrogen()}) or the age limit. Each step, operator split (common practice): (1) the
  * convective zones of the previous model are homogenised ({@link ConvectiveMixing}); (2) the composition is
  * advanced over dt by {@link CompositionStep} at the previous model's density and temperature, each mixed zone as
  * one composition with its mass-weighted rates, every other point on its own; (3) the
@@ -34,11 +34,11 @@ import org.convgrid.engine.units.Constants;
  * ({@link ExponentialOvershoot}); under the Ledoux criterion
  * semiconvective layers are then mixed by diffusion ({@link SemiconvectiveMixing}) and the relaxation gets
  * nabla_mu from the mixed composition ({@link MuGradient}). Between steps the mesh is redistributed when uneven, with a cost
- * for composition gradients (|D X|/{@link #COMPOSITION_MESH_STEP} per interval, formulas.md 6.3, capped so that a
+ * for composition gradients (|D X|/{@link #COMPOSITION_MESH_STEP} per interval, common practice, capped so that a
  * jump in X cannot shrink its interval below ~{@link #COMPOSITION_MESH_RESOLUTION} in m/M) and the composition
  * remapped conservatively ({@link MassRemap}); a redistribution that cannot be built keeps the previous mesh.
  *
- * <p>Time steps (formulas.md 6.4, practice): the fall of X_c (a rise, from mixing, is not limited) at most
+ * <p>Time steps (common practice, no single source): the fall of X_c (a rise, from mixing, is not limited) at most
  * {@link Settings#maxCentralHydrogenChange()} while X_c &gt; 0.1, at most {@link Settings#exhaustionFraction()} X_c
  * below; |D ln L| at most
  * {@link Settings#maxLuminosityChange()}; growth at most {@link Settings#maxGrowth()} per step; a step that
@@ -50,7 +50,7 @@ public final class MainSequenceEvolver {
 
     /** The burning zone is where eps_nuc exceeds this fraction of its maximum. */
     public static final double BURNING_THRESHOLD = 0.01;
-    /** Composition change per mesh interval worth one unit of mesh cost (formulas.md 6.3: |D X| &lt; 0.01-0.02). */
+    /** Composition change per mesh interval worth one unit of mesh cost (common practice: |D X| &lt; 0.01-0.02). */
     public static final double COMPOSITION_MESH_STEP = 0.01;
     /**
      * Narrowest interval, in m/M, that a composition gradient may ask for: the composition cost of an interval is
@@ -86,7 +86,7 @@ public final class MainSequenceEvolver {
                            double maxGrowth, double endCentralHydrogen, double maxAge, int stepBudget,
                            int retryBudget) {
 
-        /** 0.01, 0.1 X_c, 0.05 in ln L, x1.25, X_c &lt; 1e-4, 20 Gyr (common practice, formulas.md 6.4), 3000 steps, 100 retries. */
+        /** 0.01, 0.1 X_c, 0.05 in ln L, x1.25, X_c &lt; 1e-4, 20 Gyr (common practice), 3000 steps, 100 retries. */
         public static final Settings DEFAULT = new Settings(0.01, 0.1, 0.05, 1.25, 1.0e-4, 20.0 * Constants.GYR,
                 3000, 100);
 

@@ -6,8 +6,8 @@ import org.convgrid.engine.structure.MassMesh;
 /**
  * Conservative remapping of per-point compositions from one mass mesh to another of the same total mass: the
  * composition is taken as constant over each point's cell ({@link PointCells}) and every new cell gets the
- * mass-weighted mean over its overlaps with the old cells (first-order conservative remap; the mass-weighted
- * rezoning of formulas.md 6.3). Each species' total mass is conserved to rounding. Overlaps in the outer half of
+ * mass-weighted mean over its overlaps with the old cells (first-order conservative remap, common
+ * practice). Each species' total mass is conserved to rounding. Overlaps in the outer half of
  * the star are measured in M - m, so the thin surface cells lose no precision. Stateless.
  */
 public final class MassRemap {

@@ -3,9 +3,9 @@ package org.convgrid.engine.evolution;
 import org.convgrid.engine.state.Composition;
 
 /**
- * nabla_mu = dln mu/dln P per mesh point for the Ledoux criterion (formulas.md 4.1), from the composition
- * profile: mu of a fully ionised gas, 1/mu = sum X_i (1 + Z_i)/A_i with the metals at (1 + Z)/A = 1/2 (the
- * usual approximation, e.g. Kippenhahn, Weigert &amp; Weiss 2012, ch. 13). On each interval nabla_mu is the
+ * nabla_mu = dln mu/dln P per mesh point for the Ledoux criterion (Kippenhahn, Weigert &amp; Weiss 2012, ch. 6), from
+ * the composition profile: mu of a fully ionised gas, 1/mu = sum X_i (1 + Z_i)/A_i with the metals at (1 + Z)/A = 1/2
+ * (the usual approximation, e.g. Kippenhahn, Weigert &amp; Weiss 2012, ch. 13). On each interval nabla_mu is the
  * difference quotient between its two points; a point takes the one of its two intervals that is smaller in
  * magnitude (zero when they differ in sign, a "minmod" choice of ours), so the point at the edge of a
  * homogeneous mixed zone sees the zero gradient of its own side and is not stabilised by the composition step

@@ -10,8 +10,8 @@ import org.convgrid.engine.units.Constants;
 /**
  * Semiconvective mixing under the Ledoux criterion: layers with nabla_ad &lt; nabla_rad &lt; nabla_L are mixed
  * by diffusion with D_sc = alpha_sc K_rad/(6 c_P rho) (nabla - nabla_ad)/(nabla_L - nabla), K_rad = 4 a c
- * T^3/(3 kappa rho), nabla = nabla_rad there (Langer, Sugimoto &amp; Fricke 1983, A&amp;A 126, 207;
- * formulas.md 4.1). Each species obeys dX/dt = d/dm (S dX/dm), S = (4 pi r^2 rho)^2 D, advanced over the step
+ * T^3/(3 kappa rho), nabla = nabla_rad there (Langer, Sugimoto &amp; Fricke 1983, A&amp;A 126, 207).
+ * Each species obeys dX/dt = d/dm (S dX/dm), S = (4 pi r^2 rho)^2 D, advanced over the step
  * by one backward-Euler step on the point cells of the mass mesh ({@link PointCells}): the fluxes between
  * cells telescope, so the mass of every species is conserved to rounding (the elimination's rounding grows
  * with S dt/(Dm^2), ~1e-16 times it), and the same matrix for every species keeps the fractions summing to one. D is evaluated on the previous model and carried onto the step

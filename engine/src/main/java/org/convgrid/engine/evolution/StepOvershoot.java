@@ -4,14 +4,14 @@ import org.convgrid.engine.structure.MassMesh;
 import org.convgrid.engine.structure.StellarProfile;
 
 /**
- * Step overshoot (formulas.md 4.4): the mixed region of every convective zone of the previous model reaches a
- * distance d_ov = alpha_ov min(H_P, dr_zone) beyond each formal boundary that is not the centre or the surface,
- * H_P the pressure scale height at the boundary and dr_zone the radial extent of the zone (for a core,
+ * Step overshoot (common practice, no single source): the mixed region of every convective zone of the previous model
+ * reaches a distance d_ov = alpha_ov min(H_P, dr_zone) beyond each formal boundary that is not the centre or the
+ * surface, H_P the pressure scale height at the boundary and dr_zone the radial extent of the zone (for a core,
  * r_core: the usual limit for small cores, common practice without a single source). Formal boundaries are the
- * sign changes of the stability excess interpolated linearly between mesh points (formulas.md 4.1); the
+ * sign changes of the stability excess interpolated linearly between mesh points (common practice); the
  * overshoot edge is turned into a mass by linear interpolation of m(r). Only the mixing is extended: the
  * temperature gradient of the overshoot layer stays the radiative one, since the structure equations are
- * untouched (a choice, formulas.md 4.4 allows either). Stateless.
+ * untouched (a choice; common practice allows either). Stateless.
  */
 final class StepOvershoot {
 

@@ -1,7 +1,8 @@
 package org.convgrid.engine.physics;
 
 /**
- * How mixing reaches beyond a formal convective boundary (formulas.md 4.4); the overshoot number means alpha_ov
+ * How mixing reaches beyond a formal convective boundary (step: common practice; exponential: Freytag, Ludwig &amp;
+ * Steffen 1996, A&amp;A 313, 497, and Herwig 2000, A&amp;A 360, 952); the overshoot number means alpha_ov
  * (pressure scale heights) for {@link #STEP} and f for {@link #EXPONENTIAL}.
  */
 public enum OvershootScheme {

@@ -15,9 +15,9 @@ import org.convgrid.engine.error.ConvgridException;
  */
 public final class HenyeySolver {
 
-    /** Largest correction accepted as converged, ln units (common practice: 1e-8, formulas.md 6.2). */
+    /** Largest correction accepted as converged, ln units (common practice, no single source: 1e-8). */
     public static final double DEFAULT_TOLERANCE = 1.0e-8;
-    /** Largest change of any ln unknown per iteration (common practice 0.1-0.3, formulas.md 6.2). */
+    /** Largest change of any ln unknown per iteration (common practice, no single source: 0.1-0.3). */
     public static final double DEFAULT_MAX_STEP = 0.2;
     /** Newton iterations allowed for one relaxation. */
     public static final int DEFAULT_ITERATION_BUDGET = 60;

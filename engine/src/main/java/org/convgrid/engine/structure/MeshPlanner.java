@@ -4,7 +4,7 @@ import org.convgrid.engine.state.Composition;
 
 /**
  * Places mesh points where the structure changes fast (Eggleton 1971, MNRAS 151, 351, for the idea of an
- * adaptive mesh; the weights are practice, formulas.md 6.3): every old interval gets a cost
+ * adaptive mesh; the weights are common practice): every old interval gets a cost
  * |D ln P|/0.05 + |D ln T|/0.03 + |D ln r|/0.08 + |D(m/M)|/0.01 + |D ln(1 - m/M)|/1 (not for the
  * outermost interval, which reaches m = M) + |D L/L_s|/0.02
  * + 2 at a change of convective state, and the new points divide the cumulative cost evenly. The structure is
@@ -49,7 +49,7 @@ public final class MeshPlanner {
 
     /**
      * As {@link #needsRemesh(StellarModel)}, with an extra cost per interval added to the structure's (e.g. a
-     * composition gradient |D X|/0.01, formulas.md 6.3); null for none.
+     * composition gradient |D X|/0.01, common practice); null for none.
      *
      * @param extraCost one non-negative entry per interval (k, k + 1), or null
      */

@@ -18,7 +18,8 @@ import org.convgrid.engine.units.Constants;
  * {@link DifferenceSystem}; unknowns per point: ln r, ln rho, ln T and L / L_scale. Density rather than pressure
  * is the unknown so the equation of state is only called in its cheap direction (rho, T) -&gt; P.
  *
- * <p>On interval (a, b) = (k, k + 1), with Dm its mass, bars meaning the mean of ln quantities (formulas.md 6.2):
+ * <p>On interval (a, b) = (k, k + 1), with Dm its mass, bars meaning the mean of ln quantities (Henyey
+ * relaxation, Henyey, Forbes &amp; Gould 1964, ApJ 139, 306; Kippenhahn, Weigert &amp; Weiss 2012, ch. 12):
  * <ol>
  * <li>mass: (r_b^3 - r_a^3) 4 pi rho_bar / (3 Dm) - 1 = 0</li>
  * <li>hydrostatic: ln P_b - ln P_a + G m_bar Dm / (4 pi r_a^2 r_b^2 P_bar) = 0</li>
@@ -26,7 +27,8 @@ import org.convgrid.engine.units.Constants;
  * <li>transport: ln T_b - ln T_a - (nabla_a + nabla_b)/2 (ln P_b - ln P_a) = 0</li>
  * </ol>
  * Centre (point 0 at a small mass m_0): 4 pi r_0^3 rho_0 / (3 m_0) = 1 and L_0 = eps_0 m_0 (the leading terms
- * of the central series, formulas.md 6.2). Surface: ln P and ln T equal the {@link
+ * of the series expansion about the centre, derived; cf. Kippenhahn, Weigert &amp; Weiss 2012). Surface: ln P
+ * and ln T equal the {@link
  * org.convgrid.engine.physics.atmosphere.SurfaceBoundary} values at Teff = (L/(4 pi R^2 sigma))^(1/4) and
  * g = G M/R^2.
  *

@@ -7,7 +7,7 @@ import org.convgrid.engine.structure.StellarModel;
 
 /**
  * Starting guesses for a new mass from converged neighbours by homology scaling at fixed m/M
- * (Kippenhahn, Weigert &amp; Weiss 2012, ch. 20; formulas.md 6.5): with s = M'/M,
+ * (Kippenhahn, Weigert &amp; Weiss 2012, ch. 20): with s = M'/M,
  * r' = r s^xR, P' = P s^(2 - 4 xR), T' = T s^(1 - xR), rho' = rho s^(1 - 3 xR), L' = L s^xL.
  * The exponents are measured from the two nearest converged models (finite differences in ln M), shell by shell
  * when the second model is close enough ({@link #extrapolate}), otherwise globally from their radii and
@@ -15,7 +15,10 @@ import org.convgrid.engine.structure.StellarModel;
  */
 public final class HomologySeeder {
 
-    /** Radius exponent when only one neighbour is known (upper main sequence, formulas.md 6.5, rounded). */
+    /**
+     * Radius exponent when only one neighbour is known (upper main sequence: electron scattering and CNO burning
+     * give R ~ M^0.81, Kippenhahn, Weigert &amp; Weiss 2012, ch. 20, derived and rounded).
+     */
     public static final double DEFAULT_RADIUS_EXPONENT = 0.8;
     /** Luminosity exponent when only one neighbour is known (rounded textbook mass-luminosity slope). */
     public static final double DEFAULT_LUMINOSITY_EXPONENT = 3.5;

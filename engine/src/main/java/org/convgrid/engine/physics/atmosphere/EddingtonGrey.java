@@ -2,7 +2,7 @@ package org.convgrid.engine.physics.atmosphere;
 
 /**
  * The Eddington grey atmosphere, q = 2/3: T^4 = (3/4) Teff^4 (tau + 2/3) (Chandrasekhar 1935, Proc. Camb.
- * Phil. Soc. 31, 390; formulas.md 5.1). T = Teff at tau = 2/3.
+ * Phil. Soc. 31, 390). T = Teff at tau = 2/3.
  */
 public record EddingtonGrey() implements TemperatureTauRelation {
 

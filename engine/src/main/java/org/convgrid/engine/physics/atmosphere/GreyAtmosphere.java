@@ -16,7 +16,7 @@ import org.convgrid.engine.units.Constants;
 /**
  * Pressure and temperature at a fitting optical depth from hydrostatic equilibrium in a plane-parallel grey
  * atmosphere, dP/dtau = g/kappa(P, T(tau)), with T(tau) from a {@link TemperatureTauRelation} and P the total
- * (gas + radiation) pressure (formulas.md 5.2; e.g. Kippenhahn, Weigert &amp; Weiss 2012, ch. 10).
+ * (gas + radiation) pressure (derived; e.g. Kippenhahn, Weigert &amp; Weiss 2012, ch. 10).
  *
  * <p>The radiative force on the gas is kappa F/c with the constant flux F = sigma Teff^4, so the gas pressure
  * obeys dP_gas/dtau = g/kappa - F/c whatever the relation; the total pressure handed to the interior is P_gas +

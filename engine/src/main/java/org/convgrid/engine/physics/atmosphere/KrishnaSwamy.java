@@ -4,7 +4,7 @@ import org.apache.commons.math3.analysis.solvers.BrentSolver;
 
 /**
  * The empirical solar T(tau) relation of Krishna Swamy (1966, ApJ 145, 174), as a Hopf function
- * q(tau) = 1.39 - 0.815 exp(-2.54 tau) - 0.025 exp(-30 tau) (coefficients from memory, formulas.md 5.3).
+ * q(tau) = 1.39 - 0.815 exp(-2.54 tau) - 0.025 exp(-30 tau) (coefficients from memory).
  * T = Teff near tau = 0.312, which the constructor finds by root finding.
  */
 public record KrishnaSwamy() implements TemperatureTauRelation {

@@ -3,7 +3,7 @@ package org.convgrid.engine.physics.eos;
 import java.util.Map;
 
 /**
- * Atomic data of the metals (formulas.md 1.4): first ionisation potential (eV, NIST Atomic Spectra Database
+ * Atomic data of the metals: first ionisation potential (eV, NIST Atomic Spectra Database
  * values, from memory) and the statistical weights of the ground terms of the neutral atom and of the singly
  * charged ion, (2S+1)(2L+1) (from memory; the fine-structure levels of these terms are populated at the
  * temperatures where these atoms ionise).
@@ -14,7 +14,7 @@ import java.util.Map;
  */
 record AtomicData(double firstPotential, double neutralWeight, double ionWeight) {
 
-    /** Hydrogen ionisation potential, eV (NIST; check-values 7b uses 13.5984). */
+    /** Hydrogen ionisation potential, eV (NIST Atomic Spectra Database, from memory). */
     static final double HYDROGEN = 13.5984;
     /** Helium first and second ionisation potentials, eV (NIST, from memory). */
     static final double HELIUM_FIRST = 24.5874;

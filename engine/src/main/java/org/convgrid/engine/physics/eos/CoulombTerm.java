@@ -6,7 +6,8 @@ import org.convgrid.engine.units.Constants;
  * Scratch of {@link PlasmaPoint}: the Coulomb correction of {@link StellarPlasmaEos} at one (eta, rho, T) and its
  * analytic partial derivatives in eta, ln rho and ln T. F_C = N_nuc kT f(Gamma) for an effective one-component
  * plasma whose Debye-Huckel limit is the full Debye-Huckel result, kappa^2 = (4 pi e^2/kT) n_e (z2 + theta_e)
- * (formulas.md 1.7), with the ion term sum n_j Z_j^2 written as z2 n_e (z2 fixed by the composition). F_C then
+ * (Landau &amp; Lifshitz, Statistical Physics, par. 78-79), with the ion term sum n_j Z_j^2 written as z2 n_e
+ * (z2 fixed by the composition). F_C then
  * depends on the state only through n_e, so it shifts the electron chemical potential in the Saha balance by
  * mu_C = dF_C/dN_e, and P, u follow from F_C exactly. Since Gamma ~ kappa^2 n_nuc^(-2/3) and n_e ~ T^(3/2)
  * F_{1/2}(eta), d ln Gamma = d ln F_{1/2} + d ln(z2 + theta) + (1/2) d ln T - (2/3) d ln rho. Not thread-safe.

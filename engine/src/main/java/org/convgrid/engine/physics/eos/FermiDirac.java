@@ -2,7 +2,7 @@ package org.convgrid.engine.physics.eos;
 
 /**
  * Non-relativistic Fermi-Dirac integrals F_k(eta) = int_0^inf x^k dx/(exp(x - eta) + 1), unnormalised
- * (formulas.md 1.3), for k = -1/2, 1/2, 3/2, with relative accuracy ~1e-11.
+ * (standard statistical mechanics), for k = -1/2, 1/2, 3/2, with relative accuracy ~1e-11.
  *
  * <p>Inside [{@value #TABLE_MIN}, {@value #TABLE_MAX}] the values come from a cubic Hermite table built once at
  * class load by direct quadrature: with x = t^2 every integrand is an even function of t, analytic in a strip
@@ -204,7 +204,7 @@ public final class FermiDirac {
                 + (3.0 * t2 - 4.0 * t + 1.0) * SLOPES[0][i] + (3.0 * t2 - 2.0 * t) * SLOPES[0][i + 1];
     }
 
-    /** Non-degenerate series, exact for eta &lt; 0 (formulas.md 1.3). */
+    /** Non-degenerate series, exact for eta &lt; 0 (expansion of the integrand in powers of e^(eta - x)). */
     public static double series(double order, double eta) {
         double gamma = order == -0.5 ? GAMMA[0] : order == 0.5 ? GAMMA[1] : GAMMA[2];
         double z = Math.exp(eta);
@@ -221,7 +221,7 @@ public final class FermiDirac {
         return gamma * sum;
     }
 
-    /** Sommerfeld expansion to eta^-8, for eta &gt;&gt; 1 (formulas.md 1.3). */
+    /** Sommerfeld expansion to eta^-8, for eta &gt;&gt; 1 (Sommerfeld 1928, Z. Phys. 47, 1; from memory). */
     public static double sommerfeld(double order, double eta) {
         double sum = 1.0;
         double falling = 1.0;

@@ -8,7 +8,7 @@ import org.convgrid.engine.units.Constants;
 
 /**
  * Fully ionised ideal gas of ions and non-degenerate electrons plus black-body radiation, in closed form
- * (formulas.md 1.2; Kippenhahn, Weigert &amp; Weiss 2012, ch. 13): P = rho k T/(mu m_u) + a T^4/3,
+ * (Chandrasekhar 1939; Kippenhahn, Weigert &amp; Weiss 2012, ch. 13): P = rho k T/(mu m_u) + a T^4/3,
  * u = (3/2) P_gas/rho + a T^4/rho, chi_rho = beta, chi_T = 4 - 3 beta,
  * c_V = (3/2) k/(mu m_u) + 4 a T^3/rho. The energy zero is the fully ionised plasma (no ionisation energy).
  * Meant for polytrope and solver tests and as a fast reference; it ignores degeneracy and ionisation.

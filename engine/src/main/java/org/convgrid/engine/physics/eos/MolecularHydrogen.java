@@ -3,7 +3,7 @@ package org.convgrid.engine.physics.eos;
 import org.convgrid.engine.units.Constants;
 
 /**
- * Dissociation equilibrium of molecular hydrogen, H2 = 2 H (formulas.md 1.4), for cool envelopes and
+ * Dissociation equilibrium of molecular hydrogen, H2 = 2 H, for cool envelopes and
  * photospheres of M dwarfs. Law of mass action with ideal-gas partition functions:
  * <pre>
  *   n_H^2 / n_H2 = K(T) = (pi m_H k T/h^2)^(3/2) (U_H^2/U_H2) exp(-D0/kT)

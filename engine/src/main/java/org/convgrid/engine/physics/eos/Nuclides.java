@@ -6,7 +6,7 @@ import org.convgrid.engine.state.MetalMixture;
 import org.convgrid.engine.units.Constants;
 
 /**
- * Per-mixture bookkeeping of nuclei (formulas.md 1.1): moles per gram times m_u, i.e. particles per atomic mass
+ * Per-mixture bookkeeping of nuclei: moles per gram times m_u, i.e. particles per atomic mass
  * unit, of every element the EOS follows. Carbon, nitrogen and oxygen come from their own mass fractions, every
  * other metal from {@code otherMetals} in the proportions of the mixture.
  */

@@ -22,7 +22,7 @@ import org.convgrid.engine.units.Constants;
  */
 final class PlasmaPoint {
 
-    /** 4 pi (2 m_e k/h^2)^(3/2): n_e = this T^(3/2) F_{1/2}(eta) (formulas.md 1.3). */
+    /** 4 pi (2 m_e k/h^2)^(3/2): n_e = this T^(3/2) F_{1/2}(eta) (standard statistical mechanics, derived). */
     static final double ELECTRON_DENSITY_CONSTANT = 4.0 * Math.PI
             * Math.pow(2.0 * Constants.M_E * Constants.K_B / (Constants.H * Constants.H), 1.5);
     /** Limits that keep every Saha ratio K e^-eta finite (only reached far outside stellar conditions). */
@@ -128,7 +128,7 @@ final class PlasmaPoint {
         xiH = el.hydrogenVolume * nucleusDensity;
         xiHe0 = el.heliumVolume0 * nucleusDensity;
         xiHe1 = el.heliumVolume1 * nucleusDensity;
-        // Ground-state weights: U(HI) = 2, U(HII) = 1, U(HeI) = 1, U(HeII) = 2, U(HeIII) = 1 (formulas.md 1.4).
+        // Ground-state weights: U(HI) = 2, U(HII) = 1, U(HeI) = 1, U(HeII) = 2, U(HeIII) = 1 (from memory).
         kH = expK(Math.log(0.5) - el.hydrogenChi / kT + xiH);
         // H2: each molecule excludes twice the atom's volume, so the occupation factors cancel in K_H2. Skipped in
         // hot gas (the switch-off leaves no molecules there), which keeps the interior cost unchanged.

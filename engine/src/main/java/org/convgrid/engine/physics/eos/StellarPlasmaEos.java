@@ -8,18 +8,19 @@ import org.convgrid.engine.units.Constants;
 
 /**
  * The default equation of state for main-sequence stars: ideal ions (and neutral atoms) + black-body radiation +
- * non-relativistic electrons of arbitrary degeneracy (Fermi-Dirac, formulas.md 1.3) + ionisation equilibrium of H,
+ * non-relativistic electrons of arbitrary degeneracy (Fermi-Dirac integrals) + ionisation equilibrium of H,
  * He and the metals + pressure ionisation + a Coulomb correction.
  *
  * <p><b>Ionisation.</b> Saha with the degeneracy-aware electron factor, n_{r+1}/n_r = (U_{r+1}/U_r)
- * exp(-eta - chi_r/kT) (formulas.md 1.4; the coupling used by Eggleton, Faulkner &amp; Flannery 1973), with
+ * exp(-eta - chi_r/kT) (the coupling used by Eggleton, Faulkner &amp; Flannery 1973, A&amp;A 23, 325), with
  * ground-state partition functions; metals as described in {@link PlasmaElements}. eta is found from charge
  * neutrality by safeguarded Newton iteration on ln n_e(FD) - ln n_e(ions), which is monotonic in eta.
  *
  * <p><b>Molecular hydrogen.</b> Below {@link MolecularHydrogen#MAX_TEMPERATURE} neutral hydrogen atoms pair into
  * H2 by the law of mass action of {@link MolecularHydrogen}; molecules count as one particle in P, and carry
  * their binding (-D0) and rotation-vibration energy in u. This is what lowers nabla_ad and mu in M-dwarf envelopes
- * below ~4000 K (formulas.md 1.4, 1.8). Above that temperature molecules are skipped altogether.
+ * below ~4000 K (from memory; cf. Saumon, Chabrier &amp; van Horn 1995, ApJS 99, 713). Above that temperature
+ * molecules are skipped altogether.
  *
  * <p><b>Pressure ionisation.</b> Occupation probabilities in the spirit of Hummer &amp; Mihalas 1988 (ApJ 331, 794):
  * the weight of every bound state is multiplied by w = exp(-(4 pi/3) r^3 n_nuc), a hard-sphere term with all nuclei
@@ -30,16 +31,18 @@ import org.convgrid.engine.units.Constants;
  *
  * <p><b>Coulomb.</b> Chabrier &amp; Potekhin 1998 one-component-plasma free energy (see {@link CoulombPlasma}) per
  * nucleus, at an effective coupling whose Debye-Huckel limit equals the full Debye-Huckel correction with ion and
- * (partially degenerate) electron screening (formulas.md 1.7); so it is Debye-Huckel at small Gamma and saturates
- * like the OCP (~ -0.9 Gamma) at large Gamma instead of diverging. The ions' sum n_j Z_j^2 is approximated by
- * z2 n_e with z2 = sum Y_j Z_j^2 / sum Y_j Z_j at full ionisation, so the term depends on the state only through
- * the free-electron density: it vanishes in neutral gas, and its chemical potential dF_C/dN_e enters the Saha
- * balance (a Debye-type lowering of every ionisation potential), which keeps P and u exactly consistent.
+ * (partially degenerate) electron screening (Landau &amp; Lifshitz, Statistical Physics, par. 78-79); so it is
+ * Debye-Huckel at small Gamma and saturates like the OCP (~ -0.9 Gamma) at large Gamma instead of diverging. The
+ * ions' sum n_j Z_j^2 is approximated by z2 n_e with z2 = sum Y_j Z_j^2 / sum Y_j Z_j at full ionisation, so the term
+ * depends on the state only through the free-electron density: it vanishes in neutral gas, and its chemical potential
+ * dF_C/dN_e enters the Saha balance (a Debye-type lowering of every ionisation potential), which keeps P and u
+ * exactly consistent.
  *
  * <p><b>Energy zero</b>: neutral atoms at rest, so u includes the ionisation energy. <b>Derivatives</b>: implicit
  * differentiation of the neutrality condition, d eta = -(dR/dx)/(dR/d eta) dx, with partial derivatives at fixed
  * eta taken analytically from the closed-form P, u and R (see {@link PlasmaPoint}; no re-solve, so no solver noise);
- * the remaining quantities follow from the identities of formulas.md 1.5. Thread-safe: the only mutable state is a
+ * the remaining quantities follow from the thermodynamic identities (Cox &amp; Giuli 1968; Kippenhahn,
+ * Weigert &amp; Weiss 2012, ch. 4 and 6). Thread-safe: the only mutable state is a
  * per-thread one-entry cache of composition constants that never changes a result.
  */
 public final class StellarPlasmaEos implements EquationOfState {

@@ -3,8 +3,8 @@ package org.convgrid.engine.physics.nuclear;
 /**
  * Electron capture 7Be(e-,nu)7Li in a fully ionized plasma, the branch that starts PP-II.
  *
- * <p>{@code lambda = 5.6e-9 (rho/mu_e) T6^(-1/2) [1 + 0.004 (T6 - 16)] s^-1}, the Bahcall-type fit of our
- * physics sheet (Bahcall &amp; Moeller 1969 / Bahcall 1989, Neutrino Astrophysics; from memory). It gives a 7Be
+ * <p>{@code lambda = 5.6e-9 (rho/mu_e) T6^(-1/2) [1 + 0.004 (T6 - 16)] s^-1}, a Bahcall-type fit
+ * (Bahcall &amp; Moeller 1969 / Bahcall 1989, Neutrino Astrophysics; from memory). It gives a 7Be
  * lifetime of about 80 days at the solar centre. Valid for non-degenerate electrons, T6 ~ 10-20; outside that
  * range the linear temperature factor is clamped so the rate stays positive.
  */

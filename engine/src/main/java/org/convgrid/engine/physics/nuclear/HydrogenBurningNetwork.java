@@ -9,7 +9,7 @@ import org.convgrid.engine.units.Constants;
  * The default {@link NuclearNetwork}: pp chains with explicit 3He and the PP-I/II/III branches, and the CN cycle
  * plus the 16O leak as lumped steps, with electron screening.
  *
- * <p>Reactions (our physics sheet, sections 3.1-3.5; rates from {@link SolarFusionRates}):
+ * <p>Reactions (rates from {@link SolarFusionRates}, energies from {@link ReactionEnergy}):
  * <pre>
  *   p + p (+ p)      -&gt; 3He               6.671 MeV  (d(p,g) instantaneous)
  *   3He + 3He        -&gt; 4He + 2p          12.860 MeV (PP-I)
@@ -175,7 +175,7 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
 
     /**
      * The classical 3He equilibrium {@code X_3 = 3 X [<sv>_11/(2<sv>_33)]^(1/2)}, 3He+4He neglected
-     * (our physics sheet, section 3.5), with screening; mass fraction.
+     * (derived from the 3He balance), with screening; mass fraction.
      */
     public double helium3Equilibrium(double density, double temperature, Composition composition) {
         checkState(density, temperature);

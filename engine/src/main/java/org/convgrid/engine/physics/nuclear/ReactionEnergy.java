@@ -3,8 +3,8 @@ package org.convgrid.engine.physics.nuclear;
 /**
  * Energy deposited in the star per lumped reaction step, net of the neutrino losses, in MeV.
  *
- * <p>Q-values and mean neutrino energies as tabulated in our physics sheet (section 3.2; Q-values from atomic
- * masses, neutrino energies from Bahcall 1989, Neutrino Astrophysics; from memory). Per 4He these sum to
+ * <p>Q-values and mean neutrino energies from memory (Q-values from atomic masses, neutrino energies from
+ * Bahcall 1989, Neutrino Astrophysics). Per 4He these sum to
  * 26.20 (PP-I), 25.65 (PP-II), 19.75 (PP-III) and 25.03 MeV (CN cycle).
  */
 public final class ReactionEnergy {

@@ -11,7 +11,7 @@ package org.convgrid.engine.physics.nuclear;
  *   <li>joined: {@code H = (H_w^-4 + H_s^-4)^(-1/4)}.</li>
  * </ul>
  * Both limits overestimate the enhancement outside their range, so the smaller one is the better estimate
- * (common practice; our physics sheet, section 3.4). The power-4 smooth minimum is our choice: it keeps
+ * (common practice). The power-4 smooth minimum is our choice: it keeps
  * dH/dlnT continuous for the Newton solver, is within 5 % of min(H_w, H_s) when the two differ by 1.5x
  * (0.2 % in f at the solar centre) and 16 % below both where they are equal. That intermediate regime
  * (H ~ 0.5, centres of ~0.1 Msun stars) is where neither limit holds and the enhancement is uncertain by tens of

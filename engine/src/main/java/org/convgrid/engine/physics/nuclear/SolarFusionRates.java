@@ -4,7 +4,7 @@ package org.convgrid.engine.physics.nuclear;
  * The S-factors of the hydrogen-burning reactions the network uses.
  *
  * <p>S(0) values are the recommendations of Solar Fusion II (Adelberger et al. 2011, RMP 83, 195; the
- * values listed in our physics sheet, tagged there as recalled rather than read from the paper).
+ * values from memory, not read from the paper).
  * 14N(p,g)15O uses S(0) = 1.66 keV b (Runkle et al. 2005, PRL 94, 082503, as adopted by Solar Fusion II),
  * about half the older NACRE/textbook value. The slopes S'/S and curvatures S''/S are from memory unless
  * stated; they move the rates by at most a few per cent at main-sequence temperatures. The pp slope is
