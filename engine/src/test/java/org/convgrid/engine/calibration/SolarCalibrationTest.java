@@ -14,8 +14,8 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The calibrated Sun of the standard physics (GS98 Z/X = 0.0231 in the present envelope, 4.57 Gyr, helium and
- * metals settling), computed once (~60-80 s) and shared by every check. Literature values from check-values.md
- * sections 2, 8 and 9.
+ * metals settling), computed once (~60-80 s) and shared by every check. Each check names its
+ * literature source beside it.
  */
 class SolarCalibrationTest {
 
@@ -62,7 +62,7 @@ class SolarCalibrationTest {
 
     @Test
     void mixingLengthLiesInThePublishedRange() {
-        // check-values section 9: Trampedach et al. 2014 (1.76), Magic, Weiss & Asplund 2015 (1.98), Joyce &
+        // Trampedach et al. 2014 (1.76), Magic, Weiss & Asplund 2015, A&A 573, A89 (1.98), Joyce &
         // Tayar 2023 review (1.6-2.2); range widened to 1.5-2.3 for our mixing-length variant. Measured 1.654 with
         // settling and the default Krishna Swamy atmosphere (1.561 without settling; 1.336 without settling and
         // with the Eddington relation, which needs a lower alpha)
@@ -92,7 +92,7 @@ class SolarCalibrationTest {
 
     @Test
     void exhaustsItsCoreHydrogenAtNineToTwelveGyr() {
-        // Sackmann et al. 1993: core-hydrogen exhaustion at ~10-11 Gyr; check-values section 8
+        // Sackmann, Boothroyd & Kraemer 1993, ApJ 418, 457: core-hydrogen exhaustion at ~10-11 Gyr
         assertThat(sun.exhaustionAge() / Constants.GYR).isBetween(9.0, 12.0);
     }
 

@@ -9,7 +9,7 @@ class LedouxGradientTest {
 
     @Test
     void idealGasWithRadiationUsesDeltaFromBeta() {
-        // KWW 2012 ch. 6 (formulas.md 4.1): phi = 1, delta = (4 - 3 beta)/beta for ideal gas + radiation.
+        // Kippenhahn, Weigert & Weiss 2012, ch. 6: phi = 1, delta = (4 - 3 beta)/beta for ideal gas + radiation.
         double beta = 0.8;
         double delta = (4.0 - 3.0 * beta) / beta;
         assertThat(LedouxGradient.ledoux(0.35, 1.0, delta, 0.1)).isCloseTo(0.35 + 0.1 / 2.0, within(1e-15));

@@ -28,7 +28,7 @@ class MixingLengthTheoryTest {
     @Test
     void solutionObeysTheMixingLengthEquations() {
         // The defining relations of Böhm-Vitense (1958) as written by Kippenhahn, Weigert & Weiss (2012) ch. 7
-        // (equation numbers from memory, formulas.md 4.2): v^2, the flux split and the element's radiative loss.
+        // (equation numbers from memory): v^2, the flux split and the element's radiative loss.
         for (LocalConvectionState s : new LocalConvectionState[] {deep(), shallow()}) {
             ConvectiveGradient r = mlt.gradient(s);
             double hp = s.pressure() / (s.density() * s.gravity());
@@ -68,7 +68,7 @@ class MixingLengthTheoryTest {
     @Test
     void efficientLimitHasNoCancellation() {
         // U -> 0: x^3 = (8U/9)(W - x^2 - 2Ux), so x = x0 (1 - (x0^2 + 2U x0)/(3W)) + O(x0^5), x0 = (8UW/9)^(1/3)
-        // (derived from formulas.md 4.2).
+        // (derived from the mixing-length relations of Kippenhahn, Weigert & Weiss 2012, ch. 7).
         double w = 0.2;
         for (double u : new double[] {1e-30, 1e-18, 1e-12}) {
             double x0 = Math.cbrt(8.0 * u * w / 9.0);
@@ -89,7 +89,7 @@ class MixingLengthTheoryTest {
 
     @Test
     void cubicRootAgreesWithBrentAcrossAllRegimes() {
-        // Independent check with Commons Math's Brent solver on the same bracket (formulas.md 4.2, derived).
+        // Independent check with Commons Math's Brent solver on the same bracket (cubic derived from KWW 2012 ch. 7).
         BrentSolver brent = new BrentSolver(1e-15, 1e-300, 1e-300);
         int compared = 0;
         for (double lu = -12; lu <= 12; lu += 0.5) {

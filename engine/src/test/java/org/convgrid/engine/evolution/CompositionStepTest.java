@@ -14,7 +14,7 @@ class CompositionStepTest {
 
     private static final HydrogenBurningNetwork NETWORK = new HydrogenBurningNetwork();
     private static final Composition PROTOSOLAR = Composition.scaledSolar(0.7062, 0.0188);
-    /** Heat per gram of hydrogen burnt to 4He by PP-I, erg/g: 26.20 MeV / (4 m_u) (formulas.md 3.5, derived). */
+    /** Heat per gram of hydrogen burnt to 4He by PP-I, erg/g: 26.20 MeV / (4 m_u) (derived). */
     private static final double E_H_PP1 = 26.20 * Constants.MEV / (4.0 * Constants.M_U);
 
     @Test
@@ -27,7 +27,7 @@ class CompositionStepTest {
         BurningRate burn = NETWORK.burn(rho, t, c);
         double dt = 1.0e6 * Constants.YEAR;
         Composition after = new CompositionStep(NETWORK).advance(rho, t, c, dt);
-        // at constant eps, hydrogen is used at dX/dt = -eps/E_H with E_H = Q_eff/(4 m_u) (formulas.md 3.5, derived):
+        // at constant eps, hydrogen is used at dX/dt = -eps/E_H with E_H = Q_eff/(4 m_u) (derived):
         // Q_eff = 26.20 MeV for PP-I, 25.65 PP-II, 25.03 CNO; the solar-centre mix lies within ~3 % of PP-I
         double expected = -burn.eps() * dt / E_H_PP1;
         assertThat(after.h1() - c.h1()).isCloseTo(expected, within(0.03 * Math.abs(expected)));

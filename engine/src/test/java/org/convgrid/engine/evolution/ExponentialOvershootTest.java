@@ -30,7 +30,7 @@ class ExponentialOvershootTest {
         assertThat(plain.end()).isEqualTo(EvolutionResult.EndReason.HYDROGEN_EXHAUSTED);
         assertThat(over.end()).isEqualTo(EvolutionResult.EndReason.HYDROGEN_EXHAUSTED);
         // extra mixing beyond the core brings in fuel: the main sequence lasts longer (Herwig 2000, sect. 3;
-        // f = 0.016 acts roughly like step overshoot of 0.1-0.2 H_P, formulas.md 4.4, order of magnitude only, so
+        // f = 0.016 acts roughly like step overshoot of 0.1-0.2 H_P, from memory, order of magnitude only, so
         // the bound is loose: more than 3 %, less than a factor 1.6)
         double gain = over.exhaustionAge() / plain.exhaustionAge();
         assertThat(gain).isBetween(1.03, 1.6);

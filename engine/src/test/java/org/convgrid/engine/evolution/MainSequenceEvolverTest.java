@@ -20,7 +20,7 @@ class MainSequenceEvolverTest {
 
     @Test
     void halvingTheTimeStepLimitsMovesTheSolarLifetimeByUnderOnePercent() {
-        // Numerical convergence in time (practice, formulas.md 6.4): the main-sequence lifetime of 1 Msun with
+        // Numerical convergence in time (common practice): the main-sequence lifetime of 1 Msun with
         // every step limit halved stays within 1 % of the default-step value.
         var zeroAge = EvolutionFixtures.zeroAge(EvolutionFixtures.SOLAR, 1.0);
         var physics = EvolutionFixtures.physics(EvolutionFixtures.SOLAR);
@@ -86,7 +86,7 @@ class MainSequenceEvolverTest {
         assertThat(r.models().get(0).model().global().centralHydrogen()).isBetween(0.3, 0.5);
         assertThat(r.models().get(1).model()).isSameAs(zeroAge.model());
         assertThat(r.models().get(2).status()).isEqualTo(ModelStatus.PAST_MAIN_SEQUENCE);
-        // the time-step control: ~100-300 steps to exhaustion (formulas.md 6.4, practice)
+        // the time-step control: ~100-300 steps to exhaustion (common practice, no single source)
         assertThat(steps.size()).isBetween(100, 300);
     }
 

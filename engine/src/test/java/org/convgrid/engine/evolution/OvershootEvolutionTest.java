@@ -53,9 +53,9 @@ class OvershootEvolutionTest {
         double ratioSchwarzschild = energyRatio(schwarzschild);
         // energy conservation: every erg radiated comes from hydrogen burnt (eps_grav is ~1e-3 of L on the main
         // sequence). The ratio is a few per cent below 1 because the pp chains release 26.2 MeV per 4 protons
-        // against the CNO 25.0 used here (check-values 7d). Measured 0.98; it was 0.85 while convective cores
-        // burnt each shell on its own before mixing (3He then burnt at the centre at several times its steady
-        // abundance), which this check now guards against.
+        // against the CNO 25.0 used here (derived from Bahcall 1989 mean neutrino energies, from memory). Measured
+        // 0.98; it was 0.85 while convective cores burnt each shell on its own before mixing (3He then burnt at the
+        // centre at several times its steady abundance), which this check now guards against.
         assertThat(ratioLedoux).isBetween(0.96, 1.02);
         assertThat(ratioLedoux).isCloseTo(ratioSchwarzschild, within(0.01));
     }

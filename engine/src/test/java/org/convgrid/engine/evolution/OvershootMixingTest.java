@@ -30,7 +30,7 @@ class OvershootMixingTest {
         int formal = lastOfCore(convective);
         int extended = lastOfCore(mixed);
         assertThat(extended).isGreaterThan(formal);
-        // the edge lies at r_core + 0.2 min(H_P, r_core) (formulas.md 4.4, common practice for the limit): the
+        // the edge lies at r_core + 0.2 min(H_P, r_core) (common practice for the limit): the
         // last mixed point inside it, the next one outside (one mesh interval of slack for the interpolation)
         double rCore = p.radius(formal);
         double edge = rCore + 0.2 * Math.min(p.pressureScaleHeight(formal), rCore);

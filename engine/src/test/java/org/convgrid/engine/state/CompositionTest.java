@@ -19,7 +19,7 @@ class CompositionTest {
 
     @Test
     void carbonNitrogenOxygenAreAboutTwoThirdsOfTheMetals() {
-        // C+N+O ~70 % of Z by mass, O about half (formulas.md 1.1, from memory; loose tolerance).
+        // C+N+O ~70 % of Z by mass, O about half (from memory; loose tolerance).
         Composition c = Composition.scaledSolar(0.70, 0.02);
         assertThat(c.cno() / c.z()).isBetween(0.6, 0.8);
         assertThat(c.o16() / c.z()).isBetween(0.4, 0.55);

@@ -36,7 +36,7 @@ public final class StandInPhysics {
                 StabilityCriterion.SCHWARZSCHILD, new Photosphere(eos, opacity), 0.0);
     }
 
-    /** Ideal gas + radiation, full ionisation, closed forms of formulas.md 1.2 (KWW ch. 13; derived). */
+    /** Ideal gas + radiation, full ionisation, closed forms (Chandrasekhar 1939; KWW ch. 13; derived). */
     public static final class IdealGas implements EquationOfState {
         @Override
         public EosState atDensity(double rho, double t, Composition c) {
@@ -68,8 +68,8 @@ public final class StandInPhysics {
 
     /**
      * kappa = 0.1 Z + [1/kappa_H- + 1/(kappa_es + kappa_K)]^-1 with kappa_H- = 1.1e-25 Z^0.5 rho^0.5 T^7.7,
-     * kappa_K = 4e25 (1+X)(Z+0.001) rho T^-3.5, kappa_es = 0.2 (1+X) (composite fit, formulas.md 2.7 A, from
-     * memory).
+     * kappa_K = 4e25 (1+X)(Z+0.001) rho T^-3.5, kappa_es = 0.2 (1+X) (composite fit, from
+     * memory; recalled as Lamers &amp; Levesque 2017, Understanding Stellar Evolution, opacity chapter, unverified).
      */
     public static final class CompositeOpacity implements Opacity {
         @Override
@@ -112,7 +112,7 @@ public final class StandInPhysics {
         }
     }
 
-    /** Mixing length, KWW formulation (Bohm-Vitense 1958; formulas.md 4.2, cubic for xi). */
+    /** Mixing length, KWW formulation (Bohm-Vitense 1958; KWW 2012 ch. 7; cubic for xi derived). */
     public record KwwMixingLength(double alpha) implements ConvectiveTransport {
         @Override
         public ConvectiveGradient gradient(LocalConvectionState s) {
@@ -154,7 +154,7 @@ public final class StandInPhysics {
 
     /**
      * T = Teff and P = (2/3)(g/kappa) + (2/3) sigma Teff^4/c at tau = 2/3 (one-step Eddington photosphere,
-     * formulas.md 5.2, derived), kappa iterated with the pressure; derivatives by central differences.
+     * derived), kappa iterated with the pressure; derivatives by central differences.
      */
     public record Photosphere(EquationOfState eos, Opacity opacity) implements SurfaceBoundary {
         @Override

@@ -17,7 +17,7 @@ class ConstantsTest {
 
     @Test
     void solarMassFollowsFromTheNominalMassParameter() {
-        // M = GM/G = 1.98841e30 kg with CODATA 2018 G (derived; check-values section 1a).
+        // M = GM/G = 1.98841e30 kg with CODATA 2018 G (derived; IAU 2015 Resolution B3 GM).
         assertThat(Constants.M_SUN).isCloseTo(1.98841e33, within(1e28));
     }
 
@@ -29,7 +29,7 @@ class ConstantsTest {
 
     @Test
     void solarSurfaceGravity() {
-        // log g = 4.4381 from the nominal GM and R (derived; check-values section 1a).
+        // log g = 4.4381 from the nominal GM and R (derived; IAU 2015 Resolution B3).
         assertThat(Math.log10(Constants.GM_SUN / (Constants.R_SUN * Constants.R_SUN))).isCloseTo(4.4381, within(1e-4));
     }
 }

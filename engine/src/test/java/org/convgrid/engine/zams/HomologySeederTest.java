@@ -14,7 +14,7 @@ class HomologySeederTest {
 
     @Test
     void globalScalingFollowsTheHomologyRelations() {
-        // formulas.md 6.5 (KWW 2012 ch. 20): r ~ s^xR, rho ~ s^(1 - 3 xR), T ~ s^(1 - xR), L ~ s^xL
+        // Kippenhahn, Weigert & Weiss 2012, ch. 20: r ~ s^xR, rho ~ s^(1 - 3 xR), T ~ s^(1 - xR), L ~ s^xL
         ModelState state = synthetic(2.0e33, 0.0);
         double s = 1.1;
         ModelState scaled = HomologySeeder.scale(state, 2.2e33, 0.8, 3.5, null);

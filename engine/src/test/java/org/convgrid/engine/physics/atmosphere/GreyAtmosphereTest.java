@@ -16,7 +16,7 @@ class GreyAtmosphereTest {
 
     @Test
     void constantOpacityMatchesTheOneStepPhotosphericPressure() {
-        // Derived (formulas.md 5.2): with constant kappa and the Eddington T(tau), P(2/3) =
+        // Derived: with constant kappa and the Eddington T(tau) (Chandrasekhar 1935), P(2/3) =
         // (2/3)(g/kappa)[1 + kappa L/(4 pi c G M)] = (2/3)(g/kappa + sigma Teff^4/c); d ln P/d ln g and
         // d ln P/d ln Teff follow from the two terms.
         double[][] cases = {{5772, 27400, 0.3}, {30000, 1e4, 0.34}, {3200, 1e5, 1e-3}};

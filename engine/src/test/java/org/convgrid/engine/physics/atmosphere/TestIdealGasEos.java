@@ -8,7 +8,7 @@ import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.units.Constants;
 
 /**
- * Test double: ideal gas of fixed mean molecular weight plus radiation, closed forms of formulas.md 1.2
+ * Test double: ideal gas of fixed mean molecular weight plus radiation, closed forms
  * (Chandrasekhar 1939; KWW 2012 ch. 13).
  */
 record TestIdealGasEos(double mu) implements EquationOfState {

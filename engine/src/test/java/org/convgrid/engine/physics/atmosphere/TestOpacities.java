@@ -22,7 +22,7 @@ final class TestOpacities {
     /**
      * kappa = kappa_mol + 1/(1/kappa_H- + 1/(kappa_es + kappa_Kr)), a common analytic blend: kappa_es = 0.2(1+X),
      * Kramers 4e25 (1+X)(Z+0.001) rho T^-3.5, H^- 2.5e-31 (Z/0.02) rho^1/2 T^9 (Hansen, Kawaler &amp; Trimble
-     * 2004 ch. 4; formulas.md 2.2-2.4), molecular floor 0.1 Z. Logarithmic derivatives analytic.
+     * 2004 ch. 4; the blend from memory), molecular floor 0.1 Z. Logarithmic derivatives analytic.
      */
     static Opacity blend() {
         return (rho, t, c) -> {

@@ -11,7 +11,8 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Properties every {@link EquationOfState} must have: thermodynamic consistency (Maxwell relation), reported
- * derivatives equal to finite differences of P and u, exact inversion, and the identities of formulas.md 1.5.
+ * derivatives equal to finite differences of P and u, exact inversion, and the thermodynamic identities (Cox &amp;
+ * Giuli 1968; Kippenhahn, Weigert &amp; Weiss 2012, ch. 4 and 6).
  * Subclasses supply the implementation and the states to probe.
  */
 abstract class EquationOfStateContractTest {
@@ -52,7 +53,8 @@ abstract class EquationOfStateContractTest {
 
     @Test
     void reportedDerivativesMatchFiniteDifferences() {
-        // Definitions of chi_rho, chi_T and c_V (formulas.md 1.5), checked by centred differences.
+        // Definitions of chi_rho, chi_T and c_V (standard definitions, Cox & Giuli 1968), checked by centred
+        // differences.
         for (Point p : points()) {
             EosState s = at(p, 1.0, 1.0);
             double chiRho = Math.log(at(p, Math.exp(STEP), 1.0).pressure() / at(p, Math.exp(-STEP), 1.0).pressure())
@@ -69,7 +71,7 @@ abstract class EquationOfStateContractTest {
 
     @Test
     void obeysTheAdiabaticIdentities() {
-        // nabla_ad = (Gamma_1 - chi_rho)/(Gamma_1 chi_T), c_P > c_V (formulas.md 1.5, derived identities).
+        // nabla_ad = (Gamma_1 - chi_rho)/(Gamma_1 chi_T), c_P > c_V (exact identities, Cox & Giuli 1968; derived).
         for (Point p : points()) {
             EosState s = at(p, 1.0, 1.0);
             assertThat(s.nablaAd()).isCloseTo((s.gamma1() - s.chiRho()) / (s.gamma1() * s.chiT()), within(1e-12));

@@ -11,7 +11,7 @@ class FermiDiracTest {
 
     @Test
     void matchesTheNonDegenerateSeriesAtEtaMinusFive() {
-        // F_k = Gamma(k+1) sum (-1)^(n+1) e^(n eta)/n^(k+1), exact for eta < 0 (formulas.md 1.3 and section 7;
+        // F_k = Gamma(k+1) sum (-1)^(n+1) e^(n eta)/n^(k+1), exact for eta < 0 (derived;
         // standard statistical mechanics). eta = -5 is inside the quadrature table, so this is an independent check.
         assertRelative(FermiDirac.minusHalf(-5.0), FermiDirac.series(-0.5, -5.0));
         assertRelative(FermiDirac.half(-5.0), FermiDirac.series(0.5, -5.0));
@@ -21,7 +21,7 @@ class FermiDiracTest {
 
     @Test
     void matchesTheSommerfeldExpansionAtEtaFifty() {
-        // Sommerfeld expansion (formulas.md 1.3 and section 7; Abramowitz & Stegun 1964, 23.2.16 for zeta(2j));
+        // Sommerfeld expansion (Sommerfeld 1928, from memory; Abramowitz & Stegun 1964, 23.2.16 for zeta(2j));
         // at eta = 50 the neglected terms are ~1e-17. eta = 50 is inside the table.
         assertRelative(FermiDirac.minusHalf(50.0), FermiDirac.sommerfeld(-0.5, 50.0));
         assertRelative(FermiDirac.half(50.0), FermiDirac.sommerfeld(0.5, 50.0));
@@ -46,7 +46,7 @@ class FermiDiracTest {
         // (Abramowitz & Stegun 1964, 23.2; the Dirichlet eta function identity).
         double expected = 0.5 * Math.sqrt(Math.PI) * (1.0 - Math.pow(2.0, -0.5)) * 2.612375348685488;
         assertRelative(FermiDirac.half(0.0), expected);
-        // dF_{3/2}/deta = (3/2) F_{1/2} (formulas.md 1.3), by centred differences.
+        // dF_{3/2}/deta = (3/2) F_{1/2} (derived under the integral), by centred differences.
         double h = 1e-4;
         double slope = (FermiDirac.threeHalves(3.3 + h) - FermiDirac.threeHalves(3.3 - h)) / (2 * h);
         assertThat(slope).isCloseTo(1.5 * FermiDirac.half(3.3), within(1e-8 * slope));

@@ -16,7 +16,7 @@ class StellarPlasmaEosTest {
 
     @Test
     void pureHydrogenHalfIonisationTemperatures() {
-        // x = 0.5 at T = 9930, 13440, 20340, 38410 K for rho = 1e-9, 1e-7, 1e-5, 1e-3 (check-values 7b, derived
+        // x = 0.5 at T = 9930, 13440, 20340, 38410 K for rho = 1e-9, 1e-7, 1e-5, 1e-3 (derived
         // from the non-degenerate Saha equation with CODATA 2018 and chi_H = 13.5984 eV; quoted to 4 figures).
         // Tolerance 0.1 %: the EOS keeps the Fermi-Dirac electron factor, which at 1e-3 moves T by ~0.05 %.
         double[] rho = {1e-9, 1e-7, 1e-5, 1e-3};
@@ -32,7 +32,7 @@ class StellarPlasmaEosTest {
     @Test
     void pureHydrogenNablaAdFollowsTheIonisationFormula() {
         // nabla_ad = [2 + x(1-x)(5/2 + chi/kT)] / [5 + x(1-x)(5/2 + chi/kT)^2] for an ionising pure-H ideal gas
-        // without radiation (Kippenhahn, Weigert & Weiss 2012, ch. 14; formulas.md 1.5, limits derived). At
+        // without radiation (Kippenhahn, Weigert & Weiss 2012, ch. 14, formula from memory; limits derived). At
         // rho = 1e-5 radiation is ~1e-4 of P, so the EOS (which includes it) must agree to ~1 %.
         for (double t : new double[] {1.6e4, 2.0e4, 2.5e4}) {
             double x = SAHA.ionisation(1e-5, t, HYDROGEN).hydrogenIonised();
@@ -45,8 +45,9 @@ class StellarPlasmaEosTest {
 
     @Test
     void minimumNablaAdInTheHydrogenIonisationZone() {
-        // Minimum over T of nabla_ad, pure H: 0.095 at rho = 1e-7, 0.136 at 1e-5, 0.206 at 1e-3 (check-values 7a,
-        // derived without radiation). Radiation (P_rad/P ~ 1e-3 at 1e-7) raises it slightly; 3 % tolerance.
+        // Minimum over T of nabla_ad, pure H: 0.095 at rho = 1e-7, 0.136 at 1e-5, 0.206 at 1e-3 (derived from
+        // the formula above and Saha, without radiation). Radiation (P_rad/P ~ 1e-3 at 1e-7) raises it slightly; 3 %
+        // tolerance.
         double[] rho = {1e-7, 1e-5, 1e-3};
         double[] expected = {0.095, 0.136, 0.206};
         for (int i = 0; i < rho.length; i++) {
@@ -60,7 +61,7 @@ class StellarPlasmaEosTest {
 
     @Test
     void pressureIonisationIonisesMDwarfInteriors() {
-        // Plain Saha leaves H at rho = 100, T = 1e6 K mostly neutral (formulas.md 1.6: ~80 % neutral), while real
+        // Plain Saha leaves H at rho = 100, T = 1e6 K mostly neutral (derived: ~80 % neutral), while real
         // M-dwarf interiors are pressure-ionised (Hummer & Mihalas 1988; Saumon, Chabrier & van Horn 1995).
         Composition sun = Composition.scaledSolar(0.7, 0.02);
         assertThat(SAHA.ionisation(100, 1e6, sun).hydrogenIonised()).isLessThan(0.5);
@@ -68,7 +69,8 @@ class StellarPlasmaEosTest {
         assertThat(EOS.ionisation(10, 3e5, sun).hydrogenIonised()).isGreaterThan(0.99);
         assertThat(EOS.ionisation(30, 1e5, sun).hydrogenIonised()).isGreaterThan(0.99);
         // ...and leaves the low-density ionisation balance alone (the half-ionisation test above uses plain Saha);
-        // the Coulomb term adds a Debye-type lowering that shifts x by ~0.006 there (Debye-Huckel, formulas.md 1.6).
+        // the Coulomb term adds a Debye-type lowering that shifts x by ~0.006 there (Debye-Huckel; Landau & Lifshitz,
+        // par. 78).
         StellarPlasmaEos noCoulomb = new StellarPlasmaEos(org.convgrid.engine.state.MetalMixture.GS98, true, false);
         double plain = SAHA.ionisation(1e-7, 13440, HYDROGEN).hydrogenIonised();
         assertThat(noCoulomb.ionisation(1e-7, 13440, HYDROGEN).hydrogenIonised()).isCloseTo(plain, within(1e-3));
@@ -77,7 +79,7 @@ class StellarPlasmaEosTest {
 
     @Test
     void degenerateElectronsGiveChiRhoFiveThirds() {
-        // Non-relativistic degenerate electrons: P_e ~ rho^(5/3) (formulas.md 1.3, (dlnP_e/dln n_e) -> 5/3).
+        // Non-relativistic degenerate electrons: P_e ~ rho^(5/3) (derived: (dlnP_e/dln n_e)_T -> 5/3).
         // At rho = 1e5, T = 1e6 K (pure He), eta ~ 400 and ions carry ~0.4 % of P, lowering chi_rho by ~0.003.
         StellarPlasmaEos noCoulomb = new StellarPlasmaEos(org.convgrid.engine.state.MetalMixture.GS98, true, false);
         EosState s = noCoulomb.atDensity(1e5, 1e6, Composition.scaledSolar(0.0, 0.0));
@@ -88,7 +90,7 @@ class StellarPlasmaEosTest {
     @Test
     void limitsOfTheAdiabaticGradient() {
         // Ionised gas + radiation: nabla_ad = 2(4-3 beta)/(32-24 beta-3 beta^2), 0.4 at beta = 1, 0.25 at beta -> 0
-        // (Kippenhahn, Weigert & Weiss 2012; re-derived, check-values 7a). Metal-free so that all is ionised;
+        // (Kippenhahn, Weigert & Weiss 2012, form from memory; re-derived). Metal-free so that all is ionised;
         // the residual degeneracy (eta ~ -9) is below 1e-4.
         Composition hhe = Composition.scaledSolar(0.7, 0.0);
         for (double[] point : new double[][] {{1e-2, 3e6}, {1e-4, 3e6}, {1e-10, 1e8}}) {
@@ -103,7 +105,7 @@ class StellarPlasmaEosTest {
 
     @Test
     void fullyIonisedMeanMolecularWeight() {
-        // mu = 4/(3 + 5X - Z): 0.6173 at X = 0.70, Z = 0.02 (check-values 7a, derived with A_H = 1; true masses
+        // mu = 4/(3 + 5X - Z): 0.6173 at X = 0.70, Z = 0.02 (derived with A_H = 1; true masses
         // make mu ~0.7 % larger).
         EosState s = EOS.atDensity(1e-2, 3e7, Composition.scaledSolar(0.7, 0.02));
         assertThat(s.mu()).isCloseTo(0.6173, within(0.01 * 0.6173));
@@ -112,17 +114,17 @@ class StellarPlasmaEosTest {
     @Test
     void solarCentrePressure() {
         // BS05(OP) standard solar model centre: T = 1.567e7 K, rho = 152.9, X = 0.346, P = 2.357e17 dyn cm^-2
-        // (Bahcall, Serenelli & Basu 2005, ApJ 621, L85, structure table; check-values section 2). 3 %.
+        // (Bahcall, Serenelli & Basu 2005, ApJ 621, L85, structure table). 3 %.
         EosState s = EOS.atDensity(152.9, 1.567e7, Composition.scaledSolar(0.346, 0.0188));
         assertThat(s.pressure()).isCloseTo(2.357e17, within(0.03 * 2.357e17));
     }
 
     @Test
     void coulombFitHasTheDebyeHuckelLimitAndMatchesSlatteryDoolenDeWitt() {
-        // Debye-Huckel limit u_ex/NkT = -(sqrt 3/2) Gamma^(3/2) (Landau & Lifshitz, par. 78; formulas.md 1.7).
+        // Debye-Huckel limit u_ex/NkT = -(sqrt 3/2) Gamma^(3/2) (Landau & Lifshitz, Statistical Physics, par. 78).
         double g = 1e-4;
         assertThat(CoulombPlasma.energy(g)).isCloseTo(-Math.sqrt(3) / 2 * Math.pow(g, 1.5), within(1e-3 * 1e-6));
-        // Slattery, Doolen & DeWitt 1982 fit at Gamma = 10: -7.996 (coefficients of formulas.md 1.7, from memory,
+        // Slattery, Doolen & DeWitt 1982 fit at Gamma = 10: -7.996 (coefficients from memory,
         // an independent recollection of an independent fit; loose 0.5 % tolerance).
         double sdd = -0.897744 * 10 + 0.95043 * Math.pow(10, 0.25) + 0.18956 * Math.pow(10, -0.25) - 0.81487;
         assertThat(CoulombPlasma.energy(10)).isCloseTo(sdd, within(0.005 * Math.abs(sdd)));
@@ -134,7 +136,7 @@ class StellarPlasmaEosTest {
 
     @Test
     void coulombCorrectionIsAboutOnePerCentAtTheSolarCentre() {
-        // Expected size ~1 % of P at the solar centre (formulas.md 1.7, from memory: loose bounds 0.3-2 %).
+        // Expected size ~1 % of P at the solar centre (from memory: loose bounds 0.3-2 %).
         Composition c = Composition.scaledSolar(0.346, 0.0188);
         StellarPlasmaEos noCoulomb = new StellarPlasmaEos(org.convgrid.engine.state.MetalMixture.GS98, true, false);
         double ratio = EOS.atDensity(152.9, 1.567e7, c).pressure() / noCoulomb.atDensity(152.9, 1.567e7, c).pressure();

@@ -38,7 +38,7 @@ class AbundanceRelaxationTest {
 
     @Test
     void quadraticReachesTheFixedPointAndKeepsTheStartWhenTimeIsShort() {
-        // n+ = 2a/(c + sqrt(c^2 + 4ab)); with c = 0 this is the classical (a/b)^(1/2) (formulas.md 3.5).
+        // n+ = 2a/(c + sqrt(c^2 + 4ab)); with c = 0 this is the classical (a/b)^(1/2) (derived).
         assertThat(AbundanceRelaxation.quadratic(4.0, 1.0, 0.0, 0.0, 100.0)).isCloseTo(2.0, within(1e-12));
         assertThat(AbundanceRelaxation.quadratic(4.0, 1.0, 0.0, 0.3, 1e-12)).isCloseTo(0.3, within(1e-9));
         assertThat(AbundanceRelaxation.quadratic(0.0, 0.0, 0.0, 0.3, 1e6)).isEqualTo(0.3);
@@ -46,7 +46,7 @@ class AbundanceRelaxationTest {
 
     @Test
     void linearPairConservesTheSumAndRelaxesToTheRateRatio() {
-        // dy12/dt = -k12 y12 + k14 y14 (lumped CN cycle, formulas.md 3.5): steady state y12/y14 = k14/k12.
+        // dy12/dt = -k12 y12 + k14 y14 (lumped CN cycle, derived): steady state y12/y14 = k14/k12.
         double y12 = AbundanceRelaxation.linearPair(3.0, 1.0, 1.0, 0.0, 50.0);
         assertThat(y12).isCloseTo(0.25, within(1e-12));
         double partial = AbundanceRelaxation.linearPair(3.0, 1.0, 1.0, 0.0, 0.25);

@@ -19,8 +19,9 @@ class ChargedParticleRateTest {
 
     @Test
     void gamowCoefficientsFollowFromCodataConstants() {
-        // tau = 4.2487 (Z1^2 Z2^2 mu/T9)^(1/3) and N_A<sv> = 4.339e8 S tau^2 e^-tau/(mu Z1 Z2): formulas.md 3.1
-        // (derived there; the same numbers in Clayton 1968, Principles of Stellar Evolution, ch. 4, from memory).
+        // tau = 4.2487 (Z1^2 Z2^2 mu/T9)^(1/3) and N_A<sv> = 4.339e8 S tau^2 e^-tau/(mu Z1 Z2), derived
+        // from CODATA 2018 constants (the same numbers in Clayton 1968, Principles of Stellar Evolution, ch. 4, from
+        // memory).
         assertThat(ChargedParticleRate.GAMOW_TAU).isCloseTo(4.2487, within(2e-4));
         assertThat(ChargedParticleRate.RATE_PREFACTOR).isCloseTo(4.339e8, within(0.001e8));
     }
@@ -28,7 +29,7 @@ class ChargedParticleRateTest {
     @Test
     void tauCoefficientsMatchTheCaughlanFowlerExponents() {
         // CF88 fit exponents (Caughlan & Fowler 1988, ADNDT 40, 283; from memory), table in
-        // reference/nuclear/cf88-tau-coefficients.csv; formulas.md 3.1 quotes agreement to ~0.1 %.
+        // reference/nuclear/cf88-tau-coefficients.csv; our derived tau agrees with them to ~0.1 %.
         Map<String, ChargedParticleRate> byName = ALL.stream()
                 .collect(Collectors.toMap(ChargedParticleRate::name, Function.identity()));
         List<String[]> rows = ReferenceRows.read("cf88-tau-coefficients.csv", 2);
@@ -43,7 +44,7 @@ class ChargedParticleRateTest {
     void ppCorrectionTermsReproduceTheCaughlanFowlerPolynomial() {
         // CF88 p+p fit: 1 + 0.123 T9^(1/3) + 1.09 T9^(2/3) + 0.938 T9 (Caughlan & Fowler 1988; from memory).
         // Our bracket is FCZ 1967 with S'/S = 11.2 MeV^-1 (SF-II, from memory): the two must agree, which checks
-        // both the 5/(12 tau) term (D-checked in formulas.md 3.1) and the recalled slope.
+        // both the 5/(12 tau) term of FCZ 1967 and the recalled slope.
         for (double t9 : new double[] {0.005, 0.015, 0.03}) {
             double c = Math.cbrt(t9);
             double cf88 = 1.0 + 0.123 * c + 1.09 * c * c + 0.938 * t9;
@@ -80,7 +81,7 @@ class ChargedParticleRateTest {
 
     @Test
     void ratesRiseSteeplyAndVanishAtLowTemperature() {
-        // Gamow-peak physics: tau/3 - 2/3 ~ 20 for 14N+p at 15 MK (formulas.md 3.3, derived).
+        // Gamow-peak physics: tau/3 - 2/3 ~ 20 for 14N+p at 15 MK (derived).
         double t9 = 0.015;
         assertThat(SolarFusionRates.N14_P.dlnRateDlnT(t9, Math.cbrt(t9))).isBetween(18.5, 20.5);
         assertThat(SolarFusionRates.N14_P.rate(1e-4, Math.cbrt(1e-4))).isLessThan(1e-100);

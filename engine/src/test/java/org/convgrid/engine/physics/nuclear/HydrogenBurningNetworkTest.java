@@ -16,7 +16,7 @@ import org.junit.jupiter.api.Test;
 class HydrogenBurningNetworkTest {
 
     private static final HydrogenBurningNetwork DEFAULT = new HydrogenBurningNetwork();
-    /** Relaxes 3He and CN for 4.57 Gyr, the age of the Sun (check-values 1c). */
+    /** Relaxes 3He and CN for 4.57 Gyr, the age of the Sun in standard solar models (from memory). */
     private static final HydrogenBurningNetwork SOLAR_AGE =
             new HydrogenBurningNetwork(SalpeterScreening.INSTANCE, MetalMixture.GS98, 4.57 * Constants.GYR);
     /** Unscreened and fully relaxed, for comparisons with the unscreened textbook formulas. */
@@ -33,7 +33,7 @@ class HydrogenBurningNetworkTest {
     @Test
     void standardSolarModelCentre() {
         // BS05(OP) centre: T = 1.567e7 K, rho = 152.9, X = 0.346, Z ~ 0.0188; eps ~ 16.5 erg/g/s
-        // (Bahcall, Serenelli & Basu 2005, ApJ 621, L85, structure table; check-values 2, derived). 3He and CN
+        // (Bahcall, Serenelli & Basu 2005, ApJ 621, L85, structure table; eps derived from it). 3He and CN
         // relaxed for 4.57 Gyr from a scaled-solar start (both at equilibrium at the solar centre).
         Composition centre = SOLAR_AGE.equilibrium(152.9, 1.567e7, Composition.scaledSolar(0.346, 0.0188));
         BurningRate r = DEFAULT.burn(152.9, 1.567e7, centre);
@@ -46,9 +46,9 @@ class HydrogenBurningNetworkTest {
 
     @Test
     void ppTemperatureExponentIsAboutFour() {
-        // check-values 7d: nu_pp = 3.9 at 15 MK (tau/3 - 2/3 of the p+p step; textbook "~4"). The p+p step alone
-        // must match closely; the whole chain with 3He at equilibrium is a little steeper because the PP-II
-        // share grows with T (psi, formulas.md 3.3).
+        // nu_pp = 3.9 at 15 MK (tau/3 - 2/3 of the p+p step, derived; the textbook "~4" from memory). The p+p step
+        // alone must match closely; the whole chain with 3He at equilibrium is a little steeper because the PP-II
+        // share grows with T (psi, KWW 2012 sect. 18.5).
         List<String[]> rows = ReferenceRows.read("temperature-exponents.csv");
         for (String[] row : rows) {
             double t = Double.parseDouble(row[0]);
@@ -69,7 +69,7 @@ class HydrogenBurningNetworkTest {
 
     @Test
     void cnoTemperatureExponentIsEighteenToTwenty() {
-        // check-values 7d: nu_CNO = 19.9 at 15 MK (unscreened, tau/3 - 2/3), "~18-20" in textbooks; ours
+        // nu_CNO = 19.9 at 15 MK (unscreened, tau/3 - 2/3, derived), "~18-20" in textbooks (from memory); ours
         // includes screening and S'/S < 0, which lower it slightly.
         Composition cn = RELAXED.equilibrium(100.0, 1.5e7, SOLAR_ALL_N);
         double h = 1.0e-3;
@@ -80,10 +80,10 @@ class HydrogenBurningNetworkTest {
 
     @Test
     void ppEqualsCnoNearEighteenMillionKelvin() {
-        // check-values 7d: crossover 17.4-17.8 MK for X = 0.70, X_CNO = 0.010-0.014 from the textbook formulas,
-        // "17-18 MK" commonly quoted. Assumption: all C+N+O as 14N with 12C at CN equilibrium, rho = 100.
-        // Our 14N(p,g) rate is ~0.53x the old one and eps_CNO ~ T^15 relative to eps_pp, so the crossover moves
-        // up by 1.9^(1/15) ~ 4 %: we accept 17.5-19.0 MK.
+        // Crossover 17.4-17.8 MK for X = 0.70, X_CNO = 0.010-0.014, derived from the unscreened textbook rates
+        // (Carroll & Ostlie 2007, eqs. 10.46 and 10.58, from memory); "17-18 MK" commonly quoted. Assumption: all
+        // C+N+O as 14N with 12C at CN equilibrium, rho = 100. Our 14N(p,g) rate is ~0.53x the old one and
+        // eps_CNO ~ T^15 relative to eps_pp, so the crossover moves up by 1.9^(1/15) ~ 4 %: we accept 17.5-19.0 MK.
         double crossover = new BrentSolver(1.0).solve(100, t -> {
             BurningRate r = RELAXED.burn(100.0, t, RELAXED.equilibrium(100.0, t, SOLAR_ALL_N));
             return Math.log(r.epsCno() / r.epsPp());
@@ -93,8 +93,8 @@ class HydrogenBurningNetworkTest {
 
     @Test
     void ppRateAgreesWithTheCompactTextbookForm() {
-        // KWW 2012 sect. 18.5 (formulas.md 3.3, M, D-checked): eps_pp = 2.57e4 psi g11 rho X^2 T9^(-2/3)
-        // exp(-3.381 T9^(-1/3)), unscreened (f11 = 1), psi taken from our own branching (energy per p+p
+        // KWW 2012 sect. 18.5 (from memory; checked as rate times Q, derived): eps_pp = 2.57e4 psi g11 rho X^2
+        // T9^(-2/3) exp(-3.381 T9^(-1/3)), unscreened (f11 = 1), psi taken from our own branching (energy per p+p
         // reaction over the PP-I 13.10 MeV). Agreement within 10 %: NACRE S(0) vs SF-II, and g11 vs FCZ terms.
         for (double t : new double[] {1.0e7, 1.5e7, 2.0e7}) {
             double t9 = t * 1e-9;
@@ -112,7 +112,7 @@ class HydrogenBurningNetworkTest {
     void cnoRateIsAboutHalfTheOldTextbookForm() {
         // KWW 2012 sect. 18.5: eps_CNO = 8.24e25 g14 X_CNO X rho T9^(-2/3) exp(-15.231 T9^(-1/3) - (T9/0.8)^2)
         // rests on S_1,14 ~ 3.2 keV b; the modern 1.66 keV b (Runkle et al. 2005; Adelberger et al. 2011) halves
-        // it (formulas.md 3.3 warning, derived: ~4.3e25/8.24e25 = 0.52).
+        // it (derived: ~4.3e25/8.24e25 = 0.52).
         double t = 1.5e7;
         double t9 = t * 1e-9;
         BurningRate r = BARE.burn(100.0, t, BARE.equilibrium(100.0, t, SOLAR_ALL_N));
@@ -125,7 +125,7 @@ class HydrogenBurningNetworkTest {
     @Test
     void energyMatchesTheHydrogenConsumed() {
         // Energy conservation (derived): at CN and 3He equilibrium and PP-I dominance, eps = -dX/dt E_H with
-        // E_H = Q_eff/(4 m_H) ~ 6.3e18 erg/g for 26.2 MeV (formulas.md 3.5); the mix of chains keeps it within 5 %.
+        // E_H = Q_eff/(4 m_H) ~ 6.3e18 erg/g for 26.2 MeV; the mix of chains keeps it within 5 %.
         Composition c = RELAXED.equilibrium(100.0, 1.3e7, SOLAR_ALL_N);
         BurningRate r = RELAXED.burn(100.0, 1.3e7, c);
         double perGram = r.eps() / -r.dh1Dt();
@@ -134,7 +134,7 @@ class HydrogenBurningNetworkTest {
 
     @Test
     void helium3EquilibriumMatchesTheClassicalFormulaWhere34IsNegligible() {
-        // X_3 = 3 X [<sv>_11/(2 <sv>_33)]^(1/2) (formulas.md 3.5, derived): at 11 MK 3He+4He destroys little
+        // X_3 = 3 X [<sv>_11/(2 <sv>_33)]^(1/2) (derived from the 3He balance): at 11 MK 3He+4He destroys little
         // 3He; at the solar centre it lowers X_3 (our exact solution keeps it).
         Composition cool = RELAXED.equilibrium(100.0, 1.1e7, SOLAR);
         assertThat(cool.he3() / RELAXED.helium3Equilibrium(100.0, 1.1e7, SOLAR)).isCloseTo(1.0, within(0.02));
@@ -145,7 +145,7 @@ class HydrogenBurningNetworkTest {
 
     @Test
     void equilibriumKeepsSlowSpeciesAndMovesMassThroughHydrogen() {
-        // Below ~8 MK the 3He equilibration time exceeds Gyr (formulas.md 3.5): in 1e8 yr at 5 MK 3He barely
+        // Below ~8 MK the 3He equilibration time exceeds Gyr (from memory): in 1e8 yr at 5 MK 3He barely
         // grows; CN is untouched at 8 MK; both relax completely at 25 MK.
         Composition start = SOLAR.withHydrogenAndHelium(0.70 - 1e-4, 1e-4, SOLAR.he4());
         HydrogenBurningNetwork shortRelaxation = new HydrogenBurningNetwork(SalpeterScreening.INSTANCE,
@@ -163,7 +163,7 @@ class HydrogenBurningNetworkTest {
 
     @Test
     void freshHydrogenWithoutHelium3BurnsOnlyTheFirstStep() {
-        // With X(3He) = 0 only p+p -> 3He (6.67 MeV) runs: half the PP-I energy per p+p reaction (formulas.md 3.2).
+        // With X(3He) = 0 only p+p -> 3He (6.67 MeV) runs: half the PP-I energy per p+p reaction (derived).
         BurningRate r = BARE.burn(100.0, 1.5e7, new Composition(0.70, 0.0, 0.30, 0.0, 0.0, 0.0, 0.0));
         double ppReactions = 0.5 * 100.0 * 0.49 * SolarFusionRates.PP.rate(0.015, Math.cbrt(0.015));
         assertThat(r.epsPp() / (MEV_PER_MOLE * ppReactions)).isCloseTo(ReactionEnergy.PP_TO_HE3, within(1e-9));

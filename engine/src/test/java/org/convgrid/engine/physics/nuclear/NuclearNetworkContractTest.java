@@ -16,7 +16,7 @@ abstract class NuclearNetworkContractTest {
 
     @Test
     void compositionRatesConserveMass() {
-        // Nucleon-number bookkeeping of the lumped reactions (formulas.md 3.5, derived): sum of dX/dt = 0.
+        // Nucleon-number bookkeeping of the lumped reactions (derived): sum of dX/dt = 0.
         Composition c = new Composition(0.6, 2e-4, 0.3798, 0.003, 0.002, 0.009, 0.006);
         for (double t : new double[] {5e6, 1.5e7, 3e7}) {
             BurningRate r = network().burn(80.0, t, c);

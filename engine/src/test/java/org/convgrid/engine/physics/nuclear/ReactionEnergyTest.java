@@ -14,7 +14,7 @@ class ReactionEnergyTest {
 
     @Test
     void hydrogenBurningReleases26point73MeV() {
-        // check-values 7d: Q = 26.731 MeV (derived from AME 2020 masses), mass defect 0.712 %; the textbook
+        // Q = 26.731 MeV (derived from the AME 2020 atomic masses), mass defect 0.712 %; the textbook
         // "26.73 MeV" (e.g. Kippenhahn, Weigert & Weiss 2012, ch. 18).
         assertThat(Q_FROM_MASSES).isCloseTo(26.731, within(0.001));
         assertThat(Q_FROM_MASSES / (4.0 * Constants.MASS_H1_AMU * Constants.M_U_C2_MEV)).isCloseTo(0.00712, within(0.00001));
@@ -22,7 +22,7 @@ class ReactionEnergyTest {
 
     @Test
     void stepQValuesAddUpToTheMassDifference() {
-        // formulas.md 3.2 check (derived): PP-I 2(1.442 + 5.494) + 12.860 and the CN cycle sum both give 26.73 MeV.
+        // Sum check (derived): PP-I 2(1.442 + 5.494) + 12.860 and the CN cycle sum both give 26.73 MeV.
         double ppI = 2.0 * (ReactionEnergy.Q_PP + ReactionEnergy.Q_DP) + ReactionEnergy.Q_33;
         double cn = ReactionEnergy.Q_C12_P + ReactionEnergy.Q_N13 + ReactionEnergy.Q_C13_P + ReactionEnergy.Q_N14_P
                 + ReactionEnergy.Q_O15 + ReactionEnergy.Q_N15_PA;
@@ -43,13 +43,13 @@ class ReactionEnergyTest {
 
     @Test
     void energyPerHeliumNetOfNeutrinos() {
-        // check-values 7d / formulas.md 3.2 (derived from Bahcall 1989 neutrino energies, from memory):
+        // Derived from the mean neutrino energies of Bahcall 1989, Neutrino Astrophysics (from memory):
         // PP-I 26.20, PP-II 25.65, PP-III 19.7-19.76, CNO 25.03 MeV per 4He.
         assertThat(2.0 * ReactionEnergy.PP_TO_HE3 + ReactionEnergy.HE3_HE3).isCloseTo(26.20, within(0.01));
         assertThat(ReactionEnergy.PP_TO_HE3 + ReactionEnergy.PP2_BRANCH).isCloseTo(25.65, within(0.01));
         assertThat(ReactionEnergy.PP_TO_HE3 + ReactionEnergy.PP3_BRANCH).isCloseTo(19.76, within(0.06));
         assertThat(ReactionEnergy.C12_TO_N14 + ReactionEnergy.N14_TO_C12).isCloseTo(25.03, within(0.01));
-        // Lumped steps of formulas.md 3.5: 11.01, 14.02, 3.55 MeV; 6.67 MeV per 3He made.
+        // Lumped steps (derived from the same Q values and losses): 11.01, 14.02, 3.55 MeV; 6.67 MeV per 3He made.
         assertThat(ReactionEnergy.C12_TO_N14).isCloseTo(11.01, within(0.005));
         assertThat(ReactionEnergy.N14_TO_C12).isCloseTo(14.02, within(0.005));
         assertThat(ReactionEnergy.O16_TO_N14).isCloseTo(3.55, within(0.005));

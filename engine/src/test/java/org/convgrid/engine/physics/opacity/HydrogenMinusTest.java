@@ -15,7 +15,7 @@ class HydrogenMinusTest extends OpacityContractTest {
 
     @Test
     void reproducesThePowerLawAndItsMetallicityScaling() {
-        // Hansen, Kawaler & Trimble 2004, ch. 4 / Carroll & Ostlie 2007 ch. 9 (check-values 7c, M):
+        // Hansen, Kawaler & Trimble 2004, ch. 4 / Carroll & Ostlie 2007 ch. 9 (from memory):
         // 2.5e-31 (Z/0.02) rho^0.5 T^9; at T = 5000, rho = 1e-7: 2.5e-31 * 3.162e-4 * 1.953e33 = 0.154.
         HydrogenMinus law = HydrogenMinus.hansenKawalerTrimble();
         double k = law.rosselandMean(1e-7, 5000, Composition.scaledSolar(0.7, 0.02)).kappa();

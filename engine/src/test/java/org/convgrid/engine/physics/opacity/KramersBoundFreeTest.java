@@ -15,7 +15,7 @@ class KramersBoundFreeTest extends OpacityContractTest {
 
     @Test
     void constantGuillotineReproducesCarrollAndOstlieCoefficient() {
-        // Carroll & Ostlie 1996, p. 274 (check-values 7c, C): kappa_bf = 4.34e25 (g_bf/t) Z (1+X) rho T^-3.5;
+        // Carroll & Ostlie 1996, p. 274: kappa_bf = 4.34e25 (g_bf/t) Z (1+X) rho T^-3.5;
         // slope 0 makes t = 2^(1/s) constant, here s = 50 so t = 1.0140.
         KramersBoundFree plain = new KramersBoundFree(1e7, 0.0, 50.0);
         double k = plain.rosselandMean(1.0, 1e6, Composition.scaledSolar(0.7, 0.02)).kappa();
@@ -24,8 +24,9 @@ class KramersBoundFreeTest extends OpacityContractTest {
 
     @Test
     void guillotineIsOneBelowTheKneeAndGrowsAboveIt() {
-        // formulas.md 2.3 (D, own arithmetic): t ~ 1 suits the CZ base (T = 2.2e6, rho = 0.19), t ~ 20 the solar
-        // centre (T = 1.57e7, rho = 150). The fitted knee now moves with density, so the checks use those densities.
+        // Derived from Carroll & Ostlie 1996, p. 274 (tabulated kappa from memory): t ~ 1 suits the CZ base
+        // (T = 2.2e6, rho = 0.19), t ~ 20 the solar centre (T = 1.57e7, rho = 150). The fitted knee now moves with
+        // density, so the checks use those densities.
         KramersBoundFree bf = new KramersBoundFree();
         assertThat(bf.guillotine(0.19, 2.2e6)).isBetween(1.0, 1.1);
         assertThat(bf.guillotine(150, 1.57e7)).isBetween(15.0, 30.0);

@@ -15,7 +15,7 @@ class KramersFreeFreeTest extends OpacityContractTest {
 
     @Test
     void metalFreeGasReproducesCarrollAndOstlieCoefficient() {
-        // Carroll & Ostlie 1996, p. 274 (check-values 7c, C): kappa_ff = 3.68e22 g_ff (1 - Z)(1 + X) rho T^-3.5.
+        // Carroll & Ostlie 1996, p. 274: kappa_ff = 3.68e22 g_ff (1 - Z)(1 + X) rho T^-3.5.
         Composition c = Composition.scaledSolar(0.7, 0.0);
         double k = new KramersFreeFree().rosselandMean(1.0, 1e6, c).kappa();
         assertThat(k).isCloseTo(3.68e22 * 1.0 * 1.7 * 1e-21, within(1e-12 * k));
