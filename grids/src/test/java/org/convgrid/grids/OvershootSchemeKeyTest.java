@@ -3,7 +3,7 @@ package org.convgrid.grids;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
-import org.convgrid.engine.physics.OvershootScheme;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.grids.yaml.GridFileReader;
 import org.junit.jupiter.api.Test;
 

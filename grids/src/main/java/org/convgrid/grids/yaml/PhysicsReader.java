@@ -4,10 +4,11 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.error.ConvgridException;
-import org.convgrid.engine.physics.OvershootScheme;
+import org.convgrid.engine.request.OpacityChoice;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.physics.opacity.OpacityTableReader;
 import org.convgrid.grids.PhysicsAxes;
@@ -65,7 +66,8 @@ final class PhysicsReader {
         List<Double> factors = fields.has("opacity_factor")
                 ? AxisValues.distinct(fields.value("opacity_factor"), "opacity_factor", POSITIVE, reader)
                 : List.of(d.opacityFactor());
-        String table = fields.has("opacity_table") ? opacityTable(fields.value("opacity_table"), reader) : "";
+        OpacityChoice table = fields.has("opacity_table") ? opacityTable(fields.value("opacity_table"), reader)
+                : OpacityChoice.BUILT_IN;
         AtmosphereChoice atmosphere = fields.has("atmosphere") ? atmosphere(fields.value("atmosphere"), reader)
                 : AtmosphereChoice.DEFAULT;
         if (preset != null && preset.atmosphere() != null) {
@@ -116,9 +118,9 @@ final class PhysicsReader {
 
     /**
      * A user opacity table, resolved against the grid file's folder and read once here so that a bad table is
-     * reported with the grid file's line and column, before anything runs.
+     * reported with the grid file's line and column, before anything runs; the table read is the one the run uses.
      */
-    private static String opacityTable(Node node, NodeReader reader) {
+    private static OpacityChoice opacityTable(Node node, NodeReader reader) {
         String text = reader.text(node, "opacity_table");
         if (text == null) {
             return null;
@@ -126,12 +128,11 @@ final class PhysicsReader {
         Path folder = Path.of(reader.file()).toAbsolutePath().getParent();
         Path table = folder == null ? Path.of(text) : folder.resolve(text);
         try {
-            OpacityTableReader.read(table);
+            return OpacityChoice.table(table.normalize().toString(), OpacityTableReader.read(table));
         } catch (ConvgridException e) {
             reader.problem(node, "opacity_table: " + e.getMessage());
             return null;
         }
-        return table.normalize().toString();
     }
 
     private static List<StabilityCriterion> criteria(Node node, NodeReader reader) {

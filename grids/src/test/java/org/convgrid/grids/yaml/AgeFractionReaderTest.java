@@ -5,8 +5,8 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.catchThrowableOfType;
 
 import java.util.List;
-import org.convgrid.engine.batch.ModelRequest;
-import org.convgrid.engine.evolution.AgeMeaning;
+import org.convgrid.engine.request.Age;
+import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.grids.GridFileException;
 import org.convgrid.grids.GridHash;
 import org.convgrid.grids.GridProblem;
@@ -26,12 +26,12 @@ class AgeFractionReaderTest {
     @Test
     void fractionsBecomeAnAxisWhoseRequestsCarryTheBareFraction() {
         GridSpec spec = reader.parse("f.yaml", HEAD + "age: {ms_fraction: [0, 0.25, 0.5, 0.9]}\n");
-        assertThat(spec.ages().meaning()).isEqualTo(AgeMeaning.MS_FRACTION);
+        assertThat(spec.ages().fractions()).isTrue();
         assertThat(spec.ages().values()).containsExactly(0.0, 0.25, 0.5, 0.9);
         assertThat(spec.ages().evolves()).isTrue();
         assertThat(spec.count()).isEqualTo(8);
         List<ModelRequest> all = spec.expand();
-        assertThat(all).extracting(ModelRequest::age).containsExactly(0.0, 0.25, 0.5, 0.9, 0.0, 0.25, 0.5, 0.9);
+        assertThat(all).extracting(ModelRequest::age).containsExactly(fractions(0.0, 0.25, 0.5, 0.9, 0.0, 0.25, 0.5, 0.9));
         assertThat(all.get(1).modelId()).isEqualTo("p0-z00-m000-a01");
         assertThatThrownBy(spec::agesGyr).isInstanceOf(IllegalStateException.class).hasMessageContaining("fractions");
     }
@@ -75,5 +75,9 @@ class AgeFractionReaderTest {
 
     private List<GridProblem> problems(String text) {
         return catchThrowableOfType(() -> reader.parse("f.yaml", text), GridFileException.class).problems();
+    }
+
+    private static Age[] fractions(double... values) {
+        return java.util.Arrays.stream(values).mapToObj(Age.MainSequenceFraction::new).toArray(Age[]::new);
     }
 }
