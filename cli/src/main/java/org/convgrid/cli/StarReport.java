@@ -6,7 +6,6 @@ import java.util.Locale;
 import org.convgrid.engine.request.Age;
 import org.convgrid.engine.request.GlobalProperties;
 import org.convgrid.engine.request.ModelOutcome;
-import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.state.Composition;

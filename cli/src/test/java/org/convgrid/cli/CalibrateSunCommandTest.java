@@ -12,7 +12,6 @@ import java.util.List;
 import org.convgrid.engine.request.GlobalProperties;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
-import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.calibration.CalibratedSun;
 import org.convgrid.engine.convection.ConvectiveStructure;

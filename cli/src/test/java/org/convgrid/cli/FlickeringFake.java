@@ -5,7 +5,6 @@ import org.convgrid.engine.request.GlobalProperties;
 import org.convgrid.engine.batch.ChunkSolver;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
-import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.convection.ConvectiveZone;

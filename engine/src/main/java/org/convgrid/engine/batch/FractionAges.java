@@ -6,7 +6,6 @@ import java.util.Locale;
 
 import org.convgrid.engine.evolution.LifetimeSearch;
 import org.convgrid.engine.request.Age;
-import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.physics.PhysicsSet;

@@ -25,24 +25,24 @@ import org.convgrid.engine.zams.ZamsTrack;
 import org.convgrid.engine.zams.ZeroAgeRequests;
 
 /**
- * Solves grid requests at any age. A chunk walks its masses in order on a fresh {@link ZamsTrack} (each zero-age
- * model seeded by homology from its converged neighbours); the requests of one mass
- * (consecutive in a chunk) are answered by one {@link MainSequenceEvolver} run from that zero-age model, stopped at
- * the largest requested age, with a step landing exactly on every requested age (no interpolation). Age 0 is the
- * zero-age model itself; ages are {@link Age.SinceZeroAge} in s. Ages beyond core-hydrogen exhaustion are {@link ModelStatus#PAST_MAIN_SEQUENCE} with the
- * exhaustion age in the detail; a failed evolution leaves the ages it did not reach
- * {@link ModelStatus#NOT_CONVERGED}. Each star with an age above zero hands its track to the {@link TrackSink}.
+ * Solves grid requests at any age. A chunk walks its masses in order on a fresh {@link ZamsTrack} (each zero-age model
+ * seeded by homology from its converged neighbours); the requests of one mass (consecutive in a chunk) are answered by
+ * one {@link MainSequenceEvolver} run from that zero-age model, stopped at the largest requested age, with a step
+ * landing exactly on every requested age (no interpolation). Age 0 is the zero-age model itself; ages are {@link
+ * Age.SinceZeroAge} in s. Ages beyond core-hydrogen exhaustion are {@link ModelStatus#PAST_MAIN_SEQUENCE} with the
+ * exhaustion age in the detail; a failed evolution leaves the ages it did not reach {@link ModelStatus#NOT_CONVERGED}.
+ * Each star with an age above zero hands its track to the {@link TrackSink}.
  *
- * <p>When a star's request ages are {@link Age.MainSequenceFraction}s, they are fractions f of each star's main-sequence lifetime:
- * the star is first evolved to core-hydrogen exhaustion ({@link LifetimeSearch}) to find t_MS, then evolved again
- * from its zero-age model landing exactly on every t = f t_MS (f = 1: the exhaustion age, X_c = 1e-4 by default, to
- * within the second run's steps); the outcomes carry the request with t in s. The track handed over is the second
- * run's, and the iteration counts are those of the second run. A star whose lifetime cannot be found (evolution
- * failed, or X_c still above the end value at the age limit, as for stars below about 0.9 Msun with the default
- * 20 Gyr) answers its non-zero fractions {@link ModelStatus#NOT_CONVERGED} with age NaN and the reason.
+ * <p>When a star's request ages are {@link Age.MainSequenceFraction}s, they are fractions f of its main-sequence
+ * lifetime: the star is first evolved to core-hydrogen exhaustion ({@link LifetimeSearch}) to find t_MS, then evolved
+ * again from its zero-age model landing exactly on every t = f t_MS (f = 1: the exhaustion age, X_c = 1e-4 by default,
+ * to within the second run's steps); the outcomes carry the request with t in s. The track handed over is the second
+ * run's, and the iteration counts are those of the second run. A star whose lifetime cannot be found (evolution failed,
+ * or X_c still above the end value at the age limit, as for stars below about 0.9 Msun with the default 20 Gyr) answers
+ * its non-zero fractions {@link ModelStatus#NOT_CONVERGED} with age NaN and the reason.
  *
- * <p>An outcome depends only on its chunk, never on threads. Thread-safe: the physics bundle of each
- * (options, composition) line is built once per instance and shared; the bundles are immutable.
+ * <p>An outcome depends only on its chunk, never on threads. Thread-safe: the physics bundle of each (options,
+ * composition) line is built once per instance and shared; the bundles are immutable.
  */
 public final class GridRequests implements ChunkSolver {
 

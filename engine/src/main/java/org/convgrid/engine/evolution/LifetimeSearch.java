@@ -9,7 +9,7 @@ import org.convgrid.engine.units.Constants;
 
 /**
  * Finds a star's main-sequence lifetime by evolving it to core-hydrogen exhaustion, and prepares the second run that
- * lands exactly on fractions of that lifetime ({@link org.convgrid.engine.request.Age.MainSequenceFraction}). Stateless and thread-safe.
+ * lands exactly on fractions of that lifetime (a request's main-sequence fraction age). Stateless and thread-safe.
  */
 public final class LifetimeSearch {
 

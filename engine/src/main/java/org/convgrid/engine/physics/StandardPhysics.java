@@ -1,6 +1,5 @@
 package org.convgrid.engine.physics;
 
-import java.nio.file.Path;
 import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.convection.MixingLengthTheory;
 import org.convgrid.engine.error.ConvgridException;

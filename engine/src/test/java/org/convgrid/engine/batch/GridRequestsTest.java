@@ -44,7 +44,8 @@ class GridRequestsTest {
         // L grows monotonically from the ZAMS); central hydrogen falls as it burns
         assertThat(out.get(1).solved().global().luminosity()).isGreaterThan(out.get(0).solved().global().luminosity());
         assertThat(out.get(2).solved().global().luminosity()).isGreaterThan(out.get(1).solved().global().luminosity());
-        assertThat(out.get(2).solved().global().centralHydrogen()).isLessThan(out.get(1).solved().global().centralHydrogen());
+        assertThat(out.get(2).solved().global().centralHydrogen())
+                .isLessThan(out.get(1).solved().global().centralHydrogen());
         // a 2 Msun star leaves the main sequence after ~1 Gyr (Schaller et al. 1992, A&A Suppl. 96, 269, Table 47:
         // H-burning lifetime 1.1 Gyr at Z = 0.02), so 3 Gyr is past it
         assertThat(out.get(4).status()).isEqualTo(ModelStatus.PAST_MAIN_SEQUENCE);

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 import static org.assertj.core.api.Assertions.withinPercentage;
 
+import org.convgrid.engine.request.Age;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
@@ -35,7 +36,7 @@ class SolarCalibrationTest {
         assertThat(g.radius() / Constants.R_SUN).isCloseTo(1.0, within(1e-4));
         assertThat(g.luminosity() / Constants.L_SUN).isCloseTo(1.0, within(1e-4));
         assertThat(sun.sun().status()).isEqualTo(ModelStatus.OK);
-        assertThat(sun.sun().request().age()).isEqualTo(4.57 * Constants.GYR);
+        assertThat(sun.sun().request().age()).isEqualTo(new Age.SinceZeroAge(4.57 * Constants.GYR));
     }
 
     @Test

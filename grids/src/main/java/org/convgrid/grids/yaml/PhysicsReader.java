@@ -11,6 +11,7 @@ import org.convgrid.engine.request.OpacityChoice;
 import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.physics.opacity.OpacityTableReader;
+import org.convgrid.grids.GridProblemKind;
 import org.convgrid.grids.PhysicsAxes;
 import org.snakeyaml.engine.v2.nodes.MappingNode;
 import org.snakeyaml.engine.v2.nodes.Node;
@@ -50,7 +51,8 @@ final class PhysicsReader {
         if (fields.has("preset")) {
             preset = PresetReader.read(fields.value("preset"), reader);
             if (fields.has("mixing_length")) {
-                reader.problem(fields.key("preset"), "give either preset or mixing_length, not both "
+                reader.problem(fields.key("preset"), GridProblemKind.CONFLICT,
+                        "give either preset or mixing_length, not both "
                         + "(a preset sets the mixing length)");
                 alphas = null;
             } else {
@@ -73,7 +75,8 @@ final class PhysicsReader {
         if (preset != null && preset.atmosphere() != null) {
             // a calibrated mixing length belongs to the atmosphere it was calibrated with
             if (fields.has("atmosphere") && atmosphere != null && atmosphere != preset.atmosphere()) {
-                reader.problem(fields.value("atmosphere"), "the preset's mixing length was calibrated with atmosphere "
+                reader.problem(fields.value("atmosphere"), GridProblemKind.CONFLICT,
+                        "the preset's mixing length was calibrated with atmosphere "
                         + preset.atmosphere().label() + ", this grid asks for " + atmosphere.label()
                         + ": drop 'atmosphere' or calibrate again with --atmosphere " + atmosphere.label());
                 atmosphere = null;
@@ -98,7 +101,8 @@ final class PhysicsReader {
         }
         OvershootScheme scheme = OvershootScheme.fromLabel(text);
         if (scheme == null) {
-            reader.problem(node, "overshoot_scheme must be step or exponential, got '" + text + "'");
+            reader.problem(node, GridProblemKind.UNKNOWN_CHOICE,
+                    "overshoot_scheme must be step or exponential, got '" + text + "'");
         }
         return scheme;
     }
@@ -111,7 +115,8 @@ final class PhysicsReader {
         }
         AtmosphereChoice choice = AtmosphereChoice.fromLabel(text);
         if (choice == null) {
-            reader.problem(node, "atmosphere must be eddington or krishna_swamy, got '" + text + "'");
+            reader.problem(node, GridProblemKind.UNKNOWN_CHOICE,
+                    "atmosphere must be eddington or krishna_swamy, got '" + text + "'");
         }
         return choice;
     }
@@ -130,7 +135,7 @@ final class PhysicsReader {
         try {
             return OpacityChoice.table(table.normalize().toString(), OpacityTableReader.read(table));
         } catch (ConvgridException e) {
-            reader.problem(node, "opacity_table: " + e.getMessage());
+            reader.problem(node, GridProblemKind.UNREADABLE_FILE, "opacity_table: " + e.getMessage());
             return null;
         }
     }
@@ -150,9 +155,11 @@ final class PhysicsReader {
                 default -> null;
             };
             if (text != null && criterion == null) {
-                reader.problem(item, "criterion must be schwarzschild or ledoux, got '" + text + "'");
+                reader.problem(item, GridProblemKind.UNKNOWN_CHOICE,
+                        "criterion must be schwarzschild or ledoux, got '" + text + "'");
             } else if (criterion != null && criteria.contains(criterion)) {
-                reader.problem(item, "duplicate criterion " + criterion.name().toLowerCase(Locale.ROOT));
+                reader.problem(item, GridProblemKind.DUPLICATE,
+                        "duplicate criterion " + criterion.name().toLowerCase(Locale.ROOT));
                 criterion = null;
             }
             ok &= criterion != null;
