@@ -1,6 +1,5 @@
 package org.convgrid.engine.physics;
 
-import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.convection.MixingLengthTheory;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
