@@ -1,7 +1,7 @@
 package org.convgrid.benchmarks;
 
 import java.util.concurrent.TimeUnit;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.evolution.EvolutionResult;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
 import org.convgrid.engine.physics.PhysicsSet;

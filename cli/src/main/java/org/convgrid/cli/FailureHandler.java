@@ -3,19 +3,17 @@ package org.convgrid.cli;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import org.convgrid.cli.run.IoMessages;
-import org.convgrid.cli.run.RunSetupException;
 import org.convgrid.engine.error.ConvgridException;
-import org.convgrid.grids.GridFileException;
-import org.convgrid.grids.GridProblem;
-import org.convgrid.output.OutputFormatException;
+import org.convgrid.engine.error.ErrorKind;
 import picocli.CommandLine;
 import picocli.CommandLine.IExecutionExceptionHandler;
 import picocli.CommandLine.ParseResult;
 
 /**
- * Failures during a command: a clean message, a stack trace only with --verbose. Grid-file problems are printed one
- * per line as {@code file:line:column: message} (exit 2); usage and run-directory conflicts exit 2; I/O failures,
- * unreadable run files and engine errors exit 1.
+ * Failures during a command: a clean message, a stack trace only with --verbose. Every failure of ours is a
+ * {@link ConvgridException} whose kind decides: grid-file problems are printed one per line as
+ * {@code file:line:column: message}, and they, bad usage and run-directory conflicts exit 2; engine errors and
+ * unreadable run files exit 1. I/O failures exit 1 with the reason.
  */
 final class FailureHandler implements IExecutionExceptionHandler {
 
@@ -24,22 +22,14 @@ final class FailureHandler implements IExecutionExceptionHandler {
         boolean verbose = parseResult.hasMatchedOption("--verbose")
                 || (parseResult.subcommand() != null && parseResult.subcommand().hasMatchedOption("--verbose"));
         int code;
-        if (ex instanceof GridFileException grid) {
-            for (GridProblem problem : grid.problems()) {
-                cmd.getErr().println(problem);
-            }
-            code = ExitCodes.USAGE;
-        } else if (ex instanceof UsageException || ex instanceof RunSetupException) {
-            cmd.getErr().println("convgrid: " + ex.getMessage());
-            code = ExitCodes.USAGE;
-        } else if (ex instanceof ConvgridException || ex instanceof OutputFormatException) {
-            cmd.getErr().println("convgrid: " + ex.getMessage());
-            code = ExitCodes.FAILURE;
-        } else if (ex instanceof IOException io) {
-            cmd.getErr().println("convgrid: " + IoMessages.reason(io));
-            code = ExitCodes.FAILURE;
-        } else if (ex instanceof UncheckedIOException io) {
-            cmd.getErr().println("convgrid: " + IoMessages.reason(io.getCause()));
+        if (ex instanceof ConvgridException failure) {
+            // a grid file's message is already one "file:line:column: message" line per problem
+            cmd.getErr().println(failure.kind() == ErrorKind.BAD_GRID_FILE ? failure.getMessage()
+                    : "convgrid: " + failure.getMessage());
+            code = failure.kind().isUsageError() ? ExitCodes.USAGE : ExitCodes.FAILURE;
+        } else if (ex instanceof IOException || ex instanceof UncheckedIOException) {
+            cmd.getErr().println("convgrid: " + IoMessages.reason(ex instanceof IOException io ? io
+                    : ((UncheckedIOException) ex).getCause()));
             code = ExitCodes.FAILURE;
         } else {
             cmd.getErr().println("convgrid: internal error: " + ex);

@@ -9,7 +9,7 @@ import org.convgrid.cli.run.FinishedRun;
 import org.convgrid.cli.run.RunDirectory;
 import org.convgrid.cli.run.RunFinishing;
 import org.convgrid.cli.run.ShardMerger;
-import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.request.ModelStatus;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;

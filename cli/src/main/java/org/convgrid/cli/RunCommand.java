@@ -14,7 +14,7 @@ import org.convgrid.cli.run.RunFinishing;
 import org.convgrid.cli.run.ShardChoice;
 import org.convgrid.cli.run.TrackFiles;
 import org.convgrid.engine.batch.ChunkSolver;
-import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.batch.ProgressListener;
 import org.convgrid.engine.batch.Shard;
 import org.convgrid.grids.GridFile;

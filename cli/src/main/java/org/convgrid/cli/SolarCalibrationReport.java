@@ -65,7 +65,7 @@ final class SolarCalibrationReport {
 
     /** A readable summary. */
     static void writeTable(CalibratedSun sun, boolean settling, Appendable out) throws IOException {
-        var g = sun.sun().global();
+        var g = sun.sun().solved().global();
         out.append(String.format(Locale.ROOT, """
                 Calibrated Sun (1 Msun, %.4g Gyr, present surface Z/X = %.4g, %s)
                   mixing length alpha       %.5f pressure scale heights

@@ -4,16 +4,18 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelRequest;
-import org.convgrid.engine.batch.ModelStatus;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.physics.opacity.OpacityTableReader;
+import org.convgrid.engine.request.OpacityChoice;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.units.Constants;
-import org.convgrid.engine.evolution.GridRequests;
+import org.convgrid.engine.batch.GridRequests;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
 import org.convgrid.engine.evolution.TrackSink;
 import org.convgrid.engine.zams.ZeroAgeRequests;
@@ -147,7 +149,11 @@ final class StarCommand implements Callable<Integer> {
         if (!(opacityFactor > 0 && opacityFactor <= 100)) {
             throw new UsageException("--opacity-factor must lie in (0, 100], got " + opacityFactor);
         }
-        String table = opacityTable == null ? "" : main.context().resolve(opacityTable).toString();
+        OpacityChoice table = OpacityChoice.BUILT_IN;
+        if (opacityTable != null) {
+            Path resolved = main.context().resolve(opacityTable);
+            table = OpacityChoice.table(resolved.toString(), OpacityTableReader.read(resolved));
+        }
         return new PhysicsOptions(mixingLength, 0.0, criterion, opacityFactor, table, atmosphere);
     }
 }

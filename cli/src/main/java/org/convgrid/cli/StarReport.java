@@ -3,9 +3,9 @@ package org.convgrid.cli;
 import java.io.PrintWriter;
 import java.util.List;
 import java.util.Locale;
-import org.convgrid.engine.batch.GlobalProperties;
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.request.Age;
+import org.convgrid.engine.request.GlobalProperties;
+import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.state.Composition;
@@ -20,19 +20,20 @@ final class StarReport {
 
     static void write(ModelOutcome outcome, Composition composition, PrintWriter out) {
         var r = outcome.request();
-        String title = r.age() > 0.0 ? "Model at " + CsvNumbers.format(r.age() / Constants.GYR) + " Gyr"
+        String title = r.age() instanceof Age.SinceZeroAge since && since.seconds() > 0.0
+                ? "Model at " + CsvNumbers.format(since.seconds() / Constants.GYR) + " Gyr"
                 : "Zero-age model";
         out.printf(Locale.ROOT, "%s: %.4f Msun, X = %.4f, Y = %.4f, Z = %.5f (initial)%n", title,
                 r.mass() / Constants.M_SUN, composition.x(), composition.y(), composition.z());
         out.printf(Locale.ROOT, "Physics: mixing length %.3f Hp, %s, opacity x %.3g%s%n", r.physics().mixingLength(),
                 r.physics().criterion().name().toLowerCase(Locale.ROOT), r.physics().opacityFactor(),
                 r.physics().usesOpacityTable() ? " (table " + r.physics().opacityTable() + ")" : "");
-        if (outcome.status() != ModelStatus.OK) {
+        if (!(outcome instanceof ModelOutcome.Solved solved)) {
             out.printf(Locale.ROOT, "Status: %s (%s)%n", outcome.status().label(), outcome.statusDetail());
             return;
         }
-        GlobalProperties g = outcome.global();
-        ConvectiveStructure c = outcome.convection();
+        GlobalProperties g = solved.global();
+        ConvectiveStructure c = solved.convection();
         out.println();
         line(out, "luminosity", g.luminosity() / Constants.L_SUN, "Lsun");
         line(out, "radius", g.radius() / Constants.R_SUN, "Rsun");

@@ -7,7 +7,7 @@ import org.convgrid.cli.run.RunDirectory;
 import org.convgrid.cli.run.RunFinishing;
 import org.convgrid.cli.run.TransitionRefiner;
 import org.convgrid.cli.run.TransitionTables;
-import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.output.transitions.TransitionRow;

@@ -9,11 +9,10 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import org.convgrid.engine.batch.GlobalProperties;
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelRequest;
-import org.convgrid.engine.batch.ModelStatus;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.GlobalProperties;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.calibration.CalibratedSun;
 import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.convection.ConvectiveZone;
@@ -115,7 +114,7 @@ class CalibrateSunCommandTest {
         var global = new GlobalProperties(Constants.L_SUN, Constants.R_SUN, 5772.0, 27420.0, 1.55e7, 150.0, 0.35);
         var convection = new ConvectiveStructure(List.of(new ConvectiveZone(0.98, 1.0, 0.72, 1.0)),
                 StructureClass.CONV_ENVELOPE, 0.0, 0.98, 0.72, 0.02 * Constants.M_SUN, 2.0e6, 3.0e6);
-        var outcome = new ModelOutcome(request, ModelStatus.OK, "", global, convection, 1234);
+        var outcome = new ModelOutcome.Solved(request, global, convection, 1234);
         return new CalibratedSun(1.9, 0.27, 0.0165, 0.0231, 4.57 * Constants.GYR, outcome, 1e-6, -2e-6,
                 0.7 * Constants.L_SUN, 10.5 * Constants.GYR, 0.72, 1.55e7, 150.0, 9, 5, 0.0255, 0.245, 0.0231);
     }

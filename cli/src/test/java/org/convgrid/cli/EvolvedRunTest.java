@@ -9,7 +9,7 @@ import java.util.Map;
 import java.util.stream.Stream;
 import org.convgrid.cli.run.ChunkSolverFactory;
 import org.convgrid.engine.batch.ChunkSolver;
-import org.convgrid.engine.evolution.GridRequests;
+import org.convgrid.engine.batch.GridRequests;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
 import org.convgrid.engine.evolution.TrackSink;
 import org.convgrid.grids.GridSpec;

@@ -3,11 +3,12 @@ package org.convgrid.cli;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
+import org.convgrid.engine.request.Age;
 import org.convgrid.engine.batch.ChunkSolver;
-import org.convgrid.engine.batch.GlobalProperties;
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelRequest;
-import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.request.GlobalProperties;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.convection.StructureClass;
@@ -42,10 +43,10 @@ final class FakeChunkSolver implements ChunkSolver {
             ModelRequest r = chunk.get(i);
             int iterations = 4 + i + (int) (10 * seed);
             if (failing.contains(r.modelId())) {
-                outcomes.add(new ModelOutcome(r, ModelStatus.FAILED, "fake solver gave up\nat shell 12", null, null,
+                outcomes.add(new ModelOutcome.Failed(r, ModelStatus.FAILED, "fake solver gave up\nat shell 12",
                         iterations));
             } else {
-                outcomes.add(new ModelOutcome(r, ModelStatus.OK, "", global(r, seed), convection(r), iterations));
+                outcomes.add(new ModelOutcome.Solved(r, global(r, seed), convection(r), iterations));
             }
         }
         return outcomes;
@@ -53,7 +54,7 @@ final class FakeChunkSolver implements ChunkSolver {
 
     private static GlobalProperties global(ModelRequest r, double seed) {
         double m = r.mass() / Constants.M_SUN;
-        double ageGyr = r.age() / Constants.GYR;
+        double ageGyr = ((Age.SinceZeroAge) r.age()).seconds() / Constants.GYR;
         double l = Math.pow(m, 4) * (1 + 1e-3 * seed) * (1 + 0.1 * ageGyr);
         double radius = Math.pow(m, 0.8) * (1 + 0.05 * ageGyr + r.initialMetals());
         double teff = Constants.TEFF_SUN * Math.pow(l / (radius * radius), 0.25);

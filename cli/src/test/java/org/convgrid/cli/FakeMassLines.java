@@ -3,9 +3,9 @@ package org.convgrid.cli;
 import java.util.List;
 import java.util.Set;
 import java.util.concurrent.atomic.AtomicInteger;
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelStatus;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.refine.MassLine;
 import org.convgrid.engine.refine.MassLineFactory;
 import org.convgrid.engine.units.Constants;
@@ -31,7 +31,7 @@ final class FakeMassLines implements MassLineFactory {
             solved.incrementAndGet();
             double msun = request.mass() / Constants.M_SUN;
             if (failingMsun.stream().anyMatch(m -> Math.abs(m - msun) < 1e-9)) {
-                return new ModelOutcome(request, ModelStatus.NOT_CONVERGED, "fake line gave up", null, null, 30);
+                return new ModelOutcome.Failed(request, ModelStatus.NOT_CONVERGED, "fake line gave up", 30);
             }
             return solver.solve(List.of(request)).get(0);
         };

@@ -1,11 +1,11 @@
 package org.convgrid.cli;
 
 import java.util.List;
+import org.convgrid.engine.request.GlobalProperties;
 import org.convgrid.engine.batch.ChunkSolver;
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelRequest;
-import org.convgrid.engine.batch.ModelStatus;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.convection.StructureClass;
@@ -59,7 +59,10 @@ final class FlickeringFake implements ChunkSolver, MassLineFactory {
                 : core > 0 ? StructureClass.CONV_CORE_AND_ENVELOPE : StructureClass.CONV_ENVELOPE;
         List<ConvectiveZone> zones = fc ? List.of(new ConvectiveZone(0, 1, 0, 1))
                 : List.of(new ConvectiveZone(0.7, 1, 0.8, 1));
-        return new ModelOutcome(r, ModelStatus.OK, "", null,
+        // only the zones matter to the refinement; the surface and centre are placeholders
+        GlobalProperties g = new GlobalProperties(Constants.L_SUN * m, Constants.R_SUN * m, 5000.0, 1.0e4, 1.5e7,
+                100.0, 0.7);
+        return new ModelOutcome.Solved(r, g,
                 new ConvectiveStructure(zones, c, core, fc ? 0 : 0.7, fc ? 0 : 0.8, 0.3 * r.mass(), 1, 1), 3);
     }
 }

@@ -6,7 +6,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
-import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.manifest.RunManifest;
 import org.convgrid.output.manifest.RunManifestReader;

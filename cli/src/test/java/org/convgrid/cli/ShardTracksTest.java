@@ -9,8 +9,8 @@ import java.util.Map;
 import java.util.stream.Stream;
 import org.convgrid.cli.run.ChunkSolverFactory;
 import org.convgrid.engine.batch.ChunkSolver;
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.evolution.EvolutionStep;
 import org.convgrid.engine.evolution.TrackSink;
 import org.convgrid.engine.units.Constants;
@@ -36,7 +36,7 @@ class ShardTracksTest {
             return chunk -> {
                 List<ModelOutcome> out = FakeChunkSolver.fast().solve(chunk);
                 for (ModelRequest r : chunk) {
-                    if (r.age() == 0.0) {
+                    if (r.age().isZeroAge()) {
                         double m = r.mass() / Constants.M_SUN;
                         tracks.accept(r, List.of(new EvolutionStep(0.0, 0.0, m * Constants.L_SUN,
                                 m * Constants.R_SUN, 5000.0 + m, 1.5e7, 100.0, 0.7, List.of(), 0.0, 0.1, 3)));

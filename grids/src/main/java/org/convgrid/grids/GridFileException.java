@@ -2,9 +2,14 @@ package org.convgrid.grids;
 
 import java.util.List;
 import java.util.stream.Collectors;
+import org.convgrid.engine.error.ConvgridException;
+import org.convgrid.engine.error.ErrorKind;
 
-/** A grid file that cannot be used; carries every problem found in it, in file order. */
-public final class GridFileException extends RuntimeException {
+/**
+ * A grid file that cannot be used ({@link ErrorKind#BAD_GRID_FILE}); carries every problem found in it, in file
+ * order, and its message is one {@code file:line:column: message} line per problem.
+ */
+public final class GridFileException extends ConvgridException {
 
     private static final long serialVersionUID = 1L;
 
@@ -12,7 +17,7 @@ public final class GridFileException extends RuntimeException {
 
     /** @param problems at least one problem */
     public GridFileException(List<GridProblem> problems) {
-        super(describe(problems));
+        super(ErrorKind.BAD_GRID_FILE, describe(problems));
         if (problems.isEmpty()) {
             throw new IllegalArgumentException("a grid file exception needs at least one problem");
         }

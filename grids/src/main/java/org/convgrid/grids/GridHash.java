@@ -8,7 +8,7 @@ import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.HexFormat;
-import org.convgrid.engine.physics.OvershootScheme;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 
 /**

@@ -5,8 +5,8 @@ import java.util.Iterator;
 import java.util.List;
 import java.util.NoSuchElementException;
 import java.util.Objects;
-import org.convgrid.engine.batch.ModelRequest;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.units.Constants;
 
 /**
@@ -22,8 +22,7 @@ import org.convgrid.engine.units.Constants;
  * @param massesMsun total masses, solar masses, strictly increasing
  * @param metallicities initial compositions, strictly increasing in Z
  * @param ages the age axis, strictly increasing: Gyr since the ZAMS, or fractions of each star's main-sequence
- *             lifetime (then every request's age field holds the bare fraction, to be read by a solver built with
- *             {@link AgeAxis#meaning()}; see {@code org.convgrid.engine.evolution.AgeMeaning})
+ *             lifetime (then every request asks for an {@link org.convgrid.engine.request.Age.MainSequenceFraction})
  * @param physics the physics axes
  * @param outputDir the run directory as written in the file (relative paths are the caller's to resolve)
  * @param profiles whether one profile file per model is wanted
@@ -40,7 +39,7 @@ public record GridSpec(String title, List<Double> massesMsun, List<MetallicityPo
         massesMsun = increasing(massesMsun, "mass");
         metallicities = List.copyOf(metallicities);
         Objects.requireNonNull(ages, "ages");
-        ages = new AgeAxis(ages.meaning(), increasing(ages.values(), "age"));
+        ages = new AgeAxis(ages.fractions(), increasing(ages.values(), "age"));
         Objects.requireNonNull(physics, "physics");
         if (metallicities.isEmpty()) {
             throw new IllegalArgumentException("metallicity axis is empty");

@@ -1,6 +1,6 @@
 package org.convgrid.grids;
 
-import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.request.ModelRequest;
 
 /** A guess of how long one model takes, for run-time estimates (for example from a previous run's median). */
 @FunctionalInterface

@@ -2,10 +2,11 @@ package org.convgrid.grids;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.convgrid.engine.batch.PhysicsOptions;
 import org.convgrid.engine.convection.StabilityCriterion;
-import org.convgrid.engine.physics.OvershootScheme;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
+import org.convgrid.engine.request.OpacityChoice;
+import org.convgrid.engine.request.OvershootScheme;
+import org.convgrid.engine.request.PhysicsOptions;
 
 /**
  * The physics options a grid varies; each is a list of one or more values. Their product is the physics axis of the
@@ -16,30 +17,31 @@ import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
  *                   the exponential one
  * @param criteria stability criteria
  * @param opacityFactors opacity multipliers, each &gt; 0
- * @param opacityTable path of a user opacity table (resolved against the grid file's folder); empty for none
+ * @param opacity the built-in opacity or a user table (read once, its path resolved against the grid file's
+ *                folder)
  * @param atmosphere the grey T(tau) relation of the surface boundary (one value for the whole grid)
  * @param overshootScheme step or exponential overshoot (one value for the whole grid)
  */
 public record PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, List<StabilityCriterion> criteria,
-                          List<Double> opacityFactors, String opacityTable, AtmosphereChoice atmosphere,
+                          List<Double> opacityFactors, OpacityChoice opacity, AtmosphereChoice atmosphere,
                           OvershootScheme overshootScheme) {
 
     /** Axes with step overshoot. */
     public PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, List<StabilityCriterion> criteria,
-                       List<Double> opacityFactors, String opacityTable, AtmosphereChoice atmosphere) {
-        this(mixingLengths, overshoots, criteria, opacityFactors, opacityTable, atmosphere, OvershootScheme.STEP);
+                       List<Double> opacityFactors, OpacityChoice opacity, AtmosphereChoice atmosphere) {
+        this(mixingLengths, overshoots, criteria, opacityFactors, opacity, atmosphere, OvershootScheme.STEP);
     }
 
     /** Axes with the default atmosphere. */
     public PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, List<StabilityCriterion> criteria,
-                       List<Double> opacityFactors, String opacityTable) {
-        this(mixingLengths, overshoots, criteria, opacityFactors, opacityTable, AtmosphereChoice.DEFAULT);
+                       List<Double> opacityFactors, OpacityChoice opacity) {
+        this(mixingLengths, overshoots, criteria, opacityFactors, opacity, AtmosphereChoice.DEFAULT);
     }
 
     /** Axes with the built-in opacity. */
     public PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, List<StabilityCriterion> criteria,
                        List<Double> opacityFactors) {
-        this(mixingLengths, overshoots, criteria, opacityFactors, "");
+        this(mixingLengths, overshoots, criteria, opacityFactors, OpacityChoice.BUILT_IN);
     }
 
     /** One value per axis: the engine defaults. */
@@ -55,6 +57,14 @@ public record PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, L
         if (overshootScheme == null) {
             throw new IllegalArgumentException("overshoot_scheme must not be null");
         }
+        if (opacity == null) {
+            throw new IllegalArgumentException("opacity must not be null");
+        }
+    }
+
+    /** The path of the user opacity table; empty for the built-in opacity. */
+    public String opacityTable() {
+        return opacity.source();
     }
 
     /** Number of physics combinations. */
@@ -69,7 +79,7 @@ public record PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, L
             for (double overshoot : overshoots) {
                 for (StabilityCriterion criterion : criteria) {
                     for (double factor : opacityFactors) {
-                        all.add(new PhysicsOptions(alpha, overshoot, criterion, factor, opacityTable, atmosphere,
+                        all.add(new PhysicsOptions(alpha, overshoot, criterion, factor, opacity, atmosphere,
                                 overshootScheme));
                     }
                 }

@@ -6,7 +6,8 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.IntStream;
-import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.request.Age;
+import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.units.Constants;
 import org.junit.jupiter.api.Test;
@@ -41,7 +42,7 @@ class GridSpecTest {
     void requestsAreInCgs() {
         ModelRequest r = small().expand().get(3); // p0 z00 m001 a01
         assertThat(r.mass()).isEqualTo(1.0 * Constants.M_SUN);
-        assertThat(r.age()).isEqualTo(1.0 * Constants.GYR);
+        assertThat(r.age()).isEqualTo(new Age.SinceZeroAge(1.0 * Constants.GYR));
         assertThat(r.initialMetals()).isEqualTo(0.01);
         assertThat(r.initialHelium()).isEqualTo(0.26);
     }

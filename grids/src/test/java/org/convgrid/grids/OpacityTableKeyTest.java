@@ -50,7 +50,7 @@ class OpacityTableKeyTest {
                 .isInstanceOfSatisfying(GridFileException.class, e -> {
                     assertThat(e.problems()).singleElement().satisfies(p -> {
                         assertThat(p.line()).isEqualTo(4);
-                        assertThat(p.message()).contains("opacity_table");
+                        assertThat(p.kind()).isEqualTo(GridProblemKind.UNREADABLE_FILE);
                     });
                 });
     }

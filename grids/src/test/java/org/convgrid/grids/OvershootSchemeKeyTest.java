@@ -3,7 +3,7 @@ package org.convgrid.grids;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
-import org.convgrid.engine.physics.OvershootScheme;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.grids.yaml.GridFileReader;
 import org.junit.jupiter.api.Test;
 
@@ -50,7 +50,7 @@ class OvershootSchemeKeyTest {
                         .satisfies(p -> {
                             assertThat(p.line()).isEqualTo(5);
                             assertThat(p.column()).isEqualTo(21);
-                            assertThat(p.message()).contains("step or exponential");
+                            assertThat(p.kind()).isEqualTo(GridProblemKind.UNKNOWN_CHOICE);
                         }));
     }
 
@@ -60,7 +60,7 @@ class OvershootSchemeKeyTest {
                 .isInstanceOfSatisfying(GridFileException.class, e -> assertThat(e.problems()).singleElement()
                         .satisfies(p -> {
                             assertThat(p.line()).isEqualTo(5);
-                            assertThat(p.message()).contains("overshoot_scheme");
+                            assertThat(p.kind()).isEqualTo(GridProblemKind.WRONG_TYPE);
                         }));
     }
 }

@@ -1,15 +1,21 @@
 package org.convgrid.output;
 
-/** A run-directory file whose content cannot be read back; the message names the file part, row and column. */
-public final class OutputFormatException extends RuntimeException {
+import org.convgrid.engine.error.ConvgridException;
+import org.convgrid.engine.error.ErrorKind;
+
+/**
+ * A run-directory file whose content cannot be read back ({@link ErrorKind#BAD_DATA}); the message names the file
+ * part, row and column.
+ */
+public final class OutputFormatException extends ConvgridException {
 
     private static final long serialVersionUID = 1L;
 
     public OutputFormatException(String message) {
-        super(message);
+        super(ErrorKind.BAD_DATA, message);
     }
 
     public OutputFormatException(String message, Throwable cause) {
-        super(message, cause);
+        super(ErrorKind.BAD_DATA, message, cause);
     }
 }

@@ -7,7 +7,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
-import org.convgrid.engine.batch.ModelOutcome;
+import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.batch.OutcomeSink;
 import org.convgrid.output.catalogue.CatalogueWriter;
 import org.convgrid.output.catalogue.OutcomeRows;
@@ -36,8 +36,8 @@ final class CatalogueAppender implements OutcomeSink, Closeable {
 
     @Override
     public void accept(ModelOutcome o) throws IOException {
-        ModelOutcome oneLine = new ModelOutcome(o.request(), o.status(), oneLine(o.statusDetail()), o.global(),
-                o.convection(), o.solverIterations());
+        ModelOutcome oneLine = o instanceof ModelOutcome.Failed f
+                ? new ModelOutcome.Failed(f.request(), f.status(), oneLine(f.statusDetail()), f.solverIterations()) : o;
         writer.write(OutcomeRows.toRow(oneLine));
         writer.flush();
     }

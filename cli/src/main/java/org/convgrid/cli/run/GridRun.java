@@ -10,7 +10,7 @@ import java.util.Set;
 import org.convgrid.engine.batch.ChunkSolver;
 import org.convgrid.engine.batch.Chunking;
 import org.convgrid.engine.batch.ModelScheduler;
-import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.batch.ProgressListener;
 import org.convgrid.engine.batch.Shard;
 import org.convgrid.grids.GridFile;

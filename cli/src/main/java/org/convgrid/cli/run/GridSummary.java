@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.stream.Collectors;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.grids.GridFile;
 import org.convgrid.grids.GridSpec;
 import org.convgrid.grids.ModelCost;

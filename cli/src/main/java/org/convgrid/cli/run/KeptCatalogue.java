@@ -10,7 +10,7 @@ import java.util.HashSet;
 import java.util.Iterator;
 import java.util.List;
 import java.util.Set;
-import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.RefinedModelIds;

@@ -4,7 +4,7 @@ import java.io.IOException;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
-import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.grids.GridSpec;
 import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.catalogue.CatalogueRow;

@@ -5,7 +5,7 @@ import java.util.Iterator;
 import java.util.List;
 import java.util.NoSuchElementException;
 import org.convgrid.engine.batch.Chunking;
-import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.batch.Shard;
 import org.convgrid.grids.GridSpec;
 

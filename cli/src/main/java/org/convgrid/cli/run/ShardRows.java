@@ -11,7 +11,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.grids.GridSpec;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;

@@ -4,8 +4,8 @@ import java.util.List;
 import java.util.concurrent.ConcurrentLinkedQueue;
 import java.util.stream.DoubleStream;
 import org.convgrid.engine.batch.ChunkSolver;
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.output.manifest.RunManifest;
 
 /**

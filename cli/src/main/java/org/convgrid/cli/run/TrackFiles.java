@@ -4,7 +4,7 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.atomic.AtomicReference;
-import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.evolution.EvolutionStep;
 import org.convgrid.engine.evolution.TrackSink;
 import org.convgrid.grids.ModelIdFormat;

@@ -9,9 +9,9 @@ import java.util.Map;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ForkJoinPool;
 import java.util.function.Predicate;
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelRequest;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.refine.MassBisection;
 import org.convgrid.engine.refine.MassLine;
 import org.convgrid.engine.refine.MassLineFactory;
@@ -211,7 +211,7 @@ public final class TransitionRefiner {
         MassLine line = skippingKnownFailures(lines.open(first.physics(), p.z(), p.y()), first.failed());
         List<Refinement> done = new ArrayList<>(task.size());
         for (Search s : task) {
-            Predicate<ModelOutcome> lowSide = o -> inState(s.kind(), OutcomeRows.toRow(o)) == s.lowState();
+            Predicate<ModelOutcome.Solved> lowSide = o -> inState(s.kind(), OutcomeRows.toRow(o)) == s.lowState();
             done.add(bisection.refine(line, mass -> new ModelRequest("pending", mass, p.z(), p.y(), 0.0,
                     s.physics()), s.bracket().lo() * Constants.M_SUN, s.bracket().hi() * Constants.M_SUN, lowSide));
         }
@@ -226,7 +226,7 @@ public final class TransitionRefiner {
         return request -> {
             CatalogueRow known = failed.get(request.mass());
             return known == null ? line.solve(request)
-                    : new ModelOutcome(request, known.status(), known.statusDetail(), null, null, 0);
+                    : new ModelOutcome.Failed(request, known.status(), known.statusDetail(), 0);
         };
     }
 
@@ -250,10 +250,7 @@ public final class TransitionRefiner {
                 if (rows.stream().anyMatch(row -> row.massMsun() * Constants.M_SUN == r.mass())) {
                     continue;
                 }
-                ModelRequest named = new ModelRequest(RefinedModelIds.of(gridId, next++), r.mass(),
-                        r.initialMetals(), r.initialHelium(), r.age(), r.physics());
-                all.add(new ModelOutcome(named, o.status(), o.statusDetail(), o.global(), o.convection(),
-                        o.solverIterations()));
+                all.add(o.withRequest(r.withModelId(RefinedModelIds.of(gridId, next++))));
             }
         });
         return all;

@@ -6,7 +6,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
-import org.convgrid.engine.batch.ModelOutcome;
+import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.grids.GridSpec;
 import org.convgrid.grids.yaml.GridFileReader;
 import org.convgrid.output.AtomicFiles;

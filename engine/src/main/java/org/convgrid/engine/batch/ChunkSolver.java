@@ -1,5 +1,7 @@
 package org.convgrid.engine.batch;
 
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
 import java.util.List;
 
 /**

@@ -1,5 +1,6 @@
 package org.convgrid.engine.batch;
 
+import org.convgrid.engine.request.ModelRequest;
 import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;

@@ -13,6 +13,9 @@ import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ForkJoinPool;
 import java.util.function.Predicate;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.ModelStatus;
 
 /**
  * Sweeps a grid on a ForkJoin pool and hands the outcomes to a sink in grid order, as soon as the prefix is
@@ -98,7 +101,7 @@ public final class ModelScheduler {
             List<ModelOutcome> failed = new ArrayList<>(chunk.size());
             String reason = e.getClass().getSimpleName() + ": " + e.getMessage();
             for (ModelRequest r : chunk) {
-                failed.add(new ModelOutcome(r, ModelStatus.FAILED, reason, null, null, 0));
+                failed.add(new ModelOutcome.Failed(r, ModelStatus.FAILED, reason, 0));
             }
             return failed;
         }

@@ -1,5 +1,6 @@
 package org.convgrid.engine.batch;
 
+import org.convgrid.engine.request.ModelOutcome;
 import java.io.IOException;
 
 /** Receives outcomes in grid order, one at a time (for instance a catalogue writer that flushes each row). */

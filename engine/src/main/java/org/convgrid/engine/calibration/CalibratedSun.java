@@ -1,6 +1,6 @@
 package org.convgrid.engine.calibration;
 
-import org.convgrid.engine.batch.ModelOutcome;
+import org.convgrid.engine.request.ModelOutcome;
 
 /**
  * The result of a solar calibration, cgs units.

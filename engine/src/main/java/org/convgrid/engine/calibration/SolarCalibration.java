@@ -2,9 +2,8 @@ package org.convgrid.engine.calibration;
 
 import java.util.function.Consumer;
 
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelRequest;
-import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
 import org.convgrid.engine.state.Composition;
@@ -145,8 +144,7 @@ public final class SolarCalibration {
         ModelRequest request = new ModelRequest(CalibratedSun.MODEL_ID, Constants.M_SUN, t.metals(), t.helium(),
                 settings.age(), SolarTrack.options(t.mixingLength(), settings));
         var m = t.model();
-        ModelOutcome outcome = new ModelOutcome(request, ModelStatus.OK, "", m.global(), m.convection(),
-                t.iterationsToAge());
+        ModelOutcome outcome = new ModelOutcome.Solved(request, m.global(), m.convection(), t.iterationsToAge());
         Composition envelope = EnvelopeComposition.of(m);
         return new CalibratedSun(t.mixingLength(), t.helium(), t.metals(), target,
                 settings.age(), outcome, t.radiusResidual(), t.luminosityResidual(), t.zeroAgeLuminosity(),

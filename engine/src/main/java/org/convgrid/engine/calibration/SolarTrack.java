@@ -1,7 +1,8 @@
 package org.convgrid.engine.calibration;
 
-import org.convgrid.engine.batch.ModelStatus;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.OpacityChoice;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
@@ -33,7 +34,8 @@ final class SolarTrack {
 
     /** The physics options of a trial with mixing length {@code alpha} and the settings' atmosphere. */
     static PhysicsOptions options(double alpha, CalibrationSettings settings) {
-        return new PhysicsOptions(alpha, 0.0, StabilityCriterion.SCHWARZSCHILD, 1.0, "", settings.atmosphere());
+        return new PhysicsOptions(alpha, 0.0, StabilityCriterion.SCHWARZSCHILD, 1.0, OpacityChoice.BUILT_IN,
+                settings.atmosphere());
     }
 
     /**

@@ -8,4 +8,10 @@ public interface ConvectiveTransport {
      * @return the actual gradient, the element gradient and the convective velocity
      */
     ConvectiveGradient gradient(LocalConvectionState state);
+
+    /**
+     * The mixing length in pressure scale heights, alpha = l_m / H_P: what sets the turnover time of a zone and the
+     * diffusion coefficient D_0 = v_c l_m/3 of diffusive overshoot.
+     */
+    double alpha();
 }

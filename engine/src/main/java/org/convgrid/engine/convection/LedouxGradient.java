@@ -19,14 +19,17 @@ public final class LedouxGradient {
      * @param phi (dln rho/dln mu) at fixed P and T, positive
      * @param delta -(dln rho/dln T) at fixed P and mu, positive
      * @param nablaMu dln mu/dln P (positive where mu increases inwards)
-     * @return nabla_L
+     * @return nabla_L (nabla_ad where nabla_mu = 0, whatever delta)
      */
     public static double ledoux(double nablaAd, double phi, double delta, double nablaMu) {
+        if (nablaMu == 0.0) {
+            return nablaAd;
+        }
         if (!(delta > 0.0)) {
             throw new ConvgridException(ErrorKind.OUT_OF_RANGE, "delta must be > 0 for the Ledoux gradient, got "
                     + delta, "delta", delta, 0.0, Double.POSITIVE_INFINITY);
         }
-        return nablaAd + phi / delta * nablaMu;
+        return nablaAd + phi * nablaMu / delta;
     }
 
     /**

@@ -16,6 +16,13 @@ public class ConvgridException extends RuntimeException {
         this.parameters = List.of(parameters);
     }
 
+    /** As {@link #ConvgridException(ErrorKind, String, Object...)}, with the failure that caused it. */
+    public ConvgridException(ErrorKind kind, String message, Throwable cause) {
+        super(message, cause);
+        this.kind = kind;
+        this.parameters = List.of();
+    }
+
     public ErrorKind kind() {
         return kind;
     }

@@ -1,6 +1,6 @@
 package org.convgrid.engine.evolution;
 
-import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.structure.StellarModel;
 
 /**

@@ -9,9 +9,9 @@ import org.convgrid.engine.units.Constants;
 
 /**
  * Finds a star's main-sequence lifetime by evolving it to core-hydrogen exhaustion, and prepares the second run that
- * lands exactly on fractions of that lifetime ({@link AgeMeaning#MS_FRACTION}). Stateless and thread-safe.
+ * lands exactly on fractions of that lifetime (a request's main-sequence fraction age). Stateless and thread-safe.
  */
-final class LifetimeSearch {
+public final class LifetimeSearch {
 
     /**
      * The landing run stops at this fraction of the usual end X_c instead: its own steps differ from the first
@@ -23,8 +23,8 @@ final class LifetimeSearch {
      * @param age the exhaustion age, s (interpolated in ln X_c between the two steps around it); NaN when not found
      * @param reason why it was not found, empty when it was
      */
-    record Lifetime(double age, String reason) {
-        boolean found() {
+    public record Lifetime(double age, String reason) {
+        public boolean found() {
             return Double.isFinite(age);
         }
     }
@@ -33,7 +33,7 @@ final class LifetimeSearch {
     }
 
     /** Evolves {@code zeroAge} with {@code settings} (no requested ages) until exhaustion or the age limit. */
-    static Lifetime find(PhysicsSet set, StellarModel zeroAge, MainSequenceEvolver.Settings settings) {
+    public static Lifetime find(PhysicsSet set, StellarModel zeroAge, MainSequenceEvolver.Settings settings) {
         EvolutionResult r;
         try {
             r = new MainSequenceEvolver(set, settings).evolve(zeroAge, new double[0]);
@@ -51,7 +51,7 @@ final class LifetimeSearch {
     }
 
     /** The settings of the landing run: the end X_c lowered by {@link #LANDING_END_FACTOR}, the rest unchanged. */
-    static MainSequenceEvolver.Settings landing(MainSequenceEvolver.Settings s) {
+    public static MainSequenceEvolver.Settings landing(MainSequenceEvolver.Settings s) {
         return new MainSequenceEvolver.Settings(s.maxCentralHydrogenChange(), s.exhaustionFraction(),
                 s.maxLuminosityChange(), s.maxGrowth(), LANDING_END_FACTOR * s.endCentralHydrogen(), s.maxAge(),
                 s.stepBudget(), s.retryBudget());

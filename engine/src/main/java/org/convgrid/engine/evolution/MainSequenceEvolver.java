@@ -3,12 +3,12 @@ package org.convgrid.engine.evolution;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Optional;
 
-import org.convgrid.engine.batch.ModelStatus;
-import org.convgrid.engine.convection.MixingLengthTheory;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.error.ConvgridException;
-import org.convgrid.engine.physics.OvershootScheme;
+import org.convgrid.engine.overshoot.Overshoot;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.HenyeySolver;
@@ -28,10 +28,9 @@ import org.convgrid.engine.units.Constants;
  * advanced over dt by {@link CompositionStep} at the previous model's density and temperature, each mixed zone as
  * one composition with its mass-weighted rates, every other point on its own; (3) the
  * structure is relaxed with that composition and the gravothermal term eps_grav from the difference with the
- * previous model ({@link GravothermalEnergy}). Mixing (2) covers the convective zones extended by step overshoot
- * of {@link PhysicsSet#overshootHp()} pressure scale heights ({@link StepOvershoot}), or, with the exponential
- * scheme, the convective zones followed by diffusion with D_ov = D_0 exp(-2 z/(f H_P)), f = overshootHp
- * ({@link ExponentialOvershoot}); under the Ledoux criterion
+ * previous model ({@link GravothermalEnergy}). Mixing (2) covers the convective zones and the points the physics'
+ * {@link Overshoot} mixes with them, followed by the overshoot's diffusion when it has one (with the transport's
+ * mixing length); under the Ledoux criterion
  * semiconvective layers are then mixed by diffusion ({@link SemiconvectiveMixing}) and the relaxation gets
  * nabla_mu from the mixed composition ({@link MuGradient}). Between steps the mesh is redistributed when uneven, with a cost
  * for composition gradients (|D X|/{@link #COMPOSITION_MESH_STEP} per interval, common practice, capped so that a
@@ -270,22 +269,17 @@ public final class MainSequenceEvolver {
             }
         }
         MassMesh mesh = start.state().mesh();
-        boolean exponential = physics.overshootScheme() == OvershootScheme.EXPONENTIAL;
-        boolean[] mixed = StepOvershoot.mixedPoints(mesh, start.convective(), previous.profile(),
-                exponential ? 0.0 : physics.overshootHp());
+        boolean[] mixed = physics.overshoot().mixedPoints(mesh::mass, start.convective(), previous.profile());
         Composition[] comp = burn(start.state(), mixed, rho, t, dt);
         if (settling) {
             // settling is driven by the previous structure; the zones it reaches are mixed again at once
             comp = ConvectiveMixing.mix(mesh, SettlingStep.apply(previous, mesh, remesh, comp, mixed, dt), mixed);
         }
-        if (exponential && physics.overshootHp() > 0.0) {
-            // D_0 = v_c l_m/3 needs the mixing length: only mixing-length transport defines one
-            if (!(physics.convection() instanceof MixingLengthTheory mlt)) {
-                throw new IllegalArgumentException("exponential overshoot needs mixing-length convection, got "
-                        + physics.convection().getClass().getSimpleName());
-            }
-            double[] s = ExponentialOvershoot.coefficients(previous.profile(), mlt.alpha(), physics.overshootHp());
-            comp = SemiconvectiveMixing.diffuse(mesh, comp, ExponentialOvershoot.capped(mesh,
+        Optional<double[]> overshootDiffusion = physics.overshoot().diffusion(previous.profile(),
+                physics.convection().alpha());
+        if (overshootDiffusion.isPresent()) {
+            double[] s = overshootDiffusion.get();
+            comp = SemiconvectiveMixing.diffuse(mesh, comp, SemiconvectiveMixing.capped(mesh,
                     remesh ? SemiconvectiveMixing.onMesh(previous.profile(), s, mesh) : s, dt), dt);
         }
         double[] nablaMu = null;

@@ -2,7 +2,7 @@ package org.convgrid.engine.evolution;
 
 import java.util.List;
 
-import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.request.ModelRequest;
 
 /**
  * Receives the evolution track of one star (one mass, composition and physics) as soon as it is computed.

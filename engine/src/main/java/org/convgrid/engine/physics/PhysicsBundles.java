@@ -2,7 +2,7 @@ package org.convgrid.engine.physics;
 
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.state.Composition;
 
 /**

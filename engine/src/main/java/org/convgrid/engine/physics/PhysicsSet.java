@@ -6,6 +6,8 @@ import org.convgrid.engine.physics.atmosphere.SurfaceBoundary;
 import org.convgrid.engine.physics.eos.EquationOfState;
 import org.convgrid.engine.physics.nuclear.NuclearNetwork;
 import org.convgrid.engine.physics.opacity.Opacity;
+import org.convgrid.engine.overshoot.Overshoot;
+import org.convgrid.engine.overshoot.StepOvershoot;
 
 /**
  * Everything the structure solver needs to know about the physics, as one immutable bundle.
@@ -16,23 +18,21 @@ import org.convgrid.engine.physics.opacity.Opacity;
  * @param convection actual gradient in unstable layers (mixing-length theory with its alpha)
  * @param criterion Schwarzschild or Ledoux
  * @param surface outer boundary condition
- * @param overshootHp overshoot parameter (0 for none): alpha_ov in pressure scale heights for the step scheme,
- *                    f for the exponential one
- * @param overshootScheme step or exponential overshoot
+ * @param overshoot mixing beyond the formal convective boundaries
  */
 public record PhysicsSet(EquationOfState eos, Opacity opacity, NuclearNetwork nuclear,
                          ConvectiveTransport convection, StabilityCriterion criterion, SurfaceBoundary surface,
-                         double overshootHp, OvershootScheme overshootScheme) {
+                         Overshoot overshoot) {
 
     public PhysicsSet {
-        if (overshootScheme == null) {
-            throw new IllegalArgumentException("overshootScheme must not be null");
+        if (overshoot == null) {
+            throw new IllegalArgumentException("overshoot must not be null");
         }
     }
 
-    /** A set with step overshoot. */
+    /** A set with step overshoot of {@code overshootHp} pressure scale heights. */
     public PhysicsSet(EquationOfState eos, Opacity opacity, NuclearNetwork nuclear, ConvectiveTransport convection,
                       StabilityCriterion criterion, SurfaceBoundary surface, double overshootHp) {
-        this(eos, opacity, nuclear, convection, criterion, surface, overshootHp, OvershootScheme.STEP);
+        this(eos, opacity, nuclear, convection, criterion, surface, new StepOvershoot(overshootHp));
     }
 }

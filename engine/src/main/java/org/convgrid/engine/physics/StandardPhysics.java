@@ -1,7 +1,5 @@
 package org.convgrid.engine.physics;
 
-import java.nio.file.Path;
-import org.convgrid.engine.batch.PhysicsOptions;
 import org.convgrid.engine.convection.MixingLengthTheory;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
@@ -16,9 +14,10 @@ import org.convgrid.engine.physics.nuclear.HydrogenBurningNetwork;
 import org.convgrid.engine.physics.nuclear.NuclearNetwork;
 import org.convgrid.engine.physics.opacity.AnalyticCompositeOpacity;
 import org.convgrid.engine.physics.opacity.Opacity;
-import org.convgrid.engine.physics.opacity.OpacityTableReader;
 import org.convgrid.engine.physics.opacity.ReferenceCorrectedOpacity;
 import org.convgrid.engine.physics.opacity.ScaledOpacity;
+import org.convgrid.engine.request.OpacityChoice;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.state.Composition;
 
 /**
@@ -32,7 +31,7 @@ import org.convgrid.engine.state.Composition;
 public final class StandardPhysics {
 
     private static final EquationOfState EOS = new StellarPlasmaEos();
-    private static final Opacity OPACITY = ReferenceCorrectedOpacity.opalGn93(AnalyticCompositeOpacity.standard());
+    private static final Opacity OPACITY = OpacityChoice.BUILT_IN.opacity();
     private static final NuclearNetwork NUCLEAR = new HydrogenBurningNetwork();
 
     private StandardPhysics() {
@@ -49,15 +48,11 @@ public final class StandardPhysics {
     }
 
     /**
-     * The opacity the options ask for: a user table when one is named (read here), else the OPAL-corrected analytic composite;
-     * times the opacity factor.
-     *
-     * @throws ConvgridException BAD_DATA when the table cannot be read
+     * The opacity the options ask for (a user table already read, or the OPAL-corrected analytic composite), times
+     * the opacity factor.
      */
     public static Opacity opacity(PhysicsOptions options) {
-        return options.usesOpacityTable()
-                ? ScaledOpacity.of(OpacityTableReader.read(Path.of(options.opacityTable())), options.opacityFactor())
-                : opacity(options.opacityFactor());
+        return ScaledOpacity.of(options.opacity().opacity(), options.opacityFactor());
     }
 
     /** pp chains and CNO cycle with Salpeter screening. */
@@ -77,8 +72,7 @@ public final class StandardPhysics {
         GreyAtmosphere atmosphere = new GreyAtmosphere(EOS, opacity, relation, relation.photosphericDepth());
         SurfaceBoundary table = new AtmosphereTable(atmosphere).tabulate(surfaceComposition);
         return new PhysicsSet(EOS, opacity, NUCLEAR, new MixingLengthTheory(options.mixingLength()),
-                options.criterion(), new TableWithFallback(table, atmosphere), options.overshoot(),
-                options.overshootScheme());
+                options.criterion(), new TableWithFallback(table, atmosphere), options.overshootModel());
     }
 
     /**

@@ -5,9 +5,8 @@ import java.util.List;
 import java.util.function.DoubleFunction;
 import java.util.function.DoubleUnaryOperator;
 import java.util.function.Predicate;
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelRequest;
-import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
 
 /**
  * Narrows a mass bracket around a change of convective state by bisection (the textbook method: halve the bracket,
@@ -52,7 +51,7 @@ public final class MassBisection {
      * @param lowSide whether a usable outcome is on the low side of the transition
      */
     public Refinement refine(MassLine line, DoubleFunction<ModelRequest> requestAt, double lowMass, double highMass,
-                             Predicate<ModelOutcome> lowSide) {
+                             Predicate<ModelOutcome.Solved> lowSide) {
         if (!(lowMass > 0.0 && highMass > lowMass && Double.isFinite(highMass))) {
             throw new IllegalArgumentException("a bracket needs 0 < low < high (g), got " + lowMass + " and "
                     + highMass);
@@ -60,10 +59,10 @@ public final class MassBisection {
         List<ModelOutcome> added = new ArrayList<>();
         for (double end : new double[] {lowMass, highMass}) {
             ModelOutcome o = line.solve(requestAt.apply(end));
-            if (!usable(o)) {
+            if (!(o instanceof ModelOutcome.Solved solved)) {
                 return new Refinement(lowMass, highMass, added, BisectionStop.END_NOT_USABLE, end, o.statusDetail());
             }
-            if (lowSide.test(o) != (end == lowMass)) {
+            if (lowSide.test(solved) != (end == lowMass)) {
                 return new Refinement(lowMass, highMass, added, BisectionStop.END_DISAGREES, end, "");
             }
         }
@@ -79,20 +78,15 @@ public final class MassBisection {
             }
             ModelOutcome o = line.solve(requestAt.apply(mid));
             added.add(o);
-            if (!usable(o)) {
+            if (!(o instanceof ModelOutcome.Solved solved)) {
                 return new Refinement(lo, hi, added, BisectionStop.MODEL_NOT_USABLE, mid, o.statusDetail());
             }
-            if (lowSide.test(o)) {
+            if (lowSide.test(solved)) {
                 lo = mid;
             } else {
                 hi = mid;
             }
         }
         return new Refinement(lo, hi, added, BisectionStop.NARROW_ENOUGH, Double.NaN, "");
-    }
-
-    /** A converged model with a convective structure: the only kind that tells a side. */
-    static boolean usable(ModelOutcome o) {
-        return o.status() == ModelStatus.OK && o.convection() != null;
     }
 }

@@ -1,7 +1,7 @@
 package org.convgrid.engine.refine;
 
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
 
 /**
  * Models of one line of constant composition and physics, computed one at a time in the order asked. A line may

@@ -1,6 +1,6 @@
 package org.convgrid.engine.refine;
 
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.PhysicsOptions;
 
 /** Opens fresh {@link MassLine}s; the seam between the refinement and the structure solver. Thread-safe. */
 @FunctionalInterface

@@ -1,7 +1,7 @@
 package org.convgrid.engine.refine;
 
 import java.util.List;
-import org.convgrid.engine.batch.ModelOutcome;
+import org.convgrid.engine.request.ModelOutcome;
 
 /**
  * What a {@link MassBisection} made of one bracket.

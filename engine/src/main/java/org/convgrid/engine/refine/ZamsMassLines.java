@@ -1,8 +1,8 @@
 package org.convgrid.engine.refine;
 
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelStatus;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.physics.PhysicsBundles;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.state.Composition;
@@ -27,8 +27,8 @@ public final class ZamsMassLines implements MassLineFactory {
         Composition composition = ZeroAgeRequests.initialComposition(initialMetals, initialHelium);
         PhysicsSet set = physics.of(options, composition);
         ZamsTrack track = new ZamsTrack(new ZamsBuilder(set), composition);
-        return request -> request.age() != 0.0
-                ? new ModelOutcome(request, ModelStatus.FAILED, ZeroAgeRequests.NO_EVOLUTION, null, null, 0)
+        return request -> !request.age().isZeroAge()
+                ? new ModelOutcome.Failed(request, ModelStatus.FAILED, ZeroAgeRequests.NO_EVOLUTION, 0)
                 : ZeroAgeRequests.outcome(request, track.solve(request.mass()));
     }
 

@@ -1,9 +1,8 @@
 package org.convgrid.engine.structure;
 
-import org.convgrid.engine.batch.GlobalProperties;
+import org.convgrid.engine.request.GlobalProperties;
 import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.convection.ConvectiveZoneFinder;
-import org.convgrid.engine.convection.MixingLengthTheory;
 import org.convgrid.engine.convection.ZoneProfile;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.units.Constants;
@@ -32,25 +31,8 @@ public record StellarModel(ModelState state, StellarProfile profile, GlobalPrope
         GlobalProperties g = new GlobalProperties(lum, radius, teff, gravity, p.temperature(0), p.density(0),
                 p.hydrogen(0));
         ZoneProfile zones = new ZoneProfile(p.mass(s), radius, p.masses(), p.radii(), p.stabilityExcesses(),
-                p.convectiveVelocities(), p.pressureScaleHeights(), mixingLengthAlpha(physics, eq, p));
+                p.convectiveVelocities(), p.pressureScaleHeights(), physics.convection().alpha());
         return new StellarModel(eq.state(y), p, g, new ConvectiveZoneFinder().find(zones), report);
-    }
-
-    /**
-     * The mixing-length parameter: from {@link MixingLengthTheory} when that is the convection model, otherwise
-     * read off a convective point (l_m / H_P), otherwise 1 (then no turnover time is computed anyway).
-     */
-    private static double mixingLengthAlpha(PhysicsSet physics, StructureEquations eq, StellarProfile p) {
-        if (physics.convection() instanceof MixingLengthTheory mlt) {
-            return mlt.alpha();
-        }
-        for (int k = 0; k < eq.points(); k++) {
-            var g = eq.convectionAt(k);
-            if (g != null && g.convective() && g.mixingLength() > 0.0) {
-                return g.mixingLength() / p.pressureScaleHeight(k);
-            }
-        }
-        return 1.0;
     }
 
     /** Total mass, g. */

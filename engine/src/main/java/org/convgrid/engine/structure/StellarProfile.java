@@ -1,13 +1,14 @@
 package org.convgrid.engine.structure;
 
 import org.convgrid.engine.convection.ConvectiveGradient;
+import org.convgrid.engine.overshoot.OvershootProfile;
 import org.convgrid.engine.physics.eos.EosState;
 import org.convgrid.engine.units.Constants;
 
 /**
  * Per-shell quantities of a solved model, centre (index 0) to surface, cgs units. Immutable.
  */
-public final class StellarProfile {
+public final class StellarProfile implements OvershootProfile {
 
     private final double[] mass;
     private final double[] radius;

@@ -1,8 +1,8 @@
 package org.convgrid.engine.structure;
 
 import org.convgrid.engine.convection.ConvectiveGradient;
+import org.convgrid.engine.convection.LedouxGradient;
 import org.convgrid.engine.convection.LocalConvectionState;
-import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
 import org.convgrid.engine.physics.PhysicsSet;
@@ -48,6 +48,11 @@ public final class StructureEquations implements DifferenceSystem {
      * (one-sided differences); elsewhere burning is too weak for it to matter.
      */
     static final double SLAVED_BURNING_THRESHOLD = 1.0e-4;
+    /**
+     * phi = (dln rho/dln mu) at fixed P and T in the Ledoux gradient: 1 for the ideal ions and electrons that carry
+     * mu (Kippenhahn, Weigert &amp; Weiss 2012, ch. 6).
+     */
+    private static final double IDEAL_GAS_PHI = 1.0;
     private static final double FOUR_PI = 4.0 * Math.PI;
     private static final double RADIATIVE_CONSTANT = 3.0 / (16.0 * Math.PI * Constants.A_RAD * Constants.C
             * Constants.G);
@@ -265,10 +270,8 @@ public final class StructureEquations implements DifferenceSystem {
         double t = s.temperature();
         double p = s.pressure();
         double rad = RADIATIVE_CONSTANT * kappa * lum * p / (m * t * t * t * t);
-        double stability = s.nablaAd();
-        if (physics.criterion() == StabilityCriterion.LEDOUX && nablaMu[k] != 0.0) {
-            stability += nablaMu[k] / s.delta();
-        }
+        double stability = LedouxGradient.stabilityGradient(physics.criterion(), s.nablaAd(), IDEAL_GAS_PHI,
+                s.delta(), nablaMu[k]);
         ConvectiveGradient g = null;
         double result = rad;
         if (rad > stability) {

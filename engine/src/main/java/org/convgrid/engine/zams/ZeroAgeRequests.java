@@ -1,8 +1,8 @@
 package org.convgrid.engine.zams;
 
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelRequest;
-import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.state.Composition;
 
 /**
@@ -31,10 +31,9 @@ public final class ZeroAgeRequests {
     public static ModelOutcome outcome(ModelRequest request, ZamsResult result) {
         if (result.converged()) {
             var model = result.model().model();
-            return new ModelOutcome(request, ModelStatus.OK, "", model.global(), model.convection(),
-                    result.iterations());
+            return new ModelOutcome.Solved(request, model.global(), model.convection(), result.iterations());
         }
-        return new ModelOutcome(request, ModelStatus.NOT_CONVERGED, result.failure().toString(), null, null,
+        return new ModelOutcome.Failed(request, ModelStatus.NOT_CONVERGED, result.failure().toString(),
                 result.iterations());
     }
 }

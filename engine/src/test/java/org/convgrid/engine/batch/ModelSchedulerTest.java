@@ -7,6 +7,10 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.stream.Collectors;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.junit.jupiter.api.Test;
 
 class ModelSchedulerTest {
@@ -25,10 +29,14 @@ class ModelSchedulerTest {
         return requests;
     }
 
-    /** A solver whose answer depends on the chunk's first mass (its "seed"), like homology seeding does. */
+    /**
+     * A solver whose answer depends on the chunk's first mass (its "seed"), like homology seeding does; it answers
+     * without models, the seed in the detail.
+     */
     private static final ChunkSolver SEED_DEPENDENT = chunk -> chunk.stream()
-            .map(r -> new ModelOutcome(r, r.mass() == 7.0 ? ModelStatus.FAILED : ModelStatus.OK,
-                    "seed " + chunk.get(0).mass(), null, null, (int) r.mass()))
+            .<ModelOutcome>map(r -> new ModelOutcome.Failed(r,
+                    r.mass() == 7.0 ? ModelStatus.FAILED : ModelStatus.NOT_CONVERGED,
+                    "seed " + chunk.get(0).mass(), (int) r.mass()))
             .collect(Collectors.toList());
 
     private static List<String> run(int threads, Shard shard, Set<String> done) throws Exception {

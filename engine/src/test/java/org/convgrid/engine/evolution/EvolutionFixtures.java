@@ -3,8 +3,9 @@ package org.convgrid.engine.evolution;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.engine.overshoot.ExponentialOvershoot;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.physics.StandardPhysics;
 import org.convgrid.engine.state.Composition;
@@ -40,8 +41,8 @@ final class EvolutionFixtures {
     /** The standard physics of {@code c} with exponential overshoot of parameter {@code f}. */
     static PhysicsSet exponentialOvershoot(Composition c, double f) {
         PhysicsSet p = physics(c);
-        return new PhysicsSet(p.eos(), p.opacity(), p.nuclear(), p.convection(), p.criterion(), p.surface(), f,
-                org.convgrid.engine.physics.OvershootScheme.EXPONENTIAL);
+        return new PhysicsSet(p.eos(), p.opacity(), p.nuclear(), p.convection(), p.criterion(), p.surface(),
+                new ExponentialOvershoot(f));
     }
 
     static synchronized ZamsModel zeroAge(Composition c, double massInSun) {

@@ -2,7 +2,6 @@ package org.convgrid.engine.evolution;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import org.convgrid.engine.convection.MixingLengthTheory;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.StellarModel;
@@ -39,13 +38,12 @@ class ExponentialOvershootTest {
         // to rounding is the property of the scheme, no published value): one long step on an evolved model
         StellarModel evolved = over.models().get(0).model();
         StellarProfile p = evolved.profile();
-        double alpha = ((MixingLengthTheory) physics.convection()).alpha();
-        double[] s = ExponentialOvershoot.coefficients(p, alpha, F_HERWIG);
+        double[] s = physics.overshoot().diffusion(p, physics.convection().alpha()).orElseThrow();
         assertThat(java.util.Arrays.stream(s).max().orElse(0.0)).isPositive();
         var mesh = evolved.state().mesh();
         Composition[] before = evolved.state().compositions();
         double dt = 1.0e6 * Constants.YEAR;
-        Composition[] after = SemiconvectiveMixing.diffuse(mesh, before, ExponentialOvershoot.capped(mesh, s, dt),
+        Composition[] after = SemiconvectiveMixing.diffuse(mesh, before, SemiconvectiveMixing.capped(mesh, s, dt),
                 dt);
         double[] totalsBefore = TestMeshes.totals(mesh, before);
         double[] totalsAfter = TestMeshes.totals(mesh, after);

@@ -3,7 +3,7 @@ package org.convgrid.engine.evolution;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
-import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.structure.MassMesh;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.units.Constants;

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.within;
 
 import java.util.Arrays;
 
+import org.convgrid.engine.overshoot.StepOvershoot;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.MassMesh;
 import org.convgrid.engine.structure.StellarModel;
@@ -25,8 +26,8 @@ class OvershootMixingTest {
             convective[k] = p.convective(k);
         }
         assertThat(convective[0]).isTrue();   // a 2 Msun star has a convective core (KWW 2012, ch. 22)
-        assertThat(StepOvershoot.mixedPoints(mesh, convective, p, 0.0)).isEqualTo(convective);
-        boolean[] mixed = StepOvershoot.mixedPoints(mesh, convective, p, 0.2);
+        assertThat(new StepOvershoot(0.0).mixedPoints(mesh::mass, convective, p)).isEqualTo(convective);
+        boolean[] mixed = new StepOvershoot(0.2).mixedPoints(mesh::mass, convective, p);
         int formal = lastOfCore(convective);
         int extended = lastOfCore(mixed);
         assertThat(extended).isGreaterThan(formal);

@@ -8,10 +8,11 @@ import java.util.List;
 import java.util.Set;
 import java.util.function.DoubleUnaryOperator;
 import java.util.function.Predicate;
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelRequest;
-import org.convgrid.engine.batch.ModelStatus;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.GlobalProperties;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.convection.StructureClass;
@@ -23,7 +24,7 @@ class MassBisectionTest {
 
     private static final double MSUN = Constants.M_SUN;
     private static final double EDGE = 0.3456789 * MSUN;
-    private static final Predicate<ModelOutcome> FULLY_CONVECTIVE =
+    private static final Predicate<ModelOutcome.Solved> FULLY_CONVECTIVE =
             o -> o.convection().structureClass() == StructureClass.FULLY_CONVECTIVE;
 
     /** A line that is fully convective below {@code edge}, fails at the listed masses and records every request. */
@@ -41,13 +42,15 @@ class MassBisectionTest {
         public ModelOutcome solve(ModelRequest r) {
             asked.add(r.mass());
             if (failing.contains(r.mass())) {
-                return new ModelOutcome(r, ModelStatus.NOT_CONVERGED, "gave up\nat shell 3", null, null, 40);
+                return new ModelOutcome.Failed(r, ModelStatus.NOT_CONVERGED, "gave up\nat shell 3", 40);
             }
             boolean fc = r.mass() < edge;
             ConvectiveStructure c = new ConvectiveStructure(List.of(new ConvectiveZone(fc ? 0 : 0.6, 1, 0, 1)),
                     fc ? StructureClass.FULLY_CONVECTIVE : StructureClass.CONV_ENVELOPE, fc ? 1 : 0, fc ? 0 : 0.6,
                     0.7, 0.4 * r.mass(), 1, 1);
-            return new ModelOutcome(r, ModelStatus.OK, "", null, c, 5);
+            // the bisection reads only the zones: the surface and centre are placeholders
+            GlobalProperties g = new GlobalProperties(1.0, 1.0, 1.0, 1.0, 1.0, 1.0, 0.7);
+            return new ModelOutcome.Solved(r, g, c, 5);
         }
     }
 

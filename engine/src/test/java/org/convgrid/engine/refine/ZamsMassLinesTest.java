@@ -4,10 +4,10 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.function.DoubleUnaryOperator;
 import java.util.function.Predicate;
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelRequest;
-import org.convgrid.engine.batch.ModelStatus;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.units.Constants;
 import org.junit.jupiter.api.Test;
 
@@ -26,7 +26,7 @@ class ZamsMassLinesTest {
 
     @Test
     void narrowsTheCoreOnsetBracketWithConvergedSeededModels() {
-        Predicate<ModelOutcome> noCore = o -> !(o.convection().coreMassFraction() > CORE_THRESHOLD);
+        Predicate<ModelOutcome.Solved> noCore = o -> !(o.convection().coreMassFraction() > CORE_THRESHOLD);
         MassLine line = new ZamsMassLines().open(PhysicsOptions.DEFAULT, Z, Y);
         double tolerance = 0.03 * MSUN;
         Refinement r = new MassBisection(tolerance, DoubleUnaryOperator.identity()).refine(line,
@@ -39,7 +39,7 @@ class ZamsMassLinesTest {
         assertThat(r.newModels()).hasSize(3).allSatisfy(o -> assertThat(o.status()).isEqualTo(ModelStatus.OK));
         for (ModelOutcome o : r.newModels()) {
             double m = o.request().mass();
-            assertThat(noCore.test(o)).isEqualTo(m <= r.lowMass());
+            assertThat(noCore.test(o.solved())).isEqualTo(m <= r.lowMass());
         }
         // a request at an age above zero is refused, not evolved
         ModelOutcome aged = line.solve(new ModelRequest("a", MSUN, Z, Y, Constants.GYR, PhysicsOptions.DEFAULT));

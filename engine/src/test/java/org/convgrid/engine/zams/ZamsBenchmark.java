@@ -6,7 +6,7 @@ import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
 
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.physics.StandardPhysics;
 import org.convgrid.engine.state.Composition;

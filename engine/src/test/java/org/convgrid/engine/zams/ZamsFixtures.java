@@ -3,7 +3,7 @@ package org.convgrid.engine.zams;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.physics.StandardPhysics;
 import org.convgrid.engine.state.Composition;

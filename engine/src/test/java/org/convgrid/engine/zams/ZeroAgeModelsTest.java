@@ -3,7 +3,7 @@ package org.convgrid.engine.zams;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
-import org.convgrid.engine.batch.GlobalProperties;
+import org.convgrid.engine.request.GlobalProperties;
 import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.engine.units.Constants;

@@ -2,6 +2,7 @@ package org.convgrid.grids.yaml;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.convgrid.grids.GridProblemKind;
 import org.snakeyaml.engine.v2.nodes.Node;
 
 /** Lists of numbers (a lone scalar counts as a one-item list), each value checked at its own node. */
@@ -40,13 +41,14 @@ final class AxisValues {
             if (v == null) {
                 ok = false;
             } else if (!range.contains(v)) {
-                reader.problem(item, what + " must lie in " + range + ", got " + v);
+                reader.problem(item, GridProblemKind.OUT_OF_RANGE, what + " must lie in " + range + ", got " + v);
                 ok = false;
             } else if (order != Order.ANY && values.contains(v)) {
-                reader.problem(item, "duplicate " + what + " " + v);
+                reader.problem(item, GridProblemKind.DUPLICATE, "duplicate " + what + " " + v);
                 ok = false;
             } else if (order == Order.INCREASING && !values.isEmpty() && v < values.get(values.size() - 1)) {
-                reader.problem(item, what + "s must increase: " + v + " follows " + values.get(values.size() - 1));
+                reader.problem(item, GridProblemKind.OUT_OF_RANGE,
+                        what + "s must increase: " + v + " follows " + values.get(values.size() - 1));
                 ok = false;
             }
             if (v != null) {

@@ -10,6 +10,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
+import org.convgrid.grids.GridProblemKind;
 import org.convgrid.grids.AgeAxis;
 import org.convgrid.grids.GridFile;
 import org.convgrid.grids.GridFileException;
@@ -70,7 +71,8 @@ public final class GridFileReader {
             text = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
                     .onUnmappableCharacter(CodingErrorAction.REPORT).decode(ByteBuffer.wrap(bytes)).toString();
         } catch (CharacterCodingException e) {
-            throw new GridFileException(List.of(new GridProblem(name, 1, 1, "the file is not UTF-8 text")));
+            throw new GridFileException(List.of(new GridProblem(name, 1, 1, GridProblemKind.SYNTAX,
+                    "the file is not UTF-8 text")));
         }
         return new GridFile(name, text, GridHash.ofBytes(bytes), parse(name, text));
     }
@@ -85,7 +87,8 @@ public final class GridFileReader {
         Optional<Node> root = compose(name, text, reader);
         GridSpec spec = null;
         if (root.isEmpty() && reader.problems().isEmpty()) {
-            reader.problem(Optional.empty(), "the grid file is empty; it needs at least 'mass' and 'metallicity'");
+            reader.problem(Optional.empty(), GridProblemKind.MISSING_KEY,
+                    "the grid file is empty; it needs at least 'mass' and 'metallicity'");
         } else if (root.isPresent()) {
             spec = spec(root.get(), reader);
         }
@@ -102,9 +105,10 @@ public final class GridFileReader {
             return new Compose(settings).composeString(text);
         } catch (MarkedYamlEngineException e) {
             String context = e.getContext() == null ? "" : e.getContext() + ": ";
-            reader.problem(e.getProblemMark().or(e::getContextMark), "YAML syntax: " + context + e.getProblem());
+            reader.problem(e.getProblemMark().or(e::getContextMark), GridProblemKind.SYNTAX,
+                    "YAML syntax: " + context + e.getProblem());
         } catch (YamlEngineException e) {
-            reader.problem(Optional.empty(), "YAML syntax: " + e.getMessage());
+            reader.problem(Optional.empty(), GridProblemKind.SYNTAX, "YAML syntax: " + e.getMessage());
         }
         return Optional.empty();
     }
@@ -120,7 +124,7 @@ public final class GridFileReader {
         List<MetallicityPoint> metallicities = null;
         for (String required : List.of("mass", "metallicity")) {
             if (!fields.has(required)) {
-                reader.problem(map, "the grid file needs a '" + required + "' section");
+                reader.problem(map, GridProblemKind.MISSING_KEY, "the grid file needs a '" + required + "' section");
             }
         }
         if (fields.has("mass")) {
@@ -158,7 +162,8 @@ public final class GridFileReader {
         }
         MappingFields fields = new MappingFields(map, "age", AGE_KEYS, reader);
         if (fields.has("gyr") && fields.has("ms_fraction")) {
-            reader.problem(fields.key("ms_fraction"), "age takes either 'gyr' or 'ms_fraction', not both");
+            reader.problem(fields.key("ms_fraction"), GridProblemKind.CONFLICT,
+                    "age takes either 'gyr' or 'ms_fraction', not both");
             return null;
         }
         if (fields.has("ms_fraction")) {
@@ -167,7 +172,8 @@ public final class GridFileReader {
             return fractions == null ? null : AgeAxis.msFractions(fractions);
         }
         if (!fields.has("gyr")) {
-            reader.problem(map, "age needs 'gyr', the ages since the ZAMS in Gyr (0 = ZAMS), or 'ms_fraction', "
+            reader.problem(map, GridProblemKind.MISSING_KEY,
+                    "age needs 'gyr', the ages since the ZAMS in Gyr (0 = ZAMS), or 'ms_fraction', "
                     + "fractions of each star's main-sequence lifetime (0 = ZAMS, 1 = core-hydrogen exhaustion)");
             return null;
         }

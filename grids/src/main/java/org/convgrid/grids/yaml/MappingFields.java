@@ -3,6 +3,7 @@ package org.convgrid.grids.yaml;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.convgrid.grids.GridProblemKind;
 import org.snakeyaml.engine.v2.nodes.MappingNode;
 import org.snakeyaml.engine.v2.nodes.Node;
 import org.snakeyaml.engine.v2.nodes.NodeTuple;
@@ -20,16 +21,18 @@ final class MappingFields {
         for (NodeTuple tuple : map.getValue()) {
             Node keyNode = tuple.getKeyNode();
             if (!(keyNode instanceof ScalarNode scalar)) {
-                reader.problem(keyNode, "keys in " + section + " must be plain names");
+                reader.problem(keyNode, GridProblemKind.UNKNOWN_KEY, "keys in " + section + " must be plain names");
                 continue;
             }
             String key = scalar.getValue();
             if (!allowed.contains(key)) {
-                reader.problem(keyNode, "unknown key '" + key + "' in " + section + "; allowed: "
+                reader.problem(keyNode, GridProblemKind.UNKNOWN_KEY,
+                        "unknown key '" + key + "' in " + section + "; allowed: "
                         + String.join(", ", allowed));
             } else if (entries.containsKey(key)) {
                 int firstLine = entries.get(key).getKeyNode().getStartMark().map(m -> m.getLine() + 1).orElse(0);
-                reader.problem(keyNode, "duplicate key '" + key + "' in " + section + " (first given on line "
+                reader.problem(keyNode, GridProblemKind.DUPLICATE,
+                        "duplicate key '" + key + "' in " + section + " (first given on line "
                         + firstLine + ")");
             } else {
                 entries.put(key, tuple);

@@ -4,6 +4,7 @@ import java.math.BigDecimal;
 import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.List;
+import org.convgrid.grids.GridProblemKind;
 import org.snakeyaml.engine.v2.nodes.MappingNode;
 import org.snakeyaml.engine.v2.nodes.Node;
 
@@ -37,28 +38,32 @@ final class MassAxisReader {
         if (fields.has("values")) {
             for (String other : List.of("from", "to", "step", "count", "spacing")) {
                 if (fields.has(other)) {
-                    reader.problem(fields.key(other), "mass: 'values' cannot be combined with '" + other + "'");
+                    reader.problem(fields.key(other), GridProblemKind.CONFLICT,
+                            "mass: 'values' cannot be combined with '" + other + "'");
                 }
             }
             return AxisValues.increasing(fields.value("values"), "mass value", MASS_RANGE, reader);
         }
         if (!fields.has("from") || !fields.has("to")) {
-            reader.problem(map, "mass needs 'from' and 'to' with 'step' or 'count', or a list of 'values'");
+            reader.problem(map, GridProblemKind.MISSING_KEY,
+                    "mass needs 'from' and 'to' with 'step' or 'count', or a list of 'values'");
             return null;
         }
         BigDecimal from = massEnd(fields.value("from"), "mass from", reader);
         BigDecimal to = massEnd(fields.value("to"), "mass to", reader);
         if (from != null && to != null && from.compareTo(to) > 0) {
-            reader.problem(fields.value("from"), "mass from (" + from + ") is larger than to (" + to + ")");
+            reader.problem(fields.value("from"), GridProblemKind.OUT_OF_RANGE,
+                    "mass from (" + from + ") is larger than to (" + to + ")");
             from = null;
         }
         if (fields.has("step") == fields.has("count")) {
-            reader.problem(map, "mass needs exactly one of 'step' and 'count'");
+            reader.problem(map, GridProblemKind.CONFLICT, "mass needs exactly one of 'step' and 'count'");
             return null;
         }
         if (fields.has("step")) {
             if (fields.has("spacing")) {
-                reader.problem(fields.key("spacing"), "mass: 'spacing' goes with 'count', not with 'step'");
+                reader.problem(fields.key("spacing"), GridProblemKind.CONFLICT,
+                        "mass: 'spacing' goes with 'count', not with 'step'");
             }
             return stepped(from, to, fields.value("step"), reader);
         }
@@ -68,7 +73,8 @@ final class MassAxisReader {
     private static BigDecimal massEnd(Node node, String what, NodeReader reader) {
         BigDecimal value = reader.decimal(node, what);
         if (value != null && !MASS_RANGE.contains(value.doubleValue())) {
-            reader.problem(node, what + " must lie in " + MASS_RANGE + " solar masses, got " + value);
+            reader.problem(node, GridProblemKind.OUT_OF_RANGE,
+                    what + " must lie in " + MASS_RANGE + " solar masses, got " + value);
             return null;
         }
         return value;
@@ -77,7 +83,7 @@ final class MassAxisReader {
     private static List<Double> stepped(BigDecimal from, BigDecimal to, Node stepNode, NodeReader reader) {
         BigDecimal step = reader.decimal(stepNode, "mass step");
         if (step != null && step.signum() <= 0) {
-            reader.problem(stepNode, "mass step must be > 0 solar masses, got " + step);
+            reader.problem(stepNode, GridProblemKind.OUT_OF_RANGE, "mass step must be > 0 solar masses, got " + step);
             return null;
         }
         if (from == null || to == null || step == null) {
@@ -85,7 +91,8 @@ final class MassAxisReader {
         }
         BigDecimal steps = to.subtract(from).divide(step, 0, RoundingMode.FLOOR);
         if (steps.compareTo(BigDecimal.valueOf(MAX_AXIS_POINTS - 1)) >= 0) {
-            reader.problem(stepNode, "mass step " + step + " gives more than " + MAX_AXIS_POINTS + " masses");
+            reader.problem(stepNode, GridProblemKind.OUT_OF_RANGE,
+                    "mass step " + step + " gives more than " + MAX_AXIS_POINTS + " masses");
             return null;
         }
         List<Double> values = new ArrayList<>();
@@ -99,14 +106,16 @@ final class MassAxisReader {
         Node countNode = fields.value("count");
         Integer count = reader.integer(countNode, "mass count");
         if (count != null && (count < 1 || count > MAX_AXIS_POINTS)) {
-            reader.problem(countNode, "mass count must lie in [1, " + MAX_AXIS_POINTS + "], got " + count);
+            reader.problem(countNode, GridProblemKind.OUT_OF_RANGE,
+                    "mass count must lie in [1, " + MAX_AXIS_POINTS + "], got " + count);
             count = null;
         }
         boolean log = false;
         if (fields.has("spacing")) {
             String spacing = reader.text(fields.value("spacing"), "mass spacing");
             if (spacing != null && !spacing.equals("linear") && !spacing.equals("log")) {
-                reader.problem(fields.value("spacing"), "mass spacing must be linear or log, got '" + spacing + "'");
+                reader.problem(fields.value("spacing"), GridProblemKind.UNKNOWN_CHOICE,
+                        "mass spacing must be linear or log, got '" + spacing + "'");
             }
             log = "log".equals(spacing);
         }
@@ -114,7 +123,8 @@ final class MassAxisReader {
             return null;
         }
         if (count == 1 && from.compareTo(to) != 0) {
-            reader.problem(countNode, "mass count 1 needs from = to, got " + from + " and " + to);
+            reader.problem(countNode, GridProblemKind.MISSING_KEY,
+                    "mass count 1 needs from = to, got " + from + " and " + to);
             return null;
         }
         double lo = from.doubleValue();
@@ -126,7 +136,8 @@ final class MassAxisReader {
         }
         values.set(count - 1, hi); // both ends exactly as written
         if (values.size() > 1 && !(values.get(1) > values.get(0))) {
-            reader.problem(countNode, "mass count " + count + " with from = to repeats the same mass");
+            reader.problem(countNode, GridProblemKind.OUT_OF_RANGE,
+                    "mass count " + count + " with from = to repeats the same mass");
             return null;
         }
         return values;

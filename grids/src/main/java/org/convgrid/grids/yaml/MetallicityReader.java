@@ -2,6 +2,7 @@ package org.convgrid.grids.yaml;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.convgrid.grids.GridProblemKind;
 import org.convgrid.grids.HeliumLaw;
 import org.convgrid.grids.MetallicityPoint;
 import org.snakeyaml.engine.v2.nodes.MappingNode;
@@ -34,10 +35,12 @@ final class MetallicityReader {
         if (fields.has("z")) {
             zs = AxisValues.increasing(fields.value("z"), "z", Z_RANGE, reader);
         } else {
-            reader.problem(map, "metallicity needs 'z', the initial metal mass fraction(s)");
+            reader.problem(map, GridProblemKind.MISSING_KEY,
+                    "metallicity needs 'z', the initial metal mass fraction(s)");
         }
         if (fields.has("y") == fields.has("helium")) {
-            reader.problem(map, "metallicity needs exactly one of 'helium' (primordial, enrichment) and 'y' (a list)");
+            reader.problem(map, GridProblemKind.CONFLICT,
+                    "metallicity needs exactly one of 'helium' (primordial, enrichment) and 'y' (a list)");
             return null;
         }
         if (fields.has("helium")) {
@@ -49,7 +52,8 @@ final class MetallicityReader {
             return null;
         }
         if (ys.size() != zs.size()) {
-            reader.problem(fields.value("y"), "y has " + ys.size() + " values but z has " + zs.size());
+            reader.problem(fields.value("y"), GridProblemKind.CONFLICT,
+                    "y has " + ys.size() + " values but z has " + zs.size());
             return null;
         }
         List<Node> yNodes = reader.items(fields.value("y"), "y");
@@ -67,7 +71,8 @@ final class MetallicityReader {
         }
         MappingFields fields = new MappingFields(map, "helium", HELIUM_KEYS, reader);
         if (!fields.has("primordial") || !fields.has("enrichment")) {
-            reader.problem(map, "helium needs both 'primordial' and 'enrichment' (Y = primordial + enrichment * Z)");
+            reader.problem(map, GridProblemKind.MISSING_KEY,
+                    "helium needs both 'primordial' and 'enrichment' (Y = primordial + enrichment * Z)");
             return null;
         }
         Double primordial = ranged(fields.value("primordial"), "helium primordial", Y_RANGE, reader);
@@ -88,7 +93,8 @@ final class MetallicityReader {
 
     private static MetallicityPoint point(double z, double y, Node at, String how, NodeReader reader) {
         if (!(y >= 0.0 && y + z < 1.0)) {
-            reader.problem(at, how + " with Z = " + z + " leaves no hydrogen (need Y >= 0 and Y + Z < 1)");
+            reader.problem(at, GridProblemKind.OUT_OF_RANGE,
+                    how + " with Z = " + z + " leaves no hydrogen (need Y >= 0 and Y + Z < 1)");
             return null;
         }
         return new MetallicityPoint(z, y);
@@ -97,7 +103,7 @@ final class MetallicityReader {
     private static Double ranged(Node node, String what, Range range, NodeReader reader) {
         Double v = reader.number(node, what);
         if (v != null && !range.contains(v)) {
-            reader.problem(node, what + " must lie in " + range + ", got " + v);
+            reader.problem(node, GridProblemKind.OUT_OF_RANGE, what + " must lie in " + range + ", got " + v);
             return null;
         }
         return v;

@@ -6,6 +6,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Optional;
 import org.convgrid.grids.GridProblem;
+import org.convgrid.grids.GridProblemKind;
 import org.snakeyaml.engine.v2.common.ScalarStyle;
 import org.snakeyaml.engine.v2.exceptions.Mark;
 import org.snakeyaml.engine.v2.nodes.MappingNode;
@@ -32,15 +33,15 @@ final class NodeReader {
     }
 
     /** Records a problem at the start of {@code node}. */
-    void problem(Node node, String message) {
-        problem(node == null ? Optional.empty() : node.getStartMark(), message);
+    void problem(Node node, GridProblemKind kind, String message) {
+        problem(node == null ? Optional.empty() : node.getStartMark(), kind, message);
     }
 
     /** Records a problem at a mark (1:1 when there is none). */
-    void problem(Optional<Mark> mark, String message) {
+    void problem(Optional<Mark> mark, GridProblemKind kind, String message) {
         int line = mark.map(m -> m.getLine() + 1).orElse(1);
         int column = mark.map(m -> m.getColumn() + 1).orElse(1);
-        problems.add(new GridProblem(file, line, column, message));
+        problems.add(new GridProblem(file, line, column, kind, message));
     }
 
     /** Every problem so far, in file order. */
@@ -54,7 +55,7 @@ final class NodeReader {
         if (node instanceof MappingNode map) {
             return map;
         }
-        problem(node, what + " must be a mapping of keys to values" + got(node));
+        problem(node, GridProblemKind.WRONG_TYPE, what + " must be a mapping of keys to values" + got(node));
         return null;
     }
 
@@ -62,7 +63,7 @@ final class NodeReader {
     List<Node> items(Node node, String what) {
         if (node instanceof SequenceNode sequence) {
             if (sequence.getValue().isEmpty()) {
-                problem(node, what + " must not be an empty list");
+                problem(node, GridProblemKind.WRONG_TYPE, what + " must not be an empty list");
                 return null;
             }
             return sequence.getValue();
@@ -70,7 +71,7 @@ final class NodeReader {
         if (node instanceof ScalarNode && !isNull(node)) {
             return List.of(node);
         }
-        problem(node, what + " must be a value or a list of values" + got(node));
+        problem(node, GridProblemKind.WRONG_TYPE, what + " must be a value or a list of values" + got(node));
         return null;
     }
 
@@ -82,7 +83,7 @@ final class NodeReader {
         try {
             return new BigDecimal(text);
         } catch (NumberFormatException e) {
-            problem(node, what + " must be a number, got '" + text + "'");
+            problem(node, GridProblemKind.WRONG_TYPE, what + " must be a number, got '" + text + "'");
             return null;
         }
     }
@@ -100,7 +101,7 @@ final class NodeReader {
         try {
             return value.intValueExact();
         } catch (ArithmeticException e) {
-            problem(node, what + " must be a whole number, got " + value.toPlainString());
+            problem(node, GridProblemKind.WRONG_TYPE, what + " must be a whole number, got " + value.toPlainString());
             return null;
         }
     }
@@ -113,7 +114,7 @@ final class NodeReader {
         if (text.equals("true") || text.equals("false")) {
             return Boolean.valueOf(text);
         }
-        problem(node, what + " must be true or false, got '" + text + "'");
+        problem(node, GridProblemKind.WRONG_TYPE, what + " must be true or false, got '" + text + "'");
         return null;
     }
 
@@ -121,19 +122,20 @@ final class NodeReader {
         if (node instanceof ScalarNode scalar && !isNull(node) && !scalar.getValue().isBlank()) {
             return scalar.getValue();
         }
-        problem(node, what + " must be a non-empty text" + got(node));
+        problem(node, GridProblemKind.WRONG_TYPE, what + " must be a non-empty text" + got(node));
         return null;
     }
 
     private String plainScalar(Node node, String what, String expected) {
         if (node instanceof ScalarNode scalar && !isNull(node)) {
             if (scalar.getScalarStyle() != ScalarStyle.PLAIN) {
-                problem(node, what + " must be " + expected + ", got the quoted text '" + scalar.getValue() + "'");
+                problem(node, GridProblemKind.WRONG_TYPE,
+                        what + " must be " + expected + ", got the quoted text '" + scalar.getValue() + "'");
                 return null;
             }
             return scalar.getValue();
         }
-        problem(node, what + " must be " + expected + got(node));
+        problem(node, GridProblemKind.WRONG_TYPE, what + " must be " + expected + got(node));
         return null;
     }
 

@@ -4,12 +4,14 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.error.ConvgridException;
-import org.convgrid.engine.physics.OvershootScheme;
+import org.convgrid.engine.request.OpacityChoice;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.physics.opacity.OpacityTableReader;
+import org.convgrid.grids.GridProblemKind;
 import org.convgrid.grids.PhysicsAxes;
 import org.snakeyaml.engine.v2.nodes.MappingNode;
 import org.snakeyaml.engine.v2.nodes.Node;
@@ -49,7 +51,8 @@ final class PhysicsReader {
         if (fields.has("preset")) {
             preset = PresetReader.read(fields.value("preset"), reader);
             if (fields.has("mixing_length")) {
-                reader.problem(fields.key("preset"), "give either preset or mixing_length, not both "
+                reader.problem(fields.key("preset"), GridProblemKind.CONFLICT,
+                        "give either preset or mixing_length, not both "
                         + "(a preset sets the mixing length)");
                 alphas = null;
             } else {
@@ -65,13 +68,15 @@ final class PhysicsReader {
         List<Double> factors = fields.has("opacity_factor")
                 ? AxisValues.distinct(fields.value("opacity_factor"), "opacity_factor", POSITIVE, reader)
                 : List.of(d.opacityFactor());
-        String table = fields.has("opacity_table") ? opacityTable(fields.value("opacity_table"), reader) : "";
+        OpacityChoice table = fields.has("opacity_table") ? opacityTable(fields.value("opacity_table"), reader)
+                : OpacityChoice.BUILT_IN;
         AtmosphereChoice atmosphere = fields.has("atmosphere") ? atmosphere(fields.value("atmosphere"), reader)
                 : AtmosphereChoice.DEFAULT;
         if (preset != null && preset.atmosphere() != null) {
             // a calibrated mixing length belongs to the atmosphere it was calibrated with
             if (fields.has("atmosphere") && atmosphere != null && atmosphere != preset.atmosphere()) {
-                reader.problem(fields.value("atmosphere"), "the preset's mixing length was calibrated with atmosphere "
+                reader.problem(fields.value("atmosphere"), GridProblemKind.CONFLICT,
+                        "the preset's mixing length was calibrated with atmosphere "
                         + preset.atmosphere().label() + ", this grid asks for " + atmosphere.label()
                         + ": drop 'atmosphere' or calibrate again with --atmosphere " + atmosphere.label());
                 atmosphere = null;
@@ -96,7 +101,8 @@ final class PhysicsReader {
         }
         OvershootScheme scheme = OvershootScheme.fromLabel(text);
         if (scheme == null) {
-            reader.problem(node, "overshoot_scheme must be step or exponential, got '" + text + "'");
+            reader.problem(node, GridProblemKind.UNKNOWN_CHOICE,
+                    "overshoot_scheme must be step or exponential, got '" + text + "'");
         }
         return scheme;
     }
@@ -109,16 +115,17 @@ final class PhysicsReader {
         }
         AtmosphereChoice choice = AtmosphereChoice.fromLabel(text);
         if (choice == null) {
-            reader.problem(node, "atmosphere must be eddington or krishna_swamy, got '" + text + "'");
+            reader.problem(node, GridProblemKind.UNKNOWN_CHOICE,
+                    "atmosphere must be eddington or krishna_swamy, got '" + text + "'");
         }
         return choice;
     }
 
     /**
      * A user opacity table, resolved against the grid file's folder and read once here so that a bad table is
-     * reported with the grid file's line and column, before anything runs.
+     * reported with the grid file's line and column, before anything runs; the table read is the one the run uses.
      */
-    private static String opacityTable(Node node, NodeReader reader) {
+    private static OpacityChoice opacityTable(Node node, NodeReader reader) {
         String text = reader.text(node, "opacity_table");
         if (text == null) {
             return null;
@@ -126,12 +133,11 @@ final class PhysicsReader {
         Path folder = Path.of(reader.file()).toAbsolutePath().getParent();
         Path table = folder == null ? Path.of(text) : folder.resolve(text);
         try {
-            OpacityTableReader.read(table);
+            return OpacityChoice.table(table.normalize().toString(), OpacityTableReader.read(table));
         } catch (ConvgridException e) {
-            reader.problem(node, "opacity_table: " + e.getMessage());
+            reader.problem(node, GridProblemKind.UNREADABLE_FILE, "opacity_table: " + e.getMessage());
             return null;
         }
-        return table.normalize().toString();
     }
 
     private static List<StabilityCriterion> criteria(Node node, NodeReader reader) {
@@ -149,9 +155,11 @@ final class PhysicsReader {
                 default -> null;
             };
             if (text != null && criterion == null) {
-                reader.problem(item, "criterion must be schwarzschild or ledoux, got '" + text + "'");
+                reader.problem(item, GridProblemKind.UNKNOWN_CHOICE,
+                        "criterion must be schwarzschild or ledoux, got '" + text + "'");
             } else if (criterion != null && criteria.contains(criterion)) {
-                reader.problem(item, "duplicate criterion " + criterion.name().toLowerCase(Locale.ROOT));
+                reader.problem(item, GridProblemKind.DUPLICATE,
+                        "duplicate criterion " + criterion.name().toLowerCase(Locale.ROOT));
                 criterion = null;
             }
             ok &= criterion != null;

@@ -6,6 +6,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
+import org.convgrid.grids.GridProblemKind;
 import org.convgrid.grids.GridProblem;
 import org.snakeyaml.engine.v2.api.LoadSettings;
 import org.snakeyaml.engine.v2.api.lowlevel.Compose;
@@ -49,13 +50,14 @@ final class PresetReader {
         try {
             text = Files.readString(file);
         } catch (IOException e) {
-            reader.problem(node, "preset: cannot read " + file + " (" + e.getClass().getSimpleName() + ")");
+            reader.problem(node, GridProblemKind.UNREADABLE_FILE,
+                    "preset: cannot read " + file + " (" + e.getClass().getSimpleName() + ")");
             return null;
         }
         NodeReader inner = new NodeReader(file.toString());
         Preset preset = parse(text, inner);
         for (GridProblem p : inner.problems()) {
-            reader.problem(node, "preset " + p);
+            reader.problem(node, p.kind(), "preset " + p);
         }
         return inner.problems().isEmpty() ? preset : null;
     }
@@ -66,14 +68,16 @@ final class PresetReader {
             root = new Compose(LoadSettings.builder().setLabel(inner.file()).setMaxAliasesForCollections(0).build())
                     .composeString(text);
         } catch (MarkedYamlEngineException e) {
-            inner.problem(e.getProblemMark().or(e::getContextMark), "YAML syntax: " + e.getProblem());
+            inner.problem(e.getProblemMark().or(e::getContextMark), GridProblemKind.SYNTAX,
+                    "YAML syntax: " + e.getProblem());
             return null;
         } catch (YamlEngineException e) {
-            inner.problem(Optional.empty(), "YAML syntax: " + e.getMessage());
+            inner.problem(Optional.empty(), GridProblemKind.SYNTAX, "YAML syntax: " + e.getMessage());
             return null;
         }
         if (root.isEmpty()) {
-            inner.problem(Optional.empty(), "the preset is empty; it needs at least 'mixing_length'");
+            inner.problem(Optional.empty(), GridProblemKind.MISSING_KEY,
+                    "the preset is empty; it needs at least 'mixing_length'");
             return null;
         }
         MappingNode map = inner.mapping(root.get(), "the preset");
@@ -87,12 +91,13 @@ final class PresetReader {
             }
         }
         if (!fields.has("mixing_length")) {
-            inner.problem(map, "the preset needs 'mixing_length'");
+            inner.problem(map, GridProblemKind.MISSING_KEY, "the preset needs 'mixing_length'");
             return null;
         }
         List<Double> alpha = AxisValues.distinct(fields.value("mixing_length"), "mixing_length", POSITIVE, inner);
         if (alpha != null && alpha.size() != 1) {
-            inner.problem(fields.value("mixing_length"), "mixing_length in a preset must be one value");
+            inner.problem(fields.value("mixing_length"), GridProblemKind.WRONG_TYPE,
+                    "mixing_length in a preset must be one value");
             return null;
         }
         AtmosphereChoice atmosphere = null;

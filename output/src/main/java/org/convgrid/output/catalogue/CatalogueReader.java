@@ -12,7 +12,7 @@ import java.util.Locale;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
-import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.output.CsvNumbers;

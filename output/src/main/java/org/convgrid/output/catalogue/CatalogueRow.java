@@ -2,7 +2,7 @@ package org.convgrid.output.catalogue;
 
 import java.util.List;
 import java.util.Objects;
-import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.output.Span;

@@ -1,9 +1,10 @@
 package org.convgrid.output.catalogue;
 
 import java.util.List;
-import org.convgrid.engine.batch.GlobalProperties;
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelRequest;
+import org.convgrid.engine.request.Age;
+import org.convgrid.engine.request.GlobalProperties;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.units.Constants;
@@ -22,13 +23,13 @@ public final class OutcomeRows {
     /** The catalogue row of one outcome. */
     public static CatalogueRow toRow(ModelOutcome outcome) {
         ModelRequest request = outcome.request();
-        GlobalProperties g = outcome.global();
-        ConvectiveStructure c = outcome.convection();
+        GlobalProperties g = outcome instanceof ModelOutcome.Solved s ? s.global() : null;
+        ConvectiveStructure c = outcome instanceof ModelOutcome.Solved s ? s.convection() : null;
         double nan = Double.NaN;
         List<Span> zones = c == null ? List.of() : c.zones().stream().map(OutcomeRows::span).toList();
         return new CatalogueRow(request.modelId(), request.mass() / Constants.M_SUN, request.initialMetals(),
                 request.initialHelium(), request.physics().mixingLength(), request.physics().overshoot(),
-                request.age() / Constants.GYR, outcome.status(), outcome.statusDetail(),
+                ageGyr(request.age()), outcome.status(), outcome.statusDetail(),
                 g == null ? nan : g.luminosity() / Constants.L_SUN,
                 g == null ? nan : g.radius() / Constants.R_SUN,
                 g == null ? nan : g.effectiveTemperature(),
@@ -45,6 +46,11 @@ public final class OutcomeRows {
                 zones, outcome.solverIterations(), request.physics().criterion(),
                 request.physics().opacityFactor(),
                 c == null ? nan : c.turnoverTimeGlobal() / Constants.DAY);
+    }
+
+    /** Gyr since the zero-age main sequence; NaN (not applicable) for a fraction no solver resolved. */
+    private static double ageGyr(Age age) {
+        return age instanceof Age.SinceZeroAge since ? since.seconds() / Constants.GYR : Double.NaN;
     }
 
     /** A zone's mass extent, clamped into [0, 1] against round-off at the centre and surface. */

@@ -1,5 +1,6 @@
 package org.convgrid.output.manifest;
 
+import java.nio.file.Path;
 import java.time.Instant;
 import java.time.format.DateTimeParseException;
 import java.util.ArrayList;
@@ -7,10 +8,12 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import org.convgrid.engine.batch.ModelStatus;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.convection.StabilityCriterion;
-import org.convgrid.engine.physics.OvershootScheme;
+import org.convgrid.engine.physics.opacity.OpacityTableReader;
+import org.convgrid.engine.request.OpacityChoice;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.output.OutputFormatException;
 import org.snakeyaml.engine.v2.api.Load;
@@ -44,7 +47,8 @@ public final class RunManifestReader {
                 if (atmosphere == null || scheme == null) {
                     throw new IllegalArgumentException("unknown atmosphere or overshoot_scheme in " + p);
                 }
-                String table = p.containsKey("opacity_table") ? (String) p.get("opacity_table") : "";
+                OpacityChoice table = p.containsKey("opacity_table")
+                        ? tableAt((String) p.get("opacity_table")) : OpacityChoice.BUILT_IN;
                 physics.add(new PhysicsOptions(number(p, "mixing_length"), number(p, "overshoot"),
                         StabilityCriterion.valueOf(((String) p.get("criterion")).toUpperCase(Locale.ROOT)),
                         number(p, "opacity_factor"), table, atmosphere, scheme));
@@ -76,5 +80,10 @@ public final class RunManifestReader {
 
     private static double number(Map<?, ?> map, String key) {
         return ((Number) map.get(key)).doubleValue();
+    }
+
+    /** The user table a run used, read when a model first needs it (listing or plotting a run does not). */
+    private static OpacityChoice tableAt(String path) {
+        return OpacityChoice.tableAt(path, () -> OpacityTableReader.read(Path.of(path)));
     }
 }

@@ -7,11 +7,11 @@ import static org.assertj.core.api.Assertions.within;
 import java.io.IOException;
 import java.io.StringReader;
 import java.util.List;
-import org.convgrid.engine.batch.GlobalProperties;
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelRequest;
-import org.convgrid.engine.batch.ModelStatus;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.GlobalProperties;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.convection.StabilityCriterion;
@@ -33,14 +33,14 @@ class CatalogueRoundTripTest {
         ConvectiveStructure convection = new ConvectiveStructure(
                 List.of(new ConvectiveZone(0.9755, 1.0, 0.713, 1.0)), StructureClass.CONV_ENVELOPE, 0.0, 0.9755,
                 0.713, 0.0245 * Constants.M_SUN, 25.0 * Constants.DAY, 40.0 * Constants.DAY);
-        return new ModelOutcome(request, ModelStatus.OK, "", global, convection, 7);
+        return new ModelOutcome.Solved(request, global, convection, 7);
     }
 
     static ModelOutcome failed() {
         ModelRequest request = new ModelRequest("p0-z01-m010-a00", 1.1 * Constants.M_SUN, 0.014, 0.268, 0.0,
                 new PhysicsOptions(2.0, 0.1, StabilityCriterion.LEDOUX, 1.0));
-        return new ModelOutcome(request, ModelStatus.NOT_CONVERGED, "residual 3e-2 after 40 iterations, shell 512",
-                null, null, 40);
+        return new ModelOutcome.Failed(request, ModelStatus.NOT_CONVERGED,
+                "residual 3e-2 after 40 iterations, shell 512", 40);
     }
 
     @Test

@@ -6,10 +6,11 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import java.time.Instant;
 import java.util.List;
 import java.util.Map;
-import org.convgrid.engine.batch.ModelStatus;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.convection.StabilityCriterion;
-import org.convgrid.engine.physics.OvershootScheme;
+import org.convgrid.engine.request.OpacityChoice;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.output.OutputFormatException;
 import org.junit.jupiter.api.Test;
@@ -22,7 +23,10 @@ class RunManifestTest {
     private static RunManifest manifest() {
         return new RunManifest("0.1.0", "grids/demo.yaml", GRID, "ab".repeat(32), "cd".repeat(32),
                 List.of(PhysicsOptions.DEFAULT, new PhysicsOptions(2.0, 0.1, StabilityCriterion.LEDOUX, 1.0),
-                        new PhysicsOptions(1.7, 0.016, StabilityCriterion.SCHWARZSCHILD, 1.0, "tables/mine.txt",
+                        new PhysicsOptions(1.7, 0.016, StabilityCriterion.SCHWARZSCHILD, 1.0,
+                                OpacityChoice.tableAt("tables/mine.txt", () -> {
+                                    throw new AssertionError("a manifest never reads its opacity table");
+                                }),
                                 AtmosphereChoice.EDDINGTON, OvershootScheme.EXPONENTIAL)),
                 Instant.parse("2026-03-01T10:00:00Z"), null, 2, "1/3", Map.of(ModelStatus.OK, 3L), Double.NaN);
     }

@@ -6,7 +6,7 @@ import java.nio.file.Path;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
-import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueRow;

@@ -1,4 +1,4 @@
-package org.convgrid.engine.evolution;
+package org.convgrid.engine.batch;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
@@ -6,10 +6,12 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelRequest;
-import org.convgrid.engine.batch.ModelStatus;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.evolution.EvolutionStep;
+import org.convgrid.engine.evolution.MainSequenceEvolver;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.units.Constants;
 import org.junit.jupiter.api.Test;
 
@@ -40,9 +42,10 @@ class GridRequestsTest {
                 .isEqualTo(ModelStatus.OK));
         // the Sun brightens on the main sequence (Sackmann, Boothroyd & Kraemer 1993, ApJ 418, 457, Table 2:
         // L grows monotonically from the ZAMS); central hydrogen falls as it burns
-        assertThat(out.get(1).global().luminosity()).isGreaterThan(out.get(0).global().luminosity());
-        assertThat(out.get(2).global().luminosity()).isGreaterThan(out.get(1).global().luminosity());
-        assertThat(out.get(2).global().centralHydrogen()).isLessThan(out.get(1).global().centralHydrogen());
+        assertThat(out.get(1).solved().global().luminosity()).isGreaterThan(out.get(0).solved().global().luminosity());
+        assertThat(out.get(2).solved().global().luminosity()).isGreaterThan(out.get(1).solved().global().luminosity());
+        assertThat(out.get(2).solved().global().centralHydrogen())
+                .isLessThan(out.get(1).solved().global().centralHydrogen());
         // a 2 Msun star leaves the main sequence after ~1 Gyr (Schaller et al. 1992, A&A Suppl. 96, 269, Table 47:
         // H-burning lifetime 1.1 Gyr at Z = 0.02), so 3 Gyr is past it
         assertThat(out.get(4).status()).isEqualTo(ModelStatus.PAST_MAIN_SEQUENCE);
@@ -65,7 +68,8 @@ class GridRequestsTest {
     @Test
     void aZeroAgeChunkEvolvesNothingAndHandsOverNoTrack() {
         Map<String, List<EvolutionStep>> tracks = new ConcurrentHashMap<>();
-        List<ModelOutcome> out = new GridRequests((first, steps) -> tracks.put(first.modelId(), steps))
+        List<ModelOutcome> out = new GridRequests((first, steps) -> tracks.put(first.modelId(), steps),
+                MainSequenceEvolver.Settings.DEFAULT)
                 .solve(List.of(request("m0-a0", 0.8, 0.0), request("m1-a0", 0.9, 0.0)));
         assertThat(out).allSatisfy(o -> assertThat(o.status()).isEqualTo(ModelStatus.OK));
         assertThat(tracks).isEmpty();

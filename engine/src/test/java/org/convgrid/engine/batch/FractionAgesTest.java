@@ -1,4 +1,4 @@
-package org.convgrid.engine.evolution;
+package org.convgrid.engine.batch;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
@@ -7,15 +7,18 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelRequest;
-import org.convgrid.engine.batch.ModelStatus;
-import org.convgrid.engine.batch.PhysicsOptions;
+import org.convgrid.engine.evolution.EvolutionStep;
+import org.convgrid.engine.evolution.MainSequenceEvolver;
+import org.convgrid.engine.request.Age;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.units.Constants;
 import org.junit.jupiter.api.Test;
 
 /**
- * Ages as fractions of the main-sequence lifetime ({@link AgeMeaning#MS_FRACTION}), Z = 0.0188, Y = 0.275, time-step
+ * Ages as fractions of the main-sequence lifetime ({@link Age.MainSequenceFraction}), Z = 0.0188, Y = 0.275, time-step
  * limits three times the default to keep the test fast.
  */
 class FractionAgesTest {
@@ -23,14 +26,19 @@ class FractionAgesTest {
     private static final MainSequenceEvolver.Settings COARSE = MainSequenceEvolver.Settings.DEFAULT.scaled(3.0);
 
     private static ModelRequest request(String id, double massInSun, double fraction) {
-        return new ModelRequest(id, massInSun * Constants.M_SUN, 0.0188, 0.275, fraction, PhysicsOptions.DEFAULT);
+        return new ModelRequest(id, massInSun * Constants.M_SUN, 0.0188, 0.275,
+                new Age.MainSequenceFraction(fraction), PhysicsOptions.DEFAULT);
     }
 
     private static List<ModelOutcome> solve(Map<String, List<EvolutionStep>> tracks) {
-        GridRequests solver = new GridRequests((first, steps) -> tracks.put(first.modelId(), steps), COARSE,
-                AgeMeaning.MS_FRACTION);
+        GridRequests solver = new GridRequests((first, steps) -> tracks.put(first.modelId(), steps), COARSE);
         return solver.solve(List.of(request("m0-a0", 1.0, 0.0), request("m0-a1", 1.0, 0.5),
                 request("m0-a2", 1.0, 1.0)));
+    }
+
+    /** The resolved age an outcome carries, s. */
+    private static double seconds(ModelOutcome o) {
+        return ((Age.SinceZeroAge) o.request().age()).seconds();
     }
 
     @Test
@@ -40,13 +48,13 @@ class FractionAgesTest {
 
         assertThat(out).extracting(o -> o.request().modelId()).containsExactly("m0-a0", "m0-a1", "m0-a2");
         assertThat(out).allSatisfy(o -> assertThat(o.status()).as(o.statusDetail()).isEqualTo(ModelStatus.OK));
-        double lifetime = out.get(2).request().age();
-        assertThat(out.get(0).request().age()).isZero();
+        double lifetime = seconds(out.get(2));
+        assertThat(seconds(out.get(0))).isZero();
         // the rows carry resolved ages in s: f = 0.5 lands exactly on half of the f = 1 (exhaustion) age
-        assertThat(out.get(1).request().age()).isEqualTo(0.5 * lifetime);
+        assertThat(seconds(out.get(1))).isEqualTo(0.5 * lifetime);
         // f = 1 is the exhaustion point: central X at the end value 1e-4, to within the landing run's own steps
-        assertThat(out.get(2).global().centralHydrogen()).isBetween(0.2e-4, 3.0e-4);
-        assertThat(out.get(1).global().centralHydrogen()).isBetween(0.1, 0.6);
+        assertThat(out.get(2).solved().global().centralHydrogen()).isBetween(0.2e-4, 3.0e-4);
+        assertThat(out.get(1).solved().global().centralHydrogen()).isBetween(0.1, 0.6);
         // the Sun's core-hydrogen lifetime is about 10 Gyr (from memory, e.g. Sackmann, Boothroyd & Kraemer 1993,
         // ApJ 418, 457: X_c exhausted near 9-10 Gyr); loose bounds for Z = 0.0188 and coarse steps
         assertThat(lifetime / Constants.GYR).isBetween(7.0, 13.0);
@@ -58,18 +66,17 @@ class FractionAgesTest {
         List<ModelOutcome> again = solve(new ConcurrentHashMap<>());
         for (int i = 0; i < out.size(); i++) {
             assertThat(again.get(i).request()).isEqualTo(out.get(i).request());
-            assertThat(again.get(i).global()).isEqualTo(out.get(i).global());
+            assertThat(again.get(i).solved().global()).isEqualTo(out.get(i).solved().global());
         }
     }
 
     @Test
     void zeroFractionsNeedNoLifetimeAndNonFractionsAreRefused() {
         Map<String, List<EvolutionStep>> tracks = new ConcurrentHashMap<>();
-        GridRequests solver = new GridRequests((first, steps) -> tracks.put(first.modelId(), steps), COARSE,
-                AgeMeaning.MS_FRACTION);
+        GridRequests solver = new GridRequests((first, steps) -> tracks.put(first.modelId(), steps), COARSE);
         List<ModelOutcome> zams = solver.solve(List.of(request("m0-a0", 0.8, 0.0)));
         assertThat(zams.get(0).status()).isEqualTo(ModelStatus.OK);
-        assertThat(zams.get(0).request().age()).isZero();
+        assertThat(seconds(zams.get(0))).isZero();
         assertThat(tracks).isEmpty();
 
         List<ModelOutcome> wrong = solver.solve(List.of(request("m0-a0", 1.0, 0.0),
@@ -77,7 +84,7 @@ class FractionAgesTest {
         assertThat(wrong).allSatisfy(o -> {
             assertThat(o.status()).isEqualTo(ModelStatus.FAILED);
             assertThat(o.statusDetail()).contains("not a main-sequence fraction");
-            assertThat(o.request().age()).isNaN();
+            assertThat(seconds(o)).isNaN();
         });
     }
 }

@@ -1,7 +1,7 @@
-package org.convgrid.engine.batch;
+package org.convgrid.engine.request;
 
 import org.convgrid.engine.convection.StabilityCriterion;
-import org.convgrid.engine.physics.OvershootScheme;
+import org.convgrid.engine.overshoot.Overshoot;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 
 /**
@@ -12,17 +12,17 @@ import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
  *                  exponential one
  * @param criterion Schwarzschild or Ledoux
  * @param opacityFactor multiplies every opacity (1 = as published)
- * @param opacityTable path of a user opacity table in convgrid's table layout; empty for the built-in opacity
+ * @param opacity the built-in opacity or a user table, before the factor
  * @param atmosphere the grey T(tau) relation of the surface boundary
  * @param overshootScheme step (default) or exponential overshoot
  */
 public record PhysicsOptions(double mixingLength, double overshoot, StabilityCriterion criterion,
-                             double opacityFactor, String opacityTable, AtmosphereChoice atmosphere,
+                             double opacityFactor, OpacityChoice opacity, AtmosphereChoice atmosphere,
                              OvershootScheme overshootScheme) {
 
     public PhysicsOptions {
-        if (opacityTable == null) {
-            throw new IllegalArgumentException("opacityTable must not be null; use \"\" for none");
+        if (opacity == null) {
+            throw new IllegalArgumentException("opacity must not be null; use OpacityChoice.BUILT_IN");
         }
         if (atmosphere == null) {
             throw new IllegalArgumentException("atmosphere must not be null");
@@ -34,35 +34,45 @@ public record PhysicsOptions(double mixingLength, double overshoot, StabilityCri
 
     /** Options with step overshoot. */
     public PhysicsOptions(double mixingLength, double overshoot, StabilityCriterion criterion, double opacityFactor,
-                          String opacityTable, AtmosphereChoice atmosphere) {
-        this(mixingLength, overshoot, criterion, opacityFactor, opacityTable, atmosphere, OvershootScheme.STEP);
+                          OpacityChoice opacity, AtmosphereChoice atmosphere) {
+        this(mixingLength, overshoot, criterion, opacityFactor, opacity, atmosphere, OvershootScheme.STEP);
     }
 
     /** Options with the default atmosphere ({@link AtmosphereChoice#DEFAULT}). */
     public PhysicsOptions(double mixingLength, double overshoot, StabilityCriterion criterion, double opacityFactor,
-                          String opacityTable) {
-        this(mixingLength, overshoot, criterion, opacityFactor, opacityTable, AtmosphereChoice.DEFAULT);
+                          OpacityChoice opacity) {
+        this(mixingLength, overshoot, criterion, opacityFactor, opacity, AtmosphereChoice.DEFAULT);
     }
 
     /** Options with the built-in opacity and the default atmosphere. */
     public PhysicsOptions(double mixingLength, double overshoot, StabilityCriterion criterion, double opacityFactor) {
-        this(mixingLength, overshoot, criterion, opacityFactor, "");
+        this(mixingLength, overshoot, criterion, opacityFactor, OpacityChoice.BUILT_IN);
     }
 
     /** Whether a user opacity table replaces the built-in opacity. */
     public boolean usesOpacityTable() {
-        return !opacityTable.isEmpty();
+        return opacity.isTable();
+    }
+
+    /** The path of the user opacity table, as the manifest records it; empty for the built-in opacity. */
+    public String opacityTable() {
+        return opacity.source();
+    }
+
+    /** The overshoot these options ask for. */
+    public Overshoot overshootModel() {
+        return overshootScheme.model(overshoot);
     }
 
     /** The same options with another atmosphere. */
     public PhysicsOptions withAtmosphere(AtmosphereChoice choice) {
-        return new PhysicsOptions(mixingLength, overshoot, criterion, opacityFactor, opacityTable, choice,
+        return new PhysicsOptions(mixingLength, overshoot, criterion, opacityFactor, opacity, choice,
                 overshootScheme);
     }
 
     /** The same options with another overshoot scheme. */
     public PhysicsOptions withOvershootScheme(OvershootScheme scheme) {
-        return new PhysicsOptions(mixingLength, overshoot, criterion, opacityFactor, opacityTable, atmosphere,
+        return new PhysicsOptions(mixingLength, overshoot, criterion, opacityFactor, opacity, atmosphere,
                 scheme);
     }
 

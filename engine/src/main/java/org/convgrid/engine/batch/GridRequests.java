@@ -1,14 +1,19 @@
-package org.convgrid.engine.evolution;
+package org.convgrid.engine.batch;
 
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
-import org.convgrid.engine.batch.ChunkSolver;
-import org.convgrid.engine.batch.ModelOutcome;
-import org.convgrid.engine.batch.ModelRequest;
-import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.engine.request.Age;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.error.ConvgridException;
+import org.convgrid.engine.evolution.AgedModel;
+import org.convgrid.engine.evolution.EvolutionResult;
+import org.convgrid.engine.evolution.EvolutionStep;
+import org.convgrid.engine.evolution.MainSequenceEvolver;
+import org.convgrid.engine.evolution.TrackSink;
 import org.convgrid.engine.physics.PhysicsBundles;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.state.Composition;
@@ -20,24 +25,24 @@ import org.convgrid.engine.zams.ZamsTrack;
 import org.convgrid.engine.zams.ZeroAgeRequests;
 
 /**
- * Solves grid requests at any age. A chunk walks its masses in order on a fresh {@link ZamsTrack} (each zero-age
- * model seeded by homology from its converged neighbours); the requests of one mass
- * (consecutive in a chunk) are answered by one {@link MainSequenceEvolver} run from that zero-age model, stopped at
- * the largest requested age, with a step landing exactly on every requested age (no interpolation). Age 0 is the
- * zero-age model itself. Ages beyond core-hydrogen exhaustion are {@link ModelStatus#PAST_MAIN_SEQUENCE} with the
- * exhaustion age in the detail; a failed evolution leaves the ages it did not reach
- * {@link ModelStatus#NOT_CONVERGED}. Each star with an age above zero hands its track to the {@link TrackSink}.
+ * Solves grid requests at any age. A chunk walks its masses in order on a fresh {@link ZamsTrack} (each zero-age model
+ * seeded by homology from its converged neighbours); the requests of one mass (consecutive in a chunk) are answered by
+ * one {@link MainSequenceEvolver} run from that zero-age model, stopped at the largest requested age, with a step
+ * landing exactly on every requested age (no interpolation). Age 0 is the zero-age model itself; ages are {@link
+ * Age.SinceZeroAge} in s. Ages beyond core-hydrogen exhaustion are {@link ModelStatus#PAST_MAIN_SEQUENCE} with the
+ * exhaustion age in the detail; a failed evolution leaves the ages it did not reach {@link ModelStatus#NOT_CONVERGED}.
+ * Each star with an age above zero hands its track to the {@link TrackSink}.
  *
- * <p>With {@link AgeMeaning#MS_FRACTION} the request ages are fractions f of each star's main-sequence lifetime:
- * the star is first evolved to core-hydrogen exhaustion ({@link LifetimeSearch}) to find t_MS, then evolved again
- * from its zero-age model landing exactly on every t = f t_MS (f = 1: the exhaustion age, X_c = 1e-4 by default, to
- * within the second run's steps); the outcomes carry the request with t in s. The track handed over is the second
- * run's, and the iteration counts are those of the second run. A star whose lifetime cannot be found (evolution
- * failed, or X_c still above the end value at the age limit, as for stars below about 0.9 Msun with the default
- * 20 Gyr) answers its non-zero fractions {@link ModelStatus#NOT_CONVERGED} with age NaN and the reason.
+ * <p>When a star's request ages are {@link Age.MainSequenceFraction}s, they are fractions f of its main-sequence
+ * lifetime: the star is first evolved to core-hydrogen exhaustion ({@link LifetimeSearch}) to find t_MS, then evolved
+ * again from its zero-age model landing exactly on every t = f t_MS (f = 1: the exhaustion age, X_c = 1e-4 by default,
+ * to within the second run's steps); the outcomes carry the request with t in s. The track handed over is the second
+ * run's, and the iteration counts are those of the second run. A star whose lifetime cannot be found (evolution failed,
+ * or X_c still above the end value at the age limit, as for stars below about 0.9 Msun with the default 20 Gyr) answers
+ * its non-zero fractions {@link ModelStatus#NOT_CONVERGED} with age NaN and the reason.
  *
- * <p>An outcome depends only on its chunk, never on threads. Thread-safe: the physics bundle of each
- * (options, composition) line is built once per instance and shared; the bundles are immutable.
+ * <p>An outcome depends only on its chunk, never on threads. Thread-safe: the physics bundle of each (options,
+ * composition) line is built once per instance and shared; the bundles are immutable.
  */
 public final class GridRequests implements ChunkSolver {
 
@@ -53,22 +58,14 @@ public final class GridRequests implements ChunkSolver {
     private final PhysicsBundles physics = new PhysicsBundles();
     private final TrackSink tracks;
     private final MainSequenceEvolver.Settings settings;
-    private final AgeMeaning meaning;
 
     /**
      * @param tracks receives the track of every star evolved beyond age 0
      * @param settings time-step settings; {@code maxAge} caps the ages answered (older ones fail)
-     * @param meaning how the request ages are read (the grid's age axis)
      */
-    public GridRequests(TrackSink tracks, MainSequenceEvolver.Settings settings, AgeMeaning meaning) {
+    public GridRequests(TrackSink tracks, MainSequenceEvolver.Settings settings) {
         this.tracks = tracks;
         this.settings = settings;
-        this.meaning = meaning;
-    }
-
-    /** Ages in seconds. */
-    public GridRequests(TrackSink tracks, MainSequenceEvolver.Settings settings) {
-        this(tracks, settings, AgeMeaning.SECONDS);
     }
 
     /** Default time steps ({@link MainSequenceEvolver.Settings#DEFAULT}). */
@@ -99,7 +96,8 @@ public final class GridRequests implements ChunkSolver {
             }
             List<ModelRequest> star = chunk.subList(start, end);
             ZamsResult zeroAge = track.solve(star.get(0).mass());
-            out.addAll(meaning == AgeMeaning.MS_FRACTION ? FractionAges.answers(this, set, star, zeroAge)
+            out.addAll(star.get(0).age() instanceof Age.MainSequenceFraction
+                    ? FractionAges.answers(this, set, star, zeroAge)
                     : star(set, star, zeroAge, settings));
             start = end;
         }
@@ -107,28 +105,35 @@ public final class GridRequests implements ChunkSolver {
     }
 
     /**
-     * The answers for the requests of one star (one mass, ages in s), in their order.
+     * The answers for the requests of one star (one mass, ages since the zero-age main sequence), in their order;
+     * an age of another kind is answered {@link ModelStatus#FAILED}.
      *
      * @param base the evolution settings, before stopping at the oldest requested age
      */
     List<Answer> star(PhysicsSet set, List<ModelRequest> star, ZamsResult zeroAge, MainSequenceEvolver.Settings base) {
         List<Answer> out = new ArrayList<>(star.size());
-        double oldest = star.stream().mapToDouble(ModelRequest::age).max().orElse(0.0);
+        for (ModelRequest r : star) {
+            if (!(r.age() instanceof Age.SinceZeroAge)) {
+                String detail = "age " + r.age() + " of " + r.modelId() + " mixes age kinds within one star";
+                return star.stream().map(q -> new Answer(failed(q, ModelStatus.FAILED, detail), null)).toList();
+            }
+        }
+        double oldest = star.stream().mapToDouble(GridRequests::seconds).max().orElse(0.0);
         if (!zeroAge.converged() || oldest <= 0.0) {
             for (ModelRequest r : star) {
                 ModelOutcome zams = ZeroAgeRequests.outcome(r, zeroAge);
-                out.add(r.age() <= 0.0 || !zeroAge.converged() ? new Answer(zams, modelOf(zeroAge))
+                out.add(seconds(r) <= 0.0 || !zeroAge.converged() ? new Answer(zams, modelOf(zeroAge))
                         : new Answer(failed(r, ModelStatus.NOT_CONVERGED, "no zero-age model to evolve"), null));
             }
             return out;
         }
-        double[] ages = star.stream().mapToDouble(ModelRequest::age).toArray();
+        double[] ages = star.stream().mapToDouble(GridRequests::seconds).toArray();
         EvolutionResult result;
         try {
             result = new MainSequenceEvolver(set, stoppingAt(base, oldest)).evolve(zeroAge.model().model(), ages);
         } catch (ConvgridException e) {
             for (ModelRequest r : star) {
-                out.add(r.age() <= 0.0 ? new Answer(ZeroAgeRequests.outcome(r, zeroAge), modelOf(zeroAge))
+                out.add(seconds(r) <= 0.0 ? new Answer(ZeroAgeRequests.outcome(r, zeroAge), modelOf(zeroAge))
                         : new Answer(failed(r, ModelStatus.NOT_CONVERGED, "evolution failed: " + e.getMessage()),
                         null));
             }
@@ -144,7 +149,7 @@ public final class GridRequests implements ChunkSolver {
     private Answer answer(ModelRequest request, AgedModel aged, EvolutionResult result, int zeroAgeIterations) {
         if (aged.status() == ModelStatus.OK) {
             StellarModel m = aged.model();
-            return new Answer(new ModelOutcome(request, ModelStatus.OK, "", m.global(), m.convection(),
+            return new Answer(new ModelOutcome.Solved(request, m.global(), m.convection(),
                     zeroAgeIterations + iterationsUpTo(result, aged.age())), m);
         }
         String detail = aged.detail();
@@ -183,7 +188,12 @@ public final class GridRequests implements ChunkSolver {
     }
 
     static ModelOutcome failed(ModelRequest r, ModelStatus status, String detail) {
-        return new ModelOutcome(r, status, detail, null, null, 0);
+        return new ModelOutcome.Failed(r, status, detail, 0);
+    }
+
+    /** The age of a request known to be counted from the zero-age main sequence, s. */
+    private static double seconds(ModelRequest r) {
+        return ((Age.SinceZeroAge) r.age()).seconds();
     }
 
 }

@@ -1,4 +1,4 @@
-package org.convgrid.engine.batch;
+package org.convgrid.engine.request;
 
 /**
  * Surface and central properties of a converged model, cgs units.

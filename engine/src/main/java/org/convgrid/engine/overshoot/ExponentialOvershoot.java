@@ -1,7 +1,7 @@
-package org.convgrid.engine.evolution;
+package org.convgrid.engine.overshoot;
 
-import org.convgrid.engine.structure.MassMesh;
-import org.convgrid.engine.structure.StellarProfile;
+import java.util.Optional;
+import java.util.function.IntToDoubleFunction;
 
 /**
  * Exponential diffusive overshoot (Freytag, Ludwig &amp; Steffen 1996, A&amp;A 313, 497; Herwig 2000, A&amp;A 360,
@@ -10,19 +10,39 @@ import org.convgrid.engine.structure.StellarProfile;
  * pressure scale height at the boundary and D_0 = v_c l_m/3 (l_m = alpha H_P) the mixing-length diffusion
  * coefficient a distance f0 H_P inside the boundary, here with f0 = f (a choice; Herwig 2000 leaves f0 open).
  * Boundaries are located as in {@link StepOvershoot}. Where zones overlap the larger D wins. The returned S =
- * (4 pi r^2 rho)^2 D feeds the implicit diffusion step of {@link SemiconvectiveMixing}; the convective points
- * themselves are left to {@link ConvectiveMixing}. Stateless.
+ * (4 pi r^2 rho)^2 D feeds the evolution's implicit diffusion step; the convective points themselves are
+ * mixed instantaneously by the evolution.
+ *
+ * @param f e-folding parameter of the exponential, pressure scale heights (0: no overshoot)
  */
-final class ExponentialOvershoot {
+public record ExponentialOvershoot(double f) implements Overshoot {
+
+    /** The grid-file name of this scheme. */
+    public static final String LABEL = "exponential";
 
     private static final double FOUR_PI = 4.0 * Math.PI;
-    /**
-     * Largest S dt/Dm^2 kept: a coupling this strong already homogenises the cells within the step, and a
-     * stronger one only costs conservation (the elimination rounds at ~1e-16 times it).
-     */
-    static final double MAX_COUPLING = 1.0e6;
 
-    private ExponentialOvershoot() {
+
+    @Override
+    public String label() {
+        return LABEL;
+    }
+
+    @Override
+    public double parameter() {
+        return f;
+    }
+
+    /** Only the convective points: this scheme mixes beyond them by diffusion. */
+    @Override
+    public boolean[] mixedPoints(IntToDoubleFunction massAt, boolean[] convective, OvershootProfile previous) {
+        return convective.clone();
+    }
+
+    /** {@link #coefficients}, or empty when f = 0 (no diffusion step at all). */
+    @Override
+    public Optional<double[]> diffusion(OvershootProfile previous, double mixingLength) {
+        return f > 0.0 ? Optional.of(coefficients(previous, mixingLength, f)) : Optional.empty();
     }
 
     /**
@@ -32,30 +52,20 @@ final class ExponentialOvershoot {
      * @param alpha mixing length, pressure scale heights
      * @param f e-folding parameter of the exponential, pressure scale heights (0 returns all zeros)
      */
-    static double[] coefficients(StellarProfile previous, double alpha, double f) {
+    static double[] coefficients(OvershootProfile previous, double alpha, double f) {
         int n = previous.size();
         double[] d = new double[n];
         if (!(f > 0.0)) {
             return d;
         }
-        int k = 0;
-        while (k < n) {
-            if (!previous.convective(k)) {
-                k++;
-                continue;
-            }
-            int end = k;
-            while (end + 1 < n && previous.convective(end + 1)) {
-                end++;
-            }
+        ConvectiveRuns.forEach(previous, (k, end) -> {
             if (k > 0) {
                 boundary(previous, k - 1, -1.0, alpha, f, d);
             }
             if (end < n - 1) {
                 boundary(previous, end, 1.0, alpha, f, d);
             }
-            k = end + 1;
-        }
+        });
         double[] s = new double[n];
         for (int j = 0; j < n; j++) {
             double area = FOUR_PI * previous.radius(j) * previous.radius(j) * previous.density(j);
@@ -68,9 +78,9 @@ final class ExponentialOvershoot {
      * Adds the profile of the boundary in interval (k, k + 1); {@code outward} +1 when the stable side is outside
      * (the zone's upper edge), -1 when it is inside.
      */
-    private static void boundary(StellarProfile p, int k, double outward, double alpha, double f, double[] d) {
-        double rb = StepOvershoot.boundaryRadius(p, k);
-        double hb = StepOvershoot.boundaryScaleHeight(p, k);
+    private static void boundary(OvershootProfile p, int k, double outward, double alpha, double f, double[] d) {
+        double rb = ConvectiveRuns.boundaryRadius(p, k);
+        double hb = ConvectiveRuns.boundaryScaleHeight(p, k);
         double r0 = rb - outward * f * hb;
         double d0 = at(p, p.convectiveVelocities(), r0) * alpha * at(p, p.pressureScaleHeights(), r0) / 3.0;
         if (!(d0 > 0.0)) {
@@ -85,7 +95,7 @@ final class ExponentialOvershoot {
     }
 
     /** {@code values} (on the points of p) interpolated linearly in radius, clamped to the mesh. */
-    private static double at(StellarProfile p, double[] values, double r) {
+    private static double at(OvershootProfile p, double[] values, double r) {
         int n = p.size();
         if (r <= p.radius(0)) {
             return values[0];
@@ -99,22 +109,5 @@ final class ExponentialOvershoot {
         }
         double w = (r - p.radius(lo)) / (p.radius(lo + 1) - p.radius(lo));
         return values[lo] + w * (values[lo + 1] - values[lo]);
-    }
-
-    /** {@code s} on {@code mesh} with every S dt/Dm^2 held to {@link #MAX_COUPLING} (a new array). */
-    static double[] capped(MassMesh mesh, double[] s, double dt) {
-        int n = mesh.size();
-        double[] out = s.clone();
-        for (int j = 0; j < n; j++) {
-            double dm = Double.POSITIVE_INFINITY;
-            if (j > 0) {
-                dm = Math.min(dm, mesh.mass(j) - mesh.mass(j - 1));
-            }
-            if (j < n - 1) {
-                dm = Math.min(dm, mesh.mass(j + 1) - mesh.mass(j));
-            }
-            out[j] = Math.min(out[j], MAX_COUPLING * dm * dm / dt);
-        }
-        return out;
     }
 }

@@ -1,4 +1,4 @@
-package org.convgrid.engine.batch;
+package org.convgrid.engine.request;
 
 /** How a model request ended; the catalogue writes {@link #label()}. */
 public enum ModelStatus {

@@ -1,0 +1,98 @@
+package org.convgrid.engine.request;
+
+import java.util.Objects;
+import org.convgrid.engine.convection.ConvectiveStructure;
+
+/**
+ * What the engine made of one request: a {@link Solved} model with its properties, or a {@link Failed} one with
+ * its status and the reason. Only a solved outcome has properties, so no field is ever null.
+ */
+public sealed interface ModelOutcome permits ModelOutcome.Solved, ModelOutcome.Failed {
+
+    /** What was asked. */
+    ModelRequest request();
+
+    /** How it ended. */
+    ModelStatus status();
+
+    /** Short reason when the status is not OK, empty otherwise. */
+    String statusDetail();
+
+    /** Newton iterations spent on this model. */
+    int solverIterations();
+
+    /** The same outcome for another request (the same model under another id or a resolved age). */
+    ModelOutcome withRequest(ModelRequest other);
+
+    /**
+     * This outcome as a solved model, for callers that know it converged.
+     *
+     * @throws IllegalStateException when it failed, with its status and reason
+     */
+    Solved solved();
+
+    /**
+     * A converged model, status {@link ModelStatus#OK}.
+     *
+     * @param global surface and central properties
+     * @param convection the convective zones
+     */
+    record Solved(ModelRequest request, GlobalProperties global, ConvectiveStructure convection,
+                  int solverIterations) implements ModelOutcome {
+
+        public Solved {
+            Objects.requireNonNull(request, "request");
+            Objects.requireNonNull(global, "global");
+            Objects.requireNonNull(convection, "convection");
+        }
+
+        @Override
+        public ModelStatus status() {
+            return ModelStatus.OK;
+        }
+
+        @Override
+        public String statusDetail() {
+            return "";
+        }
+
+        @Override
+        public Solved withRequest(ModelRequest other) {
+            return new Solved(other, global, convection, solverIterations);
+        }
+
+        @Override
+        public Solved solved() {
+            return this;
+        }
+    }
+
+    /**
+     * A request without a model.
+     *
+     * @param status any status but {@link ModelStatus#OK}
+     * @param statusDetail why
+     */
+    record Failed(ModelRequest request, ModelStatus status, String statusDetail, int solverIterations)
+            implements ModelOutcome {
+
+        public Failed {
+            Objects.requireNonNull(request, "request");
+            Objects.requireNonNull(statusDetail, "statusDetail");
+            if (status == null || status == ModelStatus.OK) {
+                throw new IllegalArgumentException("a failed outcome needs a failure status, got " + status);
+            }
+        }
+
+        @Override
+        public Failed withRequest(ModelRequest other) {
+            return new Failed(other, status, statusDetail, solverIterations);
+        }
+
+        @Override
+        public Solved solved() {
+            throw new IllegalStateException(request.modelId() + " was not solved: " + status.label() + ", "
+                    + statusDetail);
+        }
+    }
+}

@@ -1,0 +1,46 @@
+package org.convgrid.engine.request;
+
+import java.util.function.DoubleFunction;
+import org.convgrid.engine.overshoot.ExponentialOvershoot;
+import org.convgrid.engine.overshoot.Overshoot;
+import org.convgrid.engine.overshoot.StepOvershoot;
+
+/**
+ * The overshoot scheme a grid names (key {@code overshoot_scheme}); the overshoot number means alpha_ov
+ * (pressure scale heights) for {@link #STEP} and f for {@link #EXPONENTIAL}. Each scheme makes its
+ * {@link Overshoot}, so nothing downstream branches on the scheme.
+ */
+public enum OvershootScheme {
+    /** Homogeneous mixing to alpha_ov H_P beyond the boundary ({@link StepOvershoot}). */
+    STEP(StepOvershoot.LABEL, StepOvershoot::new),
+    /** Diffusion with D_ov = D_0 exp(-2 z/(f H_P)) ({@link ExponentialOvershoot}). */
+    EXPONENTIAL(ExponentialOvershoot.LABEL, ExponentialOvershoot::new);
+
+    private final String label;
+    private final DoubleFunction<Overshoot> model;
+
+    OvershootScheme(String label, DoubleFunction<Overshoot> model) {
+        this.label = label;
+        this.model = model;
+    }
+
+    /** The name used in grid files. */
+    public String label() {
+        return label;
+    }
+
+    /** The overshoot of this scheme with {@code parameter} (alpha_ov or f). */
+    public Overshoot model(double parameter) {
+        return model.apply(parameter);
+    }
+
+    /** Parses a grid-file name; null when unknown. */
+    public static OvershootScheme fromLabel(String label) {
+        for (OvershootScheme s : values()) {
+            if (s.label.equals(label)) {
+                return s;
+            }
+        }
+        return null;
+    }
+}
