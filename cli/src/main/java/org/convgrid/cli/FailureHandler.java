@@ -2,15 +2,15 @@ package org.convgrid.cli;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
-import org.convgrid.cli.run.IoMessages;
-import org.convgrid.cli.run.RunSetupException;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.grids.GridFileException;
 import org.convgrid.grids.GridProblem;
 import org.convgrid.output.OutputFormatException;
-import picocli.CommandLine;
+import org.convgrid.survey.IoMessages;
+import org.convgrid.survey.RunSetupException;
 import picocli.CommandLine.IExecutionExceptionHandler;
 import picocli.CommandLine.ParseResult;
+import picocli.CommandLine;
 
 /**
  * Failures during a command: a clean message, a stack trace only with --verbose. Grid-file problems are printed one

@@ -7,7 +7,6 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import java.util.stream.Stream;
-import org.convgrid.cli.run.ChunkSolverFactory;
 import org.convgrid.engine.batch.ChunkSolver;
 import org.convgrid.engine.evolution.GridRequests;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
@@ -17,6 +16,7 @@ import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.track.TrackWriter;
+import org.convgrid.survey.ChunkSolverFactory;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

@@ -1,4 +1,4 @@
-package org.convgrid.cli.run;
+package org.convgrid.survey;
 
 import java.nio.file.Path;
 import java.util.List;

@@ -1,4 +1,4 @@
-package org.convgrid.cli.run;
+package org.convgrid.survey;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;

@@ -1,9 +1,10 @@
-package org.convgrid.cli.run;
+package org.convgrid.survey.refine;
 
 import java.util.List;
 import org.convgrid.engine.refine.Refinement;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.output.CsvNumbers;
+import org.convgrid.survey.CatalogueAppender;
 
 /** The words transitions.csv's notes use for a bisection that stopped before its tolerance. */
 final class RefinementRemarks {

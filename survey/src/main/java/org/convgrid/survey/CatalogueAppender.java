@@ -1,4 +1,4 @@
-package org.convgrid.cli.run;
+package org.convgrid.survey;
 
 import java.io.Closeable;
 import java.io.IOException;
@@ -17,7 +17,7 @@ import org.convgrid.output.catalogue.OutcomeRows;
  * written. Line breaks inside a status detail become spaces: one row is one line, which is what lets a resume cut a
  * half-written row off at the last line feed.
  */
-final class CatalogueAppender implements OutcomeSink, Closeable {
+public final class CatalogueAppender implements OutcomeSink, Closeable {
 
     private final CatalogueWriter writer;
 
@@ -26,7 +26,7 @@ final class CatalogueAppender implements OutcomeSink, Closeable {
     }
 
     /** Opens the catalogue for appending, writing the header first when {@code withHeader}. */
-    static CatalogueAppender open(Path catalogue, boolean withHeader) throws IOException {
+    public static CatalogueAppender open(Path catalogue, boolean withHeader) throws IOException {
         Writer out = Files.newBufferedWriter(catalogue, StandardCharsets.UTF_8, StandardOpenOption.CREATE,
                 StandardOpenOption.WRITE, StandardOpenOption.APPEND);
         CatalogueWriter writer = withHeader ? CatalogueWriter.startingWithHeader(out) : CatalogueWriter.continuing(out);
@@ -42,7 +42,7 @@ final class CatalogueAppender implements OutcomeSink, Closeable {
         writer.flush();
     }
 
-    static String oneLine(String detail) {
+    public static String oneLine(String detail) {
         return detail == null ? "" : detail.replaceAll("\\s*\\R\\s*", " ").strip();
     }
 

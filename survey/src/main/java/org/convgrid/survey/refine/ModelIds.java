@@ -1,7 +1,8 @@
-package org.convgrid.cli.run;
+package org.convgrid.survey.refine;
 
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+import org.convgrid.survey.RunSetupException;
 
 /** Reads grid indices back from catalogue model ids ({@code p<i>-z<i>-m<i>-a<i>} or refinement ids). */
 final class ModelIds {

@@ -1,4 +1,4 @@
-package org.convgrid.cli.run;
+package org.convgrid.survey;
 
 /**
  * The arguments conflict with what is on disk (a run directory that already holds a catalogue, a resume against a

@@ -1,4 +1,4 @@
-package org.convgrid.cli.run;
+package org.convgrid.survey;
 
 import org.convgrid.engine.batch.ChunkSolver;
 import org.convgrid.engine.evolution.TrackSink;

@@ -1,4 +1,4 @@
-package org.convgrid.cli.run;
+package org.convgrid.survey.refine;
 
 import java.io.IOException;
 import java.nio.file.Files;
@@ -21,6 +21,11 @@ import org.convgrid.output.transitions.TransitionEstimate;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.output.transitions.TransitionWriter;
+import org.convgrid.survey.CatalogueAppender;
+import org.convgrid.survey.FinishedRun;
+import org.convgrid.survey.RunDirectory;
+import org.convgrid.survey.RunFinishing;
+import org.convgrid.survey.RunSetupException;
 
 /**
  * {@code convgrid transitions}: rewrites a run directory's transitions.csv from its catalogue, after appending the

@@ -1,4 +1,4 @@
-package org.convgrid.cli.run;
+package org.convgrid.survey.refine;
 
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -28,6 +28,7 @@ import org.convgrid.output.transitions.Slice;
 import org.convgrid.output.transitions.TransitionEstimate;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.survey.RunSetupException;
 
 /**
  * Narrows the grid brackets of a catalogue's transitions by bisection with new zero-age models
