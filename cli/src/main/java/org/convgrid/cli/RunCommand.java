@@ -13,6 +13,7 @@ import org.convgrid.engine.batch.ModelStatus;
 import org.convgrid.engine.batch.ProgressListener;
 import org.convgrid.engine.batch.Shard;
 import org.convgrid.grids.GridFile;
+import org.convgrid.output.RunLayout;
 import org.convgrid.survey.GridRun;
 import org.convgrid.survey.RunDirectory;
 import org.convgrid.survey.RunFinishing;
@@ -82,7 +83,7 @@ final class RunCommand implements Callable<Integer> {
         Shard chosen = ShardChoice.choose(shard, context.environment()).orElse(null);
         RunDirectory dir = new RunDirectory(context.resolve(out != null ? out : defaultDirectory(file, chosen)));
         boolean evolves = file.spec().ages().evolves();
-        TrackFiles tracks = new TrackFiles(dir.tracks());
+        TrackFiles tracks = new TrackFiles(dir.layout());
         ChunkSolver solver = evolves ? context.solvers().solverFor(file.spec(), tracks)
                 : context.solvers().solverFor(file.spec());
         GridRun runner = new GridRun(ToolVersion.current(), Clock.tickSeconds(java.time.ZoneOffset.UTC));
@@ -104,12 +105,12 @@ final class RunCommand implements Callable<Integer> {
         }
         double seconds = (System.nanoTime() - start) * 1e-9;
         parent.out().println(dir.root() + ": " + result.run().catalogue().size() + " models in "
-                + RunDirectory.CATALOGUE + " (" + describe(result.counts()) + "); " + result.computed()
+                + RunLayout.CATALOGUE + " (" + describe(result.counts()) + "); " + result.computed()
                 + " computed now in " + Durations.describe(seconds));
         parent.out().flush();
         if (RunFinishing.someModelsFailed(result.counts())) {
             err.println("convgrid: some models failed or did not converge; their status_detail in "
-                    + RunDirectory.CATALOGUE + " says why");
+                    + RunLayout.CATALOGUE + " says why");
             err.flush();
             return ExitCodes.SOME_MODELS_FAILED;
         }

@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.convgrid.cli.run.Durations;
 import org.convgrid.engine.batch.ModelStatus;
+import org.convgrid.output.RunLayout;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.output.transitions.TransitionRow;
@@ -90,7 +91,7 @@ final class TransitionsCommand implements Callable<Integer> {
         StringBuilder line = new StringBuilder(dir.transitions() + ": " + update.transitions().size() + " slice(s)");
         if (refine) {
             line.append(", ").append(refined).append(" refined; ").append(update.searches()).append(" bisection(s), ")
-                    .append(update.added().size()).append(" new model(s) in ").append(RunDirectory.CATALOGUE)
+                    .append(update.added().size()).append(" new model(s) in ").append(RunLayout.CATALOGUE)
                     .append(failed > 0 ? " (" + failed + " not ok)" : "").append(" in ")
                     .append(Durations.describe((System.nanoTime() - start) * 1e-9));
         }

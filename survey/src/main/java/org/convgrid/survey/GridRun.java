@@ -14,6 +14,7 @@ import org.convgrid.engine.batch.ModelStatus;
 import org.convgrid.engine.batch.ProgressListener;
 import org.convgrid.engine.batch.Shard;
 import org.convgrid.grids.GridFile;
+import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.manifest.RunManifest;
@@ -109,7 +110,7 @@ public final class GridRun {
     private Plan resume(Settings s) throws IOException {
         RunDirectory dir = s.directory();
         if (!Files.exists(dir.manifest())) {
-            throw new RunSetupException(dir.root() + " has a catalogue but no " + RunDirectory.MANIFEST
+            throw new RunSetupException(dir.root() + " has a catalogue but no " + RunLayout.MANIFEST
                     + ", so it cannot be checked against the grid; use a new --out or --force");
         }
         RunManifest old = RunManifestReader.read(Files.readString(dir.manifest()));

@@ -10,45 +10,45 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.stream.Stream;
 import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueWriter;
 
 /**
- * The files of one run directory (names fixed in conventions.md) and its creation. A new directory is created
+ * One run directory (file names: {@link RunLayout}) and its creation. A new directory is created
  * all-or-nothing: when the directory, the start manifest or the catalogue header cannot be written, whatever this
  * class created is removed again, so a refused run leaves nothing behind.
  */
 public final class RunDirectory {
 
-    public static final String CATALOGUE = "catalogue.csv";
-    public static final String TRANSITIONS = "transitions.csv";
-    public static final String MANIFEST = "manifest.yaml";
-    /** One CSV per star evolved beyond age 0 ({@link TrackFiles}). */
-    public static final String TRACKS = "tracks";
-
-    private final Path root;
+    private final RunLayout layout;
 
     public RunDirectory(Path root) {
-        this.root = root.toAbsolutePath().normalize();
+        this.layout = new RunLayout(root);
+    }
+
+    /** The file names of the directory. */
+    public RunLayout layout() {
+        return layout;
     }
 
     public Path root() {
-        return root;
+        return layout.root();
     }
 
     public Path catalogue() {
-        return root.resolve(CATALOGUE);
+        return layout.catalogue();
     }
 
     public Path transitions() {
-        return root.resolve(TRANSITIONS);
+        return layout.transitions();
     }
 
     public Path manifest() {
-        return root.resolve(MANIFEST);
+        return layout.manifest();
     }
 
     public Path tracks() {
-        return root.resolve(TRACKS);
+        return layout.tracks();
     }
 
     /** Whether a catalogue or a manifest is already there. */
@@ -72,15 +72,15 @@ public final class RunDirectory {
      * header. On failure removes what it created and throws one message naming the directory and the reason.
      */
     public void create(String manifestYaml) throws IOException {
-        Path top = topMissing(root);
+        Path top = topMissing(root());
         try {
-            Files.createDirectories(root);
+            Files.createDirectories(root());
             AtomicFiles.writeString(manifest(), manifestYaml);
             Files.writeString(catalogue(), catalogueHeader(), StandardCharsets.UTF_8, StandardOpenOption.CREATE_NEW,
                     StandardOpenOption.WRITE);
         } catch (IOException e) {
             undo(top);
-            throw new IOException("cannot create run directory " + root + ": " + IoMessages.reason(e), e);
+            throw new IOException("cannot create run directory " + root() + ": " + IoMessages.reason(e), e);
         }
     }
 

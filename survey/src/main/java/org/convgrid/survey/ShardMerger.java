@@ -14,6 +14,7 @@ import org.convgrid.grids.GridHash;
 import org.convgrid.grids.GridSpec;
 import org.convgrid.grids.yaml.GridFileReader;
 import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.manifest.RunManifest;
@@ -49,8 +50,8 @@ public final class ShardMerger {
                 throw new RunSetupException("--out " + out.root() + " is one of the directories to merge");
             }
             if (!Files.isRegularFile(dir.manifest()) || !Files.isRegularFile(dir.catalogue())) {
-                throw new RunSetupException(dir.root() + " is not a run directory (needs " + RunDirectory.MANIFEST
-                        + " and " + RunDirectory.CATALOGUE + ")");
+                throw new RunSetupException(dir.root() + " is not a run directory (needs " + RunLayout.MANIFEST
+                        + " and " + RunLayout.CATALOGUE + ")");
             }
             manifests.add(RunManifestReader.read(Files.readString(dir.manifest())));
         }
@@ -96,7 +97,7 @@ public final class ShardMerger {
             }
             List<Path> files;
             try (Stream<Path> listed = Files.list(tracks)) {
-                files = listed.filter(p -> p.getFileName().toString().endsWith(".csv")).sorted().toList();
+                files = listed.filter(RunLayout::isTable).sorted().toList();
             }
             for (Path file : files) {
                 AtomicFiles.writeBinary(out.tracks().resolve(file.getFileName().toString()),

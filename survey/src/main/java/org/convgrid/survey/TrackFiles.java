@@ -9,6 +9,7 @@ import org.convgrid.engine.evolution.EvolutionStep;
 import org.convgrid.engine.evolution.TrackSink;
 import org.convgrid.grids.ModelIdFormat;
 import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.RunLayout;
 import org.convgrid.output.track.TrackWriter;
 
 /**
@@ -19,17 +20,17 @@ import org.convgrid.output.track.TrackWriter;
  */
 public final class TrackFiles implements TrackSink {
 
-    private final Path directory;
+    private final RunLayout layout;
     private final AtomicReference<IOException> failure = new AtomicReference<>();
 
-    /** @param directory the {@code tracks} directory of a run */
-    public TrackFiles(Path directory) {
-        this.directory = directory;
+    /** @param layout the run directory whose {@code tracks} receive the files */
+    public TrackFiles(RunLayout layout) {
+        this.layout = layout;
     }
 
     @Override
     public void accept(ModelRequest first, List<EvolutionStep> steps) {
-        Path target = directory.resolve(ModelIdFormat.trackIdOf(first.modelId()) + ".csv");
+        Path target = layout.trackFile(ModelIdFormat.trackIdOf(first.modelId()));
         try {
             AtomicFiles.write(target, out -> TrackWriter.write(first.mass(), steps, out));
         } catch (IOException e) {

@@ -10,6 +10,7 @@ import org.convgrid.engine.batch.ModelOutcome;
 import org.convgrid.grids.GridSpec;
 import org.convgrid.grids.yaml.GridFileReader;
 import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.manifest.RunManifest;
@@ -76,7 +77,7 @@ public final class TransitionTables {
             throws IOException, InterruptedException {
         requireCatalogue(dir);
         if (!Files.isRegularFile(dir.manifest())) {
-            throw new RunSetupException(dir.root() + " has no " + RunDirectory.MANIFEST
+            throw new RunSetupException(dir.root() + " has no " + RunLayout.MANIFEST
                     + ", so the grid of its models is unknown; cannot refine");
         }
         RunManifest manifest = RunManifestReader.read(Files.readString(dir.manifest()));
@@ -184,7 +185,7 @@ public final class TransitionTables {
 
     private static void requireCatalogue(RunDirectory dir) {
         if (!Files.isRegularFile(dir.catalogue())) {
-            throw new RunSetupException(dir.root() + " is not a run directory (no " + RunDirectory.CATALOGUE + ")");
+            throw new RunSetupException(dir.root() + " is not a run directory (no " + RunLayout.CATALOGUE + ")");
         }
     }
 
