@@ -17,12 +17,12 @@ import org.convgrid.output.manifest.RunManifest;
 import org.convgrid.output.manifest.RunManifestReader;
 import org.convgrid.output.profile.ProfileReader;
 import org.convgrid.output.profile.ProfileRow;
+import org.convgrid.output.track.Track;
+import org.convgrid.output.track.TrackReader;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionReader;
 import org.convgrid.output.transitions.TransitionRow;
-import org.convgrid.plotting.tracks.Track;
 import org.convgrid.plotting.tracks.TrackOrigin;
-import org.convgrid.plotting.tracks.TrackReader;
 import org.convgrid.plotting.tracks.TrackedModel;
 
 /**

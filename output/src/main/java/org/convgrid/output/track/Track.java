@@ -1,4 +1,4 @@
-package org.convgrid.plotting.tracks;
+package org.convgrid.output.track;
 
 import java.util.List;
 

@@ -1,4 +1,15 @@
-package org.convgrid.plotting.tracks;
+package org.convgrid.output.track;
+
+import static org.convgrid.output.track.TrackColumns.AGE_GYR;
+import static org.convgrid.output.track.TrackColumns.BURNING_ZONE;
+import static org.convgrid.output.track.TrackColumns.CENTER_DENSITY;
+import static org.convgrid.output.track.TrackColumns.CENTER_H;
+import static org.convgrid.output.track.TrackColumns.CENTER_TEMP;
+import static org.convgrid.output.track.TrackColumns.CONV_ZONES;
+import static org.convgrid.output.track.TrackColumns.LOG_G;
+import static org.convgrid.output.track.TrackColumns.LUMINOSITY;
+import static org.convgrid.output.track.TrackColumns.RADIUS;
+import static org.convgrid.output.track.TrackColumns.TEFF;
 
 import java.io.IOException;
 import java.io.Reader;
@@ -12,27 +23,16 @@ import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.OutputFormatException;
+import org.convgrid.output.RunLayout;
 import org.convgrid.output.Span;
 
 /**
- * Reads track files ({@code tracks/<track id>.csv}, columns fixed by conventions.md) by column name: columns in any
- * order, unknown (later or trailing) columns ignored. {@link #AGE_GYR} and {@link #CONV_ZONES} must be present;
+ * Reads track files ({@code tracks/<track id>.csv}, columns: {@link TrackColumns}) by column name: columns in any
+ * order, unknown (later or trailing) columns ignored. {@link TrackColumns#AGE_GYR} and {@link TrackColumns#CONV_ZONES} must be present;
  * the other known columns may be missing and then read as "not applicable".
  */
 public final class TrackReader {
 
-    public static final String AGE_GYR = "age_gyr";
-    public static final String LUMINOSITY = "luminosity_lsun";
-    public static final String RADIUS = "radius_rsun";
-    public static final String TEFF = "teff_k";
-    public static final String LOG_G = "log_g_cgs";
-    public static final String CENTER_TEMP = "center_temp_k";
-    public static final String CENTER_DENSITY = "center_density_cgs";
-    public static final String CENTER_H = "center_h_frac";
-    public static final String CONV_ZONES = "conv_zones_mass_frac";
-    public static final String BURNING_ZONE = "burning_zone_mass_frac";
-
-    private static final String EXTENSION = ".csv";
     private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true)
             .setAllowMissingColumnNames(true).setIgnoreSurroundingSpaces(true).get();
 
@@ -46,7 +46,7 @@ public final class TrackReader {
         }
         List<Path> files;
         try (var entries = Files.list(tracksDir)) {
-            files = entries.filter(f -> f.getFileName().toString().endsWith(EXTENSION) && Files.isRegularFile(f))
+            files = entries.filter(f -> RunLayout.isTable(f) && Files.isRegularFile(f))
                     .sorted().toList();
         }
         List<Track> tracks = new ArrayList<>(files.size());
@@ -58,9 +58,8 @@ public final class TrackReader {
 
     /** One track file; its id is the file name without {@code .csv}. */
     public static Track read(Path file) throws IOException {
-        String name = file.getFileName().toString();
         try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
-            return new Track(name.substring(0, name.length() - EXTENSION.length()), read(in));
+            return new Track(RunLayout.idOf(file), read(in));
         } catch (OutputFormatException e) {
             throw new OutputFormatException(file + ": " + e.getMessage(), e);
         }
