@@ -19,6 +19,7 @@ import org.convgrid.survey.RunDirectory;
 import org.convgrid.survey.RunFinishing;
 import org.convgrid.survey.ShardChoice;
 import org.convgrid.survey.TrackFiles;
+import org.convgrid.survey.parallel.ParallelWork;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -95,8 +96,11 @@ final class RunCommand implements Callable<Integer> {
             err.println("convgrid: " + startLine(plan, count, n));
             err.flush();
         }
-        GridRun.Result result = runner.execute(plan, solver, reporter == null ? ProgressListener.NONE : reporter,
-                context.finishers());
+        GridRun.Result result;
+        try (ParallelWork work = new ParallelWork(n)) {
+            result = runner.execute(plan, work, solver, reporter == null ? ProgressListener.NONE : reporter,
+                    context.finishers());
+        }
         if (reporter != null) {
             reporter.finish();
         }

@@ -10,6 +10,7 @@ import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.survey.RunDirectory;
 import org.convgrid.survey.RunFinishing;
+import org.convgrid.survey.parallel.ParallelWork;
 import org.convgrid.survey.refine.TransitionRefiner;
 import org.convgrid.survey.refine.TransitionTables;
 import picocli.CommandLine.Command;
@@ -79,10 +80,15 @@ final class TransitionsCommand implements Callable<Integer> {
         RunDirectory dir = new RunDirectory(context.resolve(runDirectory));
         TransitionFinder finder = new TransitionFinder(coreThreshold);
         long start = System.nanoTime();
-        TransitionTables.Update update = refine
-                ? TransitionTables.refine(dir, finder, new TransitionRefiner(context.lines(), finder, tolerance, n,
-                        allCrossings))
-                : TransitionTables.recompute(dir, finder);
+        TransitionTables.Update update;
+        if (refine) {
+            try (ParallelWork work = new ParallelWork(n)) {
+                update = TransitionTables.refine(dir, finder,
+                        new TransitionRefiner(context.lines(), finder, tolerance, work, allCrossings));
+            }
+        } else {
+            update = TransitionTables.recompute(dir, finder);
+        }
         if (update.finished() != null) {
             RunFinishing.callFinishers(update.finished(), context.finishers());
         }

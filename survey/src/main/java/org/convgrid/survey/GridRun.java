@@ -9,7 +9,6 @@ import java.util.Map;
 import java.util.Set;
 import org.convgrid.engine.batch.ChunkSolver;
 import org.convgrid.engine.batch.Chunking;
-import org.convgrid.engine.batch.ModelScheduler;
 import org.convgrid.engine.batch.ModelStatus;
 import org.convgrid.engine.batch.ProgressListener;
 import org.convgrid.engine.batch.Shard;
@@ -20,11 +19,12 @@ import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.manifest.RunManifest;
 import org.convgrid.output.manifest.RunManifestReader;
 import org.convgrid.output.manifest.RunManifestWriter;
+import org.convgrid.survey.parallel.ParallelWork;
 
 /**
  * One {@code convgrid run}: {@link #prepare} checks the run directory against the grid (and creates it, or keeps
- * the complete rows of an interrupted run), {@link #execute} sweeps the missing models into catalogue.csv with the
- * {@link ModelScheduler} and finishes the directory. Chunks are cut by {@link Chunking#DEFAULT_MASSES_PER_CHUNK}.
+ * the complete rows of an interrupted run), {@link #execute} sweeps the missing models into catalogue.csv on the
+ * command's {@link ParallelWork} and finishes the directory. Chunks are cut by {@link Chunking#DEFAULT_MASSES_PER_CHUNK}.
  */
 public final class GridRun {
 
@@ -131,17 +131,20 @@ public final class GridRun {
         return new Plan(s, shard, kept, plan.count(), old.started(), old.medianSecondsPerModel());
     }
 
-    /** Computes the missing rows, then writes transitions.csv, the final manifest and calls the finishers. */
-    public Result execute(Plan plan, ChunkSolver solver, ProgressListener progress, List<RunFinisher> finishers)
-            throws IOException {
+    /**
+     * Computes the missing rows on {@code work}, then writes transitions.csv, the final manifest and calls the
+     * finishers.
+     */
+    public Result execute(Plan plan, ParallelWork work, ChunkSolver solver, ProgressListener progress,
+                          List<RunFinisher> finishers) throws IOException {
         Settings s = plan.settings();
         RunDirectory dir = s.directory();
         TimedSolver timed = new TimedSolver(solver);
         Set<String> done = plan.kept().ids();
         Map<ModelStatus, Long> emitted;
         try (CatalogueAppender sink = CatalogueAppender.open(dir.catalogue(), !plan.kept().hasHeader())) {
-            emitted = new ModelScheduler(s.threads(), MASSES_PER_CHUNK).run(s.grid().spec().requests().iterator(),
-                    plan.shard(), r -> done.contains(r.modelId()), timed, sink, progress, plan.remaining());
+            emitted = ChunkSweep.run(work, s.grid().spec().requests().iterator(), MASSES_PER_CHUNK, plan.shard(),
+                    r -> done.contains(r.modelId()), timed, sink, progress, plan.remaining());
         }
         List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
         Map<ModelStatus, Long> counts = RunFinishing.countByStatus(rows);

@@ -6,8 +6,6 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ForkJoinPool;
 import java.util.function.Predicate;
 import org.convgrid.engine.batch.ModelOutcome;
 import org.convgrid.engine.batch.ModelRequest;
@@ -29,15 +27,16 @@ import org.convgrid.output.transitions.TransitionEstimate;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.survey.RunSetupException;
+import org.convgrid.survey.parallel.ParallelWork;
 
 /**
  * Narrows the grid brackets of a catalogue's transitions by bisection with new zero-age models
  * ({@link MassBisection}). One search per (slice, transition) still wider than the tolerance, each on its own fresh
  * {@link MassLine} (so it depends on nothing but its slice and bracket; two searches of the same bracket share one);
- * the searches run in parallel on a pool of the given size and are gathered in slice order, fully convective limit
- * first, so the result is the same for any thread count. By default only the crossing the table reports is refined
- * (the highest one for the fully convective limit, the lowest for the core onset); on request every crossing of a
- * slice whose structure flickers with mass. Slices at ages above zero are left at grid resolution.
+ * the searches run in parallel on the command's {@link ParallelWork} (the one grid runs use) and are gathered in
+ * slice order, fully convective limit first, so the result is the same for any thread count. By default only the
+ * crossing the table reports is refined (the highest one for the fully convective limit, the lowest for the core
+ * onset); on request every crossing of a slice whose structure flickers with mass. Slices at ages above zero are left at grid resolution.
  * Midpoints are rounded to masses the catalogue writes exactly, so a catalogue row's mass is the mass computed.
  */
 public final class TransitionRefiner {
@@ -73,25 +72,22 @@ public final class TransitionRefiner {
     private final MassLineFactory lines;
     private final TransitionFinder finder;
     private final MassBisection bisection;
-    private final int threads;
+    private final ParallelWork work;
     private final boolean allCrossings;
 
     /**
      * @param lines opens the line of each search
      * @param finder decides each model's side of a transition (its core threshold)
      * @param toleranceMsun the refined brackets must be narrower than this, solar masses
-     * @param threads searches run at once, &gt;= 1
+     * @param work the command's worker threads, on which the searches run
      * @param allCrossings refine every crossing of a slice that flickers, not only the one the table reports
      */
-    public TransitionRefiner(MassLineFactory lines, TransitionFinder finder, double toleranceMsun, int threads,
+    public TransitionRefiner(MassLineFactory lines, TransitionFinder finder, double toleranceMsun, ParallelWork work,
                              boolean allCrossings) {
-        if (threads < 1) {
-            throw new IllegalArgumentException("threads must be >= 1, got " + threads);
-        }
         this.lines = lines;
         this.finder = finder;
         this.bisection = new MassBisection(toleranceMsun * Constants.M_SUN, TransitionRefiner::catalogueMass);
-        this.threads = threads;
+        this.work = work;
         this.allCrossings = allCrossings;
     }
 
@@ -194,15 +190,7 @@ public final class TransitionRefiner {
     }
 
     private List<List<Refinement>> runAll(List<List<Search>> tasks) throws InterruptedException {
-        ForkJoinPool pool = new ForkJoinPool(threads);
-        try {
-            // parallel streams keep the encounter order in toList(), whatever thread ran each task
-            return pool.submit(() -> tasks.parallelStream().map(this::run).toList()).get();
-        } catch (ExecutionException e) {
-            throw e.getCause() instanceof RuntimeException r ? r : new IllegalStateException(e.getCause());
-        } finally {
-            pool.shutdown();
-        }
+        return work.mapInOrder(tasks, this::run);
     }
 
     /** The searches of one task, in order, on one fresh line. */
