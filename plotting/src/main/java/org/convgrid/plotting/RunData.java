@@ -22,6 +22,7 @@ import org.convgrid.output.track.TrackReader;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionReader;
 import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.tracks.TrackOrigin;
 import org.convgrid.plotting.tracks.TrackedModel;
 

@@ -17,6 +17,8 @@ import org.convgrid.plotting.hr.HrDiagram;
 import org.convgrid.plotting.hr.HrDiagramRenderer;
 import org.convgrid.plotting.kippenhahn.Kippenhahn;
 import org.convgrid.plotting.kippenhahn.KippenhahnRenderer;
+import org.convgrid.plotting.label.PhysicsKey;
+import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.ChartFiles;
 import org.convgrid.plotting.style.StyledChart;
 import org.convgrid.plotting.tracks.TrackOrigin;

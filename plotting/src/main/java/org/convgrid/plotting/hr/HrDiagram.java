@@ -6,7 +6,7 @@ import java.util.List;
 import java.util.TreeMap;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.track.TrackStep;
-import org.convgrid.plotting.PhysicsKey;
+import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.tracks.TrackedModel;
 
 /**

@@ -17,7 +17,7 @@ import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.plotting.MapEntry;
 import org.convgrid.plotting.RunData;
 import org.convgrid.plotting.RunMaps;
-import org.convgrid.plotting.SliceLabels;
+import org.convgrid.plotting.label.SliceLabels;
 
 /**
  * Writes {@code RUN_DIR/report.html}: one static page that opens offline (images by relative link into maps/,

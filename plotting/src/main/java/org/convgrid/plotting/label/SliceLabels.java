@@ -1,4 +1,4 @@
-package org.convgrid.plotting;
+package org.convgrid.plotting.label;
 
 import java.math.BigDecimal;
 import java.math.MathContext;

@@ -1,4 +1,4 @@
-package org.convgrid.plotting;
+package org.convgrid.plotting.label;
 
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.output.catalogue.CatalogueRow;
