@@ -82,7 +82,8 @@ final class RunCommand implements Callable<Integer> {
                     + "; check it with 'convgrid check' and add --yes to run it");
         }
         Shard chosen = ShardChoice.choose(shard, context.environment()).orElse(null);
-        RunDirectory dir = new RunDirectory(context.resolve(out != null ? out : defaultDirectory(file, chosen)));
+        RunDirectory dir = new RunDirectory(context.resolve(out != null ? out
+                : RunDirectory.defaultPath(file.spec().outputDir(), chosen)));
         boolean evolves = file.spec().ages().evolves();
         TrackFiles tracks = new TrackFiles(dir.layout());
         ChunkSolver solver = evolves ? context.solvers().solverFor(file.spec(), tracks)
@@ -130,12 +131,6 @@ final class RunCommand implements Callable<Integer> {
             throw new UsageException("--threads must be at least 1, got " + asked);
         }
         return asked;
-    }
-
-    private static Path defaultDirectory(GridFile file, Shard shard) {
-        String dir = file.spec().outputDir();
-        return Path.of(shard == null || shard.count() == 1 ? dir
-                : dir + "-shard-" + shard.index() + "-of-" + shard.count());
     }
 
     private static String startLine(GridRun.Plan plan, long gridCount, int threads) {

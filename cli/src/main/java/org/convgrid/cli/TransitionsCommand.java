@@ -9,7 +9,6 @@ import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.survey.RunDirectory;
-import org.convgrid.survey.RunFinishing;
 import org.convgrid.survey.parallel.ParallelWork;
 import org.convgrid.survey.refine.TransitionRefiner;
 import org.convgrid.survey.refine.TransitionTables;
@@ -84,13 +83,11 @@ final class TransitionsCommand implements Callable<Integer> {
         if (refine) {
             try (ParallelWork work = new ParallelWork(n)) {
                 update = TransitionTables.refine(dir, finder,
-                        new TransitionRefiner(context.lines(), finder, tolerance, work, allCrossings));
+                        new TransitionRefiner(context.lines(), finder, tolerance, work, allCrossings),
+                        context.finishers());
             }
         } else {
-            update = TransitionTables.recompute(dir, finder);
-        }
-        if (update.finished() != null) {
-            RunFinishing.callFinishers(update.finished(), context.finishers());
+            update = TransitionTables.recompute(dir, finder, context.finishers());
         }
         long refined = update.transitions().stream().filter(t -> t.method() == TransitionMethod.REFINED).count();
         long failed = update.added().stream().filter(o -> o.status() != ModelStatus.OK).count();

@@ -8,10 +8,14 @@ import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import java.util.Comparator;
 import java.util.List;
+import java.util.OptionalDouble;
 import java.util.stream.Stream;
+import org.convgrid.engine.batch.Shard;
 import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.OutputFormatException;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueWriter;
+import org.convgrid.output.manifest.RunManifestReader;
 
 /**
  * One run directory (file names: {@link RunLayout}) and its creation. A new directory is created
@@ -49,6 +53,34 @@ public final class RunDirectory {
 
     public Path tracks() {
         return layout.tracks();
+    }
+
+    /**
+     * Where a run writes when no directory is given: the grid's output directory, or for shard K of N
+     * {@code <output dir>-shard-K-of-N}, so shards of one grid never share a directory.
+     *
+     * @param outputDir the grid's {@code output.dir}
+     * @param shard the shard, null for the whole grid
+     */
+    public static Path defaultPath(String outputDir, Shard shard) {
+        return Path.of(shard == null || shard.count() == 1 ? outputDir
+                : outputDir + "-shard-" + shard.index() + "-of-" + shard.count());
+    }
+
+    /**
+     * The median seconds per model that an earlier run in this directory measured; empty when there is no readable
+     * manifest with a positive median (an unreadable manifest only means no measured cost).
+     */
+    public OptionalDouble measuredSecondsPerModel() {
+        try {
+            if (Files.isRegularFile(manifest())) {
+                double median = RunManifestReader.read(Files.readString(manifest())).medianSecondsPerModel();
+                return Double.isFinite(median) && median > 0 ? OptionalDouble.of(median) : OptionalDouble.empty();
+            }
+        } catch (IOException | OutputFormatException e) {
+            // no measured cost: the caller falls back to its default
+        }
+        return OptionalDouble.empty();
     }
 
     /** Whether a catalogue or a manifest is already there. */

@@ -25,6 +25,7 @@ import org.convgrid.output.transitions.TransitionWriter;
 import org.convgrid.survey.CatalogueAppender;
 import org.convgrid.survey.FinishedRun;
 import org.convgrid.survey.RunDirectory;
+import org.convgrid.survey.RunFinisher;
 import org.convgrid.survey.RunFinishing;
 import org.convgrid.survey.RunSetupException;
 
@@ -58,23 +59,27 @@ public final class TransitionTables {
     private TransitionTables() {
     }
 
-    /** Recomputes transitions.csv from the catalogue as it stands (no model computed). */
-    public static Update recompute(RunDirectory dir, TransitionFinder finder) throws IOException {
+    /**
+     * Recomputes transitions.csv from the catalogue as it stands (no model computed), then calls the finishers when
+     * the manifest says the run finished.
+     */
+    public static Update recompute(RunDirectory dir, TransitionFinder finder, List<RunFinisher> finishers)
+            throws IOException {
         requireCatalogue(dir);
         List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
         List<TransitionRow> transitions = withNotes(finder, rows, Map.of());
         AtomicFiles.write(dir.transitions(), out -> TransitionWriter.write(transitions, out));
-        return new Update(transitions, rows, List.of(), 0, finished(dir, rows, transitions));
+        return finish(new Update(transitions, rows, List.of(), 0, finished(dir, rows, transitions)), finishers);
     }
 
     /**
      * Refines the transitions, appends the new models to the catalogue, rewrites transitions.csv and the manifest's
-     * counts.
+     * counts, then calls the finishers.
      *
      * @throws RunSetupException when the directory is not a finished, unsharded run (nothing changed)
      */
-    public static Update refine(RunDirectory dir, TransitionFinder finder, TransitionRefiner refiner)
-            throws IOException, InterruptedException {
+    public static Update refine(RunDirectory dir, TransitionFinder finder, TransitionRefiner refiner,
+                                List<RunFinisher> finishers) throws IOException, InterruptedException {
         requireCatalogue(dir);
         if (!Files.isRegularFile(dir.manifest())) {
             throw new RunSetupException(dir.root() + " has no " + RunLayout.MANIFEST
@@ -116,8 +121,15 @@ public final class TransitionTables {
         RunManifest updated = manifest.finishedAt(manifest.finished(), RunFinishing.countByStatus(rows),
                 manifest.medianSecondsPerModel());
         AtomicFiles.writeString(dir.manifest(), RunManifestWriter.toYaml(updated));
-        return new Update(transitions, rows, added, searches,
-                new FinishedRun(dir.root(), grid, updated, rows, transitions));
+        return finish(new Update(transitions, rows, added, searches,
+                new FinishedRun(dir.root(), grid, updated, rows, transitions)), finishers);
+    }
+
+    private static Update finish(Update update, List<RunFinisher> finishers) throws IOException {
+        if (update.finished() != null) {
+            RunFinishing.callFinishers(update.finished(), finishers);
+        }
+        return update;
     }
 
     /**
