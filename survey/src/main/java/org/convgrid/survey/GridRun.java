@@ -24,7 +24,8 @@ import org.convgrid.survey.parallel.ParallelWork;
 /**
  * One {@code convgrid run}: {@link #prepare} checks the run directory against the grid (and creates it, or keeps
  * the complete rows of an interrupted run), {@link #execute} sweeps the missing models into catalogue.csv on the
- * command's {@link ParallelWork} and finishes the directory. Chunks are cut by {@link Chunking#DEFAULT_MASSES_PER_CHUNK}.
+ * command's {@link ParallelWork} and finishes the directory. Chunks are cut by
+ * {@link Chunking#DEFAULT_MASSES_PER_CHUNK}.
  */
 public final class GridRun {
 

@@ -16,9 +16,9 @@ import org.snakeyaml.engine.v2.nodes.Node;
 
 /**
  * A physics preset named by {@code physics: {preset: FILE}} (FILE relative to the grid file's folder), as written
- * by {@link PresetWriter} for {@code convgrid calibrate-sun}. A preset sets the mixing length and, when it names one, the atmosphere the
- * mixing length was calibrated with: its {@code y_init}, {@code z_init} and the rest are a record of the
- * calibration, and the grid's metallicity section still sets every model's Y and Z.
+ * by {@link PresetWriter} for {@code convgrid calibrate-sun}. A preset sets the mixing length and, when it names
+ * one, the atmosphere the mixing length was calibrated with: its {@code y_init}, {@code z_init} and the rest are a
+ * record of the calibration, and the grid's metallicity section still sets every model's Y and Z.
  * Problems inside the preset are reported at the grid file's {@code preset} value, followed by the preset's own
  * file:line:column.
  */

@@ -28,8 +28,9 @@ import org.convgrid.output.Span;
 
 /**
  * Reads track files ({@code tracks/<track id>.csv}, columns: {@link TrackColumns}) by column name: columns in any
- * order, unknown (later or trailing) columns ignored. {@link TrackColumns#AGE_GYR} and {@link TrackColumns#CONV_ZONES} must be present;
- * the other known columns may be missing and then read as "not applicable".
+ * order, unknown (later or trailing) columns ignored. {@link TrackColumns#AGE_GYR} and
+ * {@link TrackColumns#CONV_ZONES} must be present; the other known columns may be missing and then read as
+ * "not applicable".
  */
 public final class TrackReader {
 

@@ -12,8 +12,8 @@ import org.convgrid.output.Span;
 
 /**
  * Writes the track file of one star ({@code tracks/<model_id without age>.csv}): a header row of
- * {@link TrackColumns#ALL}, then one row per accepted evolution step in increasing age, the zero-age model first. Units as in the catalogue (L / L_sun,
- * R / R_sun with the IAU 2015 nominal values, ages over the Julian gigayear, log g = log10(G M / R^2) in cgs).
+ * {@link TrackColumns#ALL}, then one row per accepted evolution step in increasing age, the zero-age model first.
+ * Units as in the catalogue (L / L_sun, R / R_sun with the IAU 2015 nominal values, ages over the Julian gigayear, log g = log10(G M / R^2) in cgs).
  * {@code burning_zone_mass_frac} is the {@code lo-hi} extent in m/M of the points where the nuclear energy
  * generation exceeds {@link MainSequenceEvolver#BURNING_THRESHOLD} (1 %) of its maximum in the star; empty when
  * nothing burns. Numbers in the {@link CsvNumbers} form, so the same track always gives the same bytes.

@@ -56,7 +56,8 @@ public final class ReportPage {
                     .append("</h2>\n<p>No evolution tracks in this run.</p>\n");
         } else if (run.trackedModels().size() < run.tracks().size()) {
             b.append("<p class=\"missing\">").append(run.tracks().size() - run.trackedModels().size())
-                    .append(" track file(s) in " + RunLayout.TRACKS + "/ match no catalogue model and are not charted.</p>\n");
+                    .append(" track file(s) in ").append(RunLayout.TRACKS)
+                    .append("/ match no catalogue model and are not charted.</p>\n");
         }
         b.append("</body>\n</html>\n");
         return b.toString();

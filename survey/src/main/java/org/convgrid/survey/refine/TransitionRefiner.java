@@ -36,7 +36,8 @@ import org.convgrid.survey.parallel.ParallelWork;
  * the searches run in parallel on the command's {@link ParallelWork} (the one grid runs use) and are gathered in
  * slice order, fully convective limit first, so the result is the same for any thread count. By default only the
  * crossing the table reports is refined (the highest one for the fully convective limit, the lowest for the core
- * onset); on request every crossing of a slice whose structure flickers with mass. Slices at ages above zero are left at grid resolution.
+ * onset); on request every crossing of a slice whose structure flickers with mass. Slices at ages above zero are
+ * left at grid resolution.
  * Midpoints are rounded to masses the catalogue writes exactly, so a catalogue row's mass is the mass computed.
  */
 public final class TransitionRefiner {
