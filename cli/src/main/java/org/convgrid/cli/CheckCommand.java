@@ -1,15 +1,11 @@
 package org.convgrid.cli;
 
-import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import org.convgrid.cli.run.GridSummary;
-import org.convgrid.cli.run.RunDirectory;
 import org.convgrid.grids.GridFile;
-import org.convgrid.output.OutputFormatException;
-import org.convgrid.output.manifest.RunManifest;
-import org.convgrid.output.manifest.RunManifestReader;
+import org.convgrid.survey.RunDirectory;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -42,9 +38,9 @@ final class CheckCommand implements Callable<Integer> {
         Path runDir = context.resolve(Path.of(file.spec().outputDir()));
         double cost = ASSUMED_SECONDS_PER_MODEL;
         String source = "a rough default; a finished run records its own median";
-        RunManifest earlier = earlierRun(runDir);
-        if (earlier != null) {
-            cost = earlier.medianSecondsPerModel();
+        OptionalDouble measured = new RunDirectory(runDir).measuredSecondsPerModel();
+        if (measured.isPresent()) {
+            cost = measured.getAsDouble();
             source = "median of the run in " + runDir;
         }
         for (String line : GridSummary.lines(file, cost, source, n, runDir.toString())) {
@@ -52,19 +48,5 @@ final class CheckCommand implements Callable<Integer> {
         }
         parent.out().flush();
         return ExitCodes.OK;
-    }
-
-    /** The manifest of an earlier run of this grid with a measured median, or null. */
-    private static RunManifest earlierRun(Path runDir) {
-        Path manifest = new RunDirectory(runDir).manifest();
-        try {
-            if (Files.isRegularFile(manifest)) {
-                RunManifest m = RunManifestReader.read(Files.readString(manifest));
-                return Double.isFinite(m.medianSecondsPerModel()) && m.medianSecondsPerModel() > 0 ? m : null;
-            }
-        } catch (IOException | OutputFormatException e) {
-            // an unreadable earlier manifest only means no measured cost: fall back to the default
-        }
-        return null;
     }
 }

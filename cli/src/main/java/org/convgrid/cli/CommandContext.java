@@ -2,17 +2,17 @@ package org.convgrid.cli;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.EnumSet;
 import java.util.List;
 import java.util.Map;
-import java.util.EnumSet;
 import java.util.Objects;
-import org.convgrid.cli.run.ChunkSolverFactory;
-import org.convgrid.cli.run.MapsAndReport;
-import org.convgrid.cli.run.ProductionSolvers;
-import org.convgrid.cli.run.RunFinisher;
 import org.convgrid.engine.refine.MassLineFactory;
 import org.convgrid.engine.refine.ZamsMassLines;
 import org.convgrid.plotting.style.ChartFiles;
+import org.convgrid.survey.ChunkSolverFactory;
+import org.convgrid.survey.MapsAndReport;
+import org.convgrid.survey.ProductionSolvers;
+import org.convgrid.survey.RunFinisher;
 
 /**
  * What the commands take from the world, gathered so tests can replace it: the solver seams (grid runs, refinement), the finishers run at

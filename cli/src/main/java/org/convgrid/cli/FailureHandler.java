@@ -2,12 +2,17 @@ package org.convgrid.cli;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
-import org.convgrid.cli.run.IoMessages;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
+import org.convgrid.grids.GridFileException;
+import org.convgrid.grids.GridProblem;
+import org.convgrid.output.OutputFormatException;
+import org.convgrid.survey.IoMessages;
+import org.convgrid.survey.RunSetupException;
 import picocli.CommandLine;
 import picocli.CommandLine.IExecutionExceptionHandler;
 import picocli.CommandLine.ParseResult;
+import picocli.CommandLine;
 
 /**
  * Failures during a command: a clean message, a stack trace only with --verbose. Every failure of ours is a

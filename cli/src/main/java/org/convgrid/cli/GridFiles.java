@@ -3,9 +3,9 @@ package org.convgrid.cli;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import org.convgrid.cli.run.IoMessages;
 import org.convgrid.grids.GridFile;
 import org.convgrid.grids.yaml.GridFileReader;
+import org.convgrid.survey.IoMessages;
 
 /** Reads the grid file named on the command line; its problems reach the user through {@link FailureHandler}. */
 final class GridFiles {

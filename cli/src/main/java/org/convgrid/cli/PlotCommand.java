@@ -6,8 +6,9 @@ import java.util.EnumSet;
 import java.util.List;
 import java.util.Set;
 import java.util.concurrent.Callable;
-import org.convgrid.plotting.report.ReportPage;
+import org.convgrid.output.RunLayout;
 import org.convgrid.plotting.RunMaps;
+import org.convgrid.plotting.report.ReportPage;
 import org.convgrid.plotting.style.ChartFiles;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -32,15 +33,16 @@ final class PlotCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        Path dir = main.context().resolve(runDirectory);
-        if (!Files.isRegularFile(dir.resolve("catalogue.csv"))) {
-            throw new UsageException(dir + " is not a run directory (no catalogue.csv)");
+        RunLayout layout = new RunLayout(main.context().resolve(runDirectory));
+        Path dir = layout.root();
+        if (!Files.isRegularFile(layout.catalogue())) {
+            throw new UsageException(dir + " is not a run directory (no " + RunLayout.CATALOGUE + ")");
         }
         Set<ChartFiles.VectorFormat> formats = vector.isEmpty()
                 ? EnumSet.noneOf(ChartFiles.VectorFormat.class) : EnumSet.copyOf(vector);
         List<Path> maps = RunMaps.drawAll(dir, formats);
         Path report = ReportPage.write(dir);
-        main.out().println("wrote " + maps.size() + " charts to " + dir.resolve(RunMaps.MAPS_DIR) + " and " + report);
+        main.out().println("wrote " + maps.size() + " charts to " + layout.maps() + " and " + report);
         return ExitCodes.OK;
     }
 }

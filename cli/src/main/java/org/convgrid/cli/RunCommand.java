@@ -7,17 +7,19 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
 import org.convgrid.cli.run.Durations;
-import org.convgrid.cli.run.GridRun;
 import org.convgrid.cli.run.ProgressReporter;
-import org.convgrid.cli.run.RunDirectory;
-import org.convgrid.cli.run.RunFinishing;
-import org.convgrid.cli.run.ShardChoice;
-import org.convgrid.cli.run.TrackFiles;
 import org.convgrid.engine.batch.ChunkSolver;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.batch.ProgressListener;
 import org.convgrid.engine.batch.Shard;
 import org.convgrid.grids.GridFile;
+import org.convgrid.output.RunLayout;
+import org.convgrid.survey.GridRun;
+import org.convgrid.survey.RunDirectory;
+import org.convgrid.survey.RunFinishing;
+import org.convgrid.survey.ShardChoice;
+import org.convgrid.survey.TrackFiles;
+import org.convgrid.survey.parallel.ParallelWork;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -80,9 +82,10 @@ final class RunCommand implements Callable<Integer> {
                     + "; check it with 'convgrid check' and add --yes to run it");
         }
         Shard chosen = ShardChoice.choose(shard, context.environment()).orElse(null);
-        RunDirectory dir = new RunDirectory(context.resolve(out != null ? out : defaultDirectory(file, chosen)));
+        RunDirectory dir = new RunDirectory(context.resolve(out != null ? out
+                : RunDirectory.defaultPath(file.spec().outputDir(), chosen)));
         boolean evolves = file.spec().ages().evolves();
-        TrackFiles tracks = new TrackFiles(dir.tracks());
+        TrackFiles tracks = new TrackFiles(dir.layout());
         ChunkSolver solver = evolves ? context.solvers().solverFor(file.spec(), tracks)
                 : context.solvers().solverFor(file.spec());
         GridRun runner = new GridRun(ToolVersion.current(), Clock.tickSeconds(java.time.ZoneOffset.UTC));
@@ -94,8 +97,11 @@ final class RunCommand implements Callable<Integer> {
             err.println("convgrid: " + startLine(plan, count, n));
             err.flush();
         }
-        GridRun.Result result = runner.execute(plan, solver, reporter == null ? ProgressListener.NONE : reporter,
-                context.finishers());
+        GridRun.Result result;
+        try (ParallelWork work = new ParallelWork(n)) {
+            result = runner.execute(plan, work, solver, reporter == null ? ProgressListener.NONE : reporter,
+                    context.finishers());
+        }
         if (reporter != null) {
             reporter.finish();
         }
@@ -104,12 +110,12 @@ final class RunCommand implements Callable<Integer> {
         }
         double seconds = (System.nanoTime() - start) * 1e-9;
         parent.out().println(dir.root() + ": " + result.run().catalogue().size() + " models in "
-                + RunDirectory.CATALOGUE + " (" + describe(result.counts()) + "); " + result.computed()
+                + RunLayout.CATALOGUE + " (" + describe(result.counts()) + "); " + result.computed()
                 + " computed now in " + Durations.describe(seconds));
         parent.out().flush();
         if (RunFinishing.someModelsFailed(result.counts())) {
             err.println("convgrid: some models failed or did not converge; their status_detail in "
-                    + RunDirectory.CATALOGUE + " says why");
+                    + RunLayout.CATALOGUE + " says why");
             err.flush();
             return ExitCodes.SOME_MODELS_FAILED;
         }
@@ -125,12 +131,6 @@ final class RunCommand implements Callable<Integer> {
             throw new UsageException("--threads must be at least 1, got " + asked);
         }
         return asked;
-    }
-
-    private static Path defaultDirectory(GridFile file, Shard shard) {
-        String dir = file.spec().outputDir();
-        return Path.of(shard == null || shard.count() == 1 ? dir
-                : dir + "-shard-" + shard.index() + "-of-" + shard.count());
     }
 
     private static String startLine(GridRun.Plan plan, long gridCount, int threads) {

@@ -8,6 +8,7 @@ import org.apache.commons.csv.CSVPrinter;
 import org.convgrid.engine.calibration.CalibratedSun;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.units.Constants;
+import org.convgrid.grids.yaml.PresetWriter;
 import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.catalogue.CatalogueColumns;
 import org.convgrid.output.catalogue.CatalogueWriter;
@@ -94,29 +95,11 @@ final class SolarCalibrationReport {
                 sun.evolutions()));
     }
 
-    /** The physics preset file (our own small YAML layout; grids' PhysicsReader reads it). */
+    /** The physics preset file ({@link PresetWriter}'s layout, which grid files read back). */
     static String preset(CalibratedSun sun, AtmosphereChoice atmosphere, boolean settling, String toolVersion) {
-        return String.format(Locale.ROOT, """
-                # convgrid physics preset from a solar calibration (convgrid calibrate-sun).
-                # A grid file that names this preset takes its mixing_length and atmosphere; y_init and z_init are
-                # what the calibration found, for reference: the grid's metallicity section still sets each
-                # model's Y and Z. settling says whether helium and metals settled in the calibration (grids
-                # evolve without settling).
-                mixing_length: %s
-                atmosphere: %s
-                settling: %s
-                y_init: %s
-                z_init: %s
-                z_over_x: %s
-                z_over_x_init: %s
-                age_gyr: %s
-                tool_version: "%s"
-                residual_ln_radius: %s
-                residual_ln_luminosity: %s
-                """, CsvNumbers.format(sun.mixingLength()), atmosphere.label(), settling,
-                CsvNumbers.format(sun.helium()), CsvNumbers.format(sun.metals()),
-                CsvNumbers.format(sun.metalsToHydrogen()), CsvNumbers.format(sun.initialMetalsToHydrogen()),
-                CsvNumbers.format(sun.age() / Constants.GYR), toolVersion.replace("\"", ""),
-                CsvNumbers.format(sun.radiusResidual()), CsvNumbers.format(sun.luminosityResidual()));
+        return PresetWriter.toYaml(new PresetWriter.Calibration(sun.mixingLength(), atmosphere, settling,
+                sun.helium(), sun.metals(), sun.metalsToHydrogen(), sun.initialMetalsToHydrogen(),
+                sun.age() / Constants.GYR, toolVersion, sun.radiusResidual(), sun.luminosityResidual()),
+                CsvNumbers::format);
     }
 }

@@ -3,14 +3,19 @@ package org.convgrid.cli;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.convgrid.cli.run.Durations;
-import org.convgrid.cli.run.RunDirectory;
-import org.convgrid.cli.run.RunFinishing;
-import org.convgrid.cli.run.TransitionRefiner;
-import org.convgrid.cli.run.TransitionTables;
 import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.output.RunLayout;
+import org.convgrid.survey.RunDirectory;
+import org.convgrid.survey.RunFinishing;
+import org.convgrid.survey.refine.TransitionRefiner;
+import org.convgrid.survey.refine.TransitionTables;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.survey.RunDirectory;
+import org.convgrid.survey.parallel.ParallelWork;
+import org.convgrid.survey.refine.TransitionRefiner;
+import org.convgrid.survey.refine.TransitionTables;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -78,19 +83,22 @@ final class TransitionsCommand implements Callable<Integer> {
         RunDirectory dir = new RunDirectory(context.resolve(runDirectory));
         TransitionFinder finder = new TransitionFinder(coreThreshold);
         long start = System.nanoTime();
-        TransitionTables.Update update = refine
-                ? TransitionTables.refine(dir, finder, new TransitionRefiner(context.lines(), finder, tolerance, n,
-                        allCrossings))
-                : TransitionTables.recompute(dir, finder);
-        if (update.finished() != null) {
-            RunFinishing.callFinishers(update.finished(), context.finishers());
+        TransitionTables.Update update;
+        if (refine) {
+            try (ParallelWork work = new ParallelWork(n)) {
+                update = TransitionTables.refine(dir, finder,
+                        new TransitionRefiner(context.lines(), finder, tolerance, work, allCrossings),
+                        context.finishers());
+            }
+        } else {
+            update = TransitionTables.recompute(dir, finder, context.finishers());
         }
         long refined = update.transitions().stream().filter(t -> t.method() == TransitionMethod.REFINED).count();
         long failed = update.added().stream().filter(o -> o.status() != ModelStatus.OK).count();
         StringBuilder line = new StringBuilder(dir.transitions() + ": " + update.transitions().size() + " slice(s)");
         if (refine) {
             line.append(", ").append(refined).append(" refined; ").append(update.searches()).append(" bisection(s), ")
-                    .append(update.added().size()).append(" new model(s) in ").append(RunDirectory.CATALOGUE)
+                    .append(update.added().size()).append(" new model(s) in ").append(RunLayout.CATALOGUE)
                     .append(failed > 0 ? " (" + failed + " not ok)" : "").append(" in ")
                     .append(Durations.describe((System.nanoTime() - start) * 1e-9));
         }

@@ -7,7 +7,6 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import java.util.stream.Stream;
-import org.convgrid.cli.run.ChunkSolverFactory;
 import org.convgrid.engine.batch.ChunkSolver;
 import org.convgrid.engine.batch.GridRequests;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
@@ -16,7 +15,8 @@ import org.convgrid.grids.GridSpec;
 import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
-import org.convgrid.output.track.TrackWriter;
+import org.convgrid.output.track.TrackColumns;
+import org.convgrid.survey.ChunkSolverFactory;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -76,7 +76,7 @@ class EvolvedRunTest {
 
         Path sunTrack = dir.resolve("one/tracks/p0-z00-m000.csv");
         List<String> lines = Files.readAllLines(sunTrack);
-        assertThat(lines.get(0)).isEqualTo(String.join(",", TrackWriter.COLUMNS));
+        assertThat(lines.get(0)).isEqualTo(String.join(",", TrackColumns.ALL));
         assertThat(lines.get(0)).startsWith("age_gyr,luminosity_lsun,radius_rsun,teff_k,log_g_cgs,center_temp_k,"
                 + "center_density_cgs,center_h_frac,conv_zones_mass_frac,burning_zone_mass_frac");
         double previous = -1;

@@ -8,14 +8,15 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Set;
 import java.util.concurrent.atomic.AtomicReference;
-import org.convgrid.cli.run.FinishedRun;
 import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.survey.FinishedRun;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.catalogue.CatalogueWriter;
 import org.convgrid.output.manifest.RunManifest;
 import org.convgrid.output.manifest.RunManifestReader;
 import org.convgrid.output.transitions.TransitionReader;
+import org.convgrid.survey.FinishedRun;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -177,7 +178,7 @@ class RunCommandTest {
                 output: {dir: runs/two-stars}
                 """);
         CliHarness cli = CliHarness.in(work, FakeChunkSolver.fast());
-        cli = cli.with(cli.context().withSolvers(org.convgrid.cli.run.ProductionSolvers.factory()));
+        cli = cli.with(cli.context().withSolvers(org.convgrid.survey.ProductionSolvers.factory()));
         CliHarness.Execution run = cli.execute("run", grid.toString(), "--threads", "1", "--quiet");
         assertThat(run.code()).as(run.err()).isZero();
         java.util.List<String> lines = Files.readAllLines(work.resolve("runs/two-stars/catalogue.csv"));

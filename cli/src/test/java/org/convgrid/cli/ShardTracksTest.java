@@ -7,7 +7,6 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import java.util.stream.Stream;
-import org.convgrid.cli.run.ChunkSolverFactory;
 import org.convgrid.engine.batch.ChunkSolver;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
@@ -15,6 +14,7 @@ import org.convgrid.engine.evolution.EvolutionStep;
 import org.convgrid.engine.evolution.TrackSink;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.grids.GridSpec;
+import org.convgrid.survey.ChunkSolverFactory;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

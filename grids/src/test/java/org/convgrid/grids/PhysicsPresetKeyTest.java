@@ -5,7 +5,9 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.grids.yaml.GridFileReader;
+import org.convgrid.grids.yaml.PresetWriter;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -49,6 +51,17 @@ class PhysicsPresetKeyTest {
         assertThat(request.physics().mixingLength()).isEqualTo(1.93);
         assertThat(request.initialHelium()).isEqualTo(0.28);
         assertThat(request.initialMetals()).isEqualTo(0.02);
+    }
+
+    /** What the writer writes, the reader reads: the mixing length and the atmosphere it belongs to. */
+    @Test
+    void aWrittenPresetReadsBack() throws Exception {
+        String text = PresetWriter.toYaml(new PresetWriter.Calibration(1.8713, AtmosphereChoice.EDDINGTON, false,
+                0.2701, 0.0172, 0.0231, 0.0231, 4.57, "1.2.3", -1e-6, 2e-6), Double::toString);
+        Files.writeString(dir.resolve("sun.yaml"), text);
+        var physics = new GridFileReader().read(grid("sun.yaml", "")).spec().requests().iterator().next().physics();
+        assertThat(physics.mixingLength()).isEqualTo(1.8713);
+        assertThat(physics.atmosphere()).isEqualTo(AtmosphereChoice.EDDINGTON);
     }
 
     @Test

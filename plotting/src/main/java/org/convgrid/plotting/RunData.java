@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import org.convgrid.output.RunLayout;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
@@ -16,16 +17,17 @@ import org.convgrid.output.manifest.RunManifest;
 import org.convgrid.output.manifest.RunManifestReader;
 import org.convgrid.output.profile.ProfileReader;
 import org.convgrid.output.profile.ProfileRow;
+import org.convgrid.output.track.Track;
+import org.convgrid.output.track.TrackReader;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionReader;
 import org.convgrid.output.transitions.TransitionRow;
-import org.convgrid.plotting.tracks.Track;
+import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.tracks.TrackOrigin;
-import org.convgrid.plotting.tracks.TrackReader;
 import org.convgrid.plotting.tracks.TrackedModel;
 
 /**
- * What the charts and the report read from a run directory (layout: conventions.md).
+ * What the charts and the report read from a run directory (file names: {@link RunLayout}).
  *
  * @param catalogue every catalogue row, in file order
  * @param transitions the rows of transitions.csv, or, when that file is absent, found from the catalogue
@@ -66,8 +68,9 @@ public record RunData(List<CatalogueRow> catalogue, List<TransitionRow> transiti
 
     /** Reads a run directory; catalogue.csv must exist, everything else is optional. */
     public static RunData read(Path runDir) throws IOException {
-        List<CatalogueRow> catalogue = CatalogueReader.read(runDir.resolve("catalogue.csv"));
-        Path transitionsFile = runDir.resolve("transitions.csv");
+        RunLayout layout = new RunLayout(runDir);
+        List<CatalogueRow> catalogue = CatalogueReader.read(layout.catalogue());
+        Path transitionsFile = layout.transitions();
         boolean fromFile = Files.isRegularFile(transitionsFile);
         List<TransitionRow> transitions;
         if (fromFile) {
@@ -77,21 +80,22 @@ public record RunData(List<CatalogueRow> catalogue, List<TransitionRow> transiti
         } else {
             transitions = TransitionFinder.withDefaults().find(catalogue);
         }
-        Path manifestFile = runDir.resolve("manifest.yaml");
+        Path manifestFile = layout.manifest();
         RunManifest manifest = Files.isRegularFile(manifestFile)
                 ? RunManifestReader.read(Files.readString(manifestFile, StandardCharsets.UTF_8)) : null;
-        return new RunData(catalogue, transitions, fromFile, manifest, radiusZones(runDir, catalogue),
-                TrackReader.readAll(runDir.resolve("tracks")));
+        return new RunData(catalogue, transitions, fromFile, manifest, radiusZones(layout, catalogue),
+                TrackReader.readAll(layout.tracks()));
     }
 
-    private static Map<String, List<Span>> radiusZones(Path runDir, List<CatalogueRow> catalogue) throws IOException {
-        Path dir = runDir.resolve("profiles");
+    private static Map<String, List<Span>> radiusZones(RunLayout layout, List<CatalogueRow> catalogue)
+            throws IOException {
+        Path dir = layout.profiles();
         Map<String, List<Span>> zones = new HashMap<>();
         if (!Files.isDirectory(dir)) {
             return zones;
         }
         for (CatalogueRow row : catalogue) {
-            Path file = dir.resolve(row.modelId() + ".csv");
+            Path file = layout.profileFile(row.modelId());
             if (row.isOk() && Files.isRegularFile(file)) {
                 try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
                     zones.put(row.modelId(), convectiveRadii(ProfileReader.read(in)));

@@ -9,17 +9,20 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.Slice;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.plotting.hr.HrDiagram;
+import org.convgrid.plotting.hr.HrDiagramRenderer;
 import org.convgrid.plotting.kippenhahn.Kippenhahn;
 import org.convgrid.plotting.kippenhahn.KippenhahnRenderer;
-import org.convgrid.plotting.tracks.TrackOrigin;
-import org.convgrid.plotting.tracks.TrackedModel;
-import org.convgrid.plotting.hr.HrDiagramRenderer;
+import org.convgrid.plotting.label.PhysicsKey;
+import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.ChartFiles;
 import org.convgrid.plotting.style.StyledChart;
+import org.convgrid.plotting.tracks.TrackOrigin;
+import org.convgrid.plotting.tracks.TrackedModel;
 import org.convgrid.plotting.trend.TransitionAgeTrend;
 import org.convgrid.plotting.trend.TransitionAgeTrendRenderer;
 import org.convgrid.plotting.trend.TransitionTrend;
@@ -38,9 +41,6 @@ import org.convgrid.plotting.zones.ZoneMapRenderer;
  */
 public final class RunMaps {
 
-    /** The maps directory under a run directory. */
-    public static final String MAPS_DIR = "maps";
-
     private RunMaps() {
     }
 
@@ -55,7 +55,7 @@ public final class RunMaps {
      * back in report order whatever the thread count.
      */
     public static List<Path> drawAll(Path runDir, Set<ChartFiles.VectorFormat> vectorFormats) throws IOException {
-        Path maps = runDir.resolve(MAPS_DIR);
+        Path maps = new RunLayout(runDir).maps();
         try {
             return plan(RunData.read(runDir)).parallelStream().map(entry -> draw(entry, maps, vectorFormats))
                     .flatMap(List::stream).toList();

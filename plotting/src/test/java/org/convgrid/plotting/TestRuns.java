@@ -20,6 +20,7 @@ import org.convgrid.output.manifest.RunManifest;
 import org.convgrid.output.manifest.RunManifestWriter;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionWriter;
+import org.convgrid.plotting.label.SliceLabels;
 
 /**
  * Realistic-looking synthetic catalogues for chart tests: fully convective below about 0.35 Msun, envelope only up

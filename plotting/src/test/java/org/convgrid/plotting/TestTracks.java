@@ -8,7 +8,7 @@ import java.util.List;
 import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueRow;
-import org.convgrid.plotting.tracks.Track;
+import org.convgrid.output.track.Track;
 
 /**
  * Synthetic evolution track files matching {@link TestRuns}: surface values from {@link TestRuns#row} at each age,

@@ -1,2 +1,2 @@
-/** Grid runs behind the command line: run directories, resume, shards, merging, progress and the solver seam. */
+/** The console side of grid runs: progress lines, durations and the summary {@code check} prints. */
 package org.convgrid.cli.run;

@@ -17,18 +17,14 @@ import org.snakeyaml.engine.v2.nodes.Node;
 
 /**
  * A physics preset named by {@code physics: {preset: FILE}} (FILE relative to the grid file's folder), as written
- * by {@code convgrid calibrate-sun}. A preset sets the mixing length and, when it names one, the atmosphere the
- * mixing length was calibrated with: its {@code y_init}, {@code z_init} and the rest are a record of the
- * calibration, and the grid's metallicity section still sets every model's Y and Z.
+ * by {@link PresetWriter} for {@code convgrid calibrate-sun}. A preset sets the mixing length and, when it names
+ * one, the atmosphere the mixing length was calibrated with: its {@code y_init}, {@code z_init} and the rest are a
+ * record of the calibration, and the grid's metallicity section still sets every model's Y and Z.
  * Problems inside the preset are reported at the grid file's {@code preset} value, followed by the preset's own
  * file:line:column.
  */
 final class PresetReader {
 
-    private static final List<String> KEYS = List.of("mixing_length", "y_init", "z_init", "z_over_x", "age_gyr",
-            "tool_version", "residual_ln_radius", "residual_ln_luminosity", "atmosphere", "settling", "z_over_x_init");
-    private static final List<String> RECORD_NUMBERS = List.of("y_init", "z_init", "z_over_x", "z_over_x_init", "age_gyr",
-            "residual_ln_radius", "residual_ln_luminosity");
     private static final Range POSITIVE = Range.open(0.0, Double.POSITIVE_INFINITY);
 
     private PresetReader() {
@@ -84,25 +80,26 @@ final class PresetReader {
         if (map == null) {
             return null;
         }
-        MappingFields fields = new MappingFields(map, "the preset", KEYS, inner);
-        for (String key : RECORD_NUMBERS) {
+        MappingFields fields = new MappingFields(map, "the preset", PresetKeys.ALL, inner);
+        for (String key : PresetKeys.RECORD_NUMBERS) {
             if (fields.has(key)) {
                 inner.number(fields.value(key), key);
             }
         }
-        if (!fields.has("mixing_length")) {
-            inner.problem(map, GridProblemKind.MISSING_KEY, "the preset needs 'mixing_length'");
+        if (!fields.has(PresetKeys.MIXING_LENGTH)) {
+            inner.problem(map, GridProblemKind.MISSING_KEY, "the preset needs '" + PresetKeys.MIXING_LENGTH + "'");
             return null;
         }
-        List<Double> alpha = AxisValues.distinct(fields.value("mixing_length"), "mixing_length", POSITIVE, inner);
+        List<Double> alpha = AxisValues.distinct(fields.value(PresetKeys.MIXING_LENGTH), PresetKeys.MIXING_LENGTH,
+                POSITIVE, inner);
         if (alpha != null && alpha.size() != 1) {
-            inner.problem(fields.value("mixing_length"), GridProblemKind.WRONG_TYPE,
-                    "mixing_length in a preset must be one value");
+            inner.problem(fields.value(PresetKeys.MIXING_LENGTH), GridProblemKind.WRONG_TYPE,
+                    PresetKeys.MIXING_LENGTH + " in a preset must be one value");
             return null;
         }
         AtmosphereChoice atmosphere = null;
-        if (fields.has("atmosphere")) {
-            atmosphere = PhysicsReader.atmosphere(fields.value("atmosphere"), inner);
+        if (fields.has(PresetKeys.ATMOSPHERE)) {
+            atmosphere = PhysicsReader.atmosphere(fields.value(PresetKeys.ATMOSPHERE), inner);
             if (atmosphere == null) {
                 return null;
             }

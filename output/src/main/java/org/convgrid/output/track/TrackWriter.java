@@ -11,19 +11,14 @@ import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.Span;
 
 /**
- * Writes the track file of one star ({@code tracks/<model_id without age>.csv}): a header row, then one row per
- * accepted evolution step in increasing age, the zero-age model first. Units as in the catalogue (L / L_sun,
- * R / R_sun with the IAU 2015 nominal values, ages over the Julian gigayear, log g = log10(G M / R^2) in cgs).
+ * Writes the track file of one star ({@code tracks/<model_id without age>.csv}): a header row of
+ * {@link TrackColumns#ALL}, then one row per accepted evolution step in increasing age, the zero-age model first.
+ * Units as in the catalogue (L / L_sun, R / R_sun with the IAU 2015 nominal values, ages over the Julian gigayear, log g = log10(G M / R^2) in cgs).
  * {@code burning_zone_mass_frac} is the {@code lo-hi} extent in m/M of the points where the nuclear energy
  * generation exceeds {@link MainSequenceEvolver#BURNING_THRESHOLD} (1 %) of its maximum in the star; empty when
  * nothing burns. Numbers in the {@link CsvNumbers} form, so the same track always gives the same bytes.
  */
 public final class TrackWriter {
-
-    /** Column names, in order: the conventions' columns first, then ours. */
-    public static final List<String> COLUMNS = List.of("age_gyr", "luminosity_lsun", "radius_rsun", "teff_k",
-            "log_g_cgs", "center_temp_k", "center_density_cgs", "center_h_frac", "conv_zones_mass_frac",
-            "burning_zone_mass_frac", "time_step_yr", "core_cz_mass_frac", "solver_iterations");
 
     private TrackWriter() {
     }
@@ -34,7 +29,7 @@ public final class TrackWriter {
      * @param out where the text goes (lines end with {@code \n})
      */
     public static void write(double mass, List<EvolutionStep> steps, Appendable out) throws IOException {
-        out.append(String.join(",", COLUMNS)).append('\n');
+        out.append(String.join(",", TrackColumns.ALL)).append('\n');
         for (EvolutionStep s : steps) {
             String zones = Span.join(s.convectiveZones().stream().map(TrackWriter::span).toList());
             String burning = Double.isNaN(s.burningInner()) ? ""

@@ -5,8 +5,8 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.TreeMap;
 import org.convgrid.output.catalogue.CatalogueRow;
-import org.convgrid.plotting.PhysicsKey;
-import org.convgrid.plotting.tracks.TrackStep;
+import org.convgrid.output.track.TrackStep;
+import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.tracks.TrackedModel;
 
 /**

@@ -1,7 +1,7 @@
 package org.convgrid.plotting.hr;
 
 import java.util.List;
-import org.convgrid.plotting.PhysicsKey;
+import org.convgrid.plotting.label.PhysicsKey;
 
 /**
  * Everything an HR diagram shows.

@@ -5,7 +5,7 @@ import java.util.DoubleSummaryStatistics;
 import java.util.List;
 import java.util.Locale;
 import org.convgrid.engine.convection.StructureClass;
-import org.convgrid.plotting.SliceLabels;
+import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.StyledChart;
 import org.knowm.xchart.XYSeries;

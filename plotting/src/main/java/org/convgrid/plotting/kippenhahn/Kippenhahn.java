@@ -5,9 +5,9 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.stream.IntStream;
 import org.convgrid.output.Span;
-import org.convgrid.plotting.tracks.Track;
+import org.convgrid.output.track.Track;
+import org.convgrid.output.track.TrackStep;
 import org.convgrid.plotting.tracks.TrackOrigin;
-import org.convgrid.plotting.tracks.TrackStep;
 
 /**
  * Builds zones-against-age data from one track: a pure function, no drawing. Step i's convective intervals and

@@ -11,7 +11,7 @@ import java.awt.geom.Rectangle2D;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Set;
-import org.convgrid.plotting.SliceLabels;
+import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.ChartNotes;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.StyledChart;

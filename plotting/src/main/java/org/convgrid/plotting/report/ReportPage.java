@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Map;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.RunLayout;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.manifest.RunManifest;
@@ -16,7 +17,7 @@ import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.plotting.MapEntry;
 import org.convgrid.plotting.RunData;
 import org.convgrid.plotting.RunMaps;
-import org.convgrid.plotting.SliceLabels;
+import org.convgrid.plotting.label.SliceLabels;
 
 /**
  * Writes {@code RUN_DIR/report.html}: one static page that opens offline (images by relative link into maps/,
@@ -26,16 +27,13 @@ import org.convgrid.plotting.SliceLabels;
  */
 public final class ReportPage {
 
-    /** The report's file name in the run directory. */
-    public static final String FILE_NAME = "report.html";
-
     private ReportPage() {
     }
 
     /** Writes the report of a run directory; returns its path. */
     public static Path write(Path runDir) throws IOException {
         RunData run = RunData.read(runDir);
-        Path target = runDir.resolve(FILE_NAME);
+        Path target = new RunLayout(runDir).report();
         AtomicFiles.writeString(target, html(run, runDir));
         return target;
     }
@@ -58,7 +56,8 @@ public final class ReportPage {
                     .append("</h2>\n<p>No evolution tracks in this run.</p>\n");
         } else if (run.trackedModels().size() < run.tracks().size()) {
             b.append("<p class=\"missing\">").append(run.tracks().size() - run.trackedModels().size())
-                    .append(" track file(s) in tracks/ match no catalogue model and are not charted.</p>\n");
+                    .append(" track file(s) in ").append(RunLayout.TRACKS)
+                    .append("/ match no catalogue model and are not charted.</p>\n");
         }
         b.append("</body>\n</html>\n");
         return b.toString();
@@ -68,7 +67,7 @@ public final class ReportPage {
         b.append("<h2>Run</h2>\n<table class=\"facts\">\n");
         RunManifest m = run.manifest();
         if (m == null) {
-            row(b, "manifest", "manifest.yaml not found");
+            row(b, "manifest", RunLayout.MANIFEST + " not found");
         } else {
             row(b, "grid file", m.gridFile());
             row(b, "convgrid version", m.toolVersion());
@@ -84,8 +83,8 @@ public final class ReportPage {
                     p.criterion(), p.opacityFactor())));
         }
         row(b, "catalogue rows", Integer.toString(run.catalogue().size()));
-        row(b, "transitions", run.transitionsFromFile() ? "from transitions.csv"
-                : "transitions.csv not found: read off the catalogue");
+        row(b, "transitions", run.transitionsFromFile() ? "from " + RunLayout.TRANSITIONS
+                : RunLayout.TRANSITIONS + " not found: read off the catalogue");
         b.append("</table>\n");
         if (m != null) {
             b.append("<details><summary>grid file as read</summary>\n<pre>").append(Html.escape(m.gridText()))
@@ -121,8 +120,8 @@ public final class ReportPage {
                 section = e.section();
                 b.append("<h2>").append(Html.escape(section)).append("</h2>\n");
             }
-            String href = RunMaps.MAPS_DIR + "/" + e.fileName();
-            if (Files.isRegularFile(runDir.resolve(RunMaps.MAPS_DIR).resolve(e.fileName()))) {
+            String href = RunLayout.MAPS + "/" + e.fileName();
+            if (Files.isRegularFile(new RunLayout(runDir).maps().resolve(e.fileName()))) {
                 b.append("<figure><a href=\"").append(Html.escape(href)).append("\"><img src=\"")
                         .append(Html.escape(href)).append("\" alt=\"").append(Html.escape(e.caption()))
                         .append("\" width=\"1200\" height=\"800\"></a><figcaption>").append(Html.escape(e.caption()))

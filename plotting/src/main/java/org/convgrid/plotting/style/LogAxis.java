@@ -5,7 +5,7 @@ import java.awt.FontMetrics;
 import java.awt.Graphics2D;
 import java.util.ArrayList;
 import java.util.List;
-import org.convgrid.plotting.SliceLabels;
+import org.convgrid.plotting.label.SliceLabels;
 
 /**
  * A logarithmic x axis labelled at chosen values. XChart labels every tick at 1..9 x 10^n, which collide on a

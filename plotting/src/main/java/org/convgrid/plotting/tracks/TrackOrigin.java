@@ -1,6 +1,7 @@
 package org.convgrid.plotting.tracks;
 
-import org.convgrid.plotting.PhysicsKey;
+import org.convgrid.plotting.label.PhysicsKey;
+
 
 /**
  * What a track is of, read from the first catalogue row that shares its id prefix (the track file itself carries no mass,

@@ -1,5 +1,7 @@
 package org.convgrid.plotting.tracks;
 
+import org.convgrid.output.track.Track;
+
 /**
  * A track together with what it is of.
  *

@@ -1,2 +1,2 @@
-/** Evolution track files of a run (tracks/*.csv): one row per evolution step, read by column name. */
+/** Evolution tracks as the charts use them: a track tied to the catalogue model it belongs to. */
 package org.convgrid.plotting.tracks;

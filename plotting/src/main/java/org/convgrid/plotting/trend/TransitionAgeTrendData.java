@@ -1,7 +1,7 @@
 package org.convgrid.plotting.trend;
 
 import java.util.List;
-import org.convgrid.plotting.PhysicsKey;
+import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.zones.TransitionMarker;
 
 /**

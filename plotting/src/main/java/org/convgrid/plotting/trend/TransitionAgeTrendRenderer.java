@@ -1,7 +1,7 @@
 package org.convgrid.plotting.trend;
 
 import java.awt.BasicStroke;
-import org.convgrid.plotting.SliceLabels;
+import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.StyledChart;
 import org.convgrid.plotting.zones.TransitionMarker;

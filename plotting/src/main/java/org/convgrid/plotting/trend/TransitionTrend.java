@@ -6,7 +6,7 @@ import java.util.List;
 import java.util.function.Function;
 import org.convgrid.output.transitions.TransitionEstimate;
 import org.convgrid.output.transitions.TransitionRow;
-import org.convgrid.plotting.PhysicsKey;
+import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.zones.TransitionMarker;
 
 /** Builds the transition-mass-against-Z data from transitions.csv rows of one physics: a pure function. */

@@ -1,7 +1,7 @@
 package org.convgrid.plotting.trend;
 
 import java.util.List;
-import org.convgrid.plotting.SliceLabels;
+import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.LogAxis;
 import org.convgrid.plotting.style.StyledChart;

@@ -3,7 +3,7 @@ package org.convgrid.plotting.zones;
 import java.awt.Color;
 import java.util.EnumSet;
 import java.util.Set;
-import org.convgrid.plotting.SliceLabels;
+import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.ChartNotes;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.MassAxis;

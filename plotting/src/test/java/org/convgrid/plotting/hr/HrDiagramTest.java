@@ -5,13 +5,13 @@ import static org.assertj.core.api.Assertions.within;
 
 import java.util.List;
 import org.convgrid.output.catalogue.CatalogueRow;
-import org.convgrid.plotting.PhysicsKey;
+import org.convgrid.output.track.Track;
+import org.convgrid.output.track.TrackReader;
+import org.convgrid.output.track.TrackStep;
 import org.convgrid.plotting.TestRuns;
 import org.convgrid.plotting.TestTracks;
-import org.convgrid.plotting.tracks.Track;
+import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.tracks.TrackOrigin;
-import org.convgrid.plotting.tracks.TrackReader;
-import org.convgrid.plotting.tracks.TrackStep;
 import org.convgrid.plotting.tracks.TrackedModel;
 import org.junit.jupiter.api.Test;
 

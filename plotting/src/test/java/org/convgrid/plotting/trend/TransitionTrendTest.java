@@ -6,8 +6,8 @@ import java.util.List;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionRow;
-import org.convgrid.plotting.PhysicsKey;
 import org.convgrid.plotting.TestRuns;
+import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.zones.TransitionMarker;
 import org.junit.jupiter.api.Test;
 

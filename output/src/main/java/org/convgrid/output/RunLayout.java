@@ -1,0 +1,83 @@
+package org.convgrid.output;
+
+import java.nio.file.Path;
+
+/**
+ * The names of the files of a run directory, spelled once for every module that writes or reads one (the run itself,
+ * merge, refinement, the maps and the report). It lives with the formats rather than with the module that owns the
+ * run directory because the readers below that module (the charts) need the same names.
+ *
+ * @param root the run directory, absolute and normalized
+ */
+public record RunLayout(Path root) {
+
+    /** One row per model, in grid order. */
+    public static final String CATALOGUE = "catalogue.csv";
+    /** Transition masses per slice. */
+    public static final String TRANSITIONS = "transitions.csv";
+    /** Provenance of the run. */
+    public static final String MANIFEST = "manifest.yaml";
+    /** One CSV per star evolved beyond age 0, named by its track id. */
+    public static final String TRACKS = "tracks";
+    /** One CSV per model, named by its model id, when the grid asks for profiles. */
+    public static final String PROFILES = "profiles";
+    /** The charts. */
+    public static final String MAPS = "maps";
+    /** The page that shows the maps and the tables. */
+    public static final String REPORT = "report.html";
+    /** Extension of every table file, tracks and profiles included. */
+    public static final String TABLE_EXTENSION = ".csv";
+
+    public RunLayout {
+        root = root.toAbsolutePath().normalize();
+    }
+
+    public Path catalogue() {
+        return root.resolve(CATALOGUE);
+    }
+
+    public Path transitions() {
+        return root.resolve(TRANSITIONS);
+    }
+
+    public Path manifest() {
+        return root.resolve(MANIFEST);
+    }
+
+    public Path tracks() {
+        return root.resolve(TRACKS);
+    }
+
+    public Path profiles() {
+        return root.resolve(PROFILES);
+    }
+
+    public Path maps() {
+        return root.resolve(MAPS);
+    }
+
+    public Path report() {
+        return root.resolve(REPORT);
+    }
+
+    /** The track file of a star, by its track id (a model id without the age index). */
+    public Path trackFile(String trackId) {
+        return tracks().resolve(trackId + TABLE_EXTENSION);
+    }
+
+    /** The profile file of a model. */
+    public Path profileFile(String modelId) {
+        return profiles().resolve(modelId + TABLE_EXTENSION);
+    }
+
+    /** Whether a file name is that of a table (a track or a profile file). */
+    public static boolean isTable(Path file) {
+        return file.getFileName().toString().endsWith(TABLE_EXTENSION);
+    }
+
+    /** The id a track or profile file is named by: its file name without the extension. */
+    public static String idOf(Path file) {
+        String name = file.getFileName().toString();
+        return name.endsWith(TABLE_EXTENSION) ? name.substring(0, name.length() - TABLE_EXTENSION.length()) : name;
+    }
+}

@@ -1,0 +1,94 @@
+package org.convgrid.plotting.label;
+
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.util.Locale;
+import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.output.transitions.Slice;
+
+/** How charts and the report spell a slice: titles for people, file name stems for the maps directory. */
+public final class SliceLabels {
+
+    private static final MathContext FOUR_DIGITS = new MathContext(4);
+    /** Longer lists are shown as a range in titles. */
+    private static final int LISTED_VALUES = 4;
+
+    private SliceLabels() {
+    }
+
+    /** A number with at most four significant digits and no trailing zeros ({@code 0.014}, {@code 4.57}). */
+    public static String number(double value) {
+        if (!Double.isFinite(value)) {
+            return "?";
+        }
+        return new BigDecimal(value).round(FOUR_DIGITS).stripTrailingZeros().toPlainString();
+    }
+
+    /** An age for people: {@code ZAMS} for zero, else {@code 4.57 Gyr}. */
+    public static String age(double ageGyr) {
+        return ageGyr == 0.0 ? "ZAMS" : number(ageGyr) + " Gyr";
+    }
+
+    /** The physics options in words: {@code α = 1.8, Schwarzschild, no overshoot}. */
+    public static String physics(double mixingLength, double overshootHp, StabilityCriterion criterion,
+                                 double opacityFactor) {
+        StringBuilder b = new StringBuilder("\u03b1 = ").append(number(mixingLength));
+        b.append(", ").append(criterion == null ? "criterion ?" : criterionName(criterion));
+        b.append(", ").append(overshootHp == 0.0 ? "no overshoot" : "overshoot " + number(overshootHp) + " Hp");
+        if (Double.isFinite(opacityFactor) && opacityFactor != 1.0) {
+            b.append(", \u03ba \u00d7 ").append(number(opacityFactor));
+        }
+        return b.toString();
+    }
+
+    /** The physics of a slice in words. */
+    public static String physics(Slice s) {
+        return physics(s.mixingLength(), s.overshootHp(), s.criterion(), s.opacityFactor());
+    }
+
+    /** A whole slice in words: {@code Z = 0.014, ZAMS, α = 1.8, Schwarzschild, no overshoot}. */
+    public static String describe(Slice s) {
+        return "Z = " + number(s.zInit()) + ", " + age(s.ageGyr()) + ", " + physics(s);
+    }
+
+    /** A list of values for a title: all of them when few, else the range and the count. */
+    public static String values(java.util.List<Double> values) {
+        if (values.isEmpty()) {
+            return "none";
+        }
+        if (values.size() <= LISTED_VALUES) {
+            return values.stream().map(SliceLabels::number).collect(java.util.stream.Collectors.joining(", "));
+        }
+        return number(values.get(0)) + " to " + number(values.get(values.size() - 1)) + " (" + values.size()
+                + " values)";
+    }
+
+    /** Ages for a title, e.g. {@code ZAMS, 1, 4.57 Gyr}. */
+    public static String ages(java.util.List<Double> ages) {
+        if (ages.size() == 1) {
+            return age(ages.get(0));
+        }
+        return "ages " + values(ages) + " Gyr";
+    }
+
+    /** A file name stem for a slice, e.g. {@code z0.014_age4.57_a1.8_ov0_schwarzschild}; ASCII only. */
+    public static String fileStem(Slice s) {
+        return "z" + number(s.zInit()) + "_age" + number(s.ageGyr()) + "_" + physicsStem(s.mixingLength(),
+                s.overshootHp(), s.criterion(), s.opacityFactor());
+    }
+
+    /** A file name stem for a physics combination, e.g. {@code a1.8_ov0_schwarzschild}. */
+    public static String physicsStem(double mixingLength, double overshootHp, StabilityCriterion criterion,
+                                     double opacityFactor) {
+        String stem = "a" + number(mixingLength) + "_ov" + number(overshootHp) + "_"
+                + (criterion == null ? "unknown" : criterion.name().toLowerCase(Locale.ROOT));
+        return Double.isFinite(opacityFactor) && opacityFactor != 1.0 ? stem + "_kappa" + number(opacityFactor) : stem;
+    }
+
+    private static String criterionName(StabilityCriterion c) {
+        return switch (c) {
+            case SCHWARZSCHILD -> "Schwarzschild";
+            case LEDOUX -> "Ledoux";
+        };
+    }
+}

@@ -1,0 +1,53 @@
+package org.convgrid.survey;
+
+import java.io.Closeable;
+import java.io.IOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.batch.OutcomeSink;
+import org.convgrid.output.catalogue.CatalogueWriter;
+import org.convgrid.output.catalogue.OutcomeRows;
+
+/**
+ * Appends outcomes to catalogue.csv, one flushed row at a time, so an interrupted run loses at most the row being
+ * written. Line breaks inside a status detail become spaces: one row is one line, which is what lets a resume cut a
+ * half-written row off at the last line feed.
+ */
+public final class CatalogueAppender implements OutcomeSink, Closeable {
+
+    private final CatalogueWriter writer;
+
+    private CatalogueAppender(CatalogueWriter writer) {
+        this.writer = writer;
+    }
+
+    /** Opens the catalogue for appending, writing the header first when {@code withHeader}. */
+    public static CatalogueAppender open(Path catalogue, boolean withHeader) throws IOException {
+        Writer out = Files.newBufferedWriter(catalogue, StandardCharsets.UTF_8, StandardOpenOption.CREATE,
+                StandardOpenOption.WRITE, StandardOpenOption.APPEND);
+        CatalogueWriter writer = withHeader ? CatalogueWriter.startingWithHeader(out) : CatalogueWriter.continuing(out);
+        writer.flush();
+        return new CatalogueAppender(writer);
+    }
+
+    @Override
+    public void accept(ModelOutcome o) throws IOException {
+        ModelOutcome oneLine = o instanceof ModelOutcome.Failed f
+                ? new ModelOutcome.Failed(f.request(), f.status(), oneLine(f.statusDetail()), f.solverIterations()) : o;
+        writer.write(OutcomeRows.toRow(oneLine));
+        writer.flush();
+    }
+
+    public static String oneLine(String detail) {
+        return detail == null ? "" : detail.replaceAll("\\s*\\R\\s*", " ").strip();
+    }
+
+    @Override
+    public void close() throws IOException {
+        writer.close();
+    }
+}

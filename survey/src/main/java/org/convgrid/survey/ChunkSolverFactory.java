@@ -1,0 +1,31 @@
+package org.convgrid.survey;
+
+import org.convgrid.engine.batch.ChunkSolver;
+import org.convgrid.engine.evolution.TrackSink;
+import org.convgrid.grids.GridSpec;
+
+/**
+ * The seam between the command line and the structure solver: makes the chunk solver that computes a grid's models.
+ * Production uses {@link ProductionSolvers#factory()}; tests inject fakes. Called once per run, before anything is
+ * written to disk, so a factory that cannot serve a grid leaves no run directory behind.
+ */
+@FunctionalInterface
+public interface ChunkSolverFactory {
+
+    /**
+     * @param grid the validated grid (every request the solver will see carries its own physics options)
+     * @return a thread-safe solver whose outcome for a chunk depends only on that chunk
+     */
+    ChunkSolver solverFor(GridSpec grid);
+
+    /**
+     * A solver that also hands the evolution track of every star evolved beyond age 0 to {@code tracks}. The
+     * default ignores the tracks (fakes that do not evolve).
+     *
+     * @param grid the validated grid
+     * @param tracks thread-safe receiver of the tracks
+     */
+    default ChunkSolver solverFor(GridSpec grid, TrackSink tracks) {
+        return solverFor(grid);
+    }
+}

@@ -1,0 +1,109 @@
+package org.convgrid.survey;
+
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Map;
+import java.util.NoSuchElementException;
+import java.util.function.Predicate;
+import org.convgrid.engine.batch.ChunkSolver;
+import org.convgrid.engine.batch.Chunking;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.batch.OutcomeSink;
+import org.convgrid.engine.batch.ProgressListener;
+import org.convgrid.engine.batch.Shard;
+import org.convgrid.survey.parallel.ParallelWork;
+
+/**
+ * Sweeps a shard's chunks of a grid on the command's {@link ParallelWork} and hands the outcomes to a sink in grid
+ * order. Chunks are cut from the grid alone ({@link Chunking}); a chunk of which some rows are already done (a
+ * resumed run) is recomputed from its own seed and only its missing rows are emitted, so the catalogue is
+ * byte-identical whatever the thread count, the sharding or the interruptions.
+ */
+final class ChunkSweep {
+
+    private ChunkSweep() {
+    }
+
+    /**
+     * @param requests every request of the grid, in grid order (lazily produced is fine)
+     * @param massesPerChunk the chunk length
+     * @param shard which share of the chunks to compute
+     * @param alreadyDone requests whose rows already exist and must not be emitted again
+     * @param solver computes one chunk
+     * @param sink receives the new outcomes in grid order
+     * @param progress told after each emitted outcome
+     * @param expectedTotal how many outcomes this run will emit, for progress (-1 if unknown)
+     * @return counts of the emitted outcomes by status
+     */
+    static Map<ModelStatus, Long> run(ParallelWork work, Iterator<ModelRequest> requests, int massesPerChunk,
+                                      Shard shard, Predicate<ModelRequest> alreadyDone, ChunkSolver solver,
+                                      OutcomeSink sink, ProgressListener progress, long expectedTotal)
+            throws IOException {
+        Map<ModelStatus, Long> counts = new EnumMap<>(ModelStatus.class);
+        long[] emitted = {0};
+        work.forEachInOrder(owned(new Chunking(requests, massesPerChunk), shard, alreadyDone),
+                chunk -> solveSafely(solver, chunk), outcomes -> {
+                    for (ModelOutcome outcome : outcomes) {
+                        if (!alreadyDone.test(outcome.request())) {
+                            sink.accept(outcome);
+                            counts.merge(outcome.status(), 1L, Long::sum);
+                            progress.progress(++emitted[0], expectedTotal);
+                        }
+                    }
+                });
+        return counts;
+    }
+
+    /** The chunks the shard owns that still miss a row, in grid order, cut lazily. */
+    private static Iterator<List<ModelRequest>> owned(Chunking chunks, Shard shard, Predicate<ModelRequest> done) {
+        return new Iterator<>() {
+            private long position;
+            private List<ModelRequest> next;
+
+            @Override
+            public boolean hasNext() {
+                while (next == null && chunks.hasNext()) {
+                    List<ModelRequest> chunk = chunks.next();
+                    if (shard.owns(position++) && !chunk.stream().allMatch(done)) {
+                        next = chunk;
+                    }
+                }
+                return next != null;
+            }
+
+            @Override
+            public List<ModelRequest> next() {
+                if (!hasNext()) {
+                    throw new NoSuchElementException();
+                }
+                List<ModelRequest> chunk = next;
+                next = null;
+                return chunk;
+            }
+        };
+    }
+
+    /** A chunk solver that throws still yields one failed row per request: the run goes on. */
+    static List<ModelOutcome> solveSafely(ChunkSolver solver, List<ModelRequest> chunk) {
+        try {
+            List<ModelOutcome> outcomes = solver.solve(chunk);
+            if (outcomes.size() != chunk.size()) {
+                throw new IllegalStateException("chunk solver returned " + outcomes.size() + " outcomes for "
+                        + chunk.size() + " requests");
+            }
+            return outcomes;
+        } catch (RuntimeException e) {
+            List<ModelOutcome> failed = new ArrayList<>(chunk.size());
+            String reason = e.getClass().getSimpleName() + ": " + e.getMessage();
+            for (ModelRequest r : chunk) {
+                failed.add(new ModelOutcome.Failed(r, ModelStatus.FAILED, reason, 0));
+            }
+            return failed;
+        }
+    }
+}

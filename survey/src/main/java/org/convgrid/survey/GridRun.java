@@ -1,0 +1,171 @@
+package org.convgrid.survey;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.time.Clock;
+import java.time.Instant;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.convgrid.engine.batch.ChunkSolver;
+import org.convgrid.engine.batch.Chunking;
+import org.convgrid.engine.batch.ModelScheduler;
+import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.batch.ProgressListener;
+import org.convgrid.engine.batch.Shard;
+import org.convgrid.grids.GridFile;
+import org.convgrid.output.RunLayout;
+import org.convgrid.output.catalogue.CatalogueReader;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.manifest.RunManifest;
+import org.convgrid.output.manifest.RunManifestReader;
+import org.convgrid.output.manifest.RunManifestWriter;
+import org.convgrid.survey.parallel.ParallelWork;
+
+/**
+ * One {@code convgrid run}: {@link #prepare} checks the run directory against the grid (and creates it, or keeps
+ * the complete rows of an interrupted run), {@link #execute} sweeps the missing models into catalogue.csv on the
+ * command's {@link ParallelWork} and finishes the directory. Chunks are cut by
+ * {@link Chunking#DEFAULT_MASSES_PER_CHUNK}.
+ */
+public final class GridRun {
+
+    /** Masses per chunk; part of what makes a catalogue reproducible, so resumes and shards use the same. */
+    public static final int MASSES_PER_CHUNK = Chunking.DEFAULT_MASSES_PER_CHUNK;
+
+    /**
+     * What the user asked for.
+     *
+     * @param grid the grid file as read
+     * @param directory the run directory
+     * @param threads worker threads, &gt;= 1
+     * @param requestedShard {@code --shard} or Slurm's shard, null when neither (the whole grid, or on resume the
+     *                       shard the directory records)
+     * @param resume continue the directory's catalogue
+     * @param force start over, removing the directory's tables
+     */
+    public record Settings(GridFile grid, RunDirectory directory, int threads, Shard requestedShard, boolean resume,
+                           boolean force) {
+    }
+
+    /**
+     * A directory ready to receive rows.
+     *
+     * @param settings as asked
+     * @param shard the shard this run computes
+     * @param kept the rows already there
+     * @param owned how many models the shard owns
+     * @param started when the run (first session) started
+     * @param previousMedian the median seconds per model an earlier session measured, NaN when none
+     */
+    public record Plan(Settings settings, Shard shard, KeptCatalogue kept, long owned, Instant started,
+                       double previousMedian) {
+
+        /** Models this session computes. */
+        public long remaining() {
+            return owned - kept.ids().size();
+        }
+    }
+
+    /**
+     * @param counts rows of the whole catalogue by status
+     * @param computed rows this session wrote
+     * @param run the finished directory
+     */
+    public record Result(Map<ModelStatus, Long> counts, long computed, FinishedRun run) {
+    }
+
+    private final String toolVersion;
+    private final Clock clock;
+
+    public GridRun(String toolVersion, Clock clock) {
+        this.toolVersion = toolVersion;
+        this.clock = clock;
+    }
+
+    /**
+     * Checks (and creates or trims) the run directory.
+     *
+     * @throws RunSetupException when the directory conflicts with the request; nothing was changed
+     * @throws IOException when the directory cannot be created or read; nothing was left behind
+     */
+    public Plan prepare(Settings s) throws IOException {
+        RunDirectory dir = s.directory();
+        if (s.resume() && dir.holdsRun()) {
+            return resume(s);
+        }
+        if (dir.holdsRun()) {
+            if (!s.force()) {
+                throw new RunSetupException(dir.root() + " already holds a run; add --resume to continue it or "
+                        + "--force to start it over");
+            }
+            dir.clear();
+        }
+        Shard shard = s.requestedShard() == null ? Shard.ALL : s.requestedShard();
+        Instant started = clock.instant();
+        RunManifest start = manifest(s, shard, started, null, Map.of(), Double.NaN);
+        dir.create(RunManifestWriter.toYaml(start));
+        long owned = new ShardPlan(s.grid().spec(), shard, MASSES_PER_CHUNK).count();
+        return new Plan(s, shard, new KeptCatalogue(Set.of(), true, 0), owned, started, Double.NaN);
+    }
+
+    private Plan resume(Settings s) throws IOException {
+        RunDirectory dir = s.directory();
+        if (!Files.exists(dir.manifest())) {
+            throw new RunSetupException(dir.root() + " has a catalogue but no " + RunLayout.MANIFEST
+                    + ", so it cannot be checked against the grid; use a new --out or --force");
+        }
+        RunManifest old = RunManifestReader.read(Files.readString(dir.manifest()));
+        String models = s.grid().modelsSha256();
+        if (!old.gridModelsSha256().equals(models)) {
+            throw new RunSetupException("the grid's models differ from those of the run in " + dir.root()
+                    + " (models_sha256 " + models + " vs " + old.gridModelsSha256()
+                    + "); resume with the original grid, or choose a new --out");
+        }
+        Shard recorded = old.shard() == null ? Shard.ALL : ShardChoice.parse(old.shard());
+        Shard shard = s.requestedShard() == null ? recorded : s.requestedShard();
+        if (!shard.equals(recorded)) {
+            throw new RunSetupException(dir.root() + " holds shard " + shard(recorded) + " but this run asks for shard "
+                    + shard(shard));
+        }
+        ShardPlan plan = new ShardPlan(s.grid().spec(), shard, MASSES_PER_CHUNK);
+        KeptCatalogue kept = KeptCatalogue.inspectAndTrim(dir.catalogue(), plan);
+        return new Plan(s, shard, kept, plan.count(), old.started(), old.medianSecondsPerModel());
+    }
+
+    /**
+     * Computes the missing rows on {@code work}, then writes transitions.csv, the final manifest and calls the
+     * finishers.
+     */
+    public Result execute(Plan plan, ParallelWork work, ChunkSolver solver, ProgressListener progress,
+                          List<RunFinisher> finishers) throws IOException {
+        Settings s = plan.settings();
+        RunDirectory dir = s.directory();
+        TimedSolver timed = new TimedSolver(solver);
+        Set<String> done = plan.kept().ids();
+        Map<ModelStatus, Long> emitted;
+        try (CatalogueAppender sink = CatalogueAppender.open(dir.catalogue(), !plan.kept().hasHeader())) {
+            emitted = ChunkSweep.run(work, s.grid().spec().requests().iterator(), MASSES_PER_CHUNK, plan.shard(),
+                    r -> done.contains(r.modelId()), timed, sink, progress, plan.remaining());
+        }
+        List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
+        Map<ModelStatus, Long> counts = RunFinishing.countByStatus(rows);
+        double median = timed.medianSecondsPerModel();
+        RunManifest end = manifest(s, plan.shard(), plan.started(), clock.instant(), counts,
+                Double.isNaN(median) ? plan.previousMedian() : median);
+        FinishedRun run = RunFinishing.complete(dir, s.grid().spec(), end, rows, finishers);
+        return new Result(counts, emitted.values().stream().mapToLong(Long::longValue).sum(), run);
+    }
+
+    private RunManifest manifest(Settings s, Shard shard, Instant started, Instant finished,
+                                 Map<ModelStatus, Long> counts, double median) {
+        GridFile g = s.grid();
+        return new RunManifest(toolVersion, g.name(), g.text(), g.fileSha256(), g.modelsSha256(),
+                g.spec().physics().combinations(), started, finished, s.threads(), ShardChoice.label(shard), counts,
+                median);
+    }
+
+    private static String shard(Shard shard) {
+        return shard.index() + "/" + shard.count();
+    }
+}

@@ -1,0 +1,36 @@
+package org.convgrid.survey;
+
+import java.io.IOException;
+import java.nio.file.AccessDeniedException;
+import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.FileSystemException;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.NotDirectoryException;
+
+/** One-line, human wording of I/O failures (the NIO exceptions' own messages are often just a path). */
+public final class IoMessages {
+
+    private IoMessages() {
+    }
+
+    /** Why an I/O operation failed, naming the file when known. */
+    public static String reason(IOException e) {
+        if (e instanceof FileSystemException fs) {
+            String file = fs.getFile() == null ? "" : fs.getFile();
+            String why;
+            if (e instanceof NoSuchFileException) {
+                why = "no such file or directory";
+            } else if (e instanceof AccessDeniedException) {
+                why = "permission denied";
+            } else if (e instanceof FileAlreadyExistsException) {
+                why = "already exists";
+            } else if (e instanceof NotDirectoryException) {
+                why = "not a directory";
+            } else {
+                why = fs.getReason() == null ? e.getClass().getSimpleName() : fs.getReason();
+            }
+            return file.isEmpty() ? why : file + ": " + why;
+        }
+        return e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
+    }
+}

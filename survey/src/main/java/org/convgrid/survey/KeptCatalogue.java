@@ -1,0 +1,96 @@
+package org.convgrid.survey;
+
+import java.io.IOException;
+import java.nio.channels.FileChannel;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
+import java.util.HashSet;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Set;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.output.catalogue.CatalogueReader;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.transitions.RefinedModelIds;
+
+/**
+ * What an interrupted run left in its catalogue: the complete lines, checked to be exactly the first rows the
+ * shard's plan emits (the scheduler writes in that order, so anything else means the catalogue belongs to another
+ * grid or shard). A line cut short by the interruption is dropped from the file.
+ *
+ * @param ids the model ids of the kept rows
+ * @param hasHeader whether the file keeps its header line (false: the file is empty and needs one)
+ * @param droppedBytes bytes of a half-written last line that were cut off
+ */
+public record KeptCatalogue(Set<String> ids, boolean hasHeader, long droppedBytes) {
+
+    /** A catalogue that does not exist yet. */
+    static final KeptCatalogue NONE = new KeptCatalogue(Set.of(), false, 0);
+
+    /**
+     * Checks the catalogue against the plan, then truncates a half-written last line (and a half-written header).
+     *
+     * @throws RunSetupException when the header or the rows do not belong to this grid and shard (nothing changed)
+     */
+    public static KeptCatalogue inspectAndTrim(Path catalogue, ShardPlan plan) throws IOException {
+        if (!Files.exists(catalogue)) {
+            return NONE;
+        }
+        byte[] bytes = Files.readAllBytes(catalogue);
+        int complete = lastLineEnd(bytes);
+        String text = new String(bytes, 0, complete, StandardCharsets.UTF_8);
+        Set<String> ids = new HashSet<>();
+        if (complete > 0) {
+            if (!text.startsWith(RunDirectory.catalogueHeader())) {
+                throw new RunSetupException(catalogue + " has another header than this version writes; "
+                        + "cannot continue it");
+            }
+            List<CatalogueRow> rows = CatalogueReader.readCompleteLines(text);
+            refuseRefined(catalogue, rows);
+            Iterator<ModelRequest> expected = plan.iterator();
+            for (int i = 0; i < rows.size(); i++) {
+                String id = rows.get(i).modelId();
+                if (!expected.hasNext()) {
+                    throw new RunSetupException(catalogue + " has more rows (" + rows.size()
+                            + ") than this grid gives the shard");
+                }
+                String wanted = expected.next().modelId();
+                if (!id.equals(wanted)) {
+                    throw new RunSetupException(catalogue + " row " + (i + 1) + " is model " + id
+                            + " where this grid and shard expect " + wanted + "; it belongs to another run");
+                }
+                ids.add(id);
+            }
+        }
+        if (complete < bytes.length) {
+            try (FileChannel channel = FileChannel.open(catalogue, StandardOpenOption.WRITE)) {
+                channel.truncate(complete);
+            }
+        }
+        return new KeptCatalogue(Set.copyOf(ids), complete > 0, bytes.length - complete);
+    }
+
+    /**
+     * A refinement appends models after the grid's rows of a finished run, so such a catalogue is no prefix of the
+     * plan and a resume would throw the refined transitions away: refuse it, naming the way out.
+     */
+    private static void refuseRefined(Path catalogue, List<CatalogueRow> rows) {
+        rows.stream().map(CatalogueRow::modelId).filter(RefinedModelIds::isRefined).findFirst().ifPresent(id -> {
+            throw new RunSetupException(catalogue + " holds models added by 'convgrid transitions --refine' (" + id
+                    + "): a refined run is finished and cannot be resumed; recompute its tables with 'convgrid "
+                    + "transitions', or start over with --force or a new --out");
+        });
+    }
+
+    /** Length of the text up to and including its last line feed (UTF-8 never uses 0x0A inside a character). */
+    static int lastLineEnd(byte[] bytes) {
+        for (int i = bytes.length - 1; i >= 0; i--) {
+            if (bytes[i] == '\n') {
+                return i + 1;
+            }
+        }
+        return 0;
+    }
+}

@@ -1,0 +1,159 @@
+package org.convgrid.survey;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
+import java.util.Comparator;
+import java.util.List;
+import java.util.OptionalDouble;
+import java.util.stream.Stream;
+import org.convgrid.engine.batch.Shard;
+import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.OutputFormatException;
+import org.convgrid.output.RunLayout;
+import org.convgrid.output.catalogue.CatalogueWriter;
+import org.convgrid.output.manifest.RunManifestReader;
+
+/**
+ * One run directory (file names: {@link RunLayout}) and its creation. A new directory is created
+ * all-or-nothing: when the directory, the start manifest or the catalogue header cannot be written, whatever this
+ * class created is removed again, so a refused run leaves nothing behind.
+ */
+public final class RunDirectory {
+
+    private final RunLayout layout;
+
+    public RunDirectory(Path root) {
+        this.layout = new RunLayout(root);
+    }
+
+    /** The file names of the directory. */
+    public RunLayout layout() {
+        return layout;
+    }
+
+    public Path root() {
+        return layout.root();
+    }
+
+    public Path catalogue() {
+        return layout.catalogue();
+    }
+
+    public Path transitions() {
+        return layout.transitions();
+    }
+
+    public Path manifest() {
+        return layout.manifest();
+    }
+
+    public Path tracks() {
+        return layout.tracks();
+    }
+
+    /**
+     * Where a run writes when no directory is given: the grid's output directory, or for shard K of N
+     * {@code <output dir>-shard-K-of-N}, so shards of one grid never share a directory.
+     *
+     * @param outputDir the grid's {@code output.dir}
+     * @param shard the shard, null for the whole grid
+     */
+    public static Path defaultPath(String outputDir, Shard shard) {
+        return Path.of(shard == null || shard.count() == 1 ? outputDir
+                : outputDir + "-shard-" + shard.index() + "-of-" + shard.count());
+    }
+
+    /**
+     * The median seconds per model that an earlier run in this directory measured; empty when there is no readable
+     * manifest with a positive median (an unreadable manifest only means no measured cost).
+     */
+    public OptionalDouble measuredSecondsPerModel() {
+        try {
+            if (Files.isRegularFile(manifest())) {
+                double median = RunManifestReader.read(Files.readString(manifest())).medianSecondsPerModel();
+                return Double.isFinite(median) && median > 0 ? OptionalDouble.of(median) : OptionalDouble.empty();
+            }
+        } catch (IOException | OutputFormatException e) {
+            // no measured cost: the caller falls back to its default
+        }
+        return OptionalDouble.empty();
+    }
+
+    /** Whether a catalogue or a manifest is already there. */
+    public boolean holdsRun() {
+        return Files.exists(catalogue()) || Files.exists(manifest());
+    }
+
+    /** The catalogue's header line, with its line end, exactly as {@link CatalogueWriter} writes it. */
+    public static String catalogueHeader() {
+        StringBuilder header = new StringBuilder();
+        try {
+            CatalogueWriter.startingWithHeader(header).flush();
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return header.toString();
+    }
+
+    /**
+     * Creates the directory (and missing parents), writes the start manifest and a catalogue holding only its
+     * header. On failure removes what it created and throws one message naming the directory and the reason.
+     */
+    public void create(String manifestYaml) throws IOException {
+        Path top = topMissing(root());
+        try {
+            Files.createDirectories(root());
+            AtomicFiles.writeString(manifest(), manifestYaml);
+            Files.writeString(catalogue(), catalogueHeader(), StandardCharsets.UTF_8, StandardOpenOption.CREATE_NEW,
+                    StandardOpenOption.WRITE);
+        } catch (IOException e) {
+            undo(top);
+            throw new IOException("cannot create run directory " + root() + ": " + IoMessages.reason(e), e);
+        }
+    }
+
+    /** Removes the run's own tables (catalogue, transitions, manifest), for {@code --force}. */
+    public void clear() throws IOException {
+        for (Path file : List.of(catalogue(), transitions(), manifest())) {
+            Files.deleteIfExists(file);
+        }
+    }
+
+    private void undo(Path top) {
+        try {
+            if (top != null) {
+                deleteTree(top);
+            } else {
+                Files.deleteIfExists(catalogue());
+                Files.deleteIfExists(manifest());
+            }
+        } catch (IOException | UncheckedIOException e) {
+            // best effort: the original failure is what the user needs to see
+        }
+    }
+
+    /** The highest ancestor of {@code dir} (or dir itself) that does not exist yet, null when dir exists. */
+    static Path topMissing(Path dir) {
+        Path top = null;
+        for (Path p = dir; p != null && !Files.exists(p); p = p.getParent()) {
+            top = p;
+        }
+        return top;
+    }
+
+    /** Deletes a tree this class created (no symbolic links are followed). */
+    static void deleteTree(Path top) throws IOException {
+        if (!Files.exists(top)) {
+            return;
+        }
+        try (Stream<Path> all = Files.walk(top)) {
+            for (Path p : all.sorted(Comparator.reverseOrder()).toList()) {
+                Files.deleteIfExists(p);
+            }
+        }
+    }
+}

@@ -1,0 +1,143 @@
+package org.convgrid.survey;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Clock;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Objects;
+import java.util.stream.Stream;
+import org.convgrid.grids.GridHash;
+import org.convgrid.grids.GridSpec;
+import org.convgrid.grids.yaml.GridFileReader;
+import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.RunLayout;
+import org.convgrid.output.catalogue.CatalogueReader;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.manifest.RunManifest;
+import org.convgrid.output.manifest.RunManifestReader;
+
+/**
+ * Joins shard run directories into one run directory whose catalogue is byte for byte the one a single run of the
+ * grid writes: the grid text recorded in the manifests gives the grid order, each row's line is copied unchanged.
+ * Every shard must record the same models_sha256; a model missing from every shard, present twice, or not in the
+ * grid stops the merge before anything is written. Track files of the shards are copied into the merged {@code tracks}.
+ */
+public final class ShardMerger {
+
+    private final String toolVersion;
+    private final Clock clock;
+
+    public ShardMerger(String toolVersion, Clock clock) {
+        this.toolVersion = toolVersion;
+        this.clock = clock;
+    }
+
+    /**
+     * @param shards run directories, each with manifest.yaml and catalogue.csv
+     * @param out a directory without a run in it (created if missing)
+     * @param finishers called once the merged directory is complete
+     * @throws RunSetupException when the shards do not join into one complete grid; nothing written
+     */
+    public FinishedRun merge(List<Path> shards, RunDirectory out, List<RunFinisher> finishers) throws IOException {
+        List<RunManifest> manifests = new ArrayList<>();
+        for (Path shard : shards) {
+            RunDirectory dir = new RunDirectory(shard);
+            if (dir.root().equals(out.root())) {
+                throw new RunSetupException("--out " + out.root() + " is one of the directories to merge");
+            }
+            if (!Files.isRegularFile(dir.manifest()) || !Files.isRegularFile(dir.catalogue())) {
+                throw new RunSetupException(dir.root() + " is not a run directory (needs " + RunLayout.MANIFEST
+                        + " and " + RunLayout.CATALOGUE + ")");
+            }
+            manifests.add(RunManifestReader.read(Files.readString(dir.manifest())));
+        }
+        GridSpec grid = commonGrid(shards, manifests);
+        ShardRows rows = new ShardRows();
+        for (Path shard : shards) {
+            rows.add(new RunDirectory(shard).catalogue(), shard);
+        }
+        List<String> ordered = rows.inGridOrder(grid);
+        if (out.holdsRun()) {
+            throw new RunSetupException(out.root() + " already holds a run; merge into a new directory");
+        }
+        Path top = RunDirectory.topMissing(out.root());
+        FinishedRun run;
+        try {
+            AtomicFiles.write(out.catalogue(), w -> {
+                w.append(RunDirectory.catalogueHeader());
+                for (String line : ordered) {
+                    w.append(line).append('\n');
+                }
+            });
+            copyTracks(shards, out);
+            List<CatalogueRow> mergedRows = CatalogueReader.read(out.catalogue());
+            run = RunFinishing.writeTables(out, grid, merged(manifests, mergedRows), mergedRows);
+        } catch (IOException e) {
+            if (top != null) {
+                RunDirectory.deleteTree(top);
+            } else {
+                out.clear();
+            }
+            throw new IOException("cannot write the merged run in " + out.root() + ": " + IoMessages.reason(e), e);
+        }
+        RunFinishing.callFinishers(run, finishers);
+        return run;
+    }
+
+    /** Copies every shard's track files (each star is computed by one shard only) into the merged directory. */
+    private static void copyTracks(List<Path> shards, RunDirectory out) throws IOException {
+        for (Path shard : shards) {
+            Path tracks = new RunDirectory(shard).tracks();
+            if (!Files.isDirectory(tracks)) {
+                continue;
+            }
+            List<Path> files;
+            try (Stream<Path> listed = Files.list(tracks)) {
+                files = listed.filter(RunLayout::isTable).sorted().toList();
+            }
+            for (Path file : files) {
+                AtomicFiles.writeBinary(out.tracks().resolve(file.getFileName().toString()),
+                        o -> Files.copy(file, o));
+            }
+        }
+    }
+
+    private static GridSpec commonGrid(List<Path> shards, List<RunManifest> manifests) {
+        String models = manifests.get(0).gridModelsSha256();
+        for (int i = 1; i < manifests.size(); i++) {
+            if (!manifests.get(i).gridModelsSha256().equals(models)) {
+                throw new RunSetupException(shards.get(i) + " was run from another grid than " + shards.get(0)
+                        + " (models_sha256 " + manifests.get(i).gridModelsSha256() + " vs " + models + ")");
+            }
+        }
+        RunManifest first = manifests.get(0);
+        GridSpec grid = new GridFileReader().parse(first.gridFile(), first.gridText());
+        if (!GridHash.ofModels(grid).equals(models)) {
+            throw new RunSetupException(shards.get(0) + ": the grid text in its manifest does not give its "
+                    + "models_sha256; the manifest was edited");
+        }
+        return grid;
+    }
+
+    /**
+     * The merged provenance: the first shard's grid and tool, the earliest start, the latest end (now when a shard
+     * never finished), the shards' threads summed, the median of the shards' medians, counts of the merged rows.
+     */
+    private RunManifest merged(List<RunManifest> shards, List<CatalogueRow> rows) {
+        RunManifest first = shards.get(0);
+        Instant started = shards.stream().map(RunManifest::started).min(Comparator.naturalOrder()).orElseThrow();
+        Instant finished = shards.stream().anyMatch(m -> m.finished() == null) ? clock.instant()
+                : shards.stream().map(RunManifest::finished).filter(Objects::nonNull).max(Comparator.naturalOrder())
+                .orElseThrow();
+        int threads = shards.stream().mapToInt(RunManifest::threads).sum();
+        double median = RunManifest.median(shards.stream().mapToDouble(RunManifest::medianSecondsPerModel)
+                .filter(Double::isFinite).toArray());
+        return new RunManifest(toolVersion, first.gridFile(), first.gridText(), first.gridFileSha256(),
+                first.gridModelsSha256(), first.physics(), started, finished, threads, null,
+                RunFinishing.countByStatus(rows), median);
+    }
+}

@@ -1,0 +1,101 @@
+package org.convgrid.survey;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Collection;
+import java.util.HashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.grids.GridSpec;
+import org.convgrid.output.catalogue.CatalogueReader;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.transitions.RefinedModelIds;
+
+/**
+ * The catalogue lines of several shards, keyed by model id and kept byte for byte, then put back in grid order.
+ * Not thread-safe.
+ */
+final class ShardRows {
+
+    /** Model ids listed per kind of problem in a refusal message. */
+    static final int IDS_SHOWN = 10;
+
+    private final Map<String, String> lines = new HashMap<>();
+    private final Map<String, Path> origin = new HashMap<>();
+    private final Set<String> duplicates = new LinkedHashSet<>();
+
+    /** Adds the complete lines of one shard's catalogue (each row checked by the catalogue reader). */
+    void add(Path catalogue, Path shard) throws IOException {
+        byte[] bytes = Files.readAllBytes(catalogue);
+        String text = new String(bytes, 0, KeptCatalogue.lastLineEnd(bytes), StandardCharsets.UTF_8);
+        String header = RunDirectory.catalogueHeader();
+        if (!text.startsWith(header)) {
+            throw new RunSetupException(catalogue + " has another header than this version writes");
+        }
+        List<CatalogueRow> rows = CatalogueReader.readCompleteLines(text);
+        String[] raw = text.substring(header.length()).split("\n");
+        int count = text.length() == header.length() ? 0 : raw.length;
+        if (count != rows.size()) {
+            throw new RunSetupException(catalogue + " has rows that span several lines; cannot merge it");
+        }
+        for (int i = 0; i < count; i++) {
+            String id = rows.get(i).modelId();
+            if (lines.putIfAbsent(id, raw[i]) != null) {
+                duplicates.add(id + " (" + origin.get(id) + " and " + shard + ")");
+            } else {
+                origin.put(id, shard);
+            }
+        }
+    }
+
+    /**
+     * Every line in grid order.
+     *
+     * @throws RunSetupException listing models missing from every shard, present twice, or not in the grid
+     */
+    List<String> inGridOrder(GridSpec grid) {
+        Map<String, String> left = new HashMap<>(lines);
+        List<String> missing = new ArrayList<>();
+        List<String> ordered = new ArrayList<>(lines.size());
+        for (ModelRequest request : grid.requests()) {
+            String line = left.remove(request.modelId());
+            if (line == null) {
+                missing.add(request.modelId());
+            } else {
+                ordered.add(line);
+            }
+        }
+        List<String> problems = new ArrayList<>();
+        if (!missing.isEmpty()) {
+            problems.add(missing.size() + " model(s) missing from every shard: " + firstIds(missing));
+        }
+        if (!duplicates.isEmpty()) {
+            problems.add(duplicates.size() + " model(s) in more than one shard: " + firstIds(duplicates));
+        }
+        List<String> refined = left.keySet().stream().filter(RefinedModelIds::isRefined).sorted()
+                .map(id -> id + " (" + origin.get(id) + ")").toList();
+        if (!refined.isEmpty()) {
+            problems.add(refined.size() + " model(s) added by 'convgrid transitions --refine': " + firstIds(refined)
+                    + "; merge unrefined shards, then refine the merged directory");
+            left.keySet().removeIf(RefinedModelIds::isRefined);
+        }
+        if (!left.isEmpty()) {
+            List<String> strays = left.keySet().stream().sorted().map(id -> id + " (" + origin.get(id) + ")").toList();
+            problems.add(strays.size() + " row(s) not in the grid: " + firstIds(strays));
+        }
+        if (!problems.isEmpty()) {
+            throw new RunSetupException("cannot merge: " + String.join("; ", problems));
+        }
+        return ordered;
+    }
+
+    private static String firstIds(Collection<String> ids) {
+        return String.join(", ", ids.stream().limit(IDS_SHOWN).toList()) + (ids.size() > IDS_SHOWN ? ", ..." : "");
+    }
+}

@@ -1,0 +1,253 @@
+package org.convgrid.survey.refine;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.function.Predicate;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.PhysicsOptions;
+import org.convgrid.engine.refine.MassBisection;
+import org.convgrid.engine.refine.MassLine;
+import org.convgrid.engine.refine.MassLineFactory;
+import org.convgrid.engine.refine.Refinement;
+import org.convgrid.engine.units.Constants;
+import org.convgrid.grids.GridSpec;
+import org.convgrid.grids.MetallicityPoint;
+import org.convgrid.output.CsvNumbers;
+import org.convgrid.output.Span;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.catalogue.OutcomeRows;
+import org.convgrid.output.transitions.RefinedModelIds;
+import org.convgrid.output.transitions.Slice;
+import org.convgrid.output.transitions.TransitionEstimate;
+import org.convgrid.output.transitions.TransitionFinder;
+import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.survey.RunSetupException;
+import org.convgrid.survey.parallel.ParallelWork;
+
+/**
+ * Narrows the grid brackets of a catalogue's transitions by bisection with new zero-age models
+ * ({@link MassBisection}). One search per (slice, transition) still wider than the tolerance, each on its own fresh
+ * {@link MassLine} (so it depends on nothing but its slice and bracket; two searches of the same bracket share one);
+ * the searches run in parallel on the command's {@link ParallelWork} (the one grid runs use) and are gathered in
+ * slice order, fully convective limit first, so the result is the same for any thread count. By default only the
+ * crossing the table reports is refined (the highest one for the fully convective limit, the lowest for the core
+ * onset); on request every crossing of a slice whose structure flickers with mass. Slices at ages above zero are
+ * left at grid resolution.
+ * Midpoints are rounded to masses the catalogue writes exactly, so a catalogue row's mass is the mass computed.
+ */
+public final class TransitionRefiner {
+
+    /**
+     * The new models, ready to append, and what the table should say about each slice.
+     *
+     * @param newModels every new model, in slice order then increasing mass, with its final refinement id
+     * @param notes remarks per slice (stops, unrefinable ages), in slice order
+     * @param searches bisections run
+     */
+    public record Result(List<ModelOutcome> newModels, Map<Slice, List<String>> notes, int searches) {
+    }
+
+    private enum Kind {
+        FULLY_CONVECTIVE("fully convective"), CONV_CORE("convective core");
+
+        final String label;
+
+        Kind(String label) {
+            this.label = label;
+        }
+    }
+
+    /**
+     * One bisection; {@code lowState} is the kind's state (fully convective, has a core) below the crossing;
+     * {@code failed} the slice's catalogue rows that are not usable, by mass in g.
+     */
+    private record Search(Slice slice, Kind kind, Span bracket, boolean lowState, PhysicsOptions physics,
+                          MetallicityPoint point, Map<Double, CatalogueRow> failed) {
+    }
+
+    private final MassLineFactory lines;
+    private final TransitionFinder finder;
+    private final MassBisection bisection;
+    private final ParallelWork work;
+    private final boolean allCrossings;
+
+    /**
+     * @param lines opens the line of each search
+     * @param finder decides each model's side of a transition (its core threshold)
+     * @param toleranceMsun the refined brackets must be narrower than this, solar masses
+     * @param work the command's worker threads, on which the searches run
+     * @param allCrossings refine every crossing of a slice that flickers, not only the one the table reports
+     */
+    public TransitionRefiner(MassLineFactory lines, TransitionFinder finder, double toleranceMsun, ParallelWork work,
+                             boolean allCrossings) {
+        this.lines = lines;
+        this.finder = finder;
+        this.bisection = new MassBisection(toleranceMsun * Constants.M_SUN, TransitionRefiner::catalogueMass);
+        this.work = work;
+        this.allCrossings = allCrossings;
+    }
+
+    /** The tolerance, solar masses. */
+    public double toleranceMsun() {
+        return bisection.tolerance() / Constants.M_SUN;
+    }
+
+    /** Whether every crossing is refined, not only the reported one. */
+    public boolean allCrossings() {
+        return allCrossings;
+    }
+
+    /**
+     * @param grid the grid of the run (its metallicity points and physics combinations, by the ids' indices)
+     * @param catalogue every row of the run's catalogue, grid and earlier refinement rows alike
+     */
+    public Result refine(GridSpec grid, List<CatalogueRow> catalogue) throws InterruptedException {
+        Map<Slice, List<CatalogueRow>> members = new LinkedHashMap<>();
+        catalogue.forEach(r -> members.computeIfAbsent(Slice.of(r), s -> new ArrayList<>()).add(r));
+        Map<Slice, List<String>> notes = new LinkedHashMap<>();
+        List<Search> searches = new ArrayList<>();
+        for (TransitionRow row : finder.find(catalogue)) {
+            Slice slice = row.slice();
+            notes.put(slice, new ArrayList<>());
+            CatalogueRow gridRow = members.get(slice).stream().filter(r -> !RefinedModelIds.isRefined(r.modelId()))
+                    .findFirst().orElseThrow(() -> new RunSetupException("slice at Z = " + slice.zInit()
+                            + " has no grid model; the catalogue was edited"));
+            int[] indices = ModelIds.physicsAndMetallicity(gridRow.modelId());
+            if (indices[0] >= grid.physics().size() || indices[1] >= grid.metallicities().size()) {
+                throw new RunSetupException("model " + gridRow.modelId() + " is not in the run's grid");
+            }
+            for (Kind kind : Kind.values()) {
+                TransitionEstimate e = kind == Kind.FULLY_CONVECTIVE ? row.fullyConvective() : row.convCore();
+                List<Span> spans = allCrossings ? e.crossings() : reported(kind, e, row);
+                if (spans.isEmpty()) {
+                    continue;
+                }
+                if (slice.ageGyr() != 0.0) {
+                    notes.get(slice).add(kind.label + " not refined: only zero-age slices can be refined");
+                    continue;
+                }
+                PhysicsOptions physics = grid.physics().combinations().get(indices[0]);
+                MetallicityPoint point = grid.metallicities().get(indices[1]);
+                Map<Double, CatalogueRow> failed = new HashMap<>();
+                members.get(slice).stream().filter(r -> !r.isOk() || r.structureClass() == null)
+                        .forEach(r -> failed.put(r.massMsun() * Constants.M_SUN, r));
+                for (Span span : spans) {
+                    if (span.hi() - span.lo() >= bisection.tolerance() / Constants.M_SUN) {
+                        CatalogueRow below = members.get(slice).stream().filter(r -> r.isOk()
+                                && r.structureClass() != null && r.massMsun() == span.lo()).findFirst()
+                                .orElseThrow();
+                        searches.add(new Search(slice, kind, span, inState(kind, below), physics, point,
+                                failed));
+                    }
+                }
+            }
+        }
+        List<Search> flat = tasks(searches).stream().flatMap(List::stream).toList();
+        List<Refinement> done = runAll(tasks(searches)).stream().flatMap(List::stream).toList();
+        Map<Slice, Map<Double, ModelOutcome>> added = new LinkedHashMap<>();
+        for (int i = 0; i < flat.size(); i++) {
+            Search s = flat.get(i);
+            Map<Double, ModelOutcome> byMass = added.computeIfAbsent(s.slice(), k -> new LinkedHashMap<>());
+            // two searches of one bracket share their line: the second one's models repeat the first one's
+            done.get(i).newModels().forEach(o -> byMass.putIfAbsent(o.request().mass(), o));
+            RefinementRemarks.describe(s.kind().label, done.get(i), notes.get(s.slice()));
+        }
+        return new Result(named(added, members), notes, searches.size());
+    }
+
+    /**
+     * The crossings the table reports: the fully convective limit, or the lowest core onset and, when it differs,
+     * the onset of the lasting core (the one users compare with the literature), in mass order.
+     */
+    private static List<Span> reported(Kind kind, TransitionEstimate e, TransitionRow row) {
+        List<Span> spans = new ArrayList<>();
+        if (e.found()) {
+            spans.add(e.bracket());
+        }
+        if (kind == Kind.CONV_CORE) {
+            TransitionEstimate lasting = row.lastingCoreOnset();
+            if (lasting.found() && !spans.contains(lasting.bracket())) {
+                spans.add(lasting.bracket());
+            }
+        }
+        return spans;
+    }
+
+    /**
+     * Searches grouped by line: both transitions of a slice share one line when their grid brackets coincide (a
+     * star that leaves full convection straight into a convective core), so the second search reuses the first
+     * one's converged models instead of computing them again.
+     */
+    private static List<List<Search>> tasks(List<Search> searches) {
+        Map<List<Object>, List<Search>> byBracket = new LinkedHashMap<>();
+        searches.forEach(s -> byBracket.computeIfAbsent(List.of(s.slice(), s.bracket()), k -> new ArrayList<>())
+                .add(s));
+        return List.copyOf(byBracket.values());
+    }
+
+    private List<List<Refinement>> runAll(List<List<Search>> tasks) throws InterruptedException {
+        return work.mapInOrder(tasks, this::run);
+    }
+
+    /** The searches of one task, in order, on one fresh line. */
+    private List<Refinement> run(List<Search> task) {
+        Search first = task.get(0);
+        MetallicityPoint p = first.point();
+        MassLine line = skippingKnownFailures(lines.open(first.physics(), p.z(), p.y()), first.failed());
+        List<Refinement> done = new ArrayList<>(task.size());
+        for (Search s : task) {
+            Predicate<ModelOutcome.Solved> lowSide = o -> inState(s.kind(), OutcomeRows.toRow(o)) == s.lowState();
+            done.add(bisection.refine(line, mass -> new ModelRequest("pending", mass, p.z(), p.y(), 0.0,
+                    s.physics()), s.bracket().lo() * Constants.M_SUN, s.bracket().hi() * Constants.M_SUN, lowSide));
+        }
+        return done;
+    }
+
+    /**
+     * A model an earlier refinement found unusable is answered from the catalogue instead of being computed and
+     * appended again, so refining a run twice stops where the first refinement stopped.
+     */
+    private static MassLine skippingKnownFailures(MassLine line, Map<Double, CatalogueRow> failed) {
+        return request -> {
+            CatalogueRow known = failed.get(request.mass());
+            return known == null ? line.solve(request)
+                    : new ModelOutcome.Failed(request, known.status(), known.statusDetail(), 0);
+        };
+    }
+
+    private boolean inState(Kind kind, CatalogueRow row) {
+        return kind == Kind.FULLY_CONVECTIVE ? TransitionFinder.isFullyConvective(row) : finder.hasConvectiveCore(row);
+    }
+
+    /** The new models of each slice by mass, numbered after the slice's highest refinement counter. */
+    private static List<ModelOutcome> named(Map<Slice, Map<Double, ModelOutcome>> added,
+                                            Map<Slice, List<CatalogueRow>> members) {
+        List<ModelOutcome> all = new ArrayList<>();
+        added.forEach((slice, outcomes) -> {
+            List<CatalogueRow> rows = members.get(slice);
+            String gridId = rows.stream().map(CatalogueRow::modelId).filter(id -> !RefinedModelIds.isRefined(id))
+                    .findFirst().orElseThrow();
+            int next = 1 + rows.stream().mapToInt(r -> RefinedModelIds.counter(r.modelId())).max().orElse(-1);
+            List<ModelOutcome> byMass = new ArrayList<>(outcomes.values());
+            byMass.sort(Comparator.comparingDouble(o -> o.request().mass()));
+            for (ModelOutcome o : byMass) {
+                ModelRequest r = o.request();
+                if (rows.stream().anyMatch(row -> row.massMsun() * Constants.M_SUN == r.mass())) {
+                    continue;
+                }
+                all.add(o.withRequest(r.withModelId(RefinedModelIds.of(gridId, next++))));
+            }
+        });
+        return all;
+    }
+
+    /** The mass (g) nearest to {@code mass} whose catalogue text reads back exactly. */
+    static double catalogueMass(double mass) {
+        return CsvNumbers.parse(CsvNumbers.format(mass / Constants.M_SUN)) * Constants.M_SUN;
+    }
+}

@@ -1,0 +1,217 @@
+package org.convgrid.survey.refine;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.grids.GridSpec;
+import org.convgrid.grids.yaml.GridFileReader;
+import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.RunLayout;
+import org.convgrid.output.catalogue.CatalogueReader;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.manifest.RunManifest;
+import org.convgrid.output.manifest.RunManifestReader;
+import org.convgrid.output.manifest.RunManifestWriter;
+import org.convgrid.output.transitions.RefinedModelIds;
+import org.convgrid.output.transitions.Slice;
+import org.convgrid.output.transitions.TransitionEstimate;
+import org.convgrid.output.transitions.TransitionFinder;
+import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.output.transitions.TransitionWriter;
+import org.convgrid.survey.CatalogueAppender;
+import org.convgrid.survey.FinishedRun;
+import org.convgrid.survey.RunDirectory;
+import org.convgrid.survey.RunFinisher;
+import org.convgrid.survey.RunFinishing;
+import org.convgrid.survey.RunSetupException;
+
+/**
+ * {@code convgrid transitions}: rewrites a run directory's transitions.csv from its catalogue, after appending the
+ * new models of a refinement when asked. Refinement needs a finished, unsharded run (its manifest gives the grid);
+ * each round's new rows are appended in one go once all its searches have ended, then the table and the manifest's
+ * counts are rewritten atomically.
+ */
+public final class TransitionTables {
+
+    /**
+     * What was written.
+     *
+     * @param transitions the rows of transitions.csv
+     * @param catalogue every catalogue row after the update
+     * @param added models appended to the catalogue
+     * @param searches bisections run
+     * @param finished the directory for the finishers, null when the run has no finished manifest
+     */
+    public record Update(List<TransitionRow> transitions, List<CatalogueRow> catalogue, List<ModelOutcome> added,
+                         int searches, FinishedRun finished) {
+    }
+
+    /**
+     * Refinement rounds at most: a round's new models can reveal crossings between earlier masses (a structure that
+     * flickers with mass), which the next round refines; rounds stop early once one adds no model.
+     */
+    public static final int MAX_ROUNDS = 4;
+
+    private TransitionTables() {
+    }
+
+    /**
+     * Recomputes transitions.csv from the catalogue as it stands (no model computed), then calls the finishers when
+     * the manifest says the run finished.
+     */
+    public static Update recompute(RunDirectory dir, TransitionFinder finder, List<RunFinisher> finishers)
+            throws IOException {
+        requireCatalogue(dir);
+        List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
+        List<TransitionRow> transitions = withNotes(finder, rows, Map.of());
+        AtomicFiles.write(dir.transitions(), out -> TransitionWriter.write(transitions, out));
+        return finish(new Update(transitions, rows, List.of(), 0, finished(dir, rows, transitions)), finishers);
+    }
+
+    /**
+     * Refines the transitions, appends the new models to the catalogue, rewrites transitions.csv and the manifest's
+     * counts, then calls the finishers.
+     *
+     * @throws RunSetupException when the directory is not a finished, unsharded run (nothing changed)
+     */
+    public static Update refine(RunDirectory dir, TransitionFinder finder, TransitionRefiner refiner,
+                                List<RunFinisher> finishers) throws IOException, InterruptedException {
+        requireCatalogue(dir);
+        if (!Files.isRegularFile(dir.manifest())) {
+            throw new RunSetupException(dir.root() + " has no " + RunLayout.MANIFEST
+                    + ", so the grid of its models is unknown; cannot refine");
+        }
+        RunManifest manifest = RunManifestReader.read(Files.readString(dir.manifest()));
+        if (manifest.finished() == null) {
+            throw new RunSetupException("the run in " + dir.root() + " has not finished; complete it with "
+                    + "'convgrid run --resume' before refining");
+        }
+        if (manifest.shard() != null) {
+            throw new RunSetupException(dir.root() + " holds shard " + manifest.shard() + " of a grid; merge the "
+                    + "shards with 'convgrid merge' and refine the merged directory");
+        }
+        GridSpec grid = new GridFileReader().parse(manifest.gridFile(), manifest.gridText());
+        List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
+        List<ModelOutcome> added = new ArrayList<>();
+        int searches = 0;
+        Map<Slice, List<String>> notes = Map.of();
+        for (int round = 0; round < MAX_ROUNDS; round++) {
+            TransitionRefiner.Result result = refiner.refine(grid, rows);
+            searches += result.searches();
+            notes = result.notes();
+            if (result.newModels().isEmpty()) {
+                break;
+            }
+            try (CatalogueAppender sink = CatalogueAppender.open(dir.catalogue(), false)) {
+                for (ModelOutcome o : result.newModels()) {
+                    sink.accept(o);
+                }
+            }
+            added.addAll(result.newModels());
+            rows = CatalogueReader.read(dir.catalogue());
+        }
+        Map<Slice, List<String>> remarks = notes;
+        List<TransitionRow> transitions = withNotes(finder, rows, remarks).stream()
+                .map(t -> refiner.allCrossings() ? t : withWideCrossings(t, refiner.toleranceMsun())).toList();
+        AtomicFiles.write(dir.transitions(), out -> TransitionWriter.write(transitions, out));
+        RunManifest updated = manifest.finishedAt(manifest.finished(), RunFinishing.countByStatus(rows),
+                manifest.medianSecondsPerModel());
+        AtomicFiles.writeString(dir.manifest(), RunManifestWriter.toYaml(updated));
+        return finish(new Update(transitions, rows, added, searches,
+                new FinishedRun(dir.root(), grid, updated, rows, transitions)), finishers);
+    }
+
+    private static Update finish(Update update, List<RunFinisher> finishers) throws IOException {
+        if (update.finished() != null) {
+            RunFinishing.callFinishers(update.finished(), finishers);
+        }
+        return update;
+    }
+
+    /**
+     * The table of the catalogue with the refinement's remarks, and, when the catalogue holds refinement models, a
+     * remark wherever a transition lies outside the bracket the grid models alone give: the new models found a
+     * crossing between grid masses that the grid had missed. Depends on the catalogue alone (plus the remarks).
+     */
+    static List<TransitionRow> withNotes(TransitionFinder finder, List<CatalogueRow> catalogue,
+                                         Map<Slice, List<String>> notes) {
+        List<TransitionRow> rows = finder.find(catalogue);
+        Map<Slice, TransitionRow> before = new HashMap<>();
+        if (catalogue.stream().anyMatch(r -> RefinedModelIds.isRefined(r.modelId()))) {
+            finder.find(catalogue.stream().filter(r -> !RefinedModelIds.isRefined(r.modelId())).toList())
+                    .forEach(r -> before.put(r.slice(), r));
+        }
+        List<TransitionRow> out = new ArrayList<>(rows.size());
+        for (TransitionRow row : rows) {
+            List<String> all = new ArrayList<>();
+            if (!row.notes().isEmpty()) {
+                all.add(row.notes());
+            }
+            all.addAll(notes.getOrDefault(row.slice(), List.of()));
+            TransitionRow old = before.get(row.slice());
+            if (old != null) {
+                moved("fully convective limit", old.fullyConvective(), row.fullyConvective(), all);
+                moved("convective core onset", old.convCore(), row.convCore(), all);
+            }
+            out.add(new TransitionRow(row.slice(), row.fullyConvective(), row.convCore(), row.method(),
+                    String.join("; ", all)));
+        }
+        return out;
+    }
+
+    /** A zero-age row with a remark for each transition whose other crossings are still wider than the tolerance. */
+    private static TransitionRow withWideCrossings(TransitionRow t, double toleranceMsun) {
+        if (t.slice().ageGyr() != 0.0) {
+            return t;
+        }
+        List<String> notes = new ArrayList<>();
+        if (!t.notes().isEmpty()) {
+            notes.add(t.notes());
+        }
+        wide("fully convective", t.fullyConvective(), TransitionEstimate.NONE, toleranceMsun, notes);
+        wide("convective core", t.convCore(), t.lastingCoreOnset(), toleranceMsun, notes);
+        return new TransitionRow(t.slice(), t.fullyConvective(), t.convCore(), t.method(), String.join("; ", notes));
+    }
+
+    private static void wide(String what, TransitionEstimate e, TransitionEstimate alsoRefined, double toleranceMsun,
+                             List<String> notes) {
+        long wide = e.crossings().stream().filter(c -> !c.equals(e.bracket()) && !c.equals(alsoRefined.bracket())
+                && c.hi() - c.lo() >= toleranceMsun).count();
+        if (wide > 0) {
+            notes.add(what + ": " + wide + " other crossing(s) wider than the tolerance, not refined "
+                    + "(--all-crossings refines them)");
+        }
+    }
+
+    private static void moved(String what, TransitionEstimate before, TransitionEstimate after, List<String> notes) {
+        if (before.found() && after.found() && (after.bracket().lo() < before.bracket().lo()
+                || after.bracket().hi() > before.bracket().hi())) {
+            notes.add(what + " lies outside the grid bracket " + before.bracket() + " Msun: the refinement "
+                    + "models found a crossing between grid masses that the grid had missed");
+        }
+    }
+
+    private static void requireCatalogue(RunDirectory dir) {
+        if (!Files.isRegularFile(dir.catalogue())) {
+            throw new RunSetupException(dir.root() + " is not a run directory (no " + RunLayout.CATALOGUE + ")");
+        }
+    }
+
+    /** The directory for the finishers when its manifest says the run finished; null otherwise. */
+    private static FinishedRun finished(RunDirectory dir, List<CatalogueRow> rows, List<TransitionRow> transitions)
+            throws IOException {
+        if (!Files.isRegularFile(dir.manifest())) {
+            return null;
+        }
+        RunManifest manifest = RunManifestReader.read(Files.readString(dir.manifest()));
+        if (manifest.finished() == null) {
+            return null;
+        }
+        GridSpec grid = new GridFileReader().parse(manifest.gridFile(), manifest.gridText());
+        return new FinishedRun(dir.root(), grid, manifest, rows, transitions);
+    }
+}
