@@ -9,7 +9,6 @@ import java.util.Map;
 import java.util.Set;
 import org.convgrid.engine.batch.ChunkSolver;
 import org.convgrid.engine.batch.Chunking;
-import org.convgrid.engine.batch.ModelScheduler;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.batch.ProgressListener;
 import org.convgrid.engine.batch.Shard;

@@ -11,7 +11,7 @@ import org.convgrid.grids.GridSpec;
 
 /**
  * The requests one shard owns, in the order its catalogue lists them: the same chunk cut as
- * {@link org.convgrid.engine.batch.ModelScheduler} makes, so a shard's catalogue is always a prefix of this
+ * {@link ChunkSweep} makes, so a shard's catalogue is always a prefix of this
  * sequence. Produced lazily.
  *
  * @param grid the grid

@@ -1,4 +1,4 @@
-package org.convgrid.engine.batch;
+package org.convgrid.survey;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
@@ -7,13 +7,19 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.stream.Collectors;
+import org.convgrid.engine.batch.ChunkSolver;
+import org.convgrid.engine.batch.Chunking;
+import org.convgrid.engine.batch.ProgressListener;
+import org.convgrid.engine.batch.Shard;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.request.PhysicsOptions;
+import org.convgrid.survey.parallel.ParallelWork;
 import org.junit.jupiter.api.Test;
 
-class ModelSchedulerTest {
+/** The grid sweep: grid order, thread-count independence, shards, resume and failing chunks. */
+class ChunkSweepTest {
 
     /** Two lines (two Z) of 20 masses with 2 ages each, in grid order. */
     private static List<ModelRequest> grid() {
@@ -41,9 +47,10 @@ class ModelSchedulerTest {
 
     private static List<String> run(int threads, Shard shard, Set<String> done) throws Exception {
         List<String> rows = new ArrayList<>();
-        new ModelScheduler(threads, 4).run(grid().iterator(), shard, r -> done.contains(r.modelId()),
-                SEED_DEPENDENT, o -> rows.add(o.request().modelId() + " " + o.statusDetail()),
-                ProgressListener.NONE, -1);
+        try (ParallelWork work = new ParallelWork(threads)) {
+            ChunkSweep.run(work, grid().iterator(), 4, shard, r -> done.contains(r.modelId()), SEED_DEPENDENT,
+                    o -> rows.add(o.request().modelId() + " " + o.statusDetail()), ProgressListener.NONE, -1);
+        }
         return rows;
     }
 
@@ -94,8 +101,11 @@ class ModelSchedulerTest {
             return SEED_DEPENDENT.solve(chunk);
         };
         List<ModelOutcome> outcomes = new ArrayList<>();
-        Map<ModelStatus, Long> counts = new ModelScheduler(2, 4).run(grid().iterator(), Shard.ALL, r -> false, flaky,
-                outcomes::add, ProgressListener.NONE, -1);
+        Map<ModelStatus, Long> counts;
+        try (ParallelWork work = new ParallelWork(2)) {
+            counts = ChunkSweep.run(work, grid().iterator(), 4, Shard.ALL, r -> false, flaky, outcomes::add,
+                    ProgressListener.NONE, -1);
+        }
         assertThat(outcomes).hasSize(80);
         assertThat(counts.get(ModelStatus.FAILED)).isEqualTo(40L + 2L);
         assertThat(outcomes.get(0).statusDetail()).contains("boom");
