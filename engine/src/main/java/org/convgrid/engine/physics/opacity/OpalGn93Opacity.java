@@ -1,0 +1,173 @@
+package org.convgrid.engine.physics.opacity;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.util.Objects;
+import org.convgrid.engine.error.ConvgridException;
+import org.convgrid.engine.error.ErrorKind;
+import org.convgrid.engine.state.Composition;
+
+/**
+ * The default Rosseland-mean opacity: the published OPAL GN93 tables (Iglesias &amp; Rogers 1996, ApJ 464, 943;
+ * the "GN93hz" set, shipped converted in {@value #RESOURCE}) wherever they answer, the analytic radiative terms
+ * joined to them where they do not, and electron conduction in parallel everywhere:
+ * <pre>
+ *   1/kappa = 1/kappa_rad + 1/kappa_cond      (Kippenhahn, Weigert &amp; Weiss 2012, opacity chapter)
+ * </pre>
+ * kappa_rad is the table ({@link TabulatedOpacity}: cubic Hermite in log T, log R, X/(1-Z) and log10(Z + 1e-4)).
+ * Where no table answers, kappa_rad is the analytic radiative composite
+ * ({@link AnalyticCompositeOpacity#standardRadiative()}: H^-, molecules, Kramers terms, scattering) plus the
+ * table-minus-analytic offset (dex) taken at the nearest point where the table answers, faded out with the
+ * distance d from it as 1 - 3u^2 + 2u^3, u = d/width:
+ * <ul>
+ *   <li>below log T = 3.75 (cool gas: H^- and molecules), width {@value #COOL_JOIN_WIDTH} dex, so the analytic
+ *       terms alone answer below log T = 3.70;</li>
+ *   <li>above the tables' right edge in log R (log R = 1, or lower where the published tables leave the hot,
+ *       dense corner blank), below log R = -8 and above the last log T (8.70), width {@value #EDGE_JOIN_WIDTH}
+ *       dex. Inside the blank corner the edge is taken per table row in log T, so the join is continuous in log R
+ *       but can step across log T rows there (white-dwarf-like densities that main-sequence models do not
+ *       reach).</li>
+ * </ul>
+ * The join is continuous in value; its slope changes at the table edge. A composition outside the tables (Z above
+ * their largest Z, or X/(1-Z) beyond a row's range) is moved to the nearest tabulated one for the table part.
+ * Conduction (Yakovlev &amp; Urpin 1980, {@link ElectronConduction}) is added in parallel inside the tables too,
+ * since the OPAL values are radiative only; it changes log kappa by less than 0.001 dex wherever log R &lt; 0 and
+ * log T &gt; 6, and matters in the dense cores of the lowest masses and above log R = 1.
+ *
+ * <p>The shipped table is read once, at first use of {@link #shipped()}, and shared by every thread. Immutable and
+ * thread-safe.
+ */
+public final class OpalGn93Opacity implements Opacity {
+
+    /** Classpath resource of the converted OPAL GN93hz tables. */
+    public static final String RESOURCE = "/reference/opacity/opal-gn93hz.txt";
+    /** Width (dex in log T) over which the table offset fades below the coolest row. */
+    public static final double COOL_JOIN_WIDTH = 0.05;
+    /** Width (dex) over which the table offset fades beyond the other edges. */
+    public static final double EDGE_JOIN_WIDTH = 0.5;
+
+    private static final double LN10 = Math.log(10.0);
+
+    private final TabulatedOpacity table;
+    private final Opacity analyticRadiative;
+    private final Opacity conduction;
+    private final double minLogT;
+    private final double maxLogT;
+    private final double minLogR;
+    private final double maxLogR;
+
+    /**
+     * @param table radiative log kappa tables
+     * @param analyticRadiative answers where the table does not (radiative only)
+     * @param conduction added in parallel
+     */
+    public OpalGn93Opacity(TabulatedOpacity table, Opacity analyticRadiative, Opacity conduction) {
+        this.table = Objects.requireNonNull(table);
+        this.analyticRadiative = Objects.requireNonNull(analyticRadiative);
+        this.conduction = Objects.requireNonNull(conduction);
+        double[] t = table.logTemperatures();
+        double[] r = table.logR();
+        minLogT = t[0];
+        maxLogT = t[t.length - 1];
+        minLogR = r[0];
+        maxLogR = r[r.length - 1];
+    }
+
+    /** The shipped tables with the standard analytic edges and conduction; read at the first call, then shared. */
+    public static OpalGn93Opacity shipped() {
+        return Shipped.INSTANCE;
+    }
+
+    /** The radiative tables this opacity interpolates. */
+    public TabulatedOpacity table() {
+        return table;
+    }
+
+    /**
+     * Reads the shipped tables ({@value #RESOURCE}).
+     *
+     * @throws ConvgridException BAD_DATA when the resource is missing or unreadable (a broken build)
+     */
+    public static TabulatedOpacity readShippedTable() {
+        try (InputStream in = OpalGn93Opacity.class.getResourceAsStream(RESOURCE)) {
+            if (in == null) {
+                throw new ConvgridException(ErrorKind.BAD_DATA, "missing opacity table " + RESOURCE, RESOURCE);
+            }
+            return OpacityTableReader.read(in, RESOURCE);
+        } catch (IOException e) {
+            throw new ConvgridException(ErrorKind.BAD_DATA, "cannot read opacity table " + RESOURCE + ": "
+                    + e.getMessage(), RESOURCE);
+        }
+    }
+
+    @Override
+    public OpacityValue rosselandMean(double density, double temperature, Composition composition) {
+        double lt = Math.log10(temperature);
+        double lr = Math.log10(density) - 3.0 * (lt - 6.0);
+        double z = table.clampMetals(composition.z());
+        double x = table.clampHydrogen(composition.x(), z);
+        double[] out = new double[3];
+        if (table.interpolate(lt, lr, x, z, out) != TabulatedOpacity.ANSWERED) {
+            joinAnalytic(density, temperature, composition, lt, lr, x, z, out);
+        }
+        // out: log10 kappa_rad, d/dlog T at fixed R, d/dlog R at fixed T; log R = log rho - 3 log T + 18
+        double rad = Math.exp(LN10 * out[0]);
+        double radRho = out[2];
+        double radT = out[1] - 3.0 * out[2];
+        OpacityValue cond = conduction.rosselandMean(density, temperature, composition);
+        double c = cond.kappa();
+        double wc = rad / (rad + c);
+        return new OpacityValue(rad * c / (rad + c), wc * cond.dlnKappaDlnRho() + (1.0 - wc) * radRho,
+                wc * cond.dlnKappaDlnT() + (1.0 - wc) * radT);
+    }
+
+    /** The analytic radiative opacity plus the faded offset to the nearest answering table point, into out. */
+    private void joinAnalytic(double density, double temperature, Composition composition, double lt, double lr,
+                              double x, double z, double[] out) {
+        OpacityValue a = analyticRadiative.rosselandMean(density, temperature, composition);
+        out[0] = Math.log10(a.kappa());
+        out[2] = a.dlnKappaDlnRho();
+        out[1] = a.dlnKappaDlnT() + 3.0 * out[2];
+        double tc = Math.min(Math.max(lt, minLogT), maxLogT);
+        double rc = Math.min(Math.max(lr, minLogR), maxLogR);
+        double limit = table.answeredLogRLimit(tc, x, z);
+        if (Double.isNaN(limit)) {
+            return;
+        }
+        rc = Math.min(rc, limit);
+        double[] edge = new double[3];
+        if (table.interpolate(tc, rc, x, z, edge) != TabulatedOpacity.ANSWERED) {
+            return;
+        }
+        OpacityValue ae = analyticRadiative.rosselandMean(Math.pow(10.0, rc + 3.0 * tc - 18.0),
+                Math.pow(10.0, tc), composition);
+        double offset = edge[0] - Math.log10(ae.kappa());
+        double offsetT = tc == lt ? edge[1] - (ae.dlnKappaDlnT() + 3.0 * ae.dlnKappaDlnRho()) : 0.0;
+        double offsetR = rc == lr ? edge[2] - ae.dlnKappaDlnRho() : 0.0;
+        double widthT = lt < tc ? -COOL_JOIN_WIDTH : EDGE_JOIN_WIDTH;
+        double widthR = lr < rc ? -EDGE_JOIN_WIDTH : EDGE_JOIN_WIDTH;
+        double[] fadeT = fade((lt - tc) / widthT);
+        double[] fadeR = fade((lr - rc) / widthR);
+        double weight = fadeT[0] * fadeR[0];
+        out[0] += weight * offset;
+        out[1] += fadeT[1] / widthT * fadeR[0] * offset + weight * offsetT;
+        out[2] += fadeT[0] * fadeR[1] / widthR * offset + weight * offsetR;
+    }
+
+    /** 1 - 3u^2 + 2u^3 on [0, 1], 1 below, 0 above; returns {value, d/du}. */
+    static double[] fade(double u) {
+        if (u <= 0.0) {
+            return new double[] {1.0, 0.0};
+        }
+        if (u >= 1.0) {
+            return new double[] {0.0, 0.0};
+        }
+        return new double[] {1.0 - u * u * (3.0 - 2.0 * u), -6.0 * u * (1.0 - u)};
+    }
+
+    /** Holder: the class initialises (and reads the table) at the first call of {@link #shipped()}. */
+    private static final class Shipped {
+        static final OpalGn93Opacity INSTANCE = new OpalGn93Opacity(readShippedTable(),
+                AnalyticCompositeOpacity.standardRadiative(), new ElectronConduction());
+    }
+}
