@@ -9,7 +9,7 @@ package org.convgrid.engine.physics.interpolation;
  * (the cubic Hermite basis; e.g. Fritsch &amp; Carlson 1980, SIAM J. Numer. Anal. 17, 238, eq. 2). Values and first
  * derivatives are continuous across cells whatever the node slopes m_i. Where the slopes are not known they are
  * the three-point parabolic slopes of Steffen 1990 (A&amp;A 239, 443, eq. 6), one-sided three-point at the ends;
- * they are linear in the data, so an interpolant is a fixed weighted sum of node values ({@link #weights}). The
+ * they are linear in the data, so an interpolant is a fixed weighted sum of node values ({@link HermiteAxis}). The
  * monotonicity limiter of Fritsch &amp; Carlson and Steffen is not applied: it would make the weights depend on the
  * data. All methods are static, pure and allocation-free unless they say they build an array.
  */
@@ -53,9 +53,9 @@ public final class CubicHermite {
     }
 
     /**
-     * Weight of node {@code k - i + 1}'s neighbour: the parabolic slope at node i is sum over the stencil of
-     * c_k f_k; this returns c for node {@code node} (one of i-1, i, i+1, or at an end the one-sided three nodes),
-     * zero for a node outside the stencil. Two-node grids have the chord slope.
+     * The parabolic slope at node i is a sum c_k f_k over node i and its two neighbours (at an end: the three
+     * nodes there); this returns c for node {@code node}, zero outside those three. Two-node grids have the chord
+     * slope.
      */
     public static double slopeWeight(double[] g, int i, int node) {
         int n = g.length;
@@ -99,27 +99,6 @@ public final class CubicHermite {
             }
         }
         return d;
-    }
-
-    /**
-     * First node of the four-node stencil whose weights {@link #weight} gives for cell i (fewer nodes when the
-     * grid is shorter: then the stencil is the whole grid).
-     */
-    public static int stencilStart(double[] g, int i) {
-        return Math.max(0, Math.min(i - 1, g.length - 4));
-    }
-
-    /**
-     * Weight of node {@code node} in the interpolant at x in cell i with parabolic node slopes: p(x) = sum_k
-     * weight(g, i, x, k) f_k over the stencil. Exactly 1 at x = g_node and 0 at the other nodes.
-     */
-    public static double weight(double[] g, int i, double x, int node) {
-        double h = g[i + 1] - g[i];
-        double t = (x - g[i]) / h;
-        double t2 = t * t;
-        double t3 = t2 * t;
-        double w = node == i ? 2.0 * t3 - 3.0 * t2 + 1.0 : node == i + 1 ? -2.0 * t3 + 3.0 * t2 : 0.0;
-        return w + (t3 - 2.0 * t2 + t) * h * slopeWeight(g, i, node) + (t3 - t2) * h * slopeWeight(g, i + 1, node);
     }
 
     /**

@@ -105,7 +105,7 @@ public final class OpalGn93Opacity implements Opacity {
         double lt = Math.log10(temperature);
         double lr = Math.log10(density) - 3.0 * (lt - 6.0);
         double z = table.clampMetals(composition.z());
-        double x = table.clampHydrogen(composition.x(), z);
+        double x = tableHydrogen(composition, z);
         double[] out = new double[3];
         if (table.interpolate(lt, lr, x, z, out) != TabulatedOpacity.ANSWERED) {
             joinAnalytic(density, temperature, composition, lt, lr, x, z, out);
@@ -119,6 +119,22 @@ public final class OpalGn93Opacity implements Opacity {
         double wc = rad / (rad + c);
         return new OpacityValue(rad * c / (rad + c), wc * cond.dlnKappaDlnRho() + (1.0 - wc) * radRho,
                 wc * cond.dlnKappaDlnT() + (1.0 - wc) * radT);
+    }
+
+    /** X for the table part at table metals z: the request's hydrogen share X/(1-Z), moved into the tables. */
+    private double tableHydrogen(Composition composition, double z) {
+        double x = composition.x();
+        if (z != composition.z()) {
+            x *= (1.0 - z) / (1.0 - composition.z());
+        }
+        return table.clampHydrogen(x, z);
+    }
+
+    /** Whether the tables themselves answer at (log10 T, log10 R) for this composition (no analytic join). */
+    boolean tableAnswers(double logT, double logR, Composition composition) {
+        double z = table.clampMetals(composition.z());
+        return table.interpolate(logT, logR, tableHydrogen(composition, z), z, new double[3])
+                == TabulatedOpacity.ANSWERED;
     }
 
     /** The analytic radiative opacity plus the faded offset to the nearest answering table point, into out. */

@@ -8,6 +8,7 @@ import java.util.TreeSet;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
 import org.convgrid.engine.physics.interpolation.CubicHermite;
+import org.convgrid.engine.physics.interpolation.HermiteAxis;
 import org.convgrid.engine.state.Composition;
 
 /**
@@ -51,8 +52,11 @@ public final class TabulatedOpacity implements Opacity {
     /** Result of {@link #interpolate}: a needed cell has a corner not in table. */
     static final int NOT_IN_TABLE = 3;
 
+    private static final int Z_WEIGHTS = 4 * BicubicLogTable.PER_NODE;
+    private static final int X_WEIGHTS = Z_WEIGHTS + HermiteAxis.STENCIL;
+    /** Per thread: the weighted corner data (16), then the metal-axis weights (4), then the hydrogen-axis ones. */
     private static final ThreadLocal<double[]> SCRATCH = ThreadLocal.withInitial(
-            () -> new double[4 * BicubicLogTable.PER_NODE]);
+            () -> new double[Z_WEIGHTS + 2 * HermiteAxis.STENCIL]);
 
     private final String name;
     private final double[] logT;
@@ -62,9 +66,9 @@ public final class TabulatedOpacity implements Opacity {
     private final BicubicLogTable[] tables;
     /** Distinct Z of the tables, increasing, and zeta = log10(Z + offset) of each. */
     private final double[] metals;
-    private final double[] zeta;
+    private final HermiteAxis zeta;
     /** Per metal row r: xi = X/(1 - Z) of its tables, increasing, and their indices. */
-    private final double[][] xi;
+    private final HermiteAxis[] xi;
     private final int[][] rowTables;
 
     /**
@@ -113,8 +117,8 @@ public final class TabulatedOpacity implements Opacity {
             distinct.add(z);
         }
         this.metals = distinct.stream().mapToDouble(Double::doubleValue).toArray();
-        this.zeta = Arrays.stream(this.metals).map(z -> Math.log10(z + METALS_OFFSET)).toArray();
-        this.xi = new double[this.metals.length][];
+        this.zeta = new HermiteAxis(Arrays.stream(this.metals).map(z -> Math.log10(z + METALS_OFFSET)).toArray());
+        this.xi = new HermiteAxis[this.metals.length];
         this.rowTables = new int[this.metals.length][];
         for (int r = 0; r < this.metals.length; r++) {
             List<Integer> members = new ArrayList<>();
@@ -125,13 +129,14 @@ public final class TabulatedOpacity implements Opacity {
             }
             members.sort((a, b) -> Double.compare(tableX[a], tableX[b]));
             rowTables[r] = members.stream().mapToInt(Integer::intValue).toArray();
-            xi[r] = members.stream().mapToDouble(k -> hydrogenShare(tableX[k], tableZ[k])).toArray();
-            for (int q = 1; q < xi[r].length; q++) {
-                if (!(xi[r][q] > xi[r][q - 1])) {
+            double[] shares = members.stream().mapToDouble(k -> hydrogenShare(tableX[k], tableZ[k])).toArray();
+            for (int q = 1; q < shares.length; q++) {
+                if (!(shares[q] > shares[q - 1])) {
                     throw new ConvgridException(ErrorKind.BAD_DATA, name + ": two tables for X = " + tableX[
                             rowTables[r][q]] + ", Z = " + this.metals[r], name);
                 }
             }
+            xi[r] = new HermiteAxis(shares);
         }
     }
 
@@ -235,20 +240,18 @@ public final class TabulatedOpacity implements Opacity {
 
     /** Sums the composition-weighted corner data of cell (i, j) of every table the composition needs. */
     private int accumulateCell(int i, int j, double x, double z, double[] acc) {
-        if (metals.length == 1) {
-            return accumulateRow(0, i, j, hydrogenShare(x, z), 1.0, acc);
-        }
+        double share = hydrogenShare(x, z);
         double zz = snap(Math.log10(Math.max(z, 0.0) + METALS_OFFSET), zeta);
-        if (!(zz >= zeta[0] && zz <= last(zeta))) {
+        if (!zeta.contains(zz) && zeta.size() > 1) {
             return OUTSIDE_COMPOSITIONS;
         }
-        double share = hydrogenShare(x, z);
-        int cell = CubicHermite.cell(zeta, zz);
-        int from = CubicHermite.stencilStart(zeta, cell);
-        for (int r = from; r < Math.min(from + 4, zeta.length); r++) {
-            double w = CubicHermite.weight(zeta, cell, zz, r);
+        int cell = zeta.cell(zz);
+        int from = zeta.stencilStart(cell);
+        zeta.weights(cell, zz, acc, Z_WEIGHTS);
+        for (int q = 0; q < zeta.stencilSize(); q++) {
+            double w = acc[Z_WEIGHTS + q];
             if (w != 0.0) {
-                int status = accumulateRow(r, i, j, share, w, acc);
+                int status = accumulateRow(from + q, i, j, share, w, acc);
                 if (status != ANSWERED) {
                     return status;
                 }
@@ -258,33 +261,24 @@ public final class TabulatedOpacity implements Opacity {
     }
 
     private int accumulateRow(int r, int i, int j, double share, double rowWeight, double[] acc) {
-        double[] g = xi[r];
-        if (g.length == 1) {
-            return addTable(rowTables[r][0], i, j, rowWeight, acc);
-        }
+        HermiteAxis g = xi[r];
         double s = snap(share, g);
-        if (!(s >= g[0] && s <= last(g))) {
+        if (!g.contains(s) && g.size() > 1) {
             return OUTSIDE_COMPOSITIONS;
         }
-        int cell = CubicHermite.cell(g, s);
-        int from = CubicHermite.stencilStart(g, cell);
-        for (int q = from; q < Math.min(from + 4, g.length); q++) {
-            double w = CubicHermite.weight(g, cell, s, q);
+        int cell = g.cell(s);
+        int from = g.stencilStart(cell);
+        g.weights(cell, s, acc, X_WEIGHTS);
+        for (int q = 0; q < g.stencilSize(); q++) {
+            double w = acc[X_WEIGHTS + q];
             if (w != 0.0) {
-                int status = addTable(rowTables[r][q], i, j, rowWeight * w, acc);
-                if (status != ANSWERED) {
-                    return status;
+                int k = rowTables[r][from + q];
+                if (!tables[k].answers(i, j)) {
+                    return NOT_IN_TABLE;
                 }
+                tables[k].accumulate(i, j, rowWeight * w, acc);
             }
         }
-        return ANSWERED;
-    }
-
-    private int addTable(int k, int i, int j, double weight, double[] acc) {
-        if (!tables[k].answers(i, j)) {
-            return NOT_IN_TABLE;
-        }
-        tables[k].accumulate(i, j, weight, acc);
         return ANSWERED;
     }
 
@@ -295,35 +289,28 @@ public final class TabulatedOpacity implements Opacity {
     double answeredLogRLimit(double logTemperature, double x, double z) {
         int i = CubicHermite.cell(logT, snap(logTemperature, logT));
         int columns = logR.length - 1;
-        for (int k = 0; k < tables.length; k++) {
-            if (needed(k, x, z)) {
-                columns = Math.min(columns, tables[k].answeredColumns(i));
+        double share = hydrogenShare(x, z);
+        double zz = snap(Math.log10(Math.max(z, 0.0) + METALS_OFFSET), zeta);
+        double[] wz = new double[HermiteAxis.STENCIL];
+        double[] wx = new double[HermiteAxis.STENCIL];
+        int zCell = zeta.cell(zz);
+        zeta.weights(zCell, zz, wz, 0);
+        for (int p = 0; p < zeta.stencilSize(); p++) {
+            int r = zeta.stencilStart(zCell) + p;
+            if (wz[p] == 0.0) {
+                continue;
+            }
+            double s = snap(share, xi[r]);
+            int xCell = xi[r].cell(s);
+            xi[r].weights(xCell, s, wx, 0);
+            for (int q = 0; q < xi[r].stencilSize(); q++) {
+                if (wx[q] != 0.0) {
+                    columns = Math.min(columns, tables[rowTables[r][xi[r].stencilStart(xCell) + q]]
+                            .answeredColumns(i));
+                }
             }
         }
         return columns == 0 ? Double.NaN : logR[columns];
-    }
-
-    /** Whether table k carries weight at this composition (tested with the same stencils as the interpolation). */
-    private boolean needed(int k, double x, double z) {
-        int r = Arrays.binarySearch(metals, tableZ[k]);
-        if (metals.length > 1) {
-            double zz = snap(Math.log10(Math.max(z, 0.0) + METALS_OFFSET), zeta);
-            int cell = CubicHermite.cell(zeta, zz);
-            if (CubicHermite.weight(zeta, cell, zz, r) == 0.0) {
-                return false;
-            }
-        }
-        double[] g = xi[r];
-        if (g.length == 1) {
-            return true;
-        }
-        double s = snap(hydrogenShare(x, z), g);
-        int cell = CubicHermite.cell(g, s);
-        int q = 0;
-        while (rowTables[r][q] != k) {
-            q++;
-        }
-        return CubicHermite.weight(g, cell, s, q) != 0.0;
     }
 
     /** Z clamped into [Z_min, Z_max] of the tables. */
@@ -339,16 +326,10 @@ public final class TabulatedOpacity implements Opacity {
         double share = hydrogenShare(x, z);
         double lo = Double.NEGATIVE_INFINITY;
         double hi = Double.POSITIVE_INFINITY;
-        int from = 0;
-        int to = 1;
-        if (metals.length > 1) {
-            double zz = Math.log10(z + METALS_OFFSET);
-            from = CubicHermite.stencilStart(zeta, CubicHermite.cell(zeta, zz));
-            to = Math.min(from + 4, metals.length);
-        }
-        for (int r = from; r < to; r++) {
-            lo = Math.max(lo, xi[r][0]);
-            hi = Math.min(hi, last(xi[r]));
+        int from = zeta.stencilStart(zeta.cell(Math.log10(z + METALS_OFFSET)));
+        for (int r = from; r < from + zeta.stencilSize(); r++) {
+            lo = Math.max(lo, xi[r].node(0));
+            hi = Math.min(hi, xi[r].node(xi[r].size() - 1));
         }
         return share >= lo && share <= hi ? x : Math.min(Math.max(share, lo), hi) * (1.0 - z);
     }
@@ -374,6 +355,15 @@ public final class TabulatedOpacity implements Opacity {
             throw new ConvgridException(ErrorKind.BAD_DATA, name + ": " + what
                     + " grid must be finite, strictly increasing, with at least " + min + " values", name, what);
         }
+    }
+
+    private static double snap(double v, HermiteAxis axis) {
+        double first = axis.node(0);
+        double end = axis.node(axis.size() - 1);
+        if (v < first && v > first - EDGE_TOLERANCE) {
+            return first;
+        }
+        return v > end && v < end + EDGE_TOLERANCE ? end : v;
     }
 
     private static double snap(double v, double[] grid) {
