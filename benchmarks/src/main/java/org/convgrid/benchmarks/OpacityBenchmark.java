@@ -19,7 +19,8 @@ import org.openjdk.jmh.annotations.Warmup;
 /**
  * Cost of one call of the default opacity (the OPAL GN93 tables, interpolated in log T, log R, X and Z) at points
  * typical of a solar interior, a solar envelope, an M-dwarf centre, a K-dwarf photosphere (the cool join) and a
- * composition between table nodes. {@link OpacityTableLoadBenchmark} times reading the tables.
+ * composition between table nodes; beside it the analytic composite at the same points (the old default
+ * was that composite times a tabulated correction, so at least as costly), a ratio that survives a busy machine. {@link OpacityTableLoadBenchmark} times reading the tables.
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.AverageTime)
@@ -32,13 +33,18 @@ public class OpacityBenchmark {
     @Param({"centre_sun", "envelope_sun", "centre_m_dwarf", "photosphere_k_dwarf", "between_nodes"})
     public String point;
 
-    private final Opacity opacity = StandardPhysics.opacity(1.0);
+    /** {@code tables}: the default (OPAL tables); {@code analytic}: the analytic composite, for a load-free ratio. */
+    @Param({"tables", "analytic"})
+    public String model;
+
+    private Opacity opacity;
     private double density;
     private double temperature;
     private Composition composition;
 
     @Setup
     public void setUp() {
+        opacity = model.equals("analytic") ? StandardPhysics.analyticOpacity(1.0) : StandardPhysics.opacity(1.0);
         switch (point) {
             case "centre_sun" -> set(152.9, 1.567e7, 0.346, 0.0188);
             case "envelope_sun" -> set(0.19, 2.2e6, 0.70, 0.0188);

@@ -118,16 +118,13 @@ final class BicubicLogTable {
         return answeredColumns[i];
     }
 
-    /**
-     * Adds weight times the corner data of cell (i, j) to acc[0..15], in the layout {@link CubicHermite#bicubic}
-     * reads with k00 = 0 and k10 = 8: a weighted sum of tables is interpolated as one table.
-     */
-    void accumulate(int i, int j, double weight, double[] acc) {
-        int k00 = PER_NODE * (i * logR.length + j);
-        int k10 = k00 + PER_NODE * logR.length;
-        for (int q = 0; q < 2 * PER_NODE; q++) {
-            acc[q] += weight * data[k00 + q];
-            acc[2 * PER_NODE + q] += weight * data[k10 + q];
-        }
+    /** Copies this table's node data (layout of {@link CubicHermite#bicubic}) into dest from offset on. */
+    void copyNodeData(double[] dest, int offset) {
+        System.arraycopy(data, 0, dest, offset, data.length);
+    }
+
+    /** Number of doubles {@link #copyNodeData} writes. */
+    int nodeDataLength() {
+        return data.length;
     }
 }

@@ -104,16 +104,32 @@ public final class OpalGn93Opacity implements Opacity {
     public OpacityValue rosselandMean(double density, double temperature, Composition composition) {
         double lt = Math.log10(temperature);
         double lr = Math.log10(density) - 3.0 * (lt - 6.0);
-        double z = table.clampMetals(composition.z());
-        double x = tableHydrogen(composition, z);
         double[] out = new double[3];
-        if (table.interpolate(lt, lr, x, z, out) != TabulatedOpacity.ANSWERED) {
-            joinAnalytic(density, temperature, composition, lt, lr, x, z, out);
+        double x = composition.x();
+        double z = composition.z();
+        int status = table.interpolate(lt, lr, x, z, out);
+        if (status == TabulatedOpacity.OUTSIDE_COMPOSITIONS) {
+            z = table.clampMetals(z);
+            x = tableHydrogen(composition, z);
+            status = table.interpolate(lt, lr, x, z, out);
         }
-        // out: log10 kappa_rad, d/dlog T at fixed R, d/dlog R at fixed T; log R = log rho - 3 log T + 18
-        double rad = Math.exp(LN10 * out[0]);
-        double radRho = out[2];
-        double radT = out[1] - 3.0 * out[2];
+        double rad;
+        double radRho;
+        double radT;
+        if (status != TabulatedOpacity.ANSWERED && beyondEveryFade(lt, lr)) {
+            OpacityValue a = analyticRadiative.rosselandMean(density, temperature, composition);
+            rad = a.kappa();
+            radRho = a.dlnKappaDlnRho();
+            radT = a.dlnKappaDlnT();
+        } else {
+            if (status != TabulatedOpacity.ANSWERED) {
+                joinAnalytic(density, temperature, composition, lt, lr, x, z, out);
+            }
+            // out: log10 kappa_rad, d/dlog T at fixed R, d/dlog R at fixed T; log R = log rho - 3 log T + 18
+            rad = Math.exp(LN10 * out[0]);
+            radRho = out[2];
+            radT = out[1] - 3.0 * out[2];
+        }
         OpacityValue cond = conduction.rosselandMean(density, temperature, composition);
         double c = cond.kappa();
         double wc = rad / (rad + c);
@@ -168,6 +184,12 @@ public final class OpalGn93Opacity implements Opacity {
         out[0] += weight * offset;
         out[1] += fadeT[1] / widthT * fadeR[0] * offset + weight * offsetT;
         out[2] += fadeT[0] * fadeR[1] / widthR * offset + weight * offsetR;
+    }
+
+    /** Whether (log T, log R) lies beyond every fade, where the analytic terms alone answer. */
+    private boolean beyondEveryFade(double lt, double lr) {
+        return lt < minLogT - COOL_JOIN_WIDTH || lt > maxLogT + EDGE_JOIN_WIDTH || lr < minLogR - EDGE_JOIN_WIDTH
+                || lr > maxLogR + EDGE_JOIN_WIDTH;
     }
 
     /** 1 - 3u^2 + 2u^3 on [0, 1], 1 below, 0 above; returns {value, d/du}. */

@@ -52,11 +52,9 @@ public final class TabulatedOpacity implements Opacity {
     /** Result of {@link #interpolate}: a needed cell has a corner not in table. */
     static final int NOT_IN_TABLE = 3;
 
-    private static final int Z_WEIGHTS = 4 * BicubicLogTable.PER_NODE;
-    private static final int X_WEIGHTS = Z_WEIGHTS + HermiteAxis.STENCIL;
-    /** Per thread: the weighted corner data (16), then the metal-axis weights (4), then the hydrogen-axis ones. */
-    private static final ThreadLocal<double[]> SCRATCH = ThreadLocal.withInitial(
-            () -> new double[Z_WEIGHTS + 2 * HermiteAxis.STENCIL]);
+    /** Most tables one composition can weigh: four metal rows of four hydrogen nodes. */
+    private static final int MAX_STENCIL = HermiteAxis.STENCIL * HermiteAxis.STENCIL;
+    private static final ThreadLocal<Scratch> SCRATCH = ThreadLocal.withInitial(Scratch::new);
 
     private final String name;
     private final double[] logT;
@@ -64,6 +62,9 @@ public final class TabulatedOpacity implements Opacity {
     private final double[] tableX;
     private final double[] tableZ;
     private final BicubicLogTable[] tables;
+    /** Every table's node data one after the other (stride nodeStride), so the hot loop reads one array. */
+    private final double[] nodeData;
+    private final int nodeStride;
     /** Distinct Z of the tables, increasing, and zeta = log10(Z + offset) of each. */
     private final double[] metals;
     private final HermiteAxis zeta;
@@ -111,6 +112,11 @@ public final class TabulatedOpacity implements Opacity {
                 }
             }
             tables[k] = new BicubicLogTable(this.logT, this.logR, logKappa[k]);
+        }
+        nodeStride = tables[0].nodeDataLength();
+        nodeData = new double[nodeStride * tables.length];
+        for (int k = 0; k < tables.length; k++) {
+            tables[k].copyNodeData(nodeData, k * nodeStride);
         }
         TreeSet<Double> distinct = new TreeSet<>();
         for (double z : tableZ) {
@@ -207,79 +213,152 @@ public final class TabulatedOpacity implements Opacity {
         if (!(lt >= logT[0] && lt <= last(logT) && lr >= logR[0] && lr <= last(logR))) {
             return OUTSIDE_GRID;
         }
-        int i = CubicHermite.cell(logT, lt);
-        int j = CubicHermite.cell(logR, lr);
-        double[] acc = SCRATCH.get();
-        Arrays.fill(acc, 0.0);
-        int status = accumulateCell(i, j, x, z, acc);
-        // a point on a cell's lower edge also belongs to the cell below: the one that answers at the table's
-        // blank edge (a node next to blank cells is still reproduced)
-        boolean onT = i > 0 && lt == logT[i];
-        boolean onR = j > 0 && lr == logR[j];
-        for (int other = 1; status == NOT_IN_TABLE && other < 4; other++) {
-            int di = other & 1;
-            int dj = other >> 1;
-            if ((di == 0 || onT) && (dj == 0 || onR)) {
-                Arrays.fill(acc, 0.0);
-                status = accumulateCell(i - di, j - dj, x, z, acc);
-                if (status == ANSWERED) {
-                    i -= di;
-                    j -= dj;
-                }
-            }
-        }
+        Scratch scratch = SCRATCH.get();
+        int status = compositionStencil(x, z, scratch);
         if (status != ANSWERED) {
             return status;
         }
+        int i = CubicHermite.cell(logT, lt);
+        int j = CubicHermite.cell(logR, lr);
+        if (!answers(scratch, i, j)) {
+            // a point on a cell's lower edge also belongs to the cell below: the one that answers at the table's
+            // blank edge (so a node next to blank cells is still reproduced)
+            boolean onT = i > 0 && lt == logT[i];
+            boolean onR = j > 0 && lr == logR[j];
+            if (onT && answers(scratch, i - 1, j)) {
+                i--;
+            } else if (onR && answers(scratch, i, j - 1)) {
+                j--;
+            } else if (onT && onR && answers(scratch, i - 1, j - 1)) {
+                i--;
+                j--;
+            } else {
+                return NOT_IN_TABLE;
+            }
+        }
+        sumCorners(scratch, i, j);
         double hT = logT[i + 1] - logT[i];
         double hR = logR[j + 1] - logR[j];
-        CubicHermite.bicubic(acc, 0, 2 * BicubicLogTable.PER_NODE, (lt - logT[i]) / hT, (lr - logR[j]) / hR, hT,
-                hR, out, 0);
+        CubicHermite.bicubic(scratch.corners, 0, 2 * BicubicLogTable.PER_NODE, (lt - logT[i]) / hT,
+                (lr - logR[j]) / hR, hT, hR, out, 0);
         return ANSWERED;
     }
 
-    /** Sums the composition-weighted corner data of cell (i, j) of every table the composition needs. */
-    private int accumulateCell(int i, int j, double x, double z, double[] acc) {
+    /** Tables and weights of the composition (x, z) into scratch: sum_r w_r(zeta) w_rk(xi) per table. */
+    private int compositionStencil(double x, double z, Scratch scratch) {
+        // the solver asks many (rho, T) at one composition: the weights are a pure function of (x, z), so the
+        // last ones are reused (per thread; the same answer as recomputing them)
+        if (x == scratch.lastX && z == scratch.lastZ && scratch.owner == this) {
+            return scratch.lastStatus;
+        }
+        scratch.owner = this;
+        scratch.lastX = x;
+        scratch.lastZ = z;
+        scratch.lastStatus = weighCompositions(x, z, scratch);
+        return scratch.lastStatus;
+    }
+
+    private int weighCompositions(double x, double z, Scratch scratch) {
+        scratch.count = 0;
         double share = hydrogenShare(x, z);
         double zz = snap(Math.log10(Math.max(z, 0.0) + METALS_OFFSET), zeta);
         if (!zeta.contains(zz) && zeta.size() > 1) {
             return OUTSIDE_COMPOSITIONS;
         }
-        int cell = zeta.cell(zz);
-        int from = zeta.stencilStart(cell);
-        zeta.weights(cell, zz, acc, Z_WEIGHTS);
-        for (int q = 0; q < zeta.stencilSize(); q++) {
-            double w = acc[Z_WEIGHTS + q];
-            if (w != 0.0) {
-                int status = accumulateRow(from + q, i, j, share, w, acc);
-                if (status != ANSWERED) {
-                    return status;
+        int zCell = zeta.cell(zz);
+        int zFrom = zeta.stencilStart(zCell);
+        zeta.weights(zCell, zz, scratch.axis, 0);
+        for (int p = 0; p < zeta.stencilSize(); p++) {
+            double wz = scratch.axis[p];
+            if (wz == 0.0) {
+                continue;
+            }
+            HermiteAxis g = xi[zFrom + p];
+            double s = snap(share, g);
+            if (!g.contains(s) && g.size() > 1) {
+                return OUTSIDE_COMPOSITIONS;
+            }
+            int xCell = g.cell(s);
+            int xFrom = g.stencilStart(xCell);
+            g.weights(xCell, s, scratch.axis, HermiteAxis.STENCIL);
+            for (int q = 0; q < g.stencilSize(); q++) {
+                double w = wz * scratch.axis[HermiteAxis.STENCIL + q];
+                if (w != 0.0) {
+                    scratch.tables[scratch.count] = rowTables[zFrom + p][xFrom + q];
+                    scratch.weights[scratch.count++] = w;
                 }
             }
         }
         return ANSWERED;
     }
 
-    private int accumulateRow(int r, int i, int j, double share, double rowWeight, double[] acc) {
-        HermiteAxis g = xi[r];
-        double s = snap(share, g);
-        if (!g.contains(s) && g.size() > 1) {
-            return OUTSIDE_COMPOSITIONS;
-        }
-        int cell = g.cell(s);
-        int from = g.stencilStart(cell);
-        g.weights(cell, s, acc, X_WEIGHTS);
-        for (int q = 0; q < g.stencilSize(); q++) {
-            double w = acc[X_WEIGHTS + q];
-            if (w != 0.0) {
-                int k = rowTables[r][from + q];
-                if (!tables[k].answers(i, j)) {
-                    return NOT_IN_TABLE;
-                }
-                tables[k].accumulate(i, j, rowWeight * w, acc);
+    private boolean answers(Scratch scratch, int i, int j) {
+        for (int n = 0; n < scratch.count; n++) {
+            if (!tables[scratch.tables[n]].answers(i, j)) {
+                return false;
             }
         }
-        return ANSWERED;
+        return true;
+    }
+
+    /** The weighted sum of the stencil tables' corner data of cell (i, j) into scratch.corners. */
+    private void sumCorners(Scratch scratch, int i, int j) {
+        int k00 = BicubicLogTable.PER_NODE * (i * logR.length + j);
+        int k10 = k00 + BicubicLogTable.PER_NODE * logR.length;
+        double[] d = nodeData;
+        double a0 = 0.0, a1 = 0.0, a2 = 0.0, a3 = 0.0, a4 = 0.0, a5 = 0.0, a6 = 0.0, a7 = 0.0;
+        double b0 = 0.0, b1 = 0.0, b2 = 0.0, b3 = 0.0, b4 = 0.0, b5 = 0.0, b6 = 0.0, b7 = 0.0;
+        for (int n = 0; n < scratch.count; n++) {
+            double w = scratch.weights[n];
+            int p = scratch.tables[n] * nodeStride + k00;
+            int q = scratch.tables[n] * nodeStride + k10;
+            a0 += w * d[p];
+            a1 += w * d[p + 1];
+            a2 += w * d[p + 2];
+            a3 += w * d[p + 3];
+            a4 += w * d[p + 4];
+            a5 += w * d[p + 5];
+            a6 += w * d[p + 6];
+            a7 += w * d[p + 7];
+            b0 += w * d[q];
+            b1 += w * d[q + 1];
+            b2 += w * d[q + 2];
+            b3 += w * d[q + 3];
+            b4 += w * d[q + 4];
+            b5 += w * d[q + 5];
+            b6 += w * d[q + 6];
+            b7 += w * d[q + 7];
+        }
+        double[] c = scratch.corners;
+        c[0] = a0;
+        c[1] = a1;
+        c[2] = a2;
+        c[3] = a3;
+        c[4] = a4;
+        c[5] = a5;
+        c[6] = a6;
+        c[7] = a7;
+        c[8] = b0;
+        c[9] = b1;
+        c[10] = b2;
+        c[11] = b3;
+        c[12] = b4;
+        c[13] = b5;
+        c[14] = b6;
+        c[15] = b7;
+    }
+
+    /** Per-thread work space of {@link #interpolate}, so a look-up allocates nothing. */
+    private static final class Scratch {
+        final double[] corners = new double[4 * BicubicLogTable.PER_NODE];
+        final double[] axis = new double[2 * HermiteAxis.STENCIL];
+        final int[] tables = new int[MAX_STENCIL];
+        final double[] weights = new double[MAX_STENCIL];
+        int count;
+        TabulatedOpacity owner;
+        double lastX = Double.NaN;
+        double lastZ = Double.NaN;
+        int lastStatus;
     }
 
     /**

@@ -34,6 +34,11 @@ class OpalFileConversionTest {
     void writesTheShippedTablesWhenAsked() throws IOException {
         assumeTrue(!RAW.isEmpty(), "set -Dconvgrid.opal.raw=FILE (or windows) to convert");
         boolean windows = RAW.equals("windows");
+        if (RAW.equals("synthetic")) {
+            // a rehearsal only: writes the synthetic stand-in's raw text next to OUT, then stops
+            Files.writeString(OUT.resolveSibling("synthetic-GN93hz.txt"), SyntheticOpalFile.text());
+            return;
+        }
         String rawText = windows ? OpalFileConverter.windowsAsRawFile()
                 : Files.readString(Path.of(RAW), StandardCharsets.ISO_8859_1);
         List<OpalFileConverter.RawTable> raw = OpalFileConverter.parse(new StringReader(rawText));
@@ -61,6 +66,20 @@ class OpalFileConversionTest {
         Files.createDirectories(OUT.toAbsolutePath().getParent());
         Files.writeString(OUT, text, StandardCharsets.UTF_8);
         assertThat(OpalFileConverter.verify(raw, OpacityTableReader.read(OUT))).isEmpty();
+    }
+
+    @Test
+    void aStandInWithTheFullFilesLayoutConvertsAndVerifies() throws IOException {
+        // layout of the GN93hz file (Iglesias & Rogers 1996): 126 tables numbered 1..126, 70 log T rows 3.75-8.70,
+        // blank right-hand cells at high log T; values synthetic (SyntheticOpalFile)
+        List<OpalFileConverter.RawTable> raw = OpalFileConverter.parse(new StringReader(SyntheticOpalFile.text()));
+        assertThat(raw).hasSize(OpalFileConverter.FULL_FILE_TABLES);
+        assertThat(OpalFileConverter.numbering(raw)).isEmpty();
+        TabulatedOpacity back = OpalFileConverter.readBack(OpalFileConverter.write(
+                OpalFileConverter.convert(raw, "synthetic"), OpalFileConverter.provenance(raw, "test", "none")));
+        assertThat(OpalFileConverter.verify(raw, back)).isEmpty();
+        assertThat(back.logTemperatures()).hasSize(70).startsWith(3.75).endsWith(8.7);
+        assertThat(back.metallicities()).hasSize(13);
     }
 
     @Test
