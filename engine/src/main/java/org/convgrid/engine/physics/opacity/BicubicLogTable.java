@@ -84,9 +84,8 @@ final class BicubicLogTable {
                 end++;
             }
             if (end > start) {
-                double[] slopes = CubicHermite.slopes(java.util.Arrays.copyOfRange(g, start, end + 1),
-                        java.util.Arrays.copyOfRange(v, start, end + 1));
-                System.arraycopy(slopes, 0, d, start, slopes.length);
+                double[] slopes = CubicHermite.slopes(g, v, start, end + 1);
+                System.arraycopy(slopes, start, d, start, end + 1 - start);
             }
             start = end + 1;
         }

@@ -208,29 +208,95 @@ public final class OpacityTableReader {
     }
 
     private double entry(int version) {
-        int save = pos;
-        String t = next();
-        if (version >= 2 && NOT_IN_TABLE.equals(t)) {
+        skipBlank();
+        if (version >= 2 && pos < text.length() && text.charAt(pos) == '-' && endOfToken(pos + 1)) {
+            tokenStart = pos++;
             return Double.NaN;
         }
-        pos = save;
         return number();
     }
 
     private double number() {
-        String t = next();
-        if (t == null) {
+        skipBlank();
+        if (pos >= text.length()) {
+            tokenStart = pos;
             throw fail("unexpected end of input");
         }
-        try {
-            double v = Double.parseDouble(t);
+        tokenStart = pos;
+        while (!endOfToken(pos)) {
+            pos++;
+        }
+        double v = plainDecimal(tokenStart, pos);
+        if (Double.isNaN(v)) {
+            String t = text.substring(tokenStart, pos);
+            try {
+                v = Double.parseDouble(t);
+            } catch (NumberFormatException e) {
+                throw fail("expected a number, found '" + t + "'");
+            }
             if (!Double.isFinite(v)) {
                 throw fail("non-finite number '" + t + "'");
             }
-            return v;
-        } catch (NumberFormatException e) {
-            throw fail("expected a number, found '" + t + "'");
         }
+        return v;
+    }
+
+    /**
+     * A token of the form [-]digits[.digits] with at most 15 digits, read without building a string (the shipped
+     * tables are ~170 000 such tokens); m / 10^d of two exact doubles is correctly rounded, so the value is the
+     * one {@link Double#parseDouble} gives. NaN for any other form, which the caller then parses in full.
+     */
+    private double plainDecimal(int from, int to) {
+        int i = from;
+        boolean negative = i < to && text.charAt(i) == '-';
+        if (negative) {
+            i++;
+        }
+        long mantissa = 0;
+        int digits = 0;
+        int decimals = -1;
+        for (; i < to; i++) {
+            char c = text.charAt(i);
+            if (c == '.' && decimals < 0) {
+                decimals = 0;
+            } else if (c >= '0' && c <= '9' && digits < 15) {
+                mantissa = 10 * mantissa + (c - '0');
+                digits++;
+                if (decimals >= 0) {
+                    decimals++;
+                }
+            } else {
+                return Double.NaN;
+            }
+        }
+        if (digits == 0) {
+            return Double.NaN;
+        }
+        double v = decimals > 0 ? mantissa / POWERS_OF_TEN[decimals] : (double) mantissa;
+        return negative ? -v : v;
+    }
+
+    private static final double[] POWERS_OF_TEN = {1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11,
+        1e12, 1e13, 1e14, 1e15};
+
+    private void skipBlank() {
+        int n = text.length();
+        while (pos < n) {
+            char c = text.charAt(pos);
+            if (c == '#') {
+                while (pos < n && text.charAt(pos) != '\n') {
+                    pos++;
+                }
+            } else if (Character.isWhitespace(c)) {
+                pos++;
+            } else {
+                return;
+            }
+        }
+    }
+
+    private boolean endOfToken(int at) {
+        return at >= text.length() || Character.isWhitespace(text.charAt(at)) || text.charAt(at) == '#';
     }
 
     private ConvgridException fail(String what) {

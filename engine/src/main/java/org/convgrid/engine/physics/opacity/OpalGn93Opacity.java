@@ -27,12 +27,19 @@ import org.convgrid.engine.state.Composition;
  *       dex. Inside the blank corner the edge is taken per table row in log T, so the join is continuous in log R
  *       but can step across log T rows there (white-dwarf-like densities that main-sequence models do not
  *       reach).</li>
+ *   <li>The few blank cells on the low-R side of the coolest rows (X = 0 tables, log T &lt; 4) have no nearest
+ *       edge in this scheme: the analytic terms alone answer there, with a jump at the blank's edge (only
+ *       hydrogen-free gas below 10^4 K, which no main-sequence model holds).</li>
  * </ul>
+ * Measured with the GN93hz tables, the offset the cool join removes at log T = 3.75 (largest over log R, per
+ * composition) is 0.8-5.8 dex: 1.44 dex (rms 0.58) at X = 0.70, Z = 0.02, 3.7 dex (rms 2.5) at X = 0.70,
+ * Z = 1e-4 ({@code OpalGn93OpacityTest} with {@code -Dconvgrid.measure=true} prints it per composition); below
+ * log T = 3.70 the analytic terms are that far from a continuation of the tables.
  * The join is continuous in value; its slope changes at the table edge. A composition outside the tables (Z above
  * their largest Z, or X/(1-Z) beyond a row's range) is moved to the nearest tabulated one for the table part.
  * Conduction (Yakovlev &amp; Urpin 1980, {@link ElectronConduction}) is added in parallel inside the tables too,
- * since the OPAL values are radiative only; it changes log kappa by less than 0.001 dex wherever log R &lt; 0 and
- * log T &gt; 6, and matters in the dense cores of the lowest masses and above log R = 1.
+ * since the OPAL values are radiative only; it matters in dense, degenerate matter (the cores of the lowest masses,
+ * above log R = 1) and is negligible in the rest of a main-sequence star.
  *
  * <p>The shipped table is read once, at first use of {@link #shipped()}, and shared by every thread. Immutable and
  * thread-safe.
