@@ -40,6 +40,9 @@ public final class OpacityTableReader {
     /** Entry of a version-2 table for "not in table". */
     public static final String NOT_IN_TABLE = "-";
 
+    private static final double[] POWERS_OF_TEN = {1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11,
+        1e12, 1e13, 1e14, 1e15};
+
     private final String source;
     private final String text;
     private int pos;
@@ -163,25 +166,12 @@ public final class OpacityTableReader {
 
     /** Moves to the next token and returns it, or null at the end of the text. */
     private String next() {
-        int n = text.length();
-        while (pos < n) {
-            char c = text.charAt(pos);
-            if (c == '#') {
-                while (pos < n && text.charAt(pos) != '\n') {
-                    pos++;
-                }
-            } else if (Character.isWhitespace(c)) {
-                pos++;
-            } else {
-                break;
-            }
-        }
-        if (pos >= n) {
-            tokenStart = n;
+        skipBlank();
+        tokenStart = pos;
+        if (pos >= text.length()) {
             return null;
         }
-        tokenStart = pos;
-        while (pos < n && !Character.isWhitespace(text.charAt(pos)) && text.charAt(pos) != '#') {
+        while (!endOfToken(pos)) {
             pos++;
         }
         return text.substring(tokenStart, pos);
@@ -275,9 +265,6 @@ public final class OpacityTableReader {
         double v = decimals > 0 ? mantissa / POWERS_OF_TEN[decimals] : (double) mantissa;
         return negative ? -v : v;
     }
-
-    private static final double[] POWERS_OF_TEN = {1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11,
-        1e12, 1e13, 1e14, 1e15};
 
     private void skipBlank() {
         int n = text.length();
