@@ -14,7 +14,7 @@ import org.convgrid.engine.physics.nuclear.HydrogenBurningNetwork;
 import org.convgrid.engine.physics.nuclear.NuclearNetwork;
 import org.convgrid.engine.physics.opacity.AnalyticCompositeOpacity;
 import org.convgrid.engine.physics.opacity.Opacity;
-import org.convgrid.engine.physics.opacity.ReferenceCorrectedOpacity;
+import org.convgrid.engine.physics.opacity.OpalGn93Opacity;
 import org.convgrid.engine.physics.opacity.ScaledOpacity;
 import org.convgrid.engine.request.OpacityChoice;
 import org.convgrid.engine.request.PhysicsOptions;
@@ -22,8 +22,8 @@ import org.convgrid.engine.state.Composition;
 
 /**
  * The default physics of zero-age and main-sequence models: {@link StellarPlasmaEos},
- * {@link AnalyticCompositeOpacity} corrected to the OPAL GN93 tables ({@link ReferenceCorrectedOpacity}) or a user
- * table (times the options' opacity factor),
+ * the OPAL GN93 tables with analytic edges and conduction ({@link OpalGn93Opacity}, read at first use) or a
+ * user table (times the options' opacity factor),
  * {@link HydrogenBurningNetwork}, {@link MixingLengthTheory} with the options' alpha, the options' stability
  * criterion, and a grey atmosphere tabulated once for the surface composition, with the direct integration where
  * the table has no answer. Every component is immutable and thread-safe, so the stateless ones are shared.
@@ -31,7 +31,7 @@ import org.convgrid.engine.state.Composition;
 public final class StandardPhysics {
 
     private static final EquationOfState EOS = new StellarPlasmaEos();
-    private static final Opacity OPACITY = OpacityChoice.BUILT_IN.opacity();
+    private static final Opacity ANALYTIC = AnalyticCompositeOpacity.standard();
     private static final NuclearNetwork NUCLEAR = new HydrogenBurningNetwork();
 
     private StandardPhysics() {
@@ -42,14 +42,23 @@ public final class StandardPhysics {
         return EOS;
     }
 
-    /** The analytic composite corrected to OPAL GN93, multiplied by {@code factor} (1 = as published). */
+    /** The OPAL GN93 tables with their analytic edges, multiplied by {@code factor} (1 = as published). */
     public static Opacity opacity(double factor) {
-        return ScaledOpacity.of(OPACITY, factor);
+        return ScaledOpacity.of(OpalGn93Opacity.shipped(), factor);
     }
 
     /**
-     * The opacity the options ask for (a user table already read, or the OPAL-corrected analytic composite), times
-     * the opacity factor.
+     * The analytic composite alone ({@link AnalyticCompositeOpacity#standard()}), multiplied by {@code factor}:
+     * no table, so it answers at any composition, but only to its stated accuracy (0.1-0.6 dex off OPAL in
+     * envelopes, see its class comment).
+     */
+    public static Opacity analyticOpacity(double factor) {
+        return ScaledOpacity.of(ANALYTIC, factor);
+    }
+
+    /**
+     * The opacity the options ask for: a user table already read, or the OPAL GN93 tables; times the
+     * opacity factor.
      */
     public static Opacity opacity(PhysicsOptions options) {
         return ScaledOpacity.of(options.opacity().opacity(), options.opacityFactor());

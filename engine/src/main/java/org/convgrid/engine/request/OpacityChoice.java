@@ -2,9 +2,8 @@ package org.convgrid.engine.request;
 
 import java.util.Objects;
 import java.util.function.Supplier;
-import org.convgrid.engine.physics.opacity.AnalyticCompositeOpacity;
 import org.convgrid.engine.physics.opacity.Opacity;
-import org.convgrid.engine.physics.opacity.ReferenceCorrectedOpacity;
+import org.convgrid.engine.physics.opacity.OpalGn93Opacity;
 
 /**
  * The opacity a grid chose, before the grid's opacity factor: the built-in one or a user table. Two choices are equal
@@ -13,9 +12,8 @@ import org.convgrid.engine.physics.opacity.ReferenceCorrectedOpacity;
  */
 public final class OpacityChoice {
 
-    /** The analytic composite corrected to the OPAL GN93 tables. */
-    public static final OpacityChoice BUILT_IN =
-            table("", ReferenceCorrectedOpacity.opalGn93(AnalyticCompositeOpacity.standard()));
+    /** The OPAL GN93 tables with their analytic edges ({@link OpalGn93Opacity#shipped()}), read on first use. */
+    public static final OpacityChoice BUILT_IN = new OpacityChoice("", null, OpalGn93Opacity::shipped);
 
     private final String source;
     private final Supplier<Opacity> reader;

@@ -1,5 +1,7 @@
 package org.convgrid.engine.physics.atmosphere;
 
+import org.convgrid.engine.physics.interpolation.CubicHermite;
+
 /**
  * Bicubic Hermite interpolation on a uniform grid from node values, first derivatives and a cross derivative
  * estimated by centred differences of the first derivatives (one-sided at edges and beside missing nodes).
@@ -8,10 +10,9 @@ package org.convgrid.engine.physics.atmosphere;
  */
 final class HermitePatch {
 
-    private final double[][] f;
-    private final double[][] fx;
-    private final double[][] fy;
-    private final double[][] fxy;
+    /** Per node (i, j), at offset 4 (i ny + j): value, d/dx, d/dy, d2/dxdy, the layout of CubicHermite.bicubic. */
+    private final double[] data;
+    private final int ny;
     private final double hx;
     private final double hy;
 
@@ -23,19 +24,20 @@ final class HermitePatch {
      * @param hy node spacing in y
      */
     HermitePatch(double[][] f, double[][] fx, double[][] fy, double hx, double hy) {
-        this.f = f;
-        this.fx = fx;
-        this.fy = fy;
         this.hx = hx;
         this.hy = hy;
         int nx = f.length;
-        int ny = f[0].length;
-        fxy = new double[nx][ny];
+        this.ny = f[0].length;
+        data = new double[4 * nx * ny];
         for (int i = 0; i < nx; i++) {
             for (int j = 0; j < ny; j++) {
                 double a = difference(fx, i, j, false) / hy;
                 double b = difference(fy, i, j, true) / hx;
-                fxy[i][j] = Double.isNaN(a) ? b : Double.isNaN(b) ? a : 0.5 * (a + b);
+                int k = 4 * (i * ny + j);
+                data[k] = f[i][j];
+                data[k + 1] = fx[i][j];
+                data[k + 2] = fy[i][j];
+                data[k + 3] = Double.isNaN(a) ? b : Double.isNaN(b) ? a : 0.5 * (a + b);
             }
         }
     }
@@ -63,28 +65,9 @@ final class HermitePatch {
      * @return {f, df/dx, df/dy}
      */
     double[] evaluate(int i, int j, double u, double v) {
-        double[] au = {1 - u * u * (3 - 2 * u), u * u * (3 - 2 * u)};
-        double[] bu = {u * (1 - u) * (1 - u), u * u * (u - 1)};
-        double[] dau = {6 * u * (u - 1), 6 * u * (1 - u)};
-        double[] dbu = {(1 - u) * (1 - 3 * u), u * (3 * u - 2)};
-        double[] av = {1 - v * v * (3 - 2 * v), v * v * (3 - 2 * v)};
-        double[] bv = {v * (1 - v) * (1 - v), v * v * (v - 1)};
-        double[] dav = {6 * v * (v - 1), 6 * v * (1 - v)};
-        double[] dbv = {(1 - v) * (1 - 3 * v), v * (3 * v - 2)};
-        double value = 0;
-        double dx = 0;
-        double dy = 0;
-        for (int a = 0; a < 2; a++) {
-            for (int b = 0; b < 2; b++) {
-                double c0 = f[i + a][j + b];
-                double cx = hx * fx[i + a][j + b];
-                double cy = hy * fy[i + a][j + b];
-                double cxy = hx * hy * fxy[i + a][j + b];
-                value += c0 * au[a] * av[b] + cx * bu[a] * av[b] + cy * au[a] * bv[b] + cxy * bu[a] * bv[b];
-                dx += c0 * dau[a] * av[b] + cx * dbu[a] * av[b] + cy * dau[a] * bv[b] + cxy * dbu[a] * bv[b];
-                dy += c0 * au[a] * dav[b] + cx * bu[a] * dav[b] + cy * au[a] * dbv[b] + cxy * bu[a] * dbv[b];
-            }
-        }
-        return new double[] {value, dx / hx, dy / hy};
+        double[] out = new double[3];
+        int k00 = 4 * (i * ny + j);
+        CubicHermite.bicubic(data, k00, k00 + 4 * ny, u, v, hx, hy, out, 0);
+        return out;
     }
 }

@@ -1,5 +1,7 @@
 package org.convgrid.engine.physics.eos;
 
+import org.convgrid.engine.physics.interpolation.CubicHermite;
+
 /**
  * Non-relativistic Fermi-Dirac integrals F_k(eta) = int_0^inf x^k dx/(exp(x - eta) + 1), unnormalised
  * (standard statistical mechanics), for k = -1/2, 1/2, 3/2, with relative accuracy ~1e-11.
@@ -84,14 +86,9 @@ public final class FermiDirac {
         double s = (eta - TABLE_MIN) / TABLE_STEP;
         int i = Math.min((int) s, NODES - 2);
         double t = s - i;
-        double t2 = t * t;
-        double t3 = t2 * t;
-        double h00 = 2.0 * t3 - 3.0 * t2 + 1.0;
-        double h10 = (t3 - 2.0 * t2 + t) * TABLE_STEP;
-        double h01 = -2.0 * t3 + 3.0 * t2;
-        double h11 = (t3 - t2) * TABLE_STEP;
         for (int k = 0; k < 3; k++) {
-            out[k] = h00 * VALUES[k][i] + h10 * SLOPES[k][i] + h01 * VALUES[k][i + 1] + h11 * SLOPES[k][i + 1];
+            out[k] = CubicHermite.value(t, VALUES[k][i], VALUES[k][i + 1], TABLE_STEP * SLOPES[k][i],
+                    TABLE_STEP * SLOPES[k][i + 1]);
         }
     }
 
@@ -118,23 +115,16 @@ public final class FermiDirac {
         double s = (eta - TABLE_MIN) / TABLE_STEP;
         int i = Math.min((int) s, NODES - 2);
         double t = s - i;
-        double t2 = t * t;
-        double t3 = t2 * t;
-        double h00 = 2.0 * t3 - 3.0 * t2 + 1.0;
-        double h10 = (t3 - 2.0 * t2 + t) * TABLE_STEP;
-        double h01 = -2.0 * t3 + 3.0 * t2;
-        double h11 = (t3 - t2) * TABLE_STEP;
-        double d00 = (6.0 * t2 - 6.0 * t) / TABLE_STEP;
-        double d10 = 3.0 * t2 - 4.0 * t + 1.0;
-        double d11 = 3.0 * t2 - 2.0 * t;
         for (int k = 0; k < 3; k++) {
             double[] v = VALUES[k];
             double[] g = SLOPES[k];
-            out[k] = h00 * v[i] + h10 * g[i] + h01 * v[i + 1] + h11 * g[i + 1];
-            out[3 + k] = d00 * (v[i] - v[i + 1]) + d10 * g[i] + d11 * g[i + 1];
+            double m0 = TABLE_STEP * g[i];
+            double m1 = TABLE_STEP * g[i + 1];
+            out[k] = CubicHermite.value(t, v[i], v[i + 1], m0, m1);
+            out[3 + k] = CubicHermite.slope(t, v[i], v[i + 1], m0, m1) / TABLE_STEP;
         }
-        out[6] = (12.0 * t - 6.0) * (VALUES[0][i] - VALUES[0][i + 1]) / (TABLE_STEP * TABLE_STEP)
-                + ((6.0 * t - 4.0) * SLOPES[0][i] + (6.0 * t - 2.0) * SLOPES[0][i + 1]) / TABLE_STEP;
+        out[6] = CubicHermite.curvature(t, VALUES[0][i], VALUES[0][i + 1], TABLE_STEP * SLOPES[0][i],
+                TABLE_STEP * SLOPES[0][i + 1]) / (TABLE_STEP * TABLE_STEP);
     }
 
     /**
@@ -198,10 +188,8 @@ public final class FermiDirac {
         }
         double s = (eta - TABLE_MIN) / TABLE_STEP;
         int i = Math.min((int) s, NODES - 2);
-        double t = s - i;
-        double t2 = t * t;
-        return ((6.0 * t2 - 6.0 * t) * (VALUES[0][i] - VALUES[0][i + 1])) / TABLE_STEP
-                + (3.0 * t2 - 4.0 * t + 1.0) * SLOPES[0][i] + (3.0 * t2 - 2.0 * t) * SLOPES[0][i + 1];
+        return CubicHermite.slope(s - i, VALUES[0][i], VALUES[0][i + 1], TABLE_STEP * SLOPES[0][i],
+                TABLE_STEP * SLOPES[0][i + 1]) / TABLE_STEP;
     }
 
     /** Non-degenerate series, exact for eta &lt; 0 (expansion of the integrand in powers of e^(eta - x)). */
@@ -271,11 +259,8 @@ public final class FermiDirac {
         }
         double s = (eta - TABLE_MIN) / TABLE_STEP;
         int i = Math.min((int) s, NODES - 2);
-        double t = s - i;
-        double t2 = t * t;
-        double t3 = t2 * t;
-        return (2.0 * t3 - 3.0 * t2 + 1.0) * VALUES[k][i] + (t3 - 2.0 * t2 + t) * TABLE_STEP * SLOPES[k][i]
-                + (-2.0 * t3 + 3.0 * t2) * VALUES[k][i + 1] + (t3 - t2) * TABLE_STEP * SLOPES[k][i + 1];
+        return CubicHermite.value(s - i, VALUES[k][i], VALUES[k][i + 1], TABLE_STEP * SLOPES[k][i],
+                TABLE_STEP * SLOPES[k][i + 1]);
     }
 
     private static double outside(int k, double eta) {

@@ -41,6 +41,10 @@ public final class AnalyticCompositeOpacity implements Opacity {
     /** Fitted Pauli-blocking coefficient d of the absorption terms, K^2 cm^3 g^-1 (see class comment). */
     public static final double FITTED_ABSORPTION_DEGENERACY = 1.68e11;
 
+    /** No conduction: the composite is then the radiative opacity alone (conduction is not added in parallel). */
+    static final Opacity NO_CONDUCTION = (density, temperature, composition) -> new OpacityValue(
+            Double.POSITIVE_INFINITY, 0.0, 0.0);
+
     /** No envelope term: kappa_env = 0. */
     static final Opacity NO_ENVELOPE = (density, temperature, composition) -> new OpacityValue(0.0, 0.0, 0.0);
 
@@ -84,6 +88,13 @@ public final class AnalyticCompositeOpacity implements Opacity {
                 new EnvelopeAbsorption(), new HydrogenMinus(), new MolecularOpacity(), new ElectronConduction(), FITTED_ABSORPTION_DEGENERACY);
     }
 
+    /** {@link #standard()} without conduction: its radiative part, which the tables' edges are joined to. */
+    public static AnalyticCompositeOpacity standardRadiative() {
+        return new AnalyticCompositeOpacity(new ElectronScattering(), new KramersFreeFree(), new KramersBoundFree(),
+                new EnvelopeAbsorption(), new HydrogenMinus(), new MolecularOpacity(), NO_CONDUCTION,
+                FITTED_ABSORPTION_DEGENERACY);
+    }
+
     @Override
     public OpacityValue rosselandMean(double density, double temperature, Composition composition) {
         OpacityValue es = scattering.rosselandMean(density, temperature, composition);
@@ -92,7 +103,6 @@ public final class AnalyticCompositeOpacity implements Opacity {
         OpacityValue env = envelope.rosselandMean(density, temperature, composition);
         OpacityValue hm = hydrogenMinus.rosselandMean(density, temperature, composition);
         OpacityValue mol = molecular.rosselandMean(density, temperature, composition);
-        OpacityValue cond = conduction.rosselandMean(density, temperature, composition);
 
         // absorption (ff + bf) times the Pauli-blocking factor 1/(1 + D), D = d rho/T^2
         double deg = absorptionDegeneracy * density / (temperature * temperature);
@@ -118,7 +128,11 @@ public final class AnalyticCompositeOpacity implements Opacity {
         double rad = mol.kappa() + b;
         double radRho = (mol.kappa() * mol.dlnKappaDlnRho() + b * bRho) / rad;
         double radT = (mol.kappa() * mol.dlnKappaDlnT() + b * bT) / rad;
+        if (conduction == NO_CONDUCTION) {
+            return new OpacityValue(rad, radRho, radT);
+        }
         // conduction in parallel
+        OpacityValue cond = conduction.rosselandMean(density, temperature, composition);
         double c = cond.kappa();
         double total = rad * c / (rad + c);
         double wc = rad / (rad + c);

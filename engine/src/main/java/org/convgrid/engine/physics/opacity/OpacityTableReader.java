@@ -1,6 +1,5 @@
 package org.convgrid.engine.physics.opacity;
 
-import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.InputStreamReader;
@@ -17,40 +16,53 @@ import org.convgrid.engine.error.ErrorKind;
  * Reads the convgrid opacity-table text layout (UTF-8, whitespace-separated tokens, '#' starts a comment that
  * runs to the end of the line):
  * <pre>
- * convgrid-opacity-table 1
+ * convgrid-opacity-table 2
  * name          free text to the end of the line
  * log10_temperature N   then N numbers, strictly increasing   (log10 T, T in K)
  * log10_r           M   then M numbers, strictly increasing   (log10 R, R = rho/T6^3, rho in g/cm^3)
- * hydrogen          P   then P numbers, strictly increasing   (X values)
- * metals            Q   then Q numbers, strictly increasing   (Z values)
- * table X Z             then N x M numbers: row i = log10_temperature[i], column j = log10_r[j], log10 kappa
- *                       (one block per (X, Z) pair, P x Q blocks in any order)
+ * hydrogen          P   then P numbers, strictly increasing   (the X values the tables use)
+ * metals            Q   then Q numbers, strictly increasing   (the Z values the tables use)
+ * table X Z             then N x M entries: row i = log10_temperature[i], column j = log10_r[j], log10 kappa,
+ *                       or "-" where the composition's table has no value ("not in table")
+ *                       (one block per composition, any order, any subset of the X x Z pairs)
  * end
  * </pre>
- * Problems fail with {@link ErrorKind#BAD_DATA}, naming the line; parameters are the source name and line.
+ * Version 1 files (every X x Z pair present, no "-") are read as before. Problems fail with
+ * {@link ErrorKind#BAD_DATA}, naming the line; parameters are the source name and line. The text is scanned once,
+ * without a token list, because the shipped OPAL set has ~170 000 entries and is read at first use.
  */
 public final class OpacityTableReader {
 
     /** First keyword of every table file. */
     public static final String MAGIC = "convgrid-opacity-table";
-    /** Layout version this reader understands. */
-    public static final int VERSION = 1;
+    /** Layout version this reader writes and understands (it also reads version 1). */
+    public static final int VERSION = 2;
+    /** Entry of a version-2 table for "not in table". */
+    public static final String NOT_IN_TABLE = "-";
+
+    private static final double[] POWERS_OF_TEN = {1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11,
+        1e12, 1e13, 1e14, 1e15};
 
     private final String source;
-    private final List<String> tokens = new ArrayList<>();
-    private final List<Integer> lines = new ArrayList<>();
-    private String name;
+    private final String text;
     private int pos;
+    private int tokenStart;
+    private String name;
 
-    private OpacityTableReader(String source) {
+    private OpacityTableReader(String source, String text) {
         this.source = source;
+        this.text = text;
     }
 
     /** Reads a table; source names the input in error messages. */
     public static TabulatedOpacity read(Reader in, String source) throws IOException {
-        OpacityTableReader r = new OpacityTableReader(source);
-        r.tokenize(in);
-        return r.parse();
+        StringBuilder all = new StringBuilder(1 << 16);
+        char[] buffer = new char[1 << 16];
+        int n;
+        while ((n = in.read(buffer)) > 0) {
+            all.append(buffer, 0, n);
+        }
+        return new OpacityTableReader(source, all.toString()).parse();
     }
 
     /** Reads UTF-8 text from a stream. */
@@ -72,65 +84,62 @@ public final class OpacityTableReader {
         }
     }
 
-    private void tokenize(Reader in) throws IOException {
-        BufferedReader br = new BufferedReader(in);
-        String line;
-        int n = 0;
-        while ((line = br.readLine()) != null) {
-            n++;
-            int hash = line.indexOf('#');
-            String body = (hash >= 0 ? line.substring(0, hash) : line).strip();
-            if (body.startsWith("name ") || body.equals("name")) {
-                tokens.add("name");
-                lines.add(n);
-                name = body.substring(4).strip();
-                continue;
-            }
-            for (String t : body.split("\\s+")) {
-                if (!t.isEmpty()) {
-                    tokens.add(t);
-                    lines.add(n);
-                }
-            }
-        }
-    }
-
     private TabulatedOpacity parse() {
         expect(MAGIC);
         int version = (int) number();
-        if (version != VERSION) {
+        if (version != 1 && version != VERSION) {
             throw fail("unsupported version " + version);
         }
-        if (pos < tokens.size() && tokens.get(pos).equals("name")) {
-            pos++;
+        if (peek("name")) {
+            next();
+            int end = pos;
+            while (end < text.length() && text.charAt(end) != '\n' && text.charAt(end) != '#') {
+                end++;
+            }
+            name = text.substring(pos, end).strip();
+            pos = end;
         }
         double[] logT = grid("log10_temperature");
         double[] logR = grid("log10_r");
         double[] xs = grid("hydrogen");
         double[] zs = grid("metals");
-        double[][][] values = new double[xs.length * zs.length][][];
+        List<double[]> compositions = new ArrayList<>();
+        List<double[][]> values = new ArrayList<>();
         while (!peek("end")) {
             expect("table");
-            int ix = indexOf(xs, number(), "X");
-            int iz = indexOf(zs, number(), "Z");
-            int k = ix * zs.length + iz;
-            if (values[k] != null) {
-                throw fail("second table for X = " + xs[ix] + ", Z = " + zs[iz]);
+            double x = xs[indexOf(xs, number(), "X")];
+            double z = zs[indexOf(zs, number(), "Z")];
+            for (double[] c : compositions) {
+                if (c[0] == x && c[1] == z) {
+                    throw fail("second table for X = " + x + ", Z = " + z);
+                }
             }
-            values[k] = new double[logT.length][logR.length];
+            compositions.add(new double[] {x, z});
+            double[][] table = new double[logT.length][logR.length];
             for (int i = 0; i < logT.length; i++) {
                 for (int j = 0; j < logR.length; j++) {
-                    values[k][i][j] = number();
+                    table[i][j] = entry(version);
+                }
+            }
+            values.add(table);
+        }
+        expect("end");
+        if (version == 1) {
+            for (double x : xs) {
+                for (double z : zs) {
+                    if (compositions.stream().noneMatch(c -> c[0] == x && c[1] == z)) {
+                        throw fail("missing table for X = " + x + ", Z = " + z);
+                    }
                 }
             }
         }
-        expect("end");
-        for (int k = 0; k < values.length; k++) {
-            if (values[k] == null) {
-                throw fail("missing table for X = " + xs[k / zs.length] + ", Z = " + zs[k % zs.length]);
-            }
+        if (compositions.isEmpty()) {
+            throw fail("no table");
         }
-        return new TabulatedOpacity(name == null ? source : name, xs, zs, logT, logR, values);
+        double[] tx = compositions.stream().mapToDouble(c -> c[0]).toArray();
+        double[] tz = compositions.stream().mapToDouble(c -> c[1]).toArray();
+        return new TabulatedOpacity(name == null ? source : name, tx, tz, logT, logR,
+                values.toArray(new double[0][][]));
     }
 
     private double[] grid(String key) {
@@ -155,39 +164,135 @@ public final class OpacityTableReader {
         throw fail(what + " = " + v + " is not in the declared grid");
     }
 
+    /** Moves to the next token and returns it, or null at the end of the text. */
+    private String next() {
+        skipBlank();
+        tokenStart = pos;
+        if (pos >= text.length()) {
+            return null;
+        }
+        while (!endOfToken(pos)) {
+            pos++;
+        }
+        return text.substring(tokenStart, pos);
+    }
+
     private boolean peek(String word) {
-        if (pos >= tokens.size()) {
+        int save = pos;
+        String t = next();
+        pos = save;
+        if (t == null) {
             throw fail("unexpected end of input (missing 'end'?)");
         }
-        return tokens.get(pos).equals(word);
+        return t.equals(word);
     }
 
     private void expect(String word) {
-        if (!peek(word)) {
-            throw fail("expected '" + word + "', found '" + tokens.get(pos) + "'");
+        String t = next();
+        if (t == null) {
+            throw fail("unexpected end of input (missing 'end'?)");
         }
-        pos++;
+        if (!t.equals(word)) {
+            throw fail("expected '" + word + "', found '" + t + "'");
+        }
+    }
+
+    private double entry(int version) {
+        skipBlank();
+        if (version >= 2 && pos < text.length() && text.charAt(pos) == '-' && endOfToken(pos + 1)) {
+            tokenStart = pos++;
+            return Double.NaN;
+        }
+        return number();
     }
 
     private double number() {
-        if (pos >= tokens.size()) {
+        skipBlank();
+        if (pos >= text.length()) {
+            tokenStart = pos;
             throw fail("unexpected end of input");
         }
-        String t = tokens.get(pos);
-        try {
-            double v = Double.parseDouble(t);
+        tokenStart = pos;
+        while (!endOfToken(pos)) {
+            pos++;
+        }
+        double v = plainDecimal(tokenStart, pos);
+        if (Double.isNaN(v)) {
+            String t = text.substring(tokenStart, pos);
+            try {
+                v = Double.parseDouble(t);
+            } catch (NumberFormatException e) {
+                throw fail("expected a number, found '" + t + "'");
+            }
             if (!Double.isFinite(v)) {
                 throw fail("non-finite number '" + t + "'");
             }
-            pos++;
-            return v;
-        } catch (NumberFormatException e) {
-            throw fail("expected a number, found '" + t + "'");
+        }
+        return v;
+    }
+
+    /**
+     * A token of the form [-]digits[.digits] with at most 15 digits, read without building a string (the shipped
+     * tables are ~170 000 such tokens); m / 10^d of two exact doubles is correctly rounded, so the value is the
+     * one {@link Double#parseDouble} gives. NaN for any other form, which the caller then parses in full.
+     */
+    private double plainDecimal(int from, int to) {
+        int i = from;
+        boolean negative = i < to && text.charAt(i) == '-';
+        if (negative) {
+            i++;
+        }
+        long mantissa = 0;
+        int digits = 0;
+        int decimals = -1;
+        for (; i < to; i++) {
+            char c = text.charAt(i);
+            if (c == '.' && decimals < 0) {
+                decimals = 0;
+            } else if (c >= '0' && c <= '9' && digits < 15) {
+                mantissa = 10 * mantissa + (c - '0');
+                digits++;
+                if (decimals >= 0) {
+                    decimals++;
+                }
+            } else {
+                return Double.NaN;
+            }
+        }
+        if (digits == 0) {
+            return Double.NaN;
+        }
+        double v = decimals > 0 ? mantissa / POWERS_OF_TEN[decimals] : (double) mantissa;
+        return negative ? -v : v;
+    }
+
+    private void skipBlank() {
+        int n = text.length();
+        while (pos < n) {
+            char c = text.charAt(pos);
+            if (c == '#') {
+                while (pos < n && text.charAt(pos) != '\n') {
+                    pos++;
+                }
+            } else if (Character.isWhitespace(c)) {
+                pos++;
+            } else {
+                return;
+            }
         }
     }
 
+    private boolean endOfToken(int at) {
+        return at >= text.length() || Character.isWhitespace(text.charAt(at)) || text.charAt(at) == '#';
+    }
+
     private ConvgridException fail(String what) {
-        int line = lines.isEmpty() ? 0 : lines.get(Math.min(pos, lines.size() - 1));
+        int line = 1;
+        for (int i = 0; i < Math.min(tokenStart, text.length()); i++) {
+            if (text.charAt(i) == '\n') {
+                line++;
+            }
+        }
         return new ConvgridException(ErrorKind.BAD_DATA, source + ":" + line + ": " + what, source, line);
     }
 }

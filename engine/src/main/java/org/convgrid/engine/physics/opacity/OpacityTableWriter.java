@@ -22,8 +22,17 @@ public final class OpacityTableWriter {
     private OpacityTableWriter() {
     }
 
-    /** Writes the table to out, with the given comment lines (each prefixed by "# "). */
+    /** Writes the table to out, log10 kappa with {@link #LOG_KAPPA_DECIMALS} decimals, with comment lines. */
     public static void write(TabulatedOpacity table, Appendable out, String... comments) throws IOException {
+        write(table, LOG_KAPPA_DECIMALS, out, comments);
+    }
+
+    /**
+     * Writes the table to out with the given comment lines (each prefixed by "# "), log10 kappa with
+     * {@code decimals} decimals ("-" where not in table); tables in their stored order.
+     */
+    public static void write(TabulatedOpacity table, int decimals, Appendable out, String... comments)
+            throws IOException {
         out.append("# ").append(OpacityTableReader.MAGIC).append(" - log10 Rosseland-mean opacity, cm^2/g\n");
         for (String c : comments) {
             out.append("# ").append(c.replace('\n', ' ')).append('\n');
@@ -34,25 +43,22 @@ public final class OpacityTableWriter {
         writeGrid(out, "log10_r", table.logR());
         writeGrid(out, "hydrogen", table.hydrogenFractions());
         writeGrid(out, "metals", table.metallicities());
-        String fmt = "%." + LOG_KAPPA_DECIMALS + "f";
-        double[] xs = table.hydrogenFractions();
-        double[] zs = table.metallicities();
+        String fmt = "%." + decimals + "f";
         int nT = table.logTemperatures().length;
         int nR = table.logR().length;
-        for (int ix = 0; ix < xs.length; ix++) {
-            for (int iz = 0; iz < zs.length; iz++) {
-                out.append("table ").append(Double.toString(xs[ix])).append(' ').append(Double.toString(zs[iz]))
-                        .append('\n');
-                for (int i = 0; i < nT; i++) {
-                    StringBuilder line = new StringBuilder();
-                    for (int j = 0; j < nR; j++) {
-                        if (j > 0) {
-                            line.append(' ');
-                        }
-                        line.append(String.format(Locale.ROOT, fmt, table.logKappa(ix, iz, i, j)));
+        for (int k = 0; k < table.tableCount(); k++) {
+            out.append("table ").append(Double.toString(table.hydrogen(k))).append(' ')
+                    .append(Double.toString(table.metals(k))).append('\n');
+            for (int i = 0; i < nT; i++) {
+                StringBuilder line = new StringBuilder();
+                for (int j = 0; j < nR; j++) {
+                    if (j > 0) {
+                        line.append(' ');
                     }
-                    out.append(line).append('\n');
+                    double v = table.logKappa(k, i, j);
+                    line.append(Double.isNaN(v) ? OpacityTableReader.NOT_IN_TABLE : String.format(Locale.ROOT, fmt, v));
                 }
+                out.append(line).append('\n');
             }
         }
         out.append("end\n");

@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.Random;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
+import org.convgrid.engine.physics.interpolation.HermiteAxis;
 import org.convgrid.engine.state.Composition;
 import org.junit.jupiter.api.Test;
 
@@ -77,15 +78,37 @@ class TabulatedOpacityTest extends OpacityContractTest {
     }
 
     @Test
-    void interpolatesLinearlyBetweenCompositions() {
-        // Halfway in X the result is the mean of the two neighbouring tables' log kappa (documented behaviour);
-        // against the analytic source this is good to a few per cent, since kappa ~ (1+X) is nearly log-linear.
-        Composition mid = Composition.scaledSolar(0.525, 0.02);
-        double k = TABLE.rosselandMean(0.19, 2.2e6, mid).kappa();
-        double lo = TABLE.rosselandMean(0.19, 2.2e6, Composition.scaledSolar(0.35, 0.02)).kappa();
-        double hi = TABLE.rosselandMean(0.19, 2.2e6, Composition.scaledSolar(0.7, 0.02)).kappa();
-        assertThat(Math.log(k)).isCloseTo(0.5 * (Math.log(lo) + Math.log(hi)), within(1e-12));
-        assertThat(k / SOURCE.rosselandMean(0.19, 2.2e6, mid).kappa()).isCloseTo(1.0, within(0.03));
+    void interpolatesBetweenCompositionsByCubicHermiteInHydrogenShareAndLogMetals() {
+        // The documented scheme: cubic Hermite (Fritsch & Carlson 1980, eq. 2) with the parabolic node slopes of
+        // Steffen 1990 (eq. 6) in xi = X/(1 - Z) at each tabulated Z, then in zeta = log10(Z + 1e-4); so the
+        // result is sum_r w_r(zeta) sum_k w_k(xi) log kappa(X_k, Z_r) with weights from the grids alone.
+        double rho = 0.19;
+        double t = 2.2e6;
+        double x = 0.525;
+        double z = 0.01;
+        HermiteAxis zeta = new HermiteAxis(ZS.stream().mapToDouble(v -> Math.log10(v + TabulatedOpacity.METALS_OFFSET))
+                .toArray());
+        double zz = Math.log10(z + TabulatedOpacity.METALS_OFFSET);
+        double[] wz = new double[HermiteAxis.STENCIL];
+        zeta.weights(zeta.cell(zz), zz, wz, 0);
+        double expected = 0.0;
+        for (int r = 0; r < ZS.size(); r++) {
+            double zr = ZS.get(r);
+            HermiteAxis xi = new HermiteAxis(XS.stream().mapToDouble(v -> v / (1.0 - zr)).toArray());
+            double share = x / (1.0 - z);
+            double[] wx = new double[HermiteAxis.STENCIL];
+            xi.weights(xi.cell(share), share, wx, 0);
+            for (int k = 0; k < XS.size(); k++) {
+                expected += wz[r - zeta.stencilStart(zeta.cell(zz))] * wx[k - xi.stencilStart(xi.cell(share))]
+                        * Math.log10(TABLE.rosselandMean(rho, t, Composition.scaledSolar(XS.get(k), zr)).kappa());
+            }
+        }
+        Composition mid = Composition.scaledSolar(x, z);
+        assertThat(Math.log10(TABLE.rosselandMean(rho, t, mid).kappa())).isCloseTo(expected, within(1e-12));
+        // against the analytic source, halfway between X nodes at a tabulated Z, it is good to a few per cent
+        Composition midX = Composition.scaledSolar(x, 0.02);
+        assertThat(TABLE.rosselandMean(rho, t, midX).kappa() / SOURCE.rosselandMean(rho, t, midX).kappa())
+                .isCloseTo(1.0, within(0.03));
     }
 
     @Test

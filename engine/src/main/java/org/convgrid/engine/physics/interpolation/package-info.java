@@ -1,0 +1,2 @@
+/** Piecewise-cubic Hermite interpolation shared by the tabulated microphysics (one implementation, no allocation). */
+package org.convgrid.engine.physics.interpolation;

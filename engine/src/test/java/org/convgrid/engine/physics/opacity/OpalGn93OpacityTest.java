@@ -1,0 +1,136 @@
+package org.convgrid.engine.physics.opacity;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.convgrid.engine.state.Composition;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The default opacity: the shipped OPAL GN93 tables (Iglesias &amp; Rogers 1996, ApJ 464, 943) with analytic edges
+ * and conduction. Contract (finite-difference derivatives) away from the joins, where the slope changes by design:
+ * points within 1e-3 dex of a table edge or of the end of a fade are left out.
+ */
+class OpalGn93OpacityTest extends OpacityContractTest {
+
+    static final OpalGn93Opacity OPACITY = OpalGn93Opacity.shipped();
+    static final Opacity ANALYTIC = AnalyticCompositeOpacity.standardRadiative();
+    static final Opacity CONDUCTION = new ElectronConduction();
+
+    @Override
+    Opacity opacity() {
+        return OPACITY;
+    }
+
+    @Override
+    double derivativeTolerance() {
+        // C1 Hermite interpolant: the centred difference straddles curvature jumps at nodes (as for every table)
+        return 2.0e-3;
+    }
+
+    @Override
+    List<double[]> points() {
+        List<double[]> p = new ArrayList<>();
+        for (double[] q : super.points()) {
+            double logT = Math.log10(q[1]);
+            double logR = Math.log10(q[0]) - 3.0 * (logT - 6.0);
+            Composition c = Composition.scaledSolar(q[2], q[3]);
+            boolean nearJoin = Math.abs(logT - 3.70) < 1e-3 || Math.abs(logR - 1.5) < 1e-3;
+            for (double d = -1e-3; d <= 1e-3; d += 2e-3) {
+                nearJoin |= OPACITY.tableAnswers(logT + d, logR, c) != OPACITY.tableAnswers(logT, logR, c)
+                        || OPACITY.tableAnswers(logT, logR + d, c) != OPACITY.tableAnswers(logT, logR, c);
+            }
+            if (!nearJoin) {
+                p.add(q);
+            }
+        }
+        return p;
+    }
+
+    @Test
+    void insideTheTablesTheRadiativePartIsTheTable() {
+        // Iglesias & Rogers 1996, GN93hz table 73 (X = 0.70, Z = 0.02) at log T 5.30, log R -3.0: 1.540 (issue 14);
+        // conduction in parallel moves it by far less than the table's last digit there
+        Composition c = Composition.scaledSolar(0.70, 0.02);
+        double t = Math.pow(10.0, 5.3);
+        double rho = Math.pow(10.0, -3.0 + 3.0 * (5.3 - 6.0));
+        assertThat(Math.log10(OPACITY.rosselandMean(rho, t, c).kappa())).isCloseTo(1.540, within(5e-4));
+    }
+
+    @Test
+    void theCoolJoinIsContinuousAndTheAnalyticTermsAloneAnswerBelowIt() {
+        // common practice: tables and analytic low-temperature terms joined continuously; the join is ours
+        for (double x : new double[] {0.35, 0.70}) {
+            Composition c = Composition.scaledSolar(x, 0.02);
+            for (double logR = -7.9; logR < 1.0; logR += 0.7) {
+                double above = logKappa(3.75 + 1e-9, logR, c);
+                double below = logKappa(3.75 - 1e-9, logR, c);
+                assertThat(below).as("X %s log R %s", x, logR).isCloseTo(above, within(1e-6));
+                double logT = 3.70 - 1e-6;
+                double rho = Math.pow(10.0, logR + 3.0 * (logT - 6.0));
+                double t = Math.pow(10.0, logT);
+                double a = ANALYTIC.rosselandMean(rho, t, c).kappa();
+                double k = CONDUCTION.rosselandMean(rho, t, c).kappa();
+                assertThat(logKappa(logT, logR, c)).isCloseTo(Math.log10(a * k / (a + k)), within(1e-12));
+            }
+        }
+    }
+
+    @Test
+    void theDenseEdgeJoinIsContinuous() {
+        // above log R = 1 and beside the blank hot, dense corner of the published tables (Iglesias & Rogers 1996)
+        Composition c = Composition.scaledSolar(0.70, 0.02);
+        for (double logT = 3.8; logT < 8.0; logT += 0.33) {
+            double edge = OPACITY.table().answeredLogRLimit(logT, c.x(), c.z());
+            double above = logKappa(logT, edge + 1e-9, c);
+            double below = logKappa(logT, edge - 1e-9, c);
+            assertThat(above).as("log T %s, edge log R %s", logT, edge).isCloseTo(below, within(1e-6));
+        }
+    }
+
+    @Test
+    void compositionsBeyondTheTablesUseTheNearestTable() {
+        // documented behaviour: the table part is taken at the nearest tabulated composition
+        double t = 2.2e6;
+        double rho = 0.19;
+        double z = OPACITY.table().metallicities()[OPACITY.table().metallicities().length - 1];
+        double inside = OPACITY.rosselandMean(rho, t, Composition.scaledSolar(0.5, z)).kappa();
+        double beyond = OPACITY.rosselandMean(rho, t, Composition.scaledSolar(0.5 * (1.0 - z - 0.05) / (1.0 - z),
+                z + 0.05)).kappa();
+        assertThat(beyond).isPositive().isFinite();
+        assertThat(Math.log10(beyond / inside)).isCloseTo(0.0, within(0.05));
+    }
+
+    @Test
+    void measuresTheJumpTheCoolJoinRemoves() {
+        org.junit.jupiter.api.Assumptions.assumeTrue(Boolean.getBoolean("convgrid.measure"),
+                "-Dconvgrid.measure=true prints the table-minus-analytic offset at log T = 3.75 per composition");
+        TabulatedOpacity table = OPACITY.table();
+        double[] out = new double[3];
+        for (int k = 0; k < table.tableCount(); k++) {
+            Composition c = Composition.scaledSolar(table.hydrogen(k), table.metals(k));
+            double worst = 0.0;
+            double sum = 0.0;
+            int n = 0;
+            for (double logR : table.logR()) {
+                if (table.interpolate(3.75, logR, c.x(), c.z(), out) != TabulatedOpacity.ANSWERED) {
+                    continue;
+                }
+                double rho = Math.pow(10.0, logR + 3.0 * (3.75 - 6.0));
+                double jump = out[0] - Math.log10(ANALYTIC.rosselandMean(rho, Math.pow(10.0, 3.75), c).kappa());
+                worst = Math.max(worst, Math.abs(jump));
+                sum += jump * jump;
+                n++;
+            }
+            System.out.printf(java.util.Locale.ROOT, "join at log T 3.75, X = %.4f Z = %.4g: largest %.3f dex,"
+                    + " rms %.3f dex over %d log R nodes%n", c.x(), c.z(), worst, Math.sqrt(sum / Math.max(n, 1)), n);
+        }
+    }
+
+    private static double logKappa(double logT, double logR, Composition c) {
+        double rho = Math.pow(10.0, logR + 3.0 * (logT - 6.0));
+        return Math.log10(OPACITY.rosselandMean(rho, Math.pow(10.0, logT), c).kappa());
+    }
+}
