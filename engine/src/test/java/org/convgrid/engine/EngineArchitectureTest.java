@@ -28,6 +28,7 @@ class EngineArchitectureTest {
             new String[] {"units", "org.convgrid.engine.units.."},
             new String[] {"error", "org.convgrid.engine.error.."},
             new String[] {"state", "org.convgrid.engine.state.."},
+            new String[] {"interpolation", "org.convgrid.engine.physics.interpolation.."},
             new String[] {"microphysics", "org.convgrid.engine.physics.eos..", "org.convgrid.engine.physics.opacity..",
                     "org.convgrid.engine.physics.nuclear..", "org.convgrid.engine.physics.atmosphere.."},
             new String[] {"convection", "org.convgrid.engine.convection.."},

@@ -138,12 +138,31 @@ public final class ZamsTrack {
                 spent += e.report().iterations();
                 step *= 0.5;
                 if (step < MIN_STEP) {
-                    return ZamsResult.failed(e.report(), spent);
+                    return lastResort(mass, e.report(), spent);
                 }
             }
         }
         return ZamsResult.failed(new SolveReport(org.convgrid.engine.structure.StopReason.ITERATION_BUDGET,
                 spent, Double.NaN, -1, -1, "homology walk used its " + ATTEMPT_BUDGET + " relaxations"), spent);
+    }
+
+    /**
+     * A walk that cannot get closer still has the cold start at the requested mass, where one is usually reliable:
+     * with tabulated opacities the seeded surface of a walk towards 100 Msun can land where no grey atmosphere is
+     * in hydrostatic equilibrium (the iron bump pushes kappa L / (4 pi c G M) above 1), while the cold start finds
+     * its own surface.
+     */
+    private ZamsResult lastResort(double mass, SolveReport walkFailure, int spent) {
+        if (!coldStartReliable(mass)) {
+            return ZamsResult.failed(walkFailure, spent);
+        }
+        try {
+            ZamsModel z = builder.coldStart(mass, composition);
+            add(z);
+            return ZamsResult.success(z, spent + z.iterations());
+        } catch (SolveFailedException e) {
+            return ZamsResult.failed(walkFailure, spent + e.report().iterations());
+        }
     }
 
     /**

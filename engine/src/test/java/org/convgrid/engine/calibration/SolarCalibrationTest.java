@@ -72,16 +72,19 @@ class SolarCalibrationTest {
 
     @Test
     void envelopeBaseLiesWhereHelioseismologyPutsIt() {
-        // Basu & Antia 1997, MNRAS 287, 189: r_cz/R = 0.713 +- 0.001. Measured 0.7230 with settling (0.7327
-        // without: settling deepens the envelope, as in standard solar models)
+        // Basu & Antia 1997, MNRAS 287, 189: r_cz/R = 0.713 +- 0.001. Measured 0.7233 with settling and the OPAL
+        // GN93 tables (0.7230 with the earlier opacity; 0.7327 without settling): settling deepens the envelope,
+        // as in standard solar models, but ours lacks thermal diffusion and settles about half as much helium
+        // (theEnvelopeHeliumIsTheHelioseismicOne), which leaves the base ~0.01 R too shallow
         assertThat(sun.envelopeBaseRadiusFraction()).isBetween(0.70, 0.73);
     }
 
     @Test
     void centreMatchesTheStandardSolarModel() {
-        // Bahcall, Serenelli & Basu 2005, ApJ 621, L85, BS05(OP): T_c = 1.567e7 K, rho_c = 152.9 g cm^-3
-        assertThat(sun.centralTemperature()).isCloseTo(1.567e7, withinPercentage(3));
-        assertThat(sun.centralDensity()).isCloseTo(152.9, withinPercentage(10));
+        // Bahcall, Serenelli & Basu 2005, ApJ 621, L85, BS05(OP): T_c = 1.567e7 K, rho_c = 152.9 g cm^-3.
+        // Measured with the OPAL GN93 tables: T_c 1.5422e7 K (-1.6 %), rho_c 147.44 (-3.6 %)
+        assertThat(sun.centralTemperature()).isCloseTo(1.567e7, withinPercentage(2));
+        assertThat(sun.centralDensity()).isCloseTo(152.9, withinPercentage(5));
     }
 
     @Test
@@ -106,15 +109,16 @@ class SolarCalibrationTest {
 
     @Test
     void freezesTheCalibratedValues() {
-        // non-regression (this code, standard physics with settling, default steps): alpha 1.6536, Y 0.2665,
-        // Z 0.01759 (initial Z/X 0.02457), r_cz 0.7230, T_c 1.5433e7 K, rho_c 147.28, L0/L 0.725, lifetime
-        // 9.669 Gyr, envelope Y 0.2503. Without settling: alpha 1.5613, Y 0.26284, r_cz 0.7327, lifetime 9.998;
-        // before the OPAL-corrected opacity and the Krishna Swamy atmosphere: alpha 1.2388, r_cz 0.7615
-        assertThat(sun.mixingLength()).isCloseTo(1.6536, within(0.005));
-        assertThat(sun.helium()).isCloseTo(0.2665, within(0.0005));
-        assertThat(sun.initialMetalsToHydrogen()).isCloseTo(0.02457, within(0.0001));
-        assertThat(sun.envelopeBaseRadiusFraction()).isCloseTo(0.7230, within(0.003));
-        assertThat(sun.exhaustionAge() / Constants.GYR).isCloseTo(9.669, within(0.05));
+        // non-regression (this code, standard physics with settling, default steps): alpha 1.7218, Y 0.2667,
+        // Z 0.01760 (initial Z/X 0.02460), r_cz 0.7233, T_c 1.5422e7 K, rho_c 147.44, L0/L 0.726, lifetime
+        // 9.626 Gyr, envelope Y 0.2505; moved by the OPAL GN93 tables at every composition (before, with the
+        // analytic opacity corrected to OPAL at Z = 0.02 only: alpha 1.6536, Y 0.2665, r_cz 0.7230, lifetime
+        // 9.669). Before the OPAL-corrected opacity and the Krishna Swamy atmosphere: alpha 1.2388, r_cz 0.7615
+        assertThat(sun.mixingLength()).isCloseTo(1.7218, within(0.005));
+        assertThat(sun.helium()).isCloseTo(0.2667, within(0.0005));
+        assertThat(sun.initialMetalsToHydrogen()).isCloseTo(0.02460, within(0.0001));
+        assertThat(sun.envelopeBaseRadiusFraction()).isCloseTo(0.7233, within(0.003));
+        assertThat(sun.exhaustionAge() / Constants.GYR).isCloseTo(9.626, within(0.05));
         assertThat(sun.evolutions()).isLessThanOrEqualTo(3 * CalibrationSettings.DEFAULT.evolutionBudget());
     }
 
