@@ -125,8 +125,9 @@ public final class RunMaps {
         entries.addAll(radius);
         for (PhysicsKey p : physics) {
             entries.add(new MapEntry("hr_" + p.fileStem() + ".png", MapEntry.HR,
-                    (run.hasTracks() ? "HR diagram of every usable model with the evolution tracks (grey) and "
-                            + "isochrones at the grid's ages (black), " : "HR diagram of every usable model, ")
+                    (run.hasTracks() ? "HR diagram of every usable model (colour: Z; shape: structure class) with the "
+                            + "evolution tracks (grey) and isochrones labelled by age, "
+                            : "HR diagram of every usable model (colour: Z; shape: structure class), ")
                             + p.describe() + ".",
                     () -> HrDiagramRenderer.render(HrDiagram.build(p, rows, run.trackedModels()))));
         }

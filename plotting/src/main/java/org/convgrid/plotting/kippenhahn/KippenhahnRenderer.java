@@ -2,7 +2,6 @@ package org.convgrid.plotting.kippenhahn;
 
 import java.awt.BasicStroke;
 import java.awt.Color;
-import java.awt.FontMetrics;
 import java.awt.Graphics2D;
 import java.awt.Shape;
 import java.awt.geom.Line2D;
@@ -34,6 +33,8 @@ public final class KippenhahnRenderer {
     /** Hatch: 45-degree lines this many pixels apart, this wide. */
     private static final int HATCH_SPACING = 11;
     private static final BasicStroke HATCH_STROKE = new BasicStroke(1.3f);
+    /** Room added at either end of the age axis, as a share of its span. */
+    private static final double EDGE_ROOM_SHARE = 1e-6;
 
     private KippenhahnRenderer() {
     }
@@ -47,7 +48,10 @@ public final class KippenhahnRenderer {
         ChartStyle.legendRight(chart);
         double span = data.ageMax() - data.ageMin();
         double xMax = span > 0 ? data.ageMax() : data.ageMin() + 1.0;
-        chart.getStyler().setXAxisMin(data.ageMin()).setXAxisMax(xMax);
+        // XChart labels no tick that sits exactly on an axis end; a hair of room (far below a pixel) lets it
+        // label the first and last ages itself, on the same baseline as the others
+        double hair = EDGE_ROOM_SHARE * (xMax - data.ageMin());
+        chart.getStyler().setXAxisMin(data.ageMin() - hair).setXAxisMax(xMax + hair);
         chart.getStyler().setXAxisDecimalPattern(span < 0.5 ? "0.00" : span < 5 ? "0.0" : "0");
         ChartStyle.unitYAxis(chart);
         chart.getStyler().setPlotGridLinesVisible(false);
@@ -75,9 +79,6 @@ public final class KippenhahnRenderer {
             s.setShowInLegend(i == 0);
         }
         chart.addOverlay((g, c) -> burning.forEach(band -> hatch(g, c, band)));
-        if (data.ageMin() == 0.0) {
-            chart.addOverlay(KippenhahnRenderer::labelZeroAge);
-        }
         ChartNotes.addRightOfPlot(chart, data.notes());
         return chart;
     }
@@ -115,16 +116,5 @@ public final class KippenhahnRenderer {
             g.draw(new Line2D.Double(start, box.getMaxY(), start + box.getHeight(), box.getMinY()));
         }
         g.setClip(oldClip);
-    }
-
-    /** XChart leaves the tick at the axis start unlabelled; an age axis that starts at the ZAMS says 0 there. */
-    private static void labelZeroAge(Graphics2D g, StyledChart c) {
-        g.setFont(ChartStyle.TICK_FONT);
-        g.setColor(ChartStyle.BLACK);
-        FontMetrics fm = g.getFontMetrics();
-        double x = c.getScreenXFromChart(0.0);
-        double y = c.getScreenYFromChart(c.getStyler().getYAxisMin()) + c.getStyler().getAxisTickMarkLength()
-                + c.getStyler().getAxisTickPadding() + fm.getAscent();
-        g.drawString("0", (float) (x - fm.stringWidth("0") / 2.0), (float) y);
     }
 }

@@ -118,6 +118,8 @@ public final class ChartStyle {
         s.setAxisTickLabelsFont(TICK_FONT);
         s.setAxisTickLabelsColor(TEXT);
         s.setAxisTickMarksColor(TEXT);
+        // the plot border is the axis line; XChart's own tick line sits a few pixels off it and doubles it
+        s.setAxisTicksLineVisible(false);
         s.setAxisTickMarkLength(8);
         s.setAxisTickPadding(8);
         s.setAxisTitlePadding(10);

@@ -1,7 +1,6 @@
 package org.convgrid.plotting.trend;
 
 import java.awt.Color;
-import java.awt.geom.Path2D;
 import java.awt.geom.Rectangle2D;
 import java.util.List;
 import org.convgrid.output.Span;
@@ -9,16 +8,17 @@ import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.StyledChart;
 
 /**
- * Draws the brackets of one series of transition masses as a shaded band: between neighbouring points the band
- * joins their brackets, so it shows where the transition lies, not only the reported end; a lone point gets a short
- * shaded box. Translucent, so lines and markers stay visible through it.
+ * Draws the brackets of one series of transition masses as shaded bands, one box per point spanning its whole
+ * bracket, so the chart shows where the transition lies and not only the reported end. The boxes are not joined
+ * across points: between grid metallicities or ages nothing was measured. Translucent, so lines and markers stay
+ * visible through them.
  */
 final class BracketBands {
 
     /** Opacity of the band's fill, 0..255. */
     private static final int FILL_ALPHA = 70;
-    /** Half width of a lone point's box, pixels. */
-    private static final double LONE_HALF_WIDTH_PX = 9.0;
+    /** Half width of a box, pixels. */
+    private static final double HALF_WIDTH_PX = 11.0;
 
     /**
      * One bracket at one x.
@@ -41,31 +41,13 @@ final class BracketBands {
         Color fill = new Color(color.getRed(), color.getGreen(), color.getBlue(), FILL_ALPHA);
         chart.addOverlay((g, c) -> {
             g.setColor(fill);
-            if (shown.size() == 1) {
-                At only = shown.get(0);
-                double x = c.getScreenXFromChart(only.x());
-                double top = c.getScreenYFromChart(only.bracket().hi());
-                double bottom = c.getScreenYFromChart(only.bracket().lo());
-                g.fill(new Rectangle2D.Double(x - LONE_HALF_WIDTH_PX, Math.min(top, bottom), 2 * LONE_HALF_WIDTH_PX,
+            for (At at : shown) {
+                double x = c.getScreenXFromChart(at.x());
+                double top = c.getScreenYFromChart(at.bracket().hi());
+                double bottom = c.getScreenYFromChart(at.bracket().lo());
+                g.fill(new Rectangle2D.Double(x - HALF_WIDTH_PX, Math.min(top, bottom), 2 * HALF_WIDTH_PX,
                         Math.max(Math.abs(bottom - top), ChartStyle.LINE_WIDTH)));
-                return;
             }
-            Path2D.Double band = new Path2D.Double();
-            for (int i = 0; i < shown.size(); i++) {
-                double x = c.getScreenXFromChart(shown.get(i).x());
-                double y = c.getScreenYFromChart(shown.get(i).bracket().hi());
-                if (i == 0) {
-                    band.moveTo(x, y);
-                } else {
-                    band.lineTo(x, y);
-                }
-            }
-            for (int i = shown.size() - 1; i >= 0; i--) {
-                band.lineTo(c.getScreenXFromChart(shown.get(i).x()),
-                        c.getScreenYFromChart(shown.get(i).bracket().lo()));
-            }
-            band.closePath();
-            g.fill(band);
         });
     }
 }
