@@ -16,6 +16,7 @@ import org.convgrid.plotting.hr.HrDiagram;
 import org.convgrid.plotting.hr.HrDiagramRenderer;
 import org.convgrid.plotting.kippenhahn.Kippenhahn;
 import org.convgrid.plotting.kippenhahn.KippenhahnRenderer;
+import org.convgrid.plotting.kippenhahn.ZoneCoordinate;
 import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.ChartFiles;
@@ -163,12 +164,20 @@ public final class RunMaps {
         for (TrackedModel t : zonesAgainstAgeSelection(run).chosen()) {
             TrackOrigin o = t.origin();
             String what = "M = " + SliceLabels.number(o.massMsun()) + " M\u2609, Z = " + SliceLabels.number(o.zInit());
-            entries.add(new MapEntry("zones-age_m" + SliceLabels.number(o.massMsun()) + "_z"
-                    + SliceLabels.number(o.zInit()) + "_" + o.physics().fileStem() + ".png", MapEntry.ZONES_AGE,
-                    groupOf(o.zInit(), o.physics(), run),
+            String stem = "_m" + SliceLabels.number(o.massMsun()) + "_z" + SliceLabels.number(o.zInit()) + "_"
+                    + o.physics().fileStem() + ".png";
+            String group = groupOf(o.zInit(), o.physics(), run);
+            entries.add(new MapEntry("zones-age" + stem, MapEntry.ZONES_AGE, group,
                     "Convective zones (shaded) and the hydrogen-burning region (outlined) against age, " + what + ", "
                             + o.physics().describe() + ".",
                     () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track()))));
+            if (Kippenhahn.build(o, t.track()).hasThinEnvelope()) {
+                entries.add(new MapEntry("zones-age-depth" + stem, MapEntry.ZONES_AGE, group,
+                        "The same in depth below the surface, -log10(1 - m/M), so the thin convective envelope "
+                                + "shows, " + what + ".",
+                        () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track()),
+                                ZoneCoordinate.SURFACE_DEPTH)));
+            }
         }
         return entries;
     }

@@ -51,6 +51,8 @@ class RunMapsTest {
         List<MapEntry> plan = RunMaps.plan(RunData.read(dir));
         assertThat(plan.stream().filter(e -> e.section().equals(MapEntry.ZONES_AGE))).extracting(MapEntry::fileName)
                 .containsExactly("zones-age_m1_z0.014_a1.8_ov0_schwarzschild.png",
+                        // the 1 Msun track's envelope is thin in m/M: a depth chart shows it
+                        "zones-age-depth_m1_z0.014_a1.8_ov0_schwarzschild.png",
                         "zones-age_m2_z0.014_a1.8_ov0_schwarzschild.png");
         List<Path> files = RunMaps.drawAll(dir).written();
         assertThat(files).hasSize(plan.size()).allSatisfy(f -> {

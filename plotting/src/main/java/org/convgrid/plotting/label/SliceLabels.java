@@ -34,7 +34,7 @@ public final class SliceLabels {
         if (bracket == null || !Double.isFinite(massMsun) || !(bracket.hi() > bracket.lo())) {
             return number(massMsun);
         }
-        int decimals = (int) Math.max(0, Math.min(6, Math.ceil(-Math.log10(bracket.hi() - bracket.lo()))));
+        int decimals = (int) Math.max(0, Math.min(6, Math.ceil(-Math.log10(bracket.hi() - bracket.lo()) - 1e-9)));
         return new BigDecimal(massMsun).setScale(decimals, java.math.RoundingMode.HALF_EVEN).toPlainString();
     }
 

@@ -64,6 +64,7 @@ public final class ZoneMapRenderer {
             case CORE -> ChartStyle.tint(ChartStyle.BLUISH_GREEN, 0.35);
             case ENVELOPE -> ChartStyle.tint(ChartStyle.BLUE, 0.35);
             case SHELL -> ChartStyle.tint(ChartStyle.REDDISH_PURPLE, 0.2);
+            case PAST_MAIN_SEQUENCE -> ChartStyle.PAST_MAIN_SEQUENCE_GREY;
             case NO_RESULT -> ChartStyle.NO_RESULT_GREY;
         };
     }
