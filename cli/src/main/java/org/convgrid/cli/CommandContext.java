@@ -45,7 +45,8 @@ public record CommandContext(ChunkSolverFactory solvers, List<RunFinisher> finis
     /** The real process: production solver, maps and report at the end, the process environment and directory. */
     public static CommandContext production() {
         return new CommandContext(ProductionSolvers.factory(),
-                List.of(new MapsAndReport(EnumSet.noneOf(ChartFiles.VectorFormat.class))), System.getenv(),
+                List.of(new MapsAndReport(EnumSet.noneOf(ChartFiles.VectorFormat.class),
+                        warning -> System.err.println("convgrid: warning: " + warning))), System.getenv(),
                 Path.of("").toAbsolutePath(), System.console() != null);
     }
 

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Set;
 import java.util.concurrent.Callable;
 import org.convgrid.output.RunLayout;
+import org.convgrid.plotting.DrawnMaps;
 import org.convgrid.plotting.RunMaps;
 import org.convgrid.plotting.report.ReportPage;
 import org.convgrid.plotting.style.ChartFiles;
@@ -40,9 +41,10 @@ final class PlotCommand implements Callable<Integer> {
         }
         Set<ChartFiles.VectorFormat> formats = vector.isEmpty()
                 ? EnumSet.noneOf(ChartFiles.VectorFormat.class) : EnumSet.copyOf(vector);
-        List<Path> maps = RunMaps.drawAll(dir, formats);
-        Path report = ReportPage.write(dir);
-        main.out().println("wrote " + maps.size() + " charts to " + layout.maps() + " and " + report);
+        DrawnMaps maps = RunMaps.drawAll(dir, formats);
+        maps.failures().forEach(f -> main.err().println("convgrid: warning: " + f.describe()));
+        Path report = ReportPage.write(dir, maps.failures());
+        main.out().println("wrote " + maps.written().size() + " charts to " + layout.maps() + " and " + report);
         return ExitCodes.OK;
     }
 }

@@ -9,10 +9,17 @@ import org.convgrid.plotting.style.StyledChart;
  * @param fileName PNG file name (ASCII, no directory)
  * @param section report section: {@link #ZONES_MASS}, {@link #ZONES_RADIUS}, {@link #HR}, {@link #TRENDS},
  *     {@link #TRENDS_AGE} or {@link #ZONES_AGE}
+ * @param group where it sits within its section, so a reader finds one metallicity or one mass quickly (e.g.
+ *     {@code Z = 0.014}); empty when the section has no groups
  * @param caption one sentence for people
  * @param chart draws the chart (called once per file written)
  */
-public record MapEntry(String fileName, String section, String caption, Supplier<StyledChart> chart) {
+public record MapEntry(String fileName, String section, String group, String caption, Supplier<StyledChart> chart) {
+
+    /** An entry without a group. */
+    public MapEntry(String fileName, String section, String caption, Supplier<StyledChart> chart) {
+        this(fileName, section, "", caption, chart);
+    }
 
     public static final String ZONES_MASS = "Convective zones in mass";
     public static final String ZONES_RADIUS = "Convective zones in radius";

@@ -1,7 +1,6 @@
 package org.convgrid.plotting;
 
 import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -17,10 +16,12 @@ import org.convgrid.plotting.hr.HrDiagram;
 import org.convgrid.plotting.hr.HrDiagramRenderer;
 import org.convgrid.plotting.kippenhahn.Kippenhahn;
 import org.convgrid.plotting.kippenhahn.KippenhahnRenderer;
+import org.convgrid.plotting.kippenhahn.ZoneCoordinate;
 import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.ChartFiles;
 import org.convgrid.plotting.style.StyledChart;
+import org.convgrid.plotting.tracks.AgeChartSelection;
 import org.convgrid.plotting.tracks.TrackOrigin;
 import org.convgrid.plotting.tracks.TrackedModel;
 import org.convgrid.plotting.trend.TransitionAgeTrend;
@@ -35,8 +36,8 @@ import org.convgrid.plotting.zones.ZoneMapRenderer;
  * ({@code zones-mass_<slice>.png}) and in r/R ({@code zones-radius_<slice>.png}); per physics combination an HR
  * diagram ({@code hr_<physics>.png}) and, when the run has transitions, the transition masses against Z
  * ({@code transitions-vs-z_<physics>.png}); when the run has several ages, the transition masses against age
- * ({@code transitions-vs-age_<physics>.png}); per evolution track in tracks/ that the catalogue names, its
- * convective zones against age ({@code zones-age_m<mass>_z<Z>_<physics>.png}). With tracks, the HR diagrams also
+ * ({@code transitions-vs-age_<physics>.png}); for a bounded selection of the evolution tracks in tracks/
+ * ({@link AgeChartSelection}), their convective zones against age ({@code zones-age_m<mass>_z<Z>_<physics>.png}). With tracks, the HR diagrams also
  * show the tracks and the isochrones at the grid's ages.
  */
 public final class RunMaps {
@@ -44,29 +45,41 @@ public final class RunMaps {
     private RunMaps() {
     }
 
-    /** Draws every PNG of the run; returns the files written, in report order. */
-    public static List<Path> drawAll(Path runDir) throws IOException {
+    /** Draws every PNG of the run; returns the files written and the charts that failed, in report order. */
+    public static DrawnMaps drawAll(Path runDir) throws IOException {
         return drawAll(runDir, Set.of());
     }
 
     /**
      * Draws every PNG of the run and, for each chart, one file per requested vector format. Charts are independent,
-     * so they are drawn in parallel (common fork-join pool); each file is written atomically and the list comes
-     * back in report order whatever the thread count.
+     * so they are drawn in parallel (common fork-join pool); each file is written atomically and the lists come
+     * back in report order whatever the thread count. A chart that throws is named in the result's failures (its
+     * files are not written) and the others are still drawn: one bad chart must not hide a run's outputs.
      */
-    public static List<Path> drawAll(Path runDir, Set<ChartFiles.VectorFormat> vectorFormats) throws IOException {
-        Path maps = new RunLayout(runDir).maps();
-        try {
-            return plan(RunData.read(runDir)).parallelStream().map(entry -> draw(entry, maps, vectorFormats))
-                    .flatMap(List::stream).toList();
-        } catch (UncheckedIOException e) {
-            throw e.getCause();
-        }
+    public static DrawnMaps drawAll(Path runDir, Set<ChartFiles.VectorFormat> vectorFormats) throws IOException {
+        return draw(plan(RunData.read(runDir)), new RunLayout(runDir).maps(), vectorFormats);
     }
 
-    private static List<Path> draw(MapEntry entry, Path maps, Set<ChartFiles.VectorFormat> vectorFormats) {
+    /** Draws the given charts into {@code maps}; a chart that throws is named in the failures. */
+    static DrawnMaps draw(List<MapEntry> entries, Path maps, Set<ChartFiles.VectorFormat> vectorFormats) {
+        List<Drawn> drawn = entries.parallelStream().map(entry -> draw(entry, maps, vectorFormats)).toList();
+        List<Path> written = new ArrayList<>();
+        List<DrawnMaps.ChartFailure> failures = new ArrayList<>();
+        for (Drawn d : drawn) {
+            written.addAll(d.files());
+            if (d.failure() != null) {
+                failures.add(d.failure());
+            }
+        }
+        return new DrawnMaps(written, failures);
+    }
+
+    private record Drawn(List<Path> files, DrawnMaps.ChartFailure failure) {
+    }
+
+    private static Drawn draw(MapEntry entry, Path maps, Set<ChartFiles.VectorFormat> vectorFormats) {
+        List<Path> written = new ArrayList<>(1 + vectorFormats.size());
         try {
-            List<Path> written = new ArrayList<>(1 + vectorFormats.size());
             StyledChart chart = entry.chart().get();
             Path png = maps.resolve(entry.fileName());
             ChartFiles.writePng(chart, png);
@@ -76,9 +89,12 @@ public final class RunMaps {
                 ChartFiles.writeVector(chart, vector, format);
                 written.add(vector);
             }
-            return written;
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
+            return new Drawn(written, null);
+        } catch (IOException | RuntimeException e) {
+            // a chart library error or a full disk: report it by chart and carry on with the others
+            String reason = e.getMessage() == null || e.getMessage().isBlank() ? e.getClass().getSimpleName()
+                    : e.getMessage();
+            return new Drawn(written, new DrawnMaps.ChartFailure(entry.fileName(), reason));
         }
     }
 
@@ -98,10 +114,11 @@ public final class RunMaps {
         for (Slice s : slices) {
             TransitionRow t = transitions.get(s);
             String stem = SliceLabels.fileStem(s);
-            mass.add(new MapEntry("zones-mass_" + stem + ".png", MapEntry.ZONES_MASS,
+            String group = groupOf(s.zInit(), PhysicsKey.of(s), run);
+            mass.add(new MapEntry("zones-mass_" + stem + ".png", MapEntry.ZONES_MASS, group,
                     "Convective zones in m/M, " + SliceLabels.describe(s) + ".",
                     () -> ZoneMapRenderer.render(ZoneMap.inMass(s, rows, t))));
-            radius.add(new MapEntry("zones-radius_" + stem + ".png", MapEntry.ZONES_RADIUS,
+            radius.add(new MapEntry("zones-radius_" + stem + ".png", MapEntry.ZONES_RADIUS, group,
                     "Convective zones in r/R, " + SliceLabels.describe(s) + ".",
                     () -> ZoneMapRenderer.render(ZoneMap.inRadius(s, rows, t, run.radiusZones()))));
         }
@@ -109,8 +126,9 @@ public final class RunMaps {
         entries.addAll(radius);
         for (PhysicsKey p : physics) {
             entries.add(new MapEntry("hr_" + p.fileStem() + ".png", MapEntry.HR,
-                    (run.hasTracks() ? "HR diagram of every usable model with the evolution tracks (grey) and "
-                            + "isochrones at the grid's ages (black), " : "HR diagram of every usable model, ")
+                    (run.hasTracks() ? "HR diagram of every usable model (colour: Z; shape: structure class) with the "
+                            + "evolution tracks (grey) and isochrones labelled by age, "
+                            : "HR diagram of every usable model (colour: Z; shape: structure class), ")
                             + p.describe() + ".",
                     () -> HrDiagramRenderer.render(HrDiagram.build(p, rows, run.trackedModels()))));
         }
@@ -135,18 +153,38 @@ public final class RunMaps {
         return entries;
     }
 
-    /** One zones-against-age chart per track the catalogue names, by physics, then Z, then mass. */
+    /** Which tracks get a zones-against-age chart: a bounded selection (see {@link AgeChartSelection}). */
+    public static AgeChartSelection zonesAgainstAgeSelection(RunData run) {
+        return AgeChartSelection.of(run.trackedModels(), GridChoices.of(run.manifest()).ageChartMasses());
+    }
+
+    /** One zones-against-age chart per selected track, by physics, then Z, then mass; grouped by Z. */
     private static List<MapEntry> zonesAgainstAge(RunData run) {
         List<MapEntry> entries = new ArrayList<>();
-        for (TrackedModel t : run.trackedModels()) {
+        for (TrackedModel t : zonesAgainstAgeSelection(run).chosen()) {
             TrackOrigin o = t.origin();
             String what = "M = " + SliceLabels.number(o.massMsun()) + " M\u2609, Z = " + SliceLabels.number(o.zInit());
-            entries.add(new MapEntry("zones-age_m" + SliceLabels.number(o.massMsun()) + "_z"
-                    + SliceLabels.number(o.zInit()) + "_" + o.physics().fileStem() + ".png", MapEntry.ZONES_AGE,
+            String stem = "_m" + SliceLabels.number(o.massMsun()) + "_z" + SliceLabels.number(o.zInit()) + "_"
+                    + o.physics().fileStem() + ".png";
+            String group = groupOf(o.zInit(), o.physics(), run);
+            entries.add(new MapEntry("zones-age" + stem, MapEntry.ZONES_AGE, group,
                     "Convective zones (shaded) and the hydrogen-burning region (outlined) against age, " + what + ", "
                             + o.physics().describe() + ".",
                     () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track()))));
+            if (Kippenhahn.build(o, t.track()).hasThinEnvelope()) {
+                entries.add(new MapEntry("zones-age-depth" + stem, MapEntry.ZONES_AGE, group,
+                        "The same in depth below the surface, -log10(1 - m/M), so the thin convective envelope "
+                                + "shows, " + what + ".",
+                        () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track()),
+                                ZoneCoordinate.SURFACE_DEPTH)));
+            }
         }
         return entries;
+    }
+
+    /** The report group of a chart of one metallicity: {@code Z = 0.014}, with the physics when the run has several. */
+    private static String groupOf(double zInit, PhysicsKey physics, RunData run) {
+        long combos = run.catalogue().stream().map(PhysicsKey::of).distinct().count();
+        return "Z = " + SliceLabels.number(zInit) + (combos > 1 ? ", " + physics.describe() : "");
     }
 }

@@ -19,12 +19,12 @@ class DemoChartsTest {
         String target = System.getenv("CONVGRID_DEMO_DIR");
         Assumptions.assumeTrue(target != null, "set CONVGRID_DEMO_DIR=DIR to write the demo charts");
         Path dir = TestRuns.write(Path.of(target, "run"), TestRuns.demoRows());
-        assertThat(RunMaps.drawAll(dir)).isNotEmpty();
+        assertThat(RunMaps.drawAll(dir).written()).isNotEmpty();
         assertThat(ReportPage.write(dir)).isRegularFile();
         var rows = TestRuns.rows(TestRuns.masses(0.3, 2.0, 18), new double[] {0.004, 0.014}, new double[] {0, 1, 4.57});
         Path tracked = TestRuns.write(Path.of(target, "run-tracks"), rows);
         TestTracks.write(tracked, rows, 120);
-        assertThat(RunMaps.drawAll(tracked)).isNotEmpty();
+        assertThat(RunMaps.drawAll(tracked).written()).isNotEmpty();
         assertThat(ReportPage.write(tracked)).isRegularFile();
     }
 }

@@ -25,7 +25,7 @@ class RunMapsTest {
     @Test
     void drawsEveryChartAsAPngOfTheStatedSize(@TempDir Path dir) throws Exception {
         TestRuns.write(dir, TestRuns.demoRows());
-        List<Path> files = RunMaps.drawAll(dir);
+        List<Path> files = RunMaps.drawAll(dir).written();
         // 9 slices x (mass + radius) + 1 HR diagram + transitions against Z and against age.
         assertThat(files).hasSize(21).allSatisfy(f -> {
             assertThat(f.getParent()).isEqualTo(dir.resolve("maps"));
@@ -51,8 +51,10 @@ class RunMapsTest {
         List<MapEntry> plan = RunMaps.plan(RunData.read(dir));
         assertThat(plan.stream().filter(e -> e.section().equals(MapEntry.ZONES_AGE))).extracting(MapEntry::fileName)
                 .containsExactly("zones-age_m1_z0.014_a1.8_ov0_schwarzschild.png",
+                        // the 1 Msun track's envelope is thin in m/M: a depth chart shows it
+                        "zones-age-depth_m1_z0.014_a1.8_ov0_schwarzschild.png",
                         "zones-age_m2_z0.014_a1.8_ov0_schwarzschild.png");
-        List<Path> files = RunMaps.drawAll(dir);
+        List<Path> files = RunMaps.drawAll(dir).written();
         assertThat(files).hasSize(plan.size()).allSatisfy(f -> {
             BufferedImage image = ImageIO.read(f.toFile());
             assertThat(image.getWidth()).isEqualTo(ChartStyle.WIDTH);
@@ -70,7 +72,7 @@ class RunMapsTest {
     @Test
     void writesVectorFilesWhenAsked(@TempDir Path dir) throws Exception {
         TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.2, 1.6, 8), new double[] {0.014}, new double[] {0}));
-        List<Path> files = RunMaps.drawAll(dir, Set.of(ChartFiles.VectorFormat.SVG, ChartFiles.VectorFormat.PDF));
+        List<Path> files = RunMaps.drawAll(dir, Set.of(ChartFiles.VectorFormat.SVG, ChartFiles.VectorFormat.PDF)).written();
         Path svg = dir.resolve("maps/hr_a1.8_ov0_schwarzschild.svg");
         Path pdf = dir.resolve("maps/hr_a1.8_ov0_schwarzschild.pdf");
         assertThat(files).contains(svg, pdf);
@@ -85,9 +87,27 @@ class RunMapsTest {
         TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.1, 2.85, 56),
                 new double[] {0.002, 0.004, 0.008, 0.014, 0.02, 0.03}, new double[] {0, 1, 4.57}));
         long start = System.nanoTime();
-        List<Path> files = RunMaps.drawAll(dir);
+        List<Path> files = RunMaps.drawAll(dir).written();
         double seconds = (System.nanoTime() - start) / 1e9;
         assertThat(files).hasSize(2 * 18 + 3);
         assertThat(seconds).as("seconds for %d maps", files.size()).isLessThan(THOUSAND_MODEL_BUDGET_SECONDS);
+    }
+
+    @Test
+    void tenThousandModelsWithTracksGiveABoundedNumberOfCharts() {
+        // 100 masses x 10 metallicities x 10 ages = 10 000 models, one track per (mass, Z): 1000 tracks
+        double[] zs = {0.0, 0.001, 0.002, 0.004, 0.006, 0.008, 0.01, 0.014, 0.02, 0.03};
+        double[] ages = {0, 0.1, 0.2, 0.4, 0.6, 0.8, 1, 2, 3, 4};
+        List<CatalogueRow> rows = TestRuns.rows(TestRuns.masses(0.1, 2.08, 100), zs, ages);
+        List<org.convgrid.output.track.Track> tracks = rows.stream()
+                .map(r -> org.convgrid.output.track.Track.trackIdOf(r.modelId())).distinct()
+                .map(id -> new org.convgrid.output.track.Track(id, List.of())).toList();
+        RunData run = new RunData(rows, List.of(), false, null, java.util.Map.of(), tracks);
+        List<MapEntry> plan = RunMaps.plan(run);
+        assertThat(run.trackedModels()).hasSize(1000);
+        assertThat(plan.stream().filter(e -> e.section().equals(MapEntry.ZONES_AGE)))
+                .hasSizeLessThanOrEqualTo(org.convgrid.plotting.tracks.AgeChartSelection.MAX_CHARTS);
+        // per slice a mass and a radius map, one HR diagram, and the bounded zones-against-age selection
+        assertThat(plan).hasSizeLessThanOrEqualTo(2 * 100 + 1 + org.convgrid.plotting.tracks.AgeChartSelection.MAX_CHARTS);
     }
 }

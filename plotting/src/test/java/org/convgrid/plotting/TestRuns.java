@@ -71,7 +71,8 @@ public final class TestRuns {
                     Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, List.of(), 40,
                     StabilityCriterion.SCHWARZSCHILD, 1.0, Double.NaN);
         }
-        double metalFactor = Math.pow(0.014 / z, 0.12);
+        // Z = 0 rows (metal-free grids) get the factor of Z = 1e-4 instead of an infinite one
+        double metalFactor = Math.pow(0.014 / Math.max(z, 1e-4), 0.12);
         double ageFactor = 1.0 + 0.4 * age / lifetime;
         double lum = (m < 0.43 ? 0.23 * Math.pow(m, 2.3) : Math.pow(m, 4.0)) * metalFactor * ageFactor;
         double radius = Math.pow(m, m < 1 ? 0.9 : 0.8) * Math.pow(ageFactor, 0.5) * Math.pow(metalFactor, -0.2);

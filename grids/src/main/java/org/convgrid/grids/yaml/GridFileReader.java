@@ -43,7 +43,7 @@ public final class GridFileReader {
 
     private static final List<String> KEYS = List.of("title", "mass", "metallicity", "age", "physics", "output");
     private static final List<String> AGE_KEYS = List.of("gyr", "ms_fraction");
-    private static final List<String> OUTPUT_KEYS = List.of("dir", "profiles");
+    private static final List<String> OUTPUT_KEYS = List.of("dir", "profiles", "age_charts_for_masses_msun");
 
     /**
      * Reads and validates a grid file.
@@ -145,6 +145,12 @@ public final class GridFileReader {
             }
             if (out != null && out.has("profiles")) {
                 profiles = reader.bool(out.value("profiles"), "output profiles");
+            }
+            // only validated here: the chart drawer reads the chosen masses from the grid text in the manifest
+            if (out != null && out.has("age_charts_for_masses_msun")
+                    && AxisValues.distinct(out.value("age_charts_for_masses_msun"),
+                    "output age_charts_for_masses_msun", Range.aboveZero(MassAxisReader.MAX_MASS_MSUN), reader) == null) {
+                outputDir = null;
             }
         }
         if (title == null || masses == null || metallicities == null || ages == null || physics == null

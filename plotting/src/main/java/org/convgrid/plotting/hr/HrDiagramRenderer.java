@@ -12,8 +12,9 @@ import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
- * Turns {@link HrDiagramData} into a chart: log Teff on a reversed x axis (hot stars left), log L/Lsun up; evolution
- * tracks (grey) and isochrones (black) under the models when the run has tracks. XChart
+ * Turns {@link HrDiagramData} into a chart: log Teff on a reversed x axis (hot stars left), log L/Lsun up; one
+ * colour per metallicity (zero-age lines, isochrones and models), one marker shape per structure class; evolution
+ * tracks (grey) and isochrones labelled with their ages under the models when the run has tracks. XChart
  * cannot reverse an axis, so the x values are -log Teff and the tick labels drop the sign.
  */
 public final class HrDiagramRenderer {
@@ -26,6 +27,8 @@ public final class HrDiagramRenderer {
     /** Track lines: grey, thinner than the isochrones. */
     private static final java.awt.Color TRACK_GREY = new java.awt.Color(110, 110, 110);
     private static final float TRACK_WIDTH = 2.0f;
+    /** The legend's class shapes: neutral, since colour stands for Z. */
+    private static final java.awt.Color CLASS_LEGEND_GREY = new java.awt.Color(90, 90, 90);
 
     private HrDiagramRenderer() {
     }
@@ -52,19 +55,22 @@ public final class HrDiagramRenderer {
             chart.getStyler().setYAxisMax(lum.getMax() + 2 * PAD_DEX);
         }
         addTracks(chart, data);
-        int index = 0;
         // With isochrones, the youngest one is the zero-age line: drawn once, as an isochrone.
         List<HrDiagramData.ZeroAgeLine> zeroAge = data.isochrones().isEmpty() ? data.zeroAgeLines() : List.of();
         for (HrDiagramData.ZeroAgeLine line : zeroAge) {
+            int zIndex = data.metallicities().indexOf(line.zInit());
             XYSeries s = chart.addSeries((line.ageGyr() == 0 ? "zero age" : SliceLabels.age(line.ageGyr()))
                             + ", Z = " + SliceLabels.number(line.zInit()),
                     line.points().stream().mapToDouble(p -> -p.logTeff()).toArray(),
                     line.points().stream().mapToDouble(HrPoint::logL).toArray());
             s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
             s.setMarker(SeriesMarkers.NONE);
-            s.setLineColor(ChartStyle.BLACK);
-            s.setLineStyle(ChartStyle.dashed(index++, 2.0f));
+            s.setLineColor(ChartStyle.seriesColor(zIndex));
+            s.setLineStyle(ChartStyle.dashed(zIndex, 2.0f));
         }
+        addIsochrones(chart, data);
+        // Marker shape = structure class, colour = Z. The legend shows each shape once, in grey, from a series
+        // drawn first at the same points, so the coloured markers painted next cover it.
         for (StructureClass c : StructureClass.values()) {
             List<HrPoint> members = data.points().stream().filter(p -> p.structureClass() == c).toList();
             if (members.isEmpty()) {
@@ -75,9 +81,25 @@ public final class HrDiagramRenderer {
                     members.stream().mapToDouble(HrPoint::logL).toArray());
             s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
             s.setMarker(ChartStyle.classMarker(c));
-            s.setMarkerColor(ChartStyle.classColor(c));
+            s.setMarkerColor(CLASS_LEGEND_GREY);
         }
-        addIsochrones(chart, data);
+        int hidden = 0;
+        for (StructureClass c : StructureClass.values()) {
+            for (double z : data.metallicities()) {
+                List<HrPoint> members = data.points().stream()
+                        .filter(p -> p.structureClass() == c && p.zInit() == z).toList();
+                if (members.isEmpty()) {
+                    continue;
+                }
+                XYSeries s = chart.addSeries("models " + hidden++,
+                        members.stream().mapToDouble(p -> -p.logTeff()).toArray(),
+                        members.stream().mapToDouble(HrPoint::logL).toArray());
+                s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+                s.setMarker(ChartStyle.classMarker(c));
+                s.setMarkerColor(ChartStyle.seriesColor(data.metallicities().indexOf(z)));
+                s.setShowInLegend(false);
+            }
+        }
         List<HrPoint> labels = data.massLabels();
         chart.addOverlay((g, c) -> {
             g.setFont(ChartStyle.ANNOTATION_FONT);
@@ -94,37 +116,80 @@ public final class HrDiagramRenderer {
         return chart;
     }
 
-    /** Tracks in grey (they are context for the coloured models), one dash pattern per Z, one legend entry per Z. */
+    /** Tracks in thin grey (they are context for the coloured models), one legend entry for all. */
     private static void addTracks(StyledChart chart, HrDiagramData data) {
         int n = 0;
         for (HrDiagramData.TrackLine t : data.tracks()) {
-            int zIndex = data.metallicities().indexOf(t.zInit());
-            boolean first = data.tracks().stream().filter(o -> o.zInit() == t.zInit()).findFirst().get() == t;
-            XYSeries s = chart.addSeries(first ? "tracks, Z = " + SliceLabels.number(t.zInit()) : "track " + n++,
-                    t.logTeff().stream().mapToDouble(v -> -v).toArray(),
+            boolean first = n == 0;
+            XYSeries s = chart.addSeries(first ? "evolution tracks" : "track " + n, t.logTeff().stream()
+                            .mapToDouble(v -> -v).toArray(),
                     t.logL().stream().mapToDouble(Double::doubleValue).toArray());
+            n++;
             s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
             s.setMarker(SeriesMarkers.NONE);
             s.setLineColor(TRACK_GREY);
-            s.setLineStyle(ChartStyle.dashed(Math.max(zIndex, 0), TRACK_WIDTH));
+            s.setLineStyle(new java.awt.BasicStroke(TRACK_WIDTH));
             s.setShowInLegend(first);
         }
     }
 
-    /** Isochrones in black, one dash pattern per age, one legend entry per age. */
+    /**
+     * Isochrones in the colour of their Z (the legend names each Z once), one dash pattern per age (the legend names
+     * each age once, in grey); the isochrones of the middle Z are also labelled with their ages at their brightest
+     * ends, labels stacked so they never overlap.
+     */
     private static void addIsochrones(StyledChart chart, HrDiagramData data) {
-        int n = 0;
-        for (HrDiagramData.ZeroAgeLine line : data.isochrones()) {
-            boolean first = data.isochrones().stream().filter(o -> o.ageGyr() == line.ageGyr()).findFirst()
-                    .get() == line;
-            XYSeries s = chart.addSeries(first ? "isochrone, " + SliceLabels.age(line.ageGyr()) : "isochrone " + n++,
+        if (data.isochrones().isEmpty()) {
+            return;
+        }
+        double middleZ = data.metallicities().get(data.metallicities().size() / 2);
+        List<HrDiagramData.ZeroAgeLine> middle = data.isochrones().stream().filter(l -> l.zInit() == middleZ)
+                .toList();
+        // legend-only series per age, drawn first under the coloured isochrone at the same points
+        for (HrDiagramData.ZeroAgeLine line : middle) {
+            XYSeries s = chart.addSeries("isochrone, " + SliceLabels.age(line.ageGyr()),
                     line.points().stream().mapToDouble(p -> -p.logTeff()).toArray(),
                     line.points().stream().mapToDouble(HrPoint::logL).toArray());
             s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
             s.setMarker(SeriesMarkers.NONE);
-            s.setLineColor(ChartStyle.BLACK);
+            s.setLineColor(CLASS_LEGEND_GREY);
+            s.setLineStyle(ChartStyle.dashed(data.ages().indexOf(line.ageGyr()), 2.0f));
+        }
+        int n = 0;
+        for (HrDiagramData.ZeroAgeLine line : data.isochrones()) {
+            int zIndex = data.metallicities().indexOf(line.zInit());
+            boolean first = data.isochrones().stream().filter(o -> o.zInit() == line.zInit()).findFirst()
+                    .get() == line;
+            XYSeries s = chart.addSeries(first ? "Z = " + SliceLabels.number(line.zInit()) : "isochrone " + n++,
+                    line.points().stream().mapToDouble(p -> -p.logTeff()).toArray(),
+                    line.points().stream().mapToDouble(HrPoint::logL).toArray());
+            s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+            s.setMarker(SeriesMarkers.NONE);
+            s.setLineColor(ChartStyle.seriesColor(zIndex));
+            // the legend entry of a Z is drawn solid whatever the age of the isochrone that carries it
             s.setLineStyle(ChartStyle.dashed(data.ages().indexOf(line.ageGyr()), 2.0f));
             s.setShowInLegend(first);
         }
+        chart.addOverlay((g, c) -> {
+            g.setFont(ChartStyle.ANNOTATION_FONT);
+            g.setColor(ChartStyle.BLACK);
+            FontMetrics fm = g.getFontMetrics();
+            record Label(String text, double x, double y) {
+            }
+            List<Label> labels = new java.util.ArrayList<>();
+            for (HrDiagramData.ZeroAgeLine line : middle) {
+                HrPoint top = line.points().stream().max(java.util.Comparator.comparingDouble(HrPoint::logL))
+                        .orElseThrow();
+                labels.add(new Label(SliceLabels.age(line.ageGyr()), c.getScreenXFromChart(-top.logTeff()) + 10,
+                        c.getScreenYFromChart(top.logL())));
+            }
+            labels.sort(java.util.Comparator.comparingDouble(Label::y));
+            double lastBaseline = Double.NEGATIVE_INFINITY;
+            for (Label l : labels) {
+                double baseline = Math.max(l.y() + fm.getAscent() / 2.0, lastBaseline + fm.getHeight());
+                g.drawString(l.text(), (float) l.x(), (float) baseline);
+                lastBaseline = baseline;
+            }
+        });
     }
 }

@@ -16,6 +16,18 @@ import org.convgrid.plotting.tracks.TrackOrigin;
 public record KippenhahnData(TrackOrigin origin, double ageMin, double ageMax, List<AgeRect> zones,
                              List<AgeRect> burning, List<String> notes) {
 
+    /** A surface convection zone holding less than this share of the mass is thin: the depth chart shows it. */
+    public static final double THIN_ENVELOPE_MASS_FRAC = 0.02;
+
+    /**
+     * Whether a depth chart would show more: some step has a convective envelope (reaching the surface, not the
+     * centre) thinner than {@link #THIN_ENVELOPE_MASS_FRAC} in m/M that the depth coordinate can show.
+     */
+    public boolean hasThinEnvelope() {
+        return zones.stream().anyMatch(r -> r.kind() == org.convgrid.plotting.zones.ZoneKind.ENVELOPE
+                && r.hi() - r.lo() < THIN_ENVELOPE_MASS_FRAC && ZoneCoordinate.SURFACE_DEPTH.shows(r.lo(), r.hi()));
+    }
+
     public KippenhahnData {
         zones = List.copyOf(zones);
         burning = List.copyOf(burning);

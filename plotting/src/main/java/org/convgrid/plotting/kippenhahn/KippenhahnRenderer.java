@@ -2,7 +2,6 @@ package org.convgrid.plotting.kippenhahn;
 
 import java.awt.BasicStroke;
 import java.awt.Color;
-import java.awt.FontMetrics;
 import java.awt.Graphics2D;
 import java.awt.Shape;
 import java.awt.geom.Line2D;
@@ -15,7 +14,6 @@ import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.ChartNotes;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.StyledChart;
-import org.convgrid.plotting.zones.ZoneAxis;
 import org.convgrid.plotting.zones.ZoneKind;
 import org.convgrid.plotting.zones.ZoneMapRenderer;
 import org.knowm.xchart.XYSeries;
@@ -34,24 +32,48 @@ public final class KippenhahnRenderer {
     /** Hatch: 45-degree lines this many pixels apart, this wide. */
     private static final int HATCH_SPACING = 11;
     private static final BasicStroke HATCH_STROKE = new BasicStroke(1.3f);
+    /** Room added at either end of the age axis, as a share of its span. */
+    private static final double EDGE_ROOM_SHARE = 1e-6;
 
     private KippenhahnRenderer() {
     }
 
-    /** The chart of one track. */
+    /** The chart of one track, in m/M. */
     public static StyledChart render(KippenhahnData data) {
+        return render(data, ZoneCoordinate.MASS_FRACTION);
+    }
+
+    /** The chart of one track in the given vertical coordinate. */
+    public static StyledChart render(KippenhahnData data, ZoneCoordinate y) {
         StyledChart chart = ChartStyle.newChart("Convective zones against age, M = "
                         + SliceLabels.number(data.origin().massMsun()) + " M\u2609, Z = "
                         + SliceLabels.number(data.origin().zInit()), data.origin().physics().describe(),
-                "age since the zero-age main sequence / Gyr", ZoneAxis.MASS_FRACTION.title());
+                "age since the zero-age main sequence / Gyr", y.title());
         ChartStyle.legendRight(chart);
         double span = data.ageMax() - data.ageMin();
         double xMax = span > 0 ? data.ageMax() : data.ageMin() + 1.0;
-        chart.getStyler().setXAxisMin(data.ageMin()).setXAxisMax(xMax);
+        // XChart labels no tick that sits exactly on an axis end; a hair of room (far below a pixel) lets it
+        // label the first and last ages itself, on the same baseline as the others
+        double hair = EDGE_ROOM_SHARE * (xMax - data.ageMin());
+        chart.getStyler().setXAxisMin(data.ageMin() - hair).setXAxisMax(xMax + hair);
         chart.getStyler().setXAxisDecimalPattern(span < 0.5 ? "0.00" : span < 5 ? "0.0" : "0");
-        ChartStyle.unitYAxis(chart);
+        if (y == ZoneCoordinate.MASS_FRACTION) {
+            ChartStyle.unitYAxis(chart);
+        } else {
+            chart.getStyler().setYAxisMin(y.min()).setYAxisMax(y.max());
+            chart.getStyler().setYAxisDecimalPattern("0");
+        }
         chart.getStyler().setPlotGridLinesVisible(false);
         Set<ZoneKind> inLegend = EnumSet.noneOf(ZoneKind.class);
+        // a zone kind too thin to see anywhere on this axis is left out of the legend (and named in a note)
+        Set<ZoneKind> seen = EnumSet.noneOf(ZoneKind.class);
+        Set<ZoneKind> shown = EnumSet.noneOf(ZoneKind.class);
+        for (AgeRect r : data.zones()) {
+            seen.add(r.kind());
+            if (y.shows(r.lo(), r.hi())) {
+                shown.add(r.kind());
+            }
+        }
         int n = 0;
         List<List<AgeRect>> zoneBands = Bands.join(data.zones(), true);
         for (ZoneKind kind : ZoneKind.values()) {
@@ -59,9 +81,9 @@ public final class KippenhahnRenderer {
                 if (band.get(0).kind() != kind) {
                     continue;
                 }
-                boolean first = inLegend.add(kind);
+                boolean first = shown.contains(kind) && inLegend.add(kind);
                 Color fill = ZoneMapRenderer.fill(kind);
-                XYSeries s = polygon(chart, first ? kind.label() : "zone band " + n++, band, fill);
+                XYSeries s = polygon(chart, first ? kind.label() : "zone band " + n++, band, fill, y);
                 s.setLineColor(fill);
                 s.setLineWidth(1.0f);
                 s.setShowInLegend(first);
@@ -69,21 +91,26 @@ public final class KippenhahnRenderer {
         }
         List<List<AgeRect>> burning = Bands.join(data.burning(), false);
         for (int i = 0; i < burning.size(); i++) {
-            XYSeries s = polygon(chart, i == 0 ? BURNING_LABEL : "burning band " + i, burning.get(i), TRANSPARENT);
+            XYSeries s = polygon(chart, i == 0 ? BURNING_LABEL : "burning band " + i, burning.get(i), TRANSPARENT, y);
             s.setLineColor(ChartStyle.BLACK);
             s.setLineWidth(BURNING_EDGE_WIDTH);
             s.setShowInLegend(i == 0);
         }
-        chart.addOverlay((g, c) -> burning.forEach(band -> hatch(g, c, band)));
-        if (data.ageMin() == 0.0) {
-            chart.addOverlay(KippenhahnRenderer::labelZeroAge);
+        chart.addOverlay((g, c) -> burning.forEach(band -> hatch(g, c, band, y)));
+        List<String> notes = new java.util.ArrayList<>(data.notes());
+        for (ZoneKind kind : seen) {
+            if (!shown.contains(kind)) {
+                notes.add("a " + kind.label() + " too thin to show here"
+                        + (y == ZoneCoordinate.MASS_FRACTION ? " (see the depth chart)" : ""));
+            }
         }
-        ChartNotes.addRightOfPlot(chart, data.notes());
+        ChartNotes.addRightOfPlot(chart, notes);
         return chart;
     }
 
-    private static XYSeries polygon(StyledChart chart, String name, List<AgeRect> band, Color fill) {
-        double[][] outline = Bands.outline(band);
+    private static XYSeries polygon(StyledChart chart, String name, List<AgeRect> band, Color fill,
+                                    ZoneCoordinate y) {
+        double[][] outline = onAxis(Bands.outline(band), y);
         XYSeries s = chart.addSeries(name, outline[0], outline[1]);
         s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.PolygonArea);
         s.setFillColor(fill);
@@ -92,8 +119,8 @@ public final class KippenhahnRenderer {
     }
 
     /** Diagonal lines clipped to the band's outline (drawn as lines, so vector files stay crisp). */
-    private static void hatch(Graphics2D g, StyledChart c, List<AgeRect> band) {
-        double[][] outline = Bands.outline(band);
+    private static void hatch(Graphics2D g, StyledChart c, List<AgeRect> band, ZoneCoordinate axis) {
+        double[][] outline = onAxis(Bands.outline(band), axis);
         Path2D.Double path = new Path2D.Double();
         for (int i = 0; i < outline[0].length; i++) {
             double x = c.getScreenXFromChart(outline[0][i]);
@@ -117,14 +144,12 @@ public final class KippenhahnRenderer {
         g.setClip(oldClip);
     }
 
-    /** XChart leaves the tick at the axis start unlabelled; an age axis that starts at the ZAMS says 0 there. */
-    private static void labelZeroAge(Graphics2D g, StyledChart c) {
-        g.setFont(ChartStyle.TICK_FONT);
-        g.setColor(ChartStyle.BLACK);
-        FontMetrics fm = g.getFontMetrics();
-        double x = c.getScreenXFromChart(0.0);
-        double y = c.getScreenYFromChart(c.getStyler().getYAxisMin()) + c.getStyler().getAxisTickMarkLength()
-                + c.getStyler().getAxisTickPadding() + fm.getAscent();
-        g.drawString("0", (float) (x - fm.stringWidth("0") / 2.0), (float) y);
+    /** An outline (ages, m/M) with its heights moved onto the chart's vertical coordinate. */
+    private static double[][] onAxis(double[][] outline, ZoneCoordinate y) {
+        double[] heights = new double[outline[1].length];
+        for (int i = 0; i < heights.length; i++) {
+            heights[i] = y.of(outline[1][i]);
+        }
+        return new double[][] {outline[0], heights};
     }
 }

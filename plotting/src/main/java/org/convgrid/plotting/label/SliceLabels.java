@@ -4,6 +4,7 @@ import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.Locale;
 import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.output.Span;
 import org.convgrid.output.transitions.Slice;
 
 /** How charts and the report spell a slice: titles for people, file name stems for the maps directory. */
@@ -22,6 +23,19 @@ public final class SliceLabels {
             return "?";
         }
         return new BigDecimal(value).round(FOUR_DIGITS).stripTrailingZeros().toPlainString();
+    }
+
+    /**
+     * A transition mass rounded to the accuracy its bracket gives: as many decimals as the first significant digit
+     * of the bracket's width (0.3640625 in a bracket 0.0016 wide is {@code 0.364}; in a bracket 0.1 wide,
+     * {@code 0.4}). Without a bracket, {@link #number(double)}.
+     */
+    public static String massWithin(double massMsun, Span bracket) {
+        if (bracket == null || !Double.isFinite(massMsun) || !(bracket.hi() > bracket.lo())) {
+            return number(massMsun);
+        }
+        int decimals = (int) Math.max(0, Math.min(6, Math.ceil(-Math.log10(bracket.hi() - bracket.lo()) - 1e-9)));
+        return new BigDecimal(massMsun).setScale(decimals, java.math.RoundingMode.HALF_EVEN).toPlainString();
     }
 
     /** An age for people: {@code ZAMS} for zero, else {@code 4.57 Gyr}. */

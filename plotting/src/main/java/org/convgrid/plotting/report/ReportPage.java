@@ -14,6 +14,8 @@ import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.manifest.RunManifest;
 import org.convgrid.output.transitions.TransitionEstimate;
 import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.plotting.DrawnMaps;
+import org.convgrid.plotting.GridChoices;
 import org.convgrid.plotting.MapEntry;
 import org.convgrid.plotting.RunData;
 import org.convgrid.plotting.RunMaps;
@@ -32,23 +34,37 @@ public final class ReportPage {
 
     /** Writes the report of a run directory; returns its path. */
     public static Path write(Path runDir) throws IOException {
+        return write(runDir, List.of());
+    }
+
+    /** Writes the report of a run directory, naming the charts that could not be drawn; returns its path. */
+    public static Path write(Path runDir, List<DrawnMaps.ChartFailure> chartFailures) throws IOException {
         RunData run = RunData.read(runDir);
         Path target = new RunLayout(runDir).report();
-        AtomicFiles.writeString(target, html(run, runDir));
+        AtomicFiles.writeString(target, html(run, runDir, chartFailures));
         return target;
     }
 
     /** The page's HTML. */
     static String html(RunData run, Path runDir) {
+        return html(run, runDir, List.of());
+    }
+
+    /** The page's HTML, naming the charts that could not be drawn. */
+    static String html(RunData run, Path runDir, List<DrawnMaps.ChartFailure> chartFailures) {
         StringBuilder b = new StringBuilder(16_384);
         RunManifest m = run.manifest();
-        String title = "convgrid run" + (m == null ? "" : ": " + m.gridFile());
+        String title = GridChoices.of(m).title();
+        List<MapEntry> plan = RunMaps.plan(run);
         b.append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n<title>")
                 .append(Html.escape(title)).append("</title>\n<style>\n").append(ReportStyle.CSS)
                 .append("</style>\n</head>\n<body>\n<h1>").append(Html.escape(title)).append("</h1>\n");
+        contents(b, plan);
+        b.append("<h2 id=\"run\">Run</h2>\n");
         summary(b, run);
         counts(b, run);
-        maps(b, run, runDir);
+        chartFailures(b, chartFailures);
+        maps(b, plan, runDir, chartFailures, RunMaps.zonesAgainstAgeSelection(run).describe());
         transitions(b, run);
         failures(b, run);
         if (!run.hasTracks()) {
@@ -64,7 +80,7 @@ public final class ReportPage {
     }
 
     private static void summary(StringBuilder b, RunData run) {
-        b.append("<h2>Run</h2>\n<table class=\"facts\">\n");
+        b.append("<table class=\"facts\">\n");
         RunManifest m = run.manifest();
         if (m == null) {
             row(b, "manifest", RunLayout.MANIFEST + " not found");
@@ -113,15 +129,76 @@ public final class ReportPage {
         b.append("</table>\n");
     }
 
-    private static void maps(StringBuilder b, RunData run, Path runDir) {
+    /** A contents list: the fixed sections, and per chart section its groups (one metallicity, one mass, ...). */
+    private static void contents(StringBuilder b, List<MapEntry> plan) {
+        b.append("<nav><h2>Contents</h2>\n<ul>\n<li><a href=\"#run\">Run</a></li>\n");
         String section = null;
-        for (MapEntry e : RunMaps.plan(run)) {
+        String group = null;
+        for (MapEntry e : plan) {
+            if (!e.section().equals(section)) {
+                if (section != null) {
+                    b.append(group == null ? "" : "</ul>").append("</li>\n");
+                }
+                section = e.section();
+                group = null;
+                b.append("<li><a href=\"#").append(anchor(section, "")).append("\">").append(Html.escape(section))
+                        .append("</a>");
+            }
+            if (!e.group().isEmpty() && !e.group().equals(group)) {
+                b.append(group == null ? "<ul class=\"groups\">" : "").append("<li><a href=\"#")
+                        .append(anchor(section, e.group())).append("\">").append(Html.escape(e.group()))
+                        .append("</a></li>");
+                group = e.group();
+            }
+        }
+        if (section != null) {
+            b.append(group == null ? "" : "</ul>").append("</li>\n");
+        }
+        b.append("<li><a href=\"#transitions\">Transition masses</a></li>\n")
+                .append("<li><a href=\"#failures\">Models without a usable result</a></li>\n</ul></nav>\n");
+    }
+
+    private static String anchor(String section, String group) {
+        String text = (section + (group.isEmpty() ? "" : "-" + group)).toLowerCase(java.util.Locale.ROOT);
+        return text.replaceAll("[^a-z0-9.]+", "-");
+    }
+
+    private static void chartFailures(StringBuilder b, List<DrawnMaps.ChartFailure> chartFailures) {
+        if (chartFailures.isEmpty()) {
+            return;
+        }
+        b.append("<p class=\"missing\">").append(chartFailures.size())
+                .append(" chart(s) could not be drawn; the tables below are complete:</p>\n<ul>\n");
+        chartFailures.forEach(f -> b.append("<li>").append(Html.escape(f.describe())).append("</li>\n"));
+        b.append("</ul>\n");
+    }
+
+    private static void maps(StringBuilder b, List<MapEntry> plan, Path runDir,
+                             List<DrawnMaps.ChartFailure> chartFailures, String zonesAgainstAgeNote) {
+        String section = null;
+        String group = null;
+        for (MapEntry e : plan) {
             if (!e.section().equals(section)) {
                 section = e.section();
-                b.append("<h2>").append(Html.escape(section)).append("</h2>\n");
+                group = null;
+                b.append("<h2 id=\"").append(anchor(section, "")).append("\">").append(Html.escape(section))
+                        .append("</h2>\n");
+                if (e.section().equals(MapEntry.ZONES_AGE)) {
+                    b.append("<p>").append(Html.escape(zonesAgainstAgeNote)).append("</p>\n");
+                }
+            }
+            if (!e.group().isEmpty() && !e.group().equals(group)) {
+                group = e.group();
+                b.append("<h3 id=\"").append(anchor(section, group)).append("\">").append(Html.escape(group))
+                        .append("</h3>\n");
             }
             String href = RunLayout.MAPS + "/" + e.fileName();
-            if (Files.isRegularFile(new RunLayout(runDir).maps().resolve(e.fileName()))) {
+            java.util.Optional<DrawnMaps.ChartFailure> failed = chartFailures.stream()
+                    .filter(f -> f.fileName().equals(e.fileName())).findFirst();
+            if (failed.isPresent()) {
+                b.append("<p class=\"missing\">Could not be drawn: ").append(Html.escape(href)).append(" (")
+                        .append(Html.escape(failed.get().reason())).append(").</p>\n");
+            } else if (Files.isRegularFile(new RunLayout(runDir).maps().resolve(e.fileName()))) {
                 b.append("<figure><a href=\"").append(Html.escape(href)).append("\"><img src=\"")
                         .append(Html.escape(href)).append("\" alt=\"").append(Html.escape(e.caption()))
                         .append("\" width=\"1200\" height=\"800\"></a><figcaption>").append(Html.escape(e.caption()))
@@ -134,7 +211,7 @@ public final class ReportPage {
     }
 
     private static void transitions(StringBuilder b, RunData run) {
-        b.append("<h2>Transition masses</h2>\n<table>\n<tr><th>Z</th><th>age / Gyr</th><th>physics</th>"
+        b.append("<h2 id=\"transitions\">Transition masses</h2>\n<table>\n<tr><th>Z</th><th>age / Gyr</th><th>physics</th>"
                 + "<th>fully convective up to / M\u2609</th><th>bracket / M\u2609</th>"
                 + "<th>convective core from / M\u2609</th><th>bracket / M\u2609</th><th>method</th><th>notes</th></tr>\n");
         for (TransitionRow t : run.transitions()) {
@@ -150,13 +227,13 @@ public final class ReportPage {
     }
 
     private static void estimate(StringBuilder b, TransitionEstimate e) {
-        b.append("<td class=\"num\">").append(e.found() ? SliceLabels.number(e.massMsun()) : "not found")
+        b.append("<td class=\"num\">").append(e.found() ? SliceLabels.massWithin(e.massMsun(), e.bracket()) : "not found")
                 .append("</td><td class=\"num\">").append(Html.escape(Span.format(e.bracket()))).append("</td>");
     }
 
     private static void failures(StringBuilder b, RunData run) {
         List<CatalogueRow> failed = run.catalogue().stream().filter(r -> !r.isOk()).toList();
-        b.append("<h2>Models without a usable result</h2>\n");
+        b.append("<h2 id=\"failures\">Models without a usable result</h2>\n");
         if (failed.isEmpty()) {
             b.append("<p>None: every model converged.</p>\n");
             return;

@@ -40,6 +40,8 @@ public final class ChartStyle {
     public static final Color REDDISH_PURPLE = new Color(204, 121, 167);
     /** Neutral grey for "no result", not part of the hue palette on purpose. */
     public static final Color NO_RESULT_GREY = new Color(200, 200, 200);
+    /** Darker neutral grey for masses past the main sequence at the asked age: known, so told apart from failures. */
+    public static final Color PAST_MAIN_SEQUENCE_GREY = new Color(120, 120, 120);
     private static final Color GRID_GREY = new Color(225, 225, 225);
     static final Color TEXT = new Color(25, 25, 25);
 
@@ -118,6 +120,8 @@ public final class ChartStyle {
         s.setAxisTickLabelsFont(TICK_FONT);
         s.setAxisTickLabelsColor(TEXT);
         s.setAxisTickMarksColor(TEXT);
+        // the plot border is the axis line; XChart's own tick line sits a few pixels off it and doubles it
+        s.setAxisTicksLineVisible(false);
         s.setAxisTickMarkLength(8);
         s.setAxisTickPadding(8);
         s.setAxisTitlePadding(10);

@@ -31,6 +31,18 @@ public final class LogAxis {
         chart.addOverlay((g, c) -> paintLabels(g, c, inside));
     }
 
+    /**
+     * Makes the x axis linear over [min, max], labelled at {@code labelled} only, the same way: for values that
+     * include zero (Z = 0), which no logarithmic axis can show.
+     */
+    public static void applyLinearX(StyledChart chart, double min, double max, List<Double> labelled) {
+        chart.getStyler().setXAxisLogarithmic(false);
+        chart.getStyler().setXAxisMin(min).setXAxisMax(max);
+        chart.getStyler().setXAxisTickLabelsColor(TRANSPARENT);
+        List<Double> inside = labelled.stream().filter(v -> v >= min && v <= max).toList();
+        chart.addOverlay((g, c) -> paintLabels(g, c, inside));
+    }
+
     /** The round values 1, 2, 3 and 5 x 10^n in [min, max]. */
     public static List<Double> roundValues(double min, double max) {
         List<Double> ticks = new ArrayList<>();

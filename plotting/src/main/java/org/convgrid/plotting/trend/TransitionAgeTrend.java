@@ -5,6 +5,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.function.Function;
 import org.convgrid.output.transitions.TransitionEstimate;
+import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.zones.TransitionMarker;
@@ -17,7 +18,7 @@ public final class TransitionAgeTrend {
 
     /**
      * The chart data of the rows whose physics is {@code physics}: per transition and Z, the found masses in age
-     * order (unbracketed transitions are left out, so a series may have gaps in age).
+     * order (unbracketed transitions are left out, so a series may have gaps in age); refined and grid values make separate series, never one line.
      */
     public static TransitionAgeTrendData build(PhysicsKey physics, List<TransitionRow> rows) {
         List<TransitionRow> mine = rows.stream().filter(r -> PhysicsKey.of(r.slice()).equals(physics)).toList();
@@ -33,11 +34,16 @@ public final class TransitionAgeTrend {
                                Function<TransitionRow, TransitionEstimate> which, List<TransitionRow> rows,
                                List<Double> zs) {
         for (double z : zs) {
-            List<AgePoint> points = rows.stream().filter(r -> r.slice().zInit() == z)
-                    .filter(r -> which.apply(r).found() && Double.isFinite(which.apply(r).massMsun()))
-                    .map(r -> new AgePoint(r.slice().ageGyr(), which.apply(r).massMsun(), which.apply(r).bracket()))
-                    .sorted(Comparator.comparingDouble(AgePoint::ageGyr)).toList();
-            out.add(new TransitionAgeTrendData.Series(kind, z, points));
+            for (TransitionMethod method : TransitionMethod.values()) {
+                List<AgePoint> points = rows.stream().filter(r -> r.slice().zInit() == z && r.method() == method)
+                        .filter(r -> which.apply(r).found() && Double.isFinite(which.apply(r).massMsun()))
+                        .map(r -> new AgePoint(r.slice().ageGyr(), which.apply(r).massMsun(),
+                                which.apply(r).bracket()))
+                        .sorted(Comparator.comparingDouble(AgePoint::ageGyr)).toList();
+                if (!points.isEmpty()) {
+                    out.add(new TransitionAgeTrendData.Series(kind, z, method, points));
+                }
+            }
         }
     }
 }

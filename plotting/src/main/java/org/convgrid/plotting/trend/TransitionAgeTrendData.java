@@ -1,6 +1,7 @@
 package org.convgrid.plotting.trend;
 
 import java.util.List;
+import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.zones.TransitionMarker;
 
@@ -26,9 +27,10 @@ public record TransitionAgeTrendData(PhysicsKey physics, List<Double> ages, List
      *
      * @param kind which transition
      * @param zInit initial metal mass fraction
+     * @param method how these masses were found: a refined value is never joined to one read off the grid
      * @param points the ages where the grid brackets the transition, increasing age
      */
-    public record Series(TransitionMarker.Kind kind, double zInit, List<AgePoint> points) {
+    public record Series(TransitionMarker.Kind kind, double zInit, TransitionMethod method, List<AgePoint> points) {
         public Series {
             points = List.copyOf(points);
         }

@@ -1,6 +1,6 @@
 package org.convgrid.plotting.trend;
 
-import java.awt.BasicStroke;
+import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.StyledChart;
@@ -11,12 +11,15 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
 /**
  * Turns {@link TransitionAgeTrendData} into a chart: age along x, transition mass up, colour per Z (as in the
  * other trend chart's ages), solid lines with circles for the fully convective limit, dashed with diamonds for the
- * core onset; each point's bracket as a vertical bar, nudged sideways per Z so bars of equal ages stay apart.
+ * core onset; each series' brackets as a shaded band; refined and grid values are separate series, never joined
+ * (grid markers paler); series nudged sideways per Z so markers of equal ages stay apart.
  */
 public final class TransitionAgeTrendRenderer {
 
     /** Sideways nudge between metallicities, as a share of the age range. */
     private static final double DODGE_SHARE = 0.006;
+    /** Grid (unrefined) markers are paler than refined ones, so the two read apart. */
+    private static final double GRID_MARKER_TINT = 0.5;
     /** Room either side of the age range, as a share of it. */
     private static final double AGE_PAD_SHARE = 0.04;
 
@@ -38,35 +41,24 @@ public final class TransitionAgeTrendRenderer {
                 .mapToDouble(p -> p.bracket() == null ? p.massMsun() : p.bracket().hi()).max().orElse(1.0);
         chart.getStyler().setYAxisMin(0.0).setYAxisMax(Math.ceil(top * 1.15 * 10) / 10);
         chart.getStyler().setYAxisDecimalPattern("0.0#");
-        int bar = 0;
         for (TransitionAgeTrendData.Series s : data.series()) {
-            if (s.points().isEmpty()) {
-                continue;
-            }
             int zIndex = data.metallicities().indexOf(s.zInit());
             double shift = DODGE_SHARE * range * (zIndex - (data.metallicities().size() - 1) / 2.0);
             boolean fc = s.kind() == TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT;
-            for (AgePoint p : s.points()) {
-                if (p.bracket() == null) {
-                    continue;
-                }
-                XYSeries b = chart.addSeries("bracket " + bar++, new double[] {p.ageGyr() + shift,
-                    p.ageGyr() + shift}, new double[] {p.bracket().lo(), p.bracket().hi()});
-                b.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
-                b.setMarker(SeriesMarkers.NONE);
-                b.setLineColor(ChartStyle.seriesColor(zIndex));
-                b.setLineStyle(new BasicStroke(ChartStyle.LINE_WIDTH * 2));
-                b.setShowInLegend(false);
-            }
+            boolean refined = s.method() == TransitionMethod.REFINED;
+            BracketBands.add(chart, s.points().stream()
+                    .map(p -> new BracketBands.At(p.ageGyr() + shift, p.bracket())).toList(),
+                    ChartStyle.seriesColor(zIndex));
             XYSeries line = chart.addSeries((fc ? "fully convective, Z = " : "lasting core onset, Z = ")
-                            + SliceLabels.number(s.zInit()),
+                            + SliceLabels.number(s.zInit()) + (refined ? ", refined" : ", grid"),
                     s.points().stream().mapToDouble(p -> p.ageGyr() + shift).toArray(),
                     s.points().stream().mapToDouble(AgePoint::massMsun).toArray());
             line.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
             line.setLineColor(ChartStyle.seriesColor(zIndex));
             line.setLineStyle(ChartStyle.dashed(fc ? 0 : 1, ChartStyle.LINE_WIDTH));
             line.setMarker(fc ? SeriesMarkers.CIRCLE : SeriesMarkers.DIAMOND);
-            line.setMarkerColor(ChartStyle.seriesColor(zIndex));
+            line.setMarkerColor(refined ? ChartStyle.seriesColor(zIndex)
+                    : ChartStyle.tint(ChartStyle.seriesColor(zIndex), GRID_MARKER_TINT));
         }
         return chart;
     }

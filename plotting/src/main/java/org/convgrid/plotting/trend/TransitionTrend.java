@@ -5,6 +5,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.function.Function;
 import org.convgrid.output.transitions.TransitionEstimate;
+import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.zones.TransitionMarker;
@@ -15,7 +16,7 @@ public final class TransitionTrend {
     private TransitionTrend() {
     }
 
-    /** The chart data of the rows whose physics is {@code physics}; unbracketed transitions are left out. */
+    /** The chart data of the rows whose physics is {@code physics}; unbracketed transitions are left out; refined and grid values make separate series, never one line. */
     public static TransitionTrendData build(PhysicsKey physics, List<TransitionRow> rows) {
         List<TransitionRow> mine = rows.stream().filter(r -> PhysicsKey.of(r.slice()).equals(physics)).toList();
         List<Double> ages = mine.stream().map(r -> r.slice().ageGyr()).distinct().sorted().toList();
@@ -30,11 +31,16 @@ public final class TransitionTrend {
                                Function<TransitionRow, TransitionEstimate> which, List<TransitionRow> rows,
                                List<Double> ages) {
         for (double age : ages) {
-            List<TrendPoint> points = rows.stream().filter(r -> r.slice().ageGyr() == age)
-                    .filter(r -> which.apply(r).found() && Double.isFinite(which.apply(r).massMsun()))
-                    .map(r -> new TrendPoint(r.slice().zInit(), which.apply(r).massMsun(), which.apply(r).bracket()))
-                    .sorted(Comparator.comparingDouble(TrendPoint::zInit)).toList();
-            out.add(new TransitionTrendData.Series(kind, age, points));
+            for (TransitionMethod method : TransitionMethod.values()) {
+                List<TrendPoint> points = rows.stream().filter(r -> r.slice().ageGyr() == age && r.method() == method)
+                        .filter(r -> which.apply(r).found() && Double.isFinite(which.apply(r).massMsun()))
+                        .map(r -> new TrendPoint(r.slice().zInit(), which.apply(r).massMsun(),
+                                which.apply(r).bracket()))
+                        .sorted(Comparator.comparingDouble(TrendPoint::zInit)).toList();
+                if (!points.isEmpty()) {
+                    out.add(new TransitionTrendData.Series(kind, age, method, points));
+                }
+            }
         }
     }
 }

@@ -1,6 +1,7 @@
 package org.convgrid.plotting.trend;
 
 import java.util.List;
+import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.zones.TransitionMarker;
 
@@ -23,9 +24,10 @@ public record TransitionTrendData(PhysicsKey physics, List<Double> metallicities
      *
      * @param kind which transition
      * @param ageGyr the age, Gyr
+     * @param method how these masses were found: a refined value is never joined to one read off the grid
      * @param points the slices where the grid brackets the transition, increasing Z
      */
-    public record Series(TransitionMarker.Kind kind, double ageGyr, List<TrendPoint> points) {
+    public record Series(TransitionMarker.Kind kind, double ageGyr, TransitionMethod method, List<TrendPoint> points) {
         public Series {
             points = List.copyOf(points);
         }

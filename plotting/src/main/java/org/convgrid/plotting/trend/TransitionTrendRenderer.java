@@ -1,6 +1,7 @@
 package org.convgrid.plotting.trend;
 
 import java.util.List;
+import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.LogAxis;
@@ -11,18 +12,28 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
  * Turns {@link TransitionTrendData} into a chart: Z on a log axis labelled at the run's metallicities, transition
- * mass up; each point with its bracket drawn as a vertical bar (asymmetric: the reported mass is one end of its
- * bracket, so XChart's symmetric error bars would misplace it). Series of different ages are nudged sideways by
- * a few thousandths of a dex so that their bars do not hide each other; the data keep the true Z.
+ * mass up (a linear Z axis when the run holds Z = 0); each series' brackets drawn as a shaded band (the reported
+ * mass is one end of its bracket, so the band shows where the transition lies). Refined and grid values are
+ * separate series, never joined; grid markers are paler. Series of different ages are nudged sideways by a few
+ * thousandths of a dex so that their markers do not hide each other; the data keep the true Z.
  */
 public final class TransitionTrendRenderer {
 
     /** Sideways nudge between ages, dex of Z. */
     private static final double DODGE_DEX = 0.016;
+    /** Room either side of a linear Z range (one holding Z = 0), as a share of it. */
+    private static final double LINEAR_PAD_SHARE = 0.06;
+    /** Grid (unrefined) markers are paler than refined ones, so the two read apart. */
+    private static final double GRID_MARKER_TINT = 0.5;
     /** Room either side of the Z range, as a factor. */
     private static final double Z_PAD = 1.25;
 
     private TransitionTrendRenderer() {
+    }
+
+    /** Z nudged sideways by {@code offsetDex} dex on a log axis, or by the same share of the range on a linear one. */
+    private static double nudged(double z, double offsetDex, boolean linear, double zMax) {
+        return linear ? z + offsetDex * zMax * 0.5 : z * Math.pow(10, offsetDex);
     }
 
     /** The chart of a transition trend. */
@@ -34,6 +45,7 @@ public final class TransitionTrendRenderer {
                 data.physics().describe(), "initial metal mass fraction Z",
                 "transition mass M / M\u2609");
         ChartStyle.legendRight(chart);
+        boolean linear = !data.metallicities().isEmpty() && data.metallicities().get(0) <= 0;
         double zMin = data.metallicities().isEmpty() ? 0.001 : data.metallicities().get(0) / Z_PAD;
         double zMax = data.metallicities().isEmpty() ? 0.1
                 : data.metallicities().get(data.metallicities().size() - 1) * Z_PAD;
@@ -41,36 +53,32 @@ public final class TransitionTrendRenderer {
                 .mapToDouble(p -> p.bracket() == null ? p.massMsun() : p.bracket().hi()).max().orElse(1.0);
         chart.getStyler().setYAxisMin(0.0).setYAxisMax(Math.ceil(top * 1.15 * 10) / 10);
         chart.getStyler().setYAxisDecimalPattern("0.0#");
-        LogAxis.applyX(chart, zMin, zMax, data.metallicities());
-        int bar = 0;
+        if (!linear) {
+            LogAxis.applyX(chart, zMin, zMax, data.metallicities());
+        } else {
+            // Z = 0 has no place on a log axis: a linear one, labelled at the run's metallicities
+            double span = Math.max(data.metallicities().get(data.metallicities().size() - 1), 1e-4);
+            LogAxis.applyLinearX(chart, -LINEAR_PAD_SHARE * span, (1 + LINEAR_PAD_SHARE) * span,
+                    data.metallicities());
+        }
         for (TransitionTrendData.Series s : data.series()) {
-            if (s.points().isEmpty()) {
-                continue;
-            }
             int ageIndex = ages.indexOf(s.ageGyr());
-            double shift = Math.pow(10, DODGE_DEX * (ageIndex - (ages.size() - 1) / 2.0));
             boolean fc = s.kind() == TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT;
-            for (TrendPoint p : s.points()) {
-                if (p.bracket() == null) {
-                    continue;
-                }
-                XYSeries b = chart.addSeries("bracket " + bar++, new double[] {p.zInit() * shift, p.zInit() * shift},
-                        new double[] {p.bracket().lo(), p.bracket().hi()});
-                b.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
-                b.setMarker(SeriesMarkers.NONE);
-                b.setLineColor(ChartStyle.seriesColor(ageIndex));
-                b.setLineStyle(new java.awt.BasicStroke(ChartStyle.LINE_WIDTH * 2));
-                b.setShowInLegend(false);
-            }
+            boolean refined = s.method() == TransitionMethod.REFINED;
+            double offset = DODGE_DEX * (ageIndex - (ages.size() - 1) / 2.0);
+            double[] x = s.points().stream().mapToDouble(p -> nudged(p.zInit(), offset, linear, zMax)).toArray();
+            BracketBands.add(chart, s.points().stream()
+                    .map(p -> new BracketBands.At(nudged(p.zInit(), offset, linear, zMax), p.bracket())).toList(),
+                    ChartStyle.seriesColor(ageIndex));
             XYSeries line = chart.addSeries((fc ? "fully convective, " : "lasting core onset, ")
-                            + SliceLabels.age(s.ageGyr()),
-                    s.points().stream().mapToDouble(p -> p.zInit() * shift).toArray(),
-                    s.points().stream().mapToDouble(TrendPoint::massMsun).toArray());
+                            + SliceLabels.age(s.ageGyr()) + (refined ? ", refined" : ", grid"),
+                    x, s.points().stream().mapToDouble(TrendPoint::massMsun).toArray());
             line.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
             line.setLineColor(ChartStyle.seriesColor(ageIndex));
             line.setLineStyle(ChartStyle.dashed(fc ? 0 : 1, ChartStyle.LINE_WIDTH));
             line.setMarker(fc ? SeriesMarkers.CIRCLE : SeriesMarkers.DIAMOND);
-            line.setMarkerColor(ChartStyle.seriesColor(ageIndex));
+            line.setMarkerColor(refined ? ChartStyle.seriesColor(ageIndex) : ChartStyle.tint(
+                    ChartStyle.seriesColor(ageIndex), GRID_MARKER_TINT));
         }
         return chart;
     }

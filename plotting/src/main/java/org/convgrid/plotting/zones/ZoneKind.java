@@ -10,7 +10,9 @@ public enum ZoneKind {
     CORE("convective core"),
     /** A detached convective shell, touching neither centre nor surface. */
     SHELL("convective shell"),
-    /** No usable model at this mass (failed, not converged, past the main sequence): not radiative, unknown. */
+    /** The asked age lies past core-hydrogen exhaustion at this mass: a known outcome, not a failure. */
+    PAST_MAIN_SEQUENCE("past the main sequence"),
+    /** No usable model at this mass (failed, not converged): not radiative, unknown. */
     NO_RESULT("no result at this mass");
 
     /** Ends within this distance of 0 or 1 count as centre or surface (spans are written with 6 decimals). */

@@ -5,6 +5,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
 import org.convgrid.engine.convection.StructureClass;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.Slice;
@@ -17,7 +18,8 @@ import org.convgrid.output.transitions.TransitionRow;
  * <p>Each model owns a column of the mass axis that runs between the geometric midpoints to its neighbours (the
  * axis is logarithmic, so the column is centred on the model there); the outermost columns are as wide on their
  * open side as on the other. Every convective interval of a usable model (status ok) becomes one rectangle over
- * that column; a model without a usable result gets a full-height NO_RESULT column, so that a gap is never
+ * that column; a model past the main sequence gets a full-height PAST_MAIN_SEQUENCE column and any other model without a
+ * usable result a NO_RESULT one, so that a gap is never
  * mistaken for a radiative star.
  *
  * <p>In m/M the intervals are the catalogue's {@code conv_zones_mass_frac}. In r/R the catalogue only has the
@@ -64,7 +66,8 @@ public final class ZoneMap {
             CatalogueRow row = byMass.get(i);
             if (!row.isOk()) {
                 rects.add(new ZoneRect(row.modelId(), row.massMsun(), edges[i], edges[i + 1], 0.0, 1.0,
-                        ZoneKind.NO_RESULT));
+                        row.status() == ModelStatus.PAST_MAIN_SEQUENCE ? ZoneKind.PAST_MAIN_SEQUENCE
+                                : ZoneKind.NO_RESULT));
                 continue;
             }
             List<Span> zones;

@@ -46,7 +46,7 @@ public final class ZoneMapRenderer {
         }
         for (TransitionMarker m : data.markers()) {
             boolean fullyConvective = m.kind() == TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT;
-            String label = m.kind().legendLabel(SliceLabels.number(m.massMsun()) + " M\u2609");
+            String label = m.kind().legendLabel(SliceLabels.massWithin(m.massMsun(), m.bracket()) + " M\u2609");
             XYSeries s = chart.addSeries(label, new double[] {m.massMsun(), m.massMsun()}, new double[] {0.0, 1.0});
             s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
             s.setLineColor(ChartStyle.BLACK);
@@ -64,6 +64,7 @@ public final class ZoneMapRenderer {
             case CORE -> ChartStyle.tint(ChartStyle.BLUISH_GREEN, 0.35);
             case ENVELOPE -> ChartStyle.tint(ChartStyle.BLUE, 0.35);
             case SHELL -> ChartStyle.tint(ChartStyle.REDDISH_PURPLE, 0.2);
+            case PAST_MAIN_SEQUENCE -> ChartStyle.PAST_MAIN_SEQUENCE_GREY;
             case NO_RESULT -> ChartStyle.NO_RESULT_GREY;
         };
     }

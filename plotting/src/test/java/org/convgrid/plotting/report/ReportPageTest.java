@@ -49,7 +49,7 @@ class ReportPageTest {
         Files.writeString(dir.resolve("tracks/p9-z00-m000.csv"), TestTracks.text(1.0, 0.014, 3));
         RunMaps.drawAll(dir);
         String html = Files.readString(ReportPage.write(dir));
-        assertThat(html).contains("<h2>Convective zones against age</h2>", "maps/zones-age_m2_z0.014",
+        assertThat(html).contains("<h2 id=\"convective-zones-against-age\">Convective zones against age</h2>", "maps/zones-age_m2_z0.014",
                 "1 track file(s) in tracks/ match no catalogue model").doesNotContain("No evolution tracks");
     }
 

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.util.List;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.TransitionFinder;
+import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.plotting.TestRuns;
 import org.convgrid.plotting.label.PhysicsKey;
@@ -33,5 +34,23 @@ class TransitionAgeTrendTest {
                 assertThat(p.bracket()).isEqualTo(estimate.bracket());
             }
         }
+    }
+
+    @Test
+    void refinedAndGridValuesAreNeverOneSeries() {
+        List<CatalogueRow> rows = TestRuns.demoRows();
+        List<TransitionRow> grid = TransitionFinder.withDefaults().find(rows);
+        // the zero-age slices refined, the later ones read off the grid: the case that once drew a false trend
+        List<TransitionRow> mixed = grid.stream().map(t -> t.slice().ageGyr() == 0.0
+                ? new TransitionRow(t.slice(), t.fullyConvective(), t.convCore(), TransitionMethod.REFINED, t.notes())
+                : t).toList();
+        TransitionAgeTrendData data = TransitionAgeTrend.build(PhysicsKey.of(rows.get(0)), mixed);
+        assertThat(data.series()).allSatisfy(s -> assertThat(s.points()).allSatisfy(p ->
+                assertThat(p.ageGyr() == 0.0).isEqualTo(s.method() == TransitionMethod.REFINED)));
+        assertThat(data.series()).filteredOn(s -> s.method() == TransitionMethod.REFINED).isNotEmpty()
+                .allSatisfy(s -> assertThat(s.points()).hasSize(1));
+        TransitionTrendData byZ = TransitionTrend.build(PhysicsKey.of(rows.get(0)), mixed);
+        assertThat(byZ.series()).allSatisfy(s -> assertThat(s.method())
+                .isEqualTo(s.ageGyr() == 0.0 ? TransitionMethod.REFINED : TransitionMethod.GRID));
     }
 }

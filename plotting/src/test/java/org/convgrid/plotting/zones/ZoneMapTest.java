@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.within;
 
 import java.util.List;
 import java.util.Map;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.Slice;
@@ -29,7 +30,8 @@ class ZoneMapTest {
                             .as(r.modelId()).isEqualTo(r.convZones());
                 } else {
                     assertThat(mine).singleElement().satisfies(z -> {
-                        assertThat(z.kind()).isEqualTo(ZoneKind.NO_RESULT);
+                        assertThat(z.kind()).isEqualTo(r.status() == ModelStatus.PAST_MAIN_SEQUENCE
+                                ? ZoneKind.PAST_MAIN_SEQUENCE : ZoneKind.NO_RESULT);
                         assertThat(z.lo()).isZero();
                         assertThat(z.hi()).isEqualTo(1.0);
                     });

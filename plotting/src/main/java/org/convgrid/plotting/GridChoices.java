@@ -1,0 +1,56 @@
+package org.convgrid.plotting;
+
+import java.util.List;
+import java.util.Map;
+import org.convgrid.output.manifest.RunManifest;
+import org.snakeyaml.engine.v2.api.Load;
+import org.snakeyaml.engine.v2.api.LoadSettings;
+
+/**
+ * What the grid file says about the charts and the report, read from the grid text the manifest keeps (the grid
+ * reader has validated it already): the {@code title} and the masses of {@code output: age_charts_for_masses_msun}.
+ *
+ * @param title the report's title: the grid's title, else the grid file's name, else {@code convgrid run}
+ * @param ageChartMasses the masses, solar masses, whose zones-against-age charts the grid asks for; empty when it
+ *     names none
+ */
+public record GridChoices(String title, List<Double> ageChartMasses) {
+
+    /** The key under {@code output:} that names the masses of the zones-against-age charts. */
+    public static final String AGE_CHART_MASSES_KEY = "age_charts_for_masses_msun";
+    static final String FALLBACK_TITLE = "convgrid run";
+
+    public GridChoices {
+        ageChartMasses = List.copyOf(ageChartMasses);
+    }
+
+    /** The choices of a run; a missing manifest or an unreadable grid text gives the defaults. */
+    public static GridChoices of(RunManifest manifest) {
+        if (manifest == null) {
+            return new GridChoices(FALLBACK_TITLE, List.of());
+        }
+        String title = FALLBACK_TITLE + ": " + manifest.gridFile();
+        List<Double> masses = List.of();
+        Object doc;
+        try {
+            doc = new Load(LoadSettings.builder().build()).loadFromString(manifest.gridText());
+        } catch (RuntimeException e) {
+            // the run read this text already; one this reader cannot parse just gives the defaults
+            doc = null;
+        }
+        if (doc instanceof Map<?, ?> map) {
+            if (map.get("title") instanceof String t && !t.isBlank()) {
+                title = t.strip();
+            }
+            if (map.get("output") instanceof Map<?, ?> output
+                    && output.get(AGE_CHART_MASSES_KEY) instanceof List<?> list) {
+                masses = list.stream().filter(Number.class::isInstance).map(v -> ((Number) v).doubleValue())
+                        .filter(v -> v > 0 && Double.isFinite(v)).toList();
+            } else if (map.get("output") instanceof Map<?, ?> output
+                    && output.get(AGE_CHART_MASSES_KEY) instanceof Number one && one.doubleValue() > 0) {
+                masses = List.of(one.doubleValue());
+            }
+        }
+        return new GridChoices(title, masses);
+    }
+}

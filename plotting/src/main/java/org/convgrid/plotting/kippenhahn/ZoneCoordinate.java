@@ -1,0 +1,58 @@
+package org.convgrid.plotting.kippenhahn;
+
+/**
+ * The vertical coordinate of a zones-against-age chart. In m/M a surface convection zone holding a thousandth of
+ * the star's mass is under a pixel thick; the depth below the surface, -log10(1 - m/M), spreads the outer layers
+ * over decades (common practice for showing thin envelopes), centre at 0 and surface at the top.
+ */
+public enum ZoneCoordinate {
+    /** m/M, centre 0 to surface 1. */
+    MASS_FRACTION("m/M (mass coordinate over total mass)", 0.0, 1.0),
+    /** -log10(1 - m/M): 0 at the centre, 1 where 90 % of the mass lies below, up to {@link #DEPTH_TOP} at the top. */
+    SURFACE_DEPTH("depth below the surface, \u2212log10(1 \u2212 m/M)", 0.0, ZoneCoordinate.DEPTH_TOP);
+
+    /** Top of the depth axis: layers holding less than 10^-7 of the mass are drawn at the top edge. */
+    public static final double DEPTH_TOP = 7.0;
+
+    private final String title;
+    private final double min;
+    private final double max;
+
+    ZoneCoordinate(String title, double min, double max) {
+        this.title = title;
+        this.min = min;
+        this.max = max;
+    }
+
+    /** The axis title. */
+    public String title() {
+        return title;
+    }
+
+    /** Bottom of the axis. */
+    public double min() {
+        return min;
+    }
+
+    /** Top of the axis. */
+    public double max() {
+        return max;
+    }
+
+    /** A zone thinner than this share of the axis everywhere (about two pixels) counts as not drawn. */
+    public static final double MIN_VISIBLE_SHARE = 0.003;
+
+    /** Whether an interval [lo, hi] of m/M is thick enough on this axis to be seen. */
+    public boolean shows(double lo, double hi) {
+        return of(hi) - of(lo) >= MIN_VISIBLE_SHARE * (max - min);
+    }
+
+    /** Where the mass fraction {@code m} (m/M in [0, 1]) sits on this axis. */
+    public double of(double m) {
+        if (this == MASS_FRACTION) {
+            return m;
+        }
+        double outside = 1.0 - Math.min(Math.max(m, 0.0), 1.0);
+        return Math.min(-Math.log10(Math.max(outside, Math.pow(10, -DEPTH_TOP))), DEPTH_TOP);
+    }
+}
