@@ -85,6 +85,7 @@ final class RunCommand implements Callable<Integer> {
         Shard chosen = ShardChoice.choose(shard, context.environment()).orElse(null);
         RunDirectory dir = new RunDirectory(context.resolve(out != null ? out
                 : RunDirectory.defaultPath(file.spec().outputDir(), chosen)));
+        OutputTargets.requireWritableDirectory("--out", dir.root());
         boolean evolves = file.spec().ages().evolves();
         TrackFiles tracks = new TrackFiles(dir.layout());
         ChunkSolver solver = evolves ? context.solvers().solverFor(file.spec(), tracks)

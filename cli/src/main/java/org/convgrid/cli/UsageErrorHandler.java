@@ -10,7 +10,7 @@ final class UsageErrorHandler implements IParameterExceptionHandler {
     @Override
     public int handleParseException(ParameterException ex, String[] args) {
         CommandLine cmd = ex.getCommandLine();
-        cmd.getErr().println("convgrid: " + ex.getMessage() + " (see '" + cmd.getCommandSpec().qualifiedName()
+        cmd.getErr().println("convgrid: " + TerminalText.clean(ex.getMessage()) + " (see '" + cmd.getCommandSpec().qualifiedName()
                 + " --help')");
         return ExitCodes.USAGE;
     }

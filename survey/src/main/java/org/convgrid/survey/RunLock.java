@@ -60,7 +60,8 @@ public final class RunLock implements AutoCloseable {
         try {
             Files.createDirectories(root);
         } catch (IOException e) {
-            throw new IOException("cannot create run directory " + root + ": " + IoMessages.reason(e), e);
+            // the user named a directory that cannot be made (under /proc, below a file...): a usage problem
+            throw new RunSetupException("cannot create run directory " + root + ": " + IoMessages.reason(e));
         }
         Path file = root.resolve(FILE_NAME);
         FileChannel channel;

@@ -36,6 +36,13 @@ public final class OpacityTableReader {
     /** Layout version this reader understands. */
     public static final int VERSION = 1;
 
+    /** Largest table file read, bytes: OPAL-sized tables are well under 1 MB, so this is generous. */
+    public static final long MAX_FILE_BYTES = 64L * 1024 * 1024;
+    /** Most values one axis may declare (OPAL tables have about 70 temperatures). */
+    public static final int MAX_AXIS_VALUES = 10_000;
+    /** Most (X, Z) blocks a table may declare. */
+    public static final int MAX_BLOCKS = 10_000;
+
     private final String source;
     private final List<String> tokens = new ArrayList<>();
     private final List<Integer> lines = new ArrayList<>();
@@ -64,11 +71,36 @@ public final class OpacityTableReader {
      * @throws ConvgridException BAD_DATA when the file cannot be read or understood
      */
     public static TabulatedOpacity read(Path file) {
+        checkReadable(file);
         try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
             return read(in, file.toString());
         } catch (IOException e) {
             throw new ConvgridException(ErrorKind.BAD_DATA, "cannot read opacity table " + file + ": "
-                    + e.getClass().getSimpleName() + (e.getMessage() == null ? "" : " " + e.getMessage()), file);
+                    + (e instanceof java.nio.file.AccessDeniedException ? "permission denied"
+                    : e instanceof java.nio.charset.CharacterCodingException ? "it is not UTF-8 text"
+                    : "the file could not be read"), file);
+        }
+    }
+
+    /** Only a regular file under {@link #MAX_FILE_BYTES}: a device or a pipe would never end, a huge file is a mistake. */
+    private static void checkReadable(Path file) {
+        String problem = null;
+        try {
+            if (!Files.exists(file)) {
+                problem = "no such file";
+            } else if (Files.isDirectory(file)) {
+                problem = "it is a directory, not a file";
+            } else if (!Files.isRegularFile(file)) {
+                problem = "it is not a regular file (a device or a pipe?)";
+            } else if (Files.size(file) > MAX_FILE_BYTES) {
+                problem = "it holds " + Files.size(file) + " bytes, more than the limit of " + MAX_FILE_BYTES;
+            }
+        } catch (IOException | SecurityException e) {
+            problem = "the file could not be examined";
+        }
+        if (problem != null) {
+            throw new ConvgridException(ErrorKind.BAD_DATA, "cannot read opacity table " + file + ": " + problem,
+                    file);
         }
     }
 
@@ -96,7 +128,11 @@ public final class OpacityTableReader {
     }
 
     private TabulatedOpacity parse() {
-        expect(MAGIC);
+        if (pos >= tokens.size() || !tokens.get(pos).equals(MAGIC)) {
+            // the content of a file that is no table is not echoed: it may be anything (a password file...)
+            throw fail("not an opacity table: the first word must be '" + MAGIC + "'");
+        }
+        pos++;
         int version = (int) number();
         if (version != VERSION) {
             throw fail("unsupported version " + version);
@@ -108,7 +144,13 @@ public final class OpacityTableReader {
         double[] logR = grid("log10_r");
         double[] xs = grid("hydrogen");
         double[] zs = grid("metals");
-        double[][][] values = new double[xs.length * zs.length][][];
+        long blocks = (long) xs.length * zs.length;
+        if (blocks > MAX_BLOCKS) {
+            throw fail(xs.length + " hydrogen x " + zs.length + " metals values declare " + blocks
+                    + " tables, more than the limit of " + MAX_BLOCKS);
+        }
+        long perBlock = (long) logT.length * logR.length;
+        double[][][] values = new double[(int) blocks][][];
         while (!peek("end")) {
             expect("table");
             int ix = indexOf(xs, number(), "X");
@@ -116,6 +158,10 @@ public final class OpacityTableReader {
             int k = ix * zs.length + iz;
             if (values[k] != null) {
                 throw fail("second table for X = " + xs[ix] + ", Z = " + zs[iz]);
+            }
+            if (perBlock > tokens.size() - pos) {
+                throw fail("the table for X = " + xs[ix] + ", Z = " + zs[iz] + " needs " + perBlock
+                        + " numbers but the file has only " + (tokens.size() - pos) + " words left");
             }
             values[k] = new double[logT.length][logR.length];
             for (int i = 0; i < logT.length; i++) {
@@ -138,6 +184,10 @@ public final class OpacityTableReader {
         double count = number();
         if (count < 1 || count != Math.rint(count)) {
             throw fail(key + " count must be a positive integer");
+        }
+        if (count > MAX_AXIS_VALUES || count > tokens.size() - pos) {
+            throw fail(key + " declares " + (long) Math.min(count, Long.MAX_VALUE) + " values; at most "
+                    + Math.min(MAX_AXIS_VALUES, tokens.size() - pos) + " are possible here");
         }
         double[] g = new double[(int) count];
         for (int i = 0; i < g.length; i++) {
@@ -164,7 +214,7 @@ public final class OpacityTableReader {
 
     private void expect(String word) {
         if (!peek(word)) {
-            throw fail("expected '" + word + "', found '" + tokens.get(pos) + "'");
+            throw fail("expected '" + word + "', found '" + shortToken(tokens.get(pos)) + "'");
         }
         pos++;
     }
@@ -177,13 +227,19 @@ public final class OpacityTableReader {
         try {
             double v = Double.parseDouble(t);
             if (!Double.isFinite(v)) {
-                throw fail("non-finite number '" + t + "'");
+                throw fail("non-finite number '" + shortToken(t) + "'");
             }
             pos++;
             return v;
         } catch (NumberFormatException e) {
-            throw fail("expected a number, found '" + t + "'");
+            throw fail("expected a number, found '" + shortToken(t) + "'");
         }
+    }
+
+    /** A word of the file as quoted in a message: short, without control characters. */
+    private static String shortToken(String t) {
+        String clean = t.replaceAll("\\p{Cntrl}", "?");
+        return clean.length() <= 24 ? clean : clean.substring(0, 24) + "...";
     }
 
     private ConvgridException fail(String what) {
