@@ -1,5 +1,6 @@
 package org.convgrid.cli;
 
+import org.convgrid.cli.run.TerminalText;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import org.convgrid.engine.error.ConvgridException;

@@ -1,5 +1,6 @@
 package org.convgrid.cli;
 
+import org.convgrid.cli.run.TerminalText;
 import picocli.CommandLine;
 import picocli.CommandLine.IParameterExceptionHandler;
 import picocli.CommandLine.ParameterException;

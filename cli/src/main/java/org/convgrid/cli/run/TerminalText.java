@@ -1,4 +1,4 @@
-package org.convgrid.cli;
+package org.convgrid.cli.run;
 
 /**
  * Text from users or files on its way to the terminal: control characters (escape sequences that could move the
