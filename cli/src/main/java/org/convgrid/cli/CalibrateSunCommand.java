@@ -66,6 +66,7 @@ final class CalibrateSunCommand implements Callable<Integer> {
             throw new UsageException("--z-over-x must lie in (0, 0.1), got " + metalsToHydrogen);
         }
         Path target = main.context().resolve(preset);
+        OutputTargets.requireWritableFile("--preset", target);
         CalibrationSettings settings = CalibrationSettings.DEFAULT.withAge(ageGyr * Constants.GYR)
                 .withMetalsToHydrogen(metalsToHydrogen).withAtmosphere(atmosphere).withSettling(!noSettling);
         int[] count = {0};

@@ -36,6 +36,8 @@ final class CheckCommand implements Callable<Integer> {
         int n = RunCommand.threads(threads);
         GridFile file = GridFiles.read(grid, context);
         Path runDir = context.resolve(Path.of(file.spec().outputDir()));
+        // the same refusal as 'run' gives, so a grid that passes check does not fail at the start of run
+        OutputTargets.requireWritableDirectory("the run directory (output dir)", runDir);
         double cost = ASSUMED_SECONDS_PER_MODEL;
         String source = "a rough default; a finished run records its own median";
         OptionalDouble measured = new RunDirectory(runDir).measuredSecondsPerModel();

@@ -65,9 +65,23 @@ public final class ConvgridMain implements Runnable {
         cli.setOut(out);
         cli.setErr(err);
         cli.setCaseInsensitiveEnumValuesAllowed(true);
+        cli.registerConverter(java.nio.file.Path.class, ConvgridMain::path);
         cli.setParameterExceptionHandler(new UsageErrorHandler());
         cli.setExecutionExceptionHandler(new FailureHandler());
         return cli;
+    }
+
+    /** A path typed on the command line; an unusable one is refused with words rather than the JDK's. */
+    private static java.nio.file.Path path(String text) {
+        if (text.isEmpty()) {
+            throw new CommandLine.TypeConversionException("an empty path");
+        }
+        try {
+            return java.nio.file.Path.of(text);
+        } catch (java.nio.file.InvalidPathException e) {
+            throw new CommandLine.TypeConversionException("not a usable path (it contains a NUL or another "
+                    + "character the file system refuses)");
+        }
     }
 
     public static void main(String[] args) {

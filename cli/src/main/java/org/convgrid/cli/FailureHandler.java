@@ -1,5 +1,6 @@
 package org.convgrid.cli;
 
+import org.convgrid.cli.run.TerminalText;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import org.convgrid.engine.error.ConvgridException;
@@ -29,15 +30,17 @@ final class FailureHandler implements IExecutionExceptionHandler {
         int code;
         if (ex instanceof ConvgridException failure) {
             // a grid file's message is already one "file:line:column: message" line per problem
-            cmd.getErr().println(failure.kind() == ErrorKind.BAD_GRID_FILE ? failure.getMessage()
-                    : "convgrid: " + failure.getMessage());
+            cmd.getErr().println(TerminalText.clean(failure.kind() == ErrorKind.BAD_GRID_FILE ? failure.getMessage()
+                    : "convgrid: " + failure.getMessage()));
             code = failure.kind().isUsageError() ? ExitCodes.USAGE : ExitCodes.FAILURE;
         } else if (ex instanceof IOException || ex instanceof UncheckedIOException) {
-            cmd.getErr().println("convgrid: " + IoMessages.reason(ex instanceof IOException io ? io
-                    : ((UncheckedIOException) ex).getCause()));
+            cmd.getErr().println("convgrid: " + TerminalText.clean(IoMessages.reason(ex instanceof IOException io ? io
+                    : ((UncheckedIOException) ex).getCause())));
             code = ExitCodes.FAILURE;
         } else {
-            cmd.getErr().println("convgrid: internal error: " + ex);
+            // a software fault: no class name or raw message for the user, the trace with --verbose
+            cmd.getErr().println("convgrid: internal error (a fault in convgrid, not in your input); please "
+                    + "report it with the command line");
             if (!verbose) {
                 cmd.getErr().println("(run again with --verbose for the stack trace)");
             }

@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.convgrid.grids.GridFile;
+import org.convgrid.grids.InputFileCheck;
 import org.convgrid.grids.yaml.GridFileReader;
 import org.convgrid.survey.IoMessages;
 
@@ -20,11 +21,15 @@ final class GridFiles {
      */
     static GridFile read(Path given, CommandContext context) {
         Path file = context.resolve(given);
+        java.util.Optional<String> unreadable = InputFileCheck.problem(file, GridFileReader.MAX_FILE_BYTES);
+        if (unreadable.isPresent() && !Files.exists(file)) {
+            throw new UsageException("grid file " + given + " not found");
+        }
+        if (unreadable.isPresent()) {
+            throw new UsageException("cannot read grid file " + given + ": " + unreadable.get());
+        }
         byte[] bytes;
         try {
-            if (!Files.isRegularFile(file)) {
-                throw new UsageException("grid file " + given + " not found");
-            }
             bytes = Files.readAllBytes(file);
         } catch (IOException e) {
             throw new UsageException("cannot read grid file " + given + ": " + IoMessages.reason(e));

@@ -9,6 +9,7 @@ import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.survey.FinishedRun;
 import org.convgrid.survey.RunDirectory;
 import org.convgrid.survey.RunFinishing;
+import org.convgrid.survey.RunLock;
 import org.convgrid.survey.ShardMerger;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -38,8 +39,12 @@ final class MergeCommand implements Callable<Integer> {
         CommandContext context = parent.context();
         List<Path> dirs = shards.stream().map(context::resolve).toList();
         RunDirectory target = new RunDirectory(context.resolve(out));
-        FinishedRun run = new ShardMerger(ToolVersion.current(), Clock.tickSeconds(java.time.ZoneOffset.UTC))
-                .merge(dirs, target, context.finishers());
+        FinishedRun run;
+        try (RunLock lock = RunLock.acquire(target.root())) {
+            Locks.reportStale(lock, parent.err());
+            run = new ShardMerger(ToolVersion.current(), Clock.tickSeconds(java.time.ZoneOffset.UTC))
+                    .merge(dirs, target, context.finishers());
+        }
         Map<ModelStatus, Long> counts = RunFinishing.countByStatus(run.catalogue());
         parent.out().println(target.root() + ": merged " + dirs.size() + " shard directories, "
                 + run.catalogue().size() + " models (" + RunCommand.describe(counts) + ")");

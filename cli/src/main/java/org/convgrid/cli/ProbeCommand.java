@@ -44,17 +44,23 @@ final class ProbeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        requirePositive("--temp-k", temperature);
-        requirePositive("--density-cgs", density);
+        requireWithin("--temp-k", temperature, MIN_TEMPERATURE_K, MAX_TEMPERATURE_K, "K");
+        requireWithin("--density-cgs", density, MIN_DENSITY_CGS, MAX_DENSITY_CGS, "g/cm^3");
         requirePositive("--opacity-factor", opacityFactor);
         if (!(hydrogen >= 0 && hydrogen <= 1 && metals >= 0 && metals < 0.1 && hydrogen + metals <= 1)) {
             throw new UsageException(String.format(
                     "need 0 <= X <= 1, 0 <= Z < 0.1 and X + Z <= 1; got X = %s, Z = %s", hydrogen, metals));
         }
         Composition composition = Composition.scaledSolar(hydrogen, metals);
-        MicrophysicsPoint point = MicrophysicsPoint.evaluate(StandardPhysics.equationOfState(),
-                StandardPhysics.opacity(opacityFactor), StandardPhysics.nuclearNetwork(), density, temperature,
-                composition);
+        MicrophysicsPoint point;
+        try {
+            point = MicrophysicsPoint.evaluate(StandardPhysics.equationOfState(),
+                    StandardPhysics.opacity(opacityFactor), StandardPhysics.nuclearNetwork(), density, temperature,
+                    composition);
+        } catch (org.convgrid.engine.error.ConvgridException e) {
+            throw new UsageException(String.format(java.util.Locale.ROOT, "the microphysics is not defined at "
+                    + "T = %.4g K, rho = %.4g g/cm^3 (X = %s, Z = %s)", temperature, density, hydrogen, metals));
+        }
         MicrophysicsPointWriter writer = new MicrophysicsPointWriter();
         if (format == OutputFormat.CSV) {
             writer.writeCsv(point, spec.commandLine().getOut());
@@ -63,6 +69,22 @@ final class ProbeCommand implements Callable<Integer> {
         }
         spec.commandLine().getOut().flush();
         return ExitCodes.OK;
+    }
+
+    /**
+     * The points the probe answers for: the temperatures and densities of main-sequence stars from the photosphere
+     * to the centre, with margin (common practice); outside them the equation of state gives no finite answer.
+     */
+    static final double MIN_TEMPERATURE_K = 1.0e3;
+    static final double MAX_TEMPERATURE_K = 1.0e9;
+    static final double MIN_DENSITY_CGS = 1.0e-14;
+    static final double MAX_DENSITY_CGS = 1.0e7;
+
+    private static void requireWithin(String option, double value, double low, double high, String unit) {
+        if (!(value >= low && value <= high)) {
+            throw new UsageException(String.format(java.util.Locale.ROOT, "%s must lie in [%.0e, %.0e] %s, got %s",
+                    option, low, high, unit, value));
+        }
     }
 
     private static void requirePositive(String option, double value) {

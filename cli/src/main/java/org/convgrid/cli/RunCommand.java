@@ -17,6 +17,7 @@ import org.convgrid.output.RunLayout;
 import org.convgrid.survey.GridRun;
 import org.convgrid.survey.RunDirectory;
 import org.convgrid.survey.RunFinishing;
+import org.convgrid.survey.RunLock;
 import org.convgrid.survey.ShardChoice;
 import org.convgrid.survey.TrackFiles;
 import org.convgrid.survey.parallel.ParallelWork;
@@ -84,42 +85,46 @@ final class RunCommand implements Callable<Integer> {
         Shard chosen = ShardChoice.choose(shard, context.environment()).orElse(null);
         RunDirectory dir = new RunDirectory(context.resolve(out != null ? out
                 : RunDirectory.defaultPath(file.spec().outputDir(), chosen)));
+        OutputTargets.requireWritableDirectory("--out", dir.root());
         boolean evolves = file.spec().ages().evolves();
         TrackFiles tracks = new TrackFiles(dir.layout());
         ChunkSolver solver = evolves ? context.solvers().solverFor(file.spec(), tracks)
                 : context.solvers().solverFor(file.spec());
         GridRun runner = new GridRun(ToolVersion.current(), Clock.tickSeconds(java.time.ZoneOffset.UTC));
-        long start = System.nanoTime();
-        GridRun.Plan plan = runner.prepare(new GridRun.Settings(file, dir, n, chosen, resume, force));
-        PrintWriter err = parent.err();
-        ProgressReporter reporter = quiet ? null : new ProgressReporter(err, context.terminal(), System::nanoTime);
-        if (!quiet) {
-            err.println("convgrid: " + startLine(plan, count, n));
-            err.flush();
+        try (RunLock lock = RunLock.acquire(dir.root())) {
+            Locks.reportStale(lock, parent.err());
+            long start = System.nanoTime();
+            GridRun.Plan plan = runner.prepare(new GridRun.Settings(file, dir, n, chosen, resume, force));
+            PrintWriter err = parent.err();
+            ProgressReporter reporter = quiet ? null : new ProgressReporter(err, context.terminal(), System::nanoTime);
+            if (!quiet) {
+                err.println("convgrid: " + startLine(plan, count, n));
+                err.flush();
+            }
+            GridRun.Result result;
+            try (ParallelWork work = new ParallelWork(n)) {
+                result = runner.execute(plan, work, solver, reporter == null ? ProgressListener.NONE : reporter,
+                        context.finishers());
+            }
+            if (reporter != null) {
+                reporter.finish();
+            }
+            if (tracks.failure() != null) {
+                throw tracks.failure();
+            }
+            double seconds = (System.nanoTime() - start) * 1e-9;
+            parent.out().println(dir.root() + ": " + result.run().catalogue().size() + " models in "
+                    + RunLayout.CATALOGUE + " (" + describe(result.counts()) + "); " + result.computed()
+                    + " computed now in " + Durations.describe(seconds));
+            parent.out().flush();
+            if (RunFinishing.someModelsFailed(result.counts())) {
+                err.println("convgrid: some models failed or did not converge; their status_detail in "
+                        + RunLayout.CATALOGUE + " says why");
+                err.flush();
+                return ExitCodes.SOME_MODELS_FAILED;
+            }
+            return ExitCodes.OK;
         }
-        GridRun.Result result;
-        try (ParallelWork work = new ParallelWork(n)) {
-            result = runner.execute(plan, work, solver, reporter == null ? ProgressListener.NONE : reporter,
-                    context.finishers());
-        }
-        if (reporter != null) {
-            reporter.finish();
-        }
-        if (tracks.failure() != null) {
-            throw tracks.failure();
-        }
-        double seconds = (System.nanoTime() - start) * 1e-9;
-        parent.out().println(dir.root() + ": " + result.run().catalogue().size() + " models in "
-                + RunLayout.CATALOGUE + " (" + describe(result.counts()) + "); " + result.computed()
-                + " computed now in " + Durations.describe(seconds));
-        parent.out().flush();
-        if (RunFinishing.someModelsFailed(result.counts())) {
-            err.println("convgrid: some models failed or did not converge; their status_detail in "
-                    + RunLayout.CATALOGUE + " says why");
-            err.flush();
-            return ExitCodes.SOME_MODELS_FAILED;
-        }
-        return ExitCodes.OK;
     }
 
     /** The thread count asked for, or the available processors. */

@@ -91,12 +91,25 @@ final class StarCommand implements Callable<Integer> {
                     + "Default ${DEFAULT-VALUE}.")
     OutputFormat format;
 
+    /**
+     * Helium mass fractions accepted: from below the primordial value (0.2485, Aver et al. 2015, from memory) to
+     * above the helium-rich populations of globular clusters (Y about 0.38-0.40, Piotto et al. 2007, from memory);
+     * outside, the zero-age solver has no physical model to find.
+     */
+    static final double MIN_HELIUM = 0.2;
+    static final double MAX_HELIUM = 0.45;
+
     @Override
     public Integer call() throws IOException {
         PhysicsOptions options = options();
         double y = helium != null ? helium : HeliumLaw.DEFAULT.helium(metals);
-        if (!(y >= 0 && y + metals < 1)) {
-            throw new UsageException(String.format("need Y >= 0 and Y + Z < 1; got Y = %s, Z = %s", y, metals));
+        if (!(y >= MIN_HELIUM && y <= MAX_HELIUM)) {
+            throw new UsageException("--y must lie in [" + MIN_HELIUM + ", " + MAX_HELIUM + "] (helium mass "
+                    + "fraction: no star has less than the primordial value, about 0.245, and the most helium-rich "
+                    + "populations known reach about 0.4), got " + y);
+        }
+        if (profile != null) {
+            OutputTargets.requireWritableFile("--profile", main.context().resolve(profile));
         }
         String id = String.format(java.util.Locale.ROOT, "star-m%.4f-z%.5f", massMsun, metals);
         ModelRequest request = new ModelRequest(id, massMsun * Constants.M_SUN, metals, y, ageGyr * Constants.GYR,
@@ -152,7 +165,12 @@ final class StarCommand implements Callable<Integer> {
         OpacityChoice table = OpacityChoice.BUILT_IN;
         if (opacityTable != null) {
             Path resolved = main.context().resolve(opacityTable);
-            table = OpacityChoice.table(resolved.toString(), OpacityTableReader.read(resolved));
+            try {
+                table = OpacityChoice.table(resolved.toString(), OpacityTableReader.read(resolved));
+            } catch (org.convgrid.engine.error.ConvgridException e) {
+                // a bad table is bad input, as the same table named in a grid file is
+                throw new UsageException("--opacity-table: " + e.getMessage());
+            }
         }
         return new PhysicsOptions(mixingLength, 0.0, criterion, opacityFactor, table, atmosphere);
     }

@@ -6,6 +6,7 @@ import org.convgrid.cli.run.Durations;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.output.RunLayout;
 import org.convgrid.survey.RunDirectory;
+import org.convgrid.survey.RunLock;
 import org.convgrid.survey.RunFinishing;
 import org.convgrid.survey.refine.TransitionRefiner;
 import org.convgrid.survey.refine.TransitionTables;
@@ -85,7 +86,12 @@ final class TransitionsCommand implements Callable<Integer> {
         long start = System.nanoTime();
         TransitionTables.Update update;
         if (refine) {
-            try (ParallelWork work = new ParallelWork(n)) {
+            // a missing directory is reported by the tables' reader; an existing one is owned for the refinement
+            try (RunLock lock = java.nio.file.Files.isDirectory(dir.root()) ? RunLock.acquire(dir.root()) : null;
+                 ParallelWork work = new ParallelWork(n)) {
+                if (lock != null) {
+                    Locks.reportStale(lock, parent.err());
+                }
                 update = TransitionTables.refine(dir, finder,
                         new TransitionRefiner(context.lines(), finder, tolerance, work, allCrossings),
                         context.finishers());

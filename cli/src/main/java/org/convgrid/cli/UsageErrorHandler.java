@@ -1,5 +1,6 @@
 package org.convgrid.cli;
 
+import org.convgrid.cli.run.TerminalText;
 import picocli.CommandLine;
 import picocli.CommandLine.IParameterExceptionHandler;
 import picocli.CommandLine.ParameterException;
@@ -10,7 +11,7 @@ final class UsageErrorHandler implements IParameterExceptionHandler {
     @Override
     public int handleParseException(ParameterException ex, String[] args) {
         CommandLine cmd = ex.getCommandLine();
-        cmd.getErr().println("convgrid: " + ex.getMessage() + " (see '" + cmd.getCommandSpec().qualifiedName()
+        cmd.getErr().println("convgrid: " + TerminalText.clean(ex.getMessage()) + " (see '" + cmd.getCommandSpec().qualifiedName()
                 + " --help')");
         return ExitCodes.USAGE;
     }

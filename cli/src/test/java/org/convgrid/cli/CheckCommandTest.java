@@ -75,4 +75,18 @@ class CheckCommandTest {
         assertThat(cli.execute("merge", "--help").out()).contains("--out=DIR", "(path;");
         assertThat(cli.execute("check", "--help").out()).contains("--threads=N", "(count;");
     }
+
+    @Test
+    void checkRefusesAnOutputDirectoryThatRunWouldRefuse() throws Exception {
+        java.nio.file.Files.writeString(work.resolve("plain-file"), "x");
+        for (String dir : new String[] {"plain-file", "plain-file/below", "/proc/convgrid-check"}) {
+            Path grid = CliHarness.writeGrid(work, "survey.yaml",
+                    CliHarness.GRID.replace("dir: runs/test-survey", "dir: " + dir));
+            CliHarness.Execution check = CliHarness.in(work, FakeChunkSolver.fast()).execute("check", grid.toString());
+            assertThat(check.code()).as(dir).isEqualTo(2);
+            assertThat(check.err()).contains("the run directory (output dir)");
+            CliHarness.Execution run = CliHarness.in(work, FakeChunkSolver.fast()).execute("run", grid.toString());
+            assertThat(run.code()).as(dir).isEqualTo(2);
+        }
+    }
 }

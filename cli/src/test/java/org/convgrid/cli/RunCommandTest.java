@@ -118,10 +118,11 @@ class RunCommandTest {
         Path grid = grid();
         Path file = Files.writeString(work.resolve("plain-file"), "not a directory");
         CliHarness.Execution failed = run("run", grid.toString(), "--out", "plain-file/deeper/run", "--quiet");
-        assertThat(failed.code()).isEqualTo(1);
+        // an output directory that cannot be made is the user's choice to correct: exit 2, before any work
+        assertThat(failed.code()).isEqualTo(2);
         assertThat(failed.err().strip().lines()).hasSize(1);
-        assertThat(failed.err()).startsWith("convgrid: cannot create run directory " + file.resolve("deeper/run"))
-                .contains("Not a directory");
+        assertThat(failed.err()).startsWith("convgrid: --out " + file.resolve("deeper/run") + " cannot be created")
+                .contains(file + " is not a directory");
         assertThat(Files.readString(file)).isEqualTo("not a directory");
         try (var listing = Files.list(work)) {
             assertThat(listing.map(p -> p.getFileName().toString())).containsExactlyInAnyOrder("survey.yaml",

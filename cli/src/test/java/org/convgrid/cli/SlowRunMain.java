@@ -16,9 +16,10 @@ public final class SlowRunMain {
     }
 
     public static void main(String[] args) {
-        FakeChunkSolver solver = new FakeChunkSolver(Set.of(), MILLIS_PER_MODEL);
+        FakeChunkSolver solver = new FakeChunkSolver(Set.of(),
+                Long.getLong("convgrid.test.millisPerModel", MILLIS_PER_MODEL));
         CommandContext context = new CommandContext(grid -> solver, List.of(), Map.of(), Path.of(""), false);
-        ConvgridMain.commandLine(new PrintWriter(System.out, true), new PrintWriter(System.err, true), context)
-                .execute(args);
+        System.exit(ConvgridMain.commandLine(new PrintWriter(System.out, true), new PrintWriter(System.err, true),
+                context).execute(args));
     }
 }

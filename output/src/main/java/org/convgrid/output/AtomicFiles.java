@@ -53,13 +53,17 @@ public final class AtomicFiles {
         Path absolute = target.toAbsolutePath();
         Path dir = absolute.getParent();
         Files.createDirectories(dir);
-        Path temp = Files.createTempFile(dir, "." + absolute.getFileName(), ".tmp");
+        Path temp = newTemporary(dir, absolute.getFileName().toString());
         try {
-            try (FileChannel channel = FileChannel.open(temp, StandardOpenOption.WRITE,
-                    StandardOpenOption.TRUNCATE_EXISTING); OutputStream out = Channels.newOutputStream(channel)) {
+            try (FileChannel channel = FileChannel.open(temp, StandardOpenOption.WRITE);
+                 OutputStream out = Channels.newOutputStream(channel)) {
                 body.write(out);
                 out.flush();
                 channel.force(true);
+            } catch (IOException | RuntimeException e) {
+                // name the file the user knows, not the temporary one (which is removed below)
+                throw new IOException("cannot write " + absolute + ": " + (e.getMessage() == null
+                        ? "the write failed" : e.getMessage()), e);
             }
             try {
                 Files.move(temp, absolute, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
@@ -68,6 +72,26 @@ public final class AtomicFiles {
             }
         } finally {
             Files.deleteIfExists(temp);
+        }
+    }
+
+    /**
+     * A new empty temporary file beside the target. It is created without explicit permissions, so the process's
+     * umask applies as it does to every other output (a temporary file of the JDK's would stay 0600 after the rename
+     * and keep collaborators from reading the run).
+     */
+    private static Path newTemporary(Path dir, String targetName) throws IOException {
+        for (int attempt = 0; ; attempt++) {
+            Path temp = dir.resolve("." + targetName + "." + Long.toUnsignedString(
+                    java.util.concurrent.ThreadLocalRandom.current().nextLong(), 36) + ".tmp");
+            try {
+                FileChannel.open(temp, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE).close();
+                return temp;
+            } catch (java.nio.file.FileAlreadyExistsException e) {
+                if (attempt >= 100) {
+                    throw e;
+                }
+            }
         }
     }
 }

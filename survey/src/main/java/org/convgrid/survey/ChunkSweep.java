@@ -99,7 +99,10 @@ final class ChunkSweep {
             return outcomes;
         } catch (RuntimeException e) {
             List<ModelOutcome> failed = new ArrayList<>(chunk.size());
-            String reason = e.getClass().getSimpleName() + ": " + e.getMessage();
+            // the catalogue's status_detail is read by people: our own failures carry a worded message, anything
+            // else is a fault of the solver, said so without a Java class name
+            String reason = e instanceof org.convgrid.engine.error.ConvgridException ? e.getMessage()
+                    : "internal error in the solver; the models of this chunk were not computed";
             for (ModelRequest r : chunk) {
                 failed.add(new ModelOutcome.Failed(r, ModelStatus.FAILED, reason, 0));
             }

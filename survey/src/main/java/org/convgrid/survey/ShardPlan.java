@@ -20,8 +20,14 @@ import org.convgrid.grids.GridSpec;
  */
 public record ShardPlan(GridSpec grid, Shard shard, int massesPerChunk) implements Iterable<ModelRequest> {
 
-    /** How many models the shard owns (walks the grid once). */
+    /**
+     * How many models the shard owns: from the axes for the whole grid (at once, whatever its size), by walking the
+     * grid once for a share of it.
+     */
     public long count() {
+        if (shard.count() == 1) {
+            return grid.count();
+        }
         long n = 0;
         for (Iterator<ModelRequest> it = iterator(); it.hasNext(); it.next()) {
             n++;

@@ -30,7 +30,7 @@ public final class GridSummary {
                                      String runDirectory) {
         GridSpec g = file.spec();
         List<String> lines = new ArrayList<>();
-        lines.add("grid:          " + g.title() + " (" + file.name() + ")");
+        lines.add("grid:          " + TerminalText.clean(g.title() + " (" + file.name() + ")"));
         lines.add("masses:        " + axis(g.massesMsun(), "Msun"));
         lines.add("metallicities: " + g.metallicities().size() + ": " + g.metallicities().stream()
                 .map(p -> "Z=" + n(p.z()) + " Y=" + n(p.y())).collect(Collectors.joining(", ")));

@@ -34,7 +34,14 @@ final class AxisValues {
         if (items == null) {
             return null;
         }
+        if (items.size() > MassAxisReader.MAX_AXIS_POINTS) {
+            reader.problem(node, GridProblemKind.OUT_OF_RANGE, what + " lists " + items.size()
+                    + " values, more than the limit of " + MassAxisReader.MAX_AXIS_POINTS + " per axis");
+            return null;
+        }
         List<Double> values = new ArrayList<>();
+        // seen values in a hash set: the duplicate check stays linear in the length of the list
+        java.util.Set<Double> seen = new java.util.HashSet<>();
         boolean ok = true;
         for (Node item : items) {
             Double v = reader.number(item, what);
@@ -43,7 +50,7 @@ final class AxisValues {
             } else if (!range.contains(v)) {
                 reader.problem(item, GridProblemKind.OUT_OF_RANGE, what + " must lie in " + range + ", got " + v);
                 ok = false;
-            } else if (order != Order.ANY && values.contains(v)) {
+            } else if (order != Order.ANY && seen.contains(v)) {
                 reader.problem(item, GridProblemKind.DUPLICATE, "duplicate " + what + " " + v);
                 ok = false;
             } else if (order == Order.INCREASING && !values.isEmpty() && v < values.get(values.size() - 1)) {
@@ -53,6 +60,7 @@ final class AxisValues {
             }
             if (v != null) {
                 values.add(v);
+                seen.add(v);
             }
         }
         return ok ? values : null;

@@ -38,6 +38,13 @@ public final class GridFileReader {
 
     /** Oldest age accepted, Gyr: older than the universe, so a larger value is a unit mistake. */
     public static final double MAX_AGE_GYR = 20.0;
+    /**
+     * Largest grid file, bytes. A grid file is a few dozen lines; the limit keeps the copy of the grid that the
+     * manifest records well inside what the manifest reader accepts, so every run directory stays readable.
+     */
+    public static final int MAX_FILE_BYTES = 1024 * 1024;
+    /** Deepest nesting of lists and mappings accepted (a grid file needs four levels). */
+    public static final int MAX_NESTING_DEPTH = 64;
     /** Alias expansions allowed in one file (defends against alias bombs). */
     private static final int MAX_ALIASES = 50;
 
@@ -52,6 +59,11 @@ public final class GridFileReader {
      * @throws UncheckedIOException when the file cannot be read
      */
     public GridFile read(Path path) {
+        Optional<String> unreadable = org.convgrid.grids.InputFileCheck.problem(path, MAX_FILE_BYTES);
+        if (unreadable.isPresent()) {
+            throw new GridFileException(List.of(new GridProblem(path.toString(), 1, 1,
+                    GridProblemKind.UNREADABLE_FILE, "cannot read the grid file: " + unreadable.get())));
+        }
         try {
             return read(path.toString(), Files.readAllBytes(path));
         } catch (IOException e) {
@@ -66,6 +78,11 @@ public final class GridFileReader {
      * @throws GridFileException listing every problem in the file
      */
     public GridFile read(String name, byte[] bytes) {
+        if (bytes.length > MAX_FILE_BYTES) {
+            throw new GridFileException(List.of(new GridProblem(name, 1, 1, GridProblemKind.UNREADABLE_FILE,
+                    "the grid file holds " + bytes.length + " bytes, more than the limit of " + MAX_FILE_BYTES
+                    + " bytes")));
+        }
         String text;
         try {
             text = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
@@ -102,6 +119,12 @@ public final class GridFileReader {
         LoadSettings settings = LoadSettings.builder().setLabel(name).setMaxAliasesForCollections(MAX_ALIASES)
                 .setAllowRecursiveKeys(false).build();
         try {
+            Optional<org.snakeyaml.engine.v2.exceptions.Mark> tooDeep = tooDeep(settings, text);
+            if (tooDeep.isPresent()) {
+                reader.problem(tooDeep, GridProblemKind.SYNTAX, "lists and mappings are nested more than "
+                        + MAX_NESTING_DEPTH + " levels deep here; a grid file needs only a few");
+                return Optional.empty();
+            }
             return new Compose(settings).composeString(text);
         } catch (MarkedYamlEngineException e) {
             String context = e.getContext() == null ? "" : e.getContext() + ": ";
@@ -113,8 +136,28 @@ public final class GridFileReader {
         return Optional.empty();
     }
 
+    /**
+     * Where the nesting first exceeds {@link #MAX_NESTING_DEPTH}, found on the parser's event stream (which does not
+     * recurse) before the nodes are composed (which does, and would overflow the stack on a hostile file).
+     */
+    static Optional<org.snakeyaml.engine.v2.exceptions.Mark> tooDeep(LoadSettings settings, String text) {
+        int depth = 0;
+        for (org.snakeyaml.engine.v2.events.Event event
+                : new org.snakeyaml.engine.v2.api.lowlevel.Parse(settings).parseString(text)) {
+            if (event instanceof org.snakeyaml.engine.v2.events.CollectionStartEvent) {
+                depth++;
+                if (depth > MAX_NESTING_DEPTH) {
+                    return event.getStartMark();
+                }
+            } else if (event instanceof org.snakeyaml.engine.v2.events.CollectionEndEvent) {
+                depth--;
+            }
+        }
+        return Optional.empty();
+    }
+
     private static GridSpec spec(Node root, NodeReader reader) {
-        MappingNode map = reader.mapping(root, "the grid file");
+        MappingNode map = reader.documentMapping(root, "the grid file");
         if (map == null) {
             return null;
         }
@@ -142,6 +185,11 @@ public final class GridFileReader {
             MappingFields out = output == null ? null : new MappingFields(output, "output", OUTPUT_KEYS, reader);
             if (out != null && out.has("dir")) {
                 outputDir = reader.text(out.value("dir"), "output dir");
+                if (outputDir != null && !validPath(outputDir)) {
+                    reader.problem(out.value("dir"), GridProblemKind.WRONG_TYPE,
+                            "output dir is not a valid directory name (a NUL character?)");
+                    outputDir = null;
+                }
             }
             if (out != null && out.has("profiles")) {
                 profiles = reader.bool(out.value("profiles"), "output profiles");
@@ -185,6 +233,15 @@ public final class GridFileReader {
         }
         List<Double> gyr = AxisValues.increasing(fields.value("gyr"), "age", Range.closed(0.0, MAX_AGE_GYR), reader);
         return gyr == null ? null : AgeAxis.gyr(gyr);
+    }
+
+    private static boolean validPath(String text) {
+        try {
+            Path.of(text);
+            return true;
+        } catch (java.nio.file.InvalidPathException e) {
+            return false;
+        }
     }
 
     /** The file name without directories and without its .yaml or .yml extension. */

@@ -59,6 +59,19 @@ final class NodeReader {
         return null;
     }
 
+    /**
+     * The top of a document, which must be a mapping. A document that is one plain text is not quoted: it is most
+     * likely some other file given by mistake, whose content is none of the message's business.
+     */
+    MappingNode documentMapping(Node node, String what) {
+        if (node instanceof ScalarNode scalar && !isNull(node)) {
+            problem(node, GridProblemKind.WRONG_TYPE, what + " must be a mapping of keys to values (key: value "
+                    + "lines), got plain text; is it the right file?");
+            return null;
+        }
+        return mapping(node, what);
+    }
+
     /** The items of a sequence, or a lone scalar as a one-item list; null (with a problem) otherwise. */
     List<Node> items(Node node, String what) {
         if (node instanceof SequenceNode sequence) {
@@ -75,15 +88,27 @@ final class NodeReader {
         return null;
     }
 
+    /** Largest decimal exponent of a number in a grid file (a double reaches about 308). */
+    static final int MAX_DECIMAL_EXPONENT = 300;
+
     BigDecimal decimal(Node node, String what) {
         String text = plainScalar(node, what, "a number");
         if (text == null) {
             return null;
         }
         try {
-            return new BigDecimal(text);
+            BigDecimal value = new BigDecimal(text);
+            // the decimal exponent; beyond a double's range nothing in a grid makes sense, and exact arithmetic on
+            // such a number (1e-999999999) would not end
+            long exponent = (long) value.precision() - value.scale() - 1;
+            if (value.signum() != 0 && Math.abs(exponent) > MAX_DECIMAL_EXPONENT) {
+                problem(node, GridProblemKind.OUT_OF_RANGE, what + " must lie between 1e-" + MAX_DECIMAL_EXPONENT
+                        + " and 1e" + MAX_DECIMAL_EXPONENT + " in size, got '" + quoted(text) + "'");
+                return null;
+            }
+            return value;
         } catch (NumberFormatException e) {
-            problem(node, GridProblemKind.WRONG_TYPE, what + " must be a number, got '" + text + "'");
+            problem(node, GridProblemKind.WRONG_TYPE, what + " must be a number, got '" + NodeReader.quoted(text) + "'");
             return null;
         }
     }
@@ -114,7 +139,7 @@ final class NodeReader {
         if (text.equals("true") || text.equals("false")) {
             return Boolean.valueOf(text);
         }
-        problem(node, GridProblemKind.WRONG_TYPE, what + " must be true or false, got '" + text + "'");
+        problem(node, GridProblemKind.WRONG_TYPE, what + " must be true or false, got '" + NodeReader.quoted(text) + "'");
         return null;
     }
 
@@ -158,6 +183,12 @@ final class NodeReader {
         if (node instanceof SequenceNode) {
             return ", got a list";
         }
-        return ", got '" + ((ScalarNode) node).getValue() + "'";
+        return ", got '" + quoted(((ScalarNode) node).getValue()) + "'";
+    }
+
+    /** A value of the file as quoted in a message: at most 40 characters, control characters replaced. */
+    static String quoted(String value) {
+        String clean = value.replaceAll("\\p{Cntrl}", "?");
+        return clean.length() <= 40 ? clean : clean.substring(0, 40) + "...";
     }
 }

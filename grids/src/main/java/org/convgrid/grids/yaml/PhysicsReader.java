@@ -102,7 +102,7 @@ final class PhysicsReader {
         OvershootScheme scheme = OvershootScheme.fromLabel(text);
         if (scheme == null) {
             reader.problem(node, GridProblemKind.UNKNOWN_CHOICE,
-                    "overshoot_scheme must be step or exponential, got '" + text + "'");
+                    "overshoot_scheme must be step or exponential, got '" + NodeReader.quoted(text) + "'");
         }
         return scheme;
     }
@@ -116,7 +116,7 @@ final class PhysicsReader {
         AtmosphereChoice choice = AtmosphereChoice.fromLabel(text);
         if (choice == null) {
             reader.problem(node, GridProblemKind.UNKNOWN_CHOICE,
-                    "atmosphere must be eddington or krishna_swamy, got '" + text + "'");
+                    "atmosphere must be eddington or krishna_swamy, got '" + NodeReader.quoted(text) + "'");
         }
         return choice;
     }
@@ -131,7 +131,13 @@ final class PhysicsReader {
             return null;
         }
         Path folder = Path.of(reader.file()).toAbsolutePath().getParent();
-        Path table = folder == null ? Path.of(text) : folder.resolve(text);
+        Path table;
+        try {
+            table = folder == null ? Path.of(text) : folder.resolve(text);
+        } catch (java.nio.file.InvalidPathException e) {
+            reader.problem(node, GridProblemKind.UNREADABLE_FILE, "opacity_table: not a valid file name");
+            return null;
+        }
         try {
             return OpacityChoice.table(table.normalize().toString(), OpacityTableReader.read(table));
         } catch (ConvgridException e) {
@@ -156,7 +162,7 @@ final class PhysicsReader {
             };
             if (text != null && criterion == null) {
                 reader.problem(item, GridProblemKind.UNKNOWN_CHOICE,
-                        "criterion must be schwarzschild or ledoux, got '" + text + "'");
+                        "criterion must be schwarzschild or ledoux, got '" + NodeReader.quoted(text) + "'");
             } else if (criterion != null && criteria.contains(criterion)) {
                 reader.problem(item, GridProblemKind.DUPLICATE,
                         "duplicate criterion " + criterion.name().toLowerCase(Locale.ROOT));

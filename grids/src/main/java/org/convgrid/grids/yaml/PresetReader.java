@@ -34,6 +34,9 @@ final class PresetReader {
     record Preset(double mixingLength, AtmosphereChoice atmosphere) {
     }
 
+    /** Largest preset file read, bytes (a preset is a few lines). */
+    public static final long MAX_FILE_BYTES = 64L * 1024;
+
     /** The preset, or null when it has problems (recorded at {@code node}). */
     static Preset read(Node node, NodeReader reader) {
         String name = reader.text(node, "preset");
@@ -41,13 +44,25 @@ final class PresetReader {
             return null;
         }
         Path folder = Path.of(reader.file()).toAbsolutePath().getParent();
-        Path file = (folder == null ? Path.of(name) : folder.resolve(name)).normalize();
+        Path file;
+        try {
+            file = (folder == null ? Path.of(name) : folder.resolve(name)).normalize();
+        } catch (java.nio.file.InvalidPathException e) {
+            reader.problem(node, GridProblemKind.UNREADABLE_FILE, "preset: not a valid file name");
+            return null;
+        }
+        Optional<String> unreadable = org.convgrid.grids.InputFileCheck.problem(file, MAX_FILE_BYTES);
+        if (unreadable.isPresent()) {
+            reader.problem(node, GridProblemKind.UNREADABLE_FILE, "preset: cannot read " + file + ": "
+                    + unreadable.get());
+            return null;
+        }
         String text;
         try {
             text = Files.readString(file);
         } catch (IOException e) {
-            reader.problem(node, GridProblemKind.UNREADABLE_FILE,
-                    "preset: cannot read " + file + " (" + e.getClass().getSimpleName() + ")");
+            reader.problem(node, GridProblemKind.UNREADABLE_FILE, "preset: cannot read " + file
+                    + (e instanceof java.nio.charset.CharacterCodingException ? ": it is not UTF-8 text" : ""));
             return null;
         }
         NodeReader inner = new NodeReader(file.toString());
@@ -61,8 +76,15 @@ final class PresetReader {
     private static Preset parse(String text, NodeReader inner) {
         Optional<Node> root;
         try {
-            root = new Compose(LoadSettings.builder().setLabel(inner.file()).setMaxAliasesForCollections(0).build())
-                    .composeString(text);
+            LoadSettings settings = LoadSettings.builder().setLabel(inner.file()).setMaxAliasesForCollections(0)
+                    .build();
+            Optional<org.snakeyaml.engine.v2.exceptions.Mark> tooDeep = GridFileReader.tooDeep(settings, text);
+            if (tooDeep.isPresent()) {
+                inner.problem(tooDeep, GridProblemKind.SYNTAX, "lists and mappings are nested more than "
+                        + GridFileReader.MAX_NESTING_DEPTH + " levels deep here");
+                return null;
+            }
+            root = new Compose(settings).composeString(text);
         } catch (MarkedYamlEngineException e) {
             inner.problem(e.getProblemMark().or(e::getContextMark), GridProblemKind.SYNTAX,
                     "YAML syntax: " + e.getProblem());
@@ -76,7 +98,7 @@ final class PresetReader {
                     "the preset is empty; it needs at least 'mixing_length'");
             return null;
         }
-        MappingNode map = inner.mapping(root.get(), "the preset");
+        MappingNode map = inner.documentMapping(root.get(), "the preset");
         if (map == null) {
             return null;
         }

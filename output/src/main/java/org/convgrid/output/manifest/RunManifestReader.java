@@ -23,6 +23,14 @@ import org.snakeyaml.engine.v2.exceptions.YamlEngineException;
 /** Reads a manifest written by {@link RunManifestWriter} (for resume and merge checks). */
 public final class RunManifestReader {
 
+    /**
+     * Longest manifest read, in code points. The manifest quotes the whole grid file (at most 1 MiB, escaped at worst
+     * six characters per character), so this is far above anything convgrid writes, while the YAML library's own
+     * default (3 MB) is not.
+     */
+    public static final int MAX_CODE_POINTS = 64 * 1024 * 1024;
+
+
     private RunManifestReader() {
     }
 
@@ -33,7 +41,7 @@ public final class RunManifestReader {
      */
     public static RunManifest read(String yaml) {
         try {
-            Map<?, ?> root = map(new Load(LoadSettings.builder().build()).loadFromString(yaml), "manifest");
+            Map<?, ?> root = map(new Load(LoadSettings.builder().setCodePointLimit(MAX_CODE_POINTS).build()).loadFromString(yaml), "manifest");
             Map<?, ?> grid = map(root.get("grid"), "grid");
             List<PhysicsOptions> physics = new ArrayList<>();
             for (Object item : (List<?>) root.get("physics")) {

@@ -80,4 +80,17 @@ class RunManifestTest {
         assertThatThrownBy(() -> RunManifestReader.read("- just\n- a list\n"))
                 .isInstanceOf(OutputFormatException.class);
     }
+
+    @Test
+    void aManifestQuotingTheLargestGridFileReadsBack() {
+        // the grid reader accepts files up to 1 MiB; the manifest quotes the file whole, with non-ASCII text that
+        // the writer may escape, and must stay readable (the YAML library's own limit is 3 MB)
+        String line = "# comment \u00e9\u4e2d\u00e9\u4e2d\n";
+        String big = GRID + line.repeat(1024 * 1024 / line.getBytes(java.nio.charset.StandardCharsets.UTF_8).length);
+        RunManifest m = new RunManifest("0.1.0", "grids/big.yaml", big, "ab".repeat(32), "cd".repeat(32),
+                List.of(PhysicsOptions.DEFAULT), Instant.parse("2026-03-01T10:00:00Z"), null, 1, null,
+                Map.of(ModelStatus.OK, 3L), Double.NaN);
+        String yaml = RunManifestWriter.toYaml(m);
+        assertThat(RunManifestReader.read(yaml).gridText()).isEqualTo(big);
+    }
 }

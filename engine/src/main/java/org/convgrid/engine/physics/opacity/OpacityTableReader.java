@@ -39,6 +39,12 @@ public final class OpacityTableReader {
     public static final int VERSION = 2;
     /** Entry of a version-2 table for "not in table". */
     public static final String NOT_IN_TABLE = "-";
+    /** Largest table file read, bytes: the shipped OPAL set is about 1 MB, so this is generous. */
+    public static final long MAX_FILE_BYTES = 64L * 1024 * 1024;
+    /** Most values one axis may declare (OPAL tables have 70 temperatures). */
+    public static final int MAX_AXIS_VALUES = 10_000;
+    /** Most cells one (X, Z) table may declare (OPAL: 70 x 19). */
+    public static final long MAX_CELLS_PER_TABLE = 1_000_000;
 
     private static final double[] POWERS_OF_TEN = {1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11,
         1e12, 1e13, 1e14, 1e15};
@@ -76,16 +82,47 @@ public final class OpacityTableReader {
      * @throws ConvgridException BAD_DATA when the file cannot be read or understood
      */
     public static TabulatedOpacity read(Path file) {
+        checkReadable(file);
         try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
             return read(in, file.toString());
         } catch (IOException e) {
             throw new ConvgridException(ErrorKind.BAD_DATA, "cannot read opacity table " + file + ": "
-                    + e.getClass().getSimpleName() + (e.getMessage() == null ? "" : " " + e.getMessage()), file);
+                    + (e instanceof java.nio.file.AccessDeniedException ? "permission denied"
+                    : e instanceof java.nio.charset.CharacterCodingException ? "it is not UTF-8 text"
+                    : "the file could not be read"), file);
+        }
+    }
+
+    /** Only a regular file under {@link #MAX_FILE_BYTES}: a device or a pipe would never end, a huge file is a mistake. */
+    private static void checkReadable(Path file) {
+        String problem = null;
+        try {
+            if (!Files.exists(file)) {
+                problem = "no such file";
+            } else if (Files.isDirectory(file)) {
+                problem = "it is a directory, not a file";
+            } else if (!Files.isRegularFile(file)) {
+                problem = "it is not a regular file (a device or a pipe?)";
+            } else if (Files.size(file) > MAX_FILE_BYTES) {
+                problem = "it holds " + Files.size(file) + " bytes, more than the limit of " + MAX_FILE_BYTES;
+            }
+        } catch (IOException | SecurityException e) {
+            problem = "the file could not be examined";
+        }
+        if (problem != null) {
+            throw new ConvgridException(ErrorKind.BAD_DATA, "cannot read opacity table " + file + ": " + problem,
+                    file);
         }
     }
 
     private TabulatedOpacity parse() {
-        expect(MAGIC);
+        int save = pos;
+        String first = next();
+        if (!MAGIC.equals(first)) {
+            // the content of a file that is no table is not echoed: it may be anything (a password file...)
+            pos = save;
+            throw fail("not an opacity table: the first word must be '" + MAGIC + "'");
+        }
         int version = (int) number();
         if (version != 1 && version != VERSION) {
             throw fail("unsupported version " + version);
@@ -148,6 +185,12 @@ public final class OpacityTableReader {
         if (count < 1 || count != Math.rint(count)) {
             throw fail(key + " count must be a positive integer");
         }
+        // every value needs at least two characters (a digit and a blank), so the text left bounds the count
+        long possible = Math.min(MAX_AXIS_VALUES, (text.length() - pos) / 2 + 1);
+        if (count > possible) {
+            throw fail(key + " declares " + (long) Math.min(count, Long.MAX_VALUE) + " values; at most "
+                    + possible + " are possible here");
+        }
         double[] g = new double[(int) count];
         for (int i = 0; i < g.length; i++) {
             g[i] = number();
@@ -193,7 +236,7 @@ public final class OpacityTableReader {
             throw fail("unexpected end of input (missing 'end'?)");
         }
         if (!t.equals(word)) {
-            throw fail("expected '" + word + "', found '" + t + "'");
+            throw fail("expected '" + word + "', found '" + shortToken(t) + "'");
         }
     }
 
@@ -222,10 +265,10 @@ public final class OpacityTableReader {
             try {
                 v = Double.parseDouble(t);
             } catch (NumberFormatException e) {
-                throw fail("expected a number, found '" + t + "'");
+                throw fail("expected a number, found '" + shortToken(t) + "'");
             }
             if (!Double.isFinite(v)) {
-                throw fail("non-finite number '" + t + "'");
+                throw fail("non-finite number '" + shortToken(t) + "'");
             }
         }
         return v;
@@ -284,6 +327,12 @@ public final class OpacityTableReader {
 
     private boolean endOfToken(int at) {
         return at >= text.length() || Character.isWhitespace(text.charAt(at)) || text.charAt(at) == '#';
+    }
+
+    /** A word of the file as quoted in a message: short, without control characters. */
+    private static String shortToken(String t) {
+        String clean = t.replaceAll("\\p{Cntrl}", "?");
+        return clean.length() <= 24 ? clean : clean.substring(0, 24) + "...";
     }
 
     private ConvgridException fail(String what) {

@@ -1,0 +1,21 @@
+package org.convgrid.cli;
+
+import java.io.PrintWriter;
+import org.convgrid.survey.RunLock;
+
+/** What the commands that take a run directory's lock tell the user about it. */
+final class Locks {
+
+    private Locks() {
+    }
+
+    /** Reports a lock file left by a process that ended without releasing it (the lock is taken over). */
+    static void reportStale(RunLock lock, PrintWriter err) {
+        if (lock.staleHolder().isPresent()) {
+            err.println("convgrid: note: " + lock.file().getParent() + " was last locked by process "
+                    + lock.staleHolder().getAsLong() + ", which ended without releasing it (killed or stopped); "
+                    + "check its files (--resume keeps only complete rows)");
+            err.flush();
+        }
+    }
+}
