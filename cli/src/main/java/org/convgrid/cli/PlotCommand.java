@@ -35,6 +35,7 @@ final class PlotCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         RunLayout layout = new RunLayout(main.context().resolve(runDirectory));
         Path dir = layout.root();
+        layout.refuseEarlierFormat();
         if (!Files.isRegularFile(layout.catalogue())) {
             throw new UsageException(dir + " is not a run directory (no " + RunLayout.CATALOGUE + ")");
         }

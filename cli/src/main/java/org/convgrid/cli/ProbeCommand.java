@@ -34,9 +34,9 @@ final class ProbeCommand implements Callable<Integer> {
     @Option(names = "--z", required = true, paramLabel = "Z", description = "Metal mass fraction.")
     double metals;
 
-    @Option(names = "--opacity-factor", defaultValue = "1", paramLabel = "F",
+    @Option(names = "--opacity-scale", defaultValue = "1", paramLabel = "S",
             description = "Multiplies the opacity (dimensionless; default ${DEFAULT-VALUE}).")
-    double opacityFactor;
+    double opacityScale;
 
     @Option(names = "--format", defaultValue = "table", paramLabel = "table|csv",
             description = "Output format: table (readable) or csv (header row, then one row). Default ${DEFAULT-VALUE}.")
@@ -46,14 +46,14 @@ final class ProbeCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         requirePositive("--temp-k", temperature);
         requirePositive("--density-cgs", density);
-        requirePositive("--opacity-factor", opacityFactor);
+        requirePositive("--opacity-scale", opacityScale);
         if (!(hydrogen >= 0 && hydrogen <= 1 && metals >= 0 && metals < 0.1 && hydrogen + metals <= 1)) {
             throw new UsageException(String.format(
                     "need 0 <= X <= 1, 0 <= Z < 0.1 and X + Z <= 1; got X = %s, Z = %s", hydrogen, metals));
         }
         Composition composition = Composition.scaledSolar(hydrogen, metals);
         MicrophysicsPoint point = MicrophysicsPoint.evaluate(StandardPhysics.equationOfState(),
-                StandardPhysics.opacity(opacityFactor), StandardPhysics.nuclearNetwork(), density, temperature,
+                StandardPhysics.opacity(opacityScale), StandardPhysics.nuclearNetwork(), density, temperature,
                 composition);
         MicrophysicsPointWriter writer = new MicrophysicsPointWriter();
         if (format == OutputFormat.CSV) {

@@ -77,8 +77,8 @@ class EvolvedRunTest {
         Path sunTrack = dir.resolve("one/tracks/p0-z00-m000.csv");
         List<String> lines = Files.readAllLines(sunTrack);
         assertThat(lines.get(0)).isEqualTo(String.join(",", TrackColumns.ALL));
-        assertThat(lines.get(0)).startsWith("age_gyr,luminosity_lsun,radius_rsun,teff_k,log_g_cgs,center_temp_k,"
-                + "center_density_cgs,center_h_frac,conv_zones_mass_frac,burning_zone_mass_frac");
+        assertThat(lines.get(0)).startsWith("age_gyr,luminosity_lsun,radius_rsun,teff_k,log_g_cgs,central_temp_k,"
+                + "central_density_cgs,central_h_frac,conv_zones_mass_frac,burning_zone_mass_frac");
         double previous = -1;
         for (String line : lines.subList(1, lines.size())) {
             double age = CsvNumbers.parse(line.split(",", -1)[0]);

@@ -69,7 +69,7 @@ public record RunData(List<CatalogueRow> catalogue, List<TransitionRow> transiti
     /** Reads a run directory; catalogue.csv must exist, everything else is optional. */
     public static RunData read(Path runDir) throws IOException {
         RunLayout layout = new RunLayout(runDir);
-        List<CatalogueRow> catalogue = CatalogueReader.read(layout.catalogue());
+        List<CatalogueRow> catalogue = CatalogueReader.readWithZones(layout.catalogue(), layout.zones());
         Path transitionsFile = layout.transitions();
         boolean fromFile = Files.isRegularFile(transitionsFile);
         List<TransitionRow> transitions;

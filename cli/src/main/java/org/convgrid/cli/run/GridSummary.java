@@ -42,7 +42,7 @@ public final class GridSummary {
         lines.add("physics:       " + physics.size() + (physics.size() == 1 ? " combination" : " combinations"));
         for (PhysicsOptions p : physics) {
             lines.add("  mixing length " + n(p.mixingLength()) + " Hp, overshoot " + n(p.overshoot()) + " Hp, "
-                    + p.criterion().name().toLowerCase(Locale.ROOT) + ", opacity x" + n(p.opacityFactor()));
+                    + p.criterion().name().toLowerCase(Locale.ROOT) + ", opacity x" + n(p.opacityScale()));
         }
         lines.add("models:        " + g.count());
         double seconds = g.estimateSeconds(ModelCost.constant(secondsPerModel), threads);

@@ -44,8 +44,12 @@ import org.convgrid.engine.error.ConvgridException;
  */
 public final class ConvectiveZoneFinder {
 
-    /** Default smallest m/M at the top of a central zone for it to count as a convective core. */
-    public static final double DEFAULT_MIN_CORE_MASS_FRACTION = 1.0e-4;
+    /**
+     * Default smallest m/M at the top of a central zone for it to count as a convective core: 1e-3, about one shell
+     * of a typical mesh, below which "cores" come and go with resolution (common practice, no single published
+     * value). The run's one core threshold: the class, the catalogue's core columns and the transitions use it.
+     */
+    public static final double DEFAULT_MIN_CORE_MASS_FRACTION = 1.0e-3;
     /**
      * Default smallest mass fraction of a surface zone for it to count as a convective envelope. The thin
      * hydrogen and helium ionisation zones of A and B stars hold ~1e-9 to 1e-7 of the mass (from memory): they

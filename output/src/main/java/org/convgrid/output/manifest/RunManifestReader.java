@@ -42,8 +42,8 @@ public final class RunManifestReader {
                 // versions whose defaults were the Eddington relation, step overshoot and the built-in opacity
                 AtmosphereChoice atmosphere = p.containsKey("atmosphere")
                         ? AtmosphereChoice.fromLabel((String) p.get("atmosphere")) : AtmosphereChoice.EDDINGTON;
-                OvershootScheme scheme = p.containsKey("overshoot_scheme")
-                        ? OvershootScheme.fromLabel((String) p.get("overshoot_scheme")) : OvershootScheme.STEP;
+                OvershootScheme scheme = p.containsKey("overshoot_profile")
+                        ? OvershootScheme.fromLabel((String) p.get("overshoot_profile")) : OvershootScheme.STEP;
                 if (atmosphere == null || scheme == null) {
                     throw new IllegalArgumentException("unknown atmosphere or overshoot_scheme in " + p);
                 }
@@ -51,7 +51,7 @@ public final class RunManifestReader {
                         ? tableAt((String) p.get("opacity_table")) : OpacityChoice.BUILT_IN;
                 physics.add(new PhysicsOptions(number(p, "mixing_length"), number(p, "overshoot"),
                         StabilityCriterion.valueOf(((String) p.get("criterion")).toUpperCase(Locale.ROOT)),
-                        number(p, "opacity_factor"), table, atmosphere, scheme));
+                        number(p, "opacity_scale"), table, atmosphere, scheme));
             }
             Map<?, ?> models = map(root.get("models"), "models");
             Map<ModelStatus, Long> counts = new EnumMap<>(ModelStatus.class);

@@ -15,7 +15,7 @@ import org.snakeyaml.engine.v2.common.FlowStyle;
 /**
  * Writes a {@link RunManifest} as YAML (block style; the grid file's text as a multi-line string). Keys, in order:
  * {@code tool_version}, {@code grid} ({@code file}, {@code sha256}, {@code models_sha256}, {@code text}),
- * {@code physics} (list of {@code mixing_length}, {@code overshoot}, {@code criterion}, {@code opacity_factor},
+ * {@code physics} (list of {@code mixing_length}, {@code overshoot}, {@code criterion}, {@code opacity_scale},
  * {@code atmosphere}, {@code overshoot_scheme}, and {@code opacity_table} when a user table is named),
  * {@code started}, {@code finished} (ISO-8601 UTC instants), {@code threads}, {@code shard}, {@code models}
  * ({@code total} and one count per status label), {@code median_seconds_per_model}.
@@ -43,9 +43,9 @@ public final class RunManifestWriter {
             options.put("mixing_length", p.mixingLength());
             options.put("overshoot", p.overshoot());
             options.put("criterion", p.criterion().name().toLowerCase(Locale.ROOT));
-            options.put("opacity_factor", p.opacityFactor());
+            options.put("opacity_scale", p.opacityScale());
             options.put("atmosphere", p.atmosphere().label());
-            options.put("overshoot_scheme", p.overshootScheme().label());
+            options.put("overshoot_profile", p.overshootScheme().label());
             if (p.usesOpacityTable()) {
                 options.put("opacity_table", p.opacityTable());
             }

@@ -17,7 +17,7 @@ public final class TransitionColumns {
     public static final String MIXING_LENGTH = "mixing_length";
     public static final String OVERSHOOT_HP = "overshoot_hp";
     public static final String CRITERION = "criterion";
-    public static final String OPACITY_FACTOR = "opacity_factor";
+    public static final String OPACITY_SCALE = "opacity_scale";
     /** Number of state changes between neighbouring usable masses (1 for a clean transition). */
     public static final String FULLY_CONVECTIVE_CROSSINGS = "fully_convective_crossings";
     /** Every such change as {@code lo-hi}, joined by {@code ;}. */
@@ -42,7 +42,7 @@ public final class TransitionColumns {
             FULLY_CONVECTIVE_BRACKET_MSUN, CONV_CORE_ONSET_MSUN, CONV_CORE_BRACKET_MSUN, METHOD);
 
     /** Our columns after them, in order. */
-    public static final List<String> EXTENSIONS = List.of(MIXING_LENGTH, OVERSHOOT_HP, CRITERION, OPACITY_FACTOR,
+    public static final List<String> EXTENSIONS = List.of(MIXING_LENGTH, OVERSHOOT_HP, CRITERION, OPACITY_SCALE,
             FULLY_CONVECTIVE_CROSSINGS, FULLY_CONVECTIVE_CROSSINGS_MSUN, FULLY_CONVECTIVE_BRACKET_SKIPPED,
             CONV_CORE_CROSSINGS, CONV_CORE_CROSSINGS_MSUN, CONV_CORE_BRACKET_SKIPPED, LASTING_CORE_ONSET_MSUN,
             LASTING_CORE_BRACKET_MSUN, NOTES);

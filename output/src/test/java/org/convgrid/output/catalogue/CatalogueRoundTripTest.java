@@ -68,8 +68,8 @@ class CatalogueRoundTripTest {
         String[] lines = out.toString().split("\n");
         assertThat(lines).hasSize(3);
         assertThat(lines[0]).startsWith("model_id,mass_msun,z_init,y_init,mixing_length,overshoot_hp,age_gyr,status,"
-                + "status_detail,luminosity_lsun,radius_rsun,teff_k,log_g_cgs,center_temp_k,center_density_cgs,"
-                + "center_h_frac,structure_class,core_cz_mass_frac,env_cz_base_mass_frac,env_cz_base_radius_frac,"
+                + "status_detail,luminosity_lsun,radius_rsun,teff_k,log_g_cgs,central_temp_k,central_density_cgs,"
+                + "central_h_frac,structure_class,core_cz_mass_frac,env_cz_base_mass_frac,env_cz_base_radius_frac,"
                 + "env_cz_mass_msun,turnover_time_days,conv_zones_mass_frac,solver_iterations");
         assertThat(lines[1]).isEqualTo("p0-z01-m009-a00,1,0.014,0.268,1.8,0,4.57,ok,,1,1,5772,4.438068,"
                 + "1.57e+07,150,0.34,conv_envelope,0,0.9755,0.713,0.0245,25,0.9755-1,7,schwarzschild,1,40");
@@ -86,7 +86,7 @@ class CatalogueRoundTripTest {
         assertThat(rows.get(1).luminosityLsun()).isNaN();
         assertThat(rows.get(1).structureClass()).isNull();
         assertThat(rows.get(0).convZones()).containsExactly(new Span(0.9755, 1.0));
-        assertThat(rows.get(0).centerTempK()).isEqualTo(1.57e7);
+        assertThat(rows.get(0).centralTempK()).isEqualTo(1.57e7);
         assertThat(rows.get(0).structureClass()).isEqualTo(StructureClass.CONV_ENVELOPE);
     }
 
@@ -100,7 +100,7 @@ class CatalogueRoundTripTest {
         String older = cut(lines[0], 3) + "\n" + cut(lines[1], 3) + "\n";
         CatalogueRow row = CatalogueReader.read(new StringReader(older)).get(0);
         assertThat(row.criterion()).isNull();
-        assertThat(row.opacityFactor()).isEqualTo(1.0);
+        assertThat(row.opacityScale()).isEqualTo(1.0);
         assertThat(row.turnoverTimeGlobalDays()).isNaN();
         assertThat(row.turnoverTimeDays()).isEqualTo(25.0);
     }
