@@ -48,7 +48,7 @@ class OvershootProfileKeyTest {
                 .isInstanceOfSatisfying(GridFileException.class, e -> assertThat(e.problems()).singleElement()
                         .satisfies(p -> {
                             assertThat(p.line()).isEqualTo(4);
-                            assertThat(p.column()).isEqualTo(25);
+                            assertThat(p.column()).isEqualTo(24);
                             assertThat(p.kind()).isEqualTo(GridProblemKind.UNKNOWN_CHOICE);
                         }));
     }

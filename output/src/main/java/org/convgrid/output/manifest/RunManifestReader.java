@@ -45,7 +45,7 @@ public final class RunManifestReader {
                 OvershootScheme scheme = p.containsKey("overshoot_profile")
                         ? OvershootScheme.fromLabel((String) p.get("overshoot_profile")) : OvershootScheme.STEP;
                 if (atmosphere == null || scheme == null) {
-                    throw new IllegalArgumentException("unknown atmosphere or overshoot_scheme in " + p);
+                    throw new IllegalArgumentException("unknown atmosphere or overshoot_profile in " + p);
                 }
                 OpacityChoice table = p.containsKey("opacity_table")
                         ? tableAt((String) p.get("opacity_table")) : OpacityChoice.BUILT_IN;

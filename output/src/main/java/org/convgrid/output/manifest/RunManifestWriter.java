@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.convgrid.engine.convection.ConvectiveZoneFinder;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.request.PhysicsOptions;
 import org.snakeyaml.engine.v2.api.Dump;
@@ -60,6 +61,8 @@ public final class RunManifestWriter {
         root.put("tool_version", m.toolVersion());
         root.put("grid", grid);
         root.put("physics", physics);
+        // the one threshold behind structure_class, the core columns and the transitions
+        root.put("core_threshold_mass_frac", ConvectiveZoneFinder.DEFAULT_MIN_CORE_MASS_FRACTION);
         root.put("started", m.started().toString());
         root.put("finished", m.finished() == null ? null : m.finished().toString());
         root.put("threads", m.threads());
