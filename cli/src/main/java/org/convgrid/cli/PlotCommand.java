@@ -24,7 +24,7 @@ final class PlotCommand implements Callable<Integer> {
     @ParentCommand
     ConvgridMain main;
 
-    @Parameters(index = "0", paramLabel = "RUN_DIR", description = "A run directory (holds catalogue.csv).")
+    @Parameters(index = "0", paramLabel = "RUN_DIR", description = "A run directory (holds catalogue.ecsv and zones.csv).")
     Path runDirectory;
 
     @Option(names = "--vector", split = ",", paramLabel = "svg|pdf",

@@ -64,7 +64,7 @@ class EvolvedRunTest {
         // the 2 Msun star is past its main sequence at 1 and 5 Gyr (it lives ~1.1 Gyr with overshoot, Schaller et al.
         // 1992, A&A Suppl. 96, 269; ~0.76 Gyr here without): an answer, not a failure, so exit code 0
         assertThat(one.code()).as(one.err()).isZero();
-        List<CatalogueRow> rows = CatalogueReader.read(dir.resolve("one/catalogue.csv"));
+        List<CatalogueRow> rows = CatalogueReader.read(dir.resolve("one/catalogue.ecsv"));
         assertThat(rows).extracting(r -> r.status().label())
                 .containsExactly("ok", "ok", "ok", "ok", "past_main_sequence", "past_main_sequence");
         // the Sun brightens on the main sequence (Sackmann, Boothroyd & Kraemer 1993, ApJ 418, 457)
@@ -91,8 +91,8 @@ class EvolvedRunTest {
 
         CliHarness.Execution two = run("two", 2);
         assertThat(two.code()).isZero();
-        assertThat(Files.readAllBytes(dir.resolve("two/catalogue.csv")))
-                .isEqualTo(Files.readAllBytes(dir.resolve("one/catalogue.csv")));
+        assertThat(Files.readAllBytes(dir.resolve("two/catalogue.ecsv")))
+                .isEqualTo(Files.readAllBytes(dir.resolve("one/catalogue.ecsv")));
         try (Stream<Path> files = Files.list(dir.resolve("one/tracks"))) {
             List<Path> tracks = files.sorted().toList();
             assertThat(tracks).hasSize(2);

@@ -26,14 +26,14 @@ class ResumeTest {
 
     private byte[] uninterrupted(Path grid, String threads) throws Exception {
         assertThat(run("run", grid.toString(), "--out", "whole", "--threads", threads, "--quiet").code()).isEqualTo(0);
-        return Files.readAllBytes(work.resolve("whole/catalogue.csv"));
+        return Files.readAllBytes(work.resolve("whole/catalogue.ecsv"));
     }
 
     @Test
     void aRunKilledPartWayResumesToTheSameBytes() throws Exception {
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
         Path dir = work.resolve("killed");
-        Path catalogue = dir.resolve("catalogue.csv");
+        Path catalogue = dir.resolve("catalogue.ecsv");
         String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
         Process child = new ProcessBuilder(java, "-cp", System.getProperty("java.class.path"),
                 SlowRunMain.class.getName(), "run", grid.toString(), "--out", dir.toString(), "--threads", "1",
@@ -81,11 +81,11 @@ class ResumeTest {
             cut = text.indexOf('\n', cut) + 1;
         }
         cut += 17;
-        Files.write(dir.resolve("catalogue.csv"), java.util.Arrays.copyOf(whole, cut));
+        Files.write(dir.resolve("catalogue.ecsv"), java.util.Arrays.copyOf(whole, cut));
         CliHarness.Execution resumed = run("run", grid.toString(), "--out", "cut", "--resume");
         assertThat(resumed.code()).isEqualTo(0);
         assertThat(resumed.err()).contains("40 already in the catalogue").contains("(17 bytes) dropped");
-        assertThat(Files.readAllBytes(dir.resolve("catalogue.csv"))).isEqualTo(whole);
+        assertThat(Files.readAllBytes(dir.resolve("catalogue.ecsv"))).isEqualTo(whole);
     }
 
     @Test
@@ -95,7 +95,7 @@ class ResumeTest {
         CliHarness.Execution resumed = run("run", grid.toString(), "--out", "whole", "--resume");
         assertThat(resumed.code()).isEqualTo(0);
         assertThat(resumed.out()).contains("0 computed now");
-        assertThat(Files.readAllBytes(work.resolve("whole/catalogue.csv"))).isEqualTo(whole);
+        assertThat(Files.readAllBytes(work.resolve("whole/catalogue.ecsv"))).isEqualTo(whole);
     }
 
     @Test
@@ -114,22 +114,22 @@ class ResumeTest {
         Path retitled = CliHarness.writeGrid(work, "retitled.yaml",
                 "# edited\n" + CliHarness.GRID.replace("Test survey", "Renamed"));
         assertThat(run("run", retitled.toString(), "--out", "whole", "--resume", "--quiet").code()).isEqualTo(0);
-        assertThat(Files.readAllBytes(work.resolve("whole/catalogue.csv"))).isEqualTo(whole);
+        assertThat(Files.readAllBytes(work.resolve("whole/catalogue.ecsv"))).isEqualTo(whole);
     }
 
     @Test
     void resumeRefusesACatalogueWhoseRowsAreNotThisGridsPrefix() throws Exception {
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
         uninterrupted(grid, "2");
-        List<String> lines = Files.readAllLines(work.resolve("whole/catalogue.csv"));
+        List<String> lines = Files.readAllLines(work.resolve("whole/catalogue.ecsv"));
         // drop row 3: the rows kept are no longer the first rows of the grid order
         List<String> holed = new java.util.ArrayList<>(lines.subList(0, 20));
         holed.remove(3);
-        Files.write(work.resolve("whole/catalogue.csv"), holed);
+        Files.write(work.resolve("whole/catalogue.ecsv"), holed);
         CliHarness.Execution refused = run("run", grid.toString(), "--out", "whole", "--resume");
         assertThat(refused.code()).isEqualTo(2);
         assertThat(refused.err()).contains("row 3 is model p0-z00-m001-a01 where this grid and shard expect "
                 + "p0-z00-m001-a00");
-        assertThat(Files.readAllLines(work.resolve("whole/catalogue.csv"))).isEqualTo(holed);
+        assertThat(Files.readAllLines(work.resolve("whole/catalogue.ecsv"))).isEqualTo(holed);
     }
 }

@@ -40,10 +40,10 @@ class RunCommandTest {
             assertThat(run("run", grid.toString(), "--out", "t" + threads, "--threads", threads, "--quiet").code())
                     .isEqualTo(0);
         }
-        byte[] one = Files.readAllBytes(work.resolve("t1/catalogue.csv"));
-        assertThat(Files.readAllBytes(work.resolve("t2/catalogue.csv"))).isEqualTo(one);
-        assertThat(Files.readAllBytes(work.resolve("t4/catalogue.csv"))).isEqualTo(one);
-        assertThat(Files.readAllLines(work.resolve("t1/catalogue.csv"))).hasSize(1 + (int) CliHarness.GRID_MODELS);
+        byte[] one = Files.readAllBytes(work.resolve("t1/catalogue.ecsv"));
+        assertThat(Files.readAllBytes(work.resolve("t2/catalogue.ecsv"))).isEqualTo(one);
+        assertThat(Files.readAllBytes(work.resolve("t4/catalogue.ecsv"))).isEqualTo(one);
+        assertThat(Files.readAllLines(work.resolve("t1/catalogue.ecsv"))).hasSize(1 + (int) CliHarness.GRID_MODELS);
     }
 
     @Test
@@ -51,10 +51,10 @@ class RunCommandTest {
         CliHarness.Execution done = run("run", grid().toString(), "--threads", "2");
         assertThat(done.code()).isEqualTo(0);
         Path dir = work.resolve("runs/test-survey");
-        assertThat(done.out()).contains(dir + ": 156 models in catalogue.csv (156 ok, 0 not_converged, "
+        assertThat(done.out()).contains(dir + ": 156 models in catalogue.ecsv (156 ok, 0 not_converged, "
                 + "0 past_main_sequence, 0 failed)");
         assertThat(done.err()).contains("computing 156 models").contains("156/156 models (100%)");
-        List<CatalogueRow> rows = CatalogueReader.read(dir.resolve("catalogue.csv"));
+        List<CatalogueRow> rows = CatalogueReader.read(dir.resolve("catalogue.ecsv"));
         assertThat(rows.get(0).modelId()).isEqualTo("p0-z00-m000-a00");
         assertThat(rows.get(155).modelId()).isEqualTo("p0-z01-m038-a01");
         RunManifest manifest = RunManifestReader.read(Files.readString(dir.resolve("manifest.yaml")));
@@ -75,7 +75,7 @@ class RunCommandTest {
     @Test
     void catalogueRoundTripsThroughItsReader() throws Exception {
         assertThat(run("run", grid().toString(), "--out", "rt", "--quiet").code()).isEqualTo(0);
-        String text = Files.readString(work.resolve("rt/catalogue.csv"));
+        String text = Files.readString(work.resolve("rt/catalogue.ecsv"));
         List<CatalogueRow> rows = CatalogueReader.read(new StringReader(text));
         StringBuilder again = new StringBuilder();
         CatalogueWriter.startingWithHeader(again).writeAll(rows);
@@ -89,14 +89,14 @@ class RunCommandTest {
                 "--quiet");
         assertThat(done.code()).isEqualTo(3);
         assertThat(done.out()).contains("154 ok, 0 not_converged, 0 past_main_sequence, 2 failed");
-        List<CatalogueRow> rows = CatalogueReader.read(work.resolve("f/catalogue.csv"));
+        List<CatalogueRow> rows = CatalogueReader.read(work.resolve("f/catalogue.ecsv"));
         assertThat(rows).hasSize(156);
         CatalogueRow failed = rows.get(4);
         assertThat(failed.modelId()).isEqualTo("p0-z00-m002-a00");
         assertThat(failed.status()).isEqualTo(ModelStatus.FAILED);
         // the solver's two-line reason is kept on one line, so every row is one line of the file
         assertThat(failed.statusDetail()).isEqualTo("fake solver gave up at shell 12");
-        assertThat(Files.readAllLines(work.resolve("f/catalogue.csv"))).hasSize(157);
+        assertThat(Files.readAllLines(work.resolve("f/catalogue.ecsv"))).hasSize(157);
     }
 
     @Test
@@ -133,13 +133,13 @@ class RunCommandTest {
     void aRunDirectoryWithACatalogueIsNotOverwrittenWithoutForce() throws Exception {
         Path grid = grid();
         assertThat(run("run", grid.toString(), "--out", "d", "--quiet").code()).isEqualTo(0);
-        byte[] before = Files.readAllBytes(work.resolve("d/catalogue.csv"));
+        byte[] before = Files.readAllBytes(work.resolve("d/catalogue.ecsv"));
         CliHarness.Execution again = run("run", grid.toString(), "--out", "d", "--quiet");
         assertThat(again.code()).isEqualTo(2);
         assertThat(again.err()).contains("already holds a run").contains("--resume").contains("--force");
-        assertThat(Files.readAllBytes(work.resolve("d/catalogue.csv"))).isEqualTo(before);
+        assertThat(Files.readAllBytes(work.resolve("d/catalogue.ecsv"))).isEqualTo(before);
         assertThat(run("run", grid.toString(), "--out", "d", "--quiet", "--force").code()).isEqualTo(0);
-        assertThat(Files.readAllBytes(work.resolve("d/catalogue.csv"))).isEqualTo(before);
+        assertThat(Files.readAllBytes(work.resolve("d/catalogue.ecsv"))).isEqualTo(before);
         assertThat(run("run", grid.toString(), "--out", "d", "--resume", "--force").code()).isEqualTo(2);
     }
 
@@ -181,7 +181,7 @@ class RunCommandTest {
         cli = cli.with(cli.context().withSolvers(org.convgrid.survey.ProductionSolvers.factory()));
         CliHarness.Execution run = cli.execute("run", grid.toString(), "--threads", "1", "--quiet");
         assertThat(run.code()).as(run.err()).isZero();
-        java.util.List<String> lines = Files.readAllLines(work.resolve("runs/two-stars/catalogue.csv"));
+        java.util.List<String> lines = Files.readAllLines(work.resolve("runs/two-stars/catalogue.ecsv"));
         assertThat(lines).hasSize(3);
         assertThat(lines.get(1)).contains(",ok,").contains("conv_envelope");
         assertThat(lines.get(2)).contains(",ok,").contains("conv_envelope");

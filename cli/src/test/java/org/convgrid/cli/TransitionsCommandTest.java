@@ -64,7 +64,7 @@ class TransitionsCommandTest {
     void refinementNarrowsZeroAgeBracketsBelowTheToleranceInsideTheGridBrackets() throws Exception {
         Path dir = finishedRun("refined");
         List<TransitionRow> grid = transitions(dir);
-        byte[] gridCatalogue = Files.readAllBytes(dir.resolve("catalogue.csv"));
+        byte[] gridCatalogue = Files.readAllBytes(dir.resolve("catalogue.ecsv"));
         CliHarness.Execution done = harness(new FakeMassLines(Set.of())).execute("transitions", "refined",
                 "--refine", "--tolerance", "0.002", "--threads", "2");
         assertThat(done.code()).as(done.err()).isEqualTo(0);
@@ -87,9 +87,9 @@ class TransitionsCommandTest {
                     .isBetween(g.convCore().bracket().lo(), g.convCore().bracket().hi());
         }
         // the grid rows stay as they were; the new rows follow them, slice by slice in increasing mass
-        byte[] now = Files.readAllBytes(dir.resolve("catalogue.csv"));
+        byte[] now = Files.readAllBytes(dir.resolve("catalogue.ecsv"));
         assertThat(java.util.Arrays.copyOf(now, gridCatalogue.length)).isEqualTo(gridCatalogue);
-        List<CatalogueRow> added = CatalogueReader.read(dir.resolve("catalogue.csv")).stream()
+        List<CatalogueRow> added = CatalogueReader.read(dir.resolve("catalogue.ecsv")).stream()
                 .filter(r -> RefinedModelIds.isRefined(r.modelId())).toList();
         // 0.05 Msun -> below 0.002 Msun takes 5 halvings, per transition and metallicity
         assertThat(added).hasSize(2 * 2 * 5);
@@ -107,13 +107,13 @@ class TransitionsCommandTest {
         Path dir = finishedRun("twice");
         FakeMassLines lines = new FakeMassLines(Set.of());
         assertThat(harness(lines).execute("transitions", "twice", "--refine").code()).isEqualTo(0);
-        byte[] catalogue = Files.readAllBytes(dir.resolve("catalogue.csv"));
+        byte[] catalogue = Files.readAllBytes(dir.resolve("catalogue.ecsv"));
         byte[] table = Files.readAllBytes(dir.resolve("transitions.csv"));
         List<TransitionRow> first = transitions(dir);
         int solved = lines.solved.get();
         assertThat(harness(lines).execute("transitions", "twice", "--refine").code()).isEqualTo(0);
         assertThat(lines.solved.get()).isEqualTo(solved);
-        assertThat(Files.readAllBytes(dir.resolve("catalogue.csv"))).isEqualTo(catalogue);
+        assertThat(Files.readAllBytes(dir.resolve("catalogue.ecsv"))).isEqualTo(catalogue);
         assertThat(Files.readAllBytes(dir.resolve("transitions.csv"))).isEqualTo(table);
 
         assertThat(harness(lines).execute("transitions", "twice", "--refine", "--tolerance", "0.0005").code())
@@ -122,7 +122,7 @@ class TransitionsCommandTest {
         assertThat(finer.get(0).fullyConvective().massMsun())
                 .isCloseTo(first.get(0).fullyConvective().massMsun(), within(0.002));
         assertThat(finer.get(0).convCore().massMsun()).isCloseTo(first.get(0).convCore().massMsun(), within(0.002));
-        assertThat(CatalogueReader.read(dir.resolve("catalogue.csv")).stream().map(CatalogueRow::modelId))
+        assertThat(CatalogueReader.read(dir.resolve("catalogue.ecsv")).stream().map(CatalogueRow::modelId))
                 .contains("p0-z00-r010-a00").doesNotHaveDuplicates();
         // a plain recompute of a refined catalogue gives the refined answer again
         assertThat(harness(lines).execute("transitions", "twice").code()).isEqualTo(0);
@@ -138,7 +138,7 @@ class TransitionsCommandTest {
                 .code()).isEqualTo(0);
         assertThat(harness(new FakeMassLines(Set.of())).execute("transitions", "two", "--refine", "--threads", "3")
                 .code()).isEqualTo(0);
-        for (String file : List.of("catalogue.csv", "transitions.csv")) {
+        for (String file : List.of("catalogue.ecsv", "transitions.csv")) {
             assertThat(Files.readAllBytes(work.resolve("two").resolve(file)))
                     .isEqualTo(Files.readAllBytes(work.resolve("one").resolve(file)));
         }
@@ -160,11 +160,11 @@ class TransitionsCommandTest {
         assertThat(z0.method()).isEqualTo(TransitionMethod.REFINED);
         assertThat(done.err()).contains("the model at 0.375 Msun failed");
         // again: the known failure is neither recomputed nor appended twice, and the table says the same
-        byte[] catalogue = Files.readAllBytes(dir.resolve("catalogue.csv"));
+        byte[] catalogue = Files.readAllBytes(dir.resolve("catalogue.ecsv"));
         byte[] table = Files.readAllBytes(dir.resolve("transitions.csv"));
         FakeMassLines lines = new FakeMassLines(Set.of(0.375));
         assertThat(harness(lines).execute("transitions", "failing", "--refine").code()).isEqualTo(0);
-        assertThat(Files.readAllBytes(dir.resolve("catalogue.csv"))).isEqualTo(catalogue);
+        assertThat(Files.readAllBytes(dir.resolve("catalogue.ecsv"))).isEqualTo(catalogue);
         assertThat(Files.readAllBytes(dir.resolve("transitions.csv"))).isEqualTo(table);
     }
 
@@ -238,13 +238,13 @@ class TransitionsCommandTest {
         Path dir = finishedRun("done");
         assertThat(harness(new FakeMassLines(Set.of())).execute("transitions", "done", "--refine").code())
                 .isEqualTo(0);
-        byte[] catalogue = Files.readAllBytes(dir.resolve("catalogue.csv"));
+        byte[] catalogue = Files.readAllBytes(dir.resolve("catalogue.ecsv"));
         CliHarness.Execution resumed = harness(new FakeMassLines(Set.of())).execute("run",
                 work.resolve("survey.yaml").toString(), "--out", "done", "--resume", "--quiet");
         assertThat(resumed.code()).isEqualTo(2);
         assertThat(resumed.err()).contains("holds models added by 'convgrid transitions --refine'")
                 .contains("cannot be resumed");
-        assertThat(Files.readAllBytes(dir.resolve("catalogue.csv"))).isEqualTo(catalogue);
+        assertThat(Files.readAllBytes(dir.resolve("catalogue.ecsv"))).isEqualTo(catalogue);
         CliHarness.Execution merged = harness(new FakeMassLines(Set.of())).execute("merge", "done", "--out", "m");
         assertThat(merged.code()).isEqualTo(2);
         assertThat(merged.err()).contains("20 model(s) added by 'convgrid transitions --refine'");

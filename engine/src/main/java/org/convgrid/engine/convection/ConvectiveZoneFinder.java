@@ -7,7 +7,7 @@ import org.convgrid.engine.error.ConvgridException;
 
 /**
  * Finds the convective zones of a model and the catalogue quantities derived from them (conventions.md,
- * {@code catalogue.csv}). Immutable and thread-safe.
+ * {@code catalogue.ecsv}). Immutable and thread-safe.
  *
  * <p>A mesh point is convective where the stability excess nabla_rad - nabla_stability is positive. Each zone
  * boundary lies where the linear interpolant of the excess between two mesh points changes sign; mass, radius
