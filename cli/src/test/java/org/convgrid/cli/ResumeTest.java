@@ -43,13 +43,14 @@ class ResumeTest {
         int rows = 0;
         while (child.isAlive() && rows < ROWS_BEFORE_KILL && System.currentTimeMillis() < deadline) {
             Thread.sleep(20);
-            rows = Files.exists(catalogue) ? (int) Files.readAllLines(catalogue, StandardCharsets.UTF_8).size() - 1
+            rows = Files.exists(catalogue) ? (int) Files.readAllLines(catalogue, StandardCharsets.UTF_8).size()
+                    - CliHarness.CATALOGUE_HEADER_LINES
                     : 0;
         }
         assertThat(child.isAlive()).as("child still running; its log: %s", log()).isTrue();
         child.destroyForcibly();
         assertThat(child.waitFor(10, TimeUnit.SECONDS)).isTrue();
-        long kept = Files.readAllLines(catalogue).size() - 1;
+        long kept = Files.readAllLines(catalogue).size() - CliHarness.CATALOGUE_HEADER_LINES;
         assertThat(kept).isBetween((long) ROWS_BEFORE_KILL, CliHarness.GRID_MODELS - 1);
         assertThat(Files.readString(dir.resolve("manifest.yaml"))).contains("finished: null");
 
@@ -77,7 +78,7 @@ class ResumeTest {
         // cut the file in the middle of row 41 (a chunk boundary is at row 32, so this chunk is recomputed)
         String text = new String(whole, StandardCharsets.UTF_8);
         int cut = 0;
-        for (int line = 0; line < 41; line++) {
+        for (int line = 0; line < 40 + CliHarness.CATALOGUE_HEADER_LINES; line++) {
             cut = text.indexOf('\n', cut) + 1;
         }
         cut += 17;
@@ -123,8 +124,9 @@ class ResumeTest {
         uninterrupted(grid, "2");
         List<String> lines = Files.readAllLines(work.resolve("whole/catalogue.ecsv"));
         // drop row 3: the rows kept are no longer the first rows of the grid order
-        List<String> holed = new java.util.ArrayList<>(lines.subList(0, 20));
-        holed.remove(3);
+        int header = CliHarness.CATALOGUE_HEADER_LINES;
+        List<String> holed = new java.util.ArrayList<>(lines.subList(0, header + 19));
+        holed.remove(header + 2);
         Files.write(work.resolve("whole/catalogue.ecsv"), holed);
         CliHarness.Execution refused = run("run", grid.toString(), "--out", "whole", "--resume");
         assertThat(refused.code()).isEqualTo(2);
