@@ -28,7 +28,9 @@ import picocli.CommandLine.ParentCommand;
         description = {"Rewrite RUN_DIR/transitions.csv from its catalogue: per (Z, age, physics) slice the highest "
                 + "fully convective mass and the lowest mass with a convective core, each with the two masses that "
                 + "bracket it (method grid).",
-            "A convective core is a central convective zone whose top lies above --core-threshold of the mass; "
+            "A convective core is a central convective zone whose top lies above the run's core threshold, a mass "
+                + "fraction m/M (" + TransitionFinder.DEFAULT_CORE_MASS_FRACTION_THRESHOLD + ", the one its "
+                + "structure classes use; in manifest.yaml); "
                 + "the convective criterion is the one the run used. When the structure is not monotonic in mass "
                 + "every crossing is listed (*_crossings columns) and notes says so; the limit is the highest "
                 + "crossing out of fully convective, the onset the lowest crossing into a core.",

@@ -28,7 +28,7 @@ import org.snakeyaml.engine.v2.nodes.MappingNode;
 import org.snakeyaml.engine.v2.nodes.Node;
 
 /**
- * Reads a grid file (format in conventions.md) into a validated {@link GridSpec}. The YAML is composed into nodes
+ * Reads a grid file (format in the README, "A grid file") into a validated {@link GridSpec}. The YAML is composed into nodes
  * and walked by hand so every problem carries its file:line:column; all problems of a file are collected and thrown
  * together as one {@link GridFileException}. Required sections: {@code mass}, {@code metallicity}. Defaults:
  * {@code title} = the file name, {@code age: {gyr: [0]}} (ZAMS; {@code age: {ms_fraction: [...]}} instead gives

@@ -3,7 +3,7 @@ package org.convgrid.output.transitions;
 import java.util.List;
 import java.util.stream.Stream;
 
-/** The column names of {@code transitions.csv}: conventions.md's fixed columns, then our extensions. */
+/** The column names of {@code transitions.csv}: the README's fixed columns ("Transition masses"), then our extensions. */
 public final class TransitionColumns {
 
     public static final String Z_INIT = "z_init";
@@ -37,7 +37,7 @@ public final class TransitionColumns {
     public static final String LASTING_CORE_BRACKET_MSUN = "lasting_core_bracket_msun";
     public static final String NOTES = "notes";
 
-    /** The columns conventions.md fixes, in order. */
+    /** The columns the README fixes, in order. */
     public static final List<String> FIXED = List.of(Z_INIT, AGE_GYR, FULLY_CONVECTIVE_LIMIT_MSUN,
             FULLY_CONVECTIVE_BRACKET_MSUN, CONV_CORE_ONSET_MSUN, CONV_CORE_BRACKET_MSUN, METHOD);
 
