@@ -54,7 +54,7 @@ class EvolvedRunTest {
     private CliHarness.Execution run(String out, int threads) throws Exception {
         Path grid = CliHarness.writeGrid(dir, "evolved.yaml", GRID);
         CliHarness harness = new CliHarness(new CommandContext(COARSE, List.of(), Map.of(), dir, false));
-        return harness.execute("run", grid.toString(), "--out", out, "--threads", Integer.toString(threads),
+        return harness.execute("run", "--no-refine", grid.toString(), "--out", out, "--threads", Integer.toString(threads),
                 "--quiet");
     }
 
@@ -108,7 +108,7 @@ class EvolvedRunTest {
         Path grid = CliHarness.writeGrid(dir, "zams.yaml", GRID.replace("[0, 1, 5]", "[0]")
                 .replace("[1.0, 2.0]", "[1.0]"));
         CliHarness harness = new CliHarness(new CommandContext(COARSE, List.of(), Map.of(), dir, false));
-        CliHarness.Execution e = harness.execute("run", grid.toString(), "--out", "zams", "--quiet");
+        CliHarness.Execution e = harness.execute("run", "--no-refine", grid.toString(), "--out", "zams", "--quiet");
         assertThat(e.code()).as(e.err()).isZero();
         assertThat(dir.resolve("zams/tracks")).doesNotExist();
     }

@@ -37,7 +37,7 @@ class RunCommandTest {
     void catalogueIsByteIdenticalWhateverTheThreadCount() throws Exception {
         Path grid = grid();
         for (String threads : List.of("1", "2", "4")) {
-            assertThat(run("run", grid.toString(), "--out", "t" + threads, "--threads", threads, "--quiet").code())
+            assertThat(run("run", "--no-refine", grid.toString(), "--out", "t" + threads, "--threads", threads, "--quiet").code())
                     .isEqualTo(0);
         }
         byte[] one = Files.readAllBytes(work.resolve("t1/catalogue.ecsv"));
@@ -48,7 +48,7 @@ class RunCommandTest {
 
     @Test
     void writesTheRunDirectoryInTheGridsOutputDirByDefault() throws Exception {
-        CliHarness.Execution done = run("run", grid().toString(), "--threads", "2");
+        CliHarness.Execution done = run("run", "--no-refine", grid().toString(), "--threads", "2");
         assertThat(done.code()).isEqualTo(0);
         Path dir = work.resolve("runs/test-survey");
         assertThat(done.out()).contains(dir + ": 156 models in catalogue.ecsv (156 ok, 0 not_converged, "
@@ -74,7 +74,7 @@ class RunCommandTest {
 
     @Test
     void catalogueRoundTripsThroughItsReader() throws Exception {
-        assertThat(run("run", grid().toString(), "--out", "rt", "--quiet").code()).isEqualTo(0);
+        assertThat(run("run", "--no-refine", grid().toString(), "--out", "rt", "--quiet").code()).isEqualTo(0);
         String text = Files.readString(work.resolve("rt/catalogue.ecsv"));
         List<CatalogueRow> rows = CatalogueReader.read(new StringReader(text));
         StringBuilder again = new StringBuilder();
@@ -85,7 +85,7 @@ class RunCommandTest {
     @Test
     void someFailedModelsGiveExitCodeThreeAndStayInTheCatalogue() throws Exception {
         FakeChunkSolver failing = new FakeChunkSolver(Set.of("p0-z00-m002-a00", "p0-z01-m020-a01"), 0);
-        CliHarness.Execution done = CliHarness.in(work, failing).execute("run", grid().toString(), "--out", "f",
+        CliHarness.Execution done = CliHarness.in(work, failing).execute("run", "--no-refine", grid().toString(), "--out", "f",
                 "--quiet");
         assertThat(done.code()).isEqualTo(3);
         assertThat(done.out()).contains("154 ok, 0 not_converged, 0 past_main_sequence, 2 failed");
@@ -107,7 +107,7 @@ class RunCommandTest {
                   0.25, 0.26, 0.26, 0.27, 0.28, 0.28, 0.29, 0.30]}
                 age: {gyr: [0, 1, 2, 3, 4, 5, 6, 7, 8, 9]}
                 """);
-        CliHarness.Execution refused = run("run", big.toString(), "--out", "big");
+        CliHarness.Execution refused = run("run", "--no-refine", big.toString(), "--out", "big");
         assertThat(refused.code()).isEqualTo(2);
         assertThat(refused.err()).contains("100100 models, more than 100000").contains("--yes");
         assertThat(Files.exists(work.resolve("big"))).isFalse();
@@ -117,7 +117,7 @@ class RunCommandTest {
     void anUnwritableOutputFolderFailsCleanlyAndLeavesNothing() throws Exception {
         Path grid = grid();
         Path file = Files.writeString(work.resolve("plain-file"), "not a directory");
-        CliHarness.Execution failed = run("run", grid.toString(), "--out", "plain-file/deeper/run", "--quiet");
+        CliHarness.Execution failed = run("run", "--no-refine", grid.toString(), "--out", "plain-file/deeper/run", "--quiet");
         assertThat(failed.code()).isEqualTo(1);
         assertThat(failed.err().strip().lines()).hasSize(1);
         assertThat(failed.err()).startsWith("convgrid: cannot create run directory " + file.resolve("deeper/run"))
@@ -132,25 +132,25 @@ class RunCommandTest {
     @Test
     void aRunDirectoryWithACatalogueIsNotOverwrittenWithoutForce() throws Exception {
         Path grid = grid();
-        assertThat(run("run", grid.toString(), "--out", "d", "--quiet").code()).isEqualTo(0);
+        assertThat(run("run", "--no-refine", grid.toString(), "--out", "d", "--quiet").code()).isEqualTo(0);
         byte[] before = Files.readAllBytes(work.resolve("d/catalogue.ecsv"));
-        CliHarness.Execution again = run("run", grid.toString(), "--out", "d", "--quiet");
+        CliHarness.Execution again = run("run", "--no-refine", grid.toString(), "--out", "d", "--quiet");
         assertThat(again.code()).isEqualTo(2);
         assertThat(again.err()).contains("already holds a run").contains("--resume").contains("--force");
         assertThat(Files.readAllBytes(work.resolve("d/catalogue.ecsv"))).isEqualTo(before);
-        assertThat(run("run", grid.toString(), "--out", "d", "--quiet", "--force").code()).isEqualTo(0);
+        assertThat(run("run", "--no-refine", grid.toString(), "--out", "d", "--quiet", "--force").code()).isEqualTo(0);
         assertThat(Files.readAllBytes(work.resolve("d/catalogue.ecsv"))).isEqualTo(before);
-        assertThat(run("run", grid.toString(), "--out", "d", "--resume", "--force").code()).isEqualTo(2);
+        assertThat(run("run", "--no-refine", grid.toString(), "--out", "d", "--resume", "--force").code()).isEqualTo(2);
     }
 
     @Test
     void badThreadCountAndShardAreUsageErrors() throws Exception {
         Path grid = grid();
-        assertThat(run("run", grid.toString(), "--threads", "0").code()).isEqualTo(2);
-        CliHarness.Execution shard = run("run", grid.toString(), "--shard", "4/3");
+        assertThat(run("run", "--no-refine", grid.toString(), "--threads", "0").code()).isEqualTo(2);
+        CliHarness.Execution shard = run("run", "--no-refine", grid.toString(), "--shard", "4/3");
         assertThat(shard.code()).isEqualTo(2);
         assertThat(shard.err()).contains("--shard must be K/N");
-        assertThat(run("run", grid.toString(), "--threads", "two").code()).isEqualTo(2);
+        assertThat(run("run", "--no-refine", grid.toString(), "--threads", "two").code()).isEqualTo(2);
         assertThat(Files.exists(work.resolve("runs"))).isFalse();
     }
 
@@ -162,7 +162,7 @@ class RunCommandTest {
             assertThat(Files.exists(run.directory().resolve("manifest.yaml"))).isTrue();
             seen.set(run);
         }));
-        assertThat(cli.execute("run", grid().toString(), "--out", "fin", "--quiet").code()).isEqualTo(0);
+        assertThat(cli.execute("run", "--no-refine", grid().toString(), "--out", "fin", "--quiet").code()).isEqualTo(0);
         assertThat(seen.get().catalogue()).hasSize(156);
         assertThat(seen.get().transitions()).hasSize(4);
         assertThat(seen.get().manifest().finished()).isNotNull();
@@ -179,7 +179,7 @@ class RunCommandTest {
                 """);
         CliHarness cli = CliHarness.in(work, FakeChunkSolver.fast());
         cli = cli.with(cli.context().withSolvers(org.convgrid.survey.ProductionSolvers.factory()));
-        CliHarness.Execution run = cli.execute("run", grid.toString(), "--threads", "1", "--quiet");
+        CliHarness.Execution run = cli.execute("run", "--no-refine", grid.toString(), "--threads", "1", "--quiet");
         assertThat(run.code()).as(run.err()).isZero();
         java.util.List<String> lines = CliHarness.tableLines(work.resolve("runs/two-stars/catalogue.ecsv"));
         assertThat(lines).hasSize(3);
