@@ -55,7 +55,7 @@ public record PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, L
         criteria = nonEmpty(criteria, "criterion");
         opacityScales = nonEmpty(opacityScales, "opacity_scale");
         if (overshootScheme == null) {
-            throw new IllegalArgumentException("overshoot_scheme must not be null");
+            throw new IllegalArgumentException("the overshoot profile must not be null");
         }
         if (opacity == null) {
             throw new IllegalArgumentException("opacity must not be null");

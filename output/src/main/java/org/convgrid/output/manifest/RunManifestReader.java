@@ -38,7 +38,7 @@ public final class RunManifestReader {
             List<PhysicsOptions> physics = new ArrayList<>();
             for (Object item : (List<?>) root.get("physics")) {
                 Map<?, ?> p = map(item, "physics");
-                // manifests written before atmosphere, overshoot_scheme and opacity_table were recorded come from
+                // manifests written before atmosphere, overshoot_profile and opacity_table were recorded come from
                 // versions whose defaults were the Eddington relation, step overshoot and the built-in opacity
                 AtmosphereChoice atmosphere = p.containsKey("atmosphere")
                         ? AtmosphereChoice.fromLabel((String) p.get("atmosphere")) : AtmosphereChoice.EDDINGTON;
