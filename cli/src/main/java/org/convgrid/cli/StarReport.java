@@ -10,7 +10,7 @@ import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.units.Constants;
-import org.convgrid.output.CsvNumbers;
+import org.convgrid.cli.run.GridSummary;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.catalogue.OutcomeRows;
 
@@ -23,7 +23,7 @@ final class StarReport {
     static void write(ModelOutcome outcome, Composition composition, PrintWriter out) {
         var r = outcome.request();
         String title = r.age() instanceof Age.SinceZeroAge since && since.seconds() > 0.0
-                ? "Model at " + CsvNumbers.format(since.seconds() / Constants.GYR) + " Gyr"
+                ? "Model at " + GridSummary.n(since.seconds() / Constants.GYR) + " Gyr"
                 : "Zero-age model";
         out.printf(Locale.ROOT, "%s: %.4f Msun, X = %.4f, Y = %.4f, Z = %.5f (initial)%n", title,
                 r.mass() / Constants.M_SUN, composition.x(), composition.y(), composition.z());

@@ -60,7 +60,8 @@ public final class GridSummary {
         return head + "from " + n(values.get(0)) + " to " + n(values.get(values.size() - 1)) + " " + unit;
     }
 
-    private static String n(double value) {
-        return CsvNumbers.format(value);
+    /** A number for people: the file format without the ".0" that marks reals for table readers. */
+    public static String n(double value) {
+        return CsvNumbers.format(value).replaceFirst("\\.0(?=$|e)", "");
     }
 }
