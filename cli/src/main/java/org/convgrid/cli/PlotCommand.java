@@ -25,7 +25,7 @@ final class PlotCommand implements Callable<Integer> {
     @ParentCommand
     ConvgridMain main;
 
-    @Parameters(index = "0", paramLabel = "RUN_DIR", description = "A run directory (holds catalogue.csv).")
+    @Parameters(index = "0", paramLabel = "RUN_DIR", description = "A run directory (holds catalogue.ecsv and zones.csv).")
     Path runDirectory;
 
     @Option(names = "--vector", split = ",", paramLabel = "svg|pdf",
@@ -36,6 +36,7 @@ final class PlotCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         RunLayout layout = new RunLayout(main.context().resolve(runDirectory));
         Path dir = layout.root();
+        layout.refuseEarlierFormat();
         if (!Files.isRegularFile(layout.catalogue())) {
             throw new UsageException(dir + " is not a run directory (no " + RunLayout.CATALOGUE + ")");
         }

@@ -34,9 +34,9 @@ final class ProbeCommand implements Callable<Integer> {
     @Option(names = "--z", required = true, paramLabel = "Z", description = "Metal mass fraction.")
     double metals;
 
-    @Option(names = "--opacity-factor", defaultValue = "1", paramLabel = "F",
+    @Option(names = "--opacity-scale", defaultValue = "1", paramLabel = "S",
             description = "Multiplies the opacity (dimensionless; default ${DEFAULT-VALUE}).")
-    double opacityFactor;
+    double opacityScale;
 
     @Option(names = "--format", defaultValue = "table", paramLabel = "table|csv",
             description = "Output format: table (readable) or csv (header row, then one row). Default ${DEFAULT-VALUE}.")
@@ -46,7 +46,7 @@ final class ProbeCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         requireWithin("--temp-k", temperature, MIN_TEMPERATURE_K, MAX_TEMPERATURE_K, "K");
         requireWithin("--density-cgs", density, MIN_DENSITY_CGS, MAX_DENSITY_CGS, "g/cm^3");
-        requirePositive("--opacity-factor", opacityFactor);
+        requirePositive("--opacity-scale", opacityScale);
         if (!(hydrogen >= 0 && hydrogen <= 1 && metals >= 0 && metals < 0.1 && hydrogen + metals <= 1)) {
             throw new UsageException(String.format(
                     "need 0 <= X <= 1, 0 <= Z < 0.1 and X + Z <= 1; got X = %s, Z = %s", hydrogen, metals));
@@ -55,7 +55,7 @@ final class ProbeCommand implements Callable<Integer> {
         MicrophysicsPoint point;
         try {
             point = MicrophysicsPoint.evaluate(StandardPhysics.equationOfState(),
-                    StandardPhysics.opacity(opacityFactor), StandardPhysics.nuclearNetwork(), density, temperature,
+                    StandardPhysics.opacity(opacityScale), StandardPhysics.nuclearNetwork(), density, temperature,
                     composition);
         } catch (org.convgrid.engine.error.ConvgridException e) {
             throw new UsageException(String.format(java.util.Locale.ROOT, "the microphysics is not defined at "

@@ -3,6 +3,7 @@ package org.convgrid.cli;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.time.Clock;
+import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
@@ -13,7 +14,9 @@ import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.batch.ProgressListener;
 import org.convgrid.engine.batch.Shard;
 import org.convgrid.grids.GridFile;
+import org.convgrid.grids.TransitionSettings;
 import org.convgrid.output.RunLayout;
+import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.survey.GridRun;
 import org.convgrid.survey.RunDirectory;
 import org.convgrid.survey.RunFinishing;
@@ -21,6 +24,8 @@ import org.convgrid.survey.RunLock;
 import org.convgrid.survey.ShardChoice;
 import org.convgrid.survey.TrackFiles;
 import org.convgrid.survey.parallel.ParallelWork;
+import org.convgrid.survey.refine.TransitionRefiner;
+import org.convgrid.survey.refine.TransitionTables;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -28,8 +33,8 @@ import picocli.CommandLine.ParentCommand;
 
 /** {@code convgrid run GRID.yaml}: sweeps a grid into a run directory, resumable and shardable. */
 @Command(name = "run", mixinStandardHelpOptions = true,
-        description = {"Compute every model of a grid and write a run directory: catalogue.csv (grown row by row in "
-                + "grid order), transitions.csv and manifest.yaml.",
+        description = {"Compute every model of a grid and write a run directory: catalogue.ecsv (grown row by row in "
+                + "grid order), zones.csv, transitions.csv and manifest.yaml.",
             "Exit codes: 0 all models ok, 3 some models failed or did not converge (they are in the catalogue with "
                 + "their status), 2 bad grid file or usage, 1 I/O or software failure."})
 final class RunCommand implements Callable<Integer> {
@@ -60,8 +65,13 @@ final class RunCommand implements Callable<Integer> {
     boolean resume;
 
     @Option(names = "--force", description = "Start over in a directory that already holds a run, replacing its "
-            + "catalogue.csv, transitions.csv and manifest.yaml (without it such a directory is refused).")
+            + "catalogue.ecsv, transitions.csv and manifest.yaml (without it such a directory is refused).")
     boolean force;
+
+    @Option(names = "--no-refine", description = "Skip the refinement of the transition masses by bisection that "
+            + "follows the sweep (the grid's transitions: refine: true, the default); the table then holds the values "
+            + "read off the grid.")
+    boolean noRefine;
 
     @Option(names = "--yes", description = "Allow grids of more than " + LARGE_GRID_MODELS + " models.")
     boolean yes;
@@ -101,13 +111,22 @@ final class RunCommand implements Callable<Integer> {
                 err.println("convgrid: " + startLine(plan, count, n));
                 err.flush();
             }
+            TransitionSettings transitions = file.spec().transitions();
+            // a shard holds part of each mass line: its brackets are refined once the shards are merged
+            boolean refineNow = !noRefine && transitions.refine() && plan.shard().count() == 1;
             GridRun.Result result;
+            TransitionTables.Update refined = null;
             try (ParallelWork work = new ParallelWork(n)) {
                 result = runner.execute(plan, work, solver, reporter == null ? ProgressListener.NONE : reporter,
-                        context.finishers());
-            }
-            if (reporter != null) {
-                reporter.finish();
+                        refineNow ? List.of() : context.finishers());
+                if (reporter != null) {
+                    reporter.finish();
+                }
+                if (refineNow) {
+                    TransitionFinder finder = TransitionFinder.withDefaults();
+                    refined = TransitionTables.refine(dir, finder, new TransitionRefiner(context.lines(), finder,
+                            transitions.toleranceMsun(), work, false), context.finishers());
+                }
             }
             if (tracks.failure() != null) {
                 throw tracks.failure();
@@ -116,6 +135,12 @@ final class RunCommand implements Callable<Integer> {
             parent.out().println(dir.root() + ": " + result.run().catalogue().size() + " models in "
                     + RunLayout.CATALOGUE + " (" + describe(result.counts()) + "); " + result.computed()
                     + " computed now in " + Durations.describe(seconds));
+            if (refined != null) {
+                long failedNew = refined.added().stream().filter(o -> o.status() != ModelStatus.OK).count();
+                parent.out().println(dir.transitions() + ": transitions refined to " + transitions.toleranceMsun()
+                        + " Msun with " + refined.added().size() + " new model(s)"
+                        + (failedNew > 0 ? " (" + failedNew + " not ok)" : ""));
+            }
             parent.out().flush();
             if (RunFinishing.someModelsFailed(result.counts())) {
                 err.println("convgrid: some models failed or did not converge; their status_detail in "

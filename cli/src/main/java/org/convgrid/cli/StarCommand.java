@@ -69,9 +69,9 @@ final class StarCommand implements Callable<Integer> {
             description = "Convective stability criterion (default ${DEFAULT-VALUE}).")
     StabilityCriterion criterion;
 
-    @Option(names = "--opacity-factor", defaultValue = "1", paramLabel = "F",
+    @Option(names = "--opacity-scale", defaultValue = "1", paramLabel = "S",
             description = "Multiplies every opacity (dimensionless; default ${DEFAULT-VALUE}).")
-    double opacityFactor;
+    double opacityScale;
 
     @Option(names = "--opacity-table", paramLabel = "FILE",
             description = "Use this opacity table (convgrid table layout, see README) instead of the built-in OPAL-corrected analytic one.")
@@ -159,8 +159,8 @@ final class StarCommand implements Callable<Integer> {
         if (!(mixingLength > 0 && mixingLength < 10)) {
             throw new UsageException("--mixing-length must lie in (0, 10) pressure scale heights, got " + mixingLength);
         }
-        if (!(opacityFactor > 0 && opacityFactor <= 100)) {
-            throw new UsageException("--opacity-factor must lie in (0, 100], got " + opacityFactor);
+        if (!(opacityScale > 0 && opacityScale <= 100)) {
+            throw new UsageException("--opacity-scale must lie in (0, 100], got " + opacityScale);
         }
         OpacityChoice table = OpacityChoice.BUILT_IN;
         if (opacityTable != null) {
@@ -172,6 +172,6 @@ final class StarCommand implements Callable<Integer> {
                 throw new UsageException("--opacity-table: " + e.getMessage());
             }
         }
-        return new PhysicsOptions(mixingLength, 0.0, criterion, opacityFactor, table, atmosphere);
+        return new PhysicsOptions(mixingLength, 0.0, criterion, opacityScale, table, atmosphere);
     }
 }

@@ -10,7 +10,9 @@ import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.units.Constants;
-import org.convgrid.output.CsvNumbers;
+import org.convgrid.cli.run.GridSummary;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.catalogue.OutcomeRows;
 
 /** The readable form of one model for {@code convgrid star}: a block of properties, then the zone list. */
 final class StarReport {
@@ -21,12 +23,12 @@ final class StarReport {
     static void write(ModelOutcome outcome, Composition composition, PrintWriter out) {
         var r = outcome.request();
         String title = r.age() instanceof Age.SinceZeroAge since && since.seconds() > 0.0
-                ? "Model at " + CsvNumbers.format(since.seconds() / Constants.GYR) + " Gyr"
+                ? "Model at " + GridSummary.n(since.seconds() / Constants.GYR) + " Gyr"
                 : "Zero-age model";
         out.printf(Locale.ROOT, "%s: %.4f Msun, X = %.4f, Y = %.4f, Z = %.5f (initial)%n", title,
                 r.mass() / Constants.M_SUN, composition.x(), composition.y(), composition.z());
         out.printf(Locale.ROOT, "Physics: mixing length %.3f Hp, %s, opacity x %.3g%s%n", r.physics().mixingLength(),
-                r.physics().criterion().name().toLowerCase(Locale.ROOT), r.physics().opacityFactor(),
+                r.physics().criterion().name().toLowerCase(Locale.ROOT), r.physics().opacityScale(),
                 r.physics().usesOpacityTable() ? " (table " + r.physics().opacityTable() + ")" : "");
         if (!(outcome instanceof ModelOutcome.Solved solved)) {
             out.printf(Locale.ROOT, "Status: %s (%s)%n", outcome.status().label(), outcome.statusDetail());
@@ -44,12 +46,16 @@ final class StarReport {
         line(out, "central hydrogen", g.centralHydrogen(), "");
         out.println();
         out.printf(Locale.ROOT, "  %-32s %s%n", "structure", c.structureClass().label().replace('_', ' '));
-        line(out, "convective core, top", c.coreMassFraction(), "m/M");
-        line(out, "convective envelope, base", c.envelopeBaseMassFraction(), "m/M");
-        line(out, "convective envelope, base", c.envelopeBaseRadiusFraction(), "r/R");
-        line(out, "convective envelope, mass", c.envelopeMass() / Constants.M_SUN, "Msun");
-        line(out, "turnover time, local", c.turnoverTimeLocal() / Constants.DAY, "days");
-        line(out, "turnover time, integrated", c.turnoverTimeGlobal() / Constants.DAY, "days");
+        // the catalogue's reading of the zones: "-" where a quantity does not apply (a fully convective star has
+        // no core, its one zone reaching the centre is reported as the envelope)
+        CatalogueRow row = OutcomeRows.toRow(outcome);
+        line(out, "convective core, top", row.coreCzMassFrac(), "m/M");
+        line(out, "convective core, top", row.coreCzRadiusFrac(), "r/R");
+        line(out, "convective envelope, base", row.envCzBaseMassFrac(), "m/M");
+        line(out, "convective envelope, base", row.envCzBaseRadiusFrac(), "r/R");
+        line(out, "convective envelope, mass", row.envCzMassMsun(), "Msun");
+        line(out, "turnover time, local", row.turnoverTimeDays(), "days");
+        line(out, "turnover time, integrated", row.turnoverTimeGlobalDays(), "days");
         out.println();
         List<ConvectiveZone> zones = c.zones();
         out.printf(Locale.ROOT, "Convective zones (%d):%n", zones.size());

@@ -1,5 +1,7 @@
 package org.convgrid.cli;
 
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.convgrid.cli.run.Durations;
@@ -27,7 +29,9 @@ import picocli.CommandLine.ParentCommand;
         description = {"Rewrite RUN_DIR/transitions.csv from its catalogue: per (Z, age, physics) slice the highest "
                 + "fully convective mass and the lowest mass with a convective core, each with the two masses that "
                 + "bracket it (method grid).",
-            "A convective core is a central convective zone whose top lies above --core-threshold of the mass; "
+            "A convective core is a central convective zone whose top lies above the run's core threshold, a mass "
+                + "fraction m/M (" + TransitionFinder.DEFAULT_CORE_MASS_FRACTION_THRESHOLD + ", the one its "
+                + "structure classes use; in manifest.yaml); "
                 + "the convective criterion is the one the run used. When the structure is not monotonic in mass "
                 + "every crossing is listed (*_crossings columns) and notes says so; the limit is the highest "
                 + "crossing out of fully convective, the onset the lowest crossing into a core.",
@@ -35,7 +39,7 @@ import picocli.CommandLine.ParentCommand;
                 + "new zero-age models, each seeded by homology from its converged neighbours, until it is narrower "
                 + "than the tolerance (method refined); the crossings the table reports are refined (the limit, the "
                 + "lowest core onset and the lasting core's onset), the others only with --all-crossings; when new models reveal crossings between earlier masses, further "
-                + "rounds refine them (at most " + TransitionTables.MAX_ROUNDS + "). The new models are appended to catalogue.csv with ids "
+                + "rounds refine them (at most " + TransitionTables.MAX_ROUNDS + "). The new models are appended to catalogue.ecsv with ids "
                 + "p<i>-z<i>-r<n>-a<i> (r: refined, n counts per slice); slices at ages above 0 keep their grid "
                 + "brackets. A refined run cannot be resumed with 'run --resume'. Needs a finished, merged run.",
             "Exit codes: 0 done, 3 some new models failed (in the catalogue with their status; notes says where "
@@ -48,7 +52,7 @@ final class TransitionsCommand implements Callable<Integer> {
     @ParentCommand
     ConvgridMain parent;
 
-    @Parameters(index = "0", paramLabel = "RUN_DIR", description = "A run directory (holds catalogue.csv).")
+    @Parameters(index = "0", paramLabel = "RUN_DIR", description = "A run directory (holds catalogue.ecsv).")
     Path runDirectory;
 
     @Option(names = "--refine", description = "Narrow the brackets by bisection with new zero-age models.")
@@ -57,11 +61,6 @@ final class TransitionsCommand implements Callable<Integer> {
     @Option(names = "--tolerance", paramLabel = "MSUN", description = "With --refine: stop when a bracket is "
             + "narrower than this (solar masses; default: " + DEFAULT_TOLERANCE_MSUN + ").")
     double tolerance = DEFAULT_TOLERANCE_MSUN;
-
-    @Option(names = "--core-threshold", paramLabel = "FRACTION", description = "Smallest convective core that "
-            + "counts, as the mass fraction m/M at its top (fraction of the stellar mass, in [0, 1); default: "
-            + TransitionFinder.DEFAULT_CORE_MASS_FRACTION_THRESHOLD + ").")
-    double coreThreshold = TransitionFinder.DEFAULT_CORE_MASS_FRACTION_THRESHOLD;
 
     @Option(names = "--all-crossings", description = "With --refine: when a slice's structure changes back and forth "
             + "with mass, refine every crossing, not only the one the table reports (more models).")
@@ -77,12 +76,10 @@ final class TransitionsCommand implements Callable<Integer> {
         if (!(tolerance > 0.0 && Double.isFinite(tolerance))) {
             throw new UsageException("--tolerance must be a positive mass in Msun, got " + tolerance);
         }
-        if (!(coreThreshold >= 0.0 && coreThreshold < 1.0)) {
-            throw new UsageException("--core-threshold must be a mass fraction in [0, 1), got " + coreThreshold);
-        }
         int n = RunCommand.threads(threads);
         RunDirectory dir = new RunDirectory(context.resolve(runDirectory));
-        TransitionFinder finder = new TransitionFinder(coreThreshold);
+        // the run's one core threshold, the one its structure classes were computed with
+        TransitionFinder finder = TransitionFinder.withDefaults();
         long start = System.nanoTime();
         TransitionTables.Update update;
         if (refine) {
@@ -109,6 +106,7 @@ final class TransitionsCommand implements Callable<Integer> {
                     .append(Durations.describe((System.nanoTime() - start) * 1e-9));
         }
         parent.out().println(line);
+        parent.out().print(Files.readString(dir.transitions(), StandardCharsets.UTF_8));
         parent.out().flush();
         for (TransitionRow t : update.transitions()) {
             if (!t.notes().isEmpty() && refine) {

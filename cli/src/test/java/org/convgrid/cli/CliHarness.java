@@ -11,6 +11,15 @@ import java.util.Map;
 /** Runs convgrid commands in this JVM with a fake solver, capturing both streams. */
 final class CliHarness {
 
+    /** Lines before the first catalogue row: the ECSV header and the column-name row. */
+    static final int CATALOGUE_HEADER_LINES =
+            (int) org.convgrid.output.catalogue.CatalogueWriter.ecsvHeader().lines().count() + 1;
+
+    /** The lines of a catalogue without its ECSV header: the column-name row, then the rows. */
+    static java.util.List<String> tableLines(java.nio.file.Path catalogue) throws java.io.IOException {
+        return java.nio.file.Files.readAllLines(catalogue).stream().filter(l -> !l.startsWith("#")).toList();
+    }
+
     /** 2 metallicities x 39 masses x 2 ages = 156 models, 10 chunks of up to 8 masses. */
     static final String GRID = """
             title: Test survey

@@ -54,7 +54,7 @@ class EvolvedRunTest {
     private CliHarness.Execution run(String out, int threads) throws Exception {
         Path grid = CliHarness.writeGrid(dir, "evolved.yaml", GRID);
         CliHarness harness = new CliHarness(new CommandContext(COARSE, List.of(), Map.of(), dir, false));
-        return harness.execute("run", grid.toString(), "--out", out, "--threads", Integer.toString(threads),
+        return harness.execute("run", "--no-refine", grid.toString(), "--out", out, "--threads", Integer.toString(threads),
                 "--quiet");
     }
 
@@ -64,7 +64,7 @@ class EvolvedRunTest {
         // the 2 Msun star is past its main sequence at 1 and 5 Gyr (it lives ~1.1 Gyr with overshoot, Schaller et al.
         // 1992, A&A Suppl. 96, 269; ~0.76 Gyr here without): an answer, not a failure, so exit code 0
         assertThat(one.code()).as(one.err()).isZero();
-        List<CatalogueRow> rows = CatalogueReader.read(dir.resolve("one/catalogue.csv"));
+        List<CatalogueRow> rows = CatalogueReader.read(dir.resolve("one/catalogue.ecsv"));
         assertThat(rows).extracting(r -> r.status().label())
                 .containsExactly("ok", "ok", "ok", "ok", "past_main_sequence", "past_main_sequence");
         // the Sun brightens on the main sequence (Sackmann, Boothroyd & Kraemer 1993, ApJ 418, 457)
@@ -77,8 +77,8 @@ class EvolvedRunTest {
         Path sunTrack = dir.resolve("one/tracks/p0-z00-m000.csv");
         List<String> lines = Files.readAllLines(sunTrack);
         assertThat(lines.get(0)).isEqualTo(String.join(",", TrackColumns.ALL));
-        assertThat(lines.get(0)).startsWith("age_gyr,luminosity_lsun,radius_rsun,teff_k,log_g_cgs,center_temp_k,"
-                + "center_density_cgs,center_h_frac,conv_zones_mass_frac,burning_zone_mass_frac");
+        assertThat(lines.get(0)).startsWith("age_gyr,luminosity_lsun,radius_rsun,teff_k,log_g_cgs,central_temp_k,"
+                + "central_density_cgs,central_h_frac,conv_zones_mass_frac,burning_zone_mass_frac");
         double previous = -1;
         for (String line : lines.subList(1, lines.size())) {
             double age = CsvNumbers.parse(line.split(",", -1)[0]);
@@ -91,8 +91,8 @@ class EvolvedRunTest {
 
         CliHarness.Execution two = run("two", 2);
         assertThat(two.code()).isZero();
-        assertThat(Files.readAllBytes(dir.resolve("two/catalogue.csv")))
-                .isEqualTo(Files.readAllBytes(dir.resolve("one/catalogue.csv")));
+        assertThat(Files.readAllBytes(dir.resolve("two/catalogue.ecsv")))
+                .isEqualTo(Files.readAllBytes(dir.resolve("one/catalogue.ecsv")));
         try (Stream<Path> files = Files.list(dir.resolve("one/tracks"))) {
             List<Path> tracks = files.sorted().toList();
             assertThat(tracks).hasSize(2);
@@ -108,7 +108,7 @@ class EvolvedRunTest {
         Path grid = CliHarness.writeGrid(dir, "zams.yaml", GRID.replace("[0, 1, 5]", "[0]")
                 .replace("[1.0, 2.0]", "[1.0]"));
         CliHarness harness = new CliHarness(new CommandContext(COARSE, List.of(), Map.of(), dir, false));
-        CliHarness.Execution e = harness.execute("run", grid.toString(), "--out", "zams", "--quiet");
+        CliHarness.Execution e = harness.execute("run", "--no-refine", grid.toString(), "--out", "zams", "--quiet");
         assertThat(e.code()).as(e.err()).isZero();
         assertThat(dir.resolve("zams/tracks")).doesNotExist();
     }

@@ -25,35 +25,36 @@ class ResumeTest {
     }
 
     private byte[] uninterrupted(Path grid, String threads) throws Exception {
-        assertThat(run("run", grid.toString(), "--out", "whole", "--threads", threads, "--quiet").code()).isEqualTo(0);
-        return Files.readAllBytes(work.resolve("whole/catalogue.csv"));
+        assertThat(run("run", "--no-refine", grid.toString(), "--out", "whole", "--threads", threads, "--quiet").code()).isEqualTo(0);
+        return Files.readAllBytes(work.resolve("whole/catalogue.ecsv"));
     }
 
     @Test
     void aRunKilledPartWayResumesToTheSameBytes() throws Exception {
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
         Path dir = work.resolve("killed");
-        Path catalogue = dir.resolve("catalogue.csv");
+        Path catalogue = dir.resolve("catalogue.ecsv");
         String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
         Process child = new ProcessBuilder(java, "-cp", System.getProperty("java.class.path"),
-                SlowRunMain.class.getName(), "run", grid.toString(), "--out", dir.toString(), "--threads", "1",
+                SlowRunMain.class.getName(), "run", "--no-refine", grid.toString(), "--out", dir.toString(), "--threads", "1",
                 "--quiet")
                 .redirectErrorStream(true).redirectOutput(work.resolve("child.log").toFile()).start();
         long deadline = System.currentTimeMillis() + CHILD_TIMEOUT_MILLIS;
         int rows = 0;
         while (child.isAlive() && rows < ROWS_BEFORE_KILL && System.currentTimeMillis() < deadline) {
             Thread.sleep(20);
-            rows = Files.exists(catalogue) ? (int) Files.readAllLines(catalogue, StandardCharsets.UTF_8).size() - 1
+            rows = Files.exists(catalogue) ? (int) Files.readAllLines(catalogue, StandardCharsets.UTF_8).size()
+                    - CliHarness.CATALOGUE_HEADER_LINES
                     : 0;
         }
         assertThat(child.isAlive()).as("child still running; its log: %s", log()).isTrue();
         child.destroyForcibly();
         assertThat(child.waitFor(10, TimeUnit.SECONDS)).isTrue();
-        long kept = Files.readAllLines(catalogue).size() - 1;
+        long kept = Files.readAllLines(catalogue).size() - CliHarness.CATALOGUE_HEADER_LINES;
         assertThat(kept).isBetween((long) ROWS_BEFORE_KILL, CliHarness.GRID_MODELS - 1);
         assertThat(Files.readString(dir.resolve("manifest.yaml"))).contains("finished: null");
 
-        CliHarness.Execution resumed = run("run", grid.toString(), "--out", dir.toString(), "--resume",
+        CliHarness.Execution resumed = run("run", "--no-refine", grid.toString(), "--out", dir.toString(), "--resume",
                 "--threads", "2");
         assertThat(resumed.code()).isEqualTo(0);
         assertThat(resumed.err()).contains("computing " + (CliHarness.GRID_MODELS - kept) + " models")
@@ -73,29 +74,29 @@ class ResumeTest {
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
         byte[] whole = uninterrupted(grid, "2");
         Path dir = work.resolve("cut");
-        assertThat(run("run", grid.toString(), "--out", "cut", "--quiet").code()).isEqualTo(0);
+        assertThat(run("run", "--no-refine", grid.toString(), "--out", "cut", "--quiet").code()).isEqualTo(0);
         // cut the file in the middle of row 41 (a chunk boundary is at row 32, so this chunk is recomputed)
         String text = new String(whole, StandardCharsets.UTF_8);
         int cut = 0;
-        for (int line = 0; line < 41; line++) {
+        for (int line = 0; line < 40 + CliHarness.CATALOGUE_HEADER_LINES; line++) {
             cut = text.indexOf('\n', cut) + 1;
         }
         cut += 17;
-        Files.write(dir.resolve("catalogue.csv"), java.util.Arrays.copyOf(whole, cut));
-        CliHarness.Execution resumed = run("run", grid.toString(), "--out", "cut", "--resume");
+        Files.write(dir.resolve("catalogue.ecsv"), java.util.Arrays.copyOf(whole, cut));
+        CliHarness.Execution resumed = run("run", "--no-refine", grid.toString(), "--out", "cut", "--resume");
         assertThat(resumed.code()).isEqualTo(0);
         assertThat(resumed.err()).contains("40 already in the catalogue").contains("(17 bytes) dropped");
-        assertThat(Files.readAllBytes(dir.resolve("catalogue.csv"))).isEqualTo(whole);
+        assertThat(Files.readAllBytes(dir.resolve("catalogue.ecsv"))).isEqualTo(whole);
     }
 
     @Test
     void resumingACompleteRunComputesNothingAndChangesNothing() throws Exception {
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
         byte[] whole = uninterrupted(grid, "2");
-        CliHarness.Execution resumed = run("run", grid.toString(), "--out", "whole", "--resume");
+        CliHarness.Execution resumed = run("run", "--no-refine", grid.toString(), "--out", "whole", "--resume");
         assertThat(resumed.code()).isEqualTo(0);
         assertThat(resumed.out()).contains("0 computed now");
-        assertThat(Files.readAllBytes(work.resolve("whole/catalogue.csv"))).isEqualTo(whole);
+        assertThat(Files.readAllBytes(work.resolve("whole/catalogue.ecsv"))).isEqualTo(whole);
     }
 
     @Test
@@ -103,33 +104,34 @@ class ResumeTest {
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
         byte[] whole = uninterrupted(grid, "2");
         Path other = CliHarness.writeGrid(work, "other.yaml", CliHarness.GRID.replace("to: 2.0", "to: 1.9"));
-        CliHarness.Execution refused = run("run", other.toString(), "--out", "whole", "--resume");
+        CliHarness.Execution refused = run("run", "--no-refine", other.toString(), "--out", "whole", "--resume");
         assertThat(refused.code()).isEqualTo(2);
         assertThat(refused.err()).contains("the grid's models differ from those of the run in")
                 .contains("models_sha256");
-        CliHarness.Execution shard = run("run", grid.toString(), "--out", "whole", "--resume", "--shard", "1/2");
+        CliHarness.Execution shard = run("run", "--no-refine", grid.toString(), "--out", "whole", "--resume", "--shard", "1/2");
         assertThat(shard.code()).isEqualTo(2);
         assertThat(shard.err()).contains("holds shard 1/1 but this run asks for shard 1/2");
         // an edited comment or title is not a different grid
         Path retitled = CliHarness.writeGrid(work, "retitled.yaml",
                 "# edited\n" + CliHarness.GRID.replace("Test survey", "Renamed"));
-        assertThat(run("run", retitled.toString(), "--out", "whole", "--resume", "--quiet").code()).isEqualTo(0);
-        assertThat(Files.readAllBytes(work.resolve("whole/catalogue.csv"))).isEqualTo(whole);
+        assertThat(run("run", "--no-refine", retitled.toString(), "--out", "whole", "--resume", "--quiet").code()).isEqualTo(0);
+        assertThat(Files.readAllBytes(work.resolve("whole/catalogue.ecsv"))).isEqualTo(whole);
     }
 
     @Test
     void resumeRefusesACatalogueWhoseRowsAreNotThisGridsPrefix() throws Exception {
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
         uninterrupted(grid, "2");
-        List<String> lines = Files.readAllLines(work.resolve("whole/catalogue.csv"));
+        List<String> lines = Files.readAllLines(work.resolve("whole/catalogue.ecsv"));
         // drop row 3: the rows kept are no longer the first rows of the grid order
-        List<String> holed = new java.util.ArrayList<>(lines.subList(0, 20));
-        holed.remove(3);
-        Files.write(work.resolve("whole/catalogue.csv"), holed);
-        CliHarness.Execution refused = run("run", grid.toString(), "--out", "whole", "--resume");
+        int header = CliHarness.CATALOGUE_HEADER_LINES;
+        List<String> holed = new java.util.ArrayList<>(lines.subList(0, header + 19));
+        holed.remove(header + 2);
+        Files.write(work.resolve("whole/catalogue.ecsv"), holed);
+        CliHarness.Execution refused = run("run", "--no-refine", grid.toString(), "--out", "whole", "--resume");
         assertThat(refused.code()).isEqualTo(2);
         assertThat(refused.err()).contains("row 3 is model p0-z00-m001-a01 where this grid and shard expect "
                 + "p0-z00-m001-a00");
-        assertThat(Files.readAllLines(work.resolve("whole/catalogue.csv"))).isEqualTo(holed);
+        assertThat(Files.readAllLines(work.resolve("whole/catalogue.ecsv"))).isEqualTo(holed);
     }
 }

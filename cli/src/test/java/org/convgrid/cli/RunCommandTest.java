@@ -37,24 +37,24 @@ class RunCommandTest {
     void catalogueIsByteIdenticalWhateverTheThreadCount() throws Exception {
         Path grid = grid();
         for (String threads : List.of("1", "2", "4")) {
-            assertThat(run("run", grid.toString(), "--out", "t" + threads, "--threads", threads, "--quiet").code())
+            assertThat(run("run", "--no-refine", grid.toString(), "--out", "t" + threads, "--threads", threads, "--quiet").code())
                     .isEqualTo(0);
         }
-        byte[] one = Files.readAllBytes(work.resolve("t1/catalogue.csv"));
-        assertThat(Files.readAllBytes(work.resolve("t2/catalogue.csv"))).isEqualTo(one);
-        assertThat(Files.readAllBytes(work.resolve("t4/catalogue.csv"))).isEqualTo(one);
-        assertThat(Files.readAllLines(work.resolve("t1/catalogue.csv"))).hasSize(1 + (int) CliHarness.GRID_MODELS);
+        byte[] one = Files.readAllBytes(work.resolve("t1/catalogue.ecsv"));
+        assertThat(Files.readAllBytes(work.resolve("t2/catalogue.ecsv"))).isEqualTo(one);
+        assertThat(Files.readAllBytes(work.resolve("t4/catalogue.ecsv"))).isEqualTo(one);
+        assertThat(CliHarness.tableLines(work.resolve("t1/catalogue.ecsv"))).hasSize(1 + (int) CliHarness.GRID_MODELS);
     }
 
     @Test
     void writesTheRunDirectoryInTheGridsOutputDirByDefault() throws Exception {
-        CliHarness.Execution done = run("run", grid().toString(), "--threads", "2");
+        CliHarness.Execution done = run("run", "--no-refine", grid().toString(), "--threads", "2");
         assertThat(done.code()).isEqualTo(0);
         Path dir = work.resolve("runs/test-survey");
-        assertThat(done.out()).contains(dir + ": 156 models in catalogue.csv (156 ok, 0 not_converged, "
+        assertThat(done.out()).contains(dir + ": 156 models in catalogue.ecsv (156 ok, 0 not_converged, "
                 + "0 past_main_sequence, 0 failed)");
         assertThat(done.err()).contains("computing 156 models").contains("156/156 models (100%)");
-        List<CatalogueRow> rows = CatalogueReader.read(dir.resolve("catalogue.csv"));
+        List<CatalogueRow> rows = CatalogueReader.read(dir.resolve("catalogue.ecsv"));
         assertThat(rows.get(0).modelId()).isEqualTo("p0-z00-m000-a00");
         assertThat(rows.get(155).modelId()).isEqualTo("p0-z01-m038-a01");
         RunManifest manifest = RunManifestReader.read(Files.readString(dir.resolve("manifest.yaml")));
@@ -74,8 +74,8 @@ class RunCommandTest {
 
     @Test
     void catalogueRoundTripsThroughItsReader() throws Exception {
-        assertThat(run("run", grid().toString(), "--out", "rt", "--quiet").code()).isEqualTo(0);
-        String text = Files.readString(work.resolve("rt/catalogue.csv"));
+        assertThat(run("run", "--no-refine", grid().toString(), "--out", "rt", "--quiet").code()).isEqualTo(0);
+        String text = Files.readString(work.resolve("rt/catalogue.ecsv"));
         List<CatalogueRow> rows = CatalogueReader.read(new StringReader(text));
         StringBuilder again = new StringBuilder();
         CatalogueWriter.startingWithHeader(again).writeAll(rows);
@@ -85,18 +85,18 @@ class RunCommandTest {
     @Test
     void someFailedModelsGiveExitCodeThreeAndStayInTheCatalogue() throws Exception {
         FakeChunkSolver failing = new FakeChunkSolver(Set.of("p0-z00-m002-a00", "p0-z01-m020-a01"), 0);
-        CliHarness.Execution done = CliHarness.in(work, failing).execute("run", grid().toString(), "--out", "f",
+        CliHarness.Execution done = CliHarness.in(work, failing).execute("run", "--no-refine", grid().toString(), "--out", "f",
                 "--quiet");
         assertThat(done.code()).isEqualTo(3);
         assertThat(done.out()).contains("154 ok, 0 not_converged, 0 past_main_sequence, 2 failed");
-        List<CatalogueRow> rows = CatalogueReader.read(work.resolve("f/catalogue.csv"));
+        List<CatalogueRow> rows = CatalogueReader.read(work.resolve("f/catalogue.ecsv"));
         assertThat(rows).hasSize(156);
         CatalogueRow failed = rows.get(4);
         assertThat(failed.modelId()).isEqualTo("p0-z00-m002-a00");
         assertThat(failed.status()).isEqualTo(ModelStatus.FAILED);
         // the solver's two-line reason is kept on one line, so every row is one line of the file
         assertThat(failed.statusDetail()).isEqualTo("fake solver gave up at shell 12");
-        assertThat(Files.readAllLines(work.resolve("f/catalogue.csv"))).hasSize(157);
+        assertThat(CliHarness.tableLines(work.resolve("f/catalogue.ecsv"))).hasSize(157);
     }
 
     @Test
@@ -107,7 +107,7 @@ class RunCommandTest {
                   0.25, 0.26, 0.26, 0.27, 0.28, 0.28, 0.29, 0.30]}
                 age: {gyr: [0, 1, 2, 3, 4, 5, 6, 7, 8, 9]}
                 """);
-        CliHarness.Execution refused = run("run", big.toString(), "--out", "big");
+        CliHarness.Execution refused = run("run", "--no-refine", big.toString(), "--out", "big");
         assertThat(refused.code()).isEqualTo(2);
         assertThat(refused.err()).contains("100100 models, more than 100000").contains("--yes");
         assertThat(Files.exists(work.resolve("big"))).isFalse();
@@ -117,7 +117,7 @@ class RunCommandTest {
     void anUnwritableOutputFolderFailsCleanlyAndLeavesNothing() throws Exception {
         Path grid = grid();
         Path file = Files.writeString(work.resolve("plain-file"), "not a directory");
-        CliHarness.Execution failed = run("run", grid.toString(), "--out", "plain-file/deeper/run", "--quiet");
+        CliHarness.Execution failed = run("run", "--no-refine", grid.toString(), "--out", "plain-file/deeper/run", "--quiet");
         // an output directory that cannot be made is the user's choice to correct: exit 2, before any work
         assertThat(failed.code()).isEqualTo(2);
         assertThat(failed.err().strip().lines()).hasSize(1);
@@ -133,25 +133,25 @@ class RunCommandTest {
     @Test
     void aRunDirectoryWithACatalogueIsNotOverwrittenWithoutForce() throws Exception {
         Path grid = grid();
-        assertThat(run("run", grid.toString(), "--out", "d", "--quiet").code()).isEqualTo(0);
-        byte[] before = Files.readAllBytes(work.resolve("d/catalogue.csv"));
-        CliHarness.Execution again = run("run", grid.toString(), "--out", "d", "--quiet");
+        assertThat(run("run", "--no-refine", grid.toString(), "--out", "d", "--quiet").code()).isEqualTo(0);
+        byte[] before = Files.readAllBytes(work.resolve("d/catalogue.ecsv"));
+        CliHarness.Execution again = run("run", "--no-refine", grid.toString(), "--out", "d", "--quiet");
         assertThat(again.code()).isEqualTo(2);
         assertThat(again.err()).contains("already holds a run").contains("--resume").contains("--force");
-        assertThat(Files.readAllBytes(work.resolve("d/catalogue.csv"))).isEqualTo(before);
-        assertThat(run("run", grid.toString(), "--out", "d", "--quiet", "--force").code()).isEqualTo(0);
-        assertThat(Files.readAllBytes(work.resolve("d/catalogue.csv"))).isEqualTo(before);
-        assertThat(run("run", grid.toString(), "--out", "d", "--resume", "--force").code()).isEqualTo(2);
+        assertThat(Files.readAllBytes(work.resolve("d/catalogue.ecsv"))).isEqualTo(before);
+        assertThat(run("run", "--no-refine", grid.toString(), "--out", "d", "--quiet", "--force").code()).isEqualTo(0);
+        assertThat(Files.readAllBytes(work.resolve("d/catalogue.ecsv"))).isEqualTo(before);
+        assertThat(run("run", "--no-refine", grid.toString(), "--out", "d", "--resume", "--force").code()).isEqualTo(2);
     }
 
     @Test
     void badThreadCountAndShardAreUsageErrors() throws Exception {
         Path grid = grid();
-        assertThat(run("run", grid.toString(), "--threads", "0").code()).isEqualTo(2);
-        CliHarness.Execution shard = run("run", grid.toString(), "--shard", "4/3");
+        assertThat(run("run", "--no-refine", grid.toString(), "--threads", "0").code()).isEqualTo(2);
+        CliHarness.Execution shard = run("run", "--no-refine", grid.toString(), "--shard", "4/3");
         assertThat(shard.code()).isEqualTo(2);
         assertThat(shard.err()).contains("--shard must be K/N");
-        assertThat(run("run", grid.toString(), "--threads", "two").code()).isEqualTo(2);
+        assertThat(run("run", "--no-refine", grid.toString(), "--threads", "two").code()).isEqualTo(2);
         assertThat(Files.exists(work.resolve("runs"))).isFalse();
     }
 
@@ -163,7 +163,7 @@ class RunCommandTest {
             assertThat(Files.exists(run.directory().resolve("manifest.yaml"))).isTrue();
             seen.set(run);
         }));
-        assertThat(cli.execute("run", grid().toString(), "--out", "fin", "--quiet").code()).isEqualTo(0);
+        assertThat(cli.execute("run", "--no-refine", grid().toString(), "--out", "fin", "--quiet").code()).isEqualTo(0);
         assertThat(seen.get().catalogue()).hasSize(156);
         assertThat(seen.get().transitions()).hasSize(4);
         assertThat(seen.get().manifest().finished()).isNotNull();
@@ -180,9 +180,9 @@ class RunCommandTest {
                 """);
         CliHarness cli = CliHarness.in(work, FakeChunkSolver.fast());
         cli = cli.with(cli.context().withSolvers(org.convgrid.survey.ProductionSolvers.factory()));
-        CliHarness.Execution run = cli.execute("run", grid.toString(), "--threads", "1", "--quiet");
+        CliHarness.Execution run = cli.execute("run", "--no-refine", grid.toString(), "--threads", "1", "--quiet");
         assertThat(run.code()).as(run.err()).isZero();
-        java.util.List<String> lines = Files.readAllLines(work.resolve("runs/two-stars/catalogue.csv"));
+        java.util.List<String> lines = CliHarness.tableLines(work.resolve("runs/two-stars/catalogue.ecsv"));
         assertThat(lines).hasSize(3);
         assertThat(lines.get(1)).contains(",ok,").contains("conv_envelope");
         assertThat(lines.get(2)).contains(",ok,").contains("conv_envelope");

@@ -35,7 +35,7 @@ class TransitionsCommandTest {
 
     private Path finishedRun(String name) throws Exception {
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
-        assertThat(harness(new FakeMassLines(Set.of())).execute("run", grid.toString(), "--out", name, "--quiet")
+        assertThat(harness(new FakeMassLines(Set.of())).execute("run", "--no-refine", grid.toString(), "--out", name, "--quiet")
                 .code()).isEqualTo(0);
         return work.resolve(name);
     }
@@ -54,17 +54,15 @@ class TransitionsCommandTest {
         assertThat(done.code()).isEqualTo(0);
         assertThat(Files.readAllBytes(dir.resolve("transitions.csv"))).isEqualTo(written);
         assertThat(lines.solved.get()).isZero();
-        CliHarness.Execution loose = harness(lines).execute("transitions", "plain", "--core-threshold", "0.2");
-        assertThat(loose.code()).isEqualTo(0);
-        // the fake's cores reach m/M = 0.2 only at 3.5 Msun, beyond the grid
-        assertThat(transitions(dir).get(0).convCore().found()).isFalse();
+        // one core threshold per run: the transitions cannot be asked for another one than the classes used
+        assertThat(harness(lines).execute("transitions", "plain", "--core-threshold", "0.2").code()).isEqualTo(2);
     }
 
     @Test
     void refinementNarrowsZeroAgeBracketsBelowTheToleranceInsideTheGridBrackets() throws Exception {
         Path dir = finishedRun("refined");
         List<TransitionRow> grid = transitions(dir);
-        byte[] gridCatalogue = Files.readAllBytes(dir.resolve("catalogue.csv"));
+        byte[] gridCatalogue = Files.readAllBytes(dir.resolve("catalogue.ecsv"));
         CliHarness.Execution done = harness(new FakeMassLines(Set.of())).execute("transitions", "refined",
                 "--refine", "--tolerance", "0.002", "--threads", "2");
         assertThat(done.code()).as(done.err()).isEqualTo(0);
@@ -87,9 +85,9 @@ class TransitionsCommandTest {
                     .isBetween(g.convCore().bracket().lo(), g.convCore().bracket().hi());
         }
         // the grid rows stay as they were; the new rows follow them, slice by slice in increasing mass
-        byte[] now = Files.readAllBytes(dir.resolve("catalogue.csv"));
+        byte[] now = Files.readAllBytes(dir.resolve("catalogue.ecsv"));
         assertThat(java.util.Arrays.copyOf(now, gridCatalogue.length)).isEqualTo(gridCatalogue);
-        List<CatalogueRow> added = CatalogueReader.read(dir.resolve("catalogue.csv")).stream()
+        List<CatalogueRow> added = CatalogueReader.read(dir.resolve("catalogue.ecsv")).stream()
                 .filter(r -> RefinedModelIds.isRefined(r.modelId())).toList();
         // 0.05 Msun -> below 0.002 Msun takes 5 halvings, per transition and metallicity
         assertThat(added).hasSize(2 * 2 * 5);
@@ -107,13 +105,13 @@ class TransitionsCommandTest {
         Path dir = finishedRun("twice");
         FakeMassLines lines = new FakeMassLines(Set.of());
         assertThat(harness(lines).execute("transitions", "twice", "--refine").code()).isEqualTo(0);
-        byte[] catalogue = Files.readAllBytes(dir.resolve("catalogue.csv"));
+        byte[] catalogue = Files.readAllBytes(dir.resolve("catalogue.ecsv"));
         byte[] table = Files.readAllBytes(dir.resolve("transitions.csv"));
         List<TransitionRow> first = transitions(dir);
         int solved = lines.solved.get();
         assertThat(harness(lines).execute("transitions", "twice", "--refine").code()).isEqualTo(0);
         assertThat(lines.solved.get()).isEqualTo(solved);
-        assertThat(Files.readAllBytes(dir.resolve("catalogue.csv"))).isEqualTo(catalogue);
+        assertThat(Files.readAllBytes(dir.resolve("catalogue.ecsv"))).isEqualTo(catalogue);
         assertThat(Files.readAllBytes(dir.resolve("transitions.csv"))).isEqualTo(table);
 
         assertThat(harness(lines).execute("transitions", "twice", "--refine", "--tolerance", "0.0005").code())
@@ -122,7 +120,7 @@ class TransitionsCommandTest {
         assertThat(finer.get(0).fullyConvective().massMsun())
                 .isCloseTo(first.get(0).fullyConvective().massMsun(), within(0.002));
         assertThat(finer.get(0).convCore().massMsun()).isCloseTo(first.get(0).convCore().massMsun(), within(0.002));
-        assertThat(CatalogueReader.read(dir.resolve("catalogue.csv")).stream().map(CatalogueRow::modelId))
+        assertThat(CatalogueReader.read(dir.resolve("catalogue.ecsv")).stream().map(CatalogueRow::modelId))
                 .contains("p0-z00-r010-a00").doesNotHaveDuplicates();
         // a plain recompute of a refined catalogue gives the refined answer again
         assertThat(harness(lines).execute("transitions", "twice").code()).isEqualTo(0);
@@ -138,7 +136,7 @@ class TransitionsCommandTest {
                 .code()).isEqualTo(0);
         assertThat(harness(new FakeMassLines(Set.of())).execute("transitions", "two", "--refine", "--threads", "3")
                 .code()).isEqualTo(0);
-        for (String file : List.of("catalogue.csv", "transitions.csv")) {
+        for (String file : List.of("catalogue.ecsv", "transitions.csv")) {
             assertThat(Files.readAllBytes(work.resolve("two").resolve(file)))
                     .isEqualTo(Files.readAllBytes(work.resolve("one").resolve(file)));
         }
@@ -160,11 +158,11 @@ class TransitionsCommandTest {
         assertThat(z0.method()).isEqualTo(TransitionMethod.REFINED);
         assertThat(done.err()).contains("the model at 0.375 Msun failed");
         // again: the known failure is neither recomputed nor appended twice, and the table says the same
-        byte[] catalogue = Files.readAllBytes(dir.resolve("catalogue.csv"));
+        byte[] catalogue = Files.readAllBytes(dir.resolve("catalogue.ecsv"));
         byte[] table = Files.readAllBytes(dir.resolve("transitions.csv"));
         FakeMassLines lines = new FakeMassLines(Set.of(0.375));
         assertThat(harness(lines).execute("transitions", "failing", "--refine").code()).isEqualTo(0);
-        assertThat(Files.readAllBytes(dir.resolve("catalogue.csv"))).isEqualTo(catalogue);
+        assertThat(Files.readAllBytes(dir.resolve("catalogue.ecsv"))).isEqualTo(catalogue);
         assertThat(Files.readAllBytes(dir.resolve("transitions.csv"))).isEqualTo(table);
     }
 
@@ -174,14 +172,14 @@ class TransitionsCommandTest {
         FlickeringFake fake = new FlickeringFake();
         CliHarness h = CliHarness.in(work, FakeChunkSolver.fast());
         h = h.with(h.context().withSolvers(g -> fake).withLines(fake));
-        assertThat(h.execute("run", grid.toString(), "--out", "flicker", "--quiet").code()).isEqualTo(0);
+        assertThat(h.execute("run", "--no-refine", grid.toString(), "--out", "flicker", "--quiet").code()).isEqualTo(0);
         Path dir = work.resolve("flicker");
         TransitionRow before = transitions(dir).get(0);
         assertThat(before.convCore().crossings()).hasSize(3);
         assertThat(before.convCore().bracket().hi()).isEqualTo(0.45);
         // a copy refined at the reported crossings (the lowest core onset and the lasting core's onset) says
         // which crossing stays wide: the upper end of the window
-        CliHarness.Execution copy = h.execute("run", grid.toString(), "--out", "reported", "--quiet");
+        CliHarness.Execution copy = h.execute("run", "--no-refine", grid.toString(), "--out", "reported", "--quiet");
         assertThat(copy.code()).isEqualTo(0);
         assertThat(h.execute("transitions", "reported", "--refine").code()).isEqualTo(0);
         TransitionRow reported = transitions(work.resolve("reported")).get(0);
@@ -213,7 +211,7 @@ class TransitionsCommandTest {
         FlickeringFake fake = new FlickeringFake(0.355, 0.36, 0.37);
         CliHarness h = CliHarness.in(work, FakeChunkSolver.fast());
         h = h.with(h.context().withSolvers(g -> fake).withLines(fake));
-        assertThat(h.execute("run", grid.toString(), "--out", "missed", "--quiet").code()).isEqualTo(0);
+        assertThat(h.execute("run", "--no-refine", grid.toString(), "--out", "missed", "--quiet").code()).isEqualTo(0);
         Path dir = work.resolve("missed");
         assertThat(transitions(dir).get(0).convCore().bracket().lo()).isEqualTo(1.2);
         assertThat(h.execute("transitions", "missed", "--refine").code()).isEqualTo(0);
@@ -224,7 +222,7 @@ class TransitionsCommandTest {
         assertThat(h.execute("transitions", "missed").code()).isEqualTo(0);
         assertThat(transitions(dir).get(0).notes()).contains("lies outside the grid bracket 1.2-1.25 Msun");
         // with every crossing asked for, a second round refines the crossings the first round revealed
-        assertThat(h.execute("run", grid.toString(), "--out", "every", "--quiet").code()).isEqualTo(0);
+        assertThat(h.execute("run", "--no-refine", grid.toString(), "--out", "every", "--quiet").code()).isEqualTo(0);
         assertThat(h.execute("transitions", "every", "--refine", "--all-crossings").code()).isEqualTo(0);
         TransitionRow every = transitions(work.resolve("every")).get(0);
         assertThat(every.convCore().crossings()).hasSize(3)
@@ -238,13 +236,13 @@ class TransitionsCommandTest {
         Path dir = finishedRun("done");
         assertThat(harness(new FakeMassLines(Set.of())).execute("transitions", "done", "--refine").code())
                 .isEqualTo(0);
-        byte[] catalogue = Files.readAllBytes(dir.resolve("catalogue.csv"));
-        CliHarness.Execution resumed = harness(new FakeMassLines(Set.of())).execute("run",
+        byte[] catalogue = Files.readAllBytes(dir.resolve("catalogue.ecsv"));
+        CliHarness.Execution resumed = harness(new FakeMassLines(Set.of())).execute("run", "--no-refine",
                 work.resolve("survey.yaml").toString(), "--out", "done", "--resume", "--quiet");
         assertThat(resumed.code()).isEqualTo(2);
         assertThat(resumed.err()).contains("holds models added by 'convgrid transitions --refine'")
                 .contains("cannot be resumed");
-        assertThat(Files.readAllBytes(dir.resolve("catalogue.csv"))).isEqualTo(catalogue);
+        assertThat(Files.readAllBytes(dir.resolve("catalogue.ecsv"))).isEqualTo(catalogue);
         CliHarness.Execution merged = harness(new FakeMassLines(Set.of())).execute("merge", "done", "--out", "m");
         assertThat(merged.code()).isEqualTo(2);
         assertThat(merged.err()).contains("20 model(s) added by 'convgrid transitions --refine'");
@@ -254,7 +252,7 @@ class TransitionsCommandTest {
     void refusesShardsAndUnfinishedRunsAndBadOptions() throws Exception {
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
         FakeMassLines lines = new FakeMassLines(Set.of());
-        assertThat(harness(lines).execute("run", grid.toString(), "--shard", "1/2", "--out", "s1", "--quiet").code())
+        assertThat(harness(lines).execute("run", "--no-refine", grid.toString(), "--shard", "1/2", "--out", "s1", "--quiet").code())
                 .isEqualTo(0);
         CliHarness.Execution shard = harness(lines).execute("transitions", "s1", "--refine");
         assertThat(shard.code()).isEqualTo(2);
@@ -265,7 +263,6 @@ class TransitionsCommandTest {
         assertThat(harness(lines).execute("transitions", "open", "--refine").err()).contains("has not finished");
         assertThat(harness(lines).execute("transitions", "open", "--refine", "--tolerance", "0").code())
                 .isEqualTo(2);
-        assertThat(harness(lines).execute("transitions", "open", "--core-threshold", "1").code()).isEqualTo(2);
         assertThat(harness(lines).execute("transitions", "nowhere").code()).isEqualTo(2);
         assertThat(lines.solved.get()).isZero();
     }
@@ -274,7 +271,7 @@ class TransitionsCommandTest {
     void helpStatesUnitsAndDefinitions() {
         String help = harness(new FakeMassLines(Set.of())).execute("transitions", "--help").out()
                 .replaceAll("\\s+", " ");
-        assertThat(help).contains("--tolerance=MSUN", "solar masses", "0.002", "--core-threshold", "0.001",
+        assertThat(help).contains("--tolerance=MSUN", "solar masses", "0.002", "core threshold", "0.001",
                 "mass fraction m/M", "criterion is the one the run used", "every crossing is listed",
                 "p<i>-z<i>-r<n>-a<i>", "zero-age", "refine every crossing");
     }

@@ -58,10 +58,10 @@ public final class GridHash {
         text.append("mixing_length=").append(physics.mixingLengths()).append('\n');
         text.append("overshoot=").append(physics.overshoots()).append('\n');
         text.append("criterion=").append(physics.criteria()).append('\n');
-        text.append("opacity_factor=").append(physics.opacityFactors()).append('\n');
+        text.append("opacity_scale=").append(physics.opacityScales()).append('\n');
         if (physics.overshootScheme() != OvershootScheme.STEP) {
             // step grids keep their original lines, so the fingerprints of existing runs do not change
-            text.append("overshoot_scheme=").append(physics.overshootScheme().label()).append('\n');
+            text.append("overshoot_profile=").append(physics.overshootScheme().label()).append('\n');
         }
         if (physics.atmosphere() != AtmosphereChoice.EDDINGTON) {
             text.append("atmosphere=").append(physics.atmosphere().label()).append('\n');

@@ -18,6 +18,8 @@ public enum GridProblemKind {
     OUT_OF_RANGE,
     /** A name that is none of the allowed choices. */
     UNKNOWN_CHOICE,
+    /** A key earlier versions accepted under another name; the message names the new one. */
+    RENAMED_KEY,
     /** A file the grid names (a preset, an opacity table) that cannot be read or used. */
     UNREADABLE_FILE
 }

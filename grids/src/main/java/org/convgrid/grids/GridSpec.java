@@ -26,9 +26,11 @@ import org.convgrid.engine.units.Constants;
  * @param physics the physics axes
  * @param outputDir the run directory as written in the file (relative paths are the caller's to resolve)
  * @param profiles whether one profile file per model is wanted
+ * @param transitions whether and how finely {@code run} refines the transition masses
  */
 public record GridSpec(String title, List<Double> massesMsun, List<MetallicityPoint> metallicities,
-                       AgeAxis ages, PhysicsAxes physics, String outputDir, boolean profiles) {
+                       AgeAxis ages, PhysicsAxes physics, String outputDir, boolean profiles,
+                       TransitionSettings transitions) {
 
     /** Largest grid {@link #expand()} materialises; iterate {@link #requests()} beyond it. */
     public static final long MAX_EXPANDED = 1_000_000L;
@@ -41,9 +43,16 @@ public record GridSpec(String title, List<Double> massesMsun, List<MetallicityPo
         Objects.requireNonNull(ages, "ages");
         ages = new AgeAxis(ages.fractions(), increasing(ages.values(), "age"));
         Objects.requireNonNull(physics, "physics");
+        Objects.requireNonNull(transitions, "transitions");
         if (metallicities.isEmpty()) {
             throw new IllegalArgumentException("metallicity axis is empty");
         }
+    }
+
+    /** A grid with the default transition settings. */
+    public GridSpec(String title, List<Double> massesMsun, List<MetallicityPoint> metallicities, AgeAxis ages,
+                    PhysicsAxes physics, String outputDir, boolean profiles) {
+        this(title, massesMsun, metallicities, ages, physics, outputDir, profiles, TransitionSettings.DEFAULT);
     }
 
     /** A grid with ages in Gyr. */

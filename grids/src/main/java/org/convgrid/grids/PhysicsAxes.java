@@ -16,46 +16,46 @@ import org.convgrid.engine.request.PhysicsOptions;
  * @param overshoots overshoot parameters, each &gt;= 0: alpha_ov (pressure scale heights) for the step scheme, f for
  *                   the exponential one
  * @param criteria stability criteria
- * @param opacityFactors opacity multipliers, each &gt; 0
+ * @param opacityScales opacity multipliers, each &gt; 0
  * @param opacity the built-in opacity or a user table (read once, its path resolved against the grid file's
  *                folder)
  * @param atmosphere the grey T(tau) relation of the surface boundary (one value for the whole grid)
  * @param overshootScheme step or exponential overshoot (one value for the whole grid)
  */
 public record PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, List<StabilityCriterion> criteria,
-                          List<Double> opacityFactors, OpacityChoice opacity, AtmosphereChoice atmosphere,
+                          List<Double> opacityScales, OpacityChoice opacity, AtmosphereChoice atmosphere,
                           OvershootScheme overshootScheme) {
 
     /** Axes with step overshoot. */
     public PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, List<StabilityCriterion> criteria,
-                       List<Double> opacityFactors, OpacityChoice opacity, AtmosphereChoice atmosphere) {
-        this(mixingLengths, overshoots, criteria, opacityFactors, opacity, atmosphere, OvershootScheme.STEP);
+                       List<Double> opacityScales, OpacityChoice opacity, AtmosphereChoice atmosphere) {
+        this(mixingLengths, overshoots, criteria, opacityScales, opacity, atmosphere, OvershootScheme.STEP);
     }
 
     /** Axes with the default atmosphere. */
     public PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, List<StabilityCriterion> criteria,
-                       List<Double> opacityFactors, OpacityChoice opacity) {
-        this(mixingLengths, overshoots, criteria, opacityFactors, opacity, AtmosphereChoice.DEFAULT);
+                       List<Double> opacityScales, OpacityChoice opacity) {
+        this(mixingLengths, overshoots, criteria, opacityScales, opacity, AtmosphereChoice.DEFAULT);
     }
 
     /** Axes with the built-in opacity. */
     public PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, List<StabilityCriterion> criteria,
-                       List<Double> opacityFactors) {
-        this(mixingLengths, overshoots, criteria, opacityFactors, OpacityChoice.BUILT_IN);
+                       List<Double> opacityScales) {
+        this(mixingLengths, overshoots, criteria, opacityScales, OpacityChoice.BUILT_IN);
     }
 
     /** One value per axis: the engine defaults. */
     public static final PhysicsAxes DEFAULT = new PhysicsAxes(List.of(PhysicsOptions.DEFAULT.mixingLength()),
             List.of(PhysicsOptions.DEFAULT.overshoot()), List.of(PhysicsOptions.DEFAULT.criterion()),
-            List.of(PhysicsOptions.DEFAULT.opacityFactor()));
+            List.of(PhysicsOptions.DEFAULT.opacityScale()));
 
     public PhysicsAxes {
         mixingLengths = nonEmpty(mixingLengths, "mixing_length");
         overshoots = nonEmpty(overshoots, "overshoot");
         criteria = nonEmpty(criteria, "criterion");
-        opacityFactors = nonEmpty(opacityFactors, "opacity_factor");
+        opacityScales = nonEmpty(opacityScales, "opacity_scale");
         if (overshootScheme == null) {
-            throw new IllegalArgumentException("overshoot_scheme must not be null");
+            throw new IllegalArgumentException("the overshoot profile must not be null");
         }
         if (opacity == null) {
             throw new IllegalArgumentException("opacity must not be null");
@@ -69,7 +69,7 @@ public record PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, L
 
     /** Number of physics combinations. */
     public int size() {
-        return mixingLengths.size() * overshoots.size() * criteria.size() * opacityFactors.size();
+        return mixingLengths.size() * overshoots.size() * criteria.size() * opacityScales.size();
     }
 
     /** Every combination, in the documented order; index i of this list is the {@code p} index of model ids. */
@@ -78,7 +78,7 @@ public record PhysicsAxes(List<Double> mixingLengths, List<Double> overshoots, L
         for (double alpha : mixingLengths) {
             for (double overshoot : overshoots) {
                 for (StabilityCriterion criterion : criteria) {
-                    for (double factor : opacityFactors) {
+                    for (double factor : opacityScales) {
                         all.add(new PhysicsOptions(alpha, overshoot, criterion, factor, opacity, atmosphere,
                                 overshootScheme));
                     }

@@ -7,8 +7,9 @@ import java.math.RoundingMode;
 /**
  * The number format of every CSV file convgrid writes: locale-independent, deterministic (the same double always
  * gives the same text), {@value #SIGNIFICANT_DIGITS} significant digits rounded half-even, plain form for
- * 1e-4 &lt;= |x| &lt; 1e7 and {@code 1.234e-05} form outside; trailing zeros dropped; NaN written as the empty cell
- * ("not applicable"). The {@code lo-hi} spans use a fixed-point form instead, because an exponent's minus sign would
+ * 1e-4 &lt;= |x| &lt; 1e7 and {@code 1.234e-05} form outside; trailing zeros dropped, but a real always keeps a
+ * decimal point ({@code 0.0}, {@code 2.0}, {@code 1.0e+07}) so that readers type the column as real whatever the
+ * values; NaN written as the empty cell ("not applicable"). The {@code lo-hi} spans use a fixed-point form instead, because an exponent's minus sign would
  * be ambiguous there.
  */
 public final class CsvNumbers {
@@ -34,16 +35,20 @@ public final class CsvNumbers {
             return value > 0 ? "inf" : "-inf";
         }
         if (value == 0.0) {
-            return "0";
+            return "0.0";
         }
         BigDecimal rounded = new BigDecimal(value).round(ROUNDING).stripTrailingZeros();
         int exponent = rounded.precision() - rounded.scale() - 1;
         if (exponent >= PLAIN_MIN_EXPONENT && exponent <= PLAIN_MAX_EXPONENT) {
-            return rounded.toPlainString();
+            return withPoint(rounded.toPlainString());
         }
-        String mantissa = rounded.movePointLeft(exponent).toPlainString();
+        String mantissa = withPoint(rounded.movePointLeft(exponent).toPlainString());
         int magnitude = Math.abs(exponent);
         return mantissa + "e" + (exponent < 0 ? "-" : "+") + (magnitude < 10 ? "0" : "") + magnitude;
+    }
+
+    private static String withPoint(String digits) {
+        return digits.indexOf('.') >= 0 ? digits : digits + ".0";
     }
 
     /** Fixed-point text with at most {@value #SPAN_DECIMALS} decimals, for values inside {@code lo-hi} spans. */

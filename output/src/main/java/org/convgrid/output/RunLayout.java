@@ -11,8 +11,12 @@ import java.nio.file.Path;
  */
 public record RunLayout(Path root) {
 
-    /** One row per model, in grid order. */
-    public static final String CATALOGUE = "catalogue.csv";
+    /** One row per model, in grid order (catalogue v2, ECSV). */
+    public static final String CATALOGUE = "catalogue.ecsv";
+    /** The catalogue of run directories written before catalogue v2; only recognised, to say so. */
+    public static final String CATALOGUE_V1 = "catalogue.csv";
+    /** One row per convective zone of every model, in catalogue order. */
+    public static final String ZONES = "zones.csv";
     /** Transition masses per slice. */
     public static final String TRANSITIONS = "transitions.csv";
     /** Provenance of the run. */
@@ -34,6 +38,24 @@ public record RunLayout(Path root) {
 
     public Path catalogue() {
         return root.resolve(CATALOGUE);
+    }
+
+    public Path zones() {
+        return root.resolve(ZONES);
+    }
+
+    /**
+     * Refuses a run directory written before catalogue v2 (a {@code catalogue.csv} and no {@code catalogue.ecsv}):
+     * this version neither reads nor continues it.
+     *
+     * @throws OutputFormatException of kind run conflict, naming the way out
+     */
+    public void refuseEarlierFormat() {
+        if (!java.nio.file.Files.exists(catalogue()) && java.nio.file.Files.exists(root.resolve(CATALOGUE_V1))) {
+            throw OutputFormatException.earlierRunDirectory(root + " was written by an earlier convgrid ("
+                    + CATALOGUE_V1 + ", catalogue v1); this version reads " + CATALOGUE + " (catalogue v2): "
+                    + "run the grid again into a new --out (see the README, \"Catalogue\")");
+        }
     }
 
     public Path transitions() {

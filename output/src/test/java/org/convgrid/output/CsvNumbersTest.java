@@ -13,19 +13,19 @@ class CsvNumbersTest {
 
     @Test
     void plainInsideTheMiddleRangeExponentOutside() {
-        assertThat(CsvNumbers.format(1.0)).isEqualTo("1");
+        assertThat(CsvNumbers.format(1.0)).isEqualTo("1.0");
         assertThat(CsvNumbers.format(0.35)).isEqualTo("0.35");
         assertThat(CsvNumbers.format(-2.5)).isEqualTo("-2.5");
         assertThat(CsvNumbers.format(0.0001)).isEqualTo("0.0001");
         assertThat(CsvNumbers.format(0.00012345)).isEqualTo("0.00012345");
-        assertThat(CsvNumbers.format(1234567.0)).isEqualTo("1234567");
+        assertThat(CsvNumbers.format(1234567.0)).isEqualTo("1234567.0");
         assertThat(CsvNumbers.format(12345678.0)).isEqualTo("1.234568e+07");
         assertThat(CsvNumbers.format(1.2345678e-5)).isEqualTo("1.234568e-05");
         assertThat(CsvNumbers.format(3.828e33)).isEqualTo("3.828e+33");
         assertThat(CsvNumbers.format(0.1 + 0.2)).isEqualTo("0.3");
-        assertThat(CsvNumbers.format(-0.0)).isEqualTo("0");
+        assertThat(CsvNumbers.format(-0.0)).isEqualTo("0.0");
         assertThat(CsvNumbers.format(Double.NaN)).isEmpty();
-        assertThat(CsvNumbers.format(1e-300)).isEqualTo("1e-300");
+        assertThat(CsvNumbers.format(1e-300)).isEqualTo("1.0e-300");
     }
 
     @Test

@@ -66,10 +66,10 @@ public record RunData(List<CatalogueRow> catalogue, List<TransitionRow> transiti
         return List.copyOf(found.values());
     }
 
-    /** Reads a run directory; catalogue.csv must exist, everything else is optional. */
+    /** Reads a run directory; catalogue.ecsv must exist, everything else is optional. */
     public static RunData read(Path runDir) throws IOException {
         RunLayout layout = new RunLayout(runDir);
-        List<CatalogueRow> catalogue = CatalogueReader.read(layout.catalogue());
+        List<CatalogueRow> catalogue = CatalogueReader.readWithZones(layout.catalogue(), layout.zones());
         Path transitionsFile = layout.transitions();
         boolean fromFile = Files.isRegularFile(transitionsFile);
         List<TransitionRow> transitions;

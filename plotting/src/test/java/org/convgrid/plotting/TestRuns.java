@@ -14,8 +14,12 @@ import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.output.Span;
+import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.catalogue.CatalogueWriter;
+import org.convgrid.output.catalogue.CatalogueZone;
+import org.convgrid.output.catalogue.CatalogueZone.ZoneKind;
+import org.convgrid.output.catalogue.ZoneTable;
 import org.convgrid.output.manifest.RunManifest;
 import org.convgrid.output.manifest.RunManifestWriter;
 import org.convgrid.output.transitions.TransitionFinder;
@@ -66,9 +70,9 @@ public final class TestRuns {
             ModelStatus status = fail ? ModelStatus.NOT_CONVERGED : ModelStatus.PAST_MAIN_SEQUENCE;
             String why = fail ? "Newton budget of 40 iterations used up, last correction 3.2e-3"
                     : "core hydrogen exhausted at " + SliceLabels.number(lifetime) + " Gyr";
-            return new CatalogueRow(id, m, z, 0.2485 + 1.5 * z, p.mixingLength(), p.overshoot(), age, status, why,
-                    Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, null,
-                    Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, List.of(), 40,
+            return new CatalogueRow(id, m, z, 0.2485 + 1.5 * z, p.mixingLength(), p.overshoot(), age, "", status, why,
+                    Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN,
+                    null, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, List.of(), 40,
                     StabilityCriterion.SCHWARZSCHILD, 1.0, Double.NaN);
         }
         // Z = 0 rows (metal-free grids) get the factor of Z = 1e-4 instead of an infinite one
@@ -79,15 +83,14 @@ public final class TestRuns {
         double teff = 5772.0 * Math.pow(lum / (radius * radius), 0.25);
         double fcLimit = 0.35 + 2.0 * (z - 0.014);
         double coreOnset = 1.1 + 6.0 * (z - 0.014);
-        List<Span> zones = new ArrayList<>();
+        List<CatalogueZone> zones = new ArrayList<>();
         StructureClass cls;
-        double core = 0.0;
-        double envBase = 1.0;
-        double envRadius = 1.0;
+        double core = Double.NaN;
+        double envBase = Double.NaN;
+        double envRadius = Double.NaN;
         if (m <= fcLimit) {
             cls = StructureClass.FULLY_CONVECTIVE;
-            zones.add(new Span(0, 1));
-            core = 1.0;
+            zones.add(new CatalogueZone(ZoneKind.WHOLE_STAR, 0, 1, 0, 1));
             envBase = 0.0;
             envRadius = 0.0;
         } else {
@@ -95,21 +98,22 @@ public final class TestRuns {
             boolean hasEnvelope = m < 1.5;
             if (hasCore) {
                 core = round(Math.min(0.25, 0.02 + 0.16 * (m - coreOnset)) * (1.0 - 0.3 * age / lifetime));
-                zones.add(new Span(0, core));
+                zones.add(new CatalogueZone(ZoneKind.CORE, 0, core, 0, core));
             }
             if (hasEnvelope) {
                 envBase = round(1.0 - 0.6 * Math.exp(-(m - fcLimit) / 0.17));
                 envRadius = round(1.0 - 0.7 * Math.exp(-(m - fcLimit) / 0.45));
-                zones.add(new Span(envBase, 1));
+                zones.add(new CatalogueZone(ZoneKind.ENVELOPE, envBase, 1, envRadius, 1));
             }
             cls = hasCore && hasEnvelope ? StructureClass.CONV_CORE_AND_ENVELOPE
                     : hasCore ? StructureClass.CONV_CORE : hasEnvelope ? StructureClass.CONV_ENVELOPE
                     : StructureClass.RADIATIVE;
         }
         double logG = 4.438 + Math.log10(m / (radius * radius));
-        return new CatalogueRow(id, m, z, 0.2485 + 1.5 * z, p.mixingLength(), p.overshoot(), age, ModelStatus.OK, "",
-                lum, radius, teff, logG, 1.5e7 * Math.pow(m, 0.5), 150.0 / m, 0.7 * (1 - 0.5 * age / lifetime),
-                cls, core, envBase, envRadius, (1.0 - envBase) * m, envBase < 1 ? 20.0 / m : Double.NaN, zones, 7,
+        return new CatalogueRow(id, m, z, 0.2485 + 1.5 * z, p.mixingLength(), p.overshoot(), age,
+                CatalogueRow.MAIN_SEQUENCE, ModelStatus.OK, "", lum, radius, teff, logG, 1.5e7 * Math.pow(m, 0.5),
+                150.0 / m, 0.7 * (1 - 0.5 * age / lifetime), Double.NaN, cls, core, core, envBase, envRadius,
+                (1.0 - envBase) * m, envBase < 1 ? 20.0 / m : Double.NaN, zones, 7,
                 StabilityCriterion.SCHWARZSCHILD, 1.0, Double.NaN);
     }
 
@@ -124,7 +128,10 @@ public final class TestRuns {
         try (CatalogueWriter w = CatalogueWriter.startingWithHeader(catalogue)) {
             w.writeAll(rows);
         }
-        Files.writeString(dir.resolve("catalogue.csv"), catalogue.toString());
+        Files.writeString(dir.resolve(RunLayout.CATALOGUE), catalogue.toString());
+        StringBuilder zoneLines = new StringBuilder(ZoneTable.headerLine());
+        rows.forEach(r -> zoneLines.append(ZoneTable.lines(r)));
+        Files.writeString(dir.resolve(RunLayout.ZONES), zoneLines);
         StringWriter transitions = new StringWriter();
         TransitionWriter.write(TransitionFinder.withDefaults().find(rows), transitions);
         Files.writeString(dir.resolve("transitions.csv"), transitions.toString());

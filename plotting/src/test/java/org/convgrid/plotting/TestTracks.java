@@ -55,8 +55,8 @@ public final class TestTracks {
             double burnLo = share > 0.85 ? round(0.4 * burnHi * (share - 0.85) / 0.15) : 0.0;
             b.append(String.join(",", CsvNumbers.format(age), CsvNumbers.format(r.luminosityLsun()),
                     CsvNumbers.format(r.radiusRsun()), CsvNumbers.format(r.teffK()), CsvNumbers.format(r.logGCgs()),
-                    CsvNumbers.format(r.centerTempK()), CsvNumbers.format(r.centerDensityCgs()),
-                    CsvNumbers.format(r.centerHFrac()), Span.join(zones), new Span(burnLo, burnHi).toString(),
+                    CsvNumbers.format(r.centralTempK()), CsvNumbers.format(r.centralDensityCgs()),
+                    CsvNumbers.format(r.centralHFrac()), Span.join(zones), new Span(burnLo, burnHi).toString(),
                     Integer.toString(5 + k % 3))).append('\n');
         }
         return b.toString();

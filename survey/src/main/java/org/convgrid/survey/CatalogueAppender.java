@@ -9,20 +9,25 @@ import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.batch.OutcomeSink;
+import org.convgrid.output.RunLayout;
+import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.catalogue.CatalogueWriter;
+import org.convgrid.output.catalogue.ZoneTable;
 import org.convgrid.output.catalogue.OutcomeRows;
 
 /**
- * Appends outcomes to catalogue.csv, one flushed row at a time, so an interrupted run loses at most the row being
- * written. Line breaks inside a status detail become spaces: one row is one line, which is what lets a resume cut a
+ * Appends outcomes to the catalogue and their zones to the zones file beside it, one flushed row at a time, so an
+ * interrupted run loses at most the row being written (a resume keeps the zones of the kept rows only). Line breaks inside a status detail become spaces: one row is one line, which is what lets a resume cut a
  * half-written row off at the last line feed.
  */
 public final class CatalogueAppender implements OutcomeSink, Closeable {
 
     private final CatalogueWriter writer;
+    private final Writer zones;
 
-    private CatalogueAppender(CatalogueWriter writer) {
+    private CatalogueAppender(CatalogueWriter writer, Writer zones) {
         this.writer = writer;
+        this.zones = zones;
     }
 
     /** Opens the catalogue for appending, writing the header first when {@code withHeader}. */
@@ -31,14 +36,25 @@ public final class CatalogueAppender implements OutcomeSink, Closeable {
                 StandardOpenOption.WRITE, StandardOpenOption.APPEND);
         CatalogueWriter writer = withHeader ? CatalogueWriter.startingWithHeader(out) : CatalogueWriter.continuing(out);
         writer.flush();
-        return new CatalogueAppender(writer);
+        Path zonesFile = catalogue.resolveSibling(RunLayout.ZONES);
+        boolean zonesHeader = !Files.exists(zonesFile) || Files.size(zonesFile) == 0;
+        Writer zones = Files.newBufferedWriter(zonesFile, StandardCharsets.UTF_8, StandardOpenOption.CREATE,
+                StandardOpenOption.WRITE, StandardOpenOption.APPEND);
+        if (zonesHeader) {
+            zones.write(ZoneTable.headerLine());
+        }
+        zones.flush();
+        return new CatalogueAppender(writer, zones);
     }
 
     @Override
     public void accept(ModelOutcome o) throws IOException {
         ModelOutcome oneLine = o instanceof ModelOutcome.Failed f
                 ? new ModelOutcome.Failed(f.request(), f.status(), oneLine(f.statusDetail()), f.solverIterations()) : o;
-        writer.write(OutcomeRows.toRow(oneLine));
+        CatalogueRow row = OutcomeRows.toRow(oneLine);
+        zones.write(ZoneTable.lines(row));
+        zones.flush();
+        writer.write(row);
         writer.flush();
     }
 
@@ -48,6 +64,8 @@ public final class CatalogueAppender implements OutcomeSink, Closeable {
 
     @Override
     public void close() throws IOException {
-        writer.close();
+        try (Writer z = zones) {
+            writer.close();
+        }
     }
 }

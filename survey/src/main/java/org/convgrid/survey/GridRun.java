@@ -90,6 +90,7 @@ public final class GridRun {
      */
     public Plan prepare(Settings s) throws IOException {
         RunDirectory dir = s.directory();
+        new RunLayout(dir.root()).refuseEarlierFormat();
         if (s.resume() && dir.holdsRun()) {
             return resume(s);
         }

@@ -11,7 +11,10 @@ import java.util.Iterator;
 import java.util.List;
 import java.util.Set;
 import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueReader;
+import org.convgrid.output.catalogue.ZoneTable;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.RefinedModelIds;
 
@@ -69,7 +72,28 @@ public record KeptCatalogue(Set<String> ids, boolean hasHeader, long droppedByte
                 channel.truncate(complete);
             }
         }
+        keepZonesOf(catalogue.resolveSibling(RunLayout.ZONES), ids);
         return new KeptCatalogue(Set.copyOf(ids), complete > 0, bytes.length - complete);
+    }
+
+    /**
+     * Keeps the zone lines of the kept models only (zones are written just before their catalogue row, so an
+     * interruption can leave the zones of a row that never made it), and drops a half-written last line.
+     */
+    private static void keepZonesOf(Path zones, Set<String> ids) throws IOException {
+        if (!Files.exists(zones)) {
+            return;
+        }
+        byte[] bytes = Files.readAllBytes(zones);
+        String text = new String(bytes, 0, lastLineEnd(bytes), StandardCharsets.UTF_8);
+        StringBuilder kept = new StringBuilder(ZoneTable.headerLine());
+        for (String line : text.split("\n")) {
+            int comma = line.indexOf(',');
+            if (comma > 0 && ids.contains(line.substring(0, comma))) {
+                kept.append(line).append('\n');
+            }
+        }
+        AtomicFiles.writeString(zones, kept.toString());
     }
 
     /**

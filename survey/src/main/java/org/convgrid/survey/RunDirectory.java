@@ -15,6 +15,7 @@ import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.OutputFormatException;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueWriter;
+import org.convgrid.output.catalogue.ZoneTable;
 import org.convgrid.output.manifest.RunManifestReader;
 
 /**
@@ -41,6 +42,10 @@ public final class RunDirectory {
 
     public Path catalogue() {
         return layout.catalogue();
+    }
+
+    public Path zones() {
+        return layout.zones();
     }
 
     public Path transitions() {
@@ -85,7 +90,8 @@ public final class RunDirectory {
 
     /** Whether a catalogue or a manifest is already there. */
     public boolean holdsRun() {
-        return Files.exists(catalogue()) || Files.exists(manifest());
+        return Files.exists(catalogue()) || Files.exists(manifest())
+                || Files.exists(root().resolve(RunLayout.CATALOGUE_V1));
     }
 
     /** The catalogue's header line, with its line end, exactly as {@link CatalogueWriter} writes it. */
@@ -110,6 +116,8 @@ public final class RunDirectory {
             AtomicFiles.writeString(manifest(), manifestYaml);
             Files.writeString(catalogue(), catalogueHeader(), StandardCharsets.UTF_8, StandardOpenOption.CREATE_NEW,
                     StandardOpenOption.WRITE);
+            Files.writeString(zones(), ZoneTable.headerLine(), StandardCharsets.UTF_8, StandardOpenOption.CREATE,
+                    StandardOpenOption.TRUNCATE_EXISTING, StandardOpenOption.WRITE);
         } catch (IOException e) {
             undo(top);
             throw new IOException("cannot create run directory " + root() + ": " + IoMessages.reason(e), e);
@@ -118,7 +126,8 @@ public final class RunDirectory {
 
     /** Removes the run's own tables (catalogue, transitions, manifest), for {@code --force}. */
     public void clear() throws IOException {
-        for (Path file : List.of(catalogue(), transitions(), manifest())) {
+        for (Path file : List.of(catalogue(), zones(), transitions(), manifest(),
+                root().resolve(RunLayout.CATALOGUE_V1))) {
             Files.deleteIfExists(file);
         }
     }
@@ -129,6 +138,7 @@ public final class RunDirectory {
                 deleteTree(top);
             } else {
                 Files.deleteIfExists(catalogue());
+                Files.deleteIfExists(zones());
                 Files.deleteIfExists(manifest());
             }
         } catch (IOException | UncheckedIOException e) {

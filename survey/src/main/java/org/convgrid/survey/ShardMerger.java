@@ -7,7 +7,9 @@ import java.time.Clock;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Objects;
 import java.util.stream.Stream;
 import org.convgrid.grids.GridHash;
@@ -17,6 +19,8 @@ import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.catalogue.CatalogueZone;
+import org.convgrid.output.catalogue.ZoneTable;
 import org.convgrid.output.manifest.RunManifest;
 import org.convgrid.output.manifest.RunManifestReader;
 
@@ -49,6 +53,7 @@ public final class ShardMerger {
             if (dir.root().equals(out.root())) {
                 throw new RunSetupException("--out " + out.root() + " is one of the directories to merge");
             }
+            new RunLayout(dir.root()).refuseEarlierFormat();
             if (!Files.isRegularFile(dir.manifest()) || !Files.isRegularFile(dir.catalogue())) {
                 throw new RunSetupException(dir.root() + " is not a run directory (needs " + RunLayout.MANIFEST
                         + " and " + RunLayout.CATALOGUE + ")");
@@ -75,6 +80,7 @@ public final class ShardMerger {
             });
             copyTracks(shards, out);
             List<CatalogueRow> mergedRows = CatalogueReader.read(out.catalogue());
+            writeZones(shards, out, mergedRows);
             run = RunFinishing.writeTables(out, grid, merged(manifests, mergedRows), mergedRows);
         } catch (IOException e) {
             if (top != null) {
@@ -86,6 +92,24 @@ public final class ShardMerger {
         }
         RunFinishing.callFinishers(run, finishers);
         return run;
+    }
+
+    /** Joins the shards' zones files, in the merged catalogue's order. */
+    private static void writeZones(List<Path> shards, RunDirectory out, List<CatalogueRow> mergedRows)
+            throws IOException {
+        Map<String, List<CatalogueZone>> zones = new HashMap<>();
+        for (Path shard : shards) {
+            Path file = new RunDirectory(shard).zones();
+            if (Files.isRegularFile(file)) {
+                zones.putAll(ZoneTable.read(file));
+            }
+        }
+        AtomicFiles.write(out.zones(), w -> {
+            w.append(ZoneTable.headerLine());
+            for (CatalogueRow row : mergedRows) {
+                w.append(ZoneTable.lines(row.withZones(zones.getOrDefault(row.modelId(), List.of()))));
+            }
+        });
     }
 
     /** Copies every shard's track files (each star is computed by one shard only) into the merged directory. */

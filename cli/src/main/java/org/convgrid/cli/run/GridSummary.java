@@ -42,7 +42,7 @@ public final class GridSummary {
         lines.add("physics:       " + physics.size() + (physics.size() == 1 ? " combination" : " combinations"));
         for (PhysicsOptions p : physics) {
             lines.add("  mixing length " + n(p.mixingLength()) + " Hp, overshoot " + n(p.overshoot()) + " Hp, "
-                    + p.criterion().name().toLowerCase(Locale.ROOT) + ", opacity x" + n(p.opacityFactor()));
+                    + p.criterion().name().toLowerCase(Locale.ROOT) + ", opacity x" + n(p.opacityScale()));
         }
         lines.add("models:        " + g.count());
         double seconds = g.estimateSeconds(ModelCost.constant(secondsPerModel), threads);
@@ -60,7 +60,8 @@ public final class GridSummary {
         return head + "from " + n(values.get(0)) + " to " + n(values.get(values.size() - 1)) + " " + unit;
     }
 
-    private static String n(double value) {
-        return CsvNumbers.format(value);
+    /** A number for people: the file format without the ".0" that marks reals for table readers. */
+    public static String n(double value) {
+        return CsvNumbers.format(value).replaceFirst("\\.0(?=$|e)", "");
     }
 }

@@ -3,7 +3,7 @@ package org.convgrid.engine.convection;
 import java.util.List;
 
 /**
- * Where a model is convective, with the quantities the catalogue reports (conventions.md).
+ * Where a model is convective, with the quantities the catalogue reports (README, "Catalogue").
  * A fully convective star has coreMassFraction = 1 and envelopeBaseMassFraction = 0.
  *
  * @param zones every convective zone, from the centre outwards

@@ -6,8 +6,8 @@ import java.util.List;
 import org.convgrid.engine.error.ConvgridException;
 
 /**
- * Finds the convective zones of a model and the catalogue quantities derived from them (conventions.md,
- * {@code catalogue.csv}). Immutable and thread-safe.
+ * Finds the convective zones of a model and the catalogue quantities derived from them (README, "Catalogue",
+ * {@code catalogue.ecsv}). Immutable and thread-safe.
  *
  * <p>A mesh point is convective where the stability excess nabla_rad - nabla_stability is positive. Each zone
  * boundary lies where the linear interpolant of the excess between two mesh points changes sign; mass, radius
@@ -33,7 +33,7 @@ import org.convgrid.engine.error.ConvgridException;
  *
  * <p>Turnover times: the local time is l_m/v_c with l_m = alpha H_P, evaluated half a pressure
  * scale height above the envelope base, r = r_base + H_P(r_base)/2, as the catalogue column
- * {@code turnover_time_days} is defined (conventions.md). Gilliland 1985 (ApJ 299, 286) and Kim &amp; Demarque
+ * {@code turnover_time_days} is defined (README, "Catalogue"). Gilliland 1985 (ApJ 299, 286) and Kim &amp; Demarque
  * 1996 (ApJ 457, 340) evaluate it half a mixing length above the base instead; the two points coincide for
  * alpha = 1 and differ by under one scale height for the usual alpha; H_P and v_c are linearly interpolated in r; when that point lies above the top of
  * the envelope (very thin envelopes) the envelope's radial midpoint is used. For a fully convective star there is
@@ -44,8 +44,12 @@ import org.convgrid.engine.error.ConvgridException;
  */
 public final class ConvectiveZoneFinder {
 
-    /** Default smallest m/M at the top of a central zone for it to count as a convective core. */
-    public static final double DEFAULT_MIN_CORE_MASS_FRACTION = 1.0e-4;
+    /**
+     * Default smallest m/M at the top of a central zone for it to count as a convective core: 1e-3, about one shell
+     * of a typical mesh, below which "cores" come and go with resolution (common practice, no single published
+     * value). The run's one core threshold: the class, the catalogue's core columns and the transitions use it.
+     */
+    public static final double DEFAULT_MIN_CORE_MASS_FRACTION = 1.0e-3;
     /**
      * Default smallest mass fraction of a surface zone for it to count as a convective envelope. The thin
      * hydrogen and helium ionisation zones of A and B stars hold ~1e-9 to 1e-7 of the mass (from memory): they
@@ -55,7 +59,7 @@ public final class ConvectiveZoneFinder {
     public static final double DEFAULT_MIN_ENVELOPE_MASS_FRACTION = 1.0e-6;
     /** Default largest mass fraction above the top of a zone for it to count as reaching the surface. */
     public static final double DEFAULT_SURFACE_SKIN_MASS_FRACTION = 1.0e-6;
-    /** Height of the local turnover point above the envelope base, in pressure scale heights (conventions.md). */
+    /** Height of the local turnover point above the envelope base, in pressure scale heights (README, "Catalogue"). */
     public static final double TURNOVER_HEIGHT_SCALE_HEIGHTS = 0.5;
 
     private final double minCoreMassFraction;

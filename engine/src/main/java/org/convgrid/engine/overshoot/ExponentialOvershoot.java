@@ -18,7 +18,7 @@ import java.util.function.IntToDoubleFunction;
 public record ExponentialOvershoot(double f) implements Overshoot {
 
     /** The grid-file name of this scheme. */
-    public static final String LABEL = "exponential";
+    public static final String LABEL = "decaying";
 
     private static final double FOUR_PI = 4.0 * Math.PI;
 

@@ -18,7 +18,7 @@ import java.util.function.IntToDoubleFunction;
 public record StepOvershoot(double alpha) implements Overshoot {
 
     /** The grid-file name of this scheme. */
-    public static final String LABEL = "step";
+    public static final String LABEL = "uniform";
 
     @Override
     public String label() {

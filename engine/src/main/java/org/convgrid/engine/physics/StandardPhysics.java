@@ -61,7 +61,7 @@ public final class StandardPhysics {
      * opacity factor.
      */
     public static Opacity opacity(PhysicsOptions options) {
-        return ScaledOpacity.of(options.opacity().opacity(), options.opacityFactor());
+        return ScaledOpacity.of(options.opacity().opacity(), options.opacityScale());
     }
 
     /** pp chains and CNO cycle with Salpeter screening. */

@@ -6,7 +6,7 @@ import org.convgrid.engine.overshoot.Overshoot;
 import org.convgrid.engine.overshoot.StepOvershoot;
 
 /**
- * The overshoot scheme a grid names (key {@code overshoot_scheme}); the overshoot number means alpha_ov
+ * The overshoot profile a grid names (key {@code overshoot: {profile: uniform|decaying}}); the length means alpha_ov
  * (pressure scale heights) for {@link #STEP} and f for {@link #EXPONENTIAL}. Each scheme makes its
  * {@link Overshoot}, so nothing downstream branches on the scheme.
  */

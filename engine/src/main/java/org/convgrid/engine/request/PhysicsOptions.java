@@ -11,13 +11,13 @@ import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
  * @param overshoot overshoot parameter: alpha_ov (pressure scale heights) for the step scheme, f for the
  *                  exponential one
  * @param criterion Schwarzschild or Ledoux
- * @param opacityFactor multiplies every opacity (1 = as published)
+ * @param opacityScale multiplies every opacity (1 = as published)
  * @param opacity the built-in opacity or a user table, before the factor
  * @param atmosphere the grey T(tau) relation of the surface boundary
  * @param overshootScheme step (default) or exponential overshoot
  */
 public record PhysicsOptions(double mixingLength, double overshoot, StabilityCriterion criterion,
-                             double opacityFactor, OpacityChoice opacity, AtmosphereChoice atmosphere,
+                             double opacityScale, OpacityChoice opacity, AtmosphereChoice atmosphere,
                              OvershootScheme overshootScheme) {
 
     public PhysicsOptions {
@@ -33,20 +33,20 @@ public record PhysicsOptions(double mixingLength, double overshoot, StabilityCri
     }
 
     /** Options with step overshoot. */
-    public PhysicsOptions(double mixingLength, double overshoot, StabilityCriterion criterion, double opacityFactor,
+    public PhysicsOptions(double mixingLength, double overshoot, StabilityCriterion criterion, double opacityScale,
                           OpacityChoice opacity, AtmosphereChoice atmosphere) {
-        this(mixingLength, overshoot, criterion, opacityFactor, opacity, atmosphere, OvershootScheme.STEP);
+        this(mixingLength, overshoot, criterion, opacityScale, opacity, atmosphere, OvershootScheme.STEP);
     }
 
     /** Options with the default atmosphere ({@link AtmosphereChoice#DEFAULT}). */
-    public PhysicsOptions(double mixingLength, double overshoot, StabilityCriterion criterion, double opacityFactor,
+    public PhysicsOptions(double mixingLength, double overshoot, StabilityCriterion criterion, double opacityScale,
                           OpacityChoice opacity) {
-        this(mixingLength, overshoot, criterion, opacityFactor, opacity, AtmosphereChoice.DEFAULT);
+        this(mixingLength, overshoot, criterion, opacityScale, opacity, AtmosphereChoice.DEFAULT);
     }
 
     /** Options with the built-in opacity and the default atmosphere. */
-    public PhysicsOptions(double mixingLength, double overshoot, StabilityCriterion criterion, double opacityFactor) {
-        this(mixingLength, overshoot, criterion, opacityFactor, OpacityChoice.BUILT_IN);
+    public PhysicsOptions(double mixingLength, double overshoot, StabilityCriterion criterion, double opacityScale) {
+        this(mixingLength, overshoot, criterion, opacityScale, OpacityChoice.BUILT_IN);
     }
 
     /** Whether a user opacity table replaces the built-in opacity. */
@@ -66,13 +66,13 @@ public record PhysicsOptions(double mixingLength, double overshoot, StabilityCri
 
     /** The same options with another atmosphere. */
     public PhysicsOptions withAtmosphere(AtmosphereChoice choice) {
-        return new PhysicsOptions(mixingLength, overshoot, criterion, opacityFactor, opacity, choice,
+        return new PhysicsOptions(mixingLength, overshoot, criterion, opacityScale, opacity, choice,
                 overshootScheme);
     }
 
     /** The same options with another overshoot scheme. */
     public PhysicsOptions withOvershootScheme(OvershootScheme scheme) {
-        return new PhysicsOptions(mixingLength, overshoot, criterion, opacityFactor, opacity, atmosphere,
+        return new PhysicsOptions(mixingLength, overshoot, criterion, opacityScale, opacity, atmosphere,
                 scheme);
     }
 

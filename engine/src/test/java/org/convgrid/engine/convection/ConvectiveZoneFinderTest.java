@@ -12,7 +12,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Synthetic profiles with r/R = m/M so that linear stability excesses put the boundaries exactly where the
- * linear interpolation of conventions.md says; the expected numbers are derived by hand for each profile.
+ * linear interpolation the README ("Definitions the catalogue uses") describes; the expected numbers are derived by hand for each profile.
  */
 class ConvectiveZoneFinderTest {
 
@@ -121,7 +121,8 @@ class ConvectiveZoneFinderTest {
 
     @Test
     void fullyConvectiveStarReportsCoreOneAndBaseZero() {
-        // conventions.md: a fully convective star has core_cz_mass_frac = 1 and env_cz_base_mass_frac = 0.
+        // ConvectiveStructure: a fully convective star has core fraction 1 and envelope base 0 (the catalogue then
+        // writes an empty core and an envelope from the centre, README "Catalogue").
         ConvectiveStructure s = finder.find(simple(q -> 0.5));
         assertThat(s.structureClass()).isEqualTo(StructureClass.FULLY_CONVECTIVE);
         assertThat(new double[] {s.coreMassFraction(), s.envelopeBaseMassFraction(),
@@ -179,7 +180,7 @@ class ConvectiveZoneFinderTest {
     void turnoverTimesOnAnAnalyticEnvelope() {
         // Derived: base q_b = 0.7123 (r = q R), v = v0 (1 + 2 (r - r_b)/R), H_P = H0 (1 - (r - r_b)/(2R)), all
         // linear in r so the interpolation is exact. Local: r* = r_b + H0/2 (half a pressure scale height,
-        // conventions.md), tau = alpha H_P(r*)/v(r*).
+        // README "Catalogue"), tau = alpha H_P(r*)/v(r*).
         // Global: int dr/v from the first mesh point above the base to R = (R/2v0) ln(v(R)/v(r_1)).
         double qb = 0.7123;
         double v0 = 3e4;

@@ -39,7 +39,7 @@ final class ZamsFixtures {
         return result.model();
     }
 
-    /** Composition with helium Y = 0.2485 + 1.5 Z (conventions.md example grid relation). */
+    /** Composition with helium Y = 0.2485 + 1.5 Z (the README's example grid relation). */
     static Composition withHeliumRelation(double z) {
         double y = 0.2485 + 1.5 * z;
         return Composition.scaledSolar(1.0 - y - z, z);

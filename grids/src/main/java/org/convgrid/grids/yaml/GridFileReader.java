@@ -19,6 +19,7 @@ import org.convgrid.grids.GridProblem;
 import org.convgrid.grids.GridSpec;
 import org.convgrid.grids.MetallicityPoint;
 import org.convgrid.grids.PhysicsAxes;
+import org.convgrid.grids.TransitionSettings;
 import org.snakeyaml.engine.v2.api.LoadSettings;
 import org.snakeyaml.engine.v2.api.lowlevel.Compose;
 import org.snakeyaml.engine.v2.exceptions.MarkedYamlEngineException;
@@ -27,7 +28,7 @@ import org.snakeyaml.engine.v2.nodes.MappingNode;
 import org.snakeyaml.engine.v2.nodes.Node;
 
 /**
- * Reads a grid file (format in conventions.md) into a validated {@link GridSpec}. The YAML is composed into nodes
+ * Reads a grid file (format in the README, "A grid file") into a validated {@link GridSpec}. The YAML is composed into nodes
  * and walked by hand so every problem carries its file:line:column; all problems of a file are collected and thrown
  * together as one {@link GridFileException}. Required sections: {@code mass}, {@code metallicity}. Defaults:
  * {@code title} = the file name, {@code age: {gyr: [0]}} (ZAMS; {@code age: {ms_fraction: [...]}} instead gives
@@ -48,7 +49,9 @@ public final class GridFileReader {
     /** Alias expansions allowed in one file (defends against alias bombs). */
     private static final int MAX_ALIASES = 50;
 
-    private static final List<String> KEYS = List.of("title", "mass", "metallicity", "age", "physics", "output");
+    private static final List<String> KEYS = List.of("title", "mass", "metallicity", "age", "physics", "transitions",
+            "output");
+    private static final List<String> TRANSITION_KEYS = List.of("refine", "tolerance_msun");
     private static final List<String> AGE_KEYS = List.of("gyr", "ms_fraction");
     private static final List<String> OUTPUT_KEYS = List.of("dir", "profiles", "age_charts_for_masses_msun");
 
@@ -201,11 +204,33 @@ public final class GridFileReader {
                 outputDir = null;
             }
         }
+        TransitionSettings transitions = fields.has("transitions")
+                ? transitions(fields.value("transitions"), reader) : TransitionSettings.DEFAULT;
         if (title == null || masses == null || metallicities == null || ages == null || physics == null
-                || outputDir == null || profiles == null) {
+                || outputDir == null || profiles == null || transitions == null) {
             return null;
         }
-        return new GridSpec(title, masses, metallicities, ages, physics, outputDir, profiles);
+        return new GridSpec(title, masses, metallicities, ages, physics, outputDir, profiles, transitions);
+    }
+
+    /** {@code transitions: {refine: true, tolerance_msun: 0.002}}, each key optional. */
+    private static TransitionSettings transitions(Node node, NodeReader reader) {
+        MappingNode map = reader.mapping(node, "transitions");
+        if (map == null) {
+            return null;
+        }
+        MappingFields fields = new MappingFields(map, "transitions", TRANSITION_KEYS, reader);
+        Boolean refine = fields.has("refine") ? reader.bool(fields.value("refine"), "transitions refine")
+                : TransitionSettings.DEFAULT.refine();
+        Double tolerance = fields.has("tolerance_msun")
+                ? reader.number(fields.value("tolerance_msun"), "transitions tolerance_msun")
+                : TransitionSettings.DEFAULT.toleranceMsun();
+        if (tolerance != null && !(tolerance > 0.0 && Double.isFinite(tolerance))) {
+            reader.problem(fields.value("tolerance_msun"), GridProblemKind.OUT_OF_RANGE,
+                    "transitions tolerance_msun must be a positive mass in Msun, got " + tolerance);
+            tolerance = null;
+        }
+        return refine == null || tolerance == null ? null : new TransitionSettings(refine, tolerance);
     }
 
     /** Exactly one of {@code gyr} (ages in Gyr) and {@code ms_fraction} (fractions of each star's lifetime). */

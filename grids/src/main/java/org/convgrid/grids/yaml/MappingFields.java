@@ -15,6 +15,14 @@ import org.snakeyaml.engine.v2.nodes.ScalarNode;
  */
 final class MappingFields {
 
+    /**
+     * Keys earlier versions accepted, with what replaces them: a grid file that still uses one is an error that
+     * names the replacement (the README's "Grid file" section lists the current keys).
+     */
+    static final Map<String, String> RENAMED = Map.of(
+            "opacity_factor", "opacity_scale",
+            "overshoot_scheme", "overshoot: {profile: uniform|decaying, length_hp: L}");
+
     private final Map<String, NodeTuple> entries = new LinkedHashMap<>();
 
     MappingFields(MappingNode map, String section, List<String> allowed, NodeReader reader) {
@@ -25,7 +33,10 @@ final class MappingFields {
                 continue;
             }
             String key = scalar.getValue();
-            if (!allowed.contains(key)) {
+            if (!allowed.contains(key) && RENAMED.containsKey(key)) {
+                reader.problem(keyNode, GridProblemKind.RENAMED_KEY,
+                        "'" + key + "' in " + section + " was renamed: write " + RENAMED.get(key));
+            } else if (!allowed.contains(key)) {
                 reader.problem(keyNode, GridProblemKind.UNKNOWN_KEY,
                         "unknown key '" + key + "' in " + section + "; allowed: "
                         + String.join(", ", allowed));

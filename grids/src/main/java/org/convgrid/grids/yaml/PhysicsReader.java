@@ -20,13 +20,15 @@ import org.snakeyaml.engine.v2.nodes.Node;
  * The {@code physics:} section. Each option is a value or a list of distinct values (a physics axis); an option
  * left out takes the engine default ({@link PhysicsOptions#DEFAULT}). {@code preset: FILE} takes the mixing
  * length from a physics preset ({@link PresetReader}; only the mixing length, not Y or Z) and excludes
- * {@code mixing_length}. {@code overshoot_scheme: step|exponential} (one value, default step) says what
- * {@code overshoot} means: alpha_ov in pressure scale heights, or f of the exponential profile.
+ * {@code mixing_length}. {@code overshoot} is either a length in pressure scale heights (or a list of them) for
+ * the uniform profile, or a mapping {@code {profile: uniform|decaying, length_hp: L}}: uniform mixes to L H_P
+ * beyond each boundary, decaying lets the mixing fade with e-folding length L H_P / 2 (README, "Grid file").
  */
 final class PhysicsReader {
 
-    private static final List<String> KEYS = List.of("mixing_length", "overshoot", "criterion", "opacity_factor",
-            "opacity_table", "atmosphere", "overshoot_scheme", "preset");
+    private static final List<String> KEYS = List.of("mixing_length", "overshoot", "criterion", "opacity_scale",
+            "opacity_table", "atmosphere", "preset");
+    private static final List<String> OVERSHOOT_KEYS = List.of("profile", "length_hp");
     private static final Range POSITIVE = Range.open(0.0, Double.POSITIVE_INFINITY);
     private static final Range NON_NEGATIVE = new Range(0.0, true, Double.POSITIVE_INFINITY, false);
 
@@ -59,15 +61,28 @@ final class PhysicsReader {
                 alphas = preset == null ? null : List.of(preset.mixingLength());
             }
         }
-        List<Double> overshoots = fields.has("overshoot")
-                ? AxisValues.distinct(fields.value("overshoot"), "overshoot", NON_NEGATIVE, reader)
-                : List.of(d.overshoot());
+        Node overshoot = fields.value("overshoot");
+        OvershootScheme scheme = OvershootScheme.STEP;
+        if (overshoot instanceof MappingNode overshootMap) {
+            MappingFields profile = new MappingFields(overshootMap, "overshoot", OVERSHOOT_KEYS, reader);
+            scheme = profile.has("profile") ? overshootProfile(profile.value("profile"), reader)
+                    : OvershootScheme.STEP;
+            overshoot = profile.value("length_hp");
+            if (overshoot == null) {
+                reader.problem(overshootMap, GridProblemKind.MISSING_KEY, "overshoot needs length_hp "
+                        + "(pressure scale heights)");
+                scheme = null;
+            }
+        }
+        List<Double> overshoots = overshoot != null
+                ? AxisValues.distinct(overshoot, "overshoot length_hp", NON_NEGATIVE, reader)
+                : fields.has("overshoot") ? null : List.of(d.overshoot());
         List<StabilityCriterion> criteria = fields.has("criterion")
                 ? criteria(fields.value("criterion"), reader)
                 : List.of(d.criterion());
-        List<Double> factors = fields.has("opacity_factor")
-                ? AxisValues.distinct(fields.value("opacity_factor"), "opacity_factor", POSITIVE, reader)
-                : List.of(d.opacityFactor());
+        List<Double> factors = fields.has("opacity_scale")
+                ? AxisValues.distinct(fields.value("opacity_scale"), "opacity_scale", POSITIVE, reader)
+                : List.of(d.opacityScale());
         OpacityChoice table = fields.has("opacity_table") ? opacityTable(fields.value("opacity_table"), reader)
                 : OpacityChoice.BUILT_IN;
         AtmosphereChoice atmosphere = fields.has("atmosphere") ? atmosphere(fields.value("atmosphere"), reader)
@@ -84,8 +99,6 @@ final class PhysicsReader {
                 atmosphere = preset.atmosphere();
             }
         }
-        OvershootScheme scheme = fields.has("overshoot_scheme")
-                ? overshootScheme(fields.value("overshoot_scheme"), reader) : OvershootScheme.STEP;
         if (alphas == null || overshoots == null || criteria == null || factors == null || table == null
                 || atmosphere == null || scheme == null) {
             return null;
@@ -93,16 +106,16 @@ final class PhysicsReader {
         return new PhysicsAxes(alphas, overshoots, criteria, factors, table, atmosphere, scheme);
     }
 
-    /** The overshoot scheme: step (default) or exponential, one value. */
-    private static OvershootScheme overshootScheme(Node node, NodeReader reader) {
-        String text = reader.text(node, "overshoot_scheme");
+    /** The overshoot profile: uniform (default) or decaying, one value. */
+    private static OvershootScheme overshootProfile(Node node, NodeReader reader) {
+        String text = reader.text(node, "overshoot profile");
         if (text == null) {
             return null;
         }
         OvershootScheme scheme = OvershootScheme.fromLabel(text);
         if (scheme == null) {
             reader.problem(node, GridProblemKind.UNKNOWN_CHOICE,
-                    "overshoot_scheme must be step or exponential, got '" + NodeReader.quoted(text) + "'");
+                    "overshoot profile must be uniform or decaying, got '" + NodeReader.quoted(text) + "'");
         }
         return scheme;
     }

@@ -4,11 +4,15 @@ import java.util.List;
 import java.util.stream.Stream;
 
 /**
- * The column names of {@code catalogue.csv}, in the order fixed by conventions.md; the only place they are spelled.
- * {@link #FIXED} are required when reading; {@link #EXTENSIONS} follow them and may be missing from older
- * catalogues.
+ * The columns of {@code catalogue.ecsv} (catalogue v2), in the order the README's "Catalogue" section fixes; the only
+ * place their names, units, types and descriptions are spelled. {@link #FIXED} are required when reading;
+ * {@link #EXTENSIONS} follow them.
  */
 public final class CatalogueColumns {
+
+    /** What one column holds; the unit is an astropy unit string, empty for dimensionless or text columns. */
+    public record Column(String name, String unit, String datatype, String description) {
+    }
 
     public static final String MODEL_ID = "model_id";
     public static final String MASS_MSUN = "mass_msun";
@@ -17,40 +21,79 @@ public final class CatalogueColumns {
     public static final String MIXING_LENGTH = "mixing_length";
     public static final String OVERSHOOT_HP = "overshoot_hp";
     public static final String AGE_GYR = "age_gyr";
+    public static final String PHASE = "phase";
     public static final String STATUS = "status";
     public static final String STATUS_DETAIL = "status_detail";
     public static final String LUMINOSITY_LSUN = "luminosity_lsun";
     public static final String RADIUS_RSUN = "radius_rsun";
     public static final String TEFF_K = "teff_k";
     public static final String LOG_G_CGS = "log_g_cgs";
-    public static final String CENTER_TEMP_K = "center_temp_k";
-    public static final String CENTER_DENSITY_CGS = "center_density_cgs";
-    public static final String CENTER_H_FRAC = "center_h_frac";
+    public static final String CENTRAL_TEMP_K = "central_temp_k";
+    public static final String CENTRAL_DENSITY_CGS = "central_density_cgs";
+    public static final String CENTRAL_H_FRAC = "central_h_frac";
+    public static final String SURFACE_LI_REL = "surface_li_rel";
     public static final String STRUCTURE_CLASS = "structure_class";
     public static final String CORE_CZ_MASS_FRAC = "core_cz_mass_frac";
+    public static final String CORE_CZ_RADIUS_FRAC = "core_cz_radius_frac";
     public static final String ENV_CZ_BASE_MASS_FRAC = "env_cz_base_mass_frac";
     public static final String ENV_CZ_BASE_RADIUS_FRAC = "env_cz_base_radius_frac";
     public static final String ENV_CZ_MASS_MSUN = "env_cz_mass_msun";
     public static final String TURNOVER_TIME_DAYS = "turnover_time_days";
-    public static final String CONV_ZONES_MASS_FRAC = "conv_zones_mass_frac";
     public static final String SOLVER_ITERATIONS = "solver_iterations";
 
     /** Extension: the stability criterion, {@code schwarzschild} or {@code ledoux}. */
     public static final String CRITERION = "criterion";
     /** Extension: the opacity multiplier (1 = as published). */
-    public static final String OPACITY_FACTOR = "opacity_factor";
+    public static final String OPACITY_SCALE = "opacity_scale";
     /** Extension: turnover time as the integral of dr / v_conv across the envelope, days. */
     public static final String TURNOVER_TIME_GLOBAL_DAYS = "turnover_time_global_days";
 
-    /** The columns conventions.md fixes, in order. */
-    public static final List<String> FIXED = List.of(MODEL_ID, MASS_MSUN, Z_INIT, Y_INIT, MIXING_LENGTH,
-            OVERSHOOT_HP, AGE_GYR, STATUS, STATUS_DETAIL, LUMINOSITY_LSUN, RADIUS_RSUN, TEFF_K, LOG_G_CGS,
-            CENTER_TEMP_K, CENTER_DENSITY_CGS, CENTER_H_FRAC, STRUCTURE_CLASS, CORE_CZ_MASS_FRAC,
-            ENV_CZ_BASE_MASS_FRAC, ENV_CZ_BASE_RADIUS_FRAC, ENV_CZ_MASS_MSUN, TURNOVER_TIME_DAYS,
-            CONV_ZONES_MASS_FRAC, SOLVER_ITERATIONS);
+    private static final String REAL = "float64";
+    private static final String TEXT = "string";
+
+    /** Every column convgrid writes, in order, with its unit, type and one-line description. */
+    public static final List<Column> DESCRIBED = List.of(
+            new Column(MODEL_ID, "", TEXT, "stable key built from the grid indices"),
+            new Column(MASS_MSUN, "solMass", REAL, "total mass"),
+            new Column(Z_INIT, "", REAL, "initial metal mass fraction"),
+            new Column(Y_INIT, "", REAL, "initial helium mass fraction"),
+            new Column(MIXING_LENGTH, "", REAL, "mixing length, in pressure scale heights"),
+            new Column(OVERSHOOT_HP, "", REAL, "overshoot length, in pressure scale heights"),
+            new Column(AGE_GYR, "Gyr", REAL, "age counted from the run's age origin"),
+            new Column(PHASE, "", TEXT, "pre_main_sequence or main_sequence; empty when status is not ok"),
+            new Column(STATUS, "", TEXT, "ok, not_converged, past_main_sequence or failed"),
+            new Column(STATUS_DETAIL, "", TEXT, "short reason when status is not ok"),
+            new Column(LUMINOSITY_LSUN, "solLum", REAL, "surface luminosity"),
+            new Column(RADIUS_RSUN, "solRad", REAL, "photospheric radius"),
+            new Column(TEFF_K, "K", REAL, "effective temperature"),
+            new Column(LOG_G_CGS, "dex(cm / s2)", REAL, "log10 of the surface gravity in cm s^-2"),
+            new Column(CENTRAL_TEMP_K, "K", REAL, "central temperature"),
+            new Column(CENTRAL_DENSITY_CGS, "g / cm3", REAL, "central density"),
+            new Column(CENTRAL_H_FRAC, "", REAL, "central hydrogen mass fraction"),
+            new Column(SURFACE_LI_REL, "", REAL, "surface 7Li number abundance over its initial value"),
+            new Column(STRUCTURE_CLASS, "", TEXT,
+                    "fully_convective, conv_envelope, conv_core, conv_core_and_envelope or radiative"),
+            new Column(CORE_CZ_MASS_FRAC, "", REAL, "m/M at the top of the convective core; empty when none"),
+            new Column(CORE_CZ_RADIUS_FRAC, "", REAL, "r/R at the top of the convective core; empty when none"),
+            new Column(ENV_CZ_BASE_MASS_FRAC, "", REAL,
+                    "m/M at the base of the convective envelope; empty when none, 0 when fully convective"),
+            new Column(ENV_CZ_BASE_RADIUS_FRAC, "", REAL,
+                    "r/R at the base of the convective envelope; empty when none, 0 when fully convective"),
+            new Column(ENV_CZ_MASS_MSUN, "solMass", REAL, "mass of the convective envelope; empty when none"),
+            new Column(TURNOVER_TIME_DAYS, "d", REAL,
+                    "envelope turnover time half a pressure scale height above its base; empty when none"),
+            new Column(SOLVER_ITERATIONS, "", "int64", "Newton iterations for this model"),
+            new Column(CRITERION, "", TEXT, "convective stability criterion: schwarzschild or ledoux"),
+            new Column(OPACITY_SCALE, "", REAL, "factor applied to every opacity (1 = as published)"),
+            new Column(TURNOVER_TIME_GLOBAL_DAYS, "d", REAL,
+                    "integral of dr / v_conv across the convective envelope; empty when none"));
+
+    /** The columns the README fixes, in order. */
+    public static final List<String> FIXED = DESCRIBED.subList(0, 26).stream().map(Column::name).toList();
 
     /** Our own columns after the fixed ones, in order. */
-    public static final List<String> EXTENSIONS = List.of(CRITERION, OPACITY_FACTOR, TURNOVER_TIME_GLOBAL_DAYS);
+    public static final List<String> EXTENSIONS = DESCRIBED.subList(26, DESCRIBED.size()).stream()
+            .map(Column::name).toList();
 
     /** The header convgrid writes. */
     public static final List<String> HEADER = Stream.concat(FIXED.stream(), EXTENSIONS.stream()).toList();

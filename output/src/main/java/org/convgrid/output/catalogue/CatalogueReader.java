@@ -9,6 +9,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
@@ -17,19 +18,30 @@ import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.OutputFormatException;
-import org.convgrid.output.Span;
 
 /**
  * Reads catalogues by column name, so it accepts columns in any order, ignores columns it does not know (later
  * extensions, trailing extras) and fills missing {@link CatalogueColumns#EXTENSIONS} with "not applicable" (an
- * opacity factor of 1). Every {@link CatalogueColumns#FIXED} column must be present.
+ * opacity scale of 1). Every {@link CatalogueColumns#FIXED} column must be present. The ECSV header ({@code #}
+ * lines) is skipped: the column names and the fixed formats say all the reader needs. Rows come without their
+ * zones unless read with {@link #readWithZones}.
  */
 public final class CatalogueReader {
 
     private static final CSVFormat FORMAT = CatalogueWriter.FORMAT.builder().setHeader().setSkipHeaderRecord(true)
-            .setAllowMissingColumnNames(true).get();
+            .setAllowMissingColumnNames(true).setCommentMarker('#').get();
 
     private CatalogueReader() {
+    }
+
+    /** Every row of a catalogue file, each with its zones from the zones file beside it (when there is one). */
+    public static List<CatalogueRow> readWithZones(Path file, Path zonesFile) throws IOException {
+        List<CatalogueRow> rows = read(file);
+        if (!Files.isRegularFile(zonesFile)) {
+            return rows;
+        }
+        Map<String, List<CatalogueZone>> zones = ZoneTable.read(zonesFile);
+        return rows.stream().map(r -> r.withZones(zones.getOrDefault(r.modelId(), List.of()))).toList();
     }
 
     /** Every row of a catalogue file. */
@@ -73,20 +85,23 @@ public final class CatalogueReader {
         try {
             String criterion = c.text(CatalogueColumns.CRITERION);
             String structure = c.text(CatalogueColumns.STRUCTURE_CLASS);
-            double opacity = c.number(CatalogueColumns.OPACITY_FACTOR);
+            double opacity = c.number(CatalogueColumns.OPACITY_SCALE);
             return new CatalogueRow(c.text(CatalogueColumns.MODEL_ID), c.number(CatalogueColumns.MASS_MSUN),
                     c.number(CatalogueColumns.Z_INIT), c.number(CatalogueColumns.Y_INIT),
                     c.number(CatalogueColumns.MIXING_LENGTH), c.number(CatalogueColumns.OVERSHOOT_HP),
-                    c.number(CatalogueColumns.AGE_GYR), ModelStatus.fromLabel(c.text(CatalogueColumns.STATUS)),
+                    c.number(CatalogueColumns.AGE_GYR), c.text(CatalogueColumns.PHASE),
+                    ModelStatus.fromLabel(c.text(CatalogueColumns.STATUS)),
                     c.text(CatalogueColumns.STATUS_DETAIL), c.number(CatalogueColumns.LUMINOSITY_LSUN),
                     c.number(CatalogueColumns.RADIUS_RSUN), c.number(CatalogueColumns.TEFF_K),
-                    c.number(CatalogueColumns.LOG_G_CGS), c.number(CatalogueColumns.CENTER_TEMP_K),
-                    c.number(CatalogueColumns.CENTER_DENSITY_CGS), c.number(CatalogueColumns.CENTER_H_FRAC),
+                    c.number(CatalogueColumns.LOG_G_CGS), c.number(CatalogueColumns.CENTRAL_TEMP_K),
+                    c.number(CatalogueColumns.CENTRAL_DENSITY_CGS), c.number(CatalogueColumns.CENTRAL_H_FRAC),
+                    c.number(CatalogueColumns.SURFACE_LI_REL),
                     structure.isEmpty() ? null : StructureClass.fromLabel(structure),
-                    c.number(CatalogueColumns.CORE_CZ_MASS_FRAC), c.number(CatalogueColumns.ENV_CZ_BASE_MASS_FRAC),
+                    c.number(CatalogueColumns.CORE_CZ_MASS_FRAC), c.number(CatalogueColumns.CORE_CZ_RADIUS_FRAC),
+                    c.number(CatalogueColumns.ENV_CZ_BASE_MASS_FRAC),
                     c.number(CatalogueColumns.ENV_CZ_BASE_RADIUS_FRAC), c.number(CatalogueColumns.ENV_CZ_MASS_MSUN),
                     c.number(CatalogueColumns.TURNOVER_TIME_DAYS),
-                    Span.parseList(c.text(CatalogueColumns.CONV_ZONES_MASS_FRAC)),
+                    List.of(),
                     Integer.parseInt(c.text(CatalogueColumns.SOLVER_ITERATIONS)),
                     criterion.isEmpty() ? null : StabilityCriterion.valueOf(criterion.toUpperCase(Locale.ROOT)),
                     Double.isNaN(opacity) ? 1.0 : opacity, c.number(CatalogueColumns.TURNOVER_TIME_GLOBAL_DAYS));

@@ -9,12 +9,13 @@ import java.util.Locale;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.convgrid.output.CsvNumbers;
-import org.convgrid.output.Span;
 
 /**
- * Writes catalogue rows as CSV (comma, {@code \n} line ends, RFC 4180 quoting when a cell needs it) with the
- * numbers of {@link CsvNumbers}. {@link #startingWithHeader} writes the header first; {@link #continuing} writes
- * none, to grow an existing catalogue on resume. Not thread-safe: one writer per file, rows in grid order.
+ * Writes catalogue rows as ECSV 1.0 (astropy's Enhanced Character Separated Values: {@code #}-prefixed YAML giving
+ * each column's name, unit, datatype and description, then CSV with comma, {@code \n} line ends and RFC 4180 quoting
+ * when a cell needs it) with the numbers of {@link CsvNumbers}. {@link #startingWithHeader} writes the header first;
+ * {@link #continuing} writes none, to grow an existing catalogue on resume. Not thread-safe: one writer per file,
+ * rows in grid order.
  */
 public final class CatalogueWriter implements Flushable, Closeable {
 
@@ -29,9 +30,27 @@ public final class CatalogueWriter implements Flushable, Closeable {
 
     /** A writer that first writes the header row. */
     public static CatalogueWriter startingWithHeader(Appendable out) throws IOException {
+        out.append(ecsvHeader());
         CatalogueWriter writer = new CatalogueWriter(out);
         writer.printer.printRecord(CatalogueColumns.HEADER);
         return writer;
+    }
+
+    /**
+     * The {@code #} lines before the column-name row: the ECSV version line, then YAML with the delimiter and one
+     * flow mapping per column. Fixed text, so a resumed catalogue can be checked against it.
+     */
+    public static String ecsvHeader() {
+        StringBuilder b = new StringBuilder("# %ECSV 1.0\n# ---\n# delimiter: ','\n# datatype:\n");
+        for (CatalogueColumns.Column c : CatalogueColumns.DESCRIBED) {
+            b.append("# - {name: ").append(c.name());
+            if (!c.unit().isEmpty()) {
+                b.append(", unit: '").append(c.unit()).append('\'');
+            }
+            b.append(", datatype: ").append(c.datatype()).append(", description: '")
+                    .append(c.description().replace("'", "''")).append("'}\n");
+        }
+        return b.append("# schema: astropy-2.0\n").toString();
     }
 
     /** A writer for rows after an existing header. */
@@ -59,21 +78,22 @@ public final class CatalogueWriter implements Flushable, Closeable {
                 r.ageGyr()}) {
             cells.add(CsvNumbers.format(v));
         }
+        cells.add(r.phase());
         cells.add(r.status().label());
         cells.add(r.statusDetail());
-        for (double v : new double[] {r.luminosityLsun(), r.radiusRsun(), r.teffK(), r.logGCgs(), r.centerTempK(),
-                r.centerDensityCgs(), r.centerHFrac()}) {
+        for (double v : new double[] {r.luminosityLsun(), r.radiusRsun(), r.teffK(), r.logGCgs(), r.centralTempK(),
+                r.centralDensityCgs(), r.centralHFrac(), r.surfaceLiRel()}) {
             cells.add(CsvNumbers.format(v));
         }
         cells.add(r.structureClass() == null ? "" : r.structureClass().label());
-        for (double v : new double[] {r.coreCzMassFrac(), r.envCzBaseMassFrac(), r.envCzBaseRadiusFrac(),
+        for (double v : new double[] {r.coreCzMassFrac(), r.coreCzRadiusFrac(), r.envCzBaseMassFrac(),
+                r.envCzBaseRadiusFrac(),
                 r.envCzMassMsun(), r.turnoverTimeDays()}) {
             cells.add(CsvNumbers.format(v));
         }
-        cells.add(Span.join(r.convZones()));
         cells.add(Integer.toString(r.solverIterations()));
         cells.add(r.criterion() == null ? "" : r.criterion().name().toLowerCase(Locale.ROOT));
-        cells.add(CsvNumbers.format(r.opacityFactor()));
+        cells.add(CsvNumbers.format(r.opacityScale()));
         cells.add(CsvNumbers.format(r.turnoverTimeGlobalDays()));
         return cells;
     }

@@ -1,19 +1,25 @@
 package org.convgrid.output.catalogue;
 
+import java.util.ArrayList;
 import java.util.List;
+import org.convgrid.engine.convection.ConvectiveStructure;
+import org.convgrid.engine.convection.ConvectiveZone;
+import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.engine.request.Age;
 import org.convgrid.engine.request.GlobalProperties;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
-import org.convgrid.engine.convection.ConvectiveStructure;
-import org.convgrid.engine.convection.ConvectiveZone;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.units.Constants;
-import org.convgrid.output.Span;
+import org.convgrid.output.CsvNumbers;
+import org.convgrid.output.catalogue.CatalogueZone.ZoneKind;
 
 /**
  * Converts engine outcomes (cgs) to catalogue rows: L / L_sun, R / R_sun (IAU 2015 nominal values), masses over
- * M_sun, ages over the Julian gigayear, times over the day, log g = log10(g). Missing parts of a failed outcome
- * become "not applicable".
+ * M_sun, ages over the Julian gigayear, times over the day, log g = log10(g). Whatever does not apply is NaN (an
+ * empty cell): every column of a failed outcome, the core columns of a star without a convective core (a fully
+ * convective star included: its one zone is the whole star), the envelope columns of a star without a convective
+ * envelope. A fully convective star's envelope base is the centre (0) and its envelope mass the whole star.
  */
 public final class OutcomeRows {
 
@@ -26,10 +32,14 @@ public final class OutcomeRows {
         GlobalProperties g = outcome instanceof ModelOutcome.Solved s ? s.global() : null;
         ConvectiveStructure c = outcome instanceof ModelOutcome.Solved s ? s.convection() : null;
         double nan = Double.NaN;
-        List<Span> zones = c == null ? List.of() : c.zones().stream().map(OutcomeRows::span).toList();
+        StructureClass kind = c == null ? null : c.structureClass();
+        boolean core = kind == StructureClass.CONV_CORE || kind == StructureClass.CONV_CORE_AND_ENVELOPE;
+        boolean envelope = kind == StructureClass.CONV_ENVELOPE || kind == StructureClass.CONV_CORE_AND_ENVELOPE
+                || kind == StructureClass.FULLY_CONVECTIVE;
+        ConvectiveZone innermost = c == null || c.zones().isEmpty() ? null : c.zones().get(0);
         return new CatalogueRow(request.modelId(), request.mass() / Constants.M_SUN, request.initialMetals(),
                 request.initialHelium(), request.physics().mixingLength(), request.physics().overshoot(),
-                ageGyr(request.age()), outcome.status(), outcome.statusDetail(),
+                ageGyr(request.age()), phase(outcome), outcome.status(), outcome.statusDetail(),
                 g == null ? nan : g.luminosity() / Constants.L_SUN,
                 g == null ? nan : g.radius() / Constants.R_SUN,
                 g == null ? nan : g.effectiveTemperature(),
@@ -37,15 +47,34 @@ public final class OutcomeRows {
                 g == null ? nan : g.centralTemperature(),
                 g == null ? nan : g.centralDensity(),
                 g == null ? nan : g.centralHydrogen(),
-                c == null ? null : c.structureClass(),
-                c == null ? nan : c.coreMassFraction(),
-                c == null ? nan : c.envelopeBaseMassFraction(),
-                c == null ? nan : c.envelopeBaseRadiusFraction(),
-                c == null ? nan : c.envelopeMass() / Constants.M_SUN,
-                c == null ? nan : c.turnoverTimeLocal() / Constants.DAY,
-                zones, outcome.solverIterations(), request.physics().criterion(),
-                request.physics().opacityFactor(),
-                c == null ? nan : c.turnoverTimeGlobal() / Constants.DAY);
+                surfaceLithium(outcome),
+                kind,
+                core ? clamp(innermost.outerMassFraction()) : nan,
+                core ? clamp(innermost.outerRadiusFraction()) : nan,
+                envelope ? clamp(c.envelopeBaseMassFraction()) : nan,
+                envelope ? clamp(c.envelopeBaseRadiusFraction()) : nan,
+                envelope ? c.envelopeMass() / Constants.M_SUN : nan,
+                envelope ? c.turnoverTimeLocal() / Constants.DAY : nan,
+                c == null ? List.of() : zones(c), outcome.solverIterations(), request.physics().criterion(),
+                request.physics().opacityScale(),
+                envelope ? c.turnoverTimeGlobal() / Constants.DAY : nan);
+    }
+
+    /**
+     * The evolutionary phase of a solved model. The engine evolves from the zero-age main sequence only, so every
+     * solved model is on the main sequence; when pre-main-sequence models arrive, this is where their phase is read
+     * off the outcome.
+     */
+    static String phase(ModelOutcome outcome) {
+        return outcome.status() == ModelStatus.OK ? CatalogueRow.MAIN_SEQUENCE : "";
+    }
+
+    /**
+     * Surface 7Li over its initial value. The engine does not follow lithium yet, so the cell stays empty; this is
+     * where the outcome's value will be read once it does.
+     */
+    static double surfaceLithium(ModelOutcome outcome) {
+        return Double.NaN;
     }
 
     /** Gyr since the zero-age main sequence; NaN (not applicable) for a fraction no solver resolved. */
@@ -53,10 +82,41 @@ public final class OutcomeRows {
         return age instanceof Age.SinceZeroAge since ? since.seconds() / Constants.GYR : Double.NaN;
     }
 
-    /** A zone's mass extent, clamped into [0, 1] against round-off at the centre and surface. */
-    private static Span span(ConvectiveZone zone) {
-        double lo = Math.min(1.0, Math.max(0.0, zone.innerMassFraction()));
-        double hi = Math.min(1.0, Math.max(lo, zone.outerMassFraction()));
-        return new Span(lo, hi);
+    /**
+     * Every zone with its kind, centre outwards, without the zones that are empty at the catalogue's precision
+     * (their two ends would be written as the same number).
+     */
+    static List<CatalogueZone> zones(ConvectiveStructure c) {
+        List<ConvectiveZone> all = c.zones();
+        StructureClass kind = c.structureClass();
+        List<CatalogueZone> zones = new ArrayList<>(all.size());
+        for (int i = 0; i < all.size(); i++) {
+            ConvectiveZone z = all.get(i);
+            double lo = clamp(z.innerMassFraction());
+            double hi = Math.max(lo, clamp(z.outerMassFraction()));
+            if (CsvNumbers.format(lo).equals(CsvNumbers.format(hi))) {
+                continue;
+            }
+            boolean first = i == 0 && z.innerMassFraction() <= 0.0;
+            ZoneKind zoneKind;
+            if (kind == StructureClass.FULLY_CONVECTIVE) {
+                zoneKind = ZoneKind.WHOLE_STAR;
+            } else if (first && (kind == StructureClass.CONV_CORE || kind == StructureClass.CONV_CORE_AND_ENVELOPE)) {
+                zoneKind = ZoneKind.CORE;
+            } else if (i == all.size() - 1 && (kind == StructureClass.CONV_ENVELOPE
+                    || kind == StructureClass.CONV_CORE_AND_ENVELOPE)) {
+                zoneKind = ZoneKind.ENVELOPE;
+            } else {
+                zoneKind = ZoneKind.SHELL;
+            }
+            double rLo = clamp(z.innerRadiusFraction());
+            zones.add(new CatalogueZone(zoneKind, lo, hi, rLo, Math.max(rLo, clamp(z.outerRadiusFraction()))));
+        }
+        return zones;
+    }
+
+    /** A fraction clamped into [0, 1] against round-off at the centre and surface. */
+    private static double clamp(double fraction) {
+        return Math.min(1.0, Math.max(0.0, fraction));
     }
 }

@@ -1,2 +1,2 @@
-/** The run catalogue ({@code catalogue.csv}): one row per model, its columns, writer and tolerant reader. */
+/** The run catalogue ({@code catalogue.ecsv}): one row per model, its columns, writer and tolerant reader. */
 package org.convgrid.output.catalogue;

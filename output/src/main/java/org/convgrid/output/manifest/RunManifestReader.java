@@ -46,20 +46,20 @@ public final class RunManifestReader {
             List<PhysicsOptions> physics = new ArrayList<>();
             for (Object item : (List<?>) root.get("physics")) {
                 Map<?, ?> p = map(item, "physics");
-                // manifests written before atmosphere, overshoot_scheme and opacity_table were recorded come from
+                // manifests written before atmosphere, overshoot_profile and opacity_table were recorded come from
                 // versions whose defaults were the Eddington relation, step overshoot and the built-in opacity
                 AtmosphereChoice atmosphere = p.containsKey("atmosphere")
                         ? AtmosphereChoice.fromLabel((String) p.get("atmosphere")) : AtmosphereChoice.EDDINGTON;
-                OvershootScheme scheme = p.containsKey("overshoot_scheme")
-                        ? OvershootScheme.fromLabel((String) p.get("overshoot_scheme")) : OvershootScheme.STEP;
+                OvershootScheme scheme = p.containsKey("overshoot_profile")
+                        ? OvershootScheme.fromLabel((String) p.get("overshoot_profile")) : OvershootScheme.STEP;
                 if (atmosphere == null || scheme == null) {
-                    throw new IllegalArgumentException("unknown atmosphere or overshoot_scheme in " + p);
+                    throw new IllegalArgumentException("unknown atmosphere or overshoot_profile in " + p);
                 }
                 OpacityChoice table = p.containsKey("opacity_table")
                         ? tableAt((String) p.get("opacity_table")) : OpacityChoice.BUILT_IN;
                 physics.add(new PhysicsOptions(number(p, "mixing_length"), number(p, "overshoot"),
                         StabilityCriterion.valueOf(((String) p.get("criterion")).toUpperCase(Locale.ROOT)),
-                        number(p, "opacity_factor"), table, atmosphere, scheme));
+                        number(p, "opacity_scale"), table, atmosphere, scheme));
             }
             Map<?, ?> models = map(root.get("models"), "models");
             Map<ModelStatus, Long> counts = new EnumMap<>(ModelStatus.class);

@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.convgrid.engine.convection.ConvectiveZoneFinder;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.request.PhysicsOptions;
 import org.snakeyaml.engine.v2.api.Dump;
@@ -15,8 +16,8 @@ import org.snakeyaml.engine.v2.common.FlowStyle;
 /**
  * Writes a {@link RunManifest} as YAML (block style; the grid file's text as a multi-line string). Keys, in order:
  * {@code tool_version}, {@code grid} ({@code file}, {@code sha256}, {@code models_sha256}, {@code text}),
- * {@code physics} (list of {@code mixing_length}, {@code overshoot}, {@code criterion}, {@code opacity_factor},
- * {@code atmosphere}, {@code overshoot_scheme}, and {@code opacity_table} when a user table is named),
+ * {@code physics} (list of {@code mixing_length}, {@code overshoot}, {@code criterion}, {@code opacity_scale},
+ * {@code atmosphere}, {@code overshoot_profile}, and {@code opacity_table} when a user table is named),
  * {@code started}, {@code finished} (ISO-8601 UTC instants), {@code threads}, {@code shard}, {@code models}
  * ({@code total} and one count per status label), {@code median_seconds_per_model}.
  */
@@ -43,9 +44,9 @@ public final class RunManifestWriter {
             options.put("mixing_length", p.mixingLength());
             options.put("overshoot", p.overshoot());
             options.put("criterion", p.criterion().name().toLowerCase(Locale.ROOT));
-            options.put("opacity_factor", p.opacityFactor());
+            options.put("opacity_scale", p.opacityScale());
             options.put("atmosphere", p.atmosphere().label());
-            options.put("overshoot_scheme", p.overshootScheme().label());
+            options.put("overshoot_profile", p.overshootScheme().label());
             if (p.usesOpacityTable()) {
                 options.put("opacity_table", p.opacityTable());
             }
@@ -60,6 +61,8 @@ public final class RunManifestWriter {
         root.put("tool_version", m.toolVersion());
         root.put("grid", grid);
         root.put("physics", physics);
+        // the one threshold behind structure_class, the core columns and the transitions
+        root.put("core_threshold_mass_frac", ConvectiveZoneFinder.DEFAULT_MIN_CORE_MASS_FRACTION);
         root.put("started", m.started().toString());
         root.put("finished", m.finished() == null ? null : m.finished().toString());
         root.put("threads", m.threads());

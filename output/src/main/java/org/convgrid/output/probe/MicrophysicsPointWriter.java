@@ -9,7 +9,7 @@ import org.apache.commons.csv.CSVPrinter;
 import org.convgrid.engine.physics.MicrophysicsPoint;
 import org.convgrid.output.CsvNumbers;
 
-/** Writes the {@code probe} columns (conventions.md, "probe output") as CSV or as a readable table. */
+/** Writes the {@code probe} columns (README, "probe") as CSV or as a readable table. */
 public final class MicrophysicsPointWriter {
 
     /** Column names in output order; the first eighteen are fixed by the conventions. */

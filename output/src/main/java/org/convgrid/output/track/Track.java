@@ -10,7 +10,7 @@ import java.util.List;
  */
 public record Track(String trackId, List<TrackStep> steps) {
 
-    /** The part of a model id that names its age ({@code -a<index>}, conventions.md and the grid's id format). */
+    /** The part of a model id that names its age ({@code -a<index>}, README "A run directory" and the grid's id format). */
     private static final String AGE_SEPARATOR = "-a";
 
     public Track {

@@ -13,9 +13,9 @@ public final class TrackColumns {
     public static final String RADIUS = "radius_rsun";
     public static final String TEFF = "teff_k";
     public static final String LOG_G = "log_g_cgs";
-    public static final String CENTER_TEMP = "center_temp_k";
-    public static final String CENTER_DENSITY = "center_density_cgs";
-    public static final String CENTER_H = "center_h_frac";
+    public static final String CENTRAL_TEMP = "central_temp_k";
+    public static final String CENTRAL_DENSITY = "central_density_cgs";
+    public static final String CENTRAL_H = "central_h_frac";
     /** Every convective zone as {@code lo-hi} in m/M, centre outwards. */
     public static final String CONV_ZONES = "conv_zones_mass_frac";
     /** The hydrogen-burning region as {@code lo-hi} in m/M. */
@@ -25,8 +25,8 @@ public final class TrackColumns {
     public static final String SOLVER_ITERATIONS = "solver_iterations";
 
     /** Every column, in the order the writer writes them. */
-    public static final List<String> ALL = List.of(AGE_GYR, LUMINOSITY, RADIUS, TEFF, LOG_G, CENTER_TEMP,
-            CENTER_DENSITY, CENTER_H, CONV_ZONES, BURNING_ZONE, TIME_STEP, CORE_CZ, SOLVER_ITERATIONS);
+    public static final List<String> ALL = List.of(AGE_GYR, LUMINOSITY, RADIUS, TEFF, LOG_G, CENTRAL_TEMP,
+            CENTRAL_DENSITY, CENTRAL_H, CONV_ZONES, BURNING_ZONE, TIME_STEP, CORE_CZ, SOLVER_ITERATIONS);
 
     private TrackColumns() {
     }

@@ -2,9 +2,9 @@ package org.convgrid.output.track;
 
 import static org.convgrid.output.track.TrackColumns.AGE_GYR;
 import static org.convgrid.output.track.TrackColumns.BURNING_ZONE;
-import static org.convgrid.output.track.TrackColumns.CENTER_DENSITY;
-import static org.convgrid.output.track.TrackColumns.CENTER_H;
-import static org.convgrid.output.track.TrackColumns.CENTER_TEMP;
+import static org.convgrid.output.track.TrackColumns.CENTRAL_DENSITY;
+import static org.convgrid.output.track.TrackColumns.CENTRAL_H;
+import static org.convgrid.output.track.TrackColumns.CENTRAL_TEMP;
 import static org.convgrid.output.track.TrackColumns.CONV_ZONES;
 import static org.convgrid.output.track.TrackColumns.LOG_G;
 import static org.convgrid.output.track.TrackColumns.LUMINOSITY;
@@ -96,8 +96,8 @@ public final class TrackReader {
             Span burning = hull(Span.parseList(text(r, column)));
             column = LUMINOSITY;
             return new TrackStep(age, number(r, LUMINOSITY), number(r, column = RADIUS), number(r, column = TEFF),
-                    number(r, column = LOG_G), number(r, column = CENTER_TEMP), number(r, column = CENTER_DENSITY),
-                    number(r, column = CENTER_H), zones, burning);
+                    number(r, column = LOG_G), number(r, column = CENTRAL_TEMP), number(r, column = CENTRAL_DENSITY),
+                    number(r, column = CENTRAL_H), zones, burning);
         } catch (IllegalArgumentException e) {
             throw new OutputFormatException("track row " + r.getRecordNumber() + " (line " + (r.getRecordNumber() + 1)
                     + "), column '" + column + "': " + e.getMessage(), e);

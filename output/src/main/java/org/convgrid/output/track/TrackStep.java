@@ -11,15 +11,15 @@ import org.convgrid.output.Span;
  * @param radiusRsun R / R_sun
  * @param teffK effective temperature, K
  * @param logGCgs log10 of the surface gravity in cm s^-2
- * @param centerTempK central temperature, K
- * @param centerDensityCgs central density, g cm^-3
- * @param centerHFrac central hydrogen mass fraction
+ * @param centralTempK central temperature, K
+ * @param centralDensityCgs central density, g cm^-3
+ * @param centralHFrac central hydrogen mass fraction
  * @param convZones every convective zone in m/M, centre outwards
  * @param burningZone the hydrogen-burning region in m/M (energy generation above the writer's threshold), null
  *     when the file gives none
  */
 public record TrackStep(double ageGyr, double luminosityLsun, double radiusRsun, double teffK, double logGCgs,
-                        double centerTempK, double centerDensityCgs, double centerHFrac, List<Span> convZones,
+                        double centralTempK, double centralDensityCgs, double centralHFrac, List<Span> convZones,
                         Span burningZone) {
 
     public TrackStep {

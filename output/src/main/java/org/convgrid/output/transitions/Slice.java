@@ -11,14 +11,14 @@ import org.convgrid.output.catalogue.CatalogueRow;
  * @param mixingLength alpha, pressure scale heights
  * @param overshootHp step overshoot, pressure scale heights
  * @param criterion stability criterion, null when unknown
- * @param opacityFactor opacity multiplier
+ * @param opacityScale opacity multiplier
  */
 public record Slice(double zInit, double ageGyr, double mixingLength, double overshootHp,
-                    StabilityCriterion criterion, double opacityFactor) {
+                    StabilityCriterion criterion, double opacityScale) {
 
     /** The slice a catalogue row belongs to. */
     public static Slice of(CatalogueRow row) {
         return new Slice(row.zInit(), row.ageGyr(), row.mixingLength(), row.overshootHp(), row.criterion(),
-                row.opacityFactor());
+                row.opacityScale());
     }
 }

@@ -3,7 +3,7 @@ package org.convgrid.output.transitions;
 import java.util.List;
 import java.util.stream.Stream;
 
-/** The column names of {@code transitions.csv}: conventions.md's fixed columns, then our extensions. */
+/** The column names of {@code transitions.csv}: the README's fixed columns ("Transition masses"), then our extensions. */
 public final class TransitionColumns {
 
     public static final String Z_INIT = "z_init";
@@ -17,7 +17,7 @@ public final class TransitionColumns {
     public static final String MIXING_LENGTH = "mixing_length";
     public static final String OVERSHOOT_HP = "overshoot_hp";
     public static final String CRITERION = "criterion";
-    public static final String OPACITY_FACTOR = "opacity_factor";
+    public static final String OPACITY_SCALE = "opacity_scale";
     /** Number of state changes between neighbouring usable masses (1 for a clean transition). */
     public static final String FULLY_CONVECTIVE_CROSSINGS = "fully_convective_crossings";
     /** Every such change as {@code lo-hi}, joined by {@code ;}. */
@@ -37,12 +37,12 @@ public final class TransitionColumns {
     public static final String LASTING_CORE_BRACKET_MSUN = "lasting_core_bracket_msun";
     public static final String NOTES = "notes";
 
-    /** The columns conventions.md fixes, in order. */
+    /** The columns the README fixes, in order. */
     public static final List<String> FIXED = List.of(Z_INIT, AGE_GYR, FULLY_CONVECTIVE_LIMIT_MSUN,
             FULLY_CONVECTIVE_BRACKET_MSUN, CONV_CORE_ONSET_MSUN, CONV_CORE_BRACKET_MSUN, METHOD);
 
     /** Our columns after them, in order. */
-    public static final List<String> EXTENSIONS = List.of(MIXING_LENGTH, OVERSHOOT_HP, CRITERION, OPACITY_FACTOR,
+    public static final List<String> EXTENSIONS = List.of(MIXING_LENGTH, OVERSHOOT_HP, CRITERION, OPACITY_SCALE,
             FULLY_CONVECTIVE_CROSSINGS, FULLY_CONVECTIVE_CROSSINGS_MSUN, FULLY_CONVECTIVE_BRACKET_SKIPPED,
             CONV_CORE_CROSSINGS, CONV_CORE_CROSSINGS_MSUN, CONV_CORE_BRACKET_SKIPPED, LASTING_CORE_ONSET_MSUN,
             LASTING_CORE_BRACKET_MSUN, NOTES);

@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.function.Predicate;
+import org.convgrid.engine.convection.ConvectiveZoneFinder;
 import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueRow;
@@ -29,10 +30,11 @@ import org.convgrid.output.catalogue.CatalogueRow;
 public record TransitionFinder(double coreMassFractionThreshold) {
 
     /**
-     * Default core threshold, 1e-3 of the stellar mass: smaller "cores" span about one shell of a typical mesh and
-     * come and go with resolution (common practice, no single published value).
+     * Default core threshold: the one the engine classifies with ({@link ConvectiveZoneFinder}), so that a star is
+     * cored or coreless alike in the catalogue and in the transitions.
      */
-    public static final double DEFAULT_CORE_MASS_FRACTION_THRESHOLD = 1.0e-3;
+    public static final double DEFAULT_CORE_MASS_FRACTION_THRESHOLD =
+            ConvectiveZoneFinder.DEFAULT_MIN_CORE_MASS_FRACTION;
 
     public TransitionFinder {
         if (!(coreMassFractionThreshold >= 0.0 && coreMassFractionThreshold < 1.0)) {

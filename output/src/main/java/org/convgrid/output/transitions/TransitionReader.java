@@ -53,7 +53,7 @@ public final class TransitionReader {
         Slice slice = new Slice(number(r, TransitionColumns.Z_INIT), number(r, TransitionColumns.AGE_GYR),
                 number(r, TransitionColumns.MIXING_LENGTH), number(r, TransitionColumns.OVERSHOOT_HP),
                 criterion.isEmpty() ? null : StabilityCriterion.valueOf(criterion.toUpperCase(Locale.ROOT)),
-                number(r, TransitionColumns.OPACITY_FACTOR));
+                number(r, TransitionColumns.OPACITY_SCALE));
         TransitionEstimate fc = estimate(r, TransitionColumns.FULLY_CONVECTIVE_LIMIT_MSUN,
                 TransitionColumns.FULLY_CONVECTIVE_BRACKET_MSUN, TransitionColumns.FULLY_CONVECTIVE_CROSSINGS_MSUN,
                 TransitionColumns.FULLY_CONVECTIVE_BRACKET_SKIPPED);

@@ -41,7 +41,7 @@ public final class TransitionWriter {
         cells.add(CsvNumbers.format(s.mixingLength()));
         cells.add(CsvNumbers.format(s.overshootHp()));
         cells.add(s.criterion() == null ? "" : s.criterion().name().toLowerCase(Locale.ROOT));
-        cells.add(CsvNumbers.format(s.opacityFactor()));
+        cells.add(CsvNumbers.format(s.opacityScale()));
         cells.add(Integer.toString(fc.crossings().size()));
         cells.add(Span.join(fc.crossings()));
         cells.add(Integer.toString(fc.skippedInBracket()));

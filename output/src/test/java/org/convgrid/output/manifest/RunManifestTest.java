@@ -38,7 +38,7 @@ class RunManifestTest {
         String yaml = RunManifestWriter.toYaml(finished);
         assertThat(yaml).contains("tool_version: 0.1.0", "started: 2026-03-01T10:00:00Z",
                 "criterion: ledoux", "total: 60", "failed: 2", "median_seconds_per_model: 1.75",
-                "atmosphere: krishna_swamy", "atmosphere: eddington", "overshoot_scheme: exponential",
+                "atmosphere: krishna_swamy", "atmosphere: eddington", "overshoot_profile: decaying", "core_threshold_mass_frac: 0.001",
                 "opacity_table: tables/mine.txt");
         assertThat(yaml).contains("  text: |");
         RunManifest back = RunManifestReader.read(yaml);
@@ -48,9 +48,9 @@ class RunManifestTest {
 
     @Test
     void aManifestWithoutTheLaterPhysicsKeysReadsAsTheOldDefaults() {
-        // manifests of earlier versions had no atmosphere / overshoot_scheme / opacity_table keys
+        // manifests of earlier versions had no atmosphere / overshoot_profile / opacity_table keys
         String yaml = RunManifestWriter.toYaml(manifest())
-                .replaceAll("(?m)^\\s+(atmosphere|overshoot_scheme|opacity_table): .*\\n", "");
+                .replaceAll("(?m)^\\s+(atmosphere|overshoot_profile|opacity_table): .*\\n", "");
         assertThat(yaml).doesNotContain("atmosphere:");
         RunManifest back = RunManifestReader.read(yaml);
         assertThat(back.physics()).allSatisfy(p -> {

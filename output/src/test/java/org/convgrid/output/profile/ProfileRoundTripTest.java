@@ -22,8 +22,8 @@ class ProfileRoundTripTest {
         ProfileWriter.write(shells, out);
         String[] lines = out.toString().split("\n");
         assertThat(lines[0]).isEqualTo(String.join(",", ProfileColumns.HEADER));
-        assertThat(lines[1]).isEqualTo("0,0,2.34e+17,1.57e+07,150,0,1.2,17.5,0.39,0.4,0.38,0,0");
-        assertThat(lines[2]).isEqualTo("1,1,110000,5772,2e-07,1,0.35,0,0.2,0.18,3.5,1,150000");
+        assertThat(lines[1]).isEqualTo("0.0,0.0,2.34e+17,1.57e+07,150.0,0.0,1.2,17.5,0.39,0.4,0.38,0,0.0");
+        assertThat(lines[2]).isEqualTo("1.0,1.0,110000.0,5772.0,2.0e-07,1.0,0.35,0.0,0.2,0.18,3.5,1,150000.0");
         List<ProfileRow> back = ProfileReader.read(new StringReader(out.toString()));
         assertThat(back.get(0)).isEqualTo(shells.get(0));
         assertThat(back.get(1).luminosity()).isCloseTo(Constants.L_SUN, within(1e-12 * Constants.L_SUN));

@@ -33,9 +33,9 @@ class TrackFormatTest {
         assertThat(last.luminosityLsun()).isEqualTo(1.25);
         assertThat(last.radiusRsun()).isEqualTo(0.9);
         assertThat(last.teffK()).isEqualTo(5800.0);
-        assertThat(last.centerTempK()).isEqualTo(1.5e7);
-        assertThat(last.centerDensityCgs()).isEqualTo(150.0);
-        assertThat(last.centerHFrac()).isCloseTo(0.55, within(1e-12));
+        assertThat(last.centralTempK()).isEqualTo(1.5e7);
+        assertThat(last.centralDensityCgs()).isEqualTo(150.0);
+        assertThat(last.centralHFrac()).isCloseTo(0.55, within(1e-12));
         assertThat(last.logGCgs()).isCloseTo(Math.log10(Constants.G * Constants.M_SUN
                 / Math.pow(0.9 * Constants.R_SUN, 2)), within(1e-6));
         assertThat(last.convZones()).containsExactly(new Span(0.0, 0.08), new Span(0.7, 1.0));

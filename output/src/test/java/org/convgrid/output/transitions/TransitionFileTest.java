@@ -22,7 +22,7 @@ class TransitionFileTest {
         String[] lines = out.toString().split("\n");
         assertThat(lines[0]).startsWith("z_init,age_gyr,fully_convective_limit_msun,fully_convective_bracket_msun,"
                 + "conv_core_onset_msun,conv_core_bracket_msun,method,");
-        assertThat(lines[1]).isEqualTo("0.02,0,0.3,0.3-0.4,1.2,0.4-1.2,grid,1.8,0,schwarzschild,1,1,0.3-0.4,1,1,"
+        assertThat(lines[1]).isEqualTo("0.02,0.0,0.3,0.3-0.4,1.2,0.4-1.2,grid,1.8,0.0,schwarzschild,1.0,1,0.3-0.4,1,1,"
                 + "0.4-1.2,0,1.2,0.4-1.2,fully convective bracket widened past 1 unusable model(s)");
         assertThat(TransitionReader.read(new StringReader(out.toString()))).isEqualTo(rows);
     }

@@ -22,9 +22,9 @@ class TransitionFinderTest {
 
     static CatalogueRow row(double z, double mass, StructureClass c, double core, ModelStatus status) {
         double nan = Double.NaN;
-        return new CatalogueRow("m" + mass, mass, z, 0.27, 1.8, 0.0, 0.0, status, "", nan, nan, nan, nan, nan, nan,
-                nan, status == ModelStatus.OK ? c : null, core, c == FC ? 0.0 : 0.5, 0.7, nan, nan, List.of(), 5,
-                StabilityCriterion.SCHWARZSCHILD, 1.0, nan);
+        return new CatalogueRow("m" + mass, mass, z, 0.27, 1.8, 0.0, 0.0, "", status, "", nan, nan, nan, nan, nan,
+                nan, nan, nan, status == ModelStatus.OK ? c : null, core, nan, c == FC ? 0.0 : 0.5, 0.7, nan, nan,
+                List.of(), 5, StabilityCriterion.SCHWARZSCHILD, 1.0, nan);
     }
 
     static CatalogueRow ok(double mass, StructureClass c, double core) {
@@ -104,8 +104,9 @@ class TransitionFinderTest {
     @Test
     void theMethodIsRefinedWhenABracketEndIsARefinementModel() {
         CatalogueRow refinedEnd = new CatalogueRow("p0-z00-r003-a00", 0.3125, 0.02, 0.27, 1.8, 0.0, 0.0,
-                ModelStatus.OK, "", Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN,
-                Double.NaN, ENV, 0, 0.5, 0.7, Double.NaN, Double.NaN, List.of(), 5,
+                CatalogueRow.MAIN_SEQUENCE, ModelStatus.OK, "", Double.NaN, Double.NaN, Double.NaN, Double.NaN,
+                Double.NaN, Double.NaN, Double.NaN, Double.NaN, ENV, Double.NaN, Double.NaN, 0.5, 0.7, Double.NaN,
+                Double.NaN, List.of(),  5,
                 StabilityCriterion.SCHWARZSCHILD, 1.0, Double.NaN);
         List<CatalogueRow> grid = List.of(ok(0.3, FC, 1), ok(0.4, ENV, 0), ok(1.0, ENV, 0), ok(1.2, BOTH, 0.05));
         assertThat(finder.find(grid).get(0).method()).isEqualTo(TransitionMethod.GRID);

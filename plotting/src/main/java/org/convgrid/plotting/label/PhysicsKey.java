@@ -18,7 +18,7 @@ public record PhysicsKey(double mixingLength, double overshootHp, StabilityCrite
 
     /** The physics of a slice. */
     public static PhysicsKey of(Slice s) {
-        return new PhysicsKey(s.mixingLength(), s.overshootHp(), s.criterion(), s.opacityFactor());
+        return new PhysicsKey(s.mixingLength(), s.overshootHp(), s.criterion(), s.opacityScale());
     }
 
     /** The physics of a catalogue row. */

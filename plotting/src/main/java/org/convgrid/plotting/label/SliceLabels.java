@@ -57,7 +57,7 @@ public final class SliceLabels {
 
     /** The physics of a slice in words. */
     public static String physics(Slice s) {
-        return physics(s.mixingLength(), s.overshootHp(), s.criterion(), s.opacityFactor());
+        return physics(s.mixingLength(), s.overshootHp(), s.criterion(), s.opacityScale());
     }
 
     /** A whole slice in words: {@code Z = 0.014, ZAMS, α = 1.8, Schwarzschild, no overshoot}. */
@@ -88,7 +88,7 @@ public final class SliceLabels {
     /** A file name stem for a slice, e.g. {@code z0.014_age4.57_a1.8_ov0_schwarzschild}; ASCII only. */
     public static String fileStem(Slice s) {
         return "z" + number(s.zInit()) + "_age" + number(s.ageGyr()) + "_" + physicsStem(s.mixingLength(),
-                s.overshootHp(), s.criterion(), s.opacityFactor());
+                s.overshootHp(), s.criterion(), s.opacityScale());
     }
 
     /** A file name stem for a physics combination, e.g. {@code a1.8_ov0_schwarzschild}. */

@@ -96,7 +96,7 @@ public final class ReportPage {
             row(b, "median time per model", Double.isNaN(m.medianSecondsPerModel()) ? "n/a"
                     : SliceLabels.number(m.medianSecondsPerModel()) + " s");
             m.physics().forEach(p -> row(b, "physics", SliceLabels.physics(p.mixingLength(), p.overshoot(),
-                    p.criterion(), p.opacityFactor())));
+                    p.criterion(), p.opacityScale())));
         }
         row(b, "catalogue rows", Integer.toString(run.catalogue().size()));
         row(b, "transitions", run.transitionsFromFile() ? "from " + RunLayout.TRANSITIONS

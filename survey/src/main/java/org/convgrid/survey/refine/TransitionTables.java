@@ -196,6 +196,7 @@ public final class TransitionTables {
     }
 
     private static void requireCatalogue(RunDirectory dir) {
+        new RunLayout(dir.root()).refuseEarlierFormat();
         if (!Files.isRegularFile(dir.catalogue())) {
             throw new RunSetupException(dir.root() + " is not a run directory (no " + RunLayout.CATALOGUE + ")");
         }

@@ -5,7 +5,7 @@ import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.state.Composition;
 
 /**
- * Another opacity times a constant factor, for the {@code opacity_factor} physics input (1 = as published).
+ * Another opacity times a constant factor, for the {@code opacity_scale} physics input (1 = as published).
  * A constant factor leaves the logarithmic derivatives unchanged.
  *
  * @param inner the opacity to scale
@@ -18,7 +18,7 @@ public record ScaledOpacity(Opacity inner, double factor) implements Opacity {
 
     public ScaledOpacity {
         Objects.requireNonNull(inner, "inner");
-        ConvgridException.requireInRange("opacityFactor", factor, Double.MIN_NORMAL, MAX_FACTOR, "");
+        ConvgridException.requireInRange("opacityScale", factor, Double.MIN_NORMAL, MAX_FACTOR, "");
     }
 
     /** The inner opacity itself when the factor is exactly 1, otherwise a scaled wrapper. */

@@ -1,0 +1,146 @@
+package org.convgrid.output.catalogue;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.io.IOException;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Collectors;
+import org.convgrid.engine.convection.ConvectiveStructure;
+import org.convgrid.engine.convection.ConvectiveZone;
+import org.convgrid.engine.convection.StructureClass;
+import org.convgrid.engine.request.GlobalProperties;
+import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.PhysicsOptions;
+import org.convgrid.engine.units.Constants;
+import org.convgrid.output.catalogue.CatalogueZone.ZoneKind;
+import org.junit.jupiter.api.Test;
+import org.snakeyaml.engine.v2.api.Load;
+import org.snakeyaml.engine.v2.api.LoadSettings;
+
+/** Catalogue v2 as the README's "Catalogue" and "Zones" sections fix it. */
+class CatalogueV2Test {
+
+    private static ModelOutcome outcome(String id, double massMsun, ConvectiveStructure convection) {
+        ModelRequest request = new ModelRequest(id, massMsun * Constants.M_SUN, 0.014, 0.27, 0.0,
+                PhysicsOptions.DEFAULT);
+        GlobalProperties global = new GlobalProperties(Constants.L_SUN, Constants.R_SUN, 5000.0, 1e4, 1e7, 100.0,
+                0.7);
+        return new ModelOutcome.Solved(request, global, convection, 5);
+    }
+
+    /** A fully convective star as the engine reports it: one zone, core fraction 1, envelope base 0. */
+    private static ModelOutcome fullyConvective() {
+        return outcome("fc", 0.2, new ConvectiveStructure(List.of(new ConvectiveZone(0.0, 1.0, 0.0, 1.0)),
+                StructureClass.FULLY_CONVECTIVE, 1.0, 0.0, 0.0, 0.2 * Constants.M_SUN, 50 * Constants.DAY,
+                80 * Constants.DAY));
+    }
+
+    /** A core-only star (an A star): its thin surface zone too small for an envelope, listed as a shell. */
+    private static ModelOutcome coreOnly() {
+        return outcome("a", 2.5, new ConvectiveStructure(List.of(new ConvectiveZone(0.0, 0.21, 0.0, 0.13),
+                new ConvectiveZone(0.9999999, 1.0, 0.99, 1.0)), StructureClass.CONV_CORE, 0.21, 1.0, 1.0, 0.0,
+                Double.NaN, Double.NaN));
+    }
+
+    /** A core, a zero-width zone (both ends equal at 7 digits) and an envelope. */
+    private static ModelOutcome coreAndEnvelope() {
+        return outcome("b", 1.2, new ConvectiveStructure(List.of(new ConvectiveZone(0.0, 0.04, 0.0, 0.06),
+                new ConvectiveZone(0.5, 0.50000000001, 0.4, 0.4), new ConvectiveZone(0.99, 1.0, 0.85, 1.0)),
+                StructureClass.CONV_CORE_AND_ENVELOPE, 0.04, 0.99, 0.85, 0.012 * Constants.M_SUN,
+                5 * Constants.DAY, 8 * Constants.DAY));
+    }
+
+    @Test
+    void theEcsvHeaderIsYamlWithEveryColumnsNameUnitAndType() throws IOException {
+        StringBuilder out = new StringBuilder();
+        CatalogueWriter.startingWithHeader(out).flush();
+        List<String> lines = out.toString().lines().toList();
+        // ECSV 1.0 (astropy APE 6, Aldcroft et al. 2015): version line, '# ---', YAML with '# ' stripped
+        assertThat(lines.get(0)).isEqualTo("# %ECSV 1.0");
+        assertThat(lines.get(1)).isEqualTo("# ---");
+        String yaml = lines.stream().skip(2).takeWhile(l -> l.startsWith("#")).map(l -> l.substring(2))
+                .collect(Collectors.joining("\n"));
+        @SuppressWarnings("unchecked")
+        Map<String, Object> header = (Map<String, Object>) new Load(LoadSettings.builder().build())
+                .loadFromString(yaml);
+        assertThat(header.get("delimiter")).isEqualTo(",");
+        assertThat(header.get("schema")).isEqualTo("astropy-2.0");
+        @SuppressWarnings("unchecked")
+        List<Map<String, Object>> columns = (List<Map<String, Object>>) header.get("datatype");
+        assertThat(columns).extracting(c -> c.get("name")).containsExactlyElementsOf(CatalogueColumns.HEADER);
+        assertThat(columns).allSatisfy(c -> {
+            assertThat(c.get("datatype")).isIn("string", "float64", "int64");
+            assertThat((String) c.get("description")).isNotBlank();
+        });
+        Map<Object, Object> units = columns.stream().filter(c -> c.containsKey("unit"))
+                .collect(Collectors.toMap(c -> c.get("name"), c -> c.get("unit")));
+        // astropy unit strings for the units the column names carry (common practice)
+        assertThat(units).containsEntry("mass_msun", "solMass").containsEntry("age_gyr", "Gyr")
+                .containsEntry("luminosity_lsun", "solLum").containsEntry("radius_rsun", "solRad")
+                .containsEntry("teff_k", "K").containsEntry("central_temp_k", "K")
+                .containsEntry("central_density_cgs", "g / cm3").containsEntry("env_cz_mass_msun", "solMass")
+                .containsEntry("turnover_time_days", "d").containsEntry("log_g_cgs", "dex(cm / s2)");
+        // the row after the YAML is the column names, in the fixed order
+        assertThat(lines.get(lines.size() - 1)).isEqualTo(String.join(",", CatalogueColumns.HEADER));
+    }
+
+    @Test
+    void aFullyConvectiveStarIsOneWholeStarZoneWithEmptyCoreColumns() {
+        CatalogueRow row = OutcomeRows.toRow(fullyConvective());
+        assertThat(row.coreCzMassFrac()).isNaN();
+        assertThat(row.coreCzRadiusFrac()).isNaN();
+        assertThat(row.envCzBaseMassFrac()).isEqualTo(0.0);
+        assertThat(row.envCzBaseRadiusFrac()).isEqualTo(0.0);
+        assertThat(row.envCzMassMsun()).isCloseTo(0.2, within(1e-12));
+        assertThat(row.zones()).singleElement().extracting(CatalogueZone::kind).isEqualTo(ZoneKind.WHOLE_STAR);
+        assertThat(String.join(",", CatalogueWriter.cells(row))).contains(",fully_convective,,,0.0,0.0,0.2,");
+    }
+
+    @Test
+    void aCoreOnlyStarHasEmptyEnvelopeColumns() {
+        CatalogueRow row = OutcomeRows.toRow(coreOnly());
+        assertThat(row.coreCzMassFrac()).isEqualTo(0.21);
+        assertThat(row.coreCzRadiusFrac()).isEqualTo(0.13);
+        assertThat(row.envCzBaseMassFrac()).isNaN();
+        assertThat(row.envCzBaseRadiusFrac()).isNaN();
+        assertThat(row.envCzMassMsun()).isNaN();
+        assertThat(row.turnoverTimeDays()).isNaN();
+        assertThat(row.phase()).isEqualTo("main_sequence");
+        assertThat(row.surfaceLiRel()).isNaN();
+        assertThat(row.zones()).extracting(CatalogueZone::kind).containsExactly(ZoneKind.CORE, ZoneKind.SHELL);
+        assertThat(String.join(",", CatalogueWriter.cells(row))).contains(",conv_core,0.21,0.13,,,,,5,");
+    }
+
+    @Test
+    void zonesAgreeWithTheCatalogueColumnsAndZeroWidthZonesAreDropped() {
+        CatalogueRow row = OutcomeRows.toRow(coreAndEnvelope());
+        assertThat(row.zones()).extracting(CatalogueZone::kind).containsExactly(ZoneKind.CORE, ZoneKind.ENVELOPE);
+        assertThat(row.zones().get(0).massFracOuter()).isEqualTo(row.coreCzMassFrac());
+        assertThat(row.zones().get(0).radiusFracOuter()).isEqualTo(row.coreCzRadiusFrac());
+        assertThat(row.zones().get(1).massFracInner()).isEqualTo(row.envCzBaseMassFrac());
+        assertThat(row.zones().get(1).radiusFracInner()).isEqualTo(row.envCzBaseRadiusFrac());
+        assertThat(ZoneTable.lines(row)).isEqualTo("""
+                b,0,core,0.0,0.04,0.0,0.06,0.048
+                b,1,envelope,0.99,1.0,0.85,1.0,0.012
+                """);
+    }
+
+    @Test
+    void zonesReadBackOntoTheirRows(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir) throws IOException {
+        List<CatalogueRow> rows = List.of(OutcomeRows.toRow(fullyConvective()), OutcomeRows.toRow(coreOnly()),
+                OutcomeRows.toRow(coreAndEnvelope()));
+        StringBuilder catalogue = new StringBuilder();
+        CatalogueWriter.startingWithHeader(catalogue).writeAll(rows);
+        StringBuilder zones = new StringBuilder(ZoneTable.headerLine());
+        rows.forEach(r -> zones.append(ZoneTable.lines(r)));
+        java.nio.file.Files.writeString(dir.resolve("catalogue.ecsv"), catalogue);
+        java.nio.file.Files.writeString(dir.resolve("zones.csv"), zones);
+        List<CatalogueRow> back = CatalogueReader.readWithZones(dir.resolve("catalogue.ecsv"),
+                dir.resolve("zones.csv"));
+        assertThat(back).extracting(CatalogueRow::zones).containsExactlyElementsOf(
+                rows.stream().map(CatalogueRow::zones).toList());
+    }
+}
