@@ -44,7 +44,8 @@ class RunLockTest {
         int rows = 0;
         while (child.isAlive() && rows < ROWS_FIRST && System.currentTimeMillis() < deadline) {
             Thread.sleep(20);
-            rows = Files.exists(catalogue) ? Files.readAllLines(catalogue, StandardCharsets.UTF_8).size() - 1 : 0;
+            rows = Files.exists(catalogue) ? (int) Files.readAllLines(catalogue, StandardCharsets.UTF_8).stream()
+                    .filter(l -> !l.startsWith("#")).count() - 1 : 0;
         }
         assertThat(child.isAlive()).as("first child still running; its log: %s", log("first")).isTrue();
     }
@@ -55,9 +56,10 @@ class RunLockTest {
     }
 
     private byte[] lone(Path grid) {
-        assertThat(run("run", grid.toString(), "--out", "lone", "--threads", "2", "--quiet").code()).isEqualTo(0);
+        assertThat(run("run", "--no-refine", grid.toString(), "--out", "lone", "--threads", "2", "--quiet").code())
+                .isEqualTo(0);
         try {
-            return Files.readAllBytes(work.resolve("lone/catalogue.csv"));
+            return Files.readAllBytes(work.resolve("lone/catalogue.ecsv"));
         } catch (java.io.IOException e) {
             throw new java.io.UncheckedIOException(e);
         }
@@ -68,16 +70,17 @@ class RunLockTest {
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
         Path dir = work.resolve("shared");
         // slow enough to outlive three refused processes (about 12 s for the 156 models)
-        Process first = child("first", 80, "run", grid.toString(), "--out", dir.toString(), "--threads", "1",
+        Process first = child("first", 80, "run", "--no-refine", grid.toString(), "--out", dir.toString(),
+                "--threads", "1",
                 "--quiet");
-        waitForRows(first, dir.resolve("catalogue.csv"));
+        waitForRows(first, dir.resolve("catalogue.ecsv"));
         long firstPid = first.pid();
         assertThat(Files.readString(dir.resolve(".convgrid.lock")).strip()).isEqualTo(Long.toString(firstPid));
 
         for (String[] args : new String[][] {
-            {"run", grid.toString(), "--out", dir.toString(), "--quiet"},
-            {"run", grid.toString(), "--out", dir.toString(), "--resume", "--quiet"},
-            {"run", grid.toString(), "--out", dir.toString(), "--force", "--quiet"}}) {
+            {"run", "--no-refine", grid.toString(), "--out", dir.toString(), "--quiet"},
+            {"run", "--no-refine", grid.toString(), "--out", dir.toString(), "--resume", "--quiet"},
+            {"run", "--no-refine", grid.toString(), "--out", dir.toString(), "--force", "--quiet"}}) {
             Process second = child("second", args);
             assertThat(second.waitFor(30, TimeUnit.SECONDS)).isTrue();
             assertThat(first.isAlive()).as("the first child outlived the second").isTrue();
@@ -96,10 +99,10 @@ class RunLockTest {
 
         assertThat(first.waitFor(CHILD_TIMEOUT_MILLIS, TimeUnit.MILLISECONDS)).isTrue();
         assertThat(first.exitValue()).as("first child; its log: %s", log("first")).isEqualTo(0);
-        assertThat(Files.readAllBytes(dir.resolve("catalogue.csv"))).isEqualTo(lone(grid));
+        assertThat(Files.readAllBytes(dir.resolve("catalogue.ecsv"))).isEqualTo(lone(grid));
         // released on exit: the file is emptied and the next command takes the lock without a note
         assertThat(Files.readString(dir.resolve(".convgrid.lock"))).isEmpty();
-        CliHarness.Execution again = run("run", grid.toString(), "--out", dir.toString(), "--resume");
+        CliHarness.Execution again = run("run", "--no-refine", grid.toString(), "--out", dir.toString(), "--resume");
         assertThat(again.code()).isEqualTo(0);
         assertThat(again.err()).doesNotContain("note:");
     }
@@ -108,17 +111,18 @@ class RunLockTest {
     void aHolderKilledWithSignal9LeavesAStaleLockThatIsReportedAndResumeSucceeds() throws Exception {
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
         Path dir = work.resolve("killed");
-        Process first = child("first", "run", grid.toString(), "--out", dir.toString(), "--threads", "1", "--quiet");
-        waitForRows(first, dir.resolve("catalogue.csv"));
+        Process first = child("first", "run", "--no-refine", grid.toString(), "--out", dir.toString(), "--threads",
+                "1", "--quiet");
+        waitForRows(first, dir.resolve("catalogue.ecsv"));
         long pid = first.pid();
         first.destroyForcibly();
         assertThat(first.waitFor(10, TimeUnit.SECONDS)).isTrue();
         assertThat(Files.readString(dir.resolve(".convgrid.lock")).strip()).isEqualTo(Long.toString(pid));
 
-        CliHarness.Execution resumed = run("run", grid.toString(), "--out", dir.toString(), "--resume");
+        CliHarness.Execution resumed = run("run", "--no-refine", grid.toString(), "--out", dir.toString(), "--resume");
         assertThat(resumed.code()).as(resumed.err()).isEqualTo(0);
         assertThat(resumed.err()).contains("was last locked by process " + pid + ", which ended without releasing");
-        assertThat(Files.readAllBytes(dir.resolve("catalogue.csv"))).isEqualTo(lone(grid));
+        assertThat(Files.readAllBytes(dir.resolve("catalogue.ecsv"))).isEqualTo(lone(grid));
     }
 
     @Test
