@@ -1,0 +1,17 @@
+package org.convgrid.engine.birth;
+
+/**
+ * The ages (s since birth) at which a star's life changes; NaN for an event that did not happen on the computed
+ * track. Ages of structural events are those of the first model that shows them (resolution: one step); the
+ * zero-age main sequence and the lithium halving are interpolated linearly in age between the two models that
+ * bracket them.
+ *
+ * @param radiativeCore the centre first stops being convective (never for a fully convective star)
+ * @param zeroAgeMainSequence L_nuc first reaches {@link org.convgrid.engine.evolution.NuclearLuminosity#ZERO_AGE_FRACTION} of L
+ * @param convectiveCoreOnset after the radiative core appeared, a convective core above the threshold first appears
+ * @param convectiveCoreEnd after that onset, the convective core first vanishes
+ * @param lithiumHalved the surface 7Li first falls to half its birth value
+ */
+public record LifeEvents(double radiativeCore, double zeroAgeMainSequence, double convectiveCoreOnset,
+                         double convectiveCoreEnd, double lithiumHalved) {
+}
