@@ -1,5 +1,8 @@
 package org.convgrid.engine.birth;
 
+import java.util.List;
+
+import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.structure.StellarProfile;
@@ -9,7 +12,8 @@ import org.convgrid.engine.structure.StellarProfile;
  * outermost point. Above a convective envelope the mesh keeps a few radiative points of the atmosphere, holding
  * ~1e-10 of the mass, which convective mixing in this engine does not reach; their birth composition is not what
  * a spectrum would show, since any overshoot at the top of the envelope mixes such a thin layer at once (common
- * practice: surface abundances are those of the convective envelope). Stateless.
+ * practice: surface abundances are those of the convective envelope). The envelope's composition is read at the
+ * point nearest its middle in mass. Stateless.
  */
 final class SurfaceComposition {
 
@@ -20,14 +24,22 @@ final class SurfaceComposition {
     }
 
     static Composition of(StellarModel model) {
+        List<ConvectiveZone> zones = model.convection().zones();
+        int last = model.state().size() - 1;
+        if (zones.isEmpty() || zones.get(zones.size() - 1).outerMassFraction() < ENVELOPE_TOP) {
+            return model.state().composition(last);
+        }
+        // a point well inside the envelope: its edges move between steps, its middle was mixed last step too
+        ConvectiveZone envelope = zones.get(zones.size() - 1);
+        double middle = 0.5 * (envelope.innerMassFraction() + envelope.outerMassFraction());
         StellarProfile p = model.profile();
-        int last = p.size() - 1;
         double mass = model.mass();
-        for (int k = last; k >= 0 && p.mass(k) / mass >= ENVELOPE_TOP; k--) {
-            if (p.convective(k)) {
-                return model.state().composition(k);
+        int best = last;
+        for (int k = 0; k <= last; k++) {
+            if (Math.abs(p.mass(k) / mass - middle) < Math.abs(p.mass(best) / mass - middle)) {
+                best = k;
             }
         }
-        return model.state().composition(last);
+        return model.state().composition(best);
     }
 }

@@ -39,11 +39,13 @@ class BirthTrackProbe {
         double secs = (System.nanoTime() - t0) * 1e-9;
         for (TrackPoint p : t.points()) {
             var st = p.step();
-            System.out.printf("%.4e yr  R %.4f  L %.4g  Teff %.0f  Tc %.4g  Xc %.6f  fnuc %.4f  Li %.4g  Dc %.3g  %s core %.3f zones %d it %d%n",
+            System.out.printf("%.4e yr  R %.4f  L %.4g  Teff %.0f  Tc %.4g  Xc %.6f  fnuc %.4f  Li %.4g  Dc %.3g  %s core %.3f zones %d env %.4f it %d%n",
                     p.age() / Constants.YEAR, st.radius() / Constants.R_SUN, st.luminosity() / Constants.L_SUN,
                     st.effectiveTemperature(), st.centralTemperature(), st.centralHydrogen(), p.nuclearFraction(),
                     p.surfaceLithium(), p.centralDeuterium(), p.phase(), st.convectiveCoreMassFraction(),
-                    st.convectiveZones().size(), st.iterations());
+                    st.convectiveZones().size(), st.convectiveZones().isEmpty() ? Double.NaN
+                            : st.convectiveZones().get(st.convectiveZones().size() - 1).innerMassFraction(),
+                    st.iterations());
         }
         LifeEvents e = t.events();
         System.out.printf("end %s at %.4g Myr: %s%n", t.result().end(), t.result().endAge() / 1e6 / Constants.YEAR,
