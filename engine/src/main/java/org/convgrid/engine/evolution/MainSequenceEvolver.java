@@ -47,8 +47,8 @@ import org.convgrid.engine.units.Constants;
  *
  * <p>From a pre-main-sequence start model (nuclear luminosity below {@link NuclearLuminosity#ZERO_AGE_FRACTION} of L)
  * the same step runs, with the gravothermal term carrying the contraction, and until the star first reaches that
- * fraction the steps are also limited by {@link PreMainSequenceLimits} (|D ln R|, |D ln T_c|, the central
- * deuterium burnt); the first step is a fraction of the start model's Kelvin-Helmholtz time. A track that starts
+ * fraction the steps are limited by {@link PreMainSequenceLimits} instead in ln L, and also in |D ln R|, |D ln T_c|
+ * and the central deuterium burnt; the first step is a fraction of the start model's Kelvin-Helmholtz time. A track that starts
  * on the zero-age main sequence never sees these limits.
  */
 public final class MainSequenceEvolver {
@@ -245,7 +245,7 @@ public final class MainSequenceEvolver {
             // scheme, so a shorter step cannot make it smaller and rejecting it would only spend the retry budget
             double burned = Math.max(0.0, xc - trial.global().centralHydrogen());
             double ratio = Math.max(burned / limit,
-                    dLnL / settings.maxLuminosityChange());
+                    dLnL / (young ? youngLimits.maxLuminosityChange() : settings.maxLuminosityChange()));
             if (young) {
                 ratio = Math.max(ratio, youngRatio(current, trial, startDeuterium));
             }
@@ -273,7 +273,8 @@ public final class MainSequenceEvolver {
                 landedAges.add(sorted[next++]);
                 landed.add(current);
             }
-            double grown = h * Math.min(settings.maxGrowth(), 0.9 / Math.max(ratio, 1.0e-3));
+            double growth = young ? youngLimits.maxGrowth() : settings.maxGrowth();
+            double grown = h * Math.min(growth, 0.9 / Math.max(ratio, 1.0e-3));
             dt = landing ? Math.max(dt, grown) : grown;
         }
         List<AgedModel> answers = answers(ages, landedAges, landed, end, age, detail);
