@@ -34,7 +34,7 @@ class LightElementRatesTest {
 
     @Test
     void lithiumGamowExponentAndBurningTemperature() {
-        // exponent 8.472 T9^-1/3 (Caughlan & Fowler 1988, 7Li(p,a)4He; our physics table lists 8.47)
+        // exponent 8.472 T9^-1/3 (Caughlan & Fowler 1988, 7Li(p,a)4He; from memory)
         assertThat(SolarFusionRates.LI7_P.tauCoefficient()).isCloseTo(8.472, within(0.01));
         // lithium burns on ~Myr scales near 2.5-3e6 K at the densities of young convective envelopes
         // (common practice: "lithium burns above ~2.5e6 K"): lifetime at rho = 1, X = 0.7
@@ -49,7 +49,7 @@ class LightElementRatesTest {
         BurningRate with = NETWORK.burn(0.05, 1.2e6, BIRTH);
         BurningRate without = NETWORK.burn(0.05, 1.2e6, BIRTH.withTraceSpecies(0.0, BIRTH.li7()));
         double reactions = -with.dh2Dt() / 2.0; // moles of d per gram per second
-        // Q(d(p,g)3He) = 5.494 MeV (atomic masses; our physics table)
+        // Q(d(p,g)3He) = 5.494 MeV (from atomic masses, Audi et al. 2003 mass evaluation; from memory)
         assertThat(with.eps() - without.eps()).isCloseTo(reactions * Constants.N_A * 5.494 * Constants.MEV,
                 within(1.0e-6 * with.eps()));
         double sum = with.dh1Dt() + with.dhe3Dt() + with.dhe4Dt() + with.dc12Dt() + with.dn14Dt() + with.do16Dt()
