@@ -8,7 +8,9 @@ package org.convgrid.engine.birth;
  *
  * @param radiativeCore the centre first stops being convective (never for a fully convective star)
  * @param zeroAgeMainSequence L_nuc first reaches {@link org.convgrid.engine.evolution.NuclearLuminosity#ZERO_AGE_FRACTION} of L
- * @param convectiveCoreOnset after the radiative core appeared, a convective core above the threshold first appears
+ * @param convectiveCoreOnset after the radiative core appeared, a convective core first appears: a central zone
+ *                            whose top lies above the core threshold and below m/M = 0.99 (higher, it is the
+ *                            whole star again)
  * @param convectiveCoreEnd after that onset, the convective core first vanishes
  * @param lithiumHalved the surface 7Li first falls to half its birth value
  */

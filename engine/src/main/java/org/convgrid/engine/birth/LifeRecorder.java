@@ -3,8 +3,7 @@ package org.convgrid.engine.birth;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.convgrid.engine.convection.ConvectiveStructure;
-import org.convgrid.engine.convection.StructureClass;
+import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.evolution.NuclearLuminosity;
 import org.convgrid.engine.evolution.StepObserver;
 import org.convgrid.engine.structure.StellarModel;
@@ -40,11 +39,14 @@ final class LifeRecorder implements StepObserver {
             birthLithium = surface.li7();
         }
         double lithium = birthLithium > 0.0 ? surface.li7() / birthLithium : Double.NaN;
-        ConvectiveStructure c = model.convection();
-        boolean fullyConvective = c.structureClass() == StructureClass.FULLY_CONVECTIVE;
-        boolean core = !fullyConvective && c.coreMassFraction() > coreThreshold;
+        List<ConvectiveZone> zones = model.convection().zones();
+        // the centre is radiative when no zone starts there; a central zone reaching the surface layers is the
+        // whole star (a thin radiative atmosphere above it does not make it a core)
+        boolean radiativeCentre = zones.isEmpty() || zones.get(0).innerMassFraction() > 0.0;
+        boolean core = !radiativeCentre && zones.get(0).outerMassFraction() < SurfaceComposition.ENVELOPE_TOP
+                && zones.get(0).outerMassFraction() > coreThreshold;
         if (!rows.isEmpty()) {
-            if (Double.isNaN(radiativeCore) && !fullyConvective) {
+            if (Double.isNaN(radiativeCore) && radiativeCentre) {
                 radiativeCore = age;
             }
             if (Double.isNaN(zams) && fraction >= NuclearLuminosity.ZERO_AGE_FRACTION) {
