@@ -32,4 +32,32 @@ class StartModelProbe {
             }
         }
     }
+
+    @Test
+    void startMemory() {
+        PhysicsSet physics = BirthTracks.physics(0.02);
+        org.convgrid.engine.evolution.MainSequenceEvolver.Settings d =
+                org.convgrid.engine.evolution.MainSequenceEvolver.Settings.DEFAULT;
+        var evolver = new org.convgrid.engine.evolution.MainSequenceEvolver(physics,
+                new org.convgrid.engine.evolution.MainSequenceEvolver.Settings(d.maxCentralHydrogenChange(),
+                        d.exhaustionFraction(), d.maxLuminosityChange(), d.maxGrowth(), d.endCentralHydrogen(),
+                        2.0 * BirthTracks.MYR, d.stepBudget(), d.retryBudget()));
+        double[] ages = {0.001 * BirthTracks.MYR, 0.01 * BirthTracks.MYR, 0.1 * BirthTracks.MYR, 0.3 * BirthTracks.MYR,
+            1.0 * BirthTracks.MYR, 2.0 * BirthTracks.MYR};
+        BirthTrack hot = new BirthEvolution(new StartModelBuilder(physics), evolver, 1.0e-3)
+                .evolve(Constants.M_SUN, BirthTracks.birth(0.02), ages);
+        BirthTrack cool = new BirthEvolution(new StartModelBuilder(physics,
+                new org.convgrid.engine.structure.MeshPlanner(500), 3.5e5), evolver, 1.0e-3)
+                .evolve(Constants.M_SUN, BirthTracks.birth(0.02), ages);
+        for (int i = 0; i < ages.length; i++) {
+            var a = hot.models().get(i).model().global();
+            var b = cool.models().get(i).model().global();
+            System.out.printf("age %.3g Myr: R %.4f / %.4f Rsun  dlnR %.4f  dlnL %.4f  dlnTc %.4f%n",
+                    ages[i] / BirthTracks.MYR, a.radius() / Constants.R_SUN, b.radius() / Constants.R_SUN,
+                    Math.log(a.radius() / b.radius()), Math.log(a.luminosity() / b.luminosity()),
+                    Math.log(a.centralTemperature() / b.centralTemperature()));
+        }
+        System.out.printf("contraction times: %.3g yr, %.3g yr%n", hot.start().contractionTime() / Constants.YEAR,
+                cool.start().contractionTime() / Constants.YEAR);
+    }
 }
