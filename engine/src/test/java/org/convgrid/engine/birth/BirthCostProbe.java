@@ -22,7 +22,9 @@ class BirthCostProbe {
         int repeats = Integer.parseInt(System.getProperty("probe.repeats", "3"));
         var physics = BirthTracks.physics(0.02);
         MainSequenceEvolver evolver = new MainSequenceEvolver(physics, MainSequenceEvolver.Settings.DEFAULT);
-        BirthEvolution birth = new BirthEvolution(new StartModelBuilder(physics), evolver,
+        double pms = Double.parseDouble(System.getProperty("probe.pms", "1"));
+        BirthEvolution birth = new BirthEvolution(new StartModelBuilder(physics), evolver.withPreMainSequenceLimits(
+                org.convgrid.engine.evolution.PreMainSequenceLimits.DEFAULT.scaled(pms)),
                 BirthEvolution.DEFAULT_CORE_THRESHOLD);
         double bestZams = Double.MAX_VALUE;
         double bestBirth = Double.MAX_VALUE;
