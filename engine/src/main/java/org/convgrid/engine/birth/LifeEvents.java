@@ -7,7 +7,8 @@ package org.convgrid.engine.birth;
  * bracket them.
  *
  * @param radiativeCore the centre first stops being convective (never for a fully convective star)
- * @param zeroAgeMainSequence L_nuc first reaches {@link org.convgrid.engine.evolution.NuclearLuminosity#ZERO_AGE_FRACTION} of L
+ * @param zeroAgeMainSequence L_nuc first reaches
+ *                            {@link org.convgrid.engine.evolution.NuclearLuminosity#ZERO_AGE_FRACTION} of L
  * @param convectiveCoreOnset after the radiative core appeared, a convective core first appears: a central zone
  *                            whose top lies above the core threshold and below m/M = 0.99 (higher, it is the
  *                            whole star again)

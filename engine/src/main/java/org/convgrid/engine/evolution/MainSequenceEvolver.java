@@ -45,11 +45,11 @@ import org.convgrid.engine.units.Constants;
  * half the step, within {@link Settings#retryBudget()}. Requested ages are reached by landing a step exactly on
  * them (no interpolation). Deterministic; immutable and thread-safe (each call has its own state).
  *
- * <p>From a pre-main-sequence start model (nuclear luminosity below {@link NuclearLuminosity#ZERO_AGE_FRACTION} of L)
- * the same step runs, with the gravothermal term carrying the contraction, and until the star first reaches that
- * fraction the steps are limited by {@link PreMainSequenceLimits} instead in ln L, and also in |D ln R|, |D ln T_c|
- * and the central deuterium burnt; the first step is a fraction of the start model's Kelvin-Helmholtz time. A track that starts
- * on the zero-age main sequence never sees these limits.
+ * <p>From a pre-main-sequence start model (nuclear luminosity below {@link NuclearLuminosity#ZERO_AGE_FRACTION}
+ * of L) the same step runs, the gravothermal term carrying the contraction. Until the star first reaches that
+ * fraction the steps are limited in ln L by {@link PreMainSequenceLimits} instead, and also in |D ln R|,
+ * |D ln T_c| and the central deuterium burnt; the first step is a fraction of the start model's
+ * Kelvin-Helmholtz time. A track that starts on the zero-age main sequence never sees these limits.
  */
 public final class MainSequenceEvolver {
 
