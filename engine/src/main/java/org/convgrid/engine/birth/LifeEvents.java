@@ -11,7 +11,8 @@ package org.convgrid.engine.birth;
  *                            {@link org.convgrid.engine.evolution.NuclearLuminosity#ZERO_AGE_FRACTION} of L
  * @param convectiveCoreOnset after the radiative core appeared, a convective core first appears: a central zone
  *                            whose top lies above the core threshold and below m/M = 0.99 (higher, it is the
- *                            whole star again)
+ *                            whole star again); a core that also vanishes before the ZAMS is a transient of the
+ *                            contraction and is not reported
  * @param convectiveCoreEnd after that onset, the convective core first vanishes
  * @param lithiumHalved the surface 7Li first falls to half its birth value
  */

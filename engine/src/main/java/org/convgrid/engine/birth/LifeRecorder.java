@@ -55,7 +55,13 @@ final class LifeRecorder implements StepObserver {
             if (!Double.isNaN(radiativeCore) && Double.isNaN(coreOnset) && core) {
                 coreOnset = age;
             } else if (!Double.isNaN(coreOnset) && Double.isNaN(coreEnd) && !core) {
-                coreEnd = age;
+                if (Double.isNaN(zams)) {
+                    // a core that comes and goes during the contraction is a transient of that phase (seen at
+                    // 10 Msun, Z = 1e-4, within the first 1e4 yr): forget it, the main-sequence core is the event
+                    coreOnset = Double.NaN;
+                } else {
+                    coreEnd = age;
+                }
             }
             if (Double.isNaN(lithiumHalved) && lithium <= 0.5) {
                 lithiumHalved = crossing(lastAge, lastLithium, age, lithium, 0.5);
