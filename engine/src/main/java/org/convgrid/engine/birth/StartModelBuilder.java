@@ -28,7 +28,7 @@ import org.convgrid.engine.units.Constants;
  * start model scaled homologously to the next mass as its guess. Its age is zero: at 1/x
  * (~1e3-1e5 yr, the model's contraction time) any earlier history has been forgotten, so ages beyond a few
  * times that do not depend on the start (measured at 1 Msun, starting at 3.5e5 instead of 5e5 K: |D ln R| = 0.08
- * at 1e4 yr, 0.001-0.004 at 1e5 yr, 1e-4 at 1 Myr). Immutable and thread-safe.
+ * at 1e4 yr, 0.001-0.004 at 1e5 yr, 0.0017 at 1 Myr). Immutable and thread-safe.
  */
 public final class StartModelBuilder {
 

@@ -41,7 +41,7 @@ class LowMassBirthTest {
             }
         }
         assertThat(largest).isBetween(0.02, 0.15);
-        assertThat(t.events().radiativeCore() / MYR).isCloseTo(39.6, within(4.0));
+        assertThat(t.events().radiativeCore() / MYR).isCloseTo(38.7, within(4.0));
         assertThat(t.models().get(0).model().convection().structureClass()).isEqualTo(StructureClass.FULLY_CONVECTIVE);
     }
 

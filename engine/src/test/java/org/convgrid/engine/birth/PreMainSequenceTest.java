@@ -42,8 +42,8 @@ class PreMainSequenceTest {
         // the requested ages are landed on exactly, not interpolated
         assertThat(young.age()).isEqualTo(1.0 * MYR);
         assertThat(t.points().stream().anyMatch(p -> p.age() == 10.0 * MYR)).isTrue();
-        // non-regression (default limits): radiative core at 1.76 Myr
-        assertThat(t.events().radiativeCore() / MYR).isCloseTo(1.76, within(0.1));
+        // non-regression (default limits): radiative core at 1.69 Myr
+        assertThat(t.events().radiativeCore() / MYR).isCloseTo(1.69, within(0.1));
     }
 
     @Test
@@ -116,7 +116,7 @@ class PreMainSequenceTest {
         double previous = Double.MAX_VALUE;
         double previousCore = Double.MAX_VALUE;
         // non-regression (default limits), Myr
-        double[] frozen = {201.0, 48.9, 33.5, 17.2, 4.61};
+        double[] frozen = {200.7, 48.85, 31.81, 17.15, 4.51};
         for (int i = 0; i < cases.length; i++) {
             double[] c = cases[i];
             BirthTrack t = c[0] == 1.0 ? solar() : BirthTracks.track(c[0], 0.02, c[1], 1.0, 100);
@@ -143,7 +143,7 @@ class PreMainSequenceTest {
         // KNOWN DISCREPANCY, frozen so that a change is noticed: this engine depletes ~1.3 dex more than the Sun
         // (grey T(tau) atmosphere, mixing length 1.8: its young convective envelope is deeper and hotter than in
         // published standard models), where those models leave the Sun under-depleted. Not a validation.
-        assertThat(logLi).isCloseTo(-3.53, within(0.2));
+        assertThat(logLi).isCloseTo(-3.55, within(0.2));
         // 0.5 Msun at 100 Myr: standard models have burnt their lithium (more than 2 dex by ~30-50 Myr;
         // Baraffe et al. 2015, A&A 577, A42; from memory)
         BirthTrack half = BirthTracks.track(0.5, 0.02, 300, 1.0, 100);
