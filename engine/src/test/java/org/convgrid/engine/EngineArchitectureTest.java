@@ -14,7 +14,7 @@ import org.junit.jupiter.api.Test;
 /**
  * Keeps the engine's packages layered along the data flow, each layer using only the layers below it: constants
  * and errors, composition, microphysics, convection and overshoot, the plain request values, the physics bundle,
- * the structure solver, zero-age models, evolution, calibration and refinement, and the grid's batch solver on
+ * the structure solver, zero-age models, evolution, evolution from birth, calibration and refinement, and the grid's batch solver on
  * top, which nothing in the engine uses. No package cycles anywhere.
  */
 class EngineArchitectureTest {
@@ -38,6 +38,7 @@ class EngineArchitectureTest {
             new String[] {"structure", "org.convgrid.engine.structure.."},
             new String[] {"zams", "org.convgrid.engine.zams.."},
             new String[] {"evolution", "org.convgrid.engine.evolution.."},
+            new String[] {"birth", "org.convgrid.engine.birth.."},
             new String[] {"calibration", "org.convgrid.engine.calibration.."},
             new String[] {"refine", "org.convgrid.engine.refine.."},
             new String[] {"batch", "org.convgrid.engine.batch.."});

@@ -14,7 +14,9 @@ import org.convgrid.engine.state.Composition;
  * Jacobian taken once at the start of the sub-step; a sub-step that does not converge, or that changes some
  * mass fraction by more than {@link #MAX_SUBSTEP_CHANGE}, is halved. Newton corrections are damped so that no
  * mass fraction goes negative. The rates conserve mass (abundances counted with mass numbers), and the result is
- * renormalised so the seven fractions sum to one to rounding. Immutable and thread-safe.
+ * renormalised so the fractions sum to one to rounding. Deuterium and 7Li, destroyed by one proton capture each at a
+ * rate linear in their own abundance, burn first in their own exact step ({@link LightElementBurning}); the Newton
+ * step then holds them fixed and sees only the rest of the network. Immutable and thread-safe.
  */
 public final class CompositionStep {
 
@@ -88,14 +90,14 @@ public final class CompositionStep {
         }
         double mass = total;
         Rates zone = x -> {
-            double[] mean = new double[N];
+            double[] mean = new double[N + 2];
             for (int k = 0; k < n; k++) {
                 double[] f = rates(densities[k], temperatures[k], x);
-                for (int i = 0; i < N; i++) {
+                for (int i = 0; i < mean.length; i++) {
                     mean[i] += weights[k] * f[i];
                 }
             }
-            for (int i = 0; i < N; i++) {
+            for (int i = 0; i < mean.length; i++) {
                 mean[i] /= mass;
             }
             return mean;
@@ -113,6 +115,10 @@ public final class CompositionStep {
         ConvgridException.requireInRange("time step", dt, 0.0, Double.MAX_VALUE, "s");
         double[] x = MassFractions.of(start);
         double[] f = rates.at(x);
+        if (x[MassFractions.H2] > 0.0 || x[MassFractions.LI7] > 0.0) {
+            LightElementBurning.burn(x, f[N], f[N + 1], dt);
+            f = rates.at(x);
+        }
         double largest = 0.0;
         for (int i = 0; i < N; i++) {
             largest = Math.max(largest, Math.abs(f[i]) * dt);
@@ -201,19 +207,29 @@ public final class CompositionStep {
         return null;
     }
 
+    /**
+     * The rates of the six network species without the part that comes from deuterium and 7Li burning (that part
+     * belongs to {@link LightElementBurning}), then d(deuterium)/dt and d(7Li)/dt.
+     */
     private double[] rates(double density, double temperature, double[] x) {
         BurningRate r = network.burn(density, temperature, MassFractions.composition(x));
-        return new double[] {r.dh1Dt(), r.dhe3Dt(), r.dhe4Dt(), r.dc12Dt(), r.dn14Dt(), r.do16Dt()};
+        double d = r.dh2Dt();
+        double li = r.dli7Dt();
+        // d + p -> 3He moves mass 2:1 -> 3, 7Li + p -> 2 4He 7:1 -> 8 (rates are negative: destruction)
+        return new double[] {r.dh1Dt() - LightElementBurning.HYDROGEN_PER_DEUTERIUM * d
+                - LightElementBurning.HYDROGEN_PER_LITHIUM * li,
+            r.dhe3Dt() + LightElementBurning.HELIUM3_PER_DEUTERIUM * d, r.dhe4Dt()
+                + LightElementBurning.HELIUM4_PER_LITHIUM * li, r.dc12Dt(), r.dn14Dt(), r.do16Dt(), d, li};
     }
 
-    /** Clips rounding-level negatives and rescales the burning species so the seven fractions sum to one. */
+    /** Clips rounding-level negatives and rescales the burning species so all the fractions sum to one. */
     private static Composition normalised(double[] x) {
         double sum = 0.0;
         for (int i = 0; i < N; i++) {
             x[i] = Math.max(0.0, x[i]);
             sum += x[i];
         }
-        double scale = (1.0 - x[N]) / sum;
+        double scale = (1.0 - x[MassFractions.OTHER_METALS] - x[MassFractions.H2] - x[MassFractions.LI7]) / sum;
         for (int i = 0; i < N; i++) {
             x[i] *= scale;
         }

@@ -44,6 +44,12 @@ import org.convgrid.engine.units.Constants;
  * exceeds a limit by more than {@link #REJECTION_RATIO} is redone shorter, a failed relaxation is redone with
  * half the step, within {@link Settings#retryBudget()}. Requested ages are reached by landing a step exactly on
  * them (no interpolation). Deterministic; immutable and thread-safe (each call has its own state).
+ *
+ * <p>From a pre-main-sequence start model (nuclear luminosity below {@link NuclearLuminosity#ZERO_AGE_FRACTION}
+ * of L) the same step runs, the gravothermal term carrying the contraction. Until the star first reaches that
+ * fraction the steps are limited in ln L by {@link PreMainSequenceLimits} instead, and also in |D ln R|,
+ * |D ln T_c| and the central deuterium burnt; the first step is a fraction of the start model's
+ * Kelvin-Helmholtz time. A track that starts on the zero-age main sequence never sees these limits.
  */
 public final class MainSequenceEvolver {
 
@@ -109,14 +115,15 @@ public final class MainSequenceEvolver {
     private final CompositionStep network;
     private final Settings settings;
     private final boolean settling;
+    private final PreMainSequenceLimits youngLimits;
 
     public MainSequenceEvolver(PhysicsSet physics, MeshPlanner planner, HenyeySolver.Settings solveSettings,
                                Settings settings) {
-        this(physics, planner, solveSettings, settings, false);
+        this(physics, planner, solveSettings, settings, false, PreMainSequenceLimits.DEFAULT);
     }
 
     private MainSequenceEvolver(PhysicsSet physics, MeshPlanner planner, HenyeySolver.Settings solveSettings,
-                                Settings settings, boolean settling) {
+                                Settings settings, boolean settling, PreMainSequenceLimits youngLimits) {
         this.physics = physics;
         this.planner = planner;
         this.solveSettings = solveSettings;
@@ -124,6 +131,7 @@ public final class MainSequenceEvolver {
         this.network = new CompositionStep(physics.nuclear());
         this.settings = settings;
         this.settling = settling;
+        this.youngLimits = youngLimits;
     }
 
     public MainSequenceEvolver(PhysicsSet physics, Settings settings) {
@@ -136,7 +144,20 @@ public final class MainSequenceEvolver {
      * {@link SettlingStep}) after each step's burning and mixing, when {@code on}.
      */
     public MainSequenceEvolver withSettling(boolean on) {
-        return new MainSequenceEvolver(physics, planner, solveSettings, settings, on);
+        return new MainSequenceEvolver(physics, planner, solveSettings, settings, on, youngLimits);
+    }
+
+    /** The same evolver with other pre-main-sequence step limits. */
+    public MainSequenceEvolver withPreMainSequenceLimits(PreMainSequenceLimits limits) {
+        return new MainSequenceEvolver(physics, planner, solveSettings, settings, settling, limits);
+    }
+
+    public PhysicsSet physics() {
+        return physics;
+    }
+
+    public Settings settings() {
+        return settings;
     }
 
     /**
@@ -145,12 +166,27 @@ public final class MainSequenceEvolver {
      * @return the models at the requested ages and every step
      */
     public EvolutionResult evolve(StellarModel zeroAge, double[] ages) {
+        return evolve(zeroAge, ages, StepObserver.NONE);
+    }
+
+    /**
+     * Evolves a zero-age main-sequence model or a pre-main-sequence start model.
+     *
+     * @param zeroAge a converged start model (its per-point compositions are the starting abundances)
+     * @param ages requested ages since that model, s (any order; 0 gives the start model)
+     * @param observer receives every accepted model, the start model first
+     * @return the models at the requested ages and every step
+     */
+    public EvolutionResult evolve(StellarModel zeroAge, double[] ages, StepObserver observer) {
         double[] sorted = ages.clone();
         Arrays.sort(sorted);
         List<Double> landedAges = new ArrayList<>();
         List<StellarModel> landed = new ArrayList<>();
         List<EvolutionStep> steps = new ArrayList<>();
         steps.add(summary(zeroAge, 0.0, 0.0, 0));
+        observer.accepted(0.0, 0.0, zeroAge);
+        boolean young = !NuclearLuminosity.onMainSequence(zeroAge);
+        double startDeuterium = zeroAge.state().composition(0).h2();
         StellarModel current = zeroAge;
         double age = 0.0;
         int next = 0;
@@ -158,7 +194,7 @@ public final class MainSequenceEvolver {
             landedAges.add(sorted[next++]);
             landed.add(zeroAge);
         }
-        double dt = firstStep(zeroAge);
+        double dt = young ? youngLimits.firstStepFraction() * kelvinHelmholtzTime(zeroAge) : firstStep(zeroAge);
         int retries = 0;
         EvolutionResult.EndReason end = null;
         String detail = "";
@@ -209,7 +245,10 @@ public final class MainSequenceEvolver {
             // scheme, so a shorter step cannot make it smaller and rejecting it would only spend the retry budget
             double burned = Math.max(0.0, xc - trial.global().centralHydrogen());
             double ratio = Math.max(burned / limit,
-                    dLnL / settings.maxLuminosityChange());
+                    dLnL / (young ? youngLimits.maxLuminosityChange() : settings.maxLuminosityChange()));
+            if (young) {
+                ratio = Math.max(ratio, youngRatio(current, trial, startDeuterium));
+            }
             if (ratio > REJECTION_RATIO) {
                 spent += trial.report().iterations();
                 retries++;
@@ -223,6 +262,8 @@ public final class MainSequenceEvolver {
             previousStep = h;
             current = trial;
             steps.add(summary(current, age, h, current.report().iterations() + spent));
+            observer.accepted(age, h, current);
+            young = young && !NuclearLuminosity.onMainSequence(current);
             spent = 0;
             double newXc = current.global().centralHydrogen();
             if (newXc < settings.endCentralHydrogen()) {
@@ -232,7 +273,8 @@ public final class MainSequenceEvolver {
                 landedAges.add(sorted[next++]);
                 landed.add(current);
             }
-            double grown = h * Math.min(settings.maxGrowth(), 0.9 / Math.max(ratio, 1.0e-3));
+            double growth = young ? youngLimits.maxGrowth() : settings.maxGrowth();
+            double grown = h * Math.min(growth, 0.9 / Math.max(ratio, 1.0e-3));
             dt = landing ? Math.max(dt, grown) : grown;
         }
         List<AgedModel> answers = answers(ages, landedAges, landed, end, age, detail);
@@ -380,6 +422,27 @@ public final class MainSequenceEvolver {
                     width / COMPOSITION_MESH_RESOLUTION);
         }
         return cost;
+    }
+
+    /** The largest change of a pre-main-sequence step over its limit ({@link PreMainSequenceLimits}). */
+    private double youngRatio(StellarModel current, StellarModel trial, double startDeuterium) {
+        var a = current.global();
+        var b = trial.global();
+        double ratio = Math.max(Math.abs(Math.log(b.radius() / a.radius())) / youngLimits.maxRadiusChange(),
+                Math.abs(Math.log(b.centralTemperature() / a.centralTemperature()))
+                        / youngLimits.maxCentralTemperatureChange());
+        double d = current.state().composition(0).h2();
+        if (d > PreMainSequenceLimits.DEUTERIUM_FLOOR * startDeuterium && d > 0.0) {
+            double burnt = (d - trial.state().composition(0).h2()) / d;
+            ratio = Math.max(ratio, burnt / youngLimits.maxDeuteriumBurnt());
+        }
+        return ratio;
+    }
+
+    /** G M^2/(R L), s. */
+    private static double kelvinHelmholtzTime(StellarModel model) {
+        var g = model.global();
+        return Constants.G * model.mass() * model.mass() / (g.radius() * g.luminosity());
     }
 
     private double firstStep(StellarModel zeroAge) {

@@ -5,7 +5,11 @@ import org.convgrid.engine.error.ErrorKind;
 
 /**
  * Mass fractions of the species the engine follows. Carbon, nitrogen and oxygen are carried separately because
- * the CNO cycle reshuffles them; the other metals keep the proportions of the {@link MetalMixture}.
+ * the CNO cycle reshuffles them; the other metals keep the proportions of the {@link MetalMixture}. Deuterium and
+ * 7Li are trace species that only pre-main-sequence burning changes (their initial values: {@link BirthAbundances});
+ * deuterium counts as hydrogen in {@link #x()}, 7Li as a metal in {@link #z()}. A composition made without them
+ * (the seven-fraction constructor, {@link #scaledSolar}) has none, as a zero-age main-sequence star has burnt its
+ * deuterium and is described here without its lithium.
  *
  * @param h1 hydrogen
  * @param he3 helium-3
@@ -14,15 +18,17 @@ import org.convgrid.engine.error.ErrorKind;
  * @param n14 nitrogen (all isotopes, counted as 14N)
  * @param o16 oxygen (all isotopes, counted as 16O)
  * @param otherMetals every other metal, in the proportions of the mixture
+ * @param h2 deuterium
+ * @param li7 lithium-7
  */
 public record Composition(double h1, double he3, double he4, double c12, double n14, double o16,
-                          double otherMetals) {
+                          double otherMetals, double h2, double li7) {
 
     /** Largest allowed |sum of mass fractions - 1|. */
     public static final double SUM_TOLERANCE = 1.0e-8;
 
     public Composition {
-        double[] parts = {h1, he3, he4, c12, n14, o16, otherMetals};
+        double[] parts = {h1, he3, he4, c12, n14, o16, otherMetals, h2, li7};
         double sum = 0.0;
         for (double p : parts) {
             if (!(p >= 0.0) || p > 1.0) {
@@ -35,6 +41,11 @@ public record Composition(double h1, double he3, double he4, double c12, double 
             throw new ConvgridException(ErrorKind.BAD_COMPOSITION,
                     "mass fractions sum to " + sum + ", not 1", sum);
         }
+    }
+
+    /** A composition without deuterium and 7Li. */
+    public Composition(double h1, double he3, double he4, double c12, double n14, double o16, double otherMetals) {
+        this(h1, he3, he4, c12, n14, o16, otherMetals, 0.0, 0.0);
     }
 
     /**
@@ -59,9 +70,9 @@ public record Composition(double h1, double he3, double he4, double c12, double 
         return new Composition(x, 0.0, y, c, n, o, Math.max(0.0, z - c - n - o));
     }
 
-    /** Hydrogen mass fraction X. */
+    /** Hydrogen mass fraction X (1H + deuterium). */
     public double x() {
-        return h1;
+        return h1 + h2;
     }
 
     /** Helium mass fraction Y (3He + 4He). */
@@ -69,9 +80,9 @@ public record Composition(double h1, double he3, double he4, double c12, double 
         return he3 + he4;
     }
 
-    /** Metal mass fraction Z. */
+    /** Metal mass fraction Z (7Li included). */
     public double z() {
-        return c12 + n14 + o16 + otherMetals;
+        return c12 + n14 + o16 + otherMetals + li7;
     }
 
     /** Carbon + nitrogen + oxygen mass fraction. */
@@ -80,10 +91,15 @@ public record Composition(double h1, double he3, double he4, double c12, double 
     }
 
     public Composition withHydrogenAndHelium(double newH1, double newHe3, double newHe4) {
-        return new Composition(newH1, newHe3, newHe4, c12, n14, o16, otherMetals);
+        return new Composition(newH1, newHe3, newHe4, c12, n14, o16, otherMetals, h2, li7);
     }
 
     public Composition withCno(double newC12, double newN14, double newO16) {
-        return new Composition(h1, he3, he4, newC12, newN14, newO16, otherMetals);
+        return new Composition(h1, he3, he4, newC12, newN14, newO16, otherMetals, h2, li7);
+    }
+
+    /** The same composition with these deuterium and 7Li fractions, 1H and the other metals paying for them. */
+    public Composition withTraceSpecies(double newH2, double newLi7) {
+        return new Composition(h1 + h2 - newH2, he3, he4, c12, n14, o16, otherMetals + li7 - newLi7, newH2, newLi7);
     }
 }

@@ -17,6 +17,8 @@ import org.convgrid.engine.units.Constants;
  *   12C + 2p         -&gt; 14N               11.009 MeV
  *   14N + 2p         -&gt; 12C + 4He         14.020 MeV
  *   16O + 2p         -&gt; 14N + 4He          3.554 MeV
+ *   d + p            -&gt; 3He                5.494 MeV  (the deuterium a star is born with)
+ *   7Li + p          -&gt; 2 4He             17.347 MeV  (the lithium a star is born with)
  * </pre>
  * Energies are net of the neutrino losses ({@link ReactionEnergy}). The 7Be branch fraction is
  * {@code lambda_ec/(lambda_ec + rho Y_p N_A<sv>_17)}. Abundances are counted with mass numbers, so the
@@ -86,6 +88,11 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
         double r12 = density * y1 * y12 * screened(SolarFusionRates.C12_P, t9, cbrtT9, plasma);
         double r14 = density * y1 * y14 * screened(SolarFusionRates.N14_P, t9, cbrtT9, plasma);
         double r16 = density * y1 * y16 * screened(SolarFusionRates.O16_P, t9, cbrtT9, plasma);
+        // initial deuterium and 7Li; skipped when absent (main-sequence compositions) to keep those burns as cheap
+        double y2 = composition.h2() / 2.0;
+        double y7 = composition.li7() / 7.0;
+        double r2 = y2 > 0.0 ? density * y1 * y2 * screened(SolarFusionRates.D_P, t9, cbrtT9, plasma) : 0.0;
+        double r7 = y7 > 0.0 ? density * y1 * y7 * screened(SolarFusionRates.LI7_P, t9, cbrtT9, plasma) : 0.0;
 
         // 7Be: electron capture (PP-II) against proton capture (PP-III).
         double t6 = temperature * 1.0e-6;
@@ -101,7 +108,9 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
         double e12 = MEV_PER_MOLE * r12 * ReactionEnergy.C12_TO_N14;
         double e14 = MEV_PER_MOLE * r14 * ReactionEnergy.N14_TO_C12;
         double e16 = MEV_PER_MOLE * r16 * ReactionEnergy.O16_TO_N14;
-        double epsPp = e11 + e33 + e34;
+        double e2 = MEV_PER_MOLE * r2 * ReactionEnergy.Q_DP;
+        double e7 = MEV_PER_MOLE * r7 * ReactionEnergy.Q_LI7_P;
+        double epsPp = e11 + e33 + e34 + e2 + e7;
         double epsCno = e12 + e14 + e16;
         double eps = epsPp + epsCno;
 
@@ -114,22 +123,27 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
                 + e12 * dlnT(SolarFusionRates.C12_P, t9, cbrtT9, plasma)
                 + e14 * dlnT(SolarFusionRates.N14_P, t9, cbrtT9, plasma)
                 + e16 * dlnT(SolarFusionRates.O16_P, t9, cbrtT9, plasma)
-                + branchWeight * (BerylliumCapture.dlnRateDlnT(t6) - dlnT(SolarFusionRates.BE7_P, t9, cbrtT9, plasma));
+                + branchWeight * (BerylliumCapture.dlnRateDlnT(t6) - dlnT(SolarFusionRates.BE7_P, t9, cbrtT9, plasma))
+                + (r2 > 0.0 ? e2 * dlnT(SolarFusionRates.D_P, t9, cbrtT9, plasma) : 0.0)
+                + (r7 > 0.0 ? e7 * dlnT(SolarFusionRates.LI7_P, t9, cbrtT9, plasma) : 0.0);
         double dEpsDlnRho = e11 * (1.0 + dlnRho(SolarFusionRates.PP, plasma))
                 + e33 * (1.0 + dlnRho(SolarFusionRates.HE3_HE3, plasma))
                 + e34 * (1.0 + dlnRho(SolarFusionRates.HE3_HE4, plasma))
                 + e12 * (1.0 + dlnRho(SolarFusionRates.C12_P, plasma))
                 + e14 * (1.0 + dlnRho(SolarFusionRates.N14_P, plasma))
                 + e16 * (1.0 + dlnRho(SolarFusionRates.O16_P, plasma))
-                - branchWeight * dlnRho(SolarFusionRates.BE7_P, plasma);
+                - branchWeight * dlnRho(SolarFusionRates.BE7_P, plasma)
+                + e2 * (1.0 + dlnRho(SolarFusionRates.D_P, plasma))
+                + e7 * (1.0 + dlnRho(SolarFusionRates.LI7_P, plasma));
 
         double cno = r12 + r14 + r16;
-        double dy1 = -3.0 * r11 + 2.0 * r33 - r34 - 2.0 * cno;
-        double dy3 = r11 - 2.0 * r33 - r34;
-        double dy4 = r33 + r34 + r14 + r16;
+        double dy1 = -3.0 * r11 + 2.0 * r33 - r34 - 2.0 * cno - r2 - r7;
+        double dy3 = r11 - 2.0 * r33 - r34 + r2;
+        double dy4 = r33 + r34 + r14 + r16 + 2.0 * r7;
         return new BurningRate(eps, epsPp, epsCno,
                 eps > 0.0 ? dEpsDlnRho / eps : 0.0, eps > 0.0 ? dEpsDlnT / eps : 0.0,
-                dy1, 3.0 * dy3, 4.0 * dy4, 12.0 * (r14 - r12), 14.0 * (r12 - r14 + r16), -16.0 * r16);
+                dy1, 3.0 * dy3, 4.0 * dy4, 12.0 * (r14 - r12), 14.0 * (r12 - r14 + r16), -16.0 * r16,
+                -2.0 * r2, -7.0 * r7);
     }
 
     /**
@@ -170,7 +184,8 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
             he4 += h1;
             h1 = 0.0;
         }
-        return new Composition(h1, he3, he4, c12, n14, composition.o16(), composition.otherMetals());
+        return new Composition(h1, he3, he4, c12, n14, composition.o16(), composition.otherMetals(),
+                composition.h2(), composition.li7());
     }
 
     /**

@@ -17,6 +17,23 @@ public final class SolarFusionRates {
     public static final ChargedParticleRate PP =
             new ChargedParticleRate("p(p,e+nu)d", 1, 1, 0.5036, 4.01e-25, 11.2, 0.0);
 
+    /**
+     * d(p,g)3He: S = 2.14e-4 keV b, S' = 5.56e-3 keV b/MeV, S'' = 9.3e-3 keV b/MeV^2 (Solar Fusion II, Adelberger
+     * et al. 2011, RMP 83, 195, section IV; values from memory). Burns the deuterium a star is born with at
+     * T ~ 1e6 K; the deuterium made by p+p is taken as burnt at once (it is part of {@link #PP}'s lumped step).
+     */
+    public static final ChargedParticleRate D_P =
+            new ChargedParticleRate("d(p,g)3He", 1, 1, 0.6716, 2.14e-7, 5.56e-3 / 2.14e-4, 9.3e-3 / 2.14e-4);
+
+    /**
+     * 7Li(p,a)4He: S = 59.3 keV b, with no energy dependence (the non-resonant S(0) of the NACRE compilation,
+     * Angulo et al. 1999, Nucl. Phys. A 656, 3; from memory). At the 2.5-4e6 K where stars burn their lithium,
+     * E_0 ~ 10 keV, far below the 441 keV resonance of 8Be, so S(0) carries the rate; a slope of order
+     * 0.2-0.6 MeV^-1 (from memory) would change it by under 1 %.
+     */
+    public static final ChargedParticleRate LI7_P =
+            new ChargedParticleRate("7Li(p,a)4He", 1, 3, 0.8812, 59.3e-3, 0.0, 0.0);
+
     /** 3He(3He,2p)4He: S = 5.21 MeV b, S' = -4.49 MeV b/MeV, S'' = 22.6 MeV b/MeV^2 (SF-II; S', S'' from memory). */
     public static final ChargedParticleRate HE3_HE3 =
             new ChargedParticleRate("3He(3He,2p)4He", 2, 2, 1.508, 5.21, -4.49 / 5.21, 22.6 / 5.21);

@@ -1,0 +1,21 @@
+package org.convgrid.engine.birth;
+
+/**
+ * The ages (s since birth) at which a star's life changes; NaN for an event that did not happen on the computed
+ * track. Ages of structural events are those of the first model that shows them (resolution: one step); the
+ * zero-age main sequence and the lithium halving are interpolated linearly in age between the two models that
+ * bracket them.
+ *
+ * @param radiativeCore the centre first stops being convective (never for a fully convective star)
+ * @param zeroAgeMainSequence L_nuc first reaches
+ *                            {@link org.convgrid.engine.evolution.NuclearLuminosity#ZERO_AGE_FRACTION} of L
+ * @param convectiveCoreOnset after the radiative core appeared, a convective core first appears: a central zone
+ *                            whose top lies above the core threshold and below m/M = 0.99 (higher, it is the
+ *                            whole star again); a core that also vanishes before the ZAMS is a transient of the
+ *                            contraction and is not reported
+ * @param convectiveCoreEnd after that onset, the convective core first vanishes
+ * @param lithiumHalved the surface 7Li first falls to half its birth value
+ */
+public record LifeEvents(double radiativeCore, double zeroAgeMainSequence, double convectiveCoreOnset,
+                         double convectiveCoreEnd, double lithiumHalved) {
+}

@@ -1,0 +1,94 @@
+package org.convgrid.engine.birth;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.convgrid.engine.convection.ConvectiveZone;
+import org.convgrid.engine.evolution.NuclearLuminosity;
+import org.convgrid.engine.evolution.StepObserver;
+import org.convgrid.engine.structure.StellarModel;
+
+/**
+ * Follows the models of one evolution from birth and records, per model, its phase, L_nuc/L, surface lithium and
+ * central deuterium, and the {@link LifeEvents} of the star. One recorder per evolution; not thread-safe.
+ */
+final class LifeRecorder implements StepObserver {
+
+    private final double coreThreshold;
+    private final List<double[]> rows = new ArrayList<>();
+    private double birthLithium = Double.NaN;
+    private double radiativeCore = Double.NaN;
+    private double zams = Double.NaN;
+    private double coreOnset = Double.NaN;
+    private double coreEnd = Double.NaN;
+    private double lithiumHalved = Double.NaN;
+    private double lastAge;
+    private double lastFraction;
+    private double lastLithium;
+
+    /** @param coreThreshold m/M that the top of a central convective zone must exceed to count as a core */
+    LifeRecorder(double coreThreshold) {
+        this.coreThreshold = coreThreshold;
+    }
+
+    @Override
+    public void accepted(double age, double timeStep, StellarModel model) {
+        double fraction = NuclearLuminosity.fraction(model);
+        var surface = SurfaceComposition.of(model);
+        if (rows.isEmpty()) {
+            birthLithium = surface.li7();
+        }
+        double lithium = birthLithium > 0.0 ? surface.li7() / birthLithium : Double.NaN;
+        List<ConvectiveZone> zones = model.convection().zones();
+        // the centre is radiative when no zone starts there; a central zone reaching the surface layers is the
+        // whole star (a thin radiative atmosphere above it does not make it a core)
+        boolean radiativeCentre = zones.isEmpty() || zones.get(0).innerMassFraction() > 0.0;
+        boolean core = !radiativeCentre && zones.get(0).outerMassFraction() < SurfaceComposition.ENVELOPE_TOP
+                && zones.get(0).outerMassFraction() > coreThreshold;
+        if (!rows.isEmpty()) {
+            if (Double.isNaN(radiativeCore) && radiativeCentre) {
+                radiativeCore = age;
+            }
+            if (Double.isNaN(zams) && fraction >= NuclearLuminosity.ZERO_AGE_FRACTION) {
+                zams = crossing(lastAge, lastFraction, age, fraction, NuclearLuminosity.ZERO_AGE_FRACTION);
+            }
+            if (!Double.isNaN(radiativeCore) && Double.isNaN(coreOnset) && core) {
+                coreOnset = age;
+            } else if (!Double.isNaN(coreOnset) && Double.isNaN(coreEnd) && !core) {
+                if (Double.isNaN(zams)) {
+                    // a core that comes and goes during the contraction is a transient of that phase (seen at
+                    // 10 Msun, Z = 1e-4, within the first 1e4 yr): forget it, the main-sequence core is the event
+                    coreOnset = Double.NaN;
+                } else {
+                    coreEnd = age;
+                }
+            }
+            if (Double.isNaN(lithiumHalved) && lithium <= 0.5) {
+                lithiumHalved = crossing(lastAge, lastLithium, age, lithium, 0.5);
+            }
+        }
+        boolean main = !Double.isNaN(zams) && age >= zams;
+        rows.add(new double[] {age, main ? 1.0 : 0.0, fraction, lithium, model.state().composition(0).h2()});
+        lastAge = age;
+        lastFraction = fraction;
+        lastLithium = lithium;
+    }
+
+    /** The age at which a quantity going from a (at ageA) to b (at ageB) crosses {@code level}, linearly. */
+    private static double crossing(double ageA, double a, double ageB, double b, double level) {
+        if (!(a != b) || Double.isNaN(a)) {
+            return ageB;
+        }
+        double w = (level - a) / (b - a);
+        return ageA + Math.max(0.0, Math.min(1.0, w)) * (ageB - ageA);
+    }
+
+    LifeEvents events() {
+        return new LifeEvents(radiativeCore, zams, coreOnset, coreEnd, lithiumHalved);
+    }
+
+    /** Per recorded model: age, 1 on the main sequence, L_nuc/L, surface lithium, central deuterium. */
+    List<double[]> rows() {
+        return rows;
+    }
+}

@@ -1,0 +1,181 @@
+package org.convgrid.engine.birth;
+
+import org.convgrid.engine.error.ConvgridException;
+import org.convgrid.engine.error.ErrorKind;
+import org.convgrid.engine.physics.PhysicsSet;
+import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.structure.HenyeySolver;
+import org.convgrid.engine.structure.MeshPlanner;
+import org.convgrid.engine.structure.ModelState;
+import org.convgrid.engine.structure.SolveFailedException;
+import org.convgrid.engine.structure.StellarModel;
+import org.convgrid.engine.structure.StructureSolver;
+import org.convgrid.engine.units.Constants;
+
+/**
+ * Builds the start model of the pre-main sequence: a fully convective star contracting high on its Hayashi track,
+ * with the homogeneous birth composition. The starting point is a central temperature,
+ * {@link #DEFAULT_CENTRAL_TEMPERATURE} by default, raised in proportion to the mass above {@link #SCALING_MASS}:
+ * below the ~1e6 K where the initial deuterium starts to burn in a solar-mass star, so that deuterium burning
+ * happens on the track (common practice: evolution codes start their tracks before deuterium ignition); more
+ * massive stars, at the same T_c, would start at radii above ~80 Rsun, where the relaxation of their tenuous
+ * surfaces fails, and their lower central densities keep deuterium unburnt to higher T_c anyway (the burning rate
+ * is ~rho T^12 there). The model is an n = 1.5 polytrope ({@link HayashiGuess}) relaxed with the energy release of
+ * homologous contraction at the rate x = -dlnR/dt ({@link HomologousContraction}); x sets the radius (on a
+ * Hayashi track L ~ R^2 and L ~ x G M^2/R, so R^3 ~ x), and it is corrected by secant steps in ln x against
+ * ln T_c until T_c is within {@link #CENTRAL_TEMPERATURE_TOLERANCE} of the target. A mass whose polytrope does not
+ * relax is reached instead from {@link #ANCHOR_MASS} in mass steps of at most {@link #MASS_WALK_FACTOR}, each
+ * start model scaled homologously to the next mass as its guess. Its age is zero: at 1/x
+ * (~1e3-1e5 yr, the model's contraction time) any earlier history has been forgotten, so ages beyond a few
+ * times that do not depend on the start (measured at 1 Msun, starting at 3.5e5 instead of 5e5 K: |D ln R| = 0.08
+ * at 1e4 yr, 0.001-0.004 at 1e5 yr, 0.0017 at 1 Myr). Immutable and thread-safe.
+ */
+public final class StartModelBuilder {
+
+    /** Central temperature of the start model, K. */
+    public static final double DEFAULT_CENTRAL_TEMPERATURE = 5.0e5;
+    /** Largest |ln T_c - ln target| accepted. */
+    public static final double CENTRAL_TEMPERATURE_TOLERANCE = 0.01;
+    /** Corrections of the contraction rate allowed. */
+    public static final int RATE_BUDGET = 12;
+    /** Newton budget of each relaxation. */
+    public static final int RELAXATION_BUDGET = 80;
+    /** Above this mass (g) the start's central temperature grows in proportion to the mass. */
+    public static final double SCALING_MASS = 4.0 * Constants.M_SUN;
+    /** Mass whose start model the polytropic guess reaches directly; others may be walked from it. */
+    public static final double ANCHOR_MASS = Constants.M_SUN;
+    /** Largest mass ratio of one step of that walk. */
+    public static final double MASS_WALK_FACTOR = 1.5;
+    /** Remesh-and-relax passes per contraction rate. */
+    public static final int MAX_REMESH_PASSES = 3;
+    /** Largest ln step per Newton iteration. */
+    public static final double MAX_NEWTON_STEP = 0.3;
+
+    private final PhysicsSet physics;
+    private final MeshPlanner planner;
+    private final StructureSolver solver;
+    private final HenyeySolver.Settings settings;
+    private final double centralTemperature;
+
+    /**
+     * @param centralTemperature T_c of the start model, K (below deuterium ignition, ~1e6 K)
+     */
+    public StartModelBuilder(PhysicsSet physics, MeshPlanner planner, double centralTemperature) {
+        this.physics = physics;
+        this.planner = planner;
+        this.settings = new HenyeySolver.Settings(HenyeySolver.DEFAULT_TOLERANCE, MAX_NEWTON_STEP,
+                RELAXATION_BUDGET);
+        this.solver = new StructureSolver(physics, settings);
+        this.centralTemperature = ConvgridException.requireInRange("start central temperature",
+                centralTemperature, 1.0e5, 3.0e6, "K");
+    }
+
+    public StartModelBuilder(PhysicsSet physics) {
+        this(physics, new MeshPlanner(MeshPlanner.DEFAULT_POINTS), DEFAULT_CENTRAL_TEMPERATURE);
+    }
+
+    /**
+     * @param mass g
+     * @param birth the homogeneous birth composition (e.g. {@link org.convgrid.engine.state.BirthAbundances})
+     * @throws SolveFailedException when a relaxation fails
+     * @throws ConvgridException NOT_CONVERGED when T_c does not reach its target within the budget
+     */
+    public StartModel build(double mass, Composition birth) {
+        double target = centralTemperature(mass);
+        ModelState guess = new HayashiGuess(planner.points()).guess(mass, birth, target);
+        // virial estimate: L = (3/7) x G M^2 / R for an n = 1.5 polytrope
+        double radius = Math.exp(guess.lnRadius(guess.size() - 1));
+        double rate = guess.surfaceLuminosity() * radius / (3.0 / 7.0 * Constants.G * mass * mass);
+        try {
+            return converged(guess, rate, target, 0);
+        } catch (ConvgridException direct) {
+            double ratio = mass / ANCHOR_MASS;
+            if (Math.abs(Math.log(ratio)) <= Math.log(MASS_WALK_FACTOR)) {
+                throw direct;
+            }
+            // the polytrope is too poor a guess for this mass: walk from the anchor mass by homology
+            double nearer = mass / Math.pow(MASS_WALK_FACTOR, Math.signum(Math.log(ratio)));
+            StartModel from = build(nearer, birth);
+            return converged(homologous(from.model().state(), mass, target), homologousRate(from, mass, target),
+                    target, from.iterations());
+        }
+    }
+
+    /**
+     * The state scaled to another mass along the Hayashi track at the new target T_c: R ~ M/T_c (ideal gas),
+     * rho ~ M/R^3, T ~ T_c, L ~ R^2 (effective temperature unchanged).
+     */
+    private static ModelState homologous(ModelState state, double mass, double target) {
+        double fm = mass / state.mesh().totalMass();
+        double fr = fm * Math.exp(state.lnTemperature(0)) / target;
+        double[] lnR = state.lnRadii();
+        double[] lnRho = state.lnDensities();
+        double[] lnT = state.lnTemperatures();
+        double[] lum = state.luminosities();
+        double dlnT = Math.log(target) - state.lnTemperature(0);
+        for (int k = 0; k < lnR.length; k++) {
+            lnR[k] += Math.log(fr);
+            lnRho[k] += Math.log(fm) - 3.0 * Math.log(fr);
+            lnT[k] += dlnT;
+            lum[k] *= fr * fr;
+        }
+        return new ModelState(state.mesh().scaledTo(mass), state.compositions(), lnR, lnRho, lnT, lum);
+    }
+
+    /** The contraction rate scaled with the model: x ~ L R/M^2 ~ R^3/M^2. */
+    private static double homologousRate(StartModel from, double mass, double target) {
+        double fm = mass / from.model().mass();
+        double fr = fm * from.model().global().centralTemperature() / target;
+        return from.contractionRate() * fr * fr * fr / (fm * fm);
+    }
+
+    /** Relaxes from {@code start}, correcting the contraction rate until T_c is on target. */
+    private StartModel converged(ModelState start, double firstRate, double target, int alreadySpent) {
+        double lnX = Math.log(firstRate);
+        int[] spent = {alreadySpent};
+        StellarModel model = relaxed(start, firstRate, spent);
+        double lnTarget = Math.log(target);
+        double prevLnX = Double.NaN;
+        double prevMiss = Double.NaN;
+        for (int k = 0; k < RATE_BUDGET; k++) {
+            double miss = Math.log(model.global().centralTemperature()) - lnTarget;
+            if (Math.abs(miss) <= CENTRAL_TEMPERATURE_TOLERANCE) {
+                return new StartModel(model, Math.exp(lnX), spent[0]);
+            }
+            // R^3 ~ x and T_c ~ 1/R: dln T_c/dln x ~ -1/3; later steps use the measured slope
+            double slope = Double.isNaN(prevLnX) ? -1.0 / 3.0 : (miss - prevMiss) / (lnX - prevLnX);
+            if (!(slope < -0.03 && slope > -3.0)) {
+                slope = -1.0 / 3.0;
+            }
+            prevLnX = lnX;
+            prevMiss = miss;
+            lnX -= Math.max(-3.0, Math.min(3.0, miss / slope));
+            model = relaxed(model.state(), Math.exp(lnX), spent);
+        }
+        double mass = start.mesh().totalMass();
+        throw new ConvgridException(ErrorKind.NOT_CONVERGED, String.format(
+                "start model of %.4g Msun: T_c %.4g K, target %.4g K after %d corrections", mass / Constants.M_SUN,
+                model.global().centralTemperature(), target, RATE_BUDGET), mass,
+                model.global().centralTemperature());
+    }
+
+    /** The start model's central temperature for this mass (g), K. */
+    public double centralTemperature(double mass) {
+        return centralTemperature * Math.max(1.0, mass / SCALING_MASS);
+    }
+
+    /**
+     * Relaxes at one contraction rate, then remeshes and relaxes again while the mesh is uneven (the polytrope's
+     * mesh does not follow the surface layers of the relaxed model); {@code spent[0]} counts the iterations.
+     */
+    private StellarModel relaxed(ModelState start, double rate, int[] spent) {
+        HomologousContraction source = new HomologousContraction(rate);
+        StellarModel m = solver.relax(start, source, null, settings);
+        spent[0] += m.report().iterations();
+        for (int pass = 0; pass < MAX_REMESH_PASSES && planner.needsRemesh(m); pass++) {
+            m = solver.relax(planner.remesh(m), source, null, settings);
+            spent[0] += m.report().iterations();
+        }
+        return m;
+    }
+}

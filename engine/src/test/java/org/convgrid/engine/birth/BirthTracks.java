@@ -1,0 +1,66 @@
+package org.convgrid.engine.birth;
+
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
+
+import org.convgrid.engine.evolution.MainSequenceEvolver;
+import org.convgrid.engine.evolution.PreMainSequenceLimits;
+import org.convgrid.engine.physics.PhysicsSet;
+import org.convgrid.engine.physics.StandardPhysics;
+import org.convgrid.engine.request.PhysicsOptions;
+import org.convgrid.engine.state.BirthAbundances;
+import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.units.Constants;
+
+/** Tracks from birth shared by the pre-main-sequence tests, each computed once per JVM. */
+final class BirthTracks {
+
+    static final double MYR = 1.0e6 * Constants.YEAR;
+
+    private static final Map<String, BirthTrack> TRACKS = new ConcurrentHashMap<>();
+    private static final Map<Double, PhysicsSet> PHYSICS = new ConcurrentHashMap<>();
+
+    private BirthTracks() {
+    }
+
+    /** Birth composition with Y = 0.2485 + 1.5 Z (the README's default helium law). */
+    static Composition birth(double z) {
+        double y = 0.2485 + 1.5 * z;
+        return BirthAbundances.of(1.0 - y - z, z);
+    }
+
+    static PhysicsSet physics(double z) {
+        return PHYSICS.computeIfAbsent(z, k -> StandardPhysics.create(PhysicsOptions.DEFAULT, birth(k)));
+    }
+
+    /**
+     * @param massInSun Msun
+     * @param z metals
+     * @param endMyr age limit, Myr
+     * @param coarseness factor on every step limit (1 = the defaults)
+     * @param agesMyr requested ages, Myr
+     */
+    static synchronized BirthTrack track(double massInSun, double z, double endMyr, double coarseness,
+                                         double... agesMyr) {
+        String key = massInSun + "/" + z + "/" + endMyr + "/" + coarseness + "/" + java.util.Arrays.toString(agesMyr);
+        BirthTrack cached = TRACKS.get(key);
+        if (cached != null) {
+            return cached;
+        }
+        PhysicsSet physics = physics(z);
+        MainSequenceEvolver.Settings d = MainSequenceEvolver.Settings.DEFAULT.scaled(coarseness);
+        MainSequenceEvolver.Settings s = new MainSequenceEvolver.Settings(d.maxCentralHydrogenChange(),
+                d.exhaustionFraction(), d.maxLuminosityChange(), d.maxGrowth(), d.endCentralHydrogen(),
+                endMyr * MYR, d.stepBudget(), d.retryBudget());
+        BirthEvolution evolution = new BirthEvolution(new StartModelBuilder(physics),
+                new MainSequenceEvolver(physics, s).withPreMainSequenceLimits(
+                        PreMainSequenceLimits.DEFAULT.scaled(coarseness)), BirthEvolution.DEFAULT_CORE_THRESHOLD);
+        double[] ages = new double[agesMyr.length];
+        for (int i = 0; i < ages.length; i++) {
+            ages[i] = agesMyr[i] * MYR;
+        }
+        BirthTrack t = evolution.evolve(massInSun * Constants.M_SUN, birth(z), ages);
+        TRACKS.put(key, t);
+        return t;
+    }
+}

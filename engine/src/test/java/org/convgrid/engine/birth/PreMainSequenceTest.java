@@ -1,0 +1,155 @@
+package org.convgrid.engine.birth;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.List;
+
+import org.convgrid.engine.convection.StructureClass;
+import org.convgrid.engine.evolution.AgedModel;
+import org.convgrid.engine.physics.PhysicsSet;
+import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.structure.StellarModel;
+import org.convgrid.engine.structure.StellarProfile;
+import org.convgrid.engine.units.Constants;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Evolution from birth: contraction, deuterium burning, the radiative core, the arrival on the zero-age main
+ * sequence, lithium, and the energy budget. Tracks use the default step limits and are shared between the checks
+ * ({@link BirthTracks}).
+ */
+class PreMainSequenceTest {
+
+    private static final double MYR = BirthTracks.MYR;
+
+    private static BirthTrack solar() {
+        return BirthTracks.track(1.0, 0.02, 1000, 1.0, 1, 10, 100, 1000);
+    }
+
+    @Test
+    void solarMassIsFullyConvectiveAtOneMyrAndHasARadiativeCoreByTenMyr() {
+        BirthTrack t = solar();
+        AgedModel young = t.models().get(0);
+        AgedModel older = t.models().get(1);
+        // a 1 Msun star is fully convective on its Hayashi track for its first ~2 Myr and has a radiative core
+        // well before 10 Myr (Iben 1965, ApJ 141, 993; Siess, Dufour & Forestini 2000, A&A 358, 593; from memory)
+        assertThat(young.status()).isEqualTo(ModelStatus.OK);
+        assertThat(young.model().convection().structureClass()).isEqualTo(StructureClass.FULLY_CONVECTIVE);
+        assertThat(t.phaseAt(young.age())).isEqualTo(Phase.PRE_MAIN_SEQUENCE);
+        assertThat(older.model().convection().structureClass()).isEqualTo(StructureClass.CONV_ENVELOPE);
+        assertThat(t.events().radiativeCore()).isBetween(1.0 * MYR, 10.0 * MYR);
+        // the requested ages are landed on exactly, not interpolated
+        assertThat(young.age()).isEqualTo(1.0 * MYR);
+        assertThat(t.points().stream().anyMatch(p -> p.age() == 10.0 * MYR)).isTrue();
+        // non-regression (default limits): radiative core at 1.69 Myr
+        assertThat(t.events().radiativeCore() / MYR).isCloseTo(1.69, within(0.1));
+    }
+
+    @Test
+    void deuteriumBurningHoldsUpTheContraction() {
+        BirthTrack t = solar();
+        double peak = 0.0;
+        double peakAge = 0.0;
+        for (TrackPoint p : t.points()) {
+            if (p.age() < 1.0 * MYR && p.nuclearFraction() > peak) {
+                peak = p.nuclearFraction();
+                peakAge = p.age();
+            }
+        }
+        // deuterium burning supplies most of the luminosity for a few 1e5 yr near T_c ~ 1e6 K (Stahler 1988,
+        // ApJ 332, 804; Palla &amp; Stahler 1991; from memory)
+        assertThat(peak).isGreaterThan(0.5);
+        assertThat(peakAge).isBetween(2.0e4 * Constants.YEAR, 5.0e5 * Constants.YEAR);
+        TrackPoint atOneMyr = t.points().stream().filter(p -> p.age() == 1.0 * MYR).findFirst().orElseThrow();
+        assertThat(atOneMyr.centralDeuterium()).isLessThan(1.0e-3 * t.points().get(0).centralDeuterium());
+    }
+
+    @Test
+    void energyRadiatedEqualsNuclearPlusGravothermalRelease() {
+        BirthTrack t = solar();
+        PhysicsSet physics = BirthTracks.physics(0.02);
+        List<TrackPoint> points = t.points();
+        // right Riemann sums: each model's L is the mean release over the step that led to it (implicit steps)
+        double radiated = 0.0;
+        double nuclear = 0.0;
+        int last = 0;
+        for (int i = 1; i < points.size() && points.get(i).age() <= 100.0 * MYR; i++) {
+            double h = points.get(i).step().timeStep();
+            radiated += h * points.get(i).step().luminosity();
+            nuclear += h * points.get(i).nuclearFraction() * points.get(i).step().luminosity();
+            last = i;
+        }
+        // total energy E = integral (u - G m/r) dm (Kippenhahn, Weigert & Weiss 2012, ch. 3): the gravothermal
+        // release is -D E, computed here from the two end models alone, independently of eps_grav
+        StellarModel first = t.start().model();
+        StellarModel end = t.models().get(2).model();
+        assertThat(points.get(last).age()).isEqualTo(100.0 * MYR);
+        double released = totalEnergy(first, physics) - totalEnergy(end, physics);
+        assertThat(Math.abs(radiated - nuclear - released) / radiated).isLessThan(0.01);
+        // most of it is contraction: the star has not burnt much hydrogen by 100 Myr
+        assertThat(released / radiated).isGreaterThan(0.3);
+    }
+
+    private static double totalEnergy(StellarModel model, PhysicsSet physics) {
+        StellarProfile p = model.profile();
+        var mesh = model.state().mesh();
+        double sum = 0.0;
+        for (int k = 0; k < p.size(); k++) {
+            double w = (k == 0 ? mesh.mass(0) : 0.0) + (k > 0 ? 0.5 * mesh.intervalMass(k - 1) : 0.0)
+                    + (k < p.size() - 1 ? 0.5 * mesh.intervalMass(k) : 0.0);
+            double u = physics.eos().atDensity(p.density(k), p.temperature(k), model.state().composition(k))
+                    .internalEnergy();
+            sum += w * (u - Constants.G * p.mass(k) / p.radius(k));
+        }
+        return sum;
+    }
+
+    @Test
+    void zeroAgeMainSequenceArrivalAgainstPublishedContractionTimes() {
+        // contraction times to the main sequence, Z = 0.02 (Iben 1965, ApJ 141, 993, table of pre-main-sequence
+        // times; from memory): 0.5 Msun 1.5e8 yr, 1 Msun 5.0e7, 1.5 Msun 1.8e7, 3 Msun 2.5e6; 2 Msun 8.1e6 yr
+        // interpolated in log-log between his 1.5 and 2.25 Msun (5.9e6). Published sets differ by tens of per
+        // cent through their start and opacities, and the ZAMS is defined differently (Iben: the end of
+        // contraction; here L_nuc >= 0.99 L, which CN-burning stars approach slowly): within a factor 2.2.
+        double[][] cases = {{0.5, 300, 150}, {1.0, 1000, 50}, {1.5, 60, 18}, {2.0, 40, 8.1}, {3.0, 12, 2.5}};
+        double previous = Double.MAX_VALUE;
+        double previousCore = Double.MAX_VALUE;
+        // non-regression (default limits), Myr
+        double[] frozen = {200.7, 48.85, 31.81, 17.15, 4.51};
+        for (int i = 0; i < cases.length; i++) {
+            double[] c = cases[i];
+            BirthTrack t = c[0] == 1.0 ? solar() : BirthTracks.track(c[0], 0.02, c[1], 1.0, 100);
+            double zams = t.events().zeroAgeMainSequence() / MYR;
+            assertThat(zams).as("ZAMS age of %s Msun", c[0]).isBetween(c[2] / 2.2, c[2] * 2.2);
+            assertThat(zams).isLessThan(previous);
+            assertThat(zams).isCloseTo(frozen[i], within(0.03 * frozen[i]));
+            // the radiative-core onset comes earlier with mass above the fully convective limit (Iben 1965)
+            assertThat(t.events().radiativeCore()).isLessThan(previousCore);
+            previous = zams;
+            previousCore = t.events().radiativeCore();
+        }
+    }
+
+    @Test
+    void surfaceLithiumAgainstStandardModels() {
+        // 1 Msun, Z = 0.02 at 1 Gyr: standard models (no rotational mixing) burn part of their lithium on the
+        // pre-main sequence, at least ~0.3 dex (D'Antona & Mazzitelli 1994, ApJS 90, 467; Piau & Turck-Chieze
+        // 2002, ApJ 566, 419; from memory), and under-deplete the Sun, which shows log(Li/Li_0) = 1.05 - 3.26 = -2.2
+        // at 4.57 Gyr (Asplund et al. 2009, Table 1, photosphere against meteorites).
+        AgedModel gyr = solar().models().get(3);
+        double logLi = Math.log10(solar().surfaceLithiumAt(gyr));
+        assertThat(logLi).isLessThan(-0.3);
+        // KNOWN DISCREPANCY, frozen so that a change is noticed: this engine depletes ~1.3 dex more than the Sun
+        // (grey T(tau) atmosphere, mixing length 1.8: its young convective envelope is deeper and hotter than in
+        // published standard models), where those models leave the Sun under-depleted. Not a validation.
+        assertThat(logLi).isCloseTo(-3.55, within(0.2));
+        // 0.5 Msun at 100 Myr: standard models have burnt their lithium (more than 2 dex by ~30-50 Myr;
+        // Baraffe et al. 2015, A&A 577, A42; from memory)
+        BirthTrack half = BirthTracks.track(0.5, 0.02, 300, 1.0, 100);
+        assertThat(half.surfaceLithiumAt(half.models().get(0))).isLessThan(1.0e-2);
+        // the halving happens on the pre-main sequence for both (common practice)
+        assertThat(half.events().lithiumHalved()).isLessThan(half.events().zeroAgeMainSequence());
+        assertThat(solar().events().lithiumHalved()).isLessThan(solar().events().zeroAgeMainSequence());
+    }
+}

@@ -1,0 +1,70 @@
+package org.convgrid.engine.physics.nuclear;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import org.convgrid.engine.state.BirthAbundances;
+import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.units.Constants;
+import org.junit.jupiter.api.Test;
+
+/** Deuterium and 7Li burning in the network: rates, energy and composition rates. */
+class LightElementRatesTest {
+
+    private static final HydrogenBurningNetwork NETWORK = new HydrogenBurningNetwork();
+    private static final Composition BIRTH = BirthAbundances.of(0.70, 0.02);
+
+    @Test
+    void deuteriumRateFollowsSolarFusionTwoAgainstTheOlderFit() {
+        for (double t9 : new double[] {5.0e-4, 1.0e-3, 3.0e-3, 1.0e-2}) {
+            double c = Math.cbrt(t9);
+            double ours = SolarFusionRates.D_P.rate(t9, c);
+            // Caughlan & Fowler 1988 (ADNDT 40, 283) fit for 2H(p,g)3He (coefficients from memory):
+            // 2.24e3 T9^-2/3 exp(-3.720 T9^-1/3)(1 + 0.112 T9^1/3 + 3.38 T9^2/3 + 2.65 T9); its S(0) ~ 2.5e-4
+            // keV b against Solar Fusion II's 2.14e-4 keV b (Adelberger et al. 2011, from memory): ~15 % lower
+            double cf88 = 2.24e3 * Math.pow(t9, -2.0 / 3.0) * Math.exp(-3.720 / c)
+                    * (1.0 + 0.112 * c + 3.38 * c * c + 2.65 * t9);
+            assertThat(ours / cf88).isBetween(0.78, 0.92);
+        }
+        // the Gamow exponent is the fit's: 3.720 T9^-1/3 (Caughlan & Fowler 1988)
+        assertThat(SolarFusionRates.D_P.tauCoefficient()).isCloseTo(3.720, within(0.004));
+        // non-regression: N_A<sv> at 1e6 K, cm^3 mol^-1 s^-1
+        assertThat(SolarFusionRates.D_P.rate(1.0e-3, 0.1)).isCloseTo(1.3821e-11, within(1.0e-14));
+    }
+
+    @Test
+    void lithiumGamowExponentAndBurningTemperature() {
+        // exponent 8.472 T9^-1/3 (Caughlan & Fowler 1988, 7Li(p,a)4He; from memory)
+        assertThat(SolarFusionRates.LI7_P.tauCoefficient()).isCloseTo(8.472, within(0.01));
+        // lithium burns on ~Myr scales near 2.5-3e6 K at the densities of young convective envelopes
+        // (common practice: "lithium burns above ~2.5e6 K"): lifetime at rho = 1, X = 0.7
+        double lifetime3 = 1.0 / (-NETWORK.burn(1.0, 3.0e6, BIRTH).dli7Dt() / BIRTH.li7()) / Constants.YEAR;
+        double lifetime25 = 1.0 / (-NETWORK.burn(1.0, 2.5e6, BIRTH).dli7Dt() / BIRTH.li7()) / Constants.YEAR;
+        assertThat(lifetime3).isBetween(1.0e6, 1.0e8);
+        assertThat(lifetime25).isBetween(1.0e8, 1.0e10);
+    }
+
+    @Test
+    void deuteriumBurningReleasesItsQValuePerReactionAndConservesMass() {
+        BurningRate with = NETWORK.burn(0.05, 1.2e6, BIRTH);
+        BurningRate without = NETWORK.burn(0.05, 1.2e6, BIRTH.withTraceSpecies(0.0, BIRTH.li7()));
+        double reactions = -with.dh2Dt() / 2.0; // moles of d per gram per second
+        // Q(d(p,g)3He) = 5.494 MeV (from atomic masses, Audi et al. 2003 mass evaluation; from memory)
+        assertThat(with.eps() - without.eps()).isCloseTo(reactions * Constants.N_A * 5.494 * Constants.MEV,
+                within(1.0e-6 * with.eps()));
+        double sum = with.dh1Dt() + with.dhe3Dt() + with.dhe4Dt() + with.dc12Dt() + with.dn14Dt() + with.do16Dt()
+                + with.dh2Dt() + with.dli7Dt();
+        assertThat(Math.abs(sum)).isLessThan(1.0e-12 * Math.abs(with.dh2Dt()));
+        // at 1.2e6 K deuterium burning outruns the p+p chain by orders of magnitude (why it stalls contraction)
+        assertThat(with.eps()).isGreaterThan(100.0 * without.eps());
+    }
+
+    @Test
+    void compositionsWithoutTraceSpeciesBurnAsBefore() {
+        Composition bare = Composition.scaledSolar(0.70, 0.02);
+        BurningRate r = NETWORK.burn(100.0, 1.5e7, bare);
+        assertThat(r.dh2Dt()).isZero();
+        assertThat(r.dli7Dt()).isZero();
+        assertThat(r.epsPp()).isGreaterThan(0.0);
+    }
+}
