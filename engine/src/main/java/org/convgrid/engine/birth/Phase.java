@@ -13,7 +13,7 @@ public enum Phase {
         this.label = label;
     }
 
-    /** The catalogue spelling (conventions.md, column {@code phase}). */
+    /** The catalogue spelling (README, catalogue column {@code phase}). */
     public String label() {
         return label;
     }

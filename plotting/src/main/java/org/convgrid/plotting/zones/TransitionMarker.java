@@ -11,7 +11,7 @@ import org.convgrid.output.Span;
  */
 public record TransitionMarker(Kind kind, double massMsun, Span bracket) {
 
-    /** The two transitions of conventions.md. */
+    /** The two transitions of transitions.csv (README, "Transition masses"). */
     public enum Kind {
         FULLY_CONVECTIVE_LIMIT("fully convective limit", "fully convective\nup to "),
         CONV_CORE_ONSET("lasting convective core onset", "lasting convective\ncore from ");
