@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Set;
 import java.util.concurrent.Callable;
 import org.convgrid.output.RunLayout;
+import org.convgrid.survey.RunLock;
 import org.convgrid.plotting.DrawnMaps;
 import org.convgrid.plotting.RunMaps;
 import org.convgrid.plotting.report.ReportPage;
@@ -42,10 +43,15 @@ final class PlotCommand implements Callable<Integer> {
         }
         Set<ChartFiles.VectorFormat> formats = vector.isEmpty()
                 ? EnumSet.noneOf(ChartFiles.VectorFormat.class) : EnumSet.copyOf(vector);
-        DrawnMaps maps = RunMaps.drawAll(dir, formats);
-        maps.failures().forEach(f -> main.err().println("convgrid: warning: " + f.describe()));
-        Path report = ReportPage.write(dir, maps.failures());
-        main.out().println("wrote " + maps.written().size() + " charts to " + layout.maps() + " and " + report);
-        return ExitCodes.OK;
+        // the maps and the report are files of the run directory: drawn only while no run, merge or refinement
+        // writes there
+        try (RunLock lock = RunLock.acquire(dir)) {
+            Locks.reportStale(lock, main.err());
+            DrawnMaps maps = RunMaps.drawAll(dir, formats);
+            maps.failures().forEach(f -> main.err().println("convgrid: warning: " + f.describe()));
+            Path report = ReportPage.write(dir, maps.failures());
+            main.out().println("wrote " + maps.written().size() + " charts to " + layout.maps() + " and " + report);
+            return ExitCodes.OK;
+        }
     }
 }

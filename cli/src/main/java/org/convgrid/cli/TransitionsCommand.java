@@ -94,7 +94,13 @@ final class TransitionsCommand implements Callable<Integer> {
                         context.finishers());
             }
         } else {
-            update = TransitionTables.recompute(dir, finder, context.finishers());
+            // recomputing rewrites transitions.csv: owned like a refinement
+            try (RunLock lock = java.nio.file.Files.isDirectory(dir.root()) ? RunLock.acquire(dir.root()) : null) {
+                if (lock != null) {
+                    Locks.reportStale(lock, parent.err());
+                }
+                update = TransitionTables.recompute(dir, finder, context.finishers());
+            }
         }
         long refined = update.transitions().stream().filter(t -> t.method() == TransitionMethod.REFINED).count();
         long failed = update.added().stream().filter(o -> o.status() != ModelStatus.OK).count();
