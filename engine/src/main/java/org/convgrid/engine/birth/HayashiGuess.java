@@ -2,7 +2,6 @@ package org.convgrid.engine.birth;
 
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.LaneEmden;
-import org.convgrid.engine.structure.MassMesh;
 import org.convgrid.engine.structure.ModelState;
 import org.convgrid.engine.structure.PolytropicProfile;
 import org.convgrid.engine.units.Constants;
@@ -48,26 +47,7 @@ final class HayashiGuess {
         double alpha = radius / xi1;
         PolytropicProfile profile = PolytropicProfile.of(N15, points, CENTRAL_MASS_FRACTION,
                 Math.min(0.5, GUESS_EFFECTIVE_TEMPERATURE / centralTemperature));
-        MassMesh mesh = profile.mesh(mass);
-        double[] lnR = new double[points];
-        double[] lnRho = new double[points];
-        double[] lnT = new double[points];
-        double[] l = new double[points];
-        Composition[] comp = new Composition[points];
-        double cumulative = 0.0;
-        for (int i = 0; i < points; i++) {
-            double theta = profile.theta(i);
-            lnR[i] = Math.log(alpha * profile.xi(i));
-            lnRho[i] = Math.log(rhoC) + n * Math.log(theta);
-            lnT[i] = Math.log(centralTemperature * theta);
-            cumulative = i == 0 ? mesh.mass(0)
-                    : cumulative + 0.5 * (profile.theta(i - 1) + theta) * mesh.intervalMass(i - 1);
-            l[i] = cumulative;
-            comp[i] = composition;
-        }
-        for (int i = 0; i < points; i++) {
-            l[i] *= lum / cumulative;
-        }
-        return new ModelState(mesh, comp, lnR, lnRho, lnT, l);
+        // contraction releases energy roughly where the gas is hot: a source proportional to T
+        return profile.state(mass, alpha, rhoC, centralTemperature, 1.0, lum, composition);
     }
 }

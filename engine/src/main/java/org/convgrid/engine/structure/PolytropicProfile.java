@@ -3,6 +3,8 @@ package org.convgrid.engine.structure;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.convgrid.engine.state.Composition;
+
 /**
  * A Lane-Emden solution resampled onto a mass mesh for starting models: mass fractions (interior and exterior,
  * each precise in its own half), xi and theta at every point. Points are spread evenly in the cost
@@ -149,5 +151,46 @@ public final class PolytropicProfile {
     /** The mesh of these fractions for a star of the given mass, g. */
     public MassMesh mesh(double totalMass) {
         return MassMesh.ofFractions(totalMass, q, exterior);
+    }
+
+    /**
+     * A starting state on this profile for a star of the given mass: r = alpha xi, rho = rho_c theta^n, T = T_c
+     * theta (ideal gas at constant mu), one composition everywhere, and L(m) from a source per unit mass
+     * proportional to theta^sourceExponent (integrated by trapezoids in mass), scaled to {@code luminosity} at the
+     * surface. Only a guess for the Henyey relaxation.
+     *
+     * @param totalMass g
+     * @param alpha radius scale R / xi_1, cm
+     * @param centralDensity g cm^-3
+     * @param centralTemperature K
+     * @param sourceExponent p of the source theta^p (1 for a contracting star, n + nu for nuclear burning)
+     * @param luminosity surface luminosity, erg s^-1
+     */
+    public ModelState state(double totalMass, double alpha, double centralDensity, double centralTemperature,
+                            double sourceExponent, double luminosity, Composition composition) {
+        int points = size();
+        double n = solution.index();
+        MassMesh mesh = mesh(totalMass);
+        double[] lnR = new double[points];
+        double[] lnRho = new double[points];
+        double[] lnT = new double[points];
+        double[] l = new double[points];
+        Composition[] comp = new Composition[points];
+        double cumulative = 0.0;
+        for (int i = 0; i < points; i++) {
+            double th = theta(i);
+            lnR[i] = Math.log(alpha * xi(i));
+            lnRho[i] = Math.log(centralDensity) + n * Math.log(th);
+            lnT[i] = Math.log(centralTemperature * th);
+            cumulative = i == 0 ? mesh.mass(0) : cumulative
+                    + 0.5 * (Math.pow(theta(i - 1), sourceExponent) + Math.pow(th, sourceExponent))
+                    * mesh.intervalMass(i - 1);
+            l[i] = cumulative;
+            comp[i] = composition;
+        }
+        for (int i = 0; i < points; i++) {
+            l[i] *= luminosity / cumulative;
+        }
+        return new ModelState(mesh, comp, lnR, lnRho, lnT, l);
     }
 }

@@ -2,7 +2,6 @@ package org.convgrid.engine.zams;
 
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.LaneEmden;
-import org.convgrid.engine.structure.MassMesh;
 import org.convgrid.engine.structure.ModelState;
 import org.convgrid.engine.structure.PolytropicProfile;
 import org.convgrid.engine.units.Constants;
@@ -49,32 +48,8 @@ public final class PolytropicGuess {
         double tC = k * Math.pow(rhoC, 1.0 / n) * mu * Constants.M_U / Constants.K_B;
         PolytropicProfile profile = PolytropicProfile.of(le, points, CENTRAL_MASS_FRACTION,
                 Math.min(0.5, teff / tC));
-        MassMesh mesh = profile.mesh(mass);
         double nu = m < 1.3 ? 4.0 : 16.0;
-        double[] lnR = new double[points];
-        double[] lnRho = new double[points];
-        double[] lnT = new double[points];
-        double[] l = new double[points];
-        Composition[] comp = new Composition[points];
-        double cumulative = 0.0;
-        for (int i = 0; i < points; i++) {
-            double theta = profile.theta(i);
-            lnR[i] = Math.log(alpha * profile.xi(i));
-            lnRho[i] = Math.log(rhoC) + n * Math.log(theta);
-            lnT[i] = Math.log(tC * theta);
-            if (i > 0) {
-                double ta = profile.theta(i - 1);
-                cumulative += 0.5 * (Math.pow(ta, n + nu) + Math.pow(theta, n + nu)) * mesh.intervalMass(i - 1);
-            } else {
-                cumulative = mesh.mass(0);
-            }
-            l[i] = cumulative;
-            comp[i] = composition;
-        }
-        for (int i = 0; i < points; i++) {
-            l[i] *= lum / cumulative;
-        }
-        return new ModelState(mesh, comp, lnR, lnRho, lnT, l);
+        return profile.state(mass, alpha, rhoC, tC, n + nu, lum, composition);
     }
 
     /**
