@@ -42,7 +42,7 @@ final class MergeCommand implements Callable<Integer> {
         FinishedRun run;
         try (RunLock lock = RunLock.acquire(target.root())) {
             Locks.reportStale(lock, parent.err());
-            run = new ShardMerger(ToolVersion.current(), Clock.tickSeconds(java.time.ZoneOffset.UTC))
+            run = new ShardMerger(ToolVersion.current(), ToolVersion.commit(), Clock.tickSeconds(java.time.ZoneOffset.UTC))
                     .merge(dirs, target, context.finishers());
         }
         Map<ModelStatus, Long> counts = RunFinishing.countByStatus(run.catalogue());

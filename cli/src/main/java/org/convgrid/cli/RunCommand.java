@@ -100,7 +100,7 @@ final class RunCommand implements Callable<Integer> {
         TrackFiles tracks = new TrackFiles(dir.layout());
         ChunkSolver solver = evolves ? context.solvers().solverFor(file.spec(), tracks)
                 : context.solvers().solverFor(file.spec());
-        GridRun runner = new GridRun(ToolVersion.current(), Clock.tickSeconds(java.time.ZoneOffset.UTC));
+        GridRun runner = new GridRun(ToolVersion.current(), ToolVersion.commit(), Clock.tickSeconds(java.time.ZoneOffset.UTC));
         try (RunLock lock = RunLock.acquire(dir.root())) {
             Locks.reportStale(lock, parent.err());
             long start = System.nanoTime();

@@ -75,10 +75,12 @@ public final class GridRun {
     }
 
     private final String toolVersion;
+    private final String toolCommit;
     private final Clock clock;
 
-    public GridRun(String toolVersion, Clock clock) {
+    public GridRun(String toolVersion, String toolCommit, Clock clock) {
         this.toolVersion = toolVersion;
+        this.toolCommit = toolCommit;
         this.clock = clock;
     }
 
@@ -160,7 +162,7 @@ public final class GridRun {
     private RunManifest manifest(Settings s, Shard shard, Instant started, Instant finished,
                                  Map<ModelStatus, Long> counts, double median) {
         GridFile g = s.grid();
-        return new RunManifest(toolVersion, g.name(), g.text(), g.fileSha256(), g.modelsSha256(),
+        return new RunManifest(toolVersion, toolCommit, g.name(), g.text(), g.fileSha256(), g.modelsSha256(),
                 g.spec().physics().combinations(), started, finished, s.threads(), ShardChoice.label(shard), counts,
                 median);
     }

@@ -33,10 +33,12 @@ import org.convgrid.output.manifest.RunManifestReader;
 public final class ShardMerger {
 
     private final String toolVersion;
+    private final String toolCommit;
     private final Clock clock;
 
-    public ShardMerger(String toolVersion, Clock clock) {
+    public ShardMerger(String toolVersion, String toolCommit, Clock clock) {
         this.toolVersion = toolVersion;
+        this.toolCommit = toolCommit;
         this.clock = clock;
     }
 
@@ -160,7 +162,7 @@ public final class ShardMerger {
         int threads = shards.stream().mapToInt(RunManifest::threads).sum();
         double median = RunManifest.median(shards.stream().mapToDouble(RunManifest::medianSecondsPerModel)
                 .filter(Double::isFinite).toArray());
-        return new RunManifest(toolVersion, first.gridFile(), first.gridText(), first.gridFileSha256(),
+        return new RunManifest(toolVersion, toolCommit, first.gridFile(), first.gridText(), first.gridFileSha256(),
                 first.gridModelsSha256(), first.physics(), started, finished, threads, null,
                 RunFinishing.countByStatus(rows), median);
     }

@@ -12,6 +12,8 @@ import org.convgrid.engine.request.PhysicsOptions;
  * Provenance of one run directory.
  *
  * @param toolVersion convgrid's version
+ * @param toolCommit the git commit convgrid was built from ({@code -dirty} appended when its working tree had
+ *                   uncommitted changes), or {@code unknown}
  * @param gridFile the grid file's name as given on the command line
  * @param gridText the grid file's text as read
  * @param gridFileSha256 SHA-256 of the grid file's bytes
@@ -24,12 +26,13 @@ import org.convgrid.engine.request.PhysicsOptions;
  * @param counts models by status (every status present, zero when none)
  * @param medianSecondsPerModel median wall time of one model on one thread, NaN when no model ran
  */
-public record RunManifest(String toolVersion, String gridFile, String gridText, String gridFileSha256,
+public record RunManifest(String toolVersion, String toolCommit, String gridFile, String gridText, String gridFileSha256,
                           String gridModelsSha256, List<PhysicsOptions> physics, Instant started, Instant finished,
                           int threads, String shard, Map<ModelStatus, Long> counts, double medianSecondsPerModel) {
 
     public RunManifest {
         Objects.requireNonNull(toolVersion, "toolVersion");
+        Objects.requireNonNull(toolCommit, "toolCommit");
         Objects.requireNonNull(gridFile, "gridFile");
         Objects.requireNonNull(gridText, "gridText");
         Objects.requireNonNull(gridFileSha256, "gridFileSha256");
@@ -50,7 +53,7 @@ public record RunManifest(String toolVersion, String gridFile, String gridText, 
 
     /** The same manifest, finished at {@code end} with the final counts and median. */
     public RunManifest finishedAt(Instant end, Map<ModelStatus, Long> finalCounts, double median) {
-        return new RunManifest(toolVersion, gridFile, gridText, gridFileSha256, gridModelsSha256, physics, started,
+        return new RunManifest(toolVersion, toolCommit, gridFile, gridText, gridFileSha256, gridModelsSha256, physics, started,
                 end, threads, shard, finalCounts, median);
     }
 

@@ -31,6 +31,9 @@ public final class RunManifestReader {
     public static final int MAX_CODE_POINTS = 64 * 1024 * 1024;
 
 
+    /** The commit recorded for manifests written before convgrid recorded it. */
+    static final String UNKNOWN_COMMIT = "unknown";
+
     private RunManifestReader() {
     }
 
@@ -67,7 +70,9 @@ public final class RunManifestReader {
                 counts.put(status, ((Number) models.get(status.label())).longValue());
             }
             Object finished = root.get("finished");
-            return new RunManifest((String) root.get("tool_version"), (String) grid.get("file"),
+            // manifests written before the commit was recorded do not know it
+            Object commit = root.containsKey("tool_commit") ? root.get("tool_commit") : UNKNOWN_COMMIT;
+            return new RunManifest((String) root.get("tool_version"), (String) commit, (String) grid.get("file"),
                     (String) grid.get("text"), (String) grid.get("sha256"), (String) grid.get("models_sha256"),
                     physics, Instant.parse((String) root.get("started")),
                     finished == null ? null : Instant.parse((String) finished),

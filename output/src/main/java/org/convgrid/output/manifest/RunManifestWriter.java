@@ -15,7 +15,7 @@ import org.snakeyaml.engine.v2.common.FlowStyle;
 
 /**
  * Writes a {@link RunManifest} as YAML (block style; the grid file's text as a multi-line string). Keys, in order:
- * {@code tool_version}, {@code grid} ({@code file}, {@code sha256}, {@code models_sha256}, {@code text}),
+ * {@code tool_version}, {@code tool_commit}, {@code grid} ({@code file}, {@code sha256}, {@code models_sha256}, {@code text}),
  * {@code physics} (list of {@code mixing_length}, {@code overshoot}, {@code criterion}, {@code opacity_scale},
  * {@code atmosphere}, {@code overshoot_profile}, and {@code opacity_table} when a user table is named),
  * {@code started}, {@code finished} (ISO-8601 UTC instants), {@code threads}, {@code shard}, {@code models}
@@ -59,6 +59,7 @@ public final class RunManifestWriter {
         }
         Map<String, Object> root = new LinkedHashMap<>();
         root.put("tool_version", m.toolVersion());
+        root.put("tool_commit", m.toolCommit());
         root.put("grid", grid);
         root.put("physics", physics);
         // the one threshold behind structure_class, the core columns and the transitions

@@ -20,8 +20,10 @@ class RunManifestTest {
     private static final String GRID = "title: Demo\nmass:\n  values: [0.5, 1.0]   # solar masses\n"
             + "metallicity: {z: 0.014, y: 0.27}\n";
 
+    private static final String COMMIT = "0123456789abcdef0123456789abcdef01234567";
+
     private static RunManifest manifest() {
-        return new RunManifest("0.1.0", "grids/demo.yaml", GRID, "ab".repeat(32), "cd".repeat(32),
+        return new RunManifest("0.1.0", COMMIT, "grids/demo.yaml", GRID, "ab".repeat(32), "cd".repeat(32),
                 List.of(PhysicsOptions.DEFAULT, new PhysicsOptions(2.0, 0.1, StabilityCriterion.LEDOUX, 1.0),
                         new PhysicsOptions(1.7, 0.016, StabilityCriterion.SCHWARZSCHILD, 1.0,
                                 OpacityChoice.tableAt("tables/mine.txt", () -> {
@@ -36,7 +38,7 @@ class RunManifestTest {
         RunManifest finished = manifest().finishedAt(Instant.parse("2026-03-01T10:05:30.250Z"),
                 Map.of(ModelStatus.OK, 58L, ModelStatus.FAILED, 2L), 1.75);
         String yaml = RunManifestWriter.toYaml(finished);
-        assertThat(yaml).contains("tool_version: 0.1.0", "started: 2026-03-01T10:00:00Z",
+        assertThat(yaml).contains("tool_version: 0.1.0", "tool_commit: " + COMMIT, "started: 2026-03-01T10:00:00Z",
                 "criterion: ledoux", "total: 60", "failed: 2", "median_seconds_per_model: 1.75",
                 "atmosphere: krishna_swamy", "atmosphere: eddington", "overshoot_profile: decaying", "core_threshold_mass_frac: 0.001",
                 "opacity_table: tables/mine.txt");
@@ -44,6 +46,13 @@ class RunManifestTest {
         RunManifest back = RunManifestReader.read(yaml);
         assertThat(back).isEqualTo(finished);
         assertThat(back.gridText()).isEqualTo(GRID);
+    }
+
+    @Test
+    void aManifestWrittenBeforeTheCommitWasRecordedSaysItIsUnknown() {
+        String yaml = RunManifestWriter.toYaml(manifest()).replaceAll("(?m)^tool_commit: .*\\n", "");
+        assertThat(yaml).doesNotContain("tool_commit");
+        assertThat(RunManifestReader.read(yaml).toolCommit()).isEqualTo("unknown");
     }
 
     @Test
@@ -87,7 +96,7 @@ class RunManifestTest {
         // the writer may escape, and must stay readable (the YAML library's own limit is 3 MB)
         String line = "# comment \u00e9\u4e2d\u00e9\u4e2d\n";
         String big = GRID + line.repeat(1024 * 1024 / line.getBytes(java.nio.charset.StandardCharsets.UTF_8).length);
-        RunManifest m = new RunManifest("0.1.0", "grids/big.yaml", big, "ab".repeat(32), "cd".repeat(32),
+        RunManifest m = new RunManifest("0.1.0", COMMIT, "grids/big.yaml", big, "ab".repeat(32), "cd".repeat(32),
                 List.of(PhysicsOptions.DEFAULT), Instant.parse("2026-03-01T10:00:00Z"), null, 1, null,
                 Map.of(ModelStatus.OK, 3L), Double.NaN);
         String yaml = RunManifestWriter.toYaml(m);

@@ -87,6 +87,7 @@ public final class ReportPage {
         } else {
             row(b, "grid file", m.gridFile());
             row(b, "convgrid version", m.toolVersion());
+            row(b, "built from commit", m.toolCommit());
             row(b, "started", m.started().toString());
             row(b, "finished", m.finished() == null ? "not finished" : m.finished().toString());
             row(b, "threads", Integer.toString(m.threads()));
