@@ -36,7 +36,8 @@ final class ChunkSweep {
      * @param alreadyDone requests whose rows already exist and must not be emitted again
      * @param solver computes one chunk
      * @param sink receives the new outcomes in grid order
-     * @param progress told after each emitted outcome
+     * @param progress told once per chunk, after its outcomes are emitted (a chunk's models arrive together: told
+     *                 one by one, the first of a chunk that took a minute would be timed as one model per minute)
      * @param expectedTotal how many outcomes this run will emit, for progress (-1 if unknown)
      * @return counts of the emitted outcomes by status
      */
@@ -48,12 +49,16 @@ final class ChunkSweep {
         long[] emitted = {0};
         work.forEachInOrder(owned(new Chunking(requests, massesPerChunk), shard, alreadyDone),
                 chunk -> solveSafely(solver, chunk), outcomes -> {
+                    long before = emitted[0];
                     for (ModelOutcome outcome : outcomes) {
                         if (!alreadyDone.test(outcome.request())) {
                             sink.accept(outcome);
                             counts.merge(outcome.status(), 1L, Long::sum);
-                            progress.progress(++emitted[0], expectedTotal);
+                            emitted[0]++;
                         }
+                    }
+                    if (emitted[0] > before) {
+                        progress.progress(emitted[0], expectedTotal);
                     }
                 });
         return counts;

@@ -64,6 +64,17 @@ class ChunkSweepTest {
     }
 
     @Test
+    void progressIsToldOncePerChunkWithTheRunningCount() throws Exception {
+        // 2 lines x 20 masses in chunks of 4 masses (8 models); the 3 models of the first chunk already done
+        List<Long> told = new ArrayList<>();
+        try (ParallelWork work = new ParallelWork(2)) {
+            ChunkSweep.run(work, grid().iterator(), 4, Shard.ALL, r -> Set.of("z0m0a0", "z0m0a1", "z0m1a0")
+                    .contains(r.modelId()), SEED_DEPENDENT, o -> { }, (done, total) -> told.add(done), 77);
+        }
+        assertThat(told).hasSize(10).startsWith(5L, 13L, 21L).endsWith(77L);
+    }
+
+    @Test
     void chunksNeverCrossALineAndKeepAllAgesOfAMass() {
         Chunking chunking = new Chunking(grid().iterator(), 4);
         List<List<ModelRequest>> chunks = new ArrayList<>();

@@ -8,7 +8,13 @@ import org.convgrid.engine.batch.ProgressListener;
 /**
  * Progress of a run on the error stream. On a terminal: one line redrawn in place with a carriage return (bar,
  * models done/total, rate, time left), at most every {@link #REDRAW_NANOS}. In a batch log: one plain line every
- * {@link #LOG_EVERY_NANOS} or every {@link #LOG_EVERY_PERCENT} %, whichever comes first. Called from one thread.
+ * {@link #LOG_EVERY_NANOS} or every {@link #LOG_EVERY_PERCENT} %, whichever comes first. Called from one thread,
+ * once per finished chunk of models.
+ *
+ * <p>The time left is the models still to do at the mean rate so far, shown from the second report on: the first
+ * report comes when the first chunk is done, while the other threads' chunks, started at the same moment, are nearly
+ * done too; a rate taken from it alone counts the set-up (tables read, physics built per composition, the first cold
+ * zero-age models) and one thread's chunk as all the work done, and overstates the time left by about the thread count.
  */
 public final class ProgressReporter implements ProgressListener {
 
@@ -19,6 +25,8 @@ public final class ProgressReporter implements ProgressListener {
     /** Log a line at least at each multiple of this percentage. */
     static final int LOG_EVERY_PERCENT = 5;
     private static final int BAR_WIDTH = 24;
+    /** Reports before the time left is shown (see the class comment). */
+    static final int MIN_REPORTS_FOR_TIME_LEFT = 2;
 
     private final PrintWriter err;
     private final boolean terminal;
@@ -27,6 +35,7 @@ public final class ProgressReporter implements ProgressListener {
     private long lastShown;
     private long lastPercentStep;
     private boolean drawn;
+    private long reports;
 
     /**
      * @param err where to write
@@ -44,6 +53,7 @@ public final class ProgressReporter implements ProgressListener {
     @Override
     public void progress(long done, long total) {
         long now = nanoTime.getAsLong();
+        reports++;
         boolean last = done >= total && total > 0;
         if (terminal) {
             if (last || now - lastShown >= REDRAW_NANOS) {
@@ -84,7 +94,7 @@ public final class ProgressReporter implements ProgressListener {
             text.append(String.format(Locale.ROOT, " (%d%%)", done * 100 / total));
         }
         text.append(String.format(Locale.ROOT, ", %.2f models/s", rate));
-        if (total > 0 && done > 0 && done < total) {
+        if (reports >= MIN_REPORTS_FOR_TIME_LEFT && total > 0 && done > 0 && done < total) {
             text.append(", ").append(Durations.describe((total - done) / rate)).append(" left");
         }
         return text.toString();

@@ -17,12 +17,14 @@ class ProgressReporterTest {
     @Test
     void terminalRedrawsOneLineWithRateAndTimeLeft() {
         ProgressReporter reporter = new ProgressReporter(new PrintWriter(text), true, clock::get);
+        clock.set(5 * SECOND);
+        reporter.progress(25, 200);
         clock.set(10 * SECOND);
         reporter.progress(50, 200);
         clock.set(10 * SECOND + 1000);
         reporter.progress(51, 200);
-        assertThat(text.toString())
-                .isEqualTo("\r[######..................] 50/200 models (25%), 5.00 models/s, 30 s left");
+        assertThat(text.toString()).isEqualTo("\r[###.....................] 25/200 models (12%), 5.00 models/s"
+                + "\r[######..................] 50/200 models (25%), 5.00 models/s, 30 s left");
         clock.set(40 * SECOND);
         reporter.progress(200, 200);
         reporter.finish();
@@ -60,5 +62,24 @@ class ProgressReporterTest {
                 "convgrid: 6/10000 models (0%), 0.17 models/s, 16 h 39 min left",
                 "convgrid: 8/10000 models (0%), 0.17 models/s, 16 h 39 min left",
                 "convgrid: 10/10000 models (0%), 0.17 models/s, 16 h 39 min left");
+    }
+
+    @Test
+    void theFirstTimeLeftIsNotTakenFromTheFirstChunkAlone() {
+        // the demo grid measured on 2 threads (180 models, 72 s in all): the first two chunks of 24 models come
+        // back together after 20 s, the next (12 models) at 29 s; the run ended at 72 s. Told model by model, the
+        // first line used to say "1/180 ... 57 min 51 s left".
+        ProgressReporter reporter = new ProgressReporter(new PrintWriter(text), false, clock::get);
+        clock.set(20 * SECOND);
+        reporter.progress(24, 180);
+        clock.set(20 * SECOND + SECOND / 100);
+        reporter.progress(48, 180);
+        clock.set(29 * SECOND);
+        reporter.progress(60, 180);
+        String[] lines = text.toString().split("\n");
+        assertThat(lines[0]).isEqualTo("convgrid: 24/180 models (13%), 1.20 models/s");
+        // 132 models at 48 / 20.01 s: 55 s (52 s were left)
+        assertThat(lines[1]).isEqualTo("convgrid: 48/180 models (26%), 2.40 models/s, 55 s left");
+        assertThat(lines[2]).isEqualTo("convgrid: 60/180 models (33%), 2.07 models/s, 58 s left");
     }
 }
