@@ -56,4 +56,18 @@ class StarCommandTest {
         assertThat(err.toString()).contains("past the main sequence").contains("core hydrogen exhausted");
         assertThat(out.toString()).startsWith("Model at 3 Gyr").contains("past_main_sequence");
     }
+
+    @Test
+    void aFullyConvectiveStarHasNoCoreLineWithATopAtTheSurface() {
+        // 0.2 Msun is fully convective on the zero-age main sequence (Chabrier & Baraffe 1997, A&A 327, 1039; from
+        // memory); its one zone is the envelope reaching the centre, never a core reaching the surface
+        int code = run("star", "--mass", "0.2", "--z", "0.02");
+        assertThat(code).as(err.toString()).isZero();
+        List<String> lines = out.toString().lines().toList();
+        assertThat(lines).anyMatch(l -> l.matches("\\s+structure\\s+fully convective"));
+        assertThat(lines).filteredOn(l -> l.contains("convective core, top")).hasSize(2)
+                .allMatch(l -> l.matches("\\s+convective core, top\\s+-\\s+(m/M|r/R)"));
+        assertThat(lines).anyMatch(l -> l.matches("\\s+convective envelope, base\\s+0\\.00000\\s+m/M"));
+        assertThat(out.toString()).doesNotContain("1.00000 ");
+    }
 }
