@@ -25,7 +25,7 @@ class ShardTracksTest {
     Path work;
 
     /** The fake solver, handing one made-up step per star (its first request) to the track sink. */
-    private static final ChunkSolverFactory FAKE_WITH_TRACKS = new ChunkSolverFactory() {
+    static final ChunkSolverFactory FAKE_WITH_TRACKS = new ChunkSolverFactory() {
         @Override
         public ChunkSolver solverFor(GridSpec grid) {
             return FakeChunkSolver.fast();
