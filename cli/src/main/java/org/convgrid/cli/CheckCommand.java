@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import org.convgrid.cli.run.GridSummary;
+import org.convgrid.cli.run.RunTimeEstimate;
 import org.convgrid.grids.GridFile;
 import org.convgrid.survey.RunDirectory;
 import picocli.CommandLine.Command;
@@ -17,8 +18,11 @@ import picocli.CommandLine.ParentCommand;
             "Runs nothing. Problems are printed as file:line:column: message (exit code 2)."})
 final class CheckCommand implements Callable<Integer> {
 
-    /** Seconds per model assumed when no earlier run says better: a rough guess, stated as such in the output. */
-    static final double ASSUMED_SECONDS_PER_MODEL = 1.0;
+    /**
+     * Seconds per zero-age model assumed when no earlier run says better: a rough guess, stated as such in the
+     * output (the demo's zero-age models took 0.7 s each on one thread of a loaded 2-core machine).
+     */
+    static final double ASSUMED_SECONDS_PER_ZERO_AGE_MODEL = 1.0;
 
     @ParentCommand
     ConvgridMain parent;
@@ -38,14 +42,11 @@ final class CheckCommand implements Callable<Integer> {
         Path runDir = context.resolve(Path.of(file.spec().outputDir()));
         // the same refusal as 'run' gives, so a grid that passes check does not fail at the start of run
         OutputTargets.requireWritableDirectory("the run directory (output dir)", runDir);
-        double cost = ASSUMED_SECONDS_PER_MODEL;
-        String source = "a rough default; a finished run records its own median";
         OptionalDouble measured = new RunDirectory(runDir).measuredSecondsPerModel();
-        if (measured.isPresent()) {
-            cost = measured.getAsDouble();
-            source = "median of the run in " + runDir;
-        }
-        for (String line : GridSummary.lines(file, cost, source, n, runDir.toString())) {
+        RunTimeEstimate estimate = measured.isPresent()
+                ? RunTimeEstimate.measured(file.spec(), measured.getAsDouble(), n, runDir.toString())
+                : RunTimeEstimate.assumed(file.spec(), ASSUMED_SECONDS_PER_ZERO_AGE_MODEL, n);
+        for (String line : GridSummary.lines(file, estimate, n, runDir.toString())) {
             parent.out().println(line);
         }
         parent.out().flush();

@@ -23,9 +23,28 @@ class CheckCommandTest {
                 .contains("Z=0.004 Y=0.2545", "Z=0.02 Y=0.2785")
                 .contains("ages:          2: 0, 2 Gyr")
                 .contains("mixing length 1.8 Hp, overshoot 0 Hp, schwarzschild")
-                // 156 models x 1 s (assumed) / 2 threads
-                .contains("about 1 min 18 s on 2 thread(s)");
+                // 78 stars, each a zero-age model (1 s assumed) evolved once to 2 Gyr (1.5 zero-age models' time):
+                // 78 x 2.5 s / 2 threads
+                .contains("about 1 min 38 s on 2 thread(s)")
+                .contains("each of the 78 stars evolved once to its oldest age");
         assertThat(Files.exists(work.resolve("runs"))).isFalse();
+    }
+
+    @Test
+    void theEstimateCountsEvolvedAgesPerStar() throws Exception {
+        String axes = "mass: {values: [1.0, 2.0]}\nmetallicity: {z: 0.014, y: 0.27}\n";
+        CliHarness cli = CliHarness.in(work, FakeChunkSolver.fast());
+        // zero-age models only: 2 x 1 s
+        Path zeroAge = CliHarness.writeGrid(work, "zams.yaml", axes + "age: {gyr: [0]}\n");
+        assertThat(cli.execute("check", zeroAge.toString(), "--threads", "1").out())
+                .contains("about 2 s on 1 thread(s)").contains("zero-age models only");
+        // three ages of one evolution each: 2 x (1 + 1.5) s, not 6 models' worth of zero-age time
+        Path evolved = CliHarness.writeGrid(work, "evolved.yaml", axes + "age: {gyr: [0, 0.15, 0.6]}\n");
+        assertThat(cli.execute("check", evolved.toString(), "--threads", "1").out()).contains("about 5 s on 1");
+        // main-sequence fractions: evolved twice, 2 x (1 + 2 x 1.5) s
+        Path fractions = CliHarness.writeGrid(work, "fractions.yaml", axes + "age: {ms_fraction: [0, 0.5]}\n");
+        assertThat(cli.execute("check", fractions.toString(), "--threads", "1").out())
+                .contains("about 8 s on 1 thread(s)").contains("evolved twice (lifetime, then ages)");
     }
 
     @Test

@@ -7,7 +7,6 @@ import java.util.stream.Collectors;
 import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.grids.GridFile;
 import org.convgrid.grids.GridSpec;
-import org.convgrid.grids.ModelCost;
 import org.convgrid.output.CsvNumbers;
 
 /** The text {@code convgrid check} prints about a valid grid: its axes, model count and a run-time estimate. */
@@ -21,13 +20,11 @@ public final class GridSummary {
 
     /**
      * @param file the grid file as read
-     * @param secondsPerModel the assumed cost of one model on one thread, s
-     * @param costSource where that cost comes from, for the reader
+     * @param estimate the run time on {@code threads} threads and how it was reached
      * @param threads threads the estimate assumes
      * @param runDirectory where {@code run} would write
      */
-    public static List<String> lines(GridFile file, double secondsPerModel, String costSource, int threads,
-                                     String runDirectory) {
+    public static List<String> lines(GridFile file, RunTimeEstimate estimate, int threads, String runDirectory) {
         GridSpec g = file.spec();
         List<String> lines = new ArrayList<>();
         lines.add("grid:          " + TerminalText.clean(g.title() + " (" + file.name() + ")"));
@@ -45,9 +42,8 @@ public final class GridSummary {
                     + p.criterion().name().toLowerCase(Locale.ROOT) + ", opacity x" + n(p.opacityScale()));
         }
         lines.add("models:        " + g.count());
-        double seconds = g.estimateSeconds(ModelCost.constant(secondsPerModel), threads);
-        lines.add("estimate:      about " + Durations.describe(seconds) + " on " + threads + " thread(s), at "
-                + n(secondsPerModel) + " s per model (" + costSource + ")");
+        lines.add("estimate:      about " + Durations.describe(estimate.seconds()) + " on " + threads
+                + " thread(s), at " + estimate.basis());
         lines.add("run directory: " + runDirectory);
         return lines;
     }
