@@ -19,6 +19,7 @@ import org.convgrid.output.profile.ProfileReader;
 import org.convgrid.output.profile.ProfileRow;
 import org.convgrid.output.track.Track;
 import org.convgrid.output.track.TrackReader;
+import org.convgrid.output.track.TrackTimeline;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionReader;
 import org.convgrid.output.transitions.TransitionRow;
@@ -35,15 +36,29 @@ import org.convgrid.plotting.tracks.TrackedModel;
  * @param manifest the manifest, null when manifest.yaml is absent
  * @param radiusZones convective intervals in r/R by model id, from profiles/ (empty when there are none)
  * @param tracks the evolution tracks in tracks/, by track id (empty when there are none)
+ * @param timelines where each track's life stages lie, by track id (absent: {@link TrackTimeline#UNKNOWN})
  */
 public record RunData(List<CatalogueRow> catalogue, List<TransitionRow> transitions, boolean transitionsFromFile,
-                      RunManifest manifest, Map<String, List<Span>> radiusZones, List<Track> tracks) {
+                      RunManifest manifest, Map<String, List<Span>> radiusZones, List<Track> tracks,
+                      Map<String, TrackTimeline> timelines) {
 
     public RunData {
         catalogue = List.copyOf(catalogue);
         transitions = List.copyOf(transitions);
         radiusZones = Map.copyOf(radiusZones);
         tracks = List.copyOf(tracks);
+        timelines = Map.copyOf(timelines);
+    }
+
+    /** A run whose tracks do not record their phases. */
+    public RunData(List<CatalogueRow> catalogue, List<TransitionRow> transitions, boolean transitionsFromFile,
+                   RunManifest manifest, Map<String, List<Span>> radiusZones, List<Track> tracks) {
+        this(catalogue, transitions, transitionsFromFile, manifest, radiusZones, tracks, Map.of());
+    }
+
+    /** Where the life stages of track {@code trackId} lie. */
+    public TrackTimeline timeline(String trackId) {
+        return timelines.getOrDefault(trackId, TrackTimeline.UNKNOWN);
     }
 
     /** Whether the run has evolution tracks. */
@@ -83,8 +98,13 @@ public record RunData(List<CatalogueRow> catalogue, List<TransitionRow> transiti
         Path manifestFile = layout.manifest();
         RunManifest manifest = Files.isRegularFile(manifestFile)
                 ? RunManifestReader.read(Files.readString(manifestFile, StandardCharsets.UTF_8)) : null;
-        return new RunData(catalogue, transitions, fromFile, manifest, radiusZones(layout, catalogue),
-                TrackReader.readAll(layout.tracks()));
+        List<Track> tracks = TrackReader.readAll(layout.tracks());
+        Map<String, TrackTimeline> timelines = new HashMap<>();
+        for (Track t : tracks) {
+            timelines.put(t.trackId(), TrackTimeline.read(layout.trackFile(t.trackId())));
+        }
+        return new RunData(catalogue, transitions, fromFile, manifest, radiusZones(layout, catalogue), tracks,
+                timelines);
     }
 
     private static Map<String, List<Span>> radiusZones(RunLayout layout, List<CatalogueRow> catalogue)

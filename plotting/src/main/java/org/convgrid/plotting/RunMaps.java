@@ -170,12 +170,12 @@ public final class RunMaps {
             entries.add(new MapEntry("zones-age" + stem, MapEntry.ZONES_AGE, group,
                     "Convective zones (shaded) and the hydrogen-burning region (outlined) against age, " + what + ", "
                             + o.physics().describe() + ".",
-                    () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track()))));
-            if (Kippenhahn.build(o, t.track()).hasThinEnvelope()) {
+                    () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track(), run.timeline(o.trackId())))));
+            if (Kippenhahn.build(o, t.track(), run.timeline(o.trackId())).hasThinEnvelope()) {
                 entries.add(new MapEntry("zones-age-depth" + stem, MapEntry.ZONES_AGE, group,
                         "The same in depth below the surface, -log10(1 - m/M), so the thin convective envelope "
                                 + "shows, " + what + ".",
-                        () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track()),
+                        () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track(), run.timeline(o.trackId())),
                                 ZoneCoordinate.SURFACE_DEPTH)));
             }
         }

@@ -7,6 +7,7 @@ import java.util.stream.IntStream;
 import org.convgrid.output.Span;
 import org.convgrid.output.track.Track;
 import org.convgrid.output.track.TrackStep;
+import org.convgrid.output.track.TrackTimeline;
 import org.convgrid.plotting.tracks.TrackOrigin;
 
 /**
@@ -23,8 +24,13 @@ public final class Kippenhahn {
     private Kippenhahn() {
     }
 
-    /** The chart data of {@code track}, whose mass, Z and physics are {@code origin}. */
+    /** The chart data of {@code track}, whose mass, Z and physics are {@code origin}, with no phases recorded. */
     public static KippenhahnData build(TrackOrigin origin, Track track) {
+        return build(origin, track, TrackTimeline.UNKNOWN);
+    }
+
+    /** The chart data of {@code track} ({@code origin}: its mass, Z and physics) with its life stages. */
+    public static KippenhahnData build(TrackOrigin origin, Track track, TrackTimeline timeline) {
         List<TrackStep> all = track.steps();
         // Indices into the file, sorted by age, keeping the last step of equal ages.
         List<Integer> order = IntStream.range(0, all.size()).filter(i -> Double.isFinite(all.get(i).ageGyr()))
@@ -55,6 +61,6 @@ public final class Kippenhahn {
         double ageMin = kept.isEmpty() ? 0.0 : all.get(kept.get(0)).ageGyr();
         double ageMax = kept.isEmpty() ? 0.0 : all.get(kept.get(kept.size() - 1)).ageGyr();
         List<String> notes = kept.size() < 2 ? List.of(TOO_SHORT_NOTE) : List.of();
-        return new KippenhahnData(origin, ageMin, ageMax, zones, burning, notes);
+        return new KippenhahnData(origin, ageMin, ageMax, zones, burning, notes, timeline);
     }
 }

@@ -1,6 +1,7 @@
 package org.convgrid.plotting.kippenhahn;
 
 import java.util.List;
+import org.convgrid.output.track.TrackTimeline;
 import org.convgrid.plotting.tracks.TrackOrigin;
 
 /**
@@ -12,9 +13,10 @@ import org.convgrid.plotting.tracks.TrackOrigin;
  * @param zones one rectangle per convective interval of every step but the last, in step order
  * @param burning one rectangle per step (but the last) that gives a hydrogen-burning region, in step order
  * @param notes caveats to print on the chart
+ * @param timeline whether the track starts at birth and where it reaches the zero-age main sequence
  */
 public record KippenhahnData(TrackOrigin origin, double ageMin, double ageMax, List<AgeRect> zones,
-                             List<AgeRect> burning, List<String> notes) {
+                             List<AgeRect> burning, List<String> notes, TrackTimeline timeline) {
 
     /** A surface convection zone holding less than this share of the mass is thin: the depth chart shows it. */
     public static final double THIN_ENVELOPE_MASS_FRAC = 0.02;
@@ -32,5 +34,6 @@ public record KippenhahnData(TrackOrigin origin, double ageMin, double ageMax, L
         zones = List.copyOf(zones);
         burning = List.copyOf(burning);
         notes = List.copyOf(notes);
+        java.util.Objects.requireNonNull(timeline, "timeline");
     }
 }

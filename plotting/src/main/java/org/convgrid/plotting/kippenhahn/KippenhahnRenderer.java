@@ -13,6 +13,7 @@ import java.util.Set;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.ChartNotes;
 import org.convgrid.plotting.style.ChartStyle;
+import org.convgrid.plotting.style.LogAxis;
 import org.convgrid.plotting.style.StyledChart;
 import org.convgrid.plotting.zones.ZoneKind;
 import org.convgrid.plotting.zones.ZoneMapRenderer;
@@ -27,6 +28,8 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
 public final class KippenhahnRenderer {
 
     static final String BURNING_LABEL = "hydrogen burning (hatched)";
+    /** The trade's abbreviation: the full words would run out of the plot next to a late zero-age main sequence. */
+    static final String ZAMS_LABEL = "ZAMS";
     private static final Color TRANSPARENT = new Color(0, 0, 0, 0);
     private static final float BURNING_EDGE_WIDTH = 2.0f;
     /** Hatch: 45-degree lines this many pixels apart, this wide. */
@@ -45,18 +48,23 @@ public final class KippenhahnRenderer {
 
     /** The chart of one track in the given vertical coordinate. */
     public static StyledChart render(KippenhahnData data, ZoneCoordinate y) {
+        boolean fromBirth = data.timeline().startsAtBirth();
+        AgeScale ages = AgeScale.of(fromBirth, data.ageMin(), firstAfterBirth(data), data.ageMax());
         StyledChart chart = ChartStyle.newChart("Convective zones against age, M = "
                         + SliceLabels.number(data.origin().massMsun()) + " M\u2609, Z = "
                         + SliceLabels.number(data.origin().zInit()), data.origin().physics().describe(),
-                "age since the zero-age main sequence / Gyr", y.title());
+                ages.title(fromBirth), y.title());
         ChartStyle.legendRight(chart);
-        double span = data.ageMax() - data.ageMin();
-        double xMax = span > 0 ? data.ageMax() : data.ageMin() + 1.0;
-        // XChart labels no tick that sits exactly on an axis end; a hair of room (far below a pixel) lets it
-        // label the first and last ages itself, on the same baseline as the others
-        double hair = EDGE_ROOM_SHARE * (xMax - data.ageMin());
-        chart.getStyler().setXAxisMin(data.ageMin() - hair).setXAxisMax(xMax + hair);
-        chart.getStyler().setXAxisDecimalPattern(span < 0.5 ? "0.00" : span < 5 ? "0.0" : "0");
+        if (ages.logarithmic()) {
+            LogAxis.applyX(chart, ages.min(), ages.max(), ages.decades(), AgeScale::label);
+        } else {
+            double span = data.ageMax() - data.ageMin();
+            // XChart labels no tick that sits exactly on an axis end; a hair of room (far below a pixel) lets it
+            // label the first and last ages itself, on the same baseline as the others
+            double hair = EDGE_ROOM_SHARE * (ages.max() - ages.min());
+            chart.getStyler().setXAxisMin(ages.min() - hair).setXAxisMax(ages.max() + hair);
+            chart.getStyler().setXAxisDecimalPattern(span < 0.5 ? "0.00" : span < 5 ? "0.0" : "0");
+        }
         if (y == ZoneCoordinate.MASS_FRACTION) {
             ChartStyle.unitYAxis(chart);
         } else {
@@ -83,7 +91,7 @@ public final class KippenhahnRenderer {
                 }
                 boolean first = shown.contains(kind) && inLegend.add(kind);
                 Color fill = ZoneMapRenderer.fill(kind);
-                XYSeries s = polygon(chart, first ? kind.label() : "zone band " + n++, band, fill, y);
+                XYSeries s = polygon(chart, first ? kind.label() : "zone band " + n++, band, fill, ages, y);
                 s.setLineColor(fill);
                 s.setLineWidth(1.0f);
                 s.setShowInLegend(first);
@@ -91,12 +99,17 @@ public final class KippenhahnRenderer {
         }
         List<List<AgeRect>> burning = Bands.join(data.burning(), false);
         for (int i = 0; i < burning.size(); i++) {
-            XYSeries s = polygon(chart, i == 0 ? BURNING_LABEL : "burning band " + i, burning.get(i), TRANSPARENT, y);
+            XYSeries s = polygon(chart, i == 0 ? BURNING_LABEL : "burning band " + i, burning.get(i), TRANSPARENT, ages,
+                    y);
             s.setLineColor(ChartStyle.BLACK);
             s.setLineWidth(BURNING_EDGE_WIDTH);
             s.setShowInLegend(i == 0);
         }
-        chart.addOverlay((g, c) -> burning.forEach(band -> hatch(g, c, band, y)));
+        chart.addOverlay((g, c) -> burning.forEach(band -> hatch(g, c, band, ages, y)));
+        double zams = data.timeline().zeroAgeMainSequenceGyr();
+        if (Double.isFinite(zams) && zams > data.ageMin() && zams < data.ageMax()) {
+            chart.addOverlay((g, c) -> markZeroAgeMainSequence(g, c, ages.x(zams)));
+        }
         List<String> notes = new java.util.ArrayList<>(data.notes());
         for (ZoneKind kind : seen) {
             if (!shown.contains(kind)) {
@@ -109,8 +122,8 @@ public final class KippenhahnRenderer {
     }
 
     private static XYSeries polygon(StyledChart chart, String name, List<AgeRect> band, Color fill,
-                                    ZoneCoordinate y) {
-        double[][] outline = onAxis(Bands.outline(band), y);
+                                    AgeScale ages, ZoneCoordinate y) {
+        double[][] outline = onAxis(Bands.outline(band), ages, y);
         XYSeries s = chart.addSeries(name, outline[0], outline[1]);
         s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.PolygonArea);
         s.setFillColor(fill);
@@ -119,8 +132,8 @@ public final class KippenhahnRenderer {
     }
 
     /** Diagonal lines clipped to the band's outline (drawn as lines, so vector files stay crisp). */
-    private static void hatch(Graphics2D g, StyledChart c, List<AgeRect> band, ZoneCoordinate axis) {
-        double[][] outline = onAxis(Bands.outline(band), axis);
+    private static void hatch(Graphics2D g, StyledChart c, List<AgeRect> band, AgeScale ages, ZoneCoordinate axis) {
+        double[][] outline = onAxis(Bands.outline(band), ages, axis);
         Path2D.Double path = new Path2D.Double();
         for (int i = 0; i < outline[0].length; i++) {
             double x = c.getScreenXFromChart(outline[0][i]);
@@ -144,12 +157,39 @@ public final class KippenhahnRenderer {
         g.setClip(oldClip);
     }
 
-    /** An outline (ages, m/M) with its heights moved onto the chart's vertical coordinate. */
-    private static double[][] onAxis(double[][] outline, ZoneCoordinate y) {
+    /** An outline (ages in Gyr, m/M) moved onto the chart's age axis and vertical coordinate. */
+    private static double[][] onAxis(double[][] outline, AgeScale ages, ZoneCoordinate y) {
+        double[] xs = new double[outline[0].length];
         double[] heights = new double[outline[1].length];
         for (int i = 0; i < heights.length; i++) {
+            xs[i] = ages.x(outline[0][i]);
             heights[i] = y.of(outline[1][i]);
         }
-        return new double[][] {outline[0], heights};
+        return new double[][] {xs, heights};
+    }
+
+    /** The first age after birth (the first positive step age), Gyr; NaN when there is none. */
+    private static double firstAfterBirth(KippenhahnData data) {
+        return data.zones().stream().mapToDouble(AgeRect::right).filter(a -> a > 0).min().orElse(Double.NaN);
+    }
+
+    /** A dashed vertical line at the zero-age main sequence, labelled at its top, inside the plot. */
+    private static void markZeroAgeMainSequence(Graphics2D g, StyledChart c, double x) {
+        double sx = c.getScreenXFromChart(x);
+        double top = c.getScreenYFromChart(c.getStyler().getYAxisMax());
+        double bottom = c.getScreenYFromChart(c.getStyler().getYAxisMin());
+        g.setColor(ChartStyle.BLACK);
+        g.setStroke(ChartStyle.REFERENCE_DASHED);
+        g.draw(new Line2D.Double(sx, top, sx, bottom));
+        g.setFont(ChartStyle.ANNOTATION_FONT);
+        java.awt.FontMetrics fm = g.getFontMetrics();
+        String text = ZAMS_LABEL;
+        float tx = (float) (sx + fm.stringWidth(" "));
+        float ty = (float) (top + fm.getAscent() + 4);
+        // a white box under the words keeps them legible over the zone colours
+        g.setColor(Color.WHITE);
+        g.fill(new Rectangle2D.Double(tx - 2, ty - fm.getAscent(), fm.stringWidth(text) + 4, fm.getHeight()));
+        g.setColor(ChartStyle.BLACK);
+        g.drawString(text, tx, ty);
     }
 }

@@ -5,6 +5,7 @@ import java.awt.FontMetrics;
 import java.awt.Graphics2D;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.DoubleFunction;
 import org.convgrid.plotting.label.SliceLabels;
 
 /**
@@ -23,12 +24,18 @@ public final class LogAxis {
 
     /** Makes the x axis logarithmic over [min, max], labelled at {@code labelled} (values outside are dropped). */
     public static void applyX(StyledChart chart, double min, double max, List<Double> labelled) {
+        applyX(chart, min, max, labelled, SliceLabels::number);
+    }
+
+    /** As {@link #applyX(StyledChart, double, double, List)}, each label written by {@code label}. */
+    public static void applyX(StyledChart chart, double min, double max, List<Double> labelled,
+                              DoubleFunction<String> label) {
         chart.getStyler().setXAxisLogarithmic(true);
         chart.getStyler().setXAxisLogarithmicDecadeOnly(false);
         chart.getStyler().setXAxisMin(min).setXAxisMax(max);
         chart.getStyler().setXAxisTickLabelsColor(TRANSPARENT);
         List<Double> inside = labelled.stream().filter(v -> v >= min && v <= max).toList();
-        chart.addOverlay((g, c) -> paintLabels(g, c, inside));
+        chart.addOverlay((g, c) -> paintLabels(g, c, inside, label));
     }
 
     /**
@@ -40,7 +47,7 @@ public final class LogAxis {
         chart.getStyler().setXAxisMin(min).setXAxisMax(max);
         chart.getStyler().setXAxisTickLabelsColor(TRANSPARENT);
         List<Double> inside = labelled.stream().filter(v -> v >= min && v <= max).toList();
-        chart.addOverlay((g, c) -> paintLabels(g, c, inside));
+        chart.addOverlay((g, c) -> paintLabels(g, c, inside, SliceLabels::number));
     }
 
     /** The round values 1, 2, 3 and 5 x 10^n in [min, max]. */
@@ -57,7 +64,8 @@ public final class LogAxis {
         return ticks;
     }
 
-    private static void paintLabels(Graphics2D g, StyledChart chart, List<Double> ticks) {
+    private static void paintLabels(Graphics2D g, StyledChart chart, List<Double> ticks,
+                                    DoubleFunction<String> label) {
         g.setFont(ChartStyle.TICK_FONT);
         g.setColor(ChartStyle.TEXT);
         FontMetrics fm = g.getFontMetrics();
@@ -69,7 +77,7 @@ public final class LogAxis {
         double lastRight = Double.NEGATIVE_INFINITY;
         double gap = fm.stringWidth(" ");
         for (double tick : ticks.stream().sorted().toList()) {
-            String text = SliceLabels.number(tick);
+            String text = label.apply(tick);
             double x = chart.getScreenXFromChart(tick);
             double left = x - fm.stringWidth(text) / 2.0;
             if (left < lastRight + gap) {

@@ -115,4 +115,59 @@ class KippenhahnTest {
         assertThat(image.getWidth()).isEqualTo(ChartStyle.WIDTH);
         assertThat(image.getHeight()).isEqualTo(ChartStyle.HEIGHT);
     }
+
+    /**
+     * A made-up 1 Msun track from birth (shapes only, nothing under test): fully convective until 2 Myr, a
+     * radiative core growing under a retreating envelope, the zero-age main sequence at 45 Myr, hydrogen burning
+     * in the centre from then on; ages log-spaced from 1 kyr to 10 Gyr after a first step at birth.
+     */
+    static String birthTrack() {
+        StringBuilder b = new StringBuilder("age_gyr,phase,conv_zones_mass_frac,burning_zone_mass_frac\n");
+        b.append("0.0,pre_main_sequence,0.0-1.0,\n");
+        for (int k = 0; k <= 70; k++) {
+            double ageGyr = Math.pow(10, -6 + k * 0.1);
+            boolean main = ageGyr >= 0.045;
+            double base = ageGyr < 0.002 ? 0.0 : Math.min(0.98, 0.3 * Math.log10(ageGyr / 0.002) + 0.2);
+            b.append(ageGyr).append(',').append(main ? "main_sequence" : "pre_main_sequence").append(',')
+                    .append(base).append("-1.0,").append(main ? "0.0-0.1" : "").append('\n');
+        }
+        return b.toString();
+    }
+
+    @Test
+    void aTrackFromBirthIsDrawnOnALogarithmicAgeAxisWithTheZeroAgeMainSequenceMarked(@TempDir Path dir)
+            throws Exception {
+        String text = birthTrack();
+        org.convgrid.output.track.TrackTimeline timeline = org.convgrid.output.track.TrackTimeline.read(
+                new StringReader(text));
+        assertThat(timeline.startsAtBirth()).isTrue();
+        assertThat(timeline.zeroAgeMainSequenceGyr()).isBetween(0.045, 0.06);
+        Track t = new Track("t", TrackReader.read(new StringReader(text)));
+        KippenhahnData data = Kippenhahn.build(new TrackOrigin("t", 1.0, 0.014, PHYSICS), t, timeline);
+        AgeScale scale = AgeScale.of(true, data.ageMin(), 1e-6, data.ageMax());
+        assertThat(scale.logarithmic()).isTrue();
+        // 1 kyr to 10 Gyr in Myr, one labelled tick per decade, each in the unit that keeps it short
+        assertThat(scale.decades()).containsExactly(1e-3, 1e-2, 1e-1, 1.0, 10.0, 100.0, 1e3, 1e4);
+        assertThat(scale.decades().stream().map(AgeScale::label).toList()).containsExactly("1 kyr", "10 kyr",
+                "100 kyr", "1 Myr", "10 Myr", "100 Myr", "1 Gyr", "10 Gyr");
+        // birth (age 0) is held at the left end
+        assertThat(scale.x(0.0)).isEqualTo(scale.min());
+        // a track from the zero-age main sequence, or one without phases, keeps the linear axis in Gyr
+        assertThat(AgeScale.of(false, 0.0, 1e-6, 10.0).logarithmic()).isFalse();
+        assertThat(Kippenhahn.build(new TrackOrigin("t", 1.0, 0.014, PHYSICS), t).timeline())
+                .isEqualTo(org.convgrid.output.track.TrackTimeline.UNKNOWN);
+        assertThat(org.convgrid.output.track.TrackTimeline.read(new StringReader(TestTracks.text(1.0, 0.014, 5))))
+                .isEqualTo(org.convgrid.output.track.TrackTimeline.UNKNOWN);
+        Path png = dir.resolve("birth.png");
+        ChartFiles.writePng(KippenhahnRenderer.render(data), png);
+        assertThat(ImageIO.read(png.toFile()).getWidth()).isEqualTo(ChartStyle.WIDTH);
+        // CONVGRID_KEEP_CHARTS=DIR keeps the charts to look at
+        String keep = System.getenv("CONVGRID_KEEP_CHARTS");
+        if (keep != null) {
+            java.nio.file.Files.copy(png, Path.of(keep).resolve("zones-age-birth.png"),
+                    java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+            ChartFiles.writePng(KippenhahnRenderer.render(data, ZoneCoordinate.SURFACE_DEPTH),
+                    Path.of(keep).resolve("zones-age-birth-depth.png"));
+        }
+    }
 }
