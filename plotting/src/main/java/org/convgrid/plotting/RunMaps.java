@@ -130,7 +130,7 @@ public final class RunMaps {
                             + "evolution tracks (grey) and isochrones labelled by age, "
                             : "HR diagram of every usable model (colour: Z; shape: structure class), ")
                             + p.describe() + ".",
-                    () -> HrDiagramRenderer.render(HrDiagram.build(p, rows, run.trackedModels()))));
+                    () -> HrDiagramRenderer.render(HrDiagram.build(p, rows, run.trackedModels(), run::timeline))));
         }
         for (PhysicsKey p : physics) {
             if (run.transitions().stream().anyMatch(t -> PhysicsKey.of(t.slice()).equals(p))) {

@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.TreeMap;
+import java.util.function.Function;
+import org.convgrid.output.track.TrackTimeline;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.track.TrackStep;
 import org.convgrid.plotting.label.PhysicsKey;
@@ -35,6 +37,16 @@ public final class HrDiagram {
      * such models has none); track steps without a positive L and Teff are left out.
      */
     public static HrDiagramData build(PhysicsKey physics, List<CatalogueRow> rows, List<TrackedModel> tracked) {
+        return build(physics, rows, tracked, id -> TrackTimeline.UNKNOWN);
+    }
+
+    /**
+     * As {@link #build(PhysicsKey, List, List)}, with where each track's life stages lie. A track from birth is drawn
+     * from the youngest age the catalogue has (its first steps, a few kyr old, lie far up the Hayashi line and would
+     * squeeze every model into a corner), its pre-main-sequence part told apart.
+     */
+    public static HrDiagramData build(PhysicsKey physics, List<CatalogueRow> rows, List<TrackedModel> tracked,
+                                      Function<String, TrackTimeline> timelines) {
         List<HrPoint> points = rows.stream()
                 .filter(r -> PhysicsKey.of(r).equals(physics) && r.isOk() && r.structureClass() != null
                         && r.luminosityLsun() > 0 && r.teffK() > 0)
@@ -55,7 +67,8 @@ public final class HrDiagram {
         List<HrDiagramData.TrackLine> tracks = tracked.stream().filter(t -> t.origin().physics().equals(physics))
                 .sorted(Comparator.comparingDouble((TrackedModel t) -> t.origin().zInit())
                         .thenComparingDouble(t -> t.origin().massMsun()))
-                .map(HrDiagram::trackLine).filter(t -> t.logL().size() >= 2).toList();
+                .map(t -> trackLine(t, timelines.apply(t.origin().trackId()), youngestPositive(ages)))
+                .filter(t -> t.logL().size() >= 2).toList();
         List<HrDiagramData.ZeroAgeLine> isochrones = new ArrayList<>();
         if (!tracks.isEmpty()) {
             byZ.forEach((z, members) -> ages.forEach(age -> {
@@ -70,11 +83,21 @@ public final class HrDiagram {
                 isochrones);
     }
 
-    private static HrDiagramData.TrackLine trackLine(TrackedModel t) {
-        List<TrackStep> steps = t.track().steps().stream().filter(TrackStep::hasSurface).toList();
+    private static HrDiagramData.TrackLine trackLine(TrackedModel t, TrackTimeline timeline, double from) {
+        double start = timeline.startsAtBirth() && Double.isFinite(from) ? from : Double.NEGATIVE_INFINITY;
+        List<TrackStep> steps = t.track().steps().stream().filter(TrackStep::hasSurface)
+                .filter(s -> s.ageGyr() >= start).toList();
+        double zams = timeline.zeroAgeMainSequenceGyr();
+        int before = !timeline.startsAtBirth() ? 0 : Double.isNaN(zams) ? steps.size()
+                : (int) steps.stream().filter(s -> s.ageGyr() < zams).count();
         return new HrDiagramData.TrackLine(t.origin().massMsun(), t.origin().zInit(),
                 steps.stream().map(s -> Math.log10(s.teffK())).toList(),
-                steps.stream().map(s -> Math.log10(s.luminosityLsun())).toList());
+                steps.stream().map(s -> Math.log10(s.luminosityLsun())).toList(), before);
+    }
+
+    /** The youngest age above zero, Gyr; NaN when there is none. */
+    private static double youngestPositive(List<Double> ages) {
+        return ages.stream().mapToDouble(Double::doubleValue).filter(a -> a > 0).min().orElse(Double.NaN);
     }
 
     private static List<HrPoint> massLabels(List<HrPoint> line) {

@@ -42,11 +42,23 @@ public record HrDiagramData(PhysicsKey physics, List<Double> metallicities, List
      * @param zInit initial metal mass fraction
      * @param logTeff log10 of Teff in K, one per step with a surface, in age order
      * @param logL log10 of L / L_sun, same steps
+     * @param preMainSequencePoints how many of the first points lie before the zero-age main sequence (0 for a
+     *                              track from it)
      */
-    public record TrackLine(double massMsun, double zInit, List<Double> logTeff, List<Double> logL) {
+    public record TrackLine(double massMsun, double zInit, List<Double> logTeff, List<Double> logL,
+                            int preMainSequencePoints) {
         public TrackLine {
             logTeff = List.copyOf(logTeff);
             logL = List.copyOf(logL);
+            if (preMainSequencePoints < 0 || preMainSequencePoints > logL.size()) {
+                throw new IllegalArgumentException("pre-main-sequence points " + preMainSequencePoints + " of "
+                        + logL.size());
+            }
+        }
+
+        /** A track from the zero-age main sequence. */
+        public TrackLine(double massMsun, double zInit, List<Double> logTeff, List<Double> logL) {
+            this(massMsun, zInit, logTeff, logL, 0);
         }
     }
 

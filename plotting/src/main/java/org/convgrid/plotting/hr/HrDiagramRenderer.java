@@ -23,10 +23,15 @@ public final class HrDiagramRenderer {
     private static final double PAD_DEX = 0.04;
     /** Pixel spacing hint for the luminosity ticks (XChart's default gives 0.2 dex steps, too dense). */
     private static final int Y_TICK_SPACING = 90;
+    /** An age label moves down at most this many lines to clear the other labels. */
+    private static final int MAX_LABEL_MOVES = 20;
 
     /** Track lines: grey, thinner than the isochrones. */
     private static final java.awt.Color TRACK_GREY = new java.awt.Color(110, 110, 110);
     private static final float TRACK_WIDTH = 2.0f;
+    static final String PRE_MAIN_SEQUENCE_LABEL = "pre-main-sequence tracks (dotted)";
+    private static final java.awt.BasicStroke PRE_MAIN_SEQUENCE_STROKE = new java.awt.BasicStroke(TRACK_WIDTH,
+            java.awt.BasicStroke.CAP_ROUND, java.awt.BasicStroke.JOIN_ROUND, 1f, new float[] {2f, 5f}, 0f);
     /** The legend's class shapes: neutral, since colour stands for Z. */
     private static final java.awt.Color CLASS_LEGEND_GREY = new java.awt.Color(90, 90, 90);
 
@@ -36,7 +41,7 @@ public final class HrDiagramRenderer {
     /** The chart of an HR diagram. */
     public static StyledChart render(HrDiagramData data) {
         StyledChart chart = ChartStyle.newChart("HR diagram, Z = " + SliceLabels.values(data.metallicities()) + ", "
-                        + SliceLabels.ages(data.ages()), data.physics().describe(),
+                        + ages(data.ages()), data.physics().describe(),
                 "log10(Teff / K)   (hotter to the left)", "log10(L / L\u2609)");
         ChartStyle.legendRight(chart);
         chart.getStyler().setxAxisTickLabelsFormattingFunction(v -> String.format(Locale.ROOT, "%.1f", -v + 0.0));
@@ -59,7 +64,7 @@ public final class HrDiagramRenderer {
         List<HrDiagramData.ZeroAgeLine> zeroAge = data.isochrones().isEmpty() ? data.zeroAgeLines() : List.of();
         for (HrDiagramData.ZeroAgeLine line : zeroAge) {
             int zIndex = data.metallicities().indexOf(line.zInit());
-            XYSeries s = chart.addSeries((line.ageGyr() == 0 ? "zero age" : SliceLabels.age(line.ageGyr()))
+            XYSeries s = chart.addSeries((line.ageGyr() == 0 ? "zero age" : age(line.ageGyr()))
                             + ", Z = " + SliceLabels.number(line.zInit()),
                     line.points().stream().mapToDouble(p -> -p.logTeff()).toArray(),
                     line.points().stream().mapToDouble(HrPoint::logL).toArray());
@@ -106,31 +111,82 @@ public final class HrDiagramRenderer {
             g.setColor(ChartStyle.BLACK);
             FontMetrics fm = g.getFontMetrics();
             for (HrPoint p : labels) {
-                String text = SliceLabels.number(p.massMsun()) + " M\u2609";
-                double x = c.getScreenXFromChart(-p.logTeff());
-                double y = c.getScreenYFromChart(p.logL());
-                // Left of and below the point: the hot, faint side of the zero-age line holds no models.
-                g.drawString(text, (float) (x - fm.stringWidth(text) - 14), (float) (y + fm.getAscent() + 4));
+                java.awt.geom.Rectangle2D box = massLabelBox(fm, c, p);
+                g.drawString(massLabel(p), (float) box.getX(), (float) (box.getY() + fm.getAscent()));
             }
         });
         return chart;
     }
 
-    /** Tracks in thin grey (they are context for the coloured models), one legend entry for all. */
+    private static String massLabel(HrPoint p) {
+        return SliceLabels.number(p.massMsun()) + " M\u2609";
+    }
+
+    /**
+     * Where a mass label goes: left of and below its point (the hot, faint side of the zero-age line holds no
+     * models); the box of its text, top left at (x, y).
+     */
+    private static java.awt.geom.Rectangle2D massLabelBox(FontMetrics fm, StyledChart c, HrPoint p) {
+        String text = massLabel(p);
+        double x = c.getScreenXFromChart(-p.logTeff()) - fm.stringWidth(text) - 14;
+        double y = c.getScreenYFromChart(p.logL()) + 4;
+        return new java.awt.geom.Rectangle2D.Double(x, y, fm.stringWidth(text), fm.getHeight());
+    }
+
+    /**
+     * Tracks in thin grey (they are context for the coloured models), one legend entry for all; the part of a track
+     * before the zero-age main sequence dotted in a brown of our palette, with its own legend entry.
+     */
     private static void addTracks(StyledChart chart, HrDiagramData data) {
         int n = 0;
+        boolean preShown = false;
         for (HrDiagramData.TrackLine t : data.tracks()) {
-            boolean first = n == 0;
-            XYSeries s = chart.addSeries(first ? "evolution tracks" : "track " + n, t.logTeff().stream()
-                            .mapToDouble(v -> -v).toArray(),
-                    t.logL().stream().mapToDouble(Double::doubleValue).toArray());
+            int pre = t.preMainSequencePoints();
+            if (pre > 0) {
+                // up to and including the first main-sequence point, so the two parts join
+                int end = Math.min(pre + 1, t.logL().size());
+                XYSeries s = line(chart, preShown ? "pre-main-sequence track " + n : PRE_MAIN_SEQUENCE_LABEL,
+                        t.logTeff().subList(0, end), t.logL().subList(0, end));
+                s.setLineColor(ChartStyle.PRE_MAIN_SEQUENCE_BROWN);
+                s.setLineStyle(PRE_MAIN_SEQUENCE_STROKE);
+                s.setShowInLegend(!preShown);
+                preShown = true;
+            }
+            if (t.logL().size() - pre >= 2) {
+                boolean first = n == 0;
+                XYSeries s = line(chart, first ? "evolution tracks" : "track " + n,
+                        t.logTeff().subList(pre, t.logL().size()), t.logL().subList(pre, t.logL().size()));
+                s.setLineColor(TRACK_GREY);
+                s.setLineStyle(new java.awt.BasicStroke(TRACK_WIDTH));
+                s.setShowInLegend(first);
+            }
             n++;
-            s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
-            s.setMarker(SeriesMarkers.NONE);
-            s.setLineColor(TRACK_GREY);
-            s.setLineStyle(new java.awt.BasicStroke(TRACK_WIDTH));
-            s.setShowInLegend(first);
         }
+    }
+
+    private static XYSeries line(StyledChart chart, String name, List<Double> logTeff, List<Double> logL) {
+        XYSeries s = chart.addSeries(name, logTeff.stream().mapToDouble(v -> -v).toArray(),
+                logL.stream().mapToDouble(Double::doubleValue).toArray());
+        s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+        s.setMarker(SeriesMarkers.NONE);
+        return s;
+    }
+
+    /** An age for people: Myr below 1 Gyr (young clusters are spoken of in Myr), Gyr above. */
+    static String age(double ageGyr) {
+        if (ageGyr > 0 && ageGyr < 1) {
+            return SliceLabels.number(ageGyr * 1000) + " Myr";
+        }
+        return SliceLabels.age(ageGyr);
+    }
+
+    /** The ages of the title: each with its unit when they are not all in Gyr. */
+    static String ages(List<Double> agesGyr) {
+        if (agesGyr.stream().allMatch(a -> a == 0 || a >= 1)) {
+            return SliceLabels.ages(agesGyr);
+        }
+        return (agesGyr.size() == 1 ? "" : "ages ") + String.join(", ", agesGyr.stream()
+                .map(HrDiagramRenderer::age).toList());
     }
 
     /**
@@ -147,7 +203,7 @@ public final class HrDiagramRenderer {
                 .toList();
         // legend-only series per age, drawn first under the coloured isochrone at the same points
         for (HrDiagramData.ZeroAgeLine line : middle) {
-            XYSeries s = chart.addSeries("isochrone, " + SliceLabels.age(line.ageGyr()),
+            XYSeries s = chart.addSeries("isochrone, " + age(line.ageGyr()),
                     line.points().stream().mapToDouble(p -> -p.logTeff()).toArray(),
                     line.points().stream().mapToDouble(HrPoint::logL).toArray());
             s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
@@ -180,13 +236,29 @@ public final class HrDiagramRenderer {
             for (HrDiagramData.ZeroAgeLine line : middle) {
                 HrPoint top = line.points().stream().max(java.util.Comparator.comparingDouble(HrPoint::logL))
                         .orElseThrow();
-                labels.add(new Label(SliceLabels.age(line.ageGyr()), c.getScreenXFromChart(-top.logTeff()) + 10,
+                labels.add(new Label(age(line.ageGyr()), c.getScreenXFromChart(-top.logTeff()) + 10,
                         c.getScreenYFromChart(top.logL())));
             }
             labels.sort(java.util.Comparator.comparingDouble(Label::y));
+            // an age label moves down past the labels already placed, the mass labels included (young isochrones
+            // cross the mass labels of the youngest line)
+            List<java.awt.geom.Rectangle2D> taken = new java.util.ArrayList<>();
+            data.massLabels().forEach(p -> taken.add(massLabelBox(fm, c, p)));
             double lastBaseline = Double.NEGATIVE_INFINITY;
             for (Label l : labels) {
                 double baseline = Math.max(l.y() + fm.getAscent() / 2.0, lastBaseline + fm.getHeight());
+                java.awt.geom.Rectangle2D box;
+                int moves = 0;
+                while (true) {
+                    box = new java.awt.geom.Rectangle2D.Double(l.x(), baseline - fm.getAscent(),
+                            fm.stringWidth(l.text()), fm.getHeight());
+                    java.awt.geom.Rectangle2D here = box;
+                    if (moves++ > MAX_LABEL_MOVES || taken.stream().noneMatch(here::intersects)) {
+                        break;
+                    }
+                    baseline += fm.getHeight();
+                }
+                taken.add(box);
                 g.drawString(l.text(), (float) l.x(), (float) baseline);
                 lastBaseline = baseline;
             }
