@@ -106,7 +106,7 @@ final class RunCommand implements Callable<Integer> {
             long start = System.nanoTime();
             GridRun.Plan plan = runner.prepare(new GridRun.Settings(file, dir, n, chosen, resume, force));
             PrintWriter err = parent.err();
-            ProgressReporter reporter = quiet ? null : new ProgressReporter(err, context.terminal(), System::nanoTime);
+            ProgressReporter reporter = quiet ? null : new ProgressReporter(err, context.terminal(), System::nanoTime, n);
             if (!quiet) {
                 err.println("convgrid: " + startLine(plan, count, n));
                 err.flush();

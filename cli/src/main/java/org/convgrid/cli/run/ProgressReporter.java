@@ -11,10 +11,12 @@ import org.convgrid.engine.batch.ProgressListener;
  * {@link #LOG_EVERY_NANOS} or every {@link #LOG_EVERY_PERCENT} %, whichever comes first. Called from one thread,
  * once per finished chunk of models.
  *
- * <p>The time left is the models still to do at the mean rate so far, shown from the second report on: the first
- * report comes when the first chunk is done, while the other threads' chunks, started at the same moment, are nearly
- * done too; a rate taken from it alone counts the set-up (tables read, physics built per composition, the first cold
- * zero-age models) and one thread's chunk as all the work done, and overstates the time left by about the thread count.
+ * <p>The time left is the models still to do at the rate measured since the first report. The wait for the first
+ * report holds the set-up (the JVM warming up, opacity tables read, physics built per composition, cold first
+ * zero-age models): on the demo grid under load it took 71 s of a 144 s run, after which the rest came at three times
+ * the mean rate, so a rate counted from the start said "3 min 13 s left" with 73 s to go. The other threads' first
+ * chunks end just after the first report and would make the rate look too high, so the time left is shown only once
+ * {@link #REPORTS_PER_THREAD} reports per thread (at least two) have followed the first.
  */
 public final class ProgressReporter implements ProgressListener {
 
@@ -25,8 +27,8 @@ public final class ProgressReporter implements ProgressListener {
     /** Log a line at least at each multiple of this percentage. */
     static final int LOG_EVERY_PERCENT = 5;
     private static final int BAR_WIDTH = 24;
-    /** Reports before the time left is shown (see the class comment). */
-    static final int MIN_REPORTS_FOR_TIME_LEFT = 2;
+    /** Reports per worker thread after the first before the time left is shown (see the class comment). */
+    static final int REPORTS_PER_THREAD = 2;
 
     private final PrintWriter err;
     private final boolean terminal;
@@ -36,6 +38,9 @@ public final class ProgressReporter implements ProgressListener {
     private long lastPercentStep;
     private boolean drawn;
     private long reports;
+    private final int reportsBeforeTimeLeft;
+    private long firstDone;
+    private long firstTime;
 
     /**
      * @param err where to write
@@ -43,6 +48,17 @@ public final class ProgressReporter implements ProgressListener {
      * @param nanoTime the clock, {@code System::nanoTime} outside tests
      */
     public ProgressReporter(PrintWriter err, boolean terminal, LongSupplier nanoTime) {
+        this(err, terminal, nanoTime, 1);
+    }
+
+    /**
+     * @param err where to write
+     * @param terminal whether err is a terminal (redraw in place) or a log (plain lines)
+     * @param nanoTime the clock, {@code System::nanoTime} outside tests
+     * @param threads worker threads of the run
+     */
+    public ProgressReporter(PrintWriter err, boolean terminal, LongSupplier nanoTime, int threads) {
+        this.reportsBeforeTimeLeft = Math.max(2, REPORTS_PER_THREAD * threads);
         this.err = err;
         this.terminal = terminal;
         this.nanoTime = nanoTime;
@@ -53,7 +69,10 @@ public final class ProgressReporter implements ProgressListener {
     @Override
     public void progress(long done, long total) {
         long now = nanoTime.getAsLong();
-        reports++;
+        if (reports++ == 0) {
+            firstDone = done;
+            firstTime = now;
+        }
         boolean last = done >= total && total > 0;
         if (terminal) {
             if (last || now - lastShown >= REDRAW_NANOS) {
@@ -94,8 +113,10 @@ public final class ProgressReporter implements ProgressListener {
             text.append(String.format(Locale.ROOT, " (%d%%)", done * 100 / total));
         }
         text.append(String.format(Locale.ROOT, ", %.2f models/s", rate));
-        if (reports >= MIN_REPORTS_FOR_TIME_LEFT && total > 0 && done > 0 && done < total) {
-            text.append(", ").append(Durations.describe((total - done) / rate)).append(" left");
+        if (reports - 1 >= reportsBeforeTimeLeft && total > 0 && done > firstDone && done < total
+                && now > firstTime) {
+            double since = (done - firstDone) / ((now - firstTime) * 1e-9);
+            text.append(", ").append(Durations.describe((total - done) / since)).append(" left");
         }
         return text.toString();
     }

@@ -19,11 +19,15 @@ class ProgressReporterTest {
         ProgressReporter reporter = new ProgressReporter(new PrintWriter(text), true, clock::get);
         clock.set(5 * SECOND);
         reporter.progress(25, 200);
+        clock.set(7 * SECOND);
+        reporter.progress(35, 200);
         clock.set(10 * SECOND);
         reporter.progress(50, 200);
         clock.set(10 * SECOND + 1000);
         reporter.progress(51, 200);
+        // 150 models at 25 / 5 s since the first report
         assertThat(text.toString()).isEqualTo("\r[###.....................] 25/200 models (12%), 5.00 models/s"
+                + "\r[####....................] 35/200 models (17%), 5.00 models/s"
                 + "\r[######..................] 50/200 models (25%), 5.00 models/s, 30 s left");
         clock.set(40 * SECOND);
         reporter.progress(200, 200);
@@ -57,7 +61,7 @@ class ProgressReporterTest {
         }
         assertThat(text.toString().split("\n")).containsExactly(
                 // 9998 models at 1/6 per second: 59988 s = 16 h 39.8 min
-                "convgrid: 2/10000 models (0%), 0.17 models/s, 16 h 39 min left",
+                "convgrid: 2/10000 models (0%), 0.17 models/s",
                 "convgrid: 4/10000 models (0%), 0.17 models/s, 16 h 39 min left",
                 "convgrid: 6/10000 models (0%), 0.17 models/s, 16 h 39 min left",
                 "convgrid: 8/10000 models (0%), 0.17 models/s, 16 h 39 min left",
@@ -65,21 +69,21 @@ class ProgressReporterTest {
     }
 
     @Test
-    void theFirstTimeLeftIsNotTakenFromTheFirstChunkAlone() {
-        // the demo grid measured on 2 threads (180 models, 72 s in all): the first two chunks of 24 models come
-        // back together after 20 s, the next (12 models) at 29 s; the run ended at 72 s. Told model by model, the
-        // first line used to say "1/180 ... 57 min 51 s left".
-        ProgressReporter reporter = new ProgressReporter(new PrintWriter(text), false, clock::get);
-        clock.set(20 * SECOND);
-        reporter.progress(24, 180);
-        clock.set(20 * SECOND + SECOND / 100);
-        reporter.progress(48, 180);
-        clock.set(29 * SECOND);
-        reporter.progress(60, 180);
+    void theTimeLeftLeavesOutTheSetUpBeforeTheFirstChunk() {
+        // the demo grid measured on 2 threads under load (180 models, 144 s in all): the first two chunks of 24
+        // models came back together after 71 s, then 60 at 83 s, 84 and 108 at 111 s. Told model by model, the
+        // first line used to say "1/180 ... 57 min 51 s left"; a rate counted from the start said "3 min 13 s left"
+        // at 48 models and "1 min 14 s" at 108, with 33 s to go.
+        ProgressReporter reporter = new ProgressReporter(new PrintWriter(text), false, clock::get, 2);
+        long[][] reports = {{71_000, 24}, {71_010, 48}, {83_000, 60}, {111_000, 84}, {111_010, 108}};
+        for (long[] r : reports) {
+            clock.set(r[0] * SECOND / 1000);
+            reporter.progress(r[1], 180);
+        }
         String[] lines = text.toString().split("\n");
-        assertThat(lines[0]).isEqualTo("convgrid: 24/180 models (13%), 1.20 models/s");
-        // 132 models at 48 / 20.01 s: 55 s (52 s were left)
-        assertThat(lines[1]).isEqualTo("convgrid: 48/180 models (26%), 2.40 models/s, 55 s left");
-        assertThat(lines[2]).isEqualTo("convgrid: 60/180 models (33%), 2.07 models/s, 58 s left");
+        assertThat(lines[0]).isEqualTo("convgrid: 24/180 models (13%), 0.34 models/s");
+        assertThat(lines[3]).isEqualTo("convgrid: 84/180 models (46%), 0.76 models/s");
+        // 72 models at 84 / 40.01 s since the first report: 34 s (33 s were left)
+        assertThat(lines[4]).isEqualTo("convgrid: 108/180 models (60%), 0.97 models/s, 34 s left");
     }
 }
