@@ -255,6 +255,23 @@ class TransitionsCommandTest {
     }
 
     @Test
+    void aTransitionsFileOfTheFirstLayoutIsRefusedByPlotAndRewrittenByTransitions() throws Exception {
+        Path dir = finishedRun("old");
+        byte[] current = Files.readAllBytes(dir.resolve("transitions.csv"));
+        Files.writeString(dir.resolve("transitions.csv"), "z_init,age_gyr,fully_convective_limit_msun,"
+                + "fully_convective_bracket_msun,conv_core_onset_msun,conv_core_bracket_msun,method\n"
+                + "0.004,0,0.35,0.35-0.4,1.25,1.2-1.25,grid\n");
+        CliHarness.Execution plot = harness(new FakeMassLines(Set.of())).execute("plot", "old");
+        assertThat(plot.code()).isEqualTo(2);
+        assertThat(plot.err()).contains("layout before version 2").contains("convgrid transitions RUN_DIR");
+        CliHarness.Execution rewritten = harness(new FakeMassLines(Set.of())).execute("transitions", "old");
+        assertThat(rewritten.code()).isEqualTo(0);
+        assertThat(Files.readAllBytes(dir.resolve("transitions.csv"))).isEqualTo(current);
+        // it prints the table it wrote
+        assertThat(rewritten.out()).contains(new String(current, java.nio.charset.StandardCharsets.UTF_8).strip());
+    }
+
+    @Test
     void helpStatesUnitsAndDefinitions() {
         String help = harness(new FakeMassLines(Set.of())).execute("transitions", "--help").out()
                 .replaceAll("\\s+", " ");

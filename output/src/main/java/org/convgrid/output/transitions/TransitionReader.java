@@ -36,8 +36,9 @@ public final class TransitionReader {
                 .setHeader().setSkipHeaderRecord(true).setAllowMissingColumnNames(true).get()).get()) {
             List<String> header = parser.getHeaderNames();
             if (header.contains(TransitionColumns.VERSION_1_MARKER)) {
-                throw new OutputFormatException("transitions.csv is in the layout before version 2 (column '"
-                        + TransitionColumns.VERSION_1_MARKER + "'); " + REWRITE_HINT);
+                // written by an earlier convgrid, as a run directory of version 1 is: a conflict, not bad data
+                throw OutputFormatException.earlierRunDirectory("transitions.csv is in the layout before version 2 "
+                        + "(column '" + TransitionColumns.VERSION_1_MARKER + "'); " + REWRITE_HINT);
             }
             for (String column : TransitionColumns.HEADER) {
                 if (!header.contains(column)) {
