@@ -24,9 +24,9 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
 public final class TransitionAgeTrendRenderer {
 
     /** Sideways nudge between metallicities, as a share of the age range (linear axis). */
-    private static final double DODGE_SHARE = 0.006;
+    private static final double DODGE_SHARE = 0.02;
     /** Sideways nudge between metallicities, dex (logarithmic axis). */
-    private static final double DODGE_DEX = 0.012;
+    private static final double DODGE_DEX = 0.05;
     /** Grid (unrefined) markers are paler than refined ones, so the two read apart. */
     private static final double GRID_MARKER_TINT = 0.5;
     /** Room either side of the age range, as a share of it (linear axis). */
@@ -62,6 +62,7 @@ public final class TransitionAgeTrendRenderer {
         chart.getStyler().setYAxisDecimalPattern("0.0#");
         int nZ = data.metallicities().size();
         boolean labelled = nZ <= TrendDrawing.MAX_LABELLED_FAMILIES;
+        List<TrendDrawing.Label> labels = new java.util.ArrayList<>();
         for (TransitionAgeTrendData.Series s : data.series()) {
             int zIndex = data.metallicities().indexOf(s.zInit());
             double offset = zIndex - (nZ - 1) / 2.0;
@@ -80,9 +81,9 @@ public final class TransitionAgeTrendRenderer {
             line.setMarker(fc ? SeriesMarkers.CIRCLE : SeriesMarkers.DIAMOND);
             line.setMarkerColor(refined ? color : ChartStyle.tint(color, GRID_MARKER_TINT));
             if (labelled) {
-                TrendDrawing.labels(chart, s.points().stream().map(p -> new TrendDrawing.Label(
-                        x(p.ageGyr(), offset, log, range), p.massMsun(),
-                        SliceLabels.massToAccuracy(p.massMsun(), p.bracket(), p.toleranceMsun()))).toList(), color);
+                s.points().forEach(p -> labels.add(new TrendDrawing.Label(x(p.ageGyr(), offset, log, range),
+                        p.massMsun(), SliceLabels.massToAccuracy(p.massMsun(), p.bracket(), p.toleranceMsun()),
+                        color)));
             }
         }
         for (double z : data.metallicities()) {
@@ -102,6 +103,9 @@ public final class TransitionAgeTrendRenderer {
             middles.setMarker(SeriesMarkers.SQUARE);
             middles.setMarkerColor(ChartStyle.tint(color, WINDOW_MARKER_TINT));
         }
+        TrendDrawing.labels(chart, labels, data.windows().stream().map(w -> new TrendDrawing.Window(
+                x(w.ageGyr(), data.metallicities().indexOf(w.zInit()) - (nZ - 1) / 2.0, log, range), w.masses()))
+                .toList());
         return chart;
     }
 

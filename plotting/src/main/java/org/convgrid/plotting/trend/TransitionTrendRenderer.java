@@ -22,7 +22,7 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
 public final class TransitionTrendRenderer {
 
     /** Sideways nudge between ages, dex of Z. */
-    private static final double DODGE_DEX = 0.016;
+    private static final double DODGE_DEX = 0.03;
     /** Room either side of a linear Z range (one holding Z = 0), as a share of it. */
     private static final double LINEAR_PAD_SHARE = 0.06;
     /** Grid (unrefined) markers are paler than refined ones, so the two read apart. */
@@ -66,6 +66,7 @@ public final class TransitionTrendRenderer {
             LogAxis.applyLinearX(chart, -LINEAR_PAD_SHARE * span, (1 + LINEAR_PAD_SHARE) * span,
                     data.metallicities());
         }
+        List<TrendDrawing.Label> labels = new java.util.ArrayList<>();
         for (TransitionTrendData.Series s : data.series()) {
             int ageIndex = ages.indexOf(s.ageGyr());
             boolean fc = s.kind() == TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT;
@@ -85,10 +86,9 @@ public final class TransitionTrendRenderer {
             line.setMarkerColor(refined ? ChartStyle.seriesColor(ageIndex) : ChartStyle.tint(
                     ChartStyle.seriesColor(ageIndex), GRID_MARKER_TINT));
             if (ages.size() <= TrendDrawing.MAX_LABELLED_FAMILIES) {
-                TrendDrawing.labels(chart, s.points().stream().map(p -> new TrendDrawing.Label(
-                        nudged(p.zInit(), offset, linear, zMax), p.massMsun(),
-                        SliceLabels.massToAccuracy(p.massMsun(), p.bracket(), p.toleranceMsun()))).toList(),
-                        ChartStyle.seriesColor(ageIndex));
+                s.points().forEach(p -> labels.add(new TrendDrawing.Label(nudged(p.zInit(), offset, linear, zMax),
+                        p.massMsun(), SliceLabels.massToAccuracy(p.massMsun(), p.bracket(), p.toleranceMsun()),
+                        ChartStyle.seriesColor(ageIndex))));
             }
         }
         List<Double> windowAges = data.windows().stream().map(TransientWindow::ageGyr).distinct().sorted().toList();
@@ -106,6 +106,12 @@ public final class TransitionTrendRenderer {
             middles.setMarker(SeriesMarkers.SQUARE);
             middles.setMarkerColor(ChartStyle.tint(color, WINDOW_MARKER_TINT));
         }
+        TrendDrawing.labels(chart, labels, data.windows().stream().map(w -> {
+            int ageIndex = ages.contains(w.ageGyr()) ? ages.indexOf(w.ageGyr())
+                    : ages.size() + windowAges.indexOf(w.ageGyr());
+            return new TrendDrawing.Window(nudged(w.zInit(), DODGE_DEX * (ageIndex - (ages.size() - 1) / 2.0), linear,
+                    zMax), w.masses());
+        }).toList());
         return chart;
     }
 }

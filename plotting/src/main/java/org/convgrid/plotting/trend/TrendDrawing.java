@@ -29,8 +29,9 @@ final class TrendDrawing {
      * @param x position along the x axis, data units
      * @param mass the mass, solar masses (the label's height)
      * @param text the label
+     * @param color the colour of its series
      */
-    record Label(double x, double mass, String text) {
+    record Label(double x, double mass, String text, Color color) {
     }
 
     /**
@@ -45,21 +46,47 @@ final class TrendDrawing {
     private TrendDrawing() {
     }
 
-    /** Writes each label right of its marker, in the series colour, unless it would run off the plot. */
-    static void labels(StyledChart chart, List<Label> labels, Color color) {
+    /**
+     * Writes every label of the chart beside its marker: right of it, else above-right, below-right or left of it,
+     * whichever first overlaps no marker (of a value or of a window's middle) and no label already written (labels of several series gather where transitions of
+     * neighbouring metallicities or ages meet); a label with no free place, or that would leave the plot, is left
+     * out (the marker and the table still give the value).
+     */
+    static void labels(StyledChart chart, List<Label> labels, List<Window> windows) {
         chart.addOverlay((g, c) -> {
             g.setFont(ChartStyle.ANNOTATION_FONT);
-            g.setColor(color.darker());
             FontMetrics fm = g.getFontMetrics();
+            double left = c.getScreenXFromChart(c.getStyler().getXAxisMin());
             double right = c.getScreenXFromChart(c.getStyler().getXAxisMax());
+            double height = fm.getAscent();
+            // the markers themselves (values and window middles) are taken before any label
+            List<Rectangle2D> taken = new java.util.ArrayList<>();
+            labels.forEach(l -> taken.add(markerBox(c, l.x(), l.mass())));
+            windows.forEach(w -> taken.add(markerBox(c, w.x(), 0.5 * (w.masses().lo() + w.masses().hi()))));
             for (Label l : labels) {
-                double x = c.getScreenXFromChart(l.x()) + LABEL_GAP_PX;
-                double y = c.getScreenYFromChart(l.mass()) + fm.getAscent() / 2.0 - 2;
-                if (x + fm.stringWidth(l.text()) <= right) {
-                    g.drawString(l.text(), (float) x, (float) y);
+                double x = c.getScreenXFromChart(l.x());
+                double y = c.getScreenYFromChart(l.mass());
+                double width = fm.stringWidth(l.text());
+                double[][] places = {{x + LABEL_GAP_PX, y - height / 2}, {x + LABEL_GAP_PX / 2, y - height - LABEL_GAP_PX},
+                    {x + LABEL_GAP_PX / 2, y + LABEL_GAP_PX}, {x - LABEL_GAP_PX - width, y - height / 2}};
+                for (double[] place : places) {
+                    Rectangle2D box = new Rectangle2D.Double(place[0], place[1], width, height);
+                    if (box.getMinX() >= left && box.getMaxX() <= right
+                            && taken.stream().noneMatch(box::intersects)) {
+                        taken.add(box);
+                        g.setColor(l.color().darker());
+                        g.drawString(l.text(), (float) place[0], (float) (place[1] + height - 2));
+                        break;
+                    }
                 }
             }
         });
+    }
+
+    private static Rectangle2D markerBox(StyledChart c, double x, double mass) {
+        double half = ChartStyle.MARKER_SIZE / 2.0;
+        return new Rectangle2D.Double(c.getScreenXFromChart(x) - half, c.getScreenYFromChart(mass) - half, 2 * half,
+                2 * half);
     }
 
     /** Draws the windows as faint boxes with a dashed outline: a range of masses with small cores, not a bracket. */
