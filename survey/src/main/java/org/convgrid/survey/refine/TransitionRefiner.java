@@ -6,6 +6,7 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.function.DoubleFunction;
 import java.util.function.Predicate;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
@@ -186,9 +187,14 @@ public final class TransitionRefiner {
         List<Refinement> done = new ArrayList<>(task.size());
         for (Search s : task) {
             Predicate<ModelOutcome.Solved> lowSide = o -> inState(s.kind(), OutcomeRows.toRow(o)) == s.lowState();
-            done.add(bisection.refine(line, mass -> new ModelRequest("pending", mass, t.initialMetals(),
-                    t.initialHelium(), t.age(), t.physics()), s.bracket().lo() * Constants.M_SUN,
-                    s.bracket().hi() * Constants.M_SUN, lowSide));
+            DoubleFunction<ModelRequest> at = mass -> new ModelRequest("pending", mass, t.initialMetals(),
+                    t.initialHelium(), t.age(), t.physics());
+            double lo = s.bracket().lo() * Constants.M_SUN;
+            double hi = s.bracket().hi() * Constants.M_SUN;
+            // zero-age lines seed each model from the recomputed ends; a model at an age is evolved on its own, so
+            // recomputing the ends the catalogue already holds would only double the cost of a short search
+            done.add(t.age().isZeroAge() ? bisection.refine(line, at, lo, hi, lowSide)
+                    : bisection.refineWithinKnownEnds(line, at, lo, hi, lowSide));
         }
         return done;
     }
