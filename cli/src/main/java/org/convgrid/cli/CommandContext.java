@@ -7,12 +7,12 @@ import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import org.convgrid.engine.refine.MassLineFactory;
-import org.convgrid.engine.refine.ZamsMassLines;
 import org.convgrid.plotting.style.ChartFiles;
 import org.convgrid.survey.ChunkSolverFactory;
 import org.convgrid.survey.MapsAndReport;
 import org.convgrid.survey.ProductionSolvers;
 import org.convgrid.survey.RunFinisher;
+import org.convgrid.survey.refine.SolverMassLines;
 
 /**
  * What the commands take from the world, gathered so tests can replace it: the solver seams (grid runs, refinement), the finishers run at
@@ -39,7 +39,7 @@ public record CommandContext(ChunkSolverFactory solvers, List<RunFinisher> finis
     /** A context whose refinement uses the production solver. */
     public CommandContext(ChunkSolverFactory solvers, List<RunFinisher> finishers, Map<String, String> environment,
                           Path workingDirectory, boolean terminal) {
-        this(solvers, finishers, environment, workingDirectory, terminal, new ZamsMassLines());
+        this(solvers, finishers, environment, workingDirectory, terminal, SolverMassLines.production());
     }
 
     /** The real process: production solver, maps and report at the end, the process environment and directory. */

@@ -15,10 +15,7 @@ import org.convgrid.survey.refine.TransitionTables;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.output.transitions.TransitionRow;
-import org.convgrid.survey.RunDirectory;
 import org.convgrid.survey.parallel.ParallelWork;
-import org.convgrid.survey.refine.TransitionRefiner;
-import org.convgrid.survey.refine.TransitionTables;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -26,22 +23,25 @@ import picocli.CommandLine.ParentCommand;
 
 /** {@code convgrid transitions RUN_DIR [--refine]}: the transition masses of a run, refined on request. */
 @Command(name = "transitions", mixinStandardHelpOptions = true,
-        description = {"Rewrite RUN_DIR/transitions.csv from its catalogue: per (Z, age, physics) slice the highest "
-                + "fully convective mass and the lowest mass with a convective core, each with the two masses that "
-                + "bracket it (method grid).",
+        description = {"Rewrite RUN_DIR/transitions.csv from its catalogue and print it: per (Z, age, physics) slice "
+                + "the highest fully convective mass (fully_convective_limit_msun), the mass above which every model "
+                + "keeps a convective core (conv_core_onset_msun), each with the two models that bracket it "
+                + "(*_bracket_lo_msun, *_bracket_hi_msun, solar masses), and the window of small central cores just "
+                + "above the fully convective limit (transient_core_lo_msun, transient_core_hi_msun; empty when none).",
             "A convective core is a central convective zone whose top lies above the run's core threshold, a mass "
                 + "fraction m/M (" + TransitionFinder.DEFAULT_CORE_MASS_FRACTION_THRESHOLD + ", the one its "
                 + "structure classes use; in manifest.yaml); "
-                + "the convective criterion is the one the run used. When the structure is not monotonic in mass "
-                + "every crossing is listed (*_crossings columns) and notes says so; the limit is the highest "
-                + "crossing out of fully convective, the onset the lowest crossing into a core.",
-            "With --refine, each bracket of a zero-age slice wider than --tolerance is narrowed by bisection with "
-                + "new zero-age models, each seeded by homology from its converged neighbours, until it is narrower "
-                + "than the tolerance (method refined); the crossings the table reports are refined (the limit, the "
-                + "lowest core onset and the lasting core's onset), the others only with --all-crossings; when new models reveal crossings between earlier masses, further "
-                + "rounds refine them (at most " + TransitionTables.MAX_ROUNDS + "). The new models are appended to catalogue.ecsv with ids "
-                + "p<i>-z<i>-r<n>-a<i> (r: refined, n counts per slice); slices at ages above 0 keep their grid "
-                + "brackets. A refined run cannot be resumed with 'run --resume'. Needs a finished, merged run.",
+                + "the convective criterion is the one the run used. When the structure changes back and forth with "
+                + "mass, notes says how often.",
+            "With --refine, each reported bracket wider than --tolerance is narrowed by bisection with new models at "
+                + "every age: each new mass is the slice's own grid request (its composition, physics and age, "
+                + "evolved as a grid model would be; zero-age models seeded by homology from their converged "
+                + "neighbours), until the bracket is narrower than the tolerance (method refined, tolerance_msun); "
+                + "the fully convective limit, the lasting core's onset and both edges of the transient window are "
+                + "refined, other crossings only with --all-crossings; when new models reveal crossings between "
+                + "earlier masses, further rounds refine them (at most " + TransitionTables.MAX_ROUNDS + "). The "
+                + "new models are appended to catalogue.ecsv with ids p<i>-z<i>-r<n>-a<i> (r: refined, n counts per "
+                + "slice). A refined run cannot be resumed with 'run --resume'. Needs a finished, merged run.",
             "Exit codes: 0 done, 3 some new models failed (in the catalogue with their status; notes says where "
                 + "a bisection stopped), 2 bad usage or not a run directory, 1 I/O or software failure."})
 final class TransitionsCommand implements Callable<Integer> {
@@ -55,7 +55,7 @@ final class TransitionsCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "RUN_DIR", description = "A run directory (holds catalogue.ecsv).")
     Path runDirectory;
 
-    @Option(names = "--refine", description = "Narrow the brackets by bisection with new zero-age models.")
+    @Option(names = "--refine", description = "Narrow the brackets by bisection with new models at each slice's age.")
     boolean refine;
 
     @Option(names = "--tolerance", paramLabel = "MSUN", description = "With --refine: stop when a bracket is "

@@ -51,9 +51,14 @@ final class CliHarness {
         this.context = context;
     }
 
-    /** A harness whose relative paths start at {@code workDir}, with the given solver and no Slurm variables. */
+    /**
+     * A harness whose relative paths start at {@code workDir}, with the given solver, refinement lines of the same
+     * made-up structure ({@link FakeMassLines}) and no Slurm variables.
+     */
     static CliHarness in(Path workDir, FakeChunkSolver solver) {
-        return new CliHarness(new CommandContext(grid -> solver, List.of(), Map.of(), workDir, false));
+        // a fake world refines on fake lines too: the production lines would evolve real stars beside fake ones
+        return new CliHarness(new CommandContext(grid -> solver, List.of(), Map.of(), workDir, false,
+                new FakeMassLines(java.util.Set.of())));
     }
 
     CliHarness with(CommandContext newContext) {

@@ -69,7 +69,7 @@ class RunCommandTest {
         var transitions = TransitionReader.read(new StringReader(Files.readString(dir.resolve("transitions.csv"))));
         assertThat(transitions).hasSize(4);
         assertThat(transitions.get(0).fullyConvective().massMsun()).isEqualTo(0.35);
-        assertThat(transitions.get(0).convCore().massMsun()).isEqualTo(1.25);
+        assertThat(transitions.get(0).convCoreOnset().massMsun()).isEqualTo(1.25);
     }
 
     @Test

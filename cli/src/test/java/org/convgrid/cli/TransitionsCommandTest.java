@@ -59,7 +59,7 @@ class TransitionsCommandTest {
     }
 
     @Test
-    void refinementNarrowsZeroAgeBracketsBelowTheToleranceInsideTheGridBrackets() throws Exception {
+    void refinementNarrowsTheBracketsOfEveryAgeBelowTheToleranceInsideTheGridBrackets() throws Exception {
         Path dir = finishedRun("refined");
         List<TransitionRow> grid = transitions(dir);
         byte[] gridCatalogue = Files.readAllBytes(dir.resolve("catalogue.ecsv"));
@@ -71,33 +71,33 @@ class TransitionsCommandTest {
         for (int i = 0; i < refined.size(); i++) {
             TransitionRow r = refined.get(i);
             TransitionRow g = grid.get(i);
-            if (r.slice().ageGyr() != 0.0) {
-                assertThat(r).usingRecursiveComparison().ignoringFields("notes").isEqualTo(g);
-                assertThat(r.notes()).contains("not refined: only zero-age slices can be refined");
-                continue;
-            }
+            assertThat(r.slice()).isEqualTo(g.slice());
             assertThat(r.method()).isEqualTo(TransitionMethod.REFINED);
+            assertThat(r.toleranceMsun()).isEqualTo(0.002);
+            assertThat(g.toleranceMsun()).isNaN();
             assertThat(r.fullyConvective().bracket().hi() - r.fullyConvective().bracket().lo()).isLessThan(0.002);
             assertThat(r.fullyConvective().massMsun()).isLessThan(FC_EDGE).isGreaterThan(FC_EDGE - 0.002)
                     .isBetween(g.fullyConvective().bracket().lo(), g.fullyConvective().bracket().hi());
-            assertThat(r.convCore().bracket().hi() - r.convCore().bracket().lo()).isLessThan(0.002);
-            assertThat(r.convCore().massMsun()).isGreaterThanOrEqualTo(CORE_EDGE).isLessThan(CORE_EDGE + 0.002)
-                    .isBetween(g.convCore().bracket().lo(), g.convCore().bracket().hi());
+            assertThat(r.convCoreOnset().bracket().hi() - r.convCoreOnset().bracket().lo()).isLessThan(0.002);
+            assertThat(r.convCoreOnset().massMsun()).isGreaterThanOrEqualTo(CORE_EDGE).isLessThan(CORE_EDGE + 0.002)
+                    .isBetween(g.convCoreOnset().bracket().lo(), g.convCoreOnset().bracket().hi());
         }
         // the grid rows stay as they were; the new rows follow them, slice by slice in increasing mass
         byte[] now = Files.readAllBytes(dir.resolve("catalogue.ecsv"));
         assertThat(java.util.Arrays.copyOf(now, gridCatalogue.length)).isEqualTo(gridCatalogue);
         List<CatalogueRow> added = CatalogueReader.read(dir.resolve("catalogue.ecsv")).stream()
                 .filter(r -> RefinedModelIds.isRefined(r.modelId())).toList();
-        // 0.05 Msun -> below 0.002 Msun takes 5 halvings, per transition and metallicity
-        assertThat(added).hasSize(2 * 2 * 5);
+        // 0.05 Msun -> below 0.002 Msun takes 5 halvings, per transition, metallicity and age
+        assertThat(added).hasSize(2 * 2 * 2 * 5);
         assertThat(added.get(0).modelId()).isEqualTo("p0-z00-r000-a00");
         assertThat(added.get(9).modelId()).isEqualTo("p0-z00-r009-a00");
-        assertThat(added.get(10).modelId()).isEqualTo("p0-z01-r000-a00");
+        assertThat(added.get(10).modelId()).isEqualTo("p0-z00-r000-a01");
+        assertThat(added.get(10).ageGyr()).isEqualTo(2.0);
+        assertThat(added.get(20).modelId()).isEqualTo("p0-z01-r000-a00");
         assertThat(added.subList(0, 10)).extracting(CatalogueRow::massMsun).isSorted();
         assertThat(RunManifestReader.read(Files.readString(dir.resolve("manifest.yaml"))).total())
                 .isEqualTo(CliHarness.GRID_MODELS + added.size());
-        assertThat(done.out()).contains("2 refined; 4 bisection(s), 20 new model(s)");
+        assertThat(done.out()).contains("4 refined; 8 bisection(s), 40 new model(s)");
     }
 
     @Test
@@ -119,10 +119,12 @@ class TransitionsCommandTest {
         List<TransitionRow> finer = transitions(dir);
         assertThat(finer.get(0).fullyConvective().massMsun())
                 .isCloseTo(first.get(0).fullyConvective().massMsun(), within(0.002));
-        assertThat(finer.get(0).convCore().massMsun()).isCloseTo(first.get(0).convCore().massMsun(), within(0.002));
+        assertThat(finer.get(0).convCoreOnset().massMsun())
+                .isCloseTo(first.get(0).convCoreOnset().massMsun(), within(0.002));
+        assertThat(finer.get(0).toleranceMsun()).isEqualTo(0.0005);
         assertThat(CatalogueReader.read(dir.resolve("catalogue.ecsv")).stream().map(CatalogueRow::modelId))
                 .contains("p0-z00-r010-a00").doesNotHaveDuplicates();
-        // a plain recompute of a refined catalogue gives the refined answer again
+        // a plain recompute of a refined catalogue gives the refined answer again, with the tolerance it stated
         assertThat(harness(lines).execute("transitions", "twice").code()).isEqualTo(0);
         assertThat(transitions(dir)).usingRecursiveFieldByFieldElementComparatorIgnoringFields("notes")
                 .isEqualTo(finer);
@@ -152,7 +154,7 @@ class TransitionsCommandTest {
         TransitionRow z0 = transitions(dir).get(0);
         assertThat(z0.fullyConvective().bracket().lo()).isEqualTo(0.35);
         assertThat(z0.fullyConvective().bracket().hi()).isEqualTo(0.4);
-        assertThat(z0.fullyConvective().skippedInBracket()).isEqualTo(1);
+        assertThat(z0.notes()).contains("fully convective bracket widened past 1 unusable model(s)");
         assertThat(z0.notes()).contains("fully convective refinement stopped at a bracket of 0.05 Msun: the model "
                 + "at 0.375 Msun failed (fake line gave up)");
         assertThat(z0.method()).isEqualTo(TransitionMethod.REFINED);
@@ -167,7 +169,7 @@ class TransitionsCommandTest {
     }
 
     @Test
-    void everyCrossingOfAFlickeringSliceCanBeRefined() throws Exception {
+    void theTransientWindowAndTheLastingOnsetAreRefinedByDefault() throws Exception {
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
         FlickeringFake fake = new FlickeringFake();
         CliHarness h = CliHarness.in(work, FakeChunkSolver.fast());
@@ -175,37 +177,27 @@ class TransitionsCommandTest {
         assertThat(h.execute("run", "--no-refine", grid.toString(), "--out", "flicker", "--quiet").code()).isEqualTo(0);
         Path dir = work.resolve("flicker");
         TransitionRow before = transitions(dir).get(0);
-        assertThat(before.convCore().crossings()).hasSize(3);
-        assertThat(before.convCore().bracket().hi()).isEqualTo(0.45);
-        // a copy refined at the reported crossings (the lowest core onset and the lasting core's onset) says
-        // which crossing stays wide: the upper end of the window
-        CliHarness.Execution copy = h.execute("run", "--no-refine", grid.toString(), "--out", "reported", "--quiet");
-        assertThat(copy.code()).isEqualTo(0);
-        assertThat(h.execute("transitions", "reported", "--refine").code()).isEqualTo(0);
-        TransitionRow reported = transitions(work.resolve("reported")).get(0);
-        assertThat(reported.notes()).contains("convective core: 1 other "
-                + "crossing(s) wider than the tolerance, not refined (--all-crossings refines them)");
-        Span lasting = reported.lastingCoreOnset().bracket();
-        assertThat(lasting.hi() - lasting.lo()).isLessThan(0.002);
-        assertThat(FlickeringFake.CORE_EDGE).isGreaterThan(lasting.lo()).isLessThanOrEqualTo(lasting.hi());
-
-        assertThat(h.execute("transitions", "flicker", "--refine", "--all-crossings").code()).isEqualTo(0);
+        // the grid sees one cored model in the window (0.45) and the lasting core from 1.25
+        assertThat(before.transientCore()).isEqualTo(new Span(0.45, 0.45));
+        assertThat(before.convCoreOnset().massMsun()).isEqualTo(1.25);
+        assertThat(h.execute("transitions", "flicker", "--refine").code()).isEqualTo(0);
         TransitionRow z0 = transitions(dir).get(0);
-        List<Double> edges = List.of(FlickeringFake.WINDOW_LO, FlickeringFake.WINDOW_HI, FlickeringFake.CORE_EDGE);
-        assertThat(z0.convCore().crossings()).hasSize(3);
-        for (int i = 0; i < 3; i++) {
-            double lo = z0.convCore().crossings().get(i).lo();
-            double hi = z0.convCore().crossings().get(i).hi();
-            assertThat(hi - lo).isLessThan(0.002);
-            assertThat(edges.get(i)).isGreaterThan(lo).isLessThanOrEqualTo(hi);
-        }
-        assertThat(z0.convCore().massMsun()).isCloseTo(FlickeringFake.WINDOW_LO, within(0.002));
-        assertThat(z0.notes()).contains("convective core changes 3 times with mass")
-                .doesNotContain("other crossing(s)");
+        assertThat(z0.transientCore().lo()).isGreaterThanOrEqualTo(FlickeringFake.WINDOW_LO)
+                .isLessThan(FlickeringFake.WINDOW_LO + 0.002);
+        assertThat(z0.transientCore().hi()).isLessThan(FlickeringFake.WINDOW_HI)
+                .isGreaterThanOrEqualTo(FlickeringFake.WINDOW_HI - 0.002);
+        assertThat(z0.convCoreOnset().massMsun()).isGreaterThanOrEqualTo(FlickeringFake.CORE_EDGE)
+                .isLessThan(FlickeringFake.CORE_EDGE + 0.002);
+        assertThat(z0.notes()).doesNotContain("other crossing(s)").doesNotContain("changes");
+        // every crossing asked for: these are all the crossings there are, so the same table
+        assertThat(h.execute("run", "--no-refine", grid.toString(), "--out", "every", "--quiet").code()).isEqualTo(0);
+        assertThat(h.execute("transitions", "every", "--refine", "--all-crossings").code()).isEqualTo(0);
+        assertThat(Files.readString(work.resolve("every").resolve("transitions.csv")))
+                .isEqualTo(Files.readString(dir.resolve("transitions.csv")));
     }
 
     @Test
-    void aCrossingTheGridMissedIsReportedAndSaidToLieOutsideTheGridBracket() throws Exception {
+    void aWindowTheGridMissedIsFoundRefinedAndSaidToLieBetweenGridMasses() throws Exception {
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
         // a core window between grid masses, found by the bisection of the fully convective limit 0.35-0.4
         FlickeringFake fake = new FlickeringFake(0.355, 0.36, 0.37);
@@ -213,22 +205,17 @@ class TransitionsCommandTest {
         h = h.with(h.context().withSolvers(g -> fake).withLines(fake));
         assertThat(h.execute("run", "--no-refine", grid.toString(), "--out", "missed", "--quiet").code()).isEqualTo(0);
         Path dir = work.resolve("missed");
-        assertThat(transitions(dir).get(0).convCore().bracket().lo()).isEqualTo(1.2);
+        assertThat(transitions(dir).get(0).transientCore()).isNull();
         assertThat(h.execute("transitions", "missed", "--refine").code()).isEqualTo(0);
         TransitionRow z0 = transitions(dir).get(0);
-        assertThat(z0.convCore().massMsun()).isBetween(0.36, 0.37);
-        assertThat(z0.notes()).contains("convective core onset lies outside the grid bracket 1.2-1.25 Msun");
+        // a second round refines both edges of the window the first round's models revealed
+        assertThat(z0.transientCore().lo()).isCloseTo(0.36, within(0.002));
+        assertThat(z0.transientCore().hi()).isCloseTo(0.37, within(0.002));
+        assertThat(z0.convCoreOnset().bracket().lo()).isGreaterThan(1.2);
+        assertThat(z0.notes()).contains("lies between grid masses");
         // the remark depends on the catalogue alone: a plain recompute repeats it
         assertThat(h.execute("transitions", "missed").code()).isEqualTo(0);
-        assertThat(transitions(dir).get(0).notes()).contains("lies outside the grid bracket 1.2-1.25 Msun");
-        // with every crossing asked for, a second round refines the crossings the first round revealed
-        assertThat(h.execute("run", "--no-refine", grid.toString(), "--out", "every", "--quiet").code()).isEqualTo(0);
-        assertThat(h.execute("transitions", "every", "--refine", "--all-crossings").code()).isEqualTo(0);
-        TransitionRow every = transitions(work.resolve("every")).get(0);
-        assertThat(every.convCore().crossings()).hasSize(3)
-                .allSatisfy(c -> assertThat(c.hi() - c.lo()).isLessThan(0.002));
-        assertThat(every.convCore().crossings().get(0).hi()).isCloseTo(0.36, within(0.002));
-        assertThat(every.convCore().crossings().get(1).hi()).isCloseTo(0.37, within(0.002));
+        assertThat(transitions(dir).get(0).notes()).contains("lies between grid masses");
     }
 
     @Test
@@ -245,7 +232,7 @@ class TransitionsCommandTest {
         assertThat(Files.readAllBytes(dir.resolve("catalogue.ecsv"))).isEqualTo(catalogue);
         CliHarness.Execution merged = harness(new FakeMassLines(Set.of())).execute("merge", "done", "--out", "m");
         assertThat(merged.code()).isEqualTo(2);
-        assertThat(merged.err()).contains("20 model(s) added by 'convgrid transitions --refine'");
+        assertThat(merged.err()).contains("40 model(s) added by 'convgrid transitions --refine'");
     }
 
     @Test
@@ -268,11 +255,28 @@ class TransitionsCommandTest {
     }
 
     @Test
+    void aTransitionsFileOfTheFirstLayoutIsRefusedByPlotAndRewrittenByTransitions() throws Exception {
+        Path dir = finishedRun("old");
+        byte[] current = Files.readAllBytes(dir.resolve("transitions.csv"));
+        Files.writeString(dir.resolve("transitions.csv"), "z_init,age_gyr,fully_convective_limit_msun,"
+                + "fully_convective_bracket_msun,conv_core_onset_msun,conv_core_bracket_msun,method\n"
+                + "0.004,0,0.35,0.35-0.4,1.25,1.2-1.25,grid\n");
+        CliHarness.Execution plot = harness(new FakeMassLines(Set.of())).execute("plot", "old");
+        assertThat(plot.code()).isEqualTo(2);
+        assertThat(plot.err()).contains("layout before version 2").contains("convgrid transitions RUN_DIR");
+        CliHarness.Execution rewritten = harness(new FakeMassLines(Set.of())).execute("transitions", "old");
+        assertThat(rewritten.code()).isEqualTo(0);
+        assertThat(Files.readAllBytes(dir.resolve("transitions.csv"))).isEqualTo(current);
+        // it prints the table it wrote
+        assertThat(rewritten.out()).contains(new String(current, java.nio.charset.StandardCharsets.UTF_8).strip());
+    }
+
+    @Test
     void helpStatesUnitsAndDefinitions() {
         String help = harness(new FakeMassLines(Set.of())).execute("transitions", "--help").out()
                 .replaceAll("\\s+", " ");
         assertThat(help).contains("--tolerance=MSUN", "solar masses", "0.002", "core threshold", "0.001",
-                "mass fraction m/M", "criterion is the one the run used", "every crossing is listed",
-                "p<i>-z<i>-r<n>-a<i>", "zero-age", "refine every crossing");
+                "mass fraction m/M", "criterion is the one the run used", "notes says how often",
+                "p<i>-z<i>-r<n>-a<i>", "at every age", "transient_core_lo_msun", "refine every crossing");
     }
 }

@@ -135,7 +135,8 @@ public final class RunMaps {
         for (PhysicsKey p : physics) {
             if (run.transitions().stream().anyMatch(t -> PhysicsKey.of(t.slice()).equals(p))) {
                 entries.add(new MapEntry("transitions-vs-z_" + p.fileStem() + ".png", MapEntry.TRENDS,
-                        "Transition masses against Z, bars span the bracketing grid masses, " + p.describe() + ".",
+                        "Transition masses against Z: shaded boxes span the two models that bracket each value, "
+                                + "dashed boxes the windows of small transient cores, " + p.describe() + ".",
                         () -> TransitionTrendRenderer.render(TransitionTrend.build(p, run.transitions()))));
             }
         }
@@ -144,7 +145,8 @@ public final class RunMaps {
                     .mapToDouble(t -> t.slice().ageGyr()).distinct().count();
             if (ages >= 2) {
                 entries.add(new MapEntry("transitions-vs-age_" + p.fileStem() + ".png", MapEntry.TRENDS_AGE,
-                        "Transition masses against age, one line per Z, bars span the bracketing grid masses, "
+                        "Transition masses against age, one line per Z and method: shaded boxes span the two models "
+                                + "that bracket each value, dashed boxes the windows of small transient cores, "
                                 + p.describe() + ".",
                         () -> TransitionAgeTrendRenderer.render(TransitionAgeTrend.build(p, run.transitions()))));
             }

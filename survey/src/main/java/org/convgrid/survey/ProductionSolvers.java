@@ -21,13 +21,23 @@ public final class ProductionSolvers {
         return new ChunkSolverFactory() {
             @Override
             public ChunkSolver solverFor(GridSpec grid) {
-                return new GridRequests(TrackSink.NONE, MainSequenceEvolver.Settings.DEFAULT);
+                return solver(TrackSink.NONE);
             }
 
             @Override
             public ChunkSolver solverFor(GridSpec grid, TrackSink tracks) {
-                return new GridRequests(tracks, MainSequenceEvolver.Settings.DEFAULT);
+                return solver(tracks);
             }
         };
+    }
+
+    /**
+     * The production chunk solver, whatever the grid: the one place grid runs and the refinement of transitions at
+     * ages above 0 take it from, so a new model is computed as a grid model would be.
+     *
+     * @param tracks receives the track of every star evolved beyond age 0
+     */
+    public static ChunkSolver solver(TrackSink tracks) {
+        return new GridRequests(tracks, MainSequenceEvolver.Settings.DEFAULT);
     }
 }

@@ -14,8 +14,9 @@ import org.convgrid.engine.request.ModelRequest;
  * has converged neighbours on both sides; a {@link MassLine} that seeds from its nearest converged models (the
  * production {@link ZamsMassLines}) then seeds each midpoint from the nearer bracket end. The loop runs until the
  * bracket is narrower than the tolerance, a model fails (the bracket stays as it was before that model; no guess is
- * made past it), no representable mass is left between the ends, or {@link #STEP_BUDGET} midpoints were spent.
- * Deterministic: the answer depends only on the line's answers. Thread-safe (stateless once built).
+ * made past it), no representable mass is left between the ends, or {@link #STEP_BUDGET} midpoints were spent. A line
+ * whose models do not seed one another (each model evolved from scratch to an age) gains nothing from the recomputed
+ * ends: {@link #refineWithinKnownEnds} takes the caller's word for them and computes midpoints only. Deterministic: the answer depends only on the line's answers. Thread-safe (stateless once built).
  */
 public final class MassBisection {
 
@@ -52,12 +53,26 @@ public final class MassBisection {
      */
     public Refinement refine(MassLine line, DoubleFunction<ModelRequest> requestAt, double lowMass, double highMass,
                              Predicate<ModelOutcome.Solved> lowSide) {
+        return refine(line, requestAt, lowMass, highMass, lowSide, true);
+    }
+
+    /**
+     * As {@link #refine}, but the ends are taken as the caller says (their models already computed, on the low and
+     * the high side): the line is asked for midpoints only. For lines whose models do not seed one another.
+     */
+    public Refinement refineWithinKnownEnds(MassLine line, DoubleFunction<ModelRequest> requestAt, double lowMass,
+                                            double highMass, Predicate<ModelOutcome.Solved> lowSide) {
+        return refine(line, requestAt, lowMass, highMass, lowSide, false);
+    }
+
+    private Refinement refine(MassLine line, DoubleFunction<ModelRequest> requestAt, double lowMass, double highMass,
+                              Predicate<ModelOutcome.Solved> lowSide, boolean recomputeEnds) {
         if (!(lowMass > 0.0 && highMass > lowMass && Double.isFinite(highMass))) {
             throw new IllegalArgumentException("a bracket needs 0 < low < high (g), got " + lowMass + " and "
                     + highMass);
         }
         List<ModelOutcome> added = new ArrayList<>();
-        for (double end : new double[] {lowMass, highMass}) {
+        for (double end : recomputeEnds ? new double[] {lowMass, highMass} : new double[0]) {
             ModelOutcome o = line.solve(requestAt.apply(end));
             if (!(o instanceof ModelOutcome.Solved solved)) {
                 return new Refinement(lowMass, highMass, added, BisectionStop.END_NOT_USABLE, end, o.statusDetail());

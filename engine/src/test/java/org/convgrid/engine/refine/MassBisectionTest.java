@@ -79,6 +79,19 @@ class MassBisectionTest {
     }
 
     @Test
+    void withKnownEndsOnlyMidpointsAreAskedForAndTheAnswerIsTheSame() {
+        StepLine recomputing = new StepLine(EDGE, Set.of());
+        Refinement full = refine(recomputing, 0.002 * MSUN, 0.30 * MSUN, 0.40 * MSUN);
+        StepLine trusting = new StepLine(EDGE, Set.of());
+        Refinement known = new MassBisection(0.002 * MSUN, DoubleUnaryOperator.identity())
+                .refineWithinKnownEnds(trusting, MassBisectionTest::request, 0.30 * MSUN, 0.40 * MSUN, FULLY_CONVECTIVE);
+        assertThat(known.lowMass()).isEqualTo(full.lowMass());
+        assertThat(known.highMass()).isEqualTo(full.highMass());
+        assertThat(trusting.asked).doesNotContain(0.30 * MSUN, 0.40 * MSUN)
+                .hasSize(recomputing.asked.size() - 2);
+    }
+
+    @Test
     void refiningTheRefinedBracketAgainAddsNothing() {
         double tolerance = 0.002 * MSUN;
         Refinement first = refine(new StepLine(EDGE, Set.of()), tolerance, 0.30 * MSUN, 0.40 * MSUN);

@@ -1,54 +1,47 @@
 package org.convgrid.output.transitions;
 
 import java.util.List;
-import java.util.stream.Stream;
 
-/** The column names of {@code transitions.csv}: the README's fixed columns ("Transition masses"), then our extensions. */
+/**
+ * The column names of {@code transitions.csv}, version 2: the slice (composition, age, physics), the fully
+ * convective limit and the lasting convective-core onset each with the two models that bracket it, the window of
+ * transient small cores just above the fully convective limit, then notes, method and tolerance. Every mass is a
+ * real column of its own (no packed {@code lo-hi} text); an empty cell means "not applicable".
+ */
 public final class TransitionColumns {
 
     public static final String Z_INIT = "z_init";
+    public static final String Y_INIT = "y_init";
     public static final String AGE_GYR = "age_gyr";
-    public static final String FULLY_CONVECTIVE_LIMIT_MSUN = "fully_convective_limit_msun";
-    public static final String FULLY_CONVECTIVE_BRACKET_MSUN = "fully_convective_bracket_msun";
-    public static final String CONV_CORE_ONSET_MSUN = "conv_core_onset_msun";
-    public static final String CONV_CORE_BRACKET_MSUN = "conv_core_bracket_msun";
-    public static final String METHOD = "method";
-
     public static final String MIXING_LENGTH = "mixing_length";
     public static final String OVERSHOOT_HP = "overshoot_hp";
     public static final String CRITERION = "criterion";
     public static final String OPACITY_SCALE = "opacity_scale";
-    /** Number of state changes between neighbouring usable masses (1 for a clean transition). */
-    public static final String FULLY_CONVECTIVE_CROSSINGS = "fully_convective_crossings";
-    /** Every such change as {@code lo-hi}, joined by {@code ;}. */
-    public static final String FULLY_CONVECTIVE_CROSSINGS_MSUN = "fully_convective_crossings_msun";
-    /** Unusable models skipped inside the reported bracket. */
-    public static final String FULLY_CONVECTIVE_BRACKET_SKIPPED = "fully_convective_bracket_skipped";
-    public static final String CONV_CORE_CROSSINGS = "conv_core_crossings";
-    public static final String CONV_CORE_CROSSINGS_MSUN = "conv_core_crossings_msun";
-    public static final String CONV_CORE_BRACKET_SKIPPED = "conv_core_bracket_skipped";
-    /**
-     * The lowest mass above which every usable model has a convective core (the upper end of the last crossing
-     * into a core); differs from {@link #CONV_CORE_ONSET_MSUN} when small cores come and go at lower mass, as
-     * just above the fully convective limit; empty when the highest masses have no core.
-     */
-    public static final String LASTING_CORE_ONSET_MSUN = "lasting_core_onset_msun";
-    /** The two masses that bracket it, {@code lo-hi}. */
-    public static final String LASTING_CORE_BRACKET_MSUN = "lasting_core_bracket_msun";
+    /** Highest mass that is still fully convective. */
+    public static final String FULLY_CONVECTIVE_LIMIT_MSUN = "fully_convective_limit_msun";
+    public static final String FULLY_CONVECTIVE_BRACKET_LO_MSUN = "fully_convective_bracket_lo_msun";
+    public static final String FULLY_CONVECTIVE_BRACKET_HI_MSUN = "fully_convective_bracket_hi_msun";
+    /** The mass above which every model keeps a convective core. */
+    public static final String CONV_CORE_ONSET_MSUN = "conv_core_onset_msun";
+    public static final String CONV_CORE_BRACKET_LO_MSUN = "conv_core_bracket_lo_msun";
+    public static final String CONV_CORE_BRACKET_HI_MSUN = "conv_core_bracket_hi_msun";
+    /** Lowest and highest mass of the window of small central cores just above the fully convective limit. */
+    public static final String TRANSIENT_CORE_LO_MSUN = "transient_core_lo_msun";
+    public static final String TRANSIENT_CORE_HI_MSUN = "transient_core_hi_msun";
     public static final String NOTES = "notes";
+    /** {@code grid} or {@code refined}. */
+    public static final String METHOD = "method";
+    /** The bracket width a refinement narrowed to; empty for {@code grid}. */
+    public static final String TOLERANCE_MSUN = "tolerance_msun";
 
-    /** The columns the README fixes, in order. */
-    public static final List<String> FIXED = List.of(Z_INIT, AGE_GYR, FULLY_CONVECTIVE_LIMIT_MSUN,
-            FULLY_CONVECTIVE_BRACKET_MSUN, CONV_CORE_ONSET_MSUN, CONV_CORE_BRACKET_MSUN, METHOD);
+    /** The header convgrid writes, in order. */
+    public static final List<String> HEADER = List.of(Z_INIT, Y_INIT, AGE_GYR, MIXING_LENGTH, OVERSHOOT_HP, CRITERION,
+            OPACITY_SCALE, FULLY_CONVECTIVE_LIMIT_MSUN, FULLY_CONVECTIVE_BRACKET_LO_MSUN,
+            FULLY_CONVECTIVE_BRACKET_HI_MSUN, CONV_CORE_ONSET_MSUN, CONV_CORE_BRACKET_LO_MSUN,
+            CONV_CORE_BRACKET_HI_MSUN, TRANSIENT_CORE_LO_MSUN, TRANSIENT_CORE_HI_MSUN, NOTES, METHOD, TOLERANCE_MSUN);
 
-    /** Our columns after them, in order. */
-    public static final List<String> EXTENSIONS = List.of(MIXING_LENGTH, OVERSHOOT_HP, CRITERION, OPACITY_SCALE,
-            FULLY_CONVECTIVE_CROSSINGS, FULLY_CONVECTIVE_CROSSINGS_MSUN, FULLY_CONVECTIVE_BRACKET_SKIPPED,
-            CONV_CORE_CROSSINGS, CONV_CORE_CROSSINGS_MSUN, CONV_CORE_BRACKET_SKIPPED, LASTING_CORE_ONSET_MSUN,
-            LASTING_CORE_BRACKET_MSUN, NOTES);
-
-    /** The header convgrid writes. */
-    public static final List<String> HEADER = Stream.concat(FIXED.stream(), EXTENSIONS.stream()).toList();
+    /** A column only the first layout (before version 2) had: its presence marks such a file. */
+    public static final String VERSION_1_MARKER = "fully_convective_bracket_msun";
 
     private TransitionColumns() {
     }

@@ -12,18 +12,21 @@ import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueRow;
 
 /**
- * Reads the two convective transition masses off a catalogue, per {@link Slice} (method {@code grid}).
+ * Reads the transition masses off a catalogue, per {@link Slice}.
  *
  * <p>Only usable models count: status ok with a structure class. Within a slice they are taken in increasing mass,
- * and every change of state between neighbours is a crossing (all are listed, so flickering shows). The fully
- * convective limit is the lower end of the highest crossing from fully convective to not: the highest mass that is
- * still fully convective. The convective-core onset is the upper end of the lowest crossing from no core to a core:
- * the lowest mass with a convective core. A model has a convective core when it is not fully convective and
- * {@code core_cz_mass_frac} exceeds {@link #coreMassFractionThreshold()}. Unusable models between two usable
- * neighbours are skipped, widening the bracket; the estimate counts them. Slices come out in order of first
- * appearance, which for a catalogue in grid order is physics, then Z, then age. The method is {@code refined} when an
- * end of either bracket is a model that a refinement added ({@link RefinedModelIds}), {@code grid} otherwise, so
- * recomputing the table from a refined catalogue gives the refined answer again.
+ * and every change of state between neighbours is a crossing. The fully convective limit is the lower end of the
+ * highest crossing out of full convection: the highest mass that is still fully convective. A model has a
+ * convective core when it is not fully convective and {@code core_cz_mass_frac} exceeds
+ * {@link #coreMassFractionThreshold()}. The convective-core onset is the upper end of the last crossing into a core
+ * when the highest usable masses have one: the mass above which every model keeps a core. The transient window is
+ * the lowest run of cored models that coreless ones follow (the small central cores just above the fully
+ * convective limit): its lowest and highest masses. Unusable models between two usable neighbours are skipped,
+ * widening the bracket; the estimate counts them. Slices come out in order of first appearance, which for a
+ * catalogue in grid order is physics, then Z, then age. The method is {@code refined} when an end of a reported
+ * bracket (or of a crossing that bounds the transient window) is a model that a refinement added
+ * ({@link RefinedModelIds}), {@code grid} otherwise, so recomputing the table from a refined catalogue gives the
+ * refined answer again; the tolerance is the caller's to add ({@link TransitionRow#withTolerance}).
  *
  * @param coreMassFractionThreshold smallest m/M of a convective core that counts as a core, in [0, 1)
  */
@@ -71,66 +74,130 @@ public record TransitionFinder(double coreMassFractionThreshold) {
     private TransitionRow find(Slice slice, List<CatalogueRow> members) {
         List<CatalogueRow> byMass = new ArrayList<>(members);
         byMass.sort(Comparator.comparingDouble(CatalogueRow::massMsun));
+        double yInit = byMass.get(0).yInit();
         List<CatalogueRow> usable = byMass.stream().filter(r -> r.isOk() && r.structureClass() != null).toList();
-        List<String> notes = new ArrayList<>();
         if (usable.isEmpty()) {
-            return new TransitionRow(slice, TransitionEstimate.NONE, TransitionEstimate.NONE, TransitionMethod.GRID,
-                    "no usable model in this slice");
+            return new TransitionRow(slice, yInit, TransitionEstimate.NONE, TransitionEstimate.NONE, null,
+                    TransitionMethod.GRID, Double.NaN, "no usable model in this slice");
         }
-        TransitionEstimate fc = estimate(byMass, usable, TransitionFinder::isFullyConvective, true);
-        TransitionEstimate core = estimate(byMass, usable, r -> !hasConvectiveCore(r), false);
-        describe("fully convective", fc, usable, TransitionFinder::isFullyConvective, notes);
-        describe("convective core", core, usable, this::hasConvectiveCore, notes);
-        TransitionMethod method = endsAtRefinedModel(fc, usable) || endsAtRefinedModel(core, usable)
+        List<String> notes = new ArrayList<>();
+        List<Span> fcCrossings = crossings(usable, TransitionFinder::isFullyConvective);
+        TransitionEstimate fc = estimate(byMass, fcCrossings, lastFrom(fcCrossings, usable,
+                TransitionFinder::isFullyConvective, true), true);
+        List<Span> coreCrossings = crossings(usable, this::hasConvectiveCore);
+        boolean coredAtTop = hasConvectiveCore(usable.get(usable.size() - 1));
+        TransitionEstimate core = coredAtTop && !coreCrossings.isEmpty()
+                ? estimate(byMass, coreCrossings, coreCrossings.size() - 1, false)
+                : new TransitionEstimate(Double.NaN, null, coreCrossings, 0);
+        Span window = transientWindow(usable, coreCrossings);
+        describeFullyConvective(fc, usable, notes);
+        describeCore(core, window, coredAtTop, usable, notes);
+        TransitionRow row = new TransitionRow(slice, yInit, fc, core, window, TransitionMethod.GRID, Double.NaN, "");
+        List<Span> reported = new ArrayList<>(row.transientCoreCrossings());
+        if (fc.found()) {
+            reported.add(fc.bracket());
+        }
+        if (core.found()) {
+            reported.add(core.bracket());
+        }
+        TransitionMethod method = reported.stream().anyMatch(span -> endsAtRefinedModel(span, usable))
                 ? TransitionMethod.REFINED : TransitionMethod.GRID;
-        return new TransitionRow(slice, fc, core, method, String.join("; ", notes));
+        return new TransitionRow(slice, yInit, fc, core, window, method, Double.NaN, String.join("; ", notes));
     }
 
-    /** Whether a bracket end of the estimate is a model a refinement added. */
-    private static boolean endsAtRefinedModel(TransitionEstimate estimate, List<CatalogueRow> usable) {
-        return estimate.found() && usable.stream().anyMatch(r -> RefinedModelIds.isRefined(r.modelId())
-                && (r.massMsun() == estimate.bracket().lo() || r.massMsun() == estimate.bracket().hi()));
+    /** Every change of {@code state} between neighbouring usable models, in increasing mass. */
+    private static List<Span> crossings(List<CatalogueRow> usable, Predicate<CatalogueRow> state) {
+        List<Span> crossings = new ArrayList<>();
+        for (int i = 0; i + 1 < usable.size(); i++) {
+            if (state.test(usable.get(i)) != state.test(usable.get(i + 1))) {
+                crossings.add(new Span(usable.get(i).massMsun(), usable.get(i + 1).massMsun()));
+            }
+        }
+        return crossings;
     }
 
     /**
-     * Crossings of {@code lowSide} (the state below the transition) between usable neighbours; the transition is
-     * the highest (takeHighest, reported at its lower end) or lowest (reported at its upper end) downward crossing.
+     * Index of the crossing that leaves {@code state} (the highest one when {@code highest}), -1 when none: a
+     * crossing leaves the state when its lower model is in it.
      */
-    private static TransitionEstimate estimate(List<CatalogueRow> all, List<CatalogueRow> usable,
-                                               Predicate<CatalogueRow> lowSide, boolean takeHighest) {
-        List<Span> crossings = new ArrayList<>();
+    private static int lastFrom(List<Span> crossings, List<CatalogueRow> usable, Predicate<CatalogueRow> state,
+                                boolean highest) {
         int chosen = -1;
-        for (int i = 0; i + 1 < usable.size(); i++) {
-            boolean below = lowSide.test(usable.get(i));
-            if (below != lowSide.test(usable.get(i + 1))) {
-                crossings.add(new Span(usable.get(i).massMsun(), usable.get(i + 1).massMsun()));
-                if (below && (takeHighest || chosen < 0)) {
-                    chosen = i;
-                }
+        for (int i = 0; i < crossings.size(); i++) {
+            double lo = crossings.get(i).lo();
+            boolean leaves = usable.stream().anyMatch(r -> r.massMsun() == lo && state.test(r));
+            if (leaves && (highest || chosen < 0)) {
+                chosen = i;
             }
         }
-        if (chosen < 0) {
-            return new TransitionEstimate(Double.NaN, null, crossings, 0);
-        }
-        double lo = usable.get(chosen).massMsun();
-        double hi = usable.get(chosen + 1).massMsun();
-        int skipped = (int) all.stream().filter(r -> r.massMsun() > lo && r.massMsun() < hi).count();
-        return new TransitionEstimate(takeHighest ? lo : hi, new Span(lo, hi), crossings, skipped);
+        return chosen;
     }
 
-    private static void describe(String what, TransitionEstimate estimate, List<CatalogueRow> usable,
-                                 Predicate<CatalogueRow> state, List<String> notes) {
-        if (!estimate.found()) {
-            long count = usable.stream().filter(state).count();
-            notes.add(count == usable.size() ? what + " at every usable mass"
-                    : count == 0 ? "no " + what + " at any usable mass"
-                    : what + " only in an unexpected mass order");
+    /**
+     * The estimate at crossing {@code index} (none when negative): reported at its lower end ({@code atLowEnd}, the
+     * last mass still in the state) or its upper end (the first mass past it).
+     */
+    private static TransitionEstimate estimate(List<CatalogueRow> all, List<Span> crossings, int index,
+                                               boolean atLowEnd) {
+        if (index < 0) {
+            return new TransitionEstimate(Double.NaN, null, crossings, 0);
         }
-        if (estimate.crossings().size() > 1) {
-            notes.add(what + " changes " + estimate.crossings().size() + " times with mass");
+        Span c = crossings.get(index);
+        int skipped = (int) all.stream().filter(r -> r.massMsun() > c.lo() && r.massMsun() < c.hi()).count();
+        return new TransitionEstimate(atLowEnd ? c.lo() : c.hi(), c, crossings, skipped);
+    }
+
+    /**
+     * The lowest run of cored models entered from below and left again above: from the upper end of its crossing
+     * into a core to the lower end of its crossing out; null when there is none.
+     */
+    private Span transientWindow(List<CatalogueRow> usable, List<Span> coreCrossings) {
+        for (int i = 0; i + 1 < coreCrossings.size(); i++) {
+            double entry = coreCrossings.get(i).hi();
+            boolean into = usable.stream().anyMatch(r -> r.massMsun() == entry && hasConvectiveCore(r));
+            if (into) {
+                return new Span(entry, coreCrossings.get(i + 1).lo());
+            }
         }
-        if (estimate.skippedInBracket() > 0) {
-            notes.add(what + " bracket widened past " + estimate.skippedInBracket() + " unusable model(s)");
+        return null;
+    }
+
+    private static boolean endsAtRefinedModel(Span span, List<CatalogueRow> usable) {
+        return usable.stream().anyMatch(r -> RefinedModelIds.isRefined(r.modelId())
+                && (r.massMsun() == span.lo() || r.massMsun() == span.hi()));
+    }
+
+    private static void describeFullyConvective(TransitionEstimate fc, List<CatalogueRow> usable, List<String> notes) {
+        if (!fc.found()) {
+            long count = usable.stream().filter(TransitionFinder::isFullyConvective).count();
+            notes.add(count == usable.size() ? "fully convective at every usable mass"
+                    : count == 0 ? "no fully convective model at any usable mass"
+                    : "fully convective only in an unexpected mass order");
+        }
+        if (fc.crossings().size() > 1) {
+            notes.add("fully convective changes " + fc.crossings().size() + " times with mass");
+        }
+        if (fc.skippedInBracket() > 0) {
+            notes.add("fully convective bracket widened past " + fc.skippedInBracket() + " unusable model(s)");
+        }
+    }
+
+    private void describeCore(TransitionEstimate core, Span window, boolean coredAtTop, List<CatalogueRow> usable,
+                              List<String> notes) {
+        long cored = usable.stream().filter(this::hasConvectiveCore).count();
+        if (!core.found()) {
+            notes.add(cored == usable.size() ? "convective core at every usable mass"
+                    : cored == 0 ? "no convective core at any usable mass"
+                    : "no lasting convective core: the highest usable masses have none");
+        }
+        // a clean slice crosses once (no window) or three times (window, then the lasting core)
+        int expected = (window == null ? 0 : 2) + (coredAtTop ? 1 : 0);
+        if (core.crossings().size() > expected) {
+            notes.add("convective core changes " + core.crossings().size() + " times with mass; the lowest window "
+                    + "of cores is the transient one");
+        }
+        if (core.skippedInBracket() > 0) {
+            notes.add("convective core bracket widened past " + core.skippedInBracket() + " unusable model(s)");
         }
     }
 }

@@ -14,10 +14,14 @@ import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueWriter;
 
 /**
- * Reads {@code transitions.csv} by column name. The {@link TransitionColumns#FIXED} columns are required; missing
- * extensions read as unknown (NaN, null, no crossings list, nothing skipped).
+ * Reads {@code transitions.csv} (version 2) by column name; every column of {@link TransitionColumns#HEADER} is
+ * required. A file in the first layout (one {@code lo-hi} bracket column per transition) is refused with a message
+ * that says how to rewrite it. What the file does not keep reads as unknown: no crossings, nothing skipped.
  */
 public final class TransitionReader {
+
+    /** What to do with a transitions file of the first layout. */
+    public static final String REWRITE_HINT = "rewrite it from the catalogue with 'convgrid transitions RUN_DIR'";
 
     private TransitionReader() {
     }
@@ -25,13 +29,19 @@ public final class TransitionReader {
     /**
      * Every row.
      *
-     * @throws OutputFormatException when a fixed column is missing or a cell cannot be read
+     * @throws OutputFormatException when the file is of the first layout, a column is missing or a cell cannot be read
      */
     public static List<TransitionRow> read(Reader in) throws IOException {
         try (CSVParser parser = CSVParser.builder().setReader(in).setFormat(CatalogueWriter.FORMAT.builder()
                 .setHeader().setSkipHeaderRecord(true).setAllowMissingColumnNames(true).get()).get()) {
-            for (String column : TransitionColumns.FIXED) {
-                if (!parser.getHeaderNames().contains(column)) {
+            List<String> header = parser.getHeaderNames();
+            if (header.contains(TransitionColumns.VERSION_1_MARKER)) {
+                // written by an earlier convgrid, as a run directory of version 1 is: a conflict, not bad data
+                throw OutputFormatException.earlierRunDirectory("transitions.csv is in the layout before version 2 "
+                        + "(column '" + TransitionColumns.VERSION_1_MARKER + "'); " + REWRITE_HINT);
+            }
+            for (String column : TransitionColumns.HEADER) {
+                if (!header.contains(column)) {
                     throw new OutputFormatException("transitions file misses the column '" + column + "'");
                 }
             }
@@ -49,33 +59,38 @@ public final class TransitionReader {
     }
 
     private static TransitionRow row(CSVRecord r) {
-        String criterion = text(r, TransitionColumns.CRITERION);
+        String criterion = r.get(TransitionColumns.CRITERION);
         Slice slice = new Slice(number(r, TransitionColumns.Z_INIT), number(r, TransitionColumns.AGE_GYR),
                 number(r, TransitionColumns.MIXING_LENGTH), number(r, TransitionColumns.OVERSHOOT_HP),
                 criterion.isEmpty() ? null : StabilityCriterion.valueOf(criterion.toUpperCase(Locale.ROOT)),
                 number(r, TransitionColumns.OPACITY_SCALE));
         TransitionEstimate fc = estimate(r, TransitionColumns.FULLY_CONVECTIVE_LIMIT_MSUN,
-                TransitionColumns.FULLY_CONVECTIVE_BRACKET_MSUN, TransitionColumns.FULLY_CONVECTIVE_CROSSINGS_MSUN,
-                TransitionColumns.FULLY_CONVECTIVE_BRACKET_SKIPPED);
+                TransitionColumns.FULLY_CONVECTIVE_BRACKET_LO_MSUN, TransitionColumns.FULLY_CONVECTIVE_BRACKET_HI_MSUN);
         TransitionEstimate core = estimate(r, TransitionColumns.CONV_CORE_ONSET_MSUN,
-                TransitionColumns.CONV_CORE_BRACKET_MSUN, TransitionColumns.CONV_CORE_CROSSINGS_MSUN,
-                TransitionColumns.CONV_CORE_BRACKET_SKIPPED);
-        return new TransitionRow(slice, fc, core, TransitionMethod.fromLabel(text(r, TransitionColumns.METHOD)),
-                text(r, TransitionColumns.NOTES));
+                TransitionColumns.CONV_CORE_BRACKET_LO_MSUN, TransitionColumns.CONV_CORE_BRACKET_HI_MSUN);
+        Span window = span(r, TransitionColumns.TRANSIENT_CORE_LO_MSUN, TransitionColumns.TRANSIENT_CORE_HI_MSUN);
+        return new TransitionRow(slice, number(r, TransitionColumns.Y_INIT), fc, core, window,
+                TransitionMethod.fromLabel(r.get(TransitionColumns.METHOD)), number(r, TransitionColumns.TOLERANCE_MSUN),
+                r.get(TransitionColumns.NOTES));
     }
 
-    private static TransitionEstimate estimate(CSVRecord r, String mass, String bracket, String crossings,
-                                               String skipped) {
-        String skippedText = text(r, skipped);
-        return new TransitionEstimate(number(r, mass), Span.parseOptional(text(r, bracket)),
-                Span.parseList(text(r, crossings)), skippedText.isEmpty() ? 0 : Integer.parseInt(skippedText));
+    private static TransitionEstimate estimate(CSVRecord r, String mass, String lo, String hi) {
+        Span bracket = span(r, lo, hi);
+        return bracket == null ? TransitionEstimate.NONE
+                : new TransitionEstimate(number(r, mass), bracket, List.of(), 0);
     }
 
-    private static String text(CSVRecord r, String column) {
-        return r.isSet(column) ? r.get(column) : "";
+    /** Two cells that are both empty (null) or both masses. */
+    private static Span span(CSVRecord r, String lo, String hi) {
+        double a = number(r, lo);
+        double b = number(r, hi);
+        if (Double.isNaN(a) != Double.isNaN(b)) {
+            throw new IllegalArgumentException("'" + lo + "' and '" + hi + "' must both be empty or both be masses");
+        }
+        return Double.isNaN(a) ? null : new Span(a, b);
     }
 
     private static double number(CSVRecord r, String column) {
-        return CsvNumbers.parse(text(r, column));
+        return CsvNumbers.parse(r.get(column));
     }
 }

@@ -8,34 +8,49 @@ import org.convgrid.output.Span;
  * One row of {@code transitions.csv}.
  *
  * @param slice the metallicity, age and physics
+ * @param yInit initial helium mass fraction of the slice
  * @param fullyConvective the highest mass that is still fully convective
- * @param convCore the lowest mass with a convective core
+ * @param convCoreOnset the mass above which every model keeps a convective core (the upper end of the last crossing
+ *     into a core); its crossings are every change of the core state with mass
+ * @param transientCore the lowest and highest mass of the window of small central cores just above the fully
+ *     convective limit (cored models with coreless ones above them), null when there is none
  * @param method grid or refined
- * @param notes short remarks (no transition in the grid, widened brackets, flickering), empty when none
+ * @param toleranceMsun the width the refinement narrowed the brackets to, solar masses; NaN for {@code grid}
+ * @param notes short remarks (no transition, widened brackets, flickering, stopped bisections), empty when none
  */
-public record TransitionRow(Slice slice, TransitionEstimate fullyConvective, TransitionEstimate convCore,
-                            TransitionMethod method, String notes) {
+public record TransitionRow(Slice slice, double yInit, TransitionEstimate fullyConvective,
+                            TransitionEstimate convCoreOnset, Span transientCore, TransitionMethod method,
+                            double toleranceMsun, String notes) {
 
     public TransitionRow {
         Objects.requireNonNull(slice, "slice");
         Objects.requireNonNull(fullyConvective, "fullyConvective");
-        Objects.requireNonNull(convCore, "convCore");
+        Objects.requireNonNull(convCoreOnset, "convCoreOnset");
         Objects.requireNonNull(method, "method");
         notes = notes == null ? "" : notes;
     }
 
     /**
-     * The onset of the lasting convective core: the upper end of the last crossing into a core. The lowest
-     * masses of a slice have no core (fully convective stars do not count as having one), so the crossings
-     * alternate starting with "into a core": an odd count means the highest masses have a core. Derived from the
-     * crossings, so it needs no column of its own to be read back.
+     * The two crossings that bound the transient window (into the window's cores, out of them), in mass order;
+     * empty when there is no window or the crossings are unknown (a row read back from a file).
      */
-    public TransitionEstimate lastingCoreOnset() {
-        List<Span> crossings = convCore.crossings();
-        if (crossings.size() % 2 == 0) {
-            return TransitionEstimate.NONE;
+    public List<Span> transientCoreCrossings() {
+        if (transientCore == null) {
+            return List.of();
         }
-        Span last = crossings.get(crossings.size() - 1);
-        return new TransitionEstimate(last.hi(), last, List.of(last), 0);
+        return convCoreOnset.crossings().stream()
+                .filter(c -> c.hi() == transientCore.lo() || c.lo() == transientCore.hi()).toList();
+    }
+
+    /** The same row with other notes. */
+    public TransitionRow withNotes(String other) {
+        return new TransitionRow(slice, yInit, fullyConvective, convCoreOnset, transientCore, method, toleranceMsun,
+                other);
+    }
+
+    /** The same row with a tolerance, kept only when the row is refined (a grid row has none). */
+    public TransitionRow withTolerance(double tolerance) {
+        return new TransitionRow(slice, yInit, fullyConvective, convCoreOnset, transientCore, method,
+                method == TransitionMethod.REFINED ? tolerance : Double.NaN, notes);
     }
 }

@@ -9,7 +9,10 @@ import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueWriter;
 
-/** Writes {@code transitions.csv}: the {@link TransitionColumns} header, then one row per slice. */
+/**
+ * Writes {@code transitions.csv}: the {@link TransitionColumns#HEADER}, then one row per slice. Masses are reals
+ * ({@link CsvNumbers#format}), an empty cell where a transition is not bracketed or there is no transient window.
+ */
 public final class TransitionWriter {
 
     private TransitionWriter() {
@@ -28,30 +31,28 @@ public final class TransitionWriter {
     /** The cells of a row, in {@link TransitionColumns#HEADER} order. */
     public static List<String> cells(TransitionRow row) {
         Slice s = row.slice();
-        TransitionEstimate fc = row.fullyConvective();
-        TransitionEstimate core = row.convCore();
         List<String> cells = new ArrayList<>(TransitionColumns.HEADER.size());
         cells.add(CsvNumbers.format(s.zInit()));
+        cells.add(CsvNumbers.format(row.yInit()));
         cells.add(CsvNumbers.format(s.ageGyr()));
-        cells.add(CsvNumbers.format(fc.massMsun()));
-        cells.add(Span.format(fc.bracket()));
-        cells.add(CsvNumbers.format(core.massMsun()));
-        cells.add(Span.format(core.bracket()));
-        cells.add(row.method().label());
         cells.add(CsvNumbers.format(s.mixingLength()));
         cells.add(CsvNumbers.format(s.overshootHp()));
         cells.add(s.criterion() == null ? "" : s.criterion().name().toLowerCase(Locale.ROOT));
         cells.add(CsvNumbers.format(s.opacityScale()));
-        cells.add(Integer.toString(fc.crossings().size()));
-        cells.add(Span.join(fc.crossings()));
-        cells.add(Integer.toString(fc.skippedInBracket()));
-        cells.add(Integer.toString(core.crossings().size()));
-        cells.add(Span.join(core.crossings()));
-        cells.add(Integer.toString(core.skippedInBracket()));
-        TransitionEstimate lasting = row.lastingCoreOnset();
-        cells.add(CsvNumbers.format(lasting.massMsun()));
-        cells.add(Span.format(lasting.bracket()));
+        estimate(row.fullyConvective(), cells);
+        estimate(row.convCoreOnset(), cells);
+        Span window = row.transientCore();
+        cells.add(window == null ? "" : CsvNumbers.format(window.lo()));
+        cells.add(window == null ? "" : CsvNumbers.format(window.hi()));
         cells.add(row.notes());
+        cells.add(row.method().label());
+        cells.add(CsvNumbers.format(row.toleranceMsun()));
         return cells;
+    }
+
+    private static void estimate(TransitionEstimate e, List<String> cells) {
+        cells.add(CsvNumbers.format(e.massMsun()));
+        cells.add(e.found() ? CsvNumbers.format(e.bracket().lo()) : "");
+        cells.add(e.found() ? CsvNumbers.format(e.bracket().hi()) : "");
     }
 }

@@ -1,6 +1,7 @@
 package org.convgrid.output.transitions;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.convgrid.output.transitions.TransitionFinderTest.failedAt;
 import static org.convgrid.output.transitions.TransitionFinderTest.ok;
 
@@ -8,33 +9,75 @@ import java.io.IOException;
 import java.io.StringReader;
 import java.util.List;
 import org.convgrid.engine.convection.StructureClass;
+import org.convgrid.output.OutputFormatException;
 import org.junit.jupiter.api.Test;
 
 class TransitionFileTest {
 
-    @Test
-    void writesConventionsColumnsFirstAndReadsBack() throws IOException {
-        List<TransitionRow> rows = TransitionFinder.withDefaults().find(List.of(
-                ok(0.3, StructureClass.FULLY_CONVECTIVE, 1), failedAt(0.35), ok(0.4, StructureClass.CONV_ENVELOPE, 0),
-                ok(1.2, StructureClass.CONV_CORE_AND_ENVELOPE, 0.04)));
+    private static final String HEADER = "z_init,y_init,age_gyr,mixing_length,overshoot_hp,criterion,opacity_scale,"
+            + "fully_convective_limit_msun,fully_convective_bracket_lo_msun,fully_convective_bracket_hi_msun,"
+            + "conv_core_onset_msun,conv_core_bracket_lo_msun,conv_core_bracket_hi_msun,transient_core_lo_msun,"
+            + "transient_core_hi_msun,notes,method,tolerance_msun";
+
+    private static String written(List<TransitionRow> rows) throws IOException {
         StringBuilder out = new StringBuilder();
         TransitionWriter.write(rows, out);
-        String[] lines = out.toString().split("\n");
-        assertThat(lines[0]).startsWith("z_init,age_gyr,fully_convective_limit_msun,fully_convective_bracket_msun,"
-                + "conv_core_onset_msun,conv_core_bracket_msun,method,");
-        assertThat(lines[1]).isEqualTo("0.02,0.0,0.3,0.3-0.4,1.2,0.4-1.2,grid,1.8,0.0,schwarzschild,1.0,1,0.3-0.4,1,1,"
-                + "0.4-1.2,0,1.2,0.4-1.2,fully convective bracket widened past 1 unusable model(s)");
-        assertThat(TransitionReader.read(new StringReader(out.toString()))).isEqualTo(rows);
+        return out.toString();
     }
 
     @Test
-    void readsAFileWithOnlyTheFixedColumns() throws IOException {
-        String text = "z_init,age_gyr,fully_convective_limit_msun,fully_convective_bracket_msun,conv_core_onset_msun,"
+    void writesTheVersionTwoColumnsAsRealsWithEmptyCellsAndReadsBack() throws IOException {
+        List<TransitionRow> rows = TransitionFinder.withDefaults().find(List.of(
+                ok(0.3, StructureClass.FULLY_CONVECTIVE, 1), failedAt(0.35), ok(0.4, StructureClass.CONV_ENVELOPE, 0),
+                ok(2.0, StructureClass.CONV_CORE_AND_ENVELOPE, 0.04)));
+        String text = written(rows);
+        String[] lines = text.split("\r?\n");
+        assertThat(lines[0]).isEqualTo(HEADER);
+        // no transient window: its cells are empty; a grid row has no tolerance; 2 Msun is written as 2.0
+        assertThat(lines[1]).isEqualTo("0.02,0.27,0.0,1.8,0.0,schwarzschild,1.0,0.3,0.3,0.4,2.0,0.4,2.0,,,"
+                + "fully convective bracket widened past 1 unusable model(s),grid,");
+        List<TransitionRow> back = TransitionReader.read(new StringReader(text));
+        assertThat(back).hasSize(1);
+        assertThat(back.get(0).fullyConvective().bracket()).isEqualTo(rows.get(0).fullyConvective().bracket());
+        assertThat(back.get(0).transientCore()).isNull();
+        assertThat(written(back)).isEqualTo(text);
+    }
+
+    @Test
+    void aRefinedRowWithAWindowKeepsItsToleranceAndWindow() throws IOException {
+        TransitionRow row = TransitionFinder.withDefaults().find(List.of(ok(0.36, StructureClass.FULLY_CONVECTIVE, 1),
+                ok(0.37, StructureClass.CONV_CORE_AND_ENVELOPE, 0.01), ok(0.45, StructureClass.CONV_ENVELOPE, 0),
+                ok(1.1, StructureClass.CONV_ENVELOPE, 0), ok(1.2, StructureClass.CONV_CORE_AND_ENVELOPE, 0.03)))
+                .get(0);
+        TransitionRow refined = new TransitionRow(row.slice(), row.yInit(), row.fullyConvective(), row.convCoreOnset(),
+                row.transientCore(), TransitionMethod.REFINED, Double.NaN, "").withTolerance(0.002);
+        String text = written(List.of(refined));
+        assertThat(text.split("\r?\n")[1]).isEqualTo("0.02,0.27,0.0,1.8,0.0,schwarzschild,1.0,0.36,0.36,0.37,1.2,1.1,"
+                + "1.2,0.37,0.37,,refined,0.002");
+        TransitionRow back = TransitionReader.read(new StringReader(text)).get(0);
+        assertThat(back.toleranceMsun()).isEqualTo(0.002);
+        assertThat(back.method()).isEqualTo(TransitionMethod.REFINED);
+        assertThat(back.transientCore()).isEqualTo(refined.transientCore());
+        // the tolerance belongs to refined rows only
+        assertThat(row.withTolerance(0.002).toleranceMsun()).isNaN();
+    }
+
+    @Test
+    void aFileOfTheFirstLayoutIsRefusedWithAWayOut() {
+        String v1 = "z_init,age_gyr,fully_convective_limit_msun,fully_convective_bracket_msun,conv_core_onset_msun,"
                 + "conv_core_bracket_msun,method\n0.014,1,0.35,0.34-0.36,,,refined\n";
-        TransitionRow row = TransitionReader.read(new StringReader(text)).get(0);
-        assertThat(row.method()).isEqualTo(TransitionMethod.REFINED);
-        assertThat(row.fullyConvective().massMsun()).isEqualTo(0.35);
-        assertThat(row.convCore().found()).isFalse();
-        assertThat(row.slice().criterion()).isNull();
+        assertThatThrownBy(() -> TransitionReader.read(new StringReader(v1)))
+                .isInstanceOf(OutputFormatException.class)
+                .hasMessageContaining("layout before version 2")
+                .hasMessageContaining("convgrid transitions RUN_DIR");
+    }
+
+    @Test
+    void aMissingColumnOrAHalfBracketIsAnError() {
+        assertThatThrownBy(() -> TransitionReader.read(new StringReader(HEADER.replace(",tolerance_msun", "") + "\n")))
+                .isInstanceOf(OutputFormatException.class).hasMessageContaining("tolerance_msun");
+        String halfBracket = HEADER + "\n0.02,0.27,0.0,1.8,0.0,schwarzschild,1.0,0.3,0.3,,,,,,,,grid,\n";
+        assertThatThrownBy(() -> TransitionReader.read(new StringReader(halfBracket)))
+                .isInstanceOf(OutputFormatException.class).hasMessageContaining("both be empty or both be masses");
     }
 }

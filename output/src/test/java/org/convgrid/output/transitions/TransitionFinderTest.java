@@ -43,9 +43,12 @@ class TransitionFinderTest {
         assertThat(t.fullyConvective().massMsun()).isEqualTo(0.3);
         assertThat(t.fullyConvective().bracket()).isEqualTo(new Span(0.3, 0.4));
         assertThat(t.fullyConvective().crossings()).hasSize(1);
-        assertThat(t.convCore().massMsun()).isEqualTo(1.2);
-        assertThat(t.convCore().bracket()).isEqualTo(new Span(1.0, 1.2));
+        assertThat(t.convCoreOnset().massMsun()).isEqualTo(1.2);
+        assertThat(t.convCoreOnset().bracket()).isEqualTo(new Span(1.0, 1.2));
+        assertThat(t.transientCore()).isNull();
+        assertThat(t.yInit()).isEqualTo(0.27);
         assertThat(t.method()).isEqualTo(TransitionMethod.GRID);
+        assertThat(t.toleranceMsun()).isNaN();
         assertThat(t.notes()).isEmpty();
     }
 
@@ -54,11 +57,11 @@ class TransitionFinderTest {
         TransitionRow allFc = finder.find(List.of(ok(0.1, FC, 1), ok(0.2, FC, 1))).get(0);
         assertThat(allFc.fullyConvective().found()).isFalse();
         assertThat(allFc.fullyConvective().massMsun()).isNaN();
-        assertThat(allFc.convCore().found()).isFalse();
+        assertThat(allFc.convCoreOnset().found()).isFalse();
         assertThat(allFc.notes()).contains("fully convective at every usable mass",
                 "no convective core at any usable mass");
         TransitionRow massive = finder.find(List.of(ok(1.5, BOTH, 0.1), ok(2.0, BOTH, 0.15))).get(0);
-        assertThat(massive.notes()).contains("no fully convective at any usable mass",
+        assertThat(massive.notes()).contains("no fully convective model at any usable mass",
                 "convective core at every usable mass");
     }
 
@@ -71,11 +74,13 @@ class TransitionFinderTest {
         assertThat(t.fullyConvective().crossings()).containsExactly(new Span(0.30, 0.32), new Span(0.32, 0.34),
                 new Span(0.34, 0.36));
         assertThat(t.fullyConvective().massMsun()).isEqualTo(0.34);
-        assertThat(t.convCore().crossings()).containsExactly(new Span(0.36, 1.10), new Span(1.10, 1.15),
+        assertThat(t.convCoreOnset().crossings()).containsExactly(new Span(0.36, 1.10), new Span(1.10, 1.15),
                 new Span(1.15, 1.20));
-        assertThat(t.convCore().massMsun()).isEqualTo(1.10);
-        assertThat(t.notes()).contains("fully convective changes 3 times with mass",
-                "convective core changes 3 times with mass");
+        // the lasting core starts at 1.20; the core of 1.10 alone is the transient window
+        assertThat(t.convCoreOnset().massMsun()).isEqualTo(1.20);
+        assertThat(t.transientCore()).isEqualTo(new Span(1.10, 1.10));
+        assertThat(t.notes()).contains("fully convective changes 3 times with mass")
+                .doesNotContain("convective core changes");
     }
 
     @Test
@@ -85,8 +90,8 @@ class TransitionFinderTest {
         TransitionRow t = finder.find(rows).get(0);
         assertThat(t.fullyConvective().bracket()).isEqualTo(new Span(0.30, 0.36));
         assertThat(t.fullyConvective().skippedInBracket()).isEqualTo(2);
-        assertThat(t.convCore().bracket()).isEqualTo(new Span(1.0, 1.2));
-        assertThat(t.convCore().skippedInBracket()).isEqualTo(1);
+        assertThat(t.convCoreOnset().bracket()).isEqualTo(new Span(1.0, 1.2));
+        assertThat(t.convCoreOnset().skippedInBracket()).isEqualTo(1);
         assertThat(t.notes()).contains("fully convective bracket widened past 2 unusable model(s)",
                 "convective core bracket widened past 1 unusable model(s)");
     }
@@ -120,8 +125,8 @@ class TransitionFinderTest {
     @Test
     void tinyCoresBelowTheThresholdDoNotCount() {
         List<CatalogueRow> rows = List.of(ok(1.0, ENV, 0), ok(1.1, BOTH, 5e-4), ok(1.2, BOTH, 0.02));
-        assertThat(finder.find(rows).get(0).convCore().massMsun()).isEqualTo(1.2);
-        assertThat(new TransitionFinder(1e-4).find(rows).get(0).convCore().massMsun()).isEqualTo(1.1);
+        assertThat(finder.find(rows).get(0).convCoreOnset().massMsun()).isEqualTo(1.2);
+        assertThat(new TransitionFinder(1e-4).find(rows).get(0).convCoreOnset().massMsun()).isEqualTo(1.1);
     }
 
     @Test

@@ -38,6 +38,20 @@ public final class SliceLabels {
         return new BigDecimal(massMsun).setScale(decimals, java.math.RoundingMode.HALF_EVEN).toPlainString();
     }
 
+    /**
+     * A transition mass rounded to the accuracy that is stated for it: the tolerance of a refined value (when it is
+     * wider than the bracket it reached), else the bracket's width ({@link #massWithin}): 0.3640625 refined to
+     * 0.002 is {@code 0.364}.
+     */
+    public static String massToAccuracy(double massMsun, Span bracket, double toleranceMsun) {
+        double width = bracket == null ? Double.NaN : bracket.hi() - bracket.lo();
+        if (Double.isFinite(toleranceMsun) && toleranceMsun > 0 && Double.isFinite(massMsun)
+                && !(width >= toleranceMsun)) {
+            return massWithin(massMsun, new Span(0.0, toleranceMsun));
+        }
+        return massWithin(massMsun, bracket);
+    }
+
     /** An age for people: {@code ZAMS} for zero, else {@code 4.57 Gyr}. */
     public static String age(double ageGyr) {
         return ageGyr == 0.0 ? "ZAMS" : number(ageGyr) + " Gyr";

@@ -214,22 +214,31 @@ public final class ReportPage {
     private static void transitions(StringBuilder b, RunData run) {
         b.append("<h2 id=\"transitions\">Transition masses</h2>\n<table>\n<tr><th>Z</th><th>age / Gyr</th><th>physics</th>"
                 + "<th>fully convective up to / M\u2609</th><th>bracket / M\u2609</th>"
-                + "<th>convective core from / M\u2609</th><th>bracket / M\u2609</th><th>method</th><th>notes</th></tr>\n");
+                + "<th>lasting convective core from / M\u2609</th><th>bracket / M\u2609</th>"
+                + "<th>small transient cores / M\u2609</th><th>method</th><th>tolerance / M\u2609</th>"
+                + "<th>notes</th></tr>\n");
         for (TransitionRow t : run.transitions()) {
             b.append("<tr><td class=\"num\">").append(SliceLabels.number(t.slice().zInit()))
                     .append("</td><td class=\"num\">").append(SliceLabels.number(t.slice().ageGyr()))
                     .append("</td><td>").append(Html.escape(SliceLabels.physics(t.slice()))).append("</td>");
-            estimate(b, t.fullyConvective());
-            estimate(b, t.convCore());
-            b.append("<td>").append(t.method().label()).append("</td><td>").append(Html.escape(t.notes()))
-                    .append("</td></tr>\n");
+            estimate(b, t.fullyConvective(), t.toleranceMsun());
+            estimate(b, t.convCoreOnset(), t.toleranceMsun());
+            Span window = t.transientCore();
+            b.append("<td class=\"num\">").append(window == null ? "none"
+                    : SliceLabels.massToAccuracy(window.lo(), null, t.toleranceMsun()) + "\u2013"
+                    + SliceLabels.massToAccuracy(window.hi(), null, t.toleranceMsun())).append("</td>");
+            b.append("<td>").append(t.method().label()).append("</td><td class=\"num\">")
+                    .append(Double.isFinite(t.toleranceMsun()) ? SliceLabels.number(t.toleranceMsun()) : "")
+                    .append("</td><td>").append(Html.escape(t.notes())).append("</td></tr>\n");
         }
         b.append("</table>\n");
     }
 
-    private static void estimate(StringBuilder b, TransitionEstimate e) {
-        b.append("<td class=\"num\">").append(e.found() ? SliceLabels.massWithin(e.massMsun(), e.bracket()) : "not found")
-                .append("</td><td class=\"num\">").append(Html.escape(Span.format(e.bracket()))).append("</td>");
+    private static void estimate(StringBuilder b, TransitionEstimate e, double toleranceMsun) {
+        b.append("<td class=\"num\">")
+                .append(e.found() ? SliceLabels.massToAccuracy(e.massMsun(), e.bracket(), toleranceMsun) : "not found")
+                .append("</td><td class=\"num\">").append(e.found() ? SliceLabels.number(e.bracket().lo()) + "\u2013"
+                        + SliceLabels.number(e.bracket().hi()) : "").append("</td>");
     }
 
     private static void failures(StringBuilder b, RunData run) {

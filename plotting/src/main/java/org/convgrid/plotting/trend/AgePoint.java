@@ -5,9 +5,10 @@ import org.convgrid.output.Span;
 /**
  * One transition mass at one age, as transitions.csv gives it.
  *
- * @param ageGyr age since the zero-age main sequence, Gyr
+ * @param ageGyr age, Gyr, counted from the run's age origin
  * @param massMsun the transition mass, solar masses
- * @param bracket the grid masses around it, solar masses (null when the file gives none)
+ * @param bracket the two models around it, solar masses (null when the file gives none)
+ * @param toleranceMsun the refinement's tolerance, solar masses; NaN for a value read off the grid
  */
-public record AgePoint(double ageGyr, double massMsun, Span bracket) {
+public record AgePoint(double ageGyr, double massMsun, Span bracket, double toleranceMsun) {
 }

@@ -17,17 +17,20 @@ public final class TransitionAgeTrend {
     }
 
     /**
-     * The chart data of the rows whose physics is {@code physics}: per transition and Z, the found masses in age
-     * order (unbracketed transitions are left out, so a series may have gaps in age); refined and grid values make separate series, never one line.
+     * The chart data of the rows whose physics is {@code physics}: per transition, Z and method the found masses in
+     * age order (unbracketed transitions are left out, so a series may have gaps in age; refined and grid values make
+     * separate series, never one line), and every transient core window.
      */
     public static TransitionAgeTrendData build(PhysicsKey physics, List<TransitionRow> rows) {
         List<TransitionRow> mine = rows.stream().filter(r -> PhysicsKey.of(r.slice()).equals(physics)).toList();
         List<Double> zs = mine.stream().map(r -> r.slice().zInit()).distinct().sorted().toList();
         List<TransitionAgeTrendData.Series> series = new ArrayList<>();
         addAll(series, TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT, TransitionRow::fullyConvective, mine, zs);
-        addAll(series, TransitionMarker.Kind.CONV_CORE_ONSET, TransitionRow::lastingCoreOnset, mine, zs);
+        addAll(series, TransitionMarker.Kind.CONV_CORE_ONSET, TransitionRow::convCoreOnset, mine, zs);
         List<Double> ages = mine.stream().map(r -> r.slice().ageGyr()).distinct().sorted().toList();
-        return new TransitionAgeTrendData(physics, ages, zs, series);
+        List<TransientWindow> windows = mine.stream().filter(r -> r.transientCore() != null)
+                .map(r -> new TransientWindow(r.slice().zInit(), r.slice().ageGyr(), r.transientCore())).toList();
+        return new TransitionAgeTrendData(physics, ages, zs, series, windows);
     }
 
     private static void addAll(List<TransitionAgeTrendData.Series> out, TransitionMarker.Kind kind,
@@ -38,7 +41,7 @@ public final class TransitionAgeTrend {
                 List<AgePoint> points = rows.stream().filter(r -> r.slice().zInit() == z && r.method() == method)
                         .filter(r -> which.apply(r).found() && Double.isFinite(which.apply(r).massMsun()))
                         .map(r -> new AgePoint(r.slice().ageGyr(), which.apply(r).massMsun(),
-                                which.apply(r).bracket()))
+                                which.apply(r).bracket(), r.toleranceMsun()))
                         .sorted(Comparator.comparingDouble(AgePoint::ageGyr)).toList();
                 if (!points.isEmpty()) {
                     out.add(new TransitionAgeTrendData.Series(kind, z, method, points));

@@ -11,15 +11,25 @@ import org.convgrid.plotting.zones.TransitionMarker;
  * @param physics the physics of every slice shown
  * @param ages every age of these slices, Gyr, increasing
  * @param metallicities every Z of these slices, increasing
- * @param series one series per (transition, Z), Z increasing, fully convective limit first
+ * @param series one series per (transition, Z, method), Z increasing, fully convective limit first
+ * @param windows the transient core windows of these slices
  */
 public record TransitionAgeTrendData(PhysicsKey physics, List<Double> ages, List<Double> metallicities,
-                                     List<Series> series) {
+                                     List<Series> series, List<TransientWindow> windows) {
 
     public TransitionAgeTrendData {
         ages = List.copyOf(ages);
         metallicities = List.copyOf(metallicities);
         series = List.copyOf(series);
+        windows = List.copyOf(windows);
+    }
+
+    /**
+     * Whether the ages call for a logarithmic axis: all above zero and spanning at least a decade (ages from birth,
+     * where the pre-main sequence takes Myr and the main sequence Gyr).
+     */
+    public boolean logAges() {
+        return !ages.isEmpty() && ages.get(0) > 0.0 && ages.get(ages.size() - 1) / ages.get(0) >= 10.0;
     }
 
     /**
@@ -28,7 +38,7 @@ public record TransitionAgeTrendData(PhysicsKey physics, List<Double> ages, List
      * @param kind which transition
      * @param zInit initial metal mass fraction
      * @param method how these masses were found: a refined value is never joined to one read off the grid
-     * @param points the ages where the grid brackets the transition, increasing age
+     * @param points the ages where the models bracket the transition, increasing age
      */
     public record Series(TransitionMarker.Kind kind, double zInit, TransitionMethod method, List<AgePoint> points) {
         public Series {

@@ -16,15 +16,20 @@ public final class TransitionTrend {
     private TransitionTrend() {
     }
 
-    /** The chart data of the rows whose physics is {@code physics}; unbracketed transitions are left out; refined and grid values make separate series, never one line. */
+    /**
+     * The chart data of the rows whose physics is {@code physics}; unbracketed transitions are left out; refined and
+     * grid values make separate series, never one line; every transient core window.
+     */
     public static TransitionTrendData build(PhysicsKey physics, List<TransitionRow> rows) {
         List<TransitionRow> mine = rows.stream().filter(r -> PhysicsKey.of(r.slice()).equals(physics)).toList();
         List<Double> ages = mine.stream().map(r -> r.slice().ageGyr()).distinct().sorted().toList();
         List<TransitionTrendData.Series> series = new ArrayList<>();
         addAll(series, TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT, TransitionRow::fullyConvective, mine, ages);
-        addAll(series, TransitionMarker.Kind.CONV_CORE_ONSET, TransitionRow::lastingCoreOnset, mine, ages);
+        addAll(series, TransitionMarker.Kind.CONV_CORE_ONSET, TransitionRow::convCoreOnset, mine, ages);
         List<Double> zs = mine.stream().map(r -> r.slice().zInit()).distinct().sorted().toList();
-        return new TransitionTrendData(physics, zs, series);
+        List<TransientWindow> windows = mine.stream().filter(r -> r.transientCore() != null)
+                .map(r -> new TransientWindow(r.slice().zInit(), r.slice().ageGyr(), r.transientCore())).toList();
+        return new TransitionTrendData(physics, zs, series, windows);
     }
 
     private static void addAll(List<TransitionTrendData.Series> out, TransitionMarker.Kind kind,
@@ -35,7 +40,7 @@ public final class TransitionTrend {
                 List<TrendPoint> points = rows.stream().filter(r -> r.slice().ageGyr() == age && r.method() == method)
                         .filter(r -> which.apply(r).found() && Double.isFinite(which.apply(r).massMsun()))
                         .map(r -> new TrendPoint(r.slice().zInit(), which.apply(r).massMsun(),
-                                which.apply(r).bracket()))
+                                which.apply(r).bracket(), r.toleranceMsun()))
                         .sorted(Comparator.comparingDouble(TrendPoint::zInit)).toList();
                 if (!points.isEmpty()) {
                     out.add(new TransitionTrendData.Series(kind, age, method, points));

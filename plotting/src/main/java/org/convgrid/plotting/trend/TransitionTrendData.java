@@ -10,13 +10,16 @@ import org.convgrid.plotting.zones.TransitionMarker;
  *
  * @param physics the physics of every slice shown
  * @param metallicities every Z of these slices, increasing (including those where no transition was found)
- * @param series one series per (transition, age), ages increasing, fully convective limit first
+ * @param series one series per (transition, age, method), ages increasing, fully convective limit first
+ * @param windows the transient core windows of these slices
  */
-public record TransitionTrendData(PhysicsKey physics, List<Double> metallicities, List<Series> series) {
+public record TransitionTrendData(PhysicsKey physics, List<Double> metallicities, List<Series> series,
+                                  List<TransientWindow> windows) {
 
     public TransitionTrendData {
         metallicities = List.copyOf(metallicities);
         series = List.copyOf(series);
+        windows = List.copyOf(windows);
     }
 
     /**

@@ -14,17 +14,21 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  * Turns {@link TransitionTrendData} into a chart: Z on a log axis labelled at the run's metallicities, transition
  * mass up (a linear Z axis when the run holds Z = 0); each series' brackets drawn as a shaded band (the reported
  * mass is one end of its bracket, so the band shows where the transition lies). Refined and grid values are
- * separate series, never joined; grid markers are paler. Series of different ages are nudged sideways by a few
- * thousandths of a dex so that their markers do not hide each other; the data keep the true Z.
+ * separate series, never joined; grid markers are paler. Each transient window of small cores is a faint dashed
+ * box with a square at its middle. With few ages every marker carries its mass, rounded to the stated accuracy (the
+ * refinement's tolerance, else the bracket). Series of different ages are nudged sideways by a few thousandths of a
+ * dex so that their markers do not hide each other; the data keep the true Z.
  */
 public final class TransitionTrendRenderer {
 
     /** Sideways nudge between ages, dex of Z. */
-    private static final double DODGE_DEX = 0.016;
+    private static final double DODGE_DEX = 0.03;
     /** Room either side of a linear Z range (one holding Z = 0), as a share of it. */
     private static final double LINEAR_PAD_SHARE = 0.06;
     /** Grid (unrefined) markers are paler than refined ones, so the two read apart. */
     private static final double GRID_MARKER_TINT = 0.5;
+    /** Transient windows' middle markers are lighter than the series colour. */
+    private static final double WINDOW_MARKER_TINT = 0.35;
     /** Room either side of the Z range, as a factor. */
     private static final double Z_PAD = 1.25;
 
@@ -51,6 +55,7 @@ public final class TransitionTrendRenderer {
                 : data.metallicities().get(data.metallicities().size() - 1) * Z_PAD;
         double top = data.series().stream().flatMap(s -> s.points().stream())
                 .mapToDouble(p -> p.bracket() == null ? p.massMsun() : p.bracket().hi()).max().orElse(1.0);
+        top = Math.max(top, data.windows().stream().mapToDouble(w -> w.masses().hi()).max().orElse(0.0));
         chart.getStyler().setYAxisMin(0.0).setYAxisMax(Math.ceil(top * 1.15 * 10) / 10);
         chart.getStyler().setYAxisDecimalPattern("0.0#");
         if (!linear) {
@@ -61,6 +66,7 @@ public final class TransitionTrendRenderer {
             LogAxis.applyLinearX(chart, -LINEAR_PAD_SHARE * span, (1 + LINEAR_PAD_SHARE) * span,
                     data.metallicities());
         }
+        List<TrendDrawing.Label> labels = new java.util.ArrayList<>();
         for (TransitionTrendData.Series s : data.series()) {
             int ageIndex = ages.indexOf(s.ageGyr());
             boolean fc = s.kind() == TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT;
@@ -70,7 +76,7 @@ public final class TransitionTrendRenderer {
             BracketBands.add(chart, s.points().stream()
                     .map(p -> new BracketBands.At(nudged(p.zInit(), offset, linear, zMax), p.bracket())).toList(),
                     ChartStyle.seriesColor(ageIndex));
-            XYSeries line = chart.addSeries((fc ? "fully convective, " : "lasting core onset, ")
+            XYSeries line = chart.addSeries((fc ? "fully convective limit, " : "lasting core onset, ")
                             + SliceLabels.age(s.ageGyr()) + (refined ? ", refined" : ", grid"),
                     x, s.points().stream().mapToDouble(TrendPoint::massMsun).toArray());
             line.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
@@ -79,7 +85,33 @@ public final class TransitionTrendRenderer {
             line.setMarker(fc ? SeriesMarkers.CIRCLE : SeriesMarkers.DIAMOND);
             line.setMarkerColor(refined ? ChartStyle.seriesColor(ageIndex) : ChartStyle.tint(
                     ChartStyle.seriesColor(ageIndex), GRID_MARKER_TINT));
+            if (ages.size() <= TrendDrawing.MAX_LABELLED_FAMILIES) {
+                s.points().forEach(p -> labels.add(new TrendDrawing.Label(nudged(p.zInit(), offset, linear, zMax),
+                        p.massMsun(), SliceLabels.massToAccuracy(p.massMsun(), p.bracket(), p.toleranceMsun()),
+                        ChartStyle.seriesColor(ageIndex))));
+            }
         }
+        List<Double> windowAges = data.windows().stream().map(TransientWindow::ageGyr).distinct().sorted().toList();
+        for (double age : windowAges) {
+            List<TransientWindow> windows = data.windows().stream().filter(w -> w.ageGyr() == age).toList();
+            int ageIndex = ages.contains(age) ? ages.indexOf(age) : ages.size() + windowAges.indexOf(age);
+            double offset = DODGE_DEX * (ageIndex - (ages.size() - 1) / 2.0);
+            java.awt.Color color = ChartStyle.seriesColor(ageIndex);
+            TrendDrawing.windows(chart, windows.stream().map(w -> new TrendDrawing.Window(
+                    nudged(w.zInit(), offset, linear, zMax), w.masses())).toList(), color);
+            XYSeries middles = chart.addSeries("small transient cores, " + SliceLabels.age(age),
+                    windows.stream().mapToDouble(w -> nudged(w.zInit(), offset, linear, zMax)).toArray(),
+                    windows.stream().mapToDouble(w -> 0.5 * (w.masses().lo() + w.masses().hi())).toArray());
+            middles.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+            middles.setMarker(SeriesMarkers.SQUARE);
+            middles.setMarkerColor(ChartStyle.tint(color, WINDOW_MARKER_TINT));
+        }
+        TrendDrawing.labels(chart, labels, data.windows().stream().map(w -> {
+            int ageIndex = ages.contains(w.ageGyr()) ? ages.indexOf(w.ageGyr())
+                    : ages.size() + windowAges.indexOf(w.ageGyr());
+            return new TrendDrawing.Window(nudged(w.zInit(), DODGE_DEX * (ageIndex - (ages.size() - 1) / 2.0), linear,
+                    zMax), w.masses());
+        }).toList());
         return chart;
     }
 }

@@ -7,9 +7,10 @@ import org.convgrid.output.Span;
  *
  * @param kind which transition
  * @param massMsun where the line is drawn, solar masses
- * @param bracket the two grid masses that bracket it, solar masses
+ * @param bracket the two models that bracket it, solar masses
+ * @param toleranceMsun the refinement's tolerance, solar masses; NaN for a value read off the grid
  */
-public record TransitionMarker(Kind kind, double massMsun, Span bracket) {
+public record TransitionMarker(Kind kind, double massMsun, Span bracket, double toleranceMsun) {
 
     /** The two transitions of transitions.csv (README, "Transition masses"). */
     public enum Kind {

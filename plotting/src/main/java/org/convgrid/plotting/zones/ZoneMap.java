@@ -126,15 +126,16 @@ public final class ZoneMap {
     private static List<TransitionMarker> markers(TransitionRow t) {
         List<TransitionMarker> markers = new ArrayList<>(2);
         if (t != null) {
-            add(markers, TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT, t.fullyConvective());
-            add(markers, TransitionMarker.Kind.CONV_CORE_ONSET, t.lastingCoreOnset());
+            add(markers, TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT, t.fullyConvective(), t.toleranceMsun());
+            add(markers, TransitionMarker.Kind.CONV_CORE_ONSET, t.convCoreOnset(), t.toleranceMsun());
         }
         return markers;
     }
 
-    private static void add(List<TransitionMarker> markers, TransitionMarker.Kind kind, TransitionEstimate e) {
+    private static void add(List<TransitionMarker> markers, TransitionMarker.Kind kind, TransitionEstimate e,
+                            double toleranceMsun) {
         if (e.found() && Double.isFinite(e.massMsun())) {
-            markers.add(new TransitionMarker(kind, e.massMsun(), e.bracket()));
+            markers.add(new TransitionMarker(kind, e.massMsun(), e.bracket(), toleranceMsun));
         }
     }
 }

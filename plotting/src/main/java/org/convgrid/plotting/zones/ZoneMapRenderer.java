@@ -46,7 +46,7 @@ public final class ZoneMapRenderer {
         }
         for (TransitionMarker m : data.markers()) {
             boolean fullyConvective = m.kind() == TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT;
-            String label = m.kind().legendLabel(SliceLabels.massWithin(m.massMsun(), m.bracket()) + " M\u2609");
+            String label = m.kind().legendLabel(SliceLabels.massToAccuracy(m.massMsun(), m.bracket(), m.toleranceMsun()) + " M\u2609");
             XYSeries s = chart.addSeries(label, new double[] {m.massMsun(), m.massMsun()}, new double[] {0.0, 1.0});
             s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
             s.setLineColor(ChartStyle.BLACK);

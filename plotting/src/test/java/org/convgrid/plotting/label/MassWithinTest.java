@@ -15,4 +15,14 @@ class MassWithinTest {
         assertThat(SliceLabels.massWithin(1.2, new Span(1.1, 1.2))).isEqualTo("1.2");
         assertThat(SliceLabels.massWithin(0.35, null)).isEqualTo("0.35");
     }
+
+    @Test
+    void aRefinedMassIsRoundedToItsToleranceNotToItsNarrowerBracket() {
+        // a bracket 0.00078 wide would give four decimals; the stated tolerance 0.002 gives three
+        assertThat(SliceLabels.massToAccuracy(0.36484375, new Span(0.36406250, 0.36484375), 0.002))
+                .isEqualTo("0.365");
+        // a bracket wider than the tolerance (a bisection stopped early) keeps its own width
+        assertThat(SliceLabels.massToAccuracy(0.35, new Span(0.35, 0.4), 0.002)).isEqualTo("0.35");
+        assertThat(SliceLabels.massToAccuracy(0.3, new Span(0.3, 0.4), Double.NaN)).isEqualTo("0.3");
+    }
 }

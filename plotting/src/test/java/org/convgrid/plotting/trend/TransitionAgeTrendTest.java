@@ -3,6 +3,7 @@ package org.convgrid.plotting.trend;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.List;
+import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionMethod;
@@ -29,7 +30,7 @@ class TransitionAgeTrendTest {
                 TransitionRow t = transitions.stream().filter(r -> r.slice().zInit() == s.zInit()
                         && r.slice().ageGyr() == p.ageGyr()).findFirst().orElseThrow();
                 var estimate = s.kind() == TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT ? t.fullyConvective()
-                        : t.lastingCoreOnset();
+                        : t.convCoreOnset();
                 assertThat(p.massMsun()).isEqualTo(estimate.massMsun());
                 assertThat(p.bracket()).isEqualTo(estimate.bracket());
             }
@@ -42,7 +43,8 @@ class TransitionAgeTrendTest {
         List<TransitionRow> grid = TransitionFinder.withDefaults().find(rows);
         // the zero-age slices refined, the later ones read off the grid: the case that once drew a false trend
         List<TransitionRow> mixed = grid.stream().map(t -> t.slice().ageGyr() == 0.0
-                ? new TransitionRow(t.slice(), t.fullyConvective(), t.convCore(), TransitionMethod.REFINED, t.notes())
+                ? new TransitionRow(t.slice(), t.yInit(), t.fullyConvective(), t.convCoreOnset(), t.transientCore(),
+                        TransitionMethod.REFINED, 0.002, t.notes())
                 : t).toList();
         TransitionAgeTrendData data = TransitionAgeTrend.build(PhysicsKey.of(rows.get(0)), mixed);
         assertThat(data.series()).allSatisfy(s -> assertThat(s.points()).allSatisfy(p ->
@@ -52,5 +54,32 @@ class TransitionAgeTrendTest {
         TransitionTrendData byZ = TransitionTrend.build(PhysicsKey.of(rows.get(0)), mixed);
         assertThat(byZ.series()).allSatisfy(s -> assertThat(s.method())
                 .isEqualTo(s.ageGyr() == 0.0 ? TransitionMethod.REFINED : TransitionMethod.GRID));
+        // a refined value carries its tolerance to its label, a grid value none
+        assertThat(data.series()).allSatisfy(s -> assertThat(s.points()).allSatisfy(p ->
+                assertThat(Double.isFinite(p.toleranceMsun())).isEqualTo(s.method() == TransitionMethod.REFINED)));
+    }
+
+    @Test
+    void agesFromBirthThatSpanDecadesGetALogarithmicAxisAndZeroAgesALinearOne() {
+        PhysicsKey p = new PhysicsKey(1.8, 0.0, null, 1.0);
+        assertThat(new TransitionAgeTrendData(p, List.of(0.01, 0.15, 0.6), List.of(0.02), List.of(), List.of())
+                .logAges()).isTrue();
+        assertThat(new TransitionAgeTrendData(p, List.of(0.0, 1.0, 4.57), List.of(0.02), List.of(), List.of())
+                .logAges()).isFalse();
+        assertThat(new TransitionAgeTrendData(p, List.of(1.0, 4.57), List.of(0.02), List.of(), List.of())
+                .logAges()).isFalse();
+    }
+
+    @Test
+    void transientWindowsAreKeptPerSlice() {
+        List<CatalogueRow> rows = TestRuns.demoRows();
+        List<TransitionRow> grid = TransitionFinder.withDefaults().find(rows);
+        TransitionRow first = grid.get(0);
+        List<TransitionRow> withWindow = grid.stream().map(t -> t == first ? new TransitionRow(t.slice(), t.yInit(),
+                t.fullyConvective(), t.convCoreOnset(), new Span(0.36, 0.44), t.method(), t.toleranceMsun(),
+                t.notes()) : t).toList();
+        TransitionAgeTrendData data = TransitionAgeTrend.build(PhysicsKey.of(rows.get(0)), withWindow);
+        assertThat(data.windows()).containsExactly(new TransientWindow(first.slice().zInit(),
+                first.slice().ageGyr(), new Span(0.36, 0.44)));
     }
 }

@@ -26,7 +26,7 @@ class TransitionTrendTest {
                 TransitionRow t = transitions.stream().filter(r -> r.slice().zInit() == p.zInit()
                         && r.slice().ageGyr() == s.ageGyr()).findFirst().orElseThrow();
                 var estimate = s.kind() == TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT ? t.fullyConvective()
-                        : t.lastingCoreOnset();
+                        : t.convCoreOnset();
                 assertThat(p.massMsun()).isEqualTo(estimate.massMsun());
                 assertThat(p.bracket()).isEqualTo(estimate.bracket());
             }

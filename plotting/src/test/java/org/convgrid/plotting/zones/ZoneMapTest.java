@@ -51,12 +51,12 @@ class ZoneMapTest {
                     TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT, TransitionMarker.Kind.CONV_CORE_ONSET);
             assertThat(map.markers().get(0).massMsun()).isEqualTo(t.fullyConvective().massMsun());
             assertThat(map.markers().get(0).bracket()).isEqualTo(t.fullyConvective().bracket());
-            assertThat(map.markers().get(1).massMsun()).isEqualTo(t.lastingCoreOnset().massMsun());
+            assertThat(map.markers().get(1).massMsun()).isEqualTo(t.convCoreOnset().massMsun());
         }
         // The synthetic run puts the limit near 0.35 Msun and the onset near 1.1 Msun at Z = 0.014.
         TransitionRow solar = transitions.stream().filter(t -> t.slice().zInit() == 0.014).findFirst().orElseThrow();
         assertThat(solar.fullyConvective().massMsun()).isEqualTo(0.35);
-        assertThat(solar.convCore().massMsun()).isEqualTo(1.1);
+        assertThat(solar.convCoreOnset().massMsun()).isEqualTo(1.1);
     }
 
     @Test

@@ -6,17 +6,16 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.function.DoubleFunction;
 import java.util.function.Predicate;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
-import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.refine.MassBisection;
 import org.convgrid.engine.refine.MassLine;
 import org.convgrid.engine.refine.MassLineFactory;
 import org.convgrid.engine.refine.Refinement;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.grids.GridSpec;
-import org.convgrid.grids.MetallicityPoint;
 import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueRow;
@@ -30,14 +29,16 @@ import org.convgrid.survey.RunSetupException;
 import org.convgrid.survey.parallel.ParallelWork;
 
 /**
- * Narrows the grid brackets of a catalogue's transitions by bisection with new zero-age models
- * ({@link MassBisection}). One search per (slice, transition) still wider than the tolerance, each on its own fresh
- * {@link MassLine} (so it depends on nothing but its slice and bracket; two searches of the same bracket share one);
- * the searches run in parallel on the command's {@link ParallelWork} (the one grid runs use) and are gathered in
- * slice order, fully convective limit first, so the result is the same for any thread count. By default only the
- * crossing the table reports is refined (the highest one for the fully convective limit, the lowest for the core
- * onset); on request every crossing of a slice whose structure flickers with mass. Slices at ages above zero are
- * left at grid resolution.
+ * Narrows the brackets of a catalogue's transitions by bisection with new models ({@link MassBisection}), at every
+ * (Z, age, physics) slice. Each new model is the slice's own grid request (composition, physics and its
+ * {@link org.convgrid.engine.request.Age}, whatever its origin) at a new mass, so at ages above zero it is evolved as
+ * a grid model of that mass would be. One search per (slice, transition crossing) still wider than the tolerance, each
+ * on its own fresh {@link MassLine} (so it depends on nothing but its slice and bracket; two searches of the same
+ * bracket share one); all searches of every slice run at once on the command's {@link ParallelWork} (the one grid runs
+ * use), no slice waiting for another, and are gathered in slice order, fully convective limit first, so the result is
+ * the same for any thread count. By default the crossings the table reports are refined: the fully convective limit
+ * (the highest crossing out of full convection), the lasting core's onset and the two crossings that bound the
+ * transient window of small cores; on request every crossing of a slice whose structure flickers with mass.
  * Midpoints are rounded to masses the catalogue writes exactly, so a catalogue row's mass is the mass computed.
  */
 public final class TransitionRefiner {
@@ -46,7 +47,7 @@ public final class TransitionRefiner {
      * The new models, ready to append, and what the table should say about each slice.
      *
      * @param newModels every new model, in slice order then increasing mass, with its final refinement id
-     * @param notes remarks per slice (stops, unrefinable ages), in slice order
+     * @param notes remarks per slice (bisections that stopped early), in slice order
      * @param searches bisections run
      */
     public record Result(List<ModelOutcome> newModels, Map<Slice, List<String>> notes, int searches) {
@@ -66,8 +67,8 @@ public final class TransitionRefiner {
      * One bisection; {@code lowState} is the kind's state (fully convective, has a core) below the crossing;
      * {@code failed} the slice's catalogue rows that are not usable, by mass in g.
      */
-    private record Search(Slice slice, Kind kind, Span bracket, boolean lowState, PhysicsOptions physics,
-                          MetallicityPoint point, Map<Double, CatalogueRow> failed) {
+    private record Search(Slice slice, Kind kind, Span bracket, boolean lowState, ModelRequest template,
+                          Map<Double, CatalogueRow> failed) {
     }
 
     private final MassLineFactory lines;
@@ -103,7 +104,7 @@ public final class TransitionRefiner {
     }
 
     /**
-     * @param grid the grid of the run (its metallicity points and physics combinations, by the ids' indices)
+     * @param grid the grid of the run: each slice's request, found by a grid model id of the slice
      * @param catalogue every row of the run's catalogue, grid and earlier refinement rows alike
      */
     public Result refine(GridSpec grid, List<CatalogueRow> catalogue) throws InterruptedException {
@@ -117,32 +118,18 @@ public final class TransitionRefiner {
             CatalogueRow gridRow = members.get(slice).stream().filter(r -> !RefinedModelIds.isRefined(r.modelId()))
                     .findFirst().orElseThrow(() -> new RunSetupException("slice at Z = " + slice.zInit()
                             + " has no grid model; the catalogue was edited"));
-            int[] indices = ModelIds.physicsAndMetallicity(gridRow.modelId());
-            if (indices[0] >= grid.physics().size() || indices[1] >= grid.metallicities().size()) {
-                throw new RunSetupException("model " + gridRow.modelId() + " is not in the run's grid");
-            }
+            ModelRequest template = ModelIds.gridRequest(grid, gridRow.modelId());
+            Map<Double, CatalogueRow> failed = new HashMap<>();
+            members.get(slice).stream().filter(r -> !r.isOk() || r.structureClass() == null)
+                    .forEach(r -> failed.put(r.massMsun() * Constants.M_SUN, r));
             for (Kind kind : Kind.values()) {
-                TransitionEstimate e = kind == Kind.FULLY_CONVECTIVE ? row.fullyConvective() : row.convCore();
-                List<Span> spans = allCrossings ? e.crossings() : reported(kind, e, row);
-                if (spans.isEmpty()) {
-                    continue;
-                }
-                if (slice.ageGyr() != 0.0) {
-                    notes.get(slice).add(kind.label + " not refined: only zero-age slices can be refined");
-                    continue;
-                }
-                PhysicsOptions physics = grid.physics().combinations().get(indices[0]);
-                MetallicityPoint point = grid.metallicities().get(indices[1]);
-                Map<Double, CatalogueRow> failed = new HashMap<>();
-                members.get(slice).stream().filter(r -> !r.isOk() || r.structureClass() == null)
-                        .forEach(r -> failed.put(r.massMsun() * Constants.M_SUN, r));
-                for (Span span : spans) {
+                TransitionEstimate e = kind == Kind.FULLY_CONVECTIVE ? row.fullyConvective() : row.convCoreOnset();
+                for (Span span : allCrossings ? e.crossings() : reported(kind, row)) {
                     if (span.hi() - span.lo() >= bisection.tolerance() / Constants.M_SUN) {
                         CatalogueRow below = members.get(slice).stream().filter(r -> r.isOk()
                                 && r.structureClass() != null && r.massMsun() == span.lo()).findFirst()
                                 .orElseThrow();
-                        searches.add(new Search(slice, kind, span, inState(kind, below), physics, point,
-                                failed));
+                        searches.add(new Search(slice, kind, span, inState(kind, below), template, failed));
                     }
                 }
             }
@@ -161,19 +148,16 @@ public final class TransitionRefiner {
     }
 
     /**
-     * The crossings the table reports: the fully convective limit, or the lowest core onset and, when it differs,
-     * the onset of the lasting core (the one users compare with the literature), in mass order.
+     * The crossings the table reports: the fully convective limit, or, for the core, the two crossings that bound the
+     * transient window and the lasting core's onset, in mass order without repeats.
      */
-    private static List<Span> reported(Kind kind, TransitionEstimate e, TransitionRow row) {
-        List<Span> spans = new ArrayList<>();
-        if (e.found()) {
-            spans.add(e.bracket());
+    private static List<Span> reported(Kind kind, TransitionRow row) {
+        if (kind == Kind.FULLY_CONVECTIVE) {
+            return row.fullyConvective().found() ? List.of(row.fullyConvective().bracket()) : List.of();
         }
-        if (kind == Kind.CONV_CORE) {
-            TransitionEstimate lasting = row.lastingCoreOnset();
-            if (lasting.found() && !spans.contains(lasting.bracket())) {
-                spans.add(lasting.bracket());
-            }
+        List<Span> spans = new ArrayList<>(row.transientCoreCrossings());
+        if (row.convCoreOnset().found() && !spans.contains(row.convCoreOnset().bracket())) {
+            spans.add(row.convCoreOnset().bracket());
         }
         return spans;
     }
@@ -197,13 +181,20 @@ public final class TransitionRefiner {
     /** The searches of one task, in order, on one fresh line. */
     private List<Refinement> run(List<Search> task) {
         Search first = task.get(0);
-        MetallicityPoint p = first.point();
-        MassLine line = skippingKnownFailures(lines.open(first.physics(), p.z(), p.y()), first.failed());
+        ModelRequest t = first.template();
+        MassLine line = skippingKnownFailures(lines.open(t.physics(), t.initialMetals(), t.initialHelium()),
+                first.failed());
         List<Refinement> done = new ArrayList<>(task.size());
         for (Search s : task) {
             Predicate<ModelOutcome.Solved> lowSide = o -> inState(s.kind(), OutcomeRows.toRow(o)) == s.lowState();
-            done.add(bisection.refine(line, mass -> new ModelRequest("pending", mass, p.z(), p.y(), 0.0,
-                    s.physics()), s.bracket().lo() * Constants.M_SUN, s.bracket().hi() * Constants.M_SUN, lowSide));
+            DoubleFunction<ModelRequest> at = mass -> new ModelRequest("pending", mass, t.initialMetals(),
+                    t.initialHelium(), t.age(), t.physics());
+            double lo = s.bracket().lo() * Constants.M_SUN;
+            double hi = s.bracket().hi() * Constants.M_SUN;
+            // zero-age lines seed each model from the recomputed ends; a model at an age is evolved on its own, so
+            // recomputing the ends the catalogue already holds would only double the cost of a short search
+            done.add(t.age().isZeroAge() ? bisection.refine(line, at, lo, hi, lowSide)
+                    : bisection.refineWithinKnownEnds(line, at, lo, hi, lowSide));
         }
         return done;
     }

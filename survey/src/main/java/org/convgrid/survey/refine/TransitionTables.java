@@ -1,16 +1,21 @@
 package org.convgrid.survey.refine;
 
 import java.io.IOException;
+import java.io.Reader;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.OptionalDouble;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.grids.GridSpec;
 import org.convgrid.grids.yaml.GridFileReader;
 import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.OutputFormatException;
 import org.convgrid.output.RunLayout;
+import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.manifest.RunManifest;
@@ -20,6 +25,7 @@ import org.convgrid.output.transitions.RefinedModelIds;
 import org.convgrid.output.transitions.Slice;
 import org.convgrid.output.transitions.TransitionEstimate;
 import org.convgrid.output.transitions.TransitionFinder;
+import org.convgrid.output.transitions.TransitionReader;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.output.transitions.TransitionWriter;
 import org.convgrid.survey.CatalogueAppender;
@@ -67,7 +73,9 @@ public final class TransitionTables {
             throws IOException {
         requireCatalogue(dir);
         List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
-        List<TransitionRow> transitions = withNotes(finder, rows, Map.of());
+        double tolerance = earlierTolerance(dir);
+        List<TransitionRow> transitions = withNotes(finder, rows, Map.of()).stream()
+                .map(t -> t.withTolerance(tolerance)).toList();
         AtomicFiles.write(dir.transitions(), out -> TransitionWriter.write(transitions, out));
         return finish(new Update(transitions, rows, List.of(), 0, finished(dir, rows, transitions)), finishers);
     }
@@ -116,7 +124,8 @@ public final class TransitionTables {
         }
         Map<Slice, List<String>> remarks = notes;
         List<TransitionRow> transitions = withNotes(finder, rows, remarks).stream()
-                .map(t -> refiner.allCrossings() ? t : withWideCrossings(t, refiner.toleranceMsun())).toList();
+                .map(t -> refiner.allCrossings() ? t : withWideCrossings(t, refiner.toleranceMsun()))
+                .map(t -> t.withTolerance(refiner.toleranceMsun())).toList();
         AtomicFiles.write(dir.transitions(), out -> TransitionWriter.write(transitions, out));
         RunManifest updated = manifest.finishedAt(manifest.finished(), RunFinishing.countByStatus(rows),
                 manifest.medianSecondsPerModel());
@@ -134,8 +143,8 @@ public final class TransitionTables {
 
     /**
      * The table of the catalogue with the refinement's remarks, and, when the catalogue holds refinement models, a
-     * remark wherever a transition lies outside the bracket the grid models alone give: the new models found a
-     * crossing between grid masses that the grid had missed. Depends on the catalogue alone (plus the remarks).
+     * remark wherever a transition lies outside the bracket the grid models alone give, or a transient window shows
+     * that the grid models alone do not: the new models found crossings between grid masses that the grid had missed. Depends on the catalogue alone (plus the remarks).
      */
     static List<TransitionRow> withNotes(TransitionFinder finder, List<CatalogueRow> catalogue,
                                          Map<Slice, List<String>> notes) {
@@ -155,36 +164,59 @@ public final class TransitionTables {
             TransitionRow old = before.get(row.slice());
             if (old != null) {
                 moved("fully convective limit", old.fullyConvective(), row.fullyConvective(), all);
-                moved("convective core onset", old.convCore(), row.convCore(), all);
+                moved("convective core onset", old.convCoreOnset(), row.convCoreOnset(), all);
+                if (old.transientCore() == null && row.transientCore() != null) {
+                    all.add("the window of small transient cores " + row.transientCore() + " Msun lies between grid "
+                            + "masses: only the refinement models found it");
+                }
             }
-            out.add(new TransitionRow(row.slice(), row.fullyConvective(), row.convCore(), row.method(),
-                    String.join("; ", all)));
+            out.add(row.withNotes(String.join("; ", all)));
         }
         return out;
     }
 
-    /** A zero-age row with a remark for each transition whose other crossings are still wider than the tolerance. */
+    /** A row with a remark for each transition whose other crossings are still wider than the tolerance. */
     private static TransitionRow withWideCrossings(TransitionRow t, double toleranceMsun) {
-        if (t.slice().ageGyr() != 0.0) {
-            return t;
-        }
         List<String> notes = new ArrayList<>();
         if (!t.notes().isEmpty()) {
             notes.add(t.notes());
         }
-        wide("fully convective", t.fullyConvective(), TransitionEstimate.NONE, toleranceMsun, notes);
-        wide("convective core", t.convCore(), t.lastingCoreOnset(), toleranceMsun, notes);
-        return new TransitionRow(t.slice(), t.fullyConvective(), t.convCore(), t.method(), String.join("; ", notes));
+        wide("fully convective", t.fullyConvective(), List.of(), toleranceMsun, notes);
+        wide("convective core", t.convCoreOnset(), t.transientCoreCrossings(), toleranceMsun, notes);
+        return t.withNotes(String.join("; ", notes));
     }
 
-    private static void wide(String what, TransitionEstimate e, TransitionEstimate alsoRefined, double toleranceMsun,
+    private static void wide(String what, TransitionEstimate e, List<Span> alsoRefined, double toleranceMsun,
                              List<String> notes) {
-        long wide = e.crossings().stream().filter(c -> !c.equals(e.bracket()) && !c.equals(alsoRefined.bracket())
+        long wide = e.crossings().stream().filter(c -> !c.equals(e.bracket()) && !alsoRefined.contains(c)
                 && c.hi() - c.lo() >= toleranceMsun).count();
         if (wide > 0) {
             notes.add(what + ": " + wide + " other crossing(s) wider than the tolerance, not refined "
                     + "(--all-crossings refines them)");
         }
+    }
+
+    /**
+     * The tolerance a plain recompute states for refined rows: the one the table it replaces gave (the refinement
+     * that added the models), else the grid file's; NaN when neither is known.
+     */
+    private static double earlierTolerance(RunDirectory dir) throws IOException {
+        if (Files.isRegularFile(dir.transitions())) {
+            try (Reader in = Files.newBufferedReader(dir.transitions(), StandardCharsets.UTF_8)) {
+                OptionalDouble stated = TransitionReader.read(in).stream().mapToDouble(TransitionRow::toleranceMsun)
+                        .filter(Double::isFinite).max();
+                if (stated.isPresent()) {
+                    return stated.getAsDouble();
+                }
+            } catch (OutputFormatException e) {
+                // a table of the first layout states no tolerance: fall back on the grid file's
+            }
+        }
+        if (Files.isRegularFile(dir.manifest())) {
+            RunManifest manifest = RunManifestReader.read(Files.readString(dir.manifest()));
+            return new GridFileReader().parse(manifest.gridFile(), manifest.gridText()).transitions().toleranceMsun();
+        }
+        return Double.NaN;
     }
 
     private static void moved(String what, TransitionEstimate before, TransitionEstimate after, List<String> notes) {

@@ -1,0 +1,65 @@
+package org.convgrid.output.transitions;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.convgrid.output.transitions.TransitionFinderTest.ok;
+
+import java.util.List;
+import org.convgrid.engine.convection.StructureClass;
+import org.convgrid.output.Span;
+import org.junit.jupiter.api.Test;
+
+/** The lasting core onset and the transient window of small cores just above the fully convective limit. */
+class TransientCoreWindowTest {
+
+    private static final StructureClass FC = StructureClass.FULLY_CONVECTIVE;
+    private static final StructureClass ENV = StructureClass.CONV_ENVELOPE;
+    private static final StructureClass BOTH = StructureClass.CONV_CORE_AND_ENVELOPE;
+
+    private final TransitionFinder finder = TransitionFinder.withDefaults();
+
+    @Test
+    void aSmallCoreThatComesAndGoesIsTheWindowAndNotTheOnset() {
+        // fully convective to 0.42, small cores 0.43-0.50, none 0.55-1.35, a core for good from 1.40
+        TransitionRow t = finder.find(List.of(ok(0.42, FC, 1), ok(0.43, BOTH, 0.01), ok(0.50, BOTH, 0.004),
+                ok(0.55, ENV, 0), ok(1.35, ENV, 0), ok(1.40, BOTH, 0.05), ok(1.6, BOTH, 0.1))).get(0);
+        assertThat(t.fullyConvective().massMsun()).isEqualTo(0.42);
+        assertThat(t.convCoreOnset().massMsun()).isEqualTo(1.40);
+        assertThat(t.convCoreOnset().bracket()).isEqualTo(new Span(1.35, 1.40));
+        assertThat(t.transientCore()).isEqualTo(new Span(0.43, 0.50));
+        assertThat(t.transientCoreCrossings()).containsExactly(new Span(0.42, 0.43), new Span(0.50, 0.55));
+        assertThat(t.notes()).isEmpty();
+    }
+
+    @Test
+    void aStarThatLeavesFullConvectionIntoALastingCoreHasNoWindow() {
+        TransitionRow t = finder.find(List.of(ok(0.3, FC, 1), ok(0.35, BOTH, 0.02), ok(0.4, BOTH, 0.03))).get(0);
+        assertThat(t.convCoreOnset().massMsun()).isEqualTo(0.35);
+        assertThat(t.convCoreOnset().bracket()).isEqualTo(t.fullyConvective().bracket());
+        assertThat(t.transientCore()).isNull();
+    }
+
+    @Test
+    void withoutCoresAtTheHighestMassesThereIsAWindowButNoOnset() {
+        TransitionRow t = finder.find(List.of(ok(0.3, FC, 1), ok(0.35, BOTH, 0.02), ok(0.4, ENV, 0))).get(0);
+        assertThat(t.convCoreOnset().found()).isFalse();
+        assertThat(t.convCoreOnset().massMsun()).isNaN();
+        assertThat(t.transientCore()).isEqualTo(new Span(0.35, 0.35));
+        assertThat(t.notes()).contains("no lasting convective core: the highest usable masses have none");
+    }
+
+    @Test
+    void aSecondWindowIsNotedAndTheLowestOneReported() {
+        TransitionRow t = finder.find(List.of(ok(0.3, FC, 1), ok(0.35, BOTH, 0.02), ok(0.4, ENV, 0),
+                ok(0.8, BOTH, 0.01), ok(0.9, ENV, 0), ok(1.3, BOTH, 0.05))).get(0);
+        assertThat(t.transientCore()).isEqualTo(new Span(0.35, 0.35));
+        assertThat(t.convCoreOnset().massMsun()).isEqualTo(1.3);
+        assertThat(t.notes()).contains("convective core changes 5 times with mass");
+    }
+
+    @Test
+    void aGridThatStartsInsideTheWindowDoesNotInventItsLowerEdge() {
+        TransitionRow t = finder.find(List.of(ok(0.4, BOTH, 0.01), ok(0.5, ENV, 0), ok(1.3, BOTH, 0.05))).get(0);
+        assertThat(t.transientCore()).isNull();
+        assertThat(t.convCoreOnset().massMsun()).isEqualTo(1.3);
+    }
+}
