@@ -6,9 +6,10 @@ import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.state.Composition;
 
 /**
- * The standard physics bundle of each (options, surface composition) line, built once per instance (its
- * atmosphere table is the costly part) and shared between threads. Bundles are immutable, so which thread builds
- * one changes no result. One instance per run: nothing is cached across runs.
+ * The standard physics bundle of each (options, surface composition) line, built once per instance and shared
+ * between threads, so the atmosphere nodes one model integrates serve every later model of the line. A bundle's
+ * answers never change (its atmosphere nodes are filled in on first use, each a pure function of its point), so
+ * which thread builds or fills one changes no result. One instance per run: nothing is cached across runs.
  */
 public final class PhysicsBundles {
 

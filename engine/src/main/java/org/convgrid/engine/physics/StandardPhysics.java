@@ -25,8 +25,9 @@ import org.convgrid.engine.state.Composition;
  * the OPAL GN93 tables with analytic edges and conduction ({@link OpalGn93Opacity}, read at first use) or a
  * user table (times the options' opacity factor),
  * {@link HydrogenBurningNetwork}, {@link MixingLengthTheory} with the options' alpha, the options' stability
- * criterion, and a grey atmosphere tabulated once for the surface composition, with the direct integration where
- * the table has no answer. Every component is immutable and thread-safe, so the stateless ones are shared.
+ * criterion, and a grey atmosphere tabulated for the surface composition (each node integrated when first
+ * needed), with the direct integration where the table has no answer. Every component is immutable and
+ * thread-safe, so the stateless ones are shared.
  */
 public final class StandardPhysics {
 

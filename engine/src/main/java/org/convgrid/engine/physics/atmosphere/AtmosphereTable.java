@@ -2,13 +2,14 @@ package org.convgrid.engine.physics.atmosphere;
 
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.atomic.AtomicReferenceArray;
 
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
 import org.convgrid.engine.state.Composition;
 
 /**
- * A {@link SurfaceBoundary} tabulated once per composition on a (log Teff, log g) grid and interpolated by
+ * A {@link SurfaceBoundary} tabulated per composition on a (log Teff, log g) grid and interpolated by
  * bicubic Hermite patches (e.g. Press et al. 2007, Numerical Recipes 3rd ed., sec. 3.6), so that ln P, ln T
  * and their first derivatives are continuous and the derivatives reported are those of the interpolant
  * (what a Newton solver needs). Node values and first derivatives come from the wrapped boundary; the cross
@@ -17,13 +18,17 @@ import org.convgrid.engine.state.Composition;
  * <p>Default grid: log Teff 3.30-4.80 (about 2000-63000 K) in {@value #DEFAULT_TEFF_POINTS} nodes, log g
  * 2.5-6.0 in {@value #DEFAULT_GRAVITY_POINTS} nodes (steps 0.033 and 0.35 dex): with an H^-, Kramers and
  * electron-scattering opacity this reproduces the direct integration to about 3e-4 in ln P between nodes, at
- * about 230 EOS and opacity calls per node for {@link GreyAtmosphere}. Nodes where the wrapped boundary fails (for instance
- * hot, low-gravity atmospheres above the Eddington limit) are marked missing; queries outside the grid or in a
- * cell with a missing corner fail with {@link ErrorKind#OFF_TABLE}, parameters ("atmosphere", Teff, g).
+ * about 230 EOS and opacity calls per node for {@link GreyAtmosphere}. Nodes where the wrapped boundary fails
+ * (for instance hot, low-gravity atmospheres above the Eddington limit) are marked missing; queries outside the
+ * grid or in a cell with a missing corner fail with {@link ErrorKind#OFF_TABLE}, parameters ("atmosphere", Teff, g).
  *
- * <p>Thread-safe: the per-composition tables are immutable and kept in a small concurrent cache (at most
- * {@value #CACHE_SIZE} compositions, emptied when full); a table's values do not depend on when or by which
- * thread it was built. Building is single-threaded.
+ * <p>Nodes are integrated on first use, not all at once: a cell needs its four corners and their neighbours
+ * along each axis (for the cross derivatives), at most 12 nodes, and a zero-age model's surface visits a few
+ * cells, so it pays for a few dozen of the {@value #DEFAULT_TEFF_POINTS} x {@value #DEFAULT_GRAVITY_POINTS} nodes.
+ *
+ * <p>Thread-safe: each node, once integrated, is kept and never changes; per-composition tables are kept in a
+ * small concurrent cache (at most {@value #CACHE_SIZE} compositions, emptied when full). A node is a pure
+ * function of (Teff, g, composition), so no answer depends on which thread integrated which node, or when.
  */
 public final class AtmosphereTable implements SurfaceBoundary {
 
@@ -66,56 +71,88 @@ public final class AtmosphereTable implements SurfaceBoundary {
         return grid.at(effectiveTemperature, gravity);
     }
 
-    /** Builds the table for one composition now (single-threaded) and returns it, for callers that keep it. */
+    /**
+     * The table of one composition, for callers that keep it. Its nodes are integrated when a query first needs
+     * them (the four corners of the query's cell and their neighbours), so a model pays for the few cells its
+     * surface visits rather than for the whole grid; the answers are those of a table built in full.
+     */
     public SurfaceBoundary tabulate(Composition composition) {
         Grid grid = new Grid(source, composition, teffAxis, gravityAxis);
         return (teff, g, c) -> grid.at(teff, g);
     }
 
-    /** The nodes of one composition: ln P and ln T with their derivatives along ln Teff (x) and ln g (y). */
+    /**
+     * The nodes of one composition: ln P and ln T with their derivatives along ln Teff (x) and ln g (y). A node is
+     * integrated the first time a cell that needs it is evaluated and kept; two threads that need the same new node
+     * may both integrate it, which wastes a little time but changes nothing, since a node is a pure function of
+     * (Teff, g, composition).
+     */
     private static final class Grid {
         private static final double LN10 = Math.log(10.0);
+        private static final SurfaceCondition MISSING = new SurfaceCondition(Double.NaN, Double.NaN, Double.NaN,
+                Double.NaN, Double.NaN, Double.NaN);
+        private final SurfaceBoundary source;
+        private final Composition composition;
+        private final TableAxis teffAxis;
+        private final TableAxis gravityAxis;
         private final double x0;
         private final double y0;
         private final double hx;
         private final double hy;
         private final int nx;
         private final int ny;
-        private final HermitePatch lnP;
-        private final HermitePatch lnT;
+        private final HermitePatch patch;
+        private final AtomicReferenceArray<SurfaceCondition> nodes;
 
         Grid(SurfaceBoundary source, Composition composition, TableAxis teffAxis, TableAxis gravityAxis) {
+            this.source = source;
+            this.composition = composition;
+            this.teffAxis = teffAxis;
+            this.gravityAxis = gravityAxis;
             nx = teffAxis.points();
             ny = gravityAxis.points();
             x0 = teffAxis.min() * LN10;
             y0 = gravityAxis.min() * LN10;
             hx = teffAxis.step() * LN10;
             hy = gravityAxis.step() * LN10;
-            double[][][] p = new double[3][nx][ny];
-            double[][][] t = new double[3][nx][ny];
-            for (int i = 0; i < nx; i++) {
-                for (int j = 0; j < ny; j++) {
-                    SurfaceCondition s = node(source, Math.pow(10.0, teffAxis.node(i)),
-                            Math.pow(10.0, gravityAxis.node(j)), composition);
-                    p[0][i][j] = s.lnPressure();
-                    p[1][i][j] = s.dlnPDlnTeff();
-                    p[2][i][j] = s.dlnPDlnG();
-                    t[0][i][j] = s.lnTemperature();
-                    t[1][i][j] = s.dlnTDlnTeff();
-                    t[2][i][j] = s.dlnTDlnG();
-                }
-            }
-            lnP = new HermitePatch(p[0], p[1], p[2], hx, hy);
-            lnT = new HermitePatch(t[0], t[1], t[2], hx, hy);
+            patch = new HermitePatch(nx, ny, hx, hy);
+            nodes = new AtomicReferenceArray<>(nx * ny);
         }
 
-        private static SurfaceCondition node(SurfaceBoundary source, double teff, double g, Composition c) {
-            try {
-                return source.at(teff, g, c);
-            } catch (ConvgridException e) {
-                double nan = Double.NaN; // missing node: no atmosphere here (e.g. super-Eddington)
-                return new SurfaceCondition(nan, nan, nan, nan, nan, nan);
+        /** Node (i, j), integrated on first use. */
+        private SurfaceCondition node(int i, int j) {
+            SurfaceCondition s = nodes.get(i * ny + j);
+            if (s == null) {
+                s = integrate(Math.pow(10.0, teffAxis.node(i)), Math.pow(10.0, gravityAxis.node(j)));
+                nodes.set(i * ny + j, s);
             }
+            return s;
+        }
+
+        private SurfaceCondition integrate(double teff, double g) {
+            try {
+                return source.at(teff, g, composition);
+            } catch (ConvgridException e) {
+                return MISSING; // no atmosphere here (e.g. super-Eddington)
+            }
+        }
+
+        private double pressure(int i, int j, int component) {
+            SurfaceCondition s = node(i, j);
+            return switch (component) {
+                case HermitePatch.VALUE -> s.lnPressure();
+                case HermitePatch.D_DX -> s.dlnPDlnTeff();
+                default -> s.dlnPDlnG();
+            };
+        }
+
+        private double temperature(int i, int j, int component) {
+            SurfaceCondition s = node(i, j);
+            return switch (component) {
+                case HermitePatch.VALUE -> s.lnTemperature();
+                case HermitePatch.D_DX -> s.dlnTDlnTeff();
+                default -> s.dlnTDlnG();
+            };
         }
 
         SurfaceCondition at(double teff, double g) {
@@ -126,8 +163,8 @@ public final class AtmosphereTable implements SurfaceBoundary {
             }
             int i = Math.min((int) x, nx - 2);
             int j = Math.min((int) y, ny - 2);
-            double[] vp = lnP.evaluate(i, j, x - i, y - j);
-            double[] vt = lnT.evaluate(i, j, x - i, y - j);
+            double[] vp = patch.evaluate(this::pressure, i, j, x - i, y - j);
+            double[] vt = patch.evaluate(this::temperature, i, j, x - i, y - j);
             if (Double.isNaN(vp[0]) || Double.isNaN(vt[0])) {
                 throw offTable(teff, g);
             }

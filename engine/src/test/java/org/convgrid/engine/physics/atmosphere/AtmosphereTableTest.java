@@ -4,6 +4,12 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.stream.IntStream;
+
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
 import org.convgrid.engine.state.Composition;
@@ -92,5 +98,50 @@ class AtmosphereTableTest {
         assertThat(table.at(5000, 3e4, SOLAR)).isEqualTo(first);
         // Fewer metals, fewer H^- electrons in the test opacity: lower kappa, higher photospheric pressure.
         assertThat(other.lnPressure()).isGreaterThan(first.lnPressure());
+    }
+
+    @Test
+    void nodesAreIntegratedOnlyWhenACellNeedsThem() {
+        AtomicInteger integrations = new AtomicInteger();
+        SurfaceBoundary counting = (teff, g, c) -> {
+            integrations.incrementAndGet();
+            return DIRECT.at(teff, g, c);
+        };
+        SurfaceBoundary built = new AtmosphereTable(counting).tabulate(SOLAR);
+        assertThat(integrations).as("nothing integrated before the first query").hasValue(0);
+        built.at(5772, 2.74e4, SOLAR);
+        // An inner cell: four corners plus the eight neighbours their cross derivatives need.
+        assertThat(integrations).hasValue(12);
+        built.at(5800, 2.8e4, SOLAR);
+        assertThat(integrations).as("same cell again").hasValue(12);
+    }
+
+    @Test
+    void answersDoNotDependOnQueryOrderOrThreads() {
+        List<double[]> points = new ArrayList<>();
+        for (int k = 0; k < 60; k++) {
+            points.add(new double[] {3000 + 397.0 * k, Math.pow(10, 2.6 + 0.057 * k)});
+        }
+        SurfaceBoundary forward = new AtmosphereTable(DIRECT).tabulate(SOLAR);
+        SurfaceBoundary backward = new AtmosphereTable(DIRECT).tabulate(SOLAR);
+        SurfaceBoundary parallel = new AtmosphereTable(DIRECT).tabulate(SOLAR);
+        List<Object> a = IntStream.range(0, points.size()).mapToObj(k -> answer(forward, points.get(k))).toList();
+        List<Object> b = new ArrayList<>(IntStream.range(0, points.size())
+                .map(k -> points.size() - 1 - k).mapToObj(k -> answer(backward, points.get(k))).toList());
+        Collections.reverse(b);
+        List<Object> c = IntStream.range(0, points.size()).parallel()
+                .mapToObj(k -> answer(parallel, points.get(k))).toList();
+        assertThat(b).isEqualTo(a); // record equality compares the doubles bit for bit
+        assertThat(c).isEqualTo(a);
+        assertThat(a).filteredOn(o -> o instanceof SurfaceCondition).hasSizeGreaterThan(40);
+    }
+
+    /** The condition, or the error kind where the table has no answer. */
+    private static Object answer(SurfaceBoundary table, double[] point) {
+        try {
+            return table.at(point[0], point[1], SOLAR);
+        } catch (ConvgridException e) {
+            return e.kind();
+        }
     }
 }
