@@ -8,6 +8,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.Slice;
@@ -146,7 +147,8 @@ public final class RunMaps {
                 entries.add(new MapEntry("transitions-vs-age_" + p.fileStem() + ".png", MapEntry.TRENDS_AGE,
                         "Transition masses against age, one line per Z, bars span the bracketing grid masses, "
                                 + p.describe() + ".",
-                        () -> TransitionAgeTrendRenderer.render(TransitionAgeTrend.build(p, run.transitions()))));
+                        () -> TransitionAgeTrendRenderer.render(TransitionAgeTrend.build(p, run.transitions()),
+                                run.manifest() == null ? AgeOrigin.ZAMS : run.manifest().ageOrigin())));
             }
         }
         entries.addAll(zonesAgainstAge(run));

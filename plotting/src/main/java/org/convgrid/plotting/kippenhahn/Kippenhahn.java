@@ -1,9 +1,12 @@
 package org.convgrid.plotting.kippenhahn;
 
+import static org.convgrid.output.catalogue.CatalogueRow.PRE_MAIN_SEQUENCE;
+
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.stream.IntStream;
+import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.output.Span;
 import org.convgrid.output.track.Track;
 import org.convgrid.output.track.TrackStep;
@@ -55,6 +58,9 @@ public final class Kippenhahn {
         double ageMin = kept.isEmpty() ? 0.0 : all.get(kept.get(0)).ageGyr();
         double ageMax = kept.isEmpty() ? 0.0 : all.get(kept.get(kept.size() - 1)).ageGyr();
         List<String> notes = kept.size() < 2 ? List.of(TOO_SHORT_NOTE) : List.of();
-        return new KippenhahnData(origin, ageMin, ageMax, zones, burning, notes);
+        // a track from birth starts with the contracting start model; one from the zero-age model on the main sequence
+        AgeOrigin ageOrigin = !all.isEmpty() && PRE_MAIN_SEQUENCE.equals(all.get(0).phase()) ? AgeOrigin.BIRTH
+                : AgeOrigin.ZAMS;
+        return new KippenhahnData(origin, ageMin, ageMax, zones, burning, notes, ageOrigin);
     }
 }

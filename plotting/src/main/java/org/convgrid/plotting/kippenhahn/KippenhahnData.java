@@ -1,6 +1,7 @@
 package org.convgrid.plotting.kippenhahn;
 
 import java.util.List;
+import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.plotting.tracks.TrackOrigin;
 
 /**
@@ -12,9 +13,10 @@ import org.convgrid.plotting.tracks.TrackOrigin;
  * @param zones one rectangle per convective interval of every step but the last, in step order
  * @param burning one rectangle per step (but the last) that gives a hydrogen-burning region, in step order
  * @param notes caveats to print on the chart
+ * @param ageOrigin where the track's ages count from (birth when it starts before the main sequence)
  */
 public record KippenhahnData(TrackOrigin origin, double ageMin, double ageMax, List<AgeRect> zones,
-                             List<AgeRect> burning, List<String> notes) {
+                             List<AgeRect> burning, List<String> notes, AgeOrigin ageOrigin) {
 
     /** A surface convection zone holding less than this share of the mass is thin: the depth chart shows it. */
     public static final double THIN_ENVELOPE_MASS_FRAC = 0.02;

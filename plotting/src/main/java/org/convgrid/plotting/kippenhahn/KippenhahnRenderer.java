@@ -11,6 +11,7 @@ import java.util.EnumSet;
 import java.util.List;
 import java.util.Set;
 import org.convgrid.plotting.label.SliceLabels;
+import org.convgrid.plotting.style.AgeAxisTitle;
 import org.convgrid.plotting.style.ChartNotes;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.StyledChart;
@@ -48,7 +49,7 @@ public final class KippenhahnRenderer {
         StyledChart chart = ChartStyle.newChart("Convective zones against age, M = "
                         + SliceLabels.number(data.origin().massMsun()) + " M\u2609, Z = "
                         + SliceLabels.number(data.origin().zInit()), data.origin().physics().describe(),
-                "age since the zero-age main sequence / Gyr", y.title());
+                AgeAxisTitle.of(data.ageOrigin()), y.title());
         ChartStyle.legendRight(chart);
         double span = data.ageMax() - data.ageMin();
         double xMax = span > 0 ? data.ageMax() : data.ageMin() + 1.0;
