@@ -12,6 +12,7 @@ import org.convgrid.engine.request.LifeStage;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.evolution.AgedModel;
 import org.convgrid.engine.evolution.EvolutionResult;
@@ -20,7 +21,6 @@ import org.convgrid.engine.evolution.MainSequenceEvolver;
 import org.convgrid.engine.evolution.TrackSink;
 import org.convgrid.engine.physics.PhysicsBundles;
 import org.convgrid.engine.physics.PhysicsSet;
-import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.units.Constants;
@@ -103,8 +103,9 @@ public final class GridRequests implements ChunkSolver {
         }
         ModelRequest first = chunk.get(0);
         Composition composition = ZeroAgeRequests.initialComposition(first);
-        PhysicsSet set = physics.of(first.physics(), composition);
-        ZamsTrack track = new ZamsTrack(new ZamsBuilder(set), composition);
+        // the zero-age line is opened by the first star that needs it: stars from birth start elsewhere
+        PhysicsSet set = null;
+        ZamsTrack track = null;
         int start = 0;
         while (start < chunk.size()) {
             int end = start + 1;
@@ -116,6 +117,10 @@ public final class GridRequests implements ChunkSolver {
                 out.addAll(star.get(0).age() instanceof Age.MainSequenceFraction
                         ? BirthAges.fractions(this, star) : BirthAges.answers(this, star, settings));
             } else {
+                if (track == null) {
+                    set = physics.of(first.physics(), composition);
+                    track = new ZamsTrack(new ZamsBuilder(set), composition);
+                }
                 ZamsResult zeroAge = track.solve(star.get(0).mass());
                 out.addAll(star.get(0).age() instanceof Age.MainSequenceFraction
                         ? FractionAges.answers(this, set, star, zeroAge)
