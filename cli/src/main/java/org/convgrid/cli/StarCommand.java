@@ -17,7 +17,11 @@ import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.engine.batch.GridRequests;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
-import org.convgrid.engine.evolution.TrackSink;
+import org.convgrid.cli.run.GridSummary;
+import org.convgrid.engine.batch.StarTrackSink;
+import org.convgrid.engine.request.Age;
+import org.convgrid.engine.request.AgeOrigin;
+import org.convgrid.engine.state.BirthAbundances;
 import org.convgrid.engine.zams.ZeroAgeRequests;
 import org.convgrid.grids.HeliumLaw;
 import org.convgrid.output.AtomicFiles;
@@ -31,14 +35,16 @@ import picocli.CommandLine.ParentCommand;
 
 /** {@code convgrid star}: one model, its global properties and its convective zones. */
 @Command(name = "star", mixinStandardHelpOptions = true,
-        description = {"One main-sequence model (zero-age, or evolved to --age-gyr): its global properties and its "
-                + "convective zones.",
+        description = {"One model (the zero-age main sequence, or evolved to --age-gyr / --age-myr, from birth unless "
+                + "--age-origin zams): its global properties, phase, surface lithium and convective zones.",
             "Exit code 3 when the model does not converge or the age lies beyond core-hydrogen exhaustion (the reason "
                 + "is printed on one line)."})
 final class StarCommand implements Callable<Integer> {
 
     /** Oldest age accepted, Gyr: the evolver's age limit. */
     static final double MAX_AGE_GYR = MainSequenceEvolver.Settings.DEFAULT.maxAge() / Constants.GYR;
+
+    private static final double MYR_PER_GYR = 1000.0;
 
     /** Below this mass a failed zero-age model gets a note on the hydrogen-burning limit, Msun. */
     static final double NEAR_BURNING_LIMIT_MSUN = 0.1;
@@ -56,10 +62,20 @@ final class StarCommand implements Callable<Integer> {
             description = "Initial helium mass fraction (default: Y = 0.2471 + 1.5 Z).")
     Double helium;
 
-    @Option(names = "--age-gyr", defaultValue = "0", paramLabel = "A",
-            description = "Age since the zero-age main sequence, Gyr (default ${DEFAULT-VALUE}: the zero-age model; "
-                    + "older models are evolved from it, exit 3 past core-hydrogen exhaustion).")
-    double ageGyr;
+    @Option(names = "--age-gyr", paramLabel = "A",
+            description = "Age, Gyr, counted from --age-origin (without an age: the zero-age main-sequence model; "
+                    + "exit 3 past core-hydrogen exhaustion).")
+    Double ageGyr;
+
+    @Option(names = "--age-myr", paramLabel = "A",
+            description = "Age, Myr, counted from --age-origin (instead of --age-gyr).")
+    Double ageMyr;
+
+    @Option(names = "--age-origin", paramLabel = "birth|zams",
+            description = "Where age 0 lies: birth (the default when an age is given; the star is evolved from its "
+                    + "pre-main-sequence start, so a young star may still be contracting) or zams (evolved from the "
+                    + "zero-age main-sequence model).")
+    String ageOrigin;
 
     @Option(names = "--mixing-length", defaultValue = "1.8", paramLabel = "ALPHA",
             description = "Mixing length, pressure scale heights (default ${DEFAULT-VALUE}).")
@@ -112,10 +128,11 @@ final class StarCommand implements Callable<Integer> {
             OutputTargets.requireWritableFile("--profile", main.context().resolve(profile));
         }
         String id = String.format(java.util.Locale.ROOT, "star-m%.4f-z%.5f", massMsun, metals);
-        ModelRequest request = new ModelRequest(id, massMsun * Constants.M_SUN, metals, y, ageGyr * Constants.GYR,
-                options);
-        Composition composition = ZeroAgeRequests.initialComposition(request);
-        GridRequests.Answer answer = new GridRequests(TrackSink.NONE).answers(List.of(request)).get(0);
+        ModelRequest request = new ModelRequest(id, massMsun * Constants.M_SUN, metals, y, age(), options);
+        Composition composition = request.age().origin() == AgeOrigin.BIRTH
+                ? BirthAbundances.of(1.0 - y - metals, metals) : ZeroAgeRequests.initialComposition(request);
+        GridRequests.Answer answer = new GridRequests(StarTrackSink.NONE, MainSequenceEvolver.Settings.DEFAULT)
+                .answers(List.of(request)).get(0);
         ModelOutcome outcome = answer.outcome();
         if (format == OutputFormat.CSV) {
             try (CatalogueWriter writer = CatalogueWriter.startingWithHeader(main.out())) {
@@ -146,15 +163,52 @@ final class StarCommand implements Callable<Integer> {
         return ExitCodes.OK;
     }
 
+    /**
+     * The age asked for: none is the zero-age main-sequence model; an age counts from birth unless
+     * {@code --age-origin zams}. Age 0 from birth is refused (the start model, whose details are a choice).
+     */
+    private Age age() {
+        if (ageGyr != null && ageMyr != null) {
+            throw new UsageException("--age-gyr and --age-myr exclude each other: give the age in one unit");
+        }
+        AgeOrigin origin = AgeOrigin.BIRTH;
+        if (ageOrigin != null) {
+            origin = AgeOrigin.ofLabel(ageOrigin.strip().toLowerCase(java.util.Locale.ROOT));
+            if (origin == null) {
+                throw new UsageException("--age-origin must be birth or zams, got '" + ageOrigin + "'");
+            }
+        }
+        if (ageGyr == null && ageMyr == null) {
+            if (ageOrigin != null && origin == AgeOrigin.BIRTH) {
+                throw new UsageException("--age-origin birth needs an age (--age-gyr or --age-myr); without one "
+                        + "star gives the zero-age main-sequence model");
+            }
+            return Age.ZERO_AGE;
+        }
+        String option = ageGyr != null ? "--age-gyr" : "--age-myr";
+        double gyr = ageGyr != null ? ageGyr : ageMyr / MYR_PER_GYR;
+        double shown = ageGyr != null ? ageGyr : ageMyr;
+        double max = ageGyr != null ? MAX_AGE_GYR : MAX_AGE_GYR * MYR_PER_GYR;
+        String unit = ageGyr != null ? " Gyr" : " Myr";
+        if (origin == AgeOrigin.BIRTH && !(gyr > 0 && gyr <= MAX_AGE_GYR)) {
+            throw new UsageException(option + " must lie in (0, " + GridSummary.n(max) + "]" + unit + " from birth "
+                    + "(age 0 is the pre-main-sequence start model; --age-origin zams counts from the zero-age main "
+                    + "sequence), got " + shown);
+        }
+        if (!(gyr >= 0 && gyr <= MAX_AGE_GYR)) {
+            throw new UsageException(option + " must lie in [0, " + GridSummary.n(max) + "]" + unit + ", got "
+                    + shown);
+        }
+        return origin == AgeOrigin.BIRTH ? new Age.SinceBirth(gyr * Constants.GYR)
+                : new Age.SinceZeroAge(gyr * Constants.GYR);
+    }
+
     private PhysicsOptions options() {
         if (!(massMsun > 0 && massMsun <= 300)) {
             throw new UsageException("--mass must lie in (0, 300] solar masses, got " + massMsun);
         }
         if (!(metals >= 0 && metals < 0.1)) {
             throw new UsageException("--z must lie in [0, 0.1), got " + metals);
-        }
-        if (!(ageGyr >= 0 && ageGyr <= MAX_AGE_GYR)) {
-            throw new UsageException("--age-gyr must lie in [0, " + MAX_AGE_GYR + "] Gyr, got " + ageGyr);
         }
         if (!(mixingLength > 0 && mixingLength < 10)) {
             throw new UsageException("--mixing-length must lie in (0, 10) pressure scale heights, got " + mixingLength);

@@ -22,9 +22,15 @@ final class StarReport {
 
     static void write(ModelOutcome outcome, Composition composition, PrintWriter out) {
         var r = outcome.request();
-        String title = r.age() instanceof Age.SinceZeroAge since && since.seconds() > 0.0
-                ? "Model at " + GridSummary.n(since.seconds() / Constants.GYR) + " Gyr"
-                : "Zero-age model";
+        String title;
+        if (r.age() instanceof Age.SinceBirth since) {
+            title = "Model at " + GridSummary.n(since.seconds() / Constants.GYR) + " Gyr since birth";
+        } else if (r.age() instanceof Age.SinceZeroAge since && since.seconds() > 0.0) {
+            title = "Model at " + GridSummary.n(since.seconds() / Constants.GYR) + " Gyr since the zero-age main "
+                    + "sequence";
+        } else {
+            title = "Zero-age model";
+        }
         out.printf(Locale.ROOT, "%s: %.4f Msun, X = %.4f, Y = %.4f, Z = %.5f (initial)%n", title,
                 r.mass() / Constants.M_SUN, composition.x(), composition.y(), composition.z());
         out.printf(Locale.ROOT, "Physics: mixing length %.3f Hp, %s, opacity x %.3g%s%n", r.physics().mixingLength(),
@@ -44,11 +50,13 @@ final class StarReport {
         line(out, "central temperature", g.centralTemperature(), "K");
         line(out, "central density", g.centralDensity(), "g/cm^3");
         line(out, "central hydrogen", g.centralHydrogen(), "");
+        CatalogueRow row = OutcomeRows.toRow(outcome);
+        out.printf(Locale.ROOT, "  %-32s %s%n", "phase", row.phase().replace('_', ' '));
+        line(out, "surface lithium / birth value", row.surfaceLiRel(), "");
         out.println();
         out.printf(Locale.ROOT, "  %-32s %s%n", "structure", c.structureClass().label().replace('_', ' '));
         // the catalogue's reading of the zones: "-" where a quantity does not apply (a fully convective star has
         // no core, its one zone reaching the centre is reported as the envelope)
-        CatalogueRow row = OutcomeRows.toRow(outcome);
         line(out, "convective core, top", row.coreCzMassFrac(), "m/M");
         line(out, "convective core, top", row.coreCzRadiusFrac(), "r/R");
         line(out, "convective envelope, base", row.envCzBaseMassFrac(), "m/M");

@@ -58,7 +58,26 @@ class CheckCommandTest {
         assertThat(check.code()).as(check.err()).isEqualTo(0);
         assertThat(check.out()).contains("models:        8")
                 .contains("ages:          4: 0, 0.25, 0.5, 0.9 of each star's main-sequence lifetime (0 = ZAMS, "
-                        + "1 = core-hydrogen exhaustion at X_c = 1e-4)");
+                        + "1 = core-hydrogen exhaustion at X_c = 1e-4; evolved from birth, ages reported from birth)");
+    }
+
+    @Test
+    void printsWhereAgesCountFrom() throws Exception {
+        Path birth = CliHarness.writeGrid(work, "birth.yaml", """
+                mass: {values: [1.0, 2.0]}
+                metallicity: {z: 0.014, y: 0.27}
+                age: {myr: [20, 150]}
+                """);
+        CliHarness.Execution check = CliHarness.in(work, FakeChunkSolver.fast()).execute("check", birth.toString());
+        assertThat(check.code()).as(check.err()).isEqualTo(0);
+        assertThat(check.out()).contains("ages:          2: 0.02, 0.15 Gyr since birth (pre-main sequence included)");
+        Path zams = CliHarness.writeGrid(work, "zams.yaml", """
+                mass: {values: [1.0, 2.0]}
+                metallicity: {z: 0.014, y: 0.27}
+                age: {gyr: [0, 0.15], origin: zams}
+                """);
+        check = CliHarness.in(work, FakeChunkSolver.fast()).execute("check", zams.toString());
+        assertThat(check.out()).contains("ages:          2: 0, 0.15 Gyr since the ZAMS (0 = ZAMS)");
     }
 
     @Test

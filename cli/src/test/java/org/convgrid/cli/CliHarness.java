@@ -34,6 +34,7 @@ final class CliHarness {
                 enrichment: 1.5
             age:
               gyr: [0, 2.0]
+              origin: zams
             physics:
               mixing_length: 1.8
             output:

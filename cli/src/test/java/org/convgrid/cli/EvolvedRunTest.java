@@ -10,7 +10,7 @@ import java.util.stream.Stream;
 import org.convgrid.engine.batch.ChunkSolver;
 import org.convgrid.engine.batch.GridRequests;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
-import org.convgrid.engine.evolution.TrackSink;
+import org.convgrid.engine.batch.StarTrackSink;
 import org.convgrid.grids.GridSpec;
 import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.catalogue.CatalogueReader;
@@ -31,7 +31,7 @@ class EvolvedRunTest {
             title: Evolved test
             mass: {values: [1.0, 2.0]}
             metallicity: {z: [0.0188], y: [0.275]}
-            age: {gyr: [0, 1, 5]}
+            age: {gyr: [0, 1, 5], origin: zams}
             output: {dir: runs/evolved}
             """;
 
@@ -42,11 +42,11 @@ class EvolvedRunTest {
     private static final ChunkSolverFactory COARSE = new ChunkSolverFactory() {
         @Override
         public ChunkSolver solverFor(GridSpec grid) {
-            return solverFor(grid, TrackSink.NONE);
+            return solverFor(grid, StarTrackSink.NONE);
         }
 
         @Override
-        public ChunkSolver solverFor(GridSpec grid, TrackSink tracks) {
+        public ChunkSolver solverFor(GridSpec grid, StarTrackSink tracks) {
             return new GridRequests(tracks, MainSequenceEvolver.Settings.DEFAULT.scaled(3.0));
         }
     };
@@ -77,8 +77,9 @@ class EvolvedRunTest {
         Path sunTrack = dir.resolve("one/tracks/p0-z00-m000.csv");
         List<String> lines = Files.readAllLines(sunTrack);
         assertThat(lines.get(0)).isEqualTo(String.join(",", TrackColumns.ALL));
-        assertThat(lines.get(0)).startsWith("age_gyr,luminosity_lsun,radius_rsun,teff_k,log_g_cgs,central_temp_k,"
-                + "central_density_cgs,central_h_frac,conv_zones_mass_frac,burning_zone_mass_frac");
+        assertThat(lines.get(0)).startsWith("age_gyr,phase,luminosity_lsun,radius_rsun,teff_k,log_g_cgs,central_temp_k,"
+                + "central_density_cgs,central_h_frac,surface_li_rel,central_cz_top_mass_frac,env_cz_base_mass_frac,"
+                + "conv_zone_count,burning_inner_mass_frac,burning_outer_mass_frac");
         double previous = -1;
         for (String line : lines.subList(1, lines.size())) {
             double age = CsvNumbers.parse(line.split(",", -1)[0]);
@@ -86,7 +87,17 @@ class EvolvedRunTest {
             previous = age;
         }
         assertThat(previous).isEqualTo(5.0);
-        assertThat(lines.get(1).split(",", -1)[9]).as("burning zone at the centre").startsWith("0-");
+        String[] first = lines.get(1).split(",", -1);
+        assertThat(first[TrackColumns.ALL.indexOf(TrackColumns.BURNING_INNER)]).as("burning zone at the centre")
+                .isEqualTo("0.0");
+        // from the zero-age main sequence: main sequence throughout, lithium not followed
+        assertThat(first[TrackColumns.ALL.indexOf(TrackColumns.PHASE)]).isEqualTo("main_sequence");
+        assertThat(first[TrackColumns.ALL.indexOf(TrackColumns.SURFACE_LI)]).isEmpty();
+        assertThat(rows).allSatisfy(r -> assertThat(r.surfaceLiRel()).isNaN());
+        assertThat(rows.subList(0, 4)).allSatisfy(r -> assertThat(r.phase()).isEqualTo("main_sequence"));
+        assertThat(rows.subList(4, 6)).allSatisfy(r -> assertThat(r.phase()).isEmpty());
+        assertThat(dir.resolve("one/life_events.csv")).as("no life events from the zero-age main sequence")
+                .doesNotExist();
         assertThat(dir.resolve("one/tracks/p0-z00-m001.csv")).exists();
 
         CliHarness.Execution two = run("two", 2);
@@ -95,7 +106,7 @@ class EvolvedRunTest {
                 .isEqualTo(Files.readAllBytes(dir.resolve("one/catalogue.ecsv")));
         try (Stream<Path> files = Files.list(dir.resolve("one/tracks"))) {
             List<Path> tracks = files.sorted().toList();
-            assertThat(tracks).hasSize(2);
+            assertThat(tracks).hasSize(4);
             for (Path t : tracks) {
                 assertThat(Files.readAllBytes(dir.resolve("two/tracks").resolve(t.getFileName())))
                         .isEqualTo(Files.readAllBytes(t));

@@ -105,7 +105,7 @@ class RunCommandTest {
                 mass: {from: 0.1, to: 2.0, count: 1001}
                 metallicity: {z: [0.001, 0.002, 0.004, 0.008, 0.01, 0.014, 0.02, 0.025, 0.03, 0.04], y: [0.25, 0.25,
                   0.25, 0.26, 0.26, 0.27, 0.28, 0.28, 0.29, 0.30]}
-                age: {gyr: [0, 1, 2, 3, 4, 5, 6, 7, 8, 9]}
+                age: {gyr: [0, 1, 2, 3, 4, 5, 6, 7, 8, 9], origin: zams}
                 """);
         CliHarness.Execution refused = run("run", "--no-refine", big.toString(), "--out", "big");
         assertThat(refused.code()).isEqualTo(2);

@@ -11,7 +11,10 @@ import org.convgrid.engine.batch.ChunkSolver;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.evolution.EvolutionStep;
-import org.convgrid.engine.evolution.TrackSink;
+import org.convgrid.engine.batch.StarTrackSink;
+import org.convgrid.engine.birth.LifeEvents;
+import org.convgrid.engine.birth.Phase;
+import org.convgrid.engine.birth.TrackPoint;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.grids.GridSpec;
 import org.convgrid.survey.ChunkSolverFactory;
@@ -32,14 +35,16 @@ class ShardTracksTest {
         }
 
         @Override
-        public ChunkSolver solverFor(GridSpec grid, TrackSink tracks) {
+        public ChunkSolver solverFor(GridSpec grid, StarTrackSink tracks) {
             return chunk -> {
                 List<ModelOutcome> out = FakeChunkSolver.fast().solve(chunk);
                 for (ModelRequest r : chunk) {
                     if (r.age().isZeroAge()) {
                         double m = r.mass() / Constants.M_SUN;
-                        tracks.accept(r, List.of(new EvolutionStep(0.0, 0.0, m * Constants.L_SUN,
-                                m * Constants.R_SUN, 5000.0 + m, 1.5e7, 100.0, 0.7, List.of(), 0.0, 0.1, 3)));
+                        tracks.accept(r, List.of(new TrackPoint(new EvolutionStep(0.0, 0.0, m * Constants.L_SUN,
+                                m * Constants.R_SUN, 5000.0 + m, 1.5e7, 100.0, 0.7, List.of(), 0.0, 0.1, 3),
+                                Phase.MAIN_SEQUENCE, Double.NaN, Double.NaN, Double.NaN)),
+                                new LifeEvents(1e13 * m, 2e14 / m, Double.NaN, Double.NaN, 3e14 * m));
                     }
                 }
                 return out;
@@ -68,8 +73,8 @@ class ShardTracksTest {
                 "runs/test-survey-shard-3-of-3", "--out", "merged").code()).isZero();
 
         List<Path> single = tracks(work.resolve("single"));
-        // 2 metallicities x 39 masses, one track each, named by the model id without its age part
-        assertThat(single).hasSize(78);
+        // 2 metallicities x 39 masses, one track and one zone table each, named by the model id without its age part
+        assertThat(single).hasSize(2 * 78);
         assertThat(single.get(0).getFileName().toString()).isEqualTo("p0-z00-m000.csv");
         List<Path> merged = tracks(work.resolve("merged"));
         assertThat(merged).extracting(Path::getFileName).isEqualTo(single.stream().map(Path::getFileName).toList());
@@ -77,5 +82,13 @@ class ShardTracksTest {
             assertThat(Files.readAllBytes(work.resolve("merged/tracks").resolve(t.getFileName())))
                     .isEqualTo(Files.readAllBytes(t));
         }
+        // one life-events row per star, sorted by track id: the merged table is the single run's, byte for byte
+        List<String> events = Files.readAllLines(work.resolve("single/life_events.csv"));
+        assertThat(events).hasSize(1 + 78);
+        assertThat(events.get(0)).startsWith("track_id,mass_msun,z_init,y_init,mixing_length,overshoot_hp,"
+                + "radiative_core_myr,zams_myr,conv_core_onset_myr,conv_core_end_myr,li_halved_myr");
+        assertThat(events.get(1)).startsWith("p0-z00-m000,");
+        assertThat(Files.readAllBytes(work.resolve("merged/life_events.csv")))
+                .isEqualTo(Files.readAllBytes(work.resolve("single/life_events.csv")));
     }
 }

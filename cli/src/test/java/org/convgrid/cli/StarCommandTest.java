@@ -35,6 +35,11 @@ class StarCommandTest {
         List<String> header = Arrays.asList(lines[0].split(","));
         assertThat(header).startsWith(CatalogueColumns.FIXED.toArray(String[]::new));
         assertThat(lines[1]).contains(",ok,").contains(",conv_envelope,");
+        // without an age: the zero-age main-sequence model, lithium not followed (empty cell)
+        List<String> row = Arrays.asList(lines[1].split(",", -1));
+        assertThat(row.get(header.indexOf("phase"))).isEqualTo("main_sequence");
+        assertThat(row.get(header.indexOf("surface_li_rel"))).isEmpty();
+        assertThat(row.get(header.indexOf("age_gyr"))).isEqualTo("0.0");
         List<String> profile = Files.readAllLines(dir.resolve("p.csv"));
         assertThat(profile.size()).isGreaterThan(300);
         assertThat(profile.get(0)).startsWith("mass_frac,radius_frac");
@@ -49,12 +54,43 @@ class StarCommandTest {
     }
 
     @Test
+    void ageOptionsThatContradictOrMeanNothingAreUsageErrors() {
+        assertThat(run("star", "--mass", "1", "--z", "0.02", "--age-gyr", "1", "--age-myr", "5")).isEqualTo(2);
+        assertThat(err.toString()).contains("--age-gyr and --age-myr exclude each other");
+        assertThat(run("star", "--mass", "1", "--z", "0.02", "--age-myr", "5", "--age-origin", "formation"))
+                .isEqualTo(2);
+        assertThat(err.toString()).contains("--age-origin must be birth or zams").contains("formation");
+        assertThat(run("star", "--mass", "1", "--z", "0.02", "--age-origin", "birth")).isEqualTo(2);
+        assertThat(err.toString()).contains("--age-origin birth needs an age");
+        assertThat(run("star", "--mass", "1", "--z", "0.02", "--age-myr", "0")).isEqualTo(2);
+        assertThat(err.toString()).contains("--age-myr must lie in (0, 20000] Myr from birth");
+        assertThat(run("star", "--mass", "1", "--z", "0.02", "--age-myr", "25000", "--age-origin", "zams"))
+                .isEqualTo(2);
+        assertThat(err.toString()).contains("--age-myr must lie in [0, 20000] Myr");
+    }
+
+    @Test
+    void anAgeCountsFromBirthByDefault() {
+        int code = run("star", "--mass", "1", "--z", "0.02", "--age-myr", "5", "--format", "csv");
+        assertThat(code).as(err.toString()).isZero();
+        String[] lines = out.toString().lines().filter(l -> !l.startsWith("#")).toArray(String[]::new);
+        List<String> header = Arrays.asList(lines[0].split(","));
+        List<String> row = Arrays.asList(lines[1].split(",", -1));
+        // 1 Msun reaches the main sequence after ~50 Myr (Iben 1965, ApJ 141, 993, from memory): at 5 Myr it contracts
+        assertThat(row.get(header.indexOf("phase"))).isEqualTo("pre_main_sequence");
+        assertThat(Double.parseDouble(row.get(header.indexOf("surface_li_rel")))).isBetween(0.0, 1.0);
+        assertThat(row.get(header.indexOf("age_gyr"))).isEqualTo("0.005");
+    }
+
+    @Test
     void anAgeBeyondCoreHydrogenExhaustionIsExitCodeThreeWithTheReason() {
         // a 2 Msun star lives ~1.1 Gyr on the main sequence (Schaller et al. 1992, A&A Suppl. 96, 269, Table 47)
-        int code = run("star", "--mass", "2", "--z", "0.0188", "--y", "0.275", "--age-gyr", "3");
+        int code = run("star", "--mass", "2", "--z", "0.0188", "--y", "0.275", "--age-gyr", "3", "--age-origin",
+                "zams");
         assertThat(code).as(err.toString()).isEqualTo(3);
         assertThat(err.toString()).contains("past the main sequence").contains("core hydrogen exhausted");
-        assertThat(out.toString()).startsWith("Model at 3 Gyr").contains("past_main_sequence");
+        assertThat(out.toString()).startsWith("Model at 3 Gyr since the zero-age main sequence")
+                .contains("past_main_sequence");
     }
 
     @Test

@@ -8,6 +8,7 @@ import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.HexFormat;
+import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 
@@ -54,6 +55,10 @@ public final class GridHash {
         // Gyr grids keep their original line, so the fingerprints of existing runs do not change.
         text.append(spec.ages().fractions() ? "age_ms_fraction=" : "age_gyr=").append(spec.ages().values())
                 .append('\n');
+        // ages from birth are other models; zero-age-origin grids keep their fingerprint without this line
+        if (spec.ages().origin() == AgeOrigin.BIRTH) {
+            text.append("age_origin=birth\n");
+        }
         PhysicsAxes physics = spec.physics();
         text.append("mixing_length=").append(physics.mixingLengths()).append('\n');
         text.append("overshoot=").append(physics.overshoots()).append('\n');

@@ -41,7 +41,7 @@ public record GridSpec(String title, List<Double> massesMsun, List<MetallicityPo
         massesMsun = increasing(massesMsun, "mass");
         metallicities = List.copyOf(metallicities);
         Objects.requireNonNull(ages, "ages");
-        ages = new AgeAxis(ages.fractions(), increasing(ages.values(), "age"));
+        ages = ages.withValues(increasing(ages.values(), "age"));
         Objects.requireNonNull(physics, "physics");
         Objects.requireNonNull(transitions, "transitions");
         if (metallicities.isEmpty()) {

@@ -21,8 +21,12 @@ public record RunLayout(Path root) {
     public static final String TRANSITIONS = "transitions.csv";
     /** Provenance of the run. */
     public static final String MANIFEST = "manifest.yaml";
-    /** One CSV per star evolved beyond age 0, named by its track id. */
+    /** One CSV per star evolved beyond age 0, named by its track id, with its zone table beside it. */
     public static final String TRACKS = "tracks";
+    /** Ending of a track's zone table ({@code tracks/<track id>.zones.csv}): one row per zone of every step. */
+    public static final String TRACK_ZONES_SUFFIX = ".zones.csv";
+    /** One row per star evolved from birth: the ages at which its life changes. */
+    public static final String LIFE_EVENTS = "life_events.csv";
     /** One CSV per model, named by its model id, when the grid asks for profiles. */
     public static final String PROFILES = "profiles";
     /** The charts. */
@@ -54,7 +58,8 @@ public record RunLayout(Path root) {
         if (!java.nio.file.Files.exists(catalogue()) && java.nio.file.Files.exists(root.resolve(CATALOGUE_V1))) {
             throw OutputFormatException.earlierRunDirectory(root + " was written by an earlier convgrid ("
                     + CATALOGUE_V1 + ", catalogue v1); this version reads " + CATALOGUE + " (catalogue v2): "
-                    + "run the grid again into a new --out (see the README, \"Catalogue\")");
+                    + "run the grid again into a new --out (see the README, \"Catalogue\"; its ages now count from "
+                    + "birth unless the grid says 'origin: zams', and its track files hold no packed zone lists)");
         }
     }
 
@@ -85,6 +90,20 @@ public record RunLayout(Path root) {
     /** The track file of a star, by its track id (a model id without the age index). */
     public Path trackFile(String trackId) {
         return tracks().resolve(trackId + TABLE_EXTENSION);
+    }
+
+    /** The zone table of a star's track, by its track id. */
+    public Path trackZonesFile(String trackId) {
+        return tracks().resolve(trackId + TRACK_ZONES_SUFFIX);
+    }
+
+    /** Whether a file in {@code tracks} is a zone table (not a track file). */
+    public static boolean isTrackZones(Path file) {
+        return file.getFileName().toString().endsWith(TRACK_ZONES_SUFFIX);
+    }
+
+    public Path lifeEvents() {
+        return root.resolve(LIFE_EVENTS);
     }
 
     /** The profile file of a model. */

@@ -101,7 +101,7 @@ public record RunData(List<CatalogueRow> catalogue, List<TransitionRow> transiti
         List<Track> tracks = TrackReader.readAll(layout.tracks());
         Map<String, TrackTimeline> timelines = new HashMap<>();
         for (Track t : tracks) {
-            timelines.put(t.trackId(), TrackTimeline.read(layout.trackFile(t.trackId())));
+            timelines.put(t.trackId(), TrackTimeline.of(t.steps()));
         }
         return new RunData(catalogue, transitions, fromFile, manifest, radiusZones(layout, catalogue), tracks,
                 timelines);

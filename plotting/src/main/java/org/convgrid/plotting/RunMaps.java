@@ -8,6 +8,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.Slice;
@@ -148,7 +149,8 @@ public final class RunMaps {
                         "Transition masses against age, one line per Z and method: shaded boxes span the two models "
                                 + "that bracket each value, dashed boxes the windows of small transient cores, "
                                 + p.describe() + ".",
-                        () -> TransitionAgeTrendRenderer.render(TransitionAgeTrend.build(p, run.transitions()))));
+                        () -> TransitionAgeTrendRenderer.render(TransitionAgeTrend.build(p, run.transitions()),
+                                run.manifest() == null ? AgeOrigin.ZAMS : run.manifest().ageOrigin())));
             }
         }
         entries.addAll(zonesAgainstAge(run));

@@ -35,7 +35,7 @@ import org.convgrid.plotting.label.SliceLabels;
 public final class TestRuns {
 
     public static final String GRID_TEXT = "title: Synthetic survey\nmass:\n  from: 0.1\n  to: 2.0\n  step: 0.05\n"
-            + "metallicity:\n  z: [0.004, 0.014, 0.02]\nage:\n  gyr: [0, 1.0, 4.57]\n";
+            + "metallicity:\n  z: [0.004, 0.014, 0.02]\nage:\n  gyr: [0, 1.0, 4.57]\n  origin: zams\n";
 
     private TestRuns() {
     }

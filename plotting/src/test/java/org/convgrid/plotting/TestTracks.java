@@ -18,8 +18,9 @@ import org.convgrid.output.track.Track;
  */
 public final class TestTracks {
 
-    public static final String HEADER = "age_gyr,luminosity_lsun,radius_rsun,teff_k,log_g_cgs,center_temp_k,"
-            + "center_density_cgs,center_h_frac,conv_zones_mass_frac,burning_zone_mass_frac,solver_iterations";
+    public static final String HEADER = "age_gyr,phase,luminosity_lsun,radius_rsun,teff_k,log_g_cgs,central_temp_k,"
+            + "central_density_cgs,central_h_frac,surface_li_rel,central_cz_top_mass_frac,env_cz_base_mass_frac,"
+            + "conv_zone_count,burning_inner_mass_frac,burning_outer_mass_frac,solver_iterations";
 
     private TestTracks() {
     }
@@ -53,11 +54,16 @@ public final class TestTracks {
             }
             double burnHi = round(m < 1.3 ? 0.45 - 0.1 * share : 0.12 - 0.04 * share);
             double burnLo = share > 0.85 ? round(0.4 * burnHi * (share - 0.85) / 0.15) : 0.0;
-            b.append(String.join(",", CsvNumbers.format(age), CsvNumbers.format(r.luminosityLsun()),
+            // the zones through the track's own central and surface columns (these tracks have no shells)
+            double centralTop = !zones.isEmpty() && zones.get(0).lo() == 0 ? zones.get(0).hi() : Double.NaN;
+            Span last = zones.isEmpty() ? null : zones.get(zones.size() - 1);
+            double envelopeBase = last != null && last.hi() == 1 ? last.lo() : Double.NaN;
+            b.append(String.join(",", CsvNumbers.format(age), "main_sequence", CsvNumbers.format(r.luminosityLsun()),
                     CsvNumbers.format(r.radiusRsun()), CsvNumbers.format(r.teffK()), CsvNumbers.format(r.logGCgs()),
                     CsvNumbers.format(r.centralTempK()), CsvNumbers.format(r.centralDensityCgs()),
-                    CsvNumbers.format(r.centralHFrac()), Span.join(zones), new Span(burnLo, burnHi).toString(),
-                    Integer.toString(5 + k % 3))).append('\n');
+                    CsvNumbers.format(r.centralHFrac()), "", CsvNumbers.format(centralTop),
+                    CsvNumbers.format(envelopeBase), Integer.toString(zones.size()), CsvNumbers.format(burnLo),
+                    CsvNumbers.format(burnHi), Integer.toString(5 + k % 3))).append('\n');
         }
         return b.toString();
     }

@@ -1,7 +1,7 @@
 package org.convgrid.survey;
 
 import org.convgrid.engine.batch.ChunkSolver;
-import org.convgrid.engine.evolution.TrackSink;
+import org.convgrid.engine.batch.StarTrackSink;
 import org.convgrid.grids.GridSpec;
 
 /**
@@ -19,13 +19,14 @@ public interface ChunkSolverFactory {
     ChunkSolver solverFor(GridSpec grid);
 
     /**
-     * A solver that also hands the evolution track of every star evolved beyond age 0 to {@code tracks}. The
+     * A solver that also hands the evolution track of every star evolved beyond age 0 (with its phases, surface
+     * lithium and, from birth, its life events) to {@code tracks}. The
      * default ignores the tracks (fakes that do not evolve).
      *
      * @param grid the validated grid
      * @param tracks thread-safe receiver of the tracks
      */
-    default ChunkSolver solverFor(GridSpec grid, TrackSink tracks) {
+    default ChunkSolver solverFor(GridSpec grid, StarTrackSink tracks) {
         return solverFor(grid);
     }
 }

@@ -150,6 +150,7 @@ public final class GridRun {
             emitted = ChunkSweep.run(work, s.grid().spec().requests().iterator(), MASSES_PER_CHUNK, plan.shard(),
                     r -> done.contains(r.modelId()), timed, sink, progress, plan.remaining());
         }
+        LifeEventLog.tidy(dir.layout().lifeEvents());
         List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
         Map<ModelStatus, Long> counts = RunFinishing.countByStatus(rows);
         double median = timed.medianSecondsPerModel();
@@ -164,7 +165,7 @@ public final class GridRun {
         GridFile g = s.grid();
         return new RunManifest(toolVersion, toolCommit, g.name(), g.text(), g.fileSha256(), g.modelsSha256(),
                 g.spec().physics().combinations(), started, finished, s.threads(), ShardChoice.label(shard), counts,
-                median);
+                median, g.spec().ages().origin());
     }
 
     private static String shard(Shard shard) {

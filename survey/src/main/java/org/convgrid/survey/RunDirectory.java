@@ -124,9 +124,9 @@ public final class RunDirectory {
         }
     }
 
-    /** Removes the run's own tables (catalogue, transitions, manifest), for {@code --force}. */
+    /** Removes the run's own tables (catalogue, zones, transitions, manifest, life events), for {@code --force}. */
     public void clear() throws IOException {
-        for (Path file : List.of(catalogue(), zones(), transitions(), manifest(),
+        for (Path file : List.of(catalogue(), zones(), transitions(), manifest(), layout.lifeEvents(),
                 root().resolve(RunLayout.CATALOGUE_V1))) {
             Files.deleteIfExists(file);
         }

@@ -28,7 +28,8 @@ import org.convgrid.output.manifest.RunManifestReader;
  * Joins shard run directories into one run directory whose catalogue is byte for byte the one a single run of the
  * grid writes: the grid text recorded in the manifests gives the grid order, each row's line is copied unchanged.
  * Every shard must record the same models_sha256; a model missing from every shard, present twice, or not in the
- * grid stops the merge before anything is written. Track files of the shards are copied into the merged {@code tracks}.
+ * grid stops the merge before anything is written. Track files (with their zone tables) of the shards are copied into the merged {@code tracks}, their
+ * life-events tables joined into one.
  */
 public final class ShardMerger {
 
@@ -81,6 +82,8 @@ public final class ShardMerger {
                 }
             });
             copyTracks(shards, out);
+            LifeEventLog.merge(shards.stream().map(d -> new RunDirectory(d).layout().lifeEvents()).toList(),
+                    out.layout().lifeEvents());
             List<CatalogueRow> mergedRows = CatalogueReader.read(out.catalogue());
             writeZones(shards, out, mergedRows);
             run = RunFinishing.writeTables(out, grid, merged(manifests, mergedRows), mergedRows);
@@ -164,6 +167,6 @@ public final class ShardMerger {
                 .filter(Double::isFinite).toArray());
         return new RunManifest(toolVersion, toolCommit, first.gridFile(), first.gridText(), first.gridFileSha256(),
                 first.gridModelsSha256(), first.physics(), started, finished, threads, null,
-                RunFinishing.countByStatus(rows), median);
+                RunFinishing.countByStatus(rows), median, first.ageOrigin());
     }
 }

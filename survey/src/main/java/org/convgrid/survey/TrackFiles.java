@@ -4,37 +4,50 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.atomic.AtomicReference;
+import org.convgrid.engine.batch.StarTrackSink;
+import org.convgrid.engine.birth.LifeEvents;
+import org.convgrid.engine.birth.TrackPoint;
 import org.convgrid.engine.request.ModelRequest;
-import org.convgrid.engine.evolution.EvolutionStep;
-import org.convgrid.engine.evolution.TrackSink;
 import org.convgrid.grids.ModelIdFormat;
 import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.RunLayout;
+import org.convgrid.output.events.LifeEventRow;
 import org.convgrid.output.track.TrackWriter;
 
 /**
- * Writes every track it receives to {@code tracks/<model_id without age>.csv} of a run directory, atomically (a
- * reader never sees half a file; a recomputed track replaces the old one). The directory is created with the first
- * track, so a zero-age grid leaves none. Thread-safe: each track has its own file. An I/O failure does not stop the
- * models (their rows are still worth having): the first one is kept for {@link #failure()}.
+ * Writes every track it receives to {@code tracks/<model_id without age>.csv} of a run directory with its zone table
+ * {@code tracks/<model_id without age>.zones.csv}, atomically (a reader never sees half a file; a recomputed track
+ * replaces the old one), and the life events of every star evolved from birth to the run's {@link LifeEventLog}. The
+ * directory is created with the first track, so a zero-age grid leaves none. Thread-safe: each track has its own
+ * files and the log serialises its rows. An I/O failure does not stop the models (their rows are still worth
+ * having): the first one is kept for {@link #failure()}.
  */
-public final class TrackFiles implements TrackSink {
+public final class TrackFiles implements StarTrackSink {
 
     private final RunLayout layout;
+    private final LifeEventLog events;
     private final AtomicReference<IOException> failure = new AtomicReference<>();
 
-    /** @param layout the run directory whose {@code tracks} receive the files */
+    /** @param layout the run directory whose {@code tracks} and life-events table receive the files */
     public TrackFiles(RunLayout layout) {
         this.layout = layout;
+        this.events = new LifeEventLog(layout.lifeEvents());
     }
 
     @Override
-    public void accept(ModelRequest first, List<EvolutionStep> steps) {
-        Path target = layout.trackFile(ModelIdFormat.trackIdOf(first.modelId()));
+    public void accept(ModelRequest first, List<TrackPoint> points, LifeEvents lifeEvents) {
+        String id = ModelIdFormat.trackIdOf(first.modelId());
+        Path target = layout.trackFile(id);
         try {
-            AtomicFiles.write(target, out -> TrackWriter.write(first.mass(), steps, out));
+            AtomicFiles.write(target, out -> TrackWriter.write(first.mass(), points, out));
+            target = layout.trackZonesFile(id);
+            AtomicFiles.write(target, out -> TrackWriter.writeZones(points, out));
+            if (lifeEvents != null) {
+                target = layout.lifeEvents();
+                events.append(LifeEventRow.of(id, first, lifeEvents));
+            }
         } catch (IOException e) {
-            failure.compareAndSet(null, new IOException("cannot write track " + target + ": "
+            failure.compareAndSet(null, new IOException("cannot write " + target + ": "
                     + IoMessages.reason(e), e));
         }
     }

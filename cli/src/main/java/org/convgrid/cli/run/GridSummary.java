@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.stream.Collectors;
+import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.grids.GridFile;
 import org.convgrid.grids.GridSpec;
@@ -31,10 +32,13 @@ public final class GridSummary {
         lines.add("masses:        " + axis(g.massesMsun(), "Msun"));
         lines.add("metallicities: " + g.metallicities().size() + ": " + g.metallicities().stream()
                 .map(p -> "Z=" + n(p.z()) + " Y=" + n(p.y())).collect(Collectors.joining(", ")));
+        boolean birth = g.ages().origin() == AgeOrigin.BIRTH;
         lines.add(g.ages().fractions()
                 ? "ages:          " + axis(g.ages().values(), "of each star's main-sequence lifetime")
-                        + " (0 = ZAMS, 1 = core-hydrogen exhaustion at X_c = 1e-4)"
-                : "ages:          " + axis(g.ages().values(), "Gyr") + " (0 = ZAMS)");
+                        + " (0 = ZAMS, 1 = core-hydrogen exhaustion at X_c = 1e-4"
+                        + (birth ? "; evolved from birth, ages reported from birth)" : ")")
+                : "ages:          " + axis(g.ages().values(), "Gyr")
+                        + (birth ? " since birth (pre-main sequence included)" : " since the ZAMS (0 = ZAMS)"));
         List<PhysicsOptions> physics = g.physics().combinations();
         lines.add("physics:       " + physics.size() + (physics.size() == 1 ? " combination" : " combinations"));
         for (PhysicsOptions p : physics) {

@@ -4,10 +4,15 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
+import org.convgrid.engine.birth.Phase;
+import org.convgrid.engine.birth.TrackPoint;
 import org.convgrid.engine.request.Age;
+import org.convgrid.engine.request.AgeOrigin;
+import org.convgrid.engine.request.LifeStage;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.evolution.AgedModel;
 import org.convgrid.engine.evolution.EvolutionResult;
@@ -31,7 +36,11 @@ import org.convgrid.engine.zams.ZeroAgeRequests;
  * landing exactly on every requested age (no interpolation). Age 0 is the zero-age model itself; ages are {@link
  * Age.SinceZeroAge} in s. Ages beyond core-hydrogen exhaustion are {@link ModelStatus#PAST_MAIN_SEQUENCE} with the
  * exhaustion age in the detail; a failed evolution leaves the ages it did not reach {@link ModelStatus#NOT_CONVERGED}.
- * Each star with an age above zero hands its track to the {@link TrackSink}.
+ * Each star with an age above zero hands its track to the {@link StarTrackSink}.
+ *
+ * <p>Requests counted from birth ({@link Age.SinceBirth}, or fractions with origin {@link AgeOrigin#BIRTH}) are
+ * answered by {@link BirthAges}: one evolution from the pre-main-sequence start model per star, landing on every
+ * requested age, with the phase and surface lithium of each answer and the star's life events handed to the sink.
  *
  * <p>When a star's request ages are {@link Age.MainSequenceFraction}s, they are fractions f of its main-sequence
  * lifetime: the star is first evolved to core-hydrogen exhaustion ({@link LifetimeSearch}) to find t_MS, then evolved
@@ -56,16 +65,24 @@ public final class GridRequests implements ChunkSolver {
     }
 
     private final PhysicsBundles physics = new PhysicsBundles();
-    private final TrackSink tracks;
+    private final StarTrackSink tracks;
     private final MainSequenceEvolver.Settings settings;
 
     /**
-     * @param tracks receives the track of every star evolved beyond age 0
+     * @param tracks receives the track of every star evolved beyond age 0, with phases, lithium and life events
+     * @param settings time-step settings; {@code maxAge} caps the ages answered (older ones fail)
+     */
+    public GridRequests(StarTrackSink tracks, MainSequenceEvolver.Settings settings) {
+        this.tracks = tracks;
+        this.settings = settings;
+    }
+
+    /**
+     * @param tracks receives the evolution steps of every star evolved beyond age 0
      * @param settings time-step settings; {@code maxAge} caps the ages answered (older ones fail)
      */
     public GridRequests(TrackSink tracks, MainSequenceEvolver.Settings settings) {
-        this.tracks = tracks;
-        this.settings = settings;
+        this(StarTrackSink.stepsOnly(tracks), settings);
     }
 
     /** Default time steps ({@link MainSequenceEvolver.Settings#DEFAULT}). */
@@ -86,8 +103,9 @@ public final class GridRequests implements ChunkSolver {
         }
         ModelRequest first = chunk.get(0);
         Composition composition = ZeroAgeRequests.initialComposition(first);
-        PhysicsSet set = physics.of(first.physics(), composition);
-        ZamsTrack track = new ZamsTrack(new ZamsBuilder(set), composition);
+        // the zero-age line is opened by the first star that needs it: stars from birth start elsewhere
+        PhysicsSet set = null;
+        ZamsTrack track = null;
         int start = 0;
         while (start < chunk.size()) {
             int end = start + 1;
@@ -95,10 +113,19 @@ public final class GridRequests implements ChunkSolver {
                 end++;
             }
             List<ModelRequest> star = chunk.subList(start, end);
-            ZamsResult zeroAge = track.solve(star.get(0).mass());
-            out.addAll(star.get(0).age() instanceof Age.MainSequenceFraction
-                    ? FractionAges.answers(this, set, star, zeroAge)
-                    : star(set, star, zeroAge, settings));
+            if (star.get(0).age().origin() == AgeOrigin.BIRTH) {
+                out.addAll(star.get(0).age() instanceof Age.MainSequenceFraction
+                        ? BirthAges.fractions(this, star) : BirthAges.answers(this, star, settings));
+            } else {
+                if (track == null) {
+                    set = physics.of(first.physics(), composition);
+                    track = new ZamsTrack(new ZamsBuilder(set), composition);
+                }
+                ZamsResult zeroAge = track.solve(star.get(0).mass());
+                out.addAll(star.get(0).age() instanceof Age.MainSequenceFraction
+                        ? FractionAges.answers(this, set, star, zeroAge)
+                        : star(set, star, zeroAge, settings));
+            }
             start = end;
         }
         return out;
@@ -139,18 +166,27 @@ public final class GridRequests implements ChunkSolver {
             }
             return out;
         }
-        tracks.accept(star.get(0), result.steps());
+        tracks.accept(star.get(0), result.steps().stream()
+                .map(s -> new TrackPoint(s, Phase.MAIN_SEQUENCE, Double.NaN, Double.NaN, Double.NaN)).toList(), null);
         for (int i = 0; i < star.size(); i++) {
-            out.add(answer(star.get(i), result.models().get(i), result, zeroAge.iterations()));
+            out.add(answer(star.get(i), result.models().get(i), result, zeroAge.iterations(),
+                    LifeStage.MAIN_SEQUENCE_UNTRACED));
         }
         return out;
     }
 
-    private Answer answer(ModelRequest request, AgedModel aged, EvolutionResult result, int zeroAgeIterations) {
+    /**
+     * The answer for one requested age of an evolution.
+     *
+     * @param startIterations Newton iterations spent on the first model of the evolution
+     * @param stage the phase and surface lithium of the answer's model
+     */
+    Answer answer(ModelRequest request, AgedModel aged, EvolutionResult result, int startIterations,
+                  LifeStage stage) {
         if (aged.status() == ModelStatus.OK) {
             StellarModel m = aged.model();
             return new Answer(new ModelOutcome.Solved(request, m.global(), m.convection(),
-                    zeroAgeIterations + iterationsUpTo(result, aged.age())), m);
+                    startIterations + iterationsUpTo(result, aged.age()), stage), m);
         }
         String detail = aged.detail();
         if (aged.status() == ModelStatus.PAST_MAIN_SEQUENCE && Double.isFinite(result.exhaustionAge())) {
@@ -172,7 +208,7 @@ public final class GridRequests implements ChunkSolver {
     }
 
     /** The settings stopped at the oldest requested age (no steps beyond what the catalogue asks for). */
-    private static MainSequenceEvolver.Settings stoppingAt(MainSequenceEvolver.Settings s, double oldest) {
+    static MainSequenceEvolver.Settings stoppingAt(MainSequenceEvolver.Settings s, double oldest) {
         return new MainSequenceEvolver.Settings(s.maxCentralHydrogenChange(), s.exhaustionFraction(),
                 s.maxLuminosityChange(), s.maxGrowth(), s.endCentralHydrogen(), Math.min(oldest, s.maxAge()),
                 s.stepBudget(), s.retryBudget());
@@ -181,6 +217,16 @@ public final class GridRequests implements ChunkSolver {
     /** The time-step settings given at construction. */
     MainSequenceEvolver.Settings settings() {
         return settings;
+    }
+
+    /** The receiver of the tracks. */
+    StarTrackSink tracks() {
+        return tracks;
+    }
+
+    /** The shared physics bundle of some options and composition. */
+    PhysicsSet physicsOf(PhysicsOptions options, Composition composition) {
+        return physics.of(options, composition);
     }
 
     static StellarModel modelOf(ZamsResult r) {

@@ -36,14 +36,22 @@ public sealed interface ModelOutcome permits ModelOutcome.Solved, ModelOutcome.F
      *
      * @param global surface and central properties
      * @param convection the convective zones
+     * @param stage the phase and surface lithium of the model
      */
     record Solved(ModelRequest request, GlobalProperties global, ConvectiveStructure convection,
-                  int solverIterations) implements ModelOutcome {
+                  int solverIterations, LifeStage stage) implements ModelOutcome {
 
         public Solved {
             Objects.requireNonNull(request, "request");
             Objects.requireNonNull(global, "global");
             Objects.requireNonNull(convection, "convection");
+            Objects.requireNonNull(stage, "stage");
+        }
+
+        /** A model built from the zero-age main sequence (on the main sequence, lithium not followed). */
+        public Solved(ModelRequest request, GlobalProperties global, ConvectiveStructure convection,
+                      int solverIterations) {
+            this(request, global, convection, solverIterations, LifeStage.MAIN_SEQUENCE_UNTRACED);
         }
 
         @Override
@@ -58,7 +66,7 @@ public sealed interface ModelOutcome permits ModelOutcome.Solved, ModelOutcome.F
 
         @Override
         public Solved withRequest(ModelRequest other) {
-            return new Solved(other, global, convection, solverIterations);
+            return new Solved(other, global, convection, solverIterations, stage);
         }
 
         @Override

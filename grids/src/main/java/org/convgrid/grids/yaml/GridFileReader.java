@@ -10,6 +10,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
+import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.grids.GridProblemKind;
 import org.convgrid.grids.AgeAxis;
 import org.convgrid.grids.GridFile;
@@ -31,8 +32,9 @@ import org.snakeyaml.engine.v2.nodes.Node;
  * Reads a grid file (format in the README, "A grid file") into a validated {@link GridSpec}. The YAML is composed into nodes
  * and walked by hand so every problem carries its file:line:column; all problems of a file are collected and thrown
  * together as one {@link GridFileException}. Required sections: {@code mass}, {@code metallicity}. Defaults:
- * {@code title} = the file name, {@code age: {gyr: [0]}} (ZAMS; {@code age: {ms_fraction: [...]}} instead gives
- * fractions in [0, 1] of each star's main-sequence lifetime), physics = engine defaults,
+ * {@code title} = the file name; without an {@code age} section the zero-age main sequence alone ({@code gyr: [0]},
+ * origin zams); within it {@code origin: birth} ({@code gyr:}/{@code myr:} count from birth, above 0;
+ * {@code ms_fraction:} gives fractions in [0, 1] of each star's main-sequence lifetime), physics = engine defaults,
  * {@code output: {dir: runs/<file name without extension>, profiles: false}}. Thread-safe (stateless).
  */
 public final class GridFileReader {
@@ -52,7 +54,10 @@ public final class GridFileReader {
     private static final List<String> KEYS = List.of("title", "mass", "metallicity", "age", "physics", "transitions",
             "output");
     private static final List<String> TRANSITION_KEYS = List.of("refine", "tolerance_msun");
-    private static final List<String> AGE_KEYS = List.of("gyr", "ms_fraction");
+    private static final List<String> AGE_KEYS = List.of("gyr", "myr", "ms_fraction", "origin");
+    /** The age keys that give the values, one per grid. */
+    private static final List<String> UNIT_KEYS = List.of("gyr", "myr", "ms_fraction");
+    private static final double MYR_PER_GYR = 1000.0;
     private static final List<String> OUTPUT_KEYS = List.of("dir", "profiles", "age_charts_for_masses_msun");
 
     /**
@@ -233,31 +238,55 @@ public final class GridFileReader {
         return refine == null || tolerance == null ? null : new TransitionSettings(refine, tolerance);
     }
 
-    /** Exactly one of {@code gyr} (ages in Gyr) and {@code ms_fraction} (fractions of each star's lifetime). */
+    /**
+     * Exactly one of {@code gyr} (ages in Gyr), {@code myr} (ages in Myr) and {@code ms_fraction} (fractions of each
+     * star's lifetime), and an optional {@code origin}: {@code birth} (the default) or {@code zams}. Ages from birth
+     * must be above 0 (age 0 is the start model, whose details are a choice, not a result).
+     */
     private static AgeAxis ages(Node node, NodeReader reader) {
         MappingNode map = reader.mapping(node, "age");
         if (map == null) {
             return null;
         }
         MappingFields fields = new MappingFields(map, "age", AGE_KEYS, reader);
-        if (fields.has("gyr") && fields.has("ms_fraction")) {
-            reader.problem(fields.key("ms_fraction"), GridProblemKind.CONFLICT,
-                    "age takes either 'gyr' or 'ms_fraction', not both");
+        AgeOrigin origin = AgeOrigin.BIRTH;
+        if (fields.has("origin")) {
+            String text = reader.text(fields.value("origin"), "age origin");
+            origin = text == null ? null : AgeOrigin.ofLabel(text);
+            if (text != null && origin == null) {
+                reader.problem(fields.value("origin"), GridProblemKind.UNKNOWN_CHOICE,
+                        "age origin must be birth or zams, got '" + NodeReader.quoted(text) + "'");
+            }
+        }
+        List<String> given = UNIT_KEYS.stream().filter(fields::has).toList();
+        if (given.size() > 1) {
+            reader.problem(fields.key(given.get(1)), GridProblemKind.CONFLICT,
+                    "age takes one of 'gyr', 'myr' and 'ms_fraction', not both '" + given.get(0) + "' and '"
+                    + given.get(1) + "'");
             return null;
         }
-        if (fields.has("ms_fraction")) {
+        if (given.isEmpty()) {
+            reader.problem(map, GridProblemKind.MISSING_KEY,
+                    "age needs 'gyr' or 'myr', the ages in Gyr or Myr since the origin (birth unless "
+                    + "'origin: zams'), or 'ms_fraction', fractions of each star's main-sequence lifetime "
+                    + "(0 = ZAMS, 1 = core-hydrogen exhaustion)");
+            return null;
+        }
+        if (given.get(0).equals("ms_fraction")) {
             List<Double> fractions = AxisValues.increasing(fields.value("ms_fraction"), "main-sequence fraction",
                     Range.closed(0.0, 1.0), reader);
-            return fractions == null ? null : AgeAxis.msFractions(fractions);
+            return fractions == null || origin == null ? null : AgeAxis.msFractions(fractions, origin);
         }
-        if (!fields.has("gyr")) {
-            reader.problem(map, GridProblemKind.MISSING_KEY,
-                    "age needs 'gyr', the ages since the ZAMS in Gyr (0 = ZAMS), or 'ms_fraction', "
-                    + "fractions of each star's main-sequence lifetime (0 = ZAMS, 1 = core-hydrogen exhaustion)");
+        boolean myr = given.get(0).equals("myr");
+        double scale = myr ? MYR_PER_GYR : 1.0;
+        Range range = origin == AgeOrigin.BIRTH ? Range.aboveZero(MAX_AGE_GYR * scale)
+                : Range.closed(0.0, MAX_AGE_GYR * scale);
+        String what = (origin == AgeOrigin.BIRTH ? "age from birth" : "age") + (myr ? " in Myr" : " in Gyr");
+        List<Double> ages = AxisValues.increasing(fields.value(given.get(0)), what, range, reader);
+        if (ages == null || origin == null) {
             return null;
         }
-        List<Double> gyr = AxisValues.increasing(fields.value("gyr"), "age", Range.closed(0.0, MAX_AGE_GYR), reader);
-        return gyr == null ? null : AgeAxis.gyr(gyr);
+        return AgeAxis.gyr(ages.stream().map(a -> a / scale).toList(), origin);
     }
 
     private static boolean validPath(String text) {

@@ -26,7 +26,7 @@ class AgeFractionReaderTest {
 
     @Test
     void fractionsBecomeAnAxisWhoseRequestsCarryTheBareFraction() {
-        GridSpec spec = reader.parse("f.yaml", HEAD + "age: {ms_fraction: [0, 0.25, 0.5, 0.9]}\n");
+        GridSpec spec = reader.parse("f.yaml", HEAD + "age: {ms_fraction: [0, 0.25, 0.5, 0.9], origin: zams}\n");
         assertThat(spec.ages().fractions()).isTrue();
         assertThat(spec.ages().values()).containsExactly(0.0, 0.25, 0.5, 0.9);
         assertThat(spec.ages().evolves()).isTrue();
@@ -41,7 +41,7 @@ class AgeFractionReaderTest {
     @Test
     void theModelFingerprintTellsFractionsFromGyrAndKeepsGyrGridsUnchanged() {
         GridSpec fractions = reader.parse("f.yaml", HEAD + "age: {ms_fraction: [0, 0.5]}\n");
-        GridSpec gyr = reader.parse("g.yaml", HEAD + "age: {gyr: [0, 0.5]}\n");
+        GridSpec gyr = reader.parse("g.yaml", HEAD + "age: {gyr: [0, 0.5], origin: zams}\n");
         assertThat(GridHash.canonicalModels(gyr)).contains("age_gyr=[0.0, 0.5]\n");
         assertThat(GridHash.canonicalModels(fractions)).contains("age_ms_fraction=[0.0, 0.5]\n")
                 .doesNotContain("age_gyr");

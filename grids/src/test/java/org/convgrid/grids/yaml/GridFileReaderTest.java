@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.within;
 
 import java.nio.file.Path;
 import java.util.List;
+import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.grids.GridFile;
@@ -20,9 +21,11 @@ class GridFileReaderTest {
     void readsTheDemoClusterGrid() {
         GridFile file = reader.read(Path.of("demo-cluster.yaml"));
         GridSpec spec = file.spec();
-        assertThat(spec.count()).isEqualTo(180);
-        assertThat(spec.agesGyr()).containsExactly(0.0, 0.15, 0.6);
-        assertThat(spec.massesMsun()).hasSize(20).startsWith(0.1, 0.2, 0.3).endsWith(2.0);
+        assertThat(spec.count()).isEqualTo(90);
+        // myr: [20, 150, 600] from birth
+        assertThat(spec.agesGyr()).containsExactly(0.02, 0.15, 0.6);
+        assertThat(spec.ages().origin()).isEqualTo(AgeOrigin.BIRTH);
+        assertThat(spec.massesMsun()).hasSize(10).startsWith(0.2, 0.4, 0.6).endsWith(2.0);
         // Y = 0.2471 + 1.5 Z: the law written in the file
         assertThat(spec.metallicities().get(1).y()).isCloseTo(0.2471 + 1.5 * 0.014, within(1e-15));
         assertThat(spec.outputDir()).isEqualTo("runs/demo-cluster");
@@ -92,7 +95,7 @@ class GridFileReaderTest {
                 title: Ages
                 mass: {values: [1.0]}
                 metallicity: {z: 0.014, helium: {primordial: 0.25, enrichment: 2}}
-                age: {gyr: [0, 1.0, 4.57]}
+                age: {gyr: [0, 1.0, 4.57], origin: zams}
                 output: {dir: somewhere/else, profiles: true}
                 """);
         assertThat(spec.agesGyr()).isEqualTo(List.of(0.0, 1.0, 4.57));

@@ -61,25 +61,33 @@ public final class OutcomeRows {
     }
 
     /**
-     * The evolutionary phase of a solved model. The engine evolves from the zero-age main sequence only, so every
-     * solved model is on the main sequence; when pre-main-sequence models arrive, this is where their phase is read
-     * off the outcome.
+     * The evolutionary phase of a solved model ({@code pre_main_sequence} or {@code main_sequence}, as its
+     * evolution found it); empty when the outcome has no model.
      */
     static String phase(ModelOutcome outcome) {
-        return outcome.status() == ModelStatus.OK ? CatalogueRow.MAIN_SEQUENCE : "";
+        if (!(outcome instanceof ModelOutcome.Solved s)) {
+            return "";
+        }
+        return s.stage().preMainSequence() ? CatalogueRow.PRE_MAIN_SEQUENCE : CatalogueRow.MAIN_SEQUENCE;
     }
 
     /**
-     * Surface 7Li over its initial value. The engine does not follow lithium yet, so the cell stays empty; this is
-     * where the outcome's value will be read once it does.
+     * Surface 7Li over its birth value; NaN (empty) when the outcome has no model or its evolution did not follow
+     * lithium (models evolved from the zero-age main sequence).
      */
     static double surfaceLithium(ModelOutcome outcome) {
-        return Double.NaN;
+        return outcome instanceof ModelOutcome.Solved s ? s.stage().surfaceLithium() : Double.NaN;
     }
 
-    /** Gyr since the zero-age main sequence; NaN (not applicable) for a fraction no solver resolved. */
+    /**
+     * Gyr since the age's own origin (birth or the zero-age main sequence; the run has one); NaN (not applicable)
+     * for a fraction no solver resolved.
+     */
     private static double ageGyr(Age age) {
-        return age instanceof Age.SinceZeroAge since ? since.seconds() / Constants.GYR : Double.NaN;
+        if (age instanceof Age.SinceZeroAge since) {
+            return since.seconds() / Constants.GYR;
+        }
+        return age instanceof Age.SinceBirth since ? since.seconds() / Constants.GYR : Double.NaN;
     }
 
     /**

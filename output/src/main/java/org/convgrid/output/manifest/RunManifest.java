@@ -5,6 +5,7 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.request.PhysicsOptions;
 
@@ -25,12 +26,23 @@ import org.convgrid.engine.request.PhysicsOptions;
  * @param shard {@code K/N} when this run is one shard of a grid, null otherwise
  * @param counts models by status (every status present, zero when none)
  * @param medianSecondsPerModel median wall time of one model on one thread, NaN when no model ran
+ * @param ageOrigin where the run's ages count from (its catalogue's {@code age_gyr}, its tracks)
  */
 public record RunManifest(String toolVersion, String toolCommit, String gridFile, String gridText, String gridFileSha256,
                           String gridModelsSha256, List<PhysicsOptions> physics, Instant started, Instant finished,
-                          int threads, String shard, Map<ModelStatus, Long> counts, double medianSecondsPerModel) {
+                          int threads, String shard, Map<ModelStatus, Long> counts, double medianSecondsPerModel,
+                          AgeOrigin ageOrigin) {
+
+    /** A manifest of a run whose ages count from the zero-age main sequence. */
+    public RunManifest(String toolVersion, String toolCommit, String gridFile, String gridText, String gridFileSha256,
+                       String gridModelsSha256, List<PhysicsOptions> physics, Instant started, Instant finished,
+                       int threads, String shard, Map<ModelStatus, Long> counts, double medianSecondsPerModel) {
+        this(toolVersion, toolCommit, gridFile, gridText, gridFileSha256, gridModelsSha256, physics, started, finished, threads,
+                shard, counts, medianSecondsPerModel, AgeOrigin.ZAMS);
+    }
 
     public RunManifest {
+        Objects.requireNonNull(ageOrigin, "ageOrigin");
         Objects.requireNonNull(toolVersion, "toolVersion");
         Objects.requireNonNull(toolCommit, "toolCommit");
         Objects.requireNonNull(gridFile, "gridFile");
@@ -53,8 +65,8 @@ public record RunManifest(String toolVersion, String toolCommit, String gridFile
 
     /** The same manifest, finished at {@code end} with the final counts and median. */
     public RunManifest finishedAt(Instant end, Map<ModelStatus, Long> finalCounts, double median) {
-        return new RunManifest(toolVersion, toolCommit, gridFile, gridText, gridFileSha256, gridModelsSha256, physics, started,
-                end, threads, shard, finalCounts, median);
+        return new RunManifest(toolVersion, toolCommit, gridFile, gridText, gridFileSha256, gridModelsSha256, physics,
+                started, end, threads, shard, finalCounts, median, ageOrigin);
     }
 
     /** Median of per-model seconds (mean of the two middle values for an even count), NaN when empty. */

@@ -8,6 +8,7 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.convection.StabilityCriterion;
@@ -72,12 +73,18 @@ public final class RunManifestReader {
             Object finished = root.get("finished");
             // manifests written before the commit was recorded do not know it
             Object commit = root.containsKey("tool_commit") ? root.get("tool_commit") : UNKNOWN_COMMIT;
+            // runs written before ages could count from birth counted them from the zero-age main sequence
+            AgeOrigin origin = root.containsKey("age_origin")
+                    ? AgeOrigin.ofLabel((String) root.get("age_origin")) : AgeOrigin.ZAMS;
+            if (origin == null) {
+                throw new IllegalArgumentException("age_origin must be birth or zams, got " + root.get("age_origin"));
+            }
             return new RunManifest((String) root.get("tool_version"), (String) commit, (String) grid.get("file"),
                     (String) grid.get("text"), (String) grid.get("sha256"), (String) grid.get("models_sha256"),
                     physics, Instant.parse((String) root.get("started")),
                     finished == null ? null : Instant.parse((String) finished),
                     ((Number) root.get("threads")).intValue(), (String) root.get("shard"), counts,
-                    number(root, "median_seconds_per_model"));
+                    number(root, "median_seconds_per_model"), origin);
         } catch (YamlEngineException | ClassCastException | NullPointerException | DateTimeParseException
                  | IllegalArgumentException e) {
             throw new OutputFormatException("not a convgrid manifest: " + e.getMessage(), e);

@@ -18,7 +18,8 @@ import org.snakeyaml.engine.v2.common.FlowStyle;
  * {@code tool_version}, {@code tool_commit}, {@code grid} ({@code file}, {@code sha256}, {@code models_sha256}, {@code text}),
  * {@code physics} (list of {@code mixing_length}, {@code overshoot}, {@code criterion}, {@code opacity_scale},
  * {@code atmosphere}, {@code overshoot_profile}, and {@code opacity_table} when a user table is named),
- * {@code started}, {@code finished} (ISO-8601 UTC instants), {@code threads}, {@code shard}, {@code models}
+ * {@code core_threshold_mass_frac}, {@code age_origin} ({@code birth} or {@code zams}: where the run's ages count
+ * from), {@code started}, {@code finished} (ISO-8601 UTC instants), {@code threads}, {@code shard}, {@code models}
  * ({@code total} and one count per status label), {@code median_seconds_per_model}.
  */
 public final class RunManifestWriter {
@@ -64,6 +65,7 @@ public final class RunManifestWriter {
         root.put("physics", physics);
         // the one threshold behind structure_class, the core columns and the transitions
         root.put("core_threshold_mass_frac", ConvectiveZoneFinder.DEFAULT_MIN_CORE_MASS_FRACTION);
+        root.put("age_origin", m.ageOrigin().label());
         root.put("started", m.started().toString());
         root.put("finished", m.finished() == null ? null : m.finished().toString());
         root.put("threads", m.threads());

@@ -3,12 +3,16 @@ package org.convgrid.output.track;
 import java.util.List;
 
 /**
- * The columns of a track file, spelled once for {@link TrackWriter} and {@link TrackReader}: the conventions'
- * columns first (age, surface, centre, zone extents), then ours (time step, core extent, solver iterations).
+ * The columns of a track file and of its zone table, spelled once for {@link TrackWriter} and {@link TrackReader}.
+ * Every cell holds one number or one label (no packed lists): the conventions' columns first (age, phase, surface,
+ * centre, surface lithium, zone and burning-zone extents), then ours. The zone table lists every convective zone of
+ * every step, one row each.
  */
 public final class TrackColumns {
 
     public static final String AGE_GYR = "age_gyr";
+    /** {@code pre_main_sequence} or {@code main_sequence}. */
+    public static final String PHASE = "phase";
     public static final String LUMINOSITY = "luminosity_lsun";
     public static final String RADIUS = "radius_rsun";
     public static final String TEFF = "teff_k";
@@ -16,17 +20,42 @@ public final class TrackColumns {
     public static final String CENTRAL_TEMP = "central_temp_k";
     public static final String CENTRAL_DENSITY = "central_density_cgs";
     public static final String CENTRAL_H = "central_h_frac";
-    /** Every convective zone as {@code lo-hi} in m/M, centre outwards. */
-    public static final String CONV_ZONES = "conv_zones_mass_frac";
-    /** The hydrogen-burning region as {@code lo-hi} in m/M. */
-    public static final String BURNING_ZONE = "burning_zone_mass_frac";
+    /** Surface 7Li over its birth value; empty when lithium was not followed (tracks from the ZAMS). */
+    public static final String SURFACE_LI = "surface_li_rel";
+    /** m/M at the top of the convective zone that holds the centre (1 when fully convective); empty if none. */
+    public static final String CENTRAL_CZ_TOP = "central_cz_top_mass_frac";
+    /** m/M at the base of the convective zone that reaches the surface (0 when fully convective); empty if none. */
+    public static final String ENV_CZ_BASE = "env_cz_base_mass_frac";
+    /** How many convective zones the step has (each one a row of the zone table). */
+    public static final String CONV_ZONE_COUNT = "conv_zone_count";
+    /** Inner m/M of the hydrogen-burning region; empty when nothing burns. */
+    public static final String BURNING_INNER = "burning_inner_mass_frac";
+    /** Outer m/M of the hydrogen-burning region; empty when nothing burns. */
+    public static final String BURNING_OUTER = "burning_outer_mass_frac";
+    /** L_nuc / L; empty for tracks from the ZAMS (not recorded there). */
+    public static final String NUCLEAR_FRACTION = "nuclear_lum_frac";
     public static final String TIME_STEP = "time_step_yr";
-    public static final String CORE_CZ = "core_cz_mass_frac";
     public static final String SOLVER_ITERATIONS = "solver_iterations";
 
-    /** Every column, in the order the writer writes them. */
-    public static final List<String> ALL = List.of(AGE_GYR, LUMINOSITY, RADIUS, TEFF, LOG_G, CENTRAL_TEMP,
-            CENTRAL_DENSITY, CENTRAL_H, CONV_ZONES, BURNING_ZONE, TIME_STEP, CORE_CZ, SOLVER_ITERATIONS);
+    /** Every column of a track file, in the order the writer writes them. */
+    public static final List<String> ALL = List.of(AGE_GYR, PHASE, LUMINOSITY, RADIUS, TEFF, LOG_G, CENTRAL_TEMP,
+            CENTRAL_DENSITY, CENTRAL_H, SURFACE_LI, CENTRAL_CZ_TOP, ENV_CZ_BASE, CONV_ZONE_COUNT, BURNING_INNER,
+            BURNING_OUTER, NUCLEAR_FRACTION, TIME_STEP, SOLVER_ITERATIONS);
+
+    /** Row of the step in its track file, 0 = the first step. */
+    public static final String STEP_INDEX = "step_index";
+    public static final String ZONE_INDEX = "zone_index";
+    public static final String MASS_FRAC_INNER = "mass_frac_inner";
+    public static final String MASS_FRAC_OUTER = "mass_frac_outer";
+    public static final String RADIUS_FRAC_INNER = "radius_frac_inner";
+    public static final String RADIUS_FRAC_OUTER = "radius_frac_outer";
+
+    /** Every column of a zone table ({@code tracks/<track id>.zones.csv}), in the order the writer writes them. */
+    public static final List<String> ZONES = List.of(STEP_INDEX, AGE_GYR, ZONE_INDEX, MASS_FRAC_INNER,
+            MASS_FRAC_OUTER, RADIUS_FRAC_INNER, RADIUS_FRAC_OUTER);
+
+    /** The packed zone column of track files written before this layout: recognised only, to say so. */
+    public static final String PACKED_ZONES_V1 = "conv_zones_mass_frac";
 
     private TrackColumns() {
     }

@@ -5,10 +5,7 @@ import java.io.Reader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
-import org.apache.commons.csv.CSVRecord;
-import org.convgrid.output.CsvNumbers;
+import java.util.List;
 
 /**
  * Where a track's life stages lie, read from its {@code phase} column: whether it starts at birth (its first steps
@@ -28,10 +25,6 @@ public record TrackTimeline(boolean startsAtBirth, double zeroAgeMainSequenceGyr
     /** The catalogue's and the track files' spelling of the two phases. */
     static final String PRE_MAIN_SEQUENCE = "pre_main_sequence";
     static final String MAIN_SEQUENCE = "main_sequence";
-    static final String PHASE = "phase";
-
-    private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true)
-            .setAllowMissingColumnNames(true).setIgnoreSurroundingSpaces(true).get();
 
     /** The timeline of one track file. */
     public static TrackTimeline read(Path file) throws IOException {
@@ -42,20 +35,19 @@ public record TrackTimeline(boolean startsAtBirth, double zeroAgeMainSequenceGyr
 
     /** The timeline of a track file's text; a file without a {@code phase} column gives {@link #UNKNOWN}. */
     public static TrackTimeline read(Reader in) throws IOException {
-        try (CSVParser parser = CSVParser.builder().setReader(in).setFormat(FORMAT).get()) {
-            if (!parser.getHeaderNames().contains(PHASE) || !parser.getHeaderNames().contains(TrackColumns.AGE_GYR)) {
-                return UNKNOWN;
+        return of(TrackReader.read(in));
+    }
+
+    /** The timeline of a track's steps, in file order; steps without a phase give {@link #UNKNOWN}. */
+    public static TrackTimeline of(List<TrackStep> steps) {
+        boolean preMainSequence = false;
+        for (TrackStep step : steps) {
+            if (PRE_MAIN_SEQUENCE.equals(step.phase())) {
+                preMainSequence = true;
+            } else if (MAIN_SEQUENCE.equals(step.phase()) && preMainSequence) {
+                return new TrackTimeline(true, step.ageGyr());
             }
-            boolean preMainSequence = false;
-            for (CSVRecord r : parser) {
-                String phase = r.get(PHASE);
-                if (PRE_MAIN_SEQUENCE.equals(phase)) {
-                    preMainSequence = true;
-                } else if (MAIN_SEQUENCE.equals(phase) && preMainSequence) {
-                    return new TrackTimeline(true, CsvNumbers.parse(r.get(TrackColumns.AGE_GYR)));
-                }
-            }
-            return new TrackTimeline(preMainSequence, Double.NaN);
         }
+        return preMainSequence ? new TrackTimeline(true, Double.NaN) : UNKNOWN;
     }
 }

@@ -3,20 +3,24 @@ package org.convgrid.output.track;
 import java.io.IOException;
 import java.util.List;
 
+import org.convgrid.engine.birth.TrackPoint;
 import org.convgrid.engine.convection.ConvectiveZone;
+import org.convgrid.engine.convection.ConvectiveZoneFinder;
 import org.convgrid.engine.evolution.EvolutionStep;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.output.CsvNumbers;
-import org.convgrid.output.Span;
 
 /**
  * Writes the track file of one star ({@code tracks/<model_id without age>.csv}): a header row of
- * {@link TrackColumns#ALL}, then one row per accepted evolution step in increasing age, the zero-age model first.
- * Units as in the catalogue (L / L_sun, R / R_sun with the IAU 2015 nominal values, ages over the Julian gigayear, log g = log10(G M / R^2) in cgs).
- * {@code burning_zone_mass_frac} is the {@code lo-hi} extent in m/M of the points where the nuclear energy
- * generation exceeds {@link MainSequenceEvolver#BURNING_THRESHOLD} (1 %) of its maximum in the star; empty when
- * nothing burns. Numbers in the {@link CsvNumbers} form, so the same track always gives the same bytes.
+ * {@link TrackColumns#ALL}, then one row per accepted evolution step in increasing age, the first model first; and
+ * its zone table ({@code tracks/<model_id without age>.zones.csv}, {@link TrackColumns#ZONES}): one row per
+ * convective zone of every step, centre outwards. Units as in the catalogue (L / L_sun, R / R_sun with the IAU 2015
+ * nominal values, ages over the Julian gigayear, log g = log10(G M / R^2) in cgs). The burning region is the extent in
+ * m/M of the points where the nuclear energy generation exceeds {@link MainSequenceEvolver#BURNING_THRESHOLD} (1 %)
+ * of its maximum in the star; empty when nothing burns. A zone reaches the surface when its top lies within
+ * {@link ConvectiveZoneFinder#DEFAULT_SURFACE_SKIN_MASS_FRACTION} of it, as in the catalogue. Numbers in the
+ * {@link CsvNumbers} form, so the same track always gives the same bytes.
  */
 public final class TrackWriter {
 
@@ -25,17 +29,22 @@ public final class TrackWriter {
 
     /**
      * @param mass the star's mass, g
-     * @param steps the track, in increasing age
+     * @param points the track, in increasing age
      * @param out where the text goes (lines end with {@code \n})
      */
-    public static void write(double mass, List<EvolutionStep> steps, Appendable out) throws IOException {
+    public static void write(double mass, List<TrackPoint> points, Appendable out) throws IOException {
         out.append(String.join(",", TrackColumns.ALL)).append('\n');
-        for (EvolutionStep s : steps) {
-            String zones = Span.join(s.convectiveZones().stream().map(TrackWriter::span).toList());
-            String burning = Double.isNaN(s.burningInner()) ? ""
-                    : new Span(clamp(s.burningInner()), Math.max(clamp(s.burningInner()), clamp(s.burningOuter())))
-                    .toString();
+        for (TrackPoint p : points) {
+            EvolutionStep s = p.step();
+            List<ConvectiveZone> zones = s.convectiveZones();
+            ConvectiveZone central = !zones.isEmpty() && zones.get(0).innerMassFraction() <= 0.0 ? zones.get(0) : null;
+            ConvectiveZone surface = !zones.isEmpty()
+                    && zones.get(zones.size() - 1).outerMassFraction()
+                    >= 1.0 - ConvectiveZoneFinder.DEFAULT_SURFACE_SKIN_MASS_FRACTION ? zones.get(zones.size() - 1) : null;
+            boolean burns = !Double.isNaN(s.burningInner());
+            double burnLo = burns ? clamp(s.burningInner()) : Double.NaN;
             out.append(CsvNumbers.format(s.age() / Constants.GYR)).append(',')
+                    .append(p.phase().label()).append(',')
                     .append(CsvNumbers.format(s.luminosity() / Constants.L_SUN)).append(',')
                     .append(CsvNumbers.format(s.radius() / Constants.R_SUN)).append(',')
                     .append(CsvNumbers.format(s.effectiveTemperature())).append(',')
@@ -44,18 +53,42 @@ public final class TrackWriter {
                     .append(CsvNumbers.format(s.centralTemperature())).append(',')
                     .append(CsvNumbers.format(s.centralDensity())).append(',')
                     .append(CsvNumbers.format(s.centralHydrogen())).append(',')
-                    .append(zones).append(',')
-                    .append(burning).append(',')
+                    .append(CsvNumbers.format(p.surfaceLithium())).append(',')
+                    .append(CsvNumbers.format(central == null ? Double.NaN : clamp(central.outerMassFraction())))
+                    .append(',')
+                    .append(CsvNumbers.format(surface == null ? Double.NaN : clamp(surface.innerMassFraction())))
+                    .append(',')
+                    .append(Integer.toString(zones.size())).append(',')
+                    .append(CsvNumbers.format(burnLo)).append(',')
+                    .append(CsvNumbers.format(burns ? Math.max(burnLo, clamp(s.burningOuter())) : Double.NaN))
+                    .append(',')
+                    .append(CsvNumbers.format(p.nuclearFraction())).append(',')
                     .append(CsvNumbers.format(s.timeStep() / Constants.YEAR)).append(',')
-                    .append(CsvNumbers.format(s.convectiveCoreMassFraction())).append(',')
                     .append(Integer.toString(s.iterations())).append('\n');
         }
     }
 
-    /** A zone's mass extent, clamped into [0, 1] against round-off at the centre and surface. */
-    private static Span span(ConvectiveZone zone) {
-        double lo = clamp(zone.innerMassFraction());
-        return new Span(lo, Math.max(lo, clamp(zone.outerMassFraction())));
+    /**
+     * The zone table of a track: one row per convective zone of every step, steps in file order, zones centre
+     * outwards; extents clamped into [0, 1] against round-off at the centre and surface.
+     */
+    public static void writeZones(List<TrackPoint> points, Appendable out) throws IOException {
+        out.append(String.join(",", TrackColumns.ZONES)).append('\n');
+        for (int i = 0; i < points.size(); i++) {
+            EvolutionStep s = points.get(i).step();
+            String age = CsvNumbers.format(s.age() / Constants.GYR);
+            List<ConvectiveZone> zones = s.convectiveZones();
+            for (int k = 0; k < zones.size(); k++) {
+                ConvectiveZone z = zones.get(k);
+                double lo = clamp(z.innerMassFraction());
+                double rLo = clamp(z.innerRadiusFraction());
+                out.append(Integer.toString(i)).append(',').append(age).append(',').append(Integer.toString(k))
+                        .append(',').append(CsvNumbers.format(lo)).append(',')
+                        .append(CsvNumbers.format(Math.max(lo, clamp(z.outerMassFraction())))).append(',')
+                        .append(CsvNumbers.format(rLo)).append(',')
+                        .append(CsvNumbers.format(Math.max(rLo, clamp(z.outerRadiusFraction())))).append('\n');
+            }
+        }
     }
 
     private static double clamp(double x) {

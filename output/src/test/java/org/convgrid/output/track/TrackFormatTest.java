@@ -1,34 +1,60 @@
 package org.convgrid.output.track;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
 import java.io.StringReader;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.util.List;
+import org.convgrid.engine.birth.Phase;
+import org.convgrid.engine.birth.TrackPoint;
 import org.convgrid.engine.convection.ConvectiveZone;
+import org.convgrid.engine.error.ErrorKind;
 import org.convgrid.engine.evolution.EvolutionStep;
 import org.convgrid.engine.units.Constants;
+import org.convgrid.output.OutputFormatException;
 import org.convgrid.output.Span;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 /** What {@link TrackWriter} writes, {@link TrackReader} reads back: one column list serves both. */
 class TrackFormatTest {
 
-    private static EvolutionStep step(double ageGyr, double coreTop, double envelopeBase) {
+    private static EvolutionStep step(double ageGyr, List<ConvectiveZone> zones) {
         return new EvolutionStep(ageGyr * Constants.GYR, 1e6 * Constants.YEAR, 1.25 * Constants.L_SUN,
-                0.9 * Constants.R_SUN, 5800.0, 1.5e7, 150.0, 0.7 - 0.1 * ageGyr,
-                List.of(new ConvectiveZone(0.0, coreTop, 0.0, 0.05), new ConvectiveZone(envelopeBase, 1.0, 0.7, 1.0)),
-                0.0, 0.3, 7);
+                0.9 * Constants.R_SUN, 5800.0, 1.5e7, 150.0, 0.7 - 0.1 * ageGyr, zones, 0.0, 0.3, 7);
+    }
+
+    /** A core, a shell and an envelope: more zones than the track's own columns hold. */
+    private static List<ConvectiveZone> threeZones(double coreTop, double envelopeBase) {
+        return List.of(new ConvectiveZone(0.0, coreTop, 0.0, 0.05), new ConvectiveZone(0.4, 0.45, 0.3, 0.32),
+                new ConvectiveZone(envelopeBase, 1.0, 0.7, 1.0));
+    }
+
+    private static List<TrackPoint> track() {
+        return List.of(
+                new TrackPoint(step(0.001, List.of(new ConvectiveZone(0.0, 1.0, 0.0, 1.0))), Phase.PRE_MAIN_SEQUENCE,
+                        0.2, 0.9, 1e-6),
+                new TrackPoint(step(1.5, threeZones(0.08, 0.7)), Phase.MAIN_SEQUENCE, 1.0, 0.25, 0.0));
     }
 
     @Test
-    void whatTheWriterWritesTheReaderReads() throws Exception {
+    void whatTheWriterWritesTheReaderReads(@TempDir Path dir) throws Exception {
         StringBuilder text = new StringBuilder();
-        TrackWriter.write(Constants.M_SUN, List.of(step(0.0, 0.1, 0.75), step(1.5, 0.08, 0.7)), text);
+        TrackWriter.write(Constants.M_SUN, track(), text);
         assertThat(text.toString()).startsWith(String.join(",", TrackColumns.ALL) + "\n");
+        // one number or one label per cell: no packed lists
+        assertThat(text.toString()).doesNotContain(";");
         List<TrackStep> steps = TrackReader.read(new StringReader(text.toString()));
         assertThat(steps).hasSize(2);
+        TrackStep young = steps.get(0);
+        assertThat(young.phase()).isEqualTo("pre_main_sequence");
+        assertThat(young.surfaceLiRel()).isEqualTo(0.9);
+        assertThat(young.convZones()).containsExactly(new Span(0.0, 1.0));
         TrackStep last = steps.get(1);
+        assertThat(last.phase()).isEqualTo("main_sequence");
         assertThat(last.ageGyr()).isEqualTo(1.5);
         assertThat(last.luminosityLsun()).isEqualTo(1.25);
         assertThat(last.radiusRsun()).isEqualTo(0.9);
@@ -36,9 +62,46 @@ class TrackFormatTest {
         assertThat(last.centralTempK()).isEqualTo(1.5e7);
         assertThat(last.centralDensityCgs()).isEqualTo(150.0);
         assertThat(last.centralHFrac()).isCloseTo(0.55, within(1e-12));
+        assertThat(last.surfaceLiRel()).isEqualTo(0.25);
         assertThat(last.logGCgs()).isCloseTo(Math.log10(Constants.G * Constants.M_SUN
                 / Math.pow(0.9 * Constants.R_SUN, 2)), within(1e-6));
+        // without the zone table: the central and the surface zone from the track's own columns
         assertThat(last.convZones()).containsExactly(new Span(0.0, 0.08), new Span(0.7, 1.0));
         assertThat(last.burningZone()).isEqualTo(new Span(0.0, 0.3));
+
+        // with the zone table beside it: every zone, the shell included
+        StringBuilder zones = new StringBuilder();
+        TrackWriter.writeZones(track(), zones);
+        assertThat(zones.toString()).startsWith(String.join(",", TrackColumns.ZONES) + "\n");
+        Files.writeString(dir.resolve("p0-z0-m0.csv"), text);
+        Files.writeString(dir.resolve("p0-z0-m0.zones.csv"), zones);
+        List<Track> all = TrackReader.readAll(dir);
+        assertThat(all).hasSize(1);
+        assertThat(all.get(0).trackId()).isEqualTo("p0-z0-m0");
+        assertThat(all.get(0).steps().get(1).convZones())
+                .containsExactly(new Span(0.0, 0.08), new Span(0.4, 0.45), new Span(0.7, 1.0));
+        assertThat(all.get(0).steps().get(0).convZones()).containsExactly(new Span(0.0, 1.0));
+    }
+
+    @Test
+    void aTrackFromTheZeroAgeMainSequenceLeavesLithiumAndTheNuclearFractionEmpty() throws Exception {
+        StringBuilder text = new StringBuilder();
+        TrackWriter.write(Constants.M_SUN, List.of(new TrackPoint(step(0.0, threeZones(0.1, 0.75)),
+                Phase.MAIN_SEQUENCE, Double.NaN, Double.NaN, Double.NaN)), text);
+        String row = text.toString().split("\n")[1];
+        String[] cells = row.split(",", -1);
+        assertThat(cells[TrackColumns.ALL.indexOf(TrackColumns.SURFACE_LI)]).isEmpty();
+        assertThat(cells[TrackColumns.ALL.indexOf(TrackColumns.NUCLEAR_FRACTION)]).isEmpty();
+        assertThat(cells[TrackColumns.ALL.indexOf(TrackColumns.CONV_ZONE_COUNT)]).isEqualTo("3");
+        assertThat(TrackReader.read(new StringReader(text.toString())).get(0).surfaceLiRel()).isNaN();
+    }
+
+    @Test
+    void aTrackFileOfTheEarlierLayoutIsRefusedWithTheWayOut() {
+        String old = "age_gyr,luminosity_lsun,conv_zones_mass_frac,burning_zone_mass_frac\n0.0,1.0,0-0.1;0.7-1,0-0.3\n";
+        assertThatThrownBy(() -> TrackReader.read(new StringReader(old)))
+                .isInstanceOfSatisfying(OutputFormatException.class,
+                        e -> assertThat(e.kind()).isEqualTo(ErrorKind.RUN_CONFLICT))
+                .hasMessageContaining("conv_zones_mass_frac").hasMessageContaining("run the grid again");
     }
 }

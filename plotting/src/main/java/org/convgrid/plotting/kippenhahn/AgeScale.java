@@ -2,7 +2,9 @@ package org.convgrid.plotting.kippenhahn;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.plotting.label.SliceLabels;
+import org.convgrid.plotting.style.AgeAxisTitle;
 
 /**
  * The age axis of a zones-against-age chart. A track from the zero-age main sequence is drawn on a linear axis in Gyr.
@@ -61,6 +63,6 @@ record AgeScale(boolean logarithmic, double min, double max) {
         if (logarithmic) {
             return "age since birth (logarithmic)";
         }
-        return (fromBirth ? "age since birth" : "age since the zero-age main sequence") + " / Gyr";
+        return AgeAxisTitle.of(fromBirth ? AgeOrigin.BIRTH : AgeOrigin.ZAMS);
     }
 }

@@ -24,9 +24,9 @@ public final class Kippenhahn {
     private Kippenhahn() {
     }
 
-    /** The chart data of {@code track}, whose mass, Z and physics are {@code origin}, with no phases recorded. */
+    /** The chart data of {@code track}, whose mass, Z and physics are {@code origin}, its life stages its own. */
     public static KippenhahnData build(TrackOrigin origin, Track track) {
-        return build(origin, track, TrackTimeline.UNKNOWN);
+        return build(origin, track, TrackTimeline.of(track.steps()));
     }
 
     /** The chart data of {@code track} ({@code origin}: its mass, Z and physics) with its life stages. */

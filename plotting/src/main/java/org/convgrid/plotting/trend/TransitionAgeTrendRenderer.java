@@ -2,8 +2,10 @@ package org.convgrid.plotting.trend;
 
 import java.awt.Color;
 import java.util.List;
+import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.plotting.label.SliceLabels;
+import org.convgrid.plotting.style.AgeAxisTitle;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.LogAxis;
 import org.convgrid.plotting.style.StyledChart;
@@ -39,12 +41,17 @@ public final class TransitionAgeTrendRenderer {
     private TransitionAgeTrendRenderer() {
     }
 
-    /** The chart of a transition-against-age trend. */
+    /** The chart of a transition-against-age trend of a run whose ages count from the zero-age main sequence. */
     public static StyledChart render(TransitionAgeTrendData data) {
+        return render(data, AgeOrigin.ZAMS);
+    }
+
+    /** The chart of a transition-against-age trend, ages counted from {@code origin}. */
+    public static StyledChart render(TransitionAgeTrendData data, AgeOrigin origin) {
         boolean log = data.logAges();
         StyledChart chart = ChartStyle.newChart("Transition masses against age, Z = "
                         + SliceLabels.values(data.metallicities()), data.physics().describe(),
-                "age / Gyr" + (log ? " (logarithmic)" : ""), "transition mass M / M\u2609");
+                AgeAxisTitle.of(origin) + (log ? " (logarithmic)" : ""), "transition mass M / M\u2609");
         ChartStyle.legendRight(chart);
         double first = data.ages().isEmpty() ? 0.0 : data.ages().get(0);
         double last = data.ages().isEmpty() ? 1.0 : data.ages().get(data.ages().size() - 1);

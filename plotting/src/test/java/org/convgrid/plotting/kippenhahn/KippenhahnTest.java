@@ -98,13 +98,28 @@ class KippenhahnTest {
 
     @Test
     void equalAgesAndSingleStepsAreHandled() throws Exception {
-        String text = "age_gyr,conv_zones_mass_frac,burning_zone_mass_frac\n0,0-0.1,0-0.2\n0,0-0.3,0-0.2\n1,0-0.2,\n";
+        String text = "age_gyr,central_cz_top_mass_frac,burning_inner_mass_frac,burning_outer_mass_frac\n"
+                + "0,0.1,0,0.2\n0,0.3,0,0.2\n1,0.2,,\n";
         Track t = new Track("t", TrackReader.read(new StringReader(text)));
         KippenhahnData data = Kippenhahn.build(new TrackOrigin("t", 1.5, 0.014, PHYSICS), t);
         assertThat(data.zones()).singleElement().satisfies(r -> assertThat(r.hi()).isEqualTo(0.3));
         Track single = new Track("t", t.steps().subList(2, 3));
         assertThat(Kippenhahn.build(new TrackOrigin("t", 1.5, 0.014, PHYSICS), single).notes())
                 .containsExactly(Kippenhahn.TOO_SHORT_NOTE);
+    }
+
+    @Test
+    void aTrackFromBirthSaysSoOnItsAgeAxis() throws Exception {
+        String text = "age_gyr,phase,central_cz_top_mass_frac,env_cz_base_mass_frac\n"
+                + "0,pre_main_sequence,1.0,0.0\n0.01,pre_main_sequence,,0.6\n0.05,main_sequence,,0.97\n";
+        Track t = new Track("t", TrackReader.read(new StringReader(text)));
+        KippenhahnData data = Kippenhahn.build(new TrackOrigin("t", 1.0, 0.02, PHYSICS), t);
+        assertThat(data.timeline().startsAtBirth()).isTrue();
+        assertThat(KippenhahnRenderer.render(data).getXAxisTitle()).isEqualTo("age since birth / Gyr");
+        assertThat(data.zones()).first().satisfies(r -> assertThat(r.hi()).isEqualTo(1.0));
+        assertThat(Kippenhahn.build(new TrackOrigin("t", 1.5, 0.014, PHYSICS), new Track("z",
+                TrackReader.read(new StringReader(TestTracks.text(1.5, 0.014, 5))))).timeline().startsAtBirth())
+                .isFalse();
     }
 
     @Test
@@ -154,8 +169,8 @@ class KippenhahnTest {
         assertThat(scale.x(0.0)).isEqualTo(scale.min());
         // a track from the zero-age main sequence, or one without phases, keeps the linear axis in Gyr
         assertThat(AgeScale.of(false, 0.0, 1e-6, 10.0).logarithmic()).isFalse();
-        assertThat(Kippenhahn.build(new TrackOrigin("t", 1.0, 0.014, PHYSICS), t).timeline())
-                .isEqualTo(org.convgrid.output.track.TrackTimeline.UNKNOWN);
+        // built without a timeline, the chart reads the track's own phases
+        assertThat(Kippenhahn.build(new TrackOrigin("t", 1.0, 0.014, PHYSICS), t).timeline()).isEqualTo(timeline);
         assertThat(org.convgrid.output.track.TrackTimeline.read(new StringReader(TestTracks.text(1.0, 0.014, 5))))
                 .isEqualTo(org.convgrid.output.track.TrackTimeline.UNKNOWN);
         Path png = dir.resolve("birth.png");

@@ -32,8 +32,8 @@ class TrackReaderTest {
 
     @Test
     void columnsInAnyOrderAndOptionalOnesMayBeMissing() throws Exception {
-        String text = "extra,conv_zones_mass_frac,age_gyr,burning_zone_mass_frac\n"
-                + "x,0-0.2;0.9-1,0.5,\n" + "y,,1.5,0-0.1\n";
+        String text = "extra,central_cz_top_mass_frac,env_cz_base_mass_frac,age_gyr,burning_inner_mass_frac,"
+                + "burning_outer_mass_frac\n" + "x,0.2,0.9,0.5,,\n" + "y,,,1.5,0,0.1\n";
         List<TrackStep> steps = TrackReader.read(new StringReader(text));
         assertThat(steps.get(0).ageGyr()).isEqualTo(0.5);
         assertThat(steps.get(0).convZones()).containsExactly(new Span(0, 0.2), new Span(0.9, 1));
@@ -46,10 +46,13 @@ class TrackReaderTest {
 
     @Test
     void missingAgeColumnOrBadCellIsAFormatError() {
-        assertThatThrownBy(() -> TrackReader.read(new StringReader("conv_zones_mass_frac\n0-1\n")))
+        assertThatThrownBy(() -> TrackReader.read(new StringReader("central_cz_top_mass_frac\n1.0\n")))
                 .isInstanceOf(OutputFormatException.class).hasMessageContaining("age_gyr");
-        assertThatThrownBy(() -> TrackReader.read(new StringReader("age_gyr,conv_zones_mass_frac\n1,0.5-0.2\n")))
-                .isInstanceOf(OutputFormatException.class).hasMessageContaining("conv_zones_mass_frac");
+        assertThatThrownBy(() -> TrackReader.read(new StringReader("age_gyr,central_cz_top_mass_frac\n1,a.b\n")))
+                .isInstanceOf(OutputFormatException.class).hasMessageContaining("central_cz_top_mass_frac");
+        // the packed zone lists of earlier runs are refused with the way out
+        assertThatThrownBy(() -> TrackReader.read(new StringReader("age_gyr,conv_zones_mass_frac\n1,0-0.2\n")))
+                .isInstanceOf(OutputFormatException.class).hasMessageContaining("run the grid again");
     }
 
     @Test

@@ -4,7 +4,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import org.convgrid.engine.batch.ChunkSolver;
-import org.convgrid.engine.evolution.TrackSink;
+import org.convgrid.engine.batch.StarTrackSink;
 import org.convgrid.engine.refine.MassLine;
 import org.convgrid.engine.refine.MassLineFactory;
 import org.convgrid.engine.refine.ZamsMassLines;
@@ -36,7 +36,7 @@ public final class SolverMassLines implements MassLineFactory {
 
     /** The production lines: {@link ZamsMassLines} and the production chunk solver, writing no track files. */
     public static SolverMassLines production() {
-        return new SolverMassLines(new ZamsMassLines(), ProductionSolvers.solver(TrackSink.NONE));
+        return new SolverMassLines(new ZamsMassLines(), ProductionSolvers.solver(StarTrackSink.NONE));
     }
 
     @Override

@@ -1,0 +1,26 @@
+package org.convgrid.output.events;
+
+import java.util.List;
+
+/** The columns of {@code life_events.csv}, spelled once for {@link LifeEventWriter} and {@link LifeEventReader}. */
+public final class LifeEventColumns {
+
+    public static final String TRACK_ID = "track_id";
+    public static final String MASS = "mass_msun";
+    public static final String Z_INIT = "z_init";
+    public static final String Y_INIT = "y_init";
+    public static final String MIXING_LENGTH = "mixing_length";
+    public static final String OVERSHOOT = "overshoot_hp";
+    public static final String RADIATIVE_CORE = "radiative_core_myr";
+    public static final String ZAMS = "zams_myr";
+    public static final String CONV_CORE_ONSET = "conv_core_onset_myr";
+    public static final String CONV_CORE_END = "conv_core_end_myr";
+    public static final String LI_HALVED = "li_halved_myr";
+
+    /** Every column, in the order the writer writes them. */
+    public static final List<String> ALL = List.of(TRACK_ID, MASS, Z_INIT, Y_INIT, MIXING_LENGTH, OVERSHOOT,
+            RADIATIVE_CORE, ZAMS, CONV_CORE_ONSET, CONV_CORE_END, LI_HALVED);
+
+    private LifeEventColumns() {
+    }
+}

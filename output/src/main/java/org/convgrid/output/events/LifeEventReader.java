@@ -1,0 +1,79 @@
+package org.convgrid.output.events;
+
+import static org.convgrid.output.events.LifeEventColumns.CONV_CORE_END;
+import static org.convgrid.output.events.LifeEventColumns.CONV_CORE_ONSET;
+import static org.convgrid.output.events.LifeEventColumns.LI_HALVED;
+import static org.convgrid.output.events.LifeEventColumns.MASS;
+import static org.convgrid.output.events.LifeEventColumns.MIXING_LENGTH;
+import static org.convgrid.output.events.LifeEventColumns.OVERSHOOT;
+import static org.convgrid.output.events.LifeEventColumns.RADIATIVE_CORE;
+import static org.convgrid.output.events.LifeEventColumns.TRACK_ID;
+import static org.convgrid.output.events.LifeEventColumns.Y_INIT;
+import static org.convgrid.output.events.LifeEventColumns.ZAMS;
+import static org.convgrid.output.events.LifeEventColumns.Z_INIT;
+
+import java.io.IOException;
+import java.io.Reader;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVRecord;
+import org.convgrid.output.CsvNumbers;
+import org.convgrid.output.OutputFormatException;
+
+/**
+ * Reads {@code life_events.csv} by column name, in file order. A row cut short by an interruption (the file grows
+ * row by row during a run) is left out; every other unreadable row is an error.
+ */
+public final class LifeEventReader {
+
+    private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true)
+            .setIgnoreSurroundingSpaces(true).get();
+
+    private LifeEventReader() {
+    }
+
+    /** The rows of a table file; empty when the file does not exist. */
+    public static List<LifeEventRow> read(Path file) throws IOException {
+        if (!Files.isRegularFile(file)) {
+            return List.of();
+        }
+        try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
+            return read(in);
+        } catch (OutputFormatException e) {
+            throw new OutputFormatException(file + ": " + e.getMessage(), e);
+        }
+    }
+
+    /** The rows of a table, in order. */
+    public static List<LifeEventRow> read(Reader in) throws IOException {
+        List<LifeEventRow> rows = new ArrayList<>();
+        try (CSVParser parser = CSVParser.builder().setReader(in).setFormat(FORMAT).get()) {
+            if (!parser.getHeaderNames().containsAll(LifeEventColumns.ALL)) {
+                throw new OutputFormatException("life-events table needs the columns " + LifeEventColumns.ALL);
+            }
+            for (CSVRecord r : parser) {
+                if (!r.isConsistent()) {
+                    continue;
+                }
+                try {
+                    rows.add(new LifeEventRow(r.get(TRACK_ID), n(r, MASS), n(r, Z_INIT), n(r, Y_INIT),
+                            n(r, MIXING_LENGTH), n(r, OVERSHOOT), n(r, RADIATIVE_CORE), n(r, ZAMS),
+                            n(r, CONV_CORE_ONSET), n(r, CONV_CORE_END), n(r, LI_HALVED)));
+                } catch (IllegalArgumentException e) {
+                    throw new OutputFormatException("life-events row " + r.getRecordNumber() + ": " + e.getMessage(),
+                            e);
+                }
+            }
+        }
+        return rows;
+    }
+
+    private static double n(CSVRecord r, String column) {
+        return CsvNumbers.parse(r.get(column));
+    }
+}

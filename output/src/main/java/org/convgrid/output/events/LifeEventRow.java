@@ -1,0 +1,47 @@
+package org.convgrid.output.events;
+
+import java.util.Objects;
+import org.convgrid.engine.birth.LifeEvents;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.units.Constants;
+
+/**
+ * One star's row of {@code life_events.csv}, in the file's units; NaN (an empty cell) for an event that did not
+ * happen on the computed track.
+ *
+ * @param trackId the star's model id without its age part (its track file's name)
+ * @param massMsun M / M_sun
+ * @param zInit initial metal mass fraction
+ * @param yInit initial helium mass fraction
+ * @param mixingLength alpha, pressure scale heights
+ * @param overshootHp overshoot length, pressure scale heights
+ * @param radiativeCoreMyr the centre first stops being convective, Myr since birth (never: fully convective)
+ * @param zamsMyr the zero-age main sequence is reached, Myr since birth
+ * @param convCoreOnsetMyr a lasting convective core first appears, Myr since birth
+ * @param convCoreEndMyr that core vanishes, Myr since birth
+ * @param liHalvedMyr the surface lithium falls to half its birth value, Myr since birth
+ */
+public record LifeEventRow(String trackId, double massMsun, double zInit, double yInit, double mixingLength,
+                           double overshootHp, double radiativeCoreMyr, double zamsMyr, double convCoreOnsetMyr,
+                           double convCoreEndMyr, double liHalvedMyr) {
+
+    private static final double MYR = 1.0e6 * Constants.YEAR;
+
+    public LifeEventRow {
+        Objects.requireNonNull(trackId, "trackId");
+    }
+
+    /**
+     * The row of a star.
+     *
+     * @param trackId the star's track id
+     * @param first the star's first request (mass, composition, physics)
+     * @param events its life events, s since birth
+     */
+    public static LifeEventRow of(String trackId, ModelRequest first, LifeEvents events) {
+        return new LifeEventRow(trackId, first.mass() / Constants.M_SUN, first.initialMetals(),
+                first.initialHelium(), first.physics().mixingLength(), first.physics().overshoot(),
+                events.radiativeCore() / MYR, events.zeroAgeMainSequence() / MYR,
+                events.convectiveCoreOnset() / MYR, events.convectiveCoreEnd() / MYR, events.lithiumHalved() / MYR);
+    }
+}

@@ -1,0 +1,53 @@
+package org.convgrid.output.events;
+
+import java.io.IOException;
+import java.util.Collection;
+import java.util.Comparator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.convgrid.output.CsvNumbers;
+
+/**
+ * Writes {@code life_events.csv}: a header row of {@link LifeEventColumns#ALL}, then one row per star, ages in Myr
+ * since birth, an empty cell for an event that did not happen. Numbers in the {@link CsvNumbers} form.
+ */
+public final class LifeEventWriter {
+
+    private LifeEventWriter() {
+    }
+
+    /** The header line, with its line end. */
+    public static String header() {
+        return String.join(",", LifeEventColumns.ALL) + "\n";
+    }
+
+    /** One row, with its line end. */
+    public static String line(LifeEventRow r) {
+        return String.join(",", r.trackId(), CsvNumbers.format(r.massMsun()), CsvNumbers.format(r.zInit()),
+                CsvNumbers.format(r.yInit()), CsvNumbers.format(r.mixingLength()), CsvNumbers.format(r.overshootHp()),
+                CsvNumbers.format(r.radiativeCoreMyr()), CsvNumbers.format(r.zamsMyr()),
+                CsvNumbers.format(r.convCoreOnsetMyr()), CsvNumbers.format(r.convCoreEndMyr()),
+                CsvNumbers.format(r.liHalvedMyr())) + "\n";
+    }
+
+    /**
+     * The whole table: one row per track id (of several rows for one star, the last given: a star recomputed after
+     * an interruption), sorted by track id, so the same stars always give the same bytes.
+     */
+    public static void write(Collection<LifeEventRow> rows, Appendable out) throws IOException {
+        out.append(header());
+        for (LifeEventRow r : latestByStar(rows)) {
+            out.append(line(r));
+        }
+    }
+
+    /** One row per track id, the last given, sorted by track id. */
+    static List<LifeEventRow> latestByStar(Collection<LifeEventRow> rows) {
+        Map<String, LifeEventRow> byId = new LinkedHashMap<>();
+        for (LifeEventRow r : rows) {
+            byId.put(r.trackId(), r);
+        }
+        return byId.values().stream().sorted(Comparator.comparing(LifeEventRow::trackId)).toList();
+    }
+}

@@ -1,0 +1,59 @@
+package org.convgrid.output.events;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.io.StringReader;
+import java.util.List;
+import org.convgrid.engine.birth.LifeEvents;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.PhysicsOptions;
+import org.convgrid.engine.units.Constants;
+import org.junit.jupiter.api.Test;
+
+/** {@code life_events.csv}: Myr since birth, empty cells for events that did not happen, one row per star. */
+class LifeEventTableTest {
+
+    private static final double MYR = 1.0e6 * Constants.YEAR;
+
+    private static LifeEventRow row(String id, double massMsun, double zamsMyr) {
+        ModelRequest first = new ModelRequest(id + "-a00", massMsun * Constants.M_SUN, 0.02, 0.28, 0.0,
+                PhysicsOptions.DEFAULT);
+        return LifeEventRow.of(id, first, new LifeEvents(1.7 * MYR, zamsMyr * MYR, Double.NaN, Double.NaN,
+                12.5 * MYR));
+    }
+
+    @Test
+    void eventsAreWrittenInMyrWithEmptyCellsAndReadBack() throws Exception {
+        StringBuilder text = new StringBuilder();
+        LifeEventWriter.write(List.of(row("p0-z00-m001", 1.0, 48.85)), text);
+        assertThat(text.toString()).isEqualTo("""
+                track_id,mass_msun,z_init,y_init,mixing_length,overshoot_hp,radiative_core_myr,zams_myr,\
+                conv_core_onset_myr,conv_core_end_myr,li_halved_myr
+                p0-z00-m001,1.0,0.02,0.28,1.8,0.0,1.7,48.85,,,12.5
+                """);
+        List<LifeEventRow> back = LifeEventReader.read(new StringReader(text.toString()));
+        assertThat(back).singleElement().satisfies(r -> {
+            assertThat(r.zamsMyr()).isCloseTo(48.85, within(1e-12));
+            assertThat(r.convCoreOnsetMyr()).isNaN();
+        });
+    }
+
+    @Test
+    void aRecomputedStarKeepsItsLastRowAndTheTableIsSortedByTrackId() throws Exception {
+        StringBuilder text = new StringBuilder();
+        LifeEventWriter.write(List.of(row("p0-z01-m000", 0.5, 200.0), row("p0-z00-m001", 1.0, 40.0),
+                row("p0-z00-m001", 1.0, 48.85)), text);
+        List<LifeEventRow> back = LifeEventReader.read(new StringReader(text.toString()));
+        assertThat(back).extracting(LifeEventRow::trackId).containsExactly("p0-z00-m001", "p0-z01-m000");
+        assertThat(back.get(0).zamsMyr()).isCloseTo(48.85, within(1e-12));
+    }
+
+    @Test
+    void aRowCutShortByAnInterruptionIsLeftOut() throws Exception {
+        String text = LifeEventWriter.header() + LifeEventWriter.line(row("p0-z00-m000", 0.3, 150.0))
+                + "p0-z00-m001,1.0,0.02";
+        assertThat(LifeEventReader.read(new StringReader(text))).extracting(LifeEventRow::trackId)
+                .containsExactly("p0-z00-m000");
+    }
+}

@@ -1,0 +1,63 @@
+package org.convgrid.survey;
+
+import java.io.IOException;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
+import java.util.ArrayList;
+import java.util.Collection;
+import java.util.List;
+import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.events.LifeEventReader;
+import org.convgrid.output.events.LifeEventRow;
+import org.convgrid.output.events.LifeEventWriter;
+
+/**
+ * The run's {@code life_events.csv} while it grows: one row appended per star as soon as its track is computed (so
+ * an interrupted run keeps the stars it finished), then put in order once the sweep ends ({@link #tidy}: one row per
+ * star, the last computed, sorted by track id), which makes the table independent of thread count, shards and
+ * resumes. Thread-safe: appends are serialised.
+ */
+public final class LifeEventLog {
+
+    private final Path file;
+
+    /** @param file the table ({@code life_events.csv} of the run directory) */
+    public LifeEventLog(Path file) {
+        this.file = file;
+    }
+
+    /** Appends one star's row, writing the header first when the table is new. */
+    public synchronized void append(LifeEventRow row) throws IOException {
+        String text = (Files.exists(file) ? "" : LifeEventWriter.header()) + LifeEventWriter.line(row);
+        Files.writeString(file, text, StandardCharsets.UTF_8, StandardOpenOption.CREATE, StandardOpenOption.APPEND);
+    }
+
+    /** Rewrites a table in its final order; does nothing when there is none (no star evolved from birth). */
+    public static void tidy(Path file) throws IOException {
+        if (Files.exists(file)) {
+            write(file, LifeEventReader.read(file));
+        }
+    }
+
+    /** Joins the tables of several run directories (shards) into {@code target}; none written when none exists. */
+    public static void merge(Collection<Path> tables, Path target) throws IOException {
+        List<LifeEventRow> rows = new ArrayList<>();
+        boolean any = false;
+        for (Path t : tables) {
+            any |= Files.exists(t);
+            rows.addAll(LifeEventReader.read(t));
+        }
+        if (any) {
+            write(target, rows);
+        }
+    }
+
+    private static void write(Path file, List<LifeEventRow> rows) throws IOException {
+        StringWriter text = new StringWriter();
+        LifeEventWriter.write(rows, text);
+        AtomicFiles.writeString(file, text.toString());
+    }
+}
