@@ -4,6 +4,7 @@ import java.util.List;
 
 import org.convgrid.engine.evolution.AgedModel;
 import org.convgrid.engine.evolution.EvolutionResult;
+import org.convgrid.engine.evolution.SurfaceComposition;
 
 /**
  * A star evolved from birth: its start model, the evolution (models at the requested ages, every step, why it

@@ -6,6 +6,7 @@ import java.util.List;
 import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.evolution.NuclearLuminosity;
 import org.convgrid.engine.evolution.StepObserver;
+import org.convgrid.engine.evolution.SurfaceComposition;
 import org.convgrid.engine.structure.StellarModel;
 
 /**

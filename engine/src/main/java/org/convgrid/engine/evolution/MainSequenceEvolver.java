@@ -48,7 +48,7 @@ import org.convgrid.engine.units.Constants;
  * <p>From a pre-main-sequence start model (nuclear luminosity below {@link NuclearLuminosity#ZERO_AGE_FRACTION}
  * of L) the same step runs, the gravothermal term carrying the contraction. Until the star first reaches that
  * fraction the steps are limited in ln L by {@link PreMainSequenceLimits} instead, and also in |D ln R|,
- * |D ln T_c| and the central deuterium burnt; the first step is a fraction of the start model's
+ * |D ln T_c|, the central deuterium and the surface 7Li burnt; the first step is a fraction of the start model's
  * Kelvin-Helmholtz time. A track that starts on the zero-age main sequence never sees these limits.
  */
 public final class MainSequenceEvolver {
@@ -187,6 +187,7 @@ public final class MainSequenceEvolver {
         observer.accepted(0.0, 0.0, zeroAge);
         boolean young = !NuclearLuminosity.onMainSequence(zeroAge);
         double startDeuterium = zeroAge.state().composition(0).h2();
+        double startLithium = surfaceLithium(zeroAge);
         StellarModel current = zeroAge;
         double age = 0.0;
         int next = 0;
@@ -247,7 +248,7 @@ public final class MainSequenceEvolver {
             double ratio = Math.max(burned / limit,
                     dLnL / (young ? youngLimits.maxLuminosityChange() : settings.maxLuminosityChange()));
             if (young) {
-                ratio = Math.max(ratio, youngRatio(current, trial, startDeuterium));
+                ratio = Math.max(ratio, youngRatio(current, trial, startDeuterium, startLithium));
             }
             if (ratio > REJECTION_RATIO) {
                 spent += trial.report().iterations();
@@ -425,7 +426,8 @@ public final class MainSequenceEvolver {
     }
 
     /** The largest change of a pre-main-sequence step over its limit ({@link PreMainSequenceLimits}). */
-    private double youngRatio(StellarModel current, StellarModel trial, double startDeuterium) {
+    private double youngRatio(StellarModel current, StellarModel trial, double startDeuterium,
+                              double startLithium) {
         var a = current.global();
         var b = trial.global();
         double ratio = Math.max(Math.abs(Math.log(b.radius() / a.radius())) / youngLimits.maxRadiusChange(),
@@ -436,7 +438,17 @@ public final class MainSequenceEvolver {
             double burnt = (d - trial.state().composition(0).h2()) / d;
             ratio = Math.max(ratio, burnt / youngLimits.maxDeuteriumBurnt());
         }
+        double li = surfaceLithium(current);
+        if (li > PreMainSequenceLimits.LITHIUM_FLOOR * startLithium && li > 0.0) {
+            double burnt = (li - surfaceLithium(trial)) / li;
+            ratio = Math.max(ratio, burnt / youngLimits.maxLithiumBurnt());
+        }
         return ratio;
+    }
+
+    /** 7Li mass fraction at the surface (the convective envelope's, {@link SurfaceComposition}). */
+    private static double surfaceLithium(StellarModel model) {
+        return SurfaceComposition.of(model).li7();
     }
 
     /** G M^2/(R L), s. */

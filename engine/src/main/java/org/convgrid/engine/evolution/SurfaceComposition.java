@@ -1,4 +1,4 @@
-package org.convgrid.engine.birth;
+package org.convgrid.engine.evolution;
 
 import java.util.List;
 
@@ -15,15 +15,15 @@ import org.convgrid.engine.structure.StellarProfile;
  * practice: surface abundances are those of the convective envelope). The envelope's composition is read at the
  * point nearest its middle in mass. Stateless.
  */
-final class SurfaceComposition {
+public final class SurfaceComposition {
 
     /** An outermost convective zone whose top lies above this m/M counts as the envelope. */
-    static final double ENVELOPE_TOP = 0.99;
+    public static final double ENVELOPE_TOP = 0.99;
 
     private SurfaceComposition() {
     }
 
-    static Composition of(StellarModel model) {
+    public static Composition of(StellarModel model) {
         List<ConvectiveZone> zones = model.convection().zones();
         int last = model.state().size() - 1;
         if (zones.isEmpty() || zones.get(zones.size() - 1).outerMassFraction() < ENVELOPE_TOP) {
