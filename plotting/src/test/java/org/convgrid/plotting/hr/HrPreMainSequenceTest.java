@@ -49,13 +49,13 @@ class HrPreMainSequenceTest {
     }
 
     private static String track(double m) {
-        StringBuilder b = new StringBuilder("age_gyr,phase,luminosity_lsun,teff_k,conv_zones_mass_frac\n");
+        StringBuilder b = new StringBuilder("age_gyr,phase,luminosity_lsun,teff_k,central_cz_top_mass_frac,env_cz_base_mass_frac\n");
         double zams = 0.05 * Math.pow(m, -2.5);
         for (int k = 0; k <= 70; k++) {
             double age = Math.pow(10, -6 + k * 0.1);
             double[] sf = surface(m, age);
             b.append(age).append(',').append(age < zams ? "pre_main_sequence" : "main_sequence").append(',')
-                    .append(Math.pow(10, sf[1])).append(',').append(Math.pow(10, sf[0])).append(",0.0-1.0\n");
+                    .append(Math.pow(10, sf[1])).append(',').append(Math.pow(10, sf[0])).append(",1.0,0.0\n");
         }
         return b.toString();
     }

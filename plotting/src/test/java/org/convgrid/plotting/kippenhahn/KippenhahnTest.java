@@ -137,14 +137,17 @@ class KippenhahnTest {
      * in the centre from then on; ages log-spaced from 1 kyr to 10 Gyr after a first step at birth.
      */
     static String birthTrack() {
-        StringBuilder b = new StringBuilder("age_gyr,phase,conv_zones_mass_frac,burning_zone_mass_frac\n");
-        b.append("0.0,pre_main_sequence,0.0-1.0,\n");
+        StringBuilder b = new StringBuilder("age_gyr,phase,central_cz_top_mass_frac,env_cz_base_mass_frac,"
+                + "burning_inner_mass_frac,burning_outer_mass_frac\n");
+        b.append("0.0,pre_main_sequence,1.0,0.0,,\n");
         for (int k = 0; k <= 70; k++) {
             double ageGyr = Math.pow(10, -6 + k * 0.1);
             boolean main = ageGyr >= 0.045;
             double base = ageGyr < 0.002 ? 0.0 : Math.min(0.98, 0.3 * Math.log10(ageGyr / 0.002) + 0.2);
+            // fully convective while the envelope reaches the centre: one zone, centre to surface
             b.append(ageGyr).append(',').append(main ? "main_sequence" : "pre_main_sequence").append(',')
-                    .append(base).append("-1.0,").append(main ? "0.0-0.1" : "").append('\n');
+                    .append(base == 0.0 ? "1.0" : "").append(',').append(base).append(',')
+                    .append(main ? "0.0,0.1" : ",").append('\n');
         }
         return b.toString();
     }
