@@ -33,9 +33,10 @@ final class CalibrateSunCommand implements Callable<Integer> {
             description = "Age of the Sun since the zero-age main sequence, Gyr, in (0, 13] (default ${DEFAULT-VALUE}).")
     double ageGyr;
 
-    @Option(names = "--z-over-x", defaultValue = "0.0231", paramLabel = "RATIO",
-            description = "Present surface metal-to-hydrogen mass ratio Z/X, dimensionless "
-                    + "(default ${DEFAULT-VALUE}, Grevesse & Sauval 1998).")
+    @Option(names = "--z-over-x", defaultValue = "0.0245", paramLabel = "RATIO",
+            description = "Present surface metal-to-hydrogen mass ratio Z/X, dimensionless (default "
+                    + "${DEFAULT-VALUE}, Grevesse & Noels 1993, the mixture of the OPAL opacity tables; "
+                    + "Grevesse & Sauval 1998: 0.0231).")
     double metalsToHydrogen;
 
     @Option(names = "--format", defaultValue = "table", paramLabel = "table|csv",

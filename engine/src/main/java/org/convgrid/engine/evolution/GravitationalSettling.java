@@ -1,5 +1,7 @@
 package org.convgrid.engine.evolution;
 
+import java.util.Arrays;
+
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.structure.StellarProfile;
@@ -7,29 +9,26 @@ import org.convgrid.engine.units.Constants;
 
 /**
  * Microscopic diffusion of helium and metals through hydrogen: the velocities with which pressure gradient,
- * gravity and the electric field of the electrons make the heavier ions sink, and the diffusion coefficient of
- * the concentration gradients that oppose them.
+ * gravity, the electric field of the electrons and the temperature gradient make the heavier ions sink, and the
+ * diffusion coefficient of the concentration gradients that oppose them.
  *
- * <p>Physics: Burgers' (1969) flow equations for a fully ionised plasma of hydrogen (A = 1, Z = 1), helium (both
- * isotopes, A = 4, Z = 2) and the metals as one trace ion (oxygen, A = 16, Z = 8, fully ionised), with ideal
- * non-degenerate electrons whose pressure gradient sets the electric field (their own friction neglected, their
- * mass negligible), and without the residual heat-flow terms (no thermal diffusion). For species s,
- * dP_s/dr + rho_s g - Z_s n_s e E = sum_t K_st (w_t - w_s), e E = -(dP_e/dr)/n_e, and no net mass flow. With
- * hydrogen and helium the only important species the helium equation gives
- * w_He - w_H = -[dP_He/dr + rho_He g + (2 n_He/n_e) dP_e/dr]/K_HHe; the metals, a trace, drift through both.
+ * <p>Physics: Burgers' (1969) flow equations with the residual heat flows, solved in full ({@link BurgersFlow}) as
+ * Thoul, Bahcall &amp; Loeb (1994, ApJ 421, 828) do, for a fully ionised plasma of hydrogen (A = 1, Z = 1), helium
+ * (both isotopes, A = 4, Z = 2), the metals as one ion (oxygen, A = 16, Z = 8, fully ionised) and non-degenerate
+ * electrons: gravitational settling, thermal diffusion and, for the concentration gradients, ordinary diffusion.
  * The resistance coefficients of Coulomb collisions between two Maxwellian species are
  * K_st = (4/3) sqrt(2 pi mu_st) n_s n_t (Z_s Z_t e^2)^2 ln Lambda_st/(kT)^(3/2), from K_st = (16/3) n_s n_t mu_st
  * Omega_st^(1,1) (Burgers 1969) with the Chapman-Cowling collision integral of the screened Coulomb cross
  * section Q^(1) = 4 pi b_0^2 ln Lambda, b_0 = Z_s Z_t e^2/(mu g^2) (derived here); ln Lambda_st =
  * ln(1.123 kT lambda/(Z_s Z_t e^2)) (the speed average of ln(lambda/b_0)), at least 1, with lambda the larger of
- * the Debye length (electrons and ions) and the mean ion spacing (common practice). Thoul, Bahcall &amp; Loeb (1994, ApJ 421, 828) solve the full system
- * with heat flow and find it raises the diffusion velocities; without it ours are expected slower by ~20-30 %.
+ * the Debye length (electrons and ions) and the mean ion spacing (common practice).
  *
- * <p>The velocity is split into a settling part (all concentration gradients set to zero) and a diffusion part
- * -D dln X/dr, with D = (rho_H/rho) (P_He/K_HHe) [1 + Y(3.75 mu - 2/(1 + X))] the concentration-diffusion
- * coefficient of helium in hydrogen (the bracket gathers the composition terms of the mean molecular weight and
- * of the electrons), used for every species (an approximation: the metals' own coefficient is a few times
- * smaller). Gradients: dln P/dr = -rho g/P (hydrostatic), dln T/dr = nabla dln P/dr, and at uniform
+ * <p>The velocity is split into a settling part (all concentrations uniform: every number density follows the
+ * mass density, so the pressure, temperature and gravity terms, thermal diffusion included) and a diffusion part
+ * -D dln X/dr, with D_He the response of helium's velocity to a gradient of ln Y at fixed Z, gas pressure and
+ * temperature, from the same equations, and D_Z that of the metals' velocity to a gradient of ln Z at fixed Y
+ * (about ten times smaller: their charge brakes them); deuterium diffuses with helium's coefficient, 7Li with the
+ * metals'. Gradients: dln P/dr = -rho g/P (hydrostatic), dln T/dr = nabla dln P/dr, and at uniform
  * concentrations every partial pressure follows the gas pressure. Stateless.
  */
 final class GravitationalSettling {
@@ -38,6 +37,10 @@ final class GravitationalSettling {
     static final double METAL_MASS_NUMBER = 16.0;
     /** Its charge, fully ionised. */
     static final double METAL_CHARGE = 8.0;
+    /** Index of the electrons among the species of {@link #velocities}. */
+    private static final int ELECTRONS = 2;
+    /** The electron's mass in atomic mass units. */
+    static final double ELECTRON_MASS_NUMBER = Constants.M_E / Constants.M_U;
 
     /**
      * Below this temperature, K, the velocities are set to zero: the ions are no longer fully ionised there (the
@@ -62,9 +65,10 @@ final class GravitationalSettling {
      *
      * @param helium velocity of helium, cm s^-1, outward positive (negative: sinking)
      * @param metals velocity of the metals, cm s^-1
-     * @param diffusion D, cm^2 s^-1
+     * @param diffusion D of helium, cm^2 s^-1
+     * @param metalDiffusion D of the metals, cm^2 s^-1
      */
-    record Coefficients(double[] helium, double[] metals, double[] diffusion) {
+    record Coefficients(double[] helium, double[] metals, double[] diffusion, double[] metalDiffusion) {
     }
 
     static Coefficients of(StellarModel model) {
@@ -73,6 +77,7 @@ final class GravitationalSettling {
         double[] vHe = new double[n];
         double[] vZ = new double[n];
         double[] d = new double[n];
+        double[] dZ = new double[n];
         for (int k = 1; k < n; k++) {
             double r = p.radius(k);
             double rho = p.density(k);
@@ -90,60 +95,95 @@ final class GravitationalSettling {
             // hydrostatic (radiation taking its share): no finite difference, so a mu jump gives no spike
             double dlnPartial = (-rho * g - 4.0 * radiation * dlnT) / gasPressure;
             Composition c = model.state().composition(k);
-            double[] v = velocities(rho, t, g, dlnPartial - dlnT, dlnT, c.x(), c.y(), c.z());
+            double[] v = velocities(rho, t, dlnPartial - dlnT, dlnT, c.x(), c.y(), c.z(), true);
             vHe[k] = v[0];
             vZ[k] = v[1];
             d[k] = v[2];
+            dZ[k] = v[3];
         }
-        return new Coefficients(vHe, vZ, d);
+        return new Coefficients(vHe, vZ, d, dZ);
     }
 
     /**
-     * The settling velocities at one point, for uniform concentrations.
+     * The diffusion velocities at one point for uniform concentrations, and the concentration-diffusion
+     * coefficients of helium and of the metals, from {@link BurgersFlow} with hydrogen, helium, the metal ion and
+     * the electrons.
      *
      * @param dlnRho d ln rho/dr, cm^-1
      * @param dlnT d ln T/dr, cm^-1
-     * @return {v_He, v_Z, D} in cm s^-1, cm s^-1, cm^2 s^-1
+     * @param heatFlow whether the residual heat flows (thermal diffusion) are included
+     * @return {v_He, v_Z, D_He, D_Z} in cm s^-1, cm s^-1, cm^2 s^-1, cm^2 s^-1
      */
-    static double[] velocities(double rho, double t, double g, double dlnRho, double dlnT, double x, double y,
-                               double z) {
+    static double[] velocities(double rho, double t, double dlnRho, double dlnT, double x, double y, double z,
+                               boolean heatFlow) {
         double kt = Constants.K_B * t;
         double nH = rho * x / Constants.M_U;
         double nHe = rho * y / (4.0 * Constants.M_U);
         double nZ = rho * z / (METAL_MASS_NUMBER * Constants.M_U);
         double ne = nH + 2.0 * nHe + METAL_CHARGE * nZ;
         if (!(nH > 0.0) || !(nHe > 0.0)) {
-            return new double[] {0.0, 0.0, 0.0};
+            return new double[] {0.0, 0.0, 0.0, 0.0};
         }
+        boolean metals = nZ > 0.0;
+        // species: hydrogen, helium, electrons, then the metal ion when there is one
+        double[] a = metals ? new double[] {1.0, 4.0, ELECTRON_MASS_NUMBER, METAL_MASS_NUMBER}
+                : new double[] {1.0, 4.0, ELECTRON_MASS_NUMBER};
+        double[] charge = metals ? new double[] {1.0, 2.0, -1.0, METAL_CHARGE} : new double[] {1.0, 2.0, -1.0};
+        double[] n = metals ? new double[] {nH, nHe, ne, nZ} : new double[] {nH, nHe, ne};
         double screening = ne + nH + 4.0 * nHe + METAL_CHARGE * METAL_CHARGE * nZ;
         double debye = Math.sqrt(kt / (4.0 * Math.PI * E2 * screening));
         double spacing = Math.cbrt(3.0 / (4.0 * Math.PI * (nH + nHe + nZ)));
         double lambda = Math.max(debye, spacing);
-        double kHHe = resistance(1.0, 1.0, 4.0, 2.0, nH, nHe, kt, lambda);
-        double kHZ = resistance(1.0, 1.0, METAL_MASS_NUMBER, METAL_CHARGE, nH, nZ, kt, lambda);
-        double kHeZ = resistance(4.0, 2.0, METAL_MASS_NUMBER, METAL_CHARGE, nHe, nZ, kt, lambda);
-        // uniform concentrations: dln n_s/dr = dln rho/dr for every species, also for the electrons
-        double dlnPs = dlnRho + dlnT;
-        double dPeDr = ne * kt * dlnPs;
-        double rhoH = nH * Constants.M_U;
-        double rhoHe = 4.0 * nHe * Constants.M_U;
-        double forceHe = nHe * kt * dlnPs + rhoHe * g + (2.0 * nHe / ne) * dPeDr;
-        double relative = -forceHe / kHHe;
-        double vHe = rhoH / (rhoH + rhoHe) * relative;
-        double vH = -rhoHe / (rhoH + rhoHe) * relative;
-        double v = 0.0;
-        if (nZ > 0.0) {
-            double rhoZ = METAL_MASS_NUMBER * nZ * Constants.M_U;
-            double forceZ = nZ * kt * dlnPs + rhoZ * g + (METAL_CHARGE * nZ / ne) * dPeDr;
-            v = (kHZ * vH + kHeZ * vHe - forceZ) / (kHZ + kHeZ);
+        int species = n.length;
+        double[][] k = new double[species][species];
+        double[] mass = new double[species];
+        for (int s = 0; s < species; s++) {
+            mass[s] = a[s] * Constants.M_U;
+            for (int u = 0; u < species; u++) {
+                k[s][u] = resistance(a[s], Math.abs(charge[s]), a[u], Math.abs(charge[u]), n[s], n[u], kt, lambda);
+            }
         }
-        // the concentration terms of the helium force, P_He dln Y/dr [1 + Y(3.75 mu - 2/(1 + X))]: its own partial
-        // pressure, the mean molecular weight in rho (mu^-1 = 2X + 3Y/4 + Z/2 at fixed Z) and the electrons
-        // (n_e/rho proportional to 1 + X) (derived here)
-        double mu = 1.0 / (2.0 * x + 0.75 * y + 0.5 * z);
-        double concentration = 1.0 + y * (3.75 * mu - 2.0 / (1.0 + x));
-        double diffusion = rhoH / (rhoH + rhoHe) * nHe * kt / kHHe * concentration;
-        return new double[] {vHe, v, diffusion};
+        BurgersFlow flow = new BurgersFlow(mass, charge, n, kt, k);
+        // uniform concentrations: every number density follows the mass density
+        double[] uniform = new double[species];
+        Arrays.fill(uniform, dlnRho);
+        double[] w = flow.velocities(uniform, dlnT, heatFlow);
+        // a unit gradient of ln Y at fixed Z (hydrogen making up the difference), gas pressure and temperature: the
+        // response of helium's velocity is -D_He; likewise a unit gradient of ln Z at fixed Y gives -D_Z
+        double diffusion = -flow.velocities(concentrationGradient(n, charge, 1, -y / x), 0.0, heatFlow)[1];
+        double metalDiffusion = metals
+                ? -flow.velocities(concentrationGradient(n, charge, 3, -z / x), 0.0, heatFlow)[3] : diffusion;
+        return new double[] {w[1], metals ? w[3] : 0.0, diffusion, metalDiffusion};
+    }
+
+    /**
+     * d ln n_s/dr for a unit gradient of the mass fraction of species {@code s} (hydrogen, species 0, changing by
+     * {@code hydrogenShare} times as much in ln), the electrons following neutrality and the density adjusting so
+     * that the particle count (the gas pressure at fixed temperature) stays put.
+     */
+    private static double[] concentrationGradient(double[] n, double[] charge, int s, double hydrogenShare) {
+        int species = n.length;
+        double[] c = new double[species];
+        c[0] = hydrogenShare;
+        c[s] = 1.0;
+        double electrons = 0.0;
+        for (int t = 0; t < species; t++) {
+            if (charge[t] > 0.0) {
+                electrons += charge[t] * n[t] * c[t];
+            }
+        }
+        c[ELECTRONS] = electrons / n[ELECTRONS];
+        double particles = 0.0;
+        double shift = 0.0;
+        for (int t = 0; t < species; t++) {
+            particles += n[t];
+            shift -= n[t] * c[t];
+        }
+        double[] gradient = new double[species];
+        for (int t = 0; t < species; t++) {
+            gradient[t] = c[t] + shift / particles;
+        }
+        return gradient;
     }
 
     /** K_st of Coulomb collisions, g cm^-3 s^-1 (class comment). */

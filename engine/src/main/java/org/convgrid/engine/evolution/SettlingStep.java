@@ -9,7 +9,8 @@ import org.convgrid.engine.structure.StellarModel;
  * cells of the mass mesh: first the settling, as explicit upwind fluxes 4 pi r^2 rho X_s v_s through the cell
  * boundaries (helium and the metals sink, hydrogen takes the balancing flux so that no mass moves in all), in as
  * many sub-steps as keep each boundary's flow below half the content of the smaller cell beside it; then the concentration diffusion, one
- * backward-Euler step of dX/dt = d/dm((4 pi r^2 rho)^2 D dX/dm) ({@link SemiconvectiveMixing#diffuse}). Both
+ * backward-Euler step of dX/dt = d/dm((4 pi r^2 rho)^2 D dX/dm) ({@link SemiconvectiveMixing#diffuse}) with helium's
+ * D for helium and the metals' D for the metals, hydrogen taking the balance. Both
  * conserve the mass of every species to rounding (the fluxes telescope); no flux crosses the centre or the
  * surface. Stateless.
  */
@@ -44,20 +45,52 @@ final class SettlingStep {
         int m = profile.size();
         double[] area = new double[m];
         double[] s = new double[m];
+        double[] sZ = new double[m];
         for (int k = 0; k < m; k++) {
             area[k] = 4.0 * Math.PI * profile.radius(k) * profile.radius(k) * profile.density(k);
             s[k] = area[k] * area[k] * c.diffusion()[k];
+            sZ[k] = area[k] * area[k] * c.metalDiffusion()[k];
         }
         double[] vHe = c.helium();
         double[] vZ = c.metals();
         if (remeshed) {
             area = SemiconvectiveMixing.onMesh(profile, area, mesh);
             s = SemiconvectiveMixing.onMesh(profile, s, mesh);
+            sZ = SemiconvectiveMixing.onMesh(profile, sZ, mesh);
             vHe = SemiconvectiveMixing.onMesh(profile, vHe, mesh);
             vZ = SemiconvectiveMixing.onMesh(profile, vZ, mesh);
         }
         Composition[] settled = settle(mesh, composition, area, vHe, vZ, mixed, dt);
-        return SemiconvectiveMixing.diffuse(mesh, settled, s, dt);
+        return combine(SemiconvectiveMixing.diffuse(mesh, settled, s, dt),
+                SemiconvectiveMixing.diffuse(mesh, settled, sZ, dt));
+    }
+
+    /**
+     * Helium (and deuterium) from the diffusion with helium's coefficient, the metals (and 7Li) from the one with
+     * the metals' coefficient, hydrogen the balance. Each species' diffusion conserves its mass, so the balance
+     * conserves hydrogen's.
+     */
+    static Composition[] combine(Composition[] byHelium, Composition[] byMetals) {
+        Composition[] out = new Composition[byHelium.length];
+        for (int k = 0; k < out.length; k++) {
+            double[] x = MassFractions.of(byHelium[k]);
+            double[] metals = MassFractions.of(byMetals[k]);
+            for (int i = FIRST_METAL; i <= MassFractions.OTHER_METALS; i++) {
+                x[i] = metals[i];
+            }
+            x[MassFractions.LI7] = metals[MassFractions.LI7];
+            double rest = 0.0;
+            for (int i = 1; i < MassFractions.ALL; i++) {
+                rest += x[i];
+            }
+            x[H1] = Math.max(0.0, 1.0 - rest);
+            double sum = x[H1] + rest;
+            for (int i = 0; i < MassFractions.ALL; i++) {
+                x[i] /= sum;
+            }
+            out[k] = MassFractions.composition(x);
+        }
+        return out;
     }
 
     /**

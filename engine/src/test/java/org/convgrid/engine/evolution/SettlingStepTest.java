@@ -97,4 +97,30 @@ class SettlingStepTest {
         }
         assertThat(out[0].h1()).isGreaterThanOrEqualTo(0.0);
     }
+
+    @Test
+    void combiningTheTwoDiffusionsConservesEverySpecies() {
+        // helium from one diffusion, metals from the other, hydrogen the balance: each total is kept
+        MassMesh mesh = TestMeshes.logit(30, -3.0, 3.0);
+        int n = mesh.size();
+        Composition[] c = new Composition[n];
+        double[] fast = new double[n];
+        double[] slow = new double[n];
+        for (int k = 0; k < n; k++) {
+            c[k] = Composition.scaledSolar(0.60 + 0.1 * k / n, 0.01 + 0.01 * k / n);
+            fast[k] = 1.0e40;
+            slow[k] = 1.0e39;
+        }
+        Composition[] out = SettlingStep.combine(SemiconvectiveMixing.diffuse(mesh, c, fast, 1.0e16),
+                SemiconvectiveMixing.diffuse(mesh, c, slow, 1.0e16));
+        double[] before = TestMeshes.totals(mesh, c);
+        double[] after = TestMeshes.totals(mesh, out);
+        for (int i = 0; i < before.length; i++) {
+            assertThat(after[i]).isCloseTo(before[i], within(1e-12 * mesh.totalMass()));
+        }
+        // the metals moved less than helium did: their coefficient is ten times smaller
+        double heliumMove = Math.abs(out[0].he4() - c[0].he4()) / c[0].he4();
+        double metalMove = Math.abs(out[0].o16() - c[0].o16()) / c[0].o16();
+        assertThat(metalMove).isLessThan(heliumMove);
+    }
 }
