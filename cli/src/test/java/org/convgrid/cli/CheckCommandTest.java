@@ -35,16 +35,21 @@ class CheckCommandTest {
         String axes = "mass: {values: [1.0, 2.0]}\nmetallicity: {z: 0.014, y: 0.27}\n";
         CliHarness cli = CliHarness.in(work, FakeChunkSolver.fast());
         // zero-age models only: 2 x 1 s
-        Path zeroAge = CliHarness.writeGrid(work, "zams.yaml", axes + "age: {gyr: [0]}\n");
+        Path zeroAge = CliHarness.writeGrid(work, "zams.yaml", axes + "age: {gyr: [0], origin: zams}\n");
         assertThat(cli.execute("check", zeroAge.toString(), "--threads", "1").out())
                 .contains("about 2 s on 1 thread(s)").contains("zero-age models only");
         // three ages of one evolution each: 2 x (1 + 1.5) s, not 6 models' worth of zero-age time
-        Path evolved = CliHarness.writeGrid(work, "evolved.yaml", axes + "age: {gyr: [0, 0.15, 0.6]}\n");
+        Path evolved = CliHarness.writeGrid(work, "evolved.yaml", axes + "age: {gyr: [0, 0.15, 0.6], origin: zams}\n");
         assertThat(cli.execute("check", evolved.toString(), "--threads", "1").out()).contains("about 5 s on 1");
         // main-sequence fractions: evolved twice, 2 x (1 + 2 x 1.5) s
-        Path fractions = CliHarness.writeGrid(work, "fractions.yaml", axes + "age: {ms_fraction: [0, 0.5]}\n");
+        Path fractions = CliHarness.writeGrid(work, "fractions.yaml",
+                axes + "age: {ms_fraction: [0, 0.5], origin: zams}\n");
         assertThat(cli.execute("check", fractions.toString(), "--threads", "1").out())
                 .contains("about 8 s on 1 thread(s)").contains("evolved twice (lifetime, then ages)");
+        // from birth: one evolution of 6 zero-age models' time per star and no zero-age model, 2 x 6 s
+        Path birth = CliHarness.writeGrid(work, "birth.yaml", axes + "age: {myr: [20, 150]}\n");
+        assertThat(cli.execute("check", birth.toString(), "--threads", "1").out())
+                .contains("about 12 s on 1 thread(s)").contains("evolved from birth once to its oldest age");
     }
 
     @Test
