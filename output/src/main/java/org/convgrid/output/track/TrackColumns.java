@@ -28,9 +28,12 @@ public final class TrackColumns {
     public static final String ENV_CZ_BASE = "env_cz_base_mass_frac";
     /** How many convective zones the step has (each one a row of the zone table). */
     public static final String CONV_ZONE_COUNT = "conv_zone_count";
-    /** Inner m/M of the hydrogen-burning region; empty when nothing burns. */
+    /**
+     * Inner m/M of the nuclear-burning region (eps_nuc above 1 % of its peak: deuterium early on the pre-main
+     * sequence, hydrogen after it); empty when nothing burns.
+     */
     public static final String BURNING_INNER = "burning_inner_mass_frac";
-    /** Outer m/M of the hydrogen-burning region; empty when nothing burns. */
+    /** Outer m/M of the nuclear-burning region; empty when nothing burns. */
     public static final String BURNING_OUTER = "burning_outer_mass_frac";
     /** L_nuc / L; empty for tracks from the ZAMS (not recorded there). */
     public static final String NUCLEAR_FRACTION = "nuclear_lum_frac";

@@ -27,7 +27,8 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  */
 public final class KippenhahnRenderer {
 
-    static final String BURNING_LABEL = "hydrogen burning (hatched)";
+    // where eps_nuc exceeds 1 % of its maximum: deuterium burning on the early pre-main sequence, hydrogen after it
+    static final String BURNING_LABEL = "nuclear burning (hatched)";
     /** The trade's abbreviation: the full words would run out of the plot next to a late zero-age main sequence. */
     static final String ZAMS_LABEL = "ZAMS";
     private static final Color TRANSPARENT = new Color(0, 0, 0, 0);
