@@ -48,7 +48,8 @@ final class AxisValues {
             if (v == null) {
                 ok = false;
             } else if (!range.contains(v)) {
-                reader.problem(item, GridProblemKind.OUT_OF_RANGE, what + " must lie in " + range + ", got " + v);
+                reader.problem(item, GridProblemKind.OUT_OF_RANGE, what + " must lie in " + range + ", got " + v
+                        + (v == range.lo() ? range.atExcludedLow() : ""));
                 ok = false;
             } else if (order != Order.ANY && seen.contains(v)) {
                 reader.problem(item, GridProblemKind.DUPLICATE, "duplicate " + what + " " + v);

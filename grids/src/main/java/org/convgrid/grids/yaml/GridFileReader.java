@@ -279,7 +279,9 @@ public final class GridFileReader {
         }
         boolean myr = given.get(0).equals("myr");
         double scale = myr ? MYR_PER_GYR : 1.0;
-        Range range = origin == AgeOrigin.BIRTH ? Range.aboveZero(MAX_AGE_GYR * scale)
+        // grids written before ages counted from birth meant the zero-age main sequence by 0: say how to keep that
+        Range range = origin == AgeOrigin.BIRTH ? Range.aboveZero(MAX_AGE_GYR * scale).noteAtExcludedLow(
+                " (age 0 would be the start model; for the zero-age main sequence add origin: zams)")
                 : Range.closed(0.0, MAX_AGE_GYR * scale);
         String what = (origin == AgeOrigin.BIRTH ? "age from birth" : "age") + (myr ? " in Myr" : " in Gyr");
         List<Double> ages = AxisValues.increasing(fields.value(given.get(0)), what, range, reader);

@@ -1,7 +1,16 @@
 package org.convgrid.grids.yaml;
 
 /** An interval of allowed values; {@link #toString()} writes it in interval notation for messages. */
-record Range(double lo, boolean loIncluded, double hi, boolean hiIncluded) {
+record Range(double lo, boolean loIncluded, double hi, boolean hiIncluded, String atExcludedLow) {
+
+    Range(double lo, boolean loIncluded, double hi, boolean hiIncluded) {
+        this(lo, loIncluded, hi, hiIncluded, "");
+    }
+
+    /** The same range, whose message for a value at its excluded lower end ends with {@code note}. */
+    Range noteAtExcludedLow(String note) {
+        return new Range(lo, loIncluded, hi, hiIncluded, note);
+    }
 
     static Range open(double lo, double hi) {
         return new Range(lo, false, hi, false);

@@ -83,7 +83,10 @@ class AgeOriginReaderTest {
         List<GridProblem> problems = problems(HEAD + "age: {myr: [0, 150]}\n");
         assertThat(problems).extracting(p -> p.line() + ":" + p.column() + " " + p.kind())
                 .containsExactly("3:13 OUT_OF_RANGE");
-        assertThat(problems.get(0).message()).contains("from birth").contains("Myr");
+        assertThat(problems.get(0).message()).contains("from birth").contains("Myr")
+                .as("a grid written when 0 meant the zero-age main sequence is told how to keep that meaning")
+                .endsWith("for the zero-age main sequence add origin: zams)");
+        assertThat(problems(HEAD + "age: {myr: [-5]}\n").get(0).message()).doesNotContain("origin: zams");
     }
 
     @Test
