@@ -7,12 +7,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
-import org.convgrid.engine.batch.ChunkSolver;
-import org.convgrid.engine.batch.GridRequests;
-import org.convgrid.engine.batch.StarTrackSink;
-import org.convgrid.engine.evolution.MainSequenceEvolver;
 import org.convgrid.engine.request.AgeOrigin;
-import org.convgrid.grids.GridSpec;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.events.LifeEventReader;
@@ -21,7 +16,6 @@ import org.convgrid.output.manifest.RunManifestReader;
 import org.convgrid.output.track.Track;
 import org.convgrid.output.track.TrackReader;
 import org.convgrid.output.track.TrackStep;
-import org.convgrid.survey.ChunkSolverFactory;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -44,21 +38,10 @@ class BirthRunTest {
     @TempDir
     Path dir;
 
-    private static final ChunkSolverFactory COARSE = new ChunkSolverFactory() {
-        @Override
-        public ChunkSolver solverFor(GridSpec grid) {
-            return solverFor(grid, StarTrackSink.NONE);
-        }
-
-        @Override
-        public ChunkSolver solverFor(GridSpec grid, StarTrackSink tracks) {
-            return new GridRequests(tracks, MainSequenceEvolver.Settings.DEFAULT.scaled(3.0));
-        }
-    };
-
     private CliHarness.Execution run(String out, int threads) throws Exception {
         Path grid = CliHarness.writeGrid(dir, "birth.yaml", GRID);
-        CliHarness harness = new CliHarness(new CommandContext(COARSE, List.of(), Map.of(), dir, false));
+        CliHarness harness = new CliHarness(
+                new CommandContext(CoarseProductionSolvers.FACTORY, List.of(), Map.of(), dir, false));
         return harness.execute("run", "--no-refine", grid.toString(), "--out", out, "--threads",
                 Integer.toString(threads), "--quiet");
     }

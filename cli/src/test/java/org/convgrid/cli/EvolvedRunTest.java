@@ -7,16 +7,10 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import java.util.stream.Stream;
-import org.convgrid.engine.batch.ChunkSolver;
-import org.convgrid.engine.batch.GridRequests;
-import org.convgrid.engine.evolution.MainSequenceEvolver;
-import org.convgrid.engine.batch.StarTrackSink;
-import org.convgrid.grids.GridSpec;
 import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.track.TrackColumns;
-import org.convgrid.survey.ChunkSolverFactory;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -38,22 +32,10 @@ class EvolvedRunTest {
     @TempDir
     Path dir;
 
-    /** The production engine with coarse time steps. */
-    private static final ChunkSolverFactory COARSE = new ChunkSolverFactory() {
-        @Override
-        public ChunkSolver solverFor(GridSpec grid) {
-            return solverFor(grid, StarTrackSink.NONE);
-        }
-
-        @Override
-        public ChunkSolver solverFor(GridSpec grid, StarTrackSink tracks) {
-            return new GridRequests(tracks, MainSequenceEvolver.Settings.DEFAULT.scaled(3.0));
-        }
-    };
-
     private CliHarness.Execution run(String out, int threads) throws Exception {
         Path grid = CliHarness.writeGrid(dir, "evolved.yaml", GRID);
-        CliHarness harness = new CliHarness(new CommandContext(COARSE, List.of(), Map.of(), dir, false));
+        CliHarness harness = new CliHarness(
+                new CommandContext(CoarseProductionSolvers.FACTORY, List.of(), Map.of(), dir, false));
         return harness.execute("run", "--no-refine", grid.toString(), "--out", out, "--threads", Integer.toString(threads),
                 "--quiet");
     }
@@ -118,7 +100,8 @@ class EvolvedRunTest {
     void aZeroAgeGridWritesNoTracks() throws Exception {
         Path grid = CliHarness.writeGrid(dir, "zams.yaml", GRID.replace("[0, 1, 5]", "[0]")
                 .replace("[1.0, 2.0]", "[1.0]"));
-        CliHarness harness = new CliHarness(new CommandContext(COARSE, List.of(), Map.of(), dir, false));
+        CliHarness harness = new CliHarness(
+                new CommandContext(CoarseProductionSolvers.FACTORY, List.of(), Map.of(), dir, false));
         CliHarness.Execution e = harness.execute("run", "--no-refine", grid.toString(), "--out", "zams", "--quiet");
         assertThat(e.code()).as(e.err()).isZero();
         assertThat(dir.resolve("zams/tracks")).doesNotExist();
