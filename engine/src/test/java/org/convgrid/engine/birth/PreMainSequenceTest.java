@@ -152,27 +152,47 @@ class PreMainSequenceTest {
     }
 
     @Test
+    void hayashiTrackAtOneMyrAgainstAPublishedTrack() {
+        // Baraffe et al. 2015 (A&A 577, A42), published 1 Msun model at 1 Myr: Teff 4377 K, log L/Lsun 0.28,
+        // R 2.435 Rsun (their isochrone table; non-grey atmospheres, alpha 1.6, Z ~ 0.015). Published sets with other
+        // atmospheres and mixing lengths differ by ~100-150 K there, which would be the tolerance of a validation.
+        var g = solar().models().get(0).model().global();
+        double teff = g.effectiveTemperature();
+        // KNOWN DISCREPANCY, frozen so that a fix is noticed: 4718 K, ~340 K hotter (R 2.29, L 2.35). Measured cause:
+        // the cool opacity, 0.3-0.5 dex below the published low-temperature tables where the photosphere sits
+        // (log T 3.674, log R 0.28; CoolOpacityAgainstLowTemperatureTablesTest). Raised by 0.4 dex below log T 3.70
+        // (PreMainSequenceProbe -Dprobe.coolDex=0.4): Teff 4425 K, R 2.52, L 2.19. The mixing length and the grey
+        // atmosphere are second order here.
+        assertThat(teff - 4377.0).isBetween(250.0, 450.0);
+        assertThat(teff).isCloseTo(4718.0, within(15.0));
+    }
+
+    @Test
     void surfaceLithiumAgainstStandardModels() {
-        // 1 Msun, Z = 0.02 at 1 Gyr: standard models (no rotational mixing) burn part of their lithium on the
-        // pre-main sequence, at least ~0.3 dex (D'Antona & Mazzitelli 1994, ApJS 90, 467; Piau & Turck-Chieze
-        // 2002, ApJ 566, 419; from memory), and under-deplete the Sun, which shows log(Li/Li_0) = 1.05 - 3.26 = -2.2
-        // at 4.57 Gyr (Asplund et al. 2009, Table 1, photosphere against meteorites).
+        // Baraffe et al. 2015 (A&A 577, A42), the published 1 Msun track: log Li/Li0 = -0.51 from ~30 Myr to beyond
+        // 4 Gyr (a standard model burns its lithium on the pre-main sequence only: -0.41 dex by 10 Myr); standard
+        // models under-deplete the Sun, which shows log(Li/Li_0) = 1.05 - 3.26 = -2.2 at 4.57 Gyr (Asplund et al.
+        // 2009, Table 1, photosphere against meteorites). Sets differ by a few tenths of a dex (their Z, opacities,
+        // mixing length: depletion grows with Z, and Baraffe et al. use Z ~ 0.015 against our 0.02), so a validation
+        // would ask for -0.5 +- 0.5 dex. It must at least burn some: below -0.3.
         AgedModel gyr = solar().models().get(3);
         double logLi = Math.log10(solar().surfaceLithiumAt(gyr));
         assertThat(logLi).isLessThan(-0.3);
-        // KNOWN DISCREPANCY, frozen so that a change is noticed: this engine depletes ~1 dex more by 1 Gyr than the
-        // Sun shows at 4.57 Gyr, where published standard models leave the Sun under-depleted. Not a validation.
-        // Measured cause: the base of the young envelope sits at ~4.06e6 K from the radiative core's onset (T_c
-        // 4.25e6 K, 1.8 Myr) to ~5 Myr, while its Hayashi track runs hotter than published 1 Msun tracks (4730 K at
-        // 1 Myr against ~4300 K, from memory; grey T(tau) atmosphere, analytic low-temperature opacity). 7Li(p,a) goes as
-        // ~T^18 there, so 15 % in that temperature is ~1.3 dex in depletion. With the surface-lithium step limit
-        // (30 %) the value no longer depends on the requested ages (-3.09 / -3.10 for two age sets; -4.30 / -3.55
-        // before); a 10 % limit gives -2.74: the default is still ~0.4 dex from the converged value.
+        // KNOWN DISCREPANCY, frozen so that a change is noticed: -3.10, ~2.6 dex more than the published track.
+        // Not the rate (7Li(p,a) within 10 % of Caughlan & Fowler 1988, LightElementRatesTest) nor the mixing (each
+        // convective zone burns once per step with its mass-weighted rate). Measured cause: the envelope base sits at
+        // ~4.07e6 K from the radiative core's onset (1.7 Myr) to ~5 Myr, and the star reaches each stage earlier,
+        // because its Hayashi track is ~340 K too hot (see above: the cool opacity). With that opacity raised by
+        // 0.4 dex below log T 3.70 (PreMainSequenceProbe -Dprobe.coolDex=0.4) the base holds 3.80e6 K, T_c at 10 Myr
+        // is 6.06e6 K (Baraffe et al. 2015: 6.08e6 K; ours now 6.69e6 K), the envelope base at 10 Myr m/M = 0.555
+        // (their radiative core 0.55 Msun) and log Li/Li0 = -0.89 from 50 Myr on. With the surface-lithium step limit
+        // (30 %) the value no longer depends on the requested ages (-3.09 / -3.10 for two age sets); a 10 % limit
+        // gives -2.74: the default is still ~0.4 dex from the converged value.
         assertThat(logLi).isCloseTo(-3.10, within(0.2));
-        // 0.5 Msun at 100 Myr: standard models have burnt their lithium (more than 2 dex by ~30-50 Myr;
-        // Baraffe et al. 2015, A&A 577, A42; from memory)
+        // 0.5 Msun at 100 Myr: Baraffe et al. 2015 keep Li/Li0 = 0.000 in their table (below 5e-4) from 15 Myr on;
+        // the lithium of a 0.5-0.6 Msun star is gone well before the zero-age main sequence
         BirthTrack half = BirthTracks.track(0.5, 0.02, 300, 1.0, 100);
-        assertThat(half.surfaceLithiumAt(half.models().get(0))).isLessThan(1.0e-2);
+        assertThat(half.surfaceLithiumAt(half.models().get(0))).isLessThan(5.0e-4);
         // the halving happens on the pre-main sequence for both (common practice)
         assertThat(half.events().lithiumHalved()).isLessThan(half.events().zeroAgeMainSequence());
         assertThat(solar().events().lithiumHalved()).isLessThan(solar().events().zeroAgeMainSequence());
