@@ -42,8 +42,12 @@ class LowMassBirthTest {
         // Not the surface either: with the cool opacity raised by 0.4 dex below log T 3.70 (PreMainSequenceProbe
         // -Dprobe.mass=0.3 -Dprobe.coolDex=0.4) the star at 20 Myr matches Baraffe et al. 2015's published 0.3 Msun
         // model (Teff 3402 K, R 0.567, L 0.0389 against 3392 K, 0.569, 0.038) and still grows its core at 41.3 Myr
-        // (m/M 0.147 at 100 Myr): the cause lies in the centre (opacity, equation of state or energy release near
-        // nabla_rad/nabla_ad ~ 0.9), not found yet.
+        // (m/M 0.147 at 100 Myr): the cause lies in the centre, not found yet. Checked at 60 Myr (T_c 6.09e6 K,
+        // rho_c 50.5): kappa is the OPAL value there (log R -0.65, conduction negligible), nabla_ad 0.3965 (ideal gas
+        // 0.4 less the Coulomb term), eps_nuc 0.103 erg/g/s against ~0.09 from the textbook pp-chain rate taken to
+        // 3He only with weak screening (2.38e6 rho X^2 T6^-2/3 exp(-33.8 T6^-1/3) x 6.67/13.1 x 1.13; Kippenhahn,
+        // Weigert & Weiss 2012, ch. 18, from memory); L(m)/m at the centre is 0.344 erg/g/s (eps_grav 0.24), and
+        // 16 % more would keep the centre convective.
         BirthTrack t = BirthTracks.track(0.3, 0.02, 1000, 1.0, 1000);
         double largest = 0.0;
         for (TrackPoint p : t.points()) {
