@@ -204,7 +204,8 @@ public final class StructureEquations implements DifferenceSystem {
         double t = Math.exp(lnT);
         Composition c = compositionRule == null ? composition[k] : compositionRule.at(k, rho, t);
         composition[k] = c;
-        EosState s = physics.eos().atDensity(rho, t, c);
+        // the previous iteration's state of this point starts the equation of state's own solve
+        EosState s = eos[k] == null ? physics.eos().atDensity(rho, t, c) : physics.eos().atDensity(rho, t, c, eos[k]);
         OpacityValue op = physics.opacity().rosselandMean(rho, t, c);
         BurningRate burn = physics.nuclear().burn(rho, t, c);
         eos[k] = s;
@@ -248,14 +249,17 @@ public final class StructureEquations implements DifferenceSystem {
             return;
         }
         double h = DIFFERENCE_STEP;
-        EosState sRho = physics.eos().atDensity(rho * Math.exp(h), t, c);
-        OpacityValue opRho = physics.opacity().rosselandMean(rho * Math.exp(h), t, c);
-        EosState sT = physics.eos().atDensity(rho, t * Math.exp(h), c);
-        OpacityValue opT = physics.opacity().rosselandMean(rho, t * Math.exp(h), c);
+        // the perturbed states start from the unperturbed one (one or two neutrality steps each); the opacity
+        // follows its own analytic slopes
+        double stepFactor = Math.exp(h);
+        EosState sRho = physics.eos().atDensity(rho * stepFactor, t, c, s);
+        EosState sT = physics.eos().atDensity(rho, t * stepFactor, c, s);
+        double kappaRho = op.kappa() * Math.exp(op.dlnKappaDlnRho() * h);
+        double kappaT = op.kappa() * Math.exp(op.dlnKappaDlnT() * h);
         double base = nabla[k];
-        dNabla[4 * k] = (localNabla(k, r * Math.exp(h), lum, s, op.kappa(), false) - base) / h;
-        dNabla[4 * k + 1] = (localNabla(k, r, lum, sRho, opRho.kappa(), false) - base) / h;
-        dNabla[4 * k + 2] = (localNabla(k, r, lum, sT, opT.kappa(), false) - base) / h;
+        dNabla[4 * k] = (localNabla(k, r * stepFactor, lum, s, op.kappa(), false) - base) / h;
+        dNabla[4 * k + 1] = (localNabla(k, r, lum, sRho, kappaRho, false) - base) / h;
+        dNabla[4 * k + 2] = (localNabla(k, r, lum, sT, kappaT, false) - base) / h;
         double dl = h * Math.max(Math.abs(y[4 * k + 3]), 1.0e-3);
         dNabla[4 * k + 3] = (localNabla(k, r, lum + dl * luminosityScale, s, op.kappa(), false) - base) / dl;
         if (extraRate == null) {
