@@ -10,6 +10,14 @@ public interface ConvectiveTransport {
     ConvectiveGradient gradient(LocalConvectionState state);
 
     /**
+     * The gradient of {@link #gradient} with its partial derivatives by nabla_rad, nabla_ad and ln U, for the
+     * structure solver's Jacobian; null when this model has none (the solver then differences {@link #gradient}).
+     */
+    default MixingLengthSolution withSlopes(LocalConvectionState state) {
+        return null;
+    }
+
+    /**
      * The mixing length in pressure scale heights, alpha = l_m / H_P: what sets the turnover time of a zone and the
      * diffusion coefficient D_0 = v_c l_m/3 of diffusive overshoot.
      */

@@ -53,6 +53,12 @@ public final class MixingLengthTheory implements ConvectiveTransport {
         return solve(state).gradient();
     }
 
+    /** {@link #solve}: the derivatives come from implicit differentiation of the cubic. */
+    @Override
+    public MixingLengthSolution withSlopes(LocalConvectionState state) {
+        return solve(state);
+    }
+
     /**
      * The gradient with its derivatives by nabla_rad, nabla_ad and ln U.
      *

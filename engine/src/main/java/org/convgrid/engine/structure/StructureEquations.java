@@ -3,6 +3,7 @@ package org.convgrid.engine.structure;
 import org.convgrid.engine.convection.ConvectiveGradient;
 import org.convgrid.engine.convection.LedouxGradient;
 import org.convgrid.engine.convection.LocalConvectionState;
+import org.convgrid.engine.convection.MixingLengthSolution;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
 import org.convgrid.engine.physics.PhysicsSet;
@@ -35,9 +36,12 @@ import org.convgrid.engine.units.Constants;
  * <p>nabla = nabla_rad = 3 kappa L P/(16 pi a c G m T^4) where stable; where nabla_rad exceeds nabla_ad
  * (Schwarzschild) or nabla_ad + nabla_mu/delta (Ledoux, ideal-gas phi = 1) the convection model gives nabla.
  * Jacobians: analytic in radiative points (from the EOS chi's, the opacity/rate logarithmic derivatives and
- * {@link ExtraEnergy#withSlopes}), one-sided differences of the whole local evaluation in convective points (and
- * of an extra source without analytic slopes, everywhere), and of eps through the slaved abundances where
- * burning matters (so the iteration stays quadratic). Not thread-safe (scratch space).
+ * {@link ExtraEnergy#withSlopes}); in convective points the chain rule through the convection model's slopes
+ * ({@link org.convgrid.engine.convection.ConvectiveTransport#withSlopes}) with the changes of nabla_ad, c_P and
+ * delta taken as one-sided differences of the equation of state (one-sided differences of the whole local
+ * evaluation for a convection model without slopes); one-sided differences of an extra source without analytic
+ * slopes, everywhere, and of eps through the slaved abundances where burning matters (so the iteration stays
+ * quadratic). The equation of state starts each point's solve from that point's previous state. Not thread-safe (scratch space).
  */
 public final class StructureEquations implements DifferenceSystem {
 
@@ -70,6 +74,8 @@ public final class StructureEquations implements DifferenceSystem {
     private final EosState[] eos;
     private final OpacityValue[] opacity;
     private final ConvectiveGradient[] convection;
+    /** The convection model's slopes at each convective point, null where it gives none or the point is stable. */
+    private final MixingLengthSolution[] convectionSlopes;
     private final double[] nablaRad;
     private final double[] nablaStability;
     private final double[] epsNuclear;
@@ -122,6 +128,7 @@ public final class StructureEquations implements DifferenceSystem {
         this.eos = new EosState[n];
         this.opacity = new OpacityValue[n];
         this.convection = new ConvectiveGradient[n];
+        this.convectionSlopes = new MixingLengthSolution[n];
         this.nablaRad = new double[n];
         this.nablaStability = new double[n];
         this.epsNuclear = new double[n];
@@ -204,7 +211,8 @@ public final class StructureEquations implements DifferenceSystem {
         double t = Math.exp(lnT);
         Composition c = compositionRule == null ? composition[k] : compositionRule.at(k, rho, t);
         composition[k] = c;
-        EosState s = physics.eos().atDensity(rho, t, c);
+        // the previous iteration's state of this point starts the equation of state's own solve
+        EosState s = eos[k] == null ? physics.eos().atDensity(rho, t, c) : physics.eos().atDensity(rho, t, c, eos[k]);
         OpacityValue op = physics.opacity().rosselandMean(rho, t, c);
         BurningRate burn = physics.nuclear().burn(rho, t, c);
         eos[k] = s;
@@ -237,31 +245,84 @@ public final class StructureEquations implements DifferenceSystem {
             dEps[2 * k + 1] += extraRate.dLnT();
         }
         boolean convective = convection[k] != null && convection[k].convective();
+        // d nabla_rad/d(L/L_scale): nabla_rad = C kappa L P/(m T^4) is linear in L
+        double radPerLuminosity = RADIATIVE_CONSTANT * op.kappa() * luminosityScale * s.pressure()
+                / (mesh.mass(k) * t * t * t * t);
         if (!convective && extraRate != null) {
             // radiative: nabla = C kappa L P / (m T^4), differentiated analytically
             double nr = nabla[k];
             dNabla[4 * k] = 0.0;
             dNabla[4 * k + 1] = nr * (op.dlnKappaDlnRho() + s.chiRho());
             dNabla[4 * k + 2] = nr * (op.dlnKappaDlnT() + s.chiT() - 4.0);
-            dNabla[4 * k + 3] = RADIATIVE_CONSTANT * op.kappa() * luminosityScale * s.pressure()
-                    / (mesh.mass(k) * t * t * t * t);
+            dNabla[4 * k + 3] = radPerLuminosity;
             return;
         }
         double h = DIFFERENCE_STEP;
-        EosState sRho = physics.eos().atDensity(rho * Math.exp(h), t, c);
-        OpacityValue opRho = physics.opacity().rosselandMean(rho * Math.exp(h), t, c);
-        EosState sT = physics.eos().atDensity(rho, t * Math.exp(h), c);
-        OpacityValue opT = physics.opacity().rosselandMean(rho, t * Math.exp(h), c);
-        double base = nabla[k];
-        dNabla[4 * k] = (localNabla(k, r * Math.exp(h), lum, s, op.kappa(), false) - base) / h;
-        dNabla[4 * k + 1] = (localNabla(k, r, lum, sRho, opRho.kappa(), false) - base) / h;
-        dNabla[4 * k + 2] = (localNabla(k, r, lum, sT, opT.kappa(), false) - base) / h;
-        double dl = h * Math.max(Math.abs(y[4 * k + 3]), 1.0e-3);
-        dNabla[4 * k + 3] = (localNabla(k, r, lum + dl * luminosityScale, s, op.kappa(), false) - base) / dl;
+        // the perturbed states start from the unperturbed one (one or two neutrality steps each)
+        double stepFactor = Math.exp(h);
+        EosState sRho = physics.eos().atDensity(rho * stepFactor, t, c, s);
+        EosState sT = physics.eos().atDensity(rho, t * stepFactor, c, s);
         if (extraRate == null) {
             dEps[2 * k] += (extra.at(k, sRho) - ex) / h;
             dEps[2 * k + 1] += (extra.at(k, sT) - ex) / h;
         }
+        MixingLengthSolution slopes = convectionSlopes[k];
+        if (!convective) {
+            dNabla[4 * k] = 0.0;
+            dNabla[4 * k + 1] = nabla[k] * (op.dlnKappaDlnRho() + s.chiRho());
+            dNabla[4 * k + 2] = nabla[k] * (op.dlnKappaDlnT() + s.chiT() - 4.0);
+            dNabla[4 * k + 3] = radPerLuminosity;
+        } else if (slopes != null) {
+            convectiveSlopes(k, s, sRho, sT, op, slopes, radPerLuminosity);
+        } else {
+            // a convection model without slopes: one-sided differences of the whole local evaluation (the
+            // opacity follows its own analytic slopes)
+            double kappaRho = op.kappa() * Math.exp(op.dlnKappaDlnRho() * h);
+            double kappaT = op.kappa() * Math.exp(op.dlnKappaDlnT() * h);
+            double base = nabla[k];
+            dNabla[4 * k] = (localNabla(k, r * stepFactor, lum, s, op.kappa(), false) - base) / h;
+            dNabla[4 * k + 1] = (localNabla(k, r, lum, sRho, kappaRho, false) - base) / h;
+            dNabla[4 * k + 2] = (localNabla(k, r, lum, sT, kappaT, false) - base) / h;
+            double dl = h * Math.max(Math.abs(y[4 * k + 3]), 1.0e-3);
+            dNabla[4 * k + 3] = (localNabla(k, r, lum + dl * luminosityScale, s, op.kappa(), false) - base) / dl;
+        }
+    }
+
+    /**
+     * The convective gradient's derivatives by the chain rule through the convection model's own slopes:
+     * d nabla = N_rad d nabla_rad + N_ad d nabla_ad + N_U d ln U, with nabla_rad = C kappa L P/(m T^4) and
+     * U proportional to T^3 rho^-1/2 P^-3/2 g delta^-1/2/(c_P kappa) at fixed alpha (the U of Kippenhahn, Weigert
+     * &amp; Weiss 2012, ch. 7, with H_P = P/(rho g) and l_m = alpha H_P written out), g = G m/r^2. The changes of
+     * nabla_ad, c_P and delta with the state (second derivatives of the equation of state) are one-sided
+     * differences over the neighbouring states sRho and sT; everything else is analytic.
+     */
+    private void convectiveSlopes(int k, EosState s, EosState sRho, EosState sT, OpacityValue op,
+                                  MixingLengthSolution slopes, double radPerLuminosity) {
+        double h = DIFFERENCE_STEP;
+        double rad = nablaRad[k];
+        double nRad = slopes.dNablaDNablaRad();
+        double nAd = slopes.dNablaDNablaAd();
+        double nU = slopes.dNablaDLnU();
+        // ln g = ln(G m) - 2 ln r; nothing else in nabla depends on r
+        dNabla[4 * k] = -2.0 * nU;
+        dNabla[4 * k + 1] = gradientSlope(rad, nRad, nAd, nU, s, sRho, op.dlnKappaDlnRho(), s.chiRho(), 0.0, 1.0, h);
+        dNabla[4 * k + 2] = gradientSlope(rad, nRad, nAd, nU, s, sT, op.dlnKappaDlnT(), s.chiT(), 1.0, 0.0, h);
+        dNabla[4 * k + 3] = nRad * radPerLuminosity;
+    }
+
+    /**
+     * d nabla/d x for x = ln rho (dLnT = 0, dLnRho = 1) or ln T (dLnT = 1, dLnRho = 0) at fixed r and L, from
+     * the logarithmic slopes of kappa and P in x and the state {@code shifted} a step h further in x.
+     */
+    private static double gradientSlope(double rad, double nRad, double nAd, double nU, EosState s,
+                                        EosState shifted, double dLnKappa, double dLnP, double dLnT,
+                                        double dLnRho, double h) {
+        double dRad = rad * (dLnKappa + dLnP - 4.0 * dLnT);
+        double dAd = (shifted.nablaAd() - s.nablaAd()) / h;
+        double dLnCp = Math.log(shifted.cp() / s.cp()) / h;
+        double dLnDelta = Math.log(shifted.delta() / s.delta()) / h;
+        double dLnU = 3.0 * dLnT - 0.5 * dLnRho - 1.5 * dLnP - 0.5 * dLnDelta - dLnCp - dLnKappa;
+        return nRad * dRad + nAd * dAd + nU * dLnU;
     }
 
     /** The actual gradient at point k for the given local state; records the convection result when asked. */
@@ -273,17 +334,21 @@ public final class StructureEquations implements DifferenceSystem {
         double stability = LedouxGradient.stabilityGradient(physics.criterion(), s.nablaAd(), IDEAL_GAS_PHI,
                 s.delta(), nablaMu[k]);
         ConvectiveGradient g = null;
+        MixingLengthSolution slopes = null;
         double result = rad;
         if (rad > stability) {
             double gravity = Constants.G * m / (r * r);
-            g = physics.convection().gradient(new LocalConvectionState(t, s.density(), p, gravity, kappa, s.cp(),
-                    s.delta(), rad, s.nablaAd(), stability));
+            LocalConvectionState local = new LocalConvectionState(t, s.density(), p, gravity, kappa, s.cp(),
+                    s.delta(), rad, s.nablaAd(), stability);
+            slopes = record ? physics.convection().withSlopes(local) : null;
+            g = slopes != null ? slopes.gradient() : physics.convection().gradient(local);
             result = g.nabla();
         }
         if (record) {
             nablaRad[k] = rad;
             nablaStability[k] = stability;
             convection[k] = g;
+            convectionSlopes[k] = slopes;
         }
         return result;
     }

@@ -16,6 +16,18 @@ public interface EquationOfState {
     EosState atDensity(double density, double temperature, Composition composition);
 
     /**
+     * As {@link #atDensity(double, double, Composition)}, started from a solved state nearby (the same point at
+     * the previous Newton iteration of a structure solve, or the unperturbed point of a finite difference): the
+     * same state to the implementation's solve tolerance, in fewer internal iterations. {@code nearby} is only a
+     * starting guess; it may belong to another composition or lie far away (then it merely saves less).
+     *
+     * @param nearby a state returned earlier by this equation of state
+     */
+    default EosState atDensity(double density, double temperature, Composition composition, EosState nearby) {
+        return atDensity(density, temperature, composition);
+    }
+
+    /**
      * Inverts the equation of state for the density.
      *
      * @param pressure total pressure (gas + radiation), dyn cm^-2

@@ -5,7 +5,7 @@ import org.convgrid.engine.units.Constants;
 /**
  * Scratch space of one {@link StellarPlasmaEos} call: given (rho, T) and a trial degeneracy parameter eta, evaluates
  * the charge-neutrality residual and P, u in closed form, with their analytic partial derivatives in eta, ln rho
- * and ln T at fixed eta. Not thread-safe; each call makes its own. Splitting {@link #prepare} (all exponentials
+ * and ln T at fixed eta. Not thread-safe: each thread of a {@link StellarPlasmaEos} reuses its own (see {@link #use}). Splitting {@link #prepare} (all exponentials
  * that depend on rho and T) from {@link #solveStep} (one exponential per trial eta) keeps the Newton iteration
  * cheap; {@link #evaluate} adds P, u and the partials once eta is known.
  *
@@ -39,16 +39,16 @@ final class PlasmaPoint {
     private final PlasmaElements el;
     private final boolean pressureIonisation;
     private final boolean coulomb;
-    private final double[] abundance;
+    private double[] abundance;
     private final double[] kFirst;
     private final double[] kInner;
     private final double[] xiNeutral;
     private final double[] xiInner;
     private final double[] fd = new double[7];
     private final CoulombTerm coulombTerm = new CoulombTerm();
-    private final double nuclei;
-    private final double yeMax;
-    private final double chargeRatio;
+    private double nuclei;
+    private double yeMax;
+    private double chargeRatio;
 
     double density;
     double lastEta;
@@ -97,17 +97,31 @@ final class PlasmaPoint {
     double heavyParticles;
 
     PlasmaPoint(PlasmaElements el, boolean pressureIonisation, boolean coulomb, PlasmaComposition composition) {
+        this(el, pressureIonisation, coulomb);
+        use(composition);
+    }
+
+    /** A scratch point with no composition yet: {@link #use} one before {@link #prepare}. */
+    PlasmaPoint(PlasmaElements el, boolean pressureIonisation, boolean coulomb) {
         this.el = el;
         this.pressureIonisation = pressureIonisation;
         this.coulomb = coulomb;
-        abundance = composition.abundance;
-        nuclei = composition.nuclei;
-        yeMax = composition.yeMax;
-        chargeRatio = composition.chargeRatio;
         kFirst = new double[el.metalCount];
         kInner = new double[el.metalCount];
         xiNeutral = new double[el.metalCount];
         xiInner = new double[el.metalCount];
+    }
+
+    /**
+     * Points this scratch at another composition's constants; every other field is overwritten by the next
+     * {@link #prepare}, {@link #solveStep} and {@link #evaluate}, so a reused point gives the results of a fresh one.
+     */
+    PlasmaPoint use(PlasmaComposition composition) {
+        abundance = composition.abundance;
+        nuclei = composition.nuclei;
+        yeMax = composition.yeMax;
+        chargeRatio = composition.chargeRatio;
+        return this;
     }
 
     double nuclei() {

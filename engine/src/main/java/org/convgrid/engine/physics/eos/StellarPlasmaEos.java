@@ -42,8 +42,8 @@ import org.convgrid.engine.units.Constants;
  * differentiation of the neutrality condition, d eta = -(dR/dx)/(dR/d eta) dx, with partial derivatives at fixed
  * eta taken analytically from the closed-form P, u and R (see {@link PlasmaPoint}; no re-solve, so no solver noise);
  * the remaining quantities follow from the thermodynamic identities (Cox &amp; Giuli 1968; Kippenhahn,
- * Weigert &amp; Weiss 2012, ch. 4 and 6). Thread-safe: the only mutable state is a
- * per-thread one-entry cache of composition constants that never changes a result.
+ * Weigert &amp; Weiss 2012, ch. 4 and 6). Thread-safe: the only mutable state is per thread, a
+ * one-entry cache of composition constants and a scratch point, neither of which ever changes a result.
  */
 public final class StellarPlasmaEos implements EquationOfState {
 
@@ -71,9 +71,8 @@ public final class StellarPlasmaEos implements EquationOfState {
     private final PlasmaElements elements;
     private final boolean pressureIonisation;
     private final boolean coulombCorrection;
-    /** Per thread, the constants of the last composition that thread used (see {@link #point}). */
-    private final ThreadLocal<PlasmaComposition[]> lastComposition =
-            ThreadLocal.withInitial(() -> new PlasmaComposition[1]);
+    /** Per thread, the constants of the last composition that thread used and a scratch point (see {@link #point}). */
+    private final ThreadLocal<Scratch> scratch = ThreadLocal.withInitial(this::newScratch);
 
     /** Grevesse &amp; Sauval 1998 metals, pressure ionisation and Coulomb correction on. */
     public StellarPlasmaEos() {
@@ -101,6 +100,23 @@ public final class StellarPlasmaEos implements EquationOfState {
         checkDomain(density, temperature);
         PlasmaPoint p = point(composition);
         solve(p, density, temperature, fullyIonisedEta(p, density, temperature));
+        return state(p);
+    }
+
+    /**
+     * Starts the neutrality solve at the degeneracy of {@code nearby}: next to a solved point the Newton iteration
+     * needs one or two steps instead of the five to ten from the fully ionised guess.
+     */
+    @Override
+    public EosState atDensity(double density, double temperature, Composition composition, EosState nearby) {
+        checkDomain(density, temperature);
+        PlasmaPoint p = point(composition);
+        double guess = Math.max(-PlasmaPoint.ETA_LIMIT + 1.0, Math.min(PlasmaPoint.ETA_LIMIT - 1.0, nearby.eta()));
+        if (!Double.isFinite(guess)) {
+            return atDensity(density, temperature, composition);
+        }
+        p.prepare(density, temperature, guess);
+        iterate(p, density, temperature, guess);
         return state(p);
     }
 
@@ -138,18 +154,34 @@ public final class StellarPlasmaEos implements EquationOfState {
     }
 
     /**
-     * A fresh scratch point for this composition; the composition constants are reused while a thread's
+     * This thread's scratch point, set to this composition; the composition constants are reused while a thread's
      * consecutive calls share a composition (a one-entry cache per thread, so threads never contend for it; the
-     * constants are a pure function of the composition, so no result depends on what the cache holds).
+     * constants are a pure function of the composition, and every scratch field is overwritten before it is read,
+     * so no result depends on what the cache holds). One call uses the point at a time: nothing in this class
+     * calls out while it holds it.
      */
     private PlasmaPoint point(Composition composition) {
-        PlasmaComposition[] last = lastComposition.get();
-        PlasmaComposition constants = last[0];
+        Scratch s = scratch.get();
+        PlasmaComposition constants = s.constants;
         if (constants == null || !constants.composition.equals(composition)) {
             constants = new PlasmaComposition(elements, composition);
-            last[0] = constants;
+            s.constants = constants;
         }
-        return new PlasmaPoint(elements, pressureIonisation, coulombCorrection, constants);
+        return s.point.use(constants);
+    }
+
+    private Scratch newScratch() {
+        return new Scratch(new PlasmaPoint(elements, pressureIonisation, coulombCorrection));
+    }
+
+    /** One thread's reusable working space. */
+    private static final class Scratch {
+        private final PlasmaPoint point;
+        private PlasmaComposition constants;
+
+        Scratch(PlasmaPoint point) {
+            this.point = point;
+        }
     }
 
     private static void checkDomain(double density, double temperature) {
@@ -188,6 +220,12 @@ public final class StellarPlasmaEos implements EquationOfState {
                 }
             }
         }
+        iterate(p, density, temperature, eta);
+    }
+
+    /** The safeguarded Newton iteration of {@link #solve} from eta, with the Saha constants already prepared. */
+    private static void iterate(PlasmaPoint p, double density, double temperature, double start) {
+        double eta = start;
         double lo = -PlasmaPoint.ETA_LIMIT;
         double hi = PlasmaPoint.ETA_LIMIT;
         double step = Double.NaN;
