@@ -24,20 +24,23 @@ class ZamsOriginTest {
             output: {dir: runs/zams}
             """;
 
-    /** Non-regression rows, frozen from the version before ages could count from birth. */
+    /**
+     * Non-regression rows, frozen from the version before ages could count from birth; re-frozen when the equation
+     * of state gave hydrogen's bound state its Planck-Larkin weight (1 Msun at zero age: L 0.7337 -> 0.7351 Lsun,
+     * envelope base r/R 0.7239 -> 0.7225; 0.3 Msun L 0.012507 -> 0.012510 Lsun).
+     */
     private static final List<String> ROWS_BEFORE = List.of(
-            "p0-z00-m000-a00,0.3,0.02,0.28,1.8,0.0,0.0,main_sequence,ok,,0.01250659,0.2963781,3545.588,4.971497,"
-                    + "7545156.0,96.075,0.6974946,,fully_convective,,,0.0,0.0,0.3,154.833,48,schwarzschild,1.0,"
-                    + "467.8384",
-            "p0-z00-m000-a01,0.3,0.02,0.28,1.8,0.0,0.06,main_sequence,ok,,0.0119434,0.289948,3543.631,4.990549,"
-                    + "7690250.0,102.2641,0.6992283,,fully_convective,,,0.0,0.0,0.3,159.7766,104,schwarzschild,1.0,"
-                    + "537.6732",
-            "p0-z00-m001-a00,1.0,0.02,0.28,1.8,0.0,0.0,main_sequence,ok,,0.7337187,0.8816044,5689.474,4.54752,"
-                    + "1.351398e+07,81.9607,0.6993804,,conv_envelope,,,0.970238,0.7239238,0.02976199,27.01641,37,"
-                    + "schwarzschild,1.0,39.80681",
-            "p0-z00-m001-a01,1.0,0.02,0.28,1.8,0.0,0.06,main_sequence,ok,,0.7363761,0.8826709,5691.177,4.54647,"
-                    + "1.353329e+07,82.47659,0.694999,,conv_envelope,,,0.970339,0.7239236,0.02966102,26.97134,68,"
-                    + "schwarzschild,1.0,40.16313");
+            "p0-z00-m000-a00,0.3,0.02,0.28,1.8,0.0,0.0,main_sequence,ok,,0.01251018,0.2964114,3545.643,4.971399,"
+                    + "7545562.0,96.05156,0.6974955,,fully_convective,,,0.0,0.0,0.3,154.8685,48,schwarzschild,1.0,467.8088",
+            "p0-z00-m000-a01,0.3,0.02,0.28,1.8,0.0,0.06,main_sequence,ok,,0.0119466,0.2899785,3543.682,4.990457,"
+                    + "7690590.0,102.2403,0.6992282,,fully_convective,,,0.0,0.0,0.3,159.8155,104,schwarzschild,1.0,"
+                    + "537.7381",
+            "p0-z00-m001-a00,1.0,0.02,0.28,1.8,0.0,0.0,main_sequence,ok,,0.73511,0.8821527,5690.4,4.54698,"
+                    + "1.351821e+07,81.96842,0.6993805,,conv_envelope,,,0.9701136,0.7225335,0.02988644,27.05909,37,"
+                    + "schwarzschild,1.0,38.79652",
+            "p0-z00-m001-a01,1.0,0.02,0.28,1.8,0.0,0.06,main_sequence,ok,,0.7377778,0.8832215,5692.108,4.545928,"
+                    + "1.353757e+07,82.48506,0.6949926,,conv_envelope,,,0.9702063,0.7225034,0.02979366,27.02518,68,"
+                    + "schwarzschild,1.0,38.94804");
 
     @TempDir
     Path dir;

@@ -18,10 +18,16 @@ import org.convgrid.engine.units.Constants;
  * electrons: gravitational settling, thermal diffusion and, for the concentration gradients, ordinary diffusion.
  * The resistance coefficients of Coulomb collisions between two Maxwellian species are
  * K_st = (4/3) sqrt(2 pi mu_st) n_s n_t (Z_s Z_t e^2)^2 ln Lambda_st/(kT)^(3/2), from K_st = (16/3) n_s n_t mu_st
- * Omega_st^(1,1) (Burgers 1969) with the Chapman-Cowling collision integral of the screened Coulomb cross
- * section Q^(1) = 4 pi b_0^2 ln Lambda, b_0 = Z_s Z_t e^2/(mu g^2) (derived here); ln Lambda_st =
- * ln(1.123 kT lambda/(Z_s Z_t e^2)) (the speed average of ln(lambda/b_0)), at least 1, with lambda the larger of
- * the Debye length (electrons and ions) and the mean ion spacing (common practice).
+ * Omega_st^(1,1) (Burgers 1969) with the Chapman-Cowling collision integral of the momentum-transfer cross section
+ * of the Debye-screened Coulomb potential (Z_s Z_t e^2/r) e^(-r/lambda), whose large-Lambda form is
+ * Q^(1) = 4 pi b_0^2 (ln(lambda/b_0) + ln 2 - gamma_Euler - 1/2), b_0 = Z_s Z_t e^2/(mu g^2) (Liboff 1959, Phys.
+ * Fluids 2, 40, from memory; checked here by integrating the classical deflection in that potential: the constant
+ * is -0.395 at lambda/b_0 = 1000, -0.447 at 100, -0.506 at 30, against ln 2 - gamma - 1/2 = -0.384; Paquette et
+ * al. 1986, ApJS 61, 177, tabulate the exact integrals). Its speed average gives ln Lambda_st =
+ * ln(0.765 kT lambda/(Z_s Z_t e^2)) (derived here), at least 1, with lambda the larger of the Debye length
+ * (electrons and ions) and the mean ion spacing (common practice). A bare Coulomb cross section cut off at b =
+ * lambda (ln(lambda/b_0) alone) overstates ln Lambda by 0.38, i.e. the resistance of helium on hydrogen at the
+ * solar envelope base (ln Lambda ~ 2.4) by ~16 %.
  *
  * <p>The velocity is split into a settling part (all concentrations uniform: every number density follows the
  * mass density, so the pressure, temperature and gravity terms, thermal diffusion included) and a diffusion part
@@ -51,10 +57,10 @@ final class GravitationalSettling {
     private static final double E2 = Constants.E_CHARGE * Constants.E_CHARGE;
     /**
      * ln Lambda averaged over the collision integral's speed weight gamma e^(-gamma^2): with b_0 = Z_s Z_t e^2/(2 kT
-     * gamma^2), the mean of ln(lambda/b_0) is ln(2 kT lambda/(Z_s Z_t e^2)) - gamma_Euler = ln(1.123 kT lambda/...)
-     * (derived here).
+     * gamma^2), the mean of ln(lambda/b_0) + ln 2 - gamma_Euler - 1/2 (the screened potential's cross section, class
+     * comment) is ln(2 kT lambda/(Z_s Z_t e^2)) + ln 2 - 2 gamma_Euler - 1/2 = ln(0.765 kT lambda/...) (derived here).
      */
-    private static final double SPEED_AVERAGED_IMPACT = 2.0 * Math.exp(-0.5772156649015329);
+    private static final double SPEED_AVERAGED_IMPACT = 4.0 * Math.exp(-2.0 * 0.5772156649015329 - 0.5);
 
     private GravitationalSettling() {
     }

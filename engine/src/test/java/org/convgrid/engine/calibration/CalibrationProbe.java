@@ -6,7 +6,7 @@ import org.junit.jupiter.api.condition.EnabledIfSystemProperty;
 
 /**
  * Not a test: prints every trial of a solar calibration. Run with -Dconvgrid.probe=true (-Dprobe.zx=0.0245 for
- * another present envelope Z/X).
+ * another present envelope Z/X, -Dprobe.settling=false for a calibration without settling).
  */
 @EnabledIfSystemProperty(named = "convgrid.probe", matches = "true")
 class CalibrationProbe {
@@ -15,7 +15,9 @@ class CalibrationProbe {
     void calibrate() {
         long t0 = System.nanoTime();
         double zx = Double.parseDouble(System.getProperty("probe.zx", "0.0231"));
-        CalibratedSun sun = new SolarCalibration(CalibrationSettings.DEFAULT.withMetalsToHydrogen(zx)).calibrate(t -> System.out.printf(
+        boolean settling = Boolean.parseBoolean(System.getProperty("probe.settling", "true"));
+        CalibratedSun sun = new SolarCalibration(CalibrationSettings.DEFAULT.withMetalsToHydrogen(zx)
+                .withSettling(settling)).calibrate(t -> System.out.printf(
                 "%7.2f s alpha=%.5f Y=%.5f Z=%.5f lnR=%+.3e lnL=%+.3e Lzams=%.4f steps=%d%n",
                 (System.nanoTime() - t0) / 1e9, t.mixingLength(), t.helium(), t.metals(), t.radiusResidual(),
                 t.luminosityResidual(), t.zeroAgeLuminosity() / Constants.L_SUN, t.evolution().steps().size()));

@@ -19,6 +19,13 @@ import org.convgrid.engine.units.Constants;
  * fraction is f1 = r f0 and the molecular one fm = 2 p f0^2. Differentiating the quadratic, with D = s + 4 p f0:
  * d ln f0 = -(r d ln r + 2 p f0 d ln p)/D, so d ln f1 = ((1 + 4 p f0) d ln r - 2 p f0 d ln p)/D and
  * d ln fm = (s d ln p - 2 r d ln r)/D; d ln p = d ln rho - (d ln K_H2/d ln T) d ln T (no eta dependence).
+ *
+ * <p>Hydrogen's bound state enters with the Planck-Larkin renormalised weight 2 (e^x - 1 - x), x = chi/kT, instead of
+ * 2 e^x (Planck 1924; Larkin 1960; the form the OPAL equation of state uses, Rogers 1986, ApJ 310, 723, from
+ * memory): the same at kT &lt;&lt; chi, but ~x^2 when kT &gt;&gt; chi, where a bare ground-state weight would keep
+ * ~n_e lambda_e^3 of the hydrogen neutral however hot the gas (1.3 % at the base of the solar convective envelope,
+ * T = 2.2e6 K, rho = 0.19). Then K_H = e^(xi_H)/(2 (e^x - 1 - x)), ionising an atom takes E_H = kT d ln K_H/d ln T,
+ * and an atom carries chi - E_H above the energy zero, so P, u and the Saha balance stay one free energy.
  */
 final class PlasmaPoint {
 
@@ -59,6 +66,12 @@ final class PlasmaPoint {
     int iterations;
     private double kT;
     private double kH;
+    /**
+     * Energy taken by ionising one hydrogen atom, erg: kT d ln K_H/d ln T, chi at low T, 2kT + chi/3 when kT &gt;&gt;
+     * chi; and its derivative in ln T.
+     */
+    private double hydrogenEnergy;
+    private double hydrogenEnergyT;
     private double kHe0;
     private double kHe1;
     private double xiH;
@@ -143,7 +156,15 @@ final class PlasmaPoint {
         xiHe0 = el.heliumVolume0 * nucleusDensity;
         xiHe1 = el.heliumVolume1 * nucleusDensity;
         // Ground-state weights: U(HI) = 2, U(HII) = 1, U(HeI) = 1, U(HeII) = 2, U(HeIII) = 1 (from memory).
-        kH = expK(Math.log(0.5) - el.hydrogenChi / kT + xiH);
+        // Hydrogen's bound state is weighted by its Planck-Larkin renormalised Boltzmann factor (class comment).
+        double hx = el.hydrogenChi / kT;
+        double hDecay = Math.exp(-hx);
+        // hx >= 0.158 below MAX_TEMPERATURE, so 1 - e^-hx loses no digits
+        double hOpen = 1.0 - hDecay;
+        double hBound = hOpen - hx * hDecay;
+        kH = expK(Math.log(0.5) - hx - Math.log(hBound) + xiH);
+        hydrogenEnergy = el.hydrogenChi * hOpen / hBound;
+        hydrogenEnergyT = -el.hydrogenChi * hx * hDecay * (hBound - hx * hOpen) / (hBound * hBound);
         // H2: each molecule excludes twice the atom's volume, so the occupation factors cancel in K_H2. Skipped in
         // hot gas (the switch-off leaves no molecules there), which keeps the interior cost unchanged.
         pairing = 0.0;
@@ -311,17 +332,20 @@ final class PlasmaPoint {
             w = a * f1 * f0;
         }
         double chi = el.hydrogenChi;
-        double lrT = chi * betaChi + lxT;
+        // atoms carry chi - E_H relative to the energy zero (atoms at rest in the ground state): 0 when kT << chi
+        double excitation = chi - hydrogenEnergy;
+        double lrT = hydrogenEnergy * betaChi + lxT;
         double lrRho = xiH + lxRho;
         double f1Rho = w * lrRho + wp;
         double f1T = w * lrT + wp * pairingT;
+        double fmT = wm * lrT + wmp * pairingT;
         ye += a * f1;
         yeEta += w * lxEta;
         yeRho += f1Rho;
         yeT += f1T;
-        ion += a * f1 * chi;
-        ionEta += w * chi * lxEta;
-        ionT += f1T * chi;
+        ion += a * f1 * chi + a * f0 * excitation;
+        ionEta += (w * chi - (w + wm) * excitation) * lxEta;
+        ionT += f1T * chi - (f1T + fmT) * excitation + a * f0 * -hydrogenEnergyT;
         ex += a * (f0 + fm) * xiH;
         exEta -= w * xiH * lxEta;
         exRho += a * (f0 + fm) * xiH - f1Rho * xiH;

@@ -13,7 +13,8 @@ import org.convgrid.engine.units.Constants;
  *
  * <p><b>Ionisation.</b> Saha with the degeneracy-aware electron factor, n_{r+1}/n_r = (U_{r+1}/U_r)
  * exp(-eta - chi_r/kT) (the coupling used by Eggleton, Faulkner &amp; Flannery 1973, A&amp;A 23, 325), with
- * ground-state partition functions; metals as described in {@link PlasmaElements}. eta is found from charge
+ * ground-state partition functions (hydrogen's with its Planck-Larkin renormalisation, see {@link PlasmaPoint}, so
+ * that hydrogen is fully ionised in hot gas); metals as described in {@link PlasmaElements}. eta is found from charge
  * neutrality by safeguarded Newton iteration on ln n_e(FD) - ln n_e(ions), which is monotonic in eta.
  *
  * <p><b>Molecular hydrogen.</b> Below {@link MolecularHydrogen#MAX_TEMPERATURE} neutral hydrogen atoms pair into
