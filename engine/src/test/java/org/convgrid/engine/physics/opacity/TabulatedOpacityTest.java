@@ -127,6 +127,41 @@ class TabulatedOpacityTest extends OpacityContractTest {
     }
 
     @Test
+    void theShippedTablesReadFromBytesEqualTheTablesReadThroughADecodingReader() throws IOException {
+        byte[] bytes;
+        try (var in = OpalGn93Opacity.class.getResourceAsStream(OpalGn93Opacity.RESOURCE)) {
+            bytes = in.readAllBytes();
+        }
+        TabulatedOpacity fromBytes = OpacityTableReader.read(new java.io.ByteArrayInputStream(bytes), "bytes");
+        TabulatedOpacity fromReader = OpacityTableReader.read(new java.io.InputStreamReader(
+                new java.io.ByteArrayInputStream(bytes), java.nio.charset.StandardCharsets.UTF_8), "reader");
+        assertThat(fromBytes.tableCount()).isEqualTo(fromReader.tableCount()).isEqualTo(126);
+        assertThat(fromBytes.logTemperatures()).isEqualTo(fromReader.logTemperatures());
+        assertThat(fromBytes.logR()).isEqualTo(fromReader.logR());
+        for (int k = 0; k < fromBytes.tableCount(); k++) {
+            assertThat(fromBytes.hydrogen(k)).isEqualTo(fromReader.hydrogen(k));
+            assertThat(fromBytes.metals(k)).isEqualTo(fromReader.metals(k));
+            for (int i = 0; i < fromBytes.logTemperatures().length; i++) {
+                for (int j = 0; j < fromBytes.logR().length; j++) {
+                    assertThat(Double.doubleToRawLongBits(fromBytes.logKappa(k, i, j)))
+                            .isEqualTo(Double.doubleToRawLongBits(fromReader.logKappa(k, i, j)));
+                }
+            }
+        }
+    }
+
+    @Test
+    void aCommentOutsideLatin1DoesNotDisturbTheNumbers() throws IOException {
+        String text = "convgrid-opacity-table 2 # \u2014 \u03ba tables\nname t\nlog10_temperature 2 4 5\n"
+                + "log10_r 2 -1 0\nhydrogen 1 0.7\nmetals 1 0.02\ntable 0.7 0.02 1.5 -0.25 - 2\nend\n";
+        TabulatedOpacity t = OpacityTableReader.read(
+                new java.io.ByteArrayInputStream(text.getBytes(java.nio.charset.StandardCharsets.UTF_8)), "utf8");
+        assertThat(t.logKappa(0, 0, 1)).isEqualTo(-0.25);
+        assertThat(t.logKappa(0, 1, 0)).isNaN();
+        assertThat(t.logKappa(0, 1, 1)).isEqualTo(2.0);
+    }
+
+    @Test
     void offTableRequestNamesThePoint() {
         Composition c = Composition.scaledSolar(0.7, 0.02);
         double t = 1e9;
