@@ -341,8 +341,7 @@ public final class MainSequenceEvolver {
                     remesh ? SemiconvectiveMixing.onMesh(previous.profile(), s, mesh) : s, dt);
             nablaMu = MuGradient.of(comp, start.lnPressure());
         }
-        double[] lnT = start.state().lnTemperatures();
-        GravothermalEnergy grav = new GravothermalEnergy(lnT, start.lnPressure(), dt);
+        GravothermalEnergy grav = GravothermalEnergy.since(start, physics.eos(), dt);
         ModelState guess = start.state().withCompositions(comp);
         if (sameMesh) {
             try {
