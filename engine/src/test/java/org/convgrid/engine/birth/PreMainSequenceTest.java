@@ -135,7 +135,8 @@ class PreMainSequenceTest {
         // (0.5 and 1 Msun re-frozen when the surface-lithium step limit changed their step sequences: 200.7 -> 191.2
         // and 48.85 -> 44.25 Myr; these ages are not converged in time: all limits halved gives 41.2 Myr at 1 Msun;
         // re-frozen with the conservative eps_grav: 191.2 -> 190.1, 44.25 -> 46.18, 31.81 -> 32.58, 17.15 -> 17.02,
-        // 4.51 -> 4.549)
+        // 4.51 -> 4.549; still not converged in time: with every limit halved, ZamsArrivalProbe measures 0.5 Msun
+        // 190.1 -> 158.8, 1 Msun 45.55 -> 44.06, 1.5 Msun 32.58 -> 36.19, 2 Msun 17.02 -> 13.51, 3 Msun 4.549 -> 4.000)
         double[] frozen = {190.1, 46.18, 32.58, 17.02, 4.549};
         double[] measured = new double[cases.length];
         for (int i = 0; i < cases.length; i++) {
