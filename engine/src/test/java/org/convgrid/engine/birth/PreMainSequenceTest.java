@@ -71,7 +71,7 @@ class PreMainSequenceTest {
         // Weigert & Weiss 2012, ch. 4): integral L dt = integral L_nuc dt - D(U + Omega), within 1 % of the energy
         // radiated. 1 Msun: deuterium burning, the Hayashi track, the radiative core and the approach to the ZAMS;
         // 0.5 Msun: a fully convective contraction still far from the ZAMS at 100 Myr; 2 Msun: the contraction with
-        // a radiative core to 10 Myr, before its ZAMS. Measured (conservative eps_grav): 0.34 %, 0.63 %, 0.84 %; with
+        // a radiative core to 10 Myr, before its ZAMS. Measured (conservative eps_grav): 0.28 %, 0.43 %, 0.73 %; with
         // -c_P T (dlnT - nabla_ad dlnP)/dt at the end-of-step state the 0.5 Msun track closed to 1.43 %.
         assertEnergyCloses(solar(), 2, 100.0, 0.01);
         assertEnergyCloses(BirthTracks.track(0.5, 0.02, 300, 1.0, 100), 0, 100.0, 0.01);
@@ -133,11 +133,12 @@ class PreMainSequenceTest {
         double previousCore = Double.MAX_VALUE;
         // non-regression (default limits), Myr
         // (0.5 and 1 Msun re-frozen when the surface-lithium step limit changed their step sequences: 200.7 -> 191.2
-        // and 48.85 -> 44.25 Myr; these ages are not converged in time: all limits halved gives 41.2 Myr at 1 Msun;
-        // re-frozen with the conservative eps_grav: 191.2 -> 190.1, 44.25 -> 46.18, 31.81 -> 32.58, 17.15 -> 17.02,
-        // 4.51 -> 4.549; still not converged in time: with every limit halved, ZamsArrivalProbe measures 0.5 Msun
-        // 190.1 -> 158.8, 1 Msun 45.55 -> 44.06, 1.5 Msun 32.58 -> 36.19, 2 Msun 17.02 -> 13.51, 3 Msun 4.549 -> 4.000)
-        double[] frozen = {190.1, 46.18, 32.58, 17.02, 4.549};
+        // and 48.85 -> 44.25 Myr; re-frozen with the conservative eps_grav: 191.2 -> 190.1, 44.25 -> 46.18,
+        // 31.81 -> 32.58, 17.15 -> 17.02, 4.51 -> 4.549; re-frozen when the steps became paced by the central 12C
+        // and 3He and the contraction's share of L, which made these ages converge in time (every limit halved moves
+        // them by 1.3-3.4 %, ZamsArrivalProbe, against 3-21 % before): 190.1 -> 134.8, 46.18 -> 36.69,
+        // 32.58 -> 25.84, 17.02 -> 11.11, 4.549 -> 3.426)
+        double[] frozen = {134.8, 36.69, 25.84, 11.11, 3.426};
         double[] measured = new double[cases.length];
         for (int i = 0; i < cases.length; i++) {
             double[] c = cases[i];
