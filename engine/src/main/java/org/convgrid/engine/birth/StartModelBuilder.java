@@ -90,11 +90,14 @@ public final class StartModelBuilder {
             return converged(guess, rate, target, 0);
         } catch (ConvgridException direct) {
             double ratio = mass / ANCHOR_MASS;
-            if (Math.abs(Math.log(ratio)) <= Math.log(MASS_WALK_FACTOR)) {
+            if (mass == ANCHOR_MASS) {
                 throw direct;
             }
-            // the polytrope is too poor a guess for this mass: walk from the anchor mass by homology
-            double nearer = mass / Math.pow(MASS_WALK_FACTOR, Math.signum(Math.log(ratio)));
+            // the polytrope is too poor a guess for this mass: walk from the anchor mass by homology (a mass within
+            // one walk step of the anchor starts from the anchor itself: at Z = 0.04, 1.26 and 1.41 Msun failed
+            // directly while 1 Msun converged)
+            double nearer = Math.abs(Math.log(ratio)) <= Math.log(MASS_WALK_FACTOR) ? ANCHOR_MASS
+                    : mass / Math.pow(MASS_WALK_FACTOR, Math.signum(Math.log(ratio)));
             StartModel from = build(nearer, birth);
             return converged(homologous(from.model().state(), mass, target), homologousRate(from, mass, target),
                     target, from.iterations());

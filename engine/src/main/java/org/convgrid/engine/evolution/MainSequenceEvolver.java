@@ -48,8 +48,9 @@ import org.convgrid.engine.units.Constants;
  * <p>From a pre-main-sequence start model (nuclear luminosity below {@link NuclearLuminosity#ZERO_AGE_FRACTION}
  * of L) the same step runs, the gravothermal term carrying the contraction. Until the star first reaches that
  * fraction the steps are limited in ln L by {@link PreMainSequenceLimits} instead, and also in |D ln R|,
- * |D ln T_c|, the central deuterium and the surface 7Li burnt; the first step is a fraction of the start model's
- * Kelvin-Helmholtz time. A track that starts on the zero-age main sequence never sees these limits.
+ * |D ln T_c|, the central deuterium and the surface 7Li burnt, and the next step is paced by |D ln X| of the
+ * central 12C and 3He and by |D ln(1 - L_nuc/L)|, the contraction's share of L; the first step is a fraction of
+ * the start model's Kelvin-Helmholtz time. A track that starts on the zero-age main sequence never sees these limits.
  */
 public final class MainSequenceEvolver {
 
@@ -275,7 +276,8 @@ public final class MainSequenceEvolver {
                 landed.add(current);
             }
             double growth = young ? youngLimits.maxGrowth() : settings.maxGrowth();
-            double grown = h * Math.min(growth, 0.9 / Math.max(ratio, 1.0e-3));
+            double paced = young ? Math.max(ratio, pacingRatio(before, current)) : ratio;
+            double grown = h * Math.min(growth, 0.9 / Math.max(paced, 1.0e-3));
             dt = landing ? Math.max(dt, grown) : grown;
         }
         List<AgedModel> answers = answers(ages, landedAges, landed, end, age, detail);
@@ -341,8 +343,7 @@ public final class MainSequenceEvolver {
                     remesh ? SemiconvectiveMixing.onMesh(previous.profile(), s, mesh) : s, dt);
             nablaMu = MuGradient.of(comp, start.lnPressure());
         }
-        double[] lnT = start.state().lnTemperatures();
-        GravothermalEnergy grav = new GravothermalEnergy(lnT, start.lnPressure(), dt);
+        GravothermalEnergy grav = GravothermalEnergy.since(start, physics.eos(), dt);
         ModelState guess = start.state().withCompositions(comp);
         if (sameMesh) {
             try {
@@ -444,6 +445,28 @@ public final class MainSequenceEvolver {
             ratio = Math.max(ratio, burnt / youngLimits.maxLithiumBurnt());
         }
         return ratio;
+    }
+
+    /**
+     * The largest |D ln X| of the central 12C and 3He over the step and |D ln(1 - L_nuc/L)|, each over its limit
+     * ({@link PreMainSequenceLimits#maxCentralBurningChange()}, {@link
+     * PreMainSequenceLimits#maxContractionShareChange()}); it paces the next step only.
+     */
+    private double pacingRatio(StellarModel before, StellarModel after) {
+        Composition a = before.state().composition(0);
+        Composition b = after.state().composition(0);
+        double change = 0.0;
+        if (a.c12() > 0.0 && b.c12() > 0.0) {
+            change = Math.abs(Math.log(b.c12() / a.c12()));
+        }
+        if (a.he3() > 0.0 && b.he3() > 0.0) {
+            change = Math.max(change, Math.abs(Math.log(b.he3() / a.he3())));
+        }
+        double floor = 1.0 - NuclearLuminosity.ZERO_AGE_FRACTION;
+        double shareBefore = Math.max(1.0 - NuclearLuminosity.fraction(before), floor);
+        double shareAfter = Math.max(1.0 - NuclearLuminosity.fraction(after), floor);
+        return Math.max(change / youngLimits.maxCentralBurningChange(),
+                Math.abs(Math.log(shareAfter / shareBefore)) / youngLimits.maxContractionShareChange());
     }
 
     /** 7Li mass fraction at the surface (the convective envelope's, {@link SurfaceComposition}). */

@@ -4,8 +4,8 @@ import org.convgrid.engine.physics.eos.EosState;
 
 /**
  * An energy source per unit mass besides nuclear burning, added to dL/dm: for evolution the gravothermal term
- * eps_grav = -c_P T (dlnT/dt - nabla_ad dlnP/dt) (Kippenhahn, Weigert &amp; Weiss 2012, ch. 4), computed from the
- * previous time step's state of the shell and the trial state. Implementations must be smooth in the state and
+ * eps_grav = -du/dt - P dv/dt (Kippenhahn, Weigert &amp; Weiss 2012, ch. 4), computed from the previous time
+ * step's state of the shell and the trial state. Implementations must be smooth in the state and
  * thread-safe. The solver uses {@link #withSlopes} when it gives derivatives; otherwise it differentiates
  * {@link #at} numerically (which costs two more equation-of-state calls per point and iteration).
  */

@@ -33,8 +33,18 @@ class BirthRobustnessProbe {
         double maxGyr = Double.parseDouble(System.getProperty("probe.maxgyr", "15"));
         int threads = Integer.parseInt(System.getProperty("probe.threads", "1"));
         int steps = (int) Math.round(2.0 / dex);
+        // -Dprobe.z=0.04 and -Dprobe.masses=1.26,2.0 re-run a part of the plane (e.g. the tracks that failed)
+        double[] zs = System.getProperty("probe.z") == null ? METALLICITIES
+                : java.util.Arrays.stream(System.getProperty("probe.z").split(",")).mapToDouble(Double::parseDouble)
+                        .toArray();
         List<double[]> cases = new ArrayList<>();
-        for (double z : METALLICITIES) {
+        for (double z : zs) {
+            if (System.getProperty("probe.masses") != null) {
+                for (String m : System.getProperty("probe.masses").split(",")) {
+                    cases.add(new double[] {Double.parseDouble(m), z});
+                }
+                continue;
+            }
             for (int i = 0; i <= steps; i++) {
                 cases.add(new double[] {Math.pow(10.0, -1.0 + i * dex), z});
             }

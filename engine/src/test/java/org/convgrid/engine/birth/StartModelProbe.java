@@ -15,10 +15,14 @@ class StartModelProbe {
 
     @Test
     void startModels() {
-        Composition birth = BirthAbundances.of(0.70, 0.02);
+        // -Dprobe.z: the birth composition of the robustness sweep at that Z (BirthTracks.birth); -Dprobe.masses
+        String z = System.getProperty("probe.z");
+        Composition birth = z == null ? BirthAbundances.of(0.70, 0.02) : BirthTracks.birth(Double.parseDouble(z));
         PhysicsSet physics = StandardPhysics.create(PhysicsOptions.DEFAULT, birth);
         StartModelBuilder builder = new StartModelBuilder(physics);
-        for (double m : new double[] {0.08, 0.1, 0.3, 1.0, 2.0, 3.0, 5.0, 7.0, 10.0}) {
+        double[] masses = java.util.Arrays.stream(System.getProperty("probe.masses",
+                "0.08,0.1,0.3,1.0,2.0,3.0,5.0,7.0,10.0").split(",")).mapToDouble(Double::parseDouble).toArray();
+        for (double m : masses) {
             long t0 = System.nanoTime();
             try {
                 StartModel s = builder.build(m * Constants.M_SUN, birth);
