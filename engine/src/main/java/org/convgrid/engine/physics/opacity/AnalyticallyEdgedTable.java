@@ -1,0 +1,136 @@
+package org.convgrid.engine.physics.opacity;
+
+import java.util.Objects;
+import org.convgrid.engine.state.Composition;
+
+/**
+ * One set of radiative log kappa tables with the analytic radiative terms joined beyond its edges: inside the tables
+ * the table itself; outside, the analytic terms plus the table-minus-analytic offset (dex) taken at the nearest
+ * point where the table answers, faded out with the distance d from it as 1 - 3u^2 + 2u^3, u = d/width (width
+ * {@code coolWidth} below the coolest row, {@code edgeWidth} beyond the other edges), so that the result is
+ * continuous in value and the analytic terms alone answer beyond the fades. A composition outside the tables
+ * (Z beyond their Z range, or X/(1-Z) beyond a row's range) is moved to the nearest tabulated one for the table
+ * part. Inside a blank corner the edge is taken per table row in log T, so the join is continuous in log R but can
+ * step across log T rows there. Immutable and thread-safe.
+ */
+final class AnalyticallyEdgedTable {
+
+    private final TabulatedOpacity table;
+    private final Opacity analyticRadiative;
+    private final double coolWidth;
+    private final double edgeWidth;
+    private final double minLogT;
+    private final double maxLogT;
+    private final double minLogR;
+    private final double maxLogR;
+
+    /**
+     * @param table radiative log kappa tables
+     * @param analyticRadiative answers where the table does not (radiative only)
+     * @param coolWidth fade width (dex in log T) below the coolest row
+     * @param edgeWidth fade width (dex) beyond the other edges
+     */
+    AnalyticallyEdgedTable(TabulatedOpacity table, Opacity analyticRadiative, double coolWidth, double edgeWidth) {
+        this.table = Objects.requireNonNull(table);
+        this.analyticRadiative = Objects.requireNonNull(analyticRadiative);
+        this.coolWidth = coolWidth;
+        this.edgeWidth = edgeWidth;
+        double[] t = table.logTemperatures();
+        double[] r = table.logR();
+        minLogT = t[0];
+        maxLogT = t[t.length - 1];
+        minLogR = r[0];
+        maxLogR = r[r.length - 1];
+    }
+
+    TabulatedOpacity table() {
+        return table;
+    }
+
+    /**
+     * log10 kappa_rad, d/dlog10 T at fixed R and d/dlog10 R at fixed T into out[0..2], at (log T, log R) =
+     * (lt, lr) of (density, temperature).
+     */
+    void logKappa(double density, double temperature, Composition composition, double lt, double lr,
+                  double[] out) {
+        double x = composition.x();
+        double z = composition.z();
+        int status = table.interpolate(lt, lr, x, z, out);
+        if (status == TabulatedOpacity.OUTSIDE_COMPOSITIONS) {
+            z = table.clampMetals(z);
+            x = tableHydrogen(composition, z);
+            status = table.interpolate(lt, lr, x, z, out);
+        }
+        if (status == TabulatedOpacity.ANSWERED) {
+            return;
+        }
+        OpacityValue a = analyticRadiative.rosselandMean(density, temperature, composition);
+        out[0] = Math.log10(a.kappa());
+        out[2] = a.dlnKappaDlnRho();
+        out[1] = a.dlnKappaDlnT() + 3.0 * out[2];
+        if (!beyondEveryFade(lt, lr)) {
+            addFadedOffset(composition, lt, lr, x, z, out);
+        }
+    }
+
+    /** Whether the tables themselves answer at (log10 T, log10 R) for this composition (no analytic join). */
+    boolean answers(double logT, double logR, Composition composition) {
+        double z = table.clampMetals(composition.z());
+        return table.interpolate(logT, logR, tableHydrogen(composition, z), z, new double[3])
+                == TabulatedOpacity.ANSWERED;
+    }
+
+    /** X for the table part at table metals z: the request's hydrogen share X/(1-Z), moved into the tables. */
+    private double tableHydrogen(Composition composition, double z) {
+        double x = composition.x();
+        if (z != composition.z()) {
+            x *= (1.0 - z) / (1.0 - composition.z());
+        }
+        return table.clampHydrogen(x, z);
+    }
+
+    /** Adds to out (the analytic terms) the faded offset to the nearest answering table point. */
+    private void addFadedOffset(Composition composition, double lt, double lr, double x, double z, double[] out) {
+        double tc = Math.min(Math.max(lt, minLogT), maxLogT);
+        double rc = Math.min(Math.max(lr, minLogR), maxLogR);
+        double limit = table.answeredLogRLimit(tc, x, z);
+        if (Double.isNaN(limit)) {
+            return;
+        }
+        rc = Math.min(rc, limit);
+        double[] edge = new double[3];
+        if (table.interpolate(tc, rc, x, z, edge) != TabulatedOpacity.ANSWERED) {
+            return;
+        }
+        OpacityValue ae = analyticRadiative.rosselandMean(Math.pow(10.0, rc + 3.0 * tc - 18.0),
+                Math.pow(10.0, tc), composition);
+        double offset = edge[0] - Math.log10(ae.kappa());
+        double offsetT = tc == lt ? edge[1] - (ae.dlnKappaDlnT() + 3.0 * ae.dlnKappaDlnRho()) : 0.0;
+        double offsetR = rc == lr ? edge[2] - ae.dlnKappaDlnRho() : 0.0;
+        double widthT = lt < tc ? -coolWidth : edgeWidth;
+        double widthR = lr < rc ? -edgeWidth : edgeWidth;
+        double[] fadeT = fade((lt - tc) / widthT);
+        double[] fadeR = fade((lr - rc) / widthR);
+        double weight = fadeT[0] * fadeR[0];
+        out[0] += weight * offset;
+        out[1] += fadeT[1] / widthT * fadeR[0] * offset + weight * offsetT;
+        out[2] += fadeT[0] * fadeR[1] / widthR * offset + weight * offsetR;
+    }
+
+    /** Whether (log T, log R) lies beyond every fade, where the analytic terms alone answer. */
+    boolean beyondEveryFade(double lt, double lr) {
+        return lt < minLogT - coolWidth || lt > maxLogT + edgeWidth || lr < minLogR - edgeWidth
+                || lr > maxLogR + edgeWidth;
+    }
+
+    /** 1 - 3u^2 + 2u^3 on [0, 1], 1 below, 0 above; returns {value, d/du}. */
+    static double[] fade(double u) {
+        if (u <= 0.0) {
+            return new double[] {1.0, 0.0};
+        }
+        if (u >= 1.0) {
+            return new double[] {0.0, 0.0};
+        }
+        return new double[] {1.0 - u * u * (3.0 - 2.0 * u), -6.0 * u * (1.0 - u)};
+    }
+}
