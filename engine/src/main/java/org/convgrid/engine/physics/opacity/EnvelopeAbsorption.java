@@ -126,6 +126,7 @@ public final class EnvelopeAbsorption implements Opacity {
 
     /** y = s/(1+s) from ln s, without overflow. */
     private static double ionisedFraction(double lnS) {
-        return lnS > 0.0 ? 1.0 / (1.0 + Math.exp(-lnS)) : Math.exp(lnS) / (1.0 + Math.exp(lnS));
+        double e = Math.exp(lnS > 0.0 ? -lnS : lnS);
+        return lnS > 0.0 ? 1.0 / (1.0 + e) : e / (1.0 + e);
     }
 }

@@ -69,16 +69,20 @@ public final class KramersBoundFree implements Opacity {
 
     /** The guillotine factor t (dimensionless, &gt;= 1) at density rho (g cm^-3) and temperature T (K). */
     public double guillotine(double density, double temperature) {
-        return Math.exp(lnGuillotine(lnU(density, temperature)));
+        double lnU = lnU(density, temperature);
+        return Math.exp(lnGuillotine(lnU, expOfMinusAbs(lnU)));
     }
 
     @Override
     public OpacityValue rosselandMean(double density, double temperature, Composition composition) {
         double lnU = lnU(density, temperature);
+        // one exponential serves w and the guillotine (the same value three calls gave; this is a hot path)
+        double e = expOfMinusAbs(lnU);
         // w = u/(1+u) without overflow
-        double w = lnU > 0.0 ? 1.0 / (1.0 + Math.exp(-lnU)) : Math.exp(lnU) / (1.0 + Math.exp(lnU));
+        double w = lnU > 0.0 ? 1.0 / (1.0 + e) : e / (1.0 + e);
         double kappa = COEFFICIENT * composition.z() * (1.0 + composition.x()) * density
-                / (temperature * temperature * temperature * Math.sqrt(temperature)) * Math.exp(-lnGuillotine(lnU));
+                / (temperature * temperature * temperature * Math.sqrt(temperature))
+                * Math.exp(-lnGuillotine(lnU, e));
         // ln u = p s [ln(T/T0) + c ln(R/R0)], R ~ rho T^-3: dln u/dln rho = p s c, dln u/dln T = p s (1 - 3c)
         return new OpacityValue(kappa, 1.0 - slope * densityExponent * w,
                 -3.5 - slope * (1.0 - 3.0 * densityExponent) * w);
@@ -91,9 +95,24 @@ public final class KramersBoundFree implements Opacity {
                 + densityExponent * Math.log(r / REFERENCE_R));
     }
 
-    /** ln t = ln(1 + u)/s, evaluated without overflow for large ln u. */
-    private double lnGuillotine(double lnU) {
-        double ln1pU = lnU > 0.0 ? lnU + Math.log1p(Math.exp(-lnU)) : Math.log1p(Math.exp(lnU));
+    /** exp(-|ln u|): 1/u for ln u &gt; 0, u otherwise, so that it never overflows. */
+    private static double expOfMinusAbs(double lnU) {
+        return Math.exp(lnU > 0.0 ? -lnU : lnU);
+    }
+
+    /**
+     * ln(1 + e) for 0 &lt;= e &lt;= 1: e itself below 2^-54, where {@link StrictMath#log1p} (fdlibm, which
+     * {@link Math#log1p} delegates to) returns its argument unchanged, so the result is the same to the last bit;
+     * the call is skipped because it is a native call, and far from the knee (cool envelopes, hot interiors) the
+     * argument is that small.
+     */
+    private static double log1pOfTiny(double e) {
+        return e < 0x1.0p-54 ? e : Math.log1p(e);
+    }
+
+    /** ln t = ln(1 + u)/s, evaluated without overflow for large ln u; e = {@link #expOfMinusAbs}(ln u). */
+    private double lnGuillotine(double lnU, double e) {
+        double ln1pU = lnU > 0.0 ? lnU + log1pOfTiny(e) : log1pOfTiny(e);
         return ln1pU / sharpness;
     }
 }

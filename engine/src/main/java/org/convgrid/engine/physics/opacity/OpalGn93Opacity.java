@@ -143,11 +143,28 @@ public final class OpalGn93Opacity implements Opacity {
         double lt = Math.log10(temperature);
         double lr = Math.log10(density) - 3.0 * (lt - 6.0);
         double[] out = new double[3];
-        double width = BLEND_TO_LOG_T - BLEND_FROM_LOG_T;
-        double[] w = AnalyticallyEdgedTable.fade((lt - BLEND_FROM_LOG_T) / width);
         if (cool == null) {
             hot.logKappa(density, temperature, composition, lt, lr, out);
-        } else if (w[0] == 1.0) {
+        } else {
+            blend(density, temperature, composition, lt, lr, out);
+        }
+        // out: log10 kappa_rad, d/dlog T at fixed R, d/dlog R at fixed T; log R = log rho - 3 log T + 18
+        double rad = Math.exp(LN10 * out[0]);
+        double radRho = out[2];
+        double radT = out[1] - 3.0 * out[2];
+        OpacityValue cond = conduction.rosselandMean(density, temperature, composition);
+        double c = cond.kappa();
+        double wc = rad / (rad + c);
+        return new OpacityValue(rad * c / (rad + c), wc * cond.dlnKappaDlnRho() + (1.0 - wc) * radRho,
+                wc * cond.dlnKappaDlnT() + (1.0 - wc) * radT);
+    }
+
+    /** The radiative part where a cool set is present: either set alone, or both blended over the overlap. */
+    private void blend(double density, double temperature, Composition composition, double lt, double lr,
+                       double[] out) {
+        double width = BLEND_TO_LOG_T - BLEND_FROM_LOG_T;
+        double[] w = AnalyticallyEdgedTable.fade((lt - BLEND_FROM_LOG_T) / width);
+        if (w[0] == 1.0) {
             cool.logKappa(density, temperature, composition, lt, lr, out);
         } else if (w[0] == 0.0) {
             hot.logKappa(density, temperature, composition, lt, lr, out);
@@ -160,15 +177,6 @@ public final class OpalGn93Opacity implements Opacity {
             out[2] = h[2] + w[0] * (out[2] - h[2]);
             out[0] = h[0] + w[0] * diff;
         }
-        // out: log10 kappa_rad, d/dlog T at fixed R, d/dlog R at fixed T; log R = log rho - 3 log T + 18
-        double rad = Math.exp(LN10 * out[0]);
-        double radRho = out[2];
-        double radT = out[1] - 3.0 * out[2];
-        OpacityValue cond = conduction.rosselandMean(density, temperature, composition);
-        double c = cond.kappa();
-        double wc = rad / (rad + c);
-        return new OpacityValue(rad * c / (rad + c), wc * cond.dlnKappaDlnRho() + (1.0 - wc) * radRho,
-                wc * cond.dlnKappaDlnT() + (1.0 - wc) * radT);
     }
 
     /**
