@@ -8,8 +8,6 @@ import org.convgrid.engine.evolution.NuclearLuminosity;
 import org.convgrid.engine.evolution.PreMainSequenceLimits;
 import org.convgrid.engine.evolution.StepObserver;
 import org.convgrid.engine.physics.PhysicsSet;
-import org.convgrid.engine.structure.StellarModel;
-import org.convgrid.engine.structure.StellarProfile;
 import org.convgrid.engine.units.Constants;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.condition.EnabledIfSystemProperty;
@@ -37,7 +35,7 @@ class EnergyClosureProbe {
         StartModel start = new StartModelBuilder(physics).build(mass * Constants.M_SUN, BirthTracks.birth(0.02));
         List<double[]> rows = new ArrayList<>();
         StepObserver observer = (age, h, model) -> rows.add(new double[] {age, h, model.global().luminosity(),
-            NuclearLuminosity.of(model), totalEnergy(model, physics)});
+            NuclearLuminosity.of(model), StarEnergy.total(model, physics)});
         long t0 = System.nanoTime();
         evolver.evolve(start.model(), new double[] {myr * BirthTracks.MYR}, observer);
         double radiated = 0.0;
@@ -71,19 +69,5 @@ class EnergyClosureProbe {
                 + "= %.3f %%, (first - last E)/radiated %.3f%n", mass, myr, coarse, steps,
                 (System.nanoTime() - t0) * 1e-9, 100 * defect / radiated,
                 (rows.get(0)[4] - rows.get(rows.size() - 1)[4]) / radiated);
-    }
-
-    static double totalEnergy(StellarModel model, PhysicsSet physics) {
-        StellarProfile p = model.profile();
-        var mesh = model.state().mesh();
-        double sum = 0.0;
-        for (int k = 0; k < p.size(); k++) {
-            double w = (k == 0 ? mesh.mass(0) : 0.0) + (k > 0 ? 0.5 * mesh.intervalMass(k - 1) : 0.0)
-                    + (k < p.size() - 1 ? 0.5 * mesh.intervalMass(k) : 0.0);
-            double u = physics.eos().atDensity(p.density(k), p.temperature(k), model.state().composition(k))
-                    .internalEnergy();
-            sum += w * (u - Constants.G * p.mass(k) / p.radius(k));
-        }
-        return sum;
     }
 }

@@ -10,7 +10,6 @@ import org.convgrid.engine.evolution.AgedModel;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.structure.StellarModel;
-import org.convgrid.engine.structure.StellarProfile;
 import org.convgrid.engine.units.Constants;
 import org.junit.jupiter.api.Test;
 
@@ -101,24 +100,10 @@ class PreMainSequenceTest {
         StellarModel first = t.start().model();
         StellarModel end = t.models().get(model).model();
         assertThat(points.get(last).age()).isEqualTo(endMyr * MYR);
-        double released = totalEnergy(first, physics) - totalEnergy(end, physics);
+        double released = StarEnergy.total(first, physics) - StarEnergy.total(end, physics);
         assertThat(Math.abs(radiated - nuclear - released) / radiated).isLessThan(tolerance);
         // most of it is contraction: neither star has burnt much hydrogen by 100 Myr
         assertThat(released / radiated).isGreaterThan(0.3);
-    }
-
-    private static double totalEnergy(StellarModel model, PhysicsSet physics) {
-        StellarProfile p = model.profile();
-        var mesh = model.state().mesh();
-        double sum = 0.0;
-        for (int k = 0; k < p.size(); k++) {
-            double w = (k == 0 ? mesh.mass(0) : 0.0) + (k > 0 ? 0.5 * mesh.intervalMass(k - 1) : 0.0)
-                    + (k < p.size() - 1 ? 0.5 * mesh.intervalMass(k) : 0.0);
-            double u = physics.eos().atDensity(p.density(k), p.temperature(k), model.state().composition(k))
-                    .internalEnergy();
-            sum += w * (u - Constants.G * p.mass(k) / p.radius(k));
-        }
-        return sum;
     }
 
     @Test
