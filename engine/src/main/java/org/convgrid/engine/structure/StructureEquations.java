@@ -41,7 +41,8 @@ import org.convgrid.engine.units.Constants;
  * delta taken as one-sided differences of the equation of state (one-sided differences of the whole local
  * evaluation for a convection model without slopes); one-sided differences of an extra source without analytic
  * slopes, everywhere, and of eps through the slaved abundances where burning matters (so the iteration stays
- * quadratic). The equation of state starts each point's solve from that point's previous state. Not thread-safe (scratch space).
+ * quadratic). The equation of state starts each point's solve from that point's previous state. Not thread-safe
+ * (scratch space).
  */
 public final class StructureEquations implements DifferenceSystem {
 

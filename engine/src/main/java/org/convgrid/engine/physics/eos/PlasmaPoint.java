@@ -5,9 +5,9 @@ import org.convgrid.engine.units.Constants;
 /**
  * Scratch space of one {@link StellarPlasmaEos} call: given (rho, T) and a trial degeneracy parameter eta, evaluates
  * the charge-neutrality residual and P, u in closed form, with their analytic partial derivatives in eta, ln rho
- * and ln T at fixed eta. Not thread-safe: each thread of a {@link StellarPlasmaEos} reuses its own (see {@link #use}). Splitting {@link #prepare} (all exponentials
- * that depend on rho and T) from {@link #solveStep} (one exponential per trial eta) keeps the Newton iteration
- * cheap; {@link #evaluate} adds P, u and the partials once eta is known.
+ * and ln T at fixed eta. Not thread-safe: each thread of a {@link StellarPlasmaEos} reuses its own (see {@link #use}).
+ * Splitting {@link #prepare} (all exponentials that depend on rho and T) from {@link #solveStep} (one exponential per
+ * trial eta) keeps the Newton iteration cheap; {@link #evaluate} adds P, u and the partials once eta is known.
  *
  * <p>Every ionisation stage is a ratio r = K x with x = e^(eta_ref - eta - mu_C/kT), so d ln r = d ln K + d ln x,
  * with d ln K/d ln T = chi/kT (from e^(-chi/kT)) and d ln K/d ln rho = the excluded-volume term xi of the stage
