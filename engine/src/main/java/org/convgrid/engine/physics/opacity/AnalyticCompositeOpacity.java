@@ -27,7 +27,7 @@ import org.convgrid.engine.state.Composition;
  * envelope term (0.54 rms, 1.04 worst without it), but 0.3-0.6 dex too high at log R &gt;= -0.5 there, where the
  * Kramers terms overshoot; ~0.15 dex rms in the photospheric H^- regime 5600-8000 K where the H^- law was fitted.
  */
-public final class AnalyticCompositeOpacity implements Opacity {
+public final class AnalyticCompositeOpacity implements LogArgumentsOpacity {
 
     private final Opacity scattering;
     private final Opacity freeFree;
@@ -97,11 +97,22 @@ public final class AnalyticCompositeOpacity implements Opacity {
 
     @Override
     public OpacityValue rosselandMean(double density, double temperature, Composition composition) {
-        OpacityValue es = scattering.rosselandMean(density, temperature, composition);
+        return rosselandMean(density, temperature, Math.log(density), Math.log(temperature), composition);
+    }
+
+    /** The composite with ln rho and ln T taken once for all its terms. */
+    @Override
+    public OpacityValue rosselandMean(double density, double temperature, double lnDensity, double lnTemperature,
+                                      Composition composition) {
+        OpacityValue es = LogArgumentsOpacity.evaluate(scattering, density, temperature, lnDensity, lnTemperature,
+                composition);
         OpacityValue ff = freeFree.rosselandMean(density, temperature, composition);
-        OpacityValue bf = boundFree.rosselandMean(density, temperature, composition);
-        OpacityValue env = envelope.rosselandMean(density, temperature, composition);
-        OpacityValue hm = hydrogenMinus.rosselandMean(density, temperature, composition);
+        OpacityValue bf = LogArgumentsOpacity.evaluate(boundFree, density, temperature, lnDensity, lnTemperature,
+                composition);
+        OpacityValue env = LogArgumentsOpacity.evaluate(envelope, density, temperature, lnDensity, lnTemperature,
+                composition);
+        OpacityValue hm = LogArgumentsOpacity.evaluate(hydrogenMinus, density, temperature, lnDensity,
+                lnTemperature, composition);
         OpacityValue mol = molecular.rosselandMean(density, temperature, composition);
 
         // absorption (ff + bf) times the Pauli-blocking factor 1/(1 + D), D = d rho/T^2

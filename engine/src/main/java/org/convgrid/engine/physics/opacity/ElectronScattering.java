@@ -12,7 +12,7 @@ import org.convgrid.engine.units.Constants;
  * degeneracy (Pauli blocking), the second the Klein-Nishina/Compton reduction at high temperature.
  * Units: rho in g cm^-3, T in K, kappa in cm^2 g^-1.
  */
-public final class ElectronScattering implements Opacity {
+public final class ElectronScattering implements LogArgumentsOpacity {
 
     /** sigma_T/(2 m_u), cm^2 g^-1: Thomson opacity per (1+X). */
     public static final double THOMSON_PER_ONE_PLUS_X = Constants.SIGMA_THOMSON / (2.0 * Constants.M_U);
@@ -23,10 +23,19 @@ public final class ElectronScattering implements Opacity {
     /** Compton factor exponent (Buchler &amp; Yueh 1976 fit). */
     static final double COMPTON_EXPONENT = 0.86;
 
+    private static final double LN_COMPTON_TEMPERATURE = Math.log(COMPTON_TEMPERATURE);
+
     @Override
     public OpacityValue rosselandMean(double density, double temperature, Composition composition) {
+        return rosselandMean(density, temperature, Math.log(density), Math.log(temperature), composition);
+    }
+
+    @Override
+    public OpacityValue rosselandMean(double density, double temperature, double lnDensity, double lnTemperature,
+                                      Composition composition) {
         double a = DEGENERACY_COEFFICIENT * density / (temperature * temperature);
-        double b = Math.pow(temperature / COMPTON_TEMPERATURE, COMPTON_EXPONENT);
+        // (T/T_C)^0.86 as one exponential of the caller's ln T (a pow costs about two of them)
+        double b = Math.exp(COMPTON_EXPONENT * (lnTemperature - LN_COMPTON_TEMPERATURE));
         double kappa = THOMSON_PER_ONE_PLUS_X * (1.0 + composition.x()) / ((1.0 + a) * (1.0 + b));
         double dRho = -a / (1.0 + a);
         double dT = 2.0 * a / (1.0 + a) - COMPTON_EXPONENT * b / (1.0 + b);

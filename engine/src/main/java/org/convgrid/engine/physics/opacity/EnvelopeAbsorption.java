@@ -28,7 +28,7 @@ import org.convgrid.engine.units.Constants;
  * photosphere fixed. Result: 0.15 dex rms, 0.43 dex worst (log T 4.65, log R -1) against 0.54 rms and 1.04 worst
  * before. Above log R ~ -1 the Kramers terms already overshoot OPAL, which no added term can repair.
  */
-public final class EnvelopeAbsorption implements Opacity {
+public final class EnvelopeAbsorption implements LogArgumentsOpacity {
 
     /** Fitted log10 of the hydrogenic coefficient a_H, cgs. */
     public static final double FITTED_LOG_HYDROGEN_COEFFICIENT = 23.37;
@@ -52,6 +52,9 @@ public final class EnvelopeAbsorption implements Opacity {
     static final double REFERENCE_Z = 0.02;
     static final double REFERENCE_R = 1.0e-3;
     private static final double LN10 = Math.log(10.0);
+    private static final double LN_REFERENCE_TEMPERATURE = Math.log(REFERENCE_TEMPERATURE);
+    /** ln(R/R_ref) = ln rho - 3 ln T + this: ln R = ln rho - 3 ln T + 18 ln 10 (T6 = T/1e6 K). */
+    private static final double LN_R_OFFSET = 18.0 * LN10 - Math.log(REFERENCE_R);
 
     private final double hydrogenCoefficient;
     private final double hydrogenSlope;
@@ -96,20 +99,24 @@ public final class EnvelopeAbsorption implements Opacity {
 
     @Override
     public OpacityValue rosselandMean(double density, double temperature, Composition composition) {
+        return rosselandMean(density, temperature, Math.log(density), Math.log(temperature), composition);
+    }
+
+    @Override
+    public OpacityValue rosselandMean(double density, double temperature, double lnDensity, double lnTemperature,
+                                      Composition composition) {
         double x = composition.x();
         double kramers = (1.0 + x) * density / (temperature * temperature * temperature * Math.sqrt(temperature));
         // hydrogenic term: dln y/dln rho = -(1-y), dln y/dln T = (1-y)(3/2 + chi/kT)
         double y = ionisedFraction(lnSaha(density, temperature, x));
         double hK = hydrogenCoefficient * x * kramers * Math.exp(hydrogenSlope
-                * Math.log(REFERENCE_TEMPERATURE / temperature)) * y;
+                * (LN_REFERENCE_TEMPERATURE - lnTemperature)) * y;
         double hRho = y; // 1 - (1 - y)
         double hT = -3.5 - hydrogenSlope + (1.0 - y) * (1.5 + HYDROGEN_IONISATION_TEMPERATURE / temperature);
         // Z bump: Gaussian in log T times R^-q, R = rho/T6^3
-        double u = (Math.log10(temperature) - logBumpTemperature) / bumpWidth;
-        double t6 = temperature * 1.0e-6;
-        double r = density / (t6 * t6 * t6);
+        double u = (lnTemperature / LN10 - logBumpTemperature) / bumpWidth;
         double zK = bumpCoefficient * (composition.z() / REFERENCE_Z) * kramers * Math.exp(-0.5 * u * u
-                - bumpDensityExponent * Math.log(r / REFERENCE_R));
+                - bumpDensityExponent * (lnDensity - 3.0 * lnTemperature + LN_R_OFFSET));
         double zRho = 1.0 - bumpDensityExponent;
         double zT = -3.5 - u / (bumpWidth * LN10) + 3.0 * bumpDensityExponent;
         double kappa = hK + zK;

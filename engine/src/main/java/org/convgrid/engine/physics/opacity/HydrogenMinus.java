@@ -31,7 +31,7 @@ import org.convgrid.engine.state.Composition;
  * ~5 % too small. Below 5600 K (the coolest OPAL row) both are extrapolations.</li>
  * </ul>
  */
-public final class HydrogenMinus implements Opacity {
+public final class HydrogenMinus implements LogArgumentsOpacity {
 
     /** Reference metallicity of the power law. */
     static final double REFERENCE_Z = 0.02;
@@ -104,11 +104,19 @@ public final class HydrogenMinus implements Opacity {
         return new HydrogenMinus(2.5e-31 * Math.pow(REFERENCE_TEMPERATURE, 9.0), 0.5, 9.0);
     }
 
+    private static final double LN_REFERENCE_TEMPERATURE = Math.log(REFERENCE_TEMPERATURE);
+
     @Override
     public OpacityValue rosselandMean(double density, double temperature, Composition composition) {
+        return rosselandMean(density, temperature, Math.log(density), Math.log(temperature), composition);
+    }
+
+    @Override
+    public OpacityValue rosselandMean(double density, double temperature, double lnDensity, double lnTemperature,
+                                      Composition composition) {
         double z = Math.max(composition.z(), METALLICITY_FLOOR);
-        double lnRho = Math.log(density);
-        double lnTheta = Math.log(temperature / REFERENCE_TEMPERATURE);
+        double lnRho = lnDensity;
+        double lnTheta = lnTemperature - LN_REFERENCE_TEMPERATURE;
         double scale = z / REFERENCE_Z;
         double cool = coefficient * scale * Math.exp(densityExponent * lnRho + temperatureExponent * lnTheta);
         double hot = hotCoefficient == 0.0 ? 0.0

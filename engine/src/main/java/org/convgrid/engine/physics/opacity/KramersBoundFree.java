@@ -24,7 +24,7 @@ import org.convgrid.engine.state.Composition;
  * The guillotine absorbs g_bf and, in effect, the metal bound-bound absorption that OPAL includes.
  * With c = 0 the form reduces to a temperature-only guillotine (c = 0, p = 0 gives the classic constant t).
  */
-public final class KramersBoundFree implements Opacity {
+public final class KramersBoundFree implements LogArgumentsOpacity {
 
     /** Carroll &amp; Ostlie 1996 coefficient, cgs. */
     static final double COEFFICIENT = 4.34e25;
@@ -38,11 +38,14 @@ public final class KramersBoundFree implements Opacity {
     public static final double FITTED_SHARPNESS = 11.2;
     /** Reference R = rho/T6^3 of the knee temperature, g cm^-3. */
     static final double REFERENCE_R = Math.pow(10.0, -1.5);
+    /** ln(R/R_0) = ln rho - 3 ln T + this: ln R = ln rho - 3 ln T + 18 ln 10 (T6 = T/1e6 K). */
+    private static final double LN_R_OFFSET = 18.0 * Math.log(10.0) - Math.log(REFERENCE_R);
 
     private final double kneeTemperature;
     private final double slope;
     private final double densityExponent;
     private final double sharpness;
+    private final double lnKneeTemperature;
 
     /**
      * @param kneeTemperature K, where the guillotine starts to grow (at R = R_0)
@@ -55,6 +58,7 @@ public final class KramersBoundFree implements Opacity {
         this.slope = ConvgridException.requireInRange("slope", slope, 0.0, 10.0, "");
         this.densityExponent = ConvgridException.requireInRange("densityExponent", densityExponent, -2.0, 2.0, "");
         this.sharpness = ConvgridException.requireInRange("sharpness", sharpness, 1.0, 50.0, "");
+        this.lnKneeTemperature = Math.log(kneeTemperature);
     }
 
     /** A temperature-only guillotine (the knee does not move with density). */
@@ -69,13 +73,19 @@ public final class KramersBoundFree implements Opacity {
 
     /** The guillotine factor t (dimensionless, &gt;= 1) at density rho (g cm^-3) and temperature T (K). */
     public double guillotine(double density, double temperature) {
-        double lnU = lnU(density, temperature);
+        double lnU = lnU(Math.log(density), Math.log(temperature));
         return Math.exp(lnGuillotine(lnU, expOfMinusAbs(lnU)));
     }
 
     @Override
     public OpacityValue rosselandMean(double density, double temperature, Composition composition) {
-        double lnU = lnU(density, temperature);
+        return rosselandMean(density, temperature, Math.log(density), Math.log(temperature), composition);
+    }
+
+    @Override
+    public OpacityValue rosselandMean(double density, double temperature, double lnDensity, double lnTemperature,
+                                      Composition composition) {
+        double lnU = lnU(lnDensity, lnTemperature);
         // one exponential serves w and the guillotine (the same value three calls gave; this is a hot path)
         double e = expOfMinusAbs(lnU);
         // w = u/(1+u) without overflow
@@ -88,11 +98,10 @@ public final class KramersBoundFree implements Opacity {
                 -3.5 - slope * (1.0 - 3.0 * densityExponent) * w);
     }
 
-    private double lnU(double density, double temperature) {
-        double t6 = temperature * 1.0e-6;
-        double r = density / (t6 * t6 * t6);
-        return slope * sharpness * (Math.log(temperature / kneeTemperature)
-                + densityExponent * Math.log(r / REFERENCE_R));
+    /** ln u from ln rho and ln T (no logarithm of its own: the caller's serve). */
+    private double lnU(double lnDensity, double lnTemperature) {
+        return slope * sharpness * (lnTemperature - lnKneeTemperature
+                + densityExponent * (lnDensity - 3.0 * lnTemperature + LN_R_OFFSET));
     }
 
     /** exp(-|ln u|): 1/u for ln u &gt; 0, u otherwise, so that it never overflows. */

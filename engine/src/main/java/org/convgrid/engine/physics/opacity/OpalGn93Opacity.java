@@ -64,6 +64,7 @@ public final class OpalGn93Opacity implements Opacity {
 
     private final AnalyticallyEdgedTable hot;
     private final AnalyticallyEdgedTable cool;
+    private final Opacity analyticRadiative;
     private final Opacity conduction;
 
     /**
@@ -79,6 +80,7 @@ public final class OpalGn93Opacity implements Opacity {
         this.hot = new AnalyticallyEdgedTable(table, analyticRadiative, COOL_JOIN_WIDTH, EDGE_JOIN_WIDTH);
         this.cool = coolTable == null ? null
                 : new AnalyticallyEdgedTable(coolTable, analyticRadiative, COOL_JOIN_WIDTH, EDGE_JOIN_WIDTH);
+        this.analyticRadiative = analyticRadiative;
         this.conduction = Objects.requireNonNull(conduction);
     }
 
@@ -141,17 +143,32 @@ public final class OpalGn93Opacity implements Opacity {
     @Override
     public OpacityValue rosselandMean(double density, double temperature, Composition composition) {
         double lt = Math.log10(temperature);
-        double lr = Math.log10(density) - 3.0 * (lt - 6.0);
-        double[] out = new double[3];
-        if (cool == null) {
-            hot.logKappa(density, temperature, composition, lt, lr, out);
+        double logRho = Math.log10(density);
+        double lr = logRho - 3.0 * (lt - 6.0);
+        AnalyticallyEdgedTable alone = cool == null ? hot : lt <= BLEND_FROM_LOG_T ? cool : null;
+        double rad;
+        double radRho;
+        double radT;
+        if (alone != null && alone.beyondEveryFade(lt, lr)) {
+            // the analytic terms alone answer here (no table lookup, no log10 -> exp round trip), with ln rho and
+            // ln T from the log10 already taken: the cool photospheres of K and M dwarfs land here
+            OpacityValue a = LogArgumentsOpacity.evaluate(analyticRadiative, density, temperature, LN10 * logRho,
+                    LN10 * lt, composition);
+            rad = a.kappa();
+            radRho = a.dlnKappaDlnRho();
+            radT = a.dlnKappaDlnT();
         } else {
-            blend(density, temperature, composition, lt, lr, out);
+            double[] out = new double[3];
+            if (cool == null) {
+                hot.logKappa(density, temperature, composition, lt, lr, out);
+            } else {
+                blend(density, temperature, composition, lt, lr, out);
+            }
+            // out: log10 kappa_rad, d/dlog T at fixed R, d/dlog R at fixed T; log R = log rho - 3 log T + 18
+            rad = Math.exp(LN10 * out[0]);
+            radRho = out[2];
+            radT = out[1] - 3.0 * out[2];
         }
-        // out: log10 kappa_rad, d/dlog T at fixed R, d/dlog R at fixed T; log R = log rho - 3 log T + 18
-        double rad = Math.exp(LN10 * out[0]);
-        double radRho = out[2];
-        double radT = out[1] - 3.0 * out[2];
         OpacityValue cond = conduction.rosselandMean(density, temperature, composition);
         double c = cond.kappa();
         double wc = rad / (rad + c);

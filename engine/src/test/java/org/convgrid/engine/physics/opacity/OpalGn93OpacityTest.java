@@ -79,6 +79,37 @@ class OpalGn93OpacityTest extends OpacityContractTest {
     }
 
     @Test
+    void belowTheCoolFadeValueAndSlopesAreTheAnalyticTermsWithConduction() {
+        // our join (no published source): beyond every fade the tables play no part, so kappa and both logarithmic
+        // derivatives are those of the analytic radiative terms with conduction in parallel, up to the rounding of
+        // ln rho and ln T taken from log10 (Kippenhahn, Weigert & Weiss 2012, opacity chapter, for the harmonic sum)
+        for (OpalGn93Opacity opacity : new OpalGn93Opacity[] {OPACITY, OpalGn93Opacity.withCoolTables()}) {
+            // the analytic terms alone answer below log T 3.70 (OPAL alone) or 3.25 (with the cool set)
+            double top = opacity.coolTable() == null ? 3.69 : 3.24;
+            for (double x : new double[] {0.0, 0.70}) {
+                Composition c = Composition.scaledSolar(x, 0.0188);
+                for (double logT = 3.0; logT < top; logT += 0.07) {
+                    for (double logR = -7.9; logR < 1.0; logR += 0.7) {
+                        double t = Math.pow(10.0, logT);
+                        double rho = Math.pow(10.0, logR + 3.0 * (logT - 6.0));
+                        OpacityValue a = ANALYTIC.rosselandMean(rho, t, c);
+                        OpacityValue k = CONDUCTION.rosselandMean(rho, t, c);
+                        double wc = a.kappa() / (a.kappa() + k.kappa());
+                        OpacityValue v = opacity.rosselandMean(rho, t, c);
+                        String where = "X " + x + " log T " + logT + " log R " + logR;
+                        assertThat(v.kappa() / (a.kappa() * k.kappa() / (a.kappa() + k.kappa())) - 1.0).as(where)
+                                .isCloseTo(0.0, within(1e-12));
+                        assertThat(v.dlnKappaDlnRho()).as(where).isCloseTo(wc * k.dlnKappaDlnRho()
+                                + (1.0 - wc) * a.dlnKappaDlnRho(), within(1e-11));
+                        assertThat(v.dlnKappaDlnT()).as(where).isCloseTo(wc * k.dlnKappaDlnT()
+                                + (1.0 - wc) * a.dlnKappaDlnT(), within(1e-11));
+                    }
+                }
+            }
+        }
+    }
+
+    @Test
     void theDenseEdgeJoinIsContinuous() {
         // above log R = 1 and beside the blank hot, dense corner of the published tables (Iglesias & Rogers 1996)
         Composition c = Composition.scaledSolar(0.70, 0.02);
