@@ -19,7 +19,8 @@ import org.junit.jupiter.api.Test;
  * the one convective zone, and the first step's mixing homogenises the zone: X_c jumps to the zone's mean. That
  * is mixing, not burning. From then on X_c only falls, and the star's hydrogen mass never grows (burning only
  * consumes it; mixing only moves it). From birth the abundances start uniform and the rise is absent
- * ({@code LowMassBirthTest}).
+ * ({@code LowMassBirthTest}). The checks are conservation laws of mixing and burning (common practice, no single
+ * published source).
  */
 class ZeroAgeFullyConvectiveHydrogenTest {
 
