@@ -6,7 +6,7 @@ import static org.assertj.core.api.Assertions.within;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.physics.eos.EosState;
 import org.convgrid.engine.state.Composition;
-import org.convgrid.engine.structure.BandMatrix;
+import org.convgrid.engine.structure.DifferenceJacobian;
 import org.convgrid.engine.structure.ExtraEnergy;
 import org.convgrid.engine.structure.HenyeySolver;
 import org.convgrid.engine.structure.ModelState;
@@ -85,11 +85,7 @@ class GravothermalEnergyTest {
         StructureEquations eq = new StructureEquations(state.mesh(), state.compositions(), physics,
                 state.surfaceLuminosity(), null, grav);
         double[] y = eq.unknowns(state);
-        int size = y.length;
-        BandMatrix jac = new BandMatrix(size, eq.lowerBandwidth(), eq.upperBandwidth());
-        eq.evaluate(y, new double[size], jac);
-        double[] up = new double[size];
-        double[] down = new double[size];
+        DifferenceJacobian check = DifferenceJacobian.at(eq, y);
         int checkedEnergy = 0;
         for (int k = 0; k < n; k += 23) {
             EosState s = physics.eos().atDensity(Math.exp(y[eq.column(k, 1)]), Math.exp(y[eq.column(k, 2)]),
@@ -99,26 +95,19 @@ class GravothermalEnergyTest {
             for (int j = 0; j < 4; j++) {
                 int col = eq.column(k, j);
                 double h = j == 3 ? H * Math.max(Math.abs(y[col]), 1.0e-3) : H;
-                double[] shifted = y.clone();
-                shifted[col] = y[col] + h;
-                eq.evaluate(shifted, up, null);
-                shifted[col] = y[col] - h;
-                eq.evaluate(shifted, down, null);
-                int lo = Math.max(0, col - eq.upperBandwidth());
-                int hi = Math.min(size - 1, col + eq.lowerBandwidth());
-                for (int row = lo; row <= hi; row++) {
-                    double fd = (up[row] - down[row]) / (2.0 * h);
-                    double analytic = jac.get(row, col);
+                double[] fd = check.column(col, h);
+                for (int row = check.firstRow(col); row <= check.lastRow(col); row++) {
+                    double analytic = check.analytic().get(row, col);
                     // every entry, against the largest of its row (one-sided differences in convective points)
                     assertThat(analytic).as("row %d, point %d, unknown %d", row, k, j)
-                            .isCloseTo(fd, within(1.0e-5 * rowScale(jac, eq, row, size)));
+                            .isCloseTo(fd[row], within(1.0e-5 * check.rowScale(row)));
                     // energy rows in ln rho and ln T, where eps_grav enters: against the eps_grav term itself
                     // (dm/(2 L_scale) c_P T/dt), which is ~1e-3 and less of the row's largest entry
                     if (isEnergyRowOfInterval(row, n) && (j == 1 || j == 2) && touches(row, k)) {
                         int interval = (row - eq.centralConditions()) / 4;
                         double e = 0.5 * state.mesh().intervalMass(interval) / state.surfaceLuminosity();
                         assertThat(analytic).as("energy row %d, point %d, unknown %d", row, k, j)
-                                .isCloseTo(fd, within(tolerance * e * gravScale));
+                                .isCloseTo(fd[row], within(tolerance * e * gravScale));
                         checkedEnergy++;
                     }
                 }
@@ -135,15 +124,5 @@ class GravothermalEnergyTest {
     private static boolean touches(int row, int k) {
         int interval = (row - 2) / 4;
         return interval == k || interval == k - 1;
-    }
-
-    private static double rowScale(BandMatrix jac, StructureEquations eq, int row, int size) {
-        double largest = 0.0;
-        int first = Math.max(0, row - eq.lowerBandwidth());
-        int last = Math.min(size - 1, row + eq.upperBandwidth());
-        for (int c = first; c <= last; c++) {
-            largest = Math.max(largest, Math.abs(jac.get(row, c)));
-        }
-        return largest;
     }
 }

@@ -4,7 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
 import org.convgrid.engine.physics.PhysicsSet;
-import org.convgrid.engine.structure.BandMatrix;
+import org.convgrid.engine.structure.DifferenceJacobian;
 import org.convgrid.engine.structure.ExtraEnergy;
 import org.convgrid.engine.structure.ModelState;
 import org.convgrid.engine.structure.StellarModel;
@@ -43,11 +43,7 @@ class ConvectiveJacobianTest {
         StructureEquations eq = new StructureEquations(state.mesh(), state.compositions(), physics,
                 state.surfaceLuminosity(), null, ExtraEnergy.NONE);
         double[] y = eq.unknowns(state);
-        int size = y.length;
-        BandMatrix jac = new BandMatrix(size, eq.lowerBandwidth(), eq.upperBandwidth());
-        eq.evaluate(y, new double[size], jac);
-        double[] up = new double[size];
-        double[] down = new double[size];
+        DifferenceJacobian check = DifferenceJacobian.at(eq, y);
         int checked = 0;
         for (int k = 1; k < n - 1; k += 3) {
             // well inside a zone (both neighbours convective), so the differences do not cross its edge
@@ -59,30 +55,14 @@ class ConvectiveJacobianTest {
             for (int j = 0; j < 4; j++) {
                 int col = eq.column(k, j);
                 double h = j == 3 ? H * Math.max(Math.abs(y[col]), 1.0e-3) : H;
-                double[] shifted = y.clone();
-                shifted[col] = y[col] + h;
-                eq.evaluate(shifted, up, null);
-                shifted[col] = y[col] - h;
-                eq.evaluate(shifted, down, null);
-                int lo = Math.max(0, col - eq.upperBandwidth());
-                int hi = Math.min(size - 1, col + eq.lowerBandwidth());
-                for (int row = lo; row <= hi; row++) {
-                    double fd = (up[row] - down[row]) / (2.0 * h);
-                    assertThat(jac.get(row, col)).as("%s Msun: row %d, point %d, unknown %d", massInSun, row, k, j)
-                            .isCloseTo(fd, within(TOLERANCE * rowScale(jac, eq, row, size)));
+                double[] fd = check.column(col, h);
+                for (int row = check.firstRow(col); row <= check.lastRow(col); row++) {
+                    assertThat(check.analytic().get(row, col))
+                            .as("%s Msun: row %d, point %d, unknown %d", massInSun, row, k, j)
+                            .isCloseTo(fd[row], within(TOLERANCE * check.rowScale(row)));
                 }
             }
         }
         return checked;
-    }
-
-    private static double rowScale(BandMatrix jac, StructureEquations eq, int row, int size) {
-        double largest = 0.0;
-        int first = Math.max(0, row - eq.lowerBandwidth());
-        int last = Math.min(size - 1, row + eq.upperBandwidth());
-        for (int c = first; c <= last; c++) {
-            largest = Math.max(largest, Math.abs(jac.get(row, c)));
-        }
-        return largest;
     }
 }
