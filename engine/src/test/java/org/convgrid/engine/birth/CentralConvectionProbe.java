@@ -1,6 +1,14 @@
 package org.convgrid.engine.birth;
 
+import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.evolution.AgedModel;
+import org.convgrid.engine.evolution.MainSequenceEvolver;
+import org.convgrid.engine.physics.PhysicsSet;
+import org.convgrid.engine.physics.StandardPhysics;
+import org.convgrid.engine.physics.opacity.Opacity;
+import org.convgrid.engine.physics.opacity.OpacityValue;
+import org.convgrid.engine.request.OpacityChoice;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.StellarProfile;
 import org.convgrid.engine.units.Constants;
@@ -95,12 +103,13 @@ class CentralConvectionProbe {
     void window() {
         String list = System.getProperty("probe.masses", "");
         double z = Double.parseDouble(System.getProperty("probe.z", "0.02"));
+        double scale = Double.parseDouble(System.getProperty("probe.centreScale", "1"));
         for (String token : list.split(",")) {
             if (token.isBlank()) {
                 continue;
             }
             double m = Double.parseDouble(token.trim());
-            BirthTrack t = BirthTracks.track(m, z, 1000, 1.0, 1000);
+            BirthTrack t = scale == 1.0 ? BirthTracks.track(m, z, 1000, 1.0, 1000) : scaledInterior(m, z, scale);
             double first = Double.NaN;
             double last = Double.NaN;
             double largest = 0.0;
@@ -115,9 +124,42 @@ class CentralConvectionProbe {
                     largest = Math.max(largest, inner);
                 }
             }
+            System.out.printf("interior opacity x %s: ", scale);
             System.out.printf("%.3f Msun Z %s: radiative centre %.1f - %.1f Myr, largest m/M %.4f, ZAMS %.1f Myr%n",
                     m, z, first / BirthTracks.MYR, last / BirthTracks.MYR, largest,
                     t.events().zeroAgeMainSequence() / BirthTracks.MYR);
         }
+    }
+
+    private static final double SCALED_ABOVE_LOG_T = 6.3;
+    private static final double UNSCALED_BELOW_LOG_T = 6.0;
+
+    /**
+     * A diagnosis only (-Dprobe.centreScale=1.2): the track from birth to 1 Gyr with the built-in opacity multiplied
+     * by scale^w, w a smoothstep from 0 below log T 6.0 to 1 above 6.3, so the centre sees the scaled opacity and
+     * the surface layers do not.
+     */
+    private static BirthTrack scaledInterior(double m, double z, double scale) {
+        Opacity base = StandardPhysics.opacity(1.0);
+        double width = SCALED_ABOVE_LOG_T - UNSCALED_BELOW_LOG_T;
+        Opacity scaled = (rho, temperature, composition) -> {
+            OpacityValue v = base.rosselandMean(rho, temperature, composition);
+            double u = Math.min(1.0, Math.max(0.0, (Math.log10(temperature) - UNSCALED_BELOW_LOG_T) / width));
+            double w = u * u * (3.0 - 2.0 * u);
+            double dwDlnT = 6.0 * u * (1.0 - u) / (width * Math.log(10.0));
+            return new OpacityValue(v.kappa() * Math.pow(scale, w), v.dlnKappaDlnRho(),
+                    v.dlnKappaDlnT() + Math.log(scale) * dwDlnT);
+        };
+        Composition birth = BirthTracks.birth(z);
+        PhysicsOptions options = new PhysicsOptions(PhysicsOptions.DEFAULT.mixingLength(), 0.0,
+                StabilityCriterion.SCHWARZSCHILD, 1.0, OpacityChoice.table("interior opacity x " + scale, scaled));
+        PhysicsSet physics = StandardPhysics.create(options, birth);
+        MainSequenceEvolver.Settings d = MainSequenceEvolver.Settings.DEFAULT;
+        MainSequenceEvolver.Settings s = new MainSequenceEvolver.Settings(d.maxCentralHydrogenChange(),
+                d.exhaustionFraction(), d.maxLuminosityChange(), d.maxGrowth(), d.endCentralHydrogen(),
+                1000 * BirthTracks.MYR, d.stepBudget(), d.retryBudget());
+        BirthEvolution evolution = new BirthEvolution(new StartModelBuilder(physics),
+                new MainSequenceEvolver(physics, s), BirthEvolution.DEFAULT_CORE_THRESHOLD);
+        return evolution.evolve(m * Constants.M_SUN, birth, new double[] {1000 * BirthTracks.MYR});
     }
 }
