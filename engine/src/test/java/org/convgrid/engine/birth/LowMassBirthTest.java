@@ -50,6 +50,8 @@ class LowMassBirthTest {
         // where they have it (nabla_rad/nabla_ad 0.99-1.00 at their first states with a core;
         // RadiativeCoreOnsetCentreTest); at their own Z (~0.015, from memory) it is 20 % more radiative, the size
         // of the shortfall here: the central opacity goes as ~Z^0.8, so which Z the comparison assumes decides it.
+        // As a diagnosis only (CentralConvectionProbe -Dprobe.centreScale), the opacity above log T 6.3 raised by
+        // 20 % shrinks this core to m/M 0.019 (48-88 Myr), raised by 30 % to 3e-4, below the 1e-3 core threshold.
         // Published models also show pre-main-sequence cores that 3He burning dissolves, but only in a narrow
         // window just above the fully convective limit (van Saders & Pinsonneault 2012, ApJ 751, 98; Baraffe &
         // Chabrier 2018, A&A 619, A177; from memory); ours reach down to
