@@ -27,37 +27,54 @@ class LowMassBirthTest {
 
     @Test
     void threeTenthsSolarMassHasATransientRadiativeCore() {
-        // KNOWN DISCREPANCY, frozen: published standard sets keep 0.3 Msun fully convective throughout (Baraffe et
-        // al. 2015; from memory); here, 0.06 Msun below this engine's zero-age fully convective limit (0.36 Msun
-        // at Z = 0.02), the pre-main-sequence interior, lit by contraction rather than by central burning (a
-        // lower L(m)/m, hence nabla_rad, near the centre), grows a small radiative core for ~70 Myr that the
-        // onset of burning removes again. Published models show such a pre-main-sequence core that 3He burning
-        // later dissolves, but only in a narrow window just above the fully convective limit (van Saders &
-        // Pinsonneault 2012, ApJ 751, 98; Baraffe & Chabrier 2018, A&A 619, A177; from memory).
-        // Measured, not a numerical artefact: 1000 mesh points instead of 500 give the same core (38.7-107.5 Myr,
-        // up to m/M = 0.090), so do all step limits halved (39.0-110.3 Myr, 0.092); it reaches 9 % of the mass,
-        // far above the 1e-3 core threshold. At 60 Myr the centre has nabla_rad/nabla_ad = 0.343/0.3965 = 0.87
-        // with kappa = 8.3 cm^2/g (OPAL GN93), eps_nuc = 0.10 and eps_grav = 0.24 erg/g/s: p + p -> 3He alone (3He 9.6e-5, still near its birth value plus the burnt
-        // deuterium; 3He + 3He supplies under 1e-4 of eps_nuc) and CN frozen (12C lifetime over 1e14 yr at 6e6 K).
+        // Issue 15 asks that 0.3 Msun (Z = 0.02) stay fully convective from birth to 1 Gyr, as published standard
+        // sets do (Baraffe et al. 2015, A&A 577, A42; from memory). KNOWN DISCREPANCY, frozen, cause measured:
+        // the centre of this contracting star is lit by contraction, not burning (at the onset, 38.7 Myr,
+        // eps_nuc = 0.032 against eps_grav = 0.31 erg/g/s; 3He still at its birth value plus the burnt deuterium,
+        // 7.7e-5), and nabla_rad/nabla_ad at the centre falls steadily as the star contracts (1.97 at 20 Myr, 1.24
+        // at 30, 0.99 at 38) to 0.862 at 60-80 Myr, until pp burning, with 3He building up, lifts it back (0.91 at
+        // 100, 1.23 at 150 Myr). CentralConvectionProbe checked each factor of the central nabla_rad:
+        // - L(m)/m at the centre: eps_grav,c equals T_c (L - L_nuc)/integral(T dm), the value a fully convective
+        //   (isentropic) star must have, to 0.03 % (0.3669 against 0.3670 at 30 Myr): the energy equation and its
+        //   central point are right, and eps_grav,c = 1.84 L/M (an n = 1.5 polytrope gives 1.885);
+        // - kappa: OPAL GN93 as published; the cubic interpolation lies 0.011 dex below bilinear interpolation
+        //   between the nodes at the centre (log T 6.73-6.79, log R -0.67 to -0.65), where the table is convex in
+        //   log T; conduction is negligible there;
+        // - nabla_ad: 0.3966, the ideal-gas 0.4 less the Coulomb term (ideal gas plus the Debye-Hueckel free
+        //   energy, classical electrons, gives 0.394 at these centres; Debye & Hueckel 1923, from memory); a lower
+        //   nabla_ad favours convection, so the equation of state cannot make the core;
+        // - eps_nuc: p + p -> 3He at its Q value (6.67 MeV net of the neutrino), 0.103 erg/g/s at 60 Myr against
+        //   ~0.09 from the textbook pp-chain rate taken to 3He only with weak screening (2.38e6 rho X^2 T6^-2/3
+        //   exp(-33.8 T6^-1/3) x 6.67/13.1 x 1.13; Kippenhahn, Weigert & Weiss 2012, ch. 18, from memory).
+        // With our Z = 0.02 the centre physics puts the radiative-core onset of the published 0.7 and 1 Msun tracks
+        // where they have it (nabla_rad/nabla_ad 0.99-1.00 at their first states with a core;
+        // RadiativeCoreOnsetCentreTest); at their own Z (~0.015, from memory) it is 20 % more radiative, the size
+        // of the shortfall here: the central opacity goes as ~Z^0.8, so which Z the comparison assumes decides it.
+        // As a diagnosis only (CentralConvectionProbe -Dprobe.centreScale), the opacity above log T 6.3 raised by
+        // 20 % shrinks this core to m/M 0.019 (48-88 Myr), raised by 30 % to 3e-4, below the 1e-3 core threshold.
+        // Published models also show pre-main-sequence cores that 3He burning dissolves, but only in a narrow
+        // window just above the fully convective limit (van Saders & Pinsonneault 2012, ApJ 751, 98; Baraffe &
+        // Chabrier 2018, A&A 619, A177; from memory); ours reach down to
+        // 0.27-0.28 Msun (0.26 Msun: none; 0.28: m/M 0.014 at most, 52-85 Myr; 0.31: 0.14, 37-130 Myr) against a
+        // zero-age fully convective limit of 0.3675 Msun. Here: radiative centre from 37.9 to 115.1 Myr (first and
+        // last step with it), up to m/M = 0.093. Not a numerical artefact: 1000 mesh points instead of 500 give the
+        // same core (38.7-107.5 Myr, up to m/M = 0.090), so do all step limits halved (39.0-110.3 Myr).
         // Not the surface either: with the cool opacity raised by 0.4 dex below log T 3.70 (PreMainSequenceProbe
-        // -Dprobe.mass=0.3 -Dprobe.coolDex=0.4) the star at 20 Myr matches Baraffe et al. 2015's published 0.3 Msun
-        // model (Teff 3402 K, R 0.567, L 0.0389 against 3392 K, 0.569, 0.038) and still grows its core at 41.3 Myr
-        // (m/M 0.147 at 100 Myr): the cause lies in the centre, not found yet. Checked at 60 Myr (T_c 6.09e6 K,
-        // rho_c 50.5): kappa is the OPAL value there (log R -0.65, conduction negligible), nabla_ad 0.3965 (ideal gas
-        // 0.4 less the Coulomb term), eps_nuc 0.103 erg/g/s against ~0.09 from the textbook pp-chain rate taken to
-        // 3He only with weak screening (2.38e6 rho X^2 T6^-2/3 exp(-33.8 T6^-1/3) x 6.67/13.1 x 1.13; Kippenhahn,
-        // Weigert & Weiss 2012, ch. 18, from memory); L(m)/m at the centre is 0.344 erg/g/s (eps_grav 0.24), and
-        // 16 % more would keep the centre convective.
+        // -Dprobe.mass=0.3 -Dprobe.coolDex=0.4) the star at 20 Myr matches the published 0.3 Msun model (Teff
+        // 3402 K, R 0.567, L 0.0389 against 3392 K, 0.569, 0.038) and still grows its core at 41.3 Myr.
         BirthTrack t = BirthTracks.track(0.3, 0.02, 1000, 1.0, 1000);
         double largest = 0.0;
+        double last = Double.NaN;
         for (TrackPoint p : t.points()) {
             var zones = p.step().convectiveZones();
             if (zones.get(0).innerMassFraction() > 0.0) {
                 largest = Math.max(largest, zones.get(0).innerMassFraction());
+                last = p.age();
             }
         }
         assertThat(largest).isBetween(0.02, 0.15);
         assertThat(t.events().radiativeCore() / MYR).isCloseTo(38.7, within(4.0));
+        assertThat(last / MYR).isCloseTo(115.1, within(10.0));
         assertThat(t.models().get(0).model().convection().structureClass()).isEqualTo(StructureClass.FULLY_CONVECTIVE);
     }
 
