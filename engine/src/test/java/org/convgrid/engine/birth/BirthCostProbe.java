@@ -28,25 +28,40 @@ class BirthCostProbe {
                 BirthEvolution.DEFAULT_CORE_THRESHOLD);
         double bestZams = Double.MAX_VALUE;
         double bestBirth = Double.MAX_VALUE;
+        // thread CPU time beside the wall time: on a shared machine the wall time of one run moves by tens of per
+        // cent with the load, the CPU time of the evolving thread much less
+        var threads = java.lang.management.ManagementFactory.getThreadMXBean();
+        double cpuZams = Double.MAX_VALUE;
+        double cpuBirth = Double.MAX_VALUE;
+        int zamsNewton = 0;
+        int birthNewton = 0;
         int zamsSteps = 0;
         int birthSteps = 0;
         for (int r = 0; r < repeats; r++) {
             long t0 = System.nanoTime();
+            long c0 = threads.getCurrentThreadCpuTime();
             var zero = BirthTracks.birth(0.02);
             var bare = org.convgrid.engine.state.Composition.scaledSolar(zero.x(), zero.z());
             ZamsModel z = new ZamsTrack(new ZamsBuilder(physics), bare).solve(Constants.M_SUN).model();
             EvolutionResult ms = evolver.evolve(z.model(), new double[] {0.0});
             bestZams = Math.min(bestZams, (System.nanoTime() - t0) * 1e-9);
+            cpuZams = Math.min(cpuZams, (threads.getCurrentThreadCpuTime() - c0) * 1e-9);
             zamsSteps = ms.steps().size();
+            zamsNewton = z.iterations() + ms.steps().stream().mapToInt(st -> st.iterations()).sum();
             t0 = System.nanoTime();
+            c0 = threads.getCurrentThreadCpuTime();
             BirthTrack b = birth.evolve(Constants.M_SUN, zero, new double[] {0.0});
             bestBirth = Math.min(bestBirth, (System.nanoTime() - t0) * 1e-9);
+            cpuBirth = Math.min(cpuBirth, (threads.getCurrentThreadCpuTime() - c0) * 1e-9);
             birthSteps = b.points().size();
+            birthNewton = b.start().iterations() + b.result().steps().stream().mapToInt(st -> st.iterations()).sum();
             System.out.printf("run %d: zams %s at %.4g Gyr, birth %s at %.4g Gyr (ZAMS at %.4g Myr)%n", r,
                     ms.end(), ms.endAge() / Constants.GYR, b.result().end(), b.result().endAge() / Constants.GYR,
                     b.events().zeroAgeMainSequence() / BirthTracks.MYR);
         }
         System.out.printf("1 Msun to exhaustion: from ZAMS %.2f s (%d steps), from birth %.2f s (%d steps), ratio %.2f%n",
                 bestZams, zamsSteps, bestBirth, birthSteps, bestBirth / bestZams);
+        System.out.printf("thread CPU: from ZAMS %.2f s (%d Newton iterations), from birth %.2f s (%d), ratio %.2f%n",
+                cpuZams, zamsNewton, cpuBirth, birthNewton, cpuBirth / cpuZams);
     }
 }

@@ -34,6 +34,19 @@ final class BirthTracks {
     }
 
     /**
+     * The default pre-main-sequence limits, or for a probe the nine values of -Dprobe.limits (comma-separated, in
+     * the order of the {@link PreMainSequenceLimits} components).
+     */
+    static PreMainSequenceLimits limits() {
+        String given = System.getProperty("probe.limits");
+        if (given == null) {
+            return PreMainSequenceLimits.DEFAULT;
+        }
+        double[] v = java.util.Arrays.stream(given.split(",")).mapToDouble(Double::parseDouble).toArray();
+        return new PreMainSequenceLimits(v[0], v[1], v[2], v[3], v[4], v[5], v[6], v[7], v[8]);
+    }
+
+    /**
      * @param massInSun Msun
      * @param z metals
      * @param endMyr age limit, Myr
@@ -54,7 +67,7 @@ final class BirthTracks {
                 endMyr * MYR, d.stepBudget(), d.retryBudget());
         BirthEvolution evolution = new BirthEvolution(new StartModelBuilder(physics),
                 new MainSequenceEvolver(physics, s).withPreMainSequenceLimits(
-                        PreMainSequenceLimits.DEFAULT.scaled(coarseness)), BirthEvolution.DEFAULT_CORE_THRESHOLD);
+                        limits().scaled(coarseness)), BirthEvolution.DEFAULT_CORE_THRESHOLD);
         double[] ages = new double[agesMyr.length];
         for (int i = 0; i < ages.length; i++) {
             ages[i] = agesMyr[i] * MYR;
