@@ -1,15 +1,22 @@
 package org.convgrid.cli;
 
 import java.io.PrintWriter;
+import java.util.List;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
-/** Entry point of the {@code convgrid} command. */
+/**
+ * Entry point of the {@code convgrid} command. The subcommands are registered when the command line is built rather
+ * than named in the annotation, so that a process running one of them builds picocli's model of that one only.
+ */
 @Command(name = "convgrid", mixinStandardHelpOptions = true, versionProvider = ToolVersion.class,
         description = "Where convection operates inside main-sequence stars, across a grid of mass, "
-                + "metallicity and age.",
-        subcommands = {
+                + "metallicity and age.")
+public final class ConvgridMain implements Runnable {
+
+    /** The subcommands, in the order the usage lists them. */
+    static final List<Class<?>> SUBCOMMANDS = List.of(
             CalibrateSunCommand.class,
             CheckCommand.class,
             RunCommand.class,
@@ -17,9 +24,7 @@ import picocli.CommandLine.Option;
             PlotCommand.class,
             ProbeCommand.class,
             StarCommand.class,
-            TransitionsCommand.class,
-        })
-public final class ConvgridMain implements Runnable {
+            TransitionsCommand.class);
 
     @Option(names = "--verbose", scope = CommandLine.ScopeType.INHERIT,
             description = "Print stack traces with error messages.")
@@ -59,9 +64,41 @@ public final class ConvgridMain implements Runnable {
         return commandLine(out, err, CommandContext.production());
     }
 
-    /** Builds the command line with convgrid's error handling and the given context (tests inject fakes here). */
+    /**
+     * Builds the command line with convgrid's error handling and the given context (tests inject fakes here), with
+     * every subcommand.
+     */
     public static CommandLine commandLine(PrintWriter out, PrintWriter err, CommandContext context) {
+        return configured(withSubcommands(SUBCOMMANDS, context), out, err);
+    }
+
+    /**
+     * The command line that will run {@code args}: when the first argument names a subcommand, only that one is
+     * registered (picocli reads every option of every registered command by reflection, about a fifth of a second
+     * in a fresh JVM for all eight); otherwise, for the usage, a mistyped name or options before the subcommand,
+     * every one. A registered subcommand behaves as it does among all of them.
+     */
+    public static CommandLine commandLine(PrintWriter out, PrintWriter err, CommandContext context, String... args) {
+        if (args.length > 0) {
+            for (Class<?> command : SUBCOMMANDS) {
+                if (command.getAnnotation(Command.class).name().equals(args[0])) {
+                    return configured(withSubcommands(List.of(command), context), out, err);
+                }
+            }
+        }
+        return commandLine(out, err, context);
+    }
+
+    private static CommandLine withSubcommands(List<Class<?>> subcommands, CommandContext context) {
         CommandLine cli = new CommandLine(new ConvgridMain(context));
+        for (Class<?> command : subcommands) {
+            cli.addSubcommand(command);
+        }
+        return cli;
+    }
+
+    /** Settings for the whole hierarchy, so they come after the subcommands (picocli applies them to those present). */
+    private static CommandLine configured(CommandLine cli, PrintWriter out, PrintWriter err) {
         cli.setOut(out);
         cli.setErr(err);
         cli.setCaseInsensitiveEnumValuesAllowed(true);
@@ -87,6 +124,6 @@ public final class ConvgridMain implements Runnable {
     public static void main(String[] args) {
         PrintWriter out = new PrintWriter(System.out, true);
         PrintWriter err = new PrintWriter(System.err, true);
-        System.exit(commandLine(out, err).execute(args));
+        System.exit(commandLine(out, err, CommandContext.production(), args).execute(args));
     }
 }

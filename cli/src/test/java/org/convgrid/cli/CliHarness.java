@@ -73,7 +73,8 @@ final class CliHarness {
     Execution execute(String... args) {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
-        int code = ConvgridMain.commandLine(new PrintWriter(out), new PrintWriter(err), context).execute(args);
+        // built as main builds it, with the named subcommand alone
+        int code = ConvgridMain.commandLine(new PrintWriter(out), new PrintWriter(err), context, args).execute(args);
         return new Execution(code, out.toString(), err.toString());
     }
 

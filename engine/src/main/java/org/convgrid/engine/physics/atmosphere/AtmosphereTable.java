@@ -17,10 +17,11 @@ import org.convgrid.engine.state.Composition;
  *
  * <p>Default grid: log Teff 3.30-4.80 (about 2000-63000 K) in {@value #DEFAULT_TEFF_POINTS} nodes, log g
  * 2.5-6.0 in {@value #DEFAULT_GRAVITY_POINTS} nodes (steps 0.033 and 0.35 dex): with an H^-, Kramers and
- * electron-scattering opacity this reproduces the direct integration to about 3e-4 in ln P between nodes, at
- * about 230 EOS and opacity calls per node for {@link GreyAtmosphere}. Nodes where the wrapped boundary fails
- * (for instance hot, low-gravity atmospheres above the Eddington limit) are marked missing; queries outside the
- * grid or in a cell with a missing corner fail with {@link ErrorKind#OFF_TABLE}, parameters ("atmosphere", Teff, g).
+ * electron-scattering opacity this reproduces the direct integration to about 3e-4 in ln P between nodes. A node of
+ * {@link GreyAtmosphere} with the standard physics costs about 340-380 EOS and opacity calls where the atmosphere
+ * stays below the OPAL tables and 650-900 where it enters them. Nodes where the wrapped boundary fails (for instance
+ * hot, low-gravity atmospheres above the Eddington limit) are marked missing; queries outside the grid or in a cell
+ * with a missing corner fail with {@link ErrorKind#OFF_TABLE}, parameters ("atmosphere", Teff, g).
  *
  * <p>Nodes are integrated on first use, not all at once: a cell needs its four corners and their neighbours
  * along each axis (for the cross derivatives), at most 12 nodes, and a zero-age model's surface visits a few

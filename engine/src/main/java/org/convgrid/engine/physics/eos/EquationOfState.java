@@ -36,4 +36,15 @@ public interface EquationOfState {
      * @return the full thermodynamic state at the density that gives this pressure
      */
     EosState atPressure(double pressure, double temperature, Composition composition);
+
+    /**
+     * As {@link #atPressure(double, double, Composition)}, started from a solved state nearby (the previous point of
+     * an atmosphere integration): the same state to the implementation's solve tolerance, in fewer internal
+     * iterations. {@code nearby} is only a starting guess; it may lie far away (then it merely saves less).
+     *
+     * @param nearby a state returned earlier by this equation of state, for the same composition
+     */
+    default EosState atPressure(double pressure, double temperature, Composition composition, EosState nearby) {
+        return atPressure(pressure, temperature, composition);
+    }
 }

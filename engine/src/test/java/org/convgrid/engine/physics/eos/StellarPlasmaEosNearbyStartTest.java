@@ -8,7 +8,8 @@ import org.junit.jupiter.api.Test;
 
 /**
  * {@link StellarPlasmaEos#atDensity(double, double, Composition, EosState)} is only a faster start of the same
- * neutrality solve: from any nearby state (the same point, a finite-difference neighbour, a Newton step away, or a
+ * neutrality solve, and {@link StellarPlasmaEos#atPressure(double, double, Composition, EosState)} of the same density
+ * inversion: from any nearby state (the same point, a finite-difference neighbour, a Newton step away, or a
  * state far across the star) it gives the state of the plain {@code atDensity} to the solve's own tolerance.
  * A numerical property of our solver, not physics: no published values are involved.
  */
@@ -43,6 +44,33 @@ class StellarPlasmaEosNearbyStartTest {
             };
             for (EosState start : starts) {
                 EosState warm = EOS.atDensity(p[0], p[1], c, start);
+                assertSameState(warm, cold, p);
+            }
+        }
+    }
+
+    /**
+     * The inversion for the density started from a nearby state (the previous point of an atmosphere integration, a
+     * state a little off in P and T, a state far across the star, which the carry refuses) finds the density of the
+     * plain inversion, and with it the same state, to the inversion's tolerance (|d ln rho| below 1e-11).
+     */
+    @Test
+    void pressureInversionsStartedNearbyOrFarAgreeWithTheColdInversion() {
+        EosState far = EOS.atDensity(152.9, 1.567e7, Composition.scaledSolar(0.346, 0.0188));
+        for (double[] p : POINTS) {
+            Composition c = Composition.scaledSolar(p[2], 0.0188);
+            double pressure = EOS.atDensity(p[0], p[1], c).pressure();
+            EosState cold = EOS.atPressure(pressure, p[1], c);
+            EosState[] starts = {
+                cold,
+                EOS.atPressure(pressure * 1.01, p[1] * 0.995, c),
+                EOS.atPressure(pressure * 1.5, p[1] * 1.1, c),
+                far,
+            };
+            for (EosState start : starts) {
+                EosState warm = EOS.atPressure(pressure, p[1], c, start);
+                assertThat(warm.density()).as("rho at rho = %s, T = %s", p[0], p[1])
+                        .isCloseTo(cold.density(), within(TOLERANCE * cold.density()));
                 assertSameState(warm, cold, p);
             }
         }
