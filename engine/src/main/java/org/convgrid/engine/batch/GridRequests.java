@@ -3,6 +3,8 @@ package org.convgrid.engine.batch;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 
 import org.convgrid.engine.birth.Phase;
 import org.convgrid.engine.birth.TrackPoint;
@@ -25,13 +27,15 @@ import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.engine.zams.ZamsBuilder;
+import org.convgrid.engine.zams.ZamsLadder;
 import org.convgrid.engine.zams.ZamsResult;
 import org.convgrid.engine.zams.ZamsTrack;
 import org.convgrid.engine.zams.ZeroAgeRequests;
 
 /**
  * Solves grid requests at any age. A chunk walks its masses in order on a fresh {@link ZamsTrack} (each zero-age model
- * seeded by homology from its converged neighbours); the requests of one mass (consecutive in a chunk) are answered by
+ * seeded by homology from its converged neighbours, the first from the two rungs of the line's shared
+ * {@link ZamsLadder} next to it); the requests of one mass (consecutive in a chunk) are answered by
  * one {@link MainSequenceEvolver} run from that zero-age model, stopped at the largest requested age, with a step
  * landing exactly on every requested age (no interpolation). Age 0 is the zero-age model itself; ages are {@link
  * Age.SinceZeroAge} in s. Ages beyond core-hydrogen exhaustion are {@link ModelStatus#PAST_MAIN_SEQUENCE} with the
@@ -65,6 +69,7 @@ public final class GridRequests implements ChunkSolver {
     }
 
     private final PhysicsBundles physics = new PhysicsBundles();
+    private final Map<PhysicsSet, ZamsLadder> ladders = new ConcurrentHashMap<>();
     private final StarTrackSink tracks;
     private final MainSequenceEvolver.Settings settings;
 
@@ -119,7 +124,8 @@ public final class GridRequests implements ChunkSolver {
             } else {
                 if (track == null) {
                     set = physics.of(first.physics(), composition);
-                    track = new ZamsTrack(new ZamsBuilder(set), composition);
+                    ZamsBuilder builder = new ZamsBuilder(set);
+                    track = new ZamsTrack(builder, composition, ladderOf(set, builder, composition));
                 }
                 ZamsResult zeroAge = track.solve(star.get(0).mass());
                 out.addAll(star.get(0).age() instanceof Age.MainSequenceFraction
@@ -129,6 +135,11 @@ public final class GridRequests implements ChunkSolver {
             start = end;
         }
         return out;
+    }
+
+    /** The zero-age ladder of a line, shared by all its chunks (a rung is the same whoever builds it). */
+    private ZamsLadder ladderOf(PhysicsSet set, ZamsBuilder builder, Composition composition) {
+        return ladders.computeIfAbsent(set, s -> new ZamsLadder(builder, composition));
     }
 
     /**
