@@ -1,8 +1,10 @@
 package org.convgrid.engine.batch;
 
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 
 import org.convgrid.engine.birth.Phase;
 import org.convgrid.engine.birth.TrackPoint;
@@ -25,13 +27,15 @@ import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.engine.zams.ZamsBuilder;
+import org.convgrid.engine.zams.ZamsLadder;
 import org.convgrid.engine.zams.ZamsResult;
 import org.convgrid.engine.zams.ZamsTrack;
 import org.convgrid.engine.zams.ZeroAgeRequests;
 
 /**
  * Solves grid requests at any age. A chunk walks its masses in order on a fresh {@link ZamsTrack} (each zero-age model
- * seeded by homology from its converged neighbours); the requests of one mass (consecutive in a chunk) are answered by
+ * seeded by homology from its converged neighbours; in a chunk of several masses the first from the two rungs of the
+ * line's shared {@link ZamsLadder} next to it); the requests of one mass (consecutive in a chunk) are answered by
  * one {@link MainSequenceEvolver} run from that zero-age model, stopped at the largest requested age, with a step
  * landing exactly on every requested age (no interpolation). Age 0 is the zero-age model itself; ages are {@link
  * Age.SinceZeroAge} in s. Ages beyond core-hydrogen exhaustion are {@link ModelStatus#PAST_MAIN_SEQUENCE} with the
@@ -64,7 +68,23 @@ public final class GridRequests implements ChunkSolver {
     public record Answer(ModelOutcome outcome, StellarModel model) {
     }
 
+    /**
+     * Zero-age ladders kept at once: more than the lines a sweep has in flight (chunks are handed out in grid order,
+     * a bounded window of them per thread).
+     */
+    public static final int LADDERS_KEPT = 8;
+
     private final PhysicsBundles physics = new PhysicsBundles();
+    /**
+     * Ladders of the lines most recently asked for, at most {@link #LADDERS_KEPT} (a line's rungs are up to ~20 whole
+     * models); a line evicted and asked for again rebuilds the same rungs, so eviction costs time, never a result.
+     */
+    private final Map<PhysicsSet, ZamsLadder> ladders = new LinkedHashMap<>(16, 0.75f, true) {
+        @Override
+        protected boolean removeEldestEntry(Map.Entry<PhysicsSet, ZamsLadder> eldest) {
+            return size() > LADDERS_KEPT;
+        }
+    };
     private final StarTrackSink tracks;
     private final MainSequenceEvolver.Settings settings;
 
@@ -119,7 +139,9 @@ public final class GridRequests implements ChunkSolver {
             } else {
                 if (track == null) {
                     set = physics.of(first.physics(), composition);
-                    track = new ZamsTrack(new ZamsBuilder(set), composition);
+                    ZamsBuilder builder = new ZamsBuilder(set);
+                    track = new ZamsTrack(builder, composition,
+                            severalMasses(chunk) ? ladderOf(set, builder, composition) : null);
                 }
                 ZamsResult zeroAge = track.solve(star.get(0).mass());
                 out.addAll(star.get(0).age() instanceof Age.MainSequenceFraction
@@ -129,6 +151,22 @@ public final class GridRequests implements ChunkSolver {
             start = end;
         }
         return out;
+    }
+
+    /**
+     * Whether a chunk holds more than one mass: a grid line, where the ladder's rungs are shared by its chunks. A single
+     * mass (one star, a line of one mass) keeps its own cold start, which costs less than the rungs out to its mass.
+     * Depends on the chunk alone, so on the grid alone.
+     */
+    private static boolean severalMasses(List<ModelRequest> chunk) {
+        return chunk.stream().mapToDouble(ModelRequest::mass).distinct().count() > 1;
+    }
+
+    /** The zero-age ladder of a line, shared by all its chunks (a rung is the same whoever builds it). */
+    private ZamsLadder ladderOf(PhysicsSet set, ZamsBuilder builder, Composition composition) {
+        synchronized (ladders) {
+            return ladders.computeIfAbsent(set, s -> new ZamsLadder(builder, composition));
+        }
     }
 
     /**

@@ -1,8 +1,11 @@
 package org.convgrid.engine.zams;
 
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.Comparator;
+import java.util.IdentityHashMap;
 import java.util.List;
+import java.util.Set;
 
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.ModelState;
@@ -15,8 +18,10 @@ import org.convgrid.engine.units.Constants;
  * converged neighbours ({@link HomologySeeder}) and walked there in steps of at most {@link #MAX_STEP} in ln M,
  * halved when a step fails. The first model comes from the polytropic guess at the requested mass where that is
  * reliable ({@link #coldStartReliable}), otherwise (or if it fails) at {@link #ANCHOR_MASS}, and is walked from
- * there. The walk depends only on the requests and their
- * order, never on timing, so results are reproducible. Not thread-safe: one track per line and thread.
+ * there; a track given the line's {@link ZamsLadder} starts instead from the two ladder rungs next to its first mass
+ * (shared by every chunk of the line) and falls back to the cold starts only when the ladder has no rung. The walk
+ * depends only on the requests, their order and the line, never on timing, so results are reproducible. Not
+ * thread-safe: one track per line and thread.
  *
  * <p>Typical use by a grid: one track per chunk of a line of constant composition and physics, masses requested
  * in increasing order ({@link #solve}); {@link #solveOne} for a single request with an optional seed.
@@ -45,10 +50,21 @@ public final class ZamsTrack {
     private final Composition composition;
     private final HomologySeeder seeder = new HomologySeeder();
     private final List<ZamsModel> converged = new ArrayList<>();
+    private final ZamsLadder ladder;
+    private final Set<ZamsModel> fromLadder = Collections.newSetFromMap(new IdentityHashMap<>());
 
     public ZamsTrack(ZamsBuilder builder, Composition composition) {
+        this(builder, composition, null);
+    }
+
+    /**
+     * @param ladder the line's shared rungs to start from (same builder settings and composition), or null for
+     *        cold starts
+     */
+    public ZamsTrack(ZamsBuilder builder, Composition composition, ZamsLadder ladder) {
         this.builder = builder;
         this.composition = composition;
+        this.ladder = ladder;
     }
 
     /**
@@ -82,7 +98,14 @@ public final class ZamsTrack {
     public ZamsResult solve(double mass) {
         for (ZamsModel z : converged) {
             if (Math.abs(z.model().mass() / mass - 1.0) <= SAME_MASS) {
-                return ZamsResult.success(z, 0);
+                // a rung was solved for the line, not for this track: its own iterations, not 0
+                return ZamsResult.success(z, fromLadder.contains(z) ? z.iterations() : 0);
+            }
+        }
+        if (converged.isEmpty() && ladder != null) {
+            for (ZamsModel rung : ladder.startFor(mass)) {
+                add(rung);
+                fromLadder.add(rung);
             }
         }
         int spent = 0;

@@ -1,0 +1,142 @@
+package org.convgrid.engine.zams;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.structure.SolveFailedException;
+
+/**
+ * Zero-age models of one line of constant composition and physics at fixed rung masses
+ * M_k = {@link ZamsTrack#ANCHOR_MASS} exp(k {@link #RUNG_SPACING}), k = 0, +-1, +-2, ..., built on first use and
+ * shared by every chunk of the line, so that a chunk starts one short homology step from two rungs instead of a cold
+ * start (slow, and at some masses failing into a walk from the anchor mass that every such chunk paid again).
+ *
+ * <p>Rung 0 is the cold start at the anchor mass; rung k is walked ({@link ZamsTrack}) from rungs k -+ 1 and
+ * k -+ 2, the two next to it on the anchor's side. Every rung is therefore a pure function of the line, whichever
+ * chunk or thread asks for it first, and a grid gives the same catalogue at any thread count. A rung that does not
+ * converge ends its side of the ladder (the walk towards the masses beyond it starts from the last rung). Thread-safe:
+ * each side is built under its own lock, the rungs are immutable.
+ */
+public final class ZamsLadder {
+
+    /** ln M between rungs: one full homology step. */
+    public static final double RUNG_SPACING = ZamsTrack.MAX_STEP;
+    /** Tolerance on rung indices, so that a mass on a rung (up to rounding) counts as on it. */
+    private static final double ON_RUNG = 1.0e-9;
+
+    private final ZamsBuilder builder;
+    private final Composition composition;
+    private final Side below = new Side(-1);
+    private final Side above = new Side(+1);
+    private boolean anchorTried;
+    private ZamsModel anchor;
+
+    /**
+     * @param builder the line's builder
+     * @param composition the line's homogeneous initial composition
+     */
+    public ZamsLadder(ZamsBuilder builder, Composition composition) {
+        this.builder = builder;
+        this.composition = composition;
+    }
+
+    /**
+     * The converged rungs to start a walk to {@code mass} (g) from: the rung nearest to it on the anchor's side
+     * (never beyond it, so no rung is built outside the masses asked for) and the next one, towards the anchor or,
+     * from rung 0, towards the mass, so the two bracket it. Fewer when rungs failed; empty when the anchor itself
+     * did not converge.
+     */
+    public List<ZamsModel> startFor(double mass) {
+        double x = Math.log(mass / ZamsTrack.ANCHOR_MASS) / RUNG_SPACING;
+        int k = (int) Math.floor(Math.abs(x) + ON_RUNG);
+        Side side = x < 0 ? below : above;
+        if (k == 0) {
+            ZamsModel centre = anchor();
+            if (centre == null) {
+                return List.of();
+            }
+            if (Math.abs(x) < ON_RUNG) {
+                return List.of(centre);
+            }
+            return side.rung(1).map(r -> List.of(centre, r)).orElse(List.of(centre));
+        }
+        List<ZamsModel> built = side.upTo(k);
+        int n = built.size();
+        if (n >= 2) {
+            return List.of(built.get(n - 2), built.get(n - 1));
+        }
+        ZamsModel centre = anchor();
+        if (centre == null) {
+            return List.of();
+        }
+        return n == 0 ? List.of(centre) : List.of(centre, built.get(0));
+    }
+
+    private synchronized ZamsModel anchor() {
+        if (!anchorTried) {
+            anchorTried = true;
+            try {
+                anchor = builder.coldStart(ZamsTrack.ANCHOR_MASS, composition);
+            } catch (SolveFailedException e) {
+                anchor = null;
+            }
+        }
+        return anchor;
+    }
+
+    /** One side of the ladder: rungs 1, 2, ... (index i holds rung i + 1), in the direction {@code sign}. */
+    private final class Side {
+        private final int sign;
+        private final List<ZamsModel> rungs = new ArrayList<>();
+        private boolean ended;
+
+        Side(int sign) {
+            this.sign = sign;
+        }
+
+        /** Rung {@code k} (k >= 1), if it converged. */
+        Optional<ZamsModel> rung(int k) {
+            List<ZamsModel> built = upTo(k);
+            return built.size() >= k ? Optional.of(built.get(k - 1)) : Optional.empty();
+        }
+
+        /**
+         * Rungs 1..k of this side as far as they converge (a copy), built first where missing, one rung per hold
+         * of the lock: a request that needs fewer rungs than another thread is building returns as soon as its
+         * own are there.
+         */
+        List<ZamsModel> upTo(int k) {
+            while (true) {
+                synchronized (this) {
+                    if (ended || rungs.size() >= k) {
+                        return List.copyOf(rungs.subList(0, Math.min(k, rungs.size())));
+                    }
+                    buildNext();
+                }
+            }
+        }
+
+        /** Walks rung size + 1 from the two rungs before it (rung 0 being the anchor); ends the side if it fails. */
+        private void buildNext() {
+            ZamsModel centre = anchor();
+            if (centre == null) {
+                ended = true;
+                return;
+            }
+            int next = rungs.size() + 1;
+            ZamsTrack walk = new ZamsTrack(builder, composition);
+            walk.add(next == 1 ? centre : rungs.get(next - 2));
+            if (next >= 2) {
+                walk.add(next == 2 ? centre : rungs.get(next - 3));
+            }
+            ZamsResult r = walk.solve(ZamsTrack.ANCHOR_MASS * Math.exp(sign * next * RUNG_SPACING));
+            if (r.converged()) {
+                rungs.add(r.model());
+            } else {
+                ended = true;
+            }
+        }
+    }
+}
