@@ -37,10 +37,16 @@ import org.convgrid.engine.error.ConvgridException;
  * 1996 (ApJ 457, 340) evaluate it half a mixing length above the base instead; the two points coincide for
  * alpha = 1 and differ by under one scale height for the usual alpha; H_P and v_c are linearly interpolated in r; when that point lies above the top of
  * the envelope (very thin envelopes) the envelope's radial midpoint is used. For a fully convective star there is
- * no base and the local time is evaluated at r = R/2. The global time is the trapezoid integral of dr/v_c over
- * the consecutive mesh points of the envelope where v_c &gt; 0 (Kim &amp; Demarque 1996); the partial intervals at
- * the boundaries, where v_c tends to 0 and 1/v_c is integrable but not trapezoid-friendly, are left out. Both are
- * NaN when there is no envelope, and the local time is NaN when v_c vanishes at its evaluation point.
+ * no base and the local time is evaluated at r = R/2. The global time is the integral of dr/v_c across the
+ * envelope (Kim &amp; Demarque 1996), from its base (the interpolated boundary, where v_c = 0) to its top. In the
+ * mixing-length theory v_c^2 is proportional to the superadiabatic excess (Boehm-Vitense 1958, Z. Astrophys. 46,
+ * 108; Kippenhahn, Weigert &amp; Weiss 2012, mixing-length chapter), which vanishes linearly at a boundary, so 1/v_c
+ * diverges there as (r - r_b)^(-1/2). Each interval is therefore integrated as if v_c^2 were linear in r across it,
+ * which gives exactly 2 dr/(v_k + v_(k+1)), finite with v_c = 0 at one end; the partial intervals between the
+ * boundaries and the first and last mesh points count, with v_c = 0 at the boundary. (A trapezoid rule on 1/v_c
+ * instead made the time hinge on how close the first mesh point happened to lie to the base: up to 15 % between
+ * meshes of the same model.) Both are NaN when there is no envelope, and the local time is NaN when v_c vanishes at
+ * its evaluation point.
  */
 public final class ConvectiveZoneFinder {
 
@@ -204,17 +210,38 @@ public final class ConvectiveZoneFinder {
             return v > 0.0 ? alpha * lerp(scaleHeight, k, t) / v : Double.NaN;
         }
 
-        /** Trapezoid integral of dr/v_c, s, over consecutive points of span where both have v_c &gt; 0; NaN if none. */
+        /**
+         * Integral of dr/v_c, s, across span and the partial intervals out to its interpolated boundaries (v_c = 0
+         * there), each interval exact for v_c^2 linear in r; NaN when v_c vanishes throughout.
+         */
         double globalTurnover(int[] span) {
+            int first = span[0];
+            int last = span[1];
             double sum = 0.0;
-            int intervals = 0;
-            for (int k = span[0]; k < span[1]; k++) {
-                if (velocity[k] > 0.0 && velocity[k + 1] > 0.0) {
-                    sum += 0.5 * (radius[k + 1] - radius[k]) * (1.0 / velocity[k] + 1.0 / velocity[k + 1]);
-                    intervals++;
-                }
+            if (first > 0) {
+                sum += intervalTime(lerp(radius, first - 1, weight(first - 1)), radius[first], 0.0, velocity[first]);
             }
-            return intervals > 0 ? sum : Double.NaN;
+            for (int k = first; k < last; k++) {
+                sum += intervalTime(radius[k], radius[k + 1], velocity[k], velocity[k + 1]);
+            }
+            if (last < radius.length - 1) {
+                sum += intervalTime(radius[last], lerp(radius, last, weight(last)), velocity[last], 0.0);
+            }
+            return sum > 0.0 ? sum : Double.NaN;
+        }
+
+        /**
+         * 2 (r1 - r0)/(v0 + v1): the exact time across [r0, r1] when v^2 is linear in r; 0 for an empty interval
+         * and for one where v_c vanishes at both ends (no flow to time, as the trapezoid rule left such intervals
+         * out before).
+         */
+        private static double intervalTime(double r0, double r1, double v0, double v1) {
+            double dr = r1 - r0;
+            double v = Math.max(v0, 0.0) + Math.max(v1, 0.0);
+            if (!(dr > 0.0)) {
+                return 0.0;
+            }
+            return v > 0.0 ? 2.0 * dr / v : 0.0;
         }
 
         private static double lerp(double[] a, int k, double t) {

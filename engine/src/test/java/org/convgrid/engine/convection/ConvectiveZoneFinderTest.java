@@ -181,7 +181,8 @@ class ConvectiveZoneFinderTest {
         // Derived: base q_b = 0.7123 (r = q R), v = v0 (1 + 2 (r - r_b)/R), H_P = H0 (1 - (r - r_b)/(2R)), all
         // linear in r so the interpolation is exact. Local: r* = r_b + H0/2 (half a pressure scale height,
         // README "Catalogue"), tau = alpha H_P(r*)/v(r*).
-        // Global: int dr/v from the first mesh point above the base to R = (R/2v0) ln(v(R)/v(r_1)).
+        // Global: int dr/v from the first mesh point above the base to R = (R/2v0) ln(v(R)/v(r_1)), plus the
+        // partial interval from the base to that point, timed as if v fell to 0 at the base: 2 (r_1 - r_b)/v(r_1).
         double qb = 0.7123;
         double v0 = 3e4;
         double h0 = 0.02 * R;
@@ -194,8 +195,26 @@ class ConvectiveZoneFinderTest {
         double local = ALPHA * h0 * (1 - dr / 2) / (v0 * (1 + 2 * dr));
         assertThat(s.turnoverTimeLocal()).isCloseTo(local, within(1e-10 * local));
         double q1 = 0.7125; // first mesh point above the base (step 5e-4)
-        double global = R / (2 * v0) * Math.log((1 + 2 * (1 - qb)) / (1 + 2 * (q1 - qb)));
+        double global = R / (2 * v0) * Math.log((1 + 2 * (1 - qb)) / (1 + 2 * (q1 - qb)))
+                + 2 * (q1 - qb) * R / (v0 * (1 + 2 * (q1 - qb)));
         assertThat(s.turnoverTimeGlobal()).isCloseTo(global, within(1e-6 * global));
+    }
+
+    @Test
+    void globalTurnoverIsExactForMixingLengthVelocitiesVanishingAtTheBase() {
+        // Mixing-length theory: v_c^2 proportional to the superadiabatic excess (Boehm-Vitense 1958), which vanishes
+        // linearly at the envelope base, so v = v0 sqrt((x - q_b)/(1 - q_b)) with x = r/R and
+        // int_{r_b}^{R} dr/v = 2 R (1 - q_b)/v0 exactly. The answer must not hinge on how close the first mesh
+        // point lies to the base: bases 0.3 of a mesh step and 1e-9 R below a point give the same time.
+        double v0 = 3e4;
+        double[] q = uniform(2001); // step 5e-4
+        for (double qb : new double[] {0.71235 - 0.3 * 5e-4, 0.7125 - 1e-9, 0.71234}) {
+            ZoneProfile p = profile(q, x -> x - qb, x -> x > qb ? v0 * Math.sqrt((x - qb) / (1 - qb)) : 0.0,
+                    x -> 0.02 * R);
+            double exact = 2 * R * (1 - qb) / v0;
+            assertThat(finder.find(p).turnoverTimeGlobal()).as("base at %s", qb)
+                    .isCloseTo(exact, within(1e-9 * exact));
+        }
     }
 
     @Test
