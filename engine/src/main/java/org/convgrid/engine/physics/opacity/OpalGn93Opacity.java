@@ -15,21 +15,25 @@ import org.convgrid.engine.state.Composition;
  * </pre>
  * <ul>
  *   <li>{@link #shipped()}, the default: the OPAL GN93 tables (Iglesias &amp; Rogers 1996, ApJ 464, 943; the
- *       "GN93hz" set, log T 3.75-8.70, shipped converted in {@value #RESOURCE}) and, below them, the analytic terms
- *       with the table offset faded over {@value #COOL_JOIN_WIDTH} dex, so that the analytic terms alone answer
- *       below log T 3.70 (the offset removed at log T 3.75 is 0.8-5.8 dex over the 126 compositions, 1.44 dex at
- *       X = 0.70, Z = 0.02);</li>
- *   <li>{@link #withCoolTables()}: in addition, the low-temperature tables of Ferguson et al. 2005 (ApJ 623, 585;
- *       the GN93 set "f05.g93", the same metal mixture as OPAL's), rows log T 3.30-4.50 of seven compositions,
- *       shipped converted in {@value #COOL_RESOURCE} (X = 0.70 at Z = 1e-4, 0.001, 0.01, 0.02, 0.04; X = 0.35 and
- *       0.80 at Z = 0.02). They alone answer up to log T {@value #BLEND_FROM_LOG_T}, OPAL alone from
- *       {@value #BLEND_TO_LOG_T}; between them log kappa_rad = w F + (1 - w) O with w = 1 - 3u^2 + 2u^3,
- *       u = (log T - {@value #BLEND_FROM_LOG_T}) / ({@value #BLEND_TO_LOG_T} - {@value #BLEND_FROM_LOG_T}), so value
- *       and slope are continuous (our choice of overlap, 0.2 dex wide; the two sets differ there by 0.05-0.09 dex at
- *       log T 4.00 and 0.11-0.18 dex at 3.80, measured per composition by {@code FergusonTablesTest}). The analytic
- *       terms, with the cool set's offset faded over {@value #COOL_JOIN_WIDTH} dex, answer below log T 3.30 (alone
- *       below 3.25; there they lie up to ~4 dex under the tables at low log R). Not yet the default: with it the
- *       pre-main-sequence start models (a relaxed n = 1.5 polytrope) do not relax.</li>
+ *       "GN93hz" set, log T 3.75-8.70, shipped converted in {@value #RESOURCE}) joined to the low-temperature tables
+ *       of Ferguson et al. 2005 (ApJ 623, 585; the GN93 set "f05.g93", the same metal mixture as OPAL's), rows
+ *       log T 3.30-4.50 of seven compositions, shipped converted in {@value #COOL_RESOURCE} (X = 0.70 at Z = 1e-4,
+ *       0.001, 0.01, 0.02, 0.04; X = 0.35 and 0.80 at Z = 0.02). They alone answer up to log T
+ *       {@value #BLEND_FROM_LOG_T}, OPAL alone from {@value #BLEND_TO_LOG_T}; between them log kappa_rad =
+ *       w F + (1 - w) O with w = 1 - 3u^2 + 2u^3, u = (log T - {@value #BLEND_FROM_LOG_T}) / ({@value #BLEND_TO_LOG_T}
+ *       - {@value #BLEND_FROM_LOG_T}), so value and slope are continuous (our choice of overlap, 0.2 dex wide; the
+ *       two sets differ there by 0.05-0.09 dex at log T 4.00 and 0.11-0.18 dex at 3.80, measured per composition by
+ *       {@code FergusonTablesTest}). The analytic terms, with the cool set's offset faded over
+ *       {@value #COOL_JOIN_WIDTH} dex, answer below log T 3.30 (alone below 3.25; there they lie up to ~4 dex under
+ *       the tables at low log R).</li>
+ *   <li>{@link #withoutCoolTables()}, the default until the cool tables joined it: the OPAL tables alone and, below
+ *       them, the analytic terms with the table offset faded over {@value #COOL_JOIN_WIDTH} dex, so that the
+ *       analytic terms alone answer below log T 3.70 (0.3-0.5 dex under the cool tables at log T 3.60-3.70; the
+ *       offset removed at log T 3.75 is 0.8-5.8 dex over the 126 compositions, 1.44 dex at X = 0.70, Z = 0.02).
+ *       It is the {@link #relaxationAid()} of the default: a pre-main-sequence start guess (an n = 1.5 polytrope)
+ *       has its outer layers at log R 1.0-1.4, beyond the cool tables' edge at log R = +1, where the faded offset
+ *       makes kappa fall with density (dln kappa/dln rho down to -0.8 at 1 Msun) and the relaxation from the guess
+ *       does not converge; relaxed first with this variant, its surface moves into the tables (log R ~ -0.5).</li>
  * </ul>
  * Each table set is interpolated by {@link TabulatedOpacity} (cubic Hermite in log T, log R, X/(1-Z) and
  * log10(Z + 1e-4)); a composition beyond a set's compositions is moved to its nearest one for that set (the cool set
@@ -42,7 +46,7 @@ import org.convgrid.engine.state.Composition;
  * slope changes at the table edge. Conduction (Yakovlev &amp; Urpin 1980, {@link ElectronConduction}) is added in
  * parallel inside the tables too, since both sets are radiative only.
  *
- * <p>The shipped tables are read once, at first use of {@link #shipped()} or {@link #withCoolTables()}, and shared
+ * <p>The shipped tables are read once, at first use of {@link #shipped()} or {@link #withoutCoolTables()}, and shared
  * by every thread. Immutable and thread-safe.
  */
 public final class OpalGn93Opacity implements Opacity {
@@ -66,6 +70,7 @@ public final class OpalGn93Opacity implements Opacity {
     private final AnalyticallyEdgedTable cool;
     private final Opacity analyticRadiative;
     private final Opacity conduction;
+    private final Opacity aid;
 
     /**
      * @param table radiative log kappa tables (OPAL), answering alone from log T {@value #BLEND_TO_LOG_T} up when
@@ -82,22 +87,29 @@ public final class OpalGn93Opacity implements Opacity {
                 : new AnalyticallyEdgedTable(coolTable, analyticRadiative, COOL_JOIN_WIDTH, EDGE_JOIN_WIDTH);
         this.analyticRadiative = analyticRadiative;
         this.conduction = Objects.requireNonNull(conduction);
+        this.aid = coolTable == null ? this : new OpalGn93Opacity(table, null, analyticRadiative, conduction);
     }
 
     /**
-     * The default: the shipped OPAL tables with the standard analytic edges and conduction; read at the first call,
-     * then shared.
+     * The default: the shipped OPAL tables joined to the shipped low-temperature tables of Ferguson et al. 2005, with
+     * the standard analytic edges and conduction; read at the first call, then shared.
      */
     public static OpalGn93Opacity shipped() {
         return Shipped.INSTANCE;
     }
 
     /**
-     * The shipped OPAL tables joined to the shipped low-temperature tables of Ferguson et al. 2005, with the
-     * standard analytic edges and conduction; read at the first call, then shared.
+     * The shipped OPAL tables alone with the standard analytic edges (the analytic terms alone below log T 3.70) and
+     * conduction; read at the first call, then shared.
      */
-    public static OpalGn93Opacity withCoolTables() {
-        return ShippedWithCoolTables.INSTANCE;
+    public static OpalGn93Opacity withoutCoolTables() {
+        return ShippedWithoutCoolTables.INSTANCE;
+    }
+
+    /** With cool tables: the same OPAL tables without them (see the class comment); otherwise this opacity. */
+    @Override
+    public Opacity relaxationAid() {
+        return aid;
     }
 
     /** The OPAL radiative tables this opacity interpolates. */
@@ -209,15 +221,15 @@ public final class OpalGn93Opacity implements Opacity {
         return coolAnswers && hotAnswers;
     }
 
-    /** Holder: the class initialises (and reads the table) at the first call of {@link #shipped()}. */
-    private static final class Shipped {
+    /** Holder: the class initialises (and reads the OPAL tables) at the first call of either accessor. */
+    private static final class ShippedWithoutCoolTables {
         static final OpalGn93Opacity INSTANCE = new OpalGn93Opacity(readShippedTable(), null,
                 AnalyticCompositeOpacity.standardRadiative(), new ElectronConduction());
     }
 
-    /** Holder: the class initialises (and reads both sets) at the first call of {@link #withCoolTables()}. */
-    private static final class ShippedWithCoolTables {
-        static final OpalGn93Opacity INSTANCE = new OpalGn93Opacity(Shipped.INSTANCE.table(), readShippedCoolTable(),
-                AnalyticCompositeOpacity.standardRadiative(), new ElectronConduction());
+    /** Holder: the class initialises (and reads the cool set) at the first call of {@link #shipped()}. */
+    private static final class Shipped {
+        static final OpalGn93Opacity INSTANCE = new OpalGn93Opacity(ShippedWithoutCoolTables.INSTANCE.table(),
+                readShippedCoolTable(), AnalyticCompositeOpacity.standardRadiative(), new ElectronConduction());
     }
 }
