@@ -30,10 +30,11 @@ import org.convgrid.engine.state.Composition;
  *       them, the analytic terms with the table offset faded over {@value #COOL_JOIN_WIDTH} dex, so that the
  *       analytic terms alone answer below log T 3.70 (0.3-0.5 dex under the cool tables at log T 3.60-3.70; the
  *       offset removed at log T 3.75 is 0.8-5.8 dex over the 126 compositions, 1.44 dex at X = 0.70, Z = 0.02).
- *       It is the {@link #relaxationAid()} of the default: a pre-main-sequence start guess (an n = 1.5 polytrope)
- *       has its outer layers at log R 1.0-1.4, beyond the cool tables' edge at log R = +1, where the faded offset
- *       makes kappa fall with density (dln kappa/dln rho down to -0.8 at 1 Msun) and the relaxation from the guess
- *       does not converge; relaxed first with this variant, its surface moves into the tables (log R ~ -0.5).</li>
+ *       It is the {@link #relaxationAid()} of the default: the relaxation of a pre-main-sequence start guess (an
+ *       n = 1.5 polytrope, whose outer layers lie at log R 1.0-1.4, beyond both tables' edge at log R = +1, against
+ *       ~-0.5 once relaxed) stalls with the default at 0.5-2 Msun (Z = 0.02; the correction to ln rho at the
+ *       second-outermost point grows to ~1e6) but converges with this variant, from whose result the default then
+ *       relaxes in a few iterations.</li>
  * </ul>
  * Each table set is interpolated by {@link TabulatedOpacity} (cubic Hermite in log T, log R, X/(1-Z) and
  * log10(Z + 1e-4)); a composition beyond a set's compositions is moved to its nearest one for that set (the cool set
@@ -42,7 +43,14 @@ import org.convgrid.engine.state.Composition;
  * ({@link AnalyticCompositeOpacity#standardRadiative()}: H^-, molecules, Kramers terms, scattering) plus the set's
  * table-minus-analytic offset at its nearest answering point, faded out ({@link AnalyticallyEdgedTable}): below the
  * set's coolest row over {@value #COOL_JOIN_WIDTH} dex; beyond log R = -8 or +1 (or the blank hot, dense corner of
- * the OPAL tables) and above log T 8.70 over {@value #EDGE_JOIN_WIDTH} dex. The joins are continuous in value; their
+ * the OPAL tables) and above log T 8.70 over {@value #EDGE_JOIN_WIDTH} dex; except above the cool set's log R = +1,
+ * where the offset is held, not faded (dense cool gas: M-dwarf photospheres, and the outer layers of the
+ * pre-main-sequence start guess). There the analytic terms lie under the tables by ~0.4 dex at Z = 0.02 and ~0.9 dex
+ * at Z = 1e-4 (estimated from the slopes that follow), and fading that offset over 0.5 dex made kappa fall with
+ * density (dln kappa/dln rho down to -0.8 at Z = 0.02 and -2.1 at Z = 1e-4), so
+ * that the atmosphere's outer pressure had two roots and its Newton iteration cycled between them, and the
+ * relaxation of the start guess stalled; held, the density slope is the analytic terms' (H^-: ~+0.5) and the level
+ * the table's at its edge. The joins are continuous in value; their
  * slope changes at the table edge. Conduction (Yakovlev &amp; Urpin 1980, {@link ElectronConduction}) is added in
  * parallel inside the tables too, since both sets are radiative only.
  *
@@ -82,9 +90,11 @@ public final class OpalGn93Opacity implements Opacity {
      */
     public OpalGn93Opacity(TabulatedOpacity table, TabulatedOpacity coolTable, Opacity analyticRadiative,
                            Opacity conduction) {
-        this.hot = new AnalyticallyEdgedTable(table, analyticRadiative, COOL_JOIN_WIDTH, EDGE_JOIN_WIDTH);
-        this.cool = coolTable == null ? null
-                : new AnalyticallyEdgedTable(coolTable, analyticRadiative, COOL_JOIN_WIDTH, EDGE_JOIN_WIDTH);
+        this.hot = new AnalyticallyEdgedTable(table, analyticRadiative, COOL_JOIN_WIDTH, EDGE_JOIN_WIDTH,
+                EDGE_JOIN_WIDTH);
+        // the cool set's offset is held above log R = +1 (see the class comment)
+        this.cool = coolTable == null ? null : new AnalyticallyEdgedTable(coolTable, analyticRadiative,
+                COOL_JOIN_WIDTH, EDGE_JOIN_WIDTH, Double.POSITIVE_INFINITY);
         this.analyticRadiative = analyticRadiative;
         this.conduction = Objects.requireNonNull(conduction);
         this.aid = coolTable == null ? this : new OpalGn93Opacity(table, null, analyticRadiative, conduction);
