@@ -56,7 +56,8 @@ class CoolOpacityAgainstLowTemperatureTablesTest {
         // Measured: OPAL lower by 0.06-0.12 dex at these points, a third to a quarter of the shortfall below.
         for (int i = 0; i < 2; i++) {
             for (int j = 0; j < LOG_R.length; j++) {
-                assertThat(logKappa(WITHOUT_COOL_TABLES, LOG_T[i], LOG_R[j])).as("log T %s, log R %s", LOG_T[i], LOG_R[j])
+                assertThat(logKappa(WITHOUT_COOL_TABLES, LOG_T[i], LOG_R[j]))
+                        .as("log T %s, log R %s", LOG_T[i], LOG_R[j])
                         .isCloseTo(PUBLISHED[i][j], within(0.15));
             }
         }

@@ -11,7 +11,8 @@ import org.junit.jupiter.api.Test;
 /**
  * The shipped OPAL GN93 tables (Iglesias &amp; Rogers 1996, ApJ 464, 943) with analytic edges and conduction,
  * without the low-temperature tables ({@link OpalGn93Opacity#withoutCoolTables()}; the default adds them, checked by
- * {@code FergusonTablesTest}). Contract (finite-difference derivatives) away from the joins, where the slope changes by design:
+ * {@code FergusonTablesTest}). Contract (finite-difference derivatives) away from the joins, where the slope changes
+ * by design:
  * points within 1e-3 dex of a table edge or of the end of a fade are left out.
  */
 class OpalGn93OpacityTest extends OpacityContractTest {
