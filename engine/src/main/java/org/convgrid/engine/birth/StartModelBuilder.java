@@ -26,8 +26,9 @@ import org.convgrid.engine.units.Constants;
  * Hayashi track L ~ R^2 and L ~ x G M^2/R, so R^3 ~ x), and it is corrected by secant steps in ln x against
  * ln T_c until T_c is within {@link #CENTRAL_TEMPERATURE_TOLERANCE} of the target. The polytrope is first relaxed
  * with the opacity's {@link org.convgrid.engine.physics.opacity.Opacity#relaxationAid()} (for the default opacity:
- * without the low-temperature tables, whose density edge at log R = +1 the polytrope's outer layers overstep), then
- * with the physics itself from there: a continuation, so the start model is that of the physics. A mass whose
+ * without the low-temperature tables; the polytrope's outer layers lie beyond their density edge at log R = +1),
+ * then with the physics itself from there: a continuation, so the start model is that of the physics; if that
+ * fails, directly. A mass whose
  * polytrope does not
  * relax is reached instead from {@link #ANCHOR_MASS} in mass steps of at most {@link #MASS_WALK_FACTOR}, each
  * start model scaled homologously to the next mass as its guess. Its age is zero: at 1/x
@@ -151,8 +152,8 @@ public final class StartModelBuilder {
                                  boolean rough) {
         double lnX = Math.log(firstRate);
         int[] spent = {alreadySpent};
-        ModelState from = rough && aidSolver != null ? relaxed(aidSolver, start, firstRate, spent).state() : start;
-        StellarModel model = relaxed(solver, from, firstRate, spent);
+        StellarModel model = rough && aidSolver != null ? relaxedWithAid(start, firstRate, spent)
+                : relaxed(solver, start, firstRate, spent);
         double lnTarget = Math.log(target);
         double prevLnX = Double.NaN;
         double prevMiss = Double.NaN;
@@ -181,6 +182,19 @@ public final class StartModelBuilder {
     /** The start model's central temperature for this mass (g), K. */
     public double centralTemperature(double mass) {
         return centralTemperature * Math.max(1.0, mass / SCALING_MASS);
+    }
+
+    /**
+     * Relaxes the polytrope with the relaxation aid, then with the physics from there; when either fails, with the
+     * physics directly from the polytrope (at Z = 1e-4 the aid's path fails at every mass, where the direct one
+     * relaxes 0.1-3 Msun; at Z = 0.02 and 0.04 the aid's succeeds and the direct one fails at 0.5-2 Msun).
+     */
+    private StellarModel relaxedWithAid(ModelState start, double rate, int[] spent) {
+        try {
+            return relaxed(solver, relaxed(aidSolver, start, rate, spent).state(), rate, spent);
+        } catch (SolveFailedException aidFailed) {
+            return relaxed(solver, start, rate, spent);
+        }
     }
 
     /**
