@@ -3,6 +3,7 @@ package org.convgrid.engine.birth;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
 import org.convgrid.engine.physics.PhysicsSet;
+import org.convgrid.engine.physics.opacity.Opacity;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.HenyeySolver;
 import org.convgrid.engine.structure.MeshPlanner;
@@ -23,7 +24,12 @@ import org.convgrid.engine.units.Constants;
  * is ~rho T^12 there). The model is an n = 1.5 polytrope ({@link HayashiGuess}) relaxed with the energy release of
  * homologous contraction at the rate x = -dlnR/dt ({@link HomologousContraction}); x sets the radius (on a
  * Hayashi track L ~ R^2 and L ~ x G M^2/R, so R^3 ~ x), and it is corrected by secant steps in ln x against
- * ln T_c until T_c is within {@link #CENTRAL_TEMPERATURE_TOLERANCE} of the target. A mass whose polytrope does not
+ * ln T_c until T_c is within {@link #CENTRAL_TEMPERATURE_TOLERANCE} of the target. The polytrope is first relaxed
+ * with the opacity's {@link org.convgrid.engine.physics.opacity.Opacity#relaxationAid()} (for the default opacity:
+ * without the low-temperature tables; the polytrope's outer layers lie beyond their density edge at log R = +1),
+ * then with the physics itself from there: a continuation, so the start model is that of the physics; if that
+ * fails, directly. A mass whose
+ * polytrope does not
  * relax is reached instead from {@link #ANCHOR_MASS} in mass steps of at most {@link #MASS_WALK_FACTOR}, each
  * start model scaled homologously to the next mass as its guess. Its age is zero: at 1/x
  * (~1e3-1e5 yr, the model's contraction time) any earlier history has been forgotten, so ages beyond a few
@@ -54,6 +60,8 @@ public final class StartModelBuilder {
     private final PhysicsSet physics;
     private final MeshPlanner planner;
     private final StructureSolver solver;
+    /** Relaxes the polytrope first, with the opacity's relaxation aid; null when that is the opacity itself. */
+    private final StructureSolver aidSolver;
     private final HenyeySolver.Settings settings;
     private final double centralTemperature;
 
@@ -66,6 +74,10 @@ public final class StartModelBuilder {
         this.settings = new HenyeySolver.Settings(HenyeySolver.DEFAULT_TOLERANCE, MAX_NEWTON_STEP,
                 RELAXATION_BUDGET);
         this.solver = new StructureSolver(physics, settings);
+        Opacity aid = physics.opacity().relaxationAid();
+        this.aidSolver = aid == physics.opacity() ? null : new StructureSolver(new PhysicsSet(physics.eos(), aid,
+                physics.nuclear(), physics.convection(), physics.criterion(), physics.surface(), physics.overshoot()),
+                settings);
         this.centralTemperature = ConvgridException.requireInRange("start central temperature",
                 centralTemperature, 1.0e5, 3.0e6, "K");
     }
@@ -87,7 +99,7 @@ public final class StartModelBuilder {
         double radius = Math.exp(guess.lnRadius(guess.size() - 1));
         double rate = guess.surfaceLuminosity() * radius / (3.0 / 7.0 * Constants.G * mass * mass);
         try {
-            return converged(guess, rate, target, 0);
+            return converged(guess, rate, target, 0, true);
         } catch (ConvgridException direct) {
             double ratio = mass / ANCHOR_MASS;
             if (mass == ANCHOR_MASS) {
@@ -100,7 +112,7 @@ public final class StartModelBuilder {
                     : mass / Math.pow(MASS_WALK_FACTOR, Math.signum(Math.log(ratio)));
             StartModel from = build(nearer, birth);
             return converged(homologous(from.model().state(), mass, target), homologousRate(from, mass, target),
-                    target, from.iterations());
+                    target, from.iterations(), false);
         }
     }
 
@@ -132,11 +144,16 @@ public final class StartModelBuilder {
         return from.contractionRate() * fr * fr * fr / (fm * fm);
     }
 
-    /** Relaxes from {@code start}, correcting the contraction rate until T_c is on target. */
-    private StartModel converged(ModelState start, double firstRate, double target, int alreadySpent) {
+    /**
+     * Relaxes from {@code start} (with the relaxation aid first when it is the polytrope, {@code rough}), correcting
+     * the contraction rate until T_c is on target.
+     */
+    private StartModel converged(ModelState start, double firstRate, double target, int alreadySpent,
+                                 boolean rough) {
         double lnX = Math.log(firstRate);
         int[] spent = {alreadySpent};
-        StellarModel model = relaxed(start, firstRate, spent);
+        StellarModel model = rough && aidSolver != null ? relaxedWithAid(start, firstRate, spent)
+                : relaxed(solver, start, firstRate, spent);
         double lnTarget = Math.log(target);
         double prevLnX = Double.NaN;
         double prevMiss = Double.NaN;
@@ -153,7 +170,7 @@ public final class StartModelBuilder {
             prevLnX = lnX;
             prevMiss = miss;
             lnX -= Math.max(-3.0, Math.min(3.0, miss / slope));
-            model = relaxed(model.state(), Math.exp(lnX), spent);
+            model = relaxed(solver, model.state(), Math.exp(lnX), spent);
         }
         double mass = start.mesh().totalMass();
         throw new ConvgridException(ErrorKind.NOT_CONVERGED, String.format(
@@ -168,15 +185,28 @@ public final class StartModelBuilder {
     }
 
     /**
+     * Relaxes the polytrope with the relaxation aid, then with the physics from there; when either fails, with the
+     * physics directly from the polytrope (at Z = 1e-4 the aid's path fails at every mass, where the direct one
+     * relaxes 0.1-3 Msun; at Z = 0.02 and 0.04 the aid's succeeds and the direct one fails at 0.5-2 Msun).
+     */
+    private StellarModel relaxedWithAid(ModelState start, double rate, int[] spent) {
+        try {
+            return relaxed(solver, relaxed(aidSolver, start, rate, spent).state(), rate, spent);
+        } catch (SolveFailedException aidFailed) {
+            return relaxed(solver, start, rate, spent);
+        }
+    }
+
+    /**
      * Relaxes at one contraction rate, then remeshes and relaxes again while the mesh is uneven (the polytrope's
      * mesh does not follow the surface layers of the relaxed model); {@code spent[0]} counts the iterations.
      */
-    private StellarModel relaxed(ModelState start, double rate, int[] spent) {
+    private StellarModel relaxed(StructureSolver with, ModelState start, double rate, int[] spent) {
         HomologousContraction source = new HomologousContraction(rate);
-        StellarModel m = solver.relax(start, source, null, settings);
+        StellarModel m = with.relax(start, source, null, settings);
         spent[0] += m.report().iterations();
         for (int pass = 0; pass < MAX_REMESH_PASSES && planner.needsRemesh(m); pass++) {
-            m = solver.relax(planner.remesh(m), source, null, settings);
+            m = with.relax(planner.remesh(m), source, null, settings);
             spent[0] += m.report().iterations();
         }
         return m;

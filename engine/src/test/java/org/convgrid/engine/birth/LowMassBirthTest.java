@@ -72,7 +72,9 @@ class LowMassBirthTest {
                 last = p.age();
             }
         }
-        assertThat(largest).isBetween(0.02, 0.15);
+        // re-frozen when the low-temperature tables of Ferguson et al. 2005 became the default opacity: the core
+        // reaches m/M 0.194 (0.090 before; 0.15 was the bound), its onset 38.7 -> 39.4 Myr
+        assertThat(largest).isBetween(0.02, 0.25);
         assertThat(t.events().radiativeCore() / MYR).isCloseTo(38.7, within(4.0));
         assertThat(last / MYR).isCloseTo(115.1, within(10.0));
         assertThat(t.models().get(0).model().convection().structureClass()).isEqualTo(StructureClass.FULLY_CONVECTIVE);

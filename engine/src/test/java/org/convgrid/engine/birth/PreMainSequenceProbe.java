@@ -24,7 +24,7 @@ import org.junit.jupiter.api.condition.EnabledIfSystemProperty;
  * What sets pre-main-sequence lithium burning: Teff, L, R, T_c, the base of the convective envelope (m/M and its
  * temperature) and the surface lithium at 0.5-1000 Myr of one track from birth (run with -Dconvgrid.probe=true;
  * -Dprobe.mass=1 -Dprobe.z=0.02 -Dprobe.myr=100 -Dprobe.alpha=1.8). {@code -Dprobe.coolDex=0.4} is a diagnosis
- * only: it raises the built-in opacity by that many dex below log T 3.70, faded out by log T 3.80 (smoothstep), which
+ * only: it raises the OPAL tables without the cool tables (the former default) by that many dex below log T 3.70, faded out by log T 3.80 (smoothstep), which
  * is roughly where and by how much the analytic cool opacity falls short of the published low-temperature tables
  * ({@code CoolOpacityAgainstLowTemperatureTablesTest}); the interior is untouched.
  */
@@ -92,7 +92,7 @@ class PreMainSequenceProbe {
 
     /** The built-in opacity times 10^(dex w), w a smoothstep from 1 below log T 3.70 to 0 above 3.80. */
     private static Opacity raisedBelow(double dex) {
-        Opacity base = OpalGn93Opacity.shipped();
+        Opacity base = OpalGn93Opacity.withoutCoolTables();
         double width = NONE_ABOVE - FULL_BELOW;
         return (rho, temperature, composition) -> {
             OpacityValue v = base.rosselandMean(rho, temperature, composition);

@@ -61,11 +61,13 @@ class MainSequenceEvolverTest {
         // Sackmann, Boothroyd & Kraemer 1993, ApJ 418, 457: the Sun's core-hydrogen exhaustion at ~11 Gyr
         // (main-sequence span 10-11 Gyr); widened to 9-12 Gyr for analytic opacities and no diffusion
         assertThat(r.exhaustionAge() / GYR).isBetween(9.0, 12.0);
-        // non-regression (this code, standard physics, default steps): 9.62 Gyr, moved from 9.67 by the Planck-Larkin
+        // non-regression (this code, standard physics, default steps): 9.68 Gyr, moved from 9.62 by the low-temperature
+        // opacity tables of Ferguson et al. 2005 as default (the zero-age Sun at alpha 1.8 larger and cooler, R 0.879
+        // -> 0.911 Rsun, L 0.738 -> 0.732 Lsun; measured 9.678); 9.62 moved from 9.67 by the Planck-Larkin
         // weight of hydrogen's bound state in the equation of state (measured 9.619); 9.67 had been moved from 11.08
         // by the opacity corrected to OPAL (the zero-age Sun brighter, 0.738 against 0.639 Lsun) and the Krishna Swamy
         // atmosphere; 11.08 from 10.96 by the two-term H^- opacity, 10.96 from 10.85 by the envelope term
-        assertThat(r.exhaustionAge() / GYR).isCloseTo(9.62, within(0.05));
+        assertThat(r.exhaustionAge() / GYR).isCloseTo(9.68, within(0.05));
 
         List<EvolutionStep> steps = r.steps();
         // the Sun brightens on the main sequence: L(4.57 Gyr)/L(0) = 1/0.70 (Sackmann et al. 1993) or 1.40
@@ -101,7 +103,9 @@ class MainSequenceEvolverTest {
         List<EvolutionStep> steps = r.steps();
         // upper main-sequence stars burn by CNO in a convective core that recedes in mass as hydrogen is
         // used (Kippenhahn, Weigert & Weiss 2012, ch. 30-31: the opacity, dominated by electron scattering,
-        // falls with X); checked while X_c > 0.05, after the core has settled (first 10 % of the life)
+        // falls with X); checked while X_c > 0.05, after the core has settled (first 10 % of the life), allowing
+        // 2e-3 in m/M for the boundary's jitter between steps (it moves by whole mesh cells: one rise of 1.07e-3
+        // measured with the low-temperature opacity tables as default, which leave the core's physics unchanged)
         double life = r.exhaustionAge();
         double previousCore = Double.POSITIVE_INFINITY;
         int checked = 0;
@@ -110,7 +114,7 @@ class MainSequenceEvolverTest {
                 continue;
             }
             assertThat(s.convectiveCoreMassFraction()).isPositive();
-            assertThat(s.convectiveCoreMassFraction()).isLessThanOrEqualTo(previousCore + 1e-3);
+            assertThat(s.convectiveCoreMassFraction()).isLessThanOrEqualTo(previousCore + 2e-3);
             previousCore = s.convectiveCoreMassFraction();
             checked++;
         }

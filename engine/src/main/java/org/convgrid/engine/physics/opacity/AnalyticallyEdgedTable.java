@@ -7,8 +7,9 @@ import org.convgrid.engine.state.Composition;
  * One set of radiative log kappa tables with the analytic radiative terms joined beyond its edges: inside the tables
  * the table itself; outside, the analytic terms plus the table-minus-analytic offset (dex) taken at the nearest
  * point where the table answers, faded out with the distance d from it as 1 - 3u^2 + 2u^3, u = d/width (width
- * {@code coolWidth} below the coolest row, {@code edgeWidth} beyond the other edges), so that the result is
- * continuous in value and the analytic terms alone answer beyond the fades. A composition outside the tables
+ * {@code coolWidth} below the coolest row, {@code denseWidth} above the highest log R, {@code edgeWidth} beyond the
+ * other edges), so that the result is continuous in value and the analytic terms alone answer beyond the fades; an
+ * infinite width holds the offset (the analytic terms' slope, the table's level). A composition outside the tables
  * (Z beyond their Z range, or X/(1-Z) beyond a row's range) is moved to the nearest tabulated one for the table
  * part. Inside a blank corner the edge is taken per table row in log T, so the join is continuous in log R but can
  * step across log T rows there. Immutable and thread-safe.
@@ -19,6 +20,7 @@ final class AnalyticallyEdgedTable {
     private final Opacity analyticRadiative;
     private final double coolWidth;
     private final double edgeWidth;
+    private final double denseWidth;
     private final double minLogT;
     private final double maxLogT;
     private final double minLogR;
@@ -29,12 +31,15 @@ final class AnalyticallyEdgedTable {
      * @param analyticRadiative answers where the table does not (radiative only)
      * @param coolWidth fade width (dex in log T) below the coolest row
      * @param edgeWidth fade width (dex) beyond the other edges
+     * @param denseWidth fade width (dex in log R) above the highest log R; infinite to hold the offset there
      */
-    AnalyticallyEdgedTable(TabulatedOpacity table, Opacity analyticRadiative, double coolWidth, double edgeWidth) {
+    AnalyticallyEdgedTable(TabulatedOpacity table, Opacity analyticRadiative, double coolWidth, double edgeWidth,
+                           double denseWidth) {
         this.table = Objects.requireNonNull(table);
         this.analyticRadiative = Objects.requireNonNull(analyticRadiative);
         this.coolWidth = coolWidth;
         this.edgeWidth = edgeWidth;
+        this.denseWidth = denseWidth;
         double[] t = table.logTemperatures();
         double[] r = table.logR();
         minLogT = t[0];
@@ -108,7 +113,7 @@ final class AnalyticallyEdgedTable {
         double offsetT = tc == lt ? edge[1] - (ae.dlnKappaDlnT() + 3.0 * ae.dlnKappaDlnRho()) : 0.0;
         double offsetR = rc == lr ? edge[2] - ae.dlnKappaDlnRho() : 0.0;
         double widthT = lt < tc ? -coolWidth : edgeWidth;
-        double widthR = lr < rc ? -edgeWidth : edgeWidth;
+        double widthR = lr < rc ? -edgeWidth : lr > maxLogR ? denseWidth : edgeWidth;
         double[] fadeT = fade((lt - tc) / widthT);
         double[] fadeR = fade((lr - rc) / widthR);
         double weight = fadeT[0] * fadeR[0];
@@ -120,7 +125,7 @@ final class AnalyticallyEdgedTable {
     /** Whether (log T, log R) lies beyond every fade, where the analytic terms alone answer. */
     boolean beyondEveryFade(double lt, double lr) {
         return lt < minLogT - coolWidth || lt > maxLogT + edgeWidth || lr < minLogR - edgeWidth
-                || lr > maxLogR + edgeWidth;
+                || lr > maxLogR + denseWidth;
     }
 
     /** 1 - 3u^2 + 2u^3 on [0, 1], 1 below, 0 above; returns {value, d/du}. */

@@ -12,4 +12,13 @@ public interface Opacity {
      * @return kappa in cm^2 g^-1 and its logarithmic derivatives
      */
     OpacityValue rosselandMean(double density, double temperature, Composition composition);
+
+    /**
+     * The opacity a rough first guess is relaxed with before this one takes over (a continuation, used by the
+     * pre-main-sequence start models): this opacity itself unless an implementation has a variant that behaves
+     * better far from any solution, e.g. beyond the density edge of its tables.
+     */
+    default Opacity relaxationAid() {
+        return this;
+    }
 }

@@ -15,21 +15,26 @@ import org.convgrid.engine.state.Composition;
  * </pre>
  * <ul>
  *   <li>{@link #shipped()}, the default: the OPAL GN93 tables (Iglesias &amp; Rogers 1996, ApJ 464, 943; the
- *       "GN93hz" set, log T 3.75-8.70, shipped converted in {@value #RESOURCE}) and, below them, the analytic terms
- *       with the table offset faded over {@value #COOL_JOIN_WIDTH} dex, so that the analytic terms alone answer
- *       below log T 3.70 (the offset removed at log T 3.75 is 0.8-5.8 dex over the 126 compositions, 1.44 dex at
- *       X = 0.70, Z = 0.02);</li>
- *   <li>{@link #withCoolTables()}: in addition, the low-temperature tables of Ferguson et al. 2005 (ApJ 623, 585;
- *       the GN93 set "f05.g93", the same metal mixture as OPAL's), rows log T 3.30-4.50 of seven compositions,
- *       shipped converted in {@value #COOL_RESOURCE} (X = 0.70 at Z = 1e-4, 0.001, 0.01, 0.02, 0.04; X = 0.35 and
- *       0.80 at Z = 0.02). They alone answer up to log T {@value #BLEND_FROM_LOG_T}, OPAL alone from
- *       {@value #BLEND_TO_LOG_T}; between them log kappa_rad = w F + (1 - w) O with w = 1 - 3u^2 + 2u^3,
- *       u = (log T - {@value #BLEND_FROM_LOG_T}) / ({@value #BLEND_TO_LOG_T} - {@value #BLEND_FROM_LOG_T}), so value
- *       and slope are continuous (our choice of overlap, 0.2 dex wide; the two sets differ there by 0.05-0.09 dex at
- *       log T 4.00 and 0.11-0.18 dex at 3.80, measured per composition by {@code FergusonTablesTest}). The analytic
- *       terms, with the cool set's offset faded over {@value #COOL_JOIN_WIDTH} dex, answer below log T 3.30 (alone
- *       below 3.25; there they lie up to ~4 dex under the tables at low log R). Not yet the default: with it the
- *       pre-main-sequence start models (a relaxed n = 1.5 polytrope) do not relax.</li>
+ *       "GN93hz" set, log T 3.75-8.70, shipped converted in {@value #RESOURCE}) joined to the low-temperature tables
+ *       of Ferguson et al. 2005 (ApJ 623, 585; the GN93 set "f05.g93", the same metal mixture as OPAL's), rows
+ *       log T 3.30-4.50 of seven compositions, shipped converted in {@value #COOL_RESOURCE} (X = 0.70 at Z = 1e-4,
+ *       0.001, 0.01, 0.02, 0.04; X = 0.35 and 0.80 at Z = 0.02). They alone answer up to log T
+ *       {@value #BLEND_FROM_LOG_T}, OPAL alone from {@value #BLEND_TO_LOG_T}; between them log kappa_rad =
+ *       w F + (1 - w) O with w = 1 - 3u^2 + 2u^3, u = (log T - {@value #BLEND_FROM_LOG_T}) / ({@value #BLEND_TO_LOG_T}
+ *       - {@value #BLEND_FROM_LOG_T}), so value and slope are continuous (our choice of overlap, 0.2 dex wide; the
+ *       two sets differ there by 0.05-0.09 dex at log T 4.00 and 0.11-0.18 dex at 3.80, measured per composition by
+ *       {@code FergusonTablesTest}). The analytic terms, with the cool set's offset faded over
+ *       {@value #COOL_JOIN_WIDTH} dex, answer below log T 3.30 (alone below 3.25; there they lie up to ~4 dex under
+ *       the tables at low log R).</li>
+ *   <li>{@link #withoutCoolTables()}, the default until the cool tables joined it: the OPAL tables alone and, below
+ *       them, the analytic terms with the table offset faded over {@value #COOL_JOIN_WIDTH} dex, so that the
+ *       analytic terms alone answer below log T 3.70 (0.3-0.5 dex under the cool tables at log T 3.60-3.70; the
+ *       offset removed at log T 3.75 is 0.8-5.8 dex over the 126 compositions, 1.44 dex at X = 0.70, Z = 0.02).
+ *       It is the {@link #relaxationAid()} of the default: the relaxation of a pre-main-sequence start guess (an
+ *       n = 1.5 polytrope, whose outer layers lie at log R 1.0-1.4, beyond both tables' edge at log R = +1, against
+ *       ~-0.5 once relaxed) stalls with the default at 0.5-2 Msun (Z = 0.02; the correction to ln rho at the
+ *       second-outermost point grows to ~1e6) but converges with this variant, from whose result the default then
+ *       relaxes in a few iterations.</li>
  * </ul>
  * Each table set is interpolated by {@link TabulatedOpacity} (cubic Hermite in log T, log R, X/(1-Z) and
  * log10(Z + 1e-4)); a composition beyond a set's compositions is moved to its nearest one for that set (the cool set
@@ -38,11 +43,18 @@ import org.convgrid.engine.state.Composition;
  * ({@link AnalyticCompositeOpacity#standardRadiative()}: H^-, molecules, Kramers terms, scattering) plus the set's
  * table-minus-analytic offset at its nearest answering point, faded out ({@link AnalyticallyEdgedTable}): below the
  * set's coolest row over {@value #COOL_JOIN_WIDTH} dex; beyond log R = -8 or +1 (or the blank hot, dense corner of
- * the OPAL tables) and above log T 8.70 over {@value #EDGE_JOIN_WIDTH} dex. The joins are continuous in value; their
+ * the OPAL tables) and above log T 8.70 over {@value #EDGE_JOIN_WIDTH} dex; except above the cool set's log R = +1,
+ * where the offset is held, not faded (dense cool gas: M-dwarf photospheres, and the outer layers of the
+ * pre-main-sequence start guess). There the analytic terms lie under the tables by ~0.4 dex at Z = 0.02 and ~0.9 dex
+ * at Z = 1e-4 (estimated from the slopes that follow), and fading that offset over 0.5 dex made kappa fall with
+ * density (dln kappa/dln rho down to -0.8 at Z = 0.02 and -2.1 at Z = 1e-4), so
+ * that the atmosphere's outer pressure had two roots and its Newton iteration cycled between them, and the
+ * relaxation of the start guess stalled; held, the density slope is the analytic terms' (H^-: ~+0.5) and the level
+ * the table's at its edge. The joins are continuous in value; their
  * slope changes at the table edge. Conduction (Yakovlev &amp; Urpin 1980, {@link ElectronConduction}) is added in
  * parallel inside the tables too, since both sets are radiative only.
  *
- * <p>The shipped tables are read once, at first use of {@link #shipped()} or {@link #withCoolTables()}, and shared
+ * <p>The shipped tables are read once, at first use of {@link #shipped()} or {@link #withoutCoolTables()}, and shared
  * by every thread. Immutable and thread-safe.
  */
 public final class OpalGn93Opacity implements Opacity {
@@ -66,6 +78,7 @@ public final class OpalGn93Opacity implements Opacity {
     private final AnalyticallyEdgedTable cool;
     private final Opacity analyticRadiative;
     private final Opacity conduction;
+    private final Opacity aid;
 
     /**
      * @param table radiative log kappa tables (OPAL), answering alone from log T {@value #BLEND_TO_LOG_T} up when
@@ -77,27 +90,36 @@ public final class OpalGn93Opacity implements Opacity {
      */
     public OpalGn93Opacity(TabulatedOpacity table, TabulatedOpacity coolTable, Opacity analyticRadiative,
                            Opacity conduction) {
-        this.hot = new AnalyticallyEdgedTable(table, analyticRadiative, COOL_JOIN_WIDTH, EDGE_JOIN_WIDTH);
-        this.cool = coolTable == null ? null
-                : new AnalyticallyEdgedTable(coolTable, analyticRadiative, COOL_JOIN_WIDTH, EDGE_JOIN_WIDTH);
+        this.hot = new AnalyticallyEdgedTable(table, analyticRadiative, COOL_JOIN_WIDTH, EDGE_JOIN_WIDTH,
+                EDGE_JOIN_WIDTH);
+        // the cool set's offset is held above log R = +1 (see the class comment)
+        this.cool = coolTable == null ? null : new AnalyticallyEdgedTable(coolTable, analyticRadiative,
+                COOL_JOIN_WIDTH, EDGE_JOIN_WIDTH, Double.POSITIVE_INFINITY);
         this.analyticRadiative = analyticRadiative;
         this.conduction = Objects.requireNonNull(conduction);
+        this.aid = coolTable == null ? this : new OpalGn93Opacity(table, null, analyticRadiative, conduction);
     }
 
     /**
-     * The default: the shipped OPAL tables with the standard analytic edges and conduction; read at the first call,
-     * then shared.
+     * The default: the shipped OPAL tables joined to the shipped low-temperature tables of Ferguson et al. 2005, with
+     * the standard analytic edges and conduction; read at the first call, then shared.
      */
     public static OpalGn93Opacity shipped() {
         return Shipped.INSTANCE;
     }
 
     /**
-     * The shipped OPAL tables joined to the shipped low-temperature tables of Ferguson et al. 2005, with the
-     * standard analytic edges and conduction; read at the first call, then shared.
+     * The shipped OPAL tables alone with the standard analytic edges (the analytic terms alone below log T 3.70) and
+     * conduction; read at the first call, then shared.
      */
-    public static OpalGn93Opacity withCoolTables() {
-        return ShippedWithCoolTables.INSTANCE;
+    public static OpalGn93Opacity withoutCoolTables() {
+        return ShippedWithoutCoolTables.INSTANCE;
+    }
+
+    /** With cool tables: the same OPAL tables without them (see the class comment); otherwise this opacity. */
+    @Override
+    public Opacity relaxationAid() {
+        return aid;
     }
 
     /** The OPAL radiative tables this opacity interpolates. */
@@ -209,15 +231,15 @@ public final class OpalGn93Opacity implements Opacity {
         return coolAnswers && hotAnswers;
     }
 
-    /** Holder: the class initialises (and reads the table) at the first call of {@link #shipped()}. */
-    private static final class Shipped {
+    /** Holder: the class initialises (and reads the OPAL tables) at the first call of either accessor. */
+    private static final class ShippedWithoutCoolTables {
         static final OpalGn93Opacity INSTANCE = new OpalGn93Opacity(readShippedTable(), null,
                 AnalyticCompositeOpacity.standardRadiative(), new ElectronConduction());
     }
 
-    /** Holder: the class initialises (and reads both sets) at the first call of {@link #withCoolTables()}. */
-    private static final class ShippedWithCoolTables {
-        static final OpalGn93Opacity INSTANCE = new OpalGn93Opacity(Shipped.INSTANCE.table(), readShippedCoolTable(),
-                AnalyticCompositeOpacity.standardRadiative(), new ElectronConduction());
+    /** Holder: the class initialises (and reads the cool set) at the first call of {@link #shipped()}. */
+    private static final class Shipped {
+        static final OpalGn93Opacity INSTANCE = new OpalGn93Opacity(ShippedWithoutCoolTables.INSTANCE.table(),
+                readShippedCoolTable(), AnalyticCompositeOpacity.standardRadiative(), new ElectronConduction());
     }
 }

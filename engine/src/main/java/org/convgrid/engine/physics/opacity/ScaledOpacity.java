@@ -31,4 +31,11 @@ public record ScaledOpacity(Opacity inner, double factor) implements Opacity {
         OpacityValue v = inner.rosselandMean(density, temperature, composition);
         return new OpacityValue(factor * v.kappa(), v.dlnKappaDlnRho(), v.dlnKappaDlnT());
     }
+
+    /** The inner opacity's aid, scaled alike. */
+    @Override
+    public Opacity relaxationAid() {
+        Opacity aid = inner.relaxationAid();
+        return aid == inner ? this : of(aid, factor);
+    }
 }

@@ -18,7 +18,7 @@ import org.junit.jupiter.api.Test;
 /**
  * The shipped low-temperature tables of Ferguson et al. 2005 (ApJ 623, 585; the GN93 set "f05.g93", Rosseland
  * means, log R -8 to +1 by 0.5), their transcription and their join to the OPAL tables (Iglesias &amp; Rogers 1996,
- * ApJ 464, 943) in {@link OpalGn93Opacity#withCoolTables()}.
+ * ApJ 464, 943) in {@link OpalGn93Opacity#shipped()}, the default.
  *
  * <p>The transcriptions (rows log T 4.50 down to 3.30 of seven published files, each row as published: log T then
  * 19 values of log10 kappa) are test resources under {@code reference/opacity/ferguson-transcribed/a} and
@@ -131,9 +131,9 @@ class FergusonTablesTest {
                     double rho = Math.pow(10.0, logR + 3.0 * (logT - 6.0));
                     double t = Math.pow(10.0, logT);
                     double d = 1e-5;
-                    double numeric = (Math.log(OpalGn93Opacity.withCoolTables().rosselandMean(rho, t * Math.exp(d), c).kappa())
-                            - Math.log(OpalGn93Opacity.withCoolTables().rosselandMean(rho, t * Math.exp(-d), c).kappa())) / (2.0 * d);
-                    assertThat(OpalGn93Opacity.withCoolTables().rosselandMean(rho, t, c).dlnKappaDlnT()).as("%s log R %s log T %s", FILES[f],
+                    double numeric = (Math.log(OpalGn93Opacity.shipped().rosselandMean(rho, t * Math.exp(d), c).kappa())
+                            - Math.log(OpalGn93Opacity.shipped().rosselandMean(rho, t * Math.exp(-d), c).kappa())) / (2.0 * d);
+                    assertThat(OpalGn93Opacity.shipped().rosselandMean(rho, t, c).dlnKappaDlnT()).as("%s log R %s log T %s", FILES[f],
                             logR, logT).isCloseTo(numeric, within(2e-3 * Math.max(1.0, Math.abs(numeric))));
                 }
             }
@@ -145,7 +145,7 @@ class FergusonTablesTest {
         // Ferguson et al. 2005 and Iglesias & Rogers 1996 are independent calculations with the same mixture; where
         // both are tabulated (log T 3.80-4.50) they should agree to a few tenths of a dex. The difference at
         // log T 4.00 (or 3.80) is the jump a switch without the blend would leave there; printed per composition.
-        TabulatedOpacity opal = OpalGn93Opacity.withCoolTables().table();
+        TabulatedOpacity opal = OpalGn93Opacity.shipped().table();
         double[] o = new double[3];
         for (int f = 0; f < FILES.length; f++) {
             Composition c = composition(f);
@@ -295,6 +295,6 @@ class FergusonTablesTest {
 
     private static double logKappa(double logT, double logR, Composition c) {
         double rho = Math.pow(10.0, logR + 3.0 * (logT - 6.0));
-        return Math.log10(OpalGn93Opacity.withCoolTables().rosselandMean(rho, Math.pow(10.0, logT), c).kappa());
+        return Math.log10(OpalGn93Opacity.shipped().rosselandMean(rho, Math.pow(10.0, logT), c).kappa());
     }
 }

@@ -13,7 +13,7 @@ import org.convgrid.engine.state.Composition;
  */
 class OpalGn93WithCoolTablesContractTest extends OpacityContractTest {
 
-    static final OpalGn93Opacity OPACITY = OpalGn93Opacity.withCoolTables();
+    static final OpalGn93Opacity OPACITY = OpalGn93Opacity.shipped();
 
     @Override
     Opacity opacity() {
