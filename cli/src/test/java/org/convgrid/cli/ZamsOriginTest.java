@@ -42,21 +42,25 @@ class ZamsOriginTest {
      * 0.3 Msun Teff 3545.6 -> 3302.6 K, L 0.012510 -> 0.009842 Lsun, R 0.2964 -> 0.3030 Rsun, Newton iterations 48
      * -> 249; 1 Msun Teff 5690.4 -> 5585.1 K, L 0.73511 -> 0.72884 Lsun, R 0.8822 -> 0.9118 Rsun, envelope base r/R
      * 0.7225 -> 0.7313, its Newton iterations 37 -> 0: not investigated, presumably the model is reused from a mass
-     * walk that now reaches 0.3 Msun).
+     * walk that now reaches 0.3 Msun). Re-frozen for both at once when they were merged, with the global turnover
+     * time integrated exactly for v_c^2 linear in r out to the zone's boundaries: the ladder's rows again (1 Msun L
+     * 0.7288428 -> 0.7289041 Lsun, Newton iterations 0 -> 25, 0.3 Msun 249 -> 4) and turnover_time_global_days
+     * 37.77 -> 38.71 and 38.17 -> 38.63 days (1 Msun; the two ages now 0.2 % apart, were 1 %), 546.17 -> 546.12
+     * (0.3 Msun, fully convective: no boundary to cross).
      */
     private static final List<String> ROWS_BEFORE = List.of(
-            "p0-z00-m000-a00,0.3,0.02,0.28,1.8,0.0,0.0,main_sequence,ok,,0.009842163,0.3030321,3302.592,4.952212,"
-                    + "7392598.0,89.96434,0.6971044,,fully_convective,,,0.0,0.0,0.3,179.0309,249,schwarzschild,1.0,"
-                    + "546.1681",
-            "p0-z00-m000-a01,0.3,0.02,0.28,1.8,0.0,0.06,main_sequence,ok,,0.009505466,0.2980587,3301.178,"
-                    + "4.966585,7497948.0,94.21271,0.699315,,fully_convective,,,0.0,0.0,0.3,185.4432,317,"
-                    + "schwarzschild,1.0,707.0337",
-            "p0-z00-m001-a00,1.0,0.02,0.28,1.8,0.0,0.0,main_sequence,ok,,0.7288428,0.9118037,5585.144,4.518265,"
-                    + "1.350142e+07,81.9469,0.6993801,,conv_envelope,,,0.9758543,0.7312897,0.02414569,25.65331,0,"
-                    + "schwarzschild,1.0,37.76916",
-            "p0-z00-m001-a01,1.0,0.02,0.28,1.8,0.0,0.06,main_sequence,ok,,0.7314137,0.9129023,5586.698,4.517219,"
-                    + "1.351976e+07,82.44179,0.6950192,,conv_envelope,,,0.9759222,0.7312684,0.02407782,25.62154,31,"
-                    + "schwarzschild,1.0,38.17125");
+            "p0-z00-m000-a00,0.3,0.02,0.28,1.8,0.0,0.0,main_sequence,ok,,0.009842163,"
+                    + "0.3030321,3302.592,4.952212,7392598.0,89.96434,0.6971044,,fully_convective,,,0.0,0.0,0.3,"
+                    + "179.0309,4,schwarzschild,1.0,546.1234",
+            "p0-z00-m000-a01,0.3,0.02,0.28,1.8,0.0,0.06,main_sequence,ok,,0.009505466,"
+                    + "0.2980587,3301.178,4.966585,7497948.0,94.21271,0.699315,,fully_convective,,,0.0,0.0,0.3,"
+                    + "185.4432,72,schwarzschild,1.0,706.9609",
+            "p0-z00-m001-a00,1.0,0.02,0.28,1.8,0.0,0.0,main_sequence,ok,,0.7289041,0.9117275,"
+                    + "5585.495,4.518338,1.34996e+07,81.93622,0.6993801,,conv_envelope,,,0.9758374,0.7312461,"
+                    + "0.02416264,25.6643,25,schwarzschild,1.0,38.70942",
+            "p0-z00-m001-a01,1.0,0.02,0.28,1.8,0.0,0.06,main_sequence,ok,,0.7314742,"
+                    + "0.9128273,5587.043,4.51729,1.351793e+07,82.43074,0.6950223,,conv_envelope,,,0.9759095,"
+                    + "0.7312429,0.02409053,25.6272,56,schwarzschild,1.0,38.63376");
 
     @TempDir
     Path dir;
