@@ -44,6 +44,8 @@ public final class StartModelBuilder {
     public static final double CENTRAL_TEMPERATURE_TOLERANCE = 0.01;
     /** Corrections of the contraction rate allowed. */
     public static final int RATE_BUDGET = 12;
+    /** Times a correction of the contraction rate whose relaxation fails is halved before the start is refused. */
+    public static final int RATE_STEP_HALVINGS = 3;
     /** Newton budget of each relaxation. */
     public static final int RELAXATION_BUDGET = 80;
     /** Above this mass (g) the start's central temperature grows in proportion to the mass. */
@@ -52,6 +54,8 @@ public final class StartModelBuilder {
     public static final double ANCHOR_MASS = Constants.M_SUN;
     /** Largest mass ratio of one step of that walk. */
     public static final double MASS_WALK_FACTOR = 1.5;
+    /** Times a failed step of that walk is split in two (in ln M) before the start model is refused. */
+    public static final int WALK_HALVINGS = 3;
     /** Remesh-and-relax passes per contraction rate. */
     public static final int MAX_REMESH_PASSES = 3;
     /** Largest ln step per Newton iteration. */
@@ -110,9 +114,26 @@ public final class StartModelBuilder {
             // directly while 1 Msun converged)
             double nearer = Math.abs(Math.log(ratio)) <= Math.log(MASS_WALK_FACTOR) ? ANCHOR_MASS
                     : mass / Math.pow(MASS_WALK_FACTOR, Math.signum(Math.log(ratio)));
-            StartModel from = build(nearer, birth);
+            return walked(build(nearer, birth), mass, WALK_HALVINGS);
+        }
+    }
+
+    /**
+     * The start model of {@code mass} (g) from that of a nearby mass by homology; when that fails, through the
+     * geometric mid-mass first, at most {@code halvings} times (at Z = 1e-4 the step 6.7 -> 10 Msun fails in the
+     * outer layers' density and temperature while 6.7 -> 8.2 -> 9.0 -> 9.5 -> 10 relaxes, with halved rate corrections).
+     */
+    private StartModel walked(StartModel from, double mass, int halvings) {
+        double target = centralTemperature(mass);
+        try {
             return converged(homologous(from.model().state(), mass, target), homologousRate(from, mass, target),
                     target, from.iterations(), false);
+        } catch (ConvgridException failed) {
+            if (halvings == 0) {
+                throw failed;
+            }
+            StartModel mid = walked(from, Math.sqrt(from.model().mass() * mass), halvings - 1);
+            return walked(mid, mass, halvings - 1);
         }
     }
 
@@ -146,7 +167,10 @@ public final class StartModelBuilder {
 
     /**
      * Relaxes from {@code start} (with the relaxation aid first when it is the polytrope, {@code rough}), correcting
-     * the contraction rate until T_c is on target.
+     * the contraction rate until T_c is on target. Off the polytrope (a walked start), a correction whose relaxation
+     * fails is halved, up to {@link #RATE_STEP_HALVINGS} times: the homologous guess misses T_c by up to e^0.5 near
+     * 10 Msun, and the full correction (x up to e^1.6 at once) fails in the outer layers; from the polytrope a
+     * failure goes on to the walk as before.
      */
     private StartModel converged(ModelState start, double firstRate, double target, int alreadySpent,
                                  boolean rough) {
@@ -169,8 +193,19 @@ public final class StartModelBuilder {
             }
             prevLnX = lnX;
             prevMiss = miss;
-            lnX -= Math.max(-3.0, Math.min(3.0, miss / slope));
-            model = relaxed(solver, model.state(), Math.exp(lnX), spent);
+            double step = Math.max(-3.0, Math.min(3.0, miss / slope));
+            for (int halving = 0; ; halving++) {
+                try {
+                    model = relaxed(solver, model.state(), Math.exp(lnX - step), spent);
+                    break;
+                } catch (SolveFailedException failed) {
+                    if (rough || halving == RATE_STEP_HALVINGS) {
+                        throw failed;
+                    }
+                    step *= 0.5;
+                }
+            }
+            lnX -= step;
         }
         double mass = start.mesh().totalMass();
         throw new ConvgridException(ErrorKind.NOT_CONVERGED, String.format(

@@ -34,7 +34,30 @@ class StartModelTest {
         assertStartModels(1.0e-4, 0.3, 1.0);
     }
 
+    @Test
+    void metalPoorTenSolarMassesIsWalkedInShorterStepsWhereAStepFails() {
+        // Z = 1e-4, 10 Msun: neither path from the polytrope relaxes, nor the walk's step 6.7 -> 10 Msun (nor its
+        // full contraction-rate corrections); split steps 6.7 -> 8.2 -> 9.0 -> 9.5 -> 10 with halved corrections
+        // do. It is hotter than the Hayashi line at Z = 0.02 (measured Teff 5095 K; the line moves to higher Teff at
+        // higher mass and lower metallicity, from memory) and not fully convective: at this low metal opacity the
+        // interior is radiative, the convective envelope reaching down to m/M = 0.972 (measured); so the star is more
+        // centrally condensed than an n = 1.5 polytrope, and its virial luminosity lies towards that of n = 3,
+        // L = (3/4) x G M^2 / R, 7/4 of the n = 1.5 one (Chandrasekhar 1939, ch. IV; measured 1.60)
+        assertStartModelsWith(1.0e-4, 5500.0, 0.972, 1.4, 1.75, 10.0);
+    }
+
     private static void assertStartModels(double z, double... masses) {
+        assertStartModelsWith(z, 5000.0, 0.0, 0.7, 1.4, masses);
+    }
+
+    /**
+     * @param hottest the largest Teff accepted, K
+     * @param zoneBase mass fraction at the base of the one convective zone: 0 for a fully convective star
+     * @param virialLow smallest L / ((3/7) x G M^2 / R) accepted
+     * @param virialHigh largest one
+     */
+    private static void assertStartModelsWith(double z, double hottest, double zoneBase, double virialLow,
+                                              double virialHigh, double... masses) {
         PhysicsSet physics = BirthTracks.physics(z);
         StartModelBuilder builder = new StartModelBuilder(physics);
         for (double m : masses) {
@@ -42,19 +65,24 @@ class StartModelTest {
             var g = s.model().global();
             assertThat(Math.log(g.centralTemperature() / builder.centralTemperature(m * Constants.M_SUN)))
                     .isCloseTo(0.0, within(StartModelBuilder.CENTRAL_TEMPERATURE_TOLERANCE));
-            // one convective zone from the centre through the star (above it only the radiative atmosphere)
+            // one convective zone from the centre (or zoneBase) through the star (above it only the radiative
+            // atmosphere)
             var zones = s.model().convection().zones();
             assertThat(zones).hasSize(1);
-            assertThat(zones.get(0).innerMassFraction()).isZero();
+            if (zoneBase == 0.0) {
+                assertThat(zones.get(0).innerMassFraction()).isZero();
+            } else {
+                assertThat(zones.get(0).innerMassFraction()).isCloseTo(zoneBase, within(0.01));
+            }
             assertThat(zones.get(0).outerMassFraction()).isGreaterThan(0.999);
             // high on the Hayashi track: Teff of a few 1000 K (Hayashi 1961, PASJ 13, 450), no nuclear burning
-            assertThat(g.effectiveTemperature()).isBetween(2800.0, 5000.0);
+            assertThat(g.effectiveTemperature()).isBetween(2800.0, hottest);
             assertThat(NuclearLuminosity.fraction(s.model())).isLessThan(1.0e-3);
             // the virial theorem for an n = 1.5 polytrope, L = (3/7) x G M^2 / R (Chandrasekhar 1939, ch. IV),
             // holds to the departures from an ideal-gas polytrope (ionisation zones, the surface layers)
             double virial = 3.0 / 7.0 * s.contractionRate() * Constants.G * Math.pow(m * Constants.M_SUN, 2)
                     / g.radius();
-            assertThat(g.luminosity() / virial).isBetween(0.7, 1.4);
+            assertThat(g.luminosity() / virial).isBetween(virialLow, virialHigh);
         }
     }
 
