@@ -36,6 +36,14 @@ public final class ChargedParticleRate {
             * (Constants.MEV * 1.0e-24) * Constants.N_A / Constants.M_U
             / (Math.PI * FINE_STRUCTURE * Constants.C);
 
+    /**
+     * Below this exponent (screening minus tau) the rate is taken as zero: e^-708 is the smallest exponential in the
+     * normal range of a double, and the rates it gives (below ~1e-290 cm^3 mol^-1 s^-1, e.g. 3He + 3He at 5000 K)
+     * are hundreds of orders of magnitude below any rate that matters, while arithmetic on the subnormal numbers
+     * they produce downstream is some hundred times slower than on normal ones.
+     */
+    static final double MIN_EXPONENT = -708.0;
+
     private final String name;
     private final int z1;
     private final int z2;
@@ -90,7 +98,8 @@ public final class ChargedParticleRate {
      */
     public double rate(double t9, double cbrtT9, double screeningExponent) {
         double tau = tauCoefficient / cbrtT9;
-        return prefactor * correction(tau, t9) * tau * tau * Math.exp(screeningExponent - tau);
+        double exponent = screeningExponent - tau;
+        return exponent < MIN_EXPONENT ? 0.0 : prefactor * correction(tau, t9) * tau * tau * Math.exp(exponent);
     }
 
     /** d ln(N_A&lt;sigma v&gt;)/d ln T at the given temperature (same arguments as {@link #rate}). */
@@ -103,6 +112,23 @@ public final class ChargedParticleRate {
                 + slope * (2.0 / 3.0 * e0 + 35.0 * kt / 36.0)
                 + halfCurvature * (4.0 / 3.0 * e0 * e0 + 5.0 / 3.0 * 89.0 * e0 * kt / 36.0);
         return (tau - 2.0) / 3.0 + dBracket / correction(tau, t9);
+    }
+
+    /**
+     * {@link #rate(double, double, double)} into {@code out[0]} and {@link #dlnRateDlnT} into {@code out[1]}, with
+     * tau and the S-factor bracket evaluated once (the same expressions, so the same values to the last bit).
+     */
+    public void rateAndSlope(double t9, double cbrtT9, double screeningExponent, double[] out) {
+        double tau = tauCoefficient / cbrtT9;
+        double bracket = correction(tau, t9);
+        double exponent = screeningExponent - tau;
+        out[0] = exponent < MIN_EXPONENT ? 0.0 : prefactor * bracket * tau * tau * Math.exp(exponent);
+        double kt = KT_MEV_AT_T9 * t9;
+        double e0 = tau * kt / 3.0;
+        double dBracket = 5.0 / (36.0 * tau)
+                + slope * (2.0 / 3.0 * e0 + 35.0 * kt / 36.0)
+                + halfCurvature * (4.0 / 3.0 * e0 * e0 + 5.0 / 3.0 * 89.0 * e0 * kt / 36.0);
+        out[1] = (tau - 2.0) / 3.0 + dBracket / bracket;
     }
 
     /** S_eff/S(0), the bracket of Fowler, Caughlan &amp; Zimmerman 1967. */

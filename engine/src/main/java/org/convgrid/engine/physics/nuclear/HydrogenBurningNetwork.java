@@ -27,7 +27,8 @@ import org.convgrid.engine.units.Constants;
  * <p>{@link #burn} is instantaneous: with X(3He) = 0 the pp chains release only the 6.67 MeV of the first step
  * per p+p reaction, about half of the equilibrium value, which is the physically correct rate for such a
  * composition. Structure models of a given age should therefore pass the evolved 3He, and zero-age models the
- * output of {@link #equilibrium}. Allocation: one {@link PlasmaState} and the result record per call.
+ * output of {@link #equilibrium}. Allocation: one {@link PlasmaState}, a three-element work array and the result
+ * record per call.
  */
 public final class HydrogenBurningNetwork implements NuclearNetwork {
 
@@ -81,23 +82,71 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
         double y14 = composition.n14() / 14.0;
         double y16 = composition.o16() / 16.0;
 
+        // Each reaction once: its screened rate, d ln/d ln T and the screening's d ln/d ln rho (the unscreened
+        // rate does not depend on density), so that the screening and the S-factor bracket are evaluated once.
+        double[] work = new double[3];
+        reaction(SolarFusionRates.PP, t9, cbrtT9, plasma, work);
+        double l11 = work[0];
+        double t11 = work[1];
+        double d11 = work[2];
+        reaction(SolarFusionRates.HE3_HE3, t9, cbrtT9, plasma, work);
+        double l33 = work[0];
+        double t33 = work[1];
+        double d33 = work[2];
+        reaction(SolarFusionRates.HE3_HE4, t9, cbrtT9, plasma, work);
+        double l34 = work[0];
+        double t34 = work[1];
+        double d34 = work[2];
+        reaction(SolarFusionRates.C12_P, t9, cbrtT9, plasma, work);
+        double l12 = work[0];
+        double t12 = work[1];
+        double d12 = work[2];
+        reaction(SolarFusionRates.N14_P, t9, cbrtT9, plasma, work);
+        double l14 = work[0];
+        double t14 = work[1];
+        double d14 = work[2];
+        reaction(SolarFusionRates.O16_P, t9, cbrtT9, plasma, work);
+        double l16 = work[0];
+        double t16 = work[1];
+        double d16 = work[2];
+        reaction(SolarFusionRates.BE7_P, t9, cbrtT9, plasma, work);
+        double l17 = work[0];
+        double t17 = work[1];
+        double d17 = work[2];
+
         // Reactions per gram per second, in moles: rho Y_j Y_k N_A<sv> / (1 + delta_jk).
-        double r11 = 0.5 * density * y1 * y1 * screened(SolarFusionRates.PP, t9, cbrtT9, plasma);
-        double r33 = 0.5 * density * y3 * y3 * screened(SolarFusionRates.HE3_HE3, t9, cbrtT9, plasma);
-        double r34 = density * y3 * y4 * screened(SolarFusionRates.HE3_HE4, t9, cbrtT9, plasma);
-        double r12 = density * y1 * y12 * screened(SolarFusionRates.C12_P, t9, cbrtT9, plasma);
-        double r14 = density * y1 * y14 * screened(SolarFusionRates.N14_P, t9, cbrtT9, plasma);
-        double r16 = density * y1 * y16 * screened(SolarFusionRates.O16_P, t9, cbrtT9, plasma);
+        double r11 = 0.5 * density * y1 * y1 * l11;
+        double r33 = 0.5 * density * y3 * y3 * l33;
+        double r34 = density * y3 * y4 * l34;
+        double r12 = density * y1 * y12 * l12;
+        double r14 = density * y1 * y14 * l14;
+        double r16 = density * y1 * y16 * l16;
         // initial deuterium and 7Li; skipped when absent (main-sequence compositions) to keep those burns as cheap
         double y2 = composition.h2() / 2.0;
         double y7 = composition.li7() / 7.0;
-        double r2 = y2 > 0.0 ? density * y1 * y2 * screened(SolarFusionRates.D_P, t9, cbrtT9, plasma) : 0.0;
-        double r7 = y7 > 0.0 ? density * y1 * y7 * screened(SolarFusionRates.LI7_P, t9, cbrtT9, plasma) : 0.0;
+        double r2 = 0.0;
+        double t2 = 0.0;
+        double d2 = 0.0;
+        if (y2 > 0.0) {
+            reaction(SolarFusionRates.D_P, t9, cbrtT9, plasma, work);
+            r2 = density * y1 * y2 * work[0];
+            t2 = work[1];
+            d2 = work[2];
+        }
+        double r7 = 0.0;
+        double t7 = 0.0;
+        double d7 = 0.0;
+        if (y7 > 0.0) {
+            reaction(SolarFusionRates.LI7_P, t9, cbrtT9, plasma, work);
+            r7 = density * y1 * y7 * work[0];
+            t7 = work[1];
+            d7 = work[2];
+        }
 
         // 7Be: electron capture (PP-II) against proton capture (PP-III).
         double t6 = temperature * 1.0e-6;
         double capture = BerylliumCapture.rate(density, electronsPerBaryon(composition), t6);
-        double protonCapture = density * y1 * screened(SolarFusionRates.BE7_P, t9, cbrtT9, plasma);
+        double protonCapture = density * y1 * l17;
         double sum7 = capture + protonCapture;
         double pp2 = sum7 > 0.0 ? capture / sum7 : 1.0;
         double q34 = pp2 * ReactionEnergy.PP2_BRANCH + (1.0 - pp2) * ReactionEnergy.PP3_BRANCH;
@@ -117,24 +166,15 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
         // d eps/d ln x = sum e_k dln r_k/dln x + (energy of the 7Be branch shift).
         double branchWeight = MEV_PER_MOLE * r34 * (ReactionEnergy.PP2_BRANCH - ReactionEnergy.PP3_BRANCH)
                 * pp2 * (1.0 - pp2);
-        double dEpsDlnT = e11 * dlnT(SolarFusionRates.PP, t9, cbrtT9, plasma)
-                + e33 * dlnT(SolarFusionRates.HE3_HE3, t9, cbrtT9, plasma)
-                + e34 * dlnT(SolarFusionRates.HE3_HE4, t9, cbrtT9, plasma)
-                + e12 * dlnT(SolarFusionRates.C12_P, t9, cbrtT9, plasma)
-                + e14 * dlnT(SolarFusionRates.N14_P, t9, cbrtT9, plasma)
-                + e16 * dlnT(SolarFusionRates.O16_P, t9, cbrtT9, plasma)
-                + branchWeight * (BerylliumCapture.dlnRateDlnT(t6) - dlnT(SolarFusionRates.BE7_P, t9, cbrtT9, plasma))
-                + (r2 > 0.0 ? e2 * dlnT(SolarFusionRates.D_P, t9, cbrtT9, plasma) : 0.0)
-                + (r7 > 0.0 ? e7 * dlnT(SolarFusionRates.LI7_P, t9, cbrtT9, plasma) : 0.0);
-        double dEpsDlnRho = e11 * (1.0 + dlnRho(SolarFusionRates.PP, plasma))
-                + e33 * (1.0 + dlnRho(SolarFusionRates.HE3_HE3, plasma))
-                + e34 * (1.0 + dlnRho(SolarFusionRates.HE3_HE4, plasma))
-                + e12 * (1.0 + dlnRho(SolarFusionRates.C12_P, plasma))
-                + e14 * (1.0 + dlnRho(SolarFusionRates.N14_P, plasma))
-                + e16 * (1.0 + dlnRho(SolarFusionRates.O16_P, plasma))
-                - branchWeight * dlnRho(SolarFusionRates.BE7_P, plasma)
-                + e2 * (1.0 + dlnRho(SolarFusionRates.D_P, plasma))
-                + e7 * (1.0 + dlnRho(SolarFusionRates.LI7_P, plasma));
+        double dEpsDlnT = e11 * t11 + e33 * t33 + e34 * t34 + e12 * t12 + e14 * t14 + e16 * t16
+                + branchWeight * (BerylliumCapture.dlnRateDlnT(t6) - t17)
+                + (r2 > 0.0 ? e2 * t2 : 0.0)
+                + (r7 > 0.0 ? e7 * t7 : 0.0);
+        double dEpsDlnRho = e11 * (1.0 + d11) + e33 * (1.0 + d33) + e34 * (1.0 + d34) + e12 * (1.0 + d12)
+                + e14 * (1.0 + d14) + e16 * (1.0 + d16)
+                - branchWeight * d17
+                + e2 * (1.0 + d2)
+                + e7 * (1.0 + d7);
 
         double cno = r12 + r14 + r16;
         double dy1 = -3.0 * r11 + 2.0 * r33 - r34 - 2.0 * cno - r2 - r7;
@@ -144,6 +184,17 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
                 eps > 0.0 ? dEpsDlnRho / eps : 0.0, eps > 0.0 ? dEpsDlnT / eps : 0.0,
                 dy1, 3.0 * dy3, 4.0 * dy4, 12.0 * (r14 - r12), 14.0 * (r12 - r14 + r16), -16.0 * r16,
                 -2.0 * r2, -7.0 * r7);
+    }
+
+    /**
+     * One reaction at this point into work: [0] the screened N_A&lt;sigma v&gt;, [1] its d ln/d ln T (rate and
+     * screening), [2] its d ln/d ln rho (the screening's alone).
+     */
+    private void reaction(ChargedParticleRate rate, double t9, double cbrtT9, PlasmaState plasma, double[] work) {
+        screening.exponentAndSlopes(rate.z1(), rate.z2(), plasma, work);
+        double screeningT = work[1];
+        rate.rateAndSlope(t9, cbrtT9, work[0], work);
+        work[1] += screeningT;
     }
 
     /**
@@ -218,14 +269,6 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
 
     private double screened(ChargedParticleRate rate, double t9, double cbrtT9, PlasmaState plasma) {
         return rate.rate(t9, cbrtT9, screening.exponent(rate.z1(), rate.z2(), plasma));
-    }
-
-    private double dlnT(ChargedParticleRate rate, double t9, double cbrtT9, PlasmaState plasma) {
-        return rate.dlnRateDlnT(t9, cbrtT9) + screening.dExponentDlnT(rate.z1(), rate.z2(), plasma);
-    }
-
-    private double dlnRho(ChargedParticleRate rate, PlasmaState plasma) {
-        return screening.dExponentDlnRho(rate.z1(), rate.z2(), plasma);
     }
 
     private static void checkState(double density, double temperature) {

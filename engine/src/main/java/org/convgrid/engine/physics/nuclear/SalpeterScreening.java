@@ -68,6 +68,25 @@ public final class SalpeterScreening implements Screening {
         return derivative(z1, z2, plasma, 0.5, 1.0 / 3.0);
     }
 
+    /** The three with one blend of the two limits (the same expressions, so the same values to the last bit). */
+    @Override
+    public void exponentAndSlopes(int z1, int z2, PlasmaState plasma, double[] out) {
+        double weak = weakExponent(z1, z2, plasma);
+        double strong = strongExponent(z1, z2, plasma);
+        if (!(weak > 0.0 && strong > 0.0)) {
+            out[0] = 0.0;
+            out[1] = 0.0;
+            out[2] = 0.0;
+            return;
+        }
+        double h = blend(weak, strong);
+        double r = h / weak;
+        double w = r * r * r * r;
+        out[0] = h;
+        out[1] = h * (w * -1.5 + (1.0 - w) * -1.0);
+        out[2] = h * (w * 0.5 + (1.0 - w) * (1.0 / 3.0));
+    }
+
     private static double derivative(int z1, int z2, PlasmaState plasma, double weakPower, double strongPower) {
         double weak = weakExponent(z1, z2, plasma);
         double strong = strongExponent(z1, z2, plasma);

@@ -19,4 +19,15 @@ public interface Screening {
 
     /** dH/d ln rho at fixed temperature. */
     double dExponentDlnRho(int z1, int z2, PlasmaState plasma);
+
+    /**
+     * H, dH/d ln T and dH/d ln rho of the pair into {@code out[0..2]}, the same values as {@link #exponent},
+     * {@link #dExponentDlnT} and {@link #dExponentDlnRho}: a network that needs all three calls this once per
+     * reaction, so that an implementation can share the work between them.
+     */
+    default void exponentAndSlopes(int z1, int z2, PlasmaState plasma, double[] out) {
+        out[0] = exponent(z1, z2, plasma);
+        out[1] = dExponentDlnT(z1, z2, plasma);
+        out[2] = dExponentDlnRho(z1, z2, plasma);
+    }
 }
