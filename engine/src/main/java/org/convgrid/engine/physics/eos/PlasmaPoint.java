@@ -42,6 +42,8 @@ final class PlasmaPoint {
     static final double LN_CLIP = 350.0;
     private static final double CLIP_LOW = Math.exp(-LN_CLIP);
     private static final double CLIP_HIGH = Math.exp(LN_CLIP);
+    private static final double LN_HALF = Math.log(0.5);
+    private static final double LN_TWO = Math.log(2.0);
 
     private final PlasmaElements el;
     private final boolean pressureIonisation;
@@ -151,6 +153,9 @@ final class PlasmaPoint {
         density = rho;
         temperature = t;
         kT = Constants.K_B * t;
+        if (coulomb) {
+            coulombTerm.prepare(rho, kT, nuclei);
+        }
         double nucleusDensity = pressureIonisation ? rho * nuclei / Constants.M_U : 0.0;
         xiH = el.hydrogenVolume * nucleusDensity;
         xiHe0 = el.heliumVolume0 * nucleusDensity;
@@ -162,7 +167,7 @@ final class PlasmaPoint {
         // hx >= 0.158 below MAX_TEMPERATURE, so 1 - e^-hx loses no digits
         double hOpen = 1.0 - hDecay;
         double hBound = hOpen - hx * hDecay;
-        kH = expK(Math.log(0.5) - hx - Math.log(hBound) + xiH);
+        kH = expK(LN_HALF - hx - Math.log(hBound) + xiH);
         hydrogenEnergy = el.hydrogenChi * hOpen / hBound;
         hydrogenEnergyT = -el.hydrogenChi * hx * hDecay * (hBound - hx * hOpen) / (hBound * hBound);
         // H2: each molecule excludes twice the atom's volume, so the occupation factors cancel in K_H2. Skipped in
@@ -175,8 +180,8 @@ final class PlasmaPoint {
                     - MolecularHydrogen.DISSOCIATION_ENERGY_EV * Constants.EV;
             moleculeEnergyT = MolecularHydrogen.switchedInternalEnergySlope(t);
         }
-        kHe0 = expK(Math.log(2.0) - el.heliumChi0 / kT + xiHe0 - xiHe1);
-        kHe1 = expK(Math.log(0.5) - el.heliumChi1 / kT + xiHe1);
+        kHe0 = expK(LN_TWO - el.heliumChi0 / kT + xiHe0 - xiHe1);
+        kHe1 = expK(LN_HALF - el.heliumChi1 / kT + xiHe1);
         for (int m = 0; m < el.metalCount; m++) {
             xiNeutral[m] = el.neutralVolume[m] * nucleusDensity;
             xiInner[m] = el.innerVolume[m] * nucleusDensity;
@@ -287,6 +292,7 @@ final class PlasmaPoint {
         double perMass = kT / Constants.M_U;
         double betaChi = 1.0 / kT;
         CoulombTerm c = coulombTerm;
+        c.completeState();
         double x = ratio(eta);
         double lxEta = -(1.0 + c.shiftEta);
         double lxRho = -c.shiftRho;
