@@ -38,11 +38,28 @@ public final class FermiDirac {
     /** Trapezoid step as a fraction of the pole distance from the real t axis (error ~exp(-2 pi / fraction)). */
     private static final double STEP_PER_POLE_DISTANCE = 1.0 / 6.0;
 
+    /** Most terms of the alternating series. */
+    private static final int SERIES_TERMS = 400;
+    /**
+     * n^(-1/2), n^(-3/2), n^(-5/2), n^(1/2) and n^(3/2) for n = 1..{@value #SERIES_TERMS}: the powers of the
+     * series with slopes, so that a term costs multiplications only (its square roots and divisions were most of
+     * the cost of the equation of state in cool, non-degenerate gas).
+     */
+    private static final double[][] SERIES_POWERS = new double[5][SERIES_TERMS + 1];
+
     /** values[k][i] and slopes[k][i] for k = 0, 1, 2 (orders -1/2, 1/2, 3/2) at eta_i. */
     private static final double[][] VALUES = new double[3][NODES];
     private static final double[][] SLOPES = new double[3][NODES];
 
     static {
+        for (int n = 1; n <= SERIES_TERMS; n++) {
+            double root = Math.sqrt(n);
+            SERIES_POWERS[0][n] = 1.0 / root;
+            SERIES_POWERS[1][n] = 1.0 / (n * root);
+            SERIES_POWERS[2][n] = 1.0 / (n * (double) n * root);
+            SERIES_POWERS[3][n] = root;
+            SERIES_POWERS[4][n] = n * root;
+        }
         double[] f = new double[4];
         for (int i = 0; i < NODES; i++) {
             quadrature(TABLE_MIN + i * TABLE_STEP, f);
@@ -129,7 +146,7 @@ public final class FermiDirac {
 
     /**
      * The alternating series of {@link #series} for all three orders and the first two derivatives of F_{-1/2}
-     * with one exponential: the powers n^(k+1) are built from sqrt(n) instead of pow, and the sum stops when the
+     * with one exponential: the powers n^(k+1) come from a table built once, and the sum stops when the
      * fastest-growing term (n^(3/2) z^n, of the second derivative) falls below 1e-17 of its sum.
      */
     private static void seriesWithSlopes(double eta, double[] out) {
@@ -140,17 +157,16 @@ public final class FermiDirac {
         double d1 = 0.0;
         double d2 = 0.0;
         double power = 1.0;
-        for (int n = 1; n <= 400; n++) {
+        for (int n = 1; n <= SERIES_TERMS; n++) {
             power *= z;
-            double root = Math.sqrt(n);
             double sign = (n % 2 == 1) ? power : -power;
-            s0 += sign / root;
-            s1 += sign / (n * root);
-            s2 += sign / (n * (double) n * root);
-            d1 += sign * root;
-            double fastest = sign * n * root;
+            s0 += sign * SERIES_POWERS[0][n];
+            s1 += sign * SERIES_POWERS[1][n];
+            s2 += sign * SERIES_POWERS[2][n];
+            d1 += sign * SERIES_POWERS[3][n];
+            double fastest = sign * SERIES_POWERS[4][n];
             d2 += fastest;
-            if (power * n * root < 1e-17 * d2) {
+            if (power * SERIES_POWERS[4][n] < 1e-17 * d2) {
                 break;
             }
         }

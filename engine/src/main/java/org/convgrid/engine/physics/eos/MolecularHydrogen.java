@@ -41,6 +41,8 @@ final class MolecularHydrogen {
 
     private static final double TRANSLATIONAL = Math.PI * ATOM_MASS * Constants.K_B / (Constants.H * Constants.H);
 
+    private static final double LN_FOUR = Math.log(4.0);
+
     private MolecularHydrogen() {
     }
 
@@ -48,8 +50,10 @@ final class MolecularHydrogen {
     static double lnDissociationConstant(double temperature) {
         double lnTranslational = 1.5 * Math.log(TRANSLATIONAL * temperature);
         double lnRot = Math.log(temperature / (2.0 * THETA_ROT));
-        double lnVib = -Math.log1p(-Math.exp(-THETA_VIB / temperature));
-        return lnTranslational + Math.log(4.0) - lnRot - lnVib
+        // ln(1 - e^-v) with v >= THETA_VIB/MAX_TEMPERATURE = 0.16: 1 - e^-v >= 0.15 loses no digits, so the
+        // intrinsic log serves (log1p is a native call on this JDK, several times slower)
+        double lnVib = -Math.log(1.0 - Math.exp(-THETA_VIB / temperature));
+        return lnTranslational + LN_FOUR - lnRot - lnVib
                 - DISSOCIATION_ENERGY_EV * Constants.EV / (Constants.K_B * temperature);
     }
 
@@ -60,8 +64,22 @@ final class MolecularHydrogen {
 
     /** Internal (rotation + vibration) energy of one molecule above its ground level, erg, ideal gas. */
     static double internalEnergy(double temperature) {
+        return internalEnergy(temperature, vibrationalShare(temperature));
+    }
+
+    /**
+     * v/(e^v - 1) with v = THETA_VIB/T, the vibrational term that the energy, its slope and the slope of the
+     * constant share: a caller that needs several of them computes it once and passes it on.
+     */
+    static double vibrationalShare(double temperature) {
         double v = THETA_VIB / temperature;
-        return Constants.K_B * temperature * (1.0 + v / Math.expm1(v));
+        // e^v - 1 with v >= 0.16 where the equation of state asks (below MAX_TEMPERATURE): no digits lost that
+        // matter, and the intrinsic exp is several times cheaper than the native expm1 of this JDK
+        return v / (Math.exp(v) - 1.0);
+    }
+
+    private static double internalEnergy(double temperature, double share) {
+        return Constants.K_B * temperature * (1.0 + share);
     }
 
     /**
@@ -70,8 +88,12 @@ final class MolecularHydrogen {
      * {@link #switchedInternalEnergy} - D0 (van 't Hoff: the reaction energy of H2 = 2 H at fixed volume).
      */
     static double lnSwitchedConstantSlope(double temperature) {
-        double v = THETA_VIB / temperature;
-        return 0.5 - v / Math.expm1(v) + DISSOCIATION_ENERGY_EV * Constants.EV / (Constants.K_B * temperature)
+        return lnSwitchedConstantSlope(temperature, vibrationalShare(temperature));
+    }
+
+    /** As {@link #lnSwitchedConstantSlope(double)}, with {@link #vibrationalShare} already known. */
+    static double lnSwitchedConstantSlope(double temperature, double share) {
+        return 0.5 - share + DISSOCIATION_ENERGY_EV * Constants.EV / (Constants.K_B * temperature)
                 + 4.0 * switchExponent(temperature);
     }
 
@@ -80,14 +102,23 @@ final class MolecularHydrogen {
      * (rotation, the harmonic-oscillator heat capacity, and the switch-off term).
      */
     static double switchedInternalEnergySlope(double temperature) {
+        return switchedInternalEnergySlope(temperature, vibrationalShare(temperature));
+    }
+
+    /** As {@link #switchedInternalEnergySlope(double)}, with {@link #vibrationalShare} already known. */
+    static double switchedInternalEnergySlope(double temperature, double share) {
         double v = THETA_VIB / temperature;
-        double q = v / Math.expm1(v);
-        return Constants.K_B * temperature * (1.0 + q * q * Math.exp(v) - 20.0 * switchExponent(temperature));
+        return Constants.K_B * temperature * (1.0 + share * share * Math.exp(v) - 20.0 * switchExponent(temperature));
     }
 
     /** Internal energy including the switch-off term kT T dlnS/dT = -4 kT (T/T_s)^4, erg. */
     static double switchedInternalEnergy(double temperature) {
-        return internalEnergy(temperature) - 4.0 * Constants.K_B * temperature * switchExponent(temperature);
+        return switchedInternalEnergy(temperature, vibrationalShare(temperature));
+    }
+
+    /** As {@link #switchedInternalEnergy(double)}, with {@link #vibrationalShare} already known. */
+    static double switchedInternalEnergy(double temperature, double share) {
+        return internalEnergy(temperature, share) - 4.0 * Constants.K_B * temperature * switchExponent(temperature);
     }
 
     private static double switchExponent(double temperature) {

@@ -108,6 +108,8 @@ final class PlasmaPoint {
     double pressureT;
     double energyEta;
     double energyT;
+    /** Radiation pressure a T^4/3, dyn cm^-2, set by {@link #evaluate}. */
+    double radiationPressure;
     /** Free heavy particles (nuclei, atoms, ions and molecules) per atomic mass unit, set by {@link #evaluate}. */
     double heavyParticles;
 
@@ -174,11 +176,12 @@ final class PlasmaPoint {
         // hot gas (the switch-off leaves no molecules there), which keeps the interior cost unchanged.
         pairing = 0.0;
         if (t < MolecularHydrogen.MAX_TEMPERATURE && abundance[0] > 0.0) {
+            double share = MolecularHydrogen.vibrationalShare(t);
             pairing = Math.exp(Math.log(rho * abundance[0] / Constants.M_U) - MolecularHydrogen.lnSwitchedConstant(t));
-            pairingT = -MolecularHydrogen.lnSwitchedConstantSlope(t);
-            moleculeEnergy = MolecularHydrogen.switchedInternalEnergy(t)
+            pairingT = -MolecularHydrogen.lnSwitchedConstantSlope(t, share);
+            moleculeEnergy = MolecularHydrogen.switchedInternalEnergy(t, share)
                     - MolecularHydrogen.DISSOCIATION_ENERGY_EV * Constants.EV;
-            moleculeEnergyT = MolecularHydrogen.switchedInternalEnergySlope(t);
+            moleculeEnergyT = MolecularHydrogen.switchedInternalEnergySlope(t, share);
         }
         kHe0 = expK(LN_TWO - el.heliumChi0 / kT + xiHe0 - xiHe1);
         kHe1 = expK(LN_HALF - el.heliumChi1 / kT + xiHe1);
@@ -424,7 +427,8 @@ final class PlasmaPoint {
         double heavy = nuclei - mol;
         heavyParticles = heavy;
         double ideal = rho * perMass * (heavy + ex);
-        pressure = ideal + electronPressure + aT4 / 3.0 + c.pressure;
+        radiationPressure = aT4 / 3.0;
+        pressure = ideal + electronPressure + radiationPressure + c.pressure;
         energy = 1.5 * perMass * heavy + 1.5 * electronPressure / rho + aT4 / rho + ion / Constants.M_U + c.energy
                 + mol * moleculeEnergy / Constants.M_U;
 
@@ -441,10 +445,6 @@ final class PlasmaPoint {
         residualT = 1.5 - yeT / ye;
     }
 
-    /** Radiation pressure a T^4/3 at the prepared temperature. */
-    double radiationPressure() {
-        return Constants.A_RAD * Math.pow(temperature, 4) / 3.0;
-    }
 
     /** x = e^(eta_ref - eta - mu_C/kT), clipped (see {@link #LN_CLIP}). */
     private double ratio(double eta) {

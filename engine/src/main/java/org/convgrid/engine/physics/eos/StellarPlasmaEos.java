@@ -231,14 +231,16 @@ public final class StellarPlasmaEos implements EquationOfState {
     /** The state of a solved point: partials at fixed eta combined by implicit differentiation of neutrality. */
     private static EosState state(PlasmaPoint p) {
         double pressure = p.pressure;
-        double dEtaDlnRho = -p.residualRho / p.residualSlope;
-        double dEtaDlnT = -p.residualT / p.residualSlope;
-        double chiRho = (p.pressureRho + p.pressureEta * dEtaDlnRho) / pressure;
-        double chiT = (p.pressureT + p.pressureEta * dEtaDlnT) / pressure;
+        double perPressure = 1.0 / pressure;
+        double perSlope = 1.0 / p.residualSlope;
+        double dEtaDlnRho = -p.residualRho * perSlope;
+        double dEtaDlnT = -p.residualT * perSlope;
+        double chiRho = (p.pressureRho + p.pressureEta * dEtaDlnRho) * perPressure;
+        double chiT = (p.pressureT + p.pressureEta * dEtaDlnT) * perPressure;
         double cv = (p.energyT + p.energyEta * dEtaDlnT) / p.temperature;
         return ThermoIdentities.complete(p.density, p.temperature, pressure, p.energy, chiRho, chiT, cv,
                 1.0 / (p.heavyParticles + p.electrons), p.electrons, p.lastEta,
-                (pressure - p.radiationPressure()) / pressure);
+                (pressure - p.radiationPressure) * perPressure);
     }
 
     /** Solves charge neutrality at (rho, T) from etaGuess and completes P, u and the partials at the root. */

@@ -28,10 +28,11 @@ final class ThermoIdentities {
                              double chiRho, double chiT, double cv, double mu, double electronsPerBaryon,
                              double eta, double beta) {
         double prt = pressure / (density * temperature);
-        double cp = cv + prt * chiT * chiT / chiRho;
-        double gamma1 = chiRho * cp / cv;
-        double nablaAd = prt * chiT / (cp * chiRho);
+        // delta = chi_T/chi_rho, so c_P = c_V + prt chi_T delta and nabla_ad = prt delta/c_P (fewer divisions)
         double delta = chiT / chiRho;
+        double cp = cv + prt * chiT * delta;
+        double gamma1 = chiRho * cp / cv;
+        double nablaAd = prt * delta / cp;
         return new EosState(density, temperature, pressure, internalEnergy, chiRho, chiT, cp, cv, gamma1, nablaAd,
                 delta, mu, electronsPerBaryon, eta, beta);
     }
