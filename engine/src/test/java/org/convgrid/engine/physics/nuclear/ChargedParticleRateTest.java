@@ -86,4 +86,28 @@ class ChargedParticleRateTest {
         assertThat(SolarFusionRates.N14_P.dlnRateDlnT(t9, Math.cbrt(t9))).isBetween(18.5, 20.5);
         assertThat(SolarFusionRates.N14_P.rate(1e-4, Math.cbrt(1e-4))).isLessThan(1e-100);
     }
+
+    @Test
+    void rateAndSlopeInOneCallAreTheSeparateValues() {
+        // the network's one-call form shares tau and the bracket: it must give exactly rate and dlnRateDlnT
+        double[] out = new double[2];
+        for (ChargedParticleRate r : ALL) {
+            for (double t9 : new double[] {0.002, 0.0157, 0.04}) {
+                double c = Math.cbrt(t9);
+                r.rateAndSlope(t9, c, 0.07, out);
+                assertThat(out[0]).as(r.name()).isEqualTo(r.rate(t9, c, 0.07));
+                assertThat(out[1]).as(r.name()).isEqualTo(r.dlnRateDlnT(t9, c));
+            }
+        }
+    }
+
+    @Test
+    void ratesWhoseExponentLiesBelowTheNormalRangeAreZero() {
+        // at 5000 K, 3He + 3He has tau ~ 718 (e^-718 is subnormal): zero; p + p (tau ~ 198) still answers
+        double t9 = 5.0e-6;
+        double c = Math.cbrt(t9);
+        assertThat(SolarFusionRates.HE3_HE3.tauCoefficient() / c).isGreaterThan(-ChargedParticleRate.MIN_EXPONENT);
+        assertThat(SolarFusionRates.HE3_HE3.rate(t9, c)).isZero();
+        assertThat(SolarFusionRates.PP.rate(t9, c)).isPositive();
+    }
 }

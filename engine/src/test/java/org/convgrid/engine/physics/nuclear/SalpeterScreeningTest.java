@@ -73,4 +73,21 @@ class SalpeterScreeningTest {
             }
         }
     }
+
+    @Test
+    void exponentAndSlopesInOneCallAreTheSeparateValues() {
+        // the network asks for all three at once; they must be exactly the three separate answers, in the weak,
+        // intermediate and strong regimes
+        double[] out = new double[3];
+        double[][] points = {{152.9, 1.567e7}, {300.0, 6.0e6}, {1.0e3, 1.0e6}};
+        for (double[] pt : points) {
+            PlasmaState p = NETWORK.plasma(pt[0], pt[1], Composition.scaledSolar(0.70, 0.0188));
+            for (int[] z : new int[][] {{1, 1}, {2, 2}, {7, 1}}) {
+                SCREENING.exponentAndSlopes(z[0], z[1], p, out);
+                assertThat(out[0]).isEqualTo(SCREENING.exponent(z[0], z[1], p));
+                assertThat(out[1]).isEqualTo(SCREENING.dExponentDlnT(z[0], z[1], p));
+                assertThat(out[2]).isEqualTo(SCREENING.dExponentDlnRho(z[0], z[1], p));
+            }
+        }
+    }
 }
