@@ -359,7 +359,7 @@ public final class MainSequenceEvolver {
                     remesh ? SemiconvectiveMixing.onMesh(previous.profile(), s, mesh) : s, dt);
             nablaMu = MuGradient.of(comp, start.lnPressure());
         }
-        GravothermalEnergy grav = GravothermalEnergy.since(start, physics.eos(), dt);
+        GravothermalEnergy grav = GravothermalEnergy.since(start, dt);
         ModelState guess = start.state().withCompositions(comp);
         if (sameMesh) {
             try {
