@@ -13,7 +13,9 @@ import org.convgrid.engine.error.ConvgridException;
  * {@link #REUSE_THRESHOLD} the following iterations reuse its factorised Jacobian (chord steps) for as long as
  * each correction shrinks by {@link #REUSE_CONTRACTION}; otherwise the Jacobian of the current state is taken and
  * the step redone. The relaxation stops when the largest undamped
- * correction is below {@link Settings#tolerance()} (the state after applying it is returned), or with a failed
+ * correction is below {@link Settings#tolerance()}, returning the state it was computed at, which lies within the
+ * tolerance of the solution and was the last one evaluated (so the system's scratch values describe it; applying
+ * the correction would cost one more evaluation for a change below the tolerance), or with a failed
  * {@link SolveReport} when the budget runs out. Stateless and thread-safe.
  */
 public final class HenyeySolver {
@@ -124,14 +126,17 @@ public final class HenyeySolver {
                 return new Result(y, new SolveReport(StopReason.BAD_STATE, iteration, largest, worst / nv,
                         worst % nv, "non-finite correction"));
             }
+            if (largest <= settings.tolerance()) {
+                // y is within the tolerance of the solution, and the last evaluation (residuals and the system's
+                // scratch values) was at y: return it as it is
+                return new Result(y, new SolveReport(StopReason.CONVERGED, iteration, largest, worst / nv,
+                        worst % nv, ""));
+            }
             double lambda = Math.min(1.0, settings.maxStep() / largest);
             double norm = sumOfSquares(residual);
             String rejection = null;
             boolean accepted = false;
             boolean searching = largest > settings.maxStep() * LINE_SEARCH_THRESHOLD;
-            // the state after a converged correction is returned without another factorisation: its residuals
-            // (and the system's scratch values) are needed, its Jacobian is not
-            boolean last = largest <= settings.tolerance();
             // near the solution the next step reuses this factorisation (chord, or modified Newton): the
             // Jacobian of the next state differs from this one by about the size of the correction
             boolean reuse = largest <= REUSE_THRESHOLD;
@@ -141,7 +146,7 @@ public final class HenyeySolver {
                     trial[i] = y[i] + lambda * delta[i];
                 }
                 // a rejected chord trial is retried with a Jacobian of its own
-                withJacobian = !last && !(reuse && cut == 0);
+                withJacobian = !(reuse && cut == 0);
                 if (withJacobian) {
                     jacobian.clear();
                 }
@@ -166,10 +171,6 @@ public final class HenyeySolver {
                         worst % nv, "every damped step was rejected: " + rejection));
             }
             System.arraycopy(trial, 0, y, 0, n);
-            if (last) {
-                return new Result(y, new SolveReport(StopReason.CONVERGED, iteration, largest, worst / nv,
-                        worst % nv, ""));
-            }
             fresh = withJacobian;
             previousLargest = largest;
         }
