@@ -1,8 +1,6 @@
 package org.convgrid.engine.evolution;
 
 import org.convgrid.engine.physics.eos.EosState;
-import org.convgrid.engine.physics.eos.EquationOfState;
-import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.ExtraEnergy;
 
 /**
@@ -46,19 +44,15 @@ final class GravothermalEnergy implements ExtraEnergy {
     }
 
     /** The release over dt since the state {@code start} describes (its density, temperature and composition). */
-    static GravothermalEnergy since(StepStart start, EquationOfState eos, double dt) {
+    static GravothermalEnergy since(StepStart start, double dt) {
         int n = start.state().size();
         double[] v = new double[n];
         double[] p = new double[n];
-        double[] u = new double[n];
         for (int k = 0; k < n; k++) {
-            Composition c = start.state().composition(k);
-            EosState s = eos.atDensity(start.density()[k], start.temperature()[k], c);
             v[k] = 1.0 / start.density()[k];
             p[k] = Math.exp(start.lnPressure()[k]);
-            u[k] = s.internalEnergy();
         }
-        return new GravothermalEnergy(v, p, u, dt);
+        return new GravothermalEnergy(v, p, start.internalEnergy(), dt);
     }
 
     @Override

@@ -3,6 +3,7 @@ package org.convgrid.engine.evolution;
 import java.util.Arrays;
 
 import org.convgrid.engine.physics.PhysicsSet;
+import org.convgrid.engine.physics.eos.EosState;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.MassMesh;
 import org.convgrid.engine.structure.MeshPlanner;
@@ -12,13 +13,15 @@ import org.convgrid.engine.structure.StellarProfile;
 
 /**
  * The previous model as a time step needs it, on the mesh the step will use: the state (starting guess), the
- * density, temperature and ln P of every point (for the network and for eps_grav) and which points are
- * convective (for mixing). Either the converged model itself, or the model moved onto a new mesh: structure
- * interpolated by {@link MeshPlanner}, composition remapped conservatively by {@link MassRemap}, pressure
- * recomputed from the interpolated density and temperature, convective flags from the nearest old point.
+ * density, temperature and ln P of every point (for the network and for eps_grav), its specific internal energy
+ * (for eps_grav) and which points are convective (for mixing). Either the converged model itself (P and u from the
+ * equation-of-state call of its last evaluation, so a step costs no call of its own), or the model moved onto a
+ * new mesh: structure interpolated by {@link MeshPlanner}, composition remapped conservatively by
+ * {@link MassRemap}, pressure and internal energy recomputed from the interpolated density and temperature,
+ * convective flags from the nearest old point.
  */
 record StepStart(ModelState state, double[] density, double[] temperature, double[] lnPressure,
-                 boolean[] convective) {
+                 double[] internalEnergy, boolean[] convective) {
 
     /** The model on its own mesh. */
     static StepStart of(StellarModel model) {
@@ -27,14 +30,16 @@ record StepStart(ModelState state, double[] density, double[] temperature, doubl
         double[] rho = new double[n];
         double[] t = new double[n];
         double[] lnP = new double[n];
+        double[] u = new double[n];
         boolean[] conv = new boolean[n];
         for (int k = 0; k < n; k++) {
             rho[k] = p.density(k);
             t[k] = p.temperature(k);
             lnP[k] = Math.log(p.pressure(k));
+            u[k] = p.internalEnergy(k);
             conv[k] = p.convective(k);
         }
-        return new StepStart(model.state(), rho, t, lnP, conv);
+        return new StepStart(model.state(), rho, t, lnP, u, conv);
     }
 
     /** The model moved onto the mesh {@code planner} chooses with the given extra interval costs. */
@@ -47,16 +52,19 @@ record StepStart(ModelState state, double[] density, double[] temperature, doubl
         double[] rho = new double[n];
         double[] t = new double[n];
         double[] lnP = new double[n];
+        double[] u = new double[n];
         boolean[] conv = new boolean[n];
         double[] oldMass = model.profile().masses();
         MassMesh mesh = moved.mesh();
         for (int k = 0; k < n; k++) {
             rho[k] = Math.exp(moved.lnDensity(k));
             t[k] = Math.exp(moved.lnTemperature(k));
-            lnP[k] = Math.log(physics.eos().atDensity(rho[k], t[k], comp[k]).pressure());
+            EosState s = physics.eos().atDensity(rho[k], t[k], comp[k]);
+            lnP[k] = Math.log(s.pressure());
+            u[k] = s.internalEnergy();
             conv[k] = model.profile().convective(nearest(oldMass, mesh.mass(k)));
         }
-        return new StepStart(moved, rho, t, lnP, conv);
+        return new StepStart(moved, rho, t, lnP, u, conv);
     }
 
     private static int nearest(double[] sorted, double value) {

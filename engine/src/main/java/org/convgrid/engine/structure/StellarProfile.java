@@ -26,6 +26,7 @@ public final class StellarProfile implements OvershootProfile {
     private final double[] convectiveVelocity;
     private final double[] scaleHeight;
     private final double[] hydrogen;
+    private final double[] internalEnergy;
 
     StellarProfile(StructureEquations eq, double[] y) {
         int n = eq.points();
@@ -46,6 +47,7 @@ public final class StellarProfile implements OvershootProfile {
         convectiveVelocity = new double[n];
         scaleHeight = new double[n];
         hydrogen = new double[n];
+        internalEnergy = new double[n];
         ModelState state = eq.state(y);
         for (int k = 0; k < n; k++) {
             EosState s = eq.eosAt(k);
@@ -66,6 +68,7 @@ public final class StellarProfile implements OvershootProfile {
             convectiveVelocity[k] = g == null ? 0.0 : g.velocity();
             scaleHeight[k] = s.pressure() * radius[k] * radius[k] / (s.density() * Constants.G * mass[k]);
             hydrogen[k] = state.composition(k).x();
+            internalEnergy[k] = s.internalEnergy();
         }
     }
 
@@ -96,6 +99,11 @@ public final class StellarProfile implements OvershootProfile {
     /** rho, g cm^-3. */
     public double density(int k) {
         return density[k];
+    }
+
+    /** Specific internal energy (ionisation energy included), erg g^-1, of the equation-of-state call that gave P. */
+    public double internalEnergy(int k) {
+        return internalEnergy[k];
     }
 
     /** L, erg s^-1. */

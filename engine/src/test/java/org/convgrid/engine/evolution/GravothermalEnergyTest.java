@@ -50,7 +50,7 @@ class GravothermalEnergyTest {
             comp[k] = network.advance(start.density()[k], start.temperature()[k], start.state().composition(k),
                     STEP);
         }
-        grav = GravothermalEnergy.since(start, physics.eos(), STEP);
+        grav = GravothermalEnergy.since(start, STEP);
         stepped = new StructureSolver(physics).relax(start.state().withCompositions(comp), grav, null,
                 HenyeySolver.Settings.DEFAULT);
     }

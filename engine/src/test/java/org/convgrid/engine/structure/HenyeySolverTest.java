@@ -2,6 +2,7 @@ package org.convgrid.engine.structure;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.catchThrowableOfType;
+import static org.assertj.core.api.Assertions.within;
 
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
@@ -56,5 +57,65 @@ class HenyeySolverTest {
 
         assertThat(e.report().reason()).isEqualTo(StopReason.BAD_STATE);
         assertThat(e.report().detail()).contains("no EOS here");
+    }
+
+    @Test
+    void nearTheSolutionTheFactorisedJacobianIsReusedAndTheSolutionIsTheSame() {
+        // an n = 1.5 polytrope relaxed once, then restarted from that solution shifted by 1e-4 in every unknown:
+        // the first correction is below the reuse threshold, so the later iterations are chord steps
+        int points = 400;
+        double n = 1.5;
+        double rhoC = 80.0;
+        PolytropicProfile profile = PolytropicProfile.of(LaneEmden.solve(n), points, 1.0e-9, 1.0e-6);
+        MassMesh mesh = profile.mesh(Constants.M_SUN);
+        PolytropeEquations eq = new PolytropeEquations(mesh, n, rhoC, rhoC * Math.pow(1.0e-6, n));
+        double alpha = Math.cbrt(Constants.M_SUN / (4 * Math.PI * rhoC * profile.massConstant()));
+        double lnK = Math.log(alpha * alpha * 4 * Math.PI * Constants.G / ((n + 1) * Math.pow(rhoC, 1 / n - 1)));
+        double[] y = new double[3 * points];
+        for (int k = 0; k < points; k++) {
+            y[3 * k] = Math.log(alpha * profile.xi(k));
+            y[3 * k + 1] = Math.log(rhoC * Math.pow(profile.theta(k), n));
+            y[3 * k + 2] = lnK;
+        }
+        HenyeySolver solver = new HenyeySolver();
+        double[] solution = solver.solve(eq, y, HenyeySolver.Settings.DEFAULT).solution();
+        double[] shifted = solution.clone();
+        for (int i = 0; i < shifted.length; i++) {
+            shifted[i] += 1.0e-4;
+        }
+        int[] evaluations = new int[2];
+        DifferenceSystem counting = new DifferenceSystem() {
+            @Override
+            public int points() {
+                return eq.points();
+            }
+
+            @Override
+            public int variables() {
+                return eq.variables();
+            }
+
+            @Override
+            public int centralConditions() {
+                return eq.centralConditions();
+            }
+
+            @Override
+            public void evaluate(double[] state, double[] residual, BandMatrix jacobian) {
+                evaluations[jacobian == null ? 0 : 1]++;
+                eq.evaluate(state, residual, jacobian);
+            }
+        };
+
+        HenyeySolver.Result again = solver.solve(counting, shifted, HenyeySolver.Settings.DEFAULT);
+
+        assertThat(again.report().converged()).as(again.report().toString()).isTrue();
+        // the start state's Jacobian only: every later evaluation was a chord step's, and the converged
+        // correction was not applied (no evaluation after it)
+        assertThat(evaluations[1]).isEqualTo(1);
+        assertThat(evaluations[0]).isEqualTo(again.report().iterations() - 1);
+        for (int i = 0; i < solution.length; i++) {
+            assertThat(again.solution()[i]).isCloseTo(solution[i], within(HenyeySolver.DEFAULT_TOLERANCE));
+        }
     }
 }
