@@ -26,6 +26,7 @@ final class LifeRecorder implements StepObserver {
     private double lastAge;
     private double lastFraction;
     private double lastLithium;
+    private double lastCentreExcess;
 
     /** @param coreThreshold m/M that the top of a central convective zone must exceed to count as a core */
     LifeRecorder(double coreThreshold) {
@@ -48,7 +49,11 @@ final class LifeRecorder implements StepObserver {
                 && zones.get(0).outerMassFraction() > coreThreshold;
         if (!rows.isEmpty()) {
             if (Double.isNaN(radiativeCore) && radiativeCentre) {
-                radiativeCore = age;
+                // the centre turns radiative when its nabla_rad falls below the stability limit: interpolated
+                // between the two models, so that the age does not depend on where the step happened to end
+                double excess = centreExcess(model);
+                radiativeCore = lastCentreExcess > 0.0 && excess <= 0.0
+                        ? crossing(lastAge, lastCentreExcess, age, excess, 0.0) : age;
             }
             if (Double.isNaN(zams) && fraction >= NuclearLuminosity.ZERO_AGE_FRACTION) {
                 zams = crossing(lastAge, lastFraction, age, fraction, NuclearLuminosity.ZERO_AGE_FRACTION);
@@ -73,6 +78,12 @@ final class LifeRecorder implements StepObserver {
         lastAge = age;
         lastFraction = fraction;
         lastLithium = lithium;
+        lastCentreExcess = centreExcess(model);
+    }
+
+    /** nabla_rad minus the stability limit at the centre (positive: convective). */
+    private static double centreExcess(StellarModel model) {
+        return model.profile().stabilityExcess(0);
     }
 
     /** The age at which a quantity going from a (at ageA) to b (at ageB) crosses {@code level}, linearly. */

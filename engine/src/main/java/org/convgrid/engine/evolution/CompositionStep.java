@@ -43,10 +43,40 @@ public final class CompositionStep {
     private static final int N = MassFractions.BURNING;
     private static final int HELIUM4 = 2;
 
+    /**
+     * Floor of the abundance against which {@link #withTraceLimit a trace limit} measures a change: a species
+     * building up from (almost) nothing is limited in absolute terms at this scale, not by ever smaller relative
+     * sub-steps.
+     */
+    public static final double TRACE_FLOOR = 1.0e-6;
+
     private final NuclearNetwork network;
+    private final double maxRelativeChange;
 
     public CompositionStep(NuclearNetwork network) {
+        this(network, Double.POSITIVE_INFINITY);
+    }
+
+    private CompositionStep(NuclearNetwork network, double maxRelativeChange) {
         this.network = network;
+        this.maxRelativeChange = maxRelativeChange;
+    }
+
+    /**
+     * The same network whose sub-steps also change no burning species by more than {@code maxRelativeChange} of
+     * its abundance (at least {@link #TRACE_FLOOR}). The absolute limit {@link #MAX_SUBSTEP_CHANGE} leaves the trace
+     * species (12C, 14N, 3He, a few 1e-3 and below) to one backward-Euler sub-step per step, first order in the
+     * step; out of equilibrium (the approach to the zero-age main sequence, where 12C burns and 3He builds up over
+     * the last contraction times) that error sets how the step converges. Bounding their relative change per
+     * sub-step makes it small at any step, at the price of more sub-steps where they are out of equilibrium.
+     *
+     * @param maxRelativeChange largest relative change of a species per sub-step, positive
+     */
+    public CompositionStep withTraceLimit(double maxRelativeChange) {
+        if (!(maxRelativeChange > 0.0)) {
+            throw new IllegalArgumentException("the relative change per sub-step must be positive");
+        }
+        return new CompositionStep(network, maxRelativeChange);
     }
 
     /**
@@ -196,7 +226,9 @@ public final class CompositionStep {
             }
             if (lambda == 1.0 && size <= NEWTON_TOLERANCE) {
                 for (int i = 0; i < N; i++) {
-                    if (Math.abs(x[i] - x0[i]) > MAX_SUBSTEP_CHANGE) {
+                    double change = Math.abs(x[i] - x0[i]);
+                    if (change > MAX_SUBSTEP_CHANGE
+                            || change > maxRelativeChange * Math.max(x0[i], TRACE_FLOOR)) {
                         return null;
                     }
                 }

@@ -40,14 +40,14 @@ class BirthStepLimitProbe {
         StartModel start = new StartModelBuilder(physics).build(mass * Constants.M_SUN, BirthTracks.birth(z));
         System.out.printf("start model: %.2f s, %d iterations%n", (System.nanoTime() - s0) * 1e-9,
                 start.iterations());
-        // per model: age, h, L, R, Tc, Xc, D_c, Li_surface, C12_c, He3_c, L_nuc/L, iterations
+        // per model: age, h, L, R, Tc, Xc, D_c, Li_surface, C12_c, He3_c, L_nuc/L, iterations, centre convective
         List<double[]> rows = new ArrayList<>();
         StepObserver observer = (age, h, model) -> {
             var g = model.global();
             Composition c = model.state().composition(0);
             rows.add(new double[] {age, h, g.luminosity(), g.radius(), g.centralTemperature(), g.centralHydrogen(),
                 c.h2(), SurfaceComposition.of(model).li7(), c.c12(), c.he3(), NuclearLuminosity.fraction(model),
-                model.report().iterations()});
+                model.report().iterations(), model.profile().stabilityExcess(0) > 0.0 ? 1.0 : 0.0});
         };
         long t0 = System.nanoTime();
         var result = evolver.evolve(start.model(), new double[] {0.0}, observer);
@@ -137,9 +137,11 @@ class BirthStepLimitProbe {
             r[0] = dLnL / settings.maxLuminosityChange();
             return r;
         }
-        r[0] = dLnL / young.maxLuminosityChange();
-        r[1] = Math.abs(Math.log(b[3] / a[3])) / young.maxRadiusChange();
-        r[2] = Math.abs(Math.log(b[4] / a[4])) / young.maxCentralTemperatureChange();
+        boolean centre = a[12] > 0.0;
+        r[0] = dLnL / young.structureLimit(young.maxLuminosityChange(), a[10], centre);
+        r[1] = Math.abs(Math.log(b[3] / a[3])) / young.structureLimit(young.maxRadiusChange(), a[10], centre);
+        r[2] = Math.abs(Math.log(b[4] / a[4]))
+                / young.structureLimit(young.maxCentralTemperatureChange(), a[10], centre);
         if (a[6] > PreMainSequenceLimits.DEUTERIUM_FLOOR * startD && a[6] > 0.0) {
             r[3] = (a[6] - b[6]) / a[6] / young.maxDeuteriumBurnt();
         }

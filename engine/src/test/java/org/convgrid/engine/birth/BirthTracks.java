@@ -34,7 +34,7 @@ final class BirthTracks {
     }
 
     /**
-     * The default pre-main-sequence limits, or for a probe the nine values of -Dprobe.limits (comma-separated, in
+     * The default pre-main-sequence limits, or for a probe the values of -Dprobe.limits (comma-separated, in
      * the order of the {@link PreMainSequenceLimits} components).
      */
     static PreMainSequenceLimits limits() {
@@ -43,7 +43,8 @@ final class BirthTracks {
             return PreMainSequenceLimits.DEFAULT;
         }
         double[] v = java.util.Arrays.stream(given.split(",")).mapToDouble(Double::parseDouble).toArray();
-        return new PreMainSequenceLimits(v[0], v[1], v[2], v[3], v[4], v[5], v[6], v[7], v[8]);
+        return new PreMainSequenceLimits(v[0], v[1], v[2], v[3], v[4], v[5], v[6], v[7], v[8],
+                v.length > 9 ? v[9] : PreMainSequenceLimits.DEFAULT.maxContractionChange());
     }
 
     /**
