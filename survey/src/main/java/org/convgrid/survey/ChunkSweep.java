@@ -22,9 +22,10 @@ import org.convgrid.survey.parallel.ParallelWork;
 /**
  * Sweeps a shard's chunks of a grid on the command's {@link ParallelWork} and hands the outcomes to a sink in grid
  * order. The work chunks share (a line's zero-age ladder, {@link ChunkSolver#groundwork}) is built ahead as steps of
- * its own, so a thread never waits for the rungs another is building. Chunks are cut from the grid alone ({@link Chunking}); a chunk of which some rows are already done (a
- * resumed run) is recomputed from its own seed and only its missing rows are emitted, so the catalogue is
- * byte-identical whatever the thread count, the sharding or the interruptions.
+ * its own, so a thread never waits for the rungs another is building. Chunks are cut from the grid alone
+ * ({@link Chunking}); a chunk of which some rows are already done (a resumed run) is recomputed from its own seed and
+ * only its missing rows are emitted, so the catalogue is byte-identical whatever the thread count, the sharding or
+ * the interruptions.
  */
 final class ChunkSweep {
 
