@@ -16,13 +16,16 @@ import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.batch.OutcomeSink;
 import org.convgrid.engine.batch.ProgressListener;
 import org.convgrid.engine.batch.Shard;
+import org.convgrid.engine.batch.SharedStep;
 import org.convgrid.survey.parallel.ParallelWork;
 
 /**
  * Sweeps a shard's chunks of a grid on the command's {@link ParallelWork} and hands the outcomes to a sink in grid
- * order. Chunks are cut from the grid alone ({@link Chunking}); a chunk of which some rows are already done (a
- * resumed run) is recomputed from its own seed and only its missing rows are emitted, so the catalogue is
- * byte-identical whatever the thread count, the sharding or the interruptions.
+ * order. The work chunks share (a line's zero-age ladder, {@link ChunkSolver#groundwork}) is built ahead as steps of
+ * its own, so a thread never waits for the rungs another is building. Chunks are cut from the grid alone
+ * ({@link Chunking}); a chunk of which some rows are already done (a resumed run) is recomputed from its own seed and
+ * only its missing rows are emitted, so the catalogue is byte-identical whatever the thread count, the sharding or
+ * the interruptions.
  */
 final class ChunkSweep {
 
@@ -48,7 +51,7 @@ final class ChunkSweep {
         Map<ModelStatus, Long> counts = new EnumMap<>(ModelStatus.class);
         long[] emitted = {0};
         work.forEachInOrder(owned(new Chunking(requests, massesPerChunk), shard, alreadyDone),
-                chunk -> solveSafely(solver, chunk), outcomes -> {
+                chunk -> groundworkSafely(solver, chunk), chunk -> solveSafely(solver, chunk), outcomes -> {
                     long before = emitted[0];
                     for (ModelOutcome outcome : outcomes) {
                         if (!alreadyDone.test(outcome.request())) {
@@ -91,6 +94,15 @@ final class ChunkSweep {
                 return chunk;
             }
         };
+    }
+
+    /** A chunk's shared steps; none when the solver cannot name them (the chunk then builds what it needs). */
+    private static List<SharedStep> groundworkSafely(ChunkSolver solver, List<ModelRequest> chunk) {
+        try {
+            return solver.groundwork(chunk);
+        } catch (RuntimeException e) {
+            return List.of();
+        }
     }
 
     /** A chunk solver that throws still yields one failed row per request: the run goes on. */

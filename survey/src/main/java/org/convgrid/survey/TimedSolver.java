@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.concurrent.ConcurrentLinkedQueue;
 import java.util.stream.DoubleStream;
 import org.convgrid.engine.batch.ChunkSolver;
+import org.convgrid.engine.batch.SharedStep;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.output.manifest.RunManifest;
@@ -30,6 +31,12 @@ final class TimedSolver implements ChunkSolver {
             double perModel = (System.nanoTime() - start) * 1e-9 / Math.max(1, chunk.size());
             chunks.add(new double[] {perModel, chunk.size()});
         }
+    }
+
+    /** The wrapped solver's groundwork, untimed (it is shared by chunks, not theirs). */
+    @Override
+    public List<SharedStep> groundwork(List<ModelRequest> chunk) {
+        return solver.groundwork(chunk);
     }
 
     /** Median seconds per model over every chunk solved so far; NaN when none. */

@@ -154,6 +154,38 @@ public final class GridRequests implements ChunkSolver {
     }
 
     /**
+     * The rungs of the line's {@link ZamsLadder} the chunk's first zero-age star starts from, anchor first: what
+     * {@link #answers} would build on first use, so built ahead they change nothing but when the chunk can start.
+     * None for a chunk of one mass (it keeps its own cold start) or of stars from birth alone.
+     */
+    @Override
+    public List<SharedStep> groundwork(List<ModelRequest> chunk) {
+        if (chunk.isEmpty() || !severalMasses(chunk)) {
+            return List.of();
+        }
+        ModelRequest first = chunk.get(0);
+        Composition composition = ZeroAgeRequests.initialComposition(first);
+        double mass = chunk.stream().filter(r -> r.age().origin() != AgeOrigin.BIRTH).mapToDouble(ModelRequest::mass)
+                .findFirst().orElse(Double.NaN);
+        if (Double.isNaN(mass)) {
+            return List.of();
+        }
+        List<SharedStep> steps = new ArrayList<>();
+        for (int index : ZamsLadder.rungsFor(mass)) {
+            steps.add(new SharedStep(new LineRung(first.physics(), first.initialMetals(), first.initialHelium(), index),
+                    () -> {
+                        PhysicsSet set = physics.of(first.physics(), composition);
+                        ladderOf(set, new ZamsBuilder(set), composition).startFor(ZamsLadder.rungMass(index));
+                    }));
+        }
+        return steps;
+    }
+
+    /** One rung (signed index, 0 the anchor) of the ladder of a line of constant physics and composition. */
+    private record LineRung(PhysicsOptions physics, double metals, double helium, int index) {
+    }
+
+    /**
      * Whether a chunk holds more than one mass: a grid line, where the ladder's rungs are shared by its chunks. A single
      * mass (one star, a line of one mass) keeps its own cold start, which costs less than the rungs out to its mass.
      * Depends on the chunk alone, so on the grid alone.

@@ -17,7 +17,7 @@ import org.convgrid.engine.structure.SolveFailedException;
  * k -+ 2, the two next to it on the anchor's side. Every rung is therefore a pure function of the line, whichever
  * chunk or thread asks for it first, and a grid gives the same catalogue at any thread count. A rung that does not
  * converge ends its side of the ladder (the walk towards the masses beyond it starts from the last rung). Thread-safe:
- * each side is built under its own lock, the rungs are immutable.
+ * each side is built under its own lock and read without it, the rungs are immutable.
  */
 public final class ZamsLadder {
 
@@ -74,6 +74,28 @@ public final class ZamsLadder {
         return n == 0 ? List.of(centre) : List.of(centre, built.get(0));
     }
 
+    /**
+     * The rungs {@link #startFor} reaches for {@code mass} (g), as signed rung indices in build order: 0 (the anchor),
+     * then +-1, +-2, ... on the mass's side, up to the nearest rung on the anchor's side of it (to rung +-1 when that
+     * is the anchor). Calling {@link #startFor} on the {@link #rungMass} of each, in this order, builds exactly them.
+     */
+    public static int[] rungsFor(double mass) {
+        double x = Math.log(mass / ZamsTrack.ANCHOR_MASS) / RUNG_SPACING;
+        int k = (int) Math.floor(Math.abs(x) + ON_RUNG);
+        int sign = x < 0 ? -1 : +1;
+        int last = k == 0 && Math.abs(x) >= ON_RUNG ? 1 : k;
+        int[] rungs = new int[last + 1];
+        for (int i = 1; i <= last; i++) {
+            rungs[i] = sign * i;
+        }
+        return rungs;
+    }
+
+    /** The mass (g) of rung {@code index} (signed; 0 is the anchor). */
+    public static double rungMass(int index) {
+        return ZamsTrack.ANCHOR_MASS * Math.exp(index * RUNG_SPACING);
+    }
+
     private synchronized ZamsModel anchor() {
         if (!anchorTried) {
             anchorTried = true;
@@ -89,8 +111,9 @@ public final class ZamsLadder {
     /** One side of the ladder: rungs 1, 2, ... (index i holds rung i + 1), in the direction {@code sign}. */
     private final class Side {
         private final int sign;
-        private final List<ZamsModel> rungs = new ArrayList<>();
-        private boolean ended;
+        /** The rungs built so far, replaced (never changed) under the lock when one is added. */
+        private volatile List<ZamsModel> rungs = List.of();
+        private volatile boolean ended;
 
         Side(int sign) {
             this.sign = sign;
@@ -103,17 +126,22 @@ public final class ZamsLadder {
         }
 
         /**
-         * Rungs 1..k of this side as far as they converge (a copy), built first where missing, one rung per hold
-         * of the lock: a request that needs fewer rungs than another thread is building returns as soon as its
-         * own are there.
+         * Rungs 1..k of this side as far as they converge, built first where missing, one rung per hold of the lock.
+         * Rungs already built are read without the lock, so a request whose rungs are there returns at once, even
+         * while another thread is building the next one.
          */
         List<ZamsModel> upTo(int k) {
             while (true) {
+                // ended first: once it is set no rung is added, so the list read after it is the final one
+                boolean over = ended;
+                List<ZamsModel> built = rungs;
+                if (over || built.size() >= k) {
+                    return built.subList(0, Math.min(k, built.size()));
+                }
                 synchronized (this) {
-                    if (ended || rungs.size() >= k) {
-                        return List.copyOf(rungs.subList(0, Math.min(k, rungs.size())));
+                    if (!ended && rungs.size() < k) {
+                        buildNext();
                     }
-                    buildNext();
                 }
             }
         }
@@ -133,7 +161,9 @@ public final class ZamsLadder {
             }
             ZamsResult r = walk.solve(ZamsTrack.ANCHOR_MASS * Math.exp(sign * next * RUNG_SPACING));
             if (r.converged()) {
-                rungs.add(r.model());
+                List<ZamsModel> longer = new ArrayList<>(rungs);
+                longer.add(r.model());
+                rungs = List.copyOf(longer);
             } else {
                 ended = true;
             }

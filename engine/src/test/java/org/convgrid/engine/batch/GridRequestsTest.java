@@ -8,6 +8,7 @@ import java.util.concurrent.ConcurrentHashMap;
 
 import org.convgrid.engine.evolution.EvolutionStep;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
+import org.convgrid.engine.request.Age;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.ModelStatus;
@@ -73,5 +74,25 @@ class GridRequestsTest {
                 .solve(List.of(request("m0-a0", 0.8, 0.0), request("m1-a0", 0.9, 0.0)));
         assertThat(out).allSatisfy(o -> assertThat(o.status()).isEqualTo(ModelStatus.OK));
         assertThat(tracks).isEmpty();
+    }
+
+    @Test
+    void groundworkNamesTheLadderRungsAChunkStartsFromAndSharesThemAcrossItsLine() {
+        GridRequests solver = new GridRequests((first, steps) -> { });
+        // ln(0.4) / 0.3 = -3.05: the anchor, then rungs 1 to 3 below it
+        List<SharedStep> low = solver.groundwork(List.of(request("a", 0.4, 0.0), request("b", 0.5, 0.0)));
+        List<SharedStep> lower = solver.groundwork(List.of(request("c", 0.35, 0.0), request("d", 0.38, 0.0)));
+        assertThat(low).hasSize(4);
+        assertThat(lower).hasSize(4);
+        assertThat(lower).extracting(SharedStep::key).isEqualTo(low.stream().map(SharedStep::key).toList());
+
+        ModelRequest otherZ = new ModelRequest("e", 0.4 * Constants.M_SUN, 0.01, 0.26, 0.0, PhysicsOptions.DEFAULT);
+        ModelRequest otherZ2 = new ModelRequest("f", 0.5 * Constants.M_SUN, 0.01, 0.26, 0.0, PhysicsOptions.DEFAULT);
+        assertThat(solver.groundwork(List.of(otherZ, otherZ2))).extracting(SharedStep::key)
+                .doesNotContainAnyElementsOf(low.stream().map(SharedStep::key).toList());
+        // one mass keeps its own cold start; stars from birth start elsewhere
+        assertThat(solver.groundwork(List.of(request("g", 0.4, 0.0), request("h", 0.4, 1.0)))).isEmpty();
+        assertThat(solver.groundwork(List.of(request("i", 0.4, 0.0).withAge(new Age.SinceBirth(GYR)),
+                request("j", 0.5, 0.0).withAge(new Age.SinceBirth(GYR))))).isEmpty();
     }
 }

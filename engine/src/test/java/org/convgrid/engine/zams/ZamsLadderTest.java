@@ -48,6 +48,28 @@ class ZamsLadderTest {
     }
 
     @Test
+    void theRungsNamedForAMassAreTheOnesItsStartReaches() {
+        // ln(0.4) / 0.3 = -3.05: the anchor, then rungs 1 to 3 below it
+        assertThat(ZamsLadder.rungsFor(0.4 * Constants.M_SUN)).containsExactly(0, -1, -2, -3);
+        assertThat(ZamsLadder.rungsFor(1.2 * Constants.M_SUN)).containsExactly(0, 1);
+        assertThat(ZamsLadder.rungsFor(Constants.M_SUN)).containsExactly(0);
+        assertThat(ZamsLadder.rungsFor(ZamsLadder.rungMass(2))).containsExactly(0, 1, 2);
+        assertThat(ZamsLadder.rungMass(-3) / Constants.M_SUN).isCloseTo(Math.exp(-0.9), within(SAME));
+
+        // built ahead rung by rung, the start is the one a fresh ladder builds on demand
+        ZamsLadder ahead = new ZamsLadder(builder(), COMPOSITION);
+        for (int rung : ZamsLadder.rungsFor(0.4 * Constants.M_SUN)) {
+            ahead.startFor(ZamsLadder.rungMass(rung));
+        }
+        List<ZamsModel> built = ahead.startFor(0.4 * Constants.M_SUN);
+        List<ZamsModel> onDemand = new ZamsLadder(builder(), COMPOSITION).startFor(0.4 * Constants.M_SUN);
+        assertThat(built).hasSameSizeAs(onDemand).hasSize(2);
+        for (int i = 0; i < built.size(); i++) {
+            assertIdentical(built.get(i).model().state(), onDemand.get(i).model().state());
+        }
+    }
+
+    @Test
     void aModelStartedFromTheLadderIsTheColdStartedModel() {
         ZamsBuilder builder = builder();
         double mass = 0.6 * Constants.M_SUN;

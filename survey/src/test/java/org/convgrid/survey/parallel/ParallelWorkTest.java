@@ -5,9 +5,15 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.io.IOException;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.stream.IntStream;
+import org.convgrid.engine.batch.SharedStep;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
@@ -65,6 +71,85 @@ class ParallelWorkTest {
             assertThatThrownBy(() -> work.forEachInOrder(List.of(1).iterator(), t -> t, r -> {
                 throw new IOException("sink");
             })).isInstanceOf(IOException.class).hasMessage("sink");
+        }
+    }
+
+    /** Task t uses the chain "line L" then rungs 1..(t % 4) of line L = t / 8, each step needing the one before. */
+    private static List<SharedStep> chainOf(int task, Set<String> built, List<String> log) {
+        List<SharedStep> chain = new ArrayList<>();
+        String line = "line " + task / 8;
+        List<String> keys = new ArrayList<>(List.of(line));
+        for (int rung = 1; rung <= task % 4; rung++) {
+            keys.add(line + " rung " + rung);
+        }
+        for (int i = 0; i < keys.size(); i++) {
+            String key = keys.get(i);
+            String before = i == 0 ? null : keys.get(i - 1);
+            chain.add(new SharedStep(key, () -> {
+                if (before != null && !built.contains(before)) {
+                    log.add("step " + key + " ran before " + before);
+                }
+                built.add(key);
+            }));
+        }
+        return chain;
+    }
+
+    @ParameterizedTest
+    @ValueSource(ints = {1, 2, 5})
+    void aTaskStartsAfterItsSharedStepsAndResultsStayInOrder(int threads) throws Exception {
+        Set<String> built = ConcurrentHashMap.newKeySet();
+        List<String> faults = Collections.synchronizedList(new ArrayList<>());
+        List<Integer> streamed = new ArrayList<>();
+        try (ParallelWork work = new ParallelWork(threads)) {
+            work.forEachInOrder(IntStream.range(0, 40).boxed().iterator(), t -> chainOf(t, built, faults), t -> {
+                for (SharedStep s : chainOf(t, Set.of(), List.of())) {
+                    if (!built.contains((String) s.key())) {
+                        faults.add("task " + t + " started before " + s.key());
+                    }
+                }
+                return slowFirst(t);
+            }, streamed::add);
+        }
+        assertThat(faults).isEmpty();
+        assertThat(streamed).isEqualTo(IntStream.range(0, 40).map(t -> t * t).boxed().toList());
+        assertThat(built).hasSize(5 * 4);
+    }
+
+    @Test
+    void aFreeThreadTakesSharedStepsBeforeTasksAndTheLongerChainFirst() throws Exception {
+        List<String> order = Collections.synchronizedList(new ArrayList<>());
+        Map<Integer, List<SharedStep>> chains = Map.of(
+                0, List.of(new SharedStep("a1", () -> order.add("a1"))),
+                1, List.of(),
+                2, List.of(new SharedStep("b1", () -> order.add("b1")), new SharedStep("b2", () -> order.add("b2"))));
+        CountDownLatch lastNamed = new CountDownLatch(1);
+        try (ParallelWork work = new ParallelWork(1)) {
+            // task -1 holds the only thread until the last task has been added (its chain is named just before),
+            // so the ready queue alone decides what runs next
+            work.forEachInOrder(List.of(-1, 0, 1, 2).iterator(), t -> {
+                if (t == 2) {
+                    lastNamed.countDown();
+                }
+                return t < 0 ? List.of() : chains.get(t);
+            }, t -> {
+                if (t < 0) {
+                    awaitThenPause(lastNamed);
+                } else {
+                    order.add("task " + t);
+                }
+                return t;
+            }, t -> { });
+        }
+        assertThat(order).containsExactly("b1", "a1", "b2", "task 1", "task 0", "task 2");
+    }
+
+    private static void awaitThenPause(CountDownLatch latch) {
+        try {
+            latch.await();
+            Thread.sleep(200);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
         }
     }
 
