@@ -94,19 +94,26 @@ final class AnalyticallyEdgedTable {
         return table.clampHydrogen(x, z);
     }
 
-    /** Adds to out (the analytic terms) the faded offset to the nearest answering table point. */
+    /**
+     * Adds to out (the analytic terms) the faded offset to the nearest answering table point. A composition outside
+     * the tables is moved into them for it, as inside the grid: (log T, log R) beyond the grid is reported before the
+     * composition is checked, so x and z may still be the request's here, and a Z a few ulp below the lowest
+     * tabulated Z (a Z = 1e-4 envelope whose 7Li, counted in Z, burns) lost the held offset above log R = +1, a
+     * 1 dex drop of kappa with the last bits of Z.
+     */
     private void addFadedOffset(Composition composition, double lt, double lr, double x, double z, double[] out) {
         double tc = Math.min(Math.max(lt, minLogT), maxLogT);
-        double rc = Math.min(Math.max(lr, minLogR), maxLogR);
-        double limit = table.answeredLogRLimit(tc, x, z);
-        if (Double.isNaN(limit)) {
+        double rGrid = Math.min(Math.max(lr, minLogR), maxLogR);
+        double[] edge = new double[4];
+        int status = edgePoint(tc, rGrid, x, z, edge);
+        double zc = table.clampMetals(z);
+        if (status == TabulatedOpacity.OUTSIDE_COMPOSITIONS || status != TabulatedOpacity.ANSWERED && zc != z) {
+            status = edgePoint(tc, rGrid, tableHydrogen(composition, zc), zc, edge);
+        }
+        if (status != TabulatedOpacity.ANSWERED) {
             return;
         }
-        rc = Math.min(rc, limit);
-        double[] edge = new double[3];
-        if (table.interpolate(tc, rc, x, z, edge) != TabulatedOpacity.ANSWERED) {
-            return;
-        }
+        double rc = edge[3];
         OpacityValue ae = analyticRadiative.rosselandMean(Math.pow(10.0, rc + 3.0 * tc - 18.0),
                 Math.pow(10.0, tc), composition);
         double offset = edge[0] - Math.log10(ae.kappa());
@@ -120,6 +127,20 @@ final class AnalyticallyEdgedTable {
         out[0] += weight * offset;
         out[1] += fadeT[1] / widthT * fadeR[0] * offset + weight * offsetT;
         out[2] += fadeT[0] * fadeR[1] / widthR * offset + weight * offsetR;
+    }
+
+    /**
+     * The table at (tc, the log R nearest to {@code logR} where its row answers): log kappa and its two slopes into
+     * edge[0..2], that log R into edge[3]; returns the table's status there ({@link TabulatedOpacity#ANSWERED} when
+     * it answered, NOT_IN_TABLE also when the row answers nowhere).
+     */
+    private int edgePoint(double tc, double logR, double x, double z, double[] edge) {
+        double limit = table.answeredLogRLimit(tc, x, z);
+        if (Double.isNaN(limit)) {
+            return TabulatedOpacity.NOT_IN_TABLE;
+        }
+        edge[3] = Math.min(logR, limit);
+        return table.interpolate(tc, edge[3], x, z, edge);
     }
 
     /** Whether (log T, log R) lies beyond every fade, where the analytic terms alone answer. */

@@ -178,6 +178,27 @@ class FergusonTablesTest {
     }
 
     @Test
+    void beyondLogROneAMetallicityJustOutsideTheTablesKeepsTheHeldOffset() {
+        // documented behaviour (our join): above the cool set's log R = +1 the table-minus-analytic offset is held,
+        // taken at the nearest tabulated composition; a Z a rounding error outside the tabulated 1e-4..0.04 (an
+        // envelope whose 7Li, counted in Z, burns) must keep it. It did not before this check: Z = 1e-4 (1 - 1e-6)
+        // lay 0.9-1.3 dex under Z = 1e-4 at log T 3.35-3.65, log R 2.0, and Z = 0.04 (1 + 1e-6) 0.4-0.8 dex
+        // (measured), which gave 0.1 Msun at Z = 1e-4 two surfaces 250 K apart.
+        double[][] edges = {{0.75, 1e-4, 1.0 - 1e-9}, {0.70, 0.04, 1.0 + 1e-9}, {0.75, 1e-4, 1.0 - 1e-6},
+            {0.70, 0.04, 1.0 + 1e-6}};
+        for (double[] e : edges) {
+            Composition on = Composition.scaledSolar(e[0], e[1]);
+            Composition off = Composition.scaledSolar(e[0], e[1] * e[2]);
+            for (double logT = 3.35; logT < 3.80; logT += 0.05) {
+                for (double logR = 1.2; logR < 3.0; logR += 0.4) {
+                    assertThat(logKappa(logT, logR, off)).as("Z %s x %s, log T %s, log R %s", e[1], e[2], logT, logR)
+                            .isCloseTo(logKappa(logT, logR, on), within(1e-5));
+                }
+            }
+        }
+    }
+
+    @Test
     void belowTheCoolTablesTheAnalyticTermsTakeOverContinuously() {
         // common practice: tables and analytic low-temperature terms joined continuously; the join is ours
         Opacity analytic = AnalyticCompositeOpacity.standardRadiative();
