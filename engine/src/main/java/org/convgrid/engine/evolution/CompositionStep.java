@@ -208,10 +208,16 @@ public final class CompositionStep {
         Workspace work = new Workspace();
         double remaining = dt;
         double sub = dt;
+        // the rates at x, kept while x is (the start, and after a rejected sub-step) so they are not evaluated again
+        double[] ratesAtX = f;
         for (int attempt = 0; attempt < SUBSTEP_BUDGET; attempt++) {
-            double[] next = implicitSubstep(rates, analytic, work, x, sub);
+            if (ratesAtX == null) {
+                ratesAtX = rates.at(x);
+            }
+            double[] next = implicitSubstep(rates, analytic, work, x, ratesAtX, sub);
             if (next != null) {
                 x = next;
+                ratesAtX = null;
                 remaining -= sub;
                 if (remaining <= 0.0 || remaining <= 1.0e-14 * dt) {
                     return normalised(x);
@@ -226,10 +232,13 @@ public final class CompositionStep {
                 dt, density, temperature, SUBSTEP_BUDGET), dt, density, temperature);
     }
 
-    /** One backward-Euler sub-step, or null when the iteration fails or the change is too large. */
-    private double[] implicitSubstep(Rates rates, Jacobian analytic, Workspace work, double[] x0, double h) {
+    /**
+     * One backward-Euler sub-step from x0 (where the rates are f0), or null when the iteration fails or the change
+     * is too large.
+     */
+    private double[] implicitSubstep(Rates rates, Jacobian analytic, Workspace work, double[] x0, double[] f0,
+                                     double h) {
         double[] x = x0.clone();
-        double[] f0 = rates.at(x);
         double[][] matrix = work.matrix;
         if (analytic != null) {
             for (double[] row : matrix) {
