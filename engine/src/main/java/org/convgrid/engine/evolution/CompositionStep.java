@@ -1,17 +1,22 @@
 package org.convgrid.engine.evolution;
 
+import java.util.Arrays;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
 import org.convgrid.engine.physics.nuclear.BurningRate;
 import org.convgrid.engine.physics.nuclear.NuclearNetwork;
+import org.convgrid.engine.physics.nuclear.RateFactors;
 import org.convgrid.engine.state.Composition;
 
 /**
  * Advances the composition of one shell over a time step at fixed density and temperature by the backward
  * (implicit) Euler method, x_new = x_old + dt f(x_new), f the composition rates of the {@link NuclearNetwork}
  * (common practice: an implicit network step keeps the fast 3He and CN relaxations
- * stable at main-sequence time steps). Each sub-step is solved by Newton's method with a finite-difference
- * Jacobian taken once at the start of the sub-step; a sub-step that does not converge, or that changes some
+ * stable at main-sequence time steps). Each sub-step is solved by a chord (simplified Newton) iteration whose
+ * Jacobian is taken once at the start of the sub-step and factorised once: analytic from the network's
+ * {@link RateFactors} (taken once per step, since density and temperature are fixed over it; only the screening's
+ * weak dependence on composition, which the chord iteration does not need, is then held at its start value), or by
+ * finite differences of the rates for a network without them; a sub-step that does not converge, or that changes some
  * mass fraction by more than {@link #MAX_SUBSTEP_CHANGE}, is halved. Newton corrections are damped so that no
  * mass fraction goes negative. The rates conserve mass (abundances counted with mass numbers), and the result is
  * renormalised so the fractions sum to one to rounding. Deuterium and 7Li, destroyed by one proton capture each at a
@@ -88,7 +93,11 @@ public final class CompositionStep {
      * @throws ConvgridException NOT_CONVERGED when the sub-step budget is exhausted
      */
     public Composition advance(double density, double temperature, Composition start, double dt) {
-        return advance(x -> rates(density, temperature, x), start, dt, density, temperature);
+        return advance(x -> rates(density, temperature, x), x -> {
+            RateFactors factors = network.rateFactors(density, temperature, MassFractions.composition(x))
+                    .orElse(null);
+            return factors == null ? null : (y, out) -> factors.addJacobian(y, 1.0, out);
+        }, start, dt, density, temperature);
     }
 
     /**
@@ -132,7 +141,22 @@ public final class CompositionStep {
             }
             return mean;
         };
-        return advance(zone, start, dt, densities[0], temperatures[0]);
+        Linearisation linearisation = x -> {
+            Composition c = MassFractions.composition(x);
+            RateFactors[] factors = new RateFactors[n];
+            for (int k = 0; k < n; k++) {
+                factors[k] = network.rateFactors(densities[k], temperatures[k], c).orElse(null);
+                if (factors[k] == null) {
+                    return null;
+                }
+            }
+            return (y, out) -> {
+                for (int k = 0; k < n; k++) {
+                    factors[k].addJacobian(y, weights[k] / mass, out);
+                }
+            };
+        };
+        return advance(zone, linearisation, start, dt, densities[0], temperatures[0]);
     }
 
     /** Composition rates (d x_i/dt for the burning species) as a function of the burning mass fractions. */
@@ -141,7 +165,27 @@ public final class CompositionStep {
         double[] at(double[] x);
     }
 
-    private Composition advance(Rates rates, Composition start, double dt, double density, double temperature) {
+    /** Adds d f_i/d x_j of the burning species' rates at x to out[i][j]. */
+    @FunctionalInterface
+    private interface Jacobian {
+        void addAt(double[] x, double[][] out);
+    }
+
+    /** The analytic {@link Jacobian} with the network's rate factors taken at x, or null to difference the rates. */
+    @FunctionalInterface
+    private interface Linearisation {
+        Jacobian at(double[] x);
+    }
+
+    /** Work arrays of one step's chord iterations, so that their loops allocate nothing. */
+    private static final class Workspace {
+        final double[][] matrix = new double[N][N];
+        final int[] pivots = new int[N];
+        final double[] delta = new double[N];
+    }
+
+    private Composition advance(Rates rates, Linearisation linearisation, Composition start, double dt,
+                                double density, double temperature) {
         ConvgridException.requireInRange("time step", dt, 0.0, Double.MAX_VALUE, "s");
         double[] x = MassFractions.of(start);
         double[] f = rates.at(x);
@@ -160,12 +204,20 @@ public final class CompositionStep {
             }
             return normalised(x);
         }
+        Jacobian analytic = linearisation.at(x);
+        Workspace work = new Workspace();
         double remaining = dt;
         double sub = dt;
+        // the rates at x, kept while x is (the start, and after a rejected sub-step) so they are not evaluated again
+        double[] ratesAtX = f;
         for (int attempt = 0; attempt < SUBSTEP_BUDGET; attempt++) {
-            double[] next = implicitSubstep(rates, x, sub);
+            if (ratesAtX == null) {
+                ratesAtX = rates.at(x);
+            }
+            double[] next = implicitSubstep(rates, analytic, work, x, ratesAtX, sub);
             if (next != null) {
                 x = next;
+                ratesAtX = null;
                 remaining -= sub;
                 if (remaining <= 0.0 || remaining <= 1.0e-14 * dt) {
                     return normalised(x);
@@ -180,39 +232,43 @@ public final class CompositionStep {
                 dt, density, temperature, SUBSTEP_BUDGET), dt, density, temperature);
     }
 
-    /** One backward-Euler sub-step, or null when Newton fails or the change is too large. */
-    private double[] implicitSubstep(Rates rates, double[] x0, double h) {
+    /**
+     * One backward-Euler sub-step from x0 (where the rates are f0), or null when the iteration fails or the change
+     * is too large.
+     */
+    private double[] implicitSubstep(Rates rates, Jacobian analytic, Workspace work, double[] x0, double[] f0,
+                                     double h) {
         double[] x = x0.clone();
-        double[] f0 = rates.at(x);
-        double[][] jac = new double[N][N];
-        for (int j = 0; j < N; j++) {
-            double step = Math.max(DIFFERENCE_STEP * x[j], DIFFERENCE_FLOOR);
-            double[] xp = x.clone();
-            xp[j] += step;
-            double[] fp = rates.at(xp);
-            for (int i = 0; i < N; i++) {
-                jac[i][j] = (i == j ? 1.0 : 0.0) - h * (fp[i] - f0[i]) / step;
+        double[][] matrix = work.matrix;
+        if (analytic != null) {
+            for (double[] row : matrix) {
+                Arrays.fill(row, 0.0);
             }
-            // the 4He row is replaced by mass conservation (sum of the six = their initial sum), which the
-            // difference Jacobian of a stiff step would only keep to its rounding error times h |df/dx|
-            jac[HELIUM4][j] = 1.0;
+            analytic.addAt(x, matrix);
+            for (int i = 0; i < N; i++) {
+                for (int j = 0; j < N; j++) {
+                    matrix[i][j] = (i == j ? 1.0 : 0.0) - h * matrix[i][j];
+                }
+            }
+        } else {
+            differenceMatrix(rates, x, f0, h, matrix);
         }
+        // the 4He row is replaced by mass conservation (sum of the six = their initial sum), which a Jacobian of a
+        // stiff step would only keep to its rounding error times h |df/dx|
+        Arrays.fill(matrix[HELIUM4], 1.0);
+        if (!SmallLinearSolver.factorise(matrix, work.pivots)) {
+            return null;
+        }
+        double[] delta = work.delta;
         double[] f = f0;
         for (int iteration = 0; iteration < NEWTON_BUDGET; iteration++) {
-            double[] delta = new double[N];
             double drift = 0.0;
             for (int i = 0; i < N; i++) {
                 delta[i] = -(x[i] - x0[i] - h * f[i]);
                 drift += x[i] - x0[i];
             }
             delta[HELIUM4] = -drift;
-            double[][] work = new double[N][];
-            for (int i = 0; i < N; i++) {
-                work[i] = jac[i].clone();
-            }
-            if (!SmallLinearSolver.solve(work, delta)) {
-                return null;
-            }
+            SmallLinearSolver.solveFactorised(matrix, work.pivots, delta);
             double lambda = 1.0;
             double size = 0.0;
             for (int i = 0; i < N; i++) {
@@ -237,6 +293,19 @@ public final class CompositionStep {
             f = rates.at(x);
         }
         return null;
+    }
+
+    /** The matrix {@code 1 - h df/dx} by forward differences of the rates, for a network without rate factors. */
+    private static void differenceMatrix(Rates rates, double[] x, double[] f0, double h, double[][] matrix) {
+        for (int j = 0; j < N; j++) {
+            double step = Math.max(DIFFERENCE_STEP * x[j], DIFFERENCE_FLOOR);
+            double[] xp = x.clone();
+            xp[j] += step;
+            double[] fp = rates.at(xp);
+            for (int i = 0; i < N; i++) {
+                matrix[i][j] = (i == j ? 1.0 : 0.0) - h * (fp[i] - f0[i]) / step;
+            }
+        }
     }
 
     /**

@@ -11,12 +11,14 @@ final class SmallLinearSolver {
     }
 
     /**
-     * Solves a x = b in place: {@code a} is destroyed, {@code b} becomes x.
+     * Factorises {@code a} in place into the form {@link #solveFactorised} uses, with the same pivots and
+     * operations as elimination of the whole system, so that one factorisation serves every right-hand side of a chord iteration.
      *
+     * @param pivots n entries, receives the row interchanges
      * @return false when the matrix is singular to working precision
      */
-    static boolean solve(double[][] a, double[] b) {
-        int n = b.length;
+    static boolean factorise(double[][] a, int[] pivots) {
+        int n = pivots.length;
         for (int col = 0; col < n; col++) {
             int pivot = col;
             for (int row = col + 1; row < n; row++) {
@@ -27,18 +29,33 @@ final class SmallLinearSolver {
             if (!(Math.abs(a[pivot][col]) > 0.0)) {
                 return false;
             }
+            pivots[col] = pivot;
             double[] swap = a[pivot];
             a[pivot] = a[col];
             a[col] = swap;
-            double t = b[pivot];
-            b[pivot] = b[col];
-            b[col] = t;
             for (int row = col + 1; row < n; row++) {
                 double factor = a[row][col] / a[col][col];
+                a[row][col] = factor;
                 if (factor != 0.0) {
-                    for (int k = col; k < n; k++) {
+                    for (int k = col + 1; k < n; k++) {
                         a[row][k] -= factor * a[col][k];
                     }
+                }
+            }
+        }
+        return true;
+    }
+
+    /** Solves a x = b in place ({@code b} becomes x) with {@code a} and {@code pivots} from {@link #factorise}. */
+    static void solveFactorised(double[][] a, int[] pivots, double[] b) {
+        int n = pivots.length;
+        for (int col = 0; col < n; col++) {
+            double t = b[pivots[col]];
+            b[pivots[col]] = b[col];
+            b[col] = t;
+            for (int row = col + 1; row < n; row++) {
+                double factor = a[row][col];
+                if (factor != 0.0) {
                     b[row] -= factor * b[col];
                 }
             }
@@ -50,6 +67,5 @@ final class SmallLinearSolver {
             }
             b[row] = sum / a[row][row];
         }
-        return true;
     }
 }

@@ -1,5 +1,6 @@
 package org.convgrid.engine.physics.nuclear;
 
+import java.util.Optional;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.state.MetalMixture;
@@ -184,6 +185,22 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
                 eps > 0.0 ? dEpsDlnRho / eps : 0.0, eps > 0.0 ? dEpsDlnT / eps : 0.0,
                 dy1, 3.0 * dy3, 4.0 * dy4, 12.0 * (r14 - r12), 14.0 * (r12 - r14 + r16), -16.0 * r16,
                 -2.0 * r2, -7.0 * r7);
+    }
+
+    /** The six screened {@code rho N_A<sigma v>} that {@link #burn} multiplies by the abundances. */
+    @Override
+    public Optional<RateFactors> rateFactors(double density, double temperature, Composition composition) {
+        checkState(density, temperature);
+        PlasmaState plasma = plasma(density, temperature, composition);
+        double t9 = temperature * 1.0e-9;
+        double cbrtT9 = Math.cbrt(t9);
+        return Optional.of(new RateFactors(
+                density * screened(SolarFusionRates.PP, t9, cbrtT9, plasma),
+                density * screened(SolarFusionRates.HE3_HE3, t9, cbrtT9, plasma),
+                density * screened(SolarFusionRates.HE3_HE4, t9, cbrtT9, plasma),
+                density * screened(SolarFusionRates.C12_P, t9, cbrtT9, plasma),
+                density * screened(SolarFusionRates.N14_P, t9, cbrtT9, plasma),
+                density * screened(SolarFusionRates.O16_P, t9, cbrtT9, plasma)));
     }
 
     /**

@@ -1,5 +1,6 @@
 package org.convgrid.engine.physics.nuclear;
 
+import java.util.Optional;
 import org.convgrid.engine.state.Composition;
 
 /** Hydrogen burning: energy generation and composition rates. Implementations are immutable and thread-safe. */
@@ -19,4 +20,13 @@ public interface NuclearNetwork {
      * mass moved between them to keep the sum one.
      */
     Composition equilibrium(double density, double temperature, Composition composition);
+
+    /**
+     * The factors of the composition rates at this point, from which the Jacobian of the rates follows without
+     * further calls of {@link #burn} ({@link RateFactors}); empty for a network whose rates have no such form (a
+     * caller then differences {@link #burn}).
+     */
+    default Optional<RateFactors> rateFactors(double density, double temperature, Composition composition) {
+        return Optional.empty();
+    }
 }
