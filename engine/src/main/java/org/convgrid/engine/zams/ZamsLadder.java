@@ -49,8 +49,8 @@ public final class ZamsLadder {
      * did not converge.
      */
     public List<ZamsModel> startFor(double mass) {
-        double x = Math.log(mass / ZamsTrack.ANCHOR_MASS) / RUNG_SPACING;
-        int k = (int) Math.floor(Math.abs(x) + ON_RUNG);
+        double x = rungCoordinate(mass);
+        int k = nearestRungTowardsAnchor(x);
         Side side = x < 0 ? below : above;
         if (k == 0) {
             ZamsModel centre = anchor();
@@ -80,8 +80,8 @@ public final class ZamsLadder {
      * is the anchor). Calling {@link #startFor} on the {@link #rungMass} of each, in this order, builds exactly them.
      */
     public static int[] rungsFor(double mass) {
-        double x = Math.log(mass / ZamsTrack.ANCHOR_MASS) / RUNG_SPACING;
-        int k = (int) Math.floor(Math.abs(x) + ON_RUNG);
+        double x = rungCoordinate(mass);
+        int k = nearestRungTowardsAnchor(x);
         int sign = x < 0 ? -1 : +1;
         int last = k == 0 && Math.abs(x) >= ON_RUNG ? 1 : k;
         int[] rungs = new int[last + 1];
@@ -89,6 +89,16 @@ public final class ZamsLadder {
             rungs[i] = sign * i;
         }
         return rungs;
+    }
+
+    /** Where {@code mass} (g) lies on the ladder, in rungs from the anchor (signed, fractional). */
+    private static double rungCoordinate(double mass) {
+        return Math.log(mass / ZamsTrack.ANCHOR_MASS) / RUNG_SPACING;
+    }
+
+    /** The index (unsigned) of the last rung at or inside {@code x}, a mass on a rung to round-off counting as on it. */
+    private static int nearestRungTowardsAnchor(double x) {
+        return (int) Math.floor(Math.abs(x) + ON_RUNG);
     }
 
     /** The mass (g) of rung {@code index} (signed; 0 is the anchor). */
@@ -159,7 +169,7 @@ public final class ZamsLadder {
             if (next >= 2) {
                 walk.add(next == 2 ? centre : rungs.get(next - 3));
             }
-            ZamsResult r = walk.solve(ZamsTrack.ANCHOR_MASS * Math.exp(sign * next * RUNG_SPACING));
+            ZamsResult r = walk.solve(rungMass(sign * next));
             if (r.converged()) {
                 List<ZamsModel> longer = new ArrayList<>(rungs);
                 longer.add(r.model());
