@@ -48,15 +48,19 @@ final class CoulombTerm {
      * @param nuclei nuclei per u
      */
     void prepare(double rho, double kT, double nuclei) {
+        this.rho = rho;
+        this.kT = kT;
+        this.nuclei = nuclei;
         double nNuc = rho * nuclei / Constants.M_U;
         couplingFactor = FOUR_PI_E2 * rho / (Constants.M_U * kT) / Math.cbrt(48.0 * Math.PI * Math.PI * nNuc * nNuc);
     }
 
-    /** Whether the last call was {@link #evaluate} (not {@link #clear}), and what it leaves for completeState. */
-    private boolean active;
+    /** The (rho, kT, nuclei per u) of the last {@link #prepare}, which {@link #evaluate} and completeState use. */
     private double rho;
     private double kT;
     private double nuclei;
+    /** Whether the last call was {@link #evaluate} (not {@link #clear}), and what it leaves for completeState. */
+    private boolean active;
     private double perElectron;
     private double uEx;
     private double uExSlope;
@@ -76,13 +80,10 @@ final class CoulombTerm {
      * The term at one eta, at the (rho, T) of the last {@link #prepare}.
      *
      * @param fd F_{-1/2}, F_{1/2}, F_{3/2}, their eta-derivatives and d^2F_{-1/2}/deta^2 ({@link FermiDirac})
-     * @param rho g cm^-3
-     * @param kT erg
      * @param yeFd free electrons per u
-     * @param nuclei nuclei per u
      * @param chargeRatio z2, ion charge squared per free electron at full ionisation
      */
-    void evaluate(double[] fd, double rho, double kT, double yeFd, double nuclei, double chargeRatio) {
+    void evaluate(double[] fd, double yeFd, double chargeRatio) {
         // one division by each of F_{1/2}, theta and (z2 + theta); the rest are products with their reciprocals
         double perF1 = 1.0 / fd[1];
         double theta = 0.5 * fd[0] * perF1;
@@ -111,9 +112,6 @@ final class CoulombTerm {
         shiftEta = -shift * lnF1Eta + perElectron * (uExSlope * lnGammaEta * d + uEx * dEta);
         // kept for completeState: the Newton iteration needs only the shift and its eta-slope
         active = true;
-        this.rho = rho;
-        this.kT = kT;
-        this.nuclei = nuclei;
         this.perElectron = perElectron;
         this.uEx = uEx;
         this.uExSlope = uExSlope;

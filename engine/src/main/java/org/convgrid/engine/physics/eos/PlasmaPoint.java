@@ -237,7 +237,7 @@ final class PlasmaPoint {
         double rho = density;
         double yeFd = ELECTRON_DENSITY_CONSTANT * (t * Math.sqrt(t)) * fd[1] * Constants.M_U / rho;
         if (coulomb && yeFd > 0.0) {
-            coulombTerm.evaluate(fd, rho, kT, yeFd, nuclei, chargeRatio);
+            coulombTerm.evaluate(fd, yeFd, chargeRatio);
         } else {
             coulombTerm.clear();
         }
