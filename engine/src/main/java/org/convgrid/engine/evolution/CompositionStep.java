@@ -3,6 +3,7 @@ package org.convgrid.engine.evolution;
 import java.util.Arrays;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
+import org.convgrid.engine.physics.nuclear.BurningAndFactors;
 import org.convgrid.engine.physics.nuclear.BurningRate;
 import org.convgrid.engine.physics.nuclear.NuclearNetwork;
 import org.convgrid.engine.physics.nuclear.RateFactors;
@@ -14,8 +15,9 @@ import org.convgrid.engine.state.Composition;
  * (common practice: an implicit network step keeps the fast 3He and CN relaxations
  * stable at main-sequence time steps). Each sub-step is solved by a chord (simplified Newton) iteration whose
  * Jacobian is taken once at the start of the sub-step and factorised once: analytic from the network's
- * {@link RateFactors} (taken once per step, since density and temperature are fixed over it; only the screening's
- * weak dependence on composition, which the chord iteration does not need, is then held at its start value), or by
+ * {@link RateFactors} (taken once per step, since density and temperature are fixed over it, from the same network
+ * evaluation as the rates at the step's start; only the screening's weak dependence on composition, which the
+ * chord iteration does not need, is then held at its start value), or by
  * finite differences of the rates for a network without them; a sub-step that does not converge, or that changes some
  * mass fraction by more than {@link #MAX_SUBSTEP_CHANGE}, is halved. Newton corrections are damped so that no
  * mass fraction goes negative. The rates conserve mass (abundances counted with mass numbers), and the result is
@@ -94,9 +96,10 @@ public final class CompositionStep {
      */
     public Composition advance(double density, double temperature, Composition start, double dt) {
         return advance(x -> rates(density, temperature, x), x -> {
-            RateFactors factors = network.rateFactors(density, temperature, MassFractions.composition(x))
-                    .orElse(null);
-            return factors == null ? null : (y, out) -> factors.addJacobian(y, 1.0, out);
+            BurningAndFactors point = network.burnAndFactors(density, temperature, MassFractions.composition(x));
+            RateFactors factors = point.factors().orElse(null);
+            return new Linearised(rates(point.rate()),
+                    factors == null ? null : (y, out) -> factors.addJacobian(y, 1.0, out));
         }, start, dt, density, temperature);
     }
 
@@ -131,32 +134,44 @@ public final class CompositionStep {
         Rates zone = x -> {
             double[] mean = new double[N + 2];
             for (int k = 0; k < n; k++) {
-                double[] f = rates(densities[k], temperatures[k], x);
-                for (int i = 0; i < mean.length; i++) {
-                    mean[i] += weights[k] * f[i];
-                }
+                addWeighted(mean, weights[k], rates(densities[k], temperatures[k], x));
             }
-            for (int i = 0; i < mean.length; i++) {
-                mean[i] /= mass;
-            }
-            return mean;
+            return scaled(mean, mass);
         };
         Linearisation linearisation = x -> {
             Composition c = MassFractions.composition(x);
+            double[] mean = new double[N + 2];
             RateFactors[] factors = new RateFactors[n];
+            boolean analytic = true;
             for (int k = 0; k < n; k++) {
-                factors[k] = network.rateFactors(densities[k], temperatures[k], c).orElse(null);
-                if (factors[k] == null) {
-                    return null;
-                }
+                BurningAndFactors point = network.burnAndFactors(densities[k], temperatures[k], c);
+                addWeighted(mean, weights[k], rates(point.rate()));
+                factors[k] = point.factors().orElse(null);
+                analytic &= factors[k] != null;
             }
-            return (y, out) -> {
+            Jacobian jacobian = (y, out) -> {
                 for (int k = 0; k < n; k++) {
                     factors[k].addJacobian(y, weights[k] / mass, out);
                 }
             };
+            return new Linearised(scaled(mean, mass), analytic ? jacobian : null);
         };
         return advance(zone, linearisation, start, dt, densities[0], temperatures[0]);
+    }
+
+    /** sum += weight f, element by element. */
+    private static void addWeighted(double[] sum, double weight, double[] f) {
+        for (int i = 0; i < sum.length; i++) {
+            sum[i] += weight * f[i];
+        }
+    }
+
+    /** sum / mass, in place. */
+    private static double[] scaled(double[] sum, double mass) {
+        for (int i = 0; i < sum.length; i++) {
+            sum[i] /= mass;
+        }
+        return sum;
     }
 
     /** Composition rates (d x_i/dt for the burning species) as a function of the burning mass fractions. */
@@ -171,10 +186,20 @@ public final class CompositionStep {
         void addAt(double[] x, double[][] out);
     }
 
-    /** The analytic {@link Jacobian} with the network's rate factors taken at x, or null to difference the rates. */
+    /**
+     * The rates at x with the analytic {@link Jacobian} from the network's rate factors taken there, both from one
+     * evaluation of the network per point ({@link NuclearNetwork#burnAndFactors}).
+     */
     @FunctionalInterface
     private interface Linearisation {
-        Jacobian at(double[] x);
+        Linearised at(double[] x);
+    }
+
+    /**
+     * @param rates the composition rates at x, as {@link Rates} gives them
+     * @param jacobian their analytic Jacobian, or null to difference the rates
+     */
+    private record Linearised(double[] rates, Jacobian jacobian) {
     }
 
     /** Work arrays of one step's chord iterations, so that their loops allocate nothing. */
@@ -188,11 +213,13 @@ public final class CompositionStep {
                                 double density, double temperature) {
         ConvgridException.requireInRange("time step", dt, 0.0, Double.MAX_VALUE, "s");
         double[] x = MassFractions.of(start);
-        double[] f = rates.at(x);
         if (x[MassFractions.H2] > 0.0 || x[MassFractions.LI7] > 0.0) {
-            LightElementBurning.burn(x, f[N], f[N + 1], dt);
-            f = rates.at(x);
+            double[] light = rates.at(x);
+            LightElementBurning.burn(x, light[N], light[N + 1], dt);
         }
+        // the rates and the Jacobian at the sub-steps' start from one network evaluation per point
+        Linearised atStart = linearisation.at(x);
+        double[] f = atStart.rates();
         double largest = 0.0;
         for (int i = 0; i < N; i++) {
             largest = Math.max(largest, Math.abs(f[i]) * dt);
@@ -204,7 +231,7 @@ public final class CompositionStep {
             }
             return normalised(x);
         }
-        Jacobian analytic = linearisation.at(x);
+        Jacobian analytic = atStart.jacobian();
         Workspace work = new Workspace();
         double remaining = dt;
         double sub = dt;
@@ -313,7 +340,11 @@ public final class CompositionStep {
      * belongs to {@link LightElementBurning}), then d(deuterium)/dt and d(7Li)/dt.
      */
     private double[] rates(double density, double temperature, double[] x) {
-        BurningRate r = network.burn(density, temperature, MassFractions.composition(x));
+        return rates(network.burn(density, temperature, MassFractions.composition(x)));
+    }
+
+    /** {@link #rates(double, double, double[])} from the network's rate at the point. */
+    private static double[] rates(BurningRate r) {
         double d = r.dh2Dt();
         double li = r.dli7Dt();
         // d + p -> 3He moves mass 2:1 -> 3, 7Li + p -> 2 4He 7:1 -> 8 (rates are negative: destruction)

@@ -3,6 +3,7 @@ package org.convgrid.engine.evolution;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
+import org.convgrid.engine.physics.nuclear.BurningAndFactors;
 import org.convgrid.engine.physics.nuclear.BurningRate;
 import org.convgrid.engine.physics.nuclear.HydrogenBurningNetwork;
 import org.convgrid.engine.physics.nuclear.NuclearNetwork;
@@ -61,6 +62,47 @@ class CompositionStepAnalyticJacobianTest {
         Composition differenced = new CompositionStep(DIFFERENCED).advanceMixed(rho, t, w, start,
                 1.0e8 * Constants.YEAR);
         assertClose(analytic, differenced);
+    }
+
+    @Test
+    void stepStartEvaluatesTheNetworkOnceForRatesAndJacobian() {
+        // the rates and the rate factors at the start composition come from one call; the light elements burn
+        // first from the rates at the birth composition, so the sub-steps start from the burnt one
+        for (Composition start : new Composition[] {FRESH, BIRTH}) {
+            CountingNetwork counting = new CountingNetwork(start);
+            new CompositionStep(counting).advance(80.0, 1.3e7, start, 1.0e7 * Constants.YEAR);
+            assertThat(counting.atStart).as("network calls at the start composition").isEqualTo(1);
+            assertThat(counting.combined).as("rates with factors").isEqualTo(1);
+        }
+    }
+
+    /** Counts the calls the step makes, and those at one composition. */
+    private static final class CountingNetwork implements NuclearNetwork {
+        private final Composition start;
+        int atStart;
+        int combined;
+
+        CountingNetwork(Composition start) {
+            this.start = start;
+        }
+
+        @Override
+        public BurningRate burn(double density, double temperature, Composition composition) {
+            atStart += composition.equals(start) ? 1 : 0;
+            return NETWORK.burn(density, temperature, composition);
+        }
+
+        @Override
+        public BurningAndFactors burnAndFactors(double density, double temperature, Composition composition) {
+            atStart += composition.equals(start) ? 1 : 0;
+            combined++;
+            return NETWORK.burnAndFactors(density, temperature, composition);
+        }
+
+        @Override
+        public Composition equilibrium(double density, double temperature, Composition composition) {
+            return NETWORK.equilibrium(density, temperature, composition);
+        }
     }
 
     private static void assertSame(double rho, double t, Composition start, double dt, boolean traceLimit) {

@@ -28,8 +28,12 @@ import org.convgrid.engine.units.Constants;
  * <p>{@link #burn} is instantaneous: with X(3He) = 0 the pp chains release only the 6.67 MeV of the first step
  * per p+p reaction, about half of the equilibrium value, which is the physically correct rate for such a
  * composition. Structure models of a given age should therefore pass the evolved 3He, and zero-age models the
- * output of {@link #equilibrium}. Allocation: one {@link PlasmaState}, a three-element work array and the result
- * record per call.
+ * output of {@link #equilibrium}. A reaction is evaluated in one place ({@link #reaction}: the screening and the
+ * S-factor rate at the point; {@link #screened} where the slopes are not needed), and {@link #burnAndFactors} takes
+ * the {@link RateFactors} from the rates its burn evaluated. Allocation: one {@link PlasmaState}, a three-element work array and the result record per call, which
+ * the JIT compiler keeps off the heap but for the result (the point's rates stay local variables for that reason: an
+ * object holding them, passed from where they are evaluated to where they are used, doubled a microphysics point's
+ * allocation).
  */
 public final class HydrogenBurningNetwork implements NuclearNetwork {
 
@@ -72,6 +76,22 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
 
     @Override
     public BurningRate burn(double density, double temperature, Composition composition) {
+        return burn(density, temperature, composition, null);
+    }
+
+    /** {@link #burn} with the six screened {@code rho N_A<sigma v>} its rates are made of. */
+    @Override
+    public BurningAndFactors burnAndFactors(double density, double temperature, Composition composition) {
+        double[] k = new double[RateFactors.SPECIES];
+        BurningRate rate = burn(density, temperature, composition, k);
+        return new BurningAndFactors(rate, Optional.of(new RateFactors(k[0], k[1], k[2], k[3], k[4], k[5])));
+    }
+
+    /**
+     * @param factors null, or {@link RateFactors#SPECIES} elements that receive the factors of pp, 3He+3He, 3He+4He,
+     *                12C+p, 14N+p and 16O+p (the order of the {@link RateFactors} components)
+     */
+    private BurningRate burn(double density, double temperature, Composition composition, double[] factors) {
         checkState(density, temperature);
         PlasmaState plasma = plasma(density, temperature, composition);
         double t9 = temperature * 1.0e-9;
@@ -114,6 +134,14 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
         double l17 = work[0];
         double t17 = work[1];
         double d17 = work[2];
+        if (factors != null) {
+            factors[0] = density * l11;
+            factors[1] = density * l33;
+            factors[2] = density * l34;
+            factors[3] = density * l12;
+            factors[4] = density * l14;
+            factors[5] = density * l16;
+        }
 
         // Reactions per gram per second, in moles: rho Y_j Y_k N_A<sv> / (1 + delta_jk).
         double r11 = 0.5 * density * y1 * y1 * l11;
@@ -187,22 +215,6 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
                 -2.0 * r2, -7.0 * r7);
     }
 
-    /** The six screened {@code rho N_A<sigma v>} that {@link #burn} multiplies by the abundances. */
-    @Override
-    public Optional<RateFactors> rateFactors(double density, double temperature, Composition composition) {
-        checkState(density, temperature);
-        PlasmaState plasma = plasma(density, temperature, composition);
-        double t9 = temperature * 1.0e-9;
-        double cbrtT9 = Math.cbrt(t9);
-        return Optional.of(new RateFactors(
-                density * screened(SolarFusionRates.PP, t9, cbrtT9, plasma),
-                density * screened(SolarFusionRates.HE3_HE3, t9, cbrtT9, plasma),
-                density * screened(SolarFusionRates.HE3_HE4, t9, cbrtT9, plasma),
-                density * screened(SolarFusionRates.C12_P, t9, cbrtT9, plasma),
-                density * screened(SolarFusionRates.N14_P, t9, cbrtT9, plasma),
-                density * screened(SolarFusionRates.O16_P, t9, cbrtT9, plasma)));
-    }
-
     /**
      * One reaction at this point into work: [0] the screened N_A&lt;sigma v&gt;, [1] its d ln/d ln T (rate and
      * screening), [2] its d ln/d ln rho (the screening's alone).
@@ -229,15 +241,16 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
         double cbrtT9 = Math.cbrt(t9);
         double y1 = composition.h1();
         double y4 = composition.he4() / 4.0;
+        double[] work = new double[3];
 
         // dY3/dt = rho Y1^2 <11>/2 - rho <33> Y3^2 - rho <34> Y4 Y3.
-        double a = 0.5 * density * y1 * y1 * screened(SolarFusionRates.PP, t9, cbrtT9, plasma);
-        double b = density * screened(SolarFusionRates.HE3_HE3, t9, cbrtT9, plasma);
-        double c = density * y4 * screened(SolarFusionRates.HE3_HE4, t9, cbrtT9, plasma);
+        double a = 0.5 * density * y1 * y1 * screened(SolarFusionRates.PP, t9, cbrtT9, plasma, work);
+        double b = density * screened(SolarFusionRates.HE3_HE3, t9, cbrtT9, plasma, work);
+        double c = density * y4 * screened(SolarFusionRates.HE3_HE4, t9, cbrtT9, plasma, work);
         double he3 = 3.0 * AbundanceRelaxation.quadratic(a, b, c, composition.he3() / 3.0, equilibrationTime);
 
-        double k12 = density * y1 * screened(SolarFusionRates.C12_P, t9, cbrtT9, plasma);
-        double k14 = density * y1 * screened(SolarFusionRates.N14_P, t9, cbrtT9, plasma);
+        double k12 = density * y1 * screened(SolarFusionRates.C12_P, t9, cbrtT9, plasma, work);
+        double k14 = density * y1 * screened(SolarFusionRates.N14_P, t9, cbrtT9, plasma, work);
         double y12 = composition.c12() / 12.0;
         double y14 = composition.n14() / 14.0;
         double newY12 = AbundanceRelaxation.linearPair(k12, k14, y12, y14, equilibrationTime);
@@ -265,8 +278,9 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
         PlasmaState plasma = plasma(density, temperature, composition);
         double t9 = temperature * 1.0e-9;
         double cbrtT9 = Math.cbrt(t9);
-        double l11 = screened(SolarFusionRates.PP, t9, cbrtT9, plasma);
-        double l33 = screened(SolarFusionRates.HE3_HE3, t9, cbrtT9, plasma);
+        double[] work = new double[3];
+        double l11 = screened(SolarFusionRates.PP, t9, cbrtT9, plasma, work);
+        double l33 = screened(SolarFusionRates.HE3_HE3, t9, cbrtT9, plasma, work);
         return l33 > 0.0 ? 3.0 * composition.h1() * Math.sqrt(l11 / (2.0 * l33)) : 0.0;
     }
 
@@ -284,8 +298,10 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
                 + metals.chargePerMass() * composition.otherMetals();
     }
 
-    private double screened(ChargedParticleRate rate, double t9, double cbrtT9, PlasmaState plasma) {
-        return rate.rate(t9, cbrtT9, screening.exponent(rate.z1(), rate.z2(), plasma));
+    /** {@link #reaction}'s screened N_A&lt;sigma v&gt; alone, where the slopes are not needed (the same value). */
+    private double screened(ChargedParticleRate rate, double t9, double cbrtT9, PlasmaState plasma, double[] work) {
+        screening.exponentAndSlopes(rate.z1(), rate.z2(), plasma, work);
+        return rate.rate(t9, cbrtT9, work[0]);
     }
 
     private static void checkState(double density, double temperature) {

@@ -22,11 +22,11 @@ public interface NuclearNetwork {
     Composition equilibrium(double density, double temperature, Composition composition);
 
     /**
-     * The factors of the composition rates at this point, from which the Jacobian of the rates follows without
-     * further calls of {@link #burn} ({@link RateFactors}); empty for a network whose rates have no such form (a
-     * caller then differences {@link #burn}).
+     * {@link #burn} with the factors of its composition rates at this point, from which the Jacobian of the rates
+     * follows without further calls of {@link #burn} ({@link RateFactors}, taken from the same evaluation of the
+     * rates); no factors for a network whose rates have no such form (a caller then differences {@link #burn}).
      */
-    default Optional<RateFactors> rateFactors(double density, double temperature, Composition composition) {
-        return Optional.empty();
+    default BurningAndFactors burnAndFactors(double density, double temperature, Composition composition) {
+        return new BurningAndFactors(burn(density, temperature, composition), Optional.empty());
     }
 }

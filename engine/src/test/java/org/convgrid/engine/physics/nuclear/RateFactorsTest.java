@@ -53,17 +53,30 @@ class RateFactorsTest {
     void factorsTimesAbundancesGiveTheNetworksRates() {
         // the 12C rate of burn() is 12 (r14 - r12) with r = k Y1 Y_z (rate form of HydrogenBurningNetwork)
         Composition c = FRESH;
-        RateFactors k = SCREENED.rateFactors(80.0, 1.3e7, c).orElseThrow();
+        RateFactors k = SCREENED.burnAndFactors(80.0, 1.3e7, c).factors().orElseThrow();
         double expected = 12.0 * (k.n14() * c.h1() * c.n14() / 14.0 - k.c12() * c.h1() * c.c12() / 12.0);
         double actual = SCREENED.burn(80.0, 1.3e7, c).dc12Dt();
         assertThat(actual).isCloseTo(expected, within(1e-12 * Math.abs(expected)));
+    }
+
+    @Test
+    void burnWithFactorsIsTheBurn() {
+        // the rates that come with the factors are burn's to the last bit, with and without the deuterium and 7Li
+        // that add reactions to the burn
+        Composition birth = new Composition(0.70, 3.0e-5, 0.28, 0.0030, 0.0009, 0.0080,
+                0.02 - 0.0030 - 0.0009 - 0.0080 - 3.0e-5 - 4.0e-5 - 1.0e-8, 4.0e-5, 1.0e-8);
+        for (double[] p : POINTS) {
+            for (Composition c : new Composition[] {FRESH, CENTRE, birth}) {
+                assertThat(SCREENED.burnAndFactors(p[0], p[1], c).rate()).isEqualTo(SCREENED.burn(p[0], p[1], c));
+            }
+        }
     }
 
     private static void assertAgrees(HydrogenBurningNetwork network, double rho, double t, Composition c,
                                      double tolerance) {
         double[] x = fractions(c);
         double[][] analytic = new double[RateFactors.SPECIES][RateFactors.SPECIES];
-        network.rateFactors(rho, t, c).orElseThrow().addJacobian(x, 1.0, analytic);
+        network.burnAndFactors(rho, t, c).factors().orElseThrow().addJacobian(x, 1.0, analytic);
         double[] rowScale = new double[RateFactors.SPECIES];
         for (int i = 0; i < RateFactors.SPECIES; i++) {
             for (double v : analytic[i]) {
