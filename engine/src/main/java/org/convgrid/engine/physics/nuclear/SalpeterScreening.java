@@ -46,29 +46,11 @@ public final class SalpeterScreening implements Screening {
         return ION_SPHERE_FACTOR * charges * plasma.electronCoupling();
     }
 
-    @Override
-    public double exponent(int z1, int z2, PlasmaState plasma) {
-        double weak = weakExponent(z1, z2, plasma);
-        double strong = strongExponent(z1, z2, plasma);
-        if (!(weak > 0.0 && strong > 0.0)) {
-            return 0.0;
-        }
-        return blend(weak, strong);
-    }
-
-    @Override
-    public double dExponentDlnT(int z1, int z2, PlasmaState plasma) {
-        // H_w ~ T^(-3/2), H_s ~ T^(-1); dlnH = w dlnH_w + (1 - w) dlnH_s with w = (H/H_w)^4.
-        return derivative(z1, z2, plasma, -1.5, -1.0);
-    }
-
-    @Override
-    public double dExponentDlnRho(int z1, int z2, PlasmaState plasma) {
-        // H_w ~ rho^(1/2), H_s ~ rho^(1/3) at fixed composition.
-        return derivative(z1, z2, plasma, 0.5, 1.0 / 3.0);
-    }
-
-    /** The three with one blend of the two limits (the same expressions, so the same values to the last bit). */
+    /**
+     * H of the blend, and its slopes from those of the limits: H_w ~ rho^(1/2) T^(-3/2) and H_s ~ rho^(1/3) T^(-1)
+     * at fixed composition ({@link PlasmaState}), so dlnH = w dlnH_w + (1 - w) dlnH_s with w = (H/H_w)^4. Where
+     * either limit vanishes (no plasma coupling) there is no screening.
+     */
     @Override
     public void exponentAndSlopes(int z1, int z2, PlasmaState plasma, double[] out) {
         double weak = weakExponent(z1, z2, plasma);
@@ -85,18 +67,6 @@ public final class SalpeterScreening implements Screening {
         out[0] = h;
         out[1] = h * (w * -1.5 + (1.0 - w) * -1.0);
         out[2] = h * (w * 0.5 + (1.0 - w) * (1.0 / 3.0));
-    }
-
-    private static double derivative(int z1, int z2, PlasmaState plasma, double weakPower, double strongPower) {
-        double weak = weakExponent(z1, z2, plasma);
-        double strong = strongExponent(z1, z2, plasma);
-        if (!(weak > 0.0 && strong > 0.0)) {
-            return 0.0;
-        }
-        double h = blend(weak, strong);
-        double r = h / weak;
-        double w = r * r * r * r;
-        return h * (w * weakPower + (1.0 - w) * strongPower);
     }
 
     private static double blend(double weak, double strong) {

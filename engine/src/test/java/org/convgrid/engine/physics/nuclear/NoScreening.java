@@ -5,17 +5,9 @@ public enum NoScreening implements Screening {
     INSTANCE;
 
     @Override
-    public double exponent(int z1, int z2, PlasmaState plasma) {
-        return 0.0;
-    }
-
-    @Override
-    public double dExponentDlnT(int z1, int z2, PlasmaState plasma) {
-        return 0.0;
-    }
-
-    @Override
-    public double dExponentDlnRho(int z1, int z2, PlasmaState plasma) {
-        return 0.0;
+    public void exponentAndSlopes(int z1, int z2, PlasmaState plasma, double[] out) {
+        out[0] = 0.0;
+        out[1] = 0.0;
+        out[2] = 0.0;
     }
 }

@@ -11,6 +11,17 @@ class SalpeterScreeningTest {
     private static final HydrogenBurningNetwork NETWORK = new HydrogenBurningNetwork();
     private static final Screening SCREENING = SalpeterScreening.INSTANCE;
 
+    /** H, dH/dlnT and dH/dlnrho of the pair, as the network asks for them. */
+    static double[] screening(int z1, int z2, PlasmaState plasma) {
+        double[] out = new double[3];
+        SCREENING.exponentAndSlopes(z1, z2, plasma, out);
+        return out;
+    }
+
+    private static double exponent(int z1, int z2, PlasmaState plasma) {
+        return screening(z1, z2, plasma)[0];
+    }
+
     @Test
     void screeningConstantsFollowFromCodata() {
         // Weak: H = 0.188 Z1 Z2 zeta rho^(1/2) T6^(-3/2); strong: 0.205 [...] (rho/mu_e)^(1/3)/T6 with
@@ -30,7 +41,7 @@ class SalpeterScreeningTest {
         PlasmaState p = NETWORK.plasma(152.9, 1.567e7, Composition.scaledSolar(0.346, 0.0188));
         assertThat(SalpeterScreening.weakExponent(1, 1, p)).isCloseTo(0.049, within(0.003));
         assertThat(SalpeterScreening.strongExponent(1, 1, p)).isCloseTo(0.071, within(0.003));
-        assertThat(SCREENING.exponent(1, 1, p)).isCloseTo(0.049, within(0.003));
+        assertThat(exponent(1, 1, p)).isCloseTo(0.049, within(0.003));
     }
 
     @Test
@@ -39,7 +50,7 @@ class SalpeterScreeningTest {
         PlasmaState p = NETWORK.plasma(500.0, 4.0e6, Composition.scaledSolar(0.70, 0.02));
         assertThat(SalpeterScreening.weakExponent(1, 1, p)).isCloseTo(0.7, within(0.07));
         assertThat(SalpeterScreening.strongExponent(1, 1, p)).isCloseTo(0.45, within(0.03));
-        double h = SCREENING.exponent(1, 1, p);
+        double h = exponent(1, 1, p);
         assertThat(h).isLessThan(SalpeterScreening.strongExponent(1, 1, p)).isGreaterThan(0.4);
     }
 
@@ -47,11 +58,18 @@ class SalpeterScreeningTest {
     void blendTendsToEachLimitWhereItHolds() {
         // Construction (our choice, documented in SalpeterScreening): smooth minimum of the two limits.
         PlasmaState dilute = new PlasmaState(1.0, 1.0e7, 1e-4, 1.0);
-        assertThat(SCREENING.exponent(1, 7, dilute) / SalpeterScreening.weakExponent(1, 7, dilute)).isCloseTo(1.0, within(1e-9));
+        assertThat(exponent(1, 7, dilute) / SalpeterScreening.weakExponent(1, 7, dilute)).isCloseTo(1.0, within(1e-9));
         PlasmaState dense = new PlasmaState(1.0, 1.0e7, 100.0, 1.0);
-        assertThat(SCREENING.exponent(2, 2, dense) / SalpeterScreening.strongExponent(2, 2, dense)).isCloseTo(1.0, within(1e-6));
+        assertThat(exponent(2, 2, dense) / SalpeterScreening.strongExponent(2, 2, dense)).isCloseTo(1.0, within(1e-6));
         PlasmaState equal = new PlasmaState(1.0, 1.0e7, 0.5, 0.5 / (0.9 * (Math.pow(2, 5.0 / 3) - 2)));
-        assertThat(SCREENING.exponent(1, 1, equal) / 0.5).isCloseTo(Math.pow(2.0, -0.25), within(1e-9));
+        assertThat(exponent(1, 1, equal) / 0.5).isCloseTo(Math.pow(2.0, -0.25), within(1e-9));
+    }
+
+    @Test
+    void noCouplingMeansNoScreening() {
+        // Construction: a pair in a plasma without coupling (zero density) is not screened, slopes included.
+        assertThat(screening(1, 1, new PlasmaState(0.0, 1.0e7, 0.0, 0.0))).containsExactly(0.0, 0.0, 0.0);
+        assertThat(screening(1, 7, new PlasmaState(1.0, 1.0e7, 1e-3, 0.0))).containsExactly(0.0, 0.0, 0.0);
     }
 
     @Test
@@ -63,30 +81,13 @@ class SalpeterScreeningTest {
             double rho = point[0];
             double t = point[1];
             for (int[] z : new int[][] {{1, 1}, {2, 2}, {1, 7}}) {
-                double dT = (SCREENING.exponent(z[0], z[1], NETWORK.plasma(rho, t * Math.exp(h), c))
-                        - SCREENING.exponent(z[0], z[1], NETWORK.plasma(rho, t * Math.exp(-h), c))) / (2 * h);
-                double dRho = (SCREENING.exponent(z[0], z[1], NETWORK.plasma(rho * Math.exp(h), t, c))
-                        - SCREENING.exponent(z[0], z[1], NETWORK.plasma(rho * Math.exp(-h), t, c))) / (2 * h);
-                PlasmaState p = NETWORK.plasma(rho, t, c);
-                assertThat(SCREENING.dExponentDlnT(z[0], z[1], p)).isCloseTo(dT, within(1e-7 + 1e-6 * Math.abs(dT)));
-                assertThat(SCREENING.dExponentDlnRho(z[0], z[1], p)).isCloseTo(dRho, within(1e-7 + 1e-6 * Math.abs(dRho)));
-            }
-        }
-    }
-
-    @Test
-    void exponentAndSlopesInOneCallAreTheSeparateValues() {
-        // the network asks for all three at once; they must be exactly the three separate answers, in the weak,
-        // intermediate and strong regimes
-        double[] out = new double[3];
-        double[][] points = {{152.9, 1.567e7}, {300.0, 6.0e6}, {1.0e3, 1.0e6}};
-        for (double[] pt : points) {
-            PlasmaState p = NETWORK.plasma(pt[0], pt[1], Composition.scaledSolar(0.70, 0.0188));
-            for (int[] z : new int[][] {{1, 1}, {2, 2}, {7, 1}}) {
-                SCREENING.exponentAndSlopes(z[0], z[1], p, out);
-                assertThat(out[0]).isEqualTo(SCREENING.exponent(z[0], z[1], p));
-                assertThat(out[1]).isEqualTo(SCREENING.dExponentDlnT(z[0], z[1], p));
-                assertThat(out[2]).isEqualTo(SCREENING.dExponentDlnRho(z[0], z[1], p));
+                double dT = (exponent(z[0], z[1], NETWORK.plasma(rho, t * Math.exp(h), c))
+                        - exponent(z[0], z[1], NETWORK.plasma(rho, t * Math.exp(-h), c))) / (2 * h);
+                double dRho = (exponent(z[0], z[1], NETWORK.plasma(rho * Math.exp(h), t, c))
+                        - exponent(z[0], z[1], NETWORK.plasma(rho * Math.exp(-h), t, c))) / (2 * h);
+                double[] slopes = screening(z[0], z[1], NETWORK.plasma(rho, t, c));
+                assertThat(slopes[1]).isCloseTo(dT, within(1e-7 + 1e-6 * Math.abs(dT)));
+                assertThat(slopes[2]).isCloseTo(dRho, within(1e-7 + 1e-6 * Math.abs(dRho)));
             }
         }
     }
