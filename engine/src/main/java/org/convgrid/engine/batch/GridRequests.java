@@ -1,10 +1,8 @@
 package org.convgrid.engine.batch;
 
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 
 import org.convgrid.engine.birth.Phase;
 import org.convgrid.engine.birth.TrackPoint;
@@ -69,22 +67,18 @@ public final class GridRequests implements ChunkSolver {
     }
 
     /**
-     * Zero-age ladders kept at once: more than the lines a sweep has in flight (chunks are handed out in grid order,
-     * a bounded window of them per thread).
+     * Zero-age ladders kept besides those of the chunks named ahead ({@link #groundwork}) that have not run yet, which
+     * are all kept, however many chunks the scheduler has in flight (threads times its window per thread).
      */
     public static final int LADDERS_KEPT = 8;
 
     private final PhysicsBundles physics = new PhysicsBundles();
     /**
-     * Ladders of the lines most recently asked for, at most {@link #LADDERS_KEPT} (a line's rungs are up to ~20 whole
-     * models); a line evicted and asked for again rebuilds the same rungs, so eviction costs time, never a result.
+     * Ladders of the lines whose chunks were named ahead and have not run yet, and of the {@link #LADDERS_KEPT} lines
+     * most recently asked for besides (a line's rungs are up to ~20 whole models); a line evicted and asked for again
+     * rebuilds the same rungs, so eviction costs time, never a result.
      */
-    private final Map<PhysicsSet, ZamsLadder> ladders = new LinkedHashMap<>(16, 0.75f, true) {
-        @Override
-        protected boolean removeEldestEntry(Map.Entry<PhysicsSet, ZamsLadder> eldest) {
-            return size() > LADDERS_KEPT;
-        }
-    };
+    private final LadderCache<Line, ZamsLadder> ladders = new LadderCache<>(LADDERS_KEPT);
     private final StarTrackSink tracks;
     private final MainSequenceEvolver.Settings settings;
 
@@ -123,6 +117,21 @@ public final class GridRequests implements ChunkSolver {
         }
         ModelRequest first = chunk.get(0);
         Composition composition = ZeroAgeRequests.initialComposition(first);
+        Line line = Line.of(first);
+        try {
+            answerStars(chunk, first, line, composition, out);
+        } finally {
+            // the chunk has taken its ladder, or failed before: either way it no longer waits for it
+            if (opensLadder(chunk)) {
+                ladders.taken(line);
+            }
+        }
+        return out;
+    }
+
+    /** The answers of the chunk's stars into {@code out}, in order. */
+    private void answerStars(List<ModelRequest> chunk, ModelRequest first, Line line, Composition composition,
+                             List<Answer> out) {
         // the zero-age line is opened by the first star that needs it: stars from birth start elsewhere
         PhysicsSet set = null;
         ZamsTrack track = null;
@@ -141,7 +150,7 @@ public final class GridRequests implements ChunkSolver {
                     set = physics.of(first.physics(), composition);
                     ZamsBuilder builder = new ZamsBuilder(set);
                     track = new ZamsTrack(builder, composition,
-                            severalMasses(chunk) ? ladderOf(set, builder, composition) : null);
+                            severalMasses(chunk) ? ladderOf(line, builder, composition) : null);
                 }
                 ZamsResult zeroAge = track.solve(star.get(0).mass());
                 out.addAll(star.get(0).age() instanceof Age.MainSequenceFraction
@@ -150,7 +159,6 @@ public final class GridRequests implements ChunkSolver {
             }
             start = end;
         }
-        return out;
     }
 
     /**
@@ -160,29 +168,44 @@ public final class GridRequests implements ChunkSolver {
      */
     @Override
     public List<SharedStep> groundwork(List<ModelRequest> chunk) {
-        if (chunk.isEmpty() || !severalMasses(chunk)) {
+        if (!opensLadder(chunk)) {
             return List.of();
         }
         ModelRequest first = chunk.get(0);
         Composition composition = ZeroAgeRequests.initialComposition(first);
         double mass = chunk.stream().filter(r -> r.age().origin() != AgeOrigin.BIRTH).mapToDouble(ModelRequest::mass)
-                .findFirst().orElse(Double.NaN);
-        if (Double.isNaN(mass)) {
-            return List.of();
-        }
+                .findFirst().orElseThrow();
+        Line line = Line.of(first);
         List<SharedStep> steps = new ArrayList<>();
         for (int index : ZamsLadder.rungsFor(mass)) {
-            steps.add(new SharedStep(new LineRung(first.physics(), first.initialMetals(), first.initialHelium(), index),
-                    () -> {
-                        PhysicsSet set = physics.of(first.physics(), composition);
-                        ladderOf(set, new ZamsBuilder(set), composition).startFor(ZamsLadder.rungMass(index));
-                    }));
+            steps.add(new SharedStep(new LineRung(line, index), () -> {
+                PhysicsSet set = physics.of(first.physics(), composition);
+                ladderOf(line, new ZamsBuilder(set), composition).startFor(ZamsLadder.rungMass(index));
+            }));
         }
+        // built ahead, the ladder stays until this chunk has taken it (answers), however many lines are in flight
+        ladders.awaiting(line);
         return steps;
     }
 
-    /** One rung (signed index, 0 the anchor) of the ladder of a line of constant physics and composition. */
-    private record LineRung(PhysicsOptions physics, double metals, double helium, int index) {
+    /** A line of constant physics and initial composition. */
+    private record Line(PhysicsOptions physics, double metals, double helium) {
+
+        static Line of(ModelRequest request) {
+            return new Line(request.physics(), request.initialMetals(), request.initialHelium());
+        }
+    }
+
+    /** One rung (signed index, 0 the anchor) of the ladder of a line. */
+    private record LineRung(Line line, int index) {
+    }
+
+    /**
+     * Whether the chunk starts its zero-age stars from the line's ladder: several masses, at least one of them counted
+     * from the zero-age main sequence.
+     */
+    private static boolean opensLadder(List<ModelRequest> chunk) {
+        return severalMasses(chunk) && chunk.stream().anyMatch(r -> r.age().origin() != AgeOrigin.BIRTH);
     }
 
     /**
@@ -195,10 +218,8 @@ public final class GridRequests implements ChunkSolver {
     }
 
     /** The zero-age ladder of a line, shared by all its chunks (a rung is the same whoever builds it). */
-    private ZamsLadder ladderOf(PhysicsSet set, ZamsBuilder builder, Composition composition) {
-        synchronized (ladders) {
-            return ladders.computeIfAbsent(set, s -> new ZamsLadder(builder, composition));
-        }
+    private ZamsLadder ladderOf(Line line, ZamsBuilder builder, Composition composition) {
+        return ladders.ladder(line, () -> new ZamsLadder(builder, composition));
     }
 
     /**
