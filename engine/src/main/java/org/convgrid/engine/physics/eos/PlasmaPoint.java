@@ -43,6 +43,9 @@ final class PlasmaPoint {
     private static final double CLIP_LOW = Math.exp(-LN_CLIP);
     private static final double CLIP_HIGH = Math.exp(LN_CLIP);
     private static final double LN_HALF = Math.log(0.5);
+    /** Ratios below which 1 + r == 1 and from which 1 + r == r in double arithmetic (see {@link #ionisedShare}). */
+    private static final double TINY_RATIO = 0x1p-53;
+    private static final double HUGE_RATIO = 0x1p54;
     private static final double LN_TWO = Math.log(2.0);
 
     private final PlasmaElements el;
@@ -89,6 +92,8 @@ final class PlasmaPoint {
     private double moleculeEnergy;
     private double moleculeEnergyT;
 
+    /** d ye/d ln x of the last {@link #ions}. */
+    private double ionSpread;
     /** Outputs of {@link #solveStep}: residual ln n_e(FD) - ln n_e(ions), its eta-slope, ionisation fractions. */
     double residual;
     double residualSlope;
@@ -241,7 +246,21 @@ final class PlasmaPoint {
         } else {
             coulombTerm.clear();
         }
-        double x = ratio(eta);
+        double ye = ions(ratio(eta));
+        double spread = ionSpread;
+        ye = Math.max(ye, Double.MIN_NORMAL);
+        residual = Math.log(yeFd / ye);
+        // d ln x/d eta = -(1 + d(mu_C/kT)/d eta), and d ln ye/d ln x = spread/ye.
+        residualSlope = fd[4] / fd[1] + spread / ye * (1.0 + coulombTerm.shiftEta);
+        electrons = yeFd;
+    }
+
+    /**
+     * Free electrons per u of the ions at ratio x (see {@link #ratio}), with their spread d ye/d ln x in
+     * {@link #ionSpread}, and the H and He fractions: the ion side of the neutrality balance, used by
+     * {@link #solveStep}.
+     */
+    private double ions(double x) {
         double ye = 0.0;
         double spread = 0.0;
 
@@ -269,20 +288,15 @@ final class PlasmaPoint {
         spread += a * (heliumSingle + 4.0 * heliumDouble - mean * mean);
 
         for (int m = 0; m < el.metalCount; m++) {
-            double rf = kFirst[m] * x;
-            double g1 = rf / (1.0 + rf);
-            double ri = kInner[m] * x;
-            double y = ri / (1.0 + ri);
+            double g1 = ionisedShare(kFirst[m] * x);
+            double y = ionisedShare(kInner[m] * x);
             int sites = el.charge[m] - 1;
             a = abundance[2 + m];
             ye += a * (g1 + sites * y);
             spread += a * (g1 * (1.0 - g1) + sites * y * (1.0 - y));
         }
-        ye = Math.max(ye, Double.MIN_NORMAL);
-        residual = Math.log(yeFd / ye);
-        // d ln x/d eta = -(1 + d(mu_C/kT)/d eta), and d ln ye/d ln x = spread/ye.
-        residualSlope = fd[4] / fd[1] + spread / ye * (1.0 + coulombTerm.shiftEta);
-        electrons = yeFd;
+        ionSpread = spread;
+        return ye;
     }
 
     /**
@@ -391,10 +405,10 @@ final class PlasmaPoint {
             a = abundance[2 + m];
             int sites = el.charge[m] - 1;
             double rf = kFirst[m] * x;
-            double g0 = 1.0 / (1.0 + rf);
+            double g0 = neutralShare(rf);
             double g1 = rf * g0;
             double ri = kInner[m] * x;
-            double y0 = 1.0 / (1.0 + ri);
+            double y0 = neutralShare(ri);
             double y = ri * y0;
             double wf = a * g1 * g0;
             double wi = a * sites * y * y0;
@@ -449,6 +463,27 @@ final class PlasmaPoint {
     /** x = e^(eta_ref - eta - mu_C/kT), clipped (see {@link #LN_CLIP}). */
     private double ratio(double eta) {
         return Math.exp(Math.max(-LN_CLIP, Math.min(LN_CLIP, reference - eta - coulombTerm.shift)));
+    }
+
+    /**
+     * r/(1 + r), the ionised share of a two-state stage with ratio r, without the division where it is not needed:
+     * below 2^-53 the sum 1 + r rounds to 1, so the quotient is r exactly, and from 2^54 up (where 1 is below half
+     * an ulp of r) it rounds to r, so the quotient is 1 exactly (bitwise the value of the division). Cool gas has many such stages (the inner sites of
+     * every metal in a photosphere, K ~ e^-600, and its first stages of high potential).
+     */
+    private static double ionisedShare(double r) {
+        if (r < TINY_RATIO) {
+            return r;
+        }
+        if (r >= HUGE_RATIO) {
+            return 1.0;
+        }
+        return r / (1.0 + r);
+    }
+
+    /** 1/(1 + r), the neutral share, exactly 1 below 2^-53 without the division (see {@link #ionisedShare}). */
+    private static double neutralShare(double r) {
+        return r < TINY_RATIO ? 1.0 : 1.0 / (1.0 + r);
     }
 
     /** He0, He+ and He++ fractions at ratio x; the ratio product saturates to pure He++ / He+ beyond 1e300. */
