@@ -188,12 +188,13 @@ final class PlasmaPoint {
         // hot gas (the switch-off leaves no molecules there), which keeps the interior cost unchanged.
         pairing = 0.0;
         if (t < MolecularHydrogen.MAX_TEMPERATURE && abundance[0] > 0.0) {
-            double share = MolecularHydrogen.vibrationalShare(t);
-            pairing = Math.exp(Math.log(rho * abundance[0] / Constants.M_U) - MolecularHydrogen.lnSwitchedConstant(t));
+            double vibration = MolecularHydrogen.vibrationalFactor(t);
+            double share = MolecularHydrogen.vibrationalShare(t, vibration);
+            pairing = MolecularHydrogen.pairing(rho * abundance[0] / Constants.M_U, t, vibration);
             pairingT = -MolecularHydrogen.lnSwitchedConstantSlope(t, share);
             moleculeEnergy = MolecularHydrogen.switchedInternalEnergy(t, share)
                     - MolecularHydrogen.DISSOCIATION_ENERGY_EV * Constants.EV;
-            moleculeEnergyT = MolecularHydrogen.switchedInternalEnergySlope(t, share);
+            moleculeEnergyT = MolecularHydrogen.switchedInternalEnergySlope(t, share, vibration);
         }
         kHe0 = expK(LN_TWO - el.heliumChi0 / kT + xiHe0 - xiHe1);
         kHe1 = expK(LN_HALF - el.heliumChi1 / kT + xiHe1);
