@@ -225,8 +225,12 @@ final class PlasmaPoint {
      * photosphere within ~0.01 of the root, and the Newton iteration then needs three steps instead of five.
      * The result is returned as eta = eta_ref - ln x. Degeneracy and the Coulomb shift are ignored: the Newton
      * iteration corrects them.
+     *
+     * @param start the caller's own start, which it keeps unless this guess lies below it (the guess being a
+     *     bound on eta from above): the bound is sharpened only then, so a warm start from a solved neighbour
+     *     pays nothing for it
      */
-    double ionisationGuess() {
+    double ionisationGuess(double start) {
         double t = temperature;
         double q = 0.5 * Math.sqrt(Math.PI) * ELECTRON_DENSITY_CONSTANT * (t * Math.sqrt(t)) * Constants.M_U
                 / density * Math.exp(reference);
@@ -246,6 +250,10 @@ final class PlasmaPoint {
                 : 2.0 * q / (b + Math.sqrt(b * b + 2.0 * twoA * q));
         if (root > x) {
             x = root;
+        }
+        double bound = reference - Math.log(x);
+        if (!(bound < start)) {
+            return bound;
         }
         double fullyIonised = q / yeMax;
         for (int i = 0; i < GUESS_REFINEMENTS && x > fullyIonised * (1.0 + GUESS_TOLERANCE); i++) {
