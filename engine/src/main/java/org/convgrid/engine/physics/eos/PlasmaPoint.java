@@ -515,8 +515,9 @@ final class PlasmaPoint {
     /**
      * r/(1 + r), the ionised share of a two-state stage with ratio r, without the division where it is not needed:
      * below 2^-53 the sum 1 + r rounds to 1, so the quotient is r exactly, and from 2^54 up (where 1 is below half
-     * an ulp of r) it rounds to r, so the quotient is 1 exactly (bitwise the value of the division). Cool gas has many such stages (the inner sites of
-     * every metal in a photosphere, K ~ e^-600, and its first stages of high potential).
+     * an ulp of r) it rounds to r, so the quotient is 1 exactly (bitwise the value of the division). Cool gas has
+     * many such stages: the inner sites of every metal in a photosphere (K ~ e^-600 at 5000 K) and, cooler still,
+     * the first stages of high potential (neon at 3000 K).
      */
     private static double ionisedShare(double r) {
         if (r < TINY_RATIO) {
