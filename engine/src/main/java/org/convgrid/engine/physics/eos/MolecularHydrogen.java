@@ -62,6 +62,31 @@ final class MolecularHydrogen {
         return lnDissociationConstant(temperature) + switchExponent(temperature);
     }
 
+    /**
+     * n_H/K of {@link #lnSwitchedConstant} (the pairing of the equation of state), for {@code atoms} hydrogen nuclei
+     * per cm^3, as a product with one exponential instead of the four logarithms of ln K: K = 4 (pi m_H k T/h^2)^(3/2)
+     * (2 theta_rot/T) (1 - e^-v) e^(-D0/kT) e^((T/T_s)^4), v = theta_vib/T, the same constant (rounding apart).
+     *
+     * @param atoms hydrogen nuclei per cm^3
+     * @param vibration e^v, {@link #vibrationalFactor}
+     */
+    static double pairing(double atoms, double temperature, double vibration) {
+        double translational = TRANSLATIONAL * temperature;
+        double rotation = temperature / (2.0 * THETA_ROT);
+        return atoms * rotation * vibration
+                / (4.0 * translational * Math.sqrt(translational) * (vibration - 1.0))
+                * Math.exp(DISSOCIATION_ENERGY_EV * Constants.EV / (Constants.K_B * temperature)
+                        - switchExponent(temperature));
+    }
+
+    /**
+     * e^v with v = theta_vib/T, the one exponential that the vibrational share, the energy slope and
+     * {@link #pairing} share: a caller that needs several of them computes it once and passes it on.
+     */
+    static double vibrationalFactor(double temperature) {
+        return Math.exp(THETA_VIB / temperature);
+    }
+
     /** Internal (rotation + vibration) energy of one molecule above its ground level, erg, ideal gas. */
     static double internalEnergy(double temperature) {
         return internalEnergy(temperature, vibrationalShare(temperature));
@@ -72,10 +97,14 @@ final class MolecularHydrogen {
      * constant share: a caller that needs several of them computes it once and passes it on.
      */
     static double vibrationalShare(double temperature) {
-        double v = THETA_VIB / temperature;
+        return vibrationalShare(temperature, vibrationalFactor(temperature));
+    }
+
+    /** As {@link #vibrationalShare(double)}, with {@link #vibrationalFactor} already known. */
+    static double vibrationalShare(double temperature, double vibration) {
         // e^v - 1 with v >= 0.16 where the equation of state asks (below MAX_TEMPERATURE): no digits lost that
         // matter, and the intrinsic exp is several times cheaper than the native expm1 of this JDK
-        return v / (Math.exp(v) - 1.0);
+        return THETA_VIB / temperature / (vibration - 1.0);
     }
 
     private static double internalEnergy(double temperature, double share) {
@@ -102,13 +131,16 @@ final class MolecularHydrogen {
      * (rotation, the harmonic-oscillator heat capacity, and the switch-off term).
      */
     static double switchedInternalEnergySlope(double temperature) {
-        return switchedInternalEnergySlope(temperature, vibrationalShare(temperature));
+        double vibration = vibrationalFactor(temperature);
+        return switchedInternalEnergySlope(temperature, vibrationalShare(temperature, vibration), vibration);
     }
 
-    /** As {@link #switchedInternalEnergySlope(double)}, with {@link #vibrationalShare} already known. */
-    static double switchedInternalEnergySlope(double temperature, double share) {
-        double v = THETA_VIB / temperature;
-        return Constants.K_B * temperature * (1.0 + share * share * Math.exp(v) - 20.0 * switchExponent(temperature));
+    /**
+     * As {@link #switchedInternalEnergySlope(double)}, with {@link #vibrationalFactor} and {@link #vibrationalShare}
+     * already known.
+     */
+    static double switchedInternalEnergySlope(double temperature, double share, double vibration) {
+        return Constants.K_B * temperature * (1.0 + share * share * vibration - 20.0 * switchExponent(temperature));
     }
 
     /** Internal energy including the switch-off term kT T dlnS/dT = -4 kT (T/T_s)^4, erg. */

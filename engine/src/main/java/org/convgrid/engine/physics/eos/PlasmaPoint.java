@@ -43,6 +43,16 @@ final class PlasmaPoint {
     private static final double CLIP_LOW = Math.exp(-LN_CLIP);
     private static final double CLIP_HIGH = Math.exp(LN_CLIP);
     private static final double LN_HALF = Math.log(0.5);
+    /** Tangent steps that sharpen {@link #ionisationGuess} at most. */
+    static final int GUESS_REFINEMENTS = 2;
+    /**
+     * Relative change of the guessed x below which {@link #ionisationGuess} stops sharpening: ~0.01 in eta, the
+     * size of the errors it ignores (degeneracy, Coulomb shift) at the points where it matters.
+     */
+    static final double GUESS_TOLERANCE = 0.01;
+    /** Ratios below which 1 + r == 1 and from which 1 + r == r in double arithmetic (see {@link #ionisedShare}). */
+    private static final double TINY_RATIO = 0x1p-53;
+    private static final double HUGE_RATIO = 0x1p54;
     private static final double LN_TWO = Math.log(2.0);
 
     private final PlasmaElements el;
@@ -89,6 +99,8 @@ final class PlasmaPoint {
     private double moleculeEnergy;
     private double moleculeEnergyT;
 
+    /** d ye/d ln x of the last {@link #ions}. */
+    private double ionSpread;
     /** Outputs of {@link #solveStep}: residual ln n_e(FD) - ln n_e(ions), its eta-slope, ionisation fractions. */
     double residual;
     double residualSlope;
@@ -176,12 +188,13 @@ final class PlasmaPoint {
         // hot gas (the switch-off leaves no molecules there), which keeps the interior cost unchanged.
         pairing = 0.0;
         if (t < MolecularHydrogen.MAX_TEMPERATURE && abundance[0] > 0.0) {
-            double share = MolecularHydrogen.vibrationalShare(t);
-            pairing = Math.exp(Math.log(rho * abundance[0] / Constants.M_U) - MolecularHydrogen.lnSwitchedConstant(t));
+            double vibration = MolecularHydrogen.vibrationalFactor(t);
+            double share = MolecularHydrogen.vibrationalShare(t, vibration);
+            pairing = MolecularHydrogen.pairing(rho * abundance[0] / Constants.M_U, t, vibration);
             pairingT = -MolecularHydrogen.lnSwitchedConstantSlope(t, share);
             moleculeEnergy = MolecularHydrogen.switchedInternalEnergy(t, share)
                     - MolecularHydrogen.DISSOCIATION_ENERGY_EV * Constants.EV;
-            moleculeEnergyT = MolecularHydrogen.switchedInternalEnergySlope(t, share);
+            moleculeEnergyT = MolecularHydrogen.switchedInternalEnergySlope(t, share, vibration);
         }
         kHe0 = expK(LN_TWO - el.heliumChi0 / kT + xiHe0 - xiHe1);
         kHe1 = expK(LN_HALF - el.heliumChi1 / kT + xiHe1);
@@ -199,10 +212,25 @@ final class PlasmaPoint {
      * and the true root x* is at least each of the roots obtained by over-estimating the ions' electrons: all
      * species fully ionised (Q/x = ye_max); every stage in its weak-ionisation limit (ye <= S x, S the sum of
      * a K); hydrogen exact and everything else fully ionised (a quadratic). The largest of these lower bounds is
-     * returned as eta = eta_ref - ln x; it is exact for neutral gas ionised by metals and for pure hydrogen.
-     * Degeneracy and the Coulomb shift are ignored: the Newton iteration corrects them.
+     * taken; it is exact for neutral gas ionised by metals and for pure hydrogen.
+     *
+     * <p>Where it lies above the fully ionised root by more than {@link #GUESS_TOLERANCE} (partial ionisation
+     * by several donors, as in a K-dwarf photosphere at 5000 K, where Mg, Fe and Si give about 42, 27 and 18 % of
+     * the electrons and the bound above is 1.6 off in eta), it is sharpened by up to {@link #GUESS_REFINEMENTS}
+     * tangent steps: each stage's ionised fraction is concave in x, so the tangent of ye(x) at a lower bound x0,
+     * ye(x0) + ye'(x0) (x - x0), over-estimates the ions' electrons and its crossing with Q/x (a quadratic) is
+     * again a lower bound, converging quadratically on the root; helium's second stage and the molecules are
+     * only nearly concave, so every step is also kept within [x0, Q/ye(x0)], which always holds the root (ye
+     * grows with x). Each step is one pass over the species without an exponential; two bring the K-dwarf
+     * photosphere within ~0.01 of the root, and the Newton iteration then needs three steps instead of five.
+     * The result is returned as eta = eta_ref - ln x. Degeneracy and the Coulomb shift are ignored: the Newton
+     * iteration corrects them.
+     *
+     * @param start the caller's own start, which it keeps unless this guess lies below it (the guess being a
+     *     bound on eta from above): the bound is sharpened only then, so a warm start from a solved neighbour
+     *     pays nothing for it
      */
-    double ionisationGuess() {
+    double ionisationGuess(double start) {
         double t = temperature;
         double q = 0.5 * Math.sqrt(Math.PI) * ELECTRON_DENSITY_CONSTANT * (t * Math.sqrt(t)) * Constants.M_U
                 / density * Math.exp(reference);
@@ -223,6 +251,30 @@ final class PlasmaPoint {
         if (root > x) {
             x = root;
         }
+        double bound = reference - Math.log(x);
+        if (!(bound < start)) {
+            return bound;
+        }
+        double fullyIonised = q / yeMax;
+        for (int i = 0; i < GUESS_REFINEMENTS && x > fullyIonised * (1.0 + GUESS_TOLERANCE); i++) {
+            double ye = ions(x);
+            if (!(ye > 0.0)) {
+                break;
+            }
+            // tangent ye(x0) + s (X - x0) with s = spread/x0: s X^2 + c X - Q = 0, c = ye(x0) - spread
+            double slope = ionSpread / x;
+            double c = ye - ionSpread;
+            double d = Math.sqrt(c * c + 4.0 * slope * q);
+            double next = c < 0.0 ? (d - c) / (2.0 * slope) : 2.0 * q / (c + d);
+            next = Math.min(next, q / ye);
+            if (!(next > x * (1.0 + GUESS_TOLERANCE))) {
+                if (next > x) {
+                    x = next;
+                }
+                break;
+            }
+            x = next;
+        }
         return reference - Math.log(x);
     }
 
@@ -241,7 +293,21 @@ final class PlasmaPoint {
         } else {
             coulombTerm.clear();
         }
-        double x = ratio(eta);
+        double ye = ions(ratio(eta));
+        double spread = ionSpread;
+        ye = Math.max(ye, Double.MIN_NORMAL);
+        residual = Math.log(yeFd / ye);
+        // d ln x/d eta = -(1 + d(mu_C/kT)/d eta), and d ln ye/d ln x = spread/ye.
+        residualSlope = fd[4] / fd[1] + spread / ye * (1.0 + coulombTerm.shiftEta);
+        electrons = yeFd;
+    }
+
+    /**
+     * Free electrons per u of the ions at ratio x (see {@link #ratio}), with their spread d ye/d ln x in
+     * {@link #ionSpread}, and the H and He fractions: the ion side of the neutrality balance, shared by
+     * {@link #solveStep} and {@link #ionisationGuess}.
+     */
+    private double ions(double x) {
         double ye = 0.0;
         double spread = 0.0;
 
@@ -269,20 +335,15 @@ final class PlasmaPoint {
         spread += a * (heliumSingle + 4.0 * heliumDouble - mean * mean);
 
         for (int m = 0; m < el.metalCount; m++) {
-            double rf = kFirst[m] * x;
-            double g1 = rf / (1.0 + rf);
-            double ri = kInner[m] * x;
-            double y = ri / (1.0 + ri);
+            double g1 = ionisedShare(kFirst[m] * x);
+            double y = ionisedShare(kInner[m] * x);
             int sites = el.charge[m] - 1;
             a = abundance[2 + m];
             ye += a * (g1 + sites * y);
             spread += a * (g1 * (1.0 - g1) + sites * y * (1.0 - y));
         }
-        ye = Math.max(ye, Double.MIN_NORMAL);
-        residual = Math.log(yeFd / ye);
-        // d ln x/d eta = -(1 + d(mu_C/kT)/d eta), and d ln ye/d ln x = spread/ye.
-        residualSlope = fd[4] / fd[1] + spread / ye * (1.0 + coulombTerm.shiftEta);
-        electrons = yeFd;
+        ionSpread = spread;
+        return ye;
     }
 
     /**
@@ -391,10 +452,10 @@ final class PlasmaPoint {
             a = abundance[2 + m];
             int sites = el.charge[m] - 1;
             double rf = kFirst[m] * x;
-            double g0 = 1.0 / (1.0 + rf);
+            double g0 = neutralShare(rf);
             double g1 = rf * g0;
             double ri = kInner[m] * x;
-            double y0 = 1.0 / (1.0 + ri);
+            double y0 = neutralShare(ri);
             double y = ri * y0;
             double wf = a * g1 * g0;
             double wi = a * sites * y * y0;
@@ -449,6 +510,28 @@ final class PlasmaPoint {
     /** x = e^(eta_ref - eta - mu_C/kT), clipped (see {@link #LN_CLIP}). */
     private double ratio(double eta) {
         return Math.exp(Math.max(-LN_CLIP, Math.min(LN_CLIP, reference - eta - coulombTerm.shift)));
+    }
+
+    /**
+     * r/(1 + r), the ionised share of a two-state stage with ratio r, without the division where it is not needed:
+     * below 2^-53 the sum 1 + r rounds to 1, so the quotient is r exactly, and from 2^54 up (where 1 is below half
+     * an ulp of r) it rounds to r, so the quotient is 1 exactly (bitwise the value of the division). Cool gas has
+     * many such stages: the inner sites of every metal in a photosphere (K ~ e^-600 at 5000 K) and, cooler still,
+     * the first stages of high potential (neon at 3000 K).
+     */
+    private static double ionisedShare(double r) {
+        if (r < TINY_RATIO) {
+            return r;
+        }
+        if (r >= HUGE_RATIO) {
+            return 1.0;
+        }
+        return r / (1.0 + r);
+    }
+
+    /** 1/(1 + r), the neutral share, exactly 1 below 2^-53 without the division (see {@link #ionisedShare}). */
+    private static double neutralShare(double r) {
+        return r < TINY_RATIO ? 1.0 : 1.0 / (1.0 + r);
     }
 
     /** He0, He+ and He++ fractions at ratio x; the ratio product saturates to pure He++ / He+ beyond 1e300. */

@@ -248,7 +248,7 @@ public final class StellarPlasmaEos implements EquationOfState {
         double eta = etaGuess;
         p.prepare(density, temperature, eta);
         if (eta < NON_DEGENERATE) {
-            double better = p.ionisationGuess();
+            double better = p.ionisationGuess(eta);
             if (Double.isFinite(better)) {
                 eta = Math.max(-PlasmaPoint.ETA_LIMIT + 1.0, Math.min(eta, better));
                 if (Math.abs(eta - p.reference) > REREFERENCE) {

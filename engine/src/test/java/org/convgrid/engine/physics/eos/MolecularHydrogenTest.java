@@ -94,4 +94,18 @@ class MolecularHydrogenTest {
             assertThat(slope).isCloseTo((1.5 * kT - moleculeEnergy) / kT, within(1e-12 * Math.abs(slope)));
         }
     }
+
+    @Test
+    void pairingIsTheDensityOverTheSwitchedConstant() {
+        // Derived: the product form of the pairing is n/K with K = e^(lnSwitchedConstant), the same constant written
+        // without logarithms, so the two agree to rounding (ln K reaches ~100 at 500 K, hence 1e-13 relative).
+        for (double t : new double[] {500.0, 1000.0, 3000.0, 5000.0, 1.2e4, 3.99e4}) {
+            for (double atoms : new double[] {1.0e8, 1.0e17, 1.0e24}) {
+                double expected = Math.exp(Math.log(atoms) - MolecularHydrogen.lnSwitchedConstant(t));
+                double pairing = MolecularHydrogen.pairing(atoms, t, MolecularHydrogen.vibrationalFactor(t));
+                assertThat(pairing).as("n = %s cm^-3, T = %s K", atoms, t)
+                        .isCloseTo(expected, within(1e-13 * expected));
+            }
+        }
+    }
 }
