@@ -42,6 +42,52 @@ class HomologySeederTest {
         }
     }
 
+    @Test
+    void shellsAConvectiveZoneRecededFromKeepTheNearerModelsTemperatureAndDensity() {
+        // shell 5 is convective in the lighter model only and its ln T jumps by 0.5 between the two (an exponent of 5
+        // over their 0.1 in ln M, beyond HomologySeeder.RECEDING_ZONE_EXPONENT); shell 6 is convective in both
+        ModelState a = synthetic(2.0e33, 0.0);
+        ModelState b = shifted(synthetic(2.0e33 * Math.exp(0.1), 0.1), 5, 0.5);
+        boolean[] lighter = new boolean[a.size()];
+        boolean[] heavier = new boolean[b.size()];
+        lighter[5] = true;
+        lighter[6] = true;
+        heavier[6] = true;
+        HomologySeeder seeder = new HomologySeeder();
+        double beyond = 2.0e33 * Math.exp(0.2);
+        ModelState c = seeder.extrapolate(b, a, beyond, heavier, lighter);
+        ModelState plain = seeder.extrapolate(b, a, beyond);
+        // held: the nearer model's values, not the jump repeated
+        assertThat(c.lnTemperature(5)).isCloseTo(b.lnTemperature(5), within(1e-12));
+        assertThat(c.lnDensity(5)).isCloseTo(b.lnDensity(5), within(1e-12));
+        assertThat(plain.lnTemperature(5)).isCloseTo(b.lnTemperature(5) + 0.5 + (0.2 - 0.01 * 5) * 0.1, within(1e-9));
+        // radius and luminosity, and every other shell, are extrapolated as without the zones
+        assertThat(c.lnRadius(5)).isCloseTo(plain.lnRadius(5), within(1e-12));
+        assertThat(c.luminosity(5)).isCloseTo(plain.luminosity(5), within(1e-9 * plain.luminosity(5)));
+        for (int k = 0; k < c.size(); k++) {
+            if (k != 5) {
+                assertThat(c.lnTemperature(k)).isCloseTo(plain.lnTemperature(k), within(1e-12));
+                assertThat(c.lnDensity(k)).isCloseTo(plain.lnDensity(k), within(1e-12));
+            }
+        }
+        // between the two models the zone may still cover the shell: interpolated as without the zones
+        ModelState between = seeder.extrapolate(b, a, 2.0e33 * Math.exp(0.05), heavier, lighter);
+        assertThat(between.lnTemperature(5)).isCloseTo(
+                seeder.extrapolate(b, a, 2.0e33 * Math.exp(0.05)).lnTemperature(5), within(1e-12));
+        // a small change (homology-sized) at a shell the zone left is extrapolated as usual
+        ModelState gentle = seeder.extrapolate(synthetic(2.0e33 * Math.exp(0.1), 0.1), a, beyond, heavier, lighter);
+        assertThat(gentle.lnTemperature(5)).isCloseTo(
+                seeder.extrapolate(synthetic(2.0e33 * Math.exp(0.1), 0.1), a, beyond).lnTemperature(5), within(1e-12));
+    }
+
+    /** The state with ln T of point {@code k} raised by {@code dLnT}. */
+    private static ModelState shifted(ModelState state, int k, double dLnT) {
+        double[] lnT = state.lnTemperatures();
+        lnT[k] += dLnT;
+        return new ModelState(state.mesh(), state.compositions(), state.lnRadii(), state.lnDensities(), lnT,
+                state.luminosities());
+    }
+
     /** A made-up monotonic structure whose shells move linearly with lnM = ln(M/M0) = x. */
     private static ModelState synthetic(double mass, double x) {
         int n = 20;
