@@ -33,8 +33,9 @@ import org.convgrid.engine.units.Constants;
  * physics. A mass whose guess does not relax is reached instead from {@link #ANCHOR_MASS} in mass steps of at most
  * {@link #MASS_WALK_FACTOR}, each start model scaled homologously to the next mass as its guess. Its age is zero:
  * at 1/x (~1e3-1e5 yr, the model's contraction time) any earlier history has been forgotten, so ages beyond a few
- * times that do not depend on the start (measured at 1 Msun, starting at 3.5e5 instead of 5e5 K: |D ln R| = 0.08
- * at 1e4 yr, 0.001-0.004 at 1e5 yr, 0.0017 at 1 Myr). Immutable and thread-safe.
+ * times that do not depend on the start (measured at 1 Msun, starting at 3.5e5 instead of 5e5 K: |D ln R| = 0.29
+ * at 1e3 yr, 0.09 at 1e4 yr, 0.003 at 1e5 yr, 0.006 at 0.3 Myr, 0.0009-0.0012 at 1 Myr, the spread that of two
+ * sets of requested ages, whose step sequences differ). Immutable and thread-safe.
  */
 public final class StartModelBuilder {
 
@@ -157,8 +158,8 @@ public final class StartModelBuilder {
 
     /**
      * The start model of {@code mass} (g) from that of a nearby mass by homology; when that fails, through the
-     * geometric mid-mass first, at most {@code halvings} times (at Z = 1e-4 the step 6.7 -> 10 Msun fails in the
-     * outer layers' density and temperature while 6.7 -> 8.2 -> 9.0 -> 9.5 -> 10 relaxes, with halved rate corrections).
+     * geometric mid-mass first, at most {@code halvings} times (with the bare polytrope as the guess, Z = 1e-4,
+     * 10 Msun was reached 6.7 -> 8.2 -> 9.0 -> 9.5 -> 10 Msun).
      */
     private StartModel walked(StartModel from, double mass, int halvings, int[] spent) {
         double target = centralTemperature(mass);
