@@ -21,20 +21,21 @@ import org.convgrid.engine.units.Constants;
  * happens on the track (common practice: evolution codes start their tracks before deuterium ignition); more
  * massive stars, at the same T_c, would start at radii above ~80 Rsun, where the relaxation of their tenuous
  * surfaces fails, and their lower central densities keep deuterium unburnt to higher T_c anyway (the burning rate
- * is ~rho T^12 there). The model is an n = 1.5 polytrope ({@link HayashiGuess}) relaxed with the energy release of
- * homologous contraction at the rate x = -dlnR/dt ({@link HomologousContraction}); x sets the radius (on a
- * Hayashi track L ~ R^2 and L ~ x G M^2/R, so R^3 ~ x), and it is corrected by secant steps in ln x against
- * ln T_c until T_c is within {@link #CENTRAL_TEMPERATURE_TOLERANCE} of the target. The polytrope is first relaxed
- * with the opacity's {@link org.convgrid.engine.physics.opacity.Opacity#relaxationAid()} (for the default opacity:
- * without the low-temperature tables; the polytrope's outer layers lie beyond their density edge at log R = +1),
- * then with the physics itself from there: a continuation, so the start model is that of the physics; if that
- * fails, directly. A mass whose
- * polytrope does not
- * relax is reached instead from {@link #ANCHOR_MASS} in mass steps of at most {@link #MASS_WALK_FACTOR}, each
- * start model scaled homologously to the next mass as its guess. Its age is zero: at 1/x
- * (~1e3-1e5 yr, the model's contraction time) any earlier history has been forgotten, so ages beyond a few
- * times that do not depend on the start (measured at 1 Msun, starting at 3.5e5 instead of 5e5 K: |D ln R| = 0.08
- * at 1e4 yr, 0.001-0.004 at 1e5 yr, 0.0017 at 1 Myr). Immutable and thread-safe.
+ * is ~rho T^12 there). The model is an n = 1.5 polytrope with an adiabatic envelope below the atmosphere
+ * ({@link HayashiGuess}) relaxed with the energy release of homologous contraction at the rate x = -dlnR/dt
+ * ({@link HomologousContraction}); x sets the radius (on a Hayashi track L ~ R^2 and L ~ x G M^2/R, so R^3 ~ x),
+ * and it is corrected by secant steps in ln x (each at most {@link #MAX_RATE_STEP}) against ln T_c until T_c is
+ * within {@link #CENTRAL_TEMPERATURE_TOLERANCE} of the target. Those intermediate relaxations stop at
+ * {@link #INTERMEDIATE_TOLERANCE}; only the accepted one is relaxed to the solver's full tolerance. The guess is
+ * relaxed with the physics itself; when that fails, with the opacity's
+ * {@link org.convgrid.engine.physics.opacity.Opacity#relaxationAid()} first (for the default opacity: without the
+ * low-temperature tables) and with the physics from there, a continuation, so the start model is that of the
+ * physics. A mass whose guess does not relax is reached instead from {@link #ANCHOR_MASS} in mass steps of at most
+ * {@link #MASS_WALK_FACTOR}, each start model scaled homologously to the next mass as its guess. Its age is zero:
+ * at 1/x (~1e3-1e5 yr, the model's contraction time) any earlier history has been forgotten, so ages beyond a few
+ * times that do not depend on the start (measured at 1 Msun, starting at 3.5e5 instead of 5e5 K: |D ln R| = 0.29
+ * at 1e3 yr, 0.09 at 1e4 yr, 0.003 at 1e5 yr, 0.006 at 0.3 Myr, 0.0009-0.0012 at 1 Myr, the spread that of two
+ * sets of requested ages, whose step sequences differ). Immutable and thread-safe.
  */
 public final class StartModelBuilder {
 
@@ -44,10 +45,36 @@ public final class StartModelBuilder {
     public static final double CENTRAL_TEMPERATURE_TOLERANCE = 0.01;
     /** Corrections of the contraction rate allowed. */
     public static final int RATE_BUDGET = 12;
+    /**
+     * Largest correction of ln x in one secant step. Where T_c changes abruptly with x (Z = 1e-4 near 10 Msun,
+     * where a radiative interior appears) steps of up to 1.7 failed even when halved, and the start was walked from
+     * 6.7 Msun (2167 Newton iterations); steps of 0.75 relax there in 7-9 iterations or after one to three halvings
+     * (432 in all).
+     */
+    public static final double MAX_RATE_STEP = 0.75;
     /** Times a correction of the contraction rate whose relaxation fails is halved before the start is refused. */
     public static final int RATE_STEP_HALVINGS = 3;
-    /** Newton budget of each relaxation. */
+    /** Newton budget of the relaxation to the full tolerance. */
     public static final int RELAXATION_BUDGET = 80;
+    /**
+     * Newton budget of a relaxation from a guess (the Hayashi guess, or a start model scaled to another mass):
+     * those that converge take at most 32 iterations (measured 0.1-10 Msun every 0.1 dex, Z 1e-4-0.04), those
+     * that do not stall with corrections of 1-1e6 in the outer layers, so a larger budget only makes a failure
+     * dearer.
+     */
+    public static final int GUESS_BUDGET = 50;
+    /**
+     * Newton budget of a relaxation at a corrected contraction rate: those that converge take at most 20
+     * iterations (measured as above); a correction that fails is halved.
+     */
+    public static final int CORRECTION_BUDGET = 30;
+    /**
+     * Tolerance of the relaxations on the way to the contraction rate (guess, remesh passes, secant steps): their
+     * T_c is needed to ~1e-3 (the target's tolerance is 0.01), their state only as the next one's start. Measured
+     * at 0.3-3 Msun, Z = 0.02 and 0.04: 2-8 fewer iterations per start model than relaxing each to the full
+     * tolerance (1e-3 saves no more).
+     */
+    public static final double INTERMEDIATE_TOLERANCE = 1.0e-4;
     /** Above this mass (g) the start's central temperature grows in proportion to the mass. */
     public static final double SCALING_MASS = 4.0 * Constants.M_SUN;
     /** Mass whose start model the polytropic guess reaches directly; others may be walked from it. */
@@ -64,9 +91,11 @@ public final class StartModelBuilder {
     private final PhysicsSet physics;
     private final MeshPlanner planner;
     private final StructureSolver solver;
-    /** Relaxes the polytrope first, with the opacity's relaxation aid; null when that is the opacity itself. */
+    /** Relaxes a guess the physics does not, with the opacity's relaxation aid; null when that is the opacity. */
     private final StructureSolver aidSolver;
     private final HenyeySolver.Settings settings;
+    private final HenyeySolver.Settings fromGuess;
+    private final HenyeySolver.Settings corrected;
     private final double centralTemperature;
 
     /**
@@ -78,6 +107,8 @@ public final class StartModelBuilder {
         this.settings = new HenyeySolver.Settings(HenyeySolver.DEFAULT_TOLERANCE, MAX_NEWTON_STEP,
                 RELAXATION_BUDGET);
         this.solver = new StructureSolver(physics, settings);
+        this.fromGuess = new HenyeySolver.Settings(INTERMEDIATE_TOLERANCE, MAX_NEWTON_STEP, GUESS_BUDGET);
+        this.corrected = new HenyeySolver.Settings(INTERMEDIATE_TOLERANCE, MAX_NEWTON_STEP, CORRECTION_BUDGET);
         Opacity aid = physics.opacity().relaxationAid();
         this.aidSolver = aid == physics.opacity() ? null : new StructureSolver(new PhysicsSet(physics.eos(), aid,
                 physics.nuclear(), physics.convection(), physics.criterion(), physics.surface(), physics.overshoot()),
@@ -97,43 +128,50 @@ public final class StartModelBuilder {
      * @throws ConvgridException NOT_CONVERGED when T_c does not reach its target within the budget
      */
     public StartModel build(double mass, Composition birth) {
+        int[] spent = {0};
+        StartModel built = build(mass, birth, spent);
+        return new StartModel(built.model(), built.contractionRate(), spent[0]);
+    }
+
+    /** As {@link #build(double, Composition)}; {@code spent[0]} counts every Newton iteration, failed ones too. */
+    private StartModel build(double mass, Composition birth, int[] spent) {
         double target = centralTemperature(mass);
-        ModelState guess = new HayashiGuess(planner.points()).guess(mass, birth, target);
+        ModelState guess = new HayashiGuess(planner.points(), physics).guess(mass, birth, target);
         // virial estimate: L = (3/7) x G M^2 / R for an n = 1.5 polytrope
         double radius = Math.exp(guess.lnRadius(guess.size() - 1));
         double rate = guess.surfaceLuminosity() * radius / (3.0 / 7.0 * Constants.G * mass * mass);
         try {
-            return converged(guess, rate, target, 0, true);
+            return converged(guess, rate, target, spent, true);
         } catch (ConvgridException direct) {
             double ratio = mass / ANCHOR_MASS;
             if (mass == ANCHOR_MASS) {
                 throw direct;
             }
-            // the polytrope is too poor a guess for this mass: walk from the anchor mass by homology (a mass within
+            // the Hayashi guess does not relax for this mass: walk from the anchor mass by homology (a mass within
             // one walk step of the anchor starts from the anchor itself: at Z = 0.04, 1.26 and 1.41 Msun failed
             // directly while 1 Msun converged)
             double nearer = Math.abs(Math.log(ratio)) <= Math.log(MASS_WALK_FACTOR) ? ANCHOR_MASS
                     : mass / Math.pow(MASS_WALK_FACTOR, Math.signum(Math.log(ratio)));
-            return walked(build(nearer, birth), mass, WALK_HALVINGS);
+            return walked(build(nearer, birth, spent), mass, WALK_HALVINGS, spent);
         }
     }
 
     /**
      * The start model of {@code mass} (g) from that of a nearby mass by homology; when that fails, through the
-     * geometric mid-mass first, at most {@code halvings} times (at Z = 1e-4 the step 6.7 -> 10 Msun fails in the
-     * outer layers' density and temperature while 6.7 -> 8.2 -> 9.0 -> 9.5 -> 10 relaxes, with halved rate corrections).
+     * geometric mid-mass first, at most {@code halvings} times (with the bare polytrope as the guess, Z = 1e-4,
+     * 10 Msun was reached 6.7 -> 8.2 -> 9.0 -> 9.5 -> 10 Msun).
      */
-    private StartModel walked(StartModel from, double mass, int halvings) {
+    private StartModel walked(StartModel from, double mass, int halvings, int[] spent) {
         double target = centralTemperature(mass);
         try {
             return converged(homologous(from.model().state(), mass, target), homologousRate(from, mass, target),
-                    target, from.iterations(), false);
+                    target, spent, false);
         } catch (ConvgridException failed) {
             if (halvings == 0) {
                 throw failed;
             }
-            StartModel mid = walked(from, Math.sqrt(from.model().mass() * mass), halvings - 1);
-            return walked(mid, mass, halvings - 1);
+            StartModel mid = walked(from, Math.sqrt(from.model().mass() * mass), halvings - 1, spent);
+            return walked(mid, mass, halvings - 1, spent);
         }
     }
 
@@ -166,25 +204,27 @@ public final class StartModelBuilder {
     }
 
     /**
-     * Relaxes from {@code start} (with the relaxation aid first when it is the polytrope, {@code rough}), correcting
-     * the contraction rate until T_c is on target. Off the polytrope (a walked start), a correction whose relaxation
-     * fails is halved, up to {@link #RATE_STEP_HALVINGS} times: the homologous guess misses T_c by up to e^0.5 near
-     * 10 Msun, and the full correction (x up to e^1.6 at once) fails in the outer layers; from the polytrope a
-     * failure goes on to the walk as before.
+     * Relaxes from {@code start} (with the relaxation aid when the physics fails and it is the Hayashi guess,
+     * {@code rough}), correcting the contraction rate until T_c is on target, then relaxes the accepted model to the
+     * full tolerance. A correction whose relaxation fails is halved, up to {@link #RATE_STEP_HALVINGS} times (the
+     * guess misses T_c by up to e^0.6 near 10 Msun, where larger corrections fail in the outer layers).
      */
-    private StartModel converged(ModelState start, double firstRate, double target, int alreadySpent,
-                                 boolean rough) {
+    private StartModel converged(ModelState start, double firstRate, double target, int[] spent, boolean rough) {
         double lnX = Math.log(firstRate);
-        int[] spent = {alreadySpent};
-        StellarModel model = rough && aidSolver != null ? relaxedWithAid(start, firstRate, spent)
-                : relaxed(solver, start, firstRate, spent);
+        StellarModel model = rough ? relaxedFromGuess(start, firstRate, spent)
+                : relaxed(solver, start, firstRate, spent, fromGuess);
         double lnTarget = Math.log(target);
         double prevLnX = Double.NaN;
         double prevMiss = Double.NaN;
         for (int k = 0; k < RATE_BUDGET; k++) {
             double miss = Math.log(model.global().centralTemperature()) - lnTarget;
             if (Math.abs(miss) <= CENTRAL_TEMPERATURE_TOLERANCE) {
-                return new StartModel(model, Math.exp(lnX), spent[0]);
+                if (model.report().lastCorrection() <= settings.tolerance()) {
+                    return new StartModel(model, Math.exp(lnX), spent[0]);
+                }
+                // on target: the same rate to the full tolerance (T_c moves by ~1e-4, checked again)
+                model = relaxed(solver, model.state(), Math.exp(lnX), spent, settings);
+                continue;
             }
             // R^3 ~ x and T_c ~ 1/R: dln T_c/dln x ~ -1/3; later steps use the measured slope
             double slope = Double.isNaN(prevLnX) ? -1.0 / 3.0 : (miss - prevMiss) / (lnX - prevLnX);
@@ -193,13 +233,13 @@ public final class StartModelBuilder {
             }
             prevLnX = lnX;
             prevMiss = miss;
-            double step = Math.max(-3.0, Math.min(3.0, miss / slope));
+            double step = Math.max(-MAX_RATE_STEP, Math.min(MAX_RATE_STEP, miss / slope));
             for (int halving = 0; ; halving++) {
                 try {
-                    model = relaxed(solver, model.state(), Math.exp(lnX - step), spent);
+                    model = relaxed(solver, model.state(), Math.exp(lnX - step), spent, corrected);
                     break;
                 } catch (SolveFailedException failed) {
-                    if (rough || halving == RATE_STEP_HALVINGS) {
+                    if (halving == RATE_STEP_HALVINGS) {
                         throw failed;
                     }
                     step *= 0.5;
@@ -220,30 +260,47 @@ public final class StartModelBuilder {
     }
 
     /**
-     * Relaxes the polytrope with the relaxation aid, then with the physics from there; when either fails, with the
-     * physics directly from the polytrope (at Z = 1e-4 the aid's path fails at every mass, where the direct one
-     * relaxes 0.1-3 Msun; at Z = 0.02 and 0.04 the aid's succeeds and the direct one fails at 0.5-2 Msun).
+     * Relaxes the Hayashi guess with the physics; when that fails, with the relaxation aid first and then with the
+     * physics from there. With the bare polytrope as the guess the physics failed at 0.5-2 Msun (Z = 0.02 and
+     * 0.04) and the aid at every mass at Z = 1e-4; with the adiabatic envelope the physics relaxes it at every mass
+     * 0.1-10 Msun, Z 1e-4-0.04, every 0.1 dex, but one (4.0 Msun, Z = 0.02, where the aid's path takes over), where
+     * the aid, its remesh passes and the physics took 40-60 iterations before (1 Msun, Z = 0.02: 53 + 5, now 23).
      */
-    private StellarModel relaxedWithAid(ModelState start, double rate, int[] spent) {
+    private StellarModel relaxedFromGuess(ModelState start, double rate, int[] spent) {
         try {
-            return relaxed(solver, relaxed(aidSolver, start, rate, spent).state(), rate, spent);
-        } catch (SolveFailedException aidFailed) {
-            return relaxed(solver, start, rate, spent);
+            return relaxed(solver, start, rate, spent, fromGuess);
+        } catch (SolveFailedException direct) {
+            if (aidSolver == null) {
+                throw direct;
+            }
+            return relaxed(solver, relaxed(aidSolver, start, rate, spent, fromGuess).state(), rate, spent, fromGuess);
         }
     }
 
     /**
-     * Relaxes at one contraction rate, then remeshes and relaxes again while the mesh is uneven (the polytrope's
-     * mesh does not follow the surface layers of the relaxed model); {@code spent[0]} counts the iterations.
+     * Relaxes at one contraction rate, then remeshes and relaxes again while the mesh is uneven (the guess's mesh
+     * does not follow the surface layers of the relaxed model); {@code spent[0]} counts the iterations, those of
+     * failed relaxations included.
      */
-    private StellarModel relaxed(StructureSolver with, ModelState start, double rate, int[] spent) {
+    private StellarModel relaxed(StructureSolver with, ModelState start, double rate, int[] spent,
+                                 HenyeySolver.Settings how) {
         HomologousContraction source = new HomologousContraction(rate);
-        StellarModel m = with.relax(start, source, null, settings);
-        spent[0] += m.report().iterations();
+        StellarModel m = counted(with, start, source, how, spent);
         for (int pass = 0; pass < MAX_REMESH_PASSES && planner.needsRemesh(m); pass++) {
-            m = with.relax(planner.remesh(m), source, null, settings);
-            spent[0] += m.report().iterations();
+            m = counted(with, planner.remesh(m), source, how, spent);
         }
         return m;
+    }
+
+    private static StellarModel counted(StructureSolver with, ModelState start, HomologousContraction source,
+                                        HenyeySolver.Settings how, int[] spent) {
+        try {
+            StellarModel m = with.relax(start, source, null, how);
+            spent[0] += m.report().iterations();
+            return m;
+        } catch (SolveFailedException failed) {
+            spent[0] += failed.report().iterations();
+            throw failed;
+        }
     }
 }

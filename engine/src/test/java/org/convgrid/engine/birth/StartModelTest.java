@@ -20,26 +20,27 @@ class StartModelTest {
     }
 
     @Test
-    void metalRichStartModelsNearTheAnchorMassAreReachedFromIt() {
-        // Z = 0.04: the polytrope does not relax directly at 1.26 and 2.0 Msun (its surface layers fail), so they
-        // are walked from the 1 Msun start model (1.26 from it at once, 2.0 through 1.33 Msun)
+    void metalRichStartModelsNearTheAnchorMassAreReached() {
+        // Z = 0.04: the bare polytrope did not relax at 1.26 and 2.0 Msun (its surface layers failed), and they were
+        // walked from the 1 Msun start model; the guess with its adiabatic envelope relaxes directly (measured)
         assertStartModels(0.04, 1.26, 2.0);
     }
 
     @Test
-    void metalPoorStartModelsRelaxWhereTheRelaxationAidFails() {
-        // Z = 1e-4: relaxed first with the default opacity's relaxation aid (the OPAL tables without the
-        // low-temperature ones), then with the default, the polytrope fails at every mass; directly it relaxes
-        // (measured 0.1-3 Msun; 10 Msun fails both ways)
+    void metalPoorStartModelsRelax() {
+        // Z = 1e-4: with the default opacity's relaxation aid (the OPAL tables without the low-temperature ones) the
+        // bare polytrope failed at every mass; the guess with its adiabatic envelope relaxes with the default
+        // (measured 0.1-10 Msun)
         assertStartModels(1.0e-4, 0.3, 1.0);
     }
 
     @Test
-    void metalPoorTenSolarMassesIsWalkedInShorterStepsWhereAStepFails() {
-        // Z = 1e-4, 10 Msun: neither path from the polytrope relaxes, nor the walk's step 6.7 -> 10 Msun (nor its
-        // full contraction-rate corrections); split steps 6.7 -> 8.2 -> 9.0 -> 9.5 -> 10 with halved corrections
-        // do. It is hotter than the Hayashi line at Z = 0.02 (measured Teff 5095 K; the line moves to higher Teff at
-        // higher mass and lower metallicity, from memory) and not fully convective: at this low metal opacity the
+    void metalPoorTenSolarMassesIsReachedWithHalvedRateCorrections() {
+        // Z = 1e-4, 10 Msun: T_c jumps with the contraction rate as the radiative interior appears, and corrections
+        // across the jump fail; halved ones reach it from its own guess (with the bare polytrope it was walked
+        // 6.7 -> 8.2 -> 9.0 -> 9.5 -> 10 Msun). It is hotter than the Hayashi line at Z = 0.02 (measured Teff
+        // 5095 K; the line moves to higher Teff at higher mass and lower metallicity, from memory) and not fully
+        // convective: at this low metal opacity the
         // interior is radiative, the convective envelope reaching down to m/M = 0.972 (measured); so the star is more
         // centrally condensed than an n = 1.5 polytrope, and its virial luminosity lies towards that of n = 3,
         // L = (3/4) x G M^2 / R, 7/4 of the n = 1.5 one (Chandrasekhar 1939, ch. IV; measured 1.60)
@@ -105,9 +106,9 @@ class StartModelTest {
             change[i] = Math.abs(Math.log(hot.models().get(i).model().global().radius()
                     / cool.models().get(i).model().global().radius()));
         }
-        // the start's memory fades over a few contraction times (1.1e4 and 4e3 yr): measured |D ln R| ~0.08 at
-        // 1e4 yr, 0.001-0.004 at 1e5 yr (the two step sequences differ, and so does their error), 0.0017 at 1 Myr
-        // (and 0.28 at 1e3 yr)
+        // the start's memory fades over a few contraction times (1.3e4 and 5e3 yr): measured |D ln R| 0.095 at
+        // 1e4 yr, 0.003 at 1e5 yr (the two step sequences differ, and so does their error), 0.0009 at 1 Myr (and,
+        // with StartModelProbe's ages, 0.29 at 1e3 yr, 0.006 at 0.3 Myr, 0.0012 at 1 Myr)
         assertThat(change[0]).isBetween(0.04, 0.15);
         assertThat(change[1]).isLessThan(0.01);
         assertThat(change[2]).isLessThan(3.0e-3);
