@@ -107,6 +107,17 @@ class BirthStepLimitProbe {
         System.out.printf("M %.2f Z %.3f coarse %.2f: %d steps (%d before the ZAMS), %d Newton iterations (rejected "
                 + "steps included), %.1f s, end %s at %.4g Gyr%n", mass, z, coarse, rows.size() - 1, youngSteps,
                 newton, seconds, result.end(), result.endAge() / Constants.GYR);
+        double zamsAge = Double.NaN;
+        for (double[] row : rows) {
+            if (row[10] >= NuclearLuminosity.ZERO_AGE_FRACTION) {
+                zamsAge = row[0];
+                break;
+            }
+        }
+        // to 12 digits, to show that a change of the starting guess changes the work and not the solution
+        System.out.printf("first model at L_nuc/L >= %.2f: %.12e s; end %.12e s; last model: surface 7Li %.12e, "
+                + "L %.12e erg/s%n", NuclearLuminosity.ZERO_AGE_FRACTION, zamsAge, result.endAge(),
+                rows.get(rows.size() - 1)[7], rows.get(rows.size() - 1)[2]);
         System.out.print("log age yr | steps |");
         for (String n : NAMES) {
             System.out.printf(" %7s", n);
