@@ -7,6 +7,8 @@
 #
 # Defaults: benchmarks/grids/two-hundred-zero-age.yaml (4 Z x 50 masses 0.1-20 Msun, zero age), 5 runs each,
 # cli/target/convgrid.jar (build it first: ./mvnw -B -ntp -o -q -pl cli -am package -DskipTests).
+# GRID_RATIO_JVM_OPTIONS adds JVM options to every run, e.g. GRID_RATIO_JVM_OPTIONS=-XX:+UseSerialGC, the collector
+# the launcher gives `run` (without it the JVM's defaults are measured, as before).
 set -euo pipefail
 here="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 grid="${1:-$here/benchmarks/grids/two-hundred-zero-age.yaml}"
@@ -19,8 +21,10 @@ trap 'rm -rf "$work"' EXIT
 timed_run() {
   local threads="$1" dir="$2" start end
   start=$(date +%s.%N)
-  java -Djava.awt.headless=true -jar "$jar" run "$grid" --out "$dir" --threads "$threads" --no-refine --quiet \
-    --force >/dev/null || [ $? -eq 3 ]
+  # word splitting intended: several options in one variable
+  # shellcheck disable=SC2086
+  java -Djava.awt.headless=true ${GRID_RATIO_JVM_OPTIONS:-} -jar "$jar" run "$grid" --out "$dir" \
+    --threads "$threads" --no-refine --quiet --force >/dev/null || [ $? -eq 3 ]
   end=$(date +%s.%N)
   echo "$end - $start" | bc -l
 }
@@ -29,7 +33,8 @@ median() {
   sort -g | awk '{v[NR] = $1} END {print (NR % 2) ? v[(NR + 1) / 2] : (v[NR / 2] + v[NR / 2 + 1]) / 2}'
 }
 
-echo "grid: $grid; $runs runs per thread count; load before: $(cut -d' ' -f1-3 /proc/loadavg)"
+echo "grid: $grid; $runs runs per thread count; JVM options: ${GRID_RATIO_JVM_OPTIONS:-none};" \
+  "load before: $(cut -d' ' -f1-3 /proc/loadavg)"
 one=() two=()
 for ((k = 1; k <= runs; k++)); do
   one+=("$(timed_run 1 "$work/t1")")

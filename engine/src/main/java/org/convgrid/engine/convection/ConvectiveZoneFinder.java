@@ -100,25 +100,15 @@ public final class ConvectiveZoneFinder {
     /** The convective structure of a profile. */
     public ConvectiveStructure find(ZoneProfile profile) {
         ProfileView p = new ProfileView(profile);
-        List<ConvectiveZone> zones = new ArrayList<>();
-        List<int[]> spans = new ArrayList<>(); // first and last convective mesh index of each zone
+        List<int[]> spans = convectiveSpans(p.excess);
         int n = p.excess.length;
-        int k = 0;
-        while (k < n) {
-            if (!(p.excess[k] > 0.0)) {
-                k++;
-                continue;
-            }
-            int first = k;
-            while (k + 1 < n && p.excess[k + 1] > 0.0) {
-                k++;
-            }
-            int last = k;
+        List<ConvectiveZone> zones = new ArrayList<>(spans.size());
+        for (int[] span : spans) {
+            int first = span[0];
+            int last = span[1];
             double[] inner = first == 0 ? new double[] {0.0, 0.0} : p.crossing(first - 1);
             double[] outer = last == n - 1 ? new double[] {1.0, 1.0} : p.crossing(last);
             zones.add(new ConvectiveZone(inner[0], outer[0], inner[1], outer[1]));
-            spans.add(new int[] {first, last});
-            k++;
         }
         if (zones.isEmpty()) {
             return new ConvectiveStructure(zones, StructureClass.RADIATIVE, 0.0, 1.0, 1.0, 0.0, Double.NaN,
@@ -152,6 +142,32 @@ public final class ConvectiveZoneFinder {
                 outermost.innerMassFraction(), outermost.innerRadiusFraction(),
                 profile.totalMass() * (outermost.outerMassFraction() - outermost.innerMassFraction()),
                 p.localTurnover(rTurn), p.globalTurnover(envSpan));
+    }
+
+    /**
+     * First and last mesh index of each run of points with a positive stability excess, centre outwards. A method
+     * of its own, not inline in {@link #find}: its loops over every mesh point made the JIT compile the whole of
+     * find, with everything after the loops inlined, on stack replacement once per loop and then once more
+     * (measured on the 200-model zero-age grid: 3 optimising compilations, ~90 KB of machine code, for a method
+     * called once per model). Find now loops only over the zones and stays in the quick compiler's code.
+     */
+    private static List<int[]> convectiveSpans(double[] excess) {
+        List<int[]> spans = new ArrayList<>();
+        int n = excess.length;
+        int k = 0;
+        while (k < n) {
+            if (!(excess[k] > 0.0)) {
+                k++;
+                continue;
+            }
+            int first = k;
+            while (k + 1 < n && excess[k + 1] > 0.0) {
+                k++;
+            }
+            spans.add(new int[] {first, k});
+            k++;
+        }
+        return spans;
     }
 
     /** The profile's arrays, read once, with the interpolations the finder needs. */
