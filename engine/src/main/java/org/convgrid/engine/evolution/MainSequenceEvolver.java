@@ -481,14 +481,7 @@ public final class MainSequenceEvolver {
         double[][] before = {older.lnRadii(), older.lnDensities(), older.lnTemperatures(), older.luminosities()};
         double[][] first = oldest == null ? null : new double[][] {oldest.lnRadii(), oldest.lnDensities(),
                 oldest.lnTemperatures(), oldest.luminosities()};
-        for (int v = 0; v < now.length; v++) {
-            for (int k = 0; k < now[v].length; k++) {
-                double slope = (now[v][k] - before[v][k]) / olderStep;
-                double curvature = first == null ? 0.0
-                        : (slope - (before[v][k] - first[v][k]) / oldestStep) / (olderStep + oldestStep);
-                now[v][k] += dt * slope + dt * (dt + olderStep) * curvature;
-            }
-        }
+        addExtrapolatedChange(now, now, before, first, olderStep, oldestStep, dt);
         return new ModelState(previous.mesh(), previous.compositions(), now[0], now[1], now[2], now[3]);
     }
 
@@ -504,15 +497,26 @@ public final class MainSequenceEvolver {
         double[][] before = CarriedUnknowns.onto(older, mesh);
         double[][] first = oldest == null ? null : CarriedUnknowns.onto(oldest, mesh);
         double[][] unknowns = {guess.lnRadii(), guess.lnDensities(), guess.lnTemperatures(), guess.luminosities()};
-        for (int v = 0; v < unknowns.length; v++) {
-            for (int k = 0; k < unknowns[v].length; k++) {
+        addExtrapolatedChange(unknowns, now, before, first, olderStep, oldestStep, dt);
+        return new ModelState(mesh, guess.compositions(), unknowns[0], unknowns[1], unknowns[2], unknowns[3]);
+    }
+
+    /**
+     * Adds to {@code target} the change over dt of the line through {@code before} (olderStep earlier) and
+     * {@code now}, or, when {@code first} (oldestStep before {@code before}) is given, of the parabola through the
+     * three in Newton's divided-difference form. {@code target} may be {@code now} itself: each value is read
+     * before it is written.
+     */
+    private static void addExtrapolatedChange(double[][] target, double[][] now, double[][] before,
+                                              double[][] first, double olderStep, double oldestStep, double dt) {
+        for (int v = 0; v < target.length; v++) {
+            for (int k = 0; k < target[v].length; k++) {
                 double slope = (now[v][k] - before[v][k]) / olderStep;
                 double curvature = first == null ? 0.0
                         : (slope - (before[v][k] - first[v][k]) / oldestStep) / (olderStep + oldestStep);
-                unknowns[v][k] += dt * slope + dt * (dt + olderStep) * curvature;
+                target[v][k] += dt * slope + dt * (dt + olderStep) * curvature;
             }
         }
-        return new ModelState(mesh, guess.compositions(), unknowns[0], unknowns[1], unknowns[2], unknowns[3]);
     }
 
     /**
