@@ -15,8 +15,9 @@ import org.convgrid.engine.units.Constants;
 
 /**
  * Zero-age models along one line of constant composition and physics, each seeded by homology from the nearest
- * converged neighbours ({@link HomologySeeder}) and walked there in steps of at most {@link #MAX_STEP} in ln M,
- * halved when a step fails. The first model comes from the polytropic guess at the requested mass where that is
+ * converged neighbours ({@link HomologySeeder}; where the neighbours' thin outer convective zones recede fast, the
+ * seed's outer envelope integrated again with the new mass's own gradient, {@link EnvelopeSweep}) and walked there
+ * in steps of at most {@link #MAX_STEP} in ln M, halved when a step fails. The first model comes from the polytropic guess at the requested mass where that is
  * reliable ({@link #coldStartReliable}), otherwise (or if it fails) at {@link #ANCHOR_MASS}, and is walked from
  * there; a track given the line's {@link ZamsLadder} starts instead from the two ladder rungs next to its first mass
  * (shared by every chunk of the line) and falls back to the cold starts only when the ladder has no rung. The walk
@@ -49,6 +50,7 @@ public final class ZamsTrack {
     private final ZamsBuilder builder;
     private final Composition composition;
     private final HomologySeeder seeder = new HomologySeeder();
+    private final EnvelopeSweep envelope;
     private final List<ZamsModel> converged = new ArrayList<>();
     private final ZamsLadder ladder;
     private final Set<ZamsModel> fromLadder = Collections.newSetFromMap(new IdentityHashMap<>());
@@ -65,6 +67,7 @@ public final class ZamsTrack {
         this.builder = builder;
         this.composition = composition;
         this.ladder = ladder;
+        this.envelope = new EnvelopeSweep(builder.physics());
     }
 
     /**
@@ -148,6 +151,9 @@ public final class ZamsTrack {
             ZamsModel other = nearest(nearest.model().mass(), nearest);
             try {
                 ModelState seed = seeder.seed(nearest.model(), other == null ? null : other.model(), target);
+                if (other != null) {
+                    seed = envelope.refine(seed, nearest.model(), other.model(), target);
+                }
                 ZamsModel z = builder.fromSeed(seed, composition);
                 add(z);
                 spent += z.iterations();
