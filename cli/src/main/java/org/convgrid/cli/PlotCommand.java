@@ -9,6 +9,7 @@ import java.util.concurrent.Callable;
 import org.convgrid.output.RunLayout;
 import org.convgrid.survey.RunLock;
 import org.convgrid.plotting.DrawnMaps;
+import org.convgrid.plotting.RunData;
 import org.convgrid.plotting.RunMaps;
 import org.convgrid.plotting.report.ReportPage;
 import org.convgrid.plotting.style.ChartFiles;
@@ -47,9 +48,10 @@ final class PlotCommand implements Callable<Integer> {
         // writes there
         try (RunLock lock = RunLock.acquire(dir)) {
             Locks.reportStale(lock, main.err());
-            DrawnMaps maps = RunMaps.drawAll(dir, formats);
+            RunData run = RunData.read(dir);
+            DrawnMaps maps = RunMaps.drawAll(run, dir, formats);
             maps.failures().forEach(f -> main.err().println("convgrid: warning: " + f.describe()));
-            Path report = ReportPage.write(dir, maps.failures());
+            Path report = ReportPage.write(run, dir, maps.failures());
             main.out().println("wrote " + maps.written().size() + " charts to " + layout.maps() + " and " + report);
             return ExitCodes.OK;
         }

@@ -82,6 +82,8 @@ final class RunCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         CommandContext context = parent.context();
+        // the solver's tables are read while the grid file is read and the run directory prepared
+        context.solvers().readSharedDataAhead();
         int n = threads(threads);
         if (resume && force) {
             throw new UsageException("--resume and --force exclude each other");

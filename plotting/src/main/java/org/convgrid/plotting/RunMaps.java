@@ -58,7 +58,15 @@ public final class RunMaps {
      * files are not written) and the others are still drawn: one bad chart must not hide a run's outputs.
      */
     public static DrawnMaps drawAll(Path runDir, Set<ChartFiles.VectorFormat> vectorFormats) throws IOException {
-        return draw(plan(RunData.read(runDir)), new RunLayout(runDir).maps(), vectorFormats);
+        return drawAll(RunData.read(runDir), runDir, vectorFormats);
+    }
+
+    /**
+     * As {@link #drawAll(Path, Set)} from the run directory's files already read ({@link RunData#read}), so a caller
+     * that also writes the report reads the catalogue, zones and tracks once.
+     */
+    public static DrawnMaps drawAll(RunData run, Path runDir, Set<ChartFiles.VectorFormat> vectorFormats) {
+        return draw(plan(run), new RunLayout(runDir).maps(), vectorFormats);
     }
 
     /** Draws the given charts into {@code maps}; a chart that throws is named in the failures. */

@@ -29,4 +29,15 @@ public interface ChunkSolverFactory {
     default ChunkSolver solverFor(GridSpec grid, StarTrackSink tracks) {
         return solverFor(grid);
     }
+
+    /**
+     * Starts reading, on a thread of its own, the shared data every solver of this factory reads at its first use
+     * (tables shipped with the tool), and returns at once. Called when a run starts, before the grid file is read, so
+     * the reading overlaps the reading of the grid and the preparation of the run directory instead of holding up the
+     * first chunks: there a worker reads the tables while the other workers, which need them too, wait. Results do
+     * not depend on it: the shared data are read once, by whichever thread comes first. The default reads nothing
+     * (fakes need nothing).
+     */
+    default void readSharedDataAhead() {
+    }
 }

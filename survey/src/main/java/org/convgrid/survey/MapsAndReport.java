@@ -5,6 +5,7 @@ import java.util.Objects;
 import java.util.Set;
 import java.util.function.Consumer;
 import org.convgrid.plotting.DrawnMaps;
+import org.convgrid.plotting.RunData;
 import org.convgrid.plotting.RunMaps;
 import org.convgrid.plotting.report.ReportPage;
 import org.convgrid.plotting.style.ChartFiles;
@@ -30,8 +31,10 @@ public final class MapsAndReport implements RunFinisher {
 
     @Override
     public void finish(FinishedRun run) throws IOException {
-        DrawnMaps drawn = RunMaps.drawAll(run.directory(), vectorFormats);
+        // read once for the charts and the report: with tracks, reading them is not small
+        RunData data = RunData.read(run.directory());
+        DrawnMaps drawn = RunMaps.drawAll(data, run.directory(), vectorFormats);
         drawn.failures().forEach(f -> warnings.accept(f.describe()));
-        ReportPage.write(run.directory(), drawn.failures());
+        ReportPage.write(data, run.directory(), drawn.failures());
     }
 }

@@ -29,6 +29,11 @@ public final class ProductionSolvers {
             public ChunkSolver solverFor(GridSpec grid, StarTrackSink tracks) {
                 return solver(tracks);
             }
+
+            @Override
+            public void readSharedDataAhead() {
+                ShippedTablesReadAhead.start();
+            }
         };
     }
 

@@ -39,7 +39,15 @@ public final class ReportPage {
 
     /** Writes the report of a run directory, naming the charts that could not be drawn; returns its path. */
     public static Path write(Path runDir, List<DrawnMaps.ChartFailure> chartFailures) throws IOException {
-        RunData run = RunData.read(runDir);
+        return write(RunData.read(runDir), runDir, chartFailures);
+    }
+
+    /**
+     * Writes the report of a run directory from its files already read ({@link RunData#read}), naming the charts
+     * that could not be drawn; returns its path.
+     */
+    public static Path write(RunData run, Path runDir, List<DrawnMaps.ChartFailure> chartFailures)
+            throws IOException {
         Path target = new RunLayout(runDir).report();
         AtomicFiles.writeString(target, html(run, runDir, chartFailures));
         return target;
