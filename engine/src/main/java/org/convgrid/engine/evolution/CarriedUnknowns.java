@@ -46,4 +46,32 @@ final class CarriedUnknowns {
         }
         return carried;
     }
+
+    /**
+     * One value per point of {@code mesh} carried onto the points of {@code target} the same way as the unknowns
+     * (linearly in ln(m/(M - m)), centre onto centre, surface onto surface).
+     */
+    static double[] valuesOnto(MassMesh mesh, double[] values, MassMesh target) {
+        if (mesh == target) {
+            return values.clone();
+        }
+        int n = mesh.size();
+        int first = Double.isFinite(mesh.logit(0)) ? 0 : 1;
+        int last = n - 2;
+        double[] x = new double[last - first + 1];
+        for (int k = first; k <= last; k++) {
+            x[k - first] = mesh.logit(k);
+        }
+        double[] y = new double[x.length];
+        System.arraycopy(values, first, y, 0, y.length);
+        PolynomialSplineFunction line = new LinearInterpolator().interpolate(x, y);
+        int m = target.size();
+        double[] carried = new double[m];
+        carried[0] = values[0];
+        carried[m - 1] = values[n - 1];
+        for (int k = 1; k < m - 1; k++) {
+            carried[k] = line.value(Math.min(Math.max(target.logit(k), x[0]), x[x.length - 1]));
+        }
+        return carried;
+    }
 }

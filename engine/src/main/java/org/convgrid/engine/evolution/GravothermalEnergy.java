@@ -2,6 +2,7 @@ package org.convgrid.engine.evolution;
 
 import org.convgrid.engine.physics.eos.EosState;
 import org.convgrid.engine.structure.ExtraEnergy;
+import org.convgrid.engine.structure.StellarProfile;
 
 /**
  * The gravothermal energy release in its conservative form, eps_grav = -du/dt + (P/rho^2) drho/dt = -du/dt
@@ -29,6 +30,10 @@ final class GravothermalEnergy implements ExtraEnergy {
     private final double[] previousPressure;
     private final double[] previousEnergy;
     private final double dt;
+    /** eps_grav of the step before at each point (on this step's mesh), or null for the one-step form. */
+    private final double[] earlierRate;
+    /** Weight c of the two-step form, dt/(dt + the step before). */
+    private final double weight;
 
     /**
      * @param previousVolume 1/rho of the previous model at each mesh point, cm^3 g^-1
@@ -41,6 +46,17 @@ final class GravothermalEnergy implements ExtraEnergy {
         this.previousPressure = previousPressure.clone();
         this.previousEnergy = previousEnergy.clone();
         this.dt = dt;
+        this.earlierRate = null;
+        this.weight = 0.0;
+    }
+
+    private GravothermalEnergy(GravothermalEnergy oneStep, double[] earlierRate, double weight) {
+        this.previousVolume = oneStep.previousVolume;
+        this.previousPressure = oneStep.previousPressure;
+        this.previousEnergy = oneStep.previousEnergy;
+        this.dt = oneStep.dt;
+        this.earlierRate = earlierRate.clone();
+        this.weight = weight;
     }
 
     /** The release over dt since the state {@code start} describes (its density, temperature and composition). */
@@ -55,11 +71,38 @@ final class GravothermalEnergy implements ExtraEnergy {
         return new GravothermalEnergy(v, p, start.internalEnergy(), dt);
     }
 
+    /**
+     * The same release in the two-step form, second order at the end of the step: the one-step quotient (a
+     * mid-step value) extrapolated to the end of the step through the quotient of the step before,
+     * eps = (1 + c) eps_now - c eps_before with c = dt/(dt + dt_before), which is the backward differentiation
+     * formula of order two for variable steps (Hairer, Norsett &amp; Wanner 1993, Solving Ordinary Differential
+     * Equations I, ch. III.5). The one-step form sets dL/dm - eps_nuc at the end of the step equal to a
+     * difference centred half a step earlier (implicit Euler, first order in time).
+     *
+     * @param earlierRate eps_grav of the step before at each point of this step's mesh, erg g^-1 s^-1
+     * @param earlierStep the step before, s (&gt; 0)
+     */
+    GravothermalEnergy withEarlierStep(double[] earlierRate, double earlierStep) {
+        return new GravothermalEnergy(this, earlierRate, dt / (dt + earlierStep));
+    }
+
+    /** The one-step release (the mid-step quotient) at each point of a converged model at the end of the step. */
+    double[] oneStepRates(StellarProfile end) {
+        double[] out = new double[end.size()];
+        for (int k = 0; k < out.length; k++) {
+            double dv = 1.0 / end.density(k) - previousVolume[k];
+            double work = 0.5 * (previousPressure[k] + end.pressure(k)) * dv;
+            out[k] = -(end.internalEnergy(k) - previousEnergy[k] + work) / dt;
+        }
+        return out;
+    }
+
     @Override
     public double at(int shell, EosState state) {
         double dv = 1.0 / state.density() - previousVolume[shell];
         double work = 0.5 * (previousPressure[shell] + state.pressure()) * dv;
-        return -(state.internalEnergy() - previousEnergy[shell] + work) / dt;
+        double eps = -(state.internalEnergy() - previousEnergy[shell] + work) / dt;
+        return earlierRate == null ? eps : (1.0 + weight) * eps - weight * earlierRate[shell];
     }
 
     @Override
@@ -71,6 +114,10 @@ final class GravothermalEnergy implements ExtraEnergy {
         double eps = -(state.internalEnergy() - previousEnergy[shell] + mean * dv) / dt;
         double dRho = (-p * v * (1.0 - state.chiT()) - 0.5 * state.chiRho() * p * dv + mean * v) / dt;
         double dT = (-state.cv() * state.temperature() - 0.5 * state.chiT() * p * dv) / dt;
-        return new Rate(eps, dRho, dT);
+        if (earlierRate == null) {
+            return new Rate(eps, dRho, dT);
+        }
+        double f = 1.0 + weight;
+        return new Rate(f * eps - weight * earlierRate[shell], f * dRho, f * dT);
     }
 }

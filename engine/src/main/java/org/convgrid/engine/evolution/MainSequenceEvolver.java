@@ -28,7 +28,8 @@ import org.convgrid.engine.units.Constants;
  * advanced over dt by {@link CompositionStep} at the previous model's density and temperature, each mixed zone as
  * one composition with its mass-weighted rates, every other point on its own; (3) the
  * structure is relaxed with that composition and the gravothermal term eps_grav from the difference with the
- * previous model ({@link GravothermalEnergy}). Mixing (2) covers the convective zones and the points the physics'
+ * previous model ({@link GravothermalEnergy}; before the zero-age main sequence its two-step form, second order in
+ * time, {@link #YOUNG_TWO_STEP_RATIO}). Mixing (2) covers the convective zones and the points the physics'
  * {@link Overshoot} mixes with them, followed by the overshoot's diffusion when it has one (with the transport's
  * mixing length); under the Ledoux criterion
  * semiconvective layers are then mixed by diffusion ({@link SemiconvectiveMixing}) and the relaxation gets
@@ -91,6 +92,22 @@ public final class MainSequenceEvolver {
      * halved, and by 0.8 % instead of 1.5 % at 3 Msun; it is what lets the 12C/3He pacing be 0.2 instead of 0.1.
      */
     public static final double YOUNG_TRACE_CHANGE = 0.05;
+    /**
+     * Before the zero-age main sequence eps_grav takes its two-step form ({@link
+     * GravothermalEnergy#withEarlierStep}, second order in time) when the step is at most this many times the step
+     * before; after a sliver that landed on a requested age, after the first step and after the ZAMS the one-step
+     * form (implicit Euler) holds. The variable-step formula of order two is zero-stable for ratios below
+     * 1 + sqrt(2) (Hairer, Norsett &amp; Wanner 1993, ch. III.5, from memory); 2 keeps clear of it and of the
+     * growth limits (x1.5). Why (ZamsArrivalProbe, 0.5/1/1.5/2/3 Msun, Z = 0.02, every step limit x1, x0.5,
+     * x0.25): with the one-step form the ZAMS ages were 161.2/156.9/154.9, 39.91/38.48/37.96, 26.53/26.26/25.99,
+     * 11.44/11.16/10.93, 3.521/3.477/3.464 Myr, first order (halving the limits halves the change); with the
+     * two-step form 154.3/153.3/153.2, 38.72/37.99/37.70, 26.29/25.95/25.84, 11.37/11.20/10.85, 3.494/3.472/3.460
+     * at the same steps. Implicit Euler set dL/dm - eps_nuc at the end of the step equal to a difference centred
+     * half a step earlier, so the contraction lagged by ~half a step all along the track; the composition update
+     * was already second order (mid-step density and temperature) and extending that to steps after a remesh moved
+     * the ZAMS ages by less than 0.5 %.
+     */
+    public static final double YOUNG_TWO_STEP_RATIO = 2.0;
     /** Newton budget of one step's structure relaxation (a failure halves the step). */
     public static final int RELAXATION_BUDGET = 30;
 
@@ -221,6 +238,7 @@ public final class MainSequenceEvolver {
         double previousStep = 0.0;
         StellarModel earlier = null;
         double earlierStep = 0.0;
+        double[] gravRates = null;
         for (int accepted = 0; end == null; ) {
             double xc = current.global().centralHydrogen();
             if (xc < settings.endCentralHydrogen()) {
@@ -244,8 +262,12 @@ public final class MainSequenceEvolver {
                 landing = true;
             }
             StellarModel trial;
+            double[] trialGravRates;
             try {
-                trial = advance(current, age, before, previousStep, earlier, earlierStep, h, young);
+                Stepped stepped = advance(current, age, before, previousStep, earlier, earlierStep, gravRates, h,
+                        young);
+                trial = stepped.model();
+                trialGravRates = stepped.gravRates();
             } catch (ConvgridException e) {
                 if (e instanceof SolveFailedException f) {
                     spent += f.report().iterations();
@@ -283,6 +305,7 @@ public final class MainSequenceEvolver {
             before = current;
             previousStep = h;
             current = trial;
+            gravRates = trialGravRates;
             steps.add(summary(current, age, h, current.report().iterations() + spent));
             observer.accepted(age, h, current);
             boolean arrived = young && NuclearLuminosity.onMainSequence(current);
@@ -322,11 +345,14 @@ public final class MainSequenceEvolver {
      * @param olderStep the step from {@code older} to {@code previous}, s
      * @param oldest the model before {@code older}, or null
      * @param oldestStep the step from {@code oldest} to {@code older}, s
+     * @param olderGravRates the one-step eps_grav of the step from {@code older} to {@code previous} at the points
+     *                       of {@code previous}, erg g^-1 s^-1, or null
      * @param young before the zero-age main sequence: the composition update is trace-limited and the starting
      *              guess extrapolates in ln of the age ({@link #guessClock})
      */
-    private StellarModel advance(StellarModel previous, double age, StellarModel older, double olderStep,
-                                 StellarModel oldest, double oldestStep, double dt, boolean young) {
+    private Stepped advance(StellarModel previous, double age, StellarModel older, double olderStep,
+                            StellarModel oldest, double oldestStep, double[] olderGravRates, double dt,
+                            boolean young) {
         CompositionStep burning = young ? youngNetwork : network;
         double[] cost = compositionCost(previous);
         boolean remesh = planner.needsRemesh(previous, cost);
@@ -377,7 +403,14 @@ public final class MainSequenceEvolver {
                     remesh ? SemiconvectiveMixing.onMesh(previous.profile(), s, mesh) : s, dt);
             nablaMu = MuGradient.of(comp, start.lnPressure());
         }
-        GravothermalEnergy grav = GravothermalEnergy.since(start, dt);
+        GravothermalEnergy oneStep = GravothermalEnergy.since(start, dt);
+        GravothermalEnergy kept = young ? oneStep : null;
+        // before the ZAMS, the two-step eps_grav (second order in time, see YOUNG_TWO_STEP_RATIO)
+        GravothermalEnergy grav = young && olderGravRates != null && olderStep > 0.0
+                && dt <= YOUNG_TWO_STEP_RATIO * olderStep
+                ? oneStep.withEarlierStep(CarriedUnknowns.valuesOnto(previous.state().mesh(), olderGravRates, mesh),
+                        olderStep)
+                : oneStep;
         // the guess's clock: ln(age) before the ZAMS, the age itself after it (see guessClock)
         double[] clock = young && older != null ? guessClock(age, olderStep, oldest == null ? 0.0 : oldestStep, dt)
                 : null;
@@ -390,8 +423,8 @@ public final class MainSequenceEvolver {
                 // the curvature from a third model under the same trust rule as the slope
                 boolean curved = oldest != null && oldest.state().mesh() == older.state().mesh()
                         && oldestStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * oldestStep;
-                return solver.relax(extrapolated(guess, older.state(), gOlder, curved ? oldest.state() : null,
-                        gOldest, gDt), grav, nablaMu, solveSettings);
+                return stepped(solver.relax(extrapolated(guess, older.state(), gOlder,
+                        curved ? oldest.state() : null, gOldest, gDt), grav, nablaMu, solveSettings), kept);
             } catch (SolveFailedException e) {
                 // an extrapolation that overshoots (e.g. across a change of the convective zones) is no worse
                 // than no extrapolation: fall back to the previous model as the guess
@@ -402,13 +435,24 @@ public final class MainSequenceEvolver {
             // without this the two steps after each remesh start from a copy and take 5-6 iterations instead of 3-4
             try {
                 boolean curved = oldest != null && oldestStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * oldestStep;
-                return solver.relax(carried(guess, previous.state(), older.state(), gOlder,
-                        curved ? oldest.state() : null, gOldest, gDt), grav, nablaMu, solveSettings);
+                return stepped(solver.relax(carried(guess, previous.state(), older.state(), gOlder,
+                        curved ? oldest.state() : null, gOldest, gDt), grav, nablaMu, solveSettings), kept);
             } catch (SolveFailedException e) {
                 // as above: fall back to the previous model as the guess
             }
         }
-        return solver.relax(guess, grav, nablaMu, solveSettings);
+        return stepped(solver.relax(guess, grav, nablaMu, solveSettings), kept);
+    }
+
+    /**
+     * A step's model with the one-step eps_grav of the step at its points, for the two-step form of the next step
+     * (null after the zero-age main sequence, where the one-step form holds).
+     */
+    private record Stepped(StellarModel model, double[] gravRates) {
+    }
+
+    private static Stepped stepped(StellarModel model, GravothermalEnergy oneStep) {
+        return new Stepped(model, oneStep == null ? null : oneStep.oneStepRates(model.profile()));
     }
 
     /**

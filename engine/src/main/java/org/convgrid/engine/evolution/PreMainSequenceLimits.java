@@ -68,7 +68,8 @@ public record PreMainSequenceLimits(double maxLuminosityChange, double maxRadius
 
     /**
      * 0.1 in ln L, ln R and ln T_c, 30 % of the central deuterium, 5 % of the Kelvin-Helmholtz time, x1.5 per
-     * step, 30 % of the surface 7Li. Measured at 1 Msun, Z = 0.02, to the ZAMS: 96 steps, ZAMS at 49.0 Myr (44.3
+     * step, 30 % of the surface 7Li, 0.4 in ln of the central 12C and 3He, 0.3 in ln of the contraction's share of
+     * L, 0.2 in the fully convective contraction (the history of these values follows). Measured at 1 Msun, Z = 0.02, to the ZAMS: 96 steps, ZAMS at 49.0 Myr (44.3
      * Myr when the steps also land on 1, 10 and 100 Myr), energy budget closed to 1 % (tested); all limits halved:
      * 191 steps, 41.2 Myr; 0.2 in ln L and 50 % of the deuterium (before the lithium limit): 56 steps instead of
      * 86, 54.6 Myr. The ZAMS age is first order in the step and not converged at these limits. (Figures before
@@ -88,9 +89,23 @@ public record PreMainSequenceLimits(double maxLuminosityChange, double maxRadius
      * 0.01 (radiative centres too) 3.6 % at 2 Msun and 5.3 % at 3 Msun; the share pacing at 0.3 5.6 % at 1 Msun,
      * and at 0.15 with everything else as now still 5.3 % (1 Msun 108 instead of 124 steps): the share of L paced at
      * 0.1 is what holds the ZAMS age, and the next saving needs a scheme whose error in that phase is second order.
+     * That scheme: the error was implicit Euler in the energy equation, and with eps_grav in its two-step form before
+     * the ZAMS (second order, MainSequenceEvolver#YOUNG_TWO_STEP_RATIO) the share and the 12C/3He pacing no longer
+     * hold the ZAMS age: at 0.1/0.2 the ZAMS ages of 0.5, 1, 1.5, 2, 3 Msun are 154.3, 38.72, 26.29, 11.37, 3.494 Myr
+     * (ZamsArrivalProbe, limits x1), with the share at 0.3 154.7, 39.25, 26.06, 11.22, 3.483, and with the share at
+     * 0.3 and the 12C/3He pacing at 0.4 (now the defaults) 154.1, 39.21, 25.88, 11.32, 3.492 Myr in 112, 93, 116,
+     * 123, 128 steps instead of 144, 124, 175, 181, 190; with every limit halved and quartered 154.2/153.5,
+     * 37.99/37.87, 26.05/25.82, 11.17/11.19, 3.470/3.462 Myr. Against the finest values the defaults are 0.4, 3.5,
+     * 0.2, 1.2, 0.9 % late (the one-step form at the old defaults: 5.0, 5.4, 2.7, 2.2, 1.7 %); the 1 and 2 Msun
+     * ages carry what is left: near the ZAMS L_nuc/L creeps below 0.99 by ~0.005 per Myr while the growing
+     * convective core mixes 12C inwards in jumps of a few 1e-3 in L_nuc/L, so the crossing moves by a few tenths of
+     * a Myr with the step history. Looser, measured: the share at 0.5 crossed 0.99 at 3 Msun in a transient,
+     * 2.71 instead of 3.46 Myr; the 12C/3He pacing at 0.8 moved 0.5 Msun to 160.3 Myr (+4.6 %); the contraction
+     * limit at 0.3 saves 5 more steps but moves the lithium halving of 0.5 Msun from 8.35 to 8.67 Myr (finest:
+     * 7.98).
      */
     public static final PreMainSequenceLimits DEFAULT = new PreMainSequenceLimits(0.1, 0.1, 0.1, 0.3, 0.05, 1.5,
-            0.3, 0.2, 0.1, 0.2);
+            0.3, 0.4, 0.3, 0.2);
 
     public PreMainSequenceLimits {
         if (!(maxLuminosityChange > 0.0 && maxRadiusChange > 0.0 && maxCentralTemperatureChange > 0.0

@@ -79,6 +79,33 @@ class GravothermalEnergyTest {
     }
 
     @Test
+    void twoStepFormExtrapolatesToTheEndOfTheStepWithItsSlopes() {
+        // the backward differentiation formula of order two (Hairer, Norsett & Wanner 1993, ch. III.5): after a
+        // step of the same length its weight is c = 1/2, eps = 3/2 eps_now - 1/2 eps_before, and the slopes are
+        // those of the one-step quotient times 3/2
+        var p = stepped.profile();
+        double[] now = grav.oneStepRates(p);
+        double[] before = new double[now.length];
+        for (int k = 0; k < before.length; k++) {
+            before[k] = 0.7 * now[k] + 1.0e-3 * k;
+        }
+        GravothermalEnergy two = grav.withEarlierStep(before, STEP);
+        for (int k = 0; k < p.size(); k += 10) {
+            Composition c = stepped.state().composition(k);
+            EosState s = physics.eos().atDensity(p.density(k), p.temperature(k), c);
+            // the profile's P and u against a fresh equation-of-state call: a difference of nearly equal energies
+            assertThat(grav.at(k, s)).isCloseTo(now[k], within(1.0e-6 * Math.abs(now[k])));
+            ExtraEnergy.Rate one = grav.withSlopes(k, s);
+            ExtraEnergy.Rate rate = two.withSlopes(k, s);
+            assertThat(rate.value()).isEqualTo(two.at(k, s));
+            assertThat(rate.value()).isCloseTo(1.5 * one.value() - 0.5 * before[k],
+                    within(1.0e-12 * Math.abs(one.value()) + 1.0e-12 * Math.abs(before[k])));
+            assertThat(rate.dLnRho()).isCloseTo(1.5 * one.dLnRho(), within(1.0e-12 * Math.abs(one.dLnRho())));
+            assertThat(rate.dLnT()).isCloseTo(1.5 * one.dLnT(), within(1.0e-12 * Math.abs(one.dLnT())));
+        }
+    }
+
+    @Test
     void structureJacobianWithEpsGravMatchesDifferencesOfTheResiduals() {
         ModelState state = stepped.state();
         int n = state.size();
