@@ -40,10 +40,34 @@ final class CarriedUnknowns {
             carried[v][0] = values[v][0];
             carried[v][m - 1] = values[v][n - 1];
             for (int k = 1; k < m - 1; k++) {
-                double at = Math.min(Math.max(target.logit(k), x[0]), x[x.length - 1]);
-                carried[v][k] = line.value(at);
+                if (target.logit(k) > x[x.length - 1]) {
+                    double w = outerWeight(state, target.exteriorFraction(k));
+                    carried[v][k] = (1.0 - w) * values[v][n - 2] + w * values[v][n - 1];
+                } else {
+                    carried[v][k] = line.value(Math.max(target.logit(k), x[0]));
+                }
             }
         }
         return carried;
+    }
+
+    /**
+     * Where a point at exterior fraction (M - m)/M = e lies between the last interior point (weight 0) and the
+     * surface (1), for a point in the outermost interval: linear in ln P with P - P_surface in proportion to M - m
+     * (hydrostatic equilibrium at nearly constant g and r; the rule the mesh planner places and fills such points
+     * by), ln P taken as ln rho + ln T (ideal gas of fixed mean molecular weight across the interval). Holding the
+     * last interior point's values there instead (a clamp) put errors of ~0.1 in ln rho into the carried model's
+     * outermost points, and so into the first step after each remesh before the zero-age main sequence.
+     */
+    private static double outerWeight(ModelState state, double e) {
+        int n = state.size();
+        double span = state.lnDensity(n - 2) + state.lnTemperature(n - 2) - state.lnDensity(n - 1)
+                - state.lnTemperature(n - 1);
+        double edge = state.mesh().exteriorFraction(n - 2);
+        if (!(span > 1.0e-6) || !(edge > 0.0)) {
+            return Math.min(1.0, Math.max(0.0, 1.0 - e / edge));
+        }
+        double w = 1.0 - Math.log1p(e / edge * Math.expm1(span)) / span;
+        return Math.min(1.0, Math.max(0.0, w));
     }
 }
