@@ -18,6 +18,16 @@ final class CarriedUnknowns {
 
     /** ln r, ln rho, ln T and L of {@code state} at the points of {@code target}, in that order. */
     static double[][] onto(ModelState state, MassMesh target) {
+        return onto(state, target, true);
+    }
+
+    /**
+     * As {@link #onto(ModelState, MassMesh)}; without {@code fillOuterInterval} the points of {@code target} beyond
+     * the last interior point of {@code state} hold that point's values, as main-sequence steps have them (filling
+     * the interval there changes no step but moves the converged models within the solver's tolerance, e.g. L of the
+     * 3 Msun zero-age track at exhaustion by 2e-10, measured; main-sequence results stay bit for bit as they were).
+     */
+    static double[][] onto(ModelState state, MassMesh target, boolean fillOuterInterval) {
         double[][] values = {state.lnRadii(), state.lnDensities(), state.lnTemperatures(), state.luminosities()};
         MassMesh mesh = state.mesh();
         if (mesh == target) {
@@ -40,11 +50,11 @@ final class CarriedUnknowns {
             carried[v][0] = values[v][0];
             carried[v][m - 1] = values[v][n - 1];
             for (int k = 1; k < m - 1; k++) {
-                if (target.logit(k) > x[x.length - 1]) {
+                if (fillOuterInterval && target.logit(k) > x[x.length - 1]) {
                     double w = outerWeight(state, target.exteriorFraction(k));
                     carried[v][k] = (1.0 - w) * values[v][n - 2] + w * values[v][n - 1];
                 } else {
-                    carried[v][k] = line.value(Math.max(target.logit(k), x[0]));
+                    carried[v][k] = line.value(Math.min(Math.max(target.logit(k), x[0]), x[x.length - 1]));
                 }
             }
         }

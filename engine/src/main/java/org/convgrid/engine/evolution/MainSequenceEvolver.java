@@ -489,15 +489,16 @@ public final class MainSequenceEvolver {
 
     /**
      * As {@link #extrapolated}, when the models do not all share the mesh of {@code guess} (the previous model,
-     * possibly remeshed, with the step's composition): each is carried onto that mesh ({@link CarriedUnknowns}) and
-     * the extrapolated change of the carried values is added to the guess's own unknowns.
+     * possibly remeshed, with the step's composition): each is carried onto that mesh ({@link CarriedUnknowns}; its
+     * outermost interval filled before the zero-age main sequence, {@code isotherms}) and the extrapolated change of
+     * the carried values is added to the guess's own unknowns.
      */
     private static ModelState carried(ModelState guess, ModelState previous, ModelState older, double olderStep,
                                       ModelState oldest, double oldestStep, double dt, boolean isotherms) {
         MassMesh mesh = guess.mesh();
-        double[][] now = CarriedUnknowns.onto(previous, mesh);
-        double[][] before = CarriedUnknowns.onto(older, mesh);
-        double[][] first = oldest == null ? null : CarriedUnknowns.onto(oldest, mesh);
+        double[][] now = CarriedUnknowns.onto(previous, mesh, isotherms);
+        double[][] before = CarriedUnknowns.onto(older, mesh, isotherms);
+        double[][] first = oldest == null ? null : CarriedUnknowns.onto(oldest, mesh, isotherms);
         double[][] unknowns = {guess.lnRadii(), guess.lnDensities(), guess.lnTemperatures(), guess.luminosities()};
         addExtrapolatedChange(unknowns, now, before, first, olderStep, oldestStep, dt, isotherms ? mesh : null);
         return new ModelState(mesh, guess.compositions(), unknowns[0], unknowns[1], unknowns[2], unknowns[3]);

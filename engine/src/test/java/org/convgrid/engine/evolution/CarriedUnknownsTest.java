@@ -68,6 +68,9 @@ class CarriedUnknownsTest {
                 assertThat(carried[2][k]).isLessThan(carried[2][k - 1]);
             }
         }
+        // main-sequence steps keep holding them
+        double[][] held = CarriedUnknowns.onto(state, target, false);
+        assertThat(held[2][m - 2]).isEqualTo(lnT[n - 2]);
     }
 
     @Test
