@@ -18,6 +18,16 @@ final class CarriedUnknowns {
 
     /** ln r, ln rho, ln T and L of {@code state} at the points of {@code target}, in that order. */
     static double[][] onto(ModelState state, MassMesh target) {
+        return onto(state, target, true);
+    }
+
+    /**
+     * As {@link #onto(ModelState, MassMesh)}; without {@code fillOuterInterval} the points of {@code target} beyond
+     * the last interior point of {@code state} hold that point's values, as main-sequence steps have them (filling
+     * the interval there changes no step but moves the converged models within the solver's tolerance, e.g. L of the
+     * 3 Msun zero-age track at exhaustion by 2e-10, measured; main-sequence results stay bit for bit as they were).
+     */
+    static double[][] onto(ModelState state, MassMesh target, boolean fillOuterInterval) {
         double[][] values = {state.lnRadii(), state.lnDensities(), state.lnTemperatures(), state.luminosities()};
         MassMesh mesh = state.mesh();
         if (mesh == target) {
@@ -40,8 +50,12 @@ final class CarriedUnknowns {
             carried[v][0] = values[v][0];
             carried[v][m - 1] = values[v][n - 1];
             for (int k = 1; k < m - 1; k++) {
-                double at = Math.min(Math.max(target.logit(k), x[0]), x[x.length - 1]);
-                carried[v][k] = line.value(at);
+                if (fillOuterInterval && target.logit(k) > x[x.length - 1]) {
+                    double w = outerWeight(state, target.exteriorFraction(k));
+                    carried[v][k] = (1.0 - w) * values[v][n - 2] + w * values[v][n - 1];
+                } else {
+                    carried[v][k] = line.value(Math.min(Math.max(target.logit(k), x[0]), x[x.length - 1]));
+                }
             }
         }
         return carried;
@@ -73,5 +87,25 @@ final class CarriedUnknowns {
             carried[k] = line.value(Math.min(Math.max(target.logit(k), x[0]), x[x.length - 1]));
         }
         return carried;
+    }
+
+    /**
+     * Where a point at exterior fraction (M - m)/M = e lies between the last interior point (weight 0) and the
+     * surface (1), for a point in the outermost interval: linear in ln P with P - P_surface in proportion to M - m
+     * (hydrostatic equilibrium at nearly constant g and r; the rule the mesh planner places and fills such points
+     * by), ln P taken as ln rho + ln T (ideal gas of fixed mean molecular weight across the interval). Holding the
+     * last interior point's values there instead (a clamp) put errors of ~0.1 in ln rho into the carried model's
+     * outermost points, and so into the first step after each remesh before the zero-age main sequence.
+     */
+    private static double outerWeight(ModelState state, double e) {
+        int n = state.size();
+        double span = state.lnDensity(n - 2) + state.lnTemperature(n - 2) - state.lnDensity(n - 1)
+                - state.lnTemperature(n - 1);
+        double edge = state.mesh().exteriorFraction(n - 2);
+        if (!(span > 1.0e-6) || !(edge > 0.0)) {
+            return Math.min(1.0, Math.max(0.0, 1.0 - e / edge));
+        }
+        double w = 1.0 - Math.log1p(e / edge * Math.expm1(span)) / span;
+        return Math.min(1.0, Math.max(0.0, w));
     }
 }

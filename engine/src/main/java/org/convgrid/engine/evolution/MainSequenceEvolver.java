@@ -424,7 +424,7 @@ public final class MainSequenceEvolver {
                 boolean curved = oldest != null && oldest.state().mesh() == older.state().mesh()
                         && oldestStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * oldestStep;
                 return stepped(solver.relax(extrapolated(guess, older.state(), gOlder,
-                        curved ? oldest.state() : null, gOldest, gDt), grav, nablaMu, solveSettings), kept);
+                        curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings), kept);
             } catch (SolveFailedException e) {
                 // an extrapolation that overshoots (e.g. across a change of the convective zones) is no worse
                 // than no extrapolation: fall back to the previous model as the guess
@@ -436,7 +436,7 @@ public final class MainSequenceEvolver {
             try {
                 boolean curved = oldest != null && oldestStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * oldestStep;
                 return stepped(solver.relax(carried(guess, previous.state(), older.state(), gOlder,
-                        curved ? oldest.state() : null, gOldest, gDt), grav, nablaMu, solveSettings), kept);
+                        curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings), kept);
             } catch (SolveFailedException e) {
                 // as above: fall back to the previous model as the guess
             }
@@ -513,35 +513,38 @@ public final class MainSequenceEvolver {
      * The starting guess of a step: the unknowns of the previous model ({@code previous}, with the step's
      * composition) extrapolated in time by dt through the model before it ({@code older}, olderStep earlier) and,
      * when given, the one before that ({@code oldest}, oldestStep before {@code older}): the parabola through the
-     * three in Newton's divided-difference form, or the line through the two. All share a mesh. The structure
-     * drifts smoothly on the main sequence, so this removes the first- and second-order parts of the change: with
-     * the line the first Newton correction of a 1 Msun track is ~4e-4 and every step takes three iterations, with
-     * the parabola most take two (measured).
+     * three in Newton's divided-difference form, or the line through the two (before the zero-age main sequence,
+     * {@code isotherms}: in the outer layers along isotherms, {@link IsothermExtrapolation}). All share a mesh.
+     * The structure drifts smoothly on the main sequence, so this removes the first- and second-order parts of the
+     * change: with the line the first Newton correction of a 1 Msun track is ~4e-4 and every step takes three
+     * iterations, with the parabola most take two (measured).
      */
     private static ModelState extrapolated(ModelState previous, ModelState older, double olderStep,
-                                           ModelState oldest, double oldestStep, double dt) {
+                                           ModelState oldest, double oldestStep, double dt, boolean isotherms) {
         double[][] now = {previous.lnRadii(), previous.lnDensities(), previous.lnTemperatures(),
                 previous.luminosities()};
         double[][] before = {older.lnRadii(), older.lnDensities(), older.lnTemperatures(), older.luminosities()};
         double[][] first = oldest == null ? null : new double[][] {oldest.lnRadii(), oldest.lnDensities(),
                 oldest.lnTemperatures(), oldest.luminosities()};
-        addExtrapolatedChange(now, now, before, first, olderStep, oldestStep, dt);
+        addExtrapolatedChange(now, now, before, first, olderStep, oldestStep, dt,
+                isotherms ? previous.mesh() : null);
         return new ModelState(previous.mesh(), previous.compositions(), now[0], now[1], now[2], now[3]);
     }
 
     /**
      * As {@link #extrapolated}, when the models do not all share the mesh of {@code guess} (the previous model,
-     * possibly remeshed, with the step's composition): each is carried onto that mesh ({@link CarriedUnknowns}) and
-     * the extrapolated change of the carried values is added to the guess's own unknowns.
+     * possibly remeshed, with the step's composition): each is carried onto that mesh ({@link CarriedUnknowns}; its
+     * outermost interval filled before the zero-age main sequence, {@code isotherms}) and the extrapolated change of
+     * the carried values is added to the guess's own unknowns.
      */
     private static ModelState carried(ModelState guess, ModelState previous, ModelState older, double olderStep,
-                                      ModelState oldest, double oldestStep, double dt) {
+                                      ModelState oldest, double oldestStep, double dt, boolean isotherms) {
         MassMesh mesh = guess.mesh();
-        double[][] now = CarriedUnknowns.onto(previous, mesh);
-        double[][] before = CarriedUnknowns.onto(older, mesh);
-        double[][] first = oldest == null ? null : CarriedUnknowns.onto(oldest, mesh);
+        double[][] now = CarriedUnknowns.onto(previous, mesh, isotherms);
+        double[][] before = CarriedUnknowns.onto(older, mesh, isotherms);
+        double[][] first = oldest == null ? null : CarriedUnknowns.onto(oldest, mesh, isotherms);
         double[][] unknowns = {guess.lnRadii(), guess.lnDensities(), guess.lnTemperatures(), guess.luminosities()};
-        addExtrapolatedChange(unknowns, now, before, first, olderStep, oldestStep, dt);
+        addExtrapolatedChange(unknowns, now, before, first, olderStep, oldestStep, dt, isotherms ? mesh : null);
         return new ModelState(mesh, guess.compositions(), unknowns[0], unknowns[1], unknowns[2], unknowns[3]);
     }
 
@@ -549,10 +552,18 @@ public final class MainSequenceEvolver {
      * Adds to {@code target} the change over dt of the line through {@code before} (olderStep earlier) and
      * {@code now}, or, when {@code first} (oldestStep before {@code before}) is given, of the parabola through the
      * three in Newton's divided-difference form. {@code target} may be {@code now} itself: each value is read
-     * before it is written.
+     * before it is written. With {@code isotherms} (the mesh all share; before the zero-age main sequence) the
+     * outer layers take the change along isotherms instead ({@link IsothermExtrapolation}).
      */
     private static void addExtrapolatedChange(double[][] target, double[][] now, double[][] before,
-                                              double[][] first, double olderStep, double oldestStep, double dt) {
+                                              double[][] first, double olderStep, double oldestStep, double dt,
+                                              MassMesh isotherms) {
+        double[][] base = null;
+        double[][] then = now;
+        if (isotherms != null) {
+            base = copy(target);
+            then = copy(now);
+        }
         for (int v = 0; v < target.length; v++) {
             for (int k = 0; k < target[v].length; k++) {
                 double slope = (now[v][k] - before[v][k]) / olderStep;
@@ -561,6 +572,17 @@ public final class MainSequenceEvolver {
                 target[v][k] += dt * slope + dt * (dt + olderStep) * curvature;
             }
         }
+        if (isotherms != null) {
+            IsothermExtrapolation.apply(target, base, then, before, first, isotherms, olderStep, oldestStep, dt);
+        }
+    }
+
+    private static double[][] copy(double[][] values) {
+        double[][] out = new double[values.length][];
+        for (int v = 0; v < values.length; v++) {
+            out[v] = values[v].clone();
+        }
+        return out;
     }
 
     /**

@@ -53,6 +53,27 @@ class CarriedUnknownsTest {
     }
 
     @Test
+    void pointsBeyondTheLastInteriorPointLieBetweenItAndTheSurface() {
+        // the outermost interval of the source reaches from logit 10 to the surface; the target has points in it
+        ModelState state = linearIn(TestMeshes.logit(40, -12.0, 10.0));
+        MassMesh target = TestMeshes.logit(57, -11.0, 14.0);
+        double[][] carried = CarriedUnknowns.onto(state, target);
+        int n = state.size();
+        int m = target.size();
+        double[] lnT = state.lnTemperatures();
+        for (int k = 1; k < m - 1; k++) {
+            if (target.logit(k) > state.mesh().logit(n - 2)) {
+                // between the two, falling outwards like the source (a clamp would hold lnT[n - 2])
+                assertThat(carried[2][k]).isLessThan(lnT[n - 2]).isGreaterThan(lnT[n - 1]);
+                assertThat(carried[2][k]).isLessThan(carried[2][k - 1]);
+            }
+        }
+        // main-sequence steps keep holding them
+        double[][] held = CarriedUnknowns.onto(state, target, false);
+        assertThat(held[2][m - 2]).isEqualTo(lnT[n - 2]);
+    }
+
+    @Test
     void onItsOwnMeshTheValuesAreUnchanged() {
         MassMesh mesh = TestMeshes.logit(30, -10.0, 12.0);
         ModelState state = linearIn(mesh);
