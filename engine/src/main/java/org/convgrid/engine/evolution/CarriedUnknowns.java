@@ -34,19 +34,11 @@ final class CarriedUnknowns {
             return values;
         }
         int n = mesh.size();
-        int first = Double.isFinite(mesh.logit(0)) ? 0 : 1;
-        int last = n - 2;
-        double[] x = new double[last - first + 1];
-        for (int k = first; k <= last; k++) {
-            x[k - first] = mesh.logit(k);
-        }
+        double[] x = interiorLogits(mesh);
         int m = target.size();
         double[][] carried = new double[values.length][m];
-        LinearInterpolator interpolator = new LinearInterpolator();
         for (int v = 0; v < values.length; v++) {
-            double[] y = new double[x.length];
-            System.arraycopy(values[v], first, y, 0, y.length);
-            PolynomialSplineFunction line = interpolator.interpolate(x, y);
+            PolynomialSplineFunction line = interiorLine(mesh, x, values[v]);
             carried[v][0] = values[v][0];
             carried[v][m - 1] = values[v][n - 1];
             for (int k = 1; k < m - 1; k++) {
@@ -70,15 +62,8 @@ final class CarriedUnknowns {
             return values.clone();
         }
         int n = mesh.size();
-        int first = Double.isFinite(mesh.logit(0)) ? 0 : 1;
-        int last = n - 2;
-        double[] x = new double[last - first + 1];
-        for (int k = first; k <= last; k++) {
-            x[k - first] = mesh.logit(k);
-        }
-        double[] y = new double[x.length];
-        System.arraycopy(values, first, y, 0, y.length);
-        PolynomialSplineFunction line = new LinearInterpolator().interpolate(x, y);
+        double[] x = interiorLogits(mesh);
+        PolynomialSplineFunction line = interiorLine(mesh, x, values);
         int m = target.size();
         double[] carried = new double[m];
         carried[0] = values[0];
@@ -87,6 +72,28 @@ final class CarriedUnknowns {
             carried[k] = line.value(Math.min(Math.max(target.logit(k), x[0]), x[x.length - 1]));
         }
         return carried;
+    }
+
+    /** The index of the first point with a finite mesh coordinate (the centre, m = 0, has none). */
+    private static int firstInterior(MassMesh mesh) {
+        return Double.isFinite(mesh.logit(0)) ? 0 : 1;
+    }
+
+    /** ln(m/(M - m)) of the points from the first finite one to the last interior point. */
+    private static double[] interiorLogits(MassMesh mesh) {
+        int first = firstInterior(mesh);
+        double[] x = new double[mesh.size() - 1 - first];
+        for (int k = 0; k < x.length; k++) {
+            x[k] = mesh.logit(first + k);
+        }
+        return x;
+    }
+
+    /** {@code values} at those points, joined linearly in the mesh coordinate. */
+    private static PolynomialSplineFunction interiorLine(MassMesh mesh, double[] x, double[] values) {
+        double[] y = new double[x.length];
+        System.arraycopy(values, firstInterior(mesh), y, 0, y.length);
+        return new LinearInterpolator().interpolate(x, y);
     }
 
     /**
