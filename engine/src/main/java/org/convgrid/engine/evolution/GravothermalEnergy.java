@@ -90,18 +90,14 @@ final class GravothermalEnergy implements ExtraEnergy {
     double[] oneStepRates(StellarProfile end) {
         double[] out = new double[end.size()];
         for (int k = 0; k < out.length; k++) {
-            double dv = 1.0 / end.density(k) - previousVolume[k];
-            double work = 0.5 * (previousPressure[k] + end.pressure(k)) * dv;
-            out[k] = -(end.internalEnergy(k) - previousEnergy[k] + work) / dt;
+            out[k] = oneStep(k, end.density(k), end.pressure(k), end.internalEnergy(k));
         }
         return out;
     }
 
     @Override
     public double at(int shell, EosState state) {
-        double dv = 1.0 / state.density() - previousVolume[shell];
-        double work = 0.5 * (previousPressure[shell] + state.pressure()) * dv;
-        double eps = -(state.internalEnergy() - previousEnergy[shell] + work) / dt;
+        double eps = oneStep(shell, state.density(), state.pressure(), state.internalEnergy());
         return earlierRate == null ? eps : (1.0 + weight) * eps - weight * earlierRate[shell];
     }
 
@@ -111,7 +107,7 @@ final class GravothermalEnergy implements ExtraEnergy {
         double dv = v - previousVolume[shell];
         double p = state.pressure();
         double mean = 0.5 * (previousPressure[shell] + p);
-        double eps = -(state.internalEnergy() - previousEnergy[shell] + mean * dv) / dt;
+        double eps = oneStep(shell, state.density(), p, state.internalEnergy());
         double dRho = (-p * v * (1.0 - state.chiT()) - 0.5 * state.chiRho() * p * dv + mean * v) / dt;
         double dT = (-state.cv() * state.temperature() - 0.5 * state.chiT() * p * dv) / dt;
         if (earlierRate == null) {
@@ -119,5 +115,12 @@ final class GravothermalEnergy implements ExtraEnergy {
         }
         double f = 1.0 + weight;
         return new Rate(f * eps - weight * earlierRate[shell], f * dRho, f * dT);
+    }
+
+    /** The one-step release at a point of the given density, pressure and internal energy (the mid-step quotient). */
+    private double oneStep(int shell, double density, double pressure, double internalEnergy) {
+        double dv = 1.0 / density - previousVolume[shell];
+        double work = 0.5 * (previousPressure[shell] + pressure) * dv;
+        return -(internalEnergy - previousEnergy[shell] + work) / dt;
     }
 }
