@@ -39,6 +39,17 @@ public final class AtmosphereTable implements SurfaceBoundary {
     public static final TableAxis DEFAULT_TEFF_AXIS = new TableAxis(3.30, 4.80, DEFAULT_TEFF_POINTS);
     /** Default log10 g axis, cm s^-2. */
     public static final TableAxis DEFAULT_GRAVITY_AXIS = new TableAxis(2.5, 6.0, DEFAULT_GRAVITY_POINTS);
+    /**
+     * log10 Teff axis of the low-gravity table, K: the default axis's nodes up to 10 000 K, where the surfaces of
+     * young stars high on their Hayashi tracks lie (start models 2800-5100 K, measured 0.1-10 Msun, Z 1e-4-0.04).
+     */
+    public static final TableAxis LOW_GRAVITY_TEFF_AXIS = new TableAxis(3.30, 4.00, 22);
+    /**
+     * log10 g axis of the low-gravity table, cm s^-2: the default axis's spacing continued below its lowest node,
+     * down to log g 0.75 (start models of 1-10 Msun have log g 1.5-2.0), so that its top row is the default
+     * table's bottom row.
+     */
+    public static final TableAxis LOW_GRAVITY_AXIS = new TableAxis(0.75, 2.5, 6);
     /** Most compositions kept at once. */
     public static final int CACHE_SIZE = 8;
 

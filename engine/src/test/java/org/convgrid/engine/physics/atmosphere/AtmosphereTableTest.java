@@ -29,8 +29,41 @@ class AtmosphereTableTest {
         SurfaceBoundary built = table.tabulate(SOLAR);
         double seconds = (System.nanoTime() - start) * 1e-9;
         assertThat(seconds).as("build time, s").isLessThan(5.0); // ~0.15 s measured; loose for a shared machine
-        TableAxis tx = AtmosphereTable.DEFAULT_TEFF_AXIS;
-        TableAxis ty = AtmosphereTable.DEFAULT_GRAVITY_AXIS;
+        assertThat(comparedWithDirect(built, AtmosphereTable.DEFAULT_TEFF_AXIS, AtmosphereTable.DEFAULT_GRAVITY_AXIS))
+                .isGreaterThan(350);
+    }
+
+    @Test
+    void lowGravityTableMatchesDirectIntegrationBetweenNodes() {
+        // the same requirement below the default table's gravities, 2000-10 000 K
+        SurfaceBoundary built = new AtmosphereTable(DIRECT, AtmosphereTable.LOW_GRAVITY_TEFF_AXIS,
+                AtmosphereTable.LOW_GRAVITY_AXIS).tabulate(SOLAR);
+        assertThat(comparedWithDirect(built, AtmosphereTable.LOW_GRAVITY_TEFF_AXIS, AtmosphereTable.LOW_GRAVITY_AXIS))
+                .isGreaterThan(90);
+    }
+
+    @Test
+    void lowGravityTableContinuesTheDefaultOne() {
+        // its top row is the default table's bottom row: the two agree on the shared edge
+        SurfaceBoundary low = new AtmosphereTable(DIRECT, AtmosphereTable.LOW_GRAVITY_TEFF_AXIS,
+                AtmosphereTable.LOW_GRAVITY_AXIS).tabulate(SOLAR);
+        SurfaceBoundary high = new AtmosphereTable(DIRECT).tabulate(SOLAR);
+        double g = Math.pow(10.0, AtmosphereTable.DEFAULT_GRAVITY_AXIS.min());
+        assertThat(AtmosphereTable.LOW_GRAVITY_AXIS.max()).isEqualTo(AtmosphereTable.DEFAULT_GRAVITY_AXIS.min());
+        assertThat(AtmosphereTable.LOW_GRAVITY_AXIS.step()).isCloseTo(AtmosphereTable.DEFAULT_GRAVITY_AXIS.step(),
+                within(1e-12));
+        for (double teff : new double[] {3000.0, 4321.0, 6789.0}) {
+            // either side of the edge (exactly on it, rounding may put it outside either table)
+            SurfaceCondition a = low.at(teff, g * (1.0 - 1e-12), SOLAR);
+            SurfaceCondition b = high.at(teff, g * (1.0 + 1e-12), SOLAR);
+            assertThat(a.lnPressure()).isCloseTo(b.lnPressure(), within(1e-10));
+            assertThat(a.dlnPDlnTeff()).isCloseTo(b.dlnPDlnTeff(), within(1e-8));
+        }
+        assertThatThrownBy(() -> low.at(5000.0, 1.1 * g, SOLAR)).isInstanceOf(ConvgridException.class);
+    }
+
+    /** Compares the table with the direct integration inside every cell of the axes; returns the cells compared. */
+    private static int comparedWithDirect(SurfaceBoundary built, TableAxis tx, TableAxis ty) {
         int compared = 0;
         for (int i = 0; i < tx.points() - 1; i++) {
             for (int j = 0; j < ty.points() - 1; j++) {
@@ -55,7 +88,7 @@ class AtmosphereTableTest {
                 compared++;
             }
         }
-        assertThat(compared).isGreaterThan(350);
+        return compared;
     }
 
     @Test
