@@ -1,5 +1,7 @@
 package org.convgrid.engine.birth;
 
+import org.convgrid.engine.convection.ConvectiveTransport;
+import org.convgrid.engine.convection.LocalConvectionState;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.physics.atmosphere.SurfaceCondition;
 import org.convgrid.engine.physics.eos.EosState;
@@ -20,13 +22,20 @@ import org.convgrid.engine.units.Constants;
  * <p>Its outer layers are those of a convective envelope below the physics' atmosphere: the last
  * {@link #ENVELOPE_POINTS} mesh points lie evenly in ln(1 - m/M) from the polytrope's outermost interior point to
  * where the pressure is {@link #OUTER_PRESSURE_EXCESS} above the atmosphere's, with P = P_atm + G M^2 (1 - m/M) /
- * (4 pi R^4) (hydrostatic equilibrium at r = R) and T on the adiabat dln T = nabla_ad dln P of the equation of state
- * from the atmosphere's fitting point inward, which replaces the polytrope's temperature wherever it is hotter. The
- * bare polytrope (1 Msun, Z = 0.02) has its last interior point at m/M = 1 - 6e-5 with 4300 K and its surface
- * density 4 e-folds above the relaxed model's, which has 15 000 K there and 113 of its 500 points further out
- * (hydrogen ionisation and the atmosphere): relaxing it took 26 Newton iterations and a remesh pass 23 more, with
- * the relaxation aid (with the physics it failed), the envelope takes 20 with the physics and 3 after its remesh
- * (measured). Only a starting point for the relaxation. Immutable and thread-safe.
+ * (4 pi R^4) (hydrostatic equilibrium at r = R) and T integrated from the atmosphere's fitting point inward with
+ * dln T = nabla dln P, nabla the physics' own: the convective gradient of its {@link ConvectiveTransport} where the
+ * radiative one (with the guess's luminosity) exceeds nabla_ad, else the radiative one. It replaces the polytrope's
+ * temperature wherever it is hotter. The bare polytrope (1 Msun, Z = 0.02) has its last interior point at
+ * m/M = 1 - 6e-5 with 4300 K and its surface density 4 e-folds above the relaxed model's, which has 15 000 K there
+ * and 113 of its 500 points further out (hydrogen ionisation and the atmosphere): relaxing it took 26 Newton
+ * iterations and a remesh pass 23 more, with the relaxation aid (with the physics it failed). An adiabatic envelope
+ * (nabla_ad throughout) took 20 with the physics and 3 after its remesh: it lacks the superadiabatic layer below
+ * the photosphere, where convection in the thin gas carries the flux only with nabla well above nabla_ad, and the
+ * relaxation built that layer; with it the first relaxation takes 4 (measured; whole start models 1 Msun 31 -> 15
+ * iterations, 3 Msun 31 -> 19, 10 Msun 54 -> 40 at Z = 0.02; 0.5-10 Msun at Z 0.004-0.04 save 4-16 each,
+ * 0.2-0.3 Msun 0-2, Z = 1e-4 0-1; 0.1-0.15 Msun at Z >= 0.004 cost 0-7 more). Only a starting point for the
+ * relaxation.
+ * Immutable and thread-safe.
  */
 final class HayashiGuess {
 
@@ -44,8 +53,8 @@ final class HayashiGuess {
      * bare polytrope had it (2.5e-10, was 2.6e-10) and those tracks are unchanged (measured).
      */
     static final double OUTER_PRESSURE_EXCESS = 4.0e-4;
-    /** Steps of the adiabat between two mesh points. */
-    static final int ADIABAT_SUBSTEPS = 4;
+    /** Integration steps of the envelope's temperature between two mesh points. */
+    static final int ENVELOPE_SUBSTEPS = 4;
 
     private static final LaneEmden N15 = LaneEmden.solve(1.5);
 
@@ -120,14 +129,16 @@ final class HayashiGuess {
             lnR[k] = polytrope.lnRadius(kept);
             lum[k] = polytrope.surfaceLuminosity();
         }
-        // the adiabat from the atmosphere's fitting point inward, until the polytrope is the hotter
+        // the envelope's gradient from the atmosphere's fitting point inward, until the polytrope is the hotter
         double lnP = atmosphere.lnPressure();
         double lnTa = atmosphere.lnTemperature();
+        double gravity = Constants.G * mass / (radius * radius);
+        double surfaceLum = polytrope.surfaceLuminosity();
         for (int k = points - 1; k >= 0; k--) {
             double lnPk = Math.log(surfacePressure + pressureScale * e[k]);
-            for (int sub = 0; sub < ADIABAT_SUBSTEPS && lnPk > lnP; sub++) {
-                double step = (lnPk - lnP) / (ADIABAT_SUBSTEPS - sub);
-                lnTa += step * physics.eos().atPressure(Math.exp(lnP), Math.exp(lnTa), composition).nablaAd();
+            for (int sub = 0; sub < ENVELOPE_SUBSTEPS && lnPk > lnP; sub++) {
+                double step = (lnPk - lnP) / (ENVELOPE_SUBSTEPS - sub);
+                lnTa += step * gradient(Math.exp(lnP), Math.exp(lnTa), mass, gravity, surfaceLum, composition);
                 lnP += step;
             }
             if (k < kept && lnTa <= lnT[k]) {
@@ -139,5 +150,23 @@ final class HayashiGuess {
         }
         java.util.Arrays.fill(comp, composition);
         return new ModelState(MassMesh.ofFractions(mass, q, e), comp, lnR, lnRho, lnT, lum);
+    }
+
+    /**
+     * dln T/dln P of the envelope at (P, T): nabla_rad = 3 kappa L P/(16 pi a c G M T^4) (radiative diffusion at
+     * m = M; Kippenhahn, Weigert &amp; Weiss 2012, Stellar Structure and Evolution, ch. 5) where it is below nabla_ad (Schwarzschild; the birth composition is homogeneous), else the convective
+     * gradient of the physics with g = G M/R^2.
+     */
+    private double gradient(double pressure, double temperature, double mass, double gravity, double lum,
+                            Composition composition) {
+        EosState gas = physics.eos().atPressure(pressure, temperature, composition);
+        double kappa = physics.opacity().rosselandMean(gas.density(), temperature, composition).kappa();
+        double rad = 3.0 * kappa * lum * pressure / (16.0 * Math.PI * Constants.A_RAD * Constants.C * Constants.G
+                * mass * Math.pow(temperature, 4));
+        if (rad <= gas.nablaAd()) {
+            return rad;
+        }
+        return physics.convection().gradient(new LocalConvectionState(temperature, gas.density(), pressure, gravity,
+                kappa, gas.cp(), gas.delta(), rad, gas.nablaAd(), gas.nablaAd())).nabla();
     }
 }

@@ -264,7 +264,8 @@ public final class StartModelBuilder {
      * physics from there. With the bare polytrope as the guess the physics failed at 0.5-2 Msun (Z = 0.02 and
      * 0.04) and the aid at every mass at Z = 1e-4; with the adiabatic envelope the physics relaxes it at every mass
      * 0.1-10 Msun, Z 1e-4-0.04, every 0.1 dex, but one (4.0 Msun, Z = 0.02, where the aid's path takes over), where
-     * the aid, its remesh passes and the physics took 40-60 iterations before (1 Msun, Z = 0.02: 53 + 5, now 23).
+     * the aid, its remesh passes and the physics took 40-60 iterations before (1 Msun, Z = 0.02: 53 + 5, with the
+     * adiabatic envelope 23, with its superadiabatic layer 7).
      */
     private StellarModel relaxedFromGuess(ModelState start, double rate, int[] spent) {
         try {
