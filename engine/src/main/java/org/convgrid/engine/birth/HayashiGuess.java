@@ -154,8 +154,9 @@ final class HayashiGuess {
 
     /**
      * dln T/dln P of the envelope at (P, T): nabla_rad = 3 kappa L P/(16 pi a c G M T^4) (radiative diffusion at
-     * m = M; Kippenhahn, Weigert &amp; Weiss 2012, Stellar Structure and Evolution, ch. 5) where it is below nabla_ad (Schwarzschild; the birth composition is homogeneous), else the convective
-     * gradient of the physics with g = G M/R^2.
+     * m = M; Kippenhahn, Weigert &amp; Weiss 2012, Stellar Structure and Evolution, ch. 5) where it is below
+     * nabla_ad (Schwarzschild; the birth composition is homogeneous), else the convective gradient of the physics
+     * with g = G M/R^2.
      */
     private double gradient(double pressure, double temperature, double mass, double gravity, double lum,
                             Composition composition) {

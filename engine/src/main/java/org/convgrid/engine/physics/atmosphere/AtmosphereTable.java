@@ -41,7 +41,8 @@ public final class AtmosphereTable implements SurfaceBoundary {
     public static final TableAxis DEFAULT_GRAVITY_AXIS = new TableAxis(2.5, 6.0, DEFAULT_GRAVITY_POINTS);
     /**
      * log10 Teff axis of the low-gravity table, K: the default axis's nodes up to 10 000 K, where the surfaces of
-     * young stars high on their Hayashi tracks lie (start models 2650-5100 K, measured 0.1-10 Msun every 0.1 dex, Z 1e-4-0.04).
+     * young stars high on their Hayashi tracks lie (start models 2650-5100 K, measured 0.1-10 Msun every 0.1 dex,
+     * Z 1e-4-0.04).
      */
     public static final TableAxis LOW_GRAVITY_TEFF_AXIS = new TableAxis(3.30, 4.00, 22);
     /**
