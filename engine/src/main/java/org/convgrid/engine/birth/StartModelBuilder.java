@@ -2,6 +2,7 @@ package org.convgrid.engine.birth;
 
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
+import org.convgrid.engine.evolution.FullyConvectiveMesh;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.physics.opacity.Opacity;
 import org.convgrid.engine.state.Composition;
@@ -119,8 +120,9 @@ public final class StartModelBuilder {
                 centralTemperature, 1.0e5, 3.0e6, "K");
     }
 
+    /** The default central temperature, on the mesh of a fully convective star ({@link FullyConvectiveMesh}). */
     public StartModelBuilder(PhysicsSet physics) {
-        this(physics, new MeshPlanner(MeshPlanner.DEFAULT_POINTS), DEFAULT_CENTRAL_TEMPERATURE);
+        this(physics, FullyConvectiveMesh.planner(), DEFAULT_CENTRAL_TEMPERATURE);
     }
 
     /**

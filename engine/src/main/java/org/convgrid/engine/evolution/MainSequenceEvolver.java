@@ -36,7 +36,9 @@ import org.convgrid.engine.units.Constants;
  * nabla_mu from the mixed composition ({@link MuGradient}). Between steps the mesh is redistributed when uneven, with a cost
  * for composition gradients (|D X|/{@link #COMPOSITION_MESH_STEP} per interval, common practice, capped so that a
  * jump in X cannot shrink its interval below ~{@link #COMPOSITION_MESH_RESOLUTION} in m/M) and the composition
- * remapped conservatively ({@link MassRemap}); a redistribution that cannot be built keeps the previous mesh.
+ * remapped conservatively ({@link MassRemap}); a redistribution that cannot be built keeps the previous mesh. Before
+ * the zero-age main sequence a star with no radiative interior keeps the start model's number of points
+ * ({@link FullyConvectiveMesh}); every other step uses this evolver's planner.
  *
  * <p>Time steps (common practice, no single source): the fall of X_c (a rise, from mixing, is not limited) at most
  * {@link Settings#maxCentralHydrogenChange()} while X_c &gt; 0.1, at most {@link Settings#exhaustionFraction()} X_c
@@ -355,11 +357,12 @@ public final class MainSequenceEvolver {
                             boolean young) {
         CompositionStep burning = young ? youngNetwork : network;
         double[] cost = compositionCost(previous);
-        boolean remesh = planner.needsRemesh(previous, cost);
+        MeshPlanner stepPlanner = plannerFor(previous, young);
+        boolean remesh = stepPlanner.needsRemesh(previous, cost);
         StepStart start = StepStart.of(previous);
         if (remesh) {
             try {
-                start = StepStart.remeshed(previous, planner, cost, physics);
+                start = StepStart.remeshed(previous, stepPlanner, cost, physics);
             } catch (ConvgridException e) {
                 // a redistribution that cannot be built (degenerate mesh) does not depend on the step length, so
                 // halving the step would only burn the retry budget; the previous mesh is valid: keep it
@@ -442,6 +445,20 @@ public final class MainSequenceEvolver {
             }
         }
         return stepped(solver.relax(guess, grav, nablaMu, solveSettings), kept);
+    }
+
+    /**
+     * The planner of the step from {@code previous}: before the zero-age main sequence, while the star has no
+     * radiative interior ({@link FullyConvectiveMesh#holds}), one that keeps the previous model's number of points
+     * (the start model's, e.g. {@link FullyConvectiveMesh#POINTS}); else this evolver's, whose size, when it differs,
+     * makes the step remesh onto it. A track from the zero-age main sequence always has this evolver's planner.
+     */
+    private MeshPlanner plannerFor(StellarModel previous, boolean young) {
+        int size = previous.state().size();
+        if (!young || size == planner.points() || !FullyConvectiveMesh.holds(previous)) {
+            return planner;
+        }
+        return new MeshPlanner(size);
     }
 
     /**
