@@ -206,4 +206,42 @@ class MeshConvergenceProbe {
         System.out.printf("n=%d age %.4g Gyr Xc %.4f q0 %.3e pts<0.1 %d pts<0.3 %d pts(1-q<1e-3) %d cost %.0f shares%s%n",
                 n, age / Constants.GYR, p.hydrogen(0), mesh.fraction(0), below01, below03, outer, total, sb);
     }
+
+    /**
+     * Per N (-Dprobe.points): how many steps of a 1 Msun track from birth (-Dprobe.mass) start on a new mesh, before
+     * 10 Myr (the lithium burning), from there to 40 Myr (the arrival on the main sequence) and after; each such step
+     * burns at the start-of-step density and temperature, the others at the mid-step values.
+     */
+    @Test
+    void remeshedStepsFromBirth() {
+        double z = Double.parseDouble(System.getProperty("probe.z", "0.02"));
+        double m = Double.parseDouble(System.getProperty("probe.mass", "1.0"));
+        var physics = BirthTracks.physics(z);
+        for (String ps : System.getProperty("probe.points", "500,1000").split(",")) {
+            int n = Integer.parseInt(ps.trim());
+            MeshPlanner planner = new MeshPlanner(n);
+            MainSequenceEvolver evolver = new MainSequenceEvolver(physics, planner,
+                    HenyeySolver.Settings.DEFAULT.withIterationBudget(MainSequenceEvolver.RELAXATION_BUDGET),
+                    MainSequenceEvolver.Settings.DEFAULT);
+            StartModel start = new StartModelBuilder(physics, planner, StartModelBuilder.DEFAULT_CENTRAL_TEMPERATURE)
+                    .build(m * Constants.M_SUN, BirthTracks.birth(z));
+            double[] bands = {10.0 * BirthTracks.MYR, 40.0 * BirthTracks.MYR, Double.MAX_VALUE};
+            int[] remeshed = new int[bands.length];
+            int[] steps = new int[bands.length];
+            Object[] lastMesh = {start.model().state().mesh()};
+            evolver.evolve(start.model(), new double[] {0.0}, (age, dt, model) -> {
+                int band = 0;
+                while (age > bands[band]) {
+                    band++;
+                }
+                steps[band]++;
+                if (model.state().mesh() != lastMesh[0]) {
+                    remeshed[band]++;
+                    lastMesh[0] = model.state().mesh();
+                }
+            });
+            System.out.printf("n=%d remeshed steps: %d of %d before 10 Myr, %d of %d to 40 Myr, %d of %d after%n", n,
+                    remeshed[0], steps[0], remeshed[1], steps[1], remeshed[2], steps[2]);
+        }
+    }
 }
