@@ -228,6 +228,7 @@ class MeshConvergenceProbe {
             double[] bands = {10.0 * BirthTracks.MYR, 40.0 * BirthTracks.MYR, Double.MAX_VALUE};
             int[] remeshed = new int[bands.length];
             int[] steps = new int[bands.length];
+            int[][] trigger = new int[bands.length][TERMS.length];
             Object[] lastMesh = {start.model().state().mesh()};
             evolver.evolve(start.model(), new double[] {0.0}, (age, dt, model) -> {
                 int band = 0;
@@ -235,6 +236,10 @@ class MeshConvergenceProbe {
                     band++;
                 }
                 steps[band]++;
+                int term = remeshTrigger(model);
+                if (term >= 0) {
+                    trigger[band][term]++;
+                }
                 if (model.state().mesh() != lastMesh[0]) {
                     remeshed[band]++;
                     lastMesh[0] = model.state().mesh();
@@ -242,6 +247,55 @@ class MeshConvergenceProbe {
             });
             System.out.printf("n=%d remeshed steps: %d of %d before 10 Myr, %d of %d to 40 Myr, %d of %d after%n", n,
                     remeshed[0], steps[0], remeshed[1], steps[1], remeshed[2], steps[2]);
+            for (int b = 0; b < bands.length; b++) {
+                StringBuilder sb = new StringBuilder();
+                for (int i = 0; i < TERMS.length; i++) {
+                    sb.append(' ').append(TERMS[i]).append(' ').append(trigger[b][i]);
+                }
+                System.out.printf("n=%d band %d: models whose costliest interval asks for a remesh, by its largest"
+                        + " term:%s%n", n, b, sb);
+            }
         }
+    }
+
+    private static final String[] TERMS = {"lnP", "lnT", "lnr", "m/M", "ln(1-m/M)", "L", "boundary", "X"};
+
+    /**
+     * The index in {@link #TERMS} of the largest term of the model's costliest interval when that interval exceeds
+     * {@link MeshPlanner#UNEVENNESS_LIMIT} times the even share (the planner then remeshes), else -1. The weights
+     * are the planner's and the evolver's composition cost, restated here.
+     */
+    private static int remeshTrigger(org.convgrid.engine.structure.StellarModel model) {
+        var p = model.profile();
+        var mesh = model.state().mesh();
+        int size = p.size();
+        double lumScale = Math.abs(p.luminosity(size - 1));
+        double total = 0.0;
+        double largest = -1.0;
+        int term = -1;
+        for (int k = 0; k < size - 1; k++) {
+            double[] t = new double[TERMS.length];
+            t[0] = Math.abs(Math.log(p.pressure(k + 1) / p.pressure(k))) / 0.05;
+            t[1] = Math.abs(Math.log(p.temperature(k + 1) / p.temperature(k))) / 0.03;
+            t[2] = Math.abs(Math.log(p.radius(k + 1) / p.radius(k))) / 0.08;
+            t[3] = Math.abs(mesh.fraction(k + 1) - mesh.fraction(k)) / 0.01;
+            t[4] = k < size - 2 ? Math.abs(Math.log(mesh.exteriorFraction(k) / mesh.exteriorFraction(k + 1))) : 0.0;
+            t[5] = Math.abs(p.luminosity(k + 1) - p.luminosity(k)) / lumScale / 0.02;
+            t[6] = p.convective(k) != p.convective(k + 1) ? 2.0 : 0.0;
+            t[7] = Math.min(Math.abs(p.hydrogen(k + 1) - p.hydrogen(k)) / MainSequenceEvolver.COMPOSITION_MESH_STEP,
+                    (mesh.fraction(k + 1) - mesh.fraction(k)) / MainSequenceEvolver.COMPOSITION_MESH_RESOLUTION);
+            double c = 0.0;
+            int big = 0;
+            for (int i = 0; i < t.length; i++) {
+                c += t[i];
+                big = t[i] > t[big] ? i : big;
+            }
+            total += c;
+            if (c > largest) {
+                largest = c;
+                term = big;
+            }
+        }
+        return largest > MeshPlanner.UNEVENNESS_LIMIT * total / (size - 1) ? term : -1;
     }
 }
