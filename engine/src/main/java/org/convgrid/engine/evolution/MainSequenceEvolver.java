@@ -107,7 +107,8 @@ public final class MainSequenceEvolver {
      * at the same steps. Implicit Euler set dL/dm - eps_nuc at the end of the step equal to a difference centred
      * half a step earlier, so the contraction lagged by ~half a step all along the track; the composition update
      * was already second order (mid-step density and temperature) on steps that kept the mesh, not on remeshed
-     * ones (12 of 57 steps before 10 Myr at 500 points, 55 of 56 at 1000; MeshConvergenceProbe): extending it to
+     * ones (12 of 57 steps before 10 Myr at 500 points; 55 of 56 at 1000 while the mesh planner's boundary cost
+     * did not scale with the number of points; MeshConvergenceProbe): extending it to
      * them moved the 1 Msun ZAMS age from 39.21 to 38.24 Myr and made it independent of the number of mesh points
      * (38.03-38.25 Myr for 250-2000 points, against 39.21 at 500 and 40.74 at 1000), but see the lithium in
      * {@link #advance}.
@@ -392,8 +393,9 @@ public final class MainSequenceEvolver {
             // on the main sequence the same mid-step extrapolation across a remesh, its slope from the two models
             // carried onto this step's mesh alike. Without it every remeshed step burnt at the start-of-step rho and
             // T, first order in time, and how many steps remesh jumps with the number of points (an interval is
-            // redistributed beyond UNEVENNESS_LIMIT times the even share, which shrinks as 1/N): 1 Msun, Z = 0.02,
-            // zero-age track, 0 / 0 / 28 / 136 / 145 of 146 steps remeshed at 500 / 700 / 1000 / 1400 / 2000 points,
+            // redistributed beyond UNEVENNESS_LIMIT times the even share, which shrinks as 1/N; measured while the
+            // planner's boundary cost was fixed): 1 Msun, Z = 0.02, zero-age track, 0 / 0 / 28 / 136 / 145 of 146
+            // steps remeshed at 500 / 700 / 1000 / 1400 / 2000 points,
             // exhaustion at 9.723 / 9.735 / 9.866 / 9.988 / 9.990 Gyr without this, 9.723 / 9.735 / 9.743 / 9.744 /
             // 9.746 with it (MeshConvergenceProbe). Before the ZAMS remeshed steps keep the start-of-step values:
             // there the mid-step values leave the lithium burnt in the convective envelope with its first-order error
