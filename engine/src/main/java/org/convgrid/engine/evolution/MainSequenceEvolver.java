@@ -110,8 +110,9 @@ public final class MainSequenceEvolver {
      * ones (12 of 57 steps before 10 Myr at 500 points; 55 of 56 at 1000 while the mesh planner's boundary cost
      * did not scale with the number of points; MeshConvergenceProbe): extending it to
      * them moved the 1 Msun ZAMS age from 39.21 to 38.24 Myr and made it independent of the number of mesh points
-     * (38.03-38.25 Myr for 250-2000 points, against 39.21 at 500 and 40.74 at 1000), but see the lithium in
-     * {@link #advance}.
+     * (38.03-38.25 Myr for 250-2000 points, against 39.21 at 500 and 40.74 at 1000), but it left the envelope's lithium
+     * burning with its own first-order error alone (1 Msun log Li/Li0 at 1 Gyr -1.20, -0.70 with every step limit
+     * quartered), so before the ZAMS remeshed steps still burn at the start-of-step values.
      */
     public static final double YOUNG_TWO_STEP_RATIO = 2.0;
     /** Newton budget of one step's structure relaxation (a failure halves the step). */
