@@ -25,7 +25,9 @@ import org.convgrid.engine.units.Constants;
  * Evolves a zero-age main-sequence model in time until core-hydrogen exhaustion (central X below
  * {@link Settings#endCentralHydrogen()}) or the age limit. Each step, operator split (common practice): (1) the
  * convective zones of the previous model are homogenised ({@link ConvectiveMixing}); (2) the composition is
- * advanced over dt by {@link CompositionStep} at the previous model's density and temperature, each mixed zone as
+ * advanced over dt by {@link CompositionStep} at the density and temperature of the middle of the step (extrapolated
+ * from the previous two models; after a remesh carried onto the new mesh on the main sequence, the previous model's
+ * values before it), each mixed zone as
  * one composition with its mass-weighted rates, every other point on its own; (3) the
  * structure is relaxed with that composition and the gravothermal term eps_grav from the difference with the
  * previous model ({@link GravothermalEnergy}; before the zero-age main sequence its two-step form, second order in
@@ -106,8 +108,13 @@ public final class MainSequenceEvolver {
      * two-step form 154.3/153.3/153.2, 38.72/37.99/37.70, 26.29/25.95/25.84, 11.37/11.20/10.85, 3.494/3.472/3.460
      * at the same steps. Implicit Euler set dL/dm - eps_nuc at the end of the step equal to a difference centred
      * half a step earlier, so the contraction lagged by ~half a step all along the track; the composition update
-     * was already second order (mid-step density and temperature) and extending that to steps after a remesh moved
-     * the ZAMS ages by less than 0.5 %.
+     * was already second order (mid-step density and temperature) on steps that kept the mesh, not on remeshed
+     * ones (12 of 57 steps before 10 Myr at 500 points; 55 of 56 at 1000 while the mesh planner's boundary cost
+     * did not scale with the number of points; MeshConvergenceProbe): extending it to
+     * them moved the 1 Msun ZAMS age from 39.21 to 38.24 Myr and made it independent of the number of mesh points
+     * (38.03-38.25 Myr for 250-2000 points, against 39.21 at 500 and 40.74 at 1000), but it left the envelope's lithium
+     * burning with its own first-order error alone (1 Msun log Li/Li0 at 1 Gyr -1.20, -0.70 with every step limit
+     * quartered), so before the ZAMS remeshed steps still burn at the start-of-step values.
      */
     public static final double YOUNG_TWO_STEP_RATIO = 2.0;
     /** Newton budget of one step's structure relaxation (a failure halves the step). */
@@ -339,8 +346,10 @@ public final class MainSequenceEvolver {
 
     /**
      * One step of length dt from {@code previous}. The network runs at the density and temperature of the
-     * middle of the step, extrapolated linearly in ln rho and ln T from the previous two models when they share
-     * a mesh (which makes the operator split second order in time), else at the previous model's.
+     * middle of the step, extrapolated linearly in ln rho and ln T from the previous two models (which makes the
+     * operator split second order in time), on the main sequence both carried onto this step's mesh when it is
+     * not theirs; at the previous model's when there is no trusted model before it or, before the zero-age main
+     * sequence, when the mesh changed.
      *
      * @param age the age of {@code previous} since the start model, s
      * @param older the model before {@code previous}, or null
@@ -383,6 +392,25 @@ public final class MainSequenceEvolver {
             for (int k = 0; k < n; k++) {
                 rho[k] *= Math.pow(rho[k] / p.density(k), w);
                 t[k] *= Math.pow(t[k] / p.temperature(k), w);
+            }
+        } else if (!young && older != null && olderStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * olderStep) {
+            // on the main sequence the same mid-step extrapolation across a remesh, its slope from the two models
+            // carried onto this step's mesh alike. Without it every remeshed step burnt at the start-of-step rho and
+            // T, first order in time, and how many steps remesh jumps with the number of points (an interval is
+            // redistributed beyond UNEVENNESS_LIMIT times the even share, which shrinks as 1/N; measured while the
+            // planner's boundary cost was fixed): 1 Msun, Z = 0.02, zero-age track, 0 / 0 / 28 / 136 / 145 of 146
+            // steps remeshed at 500 / 700 / 1000 / 1400 / 2000 points,
+            // exhaustion at 9.723 / 9.735 / 9.866 / 9.988 / 9.990 Gyr without this, 9.723 / 9.735 / 9.743 / 9.744 /
+            // 9.746 with it (MeshConvergenceProbe). Before the ZAMS remeshed steps keep the start-of-step values:
+            // there the mid-step values leave the lithium burnt in the convective envelope with its first-order error
+            // alone (the zone burnt is the previous model's, deeper than at mid-step): 1 Msun, 500 points, log Li/Li0
+            // at 1 Gyr -1.20 with them against -1.02 without, and -0.70 with every step limit quartered
+            double w = 0.5 * dt / olderStep;
+            double[][] now = CarriedUnknowns.onto(previous.state(), start.state().mesh(), false);
+            double[][] before = CarriedUnknowns.onto(older.state(), start.state().mesh(), false);
+            for (int k = 0; k < n; k++) {
+                rho[k] *= Math.exp(w * (now[1][k] - before[1][k]));
+                t[k] *= Math.exp(w * (now[2][k] - before[2][k]));
             }
         }
         MassMesh mesh = start.state().mesh();
