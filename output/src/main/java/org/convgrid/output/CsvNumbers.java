@@ -3,6 +3,7 @@ package org.convgrid.output;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
+import java.util.regex.Pattern;
 
 /**
  * The number format of every CSV file convgrid writes: locale-independent, deterministic (the same double always
@@ -22,6 +23,11 @@ public final class CsvNumbers {
     private static final MathContext ROUNDING = new MathContext(SIGNIFICANT_DIGITS, RoundingMode.HALF_EVEN);
     private static final int PLAIN_MIN_EXPONENT = -4;
     private static final int PLAIN_MAX_EXPONENT = 6;
+    /**
+     * What {@link #parse} accepts besides the empty cell and the infinities; compiled once, since a run reads every
+     * cell of its catalogue back (String.matches would compile it again for each cell).
+     */
+    private static final Pattern NUMBER = Pattern.compile("[-+]?[0-9.]+([eE][-+]?[0-9]+)?");
 
     private CsvNumbers() {
     }
@@ -72,7 +78,7 @@ public final class CsvNumbers {
             case "inf" -> Double.POSITIVE_INFINITY;
             case "-inf" -> Double.NEGATIVE_INFINITY;
             default -> {
-                if (!t.matches("[-+]?[0-9.]+([eE][-+]?[0-9]+)?")) {
+                if (!NUMBER.matcher(t).matches()) {
                     throw new NumberFormatException("not a number: '" + text + "'");
                 }
                 yield Double.parseDouble(t);
