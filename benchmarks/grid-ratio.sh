@@ -10,7 +10,7 @@
 # GRID_RATIO_JVM_OPTIONS adds JVM options to every run, e.g. GRID_RATIO_JVM_OPTIONS=-XX:+UseSerialGC, the collector
 # the launcher gives `run` (without it the JVM's defaults are measured, as before).
 # GRID_RATIO_LAUNCHER=path/to/convgrid runs the grid through that launcher instead of `java -jar JAR`, with every JVM
-# option it gives `run` (class-data archive, collector, compiler commands and directives; GRID_RATIO_JVM_OPTIONS then
+# option it gives `run` (collector, compiler commands and directives; GRID_RATIO_JVM_OPTIONS then
 # reaches it as CONVGRID_JVM_OPTIONS). To compare two builds this way, copy the first build's launcher,
 # cli/run-compiler-directives.json and cli/target/convgrid.jar into a scratch directory (same layout) and run the
 # script once with each launcher, back to back.
