@@ -1,5 +1,7 @@
 package org.convgrid.engine.evolution;
 
+import org.convgrid.engine.state.Composition;
+
 /**
  * Destruction of deuterium by d(p,g)3He and of 7Li by 7Li(p,a)4He over one step. Each is one proton capture at
  * a rate linear in the fragile species' own abundance, dX_i/dt = -lambda_i X_i with lambda_i = rho Y_p
@@ -8,6 +10,14 @@ package org.convgrid.engine.evolution;
  * X_i(t + dt) = X_i(t) exp(-lambda_i dt), however many e-folds it spans. The rate of a mixed zone is the
  * mass-weighted mean of its points' rates, which the caller passes in. Mass moves with the mass numbers, 2 + 1
  * -&gt; 3 and 7 + 1 -&gt; 4 + 4, so the sum of the fractions is unchanged. Stateless.
+ *
+ * <p>Over a step the rate does change: in a convective envelope lambda_Li is the zone's mean of a rate that rises
+ * steeply with temperature (~T^18 near 3e6 K) at the zone's base, and the base moves during the step; a rate taken
+ * at one instant of the step (its start) is first order in dt. {@link #corrected} therefore re-burns each point
+ * with the trapezoid mean of the rates of the start-of-step and end-of-step models, each with its own mixed zones,
+ * exp(-(lambda_start + lambda_end) dt / 2): second order in dt. Deuterium and 7Li are traces whose burning does
+ * not change the structure by more than the solver's tolerance, so the correction is made on the converged
+ * end-of-step model without solving again.
  */
 final class LightElementBurning {
 
@@ -45,5 +55,41 @@ final class LightElementBurning {
             x[0] -= HYDROGEN_PER_LITHIUM * burnt;
             x[2] += HELIUM4_PER_LITHIUM * burnt;
         }
+    }
+
+    /**
+     * The end-of-step compositions {@code end} re-burnt from the rates {@code used} (those the step's
+     * {@link #burn} applied, per point) to the trapezoid mean of {@code atStart} and {@code atEnd}: each species
+     * times exp(-((lambda_start + lambda_end)/2 - lambda_used) dt), with the mass that this burns (or gives
+     * back) moved with the mass numbers as in {@link #burn}. Other operators applied to the step (mixing,
+     * settling) multiply the traces' abundances and commute with this factor.
+     *
+     * @param dt step, s
+     * @return the corrected compositions (a new array)
+     */
+    static Composition[] corrected(Composition[] end, LightElementRates used, LightElementRates atStart,
+                                   LightElementRates atEnd, double dt) {
+        Composition[] out = new Composition[end.length];
+        for (int k = 0; k < end.length; k++) {
+            double[] x = MassFractions.of(end[k]);
+            double d = x[MassFractions.H2];
+            if (d > 0.0) {
+                double extra = 0.5 * (atStart.deuterium()[k] + atEnd.deuterium()[k]) - used.deuterium()[k];
+                double burnt = d * -Math.expm1(-extra * dt);
+                x[MassFractions.H2] = d - burnt;
+                x[0] -= HYDROGEN_PER_DEUTERIUM * burnt;
+                x[1] += HELIUM3_PER_DEUTERIUM * burnt;
+            }
+            double li = x[MassFractions.LI7];
+            if (li > 0.0) {
+                double extra = 0.5 * (atStart.lithium()[k] + atEnd.lithium()[k]) - used.lithium()[k];
+                double burnt = li * -Math.expm1(-extra * dt);
+                x[MassFractions.LI7] = li - burnt;
+                x[0] -= HYDROGEN_PER_LITHIUM * burnt;
+                x[2] += HELIUM4_PER_LITHIUM * burnt;
+            }
+            out[k] = MassFractions.composition(x);
+        }
+        return out;
     }
 }

@@ -379,6 +379,9 @@ public final class MainSequenceEvolver {
             }
         }
         int n = start.state().size();
+        // the light elements' rates of the start-of-step model, for their trapezoid in time (lightElementsEnd)
+        double[] startRho = start.density();
+        double[] startT = start.temperature();
         double[] rho = start.density().clone();
         double[] t = start.temperature().clone();
         // the slope from the step before is trusted only when that step was not much shorter than this one: after
@@ -416,6 +419,14 @@ public final class MainSequenceEvolver {
         MassMesh mesh = start.state().mesh();
         boolean[] mixed = physics.overshoot().mixedPoints(mesh::mass, start.convective(), previous.profile());
         Composition[] comp = burn(burning, start.state(), mixed, rho, t, dt);
+        LightElementTrapezoid light = null;
+        if (LightElementRates.anyIn(start.state().compositions())) {
+            double[] w = PointCells.masses(mesh);
+            Composition[] before = start.state().compositions();
+            LightElementRates used = LightElementRates.of(physics.nuclear(), w, mixed, before, rho, t);
+            light = new LightElementTrapezoid(used, sameMesh
+                    ? LightElementRates.of(physics.nuclear(), w, mixed, before, startRho, startT) : used, dt);
+        }
         if (settling) {
             // settling is driven by the previous structure; the zones it reaches are mixed again at once
             comp = ConvectiveMixing.mix(mesh, SettlingStep.apply(previous, mesh, remesh, comp, mixed, dt), mixed);
@@ -454,8 +465,9 @@ public final class MainSequenceEvolver {
                 // the curvature from a third model under the same trust rule as the slope
                 boolean curved = oldest != null && oldest.state().mesh() == older.state().mesh()
                         && oldestStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * oldestStep;
-                return stepped(solver.relax(extrapolated(guess, older.state(), gOlder,
-                        curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings), kept);
+                return stepped(lightElementsEnd(solver.relax(extrapolated(guess, older.state(), gOlder,
+                        curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings), light),
+                        kept);
             } catch (SolveFailedException e) {
                 // an extrapolation that overshoots (e.g. across a change of the convective zones) is no worse
                 // than no extrapolation: fall back to the previous model as the guess
@@ -466,13 +478,51 @@ public final class MainSequenceEvolver {
             // without this the two steps after each remesh start from a copy and take 5-6 iterations instead of 3-4
             try {
                 boolean curved = oldest != null && oldestStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * oldestStep;
-                return stepped(solver.relax(carried(guess, previous.state(), older.state(), gOlder,
-                        curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings), kept);
+                return stepped(lightElementsEnd(solver.relax(carried(guess, previous.state(), older.state(), gOlder,
+                        curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings), light),
+                        kept);
             } catch (SolveFailedException e) {
                 // as above: fall back to the previous model as the guess
             }
         }
-        return stepped(solver.relax(guess, grav, nablaMu, solveSettings), kept);
+        return stepped(lightElementsEnd(solver.relax(guess, grav, nablaMu, solveSettings), light), kept);
+    }
+
+    /**
+     * The light-element rates a step applied ({@code used}: at the network's mid-step density and temperature in
+     * the start-of-step zones) and those of the start-of-step model itself, for {@link #lightElementsEnd}.
+     */
+    private record LightElementTrapezoid(LightElementRates used, LightElementRates atStart, double dt) {
+    }
+
+    /**
+     * The converged end-of-step model with its deuterium and 7Li re-burnt at the trapezoid mean of the start- and
+     * end-of-step rates, each model with its own mixed zones ({@link LightElementBurning#corrected}); unchanged when
+     * the star holds neither ({@code light} null). The structure is not solved again: both are traces.
+     */
+    private StellarModel lightElementsEnd(StellarModel end, LightElementTrapezoid light) {
+        if (light == null) {
+            return end;
+        }
+        StellarProfile p = end.profile();
+        int n = p.size();
+        double[] rho = new double[n];
+        double[] t = new double[n];
+        boolean[] convective = new boolean[n];
+        for (int k = 0; k < n; k++) {
+            rho[k] = p.density(k);
+            t[k] = p.temperature(k);
+            convective[k] = p.convective(k);
+        }
+        MassMesh mesh = end.state().mesh();
+        boolean[] mixed = physics.overshoot().mixedPoints(mesh::mass, convective, p);
+        Composition[] comp = end.state().compositions();
+        LightElementRates atEnd = LightElementRates.of(physics.nuclear(), PointCells.masses(mesh), mixed, comp, rho,
+                t);
+        Composition[] corrected = LightElementBurning.corrected(comp, light.used(), light.atStart(), atEnd,
+                light.dt());
+        return new StellarModel(end.state().withCompositions(corrected), p, end.global(), end.convection(),
+                end.report());
     }
 
     /**

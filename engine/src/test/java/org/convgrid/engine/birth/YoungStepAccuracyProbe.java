@@ -15,7 +15,8 @@ import org.junit.jupiter.api.condition.EnabledIfSystemProperty;
  * limits themselves with -Dprobe.limits as for {@link BirthTracks#limits()}): central and surface deuterium over
  * their birth value at 0.3 and 1 Myr, the radius at 1 Myr, the radiative-core onset, the lithium halving, the ZAMS
  * age, the surface lithium at the last requested age (1 Gyr for 1 Msun, 100 Myr for 0.5 Msun), the energy closure to
- * that age and the steps and Newton iterations before the ZAMS.
+ * that age and the steps and Newton iterations before the ZAMS; with -Dprobe.lowMass=true also 0.3 and 0.1 Msun (their
+ * lithium halving; both stay on the pre-main sequence to the end age).
  */
 @EnabledIfSystemProperty(named = "convgrid.probe", matches = "true")
 class YoungStepAccuracyProbe {
@@ -26,7 +27,10 @@ class YoungStepAccuracyProbe {
     void protectedQuantities() {
         double[] coarseness = java.util.Arrays.stream(System.getProperty("probe.coarse", "1").split(","))
                 .mapToDouble(Double::parseDouble).toArray();
-        double[][] cases = {{1.0, 1000, 1000}, {0.5, 300, 100}};
+        // -Dprobe.lowMass=true adds 0.3 and 0.1 Msun (to 200 and 300 Myr) for their lithium halving
+        double[][] cases = Boolean.getBoolean("probe.lowMass")
+                ? new double[][] {{1.0, 1000, 1000}, {0.5, 300, 100}, {0.3, 200, 200}, {0.1, 300, 300}}
+                : new double[][] {{1.0, 1000, 1000}, {0.5, 300, 100}};
         for (double coarse : coarseness) {
             for (double[] c : cases) {
                 BirthTrack t = BirthTracks.track(c[0], 0.02, c[1], coarse, 0.3, 1, c[2]);
