@@ -26,8 +26,7 @@ import org.convgrid.engine.units.Constants;
  * {@link Settings#endCentralHydrogen()}) or the age limit. Each step, operator split (common practice): (1) the
  * convective zones of the previous model are homogenised ({@link ConvectiveMixing}); (2) the composition is
  * advanced over dt by {@link CompositionStep} at the density and temperature of the middle of the step (extrapolated
- * from the previous two models; after a remesh carried onto the new mesh on the main sequence, the previous model's
- * values before it), each mixed zone as
+ * from the previous two models, carried onto the new mesh after a remesh), each mixed zone as
  * one composition with its mass-weighted rates, every other point on its own; (3) the
  * structure is relaxed with that composition and the gravothermal term eps_grav from the difference with the
  * previous model ({@link GravothermalEnergy}; before the zero-age main sequence its two-step form, second order in
@@ -107,14 +106,8 @@ public final class MainSequenceEvolver {
      * 11.44/11.16/10.93, 3.521/3.477/3.464 Myr, first order (halving the limits halves the change); with the
      * two-step form 154.3/153.3/153.2, 38.72/37.99/37.70, 26.29/25.95/25.84, 11.37/11.20/10.85, 3.494/3.472/3.460
      * at the same steps. Implicit Euler set dL/dm - eps_nuc at the end of the step equal to a difference centred
-     * half a step earlier, so the contraction lagged by ~half a step all along the track; the composition update
-     * was already second order (mid-step density and temperature) on steps that kept the mesh, not on remeshed
-     * ones (12 of 57 steps before 10 Myr at 500 points; 55 of 56 at 1000 while the mesh planner's boundary cost
-     * did not scale with the number of points; MeshConvergenceProbe): extending it to
-     * them moved the 1 Msun ZAMS age from 39.21 to 38.24 Myr and made it independent of the number of mesh points
-     * (38.03-38.25 Myr for 250-2000 points, against 39.21 at 500 and 40.74 at 1000), but it left the envelope's lithium
-     * burning with its own first-order error alone (1 Msun log Li/Li0 at 1 Gyr -1.20, -0.70 with every step limit
-     * quartered), so before the ZAMS remeshed steps still burn at the start-of-step values.
+     * half a step earlier, so the contraction lagged by ~half a step all along the track. The composition update is
+     * second order too (mid-step density and temperature, on remeshed steps as well; see {@code advance}).
      */
     public static final double YOUNG_TWO_STEP_RATIO = 2.0;
     /** Newton budget of one step's structure relaxation (a failure halves the step). */
@@ -387,8 +380,8 @@ public final class MainSequenceEvolver {
         // the slope from the step before is trusted only when that step was not much shorter than this one: after
         // the sliver that lands on a requested age, dt/olderStep reaches hundreds, and extrapolating that far
         // multiplies the solver's noise into an odd-even sawtooth of L (seen at 1 Msun after landing on 4.57 Gyr)
-        boolean sameMesh = !remesh && older != null && older.state().mesh() == previous.state().mesh()
-                && olderStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * olderStep;
+        boolean trusted = older != null && olderStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * olderStep;
+        boolean sameMesh = trusted && !remesh && older.state().mesh() == previous.state().mesh();
         if (sameMesh) {
             double w = 0.5 * dt / olderStep;
             StellarProfile p = older.profile();
@@ -396,18 +389,20 @@ public final class MainSequenceEvolver {
                 rho[k] *= Math.pow(rho[k] / p.density(k), w);
                 t[k] *= Math.pow(t[k] / p.temperature(k), w);
             }
-        } else if (!young && older != null && olderStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * olderStep) {
-            // on the main sequence the same mid-step extrapolation across a remesh, its slope from the two models
-            // carried onto this step's mesh alike. Without it every remeshed step burnt at the start-of-step rho and
-            // T, first order in time, and how many steps remesh jumps with the number of points (an interval is
-            // redistributed beyond UNEVENNESS_LIMIT times the even share, which shrinks as 1/N; measured while the
-            // planner's boundary cost was fixed): 1 Msun, Z = 0.02, zero-age track, 0 / 0 / 28 / 136 / 145 of 146
-            // steps remeshed at 500 / 700 / 1000 / 1400 / 2000 points,
-            // exhaustion at 9.723 / 9.735 / 9.866 / 9.988 / 9.990 Gyr without this, 9.723 / 9.735 / 9.743 / 9.744 /
-            // 9.746 with it (MeshConvergenceProbe). Before the ZAMS remeshed steps keep the start-of-step values:
-            // there the mid-step values leave the lithium burnt in the convective envelope with its first-order error
-            // alone (the zone burnt is the previous model's, deeper than at mid-step): 1 Msun, 500 points, log Li/Li0
-            // at 1 Gyr -1.20 with them against -1.02 without, and -0.70 with every step limit quartered
+        } else if (trusted) {
+            // across a remesh (this step's, or the last one's) the same mid-step extrapolation, its slope from the two
+            // models carried onto this step's mesh alike (also onto the larger mesh of the step that leaves
+            // FullyConvectiveMesh). Without it every remeshed step burnt at the start-of-step rho and T, first order
+            // in time, and which steps remesh changes with the number of points: on the main sequence, 1 Msun,
+            // Z = 0.02, zero-age track, 0 / 0 / 28 / 136 / 145 of 146 steps remeshed at 500 / 700 / 1000 / 1400 /
+            // 2000 points (while the planner's boundary cost was fixed), exhaustion at 9.723 / 9.735 / 9.866 / 9.988
+            // / 9.990 Gyr without this, 9.723 / 9.735 / 9.743 / 9.744 / 9.746 with it; before the ZAMS (12-14 of the
+            // 57 steps before 10 Myr remeshed), 1 Msun from birth, ZAMS at 39.04 / 38.24 / 38.30 / 39.11 / 38.28 Myr
+            // without it, 38.32 / 38.32 / 38.29 / 38.27 / 38.32 with it at 500 / 700 / 1000 / 1400 / 2000 points
+            // (MeshConvergenceProbe), and 38.33 / 38.04 / 37.81 Myr with every step limit x1 / x0.5 / x0.25 against
+            // 39.75 / 38.23 / 37.82 without it (YoungStepAccuracyProbe). Since the light elements burn with the
+            // trapezoid of start- and end-of-step rates (lightElementsEnd) this no longer moves the envelope's
+            // lithium off its time-step limit (1 Msun log Li/Li0 at 1 Gyr -0.566 / -0.565 / -0.576 at those limits)
             double w = 0.5 * dt / olderStep;
             double[][] now = CarriedUnknowns.onto(previous.state(), start.state().mesh(), false);
             double[][] before = CarriedUnknowns.onto(older.state(), start.state().mesh(), false);
@@ -424,7 +419,11 @@ public final class MainSequenceEvolver {
             double[] w = PointCells.masses(mesh);
             Composition[] before = start.state().compositions();
             LightElementRates used = LightElementRates.of(physics.nuclear(), w, mixed, before, rho, t);
-            light = new LightElementTrapezoid(used, sameMesh
+            // the start-of-step rates at the start-of-step rho and T whenever the network's were extrapolated: with
+            // the extrapolated rates in their place on redistributed steps the trapezoid leant towards the end of the
+            // step and the envelope burnt too much lithium (1 Msun, Z = 0.02, log Li/Li0 at 1 Gyr -0.71 / -0.59 /
+            // -0.58 with every step limit x1 / x0.5 / x0.25, against -0.566 / -0.565 / -0.576; YoungStepAccuracyProbe)
+            light = new LightElementTrapezoid(used, trusted
                     ? LightElementRates.of(physics.nuclear(), w, mixed, before, startRho, startT) : used, dt);
         }
         if (settling) {
