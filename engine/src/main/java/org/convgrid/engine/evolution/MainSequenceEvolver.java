@@ -397,7 +397,7 @@ public final class MainSequenceEvolver {
             // Z = 0.02, zero-age track, 0 / 0 / 28 / 136 / 145 of 146 steps remeshed at 500 / 700 / 1000 / 1400 /
             // 2000 points (while the planner's boundary cost was fixed), exhaustion at 9.723 / 9.735 / 9.866 / 9.988
             // / 9.990 Gyr without this, 9.723 / 9.735 / 9.743 / 9.744 / 9.746 with it; before the ZAMS (12-14 of the
-            // 57 steps before 10 Myr remeshed), 1 Msun from birth, ZAMS at 39.04 / 38.24 / 38.30 / 39.11 / 38.28 Myr
+            // 56 steps before 10 Myr remeshed), 1 Msun from birth, ZAMS at 39.04 / 38.24 / 38.30 / 39.11 / 38.28 Myr
             // without it, 38.32 / 38.32 / 38.29 / 38.27 / 38.32 with it at 500 / 700 / 1000 / 1400 / 2000 points
             // (MeshConvergenceProbe), and 38.33 / 38.04 / 37.81 Myr with every step limit x1 / x0.5 / x0.25 against
             // 39.75 / 38.23 / 37.82 without it (YoungStepAccuracyProbe). Since the light elements burn with the
