@@ -35,9 +35,12 @@ public final class FullyConvectiveMesh {
     private FullyConvectiveMesh() {
     }
 
+    /** Immutable, so one serves every track and thread. */
+    private static final MeshPlanner PLANNER = new MeshPlanner(POINTS);
+
     /** The planner of a fully convective star, {@link #POINTS} points. */
     public static MeshPlanner planner() {
-        return new MeshPlanner(POINTS);
+        return PLANNER;
     }
 
     /**

@@ -535,7 +535,7 @@ public final class MainSequenceEvolver {
         if (!young || size == planner.points() || !FullyConvectiveMesh.holds(previous)) {
             return planner;
         }
-        return new MeshPlanner(size);
+        return size == FullyConvectiveMesh.POINTS ? FullyConvectiveMesh.planner() : new MeshPlanner(size);
     }
 
     /**
