@@ -471,7 +471,7 @@ public final class MainSequenceEvolver {
                 // an extrapolation that overshoots (e.g. across a change of the convective zones) is no worse
                 // than no extrapolation: fall back to the previous model as the guess
             }
-        } else if (older != null && olderStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * olderStep) {
+        } else if (trusted) {
             // across a remesh (this step's or one of the last two): the same extrapolation with the older models
             // carried onto this step's mesh; before the ZAMS the planner remeshes every third step or so, and
             // without this the two steps after each remesh start from a copy and take 5-6 iterations instead of 3-4
