@@ -51,6 +51,11 @@ public final class MeshPlanner {
         return points;
     }
 
+    /** The cost of an interval where the convective state changes (2 at the default size, scaled as 1/(N - 1)). */
+    public double boundaryCost() {
+        return boundaryCost;
+    }
+
     /** Whether the model's mesh is uneven enough (or of the wrong size) to be worth redistributing. */
     public boolean needsRemesh(StellarModel model) {
         return needsRemesh(model, null);

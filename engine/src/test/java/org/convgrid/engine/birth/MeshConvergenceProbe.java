@@ -182,6 +182,8 @@ class MeshConvergenceProbe {
         }
         double[] terms = new double[8];
         double lumScale = Math.abs(p.luminosity(size - 1));
+        // the planner's own boundary cost for this size (it scales with the even share)
+        double boundary = new MeshPlanner(size).boundaryCost();
         for (int k = 0; k < size - 1; k++) {
             terms[0] += Math.abs(Math.log(p.pressure(k + 1) / p.pressure(k))) / 0.05;
             terms[1] += Math.abs(Math.log(p.temperature(k + 1) / p.temperature(k))) / 0.03;
@@ -191,7 +193,7 @@ class MeshConvergenceProbe {
                 terms[4] += Math.abs(Math.log(mesh.exteriorFraction(k) / mesh.exteriorFraction(k + 1)));
             }
             terms[5] += Math.abs(p.luminosity(k + 1) - p.luminosity(k)) / lumScale / 0.02;
-            terms[6] += p.convective(k) != p.convective(k + 1) ? 2.0 : 0.0;
+            terms[6] += p.convective(k) != p.convective(k + 1) ? boundary : 0.0;
             terms[7] += Math.min(Math.abs(p.hydrogen(k + 1) - p.hydrogen(k)) / 0.01,
                     (mesh.fraction(k + 1) - mesh.fraction(k)) / 1e-5);
         }
@@ -270,6 +272,7 @@ class MeshConvergenceProbe {
         var mesh = model.state().mesh();
         int size = p.size();
         double lumScale = Math.abs(p.luminosity(size - 1));
+        double boundary = new MeshPlanner(size).boundaryCost();
         double total = 0.0;
         double largest = -1.0;
         int term = -1;
@@ -281,7 +284,7 @@ class MeshConvergenceProbe {
             t[3] = Math.abs(mesh.fraction(k + 1) - mesh.fraction(k)) / 0.01;
             t[4] = k < size - 2 ? Math.abs(Math.log(mesh.exteriorFraction(k) / mesh.exteriorFraction(k + 1))) : 0.0;
             t[5] = Math.abs(p.luminosity(k + 1) - p.luminosity(k)) / lumScale / 0.02;
-            t[6] = p.convective(k) != p.convective(k + 1) ? 2.0 : 0.0;
+            t[6] = p.convective(k) != p.convective(k + 1) ? boundary : 0.0;
             t[7] = Math.min(Math.abs(p.hydrogen(k + 1) - p.hydrogen(k)) / MainSequenceEvolver.COMPOSITION_MESH_STEP,
                     (mesh.fraction(k + 1) - mesh.fraction(k)) / MainSequenceEvolver.COMPOSITION_MESH_RESOLUTION);
             double c = 0.0;
