@@ -503,25 +503,16 @@ public final class MainSequenceEvolver {
         if (light == null) {
             return end;
         }
-        StellarProfile p = end.profile();
-        int n = p.size();
-        double[] rho = new double[n];
-        double[] t = new double[n];
-        boolean[] convective = new boolean[n];
-        for (int k = 0; k < n; k++) {
-            rho[k] = p.density(k);
-            t[k] = p.temperature(k);
-            convective[k] = p.convective(k);
-        }
+        StepStart at = StepStart.of(end);
         MassMesh mesh = end.state().mesh();
-        boolean[] mixed = physics.overshoot().mixedPoints(mesh::mass, convective, p);
+        boolean[] mixed = physics.overshoot().mixedPoints(mesh::mass, at.convective(), end.profile());
         Composition[] comp = end.state().compositions();
-        LightElementRates atEnd = LightElementRates.of(physics.nuclear(), PointCells.masses(mesh), mixed, comp, rho,
-                t);
+        LightElementRates atEnd = LightElementRates.of(physics.nuclear(), PointCells.masses(mesh), mixed, comp,
+                at.density(), at.temperature());
         Composition[] corrected = LightElementBurning.corrected(comp, light.used(), light.atStart(), atEnd,
                 light.dt());
-        return new StellarModel(end.state().withCompositions(corrected), p, end.global(), end.convection(),
-                end.report());
+        return new StellarModel(end.state().withCompositions(corrected), end.profile(), end.global(),
+                end.convection(), end.report());
     }
 
     /**
