@@ -1,5 +1,6 @@
 package org.convgrid.engine.birth;
 
+import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 
@@ -76,5 +77,30 @@ final class BirthTracks {
         BirthTrack t = evolution.evolve(massInSun * Constants.M_SUN, birth(z), ages);
         TRACKS.put(key, t);
         return t;
+    }
+
+    /** The energy a track radiated and released by burning, erg, and the index of the last step summed. */
+    record EmittedEnergy(double radiated, double nuclear, int last) {
+    }
+
+    /**
+     * Trapezoid sums of L and L_nuc over the steps of {@code t} from birth to the last step at or before {@code end}
+     * (s).
+     */
+    static EmittedEnergy emitted(BirthTrack t, double end) {
+        List<TrackPoint> points = t.points();
+        double radiated = 0.0;
+        double nuclear = 0.0;
+        int last = 0;
+        for (int i = 1; i < points.size() && points.get(i).age() <= end; i++) {
+            double h = points.get(i).step().timeStep();
+            TrackPoint a = points.get(i - 1);
+            TrackPoint b = points.get(i);
+            radiated += 0.5 * h * (a.step().luminosity() + b.step().luminosity());
+            nuclear += 0.5 * h * (a.nuclearFraction() * a.step().luminosity()
+                    + b.nuclearFraction() * b.step().luminosity());
+            last = i;
+        }
+        return new EmittedEnergy(radiated, nuclear, last);
     }
 }

@@ -4,6 +4,7 @@ import org.convgrid.engine.evolution.EvolutionResult;
 import org.convgrid.engine.evolution.EvolutionStep;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
 import org.convgrid.engine.evolution.PreMainSequenceLimits;
+import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.HenyeySolver;
 import org.convgrid.engine.structure.MeshPlanner;
@@ -67,10 +68,7 @@ class MeshConvergenceProbe {
             int n = Integer.parseInt(ps.trim());
             MeshPlanner planner = new MeshPlanner(n);
             double coarse = Double.parseDouble(System.getProperty("probe.coarse", "1"));
-            MainSequenceEvolver evolver = new MainSequenceEvolver(physics, planner,
-                    HenyeySolver.Settings.DEFAULT.withIterationBudget(MainSequenceEvolver.RELAXATION_BUDGET),
-                    MainSequenceEvolver.Settings.DEFAULT.scaled(coarse))
-                    .withPreMainSequenceLimits(PreMainSequenceLimits.DEFAULT.scaled(coarse));
+            MainSequenceEvolver evolver = evolver(physics, planner, coarse);
             BirthEvolution birth = new BirthEvolution(new StartModelBuilder(physics, planner,
                     StartModelBuilder.DEFAULT_CENTRAL_TEMPERATURE), evolver, BirthEvolution.DEFAULT_CORE_THRESHOLD);
             for (String ms : System.getProperty("probe.masses", "1.0").split(",")) {
@@ -140,10 +138,8 @@ class MeshConvergenceProbe {
         for (String ps : System.getProperty("probe.points", "500,1000").split(",")) {
             int n = Integer.parseInt(ps.trim());
             MeshPlanner planner = new MeshPlanner(n);
-            MainSequenceEvolver evolver = new MainSequenceEvolver(physics, planner,
-                    HenyeySolver.Settings.DEFAULT.withIterationBudget(MainSequenceEvolver.RELAXATION_BUDGET),
-                    MainSequenceEvolver.Settings.DEFAULT.scaled(
-                            Double.parseDouble(System.getProperty("probe.coarse", "1"))));
+            MainSequenceEvolver evolver = evolver(physics, planner,
+                    Double.parseDouble(System.getProperty("probe.coarse", "1")));
             Composition c = BirthTracks.birth(z);
             ZamsResult zr0 = new ZamsTrack(new ZamsBuilder(physics, planner, HenyeySolver.Settings.DEFAULT),
                     Composition.scaledSolar(c.x(), z)).solve(m * Constants.M_SUN);
@@ -211,8 +207,8 @@ class MeshConvergenceProbe {
 
     /**
      * Per N (-Dprobe.points): how many steps of a 1 Msun track from birth (-Dprobe.mass) start on a new mesh, before
-     * 10 Myr (the lithium burning), from there to 40 Myr (the arrival on the main sequence) and after; each such step
-     * burns at the start-of-step density and temperature, the others at the mid-step values.
+     * 10 Myr (the lithium burning), from there to 40 Myr (the arrival on the main sequence) and after, and which cost
+     * term asked for each redistribution.
      */
     @Test
     void remeshedStepsFromBirth() {
@@ -222,9 +218,7 @@ class MeshConvergenceProbe {
         for (String ps : System.getProperty("probe.points", "500,1000").split(",")) {
             int n = Integer.parseInt(ps.trim());
             MeshPlanner planner = new MeshPlanner(n);
-            MainSequenceEvolver evolver = new MainSequenceEvolver(physics, planner,
-                    HenyeySolver.Settings.DEFAULT.withIterationBudget(MainSequenceEvolver.RELAXATION_BUDGET),
-                    MainSequenceEvolver.Settings.DEFAULT);
+            MainSequenceEvolver evolver = evolver(physics, planner, 1.0);
             StartModel start = new StartModelBuilder(physics, planner, StartModelBuilder.DEFAULT_CENTRAL_TEMPERATURE)
                     .build(m * Constants.M_SUN, BirthTracks.birth(z));
             double[] bands = {10.0 * BirthTracks.MYR, 40.0 * BirthTracks.MYR, Double.MAX_VALUE};
@@ -300,5 +294,14 @@ class MeshConvergenceProbe {
             }
         }
         return largest > MeshPlanner.UNEVENNESS_LIMIT * total / (size - 1) ? term : -1;
+    }
+
+    /** The default evolver on {@code planner}'s mesh, every step limit (main sequence and before it) times coarse. */
+    private static MainSequenceEvolver evolver(PhysicsSet physics, MeshPlanner planner,
+                                               double coarse) {
+        return new MainSequenceEvolver(physics, planner,
+                HenyeySolver.Settings.DEFAULT.withIterationBudget(MainSequenceEvolver.RELAXATION_BUDGET),
+                MainSequenceEvolver.Settings.DEFAULT.scaled(coarse))
+                .withPreMainSequenceLimits(PreMainSequenceLimits.DEFAULT.scaled(coarse));
     }
 }

@@ -95,24 +95,15 @@ class PreMainSequenceTest {
         // trapezoid sums: before the ZAMS each model's L is the luminosity at its own age (two-step eps_grav,
         // second order), after it the mean release over the step that led to it, which the trapezoid rule also
         // integrates to second order
-        double radiated = 0.0;
-        double nuclear = 0.0;
-        int last = 0;
-        for (int i = 1; i < points.size() && points.get(i).age() <= endMyr * MYR; i++) {
-            double h = points.get(i).step().timeStep();
-            TrackPoint a = points.get(i - 1);
-            TrackPoint b = points.get(i);
-            radiated += 0.5 * h * (a.step().luminosity() + b.step().luminosity());
-            nuclear += 0.5 * h * (a.nuclearFraction() * a.step().luminosity()
-                    + b.nuclearFraction() * b.step().luminosity());
-            last = i;
-        }
+        BirthTracks.EmittedEnergy sums = BirthTracks.emitted(t, endMyr * MYR);
+        double radiated = sums.radiated();
+        double nuclear = sums.nuclear();
 
         // total energy E = integral (u - G m/r) dm (Kippenhahn, Weigert & Weiss 2012, ch. 3): the gravothermal
         // release is -D E, computed here from the two end models alone, independently of eps_grav
         StellarModel first = t.start().model();
         StellarModel end = t.models().get(model).model();
-        assertThat(points.get(last).age()).isEqualTo(endMyr * MYR);
+        assertThat(points.get(sums.last()).age()).isEqualTo(endMyr * MYR);
         double released = StarEnergy.total(first, physics) - StarEnergy.total(end, physics);
         assertThat(Math.abs(radiated - nuclear - released) / radiated).isLessThan(tolerance);
         // most of it is contraction: neither star has burnt much hydrogen by 100 Myr

@@ -1,7 +1,5 @@
 package org.convgrid.engine.birth;
 
-import java.util.List;
-
 import org.convgrid.engine.evolution.AgedModel;
 import org.convgrid.engine.evolution.SurfaceComposition;
 import org.convgrid.engine.structure.StellarModel;
@@ -67,17 +65,9 @@ class YoungStepAccuracyProbe {
 
     /** |radiated - nuclear - released| / radiated from birth to {@code end} (as PreMainSequenceTest sums it). */
     private static double closure(BirthTrack t, double end) {
-        List<TrackPoint> points = t.points();
-        double radiated = 0.0;
-        double nuclear = 0.0;
-        for (int i = 1; i < points.size() && points.get(i).age() <= end; i++) {
-            double h = points.get(i).step().timeStep();
-            TrackPoint a = points.get(i - 1);
-            TrackPoint b = points.get(i);
-            radiated += 0.5 * h * (a.step().luminosity() + b.step().luminosity());
-            nuclear += 0.5 * h * (a.nuclearFraction() * a.step().luminosity()
-                    + b.nuclearFraction() * b.step().luminosity());
-        }
+        BirthTracks.EmittedEnergy sums = BirthTracks.emitted(t, end);
+        double radiated = sums.radiated();
+        double nuclear = sums.nuclear();
         AgedModel last = t.models().get(t.models().size() - 1);
         double released = StarEnergy.total(t.start().model(), BirthTracks.physics(0.02))
                 - StarEnergy.total(last.model(), BirthTracks.physics(0.02));
