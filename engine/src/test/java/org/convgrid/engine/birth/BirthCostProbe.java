@@ -1,5 +1,8 @@
 package org.convgrid.engine.birth;
 
+import java.util.ArrayList;
+import java.util.List;
+
 import org.convgrid.engine.evolution.EvolutionResult;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
 import org.convgrid.engine.units.Constants;
@@ -23,9 +26,9 @@ class BirthCostProbe {
         var physics = BirthTracks.physics(0.02);
         MainSequenceEvolver evolver = new MainSequenceEvolver(physics, MainSequenceEvolver.Settings.DEFAULT);
         double pms = Double.parseDouble(System.getProperty("probe.pms", "1"));
-        BirthEvolution birth = new BirthEvolution(new StartModelBuilder(physics), evolver.withPreMainSequenceLimits(
-                org.convgrid.engine.evolution.PreMainSequenceLimits.DEFAULT.scaled(pms)),
-                BirthEvolution.DEFAULT_CORE_THRESHOLD);
+        StartModelBuilder starts = new StartModelBuilder(physics);
+        MainSequenceEvolver pmsEvolver = evolver.withPreMainSequenceLimits(
+                org.convgrid.engine.evolution.PreMainSequenceLimits.DEFAULT.scaled(pms));
         double bestZams = Double.MAX_VALUE;
         double bestBirth = Double.MAX_VALUE;
         // thread CPU time beside the wall time: on a shared machine the wall time of one run moves by tens of per
@@ -50,14 +53,42 @@ class BirthCostProbe {
             zamsNewton = z.iterations() + ms.steps().stream().mapToInt(st -> st.iterations()).sum();
             t0 = System.nanoTime();
             c0 = threads.getCurrentThreadCpuTime();
-            BirthTrack b = birth.evolve(Constants.M_SUN, zero, new double[] {0.0});
+            // the start model, then every step's thread CPU time with the age it reached, to split the track at
+            // its zero-age main sequence (what the pre-main sequence costs, and what the main sequence costs
+            // beyond the zero-age track's)
+            StartModel start = starts.build(Constants.M_SUN, zero);
+            long startCpu = threads.getCurrentThreadCpuTime() - c0;
+            List<double[]> stepCpu = new ArrayList<>();
+            long[] last = {threads.getCurrentThreadCpuTime()};
+            LifeRecorder recorder = new LifeRecorder(BirthEvolution.DEFAULT_CORE_THRESHOLD);
+            EvolutionResult track = pmsEvolver.evolve(start.model(), new double[] {0.0}, (age, dt, model) -> {
+                recorder.accepted(age, dt, model);
+                long now = threads.getCurrentThreadCpuTime();
+                stepCpu.add(new double[] {age, (now - last[0]) * 1e-9});
+                last[0] = now;
+            });
             bestBirth = Math.min(bestBirth, (System.nanoTime() - t0) * 1e-9);
             cpuBirth = Math.min(cpuBirth, (threads.getCurrentThreadCpuTime() - c0) * 1e-9);
-            birthSteps = b.points().size();
-            birthNewton = b.start().iterations() + b.result().steps().stream().mapToInt(st -> st.iterations()).sum();
-            System.out.printf("run %d: zams %s at %.4g Gyr, birth %s at %.4g Gyr (ZAMS at %.4g Myr)%n", r,
-                    ms.end(), ms.endAge() / Constants.GYR, b.result().end(), b.result().endAge() / Constants.GYR,
-                    b.events().zeroAgeMainSequence() / BirthTracks.MYR);
+            birthSteps = track.steps().size();
+            birthNewton = start.iterations() + track.steps().stream().mapToInt(st -> st.iterations()).sum();
+            double zams = recorder.events().zeroAgeMainSequence();
+            double pre = 0.0;
+            double post = 0.0;
+            int preSteps = 0;
+            int preNewton = 0;
+            for (int i = 1; i < stepCpu.size(); i++) {
+                if (stepCpu.get(i)[0] <= zams) {
+                    pre += stepCpu.get(i)[1];
+                    preSteps++;
+                    preNewton += track.steps().get(i).iterations();
+                } else {
+                    post += stepCpu.get(i)[1];
+                }
+            }
+            System.out.printf("run %d: zams %s at %.4g Gyr, birth %s at %.4g Gyr (ZAMS at %.4g Myr); birth track CPU: "
+                    + "start model %.3f s, %d steps to the ZAMS %.3f s (%d Newton iterations), the rest %.3f s%n", r,
+                    ms.end(), ms.endAge() / Constants.GYR, track.end(), track.endAge() / Constants.GYR,
+                    zams / BirthTracks.MYR, startCpu * 1e-9, preSteps, pre, preNewton, post);
         }
         System.out.printf("1 Msun to exhaustion: from ZAMS %.2f s (%d steps), from birth %.2f s (%d steps), ratio %.2f%n",
                 bestZams, zamsSteps, bestBirth, birthSteps, bestBirth / bestZams);
