@@ -1,5 +1,7 @@
 package org.convgrid.engine.birth;
 
+import java.util.Arrays;
+
 import org.convgrid.engine.evolution.EvolutionResult;
 import org.convgrid.engine.evolution.EvolutionStep;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
@@ -61,13 +63,12 @@ class MeshConvergenceProbe {
      */
     @Test
     void agesAgainstMeshPoints() {
-        double z = Double.parseDouble(System.getProperty("probe.z", "0.02"));
+        double z = number("probe.z", "0.02");
         var physics = BirthTracks.physics(z);
         boolean zeroAge = Boolean.parseBoolean(System.getProperty("probe.zeroAge", "true"));
-        for (String ps : System.getProperty("probe.points", "250,500,1000").split(",")) {
-            int n = Integer.parseInt(ps.trim());
+        for (int n : meshSizes("250,500,1000")) {
             MeshPlanner planner = new MeshPlanner(n);
-            double coarse = Double.parseDouble(System.getProperty("probe.coarse", "1"));
+            double coarse = number("probe.coarse", "1");
             MainSequenceEvolver evolver = evolver(physics, planner, coarse);
             BirthEvolution birth = new BirthEvolution(new StartModelBuilder(physics, planner,
                     StartModelBuilder.DEFAULT_CENTRAL_TEMPERATURE), evolver, BirthEvolution.DEFAULT_CORE_THRESHOLD);
@@ -132,14 +133,12 @@ class MeshConvergenceProbe {
      */
     @Test
     void zeroAgeMeshDetail() {
-        double z = Double.parseDouble(System.getProperty("probe.z", "0.02"));
-        double m = Double.parseDouble(System.getProperty("probe.mass", "1.0"));
+        double z = number("probe.z", "0.02");
+        double m = number("probe.mass", "1.0");
         var physics = BirthTracks.physics(z);
-        for (String ps : System.getProperty("probe.points", "500,1000").split(",")) {
-            int n = Integer.parseInt(ps.trim());
+        for (int n : meshSizes("500,1000")) {
             MeshPlanner planner = new MeshPlanner(n);
-            MainSequenceEvolver evolver = evolver(physics, planner,
-                    Double.parseDouble(System.getProperty("probe.coarse", "1")));
+            MainSequenceEvolver evolver = evolver(physics, planner, number("probe.coarse", "1"));
             Composition c = BirthTracks.birth(z);
             ZamsResult zr0 = new ZamsTrack(new ZamsBuilder(physics, planner, HenyeySolver.Settings.DEFAULT),
                     Composition.scaledSolar(c.x(), z)).solve(m * Constants.M_SUN);
@@ -202,11 +201,10 @@ class MeshConvergenceProbe {
      */
     @Test
     void remeshedStepsFromBirth() {
-        double z = Double.parseDouble(System.getProperty("probe.z", "0.02"));
-        double m = Double.parseDouble(System.getProperty("probe.mass", "1.0"));
+        double z = number("probe.z", "0.02");
+        double m = number("probe.mass", "1.0");
         var physics = BirthTracks.physics(z);
-        for (String ps : System.getProperty("probe.points", "500,1000").split(",")) {
-            int n = Integer.parseInt(ps.trim());
+        for (int n : meshSizes("500,1000")) {
             MeshPlanner planner = new MeshPlanner(n);
             MainSequenceEvolver evolver = evolver(physics, planner, 1.0);
             StartModel start = new StartModelBuilder(physics, planner, StartModelBuilder.DEFAULT_CENTRAL_TEMPERATURE)
@@ -294,6 +292,17 @@ class MeshConvergenceProbe {
         t[7] = Math.min(Math.abs(p.hydrogen(k + 1) - p.hydrogen(k)) / MainSequenceEvolver.COMPOSITION_MESH_STEP,
                 (mesh.fraction(k + 1) - mesh.fraction(k)) / MainSequenceEvolver.COMPOSITION_MESH_RESOLUTION);
         return t;
+    }
+
+    /** The system property {@code name} as a number, {@code fallback} when it is not set. */
+    private static double number(String name, String fallback) {
+        return Double.parseDouble(System.getProperty(name, fallback));
+    }
+
+    /** The mesh sizes of -Dprobe.points (comma-separated), {@code fallback} when it is not set. */
+    private static int[] meshSizes(String fallback) {
+        return Arrays.stream(System.getProperty("probe.points", fallback).split(","))
+                .mapToInt(s -> Integer.parseInt(s.trim())).toArray();
     }
 
     /** The default evolver on {@code planner}'s mesh, every step limit (main sequence and before it) times coarse. */
