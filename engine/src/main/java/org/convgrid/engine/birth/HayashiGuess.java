@@ -1,12 +1,12 @@
 package org.convgrid.engine.birth;
 
 import org.convgrid.engine.convection.ConvectiveTransport;
-import org.convgrid.engine.convection.LocalConvectionState;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.physics.atmosphere.SurfaceCondition;
 import org.convgrid.engine.physics.eos.EosState;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.LaneEmden;
+import org.convgrid.engine.structure.LayerGradient;
 import org.convgrid.engine.structure.MassMesh;
 import org.convgrid.engine.structure.ModelState;
 import org.convgrid.engine.structure.PolytropicProfile;
@@ -23,8 +23,9 @@ import org.convgrid.engine.units.Constants;
  * {@link #ENVELOPE_POINTS} mesh points lie evenly in ln(1 - m/M) from the polytrope's outermost interior point to
  * where the pressure is {@link #OUTER_PRESSURE_EXCESS} above the atmosphere's, with P = P_atm + G M^2 (1 - m/M) /
  * (4 pi R^4) (hydrostatic equilibrium at r = R) and T integrated from the atmosphere's fitting point inward with
- * dln T = nabla dln P, nabla the physics' own: the convective gradient of its {@link ConvectiveTransport} where the
- * radiative one (with the guess's luminosity) exceeds nabla_ad, else the radiative one. It replaces the polytrope's
+ * dln T = nabla dln P, nabla the physics' own ({@link LayerGradient}): the convective gradient of its
+ * {@link ConvectiveTransport} where the radiative one (with the guess's luminosity) exceeds nabla_ad, else the
+ * radiative one. It replaces the polytrope's
  * temperature wherever it is hotter. The bare polytrope (1 Msun, Z = 0.02) has its last interior point at
  * m/M = 1 - 6e-5 with 4300 K and its surface density 4 e-folds above the relaxed model's, which has 15 000 K there
  * and 113 of its 500 points further out (hydrogen ionisation and the atmosphere): relaxing it took 26 Newton
@@ -60,6 +61,8 @@ final class HayashiGuess {
 
     private final int points;
     private final PhysicsSet physics;
+    /** The envelope's dln T/dln P (the birth composition is homogeneous). */
+    private final LayerGradient gradient;
 
     /**
      * @param points mesh points, more than {@link #ENVELOPE_POINTS} + 10
@@ -71,6 +74,7 @@ final class HayashiGuess {
         }
         this.points = points;
         this.physics = physics;
+        this.gradient = new LayerGradient(physics);
     }
 
     /**
@@ -132,13 +136,14 @@ final class HayashiGuess {
         // the envelope's gradient from the atmosphere's fitting point inward, until the polytrope is the hotter
         double lnP = atmosphere.lnPressure();
         double lnTa = atmosphere.lnTemperature();
-        double gravity = Constants.G * mass / (radius * radius);
         double surfaceLum = polytrope.surfaceLuminosity();
         for (int k = points - 1; k >= 0; k--) {
             double lnPk = Math.log(surfacePressure + pressureScale * e[k]);
             for (int sub = 0; sub < ENVELOPE_SUBSTEPS && lnPk > lnP; sub++) {
                 double step = (lnPk - lnP) / (ENVELOPE_SUBSTEPS - sub);
-                lnTa += step * gradient(Math.exp(lnP), Math.exp(lnTa), mass, gravity, surfaceLum, composition);
+                // the structure equations' gradient at m = M, r = R and the guess's surface luminosity
+                EosState layer = physics.eos().atPressure(Math.exp(lnP), Math.exp(lnTa), composition);
+                lnTa += step * gradient.nabla(layer, composition, mass, radius, surfaceLum);
                 lnP += step;
             }
             if (k < kept && lnTa <= lnT[k]) {
@@ -150,24 +155,5 @@ final class HayashiGuess {
         }
         java.util.Arrays.fill(comp, composition);
         return new ModelState(MassMesh.ofFractions(mass, q, e), comp, lnR, lnRho, lnT, lum);
-    }
-
-    /**
-     * dln T/dln P of the envelope at (P, T): nabla_rad = 3 kappa L P/(16 pi a c G M T^4) (radiative diffusion at
-     * m = M; Kippenhahn, Weigert &amp; Weiss 2012, Stellar Structure and Evolution, ch. 5) where it is below
-     * nabla_ad (Schwarzschild; the birth composition is homogeneous), else the convective gradient of the physics
-     * with g = G M/R^2.
-     */
-    private double gradient(double pressure, double temperature, double mass, double gravity, double lum,
-                            Composition composition) {
-        EosState gas = physics.eos().atPressure(pressure, temperature, composition);
-        double kappa = physics.opacity().rosselandMean(gas.density(), temperature, composition).kappa();
-        double rad = 3.0 * kappa * lum * pressure / (16.0 * Math.PI * Constants.A_RAD * Constants.C * Constants.G
-                * mass * Math.pow(temperature, 4));
-        if (rad <= gas.nablaAd()) {
-            return rad;
-        }
-        return physics.convection().gradient(new LocalConvectionState(temperature, gas.density(), pressure, gravity,
-                kappa, gas.cp(), gas.delta(), rad, gas.nablaAd(), gas.nablaAd())).nabla();
     }
 }

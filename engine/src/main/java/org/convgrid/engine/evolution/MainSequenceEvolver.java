@@ -382,6 +382,10 @@ public final class MainSequenceEvolver {
         // multiplies the solver's noise into an odd-even sawtooth of L (seen at 1 Msun after landing on 4.57 Gyr)
         boolean trusted = older != null && olderStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * olderStep;
         boolean sameMesh = trusted && !remesh && older.state().mesh() == previous.state().mesh();
+        // across a remesh: the previous two models carried onto this step's mesh (for the network and, on the main
+        // sequence, the starting guess)
+        double[][] carriedNow = null;
+        double[][] carriedBefore = null;
         if (sameMesh) {
             double w = 0.5 * dt / olderStep;
             StellarProfile p = older.profile();
@@ -404,11 +408,11 @@ public final class MainSequenceEvolver {
             // trapezoid of start- and end-of-step rates (lightElementsEnd) this no longer moves the envelope's
             // lithium off its time-step limit (1 Msun log Li/Li0 at 1 Gyr -0.566 / -0.565 / -0.576 at those limits)
             double w = 0.5 * dt / olderStep;
-            double[][] now = CarriedUnknowns.onto(previous.state(), start.state().mesh(), false);
-            double[][] before = CarriedUnknowns.onto(older.state(), start.state().mesh(), false);
+            carriedNow = CarriedUnknowns.onto(previous.state(), start.state().mesh(), false);
+            carriedBefore = CarriedUnknowns.onto(older.state(), start.state().mesh(), false);
             for (int k = 0; k < n; k++) {
-                rho[k] *= Math.exp(w * (now[1][k] - before[1][k]));
-                t[k] *= Math.exp(w * (now[2][k] - before[2][k]));
+                rho[k] *= Math.exp(w * (carriedNow[1][k] - carriedBefore[1][k]));
+                t[k] *= Math.exp(w * (carriedNow[2][k] - carriedBefore[2][k]));
             }
         }
         MassMesh mesh = start.state().mesh();
@@ -477,7 +481,10 @@ public final class MainSequenceEvolver {
             // without this the two steps after each remesh start from a copy and take 5-6 iterations instead of 3-4
             try {
                 boolean curved = oldest != null && oldestStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * oldestStep;
-                return stepped(lightElementsEnd(solver.relax(carried(guess, previous.state(), older.state(), gOlder,
+                // before the ZAMS carried again with the outermost interval filled (see CarriedUnknowns.onto)
+                double[][] now = young ? CarriedUnknowns.onto(previous.state(), mesh, true) : carriedNow;
+                double[][] before = young ? CarriedUnknowns.onto(older.state(), mesh, true) : carriedBefore;
+                return stepped(lightElementsEnd(solver.relax(carried(guess, now, before, gOlder,
                         curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings), light),
                         kept);
             } catch (SolveFailedException e) {
@@ -621,12 +628,13 @@ public final class MainSequenceEvolver {
      * possibly remeshed, with the step's composition): each is carried onto that mesh ({@link CarriedUnknowns}; its
      * outermost interval filled before the zero-age main sequence, {@code isotherms}) and the extrapolated change of
      * the carried values is added to the guess's own unknowns.
+     *
+     * @param now the previous model's unknowns carried onto the mesh of {@code guess} (read only)
+     * @param before the older model's, likewise
      */
-    private static ModelState carried(ModelState guess, ModelState previous, ModelState older, double olderStep,
+    private static ModelState carried(ModelState guess, double[][] now, double[][] before, double olderStep,
                                       ModelState oldest, double oldestStep, double dt, boolean isotherms) {
         MassMesh mesh = guess.mesh();
-        double[][] now = CarriedUnknowns.onto(previous, mesh, isotherms);
-        double[][] before = CarriedUnknowns.onto(older, mesh, isotherms);
         double[][] first = oldest == null ? null : CarriedUnknowns.onto(oldest, mesh, isotherms);
         double[][] unknowns = {guess.lnRadii(), guess.lnDensities(), guess.lnTemperatures(), guess.luminosities()};
         addExtrapolatedChange(unknowns, now, before, first, olderStep, oldestStep, dt, isotherms ? mesh : null);

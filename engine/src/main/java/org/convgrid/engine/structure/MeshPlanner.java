@@ -24,12 +24,19 @@ public final class MeshPlanner {
     /** Remesh when some interval costs more than this many times the even share. */
     public static final double UNEVENNESS_LIMIT = 2.5;
 
-    private static final double STEP_LN_P = 0.05;
-    private static final double STEP_LN_T = 0.03;
-    private static final double STEP_LN_R = 0.08;
-    private static final double STEP_MASS = 0.01;
-    private static final double STEP_LN_EXTERIOR = 1.0;
-    private static final double STEP_LUMINOSITY = 0.02;
+    // the change across an interval that costs 1, per term (public for probes that break the cost down)
+    /** |D ln P| per unit cost. */
+    public static final double STEP_LN_P = 0.05;
+    /** |D ln T| per unit cost. */
+    public static final double STEP_LN_T = 0.03;
+    /** |D ln r| per unit cost. */
+    public static final double STEP_LN_R = 0.08;
+    /** |D(m/M)| per unit cost. */
+    public static final double STEP_MASS = 0.01;
+    /** |D ln(1 - m/M)| per unit cost (not charged on the outermost interval). */
+    public static final double STEP_LN_EXTERIOR = 1.0;
+    /** |D L| over the surface luminosity per unit cost. */
+    public static final double STEP_LUMINOSITY = 0.02;
     /** Cost of an interval holding a convective boundary at {@link #DEFAULT_POINTS}; scaled as 1/(N - 1). */
     private static final double BOUNDARY_COST = 2.0;
     private static final double MINIMUM_COST = 1.0e-6;

@@ -59,8 +59,6 @@ public final class StructureEquations implements DifferenceSystem {
      */
     private static final double IDEAL_GAS_PHI = 1.0;
     private static final double FOUR_PI = 4.0 * Math.PI;
-    private static final double RADIATIVE_CONSTANT = 3.0 / (16.0 * Math.PI * Constants.A_RAD * Constants.C
-            * Constants.G);
 
     private final MassMesh mesh;
     private final Composition[] composition;
@@ -247,8 +245,7 @@ public final class StructureEquations implements DifferenceSystem {
         }
         boolean convective = convection[k] != null && convection[k].convective();
         // d nabla_rad/d(L/L_scale): nabla_rad = C kappa L P/(m T^4) is linear in L
-        double radPerLuminosity = RADIATIVE_CONSTANT * op.kappa() * luminosityScale * s.pressure()
-                / (mesh.mass(k) * t * t * t * t);
+        double radPerLuminosity = LayerGradient.radiative(op.kappa(), luminosityScale, s.pressure(), mesh.mass(k), t);
         if (!convective && extraRate != null) {
             // radiative: nabla = C kappa L P / (m T^4), differentiated analytically
             double nr = nabla[k];
@@ -331,7 +328,7 @@ public final class StructureEquations implements DifferenceSystem {
         double m = mesh.mass(k);
         double t = s.temperature();
         double p = s.pressure();
-        double rad = RADIATIVE_CONSTANT * kappa * lum * p / (m * t * t * t * t);
+        double rad = LayerGradient.radiative(kappa, lum, p, m, t);
         double stability = LedouxGradient.stabilityGradient(physics.criterion(), s.nablaAd(), IDEAL_GAS_PHI,
                 s.delta(), nablaMu[k]);
         ConvectiveGradient g = null;

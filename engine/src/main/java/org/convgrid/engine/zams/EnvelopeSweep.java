@@ -1,11 +1,10 @@
 package org.convgrid.engine.zams;
 
-import org.convgrid.engine.convection.LedouxGradient;
-import org.convgrid.engine.convection.LocalConvectionState;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.physics.eos.EosState;
 import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.structure.LayerGradient;
 import org.convgrid.engine.structure.MassMesh;
 import org.convgrid.engine.structure.ModelState;
 import org.convgrid.engine.structure.StellarModel;
@@ -40,12 +39,7 @@ final class EnvelopeSweep {
      */
     static final double OUTER_ENVELOPE = 1.0e-4;
 
-    /** nabla_rad = C kappa L P / (m T^4), C = 3/(16 pi a c G). */
-    private static final double RADIATIVE_CONSTANT = 3.0 / (16.0 * Math.PI * Constants.A_RAD * Constants.C
-            * Constants.G);
     private static final double FOUR_PI = 4.0 * Math.PI;
-    /** Homogeneous envelope: ideal-gas phi and no composition gradient (only the Ledoux criterion uses them). */
-    private static final double IDEAL_GAS_PHI = 1.0;
     /**
      * Equation-of-state evaluations per shell: the first from the outer shell's gradient and slopes, then
      * corrections to the midpoint gradient and pressure (measured at 1.50 Msun: 1 leaves 0.24 and 6 iterations,
@@ -55,9 +49,12 @@ final class EnvelopeSweep {
     private static final int PASSES = 3;
 
     private final PhysicsSet physics;
+    /** The solver's gradient of the homogeneous envelope. */
+    private final LayerGradient gradient;
 
     EnvelopeSweep(PhysicsSet physics) {
         this.physics = physics;
+        this.gradient = new LayerGradient(physics);
     }
 
     /**
@@ -178,20 +175,8 @@ final class EnvelopeSweep {
 
     /** The actual gradient at point k of {@code seed} in the state {@code s}, as the structure solver takes it. */
     private double nabla(ModelState seed, int k, EosState s) {
-        double m = seed.mesh().mass(k);
-        double t = s.temperature();
-        double p = s.pressure();
-        double kappa = physics.opacity().rosselandMean(s.density(), t, seed.composition(k)).kappa();
-        double rad = RADIATIVE_CONSTANT * kappa * seed.luminosity(k) * p / (m * t * t * t * t);
-        double stability = LedouxGradient.stabilityGradient(physics.criterion(), s.nablaAd(), IDEAL_GAS_PHI,
-                s.delta(), 0.0);
-        if (rad <= stability) {
-            return rad;
-        }
-        double r = Math.exp(seed.lnRadius(k));
-        LocalConvectionState local = new LocalConvectionState(t, s.density(), p, Constants.G * m / (r * r), kappa,
-                s.cp(), s.delta(), rad, s.nablaAd(), stability);
-        return physics.convection().gradient(local).nabla();
+        return gradient.nabla(s, seed.composition(k), seed.mesh().mass(k), Math.exp(seed.lnRadius(k)),
+                seed.luminosity(k));
     }
 
     private static boolean finite(ModelState state) {

@@ -1,5 +1,7 @@
 package org.convgrid.engine.birth;
 
+import java.util.Arrays;
+
 import org.convgrid.engine.evolution.EvolutionResult;
 import org.convgrid.engine.evolution.EvolutionStep;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
@@ -61,13 +63,12 @@ class MeshConvergenceProbe {
      */
     @Test
     void agesAgainstMeshPoints() {
-        double z = Double.parseDouble(System.getProperty("probe.z", "0.02"));
+        double z = number("probe.z", "0.02");
         var physics = BirthTracks.physics(z);
         boolean zeroAge = Boolean.parseBoolean(System.getProperty("probe.zeroAge", "true"));
-        for (String ps : System.getProperty("probe.points", "250,500,1000").split(",")) {
-            int n = Integer.parseInt(ps.trim());
+        for (int n : meshSizes("250,500,1000")) {
             MeshPlanner planner = new MeshPlanner(n);
-            double coarse = Double.parseDouble(System.getProperty("probe.coarse", "1"));
+            double coarse = number("probe.coarse", "1");
             MainSequenceEvolver evolver = evolver(physics, planner, coarse);
             BirthEvolution birth = new BirthEvolution(new StartModelBuilder(physics, planner,
                     StartModelBuilder.DEFAULT_CENTRAL_TEMPERATURE), evolver, BirthEvolution.DEFAULT_CORE_THRESHOLD);
@@ -132,14 +133,12 @@ class MeshConvergenceProbe {
      */
     @Test
     void zeroAgeMeshDetail() {
-        double z = Double.parseDouble(System.getProperty("probe.z", "0.02"));
-        double m = Double.parseDouble(System.getProperty("probe.mass", "1.0"));
+        double z = number("probe.z", "0.02");
+        double m = number("probe.mass", "1.0");
         var physics = BirthTracks.physics(z);
-        for (String ps : System.getProperty("probe.points", "500,1000").split(",")) {
-            int n = Integer.parseInt(ps.trim());
+        for (int n : meshSizes("500,1000")) {
             MeshPlanner planner = new MeshPlanner(n);
-            MainSequenceEvolver evolver = evolver(physics, planner,
-                    Double.parseDouble(System.getProperty("probe.coarse", "1")));
+            MainSequenceEvolver evolver = evolver(physics, planner, number("probe.coarse", "1"));
             Composition c = BirthTracks.birth(z);
             ZamsResult zr0 = new ZamsTrack(new ZamsBuilder(physics, planner, HenyeySolver.Settings.DEFAULT),
                     Composition.scaledSolar(c.x(), z)).solve(m * Constants.M_SUN);
@@ -176,22 +175,12 @@ class MeshConvergenceProbe {
             below03 += mesh.fraction(k) < 0.3 ? 1 : 0;
             outer += mesh.exteriorFraction(k) < 1e-3 ? 1 : 0;
         }
-        double[] terms = new double[8];
-        double lumScale = Math.abs(p.luminosity(size - 1));
-        // the planner's own boundary cost for this size (it scales with the even share)
-        double boundary = new MeshPlanner(size).boundaryCost();
+        double[] terms = new double[TERMS.length];
         for (int k = 0; k < size - 1; k++) {
-            terms[0] += Math.abs(Math.log(p.pressure(k + 1) / p.pressure(k))) / 0.05;
-            terms[1] += Math.abs(Math.log(p.temperature(k + 1) / p.temperature(k))) / 0.03;
-            terms[2] += Math.abs(Math.log(p.radius(k + 1) / p.radius(k))) / 0.08;
-            terms[3] += Math.abs(mesh.fraction(k + 1) - mesh.fraction(k)) / 0.01;
-            if (k < size - 2) {
-                terms[4] += Math.abs(Math.log(mesh.exteriorFraction(k) / mesh.exteriorFraction(k + 1)));
+            double[] t = costTerms(model, k);
+            for (int i = 0; i < t.length; i++) {
+                terms[i] += t[i];
             }
-            terms[5] += Math.abs(p.luminosity(k + 1) - p.luminosity(k)) / lumScale / 0.02;
-            terms[6] += p.convective(k) != p.convective(k + 1) ? boundary : 0.0;
-            terms[7] += Math.min(Math.abs(p.hydrogen(k + 1) - p.hydrogen(k)) / 0.01,
-                    (mesh.fraction(k + 1) - mesh.fraction(k)) / 1e-5);
         }
         double total = 0;
         for (double t : terms) {
@@ -212,11 +201,10 @@ class MeshConvergenceProbe {
      */
     @Test
     void remeshedStepsFromBirth() {
-        double z = Double.parseDouble(System.getProperty("probe.z", "0.02"));
-        double m = Double.parseDouble(System.getProperty("probe.mass", "1.0"));
+        double z = number("probe.z", "0.02");
+        double m = number("probe.mass", "1.0");
         var physics = BirthTracks.physics(z);
-        for (String ps : System.getProperty("probe.points", "500,1000").split(",")) {
-            int n = Integer.parseInt(ps.trim());
+        for (int n : meshSizes("500,1000")) {
             MeshPlanner planner = new MeshPlanner(n);
             MainSequenceEvolver evolver = evolver(physics, planner, 1.0);
             StartModel start = new StartModelBuilder(physics, planner, StartModelBuilder.DEFAULT_CENTRAL_TEMPERATURE)
@@ -258,29 +246,15 @@ class MeshConvergenceProbe {
 
     /**
      * The index in {@link #TERMS} of the largest term of the model's costliest interval when that interval exceeds
-     * {@link MeshPlanner#UNEVENNESS_LIMIT} times the even share (the planner then remeshes), else -1. The weights
-     * are the planner's and the evolver's composition cost, restated here.
+     * {@link MeshPlanner#UNEVENNESS_LIMIT} times the even share (the planner then remeshes), else -1.
      */
     private static int remeshTrigger(org.convgrid.engine.structure.StellarModel model) {
-        var p = model.profile();
-        var mesh = model.state().mesh();
-        int size = p.size();
-        double lumScale = Math.abs(p.luminosity(size - 1));
-        double boundary = new MeshPlanner(size).boundaryCost();
+        int size = model.profile().size();
         double total = 0.0;
         double largest = -1.0;
         int term = -1;
         for (int k = 0; k < size - 1; k++) {
-            double[] t = new double[TERMS.length];
-            t[0] = Math.abs(Math.log(p.pressure(k + 1) / p.pressure(k))) / 0.05;
-            t[1] = Math.abs(Math.log(p.temperature(k + 1) / p.temperature(k))) / 0.03;
-            t[2] = Math.abs(Math.log(p.radius(k + 1) / p.radius(k))) / 0.08;
-            t[3] = Math.abs(mesh.fraction(k + 1) - mesh.fraction(k)) / 0.01;
-            t[4] = k < size - 2 ? Math.abs(Math.log(mesh.exteriorFraction(k) / mesh.exteriorFraction(k + 1))) : 0.0;
-            t[5] = Math.abs(p.luminosity(k + 1) - p.luminosity(k)) / lumScale / 0.02;
-            t[6] = p.convective(k) != p.convective(k + 1) ? boundary : 0.0;
-            t[7] = Math.min(Math.abs(p.hydrogen(k + 1) - p.hydrogen(k)) / MainSequenceEvolver.COMPOSITION_MESH_STEP,
-                    (mesh.fraction(k + 1) - mesh.fraction(k)) / MainSequenceEvolver.COMPOSITION_MESH_RESOLUTION);
+            double[] t = costTerms(model, k);
             double c = 0.0;
             int big = 0;
             for (int i = 0; i < t.length; i++) {
@@ -294,6 +268,41 @@ class MeshConvergenceProbe {
             }
         }
         return largest > MeshPlanner.UNEVENNESS_LIMIT * total / (size - 1) ? term : -1;
+    }
+
+    /**
+     * The terms of the mesh cost of interval (k, k + 1), in the order of {@link #TERMS}: the planner's weights and
+     * boundary cost for the model's size ({@link MeshPlanner}) and the evolver's composition cost.
+     */
+    private static double[] costTerms(org.convgrid.engine.structure.StellarModel model, int k) {
+        var p = model.profile();
+        var mesh = model.state().mesh();
+        int size = p.size();
+        double lumScale = Math.abs(p.luminosity(size - 1));
+        double[] t = new double[TERMS.length];
+        t[0] = Math.abs(Math.log(p.pressure(k + 1) / p.pressure(k))) / MeshPlanner.STEP_LN_P;
+        t[1] = Math.abs(Math.log(p.temperature(k + 1) / p.temperature(k))) / MeshPlanner.STEP_LN_T;
+        t[2] = Math.abs(Math.log(p.radius(k + 1) / p.radius(k))) / MeshPlanner.STEP_LN_R;
+        t[3] = Math.abs(mesh.fraction(k + 1) - mesh.fraction(k)) / MeshPlanner.STEP_MASS;
+        t[4] = k < size - 2 ? Math.abs(Math.log(mesh.exteriorFraction(k) / mesh.exteriorFraction(k + 1)))
+                / MeshPlanner.STEP_LN_EXTERIOR : 0.0;
+        t[5] = Math.abs(p.luminosity(k + 1) - p.luminosity(k)) / lumScale / MeshPlanner.STEP_LUMINOSITY;
+        // the planner's own boundary cost for this size (it scales with the even share)
+        t[6] = p.convective(k) != p.convective(k + 1) ? new MeshPlanner(size).boundaryCost() : 0.0;
+        t[7] = Math.min(Math.abs(p.hydrogen(k + 1) - p.hydrogen(k)) / MainSequenceEvolver.COMPOSITION_MESH_STEP,
+                (mesh.fraction(k + 1) - mesh.fraction(k)) / MainSequenceEvolver.COMPOSITION_MESH_RESOLUTION);
+        return t;
+    }
+
+    /** The system property {@code name} as a number, {@code fallback} when it is not set. */
+    private static double number(String name, String fallback) {
+        return Double.parseDouble(System.getProperty(name, fallback));
+    }
+
+    /** The mesh sizes of -Dprobe.points (comma-separated), {@code fallback} when it is not set. */
+    private static int[] meshSizes(String fallback) {
+        return Arrays.stream(System.getProperty("probe.points", fallback).split(","))
+                .mapToInt(s -> Integer.parseInt(s.trim())).toArray();
     }
 
     /** The default evolver on {@code planner}'s mesh, every step limit (main sequence and before it) times coarse. */
