@@ -131,10 +131,12 @@ public final class CompositionStep {
             total += w;
         }
         double mass = total;
+        // one composition for all the zone's points, and their rates summed as they come (no array per point)
         Rates zone = x -> {
+            Composition c = MassFractions.composition(x);
             double[] mean = new double[N + 2];
             for (int k = 0; k < n; k++) {
-                addWeighted(mean, weights[k], rates(densities[k], temperatures[k], x));
+                addRates(mean, weights[k], network.burn(densities[k], temperatures[k], c));
             }
             return scaled(mean, mass);
         };
@@ -145,7 +147,7 @@ public final class CompositionStep {
             boolean analytic = true;
             for (int k = 0; k < n; k++) {
                 BurningAndFactors point = network.burnAndFactors(densities[k], temperatures[k], c);
-                addWeighted(mean, weights[k], rates(point.rate()));
+                addRates(mean, weights[k], point.rate());
                 factors[k] = point.factors().orElse(null);
                 analytic &= factors[k] != null;
             }
@@ -157,13 +159,6 @@ public final class CompositionStep {
             return new Linearised(scaled(mean, mass), analytic ? jacobian : null);
         };
         return advance(zone, linearisation, start, dt, densities[0], temperatures[0]);
-    }
-
-    /** sum += weight f, element by element. */
-    private static void addWeighted(double[] sum, double weight, double[] f) {
-        for (int i = 0; i < sum.length; i++) {
-            sum[i] += weight * f[i];
-        }
     }
 
     /** sum / mass, in place. */
@@ -345,13 +340,28 @@ public final class CompositionStep {
 
     /** {@link #rates(double, double, double[])} from the network's rate at the point. */
     private static double[] rates(BurningRate r) {
+        double[] f = new double[N + 2];
+        addRates(f, 1.0, r);
+        return f;
+    }
+
+    /**
+     * sum += weight f, f the rates of {@link #rates(BurningRate)}, element by element (a zone's points summed
+     * without an array each).
+     */
+    private static void addRates(double[] sum, double weight, BurningRate r) {
         double d = r.dh2Dt();
         double li = r.dli7Dt();
         // d + p -> 3He moves mass 2:1 -> 3, 7Li + p -> 2 4He 7:1 -> 8 (rates are negative: destruction)
-        return new double[] {r.dh1Dt() - LightElementBurning.HYDROGEN_PER_DEUTERIUM * d
-                - LightElementBurning.HYDROGEN_PER_LITHIUM * li,
-            r.dhe3Dt() + LightElementBurning.HELIUM3_PER_DEUTERIUM * d, r.dhe4Dt()
-                + LightElementBurning.HELIUM4_PER_LITHIUM * li, r.dc12Dt(), r.dn14Dt(), r.do16Dt(), d, li};
+        sum[0] += weight * (r.dh1Dt() - LightElementBurning.HYDROGEN_PER_DEUTERIUM * d
+                - LightElementBurning.HYDROGEN_PER_LITHIUM * li);
+        sum[1] += weight * (r.dhe3Dt() + LightElementBurning.HELIUM3_PER_DEUTERIUM * d);
+        sum[2] += weight * (r.dhe4Dt() + LightElementBurning.HELIUM4_PER_LITHIUM * li);
+        sum[3] += weight * r.dc12Dt();
+        sum[4] += weight * r.dn14Dt();
+        sum[5] += weight * r.do16Dt();
+        sum[6] += weight * d;
+        sum[7] += weight * li;
     }
 
     /** Clips rounding-level negatives and rescales the burning species so all the fractions sum to one. */
