@@ -95,12 +95,22 @@ public final class CompositionStep {
      * @throws ConvgridException NOT_CONVERGED when the sub-step budget is exhausted
      */
     public Composition advance(double density, double temperature, Composition start, double dt) {
+        return advance(density, temperature, start, dt, null);
+    }
+
+    /**
+     * {@link #advance(double, double, Composition, double)} with the deuterium and 7Li destruction rates per unit
+     * abundance at this point already known ({@code captures}: {d, 7Li}, s^-1, &gt;= 0, e.g. from
+     * {@link LightElementRates} at the same density, temperature and composition), so that the light elements'
+     * exact step does not evaluate the whole network again for them; null evaluates them here.
+     */
+    Composition advance(double density, double temperature, Composition start, double dt, double[] captures) {
         return advance(x -> rates(density, temperature, x), x -> {
             BurningAndFactors point = network.burnAndFactors(density, temperature, MassFractions.composition(x));
             RateFactors factors = point.factors().orElse(null);
             return new Linearised(rates(point.rate()),
                     factors == null ? null : (y, out) -> factors.addJacobian(y, 1.0, out));
-        }, start, dt, density, temperature);
+        }, start, dt, density, temperature, captures);
     }
 
     /**
@@ -122,6 +132,16 @@ public final class CompositionStep {
      */
     public Composition advanceMixed(double[] densities, double[] temperatures, double[] weights, Composition start,
                                     double dt) {
+        return advanceMixed(densities, temperatures, weights, start, dt, null);
+    }
+
+    /**
+     * {@link #advanceMixed(double[], double[], double[], Composition, double)} with the zone's mass-weighted
+     * deuterium and 7Li destruction rates per unit abundance already known ({@code captures}, as in
+     * {@link #advance(double, double, Composition, double, double[])}); null evaluates them here.
+     */
+    Composition advanceMixed(double[] densities, double[] temperatures, double[] weights, Composition start,
+                             double dt, double[] captures) {
         int n = densities.length;
         if (temperatures.length != n || weights.length != n || n == 0) {
             throw new IllegalArgumentException("a mixed zone needs one density, temperature and weight per point");
@@ -158,7 +178,7 @@ public final class CompositionStep {
             };
             return new Linearised(scaled(mean, mass), analytic ? jacobian : null);
         };
-        return advance(zone, linearisation, start, dt, densities[0], temperatures[0]);
+        return advance(zone, linearisation, start, dt, densities[0], temperatures[0], captures);
     }
 
     /** sum / mass, in place. */
@@ -205,10 +225,14 @@ public final class CompositionStep {
     }
 
     private Composition advance(Rates rates, Linearisation linearisation, Composition start, double dt,
-                                double density, double temperature) {
+                                double density, double temperature, double[] captures) {
         ConvgridException.requireInRange("time step", dt, 0.0, Double.MAX_VALUE, "s");
         double[] x = MassFractions.of(start);
-        if (x[MassFractions.H2] > 0.0 || x[MassFractions.LI7] > 0.0) {
+        if (captures != null) {
+            // the same rates as the network's at x, given per unit abundance
+            LightElementBurning.burn(x, -captures[0] * x[MassFractions.H2], -captures[1] * x[MassFractions.LI7],
+                    dt);
+        } else if (x[MassFractions.H2] > 0.0 || x[MassFractions.LI7] > 0.0) {
             double[] light = rates.at(x);
             LightElementBurning.burn(x, light[N], light[N + 1], dt);
         }
