@@ -19,7 +19,9 @@ import org.convgrid.engine.state.Composition;
  * evaluation as the rates at the step's start; only the screening's weak dependence on composition, which the
  * chord iteration does not need, is then held at its start value), or by
  * finite differences of the rates for a network without them; a sub-step that does not converge, or that changes some
- * mass fraction by more than {@link #MAX_SUBSTEP_CHANGE}, is halved. Newton corrections are damped so that no
+ * mass fraction by more than {@link #MAX_SUBSTEP_CHANGE}, is halved. With rate factors the iteration first converges
+ * on the rates at fixed screening (products of the factors and the abundances), then on the network's own. Newton
+ * corrections are damped so that no
  * mass fraction goes negative. The rates conserve mass (abundances counted with mass numbers), and the result is
  * renormalised so the fractions sum to one to rounding. Deuterium and 7Li, destroyed by one proton capture each at a
  * rate linear in their own abundance, burn first in their own exact step ({@link LightElementBurning}); the Newton
@@ -109,7 +111,7 @@ public final class CompositionStep {
             BurningAndFactors point = network.burnAndFactors(density, temperature, MassFractions.composition(x));
             RateFactors factors = point.factors().orElse(null);
             return new Linearised(rates(point.rate()),
-                    factors == null ? null : (y, out) -> factors.addJacobian(y, 1.0, out));
+                    factors == null ? null : (y, out) -> factors.addJacobian(y, 1.0, out), factors);
         }, start, dt, density, temperature, captures);
     }
 
@@ -176,9 +178,49 @@ public final class CompositionStep {
                     factors[k].addJacobian(y, weights[k] / mass, out);
                 }
             };
-            return new Linearised(scaled(mean, mass), analytic ? jacobian : null);
+            return new Linearised(scaled(mean, mass), analytic ? jacobian : null,
+                    analytic ? meanFactors(factors, weights, mass) : null);
         };
         return advance(zone, linearisation, start, dt, densities[0], temperatures[0], captures);
+    }
+
+    /**
+     * The mass-weighted mean of the points' factors: the zone's rates at fixed screening are the rate products with
+     * these factors, since they are linear in the factors at one composition.
+     */
+    private static RateFactors meanFactors(RateFactors[] factors, double[] weights, double mass) {
+        double[] k = new double[RateFactors.SPECIES];
+        for (int p = 0; p < factors.length; p++) {
+            double w = weights[p] / mass;
+            RateFactors f = factors[p];
+            k[0] += w * f.pp();
+            k[1] += w * f.he3He3();
+            k[2] += w * f.he3He4();
+            k[3] += w * f.c12();
+            k[4] += w * f.n14();
+            k[5] += w * f.o16();
+        }
+        return new RateFactors(k[0], k[1], k[2], k[3], k[4], k[5]);
+    }
+
+    /**
+     * The six burning species' rates of the factors' reactions at x, at fixed screening: the products
+     * r = k Y_j Y_k / (1 + delta_jk) and the mass-fraction rates of {@link RateFactors#addJacobian} (the network's rate
+     * form), without deuterium and 7Li.
+     */
+    private static double[] atFixedScreening(RateFactors k, double[] x) {
+        double y1 = x[0];
+        double y3 = x[1] / 3.0;
+        double y4 = x[2] / 4.0;
+        double r11 = 0.5 * k.pp() * y1 * y1;
+        double r33 = 0.5 * k.he3He3() * y3 * y3;
+        double r34 = k.he3He4() * y3 * y4;
+        double r12 = k.c12() * y1 * (x[3] / 12.0);
+        double r14 = k.n14() * y1 * (x[4] / 14.0);
+        double r16 = k.o16() * y1 * (x[5] / 16.0);
+        return new double[] {-3.0 * r11 + 2.0 * r33 - r34 - 2.0 * (r12 + r14 + r16),
+            3.0 * (r11 - 2.0 * r33 - r34), 4.0 * (r33 + r34 + r14 + r16), 12.0 * (r14 - r12),
+            14.0 * (r12 - r14 + r16), -16.0 * r16};
     }
 
     /** sum / mass, in place. */
@@ -213,8 +255,9 @@ public final class CompositionStep {
     /**
      * @param rates the composition rates at x, as {@link Rates} gives them
      * @param jacobian their analytic Jacobian, or null to difference the rates
+     * @param factors the rate factors the Jacobian is made of (a zone's mass-weighted mean), or null
      */
-    private record Linearised(double[] rates, Jacobian jacobian) {
+    private record Linearised(double[] rates, Jacobian jacobian, RateFactors factors) {
     }
 
     /** Work arrays of one step's chord iterations, so that their loops allocate nothing. */
@@ -260,7 +303,7 @@ public final class CompositionStep {
             if (ratesAtX == null) {
                 ratesAtX = rates.at(x);
             }
-            double[] next = implicitSubstep(rates, analytic, work, x, ratesAtX, sub);
+            double[] next = implicitSubstep(rates, analytic, atStart.factors(), work, x, ratesAtX, sub);
             if (next != null) {
                 x = next;
                 ratesAtX = null;
@@ -280,10 +323,16 @@ public final class CompositionStep {
 
     /**
      * One backward-Euler sub-step from x0 (where the rates are f0), or null when the iteration fails or the change
-     * is too large.
+     * is too large. With the rate factors ({@code factors}, null without) the chord iteration first converges on
+     * the rates at fixed screening, f0 + r(x) - r(x0) with r the rate products ({@link #atFixedScreening}), which
+     * cost next to nothing beside a network evaluation at every point of a zone; the network's own rates then
+     * correct the screening's small dependence on composition, to the same convergence test as without. Measured,
+     * 1 Msun, Z = 0.02, birth to the zero-age main sequence (7432 sub-steps): network evaluations for the rates 16859
+     * -> 12575 at single points and 25051 -> 18249 at the points of mixed zones; the results move within that
+     * convergence test (ZAMS age and exhaustion age by 2e-13 and 5e-13, relative).
      */
-    private double[] implicitSubstep(Rates rates, Jacobian analytic, Workspace work, double[] x0, double[] f0,
-                                     double h) {
+    private double[] implicitSubstep(Rates rates, Jacobian analytic, RateFactors factors, Workspace work,
+                                     double[] x0, double[] f0, double h) {
         double[] x = x0.clone();
         double[][] matrix = work.matrix;
         if (analytic != null) {
@@ -305,28 +354,30 @@ public final class CompositionStep {
         if (!SmallLinearSolver.factorise(matrix, work.pivots)) {
             return null;
         }
-        double[] delta = work.delta;
         double[] f = f0;
-        for (int iteration = 0; iteration < NEWTON_BUDGET; iteration++) {
-            double drift = 0.0;
-            for (int i = 0; i < N; i++) {
-                delta[i] = -(x[i] - x0[i] - h * f[i]);
-                drift += x[i] - x0[i];
-            }
-            delta[HELIUM4] = -drift;
-            SmallLinearSolver.solveFactorised(matrix, work.pivots, delta);
-            double lambda = 1.0;
-            double size = 0.0;
-            for (int i = 0; i < N; i++) {
-                size = Math.max(size, Math.abs(delta[i]));
-                if (delta[i] < 0.0 && x[i] + delta[i] < 0.0) {
-                    lambda = Math.min(lambda, POSITIVITY_MARGIN * x[i] / -delta[i]);
+        if (factors != null) {
+            double[] r0 = atFixedScreening(factors, x0);
+            boolean settled = false;
+            for (int iteration = 0; iteration < NEWTON_BUDGET && !settled; iteration++) {
+                settled = correct(work, x, x0, f, h);
+                if (!settled) {
+                    double[] r = atFixedScreening(factors, x);
+                    f = new double[N];
+                    for (int i = 0; i < N; i++) {
+                        f[i] = f0[i] + (r[i] - r0[i]);
+                    }
                 }
             }
-            for (int i = 0; i < N; i++) {
-                x[i] = Math.max(0.0, x[i] + lambda * delta[i]);
+            if (settled) {
+                f = rates.at(x);
+            } else {
+                // no better start than x0 itself
+                x = x0.clone();
+                f = f0;
             }
-            if (lambda == 1.0 && size <= NEWTON_TOLERANCE) {
+        }
+        for (int iteration = 0; iteration < NEWTON_BUDGET; iteration++) {
+            if (correct(work, x, x0, f, h)) {
                 for (int i = 0; i < N; i++) {
                     double change = Math.abs(x[i] - x0[i]);
                     if (change > MAX_SUBSTEP_CHANGE
@@ -339,6 +390,34 @@ public final class CompositionStep {
             f = rates.at(x);
         }
         return null;
+    }
+
+    /**
+     * One chord correction of x towards x - x0 = h f (f the rates at x) with the factorised matrix of {@code work},
+     * damped so that no fraction goes negative; true when it was undamped and no larger than
+     * {@link #NEWTON_TOLERANCE} (converged).
+     */
+    private static boolean correct(Workspace work, double[] x, double[] x0, double[] f, double h) {
+        double[] delta = work.delta;
+        double drift = 0.0;
+        for (int i = 0; i < N; i++) {
+            delta[i] = -(x[i] - x0[i] - h * f[i]);
+            drift += x[i] - x0[i];
+        }
+        delta[HELIUM4] = -drift;
+        SmallLinearSolver.solveFactorised(work.matrix, work.pivots, delta);
+        double lambda = 1.0;
+        double size = 0.0;
+        for (int i = 0; i < N; i++) {
+            size = Math.max(size, Math.abs(delta[i]));
+            if (delta[i] < 0.0 && x[i] + delta[i] < 0.0) {
+                lambda = Math.min(lambda, POSITIVITY_MARGIN * x[i] / -delta[i]);
+            }
+        }
+        for (int i = 0; i < N; i++) {
+            x[i] = Math.max(0.0, x[i] + lambda * delta[i]);
+        }
+        return lambda == 1.0 && size <= NEWTON_TOLERANCE;
     }
 
     /** The matrix {@code 1 - h df/dx} by forward differences of the rates, for a network without rate factors. */
