@@ -19,7 +19,9 @@ import org.convgrid.engine.state.Composition;
  * evaluation as the rates at the step's start; only the screening's weak dependence on composition, which the
  * chord iteration does not need, is then held at its start value), or by
  * finite differences of the rates for a network without them; a sub-step that does not converge, or that changes some
- * mass fraction by more than {@link #MAX_SUBSTEP_CHANGE}, is halved. Newton corrections are damped so that no
+ * mass fraction by more than {@link #MAX_SUBSTEP_CHANGE}, is halved. With rate factors the iteration first converges
+ * on the rates at fixed screening (products of the factors and the abundances), then on the network's own. Newton
+ * corrections are damped so that no
  * mass fraction goes negative. The rates conserve mass (abundances counted with mass numbers), and the result is
  * renormalised so the fractions sum to one to rounding. Deuterium and 7Li, destroyed by one proton capture each at a
  * rate linear in their own abundance, burn first in their own exact step ({@link LightElementBurning}); the Newton
@@ -95,12 +97,22 @@ public final class CompositionStep {
      * @throws ConvgridException NOT_CONVERGED when the sub-step budget is exhausted
      */
     public Composition advance(double density, double temperature, Composition start, double dt) {
+        return advance(density, temperature, start, dt, null);
+    }
+
+    /**
+     * {@link #advance(double, double, Composition, double)} with the deuterium and 7Li destruction rates per unit
+     * abundance at this point already known ({@code captures}: {d, 7Li}, s^-1, &gt;= 0, e.g. from
+     * {@link LightElementRates} at the same density, temperature and composition), so that the light elements'
+     * exact step does not evaluate the whole network again for them; null evaluates them here.
+     */
+    Composition advance(double density, double temperature, Composition start, double dt, double[] captures) {
         return advance(x -> rates(density, temperature, x), x -> {
             BurningAndFactors point = network.burnAndFactors(density, temperature, MassFractions.composition(x));
             RateFactors factors = point.factors().orElse(null);
             return new Linearised(rates(point.rate()),
-                    factors == null ? null : (y, out) -> factors.addJacobian(y, 1.0, out));
-        }, start, dt, density, temperature);
+                    factors == null ? null : (y, out) -> factors.addJacobian(y, 1.0, out), factors);
+        }, start, dt, density, temperature, captures);
     }
 
     /**
@@ -122,6 +134,16 @@ public final class CompositionStep {
      */
     public Composition advanceMixed(double[] densities, double[] temperatures, double[] weights, Composition start,
                                     double dt) {
+        return advanceMixed(densities, temperatures, weights, start, dt, null);
+    }
+
+    /**
+     * {@link #advanceMixed(double[], double[], double[], Composition, double)} with the zone's mass-weighted
+     * deuterium and 7Li destruction rates per unit abundance already known ({@code captures}, as in
+     * {@link #advance(double, double, Composition, double, double[])}); null evaluates them here.
+     */
+    Composition advanceMixed(double[] densities, double[] temperatures, double[] weights, Composition start,
+                             double dt, double[] captures) {
         int n = densities.length;
         if (temperatures.length != n || weights.length != n || n == 0) {
             throw new IllegalArgumentException("a mixed zone needs one density, temperature and weight per point");
@@ -131,10 +153,12 @@ public final class CompositionStep {
             total += w;
         }
         double mass = total;
+        // one composition for all the zone's points, and their rates summed as they come (no array per point)
         Rates zone = x -> {
+            Composition c = MassFractions.composition(x);
             double[] mean = new double[N + 2];
             for (int k = 0; k < n; k++) {
-                addWeighted(mean, weights[k], rates(densities[k], temperatures[k], x));
+                addRates(mean, weights[k], network.burn(densities[k], temperatures[k], c));
             }
             return scaled(mean, mass);
         };
@@ -145,7 +169,7 @@ public final class CompositionStep {
             boolean analytic = true;
             for (int k = 0; k < n; k++) {
                 BurningAndFactors point = network.burnAndFactors(densities[k], temperatures[k], c);
-                addWeighted(mean, weights[k], rates(point.rate()));
+                addRates(mean, weights[k], point.rate());
                 factors[k] = point.factors().orElse(null);
                 analytic &= factors[k] != null;
             }
@@ -154,16 +178,49 @@ public final class CompositionStep {
                     factors[k].addJacobian(y, weights[k] / mass, out);
                 }
             };
-            return new Linearised(scaled(mean, mass), analytic ? jacobian : null);
+            return new Linearised(scaled(mean, mass), analytic ? jacobian : null,
+                    analytic ? meanFactors(factors, weights, mass) : null);
         };
-        return advance(zone, linearisation, start, dt, densities[0], temperatures[0]);
+        return advance(zone, linearisation, start, dt, densities[0], temperatures[0], captures);
     }
 
-    /** sum += weight f, element by element. */
-    private static void addWeighted(double[] sum, double weight, double[] f) {
-        for (int i = 0; i < sum.length; i++) {
-            sum[i] += weight * f[i];
+    /**
+     * The mass-weighted mean of the points' factors: the zone's rates at fixed screening are the rate products with
+     * these factors, since they are linear in the factors at one composition.
+     */
+    private static RateFactors meanFactors(RateFactors[] factors, double[] weights, double mass) {
+        double[] k = new double[RateFactors.SPECIES];
+        for (int p = 0; p < factors.length; p++) {
+            double w = weights[p] / mass;
+            RateFactors f = factors[p];
+            k[0] += w * f.pp();
+            k[1] += w * f.he3He3();
+            k[2] += w * f.he3He4();
+            k[3] += w * f.c12();
+            k[4] += w * f.n14();
+            k[5] += w * f.o16();
         }
+        return new RateFactors(k[0], k[1], k[2], k[3], k[4], k[5]);
+    }
+
+    /**
+     * The six burning species' rates of the factors' reactions at x, at fixed screening: the products
+     * r = k Y_j Y_k / (1 + delta_jk) and the mass-fraction rates of {@link RateFactors#addJacobian} (the network's rate
+     * form), without deuterium and 7Li.
+     */
+    private static double[] atFixedScreening(RateFactors k, double[] x) {
+        double y1 = x[0];
+        double y3 = x[1] / 3.0;
+        double y4 = x[2] / 4.0;
+        double r11 = 0.5 * k.pp() * y1 * y1;
+        double r33 = 0.5 * k.he3He3() * y3 * y3;
+        double r34 = k.he3He4() * y3 * y4;
+        double r12 = k.c12() * y1 * (x[3] / 12.0);
+        double r14 = k.n14() * y1 * (x[4] / 14.0);
+        double r16 = k.o16() * y1 * (x[5] / 16.0);
+        return new double[] {-3.0 * r11 + 2.0 * r33 - r34 - 2.0 * (r12 + r14 + r16),
+            3.0 * (r11 - 2.0 * r33 - r34), 4.0 * (r33 + r34 + r14 + r16), 12.0 * (r14 - r12),
+            14.0 * (r12 - r14 + r16), -16.0 * r16};
     }
 
     /** sum / mass, in place. */
@@ -198,8 +255,9 @@ public final class CompositionStep {
     /**
      * @param rates the composition rates at x, as {@link Rates} gives them
      * @param jacobian their analytic Jacobian, or null to difference the rates
+     * @param factors the rate factors the Jacobian is made of (a zone's mass-weighted mean), or null
      */
-    private record Linearised(double[] rates, Jacobian jacobian) {
+    private record Linearised(double[] rates, Jacobian jacobian, RateFactors factors) {
     }
 
     /** Work arrays of one step's chord iterations, so that their loops allocate nothing. */
@@ -210,10 +268,14 @@ public final class CompositionStep {
     }
 
     private Composition advance(Rates rates, Linearisation linearisation, Composition start, double dt,
-                                double density, double temperature) {
+                                double density, double temperature, double[] captures) {
         ConvgridException.requireInRange("time step", dt, 0.0, Double.MAX_VALUE, "s");
         double[] x = MassFractions.of(start);
-        if (x[MassFractions.H2] > 0.0 || x[MassFractions.LI7] > 0.0) {
+        if (captures != null) {
+            // the same rates as the network's at x, given per unit abundance
+            LightElementBurning.burn(x, -captures[0] * x[MassFractions.H2], -captures[1] * x[MassFractions.LI7],
+                    dt);
+        } else if (x[MassFractions.H2] > 0.0 || x[MassFractions.LI7] > 0.0) {
             double[] light = rates.at(x);
             LightElementBurning.burn(x, light[N], light[N + 1], dt);
         }
@@ -241,7 +303,7 @@ public final class CompositionStep {
             if (ratesAtX == null) {
                 ratesAtX = rates.at(x);
             }
-            double[] next = implicitSubstep(rates, analytic, work, x, ratesAtX, sub);
+            double[] next = implicitSubstep(rates, analytic, atStart.factors(), work, x, ratesAtX, sub);
             if (next != null) {
                 x = next;
                 ratesAtX = null;
@@ -261,10 +323,16 @@ public final class CompositionStep {
 
     /**
      * One backward-Euler sub-step from x0 (where the rates are f0), or null when the iteration fails or the change
-     * is too large.
+     * is too large. With the rate factors ({@code factors}, null without) the chord iteration first converges on
+     * the rates at fixed screening, f0 + r(x) - r(x0) with r the rate products ({@link #atFixedScreening}), which
+     * cost next to nothing beside a network evaluation at every point of a zone; the network's own rates then
+     * correct the screening's small dependence on composition, to the same convergence test as without. Measured,
+     * 1 Msun, Z = 0.02, birth to the zero-age main sequence (7432 sub-steps): network evaluations for the rates 16859
+     * -> 12575 at single points and 25051 -> 18249 at the points of mixed zones; the results move within that
+     * convergence test (ZAMS age and exhaustion age by 2e-13 and 5e-13, relative).
      */
-    private double[] implicitSubstep(Rates rates, Jacobian analytic, Workspace work, double[] x0, double[] f0,
-                                     double h) {
+    private double[] implicitSubstep(Rates rates, Jacobian analytic, RateFactors factors, Workspace work,
+                                     double[] x0, double[] f0, double h) {
         double[] x = x0.clone();
         double[][] matrix = work.matrix;
         if (analytic != null) {
@@ -286,28 +354,30 @@ public final class CompositionStep {
         if (!SmallLinearSolver.factorise(matrix, work.pivots)) {
             return null;
         }
-        double[] delta = work.delta;
         double[] f = f0;
-        for (int iteration = 0; iteration < NEWTON_BUDGET; iteration++) {
-            double drift = 0.0;
-            for (int i = 0; i < N; i++) {
-                delta[i] = -(x[i] - x0[i] - h * f[i]);
-                drift += x[i] - x0[i];
-            }
-            delta[HELIUM4] = -drift;
-            SmallLinearSolver.solveFactorised(matrix, work.pivots, delta);
-            double lambda = 1.0;
-            double size = 0.0;
-            for (int i = 0; i < N; i++) {
-                size = Math.max(size, Math.abs(delta[i]));
-                if (delta[i] < 0.0 && x[i] + delta[i] < 0.0) {
-                    lambda = Math.min(lambda, POSITIVITY_MARGIN * x[i] / -delta[i]);
+        if (factors != null) {
+            double[] r0 = atFixedScreening(factors, x0);
+            boolean settled = false;
+            for (int iteration = 0; iteration < NEWTON_BUDGET && !settled; iteration++) {
+                settled = correct(work, x, x0, f, h);
+                if (!settled) {
+                    double[] r = atFixedScreening(factors, x);
+                    f = new double[N];
+                    for (int i = 0; i < N; i++) {
+                        f[i] = f0[i] + (r[i] - r0[i]);
+                    }
                 }
             }
-            for (int i = 0; i < N; i++) {
-                x[i] = Math.max(0.0, x[i] + lambda * delta[i]);
+            if (settled) {
+                f = rates.at(x);
+            } else {
+                // no better start than x0 itself
+                x = x0.clone();
+                f = f0;
             }
-            if (lambda == 1.0 && size <= NEWTON_TOLERANCE) {
+        }
+        for (int iteration = 0; iteration < NEWTON_BUDGET; iteration++) {
+            if (correct(work, x, x0, f, h)) {
                 for (int i = 0; i < N; i++) {
                     double change = Math.abs(x[i] - x0[i]);
                     if (change > MAX_SUBSTEP_CHANGE
@@ -320,6 +390,34 @@ public final class CompositionStep {
             f = rates.at(x);
         }
         return null;
+    }
+
+    /**
+     * One chord correction of x towards x - x0 = h f (f the rates at x) with the factorised matrix of {@code work},
+     * damped so that no fraction goes negative; true when it was undamped and no larger than
+     * {@link #NEWTON_TOLERANCE} (converged).
+     */
+    private static boolean correct(Workspace work, double[] x, double[] x0, double[] f, double h) {
+        double[] delta = work.delta;
+        double drift = 0.0;
+        for (int i = 0; i < N; i++) {
+            delta[i] = -(x[i] - x0[i] - h * f[i]);
+            drift += x[i] - x0[i];
+        }
+        delta[HELIUM4] = -drift;
+        SmallLinearSolver.solveFactorised(work.matrix, work.pivots, delta);
+        double lambda = 1.0;
+        double size = 0.0;
+        for (int i = 0; i < N; i++) {
+            size = Math.max(size, Math.abs(delta[i]));
+            if (delta[i] < 0.0 && x[i] + delta[i] < 0.0) {
+                lambda = Math.min(lambda, POSITIVITY_MARGIN * x[i] / -delta[i]);
+            }
+        }
+        for (int i = 0; i < N; i++) {
+            x[i] = Math.max(0.0, x[i] + lambda * delta[i]);
+        }
+        return lambda == 1.0 && size <= NEWTON_TOLERANCE;
     }
 
     /** The matrix {@code 1 - h df/dx} by forward differences of the rates, for a network without rate factors. */
@@ -345,13 +443,28 @@ public final class CompositionStep {
 
     /** {@link #rates(double, double, double[])} from the network's rate at the point. */
     private static double[] rates(BurningRate r) {
+        double[] f = new double[N + 2];
+        addRates(f, 1.0, r);
+        return f;
+    }
+
+    /**
+     * sum += weight f, f the rates of {@link #rates(BurningRate)}, element by element (a zone's points summed
+     * without an array each).
+     */
+    private static void addRates(double[] sum, double weight, BurningRate r) {
         double d = r.dh2Dt();
         double li = r.dli7Dt();
         // d + p -> 3He moves mass 2:1 -> 3, 7Li + p -> 2 4He 7:1 -> 8 (rates are negative: destruction)
-        return new double[] {r.dh1Dt() - LightElementBurning.HYDROGEN_PER_DEUTERIUM * d
-                - LightElementBurning.HYDROGEN_PER_LITHIUM * li,
-            r.dhe3Dt() + LightElementBurning.HELIUM3_PER_DEUTERIUM * d, r.dhe4Dt()
-                + LightElementBurning.HELIUM4_PER_LITHIUM * li, r.dc12Dt(), r.dn14Dt(), r.do16Dt(), d, li};
+        sum[0] += weight * (r.dh1Dt() - LightElementBurning.HYDROGEN_PER_DEUTERIUM * d
+                - LightElementBurning.HYDROGEN_PER_LITHIUM * li);
+        sum[1] += weight * (r.dhe3Dt() + LightElementBurning.HELIUM3_PER_DEUTERIUM * d);
+        sum[2] += weight * (r.dhe4Dt() + LightElementBurning.HELIUM4_PER_LITHIUM * li);
+        sum[3] += weight * r.dc12Dt();
+        sum[4] += weight * r.dn14Dt();
+        sum[5] += weight * r.do16Dt();
+        sum[6] += weight * d;
+        sum[7] += weight * li;
     }
 
     /** Clips rounding-level negatives and rescales the burning species so all the fractions sum to one. */

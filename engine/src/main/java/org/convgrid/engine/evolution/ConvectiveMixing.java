@@ -59,10 +59,7 @@ public final class ConvectiveMixing {
         double[] sum = new double[MassFractions.ALL];
         double mass = 0.0;
         for (int j = lo; j <= hi; j++) {
-            double[] x = MassFractions.of(composition[j]);
-            for (int i = 0; i < sum.length; i++) {
-                sum[i] += w[j] * x[i];
-            }
+            MassFractions.addWeighted(sum, w[j], composition[j]);
             mass += w[j];
         }
         for (int i = 0; i < sum.length; i++) {

@@ -63,12 +63,10 @@ final class GravothermalEnergy implements ExtraEnergy {
     static GravothermalEnergy since(StepStart start, double dt) {
         int n = start.state().size();
         double[] v = new double[n];
-        double[] p = new double[n];
         for (int k = 0; k < n; k++) {
             v[k] = 1.0 / start.density()[k];
-            p[k] = Math.exp(start.lnPressure()[k]);
         }
-        return new GravothermalEnergy(v, p, start.internalEnergy(), dt);
+        return new GravothermalEnergy(v, start.pressure(), start.internalEnergy(), dt);
     }
 
     /**

@@ -417,12 +417,16 @@ public final class MainSequenceEvolver {
         }
         MassMesh mesh = start.state().mesh();
         boolean[] mixed = physics.overshoot().mixedPoints(mesh::mass, start.convective(), previous.profile());
-        Composition[] comp = burn(burning, start.state(), mixed, rho, t, dt);
+        // the light elements' rates in the step's zones at the network's rho and T, before the burning, which takes
+        // them from here instead of evaluating the network once more per point for them
+        LightElementRates used = LightElementRates.anyIn(start.state().compositions())
+                ? LightElementRates.of(physics.nuclear(), PointCells.masses(mesh), mixed, start.state().compositions(),
+                        rho, t) : null;
+        Composition[] comp = burn(burning, start.state(), mixed, rho, t, dt, used);
         LightElementTrapezoid light = null;
-        if (LightElementRates.anyIn(start.state().compositions())) {
+        if (used != null) {
             double[] w = PointCells.masses(mesh);
             Composition[] before = start.state().compositions();
-            LightElementRates used = LightElementRates.of(physics.nuclear(), w, mixed, before, rho, t);
             // the start-of-step rates at the start-of-step rho and T whenever the network's were extrapolated: with
             // the extrapolated rates in their place on redistributed steps the trapezoid leant towards the end of the
             // step and the envelope burnt too much lithium (1 Msun, Z = 0.02, log Li/Li0 at 1 Gyr -0.71 / -0.59 /
@@ -554,7 +558,7 @@ public final class MainSequenceEvolver {
      * every other point burnt on its own.
      */
     private static Composition[] burn(CompositionStep network, ModelState state, boolean[] mixed, double[] rho,
-                                      double[] t, double dt) {
+                                      double[] t, double dt, LightElementRates light) {
         int n = state.size();
         double[] w = PointCells.masses(state.mesh());
         Composition[] start = state.compositions();
@@ -563,16 +567,25 @@ public final class MainSequenceEvolver {
         while (k < n) {
             int end = ConvectiveMixing.runEnd(mixed, k);
             if (end == k) {
-                comp[k] = network.advance(rho[k], t[k], start[k], dt);
+                comp[k] = network.advance(rho[k], t[k], start[k], dt, captures(light, k));
             } else {
                 Composition mean = ConvectiveMixing.mean(w, start, k, end);
                 Composition burnt = network.advanceMixed(Arrays.copyOfRange(rho, k, end + 1),
-                        Arrays.copyOfRange(t, k, end + 1), Arrays.copyOfRange(w, k, end + 1), mean, dt);
+                        Arrays.copyOfRange(t, k, end + 1), Arrays.copyOfRange(w, k, end + 1), mean, dt,
+                        captures(light, k));
                 Arrays.fill(comp, k, end + 1, burnt);
             }
             k = end + 1;
         }
         return comp;
+    }
+
+    /**
+     * The deuterium and 7Li destruction rates per unit abundance at point k (its zone's, the same as the network
+     * gives there for the zone's composition), for {@link CompositionStep}; null when the star holds neither.
+     */
+    private static double[] captures(LightElementRates light, int k) {
+        return light == null ? null : new double[] {light.deuterium()[k], light.lithium()[k]};
     }
 
     /**

@@ -27,6 +27,19 @@ final class MassFractions {
         return new double[] {c.h1(), c.he3(), c.he4(), c.c12(), c.n14(), c.o16(), c.otherMetals(), c.h2(), c.li7()};
     }
 
+    /** sum += weight x(c), element by element in the order of {@link #of}, without the array of {@link #of}. */
+    static void addWeighted(double[] sum, double weight, Composition c) {
+        sum[0] += weight * c.h1();
+        sum[1] += weight * c.he3();
+        sum[2] += weight * c.he4();
+        sum[3] += weight * c.c12();
+        sum[4] += weight * c.n14();
+        sum[5] += weight * c.o16();
+        sum[6] += weight * c.otherMetals();
+        sum[H2] += weight * c.h2();
+        sum[LI7] += weight * c.li7();
+    }
+
     static Composition composition(double[] x) {
         return new Composition(x[0], x[1], x[2], x[3], x[4], x[5], x[6], x[7], x[8]);
     }

@@ -13,14 +13,14 @@ import org.convgrid.engine.structure.StellarProfile;
 
 /**
  * The previous model as a time step needs it, on the mesh the step will use: the state (starting guess), the
- * density, temperature and ln P of every point (for the network and for eps_grav), its specific internal energy
+ * density, temperature and P of every point (for the network and for eps_grav; ln P, for nabla_mu, on demand), its specific internal energy
  * (for eps_grav) and which points are convective (for mixing). Either the converged model itself (P and u from the
  * equation-of-state call of its last evaluation, so a step costs no call of its own), or the model moved onto a
  * new mesh: structure interpolated by {@link MeshPlanner}, composition remapped conservatively by
  * {@link MassRemap}, pressure and internal energy recomputed from the interpolated density and temperature,
  * convective flags from the nearest old point.
  */
-record StepStart(ModelState state, double[] density, double[] temperature, double[] lnPressure,
+record StepStart(ModelState state, double[] density, double[] temperature, double[] pressure,
                  double[] internalEnergy, boolean[] convective) {
 
     /** The model on its own mesh. */
@@ -29,17 +29,17 @@ record StepStart(ModelState state, double[] density, double[] temperature, doubl
         int n = p.size();
         double[] rho = new double[n];
         double[] t = new double[n];
-        double[] lnP = new double[n];
+        double[] pressure = new double[n];
         double[] u = new double[n];
         boolean[] conv = new boolean[n];
         for (int k = 0; k < n; k++) {
             rho[k] = p.density(k);
             t[k] = p.temperature(k);
-            lnP[k] = Math.log(p.pressure(k));
+            pressure[k] = p.pressure(k);
             u[k] = p.internalEnergy(k);
             conv[k] = p.convective(k);
         }
-        return new StepStart(model.state(), rho, t, lnP, u, conv);
+        return new StepStart(model.state(), rho, t, pressure, u, conv);
     }
 
     /** The model moved onto the mesh {@code planner} chooses with the given extra interval costs. */
@@ -51,20 +51,33 @@ record StepStart(ModelState state, double[] density, double[] temperature, doubl
         int n = moved.size();
         double[] rho = new double[n];
         double[] t = new double[n];
-        double[] lnP = new double[n];
+        double[] pressure = new double[n];
         double[] u = new double[n];
         boolean[] conv = new boolean[n];
         double[] oldMass = model.profile().masses();
         MassMesh mesh = moved.mesh();
+        EosState s = null;
         for (int k = 0; k < n; k++) {
             rho[k] = Math.exp(moved.lnDensity(k));
             t[k] = Math.exp(moved.lnTemperature(k));
-            EosState s = physics.eos().atDensity(rho[k], t[k], comp[k]);
-            lnP[k] = Math.log(s.pressure());
+            // started from the point below, a few per cent away in rho and T: the same state to the equation of
+            // state's solve tolerance in one or two of its iterations instead of five to ten from a cold guess
+            s = s == null ? physics.eos().atDensity(rho[k], t[k], comp[k])
+                    : physics.eos().atDensity(rho[k], t[k], comp[k], s);
+            pressure[k] = s.pressure();
             u[k] = s.internalEnergy();
             conv[k] = model.profile().convective(nearest(oldMass, mesh.mass(k)));
         }
-        return new StepStart(moved, rho, t, lnP, u, conv);
+        return new StepStart(moved, rho, t, pressure, u, conv);
+    }
+
+    /** ln P at every point (only the Ledoux criterion's nabla_mu needs it, so it is not kept). */
+    double[] lnPressure() {
+        double[] out = new double[pressure.length];
+        for (int k = 0; k < out.length; k++) {
+            out[k] = Math.log(pressure[k]);
+        }
+        return out;
     }
 
     private static int nearest(double[] sorted, double value) {
