@@ -1,6 +1,6 @@
 package org.convgrid.engine.evolution;
 
-import org.convgrid.engine.physics.nuclear.BurningRate;
+import org.convgrid.engine.physics.nuclear.LightElementCaptures;
 import org.convgrid.engine.physics.nuclear.NuclearNetwork;
 import org.convgrid.engine.state.Composition;
 
@@ -18,7 +18,7 @@ import org.convgrid.engine.state.Composition;
 record LightElementRates(double[] deuterium, double[] lithium) {
 
     /**
-     * @param network the network whose d(X_D)/dt and d(X_Li)/dt give the rates
+     * @param network the network whose captures give the rates ({@link NuclearNetwork#lightElementCaptures})
      * @param w mass of each point's cell (any unit)
      * @param mixed which points are mixed
      * @param comp composition per point (a mixed zone's is averaged over it first)
@@ -39,9 +39,9 @@ record LightElementRates(double[] deuterium, double[] lithium) {
             double mass = 0.0;
             if (c.h2() > 0.0 || c.li7() > 0.0) {
                 for (int j = k; j <= end; j++) {
-                    BurningRate r = network.burn(rho[j], t[j], c);
-                    sumD += w[j] * (c.h2() > 0.0 ? -r.dh2Dt() / c.h2() : 0.0);
-                    sumLi += w[j] * (c.li7() > 0.0 ? -r.dli7Dt() / c.li7() : 0.0);
+                    LightElementCaptures r = network.lightElementCaptures(rho[j], t[j], c);
+                    sumD += w[j] * r.deuterium();
+                    sumLi += w[j] * r.lithium();
                     mass += w[j];
                 }
             }
