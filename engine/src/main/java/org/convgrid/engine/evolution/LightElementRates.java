@@ -33,6 +33,11 @@ record LightElementRates(double[] deuterium, double[] lithium) {
         int k = 0;
         while (k < n) {
             int end = ConvectiveMixing.runEnd(mixed, k);
+            if (!anyIn(comp, k, end)) {
+                // a zone without either species (a convective core) burns none: no mean composition needed
+                k = end + 1;
+                continue;
+            }
             Composition c = end == k ? comp[k] : ConvectiveMixing.mean(w, comp, k, end);
             double sumD = 0.0;
             double sumLi = 0.0;
@@ -58,8 +63,13 @@ record LightElementRates(double[] deuterium, double[] lithium) {
 
     /** Whether any point of {@code comp} holds deuterium or 7Li. */
     static boolean anyIn(Composition[] comp) {
-        for (Composition c : comp) {
-            if (c.h2() > 0.0 || c.li7() > 0.0) {
+        return anyIn(comp, 0, comp.length - 1);
+    }
+
+    /** Whether any of the points lo..hi (inclusive) holds deuterium or 7Li. */
+    private static boolean anyIn(Composition[] comp, int lo, int hi) {
+        for (int j = lo; j <= hi; j++) {
+            if (comp[j].h2() > 0.0 || comp[j].li7() > 0.0) {
                 return true;
             }
         }
