@@ -71,6 +71,11 @@ final class LightElementBurning {
                                    LightElementRates atEnd, double dt) {
         Composition[] out = new Composition[end.length];
         for (int k = 0; k < end.length; k++) {
+            if (!(end[k].h2() > 0.0) && !(end[k].li7() > 0.0)) {
+                // nothing to re-burn (on the main sequence a third of the points, the interior): the same object
+                out[k] = end[k];
+                continue;
+            }
             double[] x = MassFractions.of(end[k]);
             double d = x[MassFractions.H2];
             if (d > 0.0) {

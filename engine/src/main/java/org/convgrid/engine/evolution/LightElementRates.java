@@ -1,6 +1,6 @@
 package org.convgrid.engine.evolution;
 
-import org.convgrid.engine.physics.nuclear.BurningRate;
+import org.convgrid.engine.physics.nuclear.LightElementCaptures;
 import org.convgrid.engine.physics.nuclear.NuclearNetwork;
 import org.convgrid.engine.state.Composition;
 
@@ -18,7 +18,7 @@ import org.convgrid.engine.state.Composition;
 record LightElementRates(double[] deuterium, double[] lithium) {
 
     /**
-     * @param network the network whose d(X_D)/dt and d(X_Li)/dt give the rates
+     * @param network the network whose captures give the rates ({@link NuclearNetwork#lightElementCaptures})
      * @param w mass of each point's cell (any unit)
      * @param mixed which points are mixed
      * @param comp composition per point (a mixed zone's is averaged over it first)
@@ -33,15 +33,20 @@ record LightElementRates(double[] deuterium, double[] lithium) {
         int k = 0;
         while (k < n) {
             int end = ConvectiveMixing.runEnd(mixed, k);
+            if (!anyIn(comp, k, end)) {
+                // a zone without either species (a convective core) burns none: no mean composition needed
+                k = end + 1;
+                continue;
+            }
             Composition c = end == k ? comp[k] : ConvectiveMixing.mean(w, comp, k, end);
             double sumD = 0.0;
             double sumLi = 0.0;
             double mass = 0.0;
             if (c.h2() > 0.0 || c.li7() > 0.0) {
                 for (int j = k; j <= end; j++) {
-                    BurningRate r = network.burn(rho[j], t[j], c);
-                    sumD += w[j] * (c.h2() > 0.0 ? -r.dh2Dt() / c.h2() : 0.0);
-                    sumLi += w[j] * (c.li7() > 0.0 ? -r.dli7Dt() / c.li7() : 0.0);
+                    LightElementCaptures r = network.lightElementCaptures(rho[j], t[j], c);
+                    sumD += w[j] * r.deuterium();
+                    sumLi += w[j] * r.lithium();
                     mass += w[j];
                 }
             }
@@ -58,8 +63,13 @@ record LightElementRates(double[] deuterium, double[] lithium) {
 
     /** Whether any point of {@code comp} holds deuterium or 7Li. */
     static boolean anyIn(Composition[] comp) {
-        for (Composition c : comp) {
-            if (c.h2() > 0.0 || c.li7() > 0.0) {
+        return anyIn(comp, 0, comp.length - 1);
+    }
+
+    /** Whether any of the points lo..hi (inclusive) holds deuterium or 7Li. */
+    private static boolean anyIn(Composition[] comp, int lo, int hi) {
+        for (int j = lo; j <= hi; j++) {
+            if (comp[j].h2() > 0.0 || comp[j].li7() > 0.0) {
                 return true;
             }
         }

@@ -216,6 +216,30 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
     }
 
     /**
+     * The two captures alone: lambda_i = rho Y_p N_A&lt;sigma v&gt;_i with the screening {@link #burn} applies at
+     * this point ({@link #screened}, the same value as its rate), Y_p = X_H (the proton's mass number is one); equal
+     * to {@link #burn}'s -dh2Dt/X_D and -dli7Dt/X_Li to rounding at a fraction of its cost (at most two reactions
+     * instead of up to nine, no 7Be captures).
+     */
+    @Override
+    public LightElementCaptures lightElementCaptures(double density, double temperature, Composition composition) {
+        boolean deuterium = composition.h2() > 0.0;
+        boolean lithium = composition.li7() > 0.0;
+        if (!deuterium && !lithium) {
+            return LightElementCaptures.NONE;
+        }
+        checkState(density, temperature);
+        PlasmaState plasma = plasma(density, temperature, composition);
+        double t9 = temperature * 1.0e-9;
+        double cbrtT9 = Math.cbrt(t9);
+        double protons = density * composition.h1();
+        double[] work = new double[3];
+        return new LightElementCaptures(
+                deuterium ? protons * screened(SolarFusionRates.D_P, t9, cbrtT9, plasma, work) : 0.0,
+                lithium ? protons * screened(SolarFusionRates.LI7_P, t9, cbrtT9, plasma, work) : 0.0);
+    }
+
+    /**
      * One reaction at this point into work: [0] the screened N_A&lt;sigma v&gt;, [1] its d ln/d ln T (rate and
      * screening), [2] its d ln/d ln rho (the screening's alone).
      */

@@ -29,4 +29,24 @@ public interface NuclearNetwork {
     default BurningAndFactors burnAndFactors(double density, double temperature, Composition composition) {
         return new BurningAndFactors(burn(density, temperature, composition), Optional.empty());
     }
+
+    /**
+     * The destruction rates per unit abundance of deuterium and 7Li at this point, the same as {@link #burn}'s
+     * -dh2Dt/X_D and -dli7Dt/X_Li; 0 for a species the composition does not hold. For a caller that needs these
+     * two alone (the light elements' own exact step): this default takes them from {@link #burn}, and a network
+     * may evaluate the two captures without the rest.
+     *
+     * @param density g cm^-3
+     * @param temperature K
+     * @param composition mass fractions
+     */
+    default LightElementCaptures lightElementCaptures(double density, double temperature, Composition composition) {
+        double d = composition.h2();
+        double li = composition.li7();
+        if (!(d > 0.0) && !(li > 0.0)) {
+            return LightElementCaptures.NONE;
+        }
+        BurningRate r = burn(density, temperature, composition);
+        return new LightElementCaptures(d > 0.0 ? -r.dh2Dt() / d : 0.0, li > 0.0 ? -r.dli7Dt() / li : 0.0);
+    }
 }

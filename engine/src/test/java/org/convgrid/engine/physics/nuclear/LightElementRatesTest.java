@@ -97,6 +97,31 @@ class LightElementRatesTest {
     }
 
     @Test
+    void theCapturesAloneAgreeWithTheDefaultTakenFromTheWholeNetwork() {
+        // The override evaluates only the two captures; the interface's default divides burn's rates by the
+        // abundances. Consistency, no published value: equal to rounding at the temperatures where each burns.
+        NuclearNetwork wholeNetwork = new NuclearNetwork() {
+            @Override
+            public BurningRate burn(double density, double temperature, Composition composition) {
+                return NETWORK.burn(density, temperature, composition);
+            }
+
+            @Override
+            public Composition equilibrium(double density, double temperature, Composition composition) {
+                return NETWORK.equilibrium(density, temperature, composition);
+            }
+        };
+        for (double[] p : new double[][] {{0.01, 8.0e5}, {0.1, 1.2e6}, {0.5, 2.5e6}, {2.0, 3.5e6}}) {
+            LightElementCaptures alone = NETWORK.lightElementCaptures(p[0], p[1], BIRTH);
+            LightElementCaptures whole = wholeNetwork.lightElementCaptures(p[0], p[1], BIRTH);
+            assertThat(alone.deuterium()).isCloseTo(whole.deuterium(), within(1.0e-14 * whole.deuterium()));
+            assertThat(alone.lithium()).isCloseTo(whole.lithium(), within(1.0e-14 * whole.lithium()));
+        }
+        assertThat(wholeNetwork.lightElementCaptures(1.0, 3.0e6, Composition.scaledSolar(0.70, 0.02)))
+                .isEqualTo(LightElementCaptures.NONE);
+    }
+
+    @Test
     void compositionsWithoutTraceSpeciesBurnAsBefore() {
         Composition bare = Composition.scaledSolar(0.70, 0.02);
         BurningRate r = NETWORK.burn(100.0, 1.5e7, bare);

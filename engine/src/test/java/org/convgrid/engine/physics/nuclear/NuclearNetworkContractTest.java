@@ -3,6 +3,7 @@ package org.convgrid.engine.physics.nuclear;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
+import org.convgrid.engine.state.BirthAbundances;
 import org.convgrid.engine.state.Composition;
 import org.junit.jupiter.api.Test;
 
@@ -63,6 +64,36 @@ abstract class NuclearNetworkContractTest {
             assertThat(e.h1() + e.he3() + e.he4() + e.z()).isCloseTo(1.0, within(1e-12));
             assertThat(e.he4()).isEqualTo(SOLAR.he4());
             assertThat(e.o16()).isEqualTo(SOLAR.o16());
+        }
+    }
+
+    @Test
+    void lightElementCapturesAreTheBurnsRatesPerUnitAbundance() {
+        // Consistency, no published value: lambda_i = -(dX_i/dt)/X_i of burn, to rounding, from the Hayashi track's
+        // cool envelopes to a main-sequence centre; 0 for a species the composition does not hold.
+        Composition birth = BirthAbundances.of(0.70, 0.02);
+        double[][] points = {{1.0e-4, 5.0e5}, {0.05, 1.2e6}, {1.0, 3.0e6}, {20.0, 8.0e6}, {150.0, 1.5e7}};
+        for (double[] p : points) {
+            BurningRate r = network().burn(p[0], p[1], birth);
+            LightElementCaptures c = network().lightElementCaptures(p[0], p[1], birth);
+            double d = -r.dh2Dt() / birth.h2();
+            double li = -r.dli7Dt() / birth.li7();
+            assertThat(d).as("deuterium at %s K", p[1]).isPositive();
+            assertThat(li).as("7Li at %s K", p[1]).isPositive();
+            assertThat(c.deuterium()).as("deuterium at %s K", p[1]).isCloseTo(d, within(1.0e-14 * d));
+            assertThat(c.lithium()).as("7Li at %s K", p[1]).isCloseTo(li, within(1.0e-14 * li));
+            LightElementCaptures noLithium = network().lightElementCaptures(p[0], p[1],
+                    birth.withTraceSpecies(birth.h2(), 0.0));
+            assertThat(noLithium.lithium()).isZero();
+            assertThat(noLithium.deuterium()).isCloseTo(d, within(1.0e-6 * d));
+            LightElementCaptures noDeuterium = network().lightElementCaptures(p[0], p[1],
+                    birth.withTraceSpecies(0.0, birth.li7()));
+            assertThat(noDeuterium.deuterium()).isZero();
+            // the deuterium went to 1H (withTraceSpecies): Y_p, and with it lambda_Li, rises by X_D/X_H ~ 4e-5; the
+            // screening moves by a few 1e-6 more
+            assertThat(noDeuterium.lithium()).isCloseTo(li * (1.0 + birth.h2() / birth.h1()),
+                    within(1.0e-5 * li));
+            assertThat(network().lightElementCaptures(p[0], p[1], SOLAR)).isEqualTo(LightElementCaptures.NONE);
         }
     }
 
