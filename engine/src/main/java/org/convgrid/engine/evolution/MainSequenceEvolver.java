@@ -39,7 +39,8 @@ import org.convgrid.engine.units.Constants;
  * jump in X cannot shrink its interval below ~{@link #COMPOSITION_MESH_RESOLUTION} in m/M) and the composition
  * remapped conservatively ({@link MassRemap}); a redistribution that cannot be built keeps the previous mesh. Before
  * the zero-age main sequence a star with no radiative interior keeps the start model's number of points
- * ({@link FullyConvectiveMesh}); every other step uses this evolver's planner.
+ * ({@link FullyConvectiveMesh}) and a contracting one with a radiative core has {@link RadiativeContractionMesh}'s;
+ * every other step uses this evolver's planner.
  *
  * <p>Time steps (common practice, no single source): the fall of X_c (a rise, from mixing, is not limited) at most
  * {@link Settings#maxCentralHydrogenChange()} while X_c &gt; 0.1, at most {@link Settings#exhaustionFraction()} X_c
@@ -529,15 +530,22 @@ public final class MainSequenceEvolver {
     /**
      * The planner of the step from {@code previous}: before the zero-age main sequence, while the star has no
      * radiative interior ({@link FullyConvectiveMesh#holds}), one that keeps the previous model's number of points
-     * (the start model's, e.g. {@link FullyConvectiveMesh#POINTS}); else this evolver's, whose size, when it differs,
-     * makes the step remesh onto it. A track from the zero-age main sequence always has this evolver's planner.
+     * (the start model's, e.g. {@link FullyConvectiveMesh#POINTS}); then, while it contracts with a radiative core
+     * ({@link RadiativeContractionMesh#holds}) on a mesh no larger, {@link RadiativeContractionMesh#POINTS} when
+     * that is fewer than this evolver's; else this evolver's, whose size, when it differs, makes the step remesh
+     * onto it. A track from the zero-age main sequence always has this evolver's planner.
      */
     private MeshPlanner plannerFor(StellarModel previous, boolean young) {
         int size = previous.state().size();
-        if (!young || size == planner.points() || !FullyConvectiveMesh.holds(previous)) {
+        if (!young || size == planner.points()) {
             return planner;
         }
-        return size == FullyConvectiveMesh.POINTS ? FullyConvectiveMesh.planner() : new MeshPlanner(size);
+        if (FullyConvectiveMesh.holds(previous)) {
+            return size == FullyConvectiveMesh.POINTS ? FullyConvectiveMesh.planner() : new MeshPlanner(size);
+        }
+        boolean contracting = size <= RadiativeContractionMesh.POINTS
+                && RadiativeContractionMesh.POINTS < planner.points() && RadiativeContractionMesh.holds(previous);
+        return contracting ? RadiativeContractionMesh.planner() : planner;
     }
 
     /**
