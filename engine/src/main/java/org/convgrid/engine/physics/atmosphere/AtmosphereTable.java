@@ -20,8 +20,8 @@ import org.convgrid.engine.state.Composition;
  * electron-scattering opacity this reproduces the direct integration to about 3e-4 in ln P between nodes; with the
  * standard physics (tabulated opacities, whose low-temperature part bends fastest) to 1e-3-3e-3 at log Teff
  * 3.45-3.8, ~6e-3 above and 0.03-0.06 below log Teff 3.45 (measured at mid-cell points of this grid and of the
- * low-gravity one, 2026-12-03), a surface-pressure error far below what the grey approximation itself makes there
- * in the coolest stars. A node of
+ * low-gravity one, 2026-12-03); in those coolest atmospheres the grey approximation itself is the larger error
+ * (Chabrier &amp; Baraffe 1997, A&amp;A 327, 1039; from memory). A node of
  * {@link GreyAtmosphere} with the standard physics costs about 340-380 EOS and opacity calls where the atmosphere
  * stays below the OPAL tables and 650-900 where it enters them. Nodes where the wrapped boundary fails (for instance
  * hot, low-gravity atmospheres above the Eddington limit) are marked missing; queries outside the grid or in a cell
