@@ -208,7 +208,7 @@ public final class CompositionStep {
      * r = k Y_j Y_k / (1 + delta_jk) and the mass-fraction rates of {@link RateFactors#addJacobian} (the network's rate
      * form), without deuterium and 7Li.
      */
-    private static double[] atFixedScreening(RateFactors k, double[] x) {
+    private static void atFixedScreening(RateFactors k, double[] x, double[] out) {
         double y1 = x[0];
         double y3 = x[1] / 3.0;
         double y4 = x[2] / 4.0;
@@ -218,9 +218,12 @@ public final class CompositionStep {
         double r12 = k.c12() * y1 * (x[3] / 12.0);
         double r14 = k.n14() * y1 * (x[4] / 14.0);
         double r16 = k.o16() * y1 * (x[5] / 16.0);
-        return new double[] {-3.0 * r11 + 2.0 * r33 - r34 - 2.0 * (r12 + r14 + r16),
-            3.0 * (r11 - 2.0 * r33 - r34), 4.0 * (r33 + r34 + r14 + r16), 12.0 * (r14 - r12),
-            14.0 * (r12 - r14 + r16), -16.0 * r16};
+        out[0] = -3.0 * r11 + 2.0 * r33 - r34 - 2.0 * (r12 + r14 + r16);
+        out[1] = 3.0 * (r11 - 2.0 * r33 - r34);
+        out[2] = 4.0 * (r33 + r34 + r14 + r16);
+        out[3] = 12.0 * (r14 - r12);
+        out[4] = 14.0 * (r12 - r14 + r16);
+        out[5] = -16.0 * r16;
     }
 
     /** sum / mass, in place. */
@@ -265,6 +268,10 @@ public final class CompositionStep {
         final double[][] matrix = new double[N][N];
         final int[] pivots = new int[N];
         final double[] delta = new double[N];
+        /** Rates at fixed screening at the sub-step's start and at the iterate, and f0 shifted by their difference. */
+        final double[] fixedStart = new double[N];
+        final double[] fixedNow = new double[N];
+        final double[] shifted = new double[N];
     }
 
     private Composition advance(Rates rates, Linearisation linearisation, Composition start, double dt,
@@ -356,13 +363,15 @@ public final class CompositionStep {
         }
         double[] f = f0;
         if (factors != null) {
-            double[] r0 = atFixedScreening(factors, x0);
+            double[] r0 = work.fixedStart;
+            atFixedScreening(factors, x0, r0);
             boolean settled = false;
             for (int iteration = 0; iteration < NEWTON_BUDGET && !settled; iteration++) {
                 settled = correct(work, x, x0, f, h);
                 if (!settled) {
-                    double[] r = atFixedScreening(factors, x);
-                    f = new double[N];
+                    double[] r = work.fixedNow;
+                    atFixedScreening(factors, x, r);
+                    f = work.shifted;
                     for (int i = 0; i < N; i++) {
                         f[i] = f0[i] + (r[i] - r0[i]);
                     }

@@ -11,9 +11,9 @@ import org.convgrid.engine.structure.StellarModel;
  * layers the structure is close to an n = 1.5 polytrope (adiabatic almost everywhere, composition uniform) and needs
  * fewer points than the {@link MeshPlanner#DEFAULT_POINTS} of a star with a radiative core. The start model of the
  * pre-main sequence is built on {@link #POINTS}, and the evolver keeps the start model's mesh size while this holds
- * before the zero-age main sequence, moving to {@link RadiativeContractionMesh}'s (the conservative remesh of
- * {@link StepStart}) on the step after the first model with a radiative interior, or to its own planner on arrival at
- * the zero-age main sequence (a star that stays fully convective, below ~0.35 Msun, spends its main sequence on the
+ * before the zero-age main sequence, moving (the conservative remesh of {@link StepStart}) on the step after the
+ * first model with a radiative interior to {@link RadiativeContractionMesh}'s while nuclear burning supplies under its
+ * share of L, else straight to the evolver's own planner, as it does on arrival at the zero-age main sequence (a star that stays fully convective, below ~0.35 Msun, spends its main sequence on the
  * mesh a zero-age track has).
  *
  * <p>Why {@link #POINTS} = 250 (measured, 0.1/0.3/0.5/1/1.5/3 Msun, Z = 0.02, against the same tracks with 500

@@ -61,7 +61,8 @@ record StepStart(ModelState state, double[] density, double[] temperature, doubl
             rho[k] = Math.exp(moved.lnDensity(k));
             t[k] = Math.exp(moved.lnTemperature(k));
             // started from the point below, a few per cent away in rho and T: the same state to the equation of
-            // state's solve tolerance in one or two of its iterations instead of five to ten from a cold guess
+            // state's solve tolerance, in fewer of its iterations than from a cold guess (not counted; the step
+            // start of remeshed steps went from 2.2 to 1.6 % of the CPU before the ZAMS, JFR)
             s = s == null ? physics.eos().atDensity(rho[k], t[k], comp[k])
                     : physics.eos().atDensity(rho[k], t[k], comp[k], s);
             pressure[k] = s.pressure();
