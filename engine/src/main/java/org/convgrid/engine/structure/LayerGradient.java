@@ -20,8 +20,12 @@ public final class LayerGradient {
     /** C in nabla_rad = C kappa L P/(m T^4): 3/(16 pi a c G), cgs. */
     private static final double RADIATIVE_CONSTANT = 3.0 / (16.0 * Math.PI * Constants.A_RAD * Constants.C
             * Constants.G);
-    /** phi = 1 of ideal ions and electrons; with nabla_mu = 0 it does not enter. */
-    private static final double IDEAL_GAS_PHI = 1.0;
+    /**
+     * phi = (dln rho/dln mu) at fixed P and T in the Ledoux gradient: 1 for the ideal ions and electrons that carry
+     * mu (Kippenhahn, Weigert &amp; Weiss 2012, ch. 6); the structure equations' too. With nabla_mu = 0, as here, it
+     * does not enter.
+     */
+    static final double IDEAL_GAS_PHI = 1.0;
 
     private final PhysicsSet physics;
 

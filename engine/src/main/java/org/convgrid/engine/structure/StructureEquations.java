@@ -53,11 +53,6 @@ public final class StructureEquations implements DifferenceSystem {
      * (one-sided differences); elsewhere burning is too weak for it to matter.
      */
     static final double SLAVED_BURNING_THRESHOLD = 1.0e-4;
-    /**
-     * phi = (dln rho/dln mu) at fixed P and T in the Ledoux gradient: 1 for the ideal ions and electrons that carry
-     * mu (Kippenhahn, Weigert &amp; Weiss 2012, ch. 6).
-     */
-    private static final double IDEAL_GAS_PHI = 1.0;
     private static final double FOUR_PI = 4.0 * Math.PI;
 
     private final MassMesh mesh;
@@ -329,7 +324,7 @@ public final class StructureEquations implements DifferenceSystem {
         double t = s.temperature();
         double p = s.pressure();
         double rad = LayerGradient.radiative(kappa, lum, p, m, t);
-        double stability = LedouxGradient.stabilityGradient(physics.criterion(), s.nablaAd(), IDEAL_GAS_PHI,
+        double stability = LedouxGradient.stabilityGradient(physics.criterion(), s.nablaAd(), LayerGradient.IDEAL_GAS_PHI,
                 s.delta(), nablaMu[k]);
         ConvectiveGradient g = null;
         MixingLengthSolution slopes = null;
