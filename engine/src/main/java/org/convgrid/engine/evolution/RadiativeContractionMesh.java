@@ -21,8 +21,8 @@ import org.convgrid.engine.structure.StellarModel;
  * steps and 275 Newton iterations). Sizes 275-600 in this phase give ZAMS ages within 38.24-38.39 / 25.56-25.72 /
  * 11.04-11.11 / 3.474-3.482 Myr (1 / 1.5 / 2 / 3 Msun) and log Li/Li0 at 1 Gyr within -0.562 to -0.602, not
  * ordered by size (500: 38.24 / 25.72 / 11.08 / 3.481 Myr, -0.566): where the base of the envelope and the edge of
- * the core fall between points moves them that much at any of these sizes. Kept up to the zero-age main sequence instead, 350 points moved the 1.5 and 2 Msun ZAMS
- * ages by -0.6 and -0.7 % and 250 points by -1.4 and -1.3 %; 250 points up to L_nuc/L = 0.1 moved the 2 Msun ZAMS
+ * the core fall between points moves them that much at any of these sizes. Kept up to the zero-age main sequence
+ * instead, 350 points moved the 1.5 and 2 Msun ZAMS ages by -0.6 and -0.7 % and 250 points by -1.4 and -1.3 %; 250 points up to L_nuc/L = 0.1 moved the 2 Msun ZAMS
  * by -0.8 % and the 1 Msun lithium halving by +2.3 %, and so did 250 points until the radiative core holds 60 % of
  * the mass. Stateless.
  */

@@ -13,8 +13,8 @@ import org.convgrid.engine.structure.StellarProfile;
 
 /**
  * The previous model as a time step needs it, on the mesh the step will use: the state (starting guess), the
- * density, temperature and P of every point (for the network and for eps_grav; ln P, for nabla_mu, on demand), its specific internal energy
- * (for eps_grav) and which points are convective (for mixing). Either the converged model itself (P and u from the
+ * density, temperature and P of every point (for the network and for eps_grav; ln P, for nabla_mu, on demand), its
+ * specific internal energy (for eps_grav) and which points are convective (for mixing). Either the converged model itself (P and u from the
  * equation-of-state call of its last evaluation, so a step costs no call of its own), or the model moved onto a
  * new mesh: structure interpolated by {@link MeshPlanner}, composition remapped conservatively by
  * {@link MassRemap}, pressure and internal energy recomputed from the interpolated density and temperature,

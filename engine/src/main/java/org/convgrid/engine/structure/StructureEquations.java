@@ -324,8 +324,8 @@ public final class StructureEquations implements DifferenceSystem {
         double t = s.temperature();
         double p = s.pressure();
         double rad = LayerGradient.radiative(kappa, lum, p, m, t);
-        double stability = LedouxGradient.stabilityGradient(physics.criterion(), s.nablaAd(), LayerGradient.IDEAL_GAS_PHI,
-                s.delta(), nablaMu[k]);
+        double stability = LedouxGradient.stabilityGradient(physics.criterion(), s.nablaAd(),
+                LayerGradient.IDEAL_GAS_PHI, s.delta(), nablaMu[k]);
         ConvectiveGradient g = null;
         MixingLengthSolution slopes = null;
         double result = rad;
