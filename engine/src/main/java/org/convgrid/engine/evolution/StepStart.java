@@ -12,13 +12,13 @@ import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.structure.StellarProfile;
 
 /**
- * The previous model as a time step needs it, on the mesh the step will use: the state (starting guess), the
- * density, temperature and P of every point (for the network and for eps_grav; ln P, for nabla_mu, on demand), its
- * specific internal energy (for eps_grav) and which points are convective (for mixing). Either the converged model itself (P and u from the
- * equation-of-state call of its last evaluation, so a step costs no call of its own), or the model moved onto a
- * new mesh: structure interpolated by {@link MeshPlanner}, composition remapped conservatively by
- * {@link MassRemap}, pressure and internal energy recomputed from the interpolated density and temperature,
- * convective flags from the nearest old point.
+ * The previous model as a time step needs it, on the mesh the step will use: the state (starting guess), the density,
+ * temperature and P of every point (for the network and for eps_grav; ln P, for nabla_mu, on demand), its specific
+ * internal energy (for eps_grav) and which points are convective (for mixing). Either the converged model itself (P and
+ * u from the equation-of-state call of its last evaluation, so a step costs no call of its own), or the model moved
+ * onto a new mesh: structure interpolated by {@link MeshPlanner}, composition remapped conservatively by {@link
+ * MassRemap}, pressure and internal energy recomputed from the interpolated density and temperature, convective flags
+ * from the nearest old point.
  */
 record StepStart(ModelState state, double[] density, double[] temperature, double[] pressure,
                  double[] internalEnergy, boolean[] convective) {
