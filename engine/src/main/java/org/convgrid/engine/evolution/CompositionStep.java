@@ -179,51 +179,9 @@ public final class CompositionStep {
                 }
             };
             return new Linearised(scaled(mean, mass), analytic ? jacobian : null,
-                    analytic ? meanFactors(factors, weights, mass) : null);
+                    analytic ? RateFactors.weightedMean(factors, weights, mass) : null);
         };
         return advance(zone, linearisation, start, dt, densities[0], temperatures[0], captures);
-    }
-
-    /**
-     * The mass-weighted mean of the points' factors: the zone's rates at fixed screening are the rate products with
-     * these factors, since they are linear in the factors at one composition.
-     */
-    private static RateFactors meanFactors(RateFactors[] factors, double[] weights, double mass) {
-        double[] k = new double[RateFactors.SPECIES];
-        for (int p = 0; p < factors.length; p++) {
-            double w = weights[p] / mass;
-            RateFactors f = factors[p];
-            k[0] += w * f.pp();
-            k[1] += w * f.he3He3();
-            k[2] += w * f.he3He4();
-            k[3] += w * f.c12();
-            k[4] += w * f.n14();
-            k[5] += w * f.o16();
-        }
-        return new RateFactors(k[0], k[1], k[2], k[3], k[4], k[5]);
-    }
-
-    /**
-     * The six burning species' rates of the factors' reactions at x, at fixed screening: the products
-     * r = k Y_j Y_k / (1 + delta_jk) and the mass-fraction rates of {@link RateFactors#addJacobian} (the network's rate
-     * form), without deuterium and 7Li.
-     */
-    private static void atFixedScreening(RateFactors k, double[] x, double[] out) {
-        double y1 = x[0];
-        double y3 = x[1] / 3.0;
-        double y4 = x[2] / 4.0;
-        double r11 = 0.5 * k.pp() * y1 * y1;
-        double r33 = 0.5 * k.he3He3() * y3 * y3;
-        double r34 = k.he3He4() * y3 * y4;
-        double r12 = k.c12() * y1 * (x[3] / 12.0);
-        double r14 = k.n14() * y1 * (x[4] / 14.0);
-        double r16 = k.o16() * y1 * (x[5] / 16.0);
-        out[0] = -3.0 * r11 + 2.0 * r33 - r34 - 2.0 * (r12 + r14 + r16);
-        out[1] = 3.0 * (r11 - 2.0 * r33 - r34);
-        out[2] = 4.0 * (r33 + r34 + r14 + r16);
-        out[3] = 12.0 * (r14 - r12);
-        out[4] = 14.0 * (r12 - r14 + r16);
-        out[5] = -16.0 * r16;
     }
 
     /** sum / mass, in place. */
@@ -331,8 +289,9 @@ public final class CompositionStep {
     /**
      * One backward-Euler sub-step from x0 (where the rates are f0), or null when the iteration fails or the change
      * is too large. With the rate factors ({@code factors}, null without) the chord iteration first converges on
-     * the rates at fixed screening, f0 + r(x) - r(x0) with r the rate products ({@link #atFixedScreening}), which
-     * cost next to nothing beside a network evaluation at every point of a zone; the network's own rates then
+     * the rates at fixed screening, f0 + r(x) - r(x0) with r the rate products
+     * ({@link RateFactors#ratesAtFixedScreening}), which cost next to nothing beside a network evaluation at every
+     * point of a zone; the network's own rates then
      * correct the screening's small dependence on composition, to the same convergence test as without. Measured,
      * 1 Msun, Z = 0.02, birth to the zero-age main sequence (7432 sub-steps): network evaluations for the rates 16859
      * -> 12575 at single points and 25051 -> 18249 at the points of mixed zones; the results move within that
@@ -364,13 +323,13 @@ public final class CompositionStep {
         double[] f = f0;
         if (factors != null) {
             double[] r0 = work.fixedStart;
-            atFixedScreening(factors, x0, r0);
+            factors.ratesAtFixedScreening(x0, r0);
             boolean settled = false;
             for (int iteration = 0; iteration < NEWTON_BUDGET && !settled; iteration++) {
                 settled = correct(work, x, x0, f, h);
                 if (!settled) {
                     double[] r = work.fixedNow;
-                    atFixedScreening(factors, x, r);
+                    factors.ratesAtFixedScreening(x, r);
                     f = work.shifted;
                     for (int i = 0; i < N; i++) {
                         f[i] = f0[i] + (r[i] - r0[i]);

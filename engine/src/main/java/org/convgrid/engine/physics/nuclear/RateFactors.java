@@ -77,4 +77,52 @@ public record RateFactors(double pp, double he3He3, double he3He4, double c12, d
         out[4][5] += weight * 14.0 * r16d16;
         out[5][5] += weight * -16.0 * r16d16;
     }
+
+    /**
+     * The six mass-fraction rates dX_i/dt of these reactions at x, at fixed screening, into {@code out}: the products
+     * r = k Y_j Y_k / (1 + delta_jk) through the mass-fraction rates of {@link HydrogenBurningNetwork#burn} (the
+     * form {@link #addJacobian} differentiates), without deuterium and 7Li.
+     *
+     * @param x mass fractions, the first {@link #SPECIES} entries as in {@link #addJacobian}
+     * @param out the {@link #SPECIES} rates, s^-1 (overwritten)
+     */
+    public void ratesAtFixedScreening(double[] x, double[] out) {
+        double y1 = x[0];
+        double y3 = x[1] / 3.0;
+        double y4 = x[2] / 4.0;
+        double r11 = 0.5 * pp * y1 * y1;
+        double r33 = 0.5 * he3He3 * y3 * y3;
+        double r34 = he3He4 * y3 * y4;
+        double r12 = c12 * y1 * (x[3] / 12.0);
+        double r14 = n14 * y1 * (x[4] / 14.0);
+        double r16 = o16 * y1 * (x[5] / 16.0);
+        out[0] = -3.0 * r11 + 2.0 * r33 - r34 - 2.0 * (r12 + r14 + r16);
+        out[1] = 3.0 * (r11 - 2.0 * r33 - r34);
+        out[2] = 4.0 * (r33 + r34 + r14 + r16);
+        out[3] = 12.0 * (r14 - r12);
+        out[4] = 14.0 * (r12 - r14 + r16);
+        out[5] = -16.0 * r16;
+    }
+
+    /**
+     * The mass-weighted mean of several points' factors: a mixed zone's rates at fixed screening are the rate
+     * products with these factors, since the products are linear in the factors at one composition.
+     *
+     * @param weights each point's weight (its mass)
+     * @param mass the sum of the weights
+     */
+    public static RateFactors weightedMean(RateFactors[] factors, double[] weights, double mass) {
+        double[] k = new double[SPECIES];
+        for (int p = 0; p < factors.length; p++) {
+            double w = weights[p] / mass;
+            RateFactors f = factors[p];
+            k[0] += w * f.pp;
+            k[1] += w * f.he3He3;
+            k[2] += w * f.he3He4;
+            k[3] += w * f.c12;
+            k[4] += w * f.n14;
+            k[5] += w * f.o16;
+        }
+        return new RateFactors(k[0], k[1], k[2], k[3], k[4], k[5]);
+    }
 }
