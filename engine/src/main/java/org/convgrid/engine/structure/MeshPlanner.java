@@ -1,5 +1,7 @@
 package org.convgrid.engine.structure;
 
+import java.util.List;
+
 import org.convgrid.engine.state.Composition;
 
 /**
@@ -24,19 +26,21 @@ public final class MeshPlanner {
     /** Remesh when some interval costs more than this many times the even share. */
     public static final double UNEVENNESS_LIMIT = 2.5;
 
-    // the change across an interval that costs 1, per term (public for probes that break the cost down)
+    // the change across an interval that costs 1, per term
     /** |D ln P| per unit cost. */
-    public static final double STEP_LN_P = 0.05;
+    private static final double STEP_LN_P = 0.05;
     /** |D ln T| per unit cost. */
-    public static final double STEP_LN_T = 0.03;
+    private static final double STEP_LN_T = 0.03;
     /** |D ln r| per unit cost. */
-    public static final double STEP_LN_R = 0.08;
+    private static final double STEP_LN_R = 0.08;
     /** |D(m/M)| per unit cost. */
-    public static final double STEP_MASS = 0.01;
+    private static final double STEP_MASS = 0.01;
     /** |D ln(1 - m/M)| per unit cost (not charged on the outermost interval). */
-    public static final double STEP_LN_EXTERIOR = 1.0;
+    private static final double STEP_LN_EXTERIOR = 1.0;
     /** |D L| over the surface luminosity per unit cost. */
-    public static final double STEP_LUMINOSITY = 0.02;
+    private static final double STEP_LUMINOSITY = 0.02;
+    /** Names of the terms of {@link #costTerms}, in order. */
+    public static final List<String> COST_TERMS = List.of("lnP", "lnT", "lnr", "m/M", "ln(1-m/M)", "L", "boundary");
     /** Cost of an interval holding a convective boundary at {@link #DEFAULT_POINTS}; scaled as 1/(N - 1). */
     private static final double BOUNDARY_COST = 2.0;
     private static final double MINIMUM_COST = 1.0e-6;
@@ -154,19 +158,51 @@ public final class MeshPlanner {
         double lumScale = Math.abs(p.luminosity(n - 1));
         double[] cost = new double[n - 1];
         for (int k = 0; k < n - 1; k++) {
-            double c = Math.abs(Math.log(p.pressure(k + 1) / p.pressure(k))) / STEP_LN_P
-                    + Math.abs(Math.log(p.temperature(k + 1) / p.temperature(k))) / STEP_LN_T
-                    + Math.abs(Math.log(p.radius(k + 1) / p.radius(k))) / STEP_LN_R
-                    + Math.abs(mesh.fraction(k + 1) - mesh.fraction(k)) / STEP_MASS
-                    + Math.abs(p.luminosity(k + 1) - p.luminosity(k)) / lumScale / STEP_LUMINOSITY;
-            if (k < n - 2) {
-                c += Math.abs(Math.log(mesh.exteriorFraction(k) / mesh.exteriorFraction(k + 1))) / STEP_LN_EXTERIOR;
-            }
-            if (p.convective(k) != p.convective(k + 1)) {
-                c += boundaryCost;
-            }
-            cost[k] = c + MINIMUM_COST + (extraCost == null ? 0.0 : extraCost[k]);
+            cost[k] = intervalCost(p, mesh, k, lumScale, null) + MINIMUM_COST
+                    + (extraCost == null ? 0.0 : extraCost[k]);
         }
         return cost;
+    }
+
+    /**
+     * The structure's share of the cost of interval (k, k + 1) of {@code model}: its terms in {@link #COST_TERMS}
+     * order, for probes that break the cost down (the composition cost a caller adds is not among them).
+     */
+    public double[] costTerms(StellarModel model, int k) {
+        StellarProfile p = model.profile();
+        double[] terms = new double[COST_TERMS.size()];
+        intervalCost(p, model.state().mesh(), k, Math.abs(p.luminosity(p.size() - 1)), terms);
+        return terms;
+    }
+
+    /** The cost of interval (k, k + 1), each term also into {@code terms} when it is not null. */
+    private double intervalCost(StellarProfile p, MassMesh mesh, int k, double lumScale, double[] terms) {
+        int n = p.size();
+        double lnP = Math.abs(Math.log(p.pressure(k + 1) / p.pressure(k))) / STEP_LN_P;
+        double lnT = Math.abs(Math.log(p.temperature(k + 1) / p.temperature(k))) / STEP_LN_T;
+        double lnR = Math.abs(Math.log(p.radius(k + 1) / p.radius(k))) / STEP_LN_R;
+        double mass = Math.abs(mesh.fraction(k + 1) - mesh.fraction(k)) / STEP_MASS;
+        double lum = Math.abs(p.luminosity(k + 1) - p.luminosity(k)) / lumScale / STEP_LUMINOSITY;
+        double c = lnP + lnT + lnR + mass + lum;
+        double exterior = 0.0;
+        if (k < n - 2) {
+            exterior = Math.abs(Math.log(mesh.exteriorFraction(k) / mesh.exteriorFraction(k + 1))) / STEP_LN_EXTERIOR;
+            c += exterior;
+        }
+        double boundary = 0.0;
+        if (p.convective(k) != p.convective(k + 1)) {
+            boundary = boundaryCost;
+            c += boundary;
+        }
+        if (terms != null) {
+            terms[0] = lnP;
+            terms[1] = lnT;
+            terms[2] = lnR;
+            terms[3] = mass;
+            terms[4] = exterior;
+            terms[5] = lum;
+            terms[6] = boundary;
+        }
+        return c;
     }
 }

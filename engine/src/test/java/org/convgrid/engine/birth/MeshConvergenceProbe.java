@@ -242,7 +242,8 @@ class MeshConvergenceProbe {
         }
     }
 
-    private static final String[] TERMS = {"lnP", "lnT", "lnr", "m/M", "ln(1-m/M)", "L", "boundary", "X"};
+    private static final String[] TERMS = java.util.stream.Stream.concat(MeshPlanner.COST_TERMS.stream(),
+            java.util.stream.Stream.of("X")).toArray(String[]::new);
 
     /**
      * The index in {@link #TERMS} of the largest term of the model's costliest interval when that interval exceeds
@@ -271,25 +272,16 @@ class MeshConvergenceProbe {
     }
 
     /**
-     * The terms of the mesh cost of interval (k, k + 1), in the order of {@link #TERMS}: the planner's weights and
-     * boundary cost for the model's size ({@link MeshPlanner}) and the evolver's composition cost.
+     * The terms of the mesh cost of interval (k, k + 1), in the order of {@link #TERMS}: the planner's own terms for
+     * the model's size ({@link MeshPlanner#costTerms}) and the evolver's composition cost.
      */
     private static double[] costTerms(org.convgrid.engine.structure.StellarModel model, int k) {
         var p = model.profile();
         var mesh = model.state().mesh();
-        int size = p.size();
-        double lumScale = Math.abs(p.luminosity(size - 1));
-        double[] t = new double[TERMS.length];
-        t[0] = Math.abs(Math.log(p.pressure(k + 1) / p.pressure(k))) / MeshPlanner.STEP_LN_P;
-        t[1] = Math.abs(Math.log(p.temperature(k + 1) / p.temperature(k))) / MeshPlanner.STEP_LN_T;
-        t[2] = Math.abs(Math.log(p.radius(k + 1) / p.radius(k))) / MeshPlanner.STEP_LN_R;
-        t[3] = Math.abs(mesh.fraction(k + 1) - mesh.fraction(k)) / MeshPlanner.STEP_MASS;
-        t[4] = k < size - 2 ? Math.abs(Math.log(mesh.exteriorFraction(k) / mesh.exteriorFraction(k + 1)))
-                / MeshPlanner.STEP_LN_EXTERIOR : 0.0;
-        t[5] = Math.abs(p.luminosity(k + 1) - p.luminosity(k)) / lumScale / MeshPlanner.STEP_LUMINOSITY;
-        // the planner's own boundary cost for this size (it scales with the even share)
-        t[6] = p.convective(k) != p.convective(k + 1) ? new MeshPlanner(size).boundaryCost() : 0.0;
-        t[7] = Math.min(Math.abs(p.hydrogen(k + 1) - p.hydrogen(k)) / MainSequenceEvolver.COMPOSITION_MESH_STEP,
+        double[] structure = new MeshPlanner(p.size()).costTerms(model, k);
+        double[] t = Arrays.copyOf(structure, TERMS.length);
+        t[structure.length] = Math.min(Math.abs(p.hydrogen(k + 1) - p.hydrogen(k))
+                / MainSequenceEvolver.COMPOSITION_MESH_STEP,
                 (mesh.fraction(k + 1) - mesh.fraction(k)) / MainSequenceEvolver.COMPOSITION_MESH_RESOLUTION);
         return t;
     }
