@@ -191,7 +191,8 @@ class MeshConvergenceProbe {
             sb.append(String.format(" %.3f", t / total));
         }
         System.out.printf("n=%d age %.4g Gyr Xc %.4f q0 %.3e pts<0.1 %d pts<0.3 %d pts(1-q<1e-3) %d cost %.0f"
-                + " shares%s%n", n, age / Constants.GYR, p.hydrogen(0), mesh.fraction(0), below01, below03, outer, total, sb);
+                + " shares%s%n", n, age / Constants.GYR, p.hydrogen(0), mesh.fraction(0), below01, below03, outer,
+                total, sb);
     }
 
     /**
