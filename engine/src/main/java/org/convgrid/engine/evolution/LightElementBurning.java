@@ -43,18 +43,30 @@ final class LightElementBurning {
     static void burn(double[] x, double deuteriumRate, double lithiumRate, double dt) {
         double d = x[MassFractions.H2];
         if (d > 0.0 && deuteriumRate < 0.0) {
-            double burnt = d * -Math.expm1(deuteriumRate / d * dt);
-            x[MassFractions.H2] = d - burnt;
-            x[0] -= HYDROGEN_PER_DEUTERIUM * burnt;
-            x[1] += HELIUM3_PER_DEUTERIUM * burnt;
+            burnDeuterium(x, deuteriumRate / d * dt);
         }
         double li = x[MassFractions.LI7];
         if (li > 0.0 && lithiumRate < 0.0) {
-            double burnt = li * -Math.expm1(lithiumRate / li * dt);
-            x[MassFractions.LI7] = li - burnt;
-            x[0] -= HYDROGEN_PER_LITHIUM * burnt;
-            x[2] += HELIUM4_PER_LITHIUM * burnt;
+            burnLithium(x, lithiumRate / li * dt);
         }
+    }
+
+    /** Multiplies the deuterium of x by exp(exponent), 1H and 3He taking up the mass moved. */
+    private static void burnDeuterium(double[] x, double exponent) {
+        double d = x[MassFractions.H2];
+        double burnt = d * -Math.expm1(exponent);
+        x[MassFractions.H2] = d - burnt;
+        x[0] -= HYDROGEN_PER_DEUTERIUM * burnt;
+        x[1] += HELIUM3_PER_DEUTERIUM * burnt;
+    }
+
+    /** Multiplies the 7Li of x by exp(exponent), 1H and 4He taking up the mass moved. */
+    private static void burnLithium(double[] x, double exponent) {
+        double li = x[MassFractions.LI7];
+        double burnt = li * -Math.expm1(exponent);
+        x[MassFractions.LI7] = li - burnt;
+        x[0] -= HYDROGEN_PER_LITHIUM * burnt;
+        x[2] += HELIUM4_PER_LITHIUM * burnt;
     }
 
     /**
@@ -77,21 +89,13 @@ final class LightElementBurning {
                 continue;
             }
             double[] x = MassFractions.of(end[k]);
-            double d = x[MassFractions.H2];
-            if (d > 0.0) {
+            if (x[MassFractions.H2] > 0.0) {
                 double extra = 0.5 * (atStart.deuterium()[k] + atEnd.deuterium()[k]) - used.deuterium()[k];
-                double burnt = d * -Math.expm1(-extra * dt);
-                x[MassFractions.H2] = d - burnt;
-                x[0] -= HYDROGEN_PER_DEUTERIUM * burnt;
-                x[1] += HELIUM3_PER_DEUTERIUM * burnt;
+                burnDeuterium(x, -extra * dt);
             }
-            double li = x[MassFractions.LI7];
-            if (li > 0.0) {
+            if (x[MassFractions.LI7] > 0.0) {
                 double extra = 0.5 * (atStart.lithium()[k] + atEnd.lithium()[k]) - used.lithium()[k];
-                double burnt = li * -Math.expm1(-extra * dt);
-                x[MassFractions.LI7] = li - burnt;
-                x[0] -= HYDROGEN_PER_LITHIUM * burnt;
-                x[2] += HELIUM4_PER_LITHIUM * burnt;
+                burnLithium(x, -extra * dt);
             }
             out[k] = MassFractions.composition(x);
         }

@@ -42,13 +42,11 @@ record LightElementRates(double[] deuterium, double[] lithium) {
             double sumD = 0.0;
             double sumLi = 0.0;
             double mass = 0.0;
-            if (c.h2() > 0.0 || c.li7() > 0.0) {
-                for (int j = k; j <= end; j++) {
-                    LightElementCaptures r = network.lightElementCaptures(rho[j], t[j], c);
-                    sumD += w[j] * r.deuterium();
-                    sumLi += w[j] * r.lithium();
-                    mass += w[j];
-                }
+            for (int j = k; j <= end; j++) {
+                LightElementCaptures r = network.lightElementCaptures(rho[j], t[j], c);
+                sumD += w[j] * r.deuterium();
+                sumLi += w[j] * r.lithium();
+                mass += w[j];
             }
             double meanD = mass > 0.0 ? Math.max(0.0, sumD / mass) : 0.0;
             double meanLi = mass > 0.0 ? Math.max(0.0, sumLi / mass) : 0.0;

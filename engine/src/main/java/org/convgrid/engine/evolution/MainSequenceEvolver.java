@@ -420,20 +420,19 @@ public final class MainSequenceEvolver {
         boolean[] mixed = physics.overshoot().mixedPoints(mesh::mass, start.convective(), previous.profile());
         // the light elements' rates in the step's zones at the network's rho and T, before the burning, which takes
         // them from here instead of evaluating the network once more per point for them
-        LightElementRates used = LightElementRates.anyIn(start.state().compositions())
-                ? LightElementRates.of(physics.nuclear(), PointCells.masses(mesh), mixed, start.state().compositions(),
-                        rho, t) : null;
+        Composition[] startComp = start.state().compositions();
+        double[] cellMass = LightElementRates.anyIn(startComp) ? PointCells.masses(mesh) : null;
+        LightElementRates used = cellMass != null
+                ? LightElementRates.of(physics.nuclear(), cellMass, mixed, startComp, rho, t) : null;
         Composition[] comp = burn(burning, start.state(), mixed, rho, t, dt, used);
         LightElementTrapezoid light = null;
         if (used != null) {
-            double[] w = PointCells.masses(mesh);
-            Composition[] before = start.state().compositions();
             // the start-of-step rates at the start-of-step rho and T whenever the network's were extrapolated: with
             // the extrapolated rates in their place on redistributed steps the trapezoid leant towards the end of the
             // step and the envelope burnt too much lithium (1 Msun, Z = 0.02, log Li/Li0 at 1 Gyr -0.71 / -0.59 /
             // -0.58 with every step limit x1 / x0.5 / x0.25, against -0.566 / -0.565 / -0.576; YoungStepAccuracyProbe)
             light = new LightElementTrapezoid(used, trusted
-                    ? LightElementRates.of(physics.nuclear(), w, mixed, before, startRho, startT) : used, dt);
+                    ? LightElementRates.of(physics.nuclear(), cellMass, mixed, startComp, startRho, startT) : used, dt);
         }
         if (settling) {
             // settling is driven by the previous structure; the zones it reaches are mixed again at once

@@ -91,10 +91,10 @@ public final class StandardPhysics {
 
     /**
      * The table where it answers; the fallback outside it or in a cell with a missing node (which happens where
-     * the table's own integration failed at one node). The two agree to the table's interpolation error (~3e-4 in
-     * ln P). A direct integration costs about as much as the EOS of a whole model, so each Newton iteration of a
-     * surface outside every table pays twice (1 Msun start model, log g 2.0: 4.2 ms per iteration, 1.6 ms with
-     * the low-gravity table, measured).
+     * the table's own integration failed at one node). The two agree to the table's interpolation error (its
+     * figures in {@link AtmosphereTable}). A direct integration costs about as much as the EOS of a whole model, so
+     * each Newton iteration of a surface outside every table pays twice (1 Msun start model, log g 2.0: 4.2 ms per
+     * iteration, 1.6 ms with the low-gravity table, measured).
      */
     private record TableWithFallback(SurfaceBoundary table, SurfaceBoundary direct) implements SurfaceBoundary {
         @Override
