@@ -6,6 +6,7 @@ import static org.assertj.core.api.Assertions.within;
 import org.convgrid.engine.physics.nuclear.BurningAndFactors;
 import org.convgrid.engine.physics.nuclear.BurningRate;
 import org.convgrid.engine.physics.nuclear.HydrogenBurningNetwork;
+import org.convgrid.engine.physics.nuclear.InterfaceDefaultsNetwork;
 import org.convgrid.engine.physics.nuclear.NuclearNetwork;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.units.Constants;
@@ -20,17 +21,7 @@ class CompositionStepAnalyticJacobianTest {
 
     private static final HydrogenBurningNetwork NETWORK = new HydrogenBurningNetwork();
     /** The same rates with no rate factors, so the step differences them (the path before the analytic one). */
-    private static final NuclearNetwork DIFFERENCED = new NuclearNetwork() {
-        @Override
-        public BurningRate burn(double density, double temperature, Composition composition) {
-            return NETWORK.burn(density, temperature, composition);
-        }
-
-        @Override
-        public Composition equilibrium(double density, double temperature, Composition composition) {
-            return NETWORK.equilibrium(density, temperature, composition);
-        }
-    };
+    private static final NuclearNetwork DIFFERENCED = new InterfaceDefaultsNetwork(NETWORK);
     /** Protosolar start with its 3He, deuterium and 7Li (initial abundances of order the solar ones). */
     private static final Composition BIRTH = new Composition(0.70, 3.0e-5, 0.28, 0.0030, 0.0009, 0.0080,
             0.02 - 0.0030 - 0.0009 - 0.0080 - 3.0e-5 - 4.0e-5 - 1.0e-8, 4.0e-5, 1.0e-8);

@@ -100,17 +100,7 @@ class LightElementRatesTest {
     void theCapturesAloneAgreeWithTheDefaultTakenFromTheWholeNetwork() {
         // The override evaluates only the two captures; the interface's default divides burn's rates by the
         // abundances. Consistency, no published value: equal to rounding at the temperatures where each burns.
-        NuclearNetwork wholeNetwork = new NuclearNetwork() {
-            @Override
-            public BurningRate burn(double density, double temperature, Composition composition) {
-                return NETWORK.burn(density, temperature, composition);
-            }
-
-            @Override
-            public Composition equilibrium(double density, double temperature, Composition composition) {
-                return NETWORK.equilibrium(density, temperature, composition);
-            }
-        };
+        NuclearNetwork wholeNetwork = new InterfaceDefaultsNetwork(NETWORK);
         for (double[] p : new double[][] {{0.01, 8.0e5}, {0.1, 1.2e6}, {0.5, 2.5e6}, {2.0, 3.5e6}}) {
             LightElementCaptures alone = NETWORK.lightElementCaptures(p[0], p[1], BIRTH);
             LightElementCaptures whole = wholeNetwork.lightElementCaptures(p[0], p[1], BIRTH);
