@@ -30,14 +30,18 @@ import org.openjdk.jmh.annotations.Warmup;
  * model, pre-main sequence, main sequence) and from the zero-age model of the same mass and composition (built in
  * the benchmark too, as a grid line does), default physics and steps. The ratio of the two is the price of ages
  * counted from birth. Run both in one sitting, pinned to one core for the one-core figures:
- * {@code taskset -c 0 java -jar benchmarks.jar BirthTrackBenchmark}.
+ * {@code taskset -c 0 java -jar benchmarks.jar BirthTrackBenchmark}. Ten warm-up tracks: pinned to one core the
+ * JIT compiles on the same core, and the birth track (more code: start model, light elements, remeshing) was still
+ * getting faster after three (2026-12-03, -f 3 -wi 3: measured tracks 1022-1447 ms, still falling within a fork;
+ * -f 2 -wi 10: 998-1235 ms);
+ * two forks, since a fork's compiled code can be faster or slower by ~10 % for its whole life.
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.SingleShotTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
-@Warmup(iterations = 2)
-@Measurement(iterations = 5)
-@Fork(1)
+@Warmup(iterations = 10)
+@Measurement(iterations = 8)
+@Fork(2)
 public class BirthTrackBenchmark {
 
     private static final double Z = 0.02;
