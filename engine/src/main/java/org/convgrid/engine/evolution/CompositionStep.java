@@ -53,9 +53,11 @@ public final class CompositionStep {
      */
     private static final double SUBSTEP_GROWTH = 2.0;
     /**
-     * Largest shrink of the sub-step from one estimate: the explicit change that sizes the first sub-step
-     * overstates the backward-Euler change of a species far from its equilibrium (3He, 12C), and a few doublings
-     * recover a sub-step shrunk too far by ten, where the bare estimate could cost hundreds of sub-steps.
+     * Largest shrink of the sub-step from one estimate, a guard: the explicit change that sizes the first sub-step
+     * overstates the backward-Euler change of a species relaxing fast towards its equilibrium (3He, 12C), and a
+     * few doublings recover a sub-step shrunk too far by ten, where the bare estimate could shrink it without
+     * bound. Measured, 1 Msun birth track before the zero-age main sequence, shrinks of at most 4 / 10 / 100: 30 /
+     * 10 / 0 sub-steps rejected, network evaluations within 3 % of each other.
      */
     private static final double SUBSTEP_SHRINK = 0.1;
     /** Below this largest explicit change over the whole step, one explicit Euler step is exact enough. */
