@@ -61,6 +61,34 @@ class CompositionStepTest {
     }
 
     @Test
+    void stepOfSeveralChangeLimitsIsSplitWithoutRejectedSubsteps() {
+        // synthetic network burning hydrogen to helium at a constant rate c: backward Euler is exact for it, and a
+        // step changing X by 2.5 MAX_SUBSTEP_CHANGE needs three sub-steps; sized from the explicit change, none is
+        // tried and rejected (halving from the whole step would try dt, dt/2, dt/4, ...)
+        double c = 1.0e-16;
+        int[] calls = {0};
+        NuclearNetwork constant = new NuclearNetwork() {
+            @Override
+            public BurningRate burn(double density, double temperature, Composition composition) {
+                calls[0]++;
+                return new BurningRate(0, 0, 0, 0, 0, -c, 0, c, 0, 0, 0);
+            }
+
+            @Override
+            public Composition equilibrium(double density, double temperature, Composition composition) {
+                return composition;
+            }
+        };
+        double dt = 2.5 * CompositionStep.MAX_SUBSTEP_CHANGE / c;
+        Composition after = new CompositionStep(constant).advance(1.0, 1.0e7, PROTOSOLAR, dt);
+        assertThat(after.h1()).isCloseTo(PROTOSOLAR.h1() - c * dt, within(1e-12));
+        // per sub-step: its start's rates (but the first's), 6 differences for the Jacobian, the rates at the
+        // first iterate; before them the light elements' rates and the start's rates with the Jacobian
+        int perSubstep = 1 + MassFractions.BURNING + 1;
+        assertThat(calls[0]).isLessThanOrEqualTo(2 + 3 * perSubstep);
+    }
+
+    @Test
     void exhaustionNeverGoesNegativeAndConservesMass() {
         // a hot CNO-burning point run for three times the hydrogen lifetime X0 E_H/eps
         double rho = 10.0;
