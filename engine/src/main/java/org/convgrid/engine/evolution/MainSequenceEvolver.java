@@ -473,8 +473,8 @@ public final class MainSequenceEvolver {
                 boolean curved = oldest != null && oldest.state().mesh() == older.state().mesh()
                         && oldestStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * oldestStep;
                 return stepped(lightElementsEnd(solver.relax(extrapolated(guess, older.state(), gOlder,
-                        curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings), light),
-                        kept);
+                        curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings,
+                        start.eos()), light), kept);
             } catch (SolveFailedException e) {
                 // an extrapolation that overshoots (e.g. across a change of the convective zones) is no worse
                 // than no extrapolation: fall back to the previous model as the guess
@@ -489,13 +489,13 @@ public final class MainSequenceEvolver {
                 double[][] now = young ? CarriedUnknowns.onto(previous.state(), mesh, true) : carriedNow;
                 double[][] before = young ? CarriedUnknowns.onto(older.state(), mesh, true) : carriedBefore;
                 return stepped(lightElementsEnd(solver.relax(carried(guess, now, before, gOlder,
-                        curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings), light),
-                        kept);
+                        curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings,
+                        start.eos()), light), kept);
             } catch (SolveFailedException e) {
                 // as above: fall back to the previous model as the guess
             }
         }
-        return stepped(lightElementsEnd(solver.relax(guess, grav, nablaMu, solveSettings), light), kept);
+        return stepped(lightElementsEnd(solver.relax(guess, grav, nablaMu, solveSettings, start.eos()), light), kept);
     }
 
     /**
