@@ -570,16 +570,18 @@ public final class MainSequenceEvolver {
         double[] w = PointCells.masses(state.mesh());
         Composition[] start = state.compositions();
         Composition[] comp = new Composition[n];
+        // one {d, 7Li} pair refilled for every point or zone (the network reads it at once and keeps no reference)
+        double[] captures = light == null ? null : new double[2];
         int k = 0;
         while (k < n) {
             int end = ConvectiveMixing.runEnd(mixed, k);
             if (end == k) {
-                comp[k] = network.advance(rho[k], t[k], start[k], dt, captures(light, k));
+                comp[k] = network.advance(rho[k], t[k], start[k], dt, captures(light, k, captures));
             } else {
                 Composition mean = ConvectiveMixing.mean(w, start, k, end);
                 Composition burnt = network.advanceMixed(Arrays.copyOfRange(rho, k, end + 1),
                         Arrays.copyOfRange(t, k, end + 1), Arrays.copyOfRange(w, k, end + 1), mean, dt,
-                        captures(light, k));
+                        captures(light, k, captures));
                 Arrays.fill(comp, k, end + 1, burnt);
             }
             k = end + 1;
@@ -589,10 +591,16 @@ public final class MainSequenceEvolver {
 
     /**
      * The deuterium and 7Li destruction rates per unit abundance at point k (its zone's, the same as the network
-     * gives there for the zone's composition), for {@link CompositionStep}; null when the star holds neither.
+     * gives there for the zone's composition), for {@link CompositionStep}, written into {@code pair}; null when
+     * the star holds neither.
      */
-    private static double[] captures(LightElementRates light, int k) {
-        return light == null ? null : new double[] {light.deuterium()[k], light.lithium()[k]};
+    private static double[] captures(LightElementRates light, int k, double[] pair) {
+        if (light == null) {
+            return null;
+        }
+        pair[0] = light.deuterium()[k];
+        pair[1] = light.lithium()[k];
+        return pair;
     }
 
     /**
