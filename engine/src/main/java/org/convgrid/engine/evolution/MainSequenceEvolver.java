@@ -242,6 +242,7 @@ public final class MainSequenceEvolver {
         StellarModel earlier = null;
         double earlierStep = 0.0;
         double[] gravRates = null;
+        LightElementRates lightRates = null;
         for (int accepted = 0; end == null; ) {
             double xc = current.global().centralHydrogen();
             if (xc < settings.endCentralHydrogen()) {
@@ -266,11 +267,13 @@ public final class MainSequenceEvolver {
             }
             StellarModel trial;
             double[] trialGravRates;
+            LightElementRates trialLightRates;
             try {
-                Stepped stepped = advance(current, age, before, previousStep, earlier, earlierStep, gravRates, h,
-                        young);
+                Stepped stepped = advance(current, age, before, previousStep, earlier, earlierStep, gravRates,
+                        lightRates, h, young);
                 trial = stepped.model();
                 trialGravRates = stepped.gravRates();
+                trialLightRates = stepped.lightRates();
             } catch (ConvgridException e) {
                 if (e instanceof SolveFailedException f) {
                     spent += f.report().iterations();
@@ -309,6 +312,7 @@ public final class MainSequenceEvolver {
             previousStep = h;
             current = trial;
             gravRates = trialGravRates;
+            lightRates = trialLightRates;
             steps.add(summary(current, age, h, current.report().iterations() + spent));
             observer.accepted(age, h, current);
             boolean arrived = young && NuclearLuminosity.onMainSequence(current);
@@ -352,12 +356,15 @@ public final class MainSequenceEvolver {
      * @param oldestStep the step from {@code oldest} to {@code older}, s
      * @param olderGravRates the one-step eps_grav of the step from {@code older} to {@code previous} at the points
      *                       of {@code previous}, erg g^-1 s^-1, or null
+     * @param previousLightRates the light-element rates of {@code previous} at its own points, density,
+     *                           temperature and zones, as its step's end computed them ({@link #lightElementsEnd}),
+     *                           or null
      * @param young before the zero-age main sequence: the composition update is trace-limited and the starting
      *              guess extrapolates in ln of the age ({@link #guessClock})
      */
     private Stepped advance(StellarModel previous, double age, StellarModel older, double olderStep,
-                            StellarModel oldest, double oldestStep, double[] olderGravRates, double dt,
-                            boolean young) {
+                            StellarModel oldest, double oldestStep, double[] olderGravRates,
+                            LightElementRates previousLightRates, double dt, boolean young) {
         CompositionStep burning = young ? youngNetwork : network;
         double[] cost = compositionCost(previous);
         MeshPlanner stepPlanner = plannerFor(previous, young);
@@ -431,8 +438,12 @@ public final class MainSequenceEvolver {
             // the extrapolated rates in their place on redistributed steps the trapezoid leant towards the end of the
             // step and the envelope burnt too much lithium (1 Msun, Z = 0.02, log Li/Li0 at 1 Gyr -0.71 / -0.59 /
             // -0.58 with every step limit x1 / x0.5 / x0.25, against -0.566 / -0.565 / -0.576; YoungStepAccuracyProbe)
-            light = new LightElementTrapezoid(used, trusted
-                    ? LightElementRates.of(physics.nuclear(), cellMass, mixed, startComp, startRho, startT) : used, dt);
+            // On the previous model's own mesh they are the rates its step's end took for its correction (the same
+            // points, zones, rho and T; the composition before that correction, which moved only the traces whose
+            // rates are per unit abundance): 1 Msun birth track ... 
+            LightElementRates atStart = !trusted ? used : !remesh && previousLightRates != null ? previousLightRates
+                    : LightElementRates.of(physics.nuclear(), cellMass, mixed, startComp, startRho, startT);
+            light = new LightElementTrapezoid(used, atStart, dt);
         }
         if (settling) {
             // settling is driven by the previous structure; the zones it reaches are mixed again at once
@@ -510,9 +521,9 @@ public final class MainSequenceEvolver {
      * end-of-step rates, each model with its own mixed zones ({@link LightElementBurning#corrected}); unchanged when
      * the star holds neither ({@code light} null). The structure is not solved again: both are traces.
      */
-    private StellarModel lightElementsEnd(StellarModel end, LightElementTrapezoid light) {
+    private EndOfStep lightElementsEnd(StellarModel end, LightElementTrapezoid light) {
         if (light == null) {
-            return end;
+            return new EndOfStep(end, null);
         }
         StepStart at = StepStart.of(end);
         MassMesh mesh = end.state().mesh();
@@ -522,8 +533,15 @@ public final class MainSequenceEvolver {
                 at.density(), at.temperature());
         Composition[] corrected = LightElementBurning.corrected(comp, light.used(), light.atStart(), atEnd,
                 light.dt());
-        return new StellarModel(end.state().withCompositions(corrected), end.profile(), end.global(),
-                end.convection(), end.report());
+        return new EndOfStep(new StellarModel(end.state().withCompositions(corrected), end.profile(), end.global(),
+                end.convection(), end.report()), atEnd);
+    }
+
+    /**
+     * A step's converged model, its light elements corrected, with the end-of-step light-element rates that
+     * correction took (null when the star holds neither), which the next step takes as its start-of-step rates.
+     */
+    private record EndOfStep(StellarModel model, LightElementRates lightRates) {
     }
 
     /**
@@ -549,13 +567,15 @@ public final class MainSequenceEvolver {
 
     /**
      * A step's model with the one-step eps_grav of the step at its points, for the two-step form of the next step
-     * (null after the zero-age main sequence, where the one-step form holds).
+     * (null after the zero-age main sequence, where the one-step form holds), and its end-of-step light-element
+     * rates ({@link EndOfStep}).
      */
-    private record Stepped(StellarModel model, double[] gravRates) {
+    private record Stepped(StellarModel model, double[] gravRates, LightElementRates lightRates) {
     }
 
-    private static Stepped stepped(StellarModel model, GravothermalEnergy oneStep) {
-        return new Stepped(model, oneStep == null ? null : oneStep.oneStepRates(model.profile()));
+    private static Stepped stepped(EndOfStep end, GravothermalEnergy oneStep) {
+        StellarModel model = end.model();
+        return new Stepped(model, oneStep == null ? null : oneStep.oneStepRates(model.profile()), end.lightRates());
     }
 
     /**
