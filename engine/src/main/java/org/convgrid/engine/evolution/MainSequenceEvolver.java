@@ -394,6 +394,9 @@ public final class MainSequenceEvolver {
         // sequence, the starting guess)
         double[][] carriedNow = null;
         double[][] carriedBefore = null;
+        // before the ZAMS the guess takes them with the outermost interval filled (see CarriedUnknowns.onto)
+        double[][] filledNow = null;
+        double[][] filledBefore = null;
         if (sameMesh) {
             double w = 0.5 * dt / olderStep;
             StellarProfile p = older.profile();
@@ -416,8 +419,17 @@ public final class MainSequenceEvolver {
             // trapezoid of start- and end-of-step rates (lightElementsEnd) this no longer moves the envelope's
             // lithium off its time-step limit (1 Msun log Li/Li0 at 1 Gyr -0.566 / -0.565 / -0.576 at those limits)
             double w = 0.5 * dt / olderStep;
-            carriedNow = CarriedUnknowns.onto(previous.state(), start.state().mesh(), false);
-            carriedBefore = CarriedUnknowns.onto(older.state(), start.state().mesh(), false);
+            if (young) {
+                CarriedUnknowns.BothWays now = CarriedUnknowns.bothWays(previous.state(), start.state().mesh());
+                CarriedUnknowns.BothWays before = CarriedUnknowns.bothWays(older.state(), start.state().mesh());
+                carriedNow = now.clamped();
+                carriedBefore = before.clamped();
+                filledNow = now.filled();
+                filledBefore = before.filled();
+            } else {
+                carriedNow = CarriedUnknowns.onto(previous.state(), start.state().mesh(), false);
+                carriedBefore = CarriedUnknowns.onto(older.state(), start.state().mesh(), false);
+            }
             for (int k = 0; k < n; k++) {
                 rho[k] *= Math.exp(w * (carriedNow[1][k] - carriedBefore[1][k]));
                 t[k] *= Math.exp(w * (carriedNow[2][k] - carriedBefore[2][k]));
@@ -496,9 +508,8 @@ public final class MainSequenceEvolver {
             // without this the two steps after each remesh start from a copy and take 5-6 iterations instead of 3-4
             try {
                 boolean curved = oldest != null && oldestStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * oldestStep;
-                // before the ZAMS carried again with the outermost interval filled (see CarriedUnknowns.onto)
-                double[][] now = young ? CarriedUnknowns.onto(previous.state(), mesh, true) : carriedNow;
-                double[][] before = young ? CarriedUnknowns.onto(older.state(), mesh, true) : carriedBefore;
+                double[][] now = young ? filledNow : carriedNow;
+                double[][] before = young ? filledBefore : carriedBefore;
                 return stepped(lightElementsEnd(solver.relax(carried(guess, now, before, gOlder,
                         curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings,
                         start.eos()), light), kept);
