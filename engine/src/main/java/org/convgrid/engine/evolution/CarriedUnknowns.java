@@ -54,6 +54,50 @@ final class CarriedUnknowns {
     }
 
     /**
+     * The unknowns carried both ways at once, {@link #onto(ModelState, MassMesh, boolean)} without and with the
+     * outermost interval filled, for a pre-main-sequence step that needs the one for its network's rho and T and
+     * the other for its starting guess: each line is built and evaluated once, and the two differ only at the points
+     * beyond the last interior point of {@code state} (bit for bit the values of the two calls).
+     */
+    static BothWays bothWays(ModelState state, MassMesh target) {
+        double[][] values = {state.lnRadii(), state.lnDensities(), state.lnTemperatures(), state.luminosities()};
+        MassMesh mesh = state.mesh();
+        if (mesh == target) {
+            return new BothWays(values, values);
+        }
+        int n = mesh.size();
+        double[] x = interiorLogits(mesh);
+        int m = target.size();
+        double[][] clamped = new double[values.length][m];
+        double[][] filled = new double[values.length][m];
+        for (int v = 0; v < values.length; v++) {
+            PolynomialSplineFunction line = interiorLine(mesh, x, values[v]);
+            clamped[v][0] = values[v][0];
+            clamped[v][m - 1] = values[v][n - 1];
+            filled[v][0] = values[v][0];
+            filled[v][m - 1] = values[v][n - 1];
+            for (int k = 1; k < m - 1; k++) {
+                double inside = line.value(Math.min(Math.max(target.logit(k), x[0]), x[x.length - 1]));
+                clamped[v][k] = inside;
+                if (target.logit(k) > x[x.length - 1]) {
+                    double w = outerWeight(state, target.exteriorFraction(k));
+                    filled[v][k] = (1.0 - w) * values[v][n - 2] + w * values[v][n - 1];
+                } else {
+                    filled[v][k] = inside;
+                }
+            }
+        }
+        return new BothWays(clamped, filled);
+    }
+
+    /**
+     * @param clamped as {@link #onto(ModelState, MassMesh, boolean)} without the outermost interval filled
+     * @param filled as it with the interval filled
+     */
+    record BothWays(double[][] clamped, double[][] filled) {
+    }
+
+    /**
      * One value per point of {@code mesh} carried onto the points of {@code target} the same way as the unknowns
      * (linearly in ln(m/(M - m)), centre onto centre, surface onto surface).
      */

@@ -263,8 +263,7 @@ public final class CompositionStep {
         double[] x = MassFractions.of(start);
         if (captures != null) {
             // the same rates as the network's at x, given per unit abundance
-            LightElementBurning.burn(x, -captures[0] * x[MassFractions.H2], -captures[1] * x[MassFractions.LI7],
-                    dt);
+            LightElementBurning.burnPerUnitAbundance(x, captures[0], captures[1], dt);
         } else if (x[MassFractions.H2] > 0.0 || x[MassFractions.LI7] > 0.0) {
             double[] light = rates.at(x);
             LightElementBurning.burn(x, light[N], light[N + 1], dt);

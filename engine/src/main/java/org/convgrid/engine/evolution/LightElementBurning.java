@@ -51,6 +51,24 @@ final class LightElementBurning {
         }
     }
 
+    /**
+     * {@link #burn} with the destruction rates given per unit abundance, lambda_i = -(dX_i/dt)/X_i (as {@link
+     * LightElementRates} holds them): the exponent is -lambda_i dt itself, not lambda_i X_i dt divided by X_i again,
+     * so the exact step stays exact to the last bit.
+     *
+     * @param deuteriumLambda lambda_D, s^-1 (not negative)
+     * @param lithiumLambda lambda_Li, s^-1 (not negative)
+     * @param dt step, s
+     */
+    static void burnPerUnitAbundance(double[] x, double deuteriumLambda, double lithiumLambda, double dt) {
+        if (x[MassFractions.H2] > 0.0 && deuteriumLambda > 0.0) {
+            burnDeuterium(x, -deuteriumLambda * dt);
+        }
+        if (x[MassFractions.LI7] > 0.0 && lithiumLambda > 0.0) {
+            burnLithium(x, -lithiumLambda * dt);
+        }
+    }
+
     /** Multiplies the deuterium of x by exp(exponent), 1H and 3He taking up the mass moved. */
     private static void burnDeuterium(double[] x, double exponent) {
         double d = x[MassFractions.H2];

@@ -242,6 +242,7 @@ public final class MainSequenceEvolver {
         StellarModel earlier = null;
         double earlierStep = 0.0;
         double[] gravRates = null;
+        LightElementRates lightRates = null;
         for (int accepted = 0; end == null; ) {
             double xc = current.global().centralHydrogen();
             if (xc < settings.endCentralHydrogen()) {
@@ -266,11 +267,13 @@ public final class MainSequenceEvolver {
             }
             StellarModel trial;
             double[] trialGravRates;
+            LightElementRates trialLightRates;
             try {
-                Stepped stepped = advance(current, age, before, previousStep, earlier, earlierStep, gravRates, h,
-                        young);
+                Stepped stepped = advance(current, age, before, previousStep, earlier, earlierStep, gravRates,
+                        lightRates, h, young);
                 trial = stepped.model();
                 trialGravRates = stepped.gravRates();
+                trialLightRates = stepped.lightRates();
             } catch (ConvgridException e) {
                 if (e instanceof SolveFailedException f) {
                     spent += f.report().iterations();
@@ -309,6 +312,7 @@ public final class MainSequenceEvolver {
             previousStep = h;
             current = trial;
             gravRates = trialGravRates;
+            lightRates = trialLightRates;
             steps.add(summary(current, age, h, current.report().iterations() + spent));
             observer.accepted(age, h, current);
             boolean arrived = young && NuclearLuminosity.onMainSequence(current);
@@ -352,12 +356,15 @@ public final class MainSequenceEvolver {
      * @param oldestStep the step from {@code oldest} to {@code older}, s
      * @param olderGravRates the one-step eps_grav of the step from {@code older} to {@code previous} at the points
      *                       of {@code previous}, erg g^-1 s^-1, or null
+     * @param previousLightRates the light-element rates of {@code previous} at its own points, density,
+     *                           temperature and zones, as its step's end computed them ({@link #lightElementsEnd}),
+     *                           or null
      * @param young before the zero-age main sequence: the composition update is trace-limited and the starting
      *              guess extrapolates in ln of the age ({@link #guessClock})
      */
     private Stepped advance(StellarModel previous, double age, StellarModel older, double olderStep,
-                            StellarModel oldest, double oldestStep, double[] olderGravRates, double dt,
-                            boolean young) {
+                            StellarModel oldest, double oldestStep, double[] olderGravRates,
+                            LightElementRates previousLightRates, double dt, boolean young) {
         CompositionStep burning = young ? youngNetwork : network;
         double[] cost = compositionCost(previous);
         MeshPlanner stepPlanner = plannerFor(previous, young);
@@ -387,6 +394,9 @@ public final class MainSequenceEvolver {
         // sequence, the starting guess)
         double[][] carriedNow = null;
         double[][] carriedBefore = null;
+        // before the ZAMS the guess takes them with the outermost interval filled (see CarriedUnknowns.onto)
+        double[][] filledNow = null;
+        double[][] filledBefore = null;
         if (sameMesh) {
             double w = 0.5 * dt / olderStep;
             StellarProfile p = older.profile();
@@ -409,8 +419,17 @@ public final class MainSequenceEvolver {
             // trapezoid of start- and end-of-step rates (lightElementsEnd) this no longer moves the envelope's
             // lithium off its time-step limit (1 Msun log Li/Li0 at 1 Gyr -0.566 / -0.565 / -0.576 at those limits)
             double w = 0.5 * dt / olderStep;
-            carriedNow = CarriedUnknowns.onto(previous.state(), start.state().mesh(), false);
-            carriedBefore = CarriedUnknowns.onto(older.state(), start.state().mesh(), false);
+            if (young) {
+                CarriedUnknowns.BothWays now = CarriedUnknowns.bothWays(previous.state(), start.state().mesh());
+                CarriedUnknowns.BothWays before = CarriedUnknowns.bothWays(older.state(), start.state().mesh());
+                carriedNow = now.clamped();
+                carriedBefore = before.clamped();
+                filledNow = now.filled();
+                filledBefore = before.filled();
+            } else {
+                carriedNow = CarriedUnknowns.onto(previous.state(), start.state().mesh(), false);
+                carriedBefore = CarriedUnknowns.onto(older.state(), start.state().mesh(), false);
+            }
             for (int k = 0; k < n; k++) {
                 rho[k] *= Math.exp(w * (carriedNow[1][k] - carriedBefore[1][k]));
                 t[k] *= Math.exp(w * (carriedNow[2][k] - carriedBefore[2][k]));
@@ -431,8 +450,12 @@ public final class MainSequenceEvolver {
             // the extrapolated rates in their place on redistributed steps the trapezoid leant towards the end of the
             // step and the envelope burnt too much lithium (1 Msun, Z = 0.02, log Li/Li0 at 1 Gyr -0.71 / -0.59 /
             // -0.58 with every step limit x1 / x0.5 / x0.25, against -0.566 / -0.565 / -0.576; YoungStepAccuracyProbe)
-            light = new LightElementTrapezoid(used, trusted
-                    ? LightElementRates.of(physics.nuclear(), cellMass, mixed, startComp, startRho, startT) : used, dt);
+            // On the previous model's own mesh they are the rates its step's end took for its correction (the same
+            // points, zones, rho and T; the composition before that correction, which moved only the traces whose
+            // rates are per unit abundance): 1 Msun birth track ... 
+            LightElementRates atStart = !trusted ? used : !remesh && previousLightRates != null ? previousLightRates
+                    : LightElementRates.of(physics.nuclear(), cellMass, mixed, startComp, startRho, startT);
+            light = new LightElementTrapezoid(used, atStart, dt);
         }
         if (settling) {
             // settling is driven by the previous structure; the zones it reaches are mixed again at once
@@ -473,8 +496,8 @@ public final class MainSequenceEvolver {
                 boolean curved = oldest != null && oldest.state().mesh() == older.state().mesh()
                         && oldestStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * oldestStep;
                 return stepped(lightElementsEnd(solver.relax(extrapolated(guess, older.state(), gOlder,
-                        curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings), light),
-                        kept);
+                        curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings,
+                        start.eos()), light), kept);
             } catch (SolveFailedException e) {
                 // an extrapolation that overshoots (e.g. across a change of the convective zones) is no worse
                 // than no extrapolation: fall back to the previous model as the guess
@@ -485,17 +508,16 @@ public final class MainSequenceEvolver {
             // without this the two steps after each remesh start from a copy and take 5-6 iterations instead of 3-4
             try {
                 boolean curved = oldest != null && oldestStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * oldestStep;
-                // before the ZAMS carried again with the outermost interval filled (see CarriedUnknowns.onto)
-                double[][] now = young ? CarriedUnknowns.onto(previous.state(), mesh, true) : carriedNow;
-                double[][] before = young ? CarriedUnknowns.onto(older.state(), mesh, true) : carriedBefore;
+                double[][] now = young ? filledNow : carriedNow;
+                double[][] before = young ? filledBefore : carriedBefore;
                 return stepped(lightElementsEnd(solver.relax(carried(guess, now, before, gOlder,
-                        curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings), light),
-                        kept);
+                        curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings,
+                        start.eos()), light), kept);
             } catch (SolveFailedException e) {
                 // as above: fall back to the previous model as the guess
             }
         }
-        return stepped(lightElementsEnd(solver.relax(guess, grav, nablaMu, solveSettings), light), kept);
+        return stepped(lightElementsEnd(solver.relax(guess, grav, nablaMu, solveSettings, start.eos()), light), kept);
     }
 
     /**
@@ -510,9 +532,9 @@ public final class MainSequenceEvolver {
      * end-of-step rates, each model with its own mixed zones ({@link LightElementBurning#corrected}); unchanged when
      * the star holds neither ({@code light} null). The structure is not solved again: both are traces.
      */
-    private StellarModel lightElementsEnd(StellarModel end, LightElementTrapezoid light) {
+    private EndOfStep lightElementsEnd(StellarModel end, LightElementTrapezoid light) {
         if (light == null) {
-            return end;
+            return new EndOfStep(end, null);
         }
         StepStart at = StepStart.of(end);
         MassMesh mesh = end.state().mesh();
@@ -522,8 +544,15 @@ public final class MainSequenceEvolver {
                 at.density(), at.temperature());
         Composition[] corrected = LightElementBurning.corrected(comp, light.used(), light.atStart(), atEnd,
                 light.dt());
-        return new StellarModel(end.state().withCompositions(corrected), end.profile(), end.global(),
-                end.convection(), end.report());
+        return new EndOfStep(new StellarModel(end.state().withCompositions(corrected), end.profile(), end.global(),
+                end.convection(), end.report()), atEnd);
+    }
+
+    /**
+     * A step's converged model, its light elements corrected, with the end-of-step light-element rates that
+     * correction took (null when the star holds neither), which the next step takes as its start-of-step rates.
+     */
+    private record EndOfStep(StellarModel model, LightElementRates lightRates) {
     }
 
     /**
@@ -549,13 +578,15 @@ public final class MainSequenceEvolver {
 
     /**
      * A step's model with the one-step eps_grav of the step at its points, for the two-step form of the next step
-     * (null after the zero-age main sequence, where the one-step form holds).
+     * (null after the zero-age main sequence, where the one-step form holds), and its end-of-step light-element
+     * rates ({@link EndOfStep}).
      */
-    private record Stepped(StellarModel model, double[] gravRates) {
+    private record Stepped(StellarModel model, double[] gravRates, LightElementRates lightRates) {
     }
 
-    private static Stepped stepped(StellarModel model, GravothermalEnergy oneStep) {
-        return new Stepped(model, oneStep == null ? null : oneStep.oneStepRates(model.profile()));
+    private static Stepped stepped(EndOfStep end, GravothermalEnergy oneStep) {
+        StellarModel model = end.model();
+        return new Stepped(model, oneStep == null ? null : oneStep.oneStepRates(model.profile()), end.lightRates());
     }
 
     /**
@@ -570,16 +601,18 @@ public final class MainSequenceEvolver {
         double[] w = PointCells.masses(state.mesh());
         Composition[] start = state.compositions();
         Composition[] comp = new Composition[n];
+        // one {d, 7Li} pair refilled for every point or zone (the network reads it at once and keeps no reference)
+        double[] captures = light == null ? null : new double[2];
         int k = 0;
         while (k < n) {
             int end = ConvectiveMixing.runEnd(mixed, k);
             if (end == k) {
-                comp[k] = network.advance(rho[k], t[k], start[k], dt, captures(light, k));
+                comp[k] = network.advance(rho[k], t[k], start[k], dt, captures(light, k, captures));
             } else {
                 Composition mean = ConvectiveMixing.mean(w, start, k, end);
                 Composition burnt = network.advanceMixed(Arrays.copyOfRange(rho, k, end + 1),
                         Arrays.copyOfRange(t, k, end + 1), Arrays.copyOfRange(w, k, end + 1), mean, dt,
-                        captures(light, k));
+                        captures(light, k, captures));
                 Arrays.fill(comp, k, end + 1, burnt);
             }
             k = end + 1;
@@ -589,10 +622,16 @@ public final class MainSequenceEvolver {
 
     /**
      * The deuterium and 7Li destruction rates per unit abundance at point k (its zone's, the same as the network
-     * gives there for the zone's composition), for {@link CompositionStep}; null when the star holds neither.
+     * gives there for the zone's composition), for {@link CompositionStep}, written into {@code pair}; null when
+     * the star holds neither.
      */
-    private static double[] captures(LightElementRates light, int k) {
-        return light == null ? null : new double[] {light.deuterium()[k], light.lithium()[k]};
+    private static double[] captures(LightElementRates light, int k, double[] pair) {
+        if (light == null) {
+            return null;
+        }
+        pair[0] = light.deuterium()[k];
+        pair[1] = light.lithium()[k];
+        return pair;
     }
 
     /**

@@ -18,10 +18,11 @@ import org.convgrid.engine.structure.StellarProfile;
  * u from the equation-of-state call of its last evaluation, so a step costs no call of its own), or the model moved
  * onto a new mesh: structure interpolated by {@link MeshPlanner}, composition remapped conservatively by {@link
  * MassRemap}, pressure and internal energy recomputed from the interpolated density and temperature, convective flags
- * from the nearest old point.
+ * from the nearest old point. With them, the equation of state's whole answer at every point (the model's own, or the
+ * recomputed one), from which the step's structure solve starts its first equation-of-state solves.
  */
 record StepStart(ModelState state, double[] density, double[] temperature, double[] pressure,
-                 double[] internalEnergy, boolean[] convective) {
+                 double[] internalEnergy, boolean[] convective, EosState[] eos) {
 
     /** The model on its own mesh. */
     static StepStart of(StellarModel model) {
@@ -32,14 +33,16 @@ record StepStart(ModelState state, double[] density, double[] temperature, doubl
         double[] pressure = new double[n];
         double[] u = new double[n];
         boolean[] conv = new boolean[n];
+        EosState[] eos = new EosState[n];
         for (int k = 0; k < n; k++) {
             rho[k] = p.density(k);
             t[k] = p.temperature(k);
             pressure[k] = p.pressure(k);
             u[k] = p.internalEnergy(k);
             conv[k] = p.convective(k);
+            eos[k] = p.eosState(k);
         }
-        return new StepStart(model.state(), rho, t, pressure, u, conv);
+        return new StepStart(model.state(), rho, t, pressure, u, conv, eos);
     }
 
     /** The model moved onto the mesh {@code planner} chooses with the given extra interval costs. */
@@ -54,6 +57,7 @@ record StepStart(ModelState state, double[] density, double[] temperature, doubl
         double[] pressure = new double[n];
         double[] u = new double[n];
         boolean[] conv = new boolean[n];
+        EosState[] eos = new EosState[n];
         double[] oldMass = model.profile().masses();
         MassMesh mesh = moved.mesh();
         EosState s = null;
@@ -67,9 +71,10 @@ record StepStart(ModelState state, double[] density, double[] temperature, doubl
                     : physics.eos().atDensity(rho[k], t[k], comp[k], s);
             pressure[k] = s.pressure();
             u[k] = s.internalEnergy();
+            eos[k] = s;
             conv[k] = model.profile().convective(nearest(oldMass, mesh.mass(k)));
         }
-        return new StepStart(moved, rho, t, pressure, u, conv);
+        return new StepStart(moved, rho, t, pressure, u, conv, eos);
     }
 
     /** ln P at every point (only the Ledoux criterion's nabla_mu needs it, so it is not kept). */

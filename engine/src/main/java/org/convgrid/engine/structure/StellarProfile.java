@@ -27,6 +27,8 @@ public final class StellarProfile implements OvershootProfile {
     private final double[] scaleHeight;
     private final double[] hydrogen;
     private final double[] internalEnergy;
+    /** The equation of state's answer at each point, from the solver's last evaluation (it gave P and u). */
+    private final EosState[] eos;
 
     StellarProfile(StructureEquations eq, double[] y) {
         int n = eq.points();
@@ -48,6 +50,7 @@ public final class StellarProfile implements OvershootProfile {
         scaleHeight = new double[n];
         hydrogen = new double[n];
         internalEnergy = new double[n];
+        eos = new EosState[n];
         ModelState state = eq.state(y);
         for (int k = 0; k < n; k++) {
             EosState s = eq.eosAt(k);
@@ -69,6 +72,7 @@ public final class StellarProfile implements OvershootProfile {
             scaleHeight[k] = s.pressure() * radius[k] * radius[k] / (s.density() * Constants.G * mass[k]);
             hydrogen[k] = state.composition(k).x();
             internalEnergy[k] = s.internalEnergy();
+            eos[k] = s;
         }
     }
 
@@ -104,6 +108,15 @@ public final class StellarProfile implements OvershootProfile {
     /** Specific internal energy (ionisation energy included), erg g^-1, of the equation-of-state call that gave P. */
     public double internalEnergy(int k) {
         return internalEnergy[k];
+    }
+
+    /**
+     * The equation of state's whole answer at point k (the call that gave P and u): a nearby state from which a
+     * later solve at this point starts its own iteration ({@link StructureSolver#relax(ModelState, ExtraEnergy,
+     * double[], HenyeySolver.Settings, EosState[])}).
+     */
+    public EosState eosState(int k) {
+        return eos[k];
     }
 
     /** L, erg s^-1. */

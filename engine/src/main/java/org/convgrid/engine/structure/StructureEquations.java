@@ -132,6 +132,21 @@ public final class StructureEquations implements DifferenceSystem {
         this.dNabla = new double[4 * n];
     }
 
+    /**
+     * Starts the first evaluation's equation-of-state solve at every point from {@code nearby[k]} (e.g. the
+     * previous model's state there) instead of from the fully ionised guess, as later evaluations start from the
+     * one before; null entries (or a null array) leave the cold start.
+     */
+    void startEquationOfStateNear(EosState[] nearby) {
+        if (nearby == null) {
+            return;
+        }
+        if (nearby.length != n) {
+            throw new IllegalArgumentException("nearby states for " + nearby.length + " points, expected " + n);
+        }
+        System.arraycopy(nearby, 0, eos, 0, n);
+    }
+
     /** The unknown vector of a model state, L scaled by this system's L_scale. */
     public double[] unknowns(ModelState state) {
         double[] y = new double[4 * n];

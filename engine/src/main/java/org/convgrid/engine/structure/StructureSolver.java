@@ -1,6 +1,7 @@
 package org.convgrid.engine.structure;
 
 import org.convgrid.engine.physics.PhysicsSet;
+import org.convgrid.engine.physics.eos.EosState;
 
 /**
  * Solves the structure equations for one composition profile by Henyey relaxation, starting from a guess on a
@@ -62,6 +63,26 @@ public final class StructureSolver {
     }
 
     /**
+     * As {@link #relax(ModelState, ExtraEnergy, double[], HenyeySolver.Settings)}, the first evaluation's
+     * equation-of-state solve at each point started from {@code nearbyEos[k]} (one state per point of the guess's
+     * mesh, e.g. the previous model's; null for a cold start). An evolution step's guess lies within a few per cent
+     * of the previous model, whose degeneracy starts the neutrality solve one or two Newton steps from its root
+     * instead of five to ten from the fully ionised guess. The converged model is the same to the solver's
+     * tolerance, not bit for bit: the equation of state stops within its own tolerance of the root, at a point that
+     * depends on where it started.
+     *
+     * @throws SolveFailedException with the report when the relaxation does not converge
+     */
+    public StellarModel relax(ModelState guess, ExtraEnergy extra, double[] nablaMu,
+                              HenyeySolver.Settings solveSettings, EosState[] nearbyEos) {
+        double scale = Math.abs(guess.surfaceLuminosity());
+        StructureEquations eq = new StructureEquations(guess.mesh(), guess.compositions(), physics, scale,
+                nablaMu, extra, 1.0, null);
+        eq.startEquationOfStateNear(nearbyEos);
+        return solved(eq, guess, solveSettings);
+    }
+
+    /**
      * Relaxes with the nuclear energy generation multiplied by {@code burningFactor} (a cold-start homotopy
      * parameter; see {@link StructureEquations}); the result is a physical model only when it is one.
      *
@@ -84,6 +105,10 @@ public final class StructureSolver {
         double scale = Math.abs(guess.surfaceLuminosity());
         StructureEquations eq = new StructureEquations(guess.mesh(), guess.compositions(), physics, scale,
                 nablaMu, extra, burningFactor, compositionRule);
+        return solved(eq, guess, solveSettings);
+    }
+
+    private StellarModel solved(StructureEquations eq, ModelState guess, HenyeySolver.Settings solveSettings) {
         HenyeySolver.Result result = henyey.solve(eq, eq.unknowns(guess), solveSettings);
         if (!result.report().converged()) {
             throw new SolveFailedException("structure relaxation failed", result.report());

@@ -45,12 +45,29 @@ class LightElementBurningTest {
     }
 
     @Test
+    void stepPerUnitAbundanceIsTheExactDecayToTheBit() {
+        // dX_i/dt = -lambda_i X_i at constant lambda_i: X_i(dt) = X_i e^(-lambda_i dt) (Clayton 1968, ch. 5); with
+        // lambda_D dt = 0.5 and lambda_Li dt = 3 exact in binary, the step is that value with no rounding of its own
+        double[] x = MassFractions.of(BirthAbundances.of(0.70, 0.02));
+        double d = x[MassFractions.H2];
+        double li = x[MassFractions.LI7];
+        LightElementBurning.burnPerUnitAbundance(x, 0.25, 1.5, 2.0);
+        assertThat(x[MassFractions.H2]).isEqualTo(d - d * -Math.expm1(-0.5));
+        assertThat(x[MassFractions.LI7]).isEqualTo(li - li * -Math.expm1(-3.0));
+        // no rate, nothing burnt
+        double[] same = MassFractions.of(BirthAbundances.of(0.70, 0.02));
+        double[] before = same.clone();
+        LightElementBurning.burnPerUnitAbundance(same, 0.0, 0.0, 1.0e15);
+        assertThat(same).isEqualTo(before);
+    }
+
+    @Test
     void trapezoidCorrectionMovesMassWithTheMassNumbers() {
         Composition birth = BirthAbundances.of(0.70, 0.02);
         double dt = 1.0e13;
         double[] x = MassFractions.of(birth);
         // burnt first with the start rates (2e-14 and 1e-13 s^-1), then corrected to the mean with the end rates
-        LightElementBurning.burn(x, -2.0e-14 * x[MassFractions.H2], -1.0e-13 * x[MassFractions.LI7], dt);
+        LightElementBurning.burnPerUnitAbundance(x, 2.0e-14, 1.0e-13, dt);
         LightElementRates start = new LightElementRates(new double[] {2.0e-14}, new double[] {1.0e-13});
         LightElementRates end = new LightElementRates(new double[] {6.0e-14}, new double[] {3.0e-13});
         Composition after = LightElementBurning.corrected(new Composition[] {MassFractions.composition(x)}, start,
@@ -91,8 +108,8 @@ class LightElementBurningTest {
             for (int i = 0; i < steps; i++) {
                 double a = lambda0 * Math.exp(i * dt / tau);
                 double b = lambda0 * Math.exp((i + 1) * dt / tau);
-                LightElementBurning.burn(plain, 0.0, -a * plain[MassFractions.LI7], dt);
-                LightElementBurning.burn(x, 0.0, -a * x[MassFractions.LI7], dt);
+                LightElementBurning.burnPerUnitAbundance(plain, 0.0, a, dt);
+                LightElementBurning.burnPerUnitAbundance(x, 0.0, a, dt);
                 LightElementRates atStart = new LightElementRates(new double[] {0.0}, new double[] {a});
                 LightElementRates atEnd = new LightElementRates(new double[] {0.0}, new double[] {b});
                 x = MassFractions.of(LightElementBurning.corrected(new Composition[] {MassFractions.composition(x)},
