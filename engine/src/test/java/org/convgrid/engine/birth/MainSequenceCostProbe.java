@@ -24,7 +24,8 @@ import org.junit.jupiter.api.condition.EnabledIfSystemProperty;
  * repeats, steps and Newton iterations. With {@code -Dprobe.jfr=DIR} each of the two loops is recorded in its own
  * flight recording (DIR/birth-ms.jfr, DIR/zero-age.jfr; execution samples every 1 ms) for a profile of the
  * difference; {@code -Dprobe.census=true} prints how many points hold deuterium and 7Li at every step and the Newton
- * iterations per step; {@code -Dprobe.bare=true} also evolves the birth track's model with its deuterium and 7Li
+ * iterations per step; {@code -Dprobe.warmups=N} runs both loops N times unrecorded first (the JIT compiles
+ * for a dozen runs: without it the first loop's profile holds the compilation); {@code -Dprobe.bare=true} also evolves the birth track's model with its deuterium and 7Li
  * removed (birth-ms-bare), which tells their cost from that of the 3He and CN out of equilibrium. Run with
  * -Dconvgrid.benchmark=true, under taskset -c 0 for a one-core figure. Found with it (2026-12-03): the birth track's
  * main sequence takes 366 Newton iterations against the zero-age track's 342 with or without its deuterium and 7Li
@@ -76,6 +77,12 @@ class MainSequenceCostProbe {
             StellarModel bareModel = new StellarModel(arrived.state().withCompositions(comp), arrived.profile(),
                     arrived.global(), arrived.convection(), arrived.report());
             loop("birth-ms-bare", evolver, bareModel, repeats, jfr);
+        }
+        int warmups = Integer.parseInt(System.getProperty("probe.warmups", "0"));
+        for (int w = 0; w < warmups; w++) {
+            // both loops once, unrecorded, so that neither profile holds the JIT's compilation of the other's code
+            loop("warm-up birth-ms", evolver, arrived, 1, null);
+            loop("warm-up zero-age", evolver, zeroAge, 1, null);
         }
         double birthMs = loop("birth-ms", evolver, arrived, repeats, jfr);
         double zeroMs = loop("zero-age", evolver, zeroAge, repeats, jfr);
