@@ -111,6 +111,13 @@ public final class MainSequenceEvolver {
      * second order too (mid-step density and temperature, on remeshed steps as well; see {@code advance}).
      */
     public static final double YOUNG_TWO_STEP_RATIO = 2.0;
+    /**
+     * Change of ln of the central 12C in one main-sequence step's composition update above which the starting
+     * guess takes its nuclear luminosity from the step's composition ({@link #withStepsNuclearLuminosity}). On a
+     * zero-age track the central 12C moves by ~1 % per step (1 Msun); on arrival from the pre-main sequence by
+     * 25-100 %; 0.1 separates them.
+     */
+    public static final double TRANSIENT_CARBON_CHANGE = 0.1;
     /** Newton budget of one step's structure relaxation (a failure halves the step). */
     public static final int RELAXATION_BUDGET = 30;
 
@@ -474,9 +481,14 @@ public final class MainSequenceEvolver {
                 // the curvature from a third model under the same trust rule as the slope
                 boolean curved = oldest != null && oldest.state().mesh() == older.state().mesh()
                         && oldestStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * oldestStep;
-                return stepped(lightElementsEnd(solver.relax(extrapolated(guess, older.state(), gOlder,
-                        curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings), light),
-                        kept);
+                ModelState extrapolatedGuess = extrapolated(guess, older.state(), gOlder,
+                        curved ? oldest.state() : null, gOldest, gDt, young);
+                if (!young && burningTransient(startComp[0], comp[0])) {
+                    extrapolatedGuess = withStepsNuclearLuminosity(extrapolatedGuess, previous, older,
+                            curved ? oldest : null, gOlder, gOldest, gDt);
+                }
+                return stepped(lightElementsEnd(solver.relax(extrapolatedGuess, grav, nablaMu, solveSettings),
+                        light), kept);
             } catch (SolveFailedException e) {
                 // an extrapolation that overshoots (e.g. across a change of the convective zones) is no worse
                 // than no extrapolation: fall back to the previous model as the guess
@@ -697,6 +709,77 @@ public final class MainSequenceEvolver {
         addExtrapolatedChange(now, now, before, first, olderStep, oldestStep, dt,
                 isotherms ? previous.mesh() : null);
         return new ModelState(previous.mesh(), previous.compositions(), now[0], now[1], now[2], now[3]);
+    }
+
+    /**
+     * Whether the step's composition update changed the central 12C by more than {@link #TRANSIENT_CARBON_CHANGE}
+     * in ln: the CN cycle still burning the 12C the pre-main sequence left towards its equilibrium.
+     */
+    private static boolean burningTransient(Composition before, Composition after) {
+        return before.c12() > 0.0 && after.c12() > 0.0
+                && Math.abs(Math.log(after.c12() / before.c12())) > TRANSIENT_CARBON_CHANGE;
+    }
+
+    /**
+     * The guess with its luminosity's nuclear part taken from this step's composition instead of extrapolated:
+     * L = extrapolated (L - L_nuc) + L_nuc of the guess's rho and T with the step's composition, L_nuc(m) the
+     * integral of eps_nuc to m by the structure's own trapezoid. Why: on arrival from the pre-main sequence the
+     * central 12C is out of CN equilibrium (3e-3 against 8e-6, 1 Msun) and falls by a factor 1.4-3 per step for
+     * a dozen steps; the energy it releases follows it, which no polynomial in time through the last models does,
+     * so the first Newton correction of the core's L was 3-9 % (1e-3 on the zero-age track) and each of those
+     * steps took 4 iterations instead of 3. Measured, 1 Msun, Z = 0.02 from birth: the first correction of the
+     * 5th-10th main-sequence steps 6-9e-2 -> 2e-3-1e-2, 4 -> 3 iterations each (main sequence 360 -> 354; 500
+     * network calls in each of the ~10 steps it runs, a fifth of one Newton iteration's work); the 1st-4th and
+     * 11th-12th keep 4 (their first correction lies elsewhere: envelope density, surface L, the 12C off the
+     * centre). Tried and not kept: the test on the 12C of every point instead of the centre holds at every step of
+     * both tracks (the core's edge burns its 12C all along): birth 360 -> 352, the zero-age track 345 -> 346, at
+     * 500 network calls a step. A guess the network cannot evaluate is left as it was. All models share the
+     * guess's mesh.
+     */
+    private ModelState withStepsNuclearLuminosity(ModelState guess, StellarModel previous, StellarModel older,
+                                                  StellarModel oldest, double olderStep, double oldestStep,
+                                                  double dt) {
+        MassMesh mesh = guess.mesh();
+        int n = guess.size();
+        double[] eps = new double[n];
+        try {
+            for (int k = 0; k < n; k++) {
+                eps[k] = physics.nuclear().burn(Math.exp(guess.lnDensity(k)), Math.exp(guess.lnTemperature(k)),
+                        guess.composition(k)).eps();
+            }
+        } catch (ConvgridException e) {
+            return guess;
+        }
+        double[][] extrapolatedNuclear = {nuclearLuminosity(mesh, previous.profile())};
+        addExtrapolatedChange(extrapolatedNuclear, extrapolatedNuclear,
+                new double[][] {nuclearLuminosity(mesh, older.profile())},
+                oldest == null ? null : new double[][] {nuclearLuminosity(mesh, oldest.profile())}, olderStep,
+                oldestStep, dt, null);
+        double[] now = nuclearLuminosity(mesh, eps);
+        double[] lum = guess.luminosities();
+        for (int k = 0; k < n; k++) {
+            lum[k] += now[k] - extrapolatedNuclear[0][k];
+        }
+        return new ModelState(mesh, guess.compositions(), guess.lnRadii(), guess.lnDensities(),
+                guess.lnTemperatures(), lum);
+    }
+
+    private static double[] nuclearLuminosity(MassMesh mesh, StellarProfile profile) {
+        double[] eps = new double[profile.size()];
+        for (int k = 0; k < eps.length; k++) {
+            eps[k] = profile.eps(k);
+        }
+        return nuclearLuminosity(mesh, eps);
+    }
+
+    /** The integral of eps to each point, as the structure's luminosity equation sums it. */
+    private static double[] nuclearLuminosity(MassMesh mesh, double[] eps) {
+        double[] out = new double[eps.length];
+        out[0] = eps[0] * mesh.mass(0);
+        for (int k = 0; k < eps.length - 1; k++) {
+            out[k + 1] = out[k] + 0.5 * (eps[k] + eps[k + 1]) * mesh.intervalMass(k);
+        }
+        return out;
     }
 
     /**
