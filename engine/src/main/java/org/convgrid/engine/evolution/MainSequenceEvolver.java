@@ -111,6 +111,13 @@ public final class MainSequenceEvolver {
      * second order too (mid-step density and temperature, on remeshed steps as well; see {@code advance}).
      */
     public static final double YOUNG_TWO_STEP_RATIO = 2.0;
+    /**
+     * Change of ln of the central 12C in one main-sequence step's composition update above which the starting
+     * guess takes its nuclear luminosity from the step's composition ({@link #withStepsNuclearLuminosity}). On a
+     * zero-age track the central 12C moves by ~1 % per step (1 Msun); on arrival from the pre-main sequence by
+     * 25-100 %; 0.1 separates them.
+     */
+    public static final double TRANSIENT_CARBON_CHANGE = 0.1;
     /** Newton budget of one step's structure relaxation (a failure halves the step). */
     public static final int RELAXATION_BUDGET = 30;
 
@@ -242,6 +249,7 @@ public final class MainSequenceEvolver {
         StellarModel earlier = null;
         double earlierStep = 0.0;
         double[] gravRates = null;
+        // the light elements' rates of the current model, kept from the step that made it (see advance)
         LightElementRates lightRates = null;
         for (int accepted = 0; end == null; ) {
             double xc = current.global().centralHydrogen();
@@ -356,15 +364,14 @@ public final class MainSequenceEvolver {
      * @param oldestStep the step from {@code oldest} to {@code older}, s
      * @param olderGravRates the one-step eps_grav of the step from {@code older} to {@code previous} at the points
      *                       of {@code previous}, erg g^-1 s^-1, or null
-     * @param previousLightRates the light-element rates of {@code previous} at its own points, density,
-     *                           temperature and zones, as its step's end computed them ({@link #lightElementsEnd}),
-     *                           or null
+     * @param previousLight the deuterium and 7Li rates of {@code previous} as the step that made it took them at
+     *                      its end ({@link #lightElementsEnd}), or null
      * @param young before the zero-age main sequence: the composition update is trace-limited and the starting
      *              guess extrapolates in ln of the age ({@link #guessClock})
      */
     private Stepped advance(StellarModel previous, double age, StellarModel older, double olderStep,
                             StellarModel oldest, double oldestStep, double[] olderGravRates,
-                            LightElementRates previousLightRates, double dt, boolean young) {
+                            LightElementRates previousLight, double dt, boolean young) {
         CompositionStep burning = young ? youngNetwork : network;
         double[] cost = compositionCost(previous);
         MeshPlanner stepPlanner = plannerFor(previous, young);
@@ -437,26 +444,19 @@ public final class MainSequenceEvolver {
         }
         MassMesh mesh = start.state().mesh();
         boolean[] mixed = physics.overshoot().mixedPoints(mesh::mass, start.convective(), previous.profile());
-        // the light elements' rates in the step's zones at the network's rho and T, before the burning, which takes
-        // them from here instead of evaluating the network once more per point for them
+        // the light elements' rates in the step's zones (youngLightRates, startOfStepLightRates), before the
+        // burning, which takes them from here instead of evaluating the network once more per point for them
         Composition[] startComp = start.state().compositions();
         double[] cellMass = LightElementRates.anyIn(startComp) ? PointCells.masses(mesh) : null;
-        LightElementRates used = cellMass != null
-                ? LightElementRates.of(physics.nuclear(), cellMass, mixed, startComp, rho, t) : null;
-        Composition[] comp = burn(burning, start.state(), mixed, rho, t, dt, used);
         LightElementTrapezoid light = null;
-        if (used != null) {
-            // the start-of-step rates at the start-of-step rho and T whenever the network's were extrapolated: with
-            // the extrapolated rates in their place on redistributed steps the trapezoid leant towards the end of the
-            // step and the envelope burnt too much lithium (1 Msun, Z = 0.02, log Li/Li0 at 1 Gyr -0.71 / -0.59 /
-            // -0.58 with every step limit x1 / x0.5 / x0.25, against -0.566 / -0.565 / -0.576; YoungStepAccuracyProbe)
-            // On the previous model's own mesh they are the rates its step's end took for its correction (the same
-            // points, zones, rho and T; the composition before that correction, which moved only the traces whose
-            // rates are per unit abundance): 1 Msun birth track ... 
-            LightElementRates atStart = !trusted ? used : !remesh && previousLightRates != null ? previousLightRates
-                    : LightElementRates.of(physics.nuclear(), cellMass, mixed, startComp, startRho, startT);
-            light = new LightElementTrapezoid(used, atStart, dt);
+        if (cellMass != null) {
+            light = young
+                    ? youngLightRates(previousLight, remesh, cellMass, mixed, startComp, rho, t, startRho, startT,
+                            trusted, dt)
+                    : new LightElementTrapezoid(startOfStepLightRates(previousLight, remesh, cellMass, mixed,
+                            startComp, startRho, startT), dt);
         }
+        Composition[] comp = burn(burning, start.state(), mixed, rho, t, dt, light == null ? null : light.used());
         if (settling) {
             // settling is driven by the previous structure; the zones it reaches are mixed again at once
             comp = ConvectiveMixing.mix(mesh, SettlingStep.apply(previous, mesh, remesh, comp, mixed, dt), mixed);
@@ -495,8 +495,13 @@ public final class MainSequenceEvolver {
                 // the curvature from a third model under the same trust rule as the slope
                 boolean curved = oldest != null && oldest.state().mesh() == older.state().mesh()
                         && oldestStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * oldestStep;
-                return stepped(lightElementsEnd(solver.relax(extrapolated(guess, older.state(), gOlder,
-                        curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings,
+                ModelState extrapolatedGuess = extrapolated(guess, older.state(), gOlder,
+                        curved ? oldest.state() : null, gOldest, gDt, young);
+                if (!young && burningTransient(startComp[0], comp[0])) {
+                    extrapolatedGuess = withStepsNuclearLuminosity(extrapolatedGuess, previous, older,
+                            curved ? oldest : null, gOlder, gOldest, gDt);
+                }
+                return stepped(lightElementsEnd(solver.relax(extrapolatedGuess, grav, nablaMu, solveSettings,
                         start.eos()), light), kept);
             } catch (SolveFailedException e) {
                 // an extrapolation that overshoots (e.g. across a change of the convective zones) is no worse
@@ -521,10 +526,59 @@ public final class MainSequenceEvolver {
     }
 
     /**
-     * The light-element rates a step applied ({@code used}: at the network's mid-step density and temperature in
-     * the start-of-step zones) and those of the start-of-step model itself, for {@link #lightElementsEnd}.
+     * The light-element rates a step applied ({@code used}: before the ZAMS at the network's mid-step density and
+     * temperature in the start-of-step zones, on the main sequence the start-of-step rates) and those of the
+     * start-of-step model itself, for {@link #lightElementsEnd}.
      */
     private record LightElementTrapezoid(LightElementRates used, LightElementRates atStart, double dt) {
+
+        /** A step whose network burnt the light elements at the start-of-step rates themselves. */
+        LightElementTrapezoid(LightElementRates atStart, double dt) {
+            this(atStart, atStart, dt);
+        }
+    }
+
+    /**
+     * Before the zero-age main sequence: the network burns deuterium and 7Li at the rates of its own mid-step
+     * density and temperature ({@code rho}, {@code t}), and the trapezoid starts from the start-of-step rates at the
+     * start-of-step rho and T whenever the network's were extrapolated: with the extrapolated rates in their place
+     * on redistributed steps the trapezoid leant towards the end of the step and the envelope burnt too much
+     * lithium (1 Msun, Z = 0.02, log Li/Li0 at 1 Gyr -0.71 / -0.59 / -0.58 with every step limit x1 / x0.5 / x0.25,
+     * against -0.566 / -0.565 / -0.576; YoungStepAccuracyProbe). The start-of-step rates are the previous step's
+     * end-of-step ones when the mesh is kept ({@link #startOfStepLightRates}).
+     */
+    private LightElementTrapezoid youngLightRates(LightElementRates previousLight, boolean remesh, double[] cellMass,
+                                                  boolean[] mixed, Composition[] startComp, double[] rho,
+                                                  double[] t, double[] startRho, double[] startT, boolean trusted,
+                                                  double dt) {
+        LightElementRates used = LightElementRates.of(physics.nuclear(), cellMass, mixed, startComp, rho, t);
+        return new LightElementTrapezoid(used, trusted
+                ? startOfStepLightRates(previousLight, remesh, cellMass, mixed, startComp, startRho, startT)
+                : used, dt);
+    }
+
+    /**
+     * The start-of-step rates of deuterium and 7Li: the previous step's end-of-step rates when this step keeps its
+     * mesh, else evaluated. On the main sequence the network also burns the traces at them, so a step evaluates
+     * the rates once (at its end, {@link #lightElementsEnd}) instead of three times. Why both are
+     * sound: (1) whatever rates the network burns the traces at, {@link LightElementBurning#corrected} re-burns
+     * them to the trapezoid mean of the start- and end-of-step rates, so their end abundances do not depend on
+     * {@code used}; only the 1H, 3He and 4He the network sees during the step do, by the traces' own mass
+     * (X_Li ~ 1e-8), far inside the network's tolerance. (2) Without a remesh the start of this step is the end
+     * of the last: same mesh, mixed zones, density and temperature, and the composition differs only by that
+     * step's trapezoid correction of the traces, which moves the capture rates (through X_H and the screening)
+     * by a few parts in 1e16. Measured, 1 Msun, Z = 0.02: the light elements' rates were 2.5 % of the main
+     * sequence's CPU from birth (0.015 of 0.58 s, three evaluations a step at ~330 points; thread CPU); with one
+     * the exhaustion age moves from 3.087411862292e17 to 3.087411862291e17 s, the surface 7Li at exhaustion
+     * (2.193252067494e-9) and the Newton iterations (635) not at all.
+     */
+    private LightElementRates startOfStepLightRates(LightElementRates previousLight, boolean remesh,
+                                                    double[] cellMass, boolean[] mixed, Composition[] startComp,
+                                                    double[] startRho, double[] startT) {
+        if (!remesh && previousLight != null && previousLight.deuterium().length == startComp.length) {
+            return previousLight;
+        }
+        return LightElementRates.of(physics.nuclear(), cellMass, mixed, startComp, startRho, startT);
     }
 
     /**
@@ -680,6 +734,77 @@ public final class MainSequenceEvolver {
         addExtrapolatedChange(now, now, before, first, olderStep, oldestStep, dt,
                 isotherms ? previous.mesh() : null);
         return new ModelState(previous.mesh(), previous.compositions(), now[0], now[1], now[2], now[3]);
+    }
+
+    /**
+     * Whether the step's composition update changed the central 12C by more than {@link #TRANSIENT_CARBON_CHANGE}
+     * in ln: the CN cycle still burning the 12C the pre-main sequence left towards its equilibrium.
+     */
+    private static boolean burningTransient(Composition before, Composition after) {
+        return before.c12() > 0.0 && after.c12() > 0.0
+                && Math.abs(Math.log(after.c12() / before.c12())) > TRANSIENT_CARBON_CHANGE;
+    }
+
+    /**
+     * The guess with its luminosity's nuclear part taken from this step's composition instead of extrapolated:
+     * L = extrapolated (L - L_nuc) + L_nuc of the guess's rho and T with the step's composition, L_nuc(m) the
+     * integral of eps_nuc to m by the structure's own trapezoid. Why: on arrival from the pre-main sequence the
+     * central 12C is out of CN equilibrium (3e-3 against 8e-6, 1 Msun) and falls by a factor 1.4-3 per step for
+     * a dozen steps; the energy it releases follows it, which no polynomial in time through the last models does,
+     * so the first Newton correction of the core's L was 3-9 % (1e-3 on the zero-age track) and each of those
+     * steps took 4 iterations instead of 3. Measured, 1 Msun, Z = 0.02 from birth: the first correction of the
+     * 5th-10th main-sequence steps 6-9e-2 -> 2e-3-1e-2, 4 -> 3 iterations each (main sequence 360 -> 354; 500
+     * network calls in each of the ~10 steps it runs, a fifth of one Newton iteration's work); the 1st-4th and
+     * 11th-12th keep 4 (their first correction lies elsewhere: envelope density, surface L, the 12C off the
+     * centre). Tried and not kept: the test on the 12C of every point instead of the centre holds at every step of
+     * both tracks (the core's edge burns its 12C all along): birth 360 -> 352, the zero-age track 345 -> 346, at
+     * 500 network calls a step. A guess the network cannot evaluate is left as it was. All models share the
+     * guess's mesh.
+     */
+    private ModelState withStepsNuclearLuminosity(ModelState guess, StellarModel previous, StellarModel older,
+                                                  StellarModel oldest, double olderStep, double oldestStep,
+                                                  double dt) {
+        MassMesh mesh = guess.mesh();
+        int n = guess.size();
+        double[] eps = new double[n];
+        try {
+            for (int k = 0; k < n; k++) {
+                eps[k] = physics.nuclear().burn(Math.exp(guess.lnDensity(k)), Math.exp(guess.lnTemperature(k)),
+                        guess.composition(k)).eps();
+            }
+        } catch (ConvgridException e) {
+            return guess;
+        }
+        double[][] extrapolatedNuclear = {nuclearLuminosity(mesh, previous.profile())};
+        addExtrapolatedChange(extrapolatedNuclear, extrapolatedNuclear,
+                new double[][] {nuclearLuminosity(mesh, older.profile())},
+                oldest == null ? null : new double[][] {nuclearLuminosity(mesh, oldest.profile())}, olderStep,
+                oldestStep, dt, null);
+        double[] now = nuclearLuminosity(mesh, eps);
+        double[] lum = guess.luminosities();
+        for (int k = 0; k < n; k++) {
+            lum[k] += now[k] - extrapolatedNuclear[0][k];
+        }
+        return new ModelState(mesh, guess.compositions(), guess.lnRadii(), guess.lnDensities(),
+                guess.lnTemperatures(), lum);
+    }
+
+    private static double[] nuclearLuminosity(MassMesh mesh, StellarProfile profile) {
+        double[] eps = new double[profile.size()];
+        for (int k = 0; k < eps.length; k++) {
+            eps[k] = profile.eps(k);
+        }
+        return nuclearLuminosity(mesh, eps);
+    }
+
+    /** The integral of eps to each point, as the structure's luminosity equation sums it. */
+    private static double[] nuclearLuminosity(MassMesh mesh, double[] eps) {
+        double[] out = new double[eps.length];
+        out[0] = eps[0] * mesh.mass(0);
+        for (int k = 0; k < eps.length - 1; k++) {
+            out[k + 1] = out[k] + 0.5 * (eps[k] + eps[k + 1]) * mesh.intervalMass(k);
+        }
+        return out;
     }
 
     /**
