@@ -14,8 +14,10 @@ import org.junit.jupiter.api.condition.EnabledIfSystemProperty;
 
 /**
  * The cost of a 1 Msun, Z = 0.02 track from birth to core-hydrogen exhaustion against the same track from its
- * zero-age main-sequence model, default settings, best of {@code probe.repeats} runs each (run with
- * -Dconvgrid.benchmark=true; under taskset -c 0 for a one-core figure).
+ * zero-age main-sequence model, default settings, best and median of {@code probe.repeats} runs each, the two
+ * tracks alternating in one JVM (run with -Dconvgrid.benchmark=true; under taskset -c 0 for a one-core figure).
+ * The ratio of thread CPU within one JVM is steadier than JMH's separate forks, whose compiled code differs
+ * from fork to fork by up to ~30 % on this workload (2026-12-03: 809-1271 ms for the same birth track).
  */
 @EnabledIfSystemProperty(named = "convgrid.benchmark", matches = "true")
 class BirthCostProbe {
@@ -40,6 +42,8 @@ class BirthCostProbe {
         int birthNewton = 0;
         int zamsSteps = 0;
         int birthSteps = 0;
+        double[] zamsCpuRuns = new double[repeats];
+        double[] birthCpuRuns = new double[repeats];
         for (int r = 0; r < repeats; r++) {
             long t0 = System.nanoTime();
             long c0 = threads.getCurrentThreadCpuTime();
@@ -48,7 +52,8 @@ class BirthCostProbe {
             ZamsModel z = new ZamsTrack(new ZamsBuilder(physics), bare).solve(Constants.M_SUN).model();
             EvolutionResult ms = evolver.evolve(z.model(), new double[] {0.0});
             bestZams = Math.min(bestZams, (System.nanoTime() - t0) * 1e-9);
-            cpuZams = Math.min(cpuZams, (threads.getCurrentThreadCpuTime() - c0) * 1e-9);
+            zamsCpuRuns[r] = (threads.getCurrentThreadCpuTime() - c0) * 1e-9;
+            cpuZams = Math.min(cpuZams, zamsCpuRuns[r]);
             zamsSteps = ms.steps().size();
             zamsNewton = z.iterations() + ms.steps().stream().mapToInt(st -> st.iterations()).sum();
             t0 = System.nanoTime();
@@ -68,7 +73,8 @@ class BirthCostProbe {
                 last[0] = now;
             });
             bestBirth = Math.min(bestBirth, (System.nanoTime() - t0) * 1e-9);
-            cpuBirth = Math.min(cpuBirth, (threads.getCurrentThreadCpuTime() - c0) * 1e-9);
+            birthCpuRuns[r] = (threads.getCurrentThreadCpuTime() - c0) * 1e-9;
+            cpuBirth = Math.min(cpuBirth, birthCpuRuns[r]);
             birthSteps = track.steps().size();
             birthNewton = start.iterations() + track.steps().stream().mapToInt(st -> st.iterations()).sum();
             double zams = recorder.events().zeroAgeMainSequence();
@@ -85,14 +91,26 @@ class BirthCostProbe {
                     post += stepCpu.get(i)[1];
                 }
             }
-            System.out.printf("run %d: zams %s at %.4g Gyr, birth %s at %.4g Gyr (ZAMS at %.4g Myr); birth track CPU: "
-                    + "start model %.3f s, %d steps to the ZAMS %.3f s (%d Newton iterations), the rest %.3f s%n", r,
-                    ms.end(), ms.endAge() / Constants.GYR, track.end(), track.endAge() / Constants.GYR,
-                    zams / BirthTracks.MYR, startCpu * 1e-9, preSteps, pre, preNewton, post);
+            System.out.printf("run %d: zams %s at %.4g Gyr, birth %s at %.4g Gyr (ZAMS at %.4g Myr); thread CPU from ZAMS "
+                    + "%.3f s, from birth %.3f s (ratio %.3f): start model %.3f s, %d steps to the ZAMS %.3f s (%d "
+                    + "Newton iterations), the rest %.3f s%n", r, ms.end(), ms.endAge() / Constants.GYR, track.end(),
+                    track.endAge() / Constants.GYR, zams / BirthTracks.MYR, zamsCpuRuns[r], birthCpuRuns[r],
+                    birthCpuRuns[r] / zamsCpuRuns[r], startCpu * 1e-9, preSteps, pre, preNewton, post);
         }
         System.out.printf("1 Msun to exhaustion: from ZAMS %.2f s (%d steps), from birth %.2f s (%d steps), ratio %.2f%n",
                 bestZams, zamsSteps, bestBirth, birthSteps, bestBirth / bestZams);
         System.out.printf("thread CPU: from ZAMS %.2f s (%d Newton iterations), from birth %.2f s (%d), ratio %.2f%n",
                 cpuZams, zamsNewton, cpuBirth, birthNewton, cpuBirth / cpuZams);
+        double medianZams = median(zamsCpuRuns);
+        double medianBirth = median(birthCpuRuns);
+        System.out.printf("thread CPU, medians of %d: from ZAMS %.3f s, from birth %.3f s, ratio %.3f%n", repeats,
+                medianZams, medianBirth, medianBirth / medianZams);
+    }
+
+    private static double median(double[] values) {
+        double[] sorted = values.clone();
+        java.util.Arrays.sort(sorted);
+        int n = sorted.length;
+        return n % 2 == 1 ? sorted[n / 2] : 0.5 * (sorted[n / 2 - 1] + sorted[n / 2]);
     }
 }
