@@ -1,7 +1,5 @@
 package org.convgrid.engine.structure;
 
-import java.util.Arrays;
-
 import org.convgrid.engine.convection.ConvectiveGradient;
 import org.convgrid.engine.convection.LedouxGradient;
 import org.convgrid.engine.convection.LocalConvectionState;
@@ -56,19 +54,6 @@ public final class StructureEquations implements DifferenceSystem {
      */
     static final double SLAVED_BURNING_THRESHOLD = 1.0e-4;
     private static final double FOUR_PI = 4.0 * Math.PI;
-    /**
-     * How far (in ln rho or ln T) a convective point may move from where this solve last differenced its
-     * equation-of-state second derivatives (the changes of nabla_ad, ln c_P and ln delta) before they are
-     * differenced again. They only shape the Jacobian, never the solution, and cost two equation-of-state calls
-     * per convective point and derivative evaluation (41 % of all calls of the 1 Msun, Z = 0.02 track from birth,
-     * ~21 % of its CPU). Measured on that track (2026-12-03, calls counted, Newton iterations of birth model +
-     * track): never reused 458 086 calls, 14 + 631 iterations; 1e-3: 438 412, 14 + 633; 3e-3: 425 348,
-     * 14 + 644; 1e-2: 415 356, 14 + 656; 1e-1: 407 974, 15 + 666. Beyond 1e-3 each saved pair of calls costs
-     * Newton iterations (stale curvature in the ionisation zones), whose other work (opacity, burning,
-     * convection, the block solve) eats the gain; 1e-3 keeps the iteration count. The zero-age track moves less
-     * within a solve: 274 422 to 270 308 calls, 363 iterations both.
-     */
-    static final double SECOND_DERIVATIVE_REUSE = 1.0e-3;
 
     private final MassMesh mesh;
     private final Composition[] composition;
@@ -93,12 +78,13 @@ public final class StructureEquations implements DifferenceSystem {
     private final double[] nabla;
     private final double[] dNabla;
     /**
-     * Per point, the differenced second derivatives of the equation of state: d nabla_ad, d ln c_P, d ln delta per
-     * d ln rho (entries 0-2) and per d ln T (3-5), and the ln rho, ln T where they were taken (NaN: not yet).
+     * Per point, the equation of state's differenced second derivatives last taken there (this solve's, or the
+     * previous model's), null when none. Why: the two equation-of-state calls they cost at every convective point
+     * and derivative evaluation were 41 % of all calls of the 1 Msun, Z = 0.02 track from birth (~21 % of its CPU);
+     * reused while the point stays near ({@link EosCurvature#servesAt}) they are 13 % fewer calls for 5 more Newton
+     * iterations out of 645 (figures there).
      */
-    private final double[] eosSecond;
-    private final double[] eosSecondLnRho;
-    private final double[] eosSecondLnT;
+    private final EosCurvature[] curvature;
 
     /**
      * @param mesh mass coordinates
@@ -152,11 +138,7 @@ public final class StructureEquations implements DifferenceSystem {
         this.dEps = new double[2 * n];
         this.nabla = new double[n];
         this.dNabla = new double[4 * n];
-        this.eosSecond = new double[6 * n];
-        this.eosSecondLnRho = new double[n];
-        this.eosSecondLnT = new double[n];
-        Arrays.fill(eosSecondLnRho, Double.NaN);
-        Arrays.fill(eosSecondLnT, Double.NaN);
+        this.curvature = new EosCurvature[n];
     }
 
     /**
@@ -172,6 +154,21 @@ public final class StructureEquations implements DifferenceSystem {
             throw new IllegalArgumentException("nearby states for " + nearby.length + " points, expected " + n);
         }
         System.arraycopy(nearby, 0, eos, 0, n);
+    }
+
+    /**
+     * Starts every point's equation-of-state second derivatives from {@code nearby[k]} (e.g. the previous model's
+     * on the same mesh), used while the point stays near where they were taken; null entries (or a null array)
+     * leave them to be differenced at the first derivative evaluation.
+     */
+    void startCurvatureNear(EosCurvature[] nearby) {
+        if (nearby == null) {
+            return;
+        }
+        if (nearby.length != n) {
+            throw new IllegalArgumentException("nearby curvature for " + nearby.length + " points, expected " + n);
+        }
+        System.arraycopy(nearby, 0, curvature, 0, n);
     }
 
     /** The unknown vector of a model state, L scaled by this system's L_scale. */
@@ -295,17 +292,16 @@ public final class StructureEquations implements DifferenceSystem {
         double h = DIFFERENCE_STEP;
         double stepFactor = Math.exp(h);
         MixingLengthSolution slopes = convectionSlopes[k];
-        if (convective && slopes != null && extraRate != null
-                && Math.abs(lnRho - eosSecondLnRho[k]) <= SECOND_DERIVATIVE_REUSE
-                && Math.abs(lnT - eosSecondLnT[k]) <= SECOND_DERIVATIVE_REUSE) {
-            // the second derivatives differenced nearby serve the Jacobian (NaN compares false: never reused unset)
+        if (convective && slopes != null && extraRate != null && curvature[k] != null
+                && curvature[k].servesAt(lnRho, lnT)) {
+            // the second derivatives differenced nearby serve the Jacobian
             convectiveSlopes(k, s, op, slopes, radPerLuminosity);
             return;
         }
         // the perturbed states start from the unperturbed one (one or two neutrality steps each)
         EosState sRho = physics.eos().atDensity(rho * stepFactor, t, c, s);
         EosState sT = physics.eos().atDensity(rho, t * stepFactor, c, s);
-        differenceSecondDerivatives(k, s, sRho, sT, lnRho, lnT);
+        curvature[k] = differenced(s, sRho, sT, lnRho, lnT);
         if (extraRate == null) {
             dEps[2 * k] += (extra.at(k, sRho) - ex) / h;
             dEps[2 * k + 1] += (extra.at(k, sT) - ex) / h;
@@ -337,8 +333,8 @@ public final class StructureEquations implements DifferenceSystem {
      * U proportional to T^3 rho^-1/2 P^-3/2 g delta^-1/2/(c_P kappa) at fixed alpha (the U of Kippenhahn, Weigert
      * &amp; Weiss 2012, ch. 7, with H_P = P/(rho g) and l_m = alpha H_P written out), g = G m/r^2. The changes of
      * nabla_ad, c_P and delta with the state (second derivatives of the equation of state) are one-sided
-     * differences over the neighbouring states sRho and sT, taken at this point within
-     * {@link #SECOND_DERIVATIVE_REUSE} of its present ln rho and ln T in this solve; everything else is analytic.
+     * differences over the neighbouring states sRho and sT, taken at this point near its present ln rho and ln T
+     * ({@link EosCurvature#servesAt}); everything else is analytic.
      */
     private void convectiveSlopes(int k, EosState s, OpacityValue op, MixingLengthSolution slopes,
                                   double radPerLuminosity) {
@@ -348,37 +344,32 @@ public final class StructureEquations implements DifferenceSystem {
         double nU = slopes.dNablaDLnU();
         // ln g = ln(G m) - 2 ln r; nothing else in nabla depends on r
         dNabla[4 * k] = -2.0 * nU;
-        dNabla[4 * k + 1] = gradientSlope(rad, nRad, nAd, nU, 6 * k, op.dlnKappaDlnRho(), s.chiRho(), 0.0, 1.0);
-        dNabla[4 * k + 2] = gradientSlope(rad, nRad, nAd, nU, 6 * k + 3, op.dlnKappaDlnT(), s.chiT(), 1.0, 0.0);
+        EosCurvature c = curvature[k];
+        dNabla[4 * k + 1] = gradientSlope(rad, nRad, nAd, nU, c.dNablaAdDLnRho(), c.dLnCpDLnRho(),
+                c.dLnDeltaDLnRho(), op.dlnKappaDlnRho(), s.chiRho(), 0.0, 1.0);
+        dNabla[4 * k + 2] = gradientSlope(rad, nRad, nAd, nU, c.dNablaAdDLnT(), c.dLnCpDLnT(), c.dLnDeltaDLnT(),
+                op.dlnKappaDlnT(), s.chiT(), 1.0, 0.0);
         dNabla[4 * k + 3] = nRad * radPerLuminosity;
     }
 
     /**
      * d nabla/d x for x = ln rho (dLnT = 0, dLnRho = 1) or ln T (dLnT = 1, dLnRho = 0) at fixed r and L, from
-     * the logarithmic slopes of kappa and P in x and the differenced second derivatives at {@code second}.
+     * the logarithmic slopes of kappa and P in x and the changes of nabla_ad, ln c_P and ln delta in x.
      */
-    private double gradientSlope(double rad, double nRad, double nAd, double nU, int second, double dLnKappa,
-                                 double dLnP, double dLnT, double dLnRho) {
+    private static double gradientSlope(double rad, double nRad, double nAd, double nU, double dAd, double dLnCp,
+                                        double dLnDelta, double dLnKappa, double dLnP, double dLnT,
+                                        double dLnRho) {
         double dRad = rad * (dLnKappa + dLnP - 4.0 * dLnT);
-        double dAd = eosSecond[second];
-        double dLnCp = eosSecond[second + 1];
-        double dLnDelta = eosSecond[second + 2];
         double dLnU = 3.0 * dLnT - 0.5 * dLnRho - 1.5 * dLnP - 0.5 * dLnDelta - dLnCp - dLnKappa;
         return nRad * dRad + nAd * dAd + nU * dLnU;
     }
 
-    /** Differences the equation of state's second derivatives at point k and records where. */
-    private void differenceSecondDerivatives(int k, EosState s, EosState sRho, EosState sT, double lnRho,
-                                             double lnT) {
+    /** The second derivatives differenced over the states a step further in ln rho and in ln T. */
+    private static EosCurvature differenced(EosState s, EosState sRho, EosState sT, double lnRho, double lnT) {
         double h = DIFFERENCE_STEP;
-        eosSecond[6 * k] = (sRho.nablaAd() - s.nablaAd()) / h;
-        eosSecond[6 * k + 1] = Math.log(sRho.cp() / s.cp()) / h;
-        eosSecond[6 * k + 2] = Math.log(sRho.delta() / s.delta()) / h;
-        eosSecond[6 * k + 3] = (sT.nablaAd() - s.nablaAd()) / h;
-        eosSecond[6 * k + 4] = Math.log(sT.cp() / s.cp()) / h;
-        eosSecond[6 * k + 5] = Math.log(sT.delta() / s.delta()) / h;
-        eosSecondLnRho[k] = lnRho;
-        eosSecondLnT[k] = lnT;
+        return new EosCurvature((sRho.nablaAd() - s.nablaAd()) / h, Math.log(sRho.cp() / s.cp()) / h,
+                Math.log(sRho.delta() / s.delta()) / h, (sT.nablaAd() - s.nablaAd()) / h,
+                Math.log(sT.cp() / s.cp()) / h, Math.log(sT.delta() / s.delta()) / h, lnRho, lnT);
     }
 
     /** The actual gradient at point k for the given local state; records the convection result when asked. */
@@ -520,6 +511,11 @@ public final class StructureEquations implements DifferenceSystem {
     }
 
     // --- read-out of the last evaluation, for building profiles -------------------------------------------
+
+    /** The equation-of-state second derivatives the last derivative evaluation used at point k, or null. */
+    EosCurvature curvatureAt(int k) {
+        return curvature[k];
+    }
 
     EosState eosAt(int k) {
         return eos[k];
