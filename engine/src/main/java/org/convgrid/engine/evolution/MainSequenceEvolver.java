@@ -502,7 +502,7 @@ public final class MainSequenceEvolver {
                             curved ? oldest : null, gOlder, gOldest, gDt);
                 }
                 return stepped(lightElementsEnd(solver.relax(extrapolatedGuess, grav, nablaMu, solveSettings,
-                        start.eos()), light), kept);
+                        start.eos(), start.curvature()), light), kept);
             } catch (SolveFailedException e) {
                 // an extrapolation that overshoots (e.g. across a change of the convective zones) is no worse
                 // than no extrapolation: fall back to the previous model as the guess
@@ -517,12 +517,13 @@ public final class MainSequenceEvolver {
                 double[][] before = young ? filledBefore : carriedBefore;
                 return stepped(lightElementsEnd(solver.relax(carried(guess, now, before, gOlder,
                         curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings,
-                        start.eos()), light), kept);
+                        start.eos(), start.curvature()), light), kept);
             } catch (SolveFailedException e) {
                 // as above: fall back to the previous model as the guess
             }
         }
-        return stepped(lightElementsEnd(solver.relax(guess, grav, nablaMu, solveSettings, start.eos()), light), kept);
+        return stepped(lightElementsEnd(solver.relax(guess, grav, nablaMu, solveSettings, start.eos(),
+                start.curvature()), light), kept);
     }
 
     /**

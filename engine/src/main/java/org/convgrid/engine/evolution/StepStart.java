@@ -5,6 +5,7 @@ import java.util.Arrays;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.physics.eos.EosState;
 import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.structure.EosCurvature;
 import org.convgrid.engine.structure.MassMesh;
 import org.convgrid.engine.structure.MeshPlanner;
 import org.convgrid.engine.structure.ModelState;
@@ -19,10 +20,12 @@ import org.convgrid.engine.structure.StellarProfile;
  * onto a new mesh: structure interpolated by {@link MeshPlanner}, composition remapped conservatively by {@link
  * MassRemap}, pressure and internal energy recomputed from the interpolated density and temperature, convective flags
  * from the nearest old point. With them, the equation of state's whole answer at every point (the model's own, or the
- * recomputed one), from which the step's structure solve starts its first equation-of-state solves.
+ * recomputed one), from which the step's structure solve starts its first equation-of-state solves, and, on the model's
+ * own mesh, the equation-of-state second derivatives its Jacobian last used (null after a remesh), which the step's
+ * solve reuses at points that moved little.
  */
 record StepStart(ModelState state, double[] density, double[] temperature, double[] pressure,
-                 double[] internalEnergy, boolean[] convective, EosState[] eos) {
+                 double[] internalEnergy, boolean[] convective, EosState[] eos, EosCurvature[] curvature) {
 
     /** The model on its own mesh. */
     static StepStart of(StellarModel model) {
@@ -34,6 +37,7 @@ record StepStart(ModelState state, double[] density, double[] temperature, doubl
         double[] u = new double[n];
         boolean[] conv = new boolean[n];
         EosState[] eos = new EosState[n];
+        EosCurvature[] curvature = new EosCurvature[n];
         for (int k = 0; k < n; k++) {
             rho[k] = p.density(k);
             t[k] = p.temperature(k);
@@ -41,8 +45,9 @@ record StepStart(ModelState state, double[] density, double[] temperature, doubl
             u[k] = p.internalEnergy(k);
             conv[k] = p.convective(k);
             eos[k] = p.eosState(k);
+            curvature[k] = p.eosCurvature(k);
         }
-        return new StepStart(model.state(), rho, t, pressure, u, conv, eos);
+        return new StepStart(model.state(), rho, t, pressure, u, conv, eos, curvature);
     }
 
     /** The model moved onto the mesh {@code planner} chooses with the given extra interval costs. */
@@ -74,7 +79,7 @@ record StepStart(ModelState state, double[] density, double[] temperature, doubl
             eos[k] = s;
             conv[k] = model.profile().convective(nearest(oldMass, mesh.mass(k)));
         }
-        return new StepStart(moved, rho, t, pressure, u, conv, eos);
+        return new StepStart(moved, rho, t, pressure, u, conv, eos, null);
     }
 
     /** ln P at every point (only the Ledoux criterion's nabla_mu needs it, so it is not kept). */

@@ -29,6 +29,8 @@ public final class StellarProfile implements OvershootProfile {
     private final double[] internalEnergy;
     /** The equation of state's answer at each point, from the solver's last evaluation (it gave P and u). */
     private final EosState[] eos;
+    /** The equation of state's second derivatives the solver's Jacobian last used at each point (null: none). */
+    private final EosCurvature[] curvature;
 
     StellarProfile(StructureEquations eq, double[] y) {
         int n = eq.points();
@@ -51,6 +53,7 @@ public final class StellarProfile implements OvershootProfile {
         hydrogen = new double[n];
         internalEnergy = new double[n];
         eos = new EosState[n];
+        curvature = new EosCurvature[n];
         ModelState state = eq.state(y);
         for (int k = 0; k < n; k++) {
             EosState s = eq.eosAt(k);
@@ -73,6 +76,7 @@ public final class StellarProfile implements OvershootProfile {
             hydrogen[k] = state.composition(k).x();
             internalEnergy[k] = s.internalEnergy();
             eos[k] = s;
+            curvature[k] = eq.curvatureAt(k);
         }
     }
 
@@ -117,6 +121,15 @@ public final class StellarProfile implements OvershootProfile {
      */
     public EosState eosState(int k) {
         return eos[k];
+    }
+
+    /**
+     * The equation of state's second derivatives the solver's Jacobian last used at point k, or null: a later
+     * solve on the same mesh reuses them while the point stays near ({@link StructureSolver#relax(ModelState,
+     * ExtraEnergy, double[], HenyeySolver.Settings, EosState[], EosCurvature[])}).
+     */
+    public EosCurvature eosCurvature(int k) {
+        return curvature[k];
     }
 
     /** L, erg s^-1. */

@@ -75,10 +75,25 @@ public final class StructureSolver {
      */
     public StellarModel relax(ModelState guess, ExtraEnergy extra, double[] nablaMu,
                               HenyeySolver.Settings solveSettings, EosState[] nearbyEos) {
+        return relax(guess, extra, nablaMu, solveSettings, nearbyEos, null);
+    }
+
+    /**
+     * As {@link #relax(ModelState, ExtraEnergy, double[], HenyeySolver.Settings, EosState[])}, the Jacobian's
+     * equation-of-state second derivatives at each point started from {@code nearbyCurvature[k]} (e.g. the previous
+     * model's on the same mesh; null for none), used while the point stays near where they were taken: they shape
+     * the Newton iteration's rate only, so the converged model is the same to the solver's tolerance.
+     *
+     * @throws SolveFailedException with the report when the relaxation does not converge
+     */
+    public StellarModel relax(ModelState guess, ExtraEnergy extra, double[] nablaMu,
+                              HenyeySolver.Settings solveSettings, EosState[] nearbyEos,
+                              EosCurvature[] nearbyCurvature) {
         double scale = Math.abs(guess.surfaceLuminosity());
         StructureEquations eq = new StructureEquations(guess.mesh(), guess.compositions(), physics, scale,
                 nablaMu, extra, 1.0, null);
         eq.startEquationOfStateNear(nearbyEos);
+        eq.startCurvatureNear(nearbyCurvature);
         return solved(eq, guess, solveSettings);
     }
 
