@@ -17,7 +17,9 @@ import org.junit.jupiter.api.condition.EnabledIfSystemProperty;
  * zero-age main-sequence model, default settings, best and median of {@code probe.repeats} runs each, the two
  * tracks alternating in one JVM (run with -Dconvgrid.benchmark=true; under taskset -c 0 for a one-core figure).
  * The ratio of thread CPU within one JVM is steadier than JMH's separate forks, whose compiled code differs
- * from fork to fork by up to ~30 % on this workload (2026-12-03: 809-1271 ms for the same birth track).
+ * from fork to fork by up to ~30 % on this workload (2026-12-03: 809-1271 ms for the same birth track); steadier
+ * still is each step's least CPU over the runs, summed (the steps are the same in every run, and a busy
+ * neighbour only ever adds time), which it prints last.
  */
 @EnabledIfSystemProperty(named = "convgrid.benchmark", matches = "true")
 class BirthCostProbe {
@@ -42,6 +44,10 @@ class BirthCostProbe {
         int birthNewton = 0;
         int zamsSteps = 0;
         int birthSteps = 0;
+        // per step (the first entry: the zero-age model or the start model), the least thread CPU over the runs:
+        // the steps are the same in every run, and noise only ever adds time
+        double[] zeroLeast = null;
+        double[] birthLeast = null;
         double[] zamsCpuRuns = new double[repeats];
         double[] birthCpuRuns = new double[repeats];
         for (int r = 0; r < repeats; r++) {
@@ -50,7 +56,15 @@ class BirthCostProbe {
             var zero = BirthTracks.birth(0.02);
             var bare = org.convgrid.engine.state.Composition.scaledSolar(zero.x(), zero.z());
             ZamsModel z = new ZamsTrack(new ZamsBuilder(physics), bare).solve(Constants.M_SUN).model();
-            EvolutionResult ms = evolver.evolve(z.model(), new double[] {0.0});
+            long zamsModelCpu = threads.getCurrentThreadCpuTime() - c0;
+            List<Double> zeroStepCpu = new ArrayList<>();
+            long[] zeroLast = {threads.getCurrentThreadCpuTime()};
+            EvolutionResult ms = evolver.evolve(z.model(), new double[] {0.0}, (age, dt, model) -> {
+                long now = threads.getCurrentThreadCpuTime();
+                zeroStepCpu.add((now - zeroLast[0]) * 1e-9);
+                zeroLast[0] = now;
+            });
+            zeroLeast = leastSoFar(zeroLeast, zeroStepCpu, zamsModelCpu * 1e-9);
             bestZams = Math.min(bestZams, (System.nanoTime() - t0) * 1e-9);
             zamsCpuRuns[r] = (threads.getCurrentThreadCpuTime() - c0) * 1e-9;
             cpuZams = Math.min(cpuZams, zamsCpuRuns[r]);
@@ -77,6 +91,11 @@ class BirthCostProbe {
             cpuBirth = Math.min(cpuBirth, birthCpuRuns[r]);
             birthSteps = track.steps().size();
             birthNewton = start.iterations() + track.steps().stream().mapToInt(st -> st.iterations()).sum();
+            List<Double> birthPerStep = new ArrayList<>();
+            for (double[] step : stepCpu) {
+                birthPerStep.add(step[1]);
+            }
+            birthLeast = leastSoFar(birthLeast, birthPerStep, startCpu * 1e-9);
             double zams = recorder.events().zeroAgeMainSequence();
             double pre = 0.0;
             double post = 0.0;
@@ -101,10 +120,34 @@ class BirthCostProbe {
                 bestZams, zamsSteps, bestBirth, birthSteps, bestBirth / bestZams);
         System.out.printf("thread CPU: from ZAMS %.2f s (%d Newton iterations), from birth %.2f s (%d), ratio %.2f%n",
                 cpuZams, zamsNewton, cpuBirth, birthNewton, cpuBirth / cpuZams);
+        double zeroSum = java.util.Arrays.stream(zeroLeast).sum();
+        double birthSum = java.util.Arrays.stream(birthLeast).sum();
+        System.out.printf("thread CPU, each step's least over %d runs, summed: from ZAMS %.3f s, from birth %.3f s, "
+                + "ratio %.3f%n", repeats, zeroSum, birthSum, birthSum / zeroSum);
         double medianZams = median(zamsCpuRuns);
         double medianBirth = median(birthCpuRuns);
         System.out.printf("thread CPU, medians of %d: from ZAMS %.3f s, from birth %.3f s, ratio %.3f%n", repeats,
                 medianZams, medianBirth, medianBirth / medianZams);
+    }
+
+    /** {@code least} (null at first) lowered elementwise to {@code first} followed by {@code steps}. */
+    private static double[] leastSoFar(double[] least, List<Double> steps, double first) {
+        double[] now = new double[steps.size() + 1];
+        now[0] = first;
+        for (int i = 0; i < steps.size(); i++) {
+            now[i + 1] = steps.get(i);
+        }
+        if (least == null) {
+            return now;
+        }
+        if (least.length != now.length) {
+            throw new IllegalStateException("runs of one track took " + least.length + " and " + now.length
+                    + " steps");
+        }
+        for (int i = 0; i < now.length; i++) {
+            now[i] = Math.min(now[i], least[i]);
+        }
+        return now;
     }
 
     private static double median(double[] values) {
