@@ -172,15 +172,15 @@ public final class HrDiagramRenderer {
         return s;
     }
 
-    /** An age for people: Myr below 1 Gyr (young clusters are spoken of in Myr), Gyr above. */
+    /** An age for people ({@link SliceLabels#age}: Myr below 1 Gyr, Gyr above). */
     static String age(double ageGyr) {
-        if (ageGyr > 0 && ageGyr < 1) {
-            return SliceLabels.number(ageGyr * 1000) + " Myr";
-        }
         return SliceLabels.age(ageGyr);
     }
 
-    /** The ages of the title: each with its unit when they are not all in Gyr. */
+    /**
+     * The ages of the title: each with its unit when they are not all in Gyr, every one listed (an HR diagram's
+     * isochrones are few and each is labelled on the chart).
+     */
     static String ages(List<Double> agesGyr) {
         if (agesGyr.stream().allMatch(a -> a == 0 || a >= 1)) {
             return SliceLabels.ages(agesGyr);

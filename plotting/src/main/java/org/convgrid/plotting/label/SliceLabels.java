@@ -52,9 +52,15 @@ public final class SliceLabels {
         return massWithin(massMsun, bracket);
     }
 
-    /** An age for people: {@code ZAMS} for zero, else {@code 4.57 Gyr}. */
+    /**
+     * An age for people: {@code ZAMS} for zero, {@code 150 Myr} below 1 Gyr (young clusters and star-forming
+     * regions are spoken of in Myr), else {@code 4.57 Gyr}.
+     */
     public static String age(double ageGyr) {
-        return ageGyr == 0.0 ? "ZAMS" : number(ageGyr) + " Gyr";
+        if (ageGyr == 0.0) {
+            return "ZAMS";
+        }
+        return ageGyr > 0.0 && ageGyr < 1.0 ? number(ageGyr * 1000.0) + " Myr" : number(ageGyr) + " Gyr";
     }
 
     /** The physics options in words: {@code α = 1.8, Schwarzschild, no overshoot}. */
@@ -91,12 +97,23 @@ public final class SliceLabels {
                 + " values)";
     }
 
-    /** Ages for a title, e.g. {@code ZAMS, 1, 4.57 Gyr}. */
+    /**
+     * Ages for a title, e.g. {@code ages ZAMS, 1, 4.57 Gyr}, or each with its own unit when some lie below 1 Gyr
+     * ({@code ages 20 Myr, 150 Myr, 1 Gyr}; see {@link #age}); the range and the count when there are many
+     * ({@code ages 1 Myr to 2 Gyr (12 values)}).
+     */
     public static String ages(java.util.List<Double> ages) {
         if (ages.size() == 1) {
             return age(ages.get(0));
         }
-        return "ages " + values(ages) + " Gyr";
+        if (ages.stream().allMatch(a -> a == 0.0 || a >= 1.0)) {
+            return "ages " + values(ages) + " Gyr";
+        }
+        if (ages.size() > LISTED_VALUES) {
+            return "ages " + age(ages.get(0)) + " to " + age(ages.get(ages.size() - 1)) + " (" + ages.size()
+                    + " values)";
+        }
+        return "ages " + ages.stream().map(SliceLabels::age).collect(java.util.stream.Collectors.joining(", "));
     }
 
     /** A file name stem for a slice, e.g. {@code z0.014_age4.57_a1.8_ov0_schwarzschild}; ASCII only. */
