@@ -147,13 +147,7 @@ public final class StructureEquations implements DifferenceSystem {
      * one before; null entries (or a null array) leave the cold start.
      */
     void startEquationOfStateNear(EosState[] nearby) {
-        if (nearby == null) {
-            return;
-        }
-        if (nearby.length != n) {
-            throw new IllegalArgumentException("nearby states for " + nearby.length + " points, expected " + n);
-        }
-        System.arraycopy(nearby, 0, eos, 0, n);
+        startNear(nearby, eos, "states");
     }
 
     /**
@@ -162,13 +156,18 @@ public final class StructureEquations implements DifferenceSystem {
      * leave them to be differenced at the first derivative evaluation.
      */
     void startCurvatureNear(EosCurvature[] nearby) {
+        startNear(nearby, curvature, "curvature");
+    }
+
+    /** Copies one value per point (null: nothing) into this system's per-point array {@code into}. */
+    private <T> void startNear(T[] nearby, T[] into, String what) {
         if (nearby == null) {
             return;
         }
         if (nearby.length != n) {
-            throw new IllegalArgumentException("nearby curvature for " + nearby.length + " points, expected " + n);
+            throw new IllegalArgumentException("nearby " + what + " for " + nearby.length + " points, expected " + n);
         }
-        System.arraycopy(nearby, 0, curvature, 0, n);
+        System.arraycopy(nearby, 0, into, 0, n);
     }
 
     /** The unknown vector of a model state, L scaled by this system's L_scale. */
