@@ -28,36 +28,15 @@ final class CarriedUnknowns {
      * 3 Msun zero-age track at exhaustion by 2e-10, measured; main-sequence results stay bit for bit as they were).
      */
     static double[][] onto(ModelState state, MassMesh target, boolean fillOuterInterval) {
-        double[][] values = {state.lnRadii(), state.lnDensities(), state.lnTemperatures(), state.luminosities()};
-        MassMesh mesh = state.mesh();
-        if (mesh == target) {
-            return values;
-        }
-        int n = mesh.size();
-        double[] x = interiorLogits(mesh);
-        int m = target.size();
-        double[][] carried = new double[values.length][m];
-        for (int v = 0; v < values.length; v++) {
-            PolynomialSplineFunction line = interiorLine(mesh, x, values[v]);
-            carried[v][0] = values[v][0];
-            carried[v][m - 1] = values[v][n - 1];
-            for (int k = 1; k < m - 1; k++) {
-                if (fillOuterInterval && target.logit(k) > x[x.length - 1]) {
-                    double w = outerWeight(state, target.exteriorFraction(k));
-                    carried[v][k] = (1.0 - w) * values[v][n - 2] + w * values[v][n - 1];
-                } else {
-                    carried[v][k] = line.value(Math.min(Math.max(target.logit(k), x[0]), x[x.length - 1]));
-                }
-            }
-        }
-        return carried;
+        BothWays carried = bothWays(state, target);
+        return fillOuterInterval ? carried.filled() : carried.clamped();
     }
 
     /**
      * The unknowns carried both ways at once, {@link #onto(ModelState, MassMesh, boolean)} without and with the
      * outermost interval filled, for a pre-main-sequence step that needs the one for its network's rho and T and
      * the other for its starting guess: each line is built and evaluated once, and the two differ only at the points
-     * beyond the last interior point of {@code state} (bit for bit the values of the two calls).
+     * beyond the last interior point of {@code state}. On the same mesh both are the state's own arrays.
      */
     static BothWays bothWays(ModelState state, MassMesh target) {
         double[][] values = {state.lnRadii(), state.lnDensities(), state.lnTemperatures(), state.luminosities()};

@@ -71,20 +71,25 @@ final class LightElementBurning {
 
     /** Multiplies the deuterium of x by exp(exponent), 1H and 3He taking up the mass moved. */
     private static void burnDeuterium(double[] x, double exponent) {
-        double d = x[MassFractions.H2];
-        double burnt = d * -Math.expm1(exponent);
-        x[MassFractions.H2] = d - burnt;
-        x[0] -= HYDROGEN_PER_DEUTERIUM * burnt;
-        x[1] += HELIUM3_PER_DEUTERIUM * burnt;
+        burnTrace(x, MassFractions.H2, exponent, HYDROGEN_PER_DEUTERIUM, 1, HELIUM3_PER_DEUTERIUM);
     }
 
     /** Multiplies the 7Li of x by exp(exponent), 1H and 4He taking up the mass moved. */
     private static void burnLithium(double[] x, double exponent) {
-        double li = x[MassFractions.LI7];
-        double burnt = li * -Math.expm1(exponent);
-        x[MassFractions.LI7] = li - burnt;
-        x[0] -= HYDROGEN_PER_LITHIUM * burnt;
-        x[2] += HELIUM4_PER_LITHIUM * burnt;
+        burnTrace(x, MassFractions.LI7, exponent, HYDROGEN_PER_LITHIUM, 2, HELIUM4_PER_LITHIUM);
+    }
+
+    /**
+     * Multiplies x[trace] by exp(exponent); per unit mass burnt, 1H (x[0]) loses {@code hydrogenPerTrace} and the
+     * product x[product] gains {@code productPerTrace} (the mass numbers of one proton capture).
+     */
+    private static void burnTrace(double[] x, int trace, double exponent, double hydrogenPerTrace, int product,
+                                  double productPerTrace) {
+        double abundance = x[trace];
+        double burnt = abundance * -Math.expm1(exponent);
+        x[trace] = abundance - burnt;
+        x[0] -= hydrogenPerTrace * burnt;
+        x[product] += productPerTrace * burnt;
     }
 
     /**
