@@ -28,19 +28,27 @@ public record Composition(double h1, double he3, double he4, double c12, double 
     public static final double SUM_TOLERANCE = 1.0e-8;
 
     public Composition {
-        double[] parts = {h1, he3, he4, c12, n14, o16, otherMetals, h2, li7};
-        double sum = 0.0;
-        for (double p : parts) {
-            if (!(p >= 0.0) || p > 1.0) {
-                throw new ConvgridException(ErrorKind.BAD_COMPOSITION,
-                        "mass fractions must lie in [0, 1], got " + java.util.Arrays.toString(parts), p);
+        // no array of the nine: compositions are made at every point of every composition step, where the JIT
+        // did not always inline this constructor, and an array handed to the message escaped
+        if (!(fraction(h1) && fraction(he3) && fraction(he4) && fraction(c12) && fraction(n14) && fraction(o16)
+                && fraction(otherMetals) && fraction(h2) && fraction(li7))) {
+            double[] parts = {h1, he3, he4, c12, n14, o16, otherMetals, h2, li7};
+            for (double p : parts) {
+                if (!fraction(p)) {
+                    throw new ConvgridException(ErrorKind.BAD_COMPOSITION,
+                            "mass fractions must lie in [0, 1], got " + java.util.Arrays.toString(parts), p);
+                }
             }
-            sum += p;
         }
+        double sum = h1 + he3 + he4 + c12 + n14 + o16 + otherMetals + h2 + li7;
         if (Math.abs(sum - 1.0) > SUM_TOLERANCE) {
             throw new ConvgridException(ErrorKind.BAD_COMPOSITION,
                     "mass fractions sum to " + sum + ", not 1", sum);
         }
+    }
+
+    private static boolean fraction(double p) {
+        return p >= 0.0 && p <= 1.0;
     }
 
     /** A composition without deuterium and 7Li. */

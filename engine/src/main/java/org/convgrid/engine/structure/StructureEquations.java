@@ -8,8 +8,8 @@ import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.physics.atmosphere.SurfaceCondition;
+import org.convgrid.engine.physics.eos.EosAtComposition;
 import org.convgrid.engine.physics.eos.EosState;
-import org.convgrid.engine.physics.nuclear.BurningRate;
 import org.convgrid.engine.physics.opacity.OpacityValue;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.units.Constants;
@@ -66,6 +66,8 @@ public final class StructureEquations implements DifferenceSystem {
     private final int n;
 
     private final EosState[] eos;
+    /** The equation of state at each point's composition (made again when the composition changes). */
+    private final EosAtComposition[] eosAtComposition;
     private final OpacityValue[] opacity;
     private final ConvectiveGradient[] convection;
     /** The convection model's slopes at each convective point, null where it gives none or the point is stable. */
@@ -85,6 +87,8 @@ public final class StructureEquations implements DifferenceSystem {
      * iterations out of 645 (figures there).
      */
     private final EosCurvature[] curvature;
+    /** Scratch of {@link org.convgrid.engine.physics.nuclear.NuclearNetwork#energy}: eps and its two slopes. */
+    private final double[] burning = new double[3];
 
     /**
      * @param mesh mass coordinates
@@ -128,6 +132,7 @@ public final class StructureEquations implements DifferenceSystem {
         this.nablaMu = nablaMu == null ? new double[n] : nablaMu.clone();
         this.extra = extra;
         this.eos = new EosState[n];
+        this.eosAtComposition = new EosAtComposition[n];
         this.opacity = new OpacityValue[n];
         this.convection = new ConvectiveGradient[n];
         this.convectionSlopes = new MixingLengthSolution[n];
@@ -242,26 +247,31 @@ public final class StructureEquations implements DifferenceSystem {
         double rho = Math.exp(lnRho);
         double t = Math.exp(lnT);
         Composition c = compositionRule == null ? composition[k] : compositionRule.at(k, rho, t);
+        if (c != composition[k] || eosAtComposition[k] == null) {
+            eosAtComposition[k] = physics.eos().atComposition(c);
+        }
         composition[k] = c;
-        // the previous iteration's state of this point starts the equation of state's own solve
-        EosState s = eos[k] == null ? physics.eos().atDensity(rho, t, c) : physics.eos().atDensity(rho, t, c, eos[k]);
+        EosAtComposition equationOfState = eosAtComposition[k];
+        // the previous iteration's state of this point starts the equation of state's own solve (none: cold start)
+        EosState s = equationOfState.atDensity(rho, t, eos[k]);
         OpacityValue op = physics.opacity().rosselandMean(rho, t, c);
-        BurningRate burn = physics.nuclear().burn(rho, t, c);
+        physics.nuclear().energy(rho, t, c, burning);
+        double epsBurning = burning[0];
         eos[k] = s;
         opacity[k] = op;
-        epsNuclear[k] = burn.eps();
+        epsNuclear[k] = epsBurning;
         double r = Math.exp(lnR);
         nabla[k] = localNabla(k, r, lum, s, op.kappa(), true);
         // the extra source with its analytic derivatives when it has them (null: differentiated numerically below)
         ExtraEnergy.Rate extraRate = derivatives ? extra.withSlopes(k, s) : null;
         double ex = extraRate != null ? extraRate.value() : extra.at(k, s);
-        double nuclear = burningFactor * burn.eps();
+        double nuclear = burningFactor * epsBurning;
         eps[k] = nuclear + ex;
         if (!derivatives) {
             return;
         }
-        dEps[2 * k] = nuclear * burn.dlnEpsDlnRho();
-        dEps[2 * k + 1] = nuclear * burn.dlnEpsDlnT();
+        dEps[2 * k] = nuclear * burning[1];
+        dEps[2 * k + 1] = nuclear * burning[2];
         if (compositionRule != null && nuclear * mesh.totalMass() > SLAVED_BURNING_THRESHOLD * luminosityScale) {
             // the slaved abundances (e.g. equilibrium 3He) change eps with the state: differentiate through them
             double h = DIFFERENCE_STEP;
@@ -298,8 +308,8 @@ public final class StructureEquations implements DifferenceSystem {
             return;
         }
         // the perturbed states start from the unperturbed one (one or two neutrality steps each)
-        EosState sRho = physics.eos().atDensity(rho * stepFactor, t, c, s);
-        EosState sT = physics.eos().atDensity(rho, t * stepFactor, c, s);
+        EosState sRho = equationOfState.atDensity(rho * stepFactor, t, s);
+        EosState sT = equationOfState.atDensity(rho, t * stepFactor, s);
         curvature[k] = differenced(s, sRho, sT, lnRho, lnT);
         if (extraRate == null) {
             dEps[2 * k] += (extra.at(k, sRho) - ex) / h;

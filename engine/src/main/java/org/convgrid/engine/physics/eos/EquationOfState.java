@@ -28,6 +28,16 @@ public interface EquationOfState {
     }
 
     /**
+     * This equation of state at one fixed composition, for repeated calls with it (a point of a structure solve).
+     * The default hands the composition to the methods above at each call; an implementation with per-composition
+     * constants prepares them once here, with the same results.
+     */
+    default EosAtComposition atComposition(Composition composition) {
+        return (density, temperature, nearby) -> nearby == null ? atDensity(density, temperature, composition)
+                : atDensity(density, temperature, composition, nearby);
+    }
+
+    /**
      * Inverts the equation of state for the density.
      *
      * @param pressure total pressure (gas + radiation), dyn cm^-2

@@ -99,9 +99,7 @@ public final class StellarPlasmaEos implements EquationOfState {
     @Override
     public EosState atDensity(double density, double temperature, Composition composition) {
         checkDomain(density, temperature);
-        PlasmaPoint p = point(composition);
-        solve(p, density, temperature, fullyIonisedEta(p, density, temperature));
-        return state(p);
+        return coldStart(point(composition), density, temperature);
     }
 
     /**
@@ -111,10 +109,34 @@ public final class StellarPlasmaEos implements EquationOfState {
     @Override
     public EosState atDensity(double density, double temperature, Composition composition, EosState nearby) {
         checkDomain(density, temperature);
-        PlasmaPoint p = point(composition);
+        return nearbyStart(point(composition), density, temperature, nearby);
+    }
+
+    /**
+     * The composition constants made once for every call of the answer (where {@link #point}'s one-entry cache
+     * would remake them at each point of a structure solve whose neighbouring shells differ in composition:
+     * 26 MB of the 325 MB a 1 Msun zero-age track allocated); the calls use this thread's scratch point.
+     */
+    @Override
+    public EosAtComposition atComposition(Composition composition) {
+        PlasmaComposition constants = new PlasmaComposition(elements, composition);
+        return (density, temperature, nearby) -> {
+            checkDomain(density, temperature);
+            PlasmaPoint p = scratch.get().point.use(constants);
+            return nearby == null ? coldStart(p, density, temperature)
+                    : nearbyStart(p, density, temperature, nearby);
+        };
+    }
+
+    private static EosState coldStart(PlasmaPoint p, double density, double temperature) {
+        solve(p, density, temperature, fullyIonisedEta(p, density, temperature));
+        return state(p);
+    }
+
+    private static EosState nearbyStart(PlasmaPoint p, double density, double temperature, EosState nearby) {
         double guess = Math.max(-PlasmaPoint.ETA_LIMIT + 1.0, Math.min(PlasmaPoint.ETA_LIMIT - 1.0, nearby.eta()));
         if (!Double.isFinite(guess)) {
-            return atDensity(density, temperature, composition);
+            return coldStart(p, density, temperature);
         }
         p.prepare(density, temperature, guess);
         iterate(p, density, temperature, guess);

@@ -33,7 +33,7 @@ import org.convgrid.engine.units.Constants;
  * the {@link RateFactors} from the rates its burn evaluated. Allocation: one {@link PlasmaState}, a three-element work array and the result record per call, which
  * the JIT compiler keeps off the heap but for the result (the point's rates stay local variables for that reason: an
  * object holding them, passed from where they are evaluated to where they are used, doubled a microphysics point's
- * allocation).
+ * allocation); {@link #energy} makes no result record.
  */
 public final class HydrogenBurningNetwork implements NuclearNetwork {
 
@@ -76,22 +76,35 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
 
     @Override
     public BurningRate burn(double density, double temperature, Composition composition) {
-        return burn(density, temperature, composition, null);
+        return burn(density, temperature, composition, null, null);
+    }
+
+    /**
+     * {@link #burn}'s eps and slopes without its result record: burn is too large for the JIT to inline into a
+     * caller, so the record it returns is always allocated (36 MB of the 325 MB a 1 Msun zero-age track allocated,
+     * one per point of every structure evaluation).
+     */
+    @Override
+    public void energy(double density, double temperature, Composition composition, double[] into) {
+        burn(density, temperature, composition, null, into);
     }
 
     /** {@link #burn} with the six screened {@code rho N_A<sigma v>} its rates are made of. */
     @Override
     public BurningAndFactors burnAndFactors(double density, double temperature, Composition composition) {
         double[] k = new double[RateFactors.SPECIES];
-        BurningRate rate = burn(density, temperature, composition, k);
+        BurningRate rate = burn(density, temperature, composition, k, null);
         return new BurningAndFactors(rate, Optional.of(new RateFactors(k[0], k[1], k[2], k[3], k[4], k[5])));
     }
 
     /**
      * @param factors null, or {@link RateFactors#SPECIES} elements that receive the factors of pp, 3He+3He, 3He+4He,
      *                12C+p, 14N+p and 16O+p (the order of the {@link RateFactors} components)
+     * @param energy null for the whole rate; or three elements that receive eps, dln eps/dln rho and dln eps/dln T,
+     *               and then no rate is made (null is returned): {@link #energy}
      */
-    private BurningRate burn(double density, double temperature, Composition composition, double[] factors) {
+    private BurningRate burn(double density, double temperature, Composition composition, double[] factors,
+                             double[] energy) {
         checkState(density, temperature);
         PlasmaState plasma = plasma(density, temperature, composition);
         double t9 = temperature * 1.0e-9;
@@ -205,14 +218,20 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
                 + e2 * (1.0 + d2)
                 + e7 * (1.0 + d7);
 
+        double dlnEpsDlnRho = eps > 0.0 ? dEpsDlnRho / eps : 0.0;
+        double dlnEpsDlnT = eps > 0.0 ? dEpsDlnT / eps : 0.0;
+        if (energy != null) {
+            energy[0] = eps;
+            energy[1] = dlnEpsDlnRho;
+            energy[2] = dlnEpsDlnT;
+            return null;
+        }
         double cno = r12 + r14 + r16;
         double dy1 = -3.0 * r11 + 2.0 * r33 - r34 - 2.0 * cno - r2 - r7;
         double dy3 = r11 - 2.0 * r33 - r34 + r2;
         double dy4 = r33 + r34 + r14 + r16 + 2.0 * r7;
-        return new BurningRate(eps, epsPp, epsCno,
-                eps > 0.0 ? dEpsDlnRho / eps : 0.0, eps > 0.0 ? dEpsDlnT / eps : 0.0,
-                dy1, 3.0 * dy3, 4.0 * dy4, 12.0 * (r14 - r12), 14.0 * (r12 - r14 + r16), -16.0 * r16,
-                -2.0 * r2, -7.0 * r7);
+        return new BurningRate(eps, epsPp, epsCno, dlnEpsDlnRho, dlnEpsDlnT, dy1, 3.0 * dy3, 4.0 * dy4,
+                12.0 * (r14 - r12), 14.0 * (r12 - r14 + r16), -16.0 * r16, -2.0 * r2, -7.0 * r7);
     }
 
     /**

@@ -15,6 +15,21 @@ public interface NuclearNetwork {
     BurningRate burn(double density, double temperature, Composition composition);
 
     /**
+     * {@link #burn}'s energy generation alone, written into {@code into}: [0] eps, erg g^-1 s^-1, [1] dln eps/dln rho,
+     * [2] dln eps/dln T (the same values as {@link #burn}'s). For a caller that evaluates many points and needs no
+     * composition rates (the structure equations), with a scratch array of its own: a network may give these
+     * without making the whole {@link BurningRate} (this default takes them from {@link #burn}).
+     *
+     * @param into at least three elements
+     */
+    default void energy(double density, double temperature, Composition composition, double[] into) {
+        BurningRate r = burn(density, temperature, composition);
+        into[0] = r.eps();
+        into[1] = r.dlnEpsDlnRho();
+        into[2] = r.dlnEpsDlnT();
+    }
+
+    /**
      * The composition with 3He and the CN isotopes at their local equilibrium abundances where these are reached
      * (used for zero-age models); hydrogen, 4He, oxygen and the other metals are unchanged apart from the
      * mass moved between them to keep the sum one.

@@ -121,12 +121,14 @@ final class AnalyticallyEdgedTable {
         double offsetR = rc == lr ? edge[2] - ae.dlnKappaDlnRho() : 0.0;
         double widthT = lt < tc ? -coolWidth : edgeWidth;
         double widthR = lr < rc ? -edgeWidth : lr > maxLogR ? denseWidth : edgeWidth;
-        double[] fadeT = fade((lt - tc) / widthT);
-        double[] fadeR = fade((lr - rc) / widthR);
-        double weight = fadeT[0] * fadeR[0];
+        double uT = (lt - tc) / widthT;
+        double uR = (lr - rc) / widthR;
+        double fadeT = fade(uT);
+        double fadeR = fade(uR);
+        double weight = fadeT * fadeR;
         out[0] += weight * offset;
-        out[1] += fadeT[1] / widthT * fadeR[0] * offset + weight * offsetT;
-        out[2] += fadeT[0] * fadeR[1] / widthR * offset + weight * offsetR;
+        out[1] += fadeSlope(uT) / widthT * fadeR * offset + weight * offsetT;
+        out[2] += fadeT * fadeSlope(uR) / widthR * offset + weight * offsetR;
     }
 
     /**
@@ -149,14 +151,23 @@ final class AnalyticallyEdgedTable {
                 || lr > maxLogR + denseWidth;
     }
 
-    /** 1 - 3u^2 + 2u^3 on [0, 1], 1 below, 0 above; returns {value, d/du}. */
-    static double[] fade(double u) {
+    /**
+     * 1 - 3u^2 + 2u^3 on [0, 1], 1 below, 0 above. Value and slope ({@link #fadeSlope}) are two scalars rather than
+     * one array: the array of the old single method was allocated at every opacity call in the blend, since its
+     * three return paths defeat the JIT's escape analysis.
+     */
+    static double fade(double u) {
         if (u <= 0.0) {
-            return new double[] {1.0, 0.0};
+            return 1.0;
         }
         if (u >= 1.0) {
-            return new double[] {0.0, 0.0};
+            return 0.0;
         }
-        return new double[] {1.0 - u * u * (3.0 - 2.0 * u), -6.0 * u * (1.0 - u)};
+        return 1.0 - u * u * (3.0 - 2.0 * u);
+    }
+
+    /** d {@link #fade}/du: -6u(1 - u) on [0, 1], 0 outside. */
+    static double fadeSlope(double u) {
+        return u <= 0.0 || u >= 1.0 ? 0.0 : -6.0 * u * (1.0 - u);
     }
 }

@@ -202,19 +202,20 @@ public final class OpalGn93Opacity implements Opacity {
     private void blend(double density, double temperature, Composition composition, double lt, double lr,
                        double[] out) {
         double width = BLEND_TO_LOG_T - BLEND_FROM_LOG_T;
-        double[] w = AnalyticallyEdgedTable.fade((lt - BLEND_FROM_LOG_T) / width);
-        if (w[0] == 1.0) {
+        double u = (lt - BLEND_FROM_LOG_T) / width;
+        double w = AnalyticallyEdgedTable.fade(u);
+        if (w == 1.0) {
             cool.logKappa(density, temperature, composition, lt, lr, out);
-        } else if (w[0] == 0.0) {
+        } else if (w == 0.0) {
             hot.logKappa(density, temperature, composition, lt, lr, out);
         } else {
             double[] h = new double[3];
             hot.logKappa(density, temperature, composition, lt, lr, h);
             cool.logKappa(density, temperature, composition, lt, lr, out);
             double diff = out[0] - h[0];
-            out[1] = h[1] + w[0] * (out[1] - h[1]) + w[1] / width * diff;
-            out[2] = h[2] + w[0] * (out[2] - h[2]);
-            out[0] = h[0] + w[0] * diff;
+            out[1] = h[1] + w * (out[1] - h[1]) + AnalyticallyEdgedTable.fadeSlope(u) / width * diff;
+            out[2] = h[2] + w * (out[2] - h[2]);
+            out[0] = h[0] + w * diff;
         }
     }
 

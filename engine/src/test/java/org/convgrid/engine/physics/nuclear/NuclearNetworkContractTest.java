@@ -57,6 +57,23 @@ abstract class NuclearNetworkContractTest {
     }
 
     @Test
+    void energyIsTheBurnsEpsAndSlopesBitForBit() {
+        // Consistency, no published value: energy() is burn() without its composition rates, so the structure
+        // equations get the same digits from either; with and without deuterium and 7Li, burning and cold points.
+        Composition withHe3 = SOLAR.withHydrogenAndHelium(0.70 - 1e-4, 1e-4, SOLAR.he4());
+        Composition birth = BirthAbundances.of(0.70, 0.02);
+        double[][] points = {{152.9, 1.567e7}, {30.0, 2.8e7}, {1.0, 3.0e6}, {1.0e-4, 5.0e5}};
+        double[] into = new double[3];
+        for (Composition c : new Composition[] {SOLAR, withHe3, birth}) {
+            for (double[] p : points) {
+                BurningRate r = network().burn(p[0], p[1], c);
+                network().energy(p[0], p[1], c, into);
+                assertThat(into).containsExactly(r.eps(), r.dlnEpsDlnRho(), r.dlnEpsDlnT());
+            }
+        }
+    }
+
+    @Test
     void equilibriumKeepsTheMassFractionsSummingToOne() {
         // Composition's constructor enforces the sum; also hydrogen only pays for what 3He and CN gained.
         for (double t : new double[] {4e6, 1.2e7, 3e7}) {
