@@ -775,10 +775,10 @@ public final class MainSequenceEvolver {
      * (their first correction lies elsewhere: envelope density, surface L). The 11th and 12th, the first two after
      * the central 12C has settled, take it too because the parabola through models whose L_nuc still fell carried
      * that fall on (first correction 1.5e-2 and 4.4e-3 in L near the centre -> 1.2e-3 and 8e-4, 4 -> 3 iterations
-     * each; main sequence 355 -> 353). Tried and not kept: the test on the 12C of every point instead of the centre holds at every step of
-     * both tracks (the core's edge burns its 12C all along): birth 360 -> 352, the zero-age track 345 -> 346, at
-     * 500 network calls a step. A guess the network cannot evaluate is left as it was. All models share the
-     * guess's mesh.
+     * each; main sequence 355 -> 353). Tried and not kept: the test on the 12C of every point instead of the
+     * centre holds at every step of both tracks (the core's edge burns its 12C all along): birth 360 -> 352, the
+     * zero-age track 345 -> 346, at 500 network calls a step. A guess the network cannot evaluate is left as it
+     * was. All models share the guess's mesh.
      */
     private ModelState withStepsNuclearLuminosity(ModelState guess, StellarModel previous, StellarModel older,
                                                   StellarModel oldest, double olderStep, double oldestStep,
