@@ -497,7 +497,12 @@ public final class MainSequenceEvolver {
                         && oldestStep > 0.0 && dt <= MAX_EXTRAPOLATION_RATIO * oldestStep;
                 ModelState extrapolatedGuess = extrapolated(guess, older.state(), gOlder,
                         curved ? oldest.state() : null, gOldest, gDt, young);
-                if (!young && burningTransient(startComp[0], comp[0])) {
+                // also when the transient shows only in the steps the extrapolation goes through: the parabola through
+                // models whose nuclear luminosity still fell with the 12C carries that fall on after the 12C has
+                // settled (see withStepsNuclearLuminosity)
+                if (!young && (burningTransient(startComp[0], comp[0])
+                        || burningTransient(older.state().composition(0), previous.state().composition(0))
+                        || curved && burningTransient(oldest.state().composition(0), older.state().composition(0)))) {
                     extrapolatedGuess = withStepsNuclearLuminosity(extrapolatedGuess, previous, older,
                             curved ? oldest : null, gOlder, gOldest, gDt);
                 }
@@ -591,12 +596,23 @@ public final class MainSequenceEvolver {
         if (light == null) {
             return new EndOfStep(end, null);
         }
-        StepStart at = StepStart.of(end);
+        // the density, temperature and convective flags alone, read from the profile (a StepStart would also copy
+        // the pressures, energies and equation-of-state states, which the rates do not need)
+        StellarProfile p = end.profile();
+        int n = p.size();
+        double[] rho = new double[n];
+        double[] t = new double[n];
+        boolean[] convective = new boolean[n];
+        for (int k = 0; k < n; k++) {
+            rho[k] = p.density(k);
+            t[k] = p.temperature(k);
+            convective[k] = p.convective(k);
+        }
         MassMesh mesh = end.state().mesh();
-        boolean[] mixed = physics.overshoot().mixedPoints(mesh::mass, at.convective(), end.profile());
+        boolean[] mixed = physics.overshoot().mixedPoints(mesh::mass, convective, p);
         Composition[] comp = end.state().compositions();
-        LightElementRates atEnd = LightElementRates.of(physics.nuclear(), PointCells.masses(mesh), mixed, comp,
-                at.density(), at.temperature());
+        LightElementRates atEnd = LightElementRates.of(physics.nuclear(), PointCells.masses(mesh), mixed, comp, rho,
+                t);
         Composition[] corrected = LightElementBurning.corrected(comp, light.used(), light.atStart(), atEnd,
                 light.dt());
         return new EndOfStep(new StellarModel(end.state().withCompositions(corrected), end.profile(), end.global(),
@@ -755,12 +771,14 @@ public final class MainSequenceEvolver {
      * so the first Newton correction of the core's L was 3-9 % (1e-3 on the zero-age track) and each of those
      * steps took 4 iterations instead of 3. Measured, 1 Msun, Z = 0.02 from birth: the first correction of the
      * 5th-10th main-sequence steps 6-9e-2 -> 2e-3-1e-2, 4 -> 3 iterations each (main sequence 360 -> 354; 500
-     * network calls in each of the ~10 steps it runs, a fifth of one Newton iteration's work); the 1st-4th and
-     * 11th-12th keep 4 (their first correction lies elsewhere: envelope density, surface L, the 12C off the
-     * centre). Tried and not kept: the test on the 12C of every point instead of the centre holds at every step of
-     * both tracks (the core's edge burns its 12C all along): birth 360 -> 352, the zero-age track 345 -> 346, at
-     * 500 network calls a step. A guess the network cannot evaluate is left as it was. All models share the
-     * guess's mesh.
+     * network calls in each of the ~10 steps it runs, a fifth of one Newton iteration's work); the 1st-4th keep 4
+     * (their first correction lies elsewhere: envelope density, surface L). The 11th and 12th, the first two after
+     * the central 12C has settled, take it too because the parabola through models whose L_nuc still fell carried
+     * that fall on (first correction 1.5e-2 and 4.4e-3 in L near the centre -> 1.2e-3 and 8e-4, 4 -> 3 iterations
+     * each; main sequence 355 -> 353). Tried and not kept: the test on the 12C of every point instead of the
+     * centre holds at every step of both tracks (the core's edge burns its 12C all along): birth 360 -> 352, the
+     * zero-age track 345 -> 346, at 500 network calls a step. A guess the network cannot evaluate is left as it
+     * was. All models share the guess's mesh.
      */
     private ModelState withStepsNuclearLuminosity(ModelState guess, StellarModel previous, StellarModel older,
                                                   StellarModel oldest, double olderStep, double oldestStep,

@@ -48,6 +48,8 @@ class BirthCostProbe {
         // the steps are the same in every run, and noise only ever adds time
         double[] zeroLeast = null;
         double[] birthLeast = null;
+        // which entries of birthLeast are past the track's zero-age main sequence (the same in every run)
+        boolean[] pastZams = null;
         double[] zamsCpuRuns = new double[repeats];
         double[] birthCpuRuns = new double[repeats];
         for (int r = 0; r < repeats; r++) {
@@ -97,6 +99,10 @@ class BirthCostProbe {
             }
             birthLeast = leastSoFar(birthLeast, birthPerStep, startCpu * 1e-9);
             double zams = recorder.events().zeroAgeMainSequence();
+            pastZams = new boolean[stepCpu.size() + 1];
+            for (int i = 1; i < stepCpu.size(); i++) {
+                pastZams[i + 1] = stepCpu.get(i)[0] > zams;
+            }
             double pre = 0.0;
             double post = 0.0;
             int preSteps = 0;
@@ -124,6 +130,14 @@ class BirthCostProbe {
         double birthSum = java.util.Arrays.stream(birthLeast).sum();
         System.out.printf("thread CPU, each step's least over %d runs, summed: from ZAMS %.3f s, from birth %.3f s, "
                 + "ratio %.3f%n", repeats, zeroSum, birthSum, birthSum / zeroSum);
+        double rest = 0.0;
+        for (int i = 0; i < birthLeast.length; i++) {
+            rest += pastZams[i] ? birthLeast[i] : 0.0;
+        }
+        System.out.printf("the same split: birth start model %.3f s, to the ZAMS %.3f s, the rest %.3f s; zero-age "
+                + "model %.3f s, its steps %.3f s (rest / zero-age steps %.3f)%n", birthLeast[0],
+                birthSum - birthLeast[0] - rest, rest, zeroLeast[0], zeroSum - zeroLeast[0],
+                rest / (zeroSum - zeroLeast[0]));
         double medianZams = median(zamsCpuRuns);
         double medianBirth = median(birthCpuRuns);
         System.out.printf("thread CPU, medians of %d: from ZAMS %.3f s, from birth %.3f s, ratio %.3f%n", repeats,
