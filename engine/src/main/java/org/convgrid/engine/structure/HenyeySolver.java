@@ -64,6 +64,10 @@ public final class HenyeySolver {
         public Settings withIterationBudget(int budget) {
             return new Settings(tolerance, maxStep, budget);
         }
+
+        public Settings withTolerance(double largestCorrection) {
+            return new Settings(largestCorrection, maxStep, iterationBudget);
+        }
     }
 
     /**
