@@ -50,6 +50,8 @@ class BirthCostProbe {
         double[] birthLeast = null;
         double[] zamsCpuRuns = new double[repeats];
         double[] birthCpuRuns = new double[repeats];
+        // steps before the zero-age main sequence (the same in every run), for the split of the least sums
+        int youngSteps = 0;
         for (int r = 0; r < repeats; r++) {
             long t0 = System.nanoTime();
             long c0 = threads.getCurrentThreadCpuTime();
@@ -110,6 +112,7 @@ class BirthCostProbe {
                     post += stepCpu.get(i)[1];
                 }
             }
+            youngSteps = preSteps;
             System.out.printf("run %d: zams %s at %.4g Gyr, birth %s at %.4g Gyr (ZAMS at %.4g Myr); thread CPU from ZAMS "
                     + "%.3f s, from birth %.3f s (ratio %.3f): start model %.3f s, %d steps to the ZAMS %.3f s (%d "
                     + "Newton iterations), the rest %.3f s%n", r, ms.end(), ms.endAge() / Constants.GYR, track.end(),
@@ -124,6 +127,10 @@ class BirthCostProbe {
         double birthSum = java.util.Arrays.stream(birthLeast).sum();
         System.out.printf("thread CPU, each step's least over %d runs, summed: from ZAMS %.3f s, from birth %.3f s, "
                 + "ratio %.3f%n", repeats, zeroSum, birthSum, birthSum / zeroSum);
+        // birthLeast: the start model, the evolver's first call (the start model itself), then one entry per step
+        double youngSum = java.util.Arrays.stream(birthLeast, 2, 2 + youngSteps).sum();
+        System.out.printf("  of which: start model %.4f s, %d steps to the ZAMS %.4f s, the rest %.4f s%n",
+                birthLeast[0], youngSteps, youngSum, birthSum - birthLeast[0] - youngSum);
         double medianZams = median(zamsCpuRuns);
         double medianBirth = median(birthCpuRuns);
         System.out.printf("thread CPU, medians of %d: from ZAMS %.3f s, from birth %.3f s, ratio %.3f%n", repeats,
