@@ -120,6 +120,33 @@ public final class MainSequenceEvolver {
     public static final double TRANSIENT_CARBON_CHANGE = 0.1;
     /** Newton budget of one step's structure relaxation (a failure halves the step). */
     public static final int RELAXATION_BUDGET = 30;
+    /**
+     * Before the zero-age main sequence, the largest Newton correction (ln units; L relative) at which a step's
+     * relaxation returns its state, when the solver's own tolerance is tighter. Why: the state returned lies within
+     * its last correction of the solution, and what the pre-main-sequence results need is far coarser: their time
+     * discretisation moves the ZAMS age by ~1 % when every step limit is quartered (ZamsArrivalProbe). With the
+     * solver's 1e-8 the last iteration of 20-30 of the 78 steps of a 1 Msun track only confirmed a correction of
+     * 1e-8 to 1e-6 left by the one before (quadratic convergence: the next one was 1e-10 to 1e-12). Measured, 1 Msun,
+     * Z = 0.02, birth to core-hydrogen exhaustion (BirthStepLimitProbe): 636 -> 604 Newton iterations (all before
+     * the ZAMS), the same 224 steps, ZAMS 1.208157376716e15 -> 1.208157342292e15 s, exhaustion 3.084511530599e17
+     * -> 3.084511523461e17 s, surface 7Li 2.193079048353e-9 -> 2.193077194853e-9 (1e-7: 615 iterations); the ZAMS
+     * ages of 0.5-3 Msun at every step limit x1 and x0.25 the same to four digits. Practice, chosen here from these
+     * measurements (no single source).
+     */
+    public static final double YOUNG_TOLERANCE = 1.0e-6;
+    /**
+     * Before the zero-age main sequence, the largest Newton correction after which a step's relaxation reuses its
+     * factorised Jacobian ({@link HenyeySolver.Settings#reuseThreshold()}), instead of the solver's 1e-3. Why: the
+     * first corrections of those steps are ~1e-2 (inner L, the outer layers' ln rho and ln T), and from there the
+     * chord steps reach {@link #YOUNG_TOLERANCE} in as many iterations as Newton's, each without the Jacobian's extra
+     * equation-of-state calls and factorisation (~40 % of an iteration's CPU before the ZAMS, thread CPU). Measured,
+     * 1 Msun, Z = 0.02, the 78 steps before the ZAMS: 251 iterations with 178 Jacobians at 1e-3; 251 with 145 at
+     * 1e-2; 256 with 135, 266 with 119 and 289 with 102 (14 of them retaken after a slow chord step) at 2e-2, 3e-2
+     * and 1e-1. Thread CPU of those steps, per-step least of 15 runs summed, interleaved at load 5-7 on 2 cores:
+     * 0.240/0.241 s at 1e-3, 0.238/0.232 s at 1e-2 (medians of the runs 0.310/0.309 and 0.290/0.281 s). Practice,
+     * chosen here from these measurements (no single source).
+     */
+    public static final double YOUNG_REUSE_THRESHOLD = 1.0e-2;
 
     /**
      * Time-step and stopping settings.
@@ -152,6 +179,11 @@ public final class MainSequenceEvolver {
     private final MeshPlanner planner;
     private final StructureSolver solver;
     private final HenyeySolver.Settings solveSettings;
+    /**
+     * The relaxation settings of a step before the zero-age main sequence ({@link #YOUNG_TOLERANCE}, {@link
+     * #YOUNG_REUSE_THRESHOLD}).
+     */
+    private final HenyeySolver.Settings youngSolveSettings;
     private final CompositionStep network;
     private final CompositionStep youngNetwork;
     private final Settings settings;
@@ -168,6 +200,8 @@ public final class MainSequenceEvolver {
         this.physics = physics;
         this.planner = planner;
         this.solveSettings = solveSettings;
+        this.youngSolveSettings = solveSettings.withTolerance(Math.max(solveSettings.tolerance(), YOUNG_TOLERANCE))
+                .withReuseThreshold(Math.max(solveSettings.reuseThreshold(), YOUNG_REUSE_THRESHOLD));
         this.solver = new StructureSolver(physics, solveSettings);
         this.network = new CompositionStep(physics.nuclear());
         this.youngNetwork = network.withTraceLimit(YOUNG_TRACE_CHANGE);
@@ -490,6 +524,7 @@ public final class MainSequenceEvolver {
         double gOldest = clock == null ? oldestStep : clock[1];
         double gDt = clock == null ? dt : clock[2];
         ModelState guess = start.state().withCompositions(comp);
+        HenyeySolver.Settings stepSettings = young ? youngSolveSettings : solveSettings;
         if (sameMesh) {
             try {
                 // the curvature from a third model under the same trust rule as the slope
@@ -506,7 +541,7 @@ public final class MainSequenceEvolver {
                     extrapolatedGuess = withStepsNuclearLuminosity(extrapolatedGuess, previous, older,
                             curved ? oldest : null, gOlder, gOldest, gDt);
                 }
-                return stepped(lightElementsEnd(solver.relax(extrapolatedGuess, grav, nablaMu, solveSettings,
+                return stepped(lightElementsEnd(solver.relax(extrapolatedGuess, grav, nablaMu, stepSettings,
                         start.eos(), start.curvature()), light), kept);
             } catch (SolveFailedException e) {
                 // an extrapolation that overshoots (e.g. across a change of the convective zones) is no worse
@@ -521,13 +556,13 @@ public final class MainSequenceEvolver {
                 double[][] now = young ? filledNow : carriedNow;
                 double[][] before = young ? filledBefore : carriedBefore;
                 return stepped(lightElementsEnd(solver.relax(carried(guess, now, before, gOlder,
-                        curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, solveSettings,
+                        curved ? oldest.state() : null, gOldest, gDt, young), grav, nablaMu, stepSettings,
                         start.eos(), start.curvature()), light), kept);
             } catch (SolveFailedException e) {
                 // as above: fall back to the previous model as the guess
             }
         }
-        return stepped(lightElementsEnd(solver.relax(guess, grav, nablaMu, solveSettings, start.eos(),
+        return stepped(lightElementsEnd(solver.relax(guess, grav, nablaMu, stepSettings, start.eos(),
                 start.curvature()), light), kept);
     }
 

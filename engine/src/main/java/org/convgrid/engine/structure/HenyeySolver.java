@@ -41,7 +41,8 @@ public final class HenyeySolver {
      * equation-of-state calls and the factorisation are saved. Practice, chosen here from measurements: the
      * first corrections of the 1 Msun evolution steps are ~1e-5 to 5e-4 and their chord steps contract by ~1e-4;
      * from 1e-2 the chord steps of a seeded zero-age model (whose Jacobian leaves out the slaved abundances)
-     * contract by only ~0.1 and took two iterations more than Newton's.
+     * contract by only ~0.1 and took two iterations more than Newton's. The default of
+     * {@link Settings#reuseThreshold()}.
      */
     public static final double REUSE_THRESHOLD = 1.0e-3;
     /**
@@ -56,13 +57,28 @@ public final class HenyeySolver {
      * @param tolerance largest correction accepted as converged
      * @param maxStep largest correction applied in one iteration
      * @param iterationBudget Newton iterations allowed
+     * @param reuseThreshold largest correction after which the next iteration reuses the factorised Jacobian
+     *                       ({@link #REUSE_THRESHOLD} by default)
      */
-    public record Settings(double tolerance, double maxStep, int iterationBudget) {
+    public record Settings(double tolerance, double maxStep, int iterationBudget, double reuseThreshold) {
         public static final Settings DEFAULT = new Settings(DEFAULT_TOLERANCE, DEFAULT_MAX_STEP,
                 DEFAULT_ITERATION_BUDGET);
 
+        /** With the default {@link #REUSE_THRESHOLD}. */
+        public Settings(double tolerance, double maxStep, int iterationBudget) {
+            this(tolerance, maxStep, iterationBudget, REUSE_THRESHOLD);
+        }
+
         public Settings withIterationBudget(int budget) {
-            return new Settings(tolerance, maxStep, budget);
+            return new Settings(tolerance, maxStep, budget, reuseThreshold);
+        }
+
+        public Settings withTolerance(double largestCorrection) {
+            return new Settings(largestCorrection, maxStep, iterationBudget, reuseThreshold);
+        }
+
+        public Settings withReuseThreshold(double largestCorrection) {
+            return new Settings(tolerance, maxStep, iterationBudget, largestCorrection);
         }
     }
 
@@ -141,7 +157,7 @@ public final class HenyeySolver {
             boolean searching = largest > settings.maxStep() * LINE_SEARCH_THRESHOLD;
             // near the solution the next step reuses this factorisation (chord, or modified Newton): the
             // Jacobian of the next state differs from this one by about the size of the correction
-            boolean reuse = largest <= REUSE_THRESHOLD;
+            boolean reuse = largest <= settings.reuseThreshold();
             boolean withJacobian = false;
             for (int cut = 0; cut <= MAX_BACKTRACKS && !accepted; cut++) {
                 damp(y, delta, lambda, trial);
