@@ -83,6 +83,11 @@ public final class CompositionStep {
     public static final double TRACE_FLOOR = 1.0e-6;
 
     private final NuclearNetwork network;
+    /**
+     * The network without the light elements' captures, for a step whose light elements burn at rates given to it
+     * (the Newton iteration takes their share out of the rates anyway).
+     */
+    private final NuclearNetwork withoutCaptures;
     private final double maxRelativeChange;
 
     public CompositionStep(NuclearNetwork network) {
@@ -91,6 +96,7 @@ public final class CompositionStep {
 
     private CompositionStep(NuclearNetwork network, double maxRelativeChange) {
         this.network = network;
+        this.withoutCaptures = network.withoutLightElementCaptures();
         this.maxRelativeChange = maxRelativeChange;
     }
 
@@ -130,8 +136,9 @@ public final class CompositionStep {
      * exact step does not evaluate the whole network again for them; null evaluates them here.
      */
     Composition advance(double density, double temperature, Composition start, double dt, double[] captures) {
-        return advance(x -> rates(density, temperature, x), x -> {
-            BurningAndFactors point = network.burnAndFactors(density, temperature, MassFractions.composition(x));
+        NuclearNetwork net = captures == null ? network : withoutCaptures;
+        return advance(x -> rates(net.burn(density, temperature, MassFractions.composition(x))), x -> {
+            BurningAndFactors point = net.burnAndFactors(density, temperature, MassFractions.composition(x));
             RateFactors factors = point.factors().orElse(null);
             return new Linearised(rates(point.rate()),
                     factors == null ? null : (y, out) -> factors.addJacobian(y, 1.0, out), factors);
@@ -176,12 +183,13 @@ public final class CompositionStep {
             total += w;
         }
         double mass = total;
+        NuclearNetwork net = captures == null ? network : withoutCaptures;
         // one composition for all the zone's points, and their rates summed as they come (no array per point)
         Rates zone = x -> {
             Composition c = MassFractions.composition(x);
             double[] mean = new double[N + 2];
             for (int k = 0; k < n; k++) {
-                addRates(mean, weights[k], network.burn(densities[k], temperatures[k], c));
+                addRates(mean, weights[k], net.burn(densities[k], temperatures[k], c));
             }
             return scaled(mean, mass);
         };
@@ -191,7 +199,7 @@ public final class CompositionStep {
             RateFactors[] factors = new RateFactors[n];
             boolean analytic = true;
             for (int k = 0; k < n; k++) {
-                BurningAndFactors point = network.burnAndFactors(densities[k], temperatures[k], c);
+                BurningAndFactors point = net.burnAndFactors(densities[k], temperatures[k], c);
                 addRates(mean, weights[k], point.rate());
                 factors[k] = point.factors().orElse(null);
                 analytic &= factors[k] != null;
@@ -481,13 +489,9 @@ public final class CompositionStep {
 
     /**
      * The rates of the six network species without the part that comes from deuterium and 7Li burning (that part
-     * belongs to {@link LightElementBurning}), then d(deuterium)/dt and d(7Li)/dt.
+     * belongs to {@link LightElementBurning}), then d(deuterium)/dt and d(7Li)/dt, from the network's rate at the
+     * point (0 for those two, and nothing to take out, from the network without their captures).
      */
-    private double[] rates(double density, double temperature, double[] x) {
-        return rates(network.burn(density, temperature, MassFractions.composition(x)));
-    }
-
-    /** {@link #rates(double, double, double[])} from the network's rate at the point. */
     private static double[] rates(BurningRate r) {
         double[] f = new double[N + 2];
         addRates(f, 1.0, r);

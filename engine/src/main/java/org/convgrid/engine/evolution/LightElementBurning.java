@@ -111,6 +111,14 @@ final class LightElementBurning {
                 out[k] = end[k];
                 continue;
             }
+            if (k > 0 && end[k] == end[k - 1] && sameRates(used, k) && sameRates(atStart, k) && sameRates(atEnd, k)) {
+                // a point of the same mixed zone (one composition, one mean rate): the same answer, and the same
+                // object, so that the zone's points keep sharing one composition as the burning left them (1 Msun
+                // main sequence: ~280 compositions and mass-fraction arrays fewer a step; thread CPU unchanged
+                // within the measurement's +-1 %)
+                out[k] = out[k - 1];
+                continue;
+            }
             double[] x = MassFractions.of(end[k]);
             if (x[MassFractions.H2] > 0.0) {
                 double extra = 0.5 * (atStart.deuterium()[k] + atEnd.deuterium()[k]) - used.deuterium()[k];
@@ -123,5 +131,10 @@ final class LightElementBurning {
             out[k] = MassFractions.composition(x);
         }
         return out;
+    }
+
+    /** Whether point k has the rates of point k - 1. */
+    private static boolean sameRates(LightElementRates rates, int k) {
+        return rates.deuterium()[k] == rates.deuterium()[k - 1] && rates.lithium()[k] == rates.lithium()[k - 1];
     }
 }

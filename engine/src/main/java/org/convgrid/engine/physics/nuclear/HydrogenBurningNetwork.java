@@ -56,6 +56,8 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
     private final Screening screening;
     private final MetalCharges metals;
     private final double equilibrationTime;
+    /** Whether {@link #burn} includes d(p,g)3He and 7Li(p,a)4He ({@link #withoutLightElementCaptures}). */
+    private final boolean lightElementCaptures;
 
     /** Salpeter screening, GS98 metals, {@link #DEFAULT_EQUILIBRATION_TIME}. */
     public HydrogenBurningNetwork() {
@@ -72,6 +74,24 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
         this.metals = MetalCharges.of(mixture);
         this.equilibrationTime = ConvgridException.requireInRange("equilibration time", equilibrationTime,
                 0.0, 1.0e20, "s");
+        this.lightElementCaptures = true;
+    }
+
+    private HydrogenBurningNetwork(HydrogenBurningNetwork full) {
+        this.screening = full.screening;
+        this.metals = full.metals;
+        this.equilibrationTime = full.equilibrationTime;
+        this.lightElementCaptures = false;
+    }
+
+    /**
+     * The same network without d(p,g)3He and 7Li(p,a)4He in {@link #burn}: for the composition update, which burns
+     * them in their own exact step, they were two of up to nine screened reactions at every point holding deuterium
+     * or 7Li, evaluated only to be taken out of the rates again.
+     */
+    @Override
+    public NuclearNetwork withoutLightElementCaptures() {
+        return lightElementCaptures ? new HydrogenBurningNetwork(this) : this;
     }
 
     @Override
@@ -169,7 +189,7 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
         double r2 = 0.0;
         double t2 = 0.0;
         double d2 = 0.0;
-        if (y2 > 0.0) {
+        if (y2 > 0.0 && lightElementCaptures) {
             reaction(SolarFusionRates.D_P, t9, cbrtT9, plasma, work);
             r2 = density * y1 * y2 * work[0];
             t2 = work[1];
@@ -178,7 +198,7 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
         double r7 = 0.0;
         double t7 = 0.0;
         double d7 = 0.0;
-        if (y7 > 0.0) {
+        if (y7 > 0.0 && lightElementCaptures) {
             reaction(SolarFusionRates.LI7_P, t9, cbrtT9, plasma, work);
             r7 = density * y1 * y7 * work[0];
             t7 = work[1];

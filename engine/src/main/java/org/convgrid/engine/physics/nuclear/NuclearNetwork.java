@@ -46,6 +46,17 @@ public interface NuclearNetwork {
     }
 
     /**
+     * This network without the proton captures of deuterium and 7Li: its {@link #burn} and {@link #burnAndFactors}
+     * leave out those two reactions (their energy, their dh2Dt and dli7Dt, and their share of the 1H, 3He and 4He
+     * rates), at the same screening (the composition, deuterium and 7Li included, is the same). For a caller that
+     * burns the two in their own exact step and takes their share out of the other rates: a network that does not
+     * offer this gives itself, and the caller's taking out does the same to rounding.
+     */
+    default NuclearNetwork withoutLightElementCaptures() {
+        return this;
+    }
+
+    /**
      * The destruction rates per unit abundance of deuterium and 7Li at this point, the same as {@link #burn}'s
      * -dh2Dt/X_D and -dli7Dt/X_Li; 0 for a species the composition does not hold. For a caller that needs these
      * two alone (the light elements' own exact step): this default takes them from {@link #burn}, and a network

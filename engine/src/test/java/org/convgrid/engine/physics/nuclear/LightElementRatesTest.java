@@ -119,4 +119,33 @@ class LightElementRatesTest {
         assertThat(r.dli7Dt()).isZero();
         assertThat(r.epsPp()).isGreaterThan(0.0);
     }
+
+    @Test
+    void withoutTheCapturesTheRatesAreTheOthersShareAlone() {
+        // d + p -> 3He moves mass 2 + 1 -> 3 and 7Li + p -> 2 4He 7 + 1 -> 8 (mass numbers; Clayton 1968,
+        // Principles of Stellar Evolution and Nucleosynthesis, ch. 5): the network without those two captures gives
+        // the full network's 1H, 3He and 4He rates less that share, nothing for deuterium and 7Li, and the same CN
+        NuclearNetwork without = NETWORK.withoutLightElementCaptures();
+        for (double[] point : new double[][] {{1.0, 1.0e6}, {5.0, 2.6e6}, {80.0, 1.5e7}}) {
+            BurningRate full = NETWORK.burn(point[0], point[1], BIRTH);
+            BurningRate rest = without.burn(point[0], point[1], BIRTH);
+            double d = full.dh2Dt();
+            double li = full.dli7Dt();
+            assertThat(d).isNegative();
+            assertThat(li).isNegative();
+            assertThat(rest.dh2Dt()).isZero();
+            assertThat(rest.dli7Dt()).isZero();
+            double scale = Math.abs(full.dh1Dt()) + Math.abs(d);
+            assertThat(rest.dh1Dt()).isCloseTo(full.dh1Dt() - 0.5 * d - li / 7.0, within(1.0e-13 * scale));
+            assertThat(rest.dhe3Dt()).isCloseTo(full.dhe3Dt() + 1.5 * d, within(1.0e-13 * scale));
+            assertThat(rest.dhe4Dt()).isCloseTo(full.dhe4Dt() + 8.0 / 7.0 * li, within(1.0e-13 * scale));
+            assertThat(rest.dc12Dt()).isEqualTo(full.dc12Dt());
+            assertThat(rest.dn14Dt()).isEqualTo(full.dn14Dt());
+            assertThat(rest.do16Dt()).isEqualTo(full.do16Dt());
+            // the captures alone are the full network's
+            assertThat(without.lightElementCaptures(point[0], point[1], BIRTH))
+                    .isEqualTo(NETWORK.lightElementCaptures(point[0], point[1], BIRTH));
+        }
+        assertThat(without.withoutLightElementCaptures()).isSameAs(without);
+    }
 }
