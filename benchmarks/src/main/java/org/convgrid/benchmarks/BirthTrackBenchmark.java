@@ -34,14 +34,16 @@ import org.openjdk.jmh.annotations.Warmup;
  * JIT compiles on the same core, and the birth track (more code: start model, light elements, remeshing) was still
  * getting faster after three (2026-12-03, -f 3 -wi 3: measured tracks 1022-1447 ms, still falling within a fork;
  * -f 2 -wi 10: 998-1235 ms);
- * two forks, since a fork's compiled code can be faster or slower by ~10 % for its whole life.
+ * six forks of five measured tracks, since a fork's compiled code can be faster or slower by 10-30 % for its whole
+ * life, so the median over many forks, not over one fork's tracks, is the figure (2026-12-03, the same jar: fork
+ * medians 913-1051 ms from birth and 571-760 ms from zero age; their ratio 1.45; runs of two forks had given 1.55-1.78).
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.SingleShotTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
 @Warmup(iterations = 10)
-@Measurement(iterations = 8)
-@Fork(2)
+@Measurement(iterations = 5)
+@Fork(6)
 public class BirthTrackBenchmark {
 
     private static final double Z = 0.02;
