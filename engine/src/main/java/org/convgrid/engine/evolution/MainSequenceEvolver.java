@@ -634,20 +634,11 @@ public final class MainSequenceEvolver {
         // the density, temperature and convective flags alone, read from the profile (a StepStart would also copy
         // the pressures, energies and equation-of-state states, which the rates do not need)
         StellarProfile p = end.profile();
-        int n = p.size();
-        double[] rho = new double[n];
-        double[] t = new double[n];
-        boolean[] convective = new boolean[n];
-        for (int k = 0; k < n; k++) {
-            rho[k] = p.density(k);
-            t[k] = p.temperature(k);
-            convective[k] = p.convective(k);
-        }
         MassMesh mesh = end.state().mesh();
-        boolean[] mixed = physics.overshoot().mixedPoints(mesh::mass, convective, p);
+        boolean[] mixed = physics.overshoot().mixedPoints(mesh::mass, p.convectiveFlags(), p);
         Composition[] comp = end.state().compositions();
-        LightElementRates atEnd = LightElementRates.of(physics.nuclear(), PointCells.masses(mesh), mixed, comp, rho,
-                t);
+        LightElementRates atEnd = LightElementRates.of(physics.nuclear(), PointCells.masses(mesh), mixed, comp,
+                p.densities(), p.temperatures());
         Composition[] corrected = LightElementBurning.corrected(comp, light.used(), light.atStart(), atEnd,
                 light.dt());
         return new EndOfStep(new StellarModel(end.state().withCompositions(corrected), end.profile(), end.global(),

@@ -31,23 +31,14 @@ record StepStart(ModelState state, double[] density, double[] temperature, doubl
     static StepStart of(StellarModel model) {
         StellarProfile p = model.profile();
         int n = p.size();
-        double[] rho = new double[n];
-        double[] t = new double[n];
-        double[] pressure = new double[n];
-        double[] u = new double[n];
-        boolean[] conv = new boolean[n];
         EosState[] eos = new EosState[n];
         EosCurvature[] curvature = new EosCurvature[n];
         for (int k = 0; k < n; k++) {
-            rho[k] = p.density(k);
-            t[k] = p.temperature(k);
-            pressure[k] = p.pressure(k);
-            u[k] = p.internalEnergy(k);
-            conv[k] = p.convective(k);
             eos[k] = p.eosState(k);
             curvature[k] = p.eosCurvature(k);
         }
-        return new StepStart(model.state(), rho, t, pressure, u, conv, eos, curvature);
+        return new StepStart(model.state(), p.densities(), p.temperatures(), p.pressures(), p.internalEnergies(),
+                p.convectiveFlags(), eos, curvature);
     }
 
     /** The model moved onto the mesh {@code planner} chooses with the given extra interval costs. */

@@ -188,6 +188,31 @@ public final class StellarProfile implements OvershootProfile {
         return mass.clone();
     }
 
+    /** Density per point, g cm^-3. */
+    public double[] densities() {
+        return density.clone();
+    }
+
+    /** Temperature per point, K. */
+    public double[] temperatures() {
+        return temperature.clone();
+    }
+
+    /** Pressure per point, dyn cm^-2. */
+    public double[] pressures() {
+        return pressure.clone();
+    }
+
+    /** Specific internal energy per point, erg g^-1. */
+    public double[] internalEnergies() {
+        return internalEnergy.clone();
+    }
+
+    /** Whether each point is convective. */
+    public boolean[] convectiveFlags() {
+        return convective.clone();
+    }
+
     public double[] radii() {
         return radius.clone();
     }
