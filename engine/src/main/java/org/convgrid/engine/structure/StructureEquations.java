@@ -10,7 +10,6 @@ import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.physics.atmosphere.SurfaceCondition;
 import org.convgrid.engine.physics.eos.EosAtComposition;
 import org.convgrid.engine.physics.eos.EosState;
-import org.convgrid.engine.physics.nuclear.NegligibleBurning;
 import org.convgrid.engine.physics.opacity.OpacityValue;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.units.Constants;
@@ -265,14 +264,7 @@ public final class StructureEquations implements DifferenceSystem {
         // the previous iteration's state of this point starts the equation of state's own solve (none: cold start)
         EosState s = equationOfState.atDensity(rho, t, eos[k]);
         OpacityValue op = physics.opacity().rosselandMean(rho, t, c);
-        if (NegligibleBurning.at(rho, t, c)) {
-            // too cool for any reaction to matter (below NegligibleBurning.EPS_BOUND): no network evaluation
-            burning[0] = 0.0;
-            burning[1] = 0.0;
-            burning[2] = 0.0;
-        } else {
-            physics.nuclear().energy(rho, t, c, burning);
-        }
+        physics.nuclear().energy(rho, t, c, burning);
         double epsBurning = burning[0];
         eos[k] = s;
         opacity[k] = op;

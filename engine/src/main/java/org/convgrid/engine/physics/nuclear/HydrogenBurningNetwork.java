@@ -102,10 +102,18 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
     /**
      * {@link #burn}'s eps and slopes without its result record: burn is too large for the JIT to inline into a
      * caller, so the record it returns is always allocated (36 MB of the 325 MB a 1 Msun zero-age track allocated,
-     * one per point of every structure evaluation).
+     * one per point of every structure evaluation). Zero, without evaluating the reactions, where the gas is too cool
+     * for any of them to matter ({@link NegligibleBurning}: eps below {@link NegligibleBurning#EPS_BOUND} there, a
+     * bound that holds for this network's reactions).
      */
     @Override
     public void energy(double density, double temperature, Composition composition, double[] into) {
+        if (NegligibleBurning.at(density, temperature, composition)) {
+            into[0] = 0.0;
+            into[1] = 0.0;
+            into[2] = 0.0;
+            return;
+        }
         burn(density, temperature, composition, null, into);
     }
 

@@ -7,7 +7,8 @@ import org.convgrid.engine.state.Composition;
  * its Coulomb barrier. Charged-particle rates fall as exp(-3 E_0/kT) with the Gamow peak's E_0 ~ T^(1/3) (Clayton
  * 1968, Principles of Stellar Evolution and Nucleosynthesis, ch. 4), so below some temperature every rate is
  * negligible; taking the energy generation there as zero, instead of evaluating nine screened reactions, is common
- * practice (no single source). Why: in a contracting pre-main-sequence star and in the envelope of every star about
+ * practice (no single source). {@link HydrogenBurningNetwork#energy} does so (the structure equations' call); the
+ * composition rates ({@link HydrogenBurningNetwork#burn}) are always evaluated. Why: in a contracting pre-main-sequence star and in the envelope of every star about
  * half of the mesh points are that cool (1 Msun, Z = 0.02: 137 of the start model's 250 points, 116-171 of 250-300
  * before the ZAMS, 234-240 of 500 on the main sequence), and the network was 10-13 % of the CPU of the
  * pre-main-sequence steps.

@@ -16,7 +16,8 @@ public interface NuclearNetwork {
 
     /**
      * {@link #burn}'s energy generation alone, written into {@code into}: [0] eps, erg g^-1 s^-1, [1] dln eps/dln rho,
-     * [2] dln eps/dln T (the same values as {@link #burn}'s). For a caller that evaluates many points and needs no
+     * [2] dln eps/dln T (the same values as {@link #burn}'s, or zeros where the network states that its energy
+     * generation is negligible, e.g. {@link NegligibleBurning}). For a caller that evaluates many points and needs no
      * composition rates (the structure equations), with a scratch array of its own: a network may give these
      * without making the whole {@link BurningRate} (this default takes them from {@link #burn}).
      *

@@ -48,6 +48,19 @@ class NegligibleBurningTest {
         assertThat(energy[0]).isGreaterThan(1.0e6 * NegligibleBurning.EPS_BOUND);
     }
 
+    @Test
+    void energyIsZeroWhereBurningIsNegligibleAndTheBurnsEpsElsewhere() {
+        // Consistency, no published value: the network's energy() skips its reactions exactly where
+        // NegligibleBurning holds (where burn() gives a positive eps below the bound) and nowhere else
+        Composition noDeuterium = composition(0.7, 0.02, 1.0e-4, 0.0, 1.0e-8);
+        java.util.Arrays.fill(energy, Double.NaN);
+        network.energy(1.0e-2, 4.0e5, noDeuterium, energy);
+        assertThat(energy).containsExactly(0.0, 0.0, 0.0);
+        assertThat(network.burn(1.0e-2, 4.0e5, noDeuterium).eps()).isPositive().isLessThan(NegligibleBurning.EPS_BOUND);
+        network.energy(2.0, 4.0e5, noDeuterium, energy);
+        assertThat(energy[0]).isEqualTo(network.burn(2.0, 4.0e5, noDeuterium).eps()).isPositive();
+    }
+
     /** The largest eps over the grid of densities and temperatures where NegligibleBurning holds. */
     private double largestOver(Composition c) {
         double largest = 0.0;
@@ -58,8 +71,8 @@ class NegligibleBurningTest {
                 // the last temperature just below the floor itself
                 double t = Math.min(Math.pow(10.0, lgT), Math.nextDown(floor));
                 assertThat(NegligibleBurning.at(rho, t, c)).isTrue();
-                network.energy(rho, t, c, energy);
-                largest = Math.max(largest, energy[0]);
+                // the reactions themselves (burn): energy() gives zero here
+                largest = Math.max(largest, network.burn(rho, t, c).eps());
             }
         }
         return largest;
