@@ -1,0 +1,80 @@
+package org.convgrid.benchmarks;
+
+import java.util.concurrent.TimeUnit;
+import org.convgrid.engine.physics.StandardPhysics;
+import org.convgrid.engine.physics.eos.EosAtComposition;
+import org.convgrid.engine.physics.eos.EosState;
+import org.convgrid.engine.physics.nuclear.NuclearNetwork;
+import org.convgrid.engine.physics.opacity.Opacity;
+import org.convgrid.engine.state.Composition;
+import org.openjdk.jmh.annotations.Benchmark;
+import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Fork;
+import org.openjdk.jmh.annotations.Measurement;
+import org.openjdk.jmh.annotations.Mode;
+import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Param;
+import org.openjdk.jmh.annotations.Scope;
+import org.openjdk.jmh.annotations.State;
+import org.openjdk.jmh.annotations.Warmup;
+import org.openjdk.jmh.infra.Blackhole;
+
+/**
+ * Cost of one point of equation of state + opacity + nuclear energy generation the way the structure solver calls
+ * them in a Newton iteration, at the points of {@link MicrophysicsBenchmark}: the equation of state bound to the
+ * point's composition ({@code atComposition}) and started from the point's state of the previous iteration,
+ * {@code offset} away in ln rho and in ln T (a time step's first corrections are ~1e-3, its last ~1e-6 and below),
+ * and the network's energy generation with its two slopes only ({@code NuclearNetwork.energy}).
+ * {@link MicrophysicsBenchmark} times the same three from nothing: the equation of state's cold start and the
+ * network's full rates with their composition slopes.
+ */
+@State(Scope.Thread)
+@BenchmarkMode(Mode.AverageTime)
+@OutputTimeUnit(TimeUnit.NANOSECONDS)
+@Warmup(iterations = 3, time = 2)
+@Measurement(iterations = 5, time = 2)
+@Fork(1)
+public class WarmMicrophysicsBenchmark {
+
+    @Param({"centre_sun", "envelope_sun", "centre_m_dwarf", "photosphere_k_dwarf"})
+    public String point;
+
+    /** Distance in ln rho and in ln T from the previous iteration's state. */
+    @Param({"1e-3", "1e-6"})
+    public double offset;
+
+    private final Opacity opacity = StandardPhysics.opacity(1.0);
+    private final NuclearNetwork nuclear = StandardPhysics.nuclearNetwork();
+    private final double[] burning = new double[3];
+    private double density;
+    private double temperature;
+    private Composition composition;
+    private EosAtComposition eos;
+    private EosState previousIteration;
+
+    @org.openjdk.jmh.annotations.Setup
+    public void setUp() {
+        switch (point) {
+            case "centre_sun" -> set(152.9, 1.567e7, 0.346, 0.0188);
+            case "envelope_sun" -> set(0.19, 2.2e6, 0.70, 0.0188);
+            case "centre_m_dwarf" -> set(300.0, 6.0e6, 0.70, 0.0188);
+            default -> set(3e-7, 5000.0, 0.70, 0.0188);
+        }
+    }
+
+    private void set(double rho, double t, double x, double z) {
+        density = rho;
+        temperature = t;
+        composition = nuclear.equilibrium(rho, t, Composition.scaledSolar(x, z));
+        eos = StandardPhysics.equationOfState().atComposition(composition);
+        previousIteration = eos.atDensity(rho * Math.exp(-offset), t * Math.exp(-offset), null);
+    }
+
+    @Benchmark
+    public void asTheSolverCalls(Blackhole hole) {
+        hole.consume(eos.atDensity(density, temperature, previousIteration));
+        hole.consume(opacity.rosselandMean(density, temperature, composition));
+        nuclear.energy(density, temperature, composition, burning);
+        hole.consume(burning[0]);
+    }
+}
