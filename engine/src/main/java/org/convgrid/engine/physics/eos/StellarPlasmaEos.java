@@ -300,7 +300,7 @@ public final class StellarPlasmaEos implements EquationOfState {
                 // Converged: eta is within the tolerance of the root, and fd and the Coulomb term are set for it.
                 // Tested before the bracket: a step below one ulp leaves eta + step on the bracket's edge, which
                 // would send it to the bisection point far away.
-                p.evaluate(eta);
+                p.evaluate();
                 p.lastEta = eta;
                 p.iterations = i + 1;
                 return;
