@@ -154,8 +154,10 @@ public final class StellarPlasmaEos implements EquationOfState {
      */
     static double nearbyGuess(double density, double temperature, EosState nearby) {
         double eta = nearby.eta();
-        double carried = eta + nearby.dEtaDlnRho() * Math.log(density / nearby.density())
-                + nearby.dEtaDlnT() * Math.log(temperature / nearby.temperature());
+        // a differenced neighbour moves in rho or in T only: the other logarithm is zero, and costs nothing
+        double lnRhoMove = density == nearby.density() ? 0.0 : Math.log(density / nearby.density());
+        double lnTMove = temperature == nearby.temperature() ? 0.0 : Math.log(temperature / nearby.temperature());
+        double carried = eta + nearby.dEtaDlnRho() * lnRhoMove + nearby.dEtaDlnT() * lnTMove;
         return Double.isFinite(carried) ? carried : eta;
     }
 
