@@ -2,6 +2,7 @@ package org.convgrid.benchmarks;
 
 import java.util.concurrent.TimeUnit;
 import org.convgrid.engine.physics.StandardPhysics;
+import org.convgrid.engine.physics.eos.EosState;
 import org.convgrid.engine.physics.eos.EquationOfState;
 import org.convgrid.engine.state.Composition;
 import org.openjdk.jmh.annotations.Benchmark;
@@ -18,7 +19,10 @@ import org.openjdk.jmh.annotations.Warmup;
 
 /**
  * Cost of the default equation of state alone, forward (rho, T) and inverse (P, T), from the centre of the Sun
- * to a cool atmosphere: the points where the ionisation and degeneracy solve does the most work.
+ * to a cool atmosphere: the points where the ionisation and degeneracy solve does the most work. The forward call
+ * cold, and warm as the structure solver makes it: started from the solved state of the point itself at a
+ * differenced neighbour (1e-6 in ln rho) and at a point moved as by one structure iteration (1e-2 in ln rho,
+ * 3e-3 in ln T).
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.AverageTime)
@@ -37,6 +41,7 @@ public class EquationOfStateBenchmark {
     private double temperature;
     private double pressure;
     private Composition composition;
+    private EosState solved;
 
     @Setup
     public void setUp() {
@@ -54,12 +59,23 @@ public class EquationOfStateBenchmark {
         density = rho;
         temperature = t;
         composition = Composition.scaledSolar(x, 0.0188);
-        pressure = eos.atDensity(rho, t, composition).pressure();
+        solved = eos.atDensity(rho, t, composition);
+        pressure = solved.pressure();
     }
 
     @Benchmark
     public Object atDensity() {
         return eos.atDensity(density, temperature, composition);
+    }
+
+    @Benchmark
+    public Object atDensityNeighbour() {
+        return eos.atDensity(density * 1.000001, temperature, composition, solved);
+    }
+
+    @Benchmark
+    public Object atDensityMoved() {
+        return eos.atDensity(density * 1.01, temperature * 1.003, composition, solved);
     }
 
     @Benchmark

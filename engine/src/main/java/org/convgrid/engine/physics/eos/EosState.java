@@ -19,9 +19,20 @@ package org.convgrid.engine.physics.eos;
  * @param electronsPerBaryon free electrons per atomic mass unit, n_e m_u / rho
  * @param eta electron degeneracy parameter, chemical potential over kT (without rest mass)
  * @param gasPressureFraction beta = P_gas / P
+ * @param dEtaDlnRho (d eta/d ln rho) at fixed T, NaN where the equation of state does not give it
+ * @param dEtaDlnT (d eta/d ln T) at fixed rho, NaN where the equation of state does not give it
  */
 public record EosState(double density, double temperature, double pressure, double internalEnergy,
                        double chiRho, double chiT, double cp, double cv, double gamma1, double nablaAd,
                        double delta, double mu, double electronsPerBaryon, double eta,
-                       double gasPressureFraction) {
+                       double gasPressureFraction, double dEtaDlnRho, double dEtaDlnT) {
+
+    /** A state whose equation of state does not give the slopes of eta (they are NaN). */
+    public EosState(double density, double temperature, double pressure, double internalEnergy,
+                    double chiRho, double chiT, double cp, double cv, double gamma1, double nablaAd,
+                    double delta, double mu, double electronsPerBaryon, double eta,
+                    double gasPressureFraction) {
+        this(density, temperature, pressure, internalEnergy, chiRho, chiT, cp, cv, gamma1, nablaAd, delta, mu,
+                electronsPerBaryon, eta, gasPressureFraction, Double.NaN, Double.NaN);
+    }
 }

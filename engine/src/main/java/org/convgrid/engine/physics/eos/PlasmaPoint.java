@@ -77,6 +77,11 @@ final class PlasmaPoint {
     /** Newton steps of the last neutrality solve (diagnostics). */
     int iterations;
     private double kT;
+    /** T^(3/2) and n_e per F_{1/2}, ELECTRON_DENSITY_CONSTANT T^(3/2), of the prepared T: once per point. */
+    private double t15;
+    private double electronScale;
+    /** The ratio x of the last {@link #solveStep}, which {@link #evaluate} completes (the same eta and shift). */
+    private double stepRatio;
     private double kH;
     /**
      * Energy taken by ionising one hydrogen atom, erg: kT d ln K_H/d ln T, chi at low T, 2kT + chi/3 when kT &gt;&gt;
@@ -167,6 +172,8 @@ final class PlasmaPoint {
         density = rho;
         temperature = t;
         kT = Constants.K_B * t;
+        t15 = t * Math.sqrt(t);
+        electronScale = ELECTRON_DENSITY_CONSTANT * t15;
         if (coulomb) {
             coulombTerm.prepare(rho, kT, nuclei);
         }
@@ -231,8 +238,7 @@ final class PlasmaPoint {
      *     pays nothing for it
      */
     double ionisationGuess(double start) {
-        double t = temperature;
-        double q = 0.5 * Math.sqrt(Math.PI) * ELECTRON_DENSITY_CONSTANT * (t * Math.sqrt(t)) * Constants.M_U
+        double q = 0.5 * Math.sqrt(Math.PI) * ELECTRON_DENSITY_CONSTANT * t15 * Constants.M_U
                 / density * Math.exp(reference);
         double hydrogen = abundance[0];
         // With molecules, r f0(r) <= r f0(0): the weak-ionisation bound of hydrogen uses the atoms left at r = 0.
@@ -285,15 +291,14 @@ final class PlasmaPoint {
      */
     void solveStep(double eta) {
         FermiDirac.withSlopes(eta, fd);
-        double t = temperature;
-        double rho = density;
-        double yeFd = ELECTRON_DENSITY_CONSTANT * (t * Math.sqrt(t)) * fd[1] * Constants.M_U / rho;
+        double yeFd = electronScale * fd[1] * Constants.M_U / density;
         if (coulomb && yeFd > 0.0) {
             coulombTerm.evaluate(fd, yeFd, chargeRatio);
         } else {
             coulombTerm.clear();
         }
-        double ye = ions(ratio(eta));
+        stepRatio = ratio(eta);
+        double ye = ions(stepRatio);
         double spread = ionSpread;
         ye = Math.max(ye, Double.MIN_NORMAL);
         residual = Math.log(yeFd / ye);
@@ -348,16 +353,17 @@ final class PlasmaPoint {
 
     /**
      * Completes the state at the eta of the last {@link #solveStep}: P, u and their partials in eta, ln rho and
-     * ln T at fixed eta, and the residual's partials in ln rho and ln T.
+     * ln T at fixed eta, and the residual's partials in ln rho and ln T. The step's ratio x serves again: completing
+     * the Coulomb term leaves its shift, hence x, as the step set them.
      */
-    void evaluate(double eta) {
+    void evaluate() {
         double t = temperature;
         double rho = density;
         double perMass = kT / Constants.M_U;
         double betaChi = 1.0 / kT;
         CoulombTerm c = coulombTerm;
         c.completeState();
-        double x = ratio(eta);
+        double x = stepRatio;
         double lxEta = -(1.0 + c.shiftEta);
         double lxRho = -c.shiftRho;
         double lxT = -c.shiftT;
@@ -482,7 +488,6 @@ final class PlasmaPoint {
         }
         ye = Math.max(ye, Double.MIN_NORMAL);
 
-        double t15 = t * Math.sqrt(t);
         double electronPressure = (2.0 / 3.0) * ELECTRON_DENSITY_CONSTANT * kT * t15 * fd[2];
         double aT4 = Constants.A_RAD * t * t * t * t;
         double heavy = nuclei - mol;

@@ -27,6 +27,14 @@ final class ThermoIdentities {
     static EosState complete(double density, double temperature, double pressure, double internalEnergy,
                              double chiRho, double chiT, double cv, double mu, double electronsPerBaryon,
                              double eta, double beta) {
+        return complete(density, temperature, pressure, internalEnergy, chiRho, chiT, cv, mu, electronsPerBaryon,
+                eta, beta, Double.NaN, Double.NaN);
+    }
+
+    /** As above, with the slopes of eta, (d eta/d ln rho)_T and (d eta/d ln T)_rho, that the state carries. */
+    static EosState complete(double density, double temperature, double pressure, double internalEnergy,
+                             double chiRho, double chiT, double cv, double mu, double electronsPerBaryon,
+                             double eta, double beta, double dEtaDlnRho, double dEtaDlnT) {
         double prt = pressure / (density * temperature);
         // delta = chi_T/chi_rho, so c_P = c_V + prt chi_T delta and nabla_ad = prt delta/c_P (fewer divisions)
         double delta = chiT / chiRho;
@@ -34,6 +42,6 @@ final class ThermoIdentities {
         double gamma1 = chiRho * cp / cv;
         double nablaAd = prt * delta / cp;
         return new EosState(density, temperature, pressure, internalEnergy, chiRho, chiT, cp, cv, gamma1, nablaAd,
-                delta, mu, electronsPerBaryon, eta, beta);
+                delta, mu, electronsPerBaryon, eta, beta, dEtaDlnRho, dEtaDlnT);
     }
 }

@@ -38,7 +38,7 @@ class PlasmaPointTest {
             }
             p.prepare(pt[0], pt[1], -5.0);
             p.solveStep(eta);
-            p.evaluate(eta);
+            p.evaluate();
             double[] analytic = {p.pressureEta, p.pressureRho, p.pressureT, p.energyEta, p.energyT, p.residualRho,
                 p.residualT, p.residualSlope};
             double[] plus = shifted(sun, pt, eta, h);
@@ -166,18 +166,18 @@ class PlasmaPointTest {
         PlasmaPoint p = point(c);
         p.prepare(pt[0], pt[1], -5.0);
         p.solveStep(eta + step);
-        p.evaluate(eta + step);
+        p.evaluate();
         double pEta = p.pressure;
         double uEta = p.energy;
         double rEta = p.residual;
         p.prepare(pt[0] * Math.exp(step), pt[1], -5.0);
         p.solveStep(eta);
-        p.evaluate(eta);
+        p.evaluate();
         double pRho = p.pressure;
         double rRho = p.residual;
         p.prepare(pt[0], pt[1] * Math.exp(step), -5.0);
         p.solveStep(eta);
-        p.evaluate(eta);
+        p.evaluate();
         return new double[] {pEta, pRho, p.pressure, uEta, p.energy, rRho, p.residual, rEta};
     }
 }

@@ -76,6 +76,39 @@ class StellarPlasmaEosNearbyStartTest {
         }
     }
 
+    /**
+     * The slopes of eta a state carries (which move a nearby start along its tangent) are those of the solved eta:
+     * central differences of the cold solve over +-1e-4 in ln rho and ln T (error ~1e-8 from the step, ~1e-7 from
+     * the solve's tolerance).
+     */
+    @Test
+    void theCarriedSlopesOfEtaAreThoseOfTheSolvedEta() {
+        double h = 1.0e-4;
+        for (double[] p : POINTS) {
+            Composition c = Composition.scaledSolar(p[2], 0.0188);
+            EosState s = EOS.atDensity(p[0], p[1], c);
+            double rhoSlope = (EOS.atDensity(p[0] * Math.exp(h), p[1], c).eta()
+                    - EOS.atDensity(p[0] * Math.exp(-h), p[1], c).eta()) / (2.0 * h);
+            double tSlope = (EOS.atDensity(p[0], p[1] * Math.exp(h), c).eta()
+                    - EOS.atDensity(p[0], p[1] * Math.exp(-h), c).eta()) / (2.0 * h);
+            assertThat(s.dEtaDlnRho()).as("d eta/d ln rho at rho = %s, T = %s", p[0], p[1])
+                    .isCloseTo(rhoSlope, within(1.0e-5 * Math.max(1.0, Math.abs(rhoSlope))));
+            assertThat(s.dEtaDlnT()).as("d eta/d ln T at rho = %s, T = %s", p[0], p[1])
+                    .isCloseTo(tSlope, within(1.0e-5 * Math.max(1.0, Math.abs(tSlope))));
+        }
+    }
+
+    /** A state without the slopes of eta (another equation of state's) starts at its bare eta. */
+    @Test
+    void aStartWithoutSlopesStartsAtItsEta() {
+        Composition c = Composition.scaledSolar(0.7, 0.0188);
+        EosState cold = EOS.atDensity(0.19, 2.2e6, c);
+        EosState bare = new EosState(0.2, 2.3e6, 1.0, 1.0, 1.0, 1.0, 1.0, 1.0, 1.0, 0.4, 1.0, 0.6, 0.8,
+                cold.eta(), 1.0);
+        assertThat(StellarPlasmaEos.nearbyGuess(0.19, 2.2e6, bare)).isEqualTo(cold.eta());
+        assertSameState(EOS.atDensity(0.19, 2.2e6, c, bare), cold, new double[] {0.19, 2.2e6, 0.7});
+    }
+
     @Test
     void aStartWithoutDegeneracyFallsBackToTheColdSolve() {
         Composition c = Composition.scaledSolar(0.7, 0.0188);
