@@ -28,7 +28,13 @@ import org.convgrid.engine.state.Composition;
  * mass fraction goes negative. The rates conserve mass (abundances counted with mass numbers), and the result is
  * renormalised so the fractions sum to one to rounding. Deuterium and 7Li, destroyed by one proton capture each at a
  * rate linear in their own abundance, burn first in their own exact step ({@link LightElementBurning}); the Newton
- * step then holds them fixed and sees only the rest of the network. Immutable and thread-safe.
+ * step then holds them fixed and sees only the rest of the network. A point whose rates the network bounds so low
+ * that they could not change any fraction by {@link #NEGLIGIBLE_CHANGE} over the step ({@link
+ * NuclearNetwork#rateBound}: the cool envelope and, before the zero-age main sequence, most of the star) is not
+ * evaluated: its rates are taken as zero, alone or among a mixed zone's points. Measured, 1 Msun, Z = 0.02 (burn
+ * and burnAndFactors calls per track): zero-age track 164395 -> 103284, from birth 208549 -> 130177; the 1 Msun
+ * birth track's reference digits unchanged but for surface 7Li at exhaustion, 2.193076113944e-9 -> 2.193076113943e-9.
+ * Immutable and thread-safe.
  */
 public final class CompositionStep {
 
@@ -126,23 +132,30 @@ public final class CompositionStep {
      * @throws ConvgridException NOT_CONVERGED when the sub-step budget is exhausted
      */
     public Composition advance(double density, double temperature, Composition start, double dt) {
-        return advance(density, temperature, start, dt, null);
+        return advance(density, temperature, start, dt, null, new Workspace());
     }
 
     /**
      * {@link #advance(double, double, Composition, double)} with the deuterium and 7Li destruction rates per unit
      * abundance at this point already known ({@code captures}: {d, 7Li}, s^-1, &gt;= 0, e.g. from
      * {@link LightElementRates} at the same density, temperature and composition), so that the light elements'
-     * exact step does not evaluate the whole network again for them; null evaluates them here.
+     * exact step does not evaluate the whole network again for them; null evaluates them here. {@code work}: the
+     * calling thread's work arrays, reused from point to point ({@link Workspace}).
      */
-    Composition advance(double density, double temperature, Composition start, double dt, double[] captures) {
+    Composition advance(double density, double temperature, Composition start, double dt, double[] captures,
+                        Workspace work) {
         NuclearNetwork net = captures == null ? network : withoutCaptures;
         return advance(x -> rates(net.burn(density, temperature, MassFractions.composition(x))), x -> {
-            BurningAndFactors point = net.burnAndFactors(density, temperature, MassFractions.composition(x));
+            Composition c = MassFractions.composition(x);
+            if (negligible(net, density, temperature, c, dt)) {
+                // no rates: the step below takes the change as zero
+                return new Linearised(new double[N + 2], null, null);
+            }
+            BurningAndFactors point = net.burnAndFactors(density, temperature, c);
             RateFactors factors = point.factors().orElse(null);
             return new Linearised(rates(point.rate()),
                     factors == null ? null : (y, out) -> factors.addJacobian(y, 1.0, out), factors);
-        }, start, dt, density, temperature, captures);
+        }, start, dt, density, temperature, captures, work);
     }
 
     /**
@@ -164,16 +177,16 @@ public final class CompositionStep {
      */
     public Composition advanceMixed(double[] densities, double[] temperatures, double[] weights, Composition start,
                                     double dt) {
-        return advanceMixed(densities, temperatures, weights, start, dt, null);
+        return advanceMixed(densities, temperatures, weights, start, dt, null, new Workspace());
     }
 
     /**
      * {@link #advanceMixed(double[], double[], double[], Composition, double)} with the zone's mass-weighted
      * deuterium and 7Li destruction rates per unit abundance already known ({@code captures}, as in
-     * {@link #advance(double, double, Composition, double, double[])}); null evaluates them here.
+     * {@link #advance(double, double, Composition, double, double[], Workspace)}); null evaluates them here.
      */
     Composition advanceMixed(double[] densities, double[] temperatures, double[] weights, Composition start,
-                             double dt, double[] captures) {
+                             double dt, double[] captures, Workspace work) {
         int n = densities.length;
         if (temperatures.length != n || weights.length != n || n == 0) {
             throw new IllegalArgumentException("a mixed zone needs one density, temperature and weight per point");
@@ -185,34 +198,61 @@ public final class CompositionStep {
         double mass = total;
         NuclearNetwork net = captures == null ? network : withoutCaptures;
         // one composition for all the zone's points, and their rates summed as they come (no array per point)
+        // the points whose rates cannot matter (negligible) add nothing; the others' weights still count their mass
         Rates zone = x -> {
             Composition c = MassFractions.composition(x);
             double[] mean = new double[N + 2];
             for (int k = 0; k < n; k++) {
-                addRates(mean, weights[k], net.burn(densities[k], temperatures[k], c));
+                if (!negligible(net, densities[k], temperatures[k], c, dt)) {
+                    addRates(mean, weights[k], net.burn(densities[k], temperatures[k], c));
+                }
             }
             return scaled(mean, mass);
         };
         Linearisation linearisation = x -> {
             Composition c = MassFractions.composition(x);
             double[] mean = new double[N + 2];
+            // the evaluated points' factors and weights, in the first `used` entries
             RateFactors[] factors = new RateFactors[n];
+            double[] factorWeights = new double[n];
+            int used = 0;
             boolean analytic = true;
             for (int k = 0; k < n; k++) {
+                if (negligible(net, densities[k], temperatures[k], c, dt)) {
+                    continue;
+                }
                 BurningAndFactors point = net.burnAndFactors(densities[k], temperatures[k], c);
                 addRates(mean, weights[k], point.rate());
-                factors[k] = point.factors().orElse(null);
-                analytic &= factors[k] != null;
+                factors[used] = point.factors().orElse(null);
+                factorWeights[used] = weights[k];
+                analytic &= factors[used] != null;
+                used++;
             }
+            int points = used;
             Jacobian jacobian = (y, out) -> {
-                for (int k = 0; k < n; k++) {
-                    factors[k].addJacobian(y, weights[k] / mass, out);
+                for (int k = 0; k < points; k++) {
+                    factors[k].addJacobian(y, factorWeights[k] / mass, out);
                 }
             };
-            return new Linearised(scaled(mean, mass), analytic ? jacobian : null,
-                    analytic ? RateFactors.weightedMean(factors, weights, mass) : null);
+            return new Linearised(scaled(mean, mass), analytic ? jacobian : null, analytic
+                    ? RateFactors.weightedMean(Arrays.copyOf(factors, used), Arrays.copyOf(factorWeights, used), mass)
+                    : null);
         };
-        return advance(zone, linearisation, start, dt, densities[0], temperatures[0], captures);
+        return advance(zone, linearisation, start, dt, densities[0], temperatures[0], captures, work);
+    }
+
+    /**
+     * Whether the network's rates at this point provably cannot matter over dt: its bound of every |dX_i/dt|
+     * ({@link NuclearNetwork#rateBound}) times dt is below {@link #NEGLIGIBLE_CHANGE}, the change this step already
+     * takes as negligible. Such a point's rates are taken as zero, without evaluating the network: the change this
+     * leaves out is below that of the explicit step the step takes for a change of that size, and in a mixed zone
+     * the zone's mean rates move by less than the bound (the left-out points' mass fraction times it). With
+     * the hydrogen-burning network's bound (gas below 5e5 K, 1e5 K with deuterium: 4.7e-30 s^-1) the steps of
+     * up to 2e17 s skip it.
+     */
+    private static boolean negligible(NuclearNetwork net, double density, double temperature, Composition c,
+                                      double dt) {
+        return net.rateBound(density, temperature, c) * dt < NEGLIGIBLE_CHANGE;
     }
 
     /** sum / mass, in place. */
@@ -252,8 +292,13 @@ public final class CompositionStep {
     private record Linearised(double[] rates, Jacobian jacobian, RateFactors factors) {
     }
 
-    /** Work arrays of one step's chord iterations, so that their loops allocate nothing. */
-    private static final class Workspace {
+    /**
+     * Work arrays of the chord iterations, so that their loops allocate nothing: one per thread, reused for every
+     * point of a step (the caller makes it; every array is written before it is read at each sub-step, so reuse
+     * changes no result). Not thread-safe. Measured, 1 Msun, Z = 0.02 zero-age track, against one per point:
+     * thread allocated bytes 256.6 -> 234.5 MB, from birth 384.4 -> 358.1 MB.
+     */
+    static final class Workspace {
         final double[][] matrix = new double[N][N];
         final int[] pivots = new int[N];
         final double[] delta = new double[N];
@@ -266,7 +311,7 @@ public final class CompositionStep {
     }
 
     private Composition advance(Rates rates, Linearisation linearisation, Composition start, double dt,
-                                double density, double temperature, double[] captures) {
+                                double density, double temperature, double[] captures, Workspace work) {
         ConvgridException.requireInRange("time step", dt, 0.0, Double.MAX_VALUE, "s");
         double[] x = MassFractions.of(start);
         if (captures != null) {
@@ -291,7 +336,7 @@ public final class CompositionStep {
             return normalised(x);
         }
         Jacobian analytic = atStart.jacobian();
-        Workspace work = new Workspace();
+        work.convergedRates = null;
         double remaining = dt;
         double sub = dt / pieces(explicitRatio(x, f, dt), dt, dt, Double.POSITIVE_INFINITY);
         // the rates at x, kept while x is (the start, and after a rejected sub-step) so they are not evaluated again

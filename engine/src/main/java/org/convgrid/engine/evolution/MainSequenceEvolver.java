@@ -700,16 +700,18 @@ public final class MainSequenceEvolver {
         Composition[] comp = new Composition[n];
         // one {d, 7Li} pair refilled for every point or zone (the network reads it at once and keeps no reference)
         double[] captures = light == null ? null : new double[2];
+        // one set of the network step's work arrays for the whole step (this thread's)
+        CompositionStep.Workspace work = new CompositionStep.Workspace();
         int k = 0;
         while (k < n) {
             int end = ConvectiveMixing.runEnd(mixed, k);
             if (end == k) {
-                comp[k] = network.advance(rho[k], t[k], start[k], dt, captures(light, k, captures));
+                comp[k] = network.advance(rho[k], t[k], start[k], dt, captures(light, k, captures), work);
             } else {
                 Composition mean = ConvectiveMixing.mean(w, start, k, end);
                 Composition burnt = network.advanceMixed(Arrays.copyOfRange(rho, k, end + 1),
                         Arrays.copyOfRange(t, k, end + 1), Arrays.copyOfRange(w, k, end + 1), mean, dt,
-                        captures(light, k, captures));
+                        captures(light, k, captures), work);
                 Arrays.fill(comp, k, end + 1, burnt);
             }
             k = end + 1;

@@ -117,6 +117,16 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
         burn(density, temperature, composition, null, into);
     }
 
+    /**
+     * {@link NegligibleBurning#RATE_BOUND} where the gas is too cool for any reaction to matter ({@link
+     * NegligibleBurning#at}, the same test as {@link #energy}'s), no bound elsewhere.
+     */
+    @Override
+    public double rateBound(double density, double temperature, Composition composition) {
+        return NegligibleBurning.at(density, temperature, composition) ? NegligibleBurning.RATE_BOUND
+                : Double.POSITIVE_INFINITY;
+    }
+
     /** {@link #burn} with the six screened {@code rho N_A<sigma v>} its rates are made of. */
     @Override
     public BurningAndFactors burnAndFactors(double density, double temperature, Composition composition) {

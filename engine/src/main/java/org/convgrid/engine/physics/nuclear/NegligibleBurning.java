@@ -1,6 +1,7 @@
 package org.convgrid.engine.physics.nuclear;
 
 import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.units.Constants;
 
 /**
  * Where hydrogen burning releases no energy that matters: gas too cool for any reaction of the network to overcome
@@ -8,7 +9,8 @@ import org.convgrid.engine.state.Composition;
  * 1968, Principles of Stellar Evolution and Nucleosynthesis, ch. 4), so below some temperature every rate is
  * negligible; taking the energy generation there as zero, instead of evaluating nine screened reactions, is common
  * practice (no single source). {@link HydrogenBurningNetwork#energy} does so (the structure equations' call); the
- * composition rates ({@link HydrogenBurningNetwork#burn}) are always evaluated. Why: in a contracting pre-main-sequence star and in the envelope of every star about
+ * composition rates ({@link HydrogenBurningNetwork#burn}) are always evaluated, but the network states their bound
+ * ({@link #RATE_BOUND}, {@link HydrogenBurningNetwork#rateBound}) for a caller that can tell when it does not matter. Why: in a contracting pre-main-sequence star and in the envelope of every star about
  * half of the mesh points are that cool (1 Msun, Z = 0.02: 137 of the start model's 250 points, 116-171 of 250-300
  * before the ZAMS, 234-240 of 500 on the main sequence), and the network was 10-13 % of the CPU of the
  * pre-main-sequence steps.
@@ -27,6 +29,16 @@ public final class NegligibleBurning {
 
     /** Upper bound of the network's energy generation wherever {@link #at} holds, erg g^-1 s^-1. */
     public static final double EPS_BOUND = 1.0e-12;
+    /**
+     * Upper bound of every composition rate |dX_i/dt| of the network wherever {@link #at} holds, s^-1, from
+     * {@link #EPS_BOUND}: each reaction k (r_k moles per gram per second) releases Q_k and changes a mass fraction by
+     * at most c_k r_k, c_k the largest mass-number coefficient of its rates in {@link HydrogenBurningNetwork#burn}
+     * (p+p 3, 3He+3He 6, 3He+4He 4, 12C+p 14, 14N+p 14, 16O+p 16, d+p 3, 7Li+p 8), so every |dX_i/dt| is at most
+     * max_k (c_k/Q_k) eps / (N_A MeV). The largest c_k/Q_k is the 16O leak's, 16 / 3.554 MeV (the others 0.45, 0.47,
+     * 0.31, 1.27, 1.00, 0.55, 0.46 per MeV); derived, from the rates as the network writes them (4.7e-30 s^-1).
+     */
+    public static final double RATE_BOUND = 16.0 / ReactionEnergy.O16_TO_N14 * EPS_BOUND
+            / (Constants.N_A * Constants.MEV);
     /** Highest density at which burning is taken as negligible, g cm^-3. */
     public static final double MAX_DENSITY = 1.0;
     /** Temperature below which burning is negligible where the composition holds no deuterium, K. */

@@ -31,6 +31,21 @@ public interface NuclearNetwork {
     }
 
     /**
+     * An upper bound of every composition rate |dX_i/dt| of {@link #burn} at this point (deuterium and 7Li
+     * included), s^-1, where the network can state one without evaluating its reactions (e.g.
+     * {@link NegligibleBurning#RATE_BOUND} where {@link NegligibleBurning} holds); positive infinity, no bound, by
+     * default and wherever it cannot. For a caller that need not evaluate rates whose effect it can bound (the
+     * composition step, over a step whose change they could not make matter).
+     *
+     * @param density g cm^-3
+     * @param temperature K
+     * @param composition mass fractions
+     */
+    default double rateBound(double density, double temperature, Composition composition) {
+        return Double.POSITIVE_INFINITY;
+    }
+
+    /**
      * The composition with 3He and the CN isotopes at their local equilibrium abundances where these are reached
      * (used for zero-age models); hydrogen, 4He, oxygen and the other metals are unchanged apart from the
      * mass moved between them to keep the sum one.

@@ -34,6 +34,54 @@ class NegligibleBurningTest {
         assertThat(largest).isPositive().isLessThan(NegligibleBurning.EPS_BOUND);
     }
 
+    /**
+     * The composition-rate bound follows from the energy bound (derived: each reaction's largest mass-number
+     * coefficient per MeV released, NegligibleBurning.RATE_BOUND): checked where the rates are large enough to test
+     * the inequality itself (solar centre, hot CNO burning, birth gas at 1e6 K) and, over the grid of the energy
+     * bound, against RATE_BOUND.
+     */
+    @Test
+    void compositionRatesAreBelowTheirBoundWhereverBurningIsNegligible() {
+        double perEps = NegligibleBurning.RATE_BOUND / NegligibleBurning.EPS_BOUND;
+        Composition birth = composition(0.7, 0.02, 1.0e-4, 2.8e-5, 1.0e-8);
+        for (double[] point : new double[][] {{150.0, 1.57e7}, {10.0, 3.0e7}, {1.0, 1.0e6}, {80.0, 1.3e7}}) {
+            BurningRate r = network.burn(point[0], point[1], birth);
+            assertThat(largestRate(r)).isPositive().isLessThanOrEqualTo(perEps * r.eps());
+        }
+        double largest = 0.0;
+        for (double x : new double[] {0.5, 0.7, 0.8}) {
+            for (double z : new double[] {1.0e-4, 0.02, 0.06}) {
+                for (double he3 : new double[] {0.0, 1.0e-3}) {
+                    for (double h2 : new double[] {0.0, 1.0e-4}) {
+                        Composition c = composition(x, z, he3, h2, 1.0e-7);
+                        double floor = c.h2() > 0.0 ? NegligibleBurning.DEUTERIUM_FLOOR : NegligibleBurning.FLOOR;
+                        for (double lgRho = -12.0; lgRho <= 0.0; lgRho += 1.0) {
+                            for (double lgT = 3.3; lgT < Math.log10(floor) + 0.025; lgT += 0.1) {
+                                double rho = Math.pow(10.0, lgRho);
+                                double t = Math.min(Math.pow(10.0, lgT), Math.nextDown(floor));
+                                assertThat(network.rateBound(rho, t, c)).isEqualTo(NegligibleBurning.RATE_BOUND);
+                                largest = Math.max(largest, largestRate(network.burn(rho, t, c)));
+                            }
+                        }
+                    }
+                }
+            }
+        }
+        assertThat(largest).isPositive().isLessThan(NegligibleBurning.RATE_BOUND);
+        // no bound where the network does burn
+        assertThat(network.rateBound(1.0, 1.0e6, birth)).isEqualTo(Double.POSITIVE_INFINITY);
+        assertThat(network.rateBound(2.0, 1.0e4, birth)).isEqualTo(Double.POSITIVE_INFINITY);
+    }
+
+    private static double largestRate(BurningRate r) {
+        double[] rates = {r.dh1Dt(), r.dhe3Dt(), r.dhe4Dt(), r.dc12Dt(), r.dn14Dt(), r.do16Dt(), r.dh2Dt(), r.dli7Dt()};
+        double largest = 0.0;
+        for (double rate : rates) {
+            largest = Math.max(largest, Math.abs(rate));
+        }
+        return largest;
+    }
+
     @Test
     void hotDenseOrDeuteriumBearingGasIsNotSkipped() {
         Composition noDeuterium = composition(0.7, 0.02, 0.0, 0.0, 1.0e-8);
