@@ -295,8 +295,10 @@ public final class TabulatedOpacity implements Opacity {
      * TableAtComposition, double[])}; its status says whether the composition lies inside the tables.
      */
     TableAtComposition atComposition(double x, double z) {
-        Scratch scratch = new Scratch();
-        int status = weighCompositions(x, z, scratch);
+        // through the per-thread scratch: no work space to allocate, and the weights need not be taken again when
+        // the last composition looked up had the same (x, z), as neighbouring points of a mixed zone have
+        Scratch scratch = SCRATCH.get();
+        int status = compositionStencil(x, z, scratch);
         return new TableAtComposition(status, Arrays.copyOf(scratch.tables, scratch.count),
                 Arrays.copyOf(scratch.weights, scratch.count));
     }
