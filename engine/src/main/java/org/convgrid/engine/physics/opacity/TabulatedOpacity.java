@@ -33,7 +33,7 @@ import org.convgrid.engine.state.Composition;
  * name, T (K), rho (g cm^-3), log10 T and log10 R (or the table name, X and Z for a composition off the table).
  * {@link OpalGn93Opacity} says what answers there for the default opacity. Text layout: see
  * {@link OpacityTableReader} and {@code TABLE-FORMAT.md}. Immutable and thread-safe; evaluation allocates only its
- * result.
+ * result, and a look-up at a {@link TableAtComposition} the corner sums of a cell it has not kept.
  */
 public final class TabulatedOpacity implements Opacity {
 

@@ -23,18 +23,20 @@ class OpacityAtCompositionTest {
 
     @Test
     void theShippedOpacityAtACompositionIsItsRosselandMeanExactly() {
-        for (double[] xz : COMPOSITIONS) {
-            sameEverywhere(OpalGn93Opacity.shipped(), Composition.scaledSolar(xz[0], xz[1]));
+        for (int n = 0; n < COMPOSITIONS.length; n++) {
+            // every point at the first composition, every fifth one at the others (the suite's time)
+            sameEverywhere(OpalGn93Opacity.shipped(), Composition.scaledSolar(COMPOSITIONS[n][0],
+                    COMPOSITIONS[n][1]), n == 0 ? 1 : 5);
         }
     }
 
     @Test
     void withoutCoolTablesAndScaledAndAnalyticAlike() {
         Composition c = Composition.scaledSolar(0.70, 0.02);
-        sameEverywhere(OpalGn93Opacity.withoutCoolTables(), c);
-        sameEverywhere(ScaledOpacity.of(OpalGn93Opacity.shipped(), 1.7), c);
-        sameEverywhere(AnalyticCompositeOpacity.standard(), c);
-        sameEverywhere(new ElectronConduction(), Composition.scaledSolar(0.346, 0.0188));
+        sameEverywhere(OpalGn93Opacity.withoutCoolTables(), c, 2);
+        sameEverywhere(ScaledOpacity.of(OpalGn93Opacity.shipped(), 1.7), c, 3);
+        sameEverywhere(AnalyticCompositeOpacity.standard(), c, 5);
+        sameEverywhere(new ElectronConduction(), Composition.scaledSolar(0.346, 0.0188), 5);
     }
 
     @Test
@@ -43,16 +45,23 @@ class OpacityAtCompositionTest {
         Composition c = Composition.scaledSolar(0.7062, 0.0188);
         OpacityAtComposition at = opacity.atComposition(c);
         List<double[]> points = points();
-        IntStream.range(0, 8 * points.size()).parallel().forEach(n -> {
+        IntStream.range(0, 2 * points.size()).parallel().forEach(n -> {
             // each thread walks the points in its own order, so the kept cell changes under the others
             double[] p = points.get((int) ((n * 7919L) % points.size()));
             assertThat(at.rosselandMean(p[0], p[1])).isEqualTo(opacity.rosselandMean(p[0], p[1], c));
         });
     }
 
-    /** Every point in order and back again (consecutive points share a cell, or do not), and a fresh one per point. */
-    private static void sameEverywhere(Opacity opacity, Composition c) {
-        List<double[]> points = points();
+    /**
+     * Every stride-th point in order and back again (consecutive points share a cell, or do not), and a fresh
+     * binding at some of them.
+     */
+    private static void sameEverywhere(Opacity opacity, Composition c, int stride) {
+        List<double[]> all = points();
+        List<double[]> points = new ArrayList<>();
+        for (int n = 0; n < all.size(); n += stride) {
+            points.add(all.get(n));
+        }
         OpacityAtComposition walked = opacity.atComposition(c);
         for (int pass = 0; pass < 2; pass++) {
             for (int n = 0; n < points.size(); n++) {
