@@ -3,6 +3,7 @@ package org.convgrid.benchmarks;
 import java.util.concurrent.TimeUnit;
 import org.convgrid.engine.physics.StandardPhysics;
 import org.convgrid.engine.physics.opacity.Opacity;
+import org.convgrid.engine.physics.opacity.OpacityAtComposition;
 import org.convgrid.engine.state.Composition;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
@@ -20,7 +21,9 @@ import org.openjdk.jmh.annotations.Warmup;
  * Cost of one call of the default opacity (the OPAL GN93 tables, interpolated in log T, log R, X and Z) at points
  * typical of a solar interior, a solar envelope, an M-dwarf centre, a K-dwarf photosphere (the cool join) and a
  * composition between table nodes; beside it the analytic composite at the same points (the old default
- * was that composite times a tabulated correction, so at least as costly), a ratio that survives a busy machine. {@link OpacityTableLoadBenchmark} times reading the tables.
+ * was that composite times a tabulated correction, so at least as costly), a ratio that survives a busy machine; and
+ * the composition-bound call ({@link Opacity#atComposition}) repeated at one point and made afresh.
+ * {@link OpacityTableLoadBenchmark} times reading the tables.
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.AverageTime)
@@ -38,6 +41,7 @@ public class OpacityBenchmark {
     public String model;
 
     private Opacity opacity;
+    private OpacityAtComposition atComposition;
     private double density;
     private double temperature;
     private Composition composition;
@@ -58,10 +62,27 @@ public class OpacityBenchmark {
         density = rho;
         temperature = t;
         composition = Composition.scaledSolar(x, z);
+        atComposition = opacity.atComposition(composition);
     }
 
     @Benchmark
     public Object rosselandMean() {
         return opacity.rosselandMean(density, temperature, composition);
+    }
+
+    /**
+     * The composition-bound call the structure solver makes (one bound opacity per point, kept through a solve),
+     * repeated at one point: the cost of a call whose (log T, log R) cell is the last one's, as over most Newton
+     * iterations.
+     */
+    @Benchmark
+    public Object rosselandMeanAtComposition() {
+        return atComposition.rosselandMean(density, temperature);
+    }
+
+    /** Binding the composition and one call: the cost of a point's first call after its composition changed. */
+    @Benchmark
+    public Object atCompositionFirstCall() {
+        return opacity.atComposition(composition).rosselandMean(density, temperature);
     }
 }

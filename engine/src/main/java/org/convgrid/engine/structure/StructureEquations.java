@@ -10,6 +10,7 @@ import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.physics.atmosphere.SurfaceCondition;
 import org.convgrid.engine.physics.eos.EosAtComposition;
 import org.convgrid.engine.physics.eos.EosState;
+import org.convgrid.engine.physics.opacity.OpacityAtComposition;
 import org.convgrid.engine.physics.opacity.OpacityValue;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.units.Constants;
@@ -68,6 +69,8 @@ public final class StructureEquations implements DifferenceSystem {
     private final EosState[] eos;
     /** The equation of state at each point's composition (made again when the composition changes). */
     private final EosAtComposition[] eosAtComposition;
+    /** The opacity at each point's composition (made again when the composition changes). */
+    private final OpacityAtComposition[] opacityAtComposition;
     private final OpacityValue[] opacity;
     private final ConvectiveGradient[] convection;
     /** The convection model's slopes at each convective point, null where it gives none or the point is stable. */
@@ -140,6 +143,7 @@ public final class StructureEquations implements DifferenceSystem {
         this.extra = extra;
         this.eos = new EosState[n];
         this.eosAtComposition = new EosAtComposition[n];
+        this.opacityAtComposition = new OpacityAtComposition[n];
         this.opacity = new OpacityValue[n];
         this.convection = new ConvectiveGradient[n];
         this.convectionSlopes = new MixingLengthSolution[n];
@@ -256,6 +260,9 @@ public final class StructureEquations implements DifferenceSystem {
         double rho = Math.exp(lnRho);
         double t = Math.exp(lnT);
         Composition c = compositionRule == null ? composition[k] : compositionRule.at(k, rho, t);
+        if (c != composition[k] || opacityAtComposition[k] == null) {
+            opacityAtComposition[k] = physics.opacity().atComposition(c);
+        }
         if (c != composition[k] || eosAtComposition[k] == null) {
             eosAtComposition[k] = physics.eos().atComposition(c);
         }
@@ -263,7 +270,7 @@ public final class StructureEquations implements DifferenceSystem {
         EosAtComposition equationOfState = eosAtComposition[k];
         // the previous iteration's state of this point starts the equation of state's own solve (none: cold start)
         EosState s = equationOfState.atDensity(rho, t, eos[k]);
-        OpacityValue op = physics.opacity().rosselandMean(rho, t, c);
+        OpacityValue op = opacityAtComposition[k].rosselandMean(rho, t);
         physics.nuclear().energy(rho, t, c, burning);
         double epsBurning = burning[0];
         eos[k] = s;

@@ -78,6 +78,31 @@ final class AnalyticallyEdgedTable {
         }
     }
 
+    /**
+     * The table's weights at this composition, moved into the tables as {@link #logKappa} moves it when it lies
+     * outside them.
+     */
+    TableAtComposition atComposition(Composition composition) {
+        TableAtComposition at = table.atComposition(composition.x(), composition.z());
+        if (at.status() == TabulatedOpacity.OUTSIDE_COMPOSITIONS) {
+            double z = table.clampMetals(composition.z());
+            at = table.atComposition(tableHydrogen(composition, z), z);
+        }
+        return at;
+    }
+
+    /**
+     * {@link #logKappa(double, double, Composition, double, double, double[])} with the composition's weights taken
+     * once ({@code at}, from {@link #atComposition} of this composition): the same numbers. Where the table does not
+     * answer, the join is made as there.
+     */
+    void logKappa(double density, double temperature, Composition composition, TableAtComposition at, double lt,
+                  double lr, double[] out) {
+        if (table.interpolate(lt, lr, at, out) != TabulatedOpacity.ANSWERED) {
+            logKappa(density, temperature, composition, lt, lr, out);
+        }
+    }
+
     /** Whether the tables themselves answer at (log10 T, log10 R) for this composition (no analytic join). */
     boolean answers(double logT, double logR, Composition composition) {
         double z = table.clampMetals(composition.z());

@@ -27,22 +27,55 @@ public final class ElectronConduction implements Opacity {
 
     @Override
     public OpacityValue rosselandMean(double density, double temperature, Composition composition) {
-        double electrons = PlasmaMoments.electronsPerMass(composition);
-        double zEff = PlasmaMoments.chargeSquaredPerMass(composition) / electrons;
-        double ne = density * Constants.N_A * electrons;
-        double ni = density * Constants.N_A * PlasmaMoments.ionsPerMass(composition);
-        double kF = Math.cbrt(3.0 * Math.PI * Math.PI * ne);
-        double vF2 = FERMI_VELOCITY_COEFFICIENT * FERMI_VELOCITY_COEFFICIENT * kF * kF;
-        double v2 = vF2 + 3.0 * KT_OVER_ME * temperature;
-        double fermiShare = vF2 / v2;
-        double ionSphere = Math.cbrt(3.0 / (4.0 * Math.PI * ni));
-        double gamma = zEff * zEff * E2 / (ionSphere * Constants.K_B * temperature);
-        double lambda = Math.log(2.0 * Math.PI * zEff / 3.0) / 3.0 + 0.5 * Math.log(1.5 + 3.0 / gamma);
-        double dLambdaDlnGamma = -1.0 / (gamma + 2.0);
-        double kappa = PREFACTOR * zEff * lambda * temperature * temperature / (density * v2 * Math.sqrt(v2));
-        // ln Gamma ~ (1/3) ln rho - ln T; ln v^3 ~ fermiShare ln rho + 1.5 (1 - fermiShare) ln T
-        double dRho = -1.0 - fermiShare + dLambdaDlnGamma / (3.0 * lambda);
-        double dT = 2.0 - 1.5 * (1.0 - fermiShare) - dLambdaDlnGamma / lambda;
-        return new OpacityValue(kappa, dRho, dT);
+        return new AtComposition(composition).rosselandMean(density, temperature);
+    }
+
+    /** The charge moments and the terms made of them alone, which depend on the composition only, taken once. */
+    @Override
+    public OpacityAtComposition atComposition(Composition composition) {
+        return new AtComposition(composition);
+    }
+
+    /** The conduction at one composition. Immutable. */
+    private static final class AtComposition implements OpacityAtComposition {
+
+        /** Free electrons per atomic mass unit. */
+        private final double electrons;
+        /** Ions per atomic mass unit. */
+        private final double ions;
+        /** Gamma T a_i = Z_eff^2 e^2/k. */
+        private final double coupling;
+        /** The composition's part of the Coulomb logarithm, ln(2 pi Z_eff/3)/3. */
+        private final double lambdaCharge;
+        /** PREFACTOR Z_eff. */
+        private final double prefactor;
+
+        AtComposition(Composition composition) {
+            electrons = PlasmaMoments.electronsPerMass(composition);
+            ions = PlasmaMoments.ionsPerMass(composition);
+            double zEff = PlasmaMoments.chargeSquaredPerMass(composition) / electrons;
+            coupling = zEff * zEff * E2;
+            lambdaCharge = Math.log(2.0 * Math.PI * zEff / 3.0) / 3.0;
+            prefactor = PREFACTOR * zEff;
+        }
+
+        @Override
+        public OpacityValue rosselandMean(double density, double temperature) {
+            double ne = density * Constants.N_A * electrons;
+            double ni = density * Constants.N_A * ions;
+            double kF = Math.cbrt(3.0 * Math.PI * Math.PI * ne);
+            double vF2 = FERMI_VELOCITY_COEFFICIENT * FERMI_VELOCITY_COEFFICIENT * kF * kF;
+            double v2 = vF2 + 3.0 * KT_OVER_ME * temperature;
+            double fermiShare = vF2 / v2;
+            double ionSphere = Math.cbrt(3.0 / (4.0 * Math.PI * ni));
+            double gamma = coupling / (ionSphere * Constants.K_B * temperature);
+            double lambda = lambdaCharge + 0.5 * Math.log(1.5 + 3.0 / gamma);
+            double dLambdaDlnGamma = -1.0 / (gamma + 2.0);
+            double kappa = prefactor * lambda * temperature * temperature / (density * v2 * Math.sqrt(v2));
+            // ln Gamma ~ (1/3) ln rho - ln T; ln v^3 ~ fermiShare ln rho + 1.5 (1 - fermiShare) ln T
+            double dRho = -1.0 - fermiShare + dLambdaDlnGamma / (3.0 * lambda);
+            double dT = 2.0 - 1.5 * (1.0 - fermiShare) - dLambdaDlnGamma / lambda;
+            return new OpacityValue(kappa, dRho, dT);
+        }
     }
 }

@@ -164,6 +164,25 @@ public final class OpalGn93Opacity implements Opacity {
 
     @Override
     public OpacityValue rosselandMean(double density, double temperature, Composition composition) {
+        return evaluate(density, temperature, composition, null,
+                conduction.rosselandMean(density, temperature, composition));
+    }
+
+    /**
+     * The tables' weights of the composition taken once per table set (at the first call that needs that set) and
+     * the conduction's charge moments once: the same values as {@link #rosselandMean}.
+     */
+    @Override
+    public OpacityAtComposition atComposition(Composition composition) {
+        return new AtComposition(composition);
+    }
+
+    /**
+     * kappa at (density, temperature) with the tables' weights of {@code at} (null: taken from the composition at
+     * this call) and the conduction's value {@code cond} there.
+     */
+    private OpacityValue evaluate(double density, double temperature, Composition composition, AtComposition at,
+                                  OpacityValue cond) {
         double lt = Math.log10(temperature);
         double logRho = Math.log10(density);
         double lr = logRho - 3.0 * (lt - 6.0);
@@ -182,16 +201,15 @@ public final class OpalGn93Opacity implements Opacity {
         } else {
             double[] out = new double[3];
             if (cool == null) {
-                hot.logKappa(density, temperature, composition, lt, lr, out);
+                hotLogKappa(density, temperature, composition, at, lt, lr, out);
             } else {
-                blend(density, temperature, composition, lt, lr, out);
+                blend(density, temperature, composition, at, lt, lr, out);
             }
             // out: log10 kappa_rad, d/dlog T at fixed R, d/dlog R at fixed T; log R = log rho - 3 log T + 18
             rad = Math.exp(LN10 * out[0]);
             radRho = out[2];
             radT = out[1] - 3.0 * out[2];
         }
-        OpacityValue cond = conduction.rosselandMean(density, temperature, composition);
         double c = cond.kappa();
         double wc = rad / (rad + c);
         return new OpacityValue(rad * c / (rad + c), wc * cond.dlnKappaDlnRho() + (1.0 - wc) * radRho,
@@ -199,23 +217,83 @@ public final class OpalGn93Opacity implements Opacity {
     }
 
     /** The radiative part where a cool set is present: either set alone, or both blended over the overlap. */
-    private void blend(double density, double temperature, Composition composition, double lt, double lr,
-                       double[] out) {
+    private void blend(double density, double temperature, Composition composition, AtComposition at, double lt,
+                       double lr, double[] out) {
         double width = BLEND_TO_LOG_T - BLEND_FROM_LOG_T;
         double u = (lt - BLEND_FROM_LOG_T) / width;
         double w = AnalyticallyEdgedTable.fade(u);
         if (w == 1.0) {
-            cool.logKappa(density, temperature, composition, lt, lr, out);
+            coolLogKappa(density, temperature, composition, at, lt, lr, out);
         } else if (w == 0.0) {
-            hot.logKappa(density, temperature, composition, lt, lr, out);
+            hotLogKappa(density, temperature, composition, at, lt, lr, out);
         } else {
             double[] h = new double[3];
-            hot.logKappa(density, temperature, composition, lt, lr, h);
-            cool.logKappa(density, temperature, composition, lt, lr, out);
+            hotLogKappa(density, temperature, composition, at, lt, lr, h);
+            coolLogKappa(density, temperature, composition, at, lt, lr, out);
             double diff = out[0] - h[0];
             out[1] = h[1] + w * (out[1] - h[1]) + AnalyticallyEdgedTable.fadeSlope(u) / width * diff;
             out[2] = h[2] + w * (out[2] - h[2]);
             out[0] = h[0] + w * diff;
+        }
+    }
+
+    private void hotLogKappa(double density, double temperature, Composition composition, AtComposition at,
+                             double lt, double lr, double[] out) {
+        if (at == null) {
+            hot.logKappa(density, temperature, composition, lt, lr, out);
+        } else {
+            hot.logKappa(density, temperature, composition, at.hot(), lt, lr, out);
+        }
+    }
+
+    private void coolLogKappa(double density, double temperature, Composition composition, AtComposition at,
+                              double lt, double lr, double[] out) {
+        if (at == null) {
+            cool.logKappa(density, temperature, composition, lt, lr, out);
+        } else {
+            cool.logKappa(density, temperature, composition, at.cool(), lt, lr, out);
+        }
+    }
+
+    /**
+     * This opacity at one composition. The tables' weights of each set are taken at the first call that needs that
+     * set (a point of the core never needs the cool set); the fields hold them once taken, written without a lock:
+     * each is an object with final fields, so a thread sees either none (and takes the same weights itself) or a
+     * complete one.
+     */
+    private final class AtComposition implements OpacityAtComposition {
+
+        private final Composition composition;
+        private final OpacityAtComposition conductionAt;
+        private TableAtComposition hotAt;
+        private TableAtComposition coolAt;
+
+        AtComposition(Composition composition) {
+            this.composition = Objects.requireNonNull(composition);
+            this.conductionAt = conduction.atComposition(composition);
+        }
+
+        @Override
+        public OpacityValue rosselandMean(double density, double temperature) {
+            return evaluate(density, temperature, composition, this, conductionAt.rosselandMean(density, temperature));
+        }
+
+        TableAtComposition hot() {
+            TableAtComposition at = hotAt;
+            if (at == null) {
+                at = hot.atComposition(composition);
+                hotAt = at;
+            }
+            return at;
+        }
+
+        TableAtComposition cool() {
+            TableAtComposition at = coolAt;
+            if (at == null) {
+                at = cool.atComposition(composition);
+                coolAt = at;
+            }
+            return at;
         }
     }
 

@@ -32,6 +32,16 @@ public record ScaledOpacity(Opacity inner, double factor) implements Opacity {
         return new OpacityValue(factor * v.kappa(), v.dlnKappaDlnRho(), v.dlnKappaDlnT());
     }
 
+    /** The inner opacity at the composition, scaled alike. */
+    @Override
+    public OpacityAtComposition atComposition(Composition composition) {
+        OpacityAtComposition at = inner.atComposition(composition);
+        return (density, temperature) -> {
+            OpacityValue v = at.rosselandMean(density, temperature);
+            return new OpacityValue(factor * v.kappa(), v.dlnKappaDlnRho(), v.dlnKappaDlnT());
+        };
+    }
+
     /** The inner opacity's aid, scaled alike. */
     @Override
     public Opacity relaxationAid() {

@@ -33,7 +33,7 @@ import org.convgrid.engine.state.Composition;
  * name, T (K), rho (g cm^-3), log10 T and log10 R (or the table name, X and Z for a composition off the table).
  * {@link OpalGn93Opacity} says what answers there for the default opacity. Text layout: see
  * {@link OpacityTableReader} and {@code TABLE-FORMAT.md}. Immutable and thread-safe; evaluation allocates only its
- * result.
+ * result, and a look-up at a {@link TableAtComposition} the corner sums of a cell it has not kept.
  */
 public final class TabulatedOpacity implements Opacity {
 
@@ -231,28 +231,102 @@ public final class TabulatedOpacity implements Opacity {
         }
         int i = CubicHermite.cell(logT, lt);
         int j = CubicHermite.cell(logR, lr);
-        if (!answers(scratch, i, j)) {
-            // a point on a cell's lower edge also belongs to the cell below: the one that answers at the table's
-            // blank edge (so a node next to blank cells is still reproduced)
-            boolean onT = i > 0 && lt == logT[i];
-            boolean onR = j > 0 && lr == logR[j];
-            if (onT && answers(scratch, i - 1, j)) {
-                i--;
-            } else if (onR && answers(scratch, i, j - 1)) {
-                j--;
-            } else if (onT && onR && answers(scratch, i - 1, j - 1)) {
-                i--;
-                j--;
-            } else {
+        if (!answers(scratch.tables, scratch.count, i, j)) {
+            int edge = edgeCell(scratch.tables, scratch.count, lt, lr, i, j);
+            if (edge < 0) {
                 return NOT_IN_TABLE;
             }
+            i = edge / logR.length;
+            j = edge % logR.length;
         }
-        sumCorners(scratch, i, j);
+        sumCorners(scratch.tables, scratch.weights, scratch.count, i, j, scratch.corners);
+        cellValue(scratch.corners, i, j, lt, lr, out);
+        return ANSWERED;
+    }
+
+    /**
+     * {@link #interpolate(double, double, double, double, double[])} at the composition of {@code at} (made by
+     * {@link #atComposition} of this table): the same numbers, without the composition's weights (taken once) and,
+     * while the requests stay in one cell, without its corner sums (kept by {@code at}).
+     */
+    int interpolate(double logTemperature, double logRValue, TableAtComposition at, double[] out) {
+        double lt = snap(logTemperature, logT);
+        double lr = snap(logRValue, logR);
+        if (!(lt >= logT[0] && lt <= last(logT) && lr >= logR[0] && lr <= last(logR))) {
+            return OUTSIDE_GRID;
+        }
+        if (at.status() != ANSWERED) {
+            return at.status();
+        }
+        TableAtComposition.Cell kept = at.keptCell();
+        // the kept cell when it holds the point: the binary search's answer there (g[i] <= v < g[i + 1] picks one
+        // cell only; the last node, the one point of two cells, is left to the search)
+        int i = kept != null && logT[kept.i()] <= lt && lt < logT[kept.i() + 1] ? kept.i() : CubicHermite.cell(logT, lt);
+        int j = kept != null && logR[kept.j()] <= lr && lr < logR[kept.j() + 1] ? kept.j() : CubicHermite.cell(logR, lr);
+        double[] corners;
+        if (kept != null && kept.i() == i && kept.j() == j) {
+            corners = kept.corners();
+        } else {
+            int[] stencil = at.tables();
+            int count = stencil.length;
+            boolean own = answers(stencil, count, i, j);
+            if (!own) {
+                int edge = edgeCell(stencil, count, lt, lr, i, j);
+                if (edge < 0) {
+                    return NOT_IN_TABLE;
+                }
+                i = edge / logR.length;
+                j = edge % logR.length;
+            }
+            corners = new double[4 * BicubicLogTable.PER_NODE];
+            sumCorners(stencil, at.weights(), count, i, j, corners);
+            if (own) {
+                // only a cell found by the search itself is kept: the cell below an edge is taken for points on
+                // that edge alone
+                at.keep(new TableAtComposition.Cell(i, j, corners));
+            }
+        }
+        cellValue(corners, i, j, lt, lr, out);
+        return ANSWERED;
+    }
+
+    /**
+     * The tables' weights at composition (x, z), for many look-ups at it by {@link #interpolate(double, double,
+     * TableAtComposition, double[])}; its status says whether the composition lies inside the tables.
+     */
+    TableAtComposition atComposition(double x, double z) {
+        // through the per-thread scratch: no work space to allocate, and the weights need not be taken again when
+        // the last composition looked up had the same (x, z), as neighbouring points of a mixed zone have
+        Scratch scratch = SCRATCH.get();
+        int status = compositionStencil(x, z, scratch);
+        return new TableAtComposition(status, Arrays.copyOf(scratch.tables, scratch.count),
+                Arrays.copyOf(scratch.weights, scratch.count));
+    }
+
+    /**
+     * A point on a lower edge of cell (i, j), which does not answer, also belongs to the cell below: the one that
+     * answers at the table's blank edge (so a node next to blank cells is still reproduced). That cell as
+     * i * (number of log R nodes) + j, or -1 when there is none.
+     */
+    private int edgeCell(int[] stencil, int count, double lt, double lr, int i, int j) {
+        boolean onT = i > 0 && lt == logT[i];
+        boolean onR = j > 0 && lr == logR[j];
+        if (onT && answers(stencil, count, i - 1, j)) {
+            return (i - 1) * logR.length + j;
+        } else if (onR && answers(stencil, count, i, j - 1)) {
+            return i * logR.length + j - 1;
+        } else if (onT && onR && answers(stencil, count, i - 1, j - 1)) {
+            return (i - 1) * logR.length + j - 1;
+        }
+        return -1;
+    }
+
+    /** Value and slopes at (lt, lr) in cell (i, j) from its summed corner data into out[0..2]. */
+    private void cellValue(double[] corners, int i, int j, double lt, double lr, double[] out) {
         double hT = logT[i + 1] - logT[i];
         double hR = logR[j + 1] - logR[j];
-        CubicHermite.bicubic(scratch.corners, 0, 2 * BicubicLogTable.PER_NODE, (lt - logT[i]) / hT,
+        CubicHermite.bicubic(corners, 0, 2 * BicubicLogTable.PER_NODE, (lt - logT[i]) / hT,
                 (lr - logR[j]) / hR, hT, hR, out, 0);
-        return ANSWERED;
     }
 
     /** Tables and weights of the composition (x, z) into scratch: sum_r w_r(zeta) w_rk(xi) per table. */
@@ -303,26 +377,26 @@ public final class TabulatedOpacity implements Opacity {
         return ANSWERED;
     }
 
-    private boolean answers(Scratch scratch, int i, int j) {
-        for (int n = 0; n < scratch.count; n++) {
-            if (!tables[scratch.tables[n]].answers(i, j)) {
+    private boolean answers(int[] stencil, int count, int i, int j) {
+        for (int n = 0; n < count; n++) {
+            if (!tables[stencil[n]].answers(i, j)) {
                 return false;
             }
         }
         return true;
     }
 
-    /** The weighted sum of the stencil tables' corner data of cell (i, j) into scratch.corners. */
-    private void sumCorners(Scratch scratch, int i, int j) {
+    /** The weighted sum of the stencil tables' corner data of cell (i, j) into c[0..15]. */
+    private void sumCorners(int[] stencil, double[] weights, int count, int i, int j, double[] c) {
         int k00 = BicubicLogTable.PER_NODE * (i * logR.length + j);
         int k10 = k00 + BicubicLogTable.PER_NODE * logR.length;
         double[] d = nodeData;
         double a0 = 0.0, a1 = 0.0, a2 = 0.0, a3 = 0.0, a4 = 0.0, a5 = 0.0, a6 = 0.0, a7 = 0.0;
         double b0 = 0.0, b1 = 0.0, b2 = 0.0, b3 = 0.0, b4 = 0.0, b5 = 0.0, b6 = 0.0, b7 = 0.0;
-        for (int n = 0; n < scratch.count; n++) {
-            double w = scratch.weights[n];
-            int p = scratch.tables[n] * nodeStride + k00;
-            int q = scratch.tables[n] * nodeStride + k10;
+        for (int n = 0; n < count; n++) {
+            double w = weights[n];
+            int p = stencil[n] * nodeStride + k00;
+            int q = stencil[n] * nodeStride + k10;
             a0 += w * d[p];
             a1 += w * d[p + 1];
             a2 += w * d[p + 2];
@@ -340,7 +414,6 @@ public final class TabulatedOpacity implements Opacity {
             b6 += w * d[q + 6];
             b7 += w * d[q + 7];
         }
-        double[] c = scratch.corners;
         c[0] = a0;
         c[1] = a1;
         c[2] = a2;
