@@ -13,22 +13,11 @@ public final class MassMesh {
     private final double totalMass;
     private final double[] interior;
     private final double[] exterior;
-    /**
-     * The interval masses, taken once per mesh: the structure equations ask for each at every evaluation of every
-     * Newton iteration on the same mesh.
-     */
-    private final double[] intervalMass;
 
     private MassMesh(double totalMass, double[] interior, double[] exterior) {
         this.totalMass = totalMass;
         this.interior = interior;
         this.exterior = exterior;
-        this.intervalMass = new double[interior.length - 1];
-        for (int k = 0; k < intervalMass.length; k++) {
-            // from whichever of m or M - m is the more precise
-            intervalMass[k] = exterior[k] < 0.5 * totalMass ? exterior[k] - exterior[k + 1]
-                    : interior[k + 1] - interior[k];
-        }
     }
 
     /**
@@ -98,7 +87,7 @@ public final class MassMesh {
 
     /** Mass of interval (k, k + 1), g, from whichever of m or M - m is the more precise. */
     public double intervalMass(int k) {
-        return intervalMass[k];
+        return exterior[k] < 0.5 * totalMass ? exterior[k] - exterior[k + 1] : interior[k + 1] - interior[k];
     }
 
     /**

@@ -22,9 +22,7 @@ public record StellarModel(ModelState state, StellarProfile profile, GlobalPrope
 
     /** Builds the model from a system whose last evaluation was at {@code y}. */
     static StellarModel of(StructureEquations eq, double[] y, SolveReport report, PhysicsSet physics) {
-        // one model state of y serves the profile's read-out and the model
-        ModelState state = eq.state(y);
-        StellarProfile p = new StellarProfile(eq, y, state);
+        StellarProfile p = new StellarProfile(eq, y);
         int s = p.size() - 1;
         double radius = p.radius(s);
         double lum = p.luminosity(s);
@@ -34,7 +32,7 @@ public record StellarModel(ModelState state, StellarProfile profile, GlobalPrope
                 p.hydrogen(0));
         ZoneProfile zones = new ZoneProfile(p.mass(s), radius, p.masses(), p.radii(), p.stabilityExcesses(),
                 p.convectiveVelocities(), p.pressureScaleHeights(), physics.convection().alpha());
-        return new StellarModel(state, p, g, new ConvectiveZoneFinder().find(zones), report);
+        return new StellarModel(eq.state(y), p, g, new ConvectiveZoneFinder().find(zones), report);
     }
 
     /** Total mass, g. */

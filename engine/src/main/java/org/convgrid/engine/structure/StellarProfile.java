@@ -32,8 +32,7 @@ public final class StellarProfile implements OvershootProfile {
     /** The equation of state's second derivatives the solver's Jacobian last used at each point (null: none). */
     private final EosCurvature[] curvature;
 
-    /** From a system whose last evaluation was at {@code y}, and {@code state}, the model state of y. */
-    StellarProfile(StructureEquations eq, double[] y, ModelState state) {
+    StellarProfile(StructureEquations eq, double[] y) {
         int n = eq.points();
         MassMesh mesh = eq.mesh();
         mass = new double[n];
@@ -55,6 +54,7 @@ public final class StellarProfile implements OvershootProfile {
         internalEnergy = new double[n];
         eos = new EosState[n];
         curvature = new EosCurvature[n];
+        ModelState state = eq.state(y);
         for (int k = 0; k < n; k++) {
             EosState s = eq.eosAt(k);
             mass[k] = mesh.mass(k);
