@@ -18,6 +18,16 @@ public final class BandMatrix {
     private final int width;
     private final double[] band;
     private final int[] pivots;
+    /**
+     * Per row, the last column at or right of the diagonal that may hold a non-zero (its upper factor's reach
+     * after {@link #factor()}). Why: the rows of a difference system are shorter than the band (an interval row
+     * of the structure equations reaches 2 to 5 columns right of the diagonal, the band 10 with pivoting's
+     * fill-in), and elimination and back substitution need not run over the zeros; leaving out a zero product
+     * changes no bit of a finite result (x - f 0 = x, and a zero stays +0).
+     */
+    private final int[] reach;
+    /** Per column, the last row whose lower factor there is non-zero (the column itself when none is). */
+    private final int[] lowest;
     private boolean factored;
 
     /**
@@ -32,6 +42,8 @@ public final class BandMatrix {
         this.width = 2 * lower + upper + 1;
         this.band = new double[size * width];
         this.pivots = new int[size];
+        this.reach = new int[size];
+        this.lowest = new int[size];
     }
 
     public int size() {
@@ -65,6 +77,14 @@ public final class BandMatrix {
      * @return false when a pivot is exactly zero or not finite (the matrix is singular to working precision)
      */
     public boolean factor() {
+        for (int i = 0; i < size; i++) {
+            int rowBase = i * width - i + lower;
+            int j = Math.min(size - 1, i + upper);
+            while (j > i && band[rowBase + j] == 0.0) {
+                j--;
+            }
+            reach[i] = j;
+        }
         for (int c = 0; c < size; c++) {
             int last = Math.min(size - 1, c + lower);
             int pivot = c;
@@ -80,8 +100,9 @@ public final class BandMatrix {
                 return false;
             }
             pivots[c] = pivot;
-            int right = Math.min(size - 1, c + lower + upper);
             if (pivot != c) {
+                // both rows are zero right of the longer one's reach
+                int right = Math.max(reach[c], reach[pivot]);
                 for (int j = c; j <= right; j++) {
                     int a = c * width + j - c + lower;
                     int b = pivot * width + j - pivot + lower;
@@ -89,19 +110,29 @@ public final class BandMatrix {
                     band[a] = band[b];
                     band[b] = t;
                 }
+                int r = reach[c];
+                reach[c] = reach[pivot];
+                reach[pivot] = r;
             }
-            double diagonal = band[c * width + lower];
+            int right = reach[c];
+            int pivotBase = c * width - c + lower;
+            double diagonal = band[pivotBase + c];
+            int lowestRow = c;
             for (int i = c + 1; i <= last; i++) {
                 int rowBase = i * width - i + lower;
                 double factor = band[rowBase + c] / diagonal;
                 band[rowBase + c] = factor;
                 if (factor != 0.0) {
-                    int pivotBase = c * width - c + lower;
+                    lowestRow = i;
                     for (int j = c + 1; j <= right; j++) {
                         band[rowBase + j] -= factor * band[pivotBase + j];
                     }
+                    if (right > reach[i]) {
+                        reach[i] = right;
+                    }
                 }
             }
+            lowest[c] = lowestRow;
         }
         factored = true;
         return true;
@@ -121,7 +152,7 @@ public final class BandMatrix {
             }
             double bc = rhs[c];
             if (bc != 0.0) {
-                int last = Math.min(size - 1, c + lower);
+                int last = lowest[c];
                 for (int i = c + 1; i <= last; i++) {
                     rhs[i] -= band[i * width + c - i + lower] * bc;
                 }
@@ -129,7 +160,7 @@ public final class BandMatrix {
         }
         for (int i = size - 1; i >= 0; i--) {
             int rowBase = i * width - i + lower;
-            int right = Math.min(size - 1, i + lower + upper);
+            int right = reach[i];
             double sum = rhs[i];
             for (int j = i + 1; j <= right; j++) {
                 sum -= band[rowBase + j] * rhs[j];
