@@ -6,6 +6,7 @@ import org.convgrid.engine.physics.eos.EosAtComposition;
 import org.convgrid.engine.physics.eos.EosState;
 import org.convgrid.engine.physics.nuclear.NuclearNetwork;
 import org.convgrid.engine.physics.opacity.Opacity;
+import org.convgrid.engine.physics.opacity.OpacityAtComposition;
 import org.convgrid.engine.state.Composition;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
@@ -21,10 +22,11 @@ import org.openjdk.jmh.infra.Blackhole;
 
 /**
  * Cost of one point of equation of state + opacity + nuclear energy generation the way the structure solver calls
- * them in a Newton iteration, at the points of {@link MicrophysicsBenchmark}: the equation of state bound to the
- * point's composition ({@code atComposition}) and started from the point's state of the previous iteration,
- * {@code offset} away in ln rho and in ln T (a time step's first corrections are ~1e-3, its last ~1e-6 and below),
- * and the network's energy generation with its two slopes only ({@code NuclearNetwork.energy}).
+ * them in a Newton iteration, at the points of {@link MicrophysicsBenchmark}: the equation of state and the opacity
+ * bound to the point's composition ({@code atComposition}), the equation of state started from the point's state of
+ * the previous iteration, {@code offset} away in ln rho and in ln T (a time step's first corrections are ~1e-3, its
+ * last ~1e-6 and below), the opacity having answered there too (a bound opacity keeps its last table cell), and the
+ * network's energy generation with its two slopes only ({@code NuclearNetwork.energy}).
  * {@link MicrophysicsBenchmark} times the same three from nothing: the equation of state's cold start and the
  * network's full rates with their composition slopes.
  */
@@ -50,6 +52,7 @@ public class WarmMicrophysicsBenchmark {
     private double temperature;
     private Composition composition;
     private EosAtComposition eos;
+    private OpacityAtComposition boundOpacity;
     private EosState previousIteration;
 
     @org.openjdk.jmh.annotations.Setup
@@ -68,12 +71,14 @@ public class WarmMicrophysicsBenchmark {
         composition = nuclear.equilibrium(rho, t, Composition.scaledSolar(x, z));
         eos = StandardPhysics.equationOfState().atComposition(composition);
         previousIteration = eos.atDensity(rho * Math.exp(-offset), t * Math.exp(-offset), null);
+        boundOpacity = opacity.atComposition(composition);
+        boundOpacity.rosselandMean(rho * Math.exp(-offset), t * Math.exp(-offset));
     }
 
     @Benchmark
     public void asTheSolverCalls(Blackhole hole) {
         hole.consume(eos.atDensity(density, temperature, previousIteration));
-        hole.consume(opacity.rosselandMean(density, temperature, composition));
+        hole.consume(boundOpacity.rosselandMean(density, temperature));
         nuclear.energy(density, temperature, composition, burning);
         hole.consume(burning[0]);
     }
