@@ -9,9 +9,10 @@ import org.convgrid.engine.units.Constants;
  * 1968, Principles of Stellar Evolution and Nucleosynthesis, ch. 4), so below some temperature every rate is
  * negligible; taking the energy generation there as zero, instead of evaluating nine screened reactions, is common
  * practice (no single source). {@link HydrogenBurningNetwork#energy} does so (the structure equations' call); the
- * composition rates ({@link HydrogenBurningNetwork#burn}) are always evaluated, but the network states their bound
- * ({@link #RATE_BOUND}, {@link HydrogenBurningNetwork#rateBound}) for a caller that can tell when it does not matter. Why: in a contracting pre-main-sequence star and in the envelope of every star about
- * half of the mesh points are that cool (1 Msun, Z = 0.02: 137 of the start model's 250 points, 116-171 of 250-300
+ * composition rates ({@link HydrogenBurningNetwork#burn}) are always evaluated when asked for, and the network
+ * states their bound ({@link #RATE_BOUND}, {@link HydrogenBurningNetwork#rateBound}) for a caller that can tell when
+ * they cannot matter (the composition step). Why: in a contracting pre-main-sequence star and in the envelope of
+ * every star about half of the mesh points are that cool (1 Msun, Z = 0.02: 137 of the start model's 250 points, 116-171 of 250-300
  * before the ZAMS, 234-240 of 500 on the main sequence), and the network was 10-13 % of the CPU of the
  * pre-main-sequence steps.
  *
