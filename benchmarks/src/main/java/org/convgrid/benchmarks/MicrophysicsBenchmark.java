@@ -42,18 +42,12 @@ public class MicrophysicsBenchmark {
 
     @org.openjdk.jmh.annotations.Setup
     public void setUp() {
-        switch (point) {
-            case "centre_sun" -> set(152.9, 1.567e7, 0.346, 0.0188);
-            case "envelope_sun" -> set(0.19, 2.2e6, 0.70, 0.0188);
-            case "centre_m_dwarf" -> set(300.0, 6.0e6, 0.70, 0.0188);
-            default -> set(3e-7, 5000.0, 0.70, 0.0188);
-        }
-    }
-
-    private void set(double rho, double t, double x, double z) {
+        BenchmarkPoint p = BenchmarkPoint.named(point);
+        double rho = p.density();
+        double t = p.temperature();
         density = rho;
         temperature = t;
-        composition = nuclear.equilibrium(rho, t, Composition.scaledSolar(x, z));
+        composition = nuclear.equilibrium(rho, t, Composition.scaledSolar(p.x(), p.z()));
     }
 
     @Benchmark
