@@ -201,7 +201,7 @@ public final class OpalGn93Opacity implements Opacity {
         } else {
             double[] out = new double[3];
             if (cool == null) {
-                hotLogKappa(density, temperature, composition, at, lt, lr, out);
+                logKappa(hot, density, temperature, composition, at, lt, lr, out);
             } else {
                 blend(density, temperature, composition, at, lt, lr, out);
             }
@@ -223,13 +223,13 @@ public final class OpalGn93Opacity implements Opacity {
         double u = (lt - BLEND_FROM_LOG_T) / width;
         double w = AnalyticallyEdgedTable.fade(u);
         if (w == 1.0) {
-            coolLogKappa(density, temperature, composition, at, lt, lr, out);
+            logKappa(cool, density, temperature, composition, at, lt, lr, out);
         } else if (w == 0.0) {
-            hotLogKappa(density, temperature, composition, at, lt, lr, out);
+            logKappa(hot, density, temperature, composition, at, lt, lr, out);
         } else {
             double[] h = new double[3];
-            hotLogKappa(density, temperature, composition, at, lt, lr, h);
-            coolLogKappa(density, temperature, composition, at, lt, lr, out);
+            logKappa(hot, density, temperature, composition, at, lt, lr, h);
+            logKappa(cool, density, temperature, composition, at, lt, lr, out);
             double diff = out[0] - h[0];
             out[1] = h[1] + w * (out[1] - h[1]) + AnalyticallyEdgedTable.fadeSlope(u) / width * diff;
             out[2] = h[2] + w * (out[2] - h[2]);
@@ -237,21 +237,13 @@ public final class OpalGn93Opacity implements Opacity {
         }
     }
 
-    private void hotLogKappa(double density, double temperature, Composition composition, AtComposition at,
-                             double lt, double lr, double[] out) {
+    /** One table set's log kappa, with the weights {@code at} holds for it (null: taken at this call). */
+    private static void logKappa(AnalyticallyEdgedTable set, double density, double temperature,
+                                 Composition composition, AtComposition at, double lt, double lr, double[] out) {
         if (at == null) {
-            hot.logKappa(density, temperature, composition, lt, lr, out);
+            set.logKappa(density, temperature, composition, lt, lr, out);
         } else {
-            hot.logKappa(density, temperature, composition, at.hot(), lt, lr, out);
-        }
-    }
-
-    private void coolLogKappa(double density, double temperature, Composition composition, AtComposition at,
-                              double lt, double lr, double[] out) {
-        if (at == null) {
-            cool.logKappa(density, temperature, composition, lt, lr, out);
-        } else {
-            cool.logKappa(density, temperature, composition, at.cool(), lt, lr, out);
+            set.logKappa(density, temperature, composition, at.weightsIn(set), lt, lr, out);
         }
     }
 
@@ -278,20 +270,17 @@ public final class OpalGn93Opacity implements Opacity {
             return evaluate(density, temperature, composition, this, conductionAt.rosselandMean(density, temperature));
         }
 
-        TableAtComposition hot() {
-            TableAtComposition at = hotAt;
+        /** The weights of this composition in {@code set} (the hot or the cool one), taken at the first call. */
+        TableAtComposition weightsIn(AnalyticallyEdgedTable set) {
+            boolean isHot = set == hot;
+            TableAtComposition at = isHot ? hotAt : coolAt;
             if (at == null) {
-                at = hot.atComposition(composition);
-                hotAt = at;
-            }
-            return at;
-        }
-
-        TableAtComposition cool() {
-            TableAtComposition at = coolAt;
-            if (at == null) {
-                at = cool.atComposition(composition);
-                coolAt = at;
+                at = set.atComposition(composition);
+                if (isHot) {
+                    hotAt = at;
+                } else {
+                    coolAt = at;
+                }
             }
             return at;
         }
