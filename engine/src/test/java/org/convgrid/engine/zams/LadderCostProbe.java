@@ -125,11 +125,15 @@ class LadderCostProbe {
         EnvelopeSweep envelope = new EnvelopeSweep(physics);
         int last = (int) Math.floor(Math.abs(Math.log(massOf(LINE_MASSES - 1)) / ZamsLadder.RUNG_SPACING));
         int lowest = (int) Math.floor(Math.abs(Math.log(massOf(0)) / ZamsLadder.RUNG_SPACING));
+        ZamsModel below = null;
         for (int sign : new int[] {-1, +1}) {
             List<ZamsModel> rungs = new ArrayList<>();
             for (int next = 1; next <= (sign < 0 ? lowest : last); next++) {
                 List<ZamsModel> known = new ArrayList<>();
                 known.add(next == 1 ? anchor : rungs.get(next - 2));
+                if (next == 1 && sign > 0 && below != null) {
+                    known.add(below);
+                }
                 if (next >= 2) {
                     known.add(next == 2 ? anchor : rungs.get(next - 3));
                 }
@@ -145,7 +149,7 @@ class LadderCostProbe {
                     attempts++;
                     ZamsModel nearest = nearest(known, mass, null);
                     double remaining = Math.log(mass / nearest.model().mass());
-                    double target = Math.abs(remaining) <= step ? mass
+                    double target = Math.abs(remaining) <= step + ZamsTrack.SAME_MASS ? mass
                             : nearest.model().mass() * Math.exp(Math.copySign(step, remaining));
                     ZamsModel other = partner(known, nearest, target);
                     ModelState seed = seeder.seed(nearest.model(), other == null ? null : other.model(), target);
@@ -201,6 +205,9 @@ class LadderCostProbe {
                     break;
                 }
                 rungs.add(done);
+                if (sign < 0 && next == 1) {
+                    below = done;
+                }
             }
         }
     }
