@@ -58,20 +58,23 @@ class ZamsOriginTest {
      * Re-frozen when the Jacobian came to reuse the equation of state's differenced second derivatives at points
      * that moved little (EosCurvature; the previous model's carried into each step): every printed value stays the
      * same; the 0.3 Msun track to 0.06 Gyr takes Newton iterations 73 -> 75 (the 1 Msun track 56, unchanged).
+     * Re-frozen when the zero-age seeds came to extrapolate ln L instead of L (HomologySeeder.extrapolatedLuminosity)
+     * and the ladder's rung +1 to start from the anchor and rung -1: every printed value stays the same; Newton
+     * iterations of the zero-age models 4 -> 3 (0.3 Msun; 75 -> 74 to 0.06 Gyr) and 25 -> 21 (1 Msun; 56 -> 52).
      */
     private static final List<String> ROWS_BEFORE = List.of(
             "p0-z00-m000-a00,0.3,0.02,0.28,1.8,0.0,0.0,main_sequence,ok,,0.009842163,"
                     + "0.3030321,3302.592,4.952212,7392598.0,89.96434,0.6971044,,fully_convective,,,0.0,0.0,0.3,"
-                    + "179.0309,4,schwarzschild,1.0,546.1235",
+                    + "179.0309,3,schwarzschild,1.0,546.1235",
             "p0-z00-m000-a01,0.3,0.02,0.28,1.8,0.0,0.06,main_sequence,ok,,0.009505466,"
                     + "0.2980587,3301.179,4.966585,7497948.0,94.21271,0.699315,,fully_convective,,,0.0,0.0,0.3,"
-                    + "185.4432,75,schwarzschild,1.0,706.9611",
+                    + "185.4432,74,schwarzschild,1.0,706.9611",
             "p0-z00-m001-a00,1.0,0.02,0.28,1.8,0.0,0.0,main_sequence,ok,,0.7289041,0.9117275,"
                     + "5585.495,4.518338,1.34996e+07,81.93622,0.6993801,,conv_envelope,,,0.9758374,0.7312461,"
-                    + "0.02416264,25.6643,25,schwarzschild,1.0,38.70942",
+                    + "0.02416264,25.6643,21,schwarzschild,1.0,38.70942",
             "p0-z00-m001-a01,1.0,0.02,0.28,1.8,0.0,0.06,main_sequence,ok,,0.7314742,"
                     + "0.9128273,5587.043,4.51729,1.351793e+07,82.43074,0.6950223,,conv_envelope,,,0.9759095,"
-                    + "0.7312429,0.02409052,25.6272,56,schwarzschild,1.0,38.63376");
+                    + "0.7312429,0.02409052,25.6272,52,schwarzschild,1.0,38.63376");
 
     @TempDir
     Path dir;

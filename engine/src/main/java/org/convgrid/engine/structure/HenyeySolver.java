@@ -59,27 +59,75 @@ public final class HenyeySolver {
      * @param iterationBudget Newton iterations allowed
      * @param reuseThreshold largest correction after which the next iteration reuses the factorised Jacobian
      *                       ({@link #REUSE_THRESHOLD} by default)
+     * @param giveUpRate a relaxation stops ({@link StopReason#ITERATION_BUDGET}) as soon as its largest correction
+     *                   exceeds this many times the iterations left beyond {@link #FINISHING_ITERATIONS} (too much
+     *                   to work off within the budget) or grows ({@link #hopeless}); infinite (the default) never
+     *                   stops early
      */
-    public record Settings(double tolerance, double maxStep, int iterationBudget, double reuseThreshold) {
+    public record Settings(double tolerance, double maxStep, int iterationBudget, double reuseThreshold,
+                           double giveUpRate) {
         public static final Settings DEFAULT = new Settings(DEFAULT_TOLERANCE, DEFAULT_MAX_STEP,
                 DEFAULT_ITERATION_BUDGET);
 
-        /** With the default {@link #REUSE_THRESHOLD}. */
+        /** With the default {@link #REUSE_THRESHOLD}, never given up early. */
         public Settings(double tolerance, double maxStep, int iterationBudget) {
             this(tolerance, maxStep, iterationBudget, REUSE_THRESHOLD);
         }
 
+        /** Never given up early. */
+        public Settings(double tolerance, double maxStep, int iterationBudget, double reuseThreshold) {
+            this(tolerance, maxStep, iterationBudget, reuseThreshold, Double.POSITIVE_INFINITY);
+        }
+
         public Settings withIterationBudget(int budget) {
-            return new Settings(tolerance, maxStep, budget, reuseThreshold);
+            return new Settings(tolerance, maxStep, budget, reuseThreshold, giveUpRate);
         }
 
         public Settings withTolerance(double largestCorrection) {
-            return new Settings(largestCorrection, maxStep, iterationBudget, reuseThreshold);
+            return new Settings(largestCorrection, maxStep, iterationBudget, reuseThreshold, giveUpRate);
         }
 
         public Settings withReuseThreshold(double largestCorrection) {
-            return new Settings(tolerance, maxStep, iterationBudget, largestCorrection);
+            return new Settings(tolerance, maxStep, iterationBudget, largestCorrection, giveUpRate);
         }
+
+        /** The same settings given up early at {@code rate} (see {@link #giveUpRate}). */
+        public Settings withGiveUpRate(double rate) {
+            return new Settings(tolerance, maxStep, iterationBudget, reuseThreshold, rate);
+        }
+    }
+
+    /**
+     * Iterations a relaxation keeps for its last corrections when it asks whether the budget can still be met
+     * ({@link Settings#giveUpRate}): from a largest correction of ~1 the seeded zero-age models took 6-8 iterations
+     * to the tolerance.
+     */
+    public static final int FINISHING_ITERATIONS = 8;
+    /**
+     * A largest correction at or below this is never given up ({@link Settings#giveUpRate}): a relaxation there is
+     * near its solution and ends, converged or out of budget, within a few iterations.
+     */
+    public static final double GIVE_UP_FLOOR = 1.0;
+    /**
+     * A relaxation that may be given up ({@link Settings#giveUpRate}) is also given up when its largest correction
+     * (above {@link #GIVE_UP_FLOOR}) exceeds this many times the smallest one before it: the iteration is moving
+     * away from the solution. The converging seeded zero-age models grew by at most a factor of 1.34 from one
+     * iteration to a later one (6.1 to 8.2, then converged), the failing ones by 2 to 20 before they blew up.
+     */
+    public static final double GIVE_UP_GROWTH = 2.0;
+
+    /**
+     * Whether a relaxation with the largest correction {@code largest} at iteration {@code iteration} (the smallest
+     * before it {@code smallest}) is to be given up: above {@link #GIVE_UP_FLOOR} and either more than
+     * {@link Settings#giveUpRate} per iteration left, keeping {@link #FINISHING_ITERATIONS} for the end, or more than
+     * {@link #GIVE_UP_GROWTH} times {@code smallest}. Never with an infinite rate.
+     */
+    static boolean hopeless(double largest, double smallest, int iteration, Settings settings) {
+        if (!(settings.giveUpRate() < Double.POSITIVE_INFINITY) || !(largest > GIVE_UP_FLOOR)) {
+            return false;
+        }
+        int left = settings.iterationBudget() - iteration - FINISHING_ITERATIONS;
+        return largest > settings.giveUpRate() * Math.max(0, left) || largest > GIVE_UP_GROWTH * smallest;
     }
 
     /**
@@ -116,6 +164,8 @@ public final class HenyeySolver {
         // true while the factorised Jacobian is the one of y (false after a chord step evaluated without it)
         boolean fresh = true;
         double previousLargest = Double.POSITIVE_INFINITY;
+        // the smallest largest correction of the iterations before this one (for hopeless)
+        double smallest = Double.POSITIVE_INFINITY;
         for (int iteration = 1; iteration <= settings.iterationBudget(); iteration++) {
             if (fresh && !jacobian.factor()) {
                 return new Result(y, new SolveReport(StopReason.SINGULAR_JACOBIAN, iteration, largest,
@@ -149,6 +199,11 @@ public final class HenyeySolver {
                 // scratch values) was at y: return it as it is
                 return new Result(y, new SolveReport(StopReason.CONVERGED, iteration, largest, worst / nv,
                         worst % nv, ""));
+            }
+            if (hopeless(largest, smallest, iteration, settings)) {
+                return new Result(y, new SolveReport(StopReason.ITERATION_BUDGET, iteration, largest, worst / nv,
+                        worst % nv, "given up: correction too large for the " + (settings.iterationBudget() - iteration)
+                        + " iterations left"));
             }
             double lambda = Math.min(1.0, settings.maxStep() / largest);
             double norm = sumOfSquares(residual);
@@ -189,6 +244,7 @@ public final class HenyeySolver {
             System.arraycopy(trial, 0, y, 0, n);
             fresh = withJacobian;
             previousLargest = largest;
+            smallest = Math.min(smallest, largest);
         }
         return new Result(y, new SolveReport(StopReason.ITERATION_BUDGET, settings.iterationBudget(), largest,
                 worst / nv, worst % nv, ""));

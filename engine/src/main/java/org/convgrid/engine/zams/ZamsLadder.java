@@ -14,8 +14,11 @@ import org.convgrid.engine.structure.SolveFailedException;
  * start (slow, and at some masses failing into a walk from the anchor mass that every such chunk paid again).
  *
  * <p>Rung 0 is the cold start at the anchor mass; rung k is walked ({@link ZamsTrack}) from rungs k -+ 1 and
- * k -+ 2, the two next to it on the anchor's side. Every rung is therefore a pure function of the line, whichever
- * chunk or thread asks for it first, and a grid gives the same catalogue at any thread count. A rung that does not
+ * k -+ 2, the two next to it on the anchor's side, rung -1 from the anchor alone and rung +1 from the anchor and rung
+ * -1 (from the anchor alone, the global homology seed of 1.35 Msun ran out its iterations and the walk took two half
+ * steps: 41-71 Newton iterations on the lines of 0.1-20 Msun at Z = 0.004-0.03; from the two 11-20, 40 at Z = 0.004
+ * where the step is still halved once, LadderCostProbe). Every rung is therefore a pure function of the line,
+ * whichever chunk or thread asks for it first, and a grid gives the same catalogue at any thread count. A rung that does not
  * converge ends its side of the ladder (the walk towards the masses beyond it starts from the last rung). Thread-safe:
  * each side is built under its own lock and read without it, the rungs are immutable.
  */
@@ -77,16 +80,21 @@ public final class ZamsLadder {
     /**
      * The rungs {@link #startFor} reaches for {@code mass} (g), as signed rung indices in build order: 0 (the anchor),
      * then +-1, +-2, ... on the mass's side, up to the nearest rung on the anchor's side of it (to rung +-1 when that
-     * is the anchor). Calling {@link #startFor} on the {@link #rungMass} of each, in this order, builds exactly them.
+     * is the anchor), with rung -1 before rung +1 (which is seeded from it). Calling {@link #startFor} on the
+     * {@link #rungMass} of each, in this order, builds exactly them.
      */
     public static int[] rungsFor(double mass) {
         double x = rungCoordinate(mass);
         int k = nearestRungTowardsAnchor(x);
         int sign = x < 0 ? -1 : +1;
         int last = k == 0 && Math.abs(x) >= ON_RUNG ? 1 : k;
-        int[] rungs = new int[last + 1];
+        int below = sign > 0 && last >= 1 ? 1 : 0;
+        int[] rungs = new int[last + 1 + below];
+        if (below == 1) {
+            rungs[1] = -1;
+        }
         for (int i = 1; i <= last; i++) {
-            rungs[i] = sign * i;
+            rungs[i + below] = sign * i;
         }
         return rungs;
     }
@@ -168,6 +176,9 @@ public final class ZamsLadder {
             walk.add(next == 1 ? centre : rungs.get(next - 2));
             if (next >= 2) {
                 walk.add(next == 2 ? centre : rungs.get(next - 3));
+            } else if (sign > 0) {
+                // the other side's first rung: locks are only ever taken above, then below
+                below.rung(1).ifPresent(walk::add);
             }
             ZamsResult r = walk.solve(rungMass(sign * next));
             if (r.converged()) {

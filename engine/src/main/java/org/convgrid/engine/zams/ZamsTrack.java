@@ -152,7 +152,9 @@ public final class ZamsTrack {
         for (int attempt = 0; attempt < ATTEMPT_BUDGET; attempt++) {
             ZamsModel nearest = nearest(mass, null);
             double remaining = Math.log(mass / nearest.model().mass());
-            double target = Math.abs(remaining) <= step ? mass
+            // a step that reaches the mass to round-off lands on it: one ulp short, it left the mass to a relaxation
+            // of its own (one iteration, with the seeding and the remesh check; at four rungs of a ladder line)
+            double target = Math.abs(remaining) <= step + SAME_MASS ? mass
                     : nearest.model().mass() * Math.exp(Math.copySign(step, remaining));
             ZamsModel other = partner(nearest, target);
             try {

@@ -118,4 +118,30 @@ class HenyeySolverTest {
             assertThat(again.solution()[i]).isCloseTo(solution[i], within(HenyeySolver.DEFAULT_TOLERANCE));
         }
     }
+
+    @Test
+    void aRelaxationThatCannotMeetItsBudgetIsGivenUpOnlyWhenAskedTo() {
+        HenyeySolver.Settings seeded = HenyeySolver.Settings.DEFAULT.withIterationBudget(25).withGiveUpRate(2.0);
+        // 25 - 1 - 8 = 16 iterations to work off the correction at 2 per iteration: up to 32
+        assertThat(HenyeySolver.hopeless(33.0, Double.POSITIVE_INFINITY, 1, seeded)).isTrue();
+        assertThat(HenyeySolver.hopeless(31.0, Double.POSITIVE_INFINITY, 1, seeded)).isFalse();
+        // grown to more than twice the smallest correction before it
+        assertThat(HenyeySolver.hopeless(8.1, 4.0, 3, seeded)).isTrue();
+        assertThat(HenyeySolver.hopeless(7.9, 4.0, 3, seeded)).isFalse();
+        // near the solution never, even past the iterations kept for the end
+        assertThat(HenyeySolver.hopeless(0.9, 0.1, 24, seeded)).isFalse();
+        assertThat(HenyeySolver.hopeless(1.1, 1.0, 18, seeded)).isTrue();
+        // by default a relaxation runs out its budget
+        assertThat(HenyeySolver.hopeless(1.0e6, 1.0, 24, HenyeySolver.Settings.DEFAULT)).isFalse();
+
+        // opt-in only: a relaxation from the polytropic guess wanders (the correction grows again after 30
+        // iterations) and still converges within the default budget, so only seeded relaxations are given up
+        PhysicsSet physics = StandInPhysics.create(1.8);
+        ModelState guess = new PolytropicGuess(200).guess(Constants.M_SUN, SOLAR);
+        assertThat(new StructureSolver(physics).relax(guess).report().converged()).isTrue();
+        SolveFailedException e = catchThrowableOfType(SolveFailedException.class, () -> new StructureSolver(physics,
+                HenyeySolver.Settings.DEFAULT.withGiveUpRate(2.0)).relax(guess));
+        assertThat(e.report().reason()).isEqualTo(StopReason.ITERATION_BUDGET);
+        assertThat(e.report().detail()).startsWith("given up");
+    }
 }

@@ -29,7 +29,7 @@ class HomologySeederTest {
 
     @Test
     void shellByShellExtrapolationIsExactForStructuresLinearInLnMass() {
-        // each shell's ln T, ln rho, ln r and L vary linearly with ln M: the extrapolation must reproduce that
+        // each shell's ln T, ln rho, ln r and ln L vary linearly with ln M: the extrapolation must reproduce that
         ModelState a = synthetic(2.0e33, 0.0);
         ModelState b = synthetic(2.0e33 * Math.exp(0.1), 0.1);
         ModelState c = new HomologySeeder().extrapolate(b, a, 2.0e33 * Math.exp(0.25));
@@ -40,6 +40,14 @@ class HomologySeederTest {
             assertThat(c.lnRadius(k)).isCloseTo(expected.lnRadius(k), within(1e-9));
             assertThat(c.luminosity(k)).isCloseTo(expected.luminosity(k), within(1e-9 * expected.luminosity(k)));
         }
+    }
+
+    @Test
+    void luminosityIsExtrapolatedInLnLWherePositiveAndLinearlyWhereNot() {
+        // a whole step beyond neighbours a step apart, L falling to a quarter: in ln L a quarter again, never below 0
+        assertThat(HomologySeeder.extrapolatedLuminosity(0.25, 1.0, 1.0)).isCloseTo(0.0625, within(1e-15));
+        assertThat(HomologySeeder.extrapolatedLuminosity(0.0, 0.0, 1.0)).isEqualTo(0.0);
+        assertThat(HomologySeeder.extrapolatedLuminosity(-1.0, -2.0, 0.5)).isCloseTo(-0.5, within(1e-15));
     }
 
     @Test
@@ -104,7 +112,8 @@ class HomologySeederTest {
             lnR[k] = 20 + Math.log(0.01 + q[k]) + (0.8 + 0.01 * k) * x;
             lnRho[k] = 4 - 10 * q[k] + (-1.4 + 0.02 * k) * x;
             lnT[k] = 16 - 5 * q[k] + (0.2 - 0.01 * k) * x;
-            lum[k] = 1e33 * (q[k] + 0.001) * (1 + (3.5 + 0.1 * k) * x);
+            // L ~ M^xL (Kippenhahn, Weigert & Weiss 2012, ch. 20), with the exponent varying from shell to shell
+            lum[k] = 1e33 * (q[k] + 0.001) * Math.exp((3.5 + 0.1 * k) * x);
             comp[k] = SOLAR;
         }
         return new ModelState(MassMesh.ofFractions(mass, q, e), comp, lnR, lnRho, lnT, lum);

@@ -51,9 +51,10 @@ class ZamsLadderTest {
     void theRungsNamedForAMassAreTheOnesItsStartReaches() {
         // ln(0.4) / 0.3 = -3.05: the anchor, then rungs 1 to 3 below it
         assertThat(ZamsLadder.rungsFor(0.4 * Constants.M_SUN)).containsExactly(0, -1, -2, -3);
-        assertThat(ZamsLadder.rungsFor(1.2 * Constants.M_SUN)).containsExactly(0, 1);
+        // rung +1 is seeded from the anchor and rung -1
+        assertThat(ZamsLadder.rungsFor(1.2 * Constants.M_SUN)).containsExactly(0, -1, 1);
         assertThat(ZamsLadder.rungsFor(Constants.M_SUN)).containsExactly(0);
-        assertThat(ZamsLadder.rungsFor(ZamsLadder.rungMass(2))).containsExactly(0, 1, 2);
+        assertThat(ZamsLadder.rungsFor(ZamsLadder.rungMass(2))).containsExactly(0, -1, 1, 2);
         assertThat(ZamsLadder.rungMass(-3) / Constants.M_SUN).isCloseTo(Math.exp(-0.9), within(SAME));
 
         // built ahead rung by rung, the start is the one a fresh ladder builds on demand
