@@ -454,6 +454,18 @@ final class PlasmaPoint {
         ionT += a * (dh1 * chi0 + dh2 * chi01);
         exT += a * (dh0 * xiHe0 + dh1 * xiHe1);
 
+        // The metals' stages, two per metal (the first, weight wf, and the inner sites, wi): each stage's terms
+        // are its weight times (chi beta + lxT), (xi + lxRho) or lxEta, so the loop gathers the weights' moments in
+        // chi and xi and the shared factors are applied once after it (a third of the operations of per-stage sums).
+        double sumW = 0.0;
+        double sumWChi = 0.0;
+        double sumWXi = 0.0;
+        double sumWChiChi = 0.0;
+        double sumWXiChi = 0.0;
+        double sumWXiXi = 0.0;
+        double metalYe = 0.0;
+        double metalIon = 0.0;
+        double metalEx = 0.0;
         for (int m = 0; m < el.metalCount; m++) {
             a = abundance[2 + m];
             int sites = el.charge[m] - 1;
@@ -469,23 +481,32 @@ final class PlasmaPoint {
             double chiI = el.innerChi[m];
             double xiN = xiNeutral[m];
             double xiI = xiInner[m];
-            double lfRho = xiN + lxRho;
-            double lfT = chiF * betaChi + lxT;
-            double liRho = xiI + lxRho;
-            double liT = chiI * betaChi + lxT;
-            ye += a * (g1 + sites * y);
-            yeEta += (wf + wi) * lxEta;
-            yeRho += wf * lfRho + wi * liRho;
-            yeT += wf * lfT + wi * liT;
-            ion += a * (g1 * chiF + sites * y * chiI);
-            ionEta += (wf * chiF + wi * chiI) * lxEta;
-            ionT += wf * chiF * lfT + wi * chiI * liT;
-            double exM = a * (g0 * xiN + sites * y0 * xiI);
-            ex += exM;
-            exEta -= (wf * xiN + wi * xiI) * lxEta;
-            exRho += exM - wf * xiN * lfRho - wi * xiI * liRho;
-            exT -= wf * xiN * lfT + wi * xiI * liT;
+            double cf = wf * chiF;
+            double ci = wi * chiI;
+            double vf = wf * xiN;
+            double vi = wi * xiI;
+            sumW += wf + wi;
+            sumWChi += cf + ci;
+            sumWXi += vf + vi;
+            sumWChiChi += cf * chiF + ci * chiI;
+            sumWXiChi += vf * chiF + vi * chiI;
+            sumWXiXi += vf * xiN + vi * xiI;
+            double ionisedSites = sites * y;
+            metalYe += a * (g1 + ionisedSites);
+            metalIon += a * (g1 * chiF + ionisedSites * chiI);
+            metalEx += a * (g0 * xiN + sites * y0 * xiI);
         }
+        ye += metalYe;
+        yeEta += sumW * lxEta;
+        yeRho += sumWXi + sumW * lxRho;
+        yeT += sumWChi * betaChi + sumW * lxT;
+        ion += metalIon;
+        ionEta += sumWChi * lxEta;
+        ionT += sumWChiChi * betaChi + sumWChi * lxT;
+        ex += metalEx;
+        exEta -= sumWXi * lxEta;
+        exRho += metalEx - sumWXiXi - sumWXi * lxRho;
+        exT -= sumWXiChi * betaChi + sumWXi * lxT;
         ye = Math.max(ye, Double.MIN_NORMAL);
 
         double electronPressure = (2.0 / 3.0) * ELECTRON_DENSITY_CONSTANT * kT * t15 * fd[2];
