@@ -27,7 +27,7 @@ import org.junit.jupiter.api.condition.EnabledIfSystemProperty;
  * 0.004,0.01,0.02,0.03; Y = 0.2471 + 1.5 Z). For each tolerance of {@code probe.tolerances} (default 1e-9..1e-5) it
  * prints the EOS and opacity calls per node, thread CPU per node (least of {@code probe.repeats}, default 2) and how
  * far the node values and derivatives lie from a {@code probe.reference} (default 1e-11) integration; then the table
- * interpolation error at the cells' mid points (u, v = 0.43, 0.57, as AtmosphereTableTest) against the reference
+ * interpolation error at two points per cell (u, v = 0.43, 0.57, as AtmosphereTableTest, and 0.2, 0.8) against the reference
  * direct integration, the figure the node error must stay far below. Run with -Dconvgrid.probe=true.
  */
 @EnabledIfSystemProperty(named = "convgrid.probe", matches = "true")
@@ -110,13 +110,19 @@ class AtmosphereNodeProbe {
         TableAxis ty = AtmosphereTable.DEFAULT_GRAVITY_AXIS;
         List<double[]> points = new ArrayList<>();
         List<SurfaceCondition> direct = new ArrayList<>();
+        // two points per cell: near its middle (as AtmosphereTableTest) and near a corner, where the corners' cross
+        // derivatives weigh more
+        double[][] positions = {{0.43, 0.57}, {0.2, 0.8}};
         for (int i = 0; i < 40; i++) {
             for (int j = 3; j < 9; j++) {
-                double[] point = {Math.pow(10, tx.node(i) + 0.43 * tx.step()), Math.pow(10, ty.node(j) + 0.57 * ty.step())};
-                SurfaceCondition s = at(reference, point, c);
-                if (s != null) {
-                    points.add(point);
-                    direct.add(s);
+                for (double[] uv : positions) {
+                    double[] point = {Math.pow(10, tx.node(i) + uv[0] * tx.step()),
+                            Math.pow(10, ty.node(j) + uv[1] * ty.step())};
+                    SurfaceCondition s = at(reference, point, c);
+                    if (s != null) {
+                        points.add(point);
+                        direct.add(s);
+                    }
                 }
             }
         }
@@ -131,6 +137,8 @@ class AtmosphereNodeProbe {
             double worst = 0.0;
             double worstCool = 0.0;
             double sum = 0.0;
+            double dTeff = 0.0;
+            double dG = 0.0;
             int n = 0;
             for (int k = 0; k < points.size(); k++) {
                 SurfaceCondition s = at(table, points.get(k), c);
@@ -138,6 +146,8 @@ class AtmosphereNodeProbe {
                     continue;
                 }
                 double d = Math.abs(s.lnPressure() - direct.get(k).lnPressure());
+                dTeff = Math.max(dTeff, Math.abs(s.dlnPDlnTeff() - direct.get(k).dlnPDlnTeff()));
+                dG = Math.max(dG, Math.abs(s.dlnPDlnG() - direct.get(k).dlnPDlnG()));
                 sum += d;
                 n++;
                 if (points.get(k)[0] < Math.pow(10, 3.45)) {
@@ -146,8 +156,9 @@ class AtmosphereNodeProbe {
                     worst = Math.max(worst, d);
                 }
             }
-            System.out.printf(Locale.ROOT, "  table from tolerance %.0e: %d mid-cell points, |d ln P| mean %.1e, "
-                    + "max %.1e at log Teff >= 3.45, max %.1e below%n", tolerance, n, sum / n, worst, worstCool);
+            System.out.printf(Locale.ROOT, "  table from tolerance %.0e: %d in-cell points, |d ln P| mean %.2e, "
+                    + "max %.2e at log Teff >= 3.45, max %.2e below; max |d dlnP/dlnTeff| %.3f, |d dlnP/dlng| %.3f%n",
+                    tolerance, n, sum / n, worst, worstCool, dTeff, dG);
         }
     }
 
