@@ -13,7 +13,7 @@ import org.convgrid.engine.state.Composition;
  * bicubic Hermite patches (e.g. Press et al. 2007, Numerical Recipes 3rd ed., sec. 3.6), so that ln P, ln T
  * and their first derivatives are continuous and the derivatives reported are those of the interpolant
  * (what a Newton solver needs). Node values and first derivatives come from the wrapped boundary; the cross
- * derivative is the average of the two centred differences of the first derivatives.
+ * derivative is the centred difference of d/d ln g along ln Teff (see {@link HermitePatch}).
  *
  * <p>Default grid: log Teff 3.30-4.80 (about 2000-63000 K) in {@value #DEFAULT_TEFF_POINTS} nodes, log g
  * 2.5-6.0 in {@value #DEFAULT_GRAVITY_POINTS} nodes (steps 0.033 and 0.35 dex): with an H^-, Kramers and
@@ -28,7 +28,7 @@ import org.convgrid.engine.state.Composition;
  * with a missing corner fail with {@link ErrorKind#OFF_TABLE}, parameters ("atmosphere", Teff, g).
  *
  * <p>Nodes are integrated on first use, not all at once: a cell needs its four corners and their neighbours
- * along each axis (for the cross derivatives), at most 12 nodes, and a zero-age model's surface visits a few
+ * along Teff (for the cross derivatives), at most 8 nodes, and a zero-age model's surface visits a few
  * cells, so it pays for a few dozen of the {@value #DEFAULT_TEFF_POINTS} x {@value #DEFAULT_GRAVITY_POINTS} nodes.
  *
  * <p>Thread-safe: each node, once integrated, is kept and never changes; per-composition tables are kept in a
@@ -90,7 +90,7 @@ public final class AtmosphereTable implements SurfaceBoundary {
 
     /**
      * The table of one composition, for callers that keep it. Its nodes are integrated when a query first needs
-     * them (the four corners of the query's cell and their neighbours), so a model pays for the few cells its
+     * them (the four corners of the query's cell and their neighbours along Teff), so a model pays for the few cells its
      * surface visits rather than for the whole grid; the answers are those of a table built in full.
      */
     public SurfaceBoundary tabulate(Composition composition) {
