@@ -13,7 +13,7 @@ import org.convgrid.engine.state.Composition;
  * bicubic Hermite patches (e.g. Press et al. 2007, Numerical Recipes 3rd ed., sec. 3.6), so that ln P, ln T
  * and their first derivatives are continuous and the derivatives reported are those of the interpolant
  * (what a Newton solver needs). Node values and first derivatives come from the wrapped boundary; the cross
- * derivative is the average of the two centred differences of the first derivatives.
+ * derivative is the centred difference of d/d ln g along ln Teff (see {@link HermitePatch}).
  *
  * <p>Default grid: log Teff 3.30-4.80 (about 2000-63000 K) in {@value #DEFAULT_TEFF_POINTS} nodes, log g
  * 2.5-6.0 in {@value #DEFAULT_GRAVITY_POINTS} nodes (steps 0.033 and 0.35 dex): with an H^-, Kramers and
@@ -22,13 +22,14 @@ import org.convgrid.engine.state.Composition;
  * 3.45-3.8, ~6e-3 above and 0.03-0.06 below log Teff 3.45 (measured at mid-cell points of this grid and of the
  * low-gravity one, 2026-12-03); in those coolest atmospheres the grey approximation itself is the larger error
  * (Chabrier &amp; Baraffe 1997, A&amp;A 327, 1039; from memory). A node of
- * {@link GreyAtmosphere} with the standard physics costs about 340-380 EOS and opacity calls where the atmosphere
- * stays below the OPAL tables and 650-900 where it enters them. Nodes where the wrapped boundary fails (for instance
+ * {@link GreyAtmosphere} with the standard physics costs 412-419 EOS and opacity calls on average over the nodes the
+ * 200-model zero-age grid visits (1022-1047 at the former step-size tolerance 1e-9; AtmosphereNodeProbe), about
+ * 1.1 ms of one core. Nodes where the wrapped boundary fails (for instance
  * hot, low-gravity atmospheres above the Eddington limit) are marked missing; queries outside the grid or in a cell
  * with a missing corner fail with {@link ErrorKind#OFF_TABLE}, parameters ("atmosphere", Teff, g).
  *
  * <p>Nodes are integrated on first use, not all at once: a cell needs its four corners and their neighbours
- * along each axis (for the cross derivatives), at most 12 nodes, and a zero-age model's surface visits a few
+ * along Teff (for the cross derivatives), at most 8 nodes, and a zero-age model's surface visits a few
  * cells, so it pays for a few dozen of the {@value #DEFAULT_TEFF_POINTS} x {@value #DEFAULT_GRAVITY_POINTS} nodes.
  *
  * <p>Thread-safe: each node, once integrated, is kept and never changes; per-composition tables are kept in a
@@ -90,7 +91,7 @@ public final class AtmosphereTable implements SurfaceBoundary {
 
     /**
      * The table of one composition, for callers that keep it. Its nodes are integrated when a query first needs
-     * them (the four corners of the query's cell and their neighbours), so a model pays for the few cells its
+     * them (the four corners of the query's cell and their neighbours along Teff), so a model pays for the few cells its
      * surface visits rather than for the whole grid; the answers are those of a table built in full.
      */
     public SurfaceBoundary tabulate(Composition composition) {

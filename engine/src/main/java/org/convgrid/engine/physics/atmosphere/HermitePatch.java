@@ -4,13 +4,23 @@ import org.convgrid.engine.physics.interpolation.CubicHermite;
 
 /**
  * Bicubic Hermite interpolation on a uniform grid from node values, first derivatives and a cross derivative
- * estimated by centred differences of the first derivatives (one-sided at edges and beside missing nodes).
- * The interpolant and its first derivatives are continuous across cell edges. Missing nodes are NaN and
- * make every cell they touch evaluate to NaN.
+ * estimated by the centred difference along x of the y derivative (one-sided at edges and beside a missing node;
+ * the difference along y of the x derivative where a node has no neighbour along x). The interpolant and its first
+ * derivatives are continuous across cell edges (each node has one cross derivative, whichever cell asks). Missing
+ * nodes are NaN and make every cell they touch evaluate to NaN.
+ *
+ * <p>One difference rather than the average of both: a corner then needs its neighbours along x only, so a cell
+ * reads at most 8 nodes instead of 12, and a band of cells one or two rows deep in y (the zero-age surfaces of a grid
+ * line) integrates no rows outside it. The 200-model zero-age grid integrated 397 atmosphere nodes instead of 684;
+ * the table's error at two points per cell of its band, against a direct integration, moved from mean 3.83e-4 /
+ * 4.23e-4 / 4.45e-4 to 3.92e-4 / 4.32e-4 / 4.60e-4 in ln P at Z = 0.004 / 0.02 / 0.03 (AtmosphereNodeProbe,
+ * 2026-12-03). The x spacing of the default table is a tenth of the y spacing, so the difference along x is the
+ * finer one.
  *
  * <p>Nodes are read through a {@link NodeField} when a cell is evaluated, so a caller may compute them on
- * first use: a cell reads its four corners and, for the cross derivatives, their neighbours along each axis
- * (at most 12 nodes). The result depends only on those node values, never on which nodes exist already.
+ * first use: a cell reads its four corners and, for the cross derivatives, their neighbours along x (at most 8
+ * nodes; those along y only where a neighbour along x is missing). The result depends only on those node values,
+ * never on which nodes exist already.
  */
 final class HermitePatch {
 
@@ -60,14 +70,16 @@ final class HermitePatch {
         return out;
     }
 
-    /** Value, d/dx, d/dy and the estimated d2/dxdy of node (i, j) at data[k..k+3]. */
+    /**
+     * Value, d/dx, d/dy and the estimated d2/dxdy of node (i, j) at data[k..k+3]; the difference along y is only
+     * taken (and its nodes only read) where there is none along x.
+     */
     private void corner(NodeField f, int i, int j, double[] data, int k) {
-        double a = difference(f, i, j, D_DX, false) / hy;
         double b = difference(f, i, j, D_DY, true) / hx;
         data[k] = f.get(i, j, VALUE);
         data[k + 1] = f.get(i, j, D_DX);
         data[k + 2] = f.get(i, j, D_DY);
-        data[k + 3] = Double.isNaN(a) ? b : Double.isNaN(b) ? a : 0.5 * (a + b);
+        data[k + 3] = Double.isNaN(b) ? difference(f, i, j, D_DX, false) / hy : b;
     }
 
     /** Centred (or one-sided) difference of a component at (i, j) along x (alongX) or y, per node step; NaN if none. */

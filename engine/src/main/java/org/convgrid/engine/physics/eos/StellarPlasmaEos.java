@@ -195,7 +195,10 @@ public final class StellarPlasmaEos implements EquationOfState {
         }
         double lnRho = Math.log(nearby.density()) + step;
         double guess = Math.max(MIN_DENSITY, Math.min(MAX_DENSITY, Math.exp(lnRho)));
-        return DensityInversion.invert(new WarmStart(point(composition), temperature, Math.log(guess), nearby.eta()),
+        // the first neutrality solve from the degeneracy of nearby carried to the guess along its own slopes
+        double eta = Math.max(-PlasmaPoint.ETA_LIMIT + 1.0, Math.min(PlasmaPoint.ETA_LIMIT - 1.0,
+                nearbyGuess(guess, temperature, nearby)));
+        return DensityInversion.invert(new WarmStart(point(composition), temperature, Math.log(guess), eta),
                 pressure, temperature, guess);
     }
 

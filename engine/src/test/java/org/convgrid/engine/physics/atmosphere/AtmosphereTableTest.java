@@ -143,10 +143,13 @@ class AtmosphereTableTest {
         SurfaceBoundary built = new AtmosphereTable(counting).tabulate(SOLAR);
         assertThat(integrations).as("nothing integrated before the first query").hasValue(0);
         built.at(5772, 2.74e4, SOLAR);
-        // An inner cell: four corners plus the eight neighbours their cross derivatives need.
-        assertThat(integrations).hasValue(12);
+        // An inner cell: four corners plus the four neighbours along Teff their cross derivatives need.
+        assertThat(integrations).hasValue(8);
         built.at(5800, 2.8e4, SOLAR);
-        assertThat(integrations).as("same cell again").hasValue(12);
+        assertThat(integrations).as("same cell again").hasValue(8);
+        // the cell above shares two corners and their neighbours: four new nodes
+        built.at(5800, 2.8e4 * Math.pow(10.0, AtmosphereTable.DEFAULT_GRAVITY_AXIS.step()), SOLAR);
+        assertThat(integrations).as("cell above").hasValue(12);
     }
 
     @Test

@@ -38,11 +38,16 @@ class GreyAtmosphereTest {
 
     @Test
     void sensitivitiesMatchFiniteDifferences() {
-        // Variational equations vs centred differences (derived, no published value).
+        // Variational equations vs centred differences (derived, no published value). At a tight step-size tolerance:
+        // the check is of the equations, and at the default one the integration's own error (~1e-7 in ln P) divided
+        // by the differencing step would swamp it.
         KrishnaSwamy ks = new KrishnaSwamy();
+        double tight = 1e-10;
         for (GreyAtmosphere atm : new GreyAtmosphere[] {
-                new GreyAtmosphere(new TestIdealGasEos(1.3), TestOpacities.blend()),
-                new GreyAtmosphere(new TestIdealGasEos(1.3), TestOpacities.blend(), ks, ks.photosphericDepth())}) {
+                new GreyAtmosphere(new TestIdealGasEos(1.3), TestOpacities.blend(), new EddingtonGrey(),
+                        EddingtonGrey.HOPF, tight),
+                new GreyAtmosphere(new TestIdealGasEos(1.3), TestOpacities.blend(), ks, ks.photosphericDepth(),
+                        tight)}) {
             for (double[] c : new double[][] {{5772, 27400}, {3500, 1e5}, {9000, 1e4}, {40000, 1e4}}) {
                 SurfaceCondition s = atm.at(c[0], c[1], SOLAR);
                 double e = 1e-4;
@@ -53,6 +58,25 @@ class GreyAtmosphereTest {
                 assertThat(s.dlnPDlnTeff()).as("Teff %s", c[0]).isCloseTo(dT, within(1e-5));
                 assertThat(s.dlnPDlnG()).as("Teff %s", c[0]).isCloseTo(dG, within(1e-5));
             }
+        }
+    }
+
+    @Test
+    void defaultToleranceStaysFarBelowTheTableInterpolationError() {
+        // Consistency check against a tight integration (common practice, no published value): the nodes of the
+        // atmosphere table must stay well below its own interpolation error, 3e-4 in ln P with this physics
+        // (AtmosphereTable), here at least 30 times.
+        KrishnaSwamy ks = new KrishnaSwamy();
+        GreyAtmosphere atm = new GreyAtmosphere(new TestIdealGasEos(1.3), TestOpacities.blend(), ks,
+                ks.photosphericDepth());
+        GreyAtmosphere tight = new GreyAtmosphere(new TestIdealGasEos(1.3), TestOpacities.blend(), ks,
+                ks.photosphericDepth(), 1e-11);
+        for (double[] c : new double[][] {{2500, 1e5}, {3500, 1e5}, {5772, 27400}, {9000, 1e4}, {40000, 1e4}}) {
+            SurfaceCondition s = atm.at(c[0], c[1], SOLAR);
+            SurfaceCondition reference = tight.at(c[0], c[1], SOLAR);
+            assertThat(s.lnPressure()).as("Teff %s", c[0]).isCloseTo(reference.lnPressure(), within(1e-5));
+            assertThat(s.dlnPDlnTeff()).isCloseTo(reference.dlnPDlnTeff(), within(1e-3));
+            assertThat(s.dlnPDlnG()).isCloseTo(reference.dlnPDlnG(), within(1e-4));
         }
     }
 
