@@ -16,8 +16,8 @@ import org.convgrid.engine.structure.SolveFailedException;
  * <p>Rung 0 is the cold start at the anchor mass; rung k is walked ({@link ZamsTrack}) from rungs k -+ 1 and
  * k -+ 2, the two next to it on the anchor's side, rung -1 from the anchor alone and rung +1 from the anchor and rung
  * -1 (from the anchor alone, the global homology seed of 1.35 Msun ran out its iterations and the walk took two half
- * steps: 41-71 Newton iterations on the lines of 0.1-20 Msun at Z = 0.004-0.03; from the two 11-20, 40 at Z = 0.004
- * where the step is still halved once, LadderCostProbe). Every rung is therefore a pure function of the line,
+ * steps: 41-71 Newton iterations on the lines of 0.1-20 Msun at Z = 0.004-0.03; from the two 11-20, or 40 at
+ * Z = 0.004 where the step is still halved once, LadderCostProbe). Every rung is therefore a pure function of the line,
  * whichever chunk or thread asks for it first, and a grid gives the same catalogue at any thread count. A rung that does not
  * converge ends its side of the ladder (the walk towards the masses beyond it starts from the last rung). Thread-safe:
  * each side is built under its own lock and read without it, the rungs are immutable.
