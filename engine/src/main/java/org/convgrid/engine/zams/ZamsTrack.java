@@ -150,13 +150,13 @@ public final class ZamsTrack {
         }
         double step = MAX_STEP;
         for (int attempt = 0; attempt < ATTEMPT_BUDGET; attempt++) {
-            ZamsModel nearest = nearest(mass, null);
+            ZamsModel nearest = nearest(converged, mass, null);
             double remaining = Math.log(mass / nearest.model().mass());
             // a step that reaches the mass to round-off lands on it: one ulp short, it left the mass to a relaxation
             // of its own (one iteration, with the seeding and the remesh check; at four rungs of a ladder line)
             double target = Math.abs(remaining) <= step + SAME_MASS ? mass
                     : nearest.model().mass() * Math.exp(Math.copySign(step, remaining));
-            ZamsModel other = partner(nearest, target);
+            ZamsModel other = partner(converged, nearest, target);
             try {
                 ModelState seed = seeder.seed(nearest.model(), other == null ? null : other.model(), target);
                 if (other != null) {
@@ -216,7 +216,8 @@ public final class ZamsTrack {
     }
 
     /**
-     * The second model to seed {@code target} (g) from with {@code nearest}: the converged model nearest to it, unless
+     * The second model of {@code known} (the converged models; shared with LadderCostProbe, which replays the walk) to
+     * seed {@code target} (g) from with {@code nearest}: the model nearest to it, unless
      * that lies within {@link #CLOSE_PAIR} of the step from {@code nearest} to the target; then the model nearest to
      * {@code nearest} that lies far enough for the seeder to extrapolate shell by shell
      * ({@link HomologySeeder#MAX_EXTRAPOLATION}), if there is one. Two models almost at one mass (a ladder rung and a
@@ -224,9 +225,9 @@ public final class ZamsTrack {
      * to misses the shells' own changes: at 1.49 Msun, Z = 0.02, seeded from 1.340 and 1.350 Msun, the walk failed
      * before it got there (41 Newton iterations; 12 with a partner far enough).
      */
-    private ZamsModel partner(ZamsModel nearest, double target) {
+    static ZamsModel partner(List<ZamsModel> known, ZamsModel nearest, double target) {
         double m = nearest.model().mass();
-        ZamsModel closest = nearest(m, nearest);
+        ZamsModel closest = nearest(known, m, nearest);
         double reach = Math.abs(Math.log(target / m));
         if (closest == null || Math.abs(Math.log(closest.model().mass() / m)) >= CLOSE_PAIR * reach) {
             return closest;
@@ -234,7 +235,7 @@ public final class ZamsTrack {
         double needed = Math.max(HomologySeeder.MIN_NEIGHBOUR_SPACING, reach / HomologySeeder.MAX_EXTRAPOLATION);
         ZamsModel best = closest;
         double distance = Double.POSITIVE_INFINITY;
-        for (ZamsModel z : converged) {
+        for (ZamsModel z : known) {
             double d = Math.abs(Math.log(z.model().mass() / m));
             if (z != nearest && d >= needed && d < distance) {
                 best = z;
@@ -244,11 +245,11 @@ public final class ZamsTrack {
         return best;
     }
 
-    /** The converged model nearest to {@code mass} in ln M, other than {@code excluded}; null if none. */
-    private ZamsModel nearest(double mass, ZamsModel excluded) {
+    /** The model of {@code known} nearest to {@code mass} in ln M, other than {@code excluded}; null if none. */
+    static ZamsModel nearest(List<ZamsModel> known, double mass, ZamsModel excluded) {
         ZamsModel best = null;
         double distance = Double.POSITIVE_INFINITY;
-        for (ZamsModel z : converged) {
+        for (ZamsModel z : known) {
             double d = Math.abs(Math.log(z.model().mass() / mass));
             if (z != excluded && d < distance) {
                 best = z;

@@ -147,11 +147,11 @@ class LadderCostProbe {
                 ZamsModel done = null;
                 while (done == null && attempts < ZamsTrack.ATTEMPT_BUDGET) {
                     attempts++;
-                    ZamsModel nearest = nearest(known, mass, null);
+                    ZamsModel nearest = ZamsTrack.nearest(known, mass, null);
                     double remaining = Math.log(mass / nearest.model().mass());
                     double target = Math.abs(remaining) <= step + ZamsTrack.SAME_MASS ? mass
                             : nearest.model().mass() * Math.exp(Math.copySign(step, remaining));
-                    ZamsModel other = partner(known, nearest, target);
+                    ZamsModel other = ZamsTrack.partner(known, nearest, target);
                     ModelState seed = seeder.seed(nearest.model(), other == null ? null : other.model(), target);
                     if (other != null) {
                         seed = envelope.refine(seed, nearest.model(), other.model(), target);
@@ -230,39 +230,5 @@ class LadderCostProbe {
             }
         }
         return out.toString();
-    }
-
-    /** As {@code ZamsTrack.partner}. */
-    private static ZamsModel partner(List<ZamsModel> known, ZamsModel nearest, double target) {
-        double m = nearest.model().mass();
-        ZamsModel closest = nearest(known, m, nearest);
-        double reach = Math.abs(Math.log(target / m));
-        if (closest == null || Math.abs(Math.log(closest.model().mass() / m)) >= ZamsTrack.CLOSE_PAIR * reach) {
-            return closest;
-        }
-        double needed = Math.max(HomologySeeder.MIN_NEIGHBOUR_SPACING, reach / HomologySeeder.MAX_EXTRAPOLATION);
-        ZamsModel best = closest;
-        double distance = Double.POSITIVE_INFINITY;
-        for (ZamsModel z : known) {
-            double d = Math.abs(Math.log(z.model().mass() / m));
-            if (z != nearest && d >= needed && d < distance) {
-                best = z;
-                distance = d;
-            }
-        }
-        return best;
-    }
-
-    private static ZamsModel nearest(List<ZamsModel> known, double mass, ZamsModel excluded) {
-        ZamsModel best = null;
-        double distance = Double.POSITIVE_INFINITY;
-        for (ZamsModel z : known) {
-            double d = Math.abs(Math.log(z.model().mass() / mass));
-            if (z != excluded && d < distance) {
-                best = z;
-                distance = d;
-            }
-        }
-        return best;
     }
 }
