@@ -135,8 +135,7 @@ public final class StellarPlasmaEos implements EquationOfState {
     }
 
     private static EosState nearbyStart(PlasmaPoint p, double density, double temperature, EosState nearby) {
-        double guess = Math.max(-PlasmaPoint.ETA_LIMIT + 1.0, Math.min(PlasmaPoint.ETA_LIMIT - 1.0,
-                nearbyGuess(density, temperature, nearby)));
+        double guess = withinEtaLimits(nearbyGuess(density, temperature, nearby));
         if (!Double.isFinite(guess)) {
             return coldStart(p, density, temperature);
         }
@@ -196,8 +195,7 @@ public final class StellarPlasmaEos implements EquationOfState {
         double lnRho = Math.log(nearby.density()) + step;
         double guess = Math.max(MIN_DENSITY, Math.min(MAX_DENSITY, Math.exp(lnRho)));
         // the first neutrality solve from the degeneracy of nearby carried to the guess along its own slopes
-        double eta = Math.max(-PlasmaPoint.ETA_LIMIT + 1.0, Math.min(PlasmaPoint.ETA_LIMIT - 1.0,
-                nearbyGuess(guess, temperature, nearby)));
+        double eta = withinEtaLimits(nearbyGuess(guess, temperature, nearby));
         return DensityInversion.invert(new WarmStart(point(composition), temperature, Math.log(guess), eta),
                 pressure, temperature, guess);
     }
@@ -379,7 +377,7 @@ public final class StellarPlasmaEos implements EquationOfState {
             checkDomain(density, temperature);
             double guess = Double.isNaN(lastLnRho) ? fullyIonisedEta(point, density, temperature)
                     : lastEta + etaSlope * (lnRho - lastLnRho);
-            guess = Math.max(-PlasmaPoint.ETA_LIMIT + 1.0, Math.min(PlasmaPoint.ETA_LIMIT - 1.0, guess));
+            guess = withinEtaLimits(guess);
             solve(point, density, temperature, guess);
             lastLnRho = lnRho;
             lastEta = point.lastEta;
@@ -395,6 +393,11 @@ public final class StellarPlasmaEos implements EquationOfState {
     static double initialEta(double f) {
         double u = 2.0 * f / Math.sqrt(Math.PI);
         double eta = u < 4.0 ? Math.log(u) + u / Math.sqrt(8.0) : Math.pow(1.5 * f, 2.0 / 3.0);
+        return withinEtaLimits(eta);
+    }
+
+    /** A starting eta moved inside the neutrality solve's bracket, one unit clear of its ends (NaN stays NaN). */
+    private static double withinEtaLimits(double eta) {
         return Math.max(-PlasmaPoint.ETA_LIMIT + 1.0, Math.min(PlasmaPoint.ETA_LIMIT - 1.0, eta));
     }
 }
