@@ -1,5 +1,8 @@
 package org.convgrid.benchmarks;
 
+import org.convgrid.engine.physics.nuclear.NuclearNetwork;
+import org.convgrid.engine.state.Composition;
+
 /**
  * The (rho, T, X, Z) points the microphysics benchmarks time, by the name their {@code point} parameter gives: the
  * Sun's centre (a standard solar model's, from memory), the base of its convective envelope, an M dwarf's centre and
@@ -20,5 +23,10 @@ record BenchmarkPoint(double density, double temperature, double x, double z) {
             case "photosphere_k_dwarf" -> new BenchmarkPoint(3e-7, 5000.0, 0.70, 0.0188);
             default -> throw new IllegalArgumentException("no benchmark point named " + name);
         };
+    }
+
+    /** The point's scaled-solar mix with the CNO nuclei at {@code nuclear}'s equilibrium at its (rho, T). */
+    Composition composition(NuclearNetwork nuclear) {
+        return nuclear.equilibrium(density, temperature, Composition.scaledSolar(x, z));
     }
 }

@@ -47,7 +47,7 @@ public class MicrophysicsBenchmark {
         double t = p.temperature();
         density = rho;
         temperature = t;
-        composition = nuclear.equilibrium(rho, t, Composition.scaledSolar(p.x(), p.z()));
+        composition = p.composition(nuclear);
     }
 
     @Benchmark

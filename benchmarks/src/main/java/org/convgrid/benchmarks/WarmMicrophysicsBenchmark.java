@@ -62,7 +62,7 @@ public class WarmMicrophysicsBenchmark {
         double t = p.temperature();
         density = rho;
         temperature = t;
-        composition = nuclear.equilibrium(rho, t, Composition.scaledSolar(p.x(), p.z()));
+        composition = p.composition(nuclear);
         eos = StandardPhysics.equationOfState().atComposition(composition);
         previousIteration = eos.atDensity(rho * Math.exp(-offset), t * Math.exp(-offset), null);
         boundOpacity = opacity.atComposition(composition);
