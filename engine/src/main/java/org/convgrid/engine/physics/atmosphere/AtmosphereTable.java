@@ -24,7 +24,7 @@ import org.convgrid.engine.state.Composition;
  * (Chabrier &amp; Baraffe 1997, A&amp;A 327, 1039; from memory). A node of
  * {@link GreyAtmosphere} with the standard physics costs 412-419 EOS and opacity calls on average over the nodes the
  * 200-model zero-age grid visits (1022-1047 at the former step-size tolerance 1e-9; AtmosphereNodeProbe), about
- * 1.1 ms of one core. Nodes where the wrapped boundary fails (for instance
+ * 0.6 ms of one core (1.0-1.1 ms while each call inverted the EOS for the density). Nodes where the wrapped boundary fails (for instance
  * hot, low-gravity atmospheres above the Eddington limit) are marked missing; queries outside the grid or in a cell
  * with a missing corner fail with {@link ErrorKind#OFF_TABLE}, parameters ("atmosphere", Teff, g).
  *

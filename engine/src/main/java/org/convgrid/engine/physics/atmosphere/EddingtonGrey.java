@@ -15,6 +15,11 @@ public record EddingtonGrey() implements TemperatureTauRelation {
     }
 
     @Override
+    public double hopfSlope(double tau) {
+        return 0.0;
+    }
+
+    @Override
     public double photosphericDepth() {
         return HOPF;
     }

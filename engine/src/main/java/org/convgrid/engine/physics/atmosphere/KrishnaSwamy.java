@@ -26,6 +26,11 @@ public record KrishnaSwamy() implements TemperatureTauRelation {
     }
 
     @Override
+    public double hopfSlope(double tau) {
+        return A1 * K1 * Math.exp(-K1 * tau) + A2 * K2 * Math.exp(-K2 * tau);
+    }
+
+    @Override
     public double photosphericDepth() {
         return PHOTOSPHERE;
     }

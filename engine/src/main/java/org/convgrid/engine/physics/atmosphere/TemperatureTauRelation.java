@@ -10,11 +10,19 @@ public interface TemperatureTauRelation {
     /** The Hopf function q(tau), dimensionless; tau &gt;= 0. */
     double hopf(double tau);
 
+    /** The slope dq/dtau of the Hopf function; tau &gt;= 0. */
+    double hopfSlope(double tau);
+
     /** Optical depth of the photosphere, where T = Teff, i.e. tau + q(tau) = 4/3. */
     double photosphericDepth();
 
     /** Temperature, K, at optical depth tau for effective temperature teff (K). */
     default double temperature(double tau, double teff) {
         return teff * Math.sqrt(Math.sqrt(0.75 * (tau + hopf(tau))));
+    }
+
+    /** d ln T/d ln tau at optical depth tau (the same for every Teff): tau (1 + q') / (4 (tau + q)). */
+    default double dlnTDlnTau(double tau) {
+        return tau * (1.0 + hopfSlope(tau)) / (4.0 * (tau + hopf(tau)));
     }
 }

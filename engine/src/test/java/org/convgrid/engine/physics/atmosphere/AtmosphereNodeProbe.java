@@ -8,6 +8,7 @@ import java.util.Locale;
 
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.physics.StandardPhysics;
+import org.convgrid.engine.physics.eos.EosAtComposition;
 import org.convgrid.engine.physics.eos.EosState;
 import org.convgrid.engine.physics.eos.EquationOfState;
 import org.convgrid.engine.physics.opacity.Opacity;
@@ -34,6 +35,8 @@ import org.junit.jupiter.api.condition.EnabledIfSystemProperty;
 class AtmosphereNodeProbe {
 
     private static final ThreadMXBean THREADS = ManagementFactory.getThreadMXBean();
+    /** probe.former=true: time the former gas-pressure integration (inverting the EOS at each call) instead. */
+    private static final boolean FORMER = Boolean.getBoolean("probe.former");
 
     @Test
     void nodeCostAndErrorAgainstTolerance() {
@@ -63,8 +66,9 @@ class AtmosphereNodeProbe {
             System.out.printf(Locale.ROOT, "Z = %s: %d nodes, reference tolerance %.0e: %.0f EOS calls per node%n",
                     z, nodes.size(), referenceTolerance, (double) counted.eosCalls / nodes.size());
             for (double tolerance : tolerances) {
-                GreyAtmosphere atm = new GreyAtmosphere(counted, counted.opacity, relation, relation.photosphericDepth(),
-                        tolerance);
+                SurfaceBoundary atm = FORMER ? new GasPressureGreyAtmosphere(counted, counted.opacity, relation,
+                        relation.photosphericDepth(), tolerance) : new GreyAtmosphere(counted, counted.opacity, relation,
+                        relation.photosphericDepth(), tolerance);
                 double leastCpu = Double.MAX_VALUE;
                 double eosShare = 0.0;
                 double opacityShare = 0.0;
@@ -200,7 +204,23 @@ class AtmosphereNodeProbe {
 
         @Override
         public EosState atDensity(double density, double temperature, Composition composition) {
-            return eos.atDensity(density, temperature, composition);
+            eosCalls++;
+            long t0 = System.nanoTime();
+            EosState s = eos.atDensity(density, temperature, composition);
+            eosNanos += System.nanoTime() - t0;
+            return s;
+        }
+
+        @Override
+        public EosAtComposition atComposition(Composition composition) {
+            EosAtComposition bound = eos.atComposition(composition);
+            return (density, temperature, nearby) -> {
+                eosCalls++;
+                long t0 = System.nanoTime();
+                EosState s = bound.atDensity(density, temperature, nearby);
+                eosNanos += System.nanoTime() - t0;
+                return s;
+            };
         }
 
         @Override

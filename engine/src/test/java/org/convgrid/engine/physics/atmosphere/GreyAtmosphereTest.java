@@ -81,6 +81,27 @@ class GreyAtmosphereTest {
     }
 
     @Test
+    void densityIntegrationAgreesWithTheFormerGasPressureIntegration() {
+        // Consistency check of two formulations of the same equations at a tight tolerance (common practice, no
+        // published value): ln rho with forward EOS calls against ln P_gas with the EOS inverted at each call.
+        KrishnaSwamy ks = new KrishnaSwamy();
+        for (TemperatureTauRelation relation : new TemperatureTauRelation[] {new EddingtonGrey(), ks}) {
+            GreyAtmosphere atm = new GreyAtmosphere(new TestIdealGasEos(1.3), TestOpacities.blend(), relation,
+                    relation.photosphericDepth(), 1e-11);
+            GasPressureGreyAtmosphere former = new GasPressureGreyAtmosphere(new TestIdealGasEos(1.3),
+                    TestOpacities.blend(), relation, relation.photosphericDepth(), 1e-11);
+            for (double[] c : new double[][] {{2500, 1e5}, {3500, 1e5}, {5772, 27400}, {9000, 1e4}, {40000, 1e4}}) {
+                SurfaceCondition s = atm.at(c[0], c[1], SOLAR);
+                SurfaceCondition reference = former.at(c[0], c[1], SOLAR);
+                assertThat(s.lnPressure()).as("Teff %s", c[0]).isCloseTo(reference.lnPressure(), within(1e-9));
+                assertThat(s.lnTemperature()).isEqualTo(reference.lnTemperature());
+                assertThat(s.dlnPDlnTeff()).isCloseTo(reference.dlnPDlnTeff(), within(1e-7));
+                assertThat(s.dlnPDlnG()).isCloseTo(reference.dlnPDlnG(), within(1e-7));
+            }
+        }
+    }
+
+    @Test
     void hMinusPhotosphereScalesWithGravityAsItsDensityExponent() {
         // Derived: with the H^- power law kappa = 2.5e-31 rho^(1/2) T^9 (Hansen, Kawaler & Trimble 2004 ch. 4)
         // and negligible radiation pressure, P^(1/2) dP ~ g dtau, so P ~ g^(2/3) exactly; the full test blend

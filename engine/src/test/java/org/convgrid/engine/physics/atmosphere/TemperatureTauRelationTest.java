@@ -32,4 +32,19 @@ class TemperatureTauRelationTest {
             assertThat(ks.hopf(t + 0.01)).isGreaterThan(ks.hopf(t));
         }
     }
+
+    @Test
+    void hopfSlopeMatchesCentredDifferences() {
+        // Analytic derivative against a centred difference (common practice, no published value).
+        for (TemperatureTauRelation relation : new TemperatureTauRelation[] {new EddingtonGrey(), new KrishnaSwamy()}) {
+            for (double tau = 1e-3; tau < 20; tau *= 1.7) {
+                double h = 1e-6 * tau;
+                double slope = (relation.hopf(tau + h) - relation.hopf(tau - h)) / (2 * h);
+                assertThat(relation.hopfSlope(tau)).as("tau %s", tau).isCloseTo(slope, within(1e-7));
+                double lnT = (Math.log(relation.temperature(tau + h, 1.0)) - Math.log(relation.temperature(tau - h, 1.0)))
+                        / (Math.log(tau + h) - Math.log(tau - h));
+                assertThat(relation.dlnTDlnTau(tau)).isCloseTo(lnT, within(1e-8));
+            }
+        }
+    }
 }
