@@ -117,9 +117,23 @@ public final class StructureSolver {
     public StellarModel relax(ModelState guess, ExtraEnergy extra, double[] nablaMu,
                               HenyeySolver.Settings solveSettings, double burningFactor,
                               ShellComposition compositionRule) {
+        return relax(guess, extra, nablaMu, solveSettings, burningFactor, compositionRule, null);
+    }
+
+    /**
+     * As {@link #relax(ModelState, ExtraEnergy, double[], HenyeySolver.Settings, double, ShellComposition)}, the
+     * first evaluation's equation-of-state solve at each point started from {@code nearbyEos[k]} (null: a cold
+     * start), as {@link #relax(ModelState, ExtraEnergy, double[], HenyeySolver.Settings, EosState[])} does.
+     *
+     * @throws SolveFailedException with the report when the relaxation does not converge
+     */
+    public StellarModel relax(ModelState guess, ExtraEnergy extra, double[] nablaMu,
+                              HenyeySolver.Settings solveSettings, double burningFactor,
+                              ShellComposition compositionRule, EosState[] nearbyEos) {
         double scale = Math.abs(guess.surfaceLuminosity());
         StructureEquations eq = new StructureEquations(guess.mesh(), guess.compositions(), physics, scale,
                 nablaMu, extra, burningFactor, compositionRule);
+        eq.startEquationOfStateNear(nearbyEos);
         return solved(eq, guess, solveSettings);
     }
 

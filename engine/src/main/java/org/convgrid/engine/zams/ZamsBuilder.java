@@ -1,6 +1,7 @@
 package org.convgrid.engine.zams;
 
 import org.convgrid.engine.physics.PhysicsSet;
+import org.convgrid.engine.physics.eos.EosState;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.ExtraEnergy;
 import org.convgrid.engine.structure.HenyeySolver;
@@ -142,19 +143,35 @@ public final class ZamsBuilder {
      * @throws SolveFailedException when a relaxation fails (its report counts every iteration spent)
      */
     public ZamsModel fromSeed(ModelState seed, Composition composition) {
+        return fromSeed(seed, composition, null);
+    }
+
+    /**
+     * As {@link #fromSeed(ModelState, Composition)}, the first evaluation's equation-of-state solve at each point of
+     * the seed started from {@code nearbyEos[k]} (e.g. the states of the model the seed was scaled from, on the
+     * same mesh; null for cold starts).
+     *
+     * @throws SolveFailedException when a relaxation fails (its report counts every iteration spent)
+     */
+    public ZamsModel fromSeed(ModelState seed, Composition composition, EosState[] nearbyEos) {
         // a good seed converges in a handful of iterations; a poor one is better retried with a smaller step
         return build(seed, composition,
                 settings.withIterationBudget(Math.min(settings.iterationBudget(), SEEDED_BUDGET))
-                        .withGiveUpRate(SEEDED_GIVE_UP_RATE), false);
+                        .withGiveUpRate(SEEDED_GIVE_UP_RATE), false, nearbyEos);
     }
 
     private ZamsModel build(ModelState start, Composition composition, HenyeySolver.Settings first,
                             boolean cold) {
+        return build(start, composition, first, cold, null);
+    }
+
+    private ZamsModel build(ModelState start, Composition composition, HenyeySolver.Settings first,
+                            boolean cold, EosState[] nearbyEos) {
         ShellComposition rule = equilibrium(composition);
         int spent = 0;
         StellarModel model;
         try {
-            model = solver.relax(start, ExtraEnergy.NONE, null, first, 1.0, rule);
+            model = solver.relax(start, ExtraEnergy.NONE, null, first, 1.0, rule, nearbyEos);
             spent += model.report().iterations();
             for (int pass = 0; pass < MAX_REMESH_PASSES && planner.needsRemesh(model); pass++) {
                 model = solver.relax(planner.remesh(model), ExtraEnergy.NONE, null, settings, 1.0, rule);

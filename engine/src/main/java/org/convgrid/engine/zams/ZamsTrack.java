@@ -7,10 +7,12 @@ import java.util.IdentityHashMap;
 import java.util.List;
 import java.util.Set;
 
+import org.convgrid.engine.physics.eos.EosState;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.ModelState;
 import org.convgrid.engine.structure.SolveFailedException;
 import org.convgrid.engine.structure.SolveReport;
+import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.units.Constants;
 
 /**
@@ -162,7 +164,7 @@ public final class ZamsTrack {
                 if (other != null) {
                     seed = envelope.refine(seed, nearest.model(), other.model(), target);
                 }
-                ZamsModel z = builder.fromSeed(seed, composition);
+                ZamsModel z = builder.fromSeed(seed, composition, equationOfStateOf(nearest.model(), seed));
                 add(z);
                 spent += z.iterations();
                 if (target == mass) {
@@ -184,6 +186,25 @@ public final class ZamsTrack {
         }
         return ZamsResult.failed(new SolveReport(org.convgrid.engine.structure.StopReason.ITERATION_BUDGET,
                 spent, Double.NaN, -1, -1, "homology walk used its " + ATTEMPT_BUDGET + " relaxations"), spent);
+    }
+
+    /**
+     * The equation-of-state states of {@code model} point by point, to start the seed's first evaluation from
+     * (the seed is scaled from it on its own mesh: {@link HomologySeeder#seed}), or null when the seed has another
+     * number of points. Why: from the fully ionised guess every point's neutrality solve took five to ten Newton
+     * steps at the first evaluation of a seeded model; from the neighbour's degeneracy carried to the seed's
+     * density and temperature, one or two.
+     */
+    private static EosState[] equationOfStateOf(StellarModel model, ModelState seed) {
+        int n = seed.size();
+        if (model.state().size() != n) {
+            return null;
+        }
+        EosState[] states = new EosState[n];
+        for (int k = 0; k < n; k++) {
+            states[k] = model.profile().eosState(k);
+        }
+        return states;
     }
 
     /**
