@@ -358,8 +358,9 @@ public final class StellarPlasmaEos implements EquationOfState {
      * step^2 with c = |step|/previous^2. Taken only once the steps are small ({@link #QUADRATIC_STEP}) and shrinking
      * quadratically, and with the prediction {@link #PREDICTION_MARGIN} below the tolerance, so that the point it
      * accepts is at least as close to the root as the one the step test accepts (which stops at a step below 1e-11
-     * without taking it). The solve then skips the ions' pass that would only confirm convergence (a third of a
-     * Newton step; every cold start and most warm ones end so).
+     * without taking it), and wherever the prediction holds it is the very same point. The solve then skips the
+     * ions' pass that would only confirm convergence (a third of a Newton step). Cold starts end so; a warm start
+     * next to a solved state converges at its first or second step, before two steps can predict anything.
      */
     static boolean convergesAtNext(double previousStep, double step) {
         double size = Math.abs(step);
