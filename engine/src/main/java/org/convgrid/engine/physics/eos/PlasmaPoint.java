@@ -308,24 +308,6 @@ final class PlasmaPoint {
     }
 
     /**
-     * {@link #solveStep}'s state at this eta without the ions' side of the balance (no residual): the Fermi-Dirac
-     * integrals, the Coulomb term, the ratio x and the helium fractions that {@link #evaluate} completes, for an eta
-     * the Newton iteration already knows to be converged (it sets the hydrogen fractions itself).
-     */
-    void finalStep(double eta) {
-        FermiDirac.withSlopes(eta, fd);
-        double yeFd = electronScale * fd[1] * Constants.M_U / density;
-        if (coulomb && yeFd > 0.0) {
-            coulombTerm.evaluate(fd, yeFd, chargeRatio);
-        } else {
-            coulombTerm.clear();
-        }
-        stepRatio = ratio(eta);
-        heliumFractions(stepRatio);
-        electrons = yeFd;
-    }
-
-    /**
      * Free electrons per u of the ions at ratio x (see {@link #ratio}), with their spread d ye/d ln x in
      * {@link #ionSpread}, and the H and He fractions: the ion side of the neutrality balance, shared by
      * {@link #solveStep} and {@link #ionisationGuess}.
@@ -433,8 +415,6 @@ final class PlasmaPoint {
         double f1Rho = w * lrRho + wp;
         double f1T = w * lrT + wp * pairingT;
         double fmT = wm * lrT + wmp * pairingT;
-        hydrogenIonised = f1;
-        hydrogenMolecular = fm;
         ye += a * f1;
         yeEta += w * lxEta;
         yeRho += f1Rho;

@@ -307,7 +307,6 @@ public final class StellarPlasmaEos implements EquationOfState {
         double lo = -PlasmaPoint.ETA_LIMIT;
         double hi = PlasmaPoint.ETA_LIMIT;
         double step = Double.NaN;
-        double previousStep = Double.NaN;
         for (int i = 0; i < SOLVE_BUDGET; i++) {
             p.solveStep(eta);
             if (p.residual > 0.0) {
@@ -329,52 +328,16 @@ public final class StellarPlasmaEos implements EquationOfState {
             double next = eta + step;
             if (!(next > lo && next < hi)) {
                 next = 0.5 * (lo + hi);
-            } else if (convergesAtNext(previousStep, step)) {
-                // the Newton point is the root to far below the tolerance: complete the state there without the
-                // ions' residual, which would only confirm it
-                if (Math.abs(next - p.reference) > REREFERENCE) {
-                    p.prepare(density, temperature, next);
-                }
-                p.finalStep(next);
-                p.evaluate();
-                p.lastEta = next;
-                p.iterations = i + 2;
-                return;
             }
             if (Math.abs(next - p.reference) > REREFERENCE) {
                 p.prepare(density, temperature, next);
             }
-            previousStep = step;
             eta = next;
         }
         throw new ConvgridException(ErrorKind.NOT_CONVERGED, String.format(
                 "charge neutrality not solved in %d iterations at rho = %s g cm^-3, T = %s K (eta %s, step %s)",
                 SOLVE_BUDGET, density, temperature, eta, step), density, temperature, eta, step);
     }
-
-    /**
-     * Whether the Newton step after {@code step} would pass {@link #converged} by a wide margin, predicted from the
-     * last two steps: in the quadratic regime each step is c times the square of the one before, so the next is c
-     * step^2 with c = |step|/previous^2. Taken only once the steps are small ({@link #QUADRATIC_STEP}) and shrinking
-     * quadratically, and with the prediction {@link #PREDICTION_MARGIN} below the tolerance, so that the point it
-     * accepts is at least as close to the root as the one the step test accepts (which stops at a step below 1e-11
-     * without taking it), and wherever the prediction holds it is the very same point. The solve then skips the
-     * ions' pass that would only confirm convergence (a third of a Newton step). Cold starts end so; a warm start
-     * next to a solved state converges at its first or second step, before two steps can predict anything.
-     */
-    static boolean convergesAtNext(double previousStep, double step) {
-        double size = Math.abs(step);
-        if (!(size < QUADRATIC_STEP && size < Math.abs(previousStep))) {
-            return false;
-        }
-        double c = size / (previousStep * previousStep);
-        return c * size * size < ETA_TOLERANCE * PREDICTION_MARGIN;
-    }
-
-    /** Steps below which the Newton iteration is taken to be in its quadratic regime (see convergesAtNext). */
-    static final double QUADRATIC_STEP = 1.0e-3;
-    /** How far below {@link #ETA_TOLERANCE} the predicted next step must lie (see convergesAtNext). */
-    static final double PREDICTION_MARGIN = 0.1;
 
     /**
      * Convergence test of the neutrality solve: the Newton step is below {@link #ETA_TOLERANCE}, or the residual (a

@@ -88,46 +88,6 @@ class PlasmaPointTest {
     }
 
     @Test
-    void aPredictedConvergenceEndsAtTheRootAndReportsItsFractions() {
-        // Where the solve ends on the predicted step (convergesAtNext), the state is completed at the Newton point
-        // without the ions' residual: that point must satisfy neutrality as closely as the step test demands, and
-        // the fractions it reports must be those a full Newton step there gives (numerical check).
-        Composition sun = Composition.scaledSolar(0.7, 0.0188);
-        Composition core = Composition.scaledSolar(0.346, 0.0188);
-        for (Composition c : new Composition[] {sun, core}) {
-            for (double[] pt : POINTS) {
-                PlasmaPoint p = point(c);
-                StellarPlasmaEos.solve(p, pt[0], pt[1], StellarPlasmaEos.fullyIonisedEta(p, pt[0], pt[1]));
-                double eta = p.lastEta;
-                double ionised = p.hydrogenIonised;
-                double molecular = p.hydrogenMolecular;
-                double single = p.heliumSingle;
-                double electrons = p.electrons;
-                p.solveStep(eta);
-                assertThat(Math.abs(p.residual / p.residualSlope)).as("rho = %s, T = %s", pt[0], pt[1])
-                        .isLessThan(StellarPlasmaEos.ETA_TOLERANCE);
-                assertThat(p.hydrogenIonised).isEqualTo(ionised);
-                assertThat(p.hydrogenMolecular).isEqualTo(molecular);
-                assertThat(p.heliumSingle).isEqualTo(single);
-                assertThat(p.electrons).isEqualTo(electrons);
-            }
-        }
-    }
-
-    @Test
-    void convergenceIsPredictedOnlyFromSmallQuadraticSteps() {
-        // steps of the cold solve at the solar centre: 2.7e-3, 2.3e-7, then 2.9e-15 (measured)
-        assertThat(StellarPlasmaEos.convergesAtNext(2.711e-3, 2.251e-7)).isTrue();
-        // the first step has no predecessor; a step above the quadratic regime or not shrinking predicts nothing
-        assertThat(StellarPlasmaEos.convergesAtNext(Double.NaN, 1.0e-8)).isFalse();
-        assertThat(StellarPlasmaEos.convergesAtNext(0.3, 2.0e-3)).isFalse();
-        assertThat(StellarPlasmaEos.convergesAtNext(1.0e-6, 2.0e-6)).isFalse();
-        // an M-dwarf centre: 3.4e-2 then 1.3e-4 predicts a next step of 2e-9, not converged yet
-        assertThat(StellarPlasmaEos.convergesAtNext(3.382e-2, 1.314e-4)).isFalse();
-        assertThat(StellarPlasmaEos.convergesAtNext(1.314e-4, 1.990e-9)).isTrue();
-    }
-
-    @Test
     void neutralitySolveStopsAtTheResidualFloor() {
         // A step stuck just above the eta tolerance by rounding counts as converged once the residual (relative
         // electron-density mismatch) is below 1e-13; a larger residual still needs the step test.
