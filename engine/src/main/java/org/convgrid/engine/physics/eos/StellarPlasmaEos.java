@@ -238,7 +238,8 @@ public final class StellarPlasmaEos implements EquationOfState {
     private PlasmaPoint point(Composition composition) {
         Scratch s = scratch.get();
         PlasmaComposition constants = s.constants;
-        if (constants == null || !constants.composition.equals(composition)) {
+        // the same object first: a record's equals compares all nine fractions even then
+        if (constants == null || constants.composition != composition && !constants.composition.equals(composition)) {
             constants = new PlasmaComposition(elements, composition);
             s.constants = constants;
         }

@@ -161,14 +161,18 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
         double l11 = work[0];
         double t11 = work[1];
         double d11 = work[2];
-        reaction(SolarFusionRates.HE3_HE3, t9, cbrtT9, plasma, work);
-        double l33 = work[0];
-        double t33 = work[1];
+        // 3He+3He and 3He+4He have the same charges, hence the same screening: taken once for both
+        screening.exponentAndSlopes(SolarFusionRates.HE3_HE3.z1(), SolarFusionRates.HE3_HE3.z2(), plasma, work);
+        double heliumScreening = work[0];
+        double heliumScreeningT = work[1];
         double d33 = work[2];
-        reaction(SolarFusionRates.HE3_HE4, t9, cbrtT9, plasma, work);
+        SolarFusionRates.HE3_HE3.rateAndSlope(t9, cbrtT9, heliumScreening, work);
+        double l33 = work[0];
+        double t33 = work[1] + heliumScreeningT;
+        SolarFusionRates.HE3_HE4.rateAndSlope(t9, cbrtT9, heliumScreening, work);
         double l34 = work[0];
-        double t34 = work[1];
-        double d34 = work[2];
+        double t34 = work[1] + heliumScreeningT;
+        double d34 = d33;
         reaction(SolarFusionRates.C12_P, t9, cbrtT9, plasma, work);
         double l12 = work[0];
         double t12 = work[1];

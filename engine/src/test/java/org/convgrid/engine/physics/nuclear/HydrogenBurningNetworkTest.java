@@ -31,6 +31,30 @@ class HydrogenBurningNetworkTest {
     private static final double MEV_PER_MOLE = Constants.N_A * Constants.MEV;
 
     @Test
+    void heliumCapturesShareTheirScreeningBitForBit() {
+        // burn screens the pair (2, 2) once for 3He+3He and 3He+4He: their charges must stay equal, and each rate
+        // must be exactly the one screened on its own (numerical check, no published value)
+        assertThat(SolarFusionRates.HE3_HE4.z1()).isEqualTo(SolarFusionRates.HE3_HE3.z1());
+        assertThat(SolarFusionRates.HE3_HE4.z2()).isEqualTo(SolarFusionRates.HE3_HE3.z2());
+        double rho = 152.9;
+        double t = 1.567e7;
+        Composition centre = DEFAULT.equilibrium(rho, t, Composition.scaledSolar(0.346, 0.0188));
+        RateFactors factors = DEFAULT.burnAndFactors(rho, t, centre).factors().orElseThrow();
+        double[] work = new double[3];
+        double t9 = t * 1.0e-9;
+        double cbrtT9 = Math.cbrt(t9);
+        PlasmaState plasma = DEFAULT.plasma(rho, t, centre);
+        ChargedParticleRate he33 = SolarFusionRates.HE3_HE3;
+        ChargedParticleRate he34 = SolarFusionRates.HE3_HE4;
+        SalpeterScreening.INSTANCE.exponentAndSlopes(he33.z1(), he33.z2(), plasma, work);
+        double h33 = work[0];
+        SalpeterScreening.INSTANCE.exponentAndSlopes(he34.z1(), he34.z2(), plasma, work);
+        double h34 = work[0];
+        assertThat(factors.he3He3()).isEqualTo(rho * SolarFusionRates.HE3_HE3.rate(t9, cbrtT9, h33));
+        assertThat(factors.he3He4()).isEqualTo(rho * SolarFusionRates.HE3_HE4.rate(t9, cbrtT9, h34));
+    }
+
+    @Test
     void standardSolarModelCentre() {
         // BS05(OP) centre: T = 1.567e7 K, rho = 152.9, X = 0.346, Z ~ 0.0188; eps ~ 16.5 erg/g/s
         // (Bahcall, Serenelli & Basu 2005, ApJ 621, L85, structure table; eps derived from it). 3He and CN
