@@ -5,6 +5,7 @@ import java.lang.management.ThreadMXBean;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.function.Supplier;
 
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.physics.StandardPhysics;
@@ -202,43 +203,34 @@ class AtmosphereNodeProbe {
             opacityNanos = 0;
         }
 
-        @Override
-        public EosState atDensity(double density, double temperature, Composition composition) {
+        /** One EOS call, counted and timed into {@link #eosCalls} and {@link #eosNanos}. */
+        private EosState timed(Supplier<EosState> call) {
             eosCalls++;
             long t0 = System.nanoTime();
-            EosState s = eos.atDensity(density, temperature, composition);
+            EosState s = call.get();
             eosNanos += System.nanoTime() - t0;
             return s;
+        }
+
+        @Override
+        public EosState atDensity(double density, double temperature, Composition composition) {
+            return timed(() -> eos.atDensity(density, temperature, composition));
         }
 
         @Override
         public EosAtComposition atComposition(Composition composition) {
             EosAtComposition bound = eos.atComposition(composition);
-            return (density, temperature, nearby) -> {
-                eosCalls++;
-                long t0 = System.nanoTime();
-                EosState s = bound.atDensity(density, temperature, nearby);
-                eosNanos += System.nanoTime() - t0;
-                return s;
-            };
+            return (density, temperature, nearby) -> timed(() -> bound.atDensity(density, temperature, nearby));
         }
 
         @Override
         public EosState atPressure(double pressure, double temperature, Composition composition) {
-            eosCalls++;
-            long t0 = System.nanoTime();
-            EosState s = eos.atPressure(pressure, temperature, composition);
-            eosNanos += System.nanoTime() - t0;
-            return s;
+            return timed(() -> eos.atPressure(pressure, temperature, composition));
         }
 
         @Override
         public EosState atPressure(double pressure, double temperature, Composition composition, EosState nearby) {
-            eosCalls++;
-            long t0 = System.nanoTime();
-            EosState s = eos.atPressure(pressure, temperature, composition, nearby);
-            eosNanos += System.nanoTime() - t0;
-            return s;
+            return timed(() -> eos.atPressure(pressure, temperature, composition, nearby));
         }
 
         /** The opacity, timed into {@link #opacityNanos}. */
