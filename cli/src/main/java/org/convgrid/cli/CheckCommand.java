@@ -18,12 +18,6 @@ import picocli.CommandLine.ParentCommand;
             "Runs nothing. Problems are printed as file:line:column: message (exit code 2)."})
 final class CheckCommand implements Callable<Integer> {
 
-    /**
-     * Seconds per zero-age model assumed when no earlier run says better: a rough guess, stated as such in the
-     * output (the demo's zero-age models took 0.7 s each on one thread of a loaded 2-core machine).
-     */
-    static final double ASSUMED_SECONDS_PER_ZERO_AGE_MODEL = 1.0;
-
     @ParentCommand
     ConvgridMain parent;
 
@@ -45,7 +39,7 @@ final class CheckCommand implements Callable<Integer> {
         OptionalDouble measured = new RunDirectory(runDir).measuredSecondsPerModel();
         RunTimeEstimate estimate = measured.isPresent()
                 ? RunTimeEstimate.measured(file.spec(), measured.getAsDouble(), n, runDir.toString())
-                : RunTimeEstimate.assumed(file.spec(), ASSUMED_SECONDS_PER_ZERO_AGE_MODEL, n);
+                : RunTimeEstimate.assumed(file.spec(), n);
         for (String line : GridSummary.lines(file, estimate, n, runDir.toString())) {
             parent.out().println(line);
         }

@@ -16,19 +16,35 @@ import org.convgrid.grids.GridSpec;
 public record RunTimeEstimate(double seconds, String basis) {
 
     /**
-     * Cost of evolving one star to the demo grid's oldest age (0.6 Gyr), in zero-age models. Measured on the demo's
-     * composition at 0.3-1.8 Msun, one thread (CPU time, the machine under load): zero-age models alone 13.3 s, the
-     * same stars also evolved to 0.6 Gyr 18.7 s, with a start-up of a few seconds in both: 0.9-1.5; taken as 1.5.
+     * One-thread seconds of what every run pays once: JVM start, the JIT's first compilations, the shipped tables, the
+     * charts. With {@link #LINE_SECONDS} and {@link #ZERO_AGE_MODEL_SECONDS} fitted to whole zero-age grids on one
+     * thread through the launcher (one quiet 2-core AMD EPYC, OpenJDK 17, 2026-12-03): 200 models on 4 lines
+     * (benchmarks/grids/two-hundred-zero-age.yaml) 4.6 s, 1 000 models on 4 lines (thousand-zero-age.yaml) 8.5 s,
+     * 10 000 models on 10 lines (ten-thousand-zero-age.yaml) 51 s; the fit gives 4.5, 8.5 and 56 s.
      */
-    static final double EVOLUTION_IN_ZERO_AGE_MODELS = 1.5;
+    static final double START_SECONDS = 1.5;
+
+    /** One-thread seconds of a (Z, Y, physics) line's zero-age ladder, which its masses are answered from. */
+    static final double LINE_SECONDS = 0.5;
+
+    /** One-thread seconds of one zero-age model answered from its line's ladder. */
+    static final double ZERO_AGE_MODEL_SECONDS = 0.005;
 
     /**
-     * Cost of evolving one star from birth to an age of the demo grid, in zero-age models, with no zero-age model of
-     * its own. Measured with {@code star --mass 1 --z 0.02} on one quiet 2-core machine (user CPU beyond the same
-     * command without an age): 4.5 s to 150 Myr and 4.7 s to 600 Myr from birth, against 1.1 s to 600 Myr from the
-     * zero-age model, which counts as the 1.5 above: about 6.
+     * One-thread seconds of evolving one star from its zero-age model to ages like the demo grid's (up to 0.6 Gyr),
+     * every requested age landed on by the one evolution. Measured (same machine and day): 10 stars of 0.2-2 Msun at
+     * Z = 0.014 evolved from their zero-age models to 20, 150 and 600 Myr took 5.6-7.2 s on one thread against
+     * 3.0-3.3 s for the zero-age models alone, and the fit above gives those 2.1 s: 0.35-0.5 s per star.
      */
-    static final double EVOLUTION_FROM_BIRTH_IN_ZERO_AGE_MODELS = 6.0;
+    static final double EVOLUTION_FROM_ZERO_AGE_SECONDS = 0.4;
+
+    /**
+     * One-thread seconds of evolving one star from its contracting start model to ages like the demo grid's (20, 150
+     * and 600 Myr), with no zero-age model of its own. Measured (same machine and day): the same 10 stars from birth took 11.0-11.1 s
+     * on one thread, ~0.95 s per star beyond the start; the demo grid's 30 stars without refinement 23 s on 2 threads,
+     * ~1.4 s per star. The low-mass stars' long contraction makes most of it.
+     */
+    static final double EVOLUTION_FROM_BIRTH_SECONDS = 1.2;
 
     /** The median seconds per model of an earlier run of the same grid: its own mix of ages. */
     public static RunTimeEstimate measured(GridSpec grid, double secondsPerModel, int threads, String where) {
@@ -36,20 +52,30 @@ public record RunTimeEstimate(double seconds, String basis) {
                 GridSummary.n(secondsPerModel) + " s per model (median of the run in " + where + ")");
     }
 
-    /** From an assumed cost of one zero-age model, with the evolution of each star counted as above. */
-    public static RunTimeEstimate assumed(GridSpec grid, double zeroAgeSeconds, int threads) {
+    /**
+     * From the assumed costs above: the start, each line's ladder and zero-age models (none for stars evolved from
+     * birth), each star's evolution (twice with main-sequence fractions: to core-hydrogen exhaustion for its
+     * lifetime, then to the ages), the lines and stars shared out over the threads.
+     */
+    public static RunTimeEstimate assumed(GridSpec grid, int threads) {
         long ages = grid.ages().values().size();
         long stars = grid.count() / ages;
+        long lines = stars / grid.massesMsun().size();
         double evolutions = !grid.ages().evolves() ? 0.0 : grid.ages().fractions() ? 2.0 : 1.0;
         boolean fromBirth = grid.ages().evolves() && grid.ages().origin() == AgeOrigin.BIRTH;
-        double evolutionCost = fromBirth ? EVOLUTION_FROM_BIRTH_IN_ZERO_AGE_MODELS : EVOLUTION_IN_ZERO_AGE_MODELS;
-        // a star evolved from birth needs no zero-age model of its own
-        double perStar = zeroAgeSeconds * ((fromBirth ? 0.0 : 1.0) + evolutions * evolutionCost);
+        double evolutionSeconds = fromBirth ? EVOLUTION_FROM_BIRTH_SECONDS : EVOLUTION_FROM_ZERO_AGE_SECONDS;
+        // a star evolved from birth needs no zero-age model of its own, nor its line a ladder
+        double zeroAge = fromBirth ? 0.0 : lines * LINE_SECONDS + stars * ZERO_AGE_MODEL_SECONDS;
+        double shared = zeroAge + stars * evolutions * evolutionSeconds;
         String evolved = evolutions == 0.0 ? "zero-age models only"
                 : "each of the " + stars + " stars evolved " + (fromBirth ? "from birth " : "")
                         + (evolutions == 2.0 ? "twice (lifetime, then ages)" : "once to its oldest age") + ", about "
-                        + GridSummary.n(evolutionCost) + " zero-age models' time" + (evolutions == 2.0 ? " each" : "");
-        return new RunTimeEstimate(stars * perStar / threads, GridSummary.n(zeroAgeSeconds)
-                + " s per zero-age model, a rough default; " + evolved + "; a finished run records its own median");
+                        + GridSummary.n(evolutionSeconds) + " s" + (evolutions == 2.0 ? " each" : "")
+                        + " for ages up to the demo's 0.6 Gyr";
+        String basis = fromBirth ? "" : GridSummary.n(LINE_SECONDS) + " s per metallicity and physics line and "
+                + GridSummary.n(ZERO_AGE_MODEL_SECONDS) + " s per zero-age model, ";
+        return new RunTimeEstimate(START_SECONDS + shared / threads, basis + GridSummary.n(START_SECONDS)
+                + " s to start, rough defaults from one 2-core machine; " + evolved
+                + "; a finished run records its own median");
     }
 }
