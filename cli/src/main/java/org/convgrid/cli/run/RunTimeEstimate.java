@@ -32,19 +32,19 @@ public record RunTimeEstimate(double seconds, String basis) {
 
     /**
      * One-thread seconds of evolving one star from its zero-age model to ages like the demo grid's (up to 0.6 Gyr),
-     * every requested age landed on by the one evolution. Measured (same machine and day): 10 stars of 0.2-2 Msun at
-     * Z = 0.014 evolved from their zero-age models to 20, 150 and 600 Myr took 5.6-7.2 s on one thread against
-     * 3.0-3.3 s for the zero-age models alone, and the fit above gives those 2.1 s: 0.35-0.5 s per star.
+     * every requested age landed on by the one evolution. Measured (same machine and day, quiet): 10 stars of 0.2-2 Msun
+     * at Z = 0.014 evolved from their zero-age models to 20, 150 and 600 Myr took 3.7-4.1 s on one thread against
+     * 1.9 s for the zero-age models alone: ~0.2 s per star.
      */
-    static final double EVOLUTION_FROM_ZERO_AGE_SECONDS = 0.4;
+    static final double EVOLUTION_FROM_ZERO_AGE_SECONDS = 0.2;
 
     /**
      * One-thread seconds of evolving one star from its contracting start model to ages like the demo grid's (20, 150
-     * and 600 Myr), with no zero-age model of its own. Measured (same machine and day): the same 10 stars from birth took 11.0-11.1 s
-     * on one thread, ~0.95 s per star beyond the start; the demo grid's 30 stars without refinement 23 s on 2 threads,
-     * ~1.4 s per star. The low-mass stars' long contraction makes most of it.
+     * and 600 Myr), with no zero-age model of its own. Measured (same machine and day, quiet): the same 10 stars from birth took
+     * 6.6-7.4 s on one thread, ~0.55 s per star beyond the start; the demo grid's 30 stars (three Z) without
+     * refinement 16 s on 2 threads, ~1 s per star; taken as 0.8. The low-mass stars' long contraction makes most of it.
      */
-    static final double EVOLUTION_FROM_BIRTH_SECONDS = 1.2;
+    static final double EVOLUTION_FROM_BIRTH_SECONDS = 0.8;
 
     /** The median seconds per model of an earlier run of the same grid: its own mix of ages. */
     public static RunTimeEstimate measured(GridSpec grid, double secondsPerModel, int threads, String where) {
