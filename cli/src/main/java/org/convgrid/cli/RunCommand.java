@@ -118,12 +118,15 @@ final class RunCommand implements Callable<Integer> {
             boolean refineNow = !noRefine && transitions.refine() && plan.shard().count() == 1;
             GridRun.Result result;
             TransitionTables.Update refined = null;
+            double sweepSeconds;
             try (ParallelWork work = new ParallelWork(n)) {
                 result = runner.execute(plan, work, solver, reporter == null ? ProgressListener.NONE : reporter,
                         refineNow ? List.of() : context.finishers());
                 if (reporter != null) {
                     reporter.finish();
                 }
+                // the sweep's own time: the refinement's models are counted and timed on their own line below
+                sweepSeconds = (System.nanoTime() - start) * 1e-9;
                 if (refineNow) {
                     TransitionFinder finder = TransitionFinder.withDefaults();
                     refined = TransitionTables.refine(dir, finder, new TransitionRefiner(context.lines(), finder,
@@ -136,12 +139,13 @@ final class RunCommand implements Callable<Integer> {
             double seconds = (System.nanoTime() - start) * 1e-9;
             parent.out().println(dir.root() + ": " + result.run().catalogue().size() + " models in "
                     + RunLayout.CATALOGUE + " (" + describe(result.counts()) + "); " + result.computed()
-                    + " computed now in " + Durations.describe(seconds));
+                    + " computed now in " + Durations.describe(refined == null ? seconds : sweepSeconds));
             if (refined != null) {
                 long failedNew = refined.added().stream().filter(o -> o.status() != ModelStatus.OK).count();
                 parent.out().println(dir.transitions() + ": transitions refined to " + transitions.toleranceMsun()
                         + " Msun with " + refined.added().size() + " new model(s)"
-                        + (failedNew > 0 ? " (" + failedNew + " not ok)" : ""));
+                        + (failedNew > 0 ? " (" + failedNew + " not ok)" : "") + " in "
+                        + Durations.describe(seconds - sweepSeconds));
             }
             parent.out().flush();
             if (RunFinishing.someModelsFailed(result.counts())) {
