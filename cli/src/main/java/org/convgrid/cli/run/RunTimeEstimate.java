@@ -60,7 +60,7 @@ public record RunTimeEstimate(double seconds, String basis) {
     public static RunTimeEstimate assumed(GridSpec grid, int threads) {
         long ages = grid.ages().values().size();
         long stars = grid.count() / ages;
-        long lines = stars / grid.massesMsun().size();
+        long lines = (long) grid.physics().size() * grid.metallicities().size();
         double evolutions = !grid.ages().evolves() ? 0.0 : grid.ages().fractions() ? 2.0 : 1.0;
         boolean fromBirth = grid.ages().evolves() && grid.ages().origin() == AgeOrigin.BIRTH;
         double evolutionSeconds = fromBirth ? EVOLUTION_FROM_BIRTH_SECONDS : EVOLUTION_FROM_ZERO_AGE_SECONDS;

@@ -320,16 +320,8 @@ public final class StartModelBuilder {
     /** One relaxation, the equation of state started from {@code near}'s states when given (same mesh). */
     private static StellarModel counted(StructureSolver with, ModelState start, StellarProfile near,
                                         HomologousContraction source, HenyeySolver.Settings how, int[] spent) {
-        EosState[] eos = null;
-        EosCurvature[] curvature = null;
-        if (near != null) {
-            eos = new EosState[near.size()];
-            curvature = new EosCurvature[near.size()];
-            for (int k = 0; k < eos.length; k++) {
-                eos[k] = near.eosState(k);
-                curvature[k] = near.eosCurvature(k);
-            }
-        }
+        EosState[] eos = near == null ? null : near.eosStates();
+        EosCurvature[] curvature = near == null ? null : near.eosCurvatures();
         try {
             StellarModel m = with.relax(start, source, null, how, eos, curvature);
             spent[0] += m.report().iterations();

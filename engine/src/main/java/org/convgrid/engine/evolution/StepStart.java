@@ -30,15 +30,8 @@ record StepStart(ModelState state, double[] density, double[] temperature, doubl
     /** The model on its own mesh. */
     static StepStart of(StellarModel model) {
         StellarProfile p = model.profile();
-        int n = p.size();
-        EosState[] eos = new EosState[n];
-        EosCurvature[] curvature = new EosCurvature[n];
-        for (int k = 0; k < n; k++) {
-            eos[k] = p.eosState(k);
-            curvature[k] = p.eosCurvature(k);
-        }
         return new StepStart(model.state(), p.densities(), p.temperatures(), p.pressures(), p.internalEnergies(),
-                p.convectiveFlags(), eos, curvature);
+                p.convectiveFlags(), p.eosStates(), p.eosCurvatures());
     }
 
     /** The model moved onto the mesh {@code planner} chooses with the given extra interval costs. */

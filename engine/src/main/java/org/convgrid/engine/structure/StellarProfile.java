@@ -132,6 +132,16 @@ public final class StellarProfile implements OvershootProfile {
         return curvature[k];
     }
 
+    /** {@link #eosState} of every point (a copy): the states a later solve on this mesh starts from. */
+    public EosState[] eosStates() {
+        return eos.clone();
+    }
+
+    /** {@link #eosCurvature} of every point (a copy; null entries where none was used). */
+    public EosCurvature[] eosCurvatures() {
+        return curvature.clone();
+    }
+
     /** L, erg s^-1. */
     public double luminosity(int k) {
         return luminosity[k];

@@ -196,15 +196,7 @@ public final class ZamsTrack {
      * density and temperature, one or two.
      */
     private static EosState[] equationOfStateOf(StellarModel model, ModelState seed) {
-        int n = seed.size();
-        if (model.state().size() != n) {
-            return null;
-        }
-        EosState[] states = new EosState[n];
-        for (int k = 0; k < n; k++) {
-            states[k] = model.profile().eosState(k);
-        }
-        return states;
+        return model.state().size() == seed.size() ? model.profile().eosStates() : null;
     }
 
     /**
