@@ -1,11 +1,13 @@
 package org.convgrid.cli;
 
 import java.nio.file.Path;
-import java.util.OptionalDouble;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.convgrid.cli.run.GridSummary;
+import org.convgrid.cli.run.RefinementEstimate;
 import org.convgrid.cli.run.RunTimeEstimate;
 import org.convgrid.grids.GridFile;
+import org.convgrid.output.manifest.RunManifest;
 import org.convgrid.survey.RunDirectory;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -36,11 +38,16 @@ final class CheckCommand implements Callable<Integer> {
         Path runDir = context.resolve(Path.of(file.spec().outputDir()));
         // the same refusal as 'run' gives, so a grid that passes check does not fail at the start of run
         OutputTargets.requireWritableDirectory("the run directory (output dir)", runDir);
-        OptionalDouble measured = new RunDirectory(runDir).measuredSecondsPerModel();
-        RunTimeEstimate estimate = measured.isPresent()
-                ? RunTimeEstimate.measured(file.spec(), measured.getAsDouble(), n, runDir.toString())
+        Optional<RunManifest> earlier = new RunDirectory(runDir).measuredRun();
+        RunTimeEstimate estimate = earlier.isPresent()
+                ? RunTimeEstimate.measured(file.spec(), earlier.get().medianSecondsPerModel(), n, runDir.toString())
                 : RunTimeEstimate.assumed(file.spec(), n);
-        for (String line : GridSummary.lines(file, estimate, n, runDir.toString())) {
+        // the refinement's count only carries over from a finished run of these very models
+        RefinementEstimate refinement = earlier.isPresent() && earlier.get().finished() != null
+                && earlier.get().gridModelsSha256().equals(file.modelsSha256())
+                ? RefinementEstimate.measured(file.spec(), earlier.get().total(), n, runDir.toString())
+                : RefinementEstimate.assumed(file.spec(), n);
+        for (String line : GridSummary.lines(file, estimate, refinement, n, runDir.toString())) {
             parent.out().println(line);
         }
         parent.out().flush();

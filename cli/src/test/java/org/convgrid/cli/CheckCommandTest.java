@@ -59,6 +59,54 @@ class CheckCommandTest {
     }
 
     @Test
+    void theRefinementAfterTheSweepIsEstimatedApart() throws Exception {
+        CliHarness cli = CliHarness.in(work, FakeChunkSolver.fast());
+        // one slice (one Z, one age, one physics), one 1 Msun bracket halved 9 times to 0.002 Msun (2^9 = 512 >
+        // 500): 2.5 searches x 9 = 22.5, 23 new zero-age models at 0.1 s each on 1 thread: 2.3 s
+        Path zeroAge = CliHarness.writeGrid(work, "zams.yaml",
+                "mass: {values: [1.0, 2.0]}\nmetallicity: {z: 0.014, y: 0.27}\nage: {gyr: [0], origin: zams}\n");
+        assertThat(cli.execute("check", zeroAge.toString(), "--threads", "1").out())
+                .contains("refinement:    about 23 new models after them to narrow the transition masses, about 2 s"
+                        + " more (2.5 searches per (Z, age, physics) slice, 9 halvings of a 1 Msun bracket each,"
+                        + " about 0.1 s per model; run --no-refine skips them)");
+        // the demo's shape from birth: 3 Z x 3 ages, 0.2 Msun brackets halved 7 times (2^7 = 128 > 100):
+        // 9 x 2.5 x 7 = 157.5, 158 models (the demo added 155) at 0.3 s each on 2 threads: 23.7 s
+        Path birth = CliHarness.writeGrid(work, "birth.yaml", "mass: {from: 0.2, to: 2.0, step: 0.2}\n"
+                + "metallicity: {z: [0.008, 0.014, 0.02], helium: {primordial: 0.2471, enrichment: 1.5}}\n"
+                + "age: {myr: [20, 150, 600]}\n");
+        assertThat(cli.execute("check", birth.toString(), "--threads", "2").out())
+                .contains("about 158 new models after them").contains("about 24 s more");
+        Path off = CliHarness.writeGrid(work, "off.yaml", "mass: {values: [1.0, 2.0]}\n"
+                + "metallicity: {z: 0.014, y: 0.27}\nage: {gyr: [0], origin: zams}\ntransitions: {refine: false}\n");
+        assertThat(cli.execute("check", off.toString()).out())
+                .contains("refinement:    off (transitions: refine: false)");
+        Path single = CliHarness.writeGrid(work, "single.yaml",
+                "mass: {values: [1.0]}\nmetallicity: {z: 0.014, y: 0.27}\nage: {gyr: [0], origin: zams}\n");
+        assertThat(cli.execute("check", single.toString()).out())
+                .contains("refinement:    none (one mass: no bracket to narrow)");
+    }
+
+    @Test
+    void aFinishedRunOfTheSameGridGivesItsOwnCosts() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        CliHarness cli = CliHarness.in(work, FakeChunkSolver.fast());
+        assertThat(cli.execute("run", grid.toString(), "--threads", "1", "--quiet").code()).isEqualTo(0);
+        Path runDir = work.resolve("runs/test-survey");
+        long rows = Files.readAllLines(runDir.resolve("catalogue.ecsv")).stream()
+                .filter(l -> !l.startsWith("#")).count() - 1;
+        assertThat(rows).as("the fake solver's transitions are refined").isGreaterThan(156);
+        String check = cli.execute("check", grid.toString(), "--threads", "1").out();
+        assertThat(check).contains("s per model (median of the run in " + runDir + ")");
+        // the new models the refinement appended to the catalogue, beyond the grid's 156
+        assertThat(check).contains("refinement:    about " + (rows - 156) + " new models after them")
+                .contains("as many as the run in " + runDir + " added, about 0.3 s per model");
+        // another grid in the same directory: its refinement is estimated afresh
+        Files.writeString(grid, CliHarness.GRID.replace("step: 0.05", "step: 0.1"));
+        assertThat(cli.execute("check", grid.toString(), "--threads", "1").out())
+                .contains("searches per (Z, age, physics) slice");
+    }
+
+    @Test
     void printsMainSequenceFractions() throws Exception {
         Path grid = CliHarness.writeGrid(work, "fractions.yaml", """
                 mass: {values: [1.0, 2.0]}

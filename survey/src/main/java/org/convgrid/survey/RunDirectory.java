@@ -8,7 +8,7 @@ import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import java.util.Comparator;
 import java.util.List;
-import java.util.OptionalDouble;
+import java.util.Optional;
 import java.util.stream.Stream;
 import org.convgrid.engine.batch.Shard;
 import org.convgrid.output.AtomicFiles;
@@ -16,6 +16,7 @@ import org.convgrid.output.OutputFormatException;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueWriter;
 import org.convgrid.output.catalogue.ZoneTable;
+import org.convgrid.output.manifest.RunManifest;
 import org.convgrid.output.manifest.RunManifestReader;
 
 /**
@@ -73,19 +74,20 @@ public final class RunDirectory {
     }
 
     /**
-     * The median seconds per model that an earlier run in this directory measured; empty when there is no readable
-     * manifest with a positive median (an unreadable manifest only means no measured cost).
+     * The manifest of an earlier run in this directory when it is readable and measured a positive median seconds per
+     * model; empty otherwise (an unreadable manifest only means no measured cost).
      */
-    public OptionalDouble measuredSecondsPerModel() {
+    public Optional<RunManifest> measuredRun() {
         try {
             if (Files.isRegularFile(manifest())) {
-                double median = RunManifestReader.read(Files.readString(manifest())).medianSecondsPerModel();
-                return Double.isFinite(median) && median > 0 ? OptionalDouble.of(median) : OptionalDouble.empty();
+                RunManifest run = RunManifestReader.read(Files.readString(manifest()));
+                double median = run.medianSecondsPerModel();
+                return Double.isFinite(median) && median > 0 ? Optional.of(run) : Optional.empty();
             }
         } catch (IOException | OutputFormatException e) {
             // no measured cost: the caller falls back to its default
         }
-        return OptionalDouble.empty();
+        return Optional.empty();
     }
 
     /** Whether a catalogue or a manifest is already there. */

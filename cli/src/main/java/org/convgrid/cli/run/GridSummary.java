@@ -21,11 +21,13 @@ public final class GridSummary {
 
     /**
      * @param file the grid file as read
-     * @param estimate the run time on {@code threads} threads and how it was reached
+     * @param estimate the sweep's run time on {@code threads} threads and how it was reached
+     * @param refinement what refining the transitions adds after the sweep
      * @param threads threads the estimate assumes
      * @param runDirectory where {@code run} would write
      */
-    public static List<String> lines(GridFile file, RunTimeEstimate estimate, int threads, String runDirectory) {
+    public static List<String> lines(GridFile file, RunTimeEstimate estimate, RefinementEstimate refinement, int threads,
+                                     String runDirectory) {
         GridSpec g = file.spec();
         List<String> lines = new ArrayList<>();
         lines.add("grid:          " + TerminalText.clean(g.title() + " (" + file.name() + ")"));
@@ -47,7 +49,11 @@ public final class GridSummary {
         }
         lines.add("models:        " + g.count());
         lines.add("estimate:      about " + Durations.describe(estimate.seconds()) + " on " + threads
-                + " thread(s), at " + estimate.basis());
+                + " thread(s) for these models, at " + estimate.basis());
+        lines.add(refinement.models() == 0 ? "refinement:    " + refinement.basis()
+                : "refinement:    about " + refinement.models() + " new models after them to narrow the transition"
+                        + " masses, about " + Durations.describe(refinement.seconds()) + " more ("
+                        + refinement.basis() + "; run --no-refine skips them)");
         lines.add("run directory: " + runDirectory);
         return lines;
     }

@@ -49,7 +49,12 @@ public record RunTimeEstimate(double seconds, String basis) {
     /** The median seconds per model of an earlier run of the same grid: its own mix of ages. */
     public static RunTimeEstimate measured(GridSpec grid, double secondsPerModel, int threads, String where) {
         return new RunTimeEstimate(grid.count() * secondsPerModel / threads,
-                GridSummary.n(secondsPerModel) + " s per model (median of the run in " + where + ")");
+                GridSummary.n(twoDigits(secondsPerModel)) + " s per model (median of the run in " + where + ")");
+    }
+
+    /** A measured time to two significant digits: its third is noise between runs. */
+    static double twoDigits(double seconds) {
+        return Double.parseDouble(String.format(java.util.Locale.ROOT, "%.2g", seconds));
     }
 
     /**

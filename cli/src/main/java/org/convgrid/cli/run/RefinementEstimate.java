@@ -1,0 +1,109 @@
+package org.convgrid.cli.run;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import org.convgrid.engine.request.AgeOrigin;
+import org.convgrid.grids.GridSpec;
+
+/**
+ * What refining the transition masses after the sweep adds to a run, for {@code check}: the sweep's estimate
+ * ({@link RunTimeEstimate}) leaves it out, and on the demo grid it is more models than the grid itself (90 models,
+ * then 155 new ones). Each search bisects one mass bracket of one (Z, age, physics) slice down to the grid's
+ * tolerance, one new model per halving, each model computed on its own (an evolution of its own, no ladder shared
+ * with the grid's line), so its models cost more than the grid's.
+ *
+ * @param models new models expected, 0 when the grid does not refine
+ * @param seconds their run time on the given threads, s
+ * @param basis how it was reached, for the reader
+ */
+public record RefinementEstimate(long models, double seconds, String basis) {
+
+    /**
+     * Searches per (Z, age, physics) slice: the fully convective limit, the lasting core's onset and, where small cores
+     * come and go, that window's two ends. Measured: the demo grid (grids/demo-cluster.yaml, 9 slices, brackets of
+     * 0.2 Msun bisected 7 times to 0.002 Msun) added 155 models, 2.5 searches per slice; the 200-model zero-age
+     * grid (benchmarks/grids/two-hundred-zero-age.yaml with refinement on, 4 slices, log-spaced masses) added 59,
+     * where this count, from its median bracket of 0.16 Msun (7 halvings), gives 70.
+     */
+    static final double SEARCHES_PER_SLICE = 2.5;
+
+    /**
+     * One-thread seconds of one new model whose star is evolved from birth to its slice's age. Measured (one quiet
+     * 2-core AMD EPYC, OpenJDK 17, 2026-12-03): the demo grid's 155 new models (ages 20, 150 and 600 Myr) took 19-25
+     * s on 2 threads, 0.25-0.32 s each.
+     */
+    static final double BIRTH_MODEL_SECONDS = 0.3;
+
+    /**
+     * One-thread seconds of one new zero-age model, computed on a mass line of its own. Measured on the same machine
+     * under a load of ~4 from other work (2026-12-04): the 200-model zero-age grid's 59 new models took 6 s on 2
+     * threads, 0.2 s each at that load; about half of it on a quiet machine.
+     */
+    static final double ZERO_AGE_MODEL_SECONDS = 0.1;
+
+    /** Nothing to add: the grid does not refine, or its mass axis has no bracket. */
+    public static RefinementEstimate none(String why) {
+        return new RefinementEstimate(0, 0.0, why);
+    }
+
+    /**
+     * As many new models as an earlier run of the same grid added (its catalogue's rows beyond the grid's models), at
+     * the assumed cost of such a model: the run's median is its sweep's, whose zero-age models come cheaper from their
+     * line's ladder.
+     */
+    public static RefinementEstimate measured(GridSpec grid, long catalogueRows, int threads, String where) {
+        if (!grid.transitions().refine()) {
+            return none("off (transitions: refine: false)");
+        }
+        long models = Math.max(0, catalogueRows - grid.count());
+        if (models == 0) {
+            return none("none expected (the run in " + where + " added no models)");
+        }
+        double perModel = modelSeconds(grid);
+        return new RefinementEstimate(models, models * perModel / threads, "as many as the run in " + where
+                + " added, about " + GridSummary.n(perModel) + " s per model");
+    }
+
+    /**
+     * From the assumed costs above: {@link #SEARCHES_PER_SLICE} searches per slice, each halving the grid's median mass
+     * bracket down to the tolerance.
+     */
+    public static RefinementEstimate assumed(GridSpec grid, int threads) {
+        if (!grid.transitions().refine()) {
+            return none("off (transitions: refine: false)");
+        }
+        List<Double> masses = grid.massesMsun();
+        if (masses.size() < 2) {
+            return none("none (one mass: no bracket to narrow)");
+        }
+        List<Double> gaps = new ArrayList<>();
+        for (int i = 1; i < masses.size(); i++) {
+            gaps.add(masses.get(i) - masses.get(i - 1));
+        }
+        Collections.sort(gaps);
+        double medianGap = gaps.get(gaps.size() / 2);
+        double tolerance = grid.transitions().toleranceMsun();
+        long halvings = medianGap <= tolerance ? 0 : (long) Math.ceil(Math.log(medianGap / tolerance) / Math.log(2.0));
+        long slices = (long) grid.metallicities().size() * grid.ages().values().size() * grid.physics().size();
+        long models = Math.round(slices * SEARCHES_PER_SLICE * halvings);
+        double perModel = modelSeconds(grid);
+        return new RefinementEstimate(models, models * perModel / threads, GridSummary.n(SEARCHES_PER_SLICE)
+                + " searches per (Z, age, physics) slice, " + halvings + " halvings of a "
+                + GridSummary.n(RunTimeEstimate.twoDigits(medianGap)) + " Msun bracket each, about " + GridSummary.n(perModel)
+                + " s per model");
+    }
+
+    /** One new model's one-thread seconds for the grid's kind of ages. */
+    private static double modelSeconds(GridSpec grid) {
+        if (!grid.ages().evolves()) {
+            return ZERO_AGE_MODEL_SECONDS;
+        }
+        if (grid.ages().origin() == AgeOrigin.BIRTH) {
+            return BIRTH_MODEL_SECONDS;
+        }
+        // a zero-age model, then its evolution (twice with main-sequence fractions, as in the sweep)
+        double evolutions = grid.ages().fractions() ? 2.0 : 1.0;
+        return ZERO_AGE_MODEL_SECONDS + evolutions * RunTimeEstimate.EVOLUTION_FROM_ZERO_AGE_SECONDS;
+    }
+}
