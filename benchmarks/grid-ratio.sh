@@ -14,6 +14,9 @@
 # reaches it as CONVGRID_JVM_OPTIONS). To compare two builds this way, copy the first build's launcher,
 # cli/run-compiler-directives.json and cli/target/convgrid.jar into a scratch directory (same layout) and run the
 # script once with each launcher, back to back.
+# GRID_RATIO_ONE_CORE=1 runs each 1-thread run under `taskset -c 0`, the whole JVM (JIT compilers and collector
+# included) on one core, so the ratio compares one core with two rather than one worker thread with two: without it
+# a 1-thread run has the JIT compile on the otherwise idle second core.
 # Each run's CPU time (user + sys) is printed beside its wall: on a shared machine the walls move with the load, the
 # CPU much less, and CPU / (2 x wall) says how busy both cores were.
 set -euo pipefail
@@ -26,16 +29,19 @@ trap 'rm -rf "$work"' EXIT
 
 # "WALL CPU" seconds of one run with THREADS worker threads, writing into DIR (CPU: user + sys of the process).
 timed_run() {
-  local threads="$1" dir="$2" start end cpu
+  local threads="$1" dir="$2" start end cpu pin=()
+  if [ "$threads" = 1 ] && [ "${GRID_RATIO_ONE_CORE:-0}" = 1 ]; then
+    pin=(taskset -c 0)
+  fi
   start=$(date +%s.%N)
   if [ -n "${GRID_RATIO_LAUNCHER:-}" ]; then
-    CONVGRID_JVM_OPTIONS="${GRID_RATIO_JVM_OPTIONS:-}" /usr/bin/time -f '%U %S' -o "$work/cpu" \
+    CONVGRID_JVM_OPTIONS="${GRID_RATIO_JVM_OPTIONS:-}" /usr/bin/time -f '%U %S' -o "$work/cpu" "${pin[@]}" \
       "$GRID_RATIO_LAUNCHER" run "$grid" --out "$dir" --threads "$threads" --no-refine --quiet --force \
       >/dev/null || [ $? -eq 3 ]
   else
     # word splitting intended: several options in one variable
     # shellcheck disable=SC2086
-    /usr/bin/time -f '%U %S' -o "$work/cpu" java -Djava.awt.headless=true ${GRID_RATIO_JVM_OPTIONS:-} \
+    /usr/bin/time -f '%U %S' -o "$work/cpu" "${pin[@]}" java -Djava.awt.headless=true ${GRID_RATIO_JVM_OPTIONS:-} \
       -jar "$jar" run "$grid" --out "$dir" --threads "$threads" --no-refine --quiet --force >/dev/null \
       || [ $? -eq 3 ]
   fi
@@ -48,7 +54,8 @@ median() {
   sort -g | awk '{v[NR] = $1} END {print (NR % 2) ? v[(NR + 1) / 2] : (v[NR / 2] + v[NR / 2 + 1]) / 2}'
 }
 
-echo "grid: $grid; $runs runs per thread count; ${GRID_RATIO_LAUNCHER:+launcher: $GRID_RATIO_LAUNCHER; }JVM" \
+echo "grid: $grid; $runs runs per thread count; ${GRID_RATIO_LAUNCHER:+launcher: $GRID_RATIO_LAUNCHER; }$(
+  [ "${GRID_RATIO_ONE_CORE:-0}" = 1 ] && echo '1-thread runs on one core (taskset -c 0); ')JVM" \
   "options: ${GRID_RATIO_JVM_OPTIONS:-none}; load before: $(cut -d' ' -f1-3 /proc/loadavg)"
 one=() two=() cpu1=() cpu2=()
 for ((k = 1; k <= runs; k++)); do
