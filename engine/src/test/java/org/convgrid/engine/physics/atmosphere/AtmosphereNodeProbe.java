@@ -140,6 +140,7 @@ class AtmosphereNodeProbe {
             SurfaceBoundary table = new AtmosphereTable(new GreyAtmosphere(eos, opacity, relation,
                     relation.photosphericDepth(), tolerance)).tabulate(c);
             double worst = 0.0;
+            double[] worstAt = {Double.NaN, Double.NaN};
             double worstCool = 0.0;
             double sum = 0.0;
             double dTeff = 0.0;
@@ -157,13 +158,15 @@ class AtmosphereNodeProbe {
                 n++;
                 if (points.get(k)[0] < Math.pow(10, 3.45)) {
                     worstCool = Math.max(worstCool, d);
-                } else {
-                    worst = Math.max(worst, d);
+                } else if (d > worst) {
+                    worst = d;
+                    worstAt = points.get(k);
                 }
             }
             System.out.printf(Locale.ROOT, "  table from tolerance %.0e: %d in-cell points, |d ln P| mean %.2e, "
-                    + "max %.2e at log Teff >= 3.45, max %.2e below; max |d dlnP/dlnTeff| %.3f, |d dlnP/dlng| %.3f%n",
-                    tolerance, n, sum / n, worst, worstCool, dTeff, dG);
+                    + "max %.2e at log Teff >= 3.45 (at log Teff %.3f, log g %.3f), max %.2e below; max |d dlnP/dlnTeff| "
+                    + "%.3f, |d dlnP/dlng| %.3f%n", tolerance, n, sum / n, worst, Math.log10(worstAt[0]),
+                    Math.log10(worstAt[1]), worstCool, dTeff, dG);
         }
     }
 
