@@ -308,6 +308,25 @@ final class PlasmaPoint {
     }
 
     /**
+     * The state at an eta the neutrality solve has accepted without its residual: the electron side and the
+     * Coulomb term as {@link #solveStep} sets them, the helium fractions {@link #evaluate} reads, and then
+     * {@link #evaluate} itself (which sets the hydrogen fractions too); the residual fields are left unset.
+     */
+    void completeAt(double eta) {
+        FermiDirac.withSlopes(eta, fd);
+        double yeFd = electronScale * fd[1] * Constants.M_U / density;
+        if (coulomb && yeFd > 0.0) {
+            coulombTerm.evaluate(fd, yeFd, chargeRatio);
+        } else {
+            coulombTerm.clear();
+        }
+        stepRatio = ratio(eta);
+        heliumFractions(stepRatio);
+        electrons = yeFd;
+        evaluate();
+    }
+
+    /**
      * Free electrons per u of the ions at ratio x (see {@link #ratio}), with their spread d ye/d ln x in
      * {@link #ionSpread}, and the H and He fractions: the ion side of the neutrality balance, shared by
      * {@link #solveStep} and {@link #ionisationGuess}.
@@ -422,6 +441,9 @@ final class PlasmaPoint {
         ion += a * f1 * chi + a * f0 * excitation;
         ionEta += (w * chi - (w + wm) * excitation) * lxEta;
         ionT += f1T * chi - (f1T + fmT) * excitation + a * f0 * -hydrogenEnergyT;
+        // the same arithmetic as ions(), so a state completed without a last residual reports the same fractions
+        hydrogenIonised = f1;
+        hydrogenMolecular = fm;
         ex += a * (f0 + fm) * xiH;
         exEta -= w * xiH * lxEta;
         exRho += a * (f0 + fm) * xiH - f1Rho * xiH;
