@@ -38,8 +38,9 @@ public record EosCurvature(double dNablaAdDLnRho, double dLnCpDLnRho, double dLn
 
     /** Whether these derivatives may stand in for fresh ones at the given ln rho, ln T of the same point. */
     public boolean servesAt(double lnRho, double lnT) {
-        double distance = smooth() ? SMOOTH_REUSE_DISTANCE : REUSE_DISTANCE;
-        return Math.abs(lnRho - lnDensity) <= distance && Math.abs(lnT - lnTemperature) <= distance;
+        // the six-term smoothness test only where it decides: between the two distances
+        double moved = Math.max(Math.abs(lnRho - lnDensity), Math.abs(lnT - lnTemperature));
+        return moved <= REUSE_DISTANCE || moved <= SMOOTH_REUSE_DISTANCE && smooth();
     }
 
     private boolean smooth() {
