@@ -40,7 +40,7 @@ public final class HenyeySolver {
      * chord step still shrinks the correction by a factor of that order, while the Jacobian's extra
      * equation-of-state calls and the factorisation are saved. Practice, chosen here from measurements: the
      * first corrections of the 1 Msun evolution steps are ~1e-5 to 5e-4 and their chord steps contract by ~1e-4;
-     * from 1e-2 the chord steps of a seeded zero-age model (whose Jacobian leaves out the slaved abundances)
+     * from 1e-2 the chord steps of a seeded zero-age model (measured when its Jacobian left out the slaved abundances)
      * contract by only ~0.1 and took two iterations more than Newton's. The default of
      * {@link Settings#reuseThreshold()}.
      */

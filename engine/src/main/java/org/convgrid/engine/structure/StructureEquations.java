@@ -41,8 +41,9 @@ import org.convgrid.engine.units.Constants;
  * ({@link org.convgrid.engine.convection.ConvectiveTransport#withSlopes}) with the changes of nabla_ad, c_P and
  * delta taken as one-sided differences of the equation of state (one-sided differences of the whole local
  * evaluation for a convection model without slopes); one-sided differences of an extra source without analytic
- * slopes, everywhere, and of eps through the slaved abundances where burning matters (so the iteration stays
- * quadratic). The equation of state starts each point's solve from that point's previous state. Not thread-safe
+ * slopes, everywhere; eps through the slaved abundances (so the iteration stays quadratic) analytically where
+ * the composition rule and network give it ({@link ShellComposition#atWithBurning}), else by one-sided differences
+ * where burning matters. The equation of state starts each point's solve from that point's previous state. Not thread-safe
  * (scratch space).
  */
 public final class StructureEquations implements DifferenceSystem {
@@ -51,7 +52,7 @@ public final class StructureEquations implements DifferenceSystem {
     static final double DIFFERENCE_STEP = 1.0e-6;
     /**
      * Where eps M / L_scale exceeds this, the derivatives of eps include the change of slaved abundances
-     * (one-sided differences); elsewhere burning is too weak for it to matter.
+     * (one-sided differences, for a rule without analytic slopes); elsewhere burning is too weak for it to matter.
      */
     static final double SLAVED_BURNING_THRESHOLD = 1.0e-4;
     private static final double FOUR_PI = 4.0 * Math.PI;
@@ -126,8 +127,9 @@ public final class StructureEquations implements DifferenceSystem {
     /**
      * As above, with the composition of every shell recomputed from its trial state at each evaluation
      * ({@code compositionRule}, e.g. 3He and CN at local equilibrium for a zero-age model), or kept fixed when
-     * the rule is null. The Jacobian ignores the composition's dependence on the state (it is weak for the
-     * equilibrium abundances), so the Newton iteration converges to the self-consistent model.
+     * the rule is null. The Jacobian follows the composition's dependence on the state through eps alone (the
+     * opacity and equation of state change little with the equilibrium abundances), so the Newton iteration
+     * converges to the self-consistent model.
      */
     public StructureEquations(MassMesh mesh, Composition[] composition, PhysicsSet physics, double luminosityScale,
                               double[] nablaMu, ExtraEnergy extra, double burningFactor,
@@ -259,7 +261,12 @@ public final class StructureEquations implements DifferenceSystem {
         double lum = y[4 * k + 3] * luminosityScale;
         double rho = Math.exp(lnRho);
         double t = Math.exp(lnT);
-        Composition c = compositionRule == null ? composition[k] : compositionRule.at(k, rho, t);
+        // where the rule and network give them, the composition with eps and its slopes along the slaved
+        // abundances in one call (null: the rule alone, eps below, its slopes through the abundances differenced)
+        Composition slaved = derivatives && compositionRule != null
+                ? compositionRule.atWithBurning(k, rho, t, physics.nuclear(), burning) : null;
+        Composition c = slaved != null ? slaved
+                : compositionRule == null ? composition[k] : compositionRule.at(k, rho, t);
         // a recomputed composition equal to the last one keeps its opacity and equation of state: the rule gives
         // the same abundances again wherever burning is too slow to move them below round-off (57 % of the point
         // evaluations of a seeded 1 or 1.5 Msun zero-age model), and both are functions of the composition alone
@@ -275,7 +282,9 @@ public final class StructureEquations implements DifferenceSystem {
         // the previous iteration's state of this point starts the equation of state's own solve (none: cold start)
         EosState s = equationOfState.atDensity(rho, t, eos[k]);
         OpacityValue op = opacityAtComposition[k].rosselandMean(rho, t);
-        physics.nuclear().energy(rho, t, c, burning);
+        if (slaved == null) {
+            physics.nuclear().energy(rho, t, c, burning);
+        }
         double epsBurning = burning[0];
         eos[k] = s;
         opacity[k] = op;
@@ -294,7 +303,8 @@ public final class StructureEquations implements DifferenceSystem {
         }
         dEps[2 * k] = nuclear * burning[1];
         dEps[2 * k + 1] = nuclear * burning[2];
-        if (compositionRule != null && nuclear * mesh.totalMass() > SLAVED_BURNING_THRESHOLD * luminosityScale) {
+        if (compositionRule != null && slaved == null
+                && nuclear * mesh.totalMass() > SLAVED_BURNING_THRESHOLD * luminosityScale) {
             // the slaved abundances (e.g. equilibrium 3He) change eps with the state: differentiate through them
             double h = DIFFERENCE_STEP;
             double rhoUp = rho * Math.exp(h);

@@ -186,6 +186,6 @@ public final class ZamsBuilder {
 
     /** 3He and CN at local equilibrium from the initial composition (the zero-age assumption). */
     private ShellComposition equilibrium(Composition initial) {
-        return (shell, density, temperature) -> physics.nuclear().equilibrium(density, temperature, initial);
+        return new LocalEquilibriumComposition(physics.nuclear(), initial);
     }
 }

@@ -119,7 +119,7 @@ class LadderCostProbe {
         MeshPlanner planner = new MeshPlanner(MeshPlanner.DEFAULT_POINTS);
         HenyeySolver.Settings settings = HenyeySolver.Settings.DEFAULT;
         StructureSolver solver = new StructureSolver(physics, settings);
-        ShellComposition rule = (shell, density, temperature) -> physics.nuclear().equilibrium(density, temperature, c);
+        ShellComposition rule = new LocalEquilibriumComposition(physics.nuclear(), c);
         ZamsModel anchor = new ZamsBuilder(physics).coldStart(ZamsTrack.ANCHOR_MASS, c);
         HomologySeeder seeder = new HomologySeeder();
         EnvelopeSweep envelope = new EnvelopeSweep(physics);

@@ -41,7 +41,7 @@ class SeedResidualProbe {
             ZamsModel lower = ZamsTrack.solveOne(builder, c, (m - 0.10) * Constants.M_SUN, null).model();
             ZamsModel nearer = ZamsTrack.solveOne(builder, c, (m - 0.05) * Constants.M_SUN, lower).model();
             ModelState seed = new HomologySeeder().seed(nearer.model(), lower.model(), m * Constants.M_SUN);
-            ShellComposition rule = (shell, rho, t) -> physics.nuclear().equilibrium(rho, t, c);
+            ShellComposition rule = new LocalEquilibriumComposition(physics.nuclear(), c);
             System.out.printf("=== %s Msun from %.2f and %.2f Msun%n", text, m - 0.05, m - 0.10);
             StellarModel model = RelaxationTrace.relax(seed, physics,
                     HenyeySolver.Settings.DEFAULT.withIterationBudget(ZamsBuilder.SEEDED_BUDGET), rule, System.out);

@@ -53,4 +53,64 @@ final class AbundanceRelaxation {
         double equilibrium = (y12 + y14) * (k14 / k);
         return equilibrium + (y12 - equilibrium) * Math.exp(-k * time);
     }
+
+    /**
+     * The change of {@link #quadratic}'s result when a, b and c change by da, db and dc (its derivative along that
+     * direction, the same closed form differentiated; 0 where the result is clamped at zero).
+     */
+    static double quadraticSlope(double a, double b, double c, double n0, double time, double da, double db,
+                                 double dc) {
+        double d = Math.sqrt(c * c + 4.0 * a * b);
+        if (!(d + c > 0.0)) {
+            // c = 0 and a b = 0: with a = 0 (no production, so da = 0 along any change of the rates)
+            // n = n0/(1 + b n0 t)
+            double denominator = 1.0 + b * n0 * time;
+            return -n0 * n0 * time * db / (denominator * denominator);
+        }
+        double dd = d > 0.0 ? (c * dc + 2.0 * (a * db + b * da)) / d : 0.0;
+        double sum = c + d;
+        double fixedPoint = 2.0 * a / sum;
+        double dFixedPoint = 2.0 * da / sum - fixedPoint * (dc + dd) / sum;
+        double delta0 = n0 - fixedPoint;
+        double dt = d * time;
+        double decay = Math.exp(-dt);
+        double dDecay = -time * decay * dd;
+        double growth;
+        double dGrowth;
+        if (dt > 1.0e-12) {
+            growth = -Math.expm1(-dt) / d;
+            dGrowth = dd * (time * decay - growth) / d;
+        } else {
+            // (1 - e^(-Dt))/D = t - D t^2/2 + ...
+            growth = time;
+            dGrowth = -0.5 * time * time * dd;
+        }
+        double denominator = 1.0 + b * delta0 * growth;
+        double n = fixedPoint + delta0 * decay / denominator;
+        if (n < 0.0) {
+            return 0.0;
+        }
+        double numerator = delta0 * decay;
+        double dNumerator = -dFixedPoint * decay + delta0 * dDecay;
+        double dDenominator = db * delta0 * growth - b * dFixedPoint * growth + b * delta0 * dGrowth;
+        return dFixedPoint + (dNumerator * denominator - numerator * dDenominator) / (denominator * denominator);
+    }
+
+    /**
+     * The change of {@link #linearPair}'s result when k12 and k14 change by dk12 and dk14 (its derivative along
+     * that direction).
+     */
+    static double linearPairSlope(double k12, double k14, double y12, double y14, double time, double dk12,
+                                  double dk14) {
+        double k = k12 + k14;
+        if (!(k > 0.0)) {
+            return 0.0;
+        }
+        double sum = y12 + y14;
+        double share = k14 / k;
+        double dShare = (dk14 * k12 - k14 * dk12) / (k * k);
+        double decay = Math.exp(-k * time);
+        double dDecay = -time * decay * (dk12 + dk14);
+        return sum * dShare * (1.0 - decay) + (y12 - sum * share) * dDecay;
+    }
 }

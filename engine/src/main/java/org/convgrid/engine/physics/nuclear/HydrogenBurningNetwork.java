@@ -52,6 +52,8 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
     public static final double MAX_TEMPERATURE = 1.0e9;
 
     private static final double MEV_PER_MOLE = Constants.N_A * Constants.MEV;
+    /** The species whose changes {@link #equilibriumEnergy} follows, per direction: h1, 3He, 4He, 12C, 14N. */
+    private static final int SLOPE_SPECIES = 5;
 
     private final Screening screening;
     private final MetalCharges metals;
@@ -96,7 +98,7 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
 
     @Override
     public BurningRate burn(double density, double temperature, Composition composition) {
-        return burn(density, temperature, composition, null, null);
+        return burn(density, temperature, composition, null, null, null);
     }
 
     /**
@@ -114,7 +116,7 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
             into[2] = 0.0;
             return;
         }
-        burn(density, temperature, composition, null, into);
+        burn(density, temperature, composition, null, into, null);
     }
 
     /**
@@ -131,7 +133,7 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
     @Override
     public BurningAndFactors burnAndFactors(double density, double temperature, Composition composition) {
         double[] k = new double[RateFactors.SPECIES];
-        BurningRate rate = burn(density, temperature, composition, k, null);
+        BurningRate rate = burn(density, temperature, composition, k, null, null);
         return new BurningAndFactors(rate, Optional.of(new RateFactors(k[0], k[1], k[2], k[3], k[4], k[5])));
     }
 
@@ -140,9 +142,12 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
      *                12C+p, 14N+p and 16O+p (the order of the {@link RateFactors} components)
      * @param energy null for the whole rate; or three elements that receive eps, dln eps/dln rho and dln eps/dln T,
      *               and then no rate is made (null is returned): {@link #energy}
+     * @param along null; or, with {@code energy}, the changes of the composition with ln rho and with ln T
+     *              ({@link #SLOPE_SPECIES} each, in that order: h1, 3He, 4He, 12C, 14N), and then energy's slopes are
+     *              taken with the composition following them: {@link #equilibriumEnergy}
      */
     private BurningRate burn(double density, double temperature, Composition composition, double[] factors,
-                             double[] energy) {
+                             double[] energy, double[] along) {
         checkState(density, temperature);
         PlasmaState plasma = plasma(density, temperature, composition);
         double t9 = temperature * 1.0e-9;
@@ -211,25 +216,30 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
         double r2 = 0.0;
         double t2 = 0.0;
         double d2 = 0.0;
+        double l2 = 0.0;
         if (y2 > 0.0 && lightElementCaptures) {
             reaction(SolarFusionRates.D_P, t9, cbrtT9, plasma, work);
-            r2 = density * y1 * y2 * work[0];
+            l2 = work[0];
+            r2 = density * y1 * y2 * l2;
             t2 = work[1];
             d2 = work[2];
         }
         double r7 = 0.0;
         double t7 = 0.0;
         double d7 = 0.0;
+        double l7 = 0.0;
         if (y7 > 0.0 && lightElementCaptures) {
             reaction(SolarFusionRates.LI7_P, t9, cbrtT9, plasma, work);
-            r7 = density * y1 * y7 * work[0];
+            l7 = work[0];
+            r7 = density * y1 * y7 * l7;
             t7 = work[1];
             d7 = work[2];
         }
 
         // 7Be: electron capture (PP-II) against proton capture (PP-III).
         double t6 = temperature * 1.0e-6;
-        double capture = BerylliumCapture.rate(density, electronsPerBaryon(composition), t6);
+        double electrons = electronsPerBaryon(composition);
+        double capture = BerylliumCapture.rate(density, electrons, t6);
         double protonCapture = density * y1 * l17;
         double sum7 = capture + protonCapture;
         double pp2 = sum7 > 0.0 ? capture / sum7 : 1.0;
@@ -260,6 +270,33 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
                 + e2 * (1.0 + d2)
                 + e7 * (1.0 + d7);
 
+        if (along != null) {
+            // the composition follows the state: add sum_i d eps/d X_i dX_i/d ln x
+            double[] rates = {l11, l33, l34, l12, l14, l16, l2, l7};
+            double[] reactions = {r11, r33, r34, r12, r14, r16, r2, r7};
+            double[] abundances = {y1, y3, y4, y12, y14, y16, y2, y7};
+            // each reaction's screening slopes in the two couplings, in the same order, then 7Be+p's
+            double[] couplings = new double[2 * 9];
+            couplingSlopes(SolarFusionRates.PP, plasma, work, couplings, 0);
+            couplingSlopes(SolarFusionRates.HE3_HE3, plasma, work, couplings, 1);
+            couplings[4] = couplings[2];
+            couplings[5] = couplings[3];
+            couplingSlopes(SolarFusionRates.C12_P, plasma, work, couplings, 3);
+            couplingSlopes(SolarFusionRates.N14_P, plasma, work, couplings, 4);
+            couplingSlopes(SolarFusionRates.O16_P, plasma, work, couplings, 5);
+            if (r2 > 0.0) {
+                couplingSlopes(SolarFusionRates.D_P, plasma, work, couplings, 6);
+            }
+            if (r7 > 0.0) {
+                couplingSlopes(SolarFusionRates.LI7_P, plasma, work, couplings, 7);
+            }
+            couplingSlopes(SolarFusionRates.BE7_P, plasma, work, couplings, 8);
+            double zetaSquared = zetaSquared(composition);
+            dEpsDlnRho += compositionSlope(density, rates, reactions, abundances, couplings, zetaSquared, electrons,
+                    q34, pp2, along, 0);
+            dEpsDlnT += compositionSlope(density, rates, reactions, abundances, couplings, zetaSquared, electrons,
+                    q34, pp2, along, SLOPE_SPECIES);
+        }
         double dlnEpsDlnRho = eps > 0.0 ? dEpsDlnRho / eps : 0.0;
         double dlnEpsDlnT = eps > 0.0 ? dEpsDlnT / eps : 0.0;
         if (energy != null) {
@@ -274,6 +311,65 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
         double dy4 = r33 + r34 + r14 + r16 + 2.0 * r7;
         return new BurningRate(eps, epsPp, epsCno, dlnEpsDlnRho, dlnEpsDlnT, dy1, 3.0 * dy3, 4.0 * dy4,
                 12.0 * (r14 - r12), 14.0 * (r12 - r14 + r16), -16.0 * r16, -2.0 * r2, -7.0 * r7);
+    }
+
+    /**
+     * d eps/d ln x from the composition's change alone, its changes with ln x at {@code along[offset...]} (h1, 3He,
+     * 4He, 12C, 14N mass fractions): each rate r = rho Y_j Y_k lambda_jk/(1 + delta_jk) differentiated in its
+     * abundances and in its screening (through zeta^2 and 1/mu_e, {@link Screening#couplingSlopes}), and the PP-II
+     * share of 3He+4He through the 7Be capture rates (Y_p, 1/mu_e and the 7Be+p screening).
+     *
+     * @param rates the screened N_A&lt;sigma v&gt; of pp, 3He+3He, 3He+4He, 12C+p, 14N+p, 16O+p, d+p, 7Li+p
+     * @param reactions the reaction rates r of the same, mol g^-1 s^-1
+     * @param abundances Y of h1, 3He, 4He, 12C, 14N, 16O, d, 7Li (mol g^-1)
+     * @param couplings the screening's two coupling slopes of each of the same reactions, then of 7Be+p
+     */
+    private static double compositionSlope(double density, double[] rates, double[] reactions, double[] abundances,
+                                           double[] couplings, double zetaSquared, double electrons, double q34,
+                                           double pp2, double[] along, int offset) {
+        double dx1 = along[offset];
+        double dx3 = along[offset + 1];
+        double dx4 = along[offset + 2];
+        double dx12 = along[offset + 3];
+        double dx14 = along[offset + 4];
+        double y1 = abundances[0];
+        double dy3 = dx3 / 3.0;
+        double dy4 = dx4 / 4.0;
+        double dy12 = dx12 / 12.0;
+        double dy14 = dx14 / 14.0;
+        // the couplings' changes (PlasmaState): Debye ~ zeta, Gamma_e ~ (1/mu_e)^(1/3), with the coefficients of
+        // zetaSquared and electronsPerBaryon
+        double dElectrons = dx1 + (2.0 / 3.0) * dx3 + 0.5 * (dx4 + dx12 + dx14);
+        double dLnDebye = 0.5 * (2.0 * dx1 + 2.0 * dx3 + 1.5 * dx4 + 3.5 * dx12 + 4.0 * dx14) / zetaSquared;
+        double dLnElectron = dElectrons / (3.0 * electrons);
+        double[] dr = new double[8];
+        for (int i = 0; i < dr.length; i++) {
+            dr[i] = reactions[i] * (couplings[2 * i] * dLnDebye + couplings[2 * i + 1] * dLnElectron);
+        }
+        dr[0] += density * y1 * dx1 * rates[0];
+        dr[1] += density * abundances[1] * dy3 * rates[1];
+        dr[2] += density * (dy3 * abundances[2] + abundances[1] * dy4) * rates[2];
+        dr[3] += density * (dx1 * abundances[3] + y1 * dy12) * rates[3];
+        dr[4] += density * (dx1 * abundances[4] + y1 * dy14) * rates[4];
+        dr[5] += density * dx1 * abundances[5] * rates[5];
+        dr[6] += density * dx1 * abundances[6] * rates[6];
+        dr[7] += density * dx1 * abundances[7] * rates[7];
+        // pp2 = capture/(capture + rho Y_p lambda_17), capture ~ 1/mu_e:
+        // dpp2 = pp2 (1 - pp2) dln(capture/(Y_p lambda_17))
+        double h17 = couplings[16] * dLnDebye + couplings[17] * dLnElectron;
+        double dPp2 = y1 > 0.0 ? pp2 * (1.0 - pp2) * (dElectrons / electrons - dx1 / y1 - h17) : 0.0;
+        return MEV_PER_MOLE * (dr[0] * ReactionEnergy.PP_TO_HE3 + dr[1] * ReactionEnergy.HE3_HE3 + dr[2] * q34
+                + reactions[2] * (ReactionEnergy.PP2_BRANCH - ReactionEnergy.PP3_BRANCH) * dPp2
+                + dr[3] * ReactionEnergy.C12_TO_N14 + dr[4] * ReactionEnergy.N14_TO_C12
+                + dr[5] * ReactionEnergy.O16_TO_N14 + dr[6] * ReactionEnergy.Q_DP + dr[7] * ReactionEnergy.Q_LI7_P);
+    }
+
+    /** {@link Screening#couplingSlopes} of one reaction's pair into {@code couplings[2 index]} and the next. */
+    private void couplingSlopes(ChargedParticleRate rate, PlasmaState plasma, double[] work, double[] couplings,
+                                int index) {
+        screening.couplingSlopes(rate.z1(), rate.z2(), plasma, work);
+        couplings[2 * index] = work[0];
+        couplings[2 * index + 1] = work[1];
     }
 
     /**
@@ -320,22 +416,54 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
      */
     @Override
     public Composition equilibrium(double density, double temperature, Composition composition) {
+        return equilibrium(density, temperature, composition, null);
+    }
+
+    /**
+     * {@link #burn}'s eps at {@link #equilibrium}'s composition, with slopes that include that composition's change
+     * with the state: the abundances' derivatives from the closed forms of {@link AbundanceRelaxation}
+     * differentiated through the rates' own analytic slopes, and eps's through its rates' abundance factors
+     * ({@link #compositionSlope}). The same eps and composition as {@link #energy} and {@link #equilibrium}.
+     */
+    @Override
+    public Composition equilibriumEnergy(double density, double temperature, Composition initial, double[] into) {
+        if (NegligibleBurning.at(density, temperature, initial)) {
+            // the same test as energy's (the equilibrium keeps deuterium): no burning, no slopes to follow
+            into[0] = 0.0;
+            into[1] = 0.0;
+            into[2] = 0.0;
+            return equilibrium(density, temperature, initial, null);
+        }
+        double[] along = new double[2 * SLOPE_SPECIES];
+        Composition c = equilibrium(density, temperature, initial, along);
+        burn(density, temperature, c, null, into, along);
+        return c;
+    }
+
+    /**
+     * @param slopes null; or {@code 2 SLOPE_SPECIES} elements that receive the changes of the h1, 3He, 4He, 12C
+     *               and 14N mass fractions with ln rho, then with ln T
+     */
+    private Composition equilibrium(double density, double temperature, Composition composition, double[] slopes) {
         checkState(density, temperature);
         PlasmaState plasma = plasma(density, temperature, composition);
         double t9 = temperature * 1.0e-9;
         double cbrtT9 = Math.cbrt(t9);
         double y1 = composition.h1();
         double y4 = composition.he4() / 4.0;
+        // when slopes are asked for, the five rates' d ln(rho lambda)/d ln rho, then their d ln lambda/d ln T
+        double[] rateSlopes = slopes == null ? null : new double[2 * 5];
         double[] work = new double[3];
 
         // dY3/dt = rho Y1^2 <11>/2 - rho <33> Y3^2 - rho <34> Y4 Y3.
-        double a = 0.5 * density * y1 * y1 * screened(SolarFusionRates.PP, t9, cbrtT9, plasma, work);
-        double b = density * screened(SolarFusionRates.HE3_HE3, t9, cbrtT9, plasma, work);
-        double c = density * y4 * screened(SolarFusionRates.HE3_HE4, t9, cbrtT9, plasma, work);
-        double he3 = 3.0 * AbundanceRelaxation.quadratic(a, b, c, composition.he3() / 3.0, equilibrationTime);
+        double a = 0.5 * density * y1 * y1 * rate(SolarFusionRates.PP, t9, cbrtT9, plasma, work, rateSlopes, 0);
+        double b = density * rate(SolarFusionRates.HE3_HE3, t9, cbrtT9, plasma, work, rateSlopes, 1);
+        double c = density * y4 * rate(SolarFusionRates.HE3_HE4, t9, cbrtT9, plasma, work, rateSlopes, 2);
+        double y3 = composition.he3() / 3.0;
+        double he3 = 3.0 * AbundanceRelaxation.quadratic(a, b, c, y3, equilibrationTime);
 
-        double k12 = density * y1 * screened(SolarFusionRates.C12_P, t9, cbrtT9, plasma, work);
-        double k14 = density * y1 * screened(SolarFusionRates.N14_P, t9, cbrtT9, plasma, work);
+        double k12 = density * y1 * rate(SolarFusionRates.C12_P, t9, cbrtT9, plasma, work, rateSlopes, 3);
+        double k14 = density * y1 * rate(SolarFusionRates.N14_P, t9, cbrtT9, plasma, work, rateSlopes, 4);
         double y12 = composition.c12() / 12.0;
         double y14 = composition.n14() / 14.0;
         double newY12 = AbundanceRelaxation.linearPair(k12, k14, y12, y14, equilibrationTime);
@@ -345,11 +473,30 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
         double moved = (he3 - composition.he3()) + (c12 - composition.c12()) + (n14 - composition.n14());
         double h1 = composition.h1() - moved;
         double he4 = composition.he4();
-        if (h1 < 0.0) {
+        boolean hydrogenFree = h1 < 0.0;
+        if (hydrogenFree) {
             // Only for hydrogen-free matter with 3He or C to process; helium absorbs the deficit.
             he4 += h1;
             h1 = 0.0;
         }
+        if (slopes != null) {
+            for (int x = 0; x < 2; x++) {
+                // x = 0: ln rho (rateSlopes[0..4]), x = 1: ln T (rateSlopes[5..9])
+                double dHe3 = 3.0 * AbundanceRelaxation.quadraticSlope(a, b, c, y3, equilibrationTime,
+                        a * rateSlopes[5 * x], b * rateSlopes[5 * x + 1], c * rateSlopes[5 * x + 2]);
+                double dY12 = AbundanceRelaxation.linearPairSlope(k12, k14, y12, y14, equilibrationTime,
+                        k12 * rateSlopes[5 * x + 3], k14 * rateSlopes[5 * x + 4]);
+                double dC12 = 12.0 * dY12;
+                double dN14 = -14.0 * dY12;
+                double dH1 = -(dHe3 + dC12 + dN14);
+                slopes[SLOPE_SPECIES * x] = hydrogenFree ? 0.0 : dH1;
+                slopes[SLOPE_SPECIES * x + 1] = dHe3;
+                slopes[SLOPE_SPECIES * x + 2] = hydrogenFree ? dH1 : 0.0;
+                slopes[SLOPE_SPECIES * x + 3] = dC12;
+                slopes[SLOPE_SPECIES * x + 4] = dN14;
+            }
+        }
+
         return new Composition(h1, he3, he4, c12, n14, composition.o16(), composition.otherMetals(),
                 composition.h2(), composition.li7());
     }
@@ -371,16 +518,36 @@ public final class HydrogenBurningNetwork implements NuclearNetwork {
 
     /** The screening and ionization state used for the rates at this point. */
     public PlasmaState plasma(double density, double temperature, Composition composition) {
-        double zetaSquared = 2.0 * composition.h1() + 2.0 * composition.he3() + 1.5 * composition.he4()
+        return PlasmaState.of(density, temperature, zetaSquared(composition), electronsPerBaryon(composition));
+    }
+
+    /** zeta^2 = sum_i (Z_i^2 + Z_i) X_i/A_i ({@link PlasmaState}), mol g^-1. */
+    private double zetaSquared(Composition composition) {
+        return 2.0 * composition.h1() + 2.0 * composition.he3() + 1.5 * composition.he4()
                 + 3.5 * composition.c12() + 4.0 * composition.n14() + 4.5 * composition.o16()
                 + metals.chargeSquaredPlusChargePerMass() * composition.otherMetals();
-        return PlasmaState.of(density, temperature, zetaSquared, electronsPerBaryon(composition));
     }
 
     private double electronsPerBaryon(Composition composition) {
         return composition.h1() + (2.0 / 3.0) * composition.he3() + 0.5 * composition.he4()
                 + 0.5 * (composition.c12() + composition.n14() + composition.o16())
                 + metals.chargePerMass() * composition.otherMetals();
+    }
+
+    /**
+     * {@link #screened}'s value; with {@code slopes}, also the d ln/d ln rho of rho times it (1 + the screening's:
+     * every rate coefficient of {@link #equilibrium} carries the factor rho) at {@code slopes[index]} and its
+     * d ln/d ln T at {@code slopes[5 + index]} (from {@link #reaction}, the same value).
+     */
+    private double rate(ChargedParticleRate rate, double t9, double cbrtT9, PlasmaState plasma, double[] work,
+                        double[] slopes, int index) {
+        if (slopes == null) {
+            return screened(rate, t9, cbrtT9, plasma, work);
+        }
+        reaction(rate, t9, cbrtT9, plasma, work);
+        slopes[index] = 1.0 + work[2];
+        slopes[5 + index] = work[1];
+        return work[0];
     }
 
     /** {@link #reaction}'s screened N_A&lt;sigma v&gt; alone, where the slopes are not needed (the same value). */

@@ -53,6 +53,20 @@ public interface NuclearNetwork {
     Composition equilibrium(double density, double temperature, Composition composition);
 
     /**
+     * {@link #equilibrium}'s composition, returned, and {@link #energy}'s values there written into {@code into}
+     * with the slopes taken as the composition follows the state: [0] eps, erg g^-1 s^-1, [1] d ln eps/d ln rho and
+     * [2] d ln eps/d ln T along the equilibrium (eps's own slopes plus sum_i d ln eps/d X_i dX_i/d ln x). For the
+     * structure of a zero-age model, whose 3He and CN follow each trial state. Null, {@code into} untouched, by
+     * default and wherever a network has no analytic form of these slopes (a caller then differences).
+     *
+     * @param initial the composition that {@link #equilibrium} relaxes
+     * @param into at least three elements
+     */
+    default Composition equilibriumEnergy(double density, double temperature, Composition initial, double[] into) {
+        return null;
+    }
+
+    /**
      * {@link #burn} with the factors of its composition rates at this point, from which the Jacobian of the rates
      * follows without further calls of {@link #burn} ({@link RateFactors}, taken from the same evaluation of the
      * rates); no factors for a network whose rates have no such form (a caller then differences {@link #burn}).

@@ -69,6 +69,23 @@ public final class SalpeterScreening implements Screening {
         out[2] = h * (w * 0.5 + (1.0 - w) * (1.0 / 3.0));
     }
 
+    /** dH/d ln H_w = H w and dH/d ln H_s = H (1 - w), w = (H/H_w)^4, as in {@link #exponentAndSlopes}. */
+    @Override
+    public void couplingSlopes(int z1, int z2, PlasmaState plasma, double[] out) {
+        double weak = weakExponent(z1, z2, plasma);
+        double strong = strongExponent(z1, z2, plasma);
+        if (!(weak > 0.0 && strong > 0.0)) {
+            out[0] = 0.0;
+            out[1] = 0.0;
+            return;
+        }
+        double h = blend(weak, strong);
+        double r = h / weak;
+        double w = r * r * r * r;
+        out[0] = h * w;
+        out[1] = h * (1.0 - w);
+    }
+
     private static double blend(double weak, double strong) {
         double a = 1.0 / weak;
         double b = 1.0 / strong;

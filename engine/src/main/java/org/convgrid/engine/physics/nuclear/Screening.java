@@ -17,4 +17,17 @@ public interface Screening {
      * @param out at least three elements, overwritten
      */
     void exponentAndSlopes(int z1, int z2, PlasmaState plasma, double[] out);
+
+    /**
+     * H's slopes in the plasma's two couplings ({@link PlasmaState}) at fixed density and temperature: dH/d ln of the
+     * Debye coupling (~ zeta, so d ln(zeta^2)/2 where the composition changes) into {@code out[0]} and dH/d ln
+     * Gamma_e (~ (1/mu_e)^(1/3)) into {@code out[1]}. For a caller whose composition follows the state (the burning
+     * slopes along the zero-age equilibrium abundances).
+     *
+     * @param z1 charge of the first nucleus
+     * @param z2 charge of the second nucleus
+     * @param plasma the plasma at the point
+     * @param out at least two elements, overwritten
+     */
+    void couplingSlopes(int z1, int z2, PlasmaState plasma, double[] out);
 }

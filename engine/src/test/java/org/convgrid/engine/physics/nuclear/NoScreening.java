@@ -10,4 +10,10 @@ public enum NoScreening implements Screening {
         out[1] = 0.0;
         out[2] = 0.0;
     }
+
+    @Override
+    public void couplingSlopes(int z1, int z2, PlasmaState plasma, double[] out) {
+        out[0] = 0.0;
+        out[1] = 0.0;
+    }
 }

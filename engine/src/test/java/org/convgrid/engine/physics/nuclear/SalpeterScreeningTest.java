@@ -91,4 +91,32 @@ class SalpeterScreeningTest {
             }
         }
     }
+
+    @Test
+    void couplingSlopesAddUpToTheDensitySlopeAndMatchDifferences() {
+        // at fixed composition the Debye coupling goes as rho^(1/2) and Gamma_e as rho^(1/3) (PlasmaState), so
+        // dH/dln rho = dH/dln(Debye)/2 + dH/dln(Gamma_e)/3; each slope also against a central difference of H in
+        // its own coupling (relative step 1e-5); weak, intermediate and strong screening (derived here)
+        double[] slopes = new double[2];
+        for (double[] point : new double[][] {{150.0, 1.5e7}, {1.0e4, 8.0e6}, {1.0e6, 1.0e7}}) {
+            PlasmaState plasma = NETWORK.plasma(point[0], point[1], Composition.scaledSolar(0.7, 0.02));
+            for (int[] pair : new int[][] {{1, 1}, {2, 2}, {1, 7}}) {
+                SCREENING.couplingSlopes(pair[0], pair[1], plasma, slopes);
+                double[] h = screening(pair[0], pair[1], plasma);
+                assertThat(0.5 * slopes[0] + slopes[1] / 3.0).isCloseTo(h[2], within(1e-12 + 1e-10 * h[0]));
+                double step = 1.0e-5;
+                double up = Math.exp(step);
+                double byDebye = (exponent(pair[0], pair[1], new PlasmaState(plasma.density(), plasma.temperature(),
+                        plasma.debyeCoupling() * up, plasma.electronCoupling()))
+                        - exponent(pair[0], pair[1], new PlasmaState(plasma.density(), plasma.temperature(),
+                        plasma.debyeCoupling() / up, plasma.electronCoupling()))) / (2.0 * step);
+                double byElectrons = (exponent(pair[0], pair[1], new PlasmaState(plasma.density(),
+                        plasma.temperature(), plasma.debyeCoupling(), plasma.electronCoupling() * up))
+                        - exponent(pair[0], pair[1], new PlasmaState(plasma.density(), plasma.temperature(),
+                        plasma.debyeCoupling(), plasma.electronCoupling() / up))) / (2.0 * step);
+                assertThat(slopes[0]).isCloseTo(byDebye, within(1e-8 * h[0]));
+                assertThat(slopes[1]).isCloseTo(byElectrons, within(1e-8 * h[0]));
+            }
+        }
+    }
 }
