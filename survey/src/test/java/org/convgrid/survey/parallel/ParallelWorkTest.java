@@ -6,6 +6,7 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import java.io.IOException;
 import java.util.ArrayList;
 import java.util.Collections;
+import java.util.Iterator;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -123,18 +124,30 @@ class ParallelWorkTest {
                 0, List.of(new SharedStep("a1", () -> order.add("a1"))),
                 1, List.of(),
                 2, List.of(new SharedStep("b1", () -> order.add("b1")), new SharedStep("b2", () -> order.add("b2"))));
-        CountDownLatch lastNamed = new CountDownLatch(1);
-        try (ParallelWork work = new ParallelWork(1)) {
-            // task -1 holds the only thread until the last task has been added (its chain is named just before),
-            // so the ready queue alone decides what runs next
-            work.forEachInOrder(List.of(-1, 0, 1, 2).iterator(), t -> {
-                if (t == 2) {
-                    lastNamed.countDown();
+        CountDownLatch allAdded = new CountDownLatch(1);
+        Iterator<Integer> tasks = List.of(-1, 0, 1, 2).iterator();
+        // the scheduler asks for the next task only after it has added the last one: the moment every task is queued
+        Iterator<Integer> signalling = new Iterator<>() {
+            @Override
+            public boolean hasNext() {
+                boolean more = tasks.hasNext();
+                if (!more) {
+                    allAdded.countDown();
                 }
-                return t < 0 ? List.of() : chains.get(t);
-            }, t -> {
+                return more;
+            }
+
+            @Override
+            public Integer next() {
+                return tasks.next();
+            }
+        };
+        try (ParallelWork work = new ParallelWork(1)) {
+            // task -1 holds the only thread until every task has been added, so the ready queue alone decides what
+            // runs next (a pause after the last chain was named raced the adding thread under load)
+            work.forEachInOrder(signalling, t -> t < 0 ? List.of() : chains.get(t), t -> {
                 if (t < 0) {
-                    awaitThenPause(lastNamed);
+                    await(allAdded);
                 } else {
                     order.add("task " + t);
                 }
@@ -144,10 +157,9 @@ class ParallelWorkTest {
         assertThat(order).containsExactly("b1", "a1", "b2", "task 1", "task 0", "task 2");
     }
 
-    private static void awaitThenPause(CountDownLatch latch) {
+    private static void await(CountDownLatch latch) {
         try {
             latch.await();
-            Thread.sleep(200);
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
         }
