@@ -62,13 +62,13 @@ class CheckCommandTest {
     void theRefinementAfterTheSweepIsEstimatedApart() throws Exception {
         CliHarness cli = CliHarness.in(work, FakeChunkSolver.fast());
         // one slice (one Z, one age, one physics), one 1 Msun bracket halved 9 times to 0.002 Msun (2^9 = 512 >
-        // 500): 2.5 searches x 9 = 22.5, 23 new zero-age models at 0.1 s each on 1 thread: 2.3 s
+        // 500): 2.5 searches x 9 = 22.5, 23 new zero-age models at 0.05 s each on 1 thread: 1.15 s
         Path zeroAge = CliHarness.writeGrid(work, "zams.yaml",
                 "mass: {values: [1.0, 2.0]}\nmetallicity: {z: 0.014, y: 0.27}\nage: {gyr: [0], origin: zams}\n");
         assertThat(cli.execute("check", zeroAge.toString(), "--threads", "1").out())
-                .contains("refinement:    about 23 new models after them to narrow the transition masses, about 2 s"
+                .contains("refinement:    about 23 new models after them to narrow the transition masses, about 1 s"
                         + " more (2.5 searches per (Z, age, physics) slice, 9 halvings of a 1 Msun bracket each,"
-                        + " about 0.1 s per model; run --no-refine skips them)");
+                        + " about 0.05 s per model; run --no-refine skips them)");
         // the demo's shape from birth: 3 Z x 3 ages, 0.2 Msun brackets halved 7 times (2^7 = 128 > 100):
         // 9 x 2.5 x 7 = 157.5, 158 models (the demo added 155) at 0.3 s each on 2 threads: 23.7 s
         Path birth = CliHarness.writeGrid(work, "birth.yaml", "mass: {from: 0.2, to: 2.0, step: 0.2}\n"
@@ -99,7 +99,7 @@ class CheckCommandTest {
         assertThat(check).contains("s per model (median of the run in " + runDir + ")");
         // the new models the refinement appended to the catalogue, beyond the grid's 156
         assertThat(check).contains("refinement:    about " + (rows - 156) + " new models after them")
-                .contains("as many as the run in " + runDir + " added, about 0.3 s per model");
+                .contains("as many as the run in " + runDir + " added, about 0.25 s per model");
         // another grid in the same directory: its refinement is estimated afresh
         Files.writeString(grid, CliHarness.GRID.replace("step: 0.05", "step: 0.1"));
         assertThat(cli.execute("check", grid.toString(), "--threads", "1").out())

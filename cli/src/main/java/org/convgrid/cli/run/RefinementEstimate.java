@@ -36,11 +36,10 @@ public record RefinementEstimate(long models, double seconds, String basis) {
     static final double BIRTH_MODEL_SECONDS = 0.3;
 
     /**
-     * One-thread seconds of one new zero-age model, computed on a mass line of its own. Measured on the same machine
-     * under a load of ~4 from other work (2026-12-04): the 200-model zero-age grid's 59 new models took 6 s on 2
-     * threads, 0.2 s each at that load; about half of it on a quiet machine.
+     * One-thread seconds of one new zero-age model, computed on a mass line of its own. Measured (same machine, quiet,
+     * 2026-12-04): the 200-model zero-age grid's 59 new models took 3 s on one thread in two runs out of two.
      */
-    static final double ZERO_AGE_MODEL_SECONDS = 0.1;
+    static final double ZERO_AGE_MODEL_SECONDS = 0.05;
 
     /** Nothing to add: the grid does not refine, or its mass axis has no bracket. */
     public static RefinementEstimate none(String why) {
