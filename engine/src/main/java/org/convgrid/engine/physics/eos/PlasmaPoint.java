@@ -290,14 +290,7 @@ final class PlasmaPoint {
      * {@link #evaluate}.
      */
     void solveStep(double eta) {
-        FermiDirac.withSlopes(eta, fd);
-        double yeFd = electronScale * fd[1] * Constants.M_U / density;
-        if (coulomb && yeFd > 0.0) {
-            coulombTerm.evaluate(fd, yeFd, chargeRatio);
-        } else {
-            coulombTerm.clear();
-        }
-        stepRatio = ratio(eta);
+        double yeFd = electronSide(eta);
         double ye = ions(stepRatio);
         double spread = ionSpread;
         ye = Math.max(ye, Double.MIN_NORMAL);
@@ -313,6 +306,17 @@ final class PlasmaPoint {
      * {@link #evaluate} itself (which sets the hydrogen fractions too); the residual fields are left unset.
      */
     void completeAt(double eta) {
+        double yeFd = electronSide(eta);
+        heliumFractions(stepRatio);
+        electrons = yeFd;
+        evaluate();
+    }
+
+    /**
+     * The electron side at eta, shared by {@link #solveStep} and {@link #completeAt}: the Fermi-Dirac integrals in
+     * fd, the Coulomb term and the ratio x in {@link #stepRatio}; returns the free electrons per u.
+     */
+    private double electronSide(double eta) {
         FermiDirac.withSlopes(eta, fd);
         double yeFd = electronScale * fd[1] * Constants.M_U / density;
         if (coulomb && yeFd > 0.0) {
@@ -321,9 +325,7 @@ final class PlasmaPoint {
             coulombTerm.clear();
         }
         stepRatio = ratio(eta);
-        heliumFractions(stepRatio);
-        electrons = yeFd;
-        evaluate();
+        return yeFd;
     }
 
     /**
