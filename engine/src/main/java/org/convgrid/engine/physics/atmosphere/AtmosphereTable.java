@@ -23,7 +23,8 @@ import org.convgrid.engine.state.Composition;
  * low-gravity one, 2026-12-03), except in the coolest low-gravity cells just above log Teff 3.45: 1.2e-2 at log Teff
  * 3.481, log g 3.75 (Z = 0.02, at 0.43 and 0.57 of the cell's steps; the same 1.19e-2 from tables integrated at
  * tolerances 1e-7, 1e-9 and 1e-10, so it is the interpolation, not the nodes; AtmosphereNodeProbe, 2026-12-04,
- * table mean 4.7e-4); in those coolest atmospheres the grey approximation itself is the larger error
+ * table mean 4.7e-4; young 0.1-1 Msun stars at Z = 0.02 come out within 1.1e-4 in R and 3.5e-4 in Teff of the same
+ * tracks with the atmosphere integrated at every surface, AtmosphereTableEffectProbe); in those coolest atmospheres the grey approximation itself is the larger error
  * (Chabrier &amp; Baraffe 1997, A&amp;A 327, 1039; from memory). A node of
  * {@link GreyAtmosphere} with the standard physics costs 412-419 EOS and opacity calls on average over the nodes the
  * 200-model zero-age grid visits (1022-1047 at the former step-size tolerance 1e-9; AtmosphereNodeProbe), about
