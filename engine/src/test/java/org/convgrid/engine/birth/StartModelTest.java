@@ -43,7 +43,8 @@ class StartModelTest {
         // convective: at this low metal opacity the
         // interior is radiative, the convective envelope reaching down to m/M = 0.972 (measured); so the star is more
         // centrally condensed than an n = 1.5 polytrope, and its virial luminosity lies towards that of n = 3,
-        // L = (3/4) x G M^2 / R, 7/4 of the n = 1.5 one (Chandrasekhar 1939, ch. IV; measured 1.60)
+        // L = (3/4) x G M^2 / R, 7/4 of the n = 1.5 one (Chandrasekhar 1939, ch. IV; measured 1.60). Teff below
+        // 5500 K, base 0.972 and 1.4-1.75 frozen from our own run (2026-12-02, commit 3db178d)
         assertStartModelsWith(1.0e-4, 5500.0, 0.972, 1.4, 1.75, 10.0);
     }
 
