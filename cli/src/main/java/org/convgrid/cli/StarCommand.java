@@ -108,7 +108,9 @@ final class StarCommand implements Callable<Integer> {
     OutputFormat format;
 
     /**
-     * Helium mass fractions accepted: from below the primordial value (0.2485, Aver et al. 2015, from memory) to
+     * Helium mass fractions accepted: from below the primordial value (0.2485 +- 0.0002, the Planck-based value
+     * quoted by Aver, Olive, Porter &amp; Skillman 2013, arXiv:1309.0047; Aver, Olive &amp; Skillman 2015,
+     * arXiv:1503.08146, measure 0.2449 +- 0.0040) to
      * above the helium-rich populations of globular clusters (Y about 0.38-0.40, Piotto et al. 2007, from memory);
      * outside, the zero-age solver has no physical model to find.
      */

@@ -65,7 +65,7 @@ class RealSolverTransitionsTest {
         assertThat(rows).hasSize(1);
         TransitionRow t = rows.get(0);
         assertThat(t.slice().ageGyr()).isEqualTo(0.5);
-        assertThat(t.yInit()).isEqualTo(0.2771);
+        assertThat(t.yInit()).isEqualTo(0.2771); // the grid's own helium law, 0.2471 + 1.5 x 0.02 (arithmetic)
         assertThat(t.method()).isEqualTo(TransitionMethod.REFINED);
         assertThat(t.toleranceMsun()).isEqualTo(TOLERANCE);
         // narrowed below the tolerance, inside the grid's brackets 0.3-0.45 and 1.05-1.25

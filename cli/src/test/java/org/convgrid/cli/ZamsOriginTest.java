@@ -73,7 +73,8 @@ class ZamsOriginTest {
      * EOS inverted at each call (the same equations at the same tolerance: node values move within that tolerance's
      * error, a few 1e-6 in ln P): last digits of the 0.06 Gyr rows only, <= 4e-7 relative (0.3 Msun L 0.009505464 ->
      * 0.009505463 Lsun; 1 Msun env_cz_mass_msun 0.02409035 -> 0.02409036); zero-age rows and Newton iterations
-     * (3, 74, 21, 52) unchanged.
+     * (3, 74, 21, 52) unchanged. Frozen from our own runs (first at commit b13c164), last set 2026-12-03 (commit
+     * 3954ea8); our output, not published values.
      */
     private static final List<String> ROWS_BEFORE = List.of(
             "p0-z00-m000-a00,0.3,0.02,0.28,1.8,0.0,0.0,main_sequence,ok,,0.009842161,"

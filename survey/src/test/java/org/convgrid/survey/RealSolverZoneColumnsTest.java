@@ -80,6 +80,7 @@ class RealSolverZoneColumnsTest {
         assertThat(row.envCzMassMsun()).isNaN();
         assertThat(row.turnoverTimeDays()).isNaN();
         assertThat(row.turnoverTimeGlobalDays()).isNaN();
+        // the core's 10-40 % of the mass at 2.5 Msun: from memory, loose
         assertThat(row.coreCzMassFrac()).isBetween(0.1, 0.4);
         // zones.csv: the core is its innermost zone and ends where the catalogue says; no envelope or whole star
         List<CatalogueZone> list = zones.get("m2.5");

@@ -6,7 +6,8 @@ import org.convgrid.engine.structure.ShellComposition;
 
 /**
  * The zero-age assumption as a {@link ShellComposition}: every shell holds {@code initial} with 3He and the CN
- * isotopes at their local equilibrium for its trial state ({@link NuclearNetwork#equilibrium}). Its burning slopes
+ * isotopes at their local equilibrium for its trial state ({@link NuclearNetwork#equilibrium}; common practice for
+ * zero-age models, no single source; the network's own papers are named in its implementations). Its burning slopes
  * along that equilibrium are the network's analytic ones ({@link NuclearNetwork#equilibriumEnergy}) where the
  * structure burns with the same network; otherwise, or where the network has none, the caller differences.
  *

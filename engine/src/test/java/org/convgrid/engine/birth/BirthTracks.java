@@ -24,7 +24,10 @@ final class BirthTracks {
     private BirthTracks() {
     }
 
-    /** Birth composition with Y = 0.2485 + 1.5 Z (the README's default helium law). */
+    /**
+     * Birth composition with Y = 0.2485 + 1.5 Z. Not the README's helium law nor {@code star}'s default, which take
+     * 0.2471 + 1.5 Z: the frozen values of the birth-track tests and the reference digits were taken with 0.2485.
+     */
     static Composition birth(double z) {
         double y = 0.2485 + 1.5 * z;
         return BirthAbundances.of(1.0 - y - z, z);

@@ -43,7 +43,8 @@ class StartModelTest {
         // convective: at this low metal opacity the
         // interior is radiative, the convective envelope reaching down to m/M = 0.972 (measured); so the star is more
         // centrally condensed than an n = 1.5 polytrope, and its virial luminosity lies towards that of n = 3,
-        // L = (3/4) x G M^2 / R, 7/4 of the n = 1.5 one (Chandrasekhar 1939, ch. IV; measured 1.60)
+        // L = (3/4) x G M^2 / R, 7/4 of the n = 1.5 one (Chandrasekhar 1939, ch. IV; measured 1.60). Teff below
+        // 5500 K, base 0.972 and 1.4-1.75 frozen from our own run (2026-12-02, commit 3db178d)
         assertStartModelsWith(1.0e-4, 5500.0, 0.972, 1.4, 1.75, 10.0);
     }
 
@@ -108,7 +109,8 @@ class StartModelTest {
         }
         // the start's memory fades over a few contraction times (1.3e4 and 5e3 yr): measured |D ln R| 0.095 at
         // 1e4 yr, 0.003 at 1e5 yr (the two step sequences differ, and so does their error), 0.0009 at 1 Myr (and,
-        // with StartModelProbe's ages, 0.29 at 1e3 yr, 0.006 at 0.3 Myr, 0.0012 at 1 Myr)
+        // with StartModelProbe's ages, 0.29 at 1e3 yr, 0.006 at 0.3 Myr, 0.0012 at 1 Myr). Bounds frozen from our own
+        // runs (set 2026-12-02, commit 54fa5cd; figures re-measured 2026-12-03, commit a7baf0f), not published values
         assertThat(change[0]).isBetween(0.04, 0.15);
         assertThat(change[1]).isLessThan(0.01);
         assertThat(change[2]).isLessThan(3.0e-3);

@@ -42,7 +42,8 @@ class SolarCalibrationTest {
 
     @Test
     void endsWithTheStatedMetalsToHydrogenRatioInTheEnvelope() {
-        // Grevesse & Noels 1993 Z/X = 0.0245 (from memory) is the present surface value; with settling the initial
+        // Grevesse & Noels 1993 Z/X = 0.0245 (as listed in Asplund, Amarsi & Grevesse 2021, A&A 653, A141, Table 4)
+        // is the present surface value; with settling the initial
         // ratio is higher, by ~10-15 % in standard solar models with diffusion (0.0266 against 0.0231 for GS98,
         // Asplund, Amarsi & Grevesse 2021, Table 4). Measured: 0.0275, +12 %
         assertThat(sun.envelopeMetalsToHydrogen()).isCloseTo(0.0245,
@@ -125,7 +126,8 @@ class SolarCalibrationTest {
         // -0.86 %, lifetime 9.544, envelope Y 0.2543) and the screened potential's Coulomb logarithm in the settling;
         // before both: alpha 1.7594, Y 0.2738, initial Z/X 0.02700, r_cz 0.7205, T_c 1.5539e7 K, rho_c 148.56,
         // lifetime 9.538, envelope Y 0.2544. Before thermal diffusion, the metals' own diffusion coefficient and the
-        // GN93 Z/X (GS98 Z/X 0.0231): alpha 1.7218, Y 0.2667, initial Z/X 0.02460, r_cz 0.7233, lifetime 9.626
+        // GN93 Z/X (GS98 Z/X 0.0231): alpha 1.7218, Y 0.2667, initial Z/X 0.02460, r_cz 0.7233, lifetime 9.626.
+        // Frozen from our own run, last set 2026-12-02 (commit 02cc0fb), not published values
         assertThat(sun.mixingLength()).isCloseTo(2.0958, within(0.005));
         assertThat(sun.helium()).isCloseTo(0.2750, within(0.0005));
         assertThat(sun.initialMetalsToHydrogen()).isCloseTo(0.02756, within(0.0001));

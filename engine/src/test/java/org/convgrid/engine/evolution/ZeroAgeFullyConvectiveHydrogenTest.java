@@ -24,7 +24,7 @@ import org.junit.jupiter.api.Test;
  */
 class ZeroAgeFullyConvectiveHydrogenTest {
 
-    /** Z = 0.008, Y = 0.2485 + 1.5 Z (the README's helium law). */
+    /** Z = 0.008, Y = 0.2485 + 1.5 Z (as BirthTracks; the README's helium law takes 0.2471 + 1.5 Z). */
     private static final Composition METAL_POOR = Composition.scaledSolar(1.0 - 0.2605 - 0.008, 0.008);
 
     @Test

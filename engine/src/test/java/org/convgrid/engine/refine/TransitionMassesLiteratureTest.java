@@ -46,7 +46,7 @@ class TransitionMassesLiteratureTest {
         // Its centres were not the cause: at Z = 0.02 our centre physics reproduces the published radiative-core
         // onset of contracting 0.7 and 1 Msun stars (birth RadiativeCoreOnsetCentreTest). 0.336 and 0.342 Msun
         // bracket it; a physics change that moves the limit by more than ~0.003 Msun fails here and is re-frozen on
-        // purpose.
+        // purpose. Frozen from our own run, last set 2026-12-02 (commit f6d99c0).
         assertThat(solve(0.336).solved().convection().structureClass()).isEqualTo(StructureClass.FULLY_CONVECTIVE);
         assertThat(solve(0.342).solved().convection().structureClass()).isNotEqualTo(StructureClass.FULLY_CONVECTIVE);
     }

@@ -10,6 +10,13 @@ import org.convgrid.engine.units.Constants;
  * The default {@link NuclearNetwork}: pp chains with explicit 3He and the PP-I/II/III branches, and the CN cycle
  * plus the 16O leak as lumped steps, with electron screening.
  *
+ * <p>Sources, as each component cites them: S-factors of Solar Fusion II (Adelberger et al. 2011, Rev. Mod. Phys.
+ * 83, 195; for 14N(p,g) its value, near the 1.68 keV b Runkle et al. 2005 measured, PRL 94, 082503; 7Li(p,a) from
+ * NACRE, Angulo et al. 1999, Nucl. Phys. A 656, 3) in the non-resonant rate form with the corrections of Fowler,
+ * Caughlan &amp; Zimmerman 1967 (ARA&amp;A 5, 525); energies net of neutrinos from Bahcall 1989 (Neutrino
+ * Astrophysics); the 7Be electron capture of Bahcall &amp; Moeller 1969; screening of Salpeter 1954 (Aust. J. Phys.
+ * 7, 373). Values recalled from memory where those classes say so.
+ *
  * <p>Reactions (rates from {@link SolarFusionRates}, energies from {@link ReactionEnergy}):
  * <pre>
  *   p + p (+ p)      -&gt; 3He               6.671 MeV  (d(p,g) instantaneous)

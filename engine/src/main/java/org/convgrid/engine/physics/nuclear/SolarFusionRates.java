@@ -5,8 +5,9 @@ package org.convgrid.engine.physics.nuclear;
  *
  * <p>S(0) values are the recommendations of Solar Fusion II (Adelberger et al. 2011, RMP 83, 195; the
  * values from memory, not read from the paper).
- * 14N(p,g)15O uses S(0) = 1.66 keV b (Runkle et al. 2005, PRL 94, 082503, as adopted by Solar Fusion II),
- * about half the older NACRE/textbook value. The slopes S'/S and curvatures S''/S are from memory unless
+ * 14N(p,g)15O uses S(0) = 1.66 keV b, the value recalled as Solar Fusion II's; the measurement it rests on, Runkle et
+ * al. 2005 (PRL 94, 082503), gives 1.68 +- 0.09 (stat) +- 0.16 (syst) keV b. About half the older NACRE/textbook
+ * value. The slopes S'/S and curvatures S''/S are from memory unless
  * stated; they move the rates by at most a few per cent at main-sequence temperatures. The pp slope is
  * consistent with the T9^(2/3) and T9 terms of the Caughlan &amp; Fowler 1988 fit (1.09 and 0.938, from memory;
  * checked in the tests). Reduced masses from atomic masses (amu).

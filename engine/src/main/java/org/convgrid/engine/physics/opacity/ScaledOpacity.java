@@ -6,7 +6,8 @@ import org.convgrid.engine.state.Composition;
 
 /**
  * Another opacity times a constant factor, for the {@code opacity_scale} physics input (1 = as published).
- * A constant factor leaves the logarithmic derivatives unchanged.
+ * A constant factor leaves the logarithmic derivatives unchanged. No paper of its own: the physics is the scaled
+ * opacity's, with its citations; scaling an opacity to test a model's sensitivity is common practice.
  *
  * @param inner the opacity to scale
  * @param factor positive multiplier

@@ -31,6 +31,9 @@ import org.junit.jupiter.api.Test;
  * rho = 1.5, T = 5e6 K P -0.13 % (fewer atoms, less excluded volume), mu -0.28 %; in an M-dwarf interior (rho = 10,
  * T = 3e5 K) P -0.37 %, nabla_ad -3.6e-3, and at rho = 30, T = 1e5 K nabla_ad +1.3e-3; the solar centre and core,
  * the dense M-dwarf centres (rho 100-1000), the photospheres and the hydrogen-free row by less than 1e-9 in P.
+ *
+ * <p>Frozen from our own code: first 2026-12-01 (commits 4a254e2, 00f971d), the whole table last 2026-12-02 (commit
+ * c27ed6d). The 1e-9 tolerance is what an arithmetic-neutral change must meet (rounding only).
  */
 class StellarPlasmaEosNonRegressionTest {
 

@@ -115,7 +115,8 @@ class StellarPlasmaEosTest {
             double b = s.gasPressureFraction();
             assertThat(s.nablaAd()).isCloseTo(2 * (4 - 3 * b) / (32 - 24 * b - 3 * b * b), within(2e-4));
         }
-        // With Coulomb, degeneracy and metal ionisation the solar-centre value is a little below 0.4 (~0.397).
+        // With Coulomb, degeneracy and metal ionisation the solar-centre value is a little below 0.4 (~0.397; from
+        // memory, no published table checked).
         assertThat(EOS.atDensity(152.9, 1.567e7, Composition.scaledSolar(0.346, 0.0188)).nablaAd())
                 .isBetween(0.39, 0.4);
     }

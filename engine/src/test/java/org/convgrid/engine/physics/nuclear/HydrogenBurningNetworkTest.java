@@ -62,9 +62,11 @@ class HydrogenBurningNetworkTest {
         Composition centre = SOLAR_AGE.equilibrium(152.9, 1.567e7, Composition.scaledSolar(0.346, 0.0188));
         BurningRate r = DEFAULT.burn(152.9, 1.567e7, centre);
         assertThat(r.eps()).isCloseTo(16.5, within(0.25 * 16.5));
-        // The CN cycle is a small part at the solar centre (SSMs give ~1 % of L overall, more at the centre).
+        // The CN cycle is a small part at the solar centre (SSMs give ~1 % of L overall, more at the centre; from
+        // memory, no single source checked).
         assertThat(r.epsCno() / r.eps()).isBetween(0.01, 0.10);
-        // Non-regression (frozen from this implementation on purpose; re-validate if it moves).
+        // Non-regression (frozen from our own run on 2026-12-01, commit 3561edf, not a published value; re-validate
+        // if it moves).
         assertThat(r.eps()).isCloseTo(16.95, within(0.05));
     }
 
@@ -149,7 +151,9 @@ class HydrogenBurningNetworkTest {
     @Test
     void energyMatchesTheHydrogenConsumed() {
         // Energy conservation (derived): at CN and 3He equilibrium and PP-I dominance, eps = -dX/dt E_H with
-        // E_H = Q_eff/(4 m_H) ~ 6.3e18 erg/g for 26.2 MeV; the mix of chains keeps it within 5 %.
+        // E_H = Q_eff/(4 m_H) ~ 6.3e18 erg/g for 26.2 MeV; the mix of chains keeps it within 5 %. 26.2 MeV is the
+        // PP-I sum of ReactionEnergy: Q-values from atomic masses, neutrino energies from Bahcall 1989, Neutrino
+        // Astrophysics (from memory).
         Composition c = RELAXED.equilibrium(100.0, 1.3e7, SOLAR_ALL_N);
         BurningRate r = RELAXED.burn(100.0, 1.3e7, c);
         double perGram = r.eps() / -r.dh1Dt();

@@ -28,7 +28,8 @@ class LightElementRatesTest {
         }
         // the Gamow exponent is the fit's: 3.720 T9^-1/3 (Caughlan & Fowler 1988)
         assertThat(SolarFusionRates.D_P.tauCoefficient()).isCloseTo(3.720, within(0.004));
-        // non-regression: N_A<sv> at 1e6 K, cm^3 mol^-1 s^-1
+        // non-regression: N_A<sv> at 1e6 K, cm^3 mol^-1 s^-1, frozen from our own code on 2026-12-02 (commit
+        // 7f20c48), not a published value
         assertThat(SolarFusionRates.D_P.rate(1.0e-3, 0.1)).isCloseTo(1.3821e-11, within(1.0e-14));
     }
 
@@ -92,7 +93,8 @@ class LightElementRatesTest {
         double sum = with.dh1Dt() + with.dhe3Dt() + with.dhe4Dt() + with.dc12Dt() + with.dn14Dt() + with.do16Dt()
                 + with.dh2Dt() + with.dli7Dt();
         assertThat(Math.abs(sum)).isLessThan(1.0e-12 * Math.abs(with.dh2Dt()));
-        // at 1.2e6 K deuterium burning outruns the p+p chain by orders of magnitude (why it stalls contraction)
+        // at 1.2e6 K deuterium burning outruns the p+p chain by orders of magnitude (why it stalls contraction;
+        // common practice, no single source)
         assertThat(with.eps()).isGreaterThan(100.0 * without.eps());
     }
 

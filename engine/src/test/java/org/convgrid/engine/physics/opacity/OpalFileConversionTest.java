@@ -17,7 +17,7 @@ import org.junit.jupiter.api.Test;
  * The converter from the published OPAL file layout (Iglesias &amp; Rogers 1996, ApJ 464, 943; GN93hz file dated
  * 10/03/95) to our table layout, and the one-off entry point that writes the shipped resource:
  * <pre>
- *   ./mvnw -q -B -ntp -pl engine test -Dtest=OpalFileConversionTest -Dconvgrid.opal.raw=/work/opal/GN93hz.txt
+ *   ./mvnw -q -B -ntp -pl engine test -Dtest=OpalFileConversionTest -Dconvgrid.opal.raw=FILE
  * </pre>
  * ({@code -Dconvgrid.opal.raw=windows} re-creates the interim set from the two windows; optional
  * {@code -Dconvgrid.opal.second=FILE}, an independent second transcription, is compared cell by cell first; optional

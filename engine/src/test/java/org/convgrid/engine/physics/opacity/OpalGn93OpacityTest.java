@@ -145,32 +145,6 @@ class OpalGn93OpacityTest extends OpacityContractTest {
         assertThat(Math.log10(beyond / inside)).isCloseTo(0.0, within(0.05));
     }
 
-    @Test
-    void measuresTheJumpTheCoolJoinRemoves() {
-        org.junit.jupiter.api.Assumptions.assumeTrue(Boolean.getBoolean("convgrid.measure"),
-                "-Dconvgrid.measure=true prints the table-minus-analytic offset at log T = 3.75 per composition");
-        TabulatedOpacity table = OPACITY.table();
-        double[] out = new double[3];
-        for (int k = 0; k < table.tableCount(); k++) {
-            Composition c = Composition.scaledSolar(table.hydrogen(k), table.metals(k));
-            double worst = 0.0;
-            double sum = 0.0;
-            int n = 0;
-            for (double logR : table.logR()) {
-                if (table.interpolate(3.75, logR, c.x(), c.z(), out) != TabulatedOpacity.ANSWERED) {
-                    continue;
-                }
-                double rho = Math.pow(10.0, logR + 3.0 * (3.75 - 6.0));
-                double jump = out[0] - Math.log10(ANALYTIC.rosselandMean(rho, Math.pow(10.0, 3.75), c).kappa());
-                worst = Math.max(worst, Math.abs(jump));
-                sum += jump * jump;
-                n++;
-            }
-            System.out.printf(java.util.Locale.ROOT, "join at log T 3.75, X = %.4f Z = %.4g: largest %.3f dex,"
-                    + " rms %.3f dex over %d log R nodes%n", c.x(), c.z(), worst, Math.sqrt(sum / Math.max(n, 1)), n);
-        }
-    }
-
     private static double logKappa(double logT, double logR, Composition c) {
         double rho = Math.pow(10.0, logR + 3.0 * (logT - 6.0));
         return Math.log10(OPACITY.rosselandMean(rho, Math.pow(10.0, logT), c).kappa());
