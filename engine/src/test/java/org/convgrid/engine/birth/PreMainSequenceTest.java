@@ -45,7 +45,8 @@ class PreMainSequenceTest {
         // Ferguson et al. 2005 became the default opacity: the cooler, larger Hayashi-track star contracts later;
         // 1.86 -> 1.73 when eps_grav took its two-step form before the ZAMS, second order in time: with every step
         // limit halved and quartered it is 1.70 and 1.68 Myr, ZamsArrivalProbe, against 1.77 and 1.72 before).
-        // Frozen from our own run, last set 2026-12-03 (commit ab06333)
+        // Frozen from our own run, last set 2026-12-03 (commit ab06333). Tolerance 0.1 Myr (our choice): the age is
+        // first order in the step, and halving every limit moves it 0.03 Myr; the changes above moved it 0.04-0.13
         assertThat(t.events().radiativeCore() / MYR).isCloseTo(1.73, within(0.1));
     }
 
@@ -172,7 +173,7 @@ class PreMainSequenceTest {
         // non-regression: 4425 K (R 2.49, L 2.14); 4718 K (R 2.29, L 2.35) with the analytic cool opacity, 0.3-0.5 dex
         // below the published low-temperature tables of Ferguson et al. 2005 where the photosphere sits (log T 3.674,
         // log R 0.28), before those tables became the default. Frozen from our own run, last set 2026-12-02
-        // (commit 02cc0fb)
+        // (commit 02cc0fb). Tolerance 15 K (our choice): a tenth of the published sets' spread, far above round-off
         assertThat(teff).isCloseTo(4425.0, within(15.0));
     }
 
@@ -212,7 +213,8 @@ class PreMainSequenceTest {
         // the trapezoid of the start- and end-of-step zones' rates (LightElementBurning#corrected): second order in
         // the step; with every limit scaled by 1 / 0.5 / 0.25 (YoungStepAccuracyProbe) -0.580 / -0.573 / -0.571,
         // against -0.968 / -0.823 / -0.712 before, so -0.98 was a first-order error of ~0.35 dex, not the model.
-        // Frozen from our own run, last set 2026-12-03 (commit 19b4f7a).
+        // Frozen from our own run, last set 2026-12-03 (commit 19b4f7a). Tolerance 0.05 dex (our choice): five times
+        // the step-halving spread (-0.580 / -0.573 / -0.571), below every step-history change recorded above.
         assertThat(logLi).isCloseTo(-0.58, within(0.05));
         // 0.5 Msun at 100 Myr: Baraffe et al. 2015 keep Li/Li0 = 0.000 in their table (below 5e-4) from 15 Myr on;
         // the lithium of a 0.5-0.6 Msun star is gone well before the zero-age main sequence

@@ -46,6 +46,8 @@ class ZeroAgeModelsTest {
         // low-temperature tables of Ferguson et al. 2005 became the default opacity (alpha 1.8 here, calibrated with
         // the analytic cool terms; the solar calibration with the tables gives 2.096): L 0.7378 -> 0.7322, R 0.8789
         // -> 0.9109, Tc 1.3480e7 -> 1.3459e7 K. Frozen from our own run, last set 2026-12-02 (commit 02cc0fb).
+        // Tolerances (our choice): 2-3 % in L and R, 1.5 % in T_c, far above what mesh, step or round-off changes
+        // move them (<= 1e-4 relative in the changes recorded since), near the size of the physics changes above.
         GlobalProperties g = ZamsFixtures.model(ZamsFixtures.PROTOSOLAR, 1.0).model().global();
         assertThat(g.luminosity() / Constants.L_SUN).isCloseTo(0.7322, within(0.02));
         assertThat(g.radius() / Constants.R_SUN).isCloseTo(0.9109, within(0.02));
