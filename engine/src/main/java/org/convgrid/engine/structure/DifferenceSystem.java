@@ -18,6 +18,11 @@ public interface DifferenceSystem {
 
     int centralConditions();
 
+    /** The name of unknown {@code j} (0 &lt;= j &lt; {@link #variables()}) for messages, e.g. "ln T". */
+    default String unknownName(int j) {
+        return "unknown " + j;
+    }
+
     /**
      * Evaluates the residuals and, when {@code jacobian} is not null, adds the Jacobian dF/dy to it (the caller
      * clears it first).

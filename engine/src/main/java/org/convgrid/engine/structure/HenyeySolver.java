@@ -139,6 +139,11 @@ public final class HenyeySolver {
     public record Result(double[] solution, SolveReport report) {
     }
 
+    /** The name of the unknown at flat index {@code index} of the solution vector; empty for none (negative). */
+    private static String unknownAt(DifferenceSystem system, int index) {
+        return index < 0 ? "" : system.unknownName(index % system.variables());
+    }
+
     /**
      * Relaxes {@code system} from {@code start} (not modified).
      */
@@ -155,7 +160,7 @@ public final class HenyeySolver {
         try {
             system.evaluate(y, residual, jacobian);
         } catch (ConvgridException e) {
-            return new Result(y, new SolveReport(StopReason.BAD_STATE, 0, Double.NaN, -1, -1,
+            return new Result(y, new SolveReport(StopReason.BAD_STATE, 0, Double.NaN, -1, "",
                     "start state rejected: " + e.getMessage()));
         }
         int nv = system.variables();
@@ -169,7 +174,7 @@ public final class HenyeySolver {
         for (int iteration = 1; iteration <= settings.iterationBudget(); iteration++) {
             if (fresh && !jacobian.factor()) {
                 return new Result(y, new SolveReport(StopReason.SINGULAR_JACOBIAN, iteration, largest,
-                        worst < 0 ? -1 : worst / nv, worst < 0 ? -1 : worst % nv, ""));
+                        worst < 0 ? -1 : worst / nv, unknownAt(system, worst), ""));
             }
             worst = correct(system, y, residual, jacobian, delta);
             largest = system.correctionSize(y, worst, delta[worst]);
@@ -180,29 +185,29 @@ public final class HenyeySolver {
                     system.evaluate(y, residual, jacobian);
                 } catch (ConvgridException e) {
                     return new Result(y, new SolveReport(StopReason.BAD_STATE, iteration, largest, worst / nv,
-                            worst % nv, "accepted state rejected: " + e.getMessage()));
+                            unknownAt(system, worst), "accepted state rejected: " + e.getMessage()));
                 }
                 fresh = true;
                 if (!jacobian.factor()) {
                     return new Result(y, new SolveReport(StopReason.SINGULAR_JACOBIAN, iteration, largest,
-                            worst / nv, worst % nv, ""));
+                            worst / nv, unknownAt(system, worst), ""));
                 }
                 worst = correct(system, y, residual, jacobian, delta);
                 largest = system.correctionSize(y, worst, delta[worst]);
             }
             if (!Double.isFinite(largest)) {
                 return new Result(y, new SolveReport(StopReason.BAD_STATE, iteration, largest, worst / nv,
-                        worst % nv, "non-finite correction"));
+                        unknownAt(system, worst), "non-finite correction"));
             }
             if (largest <= settings.tolerance()) {
                 // y is within the tolerance of the solution, and the last evaluation (residuals and the system's
                 // scratch values) was at y: return it as it is
                 return new Result(y, new SolveReport(StopReason.CONVERGED, iteration, largest, worst / nv,
-                        worst % nv, ""));
+                        unknownAt(system, worst), ""));
             }
             if (hopeless(largest, smallest, iteration, settings)) {
                 return new Result(y, new SolveReport(StopReason.ITERATION_BUDGET, iteration, largest, worst / nv,
-                        worst % nv, "given up: correction too large for the " + (settings.iterationBudget() - iteration)
+                        unknownAt(system, worst), "given up: correction too large for the " + (settings.iterationBudget() - iteration)
                         + " iterations left"));
             }
             double lambda = Math.min(1.0, settings.maxStep() / largest);
@@ -239,7 +244,7 @@ public final class HenyeySolver {
             }
             if (!accepted) {
                 return new Result(y, new SolveReport(StopReason.BAD_STATE, iteration, largest, worst / nv,
-                        worst % nv, "every damped step was rejected: " + rejection));
+                        unknownAt(system, worst), "every damped step was rejected: " + rejection));
             }
             System.arraycopy(trial, 0, y, 0, n);
             fresh = withJacobian;
@@ -247,7 +252,7 @@ public final class HenyeySolver {
             smallest = Math.min(smallest, largest);
         }
         return new Result(y, new SolveReport(StopReason.ITERATION_BUDGET, settings.iterationBudget(), largest,
-                worst / nv, worst % nv, ""));
+                worst / nv, unknownAt(system, worst), ""));
     }
 
     /**

@@ -8,11 +8,12 @@ package org.convgrid.engine.structure;
  * @param lastCorrection largest (undamped) correction size of the last iteration; ln units for logarithmic
  *                       unknowns, see {@link DifferenceSystem#correctionSize}
  * @param worstPoint mesh point where that correction was largest (0 = centre)
- * @param worstVariable unknown at that point (for the structure equations: 0 ln r, 1 ln rho, 2 ln T, 3 L)
+ * @param worstUnknown name of the unknown at that point (e.g. "ln T", {@link DifferenceSystem#unknownName}); empty
+ *                     when no correction was computed
  * @param detail extra words, e.g. the physics error that stopped a step; empty when none
  */
 public record SolveReport(StopReason reason, int iterations, double lastCorrection, int worstPoint,
-                          int worstVariable, String detail) {
+                          String worstUnknown, String detail) {
 
     public boolean converged() {
         return reason == StopReason.CONVERGED;
@@ -20,13 +21,14 @@ public record SolveReport(StopReason reason, int iterations, double lastCorrecti
 
     /** Adds the iterations of an earlier stage (e.g. before a remesh) to this report. */
     public SolveReport plusIterations(int earlier) {
-        return new SolveReport(reason, iterations + earlier, lastCorrection, worstPoint, worstVariable, detail);
+        return new SolveReport(reason, iterations + earlier, lastCorrection, worstPoint, worstUnknown, detail);
     }
 
     @Override
     public String toString() {
-        return String.format("%s after %d iterations (last correction %.3g at point %d, variable %d)%s",
-                reason, iterations, lastCorrection, worstPoint, worstVariable,
-                detail.isEmpty() ? "" : ": " + detail);
+        String where = worstPoint < 0 ? ""
+                : String.format(" (last correction %.3g in %s at mesh point %d, 0 = centre)", lastCorrection,
+                        worstUnknown, worstPoint);
+        return reason + " after " + iterations + " iterations" + where + (detail.isEmpty() ? "" : ": " + detail);
     }
 }

@@ -15,6 +15,8 @@ import org.convgrid.engine.physics.opacity.OpacityValue;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.units.Constants;
 
+import java.util.List;
+
 /**
  * The four stellar-structure equations in mass (Kippenhahn, Weigert &amp; Weiss 2012, ch. 10-12) as a
  * {@link DifferenceSystem}; unknowns per point: ln r, ln rho, ln T and L / L_scale. Density rather than pressure
@@ -47,6 +49,9 @@ import org.convgrid.engine.units.Constants;
  * (scratch space).
  */
 public final class StructureEquations implements DifferenceSystem {
+
+    /** The unknowns of a point, in their order in the solution vector. */
+    private static final List<String> UNKNOWN_NAMES = List.of("ln r", "ln rho", "ln T", "L / L_scale");
 
     /** Relative step of the one-sided differences in ln rho, ln T and ln r. */
     static final double DIFFERENCE_STEP = 1.0e-6;
@@ -225,6 +230,11 @@ public final class StructureEquations implements DifferenceSystem {
     @Override
     public int variables() {
         return 4;
+    }
+
+    @Override
+    public String unknownName(int j) {
+        return UNKNOWN_NAMES.get(j);
     }
 
     @Override

@@ -185,7 +185,7 @@ public final class ZamsTrack {
             }
         }
         return ZamsResult.failed(new SolveReport(org.convgrid.engine.structure.StopReason.ITERATION_BUDGET,
-                spent, Double.NaN, -1, -1, "homology walk used its " + ATTEMPT_BUDGET + " relaxations"), spent);
+                spent, Double.NaN, -1, "", "homology walk used its " + ATTEMPT_BUDGET + " relaxations"), spent);
     }
 
     /**
