@@ -64,8 +64,12 @@ final class RunCommand implements Callable<Integer> {
             + "the missing ones (the grid's models must match its manifest).")
     boolean resume;
 
-    @Option(names = "--force", description = "Start over in a directory that already holds a run, replacing its "
-            + "catalogue.ecsv, transitions.csv and manifest.yaml (without it such a directory is refused).")
+    @Option(names = "--force", description = "Start over in a directory that already holds a run. First removes "
+            + "every file convgrid wrote there: catalogue.ecsv, zones.csv, transitions.csv, life_events.csv, "
+            + "manifest.yaml, report.html, the track files in tracks/, the profiles in profiles/, the charts in maps/ "
+            + "and the temporary files of writes cut short (emptied folders go too). Keeps the lock file "
+            + RunLock.FILE_NAME + " and every file convgrid does not write. Without --force such a directory is "
+            + "refused.")
     boolean force;
 
     @Option(names = "--no-refine", description = "Skip the refinement of the transition masses by bisection that "

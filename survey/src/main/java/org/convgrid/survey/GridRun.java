@@ -41,7 +41,7 @@ public final class GridRun {
      * @param requestedShard {@code --shard} or Slurm's shard, null when neither (the whole grid, or on resume the
      *                       shard the directory records)
      * @param resume continue the directory's catalogue
-     * @param force start over, removing the directory's tables
+     * @param force start over, removing every file an earlier run wrote in the directory ({@link RunDirectory#clear})
      */
     public record Settings(GridFile grid, RunDirectory directory, int threads, Shard requestedShard, boolean resume,
                            boolean force) {
@@ -96,11 +96,12 @@ public final class GridRun {
         if (s.resume() && dir.holdsRun()) {
             return resume(s);
         }
-        if (dir.holdsRun()) {
-            if (!s.force()) {
-                throw new RunSetupException(dir.root() + " already holds a run; add --resume to continue it or "
-                        + "--force to start it over");
-            }
+        if (dir.holdsRun() && !s.force()) {
+            throw new RunSetupException(dir.root() + " already holds a run; add --resume to continue it or "
+                    + "--force to start it over");
+        }
+        if (s.force()) {
+            // also when the catalogue and manifest are gone: tracks or charts of an earlier run must not outlive it
             dir.clear();
         }
         Shard shard = s.requestedShard() == null ? Shard.ALL : s.requestedShard();
