@@ -81,7 +81,7 @@ public final class ReportPage {
         } else if (run.trackedModels().size() < run.tracks().size()) {
             b.append("<p class=\"missing\">").append(run.tracks().size() - run.trackedModels().size())
                     .append(" track file(s) in ").append(RunLayout.TRACKS)
-                    .append("/ match no catalogue model and are not charted.</p>\n");
+                    .append("/ match no catalogue model (by id and mass) and are not charted.</p>\n");
         }
         b.append("</body>\n</html>\n");
         return b.toString();
