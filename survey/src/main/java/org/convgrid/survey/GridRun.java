@@ -106,9 +106,11 @@ public final class GridRun {
         }
         Shard shard = s.requestedShard() == null ? Shard.ALL : s.requestedShard();
         Instant started = clock.instant();
-        RunManifest start = manifest(s, shard, started, null, Map.of(), Double.NaN);
-        dir.create(RunManifestWriter.toYaml(start));
         long owned = new ShardPlan(s.grid().spec(), shard, MASSES_PER_CHUNK).count();
+        // unfinished until the end: it says how many models the directory is to hold, should the run be cut short
+        RunManifest start = manifest(s, shard, started, null, Map.of(), Double.NaN).unfinished(Map.of(), Double.NaN,
+                owned);
+        dir.create(RunManifestWriter.toYaml(start));
         return new Plan(s, shard, new KeptCatalogue(Set.of(), true, 0), owned, started, Double.NaN);
     }
 
