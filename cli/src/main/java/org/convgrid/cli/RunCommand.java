@@ -22,6 +22,7 @@ import org.convgrid.survey.RunDirectory;
 import org.convgrid.survey.RunFinishing;
 import org.convgrid.survey.RunLock;
 import org.convgrid.survey.ShardChoice;
+import org.convgrid.survey.SweepInterruption;
 import org.convgrid.survey.TrackFiles;
 import org.convgrid.survey.parallel.ParallelWork;
 import org.convgrid.survey.refine.TransitionRefiner;
@@ -103,7 +104,9 @@ final class RunCommand implements Callable<Integer> {
                 : RunDirectory.defaultPath(file.spec().outputDir(), chosen)));
         OutputTargets.requireWritableDirectory("--out", dir.root());
         boolean evolves = file.spec().ages().evolves();
-        TrackFiles tracks = new TrackFiles(dir.layout());
+        // every catalogue row and life-events row goes through it, so that a signal stops the sweep between rows
+        SweepInterruption interruption = new SweepInterruption();
+        TrackFiles tracks = new TrackFiles(dir.layout(), interruption);
         ChunkSolver solver = evolves ? context.solvers().solverFor(file.spec(), tracks)
                 : context.solvers().solverFor(file.spec());
         GridRun runner = new GridRun(ToolVersion.current(), ToolVersion.commit(), Clock.tickSeconds(java.time.ZoneOffset.UTC));
@@ -123,9 +126,11 @@ final class RunCommand implements Callable<Integer> {
             GridRun.Result result;
             TransitionTables.Update refined = null;
             double sweepSeconds;
-            try (ParallelWork work = new ParallelWork(n)) {
+            try (ParallelWork work = new ParallelWork(n);
+                 RunInterruptHook hook = RunInterruptHook.install(() -> interrupted(runner, plan, interruption, lock,
+                         refineNow, context.terminal() && !quiet), err)) {
                 result = runner.execute(plan, work, solver, reporter == null ? ProgressListener.NONE : reporter,
-                        refineNow ? List.of() : context.finishers());
+                        refineNow ? List.of() : context.finishers(), interruption);
                 if (reporter != null) {
                     reporter.finish();
                 }
@@ -160,6 +165,25 @@ final class RunCommand implements Callable<Integer> {
             }
             return ExitCodes.OK;
         }
+    }
+
+    /**
+     * On SIGINT or SIGTERM (from {@link RunInterruptHook}'s thread): stops the sweep between two rows, rewrites the
+     * manifest as unfinished, releases the directory and returns the line to print.
+     *
+     * @param progressShown whether a progress line may be on the terminal (the message then starts a line of its own)
+     */
+    private String interrupted(GridRun runner, GridRun.Plan plan, SweepInterruption interruption, RunLock lock,
+                               boolean refines, boolean progressShown) throws java.io.IOException {
+        GridRun.Interrupted left = runner.interrupt(plan, interruption);
+        try {
+            // released as a normal end would, so that the resume does not report a holder that died
+            lock.close();
+        } catch (java.io.IOException e) {
+            // the operating system releases it with the process anyway
+        }
+        return (progressShown ? "\n" : "") + RunInterruptHook.line(left, grid.toString(),
+                out != null ? out.toString() : plan.settings().directory().root().toString(), refines);
     }
 
     /** The thread count asked for, or the available processors. */
