@@ -37,7 +37,8 @@ import picocli.CommandLine.ParentCommand;
         description = {"Compute every model of a grid and write a run directory: catalogue.ecsv (grown row by row in "
                 + "grid order), zones.csv, transitions.csv and manifest.yaml.",
             "Exit codes: 0 all models ok, 3 some models failed or did not converge (they are in the catalogue with "
-                + "their status), 2 bad grid file or usage, 1 I/O or software failure."})
+                + "their status), 2 bad grid file or usage, 1 I/O or software failure, 130 interrupted (Ctrl-C or "
+                + "SIGTERM: the catalogue keeps its complete rows; continue with --resume)."})
 final class RunCommand implements Callable<Integer> {
 
     /** Grids larger than this many models need --yes: a typo in a step can ask for days of computing. */

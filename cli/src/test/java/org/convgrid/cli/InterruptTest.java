@@ -45,6 +45,13 @@ class InterruptTest {
         interruptAndResume("TERM");
     }
 
+    @Test
+    void runHelpNamesTheExitCodeOfAnInterruptedRun() {
+        String help = CliHarness.in(work, FakeChunkSolver.fast()).execute("run", "--help").out().replaceAll("\\s+", " ");
+        assertThat(help).contains("130 interrupted (Ctrl-C or SIGTERM: the catalogue keeps its complete rows; "
+                + "continue with --resume)");
+    }
+
     private void interruptAndResume(String signal) throws Exception {
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
         Path dir = work.resolve("cut short");
