@@ -10,6 +10,8 @@ final class ExitCodes {
     static final int USAGE = 2;
     /** The run finished but some models failed. */
     static final int SOME_MODELS_FAILED = 3;
+    /** Stopped by SIGINT or SIGTERM: 128 + SIGINT's number, what shells report for a Ctrl-C. */
+    static final int INTERRUPTED = 130;
 
     private ExitCodes() {
     }

@@ -48,6 +48,7 @@ final class PlotCommand implements Callable<Integer> {
         // writes there
         try (RunLock lock = RunLock.acquire(dir)) {
             Locks.reportStale(lock, main.err());
+            UnfinishedRunWarning.printIfUnfinished(layout, main.err());
             RunData run = RunData.read(dir);
             DrawnMaps maps = RunMaps.drawAll(run, dir, formats);
             maps.failures().forEach(f -> main.err().println("convgrid: warning: " + f.describe()));

@@ -22,6 +22,7 @@ import org.convgrid.survey.RunDirectory;
 import org.convgrid.survey.RunFinishing;
 import org.convgrid.survey.RunLock;
 import org.convgrid.survey.ShardChoice;
+import org.convgrid.survey.SweepInterruption;
 import org.convgrid.survey.TrackFiles;
 import org.convgrid.survey.parallel.ParallelWork;
 import org.convgrid.survey.refine.TransitionRefiner;
@@ -36,7 +37,8 @@ import picocli.CommandLine.ParentCommand;
         description = {"Compute every model of a grid and write a run directory: catalogue.ecsv (grown row by row in "
                 + "grid order), zones.csv, transitions.csv and manifest.yaml.",
             "Exit codes: 0 all models ok, 3 some models failed or did not converge (they are in the catalogue with "
-                + "their status), 2 bad grid file or usage, 1 I/O or software failure."})
+                + "their status), 2 bad grid file or usage, 1 I/O or software failure, 130 interrupted (Ctrl-C or "
+                + "SIGTERM: the catalogue keeps its complete rows; continue with --resume)."})
 final class RunCommand implements Callable<Integer> {
 
     /** Grids larger than this many models need --yes: a typo in a step can ask for days of computing. */
@@ -64,8 +66,12 @@ final class RunCommand implements Callable<Integer> {
             + "the missing ones (the grid's models must match its manifest).")
     boolean resume;
 
-    @Option(names = "--force", description = "Start over in a directory that already holds a run, replacing its "
-            + "catalogue.ecsv, transitions.csv and manifest.yaml (without it such a directory is refused).")
+    @Option(names = "--force", description = "Start over in a directory that already holds a run. First removes "
+            + "every file convgrid wrote there: catalogue.ecsv, zones.csv, transitions.csv, life_events.csv, "
+            + "manifest.yaml, report.html, the track files in tracks/, the profiles in profiles/, the charts in maps/ "
+            + "and the temporary files of writes cut short (emptied folders go too). Keeps the lock file "
+            + RunLock.FILE_NAME + " and every file convgrid does not write. Without --force such a directory is "
+            + "refused.")
     boolean force;
 
     @Option(names = "--no-refine", description = "Skip the refinement of the transition masses by bisection that "
@@ -99,7 +105,9 @@ final class RunCommand implements Callable<Integer> {
                 : RunDirectory.defaultPath(file.spec().outputDir(), chosen)));
         OutputTargets.requireWritableDirectory("--out", dir.root());
         boolean evolves = file.spec().ages().evolves();
-        TrackFiles tracks = new TrackFiles(dir.layout());
+        // every catalogue row and life-events row goes through it, so that a signal stops the sweep between rows
+        SweepInterruption interruption = new SweepInterruption();
+        TrackFiles tracks = new TrackFiles(dir.layout(), interruption);
         ChunkSolver solver = evolves ? context.solvers().solverFor(file.spec(), tracks)
                 : context.solvers().solverFor(file.spec());
         GridRun runner = new GridRun(ToolVersion.current(), ToolVersion.commit(), Clock.tickSeconds(java.time.ZoneOffset.UTC));
@@ -119,9 +127,11 @@ final class RunCommand implements Callable<Integer> {
             GridRun.Result result;
             TransitionTables.Update refined = null;
             double sweepSeconds;
-            try (ParallelWork work = new ParallelWork(n)) {
+            try (ParallelWork work = new ParallelWork(n);
+                 RunInterruptHook hook = RunInterruptHook.install(() -> interrupted(runner, plan, interruption, lock,
+                         refineNow, context.terminal() && !quiet), err)) {
                 result = runner.execute(plan, work, solver, reporter == null ? ProgressListener.NONE : reporter,
-                        refineNow ? List.of() : context.finishers());
+                        refineNow ? List.of() : context.finishers(), interruption);
                 if (reporter != null) {
                     reporter.finish();
                 }
@@ -156,6 +166,25 @@ final class RunCommand implements Callable<Integer> {
             }
             return ExitCodes.OK;
         }
+    }
+
+    /**
+     * On SIGINT or SIGTERM (from {@link RunInterruptHook}'s thread): stops the sweep between two rows, rewrites the
+     * manifest as unfinished, releases the directory and returns the line to print.
+     *
+     * @param progressShown whether a progress line may be on the terminal (the message then starts a line of its own)
+     */
+    private String interrupted(GridRun runner, GridRun.Plan plan, SweepInterruption interruption, RunLock lock,
+                               boolean refines, boolean progressShown) throws java.io.IOException {
+        GridRun.Interrupted left = runner.interrupt(plan, interruption);
+        try {
+            // released as a normal end would, so that the resume does not report a holder that died
+            lock.close();
+        } catch (java.io.IOException e) {
+            // the operating system releases it with the process anyway
+        }
+        return (progressShown ? "\n" : "") + RunInterruptHook.line(left, grid.toString(),
+                out != null ? out.toString() : plan.settings().directory().root().toString(), refines);
     }
 
     /** The thread count asked for, or the available processors. */

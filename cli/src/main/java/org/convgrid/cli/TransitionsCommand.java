@@ -81,6 +81,7 @@ final class TransitionsCommand implements Callable<Integer> {
         // the run's one core threshold, the one its structure classes were computed with
         TransitionFinder finder = TransitionFinder.withDefaults();
         long start = System.nanoTime();
+        UnfinishedRunWarning.printIfUnfinished(dir.layout(), parent.err());
         TransitionTables.Update update;
         if (refine) {
             // a missing directory is reported by the tables' reader; an existing one is owned for the refinement

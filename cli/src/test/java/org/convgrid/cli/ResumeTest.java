@@ -52,7 +52,9 @@ class ResumeTest {
         assertThat(child.waitFor(10, TimeUnit.SECONDS)).isTrue();
         long kept = Files.readAllLines(catalogue).size() - CliHarness.CATALOGUE_HEADER_LINES;
         assertThat(kept).isBetween((long) ROWS_BEFORE_KILL, CliHarness.GRID_MODELS - 1);
-        assertThat(Files.readString(dir.resolve("manifest.yaml"))).contains("finished: null");
+        // killed outright: the start manifest is what is left, and it says how many models the run is to hold
+        assertThat(Files.readString(dir.resolve("manifest.yaml"))).contains("finished: null")
+                .contains("  expected: " + CliHarness.GRID_MODELS + "\n").doesNotContainIgnoringCase("nan");
 
         CliHarness.Execution resumed = run("run", "--no-refine", grid.toString(), "--out", dir.toString(), "--resume",
                 "--threads", "2");

@@ -31,7 +31,21 @@ public final class AtomicFiles {
         void write(OutputStream out) throws IOException;
     }
 
+    /** Ending of every temporary file: {@code .<target name>.<random>.tmp} beside its target. */
+    private static final String TEMPORARY_SUFFIX = ".tmp";
+    /** A temporary file's name: a dot, the target's name, a dot, a random unsigned long in base 36, the suffix. */
+    private static final java.util.regex.Pattern TEMPORARY_NAME =
+            java.util.regex.Pattern.compile("\\..+\\.[0-9a-z]{1,13}\\.tmp");
+
     private AtomicFiles() {
+    }
+
+    /**
+     * Whether a file is one of the temporary files this class writes before the rename: one left behind by a process
+     * that was killed mid-write is a partial copy of a file convgrid owns, never the user's.
+     */
+    public static boolean isTemporary(Path file) {
+        return TEMPORARY_NAME.matcher(file.getFileName().toString()).matches();
     }
 
     /** Writes UTF-8 text through {@code body}, then moves it into place. */
@@ -83,7 +97,7 @@ public final class AtomicFiles {
     private static Path newTemporary(Path dir, String targetName) throws IOException {
         for (int attempt = 0; ; attempt++) {
             Path temp = dir.resolve("." + targetName + "." + Long.toUnsignedString(
-                    java.util.concurrent.ThreadLocalRandom.current().nextLong(), 36) + ".tmp");
+                    java.util.concurrent.ThreadLocalRandom.current().nextLong(), 36) + TEMPORARY_SUFFIX);
             try {
                 FileChannel.open(temp, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE).close();
                 return temp;

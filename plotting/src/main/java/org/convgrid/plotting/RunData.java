@@ -42,6 +42,9 @@ public record RunData(List<CatalogueRow> catalogue, List<TransitionRow> transiti
                       RunManifest manifest, Map<String, List<Span>> radiusZones, List<Track> tracks,
                       Map<String, TrackTimeline> timelines) {
 
+    /** Relative difference up to which a track's mass is its catalogue model's. */
+    static final double TRACK_MASS_TOLERANCE = 1e-4;
+
     public RunData {
         catalogue = List.copyOf(catalogue);
         transitions = List.copyOf(transitions);
@@ -66,7 +69,12 @@ public record RunData(List<CatalogueRow> catalogue, List<TransitionRow> transiti
         return !tracks.isEmpty();
     }
 
-    /** The tracks whose mass, Z and physics the catalogue names, in catalogue order of their first model. */
+    /**
+     * The tracks whose mass, Z and physics the catalogue names, in catalogue order of their first model. A track
+     * belongs to a model when its id is the model's track id and its mass ({@link Track#massMsun}) is the model's:
+     * ids come from grid indices, so a track left by another grid can carry the id of a star of another mass, and
+     * must never be drawn as this one.
+     */
     public List<TrackedModel> trackedModels() {
         Map<String, Track> byId = new HashMap<>();
         tracks.forEach(t -> byId.put(t.trackId(), t));
@@ -74,11 +82,19 @@ public record RunData(List<CatalogueRow> catalogue, List<TransitionRow> transiti
         for (CatalogueRow r : catalogue) {
             String id = Track.trackIdOf(r.modelId());
             Track t = byId.get(id);
-            if (t != null && !found.containsKey(id)) {
+            if (t != null && !found.containsKey(id) && sameMass(t, r.massMsun())) {
                 found.put(id, new TrackedModel(new TrackOrigin(id, r.massMsun(), r.zInit(), PhysicsKey.of(r)), t));
             }
         }
         return List.copyOf(found.values());
+    }
+
+    /**
+     * Whether a track is of a star of this mass: within {@link #TRACK_MASS_TOLERANCE} of it, far above what the
+     * track file's rounding leaves (~2e-6) and far below the spacing of any grid's masses.
+     */
+    static boolean sameMass(Track track, double massMsun) {
+        return track.massMsun().stream().anyMatch(m -> Math.abs(m - massMsun) <= TRACK_MASS_TOLERANCE * massMsun);
     }
 
     /** Reads a run directory; catalogue.ecsv must exist, everything else is optional. */

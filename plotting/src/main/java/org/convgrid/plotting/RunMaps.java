@@ -43,7 +43,36 @@ import org.convgrid.plotting.zones.ZoneMapRenderer;
  */
 public final class RunMaps {
 
+    // the first word of every chart file's name, before its first '_': spelled once for drawing and for
+    // recognising charts (run --force removes the charts of an earlier run, and only those)
+    private static final String ZONES_MASS_FILES = "zones-mass";
+    private static final String ZONES_RADIUS_FILES = "zones-radius";
+    private static final String HR_FILES = "hr";
+    private static final String TRENDS_FILES = "transitions-vs-z";
+    private static final String TRENDS_AGE_FILES = "transitions-vs-age";
+    private static final String ZONES_AGE_FILES = "zones-age";
+    private static final String ZONES_AGE_DEPTH_FILES = "zones-age-depth";
+    private static final Set<String> CHART_FILE_KINDS = Set.of(ZONES_MASS_FILES, ZONES_RADIUS_FILES, HR_FILES,
+            TRENDS_FILES, TRENDS_AGE_FILES, ZONES_AGE_FILES, ZONES_AGE_DEPTH_FILES);
+
     private RunMaps() {
+    }
+
+    /**
+     * Whether a file in maps/ is a chart convgrid draws (any run's, any grid's): one of its chart names, as PNG or
+     * as one of the vector formats. A file of the user's there is not.
+     */
+    public static boolean isChartFile(Path file) {
+        String name = file.getFileName().toString();
+        int kindEnd = name.indexOf('_');
+        int dot = name.lastIndexOf('.');
+        if (kindEnd <= 0 || dot < kindEnd) {
+            return false;
+        }
+        String extension = name.substring(dot + 1);
+        boolean chartFormat = extension.equals("png") || java.util.Arrays.stream(ChartFiles.VectorFormat.values())
+                .anyMatch(f -> f.extension().equals(extension));
+        return chartFormat && CHART_FILE_KINDS.contains(name.substring(0, kindEnd));
     }
 
     /** Draws every PNG of the run; returns the files written and the charts that failed, in report order. */
@@ -124,17 +153,17 @@ public final class RunMaps {
             TransitionRow t = transitions.get(s);
             String stem = SliceLabels.fileStem(s);
             String group = groupOf(s.zInit(), PhysicsKey.of(s), run);
-            mass.add(new MapEntry("zones-mass_" + stem + ".png", MapEntry.ZONES_MASS, group,
+            mass.add(new MapEntry(ZONES_MASS_FILES + "_" + stem + ".png", MapEntry.ZONES_MASS, group,
                     "Convective zones in m/M, " + SliceLabels.describe(s) + ".",
                     () -> ZoneMapRenderer.render(ZoneMap.inMass(s, rows, t))));
-            radius.add(new MapEntry("zones-radius_" + stem + ".png", MapEntry.ZONES_RADIUS, group,
+            radius.add(new MapEntry(ZONES_RADIUS_FILES + "_" + stem + ".png", MapEntry.ZONES_RADIUS, group,
                     "Convective zones in r/R, " + SliceLabels.describe(s) + ".",
                     () -> ZoneMapRenderer.render(ZoneMap.inRadius(s, rows, t, run.radiusZones()))));
         }
         List<MapEntry> entries = new ArrayList<>(mass);
         entries.addAll(radius);
         for (PhysicsKey p : physics) {
-            entries.add(new MapEntry("hr_" + p.fileStem() + ".png", MapEntry.HR,
+            entries.add(new MapEntry(HR_FILES + "_" + p.fileStem() + ".png", MapEntry.HR,
                     (run.hasTracks() ? "HR diagram of every usable model (colour: Z; shape: structure class) with the "
                             + "evolution tracks (grey) and isochrones labelled by age, "
                             : "HR diagram of every usable model (colour: Z; shape: structure class), ")
@@ -143,7 +172,7 @@ public final class RunMaps {
         }
         for (PhysicsKey p : physics) {
             if (run.transitions().stream().anyMatch(t -> PhysicsKey.of(t.slice()).equals(p))) {
-                entries.add(new MapEntry("transitions-vs-z_" + p.fileStem() + ".png", MapEntry.TRENDS,
+                entries.add(new MapEntry(TRENDS_FILES + "_" + p.fileStem() + ".png", MapEntry.TRENDS,
                         "Transition masses against Z: shaded boxes span the two models that bracket each value, "
                                 + "dashed boxes the windows of small transient cores, " + p.describe() + ".",
                         () -> TransitionTrendRenderer.render(TransitionTrend.build(p, run.transitions()))));
@@ -153,7 +182,7 @@ public final class RunMaps {
             long ages = run.transitions().stream().filter(t -> PhysicsKey.of(t.slice()).equals(p))
                     .mapToDouble(t -> t.slice().ageGyr()).distinct().count();
             if (ages >= 2) {
-                entries.add(new MapEntry("transitions-vs-age_" + p.fileStem() + ".png", MapEntry.TRENDS_AGE,
+                entries.add(new MapEntry(TRENDS_AGE_FILES + "_" + p.fileStem() + ".png", MapEntry.TRENDS_AGE,
                         "Transition masses against age, one line per Z and method: shaded boxes span the two models "
                                 + "that bracket each value, dashed boxes the windows of small transient cores, "
                                 + p.describe() + ".",
@@ -179,12 +208,12 @@ public final class RunMaps {
             String stem = "_m" + SliceLabels.number(o.massMsun()) + "_z" + SliceLabels.number(o.zInit()) + "_"
                     + o.physics().fileStem() + ".png";
             String group = groupOf(o.zInit(), o.physics(), run);
-            entries.add(new MapEntry("zones-age" + stem, MapEntry.ZONES_AGE, group,
+            entries.add(new MapEntry(ZONES_AGE_FILES + stem, MapEntry.ZONES_AGE, group,
                     "Convective zones (shaded) and the hydrogen-burning region (outlined) against age, " + what + ", "
                             + o.physics().describe() + ".",
                     () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track(), run.timeline(o.trackId())))));
             if (Kippenhahn.build(o, t.track(), run.timeline(o.trackId())).hasThinEnvelope()) {
-                entries.add(new MapEntry("zones-age-depth" + stem, MapEntry.ZONES_AGE, group,
+                entries.add(new MapEntry(ZONES_AGE_DEPTH_FILES + stem, MapEntry.ZONES_AGE, group,
                         "The same in depth below the surface, -log10(1 - m/M), so the thin convective envelope "
                                 + "shows, " + what + ".",
                         () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track(), run.timeline(o.trackId())),

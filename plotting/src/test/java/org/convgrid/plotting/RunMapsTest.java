@@ -11,6 +11,7 @@ import javax.imageio.ImageIO;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.plotting.style.ChartFiles;
 import org.convgrid.plotting.style.ChartStyle;
+import org.convgrid.output.track.TrackStep;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -99,9 +100,12 @@ class RunMapsTest {
         double[] zs = {0.0, 0.001, 0.002, 0.004, 0.006, 0.008, 0.01, 0.014, 0.02, 0.03};
         double[] ages = {0, 0.1, 0.2, 0.4, 0.6, 0.8, 1, 2, 3, 4};
         List<CatalogueRow> rows = TestRuns.rows(TestRuns.masses(0.1, 2.08, 100), zs, ages);
+        // one step each, enough to give the track's mass (from its log g and radius)
         List<org.convgrid.output.track.Track> tracks = rows.stream()
-                .map(r -> org.convgrid.output.track.Track.trackIdOf(r.modelId())).distinct()
-                .map(id -> new org.convgrid.output.track.Track(id, List.of())).toList();
+                .filter(r -> r.ageGyr() == 0).map(r -> new org.convgrid.output.track.Track(
+                        org.convgrid.output.track.Track.trackIdOf(r.modelId()), List.of(new TrackStep(0, "",
+                        r.luminosityLsun(), r.radiusRsun(), r.teffK(), r.logGCgs(), Double.NaN, Double.NaN,
+                        Double.NaN, Double.NaN, List.of(), null)))).toList();
         RunData run = new RunData(rows, List.of(), false, null, java.util.Map.of(), tracks);
         List<MapEntry> plan = RunMaps.plan(run);
         assertThat(run.trackedModels()).hasSize(1000);

@@ -109,7 +109,10 @@ public final class TestRuns {
                     : hasCore ? StructureClass.CONV_CORE : hasEnvelope ? StructureClass.CONV_ENVELOPE
                     : StructureClass.RADIATIVE;
         }
-        double logG = 4.438 + Math.log10(m / (radius * radius));
+        // the Sun's own log g, so that a track written from these rows gives back its mass (RunData.sameMass)
+        double logG = Math.log10(org.convgrid.engine.units.Constants.GM_SUN
+                / (org.convgrid.engine.units.Constants.R_SUN * org.convgrid.engine.units.Constants.R_SUN))
+                + Math.log10(m / (radius * radius));
         return new CatalogueRow(id, m, z, 0.2485 + 1.5 * z, p.mixingLength(), p.overshoot(), age,
                 CatalogueRow.MAIN_SEQUENCE, ModelStatus.OK, "", lum, radius, teff, logG, 1.5e7 * Math.pow(m, 0.5),
                 150.0 / m, 0.7 * (1 - 0.5 * age / lifetime), Double.NaN, cls, core, core, envBase, envRadius,

@@ -13,6 +13,7 @@ import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.batch.ProgressListener;
 import org.convgrid.engine.batch.Shard;
 import org.convgrid.grids.GridFile;
+import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
@@ -41,7 +42,7 @@ public final class GridRun {
      * @param requestedShard {@code --shard} or Slurm's shard, null when neither (the whole grid, or on resume the
      *                       shard the directory records)
      * @param resume continue the directory's catalogue
-     * @param force start over, removing the directory's tables
+     * @param force start over, removing every file an earlier run wrote in the directory ({@link RunDirectory#clear})
      */
     public record Settings(GridFile grid, RunDirectory directory, int threads, Shard requestedShard, boolean resume,
                            boolean force) {
@@ -96,18 +97,21 @@ public final class GridRun {
         if (s.resume() && dir.holdsRun()) {
             return resume(s);
         }
-        if (dir.holdsRun()) {
-            if (!s.force()) {
-                throw new RunSetupException(dir.root() + " already holds a run; add --resume to continue it or "
-                        + "--force to start it over");
-            }
+        if (dir.holdsRun() && !s.force()) {
+            throw new RunSetupException(dir.root() + " already holds a run; add --resume to continue it or "
+                    + "--force to start it over");
+        }
+        if (s.force()) {
+            // also when the catalogue and manifest are gone: tracks or charts of an earlier run must not outlive it
             dir.clear();
         }
         Shard shard = s.requestedShard() == null ? Shard.ALL : s.requestedShard();
         Instant started = clock.instant();
-        RunManifest start = manifest(s, shard, started, null, Map.of(), Double.NaN);
-        dir.create(RunManifestWriter.toYaml(start));
         long owned = new ShardPlan(s.grid().spec(), shard, MASSES_PER_CHUNK).count();
+        // unfinished until the end: it says how many models the directory is to hold, should the run be cut short
+        RunManifest start = manifest(s, shard, started, null, Map.of(), Double.NaN).unfinished(Map.of(), Double.NaN,
+                owned);
+        dir.create(RunManifestWriter.toYaml(start));
         return new Plan(s, shard, new KeptCatalogue(Set.of(), true, 0), owned, started, Double.NaN);
     }
 
@@ -141,23 +145,71 @@ public final class GridRun {
      */
     public Result execute(Plan plan, ParallelWork work, ChunkSolver solver, ProgressListener progress,
                           List<RunFinisher> finishers) throws IOException {
+        return execute(plan, work, solver, progress, finishers, new SweepInterruption());
+    }
+
+    /**
+     * As {@link #execute(Plan, ParallelWork, ChunkSolver, ProgressListener, List)}, every catalogue row and the final
+     * tables written through {@code interruption}, so that {@link #interrupt} can stop the sweep between two of them.
+     */
+    public Result execute(Plan plan, ParallelWork work, ChunkSolver solver, ProgressListener progress,
+                          List<RunFinisher> finishers, SweepInterruption interruption) throws IOException {
         Settings s = plan.settings();
         RunDirectory dir = s.directory();
         TimedSolver timed = new TimedSolver(solver);
+        interruption.timedBy(timed::medianSecondsPerModel);
         Set<String> done = plan.kept().ids();
         Map<ModelStatus, Long> emitted;
         try (CatalogueAppender sink = CatalogueAppender.open(dir.catalogue(), !plan.kept().hasHeader())) {
             emitted = ChunkSweep.run(work, s.grid().spec().requests().iterator(), MASSES_PER_CHUNK, plan.shard(),
-                    r -> done.contains(r.modelId()), timed, sink, progress, plan.remaining());
+                    r -> done.contains(r.modelId()), timed, o -> interruption.write(() -> sink.accept(o)), progress,
+                    plan.remaining());
         }
-        LifeEventLog.tidy(dir.layout().lifeEvents());
-        List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
-        Map<ModelStatus, Long> counts = RunFinishing.countByStatus(rows);
-        double median = timed.medianSecondsPerModel();
-        RunManifest end = manifest(s, plan.shard(), plan.started(), clock.instant(), counts,
-                Double.isNaN(median) ? plan.previousMedian() : median);
-        FinishedRun run = RunFinishing.complete(dir, s.grid().spec(), end, rows, finishers);
-        return new Result(counts, emitted.values().stream().mapToLong(Long::longValue).sum(), run);
+        FinishedRun[] run = new FinishedRun[1];
+        Map<ModelStatus, Long> counts = new java.util.EnumMap<>(ModelStatus.class);
+        interruption.finalWrite(() -> {
+            LifeEventLog.tidy(dir.layout().lifeEvents());
+            List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
+            counts.putAll(RunFinishing.countByStatus(rows));
+            double median = timed.medianSecondsPerModel();
+            RunManifest end = manifest(s, plan.shard(), plan.started(), clock.instant(), counts,
+                    Double.isNaN(median) ? plan.previousMedian() : median);
+            run[0] = RunFinishing.writeTables(dir, s.grid().spec(), end, rows);
+        });
+        RunFinishing.callFinishers(run[0], finishers);
+        return new Result(counts, emitted.values().stream().mapToLong(Long::longValue).sum(), run[0]);
+    }
+
+    /**
+     * What an interrupted run left.
+     *
+     * @param rows complete rows in the catalogue
+     * @param expected models the directory is to hold when complete (the shard's, or the grid's)
+     * @param swept whether the sweep had finished (its final manifest written; refinement or charts were cut short)
+     */
+    public record Interrupted(long rows, long expected, boolean swept) {
+    }
+
+    /**
+     * Stops the sweep of {@code plan} between two writes ({@link SweepInterruption#stop}) and, unless it had
+     * already finished, rewrites the manifest honestly: not finished, the rows the catalogue holds by status, the
+     * models it is to hold ({@code models.expected}) and the median time per model measured so far. For a signal
+     * handler: it touches nothing else, and the caller ends the process right after.
+     */
+    public Interrupted interrupt(Plan plan, SweepInterruption interruption) throws IOException {
+        SweepInterruption.Stopped stopped = interruption.stop();
+        RunDirectory dir = plan.settings().directory();
+        // a row cut short is no row: only complete lines count (a resume drops the rest)
+        List<CatalogueRow> rows = Files.exists(dir.catalogue())
+                ? CatalogueReader.readCompleteLines(Files.readString(dir.catalogue())) : List.of();
+        if (!stopped.swept()) {
+            double median = Double.isNaN(stopped.medianSecondsPerModel()) ? plan.previousMedian()
+                    : stopped.medianSecondsPerModel();
+            RunManifest unfinished = manifest(plan.settings(), plan.shard(), plan.started(), null, Map.of(),
+                    Double.NaN).unfinished(RunFinishing.countByStatus(rows), median, plan.owned());
+            AtomicFiles.writeString(dir.manifest(), RunManifestWriter.toYaml(unfinished));
+        }
+        return new Interrupted(rows.size(), plan.owned(), stopped.swept());
     }
 
     private RunManifest manifest(Settings s, Shard shard, Instant started, Instant finished,

@@ -7,7 +7,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import java.util.Comparator;
-import java.util.List;
 import java.util.Optional;
 import java.util.stream.Stream;
 import org.convgrid.engine.batch.Shard;
@@ -126,12 +125,15 @@ public final class RunDirectory {
         }
     }
 
-    /** Removes the run's own tables (catalogue, zones, transitions, manifest, life events), for {@code --force}. */
-    public void clear() throws IOException {
-        for (Path file : List.of(catalogue(), zones(), transitions(), manifest(), layout.lifeEvents(),
-                root().resolve(RunLayout.CATALOGUE_V1))) {
-            Files.deleteIfExists(file);
-        }
+    /**
+     * Removes every file an earlier run wrote here (tables, manifest, report, tracks, profiles, charts, temporary
+     * files), keeping the lock file and files convgrid does not write, for {@code --force}: see
+     * {@link EarlierRunFiles}.
+     *
+     * @return how many files were removed
+     */
+    public int clear() throws IOException {
+        return EarlierRunFiles.remove(layout);
     }
 
     private void undo(Path top) {

@@ -26,12 +26,23 @@ public final class TrackFiles implements StarTrackSink {
 
     private final RunLayout layout;
     private final LifeEventLog events;
+    private final SweepInterruption interruption;
     private final AtomicReference<IOException> failure = new AtomicReference<>();
 
     /** @param layout the run directory whose {@code tracks} and life-events table receive the files */
     public TrackFiles(RunLayout layout) {
+        this(layout, new SweepInterruption());
+    }
+
+    /**
+     * @param layout the run directory whose {@code tracks} and life-events table receive the files
+     * @param interruption the run's: each life-events row is appended through it, so that an interruption never
+     *                     leaves half a row (track files are whole anyway: written under a temporary name, then renamed)
+     */
+    public TrackFiles(RunLayout layout, SweepInterruption interruption) {
         this.layout = layout;
         this.events = new LifeEventLog(layout.lifeEvents());
+        this.interruption = interruption;
     }
 
     @Override
@@ -44,7 +55,8 @@ public final class TrackFiles implements StarTrackSink {
             AtomicFiles.write(target, out -> TrackWriter.writeZones(points, out));
             if (lifeEvents != null) {
                 target = layout.lifeEvents();
-                events.append(LifeEventRow.of(id, first, lifeEvents));
+                LifeEventRow row = LifeEventRow.of(id, first, lifeEvents);
+                interruption.write(() -> events.append(row));
             }
         } catch (IOException e) {
             failure.compareAndSet(null, new IOException("cannot write " + target + ": "

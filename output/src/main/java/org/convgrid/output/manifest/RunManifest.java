@@ -25,13 +25,28 @@ import org.convgrid.engine.request.PhysicsOptions;
  * @param threads worker threads
  * @param shard {@code K/N} when this run is one shard of a grid, null otherwise
  * @param counts models by status (every status present, zero when none)
- * @param medianSecondsPerModel median wall time of one model on one thread, NaN when no model ran
+ * @param medianSecondsPerModel median wall time of one model on one thread, NaN when no model ran (then not written)
  * @param ageOrigin where the run's ages count from (its catalogue's {@code age_gyr}, its tracks)
+ * @param expectedModels how many models the run directory is to hold when complete (the grid's count, or its shard's),
+ *                       {@link #EXPECTED_UNKNOWN} when not recorded; written only while the run is unfinished, so a
+ *                       reader sees how far it got
  */
 public record RunManifest(String toolVersion, String toolCommit, String gridFile, String gridText, String gridFileSha256,
                           String gridModelsSha256, List<PhysicsOptions> physics, Instant started, Instant finished,
                           int threads, String shard, Map<ModelStatus, Long> counts, double medianSecondsPerModel,
-                          AgeOrigin ageOrigin) {
+                          AgeOrigin ageOrigin, long expectedModels) {
+
+    /** {@link #expectedModels} of a manifest that does not record it (finished runs, earlier versions). */
+    public static final long EXPECTED_UNKNOWN = -1;
+
+    /** A manifest that does not record how many models the run expects. */
+    public RunManifest(String toolVersion, String toolCommit, String gridFile, String gridText, String gridFileSha256,
+                       String gridModelsSha256, List<PhysicsOptions> physics, Instant started, Instant finished,
+                       int threads, String shard, Map<ModelStatus, Long> counts, double medianSecondsPerModel,
+                       AgeOrigin ageOrigin) {
+        this(toolVersion, toolCommit, gridFile, gridText, gridFileSha256, gridModelsSha256, physics, started, finished,
+                threads, shard, counts, medianSecondsPerModel, ageOrigin, EXPECTED_UNKNOWN);
+    }
 
     /** A manifest of a run whose ages count from the zero-age main sequence. */
     public RunManifest(String toolVersion, String toolCommit, String gridFile, String gridText, String gridFileSha256,
@@ -42,6 +57,10 @@ public record RunManifest(String toolVersion, String toolCommit, String gridFile
     }
 
     public RunManifest {
+        if (expectedModels < EXPECTED_UNKNOWN) {
+            throw new IllegalArgumentException("expectedModels must be a count or EXPECTED_UNKNOWN, got "
+                    + expectedModels);
+        }
         Objects.requireNonNull(ageOrigin, "ageOrigin");
         Objects.requireNonNull(toolVersion, "toolVersion");
         Objects.requireNonNull(toolCommit, "toolCommit");
@@ -66,7 +85,18 @@ public record RunManifest(String toolVersion, String toolCommit, String gridFile
     /** The same manifest, finished at {@code end} with the final counts and median. */
     public RunManifest finishedAt(Instant end, Map<ModelStatus, Long> finalCounts, double median) {
         return new RunManifest(toolVersion, toolCommit, gridFile, gridText, gridFileSha256, gridModelsSha256, physics,
-                started, end, threads, shard, finalCounts, median, ageOrigin);
+                started, end, threads, shard, finalCounts, median, ageOrigin, expectedModels);
+    }
+
+    /** The same manifest, not finished, with the counts and median so far and the models the run is to hold. */
+    public RunManifest unfinished(Map<ModelStatus, Long> countsSoFar, double median, long expected) {
+        return new RunManifest(toolVersion, toolCommit, gridFile, gridText, gridFileSha256, gridModelsSha256, physics,
+                started, null, threads, shard, countsSoFar, median, ageOrigin, expected);
+    }
+
+    /** Whether the run is known to be unfinished: no finish time. */
+    public boolean isUnfinished() {
+        return finished == null;
     }
 
     /** Median of per-model seconds (mean of the two middle values for an even count), NaN when empty. */

@@ -84,7 +84,11 @@ public final class RunManifestReader {
                     physics, Instant.parse((String) root.get("started")),
                     finished == null ? null : Instant.parse((String) finished),
                     ((Number) root.get("threads")).intValue(), (String) root.get("shard"), counts,
-                    number(root, "median_seconds_per_model"), origin);
+                    // absent when no model was timed (earlier versions wrote .nan)
+                    root.containsKey("median_seconds_per_model") ? number(root, "median_seconds_per_model")
+                            : Double.NaN, origin,
+                    models.containsKey("expected") ? ((Number) models.get("expected")).longValue()
+                            : RunManifest.EXPECTED_UNKNOWN);
         } catch (YamlEngineException | ClassCastException | NullPointerException | DateTimeParseException
                  | IllegalArgumentException e) {
             throw new OutputFormatException("not a convgrid manifest: " + e.getMessage(), e);

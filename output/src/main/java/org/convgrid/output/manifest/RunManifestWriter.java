@@ -20,7 +20,8 @@ import org.snakeyaml.engine.v2.common.FlowStyle;
  * {@code atmosphere}, {@code overshoot_profile}, and {@code opacity_table} when a user table is named),
  * {@code core_threshold_mass_frac}, {@code age_origin} ({@code birth} or {@code zams}: where the run's ages count
  * from), {@code started}, {@code finished} (ISO-8601 UTC instants), {@code threads}, {@code shard}, {@code models}
- * ({@code total} and one count per status label), {@code median_seconds_per_model}.
+ * ({@code total}, one count per status label and, while the run is unfinished, {@code expected}: how many models it
+ * is to hold), {@code median_seconds_per_model} (left out when no model was timed: never {@code .nan}).
  */
 public final class RunManifestWriter {
 
@@ -58,6 +59,10 @@ public final class RunManifestWriter {
         for (ModelStatus status : ModelStatus.values()) {
             models.put(status.label(), m.counts().get(status));
         }
+        if (m.isUnfinished() && m.expectedModels() != RunManifest.EXPECTED_UNKNOWN) {
+            // beside total, so that a reader sees an unfinished run and how far it got
+            models.put("expected", m.expectedModels());
+        }
         Map<String, Object> root = new LinkedHashMap<>();
         root.put("tool_version", m.toolVersion());
         root.put("tool_commit", m.toolCommit());
@@ -71,7 +76,10 @@ public final class RunManifestWriter {
         root.put("threads", m.threads());
         root.put("shard", m.shard());
         root.put("models", models);
-        root.put("median_seconds_per_model", m.medianSecondsPerModel());
+        if (Double.isFinite(m.medianSecondsPerModel())) {
+            // a median of nothing is no number: YAML's .nan would only puzzle a reader (and many YAML readers)
+            root.put("median_seconds_per_model", m.medianSecondsPerModel());
+        }
         DumpSettings settings = DumpSettings.builder().setDefaultFlowStyle(FlowStyle.BLOCK).setWidth(120).build();
         return new Dump(settings).dumpToString(root);
     }

@@ -1,6 +1,8 @@
 package org.convgrid.output.track;
 
 import java.util.List;
+import java.util.OptionalDouble;
+import org.convgrid.engine.units.Constants;
 
 /**
  * One evolution track: the steps of one (mass, metallicity, physics) model, in file order (increasing age).
@@ -15,6 +17,22 @@ public record Track(String trackId, List<TrackStep> steps) {
 
     public Track {
         steps = List.copyOf(steps);
+    }
+
+    /**
+     * The star's mass, solar masses, recovered from the surface gravity and radius of its first step that gives both
+     * (g = G M / R^2): the file has no mass column, and adding one would change every track's bytes. Both columns
+     * carry {@code CsvNumbers.SIGNIFICANT_DIGITS} digits, so the mass comes back to about 2e-6 of itself. Empty when
+     * no step gives both.
+     */
+    public OptionalDouble massMsun() {
+        for (TrackStep s : steps) {
+            if (Double.isFinite(s.logGCgs()) && s.radiusRsun() > 0 && Double.isFinite(s.radiusRsun())) {
+                double radius = s.radiusRsun() * Constants.R_SUN;
+                return OptionalDouble.of(Math.pow(10.0, s.logGCgs()) * radius * radius / Constants.GM_SUN);
+            }
+        }
+        return OptionalDouble.empty();
     }
 
     /** The track id of a catalogue model id: the id without its trailing age part; the id itself when it has none. */

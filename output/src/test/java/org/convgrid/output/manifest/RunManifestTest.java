@@ -49,6 +49,29 @@ class RunManifestTest {
     }
 
     @Test
+    void anUnfinishedRunWithoutATimedModelWritesNoNanAndSaysHowManyModelsItExpects() {
+        RunManifest unfinished = manifest().unfinished(Map.of(ModelStatus.OK, 3L), Double.NaN, 90);
+        String yaml = RunManifestWriter.toYaml(unfinished);
+        assertThat(yaml).doesNotContainIgnoringCase("nan").doesNotContain("median_seconds_per_model")
+                .contains("finished: null").contains("  total: 3\n").contains("  expected: 90\n");
+        RunManifest back = RunManifestReader.read(yaml);
+        assertThat(back).isEqualTo(unfinished);
+        assertThat(back.medianSecondsPerModel()).isNaN();
+        assertThat(back.expectedModels()).isEqualTo(90);
+        // earlier versions wrote .nan: still read
+        assertThat(RunManifestReader.read(yaml + "median_seconds_per_model: .nan\n").medianSecondsPerModel()).isNaN();
+    }
+
+    @Test
+    void aFinishedRunDoesNotSayWhatItExpected() {
+        RunManifest finished = manifest().unfinished(Map.of(ModelStatus.OK, 3L), 0.5, 90)
+                .finishedAt(Instant.parse("2026-03-01T10:05:30Z"), Map.of(ModelStatus.OK, 90L), 0.5);
+        String yaml = RunManifestWriter.toYaml(finished);
+        assertThat(yaml).doesNotContain("expected").contains("median_seconds_per_model: 0.5");
+        assertThat(RunManifestReader.read(yaml).expectedModels()).isEqualTo(RunManifest.EXPECTED_UNKNOWN);
+    }
+
+    @Test
     void aManifestWrittenBeforeTheCommitWasRecordedSaysItIsUnknown() {
         String yaml = RunManifestWriter.toYaml(manifest()).replaceAll("(?m)^tool_commit: .*\\n", "");
         assertThat(yaml).doesNotContain("tool_commit");

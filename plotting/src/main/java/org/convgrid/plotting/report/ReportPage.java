@@ -12,6 +12,7 @@ import org.convgrid.output.RunLayout;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.manifest.RunManifest;
+import org.convgrid.output.manifest.UnfinishedRun;
 import org.convgrid.output.transitions.TransitionEstimate;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.plotting.DrawnMaps;
@@ -67,6 +68,7 @@ public final class ReportPage {
         b.append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n<title>")
                 .append(Html.escape(title)).append("</title>\n<style>\n").append(ReportStyle.CSS)
                 .append("</style>\n</head>\n<body>\n<h1>").append(Html.escape(title)).append("</h1>\n");
+        unfinished(b, run, runDir);
         contents(b, plan);
         b.append("<h2 id=\"run\">Run</h2>\n");
         summary(b, run);
@@ -81,10 +83,25 @@ public final class ReportPage {
         } else if (run.trackedModels().size() < run.tracks().size()) {
             b.append("<p class=\"missing\">").append(run.tracks().size() - run.trackedModels().size())
                     .append(" track file(s) in ").append(RunLayout.TRACKS)
-                    .append("/ match no catalogue model and are not charted.</p>\n");
+                    .append("/ match no catalogue model (by id and mass) and are not charted.</p>\n");
         }
         b.append("</body>\n</html>\n");
         return b.toString();
+    }
+
+    /**
+     * A note above everything else when the run did not finish: its maps and tables cover the models present only,
+     * and a reader must not take them for the grid's.
+     */
+    private static void unfinished(StringBuilder b, RunData run, Path runDir) {
+        if (run.manifest() == null) {
+            return;
+        }
+        UnfinishedRun.of(run.manifest(), run.catalogue().size()).ifPresent(u -> b
+                .append("<p class=\"unfinished\">This run is unfinished: ").append(u.describe()).append(" in ")
+                .append(RunLayout.CATALOGUE).append(". The maps and tables below cover those models only. Continue it "
+                        + "with <code>").append(Html.escape("convgrid run " + run.manifest().gridFile() + " --out "
+                        + runDir.toAbsolutePath().normalize() + " --resume")).append("</code>.</p>\n"));
     }
 
     private static void summary(StringBuilder b, RunData run) {

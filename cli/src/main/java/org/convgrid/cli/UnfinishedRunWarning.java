@@ -1,0 +1,49 @@
+package org.convgrid.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import org.convgrid.output.OutputFormatException;
+import org.convgrid.output.RunLayout;
+import org.convgrid.output.catalogue.CatalogueReader;
+import org.convgrid.output.manifest.RunManifest;
+import org.convgrid.output.manifest.RunManifestReader;
+import org.convgrid.output.manifest.UnfinishedRun;
+
+/**
+ * The warning of the commands that read a run directory ({@code transitions}, {@code plot}) when its run did not
+ * finish: what they compute covers the models present only, and the user should know before reading a transition
+ * mass or a chart as the grid's.
+ */
+final class UnfinishedRunWarning {
+
+    private UnfinishedRunWarning() {
+    }
+
+    /**
+     * Prints one warning line when the directory's manifest says the run did not finish; nothing otherwise (also
+     * when there is no readable manifest or catalogue: the command itself reports those).
+     */
+    static void printIfUnfinished(RunLayout layout, PrintWriter err) throws IOException {
+        if (!Files.isRegularFile(layout.manifest()) || !Files.isRegularFile(layout.catalogue())) {
+            return;
+        }
+        RunManifest manifest;
+        try {
+            manifest = RunManifestReader.read(Files.readString(layout.manifest()));
+        } catch (OutputFormatException e) {
+            return;
+        }
+        if (!manifest.isUnfinished()) {
+            return;
+        }
+        // a row cut short by the interruption is no model
+        long rows = CatalogueReader.readCompleteLines(Files.readString(layout.catalogue())).size();
+        UnfinishedRun unfinished = UnfinishedRun.of(manifest, rows).orElseThrow();
+        err.println("convgrid: warning: the run in " + layout.root() + " is unfinished: " + unfinished.describe()
+                + " in " + RunLayout.CATALOGUE + "; what follows covers those only (continue it with: convgrid run "
+                + RunInterruptHook.shellWord(manifest.gridFile()) + " --out "
+                + RunInterruptHook.shellWord(layout.root().toString()) + " --resume)");
+        err.flush();
+    }
+}

@@ -1,0 +1,43 @@
+package org.convgrid.plotting.report;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.manifest.RunManifest;
+import org.convgrid.output.manifest.RunManifestReader;
+import org.convgrid.output.manifest.RunManifestWriter;
+import org.convgrid.plotting.TestRuns;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The report of a run that did not finish says so before anything else, in a box of its own. */
+class UnfinishedReportTest {
+
+    @Test
+    void anUnfinishedRunsReportSaysHowManyModelsArePresentAndHowToContinue(@TempDir Path dir) throws Exception {
+        List<CatalogueRow> rows = TestRuns.rows(TestRuns.masses(0.2, 1.4, 5), new double[] {0.014}, new double[] {0});
+        TestRuns.write(dir, rows);
+        RunManifest finished = RunManifestReader.read(Files.readString(dir.resolve("manifest.yaml")));
+        Files.writeString(dir.resolve("manifest.yaml"),
+                RunManifestWriter.toYaml(finished.unfinished(finished.counts(), Double.NaN, 12)));
+
+        String html = Files.readString(ReportPage.write(dir));
+
+        String note = "<p class=\"unfinished\">This run is unfinished: 5 of 12 models in catalogue.ecsv. The maps and "
+                + "tables below cover those models only. Continue it with <code>convgrid run grids/synthetic.yaml "
+                + "--out " + dir.toAbsolutePath().normalize() + " --resume</code>.</p>";
+        assertThat(html).contains(note);
+        assertThat(html.indexOf(note)).as("above the contents").isLessThan(html.indexOf("<h2"));
+        assertThat(html).contains(".unfinished {");
+    }
+
+    @Test
+    void aFinishedRunsReportHasNoSuchNote(@TempDir Path dir) throws Exception {
+        TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.2, 1.4, 5), new double[] {0.014}, new double[] {0}));
+
+        assertThat(Files.readString(ReportPage.write(dir))).doesNotContain("class=\"unfinished\"");
+    }
+}

@@ -1,0 +1,86 @@
+package org.convgrid.survey;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.LinkOption;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.Predicate;
+import java.util.stream.Stream;
+import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.RunLayout;
+import org.convgrid.plotting.RunMaps;
+
+/**
+ * What {@code run --force} removes before it starts over: every file convgrid writes into a run directory (the
+ * tables, the manifest, the report, the track and profile files, the charts, and the temporary files of a write that
+ * was cut short) and nothing else. The lock file stays (deleting it would let two processes lock two files of one
+ * name, see {@link RunLock}), so does any file convgrid does not write (the user's notes, a script), and a folder is
+ * removed only when that leaves it empty. Without this, tracks and charts of an earlier, larger grid outlived the new
+ * run and were read as part of it.
+ */
+final class EarlierRunFiles {
+
+    /** The files convgrid writes at the top of a run directory. */
+    private static final List<String> TOP_FILES = List.of(RunLayout.CATALOGUE, RunLayout.CATALOGUE_V1,
+            RunLayout.ZONES, RunLayout.TRANSITIONS, RunLayout.LIFE_EVENTS, RunLayout.MANIFEST, RunLayout.REPORT);
+
+    private EarlierRunFiles() {
+    }
+
+    /**
+     * Removes convgrid's files from the run directory.
+     *
+     * @return how many files were removed
+     * @throws IOException when one cannot be removed (those before it are gone, the directory stays a run directory
+     *                     of the old run only in part: the message names the file)
+     */
+    static int remove(RunLayout layout) throws IOException {
+        List<Path> doomed = new ArrayList<>();
+        for (String name : TOP_FILES) {
+            Path file = layout.root().resolve(name);
+            if (Files.exists(file, LinkOption.NOFOLLOW_LINKS)) {
+                doomed.add(file);
+            }
+        }
+        doomed.addAll(listed(layout.root(), AtomicFiles::isTemporary));
+        doomed.addAll(listed(layout.tracks(), f -> RunLayout.isTable(f) || AtomicFiles.isTemporary(f)));
+        doomed.addAll(listed(layout.profiles(), f -> RunLayout.isTable(f) || AtomicFiles.isTemporary(f)));
+        doomed.addAll(listed(layout.maps(), f -> RunMaps.isChartFile(f) || AtomicFiles.isTemporary(f)));
+        for (Path file : doomed) {
+            try {
+                Files.deleteIfExists(file);
+            } catch (IOException e) {
+                throw new IOException("cannot remove " + file + " of the earlier run: " + IoMessages.reason(e), e);
+            }
+        }
+        for (Path folder : List.of(layout.tracks(), layout.profiles(), layout.maps())) {
+            removeIfEmpty(folder);
+        }
+        return doomed.size();
+    }
+
+    /** The regular files of a folder (not followed when it is a link) that the filter takes; none without it. */
+    private static List<Path> listed(Path folder, Predicate<Path> convgrids) throws IOException {
+        if (!Files.isDirectory(folder, LinkOption.NOFOLLOW_LINKS)) {
+            return List.of();
+        }
+        try (Stream<Path> entries = Files.list(folder)) {
+            return entries.filter(f -> Files.isRegularFile(f, LinkOption.NOFOLLOW_LINKS) && convgrids.test(f))
+                    .sorted().toList();
+        }
+    }
+
+    private static void removeIfEmpty(Path folder) throws IOException {
+        if (!Files.isDirectory(folder, LinkOption.NOFOLLOW_LINKS)) {
+            return;
+        }
+        try (Stream<Path> entries = Files.list(folder)) {
+            if (entries.findAny().isPresent()) {
+                return;
+            }
+        }
+        Files.deleteIfExists(folder);
+    }
+}
