@@ -145,7 +145,8 @@ public final class RunMaps {
             if (run.transitions().stream().anyMatch(t -> PhysicsKey.of(t.slice()).equals(p))) {
                 entries.add(new MapEntry("transitions-vs-z_" + p.fileStem() + ".png", MapEntry.TRENDS,
                         "Transition masses against Z: shaded boxes span the two models that bracket each value, "
-                                + "dashed boxes the windows of small transient cores, " + p.describe() + ".",
+                                + "dashed boxes the windows of small transient cores (a square alone: a window found "
+                                + "at one mass), " + p.describe() + ".",
                         () -> TransitionTrendRenderer.render(TransitionTrend.build(p, run.transitions()))));
             }
         }
@@ -155,8 +156,8 @@ public final class RunMaps {
             if (ages >= 2) {
                 entries.add(new MapEntry("transitions-vs-age_" + p.fileStem() + ".png", MapEntry.TRENDS_AGE,
                         "Transition masses against age, one line per Z and method: shaded boxes span the two models "
-                                + "that bracket each value, dashed boxes the windows of small transient cores, "
-                                + p.describe() + ".",
+                                + "that bracket each value, dashed boxes the windows of small transient cores (a "
+                                + "square alone: a window found at one mass), " + p.describe() + ".",
                         () -> TransitionAgeTrendRenderer.render(TransitionAgeTrend.build(p, run.transitions()),
                                 run.manifest() == null ? AgeOrigin.ZAMS : run.manifest().ageOrigin())));
             }

@@ -20,8 +20,11 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  */
 public final class ZoneMapRenderer {
 
-    /** A zone thinner than this share of the unit axis (about two pixels) cannot be seen. */
-    static final double MIN_VISIBLE_HEIGHT = 0.003;
+    /**
+     * A zone thinner than this share of the unit axis (about one pixel of the ~620-pixel plot) cannot be seen; one
+     * 0.003 thick (the demo's shell above the 1.8 Msun core, Z = 0.02, 600 Myr) shows as a line.
+     */
+    static final double MIN_VISIBLE_HEIGHT = 0.0015;
 
     private ZoneMapRenderer() {
     }

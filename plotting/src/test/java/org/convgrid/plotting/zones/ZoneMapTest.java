@@ -112,6 +112,22 @@ class ZoneMapTest {
     }
 
     @Test
+    void aZoneKindTooThinToSeeLeavesTheLegendForANote() {
+        CatalogueRow base = rows.stream().filter(r -> r.isOk() && r.massMsun() == 1.0).findFirst().orElseThrow();
+        // a central shell below the core threshold holds under a thousandth of the mass: no pixel in m/M
+        CatalogueRow tiny = base.withZones(List.of(
+                new CatalogueZone(CatalogueZone.ZoneKind.SHELL, 0.0, 0.0002, 0.0, 0.02),
+                new CatalogueZone(CatalogueZone.ZoneKind.ENVELOPE, 0.97, 1.0, 0.72, 1.0)));
+        var inMass = ZoneMapRenderer.render(ZoneMap.inMass(Slice.of(tiny), List.of(tiny), null));
+        assertThat(inMass.getSeriesMap()).containsKey(ZoneKind.ENVELOPE.label())
+                .doesNotContainKey(ZoneKind.SHELL.label());
+        // in r/R the same shell is 0.02 of the radius: drawn and in the legend
+        var inRadius = ZoneMapRenderer.render(ZoneMap.inRadius(Slice.of(tiny), List.of(tiny), null, Map.of()));
+        assertThat(inRadius.getSeriesMap()).containsKey(ZoneKind.SHELL.label());
+        assertThat(ZoneMapRenderer.tooThinNote(ZoneKind.SHELL)).contains("convective shells", "too thin");
+    }
+
+    @Test
     void aModelTheZoneListLeavesOutFallsBackToItsProfileThenToTheCatalogueAndSaysSo() {
         TransitionRow t = transitions.get(1);
         List<CatalogueRow> unlisted = rows.stream().map(r -> r.withZones(List.of())).toList();
