@@ -186,8 +186,8 @@ public final class RunMaps {
                     () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track(), run.timeline(o.trackId())))));
             if (Kippenhahn.build(o, t.track(), run.timeline(o.trackId())).hasThinEnvelope()) {
                 entries.add(new MapEntry("zones-age-depth" + stem, MapEntry.ZONES_AGE, group,
-                        "The same in depth below the surface, -log10(1 - m/M), so the thin convective envelope "
-                                + "shows, " + what + ".",
+                        "The same against \u2212log10(1 \u2212 m/M), surface at the top, so the thin convective "
+                                + "envelope shows, " + what + ".",
                         () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track(), run.timeline(o.trackId())),
                                 ZoneCoordinate.SURFACE_DEPTH)));
             }
