@@ -24,10 +24,11 @@ import picocli.CommandLine.ParentCommand;
 /** {@code convgrid transitions RUN_DIR [--refine]}: the transition masses of a run, refined on request. */
 @Command(name = "transitions", mixinStandardHelpOptions = true,
         description = {"Rewrite RUN_DIR/transitions.csv from its catalogue and print it: per (Z, age, physics) slice "
-                + "the highest fully convective mass (fully_convective_limit_msun), the mass above which every model "
-                + "keeps a convective core (conv_core_onset_msun), each with the two models that bracket it "
-                + "(*_bracket_lo_msun, *_bracket_hi_msun, solar masses), and the window of small central cores just "
-                + "above the fully convective limit (transient_core_lo_msun, transient_core_hi_msun; empty when none).",
+                + "the highest fully convective mass (fully_convective_limit_msun), the lowest mass above which every "
+                + "star of the slice has a convective core at its age (conv_core_onset_msun), each with the two "
+                + "models that bracket it (*_bracket_lo_msun, *_bracket_hi_msun, solar masses), and the window of "
+                + "small central cores just above the fully convective limit (transient_core_lo_msun, "
+                + "transient_core_hi_msun; empty when none).",
             "A convective core is a central convective zone whose top lies above the run's core threshold, a mass "
                 + "fraction m/M (" + TransitionFinder.DEFAULT_CORE_MASS_FRACTION_THRESHOLD + ", the one its "
                 + "structure classes use; in manifest.yaml); "
@@ -37,11 +38,11 @@ import picocli.CommandLine.ParentCommand;
                 + "every age: each new mass is the slice's own grid request (its composition, physics and age, "
                 + "evolved as a grid model would be; zero-age models seeded by homology from their converged "
                 + "neighbours), until the bracket is narrower than the tolerance (method refined, tolerance_msun); "
-                + "the fully convective limit, the lasting core's onset and both edges of the transient window are "
-                + "refined, other crossings only with --all-crossings; when new models reveal crossings between "
-                + "earlier masses, further rounds refine them (at most " + TransitionTables.MAX_ROUNDS + "). The "
-                + "new models are appended to catalogue.ecsv with ids p<i>-z<i>-r<n>-a<i> (r: refined, n counts per "
-                + "slice). A refined run cannot be resumed with 'run --resume'. Needs a finished, merged run.",
+                + "the fully convective limit, the mass above which every star has a core and both edges of the "
+                + "transient window are refined, other crossings only with --all-crossings; when new models reveal "
+                + "crossings between earlier masses, further rounds refine them (at most "
+                + TransitionTables.MAX_ROUNDS + "). The new models are appended to catalogue.ecsv with ids "
+                + "p<i>-z<i>-r<n>-a<i> (r: refined, n counts per slice). A refined run cannot be resumed with 'run --resume'. Needs a finished, merged run.",
             "Exit codes: 0 done, 3 some new models failed (in the catalogue with their status; notes says where "
                 + "a bisection stopped), 2 bad usage or not a run directory, 1 I/O or software failure."})
 final class TransitionsCommand implements Callable<Integer> {

@@ -278,5 +278,8 @@ class TransitionsCommandTest {
         assertThat(help).contains("--tolerance=MSUN", "solar masses", "0.002", "core threshold", "0.001",
                 "mass fraction m/M", "criterion is the one the run used", "notes says how often",
                 "p<i>-z<i>-r<n>-a<i>", "at every age", "transient_core_lo_msun", "refine every crossing");
+        // conv_core_onset_msun is a mass at the slice's age, not the start of a core that lasts in time
+        assertThat(help).contains("the lowest mass above which every star of the slice has a convective core at its "
+                + "age (conv_core_onset_msun)").doesNotContain("lasting", "keeps a convective core");
     }
 }

@@ -34,7 +34,8 @@ import org.convgrid.plotting.tracks.TrackedModel;
  * @param transitions the rows of transitions.csv, or, when that file is absent, found from the catalogue
  * @param transitionsFromFile whether {@code transitions} came from transitions.csv
  * @param manifest the manifest, null when manifest.yaml is absent
- * @param radiusZones convective intervals in r/R by model id, from profiles/ (empty when there are none)
+ * @param radiusZones convective intervals in r/R by model id, from profiles/ (empty when there are none); the r/R
+ *     maps use them only for models whose zones zones.csv does not list
  * @param tracks the evolution tracks in tracks/, by track id (empty when there are none)
  * @param timelines where each track's life stages lie, by track id (absent: {@link TrackTimeline#UNKNOWN})
  */

@@ -174,7 +174,8 @@ public final class RunMaps {
             if (run.transitions().stream().anyMatch(t -> PhysicsKey.of(t.slice()).equals(p))) {
                 entries.add(new MapEntry(TRENDS_FILES + "_" + p.fileStem() + ".png", MapEntry.TRENDS,
                         "Transition masses against Z: shaded boxes span the two models that bracket each value, "
-                                + "dashed boxes the windows of small transient cores, " + p.describe() + ".",
+                                + "dashed boxes the windows of small transient cores (a square alone: a window found "
+                                + "at one mass), " + p.describe() + ".",
                         () -> TransitionTrendRenderer.render(TransitionTrend.build(p, run.transitions()))));
             }
         }
@@ -184,8 +185,8 @@ public final class RunMaps {
             if (ages >= 2) {
                 entries.add(new MapEntry(TRENDS_AGE_FILES + "_" + p.fileStem() + ".png", MapEntry.TRENDS_AGE,
                         "Transition masses against age, one line per Z and method: shaded boxes span the two models "
-                                + "that bracket each value, dashed boxes the windows of small transient cores, "
-                                + p.describe() + ".",
+                                + "that bracket each value, dashed boxes the windows of small transient cores (a "
+                                + "square alone: a window found at one mass), " + p.describe() + ".",
                         () -> TransitionAgeTrendRenderer.render(TransitionAgeTrend.build(p, run.transitions()),
                                 run.manifest() == null ? AgeOrigin.ZAMS : run.manifest().ageOrigin())));
             }
@@ -214,8 +215,8 @@ public final class RunMaps {
                     () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track(), run.timeline(o.trackId())))));
             if (Kippenhahn.build(o, t.track(), run.timeline(o.trackId())).hasThinEnvelope()) {
                 entries.add(new MapEntry(ZONES_AGE_DEPTH_FILES + stem, MapEntry.ZONES_AGE, group,
-                        "The same in depth below the surface, -log10(1 - m/M), so the thin convective envelope "
-                                + "shows, " + what + ".",
+                        "The same against \u2212log10(1 \u2212 m/M), surface at the top, so the thin convective "
+                                + "envelope shows, " + what + ".",
                         () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track(), run.timeline(o.trackId())),
                                 ZoneCoordinate.SURFACE_DEPTH)));
             }

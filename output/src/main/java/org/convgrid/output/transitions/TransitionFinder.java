@@ -188,7 +188,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         if (!core.found()) {
             notes.add(cored == usable.size() ? "convective core at every usable mass"
                     : cored == 0 ? "no convective core at any usable mass"
-                    : "no lasting convective core: the highest usable masses have none");
+                    : "no mass above which every star has a convective core: the highest usable masses have none");
         }
         // a clean slice crosses once (no window) or three times (window, then the lasting core)
         int expected = (window == null ? 0 : 2) + (coredAtTop ? 1 : 0);

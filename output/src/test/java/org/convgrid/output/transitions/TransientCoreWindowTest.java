@@ -8,7 +8,10 @@ import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.output.Span;
 import org.junit.jupiter.api.Test;
 
-/** The lasting core onset and the transient window of small cores just above the fully convective limit. */
+/**
+ * The mass above which every star has a convective core, and the transient window of small cores just above the
+ * fully convective limit.
+ */
 class TransientCoreWindowTest {
 
     private static final StructureClass FC = StructureClass.FULLY_CONVECTIVE;
@@ -44,7 +47,8 @@ class TransientCoreWindowTest {
         assertThat(t.convCoreOnset().found()).isFalse();
         assertThat(t.convCoreOnset().massMsun()).isNaN();
         assertThat(t.transientCore()).isEqualTo(new Span(0.35, 0.35));
-        assertThat(t.notes()).contains("no lasting convective core: the highest usable masses have none");
+        assertThat(t.notes()).contains(
+                "no mass above which every star has a convective core: the highest usable masses have none");
     }
 
     @Test

@@ -14,24 +14,31 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
 /**
  * Turns {@link HrDiagramData} into a chart: log Teff on a reversed x axis (hot stars left), log L/Lsun up; one
  * colour per metallicity (zero-age lines, isochrones and models), one marker shape per structure class; evolution
- * tracks (grey) and isochrones labelled with their ages under the models when the run has tracks. XChart
+ * tracks (thin, light grey) and isochrones labelled with their ages (clear of the mass labels and the models) under
+ * the models when the run has tracks. XChart
  * cannot reverse an axis, so the x values are -log Teff and the tick labels drop the sign.
  */
 public final class HrDiagramRenderer {
 
     /** Margin added around the data range, in dex. */
     private static final double PAD_DEX = 0.04;
+    /** Room above the brightest model for the isochrones' age labels, as a share of the luminosity range. */
+    private static final double AGE_LABEL_ROOM_SHARE = 0.1;
+    /** Leader lines from a moved age label to its isochrone's end, pixels. */
+    private static final float LEADER_WIDTH = 1.0f;
     /** Pixel spacing hint for the luminosity ticks (XChart's default gives 0.2 dex steps, too dense). */
     private static final int Y_TICK_SPACING = 90;
-    /** An age label moves down at most this many lines to clear the other labels. */
-    private static final int MAX_LABEL_MOVES = 20;
 
-    /** Track lines: grey, thinner than the isochrones. */
-    private static final java.awt.Color TRACK_GREY = new java.awt.Color(110, 110, 110);
-    private static final float TRACK_WIDTH = 2.0f;
+    /**
+     * Track lines: light grey and a third as wide as the isochrones (1 px against 2, 3 for data lines), so that the
+     * isochrones and the coloured models read first and the tracks as context behind them.
+     */
+    static final java.awt.Color TRACK_GREY = new java.awt.Color(190, 190, 190);
+    static final float TRACK_WIDTH = 1.0f;
     static final String PRE_MAIN_SEQUENCE_LABEL = "pre-main-sequence tracks (dotted)";
+    /** The pre-main-sequence part: the same light grey and width, dotted, so it is told apart without a colour. */
     private static final java.awt.BasicStroke PRE_MAIN_SEQUENCE_STROKE = new java.awt.BasicStroke(TRACK_WIDTH,
-            java.awt.BasicStroke.CAP_ROUND, java.awt.BasicStroke.JOIN_ROUND, 1f, new float[] {2f, 5f}, 0f);
+            java.awt.BasicStroke.CAP_ROUND, java.awt.BasicStroke.JOIN_ROUND, 1f, new float[] {2f, 4f}, 0f);
     /** The legend's class shapes: neutral, since colour stands for Z. */
     private static final java.awt.Color CLASS_LEGEND_GREY = new java.awt.Color(90, 90, 90);
 
@@ -57,7 +64,10 @@ public final class HrDiagramRenderer {
             chart.getStyler().setXAxisMin(-teff.getMax() - PAD_DEX);
             chart.getStyler().setXAxisMax(-teff.getMin() + PAD_DEX);
             chart.getStyler().setYAxisMin(lum.getMin() - 2 * PAD_DEX);
-            chart.getStyler().setYAxisMax(lum.getMax() + 2 * PAD_DEX);
+            // with isochrones, room above the brightest models for their age labels (they all end up there)
+            double labelRoom = data.isochrones().isEmpty() ? 0.0
+                    : AGE_LABEL_ROOM_SHARE * (lum.getMax() - lum.getMin());
+            chart.getStyler().setYAxisMax(lum.getMax() + 2 * PAD_DEX + labelRoom);
         }
         addTracks(chart, data);
         // With isochrones, the youngest one is the zero-age line: drawn once, as an isochrone.
@@ -134,8 +144,8 @@ public final class HrDiagramRenderer {
     }
 
     /**
-     * Tracks in thin grey (they are context for the coloured models), one legend entry for all; the part of a track
-     * before the zero-age main sequence dotted in a brown of our palette, with its own legend entry.
+     * Tracks in thin light grey (they are context for the coloured models and the isochrones), one legend entry for
+     * all; the part of a track before the zero-age main sequence dotted, with its own legend entry.
      */
     private static void addTracks(StyledChart chart, HrDiagramData data) {
         int n = 0;
@@ -147,7 +157,7 @@ public final class HrDiagramRenderer {
                 int end = Math.min(pre + 1, t.logL().size());
                 XYSeries s = line(chart, preShown ? "pre-main-sequence track " + n : PRE_MAIN_SEQUENCE_LABEL,
                         t.logTeff().subList(0, end), t.logL().subList(0, end));
-                s.setLineColor(ChartStyle.PRE_MAIN_SEQUENCE_BROWN);
+                s.setLineColor(TRACK_GREY);
                 s.setLineStyle(PRE_MAIN_SEQUENCE_STROKE);
                 s.setShowInLegend(!preShown);
                 preShown = true;
@@ -172,6 +182,11 @@ public final class HrDiagramRenderer {
         return s;
     }
 
+    /** The brightest model of an isochrone: where its age label goes. */
+    private static HrPoint brightest(HrDiagramData.ZeroAgeLine line) {
+        return line.points().stream().max(java.util.Comparator.comparingDouble(HrPoint::logL)).orElseThrow();
+    }
+
     /** An age for people ({@link SliceLabels#age}: Myr below 1 Gyr, Gyr above). */
     static String age(double ageGyr) {
         return SliceLabels.age(ageGyr);
@@ -191,8 +206,9 @@ public final class HrDiagramRenderer {
 
     /**
      * Isochrones in the colour of their Z (the legend names each Z once), one dash pattern per age (the legend names
-     * each age once, in grey); the isochrones of the middle Z are also labelled with their ages at their brightest
-     * ends, labels stacked so they never overlap.
+     * each age once, in black); the isochrones of the middle Z are also labelled with their ages beside their
+     * brightest ends, each where it covers no mass label, no model marker and no other age label
+     * ({@link LabelPlacement}).
      */
     private static void addIsochrones(StyledChart chart, HrDiagramData data) {
         if (data.isochrones().isEmpty()) {
@@ -201,14 +217,15 @@ public final class HrDiagramRenderer {
         double middleZ = data.metallicities().get(data.metallicities().size() / 2);
         List<HrDiagramData.ZeroAgeLine> middle = data.isochrones().stream().filter(l -> l.zInit() == middleZ)
                 .toList();
-        // legend-only series per age, drawn first under the coloured isochrone at the same points
+        // legend-only series per age, in black (the key is the dash pattern, colour stands for Z), drawn first under
+        // the coloured isochrone at the same points
         for (HrDiagramData.ZeroAgeLine line : middle) {
             XYSeries s = chart.addSeries("isochrone, " + age(line.ageGyr()),
                     line.points().stream().mapToDouble(p -> -p.logTeff()).toArray(),
                     line.points().stream().mapToDouble(HrPoint::logL).toArray());
             s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
             s.setMarker(SeriesMarkers.NONE);
-            s.setLineColor(CLASS_LEGEND_GREY);
+            s.setLineColor(ChartStyle.BLACK);
             s.setLineStyle(ChartStyle.dashed(data.ages().indexOf(line.ageGyr()), 2.0f));
         }
         int n = 0;
@@ -230,37 +247,35 @@ public final class HrDiagramRenderer {
             g.setFont(ChartStyle.ANNOTATION_FONT);
             g.setColor(ChartStyle.BLACK);
             FontMetrics fm = g.getFontMetrics();
-            record Label(String text, double x, double y) {
-            }
-            List<Label> labels = new java.util.ArrayList<>();
-            for (HrDiagramData.ZeroAgeLine line : middle) {
-                HrPoint top = line.points().stream().max(java.util.Comparator.comparingDouble(HrPoint::logL))
-                        .orElseThrow();
-                labels.add(new Label(age(line.ageGyr()), c.getScreenXFromChart(-top.logTeff()) + 10,
-                        c.getScreenYFromChart(top.logL())));
-            }
-            labels.sort(java.util.Comparator.comparingDouble(Label::y));
-            // an age label moves down past the labels already placed, the mass labels included (young isochrones
-            // cross the mass labels of the youngest line)
+            // every mass label and every model marker is taken before the age labels look for room
             List<java.awt.geom.Rectangle2D> taken = new java.util.ArrayList<>();
             data.massLabels().forEach(p -> taken.add(massLabelBox(fm, c, p)));
-            double lastBaseline = Double.NEGATIVE_INFINITY;
-            for (Label l : labels) {
-                double baseline = Math.max(l.y() + fm.getAscent() / 2.0, lastBaseline + fm.getHeight());
-                java.awt.geom.Rectangle2D box;
-                int moves = 0;
-                while (true) {
-                    box = new java.awt.geom.Rectangle2D.Double(l.x(), baseline - fm.getAscent(),
-                            fm.stringWidth(l.text()), fm.getHeight());
-                    java.awt.geom.Rectangle2D here = box;
-                    if (moves++ > MAX_LABEL_MOVES || taken.stream().noneMatch(here::intersects)) {
-                        break;
-                    }
-                    baseline += fm.getHeight();
+            double half = ChartStyle.MARKER_SIZE / 2.0;
+            data.points().forEach(p -> taken.add(new java.awt.geom.Rectangle2D.Double(
+                    c.getScreenXFromChart(-p.logTeff()) - half, c.getScreenYFromChart(p.logL()) - half, 2 * half,
+                    2 * half)));
+            List<HrDiagramData.ZeroAgeLine> brightestFirst = middle.stream().sorted(java.util.Comparator
+                    .comparingDouble((HrDiagramData.ZeroAgeLine l) -> -brightest(l).logL())).toList();
+            List<LabelPlacement.Wanted> wanted = brightestFirst.stream().map(l -> new LabelPlacement.Wanted(
+                    c.getScreenXFromChart(-brightest(l).logTeff()), c.getScreenYFromChart(brightest(l).logL()),
+                    fm.stringWidth(age(l.ageGyr())), fm.getHeight())).toList();
+            double left = c.getScreenXFromChart(c.getStyler().getXAxisMin());
+            double right = c.getScreenXFromChart(c.getStyler().getXAxisMax());
+            double top = c.getScreenYFromChart(c.getStyler().getYAxisMax());
+            double bottom = c.getScreenYFromChart(c.getStyler().getYAxisMin());
+            List<java.awt.geom.Rectangle2D> boxes = LabelPlacement.place(wanted, taken,
+                    new java.awt.geom.Rectangle2D.Double(left, top, right - left, bottom - top));
+            g.setStroke(new java.awt.BasicStroke(LEADER_WIDTH));
+            for (int i = 0; i < boxes.size(); i++) {
+                java.awt.geom.Rectangle2D box = boxes.get(i);
+                LabelPlacement.Wanted w = wanted.get(i);
+                // a label that had to move away from its isochrone's end points back to it
+                java.awt.geom.Point2D from = LabelPlacement.nearestEdgePoint(box, w.x(), w.y());
+                if (from.distance(w.x(), w.y()) > LabelPlacement.GAP_PX + w.height() / 2) {
+                    g.draw(new java.awt.geom.Line2D.Double(from.getX(), from.getY(), w.x(), w.y()));
                 }
-                taken.add(box);
-                g.drawString(l.text(), (float) l.x(), (float) baseline);
-                lastBaseline = baseline;
+                g.drawString(age(brightestFirst.get(i).ageGyr()), (float) box.getX(),
+                        (float) (box.getY() + fm.getAscent()));
             }
         });
     }

@@ -92,7 +92,8 @@ public final class KippenhahnRenderer {
                 }
                 boolean first = shown.contains(kind) && inLegend.add(kind);
                 Color fill = ZoneMapRenderer.fill(kind);
-                XYSeries s = polygon(chart, first ? kind.label() : "zone band " + n++, band, fill, ages, y);
+                XYSeries s = polygon(chart, first ? kind.label() : "zone band " + n++,
+                        band.stream().map(y::drawn).toList(), fill, ages, y);
                 s.setLineColor(fill);
                 s.setLineWidth(1.0f);
                 s.setShowInLegend(first);

@@ -53,6 +53,17 @@ public final class SliceLabels {
     }
 
     /**
+     * A range of transition masses, each end rounded to the stated tolerance ({@link #massToAccuracy}), joined by an
+     * en dash: {@code 0.316\u20130.736}; one mass, {@code 0.287}, when both ends come out alike (a window of small
+     * cores found at a single refinement mass must not read as a range).
+     */
+    public static String massRange(Span masses, double toleranceMsun) {
+        String lo = massToAccuracy(masses.lo(), null, toleranceMsun);
+        String hi = massToAccuracy(masses.hi(), null, toleranceMsun);
+        return lo.equals(hi) ? lo : lo + "\u2013" + hi;
+    }
+
+    /**
      * An age for people: {@code ZAMS} for zero, {@code 150 Myr} below 1 Gyr (young clusters and star-forming
      * regions are spoken of in Myr), else {@code 4.57 Gyr}.
      */

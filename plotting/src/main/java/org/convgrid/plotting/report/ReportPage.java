@@ -239,7 +239,7 @@ public final class ReportPage {
     private static void transitions(StringBuilder b, RunData run) {
         b.append("<h2 id=\"transitions\">Transition masses</h2>\n<table>\n<tr><th>Z</th><th>age / Gyr</th><th>physics</th>"
                 + "<th>fully convective up to / M\u2609</th><th>bracket / M\u2609</th>"
-                + "<th>lasting convective core from / M\u2609</th><th>bracket / M\u2609</th>"
+                + "<th>core in every star above / M\u2609</th><th>bracket / M\u2609</th>"
                 + "<th>small transient cores / M\u2609</th><th>method</th><th>tolerance / M\u2609</th>"
                 + "<th>notes</th></tr>\n");
         for (TransitionRow t : run.transitions()) {
@@ -250,8 +250,7 @@ public final class ReportPage {
             estimate(b, t.convCoreOnset(), t.toleranceMsun());
             Span window = t.transientCore();
             b.append("<td class=\"num\">").append(window == null ? "none"
-                    : SliceLabels.massToAccuracy(window.lo(), null, t.toleranceMsun()) + "\u2013"
-                    + SliceLabels.massToAccuracy(window.hi(), null, t.toleranceMsun())).append("</td>");
+                    : SliceLabels.massRange(window, t.toleranceMsun())).append("</td>");
             b.append("<td>").append(t.method().label()).append("</td><td class=\"num\">")
                     .append(Double.isFinite(t.toleranceMsun()) ? SliceLabels.number(t.toleranceMsun()) : "")
                     .append("</td><td>").append(Html.escape(t.notes())).append("</td></tr>\n");

@@ -42,8 +42,6 @@ public final class ChartStyle {
     public static final Color NO_RESULT_GREY = new Color(200, 200, 200);
     /** Darker neutral grey for masses past the main sequence at the asked age: known, so told apart from failures. */
     public static final Color PAST_MAIN_SEQUENCE_GREY = new Color(120, 120, 120);
-    /** Pre-main-sequence parts of evolution tracks: a warm brown, apart from the series colours and the greys. */
-    public static final Color PRE_MAIN_SEQUENCE_BROWN = new Color(150, 95, 45);
     private static final Color GRID_GREY = new Color(225, 225, 225);
     static final Color TEXT = new Color(25, 25, 25);
 

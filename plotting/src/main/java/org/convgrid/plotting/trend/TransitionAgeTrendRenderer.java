@@ -17,11 +17,11 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  * Turns {@link TransitionAgeTrendData} into a chart: age along x (logarithmic when the ages are all above zero and
  * span a decade or more, as ages from birth do), transition mass up, colour per Z; solid lines with circles for the
  * fully convective limit (before the zero-age main sequence also the mass above which a radiative core has
- * appeared), dashed with diamonds for the lasting core's onset; each bracket a shaded box; refined and grid values
- * are separate series, never joined (grid markers paler); each transient window of small cores a faint dashed box
- * with a square at its middle. With few metallicities every marker carries its mass, rounded to the stated accuracy
- * (the refinement's tolerance, else the bracket). Series are nudged sideways per Z so markers of equal ages stay
- * apart.
+ * appeared), dashed with diamonds for the mass above which every star has a convective core at its age; each bracket
+ * a shaded box; refined and grid values are separate series, never joined (grid markers paler); each transient window
+ * of small cores a faint dashed box with a square at its middle. With few metallicities every marker carries its
+ * mass, rounded to the stated accuracy (the refinement's tolerance, else the bracket). Series are nudged sideways per
+ * Z so markers of equal ages stay apart.
  */
 public final class TransitionAgeTrendRenderer {
 
@@ -78,7 +78,7 @@ public final class TransitionAgeTrendRenderer {
             Color color = ChartStyle.seriesColor(zIndex);
             BracketBands.add(chart, s.points().stream()
                     .map(p -> new BracketBands.At(x(p.ageGyr(), offset, log, range), p.bracket())).toList(), color);
-            XYSeries line = chart.addSeries((fc ? "fully convective limit, Z = " : "lasting core onset, Z = ")
+            XYSeries line = chart.addSeries((fc ? "fully convective limit, Z = " : "core in every star above, Z = ")
                             + SliceLabels.number(s.zInit()) + (refined ? ", refined" : ", grid"),
                     s.points().stream().mapToDouble(p -> x(p.ageGyr(), offset, log, range)).toArray(),
                     s.points().stream().mapToDouble(AgePoint::massMsun).toArray());

@@ -76,7 +76,7 @@ public final class TransitionTrendRenderer {
             BracketBands.add(chart, s.points().stream()
                     .map(p -> new BracketBands.At(nudged(p.zInit(), offset, linear, zMax), p.bracket())).toList(),
                     ChartStyle.seriesColor(ageIndex));
-            XYSeries line = chart.addSeries((fc ? "fully convective limit, " : "lasting core onset, ")
+            XYSeries line = chart.addSeries((fc ? "fully convective limit, " : "core in every star above, ")
                             + SliceLabels.age(s.ageGyr()) + (refined ? ", refined" : ", grid"),
                     x, s.points().stream().mapToDouble(TrendPoint::massMsun).toArray());
             line.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);

@@ -6,6 +6,7 @@ import java.awt.FontMetrics;
 import java.awt.geom.Rectangle2D;
 import java.util.List;
 import org.convgrid.output.Span;
+import org.convgrid.output.transitions.MassRangeText;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.StyledChart;
 
@@ -89,14 +90,19 @@ final class TrendDrawing {
                 2 * half);
     }
 
-    /** Draws the windows as faint boxes with a dashed outline: a range of masses with small cores, not a bracket. */
+    /**
+     * Draws the windows as faint boxes with a dashed outline: a range of masses with small cores, not a bracket. A
+     * window of one mass (a single refinement model had a core) gets no box: a flat box would read as a range, and
+     * the square at its middle already marks the mass.
+     */
     static void windows(StyledChart chart, List<Window> windows, Color color) {
-        if (windows.isEmpty()) {
+        List<Window> ranges = windows.stream().filter(w -> !MassRangeText.isOneMass(w.masses())).toList();
+        if (ranges.isEmpty()) {
             return;
         }
         Color fill = new Color(color.getRed(), color.getGreen(), color.getBlue(), WINDOW_ALPHA);
         chart.addOverlay((g, c) -> {
-            for (Window w : windows) {
+            for (Window w : ranges) {
                 double x = c.getScreenXFromChart(w.x());
                 double top = c.getScreenYFromChart(w.masses().hi());
                 double bottom = c.getScreenYFromChart(w.masses().lo());

@@ -15,7 +15,8 @@ public record TransitionMarker(Kind kind, double massMsun, Span bracket, double 
     /** The two transitions of transitions.csv (README, "Transition masses"). */
     public enum Kind {
         FULLY_CONVECTIVE_LIMIT("fully convective limit", "fully convective\nup to "),
-        CONV_CORE_ONSET("lasting convective core onset", "lasting convective\ncore from ");
+        /** The lowest mass above which every star of the slice has a convective core at its age. */
+        CONV_CORE_ONSET("core in every star above", "core in every star\nabove ");
 
         private final String label;
         private final String legendPrefix;
@@ -25,7 +26,11 @@ public record TransitionMarker(Kind kind, double massMsun, Span bracket, double 
             this.legendPrefix = legendPrefix;
         }
 
-        /** A two-line legend entry ending with the given mass text. */
+        /**
+         * A two-line legend entry ending with the given mass text. The first line is the longer one: XChart
+         * indents the lines of a two-line entry, and a longer second line ran past the legend box and the image's
+         * right edge ("core from 1.188 M\u2609", demo, Z = 0.02, 600 Myr).
+         */
         public String legendLabel(String mass) {
             return legendPrefix + mass;
         }

@@ -2,9 +2,9 @@ package org.convgrid.plotting.zones;
 
 /** The vertical coordinate of a zone map. */
 public enum ZoneAxis {
-    /** Mass coordinate m/M, from the catalogue's {@code conv_zones_mass_frac}. */
+    /** Mass coordinate m/M: each zone of zones.csv from {@code mass_frac_inner} to {@code mass_frac_outer}. */
     MASS_FRACTION("m/M (mass coordinate over total mass)", "mass"),
-    /** Radius coordinate r/R, from the envelope base radius (or profile files when present). */
+    /** Radius coordinate r/R: each zone of zones.csv from {@code radius_frac_inner} to {@code radius_frac_outer}. */
     RADIUS_FRACTION("r/R (radius over stellar radius)", "radius");
 
     private final String title;

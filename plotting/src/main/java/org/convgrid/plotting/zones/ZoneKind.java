@@ -1,6 +1,8 @@
 package org.convgrid.plotting.zones;
 
-/** What a shaded rectangle of a zone map stands for, told apart by where the zone lies; declaration order is legend order. */
+import org.convgrid.output.catalogue.CatalogueZone;
+
+/** What a shaded rectangle of a zone map stands for, as zones.csv names the zone (or by where it lies); declaration order is legend order. */
 public enum ZoneKind {
     /** The zone spans the whole star (centre to surface). */
     WHOLE_STAR("fully convective star"),
@@ -8,7 +10,10 @@ public enum ZoneKind {
     ENVELOPE("convective envelope"),
     /** The zone starts at the centre. */
     CORE("convective core"),
-    /** A detached convective shell, touching neither centre nor surface. */
+    /**
+     * A convective shell: detached from centre and surface, or, as zones.csv counts them, a central zone below the
+     * run's core threshold or a surface zone too thin to be an envelope.
+     */
     SHELL("convective shell"),
     /** The asked age lies past core-hydrogen exhaustion at this mass: a known outcome, not a failure. */
     PAST_MAIN_SEQUENCE("past the main sequence"),
@@ -29,7 +34,20 @@ public enum ZoneKind {
         return label;
     }
 
-    /** The kind of a convective interval [lo, hi] in a fractional coordinate. */
+    /** The kind zones.csv gives a zone (its {@code zone_kind}), so that every map names a zone as the files do. */
+    public static ZoneKind of(CatalogueZone.ZoneKind listed) {
+        return switch (listed) {
+            case WHOLE_STAR -> WHOLE_STAR;
+            case ENVELOPE -> ENVELOPE;
+            case CORE -> CORE;
+            case SHELL -> SHELL;
+        };
+    }
+
+    /**
+     * The kind of a convective interval [lo, hi] in m/M, by where it lies: for track steps, whose zone files do not
+     * name the kind.
+     */
     public static ZoneKind of(double lo, double hi) {
         boolean centre = lo <= EDGE_TOLERANCE;
         boolean surface = hi >= 1.0 - EDGE_TOLERANCE;

@@ -8,6 +8,7 @@ import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.catalogue.CatalogueZone;
 import org.convgrid.output.transitions.Slice;
 import org.convgrid.output.transitions.TransitionEstimate;
 import org.convgrid.output.transitions.TransitionRow;
@@ -17,21 +18,23 @@ import org.convgrid.output.transitions.TransitionRow;
  *
  * <p>Each model owns a column of the mass axis that runs between the geometric midpoints to its neighbours (the
  * axis is logarithmic, so the column is centred on the model there); the outermost columns are as wide on their
- * open side as on the other. Every convective interval of a usable model (status ok) becomes one rectangle over
- * that column; a model past the main sequence gets a full-height PAST_MAIN_SEQUENCE column and any other model without a
- * usable result a NO_RESULT one, so that a gap is never
- * mistaken for a radiative star.
+ * open side as on the other. Every convective zone of a usable model (status ok) becomes one rectangle over
+ * that column, of the kind zones.csv gives it; a model past the main sequence gets a full-height PAST_MAIN_SEQUENCE
+ * column and any other model without a usable result a NO_RESULT one, so that a gap is never mistaken for a
+ * radiative star.
  *
- * <p>In m/M the intervals are the catalogue's {@code conv_zones_mass_frac}. In r/R the catalogue only has the
- * envelope base radius: the envelope is drawn from {@code env_cz_base_radius_frac} to 1, a fully convective star
- * from 0 to 1, and cores and shells, whose radii the catalogue does not hold, are left out with a note, unless
- * the caller passes the model's intervals in r/R read from its profile file.
+ * <p>Both maps draw the same zones, those zones.csv lists: in m/M from {@code mass_frac_inner} to
+ * {@code mass_frac_outer}, in r/R from {@code radius_frac_inner} to {@code radius_frac_outer} (cores and shells
+ * included). Only a model whose zones zones.csv does not list although its structure class says it has some (a run
+ * directory without zones.csv) falls back, in r/R, to its profile file when there is one, else to the catalogue's
+ * core and envelope columns, and the map says that its shells are not drawn.
  */
 public final class ZoneMap {
 
-    /** Note shown on an r/R map that leaves out cores or shells. */
-    public static final String CORE_RADIUS_NOTE =
-            "Core radius not in catalogue: convective cores and shells are not drawn (write profiles to see them).";
+    /** Note shown on an r/R map that drew some model from the catalogue's columns, for want of its zones.csv rows. */
+    public static final String NO_ZONE_LIST_NOTE =
+            "Some models have no rows in zones.csv: their convective shells are not drawn (cores and envelopes are "
+                    + "from the catalogue).";
 
     private ZoneMap() {
     }
@@ -44,8 +47,8 @@ public final class ZoneMap {
     /**
      * A map in r/R.
      *
-     * @param radiusZonesById convective intervals in r/R by model id, from profile files; models missing here fall
-     *     back to what the catalogue supports
+     * @param radiusZonesById convective intervals in r/R by model id, from profile files: used only for a model whose
+     *     zones zones.csv does not list (see the class comment)
      */
     public static ZoneMapData inRadius(Slice slice, List<CatalogueRow> rows, TransitionRow transitions,
                                        Map<String, List<Span>> radiusZonesById) {
@@ -70,34 +73,54 @@ public final class ZoneMap {
                                 : ZoneKind.NO_RESULT));
                 continue;
             }
-            List<Span> zones;
-            if (axis == ZoneAxis.MASS_FRACTION) {
-                zones = row.convZones();
-            } else if (radiusZonesById.containsKey(row.modelId())) {
-                zones = radiusZonesById.get(row.modelId());
+            if (axis == ZoneAxis.MASS_FRACTION || !zoneListMissing(row)) {
+                for (CatalogueZone z : row.zones()) {
+                    Span extent = axis == ZoneAxis.MASS_FRACTION ? new Span(z.massFracInner(), z.massFracOuter())
+                            : new Span(z.radiusFracInner(), z.radiusFracOuter());
+                    rects.add(new ZoneRect(row.modelId(), row.massMsun(), edges[i], edges[i + 1], extent.lo(),
+                            extent.hi(), ZoneKind.of(z.kind())));
+                }
             } else {
-                zones = radiusZonesFromCatalogue(row);
-                omitted |= zones.size() < row.convZones().size();
-            }
-            for (Span z : zones) {
-                rects.add(new ZoneRect(row.modelId(), row.massMsun(), edges[i], edges[i + 1], z.lo(), z.hi(),
-                        ZoneKind.of(z.lo(), z.hi())));
+                List<Span> fallback = radiusZonesById.containsKey(row.modelId())
+                        ? radiusZonesById.get(row.modelId()) : radiusZonesFromCatalogue(row);
+                omitted |= !radiusZonesById.containsKey(row.modelId());
+                for (Span z : fallback) {
+                    rects.add(new ZoneRect(row.modelId(), row.massMsun(), edges[i], edges[i + 1], z.lo(),
+                            z.hi(), ZoneKind.of(z.lo(), z.hi())));
+                }
             }
         }
         return new ZoneMapData(slice, axis, rects, markers(transitions), edges[0], edges[edges.length - 1],
-                omitted ? List.of(CORE_RADIUS_NOTE) : List.of());
+                omitted ? List.of(NO_ZONE_LIST_NOTE) : List.of());
     }
 
-    /** What the catalogue supports in r/R: the whole star when fully convective, else the envelope only. */
+    /**
+     * Whether zones.csv left this usable model's zones out: it lists none although the structure class says the
+     * star has a convective zone (a run directory without zones.csv). A radiative star rightly has none.
+     */
+    static boolean zoneListMissing(CatalogueRow row) {
+        return row.zones().isEmpty() && row.structureClass() != null
+                && row.structureClass() != StructureClass.RADIATIVE;
+    }
+
+    /**
+     * What the catalogue's columns give in r/R: the whole star when fully convective, else the core (up to
+     * {@code core_cz_radius_frac}) and the envelope (from {@code env_cz_base_radius_frac}); shells it does not hold.
+     */
     static List<Span> radiusZonesFromCatalogue(CatalogueRow row) {
-        boolean whole = row.structureClass() == StructureClass.FULLY_CONVECTIVE
-                || row.convZones().size() == 1 && ZoneKind.of(row.convZones().get(0).lo(),
-                row.convZones().get(0).hi()) == ZoneKind.WHOLE_STAR;
-        if (whole) {
+        if (row.structureClass() == StructureClass.FULLY_CONVECTIVE) {
             return List.of(new Span(0.0, 1.0));
         }
+        List<Span> zones = new ArrayList<>(2);
+        double core = row.coreCzRadiusFrac();
+        if (Double.isFinite(core) && core > 0.0) {
+            zones.add(new Span(0.0, Math.min(core, 1.0)));
+        }
         double base = row.envCzBaseRadiusFrac();
-        return Double.isFinite(base) && base < 1.0 ? List.of(new Span(Math.max(base, 0.0), 1.0)) : List.of();
+        if (Double.isFinite(base) && base < 1.0) {
+            zones.add(new Span(Math.max(base, 0.0), 1.0));
+        }
+        return zones;
     }
 
     /**

@@ -23,6 +23,28 @@ class ZoneCoordinateTest {
     }
 
     @Test
+    void onTheDepthAxisAZoneThatReachesTheSurfaceIsDrawnToTheTop() {
+        ZoneCoordinate depth = ZoneCoordinate.SURFACE_DEPTH;
+        // the demo's 1.2 Msun track at birth: one zone up to the outermost mesh point, m/M = 0.9999996
+        AgeRect wholeStar = new AgeRect(0, 0.0, 1.2e-6, 0.0, 0.9999996);
+        assertThat(depth.of(wholeStar.hi())).isCloseTo(6.4, within(0.01));
+        assertThat(depth.of(depth.drawn(wholeStar).hi())).isEqualTo(ZoneCoordinate.DEPTH_TOP);
+        AgeRect envelope = new AgeRect(1, 0.1, 0.2, 0.99, 0.9999996);
+        assertThat(depth.of(depth.drawn(envelope).hi())).isEqualTo(ZoneCoordinate.DEPTH_TOP);
+        assertThat(depth.drawn(envelope).lo()).isEqualTo(0.99);
+        // a shell below the surface and every zone in m/M are drawn where they are
+        AgeRect shell = new AgeRect(2, 0.1, 0.2, 0.9, 0.99);
+        assertThat(depth.drawn(shell)).isEqualTo(shell);
+        assertThat(ZoneCoordinate.MASS_FRACTION.drawn(envelope)).isEqualTo(envelope);
+    }
+
+    @Test
+    void theDepthAxisSaysWhichWayIsOut() {
+        assertThat(ZoneCoordinate.SURFACE_DEPTH.title())
+                .isEqualTo("\u2212log10(1 \u2212 m/M), surface at the top");
+    }
+
+    @Test
     void massFractionIsTheIdentity() {
         assertThat(ZoneCoordinate.MASS_FRACTION.of(0.37)).isEqualTo(0.37);
     }

@@ -25,4 +25,12 @@ class MassWithinTest {
         assertThat(SliceLabels.massToAccuracy(0.35, new Span(0.35, 0.4), 0.002)).isEqualTo("0.35");
         assertThat(SliceLabels.massToAccuracy(0.3, new Span(0.3, 0.4), Double.NaN)).isEqualTo("0.3");
     }
+
+    @Test
+    void aWindowWithEqualEndsIsOneMassNotARange() {
+        // the demo's Z = 0.008, 150 Myr slice: the only cored refinement model, 0.2875 Msun, is both ends
+        assertThat(SliceLabels.massRange(new Span(0.2875, 0.2875), 0.002)).isEqualTo("0.287");
+        assertThat(SliceLabels.massRange(new Span(0.315625, 0.7359375), 0.002)).isEqualTo("0.316\u20130.736");
+        assertThat(SliceLabels.massRange(new Span(0.45, 0.45), Double.NaN)).isEqualTo("0.45");
+    }
 }

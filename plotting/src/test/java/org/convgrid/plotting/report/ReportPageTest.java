@@ -7,7 +7,13 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+import java.util.Map;
+import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.transitions.TransitionFinder;
+import org.convgrid.output.transitions.TransitionMethod;
+import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.plotting.RunData;
 import org.convgrid.plotting.RunMaps;
 import org.convgrid.plotting.TestRuns;
 import org.convgrid.plotting.TestTracks;
@@ -59,6 +65,19 @@ class ReportPageTest {
         Files.delete(dir.resolve("manifest.yaml"));
         String html = Files.readString(ReportPage.write(dir));
         assertThat(html).doesNotContain("<img").contains("Not drawn yet", "manifest.yaml not found");
+    }
+
+    @Test
+    void transitionTableNamesTheCoreMassPlainlyAndGivesAOneMassWindowAsOneMass(@TempDir Path dir) throws Exception {
+        List<CatalogueRow> rows = TestRuns.rows(TestRuns.masses(0.2, 1.4, 5), new double[] {0.014}, new double[] {0});
+        TransitionRow found = TransitionFinder.withDefaults().find(rows).get(0);
+        // the demo's Z = 0.008, 150 Myr slice: one refinement model, 0.2875 Msun, is both ends of the window
+        TransitionRow oneMassWindow = new TransitionRow(found.slice(), found.yInit(), found.fullyConvective(),
+                found.convCoreOnset(), new Span(0.2875, 0.2875), TransitionMethod.REFINED, 0.002, "");
+        RunData run = new RunData(rows, List.of(oneMassWindow), true, null, Map.of(), List.of());
+        String html = ReportPage.html(run, dir);
+        assertThat(html).contains("<th>core in every star above / M\u2609</th>", "<td class=\"num\">0.287</td>")
+                .doesNotContain("0.287\u20130.287", "lasting");
     }
 
     @Test

@@ -8,6 +8,7 @@ import java.util.Map;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.catalogue.CatalogueZone;
 import org.convgrid.output.transitions.Slice;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionRow;
@@ -77,31 +78,73 @@ class ZoneMapTest {
     }
 
     @Test
-    void radiusMapDrawsOnlyWhatTheCatalogueSupportsAndSaysSo() {
-        TransitionRow t = transitions.get(1);
-        ZoneMapData map = ZoneMap.inRadius(t.slice(), rows, t, Map.of());
-        assertThat(map.axis()).isEqualTo(ZoneAxis.RADIUS_FRACTION);
-        assertThat(map.notes()).containsExactly(ZoneMap.CORE_RADIUS_NOTE);
-        assertThat(map.rects()).extracting(ZoneRect::kind).doesNotContain(ZoneKind.CORE, ZoneKind.SHELL);
-        CatalogueRow sunLike = rows.stream().filter(r -> Slice.of(r).equals(t.slice()) && r.massMsun() == 1.0)
-                .findFirst().orElseThrow();
-        assertThat(map.rects().stream().filter(z -> z.modelId().equals(sunLike.modelId())))
-                .singleElement().satisfies(z -> {
-                    assertThat(z.lo()).isEqualTo(sunLike.envCzBaseRadiusFrac());
-                    assertThat(z.hi()).isEqualTo(1.0);
-                    assertThat(z.kind()).isEqualTo(ZoneKind.ENVELOPE);
-                });
+    void radiusMapDrawsEveryZoneOfTheZoneListCoresAndShellsIncluded() {
+        for (TransitionRow t : transitions) {
+            ZoneMapData map = ZoneMap.inRadius(t.slice(), rows, t, Map.of());
+            assertThat(map.axis()).isEqualTo(ZoneAxis.RADIUS_FRACTION);
+            assertThat(map.notes()).isEmpty();
+            for (CatalogueRow r : rows.stream().filter(r -> Slice.of(r).equals(t.slice()) && r.isOk()).toList()) {
+                assertThat(map.rects().stream().filter(z -> z.modelId().equals(r.modelId()))
+                        .map(z -> new Span(z.lo(), z.hi())).toList()).as(r.modelId()).isEqualTo(r.zones().stream()
+                        .map(z -> new Span(z.radiusFracInner(), z.radiusFracOuter())).toList());
+            }
+        }
+        // the synthetic run has cores above ~1.1 Msun: the r/R map must show them, not only envelopes
+        TransitionRow solar = transitions.stream().filter(t -> t.slice().zInit() == 0.014).findFirst().orElseThrow();
+        assertThat(ZoneMap.inRadius(solar.slice(), rows, solar, Map.of()).rects()).extracting(ZoneRect::kind)
+                .contains(ZoneKind.CORE, ZoneKind.ENVELOPE, ZoneKind.WHOLE_STAR);
     }
 
     @Test
-    void radiusMapPrefersProfileZonesAndThenNeedsNoNote() {
+    void bothMapsNameAZoneAsTheZoneListDoes() {
+        // a central zone below the core threshold and a thin surface zone are shells in zones.csv (README, "Zones"),
+        // whatever their position suggests; an envelope may end a hair below r/R = 1
+        CatalogueRow base = rows.stream().filter(r -> r.isOk() && r.massMsun() == 1.0).findFirst().orElseThrow();
+        CatalogueRow listed = base.withZones(List.of(
+                new CatalogueZone(CatalogueZone.ZoneKind.SHELL, 0.0, 0.0002, 0.0, 0.02),
+                new CatalogueZone(CatalogueZone.ZoneKind.ENVELOPE, 0.97, 1.0, 0.72, 0.999995)));
+        Slice slice = Slice.of(listed);
+        for (ZoneMapData map : List.of(ZoneMap.inMass(slice, List.of(listed), null),
+                ZoneMap.inRadius(slice, List.of(listed), null, Map.of()))) {
+            assertThat(map.rects()).extracting(ZoneRect::kind).as(map.axis().stem())
+                    .containsExactly(ZoneKind.SHELL, ZoneKind.ENVELOPE);
+        }
+    }
+
+    @Test
+    void aZoneKindTooThinToSeeLeavesTheLegendForANote() {
+        CatalogueRow base = rows.stream().filter(r -> r.isOk() && r.massMsun() == 1.0).findFirst().orElseThrow();
+        // a central shell below the core threshold holds under a thousandth of the mass: no pixel in m/M
+        CatalogueRow tiny = base.withZones(List.of(
+                new CatalogueZone(CatalogueZone.ZoneKind.SHELL, 0.0, 0.0002, 0.0, 0.02),
+                new CatalogueZone(CatalogueZone.ZoneKind.ENVELOPE, 0.97, 1.0, 0.72, 1.0)));
+        var inMass = ZoneMapRenderer.render(ZoneMap.inMass(Slice.of(tiny), List.of(tiny), null));
+        assertThat(inMass.getSeriesMap()).containsKey(ZoneKind.ENVELOPE.label())
+                .doesNotContainKey(ZoneKind.SHELL.label());
+        // in r/R the same shell is 0.02 of the radius: drawn and in the legend
+        var inRadius = ZoneMapRenderer.render(ZoneMap.inRadius(Slice.of(tiny), List.of(tiny), null, Map.of()));
+        assertThat(inRadius.getSeriesMap()).containsKey(ZoneKind.SHELL.label());
+        assertThat(ZoneMapRenderer.tooThinNote(ZoneKind.SHELL)).contains("convective shells", "too thin");
+    }
+
+    @Test
+    void aModelTheZoneListLeavesOutFallsBackToItsProfileThenToTheCatalogueAndSaysSo() {
         TransitionRow t = transitions.get(1);
-        List<CatalogueRow> slice = rows.stream().filter(r -> Slice.of(r).equals(t.slice()) && r.isOk()).toList();
+        List<CatalogueRow> unlisted = rows.stream().map(r -> r.withZones(List.of())).toList();
+        List<CatalogueRow> slice = unlisted.stream().filter(r -> Slice.of(r).equals(t.slice()) && r.isOk()).toList();
         Map<String, List<Span>> fromProfiles = new java.util.HashMap<>();
         slice.forEach(r -> fromProfiles.put(r.modelId(), List.of(new Span(0, 0.1), new Span(0.8, 1))));
-        ZoneMapData map = ZoneMap.inRadius(t.slice(), rows, t, fromProfiles);
-        assertThat(map.notes()).isEmpty();
-        assertThat(map.rects().stream().filter(z -> z.kind() == ZoneKind.CORE)).hasSize(slice.size());
+        ZoneMapData profiled = ZoneMap.inRadius(t.slice(), unlisted, t, fromProfiles);
+        assertThat(profiled.notes()).isEmpty();
+        assertThat(profiled.rects().stream().filter(z -> z.kind() == ZoneKind.CORE)).hasSize(slice.size());
+
+        ZoneMapData fromColumns = ZoneMap.inRadius(t.slice(), unlisted, t, Map.of());
+        assertThat(fromColumns.notes()).containsExactly(ZoneMap.NO_ZONE_LIST_NOTE);
+        CatalogueRow cored = slice.stream().filter(r -> Double.isFinite(r.coreCzRadiusFrac())
+                && Double.isFinite(r.envCzBaseRadiusFrac())).findFirst().orElseThrow();
+        assertThat(fromColumns.rects().stream().filter(z -> z.modelId().equals(cored.modelId()))
+                .map(z -> new Span(z.lo(), z.hi())).toList())
+                .containsExactly(new Span(0.0, cored.coreCzRadiusFrac()), new Span(cored.envCzBaseRadiusFrac(), 1.0));
     }
 
     @Test

@@ -21,6 +21,7 @@ import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.manifest.RunManifest;
 import org.convgrid.output.manifest.RunManifestReader;
 import org.convgrid.output.manifest.RunManifestWriter;
+import org.convgrid.output.transitions.MassRangeText;
 import org.convgrid.output.transitions.RefinedModelIds;
 import org.convgrid.output.transitions.Slice;
 import org.convgrid.output.transitions.TransitionEstimate;
@@ -166,8 +167,10 @@ public final class TransitionTables {
                 moved("fully convective limit", old.fullyConvective(), row.fullyConvective(), all);
                 moved("convective core onset", old.convCoreOnset(), row.convCoreOnset(), all);
                 if (old.transientCore() == null && row.transientCore() != null) {
-                    all.add("the window of small transient cores " + row.transientCore() + " Msun lies between grid "
-                            + "masses: only the refinement models found it");
+                    // one mass when a single refinement model found the cores: "at 0.2875", not "0.2875-0.2875"
+                    all.add("the window of small transient cores " + (MassRangeText.isOneMass(row.transientCore())
+                            ? "at " : "") + MassRangeText.of(row.transientCore()) + " Msun lies between grid masses: "
+                            + "only the refinement models found it");
                 }
             }
             out.add(row.withNotes(String.join("; ", all)));
@@ -222,8 +225,8 @@ public final class TransitionTables {
     private static void moved(String what, TransitionEstimate before, TransitionEstimate after, List<String> notes) {
         if (before.found() && after.found() && (after.bracket().lo() < before.bracket().lo()
                 || after.bracket().hi() > before.bracket().hi())) {
-            notes.add(what + " lies outside the grid bracket " + before.bracket() + " Msun: the refinement "
-                    + "models found a crossing between grid masses that the grid had missed");
+            notes.add(what + " lies outside the grid bracket " + MassRangeText.of(before.bracket())
+                    + " Msun: the refinement models found a crossing between grid masses that the grid had missed");
         }
     }
 
