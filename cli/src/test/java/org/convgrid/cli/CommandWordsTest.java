@@ -1,0 +1,51 @@
+package org.convgrid.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.convgrid.output.RunLayout;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The words of messages, help texts and warnings that a practitioner read and found wrong or missing. */
+class CommandWordsTest {
+
+    /** The grid's axes without physics, one model: 1 Msun at Z = 0.014 on the zero-age main sequence. */
+    private static final String ONE_MODEL = """
+            mass: {values: [1.0]}
+            metallicity: {z: 0.014, y: 0.27}
+            age: {gyr: [0], origin: zams}
+            """;
+
+    @TempDir
+    Path work;
+
+    private CliHarness cli() {
+        return CliHarness.in(work, FakeChunkSolver.fast());
+    }
+
+    /** Help text with its line wrapping undone, so that phrases can be looked for whole. */
+    private String help(String... args) {
+        CliHarness.Execution help = cli().execute(args);
+        assertThat(help.code()).isZero();
+        return help.out().replaceAll("\\s+", " ");
+    }
+
+    @Test
+    void aNegativeOvershootIsNamedAsTheUserWroteIt() throws Exception {
+        Path plain = CliHarness.writeGrid(work, "plain.yaml", ONE_MODEL + "physics:\n  overshoot: -1\n");
+        CliHarness.Execution check = cli().execute("check", plain.toString());
+        assertThat(check.code()).isEqualTo(2);
+        // the key as written, at its value's line and column; not the mapping form's 'length_hp'
+        assertThat(check.err()).contains(plain + ":5:14: overshoot must lie in").doesNotContain("length_hp");
+        Path mapped = CliHarness.writeGrid(work, "mapped.yaml",
+                ONE_MODEL + "physics:\n  overshoot: {profile: decaying, length_hp: -1}\n");
+        check = cli().execute("check", mapped.toString());
+        assertThat(check.code()).isEqualTo(2);
+        assertThat(check.err()).contains(mapped + ":5:45: overshoot length_hp must lie in");
+    }
+}
