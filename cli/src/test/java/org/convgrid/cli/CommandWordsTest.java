@@ -48,4 +48,25 @@ class CommandWordsTest {
         assertThat(check.code()).isEqualTo(2);
         assertThat(check.err()).contains(mapped + ":5:45: overshoot length_hp must lie in");
     }
+
+    @Test
+    void theReadmeSampleGridSaysThatHeliumOrYIsRequired() throws Exception {
+        // the README's grid, as a user copies it: it must be valid, and say what the parser requires
+        String readme = Files.readString(Path.of("..", "README.md"));
+        Matcher block = Pattern.compile("### A grid file\n```yaml\n(.*?)```", Pattern.DOTALL).matcher(readme);
+        assertThat(block.find()).as("README has a sample grid").isTrue();
+        String sample = block.group(1);
+        String heliumLine = sample.lines().filter(l -> l.strip().startsWith("helium:")).findFirst().orElseThrow();
+        assertThat(heliumLine).contains("required").contains("y: [");
+        Path grid = CliHarness.writeGrid(work, "sample.yaml", sample);
+        CliHarness.Execution check = cli().execute("check", grid.toString());
+        assertThat(check.code()).as(check.err()).isZero();
+        // without helium the parser refuses it: README's word "required" is the parser's
+        Path noHelium = CliHarness.writeGrid(work, "no-helium.yaml",
+                sample.lines().filter(l -> !l.strip().startsWith("helium:")).reduce("", (a, l) -> a + l + "\n"));
+        check = cli().execute("check", noHelium.toString());
+        assertThat(check.code()).isEqualTo(2);
+        assertThat(check.err()).contains("metallicity needs exactly one of 'helium'").contains("'y'");
+        assertThat(readme).contains("`metallicity` needs `z` and exactly one of `helium`");
+    }
 }
