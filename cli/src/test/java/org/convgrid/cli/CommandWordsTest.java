@@ -69,4 +69,16 @@ class CommandWordsTest {
         assertThat(check.err()).contains("metallicity needs exactly one of 'helium'").contains("'y'");
         assertThat(readme).contains("`metallicity` needs `z` and exactly one of `helium`");
     }
+
+    @Test
+    void calibrateSunRefusesAnAgeBelowOneMyr() {
+        for (String age : List.of("0.0005", "0", "-1", "NaN")) {
+            CliHarness.Execution calibrate = cli().execute("calibrate-sun", "--age-gyr", age,
+                    "--preset", "sun.yaml");
+            assertThat(calibrate.code()).as(age).isEqualTo(2);
+            assertThat(calibrate.err()).as(age).contains("--age-gyr must lie in [0.001, 13] Gyr")
+                    .contains("got " + Double.parseDouble(age));
+        }
+        assertThat(work.resolve("sun.yaml")).doesNotExist();
+    }
 }
