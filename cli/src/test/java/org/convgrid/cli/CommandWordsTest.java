@@ -81,4 +81,16 @@ class CommandWordsTest {
         }
         assertThat(work.resolve("sun.yaml")).doesNotExist();
     }
+
+    @Test
+    void starGivesAgesBelowOneGyrInMyr() {
+        CliHarness.Execution young = cli().execute("star", "--mass", "1", "--z", "0.02", "--age-gyr", "0.15",
+                "--age-origin", "zams");
+        assertThat(young.code()).as(young.err()).isZero();
+        assertThat(young.out()).startsWith("Model at 150 Myr since the zero-age main sequence:");
+        CliHarness.Execution old = cli().execute("star", "--mass", "1", "--z", "0.02", "--age-gyr", "1",
+                "--age-origin", "zams");
+        assertThat(old.code()).as(old.err()).isZero();
+        assertThat(old.out()).startsWith("Model at 1 Gyr since the zero-age main sequence:");
+    }
 }
