@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
+import org.convgrid.cli.run.Counts;
 import org.convgrid.cli.run.Durations;
 import org.convgrid.cli.run.ProgressReporter;
 import org.convgrid.engine.batch.ChunkSolver;
@@ -137,13 +138,13 @@ final class RunCommand implements Callable<Integer> {
                 throw tracks.failure();
             }
             double seconds = (System.nanoTime() - start) * 1e-9;
-            parent.out().println(dir.root() + ": " + result.run().catalogue().size() + " models in "
+            parent.out().println(dir.root() + ": " + Counts.of(result.run().catalogue().size(), "model") + " in "
                     + RunLayout.CATALOGUE + " (" + describe(result.counts()) + "); " + result.computed()
                     + " computed now in " + Durations.describe(refined == null ? seconds : sweepSeconds));
             if (refined != null) {
                 long failedNew = refined.added().stream().filter(o -> o.status() != ModelStatus.OK).count();
                 parent.out().println(dir.transitions() + ": transitions refined to " + transitions.toleranceMsun()
-                        + " Msun with " + refined.added().size() + " new model(s)"
+                        + " Msun with " + Counts.of(refined.added().size(), "new model")
                         + (failedNew > 0 ? " (" + failedNew + " not ok)" : "") + " in "
                         + Durations.describe(seconds - sweepSeconds));
             }
@@ -170,12 +171,13 @@ final class RunCommand implements Callable<Integer> {
     }
 
     private static String startLine(GridRun.Plan plan, long gridCount, int threads) {
-        StringBuilder line = new StringBuilder("computing ").append(plan.remaining()).append(" models");
+        StringBuilder line = new StringBuilder("computing ").append(Counts.of(plan.remaining(), "model"));
         if (plan.shard().count() > 1) {
             line.append(" (shard ").append(plan.shard().index()).append('/').append(plan.shard().count())
                     .append(": ").append(plan.owned()).append(" of the grid's ").append(gridCount).append(')');
         }
-        line.append(" on ").append(threads).append(" thread(s) into ").append(plan.settings().directory().root());
+        line.append(" on ").append(Counts.of(threads, "thread")).append(" into ")
+                .append(plan.settings().directory().root());
         if (!plan.kept().ids().isEmpty()) {
             line.append("; ").append(plan.kept().ids().size()).append(" already in the catalogue");
         }

@@ -93,4 +93,32 @@ class CommandWordsTest {
         assertThat(old.code()).as(old.err()).isZero();
         assertThat(old.out()).startsWith("Model at 1 Gyr since the zero-age main sequence:");
     }
+
+    @Test
+    void oneModelAndOneThreadAreSingular() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "one.yaml", ONE_MODEL);
+        CliHarness.Execution check = cli().execute("check", grid.toString(), "--threads", "1");
+        assertThat(check.out()).contains(" on 1 thread for these models").doesNotContain("thread(s)");
+        CliHarness.Execution run = cli().execute("run", grid.toString(), "--threads", "1");
+        assertThat(run.code()).as(run.err()).isZero();
+        assertThat(run.err()).contains("computing 1 model on 1 thread into ");
+        assertThat(run.out()).contains(": 1 model in " + RunLayout.CATALOGUE + " (");
+        CliHarness.Execution two = cli().execute("run", grid.toString(), "--threads", "2", "--force", "--quiet");
+        assertThat(two.code()).as(two.err()).isZero();
+        assertThat(cli().execute("check", grid.toString(), "--threads", "2").out()).contains(" on 2 threads for");
+    }
+
+    @Test
+    void checkSaysNoRefinementIsExpectedWhenTheMassStepIsWithinTheTolerance() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "fine.yaml", """
+                mass: {from: 1.0, to: 1.01, step: 0.001}
+                metallicity: {z: 0.014, y: 0.27}
+                age: {gyr: [0], origin: zams}
+                transitions: {tolerance_msun: 0.002}
+                """);
+        CliHarness.Execution check = cli().execute("check", grid.toString());
+        assertThat(check.code()).as(check.err()).isZero();
+        assertThat(check.out()).contains("refinement:    none expected (the grid's mass step, 0.001 Msun at the "
+                + "median, is already within the tolerance of 0.002 Msun)").doesNotContain("0 halvings");
+    }
 }
