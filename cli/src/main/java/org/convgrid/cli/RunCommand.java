@@ -90,6 +90,7 @@ final class RunCommand implements Callable<Integer> {
             throw new UsageException("--resume and --force exclude each other");
         }
         GridFile file = GridFiles.read(grid, context);
+        TestedRange.print(TestedRange.warnings(file.spec()), parent.err());
         long count = file.spec().count();
         if (count > LARGE_GRID_MODELS && !yes) {
             throw new UsageException("the grid asks for " + count + " models, more than " + LARGE_GRID_MODELS

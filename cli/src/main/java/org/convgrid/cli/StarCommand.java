@@ -120,6 +120,7 @@ final class StarCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         PhysicsOptions options = options();
+        Age age = age();
         double y = helium != null ? helium : HeliumLaw.DEFAULT.helium(metals);
         if (!(y >= MIN_HELIUM && y <= MAX_HELIUM)) {
             throw new UsageException("--y must lie in [" + MIN_HELIUM + ", " + MAX_HELIUM + "] (helium mass "
@@ -129,8 +130,9 @@ final class StarCommand implements Callable<Integer> {
         if (profile != null) {
             OutputTargets.requireWritableFile("--profile", main.context().resolve(profile));
         }
+        TestedRange.print(TestedRange.warnings(massMsun, metals, age), main.err());
         String id = String.format(java.util.Locale.ROOT, "star-m%.4f-z%.5f", massMsun, metals);
-        ModelRequest request = new ModelRequest(id, massMsun * Constants.M_SUN, metals, y, age(), options);
+        ModelRequest request = new ModelRequest(id, massMsun * Constants.M_SUN, metals, y, age, options);
         Composition composition = request.age().origin() == AgeOrigin.BIRTH
                 ? BirthAbundances.of(1.0 - y - metals, metals) : ZeroAgeRequests.initialComposition(request);
         GridRequests.Answer answer = new GridRequests(StarTrackSink.NONE, MainSequenceEvolver.Settings.DEFAULT)
