@@ -11,7 +11,6 @@ import org.convgrid.engine.calibration.SolarCalibration;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.output.AtomicFiles;
-import org.convgrid.output.RunLayout;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParentCommand;
@@ -50,8 +49,13 @@ final class CalibrateSunCommand implements Callable<Integer> {
     double metalsToHydrogen;
 
     @Option(names = "--format", defaultValue = "table", paramLabel = "table|csv",
-            description = "table (readable) or csv (header and one row: mixing_length, y_init, z_init, the "
-                    + "catalogue columns, zams_luminosity_lsun, ms_lifetime_gyr). Default ${DEFAULT-VALUE}.")
+            description = "table (readable) or csv: a header row and one row of mixing_length, y_init, z_init (the "
+                    + "calibrated values), then the catalogue columns of the calibrated model (model_id to "
+                    + "solver_iterations and any after them), then "
+                    + SolarCalibrationReport.ZAMS_LUMINOSITY_LSUN + " (Lsun), "
+                    + SolarCalibrationReport.MS_LIFETIME_GYR + " (Gyr), " + SolarCalibrationReport.Z_OVER_X_INIT
+                    + ", " + SolarCalibrationReport.Y_SURFACE + " and " + SolarCalibrationReport.Z_OVER_X_SURFACE
+                    + " (the envelope at the Sun's age). Default ${DEFAULT-VALUE}.")
     OutputFormat format;
 
     @Option(names = "--atmosphere", defaultValue = "krishna_swamy", paramLabel = "eddington|krishna_swamy",

@@ -34,8 +34,13 @@ import picocli.CommandLine.ParentCommand;
 
 /** {@code convgrid run GRID.yaml}: sweeps a grid into a run directory, resumable and shardable. */
 @Command(name = "run", mixinStandardHelpOptions = true,
-        description = {"Compute every model of a grid and write a run directory: catalogue.ecsv (grown row by row in "
-                + "grid order), zones.csv, transitions.csv and manifest.yaml.",
+        description = {"Compute every model of a grid and write a run directory: " + RunLayout.CATALOGUE + " (one "
+                + "row per model, grown row by row in grid order), " + RunLayout.ZONES + " (one row per convective "
+                + "zone), " + RunLayout.TRANSITIONS + " (transition masses per Z, age and physics), "
+                + RunLayout.LIFE_EVENTS + " (ages from birth: when each star's life changes), " + RunLayout.TRACKS
+                + "/ (one CSV per star evolved beyond age 0), " + RunLayout.PROFILES + "/ (one CSV per model, "
+                + "with output: profiles: true), " + RunLayout.MAPS + "/ (PNG charts), " + RunLayout.REPORT
+                + " (one page with the charts and tables) and " + RunLayout.MANIFEST + " (provenance).",
             "Exit codes: 0 all models ok, 3 some models failed or did not converge (they are in the catalogue with "
                 + "their status), 2 bad grid file or usage, 1 I/O or software failure."})
 final class RunCommand implements Callable<Integer> {

@@ -90,7 +90,10 @@ final class StarCommand implements Callable<Integer> {
     double opacityScale;
 
     @Option(names = "--opacity-table", paramLabel = "FILE",
-            description = "Use this opacity table (convgrid table layout, see README) instead of the built-in OPAL-corrected analytic one.")
+            description = "Use this opacity table (convgrid table layout, see README) instead of the built-in "
+                    + "ones: the OPAL GN93 tables (Iglesias & Rogers 1996), joined below log T 4.5 to the "
+                    + "low-temperature tables of Ferguson et al. 2005, with analytic terms beyond both and electron "
+                    + "conduction added.")
     Path opacityTable;
 
     @Option(names = "--atmosphere", defaultValue = "krishna_swamy", paramLabel = "eddington|krishna_swamy",

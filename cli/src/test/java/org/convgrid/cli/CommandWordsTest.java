@@ -121,4 +121,30 @@ class CommandWordsTest {
         assertThat(check.out()).contains("refinement:    none expected (the grid's mass step, 0.001 Msun at the "
                 + "median, is already within the tolerance of 0.002 Msun)").doesNotContain("0 halvings");
     }
+
+    @Test
+    void theHelpTextsSayWhatPractitionersAsked() {
+        assertThat(help("--help")).contains("Ages count from birth by default, so young ages cover the "
+                + "pre-main sequence");
+        String run = help("run", "--help");
+        for (String output : List.of(RunLayout.CATALOGUE, RunLayout.ZONES, RunLayout.TRANSITIONS,
+                RunLayout.LIFE_EVENTS, RunLayout.TRACKS + "/", RunLayout.PROFILES + "/", RunLayout.MAPS + "/",
+                RunLayout.REPORT, RunLayout.MANIFEST)) {
+            assertThat(run).as(output).contains(output);
+        }
+        // the built-in opacity: OpalGn93Opacity.shipped(), the OPAL GN93 tables joined to Ferguson et al. 2005's
+        assertThat(help("star", "--help")).contains("OPAL GN93 tables (Iglesias & Rogers 1996)")
+                .contains("low-temperature tables of Ferguson et al. 2005");
+        String calibrate = help("calibrate-sun", "--help");
+        assertThat(calibrate).contains("from 0.001 to 13.0");
+        for (String column : List.of("mixing_length", "y_init", "z_init", "model_id", "solver_iterations")) {
+            assertThat(calibrate).contains(column);
+        }
+        for (String column : SolarCalibrationReport.csvHeader().subList(3 + org.convgrid.output.catalogue
+                .CatalogueColumns.HEADER.size(), SolarCalibrationReport.csvHeader().size())) {
+            assertThat(calibrate).as(column).contains(column);
+        }
+        assertThat(help("check", "--help")).contains("every key known").contains("within its range")
+                .contains("the run directory writable").contains("outside the range convgrid is tested in");
+    }
 }
