@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import org.convgrid.cli.run.GridSummary;
 import org.convgrid.engine.calibration.CalibratedSun;
 import org.convgrid.engine.calibration.CalibrationSettings;
 import org.convgrid.engine.calibration.SolarCalibration;
@@ -26,11 +27,19 @@ final class CalibrateSunCommand implements Callable<Integer> {
     /** Oldest age accepted, Gyr (older than the Universe is not a Sun). */
     static final double MAX_AGE_GYR = 13.0;
 
+    /**
+     * Youngest age accepted, Gyr: 1 Myr after the zero-age main sequence. A younger "Sun" has not left its zero-age
+     * model, which is no calibration of the Sun; such an age is a slip (Myr typed for Gyr, a lost decimal) that
+     * would otherwise cost a minute of evolutions before anyone noticed.
+     */
+    static final double MIN_AGE_GYR = 0.001;
+
     @ParentCommand
     ConvgridMain main;
 
     @Option(names = "--age-gyr", defaultValue = "4.57", paramLabel = "A",
-            description = "Age of the Sun since the zero-age main sequence, Gyr, in (0, 13] (default ${DEFAULT-VALUE}).")
+            description = "Age of the Sun since the zero-age main sequence, Gyr, from " + MIN_AGE_GYR + " to "
+                    + MAX_AGE_GYR + " (default ${DEFAULT-VALUE}).")
     double ageGyr;
 
     @Option(names = "--z-over-x", defaultValue = "0.0245", paramLabel = "RATIO",
@@ -40,8 +49,13 @@ final class CalibrateSunCommand implements Callable<Integer> {
     double metalsToHydrogen;
 
     @Option(names = "--format", defaultValue = "table", paramLabel = "table|csv",
-            description = "table (readable) or csv (header and one row: mixing_length, y_init, z_init, the "
-                    + "catalogue columns, zams_luminosity_lsun, ms_lifetime_gyr). Default ${DEFAULT-VALUE}.")
+            description = "table (readable) or csv: a header row and one row of mixing_length, y_init, z_init (the "
+                    + "calibrated values), then the catalogue columns of the calibrated model (model_id to "
+                    + "solver_iterations and any after them), then "
+                    + SolarCalibrationReport.ZAMS_LUMINOSITY_LSUN + " (Lsun), "
+                    + SolarCalibrationReport.MS_LIFETIME_GYR + " (Gyr), " + SolarCalibrationReport.Z_OVER_X_INIT
+                    + ", " + SolarCalibrationReport.Y_SURFACE + " and " + SolarCalibrationReport.Z_OVER_X_SURFACE
+                    + " (the envelope at the Sun's age). Default ${DEFAULT-VALUE}.")
     OutputFormat format;
 
     @Option(names = "--atmosphere", defaultValue = "krishna_swamy", paramLabel = "eddington|krishna_swamy",
@@ -60,8 +74,10 @@ final class CalibrateSunCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        if (!(ageGyr > 0 && ageGyr <= MAX_AGE_GYR)) {
-            throw new UsageException("--age-gyr must lie in (0, " + MAX_AGE_GYR + "] Gyr, got " + ageGyr);
+        if (!(ageGyr >= MIN_AGE_GYR && ageGyr <= MAX_AGE_GYR)) {
+            throw new UsageException("--age-gyr must lie in [" + GridSummary.n(MIN_AGE_GYR) + ", "
+                    + GridSummary.n(MAX_AGE_GYR) + "] Gyr (the Sun's age since the zero-age main sequence, 4.57 by "
+                    + "default), got " + ageGyr);
         }
         if (!(metalsToHydrogen > 0 && metalsToHydrogen < 0.1)) {
             throw new UsageException("--z-over-x must lie in (0, 0.1), got " + metalsToHydrogen);

@@ -16,8 +16,14 @@ import picocli.CommandLine.ParentCommand;
 
 /** {@code convgrid check GRID.yaml}: validates a grid file and describes what it would run; computes nothing. */
 @Command(name = "check", mixinStandardHelpOptions = true,
-        description = {"Validate a grid file and print its axes, how many models it expands to and a rough run time.",
-            "Runs nothing. Problems are printed as file:line:column: message (exit code 2)."})
+        description = {"Validate a grid file without computing anything: every key known (misspelt or renamed keys "
+                + "are named), every value of the right type and within its range (masses, Z, Y with Y + Z < 1, "
+                + "ages and their origin, physics options), the opacity table and preset files it names readable, "
+                + "and the run directory writable. Masses, Z and ages from birth outside the range convgrid is tested "
+                + "in get a warning on stderr, not an error.",
+            "Then prints the grid's axes, how many models it expands to and rough run times of the sweep and of the "
+                + "transition refinement. Problems are printed one per line, all at once, as file:line:column: message "
+                + "(exit code 2)."})
 final class CheckCommand implements Callable<Integer> {
 
     @ParentCommand
@@ -38,6 +44,7 @@ final class CheckCommand implements Callable<Integer> {
         Path runDir = context.resolve(Path.of(file.spec().outputDir()));
         // the same refusal as 'run' gives, so a grid that passes check does not fail at the start of run
         OutputTargets.requireWritableDirectory("the run directory (output dir)", runDir);
+        TestedRange.print(TestedRange.warnings(file.spec()), parent.err());
         Optional<RunManifest> earlier = new RunDirectory(runDir).measuredRun();
         RunTimeEstimate estimate = earlier.isPresent()
                 ? RunTimeEstimate.measured(file.spec(), earlier.get().medianSecondsPerModel(), n, runDir.toString())

@@ -11,8 +11,11 @@ import picocli.CommandLine.Option;
  * than named in the annotation, so that a process running one of them builds picocli's model of that one only.
  */
 @Command(name = "convgrid", mixinStandardHelpOptions = true, versionProvider = ToolVersion.class,
-        description = "Where convection operates inside main-sequence stars, across a grid of mass, "
-                + "metallicity and age.")
+        description = {"Where convection operates inside pre-main-sequence and main-sequence stars, across a grid "
+                + "of mass, metallicity and age.",
+            "Ages count from birth by default, so young ages cover the pre-main sequence (the contraction to the "
+                + "zero-age main sequence) as well as the main sequence; 'origin: zams' in a grid file or "
+                + "'star --age-origin zams' counts them from the zero-age main sequence instead."})
 public final class ConvgridMain implements Runnable {
 
     /** The subcommands, in the order the usage lists them. */

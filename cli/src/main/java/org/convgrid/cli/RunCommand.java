@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
+import org.convgrid.cli.run.Counts;
 import org.convgrid.cli.run.Durations;
 import org.convgrid.cli.run.ProgressReporter;
 import org.convgrid.engine.batch.ChunkSolver;
@@ -34,8 +35,13 @@ import picocli.CommandLine.ParentCommand;
 
 /** {@code convgrid run GRID.yaml}: sweeps a grid into a run directory, resumable and shardable. */
 @Command(name = "run", mixinStandardHelpOptions = true,
-        description = {"Compute every model of a grid and write a run directory: catalogue.ecsv (grown row by row in "
-                + "grid order), zones.csv, transitions.csv and manifest.yaml.",
+        description = {"Compute every model of a grid and write a run directory: " + RunLayout.CATALOGUE + " (one "
+                + "row per model, grown row by row in grid order), " + RunLayout.ZONES + " (one row per convective "
+                + "zone), " + RunLayout.TRANSITIONS + " (transition masses per Z, age and physics), "
+                + RunLayout.LIFE_EVENTS + " (ages from birth: when each star's life changes), " + RunLayout.TRACKS
+                + "/ (one CSV per star evolved beyond age 0), " + RunLayout.PROFILES + "/ (one CSV per model, "
+                + "with output: profiles: true), " + RunLayout.MAPS + "/ (PNG charts), " + RunLayout.REPORT
+                + " (one page with the charts and tables) and " + RunLayout.MANIFEST + " (provenance).",
             "Exit codes: 0 all models ok, 3 some models failed or did not converge (they are in the catalogue with "
                 + "their status), 2 bad grid file or usage, 1 I/O or software failure, 130 interrupted (Ctrl-C or "
                 + "SIGTERM: the catalogue keeps its complete rows; continue with --resume)."})
@@ -95,6 +101,7 @@ final class RunCommand implements Callable<Integer> {
             throw new UsageException("--resume and --force exclude each other");
         }
         GridFile file = GridFiles.read(grid, context);
+        TestedRange.print(TestedRange.warnings(file.spec()), parent.err());
         long count = file.spec().count();
         if (count > LARGE_GRID_MODELS && !yes) {
             throw new UsageException("the grid asks for " + count + " models, more than " + LARGE_GRID_MODELS
@@ -147,13 +154,13 @@ final class RunCommand implements Callable<Integer> {
                 throw tracks.failure();
             }
             double seconds = (System.nanoTime() - start) * 1e-9;
-            parent.out().println(dir.root() + ": " + result.run().catalogue().size() + " models in "
+            parent.out().println(dir.root() + ": " + Counts.of(result.run().catalogue().size(), "model") + " in "
                     + RunLayout.CATALOGUE + " (" + describe(result.counts()) + "); " + result.computed()
                     + " computed now in " + Durations.describe(refined == null ? seconds : sweepSeconds));
             if (refined != null) {
                 long failedNew = refined.added().stream().filter(o -> o.status() != ModelStatus.OK).count();
                 parent.out().println(dir.transitions() + ": transitions refined to " + transitions.toleranceMsun()
-                        + " Msun with " + refined.added().size() + " new model(s)"
+                        + " Msun with " + Counts.of(refined.added().size(), "new model")
                         + (failedNew > 0 ? " (" + failedNew + " not ok)" : "") + " in "
                         + Durations.describe(seconds - sweepSeconds));
             }
@@ -199,12 +206,13 @@ final class RunCommand implements Callable<Integer> {
     }
 
     private static String startLine(GridRun.Plan plan, long gridCount, int threads) {
-        StringBuilder line = new StringBuilder("computing ").append(plan.remaining()).append(" models");
+        StringBuilder line = new StringBuilder("computing ").append(Counts.of(plan.remaining(), "model"));
         if (plan.shard().count() > 1) {
             line.append(" (shard ").append(plan.shard().index()).append('/').append(plan.shard().count())
                     .append(": ").append(plan.owned()).append(" of the grid's ").append(gridCount).append(')');
         }
-        line.append(" on ").append(threads).append(" thread(s) into ").append(plan.settings().directory().root());
+        line.append(" on ").append(Counts.of(threads, "thread")).append(" into ")
+                .append(plan.settings().directory().root());
         if (!plan.kept().ids().isEmpty()) {
             line.append("; ").append(plan.kept().ids().size()).append(" already in the catalogue");
         }

@@ -90,7 +90,10 @@ final class StarCommand implements Callable<Integer> {
     double opacityScale;
 
     @Option(names = "--opacity-table", paramLabel = "FILE",
-            description = "Use this opacity table (convgrid table layout, see README) instead of the built-in OPAL-corrected analytic one.")
+            description = "Use this opacity table (convgrid table layout, see README) instead of the built-in "
+                    + "ones: the OPAL GN93 tables (Iglesias & Rogers 1996), joined below log T 4.5 to the "
+                    + "low-temperature tables of Ferguson et al. 2005, with analytic terms beyond both and electron "
+                    + "conduction added.")
     Path opacityTable;
 
     @Option(names = "--atmosphere", defaultValue = "krishna_swamy", paramLabel = "eddington|krishna_swamy",
@@ -120,6 +123,7 @@ final class StarCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         PhysicsOptions options = options();
+        Age age = age();
         double y = helium != null ? helium : HeliumLaw.DEFAULT.helium(metals);
         if (!(y >= MIN_HELIUM && y <= MAX_HELIUM)) {
             throw new UsageException("--y must lie in [" + MIN_HELIUM + ", " + MAX_HELIUM + "] (helium mass "
@@ -129,8 +133,9 @@ final class StarCommand implements Callable<Integer> {
         if (profile != null) {
             OutputTargets.requireWritableFile("--profile", main.context().resolve(profile));
         }
+        TestedRange.print(TestedRange.warnings(massMsun, metals, age), main.err());
         String id = String.format(java.util.Locale.ROOT, "star-m%.4f-z%.5f", massMsun, metals);
-        ModelRequest request = new ModelRequest(id, massMsun * Constants.M_SUN, metals, y, age(), options);
+        ModelRequest request = new ModelRequest(id, massMsun * Constants.M_SUN, metals, y, age, options);
         Composition composition = request.age().origin() == AgeOrigin.BIRTH
                 ? BirthAbundances.of(1.0 - y - metals, metals) : ZeroAgeRequests.initialComposition(request);
         GridRequests.Answer answer = new GridRequests(StarTrackSink.NONE, MainSequenceEvolver.Settings.DEFAULT)

@@ -10,7 +10,7 @@ import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.units.Constants;
-import org.convgrid.cli.run.GridSummary;
+import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.catalogue.OutcomeRows;
 
@@ -24,9 +24,10 @@ final class StarReport {
         var r = outcome.request();
         String title;
         if (r.age() instanceof Age.SinceBirth since) {
-            title = "Model at " + GridSummary.n(since.seconds() / Constants.GYR) + " Gyr since birth";
+            title = "Model at " + SliceLabels.age(since.seconds() / Constants.GYR) + " since birth";
         } else if (r.age() instanceof Age.SinceZeroAge since && since.seconds() > 0.0) {
-            title = "Model at " + GridSummary.n(since.seconds() / Constants.GYR) + " Gyr since the zero-age main "
+            // below 1 Gyr in Myr, as the charts and the report give ages: a young star's "0.15 Gyr" read oddly
+            title = "Model at " + SliceLabels.age(since.seconds() / Constants.GYR) + " since the zero-age main "
                     + "sequence";
         } else {
             title = "Zero-age model";

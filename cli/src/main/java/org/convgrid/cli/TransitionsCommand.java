@@ -4,6 +4,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
+import org.convgrid.cli.run.Counts;
 import org.convgrid.cli.run.Durations;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.output.RunLayout;
@@ -106,10 +107,10 @@ final class TransitionsCommand implements Callable<Integer> {
         }
         long refined = update.transitions().stream().filter(t -> t.method() == TransitionMethod.REFINED).count();
         long failed = update.added().stream().filter(o -> o.status() != ModelStatus.OK).count();
-        StringBuilder line = new StringBuilder(dir.transitions() + ": " + update.transitions().size() + " slice(s)");
+        StringBuilder line = new StringBuilder(dir.transitions() + ": " + Counts.of(update.transitions().size(), "slice"));
         if (refine) {
-            line.append(", ").append(refined).append(" refined; ").append(update.searches()).append(" bisection(s), ")
-                    .append(update.added().size()).append(" new model(s) in ").append(RunLayout.CATALOGUE)
+            line.append(", ").append(refined).append(" refined; ").append(Counts.of(update.searches(), "bisection")).append(", ")
+                    .append(Counts.of(update.added().size(), "new model")).append(" in ").append(RunLayout.CATALOGUE)
                     .append(failed > 0 ? " (" + failed + " not ok)" : "").append(" in ")
                     .append(Durations.describe((System.nanoTime() - start) * 1e-9));
         }

@@ -47,7 +47,7 @@ class RealSolverTransitionsTest {
         assertThat(done.code()).as(done.err()).isZero();
         // the sweep and the refinement each say how long they took, the refinement on its own line
         assertThat(done.out()).containsPattern("computed now in \\d+ s")
-                .containsPattern("transitions refined to [0-9.]+ Msun with \\d+ new model\\(s\\) in \\d+ s");
+                .containsPattern("transitions refined to [0-9.]+ Msun with \\d+ new models in \\d+ s");
         return work.resolve(out);
     }
 

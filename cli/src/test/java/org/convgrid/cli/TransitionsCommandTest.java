@@ -97,7 +97,7 @@ class TransitionsCommandTest {
         assertThat(added.subList(0, 10)).extracting(CatalogueRow::massMsun).isSorted();
         assertThat(RunManifestReader.read(Files.readString(dir.resolve("manifest.yaml"))).total())
                 .isEqualTo(CliHarness.GRID_MODELS + added.size());
-        assertThat(done.out()).contains("4 refined; 8 bisection(s), 40 new model(s)");
+        assertThat(done.out()).contains("4 refined; 8 bisections, 40 new models");
     }
 
     @Test

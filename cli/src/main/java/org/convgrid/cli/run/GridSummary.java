@@ -48,10 +48,10 @@ public final class GridSummary {
                     + p.criterion().name().toLowerCase(Locale.ROOT) + ", opacity x" + n(p.opacityScale()));
         }
         lines.add("models:        " + g.count());
-        lines.add("estimate:      about " + Durations.describe(estimate.seconds()) + " on " + threads
-                + " thread(s) for these models, at " + estimate.basis());
+        lines.add("estimate:      about " + Durations.describe(estimate.seconds()) + " on "
+                + Counts.of(threads, "thread") + " for these models, at " + estimate.basis());
         lines.add(refinement.models() == 0 ? "refinement:    " + refinement.basis()
-                : "refinement:    about " + refinement.models() + " new models after them to narrow the transition"
+                : "refinement:    about " + Counts.of(refinement.models(), "new model") + " after them to narrow the transition"
                         + " masses, about " + Durations.describe(refinement.seconds()) + " more ("
                         + refinement.basis() + "; run --no-refine skips them)");
         lines.add("run directory: " + runDirectory);

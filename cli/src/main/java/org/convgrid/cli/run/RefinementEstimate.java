@@ -83,12 +83,18 @@ public record RefinementEstimate(long models, double seconds, String basis) {
         Collections.sort(gaps);
         double medianGap = gaps.get(gaps.size() / 2);
         double tolerance = grid.transitions().toleranceMsun();
-        long halvings = medianGap <= tolerance ? 0 : (long) Math.ceil(Math.log(medianGap / tolerance) / Math.log(2.0));
+        if (medianGap <= tolerance) {
+            // said "0 halvings of a ... bracket each" before: true, but the reader had to work out what it meant
+            return none("none expected (the grid's mass step, " + GridSummary.n(RunTimeEstimate.twoDigits(medianGap))
+                    + " Msun at the median, is already within the tolerance of " + GridSummary.n(tolerance)
+                    + " Msun)");
+        }
+        long halvings = (long) Math.ceil(Math.log(medianGap / tolerance) / Math.log(2.0));
         long slices = (long) grid.metallicities().size() * grid.ages().values().size() * grid.physics().size();
         long models = Math.round(slices * SEARCHES_PER_SLICE * halvings);
         double perModel = modelSeconds(grid);
         return new RefinementEstimate(models, models * perModel / threads, GridSummary.n(SEARCHES_PER_SLICE)
-                + " searches per (Z, age, physics) slice, " + halvings + " halvings of a "
+                + " searches per (Z, age, physics) slice, " + Counts.of(halvings, "halving") + " of a "
                 + GridSummary.n(RunTimeEstimate.twoDigits(medianGap)) + " Msun bracket each, about " + GridSummary.n(perModel)
                 + " s per model");
     }

@@ -63,7 +63,10 @@ final class PhysicsReader {
         }
         Node overshoot = fields.value("overshoot");
         OvershootScheme scheme = OvershootScheme.STEP;
+        // messages name the key the user wrote: the plain number is 'overshoot', the mapping's is its 'length_hp'
+        String overshootKey = "overshoot";
         if (overshoot instanceof MappingNode overshootMap) {
+            overshootKey = "overshoot length_hp";
             MappingFields profile = new MappingFields(overshootMap, "overshoot", OVERSHOOT_KEYS, reader);
             scheme = profile.has("profile") ? overshootProfile(profile.value("profile"), reader)
                     : OvershootScheme.STEP;
@@ -75,7 +78,7 @@ final class PhysicsReader {
             }
         }
         List<Double> overshoots = overshoot != null
-                ? AxisValues.distinct(overshoot, "overshoot length_hp", NON_NEGATIVE, reader)
+                ? AxisValues.distinct(overshoot, overshootKey, NON_NEGATIVE, reader)
                 : fields.has("overshoot") ? null : List.of(d.overshoot());
         List<StabilityCriterion> criteria = fields.has("criterion")
                 ? criteria(fields.value("criterion"), reader)

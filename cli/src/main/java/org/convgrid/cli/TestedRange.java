@@ -1,0 +1,115 @@
+package org.convgrid.cli;
+
+import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.DoublePredicate;
+import java.util.stream.Collectors;
+import org.convgrid.cli.run.GridSummary;
+import org.convgrid.engine.request.Age;
+import org.convgrid.engine.request.AgeOrigin;
+import org.convgrid.engine.units.Constants;
+import org.convgrid.grids.GridSpec;
+
+/**
+ * The masses, metallicities and ages convgrid's models are tested in (README, "Good for / not for": every track of
+ * 0.1-10 Msun at Z = 1e-4 to 0.04 finishes from birth to core-hydrogen exhaustion; ages from birth below 0.1 Myr
+ * depend on the start model). Outside it the tool still computes, so {@code check}, {@code run} and {@code star}
+ * print a warning on stderr, one line per kind, even with {@code --quiet}: never an error, and the exit code stays
+ * what the models make it. The range is kept here alone; the README states the same.
+ */
+final class TestedRange {
+
+    static final double MIN_MASS_MSUN = 0.1;
+    static final double MAX_MASS_MSUN = 10.0;
+    static final double MIN_Z = 1e-4;
+    static final double MAX_Z = 0.04;
+    /** Younger ages from birth show the start model's details more than the star's. */
+    static final double MIN_BIRTH_AGE_MYR = 0.1;
+
+    /** Values listed one by one up to this many; more are given as a count and a span. */
+    static final int LISTED_VALUES = 6;
+
+    /** Relative slack at the edges: a mass axis stepped to 10 Msun may end on 10.000000000000002. */
+    private static final double EDGE_SLACK = 1e-9;
+
+    private static final double MYR_PER_GYR = 1000.0;
+
+    private TestedRange() {
+    }
+
+    /** The warnings for a grid: its masses, its Z and, when they count from birth, its ages. */
+    static List<String> warnings(GridSpec grid) {
+        List<Double> birthAgesMyr = grid.ages().origin() == AgeOrigin.BIRTH && !grid.ages().fractions()
+                ? grid.ages().values().stream().map(gyr -> gyr * MYR_PER_GYR).toList() : List.of();
+        return warnings(grid.massesMsun(), grid.metallicities().stream().map(p -> p.z()).toList(), birthAgesMyr);
+    }
+
+    /** The warnings for one star; only an age from birth can be too young. */
+    static List<String> warnings(double massMsun, double z, Age age) {
+        List<Double> birthAgesMyr = age instanceof Age.SinceBirth since
+                ? List.of(since.seconds() / Constants.GYR * MYR_PER_GYR) : List.of();
+        return warnings(List.of(massMsun), List.of(z), birthAgesMyr);
+    }
+
+    /**
+     * @param massesMsun total masses, Msun
+     * @param zs initial metal mass fractions
+     * @param birthAgesMyr ages counted from birth, Myr (none for ages from the zero-age main sequence)
+     * @return one line per kind of value outside the range, none when all lie inside
+     */
+    static List<String> warnings(List<Double> massesMsun, List<Double> zs, List<Double> birthAgesMyr) {
+        List<String> lines = new ArrayList<>();
+        List<Double> masses = outside(massesMsun, m -> m >= MIN_MASS_MSUN * (1 - EDGE_SLACK)
+                && m <= MAX_MASS_MSUN * (1 + EDGE_SLACK));
+        if (!masses.isEmpty()) {
+            lines.add(line(masses, "mass", "masses", "", " Msun", "outside the tested range "
+                    + GridSummary.n(MIN_MASS_MSUN) + "-" + GridSummary.n(MAX_MASS_MSUN) + " Msun"));
+        }
+        List<Double> metals = outside(zs, z -> z >= MIN_Z * (1 - EDGE_SLACK) && z <= MAX_Z * (1 + EDGE_SLACK));
+        if (!metals.isEmpty()) {
+            lines.add(line(metals, "metallicity", "metallicities", "Z = ", "", "outside the tested range Z = "
+                    + GridSummary.n(MIN_Z) + " to " + GridSummary.n(MAX_Z)));
+        }
+        List<Double> young = outside(birthAgesMyr, a -> a >= MIN_BIRTH_AGE_MYR * (1 - EDGE_SLACK));
+        if (!young.isEmpty()) {
+            lines.add(line(young, "age", "ages", "", " Myr from birth", "below the tested "
+                    + GridSummary.n(MIN_BIRTH_AGE_MYR) + " Myr (there they depend on the pre-main-sequence start "
+                    + "model)"));
+        }
+        return lines;
+    }
+
+    /** Prints the warnings on the error stream, each as one line. */
+    static void print(List<String> warnings, PrintWriter err) {
+        for (String warning : warnings) {
+            err.println(warning);
+        }
+        err.flush();
+    }
+
+    private static List<Double> outside(List<Double> values, DoublePredicate tested) {
+        return values.stream().filter(v -> !tested.test(v)).toList();
+    }
+
+    /**
+     * "mass 12 Msun lies", "masses 0.05, 12 Msun lie", or for many "12 masses, 10.5 to 16 Msun, lie"; then where
+     * they lie.
+     */
+    private static String line(List<Double> values, String noun, String nouns, String symbol, String unit,
+                               String where) {
+        String what;
+        if (values.size() == 1) {
+            what = noun + " " + symbol + GridSummary.n(values.get(0)) + unit + " lies";
+        } else if (values.size() <= LISTED_VALUES) {
+            what = nouns + " " + symbol + values.stream().map(GridSummary::n).collect(Collectors.joining(", "))
+                    + unit + " lie";
+        } else {
+            double lo = values.stream().mapToDouble(Double::doubleValue).min().orElseThrow();
+            double hi = values.stream().mapToDouble(Double::doubleValue).max().orElseThrow();
+            what = values.size() + " " + nouns + ", " + symbol + GridSummary.n(lo) + " to " + GridSummary.n(hi)
+                    + unit + ", lie";
+        }
+        return "convgrid: warning: " + what + " " + where + "; results there are untested";
+    }
+}

@@ -1,0 +1,83 @@
+package org.convgrid.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Warnings, never errors, for masses, Z and ages from birth outside the range the models are tested in (README,
+ * "Good for / not for").
+ */
+class TestedRangeTest {
+
+    /** Two masses, one Z and one age outside the range, beside values inside it. */
+    private static final String OUTSIDE = """
+            mass: {values: [0.05, 1.0, 12.0]}
+            metallicity: {z: [0.0, 0.02], y: [0.25, 0.27]}
+            age: {myr: [0.05, 20]}
+            """;
+
+    @TempDir
+    Path work;
+
+    @Test
+    void checkWarnsOncePerKindNamingTheValuesAndExitsAsBefore() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "outside.yaml", OUTSIDE);
+        CliHarness.Execution check = CliHarness.in(work, FakeChunkSolver.fast()).execute("check", grid.toString());
+        assertThat(check.code()).as(check.err()).isZero();
+        assertThat(check.err().lines().filter(l -> l.startsWith("convgrid: warning: ")).toList()).containsExactly(
+                "convgrid: warning: masses 0.05, 12 Msun lie outside the tested range 0.1-10 Msun; results there "
+                        + "are untested",
+                "convgrid: warning: metallicity Z = 0 lies outside the tested range Z = 0.0001 to 0.04; results "
+                        + "there are untested",
+                "convgrid: warning: age 0.05 Myr from birth lies below the tested 0.1 Myr (there they depend on "
+                        + "the pre-main-sequence start model); results there are untested");
+        assertThat(check.out()).contains("models:        12");
+    }
+
+    @Test
+    void runWarnsEvenWhenQuiet() throws Exception {
+        // zero-age models (ages from the ZAMS are never too young), which the fake solver answers: exit 0 as before
+        Path grid = CliHarness.writeGrid(work, "outside.yaml",
+                OUTSIDE.replace("age: {myr: [0.05, 20]}", "age: {gyr: [0], origin: zams}"));
+        CliHarness.Execution run = CliHarness.in(work, FakeChunkSolver.fast())
+                .execute("run", grid.toString(), "--quiet", "--no-refine", "--threads", "1");
+        assertThat(run.code()).as(run.out() + run.err()).isZero();
+        assertThat(run.err().lines().filter(l -> l.startsWith("convgrid: warning: "))).hasSize(2);
+    }
+
+    @Test
+    void starWarnsOfItsMetallicityAndKeepsItsExitCode() {
+        CliHarness.Execution star = CliHarness.in(work, FakeChunkSolver.fast())
+                .execute("star", "--mass", "1", "--z", "0.05", "--format", "csv");
+        assertThat(star.code()).as(star.err()).isZero();
+        assertThat(star.err()).contains("convgrid: warning: metallicity Z = 0.05 lies outside the tested range");
+        assertThat(star.out()).doesNotContain("warning");
+    }
+
+    @Test
+    void theEdgesAreInsideAndEveryValueIsListedOrSpanned() {
+        assertThat(TestedRange.warnings(List.of(0.1, 10.000000000000002), List.of(1e-4, 0.04), List.of(0.1)))
+                .isEmpty();
+        List<Double> heavy = List.of(11.0, 12.0, 13.0, 14.0, 15.0, 16.0, 17.0);
+        assertThat(TestedRange.warnings(heavy, List.of(0.02), List.of())).containsExactly("convgrid: warning: "
+                + "7 masses, 11 to 17 Msun, lie outside the tested range 0.1-10 Msun; results there are untested");
+    }
+
+    @Test
+    void theReadmeStatesTheSameRange() throws Exception {
+        String readme = Files.readString(Path.of("..", "README.md")).replaceAll("\\s*\n>?\\s*", " ");
+        assertThat(readme).contains("stars of 0.1-10 Msun from birth to core-hydrogen exhaustion, Z = 1e-4 to 0.04")
+                .contains("ages from birth from 0.1 Myr")
+                .contains("Outside this tested range `check`, `run` and `star` still compute but print a warning");
+        assertThat(TestedRange.MIN_MASS_MSUN).isEqualTo(0.1);
+        assertThat(TestedRange.MAX_MASS_MSUN).isEqualTo(10.0);
+        assertThat(TestedRange.MIN_Z).isEqualTo(1e-4);
+        assertThat(TestedRange.MAX_Z).isEqualTo(0.04);
+        assertThat(TestedRange.MIN_BIRTH_AGE_MYR).isEqualTo(0.1);
+    }
+}
