@@ -20,9 +20,10 @@ import org.convgrid.grids.GridSpec;
 public record RefinementEstimate(long models, double seconds, String basis) {
 
     /**
-     * Searches per (Z, age, physics) slice: the fully convective limit, the lasting core's onset and, where small cores
-     * come and go, that window's two ends. Measured: the demo grid (grids/demo-cluster.yaml, 9 slices, brackets of
-     * 0.2 Msun bisected 7 times to 0.002 Msun) added 155 models, 2.5 searches per slice; the 200-model zero-age
+     * Searches per (Z, age, physics) slice: the fully convective limit, the mass above which every star has a core
+     * and, where small cores come and go, that window's two ends. Measured: the demo grid
+     * (grids/demo-cluster.yaml, 9 slices, brackets of 0.2 Msun bisected 7 times to 0.002 Msun) added 155 models,
+     * 2.5 searches per slice; the 200-model zero-age
      * grid (benchmarks/grids/two-hundred-zero-age.yaml with refinement on, 4 slices, log-spaced masses) added 59,
      * where this count, from its median bracket of 0.16 Msun (7 halvings), gives 70.
      */

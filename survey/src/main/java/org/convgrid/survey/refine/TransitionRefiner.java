@@ -37,8 +37,9 @@ import org.convgrid.survey.parallel.ParallelWork;
  * bracket share one); all searches of every slice run at once on the command's {@link ParallelWork} (the one grid runs
  * use), no slice waiting for another, and are gathered in slice order, fully convective limit first, so the result is
  * the same for any thread count. By default the crossings the table reports are refined: the fully convective limit
- * (the highest crossing out of full convection), the lasting core's onset and the two crossings that bound the
- * transient window of small cores; on request every crossing of a slice whose structure flickers with mass.
+ * (the highest crossing out of full convection), the mass above which every star has a convective core and the two
+ * crossings that bound the transient window of small cores; on request every crossing of a slice whose structure
+ * flickers with mass.
  * Midpoints are rounded to masses the catalogue writes exactly, so a catalogue row's mass is the mass computed.
  */
 public final class TransitionRefiner {
@@ -149,7 +150,7 @@ public final class TransitionRefiner {
 
     /**
      * The crossings the table reports: the fully convective limit, or, for the core, the two crossings that bound the
-     * transient window and the lasting core's onset, in mass order without repeats.
+     * transient window and the mass above which every star has a core, in mass order without repeats.
      */
     private static List<Span> reported(Kind kind, TransitionRow row) {
         if (kind == Kind.FULLY_CONVECTIVE) {
