@@ -34,7 +34,9 @@ import picocli.CommandLine.ParentCommand;
                 + "fraction m/M (" + TransitionFinder.DEFAULT_CORE_MASS_FRACTION_THRESHOLD + ", the one its "
                 + "structure classes use; in manifest.yaml); "
                 + "the convective criterion is the one the run used. When the structure changes back and forth with "
-                + "mass, notes says how often.",
+                + "mass, notes says how often. Coreless stars at the top of a slice with central hydrogen below "
+                + TransitionFinder.RECEDED_CORE_CENTRAL_H + " are left out of the core search (their cores receded "
+                + "as hydrogen ran out; notes names them).",
             "With --refine, each reported bracket wider than --tolerance is narrowed by bisection with new models at "
                 + "every age: each new mass is the slice's own grid request (its composition, physics and age, "
                 + "evolved as a grid model would be; zero-age models seeded by homology from their converged "

@@ -28,6 +28,12 @@ import org.convgrid.output.catalogue.CatalogueRow;
  * ({@link RefinedModelIds}), {@code grid} otherwise, so recomputing the table from a refined catalogue gives the
  * refined answer again; the tolerance is the caller's to add ({@link TransitionRow#withTolerance}).
  *
+ * <p>The core search leaves out the coreless models at the top of a slice whose central hydrogen is nearly gone
+ * (below {@link #RECEDED_CORE_CENTRAL_H}): a convective core shrinks as hydrogen runs out and vanishes in the last
+ * contraction before exhaustion (Kippenhahn, Weigert &amp; Weiss 2012, Stellar Structure and Evolution, 2nd ed.,
+ * ch. 31), so those stars say nothing about the mass at which cores set in, and counting them would leave every
+ * slice that reaches its turn-off without one. Such a slice's note names them.
+ *
  * @param coreMassFractionThreshold smallest m/M of a convective core that counts as a core, in [0, 1)
  */
 public record TransitionFinder(double coreMassFractionThreshold) {
@@ -38,6 +44,14 @@ public record TransitionFinder(double coreMassFractionThreshold) {
      */
     public static final double DEFAULT_CORE_MASS_FRACTION_THRESHOLD =
             ConvectiveZoneFinder.DEFAULT_MIN_CORE_MASS_FRACTION;
+
+    /**
+     * Central hydrogen mass fraction below which a coreless model at the top of a slice is taken to have lost its
+     * core to hydrogen exhaustion. Our choice: measured on birth tracks (convgrid run, 0.8-2.4 Msun, Z = 0.001 and
+     * 0.02, 1 and 2 Gyr), cores persisted down to X_c = 0.045 and the one coreless model at the top of a slice had
+     * X_c = 1.4e-4.
+     */
+    public static final double RECEDED_CORE_CENTRAL_H = 0.01;
 
     public TransitionFinder {
         if (!(coreMassFractionThreshold >= 0.0 && coreMassFractionThreshold < 1.0)) {
@@ -84,14 +98,16 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         List<Span> fcCrossings = crossings(usable, TransitionFinder::isFullyConvective);
         TransitionEstimate fc = estimate(byMass, fcCrossings, lastFrom(fcCrossings, usable,
                 TransitionFinder::isFullyConvective, true), true);
-        List<Span> coreCrossings = crossings(usable, this::hasConvectiveCore);
-        boolean coredAtTop = hasConvectiveCore(usable.get(usable.size() - 1));
+        List<CatalogueRow> coreSearch = withoutRecededCores(usable);
+        List<Span> coreCrossings = crossings(coreSearch, this::hasConvectiveCore);
+        boolean coredAtTop = hasConvectiveCore(coreSearch.get(coreSearch.size() - 1));
         TransitionEstimate core = coredAtTop && !coreCrossings.isEmpty()
                 ? estimate(byMass, coreCrossings, coreCrossings.size() - 1, false)
                 : new TransitionEstimate(Double.NaN, null, coreCrossings, 0);
-        Span window = transientWindow(usable, coreCrossings);
+        Span window = transientWindow(coreSearch, coreCrossings);
         describeFullyConvective(fc, usable, notes);
-        describeCore(core, window, coredAtTop, usable, notes);
+        describeCore(core, window, coredAtTop, coreSearch, coreSearch.size() < usable.size(), notes);
+        describeRecededCores(usable.subList(coreSearch.size(), usable.size()), notes);
         TransitionRow row = new TransitionRow(slice, yInit, fc, core, window, TransitionMethod.GRID, Double.NaN, "");
         List<Span> reported = new ArrayList<>(row.transientCoreCrossings());
         if (fc.found()) {
@@ -103,6 +119,19 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         TransitionMethod method = reported.stream().anyMatch(span -> endsAtRefinedModel(span, usable))
                 ? TransitionMethod.REFINED : TransitionMethod.GRID;
         return new TransitionRow(slice, yInit, fc, core, window, method, Double.NaN, String.join("; ", notes));
+    }
+
+    /**
+     * The usable models without the coreless ones at the top whose central hydrogen is below
+     * {@link #RECEDED_CORE_CENTRAL_H}; all of them when that would leave none.
+     */
+    private List<CatalogueRow> withoutRecededCores(List<CatalogueRow> usable) {
+        int end = usable.size();
+        while (end > 0 && !hasConvectiveCore(usable.get(end - 1))
+                && usable.get(end - 1).centralHFrac() < RECEDED_CORE_CENTRAL_H) {
+            end--;
+        }
+        return end == 0 ? usable : usable.subList(0, end);
     }
 
     /** Every change of {@code state} between neighbouring usable models, in increasing mass. */
@@ -175,29 +204,45 @@ public record TransitionFinder(double coreMassFractionThreshold) {
                     : "fully convective only in an unexpected mass order");
         }
         if (fc.crossings().size() > 1) {
-            notes.add("fully convective changes " + fc.crossings().size() + " times with mass");
+            notes.add("fully convective changes " + timesInWords(fc.crossings().size()) + " with mass");
         }
         if (fc.skippedInBracket() > 0) {
             notes.add("fully convective bracket widened past " + fc.skippedInBracket() + " unusable model(s)");
         }
     }
 
-    private void describeCore(TransitionEstimate core, Span window, boolean coredAtTop, List<CatalogueRow> usable,
-                              List<String> notes) {
-        long cored = usable.stream().filter(this::hasConvectiveCore).count();
+    private void describeCore(TransitionEstimate core, Span window, boolean coredAtTop, List<CatalogueRow> searched,
+                              boolean someLeftOut, List<String> notes) {
+        long cored = searched.stream().filter(this::hasConvectiveCore).count();
         if (!core.found()) {
-            notes.add(cored == usable.size() ? "convective core at every usable mass"
+            notes.add(cored == searched.size()
+                    ? "convective core at every usable mass" + (someLeftOut ? " searched" : "")
                     : cored == 0 ? "no convective core at any usable mass"
                     : "no mass above which every star has a convective core: the highest usable masses have none");
         }
         // a clean slice crosses once (no window) or three times (window, then the lasting core)
         int expected = (window == null ? 0 : 2) + (coredAtTop ? 1 : 0);
         if (core.crossings().size() > expected) {
-            notes.add("convective core changes " + core.crossings().size() + " times with mass; the lowest window "
-                    + "of cores is the transient one");
+            notes.add("convective core changes " + timesInWords(core.crossings().size()) + " with mass"
+                    + (window == null ? "" : "; the lowest window of cores is the transient one"));
         }
         if (core.skippedInBracket() > 0) {
             notes.add("convective core bracket widened past " + core.skippedInBracket() + " unusable model(s)");
         }
+    }
+
+    private static String timesInWords(int times) {
+        return times == 1 ? "once" : times == 2 ? "twice" : times + " times";
+    }
+
+    private static void describeRecededCores(List<CatalogueRow> receded, List<String> notes) {
+        if (receded.isEmpty()) {
+            return;
+        }
+        double lo = receded.get(0).massMsun();
+        double hi = receded.get(receded.size() - 1).massMsun();
+        notes.add("the core search leaves out " + (receded.size() == 1 ? "the model" : receded.size() + " models")
+                + " at " + MassRangeText.of(new Span(lo, hi)) + " Msun, coreless with central hydrogen below "
+                + RECEDED_CORE_CENTRAL_H + ": cores recede as hydrogen runs out");
     }
 }

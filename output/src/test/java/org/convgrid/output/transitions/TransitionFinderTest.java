@@ -129,6 +129,65 @@ class TransitionFinderTest {
         assertThat(new TransitionFinder(1e-4).find(rows).get(0).convCoreOnset().massMsun()).isEqualTo(1.1);
     }
 
+    /** A usable model with its central hydrogen mass fraction set (the other rows leave it NaN). */
+    static CatalogueRow withCentralH(double mass, StructureClass c, double core, double centralH) {
+        CatalogueRow r = ok(mass, c, core);
+        return new CatalogueRow(r.modelId(), r.massMsun(), r.zInit(), r.yInit(), r.mixingLength(), r.overshootHp(),
+                r.ageGyr(), r.phase(), r.status(), r.statusDetail(), r.luminosityLsun(), r.radiusRsun(), r.teffK(),
+                r.logGCgs(), r.centralTempK(), r.centralDensityCgs(), centralH, r.surfaceLiRel(), r.structureClass(),
+                r.coreCzMassFrac(), r.coreCzRadiusFrac(), r.envCzBaseMassFrac(), r.envCzBaseRadiusFrac(),
+                r.envCzMassMsun(), r.turnoverTimeDays(), r.zones(), r.solverIterations(), r.criterion(),
+                r.opacityScale(), r.turnoverTimeGlobalDays());
+    }
+
+    @Test
+    void coresThatRecededNearHydrogenExhaustionDoNotHideTheOnset() {
+        // a slice at its turn-off (the shape of a Z = 0.02, 1 Gyr birth-track slice): cores from 1.2 up, and the
+        // highest main-sequence model, X_c = 1.4e-4, has lost its core as stars do just before exhaustion
+        // (Kippenhahn, Weigert & Weiss 2012, ch. 31)
+        List<CatalogueRow> rows = List.of(withCentralH(1.0, ENV, 0, 0.6), withCentralH(1.2, BOTH, 0.02, 0.5),
+                withCentralH(1.5, BOTH, 0.07, 0.2), withCentralH(1.6, ENV, 0, 1.4e-4));
+        TransitionRow t = finder.find(rows).get(0);
+        assertThat(t.convCoreOnset().massMsun()).isEqualTo(1.2);
+        assertThat(t.convCoreOnset().crossings()).containsExactly(new Span(1.0, 1.2));
+        assertThat(t.transientCore()).isNull();
+        assertThat(t.notes()).isEqualTo("no fully convective model at any usable mass; the core search leaves out "
+                + "the model at 1.6 Msun, coreless with central hydrogen below 0.01: cores recede as hydrogen runs "
+                + "out");
+        // with hydrogen left the same coreless top model is a real gap in the cores: no onset, and said so
+        List<CatalogueRow> young = List.of(rows.get(0), rows.get(1), rows.get(2), withCentralH(1.6, ENV, 0, 0.3));
+        TransitionRow y = finder.find(young).get(0);
+        assertThat(y.convCoreOnset().found()).isFalse();
+        assertThat(y.notes()).contains("the highest usable masses have none").doesNotContain("leaves out");
+    }
+
+    @Test
+    void coresAtEveryMassSearchedSaySoWithoutCountingTheOnesLeftOut() {
+        // the Z = 0.001, 1 Gyr birth-track slice: cores from 0.8 to 1.5 Msun, 1.6 Msun coreless at X_c = 1.4e-4
+        TransitionRow t = finder.find(List.of(withCentralH(0.8, BOTH, 0.01, 0.7), withCentralH(1.5, BOTH, 0.045, 0.19),
+                withCentralH(1.6, ENV, 0, 1.4e-4))).get(0);
+        assertThat(t.convCoreOnset().found()).isFalse();
+        assertThat(t.notes()).contains("convective core at every usable mass searched; the core search leaves out "
+                + "the model at 1.6 Msun");
+    }
+
+    @Test
+    void aSliceWhoseOnlyModelsLostTheirCoresSaysNoCore() {
+        TransitionRow t = finder.find(List.of(withCentralH(1.6, ENV, 0, 1e-4), withCentralH(1.7, ENV, 0, 5e-5)))
+                .get(0);
+        assertThat(t.convCoreOnset().found()).isFalse();
+        assertThat(t.notes()).contains("no convective core at any usable mass").doesNotContain("leaves out");
+    }
+
+    @Test
+    void oneCrossingIsCountedOnceAndNamesNoWindowThatIsNotThere() {
+        // cores at every mass but the highest, which still burns hydrogen: one crossing, out of the cores
+        TransitionRow t = finder.find(List.of(withCentralH(0.8, BOTH, 0.01, 0.7), withCentralH(1.0, ENV, 0, 0.6)))
+                .get(0);
+        assertThat(t.notes()).contains("convective core changes once with mass")
+                .doesNotContain("transient one");
+    }
+
     @Test
     void oneRowPerSliceInOrderOfFirstAppearanceWithMassesSorted() {
         List<CatalogueRow> rows = new ArrayList<>();
