@@ -23,14 +23,25 @@ import org.convgrid.output.events.LifeEventWriter;
 public final class LifeEventLog {
 
     private final Path file;
+    private boolean headerChecked;
 
     /** @param file the table ({@code life_events.csv} of the run directory) */
     public LifeEventLog(Path file) {
         this.file = file;
     }
 
-    /** Appends one star's row, writing the header first when the table is new. */
+    /**
+     * Appends one star's row, writing the header first when the table is new. A table an earlier version began
+     * (a run resumed after an upgrade: fewer columns) is first rewritten with today's header, so that the rows
+     * appended to it stay readable.
+     */
     public synchronized void append(LifeEventRow row) throws IOException {
+        if (!headerChecked) {
+            headerChecked = true;
+            if (Files.exists(file) && !firstLine(file).equals(LifeEventWriter.header().strip())) {
+                write(file, LifeEventReader.read(file));
+            }
+        }
         String text = (Files.exists(file) ? "" : LifeEventWriter.header()) + LifeEventWriter.line(row);
         Files.writeString(file, text, StandardCharsets.UTF_8, StandardOpenOption.CREATE, StandardOpenOption.APPEND);
     }
@@ -52,6 +63,12 @@ public final class LifeEventLog {
         }
         if (any) {
             write(target, rows);
+        }
+    }
+
+    private static String firstLine(Path file) throws IOException {
+        try (var lines = Files.lines(file, StandardCharsets.UTF_8)) {
+            return lines.findFirst().orElse("").strip();
         }
     }
 

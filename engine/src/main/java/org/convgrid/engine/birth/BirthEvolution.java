@@ -55,6 +55,7 @@ public final class BirthEvolution {
             points.add(new TrackPoint(result.steps().get(i), r[1] > 0.5 ? Phase.MAIN_SEQUENCE : Phase.PRE_MAIN_SEQUENCE,
                     r[2], r[3], r[4]));
         }
-        return new BirthTrack(start, result, points, recorder.events());
+        return new BirthTrack(start, result, points,
+                recorder.events().withCentralHydrogenExhausted(result.exhaustionAge()));
     }
 }

@@ -15,7 +15,15 @@ package org.convgrid.engine.birth;
  *                            contraction and is not reported
  * @param convectiveCoreEnd after that onset, the convective core first vanishes
  * @param lithiumHalved the surface 7Li first falls to half its birth value
+ * @param centralHydrogenExhausted the central hydrogen falls below the evolution's end value, which ends the main
+ *                                 sequence ({@link org.convgrid.engine.evolution.EvolutionResult#exhaustionAge()})
  */
 public record LifeEvents(double radiativeCore, double zeroAgeMainSequence, double convectiveCoreOnset,
-                         double convectiveCoreEnd, double lithiumHalved) {
+                         double convectiveCoreEnd, double lithiumHalved, double centralHydrogenExhausted) {
+
+    /** The same events with the age at which the central hydrogen ran out (NaN: not on the computed track). */
+    public LifeEvents withCentralHydrogenExhausted(double age) {
+        return new LifeEvents(radiativeCore, zeroAgeMainSequence, convectiveCoreOnset, convectiveCoreEnd,
+                lithiumHalved, age);
+    }
 }

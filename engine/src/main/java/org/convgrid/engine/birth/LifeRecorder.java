@@ -95,8 +95,9 @@ final class LifeRecorder implements StepObserver {
         return ageA + Math.max(0.0, Math.min(1.0, w)) * (ageB - ageA);
     }
 
+    /** The events seen in the models; the end of the main sequence is the evolution's to add. */
     LifeEvents events() {
-        return new LifeEvents(radiativeCore, zams, coreOnset, coreEnd, lithiumHalved);
+        return new LifeEvents(radiativeCore, zams, coreOnset, coreEnd, lithiumHalved, Double.NaN);
     }
 
     /** Per recorded model: age, 1 on the main sequence, L_nuc/L, surface lithium, central deuterium. */

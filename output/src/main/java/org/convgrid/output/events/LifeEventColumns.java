@@ -16,10 +16,17 @@ public final class LifeEventColumns {
     public static final String CONV_CORE_ONSET = "conv_core_onset_myr";
     public static final String CONV_CORE_END = "conv_core_end_myr";
     public static final String LI_HALVED = "li_halved_myr";
+    public static final String CENTRAL_H_EXHAUSTED = "central_h_exhausted_myr";
 
     /** Every column, in the order the writer writes them. */
     public static final List<String> ALL = List.of(TRACK_ID, MASS, Z_INIT, Y_INIT, MIXING_LENGTH, OVERSHOOT,
-            RADIATIVE_CORE, ZAMS, CONV_CORE_ONSET, CONV_CORE_END, LI_HALVED);
+            RADIATIVE_CORE, ZAMS, CONV_CORE_ONSET, CONV_CORE_END, LI_HALVED, CENTRAL_H_EXHAUSTED);
+
+    /**
+     * The columns every readable table has: all but {@link #CENTRAL_H_EXHAUSTED}, which tables written before it was
+     * added lack (read as empty).
+     */
+    public static final List<String> REQUIRED = ALL.subList(0, ALL.size() - 1);
 
     private LifeEventColumns() {
     }

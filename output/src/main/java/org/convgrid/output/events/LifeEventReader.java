@@ -1,5 +1,6 @@
 package org.convgrid.output.events;
 
+import static org.convgrid.output.events.LifeEventColumns.CENTRAL_H_EXHAUSTED;
 import static org.convgrid.output.events.LifeEventColumns.CONV_CORE_END;
 import static org.convgrid.output.events.LifeEventColumns.CONV_CORE_ONSET;
 import static org.convgrid.output.events.LifeEventColumns.LI_HALVED;
@@ -27,7 +28,8 @@ import org.convgrid.output.OutputFormatException;
 
 /**
  * Reads {@code life_events.csv} by column name, in file order. A row cut short by an interruption (the file grows
- * row by row during a run) is left out; every other unreadable row is an error.
+ * row by row during a run) is left out; every other unreadable row is an error. A table written before
+ * {@code central_h_exhausted_myr} existed reads with that age empty.
  */
 public final class LifeEventReader {
 
@@ -53,9 +55,10 @@ public final class LifeEventReader {
     public static List<LifeEventRow> read(Reader in) throws IOException {
         List<LifeEventRow> rows = new ArrayList<>();
         try (CSVParser parser = CSVParser.builder().setReader(in).setFormat(FORMAT).get()) {
-            if (!parser.getHeaderNames().containsAll(LifeEventColumns.ALL)) {
-                throw new OutputFormatException("life-events table needs the columns " + LifeEventColumns.ALL);
+            if (!parser.getHeaderNames().containsAll(LifeEventColumns.REQUIRED)) {
+                throw new OutputFormatException("life-events table needs the columns " + LifeEventColumns.REQUIRED);
             }
+            boolean hasExhaustion = parser.getHeaderNames().contains(CENTRAL_H_EXHAUSTED);
             for (CSVRecord r : parser) {
                 if (!r.isConsistent()) {
                     continue;
@@ -63,7 +66,8 @@ public final class LifeEventReader {
                 try {
                     rows.add(new LifeEventRow(r.get(TRACK_ID), n(r, MASS), n(r, Z_INIT), n(r, Y_INIT),
                             n(r, MIXING_LENGTH), n(r, OVERSHOOT), n(r, RADIATIVE_CORE), n(r, ZAMS),
-                            n(r, CONV_CORE_ONSET), n(r, CONV_CORE_END), n(r, LI_HALVED)));
+                            n(r, CONV_CORE_ONSET), n(r, CONV_CORE_END), n(r, LI_HALVED),
+                            hasExhaustion ? n(r, CENTRAL_H_EXHAUSTED) : Double.NaN));
                 } catch (IllegalArgumentException e) {
                     throw new OutputFormatException("life-events row " + r.getRecordNumber() + ": " + e.getMessage(),
                             e);

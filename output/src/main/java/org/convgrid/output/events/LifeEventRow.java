@@ -20,10 +20,11 @@ import org.convgrid.engine.units.Constants;
  * @param convCoreOnsetMyr a lasting convective core first appears, Myr since birth
  * @param convCoreEndMyr that core vanishes, Myr since birth
  * @param liHalvedMyr the surface lithium falls to half its birth value, Myr since birth
+ * @param centralHExhaustedMyr the central hydrogen runs out (the end of the main sequence), Myr since birth
  */
 public record LifeEventRow(String trackId, double massMsun, double zInit, double yInit, double mixingLength,
                            double overshootHp, double radiativeCoreMyr, double zamsMyr, double convCoreOnsetMyr,
-                           double convCoreEndMyr, double liHalvedMyr) {
+                           double convCoreEndMyr, double liHalvedMyr, double centralHExhaustedMyr) {
 
     private static final double MYR = 1.0e6 * Constants.YEAR;
 
@@ -42,6 +43,7 @@ public record LifeEventRow(String trackId, double massMsun, double zInit, double
         return new LifeEventRow(trackId, first.mass() / Constants.M_SUN, first.initialMetals(),
                 first.initialHelium(), first.physics().mixingLength(), first.physics().overshoot(),
                 events.radiativeCore() / MYR, events.zeroAgeMainSequence() / MYR,
-                events.convectiveCoreOnset() / MYR, events.convectiveCoreEnd() / MYR, events.lithiumHalved() / MYR);
+                events.convectiveCoreOnset() / MYR, events.convectiveCoreEnd() / MYR, events.lithiumHalved() / MYR,
+                events.centralHydrogenExhausted() / MYR);
     }
 }

@@ -28,7 +28,7 @@ public final class LifeEventWriter {
                 CsvNumbers.format(r.yInit()), CsvNumbers.format(r.mixingLength()), CsvNumbers.format(r.overshootHp()),
                 CsvNumbers.format(r.radiativeCoreMyr()), CsvNumbers.format(r.zamsMyr()),
                 CsvNumbers.format(r.convCoreOnsetMyr()), CsvNumbers.format(r.convCoreEndMyr()),
-                CsvNumbers.format(r.liHalvedMyr())) + "\n";
+                CsvNumbers.format(r.liHalvedMyr()), CsvNumbers.format(r.centralHExhaustedMyr())) + "\n";
     }
 
     /**

@@ -20,7 +20,7 @@ class LifeEventTableTest {
         ModelRequest first = new ModelRequest(id + "-a00", massMsun * Constants.M_SUN, 0.02, 0.28, 0.0,
                 PhysicsOptions.DEFAULT);
         return LifeEventRow.of(id, first, new LifeEvents(1.7 * MYR, zamsMyr * MYR, Double.NaN, Double.NaN,
-                12.5 * MYR));
+                12.5 * MYR, Double.NaN));
     }
 
     @Test
@@ -29,8 +29,8 @@ class LifeEventTableTest {
         LifeEventWriter.write(List.of(row("p0-z00-m001", 1.0, 48.85)), text);
         assertThat(text.toString()).isEqualTo("""
                 track_id,mass_msun,z_init,y_init,mixing_length,overshoot_hp,radiative_core_myr,zams_myr,\
-                conv_core_onset_myr,conv_core_end_myr,li_halved_myr
-                p0-z00-m001,1.0,0.02,0.28,1.8,0.0,1.7,48.85,,,12.5
+                conv_core_onset_myr,conv_core_end_myr,li_halved_myr,central_h_exhausted_myr
+                p0-z00-m001,1.0,0.02,0.28,1.8,0.0,1.7,48.85,,,12.5,
                 """);
         List<LifeEventRow> back = LifeEventReader.read(new StringReader(text.toString()));
         assertThat(back).singleElement().satisfies(r -> {
@@ -47,6 +47,31 @@ class LifeEventTableTest {
         List<LifeEventRow> back = LifeEventReader.read(new StringReader(text.toString()));
         assertThat(back).extracting(LifeEventRow::trackId).containsExactly("p0-z00-m001", "p0-z01-m000");
         assertThat(back.get(0).zamsMyr()).isCloseTo(48.85, within(1e-12));
+    }
+
+    @Test
+    void theEndOfTheMainSequenceIsWrittenInMyrAndReadBack() throws Exception {
+        ModelRequest first = new ModelRequest("p0-z00-m002-a00", 1.6 * Constants.M_SUN, 0.02, 0.28, 0.0,
+                PhysicsOptions.DEFAULT);
+        LifeEventRow turnOff = LifeEventRow.of("p0-z00-m002", first, new LifeEvents(0.6 * MYR, 21.6 * MYR, 10.6 * MYR,
+                1705.6 * MYR, Double.NaN, Double.NaN).withCentralHydrogenExhausted(1711.0 * MYR));
+        String line = LifeEventWriter.line(turnOff);
+        assertThat(line).endsWith(",1705.6,,1711.0\n");
+        assertThat(LifeEventReader.read(new StringReader(LifeEventWriter.header() + line)))
+                .singleElement().satisfies(r -> assertThat(r.centralHExhaustedMyr()).isCloseTo(1711.0, within(1e-9)));
+    }
+
+    @Test
+    void aTableWrittenBeforeTheExhaustionColumnReadsWithItEmpty() throws Exception {
+        String older = """
+                track_id,mass_msun,z_init,y_init,mixing_length,overshoot_hp,radiative_core_myr,zams_myr,\
+                conv_core_onset_myr,conv_core_end_myr,li_halved_myr
+                p0-z00-m001,1.0,0.02,0.28,1.8,0.0,1.7,48.85,,,12.5
+                """;
+        assertThat(LifeEventReader.read(new StringReader(older))).singleElement().satisfies(r -> {
+            assertThat(r.liHalvedMyr()).isEqualTo(12.5);
+            assertThat(r.centralHExhaustedMyr()).isNaN();
+        });
     }
 
     @Test
