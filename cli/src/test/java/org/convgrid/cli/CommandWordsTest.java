@@ -41,12 +41,12 @@ class CommandWordsTest {
         CliHarness.Execution check = cli().execute("check", plain.toString());
         assertThat(check.code()).isEqualTo(2);
         // the key as written, at its value's line and column; not the mapping form's 'length_hp'
-        assertThat(check.err()).contains(plain + ":5:14: overshoot must lie in").doesNotContain("length_hp");
+        assertThat(check.err()).contains(plain + ":5:14: overshoot must be at least 0 (got -1)").doesNotContain("length_hp");
         Path mapped = CliHarness.writeGrid(work, "mapped.yaml",
                 ONE_MODEL + "physics:\n  overshoot: {profile: decaying, length_hp: -1}\n");
         check = cli().execute("check", mapped.toString());
         assertThat(check.code()).isEqualTo(2);
-        assertThat(check.err()).contains(mapped + ":5:45: overshoot length_hp must lie in");
+        assertThat(check.err()).contains(mapped + ":5:45: overshoot length_hp must be at least 0 (got -1)");
     }
 
     @Test
