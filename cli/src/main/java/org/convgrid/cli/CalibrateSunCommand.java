@@ -4,7 +4,7 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
-import org.convgrid.cli.run.GridSummary;
+import org.convgrid.grids.words.MessageNumbers;
 import org.convgrid.engine.calibration.CalibratedSun;
 import org.convgrid.engine.calibration.CalibrationSettings;
 import org.convgrid.engine.calibration.SolarCalibration;
@@ -75,12 +75,13 @@ final class CalibrateSunCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         if (!(ageGyr >= MIN_AGE_GYR && ageGyr <= MAX_AGE_GYR)) {
-            throw new UsageException("--age-gyr must lie in [" + GridSummary.n(MIN_AGE_GYR) + ", "
-                    + GridSummary.n(MAX_AGE_GYR) + "] Gyr (the Sun's age since the zero-age main sequence, 4.57 by "
-                    + "default), got " + ageGyr);
+            throw new UsageException("--age-gyr must be from " + MessageNumbers.format(MIN_AGE_GYR) + " to "
+                    + MessageNumbers.format(MAX_AGE_GYR) + " Gyr (got " + MessageNumbers.format(ageGyr) + "): the "
+                    + "Sun's age since the zero-age main sequence, 4.57 by default");
         }
         if (!(metalsToHydrogen > 0 && metalsToHydrogen < 0.1)) {
-            throw new UsageException("--z-over-x must lie in (0, 0.1), got " + metalsToHydrogen);
+            throw new UsageException("--z-over-x must be above 0 and below 0.1 (got "
+                    + MessageNumbers.format(metalsToHydrogen) + ")");
         }
         Path target = main.context().resolve(preset);
         OutputTargets.requireWritableFile("--preset", target);

@@ -11,6 +11,7 @@ import org.convgrid.survey.RunDirectory;
 import org.convgrid.survey.RunFinishing;
 import org.convgrid.survey.RunLock;
 import org.convgrid.survey.ShardMerger;
+import org.convgrid.grids.words.Counts;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -46,8 +47,9 @@ final class MergeCommand implements Callable<Integer> {
                     .merge(dirs, target, context.finishers());
         }
         Map<ModelStatus, Long> counts = RunFinishing.countByStatus(run.catalogue());
-        parent.out().println(target.root() + ": merged " + dirs.size() + " shard directories, "
-                + run.catalogue().size() + " models (" + RunCommand.describe(counts) + ")");
+        parent.out().println(target.root() + ": merged " + Counts.of(dirs.size(), "shard directory",
+                "shard directories") + ", " + Counts.of(run.catalogue().size(), "model") + " ("
+                + RunCommand.describe(counts) + ")");
         parent.out().flush();
         return RunFinishing.someModelsFailed(counts) ? ExitCodes.SOME_MODELS_FAILED : ExitCodes.OK;
     }

@@ -6,6 +6,7 @@ import org.convgrid.engine.physics.MicrophysicsPoint;
 import org.convgrid.engine.physics.StandardPhysics;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.output.probe.MicrophysicsPointWriter;
+import org.convgrid.grids.words.MessageNumbers;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
@@ -82,14 +83,15 @@ final class ProbeCommand implements Callable<Integer> {
 
     private static void requireWithin(String option, double value, double low, double high, String unit) {
         if (!(value >= low && value <= high)) {
-            throw new UsageException(String.format(java.util.Locale.ROOT, "%s must lie in [%.0e, %.0e] %s, got %s",
-                    option, low, high, unit, value));
+            throw new UsageException(option + " must be from " + MessageNumbers.format(low) + " to "
+                    + MessageNumbers.format(high) + " " + unit + " (got " + MessageNumbers.format(value) + ")");
         }
     }
 
     private static void requirePositive(String option, double value) {
         if (!(value > 0) || Double.isInfinite(value)) {
-            throw new UsageException(option + " must be a positive number, got " + value);
+            throw new UsageException(option + " must be a positive number (got " + MessageNumbers.format(value)
+                    + ")");
         }
     }
 }

@@ -7,7 +7,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
-import org.convgrid.cli.run.Counts;
 import org.convgrid.cli.run.Durations;
 import org.convgrid.cli.run.ProgressReporter;
 import org.convgrid.engine.batch.ChunkSolver;
@@ -28,6 +27,8 @@ import org.convgrid.survey.TrackFiles;
 import org.convgrid.survey.parallel.ParallelWork;
 import org.convgrid.survey.refine.TransitionRefiner;
 import org.convgrid.survey.refine.TransitionTables;
+import org.convgrid.grids.words.MessageNumbers;
+import org.convgrid.grids.words.Counts;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -159,8 +160,8 @@ final class RunCommand implements Callable<Integer> {
                     + " computed now in " + Durations.describe(refined == null ? seconds : sweepSeconds));
             if (refined != null) {
                 long failedNew = refined.added().stream().filter(o -> o.status() != ModelStatus.OK).count();
-                parent.out().println(dir.transitions() + ": transitions refined to " + transitions.toleranceMsun()
-                        + " Msun with " + Counts.of(refined.added().size(), "new model")
+                parent.out().println(dir.transitions() + ": transitions refined to "
+                        + MessageNumbers.format(transitions.toleranceMsun()) + " Msun with " + Counts.of(refined.added().size(), "new model")
                         + (failedNew > 0 ? " (" + failedNew + " not ok)" : "") + " in "
                         + Durations.describe(seconds - sweepSeconds));
             }
@@ -217,7 +218,8 @@ final class RunCommand implements Callable<Integer> {
             line.append("; ").append(plan.kept().ids().size()).append(" already in the catalogue");
         }
         if (plan.kept().droppedBytes() > 0) {
-            line.append("; a half-written last row (").append(plan.kept().droppedBytes()).append(" bytes) dropped");
+            line.append("; a half-written last row (").append(Counts.of(plan.kept().droppedBytes(), "byte"))
+                    .append(") dropped");
         }
         return line.toString();
     }

@@ -5,6 +5,7 @@ import java.util.concurrent.Callable;
 import java.util.regex.Pattern;
 import org.convgrid.output.RunLayout;
 import org.convgrid.survey.GridRun;
+import org.convgrid.grids.words.Counts;
 
 /**
  * What {@code run} does on SIGINT (Ctrl-C) or SIGTERM (a batch system's stop): a JVM shutdown hook, installed once
@@ -67,12 +68,13 @@ final class RunInterruptHook implements AutoCloseable {
      */
     static String line(GridRun.Interrupted left, String grid, String out, boolean refines) {
         if (!left.swept()) {
-            return "convgrid: interrupted: " + left.rows() + " of " + left.expected() + " models in "
+            return "convgrid: interrupted: " + left.rows() + " of " + Counts.of(left.expected(), "model") + " in "
                     + RunLayout.CATALOGUE + "; continue with: convgrid run " + shellWord(grid) + " --out "
                     + shellWord(out) + " --resume";
         }
         // the sweep and its manifest were complete: what was cut short is the refinement or the charts
-        return "convgrid: interrupted after the sweep: all " + left.expected() + " models in " + RunLayout.CATALOGUE
+        return "convgrid: interrupted after the sweep: all " + Counts.of(left.expected(), "model") + " in "
+                + RunLayout.CATALOGUE
                 + "; finish with: " + (refines
                 ? "convgrid transitions " + shellWord(out) + " --refine" : "convgrid plot " + shellWord(out));
     }

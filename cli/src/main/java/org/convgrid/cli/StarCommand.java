@@ -17,7 +17,7 @@ import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.engine.batch.GridRequests;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
-import org.convgrid.cli.run.GridSummary;
+import org.convgrid.grids.words.MessageNumbers;
 import org.convgrid.engine.batch.StarTrackSink;
 import org.convgrid.engine.request.Age;
 import org.convgrid.engine.request.AgeOrigin;
@@ -48,6 +48,12 @@ final class StarCommand implements Callable<Integer> {
 
     /** Below this mass a failed zero-age model gets a note on the hydrogen-burning limit, Msun. */
     static final double NEAR_BURNING_LIMIT_MSUN = 0.1;
+
+    /**
+     * The lowest hydrogen-burning limit, Msun: ~0.07 at solar metallicity, higher at low Z (Chabrier &amp; Baraffe
+     * 1997). A failed star below it lies below the limit, not near it.
+     */
+    static final double BURNING_LIMIT_LOWEST_MSUN = 0.07;
 
     @ParentCommand
     ConvgridMain main;
@@ -126,9 +132,10 @@ final class StarCommand implements Callable<Integer> {
         Age age = age();
         double y = helium != null ? helium : HeliumLaw.DEFAULT.helium(metals);
         if (!(y >= MIN_HELIUM && y <= MAX_HELIUM)) {
-            throw new UsageException("--y must lie in [" + MIN_HELIUM + ", " + MAX_HELIUM + "] (helium mass "
-                    + "fraction: no star has less than the primordial value, about 0.245, and the most helium-rich "
-                    + "populations known reach about 0.4), got " + y);
+            throw new UsageException("--y must be from " + MessageNumbers.format(MIN_HELIUM) + " to "
+                    + MessageNumbers.format(MAX_HELIUM) + " (got " + MessageNumbers.format(y) + "): as a helium mass "
+                    + "fraction, no star has less than the primordial value, about 0.245, and the most helium-rich "
+                    + "populations known reach about 0.4");
         }
         if (profile != null) {
             OutputTargets.requireWritableFile("--profile", main.context().resolve(profile));
@@ -152,12 +159,9 @@ final class StarCommand implements Callable<Integer> {
         if (outcome.status() != ModelStatus.OK) {
             String what = outcome.status() == ModelStatus.PAST_MAIN_SEQUENCE ? "past the main sequence"
                     : "model " + outcome.status().label().replace('_', ' ');
-            main.err().println("convgrid: " + what + ": " + outcome.statusDetail());
+            main.err().println("convgrid: " + what + ": " + StarReport.detail(outcome));
             if (outcome.status() == ModelStatus.NOT_CONVERGED && massMsun < NEAR_BURNING_LIMIT_MSUN) {
-                main.err().println("convgrid: note: " + massMsun + " Msun is near the hydrogen-burning limit "
-                        + "(~0.07-0.09 Msun, higher at low Z: Chabrier & Baraffe 1997), below which no zero-age "
-                        + "main sequence exists; our models reach down to ~0.08 Msun at Z = 0.02 and ~0.095 Msun "
-                        + "at Z = 1e-4");
+                main.err().println(burningLimitNote(massMsun));
             }
             return ExitCodes.SOME_MODELS_FAILED;
         }
@@ -168,6 +172,17 @@ final class StarCommand implements Callable<Integer> {
             main.err().println("profile: " + model.profile().size() + " shells written to " + target);
         }
         return ExitCodes.OK;
+    }
+
+    /**
+     * The note for a model of less than {@link #NEAR_BURNING_LIMIT_MSUN} that did not converge. It said "near" for
+     * any such mass, 0.0005 Msun too: below the limit's range the mass is below it.
+     */
+    static String burningLimitNote(double massMsun) {
+        return "convgrid: note: " + MessageNumbers.format(massMsun) + " Msun is "
+                + (massMsun < BURNING_LIMIT_LOWEST_MSUN ? "below" : "near") + " the hydrogen-burning limit "
+                + "(~0.07-0.09 Msun, higher at low Z: Chabrier & Baraffe 1997), below which no zero-age main "
+                + "sequence exists; our models reach down to ~0.08 Msun at Z = 0.02 and ~0.095 Msun at Z = 1e-4";
     }
 
     /**
@@ -198,13 +213,13 @@ final class StarCommand implements Callable<Integer> {
         double max = ageGyr != null ? MAX_AGE_GYR : MAX_AGE_GYR * MYR_PER_GYR;
         String unit = ageGyr != null ? " Gyr" : " Myr";
         if (origin == AgeOrigin.BIRTH && !(gyr > 0 && gyr <= MAX_AGE_GYR)) {
-            throw new UsageException(option + " must lie in (0, " + GridSummary.n(max) + "]" + unit + " from birth "
-                    + "(age 0 is the pre-main-sequence start model; --age-origin zams counts from the zero-age main "
-                    + "sequence), got " + shown);
+            throw new UsageException(option + " must be above 0 and at most " + MessageNumbers.format(max) + unit
+                    + " from birth (got " + MessageNumbers.format(shown) + "): age 0 is the pre-main-sequence start "
+                    + "model; --age-origin zams counts from the zero-age main sequence");
         }
         if (!(gyr >= 0 && gyr <= MAX_AGE_GYR)) {
-            throw new UsageException(option + " must lie in [0, " + GridSummary.n(max) + "]" + unit + ", got "
-                    + shown);
+            throw new UsageException(option + " must be from 0 to " + MessageNumbers.format(max) + unit + " (got "
+                    + MessageNumbers.format(shown) + ")");
         }
         return origin == AgeOrigin.BIRTH ? new Age.SinceBirth(gyr * Constants.GYR)
                 : new Age.SinceZeroAge(gyr * Constants.GYR);
@@ -212,16 +227,20 @@ final class StarCommand implements Callable<Integer> {
 
     private PhysicsOptions options() {
         if (!(massMsun > 0 && massMsun <= 300)) {
-            throw new UsageException("--mass must lie in (0, 300] solar masses, got " + massMsun);
+            throw new UsageException("--mass must be above 0 and at most 300 solar masses (got "
+                    + MessageNumbers.format(massMsun) + ")");
         }
         if (!(metals >= 0 && metals < 0.1)) {
-            throw new UsageException("--z must lie in [0, 0.1), got " + metals);
+            throw new UsageException("--z must be at least 0 and below 0.1 (got " + MessageNumbers.format(metals)
+                    + ")");
         }
         if (!(mixingLength > 0 && mixingLength < 10)) {
-            throw new UsageException("--mixing-length must lie in (0, 10) pressure scale heights, got " + mixingLength);
+            throw new UsageException("--mixing-length must be above 0 and below 10 pressure scale heights (got "
+                    + MessageNumbers.format(mixingLength) + ")");
         }
         if (!(opacityScale > 0 && opacityScale <= 100)) {
-            throw new UsageException("--opacity-scale must lie in (0, 100], got " + opacityScale);
+            throw new UsageException("--opacity-scale must be above 0 and at most 100 (got "
+                    + MessageNumbers.format(opacityScale) + ")");
         }
         OpacityChoice table = OpacityChoice.BUILT_IN;
         if (opacityTable != null) {

@@ -3,6 +3,7 @@ package org.convgrid.cli;
 import java.io.PrintWriter;
 import java.util.List;
 import java.util.Locale;
+import java.util.regex.Pattern;
 import org.convgrid.engine.request.Age;
 import org.convgrid.engine.request.GlobalProperties;
 import org.convgrid.engine.request.ModelOutcome;
@@ -10,12 +11,15 @@ import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.units.Constants;
+import org.convgrid.grids.words.Counts;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.catalogue.OutcomeRows;
 
 /** The readable form of one model for {@code convgrid star}: a block of properties, then the zone list. */
 final class StarReport {
+
+    private static final Pattern ONE_ITERATION = Pattern.compile("\\bafter 1 iterations\\b");
 
     private StarReport() {
     }
@@ -38,7 +42,7 @@ final class StarReport {
                 r.physics().criterion().name().toLowerCase(Locale.ROOT), r.physics().opacityScale(),
                 r.physics().usesOpacityTable() ? " (table " + r.physics().opacityTable() + ")" : "");
         if (!(outcome instanceof ModelOutcome.Solved solved)) {
-            out.printf(Locale.ROOT, "Status: %s (%s)%n", outcome.status().label(), outcome.statusDetail());
+            out.printf(Locale.ROOT, "Status: %s (%s)%n", outcome.status().label(), detail(outcome));
             return;
         }
         GlobalProperties g = solved.global();
@@ -78,7 +82,15 @@ final class StarReport {
                     z.outerMassFraction(), z.innerRadiusFraction(), z.outerRadiusFraction());
         }
         out.println();
-        out.printf(Locale.ROOT, "Solved in %d Newton iterations.%n", outcome.solverIterations());
+        out.printf(Locale.ROOT, "Solved in %s.%n", Counts.of(outcome.solverIterations(), "Newton iteration"));
+    }
+
+    /**
+     * A failed model's reason for people: "after 1 iteration", not the solver's "after 1 iterations". The
+     * catalogue's status_detail keeps the solver's words, so that the file of a run does not change.
+     */
+    static String detail(ModelOutcome outcome) {
+        return ONE_ITERATION.matcher(outcome.statusDetail()).replaceAll("after 1 iteration");
     }
 
     private static void line(PrintWriter out, String name, double value, String unit) {

@@ -5,7 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.function.DoublePredicate;
 import java.util.stream.Collectors;
-import org.convgrid.cli.run.GridSummary;
+import org.convgrid.grids.words.MessageNumbers;
 import org.convgrid.engine.request.Age;
 import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.engine.units.Constants;
@@ -64,17 +64,17 @@ final class TestedRange {
                 && m <= MAX_MASS_MSUN * (1 + EDGE_SLACK));
         if (!masses.isEmpty()) {
             lines.add(line(masses, "mass", "masses", "", " Msun", "outside the tested range "
-                    + GridSummary.n(MIN_MASS_MSUN) + "-" + GridSummary.n(MAX_MASS_MSUN) + " Msun"));
+                    + MessageNumbers.format(MIN_MASS_MSUN) + "-" + MessageNumbers.format(MAX_MASS_MSUN) + " Msun"));
         }
         List<Double> metals = outside(zs, z -> z >= MIN_Z * (1 - EDGE_SLACK) && z <= MAX_Z * (1 + EDGE_SLACK));
         if (!metals.isEmpty()) {
             lines.add(line(metals, "metallicity", "metallicities", "Z = ", "", "outside the tested range Z = "
-                    + GridSummary.n(MIN_Z) + " to " + GridSummary.n(MAX_Z)));
+                    + MessageNumbers.format(MIN_Z) + " to " + MessageNumbers.format(MAX_Z)));
         }
         List<Double> young = outside(birthAgesMyr, a -> a >= MIN_BIRTH_AGE_MYR * (1 - EDGE_SLACK));
         if (!young.isEmpty()) {
             lines.add(line(young, "age", "ages", "", " Myr from birth", "below the tested "
-                    + GridSummary.n(MIN_BIRTH_AGE_MYR) + " Myr (there they depend on the pre-main-sequence start "
+                    + MessageNumbers.format(MIN_BIRTH_AGE_MYR) + " Myr (there they depend on the pre-main-sequence start "
                     + "model)"));
         }
         return lines;
@@ -100,14 +100,14 @@ final class TestedRange {
                                String where) {
         String what;
         if (values.size() == 1) {
-            what = noun + " " + symbol + GridSummary.n(values.get(0)) + unit + " lies";
+            what = noun + " " + symbol + MessageNumbers.format(values.get(0)) + unit + " lies";
         } else if (values.size() <= LISTED_VALUES) {
-            what = nouns + " " + symbol + values.stream().map(GridSummary::n).collect(Collectors.joining(", "))
+            what = nouns + " " + symbol + values.stream().map(MessageNumbers::format).collect(Collectors.joining(", "))
                     + unit + " lie";
         } else {
             double lo = values.stream().mapToDouble(Double::doubleValue).min().orElseThrow();
             double hi = values.stream().mapToDouble(Double::doubleValue).max().orElseThrow();
-            what = values.size() + " " + nouns + ", " + symbol + GridSummary.n(lo) + " to " + GridSummary.n(hi)
+            what = values.size() + " " + nouns + ", " + symbol + MessageNumbers.format(lo) + " to " + MessageNumbers.format(hi)
                     + unit + ", lie";
         }
         return "convgrid: warning: " + what + " " + where + "; results there are untested";

@@ -4,7 +4,9 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
-import org.convgrid.cli.run.Counts;
+import org.convgrid.grids.words.Counts;
+import org.convgrid.grids.words.MessageNumbers;
+import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.cli.run.Durations;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.output.RunLayout;
@@ -78,7 +80,8 @@ final class TransitionsCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         CommandContext context = parent.context();
         if (!(tolerance > 0.0 && Double.isFinite(tolerance))) {
-            throw new UsageException("--tolerance must be a positive mass in Msun, got " + tolerance);
+            throw new UsageException("--tolerance must be a positive mass in Msun (got "
+                    + MessageNumbers.format(tolerance) + ")");
         }
         int n = RunCommand.threads(threads);
         RunDirectory dir = new RunDirectory(context.resolve(runDirectory));
@@ -121,8 +124,8 @@ final class TransitionsCommand implements Callable<Integer> {
         parent.out().flush();
         for (TransitionRow t : update.transitions()) {
             if (!t.notes().isEmpty() && refine) {
-                parent.err().println("convgrid: Z = " + t.slice().zInit() + ", age " + t.slice().ageGyr() + " Gyr: "
-                        + t.notes());
+                parent.err().println("convgrid: Z = " + MessageNumbers.format(t.slice().zInit()) + ", "
+                        + SliceLabels.age(t.slice().ageGyr()) + ": " + t.notes());
             }
         }
         parent.err().flush();

@@ -129,14 +129,14 @@ class CheckCommandTest {
                 """);
         CliHarness.Execution check = CliHarness.in(work, FakeChunkSolver.fast()).execute("check", birth.toString());
         assertThat(check.code()).as(check.err()).isEqualTo(0);
-        assertThat(check.out()).contains("ages:          2: 0.02, 0.15 Gyr since birth (pre-main sequence included)");
+        assertThat(check.out()).contains("ages:          2: 20, 150 Myr since birth (pre-main sequence included)");
         Path zams = CliHarness.writeGrid(work, "zams.yaml", """
                 mass: {values: [1.0, 2.0]}
                 metallicity: {z: 0.014, y: 0.27}
                 age: {gyr: [0, 0.15], origin: zams}
                 """);
         check = CliHarness.in(work, FakeChunkSolver.fast()).execute("check", zams.toString());
-        assertThat(check.out()).contains("ages:          2: 0, 0.15 Gyr since the ZAMS (0 = ZAMS)");
+        assertThat(check.out()).contains("ages:          2: 0, 150 Myr since the ZAMS (0 = ZAMS)");
     }
 
     @Test

@@ -41,12 +41,12 @@ class CommandWordsTest {
         CliHarness.Execution check = cli().execute("check", plain.toString());
         assertThat(check.code()).isEqualTo(2);
         // the key as written, at its value's line and column; not the mapping form's 'length_hp'
-        assertThat(check.err()).contains(plain + ":5:14: overshoot must lie in").doesNotContain("length_hp");
+        assertThat(check.err()).contains(plain + ":5:14: overshoot must be at least 0 (got -1)").doesNotContain("length_hp");
         Path mapped = CliHarness.writeGrid(work, "mapped.yaml",
                 ONE_MODEL + "physics:\n  overshoot: {profile: decaying, length_hp: -1}\n");
         check = cli().execute("check", mapped.toString());
         assertThat(check.code()).isEqualTo(2);
-        assertThat(check.err()).contains(mapped + ":5:45: overshoot length_hp must lie in");
+        assertThat(check.err()).contains(mapped + ":5:45: overshoot length_hp must be at least 0 (got -1)");
     }
 
     @Test
@@ -76,8 +76,8 @@ class CommandWordsTest {
             CliHarness.Execution calibrate = cli().execute("calibrate-sun", "--age-gyr", age,
                     "--preset", "sun.yaml");
             assertThat(calibrate.code()).as(age).isEqualTo(2);
-            assertThat(calibrate.err()).as(age).contains("--age-gyr must lie in [0.001, 13] Gyr")
-                    .contains("got " + Double.parseDouble(age));
+            assertThat(calibrate.err()).as(age).contains("--age-gyr must be from 0.001 to 13 Gyr (got "
+                    + (age.equals("0.0005") ? "5e-4" : age) + ")");
         }
         assertThat(work.resolve("sun.yaml")).doesNotExist();
     }
@@ -120,6 +120,75 @@ class CommandWordsTest {
         assertThat(check.code()).as(check.err()).isZero();
         assertThat(check.out()).contains("refinement:    none expected (the grid's mass step, 0.001 Msun at the "
                 + "median, is already within the tolerance of 0.002 Msun)").doesNotContain("0 halvings");
+    }
+
+    @Test
+    void checkGivesAgesBelowOneGyrInMyrAndOneUnitPerLine() throws Exception {
+        Path young = CliHarness.writeGrid(work, "young.yaml", """
+                mass: {values: [0.5, 1.0]}
+                metallicity: {z: 0.014, y: 0.27}
+                age: {myr: [20, 150, 600]}
+                """);
+        CliHarness.Execution check = cli().execute("check", young.toString());
+        assertThat(check.code()).as(check.err()).isZero();
+        assertThat(check.out()).contains("ages:          3: 20, 150, 600 Myr since birth")
+                .contains("for ages up to the demo's 600 Myr").doesNotContain("Gyr");
+        // one unit for the line: Gyr as soon as one age reaches 1 Gyr
+        Path mixed = CliHarness.writeGrid(work, "mixed.yaml", ONE_MODEL.replace("age: {gyr: [0], origin: zams}",
+                "age: {myr: [500, 2000]}"));
+        check = cli().execute("check", mixed.toString());
+        assertThat(check.code()).as(check.err()).isZero();
+        assertThat(check.out()).contains("ages:          2: 0.5, 2 Gyr since birth");
+    }
+
+    @Test
+    void progressAndSummaryCountsAgreeWithTheirNoun() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "one.yaml", ONE_MODEL);
+        CliHarness.Execution run = cli().execute("run", grid.toString(), "--threads", "1");
+        assertThat(run.code()).as(run.err()).isZero();
+        assertThat(run.err()).contains("convgrid: 1 of 1 model (100%)").doesNotContain("1/1 models");
+    }
+
+    @Test
+    void rangeErrorsSayTheRangeInWordsWithTheValueAsWritten() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "bad.yaml", """
+                mass: {values: [1.0, 1e6]}
+                metallicity: {z: 0.014, helium: {primordial: 0.2485, enrichment: -1.50}}
+                age: {myr: [0, 20]}
+                physics: {mixing_length: 0}
+                """);
+        CliHarness.Execution check = cli().execute("check", grid.toString());
+        assertThat(check.code()).isEqualTo(2);
+        assertThat(check.err()).contains(grid + ":1:22: mass value must be above 0 and at most 300 (got 1e6)")
+                .contains(grid + ":2:66: helium enrichment must be at least 0 (got -1.50)")
+                .contains(grid + ":3:13: age from birth in Myr must be above 0 and at most 2e4 (got 0): age 0 "
+                        + "would be the start model; for the zero-age main sequence add origin: zams")
+                .contains(grid + ":4:26: mixing_length must be above 0 (got 0)")
+                .doesNotContain("inf").doesNotContain("[").doesNotContain(".0E");
+        CliHarness.Execution star = cli().execute("star", "--mass", "-1", "--z", "0.02");
+        assertThat(star.err()).contains("--mass must be above 0 and at most 300 solar masses (got -1)");
+    }
+
+    @Test
+    void messageNumbersAreWrittenForPeople() {
+        CliHarness.Execution star = cli().execute("star", "--mass", "1", "--z", "0.0005", "--mixing-length", "20");
+        assertThat(star.code()).isEqualTo(2);
+        assertThat(star.err()).contains("(got 20)").doesNotContain("20.0");
+        CliHarness.Execution probe = cli().execute("probe", "--temp-k", "1e30", "--density-cgs", "1", "--x", "0.7",
+                "--z", "0.02");
+        assertThat(probe.err()).contains("--temp-k must be from 1000 to 1e9 K (got 1e30)");
+    }
+
+    @Test
+    void aStarFarBelowTheHydrogenBurningLimitIsSaidToBeBelowIt() {
+        CliHarness.Execution star = cli().execute("star", "--mass", "0.0005", "--z", "0.02");
+        assertThat(star.code()).as(star.err()).isEqualTo(3);
+        assertThat(star.err()).contains("convgrid: note: 5e-4 Msun is below the hydrogen-burning limit "
+                + "(~0.07-0.09 Msun, higher at low Z: Chabrier & Baraffe 1997)").doesNotContain("near");
+        assertThat(star.out() + star.err()).doesNotContain(" 1 iterations");
+        // near only within the limit's range (Chabrier & Baraffe 1997: ~0.07-0.09 Msun)
+        assertThat(StarCommand.burningLimitNote(0.08)).startsWith("convgrid: note: 0.08 Msun is near the ");
+        assertThat(StarCommand.burningLimitNote(0.05)).startsWith("convgrid: note: 0.05 Msun is below the ");
     }
 
     @Test

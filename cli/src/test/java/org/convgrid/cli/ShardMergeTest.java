@@ -66,7 +66,7 @@ class ShardMergeTest {
                 "--out", "merged");
         assertThat(merged.code()).isEqualTo(2);
         // shard 2 of 3 owns chunks 1, 4, 7: the first is masses 8..15 of Z index 0
-        assertThat(merged.err()).contains("model(s) missing from every shard: p0-z00-m008-a00, p0-z00-m008-a01");
+        assertThat(merged.err()).contains("models missing from every shard: p0-z00-m008-a00, p0-z00-m008-a01");
         assertThat(Files.exists(work.resolve("merged"))).isFalse();
     }
 
@@ -76,7 +76,7 @@ class ShardMergeTest {
         CliHarness.Execution merged = run("merge", "runs/test-survey-shard-1-of-2", "runs/test-survey-shard-2-of-2",
                 "runs/test-survey-shard-2-of-2", "--out", "merged");
         assertThat(merged.code()).isEqualTo(2);
-        assertThat(merged.err()).contains("model(s) in more than one shard: p0-z00-m008-a00");
+        assertThat(merged.err()).contains("models in more than one shard: p0-z00-m008-a00");
         assertThat(Files.exists(work.resolve("merged"))).isFalse();
     }
 

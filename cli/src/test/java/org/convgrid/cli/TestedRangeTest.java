@@ -32,7 +32,7 @@ class TestedRangeTest {
         assertThat(check.err().lines().filter(l -> l.startsWith("convgrid: warning: ")).toList()).containsExactly(
                 "convgrid: warning: masses 0.05, 12 Msun lie outside the tested range 0.1-10 Msun; results there "
                         + "are untested",
-                "convgrid: warning: metallicity Z = 0 lies outside the tested range Z = 0.0001 to 0.04; results "
+                "convgrid: warning: metallicity Z = 0 lies outside the tested range Z = 1e-4 to 0.04; results "
                         + "there are untested",
                 "convgrid: warning: age 0.05 Myr from birth lies below the tested 0.1 Myr (there they depend on "
                         + "the pre-main-sequence start model); results there are untested");

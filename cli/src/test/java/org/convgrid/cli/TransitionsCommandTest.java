@@ -232,7 +232,7 @@ class TransitionsCommandTest {
         assertThat(Files.readAllBytes(dir.resolve("catalogue.ecsv"))).isEqualTo(catalogue);
         CliHarness.Execution merged = harness(new FakeMassLines(Set.of())).execute("merge", "done", "--out", "m");
         assertThat(merged.code()).isEqualTo(2);
-        assertThat(merged.err()).contains("40 model(s) added by 'convgrid transitions --refine'");
+        assertThat(merged.err()).contains("40 models added by 'convgrid transitions --refine'");
     }
 
     @Test

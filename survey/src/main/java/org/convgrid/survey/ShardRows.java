@@ -16,6 +16,7 @@ import org.convgrid.grids.GridSpec;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.RefinedModelIds;
+import org.convgrid.grids.words.Counts;
 
 /**
  * The catalogue lines of several shards, keyed by model id and kept byte for byte, then put back in grid order.
@@ -73,15 +74,15 @@ final class ShardRows {
         }
         List<String> problems = new ArrayList<>();
         if (!missing.isEmpty()) {
-            problems.add(missing.size() + " model(s) missing from every shard: " + firstIds(missing));
+            problems.add(Counts.of(missing.size(), "model") + " missing from every shard: " + firstIds(missing));
         }
         if (!duplicates.isEmpty()) {
-            problems.add(duplicates.size() + " model(s) in more than one shard: " + firstIds(duplicates));
+            problems.add(Counts.of(duplicates.size(), "model") + " in more than one shard: " + firstIds(duplicates));
         }
         List<String> refined = left.keySet().stream().filter(RefinedModelIds::isRefined).sorted()
                 .map(id -> id + " (" + origin.get(id) + ")").toList();
         if (!refined.isEmpty()) {
-            problems.add(refined.size() + " model(s) added by 'convgrid transitions --refine': " + firstIds(refined)
+            problems.add(Counts.of(refined.size(), "model") + " added by 'convgrid transitions --refine': " + firstIds(refined)
                     + "; merge unrefined shards, then refine the merged directory");
             left.keySet().removeIf(RefinedModelIds::isRefined);
         }

@@ -8,7 +8,8 @@ import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.grids.GridFile;
 import org.convgrid.grids.GridSpec;
-import org.convgrid.output.CsvNumbers;
+import org.convgrid.grids.words.Counts;
+import org.convgrid.grids.words.MessageNumbers;
 
 /** The text {@code convgrid check} prints about a valid grid: its axes, model count and a run-time estimate. */
 public final class GridSummary {
@@ -33,19 +34,21 @@ public final class GridSummary {
         lines.add("grid:          " + TerminalText.clean(g.title() + " (" + file.name() + ")"));
         lines.add("masses:        " + axis(g.massesMsun(), "Msun"));
         lines.add("metallicities: " + g.metallicities().size() + ": " + g.metallicities().stream()
-                .map(p -> "Z=" + n(p.z()) + " Y=" + n(p.y())).collect(Collectors.joining(", ")));
+                .map(p -> "Z=" + MessageNumbers.format(p.z()) + " Y=" + MessageNumbers.format(p.y()))
+                .collect(Collectors.joining(", ")));
         boolean birth = g.ages().origin() == AgeOrigin.BIRTH;
         lines.add(g.ages().fractions()
                 ? "ages:          " + axis(g.ages().values(), "of each star's main-sequence lifetime")
                         + " (0 = ZAMS, 1 = core-hydrogen exhaustion at X_c = 1e-4"
                         + (birth ? "; evolved from birth, ages reported from birth)" : ")")
-                : "ages:          " + axis(g.ages().values(), "Gyr")
+                : "ages:          " + axis(AgeUnits.values(g.ages().values()), AgeUnits.unit(g.ages().values()))
                         + (birth ? " since birth (pre-main sequence included)" : " since the ZAMS (0 = ZAMS)"));
         List<PhysicsOptions> physics = g.physics().combinations();
         lines.add("physics:       " + physics.size() + (physics.size() == 1 ? " combination" : " combinations"));
         for (PhysicsOptions p : physics) {
-            lines.add("  mixing length " + n(p.mixingLength()) + " Hp, overshoot " + n(p.overshoot()) + " Hp, "
-                    + p.criterion().name().toLowerCase(Locale.ROOT) + ", opacity x" + n(p.opacityScale()));
+            lines.add("  mixing length " + MessageNumbers.format(p.mixingLength()) + " Hp, overshoot "
+                    + MessageNumbers.format(p.overshoot()) + " Hp, " + p.criterion().name().toLowerCase(Locale.ROOT)
+                    + ", opacity x" + MessageNumbers.format(p.opacityScale()));
         }
         lines.add("models:        " + g.count());
         lines.add("estimate:      about " + Durations.describe(estimate.seconds()) + " on "
@@ -61,13 +64,9 @@ public final class GridSummary {
     private static String axis(List<Double> values, String unit) {
         String head = values.size() + ": ";
         if (values.size() <= LISTED_VALUES) {
-            return head + values.stream().map(GridSummary::n).collect(Collectors.joining(", ")) + " " + unit;
+            return head + values.stream().map(MessageNumbers::format).collect(Collectors.joining(", ")) + " " + unit;
         }
-        return head + "from " + n(values.get(0)) + " to " + n(values.get(values.size() - 1)) + " " + unit;
-    }
-
-    /** A number for people: the file format without the ".0" that marks reals for table readers. */
-    public static String n(double value) {
-        return CsvNumbers.format(value).replaceFirst("\\.0(?=$|e)", "");
+        return head + "from " + MessageNumbers.format(values.get(0)) + " to "
+                + MessageNumbers.format(values.get(values.size() - 1)) + " " + unit;
     }
 }

@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.util.Locale;
 import java.util.function.LongSupplier;
 import org.convgrid.engine.batch.ProgressListener;
+import org.convgrid.grids.words.Counts;
 
 /**
  * Progress of a run on the error stream. On a terminal: one line redrawn in place with a carriage return (bar,
@@ -108,7 +109,8 @@ public final class ProgressReporter implements ProgressListener {
             int filled = (int) (BAR_WIDTH * Math.min(1.0, (double) done / total));
             text.append('[').append("#".repeat(filled)).append(".".repeat(BAR_WIDTH - filled)).append("] ");
         }
-        text.append(done).append('/').append(total < 0 ? "?" : Long.toString(total)).append(" models");
+        // "1 of 1 model": the count the noun agrees with is the total; "1/1 models" read oddly
+        text.append(total < 0 ? Counts.of(done, "model") : done + " of " + Counts.of(total, "model"));
         if (total > 0) {
             text.append(String.format(Locale.ROOT, " (%d%%)", done * 100 / total));
         }

@@ -5,6 +5,8 @@ import java.util.Collections;
 import java.util.List;
 import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.grids.GridSpec;
+import org.convgrid.grids.words.Counts;
+import org.convgrid.grids.words.MessageNumbers;
 
 /**
  * What refining the transition masses after the sweep adds to a run, for {@code check}: the sweep's estimate
@@ -62,7 +64,7 @@ public record RefinementEstimate(long models, double seconds, String basis) {
         }
         double perModel = modelSeconds(grid);
         return new RefinementEstimate(models, models * perModel / threads, "as many as the run in " + where
-                + " added, about " + GridSummary.n(perModel) + " s per model");
+                + " added, about " + MessageNumbers.format(perModel) + " s per model");
     }
 
     /**
@@ -86,17 +88,17 @@ public record RefinementEstimate(long models, double seconds, String basis) {
         double tolerance = grid.transitions().toleranceMsun();
         if (medianGap <= tolerance) {
             // said "0 halvings of a ... bracket each" before: true, but the reader had to work out what it meant
-            return none("none expected (the grid's mass step, " + GridSummary.n(RunTimeEstimate.twoDigits(medianGap))
-                    + " Msun at the median, is already within the tolerance of " + GridSummary.n(tolerance)
+            return none("none expected (the grid's mass step, " + MessageNumbers.format(RunTimeEstimate.twoDigits(medianGap))
+                    + " Msun at the median, is already within the tolerance of " + MessageNumbers.format(tolerance)
                     + " Msun)");
         }
         long halvings = (long) Math.ceil(Math.log(medianGap / tolerance) / Math.log(2.0));
         long slices = (long) grid.metallicities().size() * grid.ages().values().size() * grid.physics().size();
         long models = Math.round(slices * SEARCHES_PER_SLICE * halvings);
         double perModel = modelSeconds(grid);
-        return new RefinementEstimate(models, models * perModel / threads, GridSummary.n(SEARCHES_PER_SLICE)
+        return new RefinementEstimate(models, models * perModel / threads, MessageNumbers.format(SEARCHES_PER_SLICE)
                 + " searches per (Z, age, physics) slice, " + Counts.of(halvings, "halving") + " of a "
-                + GridSummary.n(RunTimeEstimate.twoDigits(medianGap)) + " Msun bracket each, about " + GridSummary.n(perModel)
+                + MessageNumbers.format(RunTimeEstimate.twoDigits(medianGap)) + " Msun bracket each, about " + MessageNumbers.format(perModel)
                 + " s per model");
     }
 

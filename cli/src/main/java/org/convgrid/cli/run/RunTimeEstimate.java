@@ -2,6 +2,8 @@ package org.convgrid.cli.run;
 
 import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.grids.GridSpec;
+import org.convgrid.grids.words.MessageNumbers;
+import org.convgrid.plotting.label.SliceLabels;
 
 /**
  * How long {@code run} will take, for {@code check}. A grid's cost is per star, not per model: each star (mass, Z,
@@ -38,6 +40,9 @@ public record RunTimeEstimate(double seconds, String basis) {
      */
     static final double EVOLUTION_FROM_ZERO_AGE_SECONDS = 0.2;
 
+    /** The oldest age of the demo grid (grids/demo-cluster.yaml), Gyr, which the evolution costs were measured to. */
+    static final double DEMO_OLDEST_AGE_GYR = 0.6;
+
     /**
      * One-thread seconds of evolving one star from its contracting start model to ages like the demo grid's (20, 150
      * and 600 Myr), with no zero-age model of its own. Measured (same machine and day, quiet): the same 10 stars from birth took
@@ -49,7 +54,7 @@ public record RunTimeEstimate(double seconds, String basis) {
     /** The median seconds per model of an earlier run of the same grid: its own mix of ages. */
     public static RunTimeEstimate measured(GridSpec grid, double secondsPerModel, int threads, String where) {
         return new RunTimeEstimate(grid.count() * secondsPerModel / threads,
-                GridSummary.n(twoDigits(secondsPerModel)) + " s per model (median of the run in " + where + ")");
+                MessageNumbers.format(twoDigits(secondsPerModel)) + " s per model (median of the run in " + where + ")");
     }
 
     /** A measured time to two significant digits: its third is noise between runs. */
@@ -73,13 +78,14 @@ public record RunTimeEstimate(double seconds, String basis) {
         double zeroAge = fromBirth ? 0.0 : lines * LINE_SECONDS + stars * ZERO_AGE_MODEL_SECONDS;
         double shared = zeroAge + stars * evolutions * evolutionSeconds;
         String evolved = evolutions == 0.0 ? "zero-age models only"
-                : "each of the " + stars + " stars evolved " + (fromBirth ? "from birth " : "")
+                : (stars == 1 ? "the one star" : "each of the " + stars + " stars") + " evolved "
+                        + (fromBirth ? "from birth " : "")
                         + (evolutions == 2.0 ? "twice (lifetime, then ages)" : "once to its oldest age") + ", about "
-                        + GridSummary.n(evolutionSeconds) + " s" + (evolutions == 2.0 ? " each" : "")
-                        + " for ages up to the demo's 0.6 Gyr";
-        String basis = fromBirth ? "" : GridSummary.n(LINE_SECONDS) + " s per metallicity and physics line and "
-                + GridSummary.n(ZERO_AGE_MODEL_SECONDS) + " s per zero-age model, ";
-        return new RunTimeEstimate(START_SECONDS + shared / threads, basis + GridSummary.n(START_SECONDS)
+                        + MessageNumbers.format(evolutionSeconds) + " s" + (evolutions == 2.0 ? " each" : "")
+                        + " for ages up to the demo's " + SliceLabels.age(DEMO_OLDEST_AGE_GYR);
+        String basis = fromBirth ? "" : MessageNumbers.format(LINE_SECONDS) + " s per metallicity and physics line and "
+                + MessageNumbers.format(ZERO_AGE_MODEL_SECONDS) + " s per zero-age model, ";
+        return new RunTimeEstimate(START_SECONDS + shared / threads, basis + MessageNumbers.format(START_SECONDS)
                 + " s to start, rough defaults from one 2-core machine; " + evolved
                 + "; a finished run records its own median");
     }

@@ -26,13 +26,13 @@ class ProgressReporterTest {
         clock.set(10 * SECOND + 1000);
         reporter.progress(51, 200);
         // 150 models at 25 / 5 s since the first report
-        assertThat(text.toString()).isEqualTo("\r[###.....................] 25/200 models (12%), 5.00 models/s"
-                + "\r[####....................] 35/200 models (17%), 5.00 models/s"
-                + "\r[######..................] 50/200 models (25%), 5.00 models/s, 30 s left");
+        assertThat(text.toString()).isEqualTo("\r[###.....................] 25 of 200 models (12%), 5.00 models/s"
+                + "\r[####....................] 35 of 200 models (17%), 5.00 models/s"
+                + "\r[######..................] 50 of 200 models (25%), 5.00 models/s, 30 s left");
         clock.set(40 * SECOND);
         reporter.progress(200, 200);
         reporter.finish();
-        assertThat(text.toString()).endsWith("\r[########################] 200/200 models (100%), 5.00 models/s\n")
+        assertThat(text.toString()).endsWith("\r[########################] 200 of 200 models (100%), 5.00 models/s\n")
                 .doesNotContain("51/200");
     }
 
@@ -47,8 +47,8 @@ class ProgressReporterTest {
         String[] lines = text.toString().split("\n");
         // 20 steps of 5 %, and 10 s have passed once, at 1000 models (already a step)
         assertThat(lines).hasSize(20);
-        assertThat(lines[0]).isEqualTo("convgrid: 50/1000 models (5%), 100.00 models/s, 10 s left");
-        assertThat(lines[19]).isEqualTo("convgrid: 1000/1000 models (100%), 100.00 models/s");
+        assertThat(lines[0]).isEqualTo("convgrid: 50 of 1000 models (5%), 100.00 models/s, 10 s left");
+        assertThat(lines[19]).isEqualTo("convgrid: 1000 of 1000 models (100%), 100.00 models/s");
         assertThat(text.toString()).doesNotContain("\r");
     }
 
@@ -61,11 +61,11 @@ class ProgressReporterTest {
         }
         assertThat(text.toString().split("\n")).containsExactly(
                 // 9998 models at 1/6 per second: 59988 s = 16 h 39.8 min
-                "convgrid: 2/10000 models (0%), 0.17 models/s",
-                "convgrid: 4/10000 models (0%), 0.17 models/s, 16 h 39 min left",
-                "convgrid: 6/10000 models (0%), 0.17 models/s, 16 h 39 min left",
-                "convgrid: 8/10000 models (0%), 0.17 models/s, 16 h 39 min left",
-                "convgrid: 10/10000 models (0%), 0.17 models/s, 16 h 39 min left");
+                "convgrid: 2 of 10000 models (0%), 0.17 models/s",
+                "convgrid: 4 of 10000 models (0%), 0.17 models/s, 16 h 39 min left",
+                "convgrid: 6 of 10000 models (0%), 0.17 models/s, 16 h 39 min left",
+                "convgrid: 8 of 10000 models (0%), 0.17 models/s, 16 h 39 min left",
+                "convgrid: 10 of 10000 models (0%), 0.17 models/s, 16 h 39 min left");
     }
 
     @Test
@@ -81,9 +81,17 @@ class ProgressReporterTest {
             reporter.progress(r[1], 180);
         }
         String[] lines = text.toString().split("\n");
-        assertThat(lines[0]).isEqualTo("convgrid: 24/180 models (13%), 0.34 models/s");
-        assertThat(lines[3]).isEqualTo("convgrid: 84/180 models (46%), 0.76 models/s");
+        assertThat(lines[0]).isEqualTo("convgrid: 24 of 180 models (13%), 0.34 models/s");
+        assertThat(lines[3]).isEqualTo("convgrid: 84 of 180 models (46%), 0.76 models/s");
         // 72 models at 84 / 40.01 s since the first report: 34 s (33 s were left)
-        assertThat(lines[4]).isEqualTo("convgrid: 108/180 models (60%), 0.97 models/s, 34 s left");
+        assertThat(lines[4]).isEqualTo("convgrid: 108 of 180 models (60%), 0.97 models/s, 34 s left");
+    }
+
+    @Test
+    void oneModelIsSingular() {
+        ProgressReporter reporter = new ProgressReporter(new PrintWriter(text), false, clock::get);
+        clock.set(SECOND);
+        reporter.progress(1, 1);
+        assertThat(text.toString()).startsWith("convgrid: 1 of 1 model (100%), ");
     }
 }

@@ -40,6 +40,7 @@ final class AxisValues {
             return null;
         }
         List<Double> values = new ArrayList<>();
+        Node previous = null;
         // seen values in a hash set: the duplicate check stays linear in the length of the list
         java.util.Set<Double> seen = new java.util.HashSet<>();
         boolean ok = true;
@@ -48,20 +49,22 @@ final class AxisValues {
             if (v == null) {
                 ok = false;
             } else if (!range.contains(v)) {
-                reader.problem(item, GridProblemKind.OUT_OF_RANGE, what + " must lie in " + range + ", got " + v
-                        + (v == range.lo() ? range.atExcludedLow() : ""));
+                reader.problem(item, GridProblemKind.OUT_OF_RANGE,
+                        range.refusal(what, "", NodeReader.written(item), v));
                 ok = false;
             } else if (order != Order.ANY && seen.contains(v)) {
-                reader.problem(item, GridProblemKind.DUPLICATE, "duplicate " + what + " " + v);
+                reader.problem(item, GridProblemKind.DUPLICATE, "duplicate " + what + " " + NodeReader.written(item));
                 ok = false;
             } else if (order == Order.INCREASING && !values.isEmpty() && v < values.get(values.size() - 1)) {
                 reader.problem(item, GridProblemKind.OUT_OF_RANGE,
-                        what + "s must increase: " + v + " follows " + values.get(values.size() - 1));
+                        what + "s must increase: " + NodeReader.written(item) + " follows "
+                        + NodeReader.written(previous));
                 ok = false;
             }
             if (v != null) {
                 values.add(v);
                 seen.add(v);
+                previous = item;
             }
         }
         return ok ? values : null;

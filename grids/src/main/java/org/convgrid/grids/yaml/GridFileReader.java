@@ -232,7 +232,8 @@ public final class GridFileReader {
                 : TransitionSettings.DEFAULT.toleranceMsun();
         if (tolerance != null && !(tolerance > 0.0 && Double.isFinite(tolerance))) {
             reader.problem(fields.value("tolerance_msun"), GridProblemKind.OUT_OF_RANGE,
-                    "transitions tolerance_msun must be a positive mass in Msun, got " + tolerance);
+                    "transitions tolerance_msun must be a positive mass in Msun (got "
+                    + NodeReader.written(fields.value("tolerance_msun")) + ")");
             tolerance = null;
         }
         return refine == null || tolerance == null ? null : new TransitionSettings(refine, tolerance);
@@ -281,7 +282,7 @@ public final class GridFileReader {
         double scale = myr ? MYR_PER_GYR : 1.0;
         // grids written before ages counted from birth meant the zero-age main sequence by 0: say how to keep that
         Range range = origin == AgeOrigin.BIRTH ? Range.aboveZero(MAX_AGE_GYR * scale).noteAtExcludedLow(
-                " (age 0 would be the start model; for the zero-age main sequence add origin: zams)")
+                "age 0 would be the start model; for the zero-age main sequence add origin: zams")
                 : Range.closed(0.0, MAX_AGE_GYR * scale);
         String what = (origin == AgeOrigin.BIRTH ? "age from birth" : "age") + (myr ? " in Myr" : " in Gyr");
         List<Double> ages = AxisValues.increasing(fields.value(given.get(0)), what, range, reader);

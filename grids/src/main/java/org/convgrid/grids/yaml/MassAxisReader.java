@@ -53,7 +53,8 @@ final class MassAxisReader {
         BigDecimal to = massEnd(fields.value("to"), "mass to", reader);
         if (from != null && to != null && from.compareTo(to) > 0) {
             reader.problem(fields.value("from"), GridProblemKind.OUT_OF_RANGE,
-                    "mass from (" + from + ") is larger than to (" + to + ")");
+                    "mass from (" + NodeReader.written(fields.value("from")) + ") is larger than to ("
+                    + NodeReader.written(fields.value("to")) + ")");
             from = null;
         }
         if (fields.has("step") == fields.has("count")) {
@@ -74,7 +75,7 @@ final class MassAxisReader {
         BigDecimal value = reader.decimal(node, what);
         if (value != null && !MASS_RANGE.contains(value.doubleValue())) {
             reader.problem(node, GridProblemKind.OUT_OF_RANGE,
-                    what + " must lie in " + MASS_RANGE + " solar masses, got " + value);
+                    MASS_RANGE.refusal(what, " solar masses", NodeReader.written(node), value.doubleValue()));
             return null;
         }
         return value;
@@ -83,7 +84,8 @@ final class MassAxisReader {
     private static List<Double> stepped(BigDecimal from, BigDecimal to, Node stepNode, NodeReader reader) {
         BigDecimal step = reader.decimal(stepNode, "mass step");
         if (step != null && step.signum() <= 0) {
-            reader.problem(stepNode, GridProblemKind.OUT_OF_RANGE, "mass step must be > 0 solar masses, got " + step);
+            reader.problem(stepNode, GridProblemKind.OUT_OF_RANGE,
+                    "mass step must be above 0 solar masses (got " + NodeReader.written(stepNode) + ")");
             return null;
         }
         if (from == null || to == null || step == null) {
@@ -92,7 +94,7 @@ final class MassAxisReader {
         BigDecimal steps = to.subtract(from).divide(step, 0, RoundingMode.FLOOR);
         if (steps.compareTo(BigDecimal.valueOf(MAX_AXIS_POINTS - 1)) >= 0) {
             reader.problem(stepNode, GridProblemKind.OUT_OF_RANGE,
-                    "mass step " + step + " gives more than " + MAX_AXIS_POINTS + " masses");
+                    "mass step " + NodeReader.written(stepNode) + " gives more than " + MAX_AXIS_POINTS + " masses");
             return null;
         }
         List<Double> values = new ArrayList<>();
@@ -107,7 +109,7 @@ final class MassAxisReader {
         Integer count = reader.integer(countNode, "mass count");
         if (count != null && (count < 1 || count > MAX_AXIS_POINTS)) {
             reader.problem(countNode, GridProblemKind.OUT_OF_RANGE,
-                    "mass count must lie in [1, " + MAX_AXIS_POINTS + "], got " + count);
+                    "mass count must be from 1 to " + MAX_AXIS_POINTS + " (got " + NodeReader.written(countNode) + ")");
             count = null;
         }
         boolean log = false;
@@ -124,7 +126,8 @@ final class MassAxisReader {
         }
         if (count == 1 && from.compareTo(to) != 0) {
             reader.problem(countNode, GridProblemKind.MISSING_KEY,
-                    "mass count 1 needs from = to, got " + from + " and " + to);
+                    "mass count 1 needs from = to, got " + NodeReader.written(fields.value("from")) + " and "
+                    + NodeReader.written(fields.value("to")));
             return null;
         }
         double lo = from.doubleValue();

@@ -5,6 +5,7 @@ import java.util.List;
 import org.convgrid.grids.GridProblemKind;
 import org.convgrid.grids.HeliumLaw;
 import org.convgrid.grids.MetallicityPoint;
+import org.convgrid.grids.words.MessageNumbers;
 import org.snakeyaml.engine.v2.nodes.MappingNode;
 import org.snakeyaml.engine.v2.nodes.Node;
 
@@ -59,7 +60,8 @@ final class MetallicityReader {
         List<Node> yNodes = reader.items(fields.value("y"), "y");
         List<MetallicityPoint> points = new ArrayList<>();
         for (int i = 0; i < zs.size(); i++) {
-            points.add(point(zs.get(i), ys.get(i), yNodes.get(i), "y = " + ys.get(i), reader));
+            points.add(point(zs.get(i), ys.get(i), yNodes.get(i), "y = " + NodeReader.written(yNodes.get(i)),
+                    reader));
         }
         return points.contains(null) ? null : points;
     }
@@ -85,7 +87,9 @@ final class MetallicityReader {
         List<MetallicityPoint> points = new ArrayList<>();
         for (int i = 0; i < zs.size(); i++) {
             double y = law.helium(zs.get(i));
-            String how = "Y = " + law.primordial() + " + " + law.enrichment() + " * " + zs.get(i) + " = " + y;
+            String how = "Y = " + MessageNumbers.format(law.primordial()) + " + "
+                    + MessageNumbers.format(law.enrichment()) + " * " + MessageNumbers.format(zs.get(i)) + " = "
+                    + MessageNumbers.format(y);
             points.add(point(zs.get(i), y, zNodes.get(i), how, reader));
         }
         return points.contains(null) ? null : points;
@@ -94,7 +98,7 @@ final class MetallicityReader {
     private static MetallicityPoint point(double z, double y, Node at, String how, NodeReader reader) {
         if (!(y >= 0.0 && y + z < 1.0)) {
             reader.problem(at, GridProblemKind.OUT_OF_RANGE,
-                    how + " with Z = " + z + " leaves no hydrogen (need Y >= 0 and Y + Z < 1)");
+                    how + " with Z = " + MessageNumbers.format(z) + " leaves no hydrogen (need Y >= 0 and Y + Z < 1)");
             return null;
         }
         return new MetallicityPoint(z, y);
@@ -103,7 +107,7 @@ final class MetallicityReader {
     private static Double ranged(Node node, String what, Range range, NodeReader reader) {
         Double v = reader.number(node, what);
         if (v != null && !range.contains(v)) {
-            reader.problem(node, GridProblemKind.OUT_OF_RANGE, what + " must lie in " + range + ", got " + v);
+            reader.problem(node, GridProblemKind.OUT_OF_RANGE, range.refusal(what, "", NodeReader.written(node), v));
             return null;
         }
         return v;

@@ -186,6 +186,11 @@ final class NodeReader {
         return ", got '" + quoted(((ScalarNode) node).getValue()) + "'";
     }
 
+    /** A scalar as the user wrote it, for messages ("-1", not the parsed "-1.0"); "?" for anything else. */
+    static String written(Node node) {
+        return node instanceof ScalarNode scalar ? quoted(scalar.getValue()) : "?";
+    }
+
     /** A value of the file as quoted in a message: at most 40 characters, control characters replaced. */
     static String quoted(String value) {
         String clean = value.replaceAll("\\p{Cntrl}", "?");

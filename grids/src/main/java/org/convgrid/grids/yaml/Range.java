@@ -1,13 +1,18 @@
 package org.convgrid.grids.yaml;
 
-/** An interval of allowed values; {@link #toString()} writes it in interval notation for messages. */
+import org.convgrid.grids.words.MessageNumbers;
+
+/**
+ * An interval of allowed values; {@link #words()} says it for messages ("at least 0", "above 0 and at most 300").
+ * Messages gave it in interval notation, "[0, inf)", which readers had to decode.
+ */
 record Range(double lo, boolean loIncluded, double hi, boolean hiIncluded, String atExcludedLow) {
 
     Range(double lo, boolean loIncluded, double hi, boolean hiIncluded) {
         this(lo, loIncluded, hi, hiIncluded, "");
     }
 
-    /** The same range, whose message for a value at its excluded lower end ends with {@code note}. */
+    /** The same range, whose message for a value at its excluded lower end ends with ": " and {@code note}. */
     Range noteAtExcludedLow(String note) {
         return new Range(lo, loIncluded, hi, hiIncluded, note);
     }
@@ -28,13 +33,22 @@ record Range(double lo, boolean loIncluded, double hi, boolean hiIncluded, Strin
         return (loIncluded ? v >= lo : v > lo) && (hiIncluded ? v <= hi : v < hi);
     }
 
-    @Override
-    public String toString() {
-        return (loIncluded ? "[" : "(") + format(lo) + ", " + format(hi) + (hiIncluded ? "]" : ")");
+    /** The range in words, to follow "must be": "from 0 to 1", "at least 0", "above 0 and below 0.1". */
+    String words() {
+        String low = MessageNumbers.format(lo);
+        if (Double.isInfinite(hi)) {
+            return (loIncluded ? "at least " : "above ") + low;
+        }
+        String high = MessageNumbers.format(hi);
+        if (loIncluded && hiIncluded) {
+            return "from " + low + " to " + high;
+        }
+        return (loIncluded ? "at least " : "above ") + low + " and " + (hiIncluded ? "at most " : "below ") + high;
     }
 
-    private static String format(double v) {
-        return Double.isInfinite(v) ? "inf" : v == Math.rint(v) && Math.abs(v) < 1e15
-                ? Long.toString((long) v) : Double.toString(v);
+    /** The message for a value outside: "overshoot must be at least 0 (got -1)", the value as written. */
+    String refusal(String what, String unit, String written, double value) {
+        return what + " must be " + words() + unit + " (got " + written + ")"
+                + (value == lo && !atExcludedLow.isEmpty() ? ": " + atExcludedLow : "");
     }
 }

@@ -27,6 +27,7 @@ import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.survey.RunSetupException;
 import org.convgrid.survey.parallel.ParallelWork;
+import org.convgrid.grids.words.MessageNumbers;
 
 /**
  * Narrows the brackets of a catalogue's transitions by bisection with new models ({@link MassBisection}), at every
@@ -117,7 +118,8 @@ public final class TransitionRefiner {
             Slice slice = row.slice();
             notes.put(slice, new ArrayList<>());
             CatalogueRow gridRow = members.get(slice).stream().filter(r -> !RefinedModelIds.isRefined(r.modelId()))
-                    .findFirst().orElseThrow(() -> new RunSetupException("slice at Z = " + slice.zInit()
+                    .findFirst().orElseThrow(() -> new RunSetupException("slice at Z = "
+                            + MessageNumbers.format(slice.zInit())
                             + " has no grid model; the catalogue was edited"));
             ModelRequest template = ModelIds.gridRequest(grid, gridRow.modelId());
             Map<Double, CatalogueRow> failed = new HashMap<>();
