@@ -161,7 +161,7 @@ class CommandWordsTest {
         assertThat(check.code()).isEqualTo(2);
         assertThat(check.err()).contains(grid + ":1:22: mass value must be above 0 and at most 300 (got 1e6)")
                 .contains(grid + ":2:66: helium enrichment must be at least 0 (got -1.50)")
-                .contains(grid + ":3:13: age from birth in Myr must be above 0 and at most 2e4 (got 0): age 0 "
+                .contains(grid + ":3:13: age from birth in Myr must be above 0 and at most 20000 (got 0): age 0 "
                         + "would be the start model; for the zero-age main sequence add origin: zams")
                 .contains(grid + ":4:26: mixing_length must be above 0 (got 0)")
                 .doesNotContain("inf").doesNotContain("[").doesNotContain(".0E");

@@ -63,10 +63,10 @@ class StarCommandTest {
         assertThat(run("star", "--mass", "1", "--z", "0.02", "--age-origin", "birth")).isEqualTo(2);
         assertThat(err.toString()).contains("--age-origin birth needs an age");
         assertThat(run("star", "--mass", "1", "--z", "0.02", "--age-myr", "0")).isEqualTo(2);
-        assertThat(err.toString()).contains("--age-myr must be above 0 and at most 2e4 Myr from birth (got 0)");
+        assertThat(err.toString()).contains("--age-myr must be above 0 and at most 20000 Myr from birth (got 0)");
         assertThat(run("star", "--mass", "1", "--z", "0.02", "--age-myr", "25000", "--age-origin", "zams"))
                 .isEqualTo(2);
-        assertThat(err.toString()).contains("--age-myr must be from 0 to 2e4 Myr (got 2.5e4)");
+        assertThat(err.toString()).contains("--age-myr must be from 0 to 20000 Myr (got 25000)");
     }
 
     @Test

@@ -13,14 +13,14 @@ public final class MessageNumbers {
 
     /** Significant digits kept: as many as the catalogue writes, so a value in a message is found in the files. */
     private static final MathContext DIGITS = new MathContext(7, RoundingMode.HALF_EVEN);
-    /** Sizes written as plain decimals; smaller and larger ones with a power of ten ({@code 5e-4}). */
+    /** Sizes written as plain decimals (ages up to 1e5 Myr read as typed, "20000"); smaller and larger ones with a power of ten ({@code 5e-4}). */
     private static final double PLAIN_MIN = 1e-3;
-    private static final double PLAIN_MAX = 1e4;
+    private static final double PLAIN_MAX = 1e5;
 
     private MessageNumbers() {
     }
 
-    /** The text of a value: plain from 1e-3 to 1e4 in size, else mantissa and exponent; no trailing zeros. */
+    /** The text of a value: plain from 1e-3 to 1e5 in size, else mantissa and exponent; no trailing zeros. */
     public static String format(double value) {
         if (Double.isNaN(value)) {
             return "NaN";

@@ -94,7 +94,7 @@ class AgeOriginReaderTest {
         List<GridProblem> problems = problems(HEAD + "age: {myr: [10, 25000], origin: zams}\n");
         assertThat(problems).extracting(p -> p.line() + ":" + p.column() + " " + p.kind())
                 .containsExactly("3:17 OUT_OF_RANGE");
-        assertThat(problems.get(0).message()).contains("must be from 0 to 2e4 (got 25000)");
+        assertThat(problems.get(0).message()).contains("must be from 0 to 20000 (got 25000)");
     }
 
     @Test

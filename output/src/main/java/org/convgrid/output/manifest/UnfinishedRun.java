@@ -21,6 +21,8 @@ public record UnfinishedRun(long present, long expected) {
 
     /** {@code 30 of 90 models}, or {@code 30 models} when the expected number is not known. */
     public String describe() {
-        return expected == RunManifest.EXPECTED_UNKNOWN ? present + " models" : present + " of " + expected + " models";
+        // "1 of 3 models" reads right; only a lone count needs the singular
+        return expected == RunManifest.EXPECTED_UNKNOWN ? present + (present == 1 ? " model" : " models")
+                : present + " of " + expected + (expected == 1 ? " model" : " models");
     }
 }
