@@ -6,6 +6,9 @@ import java.util.List;
 import java.util.Locale;
 import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.plotting.label.SliceLabels;
+import org.convgrid.plotting.layout.LabelPlacement;
+import org.convgrid.plotting.layout.Obstacles;
+import org.convgrid.plotting.layout.SeriesObstacles;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.StyledChart;
 import org.knowm.xchart.XYSeries;
@@ -14,8 +17,8 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
 /**
  * Turns {@link HrDiagramData} into a chart: log Teff on a reversed x axis (hot stars left), log L/Lsun up; one
  * colour per metallicity (zero-age lines, isochrones and models), one marker shape per structure class; evolution
- * tracks (thin, light grey) and isochrones labelled with their ages (clear of the mass labels and the models) under
- * the models when the run has tracks. XChart
+ * tracks (thin, light grey) and isochrones labelled with their ages under the models when the run has tracks; mass
+ * and age labels clear of every marker, line and other label, with a leader line when they had to move away. XChart
  * cannot reverse an axis, so the x values are -log Teff and the tick labels drop the sign.
  */
 public final class HrDiagramRenderer {
@@ -24,7 +27,7 @@ public final class HrDiagramRenderer {
     private static final double PAD_DEX = 0.04;
     /** Room above the brightest model for the isochrones' age labels, as a share of the luminosity range. */
     private static final double AGE_LABEL_ROOM_SHARE = 0.1;
-    /** Leader lines from a moved age label to its isochrone's end, pixels. */
+    /** Leader lines from a moved label to its model, pixels. */
     private static final float LEADER_WIDTH = 1.0f;
     /** Pixel spacing hint for the luminosity ticks (XChart's default gives 0.2 dex steps, too dense). */
     private static final int Y_TICK_SPACING = 90;
@@ -115,14 +118,19 @@ public final class HrDiagramRenderer {
                 s.setShowInLegend(false);
             }
         }
-        List<HrPoint> labels = data.massLabels();
         chart.addOverlay((g, c) -> {
             g.setFont(ChartStyle.ANNOTATION_FONT);
             g.setColor(ChartStyle.BLACK);
+            g.setStroke(new java.awt.BasicStroke(LEADER_WIDTH));
             FontMetrics fm = g.getFontMetrics();
-            for (HrPoint p : labels) {
-                java.awt.geom.Rectangle2D box = massLabelBox(fm, c, p);
-                g.drawString(massLabel(p), (float) box.getX(), (float) (box.getY() + fm.getAscent()));
+            List<Label> labels = labels(data);
+            List<LabelPlacement.Placed> placed = layout(c, fm, labels);
+            for (int i = 0; i < labels.size(); i++) {
+                LabelPlacement.Placed p = placed.get(i);
+                if (p.leader() != null) {
+                    g.draw(p.leader());
+                }
+                g.drawString(labels.get(i).text(), (float) p.box().getX(), (float) (p.box().getY() + fm.getAscent()));
             }
         });
         return chart;
@@ -133,14 +141,50 @@ public final class HrDiagramRenderer {
     }
 
     /**
-     * Where a mass label goes: left of and below its point (the hot, faint side of the zero-age line holds no
-     * models); the box of its text, top left at (x, y).
+     * A label of the diagram.
+     *
+     * @param point the model it names
+     * @param text what it says
      */
-    private static java.awt.geom.Rectangle2D massLabelBox(FontMetrics fm, StyledChart c, HrPoint p) {
-        String text = massLabel(p);
-        double x = c.getScreenXFromChart(-p.logTeff()) - fm.stringWidth(text) - 14;
-        double y = c.getScreenYFromChart(p.logL()) + 4;
-        return new java.awt.geom.Rectangle2D.Double(x, y, fm.stringWidth(text), fm.getHeight());
+    record Label(HrPoint point, String text) {
+    }
+
+    /**
+     * Every label, in the order they are placed: the mass labels ({@link HrDiagramData#massLabels}), then, with
+     * isochrones, the age of each isochrone of the middle Z beside its brightest model, brightest first.
+     */
+    static List<Label> labels(HrDiagramData data) {
+        List<Label> labels = new java.util.ArrayList<>();
+        data.massLabels().forEach(p -> labels.add(new Label(p, massLabel(p))));
+        if (!data.isochrones().isEmpty()) {
+            double middleZ = data.metallicities().get(data.metallicities().size() / 2);
+            data.isochrones().stream().filter(l -> l.zInit() == middleZ)
+                    .sorted(java.util.Comparator.comparingDouble((HrDiagramData.ZeroAgeLine l) -> -brightest(l).logL()))
+                    .forEach(l -> labels.add(new Label(brightest(l), age(l.ageGyr()))));
+        }
+        return labels;
+    }
+
+    /**
+     * Where each label goes on the painted chart {@code c}: beside its model, clear of every marker, every line
+     * (tracks, isochrones, zero-age lines) and every other label ({@link LabelPlacement}), with a leader line when
+     * it had to move away. For the overlay and for tests that check it.
+     */
+    static List<LabelPlacement.Placed> layout(StyledChart c, FontMetrics fm, List<Label> labels) {
+        List<LabelPlacement.Wanted> wanted = labels.stream().map(l -> new LabelPlacement.Wanted(
+                c.getScreenXFromChart(-l.point().logTeff()), c.getScreenYFromChart(l.point().logL()),
+                fm.stringWidth(l.text()), fm.getAscent() + fm.getDescent(), ChartStyle.MARKER_SIZE / 2.0)).toList();
+        return LabelPlacement.place(wanted, SeriesObstacles.addTo(new Obstacles(), c), plotArea(c));
+    }
+
+    /** The plot area, in screen pixels. */
+    static java.awt.geom.Rectangle2D plotArea(StyledChart c) {
+        double left = c.getScreenXFromChart(c.getStyler().getXAxisMin());
+        double right = c.getScreenXFromChart(c.getStyler().getXAxisMax());
+        double top = c.getScreenYFromChart(c.getStyler().getYAxisMax());
+        double bottom = c.getScreenYFromChart(c.getStyler().getYAxisMin());
+        return new java.awt.geom.Rectangle2D.Double(Math.min(left, right), top, Math.abs(right - left),
+                bottom - top);
     }
 
     /**
@@ -243,40 +287,5 @@ public final class HrDiagramRenderer {
             s.setLineStyle(ChartStyle.dashed(data.ages().indexOf(line.ageGyr()), 2.0f));
             s.setShowInLegend(first);
         }
-        chart.addOverlay((g, c) -> {
-            g.setFont(ChartStyle.ANNOTATION_FONT);
-            g.setColor(ChartStyle.BLACK);
-            FontMetrics fm = g.getFontMetrics();
-            // every mass label and every model marker is taken before the age labels look for room
-            List<java.awt.geom.Rectangle2D> taken = new java.util.ArrayList<>();
-            data.massLabels().forEach(p -> taken.add(massLabelBox(fm, c, p)));
-            double half = ChartStyle.MARKER_SIZE / 2.0;
-            data.points().forEach(p -> taken.add(new java.awt.geom.Rectangle2D.Double(
-                    c.getScreenXFromChart(-p.logTeff()) - half, c.getScreenYFromChart(p.logL()) - half, 2 * half,
-                    2 * half)));
-            List<HrDiagramData.ZeroAgeLine> brightestFirst = middle.stream().sorted(java.util.Comparator
-                    .comparingDouble((HrDiagramData.ZeroAgeLine l) -> -brightest(l).logL())).toList();
-            List<LabelPlacement.Wanted> wanted = brightestFirst.stream().map(l -> new LabelPlacement.Wanted(
-                    c.getScreenXFromChart(-brightest(l).logTeff()), c.getScreenYFromChart(brightest(l).logL()),
-                    fm.stringWidth(age(l.ageGyr())), fm.getHeight())).toList();
-            double left = c.getScreenXFromChart(c.getStyler().getXAxisMin());
-            double right = c.getScreenXFromChart(c.getStyler().getXAxisMax());
-            double top = c.getScreenYFromChart(c.getStyler().getYAxisMax());
-            double bottom = c.getScreenYFromChart(c.getStyler().getYAxisMin());
-            List<java.awt.geom.Rectangle2D> boxes = LabelPlacement.place(wanted, taken,
-                    new java.awt.geom.Rectangle2D.Double(left, top, right - left, bottom - top));
-            g.setStroke(new java.awt.BasicStroke(LEADER_WIDTH));
-            for (int i = 0; i < boxes.size(); i++) {
-                java.awt.geom.Rectangle2D box = boxes.get(i);
-                LabelPlacement.Wanted w = wanted.get(i);
-                // a label that had to move away from its isochrone's end points back to it
-                java.awt.geom.Point2D from = LabelPlacement.nearestEdgePoint(box, w.x(), w.y());
-                if (from.distance(w.x(), w.y()) > LabelPlacement.GAP_PX + w.height() / 2) {
-                    g.draw(new java.awt.geom.Line2D.Double(from.getX(), from.getY(), w.x(), w.y()));
-                }
-                g.drawString(age(brightestFirst.get(i).ageGyr()), (float) box.getX(),
-                        (float) (box.getY() + fm.getAscent()));
-            }
-        });
     }
 }

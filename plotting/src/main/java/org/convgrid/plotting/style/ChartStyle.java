@@ -94,7 +94,11 @@ public final class ChartStyle {
             Double yMax = c.getStyler().getYAxisMax();
             int bandFoot = yMax != null ? (int) Math.floor(c.getScreenYFromChart(yMax)) - 1
                     : top + (int) Math.ceil(reserved.getBounds().getHeight() + reserved.getDescent());
-            g.fillRect(0, 0, c.getWidth(), bandFoot);
+            // only above the plot, where XChart centres the glyph: the y axis's tick labels beside it are left alone
+            // (a tick just under the axis top has a label that reaches above the plot's edge, and blanking the whole
+            // width cut its upper half off; an HR diagram's luminosity axis ends wherever its data end)
+            java.awt.geom.Rectangle2D plot = c.plotBounds();
+            g.fillRect((int) Math.floor(plot.getMinX()), 0, (int) Math.ceil(plot.getWidth()) + 1, bandFoot);
             g.setColor(TEXT);
             g.setFont(TITLE_FONT);
             java.awt.FontMetrics bold = g.getFontMetrics();

@@ -25,6 +25,11 @@ public final class StyledChart extends XYChart {
         super(width, height);
     }
 
+    /** Where XChart drew the plot area (inside the axes), screen pixels; valid once the chart has been painted. */
+    public java.awt.geom.Rectangle2D plotBounds() {
+        return plot.getBounds();
+    }
+
     /** Adds an overlay, painted after the chart and earlier overlays. */
     public void addOverlay(Overlay overlay) {
         overlays.add(overlay);

@@ -42,12 +42,17 @@ final class BracketBands {
         chart.addOverlay((g, c) -> {
             g.setColor(fill);
             for (At at : shown) {
-                double x = c.getScreenXFromChart(at.x());
-                double top = c.getScreenYFromChart(at.bracket().hi());
-                double bottom = c.getScreenYFromChart(at.bracket().lo());
-                g.fill(new Rectangle2D.Double(x - HALF_WIDTH_PX, Math.min(top, bottom), 2 * HALF_WIDTH_PX,
-                        Math.max(Math.abs(bottom - top), ChartStyle.LINE_WIDTH)));
+                g.fill(box(c, at.x(), at.bracket()));
             }
         });
+    }
+
+    /** Where the box of {@code bracket} at {@code x} (data units) is drawn, in screen pixels. */
+    static Rectangle2D box(StyledChart c, double x, Span bracket) {
+        double sx = c.getScreenXFromChart(x);
+        double top = c.getScreenYFromChart(bracket.hi());
+        double bottom = c.getScreenYFromChart(bracket.lo());
+        return new Rectangle2D.Double(sx - HALF_WIDTH_PX, Math.min(top, bottom), 2 * HALF_WIDTH_PX,
+                Math.max(Math.abs(bottom - top), ChartStyle.LINE_WIDTH));
     }
 }

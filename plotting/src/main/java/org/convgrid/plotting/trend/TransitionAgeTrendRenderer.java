@@ -6,6 +6,7 @@ import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.AgeAxisTitle;
+import org.convgrid.plotting.style.AgeUnit;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.LogAxis;
 import org.convgrid.plotting.style.StyledChart;
@@ -20,8 +21,8 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  * appeared), dashed with diamonds for the mass above which every star has a convective core at its age; each bracket
  * a shaded box; refined and grid values are separate series, never joined (grid markers paler); each transient window
  * of small cores a faint dashed box with a square at its middle. With few metallicities every marker carries its
- * mass, rounded to the stated accuracy (the refinement's tolerance, else the bracket). Series are nudged sideways per
- * Z so markers of equal ages stay apart.
+ * mass, rounded to the stated accuracy (the refinement's tolerance, else the bracket), clear of every marker, line
+ * and box. Series are nudged sideways per Z so markers of equal ages stay apart. Ages all below 1 Gyr are in Myr.
  */
 public final class TransitionAgeTrendRenderer {
 
@@ -49,15 +50,18 @@ public final class TransitionAgeTrendRenderer {
     /** The chart of a transition-against-age trend, ages counted from {@code origin}. */
     public static StyledChart render(TransitionAgeTrendData data, AgeOrigin origin) {
         boolean log = data.logAges();
+        AgeUnit unit = AgeUnit.of(data.ages());
+        MethodNote method = methodNote(data);
         StyledChart chart = ChartStyle.newChart("Transition masses against age, Z = "
-                        + SliceLabels.values(data.metallicities()), data.physics().describe(),
-                AgeAxisTitle.of(origin) + (log ? " (logarithmic)" : ""), "transition mass M / M\u2609");
+                        + SliceLabels.values(data.metallicities()), method.subtitle(data.physics().describe()),
+                AgeAxisTitle.of(origin, unit) + (log ? " (logarithmic)" : ""), "transition mass M / M\u2609");
         ChartStyle.legendRight(chart);
-        double first = data.ages().isEmpty() ? 0.0 : data.ages().get(0);
-        double last = data.ages().isEmpty() ? 1.0 : data.ages().get(data.ages().size() - 1);
+        List<Double> ages = data.ages().stream().map(unit::fromGyr).toList();
+        double first = ages.isEmpty() ? 0.0 : ages.get(0);
+        double last = ages.isEmpty() ? 1.0 : ages.get(ages.size() - 1);
         double range = Math.max(last - first, 1e-3);
         if (log) {
-            LogAxis.applyX(chart, first / AGE_PAD_FACTOR, last * AGE_PAD_FACTOR, data.ages());
+            LogAxis.applyX(chart, first / AGE_PAD_FACTOR, last * AGE_PAD_FACTOR, ages);
         } else {
             chart.getStyler().setXAxisMin(first - AGE_PAD_SHARE * range).setXAxisMax(last + AGE_PAD_SHARE * range);
             chart.getStyler().setXAxisDecimalPattern(range < 5 ? "0.0#" : "0");
@@ -65,33 +69,25 @@ public final class TransitionAgeTrendRenderer {
         double top = data.series().stream().flatMap(s -> s.points().stream())
                 .mapToDouble(p -> p.bracket() == null ? p.massMsun() : p.bracket().hi()).max().orElse(1.0);
         top = Math.max(top, data.windows().stream().mapToDouble(w -> w.masses().hi()).max().orElse(0.0));
-        chart.getStyler().setYAxisMin(0.0).setYAxisMax(Math.ceil(top * 1.15 * 10) / 10);
-        chart.getStyler().setYAxisDecimalPattern("0.0#");
+        TransitionMassAxis.apply(chart, top);
         int nZ = data.metallicities().size();
-        boolean labelled = nZ <= TrendDrawing.MAX_LABELLED_FAMILIES;
-        List<TrendDrawing.Label> labels = new java.util.ArrayList<>();
+        Placement at = new Placement(unit, nZ, log, range);
         for (TransitionAgeTrendData.Series s : data.series()) {
             int zIndex = data.metallicities().indexOf(s.zInit());
-            double offset = zIndex - (nZ - 1) / 2.0;
             boolean fc = s.kind() == TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT;
             boolean refined = s.method() == TransitionMethod.REFINED;
             Color color = ChartStyle.seriesColor(zIndex);
             BracketBands.add(chart, s.points().stream()
-                    .map(p -> new BracketBands.At(x(p.ageGyr(), offset, log, range), p.bracket())).toList(), color);
+                    .map(p -> new BracketBands.At(at.x(p.ageGyr(), zIndex), p.bracket())).toList(), color);
             XYSeries line = chart.addSeries((fc ? "fully convective limit, Z = " : "core in every star above, Z = ")
-                            + SliceLabels.number(s.zInit()) + (refined ? ", refined" : ", grid"),
-                    s.points().stream().mapToDouble(p -> x(p.ageGyr(), offset, log, range)).toArray(),
+                            + SliceLabels.number(s.zInit()) + method.legendSuffix(s.method()),
+                    s.points().stream().mapToDouble(p -> at.x(p.ageGyr(), zIndex)).toArray(),
                     s.points().stream().mapToDouble(AgePoint::massMsun).toArray());
             line.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
             line.setLineColor(color);
             line.setLineStyle(ChartStyle.dashed(fc ? 0 : 1, ChartStyle.LINE_WIDTH));
             line.setMarker(fc ? SeriesMarkers.CIRCLE : SeriesMarkers.DIAMOND);
             line.setMarkerColor(refined ? color : ChartStyle.tint(color, GRID_MARKER_TINT));
-            if (labelled) {
-                s.points().forEach(p -> labels.add(new TrendDrawing.Label(x(p.ageGyr(), offset, log, range),
-                        p.massMsun(), SliceLabels.massToAccuracy(p.massMsun(), p.bracket(), p.toleranceMsun()),
-                        color)));
-            }
         }
         for (double z : data.metallicities()) {
             List<TransientWindow> windows = data.windows().stream().filter(w -> w.zInit() == z).toList();
@@ -99,25 +95,61 @@ public final class TransitionAgeTrendRenderer {
                 continue;
             }
             int zIndex = data.metallicities().indexOf(z);
-            double offset = zIndex - (nZ - 1) / 2.0;
             Color color = ChartStyle.seriesColor(zIndex);
             TrendDrawing.windows(chart, windows.stream()
-                    .map(w -> new TrendDrawing.Window(x(w.ageGyr(), offset, log, range), w.masses())).toList(), color);
+                    .map(w -> new TrendDrawing.Window(at.x(w.ageGyr(), zIndex), w.masses())).toList(), color);
             XYSeries middles = chart.addSeries("small transient cores, Z = " + SliceLabels.number(z),
-                    windows.stream().mapToDouble(w -> x(w.ageGyr(), offset, log, range)).toArray(),
+                    windows.stream().mapToDouble(w -> at.x(w.ageGyr(), zIndex)).toArray(),
                     windows.stream().mapToDouble(w -> 0.5 * (w.masses().lo() + w.masses().hi())).toArray());
             middles.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
             middles.setMarker(SeriesMarkers.SQUARE);
             middles.setMarkerColor(ChartStyle.tint(color, WINDOW_MARKER_TINT));
         }
-        TrendDrawing.labels(chart, labels, data.windows().stream().map(w -> new TrendDrawing.Window(
-                x(w.ageGyr(), data.metallicities().indexOf(w.zInit()) - (nZ - 1) / 2.0, log, range), w.masses()))
-                .toList());
+        TrendDrawing.labels(chart, valueLabels(data, at), windows(data, at));
         return chart;
     }
 
-    /** Where an age is drawn: nudged sideways per Z, by a share of the range or, on a log axis, by a few dex. */
-    private static double x(double ageGyr, double offset, boolean log, double range) {
-        return log ? ageGyr * Math.pow(10, DODGE_DEX * offset) : ageGyr + DODGE_SHARE * range * offset;
+    /** How the chart says how the masses were found: once in the subtitle when every series agrees. */
+    static MethodNote methodNote(TransitionAgeTrendData data) {
+        return MethodNote.of(data.series().stream().map(TransitionAgeTrendData.Series::method).toList(),
+                data.series().stream().flatMap(s -> s.points().stream()).map(AgePoint::toleranceMsun).toList());
+    }
+
+    /** Where {@code data} is drawn along x: for tests that check the labels of a rendered chart. */
+    static Placement placement(TransitionAgeTrendData data) {
+        List<Double> ages = data.ages().stream().map(AgeUnit.of(data.ages())::fromGyr).toList();
+        double range = ages.isEmpty() ? 1e-3 : Math.max(ages.get(ages.size() - 1) - ages.get(0), 1e-3);
+        return new Placement(AgeUnit.of(data.ages()), data.metallicities().size(), data.logAges(), range);
+    }
+
+    /** Every marker's value label (none with more metallicities than can be labelled). */
+    static List<TrendDrawing.Label> valueLabels(TransitionAgeTrendData data, Placement at) {
+        if (data.metallicities().size() > TrendDrawing.MAX_LABELLED_FAMILIES) {
+            return List.of();
+        }
+        return data.series().stream().flatMap(s -> {
+            int zIndex = data.metallicities().indexOf(s.zInit());
+            return s.points().stream().map(p -> new TrendDrawing.Label(at.x(p.ageGyr(), zIndex), p.massMsun(),
+                    p.bracket(), SliceLabels.massToAccuracy(p.massMsun(), p.bracket(), p.toleranceMsun()),
+                    ChartStyle.seriesColor(zIndex)));
+        }).toList();
+    }
+
+    /** Every transient window, where it is drawn. */
+    static List<TrendDrawing.Window> windows(TransitionAgeTrendData data, Placement at) {
+        return data.windows().stream().map(w -> new TrendDrawing.Window(
+                at.x(w.ageGyr(), data.metallicities().indexOf(w.zInit())), w.masses())).toList();
+    }
+
+    /**
+     * Where an age is drawn: in the axis unit, nudged sideways per Z (by a share of the range or, on a log axis, by
+     * a few hundredths of a dex) so that markers of equal ages stay apart.
+     */
+    record Placement(AgeUnit unit, int metallicities, boolean log, double range) {
+        double x(double ageGyr, int zIndex) {
+            double offset = zIndex - (metallicities - 1) / 2.0;
+            double age = unit.fromGyr(ageGyr);
+            return log ? age * Math.pow(10, DODGE_DEX * offset) : age + DODGE_SHARE * range * offset;
+        }
     }
 }

@@ -16,8 +16,9 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  * mass is one end of its bracket, so the band shows where the transition lies). Refined and grid values are
  * separate series, never joined; grid markers are paler. Each transient window of small cores is a faint dashed
  * box with a square at its middle. With few ages every marker carries its mass, rounded to the stated accuracy (the
- * refinement's tolerance, else the bracket). Series of different ages are nudged sideways by a few thousandths of a
- * dex so that their markers do not hide each other; the data keep the true Z.
+ * refinement's tolerance, else the bracket), clear of every marker, line and box. Series of different ages are
+ * nudged sideways by a few thousandths of a dex so that their markers do not hide each other; the data keep the true
+ * Z.
  */
 public final class TransitionTrendRenderer {
 
@@ -35,49 +36,39 @@ public final class TransitionTrendRenderer {
     private TransitionTrendRenderer() {
     }
 
-    /** Z nudged sideways by {@code offsetDex} dex on a log axis, or by the same share of the range on a linear one. */
-    private static double nudged(double z, double offsetDex, boolean linear, double zMax) {
-        return linear ? z + offsetDex * zMax * 0.5 : z * Math.pow(10, offsetDex);
-    }
-
     /** The chart of a transition trend. */
     public static StyledChart render(TransitionTrendData data) {
-        List<Double> ages = data.series().stream().map(TransitionTrendData.Series::ageGyr).distinct().sorted()
-                .toList();
+        Placement at = placement(data);
+        List<Double> ages = at.ages();
+        MethodNote method = methodNote(data);
         StyledChart chart = ChartStyle.newChart("Transition masses, Z = "
                 + SliceLabels.values(data.metallicities()) + ", " + SliceLabels.ages(ages),
-                data.physics().describe(), "initial metal mass fraction Z",
+                method.subtitle(data.physics().describe()), "initial metal mass fraction Z",
                 "transition mass M / M\u2609");
         ChartStyle.legendRight(chart);
-        boolean linear = !data.metallicities().isEmpty() && data.metallicities().get(0) <= 0;
         double zMin = data.metallicities().isEmpty() ? 0.001 : data.metallicities().get(0) / Z_PAD;
-        double zMax = data.metallicities().isEmpty() ? 0.1
-                : data.metallicities().get(data.metallicities().size() - 1) * Z_PAD;
         double top = data.series().stream().flatMap(s -> s.points().stream())
                 .mapToDouble(p -> p.bracket() == null ? p.massMsun() : p.bracket().hi()).max().orElse(1.0);
         top = Math.max(top, data.windows().stream().mapToDouble(w -> w.masses().hi()).max().orElse(0.0));
-        chart.getStyler().setYAxisMin(0.0).setYAxisMax(Math.ceil(top * 1.15 * 10) / 10);
-        chart.getStyler().setYAxisDecimalPattern("0.0#");
-        if (!linear) {
-            LogAxis.applyX(chart, zMin, zMax, data.metallicities());
+        TransitionMassAxis.apply(chart, top);
+        if (!at.linear()) {
+            LogAxis.applyX(chart, zMin, at.zMax(), data.metallicities());
         } else {
             // Z = 0 has no place on a log axis: a linear one, labelled at the run's metallicities
             double span = Math.max(data.metallicities().get(data.metallicities().size() - 1), 1e-4);
             LogAxis.applyLinearX(chart, -LINEAR_PAD_SHARE * span, (1 + LINEAR_PAD_SHARE) * span,
                     data.metallicities());
         }
-        List<TrendDrawing.Label> labels = new java.util.ArrayList<>();
         for (TransitionTrendData.Series s : data.series()) {
             int ageIndex = ages.indexOf(s.ageGyr());
             boolean fc = s.kind() == TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT;
             boolean refined = s.method() == TransitionMethod.REFINED;
-            double offset = DODGE_DEX * (ageIndex - (ages.size() - 1) / 2.0);
-            double[] x = s.points().stream().mapToDouble(p -> nudged(p.zInit(), offset, linear, zMax)).toArray();
+            double[] x = s.points().stream().mapToDouble(p -> at.x(p.zInit(), ageIndex)).toArray();
             BracketBands.add(chart, s.points().stream()
-                    .map(p -> new BracketBands.At(nudged(p.zInit(), offset, linear, zMax), p.bracket())).toList(),
+                    .map(p -> new BracketBands.At(at.x(p.zInit(), ageIndex), p.bracket())).toList(),
                     ChartStyle.seriesColor(ageIndex));
             XYSeries line = chart.addSeries((fc ? "fully convective limit, " : "core in every star above, ")
-                            + SliceLabels.age(s.ageGyr()) + (refined ? ", refined" : ", grid"),
+                            + SliceLabels.age(s.ageGyr()) + method.legendSuffix(s.method()),
                     x, s.points().stream().mapToDouble(TrendPoint::massMsun).toArray());
             line.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
             line.setLineColor(ChartStyle.seriesColor(ageIndex));
@@ -85,33 +76,77 @@ public final class TransitionTrendRenderer {
             line.setMarker(fc ? SeriesMarkers.CIRCLE : SeriesMarkers.DIAMOND);
             line.setMarkerColor(refined ? ChartStyle.seriesColor(ageIndex) : ChartStyle.tint(
                     ChartStyle.seriesColor(ageIndex), GRID_MARKER_TINT));
-            if (ages.size() <= TrendDrawing.MAX_LABELLED_FAMILIES) {
-                s.points().forEach(p -> labels.add(new TrendDrawing.Label(nudged(p.zInit(), offset, linear, zMax),
-                        p.massMsun(), SliceLabels.massToAccuracy(p.massMsun(), p.bracket(), p.toleranceMsun()),
-                        ChartStyle.seriesColor(ageIndex))));
-            }
         }
-        List<Double> windowAges = data.windows().stream().map(TransientWindow::ageGyr).distinct().sorted().toList();
-        for (double age : windowAges) {
+        for (double age : at.windowAges()) {
             List<TransientWindow> windows = data.windows().stream().filter(w -> w.ageGyr() == age).toList();
-            int ageIndex = ages.contains(age) ? ages.indexOf(age) : ages.size() + windowAges.indexOf(age);
-            double offset = DODGE_DEX * (ageIndex - (ages.size() - 1) / 2.0);
+            int ageIndex = at.colourIndex(age);
             java.awt.Color color = ChartStyle.seriesColor(ageIndex);
             TrendDrawing.windows(chart, windows.stream().map(w -> new TrendDrawing.Window(
-                    nudged(w.zInit(), offset, linear, zMax), w.masses())).toList(), color);
+                    at.x(w.zInit(), ageIndex), w.masses())).toList(), color);
             XYSeries middles = chart.addSeries("small transient cores, " + SliceLabels.age(age),
-                    windows.stream().mapToDouble(w -> nudged(w.zInit(), offset, linear, zMax)).toArray(),
+                    windows.stream().mapToDouble(w -> at.x(w.zInit(), ageIndex)).toArray(),
                     windows.stream().mapToDouble(w -> 0.5 * (w.masses().lo() + w.masses().hi())).toArray());
             middles.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
             middles.setMarker(SeriesMarkers.SQUARE);
             middles.setMarkerColor(ChartStyle.tint(color, WINDOW_MARKER_TINT));
         }
-        TrendDrawing.labels(chart, labels, data.windows().stream().map(w -> {
-            int ageIndex = ages.contains(w.ageGyr()) ? ages.indexOf(w.ageGyr())
-                    : ages.size() + windowAges.indexOf(w.ageGyr());
-            return new TrendDrawing.Window(nudged(w.zInit(), DODGE_DEX * (ageIndex - (ages.size() - 1) / 2.0), linear,
-                    zMax), w.masses());
-        }).toList());
+        TrendDrawing.labels(chart, valueLabels(data, at), windows(data, at));
         return chart;
+    }
+
+    /** How the chart says how the masses were found: once in the subtitle when every series agrees. */
+    static MethodNote methodNote(TransitionTrendData data) {
+        return MethodNote.of(data.series().stream().map(TransitionTrendData.Series::method).toList(),
+                data.series().stream().flatMap(s -> s.points().stream()).map(TrendPoint::toleranceMsun).toList());
+    }
+
+    /** Where {@code data} is drawn along x. */
+    static Placement placement(TransitionTrendData data) {
+        List<Double> ages = data.series().stream().map(TransitionTrendData.Series::ageGyr).distinct().sorted()
+                .toList();
+        List<Double> windowAges = data.windows().stream().map(TransientWindow::ageGyr).distinct().sorted().toList();
+        boolean linear = !data.metallicities().isEmpty() && data.metallicities().get(0) <= 0;
+        double zMax = data.metallicities().isEmpty() ? 0.1
+                : data.metallicities().get(data.metallicities().size() - 1) * Z_PAD;
+        return new Placement(ages, windowAges, linear, zMax);
+    }
+
+    /** Every marker's value label (none with more ages than can be labelled). */
+    static List<TrendDrawing.Label> valueLabels(TransitionTrendData data, Placement at) {
+        if (at.ages().size() > TrendDrawing.MAX_LABELLED_FAMILIES) {
+            return List.of();
+        }
+        return data.series().stream().flatMap(s -> {
+            int ageIndex = at.ages().indexOf(s.ageGyr());
+            return s.points().stream().map(p -> new TrendDrawing.Label(at.x(p.zInit(), ageIndex), p.massMsun(),
+                    p.bracket(), SliceLabels.massToAccuracy(p.massMsun(), p.bracket(), p.toleranceMsun()),
+                    ChartStyle.seriesColor(ageIndex)));
+        }).toList();
+    }
+
+    /** Every transient window, where it is drawn. */
+    static List<TrendDrawing.Window> windows(TransitionTrendData data, Placement at) {
+        return data.windows().stream().map(w -> new TrendDrawing.Window(at.x(w.zInit(), at.colourIndex(w.ageGyr())),
+                w.masses())).toList();
+    }
+
+    /**
+     * Where a metallicity is drawn: nudged sideways per age (by {@link #DODGE_DEX} dex on a log axis, by the same
+     * share of the range on a linear one) so that markers of different ages do not hide each other.
+     *
+     * @param ages the ages of the series, increasing: each one's colour and nudge
+     * @param windowAges the ages of the transient windows; one with no series comes after the series' ages
+     * @param linear whether the Z axis is linear (it holds Z = 0)
+     * @param zMax the axis maximum
+     */
+    record Placement(List<Double> ages, List<Double> windowAges, boolean linear, double zMax) {
+        double x(double z, int ageIndex) {
+            double offsetDex = DODGE_DEX * (ageIndex - (ages.size() - 1) / 2.0);
+            return linear ? z + offsetDex * zMax * 0.5 : z * Math.pow(10, offsetDex);
+        }
+
+        int colourIndex(double ageGyr) {
+            return ages.contains(ageGyr) ? ages.indexOf(ageGyr) : ages.size() + windowAges.indexOf(ageGyr);
+        }
     }
 }

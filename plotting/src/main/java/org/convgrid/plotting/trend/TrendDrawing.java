@@ -7,6 +7,9 @@ import java.awt.geom.Rectangle2D;
 import java.util.List;
 import org.convgrid.output.Span;
 import org.convgrid.output.transitions.MassRangeText;
+import org.convgrid.plotting.layout.LabelPlacement;
+import org.convgrid.plotting.layout.Obstacles;
+import org.convgrid.plotting.layout.SeriesObstacles;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.StyledChart;
 
@@ -19,8 +22,8 @@ final class TrendDrawing {
     private static final int WINDOW_ALPHA = 35;
     /** Half width of a window box, pixels. */
     private static final double WINDOW_HALF_WIDTH_PX = 7.0;
-    /** Gap between a marker and its label, pixels. */
-    private static final double LABEL_GAP_PX = 12.0;
+    /** Leader lines from a moved label to its marker. */
+    private static final BasicStroke LEADER = new BasicStroke(1.0f);
     private static final BasicStroke WINDOW_OUTLINE = new BasicStroke(1.5f, BasicStroke.CAP_BUTT,
             BasicStroke.JOIN_MITER, 10f, new float[] {5f, 4f}, 0f);
 
@@ -29,10 +32,11 @@ final class TrendDrawing {
      *
      * @param x position along the x axis, data units
      * @param mass the mass, solar masses (the label's height)
+     * @param bracket the bracket drawn around the marker, or null
      * @param text the label
      * @param color the colour of its series
      */
-    record Label(double x, double mass, String text, Color color) {
+    record Label(double x, double mass, Span bracket, String text, Color color) {
     }
 
     /**
@@ -48,46 +52,70 @@ final class TrendDrawing {
     }
 
     /**
-     * Writes every label of the chart beside its marker: right of it, else above-right, below-right or left of it,
-     * whichever first overlaps no marker (of a value or of a window's middle) and no label already written (labels of several series gather where transitions of
-     * neighbouring metallicities or ages meet); a label with no free place, or that would leave the plot, is left
-     * out (the marker and the table still give the value).
+     * Writes every label of the chart beside its marker, each where it covers no marker, no line, no bracket, no
+     * window and no label already written ({@link LabelPlacement}; labels of several series gather where transitions
+     * of neighbouring metallicities or ages meet); a label moved away from its marker is joined to it by a thin line
+     * in the label's colour.
      */
     static void labels(StyledChart chart, List<Label> labels, List<Window> windows) {
         chart.addOverlay((g, c) -> {
             g.setFont(ChartStyle.ANNOTATION_FONT);
             FontMetrics fm = g.getFontMetrics();
-            double left = c.getScreenXFromChart(c.getStyler().getXAxisMin());
-            double right = c.getScreenXFromChart(c.getStyler().getXAxisMax());
-            double height = fm.getAscent();
-            // the markers themselves (values and window middles) are taken before any label
-            List<Rectangle2D> taken = new java.util.ArrayList<>();
-            labels.forEach(l -> taken.add(markerBox(c, l.x(), l.mass())));
-            windows.forEach(w -> taken.add(markerBox(c, w.x(), 0.5 * (w.masses().lo() + w.masses().hi()))));
-            for (Label l : labels) {
-                double x = c.getScreenXFromChart(l.x());
-                double y = c.getScreenYFromChart(l.mass());
-                double width = fm.stringWidth(l.text());
-                double[][] places = {{x + LABEL_GAP_PX, y - height / 2}, {x + LABEL_GAP_PX / 2, y - height - LABEL_GAP_PX},
-                    {x + LABEL_GAP_PX / 2, y + LABEL_GAP_PX}, {x - LABEL_GAP_PX - width, y - height / 2}};
-                for (double[] place : places) {
-                    Rectangle2D box = new Rectangle2D.Double(place[0], place[1], width, height);
-                    if (box.getMinX() >= left && box.getMaxX() <= right
-                            && taken.stream().noneMatch(box::intersects)) {
-                        taken.add(box);
-                        g.setColor(l.color().darker());
-                        g.drawString(l.text(), (float) place[0], (float) (place[1] + height - 2));
-                        break;
-                    }
+            List<LabelPlacement.Placed> placed = layout(c, fm, labels, windows);
+            g.setStroke(LEADER);
+            for (int i = 0; i < labels.size(); i++) {
+                LabelPlacement.Placed p = placed.get(i);
+                g.setColor(labels.get(i).color().darker());
+                if (p.leader() != null) {
+                    g.draw(p.leader());
                 }
+                g.drawString(labels.get(i).text(), (float) p.box().getX(),
+                        (float) (p.box().getY() + fm.getAscent()));
             }
         });
     }
 
-    private static Rectangle2D markerBox(StyledChart c, double x, double mass) {
-        double half = ChartStyle.MARKER_SIZE / 2.0;
-        return new Rectangle2D.Double(c.getScreenXFromChart(x) - half, c.getScreenYFromChart(mass) - half, 2 * half,
-                2 * half);
+    /**
+     * Where {@link #labels} writes each label on the painted chart {@code c} (in the order given): the whole layout,
+     * for the overlay and for tests that check it.
+     */
+    static List<LabelPlacement.Placed> layout(StyledChart c, FontMetrics fm, List<Label> labels,
+                                              List<Window> windows) {
+        return LabelPlacement.place(wanted(c, fm, labels), obstacles(c, labels, windows), plotArea(c));
+    }
+
+    /** The labels as {@link LabelPlacement} wants them: point, text size and the marker's reach. */
+    static List<LabelPlacement.Wanted> wanted(StyledChart c, FontMetrics fm, List<Label> labels) {
+        return labels.stream().map(l -> new LabelPlacement.Wanted(c.getScreenXFromChart(l.x()),
+                c.getScreenYFromChart(l.mass()), fm.stringWidth(l.text()), fm.getAscent() + fm.getDescent(),
+                ChartStyle.MARKER_SIZE / 2.0)).toList();
+    }
+
+    /** Everything drawn in the plot that a label must not cover: the series, every bracket box and window box. */
+    static Obstacles obstacles(StyledChart c, List<Label> labels, List<Window> windows) {
+        Obstacles obstacles = SeriesObstacles.addTo(new Obstacles(), c);
+        labels.stream().filter(l -> l.bracket() != null)
+                .forEach(l -> obstacles.addBox(BracketBands.box(c, l.x(), l.bracket())));
+        windows.forEach(w -> obstacles.addBox(windowBox(c, w)));
+        return obstacles;
+    }
+
+    /** The plot area, in screen pixels. */
+    static Rectangle2D plotArea(StyledChart c) {
+        double left = c.getScreenXFromChart(c.getStyler().getXAxisMin());
+        double right = c.getScreenXFromChart(c.getStyler().getXAxisMax());
+        double top = c.getScreenYFromChart(c.getStyler().getYAxisMax());
+        double bottom = c.getScreenYFromChart(c.getStyler().getYAxisMin());
+        return new Rectangle2D.Double(left, top, right - left, bottom - top);
+    }
+
+    /** Where a window's box is drawn, in screen pixels. */
+    static Rectangle2D windowBox(StyledChart c, Window w) {
+        double x = c.getScreenXFromChart(w.x());
+        double top = c.getScreenYFromChart(w.masses().hi());
+        double bottom = c.getScreenYFromChart(w.masses().lo());
+        return new Rectangle2D.Double(x - WINDOW_HALF_WIDTH_PX, Math.min(top, bottom), 2 * WINDOW_HALF_WIDTH_PX,
+                Math.max(Math.abs(bottom - top), ChartStyle.LINE_WIDTH));
     }
 
     /**
@@ -103,11 +131,7 @@ final class TrendDrawing {
         Color fill = new Color(color.getRed(), color.getGreen(), color.getBlue(), WINDOW_ALPHA);
         chart.addOverlay((g, c) -> {
             for (Window w : ranges) {
-                double x = c.getScreenXFromChart(w.x());
-                double top = c.getScreenYFromChart(w.masses().hi());
-                double bottom = c.getScreenYFromChart(w.masses().lo());
-                Rectangle2D box = new Rectangle2D.Double(x - WINDOW_HALF_WIDTH_PX, Math.min(top, bottom),
-                        2 * WINDOW_HALF_WIDTH_PX, Math.max(Math.abs(bottom - top), ChartStyle.LINE_WIDTH));
+                Rectangle2D box = windowBox(c, w);
                 g.setColor(fill);
                 g.fill(box);
                 g.setColor(color);
