@@ -79,6 +79,15 @@ public final class MainSequenceEvolver {
     /** First step as a fraction of the step the central burning rate allows. */
     public static final double FIRST_STEP_FRACTION = 0.1;
     /**
+     * On arrival at the zero-age main sequence from birth, the first main-sequence step is at most this fraction of
+     * the star's age. Our choice, measured (AgeRequestDependenceProbe, Z = 0.02, the model at 150 Myr): with the
+     * arrival step set by the burning rate and capped at 0.01 x the oldest requested age, the top of the 3He-driven
+     * central convective zone came out 0.0006 / 0.0030 / 0.0055 (1 Msun) and 0.0066 / 0.0120 / 0.0178 (0.8 Msun)
+     * when the oldest age was 150 / 600 / 2000 Myr, against 0.0000-0.0005 and 0.0055-0.0062 with every step limit
+     * x0.25; the step cap of the 150 Myr case, 1.5 Myr at arrival near 38 Myr, is this fraction.
+     */
+    public static final double ARRIVAL_STEP_AGE_FRACTION = 0.04;
+    /**
      * alpha_sc of the semiconvective diffusion coefficient under the Ledoux criterion (Langer, Sugimoto &amp;
      * Fricke 1983; values 0.01-0.1 are in use in the literature, from memory).
      */
@@ -376,7 +385,10 @@ public final class MainSequenceEvolver {
                 // the pre-main-sequence steps near the ZAMS are paced for its age; from here the main-sequence
                 // limits (with rejection) hold, so start from the step a zero-age track starts with instead of
                 // growing by x1.25 from ~1e5 yr (1 Msun: ~20 steps between 37 Myr and 1e8 yr saved, measured)
-                dt = Math.max(dt, firstStep(current));
+                // ... but no longer than a fraction of the age: the step the burning rate allows (~12 Myr at 1 Msun)
+                // left the young main sequence's 3He-driven central cores unresolved, and the zero-age cap of
+                // 0.01 x the oldest requested age made a star's model depend on which other ages were requested
+                dt = Math.max(dt, Math.min(burningStep(current), ARRIVAL_STEP_AGE_FRACTION * age));
             }
         }
         List<AgedModel> answers = answers(ages, landedAges, landed, end, age, detail);
@@ -999,11 +1011,15 @@ public final class MainSequenceEvolver {
     }
 
     private double firstStep(StellarModel zeroAge) {
-        StellarProfile p = zeroAge.profile();
+        return Math.min(burningStep(zeroAge), 0.01 * settings.maxAge());
+    }
+
+    /** {@link #FIRST_STEP_FRACTION} of the step in which the central burning rate uses the X_c change allowed. */
+    private double burningStep(StellarModel model) {
+        StellarProfile p = model.profile();
         double rate = Math.abs(physics.nuclear().burn(p.density(0), p.temperature(0),
-                zeroAge.state().composition(0)).dh1Dt());
-        double step = FIRST_STEP_FRACTION * settings.maxCentralHydrogenChange() / Math.max(rate, 1.0e-30);
-        return Math.min(step, 0.01 * settings.maxAge());
+                model.state().composition(0)).dh1Dt());
+        return FIRST_STEP_FRACTION * settings.maxCentralHydrogenChange() / Math.max(rate, 1.0e-30);
     }
 
     /** Fraction of the step at which X_c crossed {@code end}, interpolated in ln X_c (linear if X_c hit 0). */
