@@ -58,9 +58,10 @@ public final class ConvectiveZoneFinder {
     public static final double DEFAULT_MIN_CORE_MASS_FRACTION = 1.0e-3;
     /**
      * Default smallest mass fraction of a surface zone for it to count as a convective envelope. The thin
-     * hydrogen and helium ionisation zones of A and B stars hold ~1e-9 to 1e-7 of the mass (from memory): they
-     * are listed among the zones but do not make the star a convective-envelope star; F-star envelopes, 1e-5 of
-     * the mass and more, do count (common practice draws the line in this range; no single source).
+     * hydrogen and helium ionisation zones of A and B stars hold ~1e-12 to 3e-8 of the mass (measured on our
+     * 1.4-8 Msun models, Z = 0.008-0.02; up to 3e-7 just above the Teff where envelopes end): they are listed
+     * among the zones but do not make the star a convective-envelope star; F-star envelopes, 1e-5 of the mass and
+     * more, do count (common practice draws the line in this range; no single source).
      */
     public static final double DEFAULT_MIN_ENVELOPE_MASS_FRACTION = 1.0e-6;
     /** Default largest mass fraction above the top of a zone for it to count as reaching the surface. */

@@ -8,9 +8,18 @@ package org.convgrid.output.catalogue;
  * @param massFracOuter m/M at its top
  * @param radiusFracInner r/R at its bottom
  * @param radiusFracOuter r/R at its top
+ * @param zoneMassMsun for a zone whose two m/M ends are written alike (a surface ionisation zone of a hot star,
+ *        under ~5e-8 of the mass, its extent in r/R), its mass in Msun as the model gave it or zones.csv held it;
+ *        NaN for every other zone, whose mass {@link ZoneTable} takes from its written ends
  */
 public record CatalogueZone(ZoneKind kind, double massFracInner, double massFracOuter, double radiusFracInner,
-                            double radiusFracOuter) {
+                            double radiusFracOuter, double zoneMassMsun) {
+
+    /** A zone whose mass is taken from its ends. */
+    public CatalogueZone(ZoneKind kind, double massFracInner, double massFracOuter, double radiusFracInner,
+                         double radiusFracOuter) {
+        this(kind, massFracInner, massFracOuter, radiusFracInner, radiusFracOuter, Double.NaN);
+    }
 
     /** The four kinds of zone, with their {@code zone_kind} spelling. */
     public enum ZoneKind {

@@ -55,7 +55,8 @@ public final class OutcomeRows {
                 envelope ? clamp(c.envelopeBaseRadiusFraction()) : nan,
                 envelope ? c.envelopeMass() / Constants.M_SUN : nan,
                 envelope ? c.turnoverTimeLocal() / Constants.DAY : nan,
-                c == null ? List.of() : zones(c), outcome.solverIterations(), request.physics().criterion(),
+                c == null ? List.of() : zones(c, request.mass() / Constants.M_SUN), outcome.solverIterations(),
+                request.physics().criterion(),
                 request.physics().opacityScale(),
                 envelope ? c.turnoverTimeGlobal() / Constants.DAY : nan);
     }
@@ -91,10 +92,14 @@ public final class OutcomeRows {
     }
 
     /**
-     * Every zone with its kind, centre outwards, without the zones that are empty at the catalogue's precision
-     * (their two ends would be written as the same number).
+     * Every zone with its kind, centre outwards, without the zones that are empty at the catalogue's
+     * precision: both their m/M ends and their r/R ends would be written as the same number. A zone empty in m/M
+     * alone is kept: the hydrogen and helium ionisation zones of A stars hold ~1e-10 to 1e-8 of the mass, so both
+     * their m/M ends are written 1.0, yet they span up to ~1 % of the radius with tens of mesh points (measured:
+     * 1.8 Msun, Z = 0.02, 600 Myr: r/R 0.9908-0.9941 and 0.9986-1), and pulsation work needs them. Such a zone
+     * carries its own mass, since its ends cannot give it.
      */
-    static List<CatalogueZone> zones(ConvectiveStructure c) {
+    static List<CatalogueZone> zones(ConvectiveStructure c, double starMassMsun) {
         List<ConvectiveZone> all = c.zones();
         StructureClass kind = c.structureClass();
         List<CatalogueZone> zones = new ArrayList<>(all.size());
@@ -102,7 +107,9 @@ public final class OutcomeRows {
             ConvectiveZone z = all.get(i);
             double lo = clamp(z.innerMassFraction());
             double hi = Math.max(lo, clamp(z.outerMassFraction()));
-            if (CsvNumbers.format(lo).equals(CsvNumbers.format(hi))) {
+            double rLo = clamp(z.innerRadiusFraction());
+            double rHi = Math.max(rLo, clamp(z.outerRadiusFraction()));
+            if (writtenAlike(lo, hi) && writtenAlike(rLo, rHi)) {
                 continue;
             }
             boolean first = i == 0 && z.innerMassFraction() <= 0.0;
@@ -117,10 +124,14 @@ public final class OutcomeRows {
             } else {
                 zoneKind = ZoneKind.SHELL;
             }
-            double rLo = clamp(z.innerRadiusFraction());
-            zones.add(new CatalogueZone(zoneKind, lo, hi, rLo, Math.max(rLo, clamp(z.outerRadiusFraction()))));
+            double massWhereEndsCannotTell = writtenAlike(lo, hi) ? (hi - lo) * starMassMsun : Double.NaN;
+            zones.add(new CatalogueZone(zoneKind, lo, hi, rLo, rHi, massWhereEndsCannotTell));
         }
         return zones;
+    }
+
+    private static boolean writtenAlike(double a, double b) {
+        return CsvNumbers.format(a).equals(CsvNumbers.format(b));
     }
 
     /** A fraction clamped into [0, 1] against round-off at the centre and surface. */

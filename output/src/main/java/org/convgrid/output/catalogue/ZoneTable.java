@@ -45,13 +45,22 @@ public final class ZoneTable {
             CatalogueZone z = zones.get(i);
             b.append(row.modelId()).append(',').append(i).append(',').append(z.kind().label());
             for (double v : new double[] {z.massFracInner(), z.massFracOuter(), z.radiusFracInner(),
-                    z.radiusFracOuter(), (asWritten(z.massFracOuter()) - asWritten(z.massFracInner()))
-                    * asWritten(row.massMsun())}) {
+                    z.radiusFracOuter(), zoneMass(z, row.massMsun())}) {
                 b.append(',').append(CsvNumbers.format(v));
             }
             b.append('\n');
         }
         return b.toString();
+    }
+
+    /**
+     * Msun: from the ends as written, so that the zone mass comes out the same whether the row was just computed or
+     * read back; for a zone whose m/M ends are written alike (a surface ionisation zone of a hot star: 1.0 and 1.0,
+     * its extent in r/R) the zone's own mass, which a read keeps from the file.
+     */
+    private static double zoneMass(CatalogueZone z, double starMassMsun) {
+        double fromEnds = (asWritten(z.massFracOuter()) - asWritten(z.massFracInner())) * asWritten(starMassMsun);
+        return fromEnds == 0.0 && !Double.isNaN(z.zoneMassMsun()) ? z.zoneMassMsun() : fromEnds;
     }
 
     /**
@@ -73,9 +82,12 @@ public final class ZoneTable {
             Map<String, List<CatalogueZone>> zones = new LinkedHashMap<>();
             for (CSVRecord r : parser) {
                 try {
+                    double inner = CsvNumbers.parse(r.get(3));
+                    double outer = CsvNumbers.parse(r.get(4));
+                    double massWhereEndsCannotTell = inner == outer ? CsvNumbers.parse(r.get(7)) : Double.NaN;
                     zones.computeIfAbsent(r.get(0), id -> new ArrayList<>()).add(new CatalogueZone(
-                            ZoneKind.fromLabel(r.get(2)), CsvNumbers.parse(r.get(3)), CsvNumbers.parse(r.get(4)),
-                            CsvNumbers.parse(r.get(5)), CsvNumbers.parse(r.get(6))));
+                            ZoneKind.fromLabel(r.get(2)), inner, outer, CsvNumbers.parse(r.get(5)),
+                            CsvNumbers.parse(r.get(6)), massWhereEndsCannotTell));
                 } catch (IllegalArgumentException e) {
                     throw new OutputFormatException(file + " line " + (r.getRecordNumber() + 1) + ": "
                             + e.getMessage(), e);

@@ -128,6 +128,50 @@ class CatalogueV2Test {
                 """);
     }
 
+    /**
+     * A 1.8 Msun A star at 600 Myr (Z = 0.02, Teff ~7970 K) as the engine found it: a core, a shell just above it,
+     * the helium II ionisation zone and the hydrogen (and helium I) ionisation zone reaching the surface, the
+     * last two holding ~2e-9 and ~1e-10 of the mass (ends and masses measured on that model).
+     */
+    private static ModelOutcome aStarWithSurfaceIonisationZones() {
+        return outcome("a18", 1.8, new ConvectiveStructure(List.of(new ConvectiveZone(0.0, 0.106871, 0.0, 0.087117),
+                new ConvectiveZone(0.121336, 0.124215, 0.091828, 0.092820),
+                new ConvectiveZone(1.0 - 3.3e-9, 1.0 - 1.25e-9, 0.990759, 0.994137),
+                new ConvectiveZone(1.0 - 1.04e-10, 1.0, 0.998595, 1.0)), StructureClass.CONV_CORE, 0.106871, 1.0,
+                1.0, 0.0, Double.NaN, Double.NaN));
+    }
+
+    @Test
+    void surfaceIonisationZonesThinnerThanTheMassPrecisionAreListedWithTheirRadiiAndMass() {
+        CatalogueRow row = OutcomeRows.toRow(aStarWithSurfaceIonisationZones());
+        assertThat(row.zones()).extracting(CatalogueZone::kind)
+                .containsExactly(ZoneKind.CORE, ZoneKind.SHELL, ZoneKind.SHELL, ZoneKind.SHELL);
+        // both m/M ends read 1.0 at 7 digits; the extent is in r/R and the mass is the zone's own (its last digit
+        // is the round-off of a double m/M next to 1, ~1e-16)
+        assertThat(ZoneTable.lines(row)).isEqualTo("""
+                a18,0,core,0.0,0.106871,0.0,0.087117,0.1923678
+                a18,1,shell,0.121336,0.124215,0.091828,0.09282,0.0051822
+                a18,2,shell,1.0,1.0,0.990759,0.994137,3.69e-09
+                a18,3,shell,1.0,1.0,0.998595,1.0,1.872001e-10
+                """);
+        assertThat(String.join(",", CatalogueWriter.cells(row))).contains(",conv_core,0.106871,0.087117,,,,,5,");
+    }
+
+    @Test
+    void surfaceIonisationZonesKeepTheirMassWhenReadBackAndWrittenAgain(
+            @org.junit.jupiter.api.io.TempDir java.nio.file.Path dir) throws IOException {
+        CatalogueRow row = OutcomeRows.toRow(aStarWithSurfaceIonisationZones());
+        StringBuilder catalogue = new StringBuilder();
+        CatalogueWriter.startingWithHeader(catalogue).writeAll(List.of(row));
+        String written = ZoneTable.headerLine() + ZoneTable.lines(row);
+        java.nio.file.Files.writeString(dir.resolve("catalogue.ecsv"), catalogue);
+        java.nio.file.Files.writeString(dir.resolve("zones.csv"), written);
+        CatalogueRow back = CatalogueReader.readWithZones(dir.resolve("catalogue.ecsv"), dir.resolve("zones.csv"))
+                .get(0);
+        // what a merge or a resume does: read the zones, write them again
+        assertThat(ZoneTable.headerLine() + ZoneTable.lines(back)).isEqualTo(written);
+    }
+
     @Test
     void zonesReadBackOntoTheirRows(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir) throws IOException {
         List<CatalogueRow> rows = List.of(OutcomeRows.toRow(fullyConvective()), OutcomeRows.toRow(coreOnly()),
