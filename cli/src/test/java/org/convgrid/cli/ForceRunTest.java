@@ -97,8 +97,9 @@ class ForceRunTest {
         // picocli wraps lines anywhere, also after a dot: compare without any white space
         String help = run("run", "--help").out().replaceAll("\\s+", "");
         assertThat(help).contains(("catalogue.ecsv, zones.csv, transitions.csv, life_events.csv, manifest.yaml, "
-                + "report.html, the track files in tracks/, the profiles in profiles/ (files named by a track or model id, "
-                + "such as p0-z00-m000.csv), the charts in maps/ and the temporary files of writes cut short").replaceAll("\\s+", ""))
+                + "report.html, the track files in tracks/, the profiles in profiles/ (files named by a track or model "
+                + "id, such as p0-z00-m000.csv), the charts in maps/ and the temporary files of writes cut short")
+                .replaceAll("\\s+", ""))
                 .contains("Keepsthelockfile.convgrid.lockandeveryfileconvgriddoesnotwrite");
     }
 }

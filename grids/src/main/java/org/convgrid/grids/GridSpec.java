@@ -148,7 +148,8 @@ public record GridSpec(String title, List<Double> massesMsun, List<MetallicityPo
         for (int i = 1; i < values.size(); i++) {
             if (!(values.get(i) > values.get(i - 1))) {
                 throw new IllegalArgumentException(name + " values must increase strictly: "
-                        + MessageNumbers.format(values.get(i)) + " follows " + MessageNumbers.format(values.get(i - 1)));
+                        + MessageNumbers.format(values.get(i)) + " follows "
+                        + MessageNumbers.format(values.get(i - 1)));
             }
         }
         return List.copyOf(values);

@@ -34,9 +34,9 @@ final class EarlierRunFiles {
     /** Any track id convgrid makes: a grid star's or a refinement star's. */
     private static final String TRACK_ID = "(?:" + ModelIdFormat.TRACK_ID_REGEX + "|" + RefinedModelIds.TRACK_ID_REGEX
             + ")";
-    /** A track file or its zone table, as {@link RunLayout#trackFile} and {@link RunLayout#trackZonesFile} name them. */
-    private static final Pattern TRACK_FILE = Pattern.compile(TRACK_ID
-            + "(?:" + Pattern.quote(RunLayout.TRACK_ZONES_SUFFIX) + "|" + Pattern.quote(RunLayout.TABLE_EXTENSION) + ")");
+    /** A track file or its zone table, as {@link RunLayout#trackFile} and {@link RunLayout#trackZonesFile} name it. */
+    private static final Pattern TRACK_FILE = Pattern.compile(TRACK_ID + "(?:"
+            + Pattern.quote(RunLayout.TRACK_ZONES_SUFFIX) + "|" + Pattern.quote(RunLayout.TABLE_EXTENSION) + ")");
     /** A profile file, as {@link RunLayout#profileFile} names it: a model id, the track id with its age part. */
     private static final Pattern PROFILE_FILE = Pattern.compile(TRACK_ID + ModelIdFormat.AGE_PART_REGEX
             + Pattern.quote(RunLayout.TABLE_EXTENSION));
