@@ -14,7 +14,8 @@ public enum ZoneKind {
      * A zone that starts at the centre but is too small to count as a core (its top below the run's core threshold):
      * zones.csv lists it as a {@code shell}, but drawn at the centre and called a shell it read as a mistake.
      */
-    SMALL_CENTRAL("small central convective zone (below the core threshold)",
+    // two lines: on one, the legend took half the chart's width from the plot
+    SMALL_CENTRAL("small central convective zone\n(below the core threshold)",
             "small central convective zones (below the core threshold)"),
     /**
      * A convective shell: detached from centre and surface, or, as zones.csv counts them, a surface zone too thin to
@@ -41,7 +42,7 @@ public enum ZoneKind {
         this.plural = plural;
     }
 
-    /** In words, for legends. */
+    /** In words, for legends (broken into two lines where one would crowd the plot). */
     public String label() {
         return label;
     }

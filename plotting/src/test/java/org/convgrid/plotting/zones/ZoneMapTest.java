@@ -111,7 +111,7 @@ class ZoneMapTest {
             assertThat(map.rects()).extracting(ZoneRect::kind).as(map.axis().stem())
                     .containsExactly(ZoneKind.SMALL_CENTRAL, ZoneKind.SHELL, ZoneKind.ENVELOPE);
         }
-        assertThat(ZoneKind.SMALL_CENTRAL.label()).isEqualTo("small central convective zone (below the core threshold)")
+        assertThat(ZoneKind.SMALL_CENTRAL.label()).isEqualTo("small central convective zone\n(below the core threshold)")
                 .doesNotContain("shell");
     }
 
