@@ -13,14 +13,6 @@ package org.convgrid.grids;
  */
 public record ModelIdFormat(int physicsWidth, int metallicityWidth, int massWidth, int ageWidth) {
 
-    /**
-     * Any track id {@link #trackId} makes, whatever the widths: for telling the files convgrid names by id from a
-     * user's own files in the same folder.
-     */
-    public static final String TRACK_ID_REGEX = "p\\d+-z\\d+-m\\d+";
-    /** The age part {@link #modelId} adds to a track id, whatever the width. */
-    public static final String AGE_PART_REGEX = "-a\\d+";
-
     private static final String AGE_SEPARATOR = "-a";
 
     /** The format for axes of the given sizes. */

@@ -7,12 +7,9 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.Predicate;
-import java.util.regex.Pattern;
 import java.util.stream.Stream;
-import org.convgrid.grids.ModelIdFormat;
 import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.RunLayout;
-import org.convgrid.output.transitions.RefinedModelIds;
 import org.convgrid.plotting.RunMaps;
 
 /**
@@ -23,23 +20,14 @@ import org.convgrid.plotting.RunMaps;
  * removed only when that leaves it empty. Without this, tracks and charts of an earlier, larger grid outlived the new
  * run and were read as part of it. In {@code tracks/} and {@code profiles/} only files named by the ids convgrid makes
  * go ({@code p0-z00-m000.csv}, {@code p0-z00-m000.zones.csv}, refinement stars' {@code p0-z00-r007.csv}, profiles'
- * {@code p0-z00-m000-a00.csv}): a user's {@code tracks/my-track.csv} is theirs, although it is a table too.
+ * {@code p0-z00-m000-a00.csv}; {@link RunLayout#isTrackFile}, {@link RunLayout#isProfileFile}): a user's
+ * {@code tracks/my-track.csv} is theirs, although it is a table too.
  */
 final class EarlierRunFiles {
 
     /** The files convgrid writes at the top of a run directory. */
     private static final List<String> TOP_FILES = List.of(RunLayout.CATALOGUE, RunLayout.CATALOGUE_V1,
             RunLayout.ZONES, RunLayout.TRANSITIONS, RunLayout.LIFE_EVENTS, RunLayout.MANIFEST, RunLayout.REPORT);
-
-    /** Any track id convgrid makes: a grid star's or a refinement star's. */
-    private static final String TRACK_ID = "(?:" + ModelIdFormat.TRACK_ID_REGEX + "|" + RefinedModelIds.TRACK_ID_REGEX
-            + ")";
-    /** A track file or its zone table, as {@link RunLayout#trackFile} and {@link RunLayout#trackZonesFile} name it. */
-    private static final Pattern TRACK_FILE = Pattern.compile(TRACK_ID + "(?:"
-            + Pattern.quote(RunLayout.TRACK_ZONES_SUFFIX) + "|" + Pattern.quote(RunLayout.TABLE_EXTENSION) + ")");
-    /** A profile file, as {@link RunLayout#profileFile} names it: a model id, the track id with its age part. */
-    private static final Pattern PROFILE_FILE = Pattern.compile(TRACK_ID + ModelIdFormat.AGE_PART_REGEX
-            + Pattern.quote(RunLayout.TABLE_EXTENSION));
 
     private EarlierRunFiles() {
     }
@@ -60,8 +48,8 @@ final class EarlierRunFiles {
             }
         }
         doomed.addAll(listed(layout.root(), AtomicFiles::isTemporary));
-        doomed.addAll(listed(layout.tracks(), f -> isTrackFile(f) || AtomicFiles.isTemporary(f)));
-        doomed.addAll(listed(layout.profiles(), f -> isProfileFile(f) || AtomicFiles.isTemporary(f)));
+        doomed.addAll(listed(layout.tracks(), f -> RunLayout.isTrackFile(f) || AtomicFiles.isTemporary(f)));
+        doomed.addAll(listed(layout.profiles(), f -> RunLayout.isProfileFile(f) || AtomicFiles.isTemporary(f)));
         doomed.addAll(listed(layout.maps(), f -> RunMaps.isChartFile(f) || AtomicFiles.isTemporary(f)));
         for (Path file : doomed) {
             try {
@@ -74,21 +62,6 @@ final class EarlierRunFiles {
             removeIfEmpty(folder);
         }
         return doomed.size();
-    }
-
-    /** Whether convgrid names its files in {@code tracks/} or {@code profiles/} this way. */
-    private static boolean named(Pattern convgridName, Path file) {
-        return convgridName.matcher(file.getFileName().toString()).matches();
-    }
-
-    /** Whether a file of {@code tracks/} is one convgrid writes (its name is a track id), not the user's. */
-    static boolean isTrackFile(Path file) {
-        return named(TRACK_FILE, file);
-    }
-
-    /** Whether a file of {@code profiles/} is one convgrid writes (its name is a model id), not the user's. */
-    static boolean isProfileFile(Path file) {
-        return named(PROFILE_FILE, file);
     }
 
     /** The regular files of a folder (not followed when it is a link) that the filter takes; none without it. */

@@ -15,12 +15,6 @@ public final class RefinedModelIds {
     /** Digits the counter is padded to. */
     public static final int COUNTER_WIDTH = 3;
 
-    /**
-     * The track id of any refinement model (its id without the age part), for telling the files convgrid names by
-     * id from a user's own files in the same folder.
-     */
-    public static final String TRACK_ID_REGEX = "p\\d+-z\\d+-r\\d+";
-
     private static final Pattern GRID = Pattern.compile("(p\\d+-z\\d+)-m\\d+(-a\\d+)");
     private static final Pattern REFINED = Pattern.compile("(p\\d+-z\\d+)-r(\\d+)(-a\\d+)");
 
