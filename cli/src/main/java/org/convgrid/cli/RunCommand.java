@@ -75,8 +75,9 @@ final class RunCommand implements Callable<Integer> {
 
     @Option(names = "--force", description = "Start over in a directory that already holds a run. First removes "
             + "every file convgrid wrote there: catalogue.ecsv, zones.csv, transitions.csv, life_events.csv, "
-            + "manifest.yaml, report.html, the track files in tracks/, the profiles in profiles/, the charts in maps/ "
-            + "and the temporary files of writes cut short (emptied folders go too). Keeps the lock file "
+            + "manifest.yaml, report.html, the track files in tracks/, the profiles in profiles/ (files named by a "
+            + "track or model id, such as p0-z00-m000.csv), the charts in maps/ and the temporary files of writes "
+            + "cut short (emptied folders go too), and says how many on stderr. Keeps the lock file "
             + RunLock.FILE_NAME + " and every file convgrid does not write. Without --force such a directory is "
             + "refused.")
     boolean force;
@@ -124,6 +125,12 @@ final class RunCommand implements Callable<Integer> {
             long start = System.nanoTime();
             GridRun.Plan plan = runner.prepare(new GridRun.Settings(file, dir, n, chosen, resume, force));
             PrintWriter err = parent.err();
+            if (plan.removedEarlierFiles() > 0) {
+                // said even with --quiet: files were deleted, and the user should not learn it from a missing file
+                err.println("convgrid: --force removed " + Counts.of(plan.removedEarlierFiles(), "file")
+                        + " of the earlier run in " + dir.root());
+                err.flush();
+            }
             ProgressReporter reporter = quiet ? null : new ProgressReporter(err, context.terminal(), System::nanoTime, n);
             if (!quiet) {
                 err.println("convgrid: " + startLine(plan, count, n));

@@ -31,6 +31,31 @@ class CheckCommandTest {
     }
 
     @Test
+    void aGridOfOneStarSaysSoInItsEstimate() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "one.yaml", "mass: {values: [1.0]}\nmetallicity: {z: 0.014, y: 0.27}\n"
+                + "age: {myr: [100, 200]}\n");
+        String out = CliHarness.in(work, FakeChunkSolver.fast()).execute("check", grid.toString(), "--threads", "1")
+                .out();
+        assertThat(out).contains("the one star evolved from birth once to its oldest age")
+                .doesNotContain("1 stars", "each of the 1");
+    }
+
+    @Test
+    void gridErrorsWriteNumbersAsPeopleDoNotAsDoubleToString() throws Exception {
+        CliHarness cli = CliHarness.in(work, FakeChunkSolver.fast());
+        Path zs = CliHarness.writeGrid(work, "zs.yaml", "mass: {values: [1.0]}\n"
+                + "metallicity: {z: [0.06, 1.0E-5], y: [0.27, 0.25]}\nage: {myr: [100]}\n");
+        CliHarness.Execution z = cli.execute("check", zs.toString());
+        assertThat(z.code()).isEqualTo(2);
+        assertThat(z.err()).contains("zs must increase: 1e-5 follows 0.06").doesNotContain("1.0E-5");
+        // "age from birth in Gyr" + "s" said "Gyrs"
+        Path ages = CliHarness.writeGrid(work, "ages.yaml", "mass: {values: [1.0]}\n"
+                + "metallicity: {z: 0.014, y: 0.27}\nage: {gyr: [1.0, 0.5]}\n");
+        CliHarness.Execution a = cli.execute("check", ages.toString());
+        assertThat(a.err()).contains("ages from birth in Gyr must increase: 0.5 follows 1").doesNotContain("Gyrs");
+    }
+
+    @Test
     void theEstimateCountsEvolvedAgesPerStar() throws Exception {
         String axes = "mass: {values: [1.0, 2.0]}\nmetallicity: {z: 0.014, y: 0.27}\n";
         CliHarness cli = CliHarness.in(work, FakeChunkSolver.fast());

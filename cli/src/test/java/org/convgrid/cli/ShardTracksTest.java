@@ -69,6 +69,8 @@ class ShardTracksTest {
         for (int k = 1; k <= 3; k++) {
             assertThat(run("run", "--no-refine", grid.toString(), "--shard", k + "/3", "--quiet").code()).isZero();
         }
+        // a user's table in a shard's tracks/ stays there: it is not one of the run's tracks
+        Files.writeString(work.resolve("runs/test-survey-shard-2-of-3/tracks/my-track.csv"), "mass\n1.0\n");
         assertThat(run("merge", "runs/test-survey-shard-1-of-3", "runs/test-survey-shard-2-of-3",
                 "runs/test-survey-shard-3-of-3", "--out", "merged").code()).isZero();
 
@@ -77,6 +79,7 @@ class ShardTracksTest {
         assertThat(single).hasSize(2 * 78);
         assertThat(single.get(0).getFileName().toString()).isEqualTo("p0-z00-m000.csv");
         List<Path> merged = tracks(work.resolve("merged"));
+        assertThat(work.resolve("merged/tracks/my-track.csv")).doesNotExist();
         assertThat(merged).extracting(Path::getFileName).isEqualTo(single.stream().map(Path::getFileName).toList());
         for (Path t : single) {
             assertThat(Files.readAllBytes(work.resolve("merged/tracks").resolve(t.getFileName())))

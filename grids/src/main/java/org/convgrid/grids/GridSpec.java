@@ -8,6 +8,7 @@ import java.util.Objects;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.units.Constants;
+import org.convgrid.grids.words.MessageNumbers;
 
 /**
  * A model grid as the grid file describes it, validated. Values are in the grid file's units (solar masses, Gyr);
@@ -146,7 +147,9 @@ public record GridSpec(String title, List<Double> massesMsun, List<MetallicityPo
         }
         for (int i = 1; i < values.size(); i++) {
             if (!(values.get(i) > values.get(i - 1))) {
-                throw new IllegalArgumentException(name + " values must increase strictly: " + values);
+                throw new IllegalArgumentException(name + " values must increase strictly: "
+                        + MessageNumbers.format(values.get(i)) + " follows "
+                        + MessageNumbers.format(values.get(i - 1)));
             }
         }
         return List.copyOf(values);

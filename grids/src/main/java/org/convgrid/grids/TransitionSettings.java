@@ -1,5 +1,7 @@
 package org.convgrid.grids;
 
+import org.convgrid.grids.words.MessageNumbers;
+
 /**
  * The grid's {@code transitions:} section: whether {@code run} refines the transition masses by bisection once the
  * grid is computed, and to what bracket width.
@@ -14,7 +16,8 @@ public record TransitionSettings(boolean refine, double toleranceMsun) {
 
     public TransitionSettings {
         if (!(toleranceMsun > 0.0 && Double.isFinite(toleranceMsun))) {
-            throw new IllegalArgumentException("tolerance must be a positive mass, got " + toleranceMsun);
+            throw new IllegalArgumentException("tolerance must be a positive mass, got "
+                    + MessageNumbers.format(toleranceMsun));
         }
     }
 }

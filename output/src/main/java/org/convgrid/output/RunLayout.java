@@ -1,6 +1,7 @@
 package org.convgrid.output;
 
 import java.nio.file.Path;
+import java.util.regex.Pattern;
 
 /**
  * The names of the files of a run directory, spelled once for every module that writes or reads one (the run itself,
@@ -35,6 +36,21 @@ public record RunLayout(Path root) {
     public static final String REPORT = "report.html";
     /** Extension of every table file, tracks and profiles included. */
     public static final String TABLE_EXTENSION = ".csv";
+
+    /**
+     * Any track id convgrid makes, whatever the widths: a grid star's {@code p<i>-z<i>-m<i>} (ModelIdFormat, in the
+     * grids module, which this one cannot see: survey's EarlierRunFilesTest ties the two) or a refinement star's
+     * {@code p<i>-z<i>-r<i>} ({@link org.convgrid.output.transitions.RefinedModelIds} without the age part). Only
+     * files so named in {@code tracks/} and {@code profiles/} are convgrid's: a user's {@code tracks/my-track.csv}
+     * is neither read as a track, nor merged, nor removed by {@code run --force}.
+     */
+    private static final String TRACK_ID = "p\\d+-z\\d+-[mr]\\d+";
+    /** The age part a model id adds to its track id. */
+    private static final String AGE_PART = "-a\\d+";
+    private static final Pattern TRACK_FILE = Pattern.compile(TRACK_ID + "(?:" + Pattern.quote(TRACK_ZONES_SUFFIX)
+            + "|" + Pattern.quote(TABLE_EXTENSION) + ")");
+    private static final Pattern PROFILE_FILE = Pattern.compile(TRACK_ID + AGE_PART
+            + Pattern.quote(TABLE_EXTENSION));
 
     public RunLayout {
         root = root.toAbsolutePath().normalize();
@@ -111,9 +127,17 @@ public record RunLayout(Path root) {
         return profiles().resolve(modelId + TABLE_EXTENSION);
     }
 
-    /** Whether a file name is that of a table (a track or a profile file). */
-    public static boolean isTable(Path file) {
-        return file.getFileName().toString().endsWith(TABLE_EXTENSION);
+    /**
+     * Whether a file of {@code tracks/} is one convgrid writes there, a track file or its zone table: named by a
+     * track id ({@link #trackFile}, {@link #trackZonesFile}).
+     */
+    public static boolean isTrackFile(Path file) {
+        return TRACK_FILE.matcher(file.getFileName().toString()).matches();
+    }
+
+    /** Whether a file of {@code profiles/} is one convgrid writes there: named by a model id ({@link #profileFile}). */
+    public static boolean isProfileFile(Path file) {
+        return PROFILE_FILE.matcher(file.getFileName().toString()).matches();
     }
 
     /** The id a track or profile file is named by: its file name without the extension. */

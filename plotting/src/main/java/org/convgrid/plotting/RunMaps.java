@@ -210,7 +210,7 @@ public final class RunMaps {
                     + o.physics().fileStem() + ".png";
             String group = groupOf(o.zInit(), o.physics(), run);
             entries.add(new MapEntry(ZONES_AGE_FILES + stem, MapEntry.ZONES_AGE, group,
-                    "Convective zones (shaded) and the hydrogen-burning region (outlined) against age, " + what + ", "
+                    "Convective zones (shaded) and " + KippenhahnRenderer.BURNING_LABEL + " against age, " + what + ", "
                             + o.physics().describe() + ".",
                     () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track(), run.timeline(o.trackId())))));
             if (Kippenhahn.build(o, t.track(), run.timeline(o.trackId())).hasThinEnvelope()) {

@@ -64,6 +64,24 @@ class RunMapsTest {
     }
 
     @Test
+    void zonesAgainstAgeCaptionNamesTheBurningRegionAsItsLegendDoes(@TempDir Path dir) throws Exception {
+        List<CatalogueRow> rows = TestRuns.rows(new double[] {1.0}, new double[] {0.014}, new double[] {0, 1});
+        TestRuns.write(dir, rows);
+        TestTracks.write(dir, rows, 40);
+        for (MapEntry entry : RunMaps.plan(RunData.read(dir))) {
+            if (!entry.fileName().startsWith("zones-age_")) {
+                continue;
+            }
+            // the caption said "hydrogen-burning region (outlined)" beside a legend saying "nuclear burning (hatched)"
+            List<String> burning = entry.chart().get().getSeriesMap().values().stream()
+                    .filter(series -> series.isShowInLegend()).map(series -> series.getName())
+                    .filter(name -> name.contains("burning")).toList();
+            assertThat(burning).as(entry.fileName()).hasSize(1);
+            assertThat(entry.caption()).contains(burning.get(0)).doesNotContain("outlined", "hydrogen-burning");
+        }
+    }
+
+    @Test
     void noTracksNoZonesAgainstAgeAndOneAgeNoAgeTrend(@TempDir Path dir) throws Exception {
         TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.2, 1.6, 8), new double[] {0.014}, new double[] {0}));
         assertThat(RunMaps.plan(RunData.read(dir))).extracting(MapEntry::section)

@@ -18,7 +18,10 @@ import org.convgrid.plotting.RunMaps;
  * was cut short) and nothing else. The lock file stays (deleting it would let two processes lock two files of one
  * name, see {@link RunLock}), so does any file convgrid does not write (the user's notes, a script), and a folder is
  * removed only when that leaves it empty. Without this, tracks and charts of an earlier, larger grid outlived the new
- * run and were read as part of it.
+ * run and were read as part of it. In {@code tracks/} and {@code profiles/} only files named by the ids convgrid makes
+ * go ({@code p0-z00-m000.csv}, {@code p0-z00-m000.zones.csv}, refinement stars' {@code p0-z00-r007.csv}, profiles'
+ * {@code p0-z00-m000-a00.csv}; {@link RunLayout#isTrackFile}, {@link RunLayout#isProfileFile}): a user's
+ * {@code tracks/my-track.csv} is theirs, although it is a table too.
  */
 final class EarlierRunFiles {
 
@@ -45,8 +48,8 @@ final class EarlierRunFiles {
             }
         }
         doomed.addAll(listed(layout.root(), AtomicFiles::isTemporary));
-        doomed.addAll(listed(layout.tracks(), f -> RunLayout.isTable(f) || AtomicFiles.isTemporary(f)));
-        doomed.addAll(listed(layout.profiles(), f -> RunLayout.isTable(f) || AtomicFiles.isTemporary(f)));
+        doomed.addAll(listed(layout.tracks(), f -> RunLayout.isTrackFile(f) || AtomicFiles.isTemporary(f)));
+        doomed.addAll(listed(layout.profiles(), f -> RunLayout.isProfileFile(f) || AtomicFiles.isTemporary(f)));
         doomed.addAll(listed(layout.maps(), f -> RunMaps.isChartFile(f) || AtomicFiles.isTemporary(f)));
         for (Path file : doomed) {
             try {

@@ -57,9 +57,11 @@ public final class GridRun {
      * @param owned how many models the shard owns
      * @param started when the run (first session) started
      * @param previousMedian the median seconds per model an earlier session measured, NaN when none
+     * @param removedEarlierFiles how many files of an earlier run {@code --force} removed (0 without it), for the
+     *                            user to hear of it: they were deleted, not moved
      */
     public record Plan(Settings settings, Shard shard, KeptCatalogue kept, long owned, Instant started,
-                       double previousMedian) {
+                       double previousMedian, int removedEarlierFiles) {
 
         /** Models this session computes. */
         public long remaining() {
@@ -101,9 +103,10 @@ public final class GridRun {
             throw new RunSetupException(dir.root() + " already holds a run; add --resume to continue it or "
                     + "--force to start it over");
         }
+        int removed = 0;
         if (s.force()) {
             // also when the catalogue and manifest are gone: tracks or charts of an earlier run must not outlive it
-            dir.clear();
+            removed = dir.clear();
         }
         Shard shard = s.requestedShard() == null ? Shard.ALL : s.requestedShard();
         Instant started = clock.instant();
@@ -112,7 +115,7 @@ public final class GridRun {
         RunManifest start = manifest(s, shard, started, null, Map.of(), Double.NaN).unfinished(Map.of(), Double.NaN,
                 owned);
         dir.create(RunManifestWriter.toYaml(start));
-        return new Plan(s, shard, new KeptCatalogue(Set.of(), true, 0), owned, started, Double.NaN);
+        return new Plan(s, shard, new KeptCatalogue(Set.of(), true, 0), owned, started, Double.NaN, removed);
     }
 
     private Plan resume(Settings s) throws IOException {
@@ -136,7 +139,7 @@ public final class GridRun {
         }
         ShardPlan plan = new ShardPlan(s.grid().spec(), shard, MASSES_PER_CHUNK);
         KeptCatalogue kept = KeptCatalogue.inspectAndTrim(dir.catalogue(), plan);
-        return new Plan(s, shard, kept, plan.count(), old.started(), old.medianSecondsPerModel());
+        return new Plan(s, shard, kept, plan.count(), old.started(), old.medianSecondsPerModel(), 0);
     }
 
     /**

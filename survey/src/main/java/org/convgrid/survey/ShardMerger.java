@@ -126,7 +126,8 @@ public final class ShardMerger {
             }
             List<Path> files;
             try (Stream<Path> listed = Files.list(tracks)) {
-                files = listed.filter(RunLayout::isTable).sorted().toList();
+                // convgrid's own only: a user's file beside them is not part of the run
+                files = listed.filter(RunLayout::isTrackFile).sorted().toList();
             }
             for (Path file : files) {
                 AtomicFiles.writeBinary(out.tracks().resolve(file.getFileName().toString()),

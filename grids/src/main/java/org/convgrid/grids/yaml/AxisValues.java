@@ -3,6 +3,7 @@ package org.convgrid.grids.yaml;
 import java.util.ArrayList;
 import java.util.List;
 import org.convgrid.grids.GridProblemKind;
+import org.convgrid.grids.words.MessageNumbers;
 import org.snakeyaml.engine.v2.nodes.Node;
 
 /** Lists of numbers (a lone scalar counts as a one-item list), each value checked at its own node. */
@@ -11,24 +12,28 @@ final class AxisValues {
     private AxisValues() {
     }
 
-    /** Numbers in range and strictly increasing; null when any has a problem. */
-    static List<Double> increasing(Node node, String what, Range range, NodeReader reader) {
-        return numbers(node, what, range, Order.INCREASING, reader);
+    /**
+     * Numbers in range and strictly increasing; null when any has a problem.
+     *
+     * @param plural {@code what} for several, for "ages from birth in Gyr must increase" (an added "s" gave "Gyrs")
+     */
+    static List<Double> increasing(Node node, String what, String plural, Range range, NodeReader reader) {
+        return numbers(node, what, plural, range, Order.INCREASING, reader);
     }
 
     /** Numbers in range, each different from the others, in the file's order; null when any has a problem. */
     static List<Double> distinct(Node node, String what, Range range, NodeReader reader) {
-        return numbers(node, what, range, Order.DISTINCT, reader);
+        return numbers(node, what, what + "s", range, Order.DISTINCT, reader);
     }
 
     /** Numbers in range, repeats allowed, in the file's order; null when any has a problem. */
     static List<Double> any(Node node, String what, Range range, NodeReader reader) {
-        return numbers(node, what, range, Order.ANY, reader);
+        return numbers(node, what, what + "s", range, Order.ANY, reader);
     }
 
     private enum Order { INCREASING, DISTINCT, ANY }
 
-    private static List<Double> numbers(Node node, String what, Range range, Order order,
+    private static List<Double> numbers(Node node, String what, String plural, Range range, Order order,
                                         NodeReader reader) {
         List<Node> items = reader.items(node, what);
         if (items == null) {
@@ -40,7 +45,6 @@ final class AxisValues {
             return null;
         }
         List<Double> values = new ArrayList<>();
-        Node previous = null;
         // seen values in a hash set: the duplicate check stays linear in the length of the list
         java.util.Set<Double> seen = new java.util.HashSet<>();
         boolean ok = true;
@@ -57,14 +61,13 @@ final class AxisValues {
                 ok = false;
             } else if (order == Order.INCREASING && !values.isEmpty() && v < values.get(values.size() - 1)) {
                 reader.problem(item, GridProblemKind.OUT_OF_RANGE,
-                        what + "s must increase: " + NodeReader.written(item) + " follows "
-                        + NodeReader.written(previous));
+                        plural + " must increase: " + MessageNumbers.format(v) + " follows "
+                        + MessageNumbers.format(values.get(values.size() - 1)));
                 ok = false;
             }
             if (v != null) {
                 values.add(v);
                 seen.add(v);
-                previous = item;
             }
         }
         return ok ? values : null;

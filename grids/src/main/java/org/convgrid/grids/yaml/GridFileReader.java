@@ -275,7 +275,7 @@ public final class GridFileReader {
         }
         if (given.get(0).equals("ms_fraction")) {
             List<Double> fractions = AxisValues.increasing(fields.value("ms_fraction"), "main-sequence fraction",
-                    Range.closed(0.0, 1.0), reader);
+                    "main-sequence fractions", Range.closed(0.0, 1.0), reader);
             return fractions == null || origin == null ? null : AgeAxis.msFractions(fractions, origin);
         }
         boolean myr = given.get(0).equals("myr");
@@ -284,8 +284,9 @@ public final class GridFileReader {
         Range range = origin == AgeOrigin.BIRTH ? Range.aboveZero(MAX_AGE_GYR * scale).noteAtExcludedLow(
                 "age 0 would be the start model; for the zero-age main sequence add origin: zams")
                 : Range.closed(0.0, MAX_AGE_GYR * scale);
-        String what = (origin == AgeOrigin.BIRTH ? "age from birth" : "age") + (myr ? " in Myr" : " in Gyr");
-        List<Double> ages = AxisValues.increasing(fields.value(given.get(0)), what, range, reader);
+        String unit = (origin == AgeOrigin.BIRTH ? " from birth" : "") + (myr ? " in Myr" : " in Gyr");
+        List<Double> ages = AxisValues.increasing(fields.value(given.get(0)), "age" + unit, "ages" + unit, range,
+                reader);
         if (ages == null || origin == null) {
             return null;
         }

@@ -42,7 +42,8 @@ final class MassAxisReader {
                             "mass: 'values' cannot be combined with '" + other + "'");
                 }
             }
-            return AxisValues.increasing(fields.value("values"), "mass value", MASS_RANGE, reader);
+            return AxisValues.increasing(fields.value("values"), "mass value", "mass values", MASS_RANGE,
+                    reader);
         }
         if (!fields.has("from") || !fields.has("to")) {
             reader.problem(map, GridProblemKind.MISSING_KEY,

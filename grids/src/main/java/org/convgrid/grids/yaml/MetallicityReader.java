@@ -34,7 +34,7 @@ final class MetallicityReader {
         MappingFields fields = new MappingFields(map, "metallicity", KEYS, reader);
         List<Double> zs = null;
         if (fields.has("z")) {
-            zs = AxisValues.increasing(fields.value("z"), "z", Z_RANGE, reader);
+            zs = AxisValues.increasing(fields.value("z"), "z", "zs", Z_RANGE, reader);
         } else {
             reader.problem(map, GridProblemKind.MISSING_KEY,
                     "metallicity needs 'z', the initial metal mass fraction(s)");

@@ -55,7 +55,7 @@ public final class TrackReader {
         }
         List<Path> files;
         try (var entries = Files.list(tracksDir)) {
-            files = entries.filter(f -> RunLayout.isTable(f) && !RunLayout.isTrackZones(f) && Files.isRegularFile(f))
+            files = entries.filter(f -> RunLayout.isTrackFile(f) && !RunLayout.isTrackZones(f) && Files.isRegularFile(f))
                     .sorted().toList();
         }
         List<Track> tracks = new ArrayList<>(files.size());

@@ -8,6 +8,7 @@ import java.util.Map;
 import java.util.function.Predicate;
 import org.convgrid.engine.convection.ConvectiveZoneFinder;
 import org.convgrid.engine.convection.StructureClass;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueRow;
 
@@ -33,6 +34,9 @@ import org.convgrid.output.catalogue.CatalogueRow;
  * contraction before exhaustion (Kippenhahn, Weigert &amp; Weiss 2012, Stellar Structure and Evolution, 2nd ed.,
  * ch. 31), so those stars say nothing about the mass at which cores set in, and counting them would leave every
  * slice that reaches its turn-off without one. Such a slice's note names them.
+ *
+ * <p>Models past the main sequence are not searched at all (no structure is kept for them), so a slice that holds
+ * some says which masses in its notes: its "core in every star above" means up to the highest main-sequence mass.
  *
  * @param coreMassFractionThreshold smallest m/M of a convective core that counts as a core, in [0, 1)
  */
@@ -108,6 +112,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         describeFullyConvective(fc, usable, notes);
         describeCore(core, window, coredAtTop, coreSearch, coreSearch.size() < usable.size(), notes);
         describeRecededCores(usable.subList(coreSearch.size(), usable.size()), notes);
+        describePastMainSequence(byMass, notes);
         TransitionRow row = new TransitionRow(slice, yInit, fc, core, window, TransitionMethod.GRID, Double.NaN, "");
         List<Span> reported = new ArrayList<>(row.transientCoreCrossings());
         if (fc.found()) {
@@ -233,6 +238,28 @@ public record TransitionFinder(double coreMassFractionThreshold) {
 
     private static String timesInWords(int times) {
         return times == 1 ? "once" : times == 2 ? "twice" : times + " times";
+    }
+
+    /**
+     * Names the masses past the main sequence, each unbroken run of them on its own ("1.6-2.4 Msun past the main
+     * sequence (not searched)"): every transition of the slice was read below them.
+     */
+    private static void describePastMainSequence(List<CatalogueRow> byMass, List<String> notes) {
+        List<Span> runs = new ArrayList<>();
+        int start = -1;
+        for (int i = 0; i <= byMass.size(); i++) {
+            boolean past = i < byMass.size() && byMass.get(i).status() == ModelStatus.PAST_MAIN_SEQUENCE;
+            if (past && start < 0) {
+                start = i;
+            } else if (!past && start >= 0) {
+                runs.add(new Span(byMass.get(start).massMsun(), byMass.get(i - 1).massMsun()));
+                start = -1;
+            }
+        }
+        if (!runs.isEmpty()) {
+            notes.add(String.join(", ", runs.stream().map(MassRangeText::of).toList())
+                    + " Msun past the main sequence (not searched)");
+        }
     }
 
     private static void describeRecededCores(List<CatalogueRow> receded, List<String> notes) {

@@ -53,6 +53,30 @@ class TransitionFinderTest {
     }
 
     @Test
+    void massesPastTheMainSequenceAreNamedAndChangeNoNumber() {
+        List<CatalogueRow> searched = List.of(ok(0.2, FC, 1), ok(0.4, ENV, 0), ok(1.2, BOTH, 0.05),
+                ok(1.4, BOTH, 0.08));
+        List<CatalogueRow> withPast = new ArrayList<>(searched);
+        withPast.add(row(0.02, 1.6, ENV, 0.0, ModelStatus.PAST_MAIN_SEQUENCE));
+        withPast.add(row(0.02, 2.0, ENV, 0.0, ModelStatus.PAST_MAIN_SEQUENCE));
+        withPast.add(row(0.02, 2.4, ENV, 0.0, ModelStatus.PAST_MAIN_SEQUENCE));
+        TransitionRow plain = finder.find(searched).get(0);
+
+        TransitionRow t = finder.find(withPast).get(0);
+
+        assertThat(t.notes()).isEqualTo("1.6-2.4 Msun past the main sequence (not searched)");
+        assertThat(t.withNotes("")).isEqualTo(plain);
+        assertThat(t.convCoreOnset().massMsun()).isEqualTo(1.2);
+    }
+
+    @Test
+    void oneMassPastTheMainSequenceIsNamedAlone() {
+        List<CatalogueRow> rows = List.of(ok(0.2, FC, 1), ok(0.4, ENV, 0), ok(1.2, BOTH, 0.05),
+                row(0.02, 1.4, ENV, 0.0, ModelStatus.PAST_MAIN_SEQUENCE));
+        assertThat(finder.find(rows).get(0).notes()).isEqualTo("1.4 Msun past the main sequence (not searched)");
+    }
+
+    @Test
     void noCrossingLeavesTheMassEmptyAndSaysWhy() {
         TransitionRow allFc = finder.find(List.of(ok(0.1, FC, 1), ok(0.2, FC, 1))).get(0);
         assertThat(allFc.fullyConvective().found()).isFalse();

@@ -22,13 +22,17 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
  * Turns {@link KippenhahnData} into a chart: age along x, m/M up; convective zones filled in the zone-map colours
- * (one staircase polygon per band of consecutive steps, see {@link Bands}); the hydrogen-burning region outlined
+ * (one staircase polygon per band of consecutive steps, see {@link Bands}); the nuclear-burning region outlined
  * in black and hatched, not filled, so the convective colours under it stay true and it reads in grey print.
  */
 public final class KippenhahnRenderer {
 
-    // where eps_nuc exceeds 1 % of its maximum: deuterium burning on the early pre-main sequence, hydrogen after it
-    static final String BURNING_LABEL = "nuclear burning (hatched)";
+    /**
+     * The legend's name of the burning region, which the caption repeats word for word (they disagreed: "hydrogen
+     * burning (outlined)" against this). Nuclear, not hydrogen: where eps_nuc exceeds 1 % of its maximum is deuterium
+     * burning on the early pre-main sequence, hydrogen after it.
+     */
+    public static final String BURNING_LABEL = "nuclear burning (hatched)";
     /** The trade's abbreviation: the full words would run out of the plot next to a late zero-age main sequence. */
     static final String ZAMS_LABEL = "ZAMS";
     private static final Color TRANSPARENT = new Color(0, 0, 0, 0);

@@ -2,8 +2,10 @@ package org.convgrid.plotting.label;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
+import java.math.RoundingMode;
 import java.util.Locale;
 import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.Span;
 import org.convgrid.output.transitions.Slice;
 
@@ -28,14 +30,16 @@ public final class SliceLabels {
     /**
      * A transition mass rounded to the accuracy its bracket gives: as many decimals as the first significant digit
      * of the bracket's width (0.3640625 in a bracket 0.0016 wide is {@code 0.364}; in a bracket 0.1 wide,
-     * {@code 0.4}). Without a bracket, {@link #number(double)}.
+     * {@code 0.4}). Without a bracket, {@link #number(double)}. Rounded half up from the mass as transitions.csv
+     * writes it ({@link CsvNumbers#format}), so a mid-bisection mass such as 0.6375 reads {@code 0.638} here as in
+     * the README: rounded from its binary value, half-even, it read 0.637 (and 0.2875 read 0.287).
      */
     public static String massWithin(double massMsun, Span bracket) {
         if (bracket == null || !Double.isFinite(massMsun) || !(bracket.hi() > bracket.lo())) {
             return number(massMsun);
         }
         int decimals = (int) Math.max(0, Math.min(6, Math.ceil(-Math.log10(bracket.hi() - bracket.lo()) - 1e-9)));
-        return new BigDecimal(massMsun).setScale(decimals, java.math.RoundingMode.HALF_EVEN).toPlainString();
+        return new BigDecimal(CsvNumbers.format(massMsun)).setScale(decimals, RoundingMode.HALF_UP).toPlainString();
     }
 
     /**

@@ -237,14 +237,14 @@ public final class ReportPage {
     }
 
     private static void transitions(StringBuilder b, RunData run) {
-        b.append("<h2 id=\"transitions\">Transition masses</h2>\n<table>\n<tr><th>Z</th><th>age / Gyr</th><th>physics</th>"
+        b.append("<h2 id=\"transitions\">Transition masses</h2>\n<table>\n<tr><th>Z</th><th>age</th><th>physics</th>"
                 + "<th>fully convective up to / M\u2609</th><th>bracket / M\u2609</th>"
                 + "<th>core in every star above / M\u2609</th><th>bracket / M\u2609</th>"
                 + "<th>small transient cores / M\u2609</th><th>method</th><th>tolerance / M\u2609</th>"
                 + "<th>notes</th></tr>\n");
         for (TransitionRow t : run.transitions()) {
             b.append("<tr><td class=\"num\">").append(SliceLabels.number(t.slice().zInit()))
-                    .append("</td><td class=\"num\">").append(SliceLabels.number(t.slice().ageGyr()))
+                    .append("</td><td class=\"num\">").append(SliceLabels.age(t.slice().ageGyr()))
                     .append("</td><td>").append(Html.escape(SliceLabels.physics(t.slice()))).append("</td>");
             estimate(b, t.fullyConvective(), t.toleranceMsun());
             estimate(b, t.convCoreOnset(), t.toleranceMsun());
@@ -272,13 +272,13 @@ public final class ReportPage {
             b.append("<p>None: every model converged.</p>\n");
             return;
         }
-        b.append("<table>\n<tr><th>model</th><th>mass / M\u2609</th><th>Z</th><th>age / Gyr</th><th>status</th>"
+        b.append("<table>\n<tr><th>model</th><th>mass / M\u2609</th><th>Z</th><th>age</th><th>status</th>"
                 + "<th>reason</th></tr>\n");
         for (CatalogueRow r : failed) {
             b.append("<tr><td>").append(Html.escape(r.modelId())).append("</td><td class=\"num\">")
                     .append(SliceLabels.number(r.massMsun())).append("</td><td class=\"num\">")
                     .append(SliceLabels.number(r.zInit())).append("</td><td class=\"num\">")
-                    .append(SliceLabels.number(r.ageGyr())).append("</td><td>").append(r.status().label())
+                    .append(SliceLabels.age(r.ageGyr())).append("</td><td>").append(r.status().label())
                     .append("</td><td>").append(Html.escape(r.statusDetail())).append("</td></tr>\n");
         }
         b.append("</table>\n");

@@ -11,8 +11,15 @@ public enum ZoneKind {
     /** The zone starts at the centre. */
     CORE("convective core"),
     /**
-     * A convective shell: detached from centre and surface, or, as zones.csv counts them, a central zone below the
-     * run's core threshold or a surface zone too thin to be an envelope.
+     * A zone that starts at the centre but is too small to count as a core (its top below the run's core threshold):
+     * zones.csv lists it as a {@code shell}, but drawn at the centre and called a shell it read as a mistake.
+     */
+    // two lines: on one, the legend took half the chart's width from the plot
+    SMALL_CENTRAL("small central convective zone\n(below the core threshold)",
+            "small central convective zones (below the core threshold)"),
+    /**
+     * A convective shell: detached from centre and surface, or, as zones.csv counts them, a surface zone too thin to
+     * be an envelope.
      */
     SHELL("convective shell"),
     /** The asked age lies past core-hydrogen exhaustion at this mass: a known outcome, not a failure. */
@@ -24,23 +31,38 @@ public enum ZoneKind {
     static final double EDGE_TOLERANCE = 1.0e-6;
 
     private final String label;
+    private final String plural;
 
     ZoneKind(String label) {
-        this.label = label;
+        this(label, label + "s");
     }
 
-    /** In words, for legends. */
+    ZoneKind(String label, String plural) {
+        this.label = label;
+        this.plural = plural;
+    }
+
+    /** In words, for legends (broken into two lines where one would crowd the plot). */
     public String label() {
         return label;
     }
 
-    /** The kind zones.csv gives a zone (its {@code zone_kind}), so that every map names a zone as the files do. */
-    public static ZoneKind of(CatalogueZone.ZoneKind listed) {
-        return switch (listed) {
+    /** In words, for notes about several. */
+    public String plural() {
+        return plural;
+    }
+
+    /**
+     * The kind zones.csv gives a zone (its {@code zone_kind}), so that every map names a zone as the files do; a
+     * {@code shell} that starts at the centre is the small central zone below the core threshold that zones.csv
+     * counts with the shells.
+     */
+    public static ZoneKind of(CatalogueZone zone) {
+        return switch (zone.kind()) {
             case WHOLE_STAR -> WHOLE_STAR;
             case ENVELOPE -> ENVELOPE;
             case CORE -> CORE;
-            case SHELL -> SHELL;
+            case SHELL -> zone.massFracInner() <= EDGE_TOLERANCE ? SMALL_CENTRAL : SHELL;
         };
     }
 

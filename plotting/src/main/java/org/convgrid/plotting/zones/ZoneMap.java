@@ -78,7 +78,7 @@ public final class ZoneMap {
                     Span extent = axis == ZoneAxis.MASS_FRACTION ? new Span(z.massFracInner(), z.massFracOuter())
                             : new Span(z.radiusFracInner(), z.radiusFracOuter());
                     rects.add(new ZoneRect(row.modelId(), row.massMsun(), edges[i], edges[i + 1], extent.lo(),
-                            extent.hi(), ZoneKind.of(z.kind())));
+                            extent.hi(), ZoneKind.of(z)));
                 }
             } else {
                 List<Span> fallback = radiusZonesById.containsKey(row.modelId())

@@ -81,7 +81,7 @@ public final class ZoneMapRenderer {
 
     /** The note naming a zone kind that is listed in zones.csv but too thin to see on this map. */
     static String tooThinNote(ZoneKind kind) {
-        return "Some " + kind.label() + "s (zones.csv) are too thin to show here.";
+        return "Some " + kind.plural() + ", listed in zones.csv, are too thin to show here.";
     }
 
     /** Fill colour of a zone kind: the hue of the matching structure class, lightened for large areas. */
@@ -89,6 +89,8 @@ public final class ZoneMapRenderer {
         return switch (kind) {
             case WHOLE_STAR -> ChartStyle.tint(ChartStyle.VERMILLION, 0.35);
             case CORE -> ChartStyle.tint(ChartStyle.BLUISH_GREEN, 0.35);
+            // the core's hue, paler: it is a core in all but size
+            case SMALL_CENTRAL -> ChartStyle.tint(ChartStyle.BLUISH_GREEN, 0.7);
             case ENVELOPE -> ChartStyle.tint(ChartStyle.BLUE, 0.35);
             case SHELL -> ChartStyle.tint(ChartStyle.REDDISH_PURPLE, 0.2);
             case PAST_MAIN_SEQUENCE -> ChartStyle.PAST_MAIN_SEQUENCE_GREY;

@@ -27,9 +27,18 @@ class MassWithinTest {
     }
 
     @Test
+    void aMassHalfwayRoundsUpFromItsWrittenValueAsTheReadmeDoes() {
+        // 0.6375 and 0.2875 are a hair below their decimals in binary: half-even from the binary gave 0.637, 0.287
+        assertThat(SliceLabels.massToAccuracy(0.6375, null, 0.002)).isEqualTo("0.638");
+        assertThat(SliceLabels.massToAccuracy(0.2875, null, 0.002)).isEqualTo("0.288");
+        assertThat(SliceLabels.massToAccuracy(0.6365, null, 0.002)).isEqualTo("0.637");
+        assertThat(SliceLabels.massWithin(0.31640625, new Span(0.3125, 0.31640625))).isEqualTo("0.316");
+    }
+
+    @Test
     void aWindowWithEqualEndsIsOneMassNotARange() {
         // the demo's Z = 0.008, 150 Myr slice: the only cored refinement model, 0.2875 Msun, is both ends
-        assertThat(SliceLabels.massRange(new Span(0.2875, 0.2875), 0.002)).isEqualTo("0.287");
+        assertThat(SliceLabels.massRange(new Span(0.2875, 0.2875), 0.002)).isEqualTo("0.288");
         assertThat(SliceLabels.massRange(new Span(0.315625, 0.7359375), 0.002)).isEqualTo("0.316\u20130.736");
         assertThat(SliceLabels.massRange(new Span(0.45, 0.45), Double.NaN)).isEqualTo("0.45");
     }

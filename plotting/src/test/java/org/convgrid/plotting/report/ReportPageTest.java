@@ -76,8 +76,23 @@ class ReportPageTest {
                 found.convCoreOnset(), new Span(0.2875, 0.2875), TransitionMethod.REFINED, 0.002, "");
         RunData run = new RunData(rows, List.of(oneMassWindow), true, null, Map.of(), List.of());
         String html = ReportPage.html(run, dir);
-        assertThat(html).contains("<th>core in every star above / M\u2609</th>", "<td class=\"num\">0.287</td>")
-                .doesNotContain("0.287\u20130.287", "lasting");
+        assertThat(html).contains("<th>core in every star above / M\u2609</th>", "<td class=\"num\">0.288</td>")
+                .doesNotContain("0.288\u20130.288", "lasting");
+    }
+
+    @Test
+    void transitionMassesRoundHalfUpAsTheReadmeAndAgesBelowAGyrAreInMyr(@TempDir Path dir) throws Exception {
+        // the demo's Z = 0.02, 600 Myr window, 0.31640625-0.6375 (transitions.csv), which the README quotes as
+        // 0.317-0.638: rounded half-even from the binary value, the report said 0.637
+        List<CatalogueRow> rows = TestRuns.rows(TestRuns.masses(0.2, 1.4, 5), new double[] {0.02},
+                new double[] {0.6});
+        TransitionRow found = TransitionFinder.withDefaults().find(rows).get(0);
+        TransitionRow window = new TransitionRow(found.slice(), found.yInit(), found.fullyConvective(),
+                found.convCoreOnset(), new Span(0.31640625, 0.6375), TransitionMethod.REFINED, 0.002, "");
+        RunData run = new RunData(rows, List.of(window), true, null, Map.of(), List.of());
+        String html = ReportPage.html(run, dir);
+        assertThat(html).contains("<td class=\"num\">0.316\u20130.638</td>", "<td class=\"num\">600 Myr</td>",
+                "<th>age</th>").doesNotContain("0.637", "age / Gyr", "<td class=\"num\">0.6</td>");
     }
 
     @Test

@@ -62,6 +62,8 @@ class TrackReaderTest {
         Files.writeString(tracks.resolve("p0-z00-m001.csv"), TestTracks.text(2.0, 0.014, 5));
         Files.writeString(tracks.resolve("p0-z00-m000.csv"), TestTracks.text(1.0, 0.014, 5));
         Files.writeString(tracks.resolve("notes.txt"), "not a track");
+        // a user's own table beside convgrid's is not read as a track (it failed the run: "misses the column")
+        Files.writeString(tracks.resolve("my-track.csv"), "mass,teff\n1.0,5772\n");
         assertThat(TrackReader.readAll(tracks)).extracting(Track::trackId).containsExactly("p0-z00-m000",
                 "p0-z00-m001");
         assertThat(Track.trackIdOf("p0-z01-m009-a02")).isEqualTo("p0-z01-m009");

@@ -97,18 +97,22 @@ class ZoneMapTest {
 
     @Test
     void bothMapsNameAZoneAsTheZoneListDoes() {
-        // a central zone below the core threshold and a thin surface zone are shells in zones.csv (README, "Zones"),
-        // whatever their position suggests; an envelope may end a hair below r/R = 1
+        // a central zone below the core threshold and a thin surface zone are shells in zones.csv (README, "Zones");
+        // the central one is named for what it is, a small central zone, never "convective shell" (a reader took the
+        // label at the centre for a mistake); an envelope may end a hair below r/R = 1
         CatalogueRow base = rows.stream().filter(r -> r.isOk() && r.massMsun() == 1.0).findFirst().orElseThrow();
         CatalogueRow listed = base.withZones(List.of(
                 new CatalogueZone(CatalogueZone.ZoneKind.SHELL, 0.0, 0.0002, 0.0, 0.02),
+                new CatalogueZone(CatalogueZone.ZoneKind.SHELL, 0.4, 0.5, 0.3, 0.35),
                 new CatalogueZone(CatalogueZone.ZoneKind.ENVELOPE, 0.97, 1.0, 0.72, 0.999995)));
         Slice slice = Slice.of(listed);
         for (ZoneMapData map : List.of(ZoneMap.inMass(slice, List.of(listed), null),
                 ZoneMap.inRadius(slice, List.of(listed), null, Map.of()))) {
             assertThat(map.rects()).extracting(ZoneRect::kind).as(map.axis().stem())
-                    .containsExactly(ZoneKind.SHELL, ZoneKind.ENVELOPE);
+                    .containsExactly(ZoneKind.SMALL_CENTRAL, ZoneKind.SHELL, ZoneKind.ENVELOPE);
         }
+        assertThat(ZoneKind.SMALL_CENTRAL.label()).isEqualTo("small central convective zone\n(below the core threshold)")
+                .doesNotContain("shell");
     }
 
     @Test
@@ -120,11 +124,15 @@ class ZoneMapTest {
                 new CatalogueZone(CatalogueZone.ZoneKind.ENVELOPE, 0.97, 1.0, 0.72, 1.0)));
         var inMass = ZoneMapRenderer.render(ZoneMap.inMass(Slice.of(tiny), List.of(tiny), null));
         assertThat(inMass.getSeriesMap()).containsKey(ZoneKind.ENVELOPE.label())
-                .doesNotContainKey(ZoneKind.SHELL.label());
-        // in r/R the same shell is 0.02 of the radius: drawn and in the legend
+                .doesNotContainKey(ZoneKind.SMALL_CENTRAL.label()).doesNotContainKey(ZoneKind.SHELL.label());
+        // in r/R the same zone is 0.02 of the radius: drawn and in the legend, not as a shell
         var inRadius = ZoneMapRenderer.render(ZoneMap.inRadius(Slice.of(tiny), List.of(tiny), null, Map.of()));
-        assertThat(inRadius.getSeriesMap()).containsKey(ZoneKind.SHELL.label());
+        assertThat(inRadius.getSeriesMap()).containsKey(ZoneKind.SMALL_CENTRAL.label())
+                .doesNotContainKey(ZoneKind.SHELL.label());
         assertThat(ZoneMapRenderer.tooThinNote(ZoneKind.SHELL)).contains("convective shells", "too thin");
+        assertThat(ZoneMapRenderer.tooThinNote(ZoneKind.SMALL_CENTRAL))
+                .isEqualTo("Some small central convective zones (below the core threshold), listed in zones.csv, are "
+                        + "too thin to show here.");
     }
 
     @Test
