@@ -8,12 +8,14 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
 import org.convgrid.cli.run.Durations;
+import org.convgrid.cli.run.RefinementEstimate;
 import org.convgrid.cli.run.ProgressReporter;
 import org.convgrid.engine.batch.ChunkSolver;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.batch.ProgressListener;
 import org.convgrid.engine.batch.Shard;
 import org.convgrid.grids.GridFile;
+import org.convgrid.grids.GridSpec;
 import org.convgrid.grids.TransitionSettings;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.transitions.TransitionFinder;
@@ -153,6 +155,12 @@ final class RunCommand implements Callable<Integer> {
                 // the sweep's own time: the refinement's models are counted and timed on their own line below
                 sweepSeconds = (System.nanoTime() - start) * 1e-9;
                 if (refineNow) {
+                    if (!quiet) {
+                        // the refinement can take longer than the sweep (the demo: 25 s after 14 s) and shows no
+                        // progress line of its own, so say what is happening and roughly for how long
+                        err.println("convgrid: " + refiningLine(file.spec(), transitions, n));
+                        err.flush();
+                    }
                     TransitionFinder finder = TransitionFinder.withDefaults();
                     refined = TransitionTables.refine(dir, finder, new TransitionRefiner(context.lines(), finder,
                             transitions.toleranceMsun(), work, false), context.finishers());
@@ -181,6 +189,14 @@ final class RunCommand implements Callable<Integer> {
             }
             return ExitCodes.OK;
         }
+    }
+
+    /** The line said before the transitions are refined: the tolerance, the expected work, how to skip it. */
+    static String refiningLine(GridSpec grid, TransitionSettings transitions, int threads) {
+        RefinementEstimate expected = RefinementEstimate.assumed(grid, threads);
+        return "refining the transition masses to " + MessageNumbers.format(transitions.toleranceMsun())
+                + " Msun by bisection" + (expected.models() > 0 ? " (about " + Counts.of(expected.models(), "new model")
+                + ", about " + Durations.describe(expected.seconds()) + ")" : "") + "; --no-refine skips this";
     }
 
     /**

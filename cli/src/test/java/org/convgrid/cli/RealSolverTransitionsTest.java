@@ -43,8 +43,11 @@ class RealSolverTransitionsTest {
         CliHarness real = plain.with(plain.context().withSolvers(ProductionSolvers.factory())
                 .withLines(SolverMassLines.production()));
         CliHarness.Execution done = real.execute("run", grid.toString(), "--out", out, "--threads",
-                Integer.toString(threads), "--quiet");
+                Integer.toString(threads));
         assertThat(done.code()).as(done.err()).isZero();
+        // before the refinement, which shows no progress of its own, the run says what comes and roughly how long
+        assertThat(done.err()).containsPattern("convgrid: refining the transition masses to 0.03 Msun by bisection "
+                + "\\(about \\d+ new models, about \\d+ s\\); --no-refine skips this");
         // the sweep and the refinement each say how long they took, the refinement on its own line
         assertThat(done.out()).containsPattern("computed now in \\d+ s")
                 .containsPattern("transitions refined to [0-9.]+ Msun with \\d+ new models in \\d+ s");
