@@ -24,9 +24,11 @@ class CheckCommandTest {
                 .contains("ages:          2: 0, 2 Gyr")
                 .contains("mixing length 1.8 Hp, overshoot 0 Hp, schwarzschild")
                 // 1.5 s to start, then on 2 threads: 2 lines' ladders (0.5 s each), 78 zero-age models (0.005 s
-                // each) and 78 evolutions from them (0.2 s each): 1.5 + (1 + 0.39 + 15.6) / 2 = 10.0 s
-                .contains("about 10 s on 2 threads")
-                .contains("each of the 78 stars evolved once to its oldest age");
+                // each) and 78 evolutions from them (0.2 s each at the demo's 600 Myr, x1.7 to 2 Gyr: 0.34 s):
+                // 1.5 + (1 + 0.39 + 26.52) / 2 = 15.5 s
+                .contains("about 15 s on 2 threads")
+                .contains("each of the 78 stars evolved once to its oldest age, about 0.34 s (1.7 x the demo's, "
+                        + "whose ages end at 600 Myr)");
         assertThat(Files.exists(work.resolve("runs"))).isFalse();
     }
 
@@ -67,11 +69,12 @@ class CheckCommandTest {
         Path evolved = CliHarness.writeGrid(work, "evolved.yaml", axes + "age: {gyr: [0, 0.15, 0.6], origin: zams}\n");
         assertThat(cli.execute("check", evolved.toString(), "--threads", "1").out()).contains("about 2 s on 1")
                 .contains("each of the 2 stars evolved once to its oldest age");
-        // main-sequence fractions: evolved twice, 2.01 + 2 x 2 x 0.2 s = 2.8 s
+        // main-sequence fractions: evolved twice, each to exhaustion at the oldest age's factor (2):
+        // 2.01 + 2 x 2 x 0.4 s = 3.6 s
         Path fractions = CliHarness.writeGrid(work, "fractions.yaml",
                 axes + "age: {ms_fraction: [0, 0.5], origin: zams}\n");
         assertThat(cli.execute("check", fractions.toString(), "--threads", "1").out())
-                .contains("about 3 s on 1 thread").contains("evolved twice (lifetime, then ages)");
+                .contains("about 4 s on 1 thread").contains("evolved twice (lifetime, then ages)");
         // from birth: no zero-age model nor ladder, one evolution of 0.8 s per star: 1.5 + 2 x 0.8 s = 3.1 s
         Path birth = CliHarness.writeGrid(work, "birth.yaml", axes + "age: {myr: [20, 150]}\n");
         assertThat(cli.execute("check", birth.toString(), "--threads", "1").out())
