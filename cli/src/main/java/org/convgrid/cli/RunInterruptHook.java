@@ -68,9 +68,11 @@ final class RunInterruptHook implements AutoCloseable {
      */
     static String line(GridRun.Interrupted left, String grid, String out, boolean refines) {
         if (!left.swept()) {
+            // the catalogue is written in grid order, so models that finished after the first unfinished one are
+            // not in it; a review found their tracks on disk and took them for kept
             return "convgrid: interrupted: " + left.rows() + " of " + Counts.of(left.expected(), "model") + " in "
-                    + RunLayout.CATALOGUE + "; continue with: convgrid run " + shellWord(grid) + " --out "
-                    + shellWord(out) + " --resume";
+                    + RunLayout.CATALOGUE + " (models finished out of grid order are not kept); continue with: "
+                    + "convgrid run " + shellWord(grid) + " --out " + shellWord(out) + " --resume";
         }
         // the sweep and its manifest were complete: what was cut short is the refinement or the charts
         return "convgrid: interrupted after the sweep: all " + Counts.of(left.expected(), "model") + " in "

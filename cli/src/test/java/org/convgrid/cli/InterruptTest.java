@@ -81,7 +81,8 @@ class InterruptTest {
         assertThat(kept).isBetween((long) ROWS_BEFORE_SIGNAL, CliHarness.GRID_MODELS - 1);
         List<String> err = text("child.err").lines().toList();
         assertThat(err).containsExactly("convgrid: interrupted: " + kept + " of " + CliHarness.GRID_MODELS
-                + " models in catalogue.ecsv; continue with: convgrid run " + grid + " --out '" + dir + "' --resume");
+                + " models in catalogue.ecsv (models finished out of grid order are not kept); continue with: "
+                + "convgrid run " + grid + " --out '" + dir + "' --resume");
         String yaml = Files.readString(dir.resolve("manifest.yaml"));
         assertThat(yaml).doesNotContainIgnoringCase("nan");
         RunManifest manifest = RunManifestReader.read(yaml);
