@@ -186,7 +186,10 @@ public final class RunMaps {
                 entries.add(new MapEntry(TRENDS_AGE_FILES + "_" + p.fileStem() + ".png", MapEntry.TRENDS_AGE,
                         "Transition masses against age, one line per Z and method: shaded boxes span the two models "
                                 + "that bracket each value, dashed boxes the windows of small transient cores (a "
-                                + "square alone: a window found at one mass), " + p.describe() + ".",
+                                + "square alone: a window found at one mass), " + p.describe() + ". The lines join "
+                                + "ages only to guide the eye: where small 3He-driven cores fill the masses below it "
+                                + "at some age, \"core in every star above\" drops there and rises again (README, "
+                                + "Limits, in detail).",
                         () -> TransitionAgeTrendRenderer.render(TransitionAgeTrend.build(p, run.transitions()),
                                 run.manifest() == null ? AgeOrigin.ZAMS : run.manifest().ageOrigin())));
             }
