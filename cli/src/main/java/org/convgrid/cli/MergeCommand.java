@@ -20,7 +20,10 @@ import picocli.CommandLine.ParentCommand;
 /** {@code convgrid merge DIR... --out DIR}: joins shard run directories into one. */
 @Command(name = "merge", mixinStandardHelpOptions = true,
         description = {"Join the run directories of the shards of one grid into one run directory, identical to "
-                + "a single run of the grid: rows in grid order, transitions.csv and a merged manifest.yaml.",
+                + "a single run of the grid before its refinement: rows in grid order, transitions.csv and a "
+                + "merged manifest.yaml. Shards do not refine the transition masses (each holds part of every mass "
+                + "line); when the grid refines (transitions: refine: true, the default), run 'convgrid transitions "
+                + "DIR --refine' on the merged directory, which then equals a single run's.",
             "Refused (exit code 2, nothing written) when the shards come from different grids, or when a model is "
                 + "missing from every shard or present in several. Exit code 3 when some merged models are not ok."})
 final class MergeCommand implements Callable<Integer> {
@@ -51,6 +54,14 @@ final class MergeCommand implements Callable<Integer> {
                 "shard directories") + ", " + Counts.of(run.catalogue().size(), "model") + " ("
                 + RunCommand.describe(counts) + ")");
         parent.out().flush();
+        if (run.grid().transitions().refine()) {
+            // said on stderr even though nothing failed: without it the merged table silently holds the grid's
+            // coarser brackets where a single run would hold refined ones (a practitioner's review)
+            parent.err().println("convgrid: the transition masses are not refined yet (shards do not refine); "
+                    + "to match a single run: convgrid transitions " + RunInterruptHook.shellWord(
+                    target.root().toString()) + " --refine");
+            parent.err().flush();
+        }
         return RunFinishing.someModelsFailed(counts) ? ExitCodes.SOME_MODELS_FAILED : ExitCodes.OK;
     }
 }

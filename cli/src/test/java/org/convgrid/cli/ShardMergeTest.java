@@ -49,6 +49,9 @@ class ShardMergeTest {
                 "runs/test-survey-shard-2-of-3", "--out", "merged");
         assertThat(merged.code()).isEqualTo(0);
         assertThat(merged.out()).contains("merged 3 shard directories, 156 models (156 ok");
+        // the grid refines by default and shards do not: merge says what is left to match a single run
+        assertThat(merged.err()).contains("convgrid: the transition masses are not refined yet (shards do not "
+                + "refine); to match a single run: convgrid transitions ").contains("merged --refine");
         for (String file : List.of("catalogue.ecsv", "zones.csv", "transitions.csv")) {
             assertThat(Files.readAllBytes(work.resolve("merged").resolve(file)))
                     .isEqualTo(Files.readAllBytes(work.resolve("single").resolve(file)));
