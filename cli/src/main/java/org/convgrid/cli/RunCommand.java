@@ -133,6 +133,14 @@ final class RunCommand implements Callable<Integer> {
                         + " of the earlier run in " + dir.root());
                 err.flush();
             }
+            if (plan.shard().count() > 1 && plan.owned() == 0) {
+                // said even with --quiet: a job array's task that computes nothing is a waste the user must see
+                err.println("convgrid: warning: shard " + plan.shard().index() + "/" + plan.shard().count()
+                        + " holds none of the grid's " + Counts.of(count, "model") + ": shards take blocks of up to "
+                        + GridRun.MASSES_PER_CHUNK + " consecutive masses per metallicity and physics choice, so a "
+                        + "grid this small needs fewer shards");
+                err.flush();
+            }
             ProgressReporter reporter = quiet ? null : new ProgressReporter(err, context.terminal(), System::nanoTime, n);
             if (!quiet) {
                 err.println("convgrid: " + startLine(plan, count, n));

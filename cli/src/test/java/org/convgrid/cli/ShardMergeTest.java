@@ -63,6 +63,17 @@ class ShardMergeTest {
     }
 
     @Test
+    void aShardThatHoldsNoModelSaysSo() throws Exception {
+        // 39 masses x 2 Z: 5 blocks of up to 8 masses per Z, 10 in all, so the 11th of 11 shards holds nothing
+        CliHarness.Execution empty = run("run", grid().toString(), "--shard", "11/11", "--quiet");
+        assertThat(empty.code()).isEqualTo(0);
+        assertThat(empty.err()).contains("convgrid: warning: shard 11/11 holds none of the grid's 156 models: "
+                + "shards take blocks of up to 8 consecutive masses per metallicity and physics choice");
+        CliHarness.Execution full = run("run", grid().toString(), "--shard", "1/11", "--quiet", "--out", "one");
+        assertThat(full.err()).doesNotContain("holds none");
+    }
+
+    @Test
     void aMissingShardIsReportedAndNothingIsWritten() throws Exception {
         runShards(grid(), 3);
         CliHarness.Execution merged = run("merge", "runs/test-survey-shard-1-of-3", "runs/test-survey-shard-3-of-3",
