@@ -97,7 +97,7 @@ final class StarCommand implements Callable<Integer> {
 
     @Option(names = "--opacity-table", paramLabel = "FILE",
             description = "Use this opacity table (convgrid table layout, see README) instead of the built-in "
-                    + "ones: the OPAL GN93 tables (Iglesias & Rogers 1996), joined below log T 4.5 to the "
+                    + "ones: the OPAL GN93 tables (Iglesias & Rogers 1996), blended over log T 3.80-4.00 into the "
                     + "low-temperature tables of Ferguson et al. 2005, with analytic terms beyond both and electron "
                     + "conduction added.")
     Path opacityTable;
