@@ -39,7 +39,8 @@ final class CalibrateSunCommand implements Callable<Integer> {
 
     @Option(names = "--age-gyr", defaultValue = "4.57", paramLabel = "A",
             description = "Age of the Sun since the zero-age main sequence, Gyr, from " + MIN_AGE_GYR + " to "
-                    + MAX_AGE_GYR + " (default ${DEFAULT-VALUE}).")
+                    + MAX_AGE_GYR + " (default ${DEFAULT-VALUE}); unlike star's --age-gyr, which counts from birth "
+                    + "unless --age-origin zams.")
     double ageGyr;
 
     @Option(names = "--z-over-x", defaultValue = "0.0245", paramLabel = "RATIO",
