@@ -8,12 +8,12 @@ import org.convgrid.engine.request.Age;
 import org.convgrid.engine.request.GlobalProperties;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.convection.ConvectiveStructure;
-import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.grids.words.Counts;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.catalogue.CatalogueZone;
 import org.convgrid.output.catalogue.OutcomeRows;
 
 /** The readable form of one model for {@code convgrid star}: a block of properties, then the zone list. */
@@ -70,16 +70,20 @@ final class StarReport {
         line(out, "turnover time, local", row.turnoverTimeDays(), "days");
         line(out, "turnover time, integrated", row.turnoverTimeGlobalDays(), "days");
         out.println();
-        List<ConvectiveZone> zones = c.zones();
+        // the zones as zones.csv lists them, with their kind (a review could not tell a central zone below the core
+        // threshold from a core, nor see the mass of a surface zone whose m/M ends both print 1.000000)
+        List<CatalogueZone> zones = row.zones();
         out.printf(Locale.ROOT, "Convective zones (%d):%n", zones.size());
         if (zones.isEmpty()) {
             out.println("  none: radiative throughout");
         }
-        out.printf(Locale.ROOT, "  %4s  %-21s  %-21s%n", "#", "m/M from - to", "r/R from - to");
+        out.printf(Locale.ROOT, "  %4s  %-21s  %-21s  %-12s  %s%n", "#", "m/M from - to", "r/R from - to",
+                "mass (Msun)", "kind");
         for (int i = 0; i < zones.size(); i++) {
-            ConvectiveZone z = zones.get(i);
-            out.printf(Locale.ROOT, "  %4d  %9.6f - %-9.6f  %9.6f - %-9.6f%n", i + 1, z.innerMassFraction(),
-                    z.outerMassFraction(), z.innerRadiusFraction(), z.outerRadiusFraction());
+            CatalogueZone z = zones.get(i);
+            out.printf(Locale.ROOT, "  %4d  %9.6f - %-9.6f  %9.6f - %-9.6f  %-12.4g  %s%n", i + 1, z.massFracInner(),
+                    z.massFracOuter(), z.radiusFracInner(), z.radiusFracOuter(), zoneMass(z, row.massMsun()),
+                    kindWords(z));
         }
         out.println();
         out.printf(Locale.ROOT, "Solved in %s.%n", Counts.of(outcome.solverIterations(), "Newton iteration"));
@@ -91,6 +95,23 @@ final class StarReport {
      */
     static String detail(ModelOutcome outcome) {
         return ONE_ITERATION.matcher(outcome.statusDetail()).replaceAll("after 1 iteration");
+    }
+
+    /** The zone's own mass when the catalogue carries it (thin surface zones), else from its ends. */
+    private static double zoneMass(CatalogueZone z, double starMassMsun) {
+        return Double.isNaN(z.zoneMassMsun()) ? (z.massFracOuter() - z.massFracInner()) * starMassMsun
+                : z.zoneMassMsun();
+    }
+
+    /** zones.csv's zone_kind in words; a shell that starts at the centre is a central zone below the threshold. */
+    static String kindWords(CatalogueZone z) {
+        return switch (z.kind()) {
+            case CORE -> "core";
+            case ENVELOPE -> "envelope";
+            case WHOLE_STAR -> "whole star";
+            case SHELL -> z.massFracInner() == 0.0 ? "central, below the core threshold"
+                    : z.radiusFracOuter() >= 0.99 ? "shell, near the surface" : "shell";
+        };
     }
 
     private static void line(PrintWriter out, String name, double value, String unit) {
