@@ -108,7 +108,8 @@ final class StarCommand implements Callable<Integer> {
 
     @Option(names = "--profile", paramLabel = "FILE",
             description = "Also write one CSV row per shell (m/M, r/R, P, T, rho, L, kappa, eps, gradients, "
-                    + "convective flag, convective velocity) to FILE.")
+                    + "convective flag, convective velocity, r in cm, Gamma1, sound speed, hydrogen fraction) to "
+                    + "FILE.")
     Path profile;
 
     @Option(names = "--format", defaultValue = "table", paramLabel = "table|csv",

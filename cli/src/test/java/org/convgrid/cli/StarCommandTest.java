@@ -46,6 +46,31 @@ class StarCommandTest {
     }
 
     @Test
+    void theProfileCarriesTheAcousticColumns() throws Exception {
+        assertThat(run("star", "--mass", "1", "--z", "0.02", "--profile", "sun.csv")).as(err.toString()).isZero();
+        List<org.convgrid.output.profile.ProfileRow> shells = org.convgrid.output.profile.ProfileReader.read(
+                Files.newBufferedReader(dir.resolve("sun.csv")));
+        var centre = shells.get(0);
+        var surface = shells.get(shells.size() - 1);
+        // a fully ionised gas has Gamma1 close to 5/3; radiation, degeneracy and Coulomb terms move it at the 1e-3
+        // level (common practice; measured here 1.667421 at the first point out, r/R = 0.003)
+        assertThat(centre.gamma1()).isCloseTo(5.0 / 3.0, org.assertj.core.api.Assertions.within(0.01 * 5.0 / 3.0));
+        // the Sun's central sound speed is ~5.1e7 cm/s (from memory); a zero-age Sun is close to it
+        assertThat(centre.soundSpeed()).isBetween(4.5e7, 5.6e7);
+        assertThat(centre.soundSpeed()).isCloseTo(Math.sqrt(centre.gamma1() * centre.pressure() / centre.density()),
+                org.assertj.core.api.Assertions.within(1e-6 * centre.soundSpeed()));
+        // the hydrogen and helium ionisation zones lower Gamma1 well below 5/3 just under the surface
+        // (Kippenhahn, Weigert & Weiss 2012, ch. 14)
+        double lowest = shells.stream().filter(s -> s.radiusFrac() > 0.95).mapToDouble(s -> s.gamma1()).min()
+                .orElseThrow();
+        assertThat(lowest).isLessThan(1.4);
+        assertThat(surface.radius() / surface.radiusFrac()).isBetween(0.85 * 6.957e10, 0.95 * 6.957e10);
+        // the surface keeps its birth hydrogen (X = 1 - 0.2771 - 0.02 with the default helium law), the centre less
+        assertThat(surface.hydrogen()).isCloseTo(0.7029, org.assertj.core.api.Assertions.within(2e-3));
+        assertThat(centre.hydrogen()).isLessThanOrEqualTo(surface.hydrogen());
+    }
+
+    @Test
     void impossibleRequestsAreUsageErrors() {
         assertThat(run("star", "--mass", "-1", "--z", "0.02")).isEqualTo(2);
         assertThat(run("star", "--mass", "1", "--z", "0.02", "--age-gyr", "-1")).isEqualTo(2);

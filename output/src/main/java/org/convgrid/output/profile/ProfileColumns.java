@@ -19,10 +19,25 @@ public final class ProfileColumns {
     /** 1 where convective, 0 where radiative (numeric so that charts can plot it). */
     public static final String CONVECTIVE = "convective";
     public static final String CONV_VELOCITY_CGS = "conv_velocity_cgs";
+    /** Radius in cm: r/R alone cannot be compared between models. */
+    public static final String RADIUS_CM = "radius_cm";
+    /** The first adiabatic exponent (d ln P / d ln rho at constant entropy), from the equation of state. */
+    public static final String GAMMA1 = "gamma1";
+    /** Adiabatic sound speed sqrt(Gamma1 P / rho), cm s^-1. */
+    public static final String SOUND_SPEED_CGS = "sound_speed_cgs";
+    /** Hydrogen mass fraction at the shell. */
+    public static final String H_FRAC = "h_frac";
 
     /** The header, in order. */
     public static final List<String> HEADER = List.of(MASS_FRAC, RADIUS_FRAC, PRESSURE_CGS, TEMP_K, DENSITY_CGS,
-            LUMINOSITY_LSUN, KAPPA_CGS, EPS_NUC_CGS, NABLA, NABLA_AD, NABLA_RAD, CONVECTIVE, CONV_VELOCITY_CGS);
+            LUMINOSITY_LSUN, KAPPA_CGS, EPS_NUC_CGS, NABLA, NABLA_AD, NABLA_RAD, CONVECTIVE, CONV_VELOCITY_CGS,
+            RADIUS_CM, GAMMA1, SOUND_SPEED_CGS, H_FRAC);
+
+    /**
+     * The columns every readable profile has: all but the last four, which profiles written before them lack (read
+     * as NaN).
+     */
+    public static final List<String> REQUIRED = HEADER.subList(0, HEADER.size() - 4);
 
     private ProfileColumns() {
     }

@@ -25,11 +25,12 @@ public final class ProfileReader {
     public static List<ProfileRow> read(Reader in) throws IOException {
         try (CSVParser parser = CSVParser.builder().setReader(in).setFormat(CatalogueWriter.FORMAT.builder()
                 .setHeader().setSkipHeaderRecord(true).get()).get()) {
-            for (String column : ProfileColumns.HEADER) {
+            for (String column : ProfileColumns.REQUIRED) {
                 if (!parser.getHeaderNames().contains(column)) {
                     throw new OutputFormatException("profile misses the column '" + column + "'");
                 }
             }
+            boolean acoustic = parser.getHeaderNames().containsAll(ProfileColumns.HEADER);
             List<ProfileRow> shells = new ArrayList<>();
             for (CSVRecord r : parser) {
                 try {
@@ -38,7 +39,11 @@ public final class ProfileReader {
                             n(r, ProfileColumns.DENSITY_CGS), n(r, ProfileColumns.LUMINOSITY_LSUN) * Constants.L_SUN,
                             n(r, ProfileColumns.KAPPA_CGS), n(r, ProfileColumns.EPS_NUC_CGS),
                             n(r, ProfileColumns.NABLA), n(r, ProfileColumns.NABLA_AD), n(r, ProfileColumns.NABLA_RAD),
-                            n(r, ProfileColumns.CONVECTIVE) != 0.0, n(r, ProfileColumns.CONV_VELOCITY_CGS)));
+                            n(r, ProfileColumns.CONVECTIVE) != 0.0, n(r, ProfileColumns.CONV_VELOCITY_CGS),
+                            acoustic ? n(r, ProfileColumns.RADIUS_CM) : Double.NaN,
+                            acoustic ? n(r, ProfileColumns.GAMMA1) : Double.NaN,
+                            acoustic ? n(r, ProfileColumns.SOUND_SPEED_CGS) : Double.NaN,
+                            acoustic ? n(r, ProfileColumns.H_FRAC) : Double.NaN));
                 } catch (IllegalArgumentException e) {
                     throw new OutputFormatException("profile row " + r.getRecordNumber() + ": " + e.getMessage(), e);
                 }

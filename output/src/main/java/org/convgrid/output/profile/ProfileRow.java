@@ -16,8 +16,13 @@ package org.convgrid.output.profile;
  * @param nablaRad radiative gradient
  * @param convective whether the shell is convectively unstable under the model's criterion
  * @param convectiveVelocity mixing-length convective velocity, cm s^-1 (0 where radiative)
+ * @param radius r, cm
+ * @param gamma1 first adiabatic exponent
+ * @param soundSpeed adiabatic sound speed sqrt(Gamma1 P / rho), cm s^-1
+ * @param hydrogen hydrogen mass fraction
  */
 public record ProfileRow(double massFrac, double radiusFrac, double pressure, double temperature, double density,
                          double luminosity, double opacity, double nuclearEnergy, double nabla, double nablaAd,
-                         double nablaRad, boolean convective, double convectiveVelocity) {
+                         double nablaRad, boolean convective, double convectiveVelocity, double radius,
+                         double gamma1, double soundSpeed, double hydrogen) {
 }

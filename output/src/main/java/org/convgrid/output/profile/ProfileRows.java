@@ -18,9 +18,11 @@ public final class ProfileRows {
         double radius = p.radius(n - 1);
         List<ProfileRow> rows = new ArrayList<>(n);
         for (int k = 0; k < n; k++) {
+            double gamma1 = p.eosState(k).gamma1();
             rows.add(new ProfileRow(p.mass(k) / mass, p.radius(k) / radius, p.pressure(k), p.temperature(k),
                     p.density(k), p.luminosity(k), p.opacity(k), p.eps(k), p.nabla(k), p.nablaAd(k), p.nablaRad(k),
-                    p.convective(k), p.convectiveVelocity(k)));
+                    p.convective(k), p.convectiveVelocity(k), p.radius(k), gamma1,
+                    Math.sqrt(gamma1 * p.pressure(k) / p.density(k)), p.hydrogen(k)));
         }
         return rows;
     }

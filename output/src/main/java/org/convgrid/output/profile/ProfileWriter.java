@@ -27,6 +27,9 @@ public final class ProfileWriter {
             }
             cells.add(s.convective() ? "1" : "0");
             cells.add(CsvNumbers.format(s.convectiveVelocity()));
+            for (double v : new double[] {s.radius(), s.gamma1(), s.soundSpeed(), s.hydrogen()}) {
+                cells.add(CsvNumbers.format(v));
+            }
             printer.printRecord(cells);
         }
         printer.flush();
