@@ -166,7 +166,7 @@ final class RunCommand implements Callable<Integer> {
                     if (!quiet) {
                         // the refinement can take longer than the sweep (the demo: 25 s after 14 s) and shows no
                         // progress line of its own, so say what is happening and roughly for how long
-                        err.println("convgrid: " + refiningLine(file.spec(), transitions, n));
+                        err.println("convgrid: " + refiningLine(file.spec(), n));
                         err.flush();
                     }
                     TransitionFinder finder = TransitionFinder.withDefaults();
@@ -200,9 +200,9 @@ final class RunCommand implements Callable<Integer> {
     }
 
     /** The line said before the transitions are refined: the tolerance, the expected work, how to skip it. */
-    static String refiningLine(GridSpec grid, TransitionSettings transitions, int threads) {
+    static String refiningLine(GridSpec grid, int threads) {
         RefinementEstimate expected = RefinementEstimate.assumed(grid, threads);
-        return "refining the transition masses to " + MessageNumbers.format(transitions.toleranceMsun())
+        return "refining the transition masses to " + MessageNumbers.format(grid.transitions().toleranceMsun())
                 + " Msun by bisection" + (expected.models() > 0 ? " (about " + Counts.of(expected.models(), "new model")
                 + ", about " + Durations.describe(expected.seconds()) + ")" : "") + "; --no-refine skips this";
     }

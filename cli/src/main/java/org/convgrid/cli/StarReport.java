@@ -12,8 +12,10 @@ import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.grids.words.Counts;
 import org.convgrid.plotting.label.SliceLabels;
+import org.convgrid.plotting.zones.ZoneKind;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.catalogue.CatalogueZone;
+import org.convgrid.output.catalogue.ZoneTable;
 import org.convgrid.output.catalogue.OutcomeRows;
 
 /** The readable form of one model for {@code convgrid star}: a block of properties, then the zone list. */
@@ -82,7 +84,7 @@ final class StarReport {
         for (int i = 0; i < zones.size(); i++) {
             CatalogueZone z = zones.get(i);
             out.printf(Locale.ROOT, "  %4d  %9.6f - %-9.6f  %9.6f - %-9.6f  %-12.4g  %s%n", i + 1, z.massFracInner(),
-                    z.massFracOuter(), z.radiusFracInner(), z.radiusFracOuter(), zoneMass(z, row.massMsun()),
+                    z.massFracOuter(), z.radiusFracInner(), z.radiusFracOuter(), ZoneTable.zoneMass(z, row.massMsun()),
                     kindWords(z));
         }
         out.println();
@@ -97,20 +99,19 @@ final class StarReport {
         return ONE_ITERATION.matcher(outcome.statusDetail()).replaceAll("after 1 iteration");
     }
 
-    /** The zone's own mass when the catalogue carries it (thin surface zones), else from its ends. */
-    private static double zoneMass(CatalogueZone z, double starMassMsun) {
-        return Double.isNaN(z.zoneMassMsun()) ? (z.massFracOuter() - z.massFracInner()) * starMassMsun
-                : z.zoneMassMsun();
-    }
-
-    /** zones.csv's zone_kind in words; a shell that starts at the centre is a central zone below the threshold. */
+    /**
+     * zones.csv's zone_kind in words, read as the zone maps read it ({@link ZoneKind#of(CatalogueZone)}: a shell that
+     * starts at the centre is a central zone below the core threshold); a shell reaching r/R 0.99 is said to lie near
+     * the surface.
+     */
     static String kindWords(CatalogueZone z) {
-        return switch (z.kind()) {
+        return switch (ZoneKind.of(z)) {
             case CORE -> "core";
             case ENVELOPE -> "envelope";
             case WHOLE_STAR -> "whole star";
-            case SHELL -> z.massFracInner() == 0.0 ? "central, below the core threshold"
-                    : z.radiusFracOuter() >= 0.99 ? "shell, near the surface" : "shell";
+            case SMALL_CENTRAL -> "central, below the core threshold";
+            case SHELL -> z.radiusFracOuter() >= 0.99 ? "shell, near the surface" : "shell";
+            case PAST_MAIN_SEQUENCE, NO_RESULT -> throw new IllegalArgumentException("not a zone kind: " + z);
         };
     }
 

@@ -39,7 +39,7 @@ public record RunLayout(Path root) {
 
     /**
      * Any track id convgrid makes, whatever the widths: a grid star's {@code p<i>-z<i>-m<i>} (ModelIdFormat, in the
-     * grids module, which this one cannot see: survey's EarlierRunFilesTest ties the two) or a refinement star's
+     * grids module, which this one cannot see: survey's RunFileNamesTest ties the two) or a refinement star's
      * {@code p<i>-z<i>-r<i>} ({@link org.convgrid.output.transitions.RefinedModelIds} without the age part). Only
      * files so named in {@code tracks/} and {@code profiles/} are convgrid's: a user's {@code tracks/my-track.csv}
      * is neither read as a track, nor merged, nor removed by {@code run --force}.

@@ -56,9 +56,9 @@ public final class ZoneTable {
     /**
      * Msun: from the ends as written, so that the zone mass comes out the same whether the row was just computed or
      * read back; for a zone whose m/M ends are written alike (a surface ionisation zone of a hot star: 1.0 and 1.0,
-     * its extent in r/R) the zone's own mass, which a read keeps from the file.
+     * its extent in r/R) the zone's own mass, which a read keeps from the file. The zone_mass_msun of zones.csv.
      */
-    private static double zoneMass(CatalogueZone z, double starMassMsun) {
+    public static double zoneMass(CatalogueZone z, double starMassMsun) {
         double fromEnds = (asWritten(z.massFracOuter()) - asWritten(z.massFracInner())) * asWritten(starMassMsun);
         return fromEnds == 0.0 && !Double.isNaN(z.zoneMassMsun()) ? z.zoneMassMsun() : fromEnds;
     }
