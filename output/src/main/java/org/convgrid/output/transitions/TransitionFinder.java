@@ -32,7 +32,7 @@ import org.convgrid.output.catalogue.CatalogueRow;
  * <p>The core search leaves out the coreless models at the top of a slice whose central hydrogen is nearly gone
  * (below {@link #RECEDED_CORE_CENTRAL_H}): a convective core shrinks as hydrogen runs out and vanishes in the last
  * contraction before exhaustion (Kippenhahn, Weigert &amp; Weiss 2012, Stellar Structure and Evolution, 2nd ed.,
- * ch. 31), so those stars say nothing about the mass at which cores set in, and counting them would leave every
+ * on main-sequence stars with convective cores; from memory, chapter not checked), so those stars say nothing about the mass at which cores set in, and counting them would leave every
  * slice that reaches its turn-off without one. Such a slice's note names them.
  *
  * <p>Models past the main sequence are not searched at all (no structure is kept for them), so a slice that holds

@@ -168,7 +168,7 @@ class TransitionFinderTest {
     void coresThatRecededNearHydrogenExhaustionDoNotHideTheOnset() {
         // a slice at its turn-off (the shape of a Z = 0.02, 1 Gyr birth-track slice): cores from 1.2 up, and the
         // highest main-sequence model, X_c = 1.4e-4, has lost its core as stars do just before exhaustion
-        // (Kippenhahn, Weigert & Weiss 2012, ch. 31)
+        // (Kippenhahn, Weigert & Weiss 2012, on main-sequence stars with convective cores; from memory)
         List<CatalogueRow> rows = List.of(withCentralH(1.0, ENV, 0, 0.6), withCentralH(1.2, BOTH, 0.02, 0.5),
                 withCentralH(1.5, BOTH, 0.07, 0.2), withCentralH(1.6, ENV, 0, 1.4e-4));
         TransitionRow t = finder.find(rows).get(0);
