@@ -73,22 +73,27 @@ class ZamsOriginTest {
      * EOS inverted at each call (the same equations at the same tolerance: node values move within that tolerance's
      * error, a few 1e-6 in ln P): last digits of the 0.06 Gyr rows only, <= 4e-7 relative (0.3 Msun L 0.009505464 ->
      * 0.009505463 Lsun; 1 Msun env_cz_mass_msun 0.02409035 -> 0.02409036); zero-age rows and Newton iterations
-     * (3, 74, 21, 52) unchanged. Frozen from our own runs (first at commit b13c164), last set 2026-12-03 (commit
-     * 3954ea8); our output, not published values.
+     * (3, 74, 21, 52) unchanged. Re-frozen when a zero-age-origin track's first step came to be capped at a fixed
+     * 1 Myr (MainSequenceEvolver.ZERO_AGE_FIRST_STEP_CAP) instead of 0.01 x the oldest requested age (0.6 Myr for
+     * this grid), so that a star's model no longer depends on the other ages asked for: the 0.06 Gyr rows move by
+     * the young track's time-step error, <= 5e-5 relative in L (0.3 Msun L 0.009505463 -> 0.009505906 Lsun, R
+     * 0.2980587 -> 0.2980654 Rsun, turnover_time_global_days 706.9614 -> 707.094; 1 Msun L 0.7314741 -> 0.731483
+     * Lsun), Newton iterations 74 -> 66 and 52 -> 49; zero-age rows unchanged. Frozen from our own runs (first at
+     * commit b13c164), last set 2026-12-04; our output, not published values.
      */
     private static final List<String> ROWS_BEFORE = List.of(
             "p0-z00-m000-a00,0.3,0.02,0.28,1.8,0.0,0.0,main_sequence,ok,,0.009842161,"
                     + "0.3030321,3302.592,4.952212,7392598.0,89.96434,0.6971044,,fully_convective,,,0.0,0.0,0.3,"
                     + "179.0309,3,schwarzschild,1.0,546.1236",
-            "p0-z00-m000-a01,0.3,0.02,0.28,1.8,0.0,0.06,main_sequence,ok,,0.009505463,"
-                    + "0.2980587,3301.178,4.966585,7497948.0,94.2127,0.699315,,fully_convective,,,0.0,0.0,0.3,"
-                    + "185.4432,74,schwarzschild,1.0,706.9614",
+            "p0-z00-m000-a01,0.3,0.02,0.28,1.8,0.0,0.06,main_sequence,ok,,0.009505906,"
+                    + "0.2980654,3301.18,4.966566,7497794.0,94.20646,0.699315,,fully_convective,,,0.0,0.0,0.3,"
+                    + "185.4479,66,schwarzschild,1.0,707.094",
             "p0-z00-m001-a00,1.0,0.02,0.28,1.8,0.0,0.0,main_sequence,ok,,0.7289039,0.9117284,"
                     + "5585.492,4.518337,1.34996e+07,81.93622,0.6993801,,conv_envelope,,,0.9758375,0.7312464,"
                     + "0.02416247,25.66424,21,schwarzschild,1.0,38.70925",
-            "p0-z00-m001-a01,1.0,0.02,0.28,1.8,0.0,0.06,main_sequence,ok,,0.7314741,"
-                    + "0.9128281,5587.04,4.51729,1.351793e+07,82.43074,0.6950223,,conv_envelope,,,0.9759096,"
-                    + "0.7312433,0.02409036,25.62714,52,schwarzschild,1.0,38.63372");
+            "p0-z00-m001-a01,1.0,0.02,0.28,1.8,0.0,0.06,main_sequence,ok,,0.731483,"
+                    + "0.9128314,5587.047,4.517287,1.351787e+07,82.43261,0.6950225,,conv_envelope,,,0.97591,"
+                    + "0.7312436,0.02408996,25.62692,49,schwarzschild,1.0,38.63357");
 
     @TempDir
     Path dir;
