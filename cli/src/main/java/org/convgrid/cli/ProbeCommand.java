@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.util.concurrent.Callable;
 import org.convgrid.engine.physics.MicrophysicsPoint;
 import org.convgrid.engine.physics.StandardPhysics;
+import org.convgrid.engine.physics.opacity.OpalGn93Opacity;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.output.probe.MicrophysicsPointWriter;
 import org.convgrid.grids.words.MessageNumbers;
@@ -62,11 +63,13 @@ final class ProbeCommand implements Callable<Integer> {
             throw new UsageException(String.format(java.util.Locale.ROOT, "the microphysics is not defined at "
                     + "T = %.4g K, rho = %.4g g/cm^3 (X = %s, Z = %s)", temperature, density, hydrogen, metals));
         }
+        // the tables StandardPhysics.opacity scales, asked at the composition the opacity was evaluated at
+        String source = OpalGn93Opacity.shipped().source(density, temperature, point.composition());
         MicrophysicsPointWriter writer = new MicrophysicsPointWriter();
         if (format == OutputFormat.CSV) {
-            writer.writeCsv(point, spec.commandLine().getOut());
+            writer.writeCsv(point, source, spec.commandLine().getOut());
         } else {
-            writer.writeTable(point, spec.commandLine().getOut());
+            writer.writeTable(point, source, spec.commandLine().getOut());
         }
         spec.commandLine().getOut().flush();
         return ExitCodes.OK;

@@ -27,6 +27,7 @@ import org.convgrid.survey.ShardChoice;
 import org.convgrid.survey.SweepInterruption;
 import org.convgrid.survey.TrackFiles;
 import org.convgrid.survey.parallel.ParallelWork;
+import org.convgrid.survey.refine.RefinementProgress;
 import org.convgrid.survey.refine.TransitionRefiner;
 import org.convgrid.survey.refine.TransitionTables;
 import org.convgrid.grids.words.MessageNumbers;
@@ -163,15 +164,27 @@ final class RunCommand implements Callable<Integer> {
                 // the sweep's own time: the refinement's models are counted and timed on their own line below
                 sweepSeconds = (System.nanoTime() - start) * 1e-9;
                 if (refineNow) {
+                    ProgressReporter refinementReporter = null;
                     if (!quiet) {
-                        // the refinement can take longer than the sweep (the demo: 25 s after 14 s) and shows no
-                        // progress line of its own, so say what is happening and roughly for how long
+                        // the refinement can take longer than the sweep (the demo: 25 s after 14 s): say what is
+                        // happening and roughly for how long, then count its new models as the sweep counts its own
                         err.println("convgrid: " + refiningLine(file.spec(), n));
                         err.flush();
+                        refinementReporter = new ProgressReporter(err, context.terminal(), System::nanoTime, n,
+                                "new model");
                     }
                     TransitionFinder finder = TransitionFinder.withDefaults();
-                    refined = TransitionTables.refine(dir, finder, new TransitionRefiner(context.lines(), finder,
-                            transitions.toleranceMsun(), work, false), context.finishers());
+                    try {
+                        refined = TransitionTables.refine(dir, finder, new TransitionRefiner(context.lines(), finder,
+                                transitions.toleranceMsun(), work, false, new RefinementProgress(
+                                        refinementReporter == null ? ProgressListener.NONE : refinementReporter)),
+                                context.finishers());
+                    } finally {
+                        // an error message then starts a line of its own
+                        if (refinementReporter != null) {
+                            refinementReporter.finish();
+                        }
+                    }
                 }
             }
             if (tracks.failure() != null) {

@@ -30,6 +30,9 @@ class ProbeCommandTest {
                 "kappa_cgs", "eps_nuc_cgs", "eps_pp_cgs", "eps_cno_cgs", "degeneracy_eta");
         String[] row = lines[1].split(",");
         assertThat(row).hasSameSizeAs(header.toArray());
+        // appended after every numeric column: which opacity tables answered (Z 0.0188 lies between table rows)
+        assertThat(header).last().isEqualTo("opacity_source");
+        assertThat(row[row.length - 1]).startsWith("opal-gn93hz.txt at Z 0.004/0.01/0.02/0.03 (interpolated to Z ");
         double eps = Double.parseDouble(row[header.indexOf("eps_nuc_cgs")]);
         // Bahcall, Serenelli & Basu 2005 (ApJ 621, L85) standard solar model centre: eps ~ 16.5 erg/g/s (+-25 %).
         assertThat(eps).isBetween(16.5 * 0.75, 16.5 * 1.25);
@@ -40,7 +43,8 @@ class ProbeCommandTest {
     @Test
     void tableIsTheDefault() {
         assertThat(run("probe", "--temp-k", "1e6", "--density-cgs", "1", "--x", "0.7", "--z", "0.02")).isZero();
-        assertThat(out.toString()).contains("nabla_ad").contains("kappa_cgs");
+        assertThat(out.toString()).contains("nabla_ad").contains("kappa_cgs")
+                .containsPattern("(?m)^opacity_source +opal-gn93hz.txt at Z ");
     }
 
     @Test

@@ -45,7 +45,7 @@ class RealSolverTransitionsTest {
         CliHarness.Execution done = real.execute("run", grid.toString(), "--out", out, "--threads",
                 Integer.toString(threads));
         assertThat(done.code()).as(done.err()).isZero();
-        // before the refinement, which shows no progress of its own, the run says what comes and roughly how long
+        // before the refinement the run says what comes and roughly how long (then counts its new models)
         assertThat(done.err()).containsPattern("convgrid: refining the transition masses to 0.03 Msun by bisection "
                 + "\\(about \\d+ new models, about \\d+ s\\); --no-refine skips this");
         // the sweep and the refinement each say how long they took, the refinement on its own line

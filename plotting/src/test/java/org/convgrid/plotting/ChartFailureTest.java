@@ -45,7 +45,7 @@ class ChartFailureTest {
             assertThat(left.filter(f -> f.getFileName().toString().endsWith(".tmp"))).isEmpty();
         }
         String html = Files.readString(ReportPage.write(dir, drawn.failures()));
-        assertThat(html).contains("1 chart(s) could not be drawn", "chart broken.png not drawn: axis cannot show 0",
+        assertThat(html).contains("1 chart could not be drawn", "chart broken.png not drawn: axis cannot show 0",
                 "Transition masses");
     }
 }

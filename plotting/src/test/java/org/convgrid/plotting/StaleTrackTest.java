@@ -37,7 +37,7 @@ class StaleTrackTest {
                 .noneMatch(f -> f.startsWith("zones-age_m2_") || f.startsWith("zones-age_m1.6_"));
         RunMaps.drawAll(run, dir, java.util.Set.of());
         assertThat(Files.readString(ReportPage.write(dir)))
-                .contains("1 track file(s) in tracks/ match no catalogue model (by id and mass)");
+                .contains("1 track file in tracks/ matches no catalogue model (by id and mass) and is not charted");
     }
 
     @Test

@@ -88,7 +88,7 @@ final class ShardRows {
         }
         if (!left.isEmpty()) {
             List<String> strays = left.keySet().stream().sorted().map(id -> id + " (" + origin.get(id) + ")").toList();
-            problems.add(strays.size() + " row(s) not in the grid: " + firstIds(strays));
+            problems.add(Counts.of(strays.size(), "row") + " not in the grid: " + firstIds(strays));
         }
         if (!problems.isEmpty()) {
             throw new RunSetupException("cannot merge: " + String.join("; ", problems));

@@ -9,8 +9,9 @@ import org.convgrid.grids.words.Counts;
 /**
  * Progress of a run on the error stream. On a terminal: one line redrawn in place with a carriage return (bar,
  * models done/total, rate, time left), at most every {@link #REDRAW_NANOS}. In a batch log: one plain line every
- * {@link #LOG_EVERY_NANOS} or every {@link #LOG_EVERY_PERCENT} %, whichever comes first. Called from one thread,
- * once per finished chunk of models.
+ * {@link #LOG_EVERY_NANOS} or every {@link #LOG_EVERY_PERCENT} %, whichever comes first. Called from one thread at a
+ * time, once per finished chunk of models (the sweep) or per new model (the refinement, whose total is unknown: the
+ * count and the rate alone, no bar, a log line every {@link #LOG_EVERY_NANOS}).
  *
  * <p>The time left is the models still to do at the rate measured since the first report. The wait for the first
  * report holds the set-up (the JVM warming up, opacity tables read, physics built per composition, cold first
@@ -42,6 +43,10 @@ public final class ProgressReporter implements ProgressListener {
     private final int reportsBeforeTimeLeft;
     private long firstDone;
     private long firstTime;
+    private final String counted;
+    private long lastDone;
+    private long lastTotal;
+    private long shownDone;
 
     /**
      * @param err where to write
@@ -59,6 +64,19 @@ public final class ProgressReporter implements ProgressListener {
      * @param threads worker threads of the run
      */
     public ProgressReporter(PrintWriter err, boolean terminal, LongSupplier nanoTime, int threads) {
+        this(err, terminal, nanoTime, threads, "model");
+    }
+
+    /**
+     * @param err where to write
+     * @param terminal whether err is a terminal (redraw in place) or a log (plain lines)
+     * @param nanoTime the clock, {@code System::nanoTime} outside tests
+     * @param threads worker threads of the run
+     * @param counted what is counted, singular ("new model" for the refinement, whose line then reads as the
+     *     "N new models" of the run's summary)
+     */
+    public ProgressReporter(PrintWriter err, boolean terminal, LongSupplier nanoTime, int threads, String counted) {
+        this.counted = counted;
         this.reportsBeforeTimeLeft = Math.max(2, REPORTS_PER_THREAD * threads);
         this.err = err;
         this.terminal = terminal;
@@ -74,13 +92,12 @@ public final class ProgressReporter implements ProgressListener {
             firstDone = done;
             firstTime = now;
         }
+        lastDone = done;
+        lastTotal = total;
         boolean last = done >= total && total > 0;
         if (terminal) {
             if (last || now - lastShown >= REDRAW_NANOS) {
-                err.print("\r" + line(done, total, now, true));
-                err.flush();
-                lastShown = now;
-                drawn = true;
+                draw(done, total, now);
             }
             return;
         }
@@ -93,8 +110,22 @@ public final class ProgressReporter implements ProgressListener {
         }
     }
 
-    /** Ends the terminal line; call once the run is over. */
+    private void draw(long done, long total, long now) {
+        err.print("\r" + line(done, total, now, true));
+        err.flush();
+        lastShown = now;
+        shownDone = done;
+        drawn = true;
+    }
+
+    /**
+     * Ends the terminal line; call once the run is over. A count of unknown total has no last report of its own, so
+     * the line is first redrawn with the final count when a later report fell within the redraw interval.
+     */
     public void finish() {
+        if (terminal && lastDone > shownDone) {
+            draw(lastDone, lastTotal, nanoTime.getAsLong());
+        }
         if (terminal && drawn) {
             err.println();
             err.flush();
@@ -110,7 +141,7 @@ public final class ProgressReporter implements ProgressListener {
             text.append('[').append("#".repeat(filled)).append(".".repeat(BAR_WIDTH - filled)).append("] ");
         }
         // "1 of 1 model": the count the noun agrees with is the total; "1/1 models" read oddly
-        text.append(total < 0 ? Counts.of(done, "model") : done + " of " + Counts.of(total, "model"));
+        text.append(total < 0 ? Counts.of(done, counted) : done + " of " + Counts.of(total, counted));
         if (total > 0) {
             text.append(String.format(Locale.ROOT, " (%d%%)", done * 100 / total));
         }

@@ -94,4 +94,31 @@ class ProgressReporterTest {
         reporter.progress(1, 1);
         assertThat(text.toString()).startsWith("convgrid: 1 of 1 model (100%), ");
     }
+
+    @Test
+    void aCountOfUnknownTotalShowsTheCountAndRateAndEndsOnItsFinalCount() {
+        // the refinement's new models: no total is known ahead, so no bar, percentage or time left
+        ProgressReporter reporter = new ProgressReporter(new PrintWriter(text), true, clock::get, 2, "new model");
+        clock.set(SECOND);
+        reporter.progress(1, -1);
+        clock.set(SECOND + 1000);
+        reporter.progress(2, -1);
+        assertThat(text.toString()).isEqualTo("\r1 new model, 1.00 models/s");
+        clock.set(2 * SECOND);
+        reporter.finish();
+        // the report that fell within the redraw interval is drawn before the line ends
+        assertThat(text.toString()).isEqualTo("\r1 new model, 1.00 models/s\r2 new models, 1.00 models/s\n");
+    }
+
+    @Test
+    void aCountOfUnknownTotalInABatchLogSpeaksEveryTenSeconds() {
+        ProgressReporter reporter = new ProgressReporter(new PrintWriter(text), false, clock::get, 2, "new model");
+        for (int done = 1; done <= 50; done++) {
+            clock.addAndGet(SECOND / 2);
+            reporter.progress(done, -1);
+        }
+        reporter.finish();
+        assertThat(text.toString().split("\n")).containsExactly("convgrid: 20 new models, 2.00 models/s",
+                "convgrid: 40 new models, 2.00 models/s");
+    }
 }

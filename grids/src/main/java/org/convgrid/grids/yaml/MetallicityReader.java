@@ -37,7 +37,7 @@ final class MetallicityReader {
             zs = AxisValues.increasing(fields.value("z"), "z", "zs", Z_RANGE, reader);
         } else {
             reader.problem(map, GridProblemKind.MISSING_KEY,
-                    "metallicity needs 'z', the initial metal mass fraction(s)");
+                    "metallicity needs 'z', the list of initial metal mass fractions");
         }
         if (fields.has("y") == fields.has("helium")) {
             reader.problem(map, GridProblemKind.CONFLICT,

@@ -9,33 +9,54 @@ import org.apache.commons.csv.CSVPrinter;
 import org.convgrid.engine.physics.MicrophysicsPoint;
 import org.convgrid.output.CsvNumbers;
 
-/** Writes the {@code probe} columns (README, "probe") as CSV or as a readable table. */
+/**
+ * Writes the {@code probe} columns (README, "probe") as CSV or as a readable table: the numbers, then what the
+ * opacity was read from ({@link #SOURCE_COLUMN}, last, so the numeric columns keep their places).
+ */
 public final class MicrophysicsPointWriter {
 
-    /** Column names in output order; the first eighteen are fixed by the conventions. */
-    public static final List<String> COLUMNS = List.of("temp_k", "density_cgs", "x", "z", "pressure_cgs",
+    /** The text column after the numbers: which opacity tables (or analytic terms) gave kappa_cgs. */
+    public static final String SOURCE_COLUMN = "opacity_source";
+
+    /** Numeric column names in output order; the first eighteen are fixed by the conventions. */
+    public static final List<String> NUMERIC_COLUMNS = List.of("temp_k", "density_cgs", "x", "z", "pressure_cgs",
             "gas_pressure_frac", "mu", "electrons_per_baryon", "nabla_ad", "gamma1", "cp_cgs", "chi_rho", "chi_t",
             "kappa_cgs", "eps_nuc_cgs", "eps_pp_cgs", "eps_cno_cgs", "degeneracy_eta", "y", "he3_frac",
             "internal_energy_cgs", "cv_cgs", "delta", "dlnkappa_dlnrho", "dlnkappa_dlnt", "dlneps_dlnt");
 
+    /** Every column in output order: the numeric ones, then {@link #SOURCE_COLUMN}. */
+    public static final List<String> COLUMNS = java.util.stream.Stream.concat(NUMERIC_COLUMNS.stream(),
+            java.util.stream.Stream.of(SOURCE_COLUMN)).toList();
+
     private static final List<String> UNITS = List.of("K", "g/cm^3", "", "", "dyn/cm^2", "", "", "", "", "", "erg/g/K",
             "", "", "cm^2/g", "erg/g/s", "erg/g/s", "erg/g/s", "", "", "", "erg/g", "erg/g/K", "", "", "", "");
 
-    /** Header row then one data row. */
-    public void writeCsv(MicrophysicsPoint p, Appendable out) throws IOException {
+    /**
+     * Header row then one data row.
+     *
+     * @param opacitySource what kappa was read from, in words
+     */
+    public void writeCsv(MicrophysicsPoint p, String opacitySource, Appendable out) throws IOException {
         try (CSVPrinter printer = new CSVPrinter(out, CSVFormat.DEFAULT.builder().setRecordSeparator('\n').get())) {
             printer.printRecord(COLUMNS);
-            printer.printRecord(values(p).stream().map(MicrophysicsPointWriter::format).toList());
+            List<String> row = new ArrayList<>(values(p).stream().map(MicrophysicsPointWriter::format).toList());
+            row.add(opacitySource);
+            printer.printRecord(row);
         }
     }
 
-    /** One line per quantity: name, value, unit. */
-    public void writeTable(MicrophysicsPoint p, Appendable out) throws IOException {
+    /**
+     * One line per quantity: name, value, unit; the opacity's source last, as words after its name.
+     *
+     * @param opacitySource what kappa was read from, in words
+     */
+    public void writeTable(MicrophysicsPoint p, String opacitySource, Appendable out) throws IOException {
         List<Double> values = values(p);
-        for (int i = 0; i < COLUMNS.size(); i++) {
-            out.append(String.format(Locale.ROOT, "%-22s %14s  %s%n", COLUMNS.get(i), format(values.get(i)),
-                    UNITS.get(i)));
+        for (int i = 0; i < NUMERIC_COLUMNS.size(); i++) {
+            out.append(String.format(Locale.ROOT, "%-22s %14s  %s%n", NUMERIC_COLUMNS.get(i),
+                    format(values.get(i)), UNITS.get(i)));
         }
+        out.append(String.format(Locale.ROOT, "%-22s %s%n", SOURCE_COLUMN, opacitySource));
     }
 
     private static List<Double> values(MicrophysicsPoint p) {

@@ -109,8 +109,8 @@ public record TransitionFinder(double coreMassFractionThreshold) {
                 ? estimate(byMass, coreCrossings, coreCrossings.size() - 1, false)
                 : new TransitionEstimate(Double.NaN, null, coreCrossings, 0);
         Span window = transientWindow(coreSearch, coreCrossings);
-        describeFullyConvective(fc, usable, notes);
-        describeCore(core, window, coredAtTop, coreSearch, coreSearch.size() < usable.size(), notes);
+        describeFullyConvective(fc, usable, byMass, notes);
+        describeCore(core, window, coredAtTop, coreSearch, coreSearch.size() < usable.size(), byMass, notes);
         describeRecededCores(usable.subList(coreSearch.size(), usable.size()), notes);
         describePastMainSequence(byMass, notes);
         TransitionRow row = new TransitionRow(slice, yInit, fc, core, window, TransitionMethod.GRID, Double.NaN, "");
@@ -201,7 +201,8 @@ public record TransitionFinder(double coreMassFractionThreshold) {
                 && (r.massMsun() == span.lo() || r.massMsun() == span.hi()));
     }
 
-    private static void describeFullyConvective(TransitionEstimate fc, List<CatalogueRow> usable, List<String> notes) {
+    private static void describeFullyConvective(TransitionEstimate fc, List<CatalogueRow> usable,
+                                                List<CatalogueRow> byMass, List<String> notes) {
         if (!fc.found()) {
             long count = usable.stream().filter(TransitionFinder::isFullyConvective).count();
             notes.add(count == usable.size() ? "fully convective at every usable mass"
@@ -212,12 +213,12 @@ public record TransitionFinder(double coreMassFractionThreshold) {
             notes.add("fully convective changes " + timesInWords(fc.crossings().size()) + " with mass");
         }
         if (fc.skippedInBracket() > 0) {
-            notes.add("fully convective bracket widened past " + fc.skippedInBracket() + " unusable model(s)");
+            notes.add("fully convective bracket widened past " + SkippedModelsText.of(byMass, fc.bracket()));
         }
     }
 
     private void describeCore(TransitionEstimate core, Span window, boolean coredAtTop, List<CatalogueRow> searched,
-                              boolean someLeftOut, List<String> notes) {
+                              boolean someLeftOut, List<CatalogueRow> byMass, List<String> notes) {
         long cored = searched.stream().filter(this::hasConvectiveCore).count();
         if (!core.found()) {
             notes.add(cored == searched.size()
@@ -232,7 +233,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
                     + (window == null ? "" : "; the lowest window of cores is the transient one"));
         }
         if (core.skippedInBracket() > 0) {
-            notes.add("convective core bracket widened past " + core.skippedInBracket() + " unusable model(s)");
+            notes.add("convective core bracket widened past " + SkippedModelsText.of(byMass, core.bracket()));
         }
     }
 

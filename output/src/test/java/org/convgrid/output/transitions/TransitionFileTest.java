@@ -35,7 +35,7 @@ class TransitionFileTest {
         assertThat(lines[0]).isEqualTo(HEADER);
         // no transient window: its cells are empty; a grid row has no tolerance; 2 Msun is written as 2.0
         assertThat(lines[1]).isEqualTo("0.02,0.27,0.0,1.8,0.0,schwarzschild,1.0,0.3,0.3,0.4,2.0,0.4,2.0,,,"
-                + "fully convective bracket widened past 1 unusable model(s),grid,");
+                + "fully convective bracket widened past 1 failed model,grid,");
         List<TransitionRow> back = TransitionReader.read(new StringReader(text));
         assertThat(back).hasSize(1);
         assertThat(back.get(0).fullyConvective().bracket()).isEqualTo(rows.get(0).fullyConvective().bracket());

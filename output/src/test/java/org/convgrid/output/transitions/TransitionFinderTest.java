@@ -116,8 +116,10 @@ class TransitionFinderTest {
         assertThat(t.fullyConvective().skippedInBracket()).isEqualTo(2);
         assertThat(t.convCoreOnset().bracket()).isEqualTo(new Span(1.0, 1.2));
         assertThat(t.convCoreOnset().skippedInBracket()).isEqualTo(1);
-        assertThat(t.notes()).contains("fully convective bracket widened past 2 unusable model(s)",
-                "convective core bracket widened past 1 unusable model(s)");
+        // said by their catalogue status, singular or plural as the count asks
+        assertThat(t.notes().split("; ")).contains("fully convective bracket widened past 2 failed models",
+                "convective core bracket widened past 1 failed model");
+        assertThat(t.notes()).doesNotContain("(s)");
     }
 
     @Test

@@ -81,9 +81,11 @@ public final class ReportPage {
             b.append("<h2>").append(Html.escape(MapEntry.ZONES_AGE))
                     .append("</h2>\n<p>No evolution tracks in this run.</p>\n");
         } else if (run.trackedModels().size() < run.tracks().size()) {
-            b.append("<p class=\"missing\">").append(run.tracks().size() - run.trackedModels().size())
-                    .append(" track file(s) in ").append(RunLayout.TRACKS)
-                    .append("/ match no catalogue model (by id and mass) and are not charted.</p>\n");
+            int strays = run.tracks().size() - run.trackedModels().size();
+            b.append("<p class=\"missing\">").append(strays).append(strays == 1 ? " track file in " : " track files in ")
+                    .append(RunLayout.TRACKS).append(strays == 1
+                            ? "/ matches no catalogue model (by id and mass) and is not charted.</p>\n"
+                            : "/ match no catalogue model (by id and mass) and are not charted.</p>\n");
         }
         b.append("</body>\n</html>\n");
         return b.toString();
@@ -194,7 +196,8 @@ public final class ReportPage {
             return;
         }
         b.append("<p class=\"missing\">").append(chartFailures.size())
-                .append(" chart(s) could not be drawn; the tables below are complete:</p>\n<ul>\n");
+                .append(chartFailures.size() == 1 ? " chart" : " charts")
+                .append(" could not be drawn; the tables below are complete:</p>\n<ul>\n");
         chartFailures.forEach(f -> b.append("<li>").append(Html.escape(f.describe())).append("</li>\n"));
         b.append("</ul>\n");
     }

@@ -56,7 +56,7 @@ class ReportPageTest {
         RunMaps.drawAll(dir);
         String html = Files.readString(ReportPage.write(dir));
         assertThat(html).contains("<h2 id=\"convective-zones-against-age\">Convective zones against age</h2>", "maps/zones-age_m2_z0.014",
-                "1 track file(s) in tracks/ match no catalogue model").doesNotContain("No evolution tracks");
+                "1 track file in tracks/ matches no catalogue model").doesNotContain("No evolution tracks");
     }
 
     @Test

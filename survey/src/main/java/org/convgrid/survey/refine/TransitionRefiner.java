@@ -3,11 +3,14 @@ package org.convgrid.survey.refine;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import java.util.function.DoubleFunction;
 import java.util.function.Predicate;
+import org.convgrid.engine.batch.ProgressListener;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.refine.MassBisection;
@@ -78,6 +81,7 @@ public final class TransitionRefiner {
     private final MassBisection bisection;
     private final ParallelWork work;
     private final boolean allCrossings;
+    private final RefinementProgress progress;
 
     /**
      * @param lines opens the line of each search
@@ -88,11 +92,21 @@ public final class TransitionRefiner {
      */
     public TransitionRefiner(MassLineFactory lines, TransitionFinder finder, double toleranceMsun, ParallelWork work,
                              boolean allCrossings) {
+        this(lines, finder, toleranceMsun, work, allCrossings, new RefinementProgress(ProgressListener.NONE));
+    }
+
+    /**
+     * As {@link #TransitionRefiner(MassLineFactory, TransitionFinder, double, ParallelWork, boolean)}, telling
+     * {@code progress} of each new model as it is computed.
+     */
+    public TransitionRefiner(MassLineFactory lines, TransitionFinder finder, double toleranceMsun, ParallelWork work,
+                             boolean allCrossings, RefinementProgress progress) {
         this.lines = lines;
         this.finder = finder;
         this.bisection = new MassBisection(toleranceMsun * Constants.M_SUN, TransitionRefiner::catalogueMass);
         this.work = work;
         this.allCrossings = allCrossings;
+        this.progress = progress;
     }
 
     /** The tolerance, solar masses. */
@@ -185,8 +199,8 @@ public final class TransitionRefiner {
     private List<Refinement> run(List<Search> task) {
         Search first = task.get(0);
         ModelRequest t = first.template();
-        MassLine line = skippingKnownFailures(lines.open(t.physics(), t.initialMetals(), t.initialHelium()),
-                first.failed());
+        MassLine line = skippingKnownFailures(counting(lines.open(t.physics(), t.initialMetals(), t.initialHelium()),
+                first.bracket()), first.failed());
         List<Refinement> done = new ArrayList<>(task.size());
         for (Search s : task) {
             Predicate<ModelOutcome.Solved> lowSide = o -> inState(s.kind(), OutcomeRows.toRow(o)) == s.lowState();
@@ -200,6 +214,25 @@ public final class TransitionRefiner {
                     : bisection.refineWithinKnownEnds(line, at, lo, hi, lowSide));
         }
         return done;
+    }
+
+    /**
+     * A line that tells the progress of each new mass it computes: not the bracket's ends (recomputed at zero age to
+     * seed the midpoints, already in the catalogue) nor a mass a search sharing the line asks again (the catalogue
+     * gets it once), so the count ends at the new models the run reports.
+     */
+    private MassLine counting(MassLine line, Span bracket) {
+        Set<Double> counted = new HashSet<>();
+        return request -> {
+            ModelOutcome outcome = line.solve(request);
+            // the ends in g as run() asks for them
+            boolean end = request.mass() == bracket.lo() * Constants.M_SUN
+                    || request.mass() == bracket.hi() * Constants.M_SUN;
+            if (!end && counted.add(request.mass())) {
+                progress.modelDone();
+            }
+            return outcome;
+        };
     }
 
     /**

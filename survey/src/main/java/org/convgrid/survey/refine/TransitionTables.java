@@ -11,6 +11,7 @@ import java.util.Map;
 import java.util.OptionalDouble;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.grids.GridSpec;
+import org.convgrid.grids.words.Counts;
 import org.convgrid.grids.yaml.GridFileReader;
 import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.OutputFormatException;
@@ -194,7 +195,7 @@ public final class TransitionTables {
         long wide = e.crossings().stream().filter(c -> !c.equals(e.bracket()) && !alsoRefined.contains(c)
                 && c.hi() - c.lo() >= toleranceMsun).count();
         if (wide > 0) {
-            notes.add(what + ": " + wide + " other crossing(s) wider than the tolerance, not refined "
+            notes.add(what + ": " + Counts.of(wide, "other crossing") + " wider than the tolerance, not refined "
                     + "(--all-crossings refines them)");
         }
     }

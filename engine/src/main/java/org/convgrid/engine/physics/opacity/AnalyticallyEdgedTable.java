@@ -1,5 +1,7 @@
 package org.convgrid.engine.physics.opacity;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.util.Objects;
 import org.convgrid.engine.state.Composition;
 
@@ -17,6 +19,7 @@ import org.convgrid.engine.state.Composition;
 final class AnalyticallyEdgedTable {
 
     private final TabulatedOpacity table;
+    private final String label;
     private final Opacity analyticRadiative;
     private final double coolWidth;
     private final double edgeWidth;
@@ -28,14 +31,16 @@ final class AnalyticallyEdgedTable {
 
     /**
      * @param table radiative log kappa tables
+     * @param label what {@link #source} calls the table (its file's name)
      * @param analyticRadiative answers where the table does not (radiative only)
      * @param coolWidth fade width (dex in log T) below the coolest row
      * @param edgeWidth fade width (dex) beyond the other edges
      * @param denseWidth fade width (dex in log R) above the highest log R; infinite to hold the offset there
      */
-    AnalyticallyEdgedTable(TabulatedOpacity table, Opacity analyticRadiative, double coolWidth, double edgeWidth,
-                           double denseWidth) {
+    AnalyticallyEdgedTable(TabulatedOpacity table, String label, Opacity analyticRadiative, double coolWidth,
+                           double edgeWidth, double denseWidth) {
         this.table = Objects.requireNonNull(table);
+        this.label = Objects.requireNonNull(label);
         this.analyticRadiative = Objects.requireNonNull(analyticRadiative);
         this.coolWidth = coolWidth;
         this.edgeWidth = edgeWidth;
@@ -108,6 +113,42 @@ final class AnalyticallyEdgedTable {
         double z = table.clampMetals(composition.z());
         return table.interpolate(logT, logR, tableHydrogen(composition, z), z, new double[3])
                 == TabulatedOpacity.ANSWERED;
+    }
+
+    /**
+     * What answers at (log10 T, log10 R) for this composition, in words for a reader: the table file and the Z of the
+     * tables interpolated ("opal-gn93hz.txt at Z 0.01/0.02/0.03/0.04"), "analytic terms joined to" it in the fades,
+     * "analytic terms" alone beyond them. A composition outside the tables is moved into them as {@link #logKappa}
+     * moves it, and said so.
+     */
+    String source(double logT, double logR, Composition composition) {
+        if (beyondEveryFade(logT, logR)) {
+            return "analytic terms";
+        }
+        double[] weighed = table.metalsWeighed(composition.x(), composition.z());
+        boolean moved = weighed.length == 0;
+        if (moved) {
+            double z = table.clampMetals(composition.z());
+            weighed = table.metalsWeighed(tableHydrogen(composition, z), z);
+        }
+        StringBuilder tables = new StringBuilder(label).append(" at Z ");
+        for (int r = 0; r < weighed.length; r++) {
+            tables.append(r == 0 ? "" : "/").append(plain(weighed[r]));
+        }
+        if (moved) {
+            tables.append(" (nearest tabulated composition)");
+        } else if (weighed.length > 1) {
+            // the Z between the rows: CN burning adds metals (Z 0.02 at 1e7 K is 0.02000x), so a round Z asked for
+            // can still weigh its neighbours
+            tables.append(" (interpolated to Z ").append(plain(new BigDecimal(composition.z())
+                    .round(new MathContext(6)).doubleValue())).append(')');
+        }
+        return answers(logT, logR, composition) ? tables.toString() : "analytic terms joined to " + tables;
+    }
+
+    /** A metal fraction as written, without an exponent or trailing zeros: 0.0001, 0.02, 0. */
+    private static String plain(double z) {
+        return BigDecimal.valueOf(z).stripTrailingZeros().toPlainString();
     }
 
     /** X for the table part at table metals z: the request's hydrogen share X/(1-Z), moved into the tables. */

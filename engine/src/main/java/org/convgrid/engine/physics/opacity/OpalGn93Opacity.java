@@ -90,14 +90,29 @@ public final class OpalGn93Opacity implements Opacity {
      */
     public OpalGn93Opacity(TabulatedOpacity table, TabulatedOpacity coolTable, Opacity analyticRadiative,
                            Opacity conduction) {
-        this.hot = new AnalyticallyEdgedTable(table, analyticRadiative, COOL_JOIN_WIDTH, EDGE_JOIN_WIDTH,
-                EDGE_JOIN_WIDTH);
+        this(table, table.name(), coolTable, coolTable == null ? null : coolTable.name(), analyticRadiative,
+                conduction);
+    }
+
+    /**
+     * As the public constructor, with the names {@link #source} gives the tables (the shipped files' names).
+     */
+    private OpalGn93Opacity(TabulatedOpacity table, String tableLabel, TabulatedOpacity coolTable,
+                            String coolTableLabel, Opacity analyticRadiative, Opacity conduction) {
+        this.hot = new AnalyticallyEdgedTable(table, tableLabel, analyticRadiative, COOL_JOIN_WIDTH,
+                EDGE_JOIN_WIDTH, EDGE_JOIN_WIDTH);
         // the cool set's offset is held above log R = +1 (see the class comment)
-        this.cool = coolTable == null ? null : new AnalyticallyEdgedTable(coolTable, analyticRadiative,
-                COOL_JOIN_WIDTH, EDGE_JOIN_WIDTH, Double.POSITIVE_INFINITY);
+        this.cool = coolTable == null ? null : new AnalyticallyEdgedTable(coolTable, coolTableLabel,
+                analyticRadiative, COOL_JOIN_WIDTH, EDGE_JOIN_WIDTH, Double.POSITIVE_INFINITY);
         this.analyticRadiative = analyticRadiative;
         this.conduction = Objects.requireNonNull(conduction);
-        this.aid = coolTable == null ? this : new OpalGn93Opacity(table, null, analyticRadiative, conduction);
+        this.aid = coolTable == null ? this
+                : new OpalGn93Opacity(table, tableLabel, null, null, analyticRadiative, conduction);
+    }
+
+    /** The file name of a classpath resource: what {@link #source} calls a shipped table. */
+    private static String fileName(String resource) {
+        return resource.substring(resource.lastIndexOf('/') + 1);
     }
 
     /**
@@ -287,6 +302,30 @@ public final class OpalGn93Opacity implements Opacity {
     }
 
     /**
+     * What answers at this point, in words for a reader (probe): the table file and the Z of the tables
+     * interpolated, for the low-temperature set alone (up to log T {@value #BLEND_FROM_LOG_T}), OPAL alone (from
+     * {@value #BLEND_TO_LOG_T}) or both, with the low-temperature set's weight, between; the analytic terms where
+     * they answer (see {@link AnalyticallyEdgedTable#source}). Conduction, added in parallel everywhere, is not
+     * named.
+     */
+    public String source(double density, double temperature, Composition composition) {
+        double lt = Math.log10(temperature);
+        double lr = Math.log10(density) - 3.0 * (lt - 6.0);
+        if (cool == null) {
+            return hot.source(lt, lr, composition);
+        }
+        double w = AnalyticallyEdgedTable.fade((lt - BLEND_FROM_LOG_T) / (BLEND_TO_LOG_T - BLEND_FROM_LOG_T));
+        if (w == 1.0) {
+            return cool.source(lt, lr, composition);
+        }
+        if (w == 0.0) {
+            return hot.source(lt, lr, composition);
+        }
+        return String.format(java.util.Locale.ROOT, "%s (weight %.2f) blended with %s", cool.source(lt, lr,
+                composition), w, hot.source(lt, lr, composition));
+    }
+
+    /**
      * Whether the tables themselves answer at (log10 T, log10 R) for this composition (no analytic join): the
      * set, or both sets in the overlap, in use there.
      */
@@ -301,13 +340,14 @@ public final class OpalGn93Opacity implements Opacity {
 
     /** Holder: the class initialises (and reads the OPAL tables) at the first call of either accessor. */
     private static final class ShippedWithoutCoolTables {
-        static final OpalGn93Opacity INSTANCE = new OpalGn93Opacity(readShippedTable(), null,
-                AnalyticCompositeOpacity.standardRadiative(), new ElectronConduction());
+        static final OpalGn93Opacity INSTANCE = new OpalGn93Opacity(readShippedTable(), fileName(RESOURCE), null,
+                null, AnalyticCompositeOpacity.standardRadiative(), new ElectronConduction());
     }
 
     /** Holder: the class initialises (and reads the cool set) at the first call of {@link #shipped()}. */
     private static final class Shipped {
         static final OpalGn93Opacity INSTANCE = new OpalGn93Opacity(ShippedWithoutCoolTables.INSTANCE.table(),
-                readShippedCoolTable(), AnalyticCompositeOpacity.standardRadiative(), new ElectronConduction());
+                fileName(RESOURCE), readShippedCoolTable(), fileName(COOL_RESOURCE),
+                AnalyticCompositeOpacity.standardRadiative(), new ElectronConduction());
     }
 }

@@ -477,6 +477,23 @@ public final class TabulatedOpacity implements Opacity {
     }
 
     /** Z clamped into [Z_min, Z_max] of the tables. */
+    /**
+     * The distinct Z of the tables that composition (x, z) is interpolated from, increasing: one when z is a tabulated
+     * Z, up to four between them; empty when the composition lies outside the tables. For a reader who asks which
+     * tables answered (probe); the look-ups themselves do not call it.
+     */
+    double[] metalsWeighed(double x, double z) {
+        Scratch scratch = new Scratch();
+        if (weighCompositions(x, z, scratch) != ANSWERED) {
+            return new double[0];
+        }
+        TreeSet<Double> used = new TreeSet<>();
+        for (int n = 0; n < scratch.count; n++) {
+            used.add(tableZ[scratch.tables[n]]);
+        }
+        return used.stream().mapToDouble(Double::doubleValue).toArray();
+    }
+
     double clampMetals(double z) {
         return Math.min(Math.max(z, metals[0]), last(metals));
     }
