@@ -8,11 +8,13 @@ import org.convgrid.grids.words.Counts;
 import org.convgrid.grids.words.MessageNumbers;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.cli.run.Durations;
+import org.convgrid.cli.run.ProgressReporter;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.output.RunLayout;
 import org.convgrid.survey.RunDirectory;
 import org.convgrid.survey.RunLock;
 import org.convgrid.survey.RunFinishing;
+import org.convgrid.survey.refine.RefinementProgress;
 import org.convgrid.survey.refine.TransitionRefiner;
 import org.convgrid.survey.refine.TransitionTables;
 import org.convgrid.output.transitions.TransitionFinder;
@@ -97,9 +99,16 @@ final class TransitionsCommand implements Callable<Integer> {
                 if (lock != null) {
                     Locks.reportStale(lock, parent.err());
                 }
-                update = TransitionTables.refine(dir, finder,
-                        new TransitionRefiner(context.lines(), finder, tolerance, work, allCrossings),
-                        context.finishers());
+                // the bisections can take minutes: count their new models on stderr as `run` does
+                ProgressReporter reporter = new ProgressReporter(parent.err(), context.terminal(), System::nanoTime,
+                        n, "new model");
+                try {
+                    update = TransitionTables.refine(dir, finder, new TransitionRefiner(context.lines(), finder,
+                            tolerance, work, allCrossings, new RefinementProgress(reporter)), context.finishers());
+                } finally {
+                    // an error message then starts a line of its own
+                    reporter.finish();
+                }
             }
         } else {
             // recomputing rewrites transitions.csv: owned like a refinement

@@ -45,6 +45,25 @@ class RefinementProgressLineTest {
     }
 
     @Test
+    void transitionsRefineCountsItsNewModelsToo() throws Exception {
+        FakeMassLines lines = new FakeMassLines(Set.of());
+        CliHarness terminal = new CliHarness(new CommandContext(grid -> FakeChunkSolver.fast(), List.of(), Map.of(),
+                work, true, lines));
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        CliHarness.Execution swept = terminal.execute("run", grid.toString(), "--out", "t", "--no-refine");
+        assertThat(swept.code()).as(swept.err()).isZero();
+        CliHarness.Execution done = terminal.execute("transitions", work.resolve("t").toString(), "--refine",
+                "--threads", "2");
+        assertThat(done.code()).as(done.err()).isZero();
+
+        Matcher summary = Pattern.compile(", (\\d+) new models in catalogue").matcher(done.out());
+        assertThat(summary.find()).as(done.out()).isTrue();
+        assertThat(Integer.parseInt(summary.group(1))).isPositive();
+        assertThat(done.err()).containsPattern("\r\\d+ new models?, [0-9.]+ models/s")
+                .contains("\r" + summary.group(1) + " new models, ");
+    }
+
+    @Test
     void withQuietTheRefinementSaysNothing() throws Exception {
         CliHarness terminal = new CliHarness(new CommandContext(grid -> FakeChunkSolver.fast(), List.of(), Map.of(),
                 work, true, new FakeMassLines(Set.of())));
