@@ -1,4 +1,4 @@
-package org.convgrid.engine.evolution;
+package org.convgrid.engine.convection;
 
 import org.convgrid.engine.state.Composition;
 
@@ -9,15 +9,16 @@ import org.convgrid.engine.state.Composition;
  * difference quotient between its two points; a point takes the one of its two intervals that is smaller in
  * magnitude (zero when they differ in sign, a "minmod" choice of ours), so the point at the edge of a
  * homogeneous mixed zone sees the zero gradient of its own side and is not stabilised by the composition step
- * just outside it, while the first point outside sees that step. Stateless.
+ * just outside it, while the first point outside sees that step. The evolution's Ledoux criterion and the profiles'
+ * buoyancy frequency read the same term. Stateless.
  */
-final class MuGradient {
+public final class MuGradient {
 
     private MuGradient() {
     }
 
     /** 1/mu of a fully ionised mixture. */
-    static double inverseMu(Composition c) {
+    public static double inverseMu(Composition c) {
         return 2.0 * c.h1() + c.he3() + 0.75 * c.he4() + 0.5 * (c.c12() + c.n14() + c.o16() + c.otherMetals());
     }
 
@@ -26,7 +27,7 @@ final class MuGradient {
      * @param lnPressure ln P per point (decreasing outwards)
      * @return nabla_mu per point (positive where mu increases inwards)
      */
-    static double[] of(Composition[] composition, double[] lnPressure) {
+    public static double[] of(Composition[] composition, double[] lnPressure) {
         int n = composition.length;
         double[] interval = new double[n - 1];
         for (int k = 0; k < n - 1; k++) {
