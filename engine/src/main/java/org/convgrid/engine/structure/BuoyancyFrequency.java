@@ -11,9 +11,11 @@ import org.convgrid.engine.units.Constants;
  * Oscillations of Stars", 2nd ed.; Aerts, Christensen-Dalsgaard &amp; Kurtz 2010, "Asteroseismology", ch. 3; both
  * from memory, equation numbers not checked). chi_T, chi_rho and nabla_ad are the equation of state's at each
  * point, nabla the gradient the solver used there (radiative, or the mixing-length one where convective), and B
- * the Ledoux criterion's own composition term ({@link LedouxGradient#compositionTerm}) with its nabla_mu
- * ({@link MuGradient}: mu of the fully ionised composition, minmod slopes along the mesh, so the edge of a mixed
- * core gives one clean step and no ripple) and phi = 1. For an ideal gas with radiation this is the familiar
+ * the Ledoux criterion's own composition term ({@link LedouxGradient#compositionTerm}), phi = 1, with its
+ * nabla_mu's mu (of the fully ionised composition) and intervals, taken to the points by their harmonic mean
+ * ({@link MuGradient#harmonicMeanOf}): zero at a mixed zone's edge point, no sign change across a composition step,
+ * and smooth where the profile is smooth (centred differences put 1e-5 to 1e-3 s^-2 on the edge points of a 1.4 Msun
+ * star's convective core and shell; the criterion's minmod rule read the Sun's core 1-4 % low, with a kink). For an ideal gas with radiation this is the familiar
  * (g^2 rho / P) (chi_T / chi_rho) (nabla_ad - nabla) + (g^2 rho / P) nabla_mu. Convective points are written as
  * computed (about zero, slightly negative where superadiabatic), not clamped. Stateless.
  */
@@ -51,7 +53,7 @@ public final class BuoyancyFrequency {
         for (int k = 0; k < n; k++) {
             lnPressure[k] = Math.log(p.pressure(k));
         }
-        double[] nablaMu = MuGradient.of(model.state().compositions(), lnPressure);
+        double[] nablaMu = MuGradient.harmonicMeanOf(model.state().compositions(), lnPressure);
         double[] out = new double[n];
         for (int k = 0; k < n; k++) {
             double r = p.radius(k);
