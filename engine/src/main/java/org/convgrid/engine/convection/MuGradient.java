@@ -1,5 +1,6 @@
 package org.convgrid.engine.convection;
 
+import java.util.function.DoubleBinaryOperator;
 import org.convgrid.engine.state.Composition;
 
 /**
@@ -30,15 +31,7 @@ public final class MuGradient {
      * @return nabla_mu per point (positive where mu increases inwards)
      */
     public static double[] of(Composition[] composition, double[] lnPressure) {
-        double[] interval = intervals(composition, lnPressure);
-        int n = composition.length;
-        double[] out = endsOf(interval);
-        for (int k = 1; k < n - 1; k++) {
-            double a = interval[k - 1];
-            double b = interval[k];
-            out[k] = a * b <= 0.0 ? 0.0 : (Math.abs(a) < Math.abs(b) ? a : b);
-        }
-        return out;
+        return atPoints(composition, lnPressure, (a, b) -> a * b <= 0.0 ? 0.0 : (Math.abs(a) < Math.abs(b) ? a : b));
     }
 
     /**
@@ -55,19 +48,14 @@ public final class MuGradient {
      * @return nabla_mu per point (positive where mu increases inwards)
      */
     public static double[] harmonicMeanOf(Composition[] composition, double[] lnPressure) {
-        double[] interval = intervals(composition, lnPressure);
-        int n = composition.length;
-        double[] out = endsOf(interval);
-        for (int k = 1; k < n - 1; k++) {
-            double a = interval[k - 1];
-            double b = interval[k];
-            out[k] = a * b <= 0.0 ? 0.0 : 2.0 * a * b / (a + b);
-        }
-        return out;
+        return atPoints(composition, lnPressure, (a, b) -> a * b <= 0.0 ? 0.0 : 2.0 * a * b / (a + b));
     }
 
-    /** dln mu/dln P on each interval between neighbouring points (0 where the two pressures are equal). */
-    private static double[] intervals(Composition[] composition, double[] lnPressure) {
+    /**
+     * The slopes of the intervals on each side of a point, taken to it by a rule (the end points take their one
+     * interval's slope).
+     */
+    private static double[] atPoints(Composition[] composition, double[] lnPressure, DoubleBinaryOperator rule) {
         int n = composition.length;
         double[] interval = new double[n - 1];
         for (int k = 0; k < n - 1; k++) {
@@ -75,15 +63,12 @@ public final class MuGradient {
             double dLnP = lnPressure[k + 1] - lnPressure[k];
             interval[k] = dLnP == 0.0 ? 0.0 : dLnMu / dLnP;
         }
-        return interval;
-    }
-
-    /** Per-point values, the two end points set to their one interval's slope. */
-    private static double[] endsOf(double[] interval) {
-        int n = interval.length + 1;
         double[] out = new double[n];
         out[0] = interval[0];
         out[n - 1] = interval[n - 2];
+        for (int k = 1; k < n - 1; k++) {
+            out[k] = rule.applyAsDouble(interval[k - 1], interval[k]);
+        }
         return out;
     }
 }

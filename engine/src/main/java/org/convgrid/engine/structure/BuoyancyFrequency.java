@@ -6,18 +6,18 @@ import org.convgrid.engine.physics.eos.EosState;
 import org.convgrid.engine.units.Constants;
 
 /**
- * The squared buoyancy (Brunt-Vaisala) frequency of a solved model, in its general form
- * N^2 = (g^2 rho / P) (chi_T / chi_rho) (nabla_ad - nabla + B), g = G m / r^2 (Unno et al. 1989, "Nonradial
- * Oscillations of Stars", 2nd ed.; Aerts, Christensen-Dalsgaard &amp; Kurtz 2010, "Asteroseismology", ch. 3; both
- * from memory, equation numbers not checked). chi_T, chi_rho and nabla_ad are the equation of state's at each
- * point, nabla the gradient the solver used there (radiative, or the mixing-length one where convective), and B
- * the Ledoux criterion's own composition term ({@link LedouxGradient#compositionTerm}), phi = 1, with its
- * nabla_mu's mu (of the fully ionised composition) and intervals, taken to the points by their harmonic mean
- * ({@link MuGradient#harmonicMeanOf}): zero at a mixed zone's edge point, no sign change across a composition step,
- * and smooth where the profile is smooth (centred differences put 1e-5 to 1e-3 s^-2 on the edge points of a 1.4 Msun
- * star's convective core and shell; the criterion's minmod rule read the Sun's core 1-4 % low, with a kink). For an ideal gas with radiation this is the familiar
- * (g^2 rho / P) (chi_T / chi_rho) (nabla_ad - nabla) + (g^2 rho / P) nabla_mu. Convective points are written as
- * computed (about zero, slightly negative where superadiabatic), not clamped. Stateless.
+ * The squared buoyancy (Brunt-Vaisala) frequency of a solved model, in its general form N^2 = (g^2 rho / P) (chi_T /
+ * chi_rho) (nabla_ad - nabla + B), g = G m / r^2 (Unno et al. 1989, "Nonradial Oscillations of Stars", 2nd ed.; Aerts,
+ * Christensen-Dalsgaard &amp; Kurtz 2010, "Asteroseismology", ch. 3; both from memory, equation numbers not checked).
+ * chi_T, chi_rho and nabla_ad are the equation of state's at each point, nabla the gradient the solver used there
+ * (radiative, or the mixing-length one where convective), and B the Ledoux criterion's own composition term ({@link
+ * LedouxGradient#compositionTerm}), phi = 1, with its nabla_mu's mu (of the fully ionised composition) and intervals,
+ * taken to the points by their harmonic mean ({@link MuGradient#harmonicMeanOf}): zero at a mixed zone's edge point,
+ * no sign change across a composition step, and smooth where the profile is smooth (centred differences put 1e-5 to
+ * 1e-3 s^-2 on the edge points of a 1.4 Msun star's convective core and shell; the criterion's minmod rule read the
+ * Sun's core 1-4 % low, with a kink). For an ideal gas with radiation this is the familiar (g^2 rho / P) (chi_T /
+ * chi_rho) (nabla_ad - nabla) + (g^2 rho / P) nabla_mu. Convective points are written as computed (about zero,
+ * slightly negative where superadiabatic), not clamped. Stateless.
  */
 public final class BuoyancyFrequency {
 
