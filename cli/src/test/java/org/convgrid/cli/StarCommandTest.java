@@ -68,6 +68,19 @@ class StarCommandTest {
         // the surface keeps its birth hydrogen (X = 1 - 0.2771 - 0.02 with the default helium law), the centre less
         assertThat(surface.hydrogen()).isCloseTo(0.7029, org.assertj.core.api.Assertions.within(2e-3));
         assertThat(centre.hydrogen()).isLessThanOrEqualTo(surface.hydrogen());
+        // mu of a fully ionised X = 0.7029, Z = 0.02 gas is 0.616 (1/mu = 2X + 3Y/4 + Z/2, Kippenhahn, Weigert &
+        // Weiss 2012, ch. 13); a neutral photosphere's is ~1.3 (the same formula without electrons)
+        assertThat(centre.mu()).isCloseTo(0.616, org.assertj.core.api.Assertions.within(0.01));
+        assertThat(surface.mu()).isBetween(1.2, 1.35);
+        assertThat(shells).allSatisfy(s -> assertThat(s.helium3()).isBetween(0.0, 1e-2));
+        // N^2 is written at every point; radiative points are stable (N^2 > 0), and the innermost point, at
+        // m/M 1e-6, is near the centre's limit N^2 -> 0 (Unno et al. 1989, "Nonradial Oscillations of Stars",
+        // from memory)
+        assertThat(shells).allSatisfy(s -> assertThat(s.bruntSquared()).isFinite());
+        assertThat(shells).filteredOn(s -> !s.convective()).allSatisfy(s -> assertThat(s.bruntSquared()).isPositive());
+        double interiorPeak = shells.stream().filter(s -> s.radiusFrac() < 0.5).mapToDouble(s -> s.bruntSquared())
+                .max().orElseThrow();
+        assertThat(centre.bruntSquared()).isLessThan(0.01 * interiorPeak);
     }
 
     @Test

@@ -25,11 +25,28 @@ public final class LedouxGradient {
         if (nablaMu == 0.0) {
             return nablaAd;
         }
+        return nablaAd + compositionTerm(phi, delta, nablaMu);
+    }
+
+    /**
+     * The composition term (phi/delta) nabla_mu by which nabla_L exceeds nabla_ad. It is also the composition
+     * (Ledoux) term B of the buoyancy frequency, -(1/chi_T) sum_i (dlnP/dlnX_i)_{rho,T} dlnX_i/dlnP (Unno et al.
+     * 1989, "Nonradial Oscillations of Stars", 2nd ed.; from memory, equation number not checked), where the
+     * composition enters P through mu alone: then (dlnP/dln mu)_{rho,T} = -phi chi_rho, delta = chi_T/chi_rho, and
+     * B = phi nabla_mu chi_rho/chi_T = (phi/delta) nabla_mu.
+     *
+     * @param phi (dln rho/dln mu) at fixed P and T, positive
+     * @param delta -(dln rho/dln T) at fixed P and mu, positive
+     * @param nablaMu dln mu/dln P
+     * @return (phi/delta) nabla_mu
+     * @throws ConvgridException OUT_OF_RANGE when delta is not positive
+     */
+    public static double compositionTerm(double phi, double delta, double nablaMu) {
         if (!(delta > 0.0)) {
             throw new ConvgridException(ErrorKind.OUT_OF_RANGE, "delta must be > 0 for the Ledoux gradient, got "
                     + delta, "delta", delta, 0.0, Double.POSITIVE_INFINITY);
         }
-        return nablaAd + phi * nablaMu / delta;
+        return phi * nablaMu / delta;
     }
 
     /**

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Optional;
 
 import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.convection.MuGradient;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.overshoot.Overshoot;

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.within;
 
 import java.util.Arrays;
 
+import org.convgrid.engine.convection.MuGradient;
 import org.convgrid.engine.overshoot.StepOvershoot;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.MassMesh;

@@ -27,17 +27,27 @@ public final class ProfileColumns {
     public static final String SOUND_SPEED_CGS = "sound_speed_cgs";
     /** Hydrogen mass fraction at the shell. */
     public static final String H_FRAC = "h_frac";
+    /** Mean molecular weight (atomic mass units per free particle), from the equation of state. */
+    public static final String MU = "mu";
+    /** Helium-3 mass fraction at the shell. */
+    public static final String HE3_FRAC = "he3_frac";
+    /** Squared buoyancy (Brunt-Vaisala) frequency N^2, s^-2; negative where superadiabatic. */
+    public static final String BRUNT_N2_CGS = "brunt_n2_cgs";
 
     /** The header, in order. */
     public static final List<String> HEADER = List.of(MASS_FRAC, RADIUS_FRAC, PRESSURE_CGS, TEMP_K, DENSITY_CGS,
             LUMINOSITY_LSUN, KAPPA_CGS, EPS_NUC_CGS, NABLA, NABLA_AD, NABLA_RAD, CONVECTIVE, CONV_VELOCITY_CGS,
-            RADIUS_CM, GAMMA1, SOUND_SPEED_CGS, H_FRAC);
+            RADIUS_CM, GAMMA1, SOUND_SPEED_CGS, H_FRAC, MU, HE3_FRAC, BRUNT_N2_CGS);
 
     /**
-     * The columns every readable profile has: all but the last four, which profiles written before them lack (read
-     * as NaN).
+     * The columns added after the first profiles, in the order they came: profiles written before a column existed
+     * lack it, and read it as NaN.
      */
-    public static final List<String> REQUIRED = HEADER.subList(0, HEADER.size() - 4);
+    public static final List<String> OPTIONAL = List.of(RADIUS_CM, GAMMA1, SOUND_SPEED_CGS, H_FRAC, MU, HE3_FRAC,
+            BRUNT_N2_CGS);
+
+    /** The columns every readable profile has: all but the {@link #OPTIONAL} ones. */
+    public static final List<String> REQUIRED = HEADER.subList(0, HEADER.size() - OPTIONAL.size());
 
     private ProfileColumns() {
     }

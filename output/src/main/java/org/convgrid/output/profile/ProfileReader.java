@@ -30,7 +30,7 @@ public final class ProfileReader {
                     throw new OutputFormatException("profile misses the column '" + column + "'");
                 }
             }
-            boolean acoustic = parser.getHeaderNames().containsAll(ProfileColumns.HEADER);
+            List<String> present = parser.getHeaderNames();
             List<ProfileRow> shells = new ArrayList<>();
             for (CSVRecord r : parser) {
                 try {
@@ -40,10 +40,12 @@ public final class ProfileReader {
                             n(r, ProfileColumns.KAPPA_CGS), n(r, ProfileColumns.EPS_NUC_CGS),
                             n(r, ProfileColumns.NABLA), n(r, ProfileColumns.NABLA_AD), n(r, ProfileColumns.NABLA_RAD),
                             n(r, ProfileColumns.CONVECTIVE) != 0.0, n(r, ProfileColumns.CONV_VELOCITY_CGS),
-                            acoustic ? n(r, ProfileColumns.RADIUS_CM) : Double.NaN,
-                            acoustic ? n(r, ProfileColumns.GAMMA1) : Double.NaN,
-                            acoustic ? n(r, ProfileColumns.SOUND_SPEED_CGS) : Double.NaN,
-                            acoustic ? n(r, ProfileColumns.H_FRAC) : Double.NaN));
+                            optional(r, present, ProfileColumns.RADIUS_CM),
+                            optional(r, present, ProfileColumns.GAMMA1),
+                            optional(r, present, ProfileColumns.SOUND_SPEED_CGS),
+                            optional(r, present, ProfileColumns.H_FRAC), optional(r, present, ProfileColumns.MU),
+                            optional(r, present, ProfileColumns.HE3_FRAC),
+                            optional(r, present, ProfileColumns.BRUNT_N2_CGS)));
                 } catch (IllegalArgumentException e) {
                     throw new OutputFormatException("profile row " + r.getRecordNumber() + ": " + e.getMessage(), e);
                 }
@@ -54,5 +56,10 @@ public final class ProfileReader {
 
     private static double n(CSVRecord r, String column) {
         return CsvNumbers.parse(r.get(column));
+    }
+
+    /** A column of {@link ProfileColumns#OPTIONAL}: NaN in a profile written before it existed. */
+    private static double optional(CSVRecord r, List<String> present, String column) {
+        return present.contains(column) ? n(r, column) : Double.NaN;
     }
 }

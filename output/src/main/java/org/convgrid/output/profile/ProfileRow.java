@@ -20,9 +20,13 @@ package org.convgrid.output.profile;
  * @param gamma1 first adiabatic exponent
  * @param soundSpeed adiabatic sound speed sqrt(Gamma1 P / rho), cm s^-1
  * @param hydrogen hydrogen mass fraction
+ * @param mu mean molecular weight from the equation of state
+ * @param helium3 helium-3 mass fraction
+ * @param bruntSquared squared buoyancy frequency N^2, s^-2
  */
 public record ProfileRow(double massFrac, double radiusFrac, double pressure, double temperature, double density,
                          double luminosity, double opacity, double nuclearEnergy, double nabla, double nablaAd,
                          double nablaRad, boolean convective, double convectiveVelocity, double radius,
-                         double gamma1, double soundSpeed, double hydrogen) {
+                         double gamma1, double soundSpeed, double hydrogen, double mu, double helium3,
+                         double bruntSquared) {
 }
