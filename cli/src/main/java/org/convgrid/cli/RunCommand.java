@@ -28,6 +28,8 @@ import org.convgrid.survey.SweepInterruption;
 import org.convgrid.survey.TrackFiles;
 import org.convgrid.survey.parallel.ParallelWork;
 import org.convgrid.survey.refine.RefinementProgress;
+import org.convgrid.survey.ProfileFiles;
+import org.convgrid.engine.batch.StarTrackSink;
 import org.convgrid.survey.refine.TransitionRefiner;
 import org.convgrid.survey.refine.TransitionTables;
 import org.convgrid.grids.words.MessageNumbers;
@@ -120,8 +122,10 @@ final class RunCommand implements Callable<Integer> {
         // every catalogue row and life-events row goes through it, so that a signal stops the sweep between rows
         SweepInterruption interruption = new SweepInterruption();
         TrackFiles tracks = new TrackFiles(dir.layout(), interruption);
-        ChunkSolver solver = evolves ? context.solvers().solverFor(file.spec(), tracks)
-                : context.solvers().solverFor(file.spec());
+        ProfileFiles profiles = file.spec().profiles() ? new ProfileFiles(dir.layout()) : null;
+        ChunkSolver solver = profiles != null
+                ? context.solvers().solverFor(file.spec(), evolves ? tracks : StarTrackSink.NONE, profiles)
+                : evolves ? context.solvers().solverFor(file.spec(), tracks) : context.solvers().solverFor(file.spec());
         GridRun runner = new GridRun(ToolVersion.current(), ToolVersion.commit(), Clock.tickSeconds(java.time.ZoneOffset.UTC));
         try (RunLock lock = RunLock.acquire(dir.root())) {
             Locks.reportStale(lock, parent.err());
@@ -189,6 +193,9 @@ final class RunCommand implements Callable<Integer> {
             }
             if (tracks.failure() != null) {
                 throw tracks.failure();
+            }
+            if (profiles != null && profiles.failure() != null) {
+                throw profiles.failure();
             }
             double seconds = (System.nanoTime() - start) * 1e-9;
             parent.out().println(dir.root() + ": " + Counts.of(result.run().catalogue().size(), "model") + " in "

@@ -1,6 +1,7 @@
 package org.convgrid.survey;
 
 import org.convgrid.engine.batch.ChunkSolver;
+import org.convgrid.engine.batch.ModelSink;
 import org.convgrid.engine.batch.StarTrackSink;
 import org.convgrid.grids.GridSpec;
 
@@ -28,6 +29,18 @@ public interface ChunkSolverFactory {
      */
     default ChunkSolver solverFor(GridSpec grid, StarTrackSink tracks) {
         return solverFor(grid);
+    }
+
+    /**
+     * A solver that also hands the tracks to {@code tracks} and the model behind every OK row to {@code models} (the
+     * grid's {@code output: profiles: true}). The default ignores the models (fakes have none).
+     *
+     * @param grid the validated grid
+     * @param tracks thread-safe receiver of the tracks
+     * @param models thread-safe receiver of the models
+     */
+    default ChunkSolver solverFor(GridSpec grid, StarTrackSink tracks, ModelSink models) {
+        return solverFor(grid, tracks);
     }
 
     /**

@@ -3,6 +3,7 @@ package org.convgrid.survey;
 import org.convgrid.engine.batch.ChunkSolver;
 import org.convgrid.engine.batch.GridRequests;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
+import org.convgrid.engine.batch.ModelSink;
 import org.convgrid.engine.batch.StarTrackSink;
 import org.convgrid.grids.GridSpec;
 
@@ -28,6 +29,11 @@ public final class ProductionSolvers {
             @Override
             public ChunkSolver solverFor(GridSpec grid, StarTrackSink tracks) {
                 return solver(tracks);
+            }
+
+            @Override
+            public ChunkSolver solverFor(GridSpec grid, StarTrackSink tracks, ModelSink models) {
+                return new GridRequests(tracks, models, MainSequenceEvolver.Settings.DEFAULT);
             }
 
             @Override

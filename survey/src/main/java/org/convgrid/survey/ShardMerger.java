@@ -9,6 +9,8 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
 import java.util.List;
+import java.util.function.Function;
+import java.util.function.Predicate;
 import java.util.Map;
 import java.util.Objects;
 import java.util.stream.Stream;
@@ -82,6 +84,7 @@ public final class ShardMerger {
                 }
             });
             copyTracks(shards, out);
+            copyProfiles(shards, out);
             LifeEventLog.merge(shards.stream().map(d -> new RunDirectory(d).layout().lifeEvents()).toList(),
                     out.layout().lifeEvents());
             List<CatalogueRow> mergedRows = CatalogueReader.read(out.catalogue());
@@ -119,19 +122,28 @@ public final class ShardMerger {
 
     /** Copies every shard's track files (each star is computed by one shard only) into the merged directory. */
     private static void copyTracks(List<Path> shards, RunDirectory out) throws IOException {
+        copyOwnFiles(shards, d -> d.layout().tracks(), RunLayout::isTrackFile, out.layout().tracks());
+    }
+
+    /** Copies every shard's profile files (each model is computed by one shard only) into the merged directory. */
+    private static void copyProfiles(List<Path> shards, RunDirectory out) throws IOException {
+        copyOwnFiles(shards, d -> d.layout().profiles(), RunLayout::isProfileFile, out.layout().profiles());
+    }
+
+    private static void copyOwnFiles(List<Path> shards, Function<RunDirectory, Path> folder,
+                                     Predicate<Path> own, Path target) throws IOException {
         for (Path shard : shards) {
-            Path tracks = new RunDirectory(shard).tracks();
-            if (!Files.isDirectory(tracks)) {
+            Path from = folder.apply(new RunDirectory(shard));
+            if (!Files.isDirectory(from)) {
                 continue;
             }
             List<Path> files;
-            try (Stream<Path> listed = Files.list(tracks)) {
+            try (Stream<Path> listed = Files.list(from)) {
                 // convgrid's own only: a user's file beside them is not part of the run
-                files = listed.filter(RunLayout::isTrackFile).sorted().toList();
+                files = listed.filter(own).sorted().toList();
             }
             for (Path file : files) {
-                AtomicFiles.writeBinary(out.tracks().resolve(file.getFileName().toString()),
-                        o -> Files.copy(file, o));
+                AtomicFiles.writeBinary(target.resolve(file.getFileName().toString()), o -> Files.copy(file, o));
             }
         }
     }

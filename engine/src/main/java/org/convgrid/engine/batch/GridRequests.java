@@ -80,6 +80,7 @@ public final class GridRequests implements ChunkSolver {
      */
     private final LadderCache<Line, ZamsLadder> ladders = new LadderCache<>(LADDERS_KEPT);
     private final StarTrackSink tracks;
+    private final ModelSink models;
     private final MainSequenceEvolver.Settings settings;
 
     /**
@@ -87,7 +88,17 @@ public final class GridRequests implements ChunkSolver {
      * @param settings time-step settings; {@code maxAge} caps the ages answered (older ones fail)
      */
     public GridRequests(StarTrackSink tracks, MainSequenceEvolver.Settings settings) {
+        this(tracks, ModelSink.NONE, settings);
+    }
+
+    /**
+     * @param tracks receives the track of every star evolved beyond age 0, with phases, lithium and life events
+     * @param models receives the model behind every OK outcome (profiles)
+     * @param settings time-step settings; {@code maxAge} caps the ages answered (older ones fail)
+     */
+    public GridRequests(StarTrackSink tracks, ModelSink models, MainSequenceEvolver.Settings settings) {
         this.tracks = tracks;
+        this.models = models;
         this.settings = settings;
     }
 
@@ -106,7 +117,13 @@ public final class GridRequests implements ChunkSolver {
 
     @Override
     public List<ModelOutcome> solve(List<ModelRequest> chunk) {
-        return answers(chunk).stream().map(Answer::outcome).toList();
+        List<Answer> answers = answers(chunk);
+        for (int i = 0; i < answers.size(); i++) {
+            if (answers.get(i).model() != null && answers.get(i).outcome() instanceof ModelOutcome.Solved) {
+                models.accept(chunk.get(i), answers.get(i).model());
+            }
+        }
+        return answers.stream().map(Answer::outcome).toList();
     }
 
     /** As {@link #solve}, keeping the models (for profiles). */
