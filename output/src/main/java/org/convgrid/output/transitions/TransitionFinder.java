@@ -57,6 +57,16 @@ public record TransitionFinder(double coreMassFractionThreshold) {
      */
     public static final double RECEDED_CORE_CENTRAL_H = 0.01;
 
+    /**
+     * Central temperature, K, below which a convective core cannot be the CNO cycle's (12 MK): there the cycle, with
+     * its CN at equilibrium, gives at most 0.1 % of the energy at Z = 0.04, the richest tested metallicity (ours,
+     * measured with {@code convgrid probe} at rho 80 g/cm^3, X 0.7: 0.096 % at 12 MK, 1.1 % at 14 MK, 3.3 % at 15 MK),
+     * against ~1 % at the solar centre (15.7 MK; from memory). Such a core is driven by burning out of equilibrium:
+     * 3He on the young main sequence, 12C before the zero-age main sequence. A reader of
+     * {@code conv_core_onset_msun} who takes it for the CNO-core onset is told (a practitioner's review did).
+     */
+    public static final double COOL_CORE_CENTRAL_T = 1.2e7;
+
     public TransitionFinder {
         if (!(coreMassFractionThreshold >= 0.0 && coreMassFractionThreshold < 1.0)) {
             throw new IllegalArgumentException("core threshold must lie in [0, 1), got " + coreMassFractionThreshold);
@@ -235,6 +245,24 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         if (core.skippedInBracket() > 0) {
             notes.add("convective core bracket widened past " + SkippedModelsText.of(byMass, core.bracket()));
         }
+        if (core.found()) {
+            describeCoolCores(searched.stream().filter(r -> r.massMsun() >= core.massMsun() && hasConvectiveCore(r)
+                    && r.centralTempK() < COOL_CORE_CENTRAL_T).toList(), notes);
+        }
+    }
+
+    /**
+     * Says which of the cores above the onset are too cool at the centre for the CNO cycle
+     * ({@link #COOL_CORE_CENTRAL_T}), so that the onset is not read as the CNO-core onset.
+     */
+    private static void describeCoolCores(List<CatalogueRow> cool, List<String> notes) {
+        if (cool.isEmpty()) {
+            return;
+        }
+        Span masses = new Span(cool.get(0).massMsun(), cool.get(cool.size() - 1).massMsun());
+        notes.add("the cores at " + MassRangeText.of(masses) + " Msun sit in centres below "
+                + Math.round(COOL_CORE_CENTRAL_T / 1e6) + " MK, too cool for the CNO cycle: out-of-equilibrium "
+                + "burning drives them (3He on the main sequence, 12C before it)");
     }
 
     private static String timesInWords(int times) {

@@ -166,6 +166,35 @@ class TransitionFinderTest {
                 r.opacityScale(), r.turnoverTimeGlobalDays());
     }
 
+    /** A usable model with its central temperature set, K (the other rows leave it NaN). */
+    static CatalogueRow withCentralT(double mass, StructureClass c, double core, double centralT) {
+        CatalogueRow r = ok(mass, c, core);
+        return new CatalogueRow(r.modelId(), r.massMsun(), r.zInit(), r.yInit(), r.mixingLength(), r.overshootHp(),
+                r.ageGyr(), r.phase(), r.status(), r.statusDetail(), r.luminosityLsun(), r.radiusRsun(), r.teffK(),
+                r.logGCgs(), centralT, r.centralDensityCgs(), r.centralHFrac(), r.surfaceLiRel(), r.structureClass(),
+                r.coreCzMassFrac(), r.coreCzRadiusFrac(), r.envCzBaseMassFrac(), r.envCzBaseRadiusFrac(),
+                r.envCzMassMsun(), r.turnoverTimeDays(), r.zones(), r.solverIterations(), r.criterion(),
+                r.opacityScale(), r.turnoverTimeGlobalDays());
+    }
+
+    @Test
+    void coresTooCoolForTheCnoCycleAreNamedAboveTheOnset() {
+        // the shape of the demo's Z = 0.008, 150 Myr slice: every star from 0.38 Msun up has a core, but below
+        // ~1 Msun their centres (7.8-11.9 MK) are far too cool for the CNO cycle (COOL_CORE_CENTRAL_T's Javadoc)
+        List<CatalogueRow> rows = List.of(withCentralT(0.2, FC, 1, 6.0e6), withCentralT(0.3, ENV, 0, 7.2e6),
+                withCentralT(0.4, BOTH, 0.01, 8.0e6),
+                withCentralT(0.8, BOTH, 0.02, 11.9e6), withCentralT(1.0, BOTH, 0.03, 14.0e6),
+                withCentralT(1.2, BOTH, 0.06, 16.3e6));
+        TransitionRow t = finder.find(rows).get(0);
+        assertThat(t.convCoreOnset().massMsun()).isEqualTo(0.4);
+        assertThat(t.notes()).isEqualTo("the cores at 0.4-0.8 Msun sit in centres below 12 MK, too cool for the CNO "
+                + "cycle: out-of-equilibrium burning drives them (3He on the main sequence, 12C before it)");
+        // hot centres above the onset: nothing to say
+        List<CatalogueRow> hot = List.of(withCentralT(0.2, FC, 1, 6.0e6), withCentralT(1.0, ENV, 0, 14.0e6),
+                withCentralT(1.2, BOTH, 0.06, 16.3e6));
+        assertThat(finder.find(hot).get(0).notes()).isEmpty();
+    }
+
     @Test
     void coresThatRecededNearHydrogenExhaustionDoNotHideTheOnset() {
         // a slice at its turn-off (the shape of a Z = 0.02, 1 Gyr birth-track slice): cores from 1.2 up, and the
