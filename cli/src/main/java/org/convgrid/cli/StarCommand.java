@@ -27,6 +27,7 @@ import org.convgrid.grids.HeliumLaw;
 import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.catalogue.CatalogueWriter;
 import org.convgrid.output.catalogue.OutcomeRows;
+import org.convgrid.output.profile.ProfileColumns;
 import org.convgrid.output.profile.ProfileRows;
 import org.convgrid.output.profile.ProfileWriter;
 import picocli.CommandLine.Command;
@@ -107,9 +108,8 @@ final class StarCommand implements Callable<Integer> {
     AtmosphereChoice atmosphere;
 
     @Option(names = "--profile", paramLabel = "FILE",
-            description = "Also write one CSV row per shell (m/M, r/R, P, T, rho, L, kappa, eps, gradients, "
-                    + "convective flag, convective velocity, r in cm, Gamma1, sound speed, hydrogen fraction) to "
-                    + "FILE.")
+            description = "Also write one CSV row per shell, centre to surface, to FILE; its columns (units in "
+                    + "their names; the README explains each): " + ProfileColumns.HEADER_NAMED + ".")
     Path profile;
 
     @Option(names = "--format", defaultValue = "table", paramLabel = "table|csv",
