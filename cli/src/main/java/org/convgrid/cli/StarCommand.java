@@ -9,6 +9,7 @@ import org.convgrid.engine.request.OpacityChoice;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.convection.StabilityCriterion;
@@ -91,6 +92,17 @@ final class StarCommand implements Callable<Integer> {
     @Option(names = "--criterion", defaultValue = "schwarzschild", paramLabel = "schwarzschild|ledoux",
             description = "Convective stability criterion (default ${DEFAULT-VALUE}).")
     StabilityCriterion criterion;
+
+    @Option(names = "--overshoot-hp", defaultValue = "0", paramLabel = "L",
+            description = "Overshoot length beyond every convective boundary, pressure scale heights (default "
+                    + "${DEFAULT-VALUE}): the grid key overshoot: L, or its length_hp.")
+    double overshootHp;
+
+    @Option(names = "--overshoot-profile", defaultValue = "uniform", paramLabel = "uniform|decaying",
+            description = "How the overshoot mixing ends (default ${DEFAULT-VALUE}): uniform mixes fully to "
+                    + "--overshoot-hp; decaying lets it fade (e-folding length L H_P / 2), as the grid key "
+                    + "overshoot: {profile: decaying, length_hp: L}.")
+    String overshootProfile;
 
     @Option(names = "--opacity-scale", defaultValue = "1", paramLabel = "S",
             description = "Multiplies every opacity (dimensionless; default ${DEFAULT-VALUE}).")
@@ -253,6 +265,17 @@ final class StarCommand implements Callable<Integer> {
                 throw new UsageException("--opacity-table: " + e.getMessage());
             }
         }
-        return new PhysicsOptions(mixingLength, 0.0, criterion, opacityScale, table, atmosphere);
+        if (!(overshootHp >= 0 && Double.isFinite(overshootHp))) {
+            throw new UsageException("--overshoot-hp must be at least 0 pressure scale heights (got "
+                    + MessageNumbers.format(overshootHp) + ")");
+        }
+        // the grid's words, so that star and a grid file name a profile the same way
+        String profileName = overshootProfile.strip().toLowerCase(java.util.Locale.ROOT);
+        OvershootScheme scheme = OvershootScheme.fromLabel(profileName);
+        if (scheme == null) {
+            throw new UsageException("--overshoot-profile must be uniform or decaying, got '" + overshootProfile
+                    + "'");
+        }
+        return new PhysicsOptions(mixingLength, overshootHp, criterion, opacityScale, table, atmosphere, scheme);
     }
 }
