@@ -129,31 +129,20 @@ final class StarCommand implements Callable<Integer> {
                     + "Default ${DEFAULT-VALUE}.")
     OutputFormat format;
 
-    /**
-     * Helium mass fractions accepted: from below the primordial value (0.2485 +- 0.0002, the Planck-based value
-     * quoted by Aver, Olive, Porter &amp; Skillman 2013, arXiv:1309.0047; Aver, Olive &amp; Skillman 2015,
-     * arXiv:1503.08146, measure 0.2449 +- 0.0040) to
-     * above the helium-rich populations of globular clusters (Y about 0.38-0.40, Piotto et al. 2007, from memory);
-     * outside, the zero-age solver has no physical model to find.
-     */
-    static final double MIN_HELIUM = 0.2;
-    static final double MAX_HELIUM = 0.45;
-
     @Override
     public Integer call() throws IOException {
         PhysicsOptions options = options();
         Age age = age();
         double y = helium != null ? helium : HeliumLaw.DEFAULT.helium(metals);
-        if (!(y >= MIN_HELIUM && y <= MAX_HELIUM)) {
-            throw new UsageException("--y must be from " + MessageNumbers.format(MIN_HELIUM) + " to "
-                    + MessageNumbers.format(MAX_HELIUM) + " (got " + MessageNumbers.format(y) + "): as a helium mass "
-                    + "fraction, no star has less than the primordial value, about 0.245, and the most helium-rich "
-                    + "populations known reach about 0.4");
+        // as a grid's metallicity section does: an error only where no hydrogen is left; an untested Y warns
+        if (!(y >= 0 && y + metals < 1.0)) {
+            throw new UsageException("--y " + MessageNumbers.format(y) + " with --z " + MessageNumbers.format(metals)
+                    + " leaves no hydrogen (need Y >= 0 and X = 1 - Y - Z > 0)");
         }
         if (profile != null) {
             OutputTargets.requireWritableFile("--profile", main.context().resolve(profile));
         }
-        TestedRange.print(TestedRange.warnings(massMsun, metals, age), main.err());
+        TestedRange.print(TestedRange.warnings(massMsun, metals, y, age), main.err());
         String id = String.format(java.util.Locale.ROOT, "star-m%.4f-z%.5f", massMsun, metals);
         ModelRequest request = new ModelRequest(id, massMsun * Constants.M_SUN, metals, y, age, options);
         Composition composition = request.age().origin() == AgeOrigin.BIRTH
