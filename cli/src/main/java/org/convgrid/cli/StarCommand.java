@@ -9,6 +9,7 @@ import org.convgrid.engine.request.OpacityChoice;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.convection.StabilityCriterion;
@@ -27,6 +28,7 @@ import org.convgrid.grids.HeliumLaw;
 import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.catalogue.CatalogueWriter;
 import org.convgrid.output.catalogue.OutcomeRows;
+import org.convgrid.output.profile.ProfileColumns;
 import org.convgrid.output.profile.ProfileRows;
 import org.convgrid.output.profile.ProfileWriter;
 import picocli.CommandLine.Command;
@@ -91,6 +93,17 @@ final class StarCommand implements Callable<Integer> {
             description = "Convective stability criterion (default ${DEFAULT-VALUE}).")
     StabilityCriterion criterion;
 
+    @Option(names = "--overshoot-hp", defaultValue = "0", paramLabel = "L",
+            description = "Overshoot length beyond every convective boundary, pressure scale heights (default "
+                    + "${DEFAULT-VALUE}): the grid key overshoot: L, or its length_hp.")
+    double overshootHp;
+
+    @Option(names = "--overshoot-profile", defaultValue = "uniform", paramLabel = "uniform|decaying",
+            description = "How the overshoot mixing ends (default ${DEFAULT-VALUE}): uniform mixes fully to "
+                    + "--overshoot-hp; decaying lets it fade (e-folding length L H_P / 2), as the grid key "
+                    + "overshoot: {profile: decaying, length_hp: L}.")
+    String overshootProfile;
+
     @Option(names = "--opacity-scale", defaultValue = "1", paramLabel = "S",
             description = "Multiplies every opacity (dimensionless; default ${DEFAULT-VALUE}).")
     double opacityScale;
@@ -107,9 +120,8 @@ final class StarCommand implements Callable<Integer> {
     AtmosphereChoice atmosphere;
 
     @Option(names = "--profile", paramLabel = "FILE",
-            description = "Also write one CSV row per shell (m/M, r/R, P, T, rho, L, kappa, eps, gradients, "
-                    + "convective flag, convective velocity, r in cm, Gamma1, sound speed, hydrogen fraction) to "
-                    + "FILE.")
+            description = "Also write one CSV row per shell, centre to surface, to FILE; its columns (units in "
+                    + "their names; the README explains each): " + ProfileColumns.HEADER_NAMED + ".")
     Path profile;
 
     @Option(names = "--format", defaultValue = "table", paramLabel = "table|csv",
@@ -117,31 +129,20 @@ final class StarCommand implements Callable<Integer> {
                     + "Default ${DEFAULT-VALUE}.")
     OutputFormat format;
 
-    /**
-     * Helium mass fractions accepted: from below the primordial value (0.2485 +- 0.0002, the Planck-based value
-     * quoted by Aver, Olive, Porter &amp; Skillman 2013, arXiv:1309.0047; Aver, Olive &amp; Skillman 2015,
-     * arXiv:1503.08146, measure 0.2449 +- 0.0040) to
-     * above the helium-rich populations of globular clusters (Y about 0.38-0.40, Piotto et al. 2007, from memory);
-     * outside, the zero-age solver has no physical model to find.
-     */
-    static final double MIN_HELIUM = 0.2;
-    static final double MAX_HELIUM = 0.45;
-
     @Override
     public Integer call() throws IOException {
         PhysicsOptions options = options();
         Age age = age();
         double y = helium != null ? helium : HeliumLaw.DEFAULT.helium(metals);
-        if (!(y >= MIN_HELIUM && y <= MAX_HELIUM)) {
-            throw new UsageException("--y must be from " + MessageNumbers.format(MIN_HELIUM) + " to "
-                    + MessageNumbers.format(MAX_HELIUM) + " (got " + MessageNumbers.format(y) + "): as a helium mass "
-                    + "fraction, no star has less than the primordial value, about 0.245, and the most helium-rich "
-                    + "populations known reach about 0.4");
+        // as a grid's metallicity section does: an error only where no hydrogen is left; an untested Y warns
+        if (!(y >= 0 && y + metals < 1.0)) {
+            throw new UsageException("--y " + MessageNumbers.format(y) + " with --z " + MessageNumbers.format(metals)
+                    + " leaves no hydrogen (need Y >= 0 and X = 1 - Y - Z > 0)");
         }
         if (profile != null) {
             OutputTargets.requireWritableFile("--profile", main.context().resolve(profile));
         }
-        TestedRange.print(TestedRange.warnings(massMsun, metals, age), main.err());
+        TestedRange.print(TestedRange.warnings(massMsun, metals, y, age), main.err());
         String id = String.format(java.util.Locale.ROOT, "star-m%.4f-z%.5f", massMsun, metals);
         ModelRequest request = new ModelRequest(id, massMsun * Constants.M_SUN, metals, y, age, options);
         Composition composition = request.age().origin() == AgeOrigin.BIRTH
@@ -253,6 +254,17 @@ final class StarCommand implements Callable<Integer> {
                 throw new UsageException("--opacity-table: " + e.getMessage());
             }
         }
-        return new PhysicsOptions(mixingLength, 0.0, criterion, opacityScale, table, atmosphere);
+        if (!(overshootHp >= 0 && Double.isFinite(overshootHp))) {
+            throw new UsageException("--overshoot-hp must be at least 0 pressure scale heights (got "
+                    + MessageNumbers.format(overshootHp) + ")");
+        }
+        // the grid's words, so that star and a grid file name a profile the same way
+        String profileName = overshootProfile.strip().toLowerCase(java.util.Locale.ROOT);
+        OvershootScheme scheme = OvershootScheme.fromLabel(profileName);
+        if (scheme == null) {
+            throw new UsageException("--overshoot-profile must be uniform or decaying, got '" + overshootProfile
+                    + "'");
+        }
+        return new PhysicsOptions(mixingLength, overshootHp, criterion, opacityScale, table, atmosphere, scheme);
     }
 }

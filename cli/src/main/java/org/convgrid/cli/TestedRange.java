@@ -12,9 +12,10 @@ import org.convgrid.engine.units.Constants;
 import org.convgrid.grids.GridSpec;
 
 /**
- * The masses, metallicities and ages convgrid's models are tested in (README, "Good for / not for": every track of
- * 0.1-10 Msun at Z = 1e-4 to 0.04 finishes from birth to core-hydrogen exhaustion; ages from birth below 0.1 Myr
- * depend on the start model). Outside it the tool still computes, so {@code check}, {@code run} and {@code star}
+ * The masses, metallicities, helium fractions and ages convgrid's models are tested in (README, "Good for / not for":
+ * every track of 0.1-10 Msun at Z = 1e-4 to 0.04 finishes from birth to core-hydrogen exhaustion; helium from below
+ * the primordial value to above the most helium-rich populations known; ages from birth below 0.1 Myr depend on the
+ * start model). Outside it the tool still computes, so {@code check}, {@code run} and {@code star}
  * print a warning on stderr, one line per kind, even with {@code --quiet}: never an error, and the exit code stays
  * what the models make it. The range is kept here alone; the README states the same.
  */
@@ -24,6 +25,15 @@ final class TestedRange {
     static final double MAX_MASS_MSUN = 10.0;
     static final double MIN_Z = 1e-4;
     static final double MAX_Z = 0.04;
+    /**
+     * Helium mass fractions: from below the primordial value (0.2485 +- 0.0002, the Planck-based value quoted by
+     * Aver, Olive, Porter &amp; Skillman 2013, arXiv:1309.0047; Aver, Olive &amp; Skillman 2015, arXiv:1503.08146,
+     * measure 0.2449 +- 0.0040) to above the helium-rich populations of globular clusters (Y about 0.38-0.40,
+     * Piotto et al. 2007, from memory). Outside lie compositions no known star has; {@code star} had refused them
+     * while a grid took them silently, so both now warn alike.
+     */
+    static final double MIN_Y = 0.2;
+    static final double MAX_Y = 0.45;
     /** Younger ages from birth show the start model's details more than the star's. */
     static final double MIN_BIRTH_AGE_MYR = 0.1;
 
@@ -38,27 +48,30 @@ final class TestedRange {
     private TestedRange() {
     }
 
-    /** The warnings for a grid: its masses, its Z and, when they count from birth, its ages. */
+    /** The warnings for a grid: its masses, its Z, its Y and, when they count from birth, its ages. */
     static List<String> warnings(GridSpec grid) {
         List<Double> birthAgesMyr = grid.ages().origin() == AgeOrigin.BIRTH && !grid.ages().fractions()
                 ? grid.ages().values().stream().map(gyr -> gyr * MYR_PER_GYR).toList() : List.of();
-        return warnings(grid.massesMsun(), grid.metallicities().stream().map(p -> p.z()).toList(), birthAgesMyr);
+        return warnings(grid.massesMsun(), grid.metallicities().stream().map(p -> p.z()).toList(),
+                grid.metallicities().stream().map(p -> p.y()).toList(), birthAgesMyr);
     }
 
     /** The warnings for one star; only an age from birth can be too young. */
-    static List<String> warnings(double massMsun, double z, Age age) {
+    static List<String> warnings(double massMsun, double z, double y, Age age) {
         List<Double> birthAgesMyr = age instanceof Age.SinceBirth since
                 ? List.of(since.seconds() / Constants.GYR * MYR_PER_GYR) : List.of();
-        return warnings(List.of(massMsun), List.of(z), birthAgesMyr);
+        return warnings(List.of(massMsun), List.of(z), List.of(y), birthAgesMyr);
     }
 
     /**
      * @param massesMsun total masses, Msun
      * @param zs initial metal mass fractions
+     * @param ys initial helium mass fractions
      * @param birthAgesMyr ages counted from birth, Myr (none for ages from the zero-age main sequence)
      * @return one line per kind of value outside the range, none when all lie inside
      */
-    static List<String> warnings(List<Double> massesMsun, List<Double> zs, List<Double> birthAgesMyr) {
+    static List<String> warnings(List<Double> massesMsun, List<Double> zs, List<Double> ys,
+                                 List<Double> birthAgesMyr) {
         List<String> lines = new ArrayList<>();
         List<Double> masses = outside(massesMsun, m -> m >= MIN_MASS_MSUN * (1 - EDGE_SLACK)
                 && m <= MAX_MASS_MSUN * (1 + EDGE_SLACK));
@@ -70,6 +83,13 @@ final class TestedRange {
         if (!metals.isEmpty()) {
             lines.add(line(metals, "metallicity", "metallicities", "Z = ", "", "outside the tested range Z = "
                     + MessageNumbers.format(MIN_Z) + " to " + MessageNumbers.format(MAX_Z)));
+        }
+        // a Y axis repeats a value for several Z (a helium law may too): each value named once
+        List<Double> helium = outside(ys.stream().distinct().sorted().toList(),
+                y -> y >= MIN_Y * (1 - EDGE_SLACK) && y <= MAX_Y * (1 + EDGE_SLACK));
+        if (!helium.isEmpty()) {
+            lines.add(line(helium, "helium fraction", "helium fractions", "Y = ", "", "outside the tested range Y = "
+                    + MessageNumbers.format(MIN_Y) + " to " + MessageNumbers.format(MAX_Y)));
         }
         List<Double> young = outside(birthAgesMyr, a -> a >= MIN_BIRTH_AGE_MYR * (1 - EDGE_SLACK));
         if (!young.isEmpty()) {

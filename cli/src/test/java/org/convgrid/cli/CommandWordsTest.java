@@ -36,6 +36,14 @@ class CommandWordsTest {
     }
 
     @Test
+    void starProfileHelpNamesEveryProfileColumnInTheFileOrder() {
+        // the help had listed the columns by hand and fell behind when mu, he3_frac and brunt_n2_cgs came
+        String help = help("star", "--help");
+        assertThat(help).contains(String.join(", ", org.convgrid.output.profile.ProfileColumns.HEADER));
+        assertThat(help).contains("mu", "he3_frac", "brunt_n2_cgs");
+    }
+
+    @Test
     void aNegativeOvershootIsNamedAsTheUserWroteIt() throws Exception {
         Path plain = CliHarness.writeGrid(work, "plain.yaml", ONE_MODEL + "physics:\n  overshoot: -1\n");
         CliHarness.Execution check = cli().execute("check", plain.toString());

@@ -39,6 +39,24 @@ class RefinementProgressLineTest {
         assertThat(Integer.parseInt(summary.group(1))).isPositive().isLessThan(lines.solved.get());
     }
 
+    @Test
+    void inABatchLogTheRefinementsLastLineIsTheSummarysCount() throws Exception {
+        // a review's log (stderr not a terminal) ended on 89 or 148 new models while the summary said 169
+        CliHarness log = new CliHarness(new CommandContext(grid -> FakeChunkSolver.fast(), List.of(), Map.of(),
+                work, false, new FakeMassLines(Set.of())));
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        CliHarness.Execution done = log.execute("run", grid.toString(), "--out", "b", "--threads", "2");
+        assertThat(done.code()).as(done.err()).isZero();
+
+        Matcher summary = Pattern.compile("transitions refined to [0-9.]+ Msun with (\\d+) new models").matcher(done.out());
+        assertThat(summary.find()).as(done.out()).isTrue();
+        List<String> counts = done.err().lines().filter(l -> l.matches("convgrid: \\d+ new models?, .*")).toList();
+        assertThat(counts).isNotEmpty();
+        assertThat(counts.get(counts.size() - 1)).startsWith("convgrid: " + summary.group(1) + " new models, ");
+        // the sweep's log ends on its 100 % line, once
+        assertThat(done.err().lines().filter(l -> l.contains("(100%)"))).hasSize(1);
+    }
+
     private static String rate(String refining) {
         Matcher last = Pattern.compile("\r\\d+ new models?, ([0-9.]+) models/s\n$").matcher(refining);
         return last.find() ? last.group(1) : "(no final line)";

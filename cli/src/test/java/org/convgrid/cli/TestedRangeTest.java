@@ -9,7 +9,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * Warnings, never errors, for masses, Z and ages from birth outside the range the models are tested in (README,
+ * Warnings, never errors, for masses, Z, helium and ages from birth outside the range the models are tested in (README,
  * "Good for / not for").
  */
 class TestedRangeTest {
@@ -60,11 +60,48 @@ class TestedRangeTest {
     }
 
     @Test
+    void heliumOutsideTheRangeWarnsAlikeInAGridAndInStarAndOnlyNoHydrogenIsAnError() throws Exception {
+        // a practitioner found y: [0.8] passing check and run silently while star --y 0.99 was refused as untested
+        String warning = "convgrid: warning: helium fraction Y = 0.8 lies outside the tested range Y = 0.2 to 0.45; "
+                + "results there are untested";
+        Path grid = CliHarness.writeGrid(work, "helium.yaml", """
+                mass: {values: [1.0]}
+                metallicity: {z: [0.02], y: [0.8]}
+                age: {gyr: [0], origin: zams}
+                """);
+        CliHarness.Execution check = CliHarness.in(work, FakeChunkSolver.fast()).execute("check", grid.toString());
+        assertThat(check.code()).as(check.err()).isZero();
+        assertThat(check.err().lines()).containsExactly(warning);
+        CliHarness.Execution run = CliHarness.in(work, FakeChunkSolver.fast())
+                .execute("run", grid.toString(), "--quiet", "--no-refine", "--threads", "1");
+        assertThat(run.err().lines().filter(l -> l.startsWith("convgrid: warning: "))).containsExactly(warning);
+
+        CliHarness.Execution star = CliHarness.in(work, FakeChunkSolver.fast())
+                .execute("star", "--mass", "1", "--z", "0.02", "--y", "0.8", "--format", "csv");
+        assertThat(star.code()).as(star.err()).isZero();
+        assertThat(star.err().lines()).contains(warning);
+
+        CliHarness.Execution noHydrogen = CliHarness.in(work, FakeChunkSolver.fast())
+                .execute("star", "--mass", "1", "--z", "0.02", "--y", "0.98");
+        assertThat(noHydrogen.code()).isEqualTo(ExitCodes.USAGE);
+        assertThat(noHydrogen.err()).contains("--y 0.98 with --z 0.02 leaves no hydrogen");
+        Path dry = CliHarness.writeGrid(work, "dry.yaml", """
+                mass: {values: [1.0]}
+                metallicity: {z: [0.02], y: [0.98]}
+                age: {gyr: [0], origin: zams}
+                """);
+        CliHarness.Execution refused = CliHarness.in(work, FakeChunkSolver.fast()).execute("check", dry.toString());
+        assertThat(refused.code()).isEqualTo(ExitCodes.USAGE);
+        assertThat(refused.err()).contains("leaves no hydrogen");
+    }
+
+    @Test
     void theEdgesAreInsideAndEveryValueIsListedOrSpanned() {
-        assertThat(TestedRange.warnings(List.of(0.1, 10.000000000000002), List.of(1e-4, 0.04), List.of(0.1)))
+        assertThat(TestedRange.warnings(List.of(0.1, 10.000000000000002), List.of(1e-4, 0.04), List.of(0.2, 0.45),
+                List.of(0.1)))
                 .isEmpty();
         List<Double> heavy = List.of(11.0, 12.0, 13.0, 14.0, 15.0, 16.0, 17.0);
-        assertThat(TestedRange.warnings(heavy, List.of(0.02), List.of())).containsExactly("convgrid: warning: "
+        assertThat(TestedRange.warnings(heavy, List.of(0.02), List.of(0.27), List.of())).containsExactly("convgrid: warning: "
                 + "7 masses, 11 to 17 Msun, lie outside the tested range 0.1-10 Msun; results there are untested");
     }
 
@@ -72,12 +109,14 @@ class TestedRangeTest {
     void theReadmeStatesTheSameRange() throws Exception {
         String readme = Files.readString(Path.of("..", "README.md")).replaceAll("\\s*\n>?\\s*", " ");
         assertThat(readme).contains("stars of 0.1-10 Msun from birth to core-hydrogen exhaustion, Z = 1e-4 to 0.04")
-                .contains("ages from birth from 0.1 Myr")
+                .contains("ages from birth from 0.1 Myr").contains("helium Y = 0.2 to 0.45")
                 .contains("Outside this tested range `check`, `run` and `star` still compute but print a warning");
         assertThat(TestedRange.MIN_MASS_MSUN).isEqualTo(0.1);
         assertThat(TestedRange.MAX_MASS_MSUN).isEqualTo(10.0);
         assertThat(TestedRange.MIN_Z).isEqualTo(1e-4);
         assertThat(TestedRange.MAX_Z).isEqualTo(0.04);
         assertThat(TestedRange.MIN_BIRTH_AGE_MYR).isEqualTo(0.1);
+        assertThat(TestedRange.MIN_Y).isEqualTo(0.2);
+        assertThat(TestedRange.MAX_Y).isEqualTo(0.45);
     }
 }

@@ -103,11 +103,16 @@ public final class ProgressReporter implements ProgressListener {
         }
         long step = total > 0 ? done * 100 / total / LOG_EVERY_PERCENT : -1;
         if (last || now - lastShown >= LOG_EVERY_NANOS || step > lastPercentStep) {
-            err.println("convgrid: " + line(done, total, now, false));
-            err.flush();
-            lastShown = now;
+            log(done, total, now);
             lastPercentStep = step;
         }
+    }
+
+    private void log(long done, long total, long now) {
+        err.println("convgrid: " + line(done, total, now, false));
+        err.flush();
+        lastShown = now;
+        shownDone = done;
     }
 
     private void draw(long done, long total, long now) {
@@ -119,12 +124,18 @@ public final class ProgressReporter implements ProgressListener {
     }
 
     /**
-     * Ends the terminal line; call once the run is over. A count of unknown total has no last report of its own, so
-     * the line is first redrawn with the final count when a later report fell within the redraw interval.
+     * Ends the progress; call once the run is over. A count of unknown total has no last report of its own, so the
+     * final count is shown once more when a later report fell within the interval: redrawn on a terminal, a last
+     * line in a batch log (a review's log had stopped at 89 and at 148 new models while the summary said 169). A
+     * count whose last report reached its total was shown then, and gets no second line.
      */
     public void finish() {
-        if (terminal && lastDone > shownDone) {
-            draw(lastDone, lastTotal, nanoTime.getAsLong());
+        if (lastDone > shownDone) {
+            if (terminal) {
+                draw(lastDone, lastTotal, nanoTime.getAsLong());
+            } else {
+                log(lastDone, lastTotal, nanoTime.getAsLong());
+            }
         }
         if (terminal && drawn) {
             err.println();

@@ -118,7 +118,33 @@ class ProgressReporterTest {
             reporter.progress(done, -1);
         }
         reporter.finish();
+        // then the final count once, as the run's summary gives it (the log had ended on 40)
+        assertThat(text.toString().split("\n")).containsExactly("convgrid: 20 new models, 2.00 models/s",
+                "convgrid: 40 new models, 2.00 models/s", "convgrid: 50 new models, 2.00 models/s");
+    }
+
+    @Test
+    void aBatchLogEndsOnceOnTheFinalCount() {
+        // the last count already shown: no second line
+        ProgressReporter reporter = new ProgressReporter(new PrintWriter(text), false, clock::get, 2, "new model");
+        for (int done = 1; done <= 40; done++) {
+            clock.addAndGet(SECOND / 2);
+            reporter.progress(done, -1);
+        }
+        reporter.finish();
         assertThat(text.toString().split("\n")).containsExactly("convgrid: 20 new models, 2.00 models/s",
                 "convgrid: 40 new models, 2.00 models/s");
+
+        // the sweep: its 100 % line is its last, and finish adds nothing
+        StringWriter sweepText = new StringWriter();
+        ProgressReporter sweep = new ProgressReporter(new PrintWriter(sweepText), false, clock::get);
+        for (int done = 1; done <= 3; done++) {
+            clock.addAndGet(SECOND);
+            sweep.progress(done, 3);
+        }
+        String before = sweepText.toString();
+        assertThat(before).endsWith("convgrid: 3 of 3 models (100%), 1.00 models/s\n");
+        sweep.finish();
+        assertThat(sweepText.toString()).isEqualTo(before);
     }
 }

@@ -55,7 +55,7 @@ class LowMassBirthTest {
         // Published models also show pre-main-sequence cores that 3He burning dissolves, but only in a narrow
         // window just above the fully convective limit (van Saders & Pinsonneault 2012, ApJ 751, 98; Baraffe &
         // Chabrier 2018, A&A 619, A177; from memory); ours reach down to
-        // 0.27-0.28 Msun (0.26 Msun: none; 0.28: m/M 0.014 at most, 52-85 Myr; 0.31: 0.14, 37-130 Myr) against a
+        // 0.26 Msun (0.25 Msun: none; 0.26: m/M 0.009 at most, ~70-100 Myr; 0.28: 0.088, 57-129 Myr; README) against a
         // zero-age fully convective limit of 0.3675 Msun (0.3388 since the low-temperature tables). Here: radiative centre from 37.9 to 115.1 Myr (first and
         // last step with it), up to m/M = 0.093. Not a numerical artefact: 1000 mesh points instead of 500 give the
         // same core (38.7-107.5 Myr, up to m/M = 0.090), so do all step limits halved (39.0-110.3 Myr).

@@ -34,10 +34,23 @@ public final class ProfileColumns {
     /** Squared buoyancy (Brunt-Vaisala) frequency N^2, s^-2; negative where superadiabatic. */
     public static final String BRUNT_N2_CGS = "brunt_n2_cgs";
 
-    /** The header, in order. */
-    public static final List<String> HEADER = List.of(MASS_FRAC, RADIUS_FRAC, PRESSURE_CGS, TEMP_K, DENSITY_CGS,
-            LUMINOSITY_LSUN, KAPPA_CGS, EPS_NUC_CGS, NABLA, NABLA_AD, NABLA_RAD, CONVECTIVE, CONV_VELOCITY_CGS,
-            RADIUS_CM, GAMMA1, SOUND_SPEED_CGS, H_FRAC, MU, HE3_FRAC, BRUNT_N2_CGS);
+    /** What separates the names in {@link #HEADER_NAMED}. */
+    private static final String NAME_SEPARATOR = ", ";
+
+    /**
+     * The header, in order, as one text: a compile-time constant, so that annotations (the {@code star --profile}
+     * help) can name every column and a new column reaches them without a second list to keep in step.
+     */
+    public static final String HEADER_NAMED = MASS_FRAC + NAME_SEPARATOR + RADIUS_FRAC + NAME_SEPARATOR
+            + PRESSURE_CGS + NAME_SEPARATOR + TEMP_K + NAME_SEPARATOR + DENSITY_CGS + NAME_SEPARATOR
+            + LUMINOSITY_LSUN + NAME_SEPARATOR + KAPPA_CGS + NAME_SEPARATOR + EPS_NUC_CGS + NAME_SEPARATOR
+            + NABLA + NAME_SEPARATOR + NABLA_AD + NAME_SEPARATOR + NABLA_RAD + NAME_SEPARATOR + CONVECTIVE
+            + NAME_SEPARATOR + CONV_VELOCITY_CGS + NAME_SEPARATOR + RADIUS_CM + NAME_SEPARATOR + GAMMA1
+            + NAME_SEPARATOR + SOUND_SPEED_CGS + NAME_SEPARATOR + H_FRAC + NAME_SEPARATOR + MU + NAME_SEPARATOR
+            + HE3_FRAC + NAME_SEPARATOR + BRUNT_N2_CGS;
+
+    /** The header, in order: {@link #HEADER_NAMED}, the one list of the columns. */
+    public static final List<String> HEADER = List.of(HEADER_NAMED.split(NAME_SEPARATOR));
 
     /**
      * The columns added after the first profiles, in the order they came: profiles written before a column existed

@@ -18,8 +18,12 @@ import org.convgrid.output.CsvNumbers;
  * convective zone of every step, centre outwards. Units as in the catalogue (L / L_sun, R / R_sun with the IAU 2015
  * nominal values, ages over the Julian gigayear, log g = log10(G M / R^2) in cgs). The burning region is the extent in
  * m/M of the points where the nuclear energy generation exceeds {@link MainSequenceEvolver#BURNING_THRESHOLD} (1 %)
- * of its maximum in the star; empty when nothing burns. A zone reaches the surface when its top lies within
- * {@link ConvectiveZoneFinder#DEFAULT_SURFACE_SKIN_MASS_FRACTION} of it, as in the catalogue. Numbers in the
+ * of its maximum in the star; empty when nothing burns. The envelope and a fully convective star follow the
+ * catalogue's rules: a surface zone is an envelope when its top lies within
+ * {@link ConvectiveZoneFinder#DEFAULT_SURFACE_SKIN_MASS_FRACTION} of the surface and it holds at least
+ * {@link ConvectiveZoneFinder#DEFAULT_MIN_ENVELOPE_MASS_FRACTION} of the mass; one zone from the centre that is
+ * also the envelope makes the star fully convective (central top 1, envelope base 0). The central zone is any zone
+ * holding the centre, however small (the catalogue's core also needs the run's core threshold). Numbers in the
  * {@link CsvNumbers} form, so the same track always gives the same bytes.
  */
 public final class TrackWriter {
@@ -38,9 +42,9 @@ public final class TrackWriter {
             EvolutionStep s = p.step();
             List<ConvectiveZone> zones = s.convectiveZones();
             ConvectiveZone central = !zones.isEmpty() && zones.get(0).innerMassFraction() <= 0.0 ? zones.get(0) : null;
-            ConvectiveZone surface = !zones.isEmpty()
-                    && zones.get(zones.size() - 1).outerMassFraction()
-                    >= 1.0 - ConvectiveZoneFinder.DEFAULT_SURFACE_SKIN_MASS_FRACTION ? zones.get(zones.size() - 1) : null;
+            ConvectiveZone surface = zones.isEmpty() ? null : envelope(zones.get(zones.size() - 1));
+            // one zone from the centre to within the skin of the surface: fully convective, top 1 as documented
+            boolean fullyConvective = central != null && central == surface;
             boolean burns = !Double.isNaN(s.burningInner());
             double burnLo = burns ? clamp(s.burningInner()) : Double.NaN;
             out.append(CsvNumbers.format(s.age() / Constants.GYR)).append(',')
@@ -54,7 +58,8 @@ public final class TrackWriter {
                     .append(CsvNumbers.format(s.centralDensity())).append(',')
                     .append(CsvNumbers.format(s.centralHydrogen())).append(',')
                     .append(CsvNumbers.format(p.surfaceLithium())).append(',')
-                    .append(CsvNumbers.format(central == null ? Double.NaN : clamp(central.outerMassFraction())))
+                    .append(CsvNumbers.format(central == null ? Double.NaN
+                            : fullyConvective ? 1.0 : clamp(central.outerMassFraction())))
                     .append(',')
                     .append(CsvNumbers.format(surface == null ? Double.NaN : clamp(surface.innerMassFraction())))
                     .append(',')
@@ -89,6 +94,20 @@ public final class TrackWriter {
                         .append(CsvNumbers.format(Math.max(rLo, clamp(z.outerRadiusFraction())))).append('\n');
             }
         }
+    }
+
+    /**
+     * The outermost zone when it is a convective envelope by the catalogue's rules ({@link ConvectiveZoneFinder}):
+     * its top within {@link ConvectiveZoneFinder#DEFAULT_SURFACE_SKIN_MASS_FRACTION} of the surface and its mass at
+     * least {@link ConvectiveZoneFinder#DEFAULT_MIN_ENVELOPE_MASS_FRACTION}; null otherwise. A thinner surface zone
+     * (the hydrogen-ionisation layer of an A or late-B star) is in the zone table but is not an envelope.
+     */
+    private static ConvectiveZone envelope(ConvectiveZone outermost) {
+        boolean reachesSurface = outermost.outerMassFraction()
+                >= 1.0 - ConvectiveZoneFinder.DEFAULT_SURFACE_SKIN_MASS_FRACTION;
+        boolean massive = outermost.outerMassFraction() - outermost.innerMassFraction()
+                >= ConvectiveZoneFinder.DEFAULT_MIN_ENVELOPE_MASS_FRACTION;
+        return reachesSurface && massive ? outermost : null;
     }
 
     private static double clamp(double x) {

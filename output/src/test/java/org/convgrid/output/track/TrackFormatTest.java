@@ -97,6 +97,37 @@ class TrackFormatTest {
     }
 
     @Test
+    void theCentralAndEnvelopeColumnsFollowTheCataloguesRules() throws Exception {
+        // a review found 0.9999992 for a fully convective first step (documented: 1) and 1.0 for the envelope base
+        // of 1.6 Msun main-sequence steps whose only surface zone is the thin hydrogen-ionisation layer, which the
+        // catalogue does not count as an envelope (ConvectiveZoneFinder: under 1e-6 of the mass)
+        List<ConvectiveZone> fullyConvective = List.of(new ConvectiveZone(0.0, 0.9999992, 0.0, 0.9995));
+        List<ConvectiveZone> coreAndIonisationLayer = List.of(new ConvectiveZone(0.0, 0.15, 0.0, 0.1),
+                new ConvectiveZone(1.0 - 3e-9, 1.0, 0.998, 1.0));
+        List<ConvectiveZone> coreAndThinEnvelope = List.of(new ConvectiveZone(0.0, 0.15, 0.0, 0.1),
+                new ConvectiveZone(1.0 - 2e-5, 1.0, 0.97, 1.0));
+        StringBuilder text = new StringBuilder();
+        TrackWriter.write(Constants.M_SUN, List.of(
+                new TrackPoint(step(0.0, fullyConvective), Phase.PRE_MAIN_SEQUENCE, 0.0, 1.0, 1e-5),
+                new TrackPoint(step(0.1, coreAndIonisationLayer), Phase.MAIN_SEQUENCE, 1.0, 1.0, 0.0),
+                new TrackPoint(step(0.2, coreAndThinEnvelope), Phase.MAIN_SEQUENCE, 1.0, 1.0, 0.0)), text);
+        String[] rows = text.toString().split("\n");
+        int top = TrackColumns.ALL.indexOf(TrackColumns.CENTRAL_CZ_TOP);
+        int base = TrackColumns.ALL.indexOf(TrackColumns.ENV_CZ_BASE);
+        int count = TrackColumns.ALL.indexOf(TrackColumns.CONV_ZONE_COUNT);
+        String[] first = rows[1].split(",", -1);
+        assertThat(first[top]).isEqualTo("1.0");
+        assertThat(first[base]).isEqualTo("0.0");
+        String[] ionisation = rows[2].split(",", -1);
+        assertThat(ionisation[top]).isEqualTo("0.15");
+        assertThat(ionisation[base]).isEmpty();
+        // still a zone of the step, listed in the zone table
+        assertThat(ionisation[count]).isEqualTo("2");
+        String[] envelope = rows[3].split(",", -1);
+        assertThat(envelope[base]).isEqualTo("0.99998");
+    }
+
+    @Test
     void aTrackFileOfTheEarlierLayoutIsRefusedWithTheWayOut() {
         String old = "age_gyr,luminosity_lsun,conv_zones_mass_frac,burning_zone_mass_frac\n0.0,1.0,0-0.1;0.7-1,0-0.3\n";
         assertThatThrownBy(() -> TrackReader.read(new StringReader(old)))
