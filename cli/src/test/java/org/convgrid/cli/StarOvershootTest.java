@@ -44,6 +44,17 @@ class StarOvershootTest {
                 "--overshoot-profile", "decaying", "--age-origin", "zams");
     }
 
+    /**
+     * From birth too: before the diffusion stopped at the top of a zone that reaches the surface skin
+     * ({@code ExponentialOvershoot}), every 1.0, 1.5 and 2.0 Msun star from birth with decaying overshoot failed in
+     * the first Myr (step budget used at X_c = 0.700), in a grid and in star alike.
+     */
+    @Test
+    void decayingOvershootFromBirthGivesTheGridRow() throws Exception {
+        assertSameRow("birth", "{profile: decaying, length_hp: 0.016}", "--overshoot-hp", "0.016",
+                "--overshoot-profile", "decaying");
+    }
+
     @Test
     void aNegativeLengthOrAnUnknownProfileIsAUsageError() {
         CliHarness.Execution negative = run("star", "--mass", "1", "--z", "0.02", "--overshoot-hp", "-0.1");
