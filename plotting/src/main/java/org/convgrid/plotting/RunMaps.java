@@ -14,6 +14,7 @@ import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.Slice;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.plotting.hr.HrDiagram;
+import org.convgrid.plotting.hr.HrDiagramData;
 import org.convgrid.plotting.hr.HrDiagramRenderer;
 import org.convgrid.plotting.kippenhahn.Kippenhahn;
 import org.convgrid.plotting.kippenhahn.KippenhahnRenderer;
@@ -26,8 +27,10 @@ import org.convgrid.plotting.tracks.AgeChartSelection;
 import org.convgrid.plotting.tracks.TrackOrigin;
 import org.convgrid.plotting.tracks.TrackedModel;
 import org.convgrid.plotting.trend.TransitionAgeTrend;
+import org.convgrid.plotting.trend.TransitionAgeTrendData;
 import org.convgrid.plotting.trend.TransitionAgeTrendRenderer;
 import org.convgrid.plotting.trend.TransitionTrend;
+import org.convgrid.plotting.trend.TransitionTrendData;
 import org.convgrid.plotting.trend.TransitionTrendRenderer;
 import org.convgrid.plotting.zones.ZoneMap;
 import org.convgrid.plotting.zones.ZoneMapRenderer;
@@ -168,7 +171,8 @@ public final class RunMaps {
                             + "evolution tracks (grey) and isochrones labelled by age, "
                             : "HR diagram of every usable model (colour: Z; shape: structure class), ")
                             + p.describe() + ".",
-                    () -> HrDiagramRenderer.render(HrDiagram.build(p, rows, run.trackedModels(), run::timeline))));
+                    () -> HrDiagramRenderer.render(usable(HrDiagram.build(p, rows, run.trackedModels(), run::timeline),
+                            rows))));
         }
         for (PhysicsKey p : physics) {
             if (run.transitions().stream().anyMatch(t -> PhysicsKey.of(t.slice()).equals(p))) {
@@ -176,7 +180,7 @@ public final class RunMaps {
                         "Transition masses against Z: shaded boxes span the two models that bracket each value, "
                                 + "dashed boxes the windows of small transient cores (a square alone: a window found "
                                 + "at one mass), " + p.describe() + ".",
-                        () -> TransitionTrendRenderer.render(TransitionTrend.build(p, run.transitions()))));
+                        () -> TransitionTrendRenderer.render(found(TransitionTrend.build(p, run.transitions())))));
             }
         }
         for (PhysicsKey p : physics) {
@@ -190,13 +194,45 @@ public final class RunMaps {
                                 + "ages only to guide the eye: where small 3He-driven cores fill the masses below it "
                                 + "at some age, \"core in every star above\" drops there and rises again (README, "
                                 + "Limits, in detail).",
-                        () -> TransitionAgeTrendRenderer.render(TransitionAgeTrend.build(p, run.transitions()),
+                        () -> TransitionAgeTrendRenderer.render(found(TransitionAgeTrend.build(p, run.transitions())),
                                 run.manifest() == null ? AgeOrigin.ZAMS : run.manifest().ageOrigin())));
             }
         }
         entries.addAll(zonesAgainstAge(run));
         return entries;
     }
+
+    /** The diagram if it has a model to show; otherwise {@link NothingToDraw}, naming the statuses it had instead. */
+    static HrDiagramData usable(HrDiagramData diagram, List<CatalogueRow> rows) {
+        if (!diagram.points().isEmpty()) {
+            return diagram;
+        }
+        Map<String, Long> byStatus = new java.util.TreeMap<>();
+        rows.stream().filter(r -> PhysicsKey.of(r).equals(diagram.physics()))
+                .forEach(r -> byStatus.merge(r.status().label(), 1L, Long::sum));
+        List<String> counts = byStatus.entrySet().stream().map(e -> e.getValue() + " " + e.getKey()).toList();
+        throw new NothingToDraw("no model of " + diagram.physics().describe() + " is usable (status ok with L and "
+                + "Teff); the catalogue has " + String.join(", ", counts));
+    }
+
+    /** The trend if some slice has a transition or a transient core window; otherwise {@link NothingToDraw}. */
+    static TransitionTrendData found(TransitionTrendData trend) {
+        if (trend.series().isEmpty() && trend.windows().isEmpty()) {
+            throw new NothingToDraw(NO_TRANSITION);
+        }
+        return trend;
+    }
+
+    /** As {@link #found(TransitionTrendData)} for the trend against age. */
+    static TransitionAgeTrendData found(TransitionAgeTrendData trend) {
+        if (trend.series().isEmpty() && trend.windows().isEmpty()) {
+            throw new NothingToDraw(NO_TRANSITION);
+        }
+        return trend;
+    }
+
+    private static final String NO_TRANSITION = "the models bracket no transition mass in any slice (transitions.csv "
+            + "has none found)";
 
     /** Which tracks get a zones-against-age chart: a bounded selection (see {@link AgeChartSelection}). */
     public static AgeChartSelection zonesAgainstAgeSelection(RunData run) {
