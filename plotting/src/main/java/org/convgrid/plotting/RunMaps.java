@@ -177,7 +177,7 @@ public final class RunMaps {
         for (PhysicsKey p : physics) {
             if (run.transitions().stream().anyMatch(t -> PhysicsKey.of(t.slice()).equals(p))) {
                 entries.add(new MapEntry(TRENDS_FILES + "_" + p.fileStem() + ".png", MapEntry.TRENDS,
-                        "Transition masses against Z: shaded boxes span the two models that bracket each value, "
+                        "Transition masses against Z (the ages drawn slightly apart at each Z, youngest left): shaded boxes span the two models that bracket each value, "
                                 + "dashed boxes the windows of small transient cores (a square alone: a window found "
                                 + "at one mass), " + p.describe() + ".",
                         () -> TransitionTrendRenderer.render(found(TransitionTrend.build(p, run.transitions())))));
@@ -188,7 +188,7 @@ public final class RunMaps {
                     .mapToDouble(t -> t.slice().ageGyr()).distinct().count();
             if (ages >= 2) {
                 entries.add(new MapEntry(TRENDS_AGE_FILES + "_" + p.fileStem() + ".png", MapEntry.TRENDS_AGE,
-                        "Transition masses against age, one line per Z and method: shaded boxes span the two models "
+                        "Transition masses against age, one line per Z and method (each Z drawn slightly apart, lowest left): shaded boxes span the two models "
                                 + "that bracket each value, dashed boxes the windows of small transient cores (a "
                                 + "square alone: a window found at one mass), " + p.describe() + ". The lines join "
                                 + "ages only to guide the eye: where small 3He-driven cores fill the masses below it "
