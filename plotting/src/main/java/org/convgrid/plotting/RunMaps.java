@@ -11,6 +11,7 @@ import java.util.Set;
 import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.transitions.RefinedModelIds;
 import org.convgrid.output.transitions.Slice;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.plotting.hr.HrDiagram;
@@ -170,7 +171,7 @@ public final class RunMaps {
                     (run.hasTracks() ? "HR diagram of every usable model (colour: Z; shape: structure class) with the "
                             + "evolution tracks (grey) and isochrones labelled by age, "
                             : "HR diagram of every usable model (colour: Z; shape: structure class), ")
-                            + p.describe() + ".",
+                            + p.describe() + "." + refinementNote(rows, p),
                     () -> HrDiagramRenderer.render(usable(HrDiagram.build(p, rows, run.trackedModels(), run::timeline),
                             rows))));
         }
@@ -213,6 +214,18 @@ public final class RunMaps {
         List<String> counts = byStatus.entrySet().stream().map(e -> e.getValue() + " " + e.getKey()).toList();
         throw new NothingToDraw("no model of " + diagram.physics().describe() + " is usable (status ok with L and "
                 + "Teff); the catalogue has " + String.join(", ", counts));
+    }
+
+    /**
+     * What the HR caption adds when the refinement added models of this physics: how many, and that lines and mass
+     * labels go through the grid's masses only.
+     */
+    private static String refinementNote(List<CatalogueRow> rows, PhysicsKey physics) {
+        long refined = rows.stream().filter(r -> PhysicsKey.of(r).equals(physics))
+                .filter(r -> RefinedModelIds.isRefined(r.modelId())).count();
+        long grid = rows.stream().filter(r -> PhysicsKey.of(r).equals(physics)).count() - refined;
+        return refined == 0 ? "" : " Large markers, isochrones and mass labels: the " + grid + " grid models; small pale "
+                + "markers: the " + refined + " models the transition refinement added near the transition masses.";
     }
 
     /** The trend if some slice has a transition or a transient core window; otherwise {@link NothingToDraw}. */
