@@ -263,7 +263,8 @@ public final class RunMaps {
             String group = groupOf(o.zInit(), o.physics(), run);
             entries.add(new MapEntry(ZONES_AGE_FILES + stem, MapEntry.ZONES_AGE, group,
                     "Convective zones (shaded) and " + KippenhahnRenderer.BURNING_LABEL + " against age, " + what + ", "
-                            + o.physics().describe() + ".",
+                            + o.physics().describe() + "; burning is hatched only at ages when it gives at least "
+                            + "1 % of the star's luminosity, where the track records that share.",
                     () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track(), run.timeline(o.trackId())))));
             if (Kippenhahn.build(o, t.track(), run.timeline(o.trackId())).hasThinEnvelope()) {
                 entries.add(new MapEntry(ZONES_AGE_DEPTH_FILES + stem, MapEntry.ZONES_AGE, group,
