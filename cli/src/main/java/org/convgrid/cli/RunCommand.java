@@ -202,11 +202,7 @@ final class RunCommand implements Callable<Integer> {
                     + RunLayout.CATALOGUE + " (" + describe(result.counts()) + "); " + result.computed()
                     + " computed now in " + Durations.describe(refined == null ? seconds : sweepSeconds));
             if (refined != null) {
-                long failedNew = refined.added().stream().filter(o -> o.status() != ModelStatus.OK).count();
-                parent.out().println(dir.transitions() + ": transitions refined to "
-                        + MessageNumbers.format(transitions.toleranceMsun()) + " Msun with " + Counts.of(refined.added().size(), "new model")
-                        + (failedNew > 0 ? " (" + failedNew + " not ok)" : "") + " in "
-                        + Durations.describe(seconds - sweepSeconds));
+                parent.out().println(dir.transitions() + ": " + refinedLine(refined, file.spec(), seconds - sweepSeconds));
             }
             parent.out().flush();
             if (RunFinishing.someModelsFailed(result.counts())) {
@@ -217,6 +213,22 @@ final class RunCommand implements Callable<Integer> {
             }
             return ExitCodes.OK;
         }
+    }
+
+    /**
+     * What the refinement did, after the file name: the tolerance and the new models, or, when it made none, why
+     * ("refined with 0 new models" would read as if it had refined something).
+     */
+    static String refinedLine(TransitionTables.Update refined, GridSpec grid, double seconds) {
+        String tolerance = MessageNumbers.format(grid.transitions().toleranceMsun()) + " Msun";
+        if (refined.added().isEmpty()) {
+            long masses = grid.massesMsun().stream().distinct().count();
+            return "nothing to refine (" + (masses < 2 ? "the grid has one mass, so no two models bracket a transition"
+                    : "no bracket wider than " + tolerance) + ")";
+        }
+        long failedNew = refined.added().stream().filter(o -> o.status() != ModelStatus.OK).count();
+        return "transitions refined to " + tolerance + " with " + Counts.of(refined.added().size(), "new model")
+                + (failedNew > 0 ? " (" + failedNew + " not ok)" : "") + " in " + Durations.describe(seconds);
     }
 
     /** The line said before the transitions are refined: the tolerance, the expected work, how to skip it. */

@@ -11,9 +11,11 @@ import java.util.Set;
 import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.transitions.RefinedModelIds;
 import org.convgrid.output.transitions.Slice;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.plotting.hr.HrDiagram;
+import org.convgrid.plotting.hr.HrDiagramData;
 import org.convgrid.plotting.hr.HrDiagramRenderer;
 import org.convgrid.plotting.kippenhahn.Kippenhahn;
 import org.convgrid.plotting.kippenhahn.KippenhahnRenderer;
@@ -26,8 +28,10 @@ import org.convgrid.plotting.tracks.AgeChartSelection;
 import org.convgrid.plotting.tracks.TrackOrigin;
 import org.convgrid.plotting.tracks.TrackedModel;
 import org.convgrid.plotting.trend.TransitionAgeTrend;
+import org.convgrid.plotting.trend.TransitionAgeTrendData;
 import org.convgrid.plotting.trend.TransitionAgeTrendRenderer;
 import org.convgrid.plotting.trend.TransitionTrend;
+import org.convgrid.plotting.trend.TransitionTrendData;
 import org.convgrid.plotting.trend.TransitionTrendRenderer;
 import org.convgrid.plotting.zones.ZoneMap;
 import org.convgrid.plotting.zones.ZoneMapRenderer;
@@ -167,16 +171,17 @@ public final class RunMaps {
                     (run.hasTracks() ? "HR diagram of every usable model (colour: Z; shape: structure class) with the "
                             + "evolution tracks (grey) and isochrones labelled by age, "
                             : "HR diagram of every usable model (colour: Z; shape: structure class), ")
-                            + p.describe() + ".",
-                    () -> HrDiagramRenderer.render(HrDiagram.build(p, rows, run.trackedModels(), run::timeline))));
+                            + p.describe() + "." + refinementNote(rows, p),
+                    () -> HrDiagramRenderer.render(usable(HrDiagram.build(p, rows, run.trackedModels(), run::timeline),
+                            rows))));
         }
         for (PhysicsKey p : physics) {
             if (run.transitions().stream().anyMatch(t -> PhysicsKey.of(t.slice()).equals(p))) {
                 entries.add(new MapEntry(TRENDS_FILES + "_" + p.fileStem() + ".png", MapEntry.TRENDS,
-                        "Transition masses against Z: shaded boxes span the two models that bracket each value, "
+                        "Transition masses against Z (the ages drawn slightly apart at each Z, youngest left): shaded boxes span the two models that bracket each value, "
                                 + "dashed boxes the windows of small transient cores (a square alone: a window found "
                                 + "at one mass), " + p.describe() + ".",
-                        () -> TransitionTrendRenderer.render(TransitionTrend.build(p, run.transitions()))));
+                        () -> TransitionTrendRenderer.render(found(TransitionTrend.build(p, run.transitions())))));
             }
         }
         for (PhysicsKey p : physics) {
@@ -184,19 +189,63 @@ public final class RunMaps {
                     .mapToDouble(t -> t.slice().ageGyr()).distinct().count();
             if (ages >= 2) {
                 entries.add(new MapEntry(TRENDS_AGE_FILES + "_" + p.fileStem() + ".png", MapEntry.TRENDS_AGE,
-                        "Transition masses against age, one line per Z and method: shaded boxes span the two models "
+                        "Transition masses against age, one line per Z and method (each Z drawn slightly apart, lowest left): shaded boxes span the two models "
                                 + "that bracket each value, dashed boxes the windows of small transient cores (a "
                                 + "square alone: a window found at one mass), " + p.describe() + ". The lines join "
                                 + "ages only to guide the eye: where small 3He-driven cores fill the masses below it "
                                 + "at some age, \"core in every star above\" drops there and rises again (README, "
                                 + "Limits, in detail).",
-                        () -> TransitionAgeTrendRenderer.render(TransitionAgeTrend.build(p, run.transitions()),
+                        () -> TransitionAgeTrendRenderer.render(found(TransitionAgeTrend.build(p, run.transitions())),
                                 run.manifest() == null ? AgeOrigin.ZAMS : run.manifest().ageOrigin())));
             }
         }
         entries.addAll(zonesAgainstAge(run));
         return entries;
     }
+
+    /** The diagram if it has a model to show; otherwise {@link NothingToDraw}, naming the statuses it had instead. */
+    static HrDiagramData usable(HrDiagramData diagram, List<CatalogueRow> rows) {
+        if (!diagram.points().isEmpty()) {
+            return diagram;
+        }
+        Map<String, Long> byStatus = new java.util.TreeMap<>();
+        rows.stream().filter(r -> PhysicsKey.of(r).equals(diagram.physics()))
+                .forEach(r -> byStatus.merge(r.status().label(), 1L, Long::sum));
+        List<String> counts = byStatus.entrySet().stream().map(e -> e.getValue() + " " + e.getKey()).toList();
+        throw new NothingToDraw("no model of " + diagram.physics().describe() + " is usable (status ok with L and "
+                + "Teff); the catalogue has " + String.join(", ", counts));
+    }
+
+    /**
+     * What the HR caption adds when the refinement added models of this physics: how many, and that lines and mass
+     * labels go through the grid's masses only.
+     */
+    private static String refinementNote(List<CatalogueRow> rows, PhysicsKey physics) {
+        long refined = rows.stream().filter(r -> PhysicsKey.of(r).equals(physics))
+                .filter(r -> RefinedModelIds.isRefined(r.modelId())).count();
+        long grid = rows.stream().filter(r -> PhysicsKey.of(r).equals(physics)).count() - refined;
+        return refined == 0 ? "" : " Large markers, isochrones and mass labels: the " + grid + " grid models; small pale "
+                + "markers: the " + refined + " models the transition refinement added near the transition masses.";
+    }
+
+    /** The trend if some slice has a transition or a transient core window; otherwise {@link NothingToDraw}. */
+    static TransitionTrendData found(TransitionTrendData trend) {
+        if (trend.series().isEmpty() && trend.windows().isEmpty()) {
+            throw new NothingToDraw(NO_TRANSITION);
+        }
+        return trend;
+    }
+
+    /** As {@link #found(TransitionTrendData)} for the trend against age. */
+    static TransitionAgeTrendData found(TransitionAgeTrendData trend) {
+        if (trend.series().isEmpty() && trend.windows().isEmpty()) {
+            throw new NothingToDraw(NO_TRANSITION);
+        }
+        return trend;
+    }
+
+    private static final String NO_TRANSITION = "the models bracket no transition mass in any slice (transitions.csv "
+            + "has none found)";
 
     /** Which tracks get a zones-against-age chart: a bounded selection (see {@link AgeChartSelection}). */
     public static AgeChartSelection zonesAgainstAgeSelection(RunData run) {
@@ -214,7 +263,8 @@ public final class RunMaps {
             String group = groupOf(o.zInit(), o.physics(), run);
             entries.add(new MapEntry(ZONES_AGE_FILES + stem, MapEntry.ZONES_AGE, group,
                     "Convective zones (shaded) and " + KippenhahnRenderer.BURNING_LABEL + " against age, " + what + ", "
-                            + o.physics().describe() + ".",
+                            + o.physics().describe() + "; burning is hatched only at ages when it gives at least "
+                            + "1 % of the star's luminosity, where the track records that share.",
                     () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track(), run.timeline(o.trackId())))));
             if (Kippenhahn.build(o, t.track(), run.timeline(o.trackId())).hasThinEnvelope()) {
                 entries.add(new MapEntry(ZONES_AGE_DEPTH_FILES + stem, MapEntry.ZONES_AGE, group,

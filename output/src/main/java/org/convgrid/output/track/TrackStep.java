@@ -19,10 +19,19 @@ import org.convgrid.output.Span;
  * @param convZones every convective zone in m/M, centre outwards
  * @param burningZone the hydrogen-burning region in m/M (energy generation above the writer's threshold), null
  *     when the file gives none
+ * @param nuclearLuminosityFrac L_nuc / L; NaN when the file gives none (tracks from the zero-age main sequence)
  */
 public record TrackStep(double ageGyr, String phase, double luminosityLsun, double radiusRsun, double teffK,
                         double logGCgs, double centralTempK, double centralDensityCgs, double centralHFrac,
-                        double surfaceLiRel, List<Span> convZones, Span burningZone) {
+                        double surfaceLiRel, List<Span> convZones, Span burningZone, double nuclearLuminosityFrac) {
+
+    /** A step without L_nuc / L. */
+    public TrackStep(double ageGyr, String phase, double luminosityLsun, double radiusRsun, double teffK,
+                     double logGCgs, double centralTempK, double centralDensityCgs, double centralHFrac,
+                     double surfaceLiRel, List<Span> convZones, Span burningZone) {
+        this(ageGyr, phase, luminosityLsun, radiusRsun, teffK, logGCgs, centralTempK, centralDensityCgs, centralHFrac,
+                surfaceLiRel, convZones, burningZone, Double.NaN);
+    }
 
     public TrackStep {
         convZones = List.copyOf(convZones);
@@ -37,6 +46,6 @@ public record TrackStep(double ageGyr, String phase, double luminosityLsun, doub
     /** The same step with other convective zones (those of the zone table). */
     TrackStep withZones(List<Span> zones) {
         return new TrackStep(ageGyr, phase, luminosityLsun, radiusRsun, teffK, logGCgs, centralTempK,
-                centralDensityCgs, centralHFrac, surfaceLiRel, zones, burningZone);
+                centralDensityCgs, centralHFrac, surfaceLiRel, zones, burningZone, nuclearLuminosityFrac);
     }
 }

@@ -8,13 +8,14 @@ import java.util.function.Function;
 import org.convgrid.output.track.TrackTimeline;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.track.TrackStep;
+import org.convgrid.output.transitions.RefinedModelIds;
 import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.tracks.TrackedModel;
 
 /**
  * Builds HR-diagram data from catalogue rows (and evolution tracks, when the run has them) of one physics
  * combination: a pure function, no drawing. Models without a usable result (status not ok, missing L or Teff, no
- * structure class) are left out.
+ * structure class) are left out; the transition refinement's models are kept apart from the grid's.
  */
 public final class HrDiagram {
 
@@ -47,11 +48,16 @@ public final class HrDiagram {
      */
     public static HrDiagramData build(PhysicsKey physics, List<CatalogueRow> rows, List<TrackedModel> tracked,
                                       Function<String, TrackTimeline> timelines) {
-        List<HrPoint> points = rows.stream()
+        List<HrPoint> usable = rows.stream()
                 .filter(r -> PhysicsKey.of(r).equals(physics) && r.isOk() && r.structureClass() != null
                         && r.luminosityLsun() > 0 && r.teffK() > 0)
                 .map(r -> new HrPoint(r.modelId(), r.massMsun(), r.zInit(), r.ageGyr(), Math.log10(r.teffK()),
                         Math.log10(r.luminosityLsun()), r.structureClass()))
+                .toList();
+        // the refinement's models (the demo: 169 of 259 rows) bunch at the transition masses: lines and labels go
+        // through the grid's own masses only
+        List<HrPoint> points = usable.stream().filter(p -> !RefinedModelIds.isRefined(p.modelId())).toList();
+        List<HrPoint> refinementPoints = usable.stream().filter(p -> RefinedModelIds.isRefined(p.modelId()))
                 .toList();
         TreeMap<Double, List<HrPoint>> byZ = new TreeMap<>();
         points.forEach(p -> byZ.computeIfAbsent(p.zInit(), z -> new ArrayList<>()).add(p));
@@ -80,7 +86,7 @@ public final class HrDiagram {
             }));
         }
         return new HrDiagramData(physics, List.copyOf(byZ.keySet()), ages, points, lines, labels, tracks,
-                isochrones);
+                isochrones, refinementPoints);
     }
 
     private static HrDiagramData.TrackLine trackLine(TrackedModel t, TrackTimeline timeline, double from) {

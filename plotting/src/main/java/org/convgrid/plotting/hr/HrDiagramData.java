@@ -9,20 +9,23 @@ import org.convgrid.plotting.label.PhysicsKey;
  * @param physics the physics of every model shown
  * @param metallicities the Z values shown, increasing
  * @param ages the ages shown, Gyr, increasing
- * @param points every usable model (status ok, with L, Teff and a structure class)
+ * @param points every usable model of the grid (status ok, with L, Teff and a structure class)
  * @param zeroAgeLines one line per Z through its youngest models (age 0 when the run has it), by mass
  * @param massLabels the points that get a mass label (on one zero-age line)
  * @param tracks one evolution track per (mass, Z) of this physics, by Z then mass; empty when the run has none
  * @param isochrones per Z and age, the models of that age in mass order; only when there are tracks
+ * @param refinementPoints the usable models the transition refinement added at masses of its own choosing: drawn
+ *                         apart (small and pale), never on a line or labelled, since they crowd near the transition
+ *                         masses and an isochrone through them would not be one through the grid's masses
  */
 public record HrDiagramData(PhysicsKey physics, List<Double> metallicities, List<Double> ages, List<HrPoint> points,
                             List<ZeroAgeLine> zeroAgeLines, List<HrPoint> massLabels, List<TrackLine> tracks,
-                            List<ZeroAgeLine> isochrones) {
+                            List<ZeroAgeLine> isochrones, List<HrPoint> refinementPoints) {
 
     /** A diagram without tracks or isochrones. */
     public HrDiagramData(PhysicsKey physics, List<Double> metallicities, List<Double> ages, List<HrPoint> points,
                          List<ZeroAgeLine> zeroAgeLines, List<HrPoint> massLabels) {
-        this(physics, metallicities, ages, points, zeroAgeLines, massLabels, List.of(), List.of());
+        this(physics, metallicities, ages, points, zeroAgeLines, massLabels, List.of(), List.of(), List.of());
     }
 
     public HrDiagramData {
@@ -33,6 +36,7 @@ public record HrDiagramData(PhysicsKey physics, List<Double> metallicities, List
         massLabels = List.copyOf(massLabels);
         tracks = List.copyOf(tracks);
         isochrones = List.copyOf(isochrones);
+        refinementPoints = List.copyOf(refinementPoints);
     }
 
     /**

@@ -10,6 +10,7 @@ import org.convgrid.plotting.layout.LabelPlacement;
 import org.convgrid.plotting.layout.Obstacles;
 import org.convgrid.plotting.layout.SeriesObstacles;
 import org.convgrid.plotting.style.ChartStyle;
+import org.convgrid.plotting.style.ScaledMarker;
 import org.convgrid.plotting.style.StyledChart;
 import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.style.markers.SeriesMarkers;
@@ -42,6 +43,11 @@ public final class HrDiagramRenderer {
     /** The pre-main-sequence part: the same light grey and width, dotted, so it is told apart without a colour. */
     private static final java.awt.BasicStroke PRE_MAIN_SEQUENCE_STROKE = new java.awt.BasicStroke(TRACK_WIDTH,
             java.awt.BasicStroke.CAP_ROUND, java.awt.BasicStroke.JOIN_ROUND, 1f, new float[] {2f, 4f}, 0f);
+    /** The legend entry of the transition refinement's models. */
+    static final String REFINEMENT_LABEL = "refinement models (small)";
+    /** Refinement models' markers: this share of the grid's marker size, and paler. */
+    private static final double REFINEMENT_MARKER_SHARE = 0.55;
+    private static final double REFINEMENT_TINT = 0.35;
     /** The legend's class shapes: neutral, since colour stands for Z. */
     private static final java.awt.Color CLASS_LEGEND_GREY = new java.awt.Color(90, 90, 90);
 
@@ -58,8 +64,10 @@ public final class HrDiagramRenderer {
         chart.getStyler().setYAxisDecimalPattern("0.0");
         chart.getStyler().setYAxisTickMarkSpacingHint(Y_TICK_SPACING);
         if (!data.points().isEmpty()) {
-            DoubleSummaryStatistics teff = data.points().stream().mapToDouble(HrPoint::logTeff).summaryStatistics();
-            DoubleSummaryStatistics lum = data.points().stream().mapToDouble(HrPoint::logL).summaryStatistics();
+            List<HrPoint> all = new java.util.ArrayList<>(data.points());
+            all.addAll(data.refinementPoints());
+            DoubleSummaryStatistics teff = all.stream().mapToDouble(HrPoint::logTeff).summaryStatistics();
+            DoubleSummaryStatistics lum = all.stream().mapToDouble(HrPoint::logL).summaryStatistics();
             data.tracks().forEach(t -> {
                 t.logTeff().forEach(teff::accept);
                 t.logL().forEach(lum::accept);
@@ -101,6 +109,7 @@ public final class HrDiagramRenderer {
             s.setMarker(ChartStyle.classMarker(c));
             s.setMarkerColor(CLASS_LEGEND_GREY);
         }
+        addRefinementModels(chart, data);
         int hidden = 0;
         for (StructureClass c : StructureClass.values()) {
             for (double z : data.metallicities()) {
@@ -134,6 +143,41 @@ public final class HrDiagramRenderer {
             }
         });
         return chart;
+    }
+
+    /**
+     * The refinement's models: small, pale markers of their class and Z, under the grid's, with one grey legend
+     * entry. They bunch at the transition masses, so at full size they would outweigh the grid's models.
+     */
+    private static void addRefinementModels(StyledChart chart, HrDiagramData data) {
+        if (data.refinementPoints().isEmpty()) {
+            return;
+        }
+        // the legend entry: neutral grey (colour stands for Z), from a series under the coloured ones
+        XYSeries legend = chart.addSeries(REFINEMENT_LABEL,
+                data.refinementPoints().stream().mapToDouble(p -> -p.logTeff()).toArray(),
+                data.refinementPoints().stream().mapToDouble(HrPoint::logL).toArray());
+        legend.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+        legend.setMarker(new ScaledMarker(SeriesMarkers.CIRCLE, REFINEMENT_MARKER_SHARE));
+        legend.setMarkerColor(CLASS_LEGEND_GREY);
+        int n = 0;
+        for (StructureClass c : StructureClass.values()) {
+            for (double z : data.metallicities()) {
+                List<HrPoint> members = data.refinementPoints().stream()
+                        .filter(p -> p.structureClass() == c && p.zInit() == z).toList();
+                if (members.isEmpty()) {
+                    continue;
+                }
+                XYSeries s = chart.addSeries("refinement models " + n++,
+                        members.stream().mapToDouble(p -> -p.logTeff()).toArray(),
+                        members.stream().mapToDouble(HrPoint::logL).toArray());
+                s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+                s.setMarker(new ScaledMarker(ChartStyle.classMarker(c), REFINEMENT_MARKER_SHARE));
+                s.setMarkerColor(ChartStyle.tint(ChartStyle.seriesColor(data.metallicities().indexOf(z)),
+                        REFINEMENT_TINT));
+                s.setShowInLegend(false);
+            }
+        }
     }
 
     private static String massLabel(HrPoint p) {

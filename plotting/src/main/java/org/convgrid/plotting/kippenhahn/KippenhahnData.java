@@ -11,7 +11,8 @@ import org.convgrid.plotting.tracks.TrackOrigin;
  * @param ageMin age of the first step, Gyr
  * @param ageMax age of the last step, Gyr (the last step only closes the previous one's rectangles)
  * @param zones one rectangle per convective interval of every step but the last, in step order
- * @param burning one rectangle per step (but the last) that gives a hydrogen-burning region, in step order
+ * @param burning one rectangle per step (but the last) that gives a nuclear-burning region and, when the track
+ *     says, draws at least 1 % of L from it, in step order
  * @param notes caveats to print on the chart
  * @param timeline whether the track starts at birth and where it reaches the zero-age main sequence
  */

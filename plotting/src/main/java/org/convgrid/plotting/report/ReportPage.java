@@ -13,6 +13,7 @@ import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.manifest.RunManifest;
 import org.convgrid.output.manifest.UnfinishedRun;
+import org.convgrid.output.transitions.RefinedModelIds;
 import org.convgrid.output.transitions.TransitionEstimate;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.plotting.DrawnMaps;
@@ -126,7 +127,11 @@ public final class ReportPage {
             m.physics().forEach(p -> row(b, "physics", SliceLabels.physics(p.mixingLength(), p.overshoot(),
                     p.criterion(), p.opacityScale())));
         }
-        row(b, "catalogue rows", Integer.toString(run.catalogue().size()));
+        // the run's summary line counts the grid's models and the refinement's apart: so does the report
+        long refinement = run.catalogue().stream().filter(r -> RefinedModelIds.isRefined(r.modelId())).count();
+        row(b, "grid models", Long.toString(run.catalogue().size() - refinement));
+        row(b, "refinement models", refinement + " (added by bisection to narrow the transition masses; "
+                + run.catalogue().size() + " catalogue rows in all)");
         row(b, "transitions", run.transitionsFromFile() ? "from " + RunLayout.TRANSITIONS
                 : RunLayout.TRANSITIONS + " not found: read off the catalogue");
         b.append("</table>\n");

@@ -7,6 +7,7 @@ import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.AgeAxisTitle;
 import org.convgrid.plotting.style.AgeUnit;
+import org.convgrid.plotting.style.ChartNotes;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.LogAxis;
 import org.convgrid.plotting.style.StyledChart;
@@ -22,7 +23,7 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  * a shaded box; refined and grid values are separate series, never joined (grid markers paler); each transient window
  * of small cores a faint dashed box with a square at its middle. With few metallicities every marker carries its
  * mass, rounded to the stated accuracy (the refinement's tolerance, else the bracket), clear of every marker, line
- * and box. Series are nudged sideways per Z so markers of equal ages stay apart. Ages all below 1 Gyr are in Myr.
+ * and box. Series are nudged sideways per Z so markers of equal ages stay apart, and a note under the legend says so. Ages all below 1 Gyr are in Myr.
  */
 public final class TransitionAgeTrendRenderer {
 
@@ -30,6 +31,12 @@ public final class TransitionAgeTrendRenderer {
     private static final double DODGE_SHARE = 0.02;
     /** Sideways nudge between metallicities, dex (logarithmic axis). */
     private static final double DODGE_DEX = 0.05;
+    /**
+     * The note printed under the legend when several metallicities are drawn a little apart ({@link Placement}), so
+     * that a reader does not take a marker's place for its age.
+     */
+    static final String NUDGE_NOTE = "Each Z is drawn slightly apart at its age (lowest Z left) so that markers do "
+            + "not hide each other.";
     /** Grid (unrefined) markers are paler than refined ones, so the two read apart. */
     private static final double GRID_MARKER_TINT = 0.5;
     /** Room either side of the age range, as a share of it (linear axis). */
@@ -56,6 +63,7 @@ public final class TransitionAgeTrendRenderer {
                         + SliceLabels.values(data.metallicities()), method.subtitle(data.physics().describe()),
                 AgeAxisTitle.of(origin, unit) + (log ? " (logarithmic)" : ""), "transition mass M / M\u2609");
         ChartStyle.legendRight(chart);
+        ChartNotes.addRightOfPlot(chart, data.metallicities().size() > 1 ? List.of(NUDGE_NOTE) : List.of());
         List<Double> ages = data.ages().stream().map(unit::fromGyr).toList();
         double first = ages.isEmpty() ? 0.0 : ages.get(0);
         double last = ages.isEmpty() ? 1.0 : ages.get(ages.size() - 1);

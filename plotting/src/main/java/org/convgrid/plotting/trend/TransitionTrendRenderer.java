@@ -3,6 +3,7 @@ package org.convgrid.plotting.trend;
 import java.util.List;
 import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.plotting.label.SliceLabels;
+import org.convgrid.plotting.style.ChartNotes;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.LogAxis;
 import org.convgrid.plotting.style.StyledChart;
@@ -17,8 +18,8 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  * separate series, never joined; grid markers are paler. Each transient window of small cores is a faint dashed
  * box with a square at its middle. With few ages every marker carries its mass, rounded to the stated accuracy (the
  * refinement's tolerance, else the bracket), clear of every marker, line and box. Series of different ages are
- * nudged sideways by a few thousandths of a dex so that their markers do not hide each other; the data keep the true
- * Z.
+ * nudged sideways by a few hundredths of a dex so that their markers do not hide each other, and a note under the
+ * legend says so; the data keep the true Z.
  */
 public final class TransitionTrendRenderer {
 
@@ -46,6 +47,7 @@ public final class TransitionTrendRenderer {
                 method.subtitle(data.physics().describe()), "initial metal mass fraction Z",
                 "transition mass M / M\u2609");
         ChartStyle.legendRight(chart);
+        ChartNotes.addRightOfPlot(chart, nudgeNote(data).isEmpty() ? List.of() : List.of(nudgeNote(data)));
         double zMin = data.metallicities().isEmpty() ? 0.001 : data.metallicities().get(0) / Z_PAD;
         double top = data.series().stream().flatMap(s -> s.points().stream())
                 .mapToDouble(p -> p.bracket() == null ? p.massMsun() : p.bracket().hi()).max().orElse(1.0);
@@ -122,6 +124,18 @@ public final class TransitionTrendRenderer {
                     p.bracket(), SliceLabels.massToAccuracy(p.massMsun(), p.bracket(), p.toleranceMsun()),
                     ChartStyle.seriesColor(ageIndex)));
         }).toList();
+    }
+
+    /**
+     * The note printed under the legend when the series of several ages are drawn a little apart ({@link Placement}),
+     * empty otherwise: a reader who reads Z off a marker must know that the marker of Z = 0.02 may sit at 0.019 or
+     * 0.021 on purpose.
+     */
+    static String nudgeNote(TransitionTrendData data) {
+        long ages = java.util.stream.Stream.concat(data.series().stream().map(TransitionTrendData.Series::ageGyr),
+                data.windows().stream().map(TransientWindow::ageGyr)).distinct().count();
+        return ages > 1 ? "Each age is drawn slightly apart at its Z (youngest left) so that markers do not hide each "
+                + "other." : "";
     }
 
     /** Every transient window, where it is drawn. */
