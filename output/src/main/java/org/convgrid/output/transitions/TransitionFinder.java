@@ -67,6 +67,14 @@ public record TransitionFinder(double coreMassFractionThreshold) {
      */
     public static final double COOL_CORE_CENTRAL_T = 1.2e7;
 
+    /** The words of the note {@link #COOL_CORE_CENTRAL_T} adds, by which a reader of the notes finds it. */
+    public static final String COOL_CORES_WORDS = "too cool for the CNO cycle";
+
+    /** Whether a slice's notes say that cores above its onset are too cool for the CNO cycle. */
+    public static boolean notesCoolCores(String notes) {
+        return notes != null && notes.contains(COOL_CORES_WORDS);
+    }
+
     public TransitionFinder {
         if (!(coreMassFractionThreshold >= 0.0 && coreMassFractionThreshold < 1.0)) {
             throw new IllegalArgumentException("core threshold must lie in [0, 1), got " + coreMassFractionThreshold);
@@ -261,7 +269,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         }
         Span masses = new Span(cool.get(0).massMsun(), cool.get(cool.size() - 1).massMsun());
         notes.add("the cores at " + MassRangeText.of(masses) + " Msun sit in centres below "
-                + Math.round(COOL_CORE_CENTRAL_T / 1e6) + " MK, too cool for the CNO cycle: out-of-equilibrium "
+                + Math.round(COOL_CORE_CENTRAL_T / 1e6) + " MK, " + COOL_CORES_WORDS + ": out-of-equilibrium "
                 + "burning drives them (3He on the main sequence, 12C before it)");
     }
 

@@ -6,6 +6,8 @@ import java.util.List;
 import java.util.function.Function;
 import org.convgrid.output.transitions.TransitionEstimate;
 import org.convgrid.output.transitions.TransitionMethod;
+import org.convgrid.output.transitions.TransitionFinder;
+import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.zones.TransitionMarker;
@@ -30,7 +32,27 @@ public final class TransitionAgeTrend {
         List<Double> ages = mine.stream().map(r -> r.slice().ageGyr()).distinct().sorted().toList();
         List<TransientWindow> windows = mine.stream().filter(r -> r.transientCore() != null)
                 .map(r -> new TransientWindow(r.slice().zInit(), r.slice().ageGyr(), r.transientCore())).toList();
-        return new TransitionAgeTrendData(physics, ages, zs, series, windows);
+        return new TransitionAgeTrendData(physics, ages, zs, series, windows, coolCoreCaveats(mine));
+    }
+
+    /**
+     * One sentence naming the core onsets above which the lowest cored stars burn too cool for the CNO cycle
+     * ({@link TransitionFinder#notesCoolCores}): the chart's "core in every star above" line dips there (the demo at
+     * 150 Myr: 0.381 and 0.420 Msun against ~1.1 at the other ages), and a reader takes the dip for CNO cores.
+     */
+    static List<String> coolCoreCaveats(List<TransitionRow> rows) {
+        List<String> at = rows.stream().filter(r -> r.convCoreOnset().found())
+                .filter(r -> TransitionFinder.notesCoolCores(r.notes()))
+                .sorted(Comparator.comparingDouble((TransitionRow r) -> r.slice().ageGyr())
+                        .thenComparingDouble(r -> r.slice().zInit()))
+                .map(r -> String.format(java.util.Locale.ROOT, "%.3f (Z = %s, %s)", r.convCoreOnset().massMsun(),
+                        SliceLabels.number(r.slice().zInit()), SliceLabels.age(r.slice().ageGyr())))
+                .toList();
+        if (at.isEmpty()) {
+            return List.of();
+        }
+        return List.of("Cores from " + String.join(", ", at) + " Msun up: the lowest of them burn below 12 MK, "
+                + "too cool for the CNO cycle (3He-driven); see the notes of transitions.csv.");
     }
 
     private static void addAll(List<TransitionAgeTrendData.Series> out, TransitionMarker.Kind kind,

@@ -13,15 +13,23 @@ import org.convgrid.plotting.zones.TransitionMarker;
  * @param metallicities every Z of these slices, increasing
  * @param series one series per (transition, Z, method), Z increasing, fully convective limit first
  * @param windows the transient core windows of these slices
+ * @param caveats sentences the chart prints beside the plot about what some of its values mean
  */
 public record TransitionAgeTrendData(PhysicsKey physics, List<Double> ages, List<Double> metallicities,
-                                     List<Series> series, List<TransientWindow> windows) {
+                                     List<Series> series, List<TransientWindow> windows, List<String> caveats) {
 
     public TransitionAgeTrendData {
         ages = List.copyOf(ages);
         metallicities = List.copyOf(metallicities);
         series = List.copyOf(series);
         windows = List.copyOf(windows);
+        caveats = List.copyOf(caveats);
+    }
+
+    /** Data without caveats. */
+    public TransitionAgeTrendData(PhysicsKey physics, List<Double> ages, List<Double> metallicities,
+                                  List<Series> series, List<TransientWindow> windows) {
+        this(physics, ages, metallicities, series, windows, List.of());
     }
 
     /**

@@ -63,7 +63,11 @@ public final class TransitionAgeTrendRenderer {
                         + SliceLabels.values(data.metallicities()), method.subtitle(data.physics().describe()),
                 AgeAxisTitle.of(origin, unit) + (log ? " (logarithmic)" : ""), "transition mass M / M\u2609");
         ChartStyle.legendRight(chart);
-        ChartNotes.addRightOfPlot(chart, data.metallicities().size() > 1 ? List.of(NUDGE_NOTE) : List.of());
+        List<String> notes = new java.util.ArrayList<>(data.caveats());
+        if (data.metallicities().size() > 1) {
+            notes.add(NUDGE_NOTE);
+        }
+        ChartNotes.addRightOfPlot(chart, notes);
         List<Double> ages = data.ages().stream().map(unit::fromGyr).toList();
         double first = ages.isEmpty() ? 0.0 : ages.get(0);
         double last = ages.isEmpty() ? 1.0 : ages.get(ages.size() - 1);

@@ -38,6 +38,23 @@ class TransitionAgeTrendTest {
     }
 
     @Test
+    void onsetsAboveCoresTooCoolForTheCnoCycleGetACaveat() {
+        List<CatalogueRow> rows = TestRuns.demoRows();
+        List<TransitionRow> plain = TransitionFinder.withDefaults().find(rows);
+        assertThat(TransitionAgeTrend.build(PhysicsKey.of(rows.get(0)), plain).caveats()).isEmpty();
+        // the note TransitionFinder writes for a young slice's 3He-driven cores, given to one slice with an onset
+        TransitionRow onset = plain.stream().filter(t -> t.convCoreOnset().found()).findFirst().orElseThrow();
+        List<TransitionRow> noted = plain.stream().map(t -> t != onset ? t
+                : new TransitionRow(t.slice(), t.yInit(), t.fullyConvective(), t.convCoreOnset(), t.transientCore(),
+                        t.method(), t.toleranceMsun(), "the cores at 0.4-0.8 Msun sit in centres below 12 MK, "
+                        + TransitionFinder.COOL_CORES_WORDS + ": out-of-equilibrium burning drives them")).toList();
+        List<String> caveats = TransitionAgeTrend.build(PhysicsKey.of(rows.get(0)), noted).caveats();
+        assertThat(caveats).hasSize(1);
+        assertThat(caveats.get(0)).startsWith("Cores from " + String.format(java.util.Locale.ROOT, "%.3f",
+                onset.convCoreOnset().massMsun())).contains("too cool for the CNO cycle");
+    }
+
+    @Test
     void refinedAndGridValuesAreNeverOneSeries() {
         List<CatalogueRow> rows = TestRuns.demoRows();
         List<TransitionRow> grid = TransitionFinder.withDefaults().find(rows);
