@@ -29,7 +29,7 @@ public final class TransitionTrend {
         List<Double> zs = mine.stream().map(r -> r.slice().zInit()).distinct().sorted().toList();
         List<TransientWindow> windows = mine.stream().filter(r -> r.transientCore() != null)
                 .map(r -> new TransientWindow(r.slice().zInit(), r.slice().ageGyr(), r.transientCore())).toList();
-        return new TransitionTrendData(physics, zs, series, windows);
+        return new TransitionTrendData(physics, zs, series, windows, TransitionAgeTrend.coolCoreCaveats(mine));
     }
 
     private static void addAll(List<TransitionTrendData.Series> out, TransitionMarker.Kind kind,

@@ -12,14 +12,22 @@ import org.convgrid.plotting.zones.TransitionMarker;
  * @param metallicities every Z of these slices, increasing (including those where no transition was found)
  * @param series one series per (transition, age, method), ages increasing, fully convective limit first
  * @param windows the transient core windows of these slices
+ * @param caveats sentences the chart prints beside the plot about what some of its values mean
  */
 public record TransitionTrendData(PhysicsKey physics, List<Double> metallicities, List<Series> series,
-                                  List<TransientWindow> windows) {
+                                  List<TransientWindow> windows, List<String> caveats) {
 
     public TransitionTrendData {
         metallicities = List.copyOf(metallicities);
         series = List.copyOf(series);
         windows = List.copyOf(windows);
+        caveats = List.copyOf(caveats);
+    }
+
+    /** Data without caveats. */
+    public TransitionTrendData(PhysicsKey physics, List<Double> metallicities, List<Series> series,
+                               List<TransientWindow> windows) {
+        this(physics, metallicities, series, windows, List.of());
     }
 
     /**

@@ -47,7 +47,11 @@ public final class TransitionTrendRenderer {
                 method.subtitle(data.physics().describe()), "initial metal mass fraction Z",
                 "transition mass M / M\u2609");
         ChartStyle.legendRight(chart);
-        ChartNotes.addRightOfPlot(chart, nudgeNote(data).isEmpty() ? List.of() : List.of(nudgeNote(data)));
+        List<String> notes = new java.util.ArrayList<>(data.caveats());
+        if (!nudgeNote(data).isEmpty()) {
+            notes.add(nudgeNote(data));
+        }
+        ChartNotes.addRightOfPlot(chart, notes);
         double zMin = data.metallicities().isEmpty() ? 0.001 : data.metallicities().get(0) / Z_PAD;
         double top = data.series().stream().flatMap(s -> s.points().stream())
                 .mapToDouble(p -> p.bracket() == null ? p.massMsun() : p.bracket().hi()).max().orElse(1.0);

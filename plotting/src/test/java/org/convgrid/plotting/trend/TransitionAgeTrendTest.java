@@ -52,6 +52,9 @@ class TransitionAgeTrendTest {
         assertThat(caveats).hasSize(1);
         assertThat(caveats.get(0)).startsWith("Cores from " + String.format(java.util.Locale.ROOT, "%.3f",
                 onset.convCoreOnset().massMsun())).contains("too cool for the CNO cycle");
+        // the chart against Z says the same
+        assertThat(TransitionTrend.build(PhysicsKey.of(rows.get(0)), noted).caveats()).isEqualTo(caveats);
+        assertThat(TransitionTrend.build(PhysicsKey.of(rows.get(0)), plain).caveats()).isEmpty();
     }
 
     @Test
