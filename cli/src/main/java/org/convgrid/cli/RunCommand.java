@@ -171,9 +171,12 @@ final class RunCommand implements Callable<Integer> {
                     ProgressReporter refinementReporter = null;
                     if (!quiet) {
                         // the refinement can take longer than the sweep (the demo: 25 s after 14 s): say what is
-                        // happening and roughly for how long, then count its new models as the sweep counts its own
-                        err.println("convgrid: " + refiningLine(file.spec(), n));
-                        err.flush();
+                        // happening and roughly for how long, then count its new models as the sweep counts its own;
+                        // a grid of one mass has no bracket, and its summary says "nothing to refine" alone
+                        if (file.spec().massesMsun().size() > 1) {
+                            err.println("convgrid: " + refiningLine(file.spec(), n));
+                            err.flush();
+                        }
                         refinementReporter = new ProgressReporter(err, context.terminal(), System::nanoTime, n,
                                 "new model");
                     }

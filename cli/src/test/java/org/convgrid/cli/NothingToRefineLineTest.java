@@ -30,5 +30,7 @@ class NothingToRefineLineTest {
         assertThat(done.out()).contains("transitions.csv: nothing to refine (the grid has one mass, so no two models "
                 + "bracket a transition)").doesNotContain("0 new models");
         assertThat(done.err()).doesNotContain("java.", "Exception");
+        // and nothing announces a refinement that cannot happen
+        assertThat(done.err()).doesNotContain("refining the transition masses");
     }
 }
