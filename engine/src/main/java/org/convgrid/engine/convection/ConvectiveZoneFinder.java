@@ -98,6 +98,25 @@ public final class ConvectiveZoneFinder {
                 surfaceSkinMassFraction, 0.0, 0.5, "");
     }
 
+    /**
+     * Whether a zone whose top lies at m/M = {@code outerMassFraction} reaches the surface: the mass above it is at
+     * most the surface skin (the few radiative points of the atmosphere).
+     */
+    public static boolean reachesSurface(double outerMassFraction, double surfaceSkinMassFraction) {
+        return 1.0 - outerMassFraction <= surfaceSkinMassFraction;
+    }
+
+    /**
+     * Whether the outermost zone is a convective envelope: it reaches the surface ({@link #reachesSurface}) and holds
+     * at least {@code minEnvelopeMassFraction} of the mass (a thinner surface zone, such as the hydrogen-ionisation
+     * layer of an A star, is a zone but not an envelope). The one rule of the catalogue and the track files.
+     */
+    public static boolean isEnvelope(ConvectiveZone outermost, double surfaceSkinMassFraction,
+                                     double minEnvelopeMassFraction) {
+        return reachesSurface(outermost.outerMassFraction(), surfaceSkinMassFraction)
+                && outermost.outerMassFraction() - outermost.innerMassFraction() >= minEnvelopeMassFraction;
+    }
+
     /** The convective structure of a profile. */
     public ConvectiveStructure find(ZoneProfile profile) {
         ProfileView p = new ProfileView(profile);
@@ -119,8 +138,7 @@ public final class ConvectiveZoneFinder {
         ConvectiveZone outermost = zones.get(zones.size() - 1);
         boolean startsAtCentre = spans.get(0)[0] == 0;
         boolean hasCore = startsAtCentre && innermost.outerMassFraction() > minCoreMassFraction;
-        boolean hasEnvelope = 1.0 - outermost.outerMassFraction() <= surfaceSkinMassFraction
-                && outermost.outerMassFraction() - outermost.innerMassFraction() >= minEnvelopeMassFraction;
+        boolean hasEnvelope = isEnvelope(outermost, surfaceSkinMassFraction, minEnvelopeMassFraction);
         int[] envSpan = spans.get(spans.size() - 1);
         if (hasEnvelope && startsAtCentre && zones.size() == 1) {
             return new ConvectiveStructure(zones, StructureClass.FULLY_CONVECTIVE, 1.0, 0.0, 0.0,

@@ -68,8 +68,8 @@ public record ExponentialOvershoot(double f) implements Overshoot {
             if (k > 0) {
                 boundary(previous, k - 1, -1.0, alpha, f, d);
             }
-            if (end < n - 1 && 1.0 - previous.mass(end) / previous.mass(n - 1)
-                    > ConvectiveZoneFinder.DEFAULT_SURFACE_SKIN_MASS_FRACTION) {
+            if (end < n - 1 && !ConvectiveZoneFinder.reachesSurface(previous.mass(end) / previous.mass(n - 1),
+                    ConvectiveZoneFinder.DEFAULT_SURFACE_SKIN_MASS_FRACTION)) {
                 boundary(previous, end, 1.0, alpha, f, d);
             }
         });

@@ -96,18 +96,10 @@ public final class TrackWriter {
         }
     }
 
-    /**
-     * The outermost zone when it is a convective envelope by the catalogue's rules ({@link ConvectiveZoneFinder}):
-     * its top within {@link ConvectiveZoneFinder#DEFAULT_SURFACE_SKIN_MASS_FRACTION} of the surface and its mass at
-     * least {@link ConvectiveZoneFinder#DEFAULT_MIN_ENVELOPE_MASS_FRACTION}; null otherwise. A thinner surface zone
-     * (the hydrogen-ionisation layer of an A or late-B star) is in the zone table but is not an envelope.
-     */
+    /** The outermost zone when it is a convective envelope by the catalogue's rule; null otherwise. */
     private static ConvectiveZone envelope(ConvectiveZone outermost) {
-        boolean reachesSurface = outermost.outerMassFraction()
-                >= 1.0 - ConvectiveZoneFinder.DEFAULT_SURFACE_SKIN_MASS_FRACTION;
-        boolean massive = outermost.outerMassFraction() - outermost.innerMassFraction()
-                >= ConvectiveZoneFinder.DEFAULT_MIN_ENVELOPE_MASS_FRACTION;
-        return reachesSurface && massive ? outermost : null;
+        return ConvectiveZoneFinder.isEnvelope(outermost, ConvectiveZoneFinder.DEFAULT_SURFACE_SKIN_MASS_FRACTION,
+                ConvectiveZoneFinder.DEFAULT_MIN_ENVELOPE_MASS_FRACTION) ? outermost : null;
     }
 
     private static double clamp(double x) {
