@@ -29,6 +29,7 @@ import org.convgrid.survey.TrackFiles;
 import org.convgrid.survey.parallel.ParallelWork;
 import org.convgrid.survey.refine.RefinementProgress;
 import org.convgrid.survey.ProfileFiles;
+import org.convgrid.engine.batch.ModelSink;
 import org.convgrid.engine.batch.StarTrackSink;
 import org.convgrid.survey.refine.TransitionRefiner;
 import org.convgrid.survey.refine.TransitionTables;
@@ -123,9 +124,8 @@ final class RunCommand implements Callable<Integer> {
         SweepInterruption interruption = new SweepInterruption();
         TrackFiles tracks = new TrackFiles(dir.layout(), interruption);
         ProfileFiles profiles = file.spec().profiles() ? new ProfileFiles(dir.layout()) : null;
-        ChunkSolver solver = profiles != null
-                ? context.solvers().solverFor(file.spec(), evolves ? tracks : StarTrackSink.NONE, profiles)
-                : evolves ? context.solvers().solverFor(file.spec(), tracks) : context.solvers().solverFor(file.spec());
+        ChunkSolver solver = context.solvers().solverFor(file.spec(), evolves ? tracks : StarTrackSink.NONE,
+                profiles != null ? profiles : ModelSink.NONE);
         GridRun runner = new GridRun(ToolVersion.current(), ToolVersion.commit(), Clock.tickSeconds(java.time.ZoneOffset.UTC));
         try (RunLock lock = RunLock.acquire(dir.root())) {
             Locks.reportStale(lock, parent.err());
@@ -173,7 +173,7 @@ final class RunCommand implements Callable<Integer> {
                         // the refinement can take longer than the sweep (the demo: 25 s after 14 s): say what is
                         // happening and roughly for how long, then count its new models as the sweep counts its own;
                         // a grid of one mass has no bracket, and its summary says "nothing to refine" alone
-                        if (file.spec().massesMsun().size() > 1) {
+                        if (!oneMass(file.spec())) {
                             err.println("convgrid: " + refiningLine(file.spec(), n));
                             err.flush();
                         }
@@ -225,13 +225,17 @@ final class RunCommand implements Callable<Integer> {
     static String refinedLine(TransitionTables.Update refined, GridSpec grid, double seconds) {
         String tolerance = MessageNumbers.format(grid.transitions().toleranceMsun()) + " Msun";
         if (refined.added().isEmpty()) {
-            long masses = grid.massesMsun().stream().distinct().count();
-            return "nothing to refine (" + (masses < 2 ? "the grid has one mass, so no two models bracket a transition"
+            return "nothing to refine (" + (oneMass(grid) ? "the grid has one mass, so no two models bracket a transition"
                     : "no bracket wider than " + tolerance) + ")";
         }
         long failedNew = refined.added().stream().filter(o -> o.status() != ModelStatus.OK).count();
         return "transitions refined to " + tolerance + " with " + Counts.of(refined.added().size(), "new model")
                 + (failedNew > 0 ? " (" + failedNew + " not ok)" : "") + " in " + Durations.describe(seconds);
+    }
+
+    /** Whether the grid has a single mass (its masses are strictly increasing): no two models bracket anything. */
+    static boolean oneMass(GridSpec grid) {
+        return grid.massesMsun().size() < 2;
     }
 
     /** The line said before the transitions are refined: the tolerance, the expected work, how to skip it. */
