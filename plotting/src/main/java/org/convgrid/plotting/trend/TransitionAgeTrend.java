@@ -51,8 +51,9 @@ public final class TransitionAgeTrend {
         if (at.isEmpty()) {
             return List.of();
         }
-        return List.of("Cores from " + String.join(", ", at) + " Msun up: the lowest of them burn below 12 MK, "
-                + "too cool for the CNO cycle (3He-driven); see the notes of transitions.csv.");
+        return List.of("Cores from " + String.join(", ", at) + " Msun up: the lowest of them burn below "
+                + Math.round(TransitionFinder.COOL_CORE_CENTRAL_T / 1e6) + " MK, " + TransitionFinder.COOL_CORES_WORDS
+                + " (3He-driven); see the notes of transitions.csv.");
     }
 
     private static void addAll(List<TransitionAgeTrendData.Series> out, TransitionMarker.Kind kind,
