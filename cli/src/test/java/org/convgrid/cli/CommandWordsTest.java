@@ -37,10 +37,10 @@ class CommandWordsTest {
 
     @Test
     void starProfileHelpNamesEveryProfileColumnInTheFileOrder() {
-        // the help had listed the columns by hand and fell behind when mu, he3_frac and brunt_n2_cgs came
+        // the help had listed the columns by hand and fell behind when mu, he3_frac and buoyancy_n2_cgs came
         String help = help("star", "--help");
         assertThat(help).contains(String.join(", ", org.convgrid.output.profile.ProfileColumns.HEADER));
-        assertThat(help).contains("mu", "he3_frac", "brunt_n2_cgs");
+        assertThat(help).contains("mu", "he3_frac", "buoyancy_n2_cgs");
     }
 
     @Test

@@ -76,11 +76,11 @@ class StarCommandTest {
         // N^2 is written at every point; radiative points are stable (N^2 > 0), and the innermost point, at
         // m/M 1e-6, is near the centre's limit N^2 -> 0 (Unno et al. 1989, "Nonradial Oscillations of Stars",
         // from memory)
-        assertThat(shells).allSatisfy(s -> assertThat(s.bruntSquared()).isFinite());
-        assertThat(shells).filteredOn(s -> !s.convective()).allSatisfy(s -> assertThat(s.bruntSquared()).isPositive());
-        double interiorPeak = shells.stream().filter(s -> s.radiusFrac() < 0.5).mapToDouble(s -> s.bruntSquared())
+        assertThat(shells).allSatisfy(s -> assertThat(s.buoyancySquared()).isFinite());
+        assertThat(shells).filteredOn(s -> !s.convective()).allSatisfy(s -> assertThat(s.buoyancySquared()).isPositive());
+        double interiorPeak = shells.stream().filter(s -> s.radiusFrac() < 0.5).mapToDouble(s -> s.buoyancySquared())
                 .max().orElseThrow();
-        assertThat(centre.bruntSquared()).isLessThan(0.01 * interiorPeak);
+        assertThat(centre.buoyancySquared()).isLessThan(0.01 * interiorPeak);
     }
 
     @Test

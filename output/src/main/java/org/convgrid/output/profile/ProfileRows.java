@@ -18,7 +18,7 @@ public final class ProfileRows {
         int n = p.size();
         double mass = p.mass(n - 1);
         double radius = p.radius(n - 1);
-        double[] bruntSquared = BuoyancyFrequency.squaredOf(model);
+        double[] buoyancySquared = BuoyancyFrequency.squaredOf(model);
         List<ProfileRow> rows = new ArrayList<>(n);
         for (int k = 0; k < n; k++) {
             EosState eos = p.eosState(k);
@@ -27,7 +27,7 @@ public final class ProfileRows {
                     p.density(k), p.luminosity(k), p.opacity(k), p.eps(k), p.nabla(k), p.nablaAd(k), p.nablaRad(k),
                     p.convective(k), p.convectiveVelocity(k), p.radius(k), gamma1,
                     Math.sqrt(gamma1 * p.pressure(k) / p.density(k)), p.hydrogen(k), eos.mu(),
-                    model.state().composition(k).he3(), bruntSquared[k]));
+                    model.state().composition(k).he3(), buoyancySquared[k]));
         }
         return rows;
     }

@@ -29,7 +29,7 @@ class ProfileRoundTripTest {
                 + "1.25,2.9e-05,-0.00032");
         List<ProfileRow> back = ProfileReader.read(new StringReader(out.toString()));
         assertThat(back.get(0)).isEqualTo(shells.get(0));
-        assertThat(back.get(1).bruntSquared()).isEqualTo(-3.2e-4);
+        assertThat(back.get(1).buoyancySquared()).isEqualTo(-3.2e-4);
         assertThat(back.get(1).helium3()).isEqualTo(2.9e-5);
         assertThat(back.get(1).mu()).isEqualTo(1.25);
         assertThat(back.get(1).luminosity()).isCloseTo(Constants.L_SUN, within(1e-12 * Constants.L_SUN));
@@ -44,12 +44,12 @@ class ProfileRoundTripTest {
         assertThat(centre.temperature()).isEqualTo(1.57e7);
         assertThat(centre.gamma1()).isNaN();
         assertThat(centre.soundSpeed()).isNaN();
-        assertThat(centre.bruntSquared()).isNaN();
+        assertThat(centre.buoyancySquared()).isNaN();
     }
 
     @Test
     void aProfileWrittenBeforeTheBuoyancyColumnsKeepsItsAcousticOnesAndReadsTheNewOnesNaN() throws IOException {
-        // the header of the profiles written between radius_cm and brunt_n2_cgs
+        // the header of the profiles written between radius_cm and buoyancy_n2_cgs
         List<String> header = ProfileColumns.HEADER.subList(0, ProfileColumns.HEADER.indexOf(ProfileColumns.MU));
         String older = String.join(",", header) + "\n"
                 + "0.0,0.0,2.34e+17,1.57e+07,150.0,0.0,1.2,17.5,0.39,0.4,0.38,0,0.0,0.0,1.66,5.1e+07,0.35\n";
@@ -59,6 +59,6 @@ class ProfileRoundTripTest {
         assertThat(centre.hydrogen()).isEqualTo(0.35);
         assertThat(centre.mu()).isNaN();
         assertThat(centre.helium3()).isNaN();
-        assertThat(centre.bruntSquared()).isNaN();
+        assertThat(centre.buoyancySquared()).isNaN();
     }
 }
