@@ -504,7 +504,8 @@ public final class MainSequenceEvolver {
             }
         }
         MassMesh mesh = start.state().mesh();
-        boolean[] mixed = physics.overshoot().mixedPoints(mesh::mass, start.convective(), previous.profile());
+        boolean[] mixed = AtmosphereMixing.joined(mesh,
+                physics.overshoot().mixedPoints(mesh::mass, start.convective(), previous.profile()));
         // the light elements' rates in the step's zones (youngLightRates, startOfStepLightRates), before the
         // burning, which takes them from here instead of evaluating the network once more per point for them
         Composition[] startComp = start.state().compositions();
@@ -662,7 +663,7 @@ public final class MainSequenceEvolver {
         // the pressures, energies and equation-of-state states, which the rates do not need)
         StellarProfile p = end.profile();
         MassMesh mesh = end.state().mesh();
-        boolean[] mixed = physics.overshoot().mixedPoints(mesh::mass, p.convectiveFlags(), p);
+        boolean[] mixed = AtmosphereMixing.joined(mesh, physics.overshoot().mixedPoints(mesh::mass, p.convectiveFlags(), p));
         Composition[] comp = end.state().compositions();
         LightElementRates atEnd = LightElementRates.of(physics.nuclear(), PointCells.masses(mesh), mixed, comp,
                 p.densities(), p.temperatures());

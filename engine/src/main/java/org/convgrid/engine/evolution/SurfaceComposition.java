@@ -9,11 +9,10 @@ import org.convgrid.engine.structure.StellarProfile;
 
 /**
  * The composition seen at the surface: that of the convective envelope when there is one, else that of the
- * outermost point. Above a convective envelope the mesh keeps a few radiative points of the atmosphere, holding
- * ~1e-10 of the mass, which convective mixing in this engine does not reach; their birth composition is not what
- * a spectrum would show, since any overshoot at the top of the envelope mixes such a thin layer at once (common
- * practice: surface abundances are those of the convective envelope). The envelope's composition is read at the
- * point nearest its middle in mass. Stateless.
+ * outermost point (common practice: surface abundances are those of the convective envelope). The envelope's
+ * composition is read at the point nearest its middle in mass: the radiative atmosphere points above it hold it
+ * too when its top reaches the surface skin ({@link AtmosphereMixing}), but an outermost zone whose top lies
+ * between m/M {@value #ENVELOPE_TOP} and the skin still counts as the envelope here. Stateless.
  */
 public final class SurfaceComposition {
 

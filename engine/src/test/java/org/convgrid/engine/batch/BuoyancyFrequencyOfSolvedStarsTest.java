@@ -9,6 +9,7 @@ import org.convgrid.engine.physics.eos.EosState;
 import org.convgrid.engine.request.Age;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.PhysicsOptions;
+import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.BuoyancyFrequency;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.structure.StellarProfile;
@@ -69,6 +70,31 @@ class BuoyancyFrequencyOfSolvedStarsTest {
         assertThat(peakMicrohertz).isBetween(380.0, 520.0);
         // non-regression: 443.6 uHz at r/R 0.095 (measured 2026-12-04)
         assertThat(peakMicrohertz).isCloseTo(443.6, within(1.0));
+    }
+
+    @Test
+    void theAtmosphereAboveTheEnvelopeHoldsTheEnvelopesCompositionAndIsStable() {
+        StellarModel sun = star(1.0, 4.57);
+        StellarProfile p = sun.profile();
+        double[] n2 = BuoyancyFrequency.squaredOf(sun);
+        int last = p.size() - 1;
+        int top = last;
+        while (!p.convective(top)) {
+            top--;
+        }
+        assertThat(top).as("radiative atmosphere points above the envelope").isLessThan(last);
+        // surface abundances are those of the convective envelope (common practice; Kippenhahn, Weigert & Weiss
+        // 2012, ch. 30): 3He made in the envelope's lower layers over 4.57 Gyr reaches the photosphere (measured
+        // 7.68e-5 throughout, against 3.47e-5 at birth, which the atmosphere kept before it was mixed)
+        Composition envelope = sun.state().composition(top);
+        for (int k = top + 1; k <= last; k++) {
+            Composition c = sun.state().composition(k);
+            assertThat(c.he3()).as("3He at point %d", k).isEqualTo(envelope.he3());
+            assertThat(c.h1()).as("hydrogen at point %d", k).isEqualTo(envelope.h1());
+            // radiative and of uniform composition: stable, N^2 > 0 (Unno et al. 1989, from memory)
+            assertThat(n2[k]).as("N^2 at point %d", k).isPositive();
+        }
+        assertThat(envelope.he3()).isGreaterThan(1.5 * 3.47e-5);
     }
 
     @Test
