@@ -33,6 +33,11 @@ public final class ProfileColumns {
     public static final String HE3_FRAC = "he3_frac";
     /** Squared buoyancy (Brunt-Vaisala) frequency N^2, s^-2; negative where superadiabatic. */
     public static final String BUOYANCY_N2_CGS = "buoyancy_n2_cgs";
+    /**
+     * (M - m)/M, the mass above the shell over the star's: mass_frac, written to seven digits, reads 1 over the
+     * outer few per cent of the radius, where seismic work needs the mass coordinate; this one keeps its digits there.
+     */
+    public static final String EXTERIOR_MASS_FRAC = "exterior_mass_frac";
 
     /** What separates the names in {@link #HEADER_NAMED}. */
     private static final String NAME_SEPARATOR = ", ";
@@ -47,7 +52,7 @@ public final class ProfileColumns {
             + NABLA + NAME_SEPARATOR + NABLA_AD + NAME_SEPARATOR + NABLA_RAD + NAME_SEPARATOR + CONVECTIVE
             + NAME_SEPARATOR + CONV_VELOCITY_CGS + NAME_SEPARATOR + RADIUS_CM + NAME_SEPARATOR + GAMMA1
             + NAME_SEPARATOR + SOUND_SPEED_CGS + NAME_SEPARATOR + H_FRAC + NAME_SEPARATOR + MU + NAME_SEPARATOR
-            + HE3_FRAC + NAME_SEPARATOR + BUOYANCY_N2_CGS;
+            + HE3_FRAC + NAME_SEPARATOR + BUOYANCY_N2_CGS + NAME_SEPARATOR + EXTERIOR_MASS_FRAC;
 
     /** The header, in order: {@link #HEADER_NAMED}, the one list of the columns. */
     public static final List<String> HEADER = List.of(HEADER_NAMED.split(NAME_SEPARATOR));
@@ -57,7 +62,7 @@ public final class ProfileColumns {
      * lack it, and read it as NaN.
      */
     public static final List<String> OPTIONAL = List.of(RADIUS_CM, GAMMA1, SOUND_SPEED_CGS, H_FRAC, MU, HE3_FRAC,
-            BUOYANCY_N2_CGS);
+            BUOYANCY_N2_CGS, EXTERIOR_MASS_FRAC);
 
     /** The columns every readable profile has: all but the {@link #OPTIONAL} ones. */
     public static final List<String> REQUIRED = HEADER.subList(0, HEADER.size() - OPTIONAL.size());

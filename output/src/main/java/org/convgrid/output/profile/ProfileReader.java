@@ -45,7 +45,8 @@ public final class ProfileReader {
                             optional(r, present, ProfileColumns.SOUND_SPEED_CGS),
                             optional(r, present, ProfileColumns.H_FRAC), optional(r, present, ProfileColumns.MU),
                             optional(r, present, ProfileColumns.HE3_FRAC),
-                            optional(r, present, ProfileColumns.BUOYANCY_N2_CGS)));
+                            optional(r, present, ProfileColumns.BUOYANCY_N2_CGS),
+                            optional(r, present, ProfileColumns.EXTERIOR_MASS_FRAC)));
                 } catch (IllegalArgumentException e) {
                     throw new OutputFormatException("profile row " + r.getRecordNumber() + ": " + e.getMessage(), e);
                 }

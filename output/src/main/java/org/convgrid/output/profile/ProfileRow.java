@@ -23,10 +23,11 @@ package org.convgrid.output.profile;
  * @param mu mean molecular weight from the equation of state
  * @param helium3 helium-3 mass fraction
  * @param buoyancySquared squared buoyancy frequency N^2, s^-2
+ * @param exteriorMassFrac (M - m)/M at the shell, kept precise near the surface where m/M rounds to 1
  */
 public record ProfileRow(double massFrac, double radiusFrac, double pressure, double temperature, double density,
                          double luminosity, double opacity, double nuclearEnergy, double nabla, double nablaAd,
                          double nablaRad, boolean convective, double convectiveVelocity, double radius,
                          double gamma1, double soundSpeed, double hydrogen, double mu, double helium3,
-                         double buoyancySquared) {
+                         double buoyancySquared, double exteriorMassFrac) {
 }

@@ -27,7 +27,8 @@ public final class ProfileRows {
                     p.density(k), p.luminosity(k), p.opacity(k), p.eps(k), p.nabla(k), p.nablaAd(k), p.nablaRad(k),
                     p.convective(k), p.convectiveVelocity(k), p.radius(k), gamma1,
                     Math.sqrt(gamma1 * p.pressure(k) / p.density(k)), p.hydrogen(k), eos.mu(),
-                    model.state().composition(k).he3(), buoyancySquared[k]));
+                    model.state().composition(k).he3(), buoyancySquared[k],
+                    model.state().mesh().exteriorFraction(k)));
         }
         return rows;
     }

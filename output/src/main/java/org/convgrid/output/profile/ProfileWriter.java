@@ -28,7 +28,7 @@ public final class ProfileWriter {
             cells.add(s.convective() ? "1" : "0");
             cells.add(CsvNumbers.format(s.convectiveVelocity()));
             for (double v : new double[] {s.radius(), s.gamma1(), s.soundSpeed(), s.hydrogen(), s.mu(), s.helium3(),
-                    s.buoyancySquared()}) {
+                    s.buoyancySquared(), s.exteriorMassFrac()}) {
                 cells.add(CsvNumbers.format(v));
             }
             printer.printRecord(cells);

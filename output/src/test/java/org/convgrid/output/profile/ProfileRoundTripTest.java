@@ -16,17 +16,17 @@ class ProfileRoundTripTest {
         // illustrative shells (centre and surface of a Sun-like model), not computed values
         List<ProfileRow> shells = List.of(
                 new ProfileRow(0.0, 0.0, 2.34e17, 1.57e7, 150.0, 0.0, 1.2, 17.5, 0.39, 0.40, 0.38, false, 0.0, 0.0,
-                        1.66, 5.1e7, 0.35, 0.86, 1.0e-6, 0.0),
+                        1.66, 5.1e7, 0.35, 0.86, 1.0e-6, 0.0, 1.0),
                 new ProfileRow(1.0, 1.0, 1.1e5, 5772.0, 2.0e-7, Constants.L_SUN, 0.35, 0.0, 0.2, 0.18, 3.5, true,
-                        1.5e5, 6.96e10, 1.6, 9.4e5, 0.74, 1.25, 2.9e-5, -3.2e-4));
+                        1.5e5, 6.96e10, 1.6, 9.4e5, 0.74, 1.25, 2.9e-5, -3.2e-4, 3.25e-11));
         StringBuilder out = new StringBuilder();
         ProfileWriter.write(shells, out);
         String[] lines = out.toString().split("\n");
         assertThat(lines[0]).isEqualTo(String.join(",", ProfileColumns.HEADER));
         assertThat(lines[1]).isEqualTo("0.0,0.0,2.34e+17,1.57e+07,150.0,0.0,1.2,17.5,0.39,0.4,0.38,0,0.0,0.0,1.66,5.1e+07,0.35,"
-                + "0.86,1.0e-06,0.0");
+                + "0.86,1.0e-06,0.0,1.0");
         assertThat(lines[2]).isEqualTo("1.0,1.0,110000.0,5772.0,2.0e-07,1.0,0.35,0.0,0.2,0.18,3.5,1,150000.0,6.96e+10,1.6,940000.0,0.74,"
-                + "1.25,2.9e-05,-0.00032");
+                + "1.25,2.9e-05,-0.00032,3.25e-11");
         List<ProfileRow> back = ProfileReader.read(new StringReader(out.toString()));
         assertThat(back.get(0)).isEqualTo(shells.get(0));
         assertThat(back.get(1).buoyancySquared()).isEqualTo(-3.2e-4);
@@ -34,6 +34,8 @@ class ProfileRoundTripTest {
         assertThat(back.get(1).mu()).isEqualTo(1.25);
         assertThat(back.get(1).luminosity()).isCloseTo(Constants.L_SUN, within(1e-12 * Constants.L_SUN));
         assertThat(back.get(1).convective()).isTrue();
+        // the surface's mass coordinate keeps its digits in (M - m)/M, not in m/M
+        assertThat(back.get(1).exteriorMassFrac()).isEqualTo(3.25e-11);
     }
 
     @Test
@@ -60,5 +62,6 @@ class ProfileRoundTripTest {
         assertThat(centre.mu()).isNaN();
         assertThat(centre.helium3()).isNaN();
         assertThat(centre.buoyancySquared()).isNaN();
+        assertThat(centre.exteriorMassFrac()).isNaN();
     }
 }
