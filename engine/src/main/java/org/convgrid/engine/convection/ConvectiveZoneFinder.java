@@ -32,11 +32,13 @@ import org.convgrid.engine.error.ConvgridException;
  * A fully convective star reports core mass fraction 1 and envelope base 0, as the catalogue requires.
  *
  * <p>Turnover times: the local time is l_m/v_c with l_m = alpha H_P, evaluated half a pressure
- * scale height above the envelope base, r = r_base + H_P(r_base)/2, as the catalogue column
+ * scale height above the envelope base, r = r_base + H_P(r_base)/2, but no higher than the envelope's radial
+ * midpoint (where the base lies near the centre, H_P there is large, and the midpoint keeps the time continuous
+ * with the fully convective star's, evaluated at R/2), as the catalogue column
  * {@code turnover_time_days} is defined (README, "Catalogue"). Gilliland 1985 (ApJ 299, 286) and Kim &amp; Demarque
  * 1996 (ApJ 457, 340) evaluate it half a mixing length above the base instead; the two points coincide for
- * alpha = 1 and differ by under one scale height for the usual alpha; H_P and v_c are linearly interpolated in r; when that point lies above the top of
- * the envelope (very thin envelopes) the envelope's radial midpoint is used. For a fully convective star there is
+ * alpha = 1 and differ by under one scale height for the usual alpha; H_P and v_c are linearly interpolated in r.
+ * For a fully convective star there is
  * no base and the local time is evaluated at r = R/2. The global time is the integral of dr/v_c across the
  * envelope (Kim &amp; Demarque 1996), from its base (the interpolated boundary, where v_c = 0) to its top. In the
  * mixing-length theory v_c^2 is proportional to the superadiabatic excess (Boehm-Vitense 1958, Z. Astrophys. 46,
@@ -152,10 +154,13 @@ public final class ConvectiveZoneFinder {
         }
         double rBase = outermost.innerRadiusFraction() * profile.totalRadius();
         double rTop = outermost.outerRadiusFraction() * profile.totalRadius();
-        double rTurn = rBase + TURNOVER_HEIGHT_SCALE_HEIGHTS * p.scaleHeightAtCrossing(envSpan[0] - 1);
-        if (rTurn > rTop) {
-            rTurn = 0.5 * (rBase + rTop);
-        }
+        // no higher than the envelope's radial midpoint: near the fully convective limit the radiative core is tiny,
+        // H_P at its edge grows without bound as g -> 0 there, and half of it reached the cool outer envelope (0.325
+        // Msun, Z = 0.02, 30 Myr, base at m/M 1.1e-3: 27.8 days, against 166 one step below the limit and 85 /
+        // 135 / 245 at 0.327 / 0.33 / 0.35 Msun); capped, the point moves to R/2, the fully convective star's, as
+        // the core vanishes, and to the midpoint of a thin envelope without the jump the old fallback made there
+        double rTurn = Math.min(rBase + TURNOVER_HEIGHT_SCALE_HEIGHTS * p.scaleHeightAtCrossing(envSpan[0] - 1),
+                0.5 * (rBase + rTop));
         return new ConvectiveStructure(zones,
                 hasCore ? StructureClass.CONV_CORE_AND_ENVELOPE : StructureClass.CONV_ENVELOPE, core,
                 outermost.innerMassFraction(), outermost.innerRadiusFraction(),

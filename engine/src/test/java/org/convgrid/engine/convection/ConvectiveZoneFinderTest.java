@@ -226,6 +226,28 @@ class ConvectiveZoneFinderTest {
     }
 
     @Test
+    void aTinyRadiativeCoreGivesTheTurnoverTimeOfTheFullyConvectiveStar() {
+        // Near the fully convective limit: H_P at the edge of a radiative core a few 1e-3 R across is of the order
+        // of the star (1.5 R here). Half of it above the base would land in the outer envelope (at 0.75 R); the
+        // point is capped at the envelope's radial midpoint, which tends to the fully convective star's R/2 as the
+        // core vanishes, so the time is continuous across the limit (catalogue definition, README "Catalogue"; v_c
+        // rises outwards here, so a point too far out gives too short a time, as in the stars that showed it)
+        DoubleUnaryOperator v = x -> 1e4 * (1 + 9 * x);
+        DoubleUnaryOperator hp = x -> 1.5 * R * (1 - x / 2);
+        double fullyConvective = finder.find(profile(uniform(2001), x -> 0.1, v, hp)).turnoverTimeLocal();
+        double previous = Double.NaN;
+        for (double qb : new double[] {0.0102, 0.0052, 0.0022}) {
+            ConvectiveStructure s = finder.find(profile(uniform(2001), x -> x - qb, v, hp));
+            assertThat(s.structureClass()).isEqualTo(StructureClass.CONV_ENVELOPE);
+            double mid = 0.5 * (qb + 1.0);
+            double expected = ALPHA * hp.applyAsDouble(mid) / v.applyAsDouble(mid);
+            assertThat(s.turnoverTimeLocal()).as("base at %s", qb).isCloseTo(expected, within(1e-9 * expected));
+            previous = s.turnoverTimeLocal();
+        }
+        assertThat(previous).isCloseTo(fullyConvective, within(0.01 * fullyConvective));
+    }
+
+    @Test
     void profileValidation() {
         double[] two = {0, 1};
         assertThatThrownBy(() -> new ZoneProfile(M, R, two, new double[] {0, 1, 2}, two, two, two, ALPHA))
