@@ -70,6 +70,10 @@ public record TransitionFinder(double coreMassFractionThreshold) {
     /** The words of the note {@link #COOL_CORE_CENTRAL_T} adds, by which a reader of the notes finds it. */
     public static final String COOL_CORES_WORDS = "too cool for the CNO cycle";
 
+    /** What drives such cores, in the notes and the charts' caveat alike. */
+    public static final String COOL_CORES_CAUSE = "out-of-equilibrium burning drives them (3He on the main sequence, "
+            + "12C before it)";
+
     /** Whether a slice's notes say that cores above its onset are too cool for the CNO cycle. */
     public static boolean notesCoolCores(String notes) {
         return notes != null && notes.contains(COOL_CORES_WORDS);
@@ -269,8 +273,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         }
         Span masses = new Span(cool.get(0).massMsun(), cool.get(cool.size() - 1).massMsun());
         notes.add("the cores at " + MassRangeText.of(masses) + " Msun sit in centres below "
-                + Math.round(COOL_CORE_CENTRAL_T / 1e6) + " MK, " + COOL_CORES_WORDS + ": out-of-equilibrium "
-                + "burning drives them (3He on the main sequence, 12C before it)");
+                + Math.round(COOL_CORE_CENTRAL_T / 1e6) + " MK, " + COOL_CORES_WORDS + ": " + COOL_CORES_CAUSE);
     }
 
     private static String timesInWords(int times) {

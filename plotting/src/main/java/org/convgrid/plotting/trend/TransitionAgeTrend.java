@@ -53,7 +53,7 @@ public final class TransitionAgeTrend {
         }
         return List.of("Cores from " + String.join(", ", at) + " Msun up: the lowest of them burn below "
                 + Math.round(TransitionFinder.COOL_CORE_CENTRAL_T / 1e6) + " MK, " + TransitionFinder.COOL_CORES_WORDS
-                + " (3He-driven); see the notes of transitions.csv.");
+                + ": " + TransitionFinder.COOL_CORES_CAUSE + "; see the notes of transitions.csv.");
     }
 
     private static void addAll(List<TransitionAgeTrendData.Series> out, TransitionMarker.Kind kind,

@@ -52,6 +52,9 @@ class TransitionAgeTrendTest {
         assertThat(caveats).hasSize(1);
         assertThat(caveats.get(0)).startsWith("Cores from " + String.format(java.util.Locale.ROOT, "%.3f",
                 onset.convCoreOnset().massMsun())).contains("too cool for the CNO cycle");
+        // a young slice's cool cores are 12C-driven before the zero-age main sequence: the caveat names both fuels
+        // (it said "3He-driven" alone, which a practitioner's review read against pre-main-sequence cores)
+        assertThat(caveats.get(0)).contains(TransitionFinder.COOL_CORES_CAUSE).doesNotContain("3He-driven");
         // the chart against Z says the same
         assertThat(TransitionTrend.build(PhysicsKey.of(rows.get(0)), noted).caveats()).isEqualTo(caveats);
         assertThat(TransitionTrend.build(PhysicsKey.of(rows.get(0)), plain).caveats()).isEmpty();
