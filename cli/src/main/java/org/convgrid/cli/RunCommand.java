@@ -126,7 +126,8 @@ final class RunCommand implements Callable<Integer> {
         ProfileFiles profiles = file.spec().profiles() ? new ProfileFiles(dir.layout()) : null;
         ChunkSolver solver = context.solvers().solverFor(file.spec(), evolves ? tracks : StarTrackSink.NONE,
                 profiles != null ? profiles : ModelSink.NONE);
-        GridRun runner = new GridRun(ToolVersion.current(), ToolVersion.commit(), Clock.tickSeconds(java.time.ZoneOffset.UTC));
+        Clock clock = Clock.tickSeconds(java.time.ZoneOffset.UTC);
+        GridRun runner = new GridRun(ToolVersion.current(), ToolVersion.commit(), clock);
         try (RunLock lock = RunLock.acquire(dir.root())) {
             Locks.reportStale(lock, parent.err());
             long start = System.nanoTime();
@@ -185,7 +186,7 @@ final class RunCommand implements Callable<Integer> {
                         refined = TransitionTables.refine(dir, finder, new TransitionRefiner(context.lines(), finder,
                                 transitions.toleranceMsun(), work, false, new RefinementProgress(
                                         refinementReporter == null ? ProgressListener.NONE : refinementReporter)),
-                                context.finishers());
+                                context.finishers(), clock);
                     } finally {
                         // an error message then starts a line of its own
                         if (refinementReporter != null) {

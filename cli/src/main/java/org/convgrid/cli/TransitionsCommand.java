@@ -3,6 +3,8 @@ package org.convgrid.cli;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Clock;
+import java.time.ZoneOffset;
 import java.util.concurrent.Callable;
 import org.convgrid.grids.words.Counts;
 import org.convgrid.grids.words.MessageNumbers;
@@ -104,7 +106,8 @@ final class TransitionsCommand implements Callable<Integer> {
                         n, "new model");
                 try {
                     update = TransitionTables.refine(dir, finder, new TransitionRefiner(context.lines(), finder,
-                            tolerance, work, allCrossings, new RefinementProgress(reporter)), context.finishers());
+                            tolerance, work, allCrossings, new RefinementProgress(reporter)), context.finishers(),
+                            Clock.tickSeconds(ZoneOffset.UTC));
                 } finally {
                     // an error message then starts a line of its own
                     reporter.finish();

@@ -63,6 +63,11 @@ class TransitionsCommandTest {
         Path dir = finishedRun("refined");
         List<TransitionRow> grid = transitions(dir);
         byte[] gridCatalogue = Files.readAllBytes(dir.resolve("catalogue.ecsv"));
+        // a sweep that ended long ago: the refinement's new models end the run later
+        Path manifestFile = dir.resolve("manifest.yaml");
+        Files.writeString(manifestFile, Files.readString(manifestFile)
+                .replaceFirst("(?m)^finished: .*$", "finished: 2020-01-01T00:00:00Z"));
+        java.time.Instant before = java.time.Instant.now().truncatedTo(java.time.temporal.ChronoUnit.SECONDS);
         CliHarness.Execution done = harness(new FakeMassLines(Set.of())).execute("transitions", "refined",
                 "--refine", "--tolerance", "0.002", "--threads", "2");
         assertThat(done.code()).as(done.err()).isEqualTo(0);
@@ -97,6 +102,8 @@ class TransitionsCommandTest {
         assertThat(added.subList(0, 10)).extracting(CatalogueRow::massMsun).isSorted();
         assertThat(RunManifestReader.read(Files.readString(dir.resolve("manifest.yaml"))).total())
                 .isEqualTo(CliHarness.GRID_MODELS + added.size());
+        // its counts include the refinement's models, so its end is the refinement's
+        assertThat(RunManifestReader.read(Files.readString(manifestFile)).finished()).isAfterOrEqualTo(before);
         assertThat(done.out()).contains("4 refined; 8 bisections, 40 new models");
     }
 
@@ -109,8 +116,11 @@ class TransitionsCommandTest {
         byte[] table = Files.readAllBytes(dir.resolve("transitions.csv"));
         List<TransitionRow> first = transitions(dir);
         int solved = lines.solved.get();
+        java.time.Instant end = RunManifestReader.read(Files.readString(dir.resolve("manifest.yaml"))).finished();
         assertThat(harness(lines).execute("transitions", "twice", "--refine").code()).isEqualTo(0);
         assertThat(lines.solved.get()).isEqualTo(solved);
+        // nothing added, so the run's end stays
+        assertThat(RunManifestReader.read(Files.readString(dir.resolve("manifest.yaml"))).finished()).isEqualTo(end);
         assertThat(Files.readAllBytes(dir.resolve("catalogue.ecsv"))).isEqualTo(catalogue);
         assertThat(Files.readAllBytes(dir.resolve("transitions.csv"))).isEqualTo(table);
 
