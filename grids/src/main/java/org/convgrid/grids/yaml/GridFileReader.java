@@ -225,11 +225,14 @@ public final class GridFileReader {
             return null;
         }
         MappingFields fields = new MappingFields(map, "transitions", TRANSITION_KEYS, reader);
+        // boxed defaults: with a primitive one, the conditional's type is primitive and a value the reader refused
+        // (null, already reported) was unboxed into a NullPointerException, an "internal error" that hid the file's
+        // other problems ('refine: maybe')
         Boolean refine = fields.has("refine") ? reader.bool(fields.value("refine"), "transitions refine")
-                : TransitionSettings.DEFAULT.refine();
+                : Boolean.valueOf(TransitionSettings.DEFAULT.refine());
         Double tolerance = fields.has("tolerance_msun")
                 ? reader.number(fields.value("tolerance_msun"), "transitions tolerance_msun")
-                : TransitionSettings.DEFAULT.toleranceMsun();
+                : Double.valueOf(TransitionSettings.DEFAULT.toleranceMsun());
         if (tolerance != null && !(tolerance > 0.0 && Double.isFinite(tolerance))) {
             reader.problem(fields.value("tolerance_msun"), GridProblemKind.OUT_OF_RANGE,
                     "transitions tolerance_msun must be a positive mass in Msun (got "

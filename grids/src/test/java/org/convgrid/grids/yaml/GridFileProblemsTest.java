@@ -122,6 +122,20 @@ class GridFileProblemsTest {
                 l -> assertThat(l).startsWith("g.yaml:2:14: "));
     }
 
+    @Test
+    void aRefineThatIsNoBooleanIsReportedWithTheFilesOtherProblems() {
+        // 'refine: maybe' was unboxed into a NullPointerException, reported as an internal error that hid the rest
+        List<GridProblem> found = problems("""
+                mass: [1.0]
+                metallicity: {z: [0.02]}
+                transitions: {refine: maybe, tolerance_msun: -1}
+                output: {profiles: perhaps}
+                """);
+        assertThat(found).filteredOn(p -> p.line() >= 3).extracting(GridProblem::line)
+                .containsExactlyInAnyOrder(3, 3, 4);
+        assertThat(found).anySatisfy(p -> assertThat(p.message()).contains("transitions refine"));
+    }
+
     private List<GridProblem> problems(String text) {
         GridFileException e = catchThrowableOfType(GridFileException.class, () -> reader.parse("broken.yaml", text));
         assertThat(e).as("expected problems in:%n%s", text).isNotNull();
