@@ -69,8 +69,10 @@ final class TransitionsCommand implements Callable<Integer> {
     boolean refine;
 
     @Option(names = "--tolerance", paramLabel = "MSUN", description = "With --refine: stop when a bracket is "
-            + "narrower than this (solar masses; default: " + DEFAULT_TOLERANCE_MSUN + ").")
-    double tolerance = DEFAULT_TOLERANCE_MSUN;
+            + "narrower than this (solar masses; default: the grid file's transitions tolerance_msun, "
+            + DEFAULT_TOLERANCE_MSUN + " unless it says otherwise, so that finishing an interrupted or merged run "
+            + "gives what a single run gives).")
+    Double tolerance;
 
     @Option(names = "--all-crossings", description = "With --refine: when a slice's structure changes back and forth "
             + "with mass, refine every crossing, not only the one the table reports (more models).")
@@ -83,12 +85,15 @@ final class TransitionsCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         CommandContext context = parent.context();
-        if (!(tolerance > 0.0 && Double.isFinite(tolerance))) {
+        if (tolerance != null && !(tolerance > 0.0 && Double.isFinite(tolerance))) {
             throw new UsageException("--tolerance must be a positive mass in Msun (got "
                     + MessageNumbers.format(tolerance) + ")");
         }
         int n = RunCommand.threads(threads);
         RunDirectory dir = new RunDirectory(context.resolve(runDirectory));
+        double gridTolerance = refine && tolerance == null ? TransitionTables.gridTolerance(dir) : Double.NaN;
+        double width = tolerance != null ? tolerance
+                : Double.isNaN(gridTolerance) ? DEFAULT_TOLERANCE_MSUN : gridTolerance;
         // the run's one core threshold, the one its structure classes were computed with
         TransitionFinder finder = TransitionFinder.withDefaults();
         long start = System.nanoTime();
@@ -106,7 +111,7 @@ final class TransitionsCommand implements Callable<Integer> {
                         n, "new model");
                 try {
                     update = TransitionTables.refine(dir, finder, new TransitionRefiner(context.lines(), finder,
-                            tolerance, work, allCrossings, new RefinementProgress(reporter)), context.finishers(),
+                            width, work, allCrossings, new RefinementProgress(reporter)), context.finishers(),
                             Clock.tickSeconds(ZoneOffset.UTC));
                 } finally {
                     // an error message then starts a line of its own

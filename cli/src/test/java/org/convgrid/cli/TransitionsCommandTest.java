@@ -108,6 +108,27 @@ class TransitionsCommandTest {
     }
 
     @Test
+    void withoutToleranceARefinementAimsAtTheGridFilesTolerance() throws Exception {
+        // what finishing a merged or interrupted run does: it must give what a single run of the grid gives, so a
+        // grid asking for 0.01 Msun is refined to 0.01, not to the command's own default of 0.002 (found by a
+        // robustness review: 112 catalogue rows instead of a single run's 82)
+        Path grid = CliHarness.writeGrid(work, "coarse.yaml", CliHarness.GRID + "transitions: {tolerance_msun: 0.01}\n");
+        FakeMassLines lines = new FakeMassLines(Set.of());
+        assertThat(harness(lines).execute("run", "--no-refine", grid.toString(), "--out", "coarse", "--quiet").code())
+                .isEqualTo(0);
+        assertThat(harness(lines).execute("transitions", "coarse", "--refine").code()).isEqualTo(0);
+        assertThat(transitions(work.resolve("coarse"))).allSatisfy(r -> assertThat(r.toleranceMsun()).isEqualTo(0.01));
+        // the same grid run in one go refines alike: same catalogue, byte for byte
+        assertThat(harness(lines).execute("run", grid.toString(), "--out", "single", "--quiet").code()).isEqualTo(0);
+        assertThat(Files.readAllBytes(work.resolve("coarse").resolve("catalogue.ecsv")))
+                .isEqualTo(Files.readAllBytes(work.resolve("single").resolve("catalogue.ecsv")));
+        // an explicit --tolerance still wins
+        assertThat(harness(lines).execute("transitions", "coarse", "--refine", "--tolerance", "0.005").code())
+                .isEqualTo(0);
+        assertThat(transitions(work.resolve("coarse"))).allSatisfy(r -> assertThat(r.toleranceMsun()).isEqualTo(0.005));
+    }
+
+    @Test
     void refiningTwiceKeepsTheAnswerAndAFinerToleranceContinuesTheIds() throws Exception {
         Path dir = finishedRun("twice");
         FakeMassLines lines = new FakeMassLines(Set.of());

@@ -208,6 +208,19 @@ public final class TransitionTables {
      * The tolerance a plain recompute states for refined rows: the one the table it replaces gave (the refinement
      * that added the models), else the grid file's; NaN when neither is known.
      */
+    /**
+     * The refinement tolerance the run's grid file asks for (transitions tolerance_msun, or its default), Msun; NaN
+     * when the directory has no manifest. The width a later refinement of the run aims at unless told otherwise, so
+     * that finishing an interrupted refinement or a merged run's gives what a single run of the grid gives.
+     */
+    public static double gridTolerance(RunDirectory dir) throws IOException {
+        if (!Files.isRegularFile(dir.manifest())) {
+            return Double.NaN;
+        }
+        RunManifest manifest = RunManifestReader.read(Files.readString(dir.manifest()));
+        return new GridFileReader().parse(manifest.gridFile(), manifest.gridText()).transitions().toleranceMsun();
+    }
+
     private static double earlierTolerance(RunDirectory dir) throws IOException {
         if (Files.isRegularFile(dir.transitions())) {
             try (Reader in = Files.newBufferedReader(dir.transitions(), StandardCharsets.UTF_8)) {
@@ -220,11 +233,7 @@ public final class TransitionTables {
                 // a table of the first layout states no tolerance: fall back on the grid file's
             }
         }
-        if (Files.isRegularFile(dir.manifest())) {
-            RunManifest manifest = RunManifestReader.read(Files.readString(dir.manifest()));
-            return new GridFileReader().parse(manifest.gridFile(), manifest.gridText()).transitions().toleranceMsun();
-        }
-        return Double.NaN;
+        return gridTolerance(dir);
     }
 
     private static void moved(String what, TransitionEstimate before, TransitionEstimate after, List<String> notes) {
