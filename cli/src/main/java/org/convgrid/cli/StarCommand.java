@@ -93,15 +93,16 @@ final class StarCommand implements Callable<Integer> {
             description = "Convective stability criterion (default ${DEFAULT-VALUE}).")
     StabilityCriterion criterion;
 
-    @Option(names = "--overshoot-hp", defaultValue = "0", paramLabel = "L",
-            description = "Overshoot length beyond every convective boundary, pressure scale heights (default "
-                    + "${DEFAULT-VALUE}): the grid key overshoot: L, or its length_hp.")
-    double overshootHp;
+    @Option(names = "--overshoot-hp", paramLabel = "L",
+            description = "Overshoot length beyond every convective boundary, pressure scale heights (default 0): the "
+                    + "grid key overshoot: L, or its length_hp.")
+    Double overshootHp;
 
-    @Option(names = "--overshoot-profile", defaultValue = "uniform", paramLabel = "uniform|decaying",
-            description = "How the overshoot mixing ends (default ${DEFAULT-VALUE}): uniform mixes fully to "
-                    + "--overshoot-hp; decaying lets it fade (e-folding length L H_P / 2), as the grid key "
-                    + "overshoot: {profile: decaying, length_hp: L}.")
+    /** Null when not given: uniform, which needs no length; a profile named without a length is an error. */
+    @Option(names = "--overshoot-profile", paramLabel = "uniform|decaying",
+            description = "How the overshoot mixing ends (default uniform): uniform mixes fully to --overshoot-hp; "
+                    + "decaying lets it fade (e-folding length L H_P / 2), as the grid key overshoot: {profile: "
+                    + "decaying, length_hp: L}. Needs --overshoot-hp, as the grid key needs its length_hp.")
     String overshootProfile;
 
     @Option(names = "--opacity-scale", defaultValue = "1", paramLabel = "S",
@@ -254,17 +255,24 @@ final class StarCommand implements Callable<Integer> {
                 throw new UsageException("--opacity-table: " + e.getMessage());
             }
         }
-        if (!(overshootHp >= 0 && Double.isFinite(overshootHp))) {
-            throw new UsageException("--overshoot-hp must be at least 0 pressure scale heights (got "
-                    + MessageNumbers.format(overshootHp) + ")");
-        }
         // the grid's words, so that star and a grid file name a profile the same way
-        String profileName = overshootProfile.strip().toLowerCase(java.util.Locale.ROOT);
+        String profileName = overshootProfile == null ? OvershootScheme.STEP.label()
+                : overshootProfile.strip().toLowerCase(java.util.Locale.ROOT);
         OvershootScheme scheme = OvershootScheme.fromLabel(profileName);
         if (scheme == null) {
             throw new UsageException("--overshoot-profile must be uniform or decaying, got '" + overshootProfile
                     + "'");
         }
-        return new PhysicsOptions(mixingLength, overshootHp, criterion, opacityScale, table, atmosphere, scheme);
+        if (overshootProfile != null && overshootHp == null) {
+            // the grid file refuses {profile: decaying} without length_hp alike; silently mixing nothing was worse
+            throw new UsageException("--overshoot-profile " + profileName + " needs --overshoot-hp L, the overshoot "
+                    + "length in pressure scale heights");
+        }
+        double length = overshootHp == null ? 0.0 : overshootHp;
+        if (!(length >= 0 && Double.isFinite(length))) {
+            throw new UsageException("--overshoot-hp must be at least 0 pressure scale heights (got "
+                    + MessageNumbers.format(length) + ")");
+        }
+        return new PhysicsOptions(mixingLength, length, criterion, opacityScale, table, atmosphere, scheme);
     }
 }

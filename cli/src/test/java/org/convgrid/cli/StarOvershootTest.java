@@ -63,6 +63,10 @@ class StarOvershootTest {
         CliHarness.Execution unknown = run("star", "--mass", "1", "--z", "0.02", "--overshoot-profile", "step");
         assertThat(unknown.code()).isEqualTo(ExitCodes.USAGE);
         assertThat(unknown.err()).contains("--overshoot-profile must be uniform or decaying, got 'step'");
+        // a profile without its length mixed nothing, silently; the grid key needs its length_hp alike
+        CliHarness.Execution lengthless = run("star", "--mass", "1", "--z", "0.02", "--overshoot-profile", "decaying");
+        assertThat(lengthless.code()).isEqualTo(ExitCodes.USAGE);
+        assertThat(lengthless.err()).contains("--overshoot-profile decaying needs --overshoot-hp");
     }
 
     private void assertSameRow(String origin, String gridOvershoot, String... starOptions) throws Exception {
