@@ -8,13 +8,15 @@ import org.snakeyaml.engine.v2.api.LoadSettings;
 
 /**
  * What the grid file says about the charts and the report, read from the grid text the manifest keeps (the grid
- * reader has validated it already): the {@code title} and the masses of {@code output: age_charts_for_masses_msun}.
+ * reader has validated it already): the {@code title}, the masses of {@code output: age_charts_for_masses_msun} and
+ * whether {@code transitions: {refine}} asks for refined transition masses.
  *
  * @param title the report's title: the grid's title, else the grid file's name, else {@code convgrid run}
  * @param ageChartMasses the masses, solar masses, whose zones-against-age charts the grid asks for; empty when it
  *     names none
+ * @param refinesTransitions whether the grid asks for its transition masses refined (the default)
  */
-public record GridChoices(String title, List<Double> ageChartMasses) {
+public record GridChoices(String title, List<Double> ageChartMasses, boolean refinesTransitions) {
 
     /** The key under {@code output:} that names the masses of the zones-against-age charts. */
     public static final String AGE_CHART_MASSES_KEY = "age_charts_for_masses_msun";
@@ -27,10 +29,11 @@ public record GridChoices(String title, List<Double> ageChartMasses) {
     /** The choices of a run; a missing manifest or an unreadable grid text gives the defaults. */
     public static GridChoices of(RunManifest manifest) {
         if (manifest == null) {
-            return new GridChoices(FALLBACK_TITLE, List.of());
+            return new GridChoices(FALLBACK_TITLE, List.of(), true);
         }
         String title = FALLBACK_TITLE + ": " + manifest.gridFile();
         List<Double> masses = List.of();
+        boolean refines = true;
         Object doc;
         try {
             doc = new Load(LoadSettings.builder().build()).loadFromString(manifest.gridText());
@@ -51,6 +54,10 @@ public record GridChoices(String title, List<Double> ageChartMasses) {
                 masses = List.of(one.doubleValue());
             }
         }
-        return new GridChoices(title, masses);
+        if (doc instanceof Map<?, ?> map && map.get("transitions") instanceof Map<?, ?> transitions
+                && transitions.get("refine") instanceof Boolean refine) {
+            refines = refine;
+        }
+        return new GridChoices(title, masses, refines);
     }
 }

@@ -15,6 +15,7 @@ import org.convgrid.output.manifest.RunManifest;
 import org.convgrid.output.manifest.UnfinishedRun;
 import org.convgrid.output.transitions.RefinedModelIds;
 import org.convgrid.output.transitions.TransitionEstimate;
+import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.plotting.DrawnMaps;
 import org.convgrid.plotting.GridChoices;
@@ -70,6 +71,7 @@ public final class ReportPage {
                 .append(Html.escape(title)).append("</title>\n<style>\n").append(ReportStyle.CSS)
                 .append("</style>\n</head>\n<body>\n<h1>").append(Html.escape(title)).append("</h1>\n");
         unfinished(b, run, runDir);
+        unrefined(b, run, runDir);
         contents(b, plan);
         b.append("<h2 id=\"run\">Run</h2>\n");
         summary(b, run);
@@ -105,6 +107,28 @@ public final class ReportPage {
                 .append(RunLayout.CATALOGUE).append(". The maps and tables below cover those models only. Continue it "
                         + "with <code>").append(Html.escape("convgrid run " + run.manifest().gridFile() + " --out "
                         + runDir.toAbsolutePath().normalize() + " --resume")).append("</code>.</p>\n"));
+    }
+
+    /**
+     * A note above everything else when a finished, whole run's grid asks for refined transition masses and
+     * transitions.csv still holds the grid's brackets (--no-refine, a refinement cut short by kill -9 or a time limit,
+     * or a merged run not yet refined): its transition masses are only as fine as the mass step. The manifest alone
+     * said "finished" (found by a robustness review).
+     */
+    private static void unrefined(StringBuilder b, RunData run, Path runDir) {
+        RunManifest m = run.manifest();
+        // a refinement turns every slice with a found bracket into method refined; a slice without one stays grid
+        boolean coarse = run.transitions().stream().anyMatch(t -> t.method() == TransitionMethod.GRID
+                && (t.fullyConvective().found() || t.convCoreOnset().found()));
+        if (m == null || m.isUnfinished() || m.shard() != null || !GridChoices.of(m).refinesTransitions() || !coarse) {
+            return;
+        }
+        b.append("<p class=\"unrefined\">The transition masses are not refined: the grid asks for refinement, but ")
+                .append(RunLayout.TRANSITIONS).append(" holds the brackets of the grid's own masses, only as fine as "
+                        + "its mass step (the run skipped the refinement with --no-refine or was stopped during it, "
+                        + "or this merged run has not been refined yet). Refine them with <code>")
+                .append(Html.escape("convgrid transitions " + runDir.toAbsolutePath().normalize() + " --refine"))
+                .append("</code>.</p>\n");
     }
 
     private static void summary(StringBuilder b, RunData run) {

@@ -17,6 +17,8 @@ final class ReportStyle {
             figcaption { font-size: 0.92em; color: #444; }
             pre { background: #f7f7f7; padding: 0.6em; overflow-x: auto; }
             .missing { color: #8a4b00; }
+            .unrefined { color: #5c3200; background: #fff1d6; border: 2px solid #c77800; padding: 0.6em 0.9em;
+                          font-weight: bold; }
             .unfinished { color: #5c3200; background: #fff1d6; border: 2px solid #c77800; padding: 0.6em 0.9em;
                           font-weight: bold; }
             h3 { font-size: 1.05em; margin-top: 1.4em; }

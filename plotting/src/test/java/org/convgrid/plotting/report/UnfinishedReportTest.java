@@ -35,6 +35,43 @@ class UnfinishedReportTest {
     }
 
     @Test
+    void aFinishedRunWhoseGridAsksForRefinementButHoldsGridBracketsSaysSo(@TempDir Path dir) throws Exception {
+        // TestRuns writes the grid's own brackets (method grid) for a grid that does not say refine: false
+        TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.2, 1.4, 5), new double[] {0.014}, new double[] {0}));
+
+        String html = Files.readString(ReportPage.write(dir));
+
+        assertThat(html).contains("<p class=\"unrefined\">The transition masses are not refined")
+                .contains("convgrid transitions " + dir.toAbsolutePath().normalize() + " --refine");
+        assertThat(html.indexOf("class=\"unrefined\"")).as("above the contents").isLessThan(html.indexOf("<h2"));
+    }
+
+    @Test
+    void refinedTransitionsOrAGridThatDoesNotRefineGetNoSuchNote(@TempDir Path dir) throws Exception {
+        Path refined = TestRuns.write(dir.resolve("refined"),
+                TestRuns.rows(TestRuns.masses(0.2, 1.4, 5), new double[] {0.014}, new double[] {0}));
+        Path table = refined.resolve("transitions.csv");
+        List<org.convgrid.output.transitions.TransitionRow> rows = org.convgrid.output.transitions.TransitionReader
+                .read(new java.io.StringReader(Files.readString(table)));
+        java.io.StringWriter out = new java.io.StringWriter();
+        org.convgrid.output.transitions.TransitionWriter.write(rows.stream().map(t -> new org.convgrid.output
+                .transitions.TransitionRow(t.slice(), t.yInit(), t.fullyConvective(), t.convCoreOnset(),
+                t.transientCore(), org.convgrid.output.transitions.TransitionMethod.REFINED, 0.002, t.notes())).toList(),
+                out);
+        Files.writeString(table, out.toString());
+        assertThat(Files.readString(ReportPage.write(refined))).doesNotContain("class=\"unrefined\"");
+
+        Path plain = TestRuns.write(dir.resolve("plain"),
+                TestRuns.rows(TestRuns.masses(0.2, 1.4, 5), new double[] {0.014}, new double[] {0}));
+        RunManifest m = RunManifestReader.read(Files.readString(plain.resolve("manifest.yaml")));
+        Files.writeString(plain.resolve("manifest.yaml"), RunManifestWriter.toYaml(new RunManifest(m.toolVersion(),
+                m.toolCommit(), m.gridFile(), m.gridText() + "transitions: {refine: false}\n", m.gridFileSha256(),
+                m.gridModelsSha256(), m.physics(), m.started(), m.finished(), m.threads(), m.shard(), m.counts(),
+                m.medianSecondsPerModel(), m.ageOrigin())));
+        assertThat(Files.readString(ReportPage.write(plain))).doesNotContain("class=\"unrefined\"");
+    }
+
+    @Test
     void aFinishedRunsReportHasNoSuchNote(@TempDir Path dir) throws Exception {
         TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.2, 1.4, 5), new double[] {0.014}, new double[] {0}));
 
