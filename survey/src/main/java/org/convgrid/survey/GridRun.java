@@ -105,6 +105,7 @@ public final class GridRun {
         }
         int removed = 0;
         if (s.force()) {
+            refuseAnotherShard(s);
             // also when the catalogue and manifest are gone: tracks or charts of an earlier run must not outlive it
             removed = dir.clear();
         }
@@ -116,6 +117,41 @@ public final class GridRun {
                 owned);
         dir.create(RunManifestWriter.toYaml(start));
         return new Plan(s, shard, new KeptCatalogue(Set.of(), true, 0), owned, started, Double.NaN, removed);
+    }
+
+    /**
+     * Refuses {@code --force} on a directory holding a shard other than the one asked for, or a shard of another
+     * grid (by its models' hash): starting over there would delete another task's results, not redo this one's.
+     * An unreadable manifest names no shard, and {@code --force} replaces it as before.
+     */
+    private static void refuseAnotherShard(Settings s) throws IOException {
+        RunDirectory dir = s.directory();
+        if (!Files.isRegularFile(dir.manifest())) {
+            return;
+        }
+        RunManifest old;
+        try {
+            old = RunManifestReader.read(Files.readString(dir.manifest()));
+        } catch (org.convgrid.output.OutputFormatException | IOException e) {
+            return;
+        }
+        if (old.shard() == null) {
+            return;
+        }
+        Shard asked = s.requestedShard() == null ? Shard.ALL : s.requestedShard();
+        String held;
+        if (!ShardChoice.parse(old.shard()).equals(asked)) {
+            held = "shard " + old.shard() + ", and this run computes "
+                    + (asked.count() == 1 ? "the whole grid" : "shard " + shard(asked));
+        } else if (!old.gridModelsSha256().equals(s.grid().modelsSha256())) {
+            held = "shard " + old.shard() + " of another grid (models_sha256 " + old.gridModelsSha256() + " vs "
+                    + s.grid().modelsSha256() + ")";
+        } else {
+            return;
+        }
+        throw new RunSetupException(dir.root() + " holds " + held + ": --force would delete that shard's results, "
+                + "so nothing was removed; choose another --out (shard K of N writes to <DIR>-shard-K-of-N), or "
+                + "remove the directory yourself if that shard is not needed");
     }
 
     private Plan resume(Settings s) throws IOException {

@@ -62,14 +62,44 @@ public final class RunDirectory {
 
     /**
      * Where a run writes when no directory is given: the grid's output directory, or for shard K of N
-     * {@code <output dir>-shard-K-of-N}, so shards of one grid never share a directory.
+     * {@code <output dir>-shard-K-of-N} ({@link #forShard}).
      *
      * @param outputDir the grid's {@code output.dir}
      * @param shard the shard, null for the whole grid
      */
     public static Path defaultPath(String outputDir, Shard shard) {
-        return Path.of(shard == null || shard.count() == 1 ? outputDir
-                : outputDir + "-shard-" + shard.index() + "-of-" + shard.count());
+        return forShard(Path.of(outputDir), shard);
+    }
+
+    /**
+     * The directory shard K of N writes to when the run is given {@code dir} (the grid's {@code output.dir} or
+     * {@code --out}): {@code <dir>-shard-K-of-N}, so that every task of a job array can run the same command line
+     * and shards of one grid never share (and so never refuse, resume or delete) one directory. A directory already
+     * named for this very shard is taken as it is, so the {@code --out} an interrupted shard names for its resume
+     * works with or without the shard given again. The whole grid (null, or 1 of 1) writes to {@code dir} itself.
+     *
+     * @param dir the directory given, normalized (its last name gets the suffix)
+     * @param shard the shard, null for the whole grid
+     * @throws RunSetupException when {@code dir} has no name to add the suffix to (a file system root)
+     */
+    public static Path forShard(Path dir, Shard shard) {
+        if (shard == null || shard.count() == 1) {
+            return dir;
+        }
+        String suffix = shardSuffix(shard);
+        Path name = dir.getFileName();
+        if (name == null || name.toString().isEmpty() || name.toString().equals(".")
+                || name.toString().equals("..")) {
+            throw new RunSetupException("cannot name shard " + shard.index() + "/" + shard.count()
+                    + "'s directory after '" + dir + "' (it becomes <directory>" + suffix + "): give --out a "
+                    + "directory with a name, such as runs/grid");
+        }
+        return name.toString().endsWith(suffix) ? dir : dir.resolveSibling(name + suffix);
+    }
+
+    /** What a shard adds to its directory's name: {@code -shard-K-of-N}. */
+    static String shardSuffix(Shard shard) {
+        return "-shard-" + shard.index() + "-of-" + shard.count();
     }
 
     /**
