@@ -86,7 +86,7 @@ final class RunCommand implements Callable<Integer> {
             + "track or model id, such as p0-z00-m000.csv), the charts in maps/ and the temporary files of writes "
             + "cut short (emptied folders go too), and says how many on stderr. Keeps the lock file "
             + RunLock.FILE_NAME + " and every file convgrid does not write. Without --force such a directory is "
-            + "refused. Refuses a directory "
+            + "refused, and so is one holding files a run writes but no catalogue or manifest. Refuses a directory "
             + "holding another shard, or another grid's shard.")
     boolean force;
 

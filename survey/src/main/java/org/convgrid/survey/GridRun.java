@@ -103,6 +103,9 @@ public final class GridRun {
             throw new RunSetupException(dir.root() + " already holds a run; add --resume to continue it or "
                     + "--force to start it over");
         }
+        if (!dir.holdsRun() && !s.force()) {
+            refuseFilesOfARun(dir);
+        }
         int removed = 0;
         if (s.force()) {
             refuseAnotherShard(s);
@@ -117,6 +120,21 @@ public final class GridRun {
                 owned);
         dir.create(RunManifestWriter.toYaml(start));
         return new Plan(s, shard, new KeptCatalogue(Set.of(), true, 0), owned, started, Double.NaN, removed);
+    }
+
+    /**
+     * Refuses a directory without catalogue and manifest that holds files a run writes: they are a user's (a
+     * zones.csv of their own) or what is left of an earlier run whose catalogue went (its life_events.csv would read
+     * as this run's), and a new run would overwrite some and leave others beside its own. Found by a review.
+     */
+    private static void refuseFilesOfARun(RunDirectory dir) throws IOException {
+        List<java.nio.file.Path> found = dir.earlierRunFiles();
+        if (!found.isEmpty()) {
+            throw new RunSetupException(dir.root() + " holds files a run writes (" + dir.describe(found) + ") but no "
+                    + RunLayout.CATALOGUE + " or " + RunLayout.MANIFEST + ", so they are yours or left by an "
+                    + "earlier run; choose another --out, or add --force to remove them and start the run there "
+                    + "(files convgrid does not write are kept)");
+        }
     }
 
     /**

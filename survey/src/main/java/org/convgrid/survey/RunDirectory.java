@@ -7,6 +7,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import java.util.Comparator;
+import java.util.List;
 import java.util.Optional;
 import java.util.stream.Stream;
 import org.convgrid.engine.batch.Shard;
@@ -123,6 +124,19 @@ public final class RunDirectory {
     public boolean holdsRun() {
         return Files.exists(catalogue()) || Files.exists(manifest())
                 || Files.exists(root().resolve(RunLayout.CATALOGUE_V1));
+    }
+
+    /**
+     * The files here that a run writes (tables, report, tracks, profiles, charts, temporary files), which
+     * {@link #clear} would remove; none in an empty directory or one holding only the user's files.
+     */
+    public List<Path> earlierRunFiles() throws IOException {
+        return EarlierRunFiles.find(layout);
+    }
+
+    /** {@link #earlierRunFiles} in a few words for a message: {@code zones.csv, report.html, 12 files in tracks/}. */
+    public String describe(List<Path> files) {
+        return EarlierRunFiles.describe(layout, files);
     }
 
     /** The catalogue's header line, with its line end, exactly as {@link CatalogueWriter} writes it. */
