@@ -64,7 +64,8 @@ final class RunCommand implements Callable<Integer> {
     Path grid;
 
     @Option(names = "--out", paramLabel = "DIR", description = {"Run directory (path; default: the grid's output.dir, "
-            + "relative to the current directory; a shard K of N without --out writes to <output.dir>-shard-K-of-N)."})
+            + "relative to the current directory). Shard K of N writes to <DIR>-shard-K-of-N, DIR being --out or "
+            + "output.dir, so every task of a job array can run the same command line."})
     Path out;
 
     @Option(names = "--threads", paramLabel = "N",
@@ -85,7 +86,8 @@ final class RunCommand implements Callable<Integer> {
             + "track or model id, such as p0-z00-m000.csv), the charts in maps/ and the temporary files of writes "
             + "cut short (emptied folders go too), and says how many on stderr. Keeps the lock file "
             + RunLock.FILE_NAME + " and every file convgrid does not write. Without --force such a directory is "
-            + "refused.")
+            + "refused, and so is one holding files a run writes but no catalogue or manifest. Refuses a directory "
+            + "holding another shard, or another grid's shard.")
     boolean force;
 
     @Option(names = "--no-refine", description = "Skip the refinement of the transition masses by bisection that "
@@ -116,8 +118,10 @@ final class RunCommand implements Callable<Integer> {
                     + "; check it with 'convgrid check' and add --yes to run it");
         }
         Shard chosen = ShardChoice.choose(shard, context.environment()).orElse(null);
-        RunDirectory dir = new RunDirectory(context.resolve(out != null ? out
-                : RunDirectory.defaultPath(file.spec().outputDir(), chosen)));
+        // a shard's directory is named for it whichever way the directory was given, so that one command line
+        // serves every task of a job array
+        RunDirectory dir = new RunDirectory(RunDirectory.forShard(context.resolve(out != null ? out
+                : Path.of(file.spec().outputDir())), chosen));
         OutputTargets.requireWritableDirectory("--out", dir.root());
         boolean evolves = file.spec().ages().evolves();
         // every catalogue row and life-events row goes through it, so that a signal stops the sweep between rows
@@ -262,8 +266,10 @@ final class RunCommand implements Callable<Integer> {
         } catch (java.io.IOException e) {
             // the operating system releases it with the process anyway
         }
+        // a shard's directory is not the --out given: name the one that holds its rows (its manifest names the shard)
         return (progressShown ? "\n" : "") + RunInterruptHook.line(left, grid.toString(),
-                out != null ? out.toString() : plan.settings().directory().root().toString(), refines);
+                out != null && plan.shard().count() == 1 ? out.toString()
+                        : plan.settings().directory().root().toString(), refines);
     }
 
     /** The thread count asked for, or the available processors. */

@@ -110,9 +110,15 @@ class ResumeTest {
         assertThat(refused.code()).isEqualTo(2);
         assertThat(refused.err()).contains("the grid's models differ from those of the run in")
                 .contains("models_sha256");
-        CliHarness.Execution shard = run("run", "--no-refine", grid.toString(), "--out", "whole", "--resume", "--shard", "1/2");
-        assertThat(shard.code()).isEqualTo(2);
-        assertThat(shard.err()).contains("holds shard 1/1 but this run asks for shard 1/2");
+        // a shard's directory is named for it, so shard 1/2 resumes (here: starts) whole-shard-1-of-2, not whole
+        CliHarness.Execution shard = run("run", "--no-refine", grid.toString(), "--out", "whole", "--resume", "--shard",
+                "1/2", "--quiet");
+        assertThat(shard.code()).as(shard.err()).isEqualTo(0);
+        assertThat(work.resolve("whole-shard-1-of-2/catalogue.ecsv")).exists();
+        CliHarness.Execution unsharded = run("run", "--no-refine", grid.toString(), "--out", "whole-shard-1-of-2",
+                "--resume", "--shard", "1/1");
+        assertThat(unsharded.code()).isEqualTo(2);
+        assertThat(unsharded.err()).contains("holds shard 1/2 but this run asks for shard 1/1");
         // an edited comment or title is not a different grid
         Path retitled = CliHarness.writeGrid(work, "retitled.yaml",
                 "# edited\n" + CliHarness.GRID.replace("Test survey", "Renamed"));

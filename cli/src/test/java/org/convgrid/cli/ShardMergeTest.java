@@ -100,7 +100,7 @@ class ShardMergeTest {
         Path other = CliHarness.writeGrid(work, "other.yaml", CliHarness.GRID.replace("to: 2.0", "to: 1.9"));
         assertThat(run("run", grid.toString(), "--shard", "1/2", "--out", "a", "--quiet").code()).isEqualTo(0);
         assertThat(run("run", other.toString(), "--shard", "2/2", "--out", "b", "--quiet").code()).isEqualTo(0);
-        CliHarness.Execution merged = run("merge", "a", "b", "--out", "merged");
+        CliHarness.Execution merged = run("merge", "a-shard-1-of-2", "b-shard-2-of-2", "--out", "merged");
         assertThat(merged.code()).isEqualTo(2);
         assertThat(merged.err()).contains("was run from another grid");
     }

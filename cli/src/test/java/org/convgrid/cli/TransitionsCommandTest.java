@@ -272,7 +272,7 @@ class TransitionsCommandTest {
         FakeMassLines lines = new FakeMassLines(Set.of());
         assertThat(harness(lines).execute("run", "--no-refine", grid.toString(), "--shard", "1/2", "--out", "s1", "--quiet").code())
                 .isEqualTo(0);
-        CliHarness.Execution shard = harness(lines).execute("transitions", "s1", "--refine");
+        CliHarness.Execution shard = harness(lines).execute("transitions", "s1-shard-1-of-2", "--refine");
         assertThat(shard.code()).isEqualTo(2);
         assertThat(shard.err()).contains("holds shard 1/2").contains("convgrid merge");
         Path dir = finishedRun("open");

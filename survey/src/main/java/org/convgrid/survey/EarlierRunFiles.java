@@ -5,9 +5,12 @@ import java.nio.file.Files;
 import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.function.Predicate;
 import java.util.stream.Stream;
+import org.convgrid.grids.words.Counts;
 import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.RunLayout;
 import org.convgrid.plotting.RunMaps;
@@ -40,17 +43,7 @@ final class EarlierRunFiles {
      *                     of the old run only in part: the message names the file)
      */
     static int remove(RunLayout layout) throws IOException {
-        List<Path> doomed = new ArrayList<>();
-        for (String name : TOP_FILES) {
-            Path file = layout.root().resolve(name);
-            if (Files.exists(file, LinkOption.NOFOLLOW_LINKS)) {
-                doomed.add(file);
-            }
-        }
-        doomed.addAll(listed(layout.root(), AtomicFiles::isTemporary));
-        doomed.addAll(listed(layout.tracks(), f -> RunLayout.isTrackFile(f) || AtomicFiles.isTemporary(f)));
-        doomed.addAll(listed(layout.profiles(), f -> RunLayout.isProfileFile(f) || AtomicFiles.isTemporary(f)));
-        doomed.addAll(listed(layout.maps(), f -> RunMaps.isChartFile(f) || AtomicFiles.isTemporary(f)));
+        List<Path> doomed = find(layout);
         for (Path file : doomed) {
             try {
                 Files.deleteIfExists(file);
@@ -62,6 +55,44 @@ final class EarlierRunFiles {
             removeIfEmpty(folder);
         }
         return doomed.size();
+    }
+
+    /**
+     * The files of the run directory that convgrid writes, which {@link #remove} would remove: the top-level tables,
+     * manifest and report, temporary files, and the track, profile and chart files in their folders.
+     */
+    static List<Path> find(RunLayout layout) throws IOException {
+        List<Path> doomed = new ArrayList<>();
+        for (String name : TOP_FILES) {
+            Path file = layout.root().resolve(name);
+            if (Files.exists(file, LinkOption.NOFOLLOW_LINKS)) {
+                doomed.add(file);
+            }
+        }
+        doomed.addAll(listed(layout.root(), AtomicFiles::isTemporary));
+        doomed.addAll(listed(layout.tracks(), f -> RunLayout.isTrackFile(f) || AtomicFiles.isTemporary(f)));
+        doomed.addAll(listed(layout.profiles(), f -> RunLayout.isProfileFile(f) || AtomicFiles.isTemporary(f)));
+        doomed.addAll(listed(layout.maps(), f -> RunMaps.isChartFile(f) || AtomicFiles.isTemporary(f)));
+        return doomed;
+    }
+
+    /**
+     * The files {@link #find} found, in a few words for a message: the top-level ones by name, those in a folder
+     * counted per folder ({@code zones.csv, report.html, 12 files in tracks/}).
+     */
+    static String describe(RunLayout layout, List<Path> files) {
+        Map<String, Integer> perFolder = new LinkedHashMap<>();
+        List<String> words = new ArrayList<>();
+        for (Path file : files) {
+            Path relative = layout.root().relativize(file);
+            if (relative.getNameCount() == 1) {
+                words.add(relative.toString());
+            } else {
+                perFolder.merge(relative.getName(0).toString(), 1, Integer::sum);
+            }
+        }
+        perFolder.forEach((folder, n) -> words.add(Counts.of(n, "file") + " in " + folder + "/"));
+        return String.join(", ", words);
     }
 
     /** The regular files of a folder (not followed when it is a link) that the filter takes; none without it. */

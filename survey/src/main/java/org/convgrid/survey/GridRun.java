@@ -103,8 +103,12 @@ public final class GridRun {
             throw new RunSetupException(dir.root() + " already holds a run; add --resume to continue it or "
                     + "--force to start it over");
         }
+        if (!dir.holdsRun() && !s.force()) {
+            refuseFilesOfARun(dir);
+        }
         int removed = 0;
         if (s.force()) {
+            refuseAnotherShard(s);
             // also when the catalogue and manifest are gone: tracks or charts of an earlier run must not outlive it
             removed = dir.clear();
         }
@@ -116,6 +120,56 @@ public final class GridRun {
                 owned);
         dir.create(RunManifestWriter.toYaml(start));
         return new Plan(s, shard, new KeptCatalogue(Set.of(), true, 0), owned, started, Double.NaN, removed);
+    }
+
+    /**
+     * Refuses a directory without catalogue and manifest that holds files a run writes: they are a user's (a
+     * zones.csv of their own) or what is left of an earlier run whose catalogue went (its life_events.csv would read
+     * as this run's), and a new run would overwrite some and leave others beside its own. Found by a review.
+     */
+    private static void refuseFilesOfARun(RunDirectory dir) throws IOException {
+        List<java.nio.file.Path> found = dir.earlierRunFiles();
+        if (!found.isEmpty()) {
+            throw new RunSetupException(dir.root() + " holds files a run writes (" + dir.describe(found) + ") but no "
+                    + RunLayout.CATALOGUE + " or " + RunLayout.MANIFEST + ", so they are yours or left by an "
+                    + "earlier run; choose another --out, or add --force to remove them and start the run there "
+                    + "(files convgrid does not write are kept)");
+        }
+    }
+
+    /**
+     * Refuses {@code --force} on a directory holding a shard other than the one asked for, or a shard of another
+     * grid (by its models' hash): starting over there would delete another task's results, not redo this one's.
+     * An unreadable manifest names no shard, and {@code --force} replaces it as before.
+     */
+    private static void refuseAnotherShard(Settings s) throws IOException {
+        RunDirectory dir = s.directory();
+        if (!Files.isRegularFile(dir.manifest())) {
+            return;
+        }
+        RunManifest old;
+        try {
+            old = RunManifestReader.read(Files.readString(dir.manifest()));
+        } catch (org.convgrid.output.OutputFormatException | IOException e) {
+            return;
+        }
+        if (old.shard() == null) {
+            return;
+        }
+        Shard asked = s.requestedShard() == null ? Shard.ALL : s.requestedShard();
+        String held;
+        if (!ShardChoice.parse(old.shard()).equals(asked)) {
+            held = "shard " + old.shard() + ", and this run computes "
+                    + (asked.count() == 1 ? "the whole grid" : "shard " + shard(asked));
+        } else if (!old.gridModelsSha256().equals(s.grid().modelsSha256())) {
+            held = "shard " + old.shard() + " of another grid (models_sha256 " + old.gridModelsSha256() + " vs "
+                    + s.grid().modelsSha256() + ")";
+        } else {
+            return;
+        }
+        throw new RunSetupException(dir.root() + " holds " + held + ": --force would delete that shard's results, "
+                + "so nothing was removed; choose another --out (shard K of N writes to <DIR>-shard-K-of-N), or "
+                + "remove the directory yourself if that shard is not needed");
     }
 
     private Plan resume(Settings s) throws IOException {

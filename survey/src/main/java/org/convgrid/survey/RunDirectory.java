@@ -7,6 +7,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import java.util.Comparator;
+import java.util.List;
 import java.util.Optional;
 import java.util.stream.Stream;
 import org.convgrid.engine.batch.Shard;
@@ -62,14 +63,44 @@ public final class RunDirectory {
 
     /**
      * Where a run writes when no directory is given: the grid's output directory, or for shard K of N
-     * {@code <output dir>-shard-K-of-N}, so shards of one grid never share a directory.
+     * {@code <output dir>-shard-K-of-N} ({@link #forShard}).
      *
      * @param outputDir the grid's {@code output.dir}
      * @param shard the shard, null for the whole grid
      */
     public static Path defaultPath(String outputDir, Shard shard) {
-        return Path.of(shard == null || shard.count() == 1 ? outputDir
-                : outputDir + "-shard-" + shard.index() + "-of-" + shard.count());
+        return forShard(Path.of(outputDir), shard);
+    }
+
+    /**
+     * The directory shard K of N writes to when the run is given {@code dir} (the grid's {@code output.dir} or
+     * {@code --out}): {@code <dir>-shard-K-of-N}, so that every task of a job array can run the same command line
+     * and shards of one grid never share (and so never refuse, resume or delete) one directory. A directory already
+     * named for this very shard is taken as it is, so the {@code --out} an interrupted shard names for its resume
+     * works with or without the shard given again. The whole grid (null, or 1 of 1) writes to {@code dir} itself.
+     *
+     * @param dir the directory given, normalized (its last name gets the suffix)
+     * @param shard the shard, null for the whole grid
+     * @throws RunSetupException when {@code dir} has no name to add the suffix to (a file system root)
+     */
+    public static Path forShard(Path dir, Shard shard) {
+        if (shard == null || shard.count() == 1) {
+            return dir;
+        }
+        String suffix = shardSuffix(shard);
+        Path name = dir.getFileName();
+        if (name == null || name.toString().isEmpty() || name.toString().equals(".")
+                || name.toString().equals("..")) {
+            throw new RunSetupException("cannot name shard " + shard.index() + "/" + shard.count()
+                    + "'s directory after '" + dir + "' (it becomes <directory>" + suffix + "): give --out a "
+                    + "directory with a name, such as runs/grid");
+        }
+        return name.toString().endsWith(suffix) ? dir : dir.resolveSibling(name + suffix);
+    }
+
+    /** What a shard adds to its directory's name: {@code -shard-K-of-N}. */
+    static String shardSuffix(Shard shard) {
+        return "-shard-" + shard.index() + "-of-" + shard.count();
     }
 
     /**
@@ -93,6 +124,19 @@ public final class RunDirectory {
     public boolean holdsRun() {
         return Files.exists(catalogue()) || Files.exists(manifest())
                 || Files.exists(root().resolve(RunLayout.CATALOGUE_V1));
+    }
+
+    /**
+     * The files here that a run writes (tables, report, tracks, profiles, charts, temporary files), which
+     * {@link #clear} would remove; none in an empty directory or one holding only the user's files.
+     */
+    public List<Path> earlierRunFiles() throws IOException {
+        return EarlierRunFiles.find(layout);
+    }
+
+    /** {@link #earlierRunFiles} in a few words for a message: {@code zones.csv, report.html, 12 files in tracks/}. */
+    public String describe(List<Path> files) {
+        return EarlierRunFiles.describe(layout, files);
     }
 
     /** The catalogue's header line, with its line end, exactly as {@link CatalogueWriter} writes it. */
