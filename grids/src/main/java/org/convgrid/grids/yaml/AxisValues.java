@@ -3,6 +3,7 @@ package org.convgrid.grids.yaml;
 import java.util.ArrayList;
 import java.util.List;
 import org.convgrid.grids.GridProblemKind;
+import org.convgrid.grids.WrittenPrecision;
 import org.convgrid.grids.words.MessageNumbers;
 import org.snakeyaml.engine.v2.nodes.Node;
 
@@ -45,7 +46,8 @@ final class AxisValues {
             return null;
         }
         List<Double> values = new ArrayList<>();
-        // seen values in a hash set: the duplicate check stays linear in the length of the list
+        // seen values, as the tables write them, in a hash set: the duplicate check stays linear in the length of
+        // the list, and values the catalogue would write alike (0.5 and 0.50000001) count as one
         java.util.Set<Double> seen = new java.util.HashSet<>();
         boolean ok = true;
         for (Node item : items) {
@@ -56,8 +58,10 @@ final class AxisValues {
                 reader.problem(item, GridProblemKind.OUT_OF_RANGE,
                         range.refusal(what, "", NodeReader.written(item), v));
                 ok = false;
-            } else if (order != Order.ANY && seen.contains(v)) {
-                reader.problem(item, GridProblemKind.DUPLICATE, "duplicate " + what + " " + NodeReader.written(item));
+            } else if (order != Order.ANY && seen.contains(WrittenPrecision.asWritten(v))) {
+                reader.problem(item, GridProblemKind.DUPLICATE, "duplicate " + what + " " + NodeReader.written(item)
+                        + (seen.contains(v) ? "" : " (equal to an earlier value to the "
+                        + WrittenPrecision.SIGNIFICANT_DIGITS + " significant digits the tables are written with)"));
                 ok = false;
             } else if (order == Order.INCREASING && !values.isEmpty() && v < values.get(values.size() - 1)) {
                 reader.problem(item, GridProblemKind.OUT_OF_RANGE,
@@ -68,6 +72,7 @@ final class AxisValues {
             if (v != null) {
                 values.add(v);
                 seen.add(v);
+                seen.add(WrittenPrecision.asWritten(v));
             }
         }
         return ok ? values : null;

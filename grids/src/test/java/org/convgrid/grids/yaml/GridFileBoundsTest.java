@@ -51,6 +51,18 @@ class GridFileBoundsTest {
     }
 
     @Test
+    void valuesTheTablesWouldWriteAlikeAreDuplicates() {
+        // 0.5 and 0.50000001 both write as 0.5 (7 significant digits): two catalogue rows a reader cannot tell
+        // apart, and one transitions.csv line for two metallicities (found by a robustness review)
+        GridProblem mass = onlyProblem("mass: {values: [0.5, 0.50000001]}\n" + REST);
+        assertThat(mass.kind()).isEqualTo(GridProblemKind.DUPLICATE);
+        assertThat(mass.message()).contains("duplicate mass value 0.50000001").contains("7 significant digits");
+        // values apart in the seventh digit stay distinct
+        assertThat(new GridFileReader().parse("g.yaml", "mass: {values: [0.5, 0.5000001]}\n" + REST).massesMsun())
+                .hasSize(2);
+    }
+
+    @Test
     void deeplyNestedYamlIsAProblemWithItsPositionNotAStackOverflow() {
         GridProblem deep = onlyProblem("title: x\nextra: " + "[".repeat(50_000) + "]".repeat(50_000) + "\n" + REST);
         assertThat(deep.kind()).isEqualTo(GridProblemKind.SYNTAX);
