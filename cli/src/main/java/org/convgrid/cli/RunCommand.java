@@ -135,8 +135,15 @@ final class RunCommand implements Callable<Integer> {
         try (RunLock lock = RunLock.acquire(dir.root())) {
             Locks.reportStale(lock, parent.err());
             long start = System.nanoTime();
+            boolean nothingToResume = resume && !dir.holdsRun();
             GridRun.Plan plan = runner.prepare(new GridRun.Settings(file, dir, n, chosen, resume, force));
             PrintWriter err = parent.err();
+            if (nothingToResume) {
+                // said even with --quiet: a mistyped directory would otherwise cost the whole grid again unnoticed
+                // (a job script that always adds --resume reads it once, on its first submission)
+                err.println("convgrid: note: --resume found no run in " + dir.root() + "; starting a new one there");
+                err.flush();
+            }
             if (plan.removedEarlierFiles() > 0) {
                 // said even with --quiet: files were deleted, and the user should not learn it from a missing file
                 err.println("convgrid: --force removed " + Counts.of(plan.removedEarlierFiles(), "file")

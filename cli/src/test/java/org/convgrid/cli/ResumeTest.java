@@ -102,6 +102,18 @@ class ResumeTest {
     }
 
     @Test
+    void resumeWithNoRunInTheDirectorySaysSoAndStartsOne() throws Exception {
+        // a mistyped --out with --resume recomputed the whole grid without a word (found by a robustness review)
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        CliHarness.Execution fresh = run("run", "--no-refine", grid.toString(), "--out", "typo", "--resume", "--quiet");
+        assertThat(fresh.code()).isEqualTo(0);
+        assertThat(fresh.err()).contains("--resume found no run in " + work.resolve("typo")
+                + "; starting a new one there");
+        CliHarness.Execution again = run("run", "--no-refine", grid.toString(), "--out", "typo", "--resume", "--quiet");
+        assertThat(again.err()).doesNotContain("found no run");
+    }
+
+    @Test
     void resumeRefusesAnotherGridOrAnotherShardAndChangesNothing() throws Exception {
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
         byte[] whole = uninterrupted(grid, "2");
