@@ -121,6 +121,20 @@ class CatalogueRoundTripTest {
     }
 
     @Test
+    void aFileWhoseLastRowIsCutShortSaysSoAndHowToRepairIt(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
+            throws IOException {
+        String text = write(List.of(OutcomeRows.toRow(sunLike()), OutcomeRows.toRow(failed())));
+        java.nio.file.Path file = dir.resolve("catalogue.ecsv");
+        // cut within the last columns: the bare message named a column of a row it could not know was cut
+        java.nio.file.Files.writeString(file, text.substring(0, text.length() - 40));
+        assertThatThrownBy(() -> CatalogueReader.read(file)).isInstanceOf(OutputFormatException.class)
+                .hasMessageContaining("its last row is cut short").hasMessageContaining("--resume");
+        // a whole file reads as before
+        java.nio.file.Files.writeString(file, text);
+        assertThat(CatalogueReader.read(file)).hasSize(2);
+    }
+
+    @Test
     void missingFixedColumnOrBadCellIsReported() throws IOException {
         assertThatThrownBy(() -> CatalogueReader.read(new StringReader("model_id,mass_msun\nx,1\n")))
                 .isInstanceOf(OutputFormatException.class).hasMessageContaining("z_init");
