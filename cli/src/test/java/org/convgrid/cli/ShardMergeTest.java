@@ -106,6 +106,24 @@ class ShardMergeTest {
     }
 
     @Test
+    void shardsOfGridFilesThatDifferOutsideTheirModelsAreRefused() throws Exception {
+        // the same models, another refinement tolerance: the merged run took the first-named shard's, so the order
+        // of the arguments changed the result; comments alone may differ
+        Path grid = grid();
+        Path commented = CliHarness.writeGrid(work, "commented.yaml", "# resubmitted\n" + CliHarness.GRID);
+        Path coarser = CliHarness.writeGrid(work, "coarser.yaml",
+                CliHarness.GRID + "transitions: {tolerance_msun: 0.01}\n");
+        assertThat(run("run", grid.toString(), "--shard", "1/2", "--out", "a", "--quiet").code()).isEqualTo(0);
+        assertThat(run("run", commented.toString(), "--shard", "2/2", "--out", "b", "--quiet").code()).isEqualTo(0);
+        assertThat(run("run", coarser.toString(), "--shard", "2/2", "--out", "c", "--quiet").code()).isEqualTo(0);
+        assertThat(run("merge", "a-shard-1-of-2", "b-shard-2-of-2", "--out", "ab").code()).isEqualTo(0);
+        CliHarness.Execution merged = run("merge", "a-shard-1-of-2", "c-shard-2-of-2", "--out", "ac");
+        assertThat(merged.code()).isEqualTo(2);
+        assertThat(merged.err()).contains("differs from").contains("outside its models");
+        assertThat(work.resolve("ac/catalogue.ecsv")).doesNotExist();
+    }
+
+    @Test
     void slurmArrayVariablesChooseTheShard() throws Exception {
         Path grid = grid();
         CliHarness cli = CliHarness.in(work, FakeChunkSolver.fast());

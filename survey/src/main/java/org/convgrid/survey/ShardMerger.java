@@ -162,6 +162,18 @@ public final class ShardMerger {
             throw new RunSetupException(shards.get(0) + ": the grid text in its manifest does not give its "
                     + "models_sha256; the manifest was edited");
         }
+        // the same models from grid files that differ elsewhere (the title, transitions refine or tolerance_msun,
+        // profiles): the merged run would take the first-named shard's choices, so the order of the arguments
+        // changed the result (found by a robustness review); differences in comments alone are accepted
+        for (int i = 1; i < manifests.size(); i++) {
+            GridSpec other = new GridFileReader().parse(manifests.get(i).gridFile(), manifests.get(i).gridText());
+            if (!other.title().equals(grid.title()) || !other.transitions().equals(grid.transitions())
+                    || other.profiles() != grid.profiles()) {
+                throw new RunSetupException(shards.get(i) + " was run from a grid file that differs from "
+                        + shards.get(0) + "'s outside its models (title, transitions or output profiles); run "
+                        + "every shard from one grid file (the differing ones again with --force)");
+            }
+        }
         return grid;
     }
 
