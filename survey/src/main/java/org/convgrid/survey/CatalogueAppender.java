@@ -24,10 +24,14 @@ public final class CatalogueAppender implements OutcomeSink, Closeable {
 
     private final CatalogueWriter writer;
     private final Writer zones;
+    private final Path catalogueFile;
+    private final Path zonesFile;
 
-    private CatalogueAppender(CatalogueWriter writer, Writer zones) {
+    private CatalogueAppender(CatalogueWriter writer, Writer zones, Path catalogueFile, Path zonesFile) {
         this.writer = writer;
         this.zones = zones;
+        this.catalogueFile = catalogueFile;
+        this.zonesFile = zonesFile;
     }
 
     /** Opens the catalogue for appending, writing the header first when {@code withHeader}. */
@@ -44,7 +48,7 @@ public final class CatalogueAppender implements OutcomeSink, Closeable {
             zones.write(ZoneTable.headerLine());
         }
         zones.flush();
-        return new CatalogueAppender(writer, zones);
+        return new CatalogueAppender(writer, zones, catalogue, zonesFile);
     }
 
     @Override
@@ -52,10 +56,19 @@ public final class CatalogueAppender implements OutcomeSink, Closeable {
         ModelOutcome oneLine = o instanceof ModelOutcome.Failed f
                 ? new ModelOutcome.Failed(f.request(), f.status(), oneLine(f.statusDetail()), f.solverIterations()) : o;
         CatalogueRow row = OutcomeRows.toRow(oneLine);
-        zones.write(ZoneTable.lines(row));
-        zones.flush();
-        writer.write(row);
-        writer.flush();
+        // a full disk said only "No space left on device": the message names the file (a robustness review)
+        try {
+            zones.write(ZoneTable.lines(row));
+            zones.flush();
+        } catch (IOException e) {
+            throw IoMessages.appending(zonesFile, e);
+        }
+        try {
+            writer.write(row);
+            writer.flush();
+        } catch (IOException e) {
+            throw IoMessages.appending(catalogueFile, e);
+        }
     }
 
     public static String oneLine(String detail) {

@@ -13,6 +13,17 @@ public final class IoMessages {
     private IoMessages() {
     }
 
+    /**
+     * An append that failed, named by its file: a write's own exception (a full disk) carries no file name. A
+     * file-system exception, which names its file already, is returned as it is.
+     */
+    public static IOException appending(java.nio.file.Path file, IOException e) {
+        if (e instanceof FileSystemException) {
+            return e;
+        }
+        return new IOException("cannot append to " + file.toAbsolutePath().normalize() + ": " + e.getMessage(), e);
+    }
+
     /** Why an I/O operation failed, naming the file when known. */
     public static String reason(IOException e) {
         if (e instanceof FileSystemException fs) {

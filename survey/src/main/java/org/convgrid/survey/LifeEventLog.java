@@ -43,7 +43,12 @@ public final class LifeEventLog {
             }
         }
         String text = (Files.exists(file) ? "" : LifeEventWriter.header()) + LifeEventWriter.line(row);
-        Files.writeString(file, text, StandardCharsets.UTF_8, StandardOpenOption.CREATE, StandardOpenOption.APPEND);
+        try {
+            Files.writeString(file, text, StandardCharsets.UTF_8, StandardOpenOption.CREATE,
+                    StandardOpenOption.APPEND);
+        } catch (IOException e) {
+            throw IoMessages.appending(file, e);
+        }
     }
 
     /** Rewrites a table in its final order; does nothing when there is none (no star evolved from birth). */
