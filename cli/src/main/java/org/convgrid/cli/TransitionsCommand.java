@@ -97,7 +97,6 @@ final class TransitionsCommand implements Callable<Integer> {
         // the run's one core threshold, the one its structure classes were computed with
         TransitionFinder finder = TransitionFinder.withDefaults();
         long start = System.nanoTime();
-        UnfinishedRunWarning.printIfUnfinished(dir.layout(), parent.err());
         TransitionTables.Update update;
         if (refine) {
             // a missing directory is reported by the tables' reader; an existing one is owned for the refinement
@@ -106,6 +105,8 @@ final class TransitionsCommand implements Callable<Integer> {
                 if (lock != null) {
                     Locks.reportStale(lock, parent.err());
                 }
+                // once the directory is ours: a run still going is refused by the lock, not told to resume
+                UnfinishedRunWarning.printIfUnfinished(dir.layout(), parent.err());
                 // the bisections can take minutes: count their new models on stderr as `run` does
                 ProgressReporter reporter = new ProgressReporter(parent.err(), context.terminal(), System::nanoTime,
                         n, "new model");
@@ -124,6 +125,7 @@ final class TransitionsCommand implements Callable<Integer> {
                 if (lock != null) {
                     Locks.reportStale(lock, parent.err());
                 }
+                UnfinishedRunWarning.printIfUnfinished(dir.layout(), parent.err());
                 update = TransitionTables.recompute(dir, finder, context.finishers());
             }
         }
