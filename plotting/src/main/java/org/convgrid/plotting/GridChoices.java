@@ -15,8 +15,16 @@ import org.snakeyaml.engine.v2.api.LoadSettings;
  * @param ageChartMasses the masses, solar masses, whose zones-against-age charts the grid asks for; empty when it
  *     names none
  * @param refinesTransitions whether the grid asks for its transition masses refined (the default)
+ * @param refineToleranceMsun the bracket width the refinement aims at ({@code transitions: tolerance_msun}), Msun
  */
-public record GridChoices(String title, List<Double> ageChartMasses, boolean refinesTransitions) {
+public record GridChoices(String title, List<Double> ageChartMasses, boolean refinesTransitions,
+                          double refineToleranceMsun) {
+
+    /**
+     * The grid file's default {@code tolerance_msun}, Msun: the grid reader's (TransitionSettings.DEFAULT, in a module
+     * this one does not see; a survey test holds the two equal).
+     */
+    public static final double DEFAULT_REFINE_TOLERANCE_MSUN = 0.002;
 
     /** The key under {@code output:} that names the masses of the zones-against-age charts. */
     public static final String AGE_CHART_MASSES_KEY = "age_charts_for_masses_msun";
@@ -29,11 +37,12 @@ public record GridChoices(String title, List<Double> ageChartMasses, boolean ref
     /** The choices of a run; a missing manifest or an unreadable grid text gives the defaults. */
     public static GridChoices of(RunManifest manifest) {
         if (manifest == null) {
-            return new GridChoices(FALLBACK_TITLE, List.of(), true);
+            return new GridChoices(FALLBACK_TITLE, List.of(), true, DEFAULT_REFINE_TOLERANCE_MSUN);
         }
         String title = FALLBACK_TITLE + ": " + manifest.gridFile();
         List<Double> masses = List.of();
         boolean refines = true;
+        double tolerance = DEFAULT_REFINE_TOLERANCE_MSUN;
         Object doc;
         try {
             doc = new Load(LoadSettings.builder().build()).loadFromString(manifest.gridText());
@@ -54,10 +63,14 @@ public record GridChoices(String title, List<Double> ageChartMasses, boolean ref
                 masses = List.of(one.doubleValue());
             }
         }
-        if (doc instanceof Map<?, ?> map && map.get("transitions") instanceof Map<?, ?> transitions
-                && transitions.get("refine") instanceof Boolean refine) {
-            refines = refine;
+        if (doc instanceof Map<?, ?> map && map.get("transitions") instanceof Map<?, ?> transitions) {
+            if (transitions.get("refine") instanceof Boolean refine) {
+                refines = refine;
+            }
+            if (transitions.get("tolerance_msun") instanceof Number width && width.doubleValue() > 0) {
+                tolerance = width.doubleValue();
+            }
         }
-        return new GridChoices(title, masses, refines);
+        return new GridChoices(title, masses, refines, tolerance);
     }
 }

@@ -117,10 +117,15 @@ public final class ReportPage {
      */
     private static void unrefined(StringBuilder b, RunData run, Path runDir) {
         RunManifest m = run.manifest();
-        // a refinement turns every slice with a found bracket into method refined; a slice without one stays grid
+        if (m == null || m.isUnfinished() || m.shard() != null || !GridChoices.of(m).refinesTransitions()) {
+            return;
+        }
+        // a refinement narrows every bracket wider than its tolerance (method refined); one already narrower, as
+        // with a mass step below the tolerance, stays a grid bracket, and the note would never go away
+        double width = GridChoices.of(m).refineToleranceMsun();
         boolean coarse = run.transitions().stream().anyMatch(t -> t.method() == TransitionMethod.GRID
-                && (t.fullyConvective().found() || t.convCoreOnset().found()));
-        if (m == null || m.isUnfinished() || m.shard() != null || !GridChoices.of(m).refinesTransitions() || !coarse) {
+                && (wider(t.fullyConvective(), width) || wider(t.convCoreOnset(), width)));
+        if (!coarse) {
             return;
         }
         b.append("<p class=\"unrefined\">The transition masses are not refined: the grid asks for refinement, but ")
@@ -129,6 +134,11 @@ public final class ReportPage {
                         + "or this merged run has not been refined yet). Refine them with <code>")
                 .append(Html.escape("convgrid transitions " + runDir.toAbsolutePath().normalize() + " --refine"))
                 .append("</code>.</p>\n");
+    }
+
+    private static boolean wider(TransitionEstimate estimate, double width) {
+        return estimate.found() && estimate.bracket() != null
+                && estimate.bracket().hi() - estimate.bracket().lo() >= width;
     }
 
     private static void summary(StringBuilder b, RunData run) {

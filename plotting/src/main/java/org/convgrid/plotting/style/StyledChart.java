@@ -34,14 +34,15 @@ public final class StyledChart extends XYChart {
     /**
      * The lower edge of the legend right of the plot, screen pixels, or NaN when the chart shows no legend there;
      * valid once the chart has been painted. XChart keeps only the legend box's size; it centres a legend placed
-     * outside on the right vertically on the chart (XChart 3.8.8, measured on our charts: a 235 px legend of an
-     * 800 px chart spans 278-522 px).
+     * outside on the right vertically on the plot area (XChart 3.8.8's Legend_: y = plot y + (plot height - legend
+     * height) / 2; on the demo's transition chart a 235 px legend beside a 620 px plot from y 101 spans 294-528 px).
      */
     public double rightLegendBottom() {
         if (!getStyler().isLegendVisible() || getStyler().getLegendPosition() != Styler.LegendPosition.OutsideE) {
             return Double.NaN;
         }
-        return 0.5 * (getHeight() + legend.getBounds().getHeight());
+        java.awt.geom.Rectangle2D area = plot.getBounds();
+        return area.getY() + 0.5 * (area.getHeight() + legend.getBounds().getHeight());
     }
 
     /** Adds an overlay, painted after the chart and earlier overlays. */

@@ -69,6 +69,16 @@ class UnfinishedReportTest {
                 m.gridModelsSha256(), m.physics(), m.started(), m.finished(), m.threads(), m.shard(), m.counts(),
                 m.medianSecondsPerModel(), m.ageOrigin())));
         assertThat(Files.readString(ReportPage.write(plain))).doesNotContain("class=\"unrefined\"");
+
+        // grid brackets already narrower than the tolerance: a refinement would add nothing, so no note
+        Path fine = TestRuns.write(dir.resolve("fine"),
+                TestRuns.rows(TestRuns.masses(0.2, 1.4, 5), new double[] {0.014}, new double[] {0}));
+        RunManifest f = RunManifestReader.read(Files.readString(fine.resolve("manifest.yaml")));
+        Files.writeString(fine.resolve("manifest.yaml"), RunManifestWriter.toYaml(new RunManifest(f.toolVersion(),
+                f.toolCommit(), f.gridFile(), f.gridText() + "transitions: {tolerance_msun: 0.5}\n",
+                f.gridFileSha256(), f.gridModelsSha256(), f.physics(), f.started(), f.finished(), f.threads(),
+                f.shard(), f.counts(), f.medianSecondsPerModel(), f.ageOrigin())));
+        assertThat(Files.readString(ReportPage.write(fine))).doesNotContain("class=\"unrefined\"");
     }
 
     @Test
