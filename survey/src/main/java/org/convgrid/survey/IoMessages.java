@@ -18,10 +18,11 @@ public final class IoMessages {
      * file-system exception, which names its file already, is returned as it is.
      */
     public static IOException appending(java.nio.file.Path file, IOException e) {
-        if (e instanceof FileSystemException) {
+        // file-system exceptions name their file; a closed channel (an interrupt) is a kind the callers test for
+        if (e instanceof FileSystemException || e instanceof java.nio.channels.ClosedChannelException) {
             return e;
         }
-        return new IOException("cannot append to " + file.toAbsolutePath().normalize() + ": " + e.getMessage(), e);
+        return new IOException("cannot append to " + file.toAbsolutePath().normalize() + ": " + reason(e), e);
     }
 
     /** Why an I/O operation failed, naming the file when known. */

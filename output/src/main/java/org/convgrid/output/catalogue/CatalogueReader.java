@@ -47,34 +47,24 @@ public final class CatalogueReader {
     /**
      * Every row of a catalogue file.
      *
-     * @throws OutputFormatException when a cell cannot be read; when that is the last row, cut short without its
-     *     line break (a run killed while writing it), the message says so and how to repair it
+     * @throws OutputFormatException when a cell cannot be read, or when the last row is cut short without its line
+     *     break (a run killed while writing it; the message says how to repair it)
      */
     public static List<CatalogueRow> read(Path file) throws IOException {
         String text = Files.readString(file, StandardCharsets.UTF_8);
+        if (!text.isEmpty() && !text.endsWith("\n")) {
+            // every row the writer writes ends with a line break: without one the last row was cut short, even when
+            // what is left still parses (a number cut to fewer digits, an empty last cell). The message named a
+            // column of a row it could not know was cut, or the CSV parser's unfinished quoted cell (found by a
+            // robustness review)
+            throw new OutputFormatException(file.getFileName() + ": its last row is cut short, as a run stopped "
+                    + "while writing it leaves it; 'convgrid run GRID --out DIR --resume' drops that row and computes "
+                    + "it again");
+        }
         try {
             return read(new StringReader(text));
-        } catch (OutputFormatException | java.io.UncheckedIOException e) {
-            if (!text.isEmpty() && !text.endsWith("\n") && completeLinesRead(text)) {
-                // the message named a column of a row it could not know was cut, or the CSV parser's unfinished
-                // quoted cell (found by a robustness review)
-                throw new OutputFormatException(file.getFileName() + ": its last row is cut short, as a run stopped "
-                        + "while writing it leaves it; 'convgrid run GRID --out DIR --resume' drops that row and "
-                        + "computes it again (" + e.getMessage() + ")", e);
-            }
-            if (e instanceof OutputFormatException format) {
-                throw format;
-            }
+        } catch (java.io.UncheckedIOException e) {
             throw new OutputFormatException(file.getFileName() + ": " + e.getMessage(), e);
-        }
-    }
-
-    private static boolean completeLinesRead(String text) throws IOException {
-        try {
-            readCompleteLines(text);
-            return true;
-        } catch (OutputFormatException | java.io.UncheckedIOException e) {
-            return false;
         }
     }
 

@@ -129,6 +129,9 @@ class CatalogueRoundTripTest {
         java.nio.file.Files.writeString(file, text.substring(0, text.length() - 40));
         assertThatThrownBy(() -> CatalogueReader.read(file)).isInstanceOf(OutputFormatException.class)
                 .hasMessageContaining("its last row is cut short").hasMessageContaining("--resume");
+        // cut within the last number: what is left parses, but the row is still cut
+        java.nio.file.Files.writeString(file, text.substring(0, text.length() - 1));
+        assertThatThrownBy(() -> CatalogueReader.read(file)).hasMessageContaining("its last row is cut short");
         // a whole file reads as before
         java.nio.file.Files.writeString(file, text);
         assertThat(CatalogueReader.read(file)).hasSize(2);

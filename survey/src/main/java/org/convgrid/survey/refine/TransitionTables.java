@@ -205,10 +205,6 @@ public final class TransitionTables {
     }
 
     /**
-     * The tolerance a plain recompute states for refined rows: the one the table it replaces gave (the refinement
-     * that added the models), else the grid file's; NaN when neither is known.
-     */
-    /**
      * The refinement tolerance the run's grid file asks for (transitions tolerance_msun, or its default), Msun; NaN
      * when the directory has no manifest. The width a later refinement of the run aims at unless told otherwise, so
      * that finishing an interrupted refinement or a merged run's gives what a single run of the grid gives.
@@ -221,6 +217,10 @@ public final class TransitionTables {
         return new GridFileReader().parse(manifest.gridFile(), manifest.gridText()).transitions().toleranceMsun();
     }
 
+    /**
+     * The tolerance a plain recompute states for refined rows: the one the table it replaces gave (the refinement
+     * that added the models), else the grid file's; NaN when neither is known.
+     */
     private static double earlierTolerance(RunDirectory dir) throws IOException {
         if (Files.isRegularFile(dir.transitions())) {
             try (Reader in = Files.newBufferedReader(dir.transitions(), StandardCharsets.UTF_8)) {
