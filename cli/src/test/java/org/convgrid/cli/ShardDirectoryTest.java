@@ -134,4 +134,20 @@ class ShardDirectoryTest {
         String help = run("run", "--help").out().replaceAll("\\s+", "");
         assertThat(help).contains("ShardKofNwritesto<DIR>-shard-K-of-N,DIRbeing--outoroutput.dir");
     }
+
+    @Test
+    void aShardsOutThatNamesTheCurrentDirectoryOrOneAboveIsRefused() throws Exception {
+        // 'cd runs/grid && run --shard 1/2 --out .' would have written beside it, to runs/grid-shard-1-of-2
+        Path grid = grid();
+        for (String here : new String[] {".", "..", work.toString()}) {
+            CliHarness.Execution refused = run("run", grid.toString(), "--shard", "1/2", "--out", here, "--quiet");
+            assertThat(refused.code()).as(here).isEqualTo(ExitCodes.USAGE);
+            assertThat(refused.err()).contains("names the current directory or one above it");
+        }
+        try (Stream<Path> left = Files.list(work.getParent())) {
+            assertThat(left.filter(p -> p.getFileName().toString().contains("-shard-"))).isEmpty();
+        }
+        // the whole grid may still be written into the current directory
+        assertThat(run("run", "--no-refine", grid.toString(), "--out", ".", "--quiet").code()).isEqualTo(0);
+    }
 }
