@@ -167,6 +167,10 @@ public final class ShardMerger {
         // changed the result (found by a robustness review); differences in comments alone are accepted
         for (int i = 1; i < manifests.size(); i++) {
             GridSpec other = new GridFileReader().parse(manifests.get(i).gridFile(), manifests.get(i).gridText());
+            if (!GridHash.ofModels(other).equals(models)) {
+                throw new RunSetupException(shards.get(i) + ": the grid text in its manifest does not give its "
+                        + "models_sha256; the manifest was edited");
+            }
             if (!other.title().equals(grid.title()) || !other.transitions().equals(grid.transitions())
                     || other.profiles() != grid.profiles()) {
                 throw new RunSetupException(shards.get(i) + " was run from a grid file that differs from "
