@@ -22,16 +22,17 @@ final class AtmosphereMixing {
     }
 
     /**
-     * The mixed flags with every point above the outermost mixed point set as well, when that point reaches the
-     * surface; otherwise (no mixed point, or the outermost one below the skin) {@code mixed} itself.
+     * The mixed flags with every point above the top of the outermost mixed run that ends below the surface set as
+     * well, when that top reaches the surface skin; otherwise {@code mixed} itself. A lone mixed surface point above
+     * such a run (a one-point surface zone) does not keep the radiative points between them apart.
      */
     static boolean[] joined(MassMesh mesh, boolean[] mixed) {
         int n = mixed.length;
-        int top = n - 1;
-        while (top >= 0 && !mixed[top]) {
+        int top = n - 2;
+        while (top >= 0 && !(mixed[top] && !mixed[top + 1])) {
             top--;
         }
-        if (top < 0 || top == n - 1 || !ConvectiveZoneFinder.reachesSurface(
+        if (top < 0 || !ConvectiveZoneFinder.reachesSurface(
                 1.0 - mesh.exteriorFraction(top), ConvectiveZoneFinder.DEFAULT_SURFACE_SKIN_MASS_FRACTION)) {
             return mixed;
         }

@@ -36,6 +36,13 @@ class AtmosphereMixingTest {
     }
 
     @Test
+    void aLoneMixedSurfacePointDoesNotKeepTheAtmosphereApartFromTheEnvelope() {
+        // the envelope's top within the skin, a radiative point, then a one-point surface zone (found by a review)
+        boolean[] mixed = {false, true, true, false, true};
+        assertThat(AtmosphereMixing.joined(mesh(1e-8), mixed)).containsExactly(false, true, true, true, true);
+    }
+
+    @Test
     void noMixedPointOrAMixedSurfaceChangeNothing() {
         boolean[] none = {false, false, false, false, false};
         boolean[] surface = {false, false, true, true, true};
