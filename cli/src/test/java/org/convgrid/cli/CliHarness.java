@@ -62,6 +62,15 @@ final class CliHarness {
                 new FakeMassLines(java.util.Set.of())));
     }
 
+    /**
+     * A harness whose relative paths start at {@code workDir}, with the production solvers and refinement lines (real
+     * stars), no chart or report finishers and no Slurm variables.
+     */
+    static CliHarness real(Path workDir) {
+        return new CliHarness(new CommandContext(org.convgrid.survey.ProductionSolvers.factory(), List.of(), Map.of(),
+                workDir, false));
+    }
+
     CliHarness with(CommandContext newContext) {
         return new CliHarness(newContext);
     }

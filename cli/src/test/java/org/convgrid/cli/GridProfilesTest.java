@@ -6,11 +6,9 @@ import java.io.Reader;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Map;
 import java.util.stream.Stream;
 import org.convgrid.output.profile.ProfileReader;
 import org.convgrid.output.profile.ProfileRow;
-import org.convgrid.survey.ProductionSolvers;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -33,8 +31,7 @@ class GridProfilesTest {
     Path dir;
 
     private CliHarness.Execution run(String... args) {
-        return new CliHarness(new CommandContext(ProductionSolvers.factory(), List.of(), Map.of(), dir, false))
-                .execute(args);
+        return CliHarness.real(dir).execute(args);
     }
 
     @Test

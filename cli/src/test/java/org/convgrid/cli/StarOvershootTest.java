@@ -4,8 +4,6 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Map;
-import org.convgrid.survey.ProductionSolvers;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -29,8 +27,7 @@ class StarOvershootTest {
     Path dir;
 
     private CliHarness.Execution run(String... args) {
-        return new CliHarness(new CommandContext(ProductionSolvers.factory(), List.of(), Map.of(), dir, false))
-                .execute(args);
+        return CliHarness.real(dir).execute(args);
     }
 
     @Test

@@ -4,8 +4,6 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Map;
-import org.convgrid.survey.ProductionSolvers;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -101,8 +99,7 @@ class ZamsOriginTest {
     @Test
     void zeroAgeOriginReproducesTheRowsOfBefore() throws Exception {
         Path grid = CliHarness.writeGrid(dir, "zams.yaml", GRID);
-        CliHarness harness = new CliHarness(new CommandContext(ProductionSolvers.factory(), List.of(), Map.of(), dir,
-                false));
+        CliHarness harness = CliHarness.real(dir);
         CliHarness.Execution e = harness.execute("run", "--no-refine", grid.toString(), "--out", "zams", "--quiet");
         assertThat(e.code()).as(e.err()).isZero();
         List<String> rows = CliHarness.tableLines(dir.resolve("zams/catalogue.ecsv"));

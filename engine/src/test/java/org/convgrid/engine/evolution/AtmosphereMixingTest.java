@@ -7,7 +7,8 @@ import org.junit.jupiter.api.Test;
 
 /**
  * {@link AtmosphereMixing}: the atmosphere's points join a mixed zone whose top lies within the surface skin (1e-6
- * of the mass, {@code ConvectiveZoneFinder.DEFAULT_SURFACE_SKIN_MASS_FRACTION}), and no other.
+ * of the mass, {@code ConvectiveZoneFinder.DEFAULT_SURFACE_SKIN_MASS_FRACTION}), and no other (common practice: the
+ * photosphere shows the convective envelope's composition; no single published source).
  */
 class AtmosphereMixingTest {
 

@@ -63,21 +63,13 @@ class UnfinishedReportTest {
 
         Path plain = TestRuns.write(dir.resolve("plain"),
                 TestRuns.rows(TestRuns.masses(0.2, 1.4, 5), new double[] {0.014}, new double[] {0}));
-        RunManifest m = RunManifestReader.read(Files.readString(plain.resolve("manifest.yaml")));
-        Files.writeString(plain.resolve("manifest.yaml"), RunManifestWriter.toYaml(new RunManifest(m.toolVersion(),
-                m.toolCommit(), m.gridFile(), m.gridText() + "transitions: {refine: false}\n", m.gridFileSha256(),
-                m.gridModelsSha256(), m.physics(), m.started(), m.finished(), m.threads(), m.shard(), m.counts(),
-                m.medianSecondsPerModel(), m.ageOrigin())));
+        appendToGridText(plain, "transitions: {refine: false}\n");
         assertThat(Files.readString(ReportPage.write(plain))).doesNotContain("class=\"unrefined\"");
 
         // grid brackets already narrower than the tolerance: a refinement would add nothing, so no note
         Path fine = TestRuns.write(dir.resolve("fine"),
                 TestRuns.rows(TestRuns.masses(0.2, 1.4, 5), new double[] {0.014}, new double[] {0}));
-        RunManifest f = RunManifestReader.read(Files.readString(fine.resolve("manifest.yaml")));
-        Files.writeString(fine.resolve("manifest.yaml"), RunManifestWriter.toYaml(new RunManifest(f.toolVersion(),
-                f.toolCommit(), f.gridFile(), f.gridText() + "transitions: {tolerance_msun: 0.5}\n",
-                f.gridFileSha256(), f.gridModelsSha256(), f.physics(), f.started(), f.finished(), f.threads(),
-                f.shard(), f.counts(), f.medianSecondsPerModel(), f.ageOrigin())));
+        appendToGridText(fine, "transitions: {tolerance_msun: 0.5}\n");
         assertThat(Files.readString(ReportPage.write(fine))).doesNotContain("class=\"unrefined\"");
     }
 
@@ -86,5 +78,15 @@ class UnfinishedReportTest {
         TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.2, 1.4, 5), new double[] {0.014}, new double[] {0}));
 
         assertThat(Files.readString(ReportPage.write(dir))).doesNotContain("class=\"unfinished\"");
+    }
+
+    /** Adds {@code yaml} to the grid text the run's manifest records, the rest of the manifest unchanged. */
+    private static void appendToGridText(Path run, String yaml) throws Exception {
+        Path file = run.resolve("manifest.yaml");
+        RunManifest m = RunManifestReader.read(Files.readString(file));
+        Files.writeString(file, RunManifestWriter.toYaml(new RunManifest(m.toolVersion(), m.toolCommit(),
+                m.gridFile(), m.gridText() + yaml, m.gridFileSha256(), m.gridModelsSha256(), m.physics(),
+                m.started(), m.finished(), m.threads(), m.shard(), m.counts(), m.medianSecondsPerModel(),
+                m.ageOrigin())));
     }
 }
