@@ -118,18 +118,18 @@ final class RunCommand implements Callable<Integer> {
                     + "; check it with 'convgrid check' and add --yes to run it");
         }
         Shard chosen = ShardChoice.choose(shard, context.environment()).orElse(null);
-        if (out != null && chosen != null && chosen.count() > 1 && context.resolve(out).getFileName() != null
-                && context.workingDirectory().normalize().startsWith(context.resolve(out))) {
+        Path given = context.resolve(out != null ? out : Path.of(file.spec().outputDir()));
+        if (out != null && chosen != null && chosen.count() > 1 && given.getFileName() != null
+                && context.workingDirectory().normalize().startsWith(given)) {
             // 'cd runs/grid && run --shard 1/2 --out .' would write beside it, to runs/grid-shard-1-of-2 (or above
             // the home directory, from there; found by a review)
             throw new UsageException("--out " + out + " names the current directory or one above it, but a shard "
                     + "writes to <DIR>-shard-K-of-N beside DIR; name the directory, e.g. --out runs/"
-                    + context.resolve(out).getFileName());
+                    + given.getFileName());
         }
         // a shard's directory is named for it whichever way the directory was given, so that one command line
         // serves every task of a job array
-        RunDirectory dir = new RunDirectory(RunDirectory.forShard(context.resolve(out != null ? out
-                : Path.of(file.spec().outputDir())), chosen));
+        RunDirectory dir = new RunDirectory(RunDirectory.forShard(given, chosen));
         OutputTargets.requireWritableDirectory("--out", dir.root());
         boolean evolves = file.spec().ages().evolves();
         // every catalogue row and life-events row goes through it, so that a signal stops the sweep between rows

@@ -117,12 +117,16 @@ public final class ReportPage {
      */
     private static void unrefined(StringBuilder b, RunData run, Path runDir) {
         RunManifest m = run.manifest();
-        if (m == null || m.isUnfinished() || m.shard() != null || !GridChoices.of(m).refinesTransitions()) {
+        if (m == null || m.isUnfinished() || m.shard() != null) {
+            return;
+        }
+        GridChoices grid = GridChoices.of(m);
+        if (!grid.refinesTransitions()) {
             return;
         }
         // a refinement narrows every bracket wider than its tolerance (method refined); one already narrower, as
         // with a mass step below the tolerance, stays a grid bracket, and the note would never go away
-        double width = GridChoices.of(m).refineToleranceMsun();
+        double width = grid.refineToleranceMsun();
         boolean coarse = run.transitions().stream().anyMatch(t -> t.method() == TransitionMethod.GRID
                 && (wider(t.fullyConvective(), width) || wider(t.convCoreOnset(), width)));
         if (!coarse) {
