@@ -45,6 +45,7 @@ final class CheckCommand implements Callable<Integer> {
         // the same refusal as 'run' gives, so a grid that passes check does not fail at the start of run
         OutputTargets.requireWritableDirectory("the run directory (output dir)", runDir);
         TestedRange.print(TestedRange.warnings(file.spec()), parent.err());
+        TestedRange.print(OvershootAdvice.warnings(file.spec()), parent.err());
         Optional<RunManifest> earlier = new RunDirectory(runDir).measuredRun();
         RunTimeEstimate estimate = earlier.isPresent()
                 ? RunTimeEstimate.measured(file.spec(), earlier.get().medianSecondsPerModel(), n, runDir.toString())

@@ -99,10 +99,12 @@ final class StarCommand implements Callable<Integer> {
     Double overshootHp;
 
     /** Null when not given: uniform, which needs no length; a profile named without a length is an error. */
-    @Option(names = "--overshoot-profile", paramLabel = "uniform|decaying",
+    @Option(names = "--overshoot-profile", paramLabel = "uniform|decaying|uniform-ramped",
             description = "How the overshoot mixing ends (default uniform): uniform mixes fully to --overshoot-hp; "
                     + "decaying lets it fade (e-folding length L H_P / 2), as the grid key overshoot: {profile: "
-                    + "decaying, length_hp: L}. Needs --overshoot-hp, as the grid key needs its length_hp.")
+                    + "decaying, length_hp: L}; uniform-ramped mixes like uniform with a length ramped with the "
+                    + "star's mass: none up to 1.2 Msun, --overshoot-hp from 2 Msun. Needs --overshoot-hp, as the "
+                    + "grid key needs its length_hp.")
     String overshootProfile;
 
     @Option(names = "--opacity-scale", defaultValue = "1", paramLabel = "S",
@@ -144,6 +146,7 @@ final class StarCommand implements Callable<Integer> {
             OutputTargets.requireWritableFile("--profile", main.context().resolve(profile));
         }
         TestedRange.print(TestedRange.warnings(massMsun, metals, y, age), main.err());
+        TestedRange.print(OvershootAdvice.warnings(massMsun, age, options), main.err());
         String id = String.format(java.util.Locale.ROOT, "star-m%.4f-z%.5f", massMsun, metals);
         ModelRequest request = new ModelRequest(id, massMsun * Constants.M_SUN, metals, y, age, options);
         Composition composition = request.age().origin() == AgeOrigin.BIRTH
@@ -260,8 +263,8 @@ final class StarCommand implements Callable<Integer> {
                 : overshootProfile.strip().toLowerCase(java.util.Locale.ROOT);
         OvershootScheme scheme = OvershootScheme.fromLabel(profileName);
         if (scheme == null) {
-            throw new UsageException("--overshoot-profile must be uniform or decaying, got '" + overshootProfile
-                    + "'");
+            throw new UsageException("--overshoot-profile must be " + OvershootScheme.labels() + ", got '"
+                    + overshootProfile + "'");
         }
         if (overshootProfile != null && overshootHp == null) {
             // the grid file refuses {profile: decaying} without length_hp alike; silently mixing nothing was worse

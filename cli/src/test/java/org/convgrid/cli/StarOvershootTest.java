@@ -8,7 +8,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * {@code star --overshoot-hp L [--overshoot-profile uniform|decaying]} gives the same catalogue row (all but the model
+ * {@code star --overshoot-hp L [--overshoot-profile uniform|decaying|uniform-ramped]} gives the same catalogue row (all but the model
  * id) as a one-model grid whose {@code overshoot} key says the same: a practitioner could not reproduce a grid model
  * with overshoot, star having no such option. Production solver; the check is that both paths ask for the same
  * physics, not of the physics itself.
@@ -53,13 +53,74 @@ class StarOvershootTest {
     }
 
     @Test
+    void massRampedOvershootGivesTheGridRow() throws Exception {
+        // 1.5 Msun lies on the ramp: alpha_ov 0.2 x (1.5 - 1.2) / 0.8 = 0.075
+        assertSameRow("birth", "{profile: uniform-ramped, length_hp: 0.2}", "--overshoot-hp", "0.2",
+                "--overshoot-profile", "uniform-ramped");
+    }
+
+    /**
+     * Uniform overshoot keeps alive the small core out-of-equilibrium burning gives a 0.8 Msun star early on: at
+     * 1 Gyr (Z = 0.02) it holds m/M ~0.03, where the star without overshoot has none. KNOWN DISCREPANCY, frozen as a
+     * symptom (README, Limits): published models of solar-like stars have radiative cores on the main sequence
+     * (e.g. the standard solar model of Bahcall, Serenelli &amp; Basu 2005, ApJ 621, L85), and fits to eclipsing
+     * binaries find next to no overshoot below ~1.2 Msun (Claret &amp; Torres 2016, A&amp;A 592, A15; 2018, ApJ 859,
+     * 100). The mass-ramped profile gives such a star no overshoot: its row is the one without overshoot.
+     */
+    @Test
+    void massRampedOvershootLeavesASolarLikeStarAsWithoutOvershoot() {
+        String[] star = {"star", "--mass", "0.8", "--z", "0.02", "--age-gyr", "1", "--format", "csv"};
+        String none = dataRow(run(star));
+        String uniform = dataRow(run(append(star, "--overshoot-hp", "0.2")));
+        String ramped = dataRow(run(append(star, "--overshoot-hp", "0.2", "--overshoot-profile", "uniform-ramped")));
+        int structureClass = column("structure_class");
+        int coreMass = column("core_cz_mass_frac");
+        assertThat(field(none, structureClass)).isEqualTo("conv_envelope");
+        assertThat(field(uniform, structureClass)).isEqualTo("conv_core_and_envelope");
+        assertThat(Double.parseDouble(field(uniform, coreMass))).isGreaterThan(0.01);
+        // overshoot_hp records the length asked (0.2); every other column is the model's
+        int overshoot = column("overshoot_hp");
+        String[] a = none.split(",", -1);
+        String[] b = ramped.split(",", -1);
+        for (int i = 0; i < a.length; i++) {
+            if (i != overshoot) {
+                assertThat(b[i]).as("column %d", i).isEqualTo(a[i]);
+            }
+        }
+    }
+
+    private String header;
+
+    private String dataRow(CliHarness.Execution star) {
+        assertThat(star.code()).as(star.err()).isZero();
+        List<String> lines = star.out().lines().filter(l -> !l.startsWith("#")).toList();
+        header = lines.get(0);
+        return lines.get(1);
+    }
+
+    private int column(String name) {
+        return List.of(header.split(",")).indexOf(name);
+    }
+
+    private static String field(String row, int index) {
+        return row.split(",", -1)[index];
+    }
+
+    private static String[] append(String[] args, String... more) {
+        String[] all = java.util.Arrays.copyOf(args, args.length + more.length);
+        System.arraycopy(more, 0, all, args.length, more.length);
+        return all;
+    }
+
+    @Test
     void aNegativeLengthOrAnUnknownProfileIsAUsageError() {
         CliHarness.Execution negative = run("star", "--mass", "1", "--z", "0.02", "--overshoot-hp", "-0.1");
         assertThat(negative.code()).isEqualTo(ExitCodes.USAGE);
         assertThat(negative.err()).contains("--overshoot-hp must be at least 0");
         CliHarness.Execution unknown = run("star", "--mass", "1", "--z", "0.02", "--overshoot-profile", "step");
         assertThat(unknown.code()).isEqualTo(ExitCodes.USAGE);
-        assertThat(unknown.err()).contains("--overshoot-profile must be uniform or decaying, got 'step'");
+        assertThat(unknown.err())
+                .contains("--overshoot-profile must be uniform, decaying or uniform-ramped, got 'step'");
         // a profile without its length mixed nothing, silently; the grid key needs its length_hp alike
         CliHarness.Execution lengthless = run("star", "--mass", "1", "--z", "0.02", "--overshoot-profile", "decaying");
         assertThat(lengthless.code()).isEqualTo(ExitCodes.USAGE);

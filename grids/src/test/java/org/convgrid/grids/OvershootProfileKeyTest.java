@@ -33,6 +33,14 @@ class OvershootProfileKeyTest {
     }
 
     @Test
+    void theMassRampedProfileReachesEveryModelAndTheModelHash() {
+        GridSpec spec = new GridFileReader().parse("g.yaml", GRID.formatted("uniform-ramped"));
+        assertThat(spec.requests().iterator().next().physics().overshootScheme())
+                .isEqualTo(OvershootScheme.MASS_RAMPED_STEP);
+        assertThat(GridHash.canonicalModels(spec)).contains("overshoot_profile=uniform-ramped");
+    }
+
+    @Test
     void uniformIsTheDefaultAndAPlainNumberMeansIt() {
         GridSpec uniform = new GridFileReader().parse("g.yaml", GRID.formatted("uniform"));
         GridSpec plain = new GridFileReader().parse("g.yaml", PLAIN);
@@ -50,6 +58,7 @@ class OvershootProfileKeyTest {
                             assertThat(p.line()).isEqualTo(4);
                             assertThat(p.column()).isEqualTo(24);
                             assertThat(p.kind()).isEqualTo(GridProblemKind.UNKNOWN_CHOICE);
+                            assertThat(p.message()).contains("uniform, decaying or uniform-ramped");
                         }));
     }
 

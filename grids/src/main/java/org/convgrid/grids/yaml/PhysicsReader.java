@@ -21,8 +21,9 @@ import org.snakeyaml.engine.v2.nodes.Node;
  * left out takes the engine default ({@link PhysicsOptions#DEFAULT}). {@code preset: FILE} takes the mixing
  * length from a physics preset ({@link PresetReader}; only the mixing length, not Y or Z) and excludes
  * {@code mixing_length}. {@code overshoot} is either a length in pressure scale heights (or a list of them) for
- * the uniform profile, or a mapping {@code {profile: uniform|decaying, length_hp: L}}: uniform mixes to L H_P
- * beyond each boundary, decaying lets the mixing fade with e-folding length L H_P / 2 (README, "Grid file").
+ * the uniform profile, or a mapping {@code {profile: uniform|decaying|uniform-ramped, length_hp: L}}: uniform
+ * mixes to L H_P beyond each boundary, decaying lets the mixing fade with e-folding length L H_P / 2, uniform-ramped mixes
+ * like uniform with L ramped with the star's mass from none at 1.2 Msun to L from 2 Msun (README, "Grid file").
  */
 final class PhysicsReader {
 
@@ -109,7 +110,7 @@ final class PhysicsReader {
         return new PhysicsAxes(alphas, overshoots, criteria, factors, table, atmosphere, scheme);
     }
 
-    /** The overshoot profile: uniform (default) or decaying, one value. */
+    /** The overshoot profile: uniform (default), decaying or uniform-ramped, one value. */
     private static OvershootScheme overshootProfile(Node node, NodeReader reader) {
         String text = reader.text(node, "overshoot profile");
         if (text == null) {
@@ -118,7 +119,8 @@ final class PhysicsReader {
         OvershootScheme scheme = OvershootScheme.fromLabel(text);
         if (scheme == null) {
             reader.problem(node, GridProblemKind.UNKNOWN_CHOICE,
-                    "overshoot profile must be uniform or decaying, got '" + NodeReader.quoted(text) + "'");
+                    "overshoot profile must be " + OvershootScheme.labels() + ", got '" + NodeReader.quoted(text)
+                            + "'");
         }
         return scheme;
     }
