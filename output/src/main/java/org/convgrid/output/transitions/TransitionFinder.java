@@ -9,6 +9,7 @@ import java.util.function.Predicate;
 import org.convgrid.engine.convection.ConvectiveZoneFinder;
 import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueRow;
 
@@ -252,7 +253,8 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         int expected = (window == null ? 0 : 2) + (coredAtTop ? 1 : 0);
         if (core.crossings().size() > expected) {
             notes.add("convective core changes " + timesInWords(core.crossings().size()) + " with mass"
-                    + (window == null ? "" : "; the lowest window of cores is the transient one"));
+                    + (window == null ? "" : "; the lowest window of cores is the transient one"
+                    + otherWindows(searched, window, core)));
         }
         if (core.skippedInBracket() > 0) {
             notes.add("convective core bracket widened past " + SkippedModelsText.of(byMass, core.bracket()));
@@ -274,6 +276,34 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         Span masses = new Span(cool.get(0).massMsun(), cool.get(cool.size() - 1).massMsun());
         notes.add("the cores at " + MassRangeText.of(masses) + " Msun sit in centres below "
                 + Math.round(COOL_CORE_CENTRAL_T / 1e6) + " MK, " + COOL_CORES_WORDS + ": " + COOL_CORES_CAUSE);
+    }
+
+    /**
+     * ", others at 0.8, 0.95-1.1 Msun": the runs of cored models above the transient window and below the lasting
+     * core, so that a window the lowest one hides behind a single coreless model can be seen; empty when none.
+     *
+     * @param searched the models of the core search, in increasing mass
+     */
+    private String otherWindows(List<CatalogueRow> searched, Span window, TransitionEstimate core) {
+        double lasting = core.found() ? core.massMsun() : Double.POSITIVE_INFINITY;
+        List<String> runs = new ArrayList<>();
+        double lo = Double.NaN;
+        double hi = Double.NaN;
+        for (CatalogueRow r : searched) {
+            double m = r.massMsun();
+            boolean cored = m > window.hi() && m < lasting && hasConvectiveCore(r);
+            if (cored) {
+                lo = Double.isNaN(lo) ? m : lo;
+                hi = m;
+            } else if (!Double.isNaN(lo)) {
+                runs.add(lo == hi ? CsvNumbers.format(lo) : CsvNumbers.format(lo) + "-" + CsvNumbers.format(hi));
+                lo = Double.NaN;
+            }
+        }
+        if (!Double.isNaN(lo)) {
+            runs.add(lo == hi ? CsvNumbers.format(lo) : CsvNumbers.format(lo) + "-" + CsvNumbers.format(hi));
+        }
+        return runs.isEmpty() ? "" : ", others at " + String.join(", ", runs) + " Msun";
     }
 
     private static String timesInWords(int times) {

@@ -57,7 +57,22 @@ class TransientCoreWindowTest {
                 ok(0.8, BOTH, 0.01), ok(0.9, ENV, 0), ok(1.3, BOTH, 0.05))).get(0);
         assertThat(t.transientCore()).isEqualTo(new Span(0.35, 0.35));
         assertThat(t.convCoreOnset().massMsun()).isEqualTo(1.3);
-        assertThat(t.notes()).contains("convective core changes 5 times with mass");
+        assertThat(t.notes()).contains("convective core changes 5 times with mass; the lowest window of cores is the "
+                + "transient one, others at 0.8 Msun");
+    }
+
+    @Test
+    void windowsHiddenBehindASingleCorelessModelAreNamed() {
+        // as the demo grid's Z = 0.014 slice at 600 Myr: cores at 0.3141-0.3234, none at 0.325, cores again from
+        // 0.3266 to 0.6531, then none until the lasting core
+        TransitionRow t = finder.find(List.of(ok(0.31, FC, 1), ok(0.3141, BOTH, 0.01), ok(0.3234, BOTH, 0.01),
+                ok(0.325, ENV, 0), ok(0.3266, BOTH, 0.02), ok(0.6531, BOTH, 0.01), ok(0.7, ENV, 0),
+                ok(1.0, ENV, 0), ok(1.1, BOTH, 0.01), ok(1.15, ENV, 0), ok(1.3, BOTH, 0.05))).get(0);
+        assertThat(t.transientCore()).isEqualTo(new Span(0.3141, 0.3234));
+        assertThat(t.notes()).contains("others at 0.3266-0.6531, 1.1 Msun");
+        TransitionRow noLastingCore = finder.find(List.of(ok(0.31, FC, 1), ok(0.3141, BOTH, 0.01),
+                ok(0.325, ENV, 0), ok(0.3266, BOTH, 0.02), ok(0.7, ENV, 0))).get(0);
+        assertThat(noLastingCore.notes()).contains("others at 0.3266 Msun");
     }
 
     @Test
