@@ -129,6 +129,29 @@ class CatalogueV2Test {
     }
 
     /**
+     * A 1.3 Msun star at 50 Myr (Z = 0.01) with a thin envelope, as the engine found it: base at m/M 1 - 1.952236e-6,
+     * mass 2.537907e-06 Msun (the review's example; zones.csv said 2.6e-06, its written ends' difference).
+     */
+    private static ModelOutcome thinEnvelope() {
+        double envelopeMassMsun = 1.952236e-6 * 1.3;
+        return outcome("t", 1.3, new ConvectiveStructure(List.of(new ConvectiveZone(0.0, 0.02676708, 0.0, 0.0652935),
+                new ConvectiveZone(1.0 - 1.952236e-6, 1.0, 0.9591172, 0.999985)),
+                StructureClass.CONV_CORE_AND_ENVELOPE, 0.02676708, 1.0 - 1.952236e-6, 0.9591172,
+                envelopeMassMsun * Constants.M_SUN, 0.29 * Constants.DAY, 3 * Constants.DAY));
+    }
+
+    @Test
+    void aThinEnvelopesZoneMassIsTheCatalogueEnvelopeMassNotItsWrittenEndsDifference() {
+        CatalogueRow row = OutcomeRows.toRow(thinEnvelope());
+        String cells = String.join(",", CatalogueWriter.cells(row));
+        assertThat(cells).contains(",0.999998,0.9591172,2.537907e-06,");
+        assertThat(ZoneTable.lines(row)).isEqualTo("""
+                t,0,core,0.0,0.02676708,0.0,0.0652935,0.0347972
+                t,1,envelope,0.999998,1.0,0.9591172,0.999985,2.537907e-06
+                """);
+    }
+
+    /**
      * A 1.8 Msun A star at 600 Myr (Z = 0.02, Teff ~7970 K) as the engine found it: a core, a shell just above it,
      * the helium II ionisation zone and the hydrogen (and helium I) ionisation zone reaching the surface, the
      * last two holding ~2e-9 and ~1e-10 of the mass (ends and masses measured on that model).
@@ -184,7 +207,9 @@ class CatalogueV2Test {
         java.nio.file.Files.writeString(dir.resolve("zones.csv"), zones);
         List<CatalogueRow> back = CatalogueReader.readWithZones(dir.resolve("catalogue.ecsv"),
                 dir.resolve("zones.csv"));
-        assertThat(back).extracting(CatalogueRow::zones).containsExactlyElementsOf(
-                rows.stream().map(CatalogueRow::zones).toList());
+        // each zone comes back onto its row as written: its own mass at the file's seven digits, so the same lines
+        assertThat(back).extracting(r -> r.zones().size()).containsExactly(1, 2, 2);
+        assertThat(back.stream().map(ZoneTable::lines).toList())
+                .containsExactlyElementsOf(rows.stream().map(ZoneTable::lines).toList());
     }
 }
