@@ -85,7 +85,9 @@ public final class CatalogueColumns {
                     "mass of the convective envelope (the whole star when fully convective), to seven significant"
                             + " digits however thin the envelope; zones.csv gives the same number; empty when none"),
             new Column(TURNOVER_TIME_DAYS, "d", REAL,
-                    "envelope turnover time half a pressure scale height above its base; empty when none"),
+                    "local convective turnover time alpha H_P / v_c of the envelope, half a pressure scale height"
+                            + " above its base but no higher than its radial midpoint; at r = R/2 when fully"
+                            + " convective; empty when none"),
             new Column(SOLVER_ITERATIONS, "", "int64", "Newton iterations for this model"),
             new Column(CRITERION, "", TEXT, "convective stability criterion: schwarzschild or ledoux"),
             new Column(OPACITY_SCALE, "", REAL, "factor applied to every opacity (1 = as published)"),

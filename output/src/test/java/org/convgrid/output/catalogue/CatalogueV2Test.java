@@ -88,6 +88,18 @@ class CatalogueV2Test {
     }
 
     @Test
+    void theTurnoverTimeDescriptionGivesWhereTheCodeEvaluatesIt() {
+        // ConvectiveZoneFinder: half a pressure scale height above the base, capped at the envelope's radial
+        // midpoint, and r = R/2 for a fully convective star (README, "Catalogue"); a review found the cap and the
+        // fully convective point missing from the file's own description
+        String description = CatalogueColumns.DESCRIBED.stream()
+                .filter(c -> c.name().equals(CatalogueColumns.TURNOVER_TIME_DAYS)).findFirst().orElseThrow()
+                .description();
+        assertThat(description).contains("half a pressure scale height above its base")
+                .contains("no higher than its radial midpoint").contains("R/2 when fully convective");
+    }
+
+    @Test
     void aFullyConvectiveStarIsOneWholeStarZoneWithEmptyCoreColumns() {
         CatalogueRow row = OutcomeRows.toRow(fullyConvective());
         assertThat(row.coreCzMassFrac()).isNaN();
