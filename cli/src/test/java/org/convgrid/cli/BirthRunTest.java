@@ -85,11 +85,15 @@ class BirthRunTest {
         LifeEventRow small = events.get(0);
         assertThat(small.radiativeCoreMyr()).as("never: fully convective").isNaN();
         assertThat(small.zamsMyr()).as("not reached on the computed track (to 60 Myr)").isNaN();
+        assertThat(small.radiativeCoreEndMyr()).as("no radiative core to end").isNaN();
+        assertThat(small.trackEndMyr()).as("the computed track's end").isEqualTo(60.0);
         LifeEventRow solar = events.get(1);
         // a 1 Msun star leaves its fully convective Hayashi track within its first few Myr (Iben 1965, ApJ 141, 993,
         // from memory; our engine gives 1.7 Myr)
         assertThat(solar.radiativeCoreMyr()).isBetween(1.0, 10.0);
         assertThat(solar.zamsMyr()).isBetween(30.0, 60.0);
+        assertThat(solar.radiativeCoreEndMyr()).as("its radiative core lasts").isNaN();
+        assertThat(solar.trackEndMyr()).isEqualTo(60.0);
 
         CliHarness.Execution two = run("two", 2);
         assertThat(two.code()).as(two.err()).isZero();

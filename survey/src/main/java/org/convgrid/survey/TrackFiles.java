@@ -55,7 +55,8 @@ public final class TrackFiles implements StarTrackSink {
             AtomicFiles.write(target, out -> TrackWriter.writeZones(points, out));
             if (lifeEvents != null) {
                 target = layout.lifeEvents();
-                LifeEventRow row = LifeEventRow.of(id, first, lifeEvents);
+                double trackEnd = points.isEmpty() ? Double.NaN : points.get(points.size() - 1).age();
+                LifeEventRow row = LifeEventRow.of(id, first, lifeEvents, trackEnd);
                 interruption.write(() -> events.append(row));
             }
         } catch (IOException e) {

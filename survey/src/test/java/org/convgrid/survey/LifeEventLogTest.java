@@ -22,8 +22,8 @@ class LifeEventLogTest {
     private static LifeEventRow star(String id, double massMsun, double exhaustedMyr) {
         ModelRequest first = new ModelRequest(id + "-a00", massMsun * Constants.M_SUN, 0.02, 0.28, 0.0,
                 PhysicsOptions.DEFAULT);
-        return LifeEventRow.of(id, first, new LifeEvents(1.0 * MYR, 30.0 * MYR, Double.NaN, Double.NaN, Double.NaN,
-                exhaustedMyr * MYR));
+        return LifeEventRow.of(id, first, new LifeEvents(1.0 * MYR, Double.NaN, 30.0 * MYR, Double.NaN, Double.NaN,
+                Double.NaN, exhaustedMyr * MYR), 2000.0 * MYR);
     }
 
     @Test
@@ -45,7 +45,9 @@ class LifeEventLogTest {
                 "p0-z00-m002");
         assertThat(rows.get(0).liHalvedMyr()).isEqualTo(12.5);
         assertThat(rows.get(0).centralHExhaustedMyr()).isNaN();
+        assertThat(rows.get(0).trackEndMyr()).as("unknown to the older table").isNaN();
         assertThat(rows.get(2).centralHExhaustedMyr()).isEqualTo(1417.0);
+        assertThat(rows.get(2).trackEndMyr()).isEqualTo(2000.0);
     }
 
     @Test

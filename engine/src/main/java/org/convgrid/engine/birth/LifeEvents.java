@@ -2,11 +2,16 @@ package org.convgrid.engine.birth;
 
 /**
  * The ages (s since birth) at which a star's life changes; NaN for an event that did not happen on the computed
- * track. Ages of structural events are those of the first model that shows them (resolution: one step); the
+ * track. Ages of the convective core's onset and end and of the radiative core's end are those of the first model
+ * that shows them (resolution: one step); the radiative core's appearance (on the centre's stability excess), the
  * zero-age main sequence and the lithium halving are interpolated linearly in age between the two models that
  * bracket them.
  *
  * @param radiativeCore the centre first stops being convective (never for a fully convective star)
+ * @param radiativeCoreEnd after that, the star is fully convective again (one zone from the centre to the surface,
+ *                         {@link org.convgrid.engine.convection.StructureClass#FULLY_CONVECTIVE}) and stays so to
+ *                         the end of the computed track: the age of the last such return; NaN while the track ends
+ *                         with a radiative region (or the star never had a radiative core)
  * @param zeroAgeMainSequence L_nuc first reaches
  *                            {@link org.convgrid.engine.evolution.NuclearLuminosity#ZERO_AGE_FRACTION} of L
  * @param convectiveCoreOnset after the radiative core appeared, a convective core first appears: a central zone
@@ -18,12 +23,13 @@ package org.convgrid.engine.birth;
  * @param centralHydrogenExhausted the central hydrogen falls below the evolution's end value, which ends the main
  *                                 sequence ({@link org.convgrid.engine.evolution.EvolutionResult#exhaustionAge()})
  */
-public record LifeEvents(double radiativeCore, double zeroAgeMainSequence, double convectiveCoreOnset,
-                         double convectiveCoreEnd, double lithiumHalved, double centralHydrogenExhausted) {
+public record LifeEvents(double radiativeCore, double radiativeCoreEnd, double zeroAgeMainSequence,
+                         double convectiveCoreOnset, double convectiveCoreEnd, double lithiumHalved,
+                         double centralHydrogenExhausted) {
 
     /** The same events with the age at which the central hydrogen ran out (NaN: not on the computed track). */
     public LifeEvents withCentralHydrogenExhausted(double age) {
-        return new LifeEvents(radiativeCore, zeroAgeMainSequence, convectiveCoreOnset, convectiveCoreEnd,
-                lithiumHalved, age);
+        return new LifeEvents(radiativeCore, radiativeCoreEnd, zeroAgeMainSequence, convectiveCoreOnset,
+                convectiveCoreEnd, lithiumHalved, age);
     }
 }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.convgrid.engine.convection.ConvectiveZone;
+import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.engine.evolution.NuclearLuminosity;
 import org.convgrid.engine.evolution.StepObserver;
 import org.convgrid.engine.evolution.SurfaceComposition;
@@ -19,6 +20,8 @@ final class LifeRecorder implements StepObserver {
     private final List<double[]> rows = new ArrayList<>();
     private double birthLithium = Double.NaN;
     private double radiativeCore = Double.NaN;
+    /** Age of the first model of the current run of fully convective models; NaN while the last model was not. */
+    private double fullyConvectiveSince = Double.NaN;
     private double zams = Double.NaN;
     private double coreOnset = Double.NaN;
     private double coreEnd = Double.NaN;
@@ -47,6 +50,15 @@ final class LifeRecorder implements StepObserver {
         boolean radiativeCentre = zones.isEmpty() || zones.get(0).innerMassFraction() > 0.0;
         boolean core = !radiativeCentre && zones.get(0).outerMassFraction() < SurfaceComposition.ENVELOPE_TOP
                 && zones.get(0).outerMassFraction() > coreThreshold;
+        // the radiative core's end is the star's return to full convection, whichever way the radiative region
+        // goes (the envelope's base sinking to the centre, or a central zone growing out to meet the envelope), and
+        // only a return that lasts counts: a later radiative region forgets it
+        boolean fullyConvective = model.convection().structureClass() == StructureClass.FULLY_CONVECTIVE;
+        if (!fullyConvective) {
+            fullyConvectiveSince = Double.NaN;
+        } else if (Double.isNaN(fullyConvectiveSince)) {
+            fullyConvectiveSince = age;
+        }
         if (!rows.isEmpty()) {
             if (Double.isNaN(radiativeCore) && radiativeCentre) {
                 // the centre turns radiative when its nabla_rad falls below the stability limit: interpolated
@@ -97,7 +109,8 @@ final class LifeRecorder implements StepObserver {
 
     /** The events seen in the models; the end of the main sequence is the evolution's to add. */
     LifeEvents events() {
-        return new LifeEvents(radiativeCore, zams, coreOnset, coreEnd, lithiumHalved, Double.NaN);
+        double radiativeCoreEnd = Double.isNaN(radiativeCore) ? Double.NaN : fullyConvectiveSince;
+        return new LifeEvents(radiativeCore, radiativeCoreEnd, zams, coreOnset, coreEnd, lithiumHalved, Double.NaN);
     }
 
     /** Per recorded model: age, 1 on the main sequence, L_nuc/L, surface lithium, central deuterium. */

@@ -12,7 +12,8 @@ import java.util.List;
  * @param envelopeBaseMassFraction m/M at the base of the convective envelope; 1 when there is none
  * @param envelopeBaseRadiusFraction r/R at the base of the convective envelope; 1 when there is none
  * @param envelopeMass mass of the convective envelope, g
- * @param turnoverTimeLocal envelope turnover time l_m/v_c half a pressure scale height above its base, s; NaN when none
+ * @param turnoverTimeLocal envelope turnover time l_m/v_c half a pressure scale height above its base, no higher than
+ *        its radial midpoint, at r = R/2 when fully convective ({@link ConvectiveZoneFinder}), s; NaN when none
  * @param turnoverTimeGlobal integral of dr/v_c across the envelope, s; NaN when none
  */
 public record ConvectiveStructure(List<ConvectiveZone> zones, StructureClass structureClass,

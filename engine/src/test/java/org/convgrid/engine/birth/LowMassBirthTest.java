@@ -22,6 +22,7 @@ class LowMassBirthTest {
             assertThat(p.step().convectiveZones().get(0).innerMassFraction()).isZero();
         }
         assertThat(t.events().radiativeCore()).isNaN();
+        assertThat(t.events().radiativeCoreEnd()).isNaN();
         assertThat(t.models().get(0).model().convection().structureClass()).isEqualTo(StructureClass.FULLY_CONVECTIVE);
     }
 
@@ -87,6 +88,28 @@ class LowMassBirthTest {
         assertThat(t.events().radiativeCore() / MYR).isCloseTo(38.7, within(4.0));
         assertThat(last / MYR).isCloseTo(167.7, within(10.0));
         assertThat(t.models().get(0).model().convection().structureClass()).isEqualTo(StructureClass.FULLY_CONVECTIVE);
+        // the radiative core's end (life_events.csv radiative_core_end_myr, README): the first step of the star's
+        // lasting return to full convection, one zone from the centre to the surface; a review found the table gave
+        // the core's appearance and nothing after, while the catalogue called the star fully convective again.
+        // Checked against the track's own steps (its definition, not a physics value)
+        double end = t.events().radiativeCoreEnd();
+        assertThat(end).isGreaterThan(last);
+        TrackPoint before = null;
+        for (TrackPoint p : t.points()) {
+            if (p.age() >= end) {
+                assertThat(wholeStar(p)).as("fully convective at %.1f Myr", p.age() / MYR).isTrue();
+            } else {
+                before = p;
+            }
+        }
+        assertThat(wholeStar(before)).as("fully convective at %.1f Myr", before.age() / MYR).isFalse();
+    }
+
+    /** One convective zone from the centre to the surface (within the catalogue's 1e-6 surface skin). */
+    private static boolean wholeStar(TrackPoint p) {
+        var zones = p.step().convectiveZones();
+        return zones.size() == 1 && zones.get(0).innerMassFraction() == 0.0
+                && zones.get(0).outerMassFraction() >= 1.0 - 1.0e-6;
     }
 
     @Test

@@ -76,12 +76,18 @@ public final class CatalogueColumns {
             new Column(CORE_CZ_MASS_FRAC, "", REAL, "m/M at the top of the convective core; empty when none"),
             new Column(CORE_CZ_RADIUS_FRAC, "", REAL, "r/R at the top of the convective core; empty when none"),
             new Column(ENV_CZ_BASE_MASS_FRAC, "", REAL,
-                    "m/M at the base of the convective envelope; empty when none, 0 when fully convective"),
+                    "m/M at the base of the convective envelope; empty when none, 0 when fully convective; seven"
+                            + " significant digits of m/M, so few of a thin envelope's 1 - m/M (0.999998 is one):"
+                            + " its mass is in env_cz_mass_msun"),
             new Column(ENV_CZ_BASE_RADIUS_FRAC, "", REAL,
                     "r/R at the base of the convective envelope; empty when none, 0 when fully convective"),
-            new Column(ENV_CZ_MASS_MSUN, "solMass", REAL, "mass of the convective envelope; empty when none"),
+            new Column(ENV_CZ_MASS_MSUN, "solMass", REAL,
+                    "mass of the convective envelope (the whole star when fully convective), to seven significant"
+                            + " digits however thin the envelope; zones.csv gives the same number; empty when none"),
             new Column(TURNOVER_TIME_DAYS, "d", REAL,
-                    "envelope turnover time half a pressure scale height above its base; empty when none"),
+                    "local convective turnover time alpha H_P / v_c of the envelope, half a pressure scale height"
+                            + " above its base but no higher than its radial midpoint; at r = R/2 when fully"
+                            + " convective; empty when none"),
             new Column(SOLVER_ITERATIONS, "", "int64", "Newton iterations for this model"),
             new Column(CRITERION, "", TEXT, "convective stability criterion: schwarzschild or ledoux"),
             new Column(OPACITY_SCALE, "", REAL, "factor applied to every opacity (1 = as published)"),

@@ -8,14 +8,14 @@ package org.convgrid.output.catalogue;
  * @param massFracOuter m/M at its top
  * @param radiusFracInner r/R at its bottom
  * @param radiusFracOuter r/R at its top
- * @param zoneMassMsun for a zone whose two m/M ends are written alike (a surface ionisation zone of a hot star,
- *        under ~5e-8 of the mass, its extent in r/R), its mass in Msun as the model gave it or zones.csv held it;
- *        NaN for every other zone, whose mass {@link ZoneTable} takes from its written ends
+ * @param zoneMassMsun the zone's own mass in Msun, as the model gave it or zones.csv held it (never the difference
+ *        of the written ends, which keep seven digits of m/M: one significant digit of a thin envelope's mass);
+ *        NaN for a zone made from its ends alone, whose mass {@link ZoneTable#zoneMass} then takes from them
  */
 public record CatalogueZone(ZoneKind kind, double massFracInner, double massFracOuter, double radiusFracInner,
                             double radiusFracOuter, double zoneMassMsun) {
 
-    /** A zone whose mass is taken from its ends. */
+    /** A zone known by its ends alone (made by hand, as in tests): its mass is taken from them. */
     public CatalogueZone(ZoneKind kind, double massFracInner, double massFracOuter, double radiusFracInner,
                          double radiusFracOuter) {
         this(kind, massFracInner, massFracOuter, radiusFracInner, radiusFracOuter, Double.NaN);

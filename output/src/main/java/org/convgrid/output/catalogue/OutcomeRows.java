@@ -96,10 +96,14 @@ public final class OutcomeRows {
      * precision: both their m/M ends and their r/R ends would be written as the same number. A zone empty in m/M
      * alone is kept: the hydrogen and helium ionisation zones of A stars hold ~1e-10 to 1e-8 of the mass, so both
      * their m/M ends are written 1.0, yet they span up to ~1 % of the radius with tens of mesh points (measured:
-     * 1.8 Msun, Z = 0.02, 600 Myr: r/R 0.9908-0.9941 and 0.9986-1), and pulsation work needs them. Such a zone
-     * carries its own mass, since its ends cannot give it.
+     * 1.8 Msun, Z = 0.02, 600 Myr: r/R 0.9908-0.9941 and 0.9986-1), and pulsation work needs them. Every zone
+     * carries its own mass, not the difference of its written ends: those keep seven digits of m/M, so a thin
+     * envelope whose base is written 0.999998 would get one significant digit (1.3 Msun, Z = 0.01, 50 Myr: 2.6e-06
+     * Msun from its ends, 2.537907e-06 its own). The envelope (or whole star) takes the very value of the catalogue's
+     * env_cz_mass_msun, so that the two files never disagree in a digit.
      */
     static List<CatalogueZone> zones(ConvectiveStructure c, double starMassMsun) {
+        double envelopeMassMsun = c.envelopeMass() / Constants.M_SUN;
         List<ConvectiveZone> all = c.zones();
         StructureClass kind = c.structureClass();
         List<CatalogueZone> zones = new ArrayList<>(all.size());
@@ -124,8 +128,9 @@ public final class OutcomeRows {
             } else {
                 zoneKind = ZoneKind.SHELL;
             }
-            double massWhereEndsCannotTell = writtenAlike(lo, hi) ? (hi - lo) * starMassMsun : Double.NaN;
-            zones.add(new CatalogueZone(zoneKind, lo, hi, rLo, rHi, massWhereEndsCannotTell));
+            boolean envelope = zoneKind == ZoneKind.ENVELOPE || zoneKind == ZoneKind.WHOLE_STAR;
+            double ownMassMsun = envelope ? envelopeMassMsun : (hi - lo) * starMassMsun;
+            zones.add(new CatalogueZone(zoneKind, lo, hi, rLo, rHi, ownMassMsun));
         }
         return zones;
     }

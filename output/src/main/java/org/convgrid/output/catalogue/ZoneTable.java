@@ -54,19 +54,18 @@ public final class ZoneTable {
     }
 
     /**
-     * Msun: from the ends as written, so that the zone mass comes out the same whether the row was just computed or
-     * read back; for a zone whose m/M ends are written alike (a surface ionisation zone of a hot star: 1.0 and 1.0,
-     * its extent in r/R) the zone's own mass, which a read keeps from the file. The zone_mass_msun of zones.csv.
+     * Msun: the zone's own mass, which a read keeps from the file; for a zone known by its ends alone (NaN own mass),
+     * the difference of its ends as written, so that it comes out the same whether the row was just made or read
+     * back. The zone_mass_msun of zones.csv.
      */
     public static double zoneMass(CatalogueZone z, double starMassMsun) {
-        double fromEnds = (asWritten(z.massFracOuter()) - asWritten(z.massFracInner())) * asWritten(starMassMsun);
-        return fromEnds == 0.0 && !Double.isNaN(z.zoneMassMsun()) ? z.zoneMassMsun() : fromEnds;
+        if (!Double.isNaN(z.zoneMassMsun())) {
+            return z.zoneMassMsun();
+        }
+        return (asWritten(z.massFracOuter()) - asWritten(z.massFracInner())) * asWritten(starMassMsun);
     }
 
-    /**
-     * A value as the files hold it, so that the zone mass comes out the same whether the row was just computed or
-     * read back (a merge rewrites the zones of rows it read).
-     */
+    /** A value as the files hold it (a merge rewrites the zones of rows it read). */
     private static double asWritten(double value) {
         return CsvNumbers.parse(CsvNumbers.format(value));
     }
@@ -82,12 +81,10 @@ public final class ZoneTable {
             Map<String, List<CatalogueZone>> zones = new LinkedHashMap<>();
             for (CSVRecord r : parser) {
                 try {
-                    double inner = CsvNumbers.parse(r.get(3));
-                    double outer = CsvNumbers.parse(r.get(4));
-                    double massWhereEndsCannotTell = inner == outer ? CsvNumbers.parse(r.get(7)) : Double.NaN;
+                    // the zone's own mass is kept as the file holds it: its ends cannot give it back
                     zones.computeIfAbsent(r.get(0), id -> new ArrayList<>()).add(new CatalogueZone(
-                            ZoneKind.fromLabel(r.get(2)), inner, outer, CsvNumbers.parse(r.get(5)),
-                            CsvNumbers.parse(r.get(6)), massWhereEndsCannotTell));
+                            ZoneKind.fromLabel(r.get(2)), CsvNumbers.parse(r.get(3)), CsvNumbers.parse(r.get(4)),
+                            CsvNumbers.parse(r.get(5)), CsvNumbers.parse(r.get(6)), CsvNumbers.parse(r.get(7))));
                 } catch (IllegalArgumentException e) {
                     throw new OutputFormatException(file + " line " + (r.getRecordNumber() + 1) + ": "
                             + e.getMessage(), e);

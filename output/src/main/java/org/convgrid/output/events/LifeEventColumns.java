@@ -12,21 +12,25 @@ public final class LifeEventColumns {
     public static final String MIXING_LENGTH = "mixing_length";
     public static final String OVERSHOOT = "overshoot_hp";
     public static final String RADIATIVE_CORE = "radiative_core_myr";
+    public static final String RADIATIVE_CORE_END = "radiative_core_end_myr";
     public static final String ZAMS = "zams_myr";
     public static final String CONV_CORE_ONSET = "conv_core_onset_myr";
     public static final String CONV_CORE_END = "conv_core_end_myr";
     public static final String LI_HALVED = "li_halved_myr";
     public static final String CENTRAL_H_EXHAUSTED = "central_h_exhausted_myr";
+    public static final String TRACK_END = "track_end_myr";
 
     /** Every column, in the order the writer writes them. */
     public static final List<String> ALL = List.of(TRACK_ID, MASS, Z_INIT, Y_INIT, MIXING_LENGTH, OVERSHOOT,
-            RADIATIVE_CORE, ZAMS, CONV_CORE_ONSET, CONV_CORE_END, LI_HALVED, CENTRAL_H_EXHAUSTED);
+            RADIATIVE_CORE, RADIATIVE_CORE_END, ZAMS, CONV_CORE_ONSET, CONV_CORE_END, LI_HALVED, CENTRAL_H_EXHAUSTED,
+            TRACK_END);
 
     /**
-     * The columns every readable table has: all but {@link #CENTRAL_H_EXHAUSTED}, which tables written before it was
-     * added lack (read as empty).
+     * The columns every readable table has. Tables written before {@link #CENTRAL_H_EXHAUSTED},
+     * {@link #RADIATIVE_CORE_END} and {@link #TRACK_END} were added lack them (read as empty).
      */
-    public static final List<String> REQUIRED = ALL.subList(0, ALL.size() - 1);
+    public static final List<String> REQUIRED = List.of(TRACK_ID, MASS, Z_INIT, Y_INIT, MIXING_LENGTH, OVERSHOOT,
+            RADIATIVE_CORE, ZAMS, CONV_CORE_ONSET, CONV_CORE_END, LI_HALVED);
 
     private LifeEventColumns() {
     }

@@ -8,6 +8,8 @@ import static org.convgrid.output.events.LifeEventColumns.MASS;
 import static org.convgrid.output.events.LifeEventColumns.MIXING_LENGTH;
 import static org.convgrid.output.events.LifeEventColumns.OVERSHOOT;
 import static org.convgrid.output.events.LifeEventColumns.RADIATIVE_CORE;
+import static org.convgrid.output.events.LifeEventColumns.RADIATIVE_CORE_END;
+import static org.convgrid.output.events.LifeEventColumns.TRACK_END;
 import static org.convgrid.output.events.LifeEventColumns.TRACK_ID;
 import static org.convgrid.output.events.LifeEventColumns.Y_INIT;
 import static org.convgrid.output.events.LifeEventColumns.ZAMS;
@@ -29,7 +31,8 @@ import org.convgrid.output.OutputFormatException;
 /**
  * Reads {@code life_events.csv} by column name, in file order. A row cut short by an interruption (the file grows
  * row by row during a run) is left out; every other unreadable row is an error. A table written before
- * {@code central_h_exhausted_myr} existed reads with that age empty.
+ * {@code central_h_exhausted_myr}, {@code radiative_core_end_myr} or {@code track_end_myr} existed reads with those
+ * ages empty.
  */
 public final class LifeEventReader {
 
@@ -58,16 +61,17 @@ public final class LifeEventReader {
             if (!parser.getHeaderNames().containsAll(LifeEventColumns.REQUIRED)) {
                 throw new OutputFormatException("life-events table needs the columns " + LifeEventColumns.REQUIRED);
             }
-            boolean hasExhaustion = parser.getHeaderNames().contains(CENTRAL_H_EXHAUSTED);
+            List<String> header = parser.getHeaderNames();
             for (CSVRecord r : parser) {
                 if (!r.isConsistent()) {
                     continue;
                 }
                 try {
                     rows.add(new LifeEventRow(r.get(TRACK_ID), n(r, MASS), n(r, Z_INIT), n(r, Y_INIT),
-                            n(r, MIXING_LENGTH), n(r, OVERSHOOT), n(r, RADIATIVE_CORE), n(r, ZAMS),
-                            n(r, CONV_CORE_ONSET), n(r, CONV_CORE_END), n(r, LI_HALVED),
-                            hasExhaustion ? n(r, CENTRAL_H_EXHAUSTED) : Double.NaN));
+                            n(r, MIXING_LENGTH), n(r, OVERSHOOT), n(r, RADIATIVE_CORE),
+                            ifPresent(header, r, RADIATIVE_CORE_END), n(r, ZAMS), n(r, CONV_CORE_ONSET),
+                            n(r, CONV_CORE_END), n(r, LI_HALVED), ifPresent(header, r, CENTRAL_H_EXHAUSTED),
+                            ifPresent(header, r, TRACK_END)));
                 } catch (IllegalArgumentException e) {
                     throw new OutputFormatException("life-events row " + r.getRecordNumber() + ": " + e.getMessage(),
                             e);
@@ -79,5 +83,10 @@ public final class LifeEventReader {
 
     private static double n(CSVRecord r, String column) {
         return CsvNumbers.parse(r.get(column));
+    }
+
+    /** A column that tables of an earlier layout lack: NaN (empty) there. */
+    private static double ifPresent(List<String> header, CSVRecord r, String column) {
+        return header.contains(column) ? n(r, column) : Double.NaN;
     }
 }

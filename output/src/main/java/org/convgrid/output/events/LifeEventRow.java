@@ -16,15 +16,20 @@ import org.convgrid.engine.units.Constants;
  * @param mixingLength alpha, pressure scale heights
  * @param overshootHp overshoot length, pressure scale heights
  * @param radiativeCoreMyr the centre first stops being convective, Myr since birth (never: fully convective)
+ * @param radiativeCoreEndMyr the star is fully convective again, for good: its last return to full convection,
+ *        Myr since birth (NaN while the track ends with a radiative region)
  * @param zamsMyr the zero-age main sequence is reached, Myr since birth
  * @param convCoreOnsetMyr a lasting convective core first appears, Myr since birth
  * @param convCoreEndMyr that core vanishes, Myr since birth
  * @param liHalvedMyr the surface lithium falls to half its birth value, Myr since birth
  * @param centralHExhaustedMyr the central hydrogen runs out (the end of the main sequence), Myr since birth
+ * @param trackEndMyr the last age the computed track reached, Myr since birth: an empty event cell means "not by
+ *        this age" (NaN in a table written before the column existed)
  */
 public record LifeEventRow(String trackId, double massMsun, double zInit, double yInit, double mixingLength,
-                           double overshootHp, double radiativeCoreMyr, double zamsMyr, double convCoreOnsetMyr,
-                           double convCoreEndMyr, double liHalvedMyr, double centralHExhaustedMyr) {
+                           double overshootHp, double radiativeCoreMyr, double radiativeCoreEndMyr, double zamsMyr,
+                           double convCoreOnsetMyr, double convCoreEndMyr, double liHalvedMyr,
+                           double centralHExhaustedMyr, double trackEndMyr) {
 
     private static final double MYR = 1.0e6 * Constants.YEAR;
 
@@ -38,12 +43,13 @@ public record LifeEventRow(String trackId, double massMsun, double zInit, double
      * @param trackId the star's track id
      * @param first the star's first request (mass, composition, physics)
      * @param events its life events, s since birth
+     * @param trackEnd the age of the track's last step, s since birth
      */
-    public static LifeEventRow of(String trackId, ModelRequest first, LifeEvents events) {
+    public static LifeEventRow of(String trackId, ModelRequest first, LifeEvents events, double trackEnd) {
         return new LifeEventRow(trackId, first.mass() / Constants.M_SUN, first.initialMetals(),
                 first.initialHelium(), first.physics().mixingLength(), first.physics().overshoot(),
-                events.radiativeCore() / MYR, events.zeroAgeMainSequence() / MYR,
+                events.radiativeCore() / MYR, events.radiativeCoreEnd() / MYR, events.zeroAgeMainSequence() / MYR,
                 events.convectiveCoreOnset() / MYR, events.convectiveCoreEnd() / MYR, events.lithiumHalved() / MYR,
-                events.centralHydrogenExhausted() / MYR);
+                events.centralHydrogenExhausted() / MYR, trackEnd / MYR);
     }
 }

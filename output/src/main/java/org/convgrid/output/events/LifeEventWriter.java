@@ -26,9 +26,10 @@ public final class LifeEventWriter {
     public static String line(LifeEventRow r) {
         return String.join(",", r.trackId(), CsvNumbers.format(r.massMsun()), CsvNumbers.format(r.zInit()),
                 CsvNumbers.format(r.yInit()), CsvNumbers.format(r.mixingLength()), CsvNumbers.format(r.overshootHp()),
-                CsvNumbers.format(r.radiativeCoreMyr()), CsvNumbers.format(r.zamsMyr()),
-                CsvNumbers.format(r.convCoreOnsetMyr()), CsvNumbers.format(r.convCoreEndMyr()),
-                CsvNumbers.format(r.liHalvedMyr()), CsvNumbers.format(r.centralHExhaustedMyr())) + "\n";
+                CsvNumbers.format(r.radiativeCoreMyr()), CsvNumbers.format(r.radiativeCoreEndMyr()),
+                CsvNumbers.format(r.zamsMyr()), CsvNumbers.format(r.convCoreOnsetMyr()),
+                CsvNumbers.format(r.convCoreEndMyr()), CsvNumbers.format(r.liHalvedMyr()),
+                CsvNumbers.format(r.centralHExhaustedMyr()), CsvNumbers.format(r.trackEndMyr())) + "\n";
     }
 
     /**

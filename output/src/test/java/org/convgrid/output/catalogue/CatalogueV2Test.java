@@ -88,6 +88,18 @@ class CatalogueV2Test {
     }
 
     @Test
+    void theTurnoverTimeDescriptionGivesWhereTheCodeEvaluatesIt() {
+        // ConvectiveZoneFinder: half a pressure scale height above the base, capped at the envelope's radial
+        // midpoint, and r = R/2 for a fully convective star (README, "Catalogue"); a review found the cap and the
+        // fully convective point missing from the file's own description
+        String description = CatalogueColumns.DESCRIBED.stream()
+                .filter(c -> c.name().equals(CatalogueColumns.TURNOVER_TIME_DAYS)).findFirst().orElseThrow()
+                .description();
+        assertThat(description).contains("half a pressure scale height above its base")
+                .contains("no higher than its radial midpoint").contains("R/2 when fully convective");
+    }
+
+    @Test
     void aFullyConvectiveStarIsOneWholeStarZoneWithEmptyCoreColumns() {
         CatalogueRow row = OutcomeRows.toRow(fullyConvective());
         assertThat(row.coreCzMassFrac()).isNaN();
@@ -125,6 +137,29 @@ class CatalogueV2Test {
         assertThat(ZoneTable.lines(row)).isEqualTo("""
                 b,0,core,0.0,0.04,0.0,0.06,0.048
                 b,1,envelope,0.99,1.0,0.85,1.0,0.012
+                """);
+    }
+
+    /**
+     * A 1.3 Msun star at 50 Myr (Z = 0.01) with a thin envelope, as the engine found it: base at m/M 1 - 1.952236e-6,
+     * mass 2.537907e-06 Msun (the review's example; zones.csv said 2.6e-06, its written ends' difference).
+     */
+    private static ModelOutcome thinEnvelope() {
+        double envelopeMassMsun = 1.952236e-6 * 1.3;
+        return outcome("t", 1.3, new ConvectiveStructure(List.of(new ConvectiveZone(0.0, 0.02676708, 0.0, 0.0652935),
+                new ConvectiveZone(1.0 - 1.952236e-6, 1.0, 0.9591172, 0.999985)),
+                StructureClass.CONV_CORE_AND_ENVELOPE, 0.02676708, 1.0 - 1.952236e-6, 0.9591172,
+                envelopeMassMsun * Constants.M_SUN, 0.29 * Constants.DAY, 3 * Constants.DAY));
+    }
+
+    @Test
+    void aThinEnvelopesZoneMassIsTheCatalogueEnvelopeMassNotItsWrittenEndsDifference() {
+        CatalogueRow row = OutcomeRows.toRow(thinEnvelope());
+        String cells = String.join(",", CatalogueWriter.cells(row));
+        assertThat(cells).contains(",0.999998,0.9591172,2.537907e-06,");
+        assertThat(ZoneTable.lines(row)).isEqualTo("""
+                t,0,core,0.0,0.02676708,0.0,0.0652935,0.0347972
+                t,1,envelope,0.999998,1.0,0.9591172,0.999985,2.537907e-06
                 """);
     }
 
@@ -184,7 +219,9 @@ class CatalogueV2Test {
         java.nio.file.Files.writeString(dir.resolve("zones.csv"), zones);
         List<CatalogueRow> back = CatalogueReader.readWithZones(dir.resolve("catalogue.ecsv"),
                 dir.resolve("zones.csv"));
-        assertThat(back).extracting(CatalogueRow::zones).containsExactlyElementsOf(
-                rows.stream().map(CatalogueRow::zones).toList());
+        // each zone comes back onto its row as written: its own mass at the file's seven digits, so the same lines
+        assertThat(back).extracting(r -> r.zones().size()).containsExactly(1, 2, 2);
+        assertThat(back.stream().map(ZoneTable::lines).toList())
+                .containsExactlyElementsOf(rows.stream().map(ZoneTable::lines).toList());
     }
 }

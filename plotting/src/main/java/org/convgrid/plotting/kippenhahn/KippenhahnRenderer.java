@@ -119,12 +119,20 @@ public final class KippenhahnRenderer {
         List<String> notes = new java.util.ArrayList<>(data.notes());
         for (ZoneKind kind : seen) {
             if (!shown.contains(kind)) {
-                notes.add("a " + kind.label() + " too thin to show here"
-                        + (y == ZoneCoordinate.MASS_FRACTION ? " (see the depth chart)" : ""));
+                notes.add(tooThinNote(kind, y));
             }
         }
         ChartNotes.addRightOfPlot(chart, notes);
         return chart;
+    }
+
+    /**
+     * The note naming a zone kind too thin to see anywhere on this axis: a sentence, as every chart note is (it began
+     * in lower case, "a convective shell too thin to show here", beside the capitalised notes of the same chart).
+     */
+    static String tooThinNote(ZoneKind kind, ZoneCoordinate y) {
+        return "Some " + kind.plural() + " are too thin to show here"
+                + (y == ZoneCoordinate.MASS_FRACTION ? " (see the depth chart)." : ".");
     }
 
     private static XYSeries polygon(StyledChart chart, String name, List<AgeRect> band, Color fill,

@@ -35,6 +35,26 @@ class KippenhahnTest {
     }
 
     @Test
+    void everyNoteOfTheAgeChartsIsASentenceOnOneLine() {
+        // house style of chart notes (Kippenhahn.BURNING_NOTE, TOO_SHORT_NOTE, the zone maps' notes): a capital
+        // first, a full stop last; a review found "a convective shell too thin to show here" on the depth charts
+        List<String> notes = new ArrayList<>(List.of(Kippenhahn.BURNING_NOTE, Kippenhahn.TOO_SHORT_NOTE));
+        for (ZoneKind kind : ZoneKind.values()) {
+            for (ZoneCoordinate y : ZoneCoordinate.values()) {
+                notes.add(KippenhahnRenderer.tooThinNote(kind, y));
+            }
+        }
+        assertThat(notes).allSatisfy(note -> {
+            assertThat(Character.isUpperCase(note.charAt(0))).as(note).isTrue();
+            assertThat(note).endsWith(".").doesNotContain("\n");
+        });
+        assertThat(KippenhahnRenderer.tooThinNote(ZoneKind.SHELL, ZoneCoordinate.SURFACE_DEPTH))
+                .isEqualTo("Some convective shells are too thin to show here.");
+        assertThat(KippenhahnRenderer.tooThinNote(ZoneKind.SHELL, ZoneCoordinate.MASS_FRACTION))
+                .isEqualTo("Some convective shells are too thin to show here (see the depth chart).");
+    }
+
+    @Test
     void shadedIntervalsAreTheTrackZonesHeldToTheNextStep() throws Exception {
         for (double m : new double[] {1.0, 2.0}) {
             List<TrackStep> steps = track(m).steps();
