@@ -51,8 +51,8 @@ final class CalibrateSunCommand implements Callable<Integer> {
 
     @Option(names = "--format", defaultValue = "table", paramLabel = "table|csv",
             description = "table (readable) or csv: a header row and one row of mixing_length, y_init, z_init (the "
-                    + "calibrated values), then the catalogue columns of the calibrated model (model_id to "
-                    + "solver_iterations and any after them), then "
+                    + "calibrated values), then the other catalogue columns of the calibrated model (model_id to "
+                    + "solver_iterations and any after them; each column once), then "
                     + SolarCalibrationReport.ZAMS_LUMINOSITY_LSUN + " (Lsun), "
                     + SolarCalibrationReport.MS_LIFETIME_GYR + " (Gyr), " + SolarCalibrationReport.Z_OVER_X_INIT
                     + ", " + SolarCalibrationReport.Y_SURFACE + " and " + SolarCalibrationReport.Z_OVER_X_SURFACE
