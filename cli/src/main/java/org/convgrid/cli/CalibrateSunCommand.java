@@ -11,6 +11,9 @@ import org.convgrid.engine.calibration.SolarCalibration;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.profile.ProfileMeta;
+import org.convgrid.output.profile.ProfileRows;
+import org.convgrid.output.profile.ProfileWriter;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParentCommand;
@@ -20,7 +23,7 @@ import picocli.CommandLine.ParentCommand;
         description = {"Find the mixing length and initial helium that give a 1 Msun model the Sun's radius and "
                 + "luminosity (IAU 2015 nominal values) at its age, and the initial Z/X that leaves the envelope at "
                 + "the present Z/X after helium and metals have settled. Prints them and writes a physics preset "
-                + "for grid files.",
+                + "for grid files (and, with --profile, the calibrated model's profile).",
             "Takes a dozen or more full evolutions (about a minute)."})
 final class CalibrateSunCommand implements Callable<Integer> {
 
@@ -51,8 +54,8 @@ final class CalibrateSunCommand implements Callable<Integer> {
 
     @Option(names = "--format", defaultValue = "table", paramLabel = "table|csv",
             description = "table (readable) or csv: a header row and one row of mixing_length, y_init, z_init (the "
-                    + "calibrated values), then the catalogue columns of the calibrated model (model_id to "
-                    + "solver_iterations and any after them), then "
+                    + "calibrated values), then the other catalogue columns of the calibrated model (model_id to "
+                    + "solver_iterations and any after them; each column once), then "
                     + SolarCalibrationReport.ZAMS_LUMINOSITY_LSUN + " (Lsun), "
                     + SolarCalibrationReport.MS_LIFETIME_GYR + " (Gyr), " + SolarCalibrationReport.Z_OVER_X_INIT
                     + ", " + SolarCalibrationReport.Y_SURFACE + " and " + SolarCalibrationReport.Z_OVER_X_SURFACE
@@ -73,6 +76,12 @@ final class CalibrateSunCommand implements Callable<Integer> {
             description = "Physics preset file to write (YAML; default ${DEFAULT-VALUE} in the current directory).")
     Path preset;
 
+    @Option(names = "--profile", paramLabel = "FILE",
+            description = "Also write the calibrated solar model (at the calibrated age, settled as calibrated) to "
+                    + "FILE, one row per shell, centre to surface, with the columns and ECSV header of star "
+                    + "--profile. star with the preset's values is not this model: it evolves without settling.")
+    Path profile;
+
     @Override
     public Integer call() throws IOException {
         if (!(ageGyr >= MIN_AGE_GYR && ageGyr <= MAX_AGE_GYR)) {
@@ -86,6 +95,13 @@ final class CalibrateSunCommand implements Callable<Integer> {
         }
         Path target = main.context().resolve(preset);
         OutputTargets.requireWritableFile("--preset", target);
+        Path profileTarget = profile == null ? null : main.context().resolve(profile);
+        if (profileTarget != null) {
+            OutputTargets.requireWritableFile("--profile", profileTarget);
+            if (profileTarget.toAbsolutePath().normalize().equals(target.toAbsolutePath().normalize())) {
+                throw new UsageException("--profile and --preset both name " + target + "; give two files");
+            }
+        }
         CalibrationSettings settings = CalibrationSettings.DEFAULT.withAge(ageGyr * Constants.GYR)
                 .withMetalsToHydrogen(metalsToHydrogen).withAtmosphere(atmosphere).withSettling(!noSettling);
         int[] count = {0};
@@ -104,6 +120,12 @@ final class CalibrateSunCommand implements Callable<Integer> {
         AtomicFiles.writeString(target, SolarCalibrationReport.preset(sun, atmosphere, !noSettling, ToolVersion.current()));
         main.err().println("preset: mixing length " + String.format(Locale.ROOT, "%.5f", sun.mixingLength())
                 + " written to " + target);
+        if (profileTarget != null) {
+            ProfileMeta meta = ProfileMeta.of(sun.sun().request(), sun.model(), !noSettling, ToolVersion.current(),
+                    ToolVersion.commit());
+            AtomicFiles.write(profileTarget, out -> ProfileWriter.write(meta, ProfileRows.of(sun.model()), out));
+            main.err().println("profile: " + sun.model().profile().size() + " shells written to " + profileTarget);
+        }
         return ExitCodes.OK;
     }
 }

@@ -34,25 +34,37 @@ final class SolarCalibrationReport {
     private SolarCalibrationReport() {
     }
 
+    /** The calibrated values, first in the row; the catalogue columns of the same names are not repeated after them. */
+    private static final List<String> CALIBRATED = List.of(CatalogueColumns.MIXING_LENGTH, CatalogueColumns.Y_INIT,
+            CatalogueColumns.Z_INIT);
+
     /**
-     * mixing_length, y_init, z_init, the catalogue header, zams_luminosity_lsun, ms_lifetime_gyr, then our
-     * extensions z_over_x_init, y_surface, z_over_x_surface.
+     * mixing_length, y_init, z_init, the catalogue header without those three (each column once: pandas renamed the
+     * repeats {@code .1}), zams_luminosity_lsun, ms_lifetime_gyr, then our extensions z_over_x_init, y_surface,
+     * z_over_x_surface.
      */
     static List<String> csvHeader() {
-        List<String> header = new ArrayList<>(List.of(CatalogueColumns.MIXING_LENGTH, CatalogueColumns.Y_INIT,
-                CatalogueColumns.Z_INIT));
-        header.addAll(CatalogueColumns.HEADER);
+        List<String> header = new ArrayList<>(CALIBRATED);
+        header.addAll(CatalogueColumns.HEADER.stream().filter(c -> !CALIBRATED.contains(c)).toList());
         header.add(ZAMS_LUMINOSITY_LSUN);
         header.add(MS_LIFETIME_GYR);
         header.addAll(List.of(Z_OVER_X_INIT, Y_SURFACE, Z_OVER_X_SURFACE));
         return header;
     }
 
-    /** The header row and the calibrated Sun's row. */
+    /**
+     * The header row and the calibrated Sun's row. The catalogue's own mixing_length, y_init and z_init hold the
+     * calibrated values too (the model was computed with them), so dropping them loses nothing.
+     */
     static void writeCsv(CalibratedSun sun, Appendable out) throws IOException {
         List<String> row = new ArrayList<>(List.of(CsvNumbers.format(sun.mixingLength()),
                 CsvNumbers.format(sun.helium()), CsvNumbers.format(sun.metals())));
-        row.addAll(CatalogueWriter.cells(OutcomeRows.toRow(sun.sun())));
+        List<String> catalogue = CatalogueWriter.cells(OutcomeRows.toRow(sun.sun()));
+        for (int i = 0; i < catalogue.size(); i++) {
+            if (!CALIBRATED.contains(CatalogueColumns.HEADER.get(i))) {
+                row.add(catalogue.get(i));
+            }
+        }
         row.add(CsvNumbers.format(sun.zeroAgeLuminosity() / Constants.L_SUN));
         row.add(CsvNumbers.format(sun.exhaustionAge() / Constants.GYR));
         row.add(CsvNumbers.format(sun.initialMetalsToHydrogen()));

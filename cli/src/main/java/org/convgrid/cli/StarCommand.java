@@ -29,6 +29,7 @@ import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.catalogue.CatalogueWriter;
 import org.convgrid.output.catalogue.OutcomeRows;
 import org.convgrid.output.profile.ProfileColumns;
+import org.convgrid.output.profile.ProfileMeta;
 import org.convgrid.output.profile.ProfileRows;
 import org.convgrid.output.profile.ProfileWriter;
 import picocli.CommandLine.Command;
@@ -123,8 +124,10 @@ final class StarCommand implements Callable<Integer> {
     AtmosphereChoice atmosphere;
 
     @Option(names = "--profile", paramLabel = "FILE",
-            description = "Also write one CSV row per shell, centre to surface, to FILE; its columns (units in "
-                    + "their names; the README explains each): " + ProfileColumns.HEADER_NAMED + ".")
+            description = "Also write one CSV row per shell, centre to surface, to FILE (ECSV: a '#' header gives "
+                    + "each column's unit and the star's mass, radius, age, composition, physics and constants); its "
+                    + "columns (units in their names; the README explains each): " + ProfileColumns.HEADER_NAMED
+                    + ".")
     Path profile;
 
     @Option(names = "--format", defaultValue = "table", paramLabel = "table|csv",
@@ -174,7 +177,9 @@ final class StarCommand implements Callable<Integer> {
         if (profile != null) {
             StellarModel model = answer.model();
             Path target = main.context().resolve(profile);
-            AtomicFiles.write(target, out -> ProfileWriter.write(ProfileRows.of(model), out));
+            ProfileMeta meta = ProfileMeta.of(outcome.request(), model, false, ToolVersion.current(),
+                    ToolVersion.commit());
+            AtomicFiles.write(target, out -> ProfileWriter.write(meta, ProfileRows.of(model), out));
             main.err().println("profile: " + model.profile().size() + " shells written to " + target);
         }
         return ExitCodes.OK;

@@ -1,6 +1,7 @@
 package org.convgrid.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
 
 import java.io.PrintWriter;
 import java.io.StringWriter;
@@ -20,6 +21,8 @@ import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.output.catalogue.CatalogueColumns;
+import org.convgrid.output.profile.ProfileReader;
+import org.convgrid.output.profile.ProfileRow;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -37,12 +40,12 @@ class CalibrateSunCommandTest {
     }
 
     /**
-     * The conventions' row: mixing_length, y_init, z_init, the catalogue columns, the two extras; then our
-     * extensions (conventions allow more columns after the fixed ones).
+     * The conventions' row: mixing_length, y_init, z_init, the catalogue columns (without those three, which the row
+     * has already given), the two extras; then our extensions (conventions allow more columns after the fixed ones).
      */
     static List<String> expectedHeader() {
         List<String> h = new ArrayList<>(List.of("mixing_length", "y_init", "z_init"));
-        h.addAll(CatalogueColumns.HEADER);
+        h.addAll(CatalogueColumns.HEADER.stream().filter(c -> !h.contains(c)).toList());
         h.addAll(List.of("zams_luminosity_lsun", "ms_lifetime_gyr", "z_over_x_init", "y_surface",
                 "z_over_x_surface"));
         return h;
@@ -63,6 +66,36 @@ class CalibrateSunCommandTest {
         assertThat(cells[cells.length - 3]).isEqualTo("0.0255");
         assertThat(cells[cells.length - 2]).isEqualTo("0.245");
         assertThat(lines[1]).contains(",calibrated-sun,").contains(",ok,").contains(",conv_envelope,");
+    }
+
+    @Test
+    void csvNamesEveryColumnOnce() throws Exception {
+        // mixing_length, y_init and z_init came twice (pandas read the repeats as mixing_length.1, ...): found by
+        // an asteroseismologist's review
+        StringWriter csv = new StringWriter();
+        SolarCalibrationReport.writeCsv(syntheticSun(), csv);
+        String[] lines = csv.toString().split("\n");
+        List<String> header = Arrays.asList(lines[0].split(","));
+        assertThat(header).doesNotHaveDuplicates().contains("model_id", "mass_msun", "overshoot_hp", "age_gyr");
+        List<String> cells = Arrays.asList(lines[1].split(",", -1));
+        assertThat(cells.get(header.indexOf("mixing_length"))).isEqualTo("1.9");
+        assertThat(cells.get(header.indexOf("y_init"))).isEqualTo("0.27");
+        assertThat(cells.get(header.indexOf("z_init"))).isEqualTo("0.0165");
+        assertThat(cells.get(header.indexOf("mass_msun"))).isEqualTo("1.0");
+        assertThat(cells.get(header.indexOf("model_id"))).isEqualTo("calibrated-sun");
+    }
+
+    @Test
+    void aProfileThatCannotBeWrittenOrNamesThePresetIsRefusedBeforeTheCalibration() throws Exception {
+        // refused at once (exit 2), not after a minute of evolutions, and nothing is written
+        Files.createDirectory(dir.resolve("folder"));
+        assertThat(run("calibrate-sun", "--profile", "folder")).isEqualTo(2);
+        assertThat(err.toString()).contains("--profile").contains("is a directory");
+        assertThat(run("calibrate-sun", "--profile", "sun.yaml", "--preset", "sun.yaml")).isEqualTo(2);
+        assertThat(err.toString()).contains("--profile and --preset both name");
+        assertThat(err.toString()).doesNotContain("evolution 1");
+        assertThat(dir.resolve("calibrated-sun.yaml")).doesNotExist();
+        assertThat(dir.resolve("sun.yaml")).doesNotExist();
     }
 
     @Test
@@ -97,7 +130,8 @@ class CalibrateSunCommandTest {
     void calibratesAndWritesTheCsvRowAndThePreset() throws Exception {
         // the whole calibration (several evolutions, ~20-40 s without settling): the command end to end; the
         // settling calibration's figures are checked in the engine's SolarCalibrationTest
-        int code = run("calibrate-sun", "--format", "csv", "--no-settling", "--preset", "sun.yaml");
+        int code = run("calibrate-sun", "--format", "csv", "--no-settling", "--preset", "sun.yaml", "--profile",
+                "sun.csv");
         assertThat(code).as(err.toString()).isZero();
         String[] lines = out.toString().split("\n");
         assertThat(lines).hasSize(2);
@@ -106,6 +140,18 @@ class CalibrateSunCommandTest {
         String preset = Files.readString(dir.resolve("sun.yaml"));
         assertThat(preset).contains("mixing_length: ").contains("residual_ln_radius: ").contains("settling: false");
         assertThat(err.toString()).contains("evolution 1: alpha = 1.80000, Y = 0.27000");
+
+        // --profile: the calibrated model itself, with star's columns and header; its surface is the Sun's L and R
+        // to the calibration's tolerance (IAU 2015 nominal values, Prsa et al. 2016)
+        List<String> profile = Files.readAllLines(dir.resolve("sun.csv"));
+        assertThat(profile.get(0)).isEqualTo("# %ECSV 1.0");
+        assertThat(profile).contains("#   model_id: 'calibrated-sun'", "#   age_gyr: 4.57", "#   age_origin: 'zams'",
+                "#   settling: false");
+        List<ProfileRow> shells = ProfileReader.read(Files.newBufferedReader(dir.resolve("sun.csv")));
+        ProfileRow surface = shells.get(shells.size() - 1);
+        assertThat(surface.luminosity() / Constants.L_SUN).isCloseTo(1.0, within(1e-3));
+        assertThat(surface.radius() / Constants.R_SUN).isCloseTo(1.0, within(1e-3));
+        assertThat(err.toString()).contains("profile: " + shells.size() + " shells written to");
     }
 
     private static CalibratedSun syntheticSun() {
@@ -115,7 +161,7 @@ class CalibrateSunCommandTest {
         var convection = new ConvectiveStructure(List.of(new ConvectiveZone(0.98, 1.0, 0.72, 1.0)),
                 StructureClass.CONV_ENVELOPE, 0.0, 0.98, 0.72, 0.02 * Constants.M_SUN, 2.0e6, 3.0e6);
         var outcome = new ModelOutcome.Solved(request, global, convection, 1234);
-        return new CalibratedSun(1.9, 0.27, 0.0165, 0.0231, 4.57 * Constants.GYR, outcome, 1e-6, -2e-6,
+        return new CalibratedSun(1.9, 0.27, 0.0165, 0.0231, 4.57 * Constants.GYR, outcome, null, 1e-6, -2e-6,
                 0.7 * Constants.L_SUN, 10.5 * Constants.GYR, 0.72, 1.55e7, 150.0, 9, 5, 0.0255, 0.245, 0.0231);
     }
 }

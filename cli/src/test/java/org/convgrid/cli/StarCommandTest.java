@@ -42,7 +42,12 @@ class StarCommandTest {
         assertThat(row.get(header.indexOf("age_gyr"))).isEqualTo("0.0");
         List<String> profile = Files.readAllLines(dir.resolve("p.csv"));
         assertThat(profile.size()).isGreaterThan(300);
-        assertThat(profile.get(0)).startsWith("mass_frac,radius_frac");
+        // an ECSV header naming the star, then the column names (pandas: comment="#")
+        assertThat(profile.get(0)).isEqualTo("# %ECSV 1.0");
+        assertThat(profile).contains("#   model_id: 'star-m0.8000-z0.01880'", "#   y_init: 0.275", "#   age_gyr: 0.0",
+                "#   age_origin: 'zams'", "#   settling: false");
+        assertThat(profile.stream().filter(l -> !l.startsWith("#")).findFirst().orElseThrow())
+                .startsWith("mass_frac,radius_frac");
     }
 
     @Test

@@ -11,12 +11,15 @@ import java.util.regex.Pattern;
  * 1e-4 &lt;= |x| &lt; 1e7 and {@code 1.234e-05} form outside; trailing zeros dropped, but a real always keeps a
  * decimal point ({@code 0.0}, {@code 2.0}, {@code 1.0e+07}) so that readers type the column as real whatever the
  * values; NaN written as the empty cell ("not applicable"). The {@code lo-hi} spans use a fixed-point form instead, because an exponent's minus sign would
- * be ambiguous there.
+ * be ambiguous there. {@link #formatRoundTrip} writes the same layout with as many digits as the double needs to read
+ * back unchanged, for files whose numbers are differenced (profiles).
  */
 public final class CsvNumbers {
 
     /** Significant digits written; about single precision, far above the models' own accuracy. */
     public static final int SIGNIFICANT_DIGITS = 7;
+    /** Significant digits that read back any double (IEEE 754 binary64 needs 17 at most). */
+    public static final int ROUND_TRIP_MAX_DIGITS = 17;
     /** Decimal places of the fixed-point form used in spans (mass fractions and masses). */
     public static final int SPAN_DECIMALS = 6;
 
@@ -43,7 +46,51 @@ public final class CsvNumbers {
         if (value == 0.0) {
             return "0.0";
         }
-        BigDecimal rounded = new BigDecimal(value).round(ROUNDING).stripTrailingZeros();
+        return layout(new BigDecimal(value).round(ROUNDING));
+    }
+
+    /**
+     * The cell text of a value with the fewest significant digits that parse back to the very same double (at most
+     * {@value #ROUND_TRIP_MAX_DIGITS}), in the layout of {@link #format}. Among the decimals of that length the one
+     * nearest the value is taken (the other neighbour only where the nearest does not read back, as can happen at a
+     * power of two), so the text depends on the value alone, not on the JDK's {@code Double.toString}, which in Java
+     * 17 sometimes writes a digit more than needed. Negative zero is written {@code 0.0}, as by {@link #format}.
+     */
+    public static String formatRoundTrip(double value) {
+        if (Double.isNaN(value) || Double.isInfinite(value) || value == 0.0) {
+            return format(value);
+        }
+        BigDecimal exact = new BigDecimal(value);
+        BigDecimal shortest = readingBack(exact, value, ROUND_TRIP_MAX_DIGITS);
+        // a length that reads back implies every longer one does (its decimals include the shorter ones), so the
+        // search down stops at the first length with none
+        for (int digits = ROUND_TRIP_MAX_DIGITS - 1; digits >= 1; digits--) {
+            BigDecimal shorter = readingBack(exact, value, digits);
+            if (shorter == null) {
+                break;
+            }
+            shortest = shorter;
+        }
+        return layout(shortest);
+    }
+
+    /**
+     * The decimal of {@code digits} significant digits next to {@code exact} that parses back to {@code value}:
+     * the nearest one, else the neighbour on the other side; null when neither does.
+     */
+    private static BigDecimal readingBack(BigDecimal exact, double value, int digits) {
+        BigDecimal nearest = exact.round(new MathContext(digits, RoundingMode.HALF_EVEN));
+        if (nearest.doubleValue() == value) {
+            return nearest;
+        }
+        BigDecimal other = exact.round(new MathContext(digits,
+                nearest.compareTo(exact) > 0 ? RoundingMode.FLOOR : RoundingMode.CEILING));
+        return other.doubleValue() == value ? other : null;
+    }
+
+    /** Plain form for exponents {@value #PLAIN_MIN_EXPONENT} to {@value #PLAIN_MAX_EXPONENT}, else mantissa e+XX. */
+    private static String layout(BigDecimal decimal) {
+        BigDecimal rounded = decimal.stripTrailingZeros();
         int exponent = rounded.precision() - rounded.scale() - 1;
         if (exponent >= PLAIN_MIN_EXPONENT && exponent <= PLAIN_MAX_EXPONENT) {
             return withPoint(rounded.toPlainString());

@@ -120,7 +120,8 @@ public final class GridRequests implements ChunkSolver {
         List<Answer> answers = answers(chunk);
         for (int i = 0; i < answers.size(); i++) {
             if (answers.get(i).model() != null && answers.get(i).outcome() instanceof ModelOutcome.Solved) {
-                models.accept(chunk.get(i), answers.get(i).model());
+                // the outcome's request: a main-sequence fraction resolved to the age it stands for
+                models.accept(answers.get(i).outcome().request(), answers.get(i).model());
             }
         }
         return answers.stream().map(Answer::outcome).toList();

@@ -14,7 +14,8 @@ public interface ModelSink {
     ModelSink NONE = (request, model) -> { };
 
     /**
-     * @param request the request the model answers (its id names the model)
+     * @param request the request the model answers (its id names the model), its age resolved: a main-sequence
+     *     fraction arrives as the time it stands for
      * @param model the converged model at the requested age
      */
     void accept(ModelRequest request, StellarModel model);

@@ -1,6 +1,7 @@
 package org.convgrid.engine.calibration;
 
 import org.convgrid.engine.request.ModelOutcome;
+import org.convgrid.engine.structure.StellarModel;
 
 /**
  * The result of a solar calibration, cgs units.
@@ -11,6 +12,7 @@ import org.convgrid.engine.request.ModelOutcome;
  * @param metalsToHydrogen the present surface Z/X aimed at
  * @param age the calibration age, s
  * @param sun the calibrated model at that age, ready for the catalogue (model id {@code "calibrated-sun"})
+ * @param model the whole calibrated model behind {@code sun}, settled as calibrated (for its profile)
  * @param radiusResidual ln(R / R_sun) of the calibrated model
  * @param luminosityResidual ln(L / L_sun) of the calibrated model
  * @param zeroAgeLuminosity luminosity of the zero-age model, erg s^-1
@@ -25,10 +27,10 @@ import org.convgrid.engine.request.ModelOutcome;
  * @param envelopeMetalsToHydrogen Z/X of the convective envelope of the calibrated model
  */
 public record CalibratedSun(double mixingLength, double helium, double metals, double metalsToHydrogen,
-                            double age, ModelOutcome sun, double radiusResidual, double luminosityResidual,
-                            double zeroAgeLuminosity, double exhaustionAge, double envelopeBaseRadiusFraction,
-                            double centralTemperature, double centralDensity, int evolutions, int newtonSteps,
-                            double initialMetalsToHydrogen, double envelopeHelium,
+                            double age, ModelOutcome sun, StellarModel model, double radiusResidual,
+                            double luminosityResidual, double zeroAgeLuminosity, double exhaustionAge,
+                            double envelopeBaseRadiusFraction, double centralTemperature, double centralDensity,
+                            int evolutions, int newtonSteps, double initialMetalsToHydrogen, double envelopeHelium,
                             double envelopeMetalsToHydrogen) {
 
     /** Catalogue model id of the calibrated Sun. */
@@ -36,7 +38,7 @@ public record CalibratedSun(double mixingLength, double helium, double metals, d
 
     /** The same result with the evolution count replaced (summed over composition iterations). */
     CalibratedSun withEvolutions(int count) {
-        return new CalibratedSun(mixingLength, helium, metals, metalsToHydrogen, age, sun, radiusResidual,
+        return new CalibratedSun(mixingLength, helium, metals, metalsToHydrogen, age, sun, model, radiusResidual,
                 luminosityResidual, zeroAgeLuminosity, exhaustionAge, envelopeBaseRadiusFraction, centralTemperature,
                 centralDensity, count, newtonSteps, initialMetalsToHydrogen, envelopeHelium,
                 envelopeMetalsToHydrogen);

@@ -147,7 +147,7 @@ public final class SolarCalibration {
         ModelOutcome outcome = new ModelOutcome.Solved(request, m.global(), m.convection(), t.iterationsToAge());
         Composition envelope = EnvelopeComposition.of(m);
         return new CalibratedSun(t.mixingLength(), t.helium(), t.metals(), target,
-                settings.age(), outcome, t.radiusResidual(), t.luminosityResidual(), t.zeroAgeLuminosity(),
+                settings.age(), outcome, m, t.radiusResidual(), t.luminosityResidual(), t.zeroAgeLuminosity(),
                 t.evolution().exhaustionAge(), m.convection().envelopeBaseRadiusFraction(),
                 m.global().centralTemperature(), m.global().centralDensity(), evolutions, steps,
                 settings.metalsToHydrogen(), envelope.y(),

@@ -2,6 +2,7 @@ package org.convgrid.output.catalogue;
 
 import java.util.List;
 import java.util.stream.Stream;
+import org.convgrid.output.EcsvColumn;
 
 /**
  * The columns of {@code catalogue.ecsv} (catalogue v2), in the order the README's "Catalogue" section fixes; the only
@@ -9,10 +10,6 @@ import java.util.stream.Stream;
  * {@link #EXTENSIONS} follow them.
  */
 public final class CatalogueColumns {
-
-    /** What one column holds; the unit is an astropy unit string, empty for dimensionless or text columns. */
-    public record Column(String name, String unit, String datatype, String description) {
-    }
 
     public static final String MODEL_ID = "model_id";
     public static final String MASS_MSUN = "mass_msun";
@@ -52,54 +49,54 @@ public final class CatalogueColumns {
     private static final String TEXT = "string";
 
     /** Every column convgrid writes, in order, with its unit, type and one-line description. */
-    public static final List<Column> DESCRIBED = List.of(
-            new Column(MODEL_ID, "", TEXT, "stable key built from the grid indices"),
-            new Column(MASS_MSUN, "solMass", REAL, "total mass"),
-            new Column(Z_INIT, "", REAL, "initial metal mass fraction"),
-            new Column(Y_INIT, "", REAL, "initial helium mass fraction"),
-            new Column(MIXING_LENGTH, "", REAL, "mixing length, in pressure scale heights"),
-            new Column(OVERSHOOT_HP, "", REAL, "overshoot length, in pressure scale heights"),
-            new Column(AGE_GYR, "Gyr", REAL, "age counted from the run's age origin"),
-            new Column(PHASE, "", TEXT, "pre_main_sequence or main_sequence; empty when status is not ok"),
-            new Column(STATUS, "", TEXT, "ok, not_converged, past_main_sequence or failed"),
-            new Column(STATUS_DETAIL, "", TEXT, "short reason when status is not ok"),
-            new Column(LUMINOSITY_LSUN, "solLum", REAL, "surface luminosity"),
-            new Column(RADIUS_RSUN, "solRad", REAL, "photospheric radius"),
-            new Column(TEFF_K, "K", REAL, "effective temperature"),
-            new Column(LOG_G_CGS, "dex(cm / s2)", REAL, "log10 of the surface gravity in cm s^-2"),
-            new Column(CENTRAL_TEMP_K, "K", REAL, "central temperature"),
-            new Column(CENTRAL_DENSITY_CGS, "g / cm3", REAL, "central density"),
-            new Column(CENTRAL_H_FRAC, "", REAL, "central hydrogen mass fraction"),
-            new Column(SURFACE_LI_REL, "", REAL, "surface 7Li number abundance over its initial value"),
-            new Column(STRUCTURE_CLASS, "", TEXT,
+    public static final List<EcsvColumn> DESCRIBED = List.of(
+            new EcsvColumn(MODEL_ID, "", TEXT, "stable key built from the grid indices"),
+            new EcsvColumn(MASS_MSUN, "solMass", REAL, "total mass"),
+            new EcsvColumn(Z_INIT, "", REAL, "initial metal mass fraction"),
+            new EcsvColumn(Y_INIT, "", REAL, "initial helium mass fraction"),
+            new EcsvColumn(MIXING_LENGTH, "", REAL, "mixing length, in pressure scale heights"),
+            new EcsvColumn(OVERSHOOT_HP, "", REAL, "overshoot length, in pressure scale heights"),
+            new EcsvColumn(AGE_GYR, "Gyr", REAL, "age counted from the run's age origin"),
+            new EcsvColumn(PHASE, "", TEXT, "pre_main_sequence or main_sequence; empty when status is not ok"),
+            new EcsvColumn(STATUS, "", TEXT, "ok, not_converged, past_main_sequence or failed"),
+            new EcsvColumn(STATUS_DETAIL, "", TEXT, "short reason when status is not ok"),
+            new EcsvColumn(LUMINOSITY_LSUN, "solLum", REAL, "surface luminosity"),
+            new EcsvColumn(RADIUS_RSUN, "solRad", REAL, "photospheric radius"),
+            new EcsvColumn(TEFF_K, "K", REAL, "effective temperature"),
+            new EcsvColumn(LOG_G_CGS, "dex(cm / s2)", REAL, "log10 of the surface gravity in cm s^-2"),
+            new EcsvColumn(CENTRAL_TEMP_K, "K", REAL, "central temperature"),
+            new EcsvColumn(CENTRAL_DENSITY_CGS, "g / cm3", REAL, "central density"),
+            new EcsvColumn(CENTRAL_H_FRAC, "", REAL, "central hydrogen mass fraction"),
+            new EcsvColumn(SURFACE_LI_REL, "", REAL, "surface 7Li number abundance over its initial value"),
+            new EcsvColumn(STRUCTURE_CLASS, "", TEXT,
                     "fully_convective, conv_envelope, conv_core, conv_core_and_envelope or radiative"),
-            new Column(CORE_CZ_MASS_FRAC, "", REAL, "m/M at the top of the convective core; empty when none"),
-            new Column(CORE_CZ_RADIUS_FRAC, "", REAL, "r/R at the top of the convective core; empty when none"),
-            new Column(ENV_CZ_BASE_MASS_FRAC, "", REAL,
+            new EcsvColumn(CORE_CZ_MASS_FRAC, "", REAL, "m/M at the top of the convective core; empty when none"),
+            new EcsvColumn(CORE_CZ_RADIUS_FRAC, "", REAL, "r/R at the top of the convective core; empty when none"),
+            new EcsvColumn(ENV_CZ_BASE_MASS_FRAC, "", REAL,
                     "m/M at the base of the convective envelope; empty when none, 0 when fully convective; seven"
                             + " significant digits of m/M, so few of a thin envelope's 1 - m/M (0.999998 is one):"
                             + " its mass is in env_cz_mass_msun"),
-            new Column(ENV_CZ_BASE_RADIUS_FRAC, "", REAL,
+            new EcsvColumn(ENV_CZ_BASE_RADIUS_FRAC, "", REAL,
                     "r/R at the base of the convective envelope; empty when none, 0 when fully convective"),
-            new Column(ENV_CZ_MASS_MSUN, "solMass", REAL,
+            new EcsvColumn(ENV_CZ_MASS_MSUN, "solMass", REAL,
                     "mass of the convective envelope (the whole star when fully convective), to seven significant"
                             + " digits however thin the envelope; zones.csv gives the same number; empty when none"),
-            new Column(TURNOVER_TIME_DAYS, "d", REAL,
+            new EcsvColumn(TURNOVER_TIME_DAYS, "d", REAL,
                     "local convective turnover time alpha H_P / v_c of the envelope, half a pressure scale height"
                             + " above its base but no higher than its radial midpoint; at r = R/2 when fully"
                             + " convective; empty when none"),
-            new Column(SOLVER_ITERATIONS, "", "int64", "Newton iterations for this model"),
-            new Column(CRITERION, "", TEXT, "convective stability criterion: schwarzschild or ledoux"),
-            new Column(OPACITY_SCALE, "", REAL, "factor applied to every opacity (1 = as published)"),
-            new Column(TURNOVER_TIME_GLOBAL_DAYS, "d", REAL,
+            new EcsvColumn(SOLVER_ITERATIONS, "", "int64", "Newton iterations for this model"),
+            new EcsvColumn(CRITERION, "", TEXT, "convective stability criterion: schwarzschild or ledoux"),
+            new EcsvColumn(OPACITY_SCALE, "", REAL, "factor applied to every opacity (1 = as published)"),
+            new EcsvColumn(TURNOVER_TIME_GLOBAL_DAYS, "d", REAL,
                     "integral of dr / v_conv across the convective envelope; empty when none"));
 
     /** The columns the README fixes, in order. */
-    public static final List<String> FIXED = DESCRIBED.subList(0, 26).stream().map(Column::name).toList();
+    public static final List<String> FIXED = DESCRIBED.subList(0, 26).stream().map(EcsvColumn::name).toList();
 
     /** Our own columns after the fixed ones, in order. */
     public static final List<String> EXTENSIONS = DESCRIBED.subList(26, DESCRIBED.size()).stream()
-            .map(Column::name).toList();
+            .map(EcsvColumn::name).toList();
 
     /** The header convgrid writes. */
     public static final List<String> HEADER = Stream.concat(FIXED.stream(), EXTENSIONS.stream()).toList();

@@ -9,6 +9,7 @@ import java.util.Locale;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.convgrid.output.CsvNumbers;
+import org.convgrid.output.EcsvHeader;
 
 /**
  * Writes catalogue rows as ECSV 1.0 (astropy's Enhanced Character Separated Values: {@code #}-prefixed YAML giving
@@ -41,16 +42,7 @@ public final class CatalogueWriter implements Flushable, Closeable {
      * flow mapping per column. Fixed text, so a resumed catalogue can be checked against it.
      */
     public static String ecsvHeader() {
-        StringBuilder b = new StringBuilder("# %ECSV 1.0\n# ---\n# delimiter: ','\n# datatype:\n");
-        for (CatalogueColumns.Column c : CatalogueColumns.DESCRIBED) {
-            b.append("# - {name: ").append(c.name());
-            if (!c.unit().isEmpty()) {
-                b.append(", unit: '").append(c.unit()).append('\'');
-            }
-            b.append(", datatype: ").append(c.datatype()).append(", description: '")
-                    .append(c.description().replace("'", "''")).append("'}\n");
-        }
-        return b.append("# schema: astropy-2.0\n").toString();
+        return EcsvHeader.of(CatalogueColumns.DESCRIBED);
     }
 
     /** A writer for rows after an existing header. */

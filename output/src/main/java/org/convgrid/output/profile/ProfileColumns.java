@@ -1,8 +1,9 @@
 package org.convgrid.output.profile;
 
 import java.util.List;
+import org.convgrid.output.EcsvColumn;
 
-/** The column names of a profile file, centre-to-surface rows; the only place they are spelled. */
+/** The columns of a profile file (centre-to-surface rows): the only place their names and descriptions are spelled. */
 public final class ProfileColumns {
 
     public static final String MASS_FRAC = "mass_frac";
@@ -34,8 +35,9 @@ public final class ProfileColumns {
     /** Squared buoyancy (Brunt-Vaisala) frequency N^2, s^-2; negative where superadiabatic. */
     public static final String BUOYANCY_N2_CGS = "buoyancy_n2_cgs";
     /**
-     * (M - m)/M, the mass above the shell over the star's: mass_frac, written to seven digits, reads 1 over the
-     * outer few per cent of the radius, where seismic work needs the mass coordinate; this one keeps its digits there.
+     * (M - m)/M, the mass above the shell over the star's: near the surface, where seismic work needs the mass
+     * coordinate, mass_frac differs from 1 only in its last digits (down to ~1e-12 of the mass; it read 1 over the outer
+     * few per cent of the radius when profiles had seven digits); this one keeps its relative precision there.
      */
     public static final String EXTERIOR_MASS_FRAC = "exterior_mass_frac";
 
@@ -56,6 +58,38 @@ public final class ProfileColumns {
 
     /** The header, in order: {@link #HEADER_NAMED}, the one list of the columns. */
     public static final List<String> HEADER = List.of(HEADER_NAMED.split(NAME_SEPARATOR));
+
+    private static final String REAL = "float64";
+
+    /**
+     * Every column with its astropy unit, ECSV datatype and one-line description, in {@link #HEADER} order: the
+     * profile's ECSV header.
+     */
+    public static final List<EcsvColumn> DESCRIBED = List.of(
+            new EcsvColumn(MASS_FRAC, "", REAL, "m/M: mass inside the shell over the total mass (meta mass_g)"),
+            new EcsvColumn(RADIUS_FRAC, "", REAL, "r/R: radius over the photospheric radius (meta radius_cm)"),
+            new EcsvColumn(PRESSURE_CGS, "dyn / cm2", REAL, "total pressure, gas and radiation"),
+            new EcsvColumn(TEMP_K, "K", REAL, "temperature"),
+            new EcsvColumn(DENSITY_CGS, "g / cm3", REAL, "density"),
+            new EcsvColumn(LUMINOSITY_LSUN, "solLum", REAL,
+                    "luminosity through the shell over meta solar_luminosity_cgs"),
+            new EcsvColumn(KAPPA_CGS, "cm2 / g", REAL, "Rosseland mean opacity"),
+            new EcsvColumn(EPS_NUC_CGS, "erg / (g s)", REAL, "nuclear energy generation rate"),
+            new EcsvColumn(NABLA, "", REAL, "actual temperature gradient d ln T / d ln P"),
+            new EcsvColumn(NABLA_AD, "", REAL, "adiabatic temperature gradient"),
+            new EcsvColumn(NABLA_RAD, "", REAL, "radiative temperature gradient"),
+            new EcsvColumn(CONVECTIVE, "", "int64",
+                    "1 where convectively unstable under the model's criterion, 0 where radiative"),
+            new EcsvColumn(CONV_VELOCITY_CGS, "cm / s", REAL, "mixing-length convective velocity; 0 where radiative"),
+            new EcsvColumn(RADIUS_CM, "cm", REAL, "radius"),
+            new EcsvColumn(GAMMA1, "", REAL, "first adiabatic exponent (d ln P / d ln rho)_s, from the equation of state"),
+            new EcsvColumn(SOUND_SPEED_CGS, "cm / s", REAL, "adiabatic sound speed sqrt(gamma1 P / rho)"),
+            new EcsvColumn(H_FRAC, "", REAL, "hydrogen mass fraction"),
+            new EcsvColumn(MU, "", REAL, "mean molecular weight, atomic mass units per free particle"),
+            new EcsvColumn(HE3_FRAC, "", REAL, "helium-3 mass fraction"),
+            new EcsvColumn(BUOYANCY_N2_CGS, "1 / s2", REAL,
+                    "squared buoyancy frequency N^2; negative where superadiabatic"),
+            new EcsvColumn(EXTERIOR_MASS_FRAC, "", REAL, "(M - m)/M: mass above the shell over the total mass"));
 
     /**
      * The columns added after the first profiles, in the order they came: profiles written before a column existed

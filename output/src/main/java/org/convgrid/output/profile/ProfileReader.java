@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.Reader;
 import java.util.ArrayList;
 import java.util.List;
+import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.convgrid.engine.units.Constants;
@@ -11,8 +12,14 @@ import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.OutputFormatException;
 import org.convgrid.output.catalogue.CatalogueWriter;
 
-/** Reads a profile file written by {@link ProfileWriter} (columns by name; unknown columns ignored). */
+/**
+ * Reads a profile file written by {@link ProfileWriter} (columns by name; unknown columns ignored). The ECSV header
+ * ({@code #} lines) is skipped, so profiles written before it (a bare name row) read alike.
+ */
 public final class ProfileReader {
+
+    private static final CSVFormat FORMAT = CatalogueWriter.FORMAT.builder().setHeader().setSkipHeaderRecord(true)
+            .setCommentMarker('#').get();
 
     private ProfileReader() {
     }
@@ -23,8 +30,7 @@ public final class ProfileReader {
      * @throws OutputFormatException when a column is missing or a cell is not a number
      */
     public static List<ProfileRow> read(Reader in) throws IOException {
-        try (CSVParser parser = CSVParser.builder().setReader(in).setFormat(CatalogueWriter.FORMAT.builder()
-                .setHeader().setSkipHeaderRecord(true).get()).get()) {
+        try (CSVParser parser = CSVParser.builder().setReader(in).setFormat(FORMAT).get()) {
             for (String column : ProfileColumns.REQUIRED) {
                 if (!parser.getHeaderNames().contains(column)) {
                     throw new OutputFormatException("profile misses the column '" + column + "'");

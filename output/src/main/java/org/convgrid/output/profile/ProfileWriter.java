@@ -6,16 +6,23 @@ import java.util.List;
 import org.apache.commons.csv.CSVPrinter;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.output.CsvNumbers;
+import org.convgrid.output.EcsvHeader;
 import org.convgrid.output.catalogue.CatalogueWriter;
 
-/** Writes one model's profile as CSV: the {@link ProfileColumns} header, then one row per shell. */
+/**
+ * Writes one model's profile as ECSV: the {@code #} header (each column's unit, datatype and description, and the
+ * star's {@link ProfileMeta}), the {@link ProfileColumns} name row, then one row per shell. Every real cell carries the
+ * digits that read back its double exactly ({@link CsvNumbers#formatRoundTrip}): oscillation work differences the
+ * columns, and seven digits left the outer shells' radii, the mass continuity and dL/dm to rounding noise.
+ */
 public final class ProfileWriter {
 
     private ProfileWriter() {
     }
 
     /** Writes the header and every shell, in the given order (centre outwards by convention). */
-    public static void write(List<ProfileRow> shells, Appendable out) throws IOException {
+    public static void write(ProfileMeta meta, List<ProfileRow> shells, Appendable out) throws IOException {
+        out.append(EcsvHeader.of(ProfileColumns.DESCRIBED, meta.entries()));
         CSVPrinter printer = new CSVPrinter(out, CatalogueWriter.FORMAT);
         printer.printRecord(ProfileColumns.HEADER);
         for (ProfileRow s : shells) {
@@ -23,13 +30,13 @@ public final class ProfileWriter {
             for (double v : new double[] {s.massFrac(), s.radiusFrac(), s.pressure(), s.temperature(), s.density(),
                     s.luminosity() / Constants.L_SUN, s.opacity(), s.nuclearEnergy(), s.nabla(), s.nablaAd(),
                     s.nablaRad()}) {
-                cells.add(CsvNumbers.format(v));
+                cells.add(CsvNumbers.formatRoundTrip(v));
             }
             cells.add(s.convective() ? "1" : "0");
-            cells.add(CsvNumbers.format(s.convectiveVelocity()));
+            cells.add(CsvNumbers.formatRoundTrip(s.convectiveVelocity()));
             for (double v : new double[] {s.radius(), s.gamma1(), s.soundSpeed(), s.hydrogen(), s.mu(), s.helium3(),
                     s.buoyancySquared(), s.exteriorMassFrac()}) {
-                cells.add(CsvNumbers.format(v));
+                cells.add(CsvNumbers.formatRoundTrip(v));
             }
             printer.printRecord(cells);
         }

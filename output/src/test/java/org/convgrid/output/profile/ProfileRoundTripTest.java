@@ -6,10 +6,16 @@ import static org.assertj.core.api.Assertions.within;
 import java.io.IOException;
 import java.io.StringReader;
 import java.util.List;
+import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.units.Constants;
 import org.junit.jupiter.api.Test;
 
 class ProfileRoundTripTest {
+
+    /** An illustrative star (a Sun-like model), not computed values. */
+    private static final ProfileMeta ILLUSTRATIVE_META = new ProfileMeta("illustrative", Constants.M_SUN,
+            Constants.R_SUN, Constants.L_SUN, 5772.0, 4.57, "birth", 0.02, 0.27, PhysicsOptions.DEFAULT, false,
+            "1.2.3", "unknown");
 
     @Test
     void writesHeaderAndShellsAndReadsThemBack() throws IOException {
@@ -20,8 +26,8 @@ class ProfileRoundTripTest {
                 new ProfileRow(1.0, 1.0, 1.1e5, 5772.0, 2.0e-7, Constants.L_SUN, 0.35, 0.0, 0.2, 0.18, 3.5, true,
                         1.5e5, 6.96e10, 1.6, 9.4e5, 0.74, 1.25, 2.9e-5, -3.2e-4, 3.25e-11));
         StringBuilder out = new StringBuilder();
-        ProfileWriter.write(shells, out);
-        String[] lines = out.toString().split("\n");
+        ProfileWriter.write(ILLUSTRATIVE_META, shells, out);
+        String[] lines = out.toString().lines().filter(l -> !l.startsWith("#")).toArray(String[]::new);
         assertThat(lines[0]).isEqualTo(String.join(",", ProfileColumns.HEADER));
         assertThat(lines[1]).isEqualTo("0.0,0.0,2.34e+17,1.57e+07,150.0,0.0,1.2,17.5,0.39,0.4,0.38,0,0.0,0.0,1.66,5.1e+07,0.35,"
                 + "0.86,1.0e-06,0.0,1.0");
