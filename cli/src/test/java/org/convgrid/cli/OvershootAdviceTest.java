@@ -14,8 +14,9 @@ import org.convgrid.grids.yaml.GridFileReader;
 import org.junit.jupiter.api.Test;
 
 /**
- * Uniform overshoot on evolved stars at or below 1.2 Msun gets a warning that names the mass-ramped profile; nothing
- * else does (the reason is measured in StarOvershootTest).
+ * Uniform overshoot on evolved stars at or below 1.2 Msun gets a warning that names the mass-ramped profile (the
+ * reason is measured in StarOvershootTest), decaying overshoot a warning above the lengths that were tried; nothing
+ * else does.
  */
 class OvershootAdviceTest {
 
@@ -46,6 +47,19 @@ class OvershootAdviceTest {
         assertThat(OvershootAdvice.warnings(grid("[0.8, 1.5]", "{gyr: [1]}", "0.0"))).isEmpty();
         assertThat(OvershootAdvice.warnings(grid("[1.3, 1.5]", "{gyr: [1]}", "0.2"))).isEmpty();
         assertThat(OvershootAdvice.warnings(grid("[0.8, 1.5]", "{gyr: [0], origin: zams}", "0.2"))).isEmpty();
+    }
+
+    @Test
+    void aDecayingLengthBeyondWhatWasTriedIsWarned() {
+        assertThat(OvershootAdvice.warnings(grid("[0.8, 1.5]", "{gyr: [1]}", "{profile: decaying, length_hp: 0.2}")))
+                .singleElement().asString().contains("decaying overshoot with overshoot length_hp 0.2: above 0.03");
+        assertThat(OvershootAdvice.warnings(grid("[0.8, 1.5]", "{gyr: [1]}", "{profile: decaying, length_hp: 0.016}")))
+                .isEmpty();
+        PhysicsOptions decaying = new PhysicsOptions(1.8, 0.05, StabilityCriterion.SCHWARZSCHILD, 1.0,
+                OpacityChoice.BUILT_IN, AtmosphereChoice.DEFAULT, OvershootScheme.EXPONENTIAL);
+        assertThat(OvershootAdvice.warnings(1.0, new Age.SinceBirth(Constants.GYR), decaying)).singleElement()
+                .asString().contains("--overshoot-hp 0.05");
+        assertThat(OvershootAdvice.warnings(1.0, Age.ZERO_AGE, decaying)).isEmpty();
     }
 
     @Test

@@ -8,10 +8,10 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * {@code star --overshoot-hp L [--overshoot-profile uniform|decaying|uniform-ramped]} gives the same catalogue row (all but the model
- * id) as a one-model grid whose {@code overshoot} key says the same: a practitioner could not reproduce a grid model
- * with overshoot, star having no such option. Production solver; the check is that both paths ask for the same
- * physics, not of the physics itself.
+ * {@code star --overshoot-hp L [--overshoot-profile uniform|decaying|uniform-ramped]} gives the same catalogue row
+ * (all but the model id) as a one-model grid whose {@code overshoot} key says the same: a practitioner could not
+ * reproduce a grid model with overshoot, star having no such option. Production solver; the check is that both paths
+ * ask for the same physics, not of the physics itself.
  */
 class StarOvershootTest {
 
@@ -64,8 +64,9 @@ class StarOvershootTest {
      * 1 Gyr (Z = 0.02) it holds m/M ~0.03, where the star without overshoot has none. KNOWN DISCREPANCY, frozen as a
      * symptom (README, Limits): published models of solar-like stars have radiative cores on the main sequence
      * (e.g. the standard solar model of Bahcall, Serenelli &amp; Basu 2005, ApJ 621, L85), and fits to eclipsing
-     * binaries find next to no overshoot below ~1.2 Msun (Claret &amp; Torres 2016, A&amp;A 592, A15; 2018, ApJ 859,
-     * 100). The mass-ramped profile gives such a star no overshoot: its row is the one without overshoot.
+     * binaries find next to no overshoot below ~1.2 Msun (Claret &amp; Torres 2016, A&amp;A 592, A15,
+     * arXiv:1606.00834; 2018, ApJ 859, 100, arXiv:1804.03148). The mass-ramped profile gives such a star no
+     * overshoot: its row is the one without overshoot.
      */
     @Test
     void massRampedOvershootLeavesASolarLikeStarAsWithoutOvershoot() {

@@ -8,8 +8,9 @@ import org.convgrid.engine.units.Constants;
  * {@link StepOvershoot} whose length grows with the star's mass: alpha_ov(M) = alpha x min(1, max(0,
  * (M - {@value #RAMP_START_MSUN} Msun) / ({@value #RAMP_FULL_MSUN} - {@value #RAMP_START_MSUN} Msun))), none up to
  * 1.2 Msun, the full alpha from 2.0 Msun. The shape follows the mass dependence Claret &amp; Torres found by fitting
- * detached eclipsing binaries (2016, A&amp;A 592, A15, step overshoot; 2018, ApJ 859, 100, diffusive: the parameter
- * rises from about zero at 1.2 Msun to a plateau from about 2 Msun); the linear rise between is a choice.
+ * detached eclipsing binaries (2016, A&amp;A 592, A15, arXiv:1606.00834, step overshoot; 2018, ApJ 859, 100,
+ * arXiv:1804.03148, diffusive: the parameter rises from about zero at 1.2 Msun to a plateau from about 2 Msun); the
+ * linear rise between is a choice.
  *
  * <p>Why it exists: with one alpha_ov at every mass, uniform overshoot keeps alive the small convective cores that
  * out-of-equilibrium 3He and 12C burning make in stars below ~1.2 Msun, by mixing unburnt fuel into them from above.

@@ -11,9 +11,9 @@ import org.convgrid.engine.structure.StellarProfile;
 import org.junit.jupiter.api.Test;
 
 /**
- * The mass-ramped step overshoot on fixed zero-age profiles: none up to 1.2 Msun, the full alpha_ov from 2 Msun, linear
- * between (the shape of the mass dependence of Claret &amp; Torres 2016, A&amp;A 592, A15, and 2018, ApJ 859, 100; the
- * linear rise is our choice), and otherwise the step overshoot itself.
+ * The mass-ramped step overshoot on fixed zero-age profiles: none up to 1.2 Msun, the full alpha_ov from 2 Msun,
+ * linear between (the shape of the mass dependence of Claret &amp; Torres 2016, A&amp;A 592, A15, arXiv:1606.00834,
+ * and 2018, ApJ 859, 100, arXiv:1804.03148; the linear rise is our choice), and otherwise the step overshoot itself.
  */
 class MassRampedOvershootTest {
 
