@@ -66,6 +66,7 @@ final class StarReport {
         // no core, its one zone reaching the centre is reported as the envelope)
         line(out, "convective core, top", row.coreCzMassFrac(), "m/M");
         line(out, "convective core, top", row.coreCzRadiusFrac(), "r/R");
+        line(out, "convective core, mixed to", row.coreMixedMassFrac(), "m/M");
         line(out, "convective envelope, base", row.envCzBaseMassFrac(), "m/M");
         line(out, "convective envelope, base", row.envCzBaseRadiusFrac(), "r/R");
         line(out, "convective envelope, mass", row.envCzMassMsun(), "Msun");

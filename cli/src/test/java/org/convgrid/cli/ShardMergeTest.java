@@ -45,6 +45,9 @@ class ShardMergeTest {
         long shardRows = CatalogueReader.read(shard2.resolve("catalogue.ecsv")).size();
         assertThat(shardRows).isEqualTo(second.total()).isBetween(1L, CliHarness.GRID_MODELS - 1);
 
+        // one shard as an earlier version wrote it (one column fewer, a description reworded): merged all the same
+        Path earlier = shard2.resolve("catalogue.ecsv");
+        Files.writeString(earlier, ResumeTest.earlierLayout(Files.readString(earlier), Integer.MAX_VALUE));
         CliHarness.Execution merged = run("merge", "runs/test-survey-shard-3-of-3", "runs/test-survey-shard-1-of-3",
                 "runs/test-survey-shard-2-of-3", "--out", "merged");
         assertThat(merged.code()).isEqualTo(0);
@@ -52,10 +55,26 @@ class ShardMergeTest {
         // the grid refines by default and shards do not: merge says what is left to match a single run
         assertThat(merged.err()).contains("convgrid: the transition masses are not refined yet (shards do not "
                 + "refine); to match a single run: convgrid transitions ").contains("merged --refine");
-        for (String file : List.of("catalogue.ecsv", "zones.csv", "transitions.csv")) {
+        for (String file : List.of("zones.csv", "transitions.csv")) {
             assertThat(Files.readAllBytes(work.resolve("merged").resolve(file)))
                     .isEqualTo(Files.readAllBytes(work.resolve("single").resolve(file)));
         }
+        // the earlier shard's rows could not carry the column it lacked (empty); every other cell is the single run's
+        List<String> mergedRows = Files.readAllLines(work.resolve("merged/catalogue.ecsv"));
+        List<String> singleRows = Files.readAllLines(work.resolve("single/catalogue.ecsv"));
+        assertThat(mergedRows).hasSameSizeAs(singleRows);
+        java.util.Set<String> earlierIds = new java.util.HashSet<>();
+        CatalogueReader.read(earlier).forEach(row -> earlierIds.add(row.modelId()));
+        int emptied = 0;
+        for (int i = 0; i < singleRows.size(); i++) {
+            String single = singleRows.get(i);
+            if (!mergedRows.get(i).equals(single)) {
+                assertThat(mergedRows.get(i)).isEqualTo(single.substring(0, single.lastIndexOf(',') + 1));
+                assertThat(earlierIds).contains(single.substring(0, single.indexOf(',')));
+                emptied++;
+            }
+        }
+        assertThat(emptied).isPositive();
         RunManifest manifest = RunManifestReader.read(Files.readString(work.resolve("merged/manifest.yaml")));
         assertThat(manifest.shard()).isNull();
         assertThat(manifest.total()).isEqualTo(156);

@@ -90,6 +90,33 @@ class StarOvershootTest {
         }
     }
 
+    /**
+     * core_mixed_mass_frac is where the evolution's overshoot mixed the core: in the profile of 1.5 Msun at 300 Myr
+     * with uniform overshoot 0.2, the last point with the centre's hydrogen lies below it and the next one above it
+     * (one mesh interval), well above the core's own top; without overshoot the two columns are equal. A check of
+     * the column against the model's own composition, not of the physics.
+     */
+    @Test
+    void theMixedCoreColumnIsWhereTheCoresCompositionEnds() throws Exception {
+        String[] star = {"star", "--mass", "1.5", "--z", "0.02", "--age-myr", "300", "--format", "csv"};
+        String uniform = dataRow(run(append(star, "--overshoot-hp", "0.2", "--profile", "p.csv")));
+        double coreTop = Double.parseDouble(field(uniform, column("core_cz_mass_frac")));
+        double mixedTop = Double.parseDouble(field(uniform, column("core_mixed_mass_frac")));
+        assertThat(mixedTop).isGreaterThan(coreTop * 1.3);
+        List<org.convgrid.output.profile.ProfileRow> shells = org.convgrid.output.profile.ProfileReader.read(
+                java.nio.file.Files.newBufferedReader(dir.resolve("p.csv")));
+        double centre = shells.get(0).hydrogen();
+        int k = 0;
+        while (shells.get(k + 1).hydrogen() == centre) {
+            k++;
+        }
+        assertThat(shells.get(k).massFrac()).isLessThanOrEqualTo(mixedTop);
+        assertThat(shells.get(k + 1).massFrac()).isGreaterThan(mixedTop);
+
+        String none = dataRow(run(star));
+        assertThat(field(none, column("core_mixed_mass_frac"))).isEqualTo(field(none, column("core_cz_mass_frac")));
+    }
+
     private String header;
 
     private String dataRow(CliHarness.Execution star) {

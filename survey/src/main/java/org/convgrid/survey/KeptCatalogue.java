@@ -45,11 +45,16 @@ public record KeptCatalogue(Set<String> ids, boolean hasHeader, long droppedByte
         int complete = lastLineEnd(bytes);
         String text = new String(bytes, 0, complete, StandardCharsets.UTF_8);
         Set<String> ids = new HashSet<>();
+        boolean rewrite = false;
         if (complete > 0) {
-            if (!text.startsWith(RunDirectory.catalogueHeader())) {
+            String current = EarlierCatalogueLayout.upgraded(text);
+            if (current == null) {
                 throw new RunSetupException(catalogue + " has another header than this version writes; "
                         + "cannot continue it");
             }
+            // an earlier version's layout: the same rows, in this version's columns, before anything is appended
+            rewrite = !current.equals(text);
+            text = current;
             List<CatalogueRow> rows = CatalogueReader.readCompleteLines(text);
             refuseRefined(catalogue, rows);
             Iterator<ModelRequest> expected = plan.iterator();
@@ -67,7 +72,9 @@ public record KeptCatalogue(Set<String> ids, boolean hasHeader, long droppedByte
                 ids.add(id);
             }
         }
-        if (complete < bytes.length) {
+        if (rewrite) {
+            AtomicFiles.writeString(catalogue, text);
+        } else if (complete < bytes.length) {
             try (FileChannel channel = FileChannel.open(catalogue, StandardOpenOption.WRITE)) {
                 channel.truncate(complete);
             }

@@ -34,9 +34,11 @@ final class ShardRows {
     /** Adds the complete lines of one shard's catalogue (each row checked by the catalogue reader). */
     void add(Path catalogue, Path shard) throws IOException {
         byte[] bytes = Files.readAllBytes(catalogue);
-        String text = new String(bytes, 0, KeptCatalogue.lastLineEnd(bytes), StandardCharsets.UTF_8);
         String header = RunDirectory.catalogueHeader();
-        if (!text.startsWith(header)) {
+        // a shard written by an earlier version is read in this version's layout
+        String text = EarlierCatalogueLayout.upgraded(
+                new String(bytes, 0, KeptCatalogue.lastLineEnd(bytes), StandardCharsets.UTF_8));
+        if (text == null) {
             throw new RunSetupException(catalogue + " has another header than this version writes");
         }
         List<CatalogueRow> rows = CatalogueReader.readCompleteLines(text);

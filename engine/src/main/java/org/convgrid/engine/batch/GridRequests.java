@@ -294,8 +294,11 @@ public final class GridRequests implements ChunkSolver {
                   LifeStage stage) {
         if (aged.status() == ModelStatus.OK) {
             StellarModel m = aged.model();
+            // the edge the evolution's overshoot mixes the core to, from this model's zones (as the next step would)
+            double mixedTop = request.physics().overshootScheme().model(request.physics().overshoot())
+                    .mixedCoreTop(m.profile()) / request.mass();
             return new Answer(new ModelOutcome.Solved(request, m.global(), m.convection(),
-                    startIterations + iterationsUpTo(result, aged.age()), stage), m);
+                    startIterations + iterationsUpTo(result, aged.age()), stage, mixedTop), m);
         }
         String detail = aged.detail();
         if (aged.status() == ModelStatus.PAST_MAIN_SEQUENCE && Double.isFinite(result.exhaustionAge())) {

@@ -52,6 +52,13 @@ public record MassRampedStepOvershoot(double alpha) implements Overshoot {
         return new StepOvershoot(alphaAt(massMsun)).mixedPoints(massAt, convective, previous);
     }
 
+    /** {@link StepOvershoot#mixedCoreTop} at {@link #alphaAt} the mass of {@code profile}. */
+    @Override
+    public double mixedCoreTop(OvershootProfile profile) {
+        double massMsun = profile.mass(profile.size() - 1) / Constants.M_SUN;
+        return new StepOvershoot(alphaAt(massMsun)).mixedCoreTop(profile);
+    }
+
     /** Mixes instantaneously, like {@link StepOvershoot}; no diffusion. */
     @Override
     public Optional<double[]> diffusion(OvershootProfile previous, double mixingLength) {

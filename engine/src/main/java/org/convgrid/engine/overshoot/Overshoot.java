@@ -37,4 +37,13 @@ public interface Overshoot {
      * @param mixingLength alpha of the convective transport, pressure scale heights (sets D_0 = v_c l_m/3)
      */
     Optional<double[]> diffusion(OvershootProfile previous, double mixingLength);
+
+    /**
+     * The mass, g, up to which the scheme mixes a central convective zone of {@code profile} instantaneously
+     * ({@link #mixedPoints}'s edge above it); NaN when the scheme mixes no further than the zone itself, or when the
+     * profile has no central zone or one reaching the surface.
+     */
+    default double mixedCoreTop(OvershootProfile profile) {
+        return Double.NaN;
+    }
 }

@@ -47,8 +47,7 @@ public record StepOvershoot(double alpha) implements Overshoot {
             double extent = rOut - rIn;
             double mLo = k == 0 ? 0.0 : massAt(previous,
                     rIn - alpha * Math.min(ConvectiveRuns.boundaryScaleHeight(previous, k - 1), extent));
-            double mHi = end == n - 1 ? Double.POSITIVE_INFINITY : massAt(previous,
-                    rOut + alpha * Math.min(ConvectiveRuns.boundaryScaleHeight(previous, end), extent));
+            double mHi = end == n - 1 ? Double.POSITIVE_INFINITY : edgeAbove(previous, end, extent);
             for (int j = 0; j < mixed.length; j++) {
                 double m = massAt.applyAsDouble(j);
                 if (m >= mLo && m <= mHi) {
@@ -57,6 +56,31 @@ public record StepOvershoot(double alpha) implements Overshoot {
             }
         });
         return mixed;
+    }
+
+    /** The edge above the central zone, as {@link #mixedPoints} mixes to it; NaN without one (see the interface). */
+    @Override
+    public double mixedCoreTop(OvershootProfile profile) {
+        int n = profile.size();
+        if (!(alpha > 0.0) || !profile.convective(0)) {
+            return Double.NaN;
+        }
+        int end = 0;
+        while (end + 1 < n && profile.convective(end + 1)) {
+            end++;
+        }
+        return end == n - 1 ? Double.NaN
+                : edgeAbove(profile, end, ConvectiveRuns.boundaryRadius(profile, end));
+    }
+
+    /**
+     * The mass at alpha_ov min(H_P, extent) above the boundary in interval (end, end + 1), g.
+     *
+     * @param extent the zone's radial extent, cm
+     */
+    private double edgeAbove(OvershootProfile p, int end, double extent) {
+        double rOut = ConvectiveRuns.boundaryRadius(p, end);
+        return massAt(p, rOut + alpha * Math.min(ConvectiveRuns.boundaryScaleHeight(p, end), extent));
     }
 
     /** Step overshoot mixes instantaneously; it adds no diffusion. */

@@ -37,15 +37,23 @@ public sealed interface ModelOutcome permits ModelOutcome.Solved, ModelOutcome.F
      * @param global surface and central properties
      * @param convection the convective zones
      * @param stage the phase and surface lithium of the model
+     * @param mixedCoreMassFraction m/M up to which the evolution's overshoot mixes the central convective zone
+     *     instantaneously; NaN when it mixes no further than the zone (no overshoot, decaying overshoot, no evolution)
      */
     record Solved(ModelRequest request, GlobalProperties global, ConvectiveStructure convection,
-                  int solverIterations, LifeStage stage) implements ModelOutcome {
+                  int solverIterations, LifeStage stage, double mixedCoreMassFraction) implements ModelOutcome {
 
         public Solved {
             Objects.requireNonNull(request, "request");
             Objects.requireNonNull(global, "global");
             Objects.requireNonNull(convection, "convection");
             Objects.requireNonNull(stage, "stage");
+        }
+
+        /** A model whose central zone is mixed no further than itself. */
+        public Solved(ModelRequest request, GlobalProperties global, ConvectiveStructure convection,
+                      int solverIterations, LifeStage stage) {
+            this(request, global, convection, solverIterations, stage, Double.NaN);
         }
 
         /** A model built from the zero-age main sequence (on the main sequence, lithium not followed). */
@@ -66,7 +74,7 @@ public sealed interface ModelOutcome permits ModelOutcome.Solved, ModelOutcome.F
 
         @Override
         public Solved withRequest(ModelRequest other) {
-            return new Solved(other, global, convection, solverIterations, stage);
+            return new Solved(other, global, convection, solverIterations, stage, mixedCoreMassFraction);
         }
 
         @Override

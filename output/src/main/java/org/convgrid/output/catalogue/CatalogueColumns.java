@@ -44,6 +44,8 @@ public final class CatalogueColumns {
     public static final String OPACITY_SCALE = "opacity_scale";
     /** Extension: turnover time as the integral of dr / v_conv across the envelope, days. */
     public static final String TURNOVER_TIME_GLOBAL_DAYS = "turnover_time_global_days";
+    /** Extension: m/M up to which the convective core is mixed, overshoot included. */
+    public static final String CORE_MIXED_MASS_FRAC = "core_mixed_mass_frac";
 
     private static final String REAL = "float64";
     private static final String TEXT = "string";
@@ -89,7 +91,11 @@ public final class CatalogueColumns {
             new EcsvColumn(CRITERION, "", TEXT, "convective stability criterion: schwarzschild or ledoux"),
             new EcsvColumn(OPACITY_SCALE, "", REAL, "factor applied to every opacity (1 = as published)"),
             new EcsvColumn(TURNOVER_TIME_GLOBAL_DAYS, "d", REAL,
-                    "integral of dr / v_conv across the convective envelope; empty when none"));
+                    "integral of dr / v_conv across the convective envelope; empty when none"),
+            new EcsvColumn(CORE_MIXED_MASS_FRAC, "", REAL,
+                    "m/M up to which the convective core is mixed: its top carried outward by the uniform (or"
+                            + " uniform-ramped) overshoot distance; the core's own top without overshoot or with"
+                            + " decaying overshoot, which mixes beyond it by diffusion; empty when no core"));
 
     /** The columns the README fixes, in order. */
     public static final List<String> FIXED = DESCRIBED.subList(0, 26).stream().map(EcsvColumn::name).toList();

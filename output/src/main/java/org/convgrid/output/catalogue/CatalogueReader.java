@@ -121,7 +121,8 @@ public final class CatalogueReader {
                     List.of(),
                     Integer.parseInt(c.text(CatalogueColumns.SOLVER_ITERATIONS)),
                     criterion.isEmpty() ? null : StabilityCriterion.valueOf(criterion.toUpperCase(Locale.ROOT)),
-                    Double.isNaN(opacity) ? 1.0 : opacity, c.number(CatalogueColumns.TURNOVER_TIME_GLOBAL_DAYS));
+                    Double.isNaN(opacity) ? 1.0 : opacity, c.number(CatalogueColumns.TURNOVER_TIME_GLOBAL_DAYS),
+                    c.number(CatalogueColumns.CORE_MIXED_MASS_FRAC));
         } catch (IllegalArgumentException e) {
             throw new OutputFormatException("catalogue row " + r.getRecordNumber() + " (line "
                     + (r.getRecordNumber() + 1) + "), column '" + c.current + "': " + e.getMessage(), e);

@@ -42,6 +42,8 @@ import org.convgrid.output.Span;
  * @param criterion stability criterion, null when the catalogue does not say
  * @param opacityScale opacity multiplier
  * @param turnoverTimeGlobalDays envelope turnover time (integral definition), days
+ * @param coreMixedMassFrac m/M up to which the central convective zone is mixed (overshoot included); NaN when
+ *     there is no core, or for rows read from a catalogue written before the column
  */
 public record CatalogueRow(String modelId, double massMsun, double zInit, double yInit, double mixingLength,
                            double overshootHp, double ageGyr, String phase, ModelStatus status, String statusDetail,
@@ -50,7 +52,8 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
                            StructureClass structureClass, double coreCzMassFrac, double coreCzRadiusFrac,
                            double envCzBaseMassFrac, double envCzBaseRadiusFrac, double envCzMassMsun,
                            double turnoverTimeDays, List<CatalogueZone> zones, int solverIterations,
-                           StabilityCriterion criterion, double opacityScale, double turnoverTimeGlobalDays) {
+                           StabilityCriterion criterion, double opacityScale, double turnoverTimeGlobalDays,
+                           double coreMixedMassFrac) {
 
     /** The {@code phase} of a model on the main sequence. */
     public static final String MAIN_SEQUENCE = "main_sequence";
@@ -63,6 +66,22 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
         statusDetail = statusDetail == null ? "" : statusDetail;
         phase = phase == null ? "" : phase;
         zones = List.copyOf(zones);
+    }
+
+    /** A row whose core is mixed no further than its top (no overshoot): {@code coreMixedMassFrac} = core top. */
+    public CatalogueRow(String modelId, double massMsun, double zInit, double yInit, double mixingLength,
+                        double overshootHp, double ageGyr, String phase, ModelStatus status, String statusDetail,
+                        double luminosityLsun, double radiusRsun, double teffK, double logGCgs,
+                        double centralTempK, double centralDensityCgs, double centralHFrac, double surfaceLiRel,
+                        StructureClass structureClass, double coreCzMassFrac, double coreCzRadiusFrac,
+                        double envCzBaseMassFrac, double envCzBaseRadiusFrac, double envCzMassMsun,
+                        double turnoverTimeDays, List<CatalogueZone> zones, int solverIterations,
+                        StabilityCriterion criterion, double opacityScale, double turnoverTimeGlobalDays) {
+        this(modelId, massMsun, zInit, yInit, mixingLength, overshootHp, ageGyr, phase, status, statusDetail,
+                luminosityLsun, radiusRsun, teffK, logGCgs, centralTempK, centralDensityCgs, centralHFrac,
+                surfaceLiRel, structureClass, coreCzMassFrac, coreCzRadiusFrac, envCzBaseMassFrac,
+                envCzBaseRadiusFrac, envCzMassMsun, turnoverTimeDays, zones, solverIterations, criterion,
+                opacityScale, turnoverTimeGlobalDays, coreCzMassFrac);
     }
 
     /** Whether the model converged as asked (status ok). */
@@ -81,6 +100,6 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
                 statusDetail, luminosityLsun, radiusRsun, teffK, logGCgs, centralTempK, centralDensityCgs,
                 centralHFrac, surfaceLiRel, structureClass, coreCzMassFrac, coreCzRadiusFrac, envCzBaseMassFrac,
                 envCzBaseRadiusFrac, envCzMassMsun, turnoverTimeDays, found, solverIterations, criterion,
-                opacityScale, turnoverTimeGlobalDays);
+                opacityScale, turnoverTimeGlobalDays, coreMixedMassFrac);
     }
 }

@@ -87,6 +87,7 @@ public final class CatalogueWriter implements Flushable, Closeable {
         cells.add(r.criterion() == null ? "" : r.criterion().name().toLowerCase(Locale.ROOT));
         cells.add(CsvNumbers.format(r.opacityScale()));
         cells.add(CsvNumbers.format(r.turnoverTimeGlobalDays()));
+        cells.add(CsvNumbers.format(r.coreMixedMassFrac()));
         return cells;
     }
 

@@ -58,7 +58,14 @@ public final class OutcomeRows {
                 c == null ? List.of() : zones(c, request.mass() / Constants.M_SUN), outcome.solverIterations(),
                 request.physics().criterion(),
                 request.physics().opacityScale(),
-                envelope ? c.turnoverTimeGlobal() / Constants.DAY : nan);
+                envelope ? c.turnoverTimeGlobal() / Constants.DAY : nan,
+                core ? mixedCoreTop(outcome, clamp(innermost.outerMassFraction())) : nan);
+    }
+
+    /** The overshoot's mixed edge above the core, never below the core's own top. */
+    private static double mixedCoreTop(ModelOutcome outcome, double coreTop) {
+        double mixed = ((ModelOutcome.Solved) outcome).mixedCoreMassFraction();
+        return Double.isNaN(mixed) ? coreTop : clamp(Math.max(mixed, coreTop));
     }
 
     /**
