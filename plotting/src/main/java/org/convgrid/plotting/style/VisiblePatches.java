@@ -7,7 +7,7 @@ import java.util.List;
 /**
  * Whether shaded rectangles can be seen on a chart, judged before it is painted (XChart decides the legend then) from
  * their extents in shares of each axis (0 at the axis's lower end, 1 at its upper end), turned into pixels of the
- * plot of our 1200 x 800 charts. A legend entry for a colour the reader cannot find misleads, so a zone kind is listed
+ * plot of our 1200 x 800 charts ({@link NominalPlot}). A legend entry for a colour the reader cannot find misleads, so a zone kind is listed
  * only when its rectangles make at least one patch {@link #MIN_HEIGHT_PX} tall and {@link #MIN_WIDTH_PX} wide.
  * Rectangles that touch side by side and share some height (a zone held over consecutive evolution steps, the
  * columns of neighbouring models) count as one patch: each may be a sliver, together they show.
@@ -22,9 +22,6 @@ import java.util.List;
  */
 public final class VisiblePatches {
 
-    /** The plot's size on our 1200 x 800 charts, pixels (it varies by a few tens with the legend and tick labels). */
-    static final double PLOT_HEIGHT_PX = 620;
-    static final double PLOT_WIDTH_PX = 720;
     /** The least height of a visible patch, pixels (after what is drawn over it at the axis's ends). */
     public static final double MIN_HEIGHT_PX = 1.5;
     /** The least width of a visible patch, pixels. */
@@ -44,7 +41,7 @@ public final class VisiblePatches {
 
         boolean tall(double coveredAtEndsPx) {
             double covered = (bottom <= EDGE ? coveredAtEndsPx : 0.0) + (top >= 1.0 - EDGE ? coveredAtEndsPx : 0.0);
-            return (top - bottom) * PLOT_HEIGHT_PX - covered >= MIN_HEIGHT_PX;
+            return (top - bottom) * NominalPlot.HEIGHT_PX - covered >= MIN_HEIGHT_PX;
         }
 
         /** Whether {@code next} (starting no further left) continues this one side by side. */
@@ -89,7 +86,7 @@ public final class VisiblePatches {
                 lasts.set(joined, p);
             }
             double[] run = runs.get(joined < 0 ? runs.size() - 1 : joined);
-            if ((run[1] - run[0]) * PLOT_WIDTH_PX >= MIN_WIDTH_PX) {
+            if ((run[1] - run[0]) * NominalPlot.WIDTH_PX >= MIN_WIDTH_PX) {
                 return true;
             }
         }

@@ -9,8 +9,8 @@ import org.junit.jupiter.api.Test;
 /** Which shaded patches a legend may list (layout only, no physics): the cases the demo's reviews found. */
 class VisiblePatchesTest {
 
-    private static final double PX_Y = 1.0 / VisiblePatches.PLOT_HEIGHT_PX;
-    private static final double PX_X = 1.0 / VisiblePatches.PLOT_WIDTH_PX;
+    private static final double PX_Y = 1.0 / NominalPlot.HEIGHT_PX;
+    private static final double PX_X = 1.0 / NominalPlot.WIDTH_PX;
 
     @Test
     void aLongLineOfAPixelAndAHalfShows() {
@@ -40,7 +40,7 @@ class VisiblePatchesTest {
         double top = -Math.log10(1 - 0.067) / 7.0;
         List<VisiblePatches.Patch> core = new ArrayList<>();
         core.add(new VisiblePatches.Patch(0.70, 0.72, 0.0, top));
-        assertThat(top * VisiblePatches.PLOT_HEIGHT_PX).isBetween(2.5, 3.0);
+        assertThat(top * NominalPlot.HEIGHT_PX).isBetween(2.5, 3.0);
         // under the border and the burning region's 2-pixel outline: not seen
         assertThat(VisiblePatches.anyVisible(core, VisiblePatches.BORDER_PX + 2.0)).isFalse();
         // the same height away from the axis's end shows
