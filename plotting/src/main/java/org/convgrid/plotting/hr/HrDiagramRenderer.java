@@ -9,7 +9,9 @@ import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.layout.LabelPlacement;
 import org.convgrid.plotting.layout.Obstacles;
 import org.convgrid.plotting.layout.SeriesObstacles;
+import org.convgrid.plotting.style.ChartNotes;
 import org.convgrid.plotting.style.ChartStyle;
+import org.convgrid.plotting.style.NominalPlot;
 import org.convgrid.plotting.style.ScaledMarker;
 import org.convgrid.plotting.style.StyledChart;
 import org.knowm.xchart.XYSeries;
@@ -24,6 +26,17 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  */
 public final class HrDiagramRenderer {
 
+    /**
+     * Isochrones whose brightest models lie within this many pixels of each other share the room for
+     * {@link #AGE_LABELS_TOGETHER} age labels: at five ages 0.05 Gyr apart (0.9-1.1 Gyr) the five labels and their
+     * leaders piled up at the bright end, within 20 pixels, crossing each other. A little over a label height.
+     */
+    static final double AGE_LABEL_SPACING_PX = 30.0;
+    /** Age labels that fit side by side around one spot (the demo's 20 and 150 Myr, 12 pixels apart, do). */
+    static final int AGE_LABELS_TOGETHER = 2;
+    /** The note of a diagram that left out some isochrones' age labels. */
+    static final String AGES_LEFT_OUT_NOTE = "Some isochrones lie too close together to label each with its age: "
+            + "the legend names every isochrone by its dash pattern.";
     /** Margin added around the data range, in dex. */
     private static final double PAD_DEX = 0.04;
     /** Room above the brightest model for the isochrones' age labels, as a share of the luminosity range. */
@@ -132,7 +145,7 @@ public final class HrDiagramRenderer {
             g.setColor(ChartStyle.BLACK);
             g.setStroke(new java.awt.BasicStroke(LEADER_WIDTH));
             FontMetrics fm = g.getFontMetrics();
-            List<Label> labels = labels(data);
+            List<Label> labels = labels(data, c);
             List<LabelPlacement.Placed> placed = layout(c, fm, labels);
             for (int i = 0; i < labels.size(); i++) {
                 LabelPlacement.Placed p = placed.get(i);
@@ -142,6 +155,9 @@ public final class HrDiagramRenderer {
                 g.drawString(labels.get(i).text(), (float) p.box().getX(), (float) (p.box().getY() + fm.getAscent()));
             }
         });
+        if (labels(data, chart).stream().filter(l -> !l.massLabel()).count() < middleIsochrones(data).size()) {
+            ChartNotes.addRightOfPlot(chart, List.of(AGES_LEFT_OUT_NOTE));
+        }
         return chart;
     }
 
@@ -190,23 +206,58 @@ public final class HrDiagramRenderer {
      * @param point the model it names
      * @param text what it says
      */
-    record Label(HrPoint point, String text) {
+    record Label(HrPoint point, String text, boolean massLabel) {
     }
 
     /**
      * Every label, in the order they are placed: the mass labels ({@link HrDiagramData#massLabels}), then, with
-     * isochrones, the age of each isochrone of the middle Z beside its brightest model, brightest first.
+     * isochrones, the age of each isochrone of the middle Z beside its brightest model, brightest first, leaving
+     * out an age whose brightest model lies within {@link #AGE_LABEL_SPACING_PX} of {@link #AGE_LABELS_TOGETHER}
+     * already labelled (the youngest and the oldest are labelled first, so the labels span the ages). {@code chart}: the chart with its
+     * axis ranges set (not yet painted).
      */
-    static List<Label> labels(HrDiagramData data) {
+    static List<Label> labels(HrDiagramData data, StyledChart chart) {
         List<Label> labels = new java.util.ArrayList<>();
-        data.massLabels().forEach(p -> labels.add(new Label(p, massLabel(p))));
-        if (!data.isochrones().isEmpty()) {
-            double middleZ = data.metallicities().get(data.metallicities().size() / 2);
-            data.isochrones().stream().filter(l -> l.zInit() == middleZ)
-                    .sorted(java.util.Comparator.comparingDouble((HrDiagramData.ZeroAgeLine l) -> -brightest(l).logL()))
-                    .forEach(l -> labels.add(new Label(brightest(l), age(l.ageGyr()))));
+        data.massLabels().forEach(p -> labels.add(new Label(p, massLabel(p), true)));
+        List<HrDiagramData.ZeroAgeLine> middle = middleIsochrones(data);
+        if (middle.isEmpty()) {
+            return labels;
         }
+        // youngest, oldest, then the ages between in order
+        List<HrDiagramData.ZeroAgeLine> byPreference = new java.util.ArrayList<>(middle);
+        byPreference.sort(java.util.Comparator.comparingDouble(HrDiagramData.ZeroAgeLine::ageGyr));
+        if (byPreference.size() > 1) {
+            byPreference.add(1, byPreference.remove(byPreference.size() - 1));
+        }
+        List<HrDiagramData.ZeroAgeLine> kept = new java.util.ArrayList<>();
+        for (HrDiagramData.ZeroAgeLine line : byPreference) {
+            if (kept.stream().filter(k -> nominalPixels(chart, brightest(k), brightest(line)) < AGE_LABEL_SPACING_PX)
+                    .count() < AGE_LABELS_TOGETHER) {
+                kept.add(line);
+            }
+        }
+        kept.stream().sorted(java.util.Comparator.comparingDouble((HrDiagramData.ZeroAgeLine l) -> -brightest(l).logL()))
+                .forEach(l -> labels.add(new Label(brightest(l), age(l.ageGyr()), false)));
         return labels;
+    }
+
+    /** The isochrones of the middle Z, the ones labelled with their ages. */
+    private static List<HrDiagramData.ZeroAgeLine> middleIsochrones(HrDiagramData data) {
+        if (data.isochrones().isEmpty()) {
+            return List.of();
+        }
+        double middleZ = data.metallicities().get(data.metallicities().size() / 2);
+        return data.isochrones().stream().filter(l -> l.zInit() == middleZ).toList();
+    }
+
+    /**
+     * How far apart two models are on the chart, in pixels of a plot of nominal size ({@link NominalPlot}): the
+     * labels are decided before the chart is painted, when XChart does not yet know where its axes lie.
+     */
+    private static double nominalPixels(StyledChart chart, HrPoint a, HrPoint b) {
+        double dx = (a.logTeff() - b.logTeff()) / (chart.getStyler().getXAxisMax() - chart.getStyler().getXAxisMin());
+        double dy = (a.logL() - b.logL()) / (chart.getStyler().getYAxisMax() - chart.getStyler().getYAxisMin());
+        return Math.hypot(dx * NominalPlot.WIDTH_PX, dy * NominalPlot.HEIGHT_PX);
     }
 
     /**
@@ -215,9 +266,12 @@ public final class HrDiagramRenderer {
      * it had to move away. For the overlay and for tests that check it.
      */
     static List<LabelPlacement.Placed> layout(StyledChart c, FontMetrics fm, List<Label> labels) {
+        // a mass label always gets a leader: a model of every other Z lies near the one it names (the demo's "1 M\u2609"
+        // sat between the Z = 0.014 and 0.02 models of 20 Myr, naming neither clearly)
         List<LabelPlacement.Wanted> wanted = labels.stream().map(l -> new LabelPlacement.Wanted(
                 c.getScreenXFromChart(-l.point().logTeff()), c.getScreenYFromChart(l.point().logL()),
-                fm.stringWidth(l.text()), fm.getAscent() + fm.getDescent(), ChartStyle.MARKER_SIZE / 2.0)).toList();
+                fm.stringWidth(l.text()), fm.getAscent() + fm.getDescent(), ChartStyle.MARKER_SIZE / 2.0,
+                l.massLabel() ? LabelPlacement.WITH_LEADER_PX : LabelPlacement.GAP_PX)).toList();
         return LabelPlacement.place(wanted, SeriesObstacles.addTo(new Obstacles(), c), plotArea(c));
     }
 

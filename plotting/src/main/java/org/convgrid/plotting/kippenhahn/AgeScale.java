@@ -5,6 +5,7 @@ import java.util.List;
 import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.AgeAxisTitle;
+import org.convgrid.plotting.style.VisiblePatches;
 
 /**
  * The age axis of a zones-against-age chart. A track from the zero-age main sequence is drawn on a linear axis in Gyr.
@@ -33,6 +34,12 @@ record AgeScale(boolean logarithmic, double min, double max) {
     /** Where an age (Gyr) lies on the axis; ages left of the axis (birth, on a log axis) are held at its left end. */
     double x(double ageGyr) {
         return logarithmic ? Math.max(ageGyr * MYR_PER_GYR, min) : ageGyr;
+    }
+
+    /** Where an age (Gyr) lies along the axis, as a share of its length (0 at the left end, 1 at the right). */
+    double share(double ageGyr) {
+        return logarithmic ? VisiblePatches.logShare(x(ageGyr), min, max)
+                : VisiblePatches.linearShare(x(ageGyr), min, max);
     }
 
     /** The ticks of a logarithmic axis: every decade of Myr between its ends. */

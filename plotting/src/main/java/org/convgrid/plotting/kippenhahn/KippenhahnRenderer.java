@@ -15,6 +15,7 @@ import org.convgrid.plotting.style.ChartNotes;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.LogAxis;
 import org.convgrid.plotting.style.StyledChart;
+import org.convgrid.plotting.style.VisiblePatches;
 import org.convgrid.plotting.zones.ZoneKind;
 import org.convgrid.plotting.zones.ZoneMapRenderer;
 import org.knowm.xchart.XYSeries;
@@ -40,6 +41,11 @@ public final class KippenhahnRenderer {
     /** Hatch: 45-degree lines this many pixels apart, this wide. */
     private static final int HATCH_SPACING = 11;
     private static final BasicStroke HATCH_STROKE = new BasicStroke(1.3f);
+    /**
+     * What is drawn over a zone at an end of the vertical axis, pixels: the plot's border, and at the centre the
+     * burning region's outline (half its width falls inside the region's edge).
+     */
+    static final double COVERED_AT_ENDS_PX = VisiblePatches.BORDER_PX + BURNING_EDGE_WIDTH;
     /** Room added at either end of the age axis, as a share of its span. */
     private static final double EDGE_ROOM_SHARE = 1e-6;
 
@@ -73,20 +79,18 @@ public final class KippenhahnRenderer {
         if (y == ZoneCoordinate.MASS_FRACTION) {
             ChartStyle.unitYAxis(chart);
         } else {
-            chart.getStyler().setYAxisMin(y.min()).setYAxisMax(y.max());
+            // as on the linear age axis: a hair of room lets XChart label the ends, 0 (the centre) and the top; the
+            // depth charts' axis began at an unlabelled tick, so the centre's 0 had to be guessed
+            double hair = EDGE_ROOM_SHARE * (y.max() - y.min());
+            chart.getStyler().setYAxisMin(y.min() - hair).setYAxisMax(y.max() + hair);
             chart.getStyler().setYAxisDecimalPattern("0");
         }
         chart.getStyler().setPlotGridLinesVisible(false);
         Set<ZoneKind> inLegend = EnumSet.noneOf(ZoneKind.class);
-        // a zone kind too thin to see anywhere on this axis is left out of the legend (and named in a note)
+        // a zone kind too small to see anywhere on these axes is left out of the legend (and named in a note)
         Set<ZoneKind> seen = EnumSet.noneOf(ZoneKind.class);
-        Set<ZoneKind> shown = EnumSet.noneOf(ZoneKind.class);
-        for (AgeRect r : data.zones()) {
-            seen.add(r.kind());
-            if (y.shows(r.lo(), r.hi())) {
-                shown.add(r.kind());
-            }
-        }
+        data.zones().forEach(r -> seen.add(r.kind()));
+        Set<ZoneKind> shown = visibleKinds(data.zones(), ages, y);
         int n = 0;
         List<List<AgeRect>> zoneBands = Bands.join(data.zones(), true);
         for (ZoneKind kind : ZoneKind.values()) {
@@ -124,6 +128,24 @@ public final class KippenhahnRenderer {
         }
         ChartNotes.addRightOfPlot(chart, notes);
         return chart;
+    }
+
+    /**
+     * The zone kinds that make at least one patch big enough to be seen on these axes ({@link VisiblePatches}), each
+     * rectangle as drawn (an envelope reaches the top of the depth axis).
+     */
+    static Set<ZoneKind> visibleKinds(List<AgeRect> zones, AgeScale ages, ZoneCoordinate y) {
+        Set<ZoneKind> visible = EnumSet.noneOf(ZoneKind.class);
+        for (ZoneKind kind : ZoneKind.values()) {
+            List<VisiblePatches.Patch> patches = zones.stream().filter(r -> r.kind() == kind).map(y::drawn)
+                    .map(r -> new VisiblePatches.Patch(ages.share(r.left()), ages.share(r.right()), y.share(r.lo()),
+                            y.share(r.hi())))
+                    .toList();
+            if (VisiblePatches.anyVisible(patches, COVERED_AT_ENDS_PX)) {
+                visible.add(kind);
+            }
+        }
+        return visible;
     }
 
     /**

@@ -1,5 +1,6 @@
 package org.convgrid.plotting.kippenhahn;
 
+import org.convgrid.plotting.style.VisiblePatches;
 import org.convgrid.plotting.zones.ZoneKind;
 
 /**
@@ -45,11 +46,13 @@ public enum ZoneCoordinate {
     /** A zone thinner than this share of the axis everywhere (about two pixels) counts as not drawn. */
     public static final double MIN_VISIBLE_SHARE = 0.003;
 
-    /** Whether an interval [lo, hi] of m/M is thick enough on this axis to be seen. */
+    /**
+     * Whether an interval [lo, hi] of m/M is thick enough on this axis to be seen: whether a depth chart would show a
+     * thin envelope. The legend asks more (width too, and what is drawn over the axis's ends): {@link VisiblePatches}.
+     */
     public boolean shows(double lo, double hi) {
         return of(hi) - of(lo) >= MIN_VISIBLE_SHARE * (max - min);
     }
-
     /**
      * The rectangle as drawn on this axis: on the depth axis a zone that reaches the surface (an envelope or the whole
      * star) is drawn up to the top, the surface. Its top is the outermost mesh point, about 4e-7 of the mass below
@@ -59,6 +62,11 @@ public enum ZoneCoordinate {
     public AgeRect drawn(AgeRect r) {
         boolean surface = r.kind() == ZoneKind.ENVELOPE || r.kind() == ZoneKind.WHOLE_STAR;
         return this == SURFACE_DEPTH && surface ? new AgeRect(r.step(), r.left(), r.right(), r.lo(), 1.0) : r;
+    }
+
+    /** Where the mass fraction {@code m} sits on this axis, as a share of its height (0 at the bottom, 1 at the top). */
+    public double share(double m) {
+        return (of(m) - min) / (max - min);
     }
 
     /** Where the mass fraction {@code m} (m/M in [0, 1]) sits on this axis. */

@@ -43,9 +43,23 @@ public final class LabelPlacement {
      * @param width the text's width, pixels
      * @param height the text's height, pixels
      * @param markerRadius how far from the point its marker reaches: where a leader line stops, pixels
+     * @param nearestPx the nearest a label's edge may come to its point, pixels: {@link #GAP_PX} for a label that
+     *     may sit beside its point without a leader, {@link #WITH_LEADER_PX} for one that always needs a leader
      */
-    public record Wanted(double x, double y, double width, double height, double markerRadius) {
+    public record Wanted(double x, double y, double width, double height, double markerRadius, double nearestPx) {
+
+        /** A label that may sit beside its point, {@link #GAP_PX} away, without a leader. */
+        public Wanted(double x, double y, double width, double height, double markerRadius) {
+            this(x, y, width, height, markerRadius, GAP_PX);
+        }
     }
+
+    /**
+     * The nearest ring of a label that always gets a leader: a ring past {@link #LEADER_BEYOND_PX}, so the leader is
+     * long enough to see. For a label that names one of several markers close together (a mass label of an HR
+     * diagram has a model of each metallicity near it), without a leader the reader cannot tell which one it names.
+     */
+    public static final double WITH_LEADER_PX = LEADER_BEYOND_PX + RING_STEP_PX;
 
     /**
      * A placed label.
@@ -127,7 +141,7 @@ public final class LabelPlacement {
     /** The places tried for one label, nearest ring first. */
     static List<Rectangle2D> candidates(Wanted w) {
         List<Rectangle2D> boxes = new ArrayList<>();
-        for (double d = GAP_PX; d <= MAX_REACH_PX; d += RING_STEP_PX) {
+        for (double d = w.nearestPx(); d <= MAX_REACH_PX; d += RING_STEP_PX) {
             for (double degrees : DIRECTIONS) {
                 double cos = Math.cos(Math.toRadians(degrees));
                 double sin = Math.sin(Math.toRadians(degrees));

@@ -10,21 +10,17 @@ import org.convgrid.plotting.style.ChartNotes;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.MassAxis;
 import org.convgrid.plotting.style.StyledChart;
+import org.convgrid.plotting.style.VisiblePatches;
 import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
- * Turns {@link ZoneMapData} into an XChart chart in {@link ChartStyle}. A zone kind too thin to be seen anywhere on
- * the map (a central shell below the core threshold holds under a thousandth of the mass) stays out of the legend
- * and is named in a note instead, so the legend never lists a colour the reader cannot find.
+ * Turns {@link ZoneMapData} into an XChart chart in {@link ChartStyle}. A zone kind too small to be seen anywhere on
+ * the map ({@link VisiblePatches}: a central zone below the core threshold holds under a thousandth of the mass, and
+ * in r/R, where it is taller, it sits in the 1-2 pixel wide columns of the refinement's models) stays out of the
+ * legend and is named in a note instead, so the legend never lists a colour the reader cannot find.
  */
 public final class ZoneMapRenderer {
-
-    /**
-     * A zone thinner than this share of the unit axis (about one pixel of the ~620-pixel plot) cannot be seen; one
-     * 0.003 thick (the demo's shell above the 1.8 Msun core, Z = 0.02, 600 Myr) shows as a line.
-     */
-    static final double MIN_VISIBLE_HEIGHT = 0.0015;
 
     private ZoneMapRenderer() {
     }
@@ -40,13 +36,8 @@ public final class ZoneMapRenderer {
         ChartStyle.unitYAxis(chart);
         chart.getStyler().setPlotGridLinesVisible(false);
         Set<ZoneKind> seen = EnumSet.noneOf(ZoneKind.class);
-        Set<ZoneKind> visible = EnumSet.noneOf(ZoneKind.class);
-        for (ZoneRect r : data.rects()) {
-            seen.add(r.kind());
-            if (r.hi() - r.lo() >= MIN_VISIBLE_HEIGHT) {
-                visible.add(r.kind());
-            }
-        }
+        data.rects().forEach(r -> seen.add(r.kind()));
+        Set<ZoneKind> visible = visibleKinds(data);
         Set<ZoneKind> inLegend = EnumSet.noneOf(ZoneKind.class);
         int i = 0;
         // Kind order fixes the legend order; rectangles never overlap, so drawing order does not matter.
@@ -77,6 +68,21 @@ public final class ZoneMapRenderer {
         seen.stream().filter(k -> !visible.contains(k)).forEach(k -> notes.add(tooThinNote(k)));
         ChartNotes.addRightOfPlot(chart, notes);
         return chart;
+    }
+
+    /** The zone kinds of the map that make at least one patch big enough to be seen ({@link VisiblePatches}). */
+    static Set<ZoneKind> visibleKinds(ZoneMapData data) {
+        Set<ZoneKind> visible = EnumSet.noneOf(ZoneKind.class);
+        for (ZoneKind kind : ZoneKind.values()) {
+            List<VisiblePatches.Patch> patches = data.rects().stream().filter(r -> r.kind() == kind)
+                    .map(r -> new VisiblePatches.Patch(VisiblePatches.logShare(r.left(), data.massMin(), data.massMax()),
+                            VisiblePatches.logShare(r.right(), data.massMin(), data.massMax()), r.lo(), r.hi()))
+                    .toList();
+            if (VisiblePatches.anyVisible(patches, VisiblePatches.BORDER_PX)) {
+                visible.add(kind);
+            }
+        }
+        return visible;
     }
 
     /** The note naming a zone kind that is listed in zones.csv but too thin to see on this map. */

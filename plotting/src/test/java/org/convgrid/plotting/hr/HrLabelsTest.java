@@ -34,7 +34,7 @@ class HrLabelsTest {
         c.paint(g, ChartStyle.WIDTH, ChartStyle.HEIGHT);
         g.setFont(ChartStyle.ANNOTATION_FONT);
         FontMetrics fm = g.getFontMetrics();
-        List<HrDiagramRenderer.Label> labels = HrDiagramRenderer.labels(data);
+        List<HrDiagramRenderer.Label> labels = HrDiagramRenderer.labels(data, c);
         List<LabelPlacement.Placed> placed = HrDiagramRenderer.layout(c, fm, labels);
         assertThat(labels).extracting(HrDiagramRenderer.Label::text).contains("1 M\u2609", "0.2 M\u2609");
 
@@ -56,6 +56,10 @@ class HrLabelsTest {
             Rectangle2D box = placed.get(i).box();
             String what = labels.get(i).text();
             assertThat(placed.get(i).free()).as(what).isTrue();
+            if (labels.get(i).massLabel()) {
+                // a model of every other Z lies near the one a mass label names: the leader says which
+                assertThat(placed.get(i).leader()).as(what + " leader").isNotNull();
+            }
             assertThat(plot.contains(box)).as(what + " inside the plot").isTrue();
             assertThat(markers).as(what + " on a marker").noneMatch(box::intersects);
             assertThat(lines).as(what + " on a line").noneMatch(box::intersectsLine);

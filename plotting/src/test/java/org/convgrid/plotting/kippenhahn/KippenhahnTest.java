@@ -55,6 +55,33 @@ class KippenhahnTest {
     }
 
     @Test
+    void theDepthAxisLabelsTheCentreAndTheTopAndLeavesOutACoreItCannotShow() throws Exception {
+        // a 1 Msun track from birth whose central convective zone reaches m/M 0.067 at most: 31 pixels in m/M, 2.7 on
+        // the depth axis, where the border and the burning region's outline cover it
+        StringBuilder b = new StringBuilder("age_gyr,phase,central_cz_top_mass_frac,env_cz_base_mass_frac,"
+                + "burning_inner_mass_frac,burning_outer_mass_frac,nuclear_lum_frac\n");
+        b.append("0.0,pre_main_sequence,1.0,0.0,,,0\n");
+        for (int k = 0; k <= 60; k++) {
+            double ageGyr = Math.pow(10, -6 + k * 0.1);
+            boolean main = ageGyr >= 0.03;
+            String core = ageGyr > 0.02 && ageGyr < 0.03 ? "0.067" : "";
+            b.append(ageGyr).append(',').append(main ? "main_sequence" : "pre_main_sequence").append(',')
+                    .append(core).append(",0.99,0.0,0.3,").append(ageGyr > 0.02 ? "1.0" : "0.0").append('\n');
+        }
+        Track t = new Track("t", TrackReader.read(new StringReader(b.toString())));
+        KippenhahnData data = Kippenhahn.build(new TrackOrigin("t", 1.0, 0.008, PHYSICS), t);
+        assertThat(data.zones()).extracting(AgeRect::kind).contains(ZoneKind.CORE);
+        var depth = KippenhahnRenderer.render(data, ZoneCoordinate.SURFACE_DEPTH);
+        assertThat(depth.getSeriesMap()).doesNotContainKey(ZoneKind.CORE.label())
+                .containsKey(ZoneKind.ENVELOPE.label());
+        assertThat(KippenhahnRenderer.render(data).getSeriesMap()).containsKey(ZoneKind.CORE.label());
+        // the axis reaches a hair past 0 and 7, so XChart labels both ends (it leaves a tick on an end unlabelled)
+        assertThat(depth.getStyler().getYAxisMin()).isLessThan(0.0).isGreaterThan(-1e-3);
+        assertThat(depth.getStyler().getYAxisMax()).isGreaterThan(ZoneCoordinate.DEPTH_TOP)
+                .isLessThan(ZoneCoordinate.DEPTH_TOP + 1e-3);
+    }
+
+    @Test
     void shadedIntervalsAreTheTrackZonesHeldToTheNextStep() throws Exception {
         for (double m : new double[] {1.0, 2.0}) {
             List<TrackStep> steps = track(m).steps();

@@ -13,6 +13,16 @@ class LabelPlacementTest {
     private static final Rectangle2D PLOT = new Rectangle2D.Double(100, 100, 600, 600);
 
     @Test
+    void aLabelThatMustNameOneOfSeveralNearbyMarkersAlwaysGetsALeader() {
+        // an HR diagram's mass label: a model of each other Z lies a few pixels away, so even on a free plot the
+        // label sits a ring past the leader distance and points at its own model
+        LabelPlacement.Placed p = LabelPlacement.place(List.of(new LabelPlacement.Wanted(300, 300, 60, 20, 6.5,
+                LabelPlacement.WITH_LEADER_PX)), new Obstacles(), PLOT).get(0);
+        assertThat(p.leader()).isNotNull();
+        assertThat(p.leader().getP1().distance(300, 300)).isGreaterThan(LabelPlacement.LEADER_BEYOND_PX);
+    }
+
+    @Test
     void aLabelGoesRightOfItsPointWhenThatIsFree() {
         List<LabelPlacement.Placed> placed = LabelPlacement.place(List.of(new LabelPlacement.Wanted(300, 300, 60, 20,
                 6)), new Obstacles(), PLOT);
