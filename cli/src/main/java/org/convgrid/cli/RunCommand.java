@@ -136,7 +136,8 @@ final class RunCommand implements Callable<Integer> {
         // every catalogue row and life-events row goes through it, so that a signal stops the sweep between rows
         SweepInterruption interruption = new SweepInterruption();
         TrackFiles tracks = new TrackFiles(dir.layout(), interruption);
-        ProfileFiles profiles = file.spec().profiles() ? new ProfileFiles(dir.layout(), ToolVersion.current(), ToolVersion.commit()) : null;
+        ProfileFiles profiles = file.spec().profiles()
+                ? new ProfileFiles(dir.layout(), ToolVersion.current(), ToolVersion.commit()) : null;
         ChunkSolver solver = context.solvers().solverFor(file.spec(), evolves ? tracks : StarTrackSink.NONE,
                 profiles != null ? profiles : ModelSink.NONE);
         Clock clock = Clock.tickSeconds(java.time.ZoneOffset.UTC);

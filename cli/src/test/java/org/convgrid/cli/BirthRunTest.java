@@ -92,6 +92,8 @@ class BirthRunTest {
         // from memory; our engine gives 1.7 Myr)
         assertThat(solar.radiativeCoreMyr()).isBetween(1.0, 10.0);
         assertThat(solar.zamsMyr()).isBetween(30.0, 60.0);
+        // a solar-mass star keeps its radiative core on the main sequence (common knowledge; e.g. the standard solar
+        // model of Bahcall, Serenelli & Basu 2005, ApJ 621, L85, radiative below r/R ~0.71)
         assertThat(solar.radiativeCoreEndMyr()).as("its radiative core lasts").isNaN();
         assertThat(solar.trackEndMyr()).isEqualTo(60.0);
 

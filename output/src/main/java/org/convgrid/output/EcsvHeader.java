@@ -7,7 +7,8 @@ import java.util.Map;
  * The {@code #} lines an ECSV 1.0 file (astropy's Enhanced Character Separated Values) starts with, before its
  * column-name row: the version line, then YAML with the delimiter, one flow mapping per column (name, unit, datatype,
  * description) and, when given, a {@code meta} mapping of scalars. astropy reads such a file with
- * {@code Table.read(path)} (the meta mapping becomes {@code table.meta}); pandas with {@code comment="#"}.
+ * {@code Table.read(path, format="ascii.ecsv")} (needed for a {@code .csv} name; the meta mapping becomes
+ * {@code table.meta}); pandas with {@code comment="#"}.
  * Fixed text for fixed input, so that a file can be checked against it.
  */
 public final class EcsvHeader {

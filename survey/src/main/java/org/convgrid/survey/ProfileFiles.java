@@ -15,7 +15,8 @@ import org.convgrid.output.profile.ProfileWriter;
 /**
  * Writes the profile of every OK grid model to {@code profiles/<model_id>.csv} of a run directory (the grid's
  * {@code output: profiles: true}), atomically: a reader never sees half a file, and a recomputed model replaces its
- * old profile. The same columns and header as {@code star --profile}; grids evolve without settling. The directory is created with the first profile.
+ * old profile. The same columns and header as {@code star --profile}; grids evolve without settling. The directory
+ * is created with the first profile.
  * Thread-safe: each model has its own file. An I/O failure does not stop the models (their rows are still worth
  * having): the first one is kept for {@link #failure()}.
  */

@@ -39,6 +39,12 @@ public record MassRampedStepOvershoot(double alpha) implements Overshoot {
         return alpha;
     }
 
+    /** {@link #alphaAt}. */
+    @Override
+    public double parameterAt(double massMsun) {
+        return alphaAt(massMsun);
+    }
+
     /** alpha_ov for a star of {@code massMsun}, pressure scale heights. */
     public double alphaAt(double massMsun) {
         double share = (massMsun - RAMP_START_MSUN) / (RAMP_FULL_MSUN - RAMP_START_MSUN);

@@ -19,6 +19,11 @@ public interface Overshoot {
      */
     double parameter();
 
+    /** The parameter a star of {@code massMsun} is mixed with: {@link #parameter()} unless the scheme ramps it. */
+    default double parameterAt(double massMsun) {
+        return parameter();
+    }
+
     /**
      * The points of the new mesh to be homogenised: the convective flags joined with every point the scheme
      * mixes instantaneously.

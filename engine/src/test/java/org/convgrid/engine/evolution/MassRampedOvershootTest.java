@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.within;
 
 import org.convgrid.engine.overshoot.MassRampedStepOvershoot;
 import org.convgrid.engine.overshoot.StepOvershoot;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.engine.structure.MassMesh;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.structure.StellarProfile;
@@ -26,6 +27,10 @@ class MassRampedOvershootTest {
         assertThat(ramped.alphaAt(2.0)).isCloseTo(0.2, within(1e-15));
         assertThat(ramped.alphaAt(5.0)).isEqualTo(0.2);
         assertThat(new MassRampedStepOvershoot(0.0).alphaAt(3.0)).isZero();
+        // what a profile's header reports as the overshoot applied; the other schemes apply their parameter as given
+        assertThat(OvershootScheme.MASS_RAMPED_STEP.model(0.2).parameterAt(1.6)).isCloseTo(0.1, within(1e-15));
+        assertThat(OvershootScheme.STEP.model(0.2).parameterAt(0.8)).isEqualTo(0.2);
+        assertThat(OvershootScheme.EXPONENTIAL.model(0.016).parameterAt(0.8)).isEqualTo(0.016);
     }
 
     @Test

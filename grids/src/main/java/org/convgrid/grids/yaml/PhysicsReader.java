@@ -22,8 +22,9 @@ import org.snakeyaml.engine.v2.nodes.Node;
  * length from a physics preset ({@link PresetReader}; only the mixing length, not Y or Z) and excludes
  * {@code mixing_length}. {@code overshoot} is either a length in pressure scale heights (or a list of them) for
  * the uniform profile, or a mapping {@code {profile: uniform|decaying|uniform-ramped, length_hp: L}}: uniform
- * mixes to L H_P beyond each boundary, decaying lets the mixing fade with e-folding length L H_P / 2, uniform-ramped mixes
- * like uniform with L ramped with the star's mass from none at 1.2 Msun to L from 2 Msun (README, "Grid file").
+ * mixes to L H_P beyond each boundary, decaying lets the mixing fade with e-folding length L H_P / 2,
+ * uniform-ramped mixes like uniform with L ramped with the star's mass from none at 1.2 Msun to L from 2 Msun
+ * (README, "Grid file").
  */
 final class PhysicsReader {
 

@@ -36,8 +36,8 @@ public final class ProfileColumns {
     public static final String BUOYANCY_N2_CGS = "buoyancy_n2_cgs";
     /**
      * (M - m)/M, the mass above the shell over the star's: near the surface, where seismic work needs the mass
-     * coordinate, mass_frac differs from 1 only in its last digits (down to ~1e-12 of the mass; it read 1 over the outer
-     * few per cent of the radius when profiles had seven digits); this one keeps its relative precision there.
+     * coordinate, mass_frac differs from 1 only in its last digits (down to ~1e-12 of the mass; it read 1 over the
+     * outer few per cent of the radius when profiles had seven digits); this one keeps its relative precision there.
      */
     public static final String EXTERIOR_MASS_FRAC = "exterior_mass_frac";
 
@@ -82,7 +82,8 @@ public final class ProfileColumns {
                     "1 where convectively unstable under the model's criterion, 0 where radiative"),
             new EcsvColumn(CONV_VELOCITY_CGS, "cm / s", REAL, "mixing-length convective velocity; 0 where radiative"),
             new EcsvColumn(RADIUS_CM, "cm", REAL, "radius"),
-            new EcsvColumn(GAMMA1, "", REAL, "first adiabatic exponent (d ln P / d ln rho)_s, from the equation of state"),
+            new EcsvColumn(GAMMA1, "", REAL,
+                    "first adiabatic exponent (d ln P / d ln rho)_s, from the equation of state"),
             new EcsvColumn(SOUND_SPEED_CGS, "cm / s", REAL, "adiabatic sound speed sqrt(gamma1 P / rho)"),
             new EcsvColumn(H_FRAC, "", REAL, "hydrogen mass fraction"),
             new EcsvColumn(MU, "", REAL, "mean molecular weight, atomic mass units per free particle"),

@@ -49,6 +49,11 @@ public record ProfileMeta(String modelId, double mass, double radius, double lum
     public static final String MIXING_LENGTH = "mixing_length";
     public static final String OVERSHOOT_HP = "overshoot_hp";
     public static final String OVERSHOOT_PROFILE = "overshoot_profile";
+    /**
+     * The overshoot parameter this star was mixed with: overshoot_hp itself, except under uniform-ramped, whose
+     * overshoot_hp is the length from 2 Msun up (alpha_ov for the uniform profiles, f for the decaying one).
+     */
+    public static final String OVERSHOOT_APPLIED = "overshoot_applied";
     public static final String CRITERION = "criterion";
     public static final String OPACITY_SCALE = "opacity_scale";
     /** Present only when the model used a user opacity table: its path. */
@@ -100,6 +105,8 @@ public record ProfileMeta(String modelId, double mass, double radius, double lum
         m.put(MIXING_LENGTH, physics.mixingLength());
         m.put(OVERSHOOT_HP, physics.overshoot());
         m.put(OVERSHOOT_PROFILE, physics.overshootScheme().label());
+        m.put(OVERSHOOT_APPLIED, physics.overshootScheme().model(physics.overshoot())
+                .parameterAt(mass / Constants.M_SUN));
         m.put(CRITERION, physics.criterion().name().toLowerCase(Locale.ROOT));
         m.put(OPACITY_SCALE, physics.opacityScale());
         if (physics.usesOpacityTable()) {

@@ -118,6 +118,7 @@ class RealProfileFileTest {
         assertThat(meta.get(ProfileMeta.MIXING_LENGTH)).isEqualTo(1.8);
         assertThat(meta.get(ProfileMeta.OVERSHOOT_HP)).isEqualTo(0.0);
         assertThat(meta.get(ProfileMeta.OVERSHOOT_PROFILE)).isEqualTo("uniform");
+        assertThat(meta.get(ProfileMeta.OVERSHOOT_APPLIED)).isEqualTo(0.0);
         assertThat(meta.get(ProfileMeta.CRITERION)).isEqualTo("schwarzschild");
         assertThat(meta.get(ProfileMeta.ATMOSPHERE)).isEqualTo("krishna_swamy");
         assertThat(meta).doesNotContainKey(ProfileMeta.OPACITY_TABLE);

@@ -213,8 +213,8 @@ public final class HrDiagramRenderer {
      * Every label, in the order they are placed: the mass labels ({@link HrDiagramData#massLabels}), then, with
      * isochrones, the age of each isochrone of the middle Z beside its brightest model, brightest first, leaving
      * out an age whose brightest model lies within {@link #AGE_LABEL_SPACING_PX} of {@link #AGE_LABELS_TOGETHER}
-     * already labelled (the youngest and the oldest are labelled first, so the labels span the ages). {@code chart}: the chart with its
-     * axis ranges set (not yet painted).
+     * already labelled (the youngest and the oldest are labelled first, so the labels span the ages).
+     * {@code chart}: the chart with its axis ranges set (not yet painted).
      */
     static List<Label> labels(HrDiagramData data, StyledChart chart) {
         List<Label> labels = new java.util.ArrayList<>();
@@ -236,7 +236,8 @@ public final class HrDiagramRenderer {
                 kept.add(line);
             }
         }
-        kept.stream().sorted(java.util.Comparator.comparingDouble((HrDiagramData.ZeroAgeLine l) -> -brightest(l).logL()))
+        kept.stream()
+                .sorted(java.util.Comparator.comparingDouble((HrDiagramData.ZeroAgeLine l) -> -brightest(l).logL()))
                 .forEach(l -> labels.add(new Label(brightest(l), age(l.ageGyr()), false)));
         return labels;
     }
@@ -266,8 +267,8 @@ public final class HrDiagramRenderer {
      * it had to move away. For the overlay and for tests that check it.
      */
     static List<LabelPlacement.Placed> layout(StyledChart c, FontMetrics fm, List<Label> labels) {
-        // a mass label always gets a leader: a model of every other Z lies near the one it names (the demo's "1 M\u2609"
-        // sat between the Z = 0.014 and 0.02 models of 20 Myr, naming neither clearly)
+        // a mass label always gets a leader: a model of every other Z lies near the one it names (the demo's
+        // "1 M\u2609" sat between the Z = 0.014 and 0.02 models of 20 Myr, naming neither clearly)
         List<LabelPlacement.Wanted> wanted = labels.stream().map(l -> new LabelPlacement.Wanted(
                 c.getScreenXFromChart(-l.point().logTeff()), c.getScreenYFromChart(l.point().logL()),
                 fm.stringWidth(l.text()), fm.getAscent() + fm.getDescent(), ChartStyle.MARKER_SIZE / 2.0,

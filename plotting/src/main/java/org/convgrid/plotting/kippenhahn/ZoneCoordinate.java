@@ -64,7 +64,7 @@ public enum ZoneCoordinate {
         return this == SURFACE_DEPTH && surface ? new AgeRect(r.step(), r.left(), r.right(), r.lo(), 1.0) : r;
     }
 
-    /** Where the mass fraction {@code m} sits on this axis, as a share of its height (0 at the bottom, 1 at the top). */
+    /** Where the mass fraction {@code m} sits on this axis, as a share of its height (0 at the bottom, 1 at top). */
     public double share(double m) {
         return (of(m) - min) / (max - min);
     }

@@ -7,10 +7,10 @@ import java.util.List;
 /**
  * Whether shaded rectangles can be seen on a chart, judged before it is painted (XChart decides the legend then) from
  * their extents in shares of each axis (0 at the axis's lower end, 1 at its upper end), turned into pixels of the
- * plot of our 1200 x 800 charts ({@link NominalPlot}). A legend entry for a colour the reader cannot find misleads, so a zone kind is listed
- * only when its rectangles make at least one patch {@link #MIN_HEIGHT_PX} tall and {@link #MIN_WIDTH_PX} wide.
- * Rectangles that touch side by side and share some height (a zone held over consecutive evolution steps, the
- * columns of neighbouring models) count as one patch: each may be a sliver, together they show.
+ * plot of our 1200 x 800 charts ({@link NominalPlot}). A legend entry for a colour the reader cannot find misleads,
+ * so a zone kind is listed only when its rectangles make at least one patch {@link #MIN_HEIGHT_PX} tall and
+ * {@link #MIN_WIDTH_PX} wide. Rectangles that touch side by side and share some height (a zone held over consecutive
+ * evolution steps, the columns of neighbouring models) count as one patch: each may be a sliver, together they show.
  *
  * <p>Measured on the demo: a thin shell under the surface 1.5-2.5 pixels tall across the columns of the 1.4-2 Msun
  * models reads as a pink line, so a line of a pixel and a half counts. The transition refinement adds models 0.002
@@ -66,8 +66,8 @@ public final class VisiblePatches {
      *     plot's border, {@link #BORDER_PX})
      */
     public static boolean anyVisible(List<Patch> patches, double coveredAtEndsPx) {
-        List<Patch> tall = patches.stream().filter(p -> p.tall(coveredAtEndsPx)).sorted(Comparator.comparingDouble(Patch::left))
-                .toList();
+        List<Patch> tall = patches.stream().filter(p -> p.tall(coveredAtEndsPx))
+                .sorted(Comparator.comparingDouble(Patch::left)).toList();
         // each run: the patches joined so far, as their overall x extent and the last patch (for the height test)
         List<double[]> runs = new ArrayList<>();
         List<Patch> lasts = new ArrayList<>();

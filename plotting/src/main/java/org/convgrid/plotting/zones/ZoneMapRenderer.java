@@ -75,7 +75,8 @@ public final class ZoneMapRenderer {
         Set<ZoneKind> visible = EnumSet.noneOf(ZoneKind.class);
         for (ZoneKind kind : ZoneKind.values()) {
             List<VisiblePatches.Patch> patches = data.rects().stream().filter(r -> r.kind() == kind)
-                    .map(r -> new VisiblePatches.Patch(VisiblePatches.logShare(r.left(), data.massMin(), data.massMax()),
+                    .map(r -> new VisiblePatches.Patch(
+                            VisiblePatches.logShare(r.left(), data.massMin(), data.massMax()),
                             VisiblePatches.logShare(r.right(), data.massMin(), data.massMax()), r.lo(), r.hi()))
                     .toList();
             if (VisiblePatches.anyVisible(patches, VisiblePatches.BORDER_PX)) {
