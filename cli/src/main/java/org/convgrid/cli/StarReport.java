@@ -40,7 +40,9 @@ final class StarReport {
         }
         out.printf(Locale.ROOT, "%s: %.4f Msun, X = %.4f, Y = %.4f, Z = %.5f (initial)%n", title,
                 r.mass() / Constants.M_SUN, composition.x(), composition.y(), composition.z());
-        out.printf(Locale.ROOT, "Physics: mixing length %.3f Hp, %s, opacity x %.3g%s%n", r.physics().mixingLength(),
+        out.printf(Locale.ROOT, "Physics: mixing length %.3f Hp, %s, %s, opacity x %.3g%s%n",
+                r.physics().mixingLength(), org.convgrid.cli.run.OvershootWords.describe(r.physics(),
+                        r.mass() / Constants.M_SUN),
                 r.physics().criterion().name().toLowerCase(Locale.ROOT), r.physics().opacityScale(),
                 r.physics().usesOpacityTable() ? " (table " + r.physics().opacityTable() + ")" : "");
         if (!(outcome instanceof ModelOutcome.Solved solved)) {

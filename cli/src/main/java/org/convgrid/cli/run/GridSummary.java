@@ -46,7 +46,7 @@ public final class GridSummary {
         List<PhysicsOptions> physics = g.physics().combinations();
         lines.add("physics:       " + physics.size() + (physics.size() == 1 ? " combination" : " combinations"));
         for (PhysicsOptions p : physics) {
-            lines.add("  mixing length " + MessageNumbers.format(p.mixingLength()) + " Hp, " + overshoot(p) + ", "
+            lines.add("  mixing length " + MessageNumbers.format(p.mixingLength()) + " Hp, " + OvershootWords.describe(p) + ", "
                     + p.criterion().name().toLowerCase(Locale.ROOT)
                     + ", opacity x" + MessageNumbers.format(p.opacityScale()));
         }
@@ -68,22 +68,5 @@ public final class GridSummary {
         }
         return head + "from " + MessageNumbers.format(values.get(0)) + " to "
                 + MessageNumbers.format(values.get(values.size() - 1)) + " " + unit;
-    }
-
-    /**
-     * "overshoot 0.2 Hp", "overshoot 0.2 Hp from 2 Msun (uniform-ramped)" or "overshoot f = 0.016 (decaying)": the
-     * decaying profile's length is f, not alpha_ov, and the ramped one's full length applies from 2 Msun only.
-     */
-    private static String overshoot(PhysicsOptions p) {
-        String length = MessageNumbers.format(p.overshoot());
-        return switch (p.overshootScheme()) {
-            case STEP -> "overshoot " + length + " Hp";
-            case MASS_RAMPED_STEP -> "overshoot " + length + " Hp from "
-                    + MessageNumbers.format(org.convgrid.engine.overshoot.MassRampedStepOvershoot.RAMP_FULL_MSUN)
-                    + " Msun, none up to "
-                    + MessageNumbers.format(org.convgrid.engine.overshoot.MassRampedStepOvershoot.RAMP_START_MSUN)
-                    + " Msun (" + p.overshootScheme().label() + ")";
-            case EXPONENTIAL -> "overshoot f = " + length + " (" + p.overshootScheme().label() + ")";
-        };
     }
 }
