@@ -90,6 +90,19 @@ public final class SliceLabels {
         return b.toString();
     }
 
+    /**
+     * What the overshoot length means under a profile other than the uniform one, for the report's physics rows
+     * (the charts name the length only): empty for uniform.
+     */
+    public static String overshootProfile(org.convgrid.engine.request.OvershootScheme scheme) {
+        return switch (scheme) {
+            case STEP -> "";
+            case MASS_RAMPED_STEP -> " (uniform-ramped: that length from 2 M\u2609 up, none up to 1.2 M\u2609,"
+                    + " linear between)";
+            case EXPONENTIAL -> " (decaying: the length is f, the e-folding parameter)";
+        };
+    }
+
     /** The physics of a slice in words. */
     public static String physics(Slice s) {
         return physics(s.mixingLength(), s.overshootHp(), s.criterion(), s.opacityScale());
