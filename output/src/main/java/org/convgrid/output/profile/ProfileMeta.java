@@ -105,8 +105,9 @@ public record ProfileMeta(String modelId, double mass, double radius, double lum
         m.put(MIXING_LENGTH, physics.mixingLength());
         m.put(OVERSHOOT_HP, physics.overshoot());
         m.put(OVERSHOOT_PROFILE, physics.overshootScheme().label());
-        m.put(OVERSHOOT_APPLIED, physics.overshootScheme().model(physics.overshoot())
-                .parameterAt(mass / Constants.M_SUN));
+        // to 12 significant digits: the ramp's arithmetic leaves rounding noise (0.10000000000000003 for 0.1)
+        m.put(OVERSHOOT_APPLIED, new java.math.BigDecimal(physics.overshootScheme().model(physics.overshoot())
+                .parameterAt(mass / Constants.M_SUN)).round(new java.math.MathContext(12)).doubleValue());
         m.put(CRITERION, physics.criterion().name().toLowerCase(Locale.ROOT));
         m.put(OPACITY_SCALE, physics.opacityScale());
         if (physics.usesOpacityTable()) {
