@@ -663,7 +663,8 @@ public final class MainSequenceEvolver {
         // the pressures, energies and equation-of-state states, which the rates do not need)
         StellarProfile p = end.profile();
         MassMesh mesh = end.state().mesh();
-        boolean[] mixed = AtmosphereMixing.joined(mesh, physics.overshoot().mixedPoints(mesh::mass, p.convectiveFlags(), p));
+        boolean[] mixed = AtmosphereMixing.joined(mesh,
+                physics.overshoot().mixedPoints(mesh::mass, p.convectiveFlags(), p));
         Composition[] comp = end.state().compositions();
         LightElementRates atEnd = LightElementRates.of(physics.nuclear(), PointCells.masses(mesh), mixed, comp,
                 p.densities(), p.temperatures());

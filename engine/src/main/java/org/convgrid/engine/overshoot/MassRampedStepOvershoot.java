@@ -51,18 +51,21 @@ public record MassRampedStepOvershoot(double alpha) implements Overshoot {
         return alpha * Math.min(1.0, Math.max(0.0, share));
     }
 
-    /** {@link StepOvershoot} with {@link #alphaAt} the mass of {@code previous} (its outermost point). */
+    /** {@link StepOvershoot#mixedPoints} at the length of the star {@code previous} is. */
     @Override
     public boolean[] mixedPoints(IntToDoubleFunction massAt, boolean[] convective, OvershootProfile previous) {
-        double massMsun = previous.mass(previous.size() - 1) / Constants.M_SUN;
-        return new StepOvershoot(alphaAt(massMsun)).mixedPoints(massAt, convective, previous);
+        return stepFor(previous).mixedPoints(massAt, convective, previous);
     }
 
-    /** {@link StepOvershoot#mixedCoreTop} at {@link #alphaAt} the mass of {@code profile}. */
+    /** {@link StepOvershoot#mixedCoreTop} at the length of the star {@code profile} is. */
     @Override
     public double mixedCoreTop(OvershootProfile profile) {
-        double massMsun = profile.mass(profile.size() - 1) / Constants.M_SUN;
-        return new StepOvershoot(alphaAt(massMsun)).mixedCoreTop(profile);
+        return stepFor(profile).mixedCoreTop(profile);
+    }
+
+    /** The step overshoot at {@link #alphaAt} the star's mass (the profile's outermost point). */
+    private StepOvershoot stepFor(OvershootProfile profile) {
+        return new StepOvershoot(alphaAt(profile.mass(profile.size() - 1) / Constants.M_SUN));
     }
 
     /** Mixes instantaneously, like {@link StepOvershoot}; no diffusion. */

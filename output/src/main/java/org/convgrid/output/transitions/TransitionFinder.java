@@ -286,24 +286,23 @@ public record TransitionFinder(double coreMassFractionThreshold) {
      */
     private String otherWindows(List<CatalogueRow> searched, Span window, TransitionEstimate core) {
         double lasting = core.found() ? core.massMsun() : Double.POSITIVE_INFINITY;
-        List<String> runs = new ArrayList<>();
-        double lo = Double.NaN;
-        double hi = Double.NaN;
+        List<Span> runs = new ArrayList<>();
+        Span run = null;
         for (CatalogueRow r : searched) {
             double m = r.massMsun();
-            boolean cored = m > window.hi() && m < lasting && hasConvectiveCore(r);
-            if (cored) {
-                lo = Double.isNaN(lo) ? m : lo;
-                hi = m;
-            } else if (!Double.isNaN(lo)) {
-                runs.add(lo == hi ? CsvNumbers.format(lo) : CsvNumbers.format(lo) + "-" + CsvNumbers.format(hi));
-                lo = Double.NaN;
+            if (m > window.hi() && m < lasting && hasConvectiveCore(r)) {
+                run = run == null ? new Span(m, m) : new Span(run.lo(), m);
+            } else if (run != null) {
+                runs.add(run);
+                run = null;
             }
         }
-        if (!Double.isNaN(lo)) {
-            runs.add(lo == hi ? CsvNumbers.format(lo) : CsvNumbers.format(lo) + "-" + CsvNumbers.format(hi));
+        if (run != null) {
+            runs.add(run);
         }
-        return runs.isEmpty() ? "" : ", others at " + String.join(", ", runs) + " Msun";
+        return runs.isEmpty() ? "" : ", others at " + runs.stream().map(s -> s.lo() == s.hi()
+                ? CsvNumbers.format(s.lo()) : CsvNumbers.format(s.lo()) + "-" + CsvNumbers.format(s.hi()))
+                .collect(java.util.stream.Collectors.joining(", ")) + " Msun";
     }
 
     private static String timesInWords(int times) {

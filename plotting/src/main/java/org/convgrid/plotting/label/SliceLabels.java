@@ -5,6 +5,8 @@ import java.math.MathContext;
 import java.math.RoundingMode;
 import java.util.Locale;
 import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.engine.overshoot.MassRampedStepOvershoot;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.Span;
 import org.convgrid.output.transitions.Slice;
@@ -94,12 +96,13 @@ public final class SliceLabels {
      * What the overshoot length means under a profile other than the uniform one, for the report's physics rows
      * (the charts name the length only): empty for uniform.
      */
-    public static String overshootProfile(org.convgrid.engine.request.OvershootScheme scheme) {
+    public static String overshootProfile(OvershootScheme scheme) {
         return switch (scheme) {
             case STEP -> "";
-            case MASS_RAMPED_STEP -> " (uniform-ramped: that length from 2 M\u2609 up, none up to 1.2 M\u2609,"
-                    + " linear between)";
-            case EXPONENTIAL -> " (decaying: the length is f, the e-folding parameter)";
+            case MASS_RAMPED_STEP -> " (" + scheme.label() + ": that length from "
+                    + number(MassRampedStepOvershoot.RAMP_FULL_MSUN) + " M\u2609 up, none up to "
+                    + number(MassRampedStepOvershoot.RAMP_START_MSUN) + " M\u2609, linear between)";
+            case EXPONENTIAL -> " (" + scheme.label() + ": the length is f, the e-folding parameter)";
         };
     }
 
