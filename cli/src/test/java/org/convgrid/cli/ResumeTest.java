@@ -92,9 +92,10 @@ class ResumeTest {
     }
 
     /**
-     * A run interrupted under an earlier version (one column fewer, a reworded description in the header) resumes
-     * under this one: its rows are carried into this version's layout, and the catalogue ends byte-identical to an
-     * uninterrupted run (found by a review: every header change had made such runs refuse to resume).
+     * A run interrupted under an earlier version (two columns fewer, a reworded description in the header) resumes
+     * under this one: its rows are carried into this version's layout, the overshoot profile they could not name
+     * taken from the grid, and the catalogue ends byte-identical to an uninterrupted run (found by a review: every
+     * header change had made such runs refuse to resume).
      */
     @Test
     void aRunOfAnEarlierLayoutResumesToTheSameBytes() throws Exception {
@@ -112,18 +113,19 @@ class ResumeTest {
 
     /**
      * The catalogue {@code text} as an earlier version wrote it, its first {@code rows} rows only: without the last
-     * column, and with one description worded otherwise.
+     * two columns ({@code core_mixed_mass_frac}, {@code overshoot_profile}), and with one description worded
+     * otherwise.
      */
     static String earlierLayout(String text, int rows) {
         StringBuilder out = new StringBuilder();
         int kept = -1;
         for (String line : text.split("\n")) {
             if (line.startsWith("#")) {
-                if (!line.contains("{name: core_mixed_mass_frac")) {
+                if (!line.contains("{name: core_mixed_mass_frac") && !line.contains("{name: overshoot_profile")) {
                     out.append(line.replace("integral of dr / v_conv", "integral dr / v")).append('\n');
                 }
             } else if (kept++ < rows) {
-                out.append(line, 0, line.lastIndexOf(',')).append('\n');
+                out.append(line, 0, line.lastIndexOf(',', line.lastIndexOf(',') - 1)).append('\n');
             }
         }
         return out.toString();

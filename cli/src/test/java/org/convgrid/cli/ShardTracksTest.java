@@ -70,6 +70,12 @@ class ShardTracksTest {
         for (int k = 1; k <= 3; k++) {
             assertThat(run("run", "--no-refine", grid.toString(), "--shard", k + "/3", "--quiet").code()).isZero();
         }
+        // one shard's life events as the version before overshoot_profile wrote them: the merge fills in the grid's
+        Path earlierEvents = work.resolve("runs/test-survey-shard-2-of-3/life_events.csv");
+        List<String> earlierLines = Files.readAllLines(earlierEvents).stream()
+                .map(line -> String.join(",", withoutCell(line.split(",", -1), 6))).toList();
+        assertThat(earlierLines.get(0)).contains("overshoot_hp,radiative_core_myr");
+        Files.write(earlierEvents, earlierLines);
         // a user's table in a shard's tracks/ stays there: it is not one of the run's tracks
         Files.writeString(work.resolve("runs/test-survey-shard-2-of-3/tracks/my-track.csv"), "mass\n1.0\n");
         assertThat(run("merge", "runs/test-survey-shard-1-of-3", "runs/test-survey-shard-2-of-3",
@@ -90,10 +96,16 @@ class ShardTracksTest {
         List<String> events = Files.readAllLines(work.resolve("single/life_events.csv"));
         assertThat(events).hasSize(1 + 78);
         assertThat(events.get(0)).startsWith("track_id,mass_msun,z_init,y_init,mixing_length,overshoot_hp,"
-                + "radiative_core_myr,radiative_core_end_myr,zams_myr,conv_core_onset_myr,conv_core_end_myr,"
+                + "overshoot_profile,radiative_core_myr,radiative_core_end_myr,zams_myr,conv_core_onset_myr,conv_core_end_myr,"
                 + "li_halved_myr,central_h_exhausted_myr,track_end_myr");
         assertThat(events.get(1)).startsWith("p0-z00-m000,");
         assertThat(Files.readAllBytes(work.resolve("merged/life_events.csv")))
                 .isEqualTo(Files.readAllBytes(work.resolve("single/life_events.csv")));
+    }
+
+    private static List<String> withoutCell(String[] cells, int index) {
+        List<String> kept = new java.util.ArrayList<>(List.of(cells));
+        kept.remove(index);
+        return kept;
     }
 }

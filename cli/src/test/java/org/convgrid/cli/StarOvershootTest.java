@@ -79,12 +79,15 @@ class StarOvershootTest {
         assertThat(field(none, structureClass)).isEqualTo("conv_envelope");
         assertThat(field(uniform, structureClass)).isEqualTo("conv_core_and_envelope");
         assertThat(Double.parseDouble(field(uniform, coreMass))).isGreaterThan(0.01);
-        // overshoot_hp records the length asked (0.2); every other column is the model's
+        // overshoot_hp and overshoot_profile record what was asked (0.2, uniform-ramped); every other column is the
+        // model's
         int overshoot = column("overshoot_hp");
+        int profile = column("overshoot_profile");
         String[] a = none.split(",", -1);
         String[] b = ramped.split(",", -1);
+        assertThat(b[profile]).isEqualTo("uniform-ramped");
         for (int i = 0; i < a.length; i++) {
-            if (i != overshoot) {
+            if (i != overshoot && i != profile) {
                 assertThat(b[i]).as("column %d", i).isEqualTo(a[i]);
             }
         }

@@ -9,6 +9,7 @@ import java.nio.file.StandardOpenOption;
 import java.util.ArrayList;
 import java.util.Collection;
 import java.util.List;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.events.LifeEventReader;
 import org.convgrid.output.events.LifeEventRow;
@@ -33,13 +34,15 @@ public final class LifeEventLog {
     /**
      * Appends one star's row, writing the header first when the table is new. A table an earlier version began
      * (a run resumed after an upgrade: fewer columns) is first rewritten with today's header, so that the rows
-     * appended to it stay readable.
+     * appended to it stay readable; its rows take the overshoot profile of the row appended (the run's grid, which
+     * the resume has checked is the table's, has one).
      */
     public synchronized void append(LifeEventRow row) throws IOException {
         if (!headerChecked) {
             headerChecked = true;
             if (Files.exists(file) && !firstLine(file).equals(LifeEventWriter.header().strip())) {
-                write(file, LifeEventReader.read(file));
+                write(file, LifeEventReader.read(file).stream()
+                        .map(r -> r.withOvershootProfileIfUnknown(row.overshootProfile())).toList());
             }
         }
         String text = (Files.exists(file) ? "" : LifeEventWriter.header()) + LifeEventWriter.line(row);
@@ -58,13 +61,17 @@ public final class LifeEventLog {
         }
     }
 
-    /** Joins the tables of several run directories (shards) into {@code target}; none written when none exists. */
-    public static void merge(Collection<Path> tables, Path target) throws IOException {
+    /**
+     * Joins the tables of several run directories (shards) into {@code target}; none written when none exists. Rows
+     * of a table an earlier version wrote take {@code overshootProfile}, the grid's.
+     */
+    public static void merge(Collection<Path> tables, Path target, OvershootScheme overshootProfile)
+            throws IOException {
         List<LifeEventRow> rows = new ArrayList<>();
         boolean any = false;
         for (Path t : tables) {
             any |= Files.exists(t);
-            rows.addAll(LifeEventReader.read(t));
+            LifeEventReader.read(t).forEach(r -> rows.add(r.withOvershootProfileIfUnknown(overshootProfile)));
         }
         if (any) {
             write(target, rows);

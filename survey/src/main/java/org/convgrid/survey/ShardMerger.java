@@ -66,7 +66,7 @@ public final class ShardMerger {
             manifests.add(RunManifestReader.read(Files.readString(dir.manifest())));
         }
         GridSpec grid = commonGrid(shards, manifests);
-        ShardRows rows = new ShardRows();
+        ShardRows rows = new ShardRows(grid.physics().overshootScheme());
         for (Path shard : shards) {
             rows.add(new RunDirectory(shard).catalogue(), shard);
         }
@@ -86,7 +86,7 @@ public final class ShardMerger {
             copyTracks(shards, out);
             copyProfiles(shards, out);
             LifeEventLog.merge(shards.stream().map(d -> new RunDirectory(d).layout().lifeEvents()).toList(),
-                    out.layout().lifeEvents());
+                    out.layout().lifeEvents(), grid.physics().overshootScheme());
             List<CatalogueRow> mergedRows = CatalogueReader.read(out.catalogue());
             writeZones(shards, out, mergedRows);
             run = RunFinishing.writeTables(out, grid, merged(manifests, mergedRows), mergedRows);

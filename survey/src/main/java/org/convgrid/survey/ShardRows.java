@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.grids.GridSpec;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
@@ -30,6 +31,12 @@ final class ShardRows {
     private final Map<String, String> lines = new HashMap<>();
     private final Map<String, Path> origin = new HashMap<>();
     private final Set<String> duplicates = new LinkedHashSet<>();
+    private final OvershootScheme overshootProfile;
+
+    /** @param overshootProfile the grid's overshoot profile, for rows of shards written before the column named it */
+    ShardRows(OvershootScheme overshootProfile) {
+        this.overshootProfile = overshootProfile;
+    }
 
     /** Adds the complete lines of one shard's catalogue (each row checked by the catalogue reader). */
     void add(Path catalogue, Path shard) throws IOException {
@@ -37,7 +44,7 @@ final class ShardRows {
         String header = RunDirectory.catalogueHeader();
         // a shard written by an earlier version is read in this version's layout
         String text = EarlierCatalogueLayout.upgraded(
-                new String(bytes, 0, KeptCatalogue.lastLineEnd(bytes), StandardCharsets.UTF_8));
+                new String(bytes, 0, KeptCatalogue.lastLineEnd(bytes), StandardCharsets.UTF_8), overshootProfile);
         if (text == null) {
             throw new RunSetupException(catalogue + " has another header than this version writes");
         }

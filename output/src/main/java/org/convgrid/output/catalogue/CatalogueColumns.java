@@ -46,6 +46,8 @@ public final class CatalogueColumns {
     public static final String TURNOVER_TIME_GLOBAL_DAYS = "turnover_time_global_days";
     /** Extension: m/M up to which the convective core is mixed, overshoot included. */
     public static final String CORE_MIXED_MASS_FRAC = "core_mixed_mass_frac";
+    /** Extension: which overshoot profile {@link #OVERSHOOT_HP} is the length of. */
+    public static final String OVERSHOOT_PROFILE = "overshoot_profile";
 
     private static final String REAL = "float64";
     private static final String TEXT = "string";
@@ -95,7 +97,11 @@ public final class CatalogueColumns {
             new EcsvColumn(CORE_MIXED_MASS_FRAC, "", REAL,
                     "m/M up to which the convective core is mixed: its top carried outward by the uniform (or"
                             + " uniform-ramped) overshoot distance; the core's own top without overshoot or with"
-                            + " decaying overshoot, which mixes beyond it by diffusion; empty when no core"));
+                            + " decaying overshoot, which mixes beyond it by diffusion; empty when no core"),
+            new EcsvColumn(OVERSHOOT_PROFILE, "", TEXT,
+                    "what overshoot_hp is the length of: uniform (alpha_ov for every star), uniform-ramped (alpha_ov"
+                            + " from 2 solMass up, none up to 1.2 solMass, linear between) or decaying (f, the"
+                            + " e-folding length of the diffusive profile); empty in rows written before the column"));
 
     /** The columns the README fixes, in order. */
     public static final List<String> FIXED = DESCRIBED.subList(0, 26).stream().map(EcsvColumn::name).toList();

@@ -18,6 +18,7 @@ import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.OutputFormatException;
+import org.convgrid.output.OvershootProfileCell;
 
 /**
  * Reads catalogues by column name, so it accepts columns in any order, ignores columns it does not know (later
@@ -122,7 +123,8 @@ public final class CatalogueReader {
                     Integer.parseInt(c.text(CatalogueColumns.SOLVER_ITERATIONS)),
                     criterion.isEmpty() ? null : StabilityCriterion.valueOf(criterion.toUpperCase(Locale.ROOT)),
                     Double.isNaN(opacity) ? 1.0 : opacity, c.number(CatalogueColumns.TURNOVER_TIME_GLOBAL_DAYS),
-                    c.number(CatalogueColumns.CORE_MIXED_MASS_FRAC));
+                    c.number(CatalogueColumns.CORE_MIXED_MASS_FRAC),
+                    OvershootProfileCell.parse(c.text(CatalogueColumns.OVERSHOOT_PROFILE)));
         } catch (IllegalArgumentException e) {
             throw new OutputFormatException("catalogue row " + r.getRecordNumber() + " (line "
                     + (r.getRecordNumber() + 1) + "), column '" + c.current + "': " + e.getMessage(), e);

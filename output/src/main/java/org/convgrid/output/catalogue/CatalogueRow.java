@@ -5,6 +5,7 @@ import java.util.Objects;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.output.Span;
 
 /**
@@ -44,6 +45,8 @@ import org.convgrid.output.Span;
  * @param turnoverTimeGlobalDays envelope turnover time (integral definition), days
  * @param coreMixedMassFrac m/M up to which the central convective zone is mixed (overshoot included); NaN when
  *     there is no core, or for rows read from a catalogue written before the column
+ * @param overshootProfile which profile {@code overshootHp} is the length of; null for rows read from a catalogue
+ *     written before the column
  */
 public record CatalogueRow(String modelId, double massMsun, double zInit, double yInit, double mixingLength,
                            double overshootHp, double ageGyr, String phase, ModelStatus status, String statusDetail,
@@ -53,7 +56,7 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
                            double envCzBaseMassFrac, double envCzBaseRadiusFrac, double envCzMassMsun,
                            double turnoverTimeDays, List<CatalogueZone> zones, int solverIterations,
                            StabilityCriterion criterion, double opacityScale, double turnoverTimeGlobalDays,
-                           double coreMixedMassFrac) {
+                           double coreMixedMassFrac, OvershootScheme overshootProfile) {
 
     /** The {@code phase} of a model on the main sequence. */
     public static final String MAIN_SEQUENCE = "main_sequence";
@@ -68,7 +71,10 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
         zones = List.copyOf(zones);
     }
 
-    /** A row whose core is mixed no further than its top (no overshoot): {@code coreMixedMassFrac} = core top. */
+    /**
+     * A row without overshoot: its core is mixed no further than its top ({@code coreMixedMassFrac} = core top), its
+     * profile the uniform one.
+     */
     public CatalogueRow(String modelId, double massMsun, double zInit, double yInit, double mixingLength,
                         double overshootHp, double ageGyr, String phase, ModelStatus status, String statusDetail,
                         double luminosityLsun, double radiusRsun, double teffK, double logGCgs,
@@ -81,7 +87,7 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
                 luminosityLsun, radiusRsun, teffK, logGCgs, centralTempK, centralDensityCgs, centralHFrac,
                 surfaceLiRel, structureClass, coreCzMassFrac, coreCzRadiusFrac, envCzBaseMassFrac,
                 envCzBaseRadiusFrac, envCzMassMsun, turnoverTimeDays, zones, solverIterations, criterion,
-                opacityScale, turnoverTimeGlobalDays, coreCzMassFrac);
+                opacityScale, turnoverTimeGlobalDays, coreCzMassFrac, OvershootScheme.STEP);
     }
 
     /** Whether the model converged as asked (status ok). */
@@ -100,6 +106,18 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
                 statusDetail, luminosityLsun, radiusRsun, teffK, logGCgs, centralTempK, centralDensityCgs,
                 centralHFrac, surfaceLiRel, structureClass, coreCzMassFrac, coreCzRadiusFrac, envCzBaseMassFrac,
                 envCzBaseRadiusFrac, envCzMassMsun, turnoverTimeDays, found, solverIterations, criterion,
-                opacityScale, turnoverTimeGlobalDays, coreMixedMassFrac);
+                opacityScale, turnoverTimeGlobalDays, coreMixedMassFrac, overshootProfile);
+    }
+
+    /**
+     * The same row with {@code profile} as its overshoot profile when it names none (a row of an earlier layout,
+     * continued by a run of the grid it came from: the grid's one profile is the row's).
+     */
+    public CatalogueRow withOvershootProfileIfUnknown(OvershootScheme profile) {
+        return overshootProfile != null ? this : new CatalogueRow(modelId, massMsun, zInit, yInit, mixingLength,
+                overshootHp, ageGyr, phase, status, statusDetail, luminosityLsun, radiusRsun, teffK, logGCgs,
+                centralTempK, centralDensityCgs, centralHFrac, surfaceLiRel, structureClass, coreCzMassFrac,
+                coreCzRadiusFrac, envCzBaseMassFrac, envCzBaseRadiusFrac, envCzMassMsun, turnoverTimeDays, zones,
+                solverIterations, criterion, opacityScale, turnoverTimeGlobalDays, coreMixedMassFrac, profile);
     }
 }

@@ -9,6 +9,7 @@ import java.util.Locale;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.convgrid.output.CsvNumbers;
+import org.convgrid.output.OvershootProfileCell;
 import org.convgrid.output.EcsvHeader;
 
 /**
@@ -88,6 +89,7 @@ public final class CatalogueWriter implements Flushable, Closeable {
         cells.add(CsvNumbers.format(r.opacityScale()));
         cells.add(CsvNumbers.format(r.turnoverTimeGlobalDays()));
         cells.add(CsvNumbers.format(r.coreMixedMassFrac()));
+        cells.add(OvershootProfileCell.format(r.overshootProfile()));
         return cells;
     }
 

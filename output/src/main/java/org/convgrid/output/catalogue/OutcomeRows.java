@@ -59,7 +59,8 @@ public final class OutcomeRows {
                 request.physics().criterion(),
                 request.physics().opacityScale(),
                 envelope ? c.turnoverTimeGlobal() / Constants.DAY : nan,
-                core ? mixedCoreTop(outcome, clamp(innermost.outerMassFraction())) : nan);
+                core ? mixedCoreTop(outcome, clamp(innermost.outerMassFraction())) : nan,
+                request.physics().overshootScheme());
     }
 
     /** The overshoot's mixed edge above the core, never below the core's own top. */

@@ -11,6 +11,7 @@ public final class LifeEventColumns {
     public static final String Y_INIT = "y_init";
     public static final String MIXING_LENGTH = "mixing_length";
     public static final String OVERSHOOT = "overshoot_hp";
+    public static final String OVERSHOOT_PROFILE = "overshoot_profile";
     public static final String RADIATIVE_CORE = "radiative_core_myr";
     public static final String RADIATIVE_CORE_END = "radiative_core_end_myr";
     public static final String ZAMS = "zams_myr";
@@ -22,12 +23,13 @@ public final class LifeEventColumns {
 
     /** Every column, in the order the writer writes them. */
     public static final List<String> ALL = List.of(TRACK_ID, MASS, Z_INIT, Y_INIT, MIXING_LENGTH, OVERSHOOT,
-            RADIATIVE_CORE, RADIATIVE_CORE_END, ZAMS, CONV_CORE_ONSET, CONV_CORE_END, LI_HALVED, CENTRAL_H_EXHAUSTED,
-            TRACK_END);
+            OVERSHOOT_PROFILE, RADIATIVE_CORE, RADIATIVE_CORE_END, ZAMS, CONV_CORE_ONSET, CONV_CORE_END, LI_HALVED,
+            CENTRAL_H_EXHAUSTED, TRACK_END);
 
     /**
      * The columns every readable table has. Tables written before {@link #CENTRAL_H_EXHAUSTED},
-     * {@link #RADIATIVE_CORE_END} and {@link #TRACK_END} were added lack them (read as empty).
+     * {@link #RADIATIVE_CORE_END}, {@link #TRACK_END} and {@link #OVERSHOOT_PROFILE} were added lack them (read as
+     * empty).
      */
     public static final List<String> REQUIRED = List.of(TRACK_ID, MASS, Z_INIT, Y_INIT, MIXING_LENGTH, OVERSHOOT,
             RADIATIVE_CORE, ZAMS, CONV_CORE_ONSET, CONV_CORE_END, LI_HALVED);

@@ -7,6 +7,7 @@ import static org.convgrid.output.events.LifeEventColumns.LI_HALVED;
 import static org.convgrid.output.events.LifeEventColumns.MASS;
 import static org.convgrid.output.events.LifeEventColumns.MIXING_LENGTH;
 import static org.convgrid.output.events.LifeEventColumns.OVERSHOOT;
+import static org.convgrid.output.events.LifeEventColumns.OVERSHOOT_PROFILE;
 import static org.convgrid.output.events.LifeEventColumns.RADIATIVE_CORE;
 import static org.convgrid.output.events.LifeEventColumns.RADIATIVE_CORE_END;
 import static org.convgrid.output.events.LifeEventColumns.TRACK_END;
@@ -26,6 +27,7 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.convgrid.output.CsvNumbers;
+import org.convgrid.output.OvershootProfileCell;
 import org.convgrid.output.OutputFormatException;
 
 /**
@@ -68,7 +70,10 @@ public final class LifeEventReader {
                 }
                 try {
                     rows.add(new LifeEventRow(r.get(TRACK_ID), n(r, MASS), n(r, Z_INIT), n(r, Y_INIT),
-                            n(r, MIXING_LENGTH), n(r, OVERSHOOT), n(r, RADIATIVE_CORE),
+                            n(r, MIXING_LENGTH), n(r, OVERSHOOT),
+                            OvershootProfileCell.parse(header.contains(OVERSHOOT_PROFILE)
+                                    ? r.get(OVERSHOOT_PROFILE) : ""),
+                            n(r, RADIATIVE_CORE),
                             ifPresent(header, r, RADIATIVE_CORE_END), n(r, ZAMS), n(r, CONV_CORE_ONSET),
                             n(r, CONV_CORE_END), n(r, LI_HALVED), ifPresent(header, r, CENTRAL_H_EXHAUSTED),
                             ifPresent(header, r, TRACK_END)));

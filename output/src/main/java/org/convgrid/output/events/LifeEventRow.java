@@ -3,6 +3,7 @@ package org.convgrid.output.events;
 import java.util.Objects;
 import org.convgrid.engine.birth.LifeEvents;
 import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.engine.units.Constants;
 
 /**
@@ -14,7 +15,8 @@ import org.convgrid.engine.units.Constants;
  * @param zInit initial metal mass fraction
  * @param yInit initial helium mass fraction
  * @param mixingLength alpha, pressure scale heights
- * @param overshootHp overshoot length, pressure scale heights
+ * @param overshootHp overshoot length, pressure scale heights (alpha_ov, or f for the decaying profile)
+ * @param overshootProfile the profile {@code overshootHp} is the length of; null in a table written before the column
  * @param radiativeCoreMyr the centre first stops being convective, Myr since birth (never: fully convective)
  * @param radiativeCoreEndMyr the star is fully convective again, for good: its last return to full convection,
  *        Myr since birth (NaN while the track ends with a radiative region)
@@ -27,9 +29,10 @@ import org.convgrid.engine.units.Constants;
  *        this age" (NaN in a table written before the column existed)
  */
 public record LifeEventRow(String trackId, double massMsun, double zInit, double yInit, double mixingLength,
-                           double overshootHp, double radiativeCoreMyr, double radiativeCoreEndMyr, double zamsMyr,
-                           double convCoreOnsetMyr, double convCoreEndMyr, double liHalvedMyr,
-                           double centralHExhaustedMyr, double trackEndMyr) {
+                           double overshootHp, OvershootScheme overshootProfile, double radiativeCoreMyr,
+                           double radiativeCoreEndMyr, double zamsMyr, double convCoreOnsetMyr,
+                           double convCoreEndMyr, double liHalvedMyr, double centralHExhaustedMyr,
+                           double trackEndMyr) {
 
     private static final double MYR = 1.0e6 * Constants.YEAR;
 
@@ -48,8 +51,19 @@ public record LifeEventRow(String trackId, double massMsun, double zInit, double
     public static LifeEventRow of(String trackId, ModelRequest first, LifeEvents events, double trackEnd) {
         return new LifeEventRow(trackId, first.mass() / Constants.M_SUN, first.initialMetals(),
                 first.initialHelium(), first.physics().mixingLength(), first.physics().overshoot(),
+                first.physics().overshootScheme(),
                 events.radiativeCore() / MYR, events.radiativeCoreEnd() / MYR, events.zeroAgeMainSequence() / MYR,
                 events.convectiveCoreOnset() / MYR, events.convectiveCoreEnd() / MYR, events.lithiumHalved() / MYR,
                 events.centralHydrogenExhausted() / MYR, trackEnd / MYR);
+    }
+
+    /**
+     * The same row with {@code profile} as its overshoot profile when it names none (a row of a table an earlier
+     * version began, in a run of the same grid, whose one profile is the row's).
+     */
+    public LifeEventRow withOvershootProfileIfUnknown(OvershootScheme profile) {
+        return overshootProfile != null ? this : new LifeEventRow(trackId, massMsun, zInit, yInit, mixingLength,
+                overshootHp, profile, radiativeCoreMyr, radiativeCoreEndMyr, zamsMyr, convCoreOnsetMyr,
+                convCoreEndMyr, liHalvedMyr, centralHExhaustedMyr, trackEndMyr);
     }
 }

@@ -7,6 +7,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.convgrid.output.CsvNumbers;
+import org.convgrid.output.OvershootProfileCell;
 
 /**
  * Writes {@code life_events.csv}: a header row of {@link LifeEventColumns#ALL}, then one row per star, ages in Myr
@@ -26,6 +27,7 @@ public final class LifeEventWriter {
     public static String line(LifeEventRow r) {
         return String.join(",", r.trackId(), CsvNumbers.format(r.massMsun()), CsvNumbers.format(r.zInit()),
                 CsvNumbers.format(r.yInit()), CsvNumbers.format(r.mixingLength()), CsvNumbers.format(r.overshootHp()),
+                OvershootProfileCell.format(r.overshootProfile()),
                 CsvNumbers.format(r.radiativeCoreMyr()), CsvNumbers.format(r.radiativeCoreEndMyr()),
                 CsvNumbers.format(r.zamsMyr()), CsvNumbers.format(r.convCoreOnsetMyr()),
                 CsvNumbers.format(r.convCoreEndMyr()), CsvNumbers.format(r.liHalvedMyr()),

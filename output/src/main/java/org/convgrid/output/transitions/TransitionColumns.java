@@ -15,6 +15,8 @@ public final class TransitionColumns {
     public static final String AGE_GYR = "age_gyr";
     public static final String MIXING_LENGTH = "mixing_length";
     public static final String OVERSHOOT_HP = "overshoot_hp";
+    /** Which profile {@link #OVERSHOOT_HP} is the length of (uniform, uniform-ramped or decaying). */
+    public static final String OVERSHOOT_PROFILE = "overshoot_profile";
     public static final String CRITERION = "criterion";
     public static final String OPACITY_SCALE = "opacity_scale";
     /** Highest mass that is still fully convective. */
@@ -35,10 +37,13 @@ public final class TransitionColumns {
     public static final String TOLERANCE_MSUN = "tolerance_msun";
 
     /** The header convgrid writes, in order. */
-    public static final List<String> HEADER = List.of(Z_INIT, Y_INIT, AGE_GYR, MIXING_LENGTH, OVERSHOOT_HP, CRITERION,
-            OPACITY_SCALE, FULLY_CONVECTIVE_LIMIT_MSUN, FULLY_CONVECTIVE_BRACKET_LO_MSUN,
+    public static final List<String> HEADER = List.of(Z_INIT, Y_INIT, AGE_GYR, MIXING_LENGTH, OVERSHOOT_HP,
+            OVERSHOOT_PROFILE, CRITERION, OPACITY_SCALE, FULLY_CONVECTIVE_LIMIT_MSUN, FULLY_CONVECTIVE_BRACKET_LO_MSUN,
             FULLY_CONVECTIVE_BRACKET_HI_MSUN, CONV_CORE_ONSET_MSUN, CONV_CORE_BRACKET_LO_MSUN,
             CONV_CORE_BRACKET_HI_MSUN, TRANSIENT_CORE_LO_MSUN, TRANSIENT_CORE_HI_MSUN, NOTES, METHOD, TOLERANCE_MSUN);
+
+    /** Columns a table written before them lacks (read as empty). */
+    public static final List<String> ADDED_LATER = List.of(OVERSHOOT_PROFILE);
 
     /** A column only the first layout (before version 2) had: its presence marks such a file. */
     public static final String VERSION_1_MARKER = "fully_convective_bracket_msun";

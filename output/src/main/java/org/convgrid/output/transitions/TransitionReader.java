@@ -8,15 +8,17 @@ import java.util.Locale;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.OutputFormatException;
+import org.convgrid.output.OvershootProfileCell;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueWriter;
 
 /**
  * Reads {@code transitions.csv} (version 2) by column name; every column of {@link TransitionColumns#HEADER} is
- * required. A file in the first layout (one {@code lo-hi} bracket column per transition) is refused with a message
- * that says how to rewrite it. What the file does not keep reads as unknown: no crossings, nothing skipped.
+ * required but those {@link TransitionColumns#ADDED_LATER} (read as unknown when missing). A file in the first
+ * layout (one {@code lo-hi} bracket column per transition) is refused with a message that says how to rewrite it. What the file does not keep reads as unknown: no crossings, nothing skipped.
  */
 public final class TransitionReader {
 
@@ -41,7 +43,7 @@ public final class TransitionReader {
                         + "(column '" + TransitionColumns.VERSION_1_MARKER + "'); " + REWRITE_HINT);
             }
             for (String column : TransitionColumns.HEADER) {
-                if (!header.contains(column)) {
+                if (!header.contains(column) && !TransitionColumns.ADDED_LATER.contains(column)) {
                     throw new OutputFormatException("transitions file misses the column '" + column + "'");
                 }
             }
@@ -63,7 +65,7 @@ public final class TransitionReader {
         Slice slice = new Slice(number(r, TransitionColumns.Z_INIT), number(r, TransitionColumns.AGE_GYR),
                 number(r, TransitionColumns.MIXING_LENGTH), number(r, TransitionColumns.OVERSHOOT_HP),
                 criterion.isEmpty() ? null : StabilityCriterion.valueOf(criterion.toUpperCase(Locale.ROOT)),
-                number(r, TransitionColumns.OPACITY_SCALE));
+                number(r, TransitionColumns.OPACITY_SCALE), overshootProfile(r));
         TransitionEstimate fc = estimate(r, TransitionColumns.FULLY_CONVECTIVE_LIMIT_MSUN,
                 TransitionColumns.FULLY_CONVECTIVE_BRACKET_LO_MSUN, TransitionColumns.FULLY_CONVECTIVE_BRACKET_HI_MSUN);
         TransitionEstimate core = estimate(r, TransitionColumns.CONV_CORE_ONSET_MSUN,
@@ -88,6 +90,12 @@ public final class TransitionReader {
             throw new IllegalArgumentException("'" + lo + "' and '" + hi + "' must both be empty or both be masses");
         }
         return Double.isNaN(a) ? null : new Span(a, b);
+    }
+
+    /** The slice's overshoot profile; null when the cell is empty or the column missing (an earlier table). */
+    private static OvershootScheme overshootProfile(CSVRecord r) {
+        return OvershootProfileCell.parse(r.isMapped(TransitionColumns.OVERSHOOT_PROFILE)
+                ? r.get(TransitionColumns.OVERSHOOT_PROFILE) : "");
     }
 
     private static double number(CSVRecord r, String column) {

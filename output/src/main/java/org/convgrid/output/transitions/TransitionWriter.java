@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import org.apache.commons.csv.CSVPrinter;
 import org.convgrid.output.CsvNumbers;
+import org.convgrid.output.OvershootProfileCell;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueWriter;
 
@@ -37,6 +38,7 @@ public final class TransitionWriter {
         cells.add(CsvNumbers.format(s.ageGyr()));
         cells.add(CsvNumbers.format(s.mixingLength()));
         cells.add(CsvNumbers.format(s.overshootHp()));
+        cells.add(OvershootProfileCell.format(s.overshootProfile()));
         cells.add(s.criterion() == null ? "" : s.criterion().name().toLowerCase(Locale.ROOT));
         cells.add(CsvNumbers.format(s.opacityScale()));
         estimate(row.fullyConvective(), cells);

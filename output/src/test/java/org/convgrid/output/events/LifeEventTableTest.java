@@ -28,10 +28,10 @@ class LifeEventTableTest {
         StringBuilder text = new StringBuilder();
         LifeEventWriter.write(List.of(row("p0-z00-m001", 1.0, 48.85)), text);
         assertThat(text.toString()).isEqualTo("""
-                track_id,mass_msun,z_init,y_init,mixing_length,overshoot_hp,radiative_core_myr,\
-                radiative_core_end_myr,zams_myr,conv_core_onset_myr,conv_core_end_myr,li_halved_myr,\
+                track_id,mass_msun,z_init,y_init,mixing_length,overshoot_hp,overshoot_profile,\
+                radiative_core_myr,radiative_core_end_myr,zams_myr,conv_core_onset_myr,conv_core_end_myr,li_halved_myr,\
                 central_h_exhausted_myr,track_end_myr
-                p0-z00-m001,1.0,0.02,0.28,1.8,0.0,1.7,,48.85,,,12.5,,600.0
+                p0-z00-m001,1.0,0.02,0.28,1.8,0.0,uniform,1.7,,48.85,,,12.5,,600.0
                 """);
         List<LifeEventRow> back = LifeEventReader.read(new StringReader(text.toString()));
         assertThat(back).singleElement().satisfies(r -> {
@@ -50,7 +50,8 @@ class LifeEventTableTest {
         LifeEventRow transientCore = LifeEventRow.of("p0-z00-m000", first, new LifeEvents(67.44893 * MYR,
                 117.6414 * MYR, Double.NaN, Double.NaN, Double.NaN, 18.22713 * MYR, Double.NaN), 250.0 * MYR);
         String line = LifeEventWriter.line(transientCore);
-        assertThat(line).isEqualTo("p0-z00-m000,0.26,0.02,0.2771,1.8,0.0,67.44893,117.6414,,,,18.22713,,250.0\n");
+        assertThat(line)
+                .isEqualTo("p0-z00-m000,0.26,0.02,0.2771,1.8,0.0,uniform,67.44893,117.6414,,,,18.22713,,250.0\n");
         assertThat(LifeEventReader.read(new StringReader(LifeEventWriter.header() + line))).singleElement()
                 .satisfies(r -> assertThat(r.radiativeCoreEndMyr()).isCloseTo(117.6414, within(1e-9)));
     }

@@ -81,11 +81,11 @@ public final class SliceLabels {
     }
 
     /** The physics options in words: {@code α = 1.8, Schwarzschild, no overshoot}. */
-    public static String physics(double mixingLength, double overshootHp, StabilityCriterion criterion,
-                                 double opacityFactor) {
+    public static String physics(double mixingLength, double overshootHp, OvershootScheme overshootProfile,
+                                 StabilityCriterion criterion, double opacityFactor) {
         StringBuilder b = new StringBuilder("\u03b1 = ").append(number(mixingLength));
         b.append(", ").append(criterion == null ? "criterion ?" : criterionName(criterion));
-        b.append(", ").append(overshootHp == 0.0 ? "no overshoot" : "overshoot " + number(overshootHp) + " Hp");
+        b.append(", ").append(overshoot(overshootHp, overshootProfile));
         if (Double.isFinite(opacityFactor) && opacityFactor != 1.0) {
             b.append(", \u03ba \u00d7 ").append(number(opacityFactor));
         }
@@ -93,22 +93,31 @@ public final class SliceLabels {
     }
 
     /**
-     * What the overshoot length means under a profile other than the uniform one, for the report's physics rows
-     * (the charts name the length only): empty for uniform.
+     * The overshoot in words, saying what the length means under its profile (a bare "overshoot 0.2 Hp" would
+     * mislead for both others): {@code overshoot 0.2 Hp}, {@code overshoot 0.2 Hp from 2 M☉, none up to 1.2 M☉
+     * (uniform-ramped)}, {@code overshoot f = 0.016 (decaying)}; {@code no overshoot} for a zero length under any
+     * profile. An unknown profile (a table written before it was recorded) reads as the length in Hp.
      */
-    public static String overshootProfile(OvershootScheme scheme) {
-        return switch (scheme) {
-            case STEP -> "";
-            case MASS_RAMPED_STEP -> " (" + scheme.label() + ": that length from "
-                    + number(MassRampedStepOvershoot.RAMP_FULL_MSUN) + " M\u2609 up, none up to "
-                    + number(MassRampedStepOvershoot.RAMP_START_MSUN) + " M\u2609, linear between)";
-            case EXPONENTIAL -> " (" + scheme.label() + ": the length is f, the e-folding parameter)";
+    public static String overshoot(double overshootHp, OvershootScheme overshootProfile) {
+        if (overshootHp == 0.0) {
+            return "no overshoot";
+        }
+        String length = number(overshootHp);
+        if (overshootProfile == null) {
+            return "overshoot " + length + " Hp";
+        }
+        return switch (overshootProfile) {
+            case STEP -> "overshoot " + length + " Hp";
+            case MASS_RAMPED_STEP -> "overshoot " + length + " Hp from "
+                    + number(MassRampedStepOvershoot.RAMP_FULL_MSUN) + " M\u2609, none up to "
+                    + number(MassRampedStepOvershoot.RAMP_START_MSUN) + " M\u2609 (" + overshootProfile.label() + ")";
+            case EXPONENTIAL -> "overshoot f = " + length + " (" + overshootProfile.label() + ")";
         };
     }
 
     /** The physics of a slice in words. */
     public static String physics(Slice s) {
-        return physics(s.mixingLength(), s.overshootHp(), s.criterion(), s.opacityScale());
+        return physics(s.mixingLength(), s.overshootHp(), s.overshootProfile(), s.criterion(), s.opacityScale());
     }
 
     /** A whole slice in words: {@code Z = 0.014, ZAMS, α = 1.8, Schwarzschild, no overshoot}. */
@@ -150,13 +159,19 @@ public final class SliceLabels {
     /** A file name stem for a slice, e.g. {@code z0.014_age4.57_a1.8_ov0_schwarzschild}; ASCII only. */
     public static String fileStem(Slice s) {
         return "z" + number(s.zInit()) + "_age" + number(s.ageGyr()) + "_" + physicsStem(s.mixingLength(),
-                s.overshootHp(), s.criterion(), s.opacityScale());
+                s.overshootHp(), s.overshootProfile(), s.criterion(), s.opacityScale());
     }
 
-    /** A file name stem for a physics combination, e.g. {@code a1.8_ov0_schwarzschild}. */
-    public static String physicsStem(double mixingLength, double overshootHp, StabilityCriterion criterion,
-                                     double opacityFactor) {
-        String stem = "a" + number(mixingLength) + "_ov" + number(overshootHp) + "_"
+    /**
+     * A file name stem for a physics combination, e.g. {@code a1.8_ov0_schwarzschild}; the overshoot part names a
+     * profile other than the uniform one after the length ({@code ov0.2-uniform-ramped}, {@code ov0.016-decaying}),
+     * so that files of such a run do not read as uniform ones.
+     */
+    public static String physicsStem(double mixingLength, double overshootHp, OvershootScheme overshootProfile,
+                                     StabilityCriterion criterion, double opacityFactor) {
+        boolean named = overshootHp != 0.0 && overshootProfile != null && overshootProfile != OvershootScheme.STEP;
+        String stem = "a" + number(mixingLength) + "_ov" + number(overshootHp)
+                + (named ? "-" + overshootProfile.label() : "") + "_"
                 + (criterion == null ? "unknown" : criterion.name().toLowerCase(Locale.ROOT));
         return Double.isFinite(opacityFactor) && opacityFactor != 1.0 ? stem + "_kappa" + number(opacityFactor) : stem;
     }

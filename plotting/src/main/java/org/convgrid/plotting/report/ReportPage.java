@@ -163,7 +163,7 @@ public final class ReportPage {
             row(b, "median time per model", Double.isNaN(m.medianSecondsPerModel()) ? "n/a"
                     : SliceLabels.number(m.medianSecondsPerModel()) + " s");
             m.physics().forEach(p -> row(b, "physics", SliceLabels.physics(p.mixingLength(), p.overshoot(),
-                    p.criterion(), p.opacityScale()) + SliceLabels.overshootProfile(p.overshootScheme())));
+                    p.overshootScheme(), p.criterion(), p.opacityScale())));
         }
         // the run's summary line counts the grid's models and the refinement's apart: so does the report
         long refinement = run.catalogue().stream().filter(r -> RefinedModelIds.isRefined(r.modelId())).count();

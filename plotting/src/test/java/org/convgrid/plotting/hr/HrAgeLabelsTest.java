@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.convection.StructureClass;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.style.StyledChart;
 import org.junit.jupiter.api.Test;
@@ -17,7 +18,8 @@ import org.junit.jupiter.api.Test;
  */
 class HrAgeLabelsTest {
 
-    private static final PhysicsKey PHYSICS = new PhysicsKey(1.8, 0.0, StabilityCriterion.SCHWARZSCHILD, 1.0);
+    private static final PhysicsKey PHYSICS = new PhysicsKey(1.8, 0.0, OvershootScheme.STEP,
+            StabilityCriterion.SCHWARZSCHILD, 1.0);
 
     private static HrDiagramData diagram(List<Double> ages, double brighterPerAgeDex) {
         List<HrPoint> points = new ArrayList<>();

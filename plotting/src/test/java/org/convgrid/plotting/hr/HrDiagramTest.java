@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
 import java.util.List;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.track.Track;
 import org.convgrid.output.track.TrackReader;
@@ -76,6 +77,7 @@ class HrDiagramTest {
         assertThat(withTracks.isochrones().get(0).points()).extracting(HrPoint::massMsun)
                 .containsExactly(0.5, 1.0, 2.0);
         assertThat(withTracks.isochrones().get(1).points()).extracting(HrPoint::massMsun).containsExactly(0.5, 2.0);
-        assertThat(HrDiagram.build(new PhysicsKey(2.0, 0.0, null, 1.0), small, tracked).tracks()).isEmpty();
+        assertThat(HrDiagram.build(new PhysicsKey(2.0, 0.0, OvershootScheme.STEP,
+                null, 1.0), small, tracked).tracks()).isEmpty();
     }
 }

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.io.StringReader;
 import java.util.List;
 import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.output.Span;
 import org.convgrid.output.track.Track;
 import org.convgrid.output.track.TrackReader;
@@ -21,7 +22,8 @@ import org.junit.jupiter.api.Test;
  */
 class BurningShareTest {
 
-    private static final PhysicsKey PHYSICS = new PhysicsKey(1.8, 0.0, StabilityCriterion.SCHWARZSCHILD, 1.0);
+    private static final PhysicsKey PHYSICS = new PhysicsKey(1.8, 0.0, OvershootScheme.STEP,
+            StabilityCriterion.SCHWARZSCHILD, 1.0);
     private static final TrackOrigin ORIGIN = new TrackOrigin("p0-z01-m004", 1.0, 0.014, PHYSICS);
 
     private static TrackStep step(double ageGyr, double burningTop, double nuclearShare) {

@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.List;
 import javax.imageio.ImageIO;
 import org.convgrid.engine.convection.StabilityCriterion;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.output.Span;
 import org.convgrid.output.track.Track;
 import org.convgrid.output.track.TrackReader;
@@ -24,7 +25,8 @@ import org.junit.jupiter.api.io.TempDir;
 
 class KippenhahnTest {
 
-    private static final PhysicsKey PHYSICS = new PhysicsKey(1.8, 0.0, StabilityCriterion.SCHWARZSCHILD, 1.0);
+    private static final PhysicsKey PHYSICS = new PhysicsKey(1.8, 0.0, OvershootScheme.STEP,
+            StabilityCriterion.SCHWARZSCHILD, 1.0);
 
     private static Track track(double m) throws Exception {
         return new Track("t", TrackReader.read(new StringReader(TestTracks.text(m, 0.014, 60))));

@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.output.track.Track;
 import org.convgrid.plotting.label.PhysicsKey;
@@ -12,7 +13,7 @@ import org.junit.jupiter.api.Test;
 class AgeChartSelectionTest {
 
     private static final PhysicsKey PHYSICS = new PhysicsKey(PhysicsOptions.DEFAULT.mixingLength(),
-            PhysicsOptions.DEFAULT.overshoot(), PhysicsOptions.DEFAULT.criterion(), 1.0);
+            PhysicsOptions.DEFAULT.overshoot(), OvershootScheme.STEP, PhysicsOptions.DEFAULT.criterion(), 1.0);
 
     private static List<TrackedModel> tracks(int masses, int metallicities) {
         List<TrackedModel> out = new ArrayList<>();

@@ -3,6 +3,7 @@ package org.convgrid.plotting.trend;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.List;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.TransitionFinder;
@@ -84,7 +85,7 @@ class TransitionAgeTrendTest {
 
     @Test
     void agesFromBirthThatSpanDecadesGetALogarithmicAxisAndZeroAgesALinearOne() {
-        PhysicsKey p = new PhysicsKey(1.8, 0.0, null, 1.0);
+        PhysicsKey p = new PhysicsKey(1.8, 0.0, OvershootScheme.STEP, null, 1.0);
         assertThat(new TransitionAgeTrendData(p, List.of(0.01, 0.15, 0.6), List.of(0.02), List.of(), List.of())
                 .logAges()).isTrue();
         assertThat(new TransitionAgeTrendData(p, List.of(0.0, 1.0, 4.57), List.of(0.02), List.of(), List.of())

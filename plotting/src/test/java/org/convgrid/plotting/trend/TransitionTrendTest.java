@@ -3,6 +3,7 @@ package org.convgrid.plotting.trend;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.List;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionRow;
@@ -36,7 +37,8 @@ class TransitionTrendTest {
     @Test
     void otherPhysicsIsLeftOut() {
         List<TransitionRow> transitions = TransitionFinder.withDefaults().find(TestRuns.demoRows());
-        TransitionTrendData data = TransitionTrend.build(new PhysicsKey(2.0, 0.0, null, 1.0), transitions);
+        TransitionTrendData data = TransitionTrend.build(new PhysicsKey(2.0, 0.0, OvershootScheme.STEP,
+                null, 1.0), transitions);
         assertThat(data.metallicities()).isEmpty();
         assertThat(data.series()).isEmpty();
     }
