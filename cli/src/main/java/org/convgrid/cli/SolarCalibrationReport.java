@@ -11,6 +11,7 @@ import org.convgrid.engine.units.Constants;
 import org.convgrid.grids.yaml.PresetWriter;
 import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.catalogue.CatalogueColumns;
+import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.catalogue.CatalogueWriter;
 import org.convgrid.output.catalogue.OutcomeRows;
 
@@ -76,9 +77,13 @@ final class SolarCalibrationReport {
         printer.flush();
     }
 
-    /** A readable summary. */
+    /**
+     * A readable summary. It gives the envelope's mass and turnover times too: the calibrated Sun is the usual
+     * reference for Rossby numbers (Ro / Ro_sun) and for envelope-mass scalings, so it is asked for beside alpha.
+     */
     static void writeTable(CalibratedSun sun, boolean settling, Appendable out) throws IOException {
         var g = sun.sun().solved().global();
+        CatalogueRow row = OutcomeRows.toRow(sun.sun());
         out.append(String.format(Locale.ROOT, """
                 Calibrated Sun (1 Msun, %.4g Gyr, present surface Z/X = %.4g, %s)
                   mixing length alpha       %.5f pressure scale heights
@@ -88,6 +93,8 @@ final class SolarCalibrationReport {
                   L / L_sun                 %.6f   (ln residual %+.2e)
                   Teff                      %.1f K
                   envelope base r/R         %.4f
+                  envelope mass             %.5f Msun
+                  turnover time             %.2f d local, %.2f d global (as the catalogue's two columns)
                   central temperature       %.4e K
                   central density           %.2f g/cm^3
                   central X                 %.4f
@@ -101,6 +108,7 @@ final class SolarCalibrationReport {
                 sun.mixingLength(), sun.helium(),
                 sun.metals(), g.radius() / Constants.R_SUN, sun.radiusResidual(), g.luminosity() / Constants.L_SUN,
                 sun.luminosityResidual(), g.effectiveTemperature(), sun.envelopeBaseRadiusFraction(),
+                row.envCzMassMsun(), row.turnoverTimeDays(), row.turnoverTimeGlobalDays(),
                 sun.centralTemperature(), sun.centralDensity(), g.centralHydrogen(),
                 sun.zeroAgeLuminosity() / Constants.L_SUN, sun.exhaustionAge() / Constants.GYR,
                 sun.initialMetalsToHydrogen(), sun.envelopeHelium(), sun.envelopeMetalsToHydrogen(),

@@ -104,7 +104,10 @@ class CalibrateSunCommandTest {
         SolarCalibrationReport.writeTable(syntheticSun(), true, table);
         assertThat(table.toString()).contains("mixing length alpha       1.90000 pressure scale heights")
                 .contains("envelope base r/R         0.7200").contains("main-sequence lifetime    10.500 Gyr")
-                .contains("zero-age L / L_sun        0.7000");
+                .contains("zero-age L / L_sun        0.7000")
+                // the reference of Rossby numbers and envelope-mass scalings (found by a stellar-activity review)
+                .contains("envelope mass             0.02000 Msun")
+                .contains("turnover time             23.15 d local").contains("34.72 d global");
     }
 
     @Test
