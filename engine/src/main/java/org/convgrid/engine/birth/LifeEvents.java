@@ -3,9 +3,10 @@ package org.convgrid.engine.birth;
 /**
  * The ages (s since birth) at which a star's life changes; NaN for an event that did not happen on the computed
  * track. Ages of the convective core's onset and end and of the radiative core's end are those of the first model
- * that shows them (resolution: one step); the radiative core's appearance (on the centre's stability excess), the
- * zero-age main sequence and the lithium halving are interpolated linearly in age between the two models that
- * bracket them.
+ * that shows them (resolution: one step), except the end of a core that lasts the whole main sequence, which is the
+ * end of the main sequence (see {@code convectiveCoreEnd}); the radiative core's appearance (on the centre's
+ * stability excess), the zero-age main sequence and the lithium halving are interpolated linearly in age between
+ * the two models that bracket them.
  *
  * @param radiativeCore the centre first stops being convective (never for a fully convective star)
  * @param radiativeCoreEnd after that, the star is fully convective again (one zone from the centre to the surface,
@@ -18,7 +19,14 @@ package org.convgrid.engine.birth;
  *                            whose top lies above the core threshold and below m/M = 0.99 (higher, it is the
  *                            whole star again); a core that also vanishes before the ZAMS is a transient of the
  *                            contraction and is not reported
- * @param convectiveCoreEnd after that onset, the convective core first vanishes
+ * @param convectiveCoreEnd after that onset, the convective core first vanishes (no central zone with its top above
+ *                          the core threshold any more). A core still there in the last model of the main sequence
+ *                          (the last with central hydrogen at or above the end value) lasted the whole main sequence
+ *                          and ends with it, at {@code centralHydrogenExhausted}, whether it vanished during the step
+ *                          that crossed the end value or is still there after it: the first model without it would
+ *                          lie past the main sequence, one step after the exhaustion age, reading as a core that
+ *                          outlived it. A core that vanished on the main sequence keeps the age of the first model
+ *                          without it, however close to the exhaustion age
  * @param lithiumHalved the surface 7Li first falls to half its birth value
  * @param centralHydrogenExhausted the central hydrogen falls below the evolution's end value, which ends the main
  *                                 sequence ({@link org.convgrid.engine.evolution.EvolutionResult#exhaustionAge()})
@@ -27,9 +35,25 @@ public record LifeEvents(double radiativeCore, double radiativeCoreEnd, double z
                          double convectiveCoreOnset, double convectiveCoreEnd, double lithiumHalved,
                          double centralHydrogenExhausted) {
 
-    /** The same events with the age at which the central hydrogen ran out (NaN: not on the computed track). */
+    /**
+     * The same events with the age at which the central hydrogen ran out (NaN: not on the computed track), and with
+     * it the end of a convective core that lasted the whole main sequence (see {@code convectiveCoreEnd}).
+     */
     public LifeEvents withCentralHydrogenExhausted(double age) {
         return new LifeEvents(radiativeCore, radiativeCoreEnd, zeroAgeMainSequence, convectiveCoreOnset,
-                convectiveCoreEnd, lithiumHalved, age);
+                coreEndGiven(age), lithiumHalved, age);
+    }
+
+    /**
+     * The convective core's end once the main sequence is known to end at {@code exhaustion}. The evolution stops
+     * at its first model below the end value, so a core end recorded after the exhaustion age belongs to that
+     * model, and the model before it, still on the main sequence, had the core; a core with no end had it in every
+     * model from its onset to the last.
+     */
+    private double coreEndGiven(double exhaustion) {
+        // comparisons with NaN are false: without an onset or without exhaustion the end stays as recorded
+        boolean coreOnMainSequence = convectiveCoreOnset < exhaustion;
+        boolean vanishedOnMainSequence = convectiveCoreEnd <= exhaustion;
+        return coreOnMainSequence && !vanishedOnMainSequence ? exhaustion : convectiveCoreEnd;
     }
 }
