@@ -227,11 +227,11 @@ public final class RunMaps {
                 }
                 entries.add(new MapEntry(TURNOVER_FILES + "_z" + SliceLabels.number(z) + "_" + p.fileStem() + ".png",
                         MapEntry.TURNOVER, groupOf(z, p, run),
-                        "Convective turnover times against mass, one colour per age: local (solid, markers; hollow "
-                                + "where the star is fully convective) and global (dashed), the grid's models with a "
-                                + "convective envelope; dotted lines mark each age's fully convective limit, "
-                                + "Z = " + SliceLabels.number(z) + ", " + p.describe() + ". Model values from the "
-                                + "catalogue's turnover_time_days and turnover_time_global_days, not empirical ones.",
+                        "Convective turnover times against mass, one colour per age: local (solid with markers, "
+                                + "hollow where the star is fully convective) and global (dashed), for the grid's "
+                                + "models with a turnover time; dotted lines mark each age's fully convective limit. "
+                                + "Z = " + SliceLabels.number(z) + ", " + p.describe() + ". Model values "
+                                + "(turnover_time_days, turnover_time_global_days), not empirical ones.",
                         () -> TurnoverAgainstMassRenderer.render(data)));
             }
         }
