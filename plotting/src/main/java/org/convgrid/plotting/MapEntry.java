@@ -8,7 +8,7 @@ import org.convgrid.plotting.style.StyledChart;
  *
  * @param fileName PNG file name (ASCII, no directory)
  * @param section report section: {@link #ZONES_MASS}, {@link #ZONES_RADIUS}, {@link #HR}, {@link #TRENDS},
- *     {@link #TRENDS_AGE} or {@link #ZONES_AGE}
+ *     {@link #TRENDS_AGE}, {@link #TURNOVER} or {@link #ZONES_AGE}
  * @param group where it sits within its section, so a reader finds one metallicity or one mass quickly (e.g.
  *     {@code Z = 0.014}); empty when the section has no groups
  * @param caption one sentence for people
@@ -26,6 +26,7 @@ public record MapEntry(String fileName, String section, String group, String cap
     public static final String HR = "HR diagrams";
     public static final String TRENDS = "Transition masses against metallicity";
     public static final String TRENDS_AGE = "Transition masses against age";
+    public static final String TURNOVER = "Convective turnover time against mass";
     public static final String ZONES_AGE = "Convective zones against age";
 
     /** The file name without {@code .png}. */

@@ -33,6 +33,9 @@ import org.convgrid.plotting.trend.TransitionAgeTrendRenderer;
 import org.convgrid.plotting.trend.TransitionTrend;
 import org.convgrid.plotting.trend.TransitionTrendData;
 import org.convgrid.plotting.trend.TransitionTrendRenderer;
+import org.convgrid.plotting.turnover.TurnoverAgainstMass;
+import org.convgrid.plotting.turnover.TurnoverAgainstMassRenderer;
+import org.convgrid.plotting.turnover.TurnoverData;
 import org.convgrid.plotting.zones.ZoneMap;
 import org.convgrid.plotting.zones.ZoneMapRenderer;
 
@@ -41,7 +44,8 @@ import org.convgrid.plotting.zones.ZoneMapRenderer;
  * ({@code zones-mass_<slice>.png}) and in r/R ({@code zones-radius_<slice>.png}); per physics combination an HR
  * diagram ({@code hr_<physics>.png}) and, when the run has transitions, the transition masses against Z
  * ({@code transitions-vs-z_<physics>.png}); when the run has several ages, the transition masses against age
- * ({@code transitions-vs-age_<physics>.png}); for a bounded selection of the evolution tracks in tracks/
+ * ({@code transitions-vs-age_<physics>.png}); per Z and physics, when at least two models have a turnover time, the
+ * convective turnover times against mass ({@code turnover-vs-mass_z<Z>_<physics>.png}); for a bounded selection of the evolution tracks in tracks/
  * ({@link AgeChartSelection}), their convective zones against age ({@code zones-age_m<mass>_z<Z>_<physics>.png}). With tracks, the HR diagrams also
  * show the tracks and the isochrones at the grid's ages.
  */
@@ -56,8 +60,11 @@ public final class RunMaps {
     private static final String TRENDS_AGE_FILES = "transitions-vs-age";
     private static final String ZONES_AGE_FILES = "zones-age";
     private static final String ZONES_AGE_DEPTH_FILES = "zones-age-depth";
+    private static final String TURNOVER_FILES = "turnover-vs-mass";
     private static final Set<String> CHART_FILE_KINDS = Set.of(ZONES_MASS_FILES, ZONES_RADIUS_FILES, HR_FILES,
-            TRENDS_FILES, TRENDS_AGE_FILES, ZONES_AGE_FILES, ZONES_AGE_DEPTH_FILES);
+            TRENDS_FILES, TRENDS_AGE_FILES, TURNOVER_FILES, ZONES_AGE_FILES, ZONES_AGE_DEPTH_FILES);
+    /** Fewer models with a turnover time than this and a metallicity gets no turnover chart: one point is no trend. */
+    static final int TURNOVER_MIN_MODELS = 2;
 
     private RunMaps() {
     }
@@ -199,7 +206,35 @@ public final class RunMaps {
                                 run.manifest() == null ? AgeOrigin.ZAMS : run.manifest().ageOrigin())));
             }
         }
+        entries.addAll(turnoverAgainstMass(run, physics));
         entries.addAll(zonesAgainstAge(run));
+        return entries;
+    }
+
+    /**
+     * One turnover-time chart per physics and Z that has at least {@link #TURNOVER_MIN_MODELS} grid models with a
+     * turnover time (a Z of hot stars only, without convective envelopes, has none); grouped by Z.
+     */
+    private static List<MapEntry> turnoverAgainstMass(RunData run, Set<PhysicsKey> physics) {
+        List<MapEntry> entries = new ArrayList<>();
+        for (PhysicsKey p : physics) {
+            List<Double> zs = run.catalogue().stream().filter(r -> PhysicsKey.of(r).equals(p))
+                    .map(CatalogueRow::zInit).distinct().sorted().toList();
+            for (double z : zs) {
+                TurnoverData data = TurnoverAgainstMass.build(p, z, run.catalogue(), run.transitions());
+                if (data.modelCount() < TURNOVER_MIN_MODELS) {
+                    continue;
+                }
+                entries.add(new MapEntry(TURNOVER_FILES + "_z" + SliceLabels.number(z) + "_" + p.fileStem() + ".png",
+                        MapEntry.TURNOVER, groupOf(z, p, run),
+                        "Convective turnover times against mass, one colour per age: local (solid with markers, "
+                                + "hollow where the star is fully convective) and global (dashed), for the grid's "
+                                + "models with a turnover time; dotted lines mark each age's fully convective limit. "
+                                + "Z = " + SliceLabels.number(z) + ", " + p.describe() + ". Model values "
+                                + "(turnover_time_days, turnover_time_global_days), not empirical ones.",
+                        () -> TurnoverAgainstMassRenderer.render(data)));
+            }
+        }
         return entries;
     }
 

@@ -27,8 +27,8 @@ class RunMapsTest {
     void drawsEveryChartAsAPngOfTheStatedSize(@TempDir Path dir) throws Exception {
         TestRuns.write(dir, TestRuns.demoRows());
         List<Path> files = RunMaps.drawAll(dir).written();
-        // 9 slices x (mass + radius) + 1 HR diagram + transitions against Z and against age.
-        assertThat(files).hasSize(21).allSatisfy(f -> {
+        // 9 slices x (mass + radius) + 1 HR diagram + transitions against Z and against age + turnover times per Z.
+        assertThat(files).hasSize(24).allSatisfy(f -> {
             assertThat(f.getParent()).isEqualTo(dir.resolve("maps"));
             BufferedImage image = ImageIO.read(f.toFile());
             assertThat(image).as(f.toString()).isNotNull();
@@ -38,7 +38,9 @@ class RunMapsTest {
         assertThat(files).extracting(f -> f.getFileName().toString()).contains(
                 "zones-mass_z0.014_age4.57_a1.8_ov0_schwarzschild.png",
                 "zones-radius_z0.004_age0_a1.8_ov0_schwarzschild.png", "hr_a1.8_ov0_schwarzschild.png",
-                "transitions-vs-z_a1.8_ov0_schwarzschild.png", "transitions-vs-age_a1.8_ov0_schwarzschild.png");
+                "transitions-vs-z_a1.8_ov0_schwarzschild.png", "transitions-vs-age_a1.8_ov0_schwarzschild.png",
+                "turnover-vs-mass_z0.004_a1.8_ov0_schwarzschild.png", "turnover-vs-mass_z0.014_a1.8_ov0_schwarzschild.png",
+                "turnover-vs-mass_z0.02_a1.8_ov0_schwarzschild.png");
         try (var left = Files.list(dir.resolve("maps"))) {
             assertThat(left.filter(f -> f.getFileName().toString().endsWith(".tmp"))).isEmpty();
         }
@@ -89,6 +91,22 @@ class RunMapsTest {
     }
 
     @Test
+    void aMetallicityWithFewerThanTwoTurnoverTimesGetsNoTurnoverChart(@TempDir Path dir) throws Exception {
+        // at Z = 0.004 only the 1.0 Msun model has a convective envelope (1.6 and 2.0: none); at Z = 0.014 two do
+        List<CatalogueRow> rows = new java.util.ArrayList<>(TestRuns.rows(new double[] {1.0, 1.6, 2.0},
+                new double[] {0.004}, new double[] {0}));
+        rows.addAll(TestRuns.rows(new double[] {0.5, 1.0}, new double[] {0.014}, new double[] {0}).stream()
+                .map(r -> TestRuns.row(r.modelId().replace("-z00-", "-z01-"), r.massMsun(), r.zInit(), r.ageGyr(),
+                        false)).toList());
+        TestRuns.write(dir, rows);
+        assertThat(RunMaps.plan(RunData.read(dir))).filteredOn(e -> e.section().equals(MapEntry.TURNOVER))
+                .extracting(MapEntry::fileName, MapEntry::group)
+                .containsExactly(org.assertj.core.groups.Tuple.tuple("turnover-vs-mass_z0.014_a1.8_ov0_schwarzschild.png",
+                        "Z = 0.014"));
+        assertThat(RunMaps.isChartFile(Path.of("turnover-vs-mass_z0.014_a1.8_ov0_schwarzschild.png"))).isTrue();
+    }
+
+    @Test
     void writesVectorFilesWhenAsked(@TempDir Path dir) throws Exception {
         TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.2, 1.6, 8), new double[] {0.014}, new double[] {0}));
         List<Path> files = RunMaps.drawAll(dir, Set.of(ChartFiles.VectorFormat.SVG, ChartFiles.VectorFormat.PDF)).written();
@@ -108,7 +126,7 @@ class RunMapsTest {
         long start = System.nanoTime();
         List<Path> files = RunMaps.drawAll(dir).written();
         double seconds = (System.nanoTime() - start) / 1e9;
-        assertThat(files).hasSize(2 * 18 + 3);
+        assertThat(files).hasSize(2 * 18 + 3 + 6);
         assertThat(seconds).as("seconds for %d maps", files.size()).isLessThan(THOUSAND_MODEL_BUDGET_SECONDS);
     }
 
@@ -129,7 +147,9 @@ class RunMapsTest {
         assertThat(run.trackedModels()).hasSize(1000);
         assertThat(plan.stream().filter(e -> e.section().equals(MapEntry.ZONES_AGE)))
                 .hasSizeLessThanOrEqualTo(org.convgrid.plotting.tracks.AgeChartSelection.MAX_CHARTS);
-        // per slice a mass and a radius map, one HR diagram, and the bounded zones-against-age selection
-        assertThat(plan).hasSizeLessThanOrEqualTo(2 * 100 + 1 + org.convgrid.plotting.tracks.AgeChartSelection.MAX_CHARTS);
+        // per slice a mass and a radius map, one HR diagram, a turnover chart per Z, and the bounded zones-against-age
+        // selection
+        assertThat(plan).hasSizeLessThanOrEqualTo(2 * 100 + 1 + 10
+                + org.convgrid.plotting.tracks.AgeChartSelection.MAX_CHARTS);
     }
 }

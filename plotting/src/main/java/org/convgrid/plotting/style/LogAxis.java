@@ -9,7 +9,7 @@ import java.util.function.DoubleFunction;
 import org.convgrid.plotting.label.SliceLabels;
 
 /**
- * A logarithmic x axis labelled at chosen values. XChart labels every tick at 1..9 x 10^n, which collide on a
+ * A logarithmic axis labelled at chosen values. XChart labels every tick at 1..9 x 10^n, which collide on a
  * narrow plot, and its label callback does not work on log axes; so XChart's labels are made transparent (they
  * keep their space and tick marks) and an overlay writes our labels at the same height, leaving out any label
  * that would run into the one before it.
@@ -50,6 +50,19 @@ public final class LogAxis {
         chart.addOverlay((g, c) -> paintLabels(g, c, inside, SliceLabels::number));
     }
 
+    /**
+     * Makes the y axis logarithmic over [min, max], labelled at {@code labelled} (values outside are dropped) the same
+     * way: right-aligned left of the axis, bottom up, a label that would touch the one below it left out.
+     */
+    public static void applyY(StyledChart chart, double min, double max, List<Double> labelled) {
+        chart.getStyler().setYAxisLogarithmic(true);
+        chart.getStyler().setYAxisLogarithmicDecadeOnly(false);
+        chart.getStyler().setYAxisMin(min).setYAxisMax(max);
+        chart.getStyler().setYAxisTickLabelsColor(TRANSPARENT);
+        List<Double> inside = labelled.stream().filter(v -> v >= min && v <= max).sorted().toList();
+        chart.addOverlay((g, c) -> paintYLabels(g, c, inside));
+    }
+
     /** The round values 1, 2, 3 and 5 x 10^n in [min, max]. */
     public static List<Double> roundValues(double min, double max) {
         List<Double> ticks = new ArrayList<>();
@@ -62,6 +75,25 @@ public final class LogAxis {
             }
         }
         return ticks;
+    }
+
+    private static void paintYLabels(Graphics2D g, StyledChart chart, List<Double> ticks) {
+        g.setFont(ChartStyle.TICK_FONT);
+        g.setColor(ChartStyle.TEXT);
+        FontMetrics fm = g.getFontMetrics();
+        double right = chart.getScreenXFromChart(chart.getStyler().getXAxisMin())
+                - chart.getStyler().getAxisTickMarkLength() - chart.getStyler().getAxisTickPadding();
+        double lastTop = Double.POSITIVE_INFINITY;
+        for (double tick : ticks) {
+            String text = SliceLabels.number(tick);
+            double y = chart.getScreenYFromChart(tick);
+            double baseline = y + fm.getAscent() / 2.0 - 2;
+            if (baseline > lastTop - fm.getDescent()) {
+                continue;
+            }
+            g.drawString(text, (float) (right - fm.stringWidth(text)), (float) baseline);
+            lastTop = baseline - fm.getAscent();
+        }
     }
 
     private static void paintLabels(Graphics2D g, StyledChart chart, List<Double> ticks,
