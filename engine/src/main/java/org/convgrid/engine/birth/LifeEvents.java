@@ -19,7 +19,8 @@ package org.convgrid.engine.birth;
  *                            whose top lies above the core threshold and below m/M = 0.99 (higher, it is the
  *                            whole star again); a core that also vanishes before the ZAMS is a transient of the
  *                            contraction and is not reported
- * @param convectiveCoreEnd after that onset, the convective core first vanishes (no central zone with its top above
+ * @param convectiveCoreEnd after that onset, the convective core vanishes for good: the first model of the last run
+ *                          of models without it ({@link CoreLifetime}; no central zone with its top above
  *                          the core threshold any more). A core still there in the last model of the main sequence
  *                          (the last with central hydrogen at or above the end value) lasted the whole main sequence
  *                          and ends with it, at {@code centralHydrogenExhausted}, whether it vanished during the step

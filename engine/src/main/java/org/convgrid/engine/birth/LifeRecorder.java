@@ -23,8 +23,7 @@ final class LifeRecorder implements StepObserver {
     /** Age of the first model of the current run of fully convective models; NaN while the last model was not. */
     private double fullyConvectiveSince = Double.NaN;
     private double zams = Double.NaN;
-    private double coreOnset = Double.NaN;
-    private double coreEnd = Double.NaN;
+    private final CoreLifetime convectiveCore = new CoreLifetime();
     private double lithiumHalved = Double.NaN;
     private double lastAge;
     private double lastFraction;
@@ -70,17 +69,7 @@ final class LifeRecorder implements StepObserver {
             if (Double.isNaN(zams) && fraction >= NuclearLuminosity.ZERO_AGE_FRACTION) {
                 zams = crossing(lastAge, lastFraction, age, fraction, NuclearLuminosity.ZERO_AGE_FRACTION);
             }
-            if (!Double.isNaN(radiativeCore) && Double.isNaN(coreOnset) && core) {
-                coreOnset = age;
-            } else if (!Double.isNaN(coreOnset) && Double.isNaN(coreEnd) && !core) {
-                if (Double.isNaN(zams)) {
-                    // a core that comes and goes during the contraction is a transient of that phase (seen at
-                    // 10 Msun, Z = 1e-4, within the first 1e4 yr): forget it, the main-sequence core is the event
-                    coreOnset = Double.NaN;
-                } else {
-                    coreEnd = age;
-                }
-            }
+            convectiveCore.observe(age, core, !Double.isNaN(radiativeCore), !Double.isNaN(zams));
             if (Double.isNaN(lithiumHalved) && lithium <= 0.5) {
                 lithiumHalved = crossing(lastAge, lastLithium, age, lithium, 0.5);
             }
@@ -110,7 +99,8 @@ final class LifeRecorder implements StepObserver {
     /** The events seen in the models; the end of the main sequence is the evolution's to add. */
     LifeEvents events() {
         double radiativeCoreEnd = Double.isNaN(radiativeCore) ? Double.NaN : fullyConvectiveSince;
-        return new LifeEvents(radiativeCore, radiativeCoreEnd, zams, coreOnset, coreEnd, lithiumHalved, Double.NaN);
+        return new LifeEvents(radiativeCore, radiativeCoreEnd, zams, convectiveCore.onset(), convectiveCore.end(),
+                lithiumHalved, Double.NaN);
     }
 
     /** Per recorded model: age, 1 on the main sequence, L_nuc/L, surface lithium, central deuterium. */
