@@ -25,6 +25,7 @@ import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.engine.state.BirthAbundances;
 import org.convgrid.engine.zams.ZeroAgeRequests;
 import org.convgrid.grids.HeliumLaw;
+import org.convgrid.grids.IronToMetals;
 import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.catalogue.CatalogueWriter;
 import org.convgrid.output.catalogue.OutcomeRows;
@@ -32,6 +33,7 @@ import org.convgrid.output.profile.ProfileColumns;
 import org.convgrid.output.profile.ProfileMeta;
 import org.convgrid.output.profile.ProfileRows;
 import org.convgrid.output.profile.ProfileWriter;
+import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParentCommand;
@@ -64,8 +66,27 @@ final class StarCommand implements Callable<Integer> {
     @Option(names = "--mass", required = true, paramLabel = "M", description = "Total mass, solar masses.")
     double massMsun;
 
-    @Option(names = "--z", required = true, paramLabel = "Z", description = "Initial metal mass fraction.")
-    double metals;
+    /** The composition: Z, or [Fe/H] turned into Z; exactly one (picocli says so when both or neither come). */
+    @ArgGroup(exclusive = true, multiplicity = "1")
+    MetalsGiven metalsGiven;
+
+    static final class MetalsGiven {
+        @Option(names = "--z", required = true, paramLabel = "Z", description = "Initial metal mass fraction.")
+        Double metals;
+
+        @Option(names = "--fe-h-dex", required = true, paramLabel = "DEX",
+                description = "Spectroscopic [Fe/H] instead of --z: Z of a solar-scaled mixture, Z/X = (Z/X)_sun "
+                        + "10^[Fe/H] with X = 1 - Y - Z (no alpha enhancement).")
+        Double ironDex;
+    }
+
+    @Option(names = "--solar-z-over-x", paramLabel = "RATIO",
+            description = "The Sun's Z/X that --fe-h-dex is measured against (default 0.0245, Grevesse & Noels "
+                    + "1993, the opacity tables' mixture).")
+    Double solarRatio;
+
+    /** Z, from --z or from --fe-h-dex. */
+    private double metals;
 
     @Option(names = "--y", paramLabel = "Y",
             description = "Initial helium mass fraction (default: Y = 0.2471 + 1.5 Z).")
@@ -137,6 +158,7 @@ final class StarCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
+        metals = metals();
         PhysicsOptions options = options();
         Age age = age();
         double y = helium != null ? helium : HeliumLaw.DEFAULT.helium(metals);
@@ -234,6 +256,27 @@ final class StarCommand implements Callable<Integer> {
         }
         return origin == AgeOrigin.BIRTH ? new Age.SinceBirth(gyr * Constants.GYR)
                 : new Age.SinceZeroAge(gyr * Constants.GYR);
+    }
+
+    /** Z from --z, or from --fe-h-dex with the star's helium (--y, or the default law, which itself depends on Z). */
+    private double metals() {
+        Double ironDex = metalsGiven.ironDex;
+        if (solarRatio != null && ironDex == null) {
+            throw new UsageException("--solar-z-over-x is the Sun's Z/X that --fe-h-dex is measured against; "
+                    + "with --z it means nothing");
+        }
+        if (ironDex == null) {
+            return metalsGiven.metals;
+        }
+        if (!(ironDex >= -5.0 && ironDex <= 1.0)) {
+            throw new UsageException("--fe-h-dex must be from -5 to 1 (got " + MessageNumbers.format(ironDex) + ")");
+        }
+        if (solarRatio != null && !(solarRatio >= 0.001 && solarRatio <= 0.1)) {
+            throw new UsageException("--solar-z-over-x must be from 0.001 to 0.1 (got "
+                    + MessageNumbers.format(solarRatio) + ")");
+        }
+        IronToMetals iron = solarRatio == null ? IronToMetals.GN93 : new IronToMetals(solarRatio);
+        return helium != null ? iron.metals(ironDex, helium) : iron.metals(ironDex, HeliumLaw.DEFAULT);
     }
 
     private PhysicsOptions options() {

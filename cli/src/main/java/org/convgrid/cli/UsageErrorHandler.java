@@ -8,11 +8,16 @@ import picocli.CommandLine.ParameterException;
 /** Bad usage: one line naming the problem and where to read more, exit code 2. */
 final class UsageErrorHandler implements IParameterExceptionHandler {
 
+    private static final String PICOCLI_PREFIX = "Error: ";
+
     @Override
     public int handleParseException(ParameterException ex, String[] args) {
         CommandLine cmd = ex.getCommandLine();
-        cmd.getErr().println("convgrid: " + TerminalText.clean(ex.getMessage()) + " (see '" + cmd.getCommandSpec().qualifiedName()
-                + " --help')");
+        // picocli starts the messages of option groups with "Error: ", which our "convgrid: " prefix already says
+        String message = ex.getMessage().startsWith(PICOCLI_PREFIX)
+                ? ex.getMessage().substring(PICOCLI_PREFIX.length()) : ex.getMessage();
+        cmd.getErr().println("convgrid: " + TerminalText.clean(message) + " (see '"
+                + cmd.getCommandSpec().qualifiedName() + " --help')");
         return ExitCodes.USAGE;
     }
 }

@@ -34,7 +34,8 @@ public final class GridSummary {
         lines.add("grid:          " + TerminalText.clean(g.title() + " (" + file.name() + ")"));
         lines.add("masses:        " + axis(g.massesMsun(), "Msun"));
         lines.add("metallicities: " + g.metallicities().size() + ": " + g.metallicities().stream()
-                .map(p -> "Z=" + MessageNumbers.format(p.z()) + " Y=" + MessageNumbers.format(p.y()))
+                .map(p -> (Double.isNaN(p.ironDex()) ? "" : "[Fe/H]=" + MessageNumbers.format(p.ironDex()) + " ")
+                        + "Z=" + MessageNumbers.format(p.z()) + " Y=" + MessageNumbers.format(p.y()))
                 .collect(Collectors.joining(", ")));
         boolean birth = g.ages().origin() == AgeOrigin.BIRTH;
         lines.add(g.ages().fractions()

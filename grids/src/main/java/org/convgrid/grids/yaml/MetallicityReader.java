@@ -4,19 +4,27 @@ import java.util.ArrayList;
 import java.util.List;
 import org.convgrid.grids.GridProblemKind;
 import org.convgrid.grids.HeliumLaw;
+import org.convgrid.grids.IronToMetals;
 import org.convgrid.grids.MetallicityPoint;
 import org.convgrid.grids.words.MessageNumbers;
 import org.snakeyaml.engine.v2.nodes.MappingNode;
 import org.snakeyaml.engine.v2.nodes.Node;
 
 /**
- * The {@code metallicity:} section: {@code z} (a value or a strictly increasing list) and the helium of each Z,
- * either by the law {@code helium: {primordial, enrichment}} or as an explicit {@code y} list of the same length.
- * Every composition must leave hydrogen: Y + Z &lt; 1.
+ * The {@code metallicity:} section: {@code z} (a value or a strictly increasing list), or instead {@code fe_h_dex}
+ * (spectroscopic [Fe/H], turned into Z for a solar-scaled mixture by {@link IronToMetals}, against
+ * {@code solar_z_over_x}, by default 0.0245), and the helium of each, either by the law
+ * {@code helium: {primordial, enrichment}} or as an explicit {@code y} list of the same length. Every composition
+ * must leave hydrogen: Y + Z &lt; 1.
  */
 final class MetallicityReader {
 
-    private static final List<String> KEYS = List.of("z", "y", "helium");
+    private static final String IRON = "fe_h_dex";
+    private static final String SOLAR_RATIO = "solar_z_over_x";
+    private static final List<String> KEYS = List.of("z", IRON, SOLAR_RATIO, "y", "helium");
+    /** Beyond the most metal-poor stars known and the most metal-rich; outside, Z leaves the opacity tables. */
+    private static final Range IRON_RANGE = Range.closed(-5.0, 1.0);
+    private static final Range SOLAR_RATIO_RANGE = Range.closed(0.001, 0.1);
     private static final List<String> HELIUM_KEYS = List.of("primordial", "enrichment");
     private static final Range Z_RANGE = new Range(0.0, true, MetallicityPoint.MAX_Z, false);
     private static final Range Y_RANGE = new Range(0.0, true, 1.0, false);
@@ -32,38 +40,90 @@ final class MetallicityReader {
             return null;
         }
         MappingFields fields = new MappingFields(map, "metallicity", KEYS, reader);
-        List<Double> zs = null;
-        if (fields.has("z")) {
-            zs = AxisValues.increasing(fields.value("z"), "z", "zs", Z_RANGE, reader);
+        boolean byIron = fields.has(IRON);
+        String axis = byIron ? IRON : "z";
+        List<Double> values = null;
+        if (fields.has("z") && byIron) {
+            reader.problem(map, GridProblemKind.CONFLICT,
+                    "metallicity takes 'z' or 'fe_h_dex' ([Fe/H], turned into Z), not both");
+        } else if (byIron) {
+            values = AxisValues.increasing(fields.value(IRON), IRON, "fe_h_dex values", IRON_RANGE, reader);
+        } else if (fields.has("z")) {
+            values = AxisValues.increasing(fields.value("z"), "z", "zs", Z_RANGE, reader);
         } else {
             reader.problem(map, GridProblemKind.MISSING_KEY,
-                    "metallicity needs 'z', the list of initial metal mass fractions");
+                    "metallicity needs 'z', the list of initial metal mass fractions (or 'fe_h_dex', [Fe/H] in dex)");
+        }
+        IronToMetals iron = IronToMetals.GN93;
+        if (fields.has(SOLAR_RATIO)) {
+            Double ratio = byIron ? ranged(fields.value(SOLAR_RATIO), SOLAR_RATIO, SOLAR_RATIO_RANGE, reader) : null;
+            if (!byIron) {
+                reader.problem(fields.value(SOLAR_RATIO), GridProblemKind.CONFLICT,
+                        "solar_z_over_x is the Sun's Z/X that fe_h_dex is measured against; with z it means nothing");
+            }
+            iron = ratio == null ? null : new IronToMetals(ratio);
         }
         if (fields.has("y") == fields.has("helium")) {
             reader.problem(map, GridProblemKind.CONFLICT,
                     "metallicity needs exactly one of 'helium' (primordial, enrichment) and 'y' (a list)");
             return null;
         }
+        List<Node> axisNodes = values == null ? null : reader.items(fields.value(axis), axis);
         if (fields.has("helium")) {
             HeliumLaw law = helium(fields.value("helium"), reader);
-            return zs == null || law == null ? null : byLaw(zs, law, reader.items(fields.value("z"), "z"), reader);
+            if (values == null || law == null || iron == null) {
+                return null;
+            }
+            List<Double> zs = byIron ? ironToMetals(values, iron, law, axisNodes, reader) : values;
+            return zs == null ? null : byLaw(zs, byIron ? values : null, law, axisNodes, reader);
         }
         List<Double> ys = AxisValues.any(fields.value("y"), "y", Y_RANGE, reader);
-        if (zs == null || ys == null) {
+        if (values == null || ys == null || iron == null) {
             return null;
         }
-        if (ys.size() != zs.size()) {
+        if (ys.size() != values.size()) {
             reader.problem(fields.value("y"), GridProblemKind.CONFLICT,
-                    "y has " + ys.size() + " values but z has " + zs.size());
+                    "y has " + ys.size() + " values but " + axis + " has " + values.size());
             return null;
         }
         List<Node> yNodes = reader.items(fields.value("y"), "y");
         List<MetallicityPoint> points = new ArrayList<>();
-        for (int i = 0; i < zs.size(); i++) {
-            points.add(point(zs.get(i), ys.get(i), yNodes.get(i), "y = " + NodeReader.written(yNodes.get(i)),
-                    reader));
+        for (int i = 0; i < values.size(); i++) {
+            double z = values.get(i);
+            if (byIron) {
+                z = iron.metals(values.get(i), ys.get(i));
+                if (!Z_RANGE.contains(z)) {
+                    reader.problem(axisNodes.get(i), GridProblemKind.OUT_OF_RANGE, tooRich(values.get(i), z, iron));
+                    points.add(null);
+                    continue;
+                }
+            }
+            points.add(point(z, ys.get(i), byIron ? values.get(i) : Double.NaN, yNodes.get(i),
+                    "y = " + NodeReader.written(yNodes.get(i)), reader));
         }
         return points.contains(null) ? null : points;
+    }
+
+    /** The Z of each [Fe/H] with the helium law's Y; null (with the problems recorded) when one leaves Z's range. */
+    private static List<Double> ironToMetals(List<Double> irons, IronToMetals iron, HeliumLaw law, List<Node> nodes,
+                                             NodeReader reader) {
+        List<Double> zs = new ArrayList<>();
+        boolean ok = true;
+        for (int i = 0; i < irons.size(); i++) {
+            double z = iron.metals(irons.get(i), law);
+            if (!Z_RANGE.contains(z)) {
+                reader.problem(nodes.get(i), GridProblemKind.OUT_OF_RANGE, tooRich(irons.get(i), z, iron));
+                ok = false;
+            }
+            zs.add(z);
+        }
+        return ok ? zs : null;
+    }
+
+    private static String tooRich(double ironDex, double z, IronToMetals iron) {
+        return "fe_h_dex = " + MessageNumbers.format(ironDex) + " gives Z = " + MessageNumbers.format(z)
+                + " (solar Z/X " + MessageNumbers.format(iron.solarMetalsToHydrogen()) + "), outside [0, "
+                + MessageNumbers.format(MetallicityPoint.MAX_Z) + ")";
     }
 
     private static HeliumLaw helium(Node node, NodeReader reader) {
@@ -82,7 +142,8 @@ final class MetallicityReader {
         return primordial == null || enrichment == null ? null : new HeliumLaw(primordial, enrichment);
     }
 
-    private static List<MetallicityPoint> byLaw(List<Double> zs, HeliumLaw law, List<Node> zNodes,
+    /** @param irons the [Fe/H] each Z came from, or null when the file gave Z */
+    private static List<MetallicityPoint> byLaw(List<Double> zs, List<Double> irons, HeliumLaw law, List<Node> zNodes,
                                                 NodeReader reader) {
         List<MetallicityPoint> points = new ArrayList<>();
         for (int i = 0; i < zs.size(); i++) {
@@ -90,18 +151,19 @@ final class MetallicityReader {
             String how = "Y = " + MessageNumbers.format(law.primordial()) + " + "
                     + MessageNumbers.format(law.enrichment()) + " * " + MessageNumbers.format(zs.get(i)) + " = "
                     + MessageNumbers.format(y);
-            points.add(point(zs.get(i), y, zNodes.get(i), how, reader));
+            points.add(point(zs.get(i), y, irons == null ? Double.NaN : irons.get(i), zNodes.get(i), how, reader));
         }
         return points.contains(null) ? null : points;
     }
 
-    private static MetallicityPoint point(double z, double y, Node at, String how, NodeReader reader) {
+    private static MetallicityPoint point(double z, double y, double ironDex, Node at, String how,
+                                          NodeReader reader) {
         if (!(y >= 0.0 && y + z < 1.0)) {
             reader.problem(at, GridProblemKind.OUT_OF_RANGE,
                     how + " with Z = " + MessageNumbers.format(z) + " leaves no hydrogen (need Y >= 0 and Y + Z < 1)");
             return null;
         }
-        return new MetallicityPoint(z, y);
+        return new MetallicityPoint(z, y, ironDex);
     }
 
     private static Double ranged(Node node, String what, Range range, NodeReader reader) {
