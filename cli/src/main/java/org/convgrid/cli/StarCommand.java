@@ -276,7 +276,14 @@ final class StarCommand implements Callable<Integer> {
                     + MessageNumbers.format(solarRatio) + ")");
         }
         IronToMetals iron = solarRatio == null ? IronToMetals.GN93 : new IronToMetals(solarRatio);
-        return helium != null ? iron.metals(ironDex, helium) : iron.metals(ironDex, HeliumLaw.DEFAULT);
+        double z = helium != null ? iron.metals(ironDex, helium) : iron.metals(ironDex, HeliumLaw.DEFAULT);
+        if (!(z >= 0 && z < 0.1)) {
+            // said "--z must be ... (got 0.2151143)" of an option the user did not give (found by a code review)
+            throw new UsageException("--fe-h-dex " + MessageNumbers.format(ironDex) + " gives Z = "
+                    + MessageNumbers.format(z) + " (solar Z/X " + MessageNumbers.format(iron.solarMetalsToHydrogen())
+                    + "), outside [0, 0.1)");
+        }
+        return z;
     }
 
     private PhysicsOptions options() {

@@ -64,5 +64,8 @@ class IronAbundanceTest {
         CliHarness.Execution far = run("star", "--mass", "1", "--fe-h-dex", "3");
         assertThat(far.code()).isEqualTo(ExitCodes.USAGE);
         assertThat(far.err()).contains("--fe-h-dex must be from -5 to 1 (got 3)");
+        CliHarness.Execution rich = run("star", "--mass", "1", "--fe-h-dex", "1", "--solar-z-over-x", "0.1");
+        assertThat(rich.code()).isEqualTo(ExitCodes.USAGE);
+        assertThat(rich.err()).contains("--fe-h-dex 1 gives Z = 0.2151143 (solar Z/X 0.1), outside [0, 0.1)");
     }
 }

@@ -225,7 +225,7 @@ public final class GridRun {
         FinishedRun[] run = new FinishedRun[1];
         Map<ModelStatus, Long> counts = new java.util.EnumMap<>(ModelStatus.class);
         interruption.finalWrite(() -> {
-            LifeEventLog.tidy(dir.layout().lifeEvents());
+            LifeEventLog.tidy(dir.layout().lifeEvents(), s.grid().spec().physics().overshootScheme());
             List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
             counts.putAll(RunFinishing.countByStatus(rows));
             double median = timed.medianSecondsPerModel();

@@ -34,15 +34,13 @@ public final class LifeEventLog {
     /**
      * Appends one star's row, writing the header first when the table is new. A table an earlier version began
      * (a run resumed after an upgrade: fewer columns) is first rewritten with today's header, so that the rows
-     * appended to it stay readable; its rows take the overshoot profile of the row appended (the run's grid, which
-     * the resume has checked is the table's, has one).
+     * appended to it stay readable (a column it lacked stays empty until {@link #tidy} fills what it can).
      */
     public synchronized void append(LifeEventRow row) throws IOException {
         if (!headerChecked) {
             headerChecked = true;
             if (Files.exists(file) && !firstLine(file).equals(LifeEventWriter.header().strip())) {
-                write(file, LifeEventReader.read(file).stream()
-                        .map(r -> r.withOvershootProfileIfUnknown(row.overshootProfile())).toList());
+                write(file, LifeEventReader.read(file));
             }
         }
         String text = (Files.exists(file) ? "" : LifeEventWriter.header()) + LifeEventWriter.line(row);
@@ -54,10 +52,15 @@ public final class LifeEventLog {
         }
     }
 
-    /** Rewrites a table in its final order; does nothing when there is none (no star evolved from birth). */
-    public static void tidy(Path file) throws IOException {
+    /**
+     * Rewrites a table in its final order, rows of an earlier version taking {@code overshootProfile}, the grid's
+     * (the run has checked the table is this grid's; its stars may all be done, so no row appended says it); does
+     * nothing when there is none (no star evolved from birth).
+     */
+    public static void tidy(Path file, OvershootScheme overshootProfile) throws IOException {
         if (Files.exists(file)) {
-            write(file, LifeEventReader.read(file));
+            write(file, LifeEventReader.read(file).stream()
+                    .map(r -> r.withOvershootProfileIfUnknown(overshootProfile)).toList());
         }
     }
 

@@ -7,6 +7,7 @@ import java.nio.file.Path;
 import java.util.List;
 import org.convgrid.engine.birth.LifeEvents;
 import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.output.events.LifeEventReader;
@@ -48,6 +49,26 @@ class LifeEventLogTest {
         assertThat(rows.get(0).trackEndMyr()).as("unknown to the older table").isNaN();
         assertThat(rows.get(2).centralHExhaustedMyr()).isEqualTo(1417.0);
         assertThat(rows.get(2).trackEndMyr()).isEqualTo(2000.0);
+    }
+
+    /**
+     * A run of an earlier version resumed with every star already done appends nothing; tidying at the end still
+     * names the grid's overshoot profile in its rows, as the catalogue's upgrade does (found by a code review: the
+     * two tables disagreed, and whether a star happened to be recomputed decided it).
+     */
+    @Test
+    void tidyingATableOfAnEarlierVersionFillsInTheGridsOvershootProfile(@TempDir Path dir) throws Exception {
+        Path file = dir.resolve("life_events.csv");
+        Files.writeString(file, """
+                track_id,mass_msun,z_init,y_init,mixing_length,overshoot_hp,radiative_core_myr,zams_myr,\
+                conv_core_onset_myr,conv_core_end_myr,li_halved_myr
+                p0-z00-m000,1.0,0.02,0.28,1.8,0.2,1.7,48.85,,,12.5
+                """);
+        LifeEventLog.tidy(file, OvershootScheme.MASS_RAMPED_STEP);
+        assertThat(Files.readAllLines(file).get(0)).isEqualTo(LifeEventWriter.header().strip());
+        assertThat(Files.readAllLines(file).get(1)).startsWith("p0-z00-m000,1.0,0.02,0.28,1.8,0.2,uniform-ramped,");
+        assertThat(LifeEventReader.read(file)).singleElement().satisfies(
+                r -> assertThat(r.overshootProfile()).isEqualTo(OvershootScheme.MASS_RAMPED_STEP));
     }
 
     @Test

@@ -101,7 +101,21 @@ final class MetallicityReader {
             points.add(point(z, ys.get(i), byIron ? values.get(i) : Double.NaN, yNodes.get(i),
                     "y = " + NodeReader.written(yNodes.get(i)), reader));
         }
-        return points.contains(null) ? null : points;
+        if (points.contains(null)) {
+            return null;
+        }
+        // with its own Y each, a higher [Fe/H] can give a lower Z; the axis must still increase in Z, as a z list must
+        for (int i = 1; byIron && i < points.size(); i++) {
+            if (!(points.get(i).z() > points.get(i - 1).z())) {
+                reader.problem(axisNodes.get(i), GridProblemKind.OUT_OF_RANGE, "fe_h_dex = "
+                        + MessageNumbers.format(values.get(i)) + " with y = " + MessageNumbers.format(ys.get(i))
+                        + " gives Z = " + MessageNumbers.format(points.get(i).z()) + ", not above the Z of the value"
+                        + " before it (" + MessageNumbers.format(points.get(i - 1).z()) + "): the compositions must"
+                        + " increase in Z");
+                return null;
+            }
+        }
+        return points;
     }
 
     /** The Z of each [Fe/H] with the helium law's Y; null (with the problems recorded) when one leaves Z's range. */

@@ -64,7 +64,11 @@ class IronAbundanceGridTest {
         assertThat(messages("{z: [0.02], solar_z_over_x: 0.0245, y: [0.27]}"))
                 .anyMatch(m -> m.contains("solar_z_over_x is the Sun's Z/X that fe_h_dex is measured against"));
         assertThat(messages("{fe_h_dex: [0.5, 3], y: [0.27, 0.27]}")).anyMatch(m -> m.contains("fe_h_dex"));
-        assertThat(messages("{fe_h_dex: [0.3, 0.1], y: [0.27, 0.27]}")).isNotEmpty();
+        assertThat(messages("{fe_h_dex: [0.3, 0.1], y: [0.27, 0.27]}"))
+                .anyMatch(m -> m.contains("fe_h_dex") && m.contains("increas"));
+        // each with its own Y, a higher [Fe/H] can give a lower Z (found by a code review)
+        assertThat(messages("{fe_h_dex: [0.0, 0.01], y: [0.25, 0.35]}")).anyMatch(m -> m.contains(
+                "fe_h_dex = 0.01 with y = 0.35 gives Z = 0.01589738, not above the Z of the value before it"));
         // 1 dex above a solar ratio of 0.1: Z/X = 1, so Z = 0.365 with Y = 0.27; Z must stay below 0.1
         assertThat(messages("{fe_h_dex: [1], solar_z_over_x: 0.1, y: [0.27]}"))
                 .anyMatch(m -> m.contains("fe_h_dex = 1 gives Z = 0.365") && m.contains("outside [0, 0.1)"));

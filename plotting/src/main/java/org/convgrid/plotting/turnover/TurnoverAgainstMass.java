@@ -2,7 +2,13 @@ package org.convgrid.plotting.turnover;
 
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.RefinedModelIds;
@@ -11,6 +17,9 @@ import org.convgrid.plotting.label.PhysicsKey;
 
 /** Builds the turnover-time-against-mass data of one metallicity and physics from the catalogue: a pure function. */
 public final class TurnoverAgainstMass {
+
+    /** The age index that ends a grid model's id. */
+    private static final Pattern AGE_INDEX = Pattern.compile("-a(\\d+)$");
 
     private TurnoverAgainstMass() {
     }
@@ -28,6 +37,9 @@ public final class TurnoverAgainstMass {
                                      List<TransitionRow> transitions) {
         List<CatalogueRow> gridRows = rows.stream()
                 .filter(r -> PhysicsKey.of(r).equals(physics) && !RefinedModelIds.isRefined(r.modelId())).toList();
+        if (eachStarItsOwnAge(gridRows.stream().filter(r -> r.zInit() == zInit).toList())) {
+            return new TurnoverData(physics, zInit, List.of(), List.of(), List.of());
+        }
         List<Double> ages = gridRows.stream().map(CatalogueRow::ageGyr).distinct().sorted().toList();
         List<TurnoverData.AgeLine> lines = new ArrayList<>();
         for (double age : ages) {
@@ -49,5 +61,22 @@ public final class TurnoverAgainstMass {
                 .map(t -> new TurnoverData.FullyConvectiveLimit(t.slice().ageGyr(), t.fullyConvective().massMsun()))
                 .sorted(Comparator.comparingDouble(TurnoverData.FullyConvectiveLimit::ageGyr)).toList();
         return new TurnoverData(physics, zInit, ages, lines, limits);
+    }
+
+    /**
+     * Whether the grid's ages are fractions of each star's main-sequence lifetime ({@code ms_fraction}): then one age
+     * of the grid (the {@code -aNN} of the model ids) is another age in Gyr for every star, and lines joining equal
+     * ages would hold one star each (found by a code review: one unconnected dot per star and age). Such grids get
+     * no turnover chart.
+     */
+    static boolean eachStarItsOwnAge(List<CatalogueRow> gridRows) {
+        Map<String, Set<Double>> agesByIndex = new HashMap<>();
+        for (CatalogueRow r : gridRows) {
+            Matcher m = AGE_INDEX.matcher(r.modelId());
+            if (m.find()) {
+                agesByIndex.computeIfAbsent(m.group(1), k -> new HashSet<>()).add(r.ageGyr());
+            }
+        }
+        return agesByIndex.values().stream().anyMatch(ages -> ages.size() > 1);
     }
 }

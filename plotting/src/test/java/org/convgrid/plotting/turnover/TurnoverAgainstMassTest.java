@@ -61,6 +61,22 @@ class TurnoverAgainstMassTest {
         return PhysicsKey.of(rows.get(0));
     }
 
+    /**
+     * ms_fraction grids: one age of the grid is another age in Gyr for every star, so lines by age would hold one
+     * star each; no chart (found by a code review).
+     */
+    @Test
+    void aGridOfMainSequenceFractionsGetsNoChart() {
+        List<CatalogueRow> fractions = List.of(TestRuns.row("p0-z00-m000-a00", 1.0, Z, 0.0247, false),
+                TestRuns.row("p0-z00-m001-a00", 1.1, Z, 0.0192, false),
+                TestRuns.row("p0-z00-m000-a01", 1.0, Z, 4.96, false),
+                TestRuns.row("p0-z00-m001-a01", 1.1, Z, 3.1, false));
+        assertThat(TurnoverAgainstMass.eachStarItsOwnAge(fractions)).isTrue();
+        assertThat(TurnoverAgainstMass.build(defaultPhysics(fractions), Z, fractions, List.of()).modelCount())
+                .isZero();
+        assertThat(TurnoverAgainstMass.eachStarItsOwnAge(rows())).isFalse();
+    }
+
     @Test
     void oneLinePerAgeOfTheGridsOkModelsWithATurnoverTime() {
         List<CatalogueRow> rows = rows();
