@@ -17,6 +17,9 @@ import org.convgrid.plotting.label.SliceLabels;
 public final class LogAxis {
 
     private static final int[] ROUND_MANTISSAS = {1, 2, 3, 5};
+    private static final int[] EVERY_MANTISSA = {1, 2, 3, 4, 5, 6, 7, 8, 9};
+    /** Fewer round values than this inside an axis, and every mantissa is offered as a label. */
+    private static final int FEWEST_LABELS = 3;
     private static final Color TRANSPARENT = new Color(0, 0, 0, 0);
 
     private LogAxis() {
@@ -65,9 +68,23 @@ public final class LogAxis {
 
     /** The round values 1, 2, 3 and 5 x 10^n in [min, max]. */
     public static List<Double> roundValues(double min, double max) {
+        return valuesWith(ROUND_MANTISSAS, min, max);
+    }
+
+    /**
+     * {@link #roundValues}, or every 1..9 x 10^n in [min, max] when fewer than {@link #FEWEST_LABELS} round values
+     * fall inside: a range of 0.7-1.3 Msun had the one label "1" (found by a code review); labels that would touch
+     * are left out when painted.
+     */
+    public static List<Double> labelValues(double min, double max) {
+        List<Double> round = roundValues(min, max);
+        return round.size() >= FEWEST_LABELS ? round : valuesWith(EVERY_MANTISSA, min, max);
+    }
+
+    private static List<Double> valuesWith(int[] mantissas, double min, double max) {
         List<Double> ticks = new ArrayList<>();
         for (int decade = (int) Math.floor(Math.log10(min)); decade <= (int) Math.ceil(Math.log10(max)); decade++) {
-            for (int m : ROUND_MANTISSAS) {
+            for (int m : mantissas) {
                 double value = Double.parseDouble(m + "e" + decade);
                 if (value >= min && value <= max) {
                     ticks.add(value);

@@ -1,6 +1,9 @@
 package org.convgrid.plotting.style;
 
-/** The logarithmic stellar-mass axis shared by the mass charts, labelled at 1, 2, 3 and 5 x 10^n. */
+/**
+ * The logarithmic stellar-mass axis shared by the mass charts, labelled at 1, 2, 3 and 5 x 10^n, or at every
+ * 1..9 x 10^n when the range holds fewer than three of those ({@link LogAxis#labelValues}).
+ */
 public final class MassAxis {
 
     /** Axis title with unit. */
@@ -11,6 +14,6 @@ public final class MassAxis {
 
     /** Makes the x axis logarithmic over [min, max] solar masses (needs a y-axis minimum set). */
     public static void apply(StyledChart chart, double min, double max) {
-        LogAxis.applyX(chart, min, max, LogAxis.roundValues(min, max));
+        LogAxis.applyX(chart, min, max, LogAxis.labelValues(min, max));
     }
 }
