@@ -170,6 +170,12 @@ final class StarCommand implements Callable<Integer> {
         if (profile != null) {
             OutputTargets.requireWritableFile("--profile", main.context().resolve(profile));
         }
+        if (metalsGiven.ironDex != null) {
+            // the tables give Z and Y only: say on the error stream what the [Fe/H] became
+            main.err().println("convgrid: [Fe/H] " + MessageNumbers.format(metalsGiven.ironDex) + " against solar Z/X "
+                    + MessageNumbers.format(solarRatio == null ? IronToMetals.GN93.solarMetalsToHydrogen() : solarRatio)
+                    + ": Z = " + MessageNumbers.format(metals) + ", Y = " + MessageNumbers.format(y));
+        }
         TestedRange.print(TestedRange.warnings(massMsun, metals, y, age), main.err());
         TestedRange.print(OvershootAdvice.warnings(massMsun, age, options), main.err());
         String id = String.format(java.util.Locale.ROOT, "star-m%.4f-z%.5f", massMsun, metals);

@@ -38,6 +38,7 @@ class IronAbundanceTest {
 
         CliHarness.Execution star = run("star", "--mass", "1", "--fe-h-dex", "0.1", "--format", "csv");
         assertThat(star.code()).as(star.err()).isZero();
+        assertThat(star.err()).contains("convgrid: [Fe/H] 0.1 against solar Z/X 0.0245: Z = 0.02155975, Y = ");
         List<String> starLines = star.out().lines().filter(l -> !l.startsWith("#")).toList();
         List<String> header = List.of(starLines.get(0).split(","));
         String[] fromStar = starLines.get(1).split(",", -1);
