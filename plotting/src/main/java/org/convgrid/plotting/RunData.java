@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueReader;
@@ -101,20 +102,26 @@ public record RunData(List<CatalogueRow> catalogue, List<TransitionRow> transiti
     /** Reads a run directory; catalogue.ecsv must exist, everything else is optional. */
     public static RunData read(Path runDir) throws IOException {
         RunLayout layout = new RunLayout(runDir);
-        List<CatalogueRow> catalogue = CatalogueReader.readWithZones(layout.catalogue(), layout.zones());
+        Path manifestFile = layout.manifest();
+        RunManifest manifest = Files.isRegularFile(manifestFile)
+                ? RunManifestReader.read(Files.readString(manifestFile, StandardCharsets.UTF_8)) : null;
+        // tables written before they named the overshoot profile: the run's one profile, from its manifest, so that
+        // the charts' words agree with the report's physics rows
+        OvershootScheme runProfile = manifest == null || manifest.physics().isEmpty() ? null
+                : manifest.physics().get(0).overshootScheme();
+        List<CatalogueRow> catalogue = CatalogueReader.readWithZones(layout.catalogue(), layout.zones()).stream()
+                .map(r -> runProfile == null ? r : r.withOvershootProfileIfUnknown(runProfile)).toList();
         Path transitionsFile = layout.transitions();
         boolean fromFile = Files.isRegularFile(transitionsFile);
         List<TransitionRow> transitions;
         if (fromFile) {
             try (Reader in = Files.newBufferedReader(transitionsFile, StandardCharsets.UTF_8)) {
-                transitions = TransitionReader.read(in);
+                transitions = TransitionReader.read(in).stream()
+                        .map(t -> runProfile == null ? t : t.withOvershootProfileIfUnknown(runProfile)).toList();
             }
         } else {
             transitions = TransitionFinder.withDefaults().find(catalogue);
         }
-        Path manifestFile = layout.manifest();
-        RunManifest manifest = Files.isRegularFile(manifestFile)
-                ? RunManifestReader.read(Files.readString(manifestFile, StandardCharsets.UTF_8)) : null;
         List<Track> tracks = TrackReader.readAll(layout.tracks());
         Map<String, TrackTimeline> timelines = new HashMap<>();
         for (Track t : tracks) {

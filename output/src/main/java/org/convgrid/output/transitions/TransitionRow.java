@@ -2,6 +2,7 @@ package org.convgrid.output.transitions;
 
 import java.util.List;
 import java.util.Objects;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.output.Span;
 
 /**
@@ -52,5 +53,19 @@ public record TransitionRow(Slice slice, double yInit, TransitionEstimate fullyC
     public TransitionRow withTolerance(double tolerance) {
         return new TransitionRow(slice, yInit, fullyConvective, convCoreOnset, transientCore, method,
                 method == TransitionMethod.REFINED ? tolerance : Double.NaN, notes);
+    }
+
+    /**
+     * The same row with {@code profile} as its slice's overshoot profile when the slice names none (a table written
+     * before the column, read with its run's manifest).
+     */
+    public TransitionRow withOvershootProfileIfUnknown(OvershootScheme profile) {
+        if (slice.overshootProfile() != null) {
+            return this;
+        }
+        Slice named = new Slice(slice.zInit(), slice.ageGyr(), slice.mixingLength(), slice.overshootHp(),
+                slice.criterion(), slice.opacityScale(), profile);
+        return new TransitionRow(named, yInit, fullyConvective, convCoreOnset, transientCore, method, toleranceMsun,
+                notes);
     }
 }
