@@ -73,7 +73,7 @@ final class StarReport {
         line(out, "convective envelope, base", row.envCzBaseRadiusFrac(), "r/R");
         line(out, "convective envelope, mass", row.envCzMassMsun(), "Msun");
         line(out, "turnover time, local", row.turnoverTimeDays(), "days");
-        line(out, "turnover time, integrated", row.turnoverTimeGlobalDays(), "days");
+        line(out, "turnover time, global", row.turnoverTimeGlobalDays(), "days");
         out.println();
         // the zones as zones.csv lists them, with their kind (a review could not tell a central zone below the core
         // threshold from a core, nor see the mass of a surface zone whose m/M ends both print 1.000000)

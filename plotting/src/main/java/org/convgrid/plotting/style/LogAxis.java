@@ -16,8 +16,12 @@ import org.convgrid.plotting.label.SliceLabels;
  */
 public final class LogAxis {
 
-    private static final int[] ROUND_MANTISSAS = {1, 2, 3, 5};
-    private static final int[] EVERY_MANTISSA = {1, 2, 3, 4, 5, 6, 7, 8, 9};
+    private static final String[] ROUND_MANTISSAS = {"1", "2", "3", "5"};
+    private static final String[] EVERY_MANTISSA = {"1", "2", "3", "4", "5", "6", "7", "8", "9"};
+    private static final String[] FINE_MANTISSAS = {"1", "1.1", "1.2", "1.3", "1.4", "1.5", "1.6", "1.7", "1.8", "1.9",
+        "2", "3", "4", "5", "6", "7", "8", "9"};
+    /** An axis spanning less than this factor gets the fine labels. */
+    private static final double NARROW_RANGE = 3.0;
     /** Fewer round values than this inside an axis, and every mantissa is offered as a label. */
     private static final int FEWEST_LABELS = 3;
     private static final Color TRANSPARENT = new Color(0, 0, 0, 0);
@@ -72,19 +76,24 @@ public final class LogAxis {
     }
 
     /**
-     * {@link #roundValues}, or every 1..9 x 10^n in [min, max] when fewer than {@link #FEWEST_LABELS} round values
-     * fall inside: a range of 0.7-1.3 Msun had the one label "1" (found by a code review); labels that would touch
-     * are left out when painted.
+     * Labels for an axis over [min, max]: {@link #roundValues}; on a range narrower than a factor
+     * {@link #NARROW_RANGE}, also 1.1..1.9 x 10^n and every 1..9 x 10^n, so that a 1.0-1.4 Msun axis is labelled above
+     * 1 too; and every 1..9 x 10^n whenever fewer than {@link #FEWEST_LABELS} round values fall inside. A range of
+     * 0.7-1.3 Msun had the one label "1" (found by a code review and a planet-host user's review); labels that would
+     * touch are left out when painted.
      */
     public static List<Double> labelValues(double min, double max) {
+        if (max / min < NARROW_RANGE) {
+            return valuesWith(FINE_MANTISSAS, min, max);
+        }
         List<Double> round = roundValues(min, max);
         return round.size() >= FEWEST_LABELS ? round : valuesWith(EVERY_MANTISSA, min, max);
     }
 
-    private static List<Double> valuesWith(int[] mantissas, double min, double max) {
+    private static List<Double> valuesWith(String[] mantissas, double min, double max) {
         List<Double> ticks = new ArrayList<>();
         for (int decade = (int) Math.floor(Math.log10(min)); decade <= (int) Math.ceil(Math.log10(max)); decade++) {
-            for (int m : mantissas) {
+            for (String m : mantissas) {
                 double value = Double.parseDouble(m + "e" + decade);
                 if (value >= min && value <= max) {
                     ticks.add(value);
