@@ -36,6 +36,7 @@ import org.convgrid.plotting.trend.TransitionTrendRenderer;
 import org.convgrid.plotting.turnover.TurnoverAgainstMass;
 import org.convgrid.plotting.turnover.TurnoverAgainstMassRenderer;
 import org.convgrid.plotting.turnover.TurnoverData;
+import org.convgrid.plotting.turnover.TurnoverPoint;
 import org.convgrid.plotting.zones.ZoneMap;
 import org.convgrid.plotting.zones.ZoneMapRenderer;
 
@@ -45,9 +46,10 @@ import org.convgrid.plotting.zones.ZoneMapRenderer;
  * diagram ({@code hr_<physics>.png}) and, when the run has transitions, the transition masses against Z
  * ({@code transitions-vs-z_<physics>.png}); when the run has several ages, the transition masses against age
  * ({@code transitions-vs-age_<physics>.png}); per Z and physics, when at least two models have a turnover time, the
- * convective turnover times against mass ({@code turnover-vs-mass_z<Z>_<physics>.png}); for a bounded selection of the evolution tracks in tracks/
- * ({@link AgeChartSelection}), their convective zones against age ({@code zones-age_m<mass>_z<Z>_<physics>.png}). With tracks, the HR diagrams also
- * show the tracks and the isochrones at the grid's ages.
+ * convective turnover times against mass ({@code turnover-vs-mass_z<Z>_<physics>.png}); for a bounded selection of
+ * the evolution tracks in tracks/ ({@link AgeChartSelection}), their convective zones against age
+ * ({@code zones-age_m<mass>_z<Z>_<physics>.png}). With tracks, the HR diagrams also show the tracks and the
+ * isochrones at the grid's ages.
  */
 public final class RunMaps {
 
@@ -227,15 +229,23 @@ public final class RunMaps {
                 }
                 entries.add(new MapEntry(TURNOVER_FILES + "_z" + SliceLabels.number(z) + "_" + p.fileStem() + ".png",
                         MapEntry.TURNOVER, groupOf(z, p, run),
-                        "Convective turnover times against mass, one colour per age: local (solid with markers, "
-                                + "hollow where the star is fully convective) and global (dashed), for the grid's "
-                                + "models with a turnover time; dotted lines mark each age's fully convective limit. "
-                                + "Z = " + SliceLabels.number(z) + ", " + p.describe() + ". Model values "
-                                + "(turnover_time_days, turnover_time_global_days), not empirical ones.",
+                        turnoverCaption(data),
                         () -> TurnoverAgainstMassRenderer.render(data)));
             }
         }
         return entries;
+    }
+
+    /** The report's caption of a turnover chart, naming only the marks it has (hollow markers, dotted limits). */
+    static String turnoverCaption(TurnoverData data) {
+        boolean hollow = data.lines().stream().flatMap(l -> l.points().stream())
+                .anyMatch(TurnoverPoint::fullyConvective);
+        return "Convective turnover times against mass, one colour per age: local (solid with markers"
+                + (hollow ? ", hollow where the star is fully convective" : "") + ") and global (dashed), for the "
+                + "grid's models with a turnover time" + (data.limits().isEmpty() ? ""
+                : "; dotted lines mark each age's fully convective limit") + ". Z = " + SliceLabels.number(data.zInit())
+                + ", " + data.physics().describe() + ". Model values (turnover_time_days, "
+                + "turnover_time_global_days), not empirical ones.";
     }
 
     /** The diagram if it has a model to show; otherwise {@link NothingToDraw}, naming the statuses it had instead. */
