@@ -19,6 +19,10 @@ public final class OvershootWords {
      * 0.016 (decaying)".
      */
     public static String describe(PhysicsOptions p) {
+        if (p.overshoot() == 0.0) {
+            // no length is the same star under every profile, as the charts say it
+            return "no overshoot";
+        }
         String length = MessageNumbers.format(p.overshoot());
         return switch (p.overshootScheme()) {
             case STEP -> "overshoot " + length + " Hp";

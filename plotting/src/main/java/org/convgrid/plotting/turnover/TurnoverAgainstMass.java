@@ -10,6 +10,7 @@ import java.util.Set;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.convgrid.engine.convection.StructureClass;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.RefinedModelIds;
 import org.convgrid.output.transitions.TransitionRow;
@@ -38,7 +39,7 @@ public final class TurnoverAgainstMass {
         List<CatalogueRow> gridRows = rows.stream()
                 .filter(r -> PhysicsKey.of(r).equals(physics) && !RefinedModelIds.isRefined(r.modelId())).toList();
         if (eachStarItsOwnAge(gridRows.stream().filter(r -> r.zInit() == zInit).toList())) {
-            return new TurnoverData(physics, zInit, List.of(), List.of(), List.of());
+            return new TurnoverData(physics, zInit, List.of(), List.of(), List.of(), 0);
         }
         List<Double> ages = gridRows.stream().map(CatalogueRow::ageGyr).distinct().sorted().toList();
         List<TurnoverData.AgeLine> lines = new ArrayList<>();
@@ -60,7 +61,9 @@ public final class TurnoverAgainstMass {
                 .filter(t -> t.fullyConvective().found() && Double.isFinite(t.fullyConvective().massMsun()))
                 .map(t -> new TurnoverData.FullyConvectiveLimit(t.slice().ageGyr(), t.fullyConvective().massMsun()))
                 .sorted(Comparator.comparingDouble(TurnoverData.FullyConvectiveLimit::ageGyr)).toList();
-        return new TurnoverData(physics, zInit, ages, lines, limits);
+        long pastMainSequence = gridRows.stream()
+                .filter(r -> r.zInit() == zInit && r.status() == ModelStatus.PAST_MAIN_SEQUENCE).count();
+        return new TurnoverData(physics, zInit, ages, lines, limits, pastMainSequence);
     }
 
     /**

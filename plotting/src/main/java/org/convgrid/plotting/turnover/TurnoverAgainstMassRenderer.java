@@ -53,6 +53,12 @@ public final class TurnoverAgainstMassRenderer {
     private TurnoverAgainstMassRenderer() {
     }
 
+    /** Says why an age's line stops short of the highest masses (a planet-host user's review: they vanished). */
+    static String pastMainSequenceNote(long models) {
+        return models + (models == 1 ? " model lies" : " models lie") + " past the main sequence at its age: not"
+                + " drawn, so a line may stop short of the highest masses.";
+    }
+
     /** The chart of one metallicity's turnover times; {@code data} must hold at least one model. */
     public static StyledChart render(TurnoverData data) {
         StyledChart chart = ChartStyle.newChart(TITLE + SliceLabels.number(data.zInit()), data.physics().describe(),
@@ -69,6 +75,9 @@ public final class TurnoverAgainstMassRenderer {
         LogAxis.applyY(chart, yMin, yMax, LogAxis.roundValues(yMin, yMax));
         MassAxis.apply(chart, masses.getMin() / MASS_PAD_FACTOR, masses.getMax() * MASS_PAD_FACTOR);
         List<String> notes = new ArrayList<>(List.of(DEFINITION_NOTE, GRID_ONLY_NOTE));
+        if (data.pastMainSequence() > 0) {
+            notes.add(pastMainSequenceNote(data.pastMainSequence()));
+        }
         ChartNotes.addRightOfPlot(chart, notes);
 
         // Legend first, in its order: each age (a copy of its local line, covered later by the line itself), then

@@ -12,9 +12,11 @@ import org.convgrid.plotting.label.PhysicsKey;
  *     that an age looks the same on the charts of every Z, even where it has no line
  * @param lines one line per age that has a model to show, youngest first
  * @param limits the fully convective limit of each age that has a line, where transitions.csv found one
+ * @param pastMainSequence grid models of this metallicity and physics past the main sequence at their age: not drawn,
+ *     so a line stops short of the highest masses
  */
 public record TurnoverData(PhysicsKey physics, double zInit, List<Double> ages, List<AgeLine> lines,
-                           List<FullyConvectiveLimit> limits) {
+                           List<FullyConvectiveLimit> limits, long pastMainSequence) {
 
     public TurnoverData {
         ages = List.copyOf(ages);

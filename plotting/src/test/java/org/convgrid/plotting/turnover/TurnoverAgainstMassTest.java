@@ -77,6 +77,18 @@ class TurnoverAgainstMassTest {
         assertThat(TurnoverAgainstMass.eachStarItsOwnAge(rows())).isFalse();
     }
 
+    /** A line that stops short because its highest masses are past the main sequence says so (planet-host review). */
+    @Test
+    void modelsPastTheMainSequenceAreCountedForTheNote() {
+        // TestRuns' lifetimes are 10 M^-2.5 Gyr: at 4 Gyr 1.8 Msun (2.3 Gyr) is past it, 1 Msun (10 Gyr) is not
+        List<CatalogueRow> rows = TestRuns.rows(MASSES, new double[] {Z}, new double[] {4.0});
+        TurnoverData data = TurnoverAgainstMass.build(defaultPhysics(rows), Z, rows, List.of());
+        assertThat(data.pastMainSequence()).isEqualTo(1);
+        assertThat(TurnoverAgainstMassRenderer.pastMainSequenceNote(1))
+                .startsWith("1 model lies past the main sequence");
+        assertThat(TurnoverAgainstMass.build(defaultPhysics(rows()), Z, rows(), List.of()).pastMainSequence()).isZero();
+    }
+
     @Test
     void oneLinePerAgeOfTheGridsOkModelsWithATurnoverTime() {
         List<CatalogueRow> rows = rows();
