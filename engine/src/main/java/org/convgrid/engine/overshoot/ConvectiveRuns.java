@@ -25,13 +25,19 @@ final class ConvectiveRuns {
                 k++;
                 continue;
             }
-            int end = k;
-            while (end + 1 < n && p.convective(end + 1)) {
-                end++;
-            }
+            int end = lastOfZone(p, k);
             zone.accept(k, end);
             k = end + 1;
         }
+    }
+
+    /** The last point of the convective zone that starts at the convective point {@code first}. */
+    static int lastOfZone(OvershootProfile p, int first) {
+        int end = first;
+        while (end + 1 < p.size() && p.convective(end + 1)) {
+            end++;
+        }
+        return end;
     }
 
     /** Fraction of interval (k, k + 1) at which the stability excess changes sign (0.5 if it cannot tell). */

@@ -61,15 +61,11 @@ public record StepOvershoot(double alpha) implements Overshoot {
     /** The edge above the central zone, as {@link #mixedPoints} mixes to it; NaN without one (see the interface). */
     @Override
     public double mixedCoreTop(OvershootProfile profile) {
-        int n = profile.size();
         if (!(alpha > 0.0) || !profile.convective(0)) {
             return Double.NaN;
         }
-        int end = 0;
-        while (end + 1 < n && profile.convective(end + 1)) {
-            end++;
-        }
-        return end == n - 1 ? Double.NaN
+        int end = ConvectiveRuns.lastOfZone(profile, 0);
+        return end == profile.size() - 1 ? Double.NaN
                 : edgeAbove(profile, end, ConvectiveRuns.boundaryRadius(profile, end));
     }
 
