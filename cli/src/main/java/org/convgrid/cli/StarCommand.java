@@ -26,6 +26,7 @@ import org.convgrid.engine.state.BirthAbundances;
 import org.convgrid.engine.zams.ZeroAgeRequests;
 import org.convgrid.grids.HeliumLaw;
 import org.convgrid.grids.IronToMetals;
+import org.convgrid.grids.MetallicityPoint;
 import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.catalogue.CatalogueWriter;
 import org.convgrid.output.catalogue.OutcomeRows;
@@ -173,8 +174,8 @@ final class StarCommand implements Callable<Integer> {
         if (metalsGiven.ironDex != null) {
             // the tables give Z and Y only: say on the error stream what the [Fe/H] became
             main.err().println("convgrid: [Fe/H] " + MessageNumbers.format(metalsGiven.ironDex) + " against solar Z/X "
-                    + MessageNumbers.format(solarRatio == null ? IronToMetals.GN93.solarMetalsToHydrogen() : solarRatio)
-                    + ": Z = " + MessageNumbers.format(metals) + ", Y = " + MessageNumbers.format(y));
+                    + MessageNumbers.format(iron().solarMetalsToHydrogen()) + ": Z = " + MessageNumbers.format(metals)
+                    + ", Y = " + MessageNumbers.format(y));
         }
         TestedRange.print(TestedRange.warnings(massMsun, metals, y, age), main.err());
         TestedRange.print(OvershootAdvice.warnings(massMsun, age, options), main.err());
@@ -274,22 +275,30 @@ final class StarCommand implements Callable<Integer> {
         if (ironDex == null) {
             return metalsGiven.metals;
         }
-        if (!(ironDex >= -5.0 && ironDex <= 1.0)) {
-            throw new UsageException("--fe-h-dex must be from -5 to 1 (got " + MessageNumbers.format(ironDex) + ")");
+        // the grid file's ranges (MetallicityReader)
+        if (!(ironDex >= IronToMetals.MIN_IRON_DEX && ironDex <= IronToMetals.MAX_IRON_DEX)) {
+            throw new UsageException("--fe-h-dex must be from " + MessageNumbers.format(IronToMetals.MIN_IRON_DEX)
+                    + " to " + MessageNumbers.format(IronToMetals.MAX_IRON_DEX) + " (got "
+                    + MessageNumbers.format(ironDex) + ")");
         }
-        if (solarRatio != null && !(solarRatio >= 0.001 && solarRatio <= 0.1)) {
-            throw new UsageException("--solar-z-over-x must be from 0.001 to 0.1 (got "
-                    + MessageNumbers.format(solarRatio) + ")");
+        if (solarRatio != null
+                && !(solarRatio >= IronToMetals.MIN_SOLAR_RATIO && solarRatio <= IronToMetals.MAX_SOLAR_RATIO)) {
+            throw new UsageException("--solar-z-over-x must be from " + MessageNumbers.format(
+                    IronToMetals.MIN_SOLAR_RATIO) + " to " + MessageNumbers.format(IronToMetals.MAX_SOLAR_RATIO)
+                    + " (got " + MessageNumbers.format(solarRatio) + ")");
         }
-        IronToMetals iron = solarRatio == null ? IronToMetals.GN93 : new IronToMetals(solarRatio);
+        IronToMetals iron = iron();
         double z = helium != null ? iron.metals(ironDex, helium) : iron.metals(ironDex, HeliumLaw.DEFAULT);
-        if (!(z >= 0 && z < 0.1)) {
+        if (!(z >= 0 && z < MetallicityPoint.MAX_Z)) {
             // said "--z must be ... (got 0.2151143)" of an option the user did not give (found by a code review)
-            throw new UsageException("--fe-h-dex " + MessageNumbers.format(ironDex) + " gives Z = "
-                    + MessageNumbers.format(z) + " (solar Z/X " + MessageNumbers.format(iron.solarMetalsToHydrogen())
-                    + "), outside [0, 0.1)");
+            throw new UsageException("--fe-h-dex " + MessageNumbers.format(ironDex) + " " + iron.zOutsideRange(z));
         }
         return z;
+    }
+
+    /** The solar Z/X [Fe/H] is measured against: --solar-z-over-x, else the default. */
+    private IronToMetals iron() {
+        return solarRatio == null ? IronToMetals.GN93 : new IronToMetals(solarRatio);
     }
 
     private PhysicsOptions options() {

@@ -1,6 +1,7 @@
 package org.convgrid.grids;
 
 import org.convgrid.engine.calibration.CalibrationSettings;
+import org.convgrid.grids.words.MessageNumbers;
 
 /**
  * The initial metal mass fraction Z of a star whose spectroscopic [Fe/H] is given, for a solar-scaled mixture:
@@ -17,6 +18,12 @@ public record IronToMetals(double solarMetalsToHydrogen) {
 
     /** [Fe/H] measured against the present solar surface Z/X of Grevesse &amp; Noels (1993), 0.0245. */
     public static final IronToMetals GN93 = new IronToMetals(CalibrationSettings.GN93_METALS_TO_HYDROGEN);
+    /** The [Fe/H] accepted, dex: beyond the most metal-poor and metal-rich stars known. */
+    public static final double MIN_IRON_DEX = -5.0;
+    public static final double MAX_IRON_DEX = 1.0;
+    /** The solar Z/X accepted as the reference. */
+    public static final double MIN_SOLAR_RATIO = 0.001;
+    public static final double MAX_SOLAR_RATIO = 0.1;
 
     public IronToMetals {
         if (!(solarMetalsToHydrogen > 0.0 && Double.isFinite(solarMetalsToHydrogen))) {
@@ -33,6 +40,15 @@ public record IronToMetals(double solarMetalsToHydrogen) {
     public double metals(double ironDex, HeliumLaw law) {
         double ratio = metalsToHydrogen(ironDex);
         return ratio * (1.0 - law.primordial()) / (1.0 + ratio * (1.0 + law.enrichment()));
+    }
+
+    /**
+     * Why an [Fe/H] was refused whose Z left the accepted range: "gives Z = 0.2151143 (solar Z/X 0.1), outside [0,
+     * 0.1)", after the option or key that gave it.
+     */
+    public String zOutsideRange(double z) {
+        return "gives Z = " + MessageNumbers.format(z) + " (solar Z/X " + MessageNumbers.format(solarMetalsToHydrogen)
+                + "), outside [0, " + MessageNumbers.format(MetallicityPoint.MAX_Z) + ")";
     }
 
     /** Z for [Fe/H] at the helium mass fraction {@code helium}. */

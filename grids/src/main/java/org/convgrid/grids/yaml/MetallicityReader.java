@@ -22,9 +22,9 @@ final class MetallicityReader {
     private static final String IRON = "fe_h_dex";
     private static final String SOLAR_RATIO = "solar_z_over_x";
     private static final List<String> KEYS = List.of("z", IRON, SOLAR_RATIO, "y", "helium");
-    /** Beyond the most metal-poor stars known and the most metal-rich; outside, Z leaves the opacity tables. */
-    private static final Range IRON_RANGE = Range.closed(-5.0, 1.0);
-    private static final Range SOLAR_RATIO_RANGE = Range.closed(0.001, 0.1);
+    private static final Range IRON_RANGE = Range.closed(IronToMetals.MIN_IRON_DEX, IronToMetals.MAX_IRON_DEX);
+    private static final Range SOLAR_RATIO_RANGE = Range.closed(IronToMetals.MIN_SOLAR_RATIO,
+            IronToMetals.MAX_SOLAR_RATIO);
     private static final List<String> HELIUM_KEYS = List.of("primordial", "enrichment");
     private static final Range Z_RANGE = new Range(0.0, true, MetallicityPoint.MAX_Z, false);
     private static final Range Y_RANGE = new Range(0.0, true, 1.0, false);
@@ -74,8 +74,9 @@ final class MetallicityReader {
             if (values == null || law == null || iron == null) {
                 return null;
             }
-            List<Double> zs = byIron ? ironToMetals(values, iron, law, axisNodes, reader) : values;
-            return zs == null ? null : byLaw(zs, byIron ? values : null, law, axisNodes, reader);
+            List<Double> zs = byIron ? ironToMetals(values, iron, law, null, axisNodes, reader) : values;
+            // only the converted list can hold a null (a Z out of range, recorded)
+            return byIron && zs.contains(null) ? null : byLaw(zs, byIron ? values : null, law, axisNodes, reader);
         }
         List<Double> ys = AxisValues.any(fields.value("y"), "y", Y_RANGE, reader);
         if (values == null || ys == null || iron == null) {
@@ -87,19 +88,12 @@ final class MetallicityReader {
             return null;
         }
         List<Node> yNodes = reader.items(fields.value("y"), "y");
+        List<Double> zs = byIron ? ironToMetals(values, iron, null, ys, axisNodes, reader) : values;
         List<MetallicityPoint> points = new ArrayList<>();
         for (int i = 0; i < values.size(); i++) {
-            double z = values.get(i);
-            if (byIron) {
-                z = iron.metals(values.get(i), ys.get(i));
-                if (!Z_RANGE.contains(z)) {
-                    reader.problem(axisNodes.get(i), GridProblemKind.OUT_OF_RANGE, tooRich(values.get(i), z, iron));
-                    points.add(null);
-                    continue;
-                }
-            }
-            points.add(point(z, ys.get(i), byIron ? values.get(i) : Double.NaN, yNodes.get(i),
-                    "y = " + NodeReader.written(yNodes.get(i)), reader));
+            // a Z outside its range is already recorded; every other composition is still checked, all at once
+            points.add(zs.get(i) == null ? null : point(zs.get(i), ys.get(i), byIron ? values.get(i) : Double.NaN,
+                    yNodes.get(i), "y = " + NodeReader.written(yNodes.get(i)), reader));
         }
         if (points.contains(null)) {
             return null;
@@ -118,26 +112,24 @@ final class MetallicityReader {
         return points;
     }
 
-    /** The Z of each [Fe/H] with the helium law's Y; null (with the problems recorded) when one leaves Z's range. */
-    private static List<Double> ironToMetals(List<Double> irons, IronToMetals iron, HeliumLaw law, List<Node> nodes,
-                                             NodeReader reader) {
+    /**
+     * The Z of each [Fe/H], with the helium law's Y ({@code law}) or the listed one ({@code ys}, when {@code law} is
+     * null); null at an [Fe/H] whose Z leaves Z's range, the problem recorded at its node.
+     */
+    private static List<Double> ironToMetals(List<Double> irons, IronToMetals iron, HeliumLaw law, List<Double> ys,
+                                             List<Node> nodes, NodeReader reader) {
         List<Double> zs = new ArrayList<>();
-        boolean ok = true;
         for (int i = 0; i < irons.size(); i++) {
-            double z = iron.metals(irons.get(i), law);
+            double z = law != null ? iron.metals(irons.get(i), law) : iron.metals(irons.get(i), ys.get(i));
             if (!Z_RANGE.contains(z)) {
-                reader.problem(nodes.get(i), GridProblemKind.OUT_OF_RANGE, tooRich(irons.get(i), z, iron));
-                ok = false;
+                reader.problem(nodes.get(i), GridProblemKind.OUT_OF_RANGE,
+                        "fe_h_dex = " + MessageNumbers.format(irons.get(i)) + " " + iron.zOutsideRange(z));
+                zs.add(null);
+            } else {
+                zs.add(z);
             }
-            zs.add(z);
         }
-        return ok ? zs : null;
-    }
-
-    private static String tooRich(double ironDex, double z, IronToMetals iron) {
-        return "fe_h_dex = " + MessageNumbers.format(ironDex) + " gives Z = " + MessageNumbers.format(z)
-                + " (solar Z/X " + MessageNumbers.format(iron.solarMetalsToHydrogen()) + "), outside [0, "
-                + MessageNumbers.format(MetallicityPoint.MAX_Z) + ")";
+        return zs;
     }
 
     private static HeliumLaw helium(Node node, NodeReader reader) {
