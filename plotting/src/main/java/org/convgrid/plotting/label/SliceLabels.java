@@ -4,6 +4,7 @@ import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
 import java.util.Locale;
+import java.util.function.DoubleFunction;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.overshoot.MassRampedStepOvershoot;
 import org.convgrid.engine.request.OvershootScheme;
@@ -15,6 +16,8 @@ import org.convgrid.output.transitions.Slice;
 public final class SliceLabels {
 
     private static final MathContext FOUR_DIGITS = new MathContext(4);
+    /** The solar-mass symbol of chart text. */
+    private static final String SOLAR_MASS = "M\u2609";
     /** Longer lists are shown as a range in titles. */
     private static final int LISTED_VALUES = 4;
 
@@ -99,18 +102,29 @@ public final class SliceLabels {
      * profile. An unknown profile (a table written before it was recorded) reads as the length in Hp.
      */
     public static String overshoot(double overshootHp, OvershootScheme overshootProfile) {
+        return overshoot(overshootHp, overshootProfile, SliceLabels::number, SOLAR_MASS);
+    }
+
+    /**
+     * {@link #overshoot(double, OvershootScheme)} with the numbers written by {@code number} and the solar mass
+     * spelled {@code solarMass}: the one wording, for the charts and for the terminal ({@code check}, {@code star},
+     * which write "Msun").
+     */
+    public static String overshoot(double overshootHp, OvershootScheme overshootProfile,
+                                   DoubleFunction<String> number, String solarMass) {
         if (overshootHp == 0.0) {
             return "no overshoot";
         }
-        String length = number(overshootHp);
+        String length = number.apply(overshootHp);
         if (overshootProfile == null) {
             return "overshoot " + length + " Hp";
         }
         return switch (overshootProfile) {
             case STEP -> "overshoot " + length + " Hp";
             case MASS_RAMPED_STEP -> "overshoot " + length + " Hp from "
-                    + number(MassRampedStepOvershoot.RAMP_FULL_MSUN) + " M\u2609, none up to "
-                    + number(MassRampedStepOvershoot.RAMP_START_MSUN) + " M\u2609 (" + overshootProfile.label() + ")";
+                    + number.apply(MassRampedStepOvershoot.RAMP_FULL_MSUN) + " " + solarMass + ", none up to "
+                    + number.apply(MassRampedStepOvershoot.RAMP_START_MSUN) + " " + solarMass + " ("
+                    + overshootProfile.label() + ")";
             case EXPONENTIAL -> "overshoot f = " + length + " (" + overshootProfile.label() + ")";
         };
     }
