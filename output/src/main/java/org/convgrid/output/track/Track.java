@@ -37,7 +37,12 @@ public record Track(String trackId, List<TrackStep> steps) {
 
     /** The track id of a catalogue model id: the id without its trailing age part; the id itself when it has none. */
     public static String trackIdOf(String modelId) {
+        return modelId.substring(0, modelId.length() - agePartOf(modelId).length());
+    }
+
+    /** The trailing age part of a catalogue model id ({@code -a01}: which age of the grid); empty when it has none. */
+    public static String agePartOf(String modelId) {
         int cut = modelId.lastIndexOf(AGE_SEPARATOR);
-        return cut < 0 ? modelId : modelId.substring(0, cut);
+        return cut < 0 ? "" : modelId.substring(cut);
     }
 }

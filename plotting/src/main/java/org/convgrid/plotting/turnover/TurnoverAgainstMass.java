@@ -7,20 +7,16 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.track.Track;
 import org.convgrid.output.transitions.RefinedModelIds;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.plotting.label.PhysicsKey;
 
 /** Builds the turnover-time-against-mass data of one metallicity and physics from the catalogue: a pure function. */
 public final class TurnoverAgainstMass {
-
-    /** The age index that ends a grid model's id. */
-    private static final Pattern AGE_INDEX = Pattern.compile("-a(\\d+)$");
 
     private TurnoverAgainstMass() {
     }
@@ -75,9 +71,9 @@ public final class TurnoverAgainstMass {
     static boolean eachStarItsOwnAge(List<CatalogueRow> gridRows) {
         Map<String, Set<Double>> agesByIndex = new HashMap<>();
         for (CatalogueRow r : gridRows) {
-            Matcher m = AGE_INDEX.matcher(r.modelId());
-            if (m.find()) {
-                agesByIndex.computeIfAbsent(m.group(1), k -> new HashSet<>()).add(r.ageGyr());
+            String agePart = Track.agePartOf(r.modelId());
+            if (!agePart.isEmpty()) {
+                agesByIndex.computeIfAbsent(agePart, k -> new HashSet<>()).add(r.ageGyr());
             }
         }
         return agesByIndex.values().stream().anyMatch(ages -> ages.size() > 1);
