@@ -15,8 +15,7 @@ import org.convgrid.output.catalogue.CatalogueWriter;
  * added at the end; column descriptions in the header may have been reworded). The rows are read by column name and
  * written again, so their cells keep their text and a column the file lacked is empty, but for the overshoot profile,
  * which is the grid's (one profile per grid; the run or merge has checked the grid is the catalogue's). A catalogue of
- * another
- * table, or one whose columns differ otherwise, is not this version's to upgrade.
+ * another table, or one whose columns differ otherwise, is not this version's to upgrade.
  */
 final class EarlierCatalogueLayout {
 

@@ -47,8 +47,8 @@ public final class GridSummary {
         List<PhysicsOptions> physics = g.physics().combinations();
         lines.add("physics:       " + physics.size() + (physics.size() == 1 ? " combination" : " combinations"));
         for (PhysicsOptions p : physics) {
-            lines.add("  mixing length " + MessageNumbers.format(p.mixingLength()) + " Hp, " + OvershootWords.describe(p) + ", "
-                    + p.criterion().name().toLowerCase(Locale.ROOT)
+            lines.add("  mixing length " + MessageNumbers.format(p.mixingLength()) + " Hp, "
+                    + OvershootWords.describe(p) + ", " + p.criterion().name().toLowerCase(Locale.ROOT)
                     + ", opacity x" + MessageNumbers.format(p.opacityScale()));
         }
         lines.add("models:        " + g.count());

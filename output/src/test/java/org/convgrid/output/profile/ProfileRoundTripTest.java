@@ -17,6 +17,13 @@ class ProfileRoundTripTest {
             Constants.R_SUN, Constants.L_SUN, 5772.0, 4.57, "birth", 0.02, 0.27, PhysicsOptions.DEFAULT, false,
             "1.2.3", "unknown");
 
+    /** The ECSV header describes the columns the name row lists, in its order: two lists kept in step by hand. */
+    @Test
+    void theDescribedColumnsAreTheHeader() {
+        assertThat(ProfileColumns.DESCRIBED).extracting(org.convgrid.output.EcsvColumn::name)
+                .containsExactlyElementsOf(ProfileColumns.HEADER);
+    }
+
     @Test
     void writesHeaderAndShellsAndReadsThemBack() throws IOException {
         // illustrative shells (centre and surface of a Sun-like model), not computed values

@@ -53,6 +53,7 @@ public enum ZoneCoordinate {
     public boolean shows(double lo, double hi) {
         return of(hi) - of(lo) >= MIN_VISIBLE_SHARE * (max - min);
     }
+
     /**
      * The rectangle as drawn on this axis: on the depth axis a zone that reaches the surface (an envelope or the whole
      * star) is drawn up to the top, the surface. Its top is the outermost mesh point, about 4e-7 of the mass below
