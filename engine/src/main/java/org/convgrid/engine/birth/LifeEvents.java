@@ -14,7 +14,9 @@ package org.convgrid.engine.birth;
  *                         the end of the computed track: the age of the last such return; NaN while the track ends
  *                         with a radiative region (or the star never had a radiative core)
  * @param zeroAgeMainSequence L_nuc first reaches
- *                            {@link org.convgrid.engine.evolution.NuclearLuminosity#ZERO_AGE_FRACTION} of L
+ *                            {@link org.convgrid.engine.evolution.NuclearLuminosity#ZERO_AGE_FRACTION} of L, and
+ *                            for good: a crossing after which the star falls back to contraction is not the
+ *                            arrival ({@link ZeroAgeArrival})
  * @param convectiveCoreOnset after the radiative core appeared, a convective core first appears: a central zone
  *                            whose top lies above the core threshold and below m/M = 0.99 (higher, it is the
  *                            whole star again); a core that also vanishes before the ZAMS is a transient of the

@@ -22,11 +22,15 @@ final class LifeRecorder implements StepObserver {
     private double radiativeCore = Double.NaN;
     /** Age of the first model of the current run of fully convective models; NaN while the last model was not. */
     private double fullyConvectiveSince = Double.NaN;
-    private double zams = Double.NaN;
-    private final CoreLifetime convectiveCore = new CoreLifetime();
+    private final ZeroAgeArrival zeroAge = new ZeroAgeArrival();
+    /**
+     * Per model: age, 1 with a convective core, 1 once the centre has stopped being convective. The core's lifetime
+     * is read from them at the end, when the zero-age main sequence is known ({@link ZeroAgeArrival} may move it
+     * after the models that first seemed to reach it).
+     */
+    private final List<double[]> cores = new ArrayList<>();
     private double lithiumHalved = Double.NaN;
     private double lastAge;
-    private double lastFraction;
     private double lastLithium;
     private double lastCentreExcess;
 
@@ -66,18 +70,15 @@ final class LifeRecorder implements StepObserver {
                 radiativeCore = lastCentreExcess > 0.0 && excess <= 0.0
                         ? crossing(lastAge, lastCentreExcess, age, excess, 0.0) : age;
             }
-            if (Double.isNaN(zams) && fraction >= NuclearLuminosity.ZERO_AGE_FRACTION) {
-                zams = crossing(lastAge, lastFraction, age, fraction, NuclearLuminosity.ZERO_AGE_FRACTION);
-            }
-            convectiveCore.observe(age, core, !Double.isNaN(radiativeCore), !Double.isNaN(zams));
+            cores.add(new double[] {age, core ? 1.0 : 0.0, Double.isNaN(radiativeCore) ? 0.0 : 1.0});
             if (Double.isNaN(lithiumHalved) && lithium <= 0.5) {
                 lithiumHalved = crossing(lastAge, lastLithium, age, lithium, 0.5);
             }
         }
-        boolean main = !Double.isNaN(zams) && age >= zams;
-        rows.add(new double[] {age, main ? 1.0 : 0.0, fraction, lithium, model.state().composition(0).h2()});
+        zeroAge.observe(age, fraction, model.global().centralHydrogen());
+        // the phase (second entry) is set in rows(), once the zero-age main sequence is known
+        rows.add(new double[] {age, 0.0, fraction, lithium, model.state().composition(0).h2()});
         lastAge = age;
-        lastFraction = fraction;
         lastLithium = lithium;
         lastCentreExcess = centreExcess(model);
     }
@@ -99,12 +100,25 @@ final class LifeRecorder implements StepObserver {
     /** The events seen in the models; the end of the main sequence is the evolution's to add. */
     LifeEvents events() {
         double radiativeCoreEnd = Double.isNaN(radiativeCore) ? Double.NaN : fullyConvectiveSince;
+        double zams = zeroAge.age();
+        CoreLifetime convectiveCore = new CoreLifetime();
+        for (double[] c : cores) {
+            // comparisons with NaN are false: no zero-age main sequence, no model on it
+            convectiveCore.observe(c[0], c[1] > 0.5, c[2] > 0.5, c[0] >= zams);
+        }
         return new LifeEvents(radiativeCore, radiativeCoreEnd, zams, convectiveCore.onset(), convectiveCore.end(),
                 lithiumHalved, Double.NaN);
     }
 
-    /** Per recorded model: age, 1 on the main sequence, L_nuc/L, surface lithium, central deuterium. */
+    /**
+     * Per recorded model: age, 1 on the main sequence (at or after the zero-age main sequence as dated at the end of
+     * the track), L_nuc/L, surface lithium, central deuterium.
+     */
     List<double[]> rows() {
+        double zams = zeroAge.age();
+        for (double[] r : rows) {
+            r[1] = r[0] >= zams ? 1.0 : 0.0;
+        }
         return rows;
     }
 }
