@@ -102,15 +102,27 @@ final class BirthAges {
         double zams = life.events().zeroAgeMainSequence();
         double exhaustion = life.result().exhaustionAge();
         if (!Double.isFinite(zams) || !Double.isFinite(exhaustion)) {
-            String reason = Double.isFinite(zams) ? String.format(Locale.ROOT, "main-sequence lifetime unknown: "
-                    + "core hydrogen not exhausted within %.4g Gyr of birth (%s)",
-                    solver.settings().maxAge() / Constants.GYR, life.result().end())
-                    : "the zero-age main sequence was not reached from birth (" + life.result().end() + ")";
-            return failedAll(star, ModelStatus.NOT_CONVERGED, reason);
+            return failedAll(star, ModelStatus.NOT_CONVERGED, unknownLifetime(life.result(), Double.isFinite(zams),
+                    solver.settings().maxAge()));
         }
         List<ModelRequest> sinceBirth = star.stream().map(r -> r.withAge(new Age.SinceBirth(
                 zams + ((Age.MainSequenceFraction) r.age()).fraction() * (exhaustion - zams)))).toList();
         return answers(solver, sinceBirth, LifetimeSearch.landing(solver.settings()));
+    }
+
+    /**
+     * Why a track from birth gives no main-sequence lifetime. An evolution that failed says where and why (a
+     * review's 1.3 Msun star with decaying overshoot had run out of steps at 4.6 Gyr, X_c = 0.005, and the row said
+     * "not exhausted within 20.00 Gyr of birth (FAILED)"); one that reached the age limit says that limit.
+     */
+    static String unknownLifetime(EvolutionResult result, boolean zamsReached, double maxAge) {
+        String lifetime = zamsReached ? "main-sequence lifetime unknown: " : "the zero-age main sequence was not "
+                + "reached from birth: ";
+        if (result.end() == EvolutionResult.EndReason.FAILED) {
+            return lifetime + "the evolution stopped before core-hydrogen exhaustion (" + result.detail() + ")";
+        }
+        return lifetime + String.format(Locale.ROOT, "core hydrogen not exhausted within %.4g Gyr of birth, the "
+                + "evolution's age limit", maxAge / Constants.GYR);
     }
 
     /** The homogeneous birth composition of a request: X = 1 - Y - Z with deuterium, 3He and lithium. */
