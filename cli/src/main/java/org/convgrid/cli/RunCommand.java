@@ -19,6 +19,7 @@ import org.convgrid.grids.GridSpec;
 import org.convgrid.grids.TransitionSettings;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.transitions.TransitionFinder;
+import org.convgrid.survey.GridIronAbundance;
 import org.convgrid.survey.GridRun;
 import org.convgrid.survey.RunDirectory;
 import org.convgrid.survey.RunFinishing;
@@ -135,7 +136,7 @@ final class RunCommand implements Callable<Integer> {
         boolean evolves = file.spec().ages().evolves();
         // every catalogue row and life-events row goes through it, so that a signal stops the sweep between rows
         SweepInterruption interruption = new SweepInterruption();
-        TrackFiles tracks = new TrackFiles(dir.layout(), interruption);
+        TrackFiles tracks = new TrackFiles(dir.layout(), GridIronAbundance.of(file.spec()), interruption);
         ProfileFiles profiles = file.spec().profiles()
                 ? new ProfileFiles(dir.layout(), ToolVersion.current(), ToolVersion.commit()) : null;
         ChunkSolver solver = context.solvers().solverFor(file.spec(), evolves ? tracks : StarTrackSink.NONE,

@@ -28,6 +28,7 @@ import org.convgrid.grids.HeliumLaw;
 import org.convgrid.grids.IronToMetals;
 import org.convgrid.grids.MetallicityPoint;
 import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.IronAbundance;
 import org.convgrid.output.catalogue.CatalogueWriter;
 import org.convgrid.output.catalogue.OutcomeRows;
 import org.convgrid.output.profile.ProfileColumns;
@@ -187,7 +188,9 @@ final class StarCommand implements Callable<Integer> {
                 .answers(List.of(request)).get(0);
         ModelOutcome outcome = answer.outcome();
         if (format == OutputFormat.CSV) {
-            try (CatalogueWriter writer = CatalogueWriter.startingWithHeader(main.out())) {
+            // fe_h_dex against the Sun --fe-h-dex was measured against (the default one with --z)
+            IronAbundance ironColumn = new IronAbundance(iron().solarMetalsToHydrogen(), metalsGiven.ironDex != null);
+            try (CatalogueWriter writer = CatalogueWriter.startingWithHeader(main.out(), ironColumn)) {
                 writer.write(OutcomeRows.toRow(outcome));
             }
         } else {

@@ -43,11 +43,25 @@ class IronAbundanceTest {
         List<String> header = List.of(starLines.get(0).split(","));
         String[] fromStar = starLines.get(1).split(",", -1);
         String[] fromGrid = gridLines.get(1).split(",", -1);
-        for (String column : List.of("z_init", "y_init", "luminosity_lsun", "teff_k", "env_cz_base_radius_frac")) {
+        for (String column : List.of("z_init", "y_init", "luminosity_lsun", "teff_k", "env_cz_base_radius_frac",
+                "fe_h_dex")) {
             assertThat(fromStar[header.indexOf(column)]).as(column).isEqualTo(fromGrid[header.indexOf(column)]);
         }
         // Z / X = 0.0245 x 10^0.1 with Y = 0.2471 + 1.5 Z: Z = 0.0215597, by hand
         assertThat(Double.parseDouble(fromStar[header.indexOf("z_init")])).isBetween(0.0215595, 0.0215600);
+        // both give back the [Fe/H] asked for
+        assertThat(fromStar[header.indexOf("fe_h_dex")]).isEqualTo("0.1");
+    }
+
+    @Test
+    void starsCsvMeasuresIronAgainstItsOwnSun() {
+        CliHarness.Execution star = run("star", "--mass", "1", "--fe-h-dex", "-0.35", "--solar-z-over-x", "0.0181",
+                "--format", "csv");
+        assertThat(star.code()).as(star.err()).isZero();
+        assertThat(star.out()).contains("description: '[Fe/H] = log10 of (Z/X) over the solar Z/X 0.0181 ");
+        List<String> lines = star.out().lines().filter(l -> !l.startsWith("#")).toList();
+        assertThat(lines.get(0)).endsWith(",fe_h_dex");
+        assertThat(lines.get(1)).endsWith(",-0.35");
     }
 
     @Test

@@ -70,10 +70,12 @@ class ShardTracksTest {
         for (int k = 1; k <= 3; k++) {
             assertThat(run("run", "--no-refine", grid.toString(), "--shard", k + "/3", "--quiet").code()).isZero();
         }
-        // one shard's life events as the version before overshoot_profile wrote them: the merge fills in the grid's
+        // one shard's life events as the version before overshoot_profile and fe_h_dex wrote them: the merge fills
+        // in the grid's profile and each row's [Fe/H]
         Path earlierEvents = work.resolve("runs/test-survey-shard-2-of-3/life_events.csv");
         List<String> earlierLines = Files.readAllLines(earlierEvents).stream()
-                .map(line -> String.join(",", withoutCell(line.split(",", -1), 6))).toList();
+                .map(line -> String.join(",", withoutCell(withoutCell(line.split(",", -1), 7).toArray(String[]::new),
+                        4))).toList();
         assertThat(earlierLines.get(0)).contains("overshoot_hp,radiative_core_myr");
         Files.write(earlierEvents, earlierLines);
         // a user's table in a shard's tracks/ stays there: it is not one of the run's tracks
@@ -95,7 +97,7 @@ class ShardTracksTest {
         // one life-events row per star, sorted by track id: the merged table is the single run's, byte for byte
         List<String> events = Files.readAllLines(work.resolve("single/life_events.csv"));
         assertThat(events).hasSize(1 + 78);
-        assertThat(events.get(0)).startsWith("track_id,mass_msun,z_init,y_init,mixing_length,overshoot_hp,"
+        assertThat(events.get(0)).startsWith("track_id,mass_msun,z_init,y_init,fe_h_dex,mixing_length,overshoot_hp,"
                 + "overshoot_profile,radiative_core_myr,radiative_core_end_myr,zams_myr,conv_core_onset_myr,conv_core_end_myr,"
                 + "li_halved_myr,central_h_exhausted_myr,track_end_myr");
         assertThat(events.get(1)).startsWith("p0-z00-m000,");

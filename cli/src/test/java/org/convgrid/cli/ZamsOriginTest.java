@@ -103,9 +103,10 @@ class ZamsOriginTest {
         CliHarness.Execution e = harness.execute("run", "--no-refine", grid.toString(), "--out", "zams", "--quiet");
         assertThat(e.code()).as(e.err()).isZero();
         List<String> rows = CliHarness.tableLines(dir.resolve("zams/catalogue.ecsv"));
-        // the catalogue has since gained core_mixed_mass_frac (empty: these stars have no core) and overshoot_profile
+        // the catalogue has since gained core_mixed_mass_frac (empty: these stars have no core), overshoot_profile
+        // and fe_h_dex (log10(0.02 / 0.70 / 0.0245) = 0.0668 against the default Sun)
         assertThat(rows.subList(1, rows.size()))
-                .containsExactlyElementsOf(ROWS_BEFORE.stream().map(row -> row + ",,uniform").toList());
+                .containsExactlyElementsOf(ROWS_BEFORE.stream().map(row -> row + ",,uniform,0.0668").toList());
         assertThat(dir.resolve("zams/life_events.csv")).doesNotExist();
     }
 }

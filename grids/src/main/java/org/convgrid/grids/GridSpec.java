@@ -74,6 +74,22 @@ public record GridSpec(String title, List<Double> massesMsun, List<MetallicityPo
         return ages.values();
     }
 
+    /**
+     * Whether the grid file gave its compositions as [Fe/H] ({@code fe_h_dex}); then the run's charts and report name
+     * each one's [Fe/H] beside its Z.
+     */
+    public boolean givesIron() {
+        return metallicities.get(0).givenAsIron();
+    }
+
+    /**
+     * The Sun the run's tables measure [Fe/H] ({@code fe_h_dex}) against: the grid's {@code solar_z_over_x} when it
+     * gives [Fe/H], else {@link IronToMetals#GN93}.
+     */
+    public IronToMetals ironReference() {
+        return metallicities.get(0).ironReference();
+    }
+
     /** Number of models, without expanding the grid. */
     public long count() {
         return (long) physics.size() * metallicities.size() * massesMsun.size() * ages.values().size();

@@ -6,13 +6,17 @@ package org.convgrid.grids;
  * @param z initial metal mass fraction, 0 &lt;= Z &lt; {@link #MAX_Z}
  * @param y initial helium mass fraction, Y &gt;= 0 with Y + Z &lt; 1
  * @param ironDex the [Fe/H] the grid file gave for this point ({@code fe_h_dex}, turned into Z); NaN when it gave Z
+ * @param ironReference the Sun [Fe/H] is measured against: the one {@code ironDex} was turned into Z with (the grid's
+ *     {@code solar_z_over_x}), {@link IronToMetals#GN93} for a point given by Z; the run's tables give the [Fe/H] of
+ *     every point against it
  */
-public record MetallicityPoint(double z, double y, double ironDex) {
+public record MetallicityPoint(double z, double y, double ironDex, IronToMetals ironReference) {
 
     /** Largest metal mass fraction accepted (exclusive): beyond it no main-sequence opacity source applies. */
     public static final double MAX_Z = 0.1;
 
     public MetallicityPoint {
+        java.util.Objects.requireNonNull(ironReference, "ironReference");
         if (!(z >= 0.0 && z < MAX_Z)) {
             throw new IllegalArgumentException("Z must lie in [0, " + MAX_Z + "), got " + z);
         }
@@ -23,7 +27,12 @@ public record MetallicityPoint(double z, double y, double ironDex) {
 
     /** A point given by its Z. */
     public MetallicityPoint(double z, double y) {
-        this(z, y, Double.NaN);
+        this(z, y, Double.NaN, IronToMetals.GN93);
+    }
+
+    /** Whether the grid file gave this point as [Fe/H]. */
+    public boolean givenAsIron() {
+        return !Double.isNaN(ironDex);
     }
 
     /** Initial hydrogen mass fraction X = 1 - Y - Z. */

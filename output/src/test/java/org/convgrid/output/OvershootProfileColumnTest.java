@@ -6,6 +6,7 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import java.io.IOException;
 import java.io.StringReader;
 import java.util.List;
+import org.convgrid.output.IronAbundance;
 import org.convgrid.engine.birth.LifeEvents;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.request.GlobalProperties;
@@ -54,8 +55,10 @@ class OvershootProfileColumnTest {
         return new ModelOutcome.Solved(request, global, convection, 5);
     }
 
-    private static String lastCell(String line) {
-        return line.substring(line.lastIndexOf(',') + 1);
+    /** The cell before the last: overshoot_profile, which fe_h_dex follows. */
+    private static String profileCell(String line) {
+        String[] cells = line.split(",", -1);
+        return cells[cells.length - 2];
     }
 
     @Test
@@ -67,8 +70,8 @@ class OvershootProfileColumnTest {
         writer.write(OutcomeRows.toRow(coredStar("p2-z00-m000-a00", physics(OvershootScheme.STEP, 0.2))));
         writer.flush();
         List<String> lines = out.toString().lines().filter(l -> !l.startsWith("#")).toList();
-        assertThat(lastCell(lines.get(0))).isEqualTo("overshoot_profile");
-        assertThat(lines.subList(1, 4).stream().map(OvershootProfileColumnTest::lastCell))
+        assertThat(profileCell(lines.get(0))).isEqualTo("overshoot_profile");
+        assertThat(lines.subList(1, 4).stream().map(OvershootProfileColumnTest::profileCell))
                 .containsExactly("uniform-ramped", "decaying", "uniform");
         assertThat(out.toString()).contains("{name: overshoot_profile, datatype: string, description: 'what"
                 + " overshoot_hp is the length of");
@@ -83,8 +86,9 @@ class OvershootProfileColumnTest {
         writer.write(OutcomeRows.toRow(coredStar("p0-z00-m000-a00", physics(OvershootScheme.STEP, 0.2))));
         writer.flush();
         List<String> lines = out.toString().lines().filter(l -> !l.startsWith("#")).toList();
-        String withoutColumn = lines.stream().map(l -> l.substring(0, l.lastIndexOf(',')) + "\n")
-                .reduce("", String::concat);
+        // the layout before overshoot_profile had neither it nor fe_h_dex, added after it
+        String withoutColumn = lines.stream().map(l -> l.substring(0, l.lastIndexOf(',', l.lastIndexOf(',') - 1))
+                + "\n").reduce("", String::concat);
         CatalogueRow earlier = CatalogueReader.read(new StringReader(withoutColumn)).get(0);
         assertThat(earlier.overshootProfile()).isNull();
         assertThat(earlier.withOvershootProfileIfUnknown(OvershootScheme.EXPONENTIAL).overshootProfile())
@@ -104,9 +108,9 @@ class OvershootProfileColumnTest {
         StringBuilder out = new StringBuilder();
         TransitionWriter.write(rows, out);
         String[] lines = out.toString().split("\n");
-        assertThat(lines[0]).startsWith("z_init,y_init,age_gyr,mixing_length,overshoot_hp,overshoot_profile,"
+        assertThat(lines[0]).startsWith("z_init,y_init,fe_h_dex,age_gyr,mixing_length,overshoot_hp,overshoot_profile,"
                 + "criterion,");
-        assertThat(lines[1]).startsWith("0.02,0.28,0.3,1.8,0.2,uniform-ramped,schwarzschild,");
+        assertThat(lines[1]).startsWith("0.02,0.28,0.0668,0.3,1.8,0.2,uniform-ramped,schwarzschild,");
         assertThat(TransitionReader.read(new StringReader(out.toString())).get(0).slice().overshootProfile())
                 .isEqualTo(OvershootScheme.MASS_RAMPED_STEP);
         String earlier = out.toString().replace(",overshoot_profile,", ",").replace(",uniform-ramped,", ",");
@@ -119,9 +123,9 @@ class OvershootProfileColumnTest {
                 physics(OvershootScheme.EXPONENTIAL, 0.016));
         LifeEventRow row = LifeEventRow.of("p0-z00-m000", first, new LifeEvents(1.0e6 * Constants.YEAR, Double.NaN,
                 Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN), 5.0e6 * Constants.YEAR);
-        String text = LifeEventWriter.header() + LifeEventWriter.line(row);
-        assertThat(text).startsWith("track_id,mass_msun,z_init,y_init,mixing_length,overshoot_hp,overshoot_profile,")
-                .contains("p0-z00-m000,1.5,0.02,0.28,1.8,0.016,decaying,");
+        String text = LifeEventWriter.header() + LifeEventWriter.line(row, IronAbundance.DEFAULT);
+        assertThat(text).startsWith("track_id,mass_msun,z_init,y_init,fe_h_dex,mixing_length,overshoot_hp,"
+                + "overshoot_profile,").contains("p0-z00-m000,1.5,0.02,0.28,0.0668,1.8,0.016,decaying,");
         assertThat(LifeEventReader.read(new StringReader(text)).get(0).overshootProfile())
                 .isEqualTo(OvershootScheme.EXPONENTIAL);
         String earlier = text.replace(",overshoot_profile,", ",").replace(",decaying,", ",");

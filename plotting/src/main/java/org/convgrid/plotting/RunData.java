@@ -10,6 +10,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import org.convgrid.engine.request.OvershootScheme;
+import org.convgrid.output.IronAbundance;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueReader;
@@ -24,6 +25,7 @@ import org.convgrid.output.track.TrackTimeline;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionReader;
 import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.plotting.label.MetallicityNames;
 import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.tracks.TrackOrigin;
 import org.convgrid.plotting.tracks.TrackedModel;
@@ -64,6 +66,19 @@ public record RunData(List<CatalogueRow> catalogue, List<TransitionRow> transiti
     /** Where the life stages of track {@code trackId} lie. */
     public TrackTimeline timeline(String trackId) {
         return timelines.getOrDefault(trackId, TrackTimeline.UNKNOWN);
+    }
+
+    /**
+     * The Sun the run's [Fe/H] is measured against and whether its grid gave [Fe/H]: its manifest's (which says it
+     * for runs written before it was recorded too), the default one without a manifest.
+     */
+    public IronAbundance ironAbundance() {
+        return manifest == null ? IronAbundance.DEFAULT : manifest.ironAbundance();
+    }
+
+    /** How the charts and the report name the run's metallicities: with their [Fe/H] when the grid gave [Fe/H]. */
+    public MetallicityNames metallicityNames() {
+        return MetallicityNames.of(ironAbundance(), catalogue);
     }
 
     /** Whether the run has evolution tracks. */

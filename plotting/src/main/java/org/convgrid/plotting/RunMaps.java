@@ -20,6 +20,7 @@ import org.convgrid.plotting.hr.HrDiagramRenderer;
 import org.convgrid.plotting.kippenhahn.Kippenhahn;
 import org.convgrid.plotting.kippenhahn.KippenhahnRenderer;
 import org.convgrid.plotting.kippenhahn.ZoneCoordinate;
+import org.convgrid.plotting.label.MetallicityNames;
 import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.ChartFiles;
@@ -160,18 +161,20 @@ public final class RunMaps {
             physics.add(PhysicsKey.of(row));
         }
         List<CatalogueRow> rows = run.catalogue();
+        MetallicityNames names = run.metallicityNames();
         List<MapEntry> mass = new ArrayList<>();
         List<MapEntry> radius = new ArrayList<>();
         for (Slice s : slices) {
             TransitionRow t = transitions.get(s);
             String stem = SliceLabels.fileStem(s);
             String group = groupOf(s.zInit(), PhysicsKey.of(s), run);
+            String slice = names.of(s.zInit()) + ", " + SliceLabels.age(s.ageGyr()) + ", " + SliceLabels.physics(s);
             mass.add(new MapEntry(ZONES_MASS_FILES + "_" + stem + ".png", MapEntry.ZONES_MASS, group,
-                    "Convective zones in m/M, " + SliceLabels.describe(s) + ".",
-                    () -> ZoneMapRenderer.render(ZoneMap.inMass(s, rows, t))));
+                    "Convective zones in m/M, " + slice + ".",
+                    () -> ZoneMapRenderer.render(ZoneMap.inMass(s, rows, t), names)));
             radius.add(new MapEntry(ZONES_RADIUS_FILES + "_" + stem + ".png", MapEntry.ZONES_RADIUS, group,
-                    "Convective zones in r/R, " + SliceLabels.describe(s) + ".",
-                    () -> ZoneMapRenderer.render(ZoneMap.inRadius(s, rows, t, run.radiusZones()))));
+                    "Convective zones in r/R, " + slice + ".",
+                    () -> ZoneMapRenderer.render(ZoneMap.inRadius(s, rows, t, run.radiusZones()), names)));
         }
         List<MapEntry> entries = new ArrayList<>(mass);
         entries.addAll(radius);
@@ -182,7 +185,7 @@ public final class RunMaps {
                             : "HR diagram of every usable model (colour: Z; shape: structure class), ")
                             + p.describe() + "." + refinementNote(rows, p),
                     () -> HrDiagramRenderer.render(usable(HrDiagram.build(p, rows, run.trackedModels(), run::timeline),
-                            rows))));
+                            rows), names)));
         }
         for (PhysicsKey p : physics) {
             if (run.transitions().stream().anyMatch(t -> PhysicsKey.of(t.slice()).equals(p))) {
@@ -190,7 +193,8 @@ public final class RunMaps {
                         "Transition masses against Z (the ages drawn slightly apart at each Z, youngest left): shaded boxes span the two models that bracket each value, "
                                 + "dashed boxes the windows of small transient cores (a square alone: a window found "
                                 + "at one mass), " + p.describe() + ".",
-                        () -> TransitionTrendRenderer.render(found(TransitionTrend.build(p, run.transitions())))));
+                        () -> TransitionTrendRenderer.render(found(TransitionTrend.build(p, run.transitions(), names)),
+                                names)));
             }
         }
         for (PhysicsKey p : physics) {
@@ -204,8 +208,9 @@ public final class RunMaps {
                                 + "ages only to guide the eye: where small 3He-driven cores fill the masses below it "
                                 + "at some age, \"core in every star above\" drops there and rises again (README, "
                                 + "Limits, in detail).",
-                        () -> TransitionAgeTrendRenderer.render(found(TransitionAgeTrend.build(p, run.transitions())),
-                                run.manifest() == null ? AgeOrigin.ZAMS : run.manifest().ageOrigin())));
+                        () -> TransitionAgeTrendRenderer.render(
+                                found(TransitionAgeTrend.build(p, run.transitions(), names)),
+                                run.manifest() == null ? AgeOrigin.ZAMS : run.manifest().ageOrigin(), names)));
             }
         }
         entries.addAll(turnoverAgainstMass(run, physics));
@@ -219,6 +224,7 @@ public final class RunMaps {
      */
     private static List<MapEntry> turnoverAgainstMass(RunData run, Set<PhysicsKey> physics) {
         List<MapEntry> entries = new ArrayList<>();
+        MetallicityNames names = run.metallicityNames();
         for (PhysicsKey p : physics) {
             List<Double> zs = run.catalogue().stream().filter(r -> PhysicsKey.of(r).equals(p))
                     .map(CatalogueRow::zInit).distinct().sorted().toList();
@@ -229,21 +235,26 @@ public final class RunMaps {
                 }
                 entries.add(new MapEntry(TURNOVER_FILES + "_z" + SliceLabels.number(z) + "_" + p.fileStem() + ".png",
                         MapEntry.TURNOVER, groupOf(z, p, run),
-                        turnoverCaption(data),
-                        () -> TurnoverAgainstMassRenderer.render(data)));
+                        turnoverCaption(data, names),
+                        () -> TurnoverAgainstMassRenderer.render(data, names)));
             }
         }
         return entries;
     }
 
-    /** The report's caption of a turnover chart, naming only the marks it has (hollow markers, dotted limits). */
+    /** {@link #turnoverCaption(TurnoverData, MetallicityNames)} of a run whose metallicities are named by Z. */
     static String turnoverCaption(TurnoverData data) {
+        return turnoverCaption(data, MetallicityNames.Z_ONLY);
+    }
+
+    /** The report's caption of a turnover chart, naming only the marks it has (hollow markers, dotted limits). */
+    static String turnoverCaption(TurnoverData data, MetallicityNames names) {
         boolean hollow = data.lines().stream().flatMap(l -> l.points().stream())
                 .anyMatch(TurnoverPoint::fullyConvective);
         return "Convective turnover times against mass, one colour per age: local (solid with markers"
                 + (hollow ? ", hollow where the star is fully convective" : "") + ") and global (dashed), for the "
                 + "grid's models with a turnover time" + (data.limits().isEmpty() ? ""
-                : "; dotted lines mark each age's fully convective limit") + ". Z = " + SliceLabels.number(data.zInit())
+                : "; dotted lines mark each age's fully convective limit") + ". " + names.of(data.zInit())
                 + ", " + data.physics().describe() + ". Model values (turnover_time_days, "
                 + "turnover_time_global_days), not empirical ones.";
     }
@@ -300,9 +311,10 @@ public final class RunMaps {
     /** One zones-against-age chart per selected track, by physics, then Z, then mass; grouped by Z. */
     private static List<MapEntry> zonesAgainstAge(RunData run) {
         List<MapEntry> entries = new ArrayList<>();
+        MetallicityNames names = run.metallicityNames();
         for (TrackedModel t : zonesAgainstAgeSelection(run).chosen()) {
             TrackOrigin o = t.origin();
-            String what = "M = " + SliceLabels.number(o.massMsun()) + " M\u2609, Z = " + SliceLabels.number(o.zInit());
+            String what = "M = " + SliceLabels.number(o.massMsun()) + " M\u2609, " + names.of(o.zInit());
             String stem = "_m" + SliceLabels.number(o.massMsun()) + "_z" + SliceLabels.number(o.zInit()) + "_"
                     + o.physics().fileStem() + ".png";
             String group = groupOf(o.zInit(), o.physics(), run);
@@ -310,21 +322,25 @@ public final class RunMaps {
                     "Convective zones (shaded) and " + KippenhahnRenderer.BURNING_LABEL + " against age, " + what + ", "
                             + o.physics().describe() + "; burning is hatched only at ages when it gives at least "
                             + "1 % of the star's luminosity, where the track records that share.",
-                    () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track(), run.timeline(o.trackId())))));
+                    () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track(), run.timeline(o.trackId())),
+                            ZoneCoordinate.MASS_FRACTION, names)));
             if (Kippenhahn.build(o, t.track(), run.timeline(o.trackId())).hasThinEnvelope()) {
                 entries.add(new MapEntry(ZONES_AGE_DEPTH_FILES + stem, MapEntry.ZONES_AGE, group,
                         "The same against \u2212log10(1 \u2212 m/M), surface at the top, so the thin convective "
                                 + "envelope shows, " + what + ".",
                         () -> KippenhahnRenderer.render(Kippenhahn.build(o, t.track(), run.timeline(o.trackId())),
-                                ZoneCoordinate.SURFACE_DEPTH)));
+                                ZoneCoordinate.SURFACE_DEPTH, names)));
             }
         }
         return entries;
     }
 
-    /** The report group of a chart of one metallicity: {@code Z = 0.014}, with the physics when the run has several. */
+    /**
+     * The report group of a chart of one metallicity: {@code Z = 0.014} (with its [Fe/H] first when the grid gave
+     * [Fe/H]), with the physics when the run has several.
+     */
     private static String groupOf(double zInit, PhysicsKey physics, RunData run) {
         long combos = run.catalogue().stream().map(PhysicsKey::of).distinct().count();
-        return "Z = " + SliceLabels.number(zInit) + (combos > 1 ? ", " + physics.describe() : "");
+        return run.metallicityNames().of(zInit) + (combos > 1 ? ", " + physics.describe() : "");
     }
 }

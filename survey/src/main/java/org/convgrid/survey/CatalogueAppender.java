@@ -11,6 +11,7 @@ import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.batch.OutcomeSink;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.IronAbundance;
 import org.convgrid.output.catalogue.CatalogueWriter;
 import org.convgrid.output.catalogue.ZoneTable;
 import org.convgrid.output.catalogue.OutcomeRows;
@@ -34,11 +35,15 @@ public final class CatalogueAppender implements OutcomeSink, Closeable {
         this.zonesFile = zonesFile;
     }
 
-    /** Opens the catalogue for appending, writing the header first when {@code withHeader}. */
-    public static CatalogueAppender open(Path catalogue, boolean withHeader) throws IOException {
+    /**
+     * Opens the catalogue for appending, writing the header first when {@code withHeader}; [Fe/H] against
+     * {@code iron}'s Sun (the run's).
+     */
+    public static CatalogueAppender open(Path catalogue, boolean withHeader, IronAbundance iron) throws IOException {
         Writer out = Files.newBufferedWriter(catalogue, StandardCharsets.UTF_8, StandardOpenOption.CREATE,
                 StandardOpenOption.WRITE, StandardOpenOption.APPEND);
-        CatalogueWriter writer = withHeader ? CatalogueWriter.startingWithHeader(out) : CatalogueWriter.continuing(out);
+        CatalogueWriter writer = withHeader ? CatalogueWriter.startingWithHeader(out, iron)
+                : CatalogueWriter.continuing(out, iron);
         writer.flush();
         Path zonesFile = catalogue.resolveSibling(RunLayout.ZONES);
         boolean zonesHeader = !Files.exists(zonesFile) || Files.size(zonesFile) == 0;

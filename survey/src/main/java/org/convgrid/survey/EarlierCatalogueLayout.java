@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.util.List;
 import org.convgrid.engine.request.OvershootScheme;
+import org.convgrid.output.IronAbundance;
 import org.convgrid.output.catalogue.CatalogueColumns;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
@@ -14,8 +15,9 @@ import org.convgrid.output.catalogue.CatalogueWriter;
  * {@code merge} can continue it: its columns must be the first of this version's, in order (columns are only ever
  * added at the end; column descriptions in the header may have been reworded). The rows are read by column name and
  * written again, so their cells keep their text and a column the file lacked is empty, but for the overshoot profile,
- * which is the grid's (one profile per grid; the run or merge has checked the grid is the catalogue's). A catalogue of
- * another table, or one whose columns differ otherwise, is not this version's to upgrade.
+ * which is the grid's (one profile per grid; the run or merge has checked the grid is the catalogue's), and
+ * {@code fe_h_dex}, which the writer computes from each row's z_init and y_init against the grid's Sun. A catalogue
+ * of another table, or one whose columns differ otherwise, is not this version's to upgrade.
  */
 final class EarlierCatalogueLayout {
 
@@ -25,11 +27,12 @@ final class EarlierCatalogueLayout {
     /**
      * @param text complete lines of a catalogue file
      * @param overshootProfile the grid's overshoot profile, for rows written before the column that names it
+     * @param iron the Sun the grid's [Fe/H] is measured against, for the header and the {@code fe_h_dex} cells
      * @return the same rows under this version's header; {@code text} itself when it already has that header; null
      *     when its columns are not a leading part of this version's
      */
-    static String upgraded(String text, OvershootScheme overshootProfile) {
-        String header = RunDirectory.catalogueHeader();
+    static String upgraded(String text, OvershootScheme overshootProfile, IronAbundance iron) {
+        String header = RunDirectory.catalogueHeader(iron);
         if (text.startsWith(header)) {
             return text;
         }
@@ -42,7 +45,7 @@ final class EarlierCatalogueLayout {
             return null;
         }
         StringBuilder out = new StringBuilder(header);
-        try (CatalogueWriter writer = CatalogueWriter.continuing(out)) {
+        try (CatalogueWriter writer = CatalogueWriter.continuing(out, iron)) {
             for (CatalogueRow row : CatalogueReader.readCompleteLines(text)) {
                 writer.write(row.withOvershootProfileIfUnknown(overshootProfile));
             }

@@ -118,7 +118,7 @@ public final class GridRun {
         // unfinished until the end: it says how many models the directory is to hold, should the run be cut short
         RunManifest start = manifest(s, shard, started, null, Map.of(), Double.NaN).unfinished(Map.of(), Double.NaN,
                 owned);
-        dir.create(RunManifestWriter.toYaml(start));
+        dir.create(RunManifestWriter.toYaml(start), start.ironAbundance());
         return new Plan(s, shard, new KeptCatalogue(Set.of(), true, 0), owned, started, Double.NaN, removed);
     }
 
@@ -217,7 +217,8 @@ public final class GridRun {
         interruption.timedBy(timed::medianSecondsPerModel);
         Set<String> done = plan.kept().ids();
         Map<ModelStatus, Long> emitted;
-        try (CatalogueAppender sink = CatalogueAppender.open(dir.catalogue(), !plan.kept().hasHeader())) {
+        try (CatalogueAppender sink = CatalogueAppender.open(dir.catalogue(), !plan.kept().hasHeader(),
+                GridIronAbundance.of(s.grid().spec()))) {
             emitted = ChunkSweep.run(work, s.grid().spec().requests().iterator(), MASSES_PER_CHUNK, plan.shard(),
                     r -> done.contains(r.modelId()), timed, o -> interruption.write(() -> sink.accept(o)), progress,
                     plan.remaining());
@@ -225,7 +226,8 @@ public final class GridRun {
         FinishedRun[] run = new FinishedRun[1];
         Map<ModelStatus, Long> counts = new java.util.EnumMap<>(ModelStatus.class);
         interruption.finalWrite(() -> {
-            LifeEventLog.tidy(dir.layout().lifeEvents(), s.grid().spec().physics().overshootScheme());
+            LifeEventLog.tidy(dir.layout().lifeEvents(), s.grid().spec().physics().overshootScheme(),
+                    GridIronAbundance.of(s.grid().spec()));
             List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
             counts.putAll(RunFinishing.countByStatus(rows));
             double median = timed.medianSecondsPerModel();
@@ -274,7 +276,7 @@ public final class GridRun {
         GridFile g = s.grid();
         return new RunManifest(toolVersion, toolCommit, g.name(), g.text(), g.fileSha256(), g.modelsSha256(),
                 g.spec().physics().combinations(), started, finished, s.threads(), ShardChoice.label(shard), counts,
-                median, g.spec().ages().origin());
+                median, g.spec().ages().origin(), RunManifest.EXPECTED_UNKNOWN, GridIronAbundance.of(g.spec()));
     }
 
     private static String shard(Shard shard) {

@@ -47,7 +47,8 @@ public record KeptCatalogue(Set<String> ids, boolean hasHeader, long droppedByte
         Set<String> ids = new HashSet<>();
         boolean rewrite = false;
         if (complete > 0) {
-            String current = EarlierCatalogueLayout.upgraded(text, plan.grid().physics().overshootScheme());
+            String current = EarlierCatalogueLayout.upgraded(text, plan.grid().physics().overshootScheme(),
+                    GridIronAbundance.of(plan.grid()));
             if (current == null) {
                 throw new RunSetupException(catalogue + " has another header than this version writes; "
                         + "cannot continue it");

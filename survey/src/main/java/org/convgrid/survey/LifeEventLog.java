@@ -11,6 +11,7 @@ import java.util.Collection;
 import java.util.List;
 import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.IronAbundance;
 import org.convgrid.output.events.LifeEventReader;
 import org.convgrid.output.events.LifeEventRow;
 import org.convgrid.output.events.LifeEventWriter;
@@ -24,11 +25,16 @@ import org.convgrid.output.events.LifeEventWriter;
 public final class LifeEventLog {
 
     private final Path file;
+    private final IronAbundance iron;
     private boolean headerChecked;
 
-    /** @param file the table ({@code life_events.csv} of the run directory) */
-    public LifeEventLog(Path file) {
+    /**
+     * @param file the table ({@code life_events.csv} of the run directory)
+     * @param iron the Sun the grid's [Fe/H] is measured against ({@code fe_h_dex})
+     */
+    public LifeEventLog(Path file, IronAbundance iron) {
         this.file = file;
+        this.iron = iron;
     }
 
     /**
@@ -40,10 +46,10 @@ public final class LifeEventLog {
         if (!headerChecked) {
             headerChecked = true;
             if (Files.exists(file) && !firstLine(file).equals(LifeEventWriter.header().strip())) {
-                write(file, LifeEventReader.read(file));
+                write(file, LifeEventReader.read(file), iron);
             }
         }
-        String text = (Files.exists(file) ? "" : LifeEventWriter.header()) + LifeEventWriter.line(row);
+        String text = (Files.exists(file) ? "" : LifeEventWriter.header()) + LifeEventWriter.line(row, iron);
         try {
             Files.writeString(file, text, StandardCharsets.UTF_8, StandardOpenOption.CREATE,
                     StandardOpenOption.APPEND);
@@ -54,22 +60,23 @@ public final class LifeEventLog {
 
     /**
      * Rewrites a table in its final order, rows of an earlier version taking {@code overshootProfile}, the grid's
-     * (the run has checked the table is this grid's; its stars may all be done, so no row appended says it); does
-     * nothing when there is none (no star evolved from birth).
+     * (the run has checked the table is this grid's; its stars may all be done, so no row appended says it), and
+     * every row its [Fe/H] against {@code iron}'s Sun; does nothing when there is none (no star evolved from birth).
      */
-    public static void tidy(Path file, OvershootScheme overshootProfile) throws IOException {
+    public static void tidy(Path file, OvershootScheme overshootProfile, IronAbundance iron) throws IOException {
         if (Files.exists(file)) {
             write(file, LifeEventReader.read(file).stream()
-                    .map(r -> r.withOvershootProfileIfUnknown(overshootProfile)).toList());
+                    .map(r -> r.withOvershootProfileIfUnknown(overshootProfile)).toList(), iron);
         }
     }
 
     /**
      * Joins the tables of several run directories (shards) into {@code target}; none written when none exists. Rows
-     * of a table an earlier version wrote take {@code overshootProfile}, the grid's.
+     * of a table an earlier version wrote take {@code overshootProfile}, the grid's; [Fe/H] against {@code iron}'s
+     * Sun, the grid's.
      */
-    public static void merge(Collection<Path> tables, Path target, OvershootScheme overshootProfile)
-            throws IOException {
+    public static void merge(Collection<Path> tables, Path target, OvershootScheme overshootProfile,
+                             IronAbundance iron) throws IOException {
         List<LifeEventRow> rows = new ArrayList<>();
         boolean any = false;
         for (Path t : tables) {
@@ -77,7 +84,7 @@ public final class LifeEventLog {
             LifeEventReader.read(t).forEach(r -> rows.add(r.withOvershootProfileIfUnknown(overshootProfile)));
         }
         if (any) {
-            write(target, rows);
+            write(target, rows, iron);
         }
     }
 
@@ -87,9 +94,9 @@ public final class LifeEventLog {
         }
     }
 
-    private static void write(Path file, List<LifeEventRow> rows) throws IOException {
+    private static void write(Path file, List<LifeEventRow> rows, IronAbundance iron) throws IOException {
         StringWriter text = new StringWriter();
-        LifeEventWriter.write(rows, text);
+        LifeEventWriter.write(rows, iron, text);
         AtomicFiles.writeString(file, text.toString());
     }
 }

@@ -14,6 +14,7 @@ import org.convgrid.engine.batch.Shard;
 import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.OutputFormatException;
 import org.convgrid.output.RunLayout;
+import org.convgrid.output.IronAbundance;
 import org.convgrid.output.catalogue.CatalogueWriter;
 import org.convgrid.output.catalogue.ZoneTable;
 import org.convgrid.output.manifest.RunManifest;
@@ -139,11 +140,14 @@ public final class RunDirectory {
         return EarlierRunFiles.describe(layout, files);
     }
 
-    /** The catalogue's header line, with its line end, exactly as {@link CatalogueWriter} writes it. */
-    public static String catalogueHeader() {
+    /**
+     * The catalogue's header lines, with their line end, exactly as {@link CatalogueWriter} writes them for a run
+     * whose [Fe/H] is measured against {@code iron}'s Sun (the one column description that depends on the run).
+     */
+    public static String catalogueHeader(IronAbundance iron) {
         StringBuilder header = new StringBuilder();
         try {
-            CatalogueWriter.startingWithHeader(header).flush();
+            CatalogueWriter.startingWithHeader(header, iron).flush();
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
@@ -154,12 +158,12 @@ public final class RunDirectory {
      * Creates the directory (and missing parents), writes the start manifest and a catalogue holding only its
      * header. On failure removes what it created and throws one message naming the directory and the reason.
      */
-    public void create(String manifestYaml) throws IOException {
+    public void create(String manifestYaml, IronAbundance iron) throws IOException {
         Path top = topMissing(root());
         try {
             Files.createDirectories(root());
             AtomicFiles.writeString(manifest(), manifestYaml);
-            Files.writeString(catalogue(), catalogueHeader(), StandardCharsets.UTF_8, StandardOpenOption.CREATE_NEW,
+            Files.writeString(catalogue(), catalogueHeader(iron), StandardCharsets.UTF_8, StandardOpenOption.CREATE_NEW,
                     StandardOpenOption.WRITE);
             Files.writeString(zones(), ZoneTable.headerLine(), StandardCharsets.UTF_8, StandardOpenOption.CREATE,
                     StandardOpenOption.TRUNCATE_EXISTING, StandardOpenOption.WRITE);

@@ -36,7 +36,8 @@ public final class RunFinishing {
     public static FinishedRun writeTables(RunDirectory dir, GridSpec grid, RunManifest manifest,
                                           List<CatalogueRow> catalogue) throws IOException {
         List<TransitionRow> transitions = TransitionFinder.withDefaults().find(catalogue);
-        AtomicFiles.write(dir.transitions(), out -> TransitionWriter.write(transitions, out));
+        AtomicFiles.write(dir.transitions(),
+                out -> TransitionWriter.write(transitions, GridIronAbundance.of(grid), out));
         AtomicFiles.writeString(dir.manifest(), RunManifestWriter.toYaml(manifest));
         return new FinishedRun(dir.root(), grid, manifest, catalogue, transitions);
     }

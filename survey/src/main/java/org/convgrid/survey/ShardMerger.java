@@ -18,6 +18,7 @@ import org.convgrid.grids.GridHash;
 import org.convgrid.grids.GridSpec;
 import org.convgrid.grids.yaml.GridFileReader;
 import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.IronAbundance;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
@@ -66,7 +67,8 @@ public final class ShardMerger {
             manifests.add(RunManifestReader.read(Files.readString(dir.manifest())));
         }
         GridSpec grid = commonGrid(shards, manifests);
-        ShardRows rows = new ShardRows(grid.physics().overshootScheme());
+        IronAbundance iron = GridIronAbundance.of(grid);
+        ShardRows rows = new ShardRows(grid.physics().overshootScheme(), iron);
         for (Path shard : shards) {
             rows.add(new RunDirectory(shard).catalogue(), shard);
         }
@@ -78,7 +80,7 @@ public final class ShardMerger {
         FinishedRun run;
         try {
             AtomicFiles.write(out.catalogue(), w -> {
-                w.append(RunDirectory.catalogueHeader());
+                w.append(RunDirectory.catalogueHeader(iron));
                 for (String line : ordered) {
                     w.append(line).append('\n');
                 }
@@ -86,10 +88,10 @@ public final class ShardMerger {
             copyTracks(shards, out);
             copyProfiles(shards, out);
             LifeEventLog.merge(shards.stream().map(d -> new RunDirectory(d).layout().lifeEvents()).toList(),
-                    out.layout().lifeEvents(), grid.physics().overshootScheme());
+                    out.layout().lifeEvents(), grid.physics().overshootScheme(), iron);
             List<CatalogueRow> mergedRows = CatalogueReader.read(out.catalogue());
             writeZones(shards, out, mergedRows);
-            run = RunFinishing.writeTables(out, grid, merged(manifests, mergedRows), mergedRows);
+            run = RunFinishing.writeTables(out, grid, merged(manifests, mergedRows, iron), mergedRows);
         } catch (IOException e) {
             if (top != null) {
                 RunDirectory.deleteTree(top);
@@ -183,9 +185,10 @@ public final class ShardMerger {
 
     /**
      * The merged provenance: the first shard's grid and tool, the earliest start, the latest end (now when a shard
-     * never finished), the shards' threads summed, the median of the shards' medians, counts of the merged rows.
+     * never finished), the shards' threads summed, the median of the shards' medians, counts of the merged rows, the
+     * grid's [Fe/H] reference {@code iron} (shards written before manifests recorded it do not say it).
      */
-    private RunManifest merged(List<RunManifest> shards, List<CatalogueRow> rows) {
+    private RunManifest merged(List<RunManifest> shards, List<CatalogueRow> rows, IronAbundance iron) {
         RunManifest first = shards.get(0);
         Instant started = shards.stream().map(RunManifest::started).min(Comparator.naturalOrder()).orElseThrow();
         Instant finished = shards.stream().anyMatch(m -> m.finished() == null) ? clock.instant()
@@ -196,6 +199,6 @@ public final class ShardMerger {
                 .filter(Double::isFinite).toArray());
         return new RunManifest(toolVersion, toolCommit, first.gridFile(), first.gridText(), first.gridFileSha256(),
                 first.gridModelsSha256(), first.physics(), started, finished, threads, null,
-                RunFinishing.countByStatus(rows), median, first.ageOrigin());
+                RunFinishing.countByStatus(rows), median, first.ageOrigin(), RunManifest.EXPECTED_UNKNOWN, iron);
     }
 }

@@ -14,6 +14,7 @@ import java.util.Set;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.grids.GridSpec;
+import org.convgrid.output.IronAbundance;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.RefinedModelIds;
@@ -32,19 +33,24 @@ final class ShardRows {
     private final Map<String, Path> origin = new HashMap<>();
     private final Set<String> duplicates = new LinkedHashSet<>();
     private final OvershootScheme overshootProfile;
+    private final IronAbundance iron;
 
-    /** @param overshootProfile the grid's overshoot profile, for rows of shards written before the column named it */
-    ShardRows(OvershootScheme overshootProfile) {
+    /**
+     * @param overshootProfile the grid's overshoot profile, for rows of shards written before the column named it
+     * @param iron the Sun the grid's [Fe/H] is measured against, for rows of shards written before fe_h_dex
+     */
+    ShardRows(OvershootScheme overshootProfile, IronAbundance iron) {
         this.overshootProfile = overshootProfile;
+        this.iron = iron;
     }
 
     /** Adds the complete lines of one shard's catalogue (each row checked by the catalogue reader). */
     void add(Path catalogue, Path shard) throws IOException {
         byte[] bytes = Files.readAllBytes(catalogue);
-        String header = RunDirectory.catalogueHeader();
+        String header = RunDirectory.catalogueHeader(iron);
         // a shard written by an earlier version is read in this version's layout
         String text = EarlierCatalogueLayout.upgraded(
-                new String(bytes, 0, KeptCatalogue.lastLineEnd(bytes), StandardCharsets.UTF_8), overshootProfile);
+                new String(bytes, 0, KeptCatalogue.lastLineEnd(bytes), StandardCharsets.UTF_8), overshootProfile, iron);
         if (text == null) {
             throw new RunSetupException(catalogue + " has another header than this version writes");
         }

@@ -10,6 +10,7 @@ import org.convgrid.engine.birth.TrackPoint;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.grids.ModelIdFormat;
 import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.IronAbundance;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.events.LifeEventRow;
 import org.convgrid.output.track.TrackWriter;
@@ -31,17 +32,18 @@ public final class TrackFiles implements StarTrackSink {
 
     /** @param layout the run directory whose {@code tracks} and life-events table receive the files */
     public TrackFiles(RunLayout layout) {
-        this(layout, new SweepInterruption());
+        this(layout, IronAbundance.DEFAULT, new SweepInterruption());
     }
 
     /**
      * @param layout the run directory whose {@code tracks} and life-events table receive the files
+     * @param iron the Sun the grid's [Fe/H] is measured against (the life-events table's {@code fe_h_dex})
      * @param interruption the run's: each life-events row is appended through it, so that an interruption never
      *                     leaves half a row (track files are whole anyway: written under a temporary name, then renamed)
      */
-    public TrackFiles(RunLayout layout, SweepInterruption interruption) {
+    public TrackFiles(RunLayout layout, IronAbundance iron, SweepInterruption interruption) {
         this.layout = layout;
-        this.events = new LifeEventLog(layout.lifeEvents());
+        this.events = new LifeEventLog(layout.lifeEvents(), iron);
         this.interruption = interruption;
     }
 

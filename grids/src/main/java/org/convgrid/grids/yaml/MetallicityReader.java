@@ -76,7 +76,8 @@ final class MetallicityReader {
             }
             List<Double> zs = byIron ? ironToMetals(values, iron, law, null, axisNodes, reader) : values;
             // only the converted list can hold a null (a Z out of range, recorded)
-            return byIron && zs.contains(null) ? null : byLaw(zs, byIron ? values : null, law, axisNodes, reader);
+            return byIron && zs.contains(null) ? null
+                    : byLaw(zs, byIron ? values : null, iron, law, axisNodes, reader);
         }
         List<Double> ys = AxisValues.any(fields.value("y"), "y", Y_RANGE, reader);
         if (values == null || ys == null || iron == null) {
@@ -93,7 +94,7 @@ final class MetallicityReader {
         for (int i = 0; i < values.size(); i++) {
             // a Z outside its range is already recorded; every other composition is still checked, all at once
             points.add(zs.get(i) == null ? null : point(zs.get(i), ys.get(i), byIron ? values.get(i) : Double.NaN,
-                    yNodes.get(i), "y = " + NodeReader.written(yNodes.get(i)), reader));
+                    iron, yNodes.get(i), "y = " + NodeReader.written(yNodes.get(i)), reader));
         }
         if (points.contains(null)) {
             return null;
@@ -148,28 +149,32 @@ final class MetallicityReader {
         return primordial == null || enrichment == null ? null : new HeliumLaw(primordial, enrichment);
     }
 
-    /** @param irons the [Fe/H] each Z came from, or null when the file gave Z */
-    private static List<MetallicityPoint> byLaw(List<Double> zs, List<Double> irons, HeliumLaw law, List<Node> zNodes,
-                                                NodeReader reader) {
+    /**
+     * @param irons the [Fe/H] each Z came from, or null when the file gave Z
+     * @param iron the Sun they are measured against (the default one when the file gave Z)
+     */
+    private static List<MetallicityPoint> byLaw(List<Double> zs, List<Double> irons, IronToMetals iron, HeliumLaw law,
+                                                List<Node> zNodes, NodeReader reader) {
         List<MetallicityPoint> points = new ArrayList<>();
         for (int i = 0; i < zs.size(); i++) {
             double y = law.helium(zs.get(i));
             String how = "Y = " + MessageNumbers.format(law.primordial()) + " + "
                     + MessageNumbers.format(law.enrichment()) + " * " + MessageNumbers.format(zs.get(i)) + " = "
                     + MessageNumbers.format(y);
-            points.add(point(zs.get(i), y, irons == null ? Double.NaN : irons.get(i), zNodes.get(i), how, reader));
+            points.add(point(zs.get(i), y, irons == null ? Double.NaN : irons.get(i), iron, zNodes.get(i), how,
+                    reader));
         }
         return points.contains(null) ? null : points;
     }
 
-    private static MetallicityPoint point(double z, double y, double ironDex, Node at, String how,
+    private static MetallicityPoint point(double z, double y, double ironDex, IronToMetals iron, Node at, String how,
                                           NodeReader reader) {
         if (!(y >= 0.0 && y + z < 1.0)) {
             reader.problem(at, GridProblemKind.OUT_OF_RANGE,
                     how + " with Z = " + MessageNumbers.format(z) + " leaves no hydrogen (need Y >= 0 and Y + Z < 1)");
             return null;
         }
-        return new MetallicityPoint(z, y, ironDex);
+        return new MetallicityPoint(z, y, ironDex, iron);
     }
 
     private static Double ranged(Node node, String what, Range range, NodeReader reader) {

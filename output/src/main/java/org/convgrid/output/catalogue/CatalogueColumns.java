@@ -3,11 +3,13 @@ package org.convgrid.output.catalogue;
 import java.util.List;
 import java.util.stream.Stream;
 import org.convgrid.output.EcsvColumn;
+import org.convgrid.output.IronAbundance;
 
 /**
  * The columns of {@code catalogue.ecsv} (catalogue v2), in the order the README's "Catalogue" section fixes; the only
  * place their names, units, types and descriptions are spelled. {@link #FIXED} are required when reading;
- * {@link #EXTENSIONS} follow them.
+ * {@link #EXTENSIONS} follow them. One description depends on the run: {@link #FE_H_DEX}'s names the Sun its
+ * [Fe/H] is measured against ({@link #described}).
  */
 public final class CatalogueColumns {
 
@@ -48,12 +50,14 @@ public final class CatalogueColumns {
     public static final String CORE_MIXED_MASS_FRAC = "core_mixed_mass_frac";
     /** Extension: which overshoot profile {@link #OVERSHOOT_HP} is the length of. */
     public static final String OVERSHOOT_PROFILE = "overshoot_profile";
+    /** Extension: spectroscopic [Fe/H] of z_init and y_init ({@link IronAbundance}); empty when Z = 0. */
+    public static final String FE_H_DEX = "fe_h_dex";
 
     private static final String REAL = "float64";
     private static final String TEXT = "string";
 
-    /** Every column convgrid writes, in order, with its unit, type and one-line description. */
-    public static final List<EcsvColumn> DESCRIBED = List.of(
+    /** Every column but {@link #FE_H_DEX}, in order, with its unit, type and one-line description. */
+    private static final List<EcsvColumn> BEFORE_FE_H = List.of(
             new EcsvColumn(MODEL_ID, "", TEXT, "stable key built from the grid indices"),
             new EcsvColumn(MASS_MSUN, "solMass", REAL, "total mass"),
             new EcsvColumn(Z_INIT, "", REAL, "initial metal mass fraction"),
@@ -103,6 +107,9 @@ public final class CatalogueColumns {
                             + " from 2 solMass up, none up to 1.2 solMass, linear between) or decaying (f, the"
                             + " e-folding length of the diffusive profile); empty in rows written before the column"));
 
+    /** Every column convgrid writes for a run whose [Fe/H] is measured against the default Sun. */
+    public static final List<EcsvColumn> DESCRIBED = described(IronAbundance.DEFAULT);
+
     /** The columns the README fixes, in order. */
     public static final List<String> FIXED = DESCRIBED.subList(0, 26).stream().map(EcsvColumn::name).toList();
 
@@ -114,5 +121,11 @@ public final class CatalogueColumns {
     public static final List<String> HEADER = Stream.concat(FIXED.stream(), EXTENSIONS.stream()).toList();
 
     private CatalogueColumns() {
+    }
+
+    /** Every column convgrid writes, in order, with its unit, type and description, [Fe/H] against {@code iron}. */
+    public static List<EcsvColumn> described(IronAbundance iron) {
+        return Stream.concat(BEFORE_FE_H.stream(),
+                Stream.of(new EcsvColumn(FE_H_DEX, "dex", REAL, iron.columnDescription()))).toList();
     }
 }

@@ -9,6 +9,8 @@ public final class LifeEventColumns {
     public static final String MASS = "mass_msun";
     public static final String Z_INIT = "z_init";
     public static final String Y_INIT = "y_init";
+    /** Spectroscopic [Fe/H] of z_init and y_init (the catalogue's column of that name); empty when Z = 0. */
+    public static final String FE_H_DEX = "fe_h_dex";
     public static final String MIXING_LENGTH = "mixing_length";
     public static final String OVERSHOOT = "overshoot_hp";
     public static final String OVERSHOOT_PROFILE = "overshoot_profile";
@@ -22,14 +24,14 @@ public final class LifeEventColumns {
     public static final String TRACK_END = "track_end_myr";
 
     /** Every column, in the order the writer writes them. */
-    public static final List<String> ALL = List.of(TRACK_ID, MASS, Z_INIT, Y_INIT, MIXING_LENGTH, OVERSHOOT,
-            OVERSHOOT_PROFILE, RADIATIVE_CORE, RADIATIVE_CORE_END, ZAMS, CONV_CORE_ONSET, CONV_CORE_END, LI_HALVED,
-            CENTRAL_H_EXHAUSTED, TRACK_END);
+    public static final List<String> ALL = List.of(TRACK_ID, MASS, Z_INIT, Y_INIT, FE_H_DEX, MIXING_LENGTH,
+            OVERSHOOT, OVERSHOOT_PROFILE, RADIATIVE_CORE, RADIATIVE_CORE_END, ZAMS, CONV_CORE_ONSET, CONV_CORE_END,
+            LI_HALVED, CENTRAL_H_EXHAUSTED, TRACK_END);
 
     /**
      * The columns every readable table has. Tables written before {@link #CENTRAL_H_EXHAUSTED},
      * {@link #RADIATIVE_CORE_END}, {@link #TRACK_END} and {@link #OVERSHOOT_PROFILE} were added lack them (read as
-     * empty).
+     * empty); {@link #FE_H_DEX} is never read, being computed from z_init and y_init whenever a row is written.
      */
     public static final List<String> REQUIRED = List.of(TRACK_ID, MASS, Z_INIT, Y_INIT, MIXING_LENGTH, OVERSHOOT,
             RADIATIVE_CORE, ZAMS, CONV_CORE_ONSET, CONV_CORE_END, LI_HALVED);

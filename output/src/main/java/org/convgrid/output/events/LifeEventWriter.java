@@ -7,11 +7,13 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.convgrid.output.CsvNumbers;
+import org.convgrid.output.IronAbundance;
 import org.convgrid.output.OvershootProfileCell;
 
 /**
  * Writes {@code life_events.csv}: a header row of {@link LifeEventColumns#ALL}, then one row per star, ages in Myr
- * since birth, an empty cell for an event that did not happen. Numbers in the {@link CsvNumbers} form.
+ * since birth, an empty cell for an event that did not happen. Numbers in the {@link CsvNumbers} form;
+ * {@code fe_h_dex} measured against the run's Sun ({@link IronAbundance}).
  */
 public final class LifeEventWriter {
 
@@ -23,10 +25,11 @@ public final class LifeEventWriter {
         return String.join(",", LifeEventColumns.ALL) + "\n";
     }
 
-    /** One row, with its line end. */
-    public static String line(LifeEventRow r) {
+    /** One row, with its line end, [Fe/H] against {@code iron}'s Sun. */
+    public static String line(LifeEventRow r, IronAbundance iron) {
         return String.join(",", r.trackId(), CsvNumbers.format(r.massMsun()), CsvNumbers.format(r.zInit()),
-                CsvNumbers.format(r.yInit()), CsvNumbers.format(r.mixingLength()), CsvNumbers.format(r.overshootHp()),
+                CsvNumbers.format(r.yInit()), iron.cell(r.zInit(), r.yInit()), CsvNumbers.format(r.mixingLength()),
+                CsvNumbers.format(r.overshootHp()),
                 OvershootProfileCell.format(r.overshootProfile()),
                 CsvNumbers.format(r.radiativeCoreMyr()), CsvNumbers.format(r.radiativeCoreEndMyr()),
                 CsvNumbers.format(r.zamsMyr()), CsvNumbers.format(r.convCoreOnsetMyr()),
@@ -36,12 +39,13 @@ public final class LifeEventWriter {
 
     /**
      * The whole table: one row per track id (of several rows for one star, the last given: a star recomputed after
-     * an interruption), sorted by track id, so the same stars always give the same bytes.
+     * an interruption), sorted by track id, so the same stars always give the same bytes; [Fe/H] against
+     * {@code iron}'s Sun.
      */
-    public static void write(Collection<LifeEventRow> rows, Appendable out) throws IOException {
+    public static void write(Collection<LifeEventRow> rows, IronAbundance iron, Appendable out) throws IOException {
         out.append(header());
         for (LifeEventRow r : latestByStar(rows)) {
-            out.append(line(r));
+            out.append(line(r, iron));
         }
     }
 

@@ -8,6 +8,7 @@ import java.util.Objects;
 import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.request.PhysicsOptions;
+import org.convgrid.output.IronAbundance;
 
 /**
  * Provenance of one run directory.
@@ -30,14 +31,25 @@ import org.convgrid.engine.request.PhysicsOptions;
  * @param expectedModels how many models the run directory is to hold when complete (the grid's count, or its shard's),
  *                       {@link #EXPECTED_UNKNOWN} when not recorded; written only while the run is unfinished, so a
  *                       reader sees how far it got
+ * @param ironAbundance the Sun the tables' {@code fe_h_dex} is measured against and whether the grid gave [Fe/H]
+ *                      ({@link IronAbundance#DEFAULT} for manifests written before it was recorded)
  */
 public record RunManifest(String toolVersion, String toolCommit, String gridFile, String gridText, String gridFileSha256,
                           String gridModelsSha256, List<PhysicsOptions> physics, Instant started, Instant finished,
                           int threads, String shard, Map<ModelStatus, Long> counts, double medianSecondsPerModel,
-                          AgeOrigin ageOrigin, long expectedModels) {
+                          AgeOrigin ageOrigin, long expectedModels, IronAbundance ironAbundance) {
 
     /** {@link #expectedModels} of a manifest that does not record it (finished runs, earlier versions). */
     public static final long EXPECTED_UNKNOWN = -1;
+
+    /** A manifest of a run whose [Fe/H] is measured against the default Sun, its grid given in Z. */
+    public RunManifest(String toolVersion, String toolCommit, String gridFile, String gridText, String gridFileSha256,
+                       String gridModelsSha256, List<PhysicsOptions> physics, Instant started, Instant finished,
+                       int threads, String shard, Map<ModelStatus, Long> counts, double medianSecondsPerModel,
+                       AgeOrigin ageOrigin, long expectedModels) {
+        this(toolVersion, toolCommit, gridFile, gridText, gridFileSha256, gridModelsSha256, physics, started, finished,
+                threads, shard, counts, medianSecondsPerModel, ageOrigin, expectedModels, IronAbundance.DEFAULT);
+    }
 
     /** A manifest that does not record how many models the run expects. */
     public RunManifest(String toolVersion, String toolCommit, String gridFile, String gridText, String gridFileSha256,
@@ -62,6 +74,7 @@ public record RunManifest(String toolVersion, String toolCommit, String gridFile
                     + expectedModels);
         }
         Objects.requireNonNull(ageOrigin, "ageOrigin");
+        Objects.requireNonNull(ironAbundance, "ironAbundance");
         Objects.requireNonNull(toolVersion, "toolVersion");
         Objects.requireNonNull(toolCommit, "toolCommit");
         Objects.requireNonNull(gridFile, "gridFile");
@@ -85,13 +98,13 @@ public record RunManifest(String toolVersion, String toolCommit, String gridFile
     /** The same manifest, finished at {@code end} with the final counts and median. */
     public RunManifest finishedAt(Instant end, Map<ModelStatus, Long> finalCounts, double median) {
         return new RunManifest(toolVersion, toolCommit, gridFile, gridText, gridFileSha256, gridModelsSha256, physics,
-                started, end, threads, shard, finalCounts, median, ageOrigin, expectedModels);
+                started, end, threads, shard, finalCounts, median, ageOrigin, expectedModels, ironAbundance);
     }
 
     /** The same manifest, not finished, with the counts and median so far and the models the run is to hold. */
     public RunManifest unfinished(Map<ModelStatus, Long> countsSoFar, double median, long expected) {
         return new RunManifest(toolVersion, toolCommit, gridFile, gridText, gridFileSha256, gridModelsSha256, physics,
-                started, null, threads, shard, countsSoFar, median, ageOrigin, expected);
+                started, null, threads, shard, countsSoFar, median, ageOrigin, expected, ironAbundance);
     }
 
     /** Whether the run is known to be unfinished: no finish time. */

@@ -16,6 +16,7 @@ import org.convgrid.engine.physics.opacity.OpacityTableReader;
 import org.convgrid.engine.request.OpacityChoice;
 import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
+import org.convgrid.output.IronAbundance;
 import org.convgrid.output.OutputFormatException;
 import org.snakeyaml.engine.v2.api.Load;
 import org.snakeyaml.engine.v2.api.LoadSettings;
@@ -31,6 +32,17 @@ public final class RunManifestReader {
      */
     public static final int MAX_CODE_POINTS = 64 * 1024 * 1024;
 
+
+    /** The mapping that says how the run's compositions were given and the Sun their [Fe/H] is measured against. */
+    static final String METALLICITY = "metallicity";
+    /**
+     * Under {@link #METALLICITY}: the grid-file key that gave the compositions, {@link #AXIS_Z} or {@link #AXIS_FE_H}.
+     */
+    static final String METALLICITY_AXIS = "axis";
+    static final String AXIS_Z = "z";
+    static final String AXIS_FE_H = "fe_h_dex";
+    /** Under {@link #METALLICITY}: the solar Z/X that [Fe/H] = 0 stands for. */
+    static final String SOLAR_Z_OVER_X = "solar_z_over_x";
 
     /** The commit recorded for manifests written before convgrid recorded it. */
     static final String UNKNOWN_COMMIT = "unknown";
@@ -88,11 +100,43 @@ public final class RunManifestReader {
                     root.containsKey("median_seconds_per_model") ? number(root, "median_seconds_per_model")
                             : Double.NaN, origin,
                     models.containsKey("expected") ? ((Number) models.get("expected")).longValue()
-                            : RunManifest.EXPECTED_UNKNOWN);
+                            : RunManifest.EXPECTED_UNKNOWN, ironAbundance(root));
         } catch (YamlEngineException | ClassCastException | NullPointerException | DateTimeParseException
                  | IllegalArgumentException e) {
             throw new OutputFormatException("not a convgrid manifest: " + e.getMessage(), e);
         }
+    }
+
+    /**
+     * The run's [Fe/H] reference. A manifest written before it was recorded says it through the grid text it quotes
+     * (the grid reader validated it then): a {@code metallicity} section given in {@code fe_h_dex}, against its
+     * {@code solar_z_over_x} or the default Sun; any other grid gave Z, measured against the default Sun.
+     */
+    private static IronAbundance ironAbundance(Map<?, ?> root) {
+        if (!root.containsKey(METALLICITY)) {
+            return ironAbundanceOfGridText(map(root.get("grid"), "grid").get("text"));
+        }
+        Map<?, ?> metallicity = map(root.get(METALLICITY), METALLICITY);
+        Object axis = metallicity.get(METALLICITY_AXIS);
+        if (!AXIS_Z.equals(axis) && !AXIS_FE_H.equals(axis)) {
+            throw new IllegalArgumentException("metallicity axis must be " + AXIS_Z + " or " + AXIS_FE_H + ", got "
+                    + axis);
+        }
+        return new IronAbundance(number(metallicity, SOLAR_Z_OVER_X), AXIS_FE_H.equals(axis));
+    }
+
+    private static IronAbundance ironAbundanceOfGridText(Object text) {
+        Object grid;
+        try {
+            grid = text instanceof String t ? new Load(LoadSettings.builder().build()).loadFromString(t) : null;
+        } catch (YamlEngineException e) {
+            grid = null;
+        }
+        if (grid instanceof Map<?, ?> g && g.get(METALLICITY) instanceof Map<?, ?> m && m.containsKey(AXIS_FE_H)) {
+            return new IronAbundance(m.get(SOLAR_Z_OVER_X) instanceof Number n ? n.doubleValue()
+                    : IronAbundance.DEFAULT.solarZOverX(), true);
+        }
+        return IronAbundance.DEFAULT;
     }
 
     private static Map<?, ?> map(Object value, String what) {

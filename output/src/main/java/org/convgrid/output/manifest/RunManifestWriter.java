@@ -18,8 +18,9 @@ import org.snakeyaml.engine.v2.common.FlowStyle;
  * {@code tool_version}, {@code tool_commit}, {@code grid} ({@code file}, {@code sha256}, {@code models_sha256}, {@code text}),
  * {@code physics} (list of {@code mixing_length}, {@code overshoot}, {@code criterion}, {@code opacity_scale},
  * {@code atmosphere}, {@code overshoot_profile}, and {@code opacity_table} when a user table is named),
- * {@code core_threshold_mass_frac}, {@code age_origin} ({@code birth} or {@code zams}: where the run's ages count
- * from), {@code started}, {@code finished} (ISO-8601 UTC instants), {@code threads}, {@code shard}, {@code models}
+ * {@code core_threshold_mass_frac}, {@code metallicity} ({@code axis}: {@code fe_h_dex} when the grid gave [Fe/H],
+ * else {@code z}; {@code solar_z_over_x}: the Sun the tables' {@code fe_h_dex} is measured against),
+ * {@code age_origin} ({@code birth} or {@code zams}: where the run's ages count from), {@code started}, {@code finished} (ISO-8601 UTC instants), {@code threads}, {@code shard}, {@code models}
  * ({@code total}, one count per status label and, while the run is unfinished, {@code expected}: how many models it
  * is to hold), {@code median_seconds_per_model} (left out when no model was timed: never {@code .nan}).
  */
@@ -70,6 +71,12 @@ public final class RunManifestWriter {
         root.put("physics", physics);
         // the one threshold behind structure_class, the core columns and the transitions
         root.put("core_threshold_mass_frac", ConvectiveZoneFinder.DEFAULT_MIN_CORE_MASS_FRACTION);
+        // so that plot and readers can recompute fe_h_dex, and know whether the user spoke in [Fe/H]
+        Map<String, Object> metallicity = new LinkedHashMap<>();
+        metallicity.put(RunManifestReader.METALLICITY_AXIS, m.ironAbundance().givenByGrid()
+                ? RunManifestReader.AXIS_FE_H : RunManifestReader.AXIS_Z);
+        metallicity.put(RunManifestReader.SOLAR_Z_OVER_X, m.ironAbundance().solarZOverX());
+        root.put(RunManifestReader.METALLICITY, metallicity);
         root.put("age_origin", m.ageOrigin().label());
         root.put("started", m.started().toString());
         root.put("finished", m.finished() == null ? null : m.finished().toString());

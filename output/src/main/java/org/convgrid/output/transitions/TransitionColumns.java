@@ -12,6 +12,8 @@ public final class TransitionColumns {
 
     public static final String Z_INIT = "z_init";
     public static final String Y_INIT = "y_init";
+    /** Spectroscopic [Fe/H] of z_init and y_init (the catalogue's column of that name); empty when Z = 0. */
+    public static final String FE_H_DEX = "fe_h_dex";
     public static final String AGE_GYR = "age_gyr";
     public static final String MIXING_LENGTH = "mixing_length";
     public static final String OVERSHOOT_HP = "overshoot_hp";
@@ -37,13 +39,16 @@ public final class TransitionColumns {
     public static final String TOLERANCE_MSUN = "tolerance_msun";
 
     /** The header convgrid writes, in order. */
-    public static final List<String> HEADER = List.of(Z_INIT, Y_INIT, AGE_GYR, MIXING_LENGTH, OVERSHOOT_HP,
+    public static final List<String> HEADER = List.of(Z_INIT, Y_INIT, FE_H_DEX, AGE_GYR, MIXING_LENGTH, OVERSHOOT_HP,
             OVERSHOOT_PROFILE, CRITERION, OPACITY_SCALE, FULLY_CONVECTIVE_LIMIT_MSUN, FULLY_CONVECTIVE_BRACKET_LO_MSUN,
             FULLY_CONVECTIVE_BRACKET_HI_MSUN, CONV_CORE_ONSET_MSUN, CONV_CORE_BRACKET_LO_MSUN,
             CONV_CORE_BRACKET_HI_MSUN, TRANSIENT_CORE_LO_MSUN, TRANSIENT_CORE_HI_MSUN, NOTES, METHOD, TOLERANCE_MSUN);
 
-    /** Columns a table written before them lacks (read as empty). */
-    public static final List<String> ADDED_LATER = List.of(OVERSHOOT_PROFILE);
+    /**
+     * Columns a table written before them lacks (read as empty; {@link #FE_H_DEX} is never read, being computed
+     * from z_init and y_init when the table is written again).
+     */
+    public static final List<String> ADDED_LATER = List.of(OVERSHOOT_PROFILE, FE_H_DEX);
 
     /** A column only the first layout (before version 2) had: its presence marks such a file. */
     public static final String VERSION_1_MARKER = "fully_convective_bracket_msun";

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import org.apache.commons.csv.CSVPrinter;
 import org.convgrid.output.CsvNumbers;
+import org.convgrid.output.IronAbundance;
 import org.convgrid.output.OvershootProfileCell;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueWriter;
@@ -13,28 +14,35 @@ import org.convgrid.output.catalogue.CatalogueWriter;
 /**
  * Writes {@code transitions.csv}: the {@link TransitionColumns#HEADER}, then one row per slice. Masses are reals
  * ({@link CsvNumbers#format}), an empty cell where a transition is not bracketed or there is no transient window.
+ * {@code fe_h_dex} is measured against the run's Sun ({@link IronAbundance}), the default one unless given.
  */
 public final class TransitionWriter {
 
     private TransitionWriter() {
     }
 
-    /** Writes the header and the rows in the given order. */
+    /** Writes the header and the rows in the given order, [Fe/H] against the default Sun. */
     public static void write(List<TransitionRow> rows, Appendable out) throws IOException {
+        write(rows, IronAbundance.DEFAULT, out);
+    }
+
+    /** Writes the header and the rows in the given order, [Fe/H] against {@code iron}'s Sun. */
+    public static void write(List<TransitionRow> rows, IronAbundance iron, Appendable out) throws IOException {
         CSVPrinter printer = new CSVPrinter(out, CatalogueWriter.FORMAT);
         printer.printRecord(TransitionColumns.HEADER);
         for (TransitionRow row : rows) {
-            printer.printRecord(cells(row));
+            printer.printRecord(cells(row, iron));
         }
         printer.flush();
     }
 
-    /** The cells of a row, in {@link TransitionColumns#HEADER} order. */
-    public static List<String> cells(TransitionRow row) {
+    /** The cells of a row, in {@link TransitionColumns#HEADER} order, [Fe/H] against {@code iron}'s Sun. */
+    public static List<String> cells(TransitionRow row, IronAbundance iron) {
         Slice s = row.slice();
         List<String> cells = new ArrayList<>(TransitionColumns.HEADER.size());
         cells.add(CsvNumbers.format(s.zInit()));
         cells.add(CsvNumbers.format(row.yInit()));
+        cells.add(iron.cell(s.zInit(), row.yInit()));
         cells.add(CsvNumbers.format(s.ageGyr()));
         cells.add(CsvNumbers.format(s.mixingLength()));
         cells.add(CsvNumbers.format(s.overshootHp()));

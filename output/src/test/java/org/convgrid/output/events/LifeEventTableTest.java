@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.within;
 
 import java.io.StringReader;
 import java.util.List;
+import org.convgrid.output.IronAbundance;
 import org.convgrid.engine.birth.LifeEvents;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.PhysicsOptions;
@@ -26,12 +27,12 @@ class LifeEventTableTest {
     @Test
     void eventsAreWrittenInMyrWithEmptyCellsAndReadBack() throws Exception {
         StringBuilder text = new StringBuilder();
-        LifeEventWriter.write(List.of(row("p0-z00-m001", 1.0, 48.85)), text);
+        LifeEventWriter.write(List.of(row("p0-z00-m001", 1.0, 48.85)), IronAbundance.DEFAULT, text);
         assertThat(text.toString()).isEqualTo("""
-                track_id,mass_msun,z_init,y_init,mixing_length,overshoot_hp,overshoot_profile,\
+                track_id,mass_msun,z_init,y_init,fe_h_dex,mixing_length,overshoot_hp,overshoot_profile,\
                 radiative_core_myr,radiative_core_end_myr,zams_myr,conv_core_onset_myr,conv_core_end_myr,li_halved_myr,\
                 central_h_exhausted_myr,track_end_myr
-                p0-z00-m001,1.0,0.02,0.28,1.8,0.0,uniform,1.7,,48.85,,,12.5,,600.0
+                p0-z00-m001,1.0,0.02,0.28,0.0668,1.8,0.0,uniform,1.7,,48.85,,,12.5,,600.0
                 """);
         List<LifeEventRow> back = LifeEventReader.read(new StringReader(text.toString()));
         assertThat(back).singleElement().satisfies(r -> {
@@ -49,9 +50,9 @@ class LifeEventTableTest {
                 PhysicsOptions.DEFAULT);
         LifeEventRow transientCore = LifeEventRow.of("p0-z00-m000", first, new LifeEvents(67.44893 * MYR,
                 117.6414 * MYR, Double.NaN, Double.NaN, Double.NaN, 18.22713 * MYR, Double.NaN), 250.0 * MYR);
-        String line = LifeEventWriter.line(transientCore);
+        String line = LifeEventWriter.line(transientCore, IronAbundance.DEFAULT);
         assertThat(line)
-                .isEqualTo("p0-z00-m000,0.26,0.02,0.2771,1.8,0.0,uniform,67.44893,117.6414,,,,18.22713,,250.0\n");
+                .isEqualTo("p0-z00-m000,0.26,0.02,0.2771,0.065,1.8,0.0,uniform,67.44893,117.6414,,,,18.22713,,250.0\n");
         assertThat(LifeEventReader.read(new StringReader(LifeEventWriter.header() + line))).singleElement()
                 .satisfies(r -> assertThat(r.radiativeCoreEndMyr()).isCloseTo(117.6414, within(1e-9)));
     }
@@ -60,7 +61,7 @@ class LifeEventTableTest {
     void aRecomputedStarKeepsItsLastRowAndTheTableIsSortedByTrackId() throws Exception {
         StringBuilder text = new StringBuilder();
         LifeEventWriter.write(List.of(row("p0-z01-m000", 0.5, 200.0), row("p0-z00-m001", 1.0, 40.0),
-                row("p0-z00-m001", 1.0, 48.85)), text);
+                row("p0-z00-m001", 1.0, 48.85)), IronAbundance.DEFAULT, text);
         List<LifeEventRow> back = LifeEventReader.read(new StringReader(text.toString()));
         assertThat(back).extracting(LifeEventRow::trackId).containsExactly("p0-z00-m001", "p0-z01-m000");
         assertThat(back.get(0).zamsMyr()).isCloseTo(48.85, within(1e-12));
@@ -73,7 +74,7 @@ class LifeEventTableTest {
         LifeEventRow turnOff = LifeEventRow.of("p0-z00-m002", first, new LifeEvents(0.6 * MYR, Double.NaN,
                 21.6 * MYR, 10.6 * MYR, 1705.6 * MYR, Double.NaN, Double.NaN)
                 .withCentralHydrogenExhausted(1711.0 * MYR), 1711.0 * MYR);
-        String line = LifeEventWriter.line(turnOff);
+        String line = LifeEventWriter.line(turnOff, IronAbundance.DEFAULT);
         assertThat(line).endsWith(",1705.6,,1711.0,1711.0\n");
         assertThat(LifeEventReader.read(new StringReader(LifeEventWriter.header() + line)))
                 .singleElement().satisfies(r -> assertThat(r.centralHExhaustedMyr()).isCloseTo(1711.0, within(1e-9)));
@@ -108,7 +109,8 @@ class LifeEventTableTest {
 
     @Test
     void aRowCutShortByAnInterruptionIsLeftOut() throws Exception {
-        String text = LifeEventWriter.header() + LifeEventWriter.line(row("p0-z00-m000", 0.3, 150.0))
+        String text = LifeEventWriter.header()
+                + LifeEventWriter.line(row("p0-z00-m000", 0.3, 150.0), IronAbundance.DEFAULT)
                 + "p0-z00-m001,1.0,0.02";
         assertThat(LifeEventReader.read(new StringReader(text))).extracting(LifeEventRow::trackId)
                 .containsExactly("p0-z00-m000");

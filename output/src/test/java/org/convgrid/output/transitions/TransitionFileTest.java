@@ -14,8 +14,8 @@ import org.junit.jupiter.api.Test;
 
 class TransitionFileTest {
 
-    private static final String HEADER = "z_init,y_init,age_gyr,mixing_length,overshoot_hp,overshoot_profile,"
-            + "criterion,opacity_scale,"
+    private static final String HEADER = "z_init,y_init,fe_h_dex,age_gyr,mixing_length,overshoot_hp,"
+            + "overshoot_profile,criterion,opacity_scale,"
             + "fully_convective_limit_msun,fully_convective_bracket_lo_msun,fully_convective_bracket_hi_msun,"
             + "conv_core_onset_msun,conv_core_bracket_lo_msun,conv_core_bracket_hi_msun,transient_core_lo_msun,"
             + "transient_core_hi_msun,notes,method,tolerance_msun";
@@ -35,7 +35,8 @@ class TransitionFileTest {
         String[] lines = text.split("\r?\n");
         assertThat(lines[0]).isEqualTo(HEADER);
         // no transient window: its cells are empty; a grid row has no tolerance; 2 Msun is written as 2.0
-        assertThat(lines[1]).isEqualTo("0.02,0.27,0.0,1.8,0.0,uniform,schwarzschild,1.0,0.3,0.3,0.4,2.0,0.4,2.0,,,"
+        assertThat(lines[1]).isEqualTo("0.02,0.27,0.0606,0.0,1.8,0.0,uniform,schwarzschild,1.0,0.3,0.3,0.4,2.0,0.4,"
+                + "2.0,,,"
                 + "fully convective bracket widened past 1 failed model,grid,");
         List<TransitionRow> back = TransitionReader.read(new StringReader(text));
         assertThat(back).hasSize(1);
@@ -53,7 +54,8 @@ class TransitionFileTest {
         TransitionRow refined = new TransitionRow(row.slice(), row.yInit(), row.fullyConvective(), row.convCoreOnset(),
                 row.transientCore(), TransitionMethod.REFINED, Double.NaN, "").withTolerance(0.002);
         String text = written(List.of(refined));
-        assertThat(text.split("\r?\n")[1]).isEqualTo("0.02,0.27,0.0,1.8,0.0,uniform,schwarzschild,1.0,0.36,0.36,0.37,"
+        assertThat(text.split("\r?\n")[1]).isEqualTo("0.02,0.27,0.0606,0.0,1.8,0.0,uniform,schwarzschild,1.0,0.36,"
+                + "0.36,0.37,"
                 + "1.2,1.1,"
                 + "1.2,0.37,0.37,,refined,0.002");
         TransitionRow back = TransitionReader.read(new StringReader(text)).get(0);
@@ -78,7 +80,7 @@ class TransitionFileTest {
     void aMissingColumnOrAHalfBracketIsAnError() {
         assertThatThrownBy(() -> TransitionReader.read(new StringReader(HEADER.replace(",tolerance_msun", "") + "\n")))
                 .isInstanceOf(OutputFormatException.class).hasMessageContaining("tolerance_msun");
-        String halfBracket = HEADER + "\n0.02,0.27,0.0,1.8,0.0,uniform,schwarzschild,1.0,0.3,0.3,,,,,,,,grid,\n";
+        String halfBracket = HEADER + "\n0.02,0.27,0.0606,0.0,1.8,0.0,uniform,schwarzschild,1.0,0.3,0.3,,,,,,,,grid,\n";
         assertThatThrownBy(() -> TransitionReader.read(new StringReader(halfBracket)))
                 .isInstanceOf(OutputFormatException.class).hasMessageContaining("both be empty or both be masses");
     }

@@ -5,6 +5,7 @@ import java.util.DoubleSummaryStatistics;
 import java.util.List;
 import java.util.Locale;
 import org.convgrid.engine.convection.StructureClass;
+import org.convgrid.plotting.label.MetallicityNames;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.layout.LabelPlacement;
 import org.convgrid.plotting.layout.Obstacles;
@@ -67,9 +68,14 @@ public final class HrDiagramRenderer {
     private HrDiagramRenderer() {
     }
 
-    /** The chart of an HR diagram. */
+    /** The chart of an HR diagram, its metallicities named by Z. */
     public static StyledChart render(HrDiagramData data) {
-        StyledChart chart = ChartStyle.newChart("HR diagram, Z = " + SliceLabels.values(data.metallicities()) + ", "
+        return render(data, MetallicityNames.Z_ONLY);
+    }
+
+    /** The chart of an HR diagram, its metallicities named as {@code names} name them. */
+    public static StyledChart render(HrDiagramData data, MetallicityNames names) {
+        StyledChart chart = ChartStyle.newChart("HR diagram, " + names.values(data.metallicities()) + ", "
                         + ages(data.ages()), data.physics().describe(),
                 "log10(Teff / K)   (hotter to the left)", "log10(L / L\u2609)");
         ChartStyle.legendRight(chart);
@@ -99,7 +105,7 @@ public final class HrDiagramRenderer {
         for (HrDiagramData.ZeroAgeLine line : zeroAge) {
             int zIndex = data.metallicities().indexOf(line.zInit());
             XYSeries s = chart.addSeries((line.ageGyr() == 0 ? "zero age" : age(line.ageGyr()))
-                            + ", Z = " + SliceLabels.number(line.zInit()),
+                            + ", " + names.of(line.zInit()),
                     line.points().stream().mapToDouble(p -> -p.logTeff()).toArray(),
                     line.points().stream().mapToDouble(HrPoint::logL).toArray());
             s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
@@ -107,7 +113,7 @@ public final class HrDiagramRenderer {
             s.setLineColor(ChartStyle.seriesColor(zIndex));
             s.setLineStyle(ChartStyle.dashed(zIndex, 2.0f));
         }
-        addIsochrones(chart, data);
+        addIsochrones(chart, data, names);
         // Marker shape = structure class, colour = Z. The legend shows each shape once, in grey, from a series
         // drawn first at the same points, so the coloured markers painted next cover it.
         for (StructureClass c : StructureClass.values()) {
@@ -353,7 +359,7 @@ public final class HrDiagramRenderer {
      * brightest ends, each where it covers no mass label, no model marker and no other age label
      * ({@link LabelPlacement}).
      */
-    private static void addIsochrones(StyledChart chart, HrDiagramData data) {
+    private static void addIsochrones(StyledChart chart, HrDiagramData data, MetallicityNames names) {
         if (data.isochrones().isEmpty()) {
             return;
         }
@@ -376,7 +382,7 @@ public final class HrDiagramRenderer {
             int zIndex = data.metallicities().indexOf(line.zInit());
             boolean first = data.isochrones().stream().filter(o -> o.zInit() == line.zInit()).findFirst()
                     .get() == line;
-            XYSeries s = chart.addSeries(first ? "Z = " + SliceLabels.number(line.zInit()) : "isochrone " + n++,
+            XYSeries s = chart.addSeries(first ? names.of(line.zInit()) : "isochrone " + n++,
                     line.points().stream().mapToDouble(p -> -p.logTeff()).toArray(),
                     line.points().stream().mapToDouble(HrPoint::logL).toArray());
             s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);

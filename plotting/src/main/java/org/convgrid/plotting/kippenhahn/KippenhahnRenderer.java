@@ -10,6 +10,7 @@ import java.awt.geom.Rectangle2D;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Set;
+import org.convgrid.plotting.label.MetallicityNames;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.ChartNotes;
 import org.convgrid.plotting.style.ChartStyle;
@@ -57,13 +58,18 @@ public final class KippenhahnRenderer {
         return render(data, ZoneCoordinate.MASS_FRACTION);
     }
 
-    /** The chart of one track in the given vertical coordinate. */
+    /** The chart of one track in the given vertical coordinate, its metallicity named by Z. */
     public static StyledChart render(KippenhahnData data, ZoneCoordinate y) {
+        return render(data, y, MetallicityNames.Z_ONLY);
+    }
+
+    /** The chart of one track in the given vertical coordinate, its metallicity named as {@code names} name it. */
+    public static StyledChart render(KippenhahnData data, ZoneCoordinate y, MetallicityNames names) {
         boolean fromBirth = data.timeline().startsAtBirth();
         AgeScale ages = AgeScale.of(fromBirth, data.ageMin(), firstAfterBirth(data), data.ageMax());
         StyledChart chart = ChartStyle.newChart("Convective zones against age, M = "
-                        + SliceLabels.number(data.origin().massMsun()) + " M\u2609, Z = "
-                        + SliceLabels.number(data.origin().zInit()), data.origin().physics().describe(),
+                        + SliceLabels.number(data.origin().massMsun()) + " M\u2609, "
+                        + names.of(data.origin().zInit()), data.origin().physics().describe(),
                 ages.title(fromBirth), y.title());
         ChartStyle.legendRight(chart);
         if (ages.logarithmic()) {

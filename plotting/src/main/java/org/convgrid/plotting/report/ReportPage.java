@@ -22,6 +22,7 @@ import org.convgrid.plotting.GridChoices;
 import org.convgrid.plotting.MapEntry;
 import org.convgrid.plotting.RunData;
 import org.convgrid.plotting.RunMaps;
+import org.convgrid.plotting.label.MetallicityNames;
 import org.convgrid.plotting.label.SliceLabels;
 
 /**
@@ -164,6 +165,11 @@ public final class ReportPage {
                     : SliceLabels.number(m.medianSecondsPerModel()) + " s");
             m.physics().forEach(p -> row(b, "physics", SliceLabels.physics(p.mixingLength(), p.overshoot(),
                     p.overshootScheme(), p.criterion(), p.opacityScale())));
+            if (m.ironAbundance().givenByGrid()) {
+                // the Sun the grid's [Fe/H] (and the tables' fe_h_dex) is measured against
+                row(b, "[Fe/H]", "log10 of (Z/X) over the solar Z/X "
+                        + SliceLabels.number(m.ironAbundance().solarZOverX()) + " (solar-scaled mixture)");
+            }
         }
         // the run's summary line counts the grid's models and the refinement's apart: so does the report
         long refinement = run.catalogue().stream().filter(r -> RefinedModelIds.isRefined(r.modelId())).count();
@@ -283,13 +289,16 @@ public final class ReportPage {
     }
 
     private static void transitions(StringBuilder b, RunData run) {
-        b.append("<h2 id=\"transitions\">Transition masses</h2>\n<table>\n<tr><th>Z</th><th>age</th><th>physics</th>"
+        MetallicityNames names = run.metallicityNames();
+        b.append("<h2 id=\"transitions\">Transition masses</h2>\n<table>\n<tr>" + ironHeading(names)
+                + "<th>Z</th><th>age</th><th>physics</th>"
                 + "<th>fully convective up to / M\u2609</th><th>bracket / M\u2609</th>"
                 + "<th>core in every star above / M\u2609</th><th>bracket / M\u2609</th>"
                 + "<th>small transient cores / M\u2609</th><th>method</th><th>tolerance / M\u2609</th>"
                 + "<th>notes</th></tr>\n");
         for (TransitionRow t : run.transitions()) {
-            b.append("<tr><td class=\"num\">").append(SliceLabels.number(t.slice().zInit()))
+            b.append("<tr>").append(ironCell(names, t.slice().zInit())).append("<td class=\"num\">")
+                    .append(SliceLabels.number(t.slice().zInit()))
                     .append("</td><td class=\"num\">").append(SliceLabels.age(t.slice().ageGyr()))
                     .append("</td><td>").append(Html.escape(SliceLabels.physics(t.slice()))).append("</td>");
             estimate(b, t.fullyConvective(), t.toleranceMsun());
@@ -318,16 +327,29 @@ public final class ReportPage {
             b.append("<p>None: every model converged.</p>\n");
             return;
         }
-        b.append("<table>\n<tr><th>model</th><th>mass / M\u2609</th><th>Z</th><th>age</th><th>status</th>"
+        MetallicityNames names = run.metallicityNames();
+        b.append("<table>\n<tr><th>model</th><th>mass / M\u2609</th>" + ironHeading(names)
+                + "<th>Z</th><th>age</th><th>status</th>"
                 + "<th>reason</th></tr>\n");
         for (CatalogueRow r : failed) {
             b.append("<tr><td>").append(Html.escape(r.modelId())).append("</td><td class=\"num\">")
-                    .append(SliceLabels.number(r.massMsun())).append("</td><td class=\"num\">")
-                    .append(SliceLabels.number(r.zInit())).append("</td><td class=\"num\">")
+                    .append(SliceLabels.number(r.massMsun())).append("</td>").append(ironCell(names, r.zInit()))
+                    .append("<td class=\"num\">").append(SliceLabels.number(r.zInit()))
+                    .append("</td><td class=\"num\">")
                     .append(SliceLabels.age(r.ageGyr())).append("</td><td>").append(r.status().label())
                     .append("</td><td>").append(Html.escape(r.statusDetail())).append("</td></tr>\n");
         }
         b.append("</table>\n");
+    }
+
+    /** The [Fe/H] column's heading, before Z's, in a run whose grid gave [Fe/H]; nothing otherwise. */
+    private static String ironHeading(MetallicityNames names) {
+        return names.namesIron() ? "<th>[Fe/H]</th>" : "";
+    }
+
+    /** A row's [Fe/H] cell, before its Z, in a run whose grid gave [Fe/H]; nothing otherwise. */
+    private static String ironCell(MetallicityNames names, double zInit) {
+        return names.namesIron() ? "<td class=\"num\">" + names.ironCell(zInit) + "</td>" : "";
     }
 
     private static void row(StringBuilder b, String key, String value) {

@@ -9,6 +9,7 @@ import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.plotting.label.MetallicityNames;
 import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.zones.TransitionMarker;
 
@@ -24,6 +25,11 @@ public final class TransitionAgeTrend {
      * separate series, never one line), and every transient core window.
      */
     public static TransitionAgeTrendData build(PhysicsKey physics, List<TransitionRow> rows) {
+        return build(physics, rows, MetallicityNames.Z_ONLY);
+    }
+
+    /** As {@link #build(PhysicsKey, List)}, its notes naming each metallicity as {@code names} name it. */
+    public static TransitionAgeTrendData build(PhysicsKey physics, List<TransitionRow> rows, MetallicityNames names) {
         List<TransitionRow> mine = rows.stream().filter(r -> PhysicsKey.of(r.slice()).equals(physics)).toList();
         List<Double> zs = mine.stream().map(r -> r.slice().zInit()).distinct().sorted().toList();
         List<TransitionAgeTrendData.Series> series = new ArrayList<>();
@@ -32,7 +38,7 @@ public final class TransitionAgeTrend {
         List<Double> ages = mine.stream().map(r -> r.slice().ageGyr()).distinct().sorted().toList();
         List<TransientWindow> windows = mine.stream().filter(r -> r.transientCore() != null)
                 .map(r -> new TransientWindow(r.slice().zInit(), r.slice().ageGyr(), r.transientCore())).toList();
-        return new TransitionAgeTrendData(physics, ages, zs, series, windows, coolCoreCaveats(mine));
+        return new TransitionAgeTrendData(physics, ages, zs, series, windows, coolCoreCaveats(mine, names));
     }
 
     /**
@@ -40,13 +46,13 @@ public final class TransitionAgeTrend {
      * ({@link TransitionFinder#notesCoolCores}): the chart's "core in every star above" line dips there (the demo at
      * 150 Myr: 0.381 and 0.420 Msun against ~1.1 at the other ages), and a reader takes the dip for CNO cores.
      */
-    static List<String> coolCoreCaveats(List<TransitionRow> rows) {
+    static List<String> coolCoreCaveats(List<TransitionRow> rows, MetallicityNames names) {
         List<String> at = rows.stream().filter(r -> r.convCoreOnset().found())
                 .filter(r -> TransitionFinder.notesCoolCores(r.notes()))
                 .sorted(Comparator.comparingDouble((TransitionRow r) -> r.slice().ageGyr())
                         .thenComparingDouble(r -> r.slice().zInit()))
-                .map(r -> String.format(java.util.Locale.ROOT, "%.3f (Z = %s, %s)", r.convCoreOnset().massMsun(),
-                        SliceLabels.number(r.slice().zInit()), SliceLabels.age(r.slice().ageGyr())))
+                .map(r -> String.format(java.util.Locale.ROOT, "%.3f (%s, %s)", r.convCoreOnset().massMsun(),
+                        names.of(r.slice().zInit()), SliceLabels.age(r.slice().ageGyr())))
                 .toList();
         if (at.isEmpty()) {
             return List.of();

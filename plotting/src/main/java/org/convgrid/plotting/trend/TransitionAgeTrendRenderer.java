@@ -4,6 +4,7 @@ import java.awt.Color;
 import java.util.List;
 import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.output.transitions.TransitionMethod;
+import org.convgrid.plotting.label.MetallicityNames;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.AgeAxisTitle;
 import org.convgrid.plotting.style.AgeUnit;
@@ -54,13 +55,21 @@ public final class TransitionAgeTrendRenderer {
         return render(data, AgeOrigin.ZAMS);
     }
 
-    /** The chart of a transition-against-age trend, ages counted from {@code origin}. */
+    /** The chart of a transition-against-age trend, ages counted from {@code origin}, metallicities named by Z. */
     public static StyledChart render(TransitionAgeTrendData data, AgeOrigin origin) {
+        return render(data, origin, MetallicityNames.Z_ONLY);
+    }
+
+    /**
+     * The chart of a transition-against-age trend, ages counted from {@code origin}, metallicities named as
+     * {@code names} name them.
+     */
+    public static StyledChart render(TransitionAgeTrendData data, AgeOrigin origin, MetallicityNames names) {
         boolean log = data.logAges();
         AgeUnit unit = AgeUnit.of(data.ages());
         MethodNote method = methodNote(data);
-        StyledChart chart = ChartStyle.newChart("Transition masses against age, Z = "
-                        + SliceLabels.values(data.metallicities()), method.subtitle(data.physics().describe()),
+        StyledChart chart = ChartStyle.newChart("Transition masses against age, "
+                        + names.values(data.metallicities()), method.subtitle(data.physics().describe()),
                 AgeAxisTitle.of(origin, unit) + (log ? " (logarithmic)" : ""), "transition mass M / M\u2609");
         ChartStyle.legendRight(chart);
         List<String> notes = new java.util.ArrayList<>(data.caveats());
@@ -91,8 +100,8 @@ public final class TransitionAgeTrendRenderer {
             Color color = ChartStyle.seriesColor(zIndex);
             BracketBands.add(chart, s.points().stream()
                     .map(p -> new BracketBands.At(at.x(p.ageGyr(), zIndex), p.bracket())).toList(), color);
-            XYSeries line = chart.addSeries((fc ? "fully convective limit, Z = " : "core in every star above, Z = ")
-                            + SliceLabels.number(s.zInit()) + method.legendSuffix(s.method()),
+            XYSeries line = chart.addSeries((fc ? "fully convective limit, " : "core in every star above, ")
+                            + names.of(s.zInit()) + method.legendSuffix(s.method()),
                     s.points().stream().mapToDouble(p -> at.x(p.ageGyr(), zIndex)).toArray(),
                     s.points().stream().mapToDouble(AgePoint::massMsun).toArray());
             line.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
@@ -110,7 +119,7 @@ public final class TransitionAgeTrendRenderer {
             Color color = ChartStyle.seriesColor(zIndex);
             TrendDrawing.windows(chart, windows.stream()
                     .map(w -> new TrendDrawing.Window(at.x(w.ageGyr(), zIndex), w.masses())).toList(), color);
-            XYSeries middles = chart.addSeries("small transient cores, Z = " + SliceLabels.number(z),
+            XYSeries middles = chart.addSeries("small transient cores, " + names.of(z),
                     windows.stream().mapToDouble(w -> at.x(w.ageGyr(), zIndex)).toArray(),
                     windows.stream().mapToDouble(w -> 0.5 * (w.masses().lo() + w.masses().hi())).toArray());
             middles.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);

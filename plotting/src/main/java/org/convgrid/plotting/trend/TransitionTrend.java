@@ -7,6 +7,7 @@ import java.util.function.Function;
 import org.convgrid.output.transitions.TransitionEstimate;
 import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.plotting.label.MetallicityNames;
 import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.zones.TransitionMarker;
 
@@ -21,6 +22,11 @@ public final class TransitionTrend {
      * grid values make separate series, never one line; every transient core window.
      */
     public static TransitionTrendData build(PhysicsKey physics, List<TransitionRow> rows) {
+        return build(physics, rows, MetallicityNames.Z_ONLY);
+    }
+
+    /** As {@link #build(PhysicsKey, List)}, its notes naming each metallicity as {@code names} name it. */
+    public static TransitionTrendData build(PhysicsKey physics, List<TransitionRow> rows, MetallicityNames names) {
         List<TransitionRow> mine = rows.stream().filter(r -> PhysicsKey.of(r.slice()).equals(physics)).toList();
         List<Double> ages = mine.stream().map(r -> r.slice().ageGyr()).distinct().sorted().toList();
         List<TransitionTrendData.Series> series = new ArrayList<>();
@@ -29,7 +35,7 @@ public final class TransitionTrend {
         List<Double> zs = mine.stream().map(r -> r.slice().zInit()).distinct().sorted().toList();
         List<TransientWindow> windows = mine.stream().filter(r -> r.transientCore() != null)
                 .map(r -> new TransientWindow(r.slice().zInit(), r.slice().ageGyr(), r.transientCore())).toList();
-        return new TransitionTrendData(physics, zs, series, windows, TransitionAgeTrend.coolCoreCaveats(mine));
+        return new TransitionTrendData(physics, zs, series, windows, TransitionAgeTrend.coolCoreCaveats(mine, names));
     }
 
     private static void addAll(List<TransitionTrendData.Series> out, TransitionMarker.Kind kind,

@@ -2,6 +2,7 @@ package org.convgrid.plotting.trend;
 
 import java.util.List;
 import org.convgrid.output.transitions.TransitionMethod;
+import org.convgrid.plotting.label.MetallicityNames;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.ChartNotes;
 import org.convgrid.plotting.style.ChartStyle;
@@ -37,13 +38,18 @@ public final class TransitionTrendRenderer {
     private TransitionTrendRenderer() {
     }
 
-    /** The chart of a transition trend. */
+    /** The chart of a transition trend, its metallicities named by Z. */
     public static StyledChart render(TransitionTrendData data) {
+        return render(data, MetallicityNames.Z_ONLY);
+    }
+
+    /** The chart of a transition trend, its metallicities named in the title as {@code names} name them. */
+    public static StyledChart render(TransitionTrendData data, MetallicityNames names) {
         Placement at = placement(data);
         List<Double> ages = at.ages();
         MethodNote method = methodNote(data);
-        StyledChart chart = ChartStyle.newChart("Transition masses, Z = "
-                + SliceLabels.values(data.metallicities()) + ", " + SliceLabels.ages(ages),
+        StyledChart chart = ChartStyle.newChart("Transition masses, "
+                + names.values(data.metallicities()) + ", " + SliceLabels.ages(ages),
                 method.subtitle(data.physics().describe()), "initial metal mass fraction Z",
                 "transition mass M / M\u2609");
         ChartStyle.legendRight(chart);

@@ -5,6 +5,7 @@ import java.awt.Color;
 import java.util.ArrayList;
 import java.util.DoubleSummaryStatistics;
 import java.util.List;
+import org.convgrid.plotting.label.MetallicityNames;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.ChartNotes;
 import org.convgrid.plotting.style.ChartStyle;
@@ -26,7 +27,7 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
 public final class TurnoverAgainstMassRenderer {
 
     /** The chart's title, before the metallicity. */
-    static final String TITLE = "Convective turnover time against mass, Z = ";
+    static final String TITLE = "Convective turnover time against mass, ";
     static final String Y_TITLE = "convective turnover time \u03c4c / days";
     static final String LOCAL_LABEL = "local time (solid)";
     static final String GLOBAL_LABEL = "global time (dashed)";
@@ -59,9 +60,14 @@ public final class TurnoverAgainstMassRenderer {
                 + " drawn, so a line may stop short of the highest masses.";
     }
 
-    /** The chart of one metallicity's turnover times; {@code data} must hold at least one model. */
+    /** The chart of one metallicity's turnover times, named by Z; {@code data} must hold at least one model. */
     public static StyledChart render(TurnoverData data) {
-        StyledChart chart = ChartStyle.newChart(TITLE + SliceLabels.number(data.zInit()), data.physics().describe(),
+        return render(data, MetallicityNames.Z_ONLY);
+    }
+
+    /** The chart of one metallicity's turnover times, named as {@code names} name it. */
+    public static StyledChart render(TurnoverData data, MetallicityNames names) {
+        StyledChart chart = ChartStyle.newChart(TITLE + names.of(data.zInit()), data.physics().describe(),
                 MassAxis.TITLE, Y_TITLE);
         ChartStyle.legendRight(chart);
         List<TurnoverPoint> all = data.lines().stream().flatMap(l -> l.points().stream()).toList();

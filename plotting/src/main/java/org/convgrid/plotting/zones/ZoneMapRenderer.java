@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Set;
+import org.convgrid.plotting.label.MetallicityNames;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.style.ChartNotes;
 import org.convgrid.plotting.style.ChartStyle;
@@ -25,10 +26,15 @@ public final class ZoneMapRenderer {
     private ZoneMapRenderer() {
     }
 
-    /** The chart of a zone map. */
+    /** The chart of a zone map, its metallicity named by Z. */
     public static StyledChart render(ZoneMapData data) {
-        StyledChart chart = ChartStyle.newChart("Convective zones, Z = "
-                        + SliceLabels.number(data.slice().zInit()) + ", " + SliceLabels.age(data.slice().ageGyr()),
+        return render(data, MetallicityNames.Z_ONLY);
+    }
+
+    /** The chart of a zone map, its metallicity named as {@code names} name it. */
+    public static StyledChart render(ZoneMapData data, MetallicityNames names) {
+        StyledChart chart = ChartStyle.newChart("Convective zones, " + names.of(data.slice().zInit()) + ", "
+                        + SliceLabels.age(data.slice().ageGyr()),
                 SliceLabels.physics(data.slice()),
                 MassAxis.TITLE, data.axis().title());
         ChartStyle.legendRight(chart);

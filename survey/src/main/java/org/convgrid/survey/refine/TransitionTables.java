@@ -15,6 +15,7 @@ import org.convgrid.grids.GridSpec;
 import org.convgrid.grids.words.Counts;
 import org.convgrid.grids.yaml.GridFileReader;
 import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.IronAbundance;
 import org.convgrid.output.OutputFormatException;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.Span;
@@ -79,7 +80,8 @@ public final class TransitionTables {
         double tolerance = earlierTolerance(dir);
         List<TransitionRow> transitions = withNotes(finder, rows, Map.of()).stream()
                 .map(t -> t.withTolerance(tolerance)).toList();
-        AtomicFiles.write(dir.transitions(), out -> TransitionWriter.write(transitions, out));
+        IronAbundance iron = ironAbundance(dir);
+        AtomicFiles.write(dir.transitions(), out -> TransitionWriter.write(transitions, iron, out));
         return finish(new Update(transitions, rows, List.of(), 0, finished(dir, rows, transitions)), finishers);
     }
 
@@ -120,7 +122,7 @@ public final class TransitionTables {
             if (result.newModels().isEmpty()) {
                 break;
             }
-            try (CatalogueAppender sink = CatalogueAppender.open(dir.catalogue(), false)) {
+            try (CatalogueAppender sink = CatalogueAppender.open(dir.catalogue(), false, manifest.ironAbundance())) {
                 for (ModelOutcome o : result.newModels()) {
                     sink.accept(o);
                 }
@@ -132,7 +134,8 @@ public final class TransitionTables {
         List<TransitionRow> transitions = withNotes(finder, rows, remarks).stream()
                 .map(t -> refiner.allCrossings() ? t : withWideCrossings(t, refiner.toleranceMsun()))
                 .map(t -> t.withTolerance(refiner.toleranceMsun())).toList();
-        AtomicFiles.write(dir.transitions(), out -> TransitionWriter.write(transitions, out));
+        AtomicFiles.write(dir.transitions(),
+                out -> TransitionWriter.write(transitions, manifest.ironAbundance(), out));
         RunManifest updated = manifest.finishedAt(added.isEmpty() ? manifest.finished() : clock.instant(),
                 RunFinishing.countByStatus(rows), manifest.medianSecondsPerModel());
         AtomicFiles.writeString(dir.manifest(), RunManifestWriter.toYaml(updated));
@@ -252,6 +255,12 @@ public final class TransitionTables {
     }
 
     /** The directory for the finishers when its manifest says the run finished; null otherwise. */
+    /** The Sun the run's [Fe/H] is measured against: its manifest's, the default one without a manifest. */
+    private static IronAbundance ironAbundance(RunDirectory dir) throws IOException {
+        return Files.isRegularFile(dir.manifest())
+                ? RunManifestReader.read(Files.readString(dir.manifest())).ironAbundance() : IronAbundance.DEFAULT;
+    }
+
     private static FinishedRun finished(RunDirectory dir, List<CatalogueRow> rows, List<TransitionRow> transitions)
             throws IOException {
         if (!Files.isRegularFile(dir.manifest())) {
