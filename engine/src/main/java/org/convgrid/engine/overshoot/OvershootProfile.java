@@ -18,6 +18,9 @@ public interface OvershootProfile {
     /** Density at point k, g cm^-3. */
     double density(int k);
 
+    /** Hydrogen mass fraction at point k. */
+    double hydrogen(int k);
+
     /** Whether point k is convective. */
     boolean convective(int k);
 

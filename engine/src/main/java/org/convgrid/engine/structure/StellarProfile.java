@@ -190,6 +190,7 @@ public final class StellarProfile implements OvershootProfile {
     }
 
     /** Hydrogen mass fraction. */
+    @Override
     public double hydrogen(int k) {
         return hydrogen[k];
     }

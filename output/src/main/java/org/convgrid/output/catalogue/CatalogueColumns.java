@@ -100,8 +100,9 @@ public final class CatalogueColumns {
                     "integral of dr / v_conv across the convective envelope; empty when none"),
             new EcsvColumn(CORE_MIXED_MASS_FRAC, "", REAL,
                     "m/M up to which the convective core is mixed: its top carried outward by the uniform (or"
-                            + " uniform-ramped) overshoot distance; the core's own top without overshoot or with"
-                            + " decaying overshoot, which mixes beyond it by diffusion; empty when no core"),
+                            + " uniform-ramped) overshoot distance; with decaying overshoot, where the hydrogen"
+                            + " leaves the centre's value (by 1 % of the surface-minus-centre contrast); the core's"
+                            + " own top without overshoot; empty when no core"),
             new EcsvColumn(OVERSHOOT_PROFILE, "", TEXT,
                     "what overshoot_hp is the length of: uniform (alpha_ov for every star), uniform-ramped (alpha_ov"
                             + " from 2 solMass up, none up to 1.2 solMass, linear between) or decaying (f, the"
