@@ -21,29 +21,52 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
 /**
  * Turns {@link HrDiagramData} into a chart: log Teff on a reversed x axis (hot stars left), log L/Lsun up; one
  * colour per metallicity (zero-age lines, isochrones and models), one marker shape per structure class; evolution
- * tracks (thin, light grey) and isochrones labelled with their ages under the models when the run has tracks; mass
- * and age labels clear of every marker, line and other label, with a leader line when they had to move away. XChart
- * cannot reverse an axis, so the x values are -log Teff and the tick labels drop the sign.
+ * tracks (thin, light grey) and isochrones (one dash pattern per age, {@link IsochroneDashes}) labelled with their
+ * ages under the models when the run has tracks; mass and age labels clear of every marker, line and other label,
+ * with a leader line when they had to move away. XChart cannot reverse an axis, so the x values are -log Teff and
+ * the tick labels drop the sign.
  */
 public final class HrDiagramRenderer {
 
     /**
-     * Isochrones whose brightest models lie within this many pixels of each other share the room for
-     * {@link #AGE_LABELS_TOGETHER} age labels: at five ages 0.05 Gyr apart (0.9-1.1 Gyr) the five labels and their
-     * leaders piled up at the bright end, within 20 pixels, crossing each other. A little over a label height.
+     * Isochrones whose labelled models ({@link AgeLabelAnchor}) lie within this many pixels of each other share the
+     * room for {@link #AGE_LABELS_TOGETHER} age labels: at five ages 0.05 Gyr apart (0.9-1.1 Gyr) the five labels and
+     * their leaders piled up within 20 pixels, crossing each other. A little over a label height.
      */
     static final double AGE_LABEL_SPACING_PX = 30.0;
     /** Age labels that fit side by side around one spot (the demo's 20 and 150 Myr, 12 pixels apart, do). */
     static final int AGE_LABELS_TOGETHER = 2;
-    /** The note of a diagram that left out some isochrones' age labels. */
+    /** The note of a diagram that left out some isochrones' age labels, each age having a dash pattern of its own. */
     static final String AGES_LEFT_OUT_NOTE = "Some isochrones lie too close together to label each with its age: "
             + "the legend names every isochrone by its dash pattern.";
+    /**
+     * The same, when some ages share a dash pattern ({@link IsochroneDashes#sharingNote}, which follows it): the
+     * legend then cannot name every isochrone, and saying so would be untrue.
+     */
+    static final String AGES_LEFT_OUT_SHARED_NOTE = "Some isochrones lie too close together to label each with its "
+            + "age.";
     /** Margin added around the data range, in dex. */
     private static final double PAD_DEX = 0.04;
-    /** Room above the brightest model for the isochrones' age labels, as a share of the luminosity range. */
+    /**
+     * Room above the brightest model for the isochrones' age labels that go to their high-mass ends, as a share of
+     * the luminosity range.
+     */
     private static final double AGE_LABEL_ROOM_SHARE = 0.1;
+    /**
+     * Room right of the coolest model for the age labels that go to their isochrones' low-mass ends, as a share of
+     * the log Teff range: about 100 of the plot's 720 pixels, a label as wide as "200 Myr" and its gap (the coolest
+     * models of a review's 1-200 Myr grid lay 35-60 px from the plot's edge, and the labels went far off with
+     * leaders across the crowd).
+     */
+    private static final double COOL_LABEL_ROOM_SHARE = 0.15;
     /** Leader lines from a moved label to its model, pixels. */
     private static final float LEADER_WIDTH = 1.0f;
+    /**
+     * The legend's line length, pixels: longer than the style's 36, so each isochrone's dash pattern shows more than
+     * one period there (at 36 px the dash-dot, long-dash and dash-dot-dot keys of a six-age grid each showed one
+     * dash and a dot or two, and read alike).
+     */
+    static final int LEGEND_LINE_PX = 60;
     /** Pixel spacing hint for the luminosity ticks (XChart's default gives 0.2 dex steps, too dense). */
     private static final int Y_TICK_SPACING = 90;
 
@@ -79,6 +102,7 @@ public final class HrDiagramRenderer {
                         + ages(data.ages()), data.physics().describe(),
                 "log10(Teff / K)   (hotter to the left)", "log10(L / L\u2609)");
         ChartStyle.legendRight(chart);
+        chart.getStyler().setLegendSeriesLineLength(LEGEND_LINE_PX);
         chart.getStyler().setxAxisTickLabelsFormattingFunction(v -> String.format(Locale.ROOT, "%.1f", -v + 0.0));
         chart.getStyler().setYAxisDecimalPattern("0.0");
         chart.getStyler().setYAxisTickMarkSpacingHint(Y_TICK_SPACING);
@@ -94,10 +118,18 @@ public final class HrDiagramRenderer {
             chart.getStyler().setXAxisMin(-teff.getMax() - PAD_DEX);
             chart.getStyler().setXAxisMax(-teff.getMin() + PAD_DEX);
             chart.getStyler().setYAxisMin(lum.getMin() - 2 * PAD_DEX);
-            // with isochrones, room above the brightest models for their age labels (they all end up there)
-            double labelRoom = data.isochrones().isEmpty() ? 0.0
-                    : AGE_LABEL_ROOM_SHARE * (lum.getMax() - lum.getMin());
-            chart.getStyler().setYAxisMax(lum.getMax() + 2 * PAD_DEX + labelRoom);
+            chart.getStyler().setYAxisMax(lum.getMax() + 2 * PAD_DEX);
+            // room for the age labels beyond the isochrone ends they go to: above the brightest models, right of the
+            // coolest (chosen on the axes without it: the room barely changes the scale they are chosen on)
+            List<AgeAnchor> anchors = ageAnchors(data, chart);
+            if (anchors.stream().anyMatch(a -> AgeLabelAnchor.atHighMassEnd(a.model(), a.line()))) {
+                chart.getStyler().setYAxisMax(lum.getMax() + 2 * PAD_DEX
+                        + AGE_LABEL_ROOM_SHARE * (lum.getMax() - lum.getMin()));
+            }
+            if (anchors.stream().anyMatch(a -> AgeLabelAnchor.atLowMassEnd(a.model(), a.line()))) {
+                chart.getStyler().setXAxisMax(-teff.getMin() + PAD_DEX
+                        + COOL_LABEL_ROOM_SHARE * (teff.getMax() - teff.getMin()));
+            }
         }
         addTracks(chart, data);
         // With isochrones, the youngest one is the zero-age line: drawn once, as an isochrone.
@@ -161,10 +193,22 @@ public final class HrDiagramRenderer {
                 g.drawString(labels.get(i).text(), (float) p.box().getX(), (float) (p.box().getY() + fm.getAscent()));
             }
         });
-        if (labels(data, chart).stream().filter(l -> !l.massLabel()).count() < middleIsochrones(data).size()) {
-            ChartNotes.addRightOfPlot(chart, List.of(AGES_LEFT_OUT_NOTE));
-        }
+        ChartNotes.addRightOfPlot(chart, notes(data, chart));
         return chart;
+    }
+
+    /**
+     * The chart's notes: that some isochrones went without an age label (they lay too close together), and which
+     * ages share a dash pattern when the grid has more ages than patterns.
+     */
+    static List<String> notes(HrDiagramData data, StyledChart chart) {
+        List<String> notes = new java.util.ArrayList<>();
+        java.util.Optional<String> sharing = IsochroneDashes.sharingNote(data);
+        if (labels(data, chart).stream().filter(l -> !l.massLabel()).count() < middleIsochrones(data).size()) {
+            notes.add(sharing.isPresent() ? AGES_LEFT_OUT_SHARED_NOTE : AGES_LEFT_OUT_NOTE);
+        }
+        sharing.ifPresent(notes::add);
+        return notes;
     }
 
     /**
@@ -217,35 +261,63 @@ public final class HrDiagramRenderer {
 
     /**
      * Every label, in the order they are placed: the mass labels ({@link HrDiagramData#massLabels}), then, with
-     * isochrones, the age of each isochrone of the middle Z beside its brightest model, brightest first, leaving
-     * out an age whose brightest model lies within {@link #AGE_LABEL_SPACING_PX} of {@link #AGE_LABELS_TOGETHER}
-     * already labelled (the youngest and the oldest are labelled first, so the labels span the ages).
-     * {@code chart}: the chart with its axis ranges set (not yet painted).
+     * isochrones, the age of each isochrone of the middle Z beside the model where it stands apart from the other
+     * ages' isochrones ({@link AgeLabelAnchor}: for young ages, the cool end), leaving out an age whose model lies
+     * within {@link #AGE_LABEL_SPACING_PX} of {@link #AGE_LABELS_TOGETHER} already labelled (the youngest and the
+     * oldest are labelled first, so the labels span the ages). {@code chart}: the chart with its axis ranges set (not
+     * yet painted).
      */
     static List<Label> labels(HrDiagramData data, StyledChart chart) {
         List<Label> labels = new java.util.ArrayList<>();
+        ageAnchors(data, chart).forEach(a -> labels.add(new Label(a.model(), age(a.line().ageGyr()), false)));
         data.massLabels().forEach(p -> labels.add(new Label(p, massLabel(p), true)));
+        return labels;
+    }
+
+    /**
+     * An isochrone and the model its age label names.
+     *
+     * @param line the isochrone
+     * @param model where its label goes ({@link AgeLabelAnchor})
+     */
+    record AgeAnchor(HrDiagramData.ZeroAgeLine line, HrPoint model) {
+    }
+
+    /**
+     * The labelled isochrones of the middle Z, each with its labelled model, in the order of {@link #labels}: the
+     * youngest, the oldest, then the ages between in order, leaving out one whose model lies within
+     * {@link #AGE_LABEL_SPACING_PX} of {@link #AGE_LABELS_TOGETHER} already kept. {@code chart}: the chart with its
+     * axis ranges set.
+     */
+    private static List<AgeAnchor> ageAnchors(HrDiagramData data, StyledChart chart) {
         List<HrDiagramData.ZeroAgeLine> middle = middleIsochrones(data);
-        if (middle.isEmpty()) {
-            return labels;
-        }
-        // youngest, oldest, then the ages between in order
         List<HrDiagramData.ZeroAgeLine> byPreference = new java.util.ArrayList<>(middle);
         byPreference.sort(java.util.Comparator.comparingDouble(HrDiagramData.ZeroAgeLine::ageGyr));
         if (byPreference.size() > 1) {
             byPreference.add(1, byPreference.remove(byPreference.size() - 1));
         }
-        List<HrDiagramData.ZeroAgeLine> kept = new java.util.ArrayList<>();
+        AgeLabelAnchor.Scale scale = new AgeLabelAnchor.Scale(
+                NominalPlot.WIDTH_PX / (chart.getStyler().getXAxisMax() - chart.getStyler().getXAxisMin()),
+                NominalPlot.HEIGHT_PX / (chart.getStyler().getYAxisMax() - chart.getStyler().getYAxisMin()));
+        List<AgeAnchor> kept = new java.util.ArrayList<>();
         for (HrDiagramData.ZeroAgeLine line : byPreference) {
-            if (kept.stream().filter(k -> nominalPixels(chart, brightest(k), brightest(line)) < AGE_LABEL_SPACING_PX)
+            HrPoint model = AgeLabelAnchor.of(line, data.isochrones(), scale, textSize(age(line.ageGyr())));
+            if (kept.stream().filter(k -> nominalPixels(chart, k.model(), model) < AGE_LABEL_SPACING_PX)
                     .count() < AGE_LABELS_TOGETHER) {
-                kept.add(line);
+                kept.add(new AgeAnchor(line, model));
             }
         }
-        kept.stream()
-                .sorted(java.util.Comparator.comparingDouble((HrDiagramData.ZeroAgeLine l) -> -brightest(l).logL()))
-                .forEach(l -> labels.add(new Label(brightest(l), age(l.ageGyr()), false)));
-        return labels;
+        return kept;
+    }
+
+    /** The size of a label's text in the annotation font, pixels, before the chart is painted. */
+    private static java.awt.geom.Dimension2D textSize(String text) {
+        java.awt.font.FontRenderContext context = new java.awt.font.FontRenderContext(null, true, true);
+        java.awt.font.LineMetrics line = ChartStyle.ANNOTATION_FONT.getLineMetrics(text, context);
+        java.awt.Dimension size = new java.awt.Dimension();
+        size.setSize(ChartStyle.ANNOTATION_FONT.getStringBounds(text, context).getWidth(),
+                line.getAscent() + line.getDescent());
+        return size;
     }
 
     /** The isochrones of the middle Z, the ones labelled with their ages. */
@@ -331,11 +403,6 @@ public final class HrDiagramRenderer {
         return s;
     }
 
-    /** The brightest model of an isochrone: where its age label goes. */
-    private static HrPoint brightest(HrDiagramData.ZeroAgeLine line) {
-        return line.points().stream().max(java.util.Comparator.comparingDouble(HrPoint::logL)).orElseThrow();
-    }
-
     /** An age for people ({@link SliceLabels#age}: Myr below 1 Gyr, Gyr above). */
     static String age(double ageGyr) {
         return SliceLabels.age(ageGyr);
@@ -354,10 +421,10 @@ public final class HrDiagramRenderer {
     }
 
     /**
-     * Isochrones in the colour of their Z (the legend names each Z once), one dash pattern per age (the legend names
-     * each age once, in black); the isochrones of the middle Z are also labelled with their ages beside their
-     * brightest ends, each where it covers no mass label, no model marker and no other age label
-     * ({@link LabelPlacement}).
+     * Isochrones in the colour of their Z (the legend names each Z once), one dash pattern per age
+     * ({@link IsochroneDashes}; the legend names each age once, in black); the isochrones of the middle Z are also
+     * labelled with their ages where each stands apart from the others ({@link #labels}), each label where it covers
+     * no mass label, no model marker and no other age label ({@link LabelPlacement}).
      */
     private static void addIsochrones(StyledChart chart, HrDiagramData data, MetallicityNames names) {
         if (data.isochrones().isEmpty()) {
@@ -375,7 +442,7 @@ public final class HrDiagramRenderer {
             s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
             s.setMarker(SeriesMarkers.NONE);
             s.setLineColor(ChartStyle.BLACK);
-            s.setLineStyle(ChartStyle.dashed(data.ages().indexOf(line.ageGyr()), 2.0f));
+            s.setLineStyle(IsochroneDashes.stroke(data, line.ageGyr()));
         }
         int n = 0;
         for (HrDiagramData.ZeroAgeLine line : data.isochrones()) {
@@ -389,7 +456,7 @@ public final class HrDiagramRenderer {
             s.setMarker(SeriesMarkers.NONE);
             s.setLineColor(ChartStyle.seriesColor(zIndex));
             // the legend entry of a Z is drawn solid whatever the age of the isochrone that carries it
-            s.setLineStyle(ChartStyle.dashed(data.ages().indexOf(line.ageGyr()), 2.0f));
+            s.setLineStyle(IsochroneDashes.stroke(data, line.ageGyr()));
             s.setShowInLegend(first);
         }
     }

@@ -37,6 +37,8 @@ public final class KippenhahnRenderer {
     public static final String BURNING_LABEL = "nuclear burning (hatched)";
     /** The trade's abbreviation: the full words would run out of the plot next to a late zero-age main sequence. */
     static final String ZAMS_LABEL = "ZAMS";
+    /** Gap between the ZAMS label's foot and the plot's top edge, pixels. */
+    static final double ZAMS_LABEL_GAP_PX = 3.0;
     private static final Color TRANSPARENT = new Color(0, 0, 0, 0);
     private static final float BURNING_EDGE_WIDTH = 2.0f;
     /** Hatch: 45-degree lines this many pixels apart, this wide. */
@@ -215,7 +217,11 @@ public final class KippenhahnRenderer {
         return data.zones().stream().mapToDouble(AgeRect::right).filter(a -> a > 0).min().orElse(Double.NaN);
     }
 
-    /** A dashed vertical line at the zero-age main sequence, labelled at its top, inside the plot. */
+    /**
+     * A dashed vertical line at the zero-age main sequence, labelled just above the plot ({@link #zamsLabelBox}):
+     * inside it, even on a white box, the label hid data (a review's 1 Msun, Z = 0.02 chart lost its thin
+     * convective envelope at m/M 0.97-1 from ~39 to ~80 Myr under it).
+     */
     private static void markZeroAgeMainSequence(Graphics2D g, StyledChart c, double x) {
         double sx = c.getScreenXFromChart(x);
         double top = c.getScreenYFromChart(c.getStyler().getYAxisMax());
@@ -225,13 +231,20 @@ public final class KippenhahnRenderer {
         g.draw(new Line2D.Double(sx, top, sx, bottom));
         g.setFont(ChartStyle.ANNOTATION_FONT);
         java.awt.FontMetrics fm = g.getFontMetrics();
-        String text = ZAMS_LABEL;
-        float tx = (float) (sx + fm.stringWidth(" "));
-        float ty = (float) (top + fm.getAscent() + 4);
-        // a white box under the words keeps them legible over the zone colours
-        g.setColor(Color.WHITE);
-        g.fill(new Rectangle2D.Double(tx - 2, ty - fm.getAscent(), fm.stringWidth(text) + 4, fm.getHeight()));
-        g.setColor(ChartStyle.BLACK);
-        g.drawString(text, tx, ty);
+        Rectangle2D box = zamsLabelBox(c, fm, sx);
+        g.drawString(ZAMS_LABEL, (float) box.getX(), (float) (box.getY() + fm.getAscent()));
+    }
+
+    /**
+     * Where the ZAMS label goes, screen pixels: centred over the line at {@code sx}, its foot
+     * {@link #ZAMS_LABEL_GAP_PX} above the plot's top edge, in the white margin between the title and the plot where
+     * it covers no data; kept within the chart's width when the line lies near an edge.
+     */
+    static Rectangle2D zamsLabelBox(StyledChart c, java.awt.FontMetrics fm, double sx) {
+        double top = c.getScreenYFromChart(c.getStyler().getYAxisMax());
+        double width = fm.stringWidth(ZAMS_LABEL);
+        double left = Math.max(0, Math.min(sx - width / 2, c.getWidth() - width));
+        double height = fm.getAscent() + fm.getDescent();
+        return new Rectangle2D.Double(left, top - ZAMS_LABEL_GAP_PX - height, width, height);
     }
 }

@@ -28,7 +28,8 @@ import org.convgrid.plotting.label.SliceLabels;
 /**
  * Writes {@code RUN_DIR/report.html}: one static page that opens offline (images by relative link into maps/,
  * inline CSS, no script): run summary from the manifest, counts by status, the maps present in maps/, the
- * transition table, and every model without a usable result with its reason. Maps not yet drawn are listed as
+ * transition table, the life events ({@link LifeEventsSection}), and every model without a usable result with its
+ * reason. Maps not yet drawn are listed as
  * missing rather than linked.
  */
 public final class ReportPage {
@@ -68,18 +69,20 @@ public final class ReportPage {
         RunManifest m = run.manifest();
         String title = GridChoices.of(m).title();
         List<MapEntry> plan = RunMaps.plan(run);
+        LifeEventsSection.Table lifeEvents = LifeEventsSection.read(runDir);
         b.append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n<title>")
                 .append(Html.escape(title)).append("</title>\n<style>\n").append(ReportStyle.CSS)
                 .append("</style>\n</head>\n<body>\n<h1>").append(Html.escape(title)).append("</h1>\n");
         unfinished(b, run, runDir);
         unrefined(b, run, runDir);
-        contents(b, plan);
+        contents(b, plan, lifeEvents.shown());
         b.append("<h2 id=\"run\">Run</h2>\n");
         summary(b, run);
         counts(b, run);
         chartFailures(b, chartFailures);
         maps(b, plan, runDir, chartFailures, RunMaps.zonesAgainstAgeSelection(run).describe());
         transitions(b, run);
+        LifeEventsSection.append(b, lifeEvents, run.catalogue());
         failures(b, run);
         if (!run.hasTracks()) {
             b.append("<h2>").append(Html.escape(MapEntry.ZONES_AGE))
@@ -207,7 +210,7 @@ public final class ReportPage {
     }
 
     /** A contents list: the fixed sections, and per chart section its groups (one metallicity, one mass, ...). */
-    private static void contents(StringBuilder b, List<MapEntry> plan) {
+    private static void contents(StringBuilder b, List<MapEntry> plan, boolean lifeEvents) {
         b.append("<nav><h2>Contents</h2>\n<ul>\n<li><a href=\"#run\">Run</a></li>\n");
         String section = null;
         String group = null;
@@ -231,8 +234,12 @@ public final class ReportPage {
         if (section != null) {
             b.append(group == null ? "" : "</ul>").append("</li>\n");
         }
-        b.append("<li><a href=\"#transitions\">Transition masses</a></li>\n")
-                .append("<li><a href=\"#failures\">Models without a usable result</a></li>\n</ul></nav>\n");
+        b.append("<li><a href=\"#transitions\">Transition masses</a></li>\n");
+        if (lifeEvents) {
+            b.append("<li><a href=\"#").append(LifeEventsSection.ID).append("\">").append(LifeEventsSection.HEADING)
+                    .append("</a></li>\n");
+        }
+        b.append("<li><a href=\"#failures\">Models without a usable result</a></li>\n</ul></nav>\n");
     }
 
     private static String anchor(String section, String group) {

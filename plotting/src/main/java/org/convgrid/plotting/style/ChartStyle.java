@@ -69,8 +69,16 @@ public final class ChartStyle {
     public static final BasicStroke REFERENCE_SOLID = new BasicStroke(3.0f);
     public static final BasicStroke REFERENCE_DASHED = new BasicStroke(3.0f, BasicStroke.CAP_BUTT,
             BasicStroke.JOIN_MITER, 10f, new float[] {14f, 8f}, 0f);
-    /** Dash patterns told apart without colour (zero-age lines of several metallicities). */
-    private static final float[][] DASHES = {null, {14f, 7f}, {4f, 6f}, {16f, 6f, 4f, 6f}, {24f, 8f}};
+    /**
+     * Dash patterns told apart without colour (zero-age lines of several metallicities, isochrones of several ages):
+     * solid, dashed, dotted, dash-dot, long dash, dash-dot-dot, long-short, dot-triplets. Eight, because a young
+     * cluster's grid has six ages or more (a review's 1-200 Myr grid had six, and with five patterns its 1 and 200 Myr
+     * isochrones were both solid); each period is at most about a legend line long (36 px), so the legend shows it.
+     */
+    private static final float[][] DASHES = {null, {14f, 7f}, {4f, 6f}, {16f, 6f, 4f, 6f}, {24f, 8f},
+        {14f, 5f, 3f, 5f, 3f, 5f}, {22f, 5f, 7f, 5f}, {2f, 4f, 2f, 4f, 2f, 12f}};
+    /** How many distinct dash patterns {@link #dashed} has; index this many and it starts again at solid. */
+    public static final int DASH_PATTERNS = DASHES.length;
 
     private ChartStyle() {
     }
@@ -239,7 +247,7 @@ public final class ChartStyle {
         return order[Math.floorMod(index, order.length)];
     }
 
-    /** A line stroke with the index-th dash pattern (solid first). */
+    /** A line stroke with the index-th dash pattern (solid first), repeating after {@link #DASH_PATTERNS}. */
     public static BasicStroke dashed(int index, float width) {
         float[] dash = DASHES[Math.floorMod(index, DASHES.length)];
         return dash == null ? new BasicStroke(width)

@@ -237,4 +237,37 @@ class KippenhahnTest {
                     Path.of(keep).resolve("zones-age-birth-depth.png"));
         }
     }
+    /**
+     * The ZAMS label sits in the white margin between the title and the plot, over its line, on both vertical
+     * coordinates and wherever the line lies: inside the plot its white box hid data (a review's 1 Msun, Z = 0.02
+     * chart lost its thin envelope at m/M 0.97-1 from ~39 to ~80 Myr under it).
+     */
+    @Test
+    void theZamsLabelCoversNoDataAndNoTitle() throws Exception {
+        String text = birthTrack();
+        Track t = new Track("t", TrackReader.read(new StringReader(text)));
+        KippenhahnData data = Kippenhahn.build(new TrackOrigin("t", 1.0, 0.014, PHYSICS), t,
+                org.convgrid.output.track.TrackTimeline.read(new StringReader(text)));
+        for (ZoneCoordinate y : ZoneCoordinate.values()) {
+            var chart = KippenhahnRenderer.render(data, y);
+            BufferedImage image = new BufferedImage(ChartStyle.WIDTH, ChartStyle.HEIGHT, BufferedImage.TYPE_INT_RGB);
+            java.awt.Graphics2D g = image.createGraphics();
+            chart.paint(g, ChartStyle.WIDTH, ChartStyle.HEIGHT);
+            java.awt.FontMetrics label = g.getFontMetrics(ChartStyle.ANNOTATION_FONT);
+            java.awt.geom.Rectangle2D plot = chart.plotBounds();
+            // the title's two lines end here (ChartStyle.newChart sets them from the chart's padding down)
+            double titleFoot = chart.getStyler().getChartPadding() + g.getFontMetrics(ChartStyle.TITLE_FONT).getHeight()
+                    + g.getFontMetrics(ChartStyle.SUBTITLE_FONT).getHeight();
+            for (double sx : new double[] {plot.getMinX(), plot.getCenterX(), plot.getMaxX()}) {
+                java.awt.geom.Rectangle2D box = KippenhahnRenderer.zamsLabelBox(chart, label, sx);
+                String where = y + " at x = " + sx;
+                assertThat(box.getMaxY()).as(where + ": above the plot").isLessThanOrEqualTo(plot.getMinY());
+                assertThat(box.getMinY()).as(where + ": under the title").isGreaterThanOrEqualTo(titleFoot);
+                assertThat(box.getMinX()).as(where).isGreaterThanOrEqualTo(0);
+                assertThat(box.getMaxX()).as(where).isLessThanOrEqualTo(ChartStyle.WIDTH);
+                assertThat(box.getCenterX()).as(where + ": over its line").isCloseTo(
+                        Math.min(sx, ChartStyle.WIDTH - box.getWidth() / 2), org.assertj.core.data.Offset.offset(0.5));
+            }
+        }
+    }
 }
