@@ -31,11 +31,14 @@ package org.convgrid.engine.birth;
  *                          outlived it. A core that vanished on the main sequence keeps the age of the first model
  *                          without it, however close to the exhaustion age
  * @param lithiumHalved the surface 7Li first falls to half its birth value
+ * @param lithiumOnePercent the surface 7Li first falls to 1 % of its birth value (the depletion that dates young
+ *                          clusters by their lithium depletion boundary), interpolated in ln 7Li
  * @param centralHydrogenExhausted the central hydrogen falls below the evolution's end value, which ends the main
  *                                 sequence ({@link org.convgrid.engine.evolution.EvolutionResult#exhaustionAge()})
  */
 public record LifeEvents(double radiativeCore, double radiativeCoreEnd, double zeroAgeMainSequence,
                          double convectiveCoreOnset, double convectiveCoreEnd, double lithiumHalved,
+                         double lithiumOnePercent,
                          double centralHydrogenExhausted) {
 
     /**
@@ -44,7 +47,7 @@ public record LifeEvents(double radiativeCore, double radiativeCoreEnd, double z
      */
     public LifeEvents withCentralHydrogenExhausted(double age) {
         return new LifeEvents(radiativeCore, radiativeCoreEnd, zeroAgeMainSequence, convectiveCoreOnset,
-                coreEndGiven(age), lithiumHalved, age);
+                coreEndGiven(age), lithiumHalved, lithiumOnePercent, age);
     }
 
     /**

@@ -16,6 +16,9 @@ import org.convgrid.engine.structure.StellarModel;
  */
 final class LifeRecorder implements StepObserver {
 
+    /** The surface 7Li, over its birth value, of the lithium-depletion event (99 % burnt). */
+    static final double LITHIUM_ONE_PERCENT = 0.01;
+
     private final double coreThreshold;
     private final List<double[]> rows = new ArrayList<>();
     private double birthLithium = Double.NaN;
@@ -30,6 +33,7 @@ final class LifeRecorder implements StepObserver {
      */
     private final List<double[]> cores = new ArrayList<>();
     private double lithiumHalved = Double.NaN;
+    private double lithiumOnePercent = Double.NaN;
     private double lastAge;
     private double lastLithium;
     private double lastCentreExcess;
@@ -74,6 +78,15 @@ final class LifeRecorder implements StepObserver {
             if (Double.isNaN(lithiumHalved) && lithium <= 0.5) {
                 lithiumHalved = crossing(lastAge, lastLithium, age, lithium, 0.5);
             }
+            if (Double.isNaN(lithiumOnePercent) && lithium <= LITHIUM_ONE_PERCENT) {
+                // in ln 7Li: the burning at the envelope's base takes a fixed share of what is left per unit time,
+                // so the abundance falls about exponentially between two models; linear in the abundance would
+                // date the 1 % level early by up to a fraction of the step
+                lithiumOnePercent = lastLithium > 0.0 && lithium > 0.0
+                        ? crossing(lastAge, Math.log(lastLithium), age, Math.log(lithium),
+                                Math.log(LITHIUM_ONE_PERCENT))
+                        : age;
+            }
         }
         zeroAge.observe(age, fraction, model.global().centralHydrogen());
         // the phase (second entry) is set in rows(), once the zero-age main sequence is known
@@ -107,7 +120,7 @@ final class LifeRecorder implements StepObserver {
             convectiveCore.observe(c[0], c[1] > 0.5, c[2] > 0.5, c[0] >= zams);
         }
         return new LifeEvents(radiativeCore, radiativeCoreEnd, zams, convectiveCore.onset(), convectiveCore.end(),
-                lithiumHalved, Double.NaN);
+                lithiumHalved, lithiumOnePercent, Double.NaN);
     }
 
     /**

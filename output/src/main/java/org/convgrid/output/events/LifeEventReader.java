@@ -4,6 +4,7 @@ import static org.convgrid.output.events.LifeEventColumns.CENTRAL_H_EXHAUSTED;
 import static org.convgrid.output.events.LifeEventColumns.CONV_CORE_END;
 import static org.convgrid.output.events.LifeEventColumns.CONV_CORE_ONSET;
 import static org.convgrid.output.events.LifeEventColumns.LI_HALVED;
+import static org.convgrid.output.events.LifeEventColumns.LI_ONE_PERCENT;
 import static org.convgrid.output.events.LifeEventColumns.MASS;
 import static org.convgrid.output.events.LifeEventColumns.MIXING_LENGTH;
 import static org.convgrid.output.events.LifeEventColumns.OVERSHOOT;
@@ -75,7 +76,8 @@ public final class LifeEventReader {
                                     ? r.get(OVERSHOOT_PROFILE) : ""),
                             n(r, RADIATIVE_CORE),
                             ifPresent(header, r, RADIATIVE_CORE_END), n(r, ZAMS), n(r, CONV_CORE_ONSET),
-                            n(r, CONV_CORE_END), n(r, LI_HALVED), ifPresent(header, r, CENTRAL_H_EXHAUSTED),
+                            n(r, CONV_CORE_END), n(r, LI_HALVED), ifPresent(header, r, LI_ONE_PERCENT),
+                            ifPresent(header, r, CENTRAL_H_EXHAUSTED),
                             ifPresent(header, r, TRACK_END)));
                 } catch (IllegalArgumentException e) {
                     throw new OutputFormatException("life-events row " + r.getRecordNumber() + ": " + e.getMessage(),

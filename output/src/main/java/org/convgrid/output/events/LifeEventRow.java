@@ -24,6 +24,8 @@ import org.convgrid.engine.units.Constants;
  * @param convCoreOnsetMyr a lasting convective core first appears, Myr since birth
  * @param convCoreEndMyr that core vanishes, Myr since birth
  * @param liHalvedMyr the surface lithium falls to half its birth value, Myr since birth
+ * @param liOnePercentMyr the surface lithium falls to 1 % of its birth value, Myr since birth (NaN in a table
+ *        written before the column existed)
  * @param centralHExhaustedMyr the central hydrogen runs out (the end of the main sequence), Myr since birth
  * @param trackEndMyr the last age the computed track reached, Myr since birth: an empty event cell means "not by
  *        this age" (NaN in a table written before the column existed)
@@ -31,7 +33,8 @@ import org.convgrid.engine.units.Constants;
 public record LifeEventRow(String trackId, double massMsun, double zInit, double yInit, double mixingLength,
                            double overshootHp, OvershootScheme overshootProfile, double radiativeCoreMyr,
                            double radiativeCoreEndMyr, double zamsMyr, double convCoreOnsetMyr,
-                           double convCoreEndMyr, double liHalvedMyr, double centralHExhaustedMyr,
+                           double convCoreEndMyr, double liHalvedMyr, double liOnePercentMyr,
+                           double centralHExhaustedMyr,
                            double trackEndMyr) {
 
     private static final double MYR = 1.0e6 * Constants.YEAR;
@@ -54,7 +57,7 @@ public record LifeEventRow(String trackId, double massMsun, double zInit, double
                 first.physics().overshootScheme(),
                 events.radiativeCore() / MYR, events.radiativeCoreEnd() / MYR, events.zeroAgeMainSequence() / MYR,
                 events.convectiveCoreOnset() / MYR, events.convectiveCoreEnd() / MYR, events.lithiumHalved() / MYR,
-                events.centralHydrogenExhausted() / MYR, trackEnd / MYR);
+                events.lithiumOnePercent() / MYR, events.centralHydrogenExhausted() / MYR, trackEnd / MYR);
     }
 
     /**
@@ -64,6 +67,6 @@ public record LifeEventRow(String trackId, double massMsun, double zInit, double
     public LifeEventRow withOvershootProfileIfUnknown(OvershootScheme profile) {
         return overshootProfile != null ? this : new LifeEventRow(trackId, massMsun, zInit, yInit, mixingLength,
                 overshootHp, profile, radiativeCoreMyr, radiativeCoreEndMyr, zamsMyr, convCoreOnsetMyr,
-                convCoreEndMyr, liHalvedMyr, centralHExhaustedMyr, trackEndMyr);
+                convCoreEndMyr, liHalvedMyr, liOnePercentMyr, centralHExhaustedMyr, trackEndMyr);
     }
 }

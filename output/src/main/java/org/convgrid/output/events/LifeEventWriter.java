@@ -34,7 +34,7 @@ public final class LifeEventWriter {
                 CsvNumbers.format(r.radiativeCoreMyr()), CsvNumbers.format(r.radiativeCoreEndMyr()),
                 CsvNumbers.format(r.zamsMyr()), CsvNumbers.format(r.convCoreOnsetMyr()),
                 CsvNumbers.format(r.convCoreEndMyr()), CsvNumbers.format(r.liHalvedMyr()),
-                CsvNumbers.format(r.centralHExhaustedMyr()), CsvNumbers.format(r.trackEndMyr())) + "\n";
+                CsvNumbers.format(r.liOnePercentMyr()), CsvNumbers.format(r.centralHExhaustedMyr()), CsvNumbers.format(r.trackEndMyr())) + "\n";
     }
 
     /**

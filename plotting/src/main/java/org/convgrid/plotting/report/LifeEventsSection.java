@@ -55,6 +55,7 @@ final class LifeEventsSection {
             new Column("convective core appears", LifeEventColumns.CONV_CORE_ONSET, LifeEventRow::convCoreOnsetMyr),
             new Column("convective core ends", LifeEventColumns.CONV_CORE_END, LifeEventRow::convCoreEndMyr),
             new Column("surface Li halved", LifeEventColumns.LI_HALVED, LifeEventRow::liHalvedMyr),
+            new Column("surface Li at 1 %", LifeEventColumns.LI_ONE_PERCENT, LifeEventRow::liOnePercentMyr),
             new Column("central H exhausted", LifeEventColumns.CENTRAL_H_EXHAUSTED,
                     LifeEventRow::centralHExhaustedMyr));
 
