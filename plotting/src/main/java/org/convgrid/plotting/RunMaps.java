@@ -51,7 +51,9 @@ import org.convgrid.plotting.zones.ZoneMapRenderer;
  * convective turnover times against mass ({@code turnover-vs-mass_z<Z>_<physics>.png}); for a bounded selection of
  * the evolution tracks in tracks/ ({@link AgeChartSelection}), their convective zones against age
  * ({@code zones-age_m<mass>_z<Z>_<physics>.png}). With tracks, the HR diagrams also show the tracks and the
- * isochrones at the grid's ages.
+ * isochrones at the grid's ages. A grid of {@code ms_fraction} ages, whose stars each have their own ages in Gyr, is
+ * grouped by fraction ({@link AgeGroups}): a zone map per Z, fraction and physics
+ * ({@code zones-mass_z<Z>_msf<fraction>_<physics>.png}), HR lines of equal fraction, and no transition charts.
  */
 public final class RunMaps {
 
