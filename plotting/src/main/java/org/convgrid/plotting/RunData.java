@@ -25,6 +25,7 @@ import org.convgrid.output.track.TrackTimeline;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionReader;
 import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.plotting.label.AgeGroups;
 import org.convgrid.plotting.label.MetallicityNames;
 import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.tracks.TrackOrigin;
@@ -79,6 +80,15 @@ public record RunData(List<CatalogueRow> catalogue, List<TransitionRow> transiti
     /** How the charts and the report name the run's metallicities: with their [Fe/H] when the grid gave [Fe/H]. */
     public MetallicityNames metallicityNames() {
         return MetallicityNames.of(ironAbundance(), catalogue);
+    }
+
+    /**
+     * How the charts group the run's models by age: by main-sequence fraction when its grid (the manifest's grid
+     * text) gives {@code ms_fraction} ages, else by age in Gyr (also without a manifest: the catalogue alone does
+     * not name the fractions).
+     */
+    public AgeGroups ageGroups() {
+        return new AgeGroups(GridChoices.of(manifest).msFractions());
     }
 
     /** Whether the run has evolution tracks. */

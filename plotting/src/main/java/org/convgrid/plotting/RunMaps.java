@@ -20,6 +20,7 @@ import org.convgrid.plotting.hr.HrDiagramRenderer;
 import org.convgrid.plotting.kippenhahn.Kippenhahn;
 import org.convgrid.plotting.kippenhahn.KippenhahnRenderer;
 import org.convgrid.plotting.kippenhahn.ZoneCoordinate;
+import org.convgrid.plotting.label.AgeGroups;
 import org.convgrid.plotting.label.MetallicityNames;
 import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.label.SliceLabels;
@@ -50,7 +51,9 @@ import org.convgrid.plotting.zones.ZoneMapRenderer;
  * convective turnover times against mass ({@code turnover-vs-mass_z<Z>_<physics>.png}); for a bounded selection of
  * the evolution tracks in tracks/ ({@link AgeChartSelection}), their convective zones against age
  * ({@code zones-age_m<mass>_z<Z>_<physics>.png}). With tracks, the HR diagrams also show the tracks and the
- * isochrones at the grid's ages.
+ * isochrones at the grid's ages. A grid of {@code ms_fraction} ages, whose stars each have their own ages in Gyr, is
+ * grouped by fraction ({@link AgeGroups}): a zone map per Z, fraction and physics
+ * ({@code zones-mass_z<Z>_msf<fraction>_<physics>.png}), HR lines of equal fraction, and no transition charts.
  */
 public final class RunMaps {
 
@@ -162,9 +165,13 @@ public final class RunMaps {
         }
         List<CatalogueRow> rows = run.catalogue();
         MetallicityNames names = run.metallicityNames();
+        AgeGroups groups = run.ageGroups();
         List<MapEntry> mass = new ArrayList<>();
         List<MapEntry> radius = new ArrayList<>();
-        for (Slice s : slices) {
+        if (groups.byFraction()) {
+            zonesAtFractions(run, groups, mass, radius);
+        }
+        for (Slice s : groups.byFraction() ? Set.<Slice>of() : slices) {
             TransitionRow t = transitions.get(s);
             String stem = SliceLabels.fileStem(s);
             String group = groupOf(s.zInit(), PhysicsKey.of(s), run);
@@ -180,12 +187,16 @@ public final class RunMaps {
         entries.addAll(radius);
         for (PhysicsKey p : physics) {
             entries.add(new MapEntry(HR_FILES + "_" + p.fileStem() + ".png", MapEntry.HR,
-                    (run.hasTracks() ? "HR diagram of every usable model (colour: Z; shape: structure class) with the "
-                            + "evolution tracks (grey) and isochrones labelled by age, "
-                            : "HR diagram of every usable model (colour: Z; shape: structure class), ")
-                            + p.describe() + "." + refinementNote(rows, p),
-                    () -> HrDiagramRenderer.render(usable(HrDiagram.build(p, rows, run.trackedModels(), run::timeline),
-                            rows), names)));
+                    hrCaption(run, groups) + p.describe() + "." + refinementNote(rows, p),
+                    () -> HrDiagramRenderer.render(usable(HrDiagram.build(p, rows, run.trackedModels(), run::timeline,
+                            groups), rows), names)));
+        }
+        if (groups.byFraction()) {
+            // transitions.csv finds its masses across the stars of one age in Gyr, and here every star has its own:
+            // each of its rows holds one star, so there is no transition to chart (the report says why)
+            entries.addAll(turnoverAgainstMass(run, physics));
+            entries.addAll(zonesAgainstAge(run));
+            return entries;
         }
         for (PhysicsKey p : physics) {
             if (run.transitions().stream().anyMatch(t -> PhysicsKey.of(t.slice()).equals(p))) {
@@ -216,6 +227,51 @@ public final class RunMaps {
         entries.addAll(turnoverAgainstMass(run, physics));
         entries.addAll(zonesAgainstAge(run));
         return entries;
+    }
+
+    /**
+     * The zone maps of an {@code ms_fraction} grid: one per Z, main-sequence fraction and physics, in catalogue order,
+     * its masses along x as on an age slice's map, each star at its own age. Grouped by age in Gyr they held one star
+     * each (a review's grid of 6 masses, 2 Z and 5 fractions drew 60 such maps in m/M and 60 in r/R).
+     */
+    private static void zonesAtFractions(RunData run, AgeGroups groups, List<MapEntry> mass, List<MapEntry> radius) {
+        record FractionSlice(double zInit, double msFraction, PhysicsKey physics) {
+        }
+        Map<FractionSlice, List<CatalogueRow>> members = new LinkedHashMap<>();
+        for (CatalogueRow row : run.catalogue()) {
+            double fraction = groups.keyOf(row);
+            if (!Double.isNaN(fraction)) {
+                members.computeIfAbsent(new FractionSlice(row.zInit(), fraction, PhysicsKey.of(row)),
+                        k -> new ArrayList<>()).add(row);
+            }
+        }
+        MetallicityNames names = run.metallicityNames();
+        members.forEach((f, rows) -> {
+            String stem = SliceLabels.fractionFileStem(f.zInit(), f.msFraction(), f.physics());
+            String group = groupOf(f.zInit(), f.physics(), run);
+            String slice = names.of(f.zInit()) + ", " + SliceLabels.msFraction(f.msFraction()) + " (each star at its "
+                    + "own age), " + f.physics().describe();
+            mass.add(new MapEntry(ZONES_MASS_FILES + "_" + stem + ".png", MapEntry.ZONES_MASS, group,
+                    "Convective zones in m/M, " + slice + ".",
+                    () -> ZoneMapRenderer.render(ZoneMap.inMassAtFraction(f.msFraction(), rows), names)));
+            radius.add(new MapEntry(ZONES_RADIUS_FILES + "_" + stem + ".png", MapEntry.ZONES_RADIUS, group,
+                    "Convective zones in r/R, " + slice + ".",
+                    () -> ZoneMapRenderer.render(ZoneMap.inRadiusAtFraction(f.msFraction(), rows, run.radiusZones()),
+                            names)));
+        });
+    }
+
+    /** The HR diagram's caption up to its physics: what the lines join and how they are labelled. */
+    private static String hrCaption(RunData run, AgeGroups groups) {
+        if (groups.byFraction()) {
+            return "HR diagram of every usable model (colour: Z; shape: structure class)"
+                    + (run.hasTracks() ? " with the evolution tracks (grey)" : "") + "; the lines join the models of "
+                    + "equal main-sequence fraction (0: the zero-age main sequence; near 1: core-hydrogen exhaustion), "
+                    + "each star at its own age, labelled by fraction, ";
+        }
+        return run.hasTracks() ? "HR diagram of every usable model (colour: Z; shape: structure class) with the "
+                + "evolution tracks (grey) and isochrones labelled by age, "
+                : "HR diagram of every usable model (colour: Z; shape: structure class), ";
     }
 
     /**

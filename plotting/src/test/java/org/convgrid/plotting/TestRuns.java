@@ -126,6 +126,11 @@ public final class TestRuns {
 
     /** Writes catalogue.csv, transitions.csv and manifest.yaml for {@code rows} into {@code dir}. */
     public static Path write(Path dir, List<CatalogueRow> rows) throws IOException {
+        return write(dir, rows, GRID_TEXT);
+    }
+
+    /** As {@link #write(Path, List)}, the manifest keeping {@code gridText} as the run's grid file. */
+    public static Path write(Path dir, List<CatalogueRow> rows, String gridText) throws IOException {
         Files.createDirectories(dir);
         StringWriter catalogue = new StringWriter();
         try (CatalogueWriter w = CatalogueWriter.startingWithHeader(catalogue)) {
@@ -140,7 +145,7 @@ public final class TestRuns {
         Files.writeString(dir.resolve("transitions.csv"), transitions.toString());
         Map<ModelStatus, Long> counts = new EnumMap<>(ModelStatus.class);
         rows.forEach(r -> counts.merge(r.status(), 1L, Long::sum));
-        RunManifest manifest = new RunManifest("0.1.0", "unknown", "grids/synthetic.yaml", GRID_TEXT, "ab".repeat(32),
+        RunManifest manifest = new RunManifest("0.1.0", "unknown", "grids/synthetic.yaml", gridText, "ab".repeat(32),
                 "cd".repeat(32), List.of(PhysicsOptions.DEFAULT), Instant.parse("2026-03-01T10:00:00Z"),
                 Instant.parse("2026-03-01T10:42:10Z"), 2, null, counts, 2.5);
         Files.writeString(dir.resolve("manifest.yaml"), RunManifestWriter.toYaml(manifest));

@@ -48,7 +48,7 @@ final class AgeLabelAnchor {
      */
     static HrPoint of(HrDiagramData.ZeroAgeLine line, List<HrDiagramData.ZeroAgeLine> all, Scale scale,
                       Dimension2D label) {
-        List<HrDiagramData.ZeroAgeLine> others = all.stream().filter(o -> o.ageGyr() != line.ageGyr()).toList();
+        List<HrDiagramData.ZeroAgeLine> others = all.stream().filter(o -> o.age() != line.age()).toList();
         Comparator<HrPoint> byMass = Comparator.comparingDouble(HrPoint::massMsun);
         HrPoint lowest = line.points().stream().min(byMass).orElseThrow();
         if (roomRightIsFree(lowest, others, scale, label)

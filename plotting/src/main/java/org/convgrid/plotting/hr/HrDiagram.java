@@ -5,10 +5,12 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.TreeMap;
 import java.util.function.Function;
+import java.util.function.ToDoubleFunction;
 import org.convgrid.output.track.TrackTimeline;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.track.TrackStep;
 import org.convgrid.output.transitions.RefinedModelIds;
+import org.convgrid.plotting.label.AgeGroups;
 import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.tracks.TrackedModel;
 
@@ -48,6 +50,19 @@ public final class HrDiagram {
      */
     public static HrDiagramData build(PhysicsKey physics, List<CatalogueRow> rows, List<TrackedModel> tracked,
                                       Function<String, TrackTimeline> timelines) {
+        return build(physics, rows, tracked, timelines, AgeGroups.BY_AGE);
+    }
+
+    /**
+     * As {@link #build(PhysicsKey, List, List, Function)}, its lines joining the models of equal age as
+     * {@code ageGroups} groups them. Grouped by main-sequence fraction, the zero-age line of a Z joins its models of
+     * the lowest fraction and there is one line per fraction with or without tracks: the grid's own lines, each star
+     * at its own age (by age in Gyr they held one star each). A model whose id names no fraction is shown but on no
+     * line.
+     */
+    public static HrDiagramData build(PhysicsKey physics, List<CatalogueRow> rows, List<TrackedModel> tracked,
+                                      Function<String, TrackTimeline> timelines, AgeGroups ageGroups) {
+        ToDoubleFunction<HrPoint> ageOf = p -> ageGroups.keyOf(p.modelId(), p.ageGyr());
         List<HrPoint> usable = rows.stream()
                 .filter(r -> PhysicsKey.of(r).equals(physics) && r.isOk() && r.structureClass() != null
                         && r.luminosityLsun() > 0 && r.teffK() > 0)
@@ -60,25 +75,29 @@ public final class HrDiagram {
         List<HrPoint> refinementPoints = usable.stream().filter(p -> RefinedModelIds.isRefined(p.modelId()))
                 .toList();
         TreeMap<Double, List<HrPoint>> byZ = new TreeMap<>();
-        points.forEach(p -> byZ.computeIfAbsent(p.zInit(), z -> new ArrayList<>()).add(p));
+        points.stream().filter(p -> onLine(ageGroups, ageOf.applyAsDouble(p)))
+                .forEach(p -> byZ.computeIfAbsent(p.zInit(), z -> new ArrayList<>()).add(p));
         List<HrDiagramData.ZeroAgeLine> lines = new ArrayList<>();
         byZ.forEach((z, members) -> {
-            double youngest = members.stream().mapToDouble(HrPoint::ageGyr).min().orElseThrow();
+            double youngest = members.stream().mapToDouble(ageOf).min().orElseThrow();
             lines.add(new HrDiagramData.ZeroAgeLine(z, youngest, members.stream()
-                    .filter(p -> p.ageGyr() == youngest).sorted(Comparator.comparingDouble(HrPoint::massMsun))
+                    .filter(p -> ageOf.applyAsDouble(p) == youngest).sorted(Comparator.comparingDouble(HrPoint::massMsun))
                     .toList()));
         });
         List<HrPoint> labels = lines.isEmpty() ? List.of() : massLabels(lines.get(lines.size() / 2).points());
-        List<Double> ages = points.stream().map(HrPoint::ageGyr).distinct().sorted().toList();
+        List<Double> ages = points.stream().mapToDouble(ageOf).filter(a -> onLine(ageGroups, a)).boxed().distinct()
+                .sorted().toList();
+        // a track from birth starts at the catalogue's youngest age in Gyr, whatever the lines are keyed by
+        double youngestGyr = youngestPositive(points.stream().map(HrPoint::ageGyr).toList());
         List<HrDiagramData.TrackLine> tracks = tracked.stream().filter(t -> t.origin().physics().equals(physics))
                 .sorted(Comparator.comparingDouble((TrackedModel t) -> t.origin().zInit())
                         .thenComparingDouble(t -> t.origin().massMsun()))
-                .map(t -> trackLine(t, timelines.apply(t.origin().trackId()), youngestPositive(ages)))
+                .map(t -> trackLine(t, timelines.apply(t.origin().trackId()), youngestGyr))
                 .filter(t -> t.logL().size() >= 2).toList();
         List<HrDiagramData.ZeroAgeLine> isochrones = new ArrayList<>();
-        if (!tracks.isEmpty()) {
+        if (!tracks.isEmpty() || ageGroups.byFraction()) {
             byZ.forEach((z, members) -> ages.forEach(age -> {
-                List<HrPoint> at = members.stream().filter(p -> p.ageGyr() == age)
+                List<HrPoint> at = members.stream().filter(p -> ageOf.applyAsDouble(p) == age)
                         .sorted(Comparator.comparingDouble(HrPoint::massMsun)).toList();
                 if (at.size() >= 2) {
                     isochrones.add(new HrDiagramData.ZeroAgeLine(z, age, at));
@@ -86,7 +105,7 @@ public final class HrDiagram {
             }));
         }
         return new HrDiagramData(physics, List.copyOf(byZ.keySet()), ages, points, lines, labels, tracks,
-                isochrones, refinementPoints);
+                isochrones, refinementPoints, ageGroups);
     }
 
     private static HrDiagramData.TrackLine trackLine(TrackedModel t, TrackTimeline timeline, double from) {
@@ -99,6 +118,11 @@ public final class HrDiagram {
         return new HrDiagramData.TrackLine(t.origin().massMsun(), t.origin().zInit(),
                 steps.stream().map(s -> Math.log10(s.teffK())).toList(),
                 steps.stream().map(s -> Math.log10(s.luminosityLsun())).toList(), before);
+    }
+
+    /** Whether a model of this age joins a line: under a fraction grouping, not one whose id names no fraction. */
+    private static boolean onLine(AgeGroups ageGroups, double age) {
+        return !ageGroups.byFraction() || !Double.isNaN(age);
     }
 
     /** The youngest age above zero, Gyr; NaN when there is none. */

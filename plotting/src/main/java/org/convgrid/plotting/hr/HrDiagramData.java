@@ -1,6 +1,7 @@
 package org.convgrid.plotting.hr;
 
 import java.util.List;
+import org.convgrid.plotting.label.AgeGroups;
 import org.convgrid.plotting.label.PhysicsKey;
 
 /**
@@ -8,24 +9,34 @@ import org.convgrid.plotting.label.PhysicsKey;
  *
  * @param physics the physics of every model shown
  * @param metallicities the Z values shown, increasing
- * @param ages the ages shown, Gyr, increasing
+ * @param ages the ages shown, increasing: Gyr, or main-sequence fractions when {@code ageGroups} groups by fraction
  * @param points every usable model of the grid (status ok, with L, Teff and a structure class)
  * @param zeroAgeLines one line per Z through its youngest models (age 0 when the run has it), by mass
  * @param massLabels the points that get a mass label (on one zero-age line)
  * @param tracks one evolution track per (mass, Z) of this physics, by Z then mass; empty when the run has none
- * @param isochrones per Z and age, the models of that age in mass order; only when there are tracks
+ * @param isochrones per Z and age, the models of that age in mass order; only when there are tracks, or when the
+ *                   diagram groups by main-sequence fraction (then each joins the models of one fraction)
  * @param refinementPoints the usable models the transition refinement added at masses of its own choosing: drawn
  *                         apart (small and pale), never on a line or labelled, since they crowd near the transition
  *                         masses and an isochrone through them would not be one through the grid's masses
+ * @param ageGroups how the lines' ages are keyed and named: by age in Gyr, or by main-sequence fraction
  */
 public record HrDiagramData(PhysicsKey physics, List<Double> metallicities, List<Double> ages, List<HrPoint> points,
                             List<ZeroAgeLine> zeroAgeLines, List<HrPoint> massLabels, List<TrackLine> tracks,
-                            List<ZeroAgeLine> isochrones, List<HrPoint> refinementPoints) {
+                            List<ZeroAgeLine> isochrones, List<HrPoint> refinementPoints, AgeGroups ageGroups) {
 
     /** A diagram without tracks or isochrones. */
     public HrDiagramData(PhysicsKey physics, List<Double> metallicities, List<Double> ages, List<HrPoint> points,
                          List<ZeroAgeLine> zeroAgeLines, List<HrPoint> massLabels) {
         this(physics, metallicities, ages, points, zeroAgeLines, massLabels, List.of(), List.of(), List.of());
+    }
+
+    /** A diagram whose lines join models of equal age in Gyr. */
+    public HrDiagramData(PhysicsKey physics, List<Double> metallicities, List<Double> ages, List<HrPoint> points,
+                         List<ZeroAgeLine> zeroAgeLines, List<HrPoint> massLabels, List<TrackLine> tracks,
+                         List<ZeroAgeLine> isochrones, List<HrPoint> refinementPoints) {
+        this(physics, metallicities, ages, points, zeroAgeLines, massLabels, tracks, isochrones, refinementPoints,
+                AgeGroups.BY_AGE);
     }
 
     public HrDiagramData {
@@ -37,6 +48,12 @@ public record HrDiagramData(PhysicsKey physics, List<Double> metallicities, List
         tracks = List.copyOf(tracks);
         isochrones = List.copyOf(isochrones);
         refinementPoints = List.copyOf(refinementPoints);
+        java.util.Objects.requireNonNull(ageGroups, "ageGroups");
+    }
+
+    /** The name of a line's age for its label and legend: {@code 150 Myr}, {@code MS fraction 0.5}. */
+    public String ageName(double age) {
+        return ageGroups.name(age);
     }
 
     /**
@@ -71,10 +88,11 @@ public record HrDiagramData(PhysicsKey physics, List<Double> metallicities, List
      * the isochrones.
      *
      * @param zInit initial metal mass fraction
-     * @param ageGyr the age of the line, Gyr (0 = ZAMS)
+     * @param age the age of the line: Gyr (0 = ZAMS), or its main-sequence fraction (0 = ZAMS) when the diagram
+     *     groups by fraction
      * @param points the models on the line, increasing mass
      */
-    public record ZeroAgeLine(double zInit, double ageGyr, List<HrPoint> points) {
+    public record ZeroAgeLine(double zInit, double age, List<HrPoint> points) {
         public ZeroAgeLine {
             points = List.copyOf(points);
         }

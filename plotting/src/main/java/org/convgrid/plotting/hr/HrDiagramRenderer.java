@@ -22,7 +22,8 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  * Turns {@link HrDiagramData} into a chart: log Teff on a reversed x axis (hot stars left), log L/Lsun up; one
  * colour per metallicity (zero-age lines, isochrones and models), one marker shape per structure class; evolution
  * tracks (thin, light grey) and isochrones (one dash pattern per age, {@link IsochroneDashes}) labelled with their
- * ages under the models when the run has tracks; mass and age labels clear of every marker, line and other label,
+ * ages under the models when the run has tracks; for an {@code ms_fraction} grid, lines of equal main-sequence
+ * fraction in their place, keyed, labelled and titled by fraction ({@link HrDiagramData#ageGroups}); mass and age labels clear of every marker, line and other label,
  * with a leader line when they had to move away. XChart cannot reverse an axis, so the x values are -log Teff and
  * the tick labels drop the sign.
  */
@@ -98,8 +99,7 @@ public final class HrDiagramRenderer {
 
     /** The chart of an HR diagram, its metallicities named as {@code names} name them. */
     public static StyledChart render(HrDiagramData data, MetallicityNames names) {
-        StyledChart chart = ChartStyle.newChart("HR diagram, " + names.values(data.metallicities()) + ", "
-                        + ages(data.ages()), data.physics().describe(),
+        StyledChart chart = ChartStyle.newChart(title(data, names), data.physics().describe(),
                 "log10(Teff / K)   (hotter to the left)", "log10(L / L\u2609)");
         ChartStyle.legendRight(chart);
         chart.getStyler().setLegendSeriesLineLength(LEGEND_LINE_PX);
@@ -136,7 +136,7 @@ public final class HrDiagramRenderer {
         List<HrDiagramData.ZeroAgeLine> zeroAge = data.isochrones().isEmpty() ? data.zeroAgeLines() : List.of();
         for (HrDiagramData.ZeroAgeLine line : zeroAge) {
             int zIndex = data.metallicities().indexOf(line.zInit());
-            XYSeries s = chart.addSeries((line.ageGyr() == 0 ? "zero age" : age(line.ageGyr()))
+            XYSeries s = chart.addSeries((line.age() == 0 ? "zero age" : data.ageName(line.age()))
                             + ", " + names.of(line.zInit()),
                     line.points().stream().mapToDouble(p -> -p.logTeff()).toArray(),
                     line.points().stream().mapToDouble(HrPoint::logL).toArray());
@@ -195,6 +195,12 @@ public final class HrDiagramRenderer {
         });
         ChartNotes.addRightOfPlot(chart, notes(data, chart));
         return chart;
+    }
+
+    /** The chart's title: its metallicities and its ages, or its main-sequence fractions when grouped by them. */
+    static String title(HrDiagramData data, MetallicityNames names) {
+        String ages = data.ageGroups().byFraction() ? data.ageGroups().fractionsTitle(data.ages()) : ages(data.ages());
+        return "HR diagram, " + names.values(data.metallicities()) + ", " + ages;
     }
 
     /**
@@ -269,7 +275,7 @@ public final class HrDiagramRenderer {
      */
     static List<Label> labels(HrDiagramData data, StyledChart chart) {
         List<Label> labels = new java.util.ArrayList<>();
-        ageAnchors(data, chart).forEach(a -> labels.add(new Label(a.model(), age(a.line().ageGyr()), false)));
+        ageAnchors(data, chart).forEach(a -> labels.add(new Label(a.model(), data.ageName(a.line().age()), false)));
         data.massLabels().forEach(p -> labels.add(new Label(p, massLabel(p), true)));
         return labels;
     }
@@ -292,7 +298,7 @@ public final class HrDiagramRenderer {
     private static List<AgeAnchor> ageAnchors(HrDiagramData data, StyledChart chart) {
         List<HrDiagramData.ZeroAgeLine> middle = middleIsochrones(data);
         List<HrDiagramData.ZeroAgeLine> byPreference = new java.util.ArrayList<>(middle);
-        byPreference.sort(java.util.Comparator.comparingDouble(HrDiagramData.ZeroAgeLine::ageGyr));
+        byPreference.sort(java.util.Comparator.comparingDouble(HrDiagramData.ZeroAgeLine::age));
         if (byPreference.size() > 1) {
             byPreference.add(1, byPreference.remove(byPreference.size() - 1));
         }
@@ -301,7 +307,7 @@ public final class HrDiagramRenderer {
                 NominalPlot.HEIGHT_PX / (chart.getStyler().getYAxisMax() - chart.getStyler().getYAxisMin()));
         List<AgeAnchor> kept = new java.util.ArrayList<>();
         for (HrDiagramData.ZeroAgeLine line : byPreference) {
-            HrPoint model = AgeLabelAnchor.of(line, data.isochrones(), scale, textSize(age(line.ageGyr())));
+            HrPoint model = AgeLabelAnchor.of(line, data.isochrones(), scale, textSize(data.ageName(line.age())));
             if (kept.stream().filter(k -> nominalPixels(chart, k.model(), model) < AGE_LABEL_SPACING_PX)
                     .count() < AGE_LABELS_TOGETHER) {
                 kept.add(new AgeAnchor(line, model));
@@ -436,13 +442,15 @@ public final class HrDiagramRenderer {
         // legend-only series per age, in black (the key is the dash pattern, colour stands for Z), drawn first under
         // the coloured isochrone at the same points
         for (HrDiagramData.ZeroAgeLine line : middle) {
-            XYSeries s = chart.addSeries("isochrone, " + age(line.ageGyr()),
+            // by fraction the lines are no isochrones (each star at its own age): the legend names the fraction alone
+            XYSeries s = chart.addSeries((data.ageGroups().byFraction() ? "" : "isochrone, ")
+                            + data.ageName(line.age()),
                     line.points().stream().mapToDouble(p -> -p.logTeff()).toArray(),
                     line.points().stream().mapToDouble(HrPoint::logL).toArray());
             s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
             s.setMarker(SeriesMarkers.NONE);
             s.setLineColor(ChartStyle.BLACK);
-            s.setLineStyle(IsochroneDashes.stroke(data, line.ageGyr()));
+            s.setLineStyle(IsochroneDashes.stroke(data, line.age()));
         }
         int n = 0;
         for (HrDiagramData.ZeroAgeLine line : data.isochrones()) {
@@ -456,7 +464,7 @@ public final class HrDiagramRenderer {
             s.setMarker(SeriesMarkers.NONE);
             s.setLineColor(ChartStyle.seriesColor(zIndex));
             // the legend entry of a Z is drawn solid whatever the age of the isochrone that carries it
-            s.setLineStyle(IsochroneDashes.stroke(data, line.ageGyr()));
+            s.setLineStyle(IsochroneDashes.stroke(data, line.age()));
             s.setShowInLegend(first);
         }
     }

@@ -21,7 +21,7 @@ final class IsochroneDashes {
 
     /** The ages that have an isochrone, increasing: the ones that take a pattern. */
     static List<Double> ages(HrDiagramData data) {
-        return data.isochrones().stream().map(HrDiagramData.ZeroAgeLine::ageGyr).distinct().sorted().toList();
+        return data.isochrones().stream().map(HrDiagramData.ZeroAgeLine::age).distinct().sorted().toList();
     }
 
     /** The stroke of the isochrones of {@code ageGyr}. */
@@ -55,7 +55,7 @@ final class IsochroneDashes {
         }
         List<String> parts = new ArrayList<>();
         for (int i = 0; i < groups.size(); i++) {
-            List<String> names = groups.get(i).stream().map(HrDiagramRenderer::age).toList();
+            List<String> names = groups.get(i).stream().map(data::ageName).toList();
             String joined = names.size() == 2 ? names.get(0) + " and " + names.get(1)
                     : String.join(", ", names.subList(0, names.size() - 1)) + " and " + names.get(names.size() - 1);
             parts.add(joined + " share " + (i == 0 ? "one" : "another"));

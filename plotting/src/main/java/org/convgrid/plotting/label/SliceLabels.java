@@ -83,6 +83,14 @@ public final class SliceLabels {
         return ageGyr > 0.0 && ageGyr < 1.0 ? number(ageGyr * 1000.0) + " Myr" : number(ageGyr) + " Gyr";
     }
 
+    /**
+     * A main-sequence fraction for a title, where an age would stand: {@code main-sequence fraction 0.25} (an
+     * {@code ms_fraction} grid's models of one fraction are each at their own age).
+     */
+    public static String msFraction(double fraction) {
+        return "main-sequence fraction " + number(fraction);
+    }
+
     /** The physics options in words: {@code α = 1.8, Schwarzschild, no overshoot}. */
     public static String physics(double mixingLength, double overshootHp, OvershootScheme overshootProfile,
                                  StabilityCriterion criterion, double opacityFactor) {
@@ -174,6 +182,15 @@ public final class SliceLabels {
     public static String fileStem(Slice s) {
         return "z" + number(s.zInit()) + "_age" + number(s.ageGyr()) + "_" + physicsStem(s.mixingLength(),
                 s.overshootHp(), s.overshootProfile(), s.criterion(), s.opacityScale());
+    }
+
+    /**
+     * A file name stem for the models of one Z, physics and main-sequence fraction (an {@code ms_fraction} grid's
+     * map, each star at its own age), e.g. {@code z0.02_msf0.25_a1.8_ov0_schwarzschild}: the age part of
+     * {@link #fileStem(Slice)} becomes {@code msf} and the fraction, so the two kinds never share a name.
+     */
+    public static String fractionFileStem(double zInit, double msFraction, PhysicsKey physics) {
+        return "z" + number(zInit) + "_msf" + number(msFraction) + "_" + physics.fileStem();
     }
 
     /**

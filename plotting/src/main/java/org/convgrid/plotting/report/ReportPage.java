@@ -295,8 +295,26 @@ public final class ReportPage {
         }
     }
 
+    /**
+     * Why an {@code ms_fraction} run has no transition masses, no charts of them and no turnover charts, in place of
+     * the table: its 60 one-star rows (a review's grid) each read "no fully convective model at any usable mass",
+     * true and of no use.
+     */
+    static final String EACH_STAR_ITS_OWN_AGE_NOTE = "This grid gives its ages as fractions of each star's "
+            + "main-sequence lifetime, so the stars of one fraction are each at their own age in Gyr. Transition "
+            + "masses are found across the masses of one age in Gyr, and here such an age holds a single star (all "
+            + "of them only at a zero age counted from the ZAMS): " + RunLayout.TRANSITIONS + " has one row per age "
+            + "in Gyr, and a transition mass in none of one star. This table, the charts of the transition masses "
+            + "against Z and against age, and the turnover-time charts (one line per age) are left out; the zone maps "
+            + "and the HR diagram group the models by main-sequence fraction instead.";
+
     private static void transitions(StringBuilder b, RunData run) {
         MetallicityNames names = run.metallicityNames();
+        if (run.ageGroups().byFraction()) {
+            b.append("<h2 id=\"transitions\">Transition masses</h2>\n<p>").append(Html.escape(EACH_STAR_ITS_OWN_AGE_NOTE))
+                    .append("</p>\n");
+            return;
+        }
         b.append("<h2 id=\"transitions\">Transition masses</h2>\n<table>\n<tr>" + ironHeading(names)
                 + "<th>Z</th><th>age</th><th>physics</th>"
                 + "<th>fully convective up to / M\u2609</th><th>bracket / M\u2609</th>"

@@ -12,6 +12,7 @@ import org.convgrid.output.catalogue.CatalogueZone;
 import org.convgrid.output.transitions.Slice;
 import org.convgrid.output.transitions.TransitionEstimate;
 import org.convgrid.output.transitions.TransitionRow;
+import org.convgrid.plotting.label.SliceLabels;
 
 /**
  * Builds the data of a convective-zone map from the rows of one slice: a pure function, no drawing.
@@ -55,13 +56,55 @@ public final class ZoneMap {
         return build(slice, rows, transitions, ZoneAxis.RADIUS_FRACTION, radiusZonesById);
     }
 
+    /**
+     * A map in m/M of one main-sequence fraction of an {@code ms_fraction} grid: {@code members} are the rows of one
+     * Z and physics at that fraction, each star at its own age. No transition markers: transitions.csv finds them
+     * across the masses of one age in Gyr, which holds one star of such a grid.
+     */
+    public static ZoneMapData inMassAtFraction(double msFraction, List<CatalogueRow> members) {
+        return build(fractionSlice(members), SliceLabels.msFraction(msFraction), members, null,
+                ZoneAxis.MASS_FRACTION, Map.of());
+    }
+
+    /** As {@link #inMassAtFraction}, in r/R ({@code radiusZonesById}: as for {@link #inRadius}). */
+    public static ZoneMapData inRadiusAtFraction(double msFraction, List<CatalogueRow> members,
+                                                 Map<String, List<Span>> radiusZonesById) {
+        return build(fractionSlice(members), SliceLabels.msFraction(msFraction), members, null,
+                ZoneAxis.RADIUS_FRACTION, radiusZonesById);
+    }
+
+    /** The Z and physics the members share, without an age (NaN): each member has its own. */
+    private static Slice fractionSlice(List<CatalogueRow> members) {
+        if (members.isEmpty()) {
+            throw new IllegalArgumentException("no catalogue row at this main-sequence fraction");
+        }
+        Slice first = Slice.of(members.get(0));
+        Slice slice = new Slice(first.zInit(), Double.NaN, first.mixingLength(), first.overshootHp(),
+                first.criterion(), first.opacityScale(), first.overshootProfile());
+        if (members.stream().map(Slice::of).anyMatch(s -> !sameButAge(s, slice))) {
+            throw new IllegalArgumentException("rows of several Z or physics at one main-sequence fraction");
+        }
+        return slice;
+    }
+
+    private static boolean sameButAge(Slice a, Slice ageless) {
+        return new Slice(a.zInit(), Double.NaN, a.mixingLength(), a.overshootHp(), a.criterion(), a.opacityScale(),
+                a.overshootProfile()).equals(ageless);
+    }
+
     private static ZoneMapData build(Slice slice, List<CatalogueRow> rows, TransitionRow transitions,
                                      ZoneAxis axis, Map<String, List<Span>> radiusZonesById) {
-        List<CatalogueRow> byMass = rows.stream().filter(r -> Slice.of(r).equals(slice))
-                .sorted(Comparator.comparingDouble(CatalogueRow::massMsun)).toList();
-        if (byMass.isEmpty()) {
+        List<CatalogueRow> members = rows.stream().filter(r -> Slice.of(r).equals(slice)).toList();
+        if (members.isEmpty()) {
             throw new IllegalArgumentException("no catalogue row in slice " + slice);
         }
+        return build(slice, SliceLabels.age(slice.ageGyr()), members, transitions, axis, radiusZonesById);
+    }
+
+    private static ZoneMapData build(Slice slice, String age, List<CatalogueRow> members, TransitionRow transitions,
+                                     ZoneAxis axis, Map<String, List<Span>> radiusZonesById) {
+        List<CatalogueRow> byMass = members.stream().sorted(Comparator.comparingDouble(CatalogueRow::massMsun))
+                .toList();
         double[] edges = columnEdges(byMass.stream().mapToDouble(CatalogueRow::massMsun).toArray());
         List<ZoneRect> rects = new ArrayList<>();
         boolean omitted = false;
@@ -90,7 +133,7 @@ public final class ZoneMap {
                 }
             }
         }
-        return new ZoneMapData(slice, axis, rects, markers(transitions), edges[0], edges[edges.length - 1],
+        return new ZoneMapData(slice, age, axis, rects, markers(transitions), edges[0], edges[edges.length - 1],
                 omitted ? List.of(NO_ZONE_LIST_NOTE) : List.of());
     }
 

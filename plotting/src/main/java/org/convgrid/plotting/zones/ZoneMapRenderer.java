@@ -34,7 +34,7 @@ public final class ZoneMapRenderer {
     /** The chart of a zone map, its metallicity named as {@code names} name it. */
     public static StyledChart render(ZoneMapData data, MetallicityNames names) {
         StyledChart chart = ChartStyle.newChart("Convective zones, " + names.of(data.slice().zInit()) + ", "
-                        + SliceLabels.age(data.slice().ageGyr()),
+                        + data.age(),
                 SliceLabels.physics(data.slice()),
                 MassAxis.TITLE, data.axis().title());
         ChartStyle.legendRight(chart);

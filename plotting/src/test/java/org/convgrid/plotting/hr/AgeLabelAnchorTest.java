@@ -39,7 +39,7 @@ class AgeLabelAnchorTest {
         List<HrDiagramData.ZeroAgeLine> lines = fanningAtTheCoolEnd(6);
         for (HrDiagramData.ZeroAgeLine line : lines) {
             HrPoint anchor = AgeLabelAnchor.of(line, lines, SCALE, LABEL);
-            assertThat(anchor.massMsun()).as("age %s", line.ageGyr()).isEqualTo(0.1);
+            assertThat(anchor.massMsun()).as("age %s", line.age()).isEqualTo(0.1);
             assertThat(AgeLabelAnchor.atLowMassEnd(anchor, line)).isTrue();
         }
     }

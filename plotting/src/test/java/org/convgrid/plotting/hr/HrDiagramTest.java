@@ -39,7 +39,7 @@ class HrDiagramTest {
         assertThat(data.zeroAgeLines()).extracting(HrDiagramData.ZeroAgeLine::zInit)
                 .containsExactly(0.004, 0.014, 0.02);
         assertThat(data.zeroAgeLines()).allSatisfy(line -> {
-            assertThat(line.ageGyr()).isZero();
+            assertThat(line.age()).isZero();
             assertThat(line.points()).hasSize(39).isSortedAccordingTo(
                     java.util.Comparator.comparingDouble(HrPoint::massMsun));
             assertThat(line.points()).allSatisfy(p -> assertThat(p.ageGyr()).isZero());
@@ -73,7 +73,7 @@ class HrDiagramTest {
         assertThat(sun.logL().get(10)).isCloseTo(Math.log10(last.luminosityLsun()), within(1e-12));
         assertThat(sun.logTeff().get(10)).isCloseTo(Math.log10(last.teffK()), within(1e-12));
         // Isochrones at both ages, the usable models of that age in mass order (TestRuns fails 1 Msun at 1 Gyr).
-        assertThat(withTracks.isochrones()).extracting(HrDiagramData.ZeroAgeLine::ageGyr).containsExactly(0.0, 1.0);
+        assertThat(withTracks.isochrones()).extracting(HrDiagramData.ZeroAgeLine::age).containsExactly(0.0, 1.0);
         assertThat(withTracks.isochrones().get(0).points()).extracting(HrPoint::massMsun)
                 .containsExactly(0.5, 1.0, 2.0);
         assertThat(withTracks.isochrones().get(1).points()).extracting(HrPoint::massMsun).containsExactly(0.5, 2.0);

@@ -99,7 +99,7 @@ class HrPreMainSequenceTest {
         // 1 kyr to 10 Gyr in 0.1 dex steps: from 1 Myr (step 30) on; the ZAMS at 50 Myr, after step 46
         assertThat(sun.logL()).hasSize(71 - 30);
         assertThat(sun.preMainSequencePoints()).isEqualTo(17);
-        assertThat(data.isochrones()).extracting(HrDiagramData.ZeroAgeLine::ageGyr)
+        assertThat(data.isochrones()).extracting(HrDiagramData.ZeroAgeLine::age)
                 .containsExactly(0.001, 0.003, 0.01, 0.03, 0.1);
         assertThat(HrDiagramRenderer.age(0.003)).isEqualTo("3 Myr");
         assertThat(HrDiagramRenderer.age(4.57)).isEqualTo("4.57 Gyr");
