@@ -23,5 +23,8 @@ class LogAxisLabelsTest {
         assertThat(LogAxis.labelValues(0.25, 0.51)).containsExactly(0.3, 0.4, 0.5);
         // a range of a factor 3 to 10 keeps the round values when three fall inside
         assertThat(LogAxis.labelValues(0.09, 0.6)).containsExactly(0.1, 0.2, 0.3, 0.5);
+        // 1.1-3 Msun (a seismology grid) held only 2 and 3, round or every mantissa: the tenths of the first decade too
+        assertThat(LogAxis.labelValues(1.05, 3.4)).containsExactly(1.1, 1.2, 1.3, 1.4, 1.5, 1.6, 1.7, 1.8, 1.9, 2.0,
+                3.0);
     }
 }
