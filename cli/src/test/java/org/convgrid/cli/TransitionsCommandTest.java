@@ -162,6 +162,33 @@ class TransitionsCommandTest {
     }
 
     @Test
+    void aCatalogueWrittenBeforeTheLastColumnIsBroughtToThisLayoutBeforeTheRefinementAppends() throws Exception {
+        // the run as the version before fe_h_dex wrote it: no such column in the header, one cell fewer per row;
+        // the refinement's rows used to be appended under that header with a cell more than it named
+        Path dir = finishedRun("earlier");
+        Path catalogue = dir.resolve("catalogue.ecsv");
+        String current = Files.readString(catalogue);
+        StringBuilder old = new StringBuilder();
+        for (String line : current.split("\n")) {
+            if (!line.startsWith("#")) {
+                old.append(line, 0, line.lastIndexOf(',')).append('\n');
+            } else if (!line.contains("{name: fe_h_dex")) {
+                old.append(line).append('\n');
+            }
+        }
+        Files.writeString(catalogue, old.toString());
+        assertThat(harness(new FakeMassLines(Set.of())).execute("transitions", "earlier", "--refine").code())
+                .isEqualTo(0);
+        String refined = Files.readString(catalogue);
+        assertThat(refined).startsWith(current.substring(0, current.indexOf("\nmodel_id,")));
+        List<String> lines = CliHarness.tableLines(catalogue);
+        int columns = lines.get(0).split(",", -1).length;
+        assertThat(lines).hasSizeGreaterThan(1 + 156)
+                .allSatisfy(l -> assertThat(l.split(",", -1)).hasSize(columns));
+        assertThat(CatalogueReader.read(catalogue)).hasSize(lines.size() - 1);
+    }
+
+    @Test
     void theResultDoesNotDependOnTheThreadCount() throws Exception {
         finishedRun("one");
         finishedRun("two");

@@ -19,7 +19,7 @@ import org.convgrid.output.catalogue.CatalogueWriter;
  * {@code fe_h_dex}, which the writer computes from each row's z_init and y_init against the grid's Sun. A catalogue
  * of another table, or one whose columns differ otherwise, is not this version's to upgrade.
  */
-final class EarlierCatalogueLayout {
+public final class EarlierCatalogueLayout {
 
     private EarlierCatalogueLayout() {
     }
@@ -31,7 +31,7 @@ final class EarlierCatalogueLayout {
      * @return the same rows under this version's header; {@code text} itself when it already has that header; null
      *     when its columns are not a leading part of this version's
      */
-    static String upgraded(String text, OvershootScheme overshootProfile, IronAbundance iron) {
+    public static String upgraded(String text, OvershootScheme overshootProfile, IronAbundance iron) {
         String header = RunDirectory.catalogueHeader(iron);
         if (text.startsWith(header)) {
             return text;

@@ -33,6 +33,7 @@ import org.convgrid.output.transitions.TransitionReader;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.output.transitions.TransitionWriter;
 import org.convgrid.survey.CatalogueAppender;
+import org.convgrid.survey.EarlierCatalogueLayout;
 import org.convgrid.survey.FinishedRun;
 import org.convgrid.survey.RunDirectory;
 import org.convgrid.survey.RunFinisher;
@@ -86,6 +87,25 @@ public final class TransitionTables {
     }
 
     /**
+     * Brings a catalogue an earlier version wrote to this version's layout before new rows are appended to it (as
+     * {@code run --resume} and {@code merge} do): appended under the old header, the new rows had a cell more than
+     * the header named (found while adding fe_h_dex). Rewritten atomically; a catalogue of another layout is refused
+     * with nothing changed.
+     */
+    private static void currentLayout(RunDirectory dir, GridSpec grid, RunManifest manifest) throws IOException {
+        String text = Files.readString(dir.catalogue());
+        String upgraded = EarlierCatalogueLayout.upgraded(text, grid.physics().overshootScheme(),
+                manifest.ironAbundance());
+        if (upgraded == null) {
+            throw new RunSetupException(dir.catalogue() + " has columns this version does not write; cannot append "
+                    + "the refinement's models to it");
+        }
+        if (!upgraded.equals(text)) {
+            AtomicFiles.writeString(dir.catalogue(), upgraded);
+        }
+    }
+
+    /**
      * Refines the transitions, appends the new models to the catalogue, rewrites transitions.csv and the manifest's
      * counts, then calls the finishers. When models were added, the manifest's end moves to now: its counts include
      * them, and a run whose refinement follows the sweep ends after it (it said the sweep's end, ~20 s early in the
@@ -121,6 +141,9 @@ public final class TransitionTables {
             notes = result.notes();
             if (result.newModels().isEmpty()) {
                 break;
+            }
+            if (round == 0) {
+                currentLayout(dir, grid, manifest);
             }
             try (CatalogueAppender sink = CatalogueAppender.open(dir.catalogue(), false, manifest.ironAbundance())) {
                 for (ModelOutcome o : result.newModels()) {
