@@ -14,6 +14,7 @@ import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.structure.BuoyancyTravelTime;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.engine.batch.GridRequests;
@@ -194,7 +195,8 @@ final class StarCommand implements Callable<Integer> {
                 writer.write(OutcomeRows.toRow(outcome));
             }
         } else {
-            StarReport.write(outcome, composition, main.out());
+            double buoyancyTravelTime = answer.model() == null ? Double.NaN : BuoyancyTravelTime.of(answer.model());
+            StarReport.write(outcome, composition, buoyancyTravelTime, main.out());
         }
         main.out().flush();
         if (outcome.status() != ModelStatus.OK) {

@@ -9,6 +9,7 @@ import org.convgrid.engine.request.GlobalProperties;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.structure.BuoyancyTravelTime;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.grids.words.Counts;
 import org.convgrid.plotting.label.SliceLabels;
@@ -26,7 +27,11 @@ final class StarReport {
     private StarReport() {
     }
 
-    static void write(ModelOutcome outcome, Composition composition, PrintWriter out) {
+    /**
+     * @param buoyancyTravelTime Pi_0 of the solved model, s ({@link BuoyancyTravelTime}); NaN without a g-mode cavity
+     *     or a model
+     */
+    static void write(ModelOutcome outcome, Composition composition, double buoyancyTravelTime, PrintWriter out) {
         var r = outcome.request();
         String title;
         if (r.age() instanceof Age.SinceBirth since) {
@@ -74,6 +79,11 @@ final class StarReport {
         line(out, "convective envelope, mass", row.envCzMassMsun(), "Msun");
         line(out, "turnover time, local", row.turnoverTimeDays(), "days");
         line(out, "turnover time, global", row.turnoverTimeGlobalDays(), "days");
+        out.println();
+        // the g-mode period scale gamma Dor and SPB observers compare with (asymptotic; see the README's caveats)
+        line(out, "buoyancy travel time Pi_0", buoyancyTravelTime, "s");
+        line(out, "dipole period spacing Delta Pi_1", Double.isNaN(buoyancyTravelTime) ? Double.NaN
+                : BuoyancyTravelTime.periodSpacing(buoyancyTravelTime, 1), "s");
         out.println();
         // the zones as zones.csv lists them, with their kind (a review could not tell a central zone below the core
         // threshold from a core, nor see the mass of a surface zone whose m/M ends both print 1.000000)

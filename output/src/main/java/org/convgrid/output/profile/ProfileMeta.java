@@ -6,6 +6,7 @@ import java.util.Map;
 import org.convgrid.engine.request.Age;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.PhysicsOptions;
+import org.convgrid.engine.structure.BuoyancyTravelTime;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.structure.StellarProfile;
 import org.convgrid.engine.units.Constants;
@@ -13,7 +14,8 @@ import org.convgrid.engine.units.Constants;
 /**
  * Which star a profile file holds, written as the {@code meta} mapping of its ECSV header: an oscillation code needs
  * the total mass and G to make frequencies dimensionless, and a reader of the file alone needs the age, composition,
- * physics and constants it came from. The key names are spelled here only.
+ * physics and constants it came from, and an asteroseismologist the g-mode period scale. The key names are spelled
+ * here only.
  *
  * @param modelId the model's id (a grid's model id, {@code star-m...} for {@code star}, {@code calibrated-sun})
  * @param mass total mass, g: the M of mass_frac
@@ -28,10 +30,13 @@ import org.convgrid.engine.units.Constants;
  * @param settling whether helium and metals settled (calibrate-sun only; grids and star evolve without it)
  * @param toolVersion the convgrid version that wrote the file
  * @param toolCommit the git commit it was built from
+ * @param buoyancyTravelTime Pi_0, s ({@link BuoyancyTravelTime}); NaN (and its keys left out) for a star with no
+ *     g-mode cavity
  */
 public record ProfileMeta(String modelId, double mass, double radius, double luminosity, double effectiveTemperature,
                           double ageGyr, String ageOrigin, double initialMetals, double initialHelium,
-                          PhysicsOptions physics, boolean settling, String toolVersion, String toolCommit) {
+                          PhysicsOptions physics, boolean settling, String toolVersion, String toolCommit,
+                          double buoyancyTravelTime) {
 
     public static final String MODEL_ID = "model_id";
     public static final String MASS_G = "mass_g";
@@ -66,6 +71,10 @@ public record ProfileMeta(String modelId, double mass, double radius, double lum
     public static final String SOLAR_LUMINOSITY_CGS = "solar_luminosity_cgs";
     public static final String TOOL_VERSION = "tool_version";
     public static final String TOOL_COMMIT = "tool_commit";
+    /** Pi_0 = 2 pi^2 / (integral of N dr / r where N^2 > 0), s; absent for a fully convective star. */
+    public static final String BUOYANCY_PERIOD_PI0_S = "buoyancy_period_pi0_s";
+    /** The asymptotic dipole g-mode period spacing Pi_0 / sqrt 2, s; absent with Pi_0. */
+    public static final String PERIOD_SPACING_L1_S = "period_spacing_l1_s";
 
     /**
      * The meta of a solved model.
@@ -83,7 +92,7 @@ public record ProfileMeta(String modelId, double mass, double radius, double lum
         return new ProfileMeta(request.modelId(), p.mass(surface), p.radius(surface), p.luminosity(surface),
                 model.global().effectiveTemperature(), seconds / Constants.GYR, age.origin().label(),
                 request.initialMetals(), request.initialHelium(), request.physics(), settling, toolVersion,
-                toolCommit);
+                toolCommit, BuoyancyTravelTime.of(model));
     }
 
     /** The mapping as written: the star, its age and composition, the physics, the constants, the tool. */
@@ -121,6 +130,11 @@ public record ProfileMeta(String modelId, double mass, double radius, double lum
         m.put(SOLAR_LUMINOSITY_CGS, Constants.L_SUN);
         m.put(TOOL_VERSION, toolVersion);
         m.put(TOOL_COMMIT, toolCommit);
+        // after the tool's keys, so that the keys of earlier profiles keep their places
+        if (!Double.isNaN(buoyancyTravelTime)) {
+            m.put(BUOYANCY_PERIOD_PI0_S, buoyancyTravelTime);
+            m.put(PERIOD_SPACING_L1_S, BuoyancyTravelTime.periodSpacing(buoyancyTravelTime, 1));
+        }
         return m;
     }
 }

@@ -5,17 +5,21 @@ import static org.assertj.core.api.Assertions.within;
 
 import java.io.IOException;
 import java.io.StringReader;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.units.Constants;
 import org.junit.jupiter.api.Test;
+import org.snakeyaml.engine.v2.api.Load;
+import org.snakeyaml.engine.v2.api.LoadSettings;
 
 class ProfileRoundTripTest {
 
     /** An illustrative star (a Sun-like model), not computed values. */
     private static final ProfileMeta ILLUSTRATIVE_META = new ProfileMeta("illustrative", Constants.M_SUN,
             Constants.R_SUN, Constants.L_SUN, 5772.0, 4.57, "birth", 0.02, 0.27, PhysicsOptions.DEFAULT, false,
-            "1.2.3", "unknown");
+            "1.2.3", "unknown", 2216.9);
 
     /** The ECSV header describes the columns the name row lists, in its order: two lists kept in step by hand. */
     @Test
@@ -76,5 +80,40 @@ class ProfileRoundTripTest {
         assertThat(centre.helium3()).isNaN();
         assertThat(centre.buoyancySquared()).isNaN();
         assertThat(centre.exteriorMassFrac()).isNaN();
+    }
+
+    /** The header's meta mapping, as a YAML reader (astropy's) sees it. */
+    @SuppressWarnings("unchecked")
+    private static Map<String, Object> metaOf(String text) {
+        String yaml = String.join("\n", text.lines().takeWhile(l -> l.startsWith("#")).skip(2)
+                .map(l -> l.substring(2)).toList());
+        return (Map<String, Object>) ((Map<String, Object>) new Load(LoadSettings.builder().build())
+                .loadFromString(yaml)).get("meta");
+    }
+
+    @Test
+    void theBuoyancyPeriodAndTheDipoleSpacingReadBackExactlyAfterTheKeysProfilesHadBefore() throws IOException {
+        StringBuilder out = new StringBuilder();
+        ProfileWriter.write(ILLUSTRATIVE_META, List.of(), out);
+        Map<String, Object> meta = metaOf(out.toString());
+        assertThat(meta.get(ProfileMeta.BUOYANCY_PERIOD_PI0_S)).isEqualTo(2216.9);
+        // Delta Pi_1 = Pi_0 / sqrt(1 * 2) (Tassoul 1980; Aerts, Christensen-Dalsgaard & Kurtz 2010, ch. 3; from memory)
+        assertThat(meta.get(ProfileMeta.PERIOD_SPACING_L1_S)).isEqualTo(2216.9 / Math.sqrt(2.0));
+        // the earlier keys keep their order; the new two follow them, last
+        List<String> keys = new ArrayList<>(meta.keySet());
+        assertThat(keys.subList(keys.size() - 3, keys.size())).containsExactly(ProfileMeta.TOOL_COMMIT,
+                ProfileMeta.BUOYANCY_PERIOD_PI0_S, ProfileMeta.PERIOD_SPACING_L1_S);
+    }
+
+    @Test
+    void aStarWithoutAGModeCavityLeavesBothKeysOut() throws IOException {
+        ProfileMeta fullyConvective = new ProfileMeta("illustrative", 0.2 * Constants.M_SUN, 0.2 * Constants.R_SUN,
+                0.005 * Constants.L_SUN, 3200.0, 1.0, "birth", 0.02, 0.27, PhysicsOptions.DEFAULT, false, "1.2.3",
+                "unknown", Double.NaN);
+        StringBuilder out = new StringBuilder();
+        ProfileWriter.write(fullyConvective, List.of(), out);
+        Map<String, Object> meta = metaOf(out.toString());
+        assertThat(meta).doesNotContainKeys(ProfileMeta.BUOYANCY_PERIOD_PI0_S, ProfileMeta.PERIOD_SPACING_L1_S);
+        assertThat(meta).containsKey(ProfileMeta.TOOL_COMMIT);
     }
 }

@@ -13,6 +13,7 @@ import org.convgrid.engine.evolution.MainSequenceEvolver;
 import org.convgrid.engine.request.Age;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.PhysicsOptions;
+import org.convgrid.engine.structure.BuoyancyTravelTime;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.output.CsvNumbers;
@@ -130,6 +131,11 @@ class RealProfileFileTest {
         assertThat(meta.get(ProfileMeta.SOLAR_LUMINOSITY_CGS)).isEqualTo(3.828e33);
         assertThat(meta.get(ProfileMeta.TOOL_VERSION)).isEqualTo("9.9.9");
         assertThat(meta.get(ProfileMeta.TOOL_COMMIT)).isEqualTo("abc123");
+        // the engine's Pi_0 of this very model, to the last bit, and its dipole spacing (definitions: Tassoul 1980;
+        // Aerts, Christensen-Dalsgaard & Kurtz 2010, ch. 3; from memory)
+        double pi0 = BuoyancyTravelTime.of(model);
+        assertThat(meta.get(ProfileMeta.BUOYANCY_PERIOD_PI0_S)).isEqualTo(pi0);
+        assertThat(meta.get(ProfileMeta.PERIOD_SPACING_L1_S)).isEqualTo(BuoyancyTravelTime.periodSpacing(pi0, 1));
     }
 
     @Test
