@@ -42,6 +42,10 @@ public record IronAbundance(double solarZOverX, boolean givenByGrid) {
             return Double.NaN;
         }
         double exact = Math.log10(z / (1.0 - y - z) / solarZOverX);
+        if (!Double.isFinite(exact)) {
+            // no hydrogen left after the tables' rounding, or an edited cell: no [Fe/H] rather than an exception
+            return Double.NaN;
+        }
         double rounded = new BigDecimal(exact).setScale(DECIMALS, RoundingMode.HALF_EVEN).doubleValue();
         return rounded == 0.0 ? 0.0 : rounded;
     }

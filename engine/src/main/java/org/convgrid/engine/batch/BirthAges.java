@@ -118,11 +118,13 @@ final class BirthAges {
     static String unknownLifetime(EvolutionResult result, boolean zamsReached, double maxAge) {
         String lifetime = zamsReached ? "main-sequence lifetime unknown: " : "the zero-age main sequence was not "
                 + "reached from birth: ";
-        if (result.end() == EvolutionResult.EndReason.FAILED) {
-            return lifetime + "the evolution stopped before core-hydrogen exhaustion (" + result.detail() + ")";
-        }
-        return lifetime + String.format(Locale.ROOT, "core hydrogen not exhausted within %.4g Gyr of birth, the "
-                + "evolution's age limit", maxAge / Constants.GYR);
+        return lifetime + switch (result.end()) {
+            case FAILED -> "the evolution stopped before core-hydrogen exhaustion (" + result.detail() + ")";
+            case HYDROGEN_EXHAUSTED -> "the core's hydrogen ran out before nuclear burning supplied 99 % of the "
+                    + "luminosity for good";
+            default -> String.format(Locale.ROOT, "core hydrogen not exhausted within %.4g Gyr of birth, the "
+                    + "evolution's age limit", maxAge / Constants.GYR);
+        };
     }
 
     /** The homogeneous birth composition of a request: X = 1 - Y - Z with deuterium, 3He and lithium. */

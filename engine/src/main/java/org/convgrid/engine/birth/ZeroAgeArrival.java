@@ -70,6 +70,8 @@ final class ZeroAgeArrival {
         if (Double.isNaN(birthHydrogen)) {
             birthHydrogen = centralHydrogen;
         } else {
+            // the model that reaches the burnt share settles the arrival itself: its fall, if any, no longer counts
+            settled = settled || birthHydrogen - centralHydrogen >= SETTLED_HYDROGEN_BURNT;
             if (Double.isNaN(arrival) && nuclearFraction >= NuclearLuminosity.ZERO_AGE_FRACTION) {
                 arrival = crossing(lastAge, lastFraction, age, nuclearFraction);
                 if (Double.isNaN(firstCrossing)) {
@@ -79,7 +81,6 @@ final class ZeroAgeArrival {
                     || nuclearFraction < FALLBACK_FRACTION && age < FALLBACK_AGE_FACTOR * firstCrossing)) {
                 arrival = Double.NaN;
             }
-            settled = settled || birthHydrogen - centralHydrogen >= SETTLED_HYDROGEN_BURNT;
         }
         lastAge = age;
         lastFraction = nuclearFraction;

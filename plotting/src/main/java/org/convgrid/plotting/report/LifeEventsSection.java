@@ -15,6 +15,7 @@ import org.convgrid.output.events.LifeEventColumns;
 import org.convgrid.output.events.LifeEventReader;
 import org.convgrid.output.events.LifeEventRow;
 import org.convgrid.output.track.Track;
+import org.convgrid.plotting.label.MetallicityNames;
 import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.label.SliceLabels;
 
@@ -22,7 +23,7 @@ import org.convgrid.plotting.label.SliceLabels;
  * The report's "Life events" section: {@code life_events.csv} as tables, one per physics and Z, one row per star in
  * mass order, the ages a cluster is dated by (when the radiative core appears, the ZAMS, lithium halved, ...). The
  * report had none of them, though a run from birth writes them. Nothing when the run has no life events (a grid of
- * zero ages or of main-sequence fractions writes none); a table that cannot be read is named with its reason, and
+ * zero ages from the zero-age main sequence writes none); a table that cannot be read is named with its reason, and
  * the rest of the report is written all the same.
  */
 final class LifeEventsSection {
@@ -37,9 +38,10 @@ final class LifeEventsSection {
      * uncertain by ~1.5-3 % from the step size (README), so more digits would claim more than the steps give.
      */
     static final String CAPTION = "Ages in Myr since birth, from " + RunLayout.LIFE_EVENTS + ", to four significant "
-            + "digits. Each is the age of the evolution step that first shows the event, so it moves with the step "
-            + "size: by ~1.5 % (ZAMS) to ~3 % (radiative core, lithium halved) between the default steps and a "
-            + "quarter of them (README).";
+            + "digits. The ZAMS, the radiative core's appearance and the lithium levels are interpolated between "
+            + "evolution steps, the other events are the first step that shows them; all move with the step size: by "
+            + "~1.5 % (ZAMS) to ~3 % (radiative core, lithium halved) between the default steps and a quarter of "
+            + "them (README).";
     static final String LEGEND = NONE + " : the event did not happen on the computed track, that is by the age in "
             + "the last column (a star of a grid that stops at 100 Myr may still reach it later).";
 
@@ -94,7 +96,7 @@ final class LifeEventsSection {
      * Appends the section: a table per physics and Z (the physics named as the catalogue's row of the star's track
      * has it, since the file lacks the criterion and opacity scale), one row per star by mass.
      */
-    static void append(StringBuilder b, Table table, List<CatalogueRow> catalogue) {
+    static void append(StringBuilder b, Table table, List<CatalogueRow> catalogue, MetallicityNames names) {
         if (!table.shown()) {
             return;
         }
@@ -112,7 +114,7 @@ final class LifeEventsSection {
         for (LifeEventRow row : table.rows()) {
             PhysicsKey physics = physicsOfTrack.getOrDefault(row.trackId(), new PhysicsKey(row.mixingLength(),
                     row.overshootHp(), row.overshootProfile(), null, Double.NaN));
-            String heading = "Z = " + SliceLabels.number(row.zInit()) + ", " + physics.describe();
+            String heading = names.of(row.zInit()) + ", " + physics.describe();
             groups.computeIfAbsent(heading, h -> new java.util.ArrayList<>()).add(row);
         }
         groups.forEach((heading, rows) -> group(b, heading, rows));

@@ -82,7 +82,7 @@ public final class ReportPage {
         chartFailures(b, chartFailures);
         maps(b, plan, runDir, chartFailures, RunMaps.zonesAgainstAgeSelection(run).describe());
         transitions(b, run);
-        LifeEventsSection.append(b, lifeEvents, run.catalogue());
+        LifeEventsSection.append(b, lifeEvents, run.catalogue(), run.metallicityNames());
         failures(b, run);
         if (!run.hasTracks()) {
             b.append("<h2>").append(Html.escape(MapEntry.ZONES_AGE))
