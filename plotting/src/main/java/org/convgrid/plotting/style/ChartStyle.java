@@ -89,6 +89,15 @@ public final class ChartStyle {
      * plot and overflow the image when long, so XChart only reserves the room (a block glyph in a font as tall as
      * our two lines) and an overlay blanks that band and writes both lines centred on the whole image.
      */
+    /**
+     * {@code font}, made smaller when a line of {@code width} pixels in it would not fit in {@code room}: a
+     * transitions chart of a uniform-ramped grid refined to 0.002 Msun had its physics line cut off at both ends.
+     * Unchanged when it fits, so charts whose lines fit keep their bytes.
+     */
+    static java.awt.Font fitted(java.awt.Font font, int width, int room) {
+        return width <= room ? font : font.deriveFont(font.getSize2D() * room / width);
+    }
+
     public static StyledChart newChart(String what, String physics, String xTitle, String yTitle) {
         StyledChart chart = new StyledChart(WIDTH, HEIGHT);
         chart.setTitle(TITLE_RESERVE_GLYPH);
@@ -108,12 +117,17 @@ public final class ChartStyle {
             java.awt.geom.Rectangle2D plot = c.plotBounds();
             g.fillRect((int) Math.floor(plot.getMinX()), 0, (int) Math.ceil(plot.getWidth()) + 1, bandFoot);
             g.setColor(TEXT);
+            int room = c.getWidth() - 2 * top;
             g.setFont(TITLE_FONT);
             java.awt.FontMetrics bold = g.getFontMetrics();
-            g.drawString(what, (c.getWidth() - bold.stringWidth(what)) / 2f, top + bold.getAscent());
+            g.setFont(fitted(TITLE_FONT, bold.stringWidth(what), room));
+            java.awt.FontMetrics boldFitted = g.getFontMetrics();
+            g.drawString(what, (c.getWidth() - boldFitted.stringWidth(what)) / 2f, top + bold.getAscent());
             g.setFont(SUBTITLE_FONT);
             java.awt.FontMetrics plain = g.getFontMetrics();
-            g.drawString(physics, (c.getWidth() - plain.stringWidth(physics)) / 2f,
+            g.setFont(fitted(SUBTITLE_FONT, plain.stringWidth(physics), room));
+            java.awt.FontMetrics plainFitted = g.getFontMetrics();
+            g.drawString(physics, (c.getWidth() - plainFitted.stringWidth(physics)) / 2f,
                     top + bold.getHeight() + plain.getAscent());
         });
         chart.setXAxisTitle(xTitle);
