@@ -6,6 +6,7 @@ import java.util.Locale;
 
 import org.convgrid.engine.birth.BirthEvolution;
 import org.convgrid.engine.birth.BirthTrack;
+import org.convgrid.engine.birth.LifeEvents;
 import org.convgrid.engine.birth.Phase;
 import org.convgrid.engine.birth.StartModelBuilder;
 import org.convgrid.engine.convection.ConvectiveZoneFinder;
@@ -37,6 +38,10 @@ final class BirthAges {
     /** m/M a central zone's top must exceed to be a core in the life events: the run's one core threshold. */
     private static final double CORE_THRESHOLD = ConvectiveZoneFinder.DEFAULT_MIN_CORE_MASS_FRACTION;
 
+    /** The zero-age and core-hydrogen exhaustion ages of an evolution from birth, s since birth. */
+    private record MainSequence(double zamsAge, double exhaustionAge) {
+    }
+
     private BirthAges() {
     }
 
@@ -46,6 +51,19 @@ final class BirthAges {
      */
     static List<GridRequests.Answer> answers(GridRequests solver, List<ModelRequest> star,
                                              MainSequenceEvolver.Settings base) {
+        return answers(solver, star, base, null);
+    }
+
+    /**
+     * @param mainSequence when not null, the zero-age and exhaustion ages, s since birth, of another evolution of
+     *                     the same star that the ages were measured against (main-sequence fractions): the life events
+     *                     and the answers' phases take them, so that a fraction-0 row lies at {@code zams_myr} and is
+     *                     on the main sequence. The two evolutions' steps differ, and where the arrival follows a
+     *                     dip after a peak of L_nuc/L their own ZAMS ages differed by a few per cent (a code review:
+     *                     1.5 Msun, Z = 0.02, decaying overshoot 0.02, row at 22.93 Myr, zams_myr 22.38)
+     */
+    private static List<GridRequests.Answer> answers(GridRequests solver, List<ModelRequest> star,
+                                                     MainSequenceEvolver.Settings base, MainSequence mainSequence) {
         double[] ages = new double[star.size()];
         for (int i = 0; i < ages.length; i++) {
             ModelRequest r = star.get(i);
@@ -65,13 +83,16 @@ final class BirthAges {
         } catch (ConvgridException e) {
             return failedAll(star, ModelStatus.NOT_CONVERGED, "evolution from birth failed: " + e.getMessage());
         }
-        solver.tracks().accept(first, track.points(), track.events());
+        LifeEvents events = mainSequence == null ? track.events()
+                : track.events().withMainSequence(mainSequence.zamsAge(), mainSequence.exhaustionAge());
+        solver.tracks().accept(first, track.points(), events);
         EvolutionResult result = track.result();
         List<GridRequests.Answer> out = new ArrayList<>(star.size());
         for (int i = 0; i < star.size(); i++) {
             AgedModel aged = track.models().get(i);
-            LifeStage stage = new LifeStage(track.phaseAt(aged.age()) == Phase.PRE_MAIN_SEQUENCE,
-                    track.surfaceLithiumAt(aged));
+            boolean young = mainSequence == null ? track.phaseAt(aged.age()) == Phase.PRE_MAIN_SEQUENCE
+                    : !(aged.age() >= mainSequence.zamsAge());
+            LifeStage stage = new LifeStage(young, track.surfaceLithiumAt(aged));
             out.add(solver.answer(star.get(i), aged, result, track.start().iterations(), stage));
         }
         return out;
@@ -107,7 +128,8 @@ final class BirthAges {
         }
         List<ModelRequest> sinceBirth = star.stream().map(r -> r.withAge(new Age.SinceBirth(
                 zams + ((Age.MainSequenceFraction) r.age()).fraction() * (exhaustion - zams)))).toList();
-        return answers(solver, sinceBirth, LifetimeSearch.landing(solver.settings()));
+        return answers(solver, sinceBirth, LifetimeSearch.landing(solver.settings()),
+                new MainSequence(zams, exhaustion));
     }
 
     /**

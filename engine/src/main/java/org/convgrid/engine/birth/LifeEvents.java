@@ -51,6 +51,16 @@ public record LifeEvents(double radiativeCore, double radiativeCoreEnd, double z
     }
 
     /**
+     * The same events with the main sequence of another evolution of the same star: its zero-age and exhaustion
+     * ages, s since birth (a main-sequence-fraction star's ages are measured against its lifetime evolution, and its
+     * answers come from a second one that lands on them).
+     */
+    public LifeEvents withMainSequence(double zams, double exhaustion) {
+        return new LifeEvents(radiativeCore, radiativeCoreEnd, zams, convectiveCoreOnset, convectiveCoreEnd,
+                lithiumHalved, lithiumOnePercent, centralHydrogenExhausted).withCentralHydrogenExhausted(exhaustion);
+    }
+
+    /**
      * The convective core's end once the main sequence is known to end at {@code exhaustion}. The evolution stops
      * at its first model below the end value, so a core end recorded after the exhaustion age belongs to that
      * model, and the model before it, still on the main sequence, had the core; a core with no end had it in every

@@ -71,6 +71,31 @@ class FractionAgesTest {
     }
 
     @Test
+    void fromBirthTheFractionZeroRowLiesAtTheLifeEventsZamsOnTheMainSequence() {
+        // the ages are measured against one evolution (the lifetime's) and answered by a second (landing on them);
+        // the life events and phases take the first's ZAMS and exhaustion, so that life_events.csv gives the ages the
+        // fractions were measured against (a code review found 22.93 against 22.38 Myr after the ZAMS rule changed)
+        java.util.concurrent.atomic.AtomicReference<org.convgrid.engine.birth.LifeEvents> events =
+                new java.util.concurrent.atomic.AtomicReference<>();
+        GridRequests solver = new GridRequests((first, points, e) -> events.set(e), COARSE);
+        List<ModelOutcome> out = solver.solve(List.of(
+                birthRequest("m0-a0", 0.0), birthRequest("m0-a1", 0.5)));
+        assertThat(out).allSatisfy(o -> assertThat(o.status()).as(o.statusDetail()).isEqualTo(ModelStatus.OK));
+        double zams = events.get().zeroAgeMainSequence();
+        double exhaustion = events.get().centralHydrogenExhausted();
+        assertThat(((Age.SinceBirth) out.get(0).request().age()).seconds()).isEqualTo(zams);
+        assertThat(((Age.SinceBirth) out.get(1).request().age()).seconds())
+                .isCloseTo(zams + 0.5 * (exhaustion - zams), within(1e-6 * exhaustion));
+        assertThat(out).allSatisfy(o -> assertThat(o.solved().stage().preMainSequence()).isFalse());
+    }
+
+    private static ModelRequest birthRequest(String id, double fraction) {
+        return new ModelRequest(id, 1.5 * Constants.M_SUN, 0.0188, 0.275,
+                new Age.MainSequenceFraction(fraction, org.convgrid.engine.request.AgeOrigin.BIRTH),
+                PhysicsOptions.DEFAULT);
+    }
+
+    @Test
     void zeroFractionsNeedNoLifetimeAndNonFractionsAreRefused() {
         Map<String, List<EvolutionStep>> tracks = new ConcurrentHashMap<>();
         GridRequests solver = new GridRequests((first, steps) -> tracks.put(first.modelId(), steps), COARSE);
