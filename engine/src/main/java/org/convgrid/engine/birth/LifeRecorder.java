@@ -72,18 +72,18 @@ final class LifeRecorder implements StepObserver {
                 // between the two models, so that the age does not depend on where the step happened to end
                 double excess = centreExcess(model);
                 radiativeCore = lastCentreExcess > 0.0 && excess <= 0.0
-                        ? crossing(lastAge, lastCentreExcess, age, excess, 0.0) : age;
+                        ? AgeCrossing.of(lastAge, lastCentreExcess, age, excess, 0.0) : age;
             }
             cores.add(new double[] {age, core ? 1.0 : 0.0, Double.isNaN(radiativeCore) ? 0.0 : 1.0});
             if (Double.isNaN(lithiumHalved) && lithium <= 0.5) {
-                lithiumHalved = crossing(lastAge, lastLithium, age, lithium, 0.5);
+                lithiumHalved = AgeCrossing.of(lastAge, lastLithium, age, lithium, 0.5);
             }
             if (Double.isNaN(lithiumOnePercent) && lithium <= LITHIUM_ONE_PERCENT) {
                 // in ln 7Li: the burning at the envelope's base takes a fixed share of what is left per unit time,
                 // so the abundance falls about exponentially between two models; linear in the abundance would
                 // date the 1 % level early by up to a fraction of the step
                 lithiumOnePercent = lastLithium > 0.0 && lithium > 0.0
-                        ? crossing(lastAge, Math.log(lastLithium), age, Math.log(lithium),
+                        ? AgeCrossing.of(lastAge, Math.log(lastLithium), age, Math.log(lithium),
                                 Math.log(LITHIUM_ONE_PERCENT))
                         : age;
             }
@@ -99,15 +99,6 @@ final class LifeRecorder implements StepObserver {
     /** nabla_rad minus the stability limit at the centre (positive: convective). */
     private static double centreExcess(StellarModel model) {
         return model.profile().stabilityExcess(0);
-    }
-
-    /** The age at which a quantity going from a (at ageA) to b (at ageB) crosses {@code level}, linearly. */
-    private static double crossing(double ageA, double a, double ageB, double b, double level) {
-        if (!(a != b) || Double.isNaN(a)) {
-            return ageB;
-        }
-        double w = (level - a) / (b - a);
-        return ageA + Math.max(0.0, Math.min(1.0, w)) * (ageB - ageA);
     }
 
     /** The events seen in the models; the end of the main sequence is the evolution's to add. */

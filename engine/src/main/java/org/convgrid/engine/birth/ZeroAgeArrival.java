@@ -73,7 +73,8 @@ final class ZeroAgeArrival {
             // the model that reaches the burnt share settles the arrival itself: its fall, if any, no longer counts
             settled = settled || birthHydrogen - centralHydrogen >= SETTLED_HYDROGEN_BURNT;
             if (Double.isNaN(arrival) && nuclearFraction >= NuclearLuminosity.ZERO_AGE_FRACTION) {
-                arrival = crossing(lastAge, lastFraction, age, nuclearFraction);
+                arrival = AgeCrossing.of(lastAge, lastFraction, age, nuclearFraction,
+                        NuclearLuminosity.ZERO_AGE_FRACTION);
                 if (Double.isNaN(firstCrossing)) {
                     firstCrossing = arrival;
                 }
@@ -92,14 +93,5 @@ final class ZeroAgeArrival {
      */
     double age() {
         return arrival;
-    }
-
-    /** The age at which L_nuc / L, going from a (at ageA) to b (at ageB), reaches the zero-age fraction, linearly. */
-    private static double crossing(double ageA, double a, double ageB, double b) {
-        if (!(a != b) || Double.isNaN(a)) {
-            return ageB;
-        }
-        double w = (NuclearLuminosity.ZERO_AGE_FRACTION - a) / (b - a);
-        return ageA + Math.max(0.0, Math.min(1.0, w)) * (ageB - ageA);
     }
 }
