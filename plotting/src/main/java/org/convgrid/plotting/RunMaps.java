@@ -112,7 +112,44 @@ public final class RunMaps {
      * that also writes the report reads the catalogue, zones and tracks once.
      */
     public static DrawnMaps drawAll(RunData run, Path runDir, Set<ChartFiles.VectorFormat> vectorFormats) {
-        return draw(plan(run), new RunLayout(runDir).maps(), vectorFormats);
+        Path maps = new RunLayout(runDir).maps();
+        DrawnMaps drawn = draw(plan(run), maps, vectorFormats);
+        removeUnitlessAgeNames(run, maps, drawn.written());
+        return drawn;
+    }
+
+    /**
+     * Removes the zone maps an earlier version drew for this run's age slices under names without the age's unit
+     * ({@code zones-mass_z0.02_age0.02_...}, now {@code ..._age20myr_...}), in every format: redrawn under the new
+     * names, they would otherwise stay beside them as a second, stale copy of each chart. Only those exact names of
+     * this run's own slices go, never a file this drawing wrote; a file that cannot be removed is left.
+     */
+    private static void removeUnitlessAgeNames(RunData run, Path maps, List<Path> written) {
+        if (run.ageGroups().byFraction()) {
+            return;
+        }
+        Set<String> stems = new LinkedHashSet<>();
+        for (CatalogueRow row : run.catalogue()) {
+            String stem = SliceLabels.unitlessFileStem(Slice.of(row));
+            stems.add(ZONES_MASS_FILES + "_" + stem);
+            stems.add(ZONES_RADIUS_FILES + "_" + stem);
+        }
+        List<String> extensions = new ArrayList<>(List.of("png"));
+        for (ChartFiles.VectorFormat f : ChartFiles.VectorFormat.values()) {
+            extensions.add(f.extension());
+        }
+        for (String stem : stems) {
+            for (String extension : extensions) {
+                Path former = maps.resolve(stem + "." + extension);
+                if (!written.contains(former)) {
+                    try {
+                        java.nio.file.Files.deleteIfExists(former);
+                    } catch (IOException e) {
+                        // a stale chart that cannot be removed is only clutter: the report links the new one
+                    }
+                }
+            }
+        }
     }
 
     /** Draws the given charts into {@code maps}; a chart that throws is named in the failures. */

@@ -21,7 +21,7 @@ class ChartFailureTest {
         DrawnMaps drawn = RunMaps.drawAll(dir);
         assertThat(drawn.failures()).isEmpty();
         assertThat(drawn.written()).extracting(p -> p.getFileName().toString())
-                .contains("transitions-vs-z_a1.8_ov0_schwarzschild.png", "zones-mass_z0_age0_a1.8_ov0_schwarzschild.png");
+                .contains("transitions-vs-z_a1.8_ov0_schwarzschild.png", "zones-mass_z0_zams_a1.8_ov0_schwarzschild.png");
         String html = Files.readString(ReportPage.write(dir, drawn.failures()));
         assertThat(html).contains("transitions-vs-z_a1.8_ov0_schwarzschild.png").doesNotContain("Could not be drawn",
                 "Not drawn yet");

@@ -35,7 +35,7 @@ class NothingToDrawTest {
                 "chart transitions-vs-age_a1.8_ov0_schwarzschild.png not drawn: nothing to draw: the models bracket "
                         + "no transition mass in any slice (transitions.csv has none found)");
         // the zone maps still say, in grey, that these models are past the main sequence
-        assertThat(names(drawn)).contains("zones-mass_z0.02_age30_a1.8_ov0_schwarzschild.png");
+        assertThat(names(drawn)).contains("zones-mass_z0.02_age30gyr_a1.8_ov0_schwarzschild.png");
     }
 
     @Test
@@ -49,7 +49,7 @@ class NothingToDrawTest {
     void oneUsableModelIsDrawnOnEveryChart(@TempDir Path dir) throws Exception {
         DrawnMaps drawn = draw(dir, new double[] {1.0}, new double[] {0.02}, new double[] {1});
         assertThat(names(drawn)).contains("hr_a1.8_ov0_schwarzschild.png",
-                "zones-mass_z0.02_age1_a1.8_ov0_schwarzschild.png");
+                "zones-mass_z0.02_age1gyr_a1.8_ov0_schwarzschild.png");
         assertThat(drawn.failures()).extracting(DrawnMaps.ChartFailure::fileName)
                 .containsExactly("transitions-vs-z_a1.8_ov0_schwarzschild.png");
     }
@@ -59,14 +59,14 @@ class NothingToDrawTest {
         DrawnMaps drawn = draw(dir, new double[] {0.2, 0.5, 1.2}, new double[] {0.01, 0.02}, new double[] {0, 20});
         assertThat(drawn.failures()).isEmpty();
         assertThat(names(drawn)).contains("hr_a1.8_ov0_schwarzschild.png", "transitions-vs-z_a1.8_ov0_schwarzschild.png",
-                "transitions-vs-age_a1.8_ov0_schwarzschild.png", "zones-mass_z0.02_age20_a1.8_ov0_schwarzschild.png");
+                "transitions-vs-age_a1.8_ov0_schwarzschild.png", "zones-mass_z0.02_age20gyr_a1.8_ov0_schwarzschild.png");
     }
 
     @Test
     void oneMassAtSeveralAgesAndMetallicitiesDrawsItsModels(@TempDir Path dir) throws Exception {
         DrawnMaps drawn = draw(dir, new double[] {0.5}, new double[] {0.01, 0.02}, new double[] {0, 1, 2});
         assertThat(names(drawn)).contains("hr_a1.8_ov0_schwarzschild.png",
-                "zones-radius_z0.01_age2_a1.8_ov0_schwarzschild.png");
+                "zones-radius_z0.01_age2gyr_a1.8_ov0_schwarzschild.png");
         assertThat(drawn.failures()).allSatisfy(f -> assertThat(f.reason()).startsWith("nothing to draw: "));
     }
 }

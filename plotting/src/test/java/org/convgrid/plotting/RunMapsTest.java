@@ -36,14 +36,33 @@ class RunMapsTest {
             assertThat(image.getHeight()).isEqualTo(ChartStyle.HEIGHT);
         });
         assertThat(files).extracting(f -> f.getFileName().toString()).contains(
-                "zones-mass_z0.014_age4.57_a1.8_ov0_schwarzschild.png",
-                "zones-radius_z0.004_age0_a1.8_ov0_schwarzschild.png", "hr_a1.8_ov0_schwarzschild.png",
+                "zones-mass_z0.014_age4.57gyr_a1.8_ov0_schwarzschild.png",
+                "zones-radius_z0.004_zams_a1.8_ov0_schwarzschild.png", "hr_a1.8_ov0_schwarzschild.png",
                 "transitions-vs-z_a1.8_ov0_schwarzschild.png", "transitions-vs-age_a1.8_ov0_schwarzschild.png",
                 "turnover-vs-mass_z0.004_a1.8_ov0_schwarzschild.png", "turnover-vs-mass_z0.014_a1.8_ov0_schwarzschild.png",
                 "turnover-vs-mass_z0.02_a1.8_ov0_schwarzschild.png");
         try (var left = Files.list(dir.resolve("maps"))) {
             assertThat(left.filter(f -> f.getFileName().toString().endsWith(".tmp"))).isEmpty();
         }
+    }
+
+    @Test
+    void aRedrawRemovesTheChartsAnEarlierVersionNamedWithoutTheAgesUnit(@TempDir Path dir) throws Exception {
+        TestRuns.write(dir, TestRuns.rows(new double[] {0.5, 1.0}, new double[] {0.02}, new double[] {0.02}));
+        Path maps = Files.createDirectories(dir.resolve("maps"));
+        // what the version before 2026-12-05 drew for this slice (age 20 Myr written as 0.02, Gyr unsaid), and a
+        // chart of the user's and one of another slice, which must stay
+        Path formerPng = Files.writeString(maps.resolve("zones-mass_z0.02_age0.02_a1.8_ov0_schwarzschild.png"), "x");
+        Path formerSvg = Files.writeString(maps.resolve("zones-radius_z0.02_age0.02_a1.8_ov0_schwarzschild.svg"), "x");
+        Path otherSlice = Files.writeString(maps.resolve("zones-mass_z0.02_age0.03_a1.8_ov0_schwarzschild.png"), "x");
+        Path users = Files.writeString(maps.resolve("zones-mass_mine.png"), "x");
+        List<Path> files = RunMaps.drawAll(dir).written();
+        assertThat(files).extracting(f -> f.getFileName().toString())
+                .contains("zones-mass_z0.02_age20myr_a1.8_ov0_schwarzschild.png");
+        assertThat(formerPng).doesNotExist();
+        assertThat(formerSvg).doesNotExist();
+        assertThat(otherSlice).exists();
+        assertThat(users).exists();
     }
 
     @Test

@@ -178,8 +178,34 @@ public final class SliceLabels {
         return "ages " + ages.stream().map(SliceLabels::age).collect(java.util.stream.Collectors.joining(", "));
     }
 
-    /** A file name stem for a slice, e.g. {@code z0.014_age4.57_a1.8_ov0_schwarzschild}; ASCII only. */
+    /**
+     * A file name stem for a slice, e.g. {@code z0.014_age4.57gyr_a1.8_ov0_schwarzschild} or
+     * {@code z0.02_age20myr_a1.8_ov0_schwarzschild}; ASCII only. The age carries its unit, as the titles do
+     * ({@link #ageStem}).
+     */
     public static String fileStem(Slice s) {
+        return "z" + number(s.zInit()) + "_" + ageStem(s.ageGyr()) + "_" + physicsStem(s.mixingLength(),
+                s.overshootHp(), s.overshootProfile(), s.criterion(), s.opacityScale());
+    }
+
+    /**
+     * The age part of a file name, with its unit as {@link #age} words it for people: {@code age20myr} below 1 Gyr,
+     * {@code age4.57gyr} from 1 Gyr, {@code zams} for the zero-age model. Files named before the unit was added
+     * ({@code age0.02}, read as Gyr) are {@link #unitlessFileStem}.
+     */
+    public static String ageStem(double ageGyr) {
+        if (ageGyr == 0.0) {
+            return "zams";
+        }
+        return ageGyr > 0.0 && ageGyr < 1.0 ? "age" + number(ageGyr * 1000.0) + "myr" : "age" + number(ageGyr) + "gyr";
+    }
+
+    /**
+     * The stem a slice's files had before ages carried their unit ({@code z0.02_age0.02_a1.8_ov0_schwarzschild}, the
+     * age in Gyr without saying so): what a redraw removes, so that an earlier run's charts are not left beside their
+     * renamed successors.
+     */
+    public static String unitlessFileStem(Slice s) {
         return "z" + number(s.zInit()) + "_age" + number(s.ageGyr()) + "_" + physicsStem(s.mixingLength(),
                 s.overshootHp(), s.overshootProfile(), s.criterion(), s.opacityScale());
     }

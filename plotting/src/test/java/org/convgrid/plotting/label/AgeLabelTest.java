@@ -25,4 +25,16 @@ class AgeLabelTest {
         assertThat(SliceLabels.ages(List.of(0.001, 0.01, 0.1, 1.0, 2.0)))
                 .isEqualTo("ages 1 Myr to 2 Gyr (5 values)");
     }
+
+    @Test
+    void fileNamesCarryTheAgesUnitAsTheTitlesDo() {
+        assertThat(SliceLabels.ageStem(0.0)).isEqualTo("zams");
+        assertThat(SliceLabels.ageStem(0.0001)).isEqualTo("age0.1myr");
+        assertThat(SliceLabels.ageStem(0.005)).isEqualTo("age5myr");
+        assertThat(SliceLabels.ageStem(0.02)).isEqualTo("age20myr");
+        assertThat(SliceLabels.ageStem(0.15)).isEqualTo("age150myr");
+        assertThat(SliceLabels.ageStem(0.999)).isEqualTo("age999myr");
+        assertThat(SliceLabels.ageStem(1.0)).isEqualTo("age1gyr");
+        assertThat(SliceLabels.ageStem(4.57)).isEqualTo("age4.57gyr");
+    }
 }

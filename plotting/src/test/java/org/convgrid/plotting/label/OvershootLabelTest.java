@@ -44,7 +44,7 @@ class OvershootLabelTest {
         assertThat(SliceLabels.physicsStem(1.8, 0.0, OvershootScheme.EXPONENTIAL, SCHWARZSCHILD, 1.0))
                 .isEqualTo("a1.8_ov0_schwarzschild");
         Slice ramped = new Slice(0.02, 1.0, 1.8, 0.2, SCHWARZSCHILD, 1.0, OvershootScheme.MASS_RAMPED_STEP);
-        assertThat(SliceLabels.fileStem(ramped)).isEqualTo("z0.02_age1_a1.8_ov0.2-uniform-ramped_schwarzschild");
+        assertThat(SliceLabels.fileStem(ramped)).isEqualTo("z0.02_age1gyr_a1.8_ov0.2-uniform-ramped_schwarzschild");
         assertThat(PhysicsKey.of(ramped).describe()).contains("(uniform-ramped)");
     }
 }
