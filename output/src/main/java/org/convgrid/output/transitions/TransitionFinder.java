@@ -59,16 +59,21 @@ public record TransitionFinder(double coreMassFractionThreshold) {
     public static final double RECEDED_CORE_CENTRAL_H = 0.01;
 
     /**
-     * Central temperature, K, below which a convective core cannot be the CNO cycle's (12 MK): there the cycle, with
-     * its CN at equilibrium, gives at most 0.1 % of the energy at Z = 0.04, the richest tested metallicity (ours,
-     * measured with {@code convgrid probe} at rho 80 g/cm^3, X 0.7: 0.096 % at 12 MK, 1.1 % at 14 MK, 3.3 % at 15 MK),
-     * against ~1 % at the solar centre (15.7 MK; from memory). Such a core is driven by burning out of equilibrium:
-     * 3He on the young main sequence, 12C before the zero-age main sequence. A reader of
-     * {@code conv_core_onset_msun} who takes it for the CNO-core onset is told (a practitioner's review did).
+     * The share of the centre's nuclear energy from the CNO cycle ({@link CentralCnoShare}) below which a convective
+     * core cannot be the CNO cycle's: 1 %. There the cycle's steep temperature dependence (d ln eps / d ln T ~ 18
+     * against the pp chain's ~4) leaves the mixture's ~4.1, so what drives such a core is burning out of equilibrium:
+     * 3He on the young main sequence, 12C before the zero-age main sequence. A reader of {@code conv_core_onset_msun}
+     * who takes it for the CNO-core onset is told (a practitioner's review did). It replaced a fixed 12 MK, which is
+     * right only near solar Z: at Z = 0.02 the share is 0.05 % at 12 MK and 1 % near 14.5 MK (ours, {@code convgrid
+     * probe} at rho 80 g/cm^3, X 0.7: 0.05 % at 12 MK, 0.57 % at 14 MK, 4.2 % at 16 MK), but at [Fe/H] = -2 the cores
+     * of 0.75-1.2 Msun at 1 Gyr sit above 12 MK (up to 19.3 MK) with 0.6 % at most, and all of them end before 1.7 Gyr
+     * in stars that live 2.7-12 Gyr (a review's grid, 2026-12-05).
      */
-    public static final double COOL_CORE_CENTRAL_T = 1.2e7;
+    public static final double COOL_CORE_CNO_SHARE = 0.01;
+    /** {@link #COOL_CORE_CNO_SHARE} in the words of the notes and the charts. */
+    public static final String COOL_CORE_SHARE_WORDS = Math.round(100.0 * COOL_CORE_CNO_SHARE) + " %";
 
-    /** The words of the note {@link #COOL_CORE_CENTRAL_T} adds, by which a reader of the notes finds it. */
+    /** The words of the note {@link #COOL_CORE_CNO_SHARE} adds, by which a reader of the notes finds it. */
     public static final String COOL_CORES_WORDS = "too cool for the CNO cycle";
 
     /** What drives such cores, in the notes and the charts' caveat alike. */
@@ -261,21 +266,21 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         }
         if (core.found()) {
             describeCoolCores(searched.stream().filter(r -> r.massMsun() >= core.massMsun() && hasConvectiveCore(r)
-                    && r.centralTempK() < COOL_CORE_CENTRAL_T).toList(), notes);
+                    && CentralCnoShare.of(r) < COOL_CORE_CNO_SHARE).toList(), notes);
         }
     }
 
     /**
      * Says which of the cores above the onset are too cool at the centre for the CNO cycle
-     * ({@link #COOL_CORE_CENTRAL_T}), so that the onset is not read as the CNO-core onset.
+     * ({@link #COOL_CORE_CNO_SHARE}), so that the onset is not read as the CNO-core onset.
      */
     private static void describeCoolCores(List<CatalogueRow> cool, List<String> notes) {
         if (cool.isEmpty()) {
             return;
         }
         Span masses = new Span(cool.get(0).massMsun(), cool.get(cool.size() - 1).massMsun());
-        notes.add("the cores at " + MassRangeText.of(masses) + " Msun sit in centres below "
-                + Math.round(COOL_CORE_CENTRAL_T / 1e6) + " MK, " + COOL_CORES_WORDS + ": " + COOL_CORES_CAUSE);
+        notes.add("the cores at " + MassRangeText.of(masses) + " Msun sit in centres where the CNO cycle gives under "
+                + COOL_CORE_SHARE_WORDS + " of the energy, " + COOL_CORES_WORDS + ": " + COOL_CORES_CAUSE);
     }
 
     /**

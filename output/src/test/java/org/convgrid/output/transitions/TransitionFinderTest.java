@@ -167,11 +167,17 @@ class TransitionFinderTest {
     }
 
     /** A usable model with its central temperature set, K (the other rows leave it NaN). */
+    /** A model at Z = 0.02 whose centre is at {@code centralT}, 80 g/cm^3 and X = 0.7 (a young main sequence's). */
     static CatalogueRow withCentralT(double mass, StructureClass c, double core, double centralT) {
-        CatalogueRow r = ok(mass, c, core);
+        return withCentre(0.02, mass, c, core, centralT, 80.0, 0.7);
+    }
+
+    static CatalogueRow withCentre(double z, double mass, StructureClass c, double core, double centralT,
+                                   double centralRho, double centralX) {
+        CatalogueRow r = row(z, mass, c, core, ModelStatus.OK);
         return new CatalogueRow(r.modelId(), r.massMsun(), r.zInit(), r.yInit(), r.mixingLength(), r.overshootHp(),
                 r.ageGyr(), r.phase(), r.status(), r.statusDetail(), r.luminosityLsun(), r.radiusRsun(), r.teffK(),
-                r.logGCgs(), centralT, r.centralDensityCgs(), r.centralHFrac(), r.surfaceLiRel(), r.structureClass(),
+                r.logGCgs(), centralT, centralRho, centralX, r.surfaceLiRel(), r.structureClass(),
                 r.coreCzMassFrac(), r.coreCzRadiusFrac(), r.envCzBaseMassFrac(), r.envCzBaseRadiusFrac(),
                 r.envCzMassMsun(), r.turnoverTimeDays(), r.zones(), r.solverIterations(), r.criterion(),
                 r.opacityScale(), r.turnoverTimeGlobalDays());
@@ -180,19 +186,43 @@ class TransitionFinderTest {
     @Test
     void coresTooCoolForTheCnoCycleAreNamedAboveTheOnset() {
         // the shape of the demo's Z = 0.008, 150 Myr slice: every star from 0.38 Msun up has a core, but below
-        // ~1 Msun their centres (7.8-11.9 MK) are far too cool for the CNO cycle (COOL_CORE_CENTRAL_T's Javadoc)
+        // ~1 Msun the CNO cycle gives their centres under 1 % of the energy (COOL_CORE_CNO_SHARE's Javadoc; shares
+        // from the network as `convgrid probe` gives them at 80 g/cm^3, X 0.7, Z 0.02: 0.57 % at 14.0 MK, 5.5 % at
+        // 16.3 MK). Such a core cannot be the CNO cycle's: it cannot steepen the pp chain's d ln eps / d ln T ~ 4 with
+        // its ~18 (both from memory; Kippenhahn, Weigert & Weiss 2012, ch. 18)
         List<CatalogueRow> rows = List.of(withCentralT(0.2, FC, 1, 6.0e6), withCentralT(0.3, ENV, 0, 7.2e6),
                 withCentralT(0.4, BOTH, 0.01, 8.0e6),
                 withCentralT(0.8, BOTH, 0.02, 11.9e6), withCentralT(1.0, BOTH, 0.03, 14.0e6),
                 withCentralT(1.2, BOTH, 0.06, 16.3e6));
         TransitionRow t = finder.find(rows).get(0);
         assertThat(t.convCoreOnset().massMsun()).isEqualTo(0.4);
-        assertThat(t.notes()).isEqualTo("the cores at 0.4-0.8 Msun sit in centres below 12 MK, too cool for the CNO "
-                + "cycle: out-of-equilibrium burning drives them (3He on the main sequence, 12C before it)");
+        assertThat(t.notes()).isEqualTo("the cores at 0.4-1 Msun sit in centres where the CNO cycle gives under 1 % "
+                + "of the energy, too cool for the CNO cycle: out-of-equilibrium burning drives them (3He on the main "
+                + "sequence, 12C before it)");
         // hot centres above the onset: nothing to say
         List<CatalogueRow> hot = List.of(withCentralT(0.2, FC, 1, 6.0e6), withCentralT(1.0, ENV, 0, 14.0e6),
                 withCentralT(1.2, BOTH, 0.06, 16.3e6));
         assertThat(finder.find(hot).get(0).notes()).isEmpty();
+    }
+
+    @Test
+    void atLowMetallicityCoresInCentresHotterThanTheSunsAreStillNamedWhenThePpChainDrivesThem() {
+        // [Fe/H] = -2 (Z = 1.843e-4), the shape of a review's 1 Gyr slice: cores from 0.35 Msun up, the 1.2 Msun one
+        // at 19.3 MK with X_c 0.5 (CNO share 0.63 %), all of them gone by 1.7 Gyr; the cycle's rate scales with its
+        // catalysts, so at this Z it takes ~23 MK for a few per cent (6.3 % at 23 MK, 50 g/cm^3). A fixed 12 MK named
+        // only the cores up to 0.7 Msun and let the rest read as CNO cores
+        double z = 1.843e-4;
+        List<CatalogueRow> rows = List.of(withCentre(z, 0.3, FC, 1, 7.0e6, 150.0, 0.75),
+                withCentre(z, 0.35, BOTH, 0.1, 8.0e6, 140.0, 0.75), withCentre(z, 0.7, BOTH, 0.01, 11.9e6, 110.0, 0.7),
+                withCentre(z, 1.0, BOTH, 0.02, 16.0e6, 80.0, 0.6), withCentre(z, 1.2, BOTH, 0.03, 19.3e6, 60.0, 0.5),
+                withCentre(z, 1.6, BOTH, 0.08, 23.0e6, 50.0, 0.5));
+        TransitionRow t = finder.find(rows).get(0);
+        assertThat(t.convCoreOnset().massMsun()).isEqualTo(0.35);
+        assertThat(t.notes()).startsWith("the cores at 0.35-1.2 Msun sit in centres where the CNO cycle gives under 1 %");
+        // the same centres at Z = 0.02 are the CNO cycle's from 16 MK (4.2 %): only the cooler two are named
+        List<CatalogueRow> solar = rows.stream().map(r -> withCentre(0.02, r.massMsun(), r.structureClass(),
+                r.coreCzMassFrac(), r.centralTempK(), r.centralDensityCgs(), r.centralHFrac())).toList();
+        assertThat(finder.find(solar).get(0).notes()).startsWith("the cores at 0.35-0.7 Msun sit in centres");
     }
 
     @Test

@@ -57,8 +57,9 @@ public final class TransitionAgeTrend {
         if (at.isEmpty()) {
             return List.of();
         }
-        return List.of("Cores from " + String.join(", ", at) + " Msun up: the lowest of them burn below "
-                + Math.round(TransitionFinder.COOL_CORE_CENTRAL_T / 1e6) + " MK, " + TransitionFinder.COOL_CORES_WORDS
+        return List.of("Cores from " + String.join(", ", at) + " Msun up: the lowest of them burn where the CNO cycle "
+                + "gives under " + TransitionFinder.COOL_CORE_SHARE_WORDS + " of the energy, "
+                + TransitionFinder.COOL_CORES_WORDS
                 + ": " + TransitionFinder.COOL_CORES_CAUSE + "; see the notes of transitions.csv.");
     }
 

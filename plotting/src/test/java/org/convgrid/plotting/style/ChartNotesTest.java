@@ -12,8 +12,8 @@ import org.junit.jupiter.api.Test;
 class ChartNotesTest {
 
     private static final List<String> NOTES = List.of(
-            "Cores from 0.381 (Z = 0.008, 150 Myr), 0.420 (Z = 0.014, 150 Myr) Msun up: the lowest of them burn below "
-                    + "12 MK, too cool for the CNO cycle: out-of-equilibrium burning drives them (3He on the main "
+            "Cores from 0.381 (Z = 0.008, 150 Myr), 0.420 (Z = 0.014, 150 Myr) Msun up: the lowest of them burn where the CNO "
+                    + "cycle gives under 1 % of the energy, too cool for the CNO cycle: out-of-equilibrium burning drives them (3He on the main "
                     + "sequence, 12C before it); see the notes of transitions.csv.",
             "Each Z is drawn slightly apart at its age (lowest Z left) so that markers do not hide each other.");
 
