@@ -65,7 +65,41 @@ final class BirthTracks {
         if (cached != null) {
             return cached;
         }
-        PhysicsSet physics = physics(z);
+        BirthTrack t = evolve(massInSun, birth(z), physics(z), endMyr, coarseness, agesMyr);
+        TRACKS.put(key, t);
+        return t;
+    }
+
+    /**
+     * A track at the default step limits with its own birth helium and mixing length, for comparisons with published
+     * sets computed with other inputs than the tests' usual Y = 0.2485 + 1.5 Z and alpha 1.8.
+     *
+     * @param massInSun Msun
+     * @param y birth helium mass fraction
+     * @param z birth metal mass fraction
+     * @param mixingLength alpha, in pressure scale heights
+     * @param endMyr age limit, Myr
+     * @param agesMyr requested ages, Myr
+     */
+    static synchronized BirthTrack trackWith(double massInSun, double y, double z, double mixingLength,
+                                             double endMyr, double... agesMyr) {
+        String key = massInSun + "/y" + y + "/z" + z + "/alpha" + mixingLength + "/" + endMyr + "/"
+                + java.util.Arrays.toString(agesMyr);
+        BirthTrack cached = TRACKS.get(key);
+        if (cached != null) {
+            return cached;
+        }
+        Composition composition = BirthAbundances.of(1.0 - y - z, z);
+        PhysicsOptions options = new PhysicsOptions(mixingLength, 0.0, PhysicsOptions.DEFAULT.criterion(),
+                PhysicsOptions.DEFAULT.opacityScale());
+        BirthTrack t = evolve(massInSun, composition, StandardPhysics.create(options, composition), endMyr, 1.0,
+                agesMyr);
+        TRACKS.put(key, t);
+        return t;
+    }
+
+    private static BirthTrack evolve(double massInSun, Composition composition, PhysicsSet physics, double endMyr,
+                                     double coarseness, double... agesMyr) {
         MainSequenceEvolver.Settings d = MainSequenceEvolver.Settings.DEFAULT.scaled(coarseness);
         MainSequenceEvolver.Settings s = new MainSequenceEvolver.Settings(d.maxCentralHydrogenChange(),
                 d.exhaustionFraction(), d.maxLuminosityChange(), d.maxGrowth(), d.endCentralHydrogen(),
@@ -77,9 +111,7 @@ final class BirthTracks {
         for (int i = 0; i < ages.length; i++) {
             ages[i] = agesMyr[i] * MYR;
         }
-        BirthTrack t = evolution.evolve(massInSun * Constants.M_SUN, birth(z), ages);
-        TRACKS.put(key, t);
-        return t;
+        return evolution.evolve(massInSun * Constants.M_SUN, composition, ages);
     }
 
     /** The energy a track radiated and released by burning, erg, and the index of the last step summed. */
