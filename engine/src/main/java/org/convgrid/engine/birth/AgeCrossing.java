@@ -2,8 +2,8 @@ package org.convgrid.engine.birth;
 
 /**
  * The age at which a quantity recorded at two consecutive models crosses a level, interpolated linearly between
- * them: how the life events that are not resolved to one step (the radiative core's appearance, the lithium levels,
- * the zero-age main sequence) are dated. Stateless.
+ * them: how the life events that are not resolved to one step (the radiative core's appearance, the convective
+ * core's onset and end, the lithium levels, the zero-age main sequence) are dated. Stateless.
  */
 final class AgeCrossing {
 

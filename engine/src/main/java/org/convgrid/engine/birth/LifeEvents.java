@@ -2,11 +2,12 @@ package org.convgrid.engine.birth;
 
 /**
  * The ages (s since birth) at which a star's life changes; NaN for an event that did not happen on the computed
- * track. Ages of the convective core's onset and end and of the radiative core's end are those of the first model
- * that shows them (resolution: one step), except the end of a core that lasts the whole main sequence, which is the
- * end of the main sequence (see {@code convectiveCoreEnd}); the radiative core's appearance (on the centre's
- * stability excess), the zero-age main sequence and the lithium halving are interpolated linearly in age between
- * the two models that bracket them.
+ * track. The radiative core's end is the age of the first model that shows it (resolution: one step); the
+ * radiative core's appearance and the convective core's onset and end (on the centre's stability excess, or the
+ * central zone's top at the core threshold, {@link CoreLifetime}), the zero-age main sequence and the lithium levels
+ * are interpolated linearly in age between the two models that bracket them, except the end of a core that lasts the
+ * whole main sequence, which is the end of the main sequence (see {@code convectiveCoreEnd}), and a core gone only in
+ * the track's last model, dated at that model.
  *
  * @param radiativeCore the centre first stops being convective (never for a fully convective star)
  * @param radiativeCoreEnd after that, the star is fully convective again (one zone from the centre to the surface,
@@ -21,15 +22,15 @@ package org.convgrid.engine.birth;
  *                            whose top lies above the core threshold and below m/M = 0.99 (higher, it is the
  *                            whole star again); a core that also vanishes before the ZAMS is a transient of the
  *                            contraction and is not reported
- * @param convectiveCoreEnd after that onset, the convective core vanishes for good: the first model of the last run
- *                          of models without it ({@link CoreLifetime}; no central zone with its top above
- *                          the core threshold any more). A core still there in the last model of the main sequence
+ * @param convectiveCoreEnd after that onset, the convective core vanishes for good: the start of the last run
+ *                          of models without it, interpolated from the model before ({@link CoreLifetime}; no
+ *                          central zone with its top above the core threshold any more). A core still there in the last model of the main sequence
  *                          (the last with central hydrogen at or above the end value) lasted the whole main sequence
  *                          and ends with it, at {@code centralHydrogenExhausted}, whether it vanished during the step
  *                          that crossed the end value or is still there after it: the first model without it would
  *                          lie past the main sequence, one step after the exhaustion age, reading as a core that
- *                          outlived it. A core that vanished on the main sequence keeps the age of the first model
- *                          without it, however close to the exhaustion age
+ *                          outlived it. A core that vanished on the main sequence keeps the age at which it vanished,
+ *                          however close to the exhaustion age
  * @param lithiumHalved the surface 7Li first falls to half its birth value
  * @param lithiumOnePercent the surface 7Li first falls to 1 % of its birth value (the depletion that dates young
  *                          clusters by their lithium depletion boundary), interpolated in ln 7Li

@@ -27,7 +27,8 @@ final class LifeRecorder implements StepObserver {
     private double fullyConvectiveSince = Double.NaN;
     private final ZeroAgeArrival zeroAge = new ZeroAgeArrival();
     /**
-     * Per model: age, 1 with a convective core, 1 once the centre has stopped being convective. The core's lifetime
+     * Per model: age, 1 with a convective core, 1 once the centre has stopped being convective, the centre's
+     * stability excess, the central zone's top m/M (0 without one), from which the core's ages are interpolated. The core's lifetime
      * is read from them at the end, when the zero-age main sequence is known ({@link ZeroAgeArrival} may move it
      * after the models that first seemed to reach it).
      */
@@ -74,7 +75,8 @@ final class LifeRecorder implements StepObserver {
                 radiativeCore = lastCentreExcess > 0.0 && excess <= 0.0
                         ? AgeCrossing.of(lastAge, lastCentreExcess, age, excess, 0.0) : age;
             }
-            cores.add(new double[] {age, core ? 1.0 : 0.0, Double.isNaN(radiativeCore) ? 0.0 : 1.0});
+            cores.add(new double[] {age, core ? 1.0 : 0.0, Double.isNaN(radiativeCore) ? 0.0 : 1.0,
+                    centreExcess(model), radiativeCentre ? 0.0 : zones.get(0).outerMassFraction()});
             if (Double.isNaN(lithiumHalved) && lithium <= 0.5) {
                 lithiumHalved = AgeCrossing.of(lastAge, lastLithium, age, lithium, 0.5);
             }
@@ -105,10 +107,10 @@ final class LifeRecorder implements StepObserver {
     LifeEvents events() {
         double radiativeCoreEnd = Double.isNaN(radiativeCore) ? Double.NaN : fullyConvectiveSince;
         double zams = zeroAge.age();
-        CoreLifetime convectiveCore = new CoreLifetime();
+        CoreLifetime convectiveCore = new CoreLifetime(coreThreshold);
         for (double[] c : cores) {
             // comparisons with NaN are false: no zero-age main sequence, no model on it
-            convectiveCore.observe(c[0], c[1] > 0.5, c[2] > 0.5, c[0] >= zams);
+            convectiveCore.observe(c[0], c[3], c[4], c[1] > 0.5, c[2] > 0.5, c[0] >= zams);
         }
         return new LifeEvents(radiativeCore, radiativeCoreEnd, zams, convectiveCore.onset(), convectiveCore.end(),
                 lithiumHalved, lithiumOnePercent, Double.NaN);

@@ -10,11 +10,18 @@ import org.junit.jupiter.api.Test;
  */
 class CoreLifetimeTest {
 
-    /** Feeds models at the given ages (Myr) with or without a core, all after the ZAMS at 30 Myr, centre radiative. */
+    private static final double THRESHOLD = 1.0e-3;
+    /** No centre given: the events are dated at the models themselves. */
+    private static final double UNKNOWN = Double.NaN;
+
+    /**
+     * Feeds models at the given ages (Myr) with or without a core, all after the ZAMS at 30 Myr, centre radiative,
+     * without their centres' state (so each event is the model's own age).
+     */
     private static CoreLifetime mainSequence(double[] ages, boolean[] core) {
-        CoreLifetime lifetime = new CoreLifetime();
+        CoreLifetime lifetime = new CoreLifetime(THRESHOLD);
         for (int i = 0; i < ages.length; i++) {
-            lifetime.observe(ages[i], core[i], true, ages[i] >= 30.0);
+            lifetime.observe(ages[i], UNKNOWN, UNKNOWN, core[i], true, ages[i] >= 30.0);
         }
         return lifetime;
     }
@@ -41,16 +48,42 @@ class CoreLifetimeTest {
 
     @Test
     void aCoreOfTheContractionIsForgottenAndAFullyConvectiveCentreIsNoCore() {
-        CoreLifetime lifetime = new CoreLifetime();
-        lifetime.observe(0.001, true, false, false);  // the fully convective star's one zone: no onset
+        CoreLifetime lifetime = new CoreLifetime(THRESHOLD);
+        // the fully convective star's one zone: no onset
+        lifetime.observe(0.001, UNKNOWN, UNKNOWN, true, false, false);
         assertThat(lifetime.onset()).isNaN();
-        lifetime.observe(0.002, true, true, false);   // a core before the ZAMS ...
-        lifetime.observe(0.003, false, true, false);  // ... gone before it: a transient of the contraction
+        lifetime.observe(0.002, UNKNOWN, UNKNOWN, true, true, false);   // a core before the ZAMS ...
+        lifetime.observe(0.003, UNKNOWN, UNKNOWN, false, true, false);  // ... gone before it: a transient
         assertThat(lifetime.onset()).isNaN();
         assertThat(lifetime.end()).isNaN();
-        lifetime.observe(25.0, true, true, false);    // the main-sequence core, from before the ZAMS on
-        lifetime.observe(40.0, true, true, true);
+        // the main-sequence core, from before the ZAMS on
+        lifetime.observe(25.0, UNKNOWN, UNKNOWN, true, true, false);
+        lifetime.observe(40.0, UNKNOWN, UNKNOWN, true, true, true);
         assertThat(lifetime.onset()).isEqualTo(25.0);
         assertThat(lifetime.end()).isNaN();
+    }
+
+    @Test
+    void theAgesAreInterpolatedBetweenTheModelsAroundTheEvent() {
+        // the review's 0.45 Msun star, [Fe/H] = -1: its core was gone at the step cut at the grid's 10 Gyr, 0.71 Gyr
+        // after the model before; the centre's stability excess falls from +0.2 to -0.6 across it, so it crossed zero
+        // a quarter of the way (once a later model confirms it stayed gone)
+        CoreLifetime ended = new CoreLifetime(THRESHOLD);
+        ended.observe(100.0, -0.5, 0.0, false, true, true);
+        ended.observe(200.0, 0.1, 0.0005, false, true, true);  // a central zone below the threshold: no core yet
+        ended.observe(300.0, 0.3, 0.0025, true, true, true);   // past it between the two: at a quarter of the step
+        ended.observe(9290.0, 0.2, 0.03, true, true, true);
+        ended.observe(10000.0, -0.6, 0.0, false, true, true);
+        assertThat(ended.onset()).isEqualTo(225.0);
+        // gone in the track's last model only: not seen to stay gone, so dated there, equal to the track's end
+        assertThat(ended.end()).isEqualTo(10000.0);
+        ended.observe(13000.0, -0.9, 0.0, false, true, true);
+        assertThat(ended.end()).isEqualTo(9467.5);
+        // a star's one zone shrinking to a core (the centre convective at both): no crossing to read, its own age
+        CoreLifetime fromWholeStar = new CoreLifetime(THRESHOLD);
+        fromWholeStar.observe(1.0, -0.1, 0.0, false, true, false);
+        fromWholeStar.observe(2.0, 0.5, 1.0, false, true, false);
+        fromWholeStar.observe(3.0, 0.4, 0.3, true, true, false);
+        assertThat(fromWholeStar.onset()).isEqualTo(3.0);
     }
 }

@@ -34,14 +34,16 @@ final class LifeEventsSection {
     /** An event that did not happen on the computed track. */
     static final String NONE = "\u2014";
     /**
-     * Ages are shown to four significant digits ({@link SliceLabels#number}): each is the age of an evolution step,
-     * uncertain by ~1.5-3 % from the step size (README), so more digits would claim more than the steps give.
+     * Ages are shown to four significant digits ({@link SliceLabels#number}): each is an evolution step's age or
+     * interpolated between two, uncertain by ~1.5-3 % from the step size before the ZAMS (README), so more digits
+     * would claim more than the steps give.
      */
     static final String CAPTION = "Ages in Myr since birth, from " + RunLayout.LIFE_EVENTS + ", to four significant "
-            + "digits. The ZAMS, the radiative core's appearance and the lithium levels are interpolated between "
-            + "evolution steps, the other events are the first step that shows them; all move with the step size: by "
-            + "~1.5 % (ZAMS) to ~3 % (radiative core, lithium halved) between the default steps and a quarter of "
-            + "them (README).";
+            + "digits. The radiative core's return to full convection is the first evolution step that shows it, the "
+            + "other events are interpolated between two steps (a convective core gone only in a track's last step "
+            + "is dated there); all move with the step size: by ~1.5 % (ZAMS) to ~3 % (radiative core, lithium "
+            + "halved) between the default steps and a quarter of them before the ZAMS, and by up to a fraction of "
+            + "a step, which reaches ~1 Gyr in old low-mass stars, after it (README).";
     static final String LEGEND = NONE + " : the event did not happen on the computed track, that is by the age in "
             + "the last column (a star of a grid that stops at 100 Myr may still reach it later).";
 
