@@ -14,7 +14,6 @@ import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.state.Composition;
-import org.convgrid.engine.structure.BuoyancyTravelTime;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.engine.batch.GridRequests;
@@ -195,7 +194,9 @@ final class StarCommand implements Callable<Integer> {
                 writer.write(OutcomeRows.toRow(outcome));
             }
         } else {
-            double buoyancyTravelTime = answer.model() == null ? Double.NaN : BuoyancyTravelTime.of(answer.model());
+            // the outcome's Pi_0, which the catalogue row (--format csv, a grid's catalogue) carries too
+            double buoyancyTravelTime = outcome instanceof ModelOutcome.Solved solved ? solved.buoyancyTravelTime()
+                    : Double.NaN;
             StarReport.write(outcome, composition, buoyancyTravelTime, main.out());
         }
         main.out().flush();

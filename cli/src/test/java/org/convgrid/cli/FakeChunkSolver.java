@@ -6,6 +6,7 @@ import java.util.Set;
 import org.convgrid.engine.request.Age;
 import org.convgrid.engine.batch.ChunkSolver;
 import org.convgrid.engine.request.GlobalProperties;
+import org.convgrid.engine.request.LifeStage;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.ModelStatus;
@@ -18,20 +19,36 @@ import org.convgrid.engine.units.Constants;
  * A stand-in for the structure solver with made-up, smooth numbers (not physics). Like homology seeding, every
  * outcome depends on the chunk's first model and on the position in the chunk, so a change in how a grid is cut
  * into chunks (threads, shards, resumes) changes the catalogue's bytes. Fully convective below 0.375 Msun, a
- * convective envelope up to 1.225 Msun, a convective core above (between grid masses, so round-off cannot move them).
+ * convective envelope up to 1.225 Msun, a convective core above (between grid masses, so round-off cannot move them);
+ * with {@link #withPeriodScale}, a g-mode period scale for every star but the fully convective ones.
  */
 final class FakeChunkSolver implements ChunkSolver {
 
     private final Set<String> failing;
     private final long millisPerModel;
+    private final boolean periodScale;
 
     FakeChunkSolver(Set<String> failing, long millisPerModel) {
+        this(failing, millisPerModel, false);
+    }
+
+    private FakeChunkSolver(Set<String> failing, long millisPerModel, boolean periodScale) {
         this.failing = Set.copyOf(failing);
         this.millisPerModel = millisPerModel;
+        this.periodScale = periodScale;
     }
 
     static FakeChunkSolver fast() {
         return new FakeChunkSolver(Set.of(), 0);
+    }
+
+    /**
+     * A fast solver whose stars also have a g-mode period scale. Opt-in: the tests of earlier catalogue layouts made
+     * by cutting this version's last columns expect a resume to give back every byte, which rows without the period
+     * scale cells of a model not solved again cannot.
+     */
+    static FakeChunkSolver withPeriodScale() {
+        return new FakeChunkSolver(Set.of(), 0, true);
     }
 
     @Override
@@ -46,7 +63,10 @@ final class FakeChunkSolver implements ChunkSolver {
                 outcomes.add(new ModelOutcome.Failed(r, ModelStatus.FAILED, "fake solver gave up\nat shell 12",
                         iterations));
             } else {
-                outcomes.add(new ModelOutcome.Solved(r, global(r, seed), convection(r), iterations));
+                ConvectiveStructure convection = convection(r);
+                outcomes.add(new ModelOutcome.Solved(r, global(r, seed), convection, iterations,
+                        LifeStage.MAIN_SEQUENCE_UNTRACED, Double.NaN,
+                        periodScale ? buoyancyTravelTime(r, convection) : Double.NaN));
             }
         }
         return outcomes;
@@ -61,6 +81,15 @@ final class FakeChunkSolver implements ChunkSolver {
         double g = Constants.G * r.mass() / Math.pow(radius * Constants.R_SUN, 2);
         return new GlobalProperties(l * Constants.L_SUN, radius * Constants.R_SUN, teff, g, 1.5e7 * Math.sqrt(m),
                 150.0 / m, Math.max(0.0, 0.7 - 0.05 * ageGyr * m));
+    }
+
+    /** Made-up Pi_0 (s) falling with age, none for a fully convective star, as the real one has none. */
+    private static double buoyancyTravelTime(ModelRequest r, ConvectiveStructure convection) {
+        if (convection.structureClass() == StructureClass.FULLY_CONVECTIVE) {
+            return Double.NaN;
+        }
+        double ageGyr = ((Age.SinceZeroAge) r.age()).seconds() / Constants.GYR;
+        return 3000.0 * Math.sqrt(r.mass() / Constants.M_SUN) * (1 - 0.05 * ageGyr);
     }
 
     private static ConvectiveStructure convection(ModelRequest r) {

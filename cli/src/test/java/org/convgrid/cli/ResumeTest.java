@@ -112,28 +112,13 @@ class ResumeTest {
     }
 
     /**
-     * The catalogue {@code text} as an earlier version wrote it, its first {@code rows} rows only: without the last
-     * three columns ({@code core_mixed_mass_frac}, {@code overshoot_profile}, {@code fe_h_dex}), and with one
-     * description worded otherwise.
+     * The catalogue {@code text} as an earlier version wrote it, its first {@code rows} rows only: without the
+     * columns from {@code core_mixed_mass_frac} on ({@code overshoot_profile}, {@code fe_h_dex} and the g-mode period
+     * scale followed it), and with one description worded otherwise.
      */
     static String earlierLayout(String text, int rows) {
-        StringBuilder out = new StringBuilder();
-        int kept = -1;
-        for (String line : text.split("\n")) {
-            if (line.startsWith("#")) {
-                if (!line.contains("{name: core_mixed_mass_frac") && !line.contains("{name: overshoot_profile")
-                        && !line.contains("{name: fe_h_dex")) {
-                    out.append(line.replace("integral of dr / v_conv", "integral dr / v")).append('\n');
-                }
-            } else if (kept++ < rows) {
-                int cut = line.length();
-                for (int i = 0; i < 3; i++) {
-                    cut = line.lastIndexOf(',', cut - 1);
-                }
-                out.append(line, 0, cut).append('\n');
-            }
-        }
-        return out.toString();
+        return EarlierCatalogue.lackingFrom(text, "core_mixed_mass_frac", rows)
+                .replace("integral of dr / v_conv", "integral dr / v");
     }
 
     @Test

@@ -168,15 +168,7 @@ class TransitionsCommandTest {
         Path dir = finishedRun("earlier");
         Path catalogue = dir.resolve("catalogue.ecsv");
         String current = Files.readString(catalogue);
-        StringBuilder old = new StringBuilder();
-        for (String line : current.split("\n")) {
-            if (!line.startsWith("#")) {
-                old.append(line, 0, line.lastIndexOf(',')).append('\n');
-            } else if (!line.contains("{name: fe_h_dex")) {
-                old.append(line).append('\n');
-            }
-        }
-        Files.writeString(catalogue, old.toString());
+        Files.writeString(catalogue, EarlierCatalogue.lackingFrom(current, "fe_h_dex", Integer.MAX_VALUE));
         assertThat(harness(new FakeMassLines(Set.of())).execute("transitions", "earlier", "--refine").code())
                 .isEqualTo(0);
         String refined = Files.readString(catalogue);

@@ -55,10 +55,11 @@ class OvershootProfileColumnTest {
         return new ModelOutcome.Solved(request, global, convection, 5);
     }
 
-    /** The cell before the last: overshoot_profile, which fe_h_dex follows. */
+    /** The overshoot_profile cell, which fe_h_dex and the g-mode period scale follow. */
     private static String profileCell(String line) {
         String[] cells = line.split(",", -1);
-        return cells[cells.length - 2];
+        // fe_h_dex and the g-mode period scale's two columns follow it
+        return cells[cells.length - 4];
     }
 
     @Test
@@ -86,9 +87,15 @@ class OvershootProfileColumnTest {
         writer.write(OutcomeRows.toRow(coredStar("p0-z00-m000-a00", physics(OvershootScheme.STEP, 0.2))));
         writer.flush();
         List<String> lines = out.toString().lines().filter(l -> !l.startsWith("#")).toList();
-        // the layout before overshoot_profile had neither it nor fe_h_dex, added after it
-        String withoutColumn = lines.stream().map(l -> l.substring(0, l.lastIndexOf(',', l.lastIndexOf(',') - 1))
-                + "\n").reduce("", String::concat);
+        // the layout before overshoot_profile had none of the columns added after it (fe_h_dex, the g-mode period
+        // scale's two): its rows end four cells earlier
+        String withoutColumn = lines.stream().map(l -> {
+            int cut = l.length();
+            for (int i = 0; i < 4; i++) {
+                cut = l.lastIndexOf(',', cut - 1);
+            }
+            return l.substring(0, cut) + "\n";
+        }).reduce("", String::concat);
         CatalogueRow earlier = CatalogueReader.read(new StringReader(withoutColumn)).get(0);
         assertThat(earlier.overshootProfile()).isNull();
         assertThat(earlier.withOvershootProfileIfUnknown(OvershootScheme.EXPONENTIAL).overshootProfile())

@@ -22,6 +22,7 @@ import org.convgrid.engine.evolution.TrackSink;
 import org.convgrid.engine.physics.PhysicsBundles;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.structure.BuoyancyTravelTime;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.engine.zams.ZamsBuilder;
@@ -298,7 +299,8 @@ public final class GridRequests implements ChunkSolver {
             double mixedTop = request.physics().overshootScheme().model(request.physics().overshoot())
                     .mixedCoreTop(m.profile()) / request.mass();
             return new Answer(new ModelOutcome.Solved(request, m.global(), m.convection(),
-                    startIterations + iterationsUpTo(result, aged.age()), stage, mixedTop), m);
+                    startIterations + iterationsUpTo(result, aged.age()), stage, mixedTop, BuoyancyTravelTime.of(m)),
+                    m);
         }
         String detail = aged.detail();
         if (aged.status() == ModelStatus.PAST_MAIN_SEQUENCE && Double.isFinite(result.exhaustionAge())) {

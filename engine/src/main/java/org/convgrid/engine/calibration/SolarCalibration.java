@@ -2,11 +2,13 @@ package org.convgrid.engine.calibration;
 
 import java.util.function.Consumer;
 
+import org.convgrid.engine.request.LifeStage;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
 import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.structure.BuoyancyTravelTime;
 import org.convgrid.engine.units.Constants;
 
 /**
@@ -144,7 +146,8 @@ public final class SolarCalibration {
         ModelRequest request = new ModelRequest(CalibratedSun.MODEL_ID, Constants.M_SUN, t.metals(), t.helium(),
                 settings.age(), SolarTrack.options(t.mixingLength(), settings));
         var m = t.model();
-        ModelOutcome outcome = new ModelOutcome.Solved(request, m.global(), m.convection(), t.iterationsToAge());
+        ModelOutcome outcome = new ModelOutcome.Solved(request, m.global(), m.convection(), t.iterationsToAge(),
+                LifeStage.MAIN_SEQUENCE_UNTRACED, Double.NaN, BuoyancyTravelTime.of(m));
         Composition envelope = EnvelopeComposition.of(m);
         return new CalibratedSun(t.mixingLength(), t.helium(), t.metals(), target,
                 settings.age(), outcome, m, t.radiusResidual(), t.luminosityResidual(), t.zeroAgeLuminosity(),

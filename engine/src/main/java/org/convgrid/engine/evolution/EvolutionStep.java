@@ -20,14 +20,25 @@ import org.convgrid.engine.convection.ConvectiveZone;
  *                     {@link MainSequenceEvolver#BURNING_THRESHOLD} times its maximum
  * @param burningOuter m/M of the outermost such point
  * @param iterations Newton iterations of the structure relaxation of this step (failed tries included)
+ * @param buoyancyTravelTime the g-mode period scale Pi_0 of the step's model, s ({@link
+ *     org.convgrid.engine.structure.BuoyancyTravelTime#of}); NaN without a g-mode cavity (fully convective)
  */
 public record EvolutionStep(double age, double timeStep, double luminosity, double radius,
                             double effectiveTemperature, double centralTemperature, double centralDensity,
                             double centralHydrogen, List<ConvectiveZone> convectiveZones, double burningInner,
-                            double burningOuter, int iterations) {
+                            double burningOuter, int iterations, double buoyancyTravelTime) {
 
     public EvolutionStep {
         convectiveZones = List.copyOf(convectiveZones);
+    }
+
+    /** A step whose Pi_0 is not known (made without its model). */
+    public EvolutionStep(double age, double timeStep, double luminosity, double radius,
+                         double effectiveTemperature, double centralTemperature, double centralDensity,
+                         double centralHydrogen, List<ConvectiveZone> convectiveZones, double burningInner,
+                         double burningOuter, int iterations) {
+        this(age, timeStep, luminosity, radius, effectiveTemperature, centralTemperature, centralDensity,
+                centralHydrogen, convectiveZones, burningInner, burningOuter, iterations, Double.NaN);
     }
 
     /** m/M at the top of the convective core, 0 when the centre is radiative. */

@@ -12,6 +12,7 @@ import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.overshoot.Overshoot;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.structure.BuoyancyTravelTime;
 import org.convgrid.engine.structure.HenyeySolver;
 import org.convgrid.engine.structure.MassMesh;
 import org.convgrid.engine.structure.MeshPlanner;
@@ -1069,7 +1070,10 @@ public final class MainSequenceEvolver {
         return out;
     }
 
-    /** The track row of a model. */
+    /**
+     * The track row of a model. Its Pi_0 reads the equation-of-state values the solve left on the model: ~20 us per
+     * step once compiled (1.5 Msun at 1 Gyr); 0.24 % of the demo grid's CPU samples (JFR, 9 of 3687).
+     */
     private static EvolutionStep summary(StellarModel model, double age, double dt, int iterations) {
         StellarProfile p = model.profile();
         double top = 0.0;
@@ -1090,6 +1094,6 @@ public final class MainSequenceEvolver {
         var g = model.global();
         return new EvolutionStep(age, dt, g.luminosity(), g.radius(), g.effectiveTemperature(),
                 g.centralTemperature(), g.centralDensity(), g.centralHydrogen(), model.convection().zones(), inner,
-                outer, iterations);
+                outer, iterations, BuoyancyTravelTime.of(model));
     }
 }

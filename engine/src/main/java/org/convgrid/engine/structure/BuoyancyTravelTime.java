@@ -36,13 +36,32 @@ public final class BuoyancyTravelTime {
     /**
      * Pi_0 of a solved model, s; NaN for a fully convective star, which has no g-mode cavity. Its N^2 is nowhere
      * positive today (0.2 Msun, Z = 0.02, 1 Gyr: none of 500 points), but a stable point or two in its atmosphere
-     * would otherwise give a Pi_0 of no meaning, so the structure class decides.
+     * would otherwise give a Pi_0 of no meaning, so the structure class decides. NaN too when the integral cannot be
+     * formed on the model's mesh (radii not all above 0 and increasing; no solved model of ours has been seen so):
+     * every step of an evolution asks for it, and a track or catalogue row must not be lost to a number it reports.
      */
     public static double of(StellarModel model) {
         if (model.convection().structureClass() == StructureClass.FULLY_CONVECTIVE) {
             return Double.NaN;
         }
-        return of(model.profile().radii(), BuoyancyFrequency.squaredOf(model));
+        double[] radius = model.profile().radii();
+        if (!increasingFromAboveZero(radius)) {
+            return Double.NaN;
+        }
+        return of(radius, BuoyancyFrequency.squaredOf(model));
+    }
+
+    /** Whether the radii are all above 0 and strictly increasing, as {@link #cavityIntegral} needs them. */
+    private static boolean increasingFromAboveZero(double[] radius) {
+        if (radius.length == 0 || !(radius[0] > 0.0)) {
+            return false;
+        }
+        for (int k = 1; k < radius.length; k++) {
+            if (!(radius[k] > radius[k - 1])) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /**

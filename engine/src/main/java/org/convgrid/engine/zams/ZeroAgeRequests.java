@@ -1,9 +1,11 @@
 package org.convgrid.engine.zams;
 
+import org.convgrid.engine.request.LifeStage;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.state.Composition;
+import org.convgrid.engine.structure.BuoyancyTravelTime;
 
 /**
  * How a grid request becomes a zero-age model and how a zero-age result becomes a catalogue outcome; shared by
@@ -31,7 +33,8 @@ public final class ZeroAgeRequests {
     public static ModelOutcome outcome(ModelRequest request, ZamsResult result) {
         if (result.converged()) {
             var model = result.model().model();
-            return new ModelOutcome.Solved(request, model.global(), model.convection(), result.iterations());
+            return new ModelOutcome.Solved(request, model.global(), model.convection(), result.iterations(),
+                    LifeStage.MAIN_SEQUENCE_UNTRACED, Double.NaN, BuoyancyTravelTime.of(model));
         }
         return new ModelOutcome.Failed(request, ModelStatus.NOT_CONVERGED, result.failure().toString(),
                 result.iterations());

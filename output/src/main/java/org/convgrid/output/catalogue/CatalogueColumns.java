@@ -8,8 +8,9 @@ import org.convgrid.output.IronAbundance;
 /**
  * The columns of {@code catalogue.ecsv} (catalogue v2), in the order the README's "Catalogue" section fixes; the only
  * place their names, units, types and descriptions are spelled. {@link #FIXED} are required when reading;
- * {@link #EXTENSIONS} follow them. One description depends on the run: {@link #FE_H_DEX}'s names the Sun its
- * [Fe/H] is measured against ({@link #described}).
+ * {@link #EXTENSIONS} follow them, new ones only ever at the end (a catalogue of an earlier version holds a leading part
+ * of them). One description depends on the run: {@link #FE_H_DEX}'s names the Sun its [Fe/H] is measured against
+ * ({@link #described}).
  */
 public final class CatalogueColumns {
 
@@ -52,6 +53,13 @@ public final class CatalogueColumns {
     public static final String OVERSHOOT_PROFILE = "overshoot_profile";
     /** Extension: spectroscopic [Fe/H] of z_init and y_init ({@link IronAbundance}); empty when Z = 0. */
     public static final String FE_H_DEX = "fe_h_dex";
+    /**
+     * Extension: the buoyancy travel time Pi_0 = 2 pi^2 / (integral of N dr / r over N^2 &gt; 0), s; the name the
+     * profiles' meta gives it. Empty without a g-mode cavity.
+     */
+    public static final String BUOYANCY_PERIOD_PI0_S = "buoyancy_period_pi0_s";
+    /** Extension: the dipole g-mode period spacing Delta Pi_1 = Pi_0 / sqrt(2), s; the profiles' meta name. */
+    public static final String PERIOD_SPACING_L1_S = "period_spacing_l1_s";
 
     private static final String REAL = "float64";
     private static final String TEXT = "string";
@@ -108,6 +116,17 @@ public final class CatalogueColumns {
                             + " from 2 solMass up, none up to 1.2 solMass, linear between) or decaying (f, the"
                             + " e-folding length of the diffusive profile); empty in rows written before the column"));
 
+    /** The columns after {@link #FE_H_DEX}, in order. */
+    private static final List<EcsvColumn> AFTER_FE_H = List.of(
+            new EcsvColumn(BUOYANCY_PERIOD_PI0_S, "s", REAL,
+                    "buoyancy travel time Pi_0 = 2 pi^2 / (integral of N dr / r where N^2 > 0), the period scale of"
+                            + " high-order g modes, in seconds, from the model's 500 points (4-6 % from how the"
+                            + " composition term is differenced); empty when the star has no g-mode cavity (fully"
+                            + " convective), when status is not ok, or in rows written before the column"),
+            new EcsvColumn(PERIOD_SPACING_L1_S, "s", REAL,
+                    "asymptotic period spacing of dipole g modes Delta Pi_1 = Pi_0 / sqrt(2), in seconds, rotation"
+                            + " ignored; empty when buoyancy_period_pi0_s is"));
+
     /** Every column convgrid writes for a run whose [Fe/H] is measured against the default Sun. */
     public static final List<EcsvColumn> DESCRIBED = described(IronAbundance.DEFAULT);
 
@@ -126,7 +145,8 @@ public final class CatalogueColumns {
 
     /** Every column convgrid writes, in order, with its unit, type and description, [Fe/H] against {@code iron}. */
     public static List<EcsvColumn> described(IronAbundance iron) {
-        return Stream.concat(BEFORE_FE_H.stream(),
-                Stream.of(new EcsvColumn(FE_H_DEX, "dex", REAL, iron.columnDescription()))).toList();
+        return Stream.of(BEFORE_FE_H.stream(),
+                Stream.of(new EcsvColumn(FE_H_DEX, "dex", REAL, iron.columnDescription())),
+                AFTER_FE_H.stream()).flatMap(columns -> columns).toList();
     }
 }

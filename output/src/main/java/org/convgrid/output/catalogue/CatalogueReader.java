@@ -124,7 +124,8 @@ public final class CatalogueReader {
                     criterion.isEmpty() ? null : StabilityCriterion.valueOf(criterion.toUpperCase(Locale.ROOT)),
                     Double.isNaN(opacity) ? 1.0 : opacity, c.number(CatalogueColumns.TURNOVER_TIME_GLOBAL_DAYS),
                     c.number(CatalogueColumns.CORE_MIXED_MASS_FRAC),
-                    OvershootProfileCell.parse(c.text(CatalogueColumns.OVERSHOOT_PROFILE)));
+                    OvershootProfileCell.parse(c.text(CatalogueColumns.OVERSHOOT_PROFILE)),
+                    c.number(CatalogueColumns.BUOYANCY_PERIOD_PI0_S), c.number(CatalogueColumns.PERIOD_SPACING_L1_S));
         } catch (IllegalArgumentException e) {
             throw new OutputFormatException("catalogue row " + r.getRecordNumber() + " (line "
                     + (r.getRecordNumber() + 1) + "), column '" + c.current + "': " + e.getMessage(), e);

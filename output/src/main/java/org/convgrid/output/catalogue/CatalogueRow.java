@@ -47,6 +47,10 @@ import org.convgrid.output.Span;
  *     there is no core, or for rows read from a catalogue written before the column
  * @param overshootProfile which profile {@code overshootHp} is the length of; null for rows read from a catalogue
  *     written before the column
+ * @param buoyancyPeriodPi0S the g-mode period scale Pi_0, s; NaN without a g-mode cavity, when not ok, or for rows read
+ *     from a catalogue written before the column
+ * @param periodSpacingL1S the dipole period spacing Delta Pi_1 = Pi_0 / sqrt(2), s, NaN when Pi_0 is; kept beside
+ *     Pi_0 rather than derived from it, so that a row read and written again keeps both cells' digits
  */
 public record CatalogueRow(String modelId, double massMsun, double zInit, double yInit, double mixingLength,
                            double overshootHp, double ageGyr, String phase, ModelStatus status, String statusDetail,
@@ -56,7 +60,8 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
                            double envCzBaseMassFrac, double envCzBaseRadiusFrac, double envCzMassMsun,
                            double turnoverTimeDays, List<CatalogueZone> zones, int solverIterations,
                            StabilityCriterion criterion, double opacityScale, double turnoverTimeGlobalDays,
-                           double coreMixedMassFrac, OvershootScheme overshootProfile) {
+                           double coreMixedMassFrac, OvershootScheme overshootProfile, double buoyancyPeriodPi0S,
+                           double periodSpacingL1S) {
 
     /** The {@code phase} of a model on the main sequence. */
     public static final String MAIN_SEQUENCE = "main_sequence";
@@ -69,6 +74,23 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
         statusDetail = statusDetail == null ? "" : statusDetail;
         phase = phase == null ? "" : phase;
         zones = List.copyOf(zones);
+    }
+
+    /** A row without the g-mode period scale (as a catalogue written before its columns gives it). */
+    public CatalogueRow(String modelId, double massMsun, double zInit, double yInit, double mixingLength,
+                        double overshootHp, double ageGyr, String phase, ModelStatus status, String statusDetail,
+                        double luminosityLsun, double radiusRsun, double teffK, double logGCgs,
+                        double centralTempK, double centralDensityCgs, double centralHFrac, double surfaceLiRel,
+                        StructureClass structureClass, double coreCzMassFrac, double coreCzRadiusFrac,
+                        double envCzBaseMassFrac, double envCzBaseRadiusFrac, double envCzMassMsun,
+                        double turnoverTimeDays, List<CatalogueZone> zones, int solverIterations,
+                        StabilityCriterion criterion, double opacityScale, double turnoverTimeGlobalDays,
+                        double coreMixedMassFrac, OvershootScheme overshootProfile) {
+        this(modelId, massMsun, zInit, yInit, mixingLength, overshootHp, ageGyr, phase, status, statusDetail,
+                luminosityLsun, radiusRsun, teffK, logGCgs, centralTempK, centralDensityCgs, centralHFrac,
+                surfaceLiRel, structureClass, coreCzMassFrac, coreCzRadiusFrac, envCzBaseMassFrac,
+                envCzBaseRadiusFrac, envCzMassMsun, turnoverTimeDays, zones, solverIterations, criterion,
+                opacityScale, turnoverTimeGlobalDays, coreMixedMassFrac, overshootProfile, Double.NaN, Double.NaN);
     }
 
     /**
@@ -106,7 +128,8 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
                 statusDetail, luminosityLsun, radiusRsun, teffK, logGCgs, centralTempK, centralDensityCgs,
                 centralHFrac, surfaceLiRel, structureClass, coreCzMassFrac, coreCzRadiusFrac, envCzBaseMassFrac,
                 envCzBaseRadiusFrac, envCzMassMsun, turnoverTimeDays, found, solverIterations, criterion,
-                opacityScale, turnoverTimeGlobalDays, coreMixedMassFrac, overshootProfile);
+                opacityScale, turnoverTimeGlobalDays, coreMixedMassFrac, overshootProfile, buoyancyPeriodPi0S,
+                periodSpacingL1S);
     }
 
     /**
@@ -118,6 +141,7 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
                 overshootHp, ageGyr, phase, status, statusDetail, luminosityLsun, radiusRsun, teffK, logGCgs,
                 centralTempK, centralDensityCgs, centralHFrac, surfaceLiRel, structureClass, coreCzMassFrac,
                 coreCzRadiusFrac, envCzBaseMassFrac, envCzBaseRadiusFrac, envCzMassMsun, turnoverTimeDays, zones,
-                solverIterations, criterion, opacityScale, turnoverTimeGlobalDays, coreMixedMassFrac, profile);
+                solverIterations, criterion, opacityScale, turnoverTimeGlobalDays, coreMixedMassFrac, profile,
+                buoyancyPeriodPi0S, periodSpacingL1S);
     }
 }

@@ -111,6 +111,8 @@ public final class CatalogueWriter implements Flushable, Closeable {
         cells.add(OvershootProfileCell.format(r.overshootProfile()));
         // derived from the row's own z_init and y_init, so a row written again (resume, merge) keeps its cell
         cells.add(iron.cell(r.zInit(), r.yInit()));
+        cells.add(CsvNumbers.format(r.buoyancyPeriodPi0S()));
+        cells.add(CsvNumbers.format(r.periodSpacingL1S()));
         return cells;
     }
 

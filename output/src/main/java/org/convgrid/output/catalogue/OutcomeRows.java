@@ -10,6 +10,7 @@ import org.convgrid.engine.request.GlobalProperties;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.structure.BuoyancyTravelTime;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.catalogue.CatalogueZone.ZoneKind;
@@ -19,7 +20,8 @@ import org.convgrid.output.catalogue.CatalogueZone.ZoneKind;
  * M_sun, ages over the Julian gigayear, times over the day, log g = log10(g). Whatever does not apply is NaN (an
  * empty cell): every column of a failed outcome, the core columns of a star without a convective core (a fully
  * convective star included: its one zone is the whole star), the envelope columns of a star without a convective
- * envelope. A fully convective star's envelope base is the centre (0) and its envelope mass the whole star.
+ * envelope, the g-mode period scale of a star without a g-mode cavity. A fully convective star's envelope base is
+ * the centre (0) and its envelope mass the whole star.
  */
 public final class OutcomeRows {
 
@@ -37,6 +39,8 @@ public final class OutcomeRows {
         boolean envelope = kind == StructureClass.CONV_ENVELOPE || kind == StructureClass.CONV_CORE_AND_ENVELOPE
                 || kind == StructureClass.FULLY_CONVECTIVE;
         ConvectiveZone innermost = c == null || c.zones().isEmpty() ? null : c.zones().get(0);
+        // the very double star prints and the profile's meta carries: the same function of the same model
+        double pi0 = outcome instanceof ModelOutcome.Solved s ? s.buoyancyTravelTime() : nan;
         return new CatalogueRow(request.modelId(), request.mass() / Constants.M_SUN, request.initialMetals(),
                 request.initialHelium(), request.physics().mixingLength(), request.physics().overshoot(),
                 ageGyr(request.age()), phase(outcome), outcome.status(), outcome.statusDetail(),
@@ -60,7 +64,9 @@ public final class OutcomeRows {
                 request.physics().opacityScale(),
                 envelope ? c.turnoverTimeGlobal() / Constants.DAY : nan,
                 core ? mixedCoreTop(outcome, clamp(innermost.outerMassFraction())) : nan,
-                request.physics().overshootScheme());
+                request.physics().overshootScheme(),
+                pi0,
+                Double.isNaN(pi0) ? nan : BuoyancyTravelTime.periodSpacing(pi0, 1));
     }
 
     /** The overshoot's mixed edge above the core, never below the core's own top. */

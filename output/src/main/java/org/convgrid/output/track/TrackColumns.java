@@ -39,11 +39,18 @@ public final class TrackColumns {
     public static final String NUCLEAR_FRACTION = "nuclear_lum_frac";
     public static final String TIME_STEP = "time_step_yr";
     public static final String SOLVER_ITERATIONS = "solver_iterations";
+    /**
+     * The step's buoyancy travel time Pi_0, s, as the catalogue's column of the same name; empty without a g-mode
+     * cavity and in track files written before the column.
+     */
+    public static final String BUOYANCY_PERIOD_PI0 = "buoyancy_period_pi0_s";
+    /** The step's dipole g-mode period spacing Delta Pi_1 = Pi_0 / sqrt(2), s; empty when Pi_0 is. */
+    public static final String PERIOD_SPACING_L1 = "period_spacing_l1_s";
 
-    /** Every column of a track file, in the order the writer writes them. */
+    /** Every column of a track file, in the order the writer writes them; new ones only ever at the end. */
     public static final List<String> ALL = List.of(AGE_GYR, PHASE, LUMINOSITY, RADIUS, TEFF, LOG_G, CENTRAL_TEMP,
             CENTRAL_DENSITY, CENTRAL_H, SURFACE_LI, CENTRAL_CZ_TOP, ENV_CZ_BASE, CONV_ZONE_COUNT, BURNING_INNER,
-            BURNING_OUTER, NUCLEAR_FRACTION, TIME_STEP, SOLVER_ITERATIONS);
+            BURNING_OUTER, NUCLEAR_FRACTION, TIME_STEP, SOLVER_ITERATIONS, BUOYANCY_PERIOD_PI0, PERIOD_SPACING_L1);
 
     /** Row of the step in its track file, 0 = the first step. */
     public static final String STEP_INDEX = "step_index";

@@ -8,6 +8,7 @@ import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.convection.ConvectiveZoneFinder;
 import org.convgrid.engine.evolution.EvolutionStep;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
+import org.convgrid.engine.structure.BuoyancyTravelTime;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.output.CsvNumbers;
 
@@ -23,7 +24,8 @@ import org.convgrid.output.CsvNumbers;
  * {@link ConvectiveZoneFinder#DEFAULT_SURFACE_SKIN_MASS_FRACTION} of the surface and it holds at least
  * {@link ConvectiveZoneFinder#DEFAULT_MIN_ENVELOPE_MASS_FRACTION} of the mass; one zone from the centre that is
  * also the envelope makes the star fully convective (central top 1, envelope base 0). The central zone is any zone
- * holding the centre, however small (the catalogue's core also needs the run's core threshold). Numbers in the
+ * holding the centre, however small (the catalogue's core also needs the run's core threshold). The g-mode period
+ * scale (Pi_0 and Delta Pi_1) is the catalogue's, of each step's model. Numbers in the
  * {@link CsvNumbers} form, so the same track always gives the same bytes.
  */
 public final class TrackWriter {
@@ -47,6 +49,7 @@ public final class TrackWriter {
             boolean fullyConvective = central != null && central == surface;
             boolean burns = !Double.isNaN(s.burningInner());
             double burnLo = burns ? clamp(s.burningInner()) : Double.NaN;
+            double pi0 = s.buoyancyTravelTime();
             out.append(CsvNumbers.format(s.age() / Constants.GYR)).append(',')
                     .append(p.phase().label()).append(',')
                     .append(CsvNumbers.format(s.luminosity() / Constants.L_SUN)).append(',')
@@ -69,7 +72,10 @@ public final class TrackWriter {
                     .append(',')
                     .append(CsvNumbers.format(p.nuclearFraction())).append(',')
                     .append(CsvNumbers.format(s.timeStep() / Constants.YEAR)).append(',')
-                    .append(Integer.toString(s.iterations())).append('\n');
+                    .append(Integer.toString(s.iterations())).append(',')
+                    .append(CsvNumbers.format(pi0)).append(',')
+                    .append(CsvNumbers.format(Double.isNaN(pi0) ? Double.NaN
+                            : BuoyancyTravelTime.periodSpacing(pi0, 1))).append('\n');
         }
     }
 

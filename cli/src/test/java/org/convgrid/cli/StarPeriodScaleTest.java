@@ -1,0 +1,57 @@
+package org.convgrid.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.convgrid.output.CsvNumbers;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.snakeyaml.engine.v2.api.Load;
+import org.snakeyaml.engine.v2.api.LoadSettings;
+
+/**
+ * {@code star} gives one model's g-mode period scale three ways: its table, its catalogue row ({@code --format csv})
+ * and its profile's meta ({@code --profile}). All three are the same doubles (the row and the table to their own
+ * digits), for a gamma Dor-like 1.5 Msun star at 1 Gyr (README: Pi_0 4195 s, Delta Pi_1 2967 s).
+ */
+class StarPeriodScaleTest {
+
+    @TempDir
+    Path dir;
+
+    private CliHarness.Execution run(String... args) {
+        return CliHarness.real(dir).execute(args);
+    }
+
+    @Test
+    void theTableTheCatalogueRowAndTheProfileMetaAgree() throws Exception {
+        CliHarness.Execution csv = run("star", "--mass", "1.5", "--z", "0.02", "--age-gyr", "1", "--format", "csv",
+                "--profile", "p.csv");
+        assertThat(csv.code()).as(csv.err()).isZero();
+        List<String> lines = csv.out().lines().filter(l -> !l.startsWith("#")).toList();
+        List<String> header = List.of(lines.get(0).split(","));
+        assertThat(header.subList(header.size() - 2, header.size()))
+                .containsExactly("buoyancy_period_pi0_s", "period_spacing_l1_s");
+        String[] row = lines.get(1).split(",", -1);
+
+        String yaml = String.join("\n", Files.readString(dir.resolve("p.csv")).lines()
+                .takeWhile(l -> l.startsWith("#")).skip(2).map(l -> l.substring(2)).toList());
+        @SuppressWarnings("unchecked")
+        Map<String, Object> meta = (Map<String, Object>) ((Map<String, Object>) new Load(LoadSettings.builder().build())
+                .loadFromString(yaml)).get("meta");
+        double pi0 = (Double) meta.get("buoyancy_period_pi0_s");
+        double spacing = (Double) meta.get("period_spacing_l1_s");
+        assertThat(row[row.length - 2]).isEqualTo(CsvNumbers.format(pi0));
+        assertThat(row[row.length - 1]).isEqualTo(CsvNumbers.format(spacing));
+        assertThat(pi0).isBetween(4150.0, 4250.0);
+
+        CliHarness.Execution table = run("star", "--mass", "1.5", "--z", "0.02", "--age-gyr", "1");
+        assertThat(table.code()).as(table.err()).isZero();
+        assertThat(table.out()).contains(String.format(Locale.ROOT, "%.6g", pi0))
+                .contains(String.format(Locale.ROOT, "%.6g", spacing));
+    }
+}
