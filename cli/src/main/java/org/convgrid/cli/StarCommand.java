@@ -178,7 +178,10 @@ final class StarCommand implements Callable<Integer> {
                     + MessageNumbers.format(iron().solarMetalsToHydrogen()) + ": Z = " + MessageNumbers.format(metals)
                     + ", Y = " + MessageNumbers.format(y));
         }
-        TestedRange.print(TestedRange.warnings(massMsun, metals, y, age), main.err());
+        // given as [Fe/H], the warning says the [Fe/H] too; the helium law is the default one unless --y fixes Y
+        TestedRange.print(metalsGiven.ironDex == null ? TestedRange.warnings(massMsun, metals, y, age)
+                : TestedRange.warnings(massMsun, new MetallicityPoint(metals, y, metalsGiven.ironDex, iron(),
+                        helium == null ? HeliumLaw.DEFAULT : null), age), main.err());
         TestedRange.print(OvershootAdvice.warnings(massMsun, age, options), main.err());
         String id = String.format(java.util.Locale.ROOT, "star-m%.4f-z%.5f", massMsun, metals);
         ModelRequest request = new ModelRequest(id, massMsun * Constants.M_SUN, metals, y, age, options);

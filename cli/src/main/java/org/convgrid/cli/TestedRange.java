@@ -10,6 +10,7 @@ import org.convgrid.engine.request.Age;
 import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.grids.GridSpec;
+import org.convgrid.grids.MetallicityPoint;
 
 /**
  * The masses, metallicities, helium fractions and ages convgrid's models are tested in (README, "Good for / not for":
@@ -48,19 +49,48 @@ final class TestedRange {
     private TestedRange() {
     }
 
-    /** The warnings for a grid: its masses, its Z, its Y and, when they count from birth, its ages. */
+    /** The warnings for a grid: its masses, its Z (or [Fe/H]), its Y and, when they count from birth, its ages. */
     static List<String> warnings(GridSpec grid) {
         List<Double> birthAgesMyr = grid.ages().origin() == AgeOrigin.BIRTH && !grid.ages().fractions()
                 ? grid.ages().values().stream().map(gyr -> gyr * MYR_PER_GYR).toList() : List.of();
-        return warnings(grid.massesMsun(), grid.metallicities().stream().map(p -> p.z()).toList(),
-                grid.metallicities().stream().map(p -> p.y()).toList(), birthAgesMyr);
+        return warnings(grid.massesMsun(), grid.metallicities(), birthAgesMyr);
     }
 
-    /** The warnings for one star; only an age from birth can be too young. */
+    /** The warnings for one star given by Z; only an age from birth can be too young. */
     static List<String> warnings(double massMsun, double z, double y, Age age) {
-        List<Double> birthAgesMyr = age instanceof Age.SinceBirth since
-                ? List.of(since.seconds() / Constants.GYR * MYR_PER_GYR) : List.of();
-        return warnings(List.of(massMsun), List.of(z), List.of(y), birthAgesMyr);
+        return warnings(List.of(massMsun), List.of(z), List.of(y), birthAgesMyr(age));
+    }
+
+    /** The warnings for one star whose composition {@code point} may have been given as [Fe/H]. */
+    static List<String> warnings(double massMsun, MetallicityPoint point, Age age) {
+        return warnings(List.of(massMsun), List.of(point), birthAgesMyr(age));
+    }
+
+    private static List<Double> birthAgesMyr(Age age) {
+        return age instanceof Age.SinceBirth since ? List.of(since.seconds() / Constants.GYR * MYR_PER_GYR)
+                : List.of();
+    }
+
+    /**
+     * The warnings for compositions given as points: in Z, as {@link #warnings(List, List, List, List)} words them,
+     * unless every point was given as [Fe/H]; then the metallicity line speaks in [Fe/H] too.
+     */
+    static List<String> warnings(List<Double> massesMsun, List<MetallicityPoint> points, List<Double> birthAgesMyr) {
+        List<Double> zs = points.stream().map(MetallicityPoint::z).toList();
+        List<String> lines = warnings(massesMsun, zs, points.stream().map(MetallicityPoint::y).toList(),
+                birthAgesMyr);
+        if (points.isEmpty() || !points.stream().allMatch(MetallicityPoint::givenAsIron)) {
+            return lines;
+        }
+        List<MetallicityPoint> outside = points.stream().filter(p -> !testedMetals(p.z())).toList();
+        if (outside.isEmpty()) {
+            return lines;
+        }
+        String inZ = line(outside.stream().map(MetallicityPoint::z).toList(), "metallicity", "metallicities", "Z = ",
+                "", zWhere());
+        List<String> out = new ArrayList<>(lines);
+        out.set(lines.indexOf(inZ), ironLine(outside));
+        return out;
     }
 
     /**
@@ -79,10 +109,9 @@ final class TestedRange {
             lines.add(line(masses, "mass", "masses", "", " Msun", "outside the tested range "
                     + MessageNumbers.format(MIN_MASS_MSUN) + "-" + MessageNumbers.format(MAX_MASS_MSUN) + " Msun"));
         }
-        List<Double> metals = outside(zs, z -> z >= MIN_Z * (1 - EDGE_SLACK) && z <= MAX_Z * (1 + EDGE_SLACK));
+        List<Double> metals = outside(zs, TestedRange::testedMetals);
         if (!metals.isEmpty()) {
-            lines.add(line(metals, "metallicity", "metallicities", "Z = ", "", "outside the tested range Z = "
-                    + MessageNumbers.format(MIN_Z) + " to " + MessageNumbers.format(MAX_Z)));
+            lines.add(line(metals, "metallicity", "metallicities", "Z = ", "", zWhere()));
         }
         // a Y axis repeats a value for several Z (a helium law may too): each value named once
         List<Double> helium = outside(ys.stream().distinct().sorted().toList(),
@@ -98,6 +127,72 @@ final class TestedRange {
                     + "model)"));
         }
         return lines;
+    }
+
+    private static boolean testedMetals(double z) {
+        return z >= MIN_Z * (1 - EDGE_SLACK) && z <= MAX_Z * (1 + EDGE_SLACK);
+    }
+
+    private static String zWhere() {
+        return "outside the tested range Z = " + MessageNumbers.format(MIN_Z) + " to " + MessageNumbers.format(MAX_Z);
+    }
+
+    /**
+     * The metallicity line of compositions given as [Fe/H]: the [Fe/H] asked, the Z it gives, and the tested range's
+     * end(s) in Z and in this grid's [Fe/H] (its Sun and helium). A reviewer's fe_h_dex: [-2.5] was told only "Z =
+     * 5.832024e-5 lies outside the tested range Z = 1e-4 to 0.04", a Z nobody had typed, and had to work out which
+     * [Fe/H] the range begins at.
+     */
+    private static String ironLine(List<MetallicityPoint> outside) {
+        List<MetallicityPoint> below = outside.stream().filter(p -> p.z() < MIN_Z).toList();
+        List<MetallicityPoint> above = outside.stream().filter(p -> p.z() >= MIN_Z).toList();
+        List<Double> irons = outside.stream().map(MetallicityPoint::ironDex).toList();
+        List<Double> zs = outside.stream().map(MetallicityPoint::z).toList();
+        String what;
+        if (outside.size() == 1) {
+            what = "metallicity [Fe/H] = " + MessageNumbers.format(irons.get(0)) + " gives Z = " + derivedZ(zs.get(0));
+        } else if (outside.size() <= LISTED_VALUES) {
+            what = "metallicities [Fe/H] = " + irons.stream().map(MessageNumbers::format)
+                    .collect(Collectors.joining(", ")) + " give Z = "
+                    + zs.stream().map(TestedRange::derivedZ).collect(Collectors.joining(", "));
+        } else {
+            what = outside.size() + " metallicities, [Fe/H] = " + MessageNumbers.format(min(irons)) + " to "
+                    + MessageNumbers.format(max(irons)) + ", give Z = " + derivedZ(min(zs)) + " to " + derivedZ(max(zs));
+        }
+        // the ends in [Fe/H] under the helium of the point nearest each (the grid's law gives them all the same)
+        String lowEnd = below.isEmpty() ? "" : ironAtEdge(below.get(0), MIN_Z);
+        String highEnd = above.isEmpty() ? "" : ironAtEdge(above.get(above.size() - 1), MAX_Z);
+        String where;
+        if (above.isEmpty()) {
+            where = "below the tested Z = " + MessageNumbers.format(MIN_Z) + " ([Fe/H] = " + lowEnd + " here)";
+        } else if (below.isEmpty()) {
+            where = "above the tested Z = " + MessageNumbers.format(MAX_Z) + " ([Fe/H] = " + highEnd + " here)";
+        } else {
+            where = "outside the tested range Z = " + MessageNumbers.format(MIN_Z) + " to "
+                    + MessageNumbers.format(MAX_Z) + " ([Fe/H] = " + lowEnd + " to " + highEnd + " here)";
+        }
+        return "convgrid: warning: " + what + ", " + where + "; results there are untested";
+    }
+
+    /** A Z the tool derived from an [Fe/H]: four significant digits, enough to place it against the range. */
+    private static String derivedZ(double z) {
+        return MessageNumbers.format(z, 4);
+    }
+
+    /**
+     * The [Fe/H] of the tested range's end {@code edgeZ} in the grid of {@code point}: signed, to 0.01 dex, as the
+     * charts and the report write [Fe/H] ({@code -2.27}, {@code +0.40}).
+     */
+    private static String ironAtEdge(MetallicityPoint point, double edgeZ) {
+        return String.format(java.util.Locale.ROOT, "%+.2f", point.ironDexAt(edgeZ));
+    }
+
+    private static double min(List<Double> values) {
+        return values.stream().mapToDouble(Double::doubleValue).min().orElseThrow();
+    }
+
+    private static double max(List<Double> values) {
+        return values.stream().mapToDouble(Double::doubleValue).max().orElseThrow();
     }
 
     /** Prints the warnings on the error stream, each as one line. */

@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.stream.Stream;
 import org.convgrid.output.CsvNumbers;
+import org.convgrid.output.catalogue.CatalogueColumns;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.track.TrackColumns;
@@ -55,6 +56,14 @@ class EvolvedRunTest {
         assertThat(rows.get(2).ageGyr()).isEqualTo(5.0);
         assertThat(rows.get(5).statusDetail()).startsWith("core hydrogen exhausted");
         assertThat(rows.get(5).ageGyr()).isEqualTo(5.0);
+        // no model is solved past core-hydrogen exhaustion, so its iteration count is "not applicable": an empty
+        // cell, as the conventions ask, where 0 stood for "none"; the solved rows keep their counts
+        List<String> cells = Files.readAllLines(dir.resolve("one/catalogue.ecsv")).stream()
+                .filter(l -> !l.startsWith("#")).skip(1)
+                .map(l -> l.split(",", -1)[CatalogueColumns.HEADER.indexOf(CatalogueColumns.SOLVER_ITERATIONS)])
+                .toList();
+        assertThat(cells.subList(4, 6)).containsOnly("");
+        assertThat(cells.subList(0, 4)).allSatisfy(c -> assertThat(Integer.parseInt(c)).isPositive());
 
         Path sunTrack = dir.resolve("one/tracks/p0-z00-m000.csv");
         List<String> lines = Files.readAllLines(sunTrack);

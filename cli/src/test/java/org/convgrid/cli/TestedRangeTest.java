@@ -96,6 +96,40 @@ class TestedRangeTest {
     }
 
     @Test
+    void aGridGivenInIronSpeaksOfIronAndTheZItGives() throws Exception {
+        // a reviewer's fe_h_dex: [-2.5] was told "metallicity Z = 5.832024e-5 lies outside the tested range Z = 1e-4 to
+        // 0.04", a Z nobody typed; with the default Sun (Z/X 0.0245, Grevesse & Noels 1993) and helium law
+        // (0.2471 + 1.5 Z), Z = 1e-4 is [Fe/H] = log10(1e-4 / 0.75265 / 0.0245) = -2.27 and Z = 0.04 is +0.40
+        Path grid = CliHarness.writeGrid(work, "iron.yaml", """
+                mass: {values: [1.0]}
+                metallicity: {fe_h_dex: [-2.5, -1.0], helium: {primordial: 0.2471, enrichment: 1.5}}
+                age: {gyr: [0], origin: zams}
+                """);
+        CliHarness.Execution check = CliHarness.in(work, FakeChunkSolver.fast()).execute("check", grid.toString());
+        assertThat(check.code()).as(check.err()).isZero();
+        assertThat(check.err().lines().filter(l -> l.startsWith("convgrid: warning: ")).toList()).containsExactly(
+                "convgrid: warning: metallicity [Fe/H] = -2.5 gives Z = 5.832e-5, below the tested Z = 1e-4 "
+                        + "([Fe/H] = -2.27 here); results there are untested");
+
+        CliHarness.Execution star = CliHarness.in(work, FakeChunkSolver.fast())
+                .execute("star", "--mass", "1", "--fe-h-dex", "0.5", "--format", "csv");
+        assertThat(star.code()).as(star.err()).isZero();
+        assertThat(star.err()).contains("convgrid: warning: metallicity [Fe/H] = 0.5 gives Z = 0.04887, above the "
+                + "tested Z = 0.04 ([Fe/H] = +0.40 here); results there are untested");
+
+        // both ends at once, under another Sun: each end in that Sun's [Fe/H]
+        Path both = CliHarness.writeGrid(work, "both.yaml", """
+                mass: {values: [1.0]}
+                metallicity: {fe_h_dex: [-3, 0.6], solar_z_over_x: 0.0181, helium: {primordial: 0.2471, enrichment: 1.5}}
+                age: {gyr: [0], origin: zams}
+                """);
+        CliHarness.Execution check2 = CliHarness.in(work, FakeChunkSolver.fast()).execute("check", both.toString());
+        assertThat(check2.err().lines().filter(l -> l.startsWith("convgrid: warning: ")).toList()).singleElement()
+                .asString().startsWith("convgrid: warning: metallicities [Fe/H] = -3, 0.6 give Z = ")
+                .contains("outside the tested range Z = 1e-4 to 0.04 ([Fe/H] = -2.13 to +0.53 here)");
+    }
+
+    @Test
     void theEdgesAreInsideAndEveryValueIsListedOrSpanned() {
         assertThat(TestedRange.warnings(List.of(0.1, 10.000000000000002), List.of(1e-4, 0.04), List.of(0.2, 0.45),
                 List.of(0.1)))

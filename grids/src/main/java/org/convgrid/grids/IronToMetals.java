@@ -51,6 +51,11 @@ public record IronToMetals(double solarMetalsToHydrogen) {
                 + "), outside [0, " + MessageNumbers.format(MetallicityPoint.MAX_Z) + ")";
     }
 
+    /** The [Fe/H] of a composition of metal and helium mass fractions Z and Y: the inverse of the conversions here. */
+    public double ironDex(double metals, double helium) {
+        return Math.log10(metals / (1.0 - helium - metals) / solarMetalsToHydrogen);
+    }
+
     /** Z for [Fe/H] at the helium mass fraction {@code helium}. */
     public double metals(double ironDex, double helium) {
         double ratio = metalsToHydrogen(ironDex);

@@ -9,8 +9,11 @@ package org.convgrid.grids;
  * @param ironReference the Sun [Fe/H] is measured against: the one {@code ironDex} was turned into Z with (the grid's
  *     {@code solar_z_over_x}), {@link IronToMetals#GN93} for a point given by Z; the run's tables give the [Fe/H] of
  *     every point against it
+ * @param heliumLaw the law that gave {@code y} (grid key {@code helium}), null when the grid listed Y itself; with
+ *     {@code ironReference} it turns any Z into the [Fe/H] of this grid's compositions (the tested range's ends, said
+ *     in [Fe/H] to a grid given in [Fe/H])
  */
-public record MetallicityPoint(double z, double y, double ironDex, IronToMetals ironReference) {
+public record MetallicityPoint(double z, double y, double ironDex, IronToMetals ironReference, HeliumLaw heliumLaw) {
 
     /** Largest metal mass fraction accepted (exclusive): beyond it no main-sequence opacity source applies. */
     public static final double MAX_Z = 0.1;
@@ -25,9 +28,23 @@ public record MetallicityPoint(double z, double y, double ironDex, IronToMetals 
         }
     }
 
+    /** A point whose Y was listed, not given by a law. */
+    public MetallicityPoint(double z, double y, double ironDex, IronToMetals ironReference) {
+        this(z, y, ironDex, ironReference, null);
+    }
+
     /** A point given by its Z. */
     public MetallicityPoint(double z, double y) {
         this(z, y, Double.NaN, IronToMetals.GN93);
+    }
+
+    /**
+     * The [Fe/H] a composition of metal mass fraction {@code otherZ} would have in this point's grid: against its
+     * Sun, with the helium its law gives that Z (or this point's own Y when the grid listed Y).
+     */
+    public double ironDexAt(double otherZ) {
+        double otherY = heliumLaw == null ? y : heliumLaw.helium(otherZ);
+        return ironReference.ironDex(otherZ, otherY);
     }
 
     /** Whether the grid file gave this point as [Fe/H]. */

@@ -237,8 +237,12 @@ public final class RunMaps {
         }
         for (PhysicsKey p : physics) {
             if (run.transitions().stream().anyMatch(t -> PhysicsKey.of(t.slice()).equals(p))) {
+                String x = TransitionTrendRenderer.inIron(run.transitions().stream()
+                        .filter(t -> PhysicsKey.of(t.slice()).equals(p)).map(t -> t.slice().zInit())
+                        .collect(java.util.stream.Collectors.toSet()), names) ? "[Fe/H]" : "Z";
                 entries.add(new MapEntry(TRENDS_FILES + "_" + p.fileStem() + ".png", MapEntry.TRENDS,
-                        "Transition masses against Z (the ages drawn slightly apart at each Z, youngest left): shaded boxes span the two models that bracket each value, "
+                        "Transition masses against " + x + " (the ages drawn slightly apart at each " + x
+                                + ", youngest left): shaded boxes span the two models that bracket each value, "
                                 + "dashed boxes the windows of small transient cores (a square alone: a window found "
                                 + "at one mass), " + p.describe() + ".",
                         () -> TransitionTrendRenderer.render(found(TransitionTrend.build(p, run.transitions(), names)),

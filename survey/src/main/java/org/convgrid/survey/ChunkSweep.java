@@ -121,7 +121,7 @@ final class ChunkSweep {
             String reason = e instanceof org.convgrid.engine.error.ConvgridException ? e.getMessage()
                     : "internal error in the solver; the models of this chunk were not computed";
             for (ModelRequest r : chunk) {
-                failed.add(new ModelOutcome.Failed(r, ModelStatus.FAILED, reason, 0));
+                failed.add(new ModelOutcome.Failed(r, ModelStatus.FAILED, reason, ModelOutcome.NO_MODEL_SOLVED));
             }
             return failed;
         }

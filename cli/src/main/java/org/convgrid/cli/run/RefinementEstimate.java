@@ -39,6 +39,19 @@ public record RefinementEstimate(long models, double seconds, String basis) {
     static final double BIRTH_MODEL_SECONDS = 0.3;
 
     /**
+     * The age, Gyr, at which a new model from birth costs twice {@link #BIRTH_MODEL_SECONDS}: its cost grows linearly
+     * with the age it must be evolved to, BIRTH_MODEL_SECONDS (1 + age / this). {@code check} had assumed 0.3 s at
+     * every age, 18 s for the 88 new models of a reviewer's 1-13 Gyr grid that took 67 s on one thread (0.76 s each,
+     * on a loaded machine: the process had 61 % of a core, 0.46 s of CPU each). Measured with
+     * {@code /usr/bin/time ./convgrid star --mass M --z 0.002 --age-gyr A} (2-core machine, load average 8, 2026-12-05),
+     * user CPU less the same star at age 0 (the JVM and the start model, 0.5 s): 0.5 Msun 1.9 s at 0.1 Gyr, 2.3 s at
+     * 1 Gyr, 2.5 s at 13 Gyr; 1 Msun 2.0, 1.7 and 3.0 s. Mean 1.93 s at 0.1 Gyr, 2.72 s at 13 Gyr: a factor 1.41 over
+     * 12.9 Gyr, 1 + age / 31 Gyr. The pre-main sequence costs most of a track; main-sequence steps add the rest.
+     * With it the reviewer's grid comes to 0.37 s per model, 32 s for 88 models on a quiet core.
+     */
+    static final double BIRTH_COST_DOUBLING_GYR = 31.0;
+
+    /**
      * One-thread seconds of one new zero-age model, computed on a mass line of its own. Measured (same machine, quiet,
      * 2026-12-04): the 200-model zero-age grid's 59 new models took 3 s on one thread in two runs out of two.
      */
@@ -64,7 +77,7 @@ public record RefinementEstimate(long models, double seconds, String basis) {
         }
         double perModel = modelSeconds(grid);
         return new RefinementEstimate(models, models * perModel / threads, "as many as the run in " + where
-                + " added, about " + MessageNumbers.format(perModel) + " s per model");
+                + " added, about " + MessageNumbers.format(RunTimeEstimate.twoDigits(perModel)) + " s per model");
     }
 
     /**
@@ -98,8 +111,13 @@ public record RefinementEstimate(long models, double seconds, String basis) {
         double perModel = modelSeconds(grid);
         return new RefinementEstimate(models, models * perModel / threads, MessageNumbers.format(SEARCHES_PER_SLICE)
                 + " searches per (Z, age, physics) slice, " + Counts.of(halvings, "halving") + " of a "
-                + MessageNumbers.format(RunTimeEstimate.twoDigits(medianGap)) + " Msun bracket each, about " + MessageNumbers.format(perModel)
-                + " s per model");
+                + MessageNumbers.format(RunTimeEstimate.twoDigits(medianGap)) + " Msun bracket each, about "
+                + MessageNumbers.format(RunTimeEstimate.twoDigits(perModel)) + " s per model");
+    }
+
+    /** One-thread seconds of one new model evolved from birth to {@code ageGyr}. */
+    static double birthModelSeconds(double ageGyr) {
+        return BIRTH_MODEL_SECONDS * (1.0 + ageGyr / BIRTH_COST_DOUBLING_GYR);
     }
 
     /** One new model's one-thread seconds for the grid's kind of ages. */
@@ -108,7 +126,10 @@ public record RefinementEstimate(long models, double seconds, String basis) {
             return ZERO_AGE_MODEL_SECONDS;
         }
         if (grid.ages().origin() == AgeOrigin.BIRTH) {
-            return BIRTH_MODEL_SECONDS;
+            // every age has as many slices, hence new models, as every other: their mean cost is the mean age's
+            double meanAgeGyr = grid.ages().fractions() ? 0.0
+                    : grid.ages().values().stream().mapToDouble(Double::doubleValue).average().orElse(0.0);
+            return birthModelSeconds(meanAgeGyr);
         }
         // a zero-age model, then its evolution (twice with main-sequence fractions, as in the sweep)
         double evolutions = grid.ages().fractions() ? 2.0 : 1.0;

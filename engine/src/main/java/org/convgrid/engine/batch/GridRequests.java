@@ -347,8 +347,9 @@ public final class GridRequests implements ChunkSolver {
         return r.converged() ? r.model().model() : null;
     }
 
+    /** A request answered without a model of its own: its iteration count is not applicable. */
     static ModelOutcome failed(ModelRequest r, ModelStatus status, String detail) {
-        return new ModelOutcome.Failed(r, status, detail, 0);
+        return new ModelOutcome.Failed(r, status, detail, ModelOutcome.NO_MODEL_SOLVED);
     }
 
     /** The age of a request known to be counted from the zero-age main sequence, s. */

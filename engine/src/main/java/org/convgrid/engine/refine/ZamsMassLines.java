@@ -28,7 +28,8 @@ public final class ZamsMassLines implements MassLineFactory {
         PhysicsSet set = physics.of(options, composition);
         ZamsTrack track = new ZamsTrack(new ZamsBuilder(set), composition);
         return request -> !request.age().isZeroAge()
-                ? new ModelOutcome.Failed(request, ModelStatus.FAILED, ZeroAgeRequests.NO_EVOLUTION, 0)
+                ? new ModelOutcome.Failed(request, ModelStatus.FAILED, ZeroAgeRequests.NO_EVOLUTION,
+                        ModelOutcome.NO_MODEL_SOLVED)
                 : ZeroAgeRequests.outcome(request, track.solve(request.mass()));
     }
 

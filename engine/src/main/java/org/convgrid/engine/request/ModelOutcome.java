@@ -18,7 +18,17 @@ public sealed interface ModelOutcome permits ModelOutcome.Solved, ModelOutcome.F
     /** Short reason when the status is not OK, empty otherwise. */
     String statusDetail();
 
-    /** Newton iterations spent on this model. */
+    /**
+     * What {@link #solverIterations()} gives when no model was solved for the request (an age past core-hydrogen
+     * exhaustion, a star without a zero-age model to evolve): the catalogue writes an empty cell, "not applicable",
+     * where it wrote 0, which read as a model found in no iterations at all.
+     */
+    int NO_MODEL_SOLVED = -1;
+
+    /**
+     * Newton iterations spent on this model, {@link #NO_MODEL_SOLVED} when no model was solved for it or the count
+     * was not kept (an evolution that stopped on an error).
+     */
     int solverIterations();
 
     /** The same outcome for another request (the same model under another id or a resolved age). */

@@ -51,6 +51,8 @@ class GridRequestsTest {
         // H-burning lifetime 1.1 Gyr at Z = 0.02), so 3 Gyr is past it
         assertThat(out.get(4).status()).isEqualTo(ModelStatus.PAST_MAIN_SEQUENCE);
         assertThat(out.get(4).statusDetail()).startsWith("core hydrogen exhausted").contains("Gyr");
+        assertThat(out.get(4).solverIterations()).as("no model solved past exhaustion")
+                .isEqualTo(ModelOutcome.NO_MODEL_SOLVED);
 
         // one track per mass, named by the star's first request, from age 0 in increasing age, ending at the
         // oldest requested age (1 Msun) or at exhaustion (2 Msun)

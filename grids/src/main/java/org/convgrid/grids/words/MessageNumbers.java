@@ -22,6 +22,18 @@ public final class MessageNumbers {
 
     /** The text of a value: plain from 1e-3 to 1e5 in size, else mantissa and exponent; no trailing zeros. */
     public static String format(double value) {
+        return format(value, DIGITS);
+    }
+
+    /**
+     * {@link #format(double)} to {@code digits} significant digits, for a value the user did not type but the tool
+     * derived (the Z an [Fe/H] gives), where seven digits would only hide the point.
+     */
+    public static String format(double value, int digits) {
+        return format(value, new MathContext(digits, RoundingMode.HALF_EVEN));
+    }
+
+    private static String format(double value, MathContext digits) {
         if (Double.isNaN(value)) {
             return "NaN";
         }
@@ -31,7 +43,7 @@ public final class MessageNumbers {
         if (value == 0.0) {
             return "0";
         }
-        BigDecimal rounded = new BigDecimal(value).round(DIGITS).stripTrailingZeros();
+        BigDecimal rounded = new BigDecimal(value).round(digits).stripTrailingZeros();
         double size = Math.abs(rounded.doubleValue());
         if (size >= PLAIN_MIN && size <= PLAIN_MAX) {
             return rounded.toPlainString();

@@ -94,7 +94,7 @@ final class MetallicityReader {
         for (int i = 0; i < values.size(); i++) {
             // a Z outside its range is already recorded; every other composition is still checked, all at once
             points.add(zs.get(i) == null ? null : point(zs.get(i), ys.get(i), byIron ? values.get(i) : Double.NaN,
-                    iron, yNodes.get(i), "y = " + NodeReader.written(yNodes.get(i)), reader));
+                    iron, null, yNodes.get(i), "y = " + NodeReader.written(yNodes.get(i)), reader));
         }
         if (points.contains(null)) {
             return null;
@@ -161,20 +161,20 @@ final class MetallicityReader {
             String how = "Y = " + MessageNumbers.format(law.primordial()) + " + "
                     + MessageNumbers.format(law.enrichment()) + " * " + MessageNumbers.format(zs.get(i)) + " = "
                     + MessageNumbers.format(y);
-            points.add(point(zs.get(i), y, irons == null ? Double.NaN : irons.get(i), iron, zNodes.get(i), how,
+            points.add(point(zs.get(i), y, irons == null ? Double.NaN : irons.get(i), iron, law, zNodes.get(i), how,
                     reader));
         }
         return points.contains(null) ? null : points;
     }
 
-    private static MetallicityPoint point(double z, double y, double ironDex, IronToMetals iron, Node at, String how,
-                                          NodeReader reader) {
+    private static MetallicityPoint point(double z, double y, double ironDex, IronToMetals iron, HeliumLaw law, Node at,
+                                          String how, NodeReader reader) {
         if (!(y >= 0.0 && y + z < 1.0)) {
             reader.problem(at, GridProblemKind.OUT_OF_RANGE,
                     how + " with Z = " + MessageNumbers.format(z) + " leaves no hydrogen (need Y >= 0 and Y + Z < 1)");
             return null;
         }
-        return new MetallicityPoint(z, y, ironDex, iron);
+        return new MetallicityPoint(z, y, ironDex, iron, law);
     }
 
     private static Double ranged(Node node, String what, Range range, NodeReader reader) {

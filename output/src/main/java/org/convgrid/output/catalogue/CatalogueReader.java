@@ -13,6 +13,7 @@ import java.util.Map;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
+import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.convection.StructureClass;
@@ -120,7 +121,7 @@ public final class CatalogueReader {
                     c.number(CatalogueColumns.ENV_CZ_BASE_RADIUS_FRAC), c.number(CatalogueColumns.ENV_CZ_MASS_MSUN),
                     c.number(CatalogueColumns.TURNOVER_TIME_DAYS),
                     List.of(),
-                    Integer.parseInt(c.text(CatalogueColumns.SOLVER_ITERATIONS)),
+                    solverIterations(c.text(CatalogueColumns.SOLVER_ITERATIONS), c.text(CatalogueColumns.STATUS)),
                     criterion.isEmpty() ? null : StabilityCriterion.valueOf(criterion.toUpperCase(Locale.ROOT)),
                     Double.isNaN(opacity) ? 1.0 : opacity, c.number(CatalogueColumns.TURNOVER_TIME_GLOBAL_DAYS),
                     c.number(CatalogueColumns.CORE_MIXED_MASS_FRAC),
@@ -130,6 +131,21 @@ public final class CatalogueReader {
             throw new OutputFormatException("catalogue row " + r.getRecordNumber() + " (line "
                     + (r.getRecordNumber() + 1) + "), column '" + c.current + "': " + e.getMessage(), e);
         }
+    }
+
+    /**
+     * The {@code solver_iterations} cell: empty when no model was solved for the row. Catalogues written before
+     * that rule gave {@code past_main_sequence} rows 0, for a model that was never solved (the engine stops at
+     * core-hydrogen exhaustion); read so, they are written again (resume, merge) with the empty cell. A 0 in any
+     * other row is kept as the count it may be.
+     */
+    private static int solverIterations(String cell, String status) {
+        if (cell.isBlank()) {
+            return ModelOutcome.NO_MODEL_SOLVED;
+        }
+        int count = Integer.parseInt(cell.strip());
+        return count == 0 && ModelStatus.PAST_MAIN_SEQUENCE.label().equals(status) ? ModelOutcome.NO_MODEL_SOLVED
+                : count;
     }
 
     /** Cell access by name that remembers the column being read, for error messages. */

@@ -39,7 +39,8 @@ import org.convgrid.output.Span;
  * @param envCzMassMsun convective envelope mass, solar masses, NaN when none
  * @param turnoverTimeDays envelope turnover time (local definition), days
  * @param zones every convective zone, centre outwards (empty when read from a catalogue without its zones file)
- * @param solverIterations Newton iterations
+ * @param solverIterations Newton iterations; {@link org.convgrid.engine.request.ModelOutcome#NO_MODEL_SOLVED} (an empty
+ *     cell) when no model was solved for the row
  * @param criterion stability criterion, null when the catalogue does not say
  * @param opacityScale opacity multiplier
  * @param turnoverTimeGlobalDays envelope turnover time (integral definition), days

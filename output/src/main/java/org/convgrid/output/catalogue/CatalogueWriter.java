@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Locale;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
+import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.OvershootProfileCell;
 import org.convgrid.output.EcsvHeader;
@@ -103,7 +104,7 @@ public final class CatalogueWriter implements Flushable, Closeable {
                 r.envCzMassMsun(), r.turnoverTimeDays()}) {
             cells.add(CsvNumbers.format(v));
         }
-        cells.add(Integer.toString(r.solverIterations()));
+        cells.add(r.solverIterations() == ModelOutcome.NO_MODEL_SOLVED ? "" : Integer.toString(r.solverIterations()));
         cells.add(r.criterion() == null ? "" : r.criterion().name().toLowerCase(Locale.ROOT));
         cells.add(CsvNumbers.format(r.opacityScale()));
         cells.add(CsvNumbers.format(r.turnoverTimeGlobalDays()));

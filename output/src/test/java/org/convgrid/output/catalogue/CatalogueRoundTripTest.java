@@ -117,6 +117,44 @@ class CatalogueRoundTripTest {
         assertThat(row.turnoverTimeDays()).isEqualTo(25.0);
     }
 
+    /** A request answered without a model: an age past core-hydrogen exhaustion. */
+    static ModelOutcome pastMainSequence() {
+        ModelRequest request = new ModelRequest("p0-z01-m011-a00", 2.0 * Constants.M_SUN, 0.014, 0.268,
+                3.0 * Constants.GYR, PhysicsOptions.DEFAULT);
+        return new ModelOutcome.Failed(request, ModelStatus.PAST_MAIN_SEQUENCE,
+                "core hydrogen exhausted (X_c < 1.0e-04) at 1.1 Gyr", ModelOutcome.NO_MODEL_SOLVED);
+    }
+
+    @Test
+    void aRowWithoutASolvedModelHasNoIterationCountAndOldZerosReadAsNone() throws IOException {
+        // the conventions: an empty cell means "not applicable", never 0 standing in for "none"; a model that was
+        // attempted and did not converge keeps the count it took
+        int column = CatalogueColumns.HEADER.indexOf(CatalogueColumns.SOLVER_ITERATIONS);
+        ModelOutcome attempted = new ModelOutcome.Failed(failed().request(), ModelStatus.NOT_CONVERGED,
+                "residual 3e-2 after 40 iterations", 40);
+        String text = write(List.of(OutcomeRows.toRow(pastMainSequence()), OutcomeRows.toRow(attempted)));
+        List<String> lines = text.lines().filter(l -> !l.startsWith("#")).skip(1).toList();
+        assertThat(lines.get(0).split(",", -1)[column]).isEmpty();
+        assertThat(lines.get(1).split(",", -1)[column]).isEqualTo("40");
+        List<CatalogueRow> rows = CatalogueReader.read(new StringReader(text));
+        assertThat(rows.get(0).solverIterations()).isEqualTo(ModelOutcome.NO_MODEL_SOLVED);
+        assertThat(rows.get(1).solverIterations()).isEqualTo(40);
+        assertThat(write(rows)).isEqualTo(text);
+        // a catalogue written before wrote 0 there: still read (resume, merge, transitions, plot), written again
+        // as the empty cell; a 0 in a row that is not past the main sequence stays the number it is
+        String old = text.replace(lines.get(0), withCell(lines.get(0), column, "0"))
+                .replace(lines.get(1), withCell(lines.get(1), column, "0"));
+        List<CatalogueRow> oldRows = CatalogueReader.read(new StringReader(old));
+        assertThat(oldRows).extracting(CatalogueRow::solverIterations).containsExactly(ModelOutcome.NO_MODEL_SOLVED, 0);
+        assertThat(write(oldRows)).isEqualTo(text.replace(lines.get(1), withCell(lines.get(1), column, "0")));
+    }
+
+    private static String withCell(String line, int column, String cell) {
+        String[] cells = line.split(",", -1);
+        cells[column] = cell;
+        return String.join(",", cells);
+    }
+
     @Test
     void interruptedLastLineIsDropped() throws IOException {
         String text = write(List.of(OutcomeRows.toRow(sunLike()), OutcomeRows.toRow(failed())));

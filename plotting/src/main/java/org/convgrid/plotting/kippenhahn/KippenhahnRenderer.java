@@ -68,7 +68,7 @@ public final class KippenhahnRenderer {
     /** The chart of one track in the given vertical coordinate, its metallicity named as {@code names} name it. */
     public static StyledChart render(KippenhahnData data, ZoneCoordinate y, MetallicityNames names) {
         boolean fromBirth = data.timeline().startsAtBirth();
-        AgeScale ages = AgeScale.of(fromBirth, data.ageMin(), firstAfterBirth(data), data.ageMax());
+        AgeScale ages = ageScale(data);
         StyledChart chart = ChartStyle.newChart("Convective zones against age, M = "
                         + SliceLabels.number(data.origin().massMsun()) + " M\u2609, "
                         + names.of(data.origin().zInit()), data.origin().physics().describe(),
@@ -96,8 +96,6 @@ public final class KippenhahnRenderer {
         chart.getStyler().setPlotGridLinesVisible(false);
         Set<ZoneKind> inLegend = EnumSet.noneOf(ZoneKind.class);
         // a zone kind too small to see anywhere on these axes is left out of the legend (and named in a note)
-        Set<ZoneKind> seen = EnumSet.noneOf(ZoneKind.class);
-        data.zones().forEach(r -> seen.add(r.kind()));
         Set<ZoneKind> shown = visibleKinds(data.zones(), ages, y);
         int n = 0;
         List<List<AgeRect>> zoneBands = Bands.join(data.zones(), true);
@@ -128,14 +126,38 @@ public final class KippenhahnRenderer {
         if (Double.isFinite(zams) && zams > data.ageMin() && zams < data.ageMax()) {
             chart.addOverlay((g, c) -> markZeroAgeMainSequence(g, c, ages.x(zams)));
         }
+        ChartNotes.addRightOfPlot(chart, notes(data, ages, y));
+        return chart;
+    }
+
+    /**
+     * The chart's notes: the track's own, then one per zone kind too thin to see on this axis. Such a note points to
+     * the depth chart only when a depth chart is drawn for this track (the rule {@link KippenhahnData#hasThinEnvelope}
+     * that decides it) and shows that kind: a review's 0.3 Msun chart sent readers to a depth chart never written,
+     * for a core, which the depth axis squeezes further still.
+     */
+    static List<String> notes(KippenhahnData data, AgeScale ages, ZoneCoordinate y) {
+        Set<ZoneKind> seen = EnumSet.noneOf(ZoneKind.class);
+        data.zones().forEach(r -> seen.add(r.kind()));
+        Set<ZoneKind> shown = visibleKinds(data.zones(), ages, y);
+        Set<ZoneKind> onDepthChart = y == ZoneCoordinate.MASS_FRACTION && data.hasThinEnvelope()
+                ? visibleKinds(data.zones(), ages, ZoneCoordinate.SURFACE_DEPTH) : EnumSet.noneOf(ZoneKind.class);
         List<String> notes = new java.util.ArrayList<>(data.notes());
         for (ZoneKind kind : seen) {
             if (!shown.contains(kind)) {
-                notes.add(tooThinNote(kind, y));
+                notes.add(tooThinNote(kind, onDepthChart.contains(kind)));
             }
         }
-        ChartNotes.addRightOfPlot(chart, notes);
-        return chart;
+        return notes;
+    }
+
+    /** {@link #notes(KippenhahnData, AgeScale, ZoneCoordinate)} on the age axis the chart of {@code data} draws. */
+    static List<String> notes(KippenhahnData data, ZoneCoordinate y) {
+        return notes(data, ageScale(data), y);
+    }
+
+    private static AgeScale ageScale(KippenhahnData data) {
+        return AgeScale.of(data.timeline().startsAtBirth(), data.ageMin(), firstAfterBirth(data), data.ageMax());
     }
 
     /**
@@ -160,9 +182,9 @@ public final class KippenhahnRenderer {
      * The note naming a zone kind too thin to see anywhere on this axis: a sentence, as every chart note is (it began
      * in lower case, "a convective shell too thin to show here", beside the capitalised notes of the same chart).
      */
-    static String tooThinNote(ZoneKind kind, ZoneCoordinate y) {
+    static String tooThinNote(ZoneKind kind, boolean depthChartShowsIt) {
         return "Some " + kind.plural() + " are too thin to show here"
-                + (y == ZoneCoordinate.MASS_FRACTION ? " (see the depth chart)." : ".");
+                + (depthChartShowsIt ? " (see the depth chart)." : ".");
     }
 
     private static XYSeries polygon(StyledChart chart, String name, List<AgeRect> band, Color fill,

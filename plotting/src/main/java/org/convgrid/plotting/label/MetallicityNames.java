@@ -82,6 +82,11 @@ public record MetallicityNames(Map<Double, Double> ironByZ) {
         return dex == null ? "" : iron(dex);
     }
 
+    /** An [Fe/H] as chart text, as {@link #of} writes it: {@code -0.35}, {@code 0.00}, {@code +0.40}. */
+    public static String signedDex(double dex) {
+        return iron(dex);
+    }
+
     /** Signed, two decimals, rounded half up from the table's four: {@code -0.35}, {@code 0.00}, {@code +0.40}. */
     static String iron(double dex) {
         BigDecimal rounded = new BigDecimal(Double.toString(dex)).setScale(IRON_DECIMALS, RoundingMode.HALF_UP);

@@ -50,11 +50,17 @@ public final class LogAxis {
      * include zero (Z = 0), which no logarithmic axis can show.
      */
     public static void applyLinearX(StyledChart chart, double min, double max, List<Double> labelled) {
+        applyLinearX(chart, min, max, labelled, SliceLabels::number);
+    }
+
+    /** {@link #applyLinearX(StyledChart, double, double, List)} with each label's text given by {@code label}. */
+    public static void applyLinearX(StyledChart chart, double min, double max, List<Double> labelled,
+                                    DoubleFunction<String> label) {
         chart.getStyler().setXAxisLogarithmic(false);
         chart.getStyler().setXAxisMin(min).setXAxisMax(max);
         chart.getStyler().setXAxisTickLabelsColor(TRANSPARENT);
         List<Double> inside = labelled.stream().filter(v -> v >= min && v <= max).toList();
-        chart.addOverlay((g, c) -> paintLabels(g, c, inside, SliceLabels::number));
+        chart.addOverlay((g, c) -> paintLabels(g, c, inside, label));
     }
 
     /**

@@ -20,7 +20,10 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  * box with a square at its middle. With few ages every marker carries its mass, rounded to the stated accuracy (the
  * refinement's tolerance, else the bracket), clear of every marker, line and box. Series of different ages are
  * nudged sideways by a few hundredths of a dex so that their markers do not hide each other, and a note under the
- * legend says so; the data keep the true Z.
+ * legend says so; the data keep the true Z. When the grid gave its compositions as [Fe/H] ({@link MetallicityNames}
+ * names every metallicity by its [Fe/H]), x is [Fe/H] instead, in dex on a linear axis labelled at the run's values
+ * (the tables' {@code fe_h_dex}), nudged by the same few hundredths of a dex: a reviewer's old-population grid, asked
+ * for [Fe/H] = -2, -1, 0, had to read 0.0001843, 0.001833 and 0.01738 off a Z axis.
  */
 public final class TransitionTrendRenderer {
 
@@ -34,6 +37,12 @@ public final class TransitionTrendRenderer {
     private static final double WINDOW_MARKER_TINT = 0.35;
     /** Room either side of the Z range, as a factor. */
     private static final double Z_PAD = 1.25;
+    /** Room either side of an [Fe/H] range, dex: log10 of {@link #Z_PAD}, so both axes leave the same room. */
+    private static final double IRON_PAD_DEX = Math.log10(Z_PAD);
+    /** The x-axis title of a grid given in [Fe/H]. */
+    static final String IRON_AXIS_TITLE = "initial [Fe/H] (dex)";
+    /** The x-axis title of a grid given in Z. */
+    static final String Z_AXIS_TITLE = "initial metal mass fraction Z";
 
     private TransitionTrendRenderer() {
     }
@@ -45,17 +54,18 @@ public final class TransitionTrendRenderer {
 
     /** The chart of a transition trend, its metallicities named in the title as {@code names} name them. */
     public static StyledChart render(TransitionTrendData data, MetallicityNames names) {
-        Placement at = placement(data);
+        Placement at = placement(data, names);
         List<Double> ages = at.ages();
         MethodNote method = methodNote(data);
         StyledChart chart = ChartStyle.newChart("Transition masses, "
                 + names.values(data.metallicities()) + ", " + SliceLabels.ages(ages),
-                method.subtitle(data.physics().describe()), "initial metal mass fraction Z",
+                method.subtitle(data.physics().describe()), at.inIron() ? IRON_AXIS_TITLE : Z_AXIS_TITLE,
                 "transition mass M / M\u2609");
         ChartStyle.legendRight(chart);
         List<String> notes = new java.util.ArrayList<>(data.caveats());
-        if (!nudgeNote(data).isEmpty()) {
-            notes.add(nudgeNote(data));
+        String nudge = nudgeNote(data, at.inIron());
+        if (!nudge.isEmpty()) {
+            notes.add(nudge);
         }
         ChartNotes.addRightOfPlot(chart, notes);
         double zMin = data.metallicities().isEmpty() ? 0.001 : data.metallicities().get(0) / Z_PAD;
@@ -63,7 +73,11 @@ public final class TransitionTrendRenderer {
                 .mapToDouble(p -> p.bracket() == null ? p.massMsun() : p.bracket().hi()).max().orElse(1.0);
         top = Math.max(top, data.windows().stream().mapToDouble(w -> w.masses().hi()).max().orElse(0.0));
         TransitionMassAxis.apply(chart, top);
-        if (!at.linear()) {
+        if (at.inIron()) {
+            List<Double> irons = data.metallicities().stream().map(at.ironByZ()::get).sorted().toList();
+            LogAxis.applyLinearX(chart, irons.get(0) - IRON_PAD_DEX, irons.get(irons.size() - 1) + IRON_PAD_DEX,
+                    irons, MetallicityNames::signedDex);
+        } else if (!at.linear()) {
             LogAxis.applyX(chart, zMin, at.zMax(), data.metallicities());
         } else {
             // Z = 0 has no place on a log axis: a linear one, labelled at the run's metallicities
@@ -112,15 +126,34 @@ public final class TransitionTrendRenderer {
                 data.series().stream().flatMap(s -> s.points().stream()).map(TrendPoint::toleranceMsun).toList());
     }
 
-    /** Where {@code data} is drawn along x. */
+    /** Where {@code data} is drawn along x, on a Z axis. */
     static Placement placement(TransitionTrendData data) {
+        return placement(data, MetallicityNames.Z_ONLY);
+    }
+
+    /** Where {@code data} is drawn along x: in [Fe/H] when {@code names} give every metallicity one, else in Z. */
+    static Placement placement(TransitionTrendData data, MetallicityNames names) {
+        Placement inZ = zPlacement(data);
+        return inIron(data.metallicities(), names) ? new Placement(inZ.ages(), inZ.windowAges(), false, inZ.zMax(), names.ironByZ()) : inZ;
+    }
+
+    /**
+     * Whether the chart of these metallicities draws x in [Fe/H]: when the grid gave [Fe/H] and every one has it (Z = 0
+     * has none, and keeps the chart in Z). The report's caption asks the same.
+     */
+    public static boolean inIron(java.util.Collection<Double> metallicities, MetallicityNames names) {
+        return names.namesIron() && !metallicities.isEmpty()
+                && metallicities.stream().allMatch(names.ironByZ()::containsKey);
+    }
+
+    private static Placement zPlacement(TransitionTrendData data) {
         List<Double> ages = data.series().stream().map(TransitionTrendData.Series::ageGyr).distinct().sorted()
                 .toList();
         List<Double> windowAges = data.windows().stream().map(TransientWindow::ageGyr).distinct().sorted().toList();
         boolean linear = !data.metallicities().isEmpty() && data.metallicities().get(0) <= 0;
         double zMax = data.metallicities().isEmpty() ? 0.1
                 : data.metallicities().get(data.metallicities().size() - 1) * Z_PAD;
-        return new Placement(ages, windowAges, linear, zMax);
+        return new Placement(ages, windowAges, linear, zMax, java.util.Map.of());
     }
 
     /** Every marker's value label (none with more ages than can be labelled). */
@@ -142,10 +175,15 @@ public final class TransitionTrendRenderer {
      * 0.021 on purpose.
      */
     static String nudgeNote(TransitionTrendData data) {
+        return nudgeNote(data, false);
+    }
+
+    /** {@link #nudgeNote(TransitionTrendData)} on an axis of Z or, when {@code inIron}, of [Fe/H]. */
+    static String nudgeNote(TransitionTrendData data, boolean inIron) {
         long ages = java.util.stream.Stream.concat(data.series().stream().map(TransitionTrendData.Series::ageGyr),
                 data.windows().stream().map(TransientWindow::ageGyr)).distinct().count();
-        return ages > 1 ? "Each age is drawn slightly apart at its Z (youngest left) so that markers do not hide each "
-                + "other." : "";
+        return ages > 1 ? "Each age is drawn slightly apart at its " + (inIron ? "[Fe/H]" : "Z") + " (youngest left) "
+                + "so that markers do not hide each other." : "";
     }
 
     /** Every transient window, where it is drawn. */
@@ -161,11 +199,25 @@ public final class TransitionTrendRenderer {
      * @param ages the ages of the series, increasing: each one's colour and nudge
      * @param windowAges the ages of the transient windows; one with no series comes after the series' ages
      * @param linear whether the Z axis is linear (it holds Z = 0)
-     * @param zMax the axis maximum
+     * @param zMax the Z axis maximum
+     * @param ironByZ the [Fe/H] of every Z when x is [Fe/H] (dex, linear), empty when x is Z
      */
-    record Placement(List<Double> ages, List<Double> windowAges, boolean linear, double zMax) {
+    record Placement(List<Double> ages, List<Double> windowAges, boolean linear, double zMax,
+                     java.util.Map<Double, Double> ironByZ) {
+        Placement {
+            ironByZ = java.util.Map.copyOf(ironByZ);
+        }
+
+        /** Whether x is [Fe/H]. */
+        boolean inIron() {
+            return !ironByZ.isEmpty();
+        }
+
         double x(double z, int ageIndex) {
             double offsetDex = DODGE_DEX * (ageIndex - (ages.size() - 1) / 2.0);
+            if (inIron()) {
+                return ironByZ.get(z) + offsetDex;
+            }
             return linear ? z + offsetDex * zMax * 0.5 : z * Math.pow(10, offsetDex);
         }
 

@@ -43,17 +43,56 @@ class KippenhahnTest {
         List<String> notes = new ArrayList<>(List.of(Kippenhahn.BURNING_NOTE, Kippenhahn.TOO_SHORT_NOTE));
         for (ZoneKind kind : ZoneKind.values()) {
             for (ZoneCoordinate y : ZoneCoordinate.values()) {
-                notes.add(KippenhahnRenderer.tooThinNote(kind, y));
+                notes.add(KippenhahnRenderer.tooThinNote(kind, y == ZoneCoordinate.MASS_FRACTION));
             }
         }
         assertThat(notes).allSatisfy(note -> {
             assertThat(Character.isUpperCase(note.charAt(0))).as(note).isTrue();
             assertThat(note).endsWith(".").doesNotContain("\n");
         });
-        assertThat(KippenhahnRenderer.tooThinNote(ZoneKind.SHELL, ZoneCoordinate.SURFACE_DEPTH))
+        assertThat(KippenhahnRenderer.tooThinNote(ZoneKind.SHELL, false))
                 .isEqualTo("Some convective shells are too thin to show here.");
-        assertThat(KippenhahnRenderer.tooThinNote(ZoneKind.SHELL, ZoneCoordinate.MASS_FRACTION))
+        assertThat(KippenhahnRenderer.tooThinNote(ZoneKind.SHELL, true))
                 .isEqualTo("Some convective shells are too thin to show here (see the depth chart).");
+    }
+
+    /**
+     * A track from birth: fully convective, then a radiative core under an envelope whose base sits at
+     * {@code envelopeBase}, with a central convective zone reaching m/M {@code coreTop} for a few steps.
+     */
+    private static KippenhahnData coreUnderEnvelope(double coreTop, double envelopeBase) throws Exception {
+        StringBuilder b = new StringBuilder("age_gyr,phase,central_cz_top_mass_frac,env_cz_base_mass_frac,"
+                + "burning_inner_mass_frac,burning_outer_mass_frac,nuclear_lum_frac\n");
+        b.append("0.0,pre_main_sequence,1.0,0.0,,,0\n");
+        for (int k = 0; k <= 60; k++) {
+            double ageGyr = Math.pow(10, -5 + k * 0.1);
+            boolean fullyConvective = ageGyr < 0.05;
+            String core = fullyConvective ? "1.0" : ageGyr < 0.08 ? String.valueOf(coreTop) : "";
+            String envelope = fullyConvective ? "0.0" : String.valueOf(envelopeBase);
+            b.append(ageGyr).append(',').append(ageGyr >= 0.3 ? "main_sequence" : "pre_main_sequence").append(',')
+                    .append(core).append(',').append(envelope).append(",0.0,0.3,1.0\n");
+        }
+        Track t = new Track("t", TrackReader.read(new StringReader(b.toString())));
+        return Kippenhahn.build(new TrackOrigin("t", 0.3, 0.01738, PHYSICS), t);
+    }
+
+    @Test
+    void aThinZoneNotePointsToTheDepthChartOnlyWhenOneIsDrawnAndShowsThatZone() throws Exception {
+        // a review's 0.3 Msun, [Fe/H] = 0 chart said "Some convective cores are too thin to show here (see the depth
+        // chart)." but its envelope is thick, so no depth chart was written (KippenhahnData.hasThinEnvelope)
+        KippenhahnData thickEnvelope = coreUnderEnvelope(0.002, 0.5);
+        assertThat(thickEnvelope.hasThinEnvelope()).isFalse();
+        assertThat(KippenhahnRenderer.notes(thickEnvelope, ZoneCoordinate.MASS_FRACTION))
+                .contains("Some convective cores are too thin to show here.")
+                .noneMatch(note -> note.contains("depth chart"));
+        // with a thin envelope a depth chart is drawn and shows the envelope, but it squeezes the core further still
+        KippenhahnData thinEnvelope = coreUnderEnvelope(0.002, 0.9999);
+        assertThat(thinEnvelope.hasThinEnvelope()).isTrue();
+        assertThat(KippenhahnRenderer.notes(thinEnvelope, ZoneCoordinate.MASS_FRACTION))
+                .contains("Some convective cores are too thin to show here.",
+                        "Some convective envelopes are too thin to show here (see the depth chart).");
+        assertThat(KippenhahnRenderer.notes(thinEnvelope, ZoneCoordinate.SURFACE_DEPTH))
+                .noneMatch(note -> note.contains("depth chart"));
     }
 
     @Test

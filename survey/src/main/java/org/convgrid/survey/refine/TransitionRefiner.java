@@ -243,7 +243,8 @@ public final class TransitionRefiner {
         return request -> {
             CatalogueRow known = failed.get(request.mass());
             return known == null ? line.solve(request)
-                    : new ModelOutcome.Failed(request, known.status(), known.statusDetail(), 0);
+                    : new ModelOutcome.Failed(request, known.status(), known.statusDetail(),
+                            ModelOutcome.NO_MODEL_SOLVED);
         };
     }
 
