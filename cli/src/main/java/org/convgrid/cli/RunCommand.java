@@ -251,9 +251,12 @@ final class RunCommand implements Callable<Integer> {
             return "nothing to refine (" + (oneMass(grid) ? "the grid has one mass, so no two models bracket a transition"
                     : "no bracket wider than " + tolerance) + ")";
         }
-        long failedNew = refined.added().stream().filter(o -> o.status() != ModelStatus.OK).count();
+        // a new model past the main sequence is the turn-off's answer, not a failure
+        long failedNew = refined.added().stream().filter(o -> o.status() == ModelStatus.FAILED
+                || o.status() == ModelStatus.NOT_CONVERGED).count();
         return "transitions refined to " + tolerance + " with " + Counts.of(refined.added().size(), "new model")
-                + (failedNew > 0 ? " (" + failedNew + " not ok)" : "") + " in " + Durations.describe(seconds);
+                + (failedNew > 0 ? " (" + failedNew + " failed or not converged)" : "") + " in "
+                + Durations.describe(seconds);
     }
 
     /** Whether the grid has a single mass (its masses are strictly increasing): no two models bracket anything. */

@@ -130,12 +130,14 @@ final class TransitionsCommand implements Callable<Integer> {
             }
         }
         long refined = update.transitions().stream().filter(t -> t.method() == TransitionMethod.REFINED).count();
-        long failed = update.added().stream().filter(o -> o.status() != ModelStatus.OK).count();
+        // a new model past the main sequence is the turn-off's answer, not a failure
+        long failed = update.added().stream().filter(o -> o.status() == ModelStatus.FAILED
+                || o.status() == ModelStatus.NOT_CONVERGED).count();
         StringBuilder line = new StringBuilder(dir.transitions() + ": " + Counts.of(update.transitions().size(), "slice"));
         if (refine) {
             line.append(", ").append(refined).append(" refined; ").append(Counts.of(update.searches(), "bisection")).append(", ")
                     .append(Counts.of(update.added().size(), "new model")).append(" in ").append(RunLayout.CATALOGUE)
-                    .append(failed > 0 ? " (" + failed + " not ok)" : "").append(" in ")
+                    .append(failed > 0 ? " (" + failed + " failed or not converged)" : "").append(" in ")
                     .append(Durations.describe((System.nanoTime() - start) * 1e-9));
         }
         parent.out().println(line);

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.function.DoubleFunction;
 import java.util.function.DoubleUnaryOperator;
+import java.util.function.Function;
 import java.util.function.Predicate;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
@@ -53,7 +54,7 @@ public final class MassBisection {
      */
     public Refinement refine(MassLine line, DoubleFunction<ModelRequest> requestAt, double lowMass, double highMass,
                              Predicate<ModelOutcome.Solved> lowSide) {
-        return refine(line, requestAt, lowMass, highMass, lowSide, true);
+        return refine(line, requestAt, lowMass, highMass, solvedSide(lowSide), true);
     }
 
     /**
@@ -62,11 +63,29 @@ public final class MassBisection {
      */
     public Refinement refineWithinKnownEnds(MassLine line, DoubleFunction<ModelRequest> requestAt, double lowMass,
                                             double highMass, Predicate<ModelOutcome.Solved> lowSide) {
-        return refine(line, requestAt, lowMass, highMass, lowSide, false);
+        return refine(line, requestAt, lowMass, highMass, solvedSide(lowSide), false);
+    }
+
+    /**
+     * As {@link #refineWithinKnownEnds}, with the side decided from any outcome, failed ones included: for a
+     * transition a status marks (a model past the main sequence is on the high side of the turn-off).
+     *
+     * @param sideOf the side of an outcome; {@link BracketSide#UNUSABLE} stops the bisection before it
+     */
+    public Refinement refineWithinKnownEndsBySide(MassLine line, DoubleFunction<ModelRequest> requestAt,
+                                                  double lowMass, double highMass,
+                                                  Function<ModelOutcome, BracketSide> sideOf) {
+        return refine(line, requestAt, lowMass, highMass, sideOf, false);
+    }
+
+    /** A structure's side: solved models by the predicate, the others unusable. */
+    private static Function<ModelOutcome, BracketSide> solvedSide(Predicate<ModelOutcome.Solved> lowSide) {
+        return o -> !(o instanceof ModelOutcome.Solved solved) ? BracketSide.UNUSABLE
+                : lowSide.test(solved) ? BracketSide.LOW : BracketSide.HIGH;
     }
 
     private Refinement refine(MassLine line, DoubleFunction<ModelRequest> requestAt, double lowMass, double highMass,
-                              Predicate<ModelOutcome.Solved> lowSide, boolean recomputeEnds) {
+                              Function<ModelOutcome, BracketSide> sideOf, boolean recomputeEnds) {
         if (!(lowMass > 0.0 && highMass > lowMass && Double.isFinite(highMass))) {
             throw new IllegalArgumentException("a bracket needs 0 < low < high (g), got " + lowMass + " and "
                     + highMass);
@@ -74,10 +93,11 @@ public final class MassBisection {
         List<ModelOutcome> added = new ArrayList<>();
         for (double end : recomputeEnds ? new double[] {lowMass, highMass} : new double[0]) {
             ModelOutcome o = line.solve(requestAt.apply(end));
-            if (!(o instanceof ModelOutcome.Solved solved)) {
+            BracketSide side = sideOf.apply(o);
+            if (side == BracketSide.UNUSABLE) {
                 return new Refinement(lowMass, highMass, added, BisectionStop.END_NOT_USABLE, end, o.statusDetail());
             }
-            if (lowSide.test(solved) != (end == lowMass)) {
+            if ((side == BracketSide.LOW) != (end == lowMass)) {
                 return new Refinement(lowMass, highMass, added, BisectionStop.END_DISAGREES, end, "");
             }
         }
@@ -93,10 +113,11 @@ public final class MassBisection {
             }
             ModelOutcome o = line.solve(requestAt.apply(mid));
             added.add(o);
-            if (!(o instanceof ModelOutcome.Solved solved)) {
+            BracketSide side = sideOf.apply(o);
+            if (side == BracketSide.UNUSABLE) {
                 return new Refinement(lo, hi, added, BisectionStop.MODEL_NOT_USABLE, mid, o.statusDetail());
             }
-            if (lowSide.test(solved)) {
+            if (side == BracketSide.LOW) {
                 lo = mid;
             } else {
                 hi = mid;

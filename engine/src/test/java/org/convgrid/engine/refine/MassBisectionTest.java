@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 import java.util.function.DoubleUnaryOperator;
+import java.util.function.Function;
 import java.util.function.Predicate;
 import org.convgrid.engine.request.GlobalProperties;
 import org.convgrid.engine.request.ModelOutcome;
@@ -140,6 +141,46 @@ class MassBisectionTest {
         assertThat(r.width()).isEqualTo(quantum, org.assertj.core.data.Offset.offset(1e-9 * quantum));
         assertThat(line.asked).allSatisfy(m -> assertThat(m / quantum).isCloseTo(Math.rint(m / quantum),
                 org.assertj.core.data.Offset.offset(1e-9)));
+    }
+
+    @Test
+    void aSideReadOffTheStatusLetsModelsPastTheMainSequenceMarkTheHighSide() {
+        // a made-up turn-off: every mass from TURNOFF up comes back past the main sequence, a failed outcome
+        double turnoff = 0.8123 * MSUN;
+        double lo = 0.80 * MSUN;
+        double first = 0.5 * (lo + 0.85 * MSUN);
+        double second = 0.5 * (lo + first);
+        double broken = 0.5 * (lo + second);
+        List<Double> asked = new ArrayList<>();
+        MassLine line = r -> {
+            asked.add(r.mass());
+            return r.mass() == broken ? new ModelOutcome.Failed(r, ModelStatus.NOT_CONVERGED, "gave up", 40)
+                    : r.mass() >= turnoff ? new ModelOutcome.Failed(r, ModelStatus.PAST_MAIN_SEQUENCE, "X_c out", 0)
+                    : new StepLine(0.0, Set.of()).solve(r);
+        };
+        Function<ModelOutcome, BracketSide> side = o -> switch (o.status()) {
+            case OK -> BracketSide.LOW;
+            case PAST_MAIN_SEQUENCE -> BracketSide.HIGH;
+            default -> BracketSide.UNUSABLE;
+        };
+        MassBisection bisection = new MassBisection(0.002 * MSUN, DoubleUnaryOperator.identity());
+        Refinement r = bisection.refineWithinKnownEndsBySide(line, MassBisectionTest::request, 0.80 * MSUN,
+                0.85 * MSUN, side);
+        // 0.825 past, 0.8125 past, then 0.80625 fails: the bracket stays 0.80-0.8125
+        assertThat(asked).containsExactly(first, second, broken);
+        assertThat(r.stop()).isEqualTo(BisectionStop.MODEL_NOT_USABLE);
+        assertThat(r.lowMass()).isEqualTo(0.80 * MSUN);
+        assertThat(r.highMass()).isEqualTo(second);
+
+        StepLine onTheMainSequence = new StepLine(0.0, Set.of());
+        MassLine cleanLine = q -> q.mass() >= turnoff
+                ? new ModelOutcome.Failed(q, ModelStatus.PAST_MAIN_SEQUENCE, "", 0) : onTheMainSequence.solve(q);
+        Refinement clean = bisection.refineWithinKnownEndsBySide(cleanLine, MassBisectionTest::request, 0.80 * MSUN,
+                0.85 * MSUN, side);
+        assertThat(clean.narrowEnough()).isTrue();
+        assertThat(clean.lowMass()).isLessThan(turnoff);
+        assertThat(clean.highMass()).isGreaterThanOrEqualTo(turnoff);
+        assertThat(clean.width()).isLessThan(0.002 * MSUN);
     }
 
     @Test

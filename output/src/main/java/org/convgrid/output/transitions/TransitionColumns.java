@@ -5,8 +5,9 @@ import java.util.List;
 /**
  * The column names of {@code transitions.csv}, version 2: the slice (composition, age, physics), the fully
  * convective limit and the lasting convective-core onset each with the two models that bracket it, the window of
- * transient small cores just above the fully convective limit, then notes, method and tolerance. Every mass is a
- * real column of its own (no packed {@code lo-hi} text); an empty cell means "not applicable".
+ * transient small cores just above the fully convective limit, then notes, method and tolerance, then (added later,
+ * at the end as every new column is) the main-sequence turn-off with its two models. Every mass is a real column of
+ * its own (no packed {@code lo-hi} text); an empty cell means "not applicable".
  */
 public final class TransitionColumns {
 
@@ -37,18 +38,31 @@ public final class TransitionColumns {
     public static final String METHOD = "method";
     /** The bracket width a refinement narrowed to; empty for {@code grid}. */
     public static final String TOLERANCE_MSUN = "tolerance_msun";
+    /**
+     * The main-sequence turn-off: the highest mass still on the main sequence at the slice's age, the lower end of
+     * its bracket (as the fully convective limit is the lower end of its own); empty when every model is still on
+     * the main sequence or none is.
+     */
+    public static final String TURNOFF_MASS_MSUN = "turnoff_mass_msun";
+    /** The highest model with status ok below the turn-off. */
+    public static final String TURNOFF_BRACKET_LO_MSUN = "turnoff_bracket_lo_msun";
+    /** The lowest model with status past_main_sequence above it. */
+    public static final String TURNOFF_BRACKET_HI_MSUN = "turnoff_bracket_hi_msun";
 
     /** The header convgrid writes, in order. */
     public static final List<String> HEADER = List.of(Z_INIT, Y_INIT, FE_H_DEX, AGE_GYR, MIXING_LENGTH, OVERSHOOT_HP,
             OVERSHOOT_PROFILE, CRITERION, OPACITY_SCALE, FULLY_CONVECTIVE_LIMIT_MSUN, FULLY_CONVECTIVE_BRACKET_LO_MSUN,
             FULLY_CONVECTIVE_BRACKET_HI_MSUN, CONV_CORE_ONSET_MSUN, CONV_CORE_BRACKET_LO_MSUN,
-            CONV_CORE_BRACKET_HI_MSUN, TRANSIENT_CORE_LO_MSUN, TRANSIENT_CORE_HI_MSUN, NOTES, METHOD, TOLERANCE_MSUN);
+            CONV_CORE_BRACKET_HI_MSUN, TRANSIENT_CORE_LO_MSUN, TRANSIENT_CORE_HI_MSUN, NOTES, METHOD, TOLERANCE_MSUN,
+            TURNOFF_MASS_MSUN, TURNOFF_BRACKET_LO_MSUN, TURNOFF_BRACKET_HI_MSUN);
 
     /**
      * Columns a table written before them lacks (read as empty; {@link #FE_H_DEX} is never read, being computed
-     * from z_init and y_init when the table is written again).
+     * from z_init and y_init when the table is written again; a table without the turn-off reads as one without a
+     * turn-off, which the next rewrite from the catalogue finds).
      */
-    public static final List<String> ADDED_LATER = List.of(OVERSHOOT_PROFILE, FE_H_DEX);
+    public static final List<String> ADDED_LATER = List.of(OVERSHOOT_PROFILE, FE_H_DEX, TURNOFF_MASS_MSUN,
+            TURNOFF_BRACKET_LO_MSUN, TURNOFF_BRACKET_HI_MSUN);
 
     /** A column only the first layout (before version 2) had: its presence marks such a file. */
     public static final String VERSION_1_MARKER = "fully_convective_bracket_msun";

@@ -39,6 +39,13 @@ import org.convgrid.output.catalogue.CatalogueRow;
  * <p>Models past the main sequence are not searched at all (no structure is kept for them), so a slice that holds
  * some says which masses in its notes: its "core in every star above" means up to the highest main-sequence mass.
  *
+ * <p>The main-sequence turn-off is read off the statuses alone, among the models with status ok or
+ * {@code past_main_sequence} in increasing mass (failed and unconverged ones skipped, widening the bracket): the
+ * lower end of the highest crossing from ok to past the main sequence, the highest mass still on the main sequence
+ * at the slice's age, as the fully convective limit is the last mass still fully convective. A slice without a
+ * model past the main sequence has no turn-off, and no note says so (every young slice is one); a slice whose
+ * statuses change more than once with mass (models on the main sequence above ones past it) says so in its notes.
+ *
  * @param coreMassFractionThreshold smallest m/M of a convective core that counts as a core, in [0, 1)
  */
 public record TransitionFinder(double coreMassFractionThreshold) {
@@ -121,10 +128,15 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         List<CatalogueRow> byMass = new ArrayList<>(members);
         byMass.sort(Comparator.comparingDouble(CatalogueRow::massMsun));
         double yInit = byMass.get(0).yInit();
+        TransitionEstimate turnoff = MainSequenceTurnoff.of(byMass);
         List<CatalogueRow> usable = byMass.stream().filter(r -> r.isOk() && r.structureClass() != null).toList();
+        TransitionMethod turnoffMethod = turnoff.found() && endsAtRefinedModel(turnoff.bracket(), byMass)
+                ? TransitionMethod.REFINED : TransitionMethod.GRID;
         if (usable.isEmpty()) {
-            return new TransitionRow(slice, yInit, TransitionEstimate.NONE, TransitionEstimate.NONE, null,
-                    TransitionMethod.GRID, Double.NaN, "no usable model in this slice");
+            List<String> notes = new ArrayList<>(List.of("no usable model in this slice"));
+            MainSequenceTurnoff.describe(turnoff, byMass, notes);
+            return new TransitionRow(slice, yInit, TransitionEstimate.NONE, TransitionEstimate.NONE, null, turnoff,
+                    turnoffMethod, Double.NaN, String.join("; ", notes));
         }
         List<String> notes = new ArrayList<>();
         List<Span> fcCrossings = crossings(usable, TransitionFinder::isFullyConvective);
@@ -141,6 +153,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         describeCore(core, window, coredAtTop, coreSearch, coreSearch.size() < usable.size(), byMass, notes);
         describeRecededCores(usable.subList(coreSearch.size(), usable.size()), notes);
         describePastMainSequence(byMass, notes);
+        MainSequenceTurnoff.describe(turnoff, byMass, notes);
         TransitionRow row = new TransitionRow(slice, yInit, fc, core, window, TransitionMethod.GRID, Double.NaN, "");
         List<Span> reported = new ArrayList<>(row.transientCoreCrossings());
         if (fc.found()) {
@@ -149,9 +162,11 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         if (core.found()) {
             reported.add(core.bracket());
         }
-        TransitionMethod method = reported.stream().anyMatch(span -> endsAtRefinedModel(span, usable))
+        TransitionMethod method = turnoffMethod == TransitionMethod.REFINED
+                || reported.stream().anyMatch(span -> endsAtRefinedModel(span, usable))
                 ? TransitionMethod.REFINED : TransitionMethod.GRID;
-        return new TransitionRow(slice, yInit, fc, core, window, method, Double.NaN, String.join("; ", notes));
+        return new TransitionRow(slice, yInit, fc, core, window, turnoff, method, Double.NaN,
+                String.join("; ", notes));
     }
 
     /**
@@ -168,7 +183,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
     }
 
     /** Every change of {@code state} between neighbouring usable models, in increasing mass. */
-    private static List<Span> crossings(List<CatalogueRow> usable, Predicate<CatalogueRow> state) {
+    static List<Span> crossings(List<CatalogueRow> usable, Predicate<CatalogueRow> state) {
         List<Span> crossings = new ArrayList<>();
         for (int i = 0; i + 1 < usable.size(); i++) {
             if (state.test(usable.get(i)) != state.test(usable.get(i + 1))) {
@@ -182,7 +197,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
      * Index of the crossing that leaves {@code state} (the highest one when {@code highest}), -1 when none: a
      * crossing leaves the state when its lower model is in it.
      */
-    private static int lastFrom(List<Span> crossings, List<CatalogueRow> usable, Predicate<CatalogueRow> state,
+    static int lastFrom(List<Span> crossings, List<CatalogueRow> usable, Predicate<CatalogueRow> state,
                                 boolean highest) {
         int chosen = -1;
         for (int i = 0; i < crossings.size(); i++) {
@@ -199,7 +214,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
      * The estimate at crossing {@code index} (none when negative): reported at its lower end ({@code atLowEnd}, the
      * last mass still in the state) or its upper end (the first mass past it).
      */
-    private static TransitionEstimate estimate(List<CatalogueRow> all, List<Span> crossings, int index,
+    static TransitionEstimate estimate(List<CatalogueRow> all, List<Span> crossings, int index,
                                                boolean atLowEnd) {
         if (index < 0) {
             return new TransitionEstimate(Double.NaN, null, crossings, 0);
@@ -224,8 +239,8 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         return null;
     }
 
-    private static boolean endsAtRefinedModel(Span span, List<CatalogueRow> usable) {
-        return usable.stream().anyMatch(r -> RefinedModelIds.isRefined(r.modelId())
+    private static boolean endsAtRefinedModel(Span span, List<CatalogueRow> rows) {
+        return rows.stream().anyMatch(r -> RefinedModelIds.isRefined(r.modelId())
                 && (r.massMsun() == span.lo() || r.massMsun() == span.hi()));
     }
 
@@ -310,7 +325,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
                 .collect(java.util.stream.Collectors.joining(", ")) + " Msun";
     }
 
-    private static String timesInWords(int times) {
+    static String timesInWords(int times) {
         return times == 1 ? "once" : times == 2 ? "twice" : times + " times";
     }
 

@@ -71,7 +71,11 @@ public final class TransitionReader {
         TransitionEstimate core = estimate(r, TransitionColumns.CONV_CORE_ONSET_MSUN,
                 TransitionColumns.CONV_CORE_BRACKET_LO_MSUN, TransitionColumns.CONV_CORE_BRACKET_HI_MSUN);
         Span window = span(r, TransitionColumns.TRANSIENT_CORE_LO_MSUN, TransitionColumns.TRANSIENT_CORE_HI_MSUN);
-        return new TransitionRow(slice, number(r, TransitionColumns.Y_INIT), fc, core, window,
+        // a table written before the turn-off columns reads as one without a turn-off
+        TransitionEstimate turnoff = r.isMapped(TransitionColumns.TURNOFF_MASS_MSUN)
+                ? estimate(r, TransitionColumns.TURNOFF_MASS_MSUN, TransitionColumns.TURNOFF_BRACKET_LO_MSUN,
+                TransitionColumns.TURNOFF_BRACKET_HI_MSUN) : TransitionEstimate.NONE;
+        return new TransitionRow(slice, number(r, TransitionColumns.Y_INIT), fc, core, window, turnoff,
                 TransitionMethod.fromLabel(r.get(TransitionColumns.METHOD)), number(r, TransitionColumns.TOLERANCE_MSUN),
                 r.get(TransitionColumns.NOTES));
     }

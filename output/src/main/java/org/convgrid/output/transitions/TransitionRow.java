@@ -15,20 +15,32 @@ import org.convgrid.output.Span;
  *     into a core); its crossings are every change of the core state with mass
  * @param transientCore the lowest and highest mass of the window of small central cores just above the fully
  *     convective limit (cored models with coreless ones above them), null when there is none
+ * @param turnoff the main-sequence turn-off: the highest mass with status ok below a model past the main sequence;
+ *     its crossings are every change between the two statuses with mass ({@link TransitionEstimate#NONE} when the
+ *     slice has no model past the main sequence or none on it)
  * @param method grid or refined
  * @param toleranceMsun the width the refinement narrowed the brackets to, solar masses; NaN for {@code grid}
  * @param notes short remarks (no transition, widened brackets, flickering, stopped bisections), empty when none
  */
 public record TransitionRow(Slice slice, double yInit, TransitionEstimate fullyConvective,
-                            TransitionEstimate convCoreOnset, Span transientCore, TransitionMethod method,
-                            double toleranceMsun, String notes) {
+                            TransitionEstimate convCoreOnset, Span transientCore, TransitionEstimate turnoff,
+                            TransitionMethod method, double toleranceMsun, String notes) {
 
     public TransitionRow {
         Objects.requireNonNull(slice, "slice");
         Objects.requireNonNull(fullyConvective, "fullyConvective");
         Objects.requireNonNull(convCoreOnset, "convCoreOnset");
+        Objects.requireNonNull(turnoff, "turnoff");
         Objects.requireNonNull(method, "method");
         notes = notes == null ? "" : notes;
+    }
+
+    /** A row of a slice without a turn-off (every model on the main sequence). */
+    public TransitionRow(Slice slice, double yInit, TransitionEstimate fullyConvective,
+                         TransitionEstimate convCoreOnset, Span transientCore, TransitionMethod method,
+                         double toleranceMsun, String notes) {
+        this(slice, yInit, fullyConvective, convCoreOnset, transientCore, TransitionEstimate.NONE, method,
+                toleranceMsun, notes);
     }
 
     /**
@@ -45,13 +57,13 @@ public record TransitionRow(Slice slice, double yInit, TransitionEstimate fullyC
 
     /** The same row with other notes. */
     public TransitionRow withNotes(String other) {
-        return new TransitionRow(slice, yInit, fullyConvective, convCoreOnset, transientCore, method, toleranceMsun,
-                other);
+        return new TransitionRow(slice, yInit, fullyConvective, convCoreOnset, transientCore, turnoff, method,
+                toleranceMsun, other);
     }
 
     /** The same row with a tolerance, kept only when the row is refined (a grid row has none). */
     public TransitionRow withTolerance(double tolerance) {
-        return new TransitionRow(slice, yInit, fullyConvective, convCoreOnset, transientCore, method,
+        return new TransitionRow(slice, yInit, fullyConvective, convCoreOnset, transientCore, turnoff, method,
                 method == TransitionMethod.REFINED ? tolerance : Double.NaN, notes);
     }
 
@@ -65,7 +77,7 @@ public record TransitionRow(Slice slice, double yInit, TransitionEstimate fullyC
         }
         Slice named = new Slice(slice.zInit(), slice.ageGyr(), slice.mixingLength(), slice.overshootHp(),
                 slice.criterion(), slice.opacityScale(), profile);
-        return new TransitionRow(named, yInit, fullyConvective, convCoreOnset, transientCore, method, toleranceMsun,
-                notes);
+        return new TransitionRow(named, yInit, fullyConvective, convCoreOnset, transientCore, turnoff, method,
+                toleranceMsun, notes);
     }
 }

@@ -57,6 +57,7 @@ public final class TransitionWriter {
         cells.add(row.notes());
         cells.add(row.method().label());
         cells.add(CsvNumbers.format(row.toleranceMsun()));
+        estimate(row.turnoff(), cells);
         return cells;
     }
 

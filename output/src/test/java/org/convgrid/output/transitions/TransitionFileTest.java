@@ -14,11 +14,14 @@ import org.junit.jupiter.api.Test;
 
 class TransitionFileTest {
 
-    private static final String HEADER = "z_init,y_init,fe_h_dex,age_gyr,mixing_length,overshoot_hp,"
+    /** The header before the turn-off columns were added at its end. */
+    private static final String BEFORE_TURNOFF_HEADER = "z_init,y_init,fe_h_dex,age_gyr,mixing_length,overshoot_hp,"
             + "overshoot_profile,criterion,opacity_scale,"
             + "fully_convective_limit_msun,fully_convective_bracket_lo_msun,fully_convective_bracket_hi_msun,"
             + "conv_core_onset_msun,conv_core_bracket_lo_msun,conv_core_bracket_hi_msun,transient_core_lo_msun,"
             + "transient_core_hi_msun,notes,method,tolerance_msun";
+    private static final String HEADER = BEFORE_TURNOFF_HEADER
+            + ",turnoff_mass_msun,turnoff_bracket_lo_msun,turnoff_bracket_hi_msun";
 
     private static String written(List<TransitionRow> rows) throws IOException {
         StringBuilder out = new StringBuilder();
@@ -37,7 +40,7 @@ class TransitionFileTest {
         // no transient window: its cells are empty; a grid row has no tolerance; 2 Msun is written as 2.0
         assertThat(lines[1]).isEqualTo("0.02,0.27,0.0606,0.0,1.8,0.0,uniform,schwarzschild,1.0,0.3,0.3,0.4,2.0,0.4,"
                 + "2.0,,,"
-                + "fully convective bracket widened past 1 failed model,grid,");
+                + "fully convective bracket widened past 1 failed model,grid,,,,");
         List<TransitionRow> back = TransitionReader.read(new StringReader(text));
         assertThat(back).hasSize(1);
         assertThat(back.get(0).fullyConvective().bracket()).isEqualTo(rows.get(0).fullyConvective().bracket());
@@ -57,13 +60,40 @@ class TransitionFileTest {
         assertThat(text.split("\r?\n")[1]).isEqualTo("0.02,0.27,0.0606,0.0,1.8,0.0,uniform,schwarzschild,1.0,0.36,"
                 + "0.36,0.37,"
                 + "1.2,1.1,"
-                + "1.2,0.37,0.37,,refined,0.002");
+                + "1.2,0.37,0.37,,refined,0.002,,,");
         TransitionRow back = TransitionReader.read(new StringReader(text)).get(0);
         assertThat(back.toleranceMsun()).isEqualTo(0.002);
         assertThat(back.method()).isEqualTo(TransitionMethod.REFINED);
         assertThat(back.transientCore()).isEqualTo(refined.transientCore());
         // the tolerance belongs to refined rows only
         assertThat(row.withTolerance(0.002).toleranceMsun()).isNaN();
+    }
+
+    @Test
+    void theTurnoffIsWrittenAtTheEndAndReadsBack() throws IOException {
+        List<TransitionRow> rows = TransitionFinder.withDefaults().find(List.of(
+                ok(0.3, StructureClass.FULLY_CONVECTIVE, 1), ok(0.4, StructureClass.CONV_ENVELOPE, 0),
+                ok(0.8, StructureClass.CONV_ENVELOPE, 0), TransitionFinderTest.pastAt(0.85)));
+        String text = written(rows);
+        assertThat(text.split("\r?\n")[1]).endsWith(",grid,,0.8,0.8,0.85");
+        TransitionRow back = TransitionReader.read(new StringReader(text)).get(0);
+        assertThat(back.turnoff().massMsun()).isEqualTo(0.8);
+        assertThat(back.turnoff().bracket()).isEqualTo(rows.get(0).turnoff().bracket());
+        assertThat(written(List.of(back))).isEqualTo(text);
+    }
+
+    @Test
+    void aTableWrittenBeforeTheTurnoffColumnsReadsAsOneWithoutATurnoff() throws IOException {
+        String earlier = BEFORE_TURNOFF_HEADER + "\n0.02,0.27,0.0606,0.0,1.8,0.0,uniform,schwarzschild,1.0,0.3,0.3,0.4,"
+                + "2.0,0.4,2.0,,,,refined,0.002\n";
+        TransitionRow back = TransitionReader.read(new StringReader(earlier)).get(0);
+        assertThat(back.turnoff().found()).isFalse();
+        assertThat(back.turnoff().massMsun()).isNaN();
+        assertThat(back.fullyConvective().massMsun()).isEqualTo(0.3);
+        assertThat(back.toleranceMsun()).isEqualTo(0.002);
+        // written again, it gains three empty cells at the end and nothing else changes
+        assertThat(written(List.of(back))).isEqualTo(earlier.replace(BEFORE_TURNOFF_HEADER, HEADER)
+                .replace("0.002\n", "0.002,,,\n"));
     }
 
     @Test
@@ -80,8 +110,13 @@ class TransitionFileTest {
     void aMissingColumnOrAHalfBracketIsAnError() {
         assertThatThrownBy(() -> TransitionReader.read(new StringReader(HEADER.replace(",tolerance_msun", "") + "\n")))
                 .isInstanceOf(OutputFormatException.class).hasMessageContaining("tolerance_msun");
-        String halfBracket = HEADER + "\n0.02,0.27,0.0606,0.0,1.8,0.0,uniform,schwarzschild,1.0,0.3,0.3,,,,,,,,grid,\n";
+        String halfBracket = HEADER + "\n0.02,0.27,0.0606,0.0,1.8,0.0,uniform,schwarzschild,1.0,0.3,0.3,,,,,,,,grid,,,,"
+                + "\n";
         assertThatThrownBy(() -> TransitionReader.read(new StringReader(halfBracket)))
                 .isInstanceOf(OutputFormatException.class).hasMessageContaining("both be empty or both be masses");
+        String halfTurnoff = HEADER + "\n0.02,0.27,0.0606,0.0,1.8,0.0,uniform,schwarzschild,1.0,,,,,,,,,,grid,,0.8,0.8,"
+                + "\n";
+        assertThatThrownBy(() -> TransitionReader.read(new StringReader(halfTurnoff)))
+                .isInstanceOf(OutputFormatException.class).hasMessageContaining("turnoff_bracket_hi_msun");
     }
 }

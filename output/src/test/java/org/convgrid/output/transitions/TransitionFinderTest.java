@@ -21,8 +21,13 @@ class TransitionFinderTest {
     private final TransitionFinder finder = TransitionFinder.withDefaults();
 
     static CatalogueRow row(double z, double mass, StructureClass c, double core, ModelStatus status) {
+        return row("m" + mass, z, mass, c, core, status);
+    }
+
+    static CatalogueRow row(String modelId, double z, double mass, StructureClass c, double core,
+                            ModelStatus status) {
         double nan = Double.NaN;
-        return new CatalogueRow("m" + mass, mass, z, 0.27, 1.8, 0.0, 0.0, "", status, "", nan, nan, nan, nan, nan,
+        return new CatalogueRow(modelId, mass, z, 0.27, 1.8, 0.0, 0.0, "", status, "", nan, nan, nan, nan, nan,
                 nan, nan, nan, status == ModelStatus.OK ? c : null, core, nan, c == FC ? 0.0 : 0.5, 0.7, nan, nan,
                 List.of(), 5, StabilityCriterion.SCHWARZSCHILD, 1.0, nan);
     }
@@ -33,6 +38,10 @@ class TransitionFinderTest {
 
     static CatalogueRow failedAt(double mass) {
         return row(0.02, mass, ENV, 0.0, ModelStatus.FAILED);
+    }
+
+    static CatalogueRow pastAt(double mass) {
+        return row(0.02, mass, ENV, 0.0, ModelStatus.PAST_MAIN_SEQUENCE);
     }
 
     @Test
@@ -65,7 +74,11 @@ class TransitionFinderTest {
         TransitionRow t = finder.find(withPast).get(0);
 
         assertThat(t.notes()).isEqualTo("1.6-2.4 Msun past the main sequence (not searched)");
-        assertThat(t.withNotes("")).isEqualTo(plain);
+        assertThat(t.fullyConvective()).isEqualTo(plain.fullyConvective());
+        assertThat(t.convCoreOnset()).isEqualTo(plain.convCoreOnset());
+        assertThat(t.transientCore()).isEqualTo(plain.transientCore());
+        assertThat(plain.turnoff().found()).isFalse();
+        assertThat(t.turnoff().bracket()).isEqualTo(new Span(1.4, 1.6));
         assertThat(t.convCoreOnset().massMsun()).isEqualTo(1.2);
     }
 

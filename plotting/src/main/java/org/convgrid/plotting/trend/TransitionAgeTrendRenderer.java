@@ -14,6 +14,7 @@ import org.convgrid.plotting.style.LogAxis;
 import org.convgrid.plotting.style.StyledChart;
 import org.convgrid.plotting.zones.TransitionMarker;
 import org.knowm.xchart.XYSeries;
+import org.knowm.xchart.style.markers.Marker;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
@@ -95,19 +96,19 @@ public final class TransitionAgeTrendRenderer {
         Placement at = new Placement(unit, nZ, log, range);
         for (TransitionAgeTrendData.Series s : data.series()) {
             int zIndex = data.metallicities().indexOf(s.zInit());
-            boolean fc = s.kind() == TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT;
             boolean refined = s.method() == TransitionMethod.REFINED;
             Color color = ChartStyle.seriesColor(zIndex);
             BracketBands.add(chart, s.points().stream()
                     .map(p -> new BracketBands.At(at.x(p.ageGyr(), zIndex), p.bracket())).toList(), color);
-            XYSeries line = chart.addSeries((fc ? "fully convective limit, " : "core in every star above, ")
-                            + names.of(s.zInit()) + method.legendSuffix(s.method()),
+            XYSeries line = chart.addSeries(s.kind().label() + ", " + names.of(s.zInit())
+                            + method.legendSuffix(s.method()),
                     s.points().stream().mapToDouble(p -> at.x(p.ageGyr(), zIndex)).toArray(),
                     s.points().stream().mapToDouble(AgePoint::massMsun).toArray());
             line.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
             line.setLineColor(color);
-            line.setLineStyle(ChartStyle.dashed(fc ? 0 : 1, ChartStyle.LINE_WIDTH));
-            line.setMarker(fc ? SeriesMarkers.CIRCLE : SeriesMarkers.DIAMOND);
+            // each transition its own dash and marker, each Z its own colour
+            line.setLineStyle(ChartStyle.dashed(dash(s.kind()), ChartStyle.LINE_WIDTH));
+            line.setMarker(marker(s.kind()));
             line.setMarkerColor(refined ? color : ChartStyle.tint(color, GRID_MARKER_TINT));
         }
         for (double z : data.metallicities()) {
@@ -128,6 +129,24 @@ public final class TransitionAgeTrendRenderer {
         }
         TrendDrawing.labels(chart, valueLabels(data, at), windows(data, at));
         return chart;
+    }
+
+    /** The dash pattern of a transition's line (ChartStyle's order: solid, then dashes). */
+    static int dash(TransitionMarker.Kind kind) {
+        return switch (kind) {
+            case FULLY_CONVECTIVE_LIMIT -> 0;
+            case CONV_CORE_ONSET -> 1;
+            case MAIN_SEQUENCE_TURNOFF -> 2;
+        };
+    }
+
+    /** The marker of a transition: a circle, a diamond, and a downward triangle for the turn-off. */
+    static Marker marker(TransitionMarker.Kind kind) {
+        return switch (kind) {
+            case FULLY_CONVECTIVE_LIMIT -> SeriesMarkers.CIRCLE;
+            case CONV_CORE_ONSET -> SeriesMarkers.DIAMOND;
+            case MAIN_SEQUENCE_TURNOFF -> SeriesMarkers.TRIANGLE_DOWN;
+        };
     }
 
     /** How the chart says how the masses were found: once in the subtitle when every series agrees. */

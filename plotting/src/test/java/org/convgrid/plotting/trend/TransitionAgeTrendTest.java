@@ -23,15 +23,23 @@ class TransitionAgeTrendTest {
         TransitionAgeTrendData data = TransitionAgeTrend.build(PhysicsKey.of(rows.get(0)), transitions);
         assertThat(data.ages()).containsExactly(0.0, 1.0, 4.57);
         assertThat(data.series()).extracting(TransitionAgeTrendData.Series::zInit)
-                .containsExactly(0.004, 0.014, 0.02, 0.004, 0.014, 0.02);
+                .containsExactly(0.004, 0.014, 0.02, 0.004, 0.014, 0.02, 0.004, 0.014, 0.02);
+        // fully convective limit, core onset, then the turn-off (the synthetic run's oldest stars are past the main
+        // sequence at the top of each Z)
+        assertThat(data.series()).extracting(TransitionAgeTrendData.Series::kind).containsSubsequence(
+                TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT, TransitionMarker.Kind.CONV_CORE_ONSET,
+                TransitionMarker.Kind.MAIN_SEQUENCE_TURNOFF);
         assertThat(data.series().get(0).kind()).isEqualTo(TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT);
         for (TransitionAgeTrendData.Series s : data.series()) {
             assertThat(s.points()).extracting(AgePoint::ageGyr).isSorted();
             for (AgePoint p : s.points()) {
                 TransitionRow t = transitions.stream().filter(r -> r.slice().zInit() == s.zInit()
                         && r.slice().ageGyr() == p.ageGyr()).findFirst().orElseThrow();
-                var estimate = s.kind() == TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT ? t.fullyConvective()
-                        : t.convCoreOnset();
+                var estimate = switch (s.kind()) {
+                    case FULLY_CONVECTIVE_LIMIT -> t.fullyConvective();
+                    case CONV_CORE_ONSET -> t.convCoreOnset();
+                    case MAIN_SEQUENCE_TURNOFF -> t.turnoff();
+                };
                 assertThat(p.massMsun()).isEqualTo(estimate.massMsun());
                 assertThat(p.bracket()).isEqualTo(estimate.bracket());
             }

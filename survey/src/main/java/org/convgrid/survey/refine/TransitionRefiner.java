@@ -9,10 +9,12 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.function.DoubleFunction;
+import java.util.function.Function;
 import java.util.function.Predicate;
 import org.convgrid.engine.batch.ProgressListener;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.refine.BracketSide;
 import org.convgrid.engine.refine.MassBisection;
 import org.convgrid.engine.refine.MassLine;
 import org.convgrid.engine.refine.MassLineFactory;
@@ -41,9 +43,10 @@ import org.convgrid.grids.words.MessageNumbers;
  * bracket share one); all searches of every slice run at once on the command's {@link ParallelWork} (the one grid runs
  * use), no slice waiting for another, and are gathered in slice order, fully convective limit first, so the result is
  * the same for any thread count. By default the crossings the table reports are refined: the fully convective limit
- * (the highest crossing out of full convection), the mass above which every star has a convective core and the two
- * crossings that bound the transient window of small cores; on request every crossing of a slice whose structure
- * flickers with mass.
+ * (the highest crossing out of full convection), the mass above which every star has a convective core, the two
+ * crossings that bound the transient window of small cores and the main-sequence turn-off (its side read off the
+ * status: a new model whose central hydrogen runs out before the slice's age comes back past the main sequence, the
+ * high side); on request every crossing of a slice whose structure flickers with mass.
  * Midpoints are rounded to masses the catalogue writes exactly, so a catalogue row's mass is the mass computed.
  */
 public final class TransitionRefiner {
@@ -59,7 +62,7 @@ public final class TransitionRefiner {
     }
 
     private enum Kind {
-        FULLY_CONVECTIVE("fully convective"), CONV_CORE("convective core");
+        FULLY_CONVECTIVE("fully convective"), CONV_CORE("convective core"), TURNOFF("turn-off");
 
         final String label;
 
@@ -69,7 +72,8 @@ public final class TransitionRefiner {
     }
 
     /**
-     * One bisection; {@code lowState} is the kind's state (fully convective, has a core) below the crossing;
+     * One bisection; {@code lowState} is the kind's state (fully convective, has a core, on the main sequence) below
+     * the crossing;
      * {@code failed} the slice's catalogue rows that are not usable, by mass in g.
      */
     private record Search(Slice slice, Kind kind, Span bracket, boolean lowState, ModelRequest template,
@@ -140,11 +144,16 @@ public final class TransitionRefiner {
             members.get(slice).stream().filter(r -> !r.isOk() || r.structureClass() == null)
                     .forEach(r -> failed.put(r.massMsun() * Constants.M_SUN, r));
             for (Kind kind : Kind.values()) {
-                TransitionEstimate e = kind == Kind.FULLY_CONVECTIVE ? row.fullyConvective() : row.convCoreOnset();
+                TransitionEstimate e = switch (kind) {
+                    case FULLY_CONVECTIVE -> row.fullyConvective();
+                    case CONV_CORE -> row.convCoreOnset();
+                    case TURNOFF -> row.turnoff();
+                };
                 for (Span span : allCrossings ? e.crossings() : reported(kind, row)) {
                     if (span.hi() - span.lo() >= bisection.tolerance() / Constants.M_SUN) {
-                        CatalogueRow below = members.get(slice).stream().filter(r -> r.isOk()
-                                && r.structureClass() != null && r.massMsun() == span.lo()).findFirst()
+                        // the turn-off's ends are told apart by status alone; the others need a structure
+                        CatalogueRow below = members.get(slice).stream().filter(r -> r.massMsun() == span.lo()
+                                && (kind == Kind.TURNOFF || r.isOk() && r.structureClass() != null)).findFirst()
                                 .orElseThrow();
                         searches.add(new Search(slice, kind, span, inState(kind, below), template, failed));
                     }
@@ -171,6 +180,9 @@ public final class TransitionRefiner {
     private static List<Span> reported(Kind kind, TransitionRow row) {
         if (kind == Kind.FULLY_CONVECTIVE) {
             return row.fullyConvective().found() ? List.of(row.fullyConvective().bracket()) : List.of();
+        }
+        if (kind == Kind.TURNOFF) {
+            return row.turnoff().found() ? List.of(row.turnoff().bracket()) : List.of();
         }
         List<Span> spans = new ArrayList<>(row.transientCoreCrossings());
         if (row.convCoreOnset().found() && !spans.contains(row.convCoreOnset().bracket())) {
@@ -203,6 +215,10 @@ public final class TransitionRefiner {
                 first.bracket()), first.failed());
         List<Refinement> done = new ArrayList<>(task.size());
         for (Search s : task) {
+            if (s.kind() == Kind.TURNOFF) {
+                done.add(refineTurnoff(s, line, t));
+                continue;
+            }
             Predicate<ModelOutcome.Solved> lowSide = o -> inState(s.kind(), OutcomeRows.toRow(o)) == s.lowState();
             DoubleFunction<ModelRequest> at = mass -> new ModelRequest("pending", mass, t.initialMetals(),
                     t.initialHelium(), t.age(), t.physics());
@@ -214,6 +230,23 @@ public final class TransitionRefiner {
                     : bisection.refineWithinKnownEnds(line, at, lo, hi, lowSide));
         }
         return done;
+    }
+
+    /**
+     * The turn-off's bisection: a model with status ok is on the side of a main-sequence end, one past the main
+     * sequence on the other, any other status stops it. Only slices at an age have a turn-off, and their models are
+     * each evolved from birth on their own, so the ends the catalogue holds are taken as they are.
+     */
+    private Refinement refineTurnoff(Search s, MassLine line, ModelRequest t) {
+        DoubleFunction<ModelRequest> at = mass -> new ModelRequest("pending", mass, t.initialMetals(),
+                t.initialHelium(), t.age(), t.physics());
+        Function<ModelOutcome, BracketSide> sideOf = o -> switch (o.status()) {
+            case OK -> s.lowState() ? BracketSide.LOW : BracketSide.HIGH;
+            case PAST_MAIN_SEQUENCE -> s.lowState() ? BracketSide.HIGH : BracketSide.LOW;
+            case FAILED, NOT_CONVERGED -> BracketSide.UNUSABLE;
+        };
+        return bisection.refineWithinKnownEndsBySide(line, at, s.bracket().lo() * Constants.M_SUN,
+                s.bracket().hi() * Constants.M_SUN, sideOf);
     }
 
     /**
@@ -249,7 +282,11 @@ public final class TransitionRefiner {
     }
 
     private boolean inState(Kind kind, CatalogueRow row) {
-        return kind == Kind.FULLY_CONVECTIVE ? TransitionFinder.isFullyConvective(row) : finder.hasConvectiveCore(row);
+        return switch (kind) {
+            case FULLY_CONVECTIVE -> TransitionFinder.isFullyConvective(row);
+            case CONV_CORE -> finder.hasConvectiveCore(row);
+            case TURNOFF -> row.isOk();
+        };
     }
 
     /** The new models of each slice by mass, numbered after the slice's highest refinement counter. */
