@@ -105,13 +105,16 @@ class CheckCommandTest {
         assertThat(cli.execute("check", birth.toString(), "--threads", "2").out())
                 .contains("about 158 new models after them").contains("about 24 s more");
         // a reviewer's old population, 1-13 Gyr from birth: 3 [Fe/H] x 4 ages, 0.05 Msun steps halved 4 times to
-        // 0.005 Msun: 12 x 2.5 x 4 = 120 models, each costing more the older its age (mean 7.25 Gyr: 0.3 s x (1 +
-        // 7.25 / 31) = 0.37 s), 44 s on one thread; the flat 0.3 s said 36 s (18 s on 2), and the run took 67 s
+        // 0.005 Msun: 12 x 2.5 x 4 = 120 models, and the turn-off's search at the ages past the 1.2 Msun star's
+        // lifetime (10 Gyr x 1.2^-2.5 = 6.3 Gyr: 10 and 13 Gyr, 6 slices x 4 = 24 models), each costing more the
+        // older its age (mean 7.25 Gyr: 0.3 s x (1 + 7.25 / 31) = 0.37 s), 53 s on one thread; the run added 124
+        // models (36 of them for its 9 turn-offs, found from 5 Gyr on) in 116 s on 2 loaded threads
         Path old = CliHarness.writeGrid(work, "old.yaml", "mass: {from: 0.1, to: 1.2, step: 0.05}\n"
                 + "metallicity: {fe_h_dex: [-2.0, -1.0, 0.0], helium: {primordial: 0.2471, enrichment: 1.5}}\n"
                 + "age: {gyr: [1, 5, 10, 13]}\ntransitions: {refine: true, tolerance_msun: 0.005}\n");
         assertThat(cli.execute("check", old.toString(), "--threads", "1").out())
-                .contains("about 120 new models after them").contains("about 44 s more")
+                .contains("about 144 new models after them").contains("about 53 s more")
+                .contains("one more for the turn-off in 6 slices old enough to have one")
                 .contains("about 0.37 s per model");
         Path off = CliHarness.writeGrid(work, "off.yaml", "mass: {values: [1.0, 2.0]}\n"
                 + "metallicity: {z: 0.014, y: 0.27}\nage: {gyr: [0], origin: zams}\ntransitions: {refine: false}\n");

@@ -23,7 +23,8 @@ public record RefinementEstimate(long models, double seconds, String basis) {
 
     /**
      * Searches per (Z, age, physics) slice: the fully convective limit, the mass above which every star has a core
-     * and, where small cores come and go, that window's two ends. Measured: the demo grid
+     * and, where small cores come and go, that window's two ends (the turn-off, where there is one, is counted apart:
+     * {@link #oldAges}). Measured: the demo grid
      * (grids/demo-cluster.yaml, 9 slices, brackets of 0.2 Msun bisected 7 times to 0.002 Msun) added 155 models,
      * 2.5 searches per slice; the 200-model zero-age
      * grid (benchmarks/grids/two-hundred-zero-age.yaml with refinement on, 4 slices, log-spaced masses) added 59,
@@ -50,6 +51,15 @@ public record RefinementEstimate(long models, double seconds, String basis) {
      * With it the reviewer's grid comes to 0.37 s per model, 32 s for 88 models on a quiet core.
      */
     static final double BIRTH_COST_DOUBLING_GYR = 31.0;
+
+    /**
+     * Main-sequence lifetime of a 1 Msun star, Gyr, in the scaling t = this x (M / Msun)^-{@value
+     * #LIFETIME_MASS_EXPONENT} by which {@code check} guesses which slices are old enough for the grid's heaviest star
+     * to have left the main sequence, so that the turn-off gets a search of its own (common practice, from memory;
+     * ours: 1 Msun at Z = 0.02 exhausts its centre at 9.77 Gyr, 1.2 Msun at [Fe/H] -2 before 5 Gyr, so it is rough).
+     */
+    static final double SOLAR_LIFETIME_GYR = 10.0;
+    static final double LIFETIME_MASS_EXPONENT = 2.5;
 
     /**
      * One-thread seconds of one new zero-age model, computed on a mass line of its own. Measured (same machine, quiet,
@@ -106,13 +116,30 @@ public record RefinementEstimate(long models, double seconds, String basis) {
                     + " Msun)");
         }
         long halvings = (long) Math.ceil(Math.log(medianGap / tolerance) / Math.log(2.0));
-        long slices = (long) grid.metallicities().size() * grid.ages().values().size() * grid.physics().size();
-        long models = Math.round(slices * SEARCHES_PER_SLICE * halvings);
+        long perAge = (long) grid.metallicities().size() * grid.physics().size();
+        long slices = perAge * grid.ages().values().size();
+        long turnoffSlices = perAge * oldAges(grid);
+        long models = Math.round((slices * SEARCHES_PER_SLICE + turnoffSlices) * halvings);
         double perModel = modelSeconds(grid);
         return new RefinementEstimate(models, models * perModel / threads, MessageNumbers.format(SEARCHES_PER_SLICE)
-                + " searches per (Z, age, physics) slice, " + Counts.of(halvings, "halving") + " of a "
+                + " searches per (Z, age, physics) slice" + (turnoffSlices == 0 ? ""
+                : ", one more for the turn-off in " + Counts.of(turnoffSlices, "slice") + " old enough to have one")
+                + ", " + Counts.of(halvings, "halving") + " of a "
                 + MessageNumbers.format(RunTimeEstimate.twoDigits(medianGap)) + " Msun bracket each, about "
                 + MessageNumbers.format(RunTimeEstimate.twoDigits(perModel)) + " s per model");
+    }
+
+    /**
+     * The grid's ages at which its heaviest star has likely left the main sequence ({@link #SOLAR_LIFETIME_GYR}), so
+     * that the slice has a turn-off to refine; none for zero-age and main-sequence-fraction ages (never past it).
+     */
+    private static long oldAges(GridSpec grid) {
+        if (!grid.ages().evolves() || grid.ages().fractions()) {
+            return 0;
+        }
+        double heaviest = grid.massesMsun().stream().mapToDouble(Double::doubleValue).max().orElse(0.0);
+        double lifetimeGyr = SOLAR_LIFETIME_GYR * Math.pow(heaviest, -LIFETIME_MASS_EXPONENT);
+        return grid.ages().values().stream().filter(age -> age >= lifetimeGyr).count();
     }
 
     /** One-thread seconds of one new model evolved from birth to {@code ageGyr}. */
