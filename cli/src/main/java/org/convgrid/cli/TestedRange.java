@@ -159,7 +159,7 @@ final class TestedRange {
             what = outside.size() + " metallicities, [Fe/H] = " + MessageNumbers.format(min(irons)) + " to "
                     + MessageNumbers.format(max(irons)) + ", give Z = " + derivedZ(min(zs)) + " to " + derivedZ(max(zs));
         }
-        // the ends in [Fe/H] under the helium of the point nearest each (the grid's law gives them all the same)
+        // the ends in [Fe/H] under the helium of the first point beyond each (the grid's law gives them all the same)
         String lowEnd = below.isEmpty() ? "" : ironAtEdge(below.get(0), MIN_Z);
         String highEnd = above.isEmpty() ? "" : ironAtEdge(above.get(above.size() - 1), MAX_Z);
         String where;

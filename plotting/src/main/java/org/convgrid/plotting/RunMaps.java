@@ -384,12 +384,12 @@ public final class RunMaps {
     /** The trend if some slice has a transition or a transient core window; otherwise {@link NothingToDraw}. */
     static TransitionTrendData found(TransitionTrendData trend) {
         if (trend.series().isEmpty() && trend.windows().isEmpty()) {
-            throw new NothingToDraw(NO_TRANSITION);
+            throw new NothingToDraw(NO_STRUCTURE_TRANSITION);
         }
         return trend;
     }
 
-    /** As {@link #found(TransitionTrendData)} for the trend against age. */
+    /** As {@link #found(TransitionTrendData)} for the trend against age, which draws the turn-off too. */
     static TransitionAgeTrendData found(TransitionAgeTrendData trend) {
         if (trend.series().isEmpty() && trend.windows().isEmpty()) {
             throw new NothingToDraw(NO_TRANSITION);
@@ -397,8 +397,13 @@ public final class RunMaps {
         return trend;
     }
 
+    /** Why the chart against Z is empty: it draws no turn-off, so a slice with only a turn-off must not be denied. */
+    private static final String NO_STRUCTURE_TRANSITION = "the models bracket no fully convective limit or "
+            + "convective-core onset in any slice (transitions.csv has none found; this chart does not draw the "
+            + "main-sequence turn-off)";
     private static final String NO_TRANSITION = "the models bracket no transition mass in any slice (transitions.csv "
-            + "has none found)";
+            + "has none found; one written before the main-sequence turn-off was added lacks it: convgrid transitions "
+            + "RUN_DIR adds it)";
 
     /** Which tracks get a zones-against-age chart: a bounded selection (see {@link AgeChartSelection}). */
     public static AgeChartSelection zonesAgainstAgeSelection(RunData run) {

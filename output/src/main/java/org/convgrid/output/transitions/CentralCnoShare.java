@@ -19,13 +19,17 @@ public final class CentralCnoShare {
     private CentralCnoShare() {
     }
 
-    /** The share, 0 to 1; NaN when the row lacks a centre (not ok, an edited cell) or nothing burns there. */
+    /**
+     * The share, 0 to 1; NaN when the row lacks a centre (not ok, an edited cell), nothing burns there, or Z = 0: a
+     * star without the cycle's catalysts has no share to judge its core by (its cores, at any temperature, are not
+     * "too cool" for a cycle that cannot run).
+     */
     public static double of(CatalogueRow row) {
         double t = row.centralTempK();
         double rho = row.centralDensityCgs();
         double x = row.centralHFrac();
         double z = row.zInit();
-        if (!(t > 0.0 && rho > 0.0 && x > 0.0 && z >= 0.0 && x + z <= 1.0)) {
+        if (!(t > 0.0 && rho > 0.0 && x > 0.0 && z > 0.0 && x + z <= 1.0)) {
             return Double.NaN;
         }
         NuclearNetwork network = StandardPhysics.nuclearNetwork();

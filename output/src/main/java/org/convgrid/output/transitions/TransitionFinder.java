@@ -67,8 +67,8 @@ public record TransitionFinder(double coreMassFractionThreshold) {
 
     /**
      * The share of the centre's nuclear energy from the CNO cycle ({@link CentralCnoShare}) below which a convective
-     * core cannot be the CNO cycle's: 1 %. There the cycle's steep temperature dependence (d ln eps / d ln T ~ 18
-     * against the pp chain's ~4) leaves the mixture's ~4.1, so what drives such a core is burning out of equilibrium:
+     * core cannot be the CNO cycle's: 1 %. A cycle that releases under a hundredth of the energy there cannot be what
+     * concentrates it enough to make the centre convective, so what drives such a core is burning out of equilibrium:
      * 3He on the young main sequence, 12C before the zero-age main sequence. A reader of {@code conv_core_onset_msun}
      * who takes it for the CNO-core onset is told (a practitioner's review did). It replaced a fixed 12 MK, which is
      * right only near solar Z: at Z = 0.02 the share is 0.05 % at 12 MK and 1 % near 14.5 MK (ours, {@code convgrid

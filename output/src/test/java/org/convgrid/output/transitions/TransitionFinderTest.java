@@ -201,8 +201,9 @@ class TransitionFinderTest {
         // the shape of the demo's Z = 0.008, 150 Myr slice: every star from 0.38 Msun up has a core, but below
         // ~1 Msun the CNO cycle gives their centres under 1 % of the energy (COOL_CORE_CNO_SHARE's Javadoc; shares
         // from the network as `convgrid probe` gives them at 80 g/cm^3, X 0.7, Z 0.02: 0.57 % at 14.0 MK, 5.5 % at
-        // 16.3 MK). Such a core cannot be the CNO cycle's: it cannot steepen the pp chain's d ln eps / d ln T ~ 4 with
-        // its ~18 (both from memory; Kippenhahn, Weigert & Weiss 2012, ch. 18)
+        // 16.3 MK). Such a core cannot be the CNO cycle's: a cycle giving a hundredth of the energy cannot be what
+        // makes the centre convective (the CNO-core onset near 1.1-1.2 Msun at solar Z: Kippenhahn, Weigert & Weiss
+        // 2012, ch. 22; from memory)
         List<CatalogueRow> rows = List.of(withCentralT(0.2, FC, 1, 6.0e6), withCentralT(0.3, ENV, 0, 7.2e6),
                 withCentralT(0.4, BOTH, 0.01, 8.0e6),
                 withCentralT(0.8, BOTH, 0.02, 11.9e6), withCentralT(1.0, BOTH, 0.03, 14.0e6),
@@ -221,7 +222,7 @@ class TransitionFinderTest {
     @Test
     void atLowMetallicityCoresInCentresHotterThanTheSunsAreStillNamedWhenThePpChainDrivesThem() {
         // [Fe/H] = -2 (Z = 1.843e-4), the shape of a review's 1 Gyr slice: cores from 0.35 Msun up, the 1.2 Msun one
-        // at 19.3 MK with X_c 0.5 (CNO share 0.63 %), all of them gone by 1.7 Gyr; the cycle's rate scales with its
+        // at 19.3 MK with X_c 0.5 (CNO share 0.63 % at 60 g/cm^3), all of them gone by 1.7 Gyr; the cycle's rate scales with its
         // catalysts, so at this Z it takes ~23 MK for a few per cent (6.3 % at 23 MK, 50 g/cm^3). A fixed 12 MK named
         // only the cores up to 0.7 Msun and let the rest read as CNO cores
         double z = 1.843e-4;
@@ -236,6 +237,10 @@ class TransitionFinderTest {
         List<CatalogueRow> solar = rows.stream().map(r -> withCentre(0.02, r.massMsun(), r.structureClass(),
                 r.coreCzMassFrac(), r.centralTempK(), r.centralDensityCgs(), r.centralHFrac())).toList();
         assertThat(finder.find(solar).get(0).notes()).startsWith("the cores at 0.35-0.7 Msun sit in centres");
+        // Z = 0: no catalysts, no share to judge a core by, and no claim that burning out of equilibrium drives it
+        List<CatalogueRow> metalFree = rows.stream().map(r -> withCentre(0.0, r.massMsun(), r.structureClass(),
+                r.coreCzMassFrac(), r.centralTempK(), r.centralDensityCgs(), r.centralHFrac())).toList();
+        assertThat(finder.find(metalFree).get(0).notes()).doesNotContain(TransitionFinder.COOL_CORES_WORDS);
     }
 
     @Test

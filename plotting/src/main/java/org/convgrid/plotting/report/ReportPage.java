@@ -132,7 +132,8 @@ public final class ReportPage {
         // with a mass step below the tolerance, stays a grid bracket, and the note would never go away
         double width = grid.refineToleranceMsun();
         boolean coarse = run.transitions().stream().anyMatch(t -> t.method() == TransitionMethod.GRID
-                && (wider(t.fullyConvective(), width) || wider(t.convCoreOnset(), width)));
+                && (wider(t.fullyConvective(), width) || wider(t.convCoreOnset(), width)
+                || wider(t.turnoff(), width)));
         if (!coarse) {
             return;
         }
@@ -315,12 +316,16 @@ public final class ReportPage {
                     .append("</p>\n");
             return;
         }
+        // the turn-off's two columns only when some slice is old enough to have one: a young grid's table would
+        // otherwise carry a column of "not found"
+        boolean turnoffs = run.transitions().stream().anyMatch(t -> t.turnoff().found());
         b.append("<h2 id=\"transitions\">Transition masses</h2>\n<table>\n<tr>" + ironHeading(names)
                 + "<th>Z</th><th>age</th><th>physics</th>"
                 + "<th>fully convective up to / M\u2609</th><th>bracket / M\u2609</th>"
                 + "<th>core in every star above / M\u2609</th><th>bracket / M\u2609</th>"
-                + "<th>small transient cores / M\u2609</th><th>method</th><th>tolerance / M\u2609</th>"
-                + "<th>notes</th></tr>\n");
+                + "<th>small transient cores / M\u2609</th>"
+                + (turnoffs ? "<th>main-sequence turn-off / M\u2609</th><th>bracket / M\u2609</th>" : "")
+                + "<th>method</th><th>tolerance / M\u2609</th><th>notes</th></tr>\n");
         for (TransitionRow t : run.transitions()) {
             b.append("<tr>").append(ironCell(names, t.slice().zInit())).append("<td class=\"num\">")
                     .append(SliceLabels.number(t.slice().zInit()))
@@ -331,6 +336,9 @@ public final class ReportPage {
             Span window = t.transientCore();
             b.append("<td class=\"num\">").append(window == null ? "none"
                     : SliceLabels.massRange(window, t.toleranceMsun())).append("</td>");
+            if (turnoffs) {
+                estimate(b, t.turnoff(), t.toleranceMsun());
+            }
             b.append("<td>").append(t.method().label()).append("</td><td class=\"num\">")
                     .append(Double.isFinite(t.toleranceMsun()) ? SliceLabels.number(t.toleranceMsun()) : "")
                     .append("</td><td>").append(Html.escape(t.notes())).append("</td></tr>\n");

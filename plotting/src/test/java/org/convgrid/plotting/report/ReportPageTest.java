@@ -34,6 +34,9 @@ class ReportPageTest {
         assertThat(html).startsWith("<!DOCTYPE html>").contains("<style>", "grids/synthetic.yaml",
                 "Models by status", "past_main_sequence", "Transition masses", "No evolution tracks in this run.");
         assertThat(html).doesNotContain("<script", "http://", "https://", "<link");
+        // the 4.57 Gyr slices have models past the main sequence above ones on it: the table gives the turn-off (a
+        // code review found it missing: "not found" beside a turn-off transitions.csv and the chart had)
+        assertThat(html).contains("<th>main-sequence turn-off / M\u2609</th><th>bracket / M\u2609</th>");
         Matcher m = IMG_SRC.matcher(html);
         int images = 0;
         while (m.find()) {
@@ -101,5 +104,12 @@ class ReportPageTest {
     @Test
     void escapesText() {
         assertThat(Html.escape("a<b & \"c\"")).isEqualTo("a&lt;b &amp; &quot;c&quot;");
+    }
+
+    @Test
+    void aGridWithoutATurnOffHasNoColumnForIt(@TempDir Path dir) throws Exception {
+        TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.1, 2.0, 12), new double[] {0.014}, new double[] {0}));
+        String html = Files.readString(ReportPage.write(dir));
+        assertThat(html).contains("Transition masses").doesNotContain("main-sequence turn-off");
     }
 }
