@@ -231,7 +231,9 @@ final class RunCommand implements Callable<Integer> {
                 parent.out().println(dir.transitions() + ": " + refinedLine(refined, file.spec(), seconds - sweepSeconds));
             }
             parent.out().flush();
-            if (RunFinishing.someModelsFailed(result.counts())) {
+            // the refinement's new models are catalogue rows too: one that failed makes the run's exit code 3, as
+            // `transitions --refine` does for the same models (the sweep's counts alone left it 0)
+            if (RunFinishing.someModelsFailed(result.counts()) || (refined != null && failedOrUnconverged(refined) > 0)) {
                 err.println("convgrid: some models failed or did not converge; their status_detail in "
                         + RunLayout.CATALOGUE + " says why");
                 err.flush();
@@ -251,12 +253,16 @@ final class RunCommand implements Callable<Integer> {
             return "nothing to refine (" + (oneMass(grid) ? "the grid has one mass, so no two models bracket a transition"
                     : "no bracket wider than " + tolerance) + ")";
         }
-        // a new model past the main sequence is the turn-off's answer, not a failure
-        long failedNew = refined.added().stream().filter(o -> o.status() == ModelStatus.FAILED
-                || o.status() == ModelStatus.NOT_CONVERGED).count();
+        long failedNew = failedOrUnconverged(refined);
         return "transitions refined to " + tolerance + " with " + Counts.of(refined.added().size(), "new model")
                 + (failedNew > 0 ? " (" + failedNew + " failed or not converged)" : "") + " in "
                 + Durations.describe(seconds);
+    }
+
+    /** The refinement's new models that failed or did not converge (one past the main sequence is an answer). */
+    private static long failedOrUnconverged(TransitionTables.Update refined) {
+        return refined.added().stream().filter(o -> o.status() == ModelStatus.FAILED
+                || o.status() == ModelStatus.NOT_CONVERGED).count();
     }
 
     /** Whether the grid has a single mass (its masses are strictly increasing): no two models bracket anything. */

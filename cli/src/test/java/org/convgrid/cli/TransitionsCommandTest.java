@@ -195,6 +195,21 @@ class TransitionsCommandTest {
     }
 
     @Test
+    void aRunWhoseRefinementHasAFailedNewModelExitsThreeAsTransitionsRefineDoes() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        // the first midpoint of the fully convective bracket 0.35-0.4 fails; every grid model is fine
+        CliHarness.Execution done = harness(new FakeMassLines(Set.of(0.375))).execute("run", grid.toString(), "--out",
+                "refining", "--quiet");
+        assertThat(done.code()).isEqualTo(3);
+        assertThat(done.err()).contains("some models failed or did not converge");
+        assertThat(transitions(work.resolve("refining")).get(0).notes())
+                .contains("the model at 0.375 Msun failed (fake line gave up)");
+        // without the failure, the same run exits 0
+        assertThat(harness(new FakeMassLines(Set.of())).execute("run", grid.toString(), "--out", "clean", "--quiet")
+                .code()).isEqualTo(0);
+    }
+
+    @Test
     void aFailedNewModelStopsItsBisectionSaysWhereAndExitsThree() throws Exception {
         Path dir = finishedRun("failing");
         // the first midpoint of the fully convective bracket 0.35-0.4
