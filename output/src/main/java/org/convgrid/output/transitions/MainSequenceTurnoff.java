@@ -29,9 +29,9 @@ final class MainSequenceTurnoff {
      */
     static TransitionEstimate of(List<CatalogueRow> byMass) {
         List<CatalogueRow> searched = searched(byMass);
-        List<Span> crossings = TransitionFinder.crossings(searched, ON_MAIN_SEQUENCE);
-        int highest = TransitionFinder.lastFrom(crossings, searched, ON_MAIN_SEQUENCE, true);
-        return TransitionFinder.estimate(byMass, crossings, highest, true);
+        List<Span> crossings = StateCrossings.of(searched, ON_MAIN_SEQUENCE);
+        int highest = StateCrossings.leaving(crossings, searched, ON_MAIN_SEQUENCE, true);
+        return StateCrossings.estimate(byMass, crossings, highest, true);
     }
 
     /**
@@ -52,7 +52,7 @@ final class MainSequenceTurnoff {
         }
         List<Span> above = okRunsAboveLowestPast(searched);
         if (!above.isEmpty()) {
-            notes.add("main sequence status changes " + TransitionFinder.timesInWords(turnoff.crossings().size())
+            notes.add("main sequence status changes " + StateCrossings.timesInWords(turnoff.crossings().size())
                     + " with mass: " + String.join(", ", above.stream().map(MassRangeText::of).toList())
                     + " Msun on the main sequence above models past it"
                     + (turnoff.found() ? " (the turn-off is read at the highest crossing)" : ""));

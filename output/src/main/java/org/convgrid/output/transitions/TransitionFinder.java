@@ -5,7 +5,6 @@ import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.function.Predicate;
 import org.convgrid.engine.convection.ConvectiveZoneFinder;
 import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.engine.request.ModelStatus;
@@ -139,14 +138,14 @@ public record TransitionFinder(double coreMassFractionThreshold) {
                     turnoffMethod, Double.NaN, String.join("; ", notes));
         }
         List<String> notes = new ArrayList<>();
-        List<Span> fcCrossings = crossings(usable, TransitionFinder::isFullyConvective);
-        TransitionEstimate fc = estimate(byMass, fcCrossings, lastFrom(fcCrossings, usable,
-                TransitionFinder::isFullyConvective, true), true);
+        List<Span> fcCrossings = StateCrossings.of(usable, TransitionFinder::isFullyConvective);
+        TransitionEstimate fc = StateCrossings.estimate(byMass, fcCrossings,
+                StateCrossings.leaving(fcCrossings, usable, TransitionFinder::isFullyConvective, true), true);
         List<CatalogueRow> coreSearch = withoutRecededCores(usable);
-        List<Span> coreCrossings = crossings(coreSearch, this::hasConvectiveCore);
+        List<Span> coreCrossings = StateCrossings.of(coreSearch, this::hasConvectiveCore);
         boolean coredAtTop = hasConvectiveCore(coreSearch.get(coreSearch.size() - 1));
         TransitionEstimate core = coredAtTop && !coreCrossings.isEmpty()
-                ? estimate(byMass, coreCrossings, coreCrossings.size() - 1, false)
+                ? StateCrossings.estimate(byMass, coreCrossings, coreCrossings.size() - 1, false)
                 : new TransitionEstimate(Double.NaN, null, coreCrossings, 0);
         Span window = transientWindow(coreSearch, coreCrossings);
         describeFullyConvective(fc, usable, byMass, notes);
@@ -182,48 +181,6 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         return end == 0 ? usable : usable.subList(0, end);
     }
 
-    /** Every change of {@code state} between neighbouring usable models, in increasing mass. */
-    static List<Span> crossings(List<CatalogueRow> usable, Predicate<CatalogueRow> state) {
-        List<Span> crossings = new ArrayList<>();
-        for (int i = 0; i + 1 < usable.size(); i++) {
-            if (state.test(usable.get(i)) != state.test(usable.get(i + 1))) {
-                crossings.add(new Span(usable.get(i).massMsun(), usable.get(i + 1).massMsun()));
-            }
-        }
-        return crossings;
-    }
-
-    /**
-     * Index of the crossing that leaves {@code state} (the highest one when {@code highest}), -1 when none: a
-     * crossing leaves the state when its lower model is in it.
-     */
-    static int lastFrom(List<Span> crossings, List<CatalogueRow> usable, Predicate<CatalogueRow> state,
-                                boolean highest) {
-        int chosen = -1;
-        for (int i = 0; i < crossings.size(); i++) {
-            double lo = crossings.get(i).lo();
-            boolean leaves = usable.stream().anyMatch(r -> r.massMsun() == lo && state.test(r));
-            if (leaves && (highest || chosen < 0)) {
-                chosen = i;
-            }
-        }
-        return chosen;
-    }
-
-    /**
-     * The estimate at crossing {@code index} (none when negative): reported at its lower end ({@code atLowEnd}, the
-     * last mass still in the state) or its upper end (the first mass past it).
-     */
-    static TransitionEstimate estimate(List<CatalogueRow> all, List<Span> crossings, int index,
-                                               boolean atLowEnd) {
-        if (index < 0) {
-            return new TransitionEstimate(Double.NaN, null, crossings, 0);
-        }
-        Span c = crossings.get(index);
-        int skipped = (int) all.stream().filter(r -> r.massMsun() > c.lo() && r.massMsun() < c.hi()).count();
-        return new TransitionEstimate(atLowEnd ? c.lo() : c.hi(), c, crossings, skipped);
-    }
-
     /**
      * The lowest run of cored models entered from below and left again above: from the upper end of its crossing
      * into a core to the lower end of its crossing out; null when there is none.
@@ -253,7 +210,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
                     : "fully convective only in an unexpected mass order");
         }
         if (fc.crossings().size() > 1) {
-            notes.add("fully convective changes " + timesInWords(fc.crossings().size()) + " with mass");
+            notes.add("fully convective changes " + StateCrossings.timesInWords(fc.crossings().size()) + " with mass");
         }
         if (fc.skippedInBracket() > 0) {
             notes.add("fully convective bracket widened past " + SkippedModelsText.of(byMass, fc.bracket()));
@@ -272,7 +229,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         // a clean slice crosses once (no window) or three times (window, then the lasting core)
         int expected = (window == null ? 0 : 2) + (coredAtTop ? 1 : 0);
         if (core.crossings().size() > expected) {
-            notes.add("convective core changes " + timesInWords(core.crossings().size()) + " with mass"
+            notes.add("convective core changes " + StateCrossings.timesInWords(core.crossings().size()) + " with mass"
                     + (window == null ? "" : "; the lowest window of cores is the transient one"
                     + otherWindows(searched, window, core)));
         }
@@ -323,10 +280,6 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         return runs.isEmpty() ? "" : ", others at " + runs.stream().map(s -> s.lo() == s.hi()
                 ? CsvNumbers.format(s.lo()) : CsvNumbers.format(s.lo()) + "-" + CsvNumbers.format(s.hi()))
                 .collect(java.util.stream.Collectors.joining(", ")) + " Msun";
-    }
-
-    static String timesInWords(int times) {
-        return times == 1 ? "once" : times == 2 ? "twice" : times + " times";
     }
 
     /**
