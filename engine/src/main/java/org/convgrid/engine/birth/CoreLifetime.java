@@ -65,7 +65,7 @@ final class CoreLifetime {
      * The age, between the last model and this one, at which the core appeared or vanished: where the centre's
      * stability excess crosses zero when the centre changed between convective and radiative (the same crossing as
      * the radiative core's appearance, smooth in age), else where the central zone's top crosses the core threshold
-     * (a zone that grew past it or shrank below it); this model's age when neither changed (the first model, or a
+     * in ln(top) (a zone that grew past it or shrank below it); this model's age when neither changed (the first model, or a
      * whole-star zone that became a core).
      */
     private double between(double age, double centreExcess, double centralZoneTop) {
@@ -76,7 +76,13 @@ final class CoreLifetime {
             return AgeCrossing.of(lastAge, lastCentreExcess, age, centreExcess, 0.0);
         }
         if ((lastCentralZoneTop > coreThreshold) != (centralZoneTop > coreThreshold)) {
-            return AgeCrossing.of(lastAge, lastCentralZoneTop, age, centralZoneTop, coreThreshold);
+            // in ln(top): a small core grows or fades by a factor per unit time more than by an amount, and the
+            // steps of old low-mass stars are ~1 Gyr long (a code review's point); both tops are above 0 here, as
+            // the centre stayed convective
+            return lastCentralZoneTop > 0.0 && centralZoneTop > 0.0
+                    ? AgeCrossing.of(lastAge, Math.log(lastCentralZoneTop), age, Math.log(centralZoneTop),
+                            Math.log(coreThreshold))
+                    : AgeCrossing.of(lastAge, lastCentralZoneTop, age, centralZoneTop, coreThreshold);
         }
         return age;
     }

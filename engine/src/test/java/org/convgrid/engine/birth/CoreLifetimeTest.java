@@ -1,6 +1,7 @@
 package org.convgrid.engine.birth;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
 
 import org.junit.jupiter.api.Test;
 
@@ -71,10 +72,11 @@ class CoreLifetimeTest {
         CoreLifetime ended = new CoreLifetime(THRESHOLD);
         ended.observe(100.0, -0.5, 0.0, false, true, true);
         ended.observe(200.0, 0.1, 0.0005, false, true, true);  // a central zone below the threshold: no core yet
-        ended.observe(300.0, 0.3, 0.0025, true, true, true);   // past it between the two: at a quarter of the step
+        // past it between the two, in ln(top): ln 2 / ln 5 = 0.4307 of the step (linearly it would be a quarter)
+        ended.observe(300.0, 0.3, 0.0025, true, true, true);
         ended.observe(9290.0, 0.2, 0.03, true, true, true);
         ended.observe(10000.0, -0.6, 0.0, false, true, true);
-        assertThat(ended.onset()).isEqualTo(225.0);
+        assertThat(ended.onset()).isCloseTo(200.0 + 100.0 * Math.log(2.0) / Math.log(5.0), within(1e-9));
         // gone in the track's last model only: not seen to stay gone, so dated there, equal to the track's end
         assertThat(ended.end()).isEqualTo(10000.0);
         ended.observe(13000.0, -0.9, 0.0, false, true, true);
