@@ -67,8 +67,19 @@ public final class MassBisection {
     }
 
     /**
-     * As {@link #refineWithinKnownEnds}, with the side decided from any outcome, failed ones included: for a
-     * transition a status marks (a model past the main sequence is on the high side of the turn-off).
+     * As {@link #refine}, with the side decided from any outcome, failed ones included: for a transition a status
+     * marks (a model past the main sequence is on the high side of the turn-off) as for one a structure marks.
+     *
+     * @param sideOf the side of an outcome; {@link BracketSide#UNUSABLE} stops the bisection before it
+     */
+    public Refinement refineBySide(MassLine line, DoubleFunction<ModelRequest> requestAt, double lowMass,
+                                   double highMass, Function<ModelOutcome, BracketSide> sideOf) {
+        return refine(line, requestAt, lowMass, highMass, sideOf, true);
+    }
+
+    /**
+     * As {@link #refineWithinKnownEnds}, with the side decided from any outcome, failed ones included (see
+     * {@link #refineBySide}).
      *
      * @param sideOf the side of an outcome; {@link BracketSide#UNUSABLE} stops the bisection before it
      */

@@ -10,7 +10,6 @@ import java.util.Map;
 import java.util.Set;
 import java.util.function.DoubleFunction;
 import java.util.function.Function;
-import java.util.function.Predicate;
 import org.convgrid.engine.batch.ProgressListener;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
@@ -215,38 +214,39 @@ public final class TransitionRefiner {
                 first.bracket()), first.failed());
         List<Refinement> done = new ArrayList<>(task.size());
         for (Search s : task) {
-            if (s.kind() == Kind.TURNOFF) {
-                done.add(refineTurnoff(s, line, t));
-                continue;
-            }
-            Predicate<ModelOutcome.Solved> lowSide = o -> inState(s.kind(), OutcomeRows.toRow(o)) == s.lowState();
+            Function<ModelOutcome, BracketSide> sideOf = o -> side(s, o);
             DoubleFunction<ModelRequest> at = mass -> new ModelRequest("pending", mass, t.initialMetals(),
                     t.initialHelium(), t.age(), t.physics());
             double lo = s.bracket().lo() * Constants.M_SUN;
             double hi = s.bracket().hi() * Constants.M_SUN;
-            // zero-age lines seed each model from the recomputed ends; a model at an age is evolved on its own, so
-            // recomputing the ends the catalogue already holds would only double the cost of a short search
-            done.add(t.age().isZeroAge() ? bisection.refine(line, at, lo, hi, lowSide)
-                    : bisection.refineWithinKnownEnds(line, at, lo, hi, lowSide));
+            // zero-age lines seed each model from the recomputed ends; a model at an age (every turn-off's) is evolved
+            // on its own, so recomputing the ends the catalogue already holds would only double the cost of a search
+            done.add(t.age().isZeroAge() ? bisection.refineBySide(line, at, lo, hi, sideOf)
+                    : bisection.refineWithinKnownEndsBySide(line, at, lo, hi, sideOf));
         }
         return done;
     }
 
     /**
-     * The turn-off's bisection: a model with status ok is on the side of a main-sequence end, one past the main
-     * sequence on the other, any other status stops it. Only slices at an age have a turn-off, and their models are
-     * each evolved from birth on their own, so the ends the catalogue holds are taken as they are.
+     * The side of a new model in search {@code s}: the turn-off's by the status alone (ok is on the main sequence,
+     * {@code past_main_sequence} past it, any other status stops the search), the other kinds' by the solved model's
+     * structure (an unsolved model stops the search).
      */
-    private Refinement refineTurnoff(Search s, MassLine line, ModelRequest t) {
-        DoubleFunction<ModelRequest> at = mass -> new ModelRequest("pending", mass, t.initialMetals(),
-                t.initialHelium(), t.age(), t.physics());
-        Function<ModelOutcome, BracketSide> sideOf = o -> switch (o.status()) {
-            case OK -> s.lowState() ? BracketSide.LOW : BracketSide.HIGH;
-            case PAST_MAIN_SEQUENCE -> s.lowState() ? BracketSide.HIGH : BracketSide.LOW;
-            case FAILED, NOT_CONVERGED -> BracketSide.UNUSABLE;
-        };
-        return bisection.refineWithinKnownEndsBySide(line, at, s.bracket().lo() * Constants.M_SUN,
-                s.bracket().hi() * Constants.M_SUN, sideOf);
+    private BracketSide side(Search s, ModelOutcome o) {
+        if (s.kind() == Kind.TURNOFF) {
+            return switch (o.status()) {
+                case OK -> sideOf(true, s);
+                case PAST_MAIN_SEQUENCE -> sideOf(false, s);
+                case FAILED, NOT_CONVERGED -> BracketSide.UNUSABLE;
+            };
+        }
+        return o instanceof ModelOutcome.Solved solved ? sideOf(inState(s.kind(), OutcomeRows.toRow(solved)), s)
+                : BracketSide.UNUSABLE;
+    }
+
+    /** The low side when a model is in the state the search's bracket has below its crossing, else the high side. */
+    private static BracketSide sideOf(boolean inState, Search s) {
+        return inState == s.lowState() ? BracketSide.LOW : BracketSide.HIGH;
     }
 
     /**
