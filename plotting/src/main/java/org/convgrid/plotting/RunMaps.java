@@ -24,6 +24,9 @@ import org.convgrid.plotting.label.AgeGroups;
 import org.convgrid.plotting.label.MetallicityNames;
 import org.convgrid.plotting.label.PhysicsKey;
 import org.convgrid.plotting.label.SliceLabels;
+import org.convgrid.plotting.seismic.PeriodSpacingAgainstAge;
+import org.convgrid.plotting.seismic.PeriodSpacingAgainstAgeRenderer;
+import org.convgrid.plotting.seismic.PeriodSpacingData;
 import org.convgrid.plotting.style.ChartFiles;
 import org.convgrid.plotting.style.StyledChart;
 import org.convgrid.plotting.tracks.AgeChartSelection;
@@ -50,7 +53,9 @@ import org.convgrid.plotting.zones.ZoneMapRenderer;
  * ({@code transitions-vs-age_<physics>.png}); per Z and physics, when at least two models have a turnover time, the
  * convective turnover times against mass ({@code turnover-vs-mass_z<Z>_<physics>.png}); for a bounded selection of
  * the evolution tracks in tracks/ ({@link AgeChartSelection}), their convective zones against age
- * ({@code zones-age_m<mass>_z<Z>_<physics>.png}). With tracks, the HR diagrams also show the tracks and the
+ * ({@code zones-age_m<mass>_z<Z>_<physics>.png}); per Z and physics, when some track has a g-mode cavity, the dipole
+ * period spacing of up to {@link PeriodSpacingAgainstAge#MAX_LINES} of them against age
+ * ({@code period-spacing-vs-age_z<Z>_<physics>.png}). With tracks, the HR diagrams also show the tracks and the
  * isochrones at the grid's ages. A grid of {@code ms_fraction} ages, whose stars each have their own ages in Gyr, is
  * grouped by fraction ({@link AgeGroups}): a zone map per Z, fraction and physics
  * ({@code zones-mass_z<Z>_msf<fraction>_<physics>.png}), HR lines of equal fraction, and no transition charts.
@@ -67,8 +72,10 @@ public final class RunMaps {
     private static final String ZONES_AGE_FILES = "zones-age";
     private static final String ZONES_AGE_DEPTH_FILES = "zones-age-depth";
     private static final String TURNOVER_FILES = "turnover-vs-mass";
+    private static final String PERIOD_SPACING_FILES = "period-spacing-vs-age";
     private static final Set<String> CHART_FILE_KINDS = Set.of(ZONES_MASS_FILES, ZONES_RADIUS_FILES, HR_FILES,
-            TRENDS_FILES, TRENDS_AGE_FILES, TURNOVER_FILES, ZONES_AGE_FILES, ZONES_AGE_DEPTH_FILES);
+            TRENDS_FILES, TRENDS_AGE_FILES, TURNOVER_FILES, ZONES_AGE_FILES, ZONES_AGE_DEPTH_FILES,
+            PERIOD_SPACING_FILES);
     /** Fewer models with a turnover time than this and a metallicity gets no turnover chart: one point is no trend. */
     static final int TURNOVER_MIN_MODELS = 2;
 
@@ -233,6 +240,7 @@ public final class RunMaps {
             // each of its rows holds one star, so there is no transition to chart (the report says why)
             entries.addAll(turnoverAgainstMass(run, physics));
             entries.addAll(zonesAgainstAge(run));
+            entries.addAll(periodSpacingAgainstAge(run, physics));
             return entries;
         }
         for (PhysicsKey p : physics) {
@@ -267,6 +275,33 @@ public final class RunMaps {
         }
         entries.addAll(turnoverAgainstMass(run, physics));
         entries.addAll(zonesAgainstAge(run));
+        entries.addAll(periodSpacingAgainstAge(run, physics));
+        return entries;
+    }
+
+    /**
+     * One period-spacing chart per physics and Z whose tracks give a period spacing at two steps or more (a star with
+     * a radiative region); grouped by Z.
+     */
+    private static List<MapEntry> periodSpacingAgainstAge(RunData run, Set<PhysicsKey> physics) {
+        List<MapEntry> entries = new ArrayList<>();
+        MetallicityNames names = run.metallicityNames();
+        for (PhysicsKey p : physics) {
+            List<Double> zs = run.trackedModels().stream().filter(t -> t.origin().physics().equals(p))
+                    .map(t -> t.origin().zInit()).distinct().sorted().toList();
+            for (double z : zs) {
+                PeriodSpacingData data = PeriodSpacingAgainstAge.build(p, z, run.trackedModels(), run::timeline);
+                if (data.lines().isEmpty()) {
+                    continue;
+                }
+                entries.add(new MapEntry(PERIOD_SPACING_FILES + "_z" + SliceLabels.number(z) + "_" + p.fileStem()
+                        + ".png", MapEntry.PERIOD_SPACING, groupOf(z, p, run),
+                        "Dipole g-mode period spacing \u0394\u03a0\u2081 (period_spacing_l1_s of the tracks) against "
+                                + "age, one colour per star, dotted before the main sequence, " + names.of(z) + ", "
+                                + p.describe() + ". Model values from first-order asymptotics.",
+                        () -> PeriodSpacingAgainstAgeRenderer.render(data, names)));
+            }
+        }
         return entries;
     }
 

@@ -13,6 +13,7 @@ import static org.convgrid.output.track.TrackColumns.LUMINOSITY;
 import static org.convgrid.output.track.TrackColumns.MASS_FRAC_INNER;
 import static org.convgrid.output.track.TrackColumns.MASS_FRAC_OUTER;
 import static org.convgrid.output.track.TrackColumns.NUCLEAR_FRACTION;
+import static org.convgrid.output.track.TrackColumns.PERIOD_SPACING_L1;
 import static org.convgrid.output.track.TrackColumns.PHASE;
 import static org.convgrid.output.track.TrackColumns.RADIUS;
 import static org.convgrid.output.track.TrackColumns.STEP_INDEX;
@@ -170,7 +171,7 @@ public final class TrackReader {
                     number(r, column = TEFF), number(r, column = LOG_G), number(r, column = CENTRAL_TEMP),
                     number(r, column = CENTRAL_DENSITY), number(r, column = CENTRAL_H),
                     number(r, column = SURFACE_LI), zones(centralTop, envelopeBase), burning,
-                    number(r, column = NUCLEAR_FRACTION));
+                    number(r, column = NUCLEAR_FRACTION), number(r, column = PERIOD_SPACING_L1));
         } catch (IllegalArgumentException e) {
             throw new OutputFormatException("track row " + r.getRecordNumber() + " (line " + (r.getRecordNumber() + 1)
                     + "), column '" + column + "': " + e.getMessage(), e);

@@ -20,17 +20,20 @@ import org.convgrid.output.Span;
  * @param burningZone the hydrogen-burning region in m/M (energy generation above the writer's threshold), null
  *     when the file gives none
  * @param nuclearLuminosityFrac L_nuc / L; NaN when the file gives none (tracks from the zero-age main sequence)
+ * @param periodSpacingL1S the dipole g-mode period spacing Delta Pi_1, s; NaN without a g-mode cavity or when the file
+ *     has no such column (written before it)
  */
 public record TrackStep(double ageGyr, String phase, double luminosityLsun, double radiusRsun, double teffK,
                         double logGCgs, double centralTempK, double centralDensityCgs, double centralHFrac,
-                        double surfaceLiRel, List<Span> convZones, Span burningZone, double nuclearLuminosityFrac) {
+                        double surfaceLiRel, List<Span> convZones, Span burningZone, double nuclearLuminosityFrac,
+                        double periodSpacingL1S) {
 
-    /** A step without L_nuc / L. */
+    /** A step without L_nuc / L and without a period spacing. */
     public TrackStep(double ageGyr, String phase, double luminosityLsun, double radiusRsun, double teffK,
                      double logGCgs, double centralTempK, double centralDensityCgs, double centralHFrac,
                      double surfaceLiRel, List<Span> convZones, Span burningZone) {
         this(ageGyr, phase, luminosityLsun, radiusRsun, teffK, logGCgs, centralTempK, centralDensityCgs, centralHFrac,
-                surfaceLiRel, convZones, burningZone, Double.NaN);
+                surfaceLiRel, convZones, burningZone, Double.NaN, Double.NaN);
     }
 
     public TrackStep {
@@ -46,6 +49,7 @@ public record TrackStep(double ageGyr, String phase, double luminosityLsun, doub
     /** The same step with other convective zones (those of the zone table). */
     TrackStep withZones(List<Span> zones) {
         return new TrackStep(ageGyr, phase, luminosityLsun, radiusRsun, teffK, logGCgs, centralTempK,
-                centralDensityCgs, centralHFrac, surfaceLiRel, zones, burningZone, nuclearLuminosityFrac);
+                centralDensityCgs, centralHFrac, surfaceLiRel, zones, burningZone, nuclearLuminosityFrac,
+                periodSpacingL1S);
     }
 }

@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.Set;
 import org.convgrid.plotting.label.MetallicityNames;
 import org.convgrid.plotting.label.SliceLabels;
+import org.convgrid.plotting.style.AgeScale;
 import org.convgrid.plotting.style.ChartNotes;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.LogAxis;

@@ -71,7 +71,7 @@ public record AgeChartSelection(List<TrackedModel> chosen, int available, List<D
     }
 
     /** {@code n} items spread evenly over the list, first and last included (all of them when there are few). */
-    static <T> List<T> spread(List<T> items, int n) {
+    public static <T> List<T> spread(List<T> items, int n) {
         if (items.size() <= n) {
             return List.copyOf(items);
         }

@@ -28,7 +28,7 @@ class BurningShareTest {
 
     private static TrackStep step(double ageGyr, double burningTop, double nuclearShare) {
         return new TrackStep(ageGyr, "pre_main_sequence", 1.0, 1.0, 5000, 4.4, 1e7, 50, 0.7, 1.0,
-                List.of(new Span(0.9, 1.0)), new Span(0.0, burningTop), nuclearShare);
+                List.of(new Span(0.9, 1.0)), new Span(0.0, burningTop), nuclearShare, Double.NaN);
     }
 
     @Test

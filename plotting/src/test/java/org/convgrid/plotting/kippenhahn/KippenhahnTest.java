@@ -16,6 +16,7 @@ import org.convgrid.output.track.TrackReader;
 import org.convgrid.output.track.TrackStep;
 import org.convgrid.plotting.TestTracks;
 import org.convgrid.plotting.label.PhysicsKey;
+import org.convgrid.plotting.style.AgeScale;
 import org.convgrid.plotting.style.ChartFiles;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.tracks.TrackOrigin;
