@@ -11,8 +11,6 @@ import org.convgrid.engine.calibration.SolarCalibration;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.output.AtomicFiles;
-import org.convgrid.output.profile.ProfileMeta;
-import org.convgrid.output.profile.ProfileRows;
 import org.convgrid.output.profile.ProfileWriter;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -121,9 +119,8 @@ final class CalibrateSunCommand implements Callable<Integer> {
         main.err().println("preset: mixing length " + String.format(Locale.ROOT, "%.5f", sun.mixingLength())
                 + " written to " + target);
         if (profileTarget != null) {
-            ProfileMeta meta = ProfileMeta.of(sun.sun().request(), sun.model(), !noSettling, ToolVersion.current(),
-                    ToolVersion.commit());
-            AtomicFiles.write(profileTarget, out -> ProfileWriter.write(meta, ProfileRows.of(sun.model()), out));
+            ProfileWriter.writeFile(profileTarget, sun.sun().request(), sun.model(), !noSettling,
+                    ToolVersion.current(), ToolVersion.commit());
             main.err().println("profile: " + sun.model().profile().size() + " shells written to " + profileTarget);
         }
         return ExitCodes.OK;

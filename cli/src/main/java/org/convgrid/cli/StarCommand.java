@@ -27,13 +27,10 @@ import org.convgrid.engine.zams.ZeroAgeRequests;
 import org.convgrid.grids.HeliumLaw;
 import org.convgrid.grids.IronToMetals;
 import org.convgrid.grids.MetallicityPoint;
-import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.IronAbundance;
 import org.convgrid.output.catalogue.CatalogueWriter;
 import org.convgrid.output.catalogue.OutcomeRows;
 import org.convgrid.output.profile.ProfileColumns;
-import org.convgrid.output.profile.ProfileMeta;
-import org.convgrid.output.profile.ProfileRows;
 import org.convgrid.output.profile.ProfileWriter;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
@@ -215,9 +212,8 @@ final class StarCommand implements Callable<Integer> {
         if (profile != null) {
             StellarModel model = answer.model();
             Path target = main.context().resolve(profile);
-            ProfileMeta meta = ProfileMeta.of(outcome.request(), model, false, ToolVersion.current(),
+            ProfileWriter.writeFile(target, outcome.request(), model, false, ToolVersion.current(),
                     ToolVersion.commit());
-            AtomicFiles.write(target, out -> ProfileWriter.write(meta, ProfileRows.of(model), out));
             main.err().println("profile: " + model.profile().size() + " shells written to " + target);
         }
         return ExitCodes.OK;

@@ -1,16 +1,15 @@
 package org.convgrid.grids;
 
 import org.convgrid.engine.calibration.CalibrationSettings;
+import org.convgrid.engine.calibration.SolarScaledMetallicity;
 import org.convgrid.grids.words.MessageNumbers;
 
 /**
- * The initial metal mass fraction Z of a star whose spectroscopic [Fe/H] is given, for a solar-scaled mixture:
- * [M/H] = [Fe/H], so Z/X = (Z/X)_sun 10^[Fe/H], and with X = 1 - Y - Z,
- * Z = (Z/X)(1 - Y) / (1 + Z/X) for a given Y, or, with Y = Y_p + (dY/dZ) Z,
- * Z = (Z/X)(1 - Y_p) / (1 + (Z/X)(1 + dY/dZ)). The usual conversion (common practice, no single published source);
- * it ignores alpha enhancement (for alpha-enhanced populations give Z itself) and takes the reference Z/X as the
- * present solar surface value the opacity tables' mixture has (Grevesse &amp; Noels 1993: 0.0245) unless told
- * otherwise.
+ * The initial metal mass fraction Z of a star whose spectroscopic [Fe/H] is given, for a solar-scaled mixture, as the
+ * grid reader needs it: the relation itself (both ways, and its source) is engine's {@link SolarScaledMetallicity};
+ * here are the ranges a grid file may state and the wording of a refused value. It ignores alpha enhancement (for
+ * alpha-enhanced populations give Z itself) and takes the reference Z/X as the present solar surface value the opacity
+ * tables' mixture has (Grevesse &amp; Noels 1993: 0.0245) unless told otherwise.
  *
  * @param solarMetalsToHydrogen the Sun's Z/X that [Fe/H] = 0 stands for, &gt; 0
  */
@@ -26,20 +25,17 @@ public record IronToMetals(double solarMetalsToHydrogen) {
     public static final double MAX_SOLAR_RATIO = 0.1;
 
     public IronToMetals {
-        if (!(solarMetalsToHydrogen > 0.0 && Double.isFinite(solarMetalsToHydrogen))) {
-            throw new IllegalArgumentException("the solar Z/X must be positive, got " + solarMetalsToHydrogen);
-        }
+        SolarScaledMetallicity.requireSolarRatio(solarMetalsToHydrogen);
     }
 
     /** Z/X of a star with this [Fe/H]. */
     public double metalsToHydrogen(double ironDex) {
-        return solarMetalsToHydrogen * Math.pow(10.0, ironDex);
+        return relation().metalsToHydrogen(ironDex);
     }
 
     /** Z for [Fe/H] when the helium follows {@code law}. */
     public double metals(double ironDex, HeliumLaw law) {
-        double ratio = metalsToHydrogen(ironDex);
-        return ratio * (1.0 - law.primordial()) / (1.0 + ratio * (1.0 + law.enrichment()));
+        return relation().metals(ironDex, law.primordial(), law.enrichment());
     }
 
     /**
@@ -53,12 +49,15 @@ public record IronToMetals(double solarMetalsToHydrogen) {
 
     /** The [Fe/H] of a composition of metal and helium mass fractions Z and Y: the inverse of the conversions here. */
     public double ironDex(double metals, double helium) {
-        return Math.log10(metals / (1.0 - helium - metals) / solarMetalsToHydrogen);
+        return relation().ironDex(metals, helium);
     }
 
     /** Z for [Fe/H] at the helium mass fraction {@code helium}. */
     public double metals(double ironDex, double helium) {
-        double ratio = metalsToHydrogen(ironDex);
-        return ratio * (1.0 - helium) / (1.0 + ratio);
+        return relation().metals(ironDex, helium);
+    }
+
+    private SolarScaledMetallicity relation() {
+        return new SolarScaledMetallicity(solarMetalsToHydrogen);
     }
 }

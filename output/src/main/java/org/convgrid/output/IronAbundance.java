@@ -3,11 +3,13 @@ package org.convgrid.output;
 import java.math.BigDecimal;
 import java.math.RoundingMode;
 import org.convgrid.engine.calibration.CalibrationSettings;
+import org.convgrid.engine.calibration.SolarScaledMetallicity;
 
 /**
  * How a run's tables give a composition's spectroscopic [Fe/H] ({@code fe_h_dex}), so that a user who asked for
  * [Fe/H] = -0.3 finds his rows without converting Z back by hand: for a solar-scaled mixture [Fe/H] = [M/H] =
- * log10((Z/X) / (Z/X)_sun) with X = 1 - Y - Z, the inverse of the grid reader's conversion (grids' IronToMetals).
+ * log10((Z/X) / (Z/X)_sun) with X = 1 - Y - Z, by engine's {@link SolarScaledMetallicity}, the relation the grid
+ * reader turns [Fe/H] into Z with.
  * It is computed from {@code z_init} and {@code y_init} as the tables write them (seven significant digits), so a
  * table rewritten from its own cells (a resume, a merge, a table of an earlier layout) gives the same cell as the run
  * that first wrote it; rounded to {@value #DECIMALS} decimals, which gives back every [Fe/H] a grid file states to
@@ -26,9 +28,7 @@ public record IronAbundance(double solarZOverX, boolean givenByGrid) {
     public static final int DECIMALS = 4;
 
     public IronAbundance {
-        if (!(solarZOverX > 0.0 && Double.isFinite(solarZOverX))) {
-            throw new IllegalArgumentException("the solar Z/X must be positive, got " + solarZOverX);
-        }
+        SolarScaledMetallicity.requireSolarRatio(solarZOverX);
     }
 
     /**
@@ -41,7 +41,7 @@ public record IronAbundance(double solarZOverX, boolean givenByGrid) {
         if (!(z > 0.0) || Double.isNaN(y)) {
             return Double.NaN;
         }
-        double exact = Math.log10(z / (1.0 - y - z) / solarZOverX);
+        double exact = new SolarScaledMetallicity(solarZOverX).ironDex(z, y);
         if (!Double.isFinite(exact)) {
             // no hydrogen left after the tables' rounding, or an edited cell: no [Fe/H] rather than an exception
             return Double.NaN;

@@ -10,6 +10,7 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.convection.StructureClass;
@@ -70,10 +71,10 @@ public final class TestRuns {
             ModelStatus status = fail ? ModelStatus.NOT_CONVERGED : ModelStatus.PAST_MAIN_SEQUENCE;
             String why = fail ? "Newton budget of 40 iterations used up, last correction 3.2e-3"
                     : "core hydrogen exhausted at " + SliceLabels.number(lifetime) + " Gyr";
-            return new CatalogueRow(id, m, z, 0.2485 + 1.5 * z, p.mixingLength(), p.overshoot(), age, "", status, why,
-                    Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN,
-                    null, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, List.of(), 40,
-                    StabilityCriterion.SCHWARZSCHILD, 1.0, Double.NaN);
+            return CatalogueRow.builder(id, status).massMsun(m).zInit(z).yInit(0.2485 + 1.5 * z)
+                    .mixingLength(p.mixingLength()).overshootHp(p.overshoot()).ageGyr(age).statusDetail(why)
+                    .solverIterations(40).criterion(StabilityCriterion.SCHWARZSCHILD).opacityScale(1.0)
+                    .overshootProfile(OvershootScheme.STEP).build();
         }
         // Z = 0 rows (metal-free grids) get the factor of Z = 1e-4 instead of an infinite one
         double metalFactor = Math.pow(0.014 / Math.max(z, 1e-4), 0.12);
@@ -113,11 +114,16 @@ public final class TestRuns {
         double logG = Math.log10(org.convgrid.engine.units.Constants.GM_SUN
                 / (org.convgrid.engine.units.Constants.R_SUN * org.convgrid.engine.units.Constants.R_SUN))
                 + Math.log10(m / (radius * radius));
-        return new CatalogueRow(id, m, z, 0.2485 + 1.5 * z, p.mixingLength(), p.overshoot(), age,
-                CatalogueRow.MAIN_SEQUENCE, ModelStatus.OK, "", lum, radius, teff, logG, 1.5e7 * Math.pow(m, 0.5),
-                150.0 / m, 0.7 * (1 - 0.5 * age / lifetime), Double.NaN, cls, core, core, envBase, envRadius,
-                (1.0 - envBase) * m, envBase < 1 ? 20.0 / m : Double.NaN, zones, 7,
-                StabilityCriterion.SCHWARZSCHILD, 1.0, Double.NaN);
+        return CatalogueRow.builder(id, ModelStatus.OK).massMsun(m).zInit(z).yInit(0.2485 + 1.5 * z)
+                .mixingLength(p.mixingLength()).overshootHp(p.overshoot()).ageGyr(age)
+                .phase(CatalogueRow.MAIN_SEQUENCE).luminosityLsun(lum).radiusRsun(radius).teffK(teff).logGCgs(logG)
+                .centralTempK(1.5e7 * Math.pow(m, 0.5)).centralDensityCgs(150.0 / m)
+                .centralHFrac(0.7 * (1 - 0.5 * age / lifetime)).structureClass(cls)
+                .coreCzMassFrac(core).coreCzRadiusFrac(core)
+                .envCzBaseMassFrac(envBase).envCzBaseRadiusFrac(envRadius).envCzMassMsun((1.0 - envBase) * m)
+                .turnoverTimeDays(envBase < 1 ? 20.0 / m : Double.NaN).zones(zones).solverIterations(7)
+                .criterion(StabilityCriterion.SCHWARZSCHILD).opacityScale(1.0)
+                .coreMixedMassFrac(core).overshootProfile(OvershootScheme.STEP).build();
     }
 
     private static double round(double v) {

@@ -47,12 +47,8 @@ public record KeptCatalogue(Set<String> ids, boolean hasHeader, long droppedByte
         Set<String> ids = new HashSet<>();
         boolean rewrite = false;
         if (complete > 0) {
-            String current = EarlierCatalogueLayout.upgraded(text, plan.grid().physics().overshootScheme(),
-                    GridIronAbundance.of(plan.grid()));
-            if (current == null) {
-                throw new RunSetupException(catalogue + " has another header than this version writes; "
-                        + "cannot continue it");
-            }
+            String current = EarlierCatalogueLayout.inCurrentLayout(catalogue, text,
+                    plan.grid().physics().overshootScheme(), GridIronAbundance.of(plan.grid()), "continue it");
             // an earlier version's layout: the same rows, in this version's columns, before anything is appended
             rewrite = !current.equals(text);
             text = current;

@@ -6,10 +6,7 @@ import java.util.concurrent.atomic.AtomicReference;
 import org.convgrid.engine.batch.ModelSink;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.structure.StellarModel;
-import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.RunLayout;
-import org.convgrid.output.profile.ProfileMeta;
-import org.convgrid.output.profile.ProfileRows;
 import org.convgrid.output.profile.ProfileWriter;
 
 /**
@@ -42,8 +39,7 @@ public final class ProfileFiles implements ModelSink {
     public void accept(ModelRequest request, StellarModel model) {
         Path target = layout.profileFile(request.modelId());
         try {
-            ProfileMeta meta = ProfileMeta.of(request, model, false, toolVersion, toolCommit);
-            AtomicFiles.write(target, out -> ProfileWriter.write(meta, ProfileRows.of(model), out));
+            ProfileWriter.writeFile(target, request, model, false, toolVersion, toolCommit);
         } catch (IOException e) {
             failure.compareAndSet(null, new IOException("cannot write " + target + ": " + IoMessages.reason(e), e));
         }

@@ -49,11 +49,9 @@ final class ShardRows {
         byte[] bytes = Files.readAllBytes(catalogue);
         String header = RunDirectory.catalogueHeader(iron);
         // a shard written by an earlier version is read in this version's layout
-        String text = EarlierCatalogueLayout.upgraded(
-                new String(bytes, 0, KeptCatalogue.lastLineEnd(bytes), StandardCharsets.UTF_8), overshootProfile, iron);
-        if (text == null) {
-            throw new RunSetupException(catalogue + " has another header than this version writes");
-        }
+        String text = EarlierCatalogueLayout.inCurrentLayout(catalogue,
+                new String(bytes, 0, KeptCatalogue.lastLineEnd(bytes), StandardCharsets.UTF_8), overshootProfile, iron,
+                "merge it");
         List<CatalogueRow> rows = CatalogueReader.readCompleteLines(text);
         String[] raw = text.substring(header.length()).split("\n");
         int count = text.length() == header.length() ? 0 : raw.length;

@@ -105,28 +105,42 @@ public final class CatalogueReader {
             String criterion = c.text(CatalogueColumns.CRITERION);
             String structure = c.text(CatalogueColumns.STRUCTURE_CLASS);
             double opacity = c.number(CatalogueColumns.OPACITY_SCALE);
-            return new CatalogueRow(c.text(CatalogueColumns.MODEL_ID), c.number(CatalogueColumns.MASS_MSUN),
-                    c.number(CatalogueColumns.Z_INIT), c.number(CatalogueColumns.Y_INIT),
-                    c.number(CatalogueColumns.MIXING_LENGTH), c.number(CatalogueColumns.OVERSHOOT_HP),
-                    c.number(CatalogueColumns.AGE_GYR), c.text(CatalogueColumns.PHASE),
-                    ModelStatus.fromLabel(c.text(CatalogueColumns.STATUS)),
-                    c.text(CatalogueColumns.STATUS_DETAIL), c.number(CatalogueColumns.LUMINOSITY_LSUN),
-                    c.number(CatalogueColumns.RADIUS_RSUN), c.number(CatalogueColumns.TEFF_K),
-                    c.number(CatalogueColumns.LOG_G_CGS), c.number(CatalogueColumns.CENTRAL_TEMP_K),
-                    c.number(CatalogueColumns.CENTRAL_DENSITY_CGS), c.number(CatalogueColumns.CENTRAL_H_FRAC),
-                    c.number(CatalogueColumns.SURFACE_LI_REL),
-                    structure.isEmpty() ? null : StructureClass.fromLabel(structure),
-                    c.number(CatalogueColumns.CORE_CZ_MASS_FRAC), c.number(CatalogueColumns.CORE_CZ_RADIUS_FRAC),
-                    c.number(CatalogueColumns.ENV_CZ_BASE_MASS_FRAC),
-                    c.number(CatalogueColumns.ENV_CZ_BASE_RADIUS_FRAC), c.number(CatalogueColumns.ENV_CZ_MASS_MSUN),
-                    c.number(CatalogueColumns.TURNOVER_TIME_DAYS),
-                    List.of(),
-                    solverIterations(c.text(CatalogueColumns.SOLVER_ITERATIONS), c.text(CatalogueColumns.STATUS)),
-                    criterion.isEmpty() ? null : StabilityCriterion.valueOf(criterion.toUpperCase(Locale.ROOT)),
-                    Double.isNaN(opacity) ? 1.0 : opacity, c.number(CatalogueColumns.TURNOVER_TIME_GLOBAL_DAYS),
-                    c.number(CatalogueColumns.CORE_MIXED_MASS_FRAC),
-                    OvershootProfileCell.parse(c.text(CatalogueColumns.OVERSHOOT_PROFILE)),
-                    c.number(CatalogueColumns.BUOYANCY_PERIOD_PI0_S), c.number(CatalogueColumns.PERIOD_SPACING_L1_S));
+            return CatalogueRow.builder(c.text(CatalogueColumns.MODEL_ID),
+                            ModelStatus.fromLabel(c.text(CatalogueColumns.STATUS)))
+                    .massMsun(c.number(CatalogueColumns.MASS_MSUN))
+                    .zInit(c.number(CatalogueColumns.Z_INIT))
+                    .yInit(c.number(CatalogueColumns.Y_INIT))
+                    .mixingLength(c.number(CatalogueColumns.MIXING_LENGTH))
+                    .overshootHp(c.number(CatalogueColumns.OVERSHOOT_HP))
+                    .ageGyr(c.number(CatalogueColumns.AGE_GYR))
+                    .phase(c.text(CatalogueColumns.PHASE))
+                    .statusDetail(c.text(CatalogueColumns.STATUS_DETAIL))
+                    .luminosityLsun(c.number(CatalogueColumns.LUMINOSITY_LSUN))
+                    .radiusRsun(c.number(CatalogueColumns.RADIUS_RSUN))
+                    .teffK(c.number(CatalogueColumns.TEFF_K))
+                    .logGCgs(c.number(CatalogueColumns.LOG_G_CGS))
+                    .centralTempK(c.number(CatalogueColumns.CENTRAL_TEMP_K))
+                    .centralDensityCgs(c.number(CatalogueColumns.CENTRAL_DENSITY_CGS))
+                    .centralHFrac(c.number(CatalogueColumns.CENTRAL_H_FRAC))
+                    .surfaceLiRel(c.number(CatalogueColumns.SURFACE_LI_REL))
+                    .structureClass(structure.isEmpty() ? null : StructureClass.fromLabel(structure))
+                    .coreCzMassFrac(c.number(CatalogueColumns.CORE_CZ_MASS_FRAC))
+                    .coreCzRadiusFrac(c.number(CatalogueColumns.CORE_CZ_RADIUS_FRAC))
+                    .envCzBaseMassFrac(c.number(CatalogueColumns.ENV_CZ_BASE_MASS_FRAC))
+                    .envCzBaseRadiusFrac(c.number(CatalogueColumns.ENV_CZ_BASE_RADIUS_FRAC))
+                    .envCzMassMsun(c.number(CatalogueColumns.ENV_CZ_MASS_MSUN))
+                    .turnoverTimeDays(c.number(CatalogueColumns.TURNOVER_TIME_DAYS))
+                    .solverIterations(solverIterations(c.text(CatalogueColumns.SOLVER_ITERATIONS),
+                            c.text(CatalogueColumns.STATUS)))
+                    .criterion(criterion.isEmpty() ? null
+                            : StabilityCriterion.valueOf(criterion.toUpperCase(Locale.ROOT)))
+                    .opacityScale(Double.isNaN(opacity) ? 1.0 : opacity)
+                    .turnoverTimeGlobalDays(c.number(CatalogueColumns.TURNOVER_TIME_GLOBAL_DAYS))
+                    .coreMixedMassFrac(c.number(CatalogueColumns.CORE_MIXED_MASS_FRAC))
+                    .overshootProfile(OvershootProfileCell.parse(c.text(CatalogueColumns.OVERSHOOT_PROFILE)))
+                    .buoyancyPeriodPi0S(c.number(CatalogueColumns.BUOYANCY_PERIOD_PI0_S))
+                    .periodSpacingL1S(c.number(CatalogueColumns.PERIOD_SPACING_L1_S))
+                    .build();
         } catch (IllegalArgumentException e) {
             throw new OutputFormatException("catalogue row " + r.getRecordNumber() + " (line "
                     + (r.getRecordNumber() + 1) + "), column '" + c.current + "': " + e.getMessage(), e);

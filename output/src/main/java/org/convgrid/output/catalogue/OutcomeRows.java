@@ -41,32 +41,40 @@ public final class OutcomeRows {
         ConvectiveZone innermost = c == null || c.zones().isEmpty() ? null : c.zones().get(0);
         // the very double star prints and the profile's meta carries: the same function of the same model
         double pi0 = outcome instanceof ModelOutcome.Solved s ? s.buoyancyTravelTime() : nan;
-        return new CatalogueRow(request.modelId(), request.mass() / Constants.M_SUN, request.initialMetals(),
-                request.initialHelium(), request.physics().mixingLength(), request.physics().overshoot(),
-                ageGyr(request.age()), phase(outcome), outcome.status(), outcome.statusDetail(),
-                g == null ? nan : g.luminosity() / Constants.L_SUN,
-                g == null ? nan : g.radius() / Constants.R_SUN,
-                g == null ? nan : g.effectiveTemperature(),
-                g == null ? nan : Math.log10(g.surfaceGravity()),
-                g == null ? nan : g.centralTemperature(),
-                g == null ? nan : g.centralDensity(),
-                g == null ? nan : g.centralHydrogen(),
-                surfaceLithium(outcome),
-                kind,
-                core ? clamp(innermost.outerMassFraction()) : nan,
-                core ? clamp(innermost.outerRadiusFraction()) : nan,
-                envelope ? clamp(c.envelopeBaseMassFraction()) : nan,
-                envelope ? clamp(c.envelopeBaseRadiusFraction()) : nan,
-                envelope ? c.envelopeMass() / Constants.M_SUN : nan,
-                envelope ? c.turnoverTimeLocal() / Constants.DAY : nan,
-                c == null ? List.of() : zones(c, request.mass() / Constants.M_SUN), outcome.solverIterations(),
-                request.physics().criterion(),
-                request.physics().opacityScale(),
-                envelope ? c.turnoverTimeGlobal() / Constants.DAY : nan,
-                core ? mixedCoreTop(outcome, clamp(innermost.outerMassFraction())) : nan,
-                request.physics().overshootScheme(),
-                pi0,
-                Double.isNaN(pi0) ? nan : BuoyancyTravelTime.periodSpacing(pi0, 1));
+        return CatalogueRow.builder(request.modelId(), outcome.status())
+                .massMsun(request.mass() / Constants.M_SUN)
+                .zInit(request.initialMetals())
+                .yInit(request.initialHelium())
+                .mixingLength(request.physics().mixingLength())
+                .overshootHp(request.physics().overshoot())
+                .ageGyr(ageGyr(request.age()))
+                .phase(phase(outcome))
+                .statusDetail(outcome.statusDetail())
+                .luminosityLsun(g == null ? nan : g.luminosity() / Constants.L_SUN)
+                .radiusRsun(g == null ? nan : g.radius() / Constants.R_SUN)
+                .teffK(g == null ? nan : g.effectiveTemperature())
+                .logGCgs(g == null ? nan : Math.log10(g.surfaceGravity()))
+                .centralTempK(g == null ? nan : g.centralTemperature())
+                .centralDensityCgs(g == null ? nan : g.centralDensity())
+                .centralHFrac(g == null ? nan : g.centralHydrogen())
+                .surfaceLiRel(surfaceLithium(outcome))
+                .structureClass(kind)
+                .coreCzMassFrac(core ? clamp(innermost.outerMassFraction()) : nan)
+                .coreCzRadiusFrac(core ? clamp(innermost.outerRadiusFraction()) : nan)
+                .envCzBaseMassFrac(envelope ? clamp(c.envelopeBaseMassFraction()) : nan)
+                .envCzBaseRadiusFrac(envelope ? clamp(c.envelopeBaseRadiusFraction()) : nan)
+                .envCzMassMsun(envelope ? c.envelopeMass() / Constants.M_SUN : nan)
+                .turnoverTimeDays(envelope ? c.turnoverTimeLocal() / Constants.DAY : nan)
+                .zones(c == null ? List.of() : zones(c, request.mass() / Constants.M_SUN))
+                .solverIterations(outcome.solverIterations())
+                .criterion(request.physics().criterion())
+                .opacityScale(request.physics().opacityScale())
+                .turnoverTimeGlobalDays(envelope ? c.turnoverTimeGlobal() / Constants.DAY : nan)
+                .coreMixedMassFrac(core ? mixedCoreTop(outcome, clamp(innermost.outerMassFraction())) : nan)
+                .overshootProfile(request.physics().overshootScheme())
+                .buoyancyPeriodPi0S(pi0)
+                .periodSpacingL1S(Double.isNaN(pi0) ? nan : BuoyancyTravelTime.periodSpacing(pi0, 1))
+                .build();
     }
 
     /** The overshoot's mixed edge above the core, never below the core's own top. */

@@ -1,10 +1,14 @@
 package org.convgrid.output.profile;
 
 import java.io.IOException;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.csv.CSVPrinter;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.units.Constants;
+import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.EcsvHeader;
 import org.convgrid.output.catalogue.CatalogueWriter;
@@ -18,6 +22,22 @@ import org.convgrid.output.catalogue.CatalogueWriter;
 public final class ProfileWriter {
 
     private ProfileWriter() {
+    }
+
+    /**
+     * Writes the profile of {@code model}, solved for {@code request}, to {@code target}: its meta, then every shell
+     * from the centre out, atomically (a reader never sees half a file; a profile already there is replaced whole).
+     * The one way a profile file is made, by a grid run, {@code star --profile} and {@code calibrate-sun --profile}
+     * alike, so that the three cannot differ.
+     *
+     * @param settling whether the model's evolution let helium and metals settle (recorded in the meta)
+     * @param toolVersion the convgrid version, recorded in the meta
+     * @param toolCommit the commit it was built from, recorded alike
+     */
+    public static void writeFile(Path target, ModelRequest request, StellarModel model, boolean settling,
+                                 String toolVersion, String toolCommit) throws IOException {
+        ProfileMeta meta = ProfileMeta.of(request, model, settling, toolVersion, toolCommit);
+        AtomicFiles.write(target, out -> write(meta, ProfileRows.of(model), out));
     }
 
     /** Writes the header and every shell, in the given order (centre outwards by convention). */

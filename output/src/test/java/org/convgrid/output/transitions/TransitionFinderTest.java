@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.util.ArrayList;
 import java.util.List;
 import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.output.Span;
@@ -26,10 +27,11 @@ class TransitionFinderTest {
 
     static CatalogueRow row(String modelId, double z, double mass, StructureClass c, double core,
                             ModelStatus status) {
-        double nan = Double.NaN;
-        return new CatalogueRow(modelId, mass, z, 0.27, 1.8, 0.0, 0.0, "", status, "", nan, nan, nan, nan, nan,
-                nan, nan, nan, status == ModelStatus.OK ? c : null, core, nan, c == FC ? 0.0 : 0.5, 0.7, nan, nan,
-                List.of(), 5, StabilityCriterion.SCHWARZSCHILD, 1.0, nan);
+        return CatalogueRow.builder(modelId, status).massMsun(mass).zInit(z).yInit(0.27).mixingLength(1.8)
+                .overshootHp(0.0).ageGyr(0.0).structureClass(status == ModelStatus.OK ? c : null)
+                .coreCzMassFrac(core).envCzBaseMassFrac(c == FC ? 0.0 : 0.5).envCzBaseRadiusFrac(0.7)
+                .solverIterations(5).criterion(StabilityCriterion.SCHWARZSCHILD).opacityScale(1.0)
+                .coreMixedMassFrac(core).overshootProfile(OvershootScheme.STEP).build();
     }
 
     static CatalogueRow ok(double mass, StructureClass c, double core) {
@@ -147,11 +149,11 @@ class TransitionFinderTest {
 
     @Test
     void theMethodIsRefinedWhenABracketEndIsARefinementModel() {
-        CatalogueRow refinedEnd = new CatalogueRow("p0-z00-r003-a00", 0.3125, 0.02, 0.27, 1.8, 0.0, 0.0,
-                CatalogueRow.MAIN_SEQUENCE, ModelStatus.OK, "", Double.NaN, Double.NaN, Double.NaN, Double.NaN,
-                Double.NaN, Double.NaN, Double.NaN, Double.NaN, ENV, Double.NaN, Double.NaN, 0.5, 0.7, Double.NaN,
-                Double.NaN, List.of(),  5,
-                StabilityCriterion.SCHWARZSCHILD, 1.0, Double.NaN);
+        CatalogueRow refinedEnd = CatalogueRow.builder("p0-z00-r003-a00", ModelStatus.OK).massMsun(0.3125)
+                .zInit(0.02).yInit(0.27).mixingLength(1.8).overshootHp(0.0).ageGyr(0.0)
+                .phase(CatalogueRow.MAIN_SEQUENCE).structureClass(ENV).envCzBaseMassFrac(0.5).envCzBaseRadiusFrac(0.7)
+                .solverIterations(5).criterion(StabilityCriterion.SCHWARZSCHILD).opacityScale(1.0)
+                .overshootProfile(OvershootScheme.STEP).build();
         List<CatalogueRow> grid = List.of(ok(0.3, FC, 1), ok(0.4, ENV, 0), ok(1.0, ENV, 0), ok(1.2, BOTH, 0.05));
         assertThat(finder.find(grid).get(0).method()).isEqualTo(TransitionMethod.GRID);
         List<CatalogueRow> refined = new ArrayList<>(grid);
@@ -171,12 +173,7 @@ class TransitionFinderTest {
     /** A usable model with its central hydrogen mass fraction set (the other rows leave it NaN). */
     static CatalogueRow withCentralH(double mass, StructureClass c, double core, double centralH) {
         CatalogueRow r = ok(mass, c, core);
-        return new CatalogueRow(r.modelId(), r.massMsun(), r.zInit(), r.yInit(), r.mixingLength(), r.overshootHp(),
-                r.ageGyr(), r.phase(), r.status(), r.statusDetail(), r.luminosityLsun(), r.radiusRsun(), r.teffK(),
-                r.logGCgs(), r.centralTempK(), r.centralDensityCgs(), centralH, r.surfaceLiRel(), r.structureClass(),
-                r.coreCzMassFrac(), r.coreCzRadiusFrac(), r.envCzBaseMassFrac(), r.envCzBaseRadiusFrac(),
-                r.envCzMassMsun(), r.turnoverTimeDays(), r.zones(), r.solverIterations(), r.criterion(),
-                r.opacityScale(), r.turnoverTimeGlobalDays());
+        return r.toBuilder().centralHFrac(centralH).build();
     }
 
     /** A usable model with its central temperature set, K (the other rows leave it NaN). */
@@ -188,12 +185,7 @@ class TransitionFinderTest {
     static CatalogueRow withCentre(double z, double mass, StructureClass c, double core, double centralT,
                                    double centralRho, double centralX) {
         CatalogueRow r = row(z, mass, c, core, ModelStatus.OK);
-        return new CatalogueRow(r.modelId(), r.massMsun(), r.zInit(), r.yInit(), r.mixingLength(), r.overshootHp(),
-                r.ageGyr(), r.phase(), r.status(), r.statusDetail(), r.luminosityLsun(), r.radiusRsun(), r.teffK(),
-                r.logGCgs(), centralT, centralRho, centralX, r.surfaceLiRel(), r.structureClass(),
-                r.coreCzMassFrac(), r.coreCzRadiusFrac(), r.envCzBaseMassFrac(), r.envCzBaseRadiusFrac(),
-                r.envCzMassMsun(), r.turnoverTimeDays(), r.zones(), r.solverIterations(), r.criterion(),
-                r.opacityScale(), r.turnoverTimeGlobalDays());
+        return r.toBuilder().centralTempK(centralT).centralDensityCgs(centralRho).centralHFrac(centralX).build();
     }
 
     @Test

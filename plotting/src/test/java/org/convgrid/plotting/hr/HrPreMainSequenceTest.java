@@ -62,12 +62,7 @@ class HrPreMainSequenceTest {
 
     private static CatalogueRow at(CatalogueRow r, double ageGyr) {
         double[] sf = surface(r.massMsun(), ageGyr);
-        return new CatalogueRow(r.modelId(), r.massMsun(), r.zInit(), r.yInit(), r.mixingLength(), r.overshootHp(),
-                ageGyr, r.phase(), r.status(), r.statusDetail(), Math.pow(10, sf[1]), r.radiusRsun(),
-                Math.pow(10, sf[0]), r.logGCgs(), r.centralTempK(), r.centralDensityCgs(), r.centralHFrac(),
-                r.surfaceLiRel(), r.structureClass(), r.coreCzMassFrac(), r.coreCzRadiusFrac(), r.envCzBaseMassFrac(),
-                r.envCzBaseRadiusFrac(), r.envCzMassMsun(), r.turnoverTimeDays(), r.zones(), r.solverIterations(),
-                r.criterion(), r.opacityScale(), r.turnoverTimeGlobalDays());
+        return r.toBuilder().ageGyr(ageGyr).luminosityLsun(Math.pow(10, sf[1])).teffK(Math.pow(10, sf[0])).build();
     }
 
     @Test

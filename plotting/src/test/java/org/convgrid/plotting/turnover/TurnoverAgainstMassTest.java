@@ -31,12 +31,7 @@ class TurnoverAgainstMassTest {
 
     /** A copy of {@code r} with another id, global turnover time and mixing length. */
     static CatalogueRow copy(CatalogueRow r, String id, double globalDays, double mixingLength) {
-        return new CatalogueRow(id, r.massMsun(), r.zInit(), r.yInit(), mixingLength, r.overshootHp(), r.ageGyr(),
-                r.phase(), r.status(), r.statusDetail(), r.luminosityLsun(), r.radiusRsun(), r.teffK(), r.logGCgs(),
-                r.centralTempK(), r.centralDensityCgs(), r.centralHFrac(), r.surfaceLiRel(), r.structureClass(),
-                r.coreCzMassFrac(), r.coreCzRadiusFrac(), r.envCzBaseMassFrac(), r.envCzBaseRadiusFrac(),
-                r.envCzMassMsun(), r.turnoverTimeDays(), r.zones(), r.solverIterations(), r.criterion(),
-                r.opacityScale(), globalDays);
+        return r.toBuilder().modelId(id).mixingLength(mixingLength).turnoverTimeGlobalDays(globalDays).build();
     }
 
     /**

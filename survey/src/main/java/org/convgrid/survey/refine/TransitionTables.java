@@ -94,12 +94,8 @@ public final class TransitionTables {
      */
     private static void currentLayout(RunDirectory dir, GridSpec grid, RunManifest manifest) throws IOException {
         String text = Files.readString(dir.catalogue());
-        String upgraded = EarlierCatalogueLayout.upgraded(text, grid.physics().overshootScheme(),
-                manifest.ironAbundance());
-        if (upgraded == null) {
-            throw new RunSetupException(dir.catalogue() + " has columns this version does not write; cannot append "
-                    + "the refinement's models to it");
-        }
+        String upgraded = EarlierCatalogueLayout.inCurrentLayout(dir.catalogue(), text,
+                grid.physics().overshootScheme(), manifest.ironAbundance(), "append the refinement's models to it");
         if (!upgraded.equals(text)) {
             AtomicFiles.writeString(dir.catalogue(), upgraded);
         }
