@@ -9,6 +9,7 @@ import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
 import org.convgrid.cli.run.Durations;
 import org.convgrid.cli.run.RefinementEstimate;
+import org.convgrid.cli.run.RunTimeEstimate;
 import org.convgrid.cli.run.ProgressReporter;
 import org.convgrid.engine.batch.ChunkSolver;
 import org.convgrid.engine.request.ModelStatus;
@@ -171,7 +172,7 @@ final class RunCommand implements Callable<Integer> {
             }
             ProgressReporter reporter = quiet ? null : new ProgressReporter(err, context.terminal(), System::nanoTime, n);
             if (!quiet) {
-                err.println("convgrid: " + startLine(plan, count, n));
+                err.println("convgrid: " + startLine(plan, count, n) + longRunNote(file.spec(), plan.remaining(), count, n));
                 err.flush();
             }
             TransitionSettings transitions = file.spec().transitions();
@@ -308,6 +309,27 @@ final class RunCommand implements Callable<Integer> {
             throw new UsageException("--threads must be at least 1, got " + asked);
         }
         return asked;
+    }
+
+    /** A run expected to take at least this long says so when it starts. */
+    static final double LONG_RUN_SECONDS = 3600.0;
+
+    /**
+     * What the start line adds for a long run: {@code check}'s rough estimate of the models still to compute (a share of
+     * the whole grid's), so that a grid started without a {@code check} (a review's: a 99 000-model grid estimated at
+     * 22 h started without a word) shows its size in hours before the night is spent; empty below
+     * {@link #LONG_RUN_SECONDS}.
+     */
+    static String longRunNote(GridSpec spec, long remaining, long gridCount, int threads) {
+        if (gridCount == 0 || remaining == 0) {
+            return "";
+        }
+        double seconds = RunTimeEstimate.assumed(spec, threads).seconds() * remaining / (double) gridCount;
+        if (seconds < LONG_RUN_SECONDS) {
+            return "";
+        }
+        return "; expected to take about " + Durations.describe(seconds) + " (check's rough estimate; Ctrl-C stops "
+                + "it and --resume continues it)";
     }
 
     private static String startLine(GridRun.Plan plan, long gridCount, int threads) {
