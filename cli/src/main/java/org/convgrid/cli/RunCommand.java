@@ -155,6 +155,11 @@ final class RunCommand implements Callable<Integer> {
                 err.println("convgrid: note: --resume found no run in " + dir.root() + "; starting a new one there");
                 err.flush();
             }
+            if (plan.recomputedForMissingFiles() != null) {
+                // said even with --quiet: rows the user had were dropped (to be computed again), and why
+                err.println("convgrid: note: " + plan.recomputedForMissingFiles());
+                err.flush();
+            }
             if (plan.removedEarlierFiles() > 0) {
                 // said even with --quiet: files were deleted, and the user should not learn it from a missing file
                 err.println("convgrid: --force removed " + Counts.of(plan.removedEarlierFiles(), "file")
@@ -184,7 +189,8 @@ final class RunCommand implements Callable<Integer> {
                  RunInterruptHook hook = RunInterruptHook.install(() -> interrupted(runner, plan, interruption, lock,
                          refineNow, context.terminal() && !quiet), err)) {
                 result = runner.execute(plan, work, solver, reporter == null ? ProgressListener.NONE : reporter,
-                        refineNow ? List.of() : context.finishers(), interruption);
+                        refineNow ? List.of() : context.finishers(), interruption,
+                        evolves ? tracks : org.convgrid.survey.StarFiles.NONE);
                 if (reporter != null) {
                     reporter.finish();
                 }
