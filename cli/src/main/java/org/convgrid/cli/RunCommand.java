@@ -142,7 +142,8 @@ final class RunCommand implements Callable<Integer> {
         ChunkSolver solver = context.solvers().solverFor(file.spec(), evolves ? tracks : StarTrackSink.NONE,
                 profiles != null ? profiles : ModelSink.NONE);
         Clock clock = Clock.tickSeconds(java.time.ZoneOffset.UTC);
-        GridRun runner = new GridRun(ToolVersion.current(), ToolVersion.commit(), clock);
+        GridRun runner = new GridRun(ToolVersion.current(), ToolVersion.commit(), clock,
+                context.solvers().writesTracks());
         try (RunLock lock = RunLock.acquire(dir.root())) {
             Locks.reportStale(lock, parent.err());
             long start = System.nanoTime();

@@ -43,6 +43,11 @@ class FailingTrackWritesTest {
             }
 
             @Override
+            public boolean writesTracks() {
+                return true;
+            }
+
+            @Override
             public ChunkSolver solverFor(GridSpec grid, StarTrackSink tracks, ModelSink models) {
                 ChunkSolver fake = FakeChunkSolver.fast();
                 return chunk -> {

@@ -82,11 +82,21 @@ public final class GridRun {
     private final String toolVersion;
     private final String toolCommit;
     private final Clock clock;
+    private final boolean checksTracks;
 
     public GridRun(String toolVersion, String toolCommit, Clock clock) {
+        this(toolVersion, toolCommit, clock, false);
+    }
+
+    /**
+     * @param checksTracks whether a resume recomputes kept stars whose track files or life-events row are missing
+     *                     ({@link MissingStarFiles}): for solvers that write tracks ({@link ChunkSolverFactory#writesTracks})
+     */
+    public GridRun(String toolVersion, String toolCommit, Clock clock, boolean checksTracks) {
         this.toolVersion = toolVersion;
         this.toolCommit = toolCommit;
         this.clock = clock;
+        this.checksTracks = checksTracks;
     }
 
     /**
@@ -195,8 +205,8 @@ public final class GridRun {
         }
         ShardPlan plan = new ShardPlan(s.grid().spec(), shard, MASSES_PER_CHUNK);
         KeptCatalogue kept = KeptCatalogue.inspectAndTrim(dir.catalogue(), plan);
-        MissingStarFiles.Recomputed recomputed = MissingStarFiles.cutBackToFirstLacking(dir, s.grid().spec(),
-                GridIronAbundance.of(s.grid().spec()));
+        MissingStarFiles.Recomputed recomputed = !checksTracks ? null : MissingStarFiles.cutBackToFirstLacking(dir,
+                s.grid().spec(), GridIronAbundance.of(s.grid().spec()));
         if (recomputed != null) {
             // read again: the rows kept are fewer now, and the zones of the dropped ones go too
             KeptCatalogue fewer = KeptCatalogue.inspectAndTrim(dir.catalogue(), plan);

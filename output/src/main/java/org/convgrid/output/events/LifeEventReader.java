@@ -62,8 +62,8 @@ public final class LifeEventReader {
         List<LifeEventRow> rows = new ArrayList<>();
         try (CSVParser parser = parser(in)) {
             if (!parser.getHeaderNames().containsAll(LifeEventColumns.REQUIRED)) {
-                throw new OutputFormatException("damaged life-events table: its first line is not the column names "
-                        + "(it needs " + String.join(", ", LifeEventColumns.REQUIRED) + "); 'convgrid run GRID.yaml "
+                throw new OutputFormatException("damaged: its first line is not the column names (a life-events "
+                        + "table needs the columns " + LifeEventColumns.REQUIRED + "); 'convgrid run GRID.yaml "
                         + "--resume' on the run rebuilds it");
             }
             List<String> header = parser.getHeaderNames();
