@@ -51,8 +51,14 @@ final class PlotCommand implements Callable<Integer> {
             UnfinishedRunWarning.printIfUnfinished(layout, main.err());
             RunData run = RunData.read(dir);
             DrawnMaps maps = RunMaps.drawAll(run, dir, formats);
-            maps.failures().forEach(f -> main.err().println("convgrid: warning: " + f.describe()));
+            // charts not written are said once, in the failure below, not as one warning each
+            maps.failures().stream().filter(f -> !f.notWritten())
+                    .forEach(f -> main.err().println("convgrid: warning: " + f.describe()));
             Path report = ReportPage.write(run, dir, maps.failures());
+            java.io.IOException unwritten = org.convgrid.plotting.UnwrittenCharts.of(maps, dir);
+            if (unwritten != null) {
+                throw unwritten;
+            }
             main.out().println("wrote " + maps.written().size() + " charts to " + layout.maps() + " and " + report);
             return ExitCodes.OK;
         }

@@ -143,7 +143,8 @@ final class RunCommand implements Callable<Integer> {
         ChunkSolver solver = context.solvers().solverFor(file.spec(), evolves ? tracks : StarTrackSink.NONE,
                 profiles != null ? profiles : ModelSink.NONE);
         Clock clock = Clock.tickSeconds(java.time.ZoneOffset.UTC);
-        GridRun runner = new GridRun(ToolVersion.current(), ToolVersion.commit(), clock);
+        GridRun runner = new GridRun(ToolVersion.current(), ToolVersion.commit(), clock,
+                context.solvers().writesTracks());
         try (RunLock lock = RunLock.acquire(dir.root())) {
             Locks.reportStale(lock, parent.err());
             long start = System.nanoTime();
@@ -154,6 +155,11 @@ final class RunCommand implements Callable<Integer> {
                 // said even with --quiet: a mistyped directory would otherwise cost the whole grid again unnoticed
                 // (a job script that always adds --resume reads it once, on its first submission)
                 err.println("convgrid: note: --resume found no run in " + dir.root() + "; starting a new one there");
+                err.flush();
+            }
+            if (plan.recomputedForMissingFiles() != null) {
+                // said even with --quiet: rows the user had were dropped (to be computed again), and why
+                err.println("convgrid: note: " + plan.recomputedForMissingFiles());
                 err.flush();
             }
             if (plan.removedEarlierFiles() > 0) {
@@ -185,7 +191,8 @@ final class RunCommand implements Callable<Integer> {
                  RunInterruptHook hook = RunInterruptHook.install(() -> interrupted(runner, plan, interruption, lock,
                          refineNow, context.terminal() && !quiet), err)) {
                 result = runner.execute(plan, work, solver, reporter == null ? ProgressListener.NONE : reporter,
-                        refineNow ? List.of() : context.finishers(), interruption);
+                        refineNow ? List.of() : context.finishers(), interruption,
+                        evolves ? tracks : org.convgrid.survey.StarFiles.NONE);
                 if (reporter != null) {
                     reporter.finish();
                 }

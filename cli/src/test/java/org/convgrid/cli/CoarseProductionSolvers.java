@@ -23,6 +23,11 @@ final class CoarseProductionSolvers {
         public ChunkSolver solverFor(GridSpec grid, StarTrackSink tracks) {
             return new GridRequests(tracks, MainSequenceEvolver.Settings.DEFAULT.scaled(3.0));
         }
+
+        @Override
+        public boolean writesTracks() {
+            return true;
+        }
     };
 
     private CoarseProductionSolvers() {

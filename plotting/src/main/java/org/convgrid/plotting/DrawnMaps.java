@@ -5,7 +5,8 @@ import java.util.List;
 
 /**
  * What drawing a run's charts gave: the files written and the charts that could not be drawn. A chart that fails
- * is left out and named here so the caller can warn; it never stops the other charts, the report or the run.
+ * is left out and named here; it never stops the other charts or the report. The caller warns of a chart with
+ * nothing to show, and fails the command when a chart could not be written ({@link UnwrittenCharts}).
  *
  * @param written every file written, in report order
  * @param failures the charts that could not be drawn, in report order
@@ -17,13 +18,25 @@ public record DrawnMaps(List<Path> written, List<ChartFailure> failures) {
         failures = List.copyOf(failures);
     }
 
+    /** Whether some chart was drawn but could not be written (a full disk, a file size limit). */
+    public boolean someNotWritten() {
+        return failures.stream().anyMatch(ChartFailure::notWritten);
+    }
+
     /**
      * One chart that could not be drawn.
      *
      * @param fileName the chart's PNG file name under maps/
      * @param reason what went wrong, for people
+     * @param notWritten whether the chart was drawn but writing its file failed (the operating system's reason in
+     *                   {@code reason}): unlike a chart with nothing to show, that is a failure of the command
      */
-    public record ChartFailure(String fileName, String reason) {
+    public record ChartFailure(String fileName, String reason, boolean notWritten) {
+
+        /** A chart that could not be drawn (nothing to show, a chart library error). */
+        public ChartFailure(String fileName, String reason) {
+            this(fileName, reason, false);
+        }
 
         /** One line for a warning: the chart, then the reason. */
         public String describe() {

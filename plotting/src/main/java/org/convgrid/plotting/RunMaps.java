@@ -178,8 +178,14 @@ public final class RunMaps {
 
     private static Drawn draw(MapEntry entry, Path maps, Set<ChartFiles.VectorFormat> vectorFormats) {
         List<Path> written = new ArrayList<>(1 + vectorFormats.size());
+        StyledChart chart;
         try {
-            StyledChart chart = entry.chart().get();
+            chart = entry.chart().get();
+        } catch (RuntimeException e) {
+            // a chart library error or nothing to show: report it by chart and carry on with the others
+            return new Drawn(written, new DrawnMaps.ChartFailure(entry.fileName(), reason(e)));
+        }
+        try {
             Path png = maps.resolve(entry.fileName());
             ChartFiles.writePng(chart, png);
             written.add(png);
@@ -189,12 +195,16 @@ public final class RunMaps {
                 written.add(vector);
             }
             return new Drawn(written, null);
-        } catch (IOException | RuntimeException e) {
-            // a chart library error or a full disk: report it by chart and carry on with the others
-            String reason = e.getMessage() == null || e.getMessage().isBlank() ? e.getClass().getSimpleName()
-                    : e.getMessage();
-            return new Drawn(written, new DrawnMaps.ChartFailure(entry.fileName(), reason));
+        } catch (IOException e) {
+            // a full disk or a file size limit: the chart is fine, the disk is not; the caller fails the command
+            return new Drawn(written, new DrawnMaps.ChartFailure(entry.fileName(), reason(e), true));
+        } catch (RuntimeException e) {
+            return new Drawn(written, new DrawnMaps.ChartFailure(entry.fileName(), reason(e)));
         }
+    }
+
+    private static String reason(Exception e) {
+        return e.getMessage() == null || e.getMessage().isBlank() ? e.getClass().getSimpleName() : e.getMessage();
     }
 
     /** The charts of a run, in report order, without drawing them. */

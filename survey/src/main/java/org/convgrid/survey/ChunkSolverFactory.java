@@ -53,4 +53,13 @@ public interface ChunkSolverFactory {
      */
     default void readSharedDataAhead() {
     }
+
+    /**
+     * Whether its solvers hand every star they evolve to the track sink (the production solvers do). A resume then
+     * recomputes kept stars whose track files are missing; a fake that writes no tracks would have every star
+     * recomputed on every resume. The default: no.
+     */
+    default boolean writesTracks() {
+        return false;
+    }
 }

@@ -59,9 +59,11 @@ public final class GridRun {
      * @param previousMedian the median seconds per model an earlier session measured, NaN when none
      * @param removedEarlierFiles how many files of an earlier run {@code --force} removed (0 without it), for the
      *                            user to hear of it: they were deleted, not moved
+     * @param recomputedForMissingFiles on resume, why kept rows were dropped to be computed again (their stars lacked
+     *                                  track files or life-events rows), for the user; null when none was
      */
     public record Plan(Settings settings, Shard shard, KeptCatalogue kept, long owned, Instant started,
-                       double previousMedian, int removedEarlierFiles) {
+                       double previousMedian, int removedEarlierFiles, String recomputedForMissingFiles) {
 
         /** Models this session computes. */
         public long remaining() {
@@ -80,11 +82,21 @@ public final class GridRun {
     private final String toolVersion;
     private final String toolCommit;
     private final Clock clock;
+    private final boolean checksTracks;
 
     public GridRun(String toolVersion, String toolCommit, Clock clock) {
+        this(toolVersion, toolCommit, clock, false);
+    }
+
+    /**
+     * @param checksTracks whether a resume recomputes kept stars whose track files or life-events row are missing
+     *                     ({@link MissingStarFiles}): for solvers that write tracks ({@link ChunkSolverFactory#writesTracks})
+     */
+    public GridRun(String toolVersion, String toolCommit, Clock clock, boolean checksTracks) {
         this.toolVersion = toolVersion;
         this.toolCommit = toolCommit;
         this.clock = clock;
+        this.checksTracks = checksTracks;
     }
 
     /**
@@ -119,7 +131,7 @@ public final class GridRun {
         RunManifest start = manifest(s, shard, started, null, Map.of(), Double.NaN).unfinished(Map.of(), Double.NaN,
                 owned);
         dir.create(RunManifestWriter.toYaml(start), start.ironAbundance());
-        return new Plan(s, shard, new KeptCatalogue(Set.of(), true, 0), owned, started, Double.NaN, removed);
+        return new Plan(s, shard, new KeptCatalogue(Set.of(), true, 0), owned, started, Double.NaN, removed, null);
     }
 
     /**
@@ -193,7 +205,15 @@ public final class GridRun {
         }
         ShardPlan plan = new ShardPlan(s.grid().spec(), shard, MASSES_PER_CHUNK);
         KeptCatalogue kept = KeptCatalogue.inspectAndTrim(dir.catalogue(), plan);
-        return new Plan(s, shard, kept, plan.count(), old.started(), old.medianSecondsPerModel(), 0);
+        MissingStarFiles.Recomputed recomputed = !checksTracks ? null : MissingStarFiles.cutBackToFirstLacking(dir,
+                s.grid().spec(), GridIronAbundance.of(s.grid().spec()));
+        if (recomputed != null) {
+            // read again: the rows kept are fewer now, and the zones of the dropped ones go too
+            KeptCatalogue fewer = KeptCatalogue.inspectAndTrim(dir.catalogue(), plan);
+            kept = new KeptCatalogue(fewer.ids(), fewer.hasHeader(), kept.droppedBytes());
+        }
+        return new Plan(s, shard, kept, plan.count(), old.started(), old.medianSecondsPerModel(), 0,
+                recomputed == null ? null : recomputed.describe(dir.catalogue()));
     }
 
     /**
@@ -211,6 +231,18 @@ public final class GridRun {
      */
     public Result execute(Plan plan, ParallelWork work, ChunkSolver solver, ProgressListener progress,
                           List<RunFinisher> finishers, SweepInterruption interruption) throws IOException {
+        return execute(plan, work, solver, progress, finishers, interruption, StarFiles.NONE);
+    }
+
+    /**
+     * As {@link #execute(Plan, ParallelWork, ChunkSolver, ProgressListener, List, SweepInterruption)}, each row
+     * appended only once {@code starFiles} says its star's files were written: a failed track write stops the sweep
+     * (an IOException naming the file and the reason) before the first row of that star, whose block a resume then
+     * recomputes.
+     */
+    public Result execute(Plan plan, ParallelWork work, ChunkSolver solver, ProgressListener progress,
+                          List<RunFinisher> finishers, SweepInterruption interruption, StarFiles starFiles)
+            throws IOException {
         Settings s = plan.settings();
         RunDirectory dir = s.directory();
         TimedSolver timed = new TimedSolver(solver);
@@ -220,7 +252,10 @@ public final class GridRun {
         try (CatalogueAppender sink = CatalogueAppender.open(dir.catalogue(), !plan.kept().hasHeader(),
                 GridIronAbundance.of(s.grid().spec()))) {
             emitted = ChunkSweep.run(work, s.grid().spec().requests().iterator(), MASSES_PER_CHUNK, plan.shard(),
-                    r -> done.contains(r.modelId()), timed, o -> interruption.write(() -> sink.accept(o)), progress,
+                    r -> done.contains(r.modelId()), timed, o -> {
+                        starFiles.requireWritten(o.request());
+                        interruption.write(() -> sink.accept(o));
+                    }, progress,
                     plan.remaining());
         }
         FinishedRun[] run = new FinishedRun[1];

@@ -25,6 +25,18 @@ public final class IoMessages {
         return new IOException("cannot append to " + file.toAbsolutePath().normalize() + ": " + reason(e), e);
     }
 
+    /**
+     * A failed write of {@code file}, named by it once: a message that already says which file could not be written
+     * or appended to is kept as it is.
+     */
+    public static IOException naming(java.nio.file.Path file, IOException e) {
+        String reason = reason(e);
+        if (reason.startsWith("cannot write ") || reason.startsWith("cannot append to ")) {
+            return e;
+        }
+        return new IOException("cannot write " + file.toAbsolutePath().normalize() + ": " + reason, e);
+    }
+
     /** Why an I/O operation failed, naming the file when known. */
     public static String reason(IOException e) {
         if (e instanceof FileSystemException fs) {

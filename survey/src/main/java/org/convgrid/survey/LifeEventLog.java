@@ -12,6 +12,8 @@ import java.util.List;
 import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.IronAbundance;
+import org.convgrid.output.OutputFormatException;
+import org.convgrid.output.events.LifeEventColumns;
 import org.convgrid.output.events.LifeEventReader;
 import org.convgrid.output.events.LifeEventRow;
 import org.convgrid.output.events.LifeEventWriter;
@@ -38,23 +40,77 @@ public final class LifeEventLog {
     }
 
     /**
-     * Appends one star's row, writing the header first when the table is new. A table an earlier version began
-     * (a run resumed after an upgrade: fewer columns) is first rewritten with today's header, so that the rows
-     * appended to it stay readable (a column it lacked stays empty until {@link #tidy} fills what it can).
+     * Appends one star's row. The header is decided by the file's content, not by its existence: a full disk can
+     * leave the file created but empty, or a row cut short, and every later append must still produce a readable
+     * table (a robustness review found 24 rows without a header, which no command could read). So before the first
+     * append, and again after an append failed, the table is {@link #repair}ed; a table an earlier version began (a
+     * run resumed after an upgrade: fewer columns) is rewritten with today's header, so that the rows appended to it
+     * stay readable (a column it lacked stays empty until {@link #tidy} fills what it can).
      */
     public synchronized void append(LifeEventRow row) throws IOException {
         if (!headerChecked) {
+            repair(file, iron);
             headerChecked = true;
-            if (Files.exists(file) && !firstLine(file).equals(LifeEventWriter.header().strip())) {
-                write(file, LifeEventReader.read(file), iron);
-            }
         }
-        String text = (Files.exists(file) ? "" : LifeEventWriter.header()) + LifeEventWriter.line(row, iron);
+        boolean needsHeader = !Files.exists(file) || Files.size(file) == 0;
+        String text = (needsHeader ? LifeEventWriter.header() : "") + LifeEventWriter.line(row, iron);
         try {
             Files.writeString(file, text, StandardCharsets.UTF_8, StandardOpenOption.CREATE,
                     StandardOpenOption.APPEND);
         } catch (IOException e) {
+            // part of the text may have reached the disk: the next append looks at the file again first
+            headerChecked = false;
             throw IoMessages.appending(file, e);
+        }
+    }
+
+    /**
+     * Makes the table readable again after a write was cut short (a full disk, a crash): drops a last row without
+     * its line end, writes the header of a table that has none (its rows, of today's columns, are kept), and
+     * rewrites a table of an earlier version's columns with today's header. Does nothing to a table that needs none
+     * of that, or to a missing one.
+     *
+     * @throws org.convgrid.output.OutputFormatException when the rows cannot be told apart (no header, and lines of
+     *                                                   another column count): the message names the file and line
+     */
+    public static void repair(Path file, IronAbundance iron) throws IOException {
+        if (!Files.isRegularFile(file)) {
+            return;
+        }
+        byte[] bytes = Files.readAllBytes(file);
+        int complete = KeptCatalogue.lastLineEnd(bytes);
+        String text = new String(bytes, 0, complete, StandardCharsets.UTF_8);
+        String header = LifeEventWriter.header();
+        if (text.isEmpty() || text.equals(header)) {
+            if (complete < bytes.length) {
+                AtomicFiles.writeString(file, text);
+            }
+            return;
+        }
+        String first = text.substring(0, text.indexOf('\n')).strip();
+        if (first.equals(header.strip())) {
+            if (complete < bytes.length) {
+                AtomicFiles.writeString(file, text);
+            }
+        } else if (first.startsWith(LifeEventColumns.TRACK_ID + ",")) {
+            write(file, LifeEventReader.read(new java.io.StringReader(text)), iron);
+        } else {
+            requireTodaysColumns(file, text);
+            AtomicFiles.writeString(file, header + text);
+        }
+    }
+
+    /** Refuses a table without header whose lines are not rows of today's columns: nothing tells what they hold. */
+    private static void requireTodaysColumns(Path file, String text) {
+        String[] lines = text.split("\n");
+        for (int i = 0; i < lines.length; i++) {
+            long cells = lines[i].chars().filter(c -> c == ',').count() + 1;
+            if (cells != LifeEventColumns.ALL.size()) {
+                throw new OutputFormatException(file.toAbsolutePath().normalize() + " is damaged: it has no header "
+                        + "line, and its line " + (i + 1) + " has " + cells + " cells where a row has "
+                        + LifeEventColumns.ALL.size() + "; move it aside and resume the run: the stars it lacks are "
+                        + "computed again");
+            }
         }
     }
 
@@ -65,6 +121,7 @@ public final class LifeEventLog {
      */
     public static void tidy(Path file, OvershootScheme overshootProfile, IronAbundance iron) throws IOException {
         if (Files.exists(file)) {
+            repair(file, iron);
             write(file, LifeEventReader.read(file).stream()
                     .map(r -> r.withOvershootProfileIfUnknown(overshootProfile)).toList(), iron);
         }
@@ -85,12 +142,6 @@ public final class LifeEventLog {
         }
         if (any) {
             write(target, rows, iron);
-        }
-    }
-
-    private static String firstLine(Path file) throws IOException {
-        try (var lines = Files.lines(file, StandardCharsets.UTF_8)) {
-            return lines.findFirst().orElse("").strip();
         }
     }
 

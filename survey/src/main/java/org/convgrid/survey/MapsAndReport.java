@@ -7,13 +7,15 @@ import java.util.function.Consumer;
 import org.convgrid.plotting.DrawnMaps;
 import org.convgrid.plotting.RunData;
 import org.convgrid.plotting.RunMaps;
+import org.convgrid.plotting.UnwrittenCharts;
 import org.convgrid.plotting.report.ReportPage;
 import org.convgrid.plotting.style.ChartFiles;
 
 /**
  * The last step of every run and merge: draw the maps and write report.html from the run directory's files. A chart
- * that cannot be drawn is handed to the warning sink by name and left out of the report; it never fails the run,
- * so the exit code, catalogue, transitions and report still come out.
+ * with nothing to draw is handed to the warning sink by name and left out of the report; it never fails the run.
+ * A chart or report that could not be written (a full disk) fails it with the file system's reason, once the other
+ * charts and the report were tried: the tables are complete by then, and the message says so and how to redraw.
  */
 public final class MapsAndReport implements RunFinisher {
 
@@ -34,7 +36,16 @@ public final class MapsAndReport implements RunFinisher {
         // read once for the charts and the report: with tracks, reading them is not small
         RunData data = RunData.read(run.directory());
         DrawnMaps drawn = RunMaps.drawAll(data, run.directory(), vectorFormats);
-        drawn.failures().forEach(f -> warnings.accept(f.describe()));
-        ReportPage.write(data, run.directory(), drawn.failures());
+        // charts not written are said once, in the failure below, not as one warning each
+        drawn.failures().stream().filter(f -> !f.notWritten()).forEach(f -> warnings.accept(f.describe()));
+        try {
+            ReportPage.write(data, run.directory(), drawn.failures());
+        } catch (IOException e) {
+            throw new IOException(IoMessages.reason(e) + UnwrittenCharts.afterwards(run.directory()), e);
+        }
+        IOException unwritten = UnwrittenCharts.of(drawn, run.directory());
+        if (unwritten != null) {
+            throw unwritten;
+        }
     }
 }

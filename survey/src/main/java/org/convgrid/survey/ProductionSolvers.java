@@ -37,6 +37,11 @@ public final class ProductionSolvers {
             }
 
             @Override
+            public boolean writesTracks() {
+                return true;
+            }
+
+            @Override
             public void readSharedDataAhead() {
                 ShippedTablesReadAhead.start();
             }

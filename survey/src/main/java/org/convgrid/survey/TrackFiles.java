@@ -3,6 +3,8 @@ package org.convgrid.survey;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.atomic.AtomicReference;
 import org.convgrid.engine.batch.StarTrackSink;
 import org.convgrid.engine.birth.LifeEvents;
@@ -20,15 +22,17 @@ import org.convgrid.output.track.TrackWriter;
  * {@code tracks/<model_id without age>.zones.csv}, atomically (a reader never sees half a file; a recomputed track
  * replaces the old one), and the life events of every star evolved from birth to the run's {@link LifeEventLog}. The
  * directory is created with the first track, so a zero-age grid leaves none. Thread-safe: each track has its own
- * files and the log serialises its rows. An I/O failure does not stop the models (their rows are still worth
- * having): the first one is kept for {@link #failure()}.
+ * files and the log serialises its rows. An I/O failure is kept by star: {@link #requireWritten} then refuses that
+ * star's catalogue rows (a row kept without its track would never get it back), which stops the sweep there.
  */
-public final class TrackFiles implements StarTrackSink {
+public final class TrackFiles implements StarTrackSink, StarFiles {
 
     private final RunLayout layout;
     private final LifeEventLog events;
     private final SweepInterruption interruption;
     private final AtomicReference<IOException> failure = new AtomicReference<>();
+    /** Track id to the failure that kept its files or life-events row from the disk. */
+    private final Map<String, IOException> failedStars = new ConcurrentHashMap<>();
 
     /** @param layout the run directory whose {@code tracks} and life-events table receive the files */
     public TrackFiles(RunLayout layout) {
@@ -62,8 +66,23 @@ public final class TrackFiles implements StarTrackSink {
                 interruption.write(() -> events.append(row));
             }
         } catch (IOException e) {
-            failure.compareAndSet(null, new IOException("cannot write " + target + ": "
-                    + IoMessages.reason(e), e));
+            IOException named = IoMessages.naming(target, e);
+            failedStars.put(id, named);
+            failure.compareAndSet(null, named);
+        }
+    }
+
+    /**
+     * Refuses the rows of a star whose track files or life-events row failed, with that failure's file and reason and
+     * what the catalogue kept.
+     */
+    @Override
+    public void requireWritten(ModelRequest request) throws IOException {
+        IOException failed = failedStars.get(ModelIdFormat.trackIdOf(request.modelId()));
+        if (failed != null) {
+            throw new IOException(IoMessages.reason(failed) + "; the sweep stopped before the catalogue rows of "
+                    + "that star, so every row kept has its track (make room, then continue with run --resume)",
+                    failed);
         }
     }
 

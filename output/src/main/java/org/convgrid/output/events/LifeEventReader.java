@@ -60,9 +60,11 @@ public final class LifeEventReader {
     /** The rows of a table, in order. */
     public static List<LifeEventRow> read(Reader in) throws IOException {
         List<LifeEventRow> rows = new ArrayList<>();
-        try (CSVParser parser = CSVParser.builder().setReader(in).setFormat(FORMAT).get()) {
+        try (CSVParser parser = parser(in)) {
             if (!parser.getHeaderNames().containsAll(LifeEventColumns.REQUIRED)) {
-                throw new OutputFormatException("life-events table needs the columns " + LifeEventColumns.REQUIRED);
+                throw new OutputFormatException("damaged: its first line is not the column names (a life-events "
+                        + "table needs the columns " + LifeEventColumns.REQUIRED + "); 'convgrid run GRID.yaml "
+                        + "--resume' on the run rebuilds it");
             }
             List<String> header = parser.getHeaderNames();
             for (CSVRecord r : parser) {
@@ -86,6 +88,19 @@ public final class LifeEventReader {
             }
         }
         return rows;
+    }
+
+    /**
+     * A parser past the header line. A first line that is a row, not column names (a header lost to a full disk),
+     * makes Commons CSV refuse it as a header with an IllegalArgumentException: a damaged table, said so.
+     */
+    private static CSVParser parser(Reader in) throws IOException {
+        try {
+            return CSVParser.builder().setReader(in).setFormat(FORMAT).get();
+        } catch (IllegalArgumentException e) {
+            throw new OutputFormatException("damaged life-events table: its first line is not the column names ("
+                    + e.getMessage() + "); 'convgrid run GRID.yaml --resume' on the run rebuilds it", e);
+        }
     }
 
     private static double n(CSVRecord r, String column) {

@@ -34,7 +34,28 @@ public final class ChartFiles {
 
     /** Writes {@code chart} as a PNG of the chart's size. */
     public static void writePng(XYChart chart, Path target) throws IOException {
-        AtomicFiles.writeBinary(target, out -> BitmapEncoder.saveBitmap(chart, out, BitmapEncoder.BitmapFormat.PNG));
+        AtomicFiles.writeBinary(target, out -> {
+            try {
+                BitmapEncoder.saveBitmap(chart, out, BitmapEncoder.BitmapFormat.PNG);
+            } catch (IOException e) {
+                throw withOsReason(e);
+            }
+        });
+    }
+
+    /**
+     * The innermost I/O exception of {@code e}: the image encoder wraps the operating system's "File too large" or
+     * "No space left on device" in its own "I/O error writing PNG file!", which tells a user nothing (a robustness
+     * review: 31 warnings, no reason).
+     */
+    static IOException withOsReason(IOException e) {
+        IOException innermost = e;
+        for (Throwable t = e.getCause(); t != null && t != t.getCause(); t = t.getCause()) {
+            if (t instanceof IOException io && io.getMessage() != null) {
+                innermost = io;
+            }
+        }
+        return innermost;
     }
 
     /** Writes {@code chart} as a vector file. */

@@ -1,0 +1,48 @@
+package org.convgrid.plotting;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Set;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Charts that cannot be written (a full disk, a file size limit; simulated by a regular file where maps/ goes) are
+ * failures of the command, with the operating system's reason and the way to redraw; a chart with nothing to draw
+ * stays a warning. Found by a robustness review: `ulimit -f 40` gave 31 warnings "I/O error writing PNG file!" and
+ * exit 0.
+ */
+class UnwrittenChartsTest {
+
+    @TempDir
+    Path dir;
+
+    @Test
+    void chartsThatCannotBeWrittenAreAFailureThatNamesTheReasonAndHowToRedraw() throws Exception {
+        TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.2, 1.6, 8), new double[] {0.014}, new double[] {0}));
+        List<MapEntry> plan = RunMaps.plan(RunData.read(dir));
+        Path maps = Files.writeString(dir.resolve("maps"), "a file where the folder goes");
+        DrawnMaps drawn = RunMaps.draw(plan, maps, Set.of());
+        assertThat(drawn.written()).isEmpty();
+        assertThat(drawn.failures()).hasSize(plan.size()).allMatch(DrawnMaps.ChartFailure::notWritten);
+        assertThat(drawn.someNotWritten()).isTrue();
+        assertThat(UnwrittenCharts.of(drawn, dir)).isNotNull().hasMessageContaining(plan.size() + " of " + plan.size()
+                + " charts could not be written").hasMessageContaining("convgrid plot " + dir)
+                .hasMessageContaining("catalogue.ecsv").hasMessageNotContaining("I/O error writing PNG file");
+    }
+
+    @Test
+    void aChartWithNothingToDrawIsNoWriteFailure() throws Exception {
+        TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.2, 1.6, 8), new double[] {0.014}, new double[] {0}));
+        MapEntry empty = new MapEntry("empty.png", MapEntry.HR, "Nothing.", () -> {
+            throw new NothingToDraw("no model of this physics has status ok");
+        });
+        Files.createDirectories(dir.resolve("maps"));
+        DrawnMaps drawn = RunMaps.draw(List.of(empty), dir.resolve("maps"), Set.of());
+        assertThat(drawn.failures()).singleElement().satisfies(f -> assertThat(f.notWritten()).isFalse());
+        assertThat(UnwrittenCharts.of(drawn, dir)).isNull();
+    }
+}
