@@ -184,4 +184,32 @@ class ResumeTest {
                 + "p0-z00-m001-a00");
         assertThat(Files.readAllLines(work.resolve("whole/catalogue.ecsv"))).isEqualTo(holed);
     }
+
+    /**
+     * Profiles turned on (or off) for a resume: the models already computed have none (or have them), so the
+     * directory would hold profiles of some models while its manifest said all or none (found by a robustness
+     * review: exit 0 with 10 of 52 profiles). Refused like merge refuses such shards, changing nothing.
+     */
+    @Test
+    void resumeRefusesTurningProfilesOnOrOffAndChangesNothing() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        byte[] whole = uninterrupted(grid, "2");
+        String manifest = Files.readString(work.resolve("whole/manifest.yaml"));
+        Path withProfiles = CliHarness.writeGrid(work, "profiles.yaml",
+                CliHarness.GRID.replace("  dir: runs/test-survey\n", "  dir: runs/test-survey\n  profiles: true\n"));
+        CliHarness.Execution refused = run("run", "--no-refine", withProfiles.toString(), "--out", "whole",
+                "--resume");
+        assertThat(refused.code()).isEqualTo(2);
+        assertThat(refused.err()).contains("was run with 'output: profiles: false' and this grid file says "
+                + "'profiles: true'").contains("resume with 'profiles: false'").doesNotContain("--force");
+        assertThat(Files.readAllBytes(work.resolve("whole/catalogue.ecsv"))).isEqualTo(whole);
+        assertThat(Files.readString(work.resolve("whole/manifest.yaml"))).isEqualTo(manifest);
+        assertThat(work.resolve("whole/profiles")).doesNotExist();
+
+        assertThat(run("run", "--no-refine", withProfiles.toString(), "--out", "on", "--quiet").code()).isZero();
+        CliHarness.Execution off = run("run", "--no-refine", grid.toString(), "--out", "on", "--resume");
+        assertThat(off.code()).isEqualTo(2);
+        assertThat(off.err()).contains("was run with 'output: profiles: true' and this grid file says "
+                + "'profiles: false'");
+    }
 }

@@ -13,6 +13,8 @@ import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.batch.ProgressListener;
 import org.convgrid.engine.batch.Shard;
 import org.convgrid.grids.GridFile;
+import org.convgrid.grids.GridFileException;
+import org.convgrid.grids.yaml.GridFileReader;
 import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueReader;
@@ -185,6 +187,7 @@ public final class GridRun {
                     + " (models_sha256 " + models + " vs " + old.gridModelsSha256()
                     + "); resume with the original grid, or choose a new --out");
         }
+        refuseProfilesChange(dir, old, s.grid().spec().profiles());
         Shard recorded = old.shard() == null ? Shard.ALL : ShardChoice.parse(old.shard());
         Shard shard = s.requestedShard() == null ? recorded : s.requestedShard();
         if (!shard.equals(recorded)) {
@@ -194,6 +197,30 @@ public final class GridRun {
         ShardPlan plan = new ShardPlan(s.grid().spec(), shard, MASSES_PER_CHUNK);
         KeptCatalogue kept = KeptCatalogue.inspectAndTrim(dir.catalogue(), plan);
         return new Plan(s, shard, kept, plan.count(), old.started(), old.medianSecondsPerModel(), 0);
+    }
+
+    /**
+     * Refuses a resume whose grid file turns {@code output: profiles} on or off: the models already in the catalogue
+     * were computed with the other setting, so the directory would hold profiles of some models only while its
+     * manifest (which quotes the new grid file) claimed them all, or none. A robustness review found profiles turned
+     * on for a resume accepted silently (10 of 52 profile files, manifest saying {@code profiles: true}); merge
+     * refuses shards that differ so already. A recorded grid text this version cannot read names no setting, and
+     * is not held against the resume (its models hash already matched).
+     */
+    private static void refuseProfilesChange(RunDirectory dir, RunManifest old, boolean wanted) {
+        boolean recorded;
+        try {
+            recorded = new GridFileReader().parse(old.gridFile(), old.gridText()).profiles();
+        } catch (GridFileException e) {
+            return;
+        }
+        if (recorded != wanted) {
+            throw new RunSetupException(dir.root() + " was run with 'output: profiles: " + recorded + "' and this grid "
+                    + "file says 'profiles: " + wanted + "': a resume cannot " + (wanted
+                    ? "write the profiles of the models already in the catalogue" : "take back the profiles already "
+                    + "written") + ", so nothing was changed; resume with 'profiles: " + recorded + "' as the run "
+                    + "was started, or run the grid with 'profiles: " + wanted + "' into a new --out");
+        }
     }
 
     /**
