@@ -155,6 +155,13 @@ final class RunCommand implements Callable<Integer> {
                 err.println("convgrid: note: --resume found no run in " + dir.root() + "; starting a new one there");
                 err.flush();
             }
+            if (plan.manifestRebuilt()) {
+                // said even with --quiet: the manifest's first start time and measured cost are gone
+                err.println("convgrid: note: " + dir.root() + " had no " + RunLayout.MANIFEST + "; its catalogue's "
+                        + Counts.of(plan.kept().ids().size(), "row") + " are this grid's first models, so the resume "
+                        + "wrote a new manifest (started now) and continues the run");
+                err.flush();
+            }
             if (plan.removedEarlierFiles() > 0) {
                 // said even with --quiet: files were deleted, and the user should not learn it from a missing file
                 err.println("convgrid: --force removed " + Counts.of(plan.removedEarlierFiles(), "file")

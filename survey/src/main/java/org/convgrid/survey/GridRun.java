@@ -16,6 +16,7 @@ import org.convgrid.grids.GridFile;
 import org.convgrid.grids.GridFileException;
 import org.convgrid.grids.yaml.GridFileReader;
 import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.OutputFormatException;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
@@ -61,9 +62,11 @@ public final class GridRun {
      * @param previousMedian the median seconds per model an earlier session measured, NaN when none
      * @param removedEarlierFiles how many files of an earlier run {@code --force} removed (0 without it), for the
      *                            user to hear of it: they were deleted, not moved
+     * @param manifestRebuilt whether a resume found no manifest and wrote a new one from the grid, its catalogue's
+     *                        rows being this grid's, for the user to hear of it
      */
     public record Plan(Settings settings, Shard shard, KeptCatalogue kept, long owned, Instant started,
-                       double previousMedian, int removedEarlierFiles) {
+                       double previousMedian, int removedEarlierFiles, boolean manifestRebuilt) {
 
         /** Models this session computes. */
         public long remaining() {
@@ -121,7 +124,7 @@ public final class GridRun {
         RunManifest start = manifest(s, shard, started, null, Map.of(), Double.NaN).unfinished(Map.of(), Double.NaN,
                 owned);
         dir.create(RunManifestWriter.toYaml(start), start.ironAbundance());
-        return new Plan(s, shard, new KeptCatalogue(Set.of(), true, 0), owned, started, Double.NaN, removed);
+        return new Plan(s, shard, new KeptCatalogue(Set.of(), true, 0), owned, started, Double.NaN, removed, false);
     }
 
     /**
@@ -177,10 +180,17 @@ public final class GridRun {
     private Plan resume(Settings s) throws IOException {
         RunDirectory dir = s.directory();
         if (!Files.exists(dir.manifest())) {
-            throw new RunSetupException(dir.root() + " has a catalogue but no " + RunLayout.MANIFEST
-                    + ", so it cannot be checked against the grid; use a new --out or --force");
+            return resumeWithoutManifest(s);
         }
-        RunManifest old = RunManifestReader.read(Files.readString(dir.manifest()));
+        RunManifest old;
+        try {
+            old = RunManifestReader.read(Files.readString(dir.manifest()));
+        } catch (OutputFormatException e) {
+            // a review saw the Java null-pointer text of a cut manifest, exit 1, and no way on
+            throw new RunSetupException(dir.manifest() + ": " + e.getMessage() + "; nothing was changed. Move it "
+                    + "aside (e.g. to " + RunLayout.MANIFEST + ".damaged) and resume again: without a manifest the "
+                    + "resume writes a new one when the catalogue's rows are this grid's");
+        }
         String models = s.grid().modelsSha256();
         if (!old.gridModelsSha256().equals(models)) {
             throw new RunSetupException("the grid's models differ from those of the run in " + dir.root()
@@ -196,7 +206,33 @@ public final class GridRun {
         }
         ShardPlan plan = new ShardPlan(s.grid().spec(), shard, MASSES_PER_CHUNK);
         KeptCatalogue kept = KeptCatalogue.inspectAndTrim(dir.catalogue(), plan);
-        return new Plan(s, shard, kept, plan.count(), old.started(), old.medianSecondsPerModel(), 0);
+        return new Plan(s, shard, kept, plan.count(), old.started(), old.medianSecondsPerModel(), 0, false);
+    }
+
+    /**
+     * Resumes a directory whose manifest is gone (deleted, or moved aside when damaged) but whose catalogue is there:
+     * when the catalogue's rows are the first models of this grid and shard, in order, it is this run's, and a new
+     * start manifest is written (the first session's start time and measured cost are lost). A review found the
+     * only way out offered was --force, which deletes the rows.
+     */
+    private Plan resumeWithoutManifest(Settings s) throws IOException {
+        RunDirectory dir = s.directory();
+        Shard shard = s.requestedShard() == null ? Shard.ALL : s.requestedShard();
+        ShardPlan plan = new ShardPlan(s.grid().spec(), shard, MASSES_PER_CHUNK);
+        KeptCatalogue kept;
+        try {
+            kept = KeptCatalogue.inspectAndTrim(dir.catalogue(), plan);
+        } catch (RunSetupException e) {
+            throw new RunSetupException(dir.root() + " has a catalogue but no " + RunLayout.MANIFEST + ", and the "
+                    + "catalogue is not this grid's" + (shard.count() > 1 ? " shard " + shard(shard) : "") + ": "
+                    + e.getMessage() + ". Resume with the grid file (and --shard) that wrote it, which rebuilds the "
+                    + "manifest, or choose a new --out");
+        }
+        Instant started = clock.instant();
+        RunManifest start = manifest(s, shard, started, null, Map.of(), Double.NaN).unfinished(Map.of(), Double.NaN,
+                plan.count());
+        AtomicFiles.writeString(dir.manifest(), RunManifestWriter.toYaml(start));
+        return new Plan(s, shard, kept, plan.count(), started, Double.NaN, 0, true);
     }
 
     /**
