@@ -24,6 +24,7 @@ import org.convgrid.survey.GridRun;
 import org.convgrid.survey.RunDirectory;
 import org.convgrid.survey.RunFinishing;
 import org.convgrid.survey.RunLock;
+import org.convgrid.survey.StaleTemporaryFiles;
 import org.convgrid.survey.ShardChoice;
 import org.convgrid.survey.SweepInterruption;
 import org.convgrid.survey.TrackFiles;
@@ -153,6 +154,13 @@ final class RunCommand implements Callable<Integer> {
                 // said even with --quiet: a mistyped directory would otherwise cost the whole grid again unnoticed
                 // (a job script that always adds --resume reads it once, on its first submission)
                 err.println("convgrid: note: --resume found no run in " + dir.root() + "; starting a new one there");
+                err.flush();
+            }
+            int staleTemporaries = StaleTemporaryFiles.remove(dir.layout(), StaleTemporaryFiles.Scope.RUN);
+            if (staleTemporaries > 0) {
+                // said even with --quiet: files were deleted (only convgrid's own, half-written ones)
+                err.println("convgrid: removed " + Counts.of(staleTemporaries, "temporary file") + " that interrupted "
+                        + "writes had left in " + dir.root());
                 err.flush();
             }
             if (plan.manifestRebuilt()) {
