@@ -1,6 +1,8 @@
 package org.convgrid.cli;
 
 import java.io.PrintWriter;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ExecutionException;
 import java.nio.file.Path;
 import java.time.Clock;
 import java.util.List;
@@ -144,11 +146,25 @@ final class RunCommand implements Callable<Integer> {
                 profiles != null ? profiles : ModelSink.NONE);
         Clock clock = Clock.tickSeconds(java.time.ZoneOffset.UTC);
         GridRun runner = new GridRun(ToolVersion.current(), ToolVersion.commit(), clock);
-        try (RunLock lock = RunLock.acquire(dir.root())) {
+        // the plan the interrupt hook stops, once the directory is prepared (or why it could not be)
+        CompletableFuture<GridRun.Plan> prepared = new CompletableFuture<>();
+        try (RunLock lock = RunLock.acquire(dir.root());
+             // installed before the directory is prepared: a signal while prepare wrote the start manifest ended the
+             // JVM without a word (a review saw exit 130 and no line; by hand a SIGTERM 0.84 s after the start left
+             // a manifest without a catalogue, exit 143, nothing said), and its hook waits for prepare to end
+             RunInterruptHook hook = RunInterruptHook.install(() -> interrupted(runner, prepared, interruption, lock,
+                     context.terminal() && !quiet), parent.err())) {
             Locks.reportStale(lock, parent.err());
             long start = System.nanoTime();
             boolean nothingToResume = resume && !dir.holdsRun();
-            GridRun.Plan plan = runner.prepare(new GridRun.Settings(file, dir, n, chosen, resume, force));
+            GridRun.Plan plan;
+            try {
+                plan = runner.prepare(new GridRun.Settings(file, dir, n, chosen, resume, force));
+                prepared.complete(plan);
+            } catch (Exception | Error e) {
+                prepared.completeExceptionally(e);
+                throw e;
+            }
             PrintWriter err = parent.err();
             if (nothingToResume) {
                 // said even with --quiet: a mistyped directory would otherwise cost the whole grid again unnoticed
@@ -190,14 +206,11 @@ final class RunCommand implements Callable<Integer> {
                 err.flush();
             }
             TransitionSettings transitions = file.spec().transitions();
-            // a shard holds part of each mass line: its brackets are refined once the shards are merged
-            boolean refineNow = !noRefine && transitions.refine() && plan.shard().count() == 1;
+            boolean refineNow = refinesNow(plan);
             GridRun.Result result;
             TransitionTables.Update refined = null;
             double sweepSeconds;
-            try (ParallelWork work = new ParallelWork(n);
-                 RunInterruptHook hook = RunInterruptHook.install(() -> interrupted(runner, plan, interruption, lock,
-                         refineNow, context.terminal() && !quiet), err)) {
+            try (ParallelWork work = new ParallelWork(n)) {
                 result = runner.execute(plan, work, solver, reporter == null ? ProgressListener.NONE : reporter,
                         refineNow ? List.of() : context.finishers(), interruption);
                 if (reporter != null) {
@@ -231,6 +244,8 @@ final class RunCommand implements Callable<Integer> {
                         }
                     }
                 }
+                // the run's files are complete: a signal from here on ends the process as the JVM does by default
+                hook.close();
             }
             if (tracks.failure() != null) {
                 throw tracks.failure();
@@ -299,8 +314,17 @@ final class RunCommand implements Callable<Integer> {
      *
      * @param progressShown whether a progress line may be on the terminal (the message then starts a line of its own)
      */
-    private String interrupted(GridRun runner, GridRun.Plan plan, SweepInterruption interruption, RunLock lock,
-                               boolean refines, boolean progressShown) throws java.io.IOException {
+    private String interrupted(GridRun runner, CompletableFuture<GridRun.Plan> prepared,
+                               SweepInterruption interruption, RunLock lock, boolean progressShown)
+            throws java.io.IOException, InterruptedException {
+        GridRun.Plan plan;
+        try {
+            // prepare takes well under a second: its directory is then whole, and the resume line true
+            plan = prepared.get();
+        } catch (ExecutionException e) {
+            return "convgrid: interrupted while the run directory was prepared; nothing was computed";
+        }
+        boolean refines = refinesNow(plan);
         GridRun.Interrupted left = runner.interrupt(plan, interruption);
         try {
             // released as a normal end would, so that the resume does not report a holder that died
@@ -312,6 +336,14 @@ final class RunCommand implements Callable<Integer> {
         return (progressShown ? "\n" : "") + RunInterruptHook.line(left, grid.toString(),
                 out != null && plan.shard().count() == 1 ? out.toString()
                         : plan.settings().directory().root().toString(), refines);
+    }
+
+    /**
+     * Whether this run refines its transitions after the sweep: a shard holds part of each mass line, so its brackets
+     * are refined once the shards are merged.
+     */
+    private boolean refinesNow(GridRun.Plan plan) {
+        return !noRefine && plan.settings().grid().spec().transitions().refine() && plan.shard().count() == 1;
     }
 
     /** The thread count asked for, or the available processors. */
