@@ -119,8 +119,8 @@ public final class ConvgridMain implements Runnable {
         try {
             return java.nio.file.Path.of(text);
         } catch (java.nio.file.InvalidPathException e) {
-            throw new CommandLine.TypeConversionException("not a usable path (it contains a NUL or another "
-                    + "character the file system refuses)");
+            throw new CommandLine.TypeConversionException(UnusablePath.reason(text,
+                    System.getProperty("sun.jnu.encoding"), System.getenv()));
         }
     }
 

@@ -8,6 +8,8 @@ import java.util.Set;
 import java.util.concurrent.Callable;
 import org.convgrid.output.RunLayout;
 import org.convgrid.survey.RunLock;
+import org.convgrid.survey.StaleTemporaryFiles;
+import org.convgrid.grids.words.Counts;
 import org.convgrid.plotting.DrawnMaps;
 import org.convgrid.plotting.RunData;
 import org.convgrid.plotting.RunMaps;
@@ -48,6 +50,11 @@ final class PlotCommand implements Callable<Integer> {
         // writes there
         try (RunLock lock = RunLock.acquire(dir)) {
             Locks.reportStale(lock, main.err());
+            int staleTemporaries = StaleTemporaryFiles.remove(layout, StaleTemporaryFiles.Scope.CHARTS);
+            if (staleTemporaries > 0) {
+                main.err().println("convgrid: removed " + Counts.of(staleTemporaries, "temporary file")
+                        + " that interrupted writes had left in " + dir);
+            }
             UnfinishedRunWarning.printIfUnfinished(layout, main.err());
             RunData run = RunData.read(dir);
             DrawnMaps maps = RunMaps.drawAll(run, dir, formats);

@@ -1,6 +1,8 @@
 package org.convgrid.cli;
 
 import java.io.PrintWriter;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ExecutionException;
 import java.nio.file.Path;
 import java.time.Clock;
 import java.util.List;
@@ -25,6 +27,7 @@ import org.convgrid.survey.GridRun;
 import org.convgrid.survey.RunDirectory;
 import org.convgrid.survey.RunFinishing;
 import org.convgrid.survey.RunLock;
+import org.convgrid.survey.StaleTemporaryFiles;
 import org.convgrid.survey.ShardChoice;
 import org.convgrid.survey.SweepInterruption;
 import org.convgrid.survey.TrackFiles;
@@ -145,16 +148,44 @@ final class RunCommand implements Callable<Integer> {
         Clock clock = Clock.tickSeconds(java.time.ZoneOffset.UTC);
         GridRun runner = new GridRun(ToolVersion.current(), ToolVersion.commit(), clock,
                 context.solvers().writesTracks());
-        try (RunLock lock = RunLock.acquire(dir.root())) {
+        // the plan the interrupt hook stops, once the directory is prepared (or why it could not be)
+        CompletableFuture<GridRun.Plan> prepared = new CompletableFuture<>();
+        try (RunLock lock = RunLock.acquire(dir.root());
+             // installed before the directory is prepared: a signal while prepare wrote the start manifest ended the
+             // JVM without a word (a review saw exit 130 and no line; by hand a SIGTERM 0.84 s after the start left
+             // a manifest without a catalogue, exit 143, nothing said), and its hook waits for prepare to end
+             RunInterruptHook hook = RunInterruptHook.install(() -> interrupted(runner, prepared, interruption, lock,
+                     context.terminal() && !quiet), parent.err())) {
             Locks.reportStale(lock, parent.err());
             long start = System.nanoTime();
             boolean nothingToResume = resume && !dir.holdsRun();
-            GridRun.Plan plan = runner.prepare(new GridRun.Settings(file, dir, n, chosen, resume, force));
+            GridRun.Plan plan;
+            try {
+                plan = runner.prepare(new GridRun.Settings(file, dir, n, chosen, resume, force));
+                prepared.complete(plan);
+            } catch (Exception | Error e) {
+                prepared.completeExceptionally(e);
+                throw e;
+            }
             PrintWriter err = parent.err();
             if (nothingToResume) {
                 // said even with --quiet: a mistyped directory would otherwise cost the whole grid again unnoticed
                 // (a job script that always adds --resume reads it once, on its first submission)
                 err.println("convgrid: note: --resume found no run in " + dir.root() + "; starting a new one there");
+                err.flush();
+            }
+            int staleTemporaries = StaleTemporaryFiles.remove(dir.layout(), StaleTemporaryFiles.Scope.RUN);
+            if (staleTemporaries > 0) {
+                // said even with --quiet: files were deleted (only convgrid's own, half-written ones)
+                err.println("convgrid: removed " + Counts.of(staleTemporaries, "temporary file") + " that interrupted "
+                        + "writes had left in " + dir.root());
+                err.flush();
+            }
+            if (plan.manifestRebuilt()) {
+                // said even with --quiet: the manifest's first start time and measured cost are gone
+                err.println("convgrid: note: " + dir.root() + " had no " + RunLayout.MANIFEST + "; its catalogue's "
+                        + Counts.of(plan.kept().ids().size(), "row") + " are this grid's first models, so the resume "
+                        + "wrote a new manifest (started now) and continues the run");
                 err.flush();
             }
             if (plan.recomputedForMissingFiles() != null) {
@@ -182,14 +213,11 @@ final class RunCommand implements Callable<Integer> {
                 err.flush();
             }
             TransitionSettings transitions = file.spec().transitions();
-            // a shard holds part of each mass line: its brackets are refined once the shards are merged
-            boolean refineNow = !noRefine && transitions.refine() && plan.shard().count() == 1;
+            boolean refineNow = refinesNow(plan);
             GridRun.Result result;
             TransitionTables.Update refined = null;
             double sweepSeconds;
-            try (ParallelWork work = new ParallelWork(n);
-                 RunInterruptHook hook = RunInterruptHook.install(() -> interrupted(runner, plan, interruption, lock,
-                         refineNow, context.terminal() && !quiet), err)) {
+            try (ParallelWork work = new ParallelWork(n)) {
                 result = runner.execute(plan, work, solver, reporter == null ? ProgressListener.NONE : reporter,
                         refineNow ? List.of() : context.finishers(), interruption,
                         evolves ? tracks : org.convgrid.survey.StarFiles.NONE);
@@ -224,6 +252,8 @@ final class RunCommand implements Callable<Integer> {
                         }
                     }
                 }
+                // the run's files are complete: a signal from here on ends the process as the JVM does by default
+                hook.close();
             }
             if (tracks.failure() != null) {
                 throw tracks.failure();
@@ -292,8 +322,17 @@ final class RunCommand implements Callable<Integer> {
      *
      * @param progressShown whether a progress line may be on the terminal (the message then starts a line of its own)
      */
-    private String interrupted(GridRun runner, GridRun.Plan plan, SweepInterruption interruption, RunLock lock,
-                               boolean refines, boolean progressShown) throws java.io.IOException {
+    private String interrupted(GridRun runner, CompletableFuture<GridRun.Plan> prepared,
+                               SweepInterruption interruption, RunLock lock, boolean progressShown)
+            throws java.io.IOException, InterruptedException {
+        GridRun.Plan plan;
+        try {
+            // prepare takes well under a second: its directory is then whole, and the resume line true
+            plan = prepared.get();
+        } catch (ExecutionException e) {
+            return "convgrid: interrupted while the run directory was prepared; nothing was computed";
+        }
+        boolean refines = refinesNow(plan);
         GridRun.Interrupted left = runner.interrupt(plan, interruption);
         try {
             // released as a normal end would, so that the resume does not report a holder that died
@@ -305,6 +344,14 @@ final class RunCommand implements Callable<Integer> {
         return (progressShown ? "\n" : "") + RunInterruptHook.line(left, grid.toString(),
                 out != null && plan.shard().count() == 1 ? out.toString()
                         : plan.settings().directory().root().toString(), refines);
+    }
+
+    /**
+     * Whether this run refines its transitions after the sweep: a shard holds part of each mass line, so its brackets
+     * are refined once the shards are merged.
+     */
+    private boolean refinesNow(GridRun.Plan plan) {
+        return !noRefine && plan.settings().grid().spec().transitions().refine() && plan.shard().count() == 1;
     }
 
     /** The thread count asked for, or the available processors. */

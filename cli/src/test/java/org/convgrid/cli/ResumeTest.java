@@ -180,8 +180,107 @@ class ResumeTest {
         Files.write(work.resolve("whole/catalogue.ecsv"), holed);
         CliHarness.Execution refused = run("run", "--no-refine", grid.toString(), "--out", "whole", "--resume");
         assertThat(refused.code()).isEqualTo(2);
-        assertThat(refused.err()).contains("row 3 is model p0-z00-m001-a01 where this grid and shard expect "
-                + "p0-z00-m001-a00");
+        // this run's rows with one missing: a gap, not another run (a review saw "it belongs to another run")
+        assertThat(refused.err()).contains("catalogue.ecsv misses model p0-z00-m001-a00, between p0-z00-m000-a01 "
+                + "(row 2) and p0-z00-m001-a01 (row 3): rows were deleted by hand or the file was damaged")
+                .contains("delete its rows from p0-z00-m001-a01 on and resume again").doesNotContain("another run");
         assertThat(Files.readAllLines(work.resolve("whole/catalogue.ecsv"))).isEqualTo(holed);
+    }
+
+    /**
+     * Profiles turned on (or off) for a resume: the models already computed have none (or have them), so the
+     * directory would hold profiles of some models while its manifest said all or none (found by a robustness
+     * review: exit 0 with 10 of 52 profiles). Refused like merge refuses such shards, changing nothing.
+     */
+    @Test
+    void resumeRefusesTurningProfilesOnOrOffAndChangesNothing() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        byte[] whole = uninterrupted(grid, "2");
+        String manifest = Files.readString(work.resolve("whole/manifest.yaml"));
+        Path withProfiles = CliHarness.writeGrid(work, "profiles.yaml",
+                CliHarness.GRID.replace("  dir: runs/test-survey\n", "  dir: runs/test-survey\n  profiles: true\n"));
+        CliHarness.Execution refused = run("run", "--no-refine", withProfiles.toString(), "--out", "whole",
+                "--resume");
+        assertThat(refused.code()).isEqualTo(2);
+        assertThat(refused.err()).contains("was run with 'output: profiles: false' and this grid file says "
+                + "'profiles: true'").contains("resume with 'profiles: false'").doesNotContain("--force");
+        assertThat(Files.readAllBytes(work.resolve("whole/catalogue.ecsv"))).isEqualTo(whole);
+        assertThat(Files.readString(work.resolve("whole/manifest.yaml"))).isEqualTo(manifest);
+        assertThat(work.resolve("whole/profiles")).doesNotExist();
+
+        assertThat(run("run", "--no-refine", withProfiles.toString(), "--out", "on", "--quiet").code()).isZero();
+        CliHarness.Execution off = run("run", "--no-refine", grid.toString(), "--out", "on", "--resume");
+        assertThat(off.code()).isEqualTo(2);
+        assertThat(off.err()).contains("was run with 'output: profiles: true' and this grid file says "
+                + "'profiles: false'");
+    }
+
+    /**
+     * A catalogue whose manifest is gone is continued when its rows are this grid's, with a new manifest and a note;
+     * one of another grid of the same shape (the same ids) is refused without steering to --force (found by a review:
+     * "use a new --out or --force" was the only way out offered, and --force deletes the rows).
+     */
+    @Test
+    void resumeWithoutAManifestRebuildsItWhenTheRowsAreThisGrids() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        byte[] whole = uninterrupted(grid, "2");
+        assertThat(run("run", "--no-refine", grid.toString(), "--out", "lost", "--quiet").code()).isZero();
+        List<String> lines = Files.readAllLines(work.resolve("lost/catalogue.ecsv"));
+        Files.write(work.resolve("lost/catalogue.ecsv"), lines.subList(0, CliHarness.CATALOGUE_HEADER_LINES + 40));
+        Files.delete(work.resolve("lost/manifest.yaml"));
+
+        Path shifted = CliHarness.writeGrid(work, "shifted.yaml", CliHarness.GRID.replace("from: 0.1", "from: 0.15")
+                .replace("to: 2.0", "to: 2.05"));
+        CliHarness.Execution other = run("run", "--no-refine", shifted.toString(), "--out", "lost", "--resume");
+        assertThat(other.code()).isEqualTo(2);
+        assertThat(other.err()).contains("has a catalogue but no manifest.yaml, and the catalogue is not this grid's")
+                .contains("row 1 is model p0-z00-m000-a00 of 0.1 Msun").doesNotContain("--force");
+        assertThat(work.resolve("lost/manifest.yaml")).doesNotExist();
+
+        CliHarness.Execution resumed = run("run", "--no-refine", grid.toString(), "--out", "lost", "--resume",
+                "--quiet");
+        assertThat(resumed.code()).as(resumed.err()).isZero();
+        assertThat(resumed.err()).contains("had no manifest.yaml; its catalogue's 40 rows are this grid's first "
+                + "models, so the resume wrote a new manifest");
+        assertThat(Files.readAllBytes(work.resolve("lost/catalogue.ecsv"))).isEqualTo(whole);
+        assertThat(Files.readString(work.resolve("lost/manifest.yaml"))).contains("total: " + CliHarness.GRID_MODELS)
+                .doesNotContain("finished: null");
+    }
+
+    /** A manifest cut short is named so, with the way on; a catalogue cut inside its header is not "another layout". */
+    @Test
+    void aDamagedManifestOrCatalogueHeaderIsNamedAsDamage() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        uninterrupted(grid, "2");
+        Path manifest = work.resolve("whole/manifest.yaml");
+        String text = Files.readString(manifest);
+        Files.writeString(manifest, text.substring(0, text.indexOf("threads:")));
+        CliHarness.Execution cutManifest = run("run", "--no-refine", grid.toString(), "--out", "whole", "--resume");
+        assertThat(cutManifest.code()).isEqualTo(2);
+        assertThat(cutManifest.err()).contains("manifest.yaml: not a complete convgrid manifest: its key 'models' is "
+                + "missing or empty").contains("Move it aside").doesNotContain("Cannot invoke");
+
+        Files.writeString(manifest, text);
+        Path catalogue = work.resolve("whole/catalogue.ecsv");
+        byte[] full = Files.readAllBytes(catalogue);
+        Files.write(catalogue, java.util.Arrays.copyOf(full, 500));
+        CliHarness.Execution cutHeader = run("run", "--no-refine", grid.toString(), "--out", "whole", "--resume");
+        assertThat(cutHeader.code()).isEqualTo(2);
+        assertThat(cutHeader.err()).contains("its header is cut short before the column names")
+                .doesNotContain("not a catalogue this version writes");
+        assertThat(Files.readAllBytes(catalogue)).hasSize(500);
+    }
+
+    /** `plot` of a finished run whose catalogue lost a row warns (a review saw 51 of 52 rows drawn without a word). */
+    @Test
+    void plotWarnsWhenAFinishedRunsCatalogueLacksRows() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        uninterrupted(grid, "2");
+        List<String> lines = new java.util.ArrayList<>(Files.readAllLines(work.resolve("whole/catalogue.ecsv")));
+        lines.remove(CliHarness.CATALOGUE_HEADER_LINES + 11);
+        Files.write(work.resolve("whole/catalogue.ecsv"), lines);
+        CliHarness.Execution plot = run("plot", "whole");
+        assertThat(plot.err()).contains("holds " + (CliHarness.GRID_MODELS - 1) + " rows but the manifest of the "
+                + "finished run counts " + CliHarness.GRID_MODELS);
     }
 }

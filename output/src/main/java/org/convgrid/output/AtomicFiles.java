@@ -48,6 +48,19 @@ public final class AtomicFiles {
         return TEMPORARY_NAME.matcher(file.getFileName().toString()).matches();
     }
 
+    /**
+     * The file a temporary file of this class was to become (beside it), empty when {@code file} is no such
+     * temporary file: lets a cleaner remove only the temporaries of files it owns.
+     */
+    public static java.util.Optional<Path> targetOfTemporary(Path file) {
+        if (!isTemporary(file)) {
+            return java.util.Optional.empty();
+        }
+        String name = file.getFileName().toString();
+        String withoutSuffix = name.substring(1, name.length() - TEMPORARY_SUFFIX.length());
+        return java.util.Optional.of(file.resolveSibling(withoutSuffix.substring(0, withoutSuffix.lastIndexOf('.'))));
+    }
+
     /** Writes UTF-8 text through {@code body}, then moves it into place. */
     public static void write(Path target, TextBody body) throws IOException {
         writeBinary(target, out -> {

@@ -44,6 +44,11 @@ public final class EarlierCatalogueLayout {
         if (text.startsWith(header)) {
             return text;
         }
+        if (CatalogueReader.headerCutShort(text) || header.startsWith(text)) {
+            // a prefix of the header is damage, not another version's layout (a review read it as a version mismatch)
+            throw new RunSetupException(file + ": " + CatalogueReader.HEADER_CUT_SHORT + "; cannot " + action
+                    + " (remove it and resume again to start the catalogue anew, or restore it from a copy)");
+        }
         if (!upgradable(text)) {
             throw new RunSetupException(file + " is not a catalogue this version writes or can bring to its layout "
                     + "(its columns must be the first of this version's, in order); cannot " + action);

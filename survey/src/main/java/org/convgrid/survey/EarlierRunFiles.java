@@ -29,7 +29,7 @@ import org.convgrid.plotting.RunMaps;
 final class EarlierRunFiles {
 
     /** The files convgrid writes at the top of a run directory. */
-    private static final List<String> TOP_FILES = List.of(RunLayout.CATALOGUE, RunLayout.CATALOGUE_V1,
+    static final List<String> TOP_FILES = List.of(RunLayout.CATALOGUE, RunLayout.CATALOGUE_V1,
             RunLayout.ZONES, RunLayout.TRANSITIONS, RunLayout.LIFE_EVENTS, RunLayout.MANIFEST, RunLayout.REPORT);
 
     private EarlierRunFiles() {

@@ -13,7 +13,10 @@ import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.batch.ProgressListener;
 import org.convgrid.engine.batch.Shard;
 import org.convgrid.grids.GridFile;
+import org.convgrid.grids.GridFileException;
+import org.convgrid.grids.yaml.GridFileReader;
 import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.OutputFormatException;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
@@ -61,9 +64,12 @@ public final class GridRun {
      *                            user to hear of it: they were deleted, not moved
      * @param recomputedForMissingFiles on resume, why kept rows were dropped to be computed again (their stars lacked
      *                                  track files or life-events rows), for the user; null when none was
+     * @param manifestRebuilt whether a resume found no manifest and wrote a new one from the grid, its catalogue's
+     *                        rows being this grid's, for the user to hear of it
      */
     public record Plan(Settings settings, Shard shard, KeptCatalogue kept, long owned, Instant started,
-                       double previousMedian, int removedEarlierFiles, String recomputedForMissingFiles) {
+                       double previousMedian, int removedEarlierFiles, String recomputedForMissingFiles,
+                       boolean manifestRebuilt) {
 
         /** Models this session computes. */
         public long remaining() {
@@ -131,7 +137,8 @@ public final class GridRun {
         RunManifest start = manifest(s, shard, started, null, Map.of(), Double.NaN).unfinished(Map.of(), Double.NaN,
                 owned);
         dir.create(RunManifestWriter.toYaml(start), start.ironAbundance());
-        return new Plan(s, shard, new KeptCatalogue(Set.of(), true, 0), owned, started, Double.NaN, removed, null);
+        return new Plan(s, shard, new KeptCatalogue(Set.of(), true, 0), owned, started, Double.NaN, removed, null,
+                false);
     }
 
     /**
@@ -187,16 +194,24 @@ public final class GridRun {
     private Plan resume(Settings s) throws IOException {
         RunDirectory dir = s.directory();
         if (!Files.exists(dir.manifest())) {
-            throw new RunSetupException(dir.root() + " has a catalogue but no " + RunLayout.MANIFEST
-                    + ", so it cannot be checked against the grid; use a new --out or --force");
+            return resumeWithoutManifest(s);
         }
-        RunManifest old = RunManifestReader.read(Files.readString(dir.manifest()));
+        RunManifest old;
+        try {
+            old = RunManifestReader.read(Files.readString(dir.manifest()));
+        } catch (OutputFormatException e) {
+            // a review saw the Java null-pointer text of a cut manifest, exit 1, and no way on
+            throw new RunSetupException(dir.manifest() + ": " + e.getMessage() + "; nothing was changed. Move it "
+                    + "aside (e.g. to " + RunLayout.MANIFEST + ".damaged) and resume again: without a manifest the "
+                    + "resume writes a new one when the catalogue's rows are this grid's");
+        }
         String models = s.grid().modelsSha256();
         if (!old.gridModelsSha256().equals(models)) {
             throw new RunSetupException("the grid's models differ from those of the run in " + dir.root()
                     + " (models_sha256 " + models + " vs " + old.gridModelsSha256()
                     + "); resume with the original grid, or choose a new --out");
         }
+        refuseProfilesChange(dir, old, s.grid().spec().profiles());
         Shard recorded = old.shard() == null ? Shard.ALL : ShardChoice.parse(old.shard());
         Shard shard = s.requestedShard() == null ? recorded : s.requestedShard();
         if (!shard.equals(recorded)) {
@@ -213,7 +228,65 @@ public final class GridRun {
             kept = new KeptCatalogue(fewer.ids(), fewer.hasHeader(), kept.droppedBytes());
         }
         return new Plan(s, shard, kept, plan.count(), old.started(), old.medianSecondsPerModel(), 0,
-                recomputed == null ? null : recomputed.describe(dir.catalogue()));
+                recomputed == null ? null : recomputed.describe(dir.catalogue()), false);
+    }
+
+    /**
+     * Resumes a directory whose manifest is gone (deleted, or moved aside when damaged) but whose catalogue is there:
+     * when the catalogue's rows are the first models of this grid and shard, in order, it is this run's, and a new
+     * start manifest is written (the first session's start time and measured cost are lost). A review found the
+     * only way out offered was --force, which deletes the rows.
+     */
+    private Plan resumeWithoutManifest(Settings s) throws IOException {
+        RunDirectory dir = s.directory();
+        Shard shard = s.requestedShard() == null ? Shard.ALL : s.requestedShard();
+        ShardPlan plan = new ShardPlan(s.grid().spec(), shard, MASSES_PER_CHUNK);
+        KeptCatalogue kept;
+        try {
+            kept = KeptCatalogue.inspectAndTrim(dir.catalogue(), plan);
+        } catch (RunSetupException e) {
+            throw new RunSetupException(dir.root() + " has a catalogue but no " + RunLayout.MANIFEST + ", and the "
+                    + "catalogue is not this grid's" + (shard.count() > 1 ? " shard " + shard(shard) : "") + ": "
+                    + e.getMessage() + ". Resume with the grid file (and --shard) that wrote it, which rebuilds the "
+                    + "manifest, or choose a new --out");
+        }
+        Instant started = clock.instant();
+        RunManifest start = manifest(s, shard, started, null, Map.of(), Double.NaN).unfinished(Map.of(), Double.NaN,
+                plan.count());
+        AtomicFiles.writeString(dir.manifest(), RunManifestWriter.toYaml(start));
+        MissingStarFiles.Recomputed recomputed = !checksTracks ? null : MissingStarFiles.cutBackToFirstLacking(dir,
+                s.grid().spec(), GridIronAbundance.of(s.grid().spec()));
+        if (recomputed != null) {
+            // as on a resume with its manifest: the stars that lack their files are computed again
+            KeptCatalogue fewer = KeptCatalogue.inspectAndTrim(dir.catalogue(), plan);
+            kept = new KeptCatalogue(fewer.ids(), fewer.hasHeader(), kept.droppedBytes());
+        }
+        return new Plan(s, shard, kept, plan.count(), started, Double.NaN, 0,
+                recomputed == null ? null : recomputed.describe(dir.catalogue()), true);
+    }
+
+    /**
+     * Refuses a resume whose grid file turns {@code output: profiles} on or off: the models already in the catalogue
+     * were computed with the other setting, so the directory would hold profiles of some models only while its
+     * manifest (which quotes the new grid file) claimed them all, or none. A robustness review found profiles turned
+     * on for a resume accepted silently (10 of 52 profile files, manifest saying {@code profiles: true}); merge
+     * refuses shards that differ so already. A recorded grid text this version cannot read names no setting, and
+     * is not held against the resume (its models hash already matched).
+     */
+    private static void refuseProfilesChange(RunDirectory dir, RunManifest old, boolean wanted) {
+        boolean recorded;
+        try {
+            recorded = new GridFileReader().parse(old.gridFile(), old.gridText()).profiles();
+        } catch (GridFileException e) {
+            return;
+        }
+        if (recorded != wanted) {
+            throw new RunSetupException(dir.root() + " was run with 'output: profiles: " + recorded + "' and this grid "
+                    + "file says 'profiles: " + wanted + "': a resume cannot " + (wanted
+                    ? "write the profiles of the models already in the catalogue" : "take back the profiles already "
+                    + "written") + ", so nothing was changed; resume with 'profiles: " + recorded + "' as the run "
+                    + "was started, or run the grid with 'profiles: " + wanted + "' into a new --out");
+        }
     }
 
     /**

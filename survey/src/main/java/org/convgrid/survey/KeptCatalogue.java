@@ -11,7 +11,9 @@ import java.util.Iterator;
 import java.util.List;
 import java.util.Set;
 import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.engine.units.Constants;
 import org.convgrid.output.AtomicFiles;
+import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.ZoneTable;
@@ -61,11 +63,12 @@ public record KeptCatalogue(Set<String> ids, boolean hasHeader, long droppedByte
                     throw new RunSetupException(catalogue + " has more rows (" + rows.size()
                             + ") than this grid gives the shard");
                 }
-                String wanted = expected.next().modelId();
+                ModelRequest request = expected.next();
+                String wanted = request.modelId();
                 if (!id.equals(wanted)) {
-                    throw new RunSetupException(catalogue + " row " + (i + 1) + " is model " + id
-                            + " where this grid and shard expect " + wanted + "; it belongs to another run");
+                    throw notThePlansRows(catalogue, rows, i, wanted, expected);
                 }
+                refuseOtherStar(catalogue, rows.get(i), i, request);
                 ids.add(id);
             }
         }
@@ -78,6 +81,54 @@ public record KeptCatalogue(Set<String> ids, boolean hasHeader, long droppedByte
         }
         keepZonesOf(catalogue.resolveSibling(RunLayout.ZONES), ids);
         return new KeptCatalogue(Set.copyOf(ids), complete > 0, bytes.length - complete);
+    }
+
+    /**
+     * The refusal for row {@code i} (0-based) that is not the model the plan expects there. When the row is a later
+     * model of the plan, rows are missing in between: the catalogue is this run's with a gap (rows deleted by hand, or
+     * damage), which a review found reported as "belongs to another run". Otherwise it is another grid's or shard's.
+     *
+     * @param rest the plan after {@code wanted}
+     */
+    private static RunSetupException notThePlansRows(Path catalogue, List<CatalogueRow> rows, int i, String wanted,
+                                                     Iterator<ModelRequest> rest) {
+        String id = rows.get(i).modelId();
+        long missing = 1;
+        String lastMissing = wanted;
+        while (rest.hasNext()) {
+            String next = rest.next().modelId();
+            if (next.equals(id)) {
+                String before = i == 0 ? "the header" : rows.get(i - 1).modelId() + " (row " + i + ")";
+                return new RunSetupException(catalogue + " misses " + (missing == 1 ? "model " + wanted
+                        : missing + " models, " + wanted + " to " + lastMissing) + ", between " + before + " and "
+                        + id + " (row " + (i + 1) + "): rows were deleted by hand or the file was damaged, so nothing "
+                        + "was changed; restore the file from a copy, or delete its rows from " + id + " on and "
+                        + "resume again to compute them anew");
+            }
+            lastMissing = next;
+            missing++;
+        }
+        return new RunSetupException(catalogue + " row " + (i + 1) + " is model " + id + " where this grid and shard "
+                + "expect " + wanted + ", and the grid's later models do not follow it: the catalogue was written by "
+                + "another grid or shard, or edited");
+    }
+
+    /**
+     * Model ids are grid indices, so a grid of the same shape gives the same ids to other stars; a resume that found
+     * no manifest to compare the grids by relies on the rows' own mass and Z (written to at least 6 digits).
+     */
+    private static void refuseOtherStar(Path catalogue, CatalogueRow row, int i, ModelRequest request) {
+        double massMsun = request.mass() / Constants.M_SUN;
+        if (!close(row.massMsun(), massMsun) || !close(row.zInit(), request.initialMetals())) {
+            throw new RunSetupException(catalogue + " row " + (i + 1) + " is model " + row.modelId() + " of "
+                    + CsvNumbers.format(row.massMsun()) + " Msun and Z = " + CsvNumbers.format(row.zInit()) + ", where this grid's model of that id has "
+                    + CsvNumbers.format(massMsun) + " Msun and Z = " + CsvNumbers.format(request.initialMetals()) + ": the catalogue was written by "
+                    + "another grid");
+        }
+    }
+
+    private static boolean close(double written, double asked) {
+        return Math.abs(written - asked) <= 1e-5 * Math.abs(asked) + 1e-12;
     }
 
     /**

@@ -54,6 +54,10 @@ public final class CatalogueReader {
      */
     public static List<CatalogueRow> read(Path file) throws IOException {
         String text = Files.readString(file, StandardCharsets.UTF_8);
+        if (!text.isEmpty() && headerCutShort(text)) {
+            // a catalogue cut inside its header (a review's `truncate -s 500`) was reported as a row cut short
+            throw new OutputFormatException(file.getFileName() + ": " + HEADER_CUT_SHORT);
+        }
         if (!text.isEmpty() && !text.endsWith("\n")) {
             // every row the writer writes ends with a line break: without one the last row was cut short, even when
             // what is left still parses (a number cut to fewer digits, an empty last cell). The message named a
@@ -68,6 +72,18 @@ public final class CatalogueReader {
         } catch (java.io.UncheckedIOException e) {
             throw new OutputFormatException(file.getFileName() + ": " + e.getMessage(), e);
         }
+    }
+
+    /** What a catalogue cut inside its header is, and what that means for its rows. */
+    public static final String HEADER_CUT_SHORT = "its header is cut short before the column names (the file was "
+            + "damaged, e.g. by a full disk or an interrupted copy), so it holds no rows";
+
+    /**
+     * Whether the text ends inside the header: no line but {@code #} comment lines, and not even the column names
+     * (every catalogue the writer starts has them before its first row).
+     */
+    public static boolean headerCutShort(String text) {
+        return text.lines().allMatch(line -> line.startsWith("#"));
     }
 
     /**
@@ -86,6 +102,10 @@ public final class CatalogueReader {
     public static List<CatalogueRow> read(Reader in) throws IOException {
         try (CSVParser parser = CSVParser.builder().setReader(in).setFormat(FORMAT).get()) {
             List<String> header = parser.getHeaderNames();
+            if (header.isEmpty()) {
+                // only comment lines: the file ends inside its header (plot said "misses the column 'model_id'")
+                throw new OutputFormatException("catalogue: " + HEADER_CUT_SHORT);
+            }
             for (String column : CatalogueColumns.FIXED) {
                 if (!header.contains(column)) {
                     throw new OutputFormatException("catalogue misses the column '" + column + "'");

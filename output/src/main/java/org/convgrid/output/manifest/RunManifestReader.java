@@ -57,10 +57,15 @@ public final class RunManifestReader {
      */
     public static RunManifest read(String yaml) {
         try {
-            Map<?, ?> root = map(new Load(LoadSettings.builder().setCodePointLimit(MAX_CODE_POINTS).build()).loadFromString(yaml), "manifest");
+            Object loaded = new Load(LoadSettings.builder().setCodePointLimit(MAX_CODE_POINTS).build())
+                    .loadFromString(yaml);
+            if (loaded == null) {
+                throw new OutputFormatException("the manifest is empty (the file was cut short or emptied)");
+            }
+            Map<?, ?> root = map(loaded, "manifest");
             Map<?, ?> grid = map(root.get("grid"), "grid");
             List<PhysicsOptions> physics = new ArrayList<>();
-            for (Object item : (List<?>) root.get("physics")) {
+            for (Object item : list(root, "physics")) {
                 Map<?, ?> p = map(item, "physics");
                 // manifests written before atmosphere, overshoot_profile and opacity_table were recorded come from
                 // versions whose defaults were the Eddington relation, step overshoot and the built-in opacity
@@ -74,13 +79,13 @@ public final class RunManifestReader {
                 OpacityChoice table = p.containsKey("opacity_table")
                         ? tableAt((String) p.get("opacity_table")) : OpacityChoice.BUILT_IN;
                 physics.add(new PhysicsOptions(number(p, "mixing_length"), number(p, "overshoot"),
-                        StabilityCriterion.valueOf(((String) p.get("criterion")).toUpperCase(Locale.ROOT)),
+                        StabilityCriterion.valueOf(((String) required(p, "criterion", "physics")).toUpperCase(Locale.ROOT)),
                         number(p, "opacity_scale"), table, atmosphere, scheme));
             }
             Map<?, ?> models = map(root.get("models"), "models");
             Map<ModelStatus, Long> counts = new EnumMap<>(ModelStatus.class);
             for (ModelStatus status : ModelStatus.values()) {
-                counts.put(status, ((Number) models.get(status.label())).longValue());
+                counts.put(status, ((Number) required(models, status.label(), "models")).longValue());
             }
             Object finished = root.get("finished");
             // manifests written before the commit was recorded do not know it
@@ -91,18 +96,28 @@ public final class RunManifestReader {
             if (origin == null) {
                 throw new IllegalArgumentException("age_origin must be birth or zams, got " + root.get("age_origin"));
             }
-            return new RunManifest((String) root.get("tool_version"), (String) commit, (String) grid.get("file"),
-                    (String) grid.get("text"), (String) grid.get("sha256"), (String) grid.get("models_sha256"),
-                    physics, Instant.parse((String) root.get("started")),
+            return new RunManifest((String) required(root, "tool_version", null), (String) commit,
+                    (String) required(grid, "file", "grid"), (String) required(grid, "text", "grid"),
+                    (String) required(grid, "sha256", "grid"), (String) required(grid, "models_sha256", "grid"),
+                    physics, Instant.parse((String) required(root, "started", null)),
                     finished == null ? null : Instant.parse((String) finished),
-                    ((Number) root.get("threads")).intValue(), (String) root.get("shard"), counts,
+                    ((Number) required(root, "threads", null)).intValue(), (String) root.get("shard"), counts,
                     // absent when no model was timed (earlier versions wrote .nan)
                     root.containsKey("median_seconds_per_model") ? number(root, "median_seconds_per_model")
                             : Double.NaN, origin,
                     models.containsKey("expected") ? ((Number) models.get("expected")).longValue()
                             : RunManifest.EXPECTED_UNKNOWN, ironAbundance(root));
-        } catch (YamlEngineException | ClassCastException | NullPointerException | DateTimeParseException
-                 | IllegalArgumentException e) {
+        } catch (YamlEngineException e) {
+            // a file cut short mostly ends inside the quoted grid text or a mapping: the YAML error then names its line
+            java.util.regex.Matcher at = java.util.regex.Pattern.compile("line \\d+, column \\d+")
+                    .matcher(String.valueOf(e.getMessage()));
+            String where = null;
+            while (at.find()) {
+                where = at.group();
+            }
+            throw new OutputFormatException("not a readable convgrid manifest: its YAML breaks off"
+                    + (where == null ? "" : " at " + where) + " (the file is cut short or damaged)", e);
+        } catch (ClassCastException | NullPointerException | DateTimeParseException | IllegalArgumentException e) {
             throw new OutputFormatException("not a convgrid manifest: " + e.getMessage(), e);
         }
     }
@@ -143,11 +158,41 @@ public final class RunManifestReader {
         if (value instanceof Map<?, ?> m) {
             return m;
         }
+        if (value == null) {
+            throw missing(what, null);
+        }
         throw new OutputFormatException("manifest: '" + what + "' is not a mapping");
     }
 
+    private static List<?> list(Map<?, ?> map, String key) {
+        if (required(map, key, null) instanceof List<?> items) {
+            return items;
+        }
+        throw new OutputFormatException("manifest: '" + key + "' is not a list");
+    }
+
     private static double number(Map<?, ?> map, String key) {
-        return ((Number) map.get(key)).doubleValue();
+        return ((Number) required(map, key, null)).doubleValue();
+    }
+
+    /**
+     * The value of {@code key}, or a message naming it when it is absent or empty: a manifest cut short (a full disk,
+     * a copy interrupted) lacks its last keys, and a review saw the Java null-pointer text instead.
+     *
+     * @param under the mapping {@code key} belongs to, for the message; null at the top
+     */
+    private static Object required(Map<?, ?> map, String key, String under) {
+        Object value = map.get(key);
+        if (value == null) {
+            throw missing(key, under);
+        }
+        return value;
+    }
+
+    private static OutputFormatException missing(String key, String under) {
+        return new OutputFormatException("not a complete convgrid manifest: its key '"
+                + (under == null ? "" : under + ".") + key + "' is missing or empty (the file is cut short or was "
+                + "edited)");
     }
 
     /** The user table a run used, read when a model first needs it (listing or plotting a run does not). */

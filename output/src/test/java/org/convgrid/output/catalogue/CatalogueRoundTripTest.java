@@ -163,6 +163,20 @@ class CatalogueRoundTripTest {
                 .containsExactly("p0-z01-m009-a00");
     }
 
+    /** A file cut inside its header says so, not "last row cut short" nor "misses the column 'model_id'". */
+    @Test
+    void aFileCutInsideItsHeaderSaysSo(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir) throws IOException {
+        String text = write(List.of(OutcomeRows.toRow(sunLike())));
+        java.nio.file.Path file = dir.resolve("catalogue.ecsv");
+        java.nio.file.Files.writeString(file, text.substring(0, 500));
+        assertThat(CatalogueReader.headerCutShort(text.substring(0, 500))).isTrue();
+        assertThat(CatalogueReader.headerCutShort(text)).isFalse();
+        assertThatThrownBy(() -> CatalogueReader.read(file)).isInstanceOf(OutputFormatException.class)
+                .hasMessageContaining("its header is cut short before the column names");
+        assertThatThrownBy(() -> CatalogueReader.readCompleteLines(text.substring(0, 500)))
+                .hasMessageContaining("its header is cut short before the column names");
+    }
+
     @Test
     void aFileWhoseLastRowIsCutShortSaysSoAndHowToRepairIt(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
             throws IOException {

@@ -125,4 +125,30 @@ class RunManifestTest {
         String yaml = RunManifestWriter.toYaml(m);
         assertThat(RunManifestReader.read(yaml).gridText()).isEqualTo(big);
     }
+
+    /**
+     * A manifest cut short at any line end reads as cut short, naming the key it lacks or where its YAML breaks off,
+     * never with Java's null-pointer or cast text (a review saw "Cannot invoke java.util.List.iterator()").
+     */
+    @Test
+    void aManifestCutShortAtAnyLineSaysSoInPlainWords() {
+        String yaml = RunManifestWriter.toYaml(manifest().finishedAt(Instant.parse("2026-03-01T10:05:30Z"),
+                Map.of(ModelStatus.OK, 3L), 1.5));
+        int lines = 0;
+        for (int end = yaml.indexOf('\n'); end >= 0 && end < yaml.length() - 1; end = yaml.indexOf('\n', end + 1)) {
+            String cut = yaml.substring(0, end + 1);
+            if (yaml.startsWith("median_seconds_per_model", end + 1)) {
+                // the last key is optional (absent while no model was timed): without it the manifest is whole
+                continue;
+            }
+            assertThatThrownBy(() -> RunManifestReader.read(cut)).as("cut after %s", cut.lines().reduce((a, b) -> b))
+                    .isInstanceOf(OutputFormatException.class)
+                    .message().doesNotContain("Cannot invoke", "null", "java.", "class ")
+                    .containsAnyOf("is missing or empty", "breaks off", "is empty");
+            lines++;
+        }
+        assertThat(lines).isGreaterThan(20);
+        assertThatThrownBy(() -> RunManifestReader.read(yaml.substring(0, yaml.indexOf("threads:"))))
+                .hasMessageContaining("its key 'models' is missing or empty (the file is cut short or was edited)");
+    }
 }
