@@ -160,8 +160,12 @@ final class RunCommand implements Callable<Integer> {
             long start = System.nanoTime();
             boolean nothingToResume = resume && !dir.holdsRun();
             GridRun.Plan plan;
+            int staleTemporaries;
             try {
                 plan = runner.prepare(new GridRun.Settings(file, dir, n, chosen, resume, force));
+                // before the interrupt hook may go on: its manifest rewrite goes through a temporary file that this
+                // cleaning would otherwise take for a stale one (a code review)
+                staleTemporaries = StaleTemporaryFiles.remove(dir.layout(), StaleTemporaryFiles.Scope.RUN);
                 prepared.complete(plan);
             } catch (Exception | Error e) {
                 prepared.completeExceptionally(e);
@@ -174,7 +178,6 @@ final class RunCommand implements Callable<Integer> {
                 err.println("convgrid: note: --resume found no run in " + dir.root() + "; starting a new one there");
                 err.flush();
             }
-            int staleTemporaries = StaleTemporaryFiles.remove(dir.layout(), StaleTemporaryFiles.Scope.RUN);
             if (staleTemporaries > 0) {
                 // said even with --quiet: files were deleted (only convgrid's own, half-written ones)
                 err.println("convgrid: removed " + Counts.of(staleTemporaries, "temporary file") + " that interrupted "

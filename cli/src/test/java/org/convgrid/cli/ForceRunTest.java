@@ -30,8 +30,8 @@ class ForceRunTest {
         }
         // what a bigger earlier grid with tracks, profiles and charts, interrupted mid-write, would have left
         List<Path> stale = List.of(d.resolve("report.html"), d.resolve("life_events.csv"),
-                d.resolve(".catalogue.ecsv.3k9z1q.tmp"), d.resolve("tracks/p0-z07-m099.csv"),
-                d.resolve("tracks/p0-z07-m099.zones.csv"), d.resolve("tracks/.p0-z07-m098.csv.a1b2.tmp"),
+                d.resolve(".catalogue.ecsv.3k9z1q.convgrid.tmp"), d.resolve("tracks/p0-z07-m099.csv"),
+                d.resolve("tracks/p0-z07-m099.zones.csv"), d.resolve("tracks/.p0-z07-m098.csv.a1b2.convgrid.tmp"),
                 d.resolve("tracks/p0-z07-r012.csv"), d.resolve("tracks/p0-z07-r012.zones.csv"),
                 d.resolve("profiles/p0-z07-r012-a03.csv"),
                 d.resolve("profiles/p0-z07-m099-a00.csv"), d.resolve("maps/zones-age_m5_z0.03_a1.8_ov0_schwarzschild.png"),

@@ -236,6 +236,27 @@ class ResumeTest {
         assertThat(other.err()).contains("has a catalogue but no manifest.yaml, and the catalogue is not this grid's")
                 .contains("row 1 is model p0-z00-m000-a00 of 0.1 Msun").doesNotContain("--force");
         assertThat(work.resolve("lost/manifest.yaml")).doesNotExist();
+        // the same shape, so the same ids and stars, but other ages or physics (a code review's resume took them)
+        for (String[] change : new String[][] {{"gyr: [0, 2.0]", "gyr: [0, 3.0]", "age_gyr 2.0 where this grid has 3.0"},
+            {"mixing_length: 1.8", "mixing_length: 2.0", "mixing_length 1.8 where this grid has 2.0"}}) {
+            Path edited = CliHarness.writeGrid(work, "edited.yaml", CliHarness.GRID.replace(change[0], change[1]));
+            CliHarness.Execution refused = run("run", "--no-refine", edited.toString(), "--out", "lost", "--resume");
+            assertThat(refused.code()).as(refused.err()).isEqualTo(2);
+            assertThat(refused.err()).contains(change[2]).contains("the catalogue was written by another grid");
+            assertThat(work.resolve("lost/manifest.yaml")).doesNotExist();
+        }
+        Path profiles = CliHarness.writeGrid(work, "profiles.yaml", CliHarness.GRID.replace("output:",
+                "output:\n  profiles: true"));
+        CliHarness.Execution noProfiles = run("run", "--no-refine", profiles.toString(), "--out", "lost", "--resume");
+        assertThat(noProfiles.code()).as(noProfiles.err()).isEqualTo(2);
+        assertThat(noProfiles.err()).contains("no profile files, though this grid file asks for them");
+        // a shard's directory, named so, is not taken for the whole grid's
+        java.nio.file.Files.move(work.resolve("lost"), work.resolve("lost-shard-1-of-2"));
+        CliHarness.Execution unnamed = run("run", "--no-refine", grid.toString(), "--out", "lost-shard-1-of-2",
+                "--resume");
+        assertThat(unnamed.code()).as(unnamed.err()).isEqualTo(2);
+        assertThat(unnamed.err()).contains("is named for a shard: resume it with the --shard it was run with");
+        java.nio.file.Files.move(work.resolve("lost-shard-1-of-2"), work.resolve("lost"));
 
         CliHarness.Execution resumed = run("run", "--no-refine", grid.toString(), "--out", "lost", "--resume",
                 "--quiet");

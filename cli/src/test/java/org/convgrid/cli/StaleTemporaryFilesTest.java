@@ -26,16 +26,21 @@ class StaleTemporaryFilesTest {
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
         assertThat(run("run", "--no-refine", grid.toString(), "--out", "r", "--quiet").code()).isZero();
         Path dir = work.resolve("r");
-        Path chart = dir.resolve("maps/.zones-mass_z0.02_zams_a1.8_ov0_schwarzschild.png.k3x9.tmp");
-        Path report = dir.resolve(".report.html.1a2b.tmp");
+        Path chart = dir.resolve("maps/.zones-mass_z0.02_zams_a1.8_ov0_schwarzschild.png.k3x9.convgrid.tmp");
+        Path report = dir.resolve(".report.html.1a2b.convgrid.tmp");
         Path userChart = dir.resolve("maps/.my-picture.png.2.tmp");
         Path userNotes = dir.resolve(".notes.txt.7.tmp");
         Files.createDirectories(dir.resolve("tracks"));
         Files.createDirectories(dir.resolve("maps"));
-        Path track = dir.resolve("tracks/.p0-z00-m005.csv.0zz.tmp");
-        Path zones = dir.resolve(".zones.csv.abc.tmp");
+        Path track = dir.resolve("tracks/.p0-z00-m005.csv.0zz.convgrid.tmp");
+        Path zones = dir.resolve(".zones.csv.abc.convgrid.tmp");
         Path userTrack = dir.resolve("tracks/.my-track.csv.5.tmp");
-        for (Path p : new Path[] {chart, report, userChart, userNotes, track, zones, userTrack}) {
+        // a user's copies named like ours but for the marker (a code review: ".catalogue.ecsv.backup.tmp" was taken
+        // for a temporary of the catalogue)
+        Path userBackup = dir.resolve(".catalogue.ecsv.backup.tmp");
+        Path userOldChart = dir.resolve("maps/.hr_a1.8_ov0_schwarzschild.png.old.tmp");
+        for (Path p : new Path[] {chart, report, userChart, userNotes, track, zones, userTrack, userBackup,
+            userOldChart}) {
             Files.writeString(p, "half written");
         }
 
@@ -57,5 +62,7 @@ class StaleTemporaryFilesTest {
         assertThat(userChart).exists();
         assertThat(userNotes).exists();
         assertThat(userTrack).exists();
+        assertThat(userBackup).exists();
+        assertThat(userOldChart).exists();
     }
 }

@@ -31,11 +31,15 @@ public final class AtomicFiles {
         void write(OutputStream out) throws IOException;
     }
 
-    /** Ending of every temporary file: {@code .<target name>.<random>.tmp} beside its target. */
-    private static final String TEMPORARY_SUFFIX = ".tmp";
+    /**
+     * Ending of every temporary file: {@code .<target name>.<random>.convgrid.tmp} beside its target. The word marks it
+     * as ours: a cleaner that matched any {@code .<name>.<word>.tmp} would take a user's {@code .catalogue.ecsv.backup.tmp}
+     * for one (a code review).
+     */
+    private static final String TEMPORARY_SUFFIX = ".convgrid.tmp";
     /** A temporary file's name: a dot, the target's name, a dot, a random unsigned long in base 36, the suffix. */
     private static final java.util.regex.Pattern TEMPORARY_NAME =
-            java.util.regex.Pattern.compile("\\..+\\.[0-9a-z]{1,13}\\.tmp");
+            java.util.regex.Pattern.compile("\\..+\\.[0-9a-z]{1,13}\\.convgrid\\.tmp");
 
     private AtomicFiles() {
     }

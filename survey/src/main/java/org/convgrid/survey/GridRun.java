@@ -240,6 +240,8 @@ public final class GridRun {
     private Plan resumeWithoutManifest(Settings s) throws IOException {
         RunDirectory dir = s.directory();
         Shard shard = s.requestedShard() == null ? Shard.ALL : s.requestedShard();
+        refuseUnnamedShard(dir, s.requestedShard());
+        refuseProfilesUnlike(dir, s.grid().spec().profiles());
         ShardPlan plan = new ShardPlan(s.grid().spec(), shard, MASSES_PER_CHUNK);
         KeptCatalogue kept;
         try {
@@ -263,6 +265,42 @@ public final class GridRun {
         }
         return new Plan(s, shard, kept, plan.count(), started, Double.NaN, 0,
                 recomputed == null ? null : recomputed.describe(dir.catalogue()), true);
+    }
+
+    /**
+     * Without a manifest the shard is not on record, and shard 1's first rows are the whole grid's first rows too: a
+     * directory named for a shard ({@code -shard-K-of-N}, the name {@link RunDirectory#forShard} gives) must be resumed
+     * with {@code --shard} (a code review turned a shard's directory into the whole grid's this way).
+     */
+    private static void refuseUnnamedShard(RunDirectory dir, Shard requested) {
+        java.nio.file.Path name = dir.root().getFileName();
+        if (requested == null && name != null && name.toString().matches(".*-shard-[0-9]+-of-[0-9]+")) {
+            throw new RunSetupException(dir.root() + " has a catalogue but no " + RunLayout.MANIFEST + " and is named "
+                    + "for a shard: resume it with the --shard it was run with, which rebuilds the manifest");
+        }
+    }
+
+    /**
+     * Without a manifest the profile setting is not on record: profile files beside a grid that writes none, or a grid
+     * that writes them and none beside kept rows, mean another setting wrote the rows (a code review's resume wrote a
+     * manifest claiming profiles that did not exist).
+     */
+    private static void refuseProfilesUnlike(RunDirectory dir, boolean wanted) throws IOException {
+        java.nio.file.Path profiles = dir.layout().profiles();
+        boolean present = false;
+        if (Files.isDirectory(profiles)) {
+            try (var entries = Files.list(profiles)) {
+                present = entries.findAny().isPresent();
+            }
+        }
+        boolean rowsKept = Files.exists(dir.catalogue()) && Files.size(dir.catalogue()) > 0;
+        if (rowsKept && present != wanted) {
+            throw new RunSetupException(dir.root() + " has a catalogue but no " + RunLayout.MANIFEST + ", and "
+                    + (present ? "profile files that this grid file ('profiles: false') would not write"
+                    : "no profile files, though this grid file asks for them ('profiles: true')")
+                    + ": it was run with the other setting; resume with the grid file that wrote it, or choose a "
+                    + "new --out");
+        }
     }
 
     /**

@@ -125,6 +125,46 @@ public record KeptCatalogue(Set<String> ids, boolean hasHeader, long droppedByte
                     + CsvNumbers.format(massMsun) + " Msun and Z = " + CsvNumbers.format(request.initialMetals()) + ": the catalogue was written by "
                     + "another grid");
         }
+        // the ids are grid positions, so a grid of the same shape with other ages or physics gives the same ids and
+        // stars (a code review resumed a run whose manifest was gone with such a grid): every request value a row
+        // carries must match; a cell an earlier layout leaves empty (NaN, null) is not held against it
+        String other = otherValue("y_init", row.yInit(), request.initialHelium());
+        other = other != null ? other : otherValue("mixing_length", row.mixingLength(),
+                request.physics().mixingLength());
+        other = other != null ? other : otherValue("overshoot_hp", row.overshootHp(), request.physics().overshoot());
+        other = other != null ? other : otherValue("opacity_scale", row.opacityScale(),
+                request.physics().opacityScale());
+        if (other == null && row.criterion() != null && row.criterion() != request.physics().criterion()) {
+            other = "criterion " + row.criterion() + " where this grid has " + request.physics().criterion();
+        }
+        if (other == null && row.overshootProfile() != null
+                && row.overshootProfile() != request.physics().overshootScheme()) {
+            other = "overshoot_profile " + row.overshootProfile() + " where this grid has "
+                    + request.physics().overshootScheme();
+        }
+        if (other == null) {
+            double ageGyr = requestedAgeGyr(request);
+            other = Double.isNaN(ageGyr) ? null : otherValue("age_gyr", row.ageGyr(), ageGyr);
+        }
+        if (other != null) {
+            throw new RunSetupException(catalogue + " row " + (i + 1) + " is model " + row.modelId() + " with " + other
+                    + ": the catalogue was written by another grid");
+        }
+    }
+
+    /** "column x where this grid has y" when the written value differs from the asked one; null when they agree. */
+    private static String otherValue(String column, double written, double asked) {
+        return Double.isNaN(written) || close(written, asked) ? null : column + " " + CsvNumbers.format(written)
+                + " where this grid has " + CsvNumbers.format(asked);
+    }
+
+    /** The age a row of this request is written with, Gyr; NaN for an age the solver resolves (a main-sequence fraction). */
+    private static double requestedAgeGyr(ModelRequest request) {
+        if (request.age() instanceof org.convgrid.engine.request.Age.SinceZeroAge since) {
+            return since.seconds() / org.convgrid.engine.units.Constants.GYR;
+        }
+        return request.age() instanceof org.convgrid.engine.request.Age.SinceBirth since
+                ? since.seconds() / org.convgrid.engine.units.Constants.GYR : Double.NaN;
     }
 
     private static boolean close(double written, double asked) {

@@ -66,7 +66,8 @@ public final class LifeEventLog {
 
     /**
      * Makes the table readable again after a write was cut short (a full disk, a crash): drops a last row without
-     * its line end, writes the header of a table that has none (its rows, of today's columns, are kept), and
+     * its line end, writes the header of a table that has none (its rows, of today's columns, are kept; an empty table
+     * gets the header alone), and
      * rewrites a table of an earlier version's columns with today's header. Does nothing to a table that needs none
      * of that, or to a missing one.
      *
@@ -81,7 +82,13 @@ public final class LifeEventLog {
         int complete = KeptCatalogue.lastLineEnd(bytes);
         String text = new String(bytes, 0, complete, StandardCharsets.UTF_8);
         String header = LifeEventWriter.header();
-        if (text.isEmpty() || text.equals(header)) {
+        if (text.isEmpty()) {
+            // empty, or a header cut short with no row after it (a full disk): the header alone, which readers take
+            // as a table of no rows (a code review's resume of an emptied table stopped on it as "damaged")
+            AtomicFiles.writeString(file, header);
+            return;
+        }
+        if (text.equals(header)) {
             if (complete < bytes.length) {
                 AtomicFiles.writeString(file, text);
             }

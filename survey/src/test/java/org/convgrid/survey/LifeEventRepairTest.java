@@ -45,6 +45,22 @@ class LifeEventRepairTest {
         assertThat(LifeEventReader.read(file)).extracting(LifeEventRow::trackId).containsExactly("p0-z00-m000");
     }
 
+    /**
+     * Repaired on its own (as a resume does before it reads the table), an empty table or one whose header was cut
+     * short gets the header and reads as a table of no rows (a code review: the resume stopped on it as "damaged").
+     */
+    @Test
+    void anEmptyOrCutHeaderTableIsRepairedToAReadableEmptyTable() throws Exception {
+        Path empty = Files.createFile(dir.resolve("empty.csv"));
+        Path cut = dir.resolve("cut.csv");
+        Files.writeString(cut, LifeEventWriter.header().substring(0, 40));
+        for (Path file : new Path[] {empty, cut}) {
+            LifeEventLog.repair(file, IronAbundance.DEFAULT);
+            assertThat(Files.readString(file)).isEqualTo(LifeEventWriter.header());
+            assertThat(LifeEventReader.read(file)).isEmpty();
+        }
+    }
+
     @Test
     void aHeaderlessTableIsRebuiltAndKeepsItsRowsOnAppendAndOnTidy() throws Exception {
         Path file = dir.resolve("life_events.csv");

@@ -40,7 +40,7 @@ public final class PeriodSpacingAgainstAge {
                                           Function<String, TrackTimeline> timeline) {
         List<TrackedModel> withSpacing = tracked.stream()
                 .filter(t -> t.origin().physics().equals(physics) && t.origin().zInit() == zInit)
-                .filter(t -> t.track().steps().stream().filter(s -> Double.isFinite(s.periodSpacingL1S())).count() >= 2)
+                .filter(t -> t.track().steps().stream().filter(PeriodSpacingAgainstAge::drawable).count() >= 2)
                 .sorted(Comparator.comparingDouble(t -> t.origin().massMsun()))
                 .toList();
         boolean fromBirth = withSpacing.stream().anyMatch(t -> timeline.apply(t.origin().trackId()).startsAtBirth());
@@ -51,7 +51,7 @@ public final class PeriodSpacingAgainstAge {
         for (TrackedModel t : chosen) {
             List<SpacingPoint> points = new ArrayList<>();
             for (TrackStep s : t.track().steps()) {
-                if (!Double.isFinite(s.periodSpacingL1S())) {
+                if (!drawable(s)) {
                     continue;
                 }
                 if (s.periodSpacingL1S() > cap) {
@@ -73,14 +73,19 @@ public final class PeriodSpacingAgainstAge {
      */
     private static double reference(List<TrackedModel> tracks) {
         double mainSequence = tracks.stream().flatMap(t -> t.track().steps().stream())
-                .filter(s -> !PRE_MAIN_SEQUENCE.equals(s.phase()) && Double.isFinite(s.periodSpacingL1S()))
+                .filter(s -> !PRE_MAIN_SEQUENCE.equals(s.phase()) && drawable(s))
                 .mapToDouble(TrackStep::periodSpacingL1S).max().orElse(Double.NaN);
         if (!Double.isNaN(mainSequence)) {
             return mainSequence;
         }
         return tracks.stream().mapToDouble(t -> t.track().steps().stream()
-                        .filter(s -> Double.isFinite(s.periodSpacingL1S())).reduce((a, b) -> b)
+                        .filter(PeriodSpacingAgainstAge::drawable).reduce((a, b) -> b)
                         .map(TrackStep::periodSpacingL1S).orElse(Double.NaN))
                 .filter(Double::isFinite).max().orElse(Double.NaN);
+    }
+
+    /** Whether a step has a spacing the logarithmic axis can show: finite and above zero. */
+    private static boolean drawable(TrackStep s) {
+        return Double.isFinite(s.periodSpacingL1S()) && s.periodSpacingL1S() > 0;
     }
 }
