@@ -1,13 +1,8 @@
 package org.convgrid.engine.birth;
 
-import java.io.BufferedReader;
-import java.io.IOException;
-import java.io.InputStreamReader;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Objects;
+import org.convgrid.engine.reference.PublishedTable;
 
 /**
  * One row of a published pre-main-sequence track as shipped in a test resource (its header names the paper, the table
@@ -35,28 +30,12 @@ record PublishedTrackRow(double massMsun, double logAgeYr, double teffK, double 
 
     /** Every row of the resource at {@code path} on the test class path, in file order. */
     static List<PublishedTrackRow> read(String path) {
-        var stream = Objects.requireNonNull(PublishedTrackRow.class.getResourceAsStream(path), path);
         List<PublishedTrackRow> rows = new ArrayList<>();
-        try (var in = new BufferedReader(new InputStreamReader(stream, StandardCharsets.UTF_8))) {
-            String line;
-            boolean header = true;
-            while ((line = in.readLine()) != null) {
-                if (line.startsWith("#") || line.isBlank()) {
-                    continue;
-                }
-                if (header) {
-                    // the column names
-                    header = false;
-                    continue;
-                }
-                String[] f = line.split(",");
-                rows.add(new PublishedTrackRow(Double.parseDouble(f[0]), Double.parseDouble(f[1]),
-                        Double.parseDouble(f[2]), Double.parseDouble(f[3]), Double.parseDouble(f[5]),
-                        Double.parseDouble(f[6]), Double.parseDouble(f[7]), Double.parseDouble(f[9]),
-                        Double.parseDouble(f[10]), f[11].trim()));
-            }
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
+        for (String[] f : PublishedTable.rows(PublishedTrackRow.class, path)) {
+            rows.add(new PublishedTrackRow(Double.parseDouble(f[0]), Double.parseDouble(f[1]),
+                    Double.parseDouble(f[2]), Double.parseDouble(f[3]), Double.parseDouble(f[5]),
+                    Double.parseDouble(f[6]), Double.parseDouble(f[7]), Double.parseDouble(f[9]),
+                    Double.parseDouble(f[10]), f[11].trim()));
         }
         return rows;
     }
