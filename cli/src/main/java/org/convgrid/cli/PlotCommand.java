@@ -61,7 +61,14 @@ final class PlotCommand implements Callable<Integer> {
             // charts not written are said once, in the failure below, not as one warning each
             maps.failures().stream().filter(f -> !f.notWritten())
                     .forEach(f -> main.err().println("convgrid: warning: " + f.describe()));
-            Path report = ReportPage.write(run, dir, maps.failures());
+            Path report;
+            try {
+                report = ReportPage.write(run, dir, maps.failures());
+            } catch (java.io.IOException e) {
+                // as run says it (MapsAndReport): the reason, that the tables are whole, and what redraws (a code review)
+                throw new java.io.IOException(org.convgrid.survey.IoMessages.reason(e)
+                        + org.convgrid.plotting.UnwrittenCharts.afterwards(dir), e);
+            }
             java.io.IOException unwritten = org.convgrid.plotting.UnwrittenCharts.of(maps, dir);
             if (unwritten != null) {
                 throw unwritten;

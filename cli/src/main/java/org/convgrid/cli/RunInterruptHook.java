@@ -9,7 +9,8 @@ import org.convgrid.grids.words.Counts;
 
 /**
  * What {@code run} does on SIGINT (Ctrl-C) or SIGTERM (a batch system's stop): a JVM shutdown hook, installed once
- * the run directory is prepared and removed when the command ends, that has the sweep stopped between two catalogue
+ * the run directory's lock is taken (before the directory is prepared; its callback waits for that) and removed when
+ * the command ends, that has the sweep stopped between two catalogue
  * rows and its manifest rewritten honestly ({@link GridRun#interrupt}), prints one line on stderr saying how far the
  * run got and how to continue it, and ends the process at once with exit code {@link ExitCodes#INTERRUPTED}: the
  * JVM's own exit would wait for nothing useful, and worker threads must not write after the manifest. The hook's
