@@ -21,14 +21,15 @@ import org.convgrid.output.events.LifeEventReader;
 import org.convgrid.output.events.LifeEventRow;
 
 /**
- * On resume: the kept catalogue rows whose star lacks its track files (a grid whose stars evolve) or its life-events
- * row (a grid from birth). An earlier version kept such rows when a full disk stopped the track writes but not the
+ * On resume: the kept catalogue rows whose star lacks its track files (a grid whose stars evolve), its life-events
+ * row (a grid from birth) or a model's profile file (a grid with {@code output: profiles: true}). An earlier version kept such rows when a full disk stopped the track writes but not the
  * catalogue (a robustness review: 52 rows "ok" beside 14 of 26 tracks, and charts quietly missing), and a user may
  * delete a track. The catalogue is cut back to just before the first such row, so the sweep recomputes the blocks
  * from there in grid order (the catalogue stays a prefix of the plan, byte-identical to an uninterrupted run) and
  * writes their tracks again.
  *
- * <p>Only a star with a model of status {@code ok} older than age 0 is known to have a track: one whose evolution
+ * <p>Only a star with a model of status {@code ok} older than age 0 is known to have a track (and only a model of
+ * status {@code ok} a profile): one whose evolution
  * failed has none and needs none, and asking for it would recompute it on every resume.
  */
 final class MissingStarFiles {
@@ -60,11 +61,13 @@ final class MissingStarFiles {
      * @return what was dropped, or null when every kept star has its files (the catalogue is unchanged)
      */
     static Recomputed cutBackToFirstLacking(RunDirectory dir, GridSpec grid, IronAbundance iron) throws IOException {
-        if (!grid.ages().evolves() || !Files.exists(dir.catalogue())) {
+        boolean tracks = grid.ages().evolves();
+        boolean profiles = grid.profiles();
+        if (!tracks && !profiles || !Files.exists(dir.catalogue())) {
             return null;
         }
         RunLayout layout = dir.layout();
-        boolean lifeEvents = grid.ages().origin() == AgeOrigin.BIRTH;
+        boolean lifeEvents = tracks && grid.ages().origin() == AgeOrigin.BIRTH;
         Set<String> withEvents = Set.of();
         if (lifeEvents) {
             LifeEventLog.repair(layout.lifeEvents(), iron);
@@ -76,14 +79,22 @@ final class MissingStarFiles {
         String example = null;
         for (CatalogueRow row : rows) {
             String star = ModelIdFormat.trackIdOf(row.modelId());
-            if (row.status() != ModelStatus.OK || !(row.ageGyr() > 0.0) || lacking.contains(star)) {
+            if (row.status() != ModelStatus.OK || lacking.contains(star)) {
                 continue;
             }
-            String missing = !Files.isRegularFile(layout.trackFile(star)) ? RunLayout.TRACKS + "/"
-                    + layout.trackFile(star).getFileName()
-                    : !Files.isRegularFile(layout.trackZonesFile(star)) ? RunLayout.TRACKS + "/"
-                    + layout.trackZonesFile(star).getFileName()
-                    : lifeEvents && !withEvents.contains(star) ? "its row in " + RunLayout.LIFE_EVENTS : null;
+            String missing = null;
+            if (tracks && row.ageGyr() > 0.0) {
+                missing = !Files.isRegularFile(layout.trackFile(star)) ? RunLayout.TRACKS + "/"
+                        + layout.trackFile(star).getFileName()
+                        : !Files.isRegularFile(layout.trackZonesFile(star)) ? RunLayout.TRACKS + "/"
+                        + layout.trackZonesFile(star).getFileName()
+                        : lifeEvents && !withEvents.contains(star) ? "its row in " + RunLayout.LIFE_EVENTS : null;
+            }
+            if (missing == null && profiles && !Files.isRegularFile(layout.profileFile(row.modelId()))) {
+                // every ok model of such a grid has one; a full disk lets the run go on without it and fail at its
+                // end (the disk-full fix left this for resume to see)
+                missing = RunLayout.PROFILES + "/" + layout.profileFile(row.modelId()).getFileName();
+            }
             if (missing != null) {
                 lacking.add(star);
                 if (example == null) {
