@@ -18,6 +18,7 @@ import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.ZoneTable;
 import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.catalogue.OutcomeRows;
 import org.convgrid.output.transitions.RefinedModelIds;
 
 /**
@@ -143,7 +144,7 @@ public record KeptCatalogue(Set<String> ids, boolean hasHeader, long droppedByte
                     + request.physics().overshootScheme();
         }
         if (other == null) {
-            double ageGyr = requestedAgeGyr(request);
+            double ageGyr = OutcomeRows.ageGyr(request.age());
             other = Double.isNaN(ageGyr) ? null : otherValue("age_gyr", row.ageGyr(), ageGyr);
         }
         if (other != null) {
@@ -156,15 +157,6 @@ public record KeptCatalogue(Set<String> ids, boolean hasHeader, long droppedByte
     private static String otherValue(String column, double written, double asked) {
         return Double.isNaN(written) || close(written, asked) ? null : column + " " + CsvNumbers.format(written)
                 + " where this grid has " + CsvNumbers.format(asked);
-    }
-
-    /** The age a row of this request is written with, Gyr; NaN for an age the solver resolves (a main-sequence fraction). */
-    private static double requestedAgeGyr(ModelRequest request) {
-        if (request.age() instanceof org.convgrid.engine.request.Age.SinceZeroAge since) {
-            return since.seconds() / org.convgrid.engine.units.Constants.GYR;
-        }
-        return request.age() instanceof org.convgrid.engine.request.Age.SinceBirth since
-                ? since.seconds() / org.convgrid.engine.units.Constants.GYR : Double.NaN;
     }
 
     private static boolean close(double written, double asked) {

@@ -103,10 +103,10 @@ public final class OutcomeRows {
     }
 
     /**
-     * Gyr since the age's own origin (birth or the zero-age main sequence; the run has one); NaN (not applicable)
-     * for a fraction no solver resolved.
+     * The {@code age_gyr} a row of a request of this age is written with: Gyr since the age's own origin (birth or the
+     * zero-age main sequence; the run has one); NaN (not applicable) for a fraction no solver resolved.
      */
-    private static double ageGyr(Age age) {
+    public static double ageGyr(Age age) {
         if (age instanceof Age.SinceZeroAge since) {
             return since.seconds() / Constants.GYR;
         }
