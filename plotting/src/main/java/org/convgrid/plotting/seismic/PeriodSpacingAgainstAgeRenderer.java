@@ -29,7 +29,7 @@ public final class PeriodSpacingAgainstAgeRenderer {
     /** What is drawn and how it is computed. */
     static final String DEFINITION_NOTE = "\u0394\u03a0\u2081 = \u03a0\u2080 / \u221a2, \u03a0\u2080 = 2\u03c0\u00b2 / "
             + "\u222b N dr / r over the g-mode cavity (first-order asymptotics, Tassoul 1980): model values.";
-    /** Why a line is jagged: README, "Limits, in detail" (Pi_0). */
+    /** Why a line is jagged: README, "Profiles and the g-mode period scale" (the fixed mesh). */
     static final String SCATTER_NOTE = "Steps scatter by 1-3 % about the trend: the composition step above a "
             + "receding core is not resolved by the fixed mesh (README).";
     private static final Color KEY_GREY = new Color(90, 90, 90);
