@@ -17,6 +17,7 @@ import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.plotting.hr.HrDiagram;
 import org.convgrid.plotting.hr.HrDiagramData;
 import org.convgrid.plotting.hr.HrDiagramRenderer;
+import org.convgrid.plotting.hr.HrPoint;
 import org.convgrid.plotting.kippenhahn.Kippenhahn;
 import org.convgrid.plotting.kippenhahn.KippenhahnRenderer;
 import org.convgrid.plotting.kippenhahn.ZoneCoordinate;
@@ -240,10 +241,11 @@ public final class RunMaps {
         List<MapEntry> entries = new ArrayList<>(mass);
         entries.addAll(radius);
         for (PhysicsKey p : physics) {
+            // built here, not when drawn: the caption names the turn-off models its lines end at
+            HrDiagramData hr = HrDiagram.build(p, rows, run.trackedModels(), run::timeline, groups);
             entries.add(new MapEntry(HR_FILES + "_" + p.fileStem() + ".png", MapEntry.HR,
-                    hrCaption(run, groups) + p.describe() + "." + refinementNote(rows, p),
-                    () -> HrDiagramRenderer.render(usable(HrDiagram.build(p, rows, run.trackedModels(), run::timeline,
-                            groups), rows), names)));
+                    hrCaption(run, groups) + p.describe() + "." + refinementNote(rows, p, hr.turnoffModels()),
+                    () -> HrDiagramRenderer.render(usable(hr, rows), names)));
         }
         if (groups.byFraction()) {
             // transitions.csv finds its masses across the stars of one age in Gyr, and here every star has its own:
@@ -418,12 +420,19 @@ public final class RunMaps {
      * What the HR caption adds when the refinement added models of this physics: how many, and that lines and mass
      * labels go through the grid's masses only.
      */
-    private static String refinementNote(List<CatalogueRow> rows, PhysicsKey physics) {
+    private static String refinementNote(List<CatalogueRow> rows, PhysicsKey physics, List<HrPoint> turnoffModels) {
         long refined = rows.stream().filter(r -> PhysicsKey.of(r).equals(physics))
                 .filter(r -> RefinedModelIds.isRefined(r.modelId())).count();
         long grid = rows.stream().filter(r -> PhysicsKey.of(r).equals(physics)).count() - refined;
-        return refined == 0 ? "" : " Large markers, isochrones and mass labels: the " + grid + " grid models; small pale "
-                + "markers: the " + refined + " models the transition refinement added near the transition masses.";
+        // a turn-off model is drawn large and hollow on its line, whether the refinement added it or (when every new
+        // model came out past the main sequence) the grid had it
+        long refinedEnds = turnoffModels.stream().filter(m -> RefinedModelIds.isRefined(m.modelId())).count();
+        String ends = turnoffModels.isEmpty() ? "" : " Hollow markers: the " + (turnoffModels.size() == 1
+                ? "turn-off model" : turnoffModels.size() + " turn-off models") + " the isochrones end at, the "
+                + "heaviest star still on the main sequence at the age, as the refinement narrowed it.";
+        return refined == 0 ? ends : " Large markers, isochrones and mass labels: the " + grid + " grid models; small "
+                + "pale markers: the " + (refined - refinedEnds) + (refinedEnds == 0 ? "" : " other") + " models the "
+                + "transition refinement added near the transition masses." + ends;
     }
 
     /** The trend if some slice has a transition or a transient core window; otherwise {@link NothingToDraw}. */

@@ -17,7 +17,8 @@ import org.convgrid.plotting.tracks.TrackedModel;
 /**
  * Builds HR-diagram data from catalogue rows (and evolution tracks, when the run has them) of one physics
  * combination: a pure function, no drawing. Models without a usable result (status not ok, missing L or Teff, no
- * structure class) are left out; the transition refinement's models are kept apart from the grid's.
+ * structure class) are left out; the transition refinement's models are kept apart from the grid's, but for the
+ * turn-off model of a slice it narrowed, where that slice's line ends ({@link IsochroneEnd}).
  */
 public final class HrDiagram {
 
@@ -36,8 +37,9 @@ public final class HrDiagram {
 
     /**
      * The diagram of the rows and tracks whose physics is {@code physics}. With tracks it also holds, per Z, one
-     * isochrone per catalogue age (the usable models of that age joined in mass order; an age with fewer than two
-     * such models has none); track steps without a positive L and Teff are left out.
+     * isochrone per catalogue age (the usable models of that age joined in mass order, on to the turn-off model when
+     * the refinement found it; an age with fewer than two such models has none); track steps without a positive L and
+     * Teff are left out.
      */
     public static HrDiagramData build(PhysicsKey physics, List<CatalogueRow> rows, List<TrackedModel> tracked) {
         return build(physics, rows, tracked, id -> TrackTimeline.UNKNOWN);
@@ -77,12 +79,14 @@ public final class HrDiagram {
         TreeMap<Double, List<HrPoint>> byZ = new TreeMap<>();
         points.stream().filter(p -> onLine(ageGroups, ageOf.applyAsDouble(p)))
                 .forEach(p -> byZ.computeIfAbsent(p.zInit(), z -> new ArrayList<>()).add(p));
+        // by fraction every star has an age of its own: there is no slice of one age to have a turn-off
+        TurnoffModels turnoffs = new TurnoffModels(ageGroups.byFraction() ? List.of()
+                : rows.stream().filter(r -> PhysicsKey.of(r).equals(physics)).toList());
         List<HrDiagramData.ZeroAgeLine> lines = new ArrayList<>();
         byZ.forEach((z, members) -> {
             double youngest = members.stream().mapToDouble(ageOf).min().orElseThrow();
-            lines.add(new HrDiagramData.ZeroAgeLine(z, youngest, members.stream()
-                    .filter(p -> ageOf.applyAsDouble(p) == youngest).sorted(Comparator.comparingDouble(HrPoint::massMsun))
-                    .toList()));
+            lines.add(line(z, youngest, members.stream().filter(p -> ageOf.applyAsDouble(p) == youngest).toList(),
+                    turnoffs, refinementPoints));
         });
         List<HrPoint> labels = lines.isEmpty() ? List.of() : massLabels(lines.get(lines.size() / 2).points());
         List<Double> ages = points.stream().mapToDouble(ageOf).filter(a -> onLine(ageGroups, a)).boxed().distinct()
@@ -97,15 +101,36 @@ public final class HrDiagram {
         List<HrDiagramData.ZeroAgeLine> isochrones = new ArrayList<>();
         if (!tracks.isEmpty() || ageGroups.byFraction()) {
             byZ.forEach((z, members) -> ages.forEach(age -> {
-                List<HrPoint> at = members.stream().filter(p -> ageOf.applyAsDouble(p) == age)
-                        .sorted(Comparator.comparingDouble(HrPoint::massMsun)).toList();
-                if (at.size() >= 2) {
-                    isochrones.add(new HrDiagramData.ZeroAgeLine(z, age, at));
+                HrDiagramData.ZeroAgeLine line = line(z, age, members.stream()
+                        .filter(p -> ageOf.applyAsDouble(p) == age).toList(), turnoffs, refinementPoints);
+                if (line.points().size() >= 2) {
+                    isochrones.add(line);
                 }
             }));
         }
-        return new HrDiagramData(physics, List.copyOf(byZ.keySet()), ages, points, lines, labels, tracks,
-                isochrones, refinementPoints, ageGroups);
+        HrDiagramData drawn = new HrDiagramData(physics, List.copyOf(byZ.keySet()), ages, points, lines, labels,
+                tracks, isochrones, refinementPoints, ageGroups);
+        // a turn-off model a drawn line ends at is drawn as the line's end, not among the refinement's other models
+        List<HrPoint> ends = drawn.turnoffModels();
+        return new HrDiagramData(physics, drawn.metallicities(), ages, points, lines, labels, tracks, isochrones,
+                refinementPoints.stream().filter(p -> !ends.contains(p)).toList(), ageGroups);
+    }
+
+    /**
+     * The line of the grid models {@code gridModels} of one Z and age, in mass order, extended to the slice's turn-off
+     * model when the transition refinement found it ({@link TurnoffModels}): a turn-off up to a grid step above the
+     * last grid mass on the main sequence left the line short of the end cluster researchers read first. The
+     * refinement's other models stay off the line: they bunch at the fully convective limit and the core onset.
+     */
+    private static HrDiagramData.ZeroAgeLine line(double z, double age, List<HrPoint> gridModels,
+                                                  TurnoffModels turnoffs, List<HrPoint> refinementModels) {
+        // gridModels holds one age: a line of one Z and age is one slice (the age in Gyr, under BY_AGE)
+        TurnoffModels.End end = gridModels.isEmpty() ? TurnoffModels.End.ALL_ON_MAIN_SEQUENCE
+                : turnoffs.endOf(z, gridModels.get(0).ageGyr(), gridModels, refinementModels);
+        List<HrPoint> members = new ArrayList<>(gridModels);
+        end.turnoffModel().filter(m -> !members.contains(m)).ifPresent(members::add);
+        members.sort(Comparator.comparingDouble(HrPoint::massMsun));
+        return new HrDiagramData.ZeroAgeLine(z, age, members, end.kind());
     }
 
     private static HrDiagramData.TrackLine trackLine(TrackedModel t, TrackTimeline timeline, double from) {

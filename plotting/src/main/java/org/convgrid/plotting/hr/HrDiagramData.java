@@ -14,11 +14,13 @@ import org.convgrid.plotting.label.PhysicsKey;
  * @param zeroAgeLines one line per Z through its youngest models (age 0 when the run has it), by mass
  * @param massLabels the points that get a mass label (on one zero-age line)
  * @param tracks one evolution track per (mass, Z) of this physics, by Z then mass; empty when the run has none
- * @param isochrones per Z and age, the models of that age in mass order; only when there are tracks, or when the
- *                   diagram groups by main-sequence fraction (then each joins the models of one fraction)
+ * @param isochrones per Z and age, the models of that age in mass order, ending at the slice's turn-off model when
+ *                   the transition refinement found it ({@link IsochroneEnd}); only when there are tracks, or when
+ *                   the diagram groups by main-sequence fraction (then each joins the models of one fraction)
  * @param refinementPoints the usable models the transition refinement added at masses of its own choosing: drawn
  *                         apart (small and pale), never on a line or labelled, since they crowd near the transition
- *                         masses and an isochrone through them would not be one through the grid's masses
+ *                         masses and an isochrone through them would not be one through the grid's masses; but for
+ *                         the turn-off models a drawn line ends at ({@link #turnoffModels}), which are not in it
  * @param ageGroups how the lines' ages are keyed and named: by age in Gyr, or by main-sequence fraction
  */
 public record HrDiagramData(PhysicsKey physics, List<Double> metallicities, List<Double> ages, List<HrPoint> points,
@@ -49,6 +51,20 @@ public record HrDiagramData(PhysicsKey physics, List<Double> metallicities, List
         isochrones = List.copyOf(isochrones);
         refinementPoints = List.copyOf(refinementPoints);
         java.util.Objects.requireNonNull(ageGroups, "ageGroups");
+    }
+
+    /**
+     * The lines the chart draws: the isochrones, of which the youngest is the zero-age line, when there are any, else
+     * the zero-age lines.
+     */
+    public List<ZeroAgeLine> drawnLines() {
+        return isochrones.isEmpty() ? zeroAgeLines : isochrones;
+    }
+
+    /** The turn-off models the drawn lines end at ({@link IsochroneEnd#AT_TURNOFF_MODEL}), in line order. */
+    public List<HrPoint> turnoffModels() {
+        return drawnLines().stream().filter(l -> l.end() == IsochroneEnd.AT_TURNOFF_MODEL)
+                .map(l -> l.points().get(l.points().size() - 1)).toList();
     }
 
     /** The name of a line's age for its label and legend: {@code 150 Myr}, {@code MS fraction 0.5}. */
@@ -91,10 +107,18 @@ public record HrDiagramData(PhysicsKey physics, List<Double> metallicities, List
      * @param age the age of the line: Gyr (0 = ZAMS), or its main-sequence fraction (0 = ZAMS) when the diagram
      *     groups by fraction
      * @param points the models on the line, increasing mass
+     * @param end how its high-mass end lies against the turn-off: with {@link IsochroneEnd#AT_TURNOFF_MODEL} its last
+     *     point is the turn-off model
      */
-    public record ZeroAgeLine(double zInit, double age, List<HrPoint> points) {
+    public record ZeroAgeLine(double zInit, double age, List<HrPoint> points, IsochroneEnd end) {
         public ZeroAgeLine {
             points = List.copyOf(points);
+            java.util.Objects.requireNonNull(end, "end");
+        }
+
+        /** A line of a slice whose models are all on the main sequence. */
+        public ZeroAgeLine(double zInit, double age, List<HrPoint> points) {
+            this(zInit, age, points, IsochroneEnd.ALL_ON_MAIN_SEQUENCE);
         }
     }
 }

@@ -5,6 +5,7 @@ import java.util.DoubleSummaryStatistics;
 import java.util.List;
 import java.util.Locale;
 import org.convgrid.engine.convection.StructureClass;
+import org.convgrid.engine.evolution.MainSequenceEvolver;
 import org.convgrid.plotting.label.MetallicityNames;
 import org.convgrid.plotting.label.SliceLabels;
 import org.convgrid.plotting.layout.LabelPlacement;
@@ -12,6 +13,7 @@ import org.convgrid.plotting.layout.Obstacles;
 import org.convgrid.plotting.layout.SeriesObstacles;
 import org.convgrid.plotting.style.ChartNotes;
 import org.convgrid.plotting.style.ChartStyle;
+import org.convgrid.plotting.style.HollowMarker;
 import org.convgrid.plotting.style.NominalPlot;
 import org.convgrid.plotting.style.ScaledMarker;
 import org.convgrid.plotting.style.StyledChart;
@@ -22,7 +24,8 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  * Turns {@link HrDiagramData} into a chart: log Teff on a reversed x axis (hot stars left), log L/Lsun up; one
  * colour per metallicity (zero-age lines, isochrones and models), one marker shape per structure class; evolution
  * tracks (thin, light grey) and isochrones (one dash pattern per age, {@link IsochroneDashes}) labelled with their
- * ages under the models when the run has tracks; for an {@code ms_fraction} grid, lines of equal main-sequence
+ * ages under the models when the run has tracks, one with stars past the main sequence ending at its turn-off model
+ * (hollow) when the refinement found it, else noted as stopping below the turn-off; for an {@code ms_fraction} grid, lines of equal main-sequence
  * fraction in their place, keyed, labelled and titled by fraction ({@link HrDiagramData#ageGroups}); mass and age labels clear of every marker, line and other label,
  * with a leader line when they had to move away. XChart cannot reverse an axis, so the x values are -log Teff and
  * the tick labels drop the sign.
@@ -46,6 +49,21 @@ public final class HrDiagramRenderer {
      */
     static final String AGES_LEFT_OUT_SHARED_NOTE = "Some isochrones lie too close together to label each with its "
             + "age.";
+    /**
+     * The note of a diagram whose lines end at turn-off models ({@link HrDiagramData#turnoffModels}): what the hollow
+     * end is, in the exhaustion threshold the catalogue's {@code past_main_sequence} status is read at.
+     */
+    static final String TURNOFF_NOTE = "Isochrones with stars past the main sequence end at the turn-off model "
+            + "(hollow): the heaviest star still on it (central hydrogen above "
+            + SliceLabels.number(MainSequenceEvolver.Settings.DEFAULT.endCentralHydrogen()) + ") at that age, "
+            + "within the transition refinement's tolerance of one past it.";
+    /**
+     * How the note on lines that stop below the turn-off ends, after their names: why, and what computes the
+     * turn-off models.
+     */
+    static final String BELOW_TURNOFF_NOTE_END = " stop at the last grid mass on the main sequence, up to a grid step "
+            + "below the turn-off: no transition refinement found the turn-off model (run without --no-refine, or "
+            + "convgrid transitions RUN_DIR --refine, then plot).";
     /** Margin added around the data range, in dex. */
     private static final double PAD_DEX = 0.04;
     /**
@@ -81,6 +99,8 @@ public final class HrDiagramRenderer {
     /** The pre-main-sequence part: the same light grey and width, dotted, so it is told apart without a colour. */
     private static final java.awt.BasicStroke PRE_MAIN_SEQUENCE_STROKE = new java.awt.BasicStroke(TRACK_WIDTH,
             java.awt.BasicStroke.CAP_ROUND, java.awt.BasicStroke.JOIN_ROUND, 1f, new float[] {2f, 4f}, 0f);
+    /** The legend entry of the turn-off models the lines end at. */
+    static final String TURNOFF_LABEL = "turn-off models (hollow)";
     /** The legend entry of the transition refinement's models. */
     static final String REFINEMENT_LABEL = "refinement models (small)";
     /** Refinement models' markers: this share of the grid's marker size, and paler. */
@@ -109,6 +129,7 @@ public final class HrDiagramRenderer {
         if (!data.points().isEmpty()) {
             List<HrPoint> all = new java.util.ArrayList<>(data.points());
             all.addAll(data.refinementPoints());
+            all.addAll(data.turnoffModels());
             DoubleSummaryStatistics teff = all.stream().mapToDouble(HrPoint::logTeff).summaryStatistics();
             DoubleSummaryStatistics lum = all.stream().mapToDouble(HrPoint::logL).summaryStatistics();
             data.tracks().forEach(t -> {
@@ -178,6 +199,7 @@ public final class HrDiagramRenderer {
                 s.setShowInLegend(false);
             }
         }
+        addTurnoffModels(chart, data);
         chart.addOverlay((g, c) -> {
             g.setFont(ChartStyle.ANNOTATION_FONT);
             g.setColor(ChartStyle.BLACK);
@@ -193,7 +215,7 @@ public final class HrDiagramRenderer {
                 g.drawString(labels.get(i).text(), (float) p.box().getX(), (float) (p.box().getY() + fm.getAscent()));
             }
         });
-        ChartNotes.addRightOfPlot(chart, notes(data, chart));
+        ChartNotes.addRightOfPlot(chart, notes(data, chart, names));
         return chart;
     }
 
@@ -203,18 +225,81 @@ public final class HrDiagramRenderer {
         return "HR diagram, " + names.values(data.metallicities()) + ", " + ages;
     }
 
-    /**
-     * The chart's notes: that some isochrones went without an age label (they lay too close together), and which
-     * ages share a dash pattern when the grid has more ages than patterns.
-     */
+    /** The chart's notes ({@link #notes(HrDiagramData, StyledChart, MetallicityNames)}), metallicities named by Z. */
     static List<String> notes(HrDiagramData data, StyledChart chart) {
+        return notes(data, chart, MetallicityNames.Z_ONLY);
+    }
+
+    /**
+     * The chart's notes: that lines end at turn-off models, or which stop below the turn-off; that some isochrones
+     * went without an age label (they lay too close together), and which ages share a dash pattern when the grid has
+     * more ages than patterns.
+     */
+    static List<String> notes(HrDiagramData data, StyledChart chart, MetallicityNames names) {
         List<String> notes = new java.util.ArrayList<>();
+        if (!data.turnoffModels().isEmpty()) {
+            notes.add(TURNOFF_NOTE);
+        }
+        belowTurnoffNote(data, names).ifPresent(notes::add);
         java.util.Optional<String> sharing = IsochroneDashes.sharingNote(data);
         if (labels(data, chart).stream().filter(l -> !l.massLabel()).count() < middleIsochrones(data).size()) {
             notes.add(sharing.isPresent() ? AGES_LEFT_OUT_SHARED_NOTE : AGES_LEFT_OUT_NOTE);
         }
         sharing.ifPresent(notes::add);
         return notes;
+    }
+
+    /**
+     * The note naming the lines that stop at the last grid mass on the main sequence
+     * ({@link IsochroneEnd#BELOW_TURNOFF}): by age when every drawn line of that age does, else by age and metallicity.
+     */
+    static java.util.Optional<String> belowTurnoffNote(HrDiagramData data, MetallicityNames names) {
+        List<HrDiagramData.ZeroAgeLine> drawn = data.drawnLines();
+        List<String> named = new java.util.ArrayList<>();
+        drawn.stream().map(HrDiagramData.ZeroAgeLine::age).distinct().sorted().forEach(age -> {
+            List<HrDiagramData.ZeroAgeLine> ofAge = drawn.stream().filter(l -> l.age() == age).toList();
+            List<HrDiagramData.ZeroAgeLine> stopping = ofAge.stream()
+                    .filter(l -> l.end() == IsochroneEnd.BELOW_TURNOFF).toList();
+            if (stopping.size() == ofAge.size()) {
+                named.add(data.ageName(age));
+            } else {
+                stopping.forEach(l -> named.add(data.ageName(age) + " at " + names.of(l.zInit())));
+            }
+        });
+        if (named.isEmpty()) {
+            return java.util.Optional.empty();
+        }
+        String lines = named.size() == 1 ? named.get(0)
+                : String.join(", ", named.subList(0, named.size() - 1)) + " and " + named.get(named.size() - 1);
+        return java.util.Optional.of((named.size() == 1 ? "The isochrone of " : "The isochrones of ") + lines
+                + BELOW_TURNOFF_NOTE_END);
+    }
+
+    /**
+     * The turn-off models the lines end at: hollow markers of their class and Z, as large as the grid's (they are on
+     * a line), painted over everything else, with one grey legend entry. Hollow sets the end apart from the grid's
+     * models while the shape and colour keep it a member of its line.
+     */
+    private static void addTurnoffModels(StyledChart chart, HrDiagramData data) {
+        List<HrPoint> ends = data.turnoffModels();
+        if (ends.isEmpty()) {
+            return;
+        }
+        // the legend entry: at the first end, in its shape, so the coloured marker painted next covers it whole
+        HrPoint first = ends.get(0);
+        XYSeries legend = chart.addSeries(TURNOFF_LABEL, new double[] {-first.logTeff()}, new double[] {first.logL()});
+        legend.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+        legend.setMarker(new HollowMarker(ChartStyle.classMarker(first.structureClass())));
+        legend.setMarkerColor(CLASS_LEGEND_GREY);
+        for (int i = 0; i < ends.size(); i++) {
+            HrPoint end = ends.get(i);
+            XYSeries s = chart.addSeries("turn-off model " + i, new double[] {-end.logTeff()},
+                    new double[] {end.logL()});
+            s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+            s.setMarker(new HollowMarker(ChartStyle.classMarker(end.structureClass())));
+            s.setMarkerColor(ChartStyle.seriesColor(data.metallicities().indexOf(end.zInit())));
+            s.setShowInLegend(false);
+        }
     }
 
     /**
