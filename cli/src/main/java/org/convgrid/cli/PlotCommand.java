@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Set;
 import java.util.concurrent.Callable;
 import org.convgrid.output.RunLayout;
+import org.convgrid.survey.MapsAndReport;
 import org.convgrid.survey.RunLock;
 import org.convgrid.survey.StaleTemporaryFiles;
 import org.convgrid.grids.words.Counts;
@@ -65,9 +66,8 @@ final class PlotCommand implements Callable<Integer> {
             try {
                 report = ReportPage.write(run, dir, maps.failures());
             } catch (java.io.IOException e) {
-                // as run says it (MapsAndReport): the reason, that the tables are whole, and what redraws (a code review)
-                throw new java.io.IOException(org.convgrid.survey.IoMessages.reason(e)
-                        + org.convgrid.plotting.UnwrittenCharts.afterwards(dir), e);
+                // worded as run words it: one function for both
+                throw MapsAndReport.reportNotWritten(e, dir);
             }
             java.io.IOException unwritten = org.convgrid.plotting.UnwrittenCharts.of(maps, dir);
             if (unwritten != null) {
