@@ -7,7 +7,9 @@ import java.util.List;
 import java.util.Set;
 import java.util.concurrent.Callable;
 import org.convgrid.output.RunLayout;
+import org.convgrid.survey.MapsAndReport;
 import org.convgrid.survey.RunLock;
+import org.convgrid.survey.UnfinishedSlices;
 import org.convgrid.survey.StaleTemporaryFiles;
 import org.convgrid.grids.words.Counts;
 import org.convgrid.plotting.DrawnMaps;
@@ -56,7 +58,7 @@ final class PlotCommand implements Callable<Integer> {
                         + " that interrupted writes had left in " + dir);
             }
             UnfinishedRunWarning.printIfUnfinished(layout, main.err());
-            RunData run = RunData.read(dir);
+            RunData run = withUnfinishedSlicesMarked(RunData.read(dir));
             DrawnMaps maps = RunMaps.drawAll(run, dir, formats);
             // charts not written are said once, in the failure below, not as one warning each
             maps.failures().stream().filter(f -> !f.notWritten())
@@ -65,9 +67,8 @@ final class PlotCommand implements Callable<Integer> {
             try {
                 report = ReportPage.write(run, dir, maps.failures());
             } catch (java.io.IOException e) {
-                // as run says it (MapsAndReport): the reason, that the tables are whole, and what redraws (a code review)
-                throw new java.io.IOException(org.convgrid.survey.IoMessages.reason(e)
-                        + org.convgrid.plotting.UnwrittenCharts.afterwards(dir), e);
+                // worded as run words it: one function for both
+                throw MapsAndReport.reportNotWritten(e, dir);
             }
             java.io.IOException unwritten = org.convgrid.plotting.UnwrittenCharts.of(maps, dir);
             if (unwritten != null) {
@@ -76,5 +77,18 @@ final class PlotCommand implements Callable<Integer> {
             main.out().println("wrote " + maps.written().size() + " charts to " + layout.maps() + " and " + report);
             return ExitCodes.OK;
         }
+    }
+
+    /**
+     * The run with its transitions marked as {@code transitions} would write them for an unfinished run, when they
+     * were found from the catalogue (no transitions.csv): the report's table then says which slices lack masses, as
+     * the file would. A table read from transitions.csv is shown as written.
+     */
+    private static RunData withUnfinishedSlicesMarked(RunData run) {
+        if (run.transitionsFromFile()) {
+            return run;
+        }
+        return new RunData(run.catalogue(), UnfinishedSlices.marked(run.transitions(), run.catalogue(),
+                run.manifest()), false, run.manifest(), run.radiusZones(), run.tracks(), run.timelines());
     }
 }

@@ -53,7 +53,7 @@ class RunCommandTest {
         Path dir = work.resolve("runs/test-survey");
         assertThat(done.out()).contains(dir + ": 156 models in catalogue.ecsv (156 ok, 0 not_converged, "
                 + "0 past_main_sequence, 0 failed)");
-        assertThat(done.err()).contains("computing 156 models").contains("156 of 156 models (100%)");
+        assertThat(done.err()).contains("computing 156 models").contains("156 of 156 saved (100%), 156 computed");
         List<CatalogueRow> rows = CatalogueReader.read(dir.resolve("catalogue.ecsv"));
         assertThat(rows.get(0).modelId()).isEqualTo("p0-z00-m000-a00");
         assertThat(rows.get(155).modelId()).isEqualTo("p0-z01-m038-a01");

@@ -30,12 +30,35 @@ public record DrawnMaps(List<Path> written, List<ChartFailure> failures) {
      * @param reason what went wrong, for people
      * @param notWritten whether the chart was drawn but writing its file failed (the operating system's reason in
      *                   {@code reason}): unlike a chart with nothing to show, that is a failure of the command
+     * @param olderFile what became of the file an earlier drawing left under the name not written
      */
-    public record ChartFailure(String fileName, String reason, boolean notWritten) {
+    public record ChartFailure(String fileName, String reason, boolean notWritten, OlderFile olderFile) {
+
+        /**
+         * The file of the same name an earlier drawing left in maps/, when this one could not write it: a chart of
+         * older data beside tables of new data (a review found one listed as failed in report.html and still there).
+         */
+        public enum OlderFile {
+            /** There was none (or nothing was to be written). */
+            NONE,
+            /** It was removed, so maps/ holds no chart of older data under that name. */
+            REMOVED,
+            /** It could not be removed, and still shows older data. */
+            KEPT
+        }
+
+        public ChartFailure {
+            java.util.Objects.requireNonNull(olderFile, "olderFile");
+        }
 
         /** A chart that could not be drawn (nothing to show, a chart library error). */
         public ChartFailure(String fileName, String reason) {
-            this(fileName, reason, false);
+            this(fileName, reason, false, OlderFile.NONE);
+        }
+
+        /** A chart that could not be drawn or written, with no older file of its name in question. */
+        public ChartFailure(String fileName, String reason, boolean notWritten) {
+            this(fileName, reason, notWritten, OlderFile.NONE);
         }
 
         /** One line for a warning: the chart, then the reason. */

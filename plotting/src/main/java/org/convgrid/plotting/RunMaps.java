@@ -162,7 +162,19 @@ public final class RunMaps {
 
     /** Draws the given charts into {@code maps}; a chart that throws is named in the failures. */
     static DrawnMaps draw(List<MapEntry> entries, Path maps, Set<ChartFiles.VectorFormat> vectorFormats) {
-        List<Drawn> drawn = entries.parallelStream().map(entry -> draw(entry, maps, vectorFormats)).toList();
+        return draw(entries, maps, vectorFormats, ChartFiles::writePng);
+    }
+
+    /** Writes one chart's PNG; the file system's own writer outside tests of a write that fails. */
+    @FunctionalInterface
+    interface PngWriter {
+        void write(StyledChart chart, Path target) throws IOException;
+    }
+
+    /** As {@link #draw(List, Path, Set)}, each PNG written by {@code png}. */
+    static DrawnMaps draw(List<MapEntry> entries, Path maps, Set<ChartFiles.VectorFormat> vectorFormats,
+                          PngWriter png) {
+        List<Drawn> drawn = entries.parallelStream().map(entry -> draw(entry, maps, vectorFormats, png)).toList();
         List<Path> written = new ArrayList<>();
         List<DrawnMaps.ChartFailure> failures = new ArrayList<>();
         for (Drawn d : drawn) {
@@ -177,7 +189,8 @@ public final class RunMaps {
     private record Drawn(List<Path> files, DrawnMaps.ChartFailure failure) {
     }
 
-    private static Drawn draw(MapEntry entry, Path maps, Set<ChartFiles.VectorFormat> vectorFormats) {
+    private static Drawn draw(MapEntry entry, Path maps, Set<ChartFiles.VectorFormat> vectorFormats,
+                              PngWriter pngWriter) {
         List<Path> written = new ArrayList<>(1 + vectorFormats.size());
         StyledChart chart;
         try {
@@ -186,22 +199,50 @@ public final class RunMaps {
             // a chart library error or nothing to show: report it by chart and carry on with the others
             return new Drawn(written, new DrawnMaps.ChartFailure(entry.fileName(), reason(e)));
         }
+        List<ChartFiles.VectorFormat> formats = vectorFormats.stream().sorted().toList();
+        Path png = maps.resolve(entry.fileName());
+        List<Path> files = new ArrayList<>(List.of(png));
+        formats.forEach(format -> files.add(maps.resolve(entry.stem() + "." + format.extension())));
         try {
-            Path png = maps.resolve(entry.fileName());
-            ChartFiles.writePng(chart, png);
+            pngWriter.write(chart, png);
             written.add(png);
-            for (ChartFiles.VectorFormat format : vectorFormats.stream().sorted().toList()) {
-                Path vector = maps.resolve(entry.stem() + "." + format.extension());
-                ChartFiles.writeVector(chart, vector, format);
-                written.add(vector);
+            for (int i = 0; i < formats.size(); i++) {
+                ChartFiles.writeVector(chart, files.get(1 + i), formats.get(i));
+                written.add(files.get(1 + i));
             }
             return new Drawn(written, null);
         } catch (IOException e) {
-            // a full disk or a file size limit: the chart is fine, the disk is not; the caller fails the command
-            return new Drawn(written, new DrawnMaps.ChartFailure(entry.fileName(), reason(e), true));
+            // a full disk or a file size limit: the chart is fine, the disk is not; the caller fails the command.
+            // The files an earlier drawing left under the names not written go, so that maps/ never holds a chart of
+            // older data beside tables of new data while the report lists it as failed
+            List<Path> notWritten = files.stream().filter(f -> !written.contains(f)).toList();
+            return new Drawn(written, new DrawnMaps.ChartFailure(entry.fileName(), reason(e), true,
+                    removeOlder(notWritten)));
         } catch (RuntimeException e) {
             return new Drawn(written, new DrawnMaps.ChartFailure(entry.fileName(), reason(e)));
         }
+    }
+
+    /**
+     * Removes the regular files of these names (an earlier drawing's; never a folder or a link's target): whether
+     * there were none, all went, or one could not be removed.
+     */
+    private static DrawnMaps.ChartFailure.OlderFile removeOlder(List<Path> files) {
+        DrawnMaps.ChartFailure.OlderFile result = DrawnMaps.ChartFailure.OlderFile.NONE;
+        for (Path file : files) {
+            if (!java.nio.file.Files.isRegularFile(file, java.nio.file.LinkOption.NOFOLLOW_LINKS)) {
+                continue;
+            }
+            try {
+                java.nio.file.Files.delete(file);
+                if (result == DrawnMaps.ChartFailure.OlderFile.NONE) {
+                    result = DrawnMaps.ChartFailure.OlderFile.REMOVED;
+                }
+            } catch (IOException e) {
+                result = DrawnMaps.ChartFailure.OlderFile.KEPT;
+            }
+        }
+        return result;
     }
 
     private static String reason(Exception e) {

@@ -27,7 +27,27 @@ public final class UnwrittenCharts {
         DrawnMaps.ChartFailure first = unwritten.get(0);
         return new IOException(unwritten.size() + " of " + charts + " charts could not be written to "
                 + new RunLayout(runDir).maps() + " (" + first.fileName() + ": " + first.reason() + ")"
-                + afterwards(runDir));
+                + olderFiles(unwritten) + afterwards(runDir));
+    }
+
+    /**
+     * What became of the files an earlier drawing left under the names not written: removed (said, so that a user
+     * who misses a chart knows why), or still there with older data (said, so that nobody reads them as new).
+     */
+    static String olderFiles(List<DrawnMaps.ChartFailure> unwritten) {
+        long removed = unwritten.stream().filter(f -> f.olderFile() == DrawnMaps.ChartFailure.OlderFile.REMOVED)
+                .count();
+        long kept = unwritten.stream().filter(f -> f.olderFile() == DrawnMaps.ChartFailure.OlderFile.KEPT).count();
+        String text = "";
+        if (removed > 0) {
+            text += "; the older file" + (removed == 1 ? " of 1 of them was" : "s of " + removed + " of them were")
+                    + " removed, as " + (removed == 1 ? "it showed" : "they showed") + " earlier data";
+        }
+        if (kept > 0) {
+            text += "; the older file" + (kept == 1 ? " of 1 of them" : "s of " + kept + " of them")
+                    + " could not be removed and still show" + (kept == 1 ? "s" : "") + " earlier data";
+        }
+        return text;
     }
 
     /** What the user has and what to do, after a chart or the report could not be written. */

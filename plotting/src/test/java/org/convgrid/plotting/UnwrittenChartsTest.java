@@ -34,6 +34,50 @@ class UnwrittenChartsTest {
                 .hasMessageContaining("catalogue.ecsv").hasMessageNotContaining("I/O error writing PNG file");
     }
 
+    /**
+     * A chart drawn again but not written (a full disk, made by a writer that fails as one does) must not leave the
+     * file of an earlier drawing in maps/: report.html lists the chart as failed, and the older file showed data
+     * the tables no longer hold. It is removed, and the message says so; a chart written keeps its new file.
+     */
+    @Test
+    void theOlderFileOfAChartNotWrittenIsRemovedAndTheMessageSaysSo() throws Exception {
+        TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.2, 1.6, 8), new double[] {0.014}, new double[] {0}));
+        List<MapEntry> plan = RunMaps.plan(RunData.read(dir));
+        Path maps = dir.resolve("maps");
+        assertThat(RunMaps.draw(plan, maps, Set.of()).failures()).isEmpty();
+        String failing = plan.get(0).fileName();
+        String kept = plan.get(1).fileName();
+        assertThat(maps.resolve(failing)).isRegularFile();
+
+        DrawnMaps drawn = RunMaps.draw(plan, maps, Set.of(), (chart, target) -> {
+            if (target.getFileName().toString().equals(failing)) {
+                throw new java.io.IOException("No space left on device");
+            }
+            org.convgrid.plotting.style.ChartFiles.writePng(chart, target);
+        });
+
+        assertThat(maps.resolve(failing)).doesNotExist();
+        assertThat(maps.resolve(kept)).isRegularFile();
+        assertThat(drawn.failures()).singleElement().satisfies(f -> assertThat(f.olderFile())
+                .isEqualTo(DrawnMaps.ChartFailure.OlderFile.REMOVED));
+        assertThat(UnwrittenCharts.of(drawn, dir)).hasMessageContaining("1 of " + plan.size() + " charts could not "
+                + "be written").hasMessageContaining("(" + failing + ": No space left on device); the older file of 1 "
+                + "of them was removed, as it showed earlier data; the tables");
+    }
+
+    /** A chart not written where no earlier drawing left a file: nothing to remove, and nothing said of it. */
+    @Test
+    void aChartNotWrittenWithoutAnOlderFileSaysNothingOfOne() throws Exception {
+        TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.2, 1.6, 8), new double[] {0.014}, new double[] {0}));
+        List<MapEntry> plan = RunMaps.plan(RunData.read(dir));
+        DrawnMaps drawn = RunMaps.draw(plan.subList(0, 1), dir.resolve("maps"), Set.of(), (chart, target) -> {
+            throw new java.io.IOException("File too large");
+        });
+        assertThat(drawn.failures()).singleElement().satisfies(f -> assertThat(f.olderFile())
+                .isEqualTo(DrawnMaps.ChartFailure.OlderFile.NONE));
+        assertThat(UnwrittenCharts.of(drawn, dir)).hasMessageNotContaining("older file");
+    }
+
     @Test
     void aChartWithNothingToDrawIsNoWriteFailure() throws Exception {
         TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.2, 1.6, 8), new double[] {0.014}, new double[] {0}));

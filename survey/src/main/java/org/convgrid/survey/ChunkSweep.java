@@ -7,6 +7,7 @@ import java.util.Iterator;
 import java.util.List;
 import java.util.Map;
 import java.util.NoSuchElementException;
+import java.util.concurrent.atomic.AtomicLong;
 import java.util.function.Predicate;
 import org.convgrid.engine.batch.ChunkSolver;
 import org.convgrid.engine.batch.Chunking;
@@ -40,7 +41,8 @@ final class ChunkSweep {
      * @param solver computes one chunk
      * @param sink receives the new outcomes in grid order
      * @param progress told once per chunk, after its outcomes are emitted (a chunk's models arrive together: told
-     *                 one by one, the first of a chunk that took a minute would be timed as one model per minute)
+     *                 one by one, the first of a chunk that took a minute would be timed as one model per minute),
+     *                 with the models computed so far and those emitted
      * @param expectedTotal how many outcomes this run will emit, for progress (-1 if unknown)
      * @return counts of the emitted outcomes by status
      */
@@ -50,8 +52,15 @@ final class ChunkSweep {
             throws IOException {
         Map<ModelStatus, Long> counts = new EnumMap<>(ModelStatus.class);
         long[] emitted = {0};
+        // counted on the worker threads as chunks end, in whatever order: the progress line tells them apart from
+        // the rows written, which is what an interrupt keeps
+        AtomicLong computed = new AtomicLong();
         work.forEachInOrder(owned(new Chunking(requests, massesPerChunk), shard, alreadyDone),
-                chunk -> groundworkSafely(solver, chunk), chunk -> solveSafely(solver, chunk), outcomes -> {
+                chunk -> groundworkSafely(solver, chunk), chunk -> {
+                    List<ModelOutcome> outcomes = solveSafely(solver, chunk);
+                    computed.addAndGet(chunk.stream().filter(r -> !alreadyDone.test(r)).count());
+                    return outcomes;
+                }, outcomes -> {
                     long before = emitted[0];
                     for (ModelOutcome outcome : outcomes) {
                         if (!alreadyDone.test(outcome.request())) {
@@ -61,7 +70,7 @@ final class ChunkSweep {
                         }
                     }
                     if (emitted[0] > before) {
-                        progress.progress(emitted[0], expectedTotal);
+                        progress.progress(Math.max(computed.get(), emitted[0]), emitted[0], expectedTotal);
                     }
                 });
         return counts;

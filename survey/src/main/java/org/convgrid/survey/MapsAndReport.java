@@ -1,6 +1,7 @@
 package org.convgrid.survey;
 
 import java.io.IOException;
+import java.nio.file.Path;
 import java.util.Objects;
 import java.util.Set;
 import java.util.function.Consumer;
@@ -41,11 +42,20 @@ public final class MapsAndReport implements RunFinisher {
         try {
             ReportPage.write(data, run.directory(), drawn.failures());
         } catch (IOException e) {
-            throw new IOException(IoMessages.reason(e) + UnwrittenCharts.afterwards(run.directory()), e);
+            throw reportNotWritten(e, run.directory());
         }
         IOException unwritten = UnwrittenCharts.of(drawn, run.directory());
         if (unwritten != null) {
             throw unwritten;
         }
+    }
+
+    /**
+     * The failure of a command whose report.html could not be written ({@code e}): the reason, that the tables are
+     * complete, and what draws the charts and the report again. One wording for {@code run}, {@code merge} and
+     * {@code plot} (it had been assembled in two places).
+     */
+    public static IOException reportNotWritten(IOException e, Path runDir) {
+        return new IOException(IoMessages.reason(e) + UnwrittenCharts.afterwards(runDir), e);
     }
 }

@@ -35,7 +35,9 @@ public final class RunFinishing {
     /** Writes transitions.csv from the catalogue rows, then manifest.yaml. */
     public static FinishedRun writeTables(RunDirectory dir, GridSpec grid, RunManifest manifest,
                                           List<CatalogueRow> catalogue) throws IOException {
-        List<TransitionRow> transitions = TransitionFinder.withDefaults().find(catalogue);
+        // the rule every writer of the table applies; a finished manifest (a run's end, a merge) leaves it unmarked
+        List<TransitionRow> transitions = UnfinishedSlices.marked(TransitionFinder.withDefaults().find(catalogue),
+                catalogue, manifest);
         AtomicFiles.write(dir.transitions(),
                 out -> TransitionWriter.write(transitions, GridIronAbundance.of(grid), out));
         AtomicFiles.writeString(dir.manifest(), RunManifestWriter.toYaml(manifest));

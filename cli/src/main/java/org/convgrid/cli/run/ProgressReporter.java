@@ -8,7 +8,10 @@ import org.convgrid.grids.words.Counts;
 
 /**
  * Progress of a run on the error stream. On a terminal: one line redrawn in place with a carriage return (bar,
- * models done/total, rate, time left), at most every {@link #REDRAW_NANOS}. In a batch log: one plain line every
+ * models done/total, rate, time left), at most
+ * every {@link #REDRAW_NANOS}. A sweep's line counts the models saved, their rows written in grid order, and says
+ * how many are computed: a user about to press Ctrl-C sees what it keeps (the models computed after the first
+ * unfinished one are not written yet, and are lost). In a batch log: one plain line every
  * {@link #LOG_EVERY_NANOS} or every {@link #LOG_EVERY_PERCENT} %, whichever comes first. Called from one thread at a
  * time, once per finished chunk of models (the sweep) or per new model (the refinement, whose total is unknown: the
  * count and the rate alone, no bar, a log line every {@link #LOG_EVERY_NANOS}).
@@ -47,6 +50,13 @@ public final class ProgressReporter implements ProgressListener {
     private long lastDone;
     private long lastTotal;
     private long shownDone;
+    /**
+     * Models computed, written or waiting for an earlier one to be written, as last told; -1 when the caller tells
+     * one count only (the refinement).
+     */
+    private long computed = -1;
+    /** Length of the line last drawn on the terminal. */
+    private int drawnWidth;
 
     /**
      * @param err where to write
@@ -87,6 +97,20 @@ public final class ProgressReporter implements ProgressListener {
 
     @Override
     public void progress(long done, long total) {
+        report(done, -1, total);
+    }
+
+    /**
+     * The sweep's report: the line counts the models saved (their rows written), which is what Ctrl-C keeps, and
+     * says how many are computed; the bar, the percentage, the rate and the time left follow the saved ones.
+     */
+    @Override
+    public void progress(long computed, long saved, long total) {
+        report(saved, computed, total);
+    }
+
+    private void report(long done, long computed, long total) {
+        this.computed = computed;
         long now = nanoTime.getAsLong();
         if (reports++ == 0) {
             firstDone = done;
@@ -116,7 +140,10 @@ public final class ProgressReporter implements ProgressListener {
     }
 
     private void draw(long done, long total, long now) {
-        err.print("\r" + line(done, total, now, true));
+        String line = line(done, total, now, true);
+        // spaces over what a longer line before it left on the terminal (its time left, a wider count)
+        err.print("\r" + line + " ".repeat(Math.max(0, drawnWidth - line.length())));
+        drawnWidth = line.length();
         err.flush();
         lastShown = now;
         shownDone = done;
@@ -147,14 +174,23 @@ public final class ProgressReporter implements ProgressListener {
         double seconds = Math.max(1e-9, (now - start) * 1e-9);
         double rate = done / seconds;
         StringBuilder text = new StringBuilder();
-        if (bar && total > 0) {
-            int filled = (int) (BAR_WIDTH * Math.min(1.0, (double) done / total));
-            text.append('[').append("#".repeat(filled)).append(".".repeat(BAR_WIDTH - filled)).append("] ");
+        if (computed >= 0) {
+            // the sweep's: no bar (the percentage says it), and "saved" for the noun the start line gave, so that a
+            // 100 000-model grid's line fits an 80-column terminal with its time left
+            text.append(done).append(" of ").append(total).append(" saved");
+        } else {
+            if (bar && total > 0) {
+                int filled = (int) (BAR_WIDTH * Math.min(1.0, (double) done / total));
+                text.append('[').append("#".repeat(filled)).append(".".repeat(BAR_WIDTH - filled)).append("] ");
+            }
+            // "1 of 1 model": the count the noun agrees with is the total; "1/1 models" read oddly
+            text.append(total < 0 ? Counts.of(done, counted) : done + " of " + Counts.of(total, counted));
         }
-        // "1 of 1 model": the count the noun agrees with is the total; "1/1 models" read oddly
-        text.append(total < 0 ? Counts.of(done, counted) : done + " of " + Counts.of(total, counted));
         if (total > 0) {
             text.append(String.format(Locale.ROOT, " (%d%%)", done * 100 / total));
+        }
+        if (computed >= 0) {
+            text.append(", ").append(computed).append(" computed");
         }
         text.append(String.format(Locale.ROOT, ", %.2f models/s", rate));
         if (reports - 1 >= reportsBeforeTimeLeft && total > 0 && done > firstDone && done < total

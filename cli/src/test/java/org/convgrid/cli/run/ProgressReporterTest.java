@@ -32,8 +32,45 @@ class ProgressReporterTest {
         clock.set(40 * SECOND);
         reporter.progress(200, 200);
         reporter.finish();
-        assertThat(text.toString()).endsWith("\r[########################] 200 of 200 models (100%), 5.00 models/s\n")
-                .doesNotContain("51/200");
+        // spaces over the end of the longer line before it (its ", 30 s left" had stayed on the terminal)
+        assertThat(text.toString()).endsWith("\r[########################] 200 of 200 models (100%), 5.00 models/s"
+                + " ".repeat(9) + "\n").doesNotContain("51/200");
+    }
+
+    /**
+     * The sweep's line says how many of the models computed are saved: rows are written in grid order, so those
+     * computed after the first unfinished one wait, and an interrupt loses them (a review: the user could not tell,
+     * before pressing Ctrl-C, what was safe on disk).
+     */
+    @Test
+    void theSweepsLineSaysHowManyModelsAreSaved() {
+        ProgressReporter reporter = new ProgressReporter(new PrintWriter(text), false, clock::get, 2);
+        clock.set(10 * SECOND);
+        reporter.progress(26, 24, 90);
+        assertThat(text.toString()).isEqualTo("convgrid: 24 of 90 saved (26%), 26 computed, 2.40 models/s\n");
+
+        StringWriter terminal = new StringWriter();
+        clock.set(0);
+        ProgressReporter drawn = new ProgressReporter(new PrintWriter(terminal), true, clock::get, 2);
+        clock.set(10 * SECOND);
+        drawn.progress(26, 24, 90);
+        assertThat(terminal.toString()).isEqualTo("\r24 of 90 saved (26%), 26 computed, 2.40 models/s");
+    }
+
+    /** The sweep's line fits an 80-column terminal, also with a large grid's long counts and its time left. */
+    @Test
+    void theTerminalLineFitsEightyColumns() {
+        ProgressReporter reporter = new ProgressReporter(new PrintWriter(text), true, clock::get, 1);
+        clock.set(100 * SECOND);
+        reporter.progress(1234, 1200, 2000);
+        clock.set(200 * SECOND);
+        reporter.progress(2468, 2400, 99_999);
+        clock.set(300 * SECOND);
+        reporter.progress(3702, 3600, 99_999);
+        String[] lines = text.toString().substring(1).split("\r");
+        assertThat(lines).hasSize(3).allSatisfy(l -> assertThat(l.length()).isLessThanOrEqualTo(79));
+        assertThat(lines[0]).isEqualTo("1200 of 2000 saved (60%), 1234 computed, 12.00 models/s");
+        assertThat(lines[2].strip()).isEqualTo("3600 of 99999 saved (3%), 3702 computed, 12.00 models/s, 2 h 13 min left");
     }
 
     @Test

@@ -39,6 +39,7 @@ import org.convgrid.survey.RunDirectory;
 import org.convgrid.survey.RunFinisher;
 import org.convgrid.survey.RunFinishing;
 import org.convgrid.survey.RunSetupException;
+import org.convgrid.survey.UnfinishedSlices;
 
 /**
  * {@code convgrid transitions}: rewrites a run directory's transitions.csv from its catalogue, after appending the
@@ -79,8 +80,11 @@ public final class TransitionTables {
         requireCatalogue(dir);
         List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
         double tolerance = earlierTolerance(dir);
-        List<TransitionRow> transitions = withNotes(finder, rows, Map.of()).stream()
-                .map(t -> t.withTolerance(tolerance)).toList();
+        RunManifest manifest = Files.isRegularFile(dir.manifest())
+                ? RunManifestReader.read(Files.readString(dir.manifest())) : null;
+        // an unfinished run's slices that lack some of their masses say so in the file itself, not on stderr alone
+        List<TransitionRow> transitions = UnfinishedSlices.marked(withNotes(finder, rows, Map.of()).stream()
+                .map(t -> t.withTolerance(tolerance)).toList(), rows, manifest);
         IronAbundance iron = ironAbundance(dir);
         AtomicFiles.write(dir.transitions(), out -> TransitionWriter.write(transitions, iron, out));
         return finish(new Update(transitions, rows, List.of(), 0, finished(dir, rows, transitions)), finishers);

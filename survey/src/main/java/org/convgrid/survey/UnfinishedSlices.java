@@ -1,0 +1,107 @@
+package org.convgrid.survey;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.convgrid.engine.batch.Shard;
+import org.convgrid.engine.request.ModelRequest;
+import org.convgrid.grids.GridFileException;
+import org.convgrid.grids.GridSpec;
+import org.convgrid.grids.yaml.GridFileReader;
+import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.manifest.RunManifest;
+import org.convgrid.output.transitions.Slice;
+import org.convgrid.output.transitions.TransitionRow;
+
+/**
+ * The mark a row of transitions.csv carries in its notes when its slice lacks some of the models its run is to
+ * compute: an interrupted run (or one that failed part-way) has a catalogue that holds part of some slices' masses,
+ * and a limit found among part of them may lie elsewhere once the rest are there. Said until now on stderr alone
+ * (a review: a script reading transitions.csv later could not tell). The models a slice is to hold come from the
+ * manifest's plan: its grid text and its shard (a shard's slices are complete when its share of them is). A slice
+ * that holds all its models, and every slice of a run whose manifest says it finished, carries no mark, so the
+ * table of a complete run is what it was. Every command that writes the table or the report's copy of it applies
+ * this one rule.
+ */
+public final class UnfinishedSlices {
+
+    private UnfinishedSlices() {
+    }
+
+    /**
+     * The rows with the mark first in the notes of each slice that lacks some of its planned models; the rows
+     * unchanged when the manifest says the run finished, is absent, or records a grid text this version cannot read
+     * (its plan is then unknown, and stderr's warning is all that can be said).
+     *
+     * @param transitions the table found from {@code catalogue}
+     * @param catalogue the catalogue rows the table was found from
+     * @param manifest the run's manifest, null when there is none
+     */
+    public static List<TransitionRow> marked(List<TransitionRow> transitions, List<CatalogueRow> catalogue,
+                                             RunManifest manifest) {
+        if (manifest == null || !manifest.isUnfinished()) {
+            return transitions;
+        }
+        GridSpec grid;
+        try {
+            grid = new GridFileReader().parse(manifest.gridFile(), manifest.gridText());
+        } catch (GridFileException e) {
+            return transitions;
+        }
+        Shard shard = manifest.shard() == null ? Shard.ALL : ShardChoice.parse(manifest.shard());
+        Map<String, Integer> planned = new HashMap<>();
+        Set<String> plannedIds = new HashSet<>();
+        for (ModelRequest r : new ShardPlan(grid, shard, GridRun.MASSES_PER_CHUNK)) {
+            String key = sliceKey(r.modelId());
+            if (key != null) {
+                planned.merge(key, 1, Integer::sum);
+                plannedIds.add(r.modelId());
+            }
+        }
+        Map<String, Integer> present = new HashMap<>();
+        Map<Slice, String> keyOfSlice = new HashMap<>();
+        for (CatalogueRow row : catalogue) {
+            String key = sliceKey(row.modelId());
+            if (key != null && plannedIds.contains(row.modelId())) {
+                present.merge(key, 1, Integer::sum);
+                keyOfSlice.putIfAbsent(Slice.of(row), key);
+            }
+        }
+        List<TransitionRow> out = new ArrayList<>(transitions.size());
+        for (TransitionRow t : transitions) {
+            String key = keyOfSlice.get(t.slice());
+            int have = key == null ? 0 : present.getOrDefault(key, 0);
+            int wanted = key == null ? 0 : planned.getOrDefault(key, 0);
+            out.add(key == null || have >= wanted ? t : t.withNotes(note(have, wanted, manifest.shard())
+                    + (t.notes().isEmpty() ? "" : "; " + t.notes())));
+        }
+        return out;
+    }
+
+    /**
+     * The mark: how many of the slice's masses are in the catalogue, and what completes it. Its first words are
+     * fixed, for scripts to test for: {@code unfinished slice:}.
+     *
+     * @param shard the shard's label ({@code K/N}), null for the whole grid
+     */
+    static String note(int computed, int planned, String shard) {
+        return "unfinished slice: " + computed + " of " + planned + " masses " + (shard == null ? "" : "of shard "
+                + shard + " ") + "computed; convgrid run --resume completes it";
+    }
+
+    /**
+     * A grid model's id without its mass part ({@code p0-z01-a02} of {@code p0-z01-m023-a02}): the same for every
+     * mass of one slice. Null for an id that names no grid mass (a refinement model's {@code -r<n>-}).
+     */
+    static String sliceKey(String modelId) {
+        int age = modelId.lastIndexOf("-a");
+        int mass = modelId.lastIndexOf("-m", age);
+        if (age < 0 || mass < 0) {
+            return null;
+        }
+        return modelId.substring(0, mass) + modelId.substring(age);
+    }
+}
