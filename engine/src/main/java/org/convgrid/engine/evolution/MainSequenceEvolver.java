@@ -3,6 +3,7 @@ package org.convgrid.engine.evolution;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 
 import org.convgrid.engine.request.ModelStatus;
@@ -322,7 +323,8 @@ public final class MainSequenceEvolver {
             }
             if (accepted >= settings.stepBudget() || retries > settings.retryBudget()) {
                 end = EvolutionResult.EndReason.FAILED;
-                detail = String.format("budget used: %d steps, %d retries, at age %.4g Gyr, X_c = %.3g",
+                // root locale: status_detail text, the same in every session
+                detail = String.format(Locale.ROOT, "budget used: %d steps, %d retries, at age %.4g Gyr, X_c = %.3g",
                         accepted, retries, age / Constants.GYR, xc);
                 break;
             }

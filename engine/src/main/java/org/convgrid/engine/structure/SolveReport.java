@@ -1,5 +1,7 @@
 package org.convgrid.engine.structure;
 
+import java.util.Locale;
+
 /**
  * How a Henyey relaxation went: enough to diagnose a failure without rerunning it.
  *
@@ -24,10 +26,11 @@ public record SolveReport(StopReason reason, int iterations, double lastCorrecti
         return new SolveReport(reason, iterations + earlier, lastCorrection, worstPoint, worstUnknown, detail);
     }
 
+    /** In the root locale: this text goes into the catalogue's status_detail, which must not change with the session. */
     @Override
     public String toString() {
         String where = worstPoint < 0 ? ""
-                : String.format(" (last correction %.3g in %s at mesh point %d, 0 = centre)", lastCorrection,
+                : String.format(Locale.ROOT, " (last correction %.3g in %s at mesh point %d, 0 = centre)", lastCorrection,
                         worstUnknown, worstPoint);
         return reason + " after " + iterations + " iterations" + where + (detail.isEmpty() ? "" : ": " + detail);
     }
