@@ -285,7 +285,7 @@ public final class RunMaps {
             // built here, not when drawn: the caption names the turn-off models its lines end at
             HrDiagramData hr = HrDiagram.build(p, rows, run.trackedModels(), run::timeline, groups);
             entries.add(new MapEntry(HR_FILES + "_" + p.fileStem() + ".png", MapEntry.HR,
-                    hrCaption(run, groups) + p.describe() + "." + refinementNote(rows, p, hr.turnoffModels()),
+                    hrCaption(run, groups) + p.describe() + "." + refinementNote(rows, p, hr),
                     () -> HrDiagramRenderer.render(usable(hr, rows), names)));
         }
         if (groups.byFraction()) {
@@ -458,22 +458,27 @@ public final class RunMaps {
     }
 
     /**
-     * What the HR caption adds when the refinement added models of this physics: how many, and that lines and mass
-     * labels go through the grid's masses only.
+     * What the HR caption adds when the refinement added models of this physics: how many the chart draws, and that
+     * lines and mass labels go through the grid's masses only. Counted from the diagram, not the catalogue: models
+     * past the main sequence (the turn-off refinement's high side) or failed are in the catalogue but not drawn.
      */
-    private static String refinementNote(List<CatalogueRow> rows, PhysicsKey physics, List<HrPoint> turnoffModels) {
-        long refined = rows.stream().filter(r -> PhysicsKey.of(r).equals(physics))
-                .filter(r -> RefinedModelIds.isRefined(r.modelId())).count();
-        long grid = rows.stream().filter(r -> PhysicsKey.of(r).equals(physics)).count() - refined;
+    private static String refinementNote(List<CatalogueRow> rows, PhysicsKey physics, HrDiagramData hr) {
+        List<CatalogueRow> mine = rows.stream().filter(r -> PhysicsKey.of(r).equals(physics)).toList();
+        long refined = mine.stream().filter(r -> RefinedModelIds.isRefined(r.modelId())).count();
+        long grid = mine.size() - refined;
+        List<HrPoint> turnoffModels = hr.turnoffModels();
         // a turn-off model is drawn large and hollow on its line, whether the refinement added it or (when every new
         // model came out past the main sequence) the grid had it
         long refinedEnds = turnoffModels.stream().filter(m -> RefinedModelIds.isRefined(m.modelId())).count();
+        long refinedOthers = hr.refinementPoints().size();
+        long undrawn = (grid - hr.points().size()) + (refined - refinedEnds - refinedOthers);
         String ends = turnoffModels.isEmpty() ? "" : " Hollow markers: the " + (turnoffModels.size() == 1
                 ? "turn-off model" : turnoffModels.size() + " turn-off models") + " the isochrones end at, the "
                 + "heaviest star still on the main sequence at the age, as the refinement narrowed it.";
-        return refined == 0 ? ends : " Large markers, isochrones and mass labels: the " + grid + " grid models; small "
-                + "pale markers: the " + (refined - refinedEnds) + (refinedEnds == 0 ? "" : " other") + " models the "
-                + "transition refinement added near the transition masses." + ends;
+        return refined == 0 ? ends : " Large markers, isochrones and mass labels: the " + hr.points().size()
+                + " grid models; small pale markers: the " + refinedOthers + (refinedEnds == 0 ? "" : " other")
+                + " models the transition refinement added near the transition masses" + (undrawn == 0 ? ""
+                : " (" + undrawn + " more, past the main sequence or failed, are not drawn)") + "." + ends;
     }
 
     /** The trend if some slice has a transition or a transient core window; otherwise {@link NothingToDraw}. */

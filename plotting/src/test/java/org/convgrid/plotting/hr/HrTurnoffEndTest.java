@@ -136,7 +136,10 @@ class HrTurnoffEndTest {
         TestTracks.write(dir, rows.subList(0, MASSES.length * AGES.length), 10);
         MapEntry hr = RunMaps.plan(RunData.read(dir)).stream().filter(e -> e.fileName().startsWith("hr_"))
                 .findFirst().orElseThrow();
-        assertThat(hr.caption()).contains("the 5 other models the transition refinement added",
+        // drawn small: 1.425, 1.15 and the zero-age 0.95 Msun; not drawn: the two new models past the main
+        // sequence (1.45, 1.44375), the grid's 1.5-2.0 Msun past it at 4 Gyr and its failed 1.2 Msun
+        assertThat(hr.caption()).contains("the 3 other models the transition refinement added near the transition "
+                + "masses (9 more, past the main sequence or failed, are not drawn)",
                 "Hollow markers: the turn-off model the isochrones end at");
     }
 }
