@@ -76,16 +76,21 @@ class ZamsOriginTest {
      * this grid), so that a star's model no longer depends on the other ages asked for: the 0.06 Gyr rows move by
      * the young track's time-step error, <= 5e-5 relative in L (0.3 Msun L 0.009505463 -> 0.009505906 Lsun, R
      * 0.2980587 -> 0.2980654 Rsun, turnover_time_global_days 706.9614 -> 707.094; 1 Msun L 0.7314741 -> 0.731483
-     * Lsun), Newton iterations 74 -> 66 and 52 -> 49; zero-age rows unchanged. Frozen from our own runs (first at
-     * commit b13c164), last set 2026-12-04; our output, not published values.
+     * Lsun), Newton iterations 74 -> 66 and 52 -> 49; zero-age rows unchanged. Re-frozen when a receding central
+     * convective core came to pace the main-sequence steps (CoreRecession): the 0.3 Msun star's 3He-burning core,
+     * split from the envelope on the way to 0.06 Gyr, recedes in more, shorter steps, and its 0.06 Gyr row moves by
+     * that time-step error, <= 1.3e-4 relative (L 0.009505906 -> 0.009504736 Lsun, R 0.2980654 -> 0.2980479 Rsun,
+     * turnover_time_global_days 707.094 -> 706.7439), Newton iterations 66 -> 83; the 1 Msun rows and the zero-age
+     * rows unchanged. Frozen from our own runs (first at commit b13c164), last set 2026-12-05; our output, not
+     * published values.
      */
     private static final List<String> ROWS_BEFORE = List.of(
             "p0-z00-m000-a00,0.3,0.02,0.28,1.8,0.0,0.0,main_sequence,ok,,0.009842161,"
                     + "0.3030321,3302.592,4.952212,7392598.0,89.96434,0.6971044,,fully_convective,,,0.0,0.0,0.3,"
                     + "179.0309,3,schwarzschild,1.0,546.1236",
-            "p0-z00-m000-a01,0.3,0.02,0.28,1.8,0.0,0.06,main_sequence,ok,,0.009505906,"
-                    + "0.2980654,3301.18,4.966566,7497794.0,94.20646,0.699315,,fully_convective,,,0.0,0.0,0.3,"
-                    + "185.4479,66,schwarzschild,1.0,707.094",
+            "p0-z00-m000-a01,0.3,0.02,0.28,1.8,0.0,0.06,main_sequence,ok,,0.009504736,"
+                    + "0.2980479,3301.175,4.966617,7498201.0,94.22294,0.699315,,fully_convective,,,0.0,0.0,0.3,"
+                    + "185.4354,83,schwarzschild,1.0,706.7439",
             "p0-z00-m001-a00,1.0,0.02,0.28,1.8,0.0,0.0,main_sequence,ok,,0.7289039,0.9117284,"
                     + "5585.492,4.518337,1.34996e+07,81.93622,0.6993801,,conv_envelope,,,0.9758375,0.7312464,"
                     + "0.02416247,25.66424,21,schwarzschild,1.0,38.70925",

@@ -48,7 +48,8 @@ import org.convgrid.engine.units.Constants;
  * <p>Time steps (common practice, no single source): the fall of X_c (a rise, from mixing, is not limited) at most
  * {@link Settings#maxCentralHydrogenChange()} while X_c &gt; 0.1, at most {@link Settings#exhaustionFraction()} X_c
  * below; |D ln L| at most
- * {@link Settings#maxLuminosityChange()}; growth at most {@link Settings#maxGrowth()} per step; a step that
+ * {@link Settings#maxLuminosityChange()}; growth at most {@link Settings#maxGrowth()} per step; while X_c &gt; 0.1 a
+ * receding central convective zone paces the next step ({@link CoreRecession}); a step that
  * exceeds a limit by more than {@link #REJECTION_RATIO} is redone shorter, a failed relaxation is redone with
  * half the step, within {@link Settings#retryBudget()}. Requested ages are reached by landing a step exactly on
  * them (no interpolation). Deterministic; immutable and thread-safe (each call has its own state).
@@ -396,7 +397,10 @@ public final class MainSequenceEvolver {
                 landed.add(current);
             }
             double growth = young ? youngLimits.maxGrowth() : settings.maxGrowth();
-            double paced = young ? Math.max(ratio, pacingRatio(before, current, startDeuterium)) : ratio;
+            // on the main sequence a receding central core paces the next step (CoreRecession), while X_c > 0.1:
+            // below it the exhaustion limit already shortens the steps in which cores of the upper main sequence end
+            double paced = young ? Math.max(ratio, pacingRatio(before, current, startDeuterium))
+                    : xc > 0.1 ? Math.max(ratio, CoreRecession.ratio(before, current)) : ratio;
             double grown = h * Math.min(growth, 0.9 / Math.max(paced, 1.0e-3));
             dt = landing ? Math.max(dt, grown) : grown;
             if (arrived) {

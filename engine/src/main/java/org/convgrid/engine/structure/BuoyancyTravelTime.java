@@ -15,7 +15,8 @@ import org.convgrid.engine.convection.StructureClass;
  * and it is not: the cavity's edges are a convective zone's edge, where N^2 jumps from about zero (or a slightly
  * negative superadiabatic value) to the radiative value, or a composition step left by a receding core, which the
  * fixed mesh does not resolve. The half interval is the rule a user applying numpy's trapezoid to the profile's clipped
- * {@code buoyancy_n2_cgs} and {@code radius_cm} gets, so the two agree (1.5 Msun, Z = 0.02, 1 Gyr: 4195 s both;
+ * {@code buoyancy_n2_cgs} and {@code radius_cm} gets, so the two agree (1.5 Msun, Z = 0.02, 1 Gyr, measured before
+ * the main-sequence steps came to follow a receding core, which moved it to 4165 s: 4195 s both;
  * counting only intervals whose two ends are positive reads 4222 s, 0.6 % higher, which bounds what the rule decides).
  *
  * <p>Below the innermost point (no mesh has a point at r = 0; ours start at m/M ~ 1e-6) the integral adds N there:

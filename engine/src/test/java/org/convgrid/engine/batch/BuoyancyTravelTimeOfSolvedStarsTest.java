@@ -37,8 +37,10 @@ class BuoyancyTravelTimeOfSolvedStarsTest {
         // the same quadrature as the profile's columns give (README: 4189-4210 s at 0.9-1.1 Gyr, our own runs)
         assertThat(pi0).isCloseTo(BuoyancyTravelTime.of(star.profile().radii(), BuoyancyFrequency.squaredOf(star)),
                 within(1e-9 * pi0));
-        // non-regression: 4195.3 s, dipole 2966.5 s (measured 2026-12-05, from `star --profile` and here alike); the
-        // 5 s are a tenth of a per cent, a quarter of the 0.5 % wobble between neighbouring ages (README)
-        assertThat(pi0).isCloseTo(4195.3, within(5.0));
+        // non-regression: 4164.6 s (measured 2026-12-05 once a receding core paces the steps, CoreRecession; 4195.3
+        // s before, when the step limits x0.5 / x0.25 gave 4115.3 / 4221.0 s, now 4110.6 / 4251.6: the step error of
+        // the mu-gradient zone the receding core leaves is larger than the move); the 5 s are a tenth of a per cent,
+        // well within the wobble of up to 1.5 % between neighbouring ages (README)
+        assertThat(pi0).isCloseTo(4164.6, within(5.0));
     }
 }
