@@ -471,14 +471,20 @@ public final class RunMaps {
         // model came out past the main sequence) the grid had it
         long refinedEnds = turnoffModels.stream().filter(m -> RefinedModelIds.isRefined(m.modelId())).count();
         long refinedOthers = hr.refinementPoints().size();
-        long undrawn = (grid - hr.points().size()) + (refined - refinedEnds - refinedOthers);
+        long gridUndrawn = grid - hr.points().size();
+        long refinedUndrawn = refined - refinedEnds - refinedOthers;
         String ends = turnoffModels.isEmpty() ? "" : " Hollow markers: the " + (turnoffModels.size() == 1
                 ? "turn-off model" : turnoffModels.size() + " turn-off models") + " the isochrones end at, the "
                 + "heaviest star still on the main sequence at the age, as the refinement narrowed it.";
         return refined == 0 ? ends : " Large markers, isochrones and mass labels: the " + hr.points().size()
-                + " grid models; small pale markers: the " + refinedOthers + (refinedEnds == 0 ? "" : " other")
-                + " models the transition refinement added near the transition masses" + (undrawn == 0 ? ""
-                : " (" + undrawn + " more, past the main sequence or failed, are not drawn)") + "." + ends;
+                + " grid models" + notDrawn(gridUndrawn) + "; small pale markers: the " + refinedOthers
+                + (refinedEnds == 0 ? "" : " other") + " models the transition refinement added near the transition "
+                + "masses" + notDrawn(refinedUndrawn) + "." + ends;
+    }
+
+    /** The clause for models of the catalogue the HR diagram leaves out, empty when it leaves none out. */
+    private static String notDrawn(long count) {
+        return count == 0 ? "" : " (" + count + " more, past the main sequence or failed, not drawn)";
     }
 
     /** The trend if some slice has a transition or a transient core window; otherwise {@link NothingToDraw}. */

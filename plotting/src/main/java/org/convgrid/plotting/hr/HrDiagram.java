@@ -88,7 +88,9 @@ public final class HrDiagram {
             lines.add(line(z, youngest, members.stream().filter(p -> ageOf.applyAsDouble(p) == youngest).toList(),
                     turnoffs, refinementPoints));
         });
-        List<HrPoint> labels = lines.isEmpty() ? List.of() : massLabels(lines.get(lines.size() / 2).points());
+        // mass labels name grid masses only: a line that ends at a turn-off model has the refinement's mass there
+        List<HrPoint> labels = lines.isEmpty() ? List.of() : massLabels(lines.get(lines.size() / 2).points().stream()
+                .filter(p -> !RefinedModelIds.isRefined(p.modelId())).toList());
         List<Double> ages = points.stream().mapToDouble(ageOf).filter(a -> onLine(ageGroups, a)).boxed().distinct()
                 .sorted().toList();
         // a track from birth starts at the catalogue's youngest age in Gyr, whatever the lines are keyed by

@@ -91,6 +91,16 @@ class HrTurnoffEndTest {
     }
 
     @Test
+    void massLabelsNameGridMassesEvenOnALineThatEndsAtTheTurnoffModel() throws Exception {
+        // without the zero-age models the youngest line is the 4 Gyr one, which ends at the refinement's 1.4375 Msun
+        List<CatalogueRow> rows = refinedRows().stream().filter(r -> r.ageGyr() > 0).toList();
+        HrDiagramData data = diagram(rows);
+        assertThat(data.zeroAgeLines()).singleElement().satisfies(l -> assertThat(l.points())
+                .extracting(HrPoint::massMsun).endsWith(1.4375));
+        assertThat(data.massLabels()).isNotEmpty().noneMatch(p -> RefinedModelIds.isRefined(p.modelId()));
+    }
+
+    @Test
     void theChartMarksTheTurnoffModelAndItsLabelNamesIt() throws Exception {
         HrDiagramData data = diagram(refinedRows());
         StyledChart chart = HrDiagramRenderer.render(data);
@@ -138,8 +148,9 @@ class HrTurnoffEndTest {
                 .findFirst().orElseThrow();
         // drawn small: 1.425, 1.15 and the zero-age 0.95 Msun; not drawn: the two new models past the main
         // sequence (1.45, 1.44375), the grid's 1.5-2.0 Msun past it at 4 Gyr and its failed 1.2 Msun
-        assertThat(hr.caption()).contains("the 3 other models the transition refinement added near the transition "
-                + "masses (9 more, past the main sequence or failed, are not drawn)",
+        assertThat(hr.caption()).contains("the 19 grid models (7 more, past the main sequence or failed, not "
+                + "drawn)", "the 3 other models the transition refinement added near the transition masses (2 more, "
+                + "past the main sequence or failed, not drawn)",
                 "Hollow markers: the turn-off model the isochrones end at");
     }
 }
