@@ -61,9 +61,13 @@ public record DrawnMaps(List<Path> written, List<ChartFailure> failures) {
             this(fileName, reason, notWritten, OlderFile.NONE);
         }
 
-        /** One line for a warning: the chart, then the reason. */
+        /** One line for a warning: the chart, the reason, and what became of an older file of its name. */
         public String describe() {
-            return "chart " + fileName + " not drawn: " + reason;
+            return "chart " + fileName + " not drawn: " + reason + switch (olderFile) {
+                case NONE -> "";
+                case REMOVED -> "; its older file in maps/ was removed, as it showed earlier data";
+                case KEPT -> "; its older file in maps/ could not be removed and shows earlier data";
+            };
         }
     }
 }

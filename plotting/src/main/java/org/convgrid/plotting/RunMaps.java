@@ -192,17 +192,19 @@ public final class RunMaps {
     private static Drawn draw(MapEntry entry, Path maps, Set<ChartFiles.VectorFormat> vectorFormats,
                               PngWriter pngWriter) {
         List<Path> written = new ArrayList<>(1 + vectorFormats.size());
-        StyledChart chart;
-        try {
-            chart = entry.chart().get();
-        } catch (RuntimeException e) {
-            // a chart library error or nothing to show: report it by chart and carry on with the others
-            return new Drawn(written, new DrawnMaps.ChartFailure(entry.fileName(), reason(e)));
-        }
         List<ChartFiles.VectorFormat> formats = vectorFormats.stream().sorted().toList();
         Path png = maps.resolve(entry.fileName());
         List<Path> files = new ArrayList<>(List.of(png));
         formats.forEach(format -> files.add(maps.resolve(entry.stem() + "." + format.extension())));
+        StyledChart chart;
+        try {
+            chart = entry.chart().get();
+        } catch (RuntimeException e) {
+            // a chart library error or nothing to show: report it by chart and carry on with the others. A file an
+            // earlier drawing left under its name shows data the tables no longer hold: it goes too (a review)
+            return new Drawn(written, new DrawnMaps.ChartFailure(entry.fileName(), reason(e), false,
+                    removeOlder(files)));
+        }
         try {
             pngWriter.write(chart, png);
             written.add(png);

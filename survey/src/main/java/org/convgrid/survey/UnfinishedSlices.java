@@ -75,21 +75,25 @@ public final class UnfinishedSlices {
             String key = keyOfSlice.get(t.slice());
             int have = key == null ? 0 : present.getOrDefault(key, 0);
             int wanted = key == null ? 0 : planned.getOrDefault(key, 0);
-            out.add(key == null || have >= wanted ? t : t.withNotes(note(have, wanted, manifest.shard())
+            out.add(key == null || have >= wanted ? t : t.withNotes(note(have, wanted, manifest.shard(), manifest.gridFile())
                     + (t.notes().isEmpty() ? "" : "; " + t.notes())));
         }
         return out;
     }
 
     /**
-     * The mark: how many of the slice's masses are in the catalogue, and what completes it. Its first words are
-     * fixed, for scripts to test for: {@code unfinished slice:}.
+     * The mark: how many of the slice's masses are in the catalogue, and the command that completes it (a review:
+     * "convgrid run --resume" alone is refused, it needs the grid file and the directory). The directory is the one
+     * the table is in, so it is named as such, not by a path that would tie the file to one machine. Its first words
+     * are fixed, for scripts to test for: {@code unfinished slice:}.
      *
      * @param shard the shard's label ({@code K/N}), null for the whole grid
+     * @param gridFile the grid file as the run was given it (its manifest's {@code grid_file})
      */
-    static String note(int computed, int planned, String shard) {
+    static String note(int computed, int planned, String shard, String gridFile) {
         return "unfinished slice: " + computed + " of " + planned + " masses " + (shard == null ? "" : "of shard "
-                + shard + " ") + "computed; convgrid run --resume completes it";
+                + shard + " ") + "computed; complete it with convgrid run " + gridFile + " --out <this directory>"
+                + (shard == null ? "" : " --shard " + shard) + " --resume";
     }
 
     /**
