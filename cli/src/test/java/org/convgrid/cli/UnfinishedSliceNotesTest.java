@@ -59,7 +59,7 @@ class UnfinishedSliceNotesTest {
 
         List<TransitionRow> rows = table(dir);
         assertThat(rows).hasSize(2).allSatisfy(t -> assertThat(t.notes())
-                .startsWith(MARK + "20 of 39 masses computed; complete it with convgrid run " + grid() + " --out <this directory> --resume"));
+                .startsWith(MARK + "20 of 39 masses computed; complete it with convgrid run " + grid() + " --out DIR --resume (DIR: the directory of this table)"));
         // the column order and the CSV stay readable: the same header as a complete run's table
         String header = Files.readAllLines(dir.resolve("transitions.csv")).get(0);
 
@@ -107,12 +107,12 @@ class UnfinishedSliceNotesTest {
 
         assertThat(run("plot", dir.toString()).code()).isZero();
         assertThat(Files.readString(dir.resolve("report.html")))
-                .contains(MARK + "20 of 39 masses computed; complete it with convgrid run " + grid() + " --out <this directory> --resume");
+                .contains(MARK + "20 of 39 masses computed; complete it with convgrid run " + grid() + " --out DIR --resume (DIR: the directory of this table)");
 
         assertThat(run("transitions", dir.toString()).code()).isZero();
         assertThat(run("plot", dir.toString()).code()).isZero();
         assertThat(Files.readString(dir.resolve("report.html")))
-                .contains(MARK + "20 of 39 masses computed; complete it with convgrid run " + grid() + " --out <this directory> --resume");
+                .contains(MARK + "20 of 39 masses computed; complete it with convgrid run " + grid() + " --out DIR --resume (DIR: the directory of this table)");
     }
 
     /**
@@ -140,6 +140,6 @@ class UnfinishedSliceNotesTest {
                 assertThat(t.notes()).doesNotContain(MARK));
         assertThat(rows).filteredOn(t -> t.slice().zInit() == 0.02).hasSize(2).allSatisfy(t ->
                 assertThat(t.notes()).startsWith(MARK + "8 of 16 masses of shard 1/2 computed; complete it with convgrid run "
-                        + grid() + " --out <this directory> --shard 1/2 --resume"));
+                        + grid() + " --out DIR --shard 1/2 --resume (DIR: the directory of this table)"));
     }
 }

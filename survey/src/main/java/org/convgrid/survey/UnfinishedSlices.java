@@ -92,8 +92,8 @@ public final class UnfinishedSlices {
      */
     static String note(int computed, int planned, String shard, String gridFile) {
         return "unfinished slice: " + computed + " of " + planned + " masses " + (shard == null ? "" : "of shard "
-                + shard + " ") + "computed; complete it with convgrid run " + gridFile + " --out <this directory>"
-                + (shard == null ? "" : " --shard " + shard) + " --resume";
+                + shard + " ") + "computed; complete it with convgrid run " + gridFile + " --out DIR"
+                + (shard == null ? "" : " --shard " + shard) + " --resume (DIR: the directory of this table)";
     }
 
     /**
