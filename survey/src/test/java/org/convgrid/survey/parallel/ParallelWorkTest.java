@@ -125,6 +125,7 @@ class ParallelWorkTest {
                 1, List.of(),
                 2, List.of(new SharedStep("b1", () -> order.add("b1")), new SharedStep("b2", () -> order.add("b2"))));
         CountDownLatch allAdded = new CountDownLatch(1);
+        CountDownLatch holding = new CountDownLatch(1);
         Iterator<Integer> tasks = List.of(-1, 0, 1, 2).iterator();
         // the scheduler asks for the next task only after it has added the last one: the moment every task is queued
         Iterator<Integer> signalling = new Iterator<>() {
@@ -139,7 +140,13 @@ class ParallelWorkTest {
 
             @Override
             public Integer next() {
-                return tasks.next();
+                int next = tasks.next();
+                if (next == 0) {
+                    // the rest only once task -1 holds the thread: a worker that started late (under load) found a1
+                    // already queued beside task -1 and, a step going before any task, ran it before b1 was added
+                    await(holding);
+                }
+                return next;
             }
         };
         try (ParallelWork work = new ParallelWork(1)) {
@@ -147,6 +154,7 @@ class ParallelWorkTest {
             // runs next (a pause after the last chain was named raced the adding thread under load)
             work.forEachInOrder(signalling, t -> t < 0 ? List.of() : chains.get(t), t -> {
                 if (t < 0) {
+                    holding.countDown();
                     await(allAdded);
                 } else {
                     order.add("task " + t);
