@@ -21,9 +21,10 @@ import org.junit.jupiter.api.condition.EnabledIfSystemProperty;
  * (-Dprobe.masses=0.5,0.6, Msun) at -Dprobe.z to -Dprobe.endMyr, with a model landed at -Dprobe.atMyr; prints
  * the convective core's onset and end (life events), and at the landed age the core's top (the interpolated
  * Schwarzschild crossing), the last convective and first radiative points around it, the points inside, the
- * central nabla_rad/nabla_ad, 3He and X, and the steps. -Dprobe.everyMyr lands a step on every multiple of it
- * (a cap on the step). With -Dprobe.history=true, every step's (from the first with L_nuc/L at its zero-age value)
- * length, core top and centre. Run with -Dconvgrid.probe=true.
+ * central nabla_rad/nabla_ad, 3He and X, and the steps and their Newton iterations, and how the track ended.
+ * -Dprobe.everyMyr lands a step on every multiple of it (a cap on the step). With -Dprobe.history=true, every
+ * step's (from the first with L_nuc/L at its zero-age value) length, core top and centre. Run with
+ * -Dconvgrid.probe=true.
  */
 @EnabledIfSystemProperty(named = "convgrid.probe", matches = "true")
 class SmallCoreConvergenceProbe {
@@ -67,10 +68,13 @@ class SmallCoreConvergenceProbe {
                         at = Math.abs(a.age() - atMyr * BirthTracks.MYR) < 1.0 ? a.model() : at;
                     }
                     System.out.printf("%s: ZAMS %.1f Myr, core onset %.1f Myr, end %.1f Myr; at %.0f Myr %s;"
-                                    + " %d steps, %.0f s%n", tag, e.zeroAgeMainSequence() / BirthTracks.MYR,
+                                    + " %d steps, %d Newton iterations, %.0f s; ended %s at %.0f Myr %s%n", tag,
+                            e.zeroAgeMainSequence() / BirthTracks.MYR,
                             e.convectiveCoreOnset() / BirthTracks.MYR, e.convectiveCoreEnd() / BirthTracks.MYR,
                             atMyr, at == null ? "none" : describe(at), result.steps().size(),
-                            (System.nanoTime() - t0) * 1e-9);
+                            result.steps().stream().mapToInt(st -> st.iterations()).sum(),
+                            (System.nanoTime() - t0) * 1e-9, result.end(), result.endAge() / BirthTracks.MYR,
+                            result.detail());
                 }
             }
         }
