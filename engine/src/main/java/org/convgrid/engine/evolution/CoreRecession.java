@@ -43,14 +43,8 @@ final class CoreRecession {
     static double ratio(StellarModel before, StellarModel after) {
         double a = centralZoneTop(before);
         double b = centralZoneTop(after);
-        return a > b && !fullyConvective(after) ? (a - b) / Math.max(a, SIZE_FLOOR) / MAX_RELATIVE_RECESSION : 0.0;
-    }
-
-    /** Whether one zone runs from the centre to the surface layers. */
-    private static boolean fullyConvective(StellarModel model) {
-        List<ConvectiveZone> zones = model.convection().zones();
-        return !zones.isEmpty() && zones.get(0).innerMassFraction() == 0.0
-                && zones.get(0).outerMassFraction() >= SurfaceComposition.ENVELOPE_TOP;
+        return a > b && !FullyConvectiveMesh.holds(after)
+                ? (a - b) / Math.max(a, SIZE_FLOOR) / MAX_RELATIVE_RECESSION : 0.0;
     }
 
     /**
