@@ -19,7 +19,8 @@ import org.convgrid.engine.structure.StellarModel;
  * choice, measured; common practice limits the change of the convective boundaries per step in some form, no single
  * source): with 0.05 the ends are 1.14 Gyr (0.5 Msun) and 0.42 Gyr (0.6 Msun), and at Z = 0.008 1.55 and 0.54 Gyr
  * against 1.43 and 0.52 with 3.1 Myr steps; 0.025 gave 1.10 / 0.41 / 1.48 / 0.52 Gyr for a third more steps (250
- * instead of 186 to 8 Gyr; 126 without the pacing). Growth is not paced: a core that reaches a richer zone takes it in at once, however short the step.
+ * instead of 186 to 8 Gyr; 126 without the pacing). Growth is not paced: a core that reaches a richer zone takes it in
+ * at once, however short the step.
  * Stateless.
  */
 final class CoreRecession {
