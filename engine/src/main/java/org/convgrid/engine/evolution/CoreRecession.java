@@ -20,7 +20,10 @@ import org.convgrid.engine.structure.StellarModel;
  * source): with 0.05 the ends are 1.14 Gyr (0.5 Msun) and 0.42 Gyr (0.6 Msun), and at Z = 0.008 1.55 and 0.54 Gyr
  * against 1.43 and 0.52 with 3.1 Myr steps; 0.025 gave 1.10 / 0.41 / 1.48 / 0.52 Gyr for a third more steps (250
  * instead of 186 to 8 Gyr; 126 without the pacing). Growth is not paced: a core that reaches a richer zone takes it in
- * at once, however short the step.
+ * at once, however short the step. Pacing growth as well (3.5 % per step, tried 2026-12-05) brought the merge and
+ * split ages of 0.34-0.35 Msun stars, whose core joins the envelope and splits off again, within 2-7 % of those with
+ * 3.1 Myr steps, but took 0.34 Msun from 126 to 580 steps to 8 Gyr, and a core top that jitters (decaying overshoot)
+ * shrank the steps until the step budget ran out; the README states those cycles' step dependence instead.
  * Stateless.
  */
 final class CoreRecession {
