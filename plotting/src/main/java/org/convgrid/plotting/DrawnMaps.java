@@ -56,11 +56,6 @@ public record DrawnMaps(List<Path> written, List<ChartFailure> failures) {
             this(fileName, reason, false, OlderFile.NONE);
         }
 
-        /** A chart that could not be drawn or written, with no older file of its name in question. */
-        public ChartFailure(String fileName, String reason, boolean notWritten) {
-            this(fileName, reason, notWritten, OlderFile.NONE);
-        }
-
         /** One line for a warning: the chart, the reason, and what became of an older file of its name. */
         public String describe() {
             return "chart " + fileName + " not drawn: " + reason + switch (olderFile) {
