@@ -14,6 +14,7 @@ package org.convgrid.grids;
 public record ModelIdFormat(int physicsWidth, int metallicityWidth, int massWidth, int ageWidth) {
 
     private static final String AGE_SEPARATOR = "-a";
+    private static final String MASS_SEPARATOR = "-m";
 
     /** The format for axes of the given sizes. */
     public static ModelIdFormat forAxes(int physics, int metallicities, int masses, int ages) {
@@ -28,7 +29,7 @@ public record ModelIdFormat(int physicsWidth, int metallicityWidth, int massWidt
     /** The id of one evolution track (one mass, metallicity and physics; all ages). */
     public String trackId(int physics, int metallicity, int mass) {
         return "p" + pad(physics, physicsWidth) + "-z" + pad(metallicity, metallicityWidth)
-                + "-m" + pad(mass, massWidth);
+                + MASS_SEPARATOR + pad(mass, massWidth);
     }
 
     /** The track id of a model id: the id without its age part. */
@@ -38,6 +39,20 @@ public record ModelIdFormat(int physicsWidth, int metallicityWidth, int massWidt
             throw new IllegalArgumentException("'" + modelId + "' has no age part");
         }
         return modelId.substring(0, cut);
+    }
+
+    /**
+     * A grid model's id without its mass part ({@code p0-z01-a02} of {@code p0-z01-m023-a02}): the same for every
+     * mass of one slice (physics, metallicity and age). Null for an id with no mass part before its age part (a
+     * refinement model's {@code -r<n>-} names no grid mass).
+     */
+    public static String sliceIdOf(String modelId) {
+        int age = modelId.lastIndexOf(AGE_SEPARATOR);
+        int mass = age < 0 ? -1 : modelId.lastIndexOf(MASS_SEPARATOR, age);
+        if (mass < 0) {
+            return null;
+        }
+        return modelId.substring(0, mass) + modelId.substring(age);
     }
 
     private static int width(int size, int minimum) {

@@ -82,6 +82,14 @@ class GridSpecTest {
     }
 
     @Test
+    void sliceIdIsTheModelIdWithoutItsMass() {
+        assertThat(ModelIdFormat.sliceIdOf("p0-z01-m023-a02")).isEqualTo("p0-z01-a02");
+        assertThat(ModelIdFormat.sliceIdOf("p0-z01-m999-a02")).isEqualTo(ModelIdFormat.sliceIdOf("p0-z01-m000-a02"));
+        assertThat(ModelIdFormat.sliceIdOf("p0-z01-r007-a02")).as("a refinement id names no grid mass").isNull();
+        assertThat(ModelIdFormat.sliceIdOf("p0-z01-m023")).as("a track id has no age").isNull();
+    }
+
+    @Test
     void trackIdIsTheModelIdWithoutItsAge() {
         assertThat(ModelIdFormat.trackIdOf("p0-z01-m023-a02")).isEqualTo("p0-z01-m023");
         assertThat(ModelIdFormat.forAxes(12, 1, 1000, 1).modelId(3, 0, 999, 0)).isEqualTo("p03-z00-m999-a00");

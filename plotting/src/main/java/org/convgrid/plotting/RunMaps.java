@@ -1,13 +1,18 @@
 package org.convgrid.plotting;
 
 import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.TreeMap;
+import java.util.stream.Collectors;
 import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueRow;
@@ -95,7 +100,7 @@ public final class RunMaps {
             return false;
         }
         String extension = name.substring(dot + 1);
-        boolean chartFormat = extension.equals("png") || java.util.Arrays.stream(ChartFiles.VectorFormat.values())
+        boolean chartFormat = extension.equals("png") || Arrays.stream(ChartFiles.VectorFormat.values())
                 .anyMatch(f -> f.extension().equals(extension));
         return chartFormat && CHART_FILE_KINDS.contains(name.substring(0, kindEnd));
     }
@@ -151,7 +156,7 @@ public final class RunMaps {
                 Path former = maps.resolve(stem + "." + extension);
                 if (!written.contains(former)) {
                     try {
-                        java.nio.file.Files.deleteIfExists(former);
+                        Files.deleteIfExists(former);
                     } catch (IOException e) {
                         // a stale chart that cannot be removed is only clutter: the report links the new one
                     }
@@ -232,11 +237,11 @@ public final class RunMaps {
     private static DrawnMaps.ChartFailure.OlderFile removeOlder(List<Path> files) {
         DrawnMaps.ChartFailure.OlderFile result = DrawnMaps.ChartFailure.OlderFile.NONE;
         for (Path file : files) {
-            if (!java.nio.file.Files.isRegularFile(file, java.nio.file.LinkOption.NOFOLLOW_LINKS)) {
+            if (!Files.isRegularFile(file, LinkOption.NOFOLLOW_LINKS)) {
                 continue;
             }
             try {
-                java.nio.file.Files.delete(file);
+                Files.delete(file);
                 if (result == DrawnMaps.ChartFailure.OlderFile.NONE) {
                     result = DrawnMaps.ChartFailure.OlderFile.REMOVED;
                 }
@@ -302,7 +307,7 @@ public final class RunMaps {
             if (run.transitions().stream().anyMatch(t -> PhysicsKey.of(t.slice()).equals(p))) {
                 String x = TransitionTrendRenderer.inIron(run.transitions().stream()
                         .filter(t -> PhysicsKey.of(t.slice()).equals(p)).map(t -> t.slice().zInit())
-                        .collect(java.util.stream.Collectors.toSet()), names) ? "[Fe/H]" : "Z";
+                        .collect(Collectors.toSet()), names) ? "[Fe/H]" : "Z";
                 entries.add(new MapEntry(TRENDS_FILES + "_" + p.fileStem() + ".png", MapEntry.TRENDS,
                         "Transition masses against " + x + " (the ages drawn slightly apart at each " + x
                                 + ", youngest left): shaded boxes span the two models that bracket each value, "
@@ -451,7 +456,7 @@ public final class RunMaps {
         if (!diagram.points().isEmpty()) {
             return diagram;
         }
-        Map<String, Long> byStatus = new java.util.TreeMap<>();
+        Map<String, Long> byStatus = new TreeMap<>();
         rows.stream().filter(r -> PhysicsKey.of(r).equals(diagram.physics()))
                 .forEach(r -> byStatus.merge(r.status().label(), 1L, Long::sum));
         List<String> counts = byStatus.entrySet().stream().map(e -> e.getValue() + " " + e.getKey()).toList();

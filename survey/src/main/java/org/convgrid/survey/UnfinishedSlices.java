@@ -10,6 +10,7 @@ import org.convgrid.engine.batch.Shard;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.grids.GridFileException;
 import org.convgrid.grids.GridSpec;
+import org.convgrid.grids.ModelIdFormat;
 import org.convgrid.grids.yaml.GridFileReader;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.manifest.RunManifest;
@@ -55,7 +56,7 @@ public final class UnfinishedSlices {
         Map<String, Integer> planned = new HashMap<>();
         Set<String> plannedIds = new HashSet<>();
         for (ModelRequest r : new ShardPlan(grid, shard, GridRun.MASSES_PER_CHUNK)) {
-            String key = sliceKey(r.modelId());
+            String key = ModelIdFormat.sliceIdOf(r.modelId());
             if (key != null) {
                 planned.merge(key, 1, Integer::sum);
                 plannedIds.add(r.modelId());
@@ -64,7 +65,7 @@ public final class UnfinishedSlices {
         Map<String, Integer> present = new HashMap<>();
         Map<Slice, String> keyOfSlice = new HashMap<>();
         for (CatalogueRow row : catalogue) {
-            String key = sliceKey(row.modelId());
+            String key = ModelIdFormat.sliceIdOf(row.modelId());
             if (key != null && plannedIds.contains(row.modelId())) {
                 present.merge(key, 1, Integer::sum);
                 keyOfSlice.putIfAbsent(Slice.of(row), key);
@@ -94,18 +95,5 @@ public final class UnfinishedSlices {
         return "unfinished slice: " + computed + " of " + planned + " masses " + (shard == null ? "" : "of shard "
                 + shard + " ") + "computed; complete it with convgrid run " + gridFile + " --out DIR"
                 + (shard == null ? "" : " --shard " + shard) + " --resume (DIR: the directory of this table)";
-    }
-
-    /**
-     * A grid model's id without its mass part ({@code p0-z01-a02} of {@code p0-z01-m023-a02}): the same for every
-     * mass of one slice. Null for an id that names no grid mass (a refinement model's {@code -r<n>-}).
-     */
-    static String sliceKey(String modelId) {
-        int age = modelId.lastIndexOf("-a");
-        int mass = modelId.lastIndexOf("-m", age);
-        if (age < 0 || mass < 0) {
-            return null;
-        }
-        return modelId.substring(0, mass) + modelId.substring(age);
     }
 }
