@@ -5,6 +5,9 @@ import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.Collectors;
 import org.convgrid.engine.convection.ConvectiveZoneFinder;
 import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.engine.request.ModelStatus;
@@ -81,6 +84,10 @@ public record TransitionFinder(double coreMassFractionThreshold) {
 
     /** The words of the note {@link #COOL_CORE_CNO_SHARE} adds, by which a reader of the notes finds it. */
     public static final String COOL_CORES_WORDS = "too cool for the CNO cycle";
+    /** How the notes introduce the other windows of cores ({@link #otherWindowsNoted} reads them back). */
+    private static final String OTHER_WINDOWS_WORDS = ", others at ";
+    private static final Pattern OTHER_WINDOWS = Pattern.compile(Pattern.quote(OTHER_WINDOWS_WORDS)
+            + "([0-9.]+(?:-[0-9.]+)?(?:, [0-9.]+(?:-[0-9.]+)?)*) Msun");
 
     /** What drives such cores, in the notes and the charts' caveat alike. */
     public static final String COOL_CORES_CAUSE = "out-of-equilibrium burning drives them (3He on the main sequence, "
@@ -277,9 +284,29 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         if (run != null) {
             runs.add(run);
         }
-        return runs.isEmpty() ? "" : ", others at " + runs.stream().map(s -> s.lo() == s.hi()
+        return runs.isEmpty() ? "" : OTHER_WINDOWS_WORDS + runs.stream().map(s -> s.lo() == s.hi()
                 ? CsvNumbers.format(s.lo()) : CsvNumbers.format(s.lo()) + "-" + CsvNumbers.format(s.hi()))
-                .collect(java.util.stream.Collectors.joining(", ")) + " Msun";
+                .collect(Collectors.joining(", ")) + " Msun";
+    }
+
+    /**
+     * The other windows of cores a slice's notes name ({@link #otherWindows}: cored runs above the transient window
+     * and below the lasting core), read back so that a chart can draw them beside the reported window; empty when
+     * the notes name none. The demo's Z = 0.014, 600 Myr slice reports 0.314-0.323 Msun and names 0.3266-0.575
+     * behind one coreless model at 0.325.
+     */
+    public static List<Span> otherWindowsNoted(String notes) {
+        Matcher m = OTHER_WINDOWS.matcher(notes);
+        if (!m.find()) {
+            return List.of();
+        }
+        List<Span> out = new ArrayList<>();
+        for (String part : m.group(1).split(", ")) {
+            String[] ends = part.split("-");
+            double lo = Double.parseDouble(ends[0]);
+            out.add(new Span(lo, ends.length == 1 ? lo : Double.parseDouble(ends[1])));
+        }
+        return out;
     }
 
     /**

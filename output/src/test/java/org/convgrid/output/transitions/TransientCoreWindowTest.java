@@ -73,6 +73,16 @@ class TransientCoreWindowTest {
         TransitionRow noLastingCore = finder.find(List.of(ok(0.31, FC, 1), ok(0.3141, BOTH, 0.01),
                 ok(0.325, ENV, 0), ok(0.3266, BOTH, 0.02), ok(0.7, ENV, 0))).get(0);
         assertThat(noLastingCore.notes()).contains("others at 0.3266 Msun");
+        // read back for the charts, from the notes as written (other notes before and after them)
+        assertThat(TransitionFinder.otherWindowsNoted(t.notes()))
+                .containsExactly(new Span(0.3266, 0.6531), new Span(1.1, 1.1));
+        assertThat(TransitionFinder.otherWindowsNoted(noLastingCore.notes())).containsExactly(new Span(0.3266, 0.3266));
+        assertThat(TransitionFinder.otherWindowsNoted("unfinished slice: 8 of 10 masses computed; " + t.notes()
+                + "; fully convective bracket widened past 1 failed model"))
+                .containsExactly(new Span(0.3266, 0.6531), new Span(1.1, 1.1));
+        assertThat(TransitionFinder.otherWindowsNoted("")).isEmpty();
+        assertThat(TransitionFinder.otherWindowsNoted(finder.find(List.of(ok(0.3, FC, 1), ok(0.35, BOTH, 0.02),
+                ok(0.4, ENV, 0), ok(1.3, BOTH, 0.05))).get(0).notes())).isEmpty();
     }
 
     @Test

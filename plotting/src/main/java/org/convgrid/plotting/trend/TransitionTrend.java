@@ -33,8 +33,7 @@ public final class TransitionTrend {
         addAll(series, TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT, TransitionRow::fullyConvective, mine, ages);
         addAll(series, TransitionMarker.Kind.CONV_CORE_ONSET, TransitionRow::convCoreOnset, mine, ages);
         List<Double> zs = mine.stream().map(r -> r.slice().zInit()).distinct().sorted().toList();
-        List<TransientWindow> windows = mine.stream().filter(r -> r.transientCore() != null)
-                .map(r -> new TransientWindow(r.slice().zInit(), r.slice().ageGyr(), r.transientCore())).toList();
+        List<TransientWindow> windows = mine.stream().flatMap(r -> TransientWindow.of(r).stream()).toList();
         return new TransitionTrendData(physics, zs, series, windows, TransitionAgeTrend.coolCoreCaveats(mine, names));
     }
 
