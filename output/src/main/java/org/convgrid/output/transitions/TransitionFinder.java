@@ -11,7 +11,6 @@ import java.util.stream.Collectors;
 import org.convgrid.engine.convection.ConvectiveZoneFinder;
 import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.engine.request.ModelStatus;
-import org.convgrid.output.CsvNumbers;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueRow;
 
@@ -84,10 +83,17 @@ public record TransitionFinder(double coreMassFractionThreshold) {
 
     /** The words of the note {@link #COOL_CORE_CNO_SHARE} adds, by which a reader of the notes finds it. */
     public static final String COOL_CORES_WORDS = "too cool for the CNO cycle";
-    /** How the notes introduce the other windows of cores ({@link #otherWindowsNoted} reads them back). */
+    /**
+     * How the notes introduce the other windows of cores, after the reported one; {@link #otherWindowsNoted} reads
+     * them back. Their masses are written as {@link MassRangeText} writes them, fixed point, so that the reader needs
+     * no exponents.
+     */
+    private static final String TRANSIENT_ONE_WORDS = "; the lowest window of cores is the transient one";
     private static final String OTHER_WINDOWS_WORDS = ", others at ";
-    private static final Pattern OTHER_WINDOWS = Pattern.compile(Pattern.quote(OTHER_WINDOWS_WORDS)
-            + "([0-9.]+(?:-[0-9.]+)?(?:, [0-9.]+(?:-[0-9.]+)?)*) Msun");
+    private static final String MASS = "\\d+(?:\\.\\d+)?";
+    private static final String RANGE = MASS + "(?:-" + MASS + ")?";
+    private static final Pattern OTHER_WINDOWS = Pattern.compile(Pattern.quote(TRANSIENT_ONE_WORDS
+            + OTHER_WINDOWS_WORDS) + "(" + RANGE + "(?:, " + RANGE + ")*) Msun");
 
     /** What drives such cores, in the notes and the charts' caveat alike. */
     public static final String COOL_CORES_CAUSE = "out-of-equilibrium burning drives them (3He on the main sequence, "
@@ -237,8 +243,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         int expected = (window == null ? 0 : 2) + (coredAtTop ? 1 : 0);
         if (core.crossings().size() > expected) {
             notes.add("convective core changes " + StateCrossings.timesInWords(core.crossings().size()) + " with mass"
-                    + (window == null ? "" : "; the lowest window of cores is the transient one"
-                    + otherWindows(searched, window, core)));
+                    + (window == null ? "" : TRANSIENT_ONE_WORDS + otherWindows(searched, window, core)));
         }
         if (core.skippedInBracket() > 0) {
             notes.add("convective core bracket widened past " + SkippedModelsText.of(byMass, core.bracket()));
@@ -284,8 +289,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         if (run != null) {
             runs.add(run);
         }
-        return runs.isEmpty() ? "" : OTHER_WINDOWS_WORDS + runs.stream().map(s -> s.lo() == s.hi()
-                ? CsvNumbers.format(s.lo()) : CsvNumbers.format(s.lo()) + "-" + CsvNumbers.format(s.hi()))
+        return runs.isEmpty() ? "" : OTHER_WINDOWS_WORDS + runs.stream().map(MassRangeText::of)
                 .collect(Collectors.joining(", ")) + " Msun";
     }
 
@@ -296,8 +300,8 @@ public record TransitionFinder(double coreMassFractionThreshold) {
      * behind one coreless model at 0.325.
      */
     public static List<Span> otherWindowsNoted(String notes) {
-        Matcher m = OTHER_WINDOWS.matcher(notes);
-        if (!m.find()) {
+        Matcher m = notes == null ? null : OTHER_WINDOWS.matcher(notes);
+        if (m == null || !m.find()) {
             return List.of();
         }
         List<Span> out = new ArrayList<>();

@@ -81,8 +81,13 @@ class TransientCoreWindowTest {
                 + "; fully convective bracket widened past 1 failed model"))
                 .containsExactly(new Span(0.3266, 0.6531), new Span(1.1, 1.1));
         assertThat(TransitionFinder.otherWindowsNoted("")).isEmpty();
-        assertThat(TransitionFinder.otherWindowsNoted(finder.find(List.of(ok(0.3, FC, 1), ok(0.35, BOTH, 0.02),
-                ok(0.4, ENV, 0), ok(1.3, BOTH, 0.05))).get(0).notes())).isEmpty();
+        assertThat(TransitionFinder.otherWindowsNoted(null)).isEmpty();
+        assertThat(TransitionFinder.otherWindowsNoted("x; the lowest window of cores is the transient one, others at "
+                + ". Msun")).as("not a list of masses").isEmpty();
+        TransitionRow oneWindow = finder.find(List.of(ok(0.3, FC, 1), ok(0.35, BOTH, 0.02), ok(0.4, ENV, 0),
+                ok(1.3, BOTH, 0.05))).get(0);
+        assertThat(oneWindow.transientCore()).isEqualTo(new Span(0.35, 0.35));
+        assertThat(TransitionFinder.otherWindowsNoted(oneWindow.notes())).isEmpty();
     }
 
     @Test

@@ -22,7 +22,7 @@ public record TransientWindow(double zInit, double ageGyr, Span masses) {
      * 0.3266-0.575; drawn alone, the first made that slice look nearly free of the cores its neighbours in Z show).
      * Empty when the slice has no window.
      */
-    public static List<TransientWindow> of(TransitionRow row) {
+    public static List<TransientWindow> allOf(TransitionRow row) {
         if (row.transientCore() == null) {
             return List.of();
         }

@@ -37,7 +37,7 @@ public final class TransitionAgeTrend {
         addAll(series, TransitionMarker.Kind.CONV_CORE_ONSET, TransitionRow::convCoreOnset, mine, zs);
         addAll(series, TransitionMarker.Kind.MAIN_SEQUENCE_TURNOFF, TransitionRow::turnoff, mine, zs);
         List<Double> ages = mine.stream().map(r -> r.slice().ageGyr()).distinct().sorted().toList();
-        List<TransientWindow> windows = mine.stream().flatMap(r -> TransientWindow.of(r).stream()).toList();
+        List<TransientWindow> windows = mine.stream().flatMap(r -> TransientWindow.allOf(r).stream()).toList();
         return new TransitionAgeTrendData(physics, ages, zs, series, windows, coolCoreCaveats(mine, names));
     }
 

@@ -33,7 +33,7 @@ public final class TransitionTrend {
         addAll(series, TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT, TransitionRow::fullyConvective, mine, ages);
         addAll(series, TransitionMarker.Kind.CONV_CORE_ONSET, TransitionRow::convCoreOnset, mine, ages);
         List<Double> zs = mine.stream().map(r -> r.slice().zInit()).distinct().sorted().toList();
-        List<TransientWindow> windows = mine.stream().flatMap(r -> TransientWindow.of(r).stream()).toList();
+        List<TransientWindow> windows = mine.stream().flatMap(r -> TransientWindow.allOf(r).stream()).toList();
         return new TransitionTrendData(physics, zs, series, windows, TransitionAgeTrend.coolCoreCaveats(mine, names));
     }
 

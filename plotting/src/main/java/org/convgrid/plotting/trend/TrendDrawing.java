@@ -120,7 +120,7 @@ final class TrendDrawing {
 
     /**
      * Draws the windows as faint boxes with a dashed outline: a range of masses with small cores, not a bracket. A
-     * window of one mass (a single refinement model had a core) gets no box: a flat box would read as a range, and
+     * window of one mass (a single model, grid or refinement, had a core) gets no box: a flat box would read as a range, and
      * the square at its middle already marks the mass.
      */
     static void windows(StyledChart chart, List<Window> windows, Color color) {
