@@ -44,8 +44,8 @@ class ShardTracksTest {
                         tracks.accept(r, List.of(new TrackPoint(new EvolutionStep(0.0, 0.0, m * Constants.L_SUN,
                                 m * Constants.R_SUN, 5000.0 + m, 1.5e7, 100.0, 0.7, List.of(), 0.0, 0.1, 3),
                                 Phase.MAIN_SEQUENCE, Double.NaN, Double.NaN, Double.NaN)),
-                                new LifeEvents(1e13 * m, Double.NaN, 2e14 / m, Double.NaN, Double.NaN, 3e14 * m, Double.NaN,
-                                        Double.NaN));
+                                new LifeEvents(1e13 * m, Double.NaN, 2e14 / m, Double.NaN, Double.NaN, Double.NaN,
+                                        3e14 * m, Double.NaN, Double.NaN));
                     }
                 }
                 return out;
@@ -99,7 +99,7 @@ class ShardTracksTest {
         assertThat(events).hasSize(1 + 78);
         assertThat(events.get(0)).startsWith("track_id,mass_msun,z_init,y_init,fe_h_dex,mixing_length,overshoot_hp,"
                 + "overshoot_profile,radiative_core_myr,radiative_core_end_myr,zams_myr,conv_core_onset_myr,conv_core_end_myr,"
-                + "li_halved_myr,li_one_percent_myr,central_h_exhausted_myr,track_end_myr");
+                + "core_envelope_merge_myr,li_halved_myr,li_one_percent_myr,central_h_exhausted_myr,track_end_myr");
         assertThat(events.get(1)).startsWith("p0-z00-m000,");
         assertThat(Files.readAllBytes(work.resolve("merged/life_events.csv")))
                 .isEqualTo(Files.readAllBytes(work.resolve("single/life_events.csv")));

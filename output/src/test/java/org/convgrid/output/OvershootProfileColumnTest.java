@@ -129,7 +129,8 @@ class OvershootProfileColumnTest {
         ModelRequest first = new ModelRequest("p0-z00-m000-a00", 1.5 * Constants.M_SUN, 0.02, 0.28, 0.0,
                 physics(OvershootScheme.EXPONENTIAL, 0.016));
         LifeEventRow row = LifeEventRow.of("p0-z00-m000", first, new LifeEvents(1.0e6 * Constants.YEAR, Double.NaN,
-                Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN), 5.0e6 * Constants.YEAR);
+                Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN),
+                5.0e6 * Constants.YEAR);
         String text = LifeEventWriter.header() + LifeEventWriter.line(row, IronAbundance.DEFAULT);
         assertThat(text).startsWith("track_id,mass_msun,z_init,y_init,fe_h_dex,mixing_length,overshoot_hp,"
                 + "overshoot_profile,").contains("p0-z00-m000,1.5,0.02,0.28,0.0668,1.8,0.016,decaying,");

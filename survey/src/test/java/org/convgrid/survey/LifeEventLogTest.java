@@ -25,7 +25,7 @@ class LifeEventLogTest {
         ModelRequest first = new ModelRequest(id + "-a00", massMsun * Constants.M_SUN, 0.02, 0.28, 0.0,
                 PhysicsOptions.DEFAULT);
         return LifeEventRow.of(id, first, new LifeEvents(1.0 * MYR, Double.NaN, 30.0 * MYR, Double.NaN, Double.NaN,
-                Double.NaN, Double.NaN, exhaustedMyr * MYR), 2000.0 * MYR);
+                Double.NaN, Double.NaN, Double.NaN, exhaustedMyr * MYR), 2000.0 * MYR);
     }
 
     @Test
@@ -89,8 +89,8 @@ class LifeEventLogTest {
                 """);
         LifeEventLog.tidy(file, OvershootScheme.STEP, new IronAbundance(0.0181, true));
         assertThat(Files.readAllLines(file)).containsExactly(LifeEventWriter.header().strip(),
-                "p0-z00-m000,1.0,0.02,0.28,0.1983,1.8,0.0,uniform,1.7,,48.85,,,12.5,,,600.0",
-                "p0-z01-m000,1.0,0.0,0.2471,,1.8,0.0,uniform,1.7,,48.85,,,12.5,,,600.0");
+                "p0-z00-m000,1.0,0.02,0.28,0.1983,1.8,0.0,uniform,1.7,,48.85,,,,12.5,,,600.0",
+                "p0-z01-m000,1.0,0.0,0.2471,,1.8,0.0,uniform,1.7,,48.85,,,,12.5,,,600.0");
     }
 
     @Test

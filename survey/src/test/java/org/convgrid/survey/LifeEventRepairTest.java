@@ -34,7 +34,7 @@ class LifeEventRepairTest {
     private static LifeEventRow star(String id) {
         ModelRequest first = new ModelRequest(id + "-a00", Constants.M_SUN, 0.02, 0.28, 0.0, PhysicsOptions.DEFAULT);
         return LifeEventRow.of(id, first, new LifeEvents(1.0 * MYR, Double.NaN, 30.0 * MYR, Double.NaN, Double.NaN,
-                Double.NaN, Double.NaN, Double.NaN), 300.0 * MYR);
+                Double.NaN, Double.NaN, Double.NaN, Double.NaN), 300.0 * MYR);
     }
 
     @Test

@@ -31,6 +31,12 @@ package org.convgrid.engine.birth;
  *                          lie past the main sequence, one step after the exhaustion age, reading as a core that
  *                          outlived it. A core that vanished on the main sequence keeps the age at which it vanished,
  *                          however close to the exhaustion age
+ * @param coreEnvelopeMerge on the main sequence, a central convective zone first joins the convective envelope: the
+ *                          first model fully convective after one with both (the "convective kissing instability"
+ *                          van Saders &amp; Pinsonneault 2012, arXiv:1201.5381, found just above the fully convective
+ *                          limit, where out-of-equilibrium 3He burning grows the core until it meets the envelope);
+ *                          dated at that model (resolution: one step). The age depends on the time steps, the event's
+ *                          occurrence much less
  * @param lithiumHalved the surface 7Li first falls to half its birth value
  * @param lithiumOnePercent the surface 7Li first falls to 1 % of its birth value (the depletion that dates young
  *                          clusters by their lithium depletion boundary), interpolated in ln 7Li
@@ -38,7 +44,8 @@ package org.convgrid.engine.birth;
  *                                 sequence ({@link org.convgrid.engine.evolution.EvolutionResult#exhaustionAge()})
  */
 public record LifeEvents(double radiativeCore, double radiativeCoreEnd, double zeroAgeMainSequence,
-                         double convectiveCoreOnset, double convectiveCoreEnd, double lithiumHalved,
+                         double convectiveCoreOnset, double convectiveCoreEnd, double coreEnvelopeMerge,
+                         double lithiumHalved,
                          double lithiumOnePercent,
                          double centralHydrogenExhausted) {
 
@@ -48,7 +55,7 @@ public record LifeEvents(double radiativeCore, double radiativeCoreEnd, double z
      */
     public LifeEvents withCentralHydrogenExhausted(double age) {
         return new LifeEvents(radiativeCore, radiativeCoreEnd, zeroAgeMainSequence, convectiveCoreOnset,
-                coreEndGiven(age), lithiumHalved, lithiumOnePercent, age);
+                coreEndGiven(age), coreEnvelopeMerge, lithiumHalved, lithiumOnePercent, age);
     }
 
     /**
@@ -58,7 +65,8 @@ public record LifeEvents(double radiativeCore, double radiativeCoreEnd, double z
      */
     public LifeEvents withMainSequence(double zams, double exhaustion) {
         return new LifeEvents(radiativeCore, radiativeCoreEnd, zams, convectiveCoreOnset, convectiveCoreEnd,
-                lithiumHalved, lithiumOnePercent, centralHydrogenExhausted).withCentralHydrogenExhausted(exhaustion);
+                coreEnvelopeMerge, lithiumHalved, lithiumOnePercent, centralHydrogenExhausted)
+                .withCentralHydrogenExhausted(exhaustion);
     }
 
     /**

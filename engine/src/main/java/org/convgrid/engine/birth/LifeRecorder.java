@@ -33,6 +33,9 @@ final class LifeRecorder implements StepObserver {
      * after the models that first seemed to reach it).
      */
     private final List<double[]> cores = new ArrayList<>();
+    /** Ages of the models fully convective after one with a central convective zone and an envelope. */
+    private final List<Double> merges = new ArrayList<>();
+    private boolean lastHadCoreAndEnvelope;
     private double lithiumHalved = Double.NaN;
     private double lithiumOnePercent = Double.NaN;
     private double lastAge;
@@ -67,6 +70,14 @@ final class LifeRecorder implements StepObserver {
         } else if (Double.isNaN(fullyConvectiveSince)) {
             fullyConvectiveSince = age;
         }
+        if (fullyConvective && lastHadCoreAndEnvelope) {
+            merges.add(age);
+        }
+        // a central zone below the surface layers and at least one zone above it (the envelope): any size of
+        // central zone counts, since a 3He-driven core that meets the envelope may have been under the core threshold
+        lastHadCoreAndEnvelope = !radiativeCentre && !fullyConvective && zones.size() > 1
+                && zones.get(0).outerMassFraction() < SurfaceComposition.ENVELOPE_TOP
+                && zones.get(zones.size() - 1).outerMassFraction() >= SurfaceComposition.ENVELOPE_TOP;
         if (!rows.isEmpty()) {
             if (Double.isNaN(radiativeCore) && radiativeCentre) {
                 // the centre turns radiative when its nabla_rad falls below the stability limit: interpolated
@@ -112,8 +123,10 @@ final class LifeRecorder implements StepObserver {
             // comparisons with NaN are false: no zero-age main sequence, no model on it
             convectiveCore.observe(c[0], c[3], c[4], c[1] > 0.5, c[2] > 0.5, c[0] >= zams);
         }
+        // comparisons with NaN are false: no zero-age main sequence, no merge on it
+        double merge = merges.stream().filter(age -> age >= zams).findFirst().orElse(Double.NaN);
         return new LifeEvents(radiativeCore, radiativeCoreEnd, zams, convectiveCore.onset(), convectiveCore.end(),
-                lithiumHalved, lithiumOnePercent, Double.NaN);
+                merge, lithiumHalved, lithiumOnePercent, Double.NaN);
     }
 
     /**

@@ -26,8 +26,8 @@ class ConvectiveCoreEndTest {
 
     /** Events as {@link LifeRecorder} reports them before the evolution adds the exhaustion age. */
     private static LifeEvents recorded(double coreOnsetMyr, double coreEndMyr) {
-        return new LifeEvents(0.7 * MYR, Double.NaN, 16.6 * MYR, coreOnsetMyr * MYR, coreEndMyr * MYR, Double.NaN, Double.NaN,
-                Double.NaN);
+        return new LifeEvents(0.7 * MYR, Double.NaN, 16.6 * MYR, coreOnsetMyr * MYR, coreEndMyr * MYR, Double.NaN,
+                Double.NaN, Double.NaN, Double.NaN);
     }
 
     @Test

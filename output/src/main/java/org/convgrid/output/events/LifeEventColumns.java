@@ -19,6 +19,8 @@ public final class LifeEventColumns {
     public static final String ZAMS = "zams_myr";
     public static final String CONV_CORE_ONSET = "conv_core_onset_myr";
     public static final String CONV_CORE_END = "conv_core_end_myr";
+    /** On the main sequence, a central convective zone first joins the envelope (the star fully convective again). */
+    public static final String CORE_ENVELOPE_MERGE = "core_envelope_merge_myr";
     public static final String LI_HALVED = "li_halved_myr";
     /** The surface lithium falls to 1 % of its birth value. */
     public static final String LI_ONE_PERCENT = "li_one_percent_myr";
@@ -28,12 +30,13 @@ public final class LifeEventColumns {
     /** Every column, in the order the writer writes them. */
     public static final List<String> ALL = List.of(TRACK_ID, MASS, Z_INIT, Y_INIT, FE_H_DEX, MIXING_LENGTH,
             OVERSHOOT, OVERSHOOT_PROFILE, RADIATIVE_CORE, RADIATIVE_CORE_END, ZAMS, CONV_CORE_ONSET, CONV_CORE_END,
-            LI_HALVED, LI_ONE_PERCENT, CENTRAL_H_EXHAUSTED, TRACK_END);
+            CORE_ENVELOPE_MERGE, LI_HALVED, LI_ONE_PERCENT, CENTRAL_H_EXHAUSTED, TRACK_END);
 
     /**
      * The columns every readable table has. Tables written before {@link #CENTRAL_H_EXHAUSTED},
-     * {@link #RADIATIVE_CORE_END}, {@link #TRACK_END}, {@link #OVERSHOOT_PROFILE} and {@link #LI_ONE_PERCENT} were added
-     * lack them (read as empty); {@link #FE_H_DEX} is never read, being computed from z_init and y_init whenever a row is written.
+     * {@link #RADIATIVE_CORE_END}, {@link #TRACK_END}, {@link #OVERSHOOT_PROFILE}, {@link #LI_ONE_PERCENT} and
+     * {@link #CORE_ENVELOPE_MERGE} were added lack them (read as empty); {@link #FE_H_DEX} is never read, being
+     * computed from z_init and y_init whenever a row is written.
      */
     public static final List<String> REQUIRED = List.of(TRACK_ID, MASS, Z_INIT, Y_INIT, MIXING_LENGTH, OVERSHOOT,
             RADIATIVE_CORE, ZAMS, CONV_CORE_ONSET, CONV_CORE_END, LI_HALVED);

@@ -2,6 +2,7 @@ package org.convgrid.output.events;
 
 import static org.convgrid.output.events.LifeEventColumns.CENTRAL_H_EXHAUSTED;
 import static org.convgrid.output.events.LifeEventColumns.CONV_CORE_END;
+import static org.convgrid.output.events.LifeEventColumns.CORE_ENVELOPE_MERGE;
 import static org.convgrid.output.events.LifeEventColumns.CONV_CORE_ONSET;
 import static org.convgrid.output.events.LifeEventColumns.LI_HALVED;
 import static org.convgrid.output.events.LifeEventColumns.LI_ONE_PERCENT;
@@ -78,7 +79,8 @@ public final class LifeEventReader {
                                     ? r.get(OVERSHOOT_PROFILE) : ""),
                             n(r, RADIATIVE_CORE),
                             ifPresent(header, r, RADIATIVE_CORE_END), n(r, ZAMS), n(r, CONV_CORE_ONSET),
-                            n(r, CONV_CORE_END), n(r, LI_HALVED), ifPresent(header, r, LI_ONE_PERCENT),
+                            n(r, CONV_CORE_END), ifPresent(header, r, CORE_ENVELOPE_MERGE), n(r, LI_HALVED),
+                            ifPresent(header, r, LI_ONE_PERCENT),
                             ifPresent(header, r, CENTRAL_H_EXHAUSTED),
                             ifPresent(header, r, TRACK_END)));
                 } catch (IllegalArgumentException e) {

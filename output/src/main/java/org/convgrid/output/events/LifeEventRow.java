@@ -23,6 +23,8 @@ import org.convgrid.engine.units.Constants;
  * @param zamsMyr the zero-age main sequence is reached, Myr since birth
  * @param convCoreOnsetMyr a lasting convective core first appears, Myr since birth
  * @param convCoreEndMyr that core vanishes, Myr since birth
+ * @param coreEnvelopeMergeMyr on the main sequence, a central convective zone first joins the convective envelope,
+ *        Myr since birth (NaN in a table written before the column existed)
  * @param liHalvedMyr the surface lithium falls to half its birth value, Myr since birth
  * @param liOnePercentMyr the surface lithium falls to 1 % of its birth value, Myr since birth (NaN in a table
  *        written before the column existed)
@@ -33,7 +35,8 @@ import org.convgrid.engine.units.Constants;
 public record LifeEventRow(String trackId, double massMsun, double zInit, double yInit, double mixingLength,
                            double overshootHp, OvershootScheme overshootProfile, double radiativeCoreMyr,
                            double radiativeCoreEndMyr, double zamsMyr, double convCoreOnsetMyr,
-                           double convCoreEndMyr, double liHalvedMyr, double liOnePercentMyr,
+                           double convCoreEndMyr, double coreEnvelopeMergeMyr, double liHalvedMyr,
+                           double liOnePercentMyr,
                            double centralHExhaustedMyr,
                            double trackEndMyr) {
 
@@ -56,7 +59,8 @@ public record LifeEventRow(String trackId, double massMsun, double zInit, double
                 first.initialHelium(), first.physics().mixingLength(), first.physics().overshoot(),
                 first.physics().overshootScheme(),
                 events.radiativeCore() / MYR, events.radiativeCoreEnd() / MYR, events.zeroAgeMainSequence() / MYR,
-                events.convectiveCoreOnset() / MYR, events.convectiveCoreEnd() / MYR, events.lithiumHalved() / MYR,
+                events.convectiveCoreOnset() / MYR, events.convectiveCoreEnd() / MYR,
+                events.coreEnvelopeMerge() / MYR, events.lithiumHalved() / MYR,
                 events.lithiumOnePercent() / MYR, events.centralHydrogenExhausted() / MYR, trackEnd / MYR);
     }
 
@@ -67,6 +71,6 @@ public record LifeEventRow(String trackId, double massMsun, double zInit, double
     public LifeEventRow withOvershootProfileIfUnknown(OvershootScheme profile) {
         return overshootProfile != null ? this : new LifeEventRow(trackId, massMsun, zInit, yInit, mixingLength,
                 overshootHp, profile, radiativeCoreMyr, radiativeCoreEndMyr, zamsMyr, convCoreOnsetMyr,
-                convCoreEndMyr, liHalvedMyr, liOnePercentMyr, centralHExhaustedMyr, trackEndMyr);
+                convCoreEndMyr, coreEnvelopeMergeMyr, liHalvedMyr, liOnePercentMyr, centralHExhaustedMyr, trackEndMyr);
     }
 }

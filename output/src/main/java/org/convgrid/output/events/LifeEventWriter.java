@@ -33,8 +33,9 @@ public final class LifeEventWriter {
                 OvershootProfileCell.format(r.overshootProfile()),
                 CsvNumbers.format(r.radiativeCoreMyr()), CsvNumbers.format(r.radiativeCoreEndMyr()),
                 CsvNumbers.format(r.zamsMyr()), CsvNumbers.format(r.convCoreOnsetMyr()),
-                CsvNumbers.format(r.convCoreEndMyr()), CsvNumbers.format(r.liHalvedMyr()),
-                CsvNumbers.format(r.liOnePercentMyr()), CsvNumbers.format(r.centralHExhaustedMyr()), CsvNumbers.format(r.trackEndMyr())) + "\n";
+                CsvNumbers.format(r.convCoreEndMyr()), CsvNumbers.format(r.coreEnvelopeMergeMyr()),
+                CsvNumbers.format(r.liHalvedMyr()), CsvNumbers.format(r.liOnePercentMyr()),
+                CsvNumbers.format(r.centralHExhaustedMyr()), CsvNumbers.format(r.trackEndMyr())) + "\n";
     }
 
     /**

@@ -47,8 +47,20 @@ final class LifeEventsSection {
     static final String LEGEND = NONE + " : the event did not happen on the computed track, that is by the age in "
             + "the last column (a star of a grid that stops at 100 Myr may still reach it later).";
 
-    /** One column of the table: its words, the file's column name and the age it shows. */
-    private record Column(String words, String name, ToDoubleFunction<LifeEventRow> myr) {
+    /**
+     * One column of the table: its words, the file's column name and the age it shows; {@code onlyWhenSeen}: shown
+     * only in a table where some star has the event (a rare one, which would otherwise add an empty column to
+     * almost every run's report).
+     */
+    private record Column(String words, String name, ToDoubleFunction<LifeEventRow> myr, boolean onlyWhenSeen) {
+
+        Column(String words, String name, ToDoubleFunction<LifeEventRow> myr) {
+            this(words, name, myr, false);
+        }
+
+        boolean shownFor(List<LifeEventRow> rows) {
+            return !onlyWhenSeen || rows.stream().anyMatch(r -> Double.isFinite(myr.applyAsDouble(r)));
+        }
     }
 
     private static final List<Column> COLUMNS = List.of(
@@ -58,6 +70,8 @@ final class LifeEventsSection {
             new Column("ZAMS", LifeEventColumns.ZAMS, LifeEventRow::zamsMyr),
             new Column("convective core appears", LifeEventColumns.CONV_CORE_ONSET, LifeEventRow::convCoreOnsetMyr),
             new Column("convective core ends", LifeEventColumns.CONV_CORE_END, LifeEventRow::convCoreEndMyr),
+            new Column("core joins envelope", LifeEventColumns.CORE_ENVELOPE_MERGE,
+                    LifeEventRow::coreEnvelopeMergeMyr, true),
             new Column("surface Li halved", LifeEventColumns.LI_HALVED, LifeEventRow::liHalvedMyr),
             new Column("surface Li at 1 %", LifeEventColumns.LI_ONE_PERCENT, LifeEventRow::liOnePercentMyr),
             new Column("central H exhausted", LifeEventColumns.CENTRAL_H_EXHAUSTED,
@@ -124,13 +138,14 @@ final class LifeEventsSection {
 
     private static void group(StringBuilder b, String heading, List<LifeEventRow> rows) {
         b.append("<h3>").append(Html.escape(heading)).append("</h3>\n<table>\n<tr><th>mass / M\u2609</th>");
-        COLUMNS.forEach(c -> b.append("<th>").append(Html.escape(c.words())).append("<br><code>")
+        List<Column> columns = COLUMNS.stream().filter(c -> c.shownFor(rows)).toList();
+        columns.forEach(c -> b.append("<th>").append(Html.escape(c.words())).append("<br><code>")
                 .append(Html.escape(c.name())).append("</code></th>"));
         b.append("<th>track ends<br><code>").append(LifeEventColumns.TRACK_END).append("</code></th><th>track</th>"
                 + "</tr>\n");
         for (LifeEventRow row : rows.stream().sorted(Comparator.comparingDouble(LifeEventRow::massMsun)).toList()) {
             b.append("<tr><td class=\"num\">").append(SliceLabels.number(row.massMsun())).append("</td>");
-            COLUMNS.forEach(c -> b.append("<td class=\"num\">").append(age(c.myr().applyAsDouble(row)))
+            columns.forEach(c -> b.append("<td class=\"num\">").append(age(c.myr().applyAsDouble(row)))
                     .append("</td>"));
             b.append("<td class=\"num\">").append(Double.isFinite(row.trackEndMyr())
                     ? SliceLabels.number(row.trackEndMyr()) : "").append("</td><td>")

@@ -56,11 +56,31 @@ class LifeEventsSectionTest {
                 + "<td class=\"num\">6.18</td><td class=\"num\">\u2014</td><td class=\"num\">\u2014</td>"
                 + "<td class=\"num\">200</td>"
                 + "<td>p0-z01-m003</td></tr>");
+        // no star of the fixture has its core join its envelope: the rare event's column is left out
+        assertThat(section).doesNotContain("core_envelope_merge_myr");
         // the 0.3 Msun star at Z = 0.008 is fully convective again at 182.8686 Myr
         assertThat(section).contains("<td class=\"num\">27.47</td><td class=\"num\">182.9</td>");
         // mass order within a table: 0.1 before 0.2 before 0.3 before 1
         assertThat(section.indexOf("p0-z00-m000")).isLessThan(section.indexOf("p0-z00-m001"));
         assertThat(section.indexOf("p0-z00-m002")).isLessThan(section.indexOf("p0-z00-m003"));
+    }
+
+    @Test
+    void theCoreEnvelopeMergeColumnIsShownInATableWhereAStarHasIt(@TempDir Path dir) throws Exception {
+        Path runDir = run(dir, true);
+        Path table = runDir.resolve(RunLayout.LIFE_EVENTS);
+        List<String> lines = Files.readAllLines(table);
+        List<String> withColumn = new java.util.ArrayList<>();
+        withColumn.add(lines.get(0) + ",core_envelope_merge_myr");
+        for (String line : lines.subList(1, lines.size())) {
+            // a made-up merge for the 0.3 Msun star at Z = 0.02 only (the numbers travel, no physics)
+            withColumn.add(line + (line.startsWith("p0-z01-m002,") ? ",2965.3" : ","));
+        }
+        Files.write(table, withColumn);
+        String section = section(Files.readString(ReportPage.write(runDir)));
+        String[] tables = section.split("<table>", -1);
+        assertThat(tables[1]).as("Z = 0.008: no star merges").doesNotContain("core_envelope_merge_myr");
+        assertThat(tables[2]).contains("<code>core_envelope_merge_myr</code>", "<td class=\"num\">2965</td>");
     }
 
     @Test
