@@ -39,9 +39,10 @@ final class LifeEventsSection {
      * would claim more than the steps give.
      */
     static final String CAPTION = "Ages in Myr since birth, from " + RunLayout.LIFE_EVENTS + ", to four significant "
-            + "digits. The radiative core's return to full convection is the first evolution step that shows it, the "
-            + "other events are interpolated between two steps (but a convective core gone only in a track's last "
-            + "step, or grown out of a zone that filled the star, is dated at that step); all move with the step size: by ~1.5 % (ZAMS) to ~3 % (radiative core, lithium "
+            + "digits. The radiative core's return to full convection and a core's merge with the envelope are the "
+            + "first evolution step that shows them, the other events are interpolated between two steps (but a "
+            + "convective core gone only in a track's last step, or grown out of a zone that filled the star, is "
+            + "dated at that step); all move with the step size: by ~1.5 % (ZAMS) to ~3 % (radiative core, lithium "
             + "halved) between the default steps and a quarter of them before the ZAMS, and by up to a fraction of "
             + "a step, which reaches ~1 Gyr in old low-mass stars, after it (README).";
     static final String LEGEND = NONE + " : the event did not happen on the computed track, that is by the age in "
