@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
+import java.util.concurrent.atomic.AtomicReference;
 import org.convgrid.engine.physics.opacity.OpacityTableReader;
 import org.convgrid.engine.request.OpacityChoice;
 import org.convgrid.engine.request.ModelOutcome;
@@ -19,7 +20,7 @@ import org.convgrid.engine.units.Constants;
 import org.convgrid.engine.batch.GridRequests;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
 import org.convgrid.grids.words.MessageNumbers;
-import org.convgrid.engine.batch.StarTrackSink;
+import org.convgrid.engine.birth.LifeEvents;
 import org.convgrid.engine.request.Age;
 import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.engine.state.BirthAbundances;
@@ -184,8 +185,10 @@ final class StarCommand implements Callable<Integer> {
         ModelRequest request = new ModelRequest(id, massMsun * Constants.M_SUN, metals, y, age, options);
         Composition composition = request.age().origin() == AgeOrigin.BIRTH
                 ? BirthAbundances.of(1.0 - y - metals, metals) : ZeroAgeRequests.initialComposition(request);
-        GridRequests.Answer answer = new GridRequests(StarTrackSink.NONE, MainSequenceEvolver.Settings.DEFAULT)
-                .answers(List.of(request)).get(0);
+        // the star's life events, for the note on a core that has joined the envelope (one star, one call)
+        AtomicReference<LifeEvents> lifeEvents = new AtomicReference<>();
+        GridRequests.Answer answer = new GridRequests((first, points, events) -> lifeEvents.set(events),
+                MainSequenceEvolver.Settings.DEFAULT).answers(List.of(request)).get(0);
         ModelOutcome outcome = answer.outcome();
         if (format == OutputFormat.CSV) {
             // fe_h_dex against the Sun --fe-h-dex was measured against (the default one with --z)
@@ -200,6 +203,10 @@ final class StarCommand implements Callable<Integer> {
             StarReport.write(outcome, composition, buoyancyTravelTime, main.out());
         }
         main.out().flush();
+        String merged = mergeNote(lifeEvents.get(), outcome);
+        if (merged != null) {
+            main.err().println(merged);
+        }
         if (outcome.status() != ModelStatus.OK) {
             String what = outcome.status() == ModelStatus.PAST_MAIN_SEQUENCE ? "past the main sequence"
                     : "model " + outcome.status().label().replace('_', ' ');
@@ -217,6 +224,25 @@ final class StarCommand implements Callable<Integer> {
             main.err().println("profile: " + model.profile().size() + " shells written to " + target);
         }
         return ExitCodes.OK;
+    }
+
+    /**
+     * A note for a star whose central convective core joined its envelope on the main sequence by the model's age
+     * (life_events.csv's {@code core_envelope_merge_myr}): just above the fully convective limit the core grows,
+     * meets the envelope and splits off again (the convective kissing instability of van Saders &amp; Pinsonneault
+     * 2012, arXiv:1201.5381), and which phase a given age shows depends on the time steps; null otherwise.
+     */
+    static String mergeNote(LifeEvents events, ModelOutcome outcome) {
+        // the row's age counts from birth for a star evolved from birth, the only kind with life events
+        double ageSeconds = OutcomeRows.toRow(outcome).ageGyr() * 1.0e9 * Constants.YEAR;
+        if (events == null || !(events.coreEnvelopeMerge() <= ageSeconds)) {
+            return null;
+        }
+        return "convgrid: note: this star's central convective core joined its envelope at "
+                + MessageNumbers.format(events.coreEnvelopeMerge() / (1.0e6 * Constants.YEAR)) + " Myr, as 3He "
+                + "burning grew it (just above the fully convective limit; van Saders & Pinsonneault 2012): such a "
+                + "star can split and merge again, and whether this age shows it fully convective or with a core "
+                + "depends on the time steps (README, Limits, in detail)";
     }
 
     /**
