@@ -21,24 +21,38 @@ class CoreEnvelopeMergeTest {
 
     private static final double GYR = 1.0e9 * Constants.YEAR;
 
+    /** The life events of a star evolved from birth to 4 Gyr, where a grid whose oldest age is 4 Gyr stops it. */
     private static LifeEvents eventsTo4Gyr(double massMsun) {
         double z = 0.02;
         double y = 0.2471 + 1.5 * z;
         Composition birth = BirthAbundances.of(1.0 - y - z, z);
         var physics = StandardPhysics.create(new PhysicsOptions(1.8, 0.0, StabilityCriterion.SCHWARZSCHILD, 1.0),
                 birth);
-        return new BirthEvolution(physics, MainSequenceEvolver.Settings.DEFAULT)
-                .evolve(massMsun * Constants.M_SUN, birth, new double[] {4.0 * GYR}).events();
+        MainSequenceEvolver.Settings d = MainSequenceEvolver.Settings.DEFAULT;
+        var to4Gyr = new MainSequenceEvolver.Settings(d.maxCentralHydrogenChange(), d.exhaustionFraction(),
+                d.maxLuminosityChange(), d.maxGrowth(), d.endCentralHydrogen(), 4.0 * GYR, d.stepBudget(),
+                d.retryBudget());
+        return new BirthEvolution(physics, to4Gyr).evolve(massMsun * Constants.M_SUN, birth,
+                new double[] {4.0 * GYR}).events();
     }
 
     @Test
     void aStarJustAboveTheFullyConvectiveLimitHasItsCoreJoinTheEnvelope() {
-        // 0.35 Msun, Z = 0.02 (our limit there 0.32-0.34 Msun): the core grows and joins the envelope at 3.5 Gyr
-        // with the default steps, 2.7 Gyr with every step under 3.1 Myr (README, Limits, in detail): the age is
-        // the steps', the event is the star's
+        // 0.35 Msun, Z = 0.02 (our limit there 0.32-0.34 Msun): the core grows and joins the envelope at 2.7-3.5
+        // Gyr as the step history goes (the requested ages shape it; every step under 3.1 Myr gives 2.7 Gyr: README,
+        // Limits, in detail): the age is the steps', the event is the star's
         LifeEvents events = eventsTo4Gyr(0.35);
         assertThat(events.coreEnvelopeMerge()).isGreaterThan(events.zeroAgeMainSequence())
                 .isGreaterThan(1.0 * GYR).isLessThanOrEqualTo(4.0 * GYR);
+    }
+
+    @Test
+    void aMergeBeforeTheZeroAgeMainSequenceIsNotThisEvent() {
+        // 0.31 Msun, Z = 0.02: the core it grows while contracting joins the envelope at ~233 Myr, before its ZAMS
+        // (~315 Myr), and the star stays fully convective: that is the radiative core's end, not a main-sequence merge
+        LifeEvents events = eventsTo4Gyr(0.31);
+        assertThat(events.radiativeCoreEnd()).isLessThan(events.zeroAgeMainSequence());
+        assertThat(events.coreEnvelopeMerge()).isNaN();
     }
 
     @Test
