@@ -12,10 +12,7 @@ import org.convgrid.survey.RunLock;
 import org.convgrid.survey.UnfinishedSlices;
 import org.convgrid.survey.StaleTemporaryFiles;
 import org.convgrid.grids.words.Counts;
-import org.convgrid.plotting.DrawnMaps;
 import org.convgrid.plotting.RunData;
-import org.convgrid.plotting.RunMaps;
-import org.convgrid.plotting.report.ReportPage;
 import org.convgrid.plotting.style.ChartFiles;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -59,22 +56,10 @@ final class PlotCommand implements Callable<Integer> {
             }
             UnfinishedRunWarning.printIfUnfinished(layout, main.err());
             RunData run = withUnfinishedSlicesMarked(RunData.read(dir));
-            DrawnMaps maps = RunMaps.drawAll(run, dir, formats);
-            // charts not written are said once, in the failure below, not as one warning each
-            maps.failures().stream().filter(f -> !f.notWritten())
-                    .forEach(f -> main.err().println("convgrid: warning: " + f.describe()));
-            Path report;
-            try {
-                report = ReportPage.write(run, dir, maps.failures());
-            } catch (java.io.IOException e) {
-                // worded as run words it: one function for both
-                throw MapsAndReport.reportNotWritten(e, dir);
-            }
-            java.io.IOException unwritten = org.convgrid.plotting.UnwrittenCharts.of(maps, dir);
-            if (unwritten != null) {
-                throw unwritten;
-            }
-            main.out().println("wrote " + maps.written().size() + " charts to " + layout.maps() + " and " + report);
+            MapsAndReport.Written written = MapsAndReport.drawAndReport(run, dir, formats,
+                    warning -> main.err().println("convgrid: warning: " + warning));
+            main.out().println("wrote " + written.maps().written().size() + " charts to " + layout.maps() + " and "
+                    + written.report());
             return ExitCodes.OK;
         }
     }

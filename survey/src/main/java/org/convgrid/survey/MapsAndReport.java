@@ -35,27 +35,44 @@ public final class MapsAndReport implements RunFinisher {
     @Override
     public void finish(FinishedRun run) throws IOException {
         // read once for the charts and the report: with tracks, reading them is not small
-        RunData data = RunData.read(run.directory());
-        DrawnMaps drawn = RunMaps.drawAll(data, run.directory(), vectorFormats);
+        drawAndReport(RunData.read(run.directory()), run.directory(), vectorFormats, warnings);
+    }
+
+    /** What {@link #drawAndReport} wrote: the charts (and those not drawn), and report.html. */
+    public record Written(DrawnMaps maps, Path report) {
+    }
+
+    /**
+     * Draws every chart of {@code data} into the run directory and writes report.html: the steps of a run's end and
+     * of {@code plot} alike. A chart not drawn goes to {@code warnings}; a chart or the report not written fails
+     * with one message, once everything else was tried.
+     *
+     * @throws IOException the report or some chart could not be written
+     */
+    public static Written drawAndReport(RunData data, Path runDir, Set<ChartFiles.VectorFormat> vectorFormats,
+                                        Consumer<String> warnings) throws IOException {
+        DrawnMaps drawn = RunMaps.drawAll(data, runDir, vectorFormats);
         // charts not written are said once, in the failure below, not as one warning each
         drawn.failures().stream().filter(f -> !f.notWritten()).forEach(f -> warnings.accept(f.describe()));
+        Path report;
         try {
-            ReportPage.write(data, run.directory(), drawn.failures());
+            report = ReportPage.write(data, runDir, drawn.failures());
         } catch (IOException e) {
-            throw reportNotWritten(e, run.directory());
+            throw reportNotWritten(e, runDir);
         }
-        IOException unwritten = UnwrittenCharts.of(drawn, run.directory());
+        IOException unwritten = UnwrittenCharts.of(drawn, runDir);
         if (unwritten != null) {
             throw unwritten;
         }
+        return new Written(drawn, report);
     }
 
     /**
      * The failure of a command whose report.html could not be written ({@code e}): the reason, that the tables are
-     * complete, and what draws the charts and the report again. One wording for {@code run}, {@code merge} and
-     * {@code plot} (it had been assembled in two places).
+     * complete, and what draws the charts and the report again; {@code run}, {@code merge} and {@code plot} all
+     * reach it through {@link #drawAndReport}.
      */
-    public static IOException reportNotWritten(IOException e, Path runDir) {
+    static IOException reportNotWritten(IOException e, Path runDir) {
         return new IOException(IoMessages.reason(e) + UnwrittenCharts.afterwards(runDir), e);
     }
 }
