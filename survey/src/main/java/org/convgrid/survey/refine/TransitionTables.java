@@ -85,9 +85,11 @@ public final class TransitionTables {
         // an unfinished run's slices that lack some of their masses say so in the file itself, not on stderr alone
         List<TransitionRow> transitions = UnfinishedSlices.marked(withNotes(finder, rows, Map.of()).stream()
                 .map(t -> t.withTolerance(tolerance)).toList(), rows, manifest);
-        IronAbundance iron = ironAbundance(dir);
+        // the Sun the run's [Fe/H] is measured against: its manifest's, the default one without a manifest
+        IronAbundance iron = manifest == null ? IronAbundance.DEFAULT : manifest.ironAbundance();
         AtomicFiles.write(dir.transitions(), out -> TransitionWriter.write(transitions, iron, out));
-        return finish(new Update(transitions, rows, List.of(), 0, finished(dir, rows, transitions)), finishers);
+        return finish(new Update(transitions, rows, List.of(), 0, finished(dir, manifest, rows, transitions)),
+                finishers);
     }
 
     /**
@@ -279,20 +281,10 @@ public final class TransitionTables {
         }
     }
 
-    /** The directory for the finishers when its manifest says the run finished; null otherwise. */
-    /** The Sun the run's [Fe/H] is measured against: its manifest's, the default one without a manifest. */
-    private static IronAbundance ironAbundance(RunDirectory dir) throws IOException {
-        return Files.isRegularFile(dir.manifest())
-                ? RunManifestReader.read(Files.readString(dir.manifest())).ironAbundance() : IronAbundance.DEFAULT;
-    }
-
-    private static FinishedRun finished(RunDirectory dir, List<CatalogueRow> rows, List<TransitionRow> transitions)
-            throws IOException {
-        if (!Files.isRegularFile(dir.manifest())) {
-            return null;
-        }
-        RunManifest manifest = RunManifestReader.read(Files.readString(dir.manifest()));
-        if (manifest.finished() == null) {
+    /** The directory for the finishers when its manifest (null: none) says the run finished; null otherwise. */
+    private static FinishedRun finished(RunDirectory dir, RunManifest manifest, List<CatalogueRow> rows,
+                                        List<TransitionRow> transitions) {
+        if (manifest == null || manifest.finished() == null) {
             return null;
         }
         GridSpec grid = new GridFileReader().parse(manifest.gridFile(), manifest.gridText());
