@@ -234,12 +234,12 @@ final class StarCommand implements Callable<Integer> {
      */
     static String mergeNote(LifeEvents events, ModelOutcome outcome) {
         // the row's age counts from birth for a star evolved from birth, the only kind with life events
-        double ageSeconds = OutcomeRows.toRow(outcome).ageGyr() * 1.0e9 * Constants.YEAR;
+        double ageSeconds = OutcomeRows.toRow(outcome).ageGyr() * Constants.GYR;
         if (events == null || !(events.coreEnvelopeMerge() <= ageSeconds)) {
             return null;
         }
         return "convgrid: note: this star's central convective core joined its envelope at "
-                + MessageNumbers.format(events.coreEnvelopeMerge() / (1.0e6 * Constants.YEAR)) + " Myr, as 3He "
+                + MessageNumbers.format(1.0e3 * events.coreEnvelopeMerge() / Constants.GYR) + " Myr, as 3He "
                 + "burning grew it (just above the fully convective limit; van Saders & Pinsonneault 2012): such a "
                 + "star can split and merge again, and whether this age shows it fully convective or with a core "
                 + "depends on the time steps (README, Limits, in detail)";

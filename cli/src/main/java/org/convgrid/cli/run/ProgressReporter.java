@@ -8,10 +8,10 @@ import org.convgrid.grids.words.Counts;
 
 /**
  * Progress of a run on the error stream. On a terminal: one line redrawn in place with a carriage return (bar,
- * models done/total, rate, time left), at most
- * every {@link #REDRAW_NANOS}. A sweep's line counts the models saved, their rows written in grid order, and says
- * how many are computed: a user about to press Ctrl-C sees what it keeps (the models computed after the first
- * unfinished one are not written yet, and are lost). In a batch log: one plain line every
+ * models done/total, rate, time left), at most every {@link #REDRAW_NANOS}. A sweep's line counts the models saved,
+ * their rows written in grid order, and says how many are computed: a user about to press Ctrl-C sees what it keeps
+ * (the models computed after the first unfinished one are not written yet, and are lost). In a batch log: one plain
+ * line every
  * {@link #LOG_EVERY_NANOS} or every {@link #LOG_EVERY_PERCENT} %, whichever comes first. Called from one thread at a
  * time, once per finished chunk of models (the sweep) or per new model (the refinement, whose total is unknown: the
  * count and the rate alone, no bar, a log line every {@link #LOG_EVERY_NANOS}).
