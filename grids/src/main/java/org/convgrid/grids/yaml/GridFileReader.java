@@ -248,7 +248,7 @@ public final class GridFileReader {
      * must be above 0 (age 0 is the start model, whose details are a choice, not a result).
      */
     private static AgeAxis ages(Node node, NodeReader reader) {
-        MappingNode map = reader.mapping(node, "age");
+        MappingNode map = reader.mapping(node, "age", "; a list of ages goes under myr or gyr: age: {myr: [10, 100]}");
         if (map == null) {
             return null;
         }

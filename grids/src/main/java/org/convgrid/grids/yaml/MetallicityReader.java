@@ -35,7 +35,9 @@ final class MetallicityReader {
 
     /** The compositions, or null when the section has problems (they are recorded). */
     static List<MetallicityPoint> read(Node node, NodeReader reader) {
-        MappingNode map = reader.mapping(node, "metallicity");
+        MappingNode map = reader.mapping(node, "metallicity",
+                "; a list of Z goes under z, beside its helium: metallicity: {z: [0.014, 0.02], helium: {primordial: "
+                        + "0.2471, enrichment: 1.5}} (or y: [...], one Y per Z)");
         if (map == null) {
             return null;
         }

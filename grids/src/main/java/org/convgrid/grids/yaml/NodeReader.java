@@ -52,10 +52,19 @@ final class NodeReader {
     }
 
     MappingNode mapping(Node node, String what) {
+        return mapping(node, what, "");
+    }
+
+    /**
+     * As {@link #mapping(Node, String)}, with {@code listHint} appended when the node is a list: where a list is the
+     * natural thing to write (the masses, the ages, the Z), the message says where the list goes.
+     */
+    MappingNode mapping(Node node, String what, String listHint) {
         if (node instanceof MappingNode map) {
             return map;
         }
-        problem(node, GridProblemKind.WRONG_TYPE, what + " must be a mapping of keys to values" + got(node));
+        problem(node, GridProblemKind.WRONG_TYPE, what + " must be a mapping of keys to values" + got(node)
+                + (node instanceof SequenceNode ? listHint : ""));
         return null;
     }
 

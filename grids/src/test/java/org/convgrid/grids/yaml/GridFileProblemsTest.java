@@ -136,6 +136,27 @@ class GridFileProblemsTest {
         assertThat(found).anySatisfy(p -> assertThat(p.message()).contains("transitions refine"));
     }
 
+    @Test
+    void aListWhereASectionIsExpectedSaysWhereTheListGoes() {
+        // a list is the natural first guess for masses, Z and ages: the message shows the key it goes under
+        List<GridProblem> problems = problems("""
+                mass: [0.3, 0.5]
+                metallicity: [0.02]
+                age: [10, 100]
+                """);
+        assertThat(problems).extracting(GridProblem::message).containsExactly(
+                "mass must be a mapping of keys to values, got a list; a list of masses goes under values: "
+                        + "mass: {values: [0.3, 0.5, 1.0]}",
+                "metallicity must be a mapping of keys to values, got a list; a list of Z goes under z, beside its "
+                        + "helium: metallicity: {z: [0.014, 0.02], helium: {primordial: 0.2471, enrichment: 1.5}} "
+                        + "(or y: [...], one Y per Z)",
+                "age must be a mapping of keys to values, got a list; a list of ages goes under myr or gyr: "
+                        + "age: {myr: [10, 100]}");
+        // a value that is neither gets no hint
+        assertThat(problems("mass: 0.3\nmetallicity: {z: 0.02, y: 0.28}\n")).extracting(GridProblem::message)
+                .containsExactly("mass must be a mapping of keys to values, got '0.3'");
+    }
+
     private List<GridProblem> problems(String text) {
         GridFileException e = catchThrowableOfType(GridFileException.class, () -> reader.parse("broken.yaml", text));
         assertThat(e).as("expected problems in:%n%s", text).isNotNull();
