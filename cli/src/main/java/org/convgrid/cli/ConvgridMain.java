@@ -72,7 +72,10 @@ public final class ConvgridMain implements Runnable {
      * every subcommand.
      */
     public static CommandLine commandLine(PrintWriter out, PrintWriter err, CommandContext context) {
-        return configured(withSubcommands(SUBCOMMANDS, context), out, err);
+        CommandLine cli = withSubcommands(SUBCOMMANDS, context);
+        // `convgrid help star` as well as `convgrid star --help`; listed last in the usage
+        cli.addSubcommand(CommandLine.HelpCommand.class);
+        return configured(cli, out, err);
     }
 
     /**

@@ -37,7 +37,7 @@ final class ProbeCommand implements Callable<Integer> {
     double metals;
 
     @Option(names = "--opacity-scale", defaultValue = "1", paramLabel = "S",
-            description = "Multiplies the opacity (dimensionless; default ${DEFAULT-VALUE}).")
+            description = "Multiplies the opacity (dimensionless, above 0 and at most 100; default ${DEFAULT-VALUE}).")
     double opacityScale;
 
     @Option(names = "--format", defaultValue = "table", paramLabel = "table|csv",
@@ -48,7 +48,11 @@ final class ProbeCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         requireWithin("--temp-k", temperature, MIN_TEMPERATURE_K, MAX_TEMPERATURE_K, "K");
         requireWithin("--density-cgs", density, MIN_DENSITY_CGS, MAX_DENSITY_CGS, "g/cm^3");
-        requirePositive("--opacity-scale", opacityScale);
+        // the range star and a grid's opacity_scale allow; beyond it the opacity factor fails deep in the physics
+        if (!(opacityScale > 0 && opacityScale <= 100)) {
+            throw new UsageException("--opacity-scale must be above 0 and at most 100 (got "
+                    + MessageNumbers.format(opacityScale) + ")");
+        }
         if (!(hydrogen >= 0 && hydrogen <= 1 && metals >= 0 && metals < 0.1 && hydrogen + metals <= 1)) {
             throw new UsageException(String.format(
                     "need 0 <= X <= 1, 0 <= Z < 0.1 and X + Z <= 1; got X = %s, Z = %s", hydrogen, metals));
@@ -88,13 +92,6 @@ final class ProbeCommand implements Callable<Integer> {
         if (!(value >= low && value <= high)) {
             throw new UsageException(option + " must be from " + MessageNumbers.format(low) + " to "
                     + MessageNumbers.format(high) + " " + unit + " (got " + MessageNumbers.format(value) + ")");
-        }
-    }
-
-    private static void requirePositive(String option, double value) {
-        if (!(value > 0) || Double.isInfinite(value)) {
-            throw new UsageException(option + " must be a positive number (got " + MessageNumbers.format(value)
-                    + ")");
         }
     }
 }

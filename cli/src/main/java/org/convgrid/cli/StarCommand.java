@@ -5,6 +5,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.AtomicReference;
+import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.physics.opacity.OpacityTableReader;
 import org.convgrid.engine.request.OpacityChoice;
 import org.convgrid.engine.request.ModelOutcome;
@@ -130,7 +131,7 @@ final class StarCommand implements Callable<Integer> {
     String overshootProfile;
 
     @Option(names = "--opacity-scale", defaultValue = "1", paramLabel = "S",
-            description = "Multiplies every opacity (dimensionless; default ${DEFAULT-VALUE}).")
+            description = "Multiplies every opacity (dimensionless, above 0 and at most 100; default ${DEFAULT-VALUE}).")
     double opacityScale;
 
     @Option(names = "--opacity-table", paramLabel = "FILE",
@@ -181,14 +182,13 @@ final class StarCommand implements Callable<Integer> {
                 : TestedRange.warnings(massMsun, new MetallicityPoint(metals, y, metalsGiven.ironDex, iron(),
                         helium == null ? HeliumLaw.DEFAULT : null), age), main.err());
         TestedRange.print(OvershootAdvice.warnings(massMsun, age, options), main.err());
-        String id = String.format(java.util.Locale.ROOT, "star-m%.4f-z%.5f", massMsun, metals);
+        String id = String.format(java.util.Locale.ROOT, "star-m%.4f-z%s", massMsun, StarReport.metalsText(metals));
         ModelRequest request = new ModelRequest(id, massMsun * Constants.M_SUN, metals, y, age, options);
         Composition composition = request.age().origin() == AgeOrigin.BIRTH
                 ? BirthAbundances.of(1.0 - y - metals, metals) : ZeroAgeRequests.initialComposition(request);
         // the star's life events, for the note on a core that has joined the envelope (one star, one call)
         AtomicReference<LifeEvents> lifeEvents = new AtomicReference<>();
-        GridRequests.Answer answer = new GridRequests((first, points, events) -> lifeEvents.set(events),
-                MainSequenceEvolver.Settings.DEFAULT).answers(List.of(request)).get(0);
+        GridRequests.Answer answer = answer(request, lifeEvents);
         ModelOutcome outcome = answer.outcome();
         if (format == OutputFormat.CSV) {
             // fe_h_dex against the Sun --fe-h-dex was measured against (the default one with --z)
@@ -214,6 +214,10 @@ final class StarCommand implements Callable<Integer> {
             if (outcome.status() == ModelStatus.NOT_CONVERGED && massMsun < NEAR_BURNING_LIMIT_MSUN) {
                 main.err().println(burningLimitNote(massMsun));
             }
+            if (profile != null) {
+                main.err().println("convgrid: no profile written to " + main.context().resolve(profile)
+                        + ": there is no model to write");
+            }
             return ExitCodes.SOME_MODELS_FAILED;
         }
         if (profile != null) {
@@ -224,6 +228,24 @@ final class StarCommand implements Callable<Integer> {
             main.err().println("profile: " + model.profile().size() + " shells written to " + target);
         }
         return ExitCodes.OK;
+    }
+
+    /**
+     * The star's answer, as a grid's sweep gives it: a physics failure the engine raises while building the model
+     * (an equation of state or opacity table that cannot answer, say) is the model's status {@code failed} with
+     * the engine's reason, exit 3 like a grid with such a row, not a software failure (exit 1).
+     */
+    private static GridRequests.Answer answer(ModelRequest request, AtomicReference<LifeEvents> lifeEvents) {
+        try {
+            return new GridRequests((first, points, events) -> lifeEvents.set(events),
+                    MainSequenceEvolver.Settings.DEFAULT).answers(List.of(request)).get(0);
+        } catch (ConvgridException e) {
+            if (e.kind().isUsageError()) {
+                throw e;
+            }
+            return new GridRequests.Answer(new ModelOutcome.Failed(request, ModelStatus.FAILED, e.getMessage(),
+                    ModelOutcome.NO_MODEL_SOLVED), null);
+        }
     }
 
     /**

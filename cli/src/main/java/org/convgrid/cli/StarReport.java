@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.util.List;
 import java.util.Locale;
 import java.util.regex.Pattern;
+import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.request.Age;
 import org.convgrid.engine.request.GlobalProperties;
 import org.convgrid.engine.request.ModelOutcome;
@@ -43,13 +44,16 @@ final class StarReport {
         } else {
             title = "Zero-age model";
         }
-        out.printf(Locale.ROOT, "%s: %.4f Msun, X = %.4f, Y = %.4f, Z = %.5f (initial)%n", title,
-                r.mass() / Constants.M_SUN, composition.x(), composition.y(), composition.z());
-        out.printf(Locale.ROOT, "Physics: mixing length %.3f Hp, %s, %s, opacity x %.3g%s%n",
+        out.printf(Locale.ROOT, "%s: %.4f Msun, X = %.4f, Y = %.4f, Z = %s (initial)%n", title,
+                r.mass() / Constants.M_SUN, composition.x(), composition.y(), metalsText(composition.z()));
+        out.printf(Locale.ROOT, "Physics: mixing length %.3f Hp, %s, %s, opacity x %.3g%s%s%n",
                 r.physics().mixingLength(), org.convgrid.cli.run.OvershootWords.describe(r.physics(),
                         r.mass() / Constants.M_SUN),
                 r.physics().criterion().name().toLowerCase(Locale.ROOT), r.physics().opacityScale(),
-                r.physics().usesOpacityTable() ? " (table " + r.physics().opacityTable() + ")" : "");
+                r.physics().usesOpacityTable() ? " (table " + r.physics().opacityTable() + ")" : "",
+                // the default is not named, so the line reads as before for it
+                r.physics().atmosphere() == AtmosphereChoice.DEFAULT ? ""
+                        : ", " + r.physics().atmosphere().label() + " atmosphere");
         if (!(outcome instanceof ModelOutcome.Solved solved)) {
             out.printf(Locale.ROOT, "Status: %s (%s)%n", outcome.status().label(), detail(outcome));
             return;
@@ -108,6 +112,15 @@ final class StarReport {
      * A failed model's reason for people: "after 1 iteration", not the solver's "after 1 iterations". The
      * catalogue's status_detail keeps the solver's words, so that the file of a run does not change.
      */
+    /**
+     * Z as the header and the model id write it: five decimals, as before, down to 1e-4 (the tested range's
+     * lowest Z); below, three significant digits, so that Z = 4e-6 does not read (or name a model) as Z = 0.
+     */
+    static String metalsText(double z) {
+        return z == 0.0 || z >= 1.0e-4 ? String.format(Locale.ROOT, "%.5f", z)
+                : String.format(Locale.ROOT, "%.3g", z);
+    }
+
     static String detail(ModelOutcome outcome) {
         return ONE_ITERATION.matcher(outcome.statusDetail()).replaceAll("after 1 iteration");
     }

@@ -47,7 +47,16 @@ class ConvgridMainTest {
         CommandLine all = ConvgridMain.commandLine(new PrintWriter(new StringWriter()),
                 new PrintWriter(new StringWriter()), context(), "--verbose", "star");
         assertThat(all.getSubcommands().keySet()).containsExactly("calibrate-sun", "check", "run", "merge", "plot",
-                "probe", "star", "transitions");
+                "probe", "star", "transitions", "help");
+    }
+
+    @Test
+    void helpNamesASubcommandAsItsOwnHelpOptionDoes() {
+        // `convgrid help star` complained that --mass was missing
+        Result help = run(true, "help", "star");
+        assertThat(help.code()).as(help.err()).isZero();
+        assertThat(help.out()).isEqualTo(run(true, "star", "--help").out());
+        assertThat(run(true, "help").out()).contains("calibrate-sun", "transitions");
     }
 
     @Test

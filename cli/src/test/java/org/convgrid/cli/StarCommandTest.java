@@ -149,4 +149,36 @@ class StarCommandTest {
         assertThat(lines).anyMatch(l -> l.matches("\\s+convective envelope, base\\s+0\\.00000\\s+m/M"));
         assertThat(out.toString()).doesNotContain("1.00000 ");
     }
+
+    @Test
+    void aModelThePhysicsCannotBuildIsFailedWithExitCodeThreeAsInAGrid() {
+        // an opacity a billion times too small leaves no equation of state solution for the zero-age model: the engine
+        // raises it while building, and a grid marks the model failed (exit 3); star said so with exit 1 and no row
+        int code = run("star", "--mass", "1", "--z", "0.02", "--opacity-scale", "1e-9", "--format", "csv",
+                "--profile", "p.csv");
+        assertThat(code).as(err.toString()).isEqualTo(3);
+        String[] lines = out.toString().lines().filter(l -> !l.startsWith("#")).toArray(String[]::new);
+        assertThat(lines).hasSize(2);
+        List<String> header = Arrays.asList(lines[0].split(","));
+        List<String> row = Arrays.asList(lines[1].split(",", -1));
+        assertThat(row.get(header.indexOf("status"))).isEqualTo("failed");
+        assertThat(row.get(header.indexOf("status_detail"))).isNotEmpty();
+        assertThat(err.toString()).contains("convgrid: model failed: ").contains("no profile written");
+        assertThat(dir.resolve("p.csv")).doesNotExist();
+    }
+
+    @Test
+    void aTinyZIsWrittenWithItsDigitsAndANonDefaultAtmosphereIsNamed() {
+        // Z = 4e-6 read "Z = 0.00000" and named the model as Z = 0 would be
+        assertThat(StarReport.metalsText(4e-6)).isEqualTo("4.00e-06");
+        assertThat(StarReport.metalsText(0.0)).isEqualTo("0.00000");
+        assertThat(StarReport.metalsText(1e-4)).isEqualTo("0.00010");
+        assertThat(StarReport.metalsText(0.0188)).isEqualTo("0.01880");
+        int code = run("star", "--mass", "1", "--z", "0.02", "--atmosphere", "eddington");
+        assertThat(code).as(err.toString()).isZero();
+        assertThat(out.toString()).contains(", eddington atmosphere\n");
+        out.getBuffer().setLength(0);
+        assertThat(run("star", "--mass", "1", "--z", "0.02")).isZero();
+        assertThat(out.toString()).doesNotContain("atmosphere");
+    }
 }

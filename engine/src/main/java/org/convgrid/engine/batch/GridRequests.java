@@ -304,8 +304,11 @@ public final class GridRequests implements ChunkSolver {
         }
         String detail = aged.detail();
         if (aged.status() == ModelStatus.PAST_MAIN_SEQUENCE && Double.isFinite(result.exhaustionAge())) {
-            detail = String.format(Locale.ROOT, "core hydrogen exhausted (X_c < %.1e) at %.4g Gyr",
-                    settings.endCentralHydrogen(), result.exhaustionAge() / Constants.GYR);
+            // the evolution's clock starts where the request's age does: say which, as a zams-origin age and one
+            // since birth differ by the pre-main sequence
+            detail = String.format(Locale.ROOT, "core hydrogen exhausted (X_c < %.1e) at %.4g Gyr %s",
+                    settings.endCentralHydrogen(), result.exhaustionAge() / Constants.GYR,
+                    request.age().origin() == AgeOrigin.BIRTH ? "since birth" : "since the zero-age main sequence");
         }
         return new Answer(failed(request, aged.status(), detail), null);
     }

@@ -101,7 +101,7 @@ public final class CatalogueColumns {
                     "local convective turnover time alpha H_P / v_c of the envelope, half a pressure scale height"
                             + " above its base but no higher than its radial midpoint; at r = R/2 when fully"
                             + " convective; empty when none"),
-            new EcsvColumn(SOLVER_ITERATIONS, "", "int64", "Newton iterations for this model"),
+            new EcsvColumn(SOLVER_ITERATIONS, "", "int64", "Newton iterations for this model (an evolved one: every step from its start model to its age)"),
             new EcsvColumn(CRITERION, "", TEXT, "convective stability criterion: schwarzschild or ledoux"),
             new EcsvColumn(OPACITY_SCALE, "", REAL, "factor applied to every opacity (1 = as published)"),
             new EcsvColumn(TURNOVER_TIME_GLOBAL_DAYS, "d", REAL,
@@ -113,8 +113,9 @@ public final class CatalogueColumns {
                             + " own top without overshoot; empty when no core"),
             new EcsvColumn(OVERSHOOT_PROFILE, "", TEXT,
                     "what overshoot_hp is the length of: uniform (alpha_ov for every star), uniform-ramped (alpha_ov"
-                            + " from 2 solMass up, none up to 1.2 solMass, linear between) or decaying (f, the"
-                            + " e-folding length of the diffusive profile); empty in rows written before the column"));
+                            + " from 2 solMass up, none up to 1.2 solMass, linear between) or decaying (f: the mixing's"
+                            + " diffusion coefficient falls as exp(-2 z / (f H_P)), e-folding over f H_P / 2); empty in"
+                            + " rows written before the column"));
 
     /** The columns after {@link #FE_H_DEX}, in order. */
     private static final List<EcsvColumn> AFTER_FE_H = List.of(
