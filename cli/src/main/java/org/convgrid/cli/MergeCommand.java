@@ -46,8 +46,8 @@ final class MergeCommand implements Callable<Integer> {
         FinishedRun run;
         try (RunLock lock = RunLock.acquire(target.root())) {
             Locks.reportStale(lock, parent.err());
-            run = new ShardMerger(ToolVersion.current(), ToolVersion.commit(), Clock.tickSeconds(java.time.ZoneOffset.UTC))
-                    .merge(dirs, target, context.finishers());
+            run = new ShardMerger(ToolVersion.current(), ToolVersion.commit(), Clock.tickSeconds(java.time.ZoneOffset.UTC),
+                    context.solvers().writesTracks()).merge(dirs, target, context.finishers());
         }
         Map<ModelStatus, Long> counts = RunFinishing.countByStatus(run.catalogue());
         parent.out().println(target.root() + ": merged " + Counts.of(dirs.size(), "shard directory",

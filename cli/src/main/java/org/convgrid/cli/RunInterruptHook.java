@@ -73,7 +73,9 @@ final class RunInterruptHook implements AutoCloseable {
             // not in it; a review found their tracks on disk and took them for kept
             return "convgrid: interrupted: " + left.rows() + " of " + Counts.of(left.expected(), "model") + " in "
                     + RunLayout.CATALOGUE + " (models finished out of grid order are not kept); continue with: "
-                    + "convgrid run " + shellWord(grid) + " --out " + shellWord(out) + " --resume";
+                    + "convgrid run " + shellWord(grid) + " --out " + shellWord(out) + " --resume"
+                    // a run without refinement continues without it (a review followed the line and got a refinement)
+                    + (refines ? "" : " --no-refine");
         }
         // the sweep and its manifest were complete: what was cut short is the refinement or the charts
         return "convgrid: interrupted after the sweep: all " + Counts.of(left.expected(), "model") + " in "

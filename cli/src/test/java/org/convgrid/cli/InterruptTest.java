@@ -82,7 +82,7 @@ class InterruptTest {
         List<String> err = text("child.err").lines().toList();
         assertThat(err).containsExactly("convgrid: interrupted: " + kept + " of " + CliHarness.GRID_MODELS
                 + " models in catalogue.ecsv (models finished out of grid order are not kept); continue with: "
-                + "convgrid run " + grid + " --out '" + dir + "' --resume");
+                + "convgrid run " + grid + " --out '" + dir + "' --resume --no-refine");
         String yaml = Files.readString(dir.resolve("manifest.yaml"));
         assertThat(yaml).doesNotContainIgnoringCase("nan");
         RunManifest manifest = RunManifestReader.read(yaml);

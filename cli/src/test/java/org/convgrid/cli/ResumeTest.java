@@ -92,6 +92,42 @@ class ResumeTest {
     }
 
     /**
+     * A resume of a finished run that has rows to compute again says the run is unfinished before it changes
+     * anything: a review killed such a resume outright (kill -9) after it had cut the catalogue back, and the manifest
+     * still said finished, with the old counts, beside the shorter catalogue.
+     */
+    @Test
+    void whileAResumeComputesTheManifestDoesNotSayTheRunFinished() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        byte[] whole = uninterrupted(grid, "1");
+        Path manifest = work.resolve("whole/manifest.yaml");
+        assertThat(Files.readString(manifest)).doesNotContain("finished: null");
+        String text = new String(whole, StandardCharsets.UTF_8);
+        int cut = 0;
+        for (int line = 0; line < 40 + CliHarness.CATALOGUE_HEADER_LINES; line++) {
+            cut = text.indexOf('\n', cut) + 1;
+        }
+        Files.write(work.resolve("whole/catalogue.ecsv"), java.util.Arrays.copyOf(whole, cut));
+        List<String> seenWhileComputing = new java.util.concurrent.CopyOnWriteArrayList<>();
+        FakeChunkSolver fake = FakeChunkSolver.fast();
+        org.convgrid.engine.batch.ChunkSolver watching = chunk -> {
+            try {
+                seenWhileComputing.add(Files.readString(manifest));
+            } catch (java.io.IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+            return fake.solve(chunk);
+        };
+        CliHarness.Execution resumed = new CliHarness(new CommandContext(g -> watching, List.of(), java.util.Map.of(),
+                work, false, new FakeMassLines(java.util.Set.of()))).execute("run", "--no-refine", grid.toString(),
+                "--out", "whole", "--resume", "--threads", "1");
+        assertThat(resumed.code()).as(resumed.err()).isZero();
+        assertThat(seenWhileComputing).isNotEmpty().allSatisfy(m -> assertThat(m).contains("finished: null"));
+        assertThat(Files.readString(manifest)).doesNotContain("finished: null");
+        assertThat(Files.readAllBytes(work.resolve("whole/catalogue.ecsv"))).isEqualTo(whole);
+    }
+
+    /**
      * A run interrupted under an earlier version (two columns fewer, a reworded description in the header) resumes
      * under this one: its rows are carried into this version's layout, the overshoot profile they could not name
      * taken from the grid, and the catalogue ends byte-identical to an uninterrupted run (found by a review: every

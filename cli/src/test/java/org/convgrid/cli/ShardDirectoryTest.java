@@ -116,6 +116,13 @@ class ShardDirectoryTest {
         assertThat(otherGrid.err()).contains(shard + " holds shard 1/2 of another grid (models_sha256 ");
         assertThat(contents(shard)).isEqualTo(before);
 
+        // without --force or --resume: what the directory holds, not advice that both would refuse
+        CliHarness.Execution plain = run("run", grid.toString(), "--out", "x-shard-1-of-2", "--quiet");
+        assertThat(plain.code()).isEqualTo(2);
+        assertThat(plain.err()).contains(shard + " holds shard 1/2, and this run computes the whole grid: --resume "
+                + "cannot continue it").doesNotContain("add --resume");
+        assertThat(contents(shard)).isEqualTo(before);
+
         // the same shard of the same grid is started over, as --force says
         CliHarness.Execution same = run("run", grid.toString(), "--shard", "1/2", "--out", "x", "--force", "--quiet");
         assertThat(same.code()).as(same.err()).isZero();

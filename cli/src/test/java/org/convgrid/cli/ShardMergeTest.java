@@ -109,6 +109,25 @@ class ShardMergeTest {
     }
 
     @Test
+    void aDirectoryWithAnEarlierRunsFilesButNoCatalogueIsRefusedAndKept() throws Exception {
+        // a review merged into a directory whose catalogue and manifest had been deleted: the earlier run's life
+        // events, tracks and charts stayed beside the merged catalogue and read as the merge's own
+        runShards(grid(), 2);
+        Path earlier = Files.createDirectories(work.resolve("earlier"));
+        Files.writeString(earlier.resolve("life_events.csv"), "track_id\n");
+        CliHarness.Execution merged = run("merge", "runs/test-survey-shard-1-of-2", "runs/test-survey-shard-2-of-2",
+                "--out", "earlier");
+        assertThat(merged.code()).isEqualTo(2);
+        assertThat(merged.err()).contains("holds files a run writes").contains("life_events.csv")
+                .contains("merge into a new directory");
+        try (var left = Files.list(earlier)) {
+            // the command's lock file aside (empty once released)
+            assertThat(left).extracting(p -> p.getFileName().toString()).filteredOn(n -> !n.equals(".convgrid.lock"))
+                    .containsExactly("life_events.csv");
+        }
+    }
+
+    @Test
     void aShardGivenTwiceIsReportedAsDuplicateRows() throws Exception {
         runShards(grid(), 2);
         CliHarness.Execution merged = run("merge", "runs/test-survey-shard-1-of-2", "runs/test-survey-shard-2-of-2",

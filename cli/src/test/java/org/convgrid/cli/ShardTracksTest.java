@@ -105,6 +105,62 @@ class ShardTracksTest {
                 .isEqualTo(Files.readAllBytes(work.resolve("single/life_events.csv")));
     }
 
+    @Test
+    void aShardWhoseStarLacksItsTrackIsRefusedUntilItIsResumed() throws Exception {
+        // a review deleted a shard's track file and merged: exit 0, the merged run one track short and nothing said
+        ChunkSolverFactory checked = new ChunkSolverFactory() {
+            @Override
+            public ChunkSolver solverFor(GridSpec grid) {
+                return FAKE_WITH_TRACKS.solverFor(grid);
+            }
+
+            @Override
+            public ChunkSolver solverFor(GridSpec grid, StarTrackSink tracks) {
+                return FAKE_WITH_TRACKS.solverFor(grid, tracks);
+            }
+
+            @Override
+            public boolean writesTracks() {
+                return true;
+            }
+        };
+        CliHarness harness = new CliHarness(new CommandContext(checked, List.of(), Map.of(), work, false));
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        for (int k = 1; k <= 2; k++) {
+            assertThat(harness.execute("run", "--no-refine", grid.toString(), "--shard", k + "/2", "--quiet").code())
+                    .isZero();
+        }
+        Path second = work.resolve("runs/test-survey-shard-2-of-2");
+        Path track = tracks(second).get(0);
+        Files.delete(track);
+        CliHarness.Execution refused = harness.execute("merge", "runs/test-survey-shard-1-of-2",
+                "runs/test-survey-shard-2-of-2", "--out", "merged");
+        assertThat(refused.code()).isEqualTo(2);
+        assertThat(refused.err()).contains("1 star lacks files (first: ").contains(track.getFileName().toString())
+                .contains("--resume");
+        assertThat(work.resolve("merged/catalogue.ecsv")).doesNotExist();
+
+        assertThat(harness.execute("run", "--no-refine", grid.toString(), "--out", second.toString(), "--resume",
+                "--quiet").code()).isZero();
+        assertThat(track).exists();
+        assertThat(harness.execute("merge", "runs/test-survey-shard-1-of-2", "runs/test-survey-shard-2-of-2",
+                "--out", "merged").code()).isZero();
+        assertThat(tracks(work.resolve("merged"))).hasSize(2 * 78);
+    }
+
+    @Test
+    void aShardWithoutItsZonesTableIsRefused() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        for (int k = 1; k <= 2; k++) {
+            assertThat(run("run", "--no-refine", grid.toString(), "--shard", k + "/2", "--quiet").code()).isZero();
+        }
+        Files.delete(work.resolve("runs/test-survey-shard-1-of-2/zones.csv"));
+        CliHarness.Execution refused = run("merge", "runs/test-survey-shard-1-of-2", "runs/test-survey-shard-2-of-2",
+                "--out", "merged");
+        assertThat(refused.code()).isEqualTo(2);
+        assertThat(refused.err()).contains("zones.csv is missing beside its ").contains("run that shard again");
+    }
+
     private static List<String> withoutCell(String[] cells, int index) {
         List<String> kept = new java.util.ArrayList<>(List.of(cells));
         kept.remove(index);

@@ -118,6 +118,9 @@ public final class GridRun {
             return resume(s);
         }
         if (dir.holdsRun() && !s.force()) {
+            // a directory of another shard, or of this shard of another grid, refuses both (a review was told to add
+            // --resume or --force there): say what it holds instead
+            refuseAnotherShard(s);
             throw new RunSetupException(dir.root() + " already holds a run; add --resume to continue it or "
                     + "--force to start it over");
         }
@@ -186,8 +189,10 @@ public final class GridRun {
         } else {
             return;
         }
-        throw new RunSetupException(dir.root() + " holds " + held + ": --force would delete that shard's results, "
-                + "so nothing was removed; choose another --out (shard K of N writes to <DIR>-shard-K-of-N), or "
+        throw new RunSetupException(dir.root() + " holds " + held + (s.force()
+                ? ": --force would delete that shard's results, so nothing was removed"
+                : ": --resume cannot continue it and --force would delete that shard's results, so nothing was "
+                        + "changed") + "; choose another --out (shard K of N writes to <DIR>-shard-K-of-N), or "
                 + "remove the directory yourself if that shard is not needed");
     }
 
@@ -219,6 +224,13 @@ public final class GridRun {
                     + shard(shard));
         }
         ShardPlan plan = new ShardPlan(s.grid().spec(), shard, MASSES_PER_CHUNK);
+        if (!old.isUnfinished()) {
+            // the resume may cut rows back (a star lacking its files, a row cut short): until the end, the manifest
+            // must not say the run is finished, or a process killed outright (kill -9, out of memory) would leave a
+            // finished manifest beside a shorter catalogue (a review found exactly that); counts as at a run's start
+            AtomicFiles.writeString(dir.manifest(), RunManifestWriter.toYaml(
+                    old.unfinished(Map.of(), old.medianSecondsPerModel(), plan.count())));
+        }
         KeptCatalogue kept = KeptCatalogue.inspectAndTrim(dir.catalogue(), plan);
         MissingStarFiles.Recomputed recomputed = !checksTracks ? null : MissingStarFiles.cutBackToFirstLacking(dir,
                 s.grid().spec(), GridIronAbundance.of(s.grid().spec()));

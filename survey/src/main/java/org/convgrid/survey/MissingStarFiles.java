@@ -61,20 +61,60 @@ final class MissingStarFiles {
      * @return what was dropped, or null when every kept star has its files (the catalogue is unchanged)
      */
     static Recomputed cutBackToFirstLacking(RunDirectory dir, GridSpec grid, IronAbundance iron) throws IOException {
+        if (!checked(grid) || !Files.exists(dir.catalogue())) {
+            return null;
+        }
+        if (grid.ages().evolves() && grid.ages().origin() == AgeOrigin.BIRTH) {
+            LifeEventLog.repair(dir.layout().lifeEvents(), iron);
+        }
+        List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
+        Lacking lacking = find(dir, grid, rows);
+        if (lacking == null) {
+            return null;
+        }
+        int first = 0;
+        while (!lacking.stars().contains(ModelIdFormat.trackIdOf(rows.get(first).modelId()))) {
+            first++;
+        }
+        keepFirstRows(dir.catalogue(), first);
+        return new Recomputed(rows.size() - first, lacking.stars().size(), lacking.example());
+    }
+
+    /**
+     * The stars of {@code rows} that lack files, in catalogue order, and the first one with what it lacks.
+     *
+     * @param stars the track ids
+     * @param example the first star and its missing file, for people
+     */
+    record Lacking(Set<String> stars, String example) {
+
+        /** One line for the user. */
+        String describe() {
+            return stars.size() + (stars.size() == 1 ? " star lacks" : " stars lack") + " files (first: " + example
+                    + ")";
+        }
+    }
+
+    /** Whether a grid's stars have files to check: tracks (its stars evolve) or profiles. */
+    private static boolean checked(GridSpec grid) {
+        return grid.ages().evolves() || grid.profiles();
+    }
+
+    /**
+     * The stars among {@code rows} of the run in {@code dir} (of grid {@code grid}) that lack their files; reads
+     * only. Null when none lacks any.
+     */
+    static Lacking find(RunDirectory dir, GridSpec grid, List<CatalogueRow> rows) throws IOException {
         boolean tracks = grid.ages().evolves();
         boolean profiles = grid.profiles();
-        if (!tracks && !profiles || !Files.exists(dir.catalogue())) {
+        if (!checked(grid)) {
             return null;
         }
         RunLayout layout = dir.layout();
         boolean lifeEvents = tracks && grid.ages().origin() == AgeOrigin.BIRTH;
-        Set<String> withEvents = Set.of();
-        if (lifeEvents) {
-            LifeEventLog.repair(layout.lifeEvents(), iron);
-            withEvents = LifeEventReader.read(layout.lifeEvents()).stream().map(LifeEventRow::trackId)
-                    .collect(Collectors.toSet());
-        }
-        List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
+        Set<String> withEvents = !lifeEvents || !Files.exists(layout.lifeEvents()) ? Set.of()
+                : LifeEventReader.read(layout.lifeEvents()).stream().map(LifeEventRow::trackId)
+                        .collect(Collectors.toSet());
         Set<String> lacking = new LinkedHashSet<>();
         String example = null;
         for (CatalogueRow row : rows) {
@@ -102,15 +142,7 @@ final class MissingStarFiles {
                 }
             }
         }
-        if (lacking.isEmpty()) {
-            return null;
-        }
-        int first = 0;
-        while (!lacking.contains(ModelIdFormat.trackIdOf(rows.get(first).modelId()))) {
-            first++;
-        }
-        keepFirstRows(dir.catalogue(), first);
-        return new Recomputed(rows.size() - first, lacking.size(), example);
+        return lacking.isEmpty() ? null : new Lacking(lacking, example);
     }
 
     /** Truncates the catalogue after its header and first {@code rows} rows (shortening only: nothing rewritten). */

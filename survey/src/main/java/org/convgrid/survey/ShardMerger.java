@@ -39,11 +39,18 @@ public final class ShardMerger {
     private final String toolVersion;
     private final String toolCommit;
     private final Clock clock;
+    private final boolean checksStarFiles;
 
-    public ShardMerger(String toolVersion, String toolCommit, Clock clock) {
+    /**
+     * @param checksStarFiles whether each shard's kept stars must have their track, life-events and profile files:
+     *                        for shards of solvers that write tracks ({@link ChunkSolverFactory#writesTracks}), as
+     *                        a resume checks them
+     */
+    public ShardMerger(String toolVersion, String toolCommit, Clock clock, boolean checksStarFiles) {
         this.toolVersion = toolVersion;
         this.toolCommit = toolCommit;
         this.clock = clock;
+        this.checksStarFiles = checksStarFiles;
     }
 
     /**
@@ -73,8 +80,19 @@ public final class ShardMerger {
             rows.add(new RunDirectory(shard).catalogue(), shard);
         }
         List<String> ordered = rows.inGridOrder(grid);
+        for (Path shard : shards) {
+            refuseLackingFiles(new RunDirectory(shard), grid);
+        }
         if (out.holdsRun()) {
             throw new RunSetupException(out.root() + " already holds a run; merge into a new directory");
+        }
+        // as run refuses them: an earlier run's tracks, life events or charts there would pass for the merge's own
+        // (a review merged zero-age shards beside an evolved run's files and got its life events and charts)
+        List<Path> earlier = out.earlierRunFiles();
+        if (!earlier.isEmpty()) {
+            throw new RunSetupException(out.root() + " holds files a run writes (" + out.describe(earlier) + ") but no "
+                    + RunLayout.CATALOGUE + " or " + RunLayout.MANIFEST + ", so they are yours or left by an earlier "
+                    + "run; merge into a new directory");
         }
         Path top = RunDirectory.topMissing(out.root());
         FinishedRun run;
@@ -102,6 +120,25 @@ public final class ShardMerger {
         }
         RunFinishing.callFinishers(run, finishers);
         return run;
+    }
+
+    /**
+     * Refuses a shard whose kept stars lack their files (a track, a life-events row, a profile) or whose zones.csv is
+     * gone: merge copies what is there, and a review merged shards with a deleted track, life-events row and zones
+     * table into a run that looked whole (66 of 68 tracks, 18 zone rows lost). A resume of the shard computes the
+     * stars lacking files again; a zones table is written only beside the rows, so that shard is run again.
+     */
+    private void refuseLackingFiles(RunDirectory shard, GridSpec grid) throws IOException {
+        List<CatalogueRow> shardRows = CatalogueReader.read(shard.catalogue());
+        MissingStarFiles.Lacking lacking = checksStarFiles ? MissingStarFiles.find(shard, grid, shardRows) : null;
+        if (lacking != null) {
+            throw new RunSetupException(shard.root() + ": " + lacking.describe() + "; resume that shard (convgrid run "
+                    + "GRID.yaml --out " + shard.root() + " --resume) to compute them again, then merge");
+        }
+        if (!shardRows.isEmpty() && !Files.isRegularFile(shard.zones())) {
+            throw new RunSetupException(shard.root() + ": " + RunLayout.ZONES + " is missing beside its "
+                    + shardRows.size() + " catalogue rows; run that shard again (with --force), then merge");
+        }
     }
 
     /** Joins the shards' zones files, in the merged catalogue's order. */
@@ -150,6 +187,15 @@ public final class ShardMerger {
         }
     }
 
+    /**
+     * Why a shard's manifest does not give its models back: the grid text is read with the files it names (a preset,
+     * an opacity table) as they are now, so a file changed since the run (calibrate-sun rewrites its preset) fails
+     * as an edited manifest does; a review was told "the manifest was edited" for an edited preset.
+     */
+    private static final String NOT_ITS_MODELS = "the grid text in its manifest, read with the files it names (preset, "
+            + "opacity table) as they are now, does not give its models_sha256: one of those files changed since the "
+            + "run (put back the one the run used), or the manifest was edited";
+
     private static GridSpec commonGrid(List<Path> shards, List<RunManifest> manifests) {
         String models = manifests.get(0).gridModelsSha256();
         for (int i = 1; i < manifests.size(); i++) {
@@ -161,8 +207,7 @@ public final class ShardMerger {
         RunManifest first = manifests.get(0);
         GridSpec grid = new GridFileReader().parse(first.gridFile(), first.gridText());
         if (!GridHash.ofModels(grid).equals(models)) {
-            throw new RunSetupException(shards.get(0) + ": the grid text in its manifest does not give its "
-                    + "models_sha256; the manifest was edited");
+            throw new RunSetupException(shards.get(0) + ": " + NOT_ITS_MODELS);
         }
         // the same models from grid files that differ elsewhere (the title, transitions refine or tolerance_msun,
         // profiles): the merged run would take the first-named shard's choices, so the order of the arguments
@@ -170,8 +215,7 @@ public final class ShardMerger {
         for (int i = 1; i < manifests.size(); i++) {
             GridSpec other = new GridFileReader().parse(manifests.get(i).gridFile(), manifests.get(i).gridText());
             if (!GridHash.ofModels(other).equals(models)) {
-                throw new RunSetupException(shards.get(i) + ": the grid text in its manifest does not give its "
-                        + "models_sha256; the manifest was edited");
+                throw new RunSetupException(shards.get(i) + ": " + NOT_ITS_MODELS);
             }
             if (!other.title().equals(grid.title()) || !other.transitions().equals(grid.transitions())
                     || other.profiles() != grid.profiles()) {
