@@ -49,6 +49,15 @@ final class MergeCommand implements Callable<Integer> {
             run = new ShardMerger(ToolVersion.current(), ToolVersion.commit(), Clock.tickSeconds(java.time.ZoneOffset.UTC),
                     context.solvers().writesTracks()).merge(dirs, target, context.finishers());
         }
+        Map<String, List<Path>> builds = ShardMerger.buildsOf(dirs);
+        if (builds.size() > 1) {
+            StringBuilder which = new StringBuilder();
+            builds.forEach((build, from) -> which.append(which.length() == 0 ? "" : "; ").append(build).append(": ")
+                    .append(from.stream().map(Path::toString).collect(java.util.stream.Collectors.joining(", "))));
+            parent.err().println("convgrid: warning: the shards were computed by different builds (" + which
+                    + "); the merged manifest records the merging build, " + ToolVersion.current() + " "
+                    + ToolVersion.commit() + ": compare the rows of the shards if the physics changed between them");
+        }
         Map<ModelStatus, Long> counts = RunFinishing.countByStatus(run.catalogue());
         parent.out().println(target.root() + ": merged " + Counts.of(dirs.size(), "shard directory",
                 "shard directories") + ", " + Counts.of(run.catalogue().size(), "model") + " ("

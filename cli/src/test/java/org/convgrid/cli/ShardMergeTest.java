@@ -128,6 +128,30 @@ class ShardMergeTest {
     }
 
     @Test
+    void theMergedManifestNamesTheBuildThatComputedTheShardsAndMixedBuildsAreSaid() throws Exception {
+        runShards(grid(), 2);
+        Path first = work.resolve("runs/test-survey-shard-1-of-2/manifest.yaml");
+        Path second = work.resolve("runs/test-survey-shard-2-of-2/manifest.yaml");
+        for (Path manifest : List.of(first, second)) {
+            Files.writeString(manifest, Files.readString(manifest).replaceFirst("tool_commit: .*",
+                    "tool_commit: 0123abc"));
+        }
+        CliHarness.Execution same = run("merge", "runs/test-survey-shard-1-of-2", "runs/test-survey-shard-2-of-2",
+                "--out", "same");
+        assertThat(same.code()).isZero();
+        assertThat(same.err()).doesNotContain("different builds");
+        assertThat(RunManifestReader.read(Files.readString(work.resolve("same/manifest.yaml"))).toolCommit())
+                .isEqualTo("0123abc");
+
+        Files.writeString(second, Files.readString(second).replace("tool_commit: 0123abc", "tool_commit: 4567def"));
+        CliHarness.Execution mixed = run("merge", "runs/test-survey-shard-1-of-2", "runs/test-survey-shard-2-of-2",
+                "--out", "mixed");
+        assertThat(mixed.code()).isZero();
+        assertThat(mixed.err()).contains("the shards were computed by different builds (").contains("0123abc: ")
+                .contains("4567def: ").contains("test-survey-shard-2-of-2");
+    }
+
+    @Test
     void aShardGivenTwiceIsReportedAsDuplicateRows() throws Exception {
         runShards(grid(), 2);
         CliHarness.Execution merged = run("merge", "runs/test-survey-shard-1-of-2", "runs/test-survey-shard-2-of-2",

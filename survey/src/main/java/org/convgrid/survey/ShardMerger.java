@@ -141,6 +141,19 @@ public final class ShardMerger {
         }
     }
 
+    /**
+     * The builds that computed the shards ({@code tool_version tool_commit}), each with its shards in the order
+     * given: more than one when the jar was rebuilt while an array of shards ran, which the README allows.
+     */
+    public static Map<String, List<Path>> buildsOf(List<Path> shards) throws IOException {
+        Map<String, List<Path>> builds = new java.util.LinkedHashMap<>();
+        for (Path shard : shards) {
+            RunManifest m = RunManifestReader.read(Files.readString(new RunDirectory(shard).manifest()));
+            builds.computeIfAbsent(m.toolVersion() + " " + m.toolCommit(), k -> new ArrayList<>()).add(shard);
+        }
+        return builds;
+    }
+
     /** Joins the shards' zones files, in the merged catalogue's order. */
     private static void writeZones(List<Path> shards, RunDirectory out, List<CatalogueRow> mergedRows)
             throws IOException {
@@ -241,7 +254,12 @@ public final class ShardMerger {
         int threads = shards.stream().mapToInt(RunManifest::threads).sum();
         double median = RunManifest.median(shards.stream().mapToDouble(RunManifest::medianSecondsPerModel)
                 .filter(Double::isFinite).toArray());
-        return new RunManifest(toolVersion, toolCommit, first.gridFile(), first.gridText(), first.gridFileSha256(),
+        // the build that computed the rows when every shard names the same one (a review found the merging build
+        // recorded instead); shards of several builds keep the merging one, and merge warns (buildsOf)
+        boolean oneBuild = shards.stream().allMatch(m -> m.toolVersion().equals(first.toolVersion())
+                && m.toolCommit().equals(first.toolCommit()));
+        return new RunManifest(oneBuild ? first.toolVersion() : toolVersion, oneBuild ? first.toolCommit() : toolCommit,
+                first.gridFile(), first.gridText(), first.gridFileSha256(),
                 first.gridModelsSha256(), first.physics(), started, finished, threads, null,
                 RunFinishing.countByStatus(rows), median, first.ageOrigin(), RunManifest.EXPECTED_UNKNOWN, iron);
     }
