@@ -152,6 +152,23 @@ class ShardMergeTest {
     }
 
     @Test
+    void missingModelsNameTheShardThatIsUnfinished() throws Exception {
+        runShards(grid(), 2);
+        // shard 2 as an interrupted (or still running) task leaves it: some rows, an unfinished manifest
+        Path shard = work.resolve("runs/test-survey-shard-2-of-2");
+        List<String> lines = Files.readAllLines(shard.resolve("catalogue.ecsv"));
+        Files.write(shard.resolve("catalogue.ecsv"), lines.subList(0, CliHarness.CATALOGUE_HEADER_LINES + 16));
+        Path manifest = shard.resolve("manifest.yaml");
+        Files.writeString(manifest, Files.readString(manifest).replaceFirst("finished: .*", "finished: null"));
+        CliHarness.Execution merged = run("merge", "runs/test-survey-shard-1-of-2", "runs/test-survey-shard-2-of-2",
+                "--out", "merged");
+        assertThat(merged.code()).isEqualTo(2);
+        assertThat(merged.err()).contains("missing from every shard: ")
+                .contains("unfinished (interrupted, or still running): ").contains("test-survey-shard-2-of-2 (")
+                .doesNotContain("test-survey-shard-1-of-2 (");
+    }
+
+    @Test
     void aShardGivenTwiceIsReportedAsDuplicateRows() throws Exception {
         runShards(grid(), 2);
         CliHarness.Execution merged = run("merge", "runs/test-survey-shard-1-of-2", "runs/test-survey-shard-2-of-2",

@@ -79,7 +79,12 @@ public final class ShardMerger {
         for (Path shard : shards) {
             rows.add(new RunDirectory(shard).catalogue(), shard);
         }
-        List<String> ordered = rows.inGridOrder(grid);
+        List<String> ordered;
+        try {
+            ordered = rows.inGridOrder(grid);
+        } catch (RunSetupException e) {
+            throw new RunSetupException(e.getMessage() + unfinished(shards, manifests));
+        }
         for (Path shard : shards) {
             refuseLackingFiles(new RunDirectory(shard), grid);
         }
@@ -139,6 +144,24 @@ public final class ShardMerger {
             throw new RunSetupException(shard.root() + ": " + RunLayout.ZONES + " is missing beside its "
                     + shardRows.size() + " catalogue rows; run that shard again (with --force), then merge");
         }
+    }
+
+    /**
+     * The shards whose manifest says they are unfinished (interrupted, failed part-way or still running), for the
+     * message of a merge that lacks models: a review was told only which models were missing, not which shard; empty
+     * when every shard finished.
+     */
+    private static String unfinished(List<Path> shards, List<RunManifest> manifests) {
+        List<String> named = new ArrayList<>();
+        for (int i = 0; i < shards.size(); i++) {
+            RunManifest m = manifests.get(i);
+            if (m.isUnfinished()) {
+                named.add(shards.get(i) + " (" + m.total() + (m.expectedModels() == RunManifest.EXPECTED_UNKNOWN ? ""
+                        : " of " + m.expectedModels()) + " models)");
+            }
+        }
+        return named.isEmpty() ? "" : "; unfinished (interrupted, or still running): " + String.join(", ", named)
+                + "; resume or wait for it, then merge";
     }
 
     /**
