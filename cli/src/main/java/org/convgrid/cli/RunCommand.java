@@ -186,9 +186,12 @@ final class RunCommand implements Callable<Integer> {
             }
             if (plan.manifestRebuilt()) {
                 // said even with --quiet: the manifest's first start time and measured cost are gone
+                // the kept count is after the cut-back of stars lacking files (said next): before it, the rows were
+                // more, and a review read "0 rows" of a catalogue of 68
                 err.println("convgrid: note: " + dir.root() + " had no " + RunLayout.MANIFEST + "; its catalogue's "
-                        + Counts.of(plan.kept().ids().size(), "row") + " are this grid's first models, so the resume "
-                        + "wrote a new manifest (started now) and continues the run");
+                        + (plan.recomputedForMissingFiles() == null ? Counts.of(plan.kept().ids().size(), "row") + " are"
+                        : "rows are") + " this grid's first models, so the resume wrote a new manifest (started now) "
+                        + "and continues the run");
                 err.flush();
             }
             if (plan.recomputedForMissingFiles() != null) {
