@@ -109,10 +109,6 @@ final class StarReport {
     }
 
     /**
-     * A failed model's reason for people: "after 1 iteration", not the solver's "after 1 iterations". The
-     * catalogue's status_detail keeps the solver's words, so that the file of a run does not change.
-     */
-    /**
      * Z as the header and the model id write it: five decimals, as before, down to 1e-4 (the tested range's
      * lowest Z); below, three significant digits, so that Z = 4e-6 does not read (or name a model) as Z = 0.
      */
@@ -121,6 +117,10 @@ final class StarReport {
                 : String.format(Locale.ROOT, "%.3g", z);
     }
 
+    /**
+     * A failed model's reason for people: "after 1 iteration", not the solver's "after 1 iterations". The
+     * catalogue's status_detail keeps the solver's words, so that the file of a run does not change.
+     */
     static String detail(ModelOutcome outcome) {
         return ONE_ITERATION.matcher(outcome.statusDetail()).replaceAll("after 1 iteration");
     }
