@@ -169,6 +169,20 @@ class ShardMergeTest {
     }
 
     @Test
+    void aMergeCutShortIsNamedAsSuchWhenMergedAgain() throws Exception {
+        // a review stopped a merge with SIGTERM: its catalogue stayed without a manifest, and merging again was
+        // refused as "already holds a run"
+        runShards(grid(), 2);
+        Path cut = Files.createDirectories(work.resolve("cut"));
+        Files.copy(work.resolve("runs/test-survey-shard-1-of-2/catalogue.ecsv"), cut.resolve("catalogue.ecsv"));
+        CliHarness.Execution again = run("merge", "runs/test-survey-shard-1-of-2", "runs/test-survey-shard-2-of-2",
+                "--out", "cut");
+        assertThat(again.code()).isEqualTo(2);
+        assertThat(again.err()).contains("holds a catalogue.ecsv but no manifest.yaml: a merge or run cut short")
+                .contains("remove the directory and merge again");
+    }
+
+    @Test
     void aShardGivenTwiceIsReportedAsDuplicateRows() throws Exception {
         runShards(grid(), 2);
         CliHarness.Execution merged = run("merge", "runs/test-survey-shard-1-of-2", "runs/test-survey-shard-2-of-2",

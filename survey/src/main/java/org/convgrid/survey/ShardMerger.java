@@ -88,6 +88,12 @@ public final class ShardMerger {
         for (Path shard : shards) {
             refuseLackingFiles(new RunDirectory(shard), grid);
         }
+        if (out.holdsRun() && !Files.exists(out.manifest())) {
+            // a merge stopped by a signal leaves its catalogue before the manifest it writes last (a review)
+            throw new RunSetupException(out.root() + " holds a " + RunLayout.CATALOGUE + " but no "
+                    + RunLayout.MANIFEST + ": a merge or run cut short, not a finished run; remove the directory and "
+                    + "merge again (the shards are untouched)");
+        }
         if (out.holdsRun()) {
             throw new RunSetupException(out.root() + " already holds a run; merge into a new directory");
         }
