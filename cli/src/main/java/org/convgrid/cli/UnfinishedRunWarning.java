@@ -21,11 +21,24 @@ final class UnfinishedRunWarning {
     }
 
     /**
-     * Prints one warning line when the directory's manifest says the run did not finish; nothing otherwise (also
-     * when there is no readable manifest or catalogue: the command itself reports those).
+     * Prints one warning line when the directory's manifest says the run did not finish, or when it has a catalogue
+     * and no manifest; nothing otherwise (also when the manifest cannot be read or there is no catalogue: the command
+     * itself reports those).
      */
     static void printIfUnfinished(RunLayout layout, PrintWriter err) throws IOException {
-        if (!Files.isRegularFile(layout.manifest()) || !Files.isRegularFile(layout.catalogue())) {
+        if (!Files.isRegularFile(layout.catalogue())) {
+            return;
+        }
+        if (!Files.exists(layout.manifest())) {
+            // a run or merge stopped before its manifest, or a manifest deleted: a review drew such a directory's
+            // charts without a word (a merge cut short: zones.csv and life events missing)
+            err.println("convgrid: warning: " + layout.root() + " has no " + RunLayout.MANIFEST + ": whether its run "
+                    + "finished is unknown (a run or merge cut short?); what follows covers the rows of "
+                    + RunLayout.CATALOGUE + " only");
+            err.flush();
+            return;
+        }
+        if (!Files.isRegularFile(layout.manifest())) {
             return;
         }
         RunManifest manifest;

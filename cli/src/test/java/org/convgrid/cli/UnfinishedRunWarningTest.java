@@ -58,6 +58,19 @@ class UnfinishedRunWarningTest {
     }
 
     @Test
+    void plotWarnsWhenTheManifestIsMissing() throws Exception {
+        Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
+        assertThat(run("run", "--no-refine", grid.toString(), "--out", "d", "--quiet").code()).isZero();
+        Files.delete(work.resolve("d/manifest.yaml"));
+
+        CliHarness.Execution done = run("plot", "d");
+
+        assertThat(done.code()).isZero();
+        assertThat(done.err()).contains("convgrid: warning: ").contains("has no manifest.yaml: whether its run "
+                + "finished is unknown");
+    }
+
+    @Test
     void aFinishedRunGetsNoWarning() throws Exception {
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
         assertThat(run("run", "--no-refine", grid.toString(), "--out", "d", "--quiet").code()).isZero();
