@@ -349,8 +349,12 @@ public final class ReportPage {
     private static void estimate(StringBuilder b, TransitionEstimate e, double toleranceMsun) {
         b.append("<td class=\"num\">")
                 .append(e.found() ? SliceLabels.massToAccuracy(e.massMsun(), e.bracket(), toleranceMsun) : "not found")
-                .append("</td><td class=\"num\">").append(e.found() ? SliceLabels.number(e.bracket().lo()) + "\u2013"
-                        + SliceLabels.number(e.bracket().hi()) : "").append("</td>");
+                // the ends rounded as the value is (half up, to the stated accuracy): at four significant digits from
+                // their binary values a review saw 0.328 beside 0.3281-0.3297 and 1.213 beside 1.211-1.212
+                .append("</td><td class=\"num\">").append(e.found()
+                        ? SliceLabels.massToAccuracy(e.bracket().lo(), e.bracket(), toleranceMsun) + "\u2013"
+                        + SliceLabels.massToAccuracy(e.bracket().hi(), e.bracket(), toleranceMsun) : "")
+                .append("</td>");
     }
 
     private static void failures(StringBuilder b, RunData run) {

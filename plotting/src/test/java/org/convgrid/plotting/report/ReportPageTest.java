@@ -10,6 +10,7 @@ import java.util.regex.Pattern;
 import java.util.Map;
 import org.convgrid.output.Span;
 import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.transitions.TransitionEstimate;
 import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.output.transitions.TransitionRow;
@@ -99,6 +100,22 @@ class ReportPageTest {
         String html = ReportPage.html(run, dir);
         assertThat(html).contains("<td class=\"num\">0.316\u20130.638</td>", "<td class=\"num\">600 Myr</td>",
                 "<th>age</th>").doesNotContain("0.637", "age / Gyr", "<td class=\"num\">0.6</td>");
+    }
+
+    @Test
+    void aBracketIsRoundedAsItsMassIsSoThatItHoldsIt(@TempDir Path dir) throws Exception {
+        // the demo's Z = 0.008, 20 Myr limit 0.328125 in 0.328125-0.3296875 read "0.328 | 0.3281-0.3297" (the value
+        // below its own bracket), and a core onset of 1.2125 in 1.210937-1.2125 "1.213 | 1.211-1.212"
+        List<CatalogueRow> rows = TestRuns.rows(TestRuns.masses(0.2, 1.4, 5), new double[] {0.008},
+                new double[] {0.02});
+        TransitionRow found = TransitionFinder.withDefaults().find(rows).get(0);
+        TransitionRow refined = new TransitionRow(found.slice(), found.yInit(),
+                new TransitionEstimate(0.328125, new Span(0.328125, 0.3296875), List.of(new Span(0.328125, 0.3296875)), 0),
+                new TransitionEstimate(1.2125, new Span(1.210937, 1.2125), List.of(new Span(1.210937, 1.2125)), 0),
+                null, TransitionMethod.REFINED, 0.002, "");
+        String html = ReportPage.html(new RunData(rows, List.of(refined), true, null, Map.of(), List.of()), dir);
+        assertThat(html).contains("<td class=\"num\">0.328</td><td class=\"num\">0.328\u20130.330</td>",
+                "<td class=\"num\">1.211\u20131.213</td>").doesNotContain("0.3281", "1.212");
     }
 
     @Test
