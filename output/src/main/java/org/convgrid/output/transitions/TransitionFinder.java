@@ -89,11 +89,15 @@ public record TransitionFinder(double coreMassFractionThreshold) {
      * no exponents.
      */
     private static final String TRANSIENT_ONE_WORDS = "; the lowest window of cores is the transient one";
+    /** As {@link #TRANSIENT_ONE_WORDS} when cores also lie below the fully convective limit (named among the others). */
+    private static final String TRANSIENT_ABOVE_WORDS = "; the lowest window of cores above the fully convective limit "
+            + "is the transient one";
     private static final String OTHER_WINDOWS_WORDS = ", others at ";
     private static final String MASS = "\\d+(?:\\.\\d+)?";
     private static final String RANGE = MASS + "(?:-" + MASS + ")?";
-    private static final Pattern OTHER_WINDOWS = Pattern.compile(Pattern.quote(TRANSIENT_ONE_WORDS
-            + OTHER_WINDOWS_WORDS) + "(" + RANGE + "(?:, " + RANGE + ")*) Msun");
+    private static final Pattern OTHER_WINDOWS = Pattern.compile("(?:" + Pattern.quote(TRANSIENT_ONE_WORDS) + "|"
+            + Pattern.quote(TRANSIENT_ABOVE_WORDS) + ")" + Pattern.quote(OTHER_WINDOWS_WORDS) + "(" + RANGE + "(?:, "
+            + RANGE + ")*) Msun");
 
     /** What drives such cores, in the notes and the charts' caveat alike. */
     public static final String COOL_CORES_CAUSE = "out-of-equilibrium burning drives them (3He on the main sequence, "
@@ -160,7 +164,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         TransitionEstimate core = coredAtTop && !coreCrossings.isEmpty()
                 ? StateCrossings.estimate(byMass, coreCrossings, coreCrossings.size() - 1, false)
                 : new TransitionEstimate(Double.NaN, null, coreCrossings, 0);
-        Span window = transientWindow(coreSearch, coreCrossings);
+        Span window = transientWindow(coreSearch, coreCrossings, fc);
         describeFullyConvective(fc, usable, byMass, notes);
         describeCore(core, window, coredAtTop, coreSearch, coreSearch.size() < usable.size(), byMass, notes);
         describeRecededCores(usable.subList(coreSearch.size(), usable.size()), notes);
@@ -195,18 +199,26 @@ public record TransitionFinder(double coreMassFractionThreshold) {
     }
 
     /**
-     * The lowest run of cored models entered from below and left again above: from the upper end of its crossing
-     * into a core to the lower end of its crossing out; null when there is none.
+     * The lowest run of cored models above the fully convective limit entered from below and left again above: from
+     * the upper end of its crossing into a core to the lower end of its crossing out; the lowest such run anywhere
+     * when none lies above the limit (or there is no limit); null when there is none. Runs below the limit (a star
+     * with a core, then fully convective again above it: the stars just above the limit cycle) are named in the
+     * notes instead: a review found such a run reported as the window, below the limit the same row gave.
      */
-    private Span transientWindow(List<CatalogueRow> usable, List<Span> coreCrossings) {
+    private Span transientWindow(List<CatalogueRow> usable, List<Span> coreCrossings, TransitionEstimate fc) {
+        Span lowest = null;
         for (int i = 0; i + 1 < coreCrossings.size(); i++) {
             double entry = coreCrossings.get(i).hi();
             boolean into = usable.stream().anyMatch(r -> r.massMsun() == entry && hasConvectiveCore(r));
             if (into) {
-                return new Span(entry, coreCrossings.get(i + 1).lo());
+                Span run = new Span(entry, coreCrossings.get(i + 1).lo());
+                if (!fc.found() || entry > fc.massMsun()) {
+                    return run;
+                }
+                lowest = lowest == null ? run : lowest;
             }
         }
-        return null;
+        return lowest;
     }
 
     private static boolean endsAtRefinedModel(Span span, List<CatalogueRow> rows) {
@@ -242,8 +254,11 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         // a clean slice crosses once (no window) or three times (window, then the lasting core)
         int expected = (window == null ? 0 : 2) + (coredAtTop ? 1 : 0);
         if (core.crossings().size() > expected) {
+            boolean coresBelow = window != null && searched.stream().anyMatch(r -> r.massMsun() < window.lo()
+                    && hasConvectiveCore(r));
             notes.add("convective core changes " + StateCrossings.timesInWords(core.crossings().size()) + " with mass"
-                    + (window == null ? "" : TRANSIENT_ONE_WORDS + otherWindows(searched, window, core)));
+                    + (window == null ? "" : (coresBelow ? TRANSIENT_ABOVE_WORDS : TRANSIENT_ONE_WORDS)
+                    + otherWindows(searched, window, core)));
         }
         if (core.skippedInBracket() > 0) {
             notes.add("convective core bracket widened past " + SkippedModelsText.of(byMass, core.bracket()));
@@ -268,8 +283,9 @@ public record TransitionFinder(double coreMassFractionThreshold) {
     }
 
     /**
-     * ", others at 0.8, 0.95-1.1 Msun": the runs of cored models above the transient window and below the lasting
-     * core, so that a window the lowest one hides behind a single coreless model can be seen; empty when none.
+     * ", others at 0.8, 0.95-1.1 Msun": the runs of cored models other than the transient window below the lasting
+     * core (above the window, and below it where cores lie under the fully convective limit), so that a window the
+     * reported one hides behind a single coreless model can be seen; empty when none.
      *
      * @param searched the models of the core search, in increasing mass
      */
@@ -279,7 +295,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         Span run = null;
         for (CatalogueRow r : searched) {
             double m = r.massMsun();
-            if (m > window.hi() && m < lasting && hasConvectiveCore(r)) {
+            if ((m > window.hi() || m < window.lo()) && m < lasting && hasConvectiveCore(r)) {
                 run = run == null ? new Span(m, m) : new Span(run.lo(), m);
             } else if (run != null) {
                 runs.add(run);

@@ -91,6 +91,25 @@ class TransientCoreWindowTest {
     }
 
     @Test
+    void coresBelowTheFullyConvectiveLimitAreNamedAndTheWindowAboveItReported() {
+        // a review's Z = 0.02, 1.1 Gyr slice: fully convective at 0.33, cores at 0.33125-0.3375, fully convective
+        // again at 0.33875 (the limit), coreless at 0.34, cores 0.34125-0.5047, none up to the lasting core; the
+        // window was reported at 0.33125-0.3375, below the limit of the same row
+        TransitionRow t = finder.find(List.of(ok(0.33, FC, 1), ok(0.33125, BOTH, 0.01), ok(0.3375, BOTH, 0.01),
+                ok(0.33875, FC, 1), ok(0.34, ENV, 0), ok(0.34125, BOTH, 0.02), ok(0.5047, BOTH, 0.01),
+                ok(0.7, ENV, 0), ok(1.3, BOTH, 0.05))).get(0);
+        assertThat(t.fullyConvective().massMsun()).isEqualTo(0.33875);
+        assertThat(t.transientCore()).isEqualTo(new Span(0.34125, 0.5047));
+        assertThat(t.notes()).contains("the lowest window of cores above the fully convective limit is the transient "
+                + "one, others at 0.33125-0.3375 Msun");
+        assertThat(TransitionFinder.otherWindowsNoted(t.notes())).containsExactly(new Span(0.33125, 0.3375));
+        // cores below the limit and none above it: the lowest run is still the one reported
+        TransitionRow onlyBelow = finder.find(List.of(ok(0.33, FC, 1), ok(0.33125, BOTH, 0.01), ok(0.33875, FC, 1),
+                ok(0.34, ENV, 0), ok(1.3, BOTH, 0.05))).get(0);
+        assertThat(onlyBelow.transientCore()).isEqualTo(new Span(0.33125, 0.33125));
+    }
+
+    @Test
     void aGridThatStartsInsideTheWindowDoesNotInventItsLowerEdge() {
         TransitionRow t = finder.find(List.of(ok(0.4, BOTH, 0.01), ok(0.5, ENV, 0), ok(1.3, BOTH, 0.05))).get(0);
         assertThat(t.transientCore()).isNull();
