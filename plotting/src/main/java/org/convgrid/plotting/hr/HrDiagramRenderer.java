@@ -4,6 +4,7 @@ import java.awt.FontMetrics;
 import java.util.DoubleSummaryStatistics;
 import java.util.List;
 import java.util.Locale;
+import java.util.stream.Stream;
 import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.engine.evolution.MainSequenceEvolver;
 import org.convgrid.plotting.label.MetallicityNames;
@@ -171,10 +172,16 @@ public final class HrDiagramRenderer {
         // drawn first at the same points, so the coloured markers painted next cover it.
         for (StructureClass c : StructureClass.values()) {
             List<HrPoint> members = data.points().stream().filter(p -> p.structureClass() == c).toList();
-            if (members.isEmpty()) {
+            // a class only refinement or turn-off models have gets its entry too, from a point-less series (NaN:
+            // drawn nowhere): a review saw a radiative turn-off model's shape with no class to read it by
+            boolean elsewhere = Stream.concat(data.refinementPoints().stream(), data.turnoffModels().stream())
+                    .anyMatch(p -> p.structureClass() == c);
+            if (members.isEmpty() && !elsewhere) {
                 continue;
             }
-            XYSeries s = chart.addSeries(ChartStyle.classLabel(c),
+            XYSeries s = members.isEmpty()
+                    ? chart.addSeries(ChartStyle.classLabel(c), new double[] {Double.NaN}, new double[] {Double.NaN})
+                    : chart.addSeries(ChartStyle.classLabel(c),
                     members.stream().mapToDouble(p -> -p.logTeff()).toArray(),
                     members.stream().mapToDouble(HrPoint::logL).toArray());
             s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);

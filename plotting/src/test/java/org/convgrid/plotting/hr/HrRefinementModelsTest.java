@@ -43,6 +43,23 @@ class HrRefinementModelsTest {
     }
 
     @Test
+    void aClassOnlyARefinementModelHasStillGetsItsLegendEntry() {
+        // grid 0.2-1.4 Msun: fully convective, envelopes, core + envelope; a refinement model at 1.6 Msun has a core
+        // and no envelope, a shape the legend did not explain (a review: a radiative turn-off model)
+        List<CatalogueRow> rows = new ArrayList<>(TestRuns.rows(TestRuns.masses(0.2, 1.4, 5), new double[] {0.014},
+                new double[] {0}));
+        String coreOnly = org.convgrid.plotting.style.ChartStyle.classLabel(
+                org.convgrid.engine.convection.StructureClass.CONV_CORE);
+        assertThat(HrDiagramRenderer.render(HrDiagram.build(PhysicsKey.of(rows.get(0)), rows)).getSeriesMap())
+                .doesNotContainKey(coreOnly);
+        rows.add(TestRuns.row("p0-z00-r000-a00", 1.6, 0.014, 0, false));
+        var series = HrDiagramRenderer.render(HrDiagram.build(PhysicsKey.of(rows.get(0)), rows)).getSeriesMap();
+        assertThat(series).containsKey(coreOnly);
+        // drawn nowhere: the entry's one point is not a point
+        assertThat(series.get(coreOnly).getXData()).containsExactly(Double.NaN);
+    }
+
+    @Test
     void aGridWithoutRefinementHasNoSuchLegendEntry() {
         List<CatalogueRow> rows = TestRuns.rows(TestRuns.masses(0.2, 2.0, 10), new double[] {0.014},
                 new double[] {0});
