@@ -36,10 +36,10 @@ class GridFileReaderTest {
     @Test
     void readsTheTransitionReferenceGrid() {
         GridSpec spec = reader.read(Path.of("transition-reference.yaml")).spec();
-        assertThat(spec.massesMsun()).hasSize(32).contains(0.36, 1.18);
+        assertThat(spec.massesMsun()).hasSize(39).contains(0.36, 0.55, 0.85, 1.18);
         assertThat(spec.metallicities()).extracting(MetallicityPoint::z).first().isEqualTo(1e-4);
         assertThat(spec.metallicities()).extracting(MetallicityPoint::z).last().isEqualTo(0.04);
-        assertThat(spec.count()).isEqualTo(256);
+        assertThat(spec.count()).isEqualTo(312);
         assertThat(spec.agesGyr()).containsExactly(0.0);
     }
 
