@@ -46,6 +46,7 @@ final class CheckCommand implements Callable<Integer> {
         OutputTargets.requireWritableDirectory("the run directory (output dir)", runDir);
         TestedRange.print(TestedRange.warnings(file.spec()), parent.err());
         TestedRange.print(OvershootAdvice.warnings(file.spec()), parent.err());
+        TestedRange.print(LongLivedStarsAdvice.warnings(file.spec()), parent.err());
         Optional<RunManifest> earlier = new RunDirectory(runDir).measuredRun();
         RunTimeEstimate estimate = earlier.isPresent()
                 ? RunTimeEstimate.measured(file.spec(), earlier.get().medianSecondsPerModel(), n, runDir.toString())

@@ -118,6 +118,7 @@ final class RunCommand implements Callable<Integer> {
         GridFile file = GridFiles.read(grid, context);
         TestedRange.print(TestedRange.warnings(file.spec()), parent.err());
         TestedRange.print(OvershootAdvice.warnings(file.spec()), parent.err());
+        TestedRange.print(LongLivedStarsAdvice.warnings(file.spec()), parent.err());
         long count = file.spec().count();
         if (count > LARGE_GRID_MODELS && !yes) {
             throw new UsageException("the grid asks for " + count + " models, more than " + LARGE_GRID_MODELS

@@ -1,0 +1,37 @@
+package org.convgrid.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** {@code check} warns when an {@code ms_fraction} grid holds stars that may outlive the 20 Gyr age limit. */
+class LongLivedStarsAdviceTest {
+
+    @TempDir
+    Path work;
+
+    private CliHarness.Execution check(String masses, String ages) throws Exception {
+        Path grid = CliHarness.writeGrid(work, "g.yaml", """
+                title: fractions
+                mass: {values: %s}
+                metallicity:
+                  z: [0.02]
+                  helium: {primordial: 0.2471, enrichment: 1.5}
+                age: %s
+                """.formatted(masses, ages));
+        return CliHarness.in(work, FakeChunkSolver.fast()).execute("check", grid.toString());
+    }
+
+    @Test
+    void fractionsOfStarsBelowPointNineSolarMassesAreWarnedOf() throws Exception {
+        CliHarness.Execution low = check("[0.7, 0.8, 1.0, 2.0]", "{ms_fraction: [0, 0.5, 1]}");
+        assertThat(low.code()).as(low.err()).isZero();
+        assertThat(low.err()).contains("convgrid: warning: ms_fraction ages for stars of 0.7-0.8 Msun: below 0.9 Msun "
+                + "a star may stay on the main sequence beyond the evolution's 20 Gyr age limit");
+        // the same masses at ages in Gyr, or fractions of heavier stars only: nothing to say
+        assertThat(check("[0.7, 0.8, 1.0, 2.0]", "{gyr: [1, 5]}").err()).doesNotContain("ms_fraction ages");
+        assertThat(check("[0.9, 1.0, 2.0]", "{ms_fraction: [0.5]}").err()).doesNotContain("ms_fraction ages");
+    }
+}
