@@ -49,7 +49,7 @@ class CheckCommandTest {
                 + "metallicity: {z: [0.06, 1.0E-5], y: [0.27, 0.25]}\nage: {myr: [100]}\n");
         CliHarness.Execution z = cli.execute("check", zs.toString());
         assertThat(z.code()).isEqualTo(2);
-        assertThat(z.err()).contains("zs must increase: 1e-5 follows 0.06").doesNotContain("1.0E-5");
+        assertThat(z.err()).contains("Z values must increase: 1e-5 follows 0.06").doesNotContain("1.0E-5");
         // "age from birth in Gyr" + "s" said "Gyrs"
         Path ages = CliHarness.writeGrid(work, "ages.yaml", "mass: {values: [1.0]}\n"
                 + "metallicity: {z: 0.014, y: 0.27}\nage: {gyr: [1.0, 0.5]}\n");

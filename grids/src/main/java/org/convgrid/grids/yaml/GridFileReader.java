@@ -277,7 +277,7 @@ public final class GridFileReader {
             return null;
         }
         if (given.get(0).equals("ms_fraction")) {
-            List<Double> fractions = AxisValues.increasing(fields.value("ms_fraction"), "main-sequence fraction",
+            List<Double> fractions = AxisValues.increasingNamed(fields.value("ms_fraction"), "main-sequence fraction",
                     "main-sequence fractions", Range.closed(0.0, 1.0), reader);
             return fractions == null || origin == null ? null : AgeAxis.msFractions(fractions, origin);
         }
@@ -288,8 +288,8 @@ public final class GridFileReader {
                 "age 0 would be the start model; for the zero-age main sequence add origin: zams")
                 : Range.closed(0.0, MAX_AGE_GYR * scale);
         String unit = (origin == AgeOrigin.BIRTH ? " from birth" : "") + (myr ? " in Myr" : " in Gyr");
-        List<Double> ages = AxisValues.increasing(fields.value(given.get(0)), "age" + unit, "ages" + unit, range,
-                reader);
+        List<Double> ages = AxisValues.increasingNamed(fields.value(given.get(0)), "age" + unit, "ages" + unit,
+                range, reader);
         if (ages == null || origin == null) {
             return null;
         }

@@ -51,7 +51,7 @@ final class MetallicityReader {
         } else if (byIron) {
             values = AxisValues.increasing(fields.value(IRON), IRON, "fe_h_dex values", IRON_RANGE, reader);
         } else if (fields.has("z")) {
-            values = AxisValues.increasing(fields.value("z"), "z", "zs", Z_RANGE, reader);
+            values = AxisValues.increasingNamed(fields.value("z"), "z", "Z values", Z_RANGE, reader);
         } else {
             reader.problem(map, GridProblemKind.MISSING_KEY,
                     "metallicity needs 'z', the list of initial metal mass fractions (or 'fe_h_dex', [Fe/H] in dex)");

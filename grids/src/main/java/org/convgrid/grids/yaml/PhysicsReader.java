@@ -49,7 +49,7 @@ final class PhysicsReader {
         MappingFields fields = new MappingFields(map, "physics", KEYS, reader);
         PhysicsOptions d = PhysicsOptions.DEFAULT;
         List<Double> alphas = fields.has("mixing_length")
-                ? AxisValues.distinct(fields.value("mixing_length"), "mixing_length", POSITIVE, reader)
+                ? AxisValues.distinctNamed(fields.value("mixing_length"), "mixing_length", POSITIVE, reader)
                 : List.of(d.mixingLength());
         PresetReader.Preset preset = null;
         if (fields.has("preset")) {
@@ -80,13 +80,13 @@ final class PhysicsReader {
             }
         }
         List<Double> overshoots = overshoot != null
-                ? AxisValues.distinct(overshoot, overshootKey, NON_NEGATIVE, reader)
+                ? AxisValues.distinctNamed(overshoot, overshootKey, NON_NEGATIVE, reader)
                 : fields.has("overshoot") ? null : List.of(d.overshoot());
         List<StabilityCriterion> criteria = fields.has("criterion")
                 ? criteria(fields.value("criterion"), reader)
                 : List.of(d.criterion());
         List<Double> factors = fields.has("opacity_scale")
-                ? AxisValues.distinct(fields.value("opacity_scale"), "opacity_scale", POSITIVE, reader)
+                ? AxisValues.distinctNamed(fields.value("opacity_scale"), "opacity_scale", POSITIVE, reader)
                 : List.of(d.opacityScale());
         OpacityChoice table = fields.has("opacity_table") ? opacityTable(fields.value("opacity_table"), reader)
                 : OpacityChoice.BUILT_IN;

@@ -157,6 +157,27 @@ class GridFileProblemsTest {
                 .containsExactly("mass must be a mapping of keys to values, got '0.3'");
     }
 
+    @Test
+    void valuesAlikeInChartNamesAreRefused() {
+        // a review's z: [0.02, 0.020001] and mixing_length: [1.8, 1.80001]: charts named alike overwrote each other
+        List<GridProblem> problems = problems("""
+                mass: {values: [1]}
+                metallicity: {z: [0.02, 0.020001], y: [0.28, 0.28]}
+                physics: {mixing_length: [1.8, 1.80001]}
+                age: {myr: [100, 100.01]}
+                """);
+        assertThat(problems).extracting(GridProblem::kind).containsOnly(GridProblemKind.DUPLICATE).hasSize(3);
+        assertThat(problems).extracting(GridProblem::message).contains("z 0.020001 reads as 0.02 in chart names and "
+                + "legends, as an earlier value does (they carry 4 significant digits): make the values differ within "
+                + "their first 4 digits");
+        // values that differ within four digits stay
+        new GridFileReader().parse("ok.yaml", """
+                mass: {values: [1]}
+                metallicity: {z: [0.0141, 0.0142], y: [0.28, 0.28]}
+                physics: {mixing_length: [1.801, 1.802]}
+                """);
+    }
+
     private List<GridProblem> problems(String text) {
         GridFileException e = catchThrowableOfType(GridFileException.class, () -> reader.parse("broken.yaml", text));
         assertThat(e).as("expected problems in:%n%s", text).isNotNull();
