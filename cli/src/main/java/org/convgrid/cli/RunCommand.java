@@ -239,7 +239,7 @@ final class RunCommand implements Callable<Integer> {
                         // the refinement can take longer than the sweep (the demo: 25 s after 14 s): say what is
                         // happening and roughly for how long, then count its new models as the sweep counts its own;
                         // a grid of one mass has no bracket, and its summary says "nothing to refine" alone
-                        if (!oneMass(file.spec())) {
+                        if (!oneMass(file.spec()) && !file.spec().ages().fractions()) {
                             err.println("convgrid: " + refiningLine(file.spec(), n));
                             err.flush();
                         }
@@ -296,7 +296,8 @@ final class RunCommand implements Callable<Integer> {
         String tolerance = MessageNumbers.format(grid.transitions().toleranceMsun()) + " Msun";
         if (refined.added().isEmpty()) {
             return "nothing to refine (" + (oneMass(grid) ? "the grid has one mass, so no two models bracket a transition"
-                    : "no bracket wider than " + tolerance) + ")";
+                    : grid.ages().fractions() ? "each star of an ms_fraction grid has ages of its own, so no slice "
+                    + "holds two masses to bracket a transition" : "no bracket wider than " + tolerance) + ")";
         }
         long failedNew = failedOrUnconverged(refined);
         return "transitions refined to " + tolerance + " with " + Counts.of(refined.added().size(), "new model")

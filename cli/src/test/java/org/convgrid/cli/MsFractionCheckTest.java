@@ -6,8 +6,11 @@ import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** {@code check} warns when an {@code ms_fraction} grid holds stars that may outlive the 20 Gyr age limit. */
-class LongLivedStarsAdviceTest {
+/**
+ * {@code check} on {@code ms_fraction} grids: a warning for stars that may outlive the 20 Gyr age limit, and no
+ * refinement promised.
+ */
+class MsFractionCheckTest {
 
     @TempDir
     Path work;
@@ -33,5 +36,12 @@ class LongLivedStarsAdviceTest {
         // the same masses at ages in Gyr, or fractions of heavier stars only: nothing to say
         assertThat(check("[0.7, 0.8, 1.0, 2.0]", "{gyr: [1, 5]}").err()).doesNotContain("ms_fraction ages");
         assertThat(check("[0.9, 1.0, 2.0]", "{ms_fraction: [0.5]}").err()).doesNotContain("ms_fraction ages");
+    }
+
+    @Test
+    void anMsFractionGridIsPromisedNoRefinement() throws Exception {
+        // every star of such a grid has ages of its own, so no slice holds two masses: check promised ~20 new models
+        CliHarness.Execution checked = check("[1.0, 1.2, 1.5, 2.0]", "{ms_fraction: [0.5]}");
+        assertThat(checked.out()).contains("refinement:    none (ms_fraction ages: each star has ages of its own");
     }
 }
