@@ -208,7 +208,13 @@ public final class TabulatedOpacity implements Opacity {
                     "%s: T = %.4g K, rho = %.4g g/cm^3 (log T = %.3f, log R = %.3f) is %s log T [%.3f, %.3f],"
                             + " log R [%.3f, %.3f]", name, temperature, density, lt, lr,
                     status == NOT_IN_TABLE ? "in a cell not in the table, inside" : "outside",
-                    logT[0], last(logT), logR[0], last(logR)), name, temperature, density, lt, lr);
+                    logT[0], last(logT), logR[0], last(logR)) + (status == OUTSIDE_GRID && lt < logT[0]
+                    // a review gave the shipped OPAL file (from log T 3.75) as a table of its own: every model
+                    // failed at ~4600 K, in layers none of the final models has
+                    ? "; nothing is extrapolated, so a table must reach the coolest layer any model visits, also on "
+                    + "the way: atmospheres down to about 0.8 Teff, pre-main-sequence start models, and the 1 Msun "
+                    + "model each zero-age mass line starts from (log T below 3.7; README, Opacity tables)" : ""),
+                    name, temperature, density, lt, lr);
         }
         // log R = log rho - 3 log T + 18: d/dln rho = d/dlog R; d/dln T = d/dlog T - 3 d/dlog R
         return new OpacityValue(Math.exp(LN10 * out[0]), out[2], out[1] - 3.0 * out[2]);

@@ -173,6 +173,11 @@ class TabulatedOpacityTest extends OpacityContractTest {
                 });
         assertThatThrownBy(() -> TABLE.rosselandMean(1e6, 1e6, c)).isInstanceOfSatisfying(ConvgridException.class,
                 e -> assertThat(e.kind()).isEqualTo(ErrorKind.OFF_TABLE));
+        // below the table's coolest row: the message says what a table must cover (hot points do not get it)
+        assertThatThrownBy(() -> TABLE.rosselandMean(1e-9, 1e3, c)).isInstanceOfSatisfying(ConvgridException.class,
+                e -> assertThat(e.getMessage()).contains("a table must reach the coolest layer any model visits"));
+        assertThatThrownBy(() -> TABLE.rosselandMean(1.0, t, c)).isInstanceOfSatisfying(ConvgridException.class,
+                e -> assertThat(e.getMessage()).doesNotContain("coolest layer"));
         assertThatThrownBy(() -> TABLE.rosselandMean(1.0, 1e6, Composition.scaledSolar(0.7, 0.03)))
                 .isInstanceOfSatisfying(ConvgridException.class,
                         e -> assertThat(e.kind()).isEqualTo(ErrorKind.OFF_TABLE));
