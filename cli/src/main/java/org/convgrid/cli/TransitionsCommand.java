@@ -47,8 +47,9 @@ import picocli.CommandLine.ParentCommand;
                 + "every age: each new mass is the slice's own grid request (its composition, physics and age, "
                 + "evolved as a grid model would be; zero-age models seeded by homology from their converged "
                 + "neighbours), until the bracket is narrower than the tolerance (method refined, tolerance_msun); "
-                + "the fully convective limit, the mass above which every star has a core and both edges of the "
-                + "transient window are refined, other crossings only with --all-crossings; when new models reveal "
+                + "the fully convective limit, the mass above which every star has a core, both edges of the "
+                + "transient window and the main-sequence turn-off (turnoff_mass_msun, its side read off the "
+                + "status past_main_sequence) are refined, other crossings only with --all-crossings; when new models reveal "
                 + "crossings between earlier masses, further rounds refine them (at most "
                 + TransitionTables.MAX_ROUNDS + "). The new models are appended to catalogue.ecsv with ids "
                 + "p<i>-z<i>-r<n>-a<i> (r: refined, n counts per slice). A refined run cannot be resumed with 'run --resume'. Needs a finished, merged run.",
@@ -88,6 +89,13 @@ final class TransitionsCommand implements Callable<Integer> {
         if (tolerance != null && !(tolerance > 0.0 && Double.isFinite(tolerance))) {
             throw new UsageException("--tolerance must be a positive mass in Msun (got "
                     + MessageNumbers.format(tolerance) + ")");
+        }
+        // options that only steer the bisection mean nothing without it: said, not ignored (a review's --tolerance
+        // 0.01 without --refine exited 0 and changed nothing)
+        if (!refine && (tolerance != null || allCrossings || threads != null)) {
+            throw new UsageException((tolerance != null ? "--tolerance" : allCrossings ? "--all-crossings"
+                    : "--threads") + " steers the refinement: add --refine (without it the table is recomputed "
+                    + "from the catalogue, no model computed)");
         }
         int n = RunCommand.threads(threads);
         RunDirectory dir = new RunDirectory(context.resolve(runDirectory));
