@@ -77,7 +77,7 @@ class OvershootProfileKeyTest {
                         .allSatisfy(p -> assertThat(p.kind()).isEqualTo(GridProblemKind.RENAMED_KEY))
                         .anySatisfy(p -> {
                             assertThat(p.line()).isEqualTo(5);
-                            assertThat(p.message()).contains("overshoot: {profile: uniform|decaying, length_hp");
+                            assertThat(p.message()).contains("overshoot: {profile: uniform|uniform-ramped|decaying, length_hp");
                         })
                         .anySatisfy(p -> {
                             assertThat(p.line()).isEqualTo(6);

@@ -21,7 +21,7 @@ final class MappingFields {
      */
     static final Map<String, String> RENAMED = Map.of(
             "opacity_factor", "opacity_scale",
-            "overshoot_scheme", "overshoot: {profile: uniform|decaying, length_hp: L}");
+            "overshoot_scheme", "overshoot: {profile: uniform|uniform-ramped|decaying, length_hp: L}");
 
     private final Map<String, NodeTuple> entries = new LinkedHashMap<>();
 
