@@ -22,7 +22,7 @@ class CheckCommandTest {
                 .contains("masses:        39: from 0.1 to 2 Msun")
                 .contains("Z=0.004 Y=0.2545", "Z=0.02 Y=0.2785")
                 .contains("ages:          2: 0, 2 Gyr")
-                .contains("mixing length 1.8 Hp, no overshoot, schwarzschild")
+                .contains("mixing length 1.8 Hp, no overshoot, schwarzschild, opacity x1, krishna_swamy atmosphere")
                 // 1.5 s to start, then on 2 threads: 2 lines' ladders (0.5 s each), 78 zero-age models (0.005 s
                 // each) and 78 evolutions from them (0.2 s each at the demo's 600 Myr, x1.7 to 2 Gyr: 0.34 s):
                 // 1.5 + (1 + 0.39 + 26.52) / 2 = 15.5 s

@@ -49,7 +49,10 @@ public final class GridSummary {
         for (PhysicsOptions p : physics) {
             lines.add("  mixing length " + MessageNumbers.format(p.mixingLength()) + " Hp, "
                     + OvershootWords.describe(p) + ", " + p.criterion().name().toLowerCase(Locale.ROOT)
-                    + ", opacity x" + MessageNumbers.format(p.opacityScale()));
+                    + ", opacity x" + MessageNumbers.format(p.opacityScale())
+                    // what a preset or the grid chose, so that check shows it before a run (a review could not)
+                    + (p.usesOpacityTable() ? " (table " + p.opacityTable() + ")" : "")
+                    + ", " + p.atmosphere().label() + " atmosphere");
         }
         lines.add("models:        " + g.count());
         lines.add("estimate:      about " + Durations.describe(estimate.seconds()) + " on "
