@@ -48,7 +48,7 @@ final class ProbeCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         requireWithin("--temp-k", temperature, MIN_TEMPERATURE_K, MAX_TEMPERATURE_K, "K");
         requireWithin("--density-cgs", density, MIN_DENSITY_CGS, MAX_DENSITY_CGS, "g/cm^3");
-        // the range star and a grid's opacity_scale allow; beyond it the opacity factor fails deep in the physics
+        // the range star allows; beyond it the opacity factor fails deep in the physics
         if (!(opacityScale > 0 && opacityScale <= 100)) {
             throw new UsageException("--opacity-scale must be above 0 and at most 100 (got "
                     + MessageNumbers.format(opacityScale) + ")");

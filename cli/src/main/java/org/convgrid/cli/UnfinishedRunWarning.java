@@ -33,7 +33,7 @@ final class UnfinishedRunWarning {
             // a run or merge stopped before its manifest, or a manifest deleted: a review drew such a directory's
             // charts without a word (a merge cut short: zones.csv and life events missing)
             err.println("convgrid: warning: " + layout.root() + " has no " + RunLayout.MANIFEST + ": whether its run "
-                    + "finished is unknown (a run or merge cut short?); what follows covers the rows of "
+                    + "finished is unknown (a merge cut short, or the manifest deleted?); what follows covers the rows of "
                     + RunLayout.CATALOGUE + " only");
             err.flush();
             return;

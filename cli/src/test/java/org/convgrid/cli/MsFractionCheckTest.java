@@ -42,6 +42,33 @@ class MsFractionCheckTest {
     void anMsFractionGridIsPromisedNoRefinement() throws Exception {
         // every star of such a grid has ages of its own, so no slice holds two masses: check promised ~20 new models
         CliHarness.Execution checked = check("[1.0, 1.2, 1.5, 2.0]", "{ms_fraction: [0.5]}");
-        assertThat(checked.out()).contains("refinement:    none (ms_fraction ages: each star has ages of its own");
+        assertThat(checked.out()).contains("refinement:    none (ms_fraction ages are not refined");
+    }
+
+    @Test
+    void anMsFractionGridFromTheZamsRunsToTheEndWithoutRefinement() throws Exception {
+        // with origin zams every fraction-0 row sits at age 0, so that slice holds all the masses: refining it
+        // appended rows without an age and the run failed ("slice ... has no grid model")
+        Path grid = CliHarness.writeGrid(work, "z.yaml", """
+                title: fractions from the ZAMS
+                mass: {values: [0.9, 1.0, 1.1, 1.2, 1.3, 1.4]}
+                metallicity:
+                  z: [0.02]
+                  helium: {primordial: 0.2471, enrichment: 1.5}
+                age: {ms_fraction: [0], origin: zams}
+                """);
+        // the fake answers a fraction as the real solver does, at the age it stands for (here 1 Gyr per unit)
+        FakeChunkSolver fake = FakeChunkSolver.fast();
+        org.convgrid.engine.batch.ChunkSolver fractions = chunk -> fake.solve(chunk.stream()
+                .map(r -> r.withAge(new org.convgrid.engine.request.Age.SinceZeroAge(
+                        ((org.convgrid.engine.request.Age.MainSequenceFraction) r.age()).fraction()
+                                * org.convgrid.engine.units.Constants.GYR))).toList());
+        CliHarness.Execution run = new CliHarness(new CommandContext(g -> fractions, java.util.List.of(),
+                java.util.Map.of(), work, false, new FakeMassLines(java.util.Set.of()))).execute("run",
+                grid.toString(), "--out", "z");
+        assertThat(run.code()).as(run.err()).isZero();
+        assertThat(run.out()).contains("nothing to refine (ms_fraction ages are not refined");
+        assertThat(run.err()).doesNotContain("refining the transition masses");
+        assertThat(CliHarness.tableLines(work.resolve("z/catalogue.ecsv"))).hasSize(1 + 6);
     }
 }

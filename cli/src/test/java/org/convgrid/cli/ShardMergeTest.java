@@ -149,6 +149,9 @@ class ShardMergeTest {
         assertThat(mixed.code()).isZero();
         assertThat(mixed.err()).contains("the shards were computed by different builds (").contains("0123abc: ")
                 .contains("4567def: ").contains("test-survey-shard-2-of-2");
+        // then the merging build is recorded, neither shard's
+        assertThat(RunManifestReader.read(Files.readString(work.resolve("mixed/manifest.yaml"))).toolCommit())
+                .isNotIn("0123abc", "4567def");
     }
 
     @Test
@@ -178,7 +181,7 @@ class ShardMergeTest {
         CliHarness.Execution again = run("merge", "runs/test-survey-shard-1-of-2", "runs/test-survey-shard-2-of-2",
                 "--out", "cut");
         assertThat(again.code()).isEqualTo(2);
-        assertThat(again.err()).contains("holds a catalogue.ecsv but no manifest.yaml: a merge or run cut short")
+        assertThat(again.err()).contains("holds a catalogue.ecsv but no manifest.yaml: a merge cut short (or a manifest deleted)")
                 .contains("remove the directory and merge again");
     }
 

@@ -289,12 +289,15 @@ class TransitionsCommandTest {
         assertThat(harness(new FakeMassLines(Set.of())).execute("transitions", "done", "--refine").code())
                 .isEqualTo(0);
         byte[] catalogue = Files.readAllBytes(dir.resolve("catalogue.ecsv"));
+        byte[] manifest = Files.readAllBytes(dir.resolve("manifest.yaml"));
         CliHarness.Execution resumed = harness(new FakeMassLines(Set.of())).execute("run", "--no-refine",
                 work.resolve("survey.yaml").toString(), "--out", "done", "--resume", "--quiet");
         assertThat(resumed.code()).isEqualTo(2);
         assertThat(resumed.err()).contains("holds models added by 'convgrid transitions --refine'")
                 .contains("cannot be resumed");
         assertThat(Files.readAllBytes(dir.resolve("catalogue.ecsv"))).isEqualTo(catalogue);
+        // refused before anything is written: the manifest still says the run finished
+        assertThat(Files.readAllBytes(dir.resolve("manifest.yaml"))).isEqualTo(manifest);
         CliHarness.Execution merged = harness(new FakeMassLines(Set.of())).execute("merge", "done", "--out", "m");
         assertThat(merged.code()).isEqualTo(2);
         assertThat(merged.err()).contains("40 models added by 'convgrid transitions --refine'");

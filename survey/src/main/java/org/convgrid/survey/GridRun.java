@@ -224,14 +224,15 @@ public final class GridRun {
                     + shard(shard));
         }
         ShardPlan plan = new ShardPlan(s.grid().spec(), shard, MASSES_PER_CHUNK);
+        // its refusals (a refined run, rows not this grid's) come before anything is written
+        KeptCatalogue kept = KeptCatalogue.inspectAndTrim(dir.catalogue(), plan);
         if (!old.isUnfinished()) {
-            // the resume may cut rows back (a star lacking its files, a row cut short): until the end, the manifest
-            // must not say the run is finished, or a process killed outright (kill -9, out of memory) would leave a
-            // finished manifest beside a shorter catalogue (a review found exactly that); counts as at a run's start
+            // the resume may cut rows back (a star lacking its files) and computes them again: until its end the
+            // manifest must not say the run is finished, or a process killed outright (kill -9, out of memory)
+            // leaves a finished manifest beside a shorter catalogue; counts as at a run's start
             AtomicFiles.writeString(dir.manifest(), RunManifestWriter.toYaml(
                     old.unfinished(Map.of(), old.medianSecondsPerModel(), plan.count())));
         }
-        KeptCatalogue kept = KeptCatalogue.inspectAndTrim(dir.catalogue(), plan);
         MissingStarFiles.Recomputed recomputed = !checksTracks ? null : MissingStarFiles.cutBackToFirstLacking(dir,
                 s.grid().spec(), GridIronAbundance.of(s.grid().spec()));
         if (recomputed != null) {

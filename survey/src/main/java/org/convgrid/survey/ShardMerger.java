@@ -83,16 +83,18 @@ public final class ShardMerger {
         try {
             ordered = rows.inGridOrder(grid);
         } catch (RunSetupException e) {
-            throw new RunSetupException(e.getMessage() + unfinished(shards, manifests));
+            // an unfinished shard explains missing models only
+            throw e.getMessage().contains(" missing from every shard") ? new RunSetupException(e.getMessage()
+                    + unfinished(shards, manifests)) : e;
         }
         for (Path shard : shards) {
             refuseLackingFiles(new RunDirectory(shard), grid);
         }
-        if (out.holdsRun() && !Files.exists(out.manifest())) {
-            // a merge stopped by a signal leaves its catalogue before the manifest it writes last (a review)
+        if (Files.exists(out.catalogue()) && !Files.exists(out.manifest())) {
+            // a merge stopped by a signal leaves its catalogue before the manifest it writes last
             throw new RunSetupException(out.root() + " holds a " + RunLayout.CATALOGUE + " but no "
-                    + RunLayout.MANIFEST + ": a merge or run cut short, not a finished run; remove the directory and "
-                    + "merge again (the shards are untouched)");
+                    + RunLayout.MANIFEST + ": a merge cut short (or a manifest deleted), not a finished run; remove "
+                    + "the directory and merge again (the shards are untouched)");
         }
         if (out.holdsRun()) {
             throw new RunSetupException(out.root() + " already holds a run; merge into a new directory");

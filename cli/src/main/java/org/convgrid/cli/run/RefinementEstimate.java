@@ -103,10 +103,9 @@ public record RefinementEstimate(long models, double seconds, String basis) {
             return none("none (one mass: no bracket to narrow)");
         }
         if (grid.ages().fractions()) {
-            // each star's fraction is an age of its own, so every (Z, age) slice holds one star (a review was
-            // promised about 20 new models, and the run then said there was nothing to refine)
-            return none("none (ms_fraction ages: each star has ages of its own, so no slice holds two masses to "
-                    + "bracket a transition)");
+            // the refiner leaves such grids alone (TransitionRefiner): a fraction is an age of each star's own
+            return none("none (ms_fraction ages are not refined: a fraction is an age of each star's own, so a new "
+                    + "mass would not sit at its slice's age)");
         }
         List<Double> gaps = new ArrayList<>();
         for (int i = 1; i < masses.size(); i++) {

@@ -47,14 +47,18 @@ final class AxisValues {
 
     /**
      * Significant digits of the values in chart file names, titles and legends (the plotting module's labels): two
-     * Z or physics values alike at these digits made charts overwrite each other and the HR diagram fail with the
-     * chart library's "series name already used" (a review's z: [0.02, 0.020001]).
+     * Z or physics values alike at these digits would make charts overwrite each other and the HR diagram fail with
+     * the chart library's "series name already used".
      */
     static final int CHART_DIGITS = 4;
 
     private enum Order { INCREASING, DISTINCT, ANY }
 
-    private static String chartName(double v) {
+    /**
+     * A value as the chart labels write it: {@link #CHART_DIGITS} significant digits, trailing zeros stripped (the
+     * plotting module's {@code SliceLabels.number}; keep the two alike).
+     */
+    static String chartName(double v) {
         return new java.math.BigDecimal(v).round(new java.math.MathContext(CHART_DIGITS)).stripTrailingZeros()
                 .toPlainString();
     }

@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.Optional;
 import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.grids.GridProblemKind;
+import org.convgrid.grids.words.MessageNumbers;
 import org.convgrid.grids.AgeAxis;
 import org.convgrid.grids.GridFile;
 import org.convgrid.grids.GridFileException;
@@ -288,12 +289,28 @@ public final class GridFileReader {
                 "age 0 would be the start model; for the zero-age main sequence add origin: zams")
                 : Range.closed(0.0, MAX_AGE_GYR * scale);
         String unit = (origin == AgeOrigin.BIRTH ? " from birth" : "") + (myr ? " in Myr" : " in Gyr");
-        List<Double> ages = AxisValues.increasingNamed(fields.value(given.get(0)), "age" + unit, "ages" + unit,
-                range, reader);
+        List<Double> ages = AxisValues.increasing(fields.value(given.get(0)), "age" + unit, "ages" + unit, range,
+                reader);
         if (ages == null || origin == null) {
             return null;
         }
-        return AgeAxis.gyr(ages.stream().map(a -> a / scale).toList(), origin);
+        List<Double> gyr = ages.stream().map(a -> a / scale).toList();
+        // charts name an age in Myr below 1 Gyr, else in Gyr, at four significant digits: 1000.4 and 1000.5 Myr
+        // both read "1 Gyr", and charts of the two ages overwrote each other
+        java.util.Map<String, Double> named = new java.util.HashMap<>();
+        for (double age : gyr) {
+            String name = age > 0.0 && age < 1.0 ? AxisValues.chartName(age * MYR_PER_GYR) + " Myr"
+                    : AxisValues.chartName(age) + " Gyr";
+            Double earlier = named.putIfAbsent(name, age);
+            if (earlier != null) {
+                reader.problem(fields.value(given.get(0)), GridProblemKind.DUPLICATE, "ages " + MessageNumbers.format(
+                        earlier * scale) + " and " + MessageNumbers.format(age * scale) + unit + " both read as "
+                        + name + " in chart names and legends (" + AxisValues.CHART_DIGITS + " significant digits, "
+                        + "Myr below 1 Gyr): make them differ within those digits");
+                return null;
+            }
+        }
+        return AgeAxis.gyr(gyr, origin);
     }
 
     private static boolean validPath(String text) {

@@ -122,11 +122,21 @@ final class MetallicityReader {
     private static List<Double> ironToMetals(List<Double> irons, IronToMetals iron, HeliumLaw law, List<Double> ys,
                                              List<Node> nodes, NodeReader reader) {
         List<Double> zs = new ArrayList<>();
+        // chart file names carry the Z, at four significant digits, whatever the grid gave
+        java.util.Map<String, Double> named = new java.util.HashMap<>();
         for (int i = 0; i < irons.size(); i++) {
             double z = law != null ? iron.metals(irons.get(i), law) : iron.metals(irons.get(i), ys.get(i));
+            Double earlier = Z_RANGE.contains(z) ? named.putIfAbsent(AxisValues.chartName(z), irons.get(i)) : null;
             if (!Z_RANGE.contains(z)) {
                 reader.problem(nodes.get(i), GridProblemKind.OUT_OF_RANGE,
                         "fe_h_dex = " + MessageNumbers.format(irons.get(i)) + " " + iron.zOutsideRange(z));
+                zs.add(null);
+            } else if (earlier != null) {
+                reader.problem(nodes.get(i), GridProblemKind.DUPLICATE, "fe_h_dex = "
+                        + MessageNumbers.format(irons.get(i)) + " gives Z = " + MessageNumbers.format(z) + ", which "
+                        + "reads as " + AxisValues.chartName(z) + " in chart names, as the Z of fe_h_dex = "
+                        + MessageNumbers.format(earlier) + " does (" + AxisValues.CHART_DIGITS + " significant "
+                        + "digits): make the values differ more");
                 zs.add(null);
             } else {
                 zs.add(z);

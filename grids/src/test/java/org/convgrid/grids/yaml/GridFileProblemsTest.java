@@ -167,6 +167,19 @@ class GridFileProblemsTest {
                 age: {myr: [100, 100.01]}
                 """);
         assertThat(problems).extracting(GridProblem::kind).containsOnly(GridProblemKind.DUPLICATE).hasSize(3);
+        // ages are named in Myr below 1 Gyr, else in Gyr: 1000.4 and 1000.5 Myr both read "1 Gyr"
+        assertThat(problems("""
+                mass: {values: [1]}
+                metallicity: {z: [0.02], y: [0.28]}
+                age: {myr: [1000.4, 1000.5]}
+                """)).extracting(GridProblem::message).singleElement().asString()
+                .contains("both read as 1 Gyr in chart names");
+        // a grid in [Fe/H] is named by the Z it gives
+        assertThat(problems("""
+                mass: {values: [1]}
+                metallicity: {fe_h_dex: [0.0, 0.00001], helium: {primordial: 0.2471, enrichment: 1.5}}
+                """)).extracting(GridProblem::message).singleElement().asString()
+                .contains("in chart names, as the Z of fe_h_dex = 0 does");
         assertThat(problems).extracting(GridProblem::message).contains("z 0.020001 reads as 0.02 in chart names and "
                 + "legends, as an earlier value does (they carry 4 significant digits): make the values differ within "
                 + "their first 4 digits");

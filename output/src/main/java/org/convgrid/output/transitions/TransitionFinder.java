@@ -93,6 +93,8 @@ public record TransitionFinder(double coreMassFractionThreshold) {
     private static final String TRANSIENT_ABOVE_WORDS = "; the lowest window of cores above the fully convective limit "
             + "is the transient one";
     private static final String OTHER_WINDOWS_WORDS = ", others at ";
+    /** How the notes name cores below the fully convective limit when no window lies above it. */
+    private static final String CORES_BELOW_WORDS = "; cores below the fully convective limit at ";
     private static final String MASS = "\\d+(?:\\.\\d+)?";
     private static final String RANGE = MASS + "(?:-" + MASS + ")?";
     private static final Pattern OTHER_WINDOWS = Pattern.compile("(?:" + Pattern.quote(TRANSIENT_ONE_WORDS) + "|"
@@ -166,7 +168,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
                 : new TransitionEstimate(Double.NaN, null, coreCrossings, 0);
         Span window = transientWindow(coreSearch, coreCrossings, fc);
         describeFullyConvective(fc, usable, byMass, notes);
-        describeCore(core, window, coredAtTop, coreSearch, coreSearch.size() < usable.size(), byMass, notes);
+        describeCore(core, fc, window, coredAtTop, coreSearch, coreSearch.size() < usable.size(), byMass, notes);
         describeRecededCores(usable.subList(coreSearch.size(), usable.size()), notes);
         describePastMainSequence(byMass, notes);
         MainSequenceTurnoff.describe(turnoff, byMass, notes);
@@ -199,26 +201,20 @@ public record TransitionFinder(double coreMassFractionThreshold) {
     }
 
     /**
-     * The lowest run of cored models above the fully convective limit entered from below and left again above: from
-     * the upper end of its crossing into a core to the lower end of its crossing out; the lowest such run anywhere
-     * when none lies above the limit (or there is no limit); null when there is none. Runs below the limit (a star
-     * with a core, then fully convective again above it: the stars just above the limit cycle) are named in the
-     * notes instead: a review found such a run reported as the window, below the limit the same row gave.
+     * The lowest run of cored models above the fully convective limit (anywhere when there is no limit) entered from
+     * below and left again above: from the upper end of its crossing into a core to the lower end of its crossing
+     * out; null when there is none. The table's window is the one just above the limit; runs below it (a star with a
+     * core, fully convective again above it: the stars near the limit cycle) are named in the notes instead.
      */
     private Span transientWindow(List<CatalogueRow> usable, List<Span> coreCrossings, TransitionEstimate fc) {
-        Span lowest = null;
         for (int i = 0; i + 1 < coreCrossings.size(); i++) {
             double entry = coreCrossings.get(i).hi();
             boolean into = usable.stream().anyMatch(r -> r.massMsun() == entry && hasConvectiveCore(r));
-            if (into) {
-                Span run = new Span(entry, coreCrossings.get(i + 1).lo());
-                if (!fc.found() || entry > fc.massMsun()) {
-                    return run;
-                }
-                lowest = lowest == null ? run : lowest;
+            if (into && (!fc.found() || entry > fc.massMsun())) {
+                return new Span(entry, coreCrossings.get(i + 1).lo());
             }
         }
-        return lowest;
+        return null;
     }
 
     private static boolean endsAtRefinedModel(Span span, List<CatalogueRow> rows) {
@@ -242,8 +238,9 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         }
     }
 
-    private void describeCore(TransitionEstimate core, Span window, boolean coredAtTop, List<CatalogueRow> searched,
-                              boolean someLeftOut, List<CatalogueRow> byMass, List<String> notes) {
+    private void describeCore(TransitionEstimate core, TransitionEstimate fc, Span window, boolean coredAtTop,
+                              List<CatalogueRow> searched, boolean someLeftOut, List<CatalogueRow> byMass,
+                              List<String> notes) {
         long cored = searched.stream().filter(this::hasConvectiveCore).count();
         if (!core.found()) {
             notes.add(cored == searched.size()
@@ -254,11 +251,12 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         // a clean slice crosses once (no window) or three times (window, then the lasting core)
         int expected = (window == null ? 0 : 2) + (coredAtTop ? 1 : 0);
         if (core.crossings().size() > expected) {
-            boolean coresBelow = window != null && searched.stream().anyMatch(r -> r.massMsun() < window.lo()
+            boolean coresBelow = fc.found() && searched.stream().anyMatch(r -> r.massMsun() < fc.massMsun()
                     && hasConvectiveCore(r));
             notes.add("convective core changes " + StateCrossings.timesInWords(core.crossings().size()) + " with mass"
-                    + (window == null ? "" : (coresBelow ? TRANSIENT_ABOVE_WORDS : TRANSIENT_ONE_WORDS)
-                    + otherWindows(searched, window, core)));
+                    + (window != null ? (coresBelow ? TRANSIENT_ABOVE_WORDS : TRANSIENT_ONE_WORDS)
+                    + otherWindows(searched, window, core)
+                    : coresBelow ? CORES_BELOW_WORDS + coresBelowText(searched, fc) + " Msun" : ""));
         }
         if (core.skippedInBracket() > 0) {
             notes.add("convective core bracket widened past " + SkippedModelsText.of(byMass, core.bracket()));
@@ -309,9 +307,28 @@ public record TransitionFinder(double coreMassFractionThreshold) {
                 .collect(Collectors.joining(", ")) + " Msun";
     }
 
+    /** The runs of cored models below the fully convective limit, as {@link MassRangeText} writes them. */
+    private String coresBelowText(List<CatalogueRow> searched, TransitionEstimate fc) {
+        List<Span> runs = new ArrayList<>();
+        Span run = null;
+        for (CatalogueRow r : searched) {
+            double m = r.massMsun();
+            if (m < fc.massMsun() && hasConvectiveCore(r)) {
+                run = run == null ? new Span(m, m) : new Span(run.lo(), m);
+            } else if (run != null) {
+                runs.add(run);
+                run = null;
+            }
+        }
+        if (run != null) {
+            runs.add(run);
+        }
+        return runs.stream().map(MassRangeText::of).collect(Collectors.joining(", "));
+    }
+
     /**
-     * The other windows of cores a slice's notes name ({@link #otherWindows}: cored runs above the transient window
-     * and below the lasting core), read back so that a chart can draw them beside the reported window; empty when
+     * The other windows of cores a slice's notes name ({@link #otherWindows}: cored runs other than the transient
+     * window below the lasting core, those below the fully convective limit too), read back so that a chart can draw them beside the reported window; empty when
      * the notes name none. The demo's Z = 0.014, 600 Myr slice reports 0.314-0.323 Msun and names 0.3266-0.575
      * behind one coreless model at 0.325.
      */

@@ -103,10 +103,20 @@ class TransientCoreWindowTest {
         assertThat(t.notes()).contains("the lowest window of cores above the fully convective limit is the transient "
                 + "one, others at 0.33125-0.3375 Msun");
         assertThat(TransitionFinder.otherWindowsNoted(t.notes())).containsExactly(new Span(0.33125, 0.3375));
-        // cores below the limit and none above it: the lowest run is still the one reported
+        // cores below the limit and none above it (the star above the limit goes straight into a lasting core): no
+        // window, and the notes name the cores below
         TransitionRow onlyBelow = finder.find(List.of(ok(0.33, FC, 1), ok(0.33125, BOTH, 0.01), ok(0.33875, FC, 1),
-                ok(0.34, ENV, 0), ok(1.3, BOTH, 0.05))).get(0);
-        assertThat(onlyBelow.transientCore()).isEqualTo(new Span(0.33125, 0.33125));
+                ok(0.34, BOTH, 0.02), ok(1.3, BOTH, 0.05))).get(0);
+        assertThat(onlyBelow.fullyConvective().massMsun()).isEqualTo(0.33875);
+        assertThat(onlyBelow.transientCore()).isNull();
+        assertThat(onlyBelow.convCoreOnset().massMsun()).isEqualTo(0.34);
+        assertThat(onlyBelow.notes()).contains("convective core changes 3 times with mass; cores below the fully "
+                + "convective limit at 0.33125 Msun");
+        assertThat(TransitionFinder.otherWindowsNoted(onlyBelow.notes())).isEmpty();
+        // no fully convective model: the window wording stays the plain one
+        TransitionRow noLimit = finder.find(List.of(ok(0.3, BOTH, 0.01), ok(0.32, ENV, 0), ok(0.35, BOTH, 0.02),
+                ok(0.4, ENV, 0), ok(0.45, BOTH, 0.01), ok(0.5, ENV, 0), ok(1.3, BOTH, 0.05))).get(0);
+        assertThat(noLimit.notes()).doesNotContain("above the fully convective limit");
     }
 
     @Test

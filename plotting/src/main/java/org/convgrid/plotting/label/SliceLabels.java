@@ -62,6 +62,28 @@ public final class SliceLabels {
     }
 
     /**
+     * A transition's bracket as the report shows it beside its mass: a grid bracket's ends exactly (grid masses,
+     * {@link #number}), a refined one's rounded outward (low end down, high end up) at the decimals its mass is
+     * given to ({@link #massToAccuracy}), so the bracket shown always holds the mass shown: 0.328125-0.3296875 refined
+     * to 0.002 reads {@code 0.328\u20130.330} beside 0.328, 1.210937-1.2125 {@code 1.210\u20131.213} beside 1.213.
+     *
+     * @param toleranceMsun the refinement's tolerance; NaN for a bracket read off the grid
+     */
+    public static String bracketToAccuracy(Span bracket, double toleranceMsun) {
+        double width = bracket.hi() - bracket.lo();
+        if (!(Double.isFinite(toleranceMsun) && toleranceMsun > 0) || !(width > 0)) {
+            return number(bracket.lo()) + "\u2013" + number(bracket.hi());
+        }
+        double accuracy = width >= toleranceMsun ? width : toleranceMsun;
+        int decimals = (int) Math.max(0, Math.min(6, Math.ceil(-Math.log10(accuracy) - 1e-9)));
+        String lo = new BigDecimal(CsvNumbers.format(bracket.lo())).setScale(decimals, RoundingMode.FLOOR)
+                .toPlainString();
+        String hi = new BigDecimal(CsvNumbers.format(bracket.hi())).setScale(decimals, RoundingMode.CEILING)
+                .toPlainString();
+        return lo + "\u2013" + hi;
+    }
+
+    /**
      * A range of transition masses, each end rounded to the stated tolerance ({@link #massToAccuracy}), joined by an
      * en dash: {@code 0.316\u20130.736}; one mass, {@code 0.287}, when both ends come out alike (a window of small
      * cores found at a single refinement mass must not read as a range).

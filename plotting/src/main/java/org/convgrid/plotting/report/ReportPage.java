@@ -349,12 +349,9 @@ public final class ReportPage {
     private static void estimate(StringBuilder b, TransitionEstimate e, double toleranceMsun) {
         b.append("<td class=\"num\">")
                 .append(e.found() ? SliceLabels.massToAccuracy(e.massMsun(), e.bracket(), toleranceMsun) : "not found")
-                // the ends rounded as the value is (half up, to the stated accuracy): at four significant digits from
-                // their binary values a review saw 0.328 beside 0.3281-0.3297 and 1.213 beside 1.211-1.212
+                // a refined bracket rounded outward at the mass's decimals, so that it holds the mass as shown
                 .append("</td><td class=\"num\">").append(e.found()
-                        ? SliceLabels.massToAccuracy(e.bracket().lo(), e.bracket(), toleranceMsun) + "\u2013"
-                        + SliceLabels.massToAccuracy(e.bracket().hi(), e.bracket(), toleranceMsun) : "")
-                .append("</td>");
+                        ? SliceLabels.bracketToAccuracy(e.bracket(), toleranceMsun) : "").append("</td>");
     }
 
     private static void failures(StringBuilder b, RunData run) {

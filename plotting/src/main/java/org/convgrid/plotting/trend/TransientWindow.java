@@ -7,8 +7,8 @@ import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionRow;
 
 /**
- * A window of small central cores above the fully convective limit in one slice: the one transitions.csv reports,
- * or another that its notes name above it.
+ * A window of small central cores in one slice: the one transitions.csv reports (just above the fully convective
+ * limit), or another that its notes name (above it, or below the limit where stars near it cycle).
  *
  * @param zInit initial metal mass fraction
  * @param ageGyr age, Gyr

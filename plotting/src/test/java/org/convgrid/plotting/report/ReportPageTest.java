@@ -115,7 +115,19 @@ class ReportPageTest {
                 null, TransitionMethod.REFINED, 0.002, "");
         String html = ReportPage.html(new RunData(rows, List.of(refined), true, null, Map.of(), List.of()), dir);
         assertThat(html).contains("<td class=\"num\">0.328</td><td class=\"num\">0.328\u20130.330</td>",
-                "<td class=\"num\">1.211\u20131.213</td>").doesNotContain("0.3281", "1.212");
+                "<td class=\"num\">1.213</td><td class=\"num\">1.210\u20131.213</td>")
+                .doesNotContain("0.3281", "1.212");
+        // a grid bracket keeps its ends, the grid's masses (rounded to its width they read 0.3-0.4 for 0.25-0.35)
+        TransitionRow grid = new TransitionRow(found.slice(), found.yInit(),
+                new TransitionEstimate(0.25, new Span(0.25, 0.35), List.of(new Span(0.25, 0.35)), 0),
+                new TransitionEstimate(2.5, new Span(1.5, 2.5), List.of(new Span(1.5, 2.5)), 0),
+                null, TransitionMethod.GRID, Double.NaN, "");
+        String gridHtml = ReportPage.html(new RunData(rows, List.of(grid), true, null, Map.of(), List.of()), dir);
+        assertThat(gridHtml).contains("<td class=\"num\">0.25\u20130.35</td>", "<td class=\"num\">1.5\u20132.5</td>");
+        // a refined bracket whose high end rounds up past the mass's own digit still holds it: 0.33875 in
+        // 0.33875-0.34 reads 0.339 beside 0.338-0.340
+        assertThat(org.convgrid.plotting.label.SliceLabels.bracketToAccuracy(new Span(0.33875, 0.34), 0.002))
+                .isEqualTo("0.338\u20130.340");
     }
 
     @Test

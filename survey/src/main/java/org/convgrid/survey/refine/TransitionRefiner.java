@@ -139,6 +139,12 @@ public final class TransitionRefiner {
                             + MessageNumbers.format(slice.zInit())
                             + " has no grid model; the catalogue was edited"));
             ModelRequest template = ModelIds.gridRequest(grid, gridRow.modelId());
+            if (template.age() instanceof org.convgrid.engine.request.Age.MainSequenceFraction) {
+                // a fraction is an age of each star's own: a new mass would sit at an age of its own, off the
+                // slice (with origin zams every fraction-0 slice holds all the masses, and refining it broke the
+                // catalogue's slices), so ms_fraction grids are not refined
+                continue;
+            }
             Map<Double, CatalogueRow> failed = new HashMap<>();
             members.get(slice).stream().filter(r -> !r.isOk() || r.structureClass() == null)
                     .forEach(r -> failed.put(r.massMsun() * Constants.M_SUN, r));
