@@ -289,31 +289,24 @@ public record TransitionFinder(double coreMassFractionThreshold) {
      */
     private String otherWindows(List<CatalogueRow> searched, Span window, TransitionEstimate core) {
         double lasting = core.found() ? core.massMsun() : Double.POSITIVE_INFINITY;
-        List<Span> runs = new ArrayList<>();
-        Span run = null;
-        for (CatalogueRow r : searched) {
-            double m = r.massMsun();
-            if ((m > window.hi() || m < window.lo()) && m < lasting && hasConvectiveCore(r)) {
-                run = run == null ? new Span(m, m) : new Span(run.lo(), m);
-            } else if (run != null) {
-                runs.add(run);
-                run = null;
-            }
-        }
-        if (run != null) {
-            runs.add(run);
-        }
+        List<Span> runs = coredRuns(searched, m -> (m > window.hi() || m < window.lo()) && m < lasting);
         return runs.isEmpty() ? "" : OTHER_WINDOWS_WORDS + runs.stream().map(MassRangeText::of)
                 .collect(Collectors.joining(", ")) + " Msun";
     }
 
     /** The runs of cored models below the fully convective limit, as {@link MassRangeText} writes them. */
     private String coresBelowText(List<CatalogueRow> searched, TransitionEstimate fc) {
+        return coredRuns(searched, m -> m < fc.massMsun()).stream().map(MassRangeText::of)
+                .collect(Collectors.joining(", "));
+    }
+
+    /** The unbroken runs of cored models among {@code searched} (in increasing mass) whose mass {@code counts}. */
+    private List<Span> coredRuns(List<CatalogueRow> searched, java.util.function.DoublePredicate counts) {
         List<Span> runs = new ArrayList<>();
         Span run = null;
         for (CatalogueRow r : searched) {
             double m = r.massMsun();
-            if (m < fc.massMsun() && hasConvectiveCore(r)) {
+            if (counts.test(m) && hasConvectiveCore(r)) {
                 run = run == null ? new Span(m, m) : new Span(run.lo(), m);
             } else if (run != null) {
                 runs.add(run);
@@ -323,7 +316,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         if (run != null) {
             runs.add(run);
         }
-        return runs.stream().map(MassRangeText::of).collect(Collectors.joining(", "));
+        return runs;
     }
 
     /**
