@@ -188,7 +188,9 @@ final class StarCommand implements Callable<Integer> {
                 ? BirthAbundances.of(1.0 - y - metals, metals) : ZeroAgeRequests.initialComposition(request);
         // the star's life events, for the note on a core that has joined the envelope (one star, one call)
         AtomicReference<LifeEvents> lifeEvents = new AtomicReference<>();
-        GridRequests.Answer answer = answer(request, lifeEvents);
+        // a physics failure while the model is built is a failed row with its reason (GridRequests), as in a grid
+        GridRequests.Answer answer = new GridRequests((first, points, events) -> lifeEvents.set(events),
+                MainSequenceEvolver.Settings.DEFAULT).answers(List.of(request)).get(0);
         ModelOutcome outcome = answer.outcome();
         if (format == OutputFormat.CSV) {
             // fe_h_dex against the Sun --fe-h-dex was measured against (the default one with --z)
@@ -228,24 +230,6 @@ final class StarCommand implements Callable<Integer> {
             main.err().println("profile: " + model.profile().size() + " shells written to " + target);
         }
         return ExitCodes.OK;
-    }
-
-    /**
-     * The star's answer, as a grid's sweep gives it: a physics failure the engine raises while building the model
-     * (an equation of state or opacity table that cannot answer, say) is the model's status {@code failed} with
-     * the engine's reason, exit 3 like a grid with such a row, not a software failure (exit 1).
-     */
-    private static GridRequests.Answer answer(ModelRequest request, AtomicReference<LifeEvents> lifeEvents) {
-        try {
-            return new GridRequests((first, points, events) -> lifeEvents.set(events),
-                    MainSequenceEvolver.Settings.DEFAULT).answers(List.of(request)).get(0);
-        } catch (ConvgridException e) {
-            if (e.kind().isUsageError()) {
-                throw e;
-            }
-            return new GridRequests.Answer(new ModelOutcome.Failed(request, ModelStatus.FAILED, e.getMessage(),
-                    ModelOutcome.NO_MODEL_SOLVED), null);
-        }
     }
 
     /**
@@ -376,7 +360,7 @@ final class StarCommand implements Callable<Integer> {
             Path resolved = main.context().resolve(opacityTable);
             try {
                 table = OpacityChoice.table(resolved.toString(), OpacityTableReader.read(resolved));
-            } catch (org.convgrid.engine.error.ConvgridException e) {
+            } catch (ConvgridException e) {
                 // a bad table is bad input, as the same table named in a grid file is
                 throw new UsageException("--opacity-table: " + e.getMessage());
             }

@@ -165,13 +165,27 @@ public final class GridRequests implements ChunkSolver {
                 out.addAll(star.get(0).age() instanceof Age.MainSequenceFraction
                         ? BirthAges.fractions(this, star) : BirthAges.answers(this, star, settings));
             } else {
-                if (track == null) {
-                    set = physics.of(first.physics(), composition);
-                    ZamsBuilder builder = new ZamsBuilder(set);
-                    track = new ZamsTrack(builder, composition,
-                            severalMasses(chunk) ? ladderOf(line, builder, composition) : null);
+                ZamsResult zeroAge;
+                try {
+                    if (track == null) {
+                        set = physics.of(first.physics(), composition);
+                        ZamsBuilder builder = new ZamsBuilder(set);
+                        track = new ZamsTrack(builder, composition,
+                                severalMasses(chunk) ? ladderOf(line, builder, composition) : null);
+                    }
+                    zeroAge = track.solve(star.get(0).mass());
+                } catch (ConvgridException e) {
+                    if (e.kind().isUsageError()) {
+                        throw e;
+                    }
+                    // the physics could not answer while this star's zero-age model was built (an equation of
+                    // state or opacity table out of its range): its rows fail with the reason, the chunk's other
+                    // stars go on (the whole chunk failed before), and `star` gets the row a grid gets
+                    String detail = "zero-age model not built: " + e.getMessage();
+                    star.forEach(q -> out.add(new Answer(failed(q, ModelStatus.FAILED, detail), null)));
+                    start = end;
+                    continue;
                 }
-                ZamsResult zeroAge = track.solve(star.get(0).mass());
                 out.addAll(star.get(0).age() instanceof Age.MainSequenceFraction
                         ? FractionAges.answers(this, set, star, zeroAge)
                         : star(set, star, zeroAge, settings));

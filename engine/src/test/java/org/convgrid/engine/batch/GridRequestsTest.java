@@ -97,4 +97,20 @@ class GridRequestsTest {
         assertThat(solver.groundwork(List.of(request("i", 0.4, 0.0).withAge(new Age.SinceBirth(GYR)),
                 request("j", 0.5, 0.0).withAge(new Age.SinceBirth(GYR))))).isEmpty();
     }
+
+    @Test
+    void aZeroAgeModelThePhysicsCannotBuildFailsItsOwnRowsWithTheReason() {
+        // an opacity a billion times too small leaves the equation of state without a solution while the zero-age
+        // model is built: the exception left answers() and failed the whole chunk; now each star's rows are failed
+        // with the reason, as star reports them too
+        PhysicsOptions opaqueless = new PhysicsOptions(1.8, 0.0,
+                org.convgrid.engine.convection.StabilityCriterion.SCHWARZSCHILD, 1e-9);
+        List<ModelOutcome> out = new GridRequests((first, steps) -> { }).solve(List.of(
+                new ModelRequest("m0-a0", Constants.M_SUN, 0.0188, 0.275, 0.0, opaqueless),
+                new ModelRequest("m1-a0", 1.2 * Constants.M_SUN, 0.0188, 0.275, 0.0, opaqueless)));
+        assertThat(out).hasSize(2).allSatisfy(o -> {
+            assertThat(o.status()).isEqualTo(ModelStatus.FAILED);
+            assertThat(o.statusDetail()).startsWith("zero-age model not built: ");
+        });
+    }
 }
