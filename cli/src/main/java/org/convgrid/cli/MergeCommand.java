@@ -47,16 +47,8 @@ final class MergeCommand implements Callable<Integer> {
         try (RunLock lock = RunLock.acquire(target.root())) {
             Locks.reportStale(lock, parent.err());
             run = new ShardMerger(ToolVersion.current(), ToolVersion.commit(), Clock.tickSeconds(java.time.ZoneOffset.UTC),
-                    context.solvers().writesTracks()).merge(dirs, target, context.finishers());
-        }
-        Map<String, List<Path>> builds = ShardMerger.buildsOf(dirs);
-        if (builds.size() > 1) {
-            StringBuilder which = new StringBuilder();
-            builds.forEach((build, from) -> which.append(which.length() == 0 ? "" : "; ").append(build).append(": ")
-                    .append(from.stream().map(Path::toString).collect(java.util.stream.Collectors.joining(", "))));
-            parent.err().println("convgrid: warning: the shards were computed by different builds (" + which
-                    + "); the merged manifest records the merging build, " + ToolVersion.current() + " "
-                    + ToolVersion.commit() + ": compare the rows of the shards if the physics changed between them");
+                    context.solvers().writesTracks(), warning -> parent.err().println("convgrid: warning: " + warning))
+                    .merge(dirs, target, context.finishers());
         }
         Map<ModelStatus, Long> counts = RunFinishing.countByStatus(run.catalogue());
         parent.out().println(target.root() + ": merged " + Counts.of(dirs.size(), "shard directory",

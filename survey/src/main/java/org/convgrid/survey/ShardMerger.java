@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
 import java.util.List;
+import java.util.function.Consumer;
 import java.util.function.Function;
 import java.util.function.Predicate;
 import java.util.Map;
@@ -40,17 +41,22 @@ public final class ShardMerger {
     private final String toolCommit;
     private final Clock clock;
     private final boolean checksStarFiles;
+    private final Consumer<String> warnings;
 
     /**
      * @param checksStarFiles whether each shard's kept stars must have their track, life-events and profile files:
      *                        for shards of solvers that write tracks ({@link ChunkSolverFactory#writesTracks}), as
      *                        a resume checks them
+     * @param warnings receives a line when the shards were computed by different builds (the survey layer never
+     *                 prints)
      */
-    public ShardMerger(String toolVersion, String toolCommit, Clock clock, boolean checksStarFiles) {
+    public ShardMerger(String toolVersion, String toolCommit, Clock clock, boolean checksStarFiles,
+                       Consumer<String> warnings) {
         this.toolVersion = toolVersion;
         this.toolCommit = toolCommit;
         this.clock = clock;
         this.checksStarFiles = checksStarFiles;
+        this.warnings = Objects.requireNonNull(warnings, "warnings");
     }
 
     /**
@@ -76,19 +82,14 @@ public final class ShardMerger {
         GridSpec grid = commonGrid(shards, manifests);
         IronAbundance iron = GridIronAbundance.of(grid);
         ShardRows rows = new ShardRows(grid.physics().overshootScheme(), iron);
+        List<List<CatalogueRow>> shardRows = new ArrayList<>();
         for (Path shard : shards) {
-            rows.add(new RunDirectory(shard).catalogue(), shard);
+            shardRows.add(rows.add(new RunDirectory(shard).catalogue(), shard));
         }
-        List<String> ordered;
-        try {
-            ordered = rows.inGridOrder(grid);
-        } catch (RunSetupException e) {
-            // an unfinished shard explains missing models only
-            throw e.getMessage().contains(" missing from every shard") ? new RunSetupException(e.getMessage()
-                    + unfinished(shards, manifests)) : e;
-        }
-        for (Path shard : shards) {
-            refuseLackingFiles(new RunDirectory(shard), grid);
+        // an unfinished shard is what explains missing models
+        List<String> ordered = rows.inGridOrder(grid, unfinished(shards, manifests));
+        for (int i = 0; i < shards.size(); i++) {
+            refuseLackingFiles(new RunDirectory(shards.get(i)), shardRows.get(i), grid);
         }
         if (Files.exists(out.catalogue()) && !Files.exists(out.manifest())) {
             // a merge stopped by a signal leaves its catalogue before the manifest it writes last
@@ -131,6 +132,7 @@ public final class ShardMerger {
             }
             throw new IOException("cannot write the merged run in " + out.root() + ": " + IoMessages.reason(e), e);
         }
+        mixedBuilds(shards, manifests);
         RunFinishing.callFinishers(run, finishers);
         return run;
     }
@@ -141,8 +143,8 @@ public final class ShardMerger {
      * table into a run that looked whole (66 of 68 tracks, 18 zone rows lost). A resume of the shard computes the
      * stars lacking files again; a zones table is written only beside the rows, so that shard is run again.
      */
-    private void refuseLackingFiles(RunDirectory shard, GridSpec grid) throws IOException {
-        List<CatalogueRow> shardRows = CatalogueReader.read(shard.catalogue());
+    private void refuseLackingFiles(RunDirectory shard, List<CatalogueRow> shardRows, GridSpec grid)
+            throws IOException {
         MissingStarFiles.Lacking lacking = checksStarFiles ? MissingStarFiles.find(shard, grid, shardRows) : null;
         if (lacking != null) {
             throw new RunSetupException(shard.root() + ": " + lacking.describe() + "; resume that shard (convgrid run "
@@ -172,15 +174,28 @@ public final class ShardMerger {
                 + "; resume or wait for it, then merge";
     }
 
+    /** Warns when the shards were computed by more than one build, naming each build's shards. */
+    private void mixedBuilds(List<Path> shards, List<RunManifest> manifests) {
+        Map<String, List<Path>> builds = buildsOf(shards, manifests);
+        if (builds.size() > 1) {
+            StringBuilder which = new StringBuilder();
+            builds.forEach((build, from) -> which.append(which.length() == 0 ? "" : "; ").append(build).append(": ")
+                    .append(from.stream().map(Path::toString).collect(java.util.stream.Collectors.joining(", "))));
+            warnings.accept("the shards were computed by different builds (" + which + "); the merged manifest "
+                    + "records the merging build, " + toolVersion + " " + toolCommit + ": compare the rows of the "
+                    + "shards if the physics changed between them");
+        }
+    }
+
     /**
      * The builds that computed the shards ({@code tool_version tool_commit}), each with its shards in the order
      * given: more than one when the jar was rebuilt while an array of shards ran, which the README allows.
      */
-    public static Map<String, List<Path>> buildsOf(List<Path> shards) throws IOException {
+    private static Map<String, List<Path>> buildsOf(List<Path> shards, List<RunManifest> manifests) {
         Map<String, List<Path>> builds = new java.util.LinkedHashMap<>();
-        for (Path shard : shards) {
-            RunManifest m = RunManifestReader.read(Files.readString(new RunDirectory(shard).manifest()));
-            builds.computeIfAbsent(m.toolVersion() + " " + m.toolCommit(), k -> new ArrayList<>()).add(shard);
+        for (int i = 0; i < shards.size(); i++) {
+            RunManifest m = manifests.get(i);
+            builds.computeIfAbsent(m.toolVersion() + " " + m.toolCommit(), k -> new ArrayList<>()).add(shards.get(i));
         }
         return builds;
     }
@@ -285,8 +300,8 @@ public final class ShardMerger {
         int threads = shards.stream().mapToInt(RunManifest::threads).sum();
         double median = RunManifest.median(shards.stream().mapToDouble(RunManifest::medianSecondsPerModel)
                 .filter(Double::isFinite).toArray());
-        // the build that computed the rows when every shard names the same one (a review found the merging build
-        // recorded instead); shards of several builds keep the merging one, and merge warns (buildsOf)
+        // the build that computed the rows when every shard names the same one; shards of several builds keep the
+        // merging one, and merge warns (mixedBuilds)
         boolean oneBuild = shards.stream().allMatch(m -> m.toolVersion().equals(first.toolVersion())
                 && m.toolCommit().equals(first.toolCommit()));
         return new RunManifest(oneBuild ? first.toolVersion() : toolVersion, oneBuild ? first.toolCommit() : toolCommit,

@@ -44,8 +44,12 @@ final class ShardRows {
         this.iron = iron;
     }
 
-    /** Adds the complete lines of one shard's catalogue (each row checked by the catalogue reader). */
-    void add(Path catalogue, Path shard) throws IOException {
+    /**
+     * Adds the complete lines of one shard's catalogue (each row checked by the catalogue reader).
+     *
+     * @return the shard's rows, read in this version's layout
+     */
+    List<CatalogueRow> add(Path catalogue, Path shard) throws IOException {
         byte[] bytes = Files.readAllBytes(catalogue);
         String header = RunDirectory.catalogueHeader(iron);
         // a shard written by an earlier version is read in this version's layout
@@ -66,14 +70,16 @@ final class ShardRows {
                 origin.put(id, shard);
             }
         }
+        return rows;
     }
 
     /**
      * Every line in grid order.
      *
+     * @param missingCause appended to the list of models missing from every shard (what may explain them), or empty
      * @throws RunSetupException listing models missing from every shard, present twice, or not in the grid
      */
-    List<String> inGridOrder(GridSpec grid) {
+    List<String> inGridOrder(GridSpec grid, String missingCause) {
         Map<String, String> left = new HashMap<>(lines);
         List<String> missing = new ArrayList<>();
         List<String> ordered = new ArrayList<>(lines.size());
@@ -87,7 +93,8 @@ final class ShardRows {
         }
         List<String> problems = new ArrayList<>();
         if (!missing.isEmpty()) {
-            problems.add(Counts.of(missing.size(), "model") + " missing from every shard: " + firstIds(missing));
+            problems.add(Counts.of(missing.size(), "model") + " missing from every shard: " + firstIds(missing)
+                    + missingCause);
         }
         if (!duplicates.isEmpty()) {
             problems.add(Counts.of(duplicates.size(), "model") + " in more than one shard: " + firstIds(duplicates));
