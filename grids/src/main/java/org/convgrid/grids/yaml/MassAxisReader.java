@@ -30,7 +30,8 @@ final class MassAxisReader {
 
     /** The mass values, or null when the section has problems (they are recorded). */
     static List<Double> read(Node node, NodeReader reader) {
-        MappingNode map = reader.mapping(node, "mass", "; a list of masses goes under values: mass: {values: [0.3, 0.5, 1.0]}");
+        MappingNode map = reader.mapping(node, "mass",
+                "; a list of masses goes under values: mass: {values: [0.3, 0.5, 1.0]}");
         if (map == null) {
             return null;
         }

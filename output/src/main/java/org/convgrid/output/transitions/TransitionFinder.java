@@ -321,8 +321,8 @@ public record TransitionFinder(double coreMassFractionThreshold) {
 
     /**
      * The other windows of cores a slice's notes name ({@link #otherWindows}: cored runs other than the transient
-     * window below the lasting core, those below the fully convective limit too), read back so that a chart can draw them beside the reported window; empty when
-     * the notes name none. The demo's Z = 0.014, 600 Myr slice reports 0.314-0.323 Msun and names 0.3266-0.575
+     * window below the lasting core, those below the fully convective limit too), read back so that a chart can draw
+     * them beside the reported window; empty when the notes name none. The demo's Z = 0.014, 600 Myr slice reports 0.314-0.323 Msun and names 0.3266-0.575
      * behind one coreless model at 0.325.
      */
     public static List<Span> otherWindowsNoted(String notes) {

@@ -43,8 +43,7 @@ public final class SliceLabels {
         if (bracket == null || !Double.isFinite(massMsun) || !(bracket.hi() > bracket.lo())) {
             return number(massMsun);
         }
-        int decimals = (int) Math.max(0, Math.min(6, Math.ceil(-Math.log10(bracket.hi() - bracket.lo()) - 1e-9)));
-        return new BigDecimal(CsvNumbers.format(massMsun)).setScale(decimals, RoundingMode.HALF_UP).toPlainString();
+        return rounded(massMsun, decimals(bracket.hi() - bracket.lo()), RoundingMode.HALF_UP);
     }
 
     /**
@@ -74,13 +73,20 @@ public final class SliceLabels {
         if (!(Double.isFinite(toleranceMsun) && toleranceMsun > 0) || !(width > 0)) {
             return number(bracket.lo()) + "\u2013" + number(bracket.hi());
         }
-        double accuracy = width >= toleranceMsun ? width : toleranceMsun;
-        int decimals = (int) Math.max(0, Math.min(6, Math.ceil(-Math.log10(accuracy) - 1e-9)));
-        String lo = new BigDecimal(CsvNumbers.format(bracket.lo())).setScale(decimals, RoundingMode.FLOOR)
-                .toPlainString();
-        String hi = new BigDecimal(CsvNumbers.format(bracket.hi())).setScale(decimals, RoundingMode.CEILING)
-                .toPlainString();
-        return lo + "\u2013" + hi;
+        // the accuracy massToAccuracy gives the mass: the tolerance, or the bracket's width where wider
+        int decimals = decimals(width >= toleranceMsun ? width : toleranceMsun);
+        return rounded(bracket.lo(), decimals, RoundingMode.FLOOR) + "\u2013"
+                + rounded(bracket.hi(), decimals, RoundingMode.CEILING);
+    }
+
+    /** As many decimals as the first significant digit of {@code accuracy} (a mass's bracket width or tolerance). */
+    private static int decimals(double accuracy) {
+        return (int) Math.max(0, Math.min(6, Math.ceil(-Math.log10(accuracy) - 1e-9)));
+    }
+
+    /** A mass rounded at {@code decimals} from the text transitions.csv writes for it (not from its binary value). */
+    private static String rounded(double massMsun, int decimals, RoundingMode mode) {
+        return new BigDecimal(CsvNumbers.format(massMsun)).setScale(decimals, mode).toPlainString();
     }
 
     /**
