@@ -34,6 +34,6 @@ final class GridFiles {
         } catch (IOException e) {
             throw new UsageException("cannot read grid file " + given + ": " + IoMessages.reason(e));
         }
-        return new GridFileReader().read(given.toString(), bytes);
+        return new GridFileReader().read(given.toString(), file, bytes);
     }
 }

@@ -433,7 +433,7 @@ public final class GridRun {
     private RunManifest manifest(Settings s, Shard shard, Instant started, Instant finished,
                                  Map<ModelStatus, Long> counts, double median) {
         GridFile g = s.grid();
-        return new RunManifest(toolVersion, toolCommit, g.name(), g.text(), g.fileSha256(), g.modelsSha256(),
+        return new RunManifest(toolVersion, toolCommit, g.location(), g.text(), g.fileSha256(), g.modelsSha256(),
                 g.spec().physics().combinations(), started, finished, s.threads(), ShardChoice.label(shard), counts,
                 median, g.spec().ages().origin(), RunManifest.EXPECTED_UNKNOWN, GridIronAbundance.of(g.spec()));
     }

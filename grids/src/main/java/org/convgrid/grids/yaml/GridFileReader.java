@@ -87,6 +87,18 @@ public final class GridFileReader {
      * @throws GridFileException listing every problem in the file
      */
     public GridFile read(String name, byte[] bytes) {
+        return read(name, Path.of(name), bytes);
+    }
+
+    /**
+     * Validates grid-file bytes (UTF-8) of the file at {@code location}.
+     *
+     * @param name the file name used in problems and for the default output directory
+     * @param location where the file is: the files it names are read from its folder, and runs record it
+     *                 ({@link GridFile#location})
+     * @throws GridFileException listing every problem in the file
+     */
+    public GridFile read(String name, Path location, byte[] bytes) {
         if (bytes.length > MAX_FILE_BYTES) {
             throw new GridFileException(List.of(new GridProblem(name, 1, 1, GridProblemKind.UNREADABLE_FILE,
                     "the grid file holds " + bytes.length + " bytes, more than the limit of " + MAX_FILE_BYTES
@@ -100,7 +112,8 @@ public final class GridFileReader {
             throw new GridFileException(List.of(new GridProblem(name, 1, 1, GridProblemKind.SYNTAX,
                     "the file is not UTF-8 text")));
         }
-        return new GridFile(name, text, GridHash.ofBytes(bytes), parse(name, text));
+        return new GridFile(name, location.toAbsolutePath().normalize().toString(), text, GridHash.ofBytes(bytes),
+                parse(name, location, text));
     }
 
     /**
@@ -109,7 +122,11 @@ public final class GridFileReader {
      * @throws GridFileException listing every problem in the text
      */
     public GridSpec parse(String name, String text) {
-        NodeReader reader = new NodeReader(name);
+        return parse(name, Path.of(name), text);
+    }
+
+    private GridSpec parse(String name, Path location, String text) {
+        NodeReader reader = new NodeReader(name, location);
         Optional<Node> root = compose(name, text, reader);
         GridSpec spec = null;
         if (root.isEmpty() && reader.problems().isEmpty()) {

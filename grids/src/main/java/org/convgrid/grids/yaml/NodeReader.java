@@ -22,14 +22,30 @@ import org.snakeyaml.engine.v2.nodes.SequenceNode;
 final class NodeReader {
 
     private final String file;
+    private final java.nio.file.Path folder;
     private final List<GridProblem> problems = new ArrayList<>();
 
+    /** A reader of the file named {@code file}, whose relative file names are read from its folder. */
     NodeReader(String file) {
+        this(file, java.nio.file.Path.of(file));
+    }
+
+    /**
+     * @param file the name problems are reported at (as the user gave it)
+     * @param location where the file is: file names inside it (a preset, an opacity table) are relative to its folder
+     */
+    NodeReader(String file, java.nio.file.Path location) {
         this.file = file;
+        this.folder = location.toAbsolutePath().normalize().getParent();
     }
 
     String file() {
         return file;
+    }
+
+    /** The absolute folder the file's relative file names are read from, null for a file at the root. */
+    java.nio.file.Path folder() {
+        return folder;
     }
 
     /** Records a problem at the start of {@code node}. */

@@ -149,7 +149,7 @@ final class PhysicsReader {
         if (text == null) {
             return null;
         }
-        Path folder = Path.of(reader.file()).toAbsolutePath().getParent();
+        Path folder = reader.folder();
         Path table;
         try {
             table = folder == null ? Path.of(text) : folder.resolve(text);

@@ -43,7 +43,7 @@ final class PresetReader {
         if (name == null) {
             return null;
         }
-        Path folder = Path.of(reader.file()).toAbsolutePath().getParent();
+        Path folder = reader.folder();
         Path file;
         try {
             file = (folder == null ? Path.of(name) : folder.resolve(name)).normalize();

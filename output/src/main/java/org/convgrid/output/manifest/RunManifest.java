@@ -16,7 +16,8 @@ import org.convgrid.output.IronAbundance;
  * @param toolVersion convgrid's version
  * @param toolCommit the git commit convgrid was built from ({@code -dirty} appended when its working tree had
  *                   uncommitted changes), or {@code unknown}
- * @param gridFile the grid file's name as given on the command line
+ * @param gridFile the grid file's absolute path (as given on the command line in manifests written before
+ *                 2026-12-05), against whose folder the files the grid names are read again
  * @param gridText the grid file's text as read
  * @param gridFileSha256 SHA-256 of the grid file's bytes
  * @param gridModelsSha256 SHA-256 of the grid's model-deciding content (for resume checks)
