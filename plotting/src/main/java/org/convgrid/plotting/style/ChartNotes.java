@@ -9,16 +9,23 @@ import java.util.List;
 /**
  * Caveats printed on a chart, in the margin right of the plot under the legend (where charts with a right-hand
  * legend have room), word-wrapped to that margin, bottom-aligned with the plot. Notes too long for the room under
- * the legend are set smaller, down to {@link #SMALLEST_NOTE_SIZE} points, and past that start under the legend and
- * run below the plot's lower edge: they never cover the legend (a longer caveat once ran over its last entry).
+ * the legend are set smaller, down to {@link #SMALLEST_NOTE_SIZE} points; past that they start under the legend and
+ * run below the plot's lower edge, set smaller again down to {@link #SMALLEST_OVERFLOW_SIZE} points so that they end
+ * inside the image, and when even that is too long the last line that fits ends with an ellipsis: they never cover
+ * the legend (a longer caveat once ran over its last entry) and never leave the image (one ran past its lower edge,
+ * cut mid-sentence).
  */
 public final class ChartNotes {
 
     /** Notes font: smaller than the legend, italic so they read as remarks, not data. */
     public static final Font NOTE_FONT = new Font(Font.SANS_SERIF, Font.ITALIC, 19);
     private static final int MARGIN = 14;
-    /** The smallest size the notes are set in to fit under the legend, points. */
+    /** The smallest size the notes are set in to fit under the legend and above the plot's lower edge, points. */
     static final int SMALLEST_NOTE_SIZE = 13;
+    /** The smallest size the notes are set in to fit between the legend and the image's lower edge, points. */
+    static final int SMALLEST_OVERFLOW_SIZE = 11;
+    /** Ends the last line printed when the notes do not fit even at {@link #SMALLEST_OVERFLOW_SIZE}. */
+    static final String CUT = " \u2026";
 
     private ChartNotes() {
     }
@@ -41,14 +48,65 @@ public final class ChartNotes {
         double legendBottom = chart.rightLegendBottom();
         // the first line's top may sit no higher than a margin below the legend's lower edge
         int highestTop = Double.isNaN(legendBottom) ? 0 : (int) Math.ceil(legendBottom) + MARGIN;
-        g.setFont(fittingFont(g, notes, width, bottom - highestTop));
-        FontMetrics fm = g.getFontMetrics();
-        List<String> lines = wrapAll(notes, fm, width);
-        int y = Math.max(bottom - (lines.size() - 1) * fm.getHeight(), highestTop + fm.getAscent());
-        for (String line : lines) {
+        Layout layout = layout(g, notes, width, highestTop, bottom, chart.getHeight() - MARGIN / 2);
+        g.setFont(layout.font());
+        int y = layout.firstBaseline();
+        for (String line : layout.lines()) {
             g.drawString(line, left, y);
-            y += fm.getHeight();
+            y += g.getFontMetrics().getHeight();
         }
+    }
+
+    /**
+     * Where the notes go.
+     *
+     * @param font the size they are set in
+     * @param lines the lines printed (the last cut with {@link #CUT} when the notes do not fit)
+     * @param firstBaseline the first line's baseline, pixels from the image's top
+     */
+    record Layout(Font font, List<String> lines, int firstBaseline) {
+    }
+
+    /**
+     * The notes wrapped to {@code width} pixels, their first line's top at {@code highestTop} or lower: bottom-aligned
+     * with {@code plotBottom} when they fit above it at {@link #SMALLEST_NOTE_SIZE} or more, else from
+     * {@code highestTop} down to at most {@code imageBottom} (the lowest a line's descent may reach).
+     */
+    static Layout layout(Graphics2D g, List<String> notes, int width, int highestTop, int plotBottom,
+                         int imageBottom) {
+        Font font = fittingFont(g, notes, width, plotBottom - highestTop);
+        FontMetrics fm = g.getFontMetrics(font);
+        List<String> lines = wrapAll(notes, fm, width);
+        if (height(lines, fm) <= plotBottom - highestTop) {
+            return new Layout(font, lines, plotBottom - (lines.size() - 1) * fm.getHeight());
+        }
+        int room = imageBottom - highestTop;
+        while (font.getSize() > SMALLEST_OVERFLOW_SIZE && height(lines, fm) + fm.getDescent() > room) {
+            font = font.deriveFont((float) (font.getSize() - 1));
+            fm = g.getFontMetrics(font);
+            lines = wrapAll(notes, fm, width);
+        }
+        int fitting = Math.max(1, (room - fm.getAscent() - fm.getDescent()) / fm.getHeight() + 1);
+        if (lines.size() > fitting) {
+            List<String> kept = new ArrayList<>(lines.subList(0, fitting));
+            kept.set(fitting - 1, cut(kept.get(fitting - 1), fm, width));
+            lines = kept;
+        }
+        return new Layout(font, List.copyOf(lines), highestTop + fm.getAscent());
+    }
+
+    /** From the first line's top to the last line's baseline, pixels. */
+    private static int height(List<String> lines, FontMetrics fm) {
+        return (lines.size() - 1) * fm.getHeight() + fm.getAscent();
+    }
+
+    /** {@code line} with {@link #CUT} at its end, words dropped from its end until it fits {@code width}. */
+    private static String cut(String line, FontMetrics fm, int width) {
+        String kept = line;
+        while (fm.stringWidth(kept + CUT) > width && kept.contains(" ")) {
+            kept = kept.substring(0, kept.lastIndexOf(' '));
+        }
+        return kept + CUT;
     }
 
     /**
@@ -60,7 +118,7 @@ public final class ChartNotes {
         Font font = NOTE_FONT;
         while (font.getSize() > SMALLEST_NOTE_SIZE) {
             FontMetrics fm = g.getFontMetrics(font);
-            if ((wrapAll(notes, fm, width).size() - 1) * fm.getHeight() + fm.getAscent() <= height) {
+            if (height(wrapAll(notes, fm, width), fm) <= height) {
                 return font;
             }
             font = font.deriveFont((float) (font.getSize() - 1));

@@ -46,4 +46,40 @@ class ChartNotesTest {
         assertThat(ChartNotes.fittingFont(graphics(), NOTES, 420, 20).getSize())
                 .isEqualTo(ChartNotes.SMALLEST_NOTE_SIZE);
     }
+
+    @Test
+    void notesTooLongForThePlotRunBelowItButEndInsideTheImage() {
+        Graphics2D g = graphics();
+        // a six-age chart against [Fe/H]: legend down to 640 px, plot edge at 715, image 800 px high; at 13 points
+        // these notes ran past the image's lower edge, cut mid-sentence
+        ChartNotes.Layout layout = ChartNotes.layout(g, NOTES, 400, 650, 715, 793);
+        var fm = g.getFontMetrics(layout.font());
+        assertThat(layout.font().getSize()).isBetween(ChartNotes.SMALLEST_OVERFLOW_SIZE, ChartNotes.SMALLEST_NOTE_SIZE);
+        assertThat(layout.firstBaseline() - fm.getAscent()).isGreaterThanOrEqualTo(650);
+        assertThat(layout.firstBaseline() + (layout.lines().size() - 1) * fm.getHeight() + fm.getDescent())
+                .isLessThanOrEqualTo(793);
+        assertThat(String.join(" ", layout.lines())).isEqualTo(String.join(" ", NOTES));
+    }
+
+    @Test
+    void notesThatCannotFitEndWithAnEllipsisInsideTheImage() {
+        Graphics2D g = graphics();
+        ChartNotes.Layout layout = ChartNotes.layout(g, NOTES, 300, 700, 715, 770);
+        var fm = g.getFontMetrics(layout.font());
+        assertThat(layout.font().getSize()).isEqualTo(ChartNotes.SMALLEST_OVERFLOW_SIZE);
+        assertThat(layout.firstBaseline() + (layout.lines().size() - 1) * fm.getHeight() + fm.getDescent())
+                .isLessThanOrEqualTo(770);
+        String last = layout.lines().get(layout.lines().size() - 1);
+        assertThat(last).endsWith(ChartNotes.CUT);
+        assertThat(fm.stringWidth(last)).isLessThanOrEqualTo(300);
+    }
+
+    @Test
+    void notesThatFitAboveThePlotEdgeEndOnIt() {
+        Graphics2D g = graphics();
+        ChartNotes.Layout layout = ChartNotes.layout(g, NOTES, 420, 300, 715, 793);
+        var fm = g.getFontMetrics(layout.font());
+        assertThat(layout.firstBaseline() + (layout.lines().size() - 1) * fm.getHeight()).isEqualTo(715);
+        assertThat(layout.lines()).noneMatch(line -> line.endsWith(ChartNotes.CUT));
+    }
 }
