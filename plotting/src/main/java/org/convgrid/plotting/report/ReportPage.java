@@ -14,6 +14,7 @@ import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.manifest.RunManifest;
 import org.convgrid.output.manifest.UnfinishedRun;
 import org.convgrid.output.transitions.RefinedModelIds;
+import org.convgrid.output.transitions.Slice;
 import org.convgrid.output.transitions.TransitionEstimate;
 import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.output.transitions.TransitionRow;
@@ -309,6 +310,9 @@ public final class ReportPage {
             + "against Z and against age, and the turnover-time charts (one line per age) are left out; the zone maps "
             + "and the HR diagram group the models by main-sequence fraction instead.";
 
+    /** The turn-off's cell in a slice none of whose models is past the main sequence. */
+    static final String ALL_ON_THE_MAIN_SEQUENCE = "none: no star past the main sequence";
+
     private static void transitions(StringBuilder b, RunData run) {
         MetallicityNames names = run.metallicityNames();
         if (run.ageGroups().byFraction()) {
@@ -337,7 +341,15 @@ public final class ReportPage {
             b.append("<td class=\"num\">").append(window == null ? "none"
                     : SliceLabels.massRange(window, t.toleranceMsun())).append("</td>");
             if (turnoffs) {
-                estimate(b, t.turnoff(), t.toleranceMsun());
+                // a young slice has no turn-off because none of its stars has left the main sequence yet:
+                // "not found" there read as a search that failed
+                boolean anyPast = run.catalogue().stream().anyMatch(r -> r.status() == ModelStatus.PAST_MAIN_SEQUENCE
+                        && Slice.of(r).equals(t.slice()));
+                if (t.turnoff().found() || anyPast) {
+                    estimate(b, t.turnoff(), t.toleranceMsun());
+                } else {
+                    b.append("<td>").append(ALL_ON_THE_MAIN_SEQUENCE).append("</td><td></td>");
+                }
             }
             b.append("<td>").append(t.method().label()).append("</td><td class=\"num\">")
                     .append(Double.isFinite(t.toleranceMsun()) ? SliceLabels.number(t.toleranceMsun()) : "")

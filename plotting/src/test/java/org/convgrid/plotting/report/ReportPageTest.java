@@ -38,6 +38,9 @@ class ReportPageTest {
         // the 4.57 Gyr slices have models past the main sequence above ones on it: the table gives the turn-off (a
         // code review found it missing: "not found" beside a turn-off transitions.csv and the chart had)
         assertThat(html).contains("<th>main-sequence turn-off / M\u2609</th><th>bracket / M\u2609</th>");
+        // the zero-age slices have no turn-off because no star of theirs has left the main sequence, which the cell
+        // says instead of "not found", as if a search had failed
+        assertThat(html.split(ReportPage.ALL_ON_THE_MAIN_SEQUENCE, -1)).hasSize(3);
         Matcher m = IMG_SRC.matcher(html);
         int images = 0;
         while (m.find()) {
