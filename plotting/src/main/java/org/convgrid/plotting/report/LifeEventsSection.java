@@ -47,16 +47,27 @@ final class LifeEventsSection {
             + "a step, which reaches ~1 Gyr in old low-mass stars, after it (README).";
     static final String LEGEND = NONE + " : the event did not happen on the computed track, that is by the age in "
             + "the last column (a star of a grid that stops at 100 Myr may still reach it later).";
+    /** Marks an end dated at the track's last step. */
+    static final String AT_TRACK_END = "\u2020";
+    static final String AT_TRACK_END_LEGEND = AT_TRACK_END + " : an end seen only in the track's last step, so "
+            + "provisional: the core or the radiative core may come back beyond the computed track (README).";
 
     /**
      * One column of the table: its words, the file's column name and the age it shows; {@code onlyWhenSeen}: shown
      * only in a table where some star has the event (a rare one, which would otherwise add an empty column to
      * almost every run's report).
      */
-    private record Column(String words, String name, ToDoubleFunction<LifeEventRow> myr, boolean onlyWhenSeen) {
+    private record Column(String words, String name, ToDoubleFunction<LifeEventRow> myr, boolean onlyWhenSeen,
+                          boolean anEnd) {
 
         Column(String words, String name, ToDoubleFunction<LifeEventRow> myr) {
-            this(words, name, myr, false);
+            this(words, name, myr, false, false);
+        }
+
+        /** The column's cell for {@code row}: an end on the track's last step marked {@link #AT_TRACK_END}. */
+        String cell(LifeEventRow row) {
+            double at = myr.applyAsDouble(row);
+            return age(at) + (anEnd && atTrackEnd(at, row) ? " " + AT_TRACK_END : "");
         }
 
         boolean shownFor(List<LifeEventRow> rows) {
@@ -67,12 +78,13 @@ final class LifeEventsSection {
     private static final List<Column> COLUMNS = List.of(
             new Column("radiative core appears", LifeEventColumns.RADIATIVE_CORE, LifeEventRow::radiativeCoreMyr),
             new Column("fully convective again", LifeEventColumns.RADIATIVE_CORE_END,
-                    LifeEventRow::radiativeCoreEndMyr),
+                    LifeEventRow::radiativeCoreEndMyr, false, true),
             new Column("ZAMS", LifeEventColumns.ZAMS, LifeEventRow::zamsMyr),
             new Column("convective core appears", LifeEventColumns.CONV_CORE_ONSET, LifeEventRow::convCoreOnsetMyr),
-            new Column("convective core ends", LifeEventColumns.CONV_CORE_END, LifeEventRow::convCoreEndMyr),
+            new Column("convective core ends", LifeEventColumns.CONV_CORE_END, LifeEventRow::convCoreEndMyr, false,
+                    true),
             new Column("core joins envelope", LifeEventColumns.CORE_ENVELOPE_MERGE,
-                    LifeEventRow::coreEnvelopeMergeMyr, true),
+                    LifeEventRow::coreEnvelopeMergeMyr, true, false),
             new Column("surface Li halved", LifeEventColumns.LI_HALVED, LifeEventRow::liHalvedMyr),
             new Column("surface Li at 1 %", LifeEventColumns.LI_ONE_PERCENT, LifeEventRow::liOnePercentMyr),
             new Column("central H exhausted", LifeEventColumns.CENTRAL_H_EXHAUSTED,
@@ -146,13 +158,25 @@ final class LifeEventsSection {
                 + "</tr>\n");
         for (LifeEventRow row : rows.stream().sorted(Comparator.comparingDouble(LifeEventRow::massMsun)).toList()) {
             b.append("<tr><td class=\"num\">").append(SliceLabels.number(row.massMsun())).append("</td>");
-            columns.forEach(c -> b.append("<td class=\"num\">").append(age(c.myr().applyAsDouble(row)))
-                    .append("</td>"));
+            columns.forEach(c -> b.append("<td class=\"num\">").append(c.cell(row)).append("</td>"));
             b.append("<td class=\"num\">").append(Double.isFinite(row.trackEndMyr())
                     ? SliceLabels.number(row.trackEndMyr()) : "").append("</td><td>")
                     .append(Html.escape(row.trackId())).append("</td></tr>\n");
         }
         b.append("</table>\n");
+        boolean marked = rows.stream().anyMatch(r -> columns.stream().anyMatch(c -> c.anEnd()
+                && atTrackEnd(c.myr().applyAsDouble(r), r)));
+        if (marked) {
+            b.append("<p>").append(Html.escape(AT_TRACK_END_LEGEND)).append("</p>\n");
+        }
+    }
+
+    /**
+     * Whether an end falls on the track's last model (README: such an end is provisional). A core whose end is the
+     * main sequence's own end (central hydrogen exhausted) is not provisional: the main sequence is over.
+     */
+    static boolean atTrackEnd(double endMyr, LifeEventRow row) {
+        return Double.isFinite(endMyr) && endMyr == row.trackEndMyr() && endMyr != row.centralHExhaustedMyr();
     }
 
     /** An event's age, Myr, to four significant digits; {@link #NONE} when it did not happen on the track. */

@@ -84,6 +84,21 @@ class LifeEventsSectionTest {
     }
 
     @Test
+    void anEndOnTheTracksLastStepIsMarkedProvisional(@TempDir Path dir) throws Exception {
+        Path runDir = run(dir, true);
+        Path table = runDir.resolve(RunLayout.LIFE_EVENTS);
+        // the 0.3 Msun star at Z = 0.008 made fully convective again in its track's last step, 200 Myr (README: an
+        // end on the last model is provisional; such a cell read as an event of its own)
+        Files.writeString(table, Files.readString(table).replace(",27.4664,182.8686,", ",27.4664,200.0,"));
+        String section = section(Files.readString(ReportPage.write(runDir)));
+        String[] tables = section.split("<table>", -1);
+        assertThat(tables[1]).contains("<td class=\"num\">27.47</td><td class=\"num\">200 "
+                + LifeEventsSection.AT_TRACK_END + "</td>", Html.escape(LifeEventsSection.AT_TRACK_END_LEGEND));
+        // the other table has no such end, and no legend for it
+        assertThat(tables[2]).doesNotContain(LifeEventsSection.AT_TRACK_END);
+    }
+
+    @Test
     void aRunWithoutLifeEventsHasNoSection(@TempDir Path dir) throws Exception {
         String html = Files.readString(ReportPage.write(run(dir, false)));
         assertThat(html).doesNotContain("Life events", "id=\"life-events\"");
