@@ -6,7 +6,7 @@ import org.convgrid.grids.words.MessageNumbers;
 
 /**
  * A warning for {@code ms_fraction} grids with stars that may outlive the evolution's 20 Gyr age limit: such a
- * star has no main-sequence lifetime to take a fraction of, so every row of it fails (a review's 0.7 Msun star at
+ * star has no main-sequence lifetime to take a fraction of, so every row of it fails (a 0.7 Msun star at
  * Z = 0.02 lost all three rows, its zero-age one too, and {@code check} had said nothing). Printed on stderr by
  * {@code check} and {@code run} like {@link TestedRange}'s lines; never an error.
  */

@@ -57,7 +57,7 @@ final class MergeCommand implements Callable<Integer> {
         parent.out().flush();
         if (run.grid().transitions().refine()) {
             // said on stderr even though nothing failed: without it the merged table silently holds the grid's
-            // coarser brackets where a single run would hold refined ones (a practitioner's review)
+            // coarser brackets where a single run would hold refined ones
             parent.err().println("convgrid: the transition masses are not refined yet (shards do not refine); "
                     + "to match a single run: convgrid transitions " + RunInterruptHook.shellWord(
                     target.root().toString()) + " --refine");

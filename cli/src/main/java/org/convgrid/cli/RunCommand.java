@@ -129,7 +129,7 @@ final class RunCommand implements Callable<Integer> {
         if (out != null && chosen != null && chosen.count() > 1 && given.getFileName() != null
                 && context.workingDirectory().normalize().startsWith(given)) {
             // 'cd runs/grid && run --shard 1/2 --out .' would write beside it, to runs/grid-shard-1-of-2 (or above
-            // the home directory, from there; found by a review)
+            // the home directory, from there)
             throw new UsageException("--out " + out + " names the current directory or one above it, but a shard "
                     + "writes to <DIR>-shard-K-of-N beside DIR; name the directory, e.g. --out runs/"
                     + given.getFileName());
@@ -153,7 +153,7 @@ final class RunCommand implements Callable<Integer> {
         CompletableFuture<GridRun.Plan> prepared = new CompletableFuture<>();
         try (RunLock lock = RunLock.acquire(dir.root());
              // installed before the directory is prepared: a signal while prepare wrote the start manifest ended the
-             // JVM without a word (a review saw exit 130 and no line; by hand a SIGTERM 0.84 s after the start left
+             // JVM without a word (exit 130 and no line; by hand a SIGTERM 0.84 s after the start left
              // a manifest without a catalogue, exit 143, nothing said), and its hook waits for prepare to end
              RunInterruptHook hook = RunInterruptHook.install(() -> interrupted(runner, prepared, interruption, lock,
                      context.terminal() && !quiet), parent.err())) {
@@ -165,7 +165,7 @@ final class RunCommand implements Callable<Integer> {
             try {
                 plan = runner.prepare(new GridRun.Settings(file, dir, n, chosen, resume, force));
                 // before the interrupt hook may go on: its manifest rewrite goes through a temporary file that this
-                // cleaning would otherwise take for a stale one (a code review)
+                // cleaning would otherwise take for a stale one
                 staleTemporaries = StaleTemporaryFiles.remove(dir.layout(), StaleTemporaryFiles.Scope.RUN);
                 prepared.complete(plan);
             } catch (Exception | Error e) {
@@ -188,7 +188,7 @@ final class RunCommand implements Callable<Integer> {
             if (plan.manifestRebuilt()) {
                 // said even with --quiet: the manifest's first start time and measured cost are gone
                 // the kept count is after the cut-back of stars lacking files (said next): before it, the rows were
-                // more, and a review read "0 rows" of a catalogue of 68
+                // more, and a catalogue of 68 rows read "0 rows"
                 err.println("convgrid: note: " + dir.root() + " had no " + RunLayout.MANIFEST + "; its catalogue's "
                         + (plan.recomputedForMissingFiles() == null ? Counts.of(plan.kept().ids().size(), "row") + " are"
                         : "rows are") + " this grid's first models, so the resume wrote a new manifest (started now) "
@@ -338,7 +338,7 @@ final class RunCommand implements Callable<Integer> {
             // prepare takes well under a second: its directory is then whole, and the resume line true
             plan = prepared.get();
         } catch (ExecutionException e) {
-            // released as below: a code review saw the next command report a stale lock after this path
+            // released as below: otherwise the next command reports a stale lock after this path
             closeQuietly(lock);
             return "convgrid: interrupted while the run directory was prepared; nothing was computed";
         }
@@ -385,7 +385,7 @@ final class RunCommand implements Callable<Integer> {
 
     /**
      * What the start line adds for a long run: {@code check}'s rough estimate of the models still to compute (a share of
-     * the whole grid's), so that a grid started without a {@code check} (a review's: a 99 000-model grid estimated at
+     * the whole grid's), so that a grid started without a {@code check} (a 99 000-model grid estimated at
      * 22 h started without a word) shows its size in hours before the night is spent; empty below
      * {@link #LONG_RUN_SECONDS}.
      */

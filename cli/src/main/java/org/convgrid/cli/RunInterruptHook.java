@@ -70,11 +70,11 @@ final class RunInterruptHook implements AutoCloseable {
     static String line(GridRun.Interrupted left, String grid, String out, boolean refines) {
         if (!left.swept()) {
             // the catalogue is written in grid order, so models that finished after the first unfinished one are
-            // not in it; a review found their tracks on disk and took them for kept
+            // not in it, though their tracks are on disk and can be taken for kept ones
             return "convgrid: interrupted: " + left.rows() + " of " + Counts.of(left.expected(), "model") + " in "
                     + RunLayout.CATALOGUE + " (models finished out of grid order are not kept); continue with: "
                     + "convgrid run " + shellWord(grid) + " --out " + shellWord(out) + " --resume"
-                    // a run without refinement continues without it (a review followed the line and got a refinement)
+                    // a run without refinement continues without it (following the line had started a refinement)
                     + (refines ? "" : " --no-refine");
         }
         // the sweep and its manifest were complete: what was cut short is the refinement or the charts

@@ -327,7 +327,7 @@ final class StarCommand implements Callable<Integer> {
         IronToMetals iron = iron();
         double z = helium != null ? iron.metals(ironDex, helium) : iron.metals(ironDex, HeliumLaw.DEFAULT);
         if (!(z >= 0 && z < MetallicityPoint.MAX_Z)) {
-            // said "--z must be ... (got 0.2151143)" of an option the user did not give (found by a code review)
+            // said "--z must be ... (got 0.2151143)" of an option the user did not give
             throw new UsageException("--fe-h-dex " + MessageNumbers.format(ironDex) + " " + iron.zOutsideRange(z));
         }
         return z;

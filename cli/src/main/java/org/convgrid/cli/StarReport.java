@@ -89,8 +89,8 @@ final class StarReport {
         line(out, "dipole period spacing Delta Pi_1", Double.isNaN(buoyancyTravelTime) ? Double.NaN
                 : BuoyancyTravelTime.periodSpacing(buoyancyTravelTime, 1), "s");
         out.println();
-        // the zones as zones.csv lists them, with their kind (a review could not tell a central zone below the core
-        // threshold from a core, nor see the mass of a surface zone whose m/M ends both print 1.000000)
+        // the zones as zones.csv lists them, with their kind (without it a reader could not tell a central zone below
+        // the core threshold from a core, nor see the mass of a surface zone whose m/M ends both print 1.000000)
         List<CatalogueZone> zones = row.zones();
         out.printf(Locale.ROOT, "Convective zones (%d):%n", zones.size());
         if (zones.isEmpty()) {

@@ -139,7 +139,7 @@ final class TestedRange {
 
     /**
      * The metallicity line of compositions given as [Fe/H]: the [Fe/H] asked, the Z it gives, and the tested range's
-     * end(s) in Z and in this grid's [Fe/H] (its Sun and helium). A reviewer's fe_h_dex: [-2.5] was told only "Z =
+     * end(s) in Z and in this grid's [Fe/H] (its Sun and helium). A user's fe_h_dex: [-2.5] was told only "Z =
      * 5.832024e-5 lies outside the tested range Z = 1e-4 to 0.04", a Z nobody had typed, and had to work out which
      * [Fe/H] the range begins at.
      */

@@ -90,8 +90,8 @@ final class TransitionsCommand implements Callable<Integer> {
             throw new UsageException("--tolerance must be a positive mass in Msun (got "
                     + MessageNumbers.format(tolerance) + ")");
         }
-        // options that only steer the bisection mean nothing without it: said, not ignored (a review's --tolerance
-        // 0.01 without --refine exited 0 and changed nothing)
+        // options that only steer the bisection mean nothing without it: said, not ignored (--tolerance
+        // 0.01 without --refine had exited 0 and changed nothing)
         if (!refine && (tolerance != null || allCrossings || threads != null)) {
             throw new UsageException((tolerance != null ? "--tolerance" : allCrossings ? "--all-crossings"
                     : "--threads") + " steers the refinement: add --refine (without it the table is recomputed "

@@ -30,8 +30,8 @@ final class UnfinishedRunWarning {
             return;
         }
         if (!Files.exists(layout.manifest())) {
-            // a run or merge stopped before its manifest, or a manifest deleted: a review drew such a directory's
-            // charts without a word (a merge cut short: zones.csv and life events missing)
+            // a run or merge stopped before its manifest, or a manifest deleted: such a directory's charts were drawn
+            // without a word (a merge cut short: zones.csv and life events missing)
             err.println("convgrid: warning: " + layout.root() + " has no " + RunLayout.MANIFEST + ": whether its run "
                     + "finished is unknown (a merge cut short, or the manifest deleted?); what follows covers the rows of "
                     + RunLayout.CATALOGUE + " only");
@@ -51,7 +51,7 @@ final class UnfinishedRunWarning {
         long rows = CatalogueReader.readCompleteLines(Files.readString(layout.catalogue())).size();
         if (!manifest.isUnfinished()) {
             if (rows < manifest.total()) {
-                // a finished run's catalogue that lost rows (a hand edit, damage): a review saw 51 of 52 rows drawn
+                // a finished run's catalogue that lost rows (a hand edit, damage): 51 of 52 rows were drawn
                 // without a word
                 err.println("convgrid: warning: " + layout.catalogue() + " holds " + rows + " rows but the "
                         + "manifest of the finished run counts " + manifest.total() + ": rows were deleted by hand or "

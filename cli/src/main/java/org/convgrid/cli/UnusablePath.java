@@ -8,7 +8,7 @@ import java.util.Map;
  * Why a path typed on the command line cannot be used, in words. The JDK refuses a path with a NUL, and one whose
  * characters its file-name encoding cannot write; that encoding comes from the locale, which is plain ASCII under
  * {@code LC_ALL=C} or {@code POSIX} (common under cron and batch systems), so "runs/c-locale ñ" was refused there as if
- * the name were at fault (found by a robustness review). The launcher runs the JVM under a UTF-8 locale in that case;
+ * the name were at fault. The launcher runs the JVM under a UTF-8 locale in that case;
  * this names the locale for a JVM started otherwise.
  */
 final class UnusablePath {

@@ -70,8 +70,7 @@ class CalibrateSunCommandTest {
 
     @Test
     void csvNamesEveryColumnOnce() throws Exception {
-        // mixing_length, y_init and z_init came twice (pandas read the repeats as mixing_length.1, ...): found by
-        // an asteroseismologist's review
+        // mixing_length, y_init and z_init came twice (pandas read the repeats as mixing_length.1, ...)
         StringWriter csv = new StringWriter();
         SolarCalibrationReport.writeCsv(syntheticSun(), csv);
         String[] lines = csv.toString().split("\n");
@@ -105,7 +104,7 @@ class CalibrateSunCommandTest {
         assertThat(table.toString()).contains("mixing length alpha       1.90000 pressure scale heights")
                 .contains("envelope base r/R         0.7200").contains("main-sequence lifetime    10.500 Gyr")
                 .contains("zero-age L / L_sun        0.7000")
-                // the reference of Rossby numbers and envelope-mass scalings (found by a stellar-activity review)
+                // the reference of Rossby numbers and envelope-mass scalings
                 .contains("envelope mass             0.02000 Msun")
                 .contains("turnover time             23.15 d local").contains("34.72 d global");
     }

@@ -104,7 +104,7 @@ class CheckCommandTest {
                 + "age: {myr: [20, 150, 600]}\n");
         assertThat(cli.execute("check", birth.toString(), "--threads", "2").out())
                 .contains("about 158 new models after them").contains("about 24 s more");
-        // a reviewer's old population, 1-13 Gyr from birth: 3 [Fe/H] x 4 ages, 0.05 Msun steps halved 4 times to
+        // an old population, 1-13 Gyr from birth: 3 [Fe/H] x 4 ages, 0.05 Msun steps halved 4 times to
         // 0.005 Msun: 12 x 2.5 x 4 = 120 models, and the turn-off's search at the ages past the 1.2 Msun star's
         // lifetime (10 Gyr x 1.2^-2.5 = 6.3 Gyr: 10 and 13 Gyr, 6 slices x 4 = 24 models), each costing more the
         // older its age (mean 7.25 Gyr: 0.3 s x (1 + 7.25 / 31) = 0.37 s), 53 s on one thread; the run added 124

@@ -11,8 +11,8 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * {@code plot} of a run directory whose tables were written before they named the overshoot profile: the charts take
- * the run's profile from its manifest, so their file names and subtitles agree with the report's physics rows (found
- * by a code review: a ramped run's charts read "overshoot 0.2 Hp" beside a report that said uniform-ramped).
+ * the run's profile from its manifest, so their file names and subtitles agree with the report's physics rows (a
+ * ramped run's charts had read "overshoot 0.2 Hp" beside a report that said uniform-ramped).
  */
 class EarlierRunPlotTest {
 

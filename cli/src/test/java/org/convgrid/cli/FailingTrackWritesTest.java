@@ -25,9 +25,9 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * A track that cannot be written (a full disk, simulated by a directory standing where the track file goes) stops
  * the sweep before its star's catalogue rows, and a resume gives back every track and the catalogue of a run that
- * never failed; a resume also recomputes the blocks of kept stars whose track files are missing. Found by a
- * robustness review: a full disk left 38 catalogue rows beside the track of one star, and the resume then said
- * "52 ok" with 14 of 26 stars' tracks.
+ * never failed; a resume also recomputes the blocks of kept stars whose track files are missing. Before, a
+ * full disk left 38 catalogue rows beside the track of one star, and the resume then said "52 ok" with 14 of 26
+ * stars' tracks.
  */
 class FailingTrackWritesTest {
 

@@ -10,7 +10,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * A directory without catalogue and manifest that holds files a run writes is refused without {@code --force} and
- * cleared with it (found by a review: a user's zones.csv and report.html were overwritten, and an earlier run's
+ * cleared with it (before, a user's zones.csv and report.html were overwritten, and an earlier run's
  * life_events.csv stayed beside the new run's files as if it were its own).
  */
 class FilesWithoutCatalogueTest {

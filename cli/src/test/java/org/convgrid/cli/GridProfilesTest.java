@@ -15,7 +15,7 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * {@code output: profiles: true} writes one profile per OK grid model into {@code profiles/}, named by its model id,
  * the same at any thread count, carried over by {@code merge}; without it there is no {@code profiles/}. The key had
- * been read and never acted on (a review found no {@code profiles/} after a demo run with it). Production solver, real
+ * been read and never acted on (a demo run with it left no {@code profiles/}). Production solver, real
  * zero-age models; the checks are of the files, not of physics.
  */
 class GridProfilesTest {

@@ -9,7 +9,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * [Fe/H] instead of Z, in a grid ({@code metallicity: fe_h_dex}) and in {@code star --fe-h-dex}: the same
- * composition, so the same model. Asked for by a stellar-activity / exoplanet-host review (hosts come with a
+ * composition, so the same model. Wanted for stellar-activity and exoplanet-host work (hosts come with a
  * spectroscopic [Fe/H]); the conversion is IronToMetals's (common practice, no single published source).
  */
 class IronAbundanceTest {

@@ -13,7 +13,7 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * The launcher's choice of the UTF-8 locale it runs the JVM under when the session's is C or POSIX, so that
  * non-ASCII paths work ({@link UnusablePath}): C.UTF-8 where the system has it, else en_US.UTF-8, else any UTF-8
- * locale (a review: older glibc and macOS have no C.UTF-8), else none; and {@code locale -a} never runs in a session
+ * locale (older glibc and macOS have no C.UTF-8), else none; and {@code locale -a} never runs in a session
  * that is UTF-8 already, which would pay for it at every start. The launcher's own function is run by bash, with a
  * {@code locale} command of the test's that lists the locales a system might have and records that it ran.
  */

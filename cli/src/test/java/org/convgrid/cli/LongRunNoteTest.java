@@ -7,8 +7,8 @@ import org.convgrid.grids.yaml.GridFileReader;
 import org.junit.jupiter.api.Test;
 
 /**
- * A run that check's rough rule expects to last an hour or more says so when it starts (a robustness review: a grid
- * estimated at 22 h by check started without a word); a short one, or a resume with little left, does not.
+ * A run that check's rough rule expects to last an hour or more says so when it starts (a grid
+ * estimated at 22 h by check had started without a word); a short one, or a resume with little left, does not.
  */
 class LongRunNoteTest {
 

@@ -10,8 +10,8 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * A run whose refinement adds no model says why instead of "transitions refined ... with 0 new models" (a review's
- * one-mass grid), and no chart library message reaches the user.
+ * A run whose refinement adds no model says why instead of "transitions refined ... with 0 new models" (as a
+ * one-mass grid's did), and no chart library message reaches the user.
  */
 class NothingToRefineLineTest {
 

@@ -15,12 +15,12 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * life_events.csv gives the end of a radiative core, not only its appearance, and where each track ends. A review
- * ran this grid and found radiative_core_myr 67.45 (0.26 Msun) and 38.72 (0.3 Msun) with nothing after, while the
+ * life_events.csv gives the end of a radiative core, not only its appearance, and where each track ends. This
+ * grid gave radiative_core_myr 67.45 (0.26 Msun) and 38.72 (0.3 Msun) with nothing after, while the
  * catalogue calls both fully convective at 250 Myr (their transient radiative cores are a documented model
  * discrepancy, README "Known discrepancies"). The end must agree with the run's own files: it is the first step of
  * the track's last run of fully convective steps, and the catalogue's rows before and after it say so. Not a physics
- * test (production solver, the review's grid, no refinement; ~10 s).
+ * test (production solver, that grid, no refinement; ~10 s).
  */
 class RadiativeCoreEndTest {
 
@@ -67,7 +67,7 @@ class RadiativeCoreEndTest {
                         .isEqualTo(!afterTheOnset || afterTheEnd);
             }
         }
-        // the review's two stars are fully convective again by 250 Myr; 0.33 Msun keeps its radiative region
+        // 0.26 and 0.3 Msun are fully convective again by 250 Myr; 0.33 Msun keeps its radiative region
         assertThat(events.get(0).radiativeCoreEndMyr()).isBetween(67.0, 250.0);
         assertThat(events.get(1).radiativeCoreEndMyr()).isBetween(39.0, 250.0);
         assertThat(events.get(2).radiativeCoreEndMyr()).isNaN();

@@ -41,7 +41,7 @@ class RefinementProgressLineTest {
 
     @Test
     void inABatchLogTheRefinementsLastLineIsTheSummarysCount() throws Exception {
-        // a review's log (stderr not a terminal) ended on 89 or 148 new models while the summary said 169
+        // a log (stderr not a terminal) had ended on 89 or 148 new models while the summary said 169
         CliHarness log = new CliHarness(new CommandContext(grid -> FakeChunkSolver.fast(), List.of(), Map.of(),
                 work, false, new FakeMassLines(Set.of())));
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);

@@ -93,7 +93,7 @@ class ResumeTest {
 
     /**
      * A resume of a finished run that has rows to compute again says the run is unfinished before it changes
-     * anything: a review killed such a resume outright (kill -9) after it had cut the catalogue back, and the manifest
+     * anything: when such a resume was killed outright (kill -9) after it had cut the catalogue back, the manifest
      * still said finished, with the old counts, beside the shorter catalogue.
      */
     @Test
@@ -130,7 +130,7 @@ class ResumeTest {
     /**
      * A run interrupted under an earlier version (two columns fewer, a reworded description in the header) resumes
      * under this one: its rows are carried into this version's layout, the overshoot profile they could not name
-     * taken from the grid, and the catalogue ends byte-identical to an uninterrupted run (found by a review: every
+     * taken from the grid, and the catalogue ends byte-identical to an uninterrupted run (every
      * header change had made such runs refuse to resume).
      */
     @Test
@@ -169,7 +169,7 @@ class ResumeTest {
 
     @Test
     void resumeWithNoRunInTheDirectorySaysSoAndStartsOne() throws Exception {
-        // a mistyped --out with --resume recomputed the whole grid without a word (found by a robustness review)
+        // a mistyped --out with --resume recomputed the whole grid without a word
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
         CliHarness.Execution fresh = run("run", "--no-refine", grid.toString(), "--out", "typo", "--resume", "--quiet");
         assertThat(fresh.code()).isEqualTo(0);
@@ -216,7 +216,7 @@ class ResumeTest {
         Files.write(work.resolve("whole/catalogue.ecsv"), holed);
         CliHarness.Execution refused = run("run", "--no-refine", grid.toString(), "--out", "whole", "--resume");
         assertThat(refused.code()).isEqualTo(2);
-        // this run's rows with one missing: a gap, not another run (a review saw "it belongs to another run")
+        // this run's rows with one missing: a gap, not another run (once reported as "it belongs to another run")
         assertThat(refused.err()).contains("catalogue.ecsv misses model p0-z00-m001-a00, between p0-z00-m000-a01 "
                 + "(row 2) and p0-z00-m001-a01 (row 3): rows were deleted by hand or the file was damaged")
                 .contains("delete its rows from p0-z00-m001-a01 on and resume again").doesNotContain("another run");
@@ -225,8 +225,8 @@ class ResumeTest {
 
     /**
      * Profiles turned on (or off) for a resume: the models already computed have none (or have them), so the
-     * directory would hold profiles of some models while its manifest said all or none (found by a robustness
-     * review: exit 0 with 10 of 52 profiles). Refused like merge refuses such shards, changing nothing.
+     * directory would hold profiles of some models while its manifest said all or none (such a
+     * resume had exited 0 with 10 of 52 profiles). Refused like merge refuses such shards, changing nothing.
      */
     @Test
     void resumeRefusesTurningProfilesOnOrOffAndChangesNothing() throws Exception {
@@ -253,7 +253,7 @@ class ResumeTest {
 
     /**
      * A catalogue whose manifest is gone is continued when its rows are this grid's, with a new manifest and a note;
-     * one of another grid of the same shape (the same ids) is refused without steering to --force (found by a review:
+     * one of another grid of the same shape (the same ids) is refused without steering to --force (before,
      * "use a new --out or --force" was the only way out offered, and --force deletes the rows).
      */
     @Test
@@ -272,7 +272,7 @@ class ResumeTest {
         assertThat(other.err()).contains("has a catalogue but no manifest.yaml, and the catalogue is not this grid's")
                 .contains("row 1 is model p0-z00-m000-a00 of 0.1 Msun").doesNotContain("--force");
         assertThat(work.resolve("lost/manifest.yaml")).doesNotExist();
-        // the same shape, so the same ids and stars, but other ages or physics (a code review's resume took them)
+        // the same shape, so the same ids and stars, but other ages or physics (a resume had taken them)
         for (String[] change : new String[][] {{"gyr: [0, 2.0]", "gyr: [0, 3.0]", "age_gyr 2.0 where this grid has 3.0"},
             {"mixing_length: 1.8", "mixing_length: 2.0", "mixing_length 1.8 where this grid has 2.0"}}) {
             Path edited = CliHarness.writeGrid(work, "edited.yaml", CliHarness.GRID.replace(change[0], change[1]));
@@ -328,7 +328,7 @@ class ResumeTest {
         assertThat(Files.readAllBytes(catalogue)).hasSize(500);
     }
 
-    /** `plot` of a finished run whose catalogue lost a row warns (a review saw 51 of 52 rows drawn without a word). */
+    /** `plot` of a finished run whose catalogue lost a row warns (51 of 52 rows had been drawn without a word). */
     @Test
     void plotWarnsWhenAFinishedRunsCatalogueLacksRows() throws Exception {
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);

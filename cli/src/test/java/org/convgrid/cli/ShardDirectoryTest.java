@@ -13,7 +13,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * A shard's directory is {@code <DIR>-shard-K-of-N} whether DIR is the grid's output.dir or {@code --out}, so one
- * command line serves every task of a job array; {@code --force} never replaces another shard (found by a review:
+ * command line serves every task of a job array; {@code --force} never replaces another shard (before,
  * with {@code --out} every task wrote to DIR itself, task 2 was refused and {@code --force} deleted task 1's rows).
  */
 class ShardDirectoryTest {

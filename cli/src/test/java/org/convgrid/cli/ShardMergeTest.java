@@ -110,7 +110,7 @@ class ShardMergeTest {
 
     @Test
     void aDirectoryWithAnEarlierRunsFilesButNoCatalogueIsRefusedAndKept() throws Exception {
-        // a review merged into a directory whose catalogue and manifest had been deleted: the earlier run's life
+        // a merge into a directory whose catalogue and manifest had been deleted: the earlier run's life
         // events, tracks and charts stayed beside the merged catalogue and read as the merge's own
         runShards(grid(), 2);
         Path earlier = Files.createDirectories(work.resolve("earlier"));
@@ -173,7 +173,7 @@ class ShardMergeTest {
 
     @Test
     void aMergeCutShortIsNamedAsSuchWhenMergedAgain() throws Exception {
-        // a review stopped a merge with SIGTERM: its catalogue stayed without a manifest, and merging again was
+        // a merge stopped with SIGTERM: its catalogue stayed without a manifest, and merging again was
         // refused as "already holds a run"
         runShards(grid(), 2);
         Path cut = Files.createDirectories(work.resolve("cut"));

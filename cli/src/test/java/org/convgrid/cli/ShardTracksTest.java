@@ -107,7 +107,7 @@ class ShardTracksTest {
 
     @Test
     void aShardWhoseStarLacksItsTrackIsRefusedUntilItIsResumed() throws Exception {
-        // a review deleted a shard's track file and merged: exit 0, the merged run one track short and nothing said
+        // a shard's track file deleted, then merged: exit 0, the merged run one track short and nothing said
         ChunkSolverFactory checked = new ChunkSolverFactory() {
             @Override
             public ChunkSolver solverFor(GridSpec grid) {

@@ -9,8 +9,8 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * Temporary files that a signal left mid-write ({@code .<name>.<random>.tmp}) are removed by the next run or plot
- * that holds the directory's lock, of the kinds each writes; a user's hidden file of the same shape stays. A review
- * found them surviving a finished {@code --resume} and later plots, only {@code --force} removing them.
+ * that holds the directory's lock, of the kinds each writes; a user's hidden file of the same shape stays. They
+ * had survived a finished {@code --resume} and later plots, only {@code --force} removing them.
  */
 class StaleTemporaryFilesTest {
 
@@ -35,7 +35,7 @@ class StaleTemporaryFilesTest {
         Path track = dir.resolve("tracks/.p0-z00-m005.csv.0zz.convgrid.tmp");
         Path zones = dir.resolve(".zones.csv.abc.convgrid.tmp");
         Path userTrack = dir.resolve("tracks/.my-track.csv.5.tmp");
-        // a user's copies named like ours but for the marker (a code review: ".catalogue.ecsv.backup.tmp" was taken
+        // a user's copies named like ours but for the marker (".catalogue.ecsv.backup.tmp" had been taken
         // for a temporary of the catalogue)
         Path userBackup = dir.resolve(".catalogue.ecsv.backup.tmp");
         Path userOldChart = dir.resolve("maps/.hr_a1.8_ov0_schwarzschild.png.old.tmp");

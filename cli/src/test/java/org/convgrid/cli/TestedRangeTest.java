@@ -97,7 +97,7 @@ class TestedRangeTest {
 
     @Test
     void aGridGivenInIronSpeaksOfIronAndTheZItGives() throws Exception {
-        // a reviewer's fe_h_dex: [-2.5] was told "metallicity Z = 5.832024e-5 lies outside the tested range Z = 1e-4 to
+        // a user's fe_h_dex: [-2.5] was told "metallicity Z = 5.832024e-5 lies outside the tested range Z = 1e-4 to
         // 0.04", a Z nobody typed; with the default Sun (Z/X 0.0245, Grevesse & Noels 1993) and helium law
         // (0.2471 + 1.5 Z), Z = 1e-4 is [Fe/H] = log10(1e-4 / 0.75265 / 0.0245) = -2.27 and Z = 0.04 is +0.40
         Path grid = CliHarness.writeGrid(work, "iron.yaml", """

@@ -110,8 +110,8 @@ class TransitionsCommandTest {
     @Test
     void withoutToleranceARefinementAimsAtTheGridFilesTolerance() throws Exception {
         // what finishing a merged or interrupted run does: it must give what a single run of the grid gives, so a
-        // grid asking for 0.01 Msun is refined to 0.01, not to the command's own default of 0.002 (found by a
-        // robustness review: 112 catalogue rows instead of a single run's 82)
+        // grid asking for 0.01 Msun is refined to 0.01, not to the command's own default of 0.002 (it had
+        // given 112 catalogue rows instead of a single run's 82)
         Path grid = CliHarness.writeGrid(work, "coarse.yaml", CliHarness.GRID + "transitions: {tolerance_msun: 0.01}\n");
         FakeMassLines lines = new FakeMassLines(Set.of());
         assertThat(harness(lines).execute("run", "--no-refine", grid.toString(), "--out", "coarse", "--quiet").code())

@@ -63,7 +63,7 @@ class TurnoffLiteratureTest {
         // ~ M^-3.5 near a solar mass our diffusion-free models turn off ~3 % (~0.025 Msun) higher at a given age.
         // Accepted: 0.76-0.86 Msun, i.e. 0.80 +/- 0.04 for the spread between isochrone sets (helium, alpha
         // enhancement, which ours lack) plus the diffusion shift upwards and the 0.03 Msun tolerance of this test.
-        // Ours on a review's grid refined to 0.005 Msun: 0.8375 at 10 Gyr, 0.78125 at 13 Gyr (README).
+        // Ours on an old-population grid refined to 0.005 Msun: 0.8375 at 10 Gyr, 0.78125 at 13 Gyr (README).
         assertThat(t.turnoff().massMsun()).isBetween(0.76, 0.86);
 
         // the new model is an ordinary catalogue row at the slice's age, on one side of the turn-off or the other

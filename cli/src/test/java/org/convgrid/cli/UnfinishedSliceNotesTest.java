@@ -17,7 +17,7 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * transitions.csv of an unfinished run says, in each row's notes, which slices lack some of their masses: stderr's
  * warning alone left a script that reads the file later unable to tell that a limit was found among part of a
- * slice's masses (a review). The grid ({@link CliHarness#GRID}): 2 metallicities x 39 masses x 2 ages, in grid
+ * slice's masses. The grid ({@link CliHarness#GRID}): 2 metallicities x 39 masses x 2 ages, in grid
  * order Z, then mass, then age, so the first 40 rows are 20 masses of Z = 0.004 at both ages.
  */
 class UnfinishedSliceNotesTest {

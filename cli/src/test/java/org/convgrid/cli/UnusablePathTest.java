@@ -5,7 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
 
-/** A path refused under an ASCII locale names the locale, not the name (a review's "c-locale ñ" under LC_ALL=C). */
+/** A path refused under an ASCII locale names the locale, not the name ("c-locale ñ" under LC_ALL=C). */
 class UnusablePathTest {
 
     @Test

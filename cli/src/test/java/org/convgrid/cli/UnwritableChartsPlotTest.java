@@ -9,7 +9,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * `plot` whose charts cannot be written (a regular file where maps/ goes stands in for a full disk) exits 1 with the
- * reason and the way to redraw, instead of one warning per chart and exit 0 (a robustness review).
+ * reason and the way to redraw, instead of one warning per chart and exit 0.
  */
 class UnwritableChartsPlotTest {
 

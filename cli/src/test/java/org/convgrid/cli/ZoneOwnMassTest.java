@@ -15,8 +15,8 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * zones.csv gives every zone its own mass, not the difference of its written ends: a review found the 1.3 Msun,
- * Z = 0.01 star at 50 Myr (a thin convective envelope, base at m/M 0.999998) with zone_mass_msun 2.6e-06, which is
+ * zones.csv gives every zone its own mass, not the difference of its written ends: the 1.3 Msun,
+ * Z = 0.01 star at 50 Myr (a thin convective envelope, base at m/M 0.999998) had zone_mass_msun 2.6e-06, which is
  * (1 - 0.999998) x 1.3, against the catalogue's env_cz_mass_msun 2.537907e-06. Every envelope (and whole-star) row of
  * a run must carry exactly what the catalogue writes for the envelope. Not a physics test: it compares two files of
  * one run (production solver; the masses give a whole star, a thick and a thin envelope, cores and surface shells).
@@ -53,7 +53,7 @@ class ZoneOwnMassTest {
             assertThat(z[7]).as("zone_mass_msun of %s", z[0])
                     .isEqualTo(CsvNumbers.format(rows.get(z[0]).envCzMassMsun()));
         }
-        // the thin envelope the review found: its base is written 0.999998, one significant digit of 1 - m/M, while
+        // the 1.3 Msun star's thin envelope: its base is written 0.999998, one significant digit of 1 - m/M, while
         // its mass keeps seven
         String[] thin = envelopes.stream().filter(z -> z[0].equals("p0-z00-m001-a00")).findFirst().orElseThrow();
         assertThat(thin[3]).isEqualTo("0.999998");

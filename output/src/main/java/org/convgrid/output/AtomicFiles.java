@@ -34,7 +34,7 @@ public final class AtomicFiles {
     /**
      * Ending of every temporary file: {@code .<target name>.<random>.convgrid.tmp} beside its target. The word marks it
      * as ours: a cleaner that matched any {@code .<name>.<word>.tmp} would take a user's {@code .catalogue.ecsv.backup.tmp}
-     * for one (a code review).
+     * for one.
      */
     private static final String TEMPORARY_SUFFIX = ".convgrid.tmp";
     /** A temporary file's name: a dot, the target's name, a dot, a random unsigned long in base 36, the suffix. */

@@ -35,7 +35,7 @@ class IronAbundanceTest {
         assertThat(IronAbundance.DEFAULT.cell(0.0, 0.2471)).isEmpty();
         assertThat(IronAbundance.DEFAULT.dex(Double.NaN, 0.27)).isNaN();
         assertThat(IronAbundance.DEFAULT.dex(0.02, Double.NaN)).isNaN();
-        // no hydrogen left (an edited cell, or Y + Z above 1 after rounding): no [Fe/H], not an exception (a code review)
+        // no hydrogen left (an edited cell, or Y + Z above 1 after rounding): no [Fe/H], not an exception
         assertThat(IronAbundance.DEFAULT.dex(0.02, 0.99)).isNaN();
         assertThat(IronAbundance.DEFAULT.cell(0.3, 0.8)).isEmpty();
     }

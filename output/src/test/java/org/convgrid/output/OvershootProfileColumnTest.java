@@ -35,8 +35,8 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Every table that carries {@code overshoot_hp} says which profile it is the length of: under the uniform-ramped
- * profile 0.2 means 0.2 H_P from 2 Msun only, under the decaying one it is f, so the bare number misled (found by an
- * overshoot user's review: a ramped run's tables and charts read like a uniform one's).
+ * profile 0.2 means 0.2 H_P from 2 Msun only, under the decaying one it is f, so the bare number misled (a
+ * ramped run's tables and charts read like a uniform one's).
  */
 class OvershootProfileColumnTest {
 

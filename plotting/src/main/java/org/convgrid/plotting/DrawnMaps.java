@@ -36,7 +36,7 @@ public record DrawnMaps(List<Path> written, List<ChartFailure> failures) {
 
         /**
          * The file of the same name an earlier drawing left in maps/, when this one could not write it: a chart of
-         * older data beside tables of new data (a review found one listed as failed in report.html and still there).
+         * older data beside tables of new data (one was listed as failed in report.html and still there).
          */
         public enum OlderFile {
             /** There was none (or nothing was to be written). */

@@ -206,7 +206,7 @@ public final class RunMaps {
             chart = entry.chart().get();
         } catch (RuntimeException e) {
             // a chart library error or nothing to show: report it by chart and carry on with the others. A file an
-            // earlier drawing left under its name shows data the tables no longer hold: it goes too (a review)
+            // earlier drawing left under its name shows data the tables no longer hold: it goes too
             return new Drawn(written, new DrawnMaps.ChartFailure(entry.fileName(), reason(e), false,
                     removeOlder(files)));
         }
@@ -368,7 +368,7 @@ public final class RunMaps {
     /**
      * The zone maps of an {@code ms_fraction} grid: one per Z, main-sequence fraction and physics, in catalogue order,
      * its masses along x as on an age slice's map, each star at its own age. Grouped by age in Gyr they held one star
-     * each (a review's grid of 6 masses, 2 Z and 5 fractions drew 60 such maps in m/M and 60 in r/R).
+     * each (a grid of 6 masses, 2 Z and 5 fractions drew 60 such maps in m/M and 60 in r/R).
      */
     private static void zonesAtFractions(RunData run, AgeGroups groups, List<MapEntry> mass, List<MapEntry> radius) {
         record FractionSlice(double zInit, double msFraction, PhysicsKey physics) {

@@ -53,7 +53,7 @@ class ChartFailureTest {
     void aChartNotDrawnTakesTheOlderFileOfItsNameAway(@TempDir Path dir) throws Exception {
         TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.2, 1.6, 8), new double[] {0.014}, new double[] {0}));
         Path maps = Files.createDirectories(dir.resolve("maps"));
-        // an earlier drawing's chart, from data the tables no longer hold (a review: `plot` kept it beside a report
+        // an earlier drawing's chart, from data the tables no longer hold (`plot` had kept it beside a report
         // that says "not drawn")
         Files.writeString(maps.resolve("broken.png"), "an older chart");
         Files.writeString(maps.resolve("broken.svg"), "an older chart");

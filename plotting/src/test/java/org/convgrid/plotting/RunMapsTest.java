@@ -124,7 +124,7 @@ class RunMapsTest {
                         "Z = 0.014"));
         assertThat(RunMaps.isChartFile(Path.of("turnover-vs-mass_z0.014_a1.8_ov0_schwarzschild.png"))).isTrue();
         // the caption names only what the chart has: 0.5 and 1 Msun are neither fully convective nor bracket a limit
-        // (it named hollow markers and dotted lines whatever the chart held; found by a planet-host user's review)
+        // (it named hollow markers and dotted lines whatever the chart held)
         assertThat(RunMaps.plan(RunData.read(dir))).filteredOn(e -> e.section().equals(MapEntry.TURNOVER))
                 .singleElement().satisfies(e -> assertThat(e.caption()).doesNotContain("hollow")
                         .doesNotContain("dotted").contains("local (solid with markers) and global (dashed)"));

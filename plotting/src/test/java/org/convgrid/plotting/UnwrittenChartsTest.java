@@ -12,7 +12,7 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * Charts that cannot be written (a full disk, a file size limit; simulated by a regular file where maps/ goes) are
  * failures of the command, with the operating system's reason and the way to redraw; a chart with nothing to draw
- * stays a warning. Found by a robustness review: `ulimit -f 40` gave 31 warnings "I/O error writing PNG file!" and
+ * stays a warning. Before, `ulimit -f 40` gave 31 warnings "I/O error writing PNG file!" and
  * exit 0.
  */
 class UnwrittenChartsTest {

@@ -61,7 +61,7 @@ public final class CatalogueAppender implements OutcomeSink, Closeable {
         ModelOutcome oneLine = o instanceof ModelOutcome.Failed f
                 ? new ModelOutcome.Failed(f.request(), f.status(), oneLine(f.statusDetail()), f.solverIterations()) : o;
         CatalogueRow row = OutcomeRows.toRow(oneLine);
-        // a full disk said only "No space left on device": the message names the file (a robustness review)
+        // a full disk said only "No space left on device": the message names the file
         try {
             zones.write(ZoneTable.lines(row));
             zones.flush();

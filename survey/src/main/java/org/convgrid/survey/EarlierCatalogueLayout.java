@@ -45,7 +45,7 @@ public final class EarlierCatalogueLayout {
             return text;
         }
         if (CatalogueReader.headerCutShort(text) || header.startsWith(text)) {
-            // a prefix of the header is damage, not another version's layout (a review read it as a version mismatch)
+            // a prefix of the header is damage, not another version's layout (it was read as a version mismatch)
             throw new RunSetupException(file + ": " + CatalogueReader.HEADER_CUT_SHORT + "; cannot " + action
                     + " (remove it and resume again to start the catalogue anew, or restore it from a copy)");
         }

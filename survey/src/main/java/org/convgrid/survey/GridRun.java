@@ -118,7 +118,7 @@ public final class GridRun {
             return resume(s);
         }
         if (dir.holdsRun() && !s.force()) {
-            // a directory of another shard, or of this shard of another grid, refuses both (a review was told to add
+            // a directory of another shard, or of this shard of another grid, refuses both (the message said to add
             // --resume or --force there): say what it holds instead
             refuseAnotherShard(s);
             throw new RunSetupException(dir.root() + " already holds a run; add --resume to continue it or "
@@ -147,7 +147,7 @@ public final class GridRun {
     /**
      * Refuses a directory without catalogue and manifest that holds files a run writes: they are a user's (a
      * zones.csv of their own) or what is left of an earlier run whose catalogue went (its life_events.csv would read
-     * as this run's), and a new run would overwrite some and leave others beside its own. Found by a review.
+     * as this run's), and a new run would overwrite some and leave others beside its own.
      */
     private static void refuseFilesOfARun(RunDirectory dir) throws IOException {
         List<java.nio.file.Path> found = dir.earlierRunFiles();
@@ -205,7 +205,7 @@ public final class GridRun {
         try {
             old = RunManifestReader.read(Files.readString(dir.manifest()));
         } catch (OutputFormatException e) {
-            // a review saw the Java null-pointer text of a cut manifest, exit 1, and no way on
+            // a cut manifest gave the Java null-pointer text, exit 1, and no way on
             throw new RunSetupException(dir.manifest() + ": " + e.getMessage() + "; nothing was changed. Move it "
                     + "aside (e.g. to " + RunLayout.MANIFEST + ".damaged) and resume again: without a manifest the "
                     + "resume writes a new one when the catalogue's rows are this grid's");
@@ -247,8 +247,8 @@ public final class GridRun {
     /**
      * Resumes a directory whose manifest is gone (deleted, or moved aside when damaged) but whose catalogue is there:
      * when the catalogue's rows are the first models of this grid and shard, in order, it is this run's, and a new
-     * start manifest is written (the first session's start time and measured cost are lost). A review found the
-     * only way out offered was --force, which deletes the rows.
+     * start manifest is written (the first session's start time and measured cost are lost). The
+     * only way out offered had been --force, which deletes the rows.
      */
     private Plan resumeWithoutManifest(Settings s) throws IOException {
         RunDirectory dir = s.directory();
@@ -283,7 +283,7 @@ public final class GridRun {
     /**
      * Without a manifest the shard is not on record, and shard 1's first rows are the whole grid's first rows too: a
      * directory named for a shard ({@code -shard-K-of-N}, the name {@link RunDirectory#forShard} gives) must be resumed
-     * with {@code --shard} (a code review turned a shard's directory into the whole grid's this way).
+     * with {@code --shard} (a resume without it turned a shard's directory into the whole grid's).
      */
     private static void refuseUnnamedShard(RunDirectory dir, Shard requested) {
         java.nio.file.Path name = dir.root().getFileName();
@@ -295,7 +295,7 @@ public final class GridRun {
 
     /**
      * Without a manifest the profile setting is not on record: profile files beside a grid that writes none, or a grid
-     * that writes them and none beside kept rows, mean another setting wrote the rows (a code review's resume wrote a
+     * that writes them and none beside kept rows, mean another setting wrote the rows (a resume wrote a
      * manifest claiming profiles that did not exist).
      */
     private static void refuseProfilesUnlike(RunDirectory dir, boolean wanted) throws IOException {
@@ -319,8 +319,8 @@ public final class GridRun {
     /**
      * Refuses a resume whose grid file turns {@code output: profiles} on or off: the models already in the catalogue
      * were computed with the other setting, so the directory would hold profiles of some models only while its
-     * manifest (which quotes the new grid file) claimed them all, or none. A robustness review found profiles turned
-     * on for a resume accepted silently (10 of 52 profile files, manifest saying {@code profiles: true}); merge
+     * manifest (which quotes the new grid file) claimed them all, or none. Profiles turned
+     * on for a resume were accepted silently (10 of 52 profile files, manifest saying {@code profiles: true}); merge
      * refuses shards that differ so already. A recorded grid text this version cannot read names no setting, and
      * is not held against the resume (its models hash already matched).
      */

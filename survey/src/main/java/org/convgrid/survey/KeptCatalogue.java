@@ -87,7 +87,7 @@ public record KeptCatalogue(Set<String> ids, boolean hasHeader, long droppedByte
     /**
      * The refusal for row {@code i} (0-based) that is not the model the plan expects there. When the row is a later
      * model of the plan, rows are missing in between: the catalogue is this run's with a gap (rows deleted by hand, or
-     * damage), which a review found reported as "belongs to another run". Otherwise it is another grid's or shard's.
+     * damage), which was reported as "belongs to another run". Otherwise it is another grid's or shard's.
      *
      * @param rest the plan after {@code wanted}
      */
@@ -127,7 +127,7 @@ public record KeptCatalogue(Set<String> ids, boolean hasHeader, long droppedByte
                     + "another grid");
         }
         // the ids are grid positions, so a grid of the same shape with other ages or physics gives the same ids and
-        // stars (a code review resumed a run whose manifest was gone with such a grid): every request value a row
+        // stars (a run whose manifest was gone was resumed with such a grid): every request value a row
         // carries must match; a cell an earlier layout leaves empty (NaN, null) is not held against it
         String other = otherValue("y_init", row.yInit(), request.initialHelium());
         other = other != null ? other : otherValue("mixing_length", row.mixingLength(),

@@ -42,7 +42,7 @@ public final class LifeEventLog {
     /**
      * Appends one star's row. The header is decided by the file's content, not by its existence: a full disk can
      * leave the file created but empty, or a row cut short, and every later append must still produce a readable
-     * table (a robustness review found 24 rows without a header, which no command could read). So before the first
+     * table (24 rows had been left without a header, which no command could read). So before the first
      * append, and again after an append failed, the table is {@link #repair}ed; a table an earlier version began (a
      * run resumed after an upgrade: fewer columns) is rewritten with today's header, so that the rows appended to it
      * stay readable (a column it lacked stays empty until {@link #tidy} fills what it can).
@@ -84,7 +84,7 @@ public final class LifeEventLog {
         String header = LifeEventWriter.header();
         if (text.isEmpty()) {
             // empty, or a header cut short with no row after it (a full disk): the header alone, which readers take
-            // as a table of no rows (a code review's resume of an emptied table stopped on it as "damaged")
+            // as a table of no rows (a resume of an emptied table had stopped on it as "damaged")
             AtomicFiles.writeString(file, header);
             return;
         }

@@ -23,7 +23,7 @@ import org.convgrid.output.events.LifeEventRow;
 /**
  * On resume: the kept catalogue rows whose star lacks its track files (a grid whose stars evolve), its life-events
  * row (a grid from birth) or a model's profile file (a grid with {@code output: profiles: true}). An earlier version kept such rows when a full disk stopped the track writes but not the
- * catalogue (a robustness review: 52 rows "ok" beside 14 of 26 tracks, and charts quietly missing), and a user may
+ * catalogue (52 rows "ok" beside 14 of 26 tracks, and charts quietly missing), and a user may
  * delete a track. The catalogue is cut back to just before the first such row, so the sweep recomputes the blocks
  * from there in grid order (the catalogue stays a prefix of the plan, byte-identical to an uninterrupted run) and
  * writes their tracks again.

@@ -101,7 +101,7 @@ public final class ShardMerger {
             throw new RunSetupException(out.root() + " already holds a run; merge into a new directory");
         }
         // as run refuses them: an earlier run's tracks, life events or charts there would pass for the merge's own
-        // (a review merged zero-age shards beside an evolved run's files and got its life events and charts)
+        // (zero-age shards merged beside an evolved run's files got its life events and charts)
         List<Path> earlier = out.earlierRunFiles();
         if (!earlier.isEmpty()) {
             throw new RunSetupException(out.root() + " holds files a run writes (" + out.describe(earlier) + ") but no "
@@ -139,8 +139,8 @@ public final class ShardMerger {
 
     /**
      * Refuses a shard whose kept stars lack their files (a track, a life-events row, a profile) or whose zones.csv is
-     * gone: merge copies what is there, and a review merged shards with a deleted track, life-events row and zones
-     * table into a run that looked whole (66 of 68 tracks, 18 zone rows lost). A resume of the shard computes the
+     * gone: merge copies what is there, and shards with a deleted track, life-events row and zones table were
+     * merged into a run that looked whole (66 of 68 tracks, 18 zone rows lost). A resume of the shard computes the
      * stars lacking files again; a zones table is written only beside the rows, so that shard is run again.
      */
     private void refuseLackingFiles(RunDirectory shard, List<CatalogueRow> shardRows, GridSpec grid)
@@ -158,7 +158,7 @@ public final class ShardMerger {
 
     /**
      * The shards whose manifest says they are unfinished (interrupted, failed part-way or still running), for the
-     * message of a merge that lacks models: a review was told only which models were missing, not which shard; empty
+     * message of a merge that lacks models: it had said only which models were missing, not which shard; empty
      * when every shard finished.
      */
     private static String unfinished(List<Path> shards, List<RunManifest> manifests) {
@@ -249,7 +249,7 @@ public final class ShardMerger {
     /**
      * Why a shard's manifest does not give its models back: the grid text is read with the files it names (a preset,
      * an opacity table) as they are now, so a file changed since the run (calibrate-sun rewrites its preset) fails
-     * as an edited manifest does; a review was told "the manifest was edited" for an edited preset.
+     * as an edited manifest does; the message had said "the manifest was edited" for an edited preset.
      */
     private static final String NOT_ITS_MODELS = "the grid text in its manifest, read with the files it names (preset, "
             + "opacity table) as they are now, does not give its models_sha256: one of those files changed since the "
@@ -270,7 +270,7 @@ public final class ShardMerger {
         }
         // the same models from grid files that differ elsewhere (the title, transitions refine or tolerance_msun,
         // profiles): the merged run would take the first-named shard's choices, so the order of the arguments
-        // changed the result (found by a robustness review); differences in comments alone are accepted
+        // changed the result; differences in comments alone are accepted
         for (int i = 1; i < manifests.size(); i++) {
             GridSpec other = new GridFileReader().parse(manifests.get(i).gridFile(), manifests.get(i).gridText());
             if (!GridHash.ofModels(other).equals(models)) {

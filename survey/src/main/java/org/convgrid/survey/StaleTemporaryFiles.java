@@ -14,7 +14,7 @@ import org.convgrid.plotting.RunMaps;
 
 /**
  * The temporary files ({@link AtomicFiles}) that writes cut short by a signal or a crash left in a run directory: a
- * hidden {@code .<name>.<random>.convgrid.tmp} beside each file being written. A robustness review found them surviving a
+ * hidden {@code .<name>.<random>.convgrid.tmp} beside each file being written. They had survived a
  * finished {@code --resume} and later {@code plot}s (only {@code --force} removed them). A process that holds the
  * directory's lock ({@link RunLock}) is the only writer there, so every such file it finds is stale, and it removes
  * those of the kinds it writes itself. Only files whose name is a temporary name of a file convgrid owns go (a table

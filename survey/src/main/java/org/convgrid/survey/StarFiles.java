@@ -6,8 +6,8 @@ import org.convgrid.engine.request.ModelRequest;
 /**
  * The files a star's catalogue rows must never be kept without (its track files, its life-events row). The sweep
  * asks before it appends each row: a catalogue row whose track failed to reach the disk would be kept by a resume
- * while the track stayed missing, so the row is not written at all and the sweep stops there (a robustness review:
- * a full disk left 38 catalogue rows beside the track of one star).
+ * while the track stayed missing, so the row is not written at all and the sweep stops there (a full disk
+ * had left 38 catalogue rows beside the track of one star).
  */
 @FunctionalInterface
 public interface StarFiles {

@@ -21,7 +21,7 @@ import org.convgrid.output.transitions.TransitionRow;
  * The mark a row of transitions.csv carries in its notes when its slice lacks some of the models its run is to
  * compute: an interrupted run (or one that failed part-way) has a catalogue that holds part of some slices' masses,
  * and a limit found among part of them may lie elsewhere once the rest are there. Said until now on stderr alone
- * (a review: a script reading transitions.csv later could not tell). The models a slice is to hold come from the
+ * (a script reading transitions.csv later could not tell). The models a slice is to hold come from the
  * manifest's plan: its grid text and its shard (a shard's slices are complete when its share of them is). A slice
  * that holds all its models, and every slice of a run whose manifest says it finished, carries no mark, so the
  * table of a complete run is what it was. Every command that writes the table or the report's copy of it applies
@@ -83,8 +83,8 @@ public final class UnfinishedSlices {
     }
 
     /**
-     * The mark: how many of the slice's masses are in the catalogue, and the command that completes it (a review:
-     * "convgrid run --resume" alone is refused, it needs the grid file and the directory). The directory is the one
+     * The mark: how many of the slice's masses are in the catalogue, and the command that completes it
+     * ("convgrid run --resume" alone is refused, it needs the grid file and the directory). The directory is the one
      * the table is in, so it is named as such, not by a path that would tie the file to one machine. Its first words
      * are fixed, for scripts to test for: {@code unfinished slice:}.
      *

@@ -54,7 +54,7 @@ class LifeEventLogTest {
 
     /**
      * A run of an earlier version resumed with every star already done appends nothing; tidying at the end still
-     * names the grid's overshoot profile in its rows, as the catalogue's upgrade does (found by a code review: the
+     * names the grid's overshoot profile in its rows, as the catalogue's upgrade does (otherwise the
      * two tables disagreed, and whether a star happened to be recomputed decided it).
      */
     @Test

@@ -19,7 +19,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * life_events.csv after a disk filled briefly (a robustness review): the first append created the file but wrote
+ * life_events.csv after a disk filled briefly: the first append created the file but wrote
  * nothing, later appends saw it existed and skipped the header, and every resume and plot then failed with an
  * internal error. The header is decided by the content; a headerless table of today's rows gets it back; anything
  * else is a damaged file, named.
@@ -47,7 +47,7 @@ class LifeEventRepairTest {
 
     /**
      * Repaired on its own (as a resume does before it reads the table), an empty table or one whose header was cut
-     * short gets the header and reads as a table of no rows (a code review: the resume stopped on it as "damaged").
+     * short gets the header and reads as a table of no rows (the resume had stopped on it as "damaged").
      */
     @Test
     void anEmptyOrCutHeaderTableIsRepairedToAReadableEmptyTable() throws Exception {

@@ -50,7 +50,7 @@ public final class GridSummary {
             lines.add("  mixing length " + MessageNumbers.format(p.mixingLength()) + " Hp, "
                     + OvershootWords.describe(p) + ", " + p.criterion().name().toLowerCase(Locale.ROOT)
                     + ", opacity x" + MessageNumbers.format(p.opacityScale())
-                    // what a preset or the grid chose, so that check shows it before a run (a review could not)
+                    // what a preset or the grid chose, so that check shows it before a run
                     + (p.usesOpacityTable() ? " (table " + p.opacityTable() + ")" : "")
                     + ", " + p.atmosphere().label() + " atmosphere");
         }

@@ -153,7 +153,7 @@ public final class ProgressReporter implements ProgressListener {
     /**
      * Ends the progress; call once the run is over. A count of unknown total has no last report of its own, so the
      * final count is shown once more when a later report fell within the interval: redrawn on a terminal, a last
-     * line in a batch log (a review's log had stopped at 89 and at 148 new models while the summary said 169). A
+     * line in a batch log (a log had stopped at 89 and at 148 new models while the summary said 169). A
      * count whose last report reached its total was shown then, and gets no second line.
      */
     public void finish() {

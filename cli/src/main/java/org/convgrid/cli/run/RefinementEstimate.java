@@ -42,13 +42,13 @@ public record RefinementEstimate(long models, double seconds, String basis) {
     /**
      * The age, Gyr, at which a new model from birth costs twice {@link #BIRTH_MODEL_SECONDS}: its cost grows linearly
      * with the age it must be evolved to, BIRTH_MODEL_SECONDS (1 + age / this). {@code check} had assumed 0.3 s at
-     * every age, 18 s for the 88 new models of a reviewer's 1-13 Gyr grid that took 67 s on one thread (0.76 s each,
+     * every age, 18 s for the 88 new models of a 1-13 Gyr grid that took 67 s on one thread (0.76 s each,
      * on a loaded machine: the process had 61 % of a core, 0.46 s of CPU each). Measured with
      * {@code /usr/bin/time ./convgrid star --mass M --z 0.002 --age-gyr A} (2-core machine, load average 8, 2026-12-05),
      * user CPU less the same star at age 0 (the JVM and the start model, 0.5 s): 0.5 Msun 1.9 s at 0.1 Gyr, 2.3 s at
      * 1 Gyr, 2.5 s at 13 Gyr; 1 Msun 2.0, 1.7 and 3.0 s. Mean 1.93 s at 0.1 Gyr, 2.72 s at 13 Gyr: a factor 1.41 over
      * 12.9 Gyr, 1 + age / 31 Gyr. The pre-main sequence costs most of a track; main-sequence steps add the rest.
-     * With it the reviewer's grid comes to 0.37 s per model, 32 s for 88 models on a quiet core.
+     * With it that grid comes to 0.37 s per model, 32 s for 88 models on a quiet core.
      */
     static final double BIRTH_COST_DOUBLING_GYR = 31.0;
 

@@ -9,7 +9,7 @@ import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.engine.request.PhysicsOptions;
 import org.junit.jupiter.api.Test;
 
-/** check and star name each overshoot profile's length for what it is (a review: "0.2 Hp" misled for two of three). */
+/** check and star name each overshoot profile's length for what it is ("0.2 Hp" misled for two of three). */
 class OvershootWordsTest {
 
     private static PhysicsOptions physics(double length, OvershootScheme scheme) {

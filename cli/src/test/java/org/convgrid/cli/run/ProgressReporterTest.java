@@ -39,7 +39,7 @@ class ProgressReporterTest {
 
     /**
      * The sweep's line says how many of the models computed are saved: rows are written in grid order, so those
-     * computed after the first unfinished one wait, and an interrupt loses them (a review: the user could not tell,
+     * computed after the first unfinished one wait, and an interrupt loses them (the user could not tell,
      * before pressing Ctrl-C, what was safe on disk).
      */
     @Test

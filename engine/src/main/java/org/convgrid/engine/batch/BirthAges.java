@@ -59,7 +59,7 @@ final class BirthAges {
      *                     the same star that the ages were measured against (main-sequence fractions): the life events
      *                     and the answers' phases take them, so that a fraction-0 row lies at {@code zams_myr} and is
      *                     on the main sequence. The two evolutions' steps differ, and where the arrival follows a
-     *                     dip after a peak of L_nuc/L their own ZAMS ages differed by a few per cent (a code review:
+     *                     dip after a peak of L_nuc/L their own ZAMS ages differed by a few per cent (for
      *                     1.5 Msun, Z = 0.02, decaying overshoot 0.02, row at 22.93 Myr, zams_myr 22.38)
      */
     private static List<GridRequests.Answer> answers(GridRequests solver, List<ModelRequest> star,
@@ -134,7 +134,7 @@ final class BirthAges {
 
     /**
      * Why a track from birth gives no main-sequence lifetime. An evolution that failed says where and why (a
-     * review's 1.3 Msun star with decaying overshoot had run out of steps at 4.6 Gyr, X_c = 0.005, and the row said
+     * 1.3 Msun star with decaying overshoot had run out of steps at 4.6 Gyr, X_c = 0.005, and the row said
      * "not exhausted within 20.00 Gyr of birth (FAILED)"); one that reached the age limit says that limit.
      */
     static String unknownLifetime(EvolutionResult result, boolean zamsReached, double maxAge) {

@@ -7,12 +7,12 @@ package org.convgrid.engine.birth;
  * (seen at 10 Msun, Z = 1e-4, within the first 1e4 yr) and is forgotten. The end is the first model of the last run
  * of models without the core: a core that vanishes and comes back has not ended, as for the radiative core's end
  * (a 0.35 Msun star at Z = 0.02 lost its 3He-burning core for one step at 3.009 Gyr and had it again, to m/M 0.12,
- * at 5 Gyr: the table said it had ended while the catalogue showed it; found by a stellar-activity review).
+ * at 5 Gyr: the table said it had ended while the catalogue showed it).
  *
  * <p>Both ages are interpolated between that model and the one before it ({@link #between}), as the radiative core's
  * appearance is: dated at the model itself, an event was late by up to one step, and steps of old low-mass stars reach
  * ~1 Gyr, so a core of a grid with ages 5 and 10 Gyr ended at "5000.0" or "10000.0" Myr, the ages the steps were cut
- * at (found by an old-population review). One per evolution; not thread-safe.
+ * at. One per evolution; not thread-safe.
  */
 final class CoreLifetime {
 
@@ -77,7 +77,7 @@ final class CoreLifetime {
         }
         if ((lastCentralZoneTop > coreThreshold) != (centralZoneTop > coreThreshold)) {
             // in ln(top): a small core grows or fades by a factor per unit time more than by an amount, and the
-            // steps of old low-mass stars are ~1 Gyr long (a code review's point); both tops are above 0 here, as
+            // steps of old low-mass stars are ~1 Gyr long; both tops are above 0 here, as
             // the centre stayed convective
             return lastCentralZoneTop > 0.0 && centralZoneTop > 0.0
                     ? AgeCrossing.of(lastAge, Math.log(lastCentralZoneTop), age, Math.log(centralZoneTop),

@@ -49,8 +49,8 @@ public record ExponentialOvershoot(double f) implements Overshoot {
     /**
      * The mass up to which the diffusion has kept the central zone's hydrogen: the first point above the zone whose
      * X exceeds X_c by more than {@link #MIXED_SHARE} of the surface-minus-centre contrast, interpolated in mass.
-     * The diffusion has no sharp edge, so the composition says how far it reached: a seismology review found the
-     * hydrogen at the centre's value (X 0.50213) out to m/M 0.170 around a core whose top is at 0.133 (2 Msun, Z =
+     * The diffusion has no sharp edge, so the composition says how far it reached: the hydrogen was at the
+     * centre's value (X 0.50213) out to m/M 0.170 around a core whose top is at 0.133 (2 Msun, Z =
      * 0.02, f = 0.02, 0.6 Gyr), where this column had said the core top. It also counts the layer a receding core
      * has just left, whose hydrogen is still close to the centre's. NaN (the core top is the answer) when f = 0,
      * without a central zone or with one reaching the surface, and while the contrast is under

@@ -74,7 +74,7 @@ class FractionAgesTest {
     void fromBirthTheFractionZeroRowLiesAtTheLifeEventsZamsOnTheMainSequence() {
         // the ages are measured against one evolution (the lifetime's) and answered by a second (landing on them);
         // the life events and phases take the first's ZAMS and exhaustion, so that life_events.csv gives the ages the
-        // fractions were measured against (a code review found 22.93 against 22.38 Myr after the ZAMS rule changed)
+        // fractions were measured against (22.93 against 22.38 Myr after the ZAMS rule changed)
         java.util.concurrent.atomic.AtomicReference<org.convgrid.engine.birth.LifeEvents> events =
                 new java.util.concurrent.atomic.AtomicReference<>();
         GridRequests solver = new GridRequests((first, points, e) -> events.set(e), COARSE);

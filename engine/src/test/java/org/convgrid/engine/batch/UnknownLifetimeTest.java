@@ -29,7 +29,7 @@ class UnknownLifetimeTest {
 
     @Test
     void anExhaustionWithoutALastingArrivalSaysSo() {
-        // possible since a crossing of L_nuc/L = 0.99 can be undone (ZeroAgeArrival; found by a code review)
+        // possible since a crossing of L_nuc/L = 0.99 can be undone (ZeroAgeArrival)
         assertThat(BirthAges.unknownLifetime(ended(EvolutionResult.EndReason.HYDROGEN_EXHAUSTED, ""), false,
                 20.0 * Constants.GYR)).isEqualTo("the zero-age main sequence was not reached from birth: the core's "
                 + "hydrogen ran out before nuclear burning supplied 99 % of the luminosity for good");

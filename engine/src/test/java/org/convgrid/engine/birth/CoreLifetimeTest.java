@@ -29,7 +29,7 @@ class CoreLifetimeTest {
 
     @Test
     void aCoreThatVanishesForAStepAndReturnsHasNotEnded() {
-        // the review's 0.35 Msun star, Z = 0.02: core from 45 Myr, gone at 3009 Myr for one step, back to 5000 Myr
+        // a 0.35 Msun star, Z = 0.02: core from 45 Myr, gone at 3009 Myr for one step, back to 5000 Myr
         CoreLifetime returned = mainSequence(new double[] {10, 45, 1000, 3000, 3009, 3100, 5000},
                 new boolean[] {false, true, true, true, false, true, true});
         assertThat(returned.onset()).isEqualTo(45.0);
@@ -66,7 +66,7 @@ class CoreLifetimeTest {
 
     @Test
     void theAgesAreInterpolatedBetweenTheModelsAroundTheEvent() {
-        // the review's 0.45 Msun star, [Fe/H] = -1: its core was gone at the step cut at the grid's 10 Gyr, 0.71 Gyr
+        // a 0.45 Msun star, [Fe/H] = -1: its core was gone at the step cut at the grid's 10 Gyr, 0.71 Gyr
         // after the model before; the centre's stability excess falls from +0.2 to -0.6 across it, so it crossed zero
         // a quarter of the way (once a later model confirms it stayed gone)
         CoreLifetime ended = new CoreLifetime(THRESHOLD);

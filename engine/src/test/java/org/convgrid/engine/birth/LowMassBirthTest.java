@@ -92,7 +92,7 @@ class LowMassBirthTest {
         assertThat(last / MYR).isCloseTo(167.7, within(10.0));
         assertThat(t.models().get(0).model().convection().structureClass()).isEqualTo(StructureClass.FULLY_CONVECTIVE);
         // the radiative core's end (life_events.csv radiative_core_end_myr, README): the first step of the star's
-        // lasting return to full convection, one zone from the centre to the surface; a review found the table gave
+        // lasting return to full convection, one zone from the centre to the surface; the table had given
         // the core's appearance and nothing after, while the catalogue called the star fully convective again.
         // Checked against the track's own steps (its definition, not a physics value)
         double end = t.events().radiativeCoreEnd();

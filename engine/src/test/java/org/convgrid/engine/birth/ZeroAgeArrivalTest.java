@@ -37,7 +37,7 @@ class ZeroAgeArrivalTest {
 
     @Test
     void aCarbonPeakAfterWhichTheStarContractsAgainIsNotTheArrival() {
-        // shaped like 2 Msun, Z = 0.02, decaying overshoot f = 0.02 (a review's track): 1.009 at 6.9 Myr, down to
+        // shaped like the track of 2 Msun, Z = 0.02, decaying overshoot f = 0.02: 1.009 at 6.9 Myr, down to
         // 0.66, back above 0.99 at 13 Myr, before 0.01 of the central hydrogen is burnt
         double[] ages = {0, 6, 7, 8, 10, 12, 14, 100};
         double[] fractions = {0.0, 0.95, 1.009, 0.80, 0.66, 0.95, 1.03, 1.0};
@@ -48,7 +48,7 @@ class ZeroAgeArrivalTest {
 
     @Test
     void burstsOfASmallCoreLongAfterTheFirstCrossingDoNotMoveTheArrival() {
-        // shaped like 1.2 Msun, Z = 0.02, decaying overshoot f = 0.02 (a review's track): bursts of L_nuc / L to 2-3
+        // shaped like the track of 1.2 Msun, Z = 0.02, decaying overshoot f = 0.02: bursts of L_nuc / L to 2-3
         // and falls to 0.84-0.89 every 10-30 Myr while little hydrogen burns. The fall at 47.6 Myr lies within twice
         // the first crossing (45 Myr) and undoes it; the falls from 117 Myr on do not
         double[] ages = {0, 44, 45.4, 47.6, 61, 65, 117, 146, 160};

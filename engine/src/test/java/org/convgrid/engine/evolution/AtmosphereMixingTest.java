@@ -38,7 +38,7 @@ class AtmosphereMixingTest {
 
     @Test
     void aLoneMixedSurfacePointDoesNotKeepTheAtmosphereApartFromTheEnvelope() {
-        // the envelope's top within the skin, a radiative point, then a one-point surface zone (found by a review)
+        // the envelope's top within the skin, a radiative point, then a one-point surface zone
         boolean[] mixed = {false, true, true, false, true};
         assertThat(AtmosphereMixing.joined(mesh(1e-8), mixed)).containsExactly(false, true, true, true, true);
     }

@@ -53,7 +53,7 @@ class GridFileBoundsTest {
     @Test
     void valuesTheTablesWouldWriteAlikeAreDuplicates() {
         // 0.5 and 0.50000001 both write as 0.5 (7 significant digits): two catalogue rows a reader cannot tell
-        // apart, and one transitions.csv line for two metallicities (found by a robustness review)
+        // apart, and one transitions.csv line for two metallicities
         GridProblem mass = onlyProblem("mass: {values: [0.5, 0.50000001]}\n" + REST);
         assertThat(mass.kind()).isEqualTo(GridProblemKind.DUPLICATE);
         assertThat(mass.message()).contains("duplicate mass value 0.50000001").contains("7 significant digits");

@@ -159,7 +159,7 @@ class GridFileProblemsTest {
 
     @Test
     void valuesAlikeInChartNamesAreRefused() {
-        // a review's z: [0.02, 0.020001] and mixing_length: [1.8, 1.80001]: charts named alike overwrote each other
+        // z: [0.02, 0.020001] and mixing_length: [1.8, 1.80001]: charts named alike overwrote each other
         List<GridProblem> problems = problems("""
                 mass: {values: [1]}
                 metallicity: {z: [0.02, 0.020001], y: [0.28, 0.28]}

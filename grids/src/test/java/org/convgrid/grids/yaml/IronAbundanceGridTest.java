@@ -66,7 +66,7 @@ class IronAbundanceGridTest {
         assertThat(messages("{fe_h_dex: [0.5, 3], y: [0.27, 0.27]}")).anyMatch(m -> m.contains("fe_h_dex"));
         assertThat(messages("{fe_h_dex: [0.3, 0.1], y: [0.27, 0.27]}"))
                 .anyMatch(m -> m.contains("fe_h_dex") && m.contains("increas"));
-        // each with its own Y, a higher [Fe/H] can give a lower Z (found by a code review)
+        // each with its own Y, a higher [Fe/H] can give a lower Z
         assertThat(messages("{fe_h_dex: [0.0, 0.01], y: [0.25, 0.35]}")).anyMatch(m -> m.contains(
                 "fe_h_dex = 0.01 with y = 0.35 gives Z = 0.01589738, not above the Z of the value before it"));
         // 1 dex above a solar ratio of 0.1: Z/X = 1, so Z = 0.365 with Y = 0.27; Z must stay below 0.1

@@ -55,14 +55,13 @@ public final class CatalogueReader {
     public static List<CatalogueRow> read(Path file) throws IOException {
         String text = Files.readString(file, StandardCharsets.UTF_8);
         if (!text.isEmpty() && headerCutShort(text)) {
-            // a catalogue cut inside its header (a review's `truncate -s 500`) was reported as a row cut short
+            // a catalogue cut inside its header (`truncate -s 500`) was reported as a row cut short
             throw new OutputFormatException(file.getFileName() + ": " + HEADER_CUT_SHORT);
         }
         if (!text.isEmpty() && !text.endsWith("\n")) {
             // every row the writer writes ends with a line break: without one the last row was cut short, even when
             // what is left still parses (a number cut to fewer digits, an empty last cell). The message named a
-            // column of a row it could not know was cut, or the CSV parser's unfinished quoted cell (found by a
-            // robustness review)
+            // column of a row it could not know was cut, or the CSV parser's unfinished quoted cell
             throw new OutputFormatException(file.getFileName() + ": its last row is cut short, as a run stopped "
                     + "while writing it leaves it; 'convgrid run GRID --out DIR --resume' drops that row and computes "
                     + "it again");

@@ -177,7 +177,7 @@ public final class RunManifestReader {
 
     /**
      * The value of {@code key}, or a message naming it when it is absent or empty: a manifest cut short (a full disk,
-     * a copy interrupted) lacks its last keys, and a review saw the Java null-pointer text instead.
+     * a copy interrupted) lacks its last keys, and the Java null-pointer text was shown instead.
      *
      * @param under the mapping {@code key} belongs to, for the message; null at the top
      */

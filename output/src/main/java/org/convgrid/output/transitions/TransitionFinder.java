@@ -71,11 +71,11 @@ public record TransitionFinder(double coreMassFractionThreshold) {
      * core cannot be the CNO cycle's: 1 %. A cycle that releases under a hundredth of the energy there cannot be what
      * concentrates it enough to make the centre convective, so what drives such a core is burning out of equilibrium:
      * 3He on the young main sequence, 12C before the zero-age main sequence. A reader of {@code conv_core_onset_msun}
-     * who takes it for the CNO-core onset is told (a practitioner's review did). It replaced a fixed 12 MK, which is
+     * who takes it for the CNO-core onset is told (it has been read so). It replaced a fixed 12 MK, which is
      * right only near solar Z: at Z = 0.02 the share is 0.05 % at 12 MK and 1 % near 14.5 MK (ours, {@code convgrid
      * probe} at rho 80 g/cm^3, X 0.7: 0.05 % at 12 MK, 0.57 % at 14 MK, 4.2 % at 16 MK), but at [Fe/H] = -2 the cores
      * of 0.75-1.2 Msun at 1 Gyr sit above 12 MK (up to 19.3 MK) with 0.6 % at most, and all of them end before 1.7 Gyr
-     * in stars that live 2.7-12 Gyr (a review's grid, 2026-12-05).
+     * in stars that live 2.7-12 Gyr (a grid run on 2026-12-05).
      */
     public static final double COOL_CORE_CNO_SHARE = 0.01;
     /** {@link #COOL_CORE_CNO_SHARE} in the words of the notes and the charts. */

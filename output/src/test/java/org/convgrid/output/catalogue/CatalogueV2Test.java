@@ -90,8 +90,8 @@ class CatalogueV2Test {
     @Test
     void theTurnoverTimeDescriptionGivesWhereTheCodeEvaluatesIt() {
         // ConvectiveZoneFinder: half a pressure scale height above the base, capped at the envelope's radial
-        // midpoint, and r = R/2 for a fully convective star (README, "Catalogue"); a review found the cap and the
-        // fully convective point missing from the file's own description
+        // midpoint, and r = R/2 for a fully convective star (README, "Catalogue"); the cap and the
+        // fully convective point were missing from the file's own description
         String description = CatalogueColumns.DESCRIBED.stream()
                 .filter(c -> c.name().equals(CatalogueColumns.TURNOVER_TIME_DAYS)).findFirst().orElseThrow()
                 .description();
@@ -142,7 +142,7 @@ class CatalogueV2Test {
 
     /**
      * A 1.3 Msun star at 50 Myr (Z = 0.01) with a thin envelope, as the engine found it: base at m/M 1 - 1.952236e-6,
-     * mass 2.537907e-06 Msun (the review's example; zones.csv said 2.6e-06, its written ends' difference).
+     * mass 2.537907e-06 Msun (zones.csv had said 2.6e-06, its written ends' difference).
      */
     private static ModelOutcome thinEnvelope() {
         double envelopeMassMsun = 1.952236e-6 * 1.3;

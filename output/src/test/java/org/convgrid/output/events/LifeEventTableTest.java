@@ -47,7 +47,7 @@ class LifeEventTableTest {
 
     @Test
     void theEndOfATransientRadiativeCoreFollowsItsAppearance() throws Exception {
-        // the review's 0.26 Msun star: a radiative core from 67.45 Myr, fully convective again from 117.6 Myr
+        // a 0.26 Msun star: a radiative core from 67.45 Myr, fully convective again from 117.6 Myr
         ModelRequest first = new ModelRequest("p0-z00-m000-a00", 0.26 * Constants.M_SUN, 0.02, 0.2771, 0.0,
                 PhysicsOptions.DEFAULT);
         LifeEventRow transientCore = LifeEventRow.of("p0-z00-m000", first, new LifeEvents(67.44893 * MYR,

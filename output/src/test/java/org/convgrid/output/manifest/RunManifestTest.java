@@ -128,7 +128,7 @@ class RunManifestTest {
 
     /**
      * A manifest cut short at any line end reads as cut short, naming the key it lacks or where its YAML breaks off,
-     * never with Java's null-pointer or cast text (a review saw "Cannot invoke java.util.List.iterator()").
+     * never with Java's null-pointer or cast text (such as "Cannot invoke java.util.List.iterator()").
      */
     @Test
     void aManifestCutShortAtAnyLineSaysSoInPlainWords() {

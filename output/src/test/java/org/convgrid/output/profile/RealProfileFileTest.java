@@ -24,9 +24,9 @@ import org.snakeyaml.engine.v2.api.LoadSettings;
 
 /**
  * The profile file of a real model (the zero-age 1 Msun, Z = 0.02, from the production solver): every cell reads
- * back the double it was written from, and the ECSV header describes the columns and the star. An asteroseismologist's
- * review found seven digits too few for differencing the columns (outer radii, mass continuity, dL/dm) and no record
- * of which star a profile holds (oscillation codes need M and G to make frequencies dimensionless).
+ * back the double it was written from, and the ECSV header describes the columns and the star. For
+ * asteroseismology seven digits were too few for differencing the columns (outer radii, mass continuity, dL/dm),
+ * and nothing recorded which star a profile holds (oscillation codes need M and G to make frequencies dimensionless).
  */
 class RealProfileFileTest {
 

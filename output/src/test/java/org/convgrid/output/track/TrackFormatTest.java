@@ -98,7 +98,7 @@ class TrackFormatTest {
 
     @Test
     void theCentralAndEnvelopeColumnsFollowTheCataloguesRules() throws Exception {
-        // a review found 0.9999992 for a fully convective first step (documented: 1) and 1.0 for the envelope base
+        // 0.9999992 was written for a fully convective first step (documented: 1) and 1.0 for the envelope base
         // of 1.6 Msun main-sequence steps whose only surface zone is the thin hydrogen-ionisation layer, which the
         // catalogue does not count as an envelope (ConvectiveZoneFinder: under 1e-6 of the mass)
         List<ConvectiveZone> fullyConvective = List.of(new ConvectiveZone(0.0, 0.9999992, 0.0, 0.9995));

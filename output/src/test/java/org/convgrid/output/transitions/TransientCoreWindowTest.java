@@ -92,7 +92,7 @@ class TransientCoreWindowTest {
 
     @Test
     void coresBelowTheFullyConvectiveLimitAreNamedAndTheWindowAboveItReported() {
-        // a review's Z = 0.02, 1.1 Gyr slice: fully convective at 0.33, cores at 0.33125-0.3375, fully convective
+        // a Z = 0.02, 1.1 Gyr slice: fully convective at 0.33, cores at 0.33125-0.3375, fully convective
         // again at 0.33875 (the limit), coreless at 0.34, cores 0.34125-0.5047, none up to the lasting core; the
         // window was reported at 0.33125-0.3375, below the limit of the same row
         TransitionRow t = finder.find(List.of(ok(0.33, FC, 1), ok(0.33125, BOTH, 0.01), ok(0.3375, BOTH, 0.01),

@@ -213,7 +213,7 @@ class TransitionFinderTest {
 
     @Test
     void atLowMetallicityCoresInCentresHotterThanTheSunsAreStillNamedWhenThePpChainDrivesThem() {
-        // [Fe/H] = -2 (Z = 1.843e-4), the shape of a review's 1 Gyr slice: cores from 0.35 Msun up, the 1.2 Msun one
+        // [Fe/H] = -2 (Z = 1.843e-4), the shape of a run's 1 Gyr slice: cores from 0.35 Msun up, the 1.2 Msun one
         // at 19.3 MK with X_c 0.5 (CNO share 0.63 % at 60 g/cm^3), all of them gone by 1.7 Gyr; the cycle's rate scales with its
         // catalysts, so at this Z it takes ~23 MK for a few per cent (6.3 % at 23 MK, 50 g/cm^3). A fixed 12 MK named
         // only the cores up to 0.7 Msun and let the rest read as CNO cores

@@ -14,7 +14,7 @@ import org.convgrid.plotting.layout.Obstacles;
  * Which model of an isochrone its age label names: one where the isochrone stands apart from every isochrone of
  * another age, so the label cannot be read as naming a neighbour. Young isochrones merge at the hot end (at 2-3 Msun
  * the 1-200 Myr ones all lie on the main sequence) and spread out at the cool end, where the low-mass stars are
- * still contracting: a review's "5 Myr" and "10 Myr", set beside the brightest models, sat where the six isochrones
+ * still contracting: a grid's "5 Myr" and "10 Myr", set beside the brightest models, sat where the six isochrones
  * of its grid met. Distances are in pixels of a plot of nominal size, since the labels are chosen before the chart
  * is painted. A pure function: no drawing.
  */
@@ -81,7 +81,7 @@ final class AgeLabelAnchor {
     /**
      * Whether the box right of {@code end} where a label beside it goes ({@link LabelPlacement#GAP_PX} away, as
      * wide and high as the label, with {@link Obstacles#MARGIN_PX} around) is crossed by none of {@code others}. A
-     * point-to-line distance would not do: at a review's 100 Myr cool end the 200 Myr isochrone ran 6 px from the
+     * point-to-line distance would not do: at one grid's 100 Myr cool end the 200 Myr isochrone ran 6 px from the
      * model, below and to its left, and the room right of it was free.
      */
     static boolean roomRightIsFree(HrPoint end, List<HrDiagramData.ZeroAgeLine> others, Scale scale,

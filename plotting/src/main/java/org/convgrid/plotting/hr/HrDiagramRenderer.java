@@ -75,7 +75,7 @@ public final class HrDiagramRenderer {
     /**
      * Room right of the coolest model for the age labels that go to their isochrones' low-mass ends, as a share of
      * the log Teff range: about 100 of the plot's 720 pixels, a label as wide as "200 Myr" and its gap (the coolest
-     * models of a review's 1-200 Myr grid lay 35-60 px from the plot's edge, and the labels went far off with
+     * models of a 1-200 Myr grid lay 35-60 px from the plot's edge, and the labels went far off with
      * leaders across the crowd).
      */
     private static final double COOL_LABEL_ROOM_SHARE = 0.15;
@@ -173,7 +173,7 @@ public final class HrDiagramRenderer {
         for (StructureClass c : StructureClass.values()) {
             List<HrPoint> members = data.points().stream().filter(p -> p.structureClass() == c).toList();
             // a class only refinement or turn-off models have gets its entry too, from a point-less series (NaN:
-            // drawn nowhere): a review saw a radiative turn-off model's shape with no class to read it by
+            // drawn nowhere): a radiative turn-off model's shape had no class to read it by
             boolean elsewhere = Stream.concat(data.refinementPoints().stream(), data.turnoffModels().stream())
                     .anyMatch(p -> p.structureClass() == c);
             if (members.isEmpty() && !elsewhere) {

@@ -134,7 +134,7 @@ public final class KippenhahnRenderer {
     /**
      * The chart's notes: the track's own, then one per zone kind too thin to see on this axis. Such a note points to
      * the depth chart only when a depth chart is drawn for this track (the rule {@link KippenhahnData#hasThinEnvelope}
-     * that decides it) and shows that kind: a review's 0.3 Msun chart sent readers to a depth chart never written,
+     * that decides it) and shows that kind: a 0.3 Msun chart sent readers to a depth chart never written,
      * for a core, which the depth axis squeezes further still.
      */
     static List<String> notes(KippenhahnData data, AgeScale ages, ZoneCoordinate y) {
@@ -242,7 +242,7 @@ public final class KippenhahnRenderer {
 
     /**
      * A dashed vertical line at the zero-age main sequence, labelled just above the plot ({@link #zamsLabelBox}):
-     * inside it, even on a white box, the label hid data (a review's 1 Msun, Z = 0.02 chart lost its thin
+     * inside it, even on a white box, the label hid data (a 1 Msun, Z = 0.02 chart lost its thin
      * convective envelope at m/M 0.97-1 from ~39 to ~80 Myr under it).
      */
     private static void markZeroAgeMainSequence(Graphics2D g, StyledChart c, double x) {

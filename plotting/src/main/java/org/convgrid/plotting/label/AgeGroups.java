@@ -8,7 +8,7 @@ import org.convgrid.output.track.Track;
 /**
  * How the charts group a run's models by age. A grid gives its ages either in Gyr or Myr, the same for every star,
  * or as fractions of each star's own main-sequence lifetime ({@code age: {ms_fraction: [...]}}). In the second case
- * one grid age is another age in Gyr for every star, and grouping by Gyr gave groups of one star each (a review's
+ * one grid age is another age in Gyr for every star, and grouping by Gyr gave groups of one star each (a
  * grid of 6 masses, 2 Z and 5 fractions drew 60 one-star zone maps per coordinate and an HR legend of one-star
  * "isochrones"); such a run is grouped by fraction instead. A model's fraction is the grid's list at the age index
  * its id ends with ({@code -aNN}, {@link Track#agePartOf}), the same for the refinement's models.

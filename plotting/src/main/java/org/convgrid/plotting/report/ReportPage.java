@@ -118,7 +118,7 @@ public final class ReportPage {
      * A note above everything else when a finished, whole run's grid asks for refined transition masses and
      * transitions.csv still holds the grid's brackets (--no-refine, a refinement cut short by kill -9 or a time limit,
      * or a merged run not yet refined): its transition masses are only as fine as the mass step. The manifest alone
-     * said "finished" (found by a robustness review).
+     * said "finished".
      */
     private static void unrefined(StringBuilder b, RunData run, Path runDir) {
         RunManifest m = run.manifest();
@@ -299,7 +299,7 @@ public final class ReportPage {
 
     /**
      * Why an {@code ms_fraction} run has no transition masses, no charts of them and no turnover charts, in place of
-     * the table: its 60 one-star rows (a review's grid) each read "no fully convective model at any usable mass",
+     * the table: its 60 one-star rows (in one grid) each read "no fully convective model at any usable mass",
      * true and of no use.
      */
     static final String EACH_STAR_ITS_OWN_AGE_NOTE = "This grid gives its ages as fractions of each star's "

@@ -45,8 +45,8 @@ public final class ChartFiles {
 
     /**
      * The innermost I/O exception of {@code e}: the image encoder wraps the operating system's "File too large" or
-     * "No space left on device" in its own "I/O error writing PNG file!", which tells a user nothing (a robustness
-     * review: 31 warnings, no reason).
+     * "No space left on device" in its own "I/O error writing PNG file!", which tells a user nothing (31
+     * warnings, no reason).
      */
     static IOException withOsReason(IOException e) {
         IOException innermost = e;

@@ -72,7 +72,7 @@ public final class ChartStyle {
     /**
      * Dash patterns told apart without colour (zero-age lines of several metallicities, isochrones of several ages):
      * solid, dashed, dotted, dash-dot, long dash, dash-dot-dot, long-short, dot-triplets. Eight, because a young
-     * cluster's grid has six ages or more (a review's 1-200 Myr grid had six, and with five patterns its 1 and 200 Myr
+     * cluster's grid has six ages or more (a 1-200 Myr grid had six, and with five patterns its 1 and 200 Myr
      * isochrones were both solid); each period is at most about a legend line long (36 px), so the legend shows it.
      */
     private static final float[][] DASHES = {null, {14f, 7f}, {4f, 6f}, {16f, 6f, 4f, 6f}, {24f, 8f},

@@ -86,7 +86,7 @@ public final class LogAxis {
      * {@link #NARROW_RANGE}, also 1.1..1.9 x 10^n and every 1..9 x 10^n, so that a 1.0-1.4 Msun axis is labelled above
      * 1 too; and every 1..9 x 10^n whenever fewer than {@link #FEWEST_LABELS} round values fall inside, with 1.1..1.9 x
      * 10^n as well when even those are fewer (1.05-3.5 Msun, an asteroseismology grid of 1.1-3 Msun, held only 2 and
-     * 3). A range of 0.7-1.3 Msun had the one label "1" (found by a code review and a planet-host user's review);
+     * 3). A range of 0.7-1.3 Msun had the one label "1";
      * labels that would touch are left out when painted.
      */
     public static List<Double> labelValues(double min, double max) {

@@ -22,7 +22,7 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  * nudged sideways by a few hundredths of a dex so that their markers do not hide each other, and a note under the
  * legend says so; the data keep the true Z. When the grid gave its compositions as [Fe/H] ({@link MetallicityNames}
  * names every metallicity by its [Fe/H]), x is [Fe/H] instead, in dex on a linear axis labelled at the run's values
- * (the tables' {@code fe_h_dex}), nudged by the same few hundredths of a dex: a reviewer's old-population grid, asked
+ * (the tables' {@code fe_h_dex}), nudged by the same few hundredths of a dex: an old-population grid, asked
  * for [Fe/H] = -2, -1, 0, had to read 0.0001843, 0.001833 and 0.01738 off a Z axis.
  */
 public final class TransitionTrendRenderer {

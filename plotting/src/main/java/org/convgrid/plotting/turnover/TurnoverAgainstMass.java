@@ -65,7 +65,7 @@ public final class TurnoverAgainstMass {
     /**
      * Whether the grid's ages are fractions of each star's main-sequence lifetime ({@code ms_fraction}): then one age
      * of the grid (the {@code -aNN} of the model ids) is another age in Gyr for every star, and lines joining equal
-     * ages would hold one star each (found by a code review: one unconnected dot per star and age). Such grids get
+     * ages would hold one star each (one unconnected dot per star and age). Such grids get
      * no turnover chart.
      */
     static boolean eachStarItsOwnAge(List<CatalogueRow> gridRows) {

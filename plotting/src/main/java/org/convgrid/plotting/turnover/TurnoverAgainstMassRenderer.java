@@ -54,7 +54,7 @@ public final class TurnoverAgainstMassRenderer {
     private TurnoverAgainstMassRenderer() {
     }
 
-    /** Says why an age's line stops short of the highest masses (a planet-host user's review: they vanished). */
+    /** Says why an age's line stops short of the highest masses (without it they just vanished). */
     static String pastMainSequenceNote(long models) {
         return models + (models == 1 ? " model lies" : " models lie") + " past the main sequence at its age: not"
                 + " drawn, so a line may stop short of the highest masses.";

@@ -11,7 +11,7 @@ import org.junit.jupiter.api.Test;
 /**
  * Where an isochrone's age label goes: where it stands apart from the other ages' isochrones. Made-up lines on a
  * plot of 1000 px per dex of log Teff and 100 per dex of log L (shapes only, nothing under test); the young family
- * merges at its hot end and fans out at its cool end, as a review's 1-200 Myr isochrones did.
+ * merges at its hot end and fans out at its cool end, as a grid's 1-200 Myr isochrones did.
  */
 class AgeLabelAnchorTest {
 

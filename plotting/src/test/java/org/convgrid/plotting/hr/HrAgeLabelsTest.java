@@ -12,7 +12,7 @@ import org.convgrid.plotting.style.StyledChart;
 import org.junit.jupiter.api.Test;
 
 /**
- * The isochrones' age labels of an HR diagram with several close ages (a review used five, 0.9-1.1 Gyr: the labels
+ * The isochrones' age labels of an HR diagram with several close ages (five, 0.9-1.1 Gyr: the labels
  * and their leaders piled up at the bright end). Made-up points on a straight main sequence (shapes only, nothing
  * under test): each older isochrone a hair brighter.
  */

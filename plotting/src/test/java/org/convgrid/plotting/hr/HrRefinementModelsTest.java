@@ -45,7 +45,7 @@ class HrRefinementModelsTest {
     @Test
     void aClassThatOnlyARefinementModelHasGetsItsLegendEntry() {
         // grid 0.2-1.4 Msun: fully convective, envelopes, core + envelope; a refinement model at 1.6 Msun has a core
-        // and no envelope, a shape the legend did not explain (a review: a radiative turn-off model)
+        // and no envelope, a shape the legend did not explain (a radiative turn-off model)
         List<CatalogueRow> rows = new ArrayList<>(TestRuns.rows(TestRuns.masses(0.2, 1.4, 5), new double[] {0.014},
                 new double[] {0}));
         String coreOnly = org.convgrid.plotting.style.ChartStyle.classLabel(

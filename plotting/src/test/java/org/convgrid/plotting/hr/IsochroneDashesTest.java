@@ -14,7 +14,7 @@ import org.convgrid.plotting.style.ChartStyle;
 import org.junit.jupiter.api.Test;
 
 /**
- * Each isochrone age of an HR diagram gets a dash pattern of its own, the legend's only key to the ages (a review's
+ * Each isochrone age of an HR diagram gets a dash pattern of its own, the legend's only key to the ages (a grid's
  * six ages, 1-200 Myr, had 1 and 200 Myr both solid), and past the patterns there are the chart says which ages
  * share one. Made-up straight lines: shapes only, no physics under test.
  */

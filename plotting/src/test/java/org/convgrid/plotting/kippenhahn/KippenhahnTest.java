@@ -40,7 +40,7 @@ class KippenhahnTest {
     @Test
     void everyNoteOfTheAgeChartsIsASentenceOnOneLine() {
         // house style of chart notes (Kippenhahn.BURNING_NOTE, TOO_SHORT_NOTE, the zone maps' notes): a capital
-        // first, a full stop last; a review found "a convective shell too thin to show here" on the depth charts
+        // first, a full stop last; "a convective shell too thin to show here" had been on the depth charts
         List<String> notes = new ArrayList<>(List.of(Kippenhahn.BURNING_NOTE, Kippenhahn.TOO_SHORT_NOTE));
         for (ZoneKind kind : ZoneKind.values()) {
             for (ZoneCoordinate y : ZoneCoordinate.values()) {
@@ -79,7 +79,7 @@ class KippenhahnTest {
 
     @Test
     void aThinZoneNotePointsToTheDepthChartOnlyWhenOneIsDrawnAndShowsThatZone() throws Exception {
-        // a review's 0.3 Msun, [Fe/H] = 0 chart said "Some convective cores are too thin to show here (see the depth
+        // a 0.3 Msun, [Fe/H] = 0 chart said "Some convective cores are too thin to show here (see the depth
         // chart)." but its envelope is thick, so no depth chart was written (KippenhahnData.hasThinEnvelope)
         KippenhahnData thickEnvelope = coreUnderEnvelope(0.002, 0.5);
         assertThat(thickEnvelope.hasThinEnvelope()).isFalse();
@@ -279,7 +279,7 @@ class KippenhahnTest {
     }
     /**
      * The ZAMS label sits in the white margin between the title and the plot, over its line, on both vertical
-     * coordinates and wherever the line lies: inside the plot its white box hid data (a review's 1 Msun, Z = 0.02
+     * coordinates and wherever the line lies: inside the plot its white box hid data (a 1 Msun, Z = 0.02
      * chart lost its thin envelope at m/M 0.97-1 from ~39 to ~80 Myr under it).
      */
     @Test

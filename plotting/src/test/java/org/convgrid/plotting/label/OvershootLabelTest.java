@@ -10,7 +10,7 @@ import org.junit.jupiter.api.Test;
 /**
  * Chart subtitles, report rows and map file names say what the overshoot length means under its profile: a
  * uniform-ramped run's 0.2 is 0.2 H_P from 2 Msun only and a decaying run's 0.016 is f, so "overshoot 0.2 Hp" and
- * {@code _ov0.2_} on their charts read like a uniform run's (found by an overshoot user's review).
+ * {@code _ov0.2_} on their charts read like a uniform run's.
  */
 class OvershootLabelTest {
 

@@ -35,8 +35,8 @@ class ReportPageTest {
         assertThat(html).startsWith("<!DOCTYPE html>").contains("<style>", "grids/synthetic.yaml",
                 "Models by status", "past_main_sequence", "Transition masses", "No evolution tracks in this run.");
         assertThat(html).doesNotContain("<script", "http://", "https://", "<link");
-        // the 4.57 Gyr slices have models past the main sequence above ones on it: the table gives the turn-off (a
-        // code review found it missing: "not found" beside a turn-off transitions.csv and the chart had)
+        // the 4.57 Gyr slices have models past the main sequence above ones on it: the table gives the turn-off (it
+        // was missing: "not found" beside a turn-off transitions.csv and the chart had)
         assertThat(html).contains("<th>main-sequence turn-off / M\u2609</th><th>bracket / M\u2609</th>");
         // the zero-age slices have no turn-off because no star of theirs has left the main sequence, which the cell
         // says instead of "not found", as if a search had failed

@@ -15,10 +15,10 @@ class LogAxisLabelsTest {
 
     @Test
     void aNarrowRangeOffersEveryMantissa() {
-        // 0.8-1.2 Msun held the one round value 1: a chart with one label on its mass axis (found by a code review)
+        // 0.8-1.2 Msun held the one round value 1: a chart with one label on its mass axis
         assertThat(LogAxis.roundValues(0.71, 1.34)).containsExactly(1.0);
         assertThat(LogAxis.labelValues(0.71, 1.34)).containsExactly(0.8, 0.9, 1.0, 1.1, 1.2, 1.3);
-        // 1.0-1.4 Msun (F stars about the Kraft break) was labelled only at 0.9 and 1 (a planet-host user's review)
+        // 1.0-1.4 Msun (F stars about the Kraft break) was labelled only at 0.9 and 1
         assertThat(LogAxis.labelValues(0.89, 1.57)).containsExactly(0.9, 1.0, 1.1, 1.2, 1.3, 1.4, 1.5);
         assertThat(LogAxis.labelValues(0.25, 0.51)).containsExactly(0.3, 0.4, 0.5);
         // a range of a factor 3 to 10 keeps the round values when three fall inside

@@ -6,7 +6,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 
-/** Which shaded patches a legend may list (layout only, no physics): the cases the demo's reviews found. */
+/** Which shaded patches a legend may list (layout only, no physics): the cases seen in the demo's charts. */
 class VisiblePatchesTest {
 
     private static final double PX_Y = 1.0 / NominalPlot.HEIGHT_PX;

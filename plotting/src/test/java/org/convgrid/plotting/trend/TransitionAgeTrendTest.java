@@ -66,7 +66,7 @@ class TransitionAgeTrendTest {
         assertThat(caveats.get(0)).startsWith("Cores from " + String.format(java.util.Locale.ROOT, "%.3f",
                 onset.convCoreOnset().massMsun())).contains("too cool for the CNO cycle");
         // a young slice's cool cores are 12C-driven before the zero-age main sequence: the caveat names both fuels
-        // (it said "3He-driven" alone, which a practitioner's review read against pre-main-sequence cores)
+        // (it said "3He-driven" alone, which pre-main-sequence cores contradict)
         assertThat(caveats.get(0)).contains(TransitionFinder.COOL_CORES_CAUSE).doesNotContain("3He-driven");
         // the chart against Z says the same
         assertThat(TransitionTrend.build(PhysicsKey.of(rows.get(0)), noted).caveats()).isEqualTo(caveats);

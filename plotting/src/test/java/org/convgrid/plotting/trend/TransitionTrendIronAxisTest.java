@@ -14,12 +14,12 @@ import org.convgrid.plotting.style.StyledChart;
 import org.junit.jupiter.api.Test;
 
 /**
- * The transitions-against-metallicity chart of a grid given in [Fe/H] has an [Fe/H] axis: a reviewer's old-population
+ * The transitions-against-metallicity chart of a grid given in [Fe/H] has an [Fe/H] axis: an old-population
  * grid, fe_h_dex [-2, -1, 0], drew Z = 0.0001843, 0.001833 and 0.01738 along x, numbers nobody had asked for.
  */
 class TransitionTrendIronAxisTest {
 
-    /** The reviewer's three compositions (Z from [Fe/H] with the default Sun and helium law) and their fe_h_dex. */
+    /** That grid's three compositions (Z from [Fe/H] with the default Sun and helium law) and their fe_h_dex. */
     private static final double[] ZS = {0.0001843476, 0.001832918, 0.01738278};
     private static final MetallicityNames IRON = new MetallicityNames(Map.of(ZS[0], -2.0, ZS[1], -1.0, ZS[2], 0.0));
 

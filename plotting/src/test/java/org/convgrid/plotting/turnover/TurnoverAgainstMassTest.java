@@ -58,7 +58,7 @@ class TurnoverAgainstMassTest {
 
     /**
      * ms_fraction grids: one age of the grid is another age in Gyr for every star, so lines by age would hold one
-     * star each; no chart (found by a code review).
+     * star each; no chart.
      */
     @Test
     void aGridOfMainSequenceFractionsGetsNoChart() {
@@ -72,7 +72,7 @@ class TurnoverAgainstMassTest {
         assertThat(TurnoverAgainstMass.eachStarItsOwnAge(rows())).isFalse();
     }
 
-    /** A line that stops short because its highest masses are past the main sequence says so (planet-host review). */
+    /** A line that stops short because its highest masses are past the main sequence says so. */
     @Test
     void modelsPastTheMainSequenceAreCountedForTheNote() {
         // TestRuns' lifetimes are 10 M^-2.5 Gyr: at 4 Gyr 1.8 Msun (2.3 Gyr) is past it, 1 Msun (10 Gyr) is not

@@ -209,7 +209,7 @@ public final class TabulatedOpacity implements Opacity {
                             + " log R [%.3f, %.3f]", name, temperature, density, lt, lr,
                     status == NOT_IN_TABLE ? "in a cell not in the table, inside" : "outside",
                     logT[0], last(logT), logR[0], last(logR)) + (status == OUTSIDE_GRID && lt < logT[0]
-                    // a review gave the shipped OPAL file (from log T 3.75) as a table of its own: every model
+                    // the shipped OPAL file (from log T 3.75) given as a table of its own: every model
                     // failed at ~4600 K, in layers none of the final models has
                     ? "; nothing is extrapolated, so a table must reach the coolest layer any model visits, also on "
                     + "the way: atmospheres down to about 0.8 Teff, pre-main-sequence start models, and the 1 Msun "
