@@ -116,6 +116,13 @@ public final class TransitionTrendRenderer {
             middles.setMarker(SeriesMarkers.SQUARE);
             middles.setMarkerColor(ChartStyle.tint(color, WINDOW_MARKER_TINT));
         }
+        TrendLegend.hideDrawnSeries(chart);
+        List<String> colours = new java.util.ArrayList<>(ages.stream().map(SliceLabels::age).toList());
+        at.windowAges().stream().filter(age -> !ages.contains(age)).forEach(age -> colours.add(SliceLabels.age(age)));
+        TrendLegend.add(chart, data.series().stream().map(TransitionTrendData.Series::kind).distinct().sorted()
+                        .toList(), TransitionAgeTrendRenderer.methodsToTellApart(method, data.series().stream()
+                        .map(TransitionTrendData.Series::method).toList()), !data.windows().isEmpty(), colours,
+                GRID_MARKER_TINT);
         TrendDrawing.labels(chart, valueLabels(data, at), windows(data, at));
         return chart;
     }
