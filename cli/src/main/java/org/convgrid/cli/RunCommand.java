@@ -296,8 +296,8 @@ final class RunCommand implements Callable<Integer> {
         String tolerance = MessageNumbers.format(grid.transitions().toleranceMsun()) + " Msun";
         if (refined.added().isEmpty()) {
             return "nothing to refine (" + (oneMass(grid) ? "the grid has one mass, so no two models bracket a transition"
-                    : grid.ages().fractions() ? "ms_fraction ages are not refined: a fraction is an age of each "
-                    + "star's own" : "no bracket wider than " + tolerance) + ")";
+                    : grid.ages().fractions() ? org.convgrid.survey.refine.TransitionRefiner.FRACTION_AGES_NOT_REFINED
+                    : "no bracket wider than " + tolerance) + ")";
         }
         long failedNew = failedOrUnconverged(refined);
         return "transitions refined to " + tolerance + " with " + Counts.of(refined.added().size(), "new model")

@@ -103,9 +103,7 @@ public record RefinementEstimate(long models, double seconds, String basis) {
             return none("none (one mass: no bracket to narrow)");
         }
         if (grid.ages().fractions()) {
-            // the refiner leaves such grids alone (TransitionRefiner): a fraction is an age of each star's own
-            return none("none (ms_fraction ages are not refined: a fraction is an age of each star's own, so a new "
-                    + "mass would not sit at its slice's age)");
+            return none("none (" + org.convgrid.survey.refine.TransitionRefiner.FRACTION_AGES_NOT_REFINED + ")");
         }
         List<Double> gaps = new ArrayList<>();
         for (int i = 1; i < masses.size(); i++) {

@@ -51,6 +51,14 @@ import org.convgrid.grids.words.MessageNumbers;
 public final class TransitionRefiner {
 
     /**
+     * Why a grid of main-sequence fractions is never refined, for the commands that say so: a fraction is an age of
+     * each star's own, so a new mass would sit at an age of its own, off its slice (with origin zams every fraction-0
+     * slice holds all the masses, and refining it broke the catalogue's slices).
+     */
+    public static final String FRACTION_AGES_NOT_REFINED = "ms_fraction ages are not refined: a fraction is an age "
+            + "of each star's own, so a new mass would not sit at its slice's age";
+
+    /**
      * The new models, ready to append, and what the table should say about each slice.
      *
      * @param newModels every new model, in slice order then increasing mass, with its final refinement id
@@ -140,9 +148,7 @@ public final class TransitionRefiner {
                             + " has no grid model; the catalogue was edited"));
             ModelRequest template = ModelIds.gridRequest(grid, gridRow.modelId());
             if (template.age() instanceof org.convgrid.engine.request.Age.MainSequenceFraction) {
-                // a fraction is an age of each star's own: a new mass would sit at an age of its own, off the
-                // slice (with origin zams every fraction-0 slice holds all the masses, and refining it broke the
-                // catalogue's slices), so ms_fraction grids are not refined
+                // FRACTION_AGES_NOT_REFINED
                 continue;
             }
             Map<Double, CatalogueRow> failed = new HashMap<>();
