@@ -46,6 +46,9 @@ public final class TransitionAgeTrend {
      * ({@link TransitionFinder#notesCoolCores}): the chart's "core in every star above" line dips there (the demo at
      * 150 Myr: 0.381 and 0.420 Msun against ~1.1 at the other ages), and a reader takes the dip for CNO cores.
      */
+    /** How the cool-core caveat starts, before its masses. */
+    static final String CAVEAT_START = "Core in every star above (M\u2609) ";
+
     static List<String> coolCoreCaveats(List<TransitionRow> rows, MetallicityNames names) {
         List<String> at = rows.stream().filter(r -> r.convCoreOnset().found())
                 .filter(r -> TransitionFinder.notesCoolCores(r.notes()))
@@ -57,8 +60,10 @@ public final class TransitionAgeTrend {
         if (at.isEmpty()) {
             return List.of();
         }
-        return List.of("Cores from " + String.join(", ", at) + " Msun up: the lowest of them burn where the CNO cycle "
-                + "gives under " + TransitionFinder.COOL_CORE_SHARE_WORDS + " of the energy, "
+        // the masses first and their unit beside them: "Cores from 1.027 (Z = 0.008, 20 Myr), ... Msun up:" put the
+        // unit a line or more after the first mass
+        return List.of(CAVEAT_START + String.join(", ", at) + ": the lowest of these cores burn where the CNO "
+                + "cycle gives under " + TransitionFinder.COOL_CORE_SHARE_WORDS + " of the energy, "
                 + TransitionFinder.COOL_CORES_WORDS
                 + ": " + TransitionFinder.COOL_CORES_CAUSE + "; see the notes of transitions.csv.");
     }

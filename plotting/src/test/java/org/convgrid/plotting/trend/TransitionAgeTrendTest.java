@@ -63,7 +63,7 @@ class TransitionAgeTrendTest {
                         + TransitionFinder.COOL_CORES_WORDS + ": out-of-equilibrium burning drives them")).toList();
         List<String> caveats = TransitionAgeTrend.build(PhysicsKey.of(rows.get(0)), noted).caveats();
         assertThat(caveats).hasSize(1);
-        assertThat(caveats.get(0)).startsWith("Cores from " + String.format(java.util.Locale.ROOT, "%.3f",
+        assertThat(caveats.get(0)).startsWith(TransitionAgeTrend.CAVEAT_START + String.format(java.util.Locale.ROOT, "%.3f",
                 onset.convCoreOnset().massMsun())).contains("too cool for the CNO cycle");
         // a young slice's cool cores are 12C-driven before the zero-age main sequence: the caveat names both fuels
         // (it said "3He-driven" alone, which pre-main-sequence cores contradict)
