@@ -188,9 +188,9 @@ class ShardMergeTest {
     @Test
     void aGridWithAPresetNamedByARelativePathMergesFromAnyWorkingDirectory() throws Exception {
         // the grid is named relative to the run's working directory, and its preset relative to the grid's folder;
-        // the manifest records the grid's absolute path, so a merge from another directory (the JVM's own here,
-        // which is not the harness's) reads the same preset. Recorded as typed, the preset was looked for beside
-        // the merging directory and the merge refused
+        // the manifest records where the grid file was, so a merge from another directory (the JVM's own here,
+        // which is not the harness's) reads the same preset. With the name as typed alone, the preset was looked
+        // for beside the merging directory and the merge refused
         Path folder = Files.createDirectories(work.resolve("grids"));
         Files.writeString(folder.resolve("sun.yaml"), "mixing_length: 2.05\natmosphere: krishna_swamy\n");
         CliHarness.writeGrid(folder, "preset.yaml", CliHarness.GRID.replace("mixing_length: 1.8",
@@ -198,15 +198,16 @@ class ShardMergeTest {
         runShards(Path.of("grids/preset.yaml"), 2);
         Path shard1 = work.resolve("runs/test-survey-shard-1-of-2");
         RunManifest manifest = RunManifestReader.read(Files.readString(shard1.resolve("manifest.yaml")));
-        assertThat(manifest.gridFile()).isEqualTo(folder.resolve("preset.yaml").toString());
+        assertThat(manifest.gridFile()).isEqualTo("grids/preset.yaml");
+        assertThat(manifest.gridLocation()).isEqualTo(folder.resolve("preset.yaml").toString());
         assertThat(manifest.physics().get(0).mixingLength()).isEqualTo(2.05);
         // absolute shard and output paths: the merge itself needs no working directory
         CliHarness.Execution merged = CliHarness.in(Path.of("").toAbsolutePath(), FakeChunkSolver.fast()).execute(
                 "merge", shard1.toString(), work.resolve("runs/test-survey-shard-2-of-2").toString(), "--out",
                 work.resolve("merged").toString());
         assertThat(merged.code()).as(merged.err()).isEqualTo(0);
-        assertThat(RunManifestReader.read(Files.readString(work.resolve("merged/manifest.yaml"))).gridFile())
-                .isEqualTo(manifest.gridFile());
+        assertThat(RunManifestReader.read(Files.readString(work.resolve("merged/manifest.yaml"))).gridLocation())
+                .isEqualTo(manifest.gridLocation());
     }
 
     @Test

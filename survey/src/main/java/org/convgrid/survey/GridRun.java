@@ -14,7 +14,6 @@ import org.convgrid.engine.batch.ProgressListener;
 import org.convgrid.engine.batch.Shard;
 import org.convgrid.grids.GridFile;
 import org.convgrid.grids.GridFileException;
-import org.convgrid.grids.yaml.GridFileReader;
 import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.OutputFormatException;
 import org.convgrid.output.RunLayout;
@@ -327,7 +326,7 @@ public final class GridRun {
     private static void refuseProfilesChange(RunDirectory dir, RunManifest old, boolean wanted) {
         boolean recorded;
         try {
-            recorded = new GridFileReader().parse(old.gridFile(), old.gridText()).profiles();
+            recorded = RecordedGrid.of(old).profiles();
         } catch (GridFileException e) {
             return;
         }
@@ -433,9 +432,10 @@ public final class GridRun {
     private RunManifest manifest(Settings s, Shard shard, Instant started, Instant finished,
                                  Map<ModelStatus, Long> counts, double median) {
         GridFile g = s.grid();
-        return new RunManifest(toolVersion, toolCommit, g.location(), g.text(), g.fileSha256(), g.modelsSha256(),
+        return new RunManifest(toolVersion, toolCommit, g.name(), g.text(), g.fileSha256(), g.modelsSha256(),
                 g.spec().physics().combinations(), started, finished, s.threads(), ShardChoice.label(shard), counts,
-                median, g.spec().ages().origin(), RunManifest.EXPECTED_UNKNOWN, GridIronAbundance.of(g.spec()));
+                median, g.spec().ages().origin(), RunManifest.EXPECTED_UNKNOWN, GridIronAbundance.of(g.spec()),
+                g.location());
     }
 
     private static String shard(Shard shard) {

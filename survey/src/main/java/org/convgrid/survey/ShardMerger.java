@@ -17,7 +17,6 @@ import java.util.Objects;
 import java.util.stream.Stream;
 import org.convgrid.grids.GridHash;
 import org.convgrid.grids.GridSpec;
-import org.convgrid.grids.yaml.GridFileReader;
 import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.IronAbundance;
 import org.convgrid.output.RunLayout;
@@ -264,7 +263,7 @@ public final class ShardMerger {
             }
         }
         RunManifest first = manifests.get(0);
-        GridSpec grid = new GridFileReader().parse(first.gridFile(), first.gridText());
+        GridSpec grid = RecordedGrid.of(first);
         if (!GridHash.ofModels(grid).equals(models)) {
             throw new RunSetupException(shards.get(0) + ": " + NOT_ITS_MODELS);
         }
@@ -272,7 +271,7 @@ public final class ShardMerger {
         // profiles): the merged run would take the first-named shard's choices, so the order of the arguments
         // changed the result; differences in comments alone are accepted
         for (int i = 1; i < manifests.size(); i++) {
-            GridSpec other = new GridFileReader().parse(manifests.get(i).gridFile(), manifests.get(i).gridText());
+            GridSpec other = RecordedGrid.of(manifests.get(i));
             if (!GridHash.ofModels(other).equals(models)) {
                 throw new RunSetupException(shards.get(i) + ": " + NOT_ITS_MODELS);
             }
@@ -307,6 +306,7 @@ public final class ShardMerger {
         return new RunManifest(oneBuild ? first.toolVersion() : toolVersion, oneBuild ? first.toolCommit() : toolCommit,
                 first.gridFile(), first.gridText(), first.gridFileSha256(),
                 first.gridModelsSha256(), first.physics(), started, finished, threads, null,
-                RunFinishing.countByStatus(rows), median, first.ageOrigin(), RunManifest.EXPECTED_UNKNOWN, iron);
+                RunFinishing.countByStatus(rows), median, first.ageOrigin(), RunManifest.EXPECTED_UNKNOWN, iron,
+                first.gridLocation());
     }
 }

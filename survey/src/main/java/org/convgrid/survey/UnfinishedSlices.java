@@ -11,7 +11,6 @@ import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.grids.GridFileException;
 import org.convgrid.grids.GridSpec;
 import org.convgrid.grids.ModelIdFormat;
-import org.convgrid.grids.yaml.GridFileReader;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.manifest.RunManifest;
 import org.convgrid.output.transitions.Slice;
@@ -48,7 +47,7 @@ public final class UnfinishedSlices {
         }
         GridSpec grid;
         try {
-            grid = new GridFileReader().parse(manifest.gridFile(), manifest.gridText());
+            grid = RecordedGrid.of(manifest);
         } catch (GridFileException e) {
             return transitions;
         }

@@ -122,10 +122,15 @@ public final class GridFileReader {
      * @throws GridFileException listing every problem in the text
      */
     public GridSpec parse(String name, String text) {
-        return parse(name, Path.of(name), text);
+        return parse(name, (Path) null, text);
     }
 
-    private GridSpec parse(String name, Path location, String text) {
+    /**
+     * Validates grid-file text of the file at {@code location}, whose folder the files it names are read from.
+     *
+     * @throws GridFileException listing every problem in the text
+     */
+    public GridSpec parse(String name, Path location, String text) {
         NodeReader reader = new NodeReader(name, location);
         Optional<Node> root = compose(name, text, reader);
         GridSpec spec = null;

@@ -22,30 +22,38 @@ import org.snakeyaml.engine.v2.nodes.SequenceNode;
 final class NodeReader {
 
     private final String file;
-    private final java.nio.file.Path folder;
+    private final java.nio.file.Path location;
     private final List<GridProblem> problems = new ArrayList<>();
 
     /** A reader of the file named {@code file}, whose relative file names are read from its folder. */
     NodeReader(String file) {
-        this(file, java.nio.file.Path.of(file));
+        this(file, null);
     }
 
     /**
      * @param file the name problems are reported at (as the user gave it)
-     * @param location where the file is: file names inside it (a preset, an opacity table) are relative to its folder
+     * @param location where the file is, or null for the file {@code file} names: file names inside it (a preset, an
+     *                 opacity table) are relative to its folder
      */
     NodeReader(String file, java.nio.file.Path location) {
         this.file = file;
-        this.folder = location.toAbsolutePath().normalize().getParent();
+        this.location = location;
     }
 
     String file() {
         return file;
     }
 
-    /** The absolute folder the file's relative file names are read from, null for a file at the root. */
+    /**
+     * The absolute folder the file's relative file names are read from. Worked out only when a file is named, so
+     * that a name that is no path on this system (a manifest's, written elsewhere) fails only then, as a file the
+     * grid names.
+     *
+     * @throws java.nio.file.InvalidPathException when the file's name is no path here
+     */
     java.nio.file.Path folder() {
-        return folder;
+        java.nio.file.Path at = location != null ? location : java.nio.file.Path.of(file);
+        return at.toAbsolutePath().normalize().getParent();
     }
 
     /** Records a problem at the start of {@code node}. */

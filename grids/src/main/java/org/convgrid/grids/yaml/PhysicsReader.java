@@ -149,9 +149,9 @@ final class PhysicsReader {
         if (text == null) {
             return null;
         }
-        Path folder = reader.folder();
         Path table;
         try {
+            Path folder = reader.folder();
             table = folder == null ? Path.of(text) : folder.resolve(text);
         } catch (java.nio.file.InvalidPathException e) {
             reader.problem(node, GridProblemKind.UNREADABLE_FILE, "opacity_table: not a valid file name");

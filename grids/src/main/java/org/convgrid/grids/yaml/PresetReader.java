@@ -43,9 +43,9 @@ final class PresetReader {
         if (name == null) {
             return null;
         }
-        Path folder = reader.folder();
         Path file;
         try {
+            Path folder = reader.folder();
             file = (folder == null ? Path.of(name) : folder.resolve(name)).normalize();
         } catch (java.nio.file.InvalidPathException e) {
             reader.problem(node, GridProblemKind.UNREADABLE_FILE, "preset: not a valid file name");

@@ -16,8 +16,7 @@ import org.convgrid.output.IronAbundance;
  * @param toolVersion convgrid's version
  * @param toolCommit the git commit convgrid was built from ({@code -dirty} appended when its working tree had
  *                   uncommitted changes), or {@code unknown}
- * @param gridFile the grid file's absolute path (as given on the command line in manifests written before
- *                 2026-12-05), against whose folder the files the grid names are read again
+ * @param gridFile the grid file's name as given on the command line
  * @param gridText the grid file's text as read
  * @param gridFileSha256 SHA-256 of the grid file's bytes
  * @param gridModelsSha256 SHA-256 of the grid's model-deciding content (for resume checks)
@@ -34,11 +33,24 @@ import org.convgrid.output.IronAbundance;
  *                       reader sees how far it got
  * @param ironAbundance the Sun the tables' {@code fe_h_dex} is measured against and whether the grid gave [Fe/H]
  *                      ({@link IronAbundance#DEFAULT} for manifests written before it was recorded)
+ * @param gridLocation the grid file's absolute path when the run read it, whose folder the files the grid names (a
+ *                     preset, an opacity table) are read from again; empty when not recorded (manifests written
+ *                     before it was)
  */
 public record RunManifest(String toolVersion, String toolCommit, String gridFile, String gridText, String gridFileSha256,
                           String gridModelsSha256, List<PhysicsOptions> physics, Instant started, Instant finished,
                           int threads, String shard, Map<ModelStatus, Long> counts, double medianSecondsPerModel,
-                          AgeOrigin ageOrigin, long expectedModels, IronAbundance ironAbundance) {
+                          AgeOrigin ageOrigin, long expectedModels, IronAbundance ironAbundance,
+                          String gridLocation) {
+
+    /** A manifest that does not record where the grid file was. */
+    public RunManifest(String toolVersion, String toolCommit, String gridFile, String gridText, String gridFileSha256,
+                       String gridModelsSha256, List<PhysicsOptions> physics, Instant started, Instant finished,
+                       int threads, String shard, Map<ModelStatus, Long> counts, double medianSecondsPerModel,
+                       AgeOrigin ageOrigin, long expectedModels, IronAbundance ironAbundance) {
+        this(toolVersion, toolCommit, gridFile, gridText, gridFileSha256, gridModelsSha256, physics, started, finished,
+                threads, shard, counts, medianSecondsPerModel, ageOrigin, expectedModels, ironAbundance, "");
+    }
 
     /** {@link #expectedModels} of a manifest that does not record it (finished runs, earlier versions). */
     public static final long EXPECTED_UNKNOWN = -1;
@@ -79,6 +91,7 @@ public record RunManifest(String toolVersion, String toolCommit, String gridFile
         Objects.requireNonNull(toolVersion, "toolVersion");
         Objects.requireNonNull(toolCommit, "toolCommit");
         Objects.requireNonNull(gridFile, "gridFile");
+        Objects.requireNonNull(gridLocation, "gridLocation");
         Objects.requireNonNull(gridText, "gridText");
         Objects.requireNonNull(gridFileSha256, "gridFileSha256");
         Objects.requireNonNull(gridModelsSha256, "gridModelsSha256");
@@ -99,13 +112,14 @@ public record RunManifest(String toolVersion, String toolCommit, String gridFile
     /** The same manifest, finished at {@code end} with the final counts and median. */
     public RunManifest finishedAt(Instant end, Map<ModelStatus, Long> finalCounts, double median) {
         return new RunManifest(toolVersion, toolCommit, gridFile, gridText, gridFileSha256, gridModelsSha256, physics,
-                started, end, threads, shard, finalCounts, median, ageOrigin, expectedModels, ironAbundance);
+                started, end, threads, shard, finalCounts, median, ageOrigin, expectedModels, ironAbundance,
+                gridLocation);
     }
 
     /** The same manifest, not finished, with the counts and median so far and the models the run is to hold. */
     public RunManifest unfinished(Map<ModelStatus, Long> countsSoFar, double median, long expected) {
         return new RunManifest(toolVersion, toolCommit, gridFile, gridText, gridFileSha256, gridModelsSha256, physics,
-                started, null, threads, shard, countsSoFar, median, ageOrigin, expected, ironAbundance);
+                started, null, threads, shard, countsSoFar, median, ageOrigin, expected, ironAbundance, gridLocation);
     }
 
     /** Whether the run is known to be unfinished: no finish time. */

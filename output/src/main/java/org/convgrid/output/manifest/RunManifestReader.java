@@ -106,7 +106,9 @@ public final class RunManifestReader {
                     root.containsKey("median_seconds_per_model") ? number(root, "median_seconds_per_model")
                             : Double.NaN, origin,
                     models.containsKey("expected") ? ((Number) models.get("expected")).longValue()
-                            : RunManifest.EXPECTED_UNKNOWN, ironAbundance(root));
+                            : RunManifest.EXPECTED_UNKNOWN, ironAbundance(root),
+                    // absent from manifests written before the grid file's location was recorded
+                    grid.containsKey("location") ? (String) grid.get("location") : "");
         } catch (YamlEngineException e) {
             // a file cut short mostly ends inside the quoted grid text or a mapping: the YAML error then names its line
             java.util.regex.Matcher at = java.util.regex.Pattern.compile("line \\d+, column \\d+")

@@ -38,6 +38,9 @@ public final class RunManifestWriter {
     public static String toYaml(RunManifest m) {
         Map<String, Object> grid = new LinkedHashMap<>();
         grid.put("file", m.gridFile());
+        if (!m.gridLocation().isEmpty()) {
+            grid.put("location", m.gridLocation());
+        }
         grid.put("sha256", m.gridFileSha256());
         grid.put("models_sha256", m.gridModelsSha256());
         grid.put("text", m.gridText());

@@ -49,6 +49,22 @@ class RunManifestTest {
     }
 
     @Test
+    void theGridFilesLocationIsWrittenBesideItsNameAndReadBack() {
+        RunManifest m = manifest();
+        RunManifest located = new RunManifest(m.toolVersion(), m.toolCommit(), m.gridFile(), m.gridText(),
+                m.gridFileSha256(), m.gridModelsSha256(), m.physics(), m.started(), m.finished(), m.threads(),
+                m.shard(), m.counts(), m.medianSecondsPerModel(), m.ageOrigin(), m.expectedModels(),
+                m.ironAbundance(), "/home/me/project/grids/demo.yaml");
+        String yaml = RunManifestWriter.toYaml(located.finishedAt(Instant.parse("2026-03-01T10:05:30Z"),
+                Map.of(ModelStatus.OK, 3L), 1.0));
+        assertThat(yaml).contains("  file: grids/demo.yaml\n  location: /home/me/project/grids/demo.yaml\n");
+        assertThat(RunManifestReader.read(yaml).gridLocation()).isEqualTo("/home/me/project/grids/demo.yaml");
+        // a manifest written before the location was recorded reads as not knowing it, and writes none
+        assertThat(RunManifestWriter.toYaml(m)).doesNotContain("location:");
+        assertThat(RunManifestReader.read(RunManifestWriter.toYaml(m)).gridLocation()).isEmpty();
+    }
+
+    @Test
     void anUnfinishedRunWithoutATimedModelWritesNoNanAndSaysHowManyModelsItExpects() {
         RunManifest unfinished = manifest().unfinished(Map.of(ModelStatus.OK, 3L), Double.NaN, 90);
         String yaml = RunManifestWriter.toYaml(unfinished);

@@ -13,7 +13,6 @@ import java.util.OptionalDouble;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.grids.GridSpec;
 import org.convgrid.grids.words.Counts;
-import org.convgrid.grids.yaml.GridFileReader;
 import org.convgrid.output.AtomicFiles;
 import org.convgrid.output.IronAbundance;
 import org.convgrid.output.OutputFormatException;
@@ -38,6 +37,7 @@ import org.convgrid.survey.FinishedRun;
 import org.convgrid.survey.RunDirectory;
 import org.convgrid.survey.RunFinisher;
 import org.convgrid.survey.RunFinishing;
+import org.convgrid.survey.RecordedGrid;
 import org.convgrid.survey.RunSetupException;
 import org.convgrid.survey.UnfinishedSlices;
 
@@ -132,7 +132,7 @@ public final class TransitionTables {
             throw new RunSetupException(dir.root() + " holds shard " + manifest.shard() + " of a grid; merge the "
                     + "shards with 'convgrid merge' and refine the merged directory");
         }
-        GridSpec grid = new GridFileReader().parse(manifest.gridFile(), manifest.gridText());
+        GridSpec grid = RecordedGrid.of(manifest);
         List<CatalogueRow> rows = CatalogueReader.read(dir.catalogue());
         List<ModelOutcome> added = new ArrayList<>();
         int searches = 0;
@@ -244,7 +244,7 @@ public final class TransitionTables {
             return Double.NaN;
         }
         RunManifest manifest = RunManifestReader.read(Files.readString(dir.manifest()));
-        return new GridFileReader().parse(manifest.gridFile(), manifest.gridText()).transitions().toleranceMsun();
+        return RecordedGrid.of(manifest).transitions().toleranceMsun();
     }
 
     /**
@@ -287,7 +287,7 @@ public final class TransitionTables {
         if (manifest == null || manifest.finished() == null) {
             return null;
         }
-        GridSpec grid = new GridFileReader().parse(manifest.gridFile(), manifest.gridText());
+        GridSpec grid = RecordedGrid.of(manifest);
         return new FinishedRun(dir.root(), grid, manifest, rows, transitions);
     }
 }
