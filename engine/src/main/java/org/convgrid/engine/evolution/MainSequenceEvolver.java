@@ -397,11 +397,16 @@ public final class MainSequenceEvolver {
                 landed.add(current);
             }
             double growth = young ? youngLimits.maxGrowth() : settings.maxGrowth();
-            // on the main sequence a receding central core paces the next step (CoreRecession), while X_c > 0.1:
-            // below it the exhaustion limit already shortens the steps in which cores of the upper main sequence end
-            double paced = young ? Math.max(ratio, pacingRatio(before, current, startDeuterium))
-                    : xc > 0.1 ? Math.max(ratio, CoreRecession.ratio(before, current)) : ratio;
+            double paced = young ? Math.max(ratio, pacingRatio(before, current, startDeuterium)) : ratio;
             double grown = h * Math.min(growth, 0.9 / Math.max(paced, 1.0e-3));
+            if (!young && xc > 0.1) {
+                // on the main sequence a receding central core paces the next step (CoreRecession), while X_c > 0.1
+                // (below it the exhaustion limit already shortens the steps in which cores of the upper main
+                // sequence end), down to a floor of a fraction of the age (CoreRecession.MIN_STEP_AGE_FRACTION)
+                double receding = h * Math.min(growth, 0.9 / Math.max(Math.max(paced,
+                        CoreRecession.ratio(before, current)), 1.0e-3));
+                grown = Math.max(receding, Math.min(grown, CoreRecession.MIN_STEP_AGE_FRACTION * age));
+            }
             dt = landing ? Math.max(dt, grown) : grown;
             if (arrived) {
                 // the pre-main-sequence steps near the ZAMS are paced for its age; from here the main-sequence

@@ -98,6 +98,26 @@ final class BirthTracks {
         return t;
     }
 
+    /**
+     * A track at the default step limits with decaying (exponential diffusive) overshoot of length {@code f},
+     * the tests' usual composition and alpha 1.8.
+     */
+    static synchronized BirthTrack trackDecaying(double massInSun, double z, double f, double endMyr,
+                                                 double... agesMyr) {
+        String key = massInSun + "/z" + z + "/decaying" + f + "/" + endMyr + "/" + java.util.Arrays.toString(agesMyr);
+        BirthTrack cached = TRACKS.get(key);
+        if (cached != null) {
+            return cached;
+        }
+        PhysicsOptions options = new PhysicsOptions(PhysicsOptions.DEFAULT.mixingLength(), f,
+                PhysicsOptions.DEFAULT.criterion(), PhysicsOptions.DEFAULT.opacityScale(),
+                PhysicsOptions.DEFAULT.opacity(), PhysicsOptions.DEFAULT.atmosphere(),
+                org.convgrid.engine.request.OvershootScheme.EXPONENTIAL);
+        BirthTrack t = evolve(massInSun, birth(z), StandardPhysics.create(options, birth(z)), endMyr, 1.0, agesMyr);
+        TRACKS.put(key, t);
+        return t;
+    }
+
     private static BirthTrack evolve(double massInSun, Composition composition, PhysicsSet physics, double endMyr,
                                      double coarseness, double... agesMyr) {
         MainSequenceEvolver.Settings d = MainSequenceEvolver.Settings.DEFAULT.scaled(coarseness);
