@@ -323,6 +323,11 @@ public final class ReportPage {
         // the turn-off's two columns only when some slice is old enough to have one: a young grid's table would
         // otherwise carry a column of "not found"
         boolean turnoffs = run.transitions().stream().anyMatch(t -> t.turnoff().found());
+        java.util.Set<Slice> notAllOk = new java.util.HashSet<>();
+        run.catalogue().stream().filter(r -> r.status() != ModelStatus.OK).forEach(r -> notAllOk.add(Slice.of(r)));
+        java.util.Set<Slice> allOnTheMainSequence = new java.util.HashSet<>();
+        run.catalogue().stream().map(Slice::of).filter(slice -> !notAllOk.contains(slice))
+                .forEach(allOnTheMainSequence::add);
         b.append("<h2 id=\"transitions\">Transition masses</h2>\n<table>\n<tr>" + ironHeading(names)
                 + "<th>Z</th><th>age</th><th>physics</th>"
                 + "<th>fully convective up to / M\u2609</th><th>bracket / M\u2609</th>"
@@ -342,10 +347,9 @@ public final class ReportPage {
                     : SliceLabels.massRange(window, t.toleranceMsun())).append("</td>");
             if (turnoffs) {
                 // a young slice has no turn-off because none of its stars has left the main sequence yet:
-                // "not found" there read as a search that failed
-                boolean anyPast = run.catalogue().stream().anyMatch(r -> r.status() == ModelStatus.PAST_MAIN_SEQUENCE
-                        && Slice.of(r).equals(t.slice()));
-                if (t.turnoff().found() || anyPast) {
+                // "not found" there read as a search that failed. Said only when every model of the slice is ok:
+                // a failed one may be the star that had left it
+                if (t.turnoff().found() || !allOnTheMainSequence.contains(t.slice())) {
                     estimate(b, t.turnoff(), t.toleranceMsun());
                 } else {
                     b.append("<td>").append(ALL_ON_THE_MAIN_SEQUENCE).append("</td><td></td>");

@@ -86,7 +86,13 @@ public final class ChartNotes {
             fm = g.getFontMetrics(font);
             lines = wrapAll(notes, fm, width);
         }
-        int fitting = Math.max(1, (room - fm.getAscent() - fm.getDescent()) / fm.getHeight() + 1);
+        // no line at all when not even one fits (a legend down to the image's lower edge): the notes are in the
+        // tables too, and a line past the edge is cut mid-word
+        int fitting = room < fm.getAscent() + fm.getDescent() ? 0
+                : (room - fm.getAscent() - fm.getDescent()) / fm.getHeight() + 1;
+        if (fitting == 0) {
+            return new Layout(font, List.of(), highestTop + fm.getAscent());
+        }
         if (lines.size() > fitting) {
             List<String> kept = new ArrayList<>(lines.subList(0, fitting));
             kept.set(fitting - 1, cut(kept.get(fitting - 1), fm, width));

@@ -129,23 +129,12 @@ public final class TransitionAgeTrendRenderer {
         }
         TrendLegend.hideDrawnSeries(chart);
         TrendLegend.add(chart, data.series().stream().map(TransitionAgeTrendData.Series::kind).distinct().sorted()
-                        .toList(), methodsToTellApart(method, data.series().stream()
-                        .map(TransitionAgeTrendData.Series::method).toList()), !data.windows().isEmpty(),
+                        .toList(), TrendLegend.methodsOf(method, data.series().stream()
+                        .map(s -> java.util.Map.entry(s.kind(), s.method())).toList()),
+                data.series().stream().allMatch(s -> s.method() == TransitionMethod.GRID), !data.windows().isEmpty(),
                 data.metallicities().stream().map(names::of).toList(), GRID_MARKER_TINT);
         TrendDrawing.labels(chart, valueLabels(data, at), windows(data, at));
         return chart;
-    }
-
-    /**
-     * The methods whose markers the legend tells apart: refined, then grid, those present when the chart mixes them;
-     * none when every value was found one way (the subtitle says which).
-     */
-    static List<TransitionMethod> methodsToTellApart(MethodNote note, List<TransitionMethod> methods) {
-        if (note.legendSuffix(TransitionMethod.REFINED).isEmpty()) {
-            return List.of();
-        }
-        return java.util.stream.Stream.of(TransitionMethod.REFINED, TransitionMethod.GRID).filter(methods::contains)
-                .toList();
     }
 
     /** The dash pattern of a transition's line (ChartStyle's order: solid, then dashes). */

@@ -118,11 +118,12 @@ public final class TransitionTrendRenderer {
         }
         TrendLegend.hideDrawnSeries(chart);
         List<String> colours = new java.util.ArrayList<>(ages.stream().map(SliceLabels::age).toList());
-        at.windowAges().stream().filter(age -> !ages.contains(age)).forEach(age -> colours.add(SliceLabels.age(age)));
+        at.windowOnlyAges().forEach(age -> colours.add(SliceLabels.age(age)));
         TrendLegend.add(chart, data.series().stream().map(TransitionTrendData.Series::kind).distinct().sorted()
-                        .toList(), TransitionAgeTrendRenderer.methodsToTellApart(method, data.series().stream()
-                        .map(TransitionTrendData.Series::method).toList()), !data.windows().isEmpty(), colours,
-                GRID_MARKER_TINT);
+                        .toList(), TrendLegend.methodsOf(method, data.series().stream()
+                        .map(s -> java.util.Map.entry(s.kind(), s.method())).toList()),
+                data.series().stream().allMatch(s -> s.method() == TransitionMethod.GRID), !data.windows().isEmpty(),
+                colours, GRID_MARKER_TINT);
         TrendDrawing.labels(chart, valueLabels(data, at), windows(data, at));
         return chart;
     }
@@ -228,8 +229,17 @@ public final class TransitionTrendRenderer {
             return linear ? z + offsetDex * zMax * 0.5 : z * Math.pow(10, offsetDex);
         }
 
+        /**
+         * The colour of an age: its place among the ages with a transition, then among the ages with transient
+         * windows alone (counted apart, so that the colours follow each other as the legend lists them).
+         */
         int colourIndex(double ageGyr) {
-            return ages.contains(ageGyr) ? ages.indexOf(ageGyr) : ages.size() + windowAges.indexOf(ageGyr);
+            return ages.contains(ageGyr) ? ages.indexOf(ageGyr) : ages.size() + windowOnlyAges().indexOf(ageGyr);
+        }
+
+        /** The ages with transient windows and no transition, increasing. */
+        List<Double> windowOnlyAges() {
+            return windowAges.stream().filter(age -> !ages.contains(age)).toList();
         }
     }
 }

@@ -2,6 +2,7 @@ package org.convgrid.plotting.trend;
 
 import java.awt.Color;
 import java.util.List;
+import java.util.function.Function;
 import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.StyledChart;
@@ -36,22 +37,25 @@ final class TrendLegend {
      *
      * @param chart the chart, its drawn series already added and hidden from the legend
      * @param kinds the transitions drawn, in the order their keys are listed
-     * @param methods the methods to tell apart (both when the chart mixes refined and grid values, else none: the
-     *                subtitle says it)
+     * @param methodsOf for each transition, the methods its markers are told apart by (refined, then grid, those it
+     *                  has, when the chart mixes them), else none: the subtitle then says how every mass was found
+     * @param allGrid whether every mass was read off the grid, so that every drawn marker is the paler one
      * @param windows whether transient windows are drawn
      * @param colours what each colour stands for, by colour index
      * @param gridTint how much paler a grid value's marker is ({@link ChartStyle#tint})
      */
-    static void add(StyledChart chart, List<TransitionMarker.Kind> kinds, List<TransitionMethod> methods,
+    static void add(StyledChart chart, List<TransitionMarker.Kind> kinds,
+                    Function<TransitionMarker.Kind, List<TransitionMethod>> methodsOf, boolean allGrid,
                     boolean windows, List<String> colours, double gridTint) {
+        Color grid = ChartStyle.tint(KEY_GREY, gridTint);
         for (TransitionMarker.Kind kind : kinds) {
+            List<TransitionMethod> methods = methodsOf.apply(kind);
             if (methods.isEmpty()) {
-                key(chart, kind.label(), kind, KEY_GREY);
+                key(chart, kind.label(), kind, allGrid ? grid : KEY_GREY);
             }
             for (TransitionMethod method : methods) {
                 boolean refined = method == TransitionMethod.REFINED;
-                key(chart, kind.label() + (refined ? ", refined" : GRID_SUFFIX), kind,
-                        refined ? KEY_GREY : ChartStyle.tint(KEY_GREY, gridTint));
+                key(chart, kind.label() + (refined ? ", refined" : GRID_SUFFIX), kind, refined ? KEY_GREY : grid);
             }
         }
         if (windows) {
@@ -67,6 +71,19 @@ final class TrendLegend {
             s.setLineStyle(ChartStyle.dashed(0, COLOUR_LINE_WIDTH));
             s.setMarker(SeriesMarkers.NONE);
         }
+    }
+
+    /**
+     * For {@link #add}: the methods each transition's markers are told apart by, from the (transition, method) pairs
+     * drawn; none for any transition when {@code note} says every mass was found one way.
+     */
+    static Function<TransitionMarker.Kind, List<TransitionMethod>> methodsOf(MethodNote note,
+            List<java.util.Map.Entry<TransitionMarker.Kind, TransitionMethod>> drawn) {
+        if (note.legendSuffix(TransitionMethod.REFINED).isEmpty()) {
+            return kind -> List.of();
+        }
+        return kind -> java.util.stream.Stream.of(TransitionMethod.REFINED, TransitionMethod.GRID)
+                .filter(m -> drawn.contains(java.util.Map.entry(kind, m))).toList();
     }
 
     /** Hides every series added so far from the legend: they are explained by the keys. */

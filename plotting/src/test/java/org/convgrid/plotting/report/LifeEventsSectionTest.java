@@ -8,6 +8,7 @@ import java.nio.file.Path;
 import java.util.List;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.output.events.LifeEventRow;
 import org.convgrid.plotting.TestRuns;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -96,6 +97,14 @@ class LifeEventsSectionTest {
                 + LifeEventsSection.AT_TRACK_END + "</td>", Html.escape(LifeEventsSection.AT_TRACK_END_LEGEND));
         // the other table has no such end, and no legend for it
         assertThat(tables[2]).doesNotContain(LifeEventsSection.AT_TRACK_END);
+    }
+
+    @Test
+    void aCoreEndingWithTheMainSequenceIsNotMarked() {
+        // a track that ends at the exhaustion: its core's end is the main sequence's own, not provisional
+        LifeEventRow row = new LifeEventRow("p0-z00-m009", 2.0, 0.02, 0.2771, 1.8, 0.0, null, 0.5, Double.NaN, 5.0, 3.0,
+                880.0, Double.NaN, Double.NaN, Double.NaN, 880.0, 880.0);
+        assertThat(LifeEventsSection.atTrackEnd(row.convCoreEndMyr(), row)).isFalse();
     }
 
     @Test

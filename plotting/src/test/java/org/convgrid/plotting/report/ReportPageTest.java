@@ -139,6 +139,17 @@ class ReportPageTest {
     }
 
     @Test
+    void aSliceWithAFailedModelIsNotSaidToHaveNoStarPastTheMainSequence(@TempDir Path dir) throws Exception {
+        // ages 0, 0.5 and 4.57 Gyr; one model of Z = 0.004 at 0.5 Gyr did not converge (TestRuns): that slice's
+        // turn-off cell cannot say no star has left the main sequence, the failed one may have
+        TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.1, 2.0, 12), new double[] {0.004, 0.014},
+                new double[] {0, 0.5, 4.57}));
+        String html = Files.readString(ReportPage.write(dir));
+        // the two zero-age slices and Z = 0.014 at 0.5 Gyr; not Z = 0.004 at 0.5 Gyr
+        assertThat(html.split(ReportPage.ALL_ON_THE_MAIN_SEQUENCE, -1)).hasSize(3 + 1);
+    }
+
+    @Test
     void aGridWithoutATurnOffHasNoColumnForIt(@TempDir Path dir) throws Exception {
         TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.1, 2.0, 12), new double[] {0.014}, new double[] {0}));
         String html = Files.readString(ReportPage.write(dir));

@@ -82,4 +82,9 @@ class ChartNotesTest {
         assertThat(layout.firstBaseline() + (layout.lines().size() - 1) * fm.getHeight()).isEqualTo(715);
         assertThat(layout.lines()).noneMatch(line -> line.endsWith(ChartNotes.CUT));
     }
+
+    @Test
+    void noRoomForOneLineDrawsNone() {
+        assertThat(ChartNotes.layout(graphics(), NOTES, 300, 780, 715, 790).lines()).isEmpty();
+    }
 }

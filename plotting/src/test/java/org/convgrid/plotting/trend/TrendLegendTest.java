@@ -58,6 +58,23 @@ class TrendLegendTest {
     }
 
     @Test
+    void anAgeWithWindowsAloneHasTheColourItsWindowsAreDrawnIn() throws Exception {
+        // 600 Myr with its transient windows but neither transition: its colour comes after the ages with one
+        List<TransitionRow> rows = demo().stream().map(t -> t.slice().ageGyr() == 0.6 ? new TransitionRow(t.slice(),
+                t.yInit(), org.convgrid.output.transitions.TransitionEstimate.NONE,
+                org.convgrid.output.transitions.TransitionEstimate.NONE, t.transientCore(), t.method(),
+                t.toleranceMsun(), t.notes()) : t).toList();
+        TransitionTrendData byZ = TransitionTrend.build(PhysicsKey.of(rows.get(0).slice()), rows);
+        StyledChart chart = TransitionTrendRenderer.render(byZ);
+        assertThat(legend(chart)).endsWith("20 Myr", "150 Myr", "600 Myr");
+        TransitionTrendRenderer.Placement at = TransitionTrendRenderer.placement(byZ);
+        assertThat(at.colourIndex(0.6)).isEqualTo(2);
+        assertThat(chart.getSeriesMap().get("600 Myr").getLineColor())
+                .isEqualTo(org.convgrid.plotting.style.ChartStyle.seriesColor(at.colourIndex(0.6)));
+        assertThat(chart.getSeriesMap().get("small transient cores, 600 Myr").getMarkerColor()).isNotNull();
+    }
+
+    @Test
     void mixedMethodsGetAKeyEachWithTheGridMarkerPaler() throws Exception {
         List<TransitionRow> rows = demo().stream().map(t -> t.slice().ageGyr() == 0.02 ? new TransitionRow(
                 t.slice(), t.yInit(), t.fullyConvective(), t.convCoreOnset(), t.transientCore(), TransitionMethod.GRID,
@@ -69,5 +86,18 @@ class TrendLegendTest {
                 "core in every star above" + TrendLegend.GRID_SUFFIX);
         assertThat(chart.getSeriesMap().get("fully convective limit" + TrendLegend.GRID_SUFFIX).getMarkerColor())
                 .isNotEqualTo(TrendLegend.KEY_GREY);
+    }
+
+    @Test
+    void everyMassReadOffTheGridGivesPaleKeyMarkersAsTheDrawnOnes() throws Exception {
+        List<TransitionRow> rows = demo().stream().map(t -> new TransitionRow(t.slice(), t.yInit(),
+                t.fullyConvective(), t.convCoreOnset(), t.transientCore(), TransitionMethod.GRID, Double.NaN,
+                t.notes())).toList();
+        StyledChart chart = TransitionAgeTrendRenderer.render(TransitionAgeTrend.build(
+                PhysicsKey.of(rows.get(0).slice()), rows), AgeOrigin.BIRTH);
+        assertThat(legend(chart)).startsWith("fully convective limit", "core in every star above");
+        // the grid markers' tint (GRID_MARKER_TINT, 0.5) on the key's grey
+        assertThat(chart.getSeriesMap().get("fully convective limit").getMarkerColor())
+                .isEqualTo(org.convgrid.plotting.style.ChartStyle.tint(TrendLegend.KEY_GREY, 0.5));
     }
 }
