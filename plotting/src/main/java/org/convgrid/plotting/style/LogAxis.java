@@ -18,8 +18,12 @@ public final class LogAxis {
 
     private static final String[] ROUND_MANTISSAS = {"1", "2", "3", "5"};
     private static final String[] EVERY_MANTISSA = {"1", "2", "3", "4", "5", "6", "7", "8", "9"};
+    /**
+     * Tenths up to 2, fifths up to 3 (a 1.2-2.4 Msun grid's 2.2 and 2.4 had no label: the next after 2 was 3), then
+     * the integers.
+     */
     private static final String[] FINE_MANTISSAS = {"1", "1.1", "1.2", "1.3", "1.4", "1.5", "1.6", "1.7", "1.8", "1.9",
-        "2", "3", "4", "5", "6", "7", "8", "9"};
+        "2", "2.2", "2.4", "2.6", "2.8", "3", "4", "5", "6", "7", "8", "9"};
     /** An axis spanning less than this factor gets the fine labels. */
     private static final double NARROW_RANGE = 3.0;
     /** Fewer round values than this inside an axis, and every mantissa is offered as a label. */

@@ -29,6 +29,12 @@ public enum ZoneKind {
 
     /** Ends within this distance of 0 or 1 count as centre or surface (spans are written with 6 decimals). */
     static final double EDGE_TOLERANCE = 1.0e-6;
+    /**
+     * A zone from the centre that ends within this much of the mass below the surface fills the star but for its
+     * atmosphere: the first steps of a 2.4 Msun star from birth have 1.4e-6 of its mass above such a zone (r/R 0.998
+     * at its top), which {@link #EDGE_TOLERANCE} drew as a convective core filling the star. No core comes near it.
+     */
+    static final double WHOLE_STAR_SKIN = 1.0e-5;
 
     private final String label;
     private final String plural;
@@ -73,7 +79,7 @@ public enum ZoneKind {
     public static ZoneKind of(double lo, double hi) {
         boolean centre = lo <= EDGE_TOLERANCE;
         boolean surface = hi >= 1.0 - EDGE_TOLERANCE;
-        if (centre && surface) {
+        if (centre && hi >= 1.0 - WHOLE_STAR_SKIN) {
             return WHOLE_STAR;
         }
         return centre ? CORE : surface ? ENVELOPE : SHELL;

@@ -20,11 +20,13 @@ class LogAxisLabelsTest {
         assertThat(LogAxis.labelValues(0.71, 1.34)).containsExactly(0.8, 0.9, 1.0, 1.1, 1.2, 1.3);
         // 1.0-1.4 Msun (F stars about the Kraft break) was labelled only at 0.9 and 1
         assertThat(LogAxis.labelValues(0.89, 1.57)).containsExactly(0.9, 1.0, 1.1, 1.2, 1.3, 1.4, 1.5);
-        assertThat(LogAxis.labelValues(0.25, 0.51)).containsExactly(0.3, 0.4, 0.5);
+        assertThat(LogAxis.labelValues(0.25, 0.51)).containsExactly(0.26, 0.28, 0.3, 0.4, 0.5);
         // a range of a factor 3 to 10 keeps the round values when three fall inside
         assertThat(LogAxis.labelValues(0.09, 0.6)).containsExactly(0.1, 0.2, 0.3, 0.5);
         // 1.1-3 Msun (a seismology grid) held only 2 and 3, round or every mantissa: the tenths of the first decade too
         assertThat(LogAxis.labelValues(1.05, 3.4)).containsExactly(1.1, 1.2, 1.3, 1.4, 1.5, 1.6, 1.7, 1.8, 1.9, 2.0,
-                3.0);
+                2.2, 2.4, 2.6, 2.8, 3.0);
+        // 1.2-2.4 Msun by 0.2 (the columns' outer edges 1.1 and 2.6): 2.2 and 2.4 were left without a label
+        assertThat(LogAxis.labelValues(1.1, 2.62)).contains(2.2, 2.4);
     }
 }

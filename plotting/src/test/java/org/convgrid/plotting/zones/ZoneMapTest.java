@@ -161,5 +161,8 @@ class ZoneMapTest {
         assertThat(ZoneKind.of(0, 0.1)).isEqualTo(ZoneKind.CORE);
         assertThat(ZoneKind.of(0.7, 1)).isEqualTo(ZoneKind.ENVELOPE);
         assertThat(ZoneKind.of(0.3, 0.4)).isEqualTo(ZoneKind.SHELL);
+        // the first step of a 2.4 Msun track from birth: one zone up to m/M 0.9999986 (r/R 0.998), the star but for
+        // its atmosphere, had been drawn as a convective core filling the star
+        assertThat(ZoneKind.of(0, 0.9999986)).isEqualTo(ZoneKind.WHOLE_STAR);
     }
 }
