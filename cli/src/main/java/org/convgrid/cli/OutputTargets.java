@@ -19,6 +19,11 @@ final class OutputTargets {
      * @throws UsageException naming the option and the file otherwise
      */
     static void requireWritableFile(String option, Path file) {
+        if (file.getFileName() != null && file.getFileName().toString().equals("-")) {
+            // '-' reads as standard output in many tools; here it wrote a file named '-' in the working directory
+            throw new UsageException(option + " takes a file name; '-' (standard output) is not one it writes to: "
+                    + "give a file, e.g. " + option + " model.csv");
+        }
         if (Files.isDirectory(file)) {
             throw new UsageException(option + " " + file + " is a directory; give a file name");
         }
