@@ -7,6 +7,7 @@ import java.util.TreeMap;
 import java.util.function.Function;
 import java.util.function.ToDoubleFunction;
 import org.convgrid.output.track.TrackTimeline;
+import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.track.TrackStep;
 import org.convgrid.output.transitions.RefinedModelIds;
@@ -114,8 +115,11 @@ public final class HrDiagram {
                 tracks, isochrones, refinementPoints, ageGroups);
         // a turn-off model a drawn line ends at is drawn as the line's end, not among the refinement's other models
         List<HrPoint> ends = drawn.turnoffModels();
+        List<Double> withoutResult = rows.stream().filter(r -> PhysicsKey.of(r).equals(physics)
+                        && (r.status() == ModelStatus.FAILED || r.status() == ModelStatus.NOT_CONVERGED))
+                .map(CatalogueRow::massMsun).distinct().sorted().toList();
         return new HrDiagramData(physics, drawn.metallicities(), ages, points, lines, labels, tracks, isochrones,
-                refinementPoints.stream().filter(p -> !ends.contains(p)).toList(), ageGroups);
+                refinementPoints.stream().filter(p -> !ends.contains(p)).toList(), ageGroups, withoutResult);
     }
 
     /**

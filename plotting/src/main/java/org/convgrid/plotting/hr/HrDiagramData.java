@@ -22,10 +22,21 @@ import org.convgrid.plotting.label.PhysicsKey;
  *                         masses and an isochrone through them would not be one through the grid's masses; but for
  *                         the turn-off models a drawn line ends at ({@link #turnoffModels}), which are not in it
  * @param ageGroups how the lines' ages are keyed and named: by age in Gyr, or by main-sequence fraction
+ * @param withoutResult the masses (Msun, increasing, each once) of this physics' models that failed or did not
+ *                      converge: not drawn, and named in a note so that a gap in a line is not read as the grid's
  */
 public record HrDiagramData(PhysicsKey physics, List<Double> metallicities, List<Double> ages, List<HrPoint> points,
                             List<ZeroAgeLine> zeroAgeLines, List<HrPoint> massLabels, List<TrackLine> tracks,
-                            List<ZeroAgeLine> isochrones, List<HrPoint> refinementPoints, AgeGroups ageGroups) {
+                            List<ZeroAgeLine> isochrones, List<HrPoint> refinementPoints, AgeGroups ageGroups,
+                            List<Double> withoutResult) {
+
+    /** A diagram all of whose models have a result. */
+    public HrDiagramData(PhysicsKey physics, List<Double> metallicities, List<Double> ages, List<HrPoint> points,
+                         List<ZeroAgeLine> zeroAgeLines, List<HrPoint> massLabels, List<TrackLine> tracks,
+                         List<ZeroAgeLine> isochrones, List<HrPoint> refinementPoints, AgeGroups ageGroups) {
+        this(physics, metallicities, ages, points, zeroAgeLines, massLabels, tracks, isochrones, refinementPoints,
+                ageGroups, List.of());
+    }
 
     /** A diagram without tracks or isochrones. */
     public HrDiagramData(PhysicsKey physics, List<Double> metallicities, List<Double> ages, List<HrPoint> points,
@@ -51,6 +62,7 @@ public record HrDiagramData(PhysicsKey physics, List<Double> metallicities, List
         isochrones = List.copyOf(isochrones);
         refinementPoints = List.copyOf(refinementPoints);
         java.util.Objects.requireNonNull(ageGroups, "ageGroups");
+        withoutResult = List.copyOf(withoutResult);
     }
 
     /**

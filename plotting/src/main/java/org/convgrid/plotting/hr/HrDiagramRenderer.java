@@ -253,8 +253,23 @@ public final class HrDiagramRenderer {
             notes.add(sharing.isPresent() ? AGES_LEFT_OUT_SHARED_NOTE : AGES_LEFT_OUT_NOTE);
         }
         sharing.ifPresent(notes::add);
+        if (!data.withoutResult().isEmpty()) {
+            notes.add(withoutResultNote(data.withoutResult()));
+        }
         return notes;
     }
+
+    /** The note naming the masses whose models have no result, so that their gap is not read as the grid's. */
+    static String withoutResultNote(List<Double> masses) {
+        int shown = Math.min(masses.size(), MASSES_NAMED);
+        String named = masses.subList(0, shown).stream().map(SliceLabels::number)
+                .collect(java.util.stream.Collectors.joining(", "));
+        return "Not drawn: models of " + named + " M\u2609" + (masses.size() > shown ? " and " + (masses.size() - shown)
+                + " more masses" : "") + " that failed or did not converge (report.html lists them).";
+    }
+
+    /** How many masses without a result the note names before counting the rest. */
+    private static final int MASSES_NAMED = 6;
 
     /**
      * The note naming the lines that stop at the last grid mass on the main sequence
