@@ -60,14 +60,18 @@ final class BirthTracks {
      */
     static synchronized BirthTrack track(double massInSun, double z, double endMyr, double coarseness,
                                          double... agesMyr) {
-        String key = massInSun + "/" + z + "/" + endMyr + "/" + coarseness + "/" + java.util.Arrays.toString(agesMyr);
+        return cached(massInSun + "/" + z + "/" + endMyr + "/" + coarseness + "/" + java.util.Arrays.toString(agesMyr),
+                () -> evolve(massInSun, birth(z), physics(z), endMyr, coarseness, agesMyr));
+    }
+
+    /** The track cached under {@code key}, made by {@code make} the first time (tests share tracks). */
+    private static synchronized BirthTrack cached(String key, java.util.function.Supplier<BirthTrack> make) {
         BirthTrack cached = TRACKS.get(key);
-        if (cached != null) {
-            return cached;
+        if (cached == null) {
+            cached = make.get();
+            TRACKS.put(key, cached);
         }
-        BirthTrack t = evolve(massInSun, birth(z), physics(z), endMyr, coarseness, agesMyr);
-        TRACKS.put(key, t);
-        return t;
+        return cached;
     }
 
     /**
@@ -83,19 +87,12 @@ final class BirthTracks {
      */
     static synchronized BirthTrack trackWith(double massInSun, double y, double z, double mixingLength,
                                              double endMyr, double... agesMyr) {
-        String key = massInSun + "/y" + y + "/z" + z + "/alpha" + mixingLength + "/" + endMyr + "/"
-                + java.util.Arrays.toString(agesMyr);
-        BirthTrack cached = TRACKS.get(key);
-        if (cached != null) {
-            return cached;
-        }
         Composition composition = BirthAbundances.of(1.0 - y - z, z);
         PhysicsOptions options = new PhysicsOptions(mixingLength, 0.0, PhysicsOptions.DEFAULT.criterion(),
                 PhysicsOptions.DEFAULT.opacityScale());
-        BirthTrack t = evolve(massInSun, composition, StandardPhysics.create(options, composition), endMyr, 1.0,
-                agesMyr);
-        TRACKS.put(key, t);
-        return t;
+        return cached(massInSun + "/y" + y + "/z" + z + "/alpha" + mixingLength + "/" + endMyr + "/"
+                + java.util.Arrays.toString(agesMyr), () -> evolve(massInSun, composition,
+                StandardPhysics.create(options, composition), endMyr, 1.0, agesMyr));
     }
 
     /**
@@ -104,18 +101,12 @@ final class BirthTracks {
      */
     static synchronized BirthTrack trackDecaying(double massInSun, double z, double f, double endMyr,
                                                  double... agesMyr) {
-        String key = massInSun + "/z" + z + "/decaying" + f + "/" + endMyr + "/" + java.util.Arrays.toString(agesMyr);
-        BirthTrack cached = TRACKS.get(key);
-        if (cached != null) {
-            return cached;
-        }
         PhysicsOptions options = new PhysicsOptions(PhysicsOptions.DEFAULT.mixingLength(), f,
                 PhysicsOptions.DEFAULT.criterion(), PhysicsOptions.DEFAULT.opacityScale(),
                 PhysicsOptions.DEFAULT.opacity(), PhysicsOptions.DEFAULT.atmosphere(),
                 org.convgrid.engine.request.OvershootScheme.EXPONENTIAL);
-        BirthTrack t = evolve(massInSun, birth(z), StandardPhysics.create(options, birth(z)), endMyr, 1.0, agesMyr);
-        TRACKS.put(key, t);
-        return t;
+        return cached(massInSun + "/z" + z + "/decaying" + f + "/" + endMyr + "/" + java.util.Arrays.toString(agesMyr),
+                () -> evolve(massInSun, birth(z), StandardPhysics.create(options, birth(z)), endMyr, 1.0, agesMyr));
     }
 
     private static BirthTrack evolve(double massInSun, Composition composition, PhysicsSet physics, double endMyr,
