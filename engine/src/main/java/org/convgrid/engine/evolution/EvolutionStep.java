@@ -22,11 +22,24 @@ import org.convgrid.engine.convection.ConvectiveZone;
  * @param iterations Newton iterations of the structure relaxation of this step (failed tries included)
  * @param buoyancyTravelTime the g-mode period scale Pi_0 of the step's model, s ({@link
  *     org.convgrid.engine.structure.BuoyancyTravelTime#of}); NaN without a g-mode cavity (fully convective)
+ * @param mixedCoreTop m/M up to which the evolution's overshoot mixes the central convective zone
+ *     ({@link org.convgrid.engine.overshoot.Overshoot#mixedCoreTop}, the catalogue's {@code core_mixed_mass_frac}); NaN
+ *     when it mixes no further than the zone, or when there is no central zone
  */
 public record EvolutionStep(double age, double timeStep, double luminosity, double radius,
                             double effectiveTemperature, double centralTemperature, double centralDensity,
                             double centralHydrogen, List<ConvectiveZone> convectiveZones, double burningInner,
-                            double burningOuter, int iterations, double buoyancyTravelTime) {
+                            double burningOuter, int iterations, double buoyancyTravelTime, double mixedCoreTop) {
+
+    /** A step whose overshoot-mixed core top is not known. */
+    public EvolutionStep(double age, double timeStep, double luminosity, double radius,
+                         double effectiveTemperature, double centralTemperature, double centralDensity,
+                         double centralHydrogen, List<ConvectiveZone> convectiveZones, double burningInner,
+                         double burningOuter, int iterations, double buoyancyTravelTime) {
+        this(age, timeStep, luminosity, radius, effectiveTemperature, centralTemperature, centralDensity,
+                centralHydrogen, convectiveZones, burningInner, burningOuter, iterations, buoyancyTravelTime,
+                Double.NaN);
+    }
 
     public EvolutionStep {
         convectiveZones = List.copyOf(convectiveZones);

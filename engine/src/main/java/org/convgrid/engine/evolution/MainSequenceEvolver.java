@@ -1085,7 +1085,7 @@ public final class MainSequenceEvolver {
      * The track row of a model. Its Pi_0 reads the equation-of-state values the solve left on the model: ~20 us per
      * step once compiled (1.5 Msun at 1 Gyr); 0.24 % of the demo grid's CPU samples (JFR, 9 of 3687).
      */
-    private static EvolutionStep summary(StellarModel model, double age, double dt, int iterations) {
+    private EvolutionStep summary(StellarModel model, double age, double dt, int iterations) {
         StellarProfile p = model.profile();
         double top = 0.0;
         for (int k = 0; k < p.size(); k++) {
@@ -1105,6 +1105,7 @@ public final class MainSequenceEvolver {
         var g = model.global();
         return new EvolutionStep(age, dt, g.luminosity(), g.radius(), g.effectiveTemperature(),
                 g.centralTemperature(), g.centralDensity(), g.centralHydrogen(), model.convection().zones(), inner,
-                outer, iterations, BuoyancyTravelTime.of(model));
+                outer, iterations, BuoyancyTravelTime.of(model),
+                physics.overshoot().mixedCoreTop(model.profile()) / mass);
     }
 }

@@ -24,4 +24,13 @@ class JitteringCoreStepsTest {
         // (CoreRecession.MIN_STEP_AGE_FRACTION): ln(400 / 19) / 0.003 ~ 1000 steps at most, 3000 before
         assertThat(t.result().steps()).hasSizeLessThan(1200);
     }
+
+    @Test
+    void eachStepRecordsHowFarTheOvershootMixesItsCore() {
+        // the track files' core_mixed_mass_frac: the decaying mixing reaches above the core's own top
+        BirthTrack t = BirthTracks.trackDecaying(1.3, 0.02, 0.016, 400, 400);
+        var last = t.result().steps().get(t.result().steps().size() - 1);
+        assertThat(last.convectiveCoreMassFraction()).isPositive();
+        assertThat(last.mixedCoreTop()).isGreaterThan(last.convectiveCoreMassFraction()).isLessThan(0.5);
+    }
 }

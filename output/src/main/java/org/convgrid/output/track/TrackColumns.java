@@ -47,10 +47,18 @@ public final class TrackColumns {
     /** The step's dipole g-mode period spacing Delta Pi_1 = Pi_0 / sqrt(2), s; empty when Pi_0 is. */
     public static final String PERIOD_SPACING_L1 = "period_spacing_l1_s";
 
+    /**
+     * m/M up to which the central convective zone is mixed, overshoot included: the catalogue's column of the same
+     * name at every step; empty when the centre is radiative or the star fully convective, and in track files
+     * written before the column.
+     */
+    public static final String CORE_MIXED = "core_mixed_mass_frac";
+
     /** Every column of a track file, in the order the writer writes them; new ones only ever at the end. */
     public static final List<String> ALL = List.of(AGE_GYR, PHASE, LUMINOSITY, RADIUS, TEFF, LOG_G, CENTRAL_TEMP,
             CENTRAL_DENSITY, CENTRAL_H, SURFACE_LI, CENTRAL_CZ_TOP, ENV_CZ_BASE, CONV_ZONE_COUNT, BURNING_INNER,
-            BURNING_OUTER, NUCLEAR_FRACTION, TIME_STEP, SOLVER_ITERATIONS, BUOYANCY_PERIOD_PI0, PERIOD_SPACING_L1);
+            BURNING_OUTER, NUCLEAR_FRACTION, TIME_STEP, SOLVER_ITERATIONS, BUOYANCY_PERIOD_PI0, PERIOD_SPACING_L1,
+            CORE_MIXED);
 
     /** Row of the step in its track file, 0 = the first step. */
     public static final String STEP_INDEX = "step_index";

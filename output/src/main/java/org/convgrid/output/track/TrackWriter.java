@@ -75,8 +75,15 @@ public final class TrackWriter {
                     .append(Integer.toString(s.iterations())).append(',')
                     .append(CsvNumbers.format(pi0)).append(',')
                     .append(CsvNumbers.format(Double.isNaN(pi0) ? Double.NaN
-                            : BuoyancyTravelTime.periodSpacing(pi0, 1))).append('\n');
+                            : BuoyancyTravelTime.periodSpacing(pi0, 1))).append(',')
+                    .append(CsvNumbers.format(central == null || fullyConvective ? Double.NaN
+                            : mixedCoreTop(s, clamp(central.outerMassFraction())))).append('\n');
         }
+    }
+
+    /** The overshoot's mixed edge above the central zone, never below the zone's own top (as the catalogue's). */
+    private static double mixedCoreTop(EvolutionStep s, double zoneTop) {
+        return Double.isNaN(s.mixedCoreTop()) ? zoneTop : clamp(Math.max(s.mixedCoreTop(), zoneTop));
     }
 
     /**

@@ -41,6 +41,29 @@ class TrackFormatTest {
     }
 
     @Test
+    void everyStepCarriesItsOvershootMixedCoreTop() throws Exception {
+        List<ConvectiveZone> cored = threeZones(0.08, 0.7);
+        EvolutionStep plain = step(1.0, cored);
+        EvolutionStep overshot = new EvolutionStep(plain.age(), plain.timeStep(), plain.luminosity(), plain.radius(),
+                plain.effectiveTemperature(), plain.centralTemperature(), plain.centralDensity(),
+                plain.centralHydrogen(), cored, plain.burningInner(), plain.burningOuter(), plain.iterations(),
+                Double.NaN, 0.095);
+        StringBuilder text = new StringBuilder();
+        TrackWriter.write(Constants.M_SUN, List.of(
+                new TrackPoint(step(0.001, List.of(new ConvectiveZone(0.0, 1.0, 0.0, 1.0))), Phase.PRE_MAIN_SEQUENCE,
+                        0.2, 0.9, 1e-6),
+                new TrackPoint(plain, Phase.MAIN_SEQUENCE, 1.0, 0.25, 0.0),
+                new TrackPoint(overshot, Phase.MAIN_SEQUENCE, 1.0, 0.25, 0.0)), text);
+        String[] lines = text.toString().split("\n");
+        int column = TrackColumns.ALL.indexOf(TrackColumns.CORE_MIXED);
+        assertThat(column).isEqualTo(TrackColumns.ALL.size() - 1);
+        // fully convective: no core to mix; no overshoot: the zone's own top; overshoot: the mixed edge above it
+        assertThat(lines[1].split(",", -1)[column]).isEmpty();
+        assertThat(lines[2].split(",", -1)[column]).isEqualTo("0.08");
+        assertThat(lines[3].split(",", -1)[column]).isEqualTo("0.095");
+    }
+
+    @Test
     void whatTheWriterWritesTheReaderReads(@TempDir Path dir) throws Exception {
         StringBuilder text = new StringBuilder();
         TrackWriter.write(Constants.M_SUN, track(), text);
