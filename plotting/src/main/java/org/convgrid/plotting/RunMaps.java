@@ -497,12 +497,12 @@ public final class RunMaps {
     /** The trend if some slice has a transition or a transient core window; otherwise {@link NothingToDraw}. */
     static TransitionTrendData found(TransitionTrendData trend) {
         if (trend.series().isEmpty() && trend.windows().isEmpty()) {
-            throw new NothingToDraw(NO_STRUCTURE_TRANSITION);
+            throw new NothingToDraw(NO_TRANSITION);
         }
         return trend;
     }
 
-    /** As {@link #found(TransitionTrendData)} for the trend against age, which draws the turn-off too. */
+    /** As {@link #found(TransitionTrendData)} for the trend against age. */
     static TransitionAgeTrendData found(TransitionAgeTrendData trend) {
         if (trend.series().isEmpty() && trend.windows().isEmpty()) {
             throw new NothingToDraw(NO_TRANSITION);
@@ -510,10 +510,6 @@ public final class RunMaps {
         return trend;
     }
 
-    /** Why the chart against Z is empty: it draws no turn-off, so a slice with only a turn-off must not be denied. */
-    private static final String NO_STRUCTURE_TRANSITION = "the models bracket no fully convective limit or "
-            + "convective-core onset in any slice (transitions.csv has none found; this chart does not draw the "
-            + "main-sequence turn-off)";
     private static final String NO_TRANSITION = "the models bracket no transition mass in any slice (transitions.csv "
             + "has none found; one written before the main-sequence turn-off was added lacks it: convgrid transitions "
             + "RUN_DIR adds it)";

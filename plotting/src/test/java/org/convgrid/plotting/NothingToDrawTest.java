@@ -30,9 +30,9 @@ class NothingToDrawTest {
                 "chart hr_a1.8_ov0_schwarzschild.png not drawn: nothing to draw: no model of \u03b1 = 1.8, "
                         + "Schwarzschild, no overshoot is usable (status ok with L and Teff); the catalogue has "
                         + "1 not_converged, 11 past_main_sequence",
-                "chart transitions-vs-z_a1.8_ov0_schwarzschild.png not drawn: nothing to draw: the models bracket no "
-                        + "fully convective limit or convective-core onset in any slice (transitions.csv has none "
-                        + "found; this chart does not draw the main-sequence turn-off)",
+                "chart transitions-vs-z_a1.8_ov0_schwarzschild.png not drawn: nothing to draw: the models bracket "
+                        + "no transition mass in any slice (transitions.csv has none found; one written before the "
+                        + "main-sequence turn-off was added lacks it: convgrid transitions RUN_DIR adds it)",
                 "chart transitions-vs-age_a1.8_ov0_schwarzschild.png not drawn: nothing to draw: the models bracket "
                         + "no transition mass in any slice (transitions.csv has none found; one written before the "
                         + "main-sequence turn-off was added lacks it: convgrid transitions RUN_DIR adds it)");

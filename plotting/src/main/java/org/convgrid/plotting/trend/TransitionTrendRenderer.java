@@ -87,19 +87,19 @@ public final class TransitionTrendRenderer {
         }
         for (TransitionTrendData.Series s : data.series()) {
             int ageIndex = ages.indexOf(s.ageGyr());
-            boolean fc = s.kind() == TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT;
             boolean refined = s.method() == TransitionMethod.REFINED;
             double[] x = s.points().stream().mapToDouble(p -> at.x(p.zInit(), ageIndex)).toArray();
             BracketBands.add(chart, s.points().stream()
                     .map(p -> new BracketBands.At(at.x(p.zInit(), ageIndex), p.bracket())).toList(),
                     ChartStyle.seriesColor(ageIndex));
-            XYSeries line = chart.addSeries((fc ? "fully convective limit, " : "core in every star above, ")
-                            + SliceLabels.age(s.ageGyr()) + method.legendSuffix(s.method()),
+            XYSeries line = chart.addSeries(s.kind().label() + ", " + SliceLabels.age(s.ageGyr())
+                            + method.legendSuffix(s.method()),
                     x, s.points().stream().mapToDouble(TrendPoint::massMsun).toArray());
             line.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
             line.setLineColor(ChartStyle.seriesColor(ageIndex));
-            line.setLineStyle(ChartStyle.dashed(fc ? 0 : 1, ChartStyle.LINE_WIDTH));
-            line.setMarker(fc ? SeriesMarkers.CIRCLE : SeriesMarkers.DIAMOND);
+            // each transition its own dash and marker, as against age; each age its own colour
+            line.setLineStyle(ChartStyle.dashed(TransitionAgeTrendRenderer.dash(s.kind()), ChartStyle.LINE_WIDTH));
+            line.setMarker(TransitionAgeTrendRenderer.marker(s.kind()));
             line.setMarkerColor(refined ? ChartStyle.seriesColor(ageIndex) : ChartStyle.tint(
                     ChartStyle.seriesColor(ageIndex), GRID_MARKER_TINT));
         }

@@ -20,14 +20,23 @@ class TransitionTrendTest {
         List<TransitionRow> transitions = TransitionFinder.withDefaults().find(rows);
         TransitionTrendData data = TransitionTrend.build(PhysicsKey.of(rows.get(0)), transitions);
         assertThat(data.metallicities()).containsExactly(0.004, 0.014, 0.02);
-        assertThat(data.series()).hasSize(6);
+        // the fully convective limit and the core onset at each of the three ages, at every Z; the turn-off where
+        // a slice has one (the synthetic run's oldest stars are past the main sequence)
+        assertThat(data.series().stream().filter(s -> s.kind() != TransitionMarker.Kind.MAIN_SEQUENCE_TURNOFF))
+                .hasSize(6).allSatisfy(s -> assertThat(s.points()).hasSize(3));
+        long turnoffs = transitions.stream().filter(t -> t.turnoff().found()).count();
+        assertThat(turnoffs).isPositive();
+        assertThat(data.series().stream().filter(s -> s.kind() == TransitionMarker.Kind.MAIN_SEQUENCE_TURNOFF)
+                .mapToInt(s -> s.points().size()).sum()).isEqualTo((int) turnoffs);
         for (TransitionTrendData.Series s : data.series()) {
-            assertThat(s.points()).hasSize(3);
             for (TrendPoint p : s.points()) {
                 TransitionRow t = transitions.stream().filter(r -> r.slice().zInit() == p.zInit()
                         && r.slice().ageGyr() == s.ageGyr()).findFirst().orElseThrow();
-                var estimate = s.kind() == TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT ? t.fullyConvective()
-                        : t.convCoreOnset();
+                var estimate = switch (s.kind()) {
+                    case FULLY_CONVECTIVE_LIMIT -> t.fullyConvective();
+                    case CONV_CORE_ONSET -> t.convCoreOnset();
+                    case MAIN_SEQUENCE_TURNOFF -> t.turnoff();
+                };
                 assertThat(p.massMsun()).isEqualTo(estimate.massMsun());
                 assertThat(p.bracket()).isEqualTo(estimate.bracket());
             }
