@@ -92,9 +92,10 @@ class MsFractionChartsTest {
         assertThat(data.isochrones()).extracting(HrDiagramData.ZeroAgeLine::age).containsExactly(0.25, 0.75);
         assertThat(data.isochrones()).allSatisfy(line -> assertThat(line.points()).extracting(HrPoint::massMsun)
                 .containsExactly(1.2, 1.5, 2.0));
-        // the lowest fraction's line carries the mass labels, at every mass near a labelled one
+        // the lowest fraction's line carries the mass labels, at every mass near a labelled one, and with fewer than
+        // three such at the line's ends too (HrDiagram.FEWEST_MASS_LABELS): 1.2 Msun besides 1.5 and 2
         assertThat(data.zeroAgeLines()).singleElement().satisfies(line -> assertThat(line.points()).hasSize(3));
-        assertThat(data.massLabels()).extracting(HrPoint::massMsun).containsExactly(1.5, 2.0);
+        assertThat(data.massLabels()).extracting(HrPoint::massMsun).containsExactly(1.2, 1.5, 2.0);
     }
 
     @Test

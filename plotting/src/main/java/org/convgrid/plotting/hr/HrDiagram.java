@@ -169,6 +169,18 @@ public final class HrDiagram {
                     .filter(p -> !labels.contains(p))
                     .ifPresent(labels::add);
         }
+        // a grid whose masses miss the round ones (1.2-2.4 Msun by 0.2 had the one label "2"): its line's ends too
+        if (labels.size() < FEWEST_MASS_LABELS && !line.isEmpty()) {
+            for (HrPoint end : List.of(line.get(0), line.get(line.size() - 1))) {
+                if (!labels.contains(end)) {
+                    labels.add(end);
+                }
+            }
+            labels.sort(Comparator.comparingDouble(HrPoint::massMsun));
+        }
         return labels;
     }
+
+    /** Fewer round-mass labels than this, and the zero-age line's lowest and highest masses are labelled too. */
+    static final int FEWEST_MASS_LABELS = 3;
 }
