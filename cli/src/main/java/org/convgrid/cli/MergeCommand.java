@@ -7,6 +7,7 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.survey.FinishedRun;
+import org.convgrid.survey.MergeInterruption;
 import org.convgrid.survey.RunDirectory;
 import org.convgrid.survey.RunFinishing;
 import org.convgrid.survey.RunLock;
@@ -44,11 +45,14 @@ final class MergeCommand implements Callable<Integer> {
         List<Path> dirs = shards.stream().map(context::resolve).toList();
         RunDirectory target = new RunDirectory(context.resolve(out));
         FinishedRun run;
-        try (RunLock lock = RunLock.acquire(target.root())) {
+        MergeInterruption interruption = new MergeInterruption();
+        try (RunLock lock = RunLock.acquire(target.root());
+             RunInterruptHook hook = RunInterruptHook.install(() -> interruptedLine(interruption.stop(),
+                     target.root().toString()), parent.err())) {
             Locks.reportStale(lock, parent.err());
             run = new ShardMerger(ToolVersion.current(), ToolVersion.commit(), Clock.tickSeconds(java.time.ZoneOffset.UTC),
                     context.solvers().writesTracks(), warning -> parent.err().println("convgrid: warning: " + warning))
-                    .merge(dirs, target, context.finishers());
+                    .merge(dirs, target, context.finishers(), interruption);
         }
         Map<ModelStatus, Long> counts = RunFinishing.countByStatus(run.catalogue());
         parent.out().println(target.root() + ": merged " + Counts.of(dirs.size(), "shard directory",
@@ -64,5 +68,19 @@ final class MergeCommand implements Callable<Integer> {
             parent.err().flush();
         }
         return RunFinishing.someModelsFailed(counts) ? ExitCodes.SOME_MODELS_FAILED : ExitCodes.OK;
+    }
+
+    /** The line a signal's handler prints once the merge has stopped ({@link MergeInterruption#stop}). */
+    static String interruptedLine(MergeInterruption.Outcome outcome, String dir) {
+        String where = RunInterruptHook.shellWord(dir);
+        return switch (outcome) {
+            case NOTHING_WRITTEN -> "convgrid: merge interrupted before it wrote anything in " + where;
+            case PARTIAL_REMOVED -> "convgrid: merge interrupted; what it had written in " + where + " is removed "
+                    + "(the shards are untouched): merge again";
+            case PARTIAL_LEFT -> "convgrid: merge interrupted; " + where + " holds a merge cut short that could not "
+                    + "be removed: remove it and merge again (the shards are untouched)";
+            case COMPLETE -> "convgrid: interrupted after the merge: " + where + " is complete, but its charts or "
+                    + "report may be missing: convgrid plot " + where;
+        };
     }
 }

@@ -65,6 +65,15 @@ public final class ShardMerger {
      * @throws RunSetupException when the shards do not join into one complete grid; nothing written
      */
     public FinishedRun merge(List<Path> shards, RunDirectory out, List<RunFinisher> finishers) throws IOException {
+        return merge(shards, out, finishers, new MergeInterruption());
+    }
+
+    /**
+     * As {@link #merge(List, RunDirectory, List)}, each write of the merged directory through {@code interruption},
+     * which a signal's handler stops.
+     */
+    public FinishedRun merge(List<Path> shards, RunDirectory out, List<RunFinisher> finishers,
+                             MergeInterruption interruption) throws IOException {
         List<RunManifest> manifests = new ArrayList<>();
         for (Path shard : shards) {
             RunDirectory dir = new RunDirectory(shard);
@@ -108,27 +117,37 @@ public final class ShardMerger {
                     + "run; merge into a new directory");
         }
         Path top = RunDirectory.topMissing(out.root());
-        FinishedRun run;
-        try {
-            AtomicFiles.write(out.catalogue(), w -> {
-                w.append(RunDirectory.catalogueHeader(iron));
-                for (String line : ordered) {
-                    w.append(line).append('\n');
-                }
-            });
-            copyTracks(shards, out);
-            copyProfiles(shards, out);
-            LifeEventLog.merge(shards.stream().map(d -> new RunDirectory(d).layout().lifeEvents()).toList(),
-                    out.layout().lifeEvents(), grid.physics().overshootScheme(), iron);
-            List<CatalogueRow> mergedRows = CatalogueReader.read(out.catalogue());
-            writeZones(shards, out, mergedRows);
-            run = RunFinishing.writeTables(out, grid, merged(manifests, mergedRows, iron), mergedRows);
-        } catch (IOException e) {
+        MergeInterruption.Write removal = () -> {
             if (top != null) {
                 RunDirectory.deleteTree(top);
             } else {
                 out.clear();
             }
+        };
+        interruption.writing(removal);
+        FinishedRun run;
+        try {
+            interruption.write(() -> AtomicFiles.write(out.catalogue(), w -> {
+                w.append(RunDirectory.catalogueHeader(iron));
+                for (String line : ordered) {
+                    w.append(line).append('\n');
+                }
+            }));
+            copyTracks(shards, out, interruption);
+            copyProfiles(shards, out, interruption);
+            interruption.write(() -> LifeEventLog.merge(shards.stream()
+                    .map(d -> new RunDirectory(d).layout().lifeEvents()).toList(), out.layout().lifeEvents(),
+                    grid.physics().overshootScheme(), iron));
+            List<CatalogueRow> mergedRows = CatalogueReader.read(out.catalogue());
+            interruption.write(() -> writeZones(shards, out, mergedRows));
+            FinishedRun[] written = new FinishedRun[1];
+            interruption.write(() -> {
+                written[0] = RunFinishing.writeTables(out, grid, merged(manifests, mergedRows, iron), mergedRows);
+                interruption.complete();
+            });
+            run = written[0];
+        } catch (IOException e) {
+            removal.run();
             throw new IOException("cannot write the merged run in " + out.root() + ": " + IoMessages.reason(e), e);
         }
         mixedBuilds(shards, manifests);
@@ -218,17 +237,21 @@ public final class ShardMerger {
     }
 
     /** Copies every shard's track files (each star is computed by one shard only) into the merged directory. */
-    private static void copyTracks(List<Path> shards, RunDirectory out) throws IOException {
-        copyOwnFiles(shards, d -> d.layout().tracks(), RunLayout::isTrackFile, out.layout().tracks());
+    private static void copyTracks(List<Path> shards, RunDirectory out, MergeInterruption interruption)
+            throws IOException {
+        copyOwnFiles(shards, d -> d.layout().tracks(), RunLayout::isTrackFile, out.layout().tracks(), interruption);
     }
 
     /** Copies every shard's profile files (each model is computed by one shard only) into the merged directory. */
-    private static void copyProfiles(List<Path> shards, RunDirectory out) throws IOException {
-        copyOwnFiles(shards, d -> d.layout().profiles(), RunLayout::isProfileFile, out.layout().profiles());
+    private static void copyProfiles(List<Path> shards, RunDirectory out, MergeInterruption interruption)
+            throws IOException {
+        copyOwnFiles(shards, d -> d.layout().profiles(), RunLayout::isProfileFile, out.layout().profiles(),
+                interruption);
     }
 
     private static void copyOwnFiles(List<Path> shards, Function<RunDirectory, Path> folder,
-                                     Predicate<Path> own, Path target) throws IOException {
+                                     Predicate<Path> own, Path target, MergeInterruption interruption)
+            throws IOException {
         for (Path shard : shards) {
             Path from = folder.apply(new RunDirectory(shard));
             if (!Files.isDirectory(from)) {
@@ -240,7 +263,8 @@ public final class ShardMerger {
                 files = listed.filter(own).sorted().toList();
             }
             for (Path file : files) {
-                AtomicFiles.writeBinary(target.resolve(file.getFileName().toString()), o -> Files.copy(file, o));
+                interruption.write(() -> AtomicFiles.writeBinary(target.resolve(file.getFileName().toString()),
+                        o -> Files.copy(file, o)));
             }
         }
     }
