@@ -38,6 +38,9 @@ public final class PeriodSpacingAgainstAgeRenderer {
     /** Room above and below the spacings, as a factor. */
     private static final double PAD_FACTOR = 1.08;
 
+    /** Ages from birth spanning this factor or more are drawn on a logarithmic axis. */
+    static final double SPAN_FOR_LOG_AGES = 10.0;
+
     private PeriodSpacingAgainstAgeRenderer() {
     }
 
@@ -59,7 +62,10 @@ public final class PeriodSpacingAgainstAgeRenderer {
         DoubleSummaryStatistics ages = all.stream().mapToDouble(SpacingPoint::ageGyr).summaryStatistics();
         double firstAfterBirth = all.stream().mapToDouble(SpacingPoint::ageGyr).filter(a -> a > 0).min()
                 .orElse(ages.getMin());
-        AgeScale scale = AgeScale.of(data.fromBirth(), ages.getMin(), firstAfterBirth, ages.getMax());
+        // from a decade on: the cavity opens at a few Myr, so a young grid's 3-250 Myr drawn linearly in Gyr had its
+        // whole pre-main sequence squeezed against the left edge
+        AgeScale scale = AgeScale.of(data.fromBirth(), ages.getMin(), firstAfterBirth, ages.getMax(),
+                SPAN_FOR_LOG_AGES);
         StyledChart chart = ChartStyle.newChart(TITLE + names.of(data.zInit()), data.physics().describe(),
                 scale.title(data.fromBirth()), Y_TITLE);
         ChartStyle.legendRight(chart);
@@ -74,6 +80,8 @@ public final class PeriodSpacingAgainstAgeRenderer {
             LogAxis.applyX(chart, scale.min(), scale.max(), scale.decades(), AgeScale::label);
         } else {
             chart.getStyler().setXAxisMin(scale.min()).setXAxisMax(scale.max());
+            // a leading zero: XChart's default pattern wrote 0.05 as ".05"
+            chart.getStyler().setXAxisDecimalPattern("0.0##");
         }
         List<String> notes = new ArrayList<>(List.of(DEFINITION_NOTE, SCATTER_NOTE));
         if (data.stepsAboveCap() > 0) {

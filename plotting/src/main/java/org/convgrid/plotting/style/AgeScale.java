@@ -23,7 +23,15 @@ public record AgeScale(boolean logarithmic, double min, double max) {
 
     /** The scale for ages in Gyr from {@code first} to {@code last}; {@code firstAfterBirth}: the first positive age. */
     public static AgeScale of(boolean fromBirth, double first, double firstAfterBirth, double last) {
-        if (fromBirth && firstAfterBirth > 0 && last / firstAfterBirth >= DECADES_FOR_LOG) {
+        return of(fromBirth, first, firstAfterBirth, last, DECADES_FOR_LOG);
+    }
+
+    /**
+     * As {@link #of(boolean, double, double, double)}, logarithmic from a span of {@code spanForLog} (a factor) on.
+     */
+    public static AgeScale of(boolean fromBirth, double first, double firstAfterBirth, double last,
+                              double spanForLog) {
+        if (fromBirth && firstAfterBirth > 0 && last / firstAfterBirth >= spanForLog) {
             return new AgeScale(true, firstAfterBirth * MYR_PER_GYR, last * MYR_PER_GYR);
         }
         return new AgeScale(false, first, last > first ? last : first + 1.0);

@@ -73,6 +73,20 @@ class PeriodSpacingAgainstAgeTest {
     }
 
     @Test
+    void aYoungGridsSpacingsFromAFewMyrAreDrawnOnALogarithmicAgeAxis() {
+        // a cavity from 3 Myr to a last age of 250 Myr (a young cluster's grid): linear in Gyr, the pre-main sequence
+        // was squeezed against the left edge under a tick reading ".05"
+        TrackedModel young = new TrackedModel(new TrackOrigin("y", 1.0, 0.02, PHYSICS), new Track("y", List.of(
+                step(0.0, "pre_main_sequence", Double.NaN), step(0.003, "pre_main_sequence", 7.0e3),
+                step(0.02, "main_sequence", 3.1e3), step(0.25, "main_sequence", 3.0e3))));
+        PeriodSpacingData data = PeriodSpacingAgainstAge.build(PHYSICS, 0.02, List.of(young), id ->
+                new TrackTimeline(true, 0.02));
+        var chart = PeriodSpacingAgainstAgeRenderer.render(data, MetallicityNames.Z_ONLY);
+        assertThat(chart.getStyler().isXAxisLogarithmic()).isTrue();
+        assertThat(chart.getXAxisTitle()).isEqualTo("age since birth (logarithmic)");
+    }
+
+    @Test
     void drawsOnlyTheStarsOfItsMetallicityAndPhysicsWithACavity() {
         TrackedModel fullyConvective = new TrackedModel(new TrackOrigin("fc", 0.2, 0.02, PHYSICS),
                 new Track("fc", List.of(step(0.0, "pre_main_sequence", Double.NaN),
