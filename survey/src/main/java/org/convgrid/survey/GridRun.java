@@ -5,6 +5,7 @@ import java.nio.file.Files;
 import java.time.Clock;
 import java.time.Instant;
 import java.util.List;
+import java.util.Optional;
 import java.util.Map;
 import java.util.Set;
 import org.convgrid.engine.batch.ChunkSolver;
@@ -19,6 +20,7 @@ import org.convgrid.output.OutputFormatException;
 import org.convgrid.output.RunLayout;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
+import org.convgrid.grids.words.Counts;
 import org.convgrid.output.manifest.RunManifest;
 import org.convgrid.output.manifest.RunManifestReader;
 import org.convgrid.output.manifest.RunManifestWriter;
@@ -120,6 +122,13 @@ public final class GridRun {
             // a directory of another shard, or of this shard of another grid, refuses both (the message said to add
             // --resume or --force there): say what it holds instead
             refuseAnotherShard(s);
+            // a finished run has nothing to continue (a refined one refuses --resume outright): say so
+            Optional<RunManifest> held = dir.readableManifest();
+            if (held.isPresent() && !held.get().isUnfinished()) {
+                throw new RunSetupException(dir.root() + " already holds a finished run (" + Counts.of(
+                        held.get().total(), "model") + "); --force starts it over, or give a new --out ('convgrid "
+                        + "plot' and 'convgrid transitions' read it as it is)");
+            }
             throw new RunSetupException(dir.root() + " already holds a run; add --resume to continue it or "
                     + "--force to start it over");
         }

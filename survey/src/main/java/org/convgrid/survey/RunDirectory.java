@@ -121,6 +121,18 @@ public final class RunDirectory {
         return Optional.empty();
     }
 
+    /** The manifest of the run in this directory when it is readable; empty otherwise. */
+    public Optional<RunManifest> readableManifest() {
+        try {
+            if (Files.isRegularFile(manifest())) {
+                return Optional.of(RunManifestReader.read(Files.readString(manifest())));
+            }
+        } catch (IOException | OutputFormatException | IllegalArgumentException e) {
+            // unreadable: the caller says what it can without it
+        }
+        return Optional.empty();
+    }
+
     /** Whether a catalogue or a manifest is already there. */
     public boolean holdsRun() {
         return Files.exists(catalogue()) || Files.exists(manifest())
