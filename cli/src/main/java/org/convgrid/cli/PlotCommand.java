@@ -58,7 +58,12 @@ final class PlotCommand implements Callable<Integer> {
             RunData run = withUnfinishedSlicesMarked(RunData.read(dir));
             MapsAndReport.Written written = MapsAndReport.drawAndReport(run, dir, formats,
                     warning -> main.err().println("convgrid: warning: " + warning));
-            main.out().println("wrote " + written.maps().written().size() + " charts to " + layout.maps() + " and "
+            // one chart is a PNG and, with --vector, a file per vector format: count charts, name the formats
+            int files = written.maps().written().size();
+            int charts = files / (1 + formats.size());
+            main.out().println("wrote " + Counts.of(charts, "chart") + (formats.isEmpty() ? ""
+                    : " (PNG and " + formats.stream().map(f -> f.name()).collect(java.util.stream.Collectors
+                    .joining(" and ")) + ", " + files + " files)") + " to " + layout.maps() + " and "
                     + written.report());
             return ExitCodes.OK;
         }

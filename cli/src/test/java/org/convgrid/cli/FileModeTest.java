@@ -39,7 +39,14 @@ class FileModeTest {
         Path grid = CliHarness.writeGrid(work, "survey.yaml", CliHarness.GRID);
         assertThat(cli.execute("run", "--no-refine", grid.toString(), "--out", "run", "--quiet").code()).isZero();
         // plot rewrites the maps and the report, with vector copies
-        assertThat(cli.execute("plot", "run", "--vector", "svg").code()).isZero();
+        CliHarness.Execution plot = cli.execute("plot", "run", "--vector", "svg");
+        assertThat(plot.code()).isZero();
+        // charts counted once, their files apart (it said "wrote 2N charts" for N charts in two formats)
+        long pngs;
+        try (Stream<Path> maps = Files.list(work.resolve("run/maps"))) {
+            pngs = maps.filter(p -> p.toString().endsWith(".png")).count();
+        }
+        assertThat(plot.out()).contains("wrote " + pngs + " charts (PNG and SVG, " + 2 * pngs + " files) to ");
 
         Path run = work.resolve("run");
         try (Stream<Path> all = Files.walk(run)) {
