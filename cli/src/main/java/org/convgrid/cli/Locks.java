@@ -18,4 +18,17 @@ final class Locks {
             err.flush();
         }
     }
+
+    /**
+     * Releases the lock before the JVM halts on a signal, so that the next command does not report a holder that died
+     * (and the lock's own directory goes when it held nothing else); the operating system releases it with the
+     * process anyway.
+     */
+    static void closeQuietly(RunLock lock) {
+        try {
+            lock.close();
+        } catch (java.io.IOException e) {
+            // nothing lost: the lock ends with the process
+        }
+    }
 }

@@ -47,12 +47,19 @@ final class MergeCommand implements Callable<Integer> {
         FinishedRun run;
         MergeInterruption interruption = new MergeInterruption();
         try (RunLock lock = RunLock.acquire(target.root());
-             RunInterruptHook hook = RunInterruptHook.install(() -> interruptedLine(interruption.stop(),
-                     target.root().toString()), parent.err())) {
+             RunInterruptHook hook = RunInterruptHook.install(() -> {
+                 MergeInterruption.Outcome outcome = interruption.stop();
+                 // released as a normal end would: the lock's directory goes with it when the merge left it empty
+                 Locks.closeQuietly(lock);
+                 return interruptedLine(outcome, target.root().toString());
+             }, parent.err())) {
             Locks.reportStale(lock, parent.err());
             run = new ShardMerger(ToolVersion.current(), ToolVersion.commit(), Clock.tickSeconds(java.time.ZoneOffset.UTC),
                     context.solvers().writesTracks(), warning -> parent.err().println("convgrid: warning: " + warning))
                     .merge(dirs, target, context.finishers(), interruption);
+        } catch (MergeInterruption.Stopped e) {
+            // the signal's handler has removed what the merge wrote, says so and ends the process
+            return ExitCodes.INTERRUPTED;
         }
         Map<ModelStatus, Long> counts = RunFinishing.countByStatus(run.catalogue());
         parent.out().println(target.root() + ": merged " + Counts.of(dirs.size(), "shard directory",

@@ -60,10 +60,12 @@ final class PlotCommand implements Callable<Integer> {
                     warning -> main.err().println("convgrid: warning: " + warning));
             // one chart is a PNG and, with --vector, a file per vector format: count charts, name the formats
             int files = written.maps().written().size();
-            int charts = files / (1 + formats.size());
+            long charts = written.maps().written().stream().filter(p -> p.toString().endsWith(".png")).count();
+            List<String> kinds = new java.util.ArrayList<>(List.of("PNG"));
+            formats.forEach(f -> kinds.add(f.name()));
             main.out().println("wrote " + Counts.of(charts, "chart") + (formats.isEmpty() ? ""
-                    : " (PNG and " + formats.stream().map(f -> f.name()).collect(java.util.stream.Collectors
-                    .joining(" and ")) + ", " + files + " files)") + " to " + layout.maps() + " and "
+                    : " (" + String.join(", ", kinds.subList(0, kinds.size() - 1)) + " and "
+                    + kinds.get(kinds.size() - 1) + ", " + files + " files)") + " to " + layout.maps() + " and "
                     + written.report());
             return ExitCodes.OK;
         }

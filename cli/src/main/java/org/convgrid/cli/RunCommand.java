@@ -339,26 +339,17 @@ final class RunCommand implements Callable<Integer> {
             plan = prepared.get();
         } catch (ExecutionException e) {
             // released as below: otherwise the next command reports a stale lock after this path
-            closeQuietly(lock);
+            Locks.closeQuietly(lock);
             return "convgrid: interrupted while the run directory was prepared; nothing was computed";
         }
         boolean refines = refinesNow(plan);
         GridRun.Interrupted left = runner.interrupt(plan, interruption);
         // released as a normal end would, so that the resume does not report a holder that died
-        closeQuietly(lock);
+        Locks.closeQuietly(lock);
         // a shard's directory is not the --out given: name the one that holds its rows (its manifest names the shard)
         return (progressShown ? "\n" : "") + RunInterruptHook.line(left, grid.toString(),
                 out != null && plan.shard().count() == 1 ? out.toString()
                         : plan.settings().directory().root().toString(), refines);
-    }
-
-    /** Releases the run lock before the JVM halts; the operating system releases it with the process anyway. */
-    private static void closeQuietly(RunLock lock) {
-        try {
-            lock.close();
-        } catch (java.io.IOException e) {
-            // nothing lost: the lock ends with the process
-        }
     }
 
     /**

@@ -137,10 +137,9 @@ class RunCommandTest {
         byte[] before = Files.readAllBytes(work.resolve("d/catalogue.ecsv"));
         CliHarness.Execution again = run("run", "--no-refine", grid.toString(), "--out", "d", "--quiet");
         assertThat(again.code()).isEqualTo(2);
-        // a finished run has nothing to continue: the message offers --force or a new --out, not --resume (which a
-        // refined run refuses)
+        // a finished run is named as such; not refined yet, a resume may still refine it
         assertThat(again.err()).contains("already holds a finished run (").contains("--force")
-                .contains("a new --out").doesNotContain("--resume");
+                .contains("a new --out").contains("--resume refines its transitions");
         assertThat(Files.readAllBytes(work.resolve("d/catalogue.ecsv"))).isEqualTo(before);
         assertThat(run("run", "--no-refine", grid.toString(), "--out", "d", "--quiet", "--force").code()).isEqualTo(0);
         assertThat(Files.readAllBytes(work.resolve("d/catalogue.ecsv"))).isEqualTo(before);

@@ -122,12 +122,17 @@ public final class GridRun {
             // a directory of another shard, or of this shard of another grid, refuses both (the message said to add
             // --resume or --force there): say what it holds instead
             refuseAnotherShard(s);
-            // a finished run has nothing to continue (a refined one refuses --resume outright): say so
+            // a finished run that was refined refuses --resume (KeptCatalogue), so it is not offered there; a
+            // finished one that was not may still be refined by a resume
             Optional<RunManifest> held = dir.readableManifest();
             if (held.isPresent() && !held.get().isUnfinished()) {
-                throw new RunSetupException(dir.root() + " already holds a finished run (" + Counts.of(
-                        held.get().total(), "model") + "); --force starts it over, or give a new --out ('convgrid "
-                        + "plot' and 'convgrid transitions' read it as it is)");
+                boolean refined = dir.holdsRefinedModels();
+                throw new RunSetupException(dir.root() + " already holds a finished" + (refined ? ", refined" : "")
+                        + " run (" + Counts.of(held.get().total(), "model") + "); "
+                        + (refined ? "" : held.get().shard() != null ? "merge it with the other shards, "
+                        : "--resume refines its transitions if the grid asks for it, ")
+                        + "--force starts it over, or give a new --out ('convgrid plot' and 'convgrid transitions' "
+                        + "read it as it is)");
             }
             throw new RunSetupException(dir.root() + " already holds a run; add --resume to continue it or "
                     + "--force to start it over");

@@ -40,8 +40,8 @@ public final class MergeInterruption {
     private boolean complete;
     private Write removal;
 
-    /** Thrown by a write asked for after {@link #stop}: the merge ends there. */
-    static final class Stopped extends RuntimeException {
+    /** Thrown by a write asked for after {@link #stop}: the merge ends there (the signal's handler ends the process). */
+    public static final class Stopped extends RuntimeException {
         private static final long serialVersionUID = 1L;
 
         Stopped() {
@@ -73,6 +73,20 @@ public final class MergeInterruption {
         }
     }
 
+    /**
+     * Removes what the merge wrote, once: for a merge that failed (a disk full), under the lock, so that a signal
+     * arriving meanwhile does not remove it a second time beside it.
+     */
+    void undo() throws IOException {
+        synchronized (lock) {
+            Write armed = removal;
+            removal = null;
+            if (armed != null) {
+                armed.run();
+            }
+        }
+    }
+
     /** Stops the merge after the write under way and, when it was unfinished, removes what it wrote. */
     public Outcome stop() {
         stopped = true;
@@ -84,7 +98,7 @@ public final class MergeInterruption {
                 return Outcome.NOTHING_WRITTEN;
             }
             try {
-                removal.run();
+                undo();
                 return Outcome.PARTIAL_REMOVED;
             } catch (IOException | RuntimeException e) {
                 return Outcome.PARTIAL_LEFT;

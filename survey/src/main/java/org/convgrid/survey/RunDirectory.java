@@ -133,6 +133,19 @@ public final class RunDirectory {
         return Optional.empty();
     }
 
+    /**
+     * Whether the catalogue holds models the transition refinement added (ids with {@code -r}); false when it cannot
+     * be read.
+     */
+    public boolean holdsRefinedModels() {
+        try (java.util.stream.Stream<String> lines = Files.lines(catalogue())) {
+            return lines.filter(l -> !l.startsWith("#")).map(l -> l.split(",", 2)[0])
+                    .anyMatch(org.convgrid.output.transitions.RefinedModelIds::isRefined);
+        } catch (IOException | java.io.UncheckedIOException e) {
+            return false;
+        }
+    }
+
     /** Whether a catalogue or a manifest is already there. */
     public boolean holdsRun() {
         return Files.exists(catalogue()) || Files.exists(manifest())

@@ -138,7 +138,9 @@ public final class ShardMerger {
             interruption.write(() -> LifeEventLog.merge(shards.stream()
                     .map(d -> new RunDirectory(d).layout().lifeEvents()).toList(), out.layout().lifeEvents(),
                     grid.physics().overshootScheme(), iron));
-            List<CatalogueRow> mergedRows = CatalogueReader.read(out.catalogue());
+            List<CatalogueRow> mergedRows = new ArrayList<>();
+            // read under the lock too: a stop removes the catalogue
+            interruption.write(() -> mergedRows.addAll(CatalogueReader.read(out.catalogue())));
             interruption.write(() -> writeZones(shards, out, mergedRows));
             FinishedRun[] written = new FinishedRun[1];
             interruption.write(() -> {
@@ -147,7 +149,7 @@ public final class ShardMerger {
             });
             run = written[0];
         } catch (IOException e) {
-            removal.run();
+            interruption.undo();
             throw new IOException("cannot write the merged run in " + out.root() + ": " + IoMessages.reason(e), e);
         }
         mixedBuilds(shards, manifests);

@@ -45,8 +45,12 @@ class MergeInterruptionTest {
         assertThat(inWrite.await(5, TimeUnit.SECONDS)).isTrue();
         Thread signal = new Thread(() -> events.add("outcome " + interruption.stop()));
         signal.start();
-        Thread.sleep(100);
-        // the handler waits for the write under way
+        // the handler waits for the write under way: blocked on the lock (its stop already asked for)
+        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(5);
+        while (signal.getState() != Thread.State.BLOCKED && System.nanoTime() < deadline) {
+            Thread.onSpinWait();
+        }
+        assertThat(signal.getState()).isEqualTo(Thread.State.BLOCKED);
         assertThat(events).isEmpty();
         release.countDown();
         signal.join(5000);

@@ -13,6 +13,7 @@ import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.structure.BuoyancyTravelTime;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.output.CsvNumbers;
+import org.convgrid.output.MixedCoreEdge;
 import org.convgrid.output.catalogue.CatalogueZone.ZoneKind;
 
 /**
@@ -77,10 +78,9 @@ public final class OutcomeRows {
                 .build();
     }
 
-    /** The overshoot's mixed edge above the core, never below the core's own top. */
+    /** The overshoot's mixed edge above the core, never below the core's own top ({@link MixedCoreEdge}). */
     private static double mixedCoreTop(ModelOutcome outcome, double coreTop) {
-        double mixed = ((ModelOutcome.Solved) outcome).mixedCoreMassFraction();
-        return Double.isNaN(mixed) ? coreTop : clamp(Math.max(mixed, coreTop));
+        return MixedCoreEdge.of(((ModelOutcome.Solved) outcome).mixedCoreMassFraction(), coreTop);
     }
 
     /**

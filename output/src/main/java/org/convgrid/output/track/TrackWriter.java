@@ -11,6 +11,7 @@ import org.convgrid.engine.evolution.MainSequenceEvolver;
 import org.convgrid.engine.structure.BuoyancyTravelTime;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.output.CsvNumbers;
+import org.convgrid.output.MixedCoreEdge;
 
 /**
  * Writes the track file of one star ({@code tracks/<model_id without age>.csv}): a header row of
@@ -77,13 +78,8 @@ public final class TrackWriter {
                     .append(CsvNumbers.format(Double.isNaN(pi0) ? Double.NaN
                             : BuoyancyTravelTime.periodSpacing(pi0, 1))).append(',')
                     .append(CsvNumbers.format(central == null || fullyConvective ? Double.NaN
-                            : mixedCoreTop(s, clamp(central.outerMassFraction())))).append('\n');
+                            : MixedCoreEdge.of(s.mixedCoreTop(), clamp(central.outerMassFraction())))).append('\n');
         }
-    }
-
-    /** The overshoot's mixed edge above the central zone, never below the zone's own top (as the catalogue's). */
-    private static double mixedCoreTop(EvolutionStep s, double zoneTop) {
-        return Double.isNaN(s.mixedCoreTop()) ? zoneTop : clamp(Math.max(s.mixedCoreTop(), zoneTop));
     }
 
     /**
