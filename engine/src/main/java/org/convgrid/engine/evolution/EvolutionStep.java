@@ -31,27 +31,18 @@ public record EvolutionStep(double age, double timeStep, double luminosity, doub
                             double centralHydrogen, List<ConvectiveZone> convectiveZones, double burningInner,
                             double burningOuter, int iterations, double buoyancyTravelTime, double mixedCoreTop) {
 
-    /** A step whose overshoot-mixed core top is not known. */
-    public EvolutionStep(double age, double timeStep, double luminosity, double radius,
-                         double effectiveTemperature, double centralTemperature, double centralDensity,
-                         double centralHydrogen, List<ConvectiveZone> convectiveZones, double burningInner,
-                         double burningOuter, int iterations, double buoyancyTravelTime) {
-        this(age, timeStep, luminosity, radius, effectiveTemperature, centralTemperature, centralDensity,
-                centralHydrogen, convectiveZones, burningInner, burningOuter, iterations, buoyancyTravelTime,
-                Double.NaN);
-    }
 
     public EvolutionStep {
         convectiveZones = List.copyOf(convectiveZones);
     }
 
-    /** A step whose Pi_0 is not known (made without its model). */
+    /** A step whose Pi_0 and overshoot-mixed core top are not known (made without its model). */
     public EvolutionStep(double age, double timeStep, double luminosity, double radius,
                          double effectiveTemperature, double centralTemperature, double centralDensity,
                          double centralHydrogen, List<ConvectiveZone> convectiveZones, double burningInner,
                          double burningOuter, int iterations) {
         this(age, timeStep, luminosity, radius, effectiveTemperature, centralTemperature, centralDensity,
-                centralHydrogen, convectiveZones, burningInner, burningOuter, iterations, Double.NaN);
+                centralHydrogen, convectiveZones, burningInner, burningOuter, iterations, Double.NaN, Double.NaN);
     }
 
     /** m/M at the top of the convective core, 0 when the centre is radiative. */

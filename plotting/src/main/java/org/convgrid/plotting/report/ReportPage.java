@@ -323,11 +323,9 @@ public final class ReportPage {
         // the turn-off's two columns only when some slice is old enough to have one: a young grid's table would
         // otherwise carry a column of "not found"
         boolean turnoffs = run.transitions().stream().anyMatch(t -> t.turnoff().found());
-        java.util.Set<Slice> notAllOk = new java.util.HashSet<>();
-        run.catalogue().stream().filter(r -> r.status() != ModelStatus.OK).forEach(r -> notAllOk.add(Slice.of(r)));
-        java.util.Set<Slice> allOnTheMainSequence = new java.util.HashSet<>();
-        run.catalogue().stream().map(Slice::of).filter(slice -> !notAllOk.contains(slice))
-                .forEach(allOnTheMainSequence::add);
+        // per slice of the catalogue, whether every model of it is ok
+        Map<Slice, Boolean> allOk = run.catalogue().stream().collect(java.util.stream.Collectors.toMap(Slice::of,
+                r -> r.status() == ModelStatus.OK, Boolean::logicalAnd));
         b.append("<h2 id=\"transitions\">Transition masses</h2>\n<table>\n<tr>" + ironHeading(names)
                 + "<th>Z</th><th>age</th><th>physics</th>"
                 + "<th>fully convective up to / M\u2609</th><th>bracket / M\u2609</th>"
@@ -349,7 +347,7 @@ public final class ReportPage {
                 // a young slice has no turn-off because none of its stars has left the main sequence yet:
                 // "not found" there read as a search that failed. Said only when every model of the slice is ok:
                 // a failed one may be the star that had left it
-                if (t.turnoff().found() || !allOnTheMainSequence.contains(t.slice())) {
+                if (t.turnoff().found() || !allOk.getOrDefault(t.slice(), false)) {
                     estimate(b, t.turnoff(), t.toleranceMsun());
                 } else {
                     b.append("<td>").append(ALL_ON_THE_MAIN_SEQUENCE).append("</td><td></td>");
