@@ -46,6 +46,10 @@ import org.convgrid.output.catalogue.CatalogueRow;
  * at the slice's age, as the fully convective limit is the last mass still fully convective. A slice without a
  * model past the main sequence has no turn-off, and no note says so (every young slice is one); a slice whose
  * statuses change more than once with mass (models on the main sequence above ones past it) says so in its notes.
+
+ * <p>The lithium depletion boundary ({@link LithiumDepletionBoundary}) is read off the surface lithium of the usable
+ * models that follow it: the highest mass that keeps more than 1 % of its birth lithium below the lowest one that
+ * has burnt 99 % of it.
  *
  * @param coreMassFractionThreshold smallest m/M of a convective core that counts as a core, in [0, 1)
  */
@@ -137,6 +141,14 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         return row.structureClass() == StructureClass.FULLY_CONVECTIVE;
     }
 
+    /**
+     * Whether a row keeps more than 1 % of its birth lithium (the low side of the lithium depletion boundary); false
+     * for a row without a lithium value.
+     */
+    public static boolean keepsLithium(CatalogueRow row) {
+        return LithiumDepletionBoundary.keepsLithium(row);
+    }
+
     /** Whether a row has a convective core under this finder's threshold. */
     public boolean hasConvectiveCore(CatalogueRow row) {
         return !isFullyConvective(row) && row.coreCzMassFrac() > coreMassFractionThreshold;
@@ -154,8 +166,9 @@ public record TransitionFinder(double coreMassFractionThreshold) {
             List<String> notes = new ArrayList<>(List.of("no usable model in this slice"));
             MainSequenceTurnoff.describe(turnoff, byMass, notes);
             return new TransitionRow(slice, yInit, TransitionEstimate.NONE, TransitionEstimate.NONE, null, turnoff,
-                    turnoffMethod, Double.NaN, String.join("; ", notes));
+                    LithiumDepletion.NONE, turnoffMethod, Double.NaN, String.join("; ", notes));
         }
+        LithiumDepletion lithium = LithiumDepletionBoundary.of(byMass);
         List<String> notes = new ArrayList<>();
         List<Span> fcCrossings = StateCrossings.of(usable, TransitionFinder::isFullyConvective);
         TransitionEstimate fc = StateCrossings.estimate(byMass, fcCrossings,
@@ -172,6 +185,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         describeRecededCores(usable.subList(coreSearch.size(), usable.size()), notes);
         describePastMainSequence(byMass, notes);
         MainSequenceTurnoff.describe(turnoff, byMass, notes);
+        LithiumDepletionBoundary.describe(lithium, byMass, notes);
         TransitionRow row = new TransitionRow(slice, yInit, fc, core, window, TransitionMethod.GRID, Double.NaN, "");
         List<Span> reported = new ArrayList<>(row.transientCoreCrossings());
         if (fc.found()) {
@@ -180,10 +194,13 @@ public record TransitionFinder(double coreMassFractionThreshold) {
         if (core.found()) {
             reported.add(core.bracket());
         }
+        if (lithium.found()) {
+            reported.add(lithium.boundary().bracket());
+        }
         TransitionMethod method = turnoffMethod == TransitionMethod.REFINED
                 || reported.stream().anyMatch(span -> endsAtRefinedModel(span, usable))
                 ? TransitionMethod.REFINED : TransitionMethod.GRID;
-        return new TransitionRow(slice, yInit, fc, core, window, turnoff, method, Double.NaN,
+        return new TransitionRow(slice, yInit, fc, core, window, turnoff, lithium, method, Double.NaN,
                 String.join("; ", notes));
     }
 

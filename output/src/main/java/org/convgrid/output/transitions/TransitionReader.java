@@ -75,7 +75,12 @@ public final class TransitionReader {
         TransitionEstimate turnoff = r.isMapped(TransitionColumns.TURNOFF_MASS_MSUN)
                 ? estimate(r, TransitionColumns.TURNOFF_MASS_MSUN, TransitionColumns.TURNOFF_BRACKET_LO_MSUN,
                 TransitionColumns.TURNOFF_BRACKET_HI_MSUN) : TransitionEstimate.NONE;
-        return new TransitionRow(slice, number(r, TransitionColumns.Y_INIT), fc, core, window, turnoff,
+        // a table written before the lithium columns reads as one without a boundary
+        LithiumDepletion lithium = r.isMapped(TransitionColumns.LI_DEPLETION_BOUNDARY_MSUN)
+                ? new LithiumDepletion(estimate(r, TransitionColumns.LI_DEPLETION_BOUNDARY_MSUN,
+                TransitionColumns.LI_DEPLETION_BRACKET_LO_MSUN, TransitionColumns.LI_DEPLETION_BRACKET_HI_MSUN),
+                number(r, TransitionColumns.LI_DEPLETION_BOUNDARY_LUMINOSITY_LSUN)) : LithiumDepletion.NONE;
+        return new TransitionRow(slice, number(r, TransitionColumns.Y_INIT), fc, core, window, turnoff, lithium,
                 TransitionMethod.fromLabel(r.get(TransitionColumns.METHOD)), number(r, TransitionColumns.TOLERANCE_MSUN),
                 r.get(TransitionColumns.NOTES));
     }

@@ -18,24 +18,39 @@ import org.convgrid.output.Span;
  * @param turnoff the main-sequence turn-off: the highest mass with status ok below a model past the main sequence;
  *     its crossings are every change between the two statuses with mass ({@link TransitionEstimate#NONE} when the
  *     slice has no model past the main sequence or none on it)
+ * @param lithiumDepletion the lithium depletion boundary: the highest mass that keeps more than 1 % of its birth
+ *     lithium below the lowest one that keeps 1 % or less; its crossings are every change from keeping to depleted
+ *     with increasing mass (not back: heavier stars keep their lithium again), the boundary the lowest of them; not
+ *     found when lithium is not followed, or no such mass pair lies in the slice; with the luminosity of the star at
+ *     it
  * @param method grid or refined
  * @param toleranceMsun the width the refinement narrowed the brackets to, solar masses; NaN for {@code grid}
  * @param notes short remarks (no transition, widened brackets, flickering, stopped bisections), empty when none
  */
 public record TransitionRow(Slice slice, double yInit, TransitionEstimate fullyConvective,
                             TransitionEstimate convCoreOnset, Span transientCore, TransitionEstimate turnoff,
-                            TransitionMethod method, double toleranceMsun, String notes) {
+                            LithiumDepletion lithiumDepletion, TransitionMethod method, double toleranceMsun,
+                            String notes) {
 
     public TransitionRow {
         Objects.requireNonNull(slice, "slice");
         Objects.requireNonNull(fullyConvective, "fullyConvective");
         Objects.requireNonNull(convCoreOnset, "convCoreOnset");
         Objects.requireNonNull(turnoff, "turnoff");
+        Objects.requireNonNull(lithiumDepletion, "lithiumDepletion");
         Objects.requireNonNull(method, "method");
         notes = notes == null ? "" : notes;
     }
 
-    /** A row of a slice without a turn-off (every model on the main sequence). */
+    /** A row of a slice without a lithium depletion boundary (lithium not followed, or none among its masses). */
+    public TransitionRow(Slice slice, double yInit, TransitionEstimate fullyConvective,
+                         TransitionEstimate convCoreOnset, Span transientCore, TransitionEstimate turnoff,
+                         TransitionMethod method, double toleranceMsun, String notes) {
+        this(slice, yInit, fullyConvective, convCoreOnset, transientCore, turnoff, LithiumDepletion.NONE, method,
+                toleranceMsun, notes);
+    }
+
+    /** A row of a slice without a turn-off (every model on the main sequence) nor a lithium depletion boundary. */
     public TransitionRow(Slice slice, double yInit, TransitionEstimate fullyConvective,
                          TransitionEstimate convCoreOnset, Span transientCore, TransitionMethod method,
                          double toleranceMsun, String notes) {
@@ -57,14 +72,14 @@ public record TransitionRow(Slice slice, double yInit, TransitionEstimate fullyC
 
     /** The same row with other notes. */
     public TransitionRow withNotes(String other) {
-        return new TransitionRow(slice, yInit, fullyConvective, convCoreOnset, transientCore, turnoff, method,
-                toleranceMsun, other);
+        return new TransitionRow(slice, yInit, fullyConvective, convCoreOnset, transientCore, turnoff, lithiumDepletion,
+                method, toleranceMsun, other);
     }
 
     /** The same row with a tolerance, kept only when the row is refined (a grid row has none). */
     public TransitionRow withTolerance(double tolerance) {
-        return new TransitionRow(slice, yInit, fullyConvective, convCoreOnset, transientCore, turnoff, method,
-                method == TransitionMethod.REFINED ? tolerance : Double.NaN, notes);
+        return new TransitionRow(slice, yInit, fullyConvective, convCoreOnset, transientCore, turnoff, lithiumDepletion,
+                method, method == TransitionMethod.REFINED ? tolerance : Double.NaN, notes);
     }
 
     /**
@@ -77,7 +92,7 @@ public record TransitionRow(Slice slice, double yInit, TransitionEstimate fullyC
         }
         Slice named = new Slice(slice.zInit(), slice.ageGyr(), slice.mixingLength(), slice.overshootHp(),
                 slice.criterion(), slice.opacityScale(), profile);
-        return new TransitionRow(named, yInit, fullyConvective, convCoreOnset, transientCore, turnoff, method,
-                toleranceMsun, notes);
+        return new TransitionRow(named, yInit, fullyConvective, convCoreOnset, transientCore, turnoff, lithiumDepletion,
+                method, toleranceMsun, notes);
     }
 }

@@ -58,6 +58,8 @@ public final class TransitionWriter {
         cells.add(row.method().label());
         cells.add(CsvNumbers.format(row.toleranceMsun()));
         estimate(row.turnoff(), cells);
+        estimate(row.lithiumDepletion().boundary(), cells);
+        cells.add(CsvNumbers.format(row.lithiumDepletion().luminosityLsun()));
         return cells;
     }
 

@@ -10,6 +10,7 @@ import java.io.StringReader;
 import java.util.List;
 import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.output.OutputFormatException;
+import org.convgrid.output.Span;
 import org.junit.jupiter.api.Test;
 
 class TransitionFileTest {
@@ -20,8 +21,12 @@ class TransitionFileTest {
             + "fully_convective_limit_msun,fully_convective_bracket_lo_msun,fully_convective_bracket_hi_msun,"
             + "conv_core_onset_msun,conv_core_bracket_lo_msun,conv_core_bracket_hi_msun,transient_core_lo_msun,"
             + "transient_core_hi_msun,notes,method,tolerance_msun";
-    private static final String HEADER = BEFORE_TURNOFF_HEADER
+    /** The header before the lithium depletion boundary's columns were added at its end. */
+    private static final String BEFORE_LITHIUM_HEADER = BEFORE_TURNOFF_HEADER
             + ",turnoff_mass_msun,turnoff_bracket_lo_msun,turnoff_bracket_hi_msun";
+    private static final String HEADER = BEFORE_LITHIUM_HEADER
+            + ",li_depletion_boundary_msun,li_depletion_bracket_lo_msun,li_depletion_bracket_hi_msun,"
+            + "li_depletion_boundary_luminosity_lsun";
 
     private static String written(List<TransitionRow> rows) throws IOException {
         StringBuilder out = new StringBuilder();
@@ -40,7 +45,7 @@ class TransitionFileTest {
         // no transient window: its cells are empty; a grid row has no tolerance; 2 Msun is written as 2.0
         assertThat(lines[1]).isEqualTo("0.02,0.27,0.0606,0.0,1.8,0.0,uniform,schwarzschild,1.0,0.3,0.3,0.4,2.0,0.4,"
                 + "2.0,,,"
-                + "fully convective bracket widened past 1 failed model,grid,,,,");
+                + "fully convective bracket widened past 1 failed model,grid,,,,,,,,");
         List<TransitionRow> back = TransitionReader.read(new StringReader(text));
         assertThat(back).hasSize(1);
         assertThat(back.get(0).fullyConvective().bracket()).isEqualTo(rows.get(0).fullyConvective().bracket());
@@ -60,7 +65,7 @@ class TransitionFileTest {
         assertThat(text.split("\r?\n")[1]).isEqualTo("0.02,0.27,0.0606,0.0,1.8,0.0,uniform,schwarzschild,1.0,0.36,"
                 + "0.36,0.37,"
                 + "1.2,1.1,"
-                + "1.2,0.37,0.37,,refined,0.002,,,");
+                + "1.2,0.37,0.37,,refined,0.002,,,,,,,");
         TransitionRow back = TransitionReader.read(new StringReader(text)).get(0);
         assertThat(back.toleranceMsun()).isEqualTo(0.002);
         assertThat(back.method()).isEqualTo(TransitionMethod.REFINED);
@@ -75,7 +80,7 @@ class TransitionFileTest {
                 ok(0.3, StructureClass.FULLY_CONVECTIVE, 1), ok(0.4, StructureClass.CONV_ENVELOPE, 0),
                 ok(0.8, StructureClass.CONV_ENVELOPE, 0), TransitionFinderTest.pastAt(0.85)));
         String text = written(rows);
-        assertThat(text.split("\r?\n")[1]).endsWith(",grid,,0.8,0.8,0.85");
+        assertThat(text.split("\r?\n")[1]).endsWith(",grid,,0.8,0.8,0.85,,,,");
         TransitionRow back = TransitionReader.read(new StringReader(text)).get(0);
         assertThat(back.turnoff().massMsun()).isEqualTo(0.8);
         assertThat(back.turnoff().bracket()).isEqualTo(rows.get(0).turnoff().bracket());
@@ -91,9 +96,27 @@ class TransitionFileTest {
         assertThat(back.turnoff().massMsun()).isNaN();
         assertThat(back.fullyConvective().massMsun()).isEqualTo(0.3);
         assertThat(back.toleranceMsun()).isEqualTo(0.002);
-        // written again, it gains three empty cells at the end and nothing else changes
+        assertThat(back.lithiumDepletion().found()).isFalse();
+        // written again, it gains seven empty cells at the end and nothing else changes
         assertThat(written(List.of(back))).isEqualTo(earlier.replace(BEFORE_TURNOFF_HEADER, HEADER)
-                .replace("0.002\n", "0.002,,,\n"));
+                .replace("0.002\n", "0.002,,,,,,,\n"));
+    }
+
+    @Test
+    void theLithiumDepletionBoundaryIsWrittenLastAndReadsBack() throws IOException {
+        List<TransitionRow> rows = TransitionFinder.withDefaults().find(List.of(
+                ok(0.1, StructureClass.FULLY_CONVECTIVE, 1).toBuilder().surfaceLiRel(0.97).luminosityLsun(1.3e-3).build(),
+                ok(0.2, StructureClass.FULLY_CONVECTIVE, 1).toBuilder().surfaceLiRel(2e-3).luminosityLsun(6e-3).build()));
+        String text = written(rows);
+        assertThat(text.split("\r?\n")[1]).endsWith(",grid,,,,,0.1,0.1,0.2,0.0013");
+        TransitionRow back = TransitionReader.read(new StringReader(text)).get(0);
+        assertThat(back.lithiumDepletion().boundary().massMsun()).isEqualTo(0.1);
+        assertThat(back.lithiumDepletion().boundary().bracket()).isEqualTo(new Span(0.1, 0.2));
+        assertThat(back.lithiumDepletion().luminosityLsun()).isEqualTo(1.3e-3);
+        assertThat(written(List.of(back))).isEqualTo(text);
+        // a table written before the lithium columns (with the turn-off's) reads as one without a boundary
+        String earlier = text.replace(HEADER, BEFORE_LITHIUM_HEADER).replace(",0.1,0.1,0.2,0.0013", "");
+        assertThat(TransitionReader.read(new StringReader(earlier)).get(0).lithiumDepletion().found()).isFalse();
     }
 
     @Test
@@ -110,11 +133,11 @@ class TransitionFileTest {
     void aMissingColumnOrAHalfBracketIsAnError() {
         assertThatThrownBy(() -> TransitionReader.read(new StringReader(HEADER.replace(",tolerance_msun", "") + "\n")))
                 .isInstanceOf(OutputFormatException.class).hasMessageContaining("tolerance_msun");
-        String halfBracket = HEADER + "\n0.02,0.27,0.0606,0.0,1.8,0.0,uniform,schwarzschild,1.0,0.3,0.3,,,,,,,,grid,,,,"
+        String halfBracket = HEADER + "\n0.02,0.27,0.0606,0.0,1.8,0.0,uniform,schwarzschild,1.0,0.3,0.3,,,,,,,,grid,,,,,,,"
                 + "\n";
         assertThatThrownBy(() -> TransitionReader.read(new StringReader(halfBracket)))
                 .isInstanceOf(OutputFormatException.class).hasMessageContaining("both be empty or both be masses");
-        String halfTurnoff = HEADER + "\n0.02,0.27,0.0606,0.0,1.8,0.0,uniform,schwarzschild,1.0,,,,,,,,,,grid,,0.8,0.8,"
+        String halfTurnoff = HEADER + "\n0.02,0.27,0.0606,0.0,1.8,0.0,uniform,schwarzschild,1.0,,,,,,,,,,grid,,0.8,0.8,,,,"
                 + "\n";
         assertThatThrownBy(() -> TransitionReader.read(new StringReader(halfTurnoff)))
                 .isInstanceOf(OutputFormatException.class).hasMessageContaining("turnoff_bracket_hi_msun");

@@ -16,6 +16,7 @@ import org.convgrid.output.manifest.UnfinishedRun;
 import org.convgrid.output.transitions.RefinedModelIds;
 import org.convgrid.output.transitions.Slice;
 import org.convgrid.output.transitions.TransitionEstimate;
+import org.convgrid.output.transitions.TransitionFinder;
 import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.output.transitions.TransitionRow;
 import org.convgrid.plotting.DrawnMaps;
@@ -134,7 +135,7 @@ public final class ReportPage {
         double width = grid.refineToleranceMsun();
         boolean coarse = run.transitions().stream().anyMatch(t -> t.method() == TransitionMethod.GRID
                 && (wider(t.fullyConvective(), width) || wider(t.convCoreOnset(), width)
-                || wider(t.turnoff(), width)));
+                || wider(t.turnoff(), width) || wider(t.lithiumDepletion().boundary(), width)));
         if (!coarse) {
             return;
         }
@@ -313,6 +314,9 @@ public final class ReportPage {
     /** The turn-off's cell in a slice none of whose models is past the main sequence. */
     static final String ALL_ON_THE_MAIN_SEQUENCE = "none: no star past the main sequence";
 
+    /** The lithium depletion boundary's cell in a slice every star of which keeps over 1 % of its lithium. */
+    static final String ALL_KEEP_LITHIUM = "none: every star keeps its lithium";
+
     private static void transitions(StringBuilder b, RunData run) {
         MetallicityNames names = run.metallicityNames();
         if (run.ageGroups().byFraction()) {
@@ -326,12 +330,25 @@ public final class ReportPage {
         // per slice of the catalogue, whether every model of it is ok
         Map<Slice, Boolean> allOk = run.catalogue().stream().collect(java.util.stream.Collectors.toMap(Slice::of,
                 r -> r.status() == ModelStatus.OK, Boolean::logicalAnd));
+        // the lithium depletion boundary's three columns only when some slice has one (a grid from the ZAMS follows
+        // no lithium, an old one has burnt it at every mass it holds)
+        boolean lithium = run.transitions().stream().anyMatch(t -> t.lithiumDepletion().found());
+        // per slice, whether every model of it is ok and keeps over 1 % of its lithium, and its lowest ok mass with
+        // a lithium value
+        Map<Slice, Boolean> allKeep = run.catalogue().stream().collect(java.util.stream.Collectors.toMap(Slice::of,
+                r -> r.status() == ModelStatus.OK && TransitionFinder.keepsLithium(r), Boolean::logicalAnd));
+        Map<Slice, CatalogueRow> lowestWithLithium = run.catalogue().stream()
+                .filter(r -> r.isOk() && !Double.isNaN(r.surfaceLiRel()))
+                .collect(java.util.stream.Collectors.toMap(Slice::of, r -> r,
+                        (a, c) -> a.massMsun() <= c.massMsun() ? a : c));
         b.append("<h2 id=\"transitions\">Transition masses</h2>\n<table>\n<tr>" + ironHeading(names)
                 + "<th>Z</th><th>age</th><th>physics</th>"
                 + "<th>fully convective up to / M\u2609</th><th>bracket / M\u2609</th>"
                 + "<th>core in every star above / M\u2609</th><th>bracket / M\u2609</th>"
                 + "<th>small transient cores / M\u2609</th>"
                 + (turnoffs ? "<th>main-sequence turn-off / M\u2609</th><th>bracket / M\u2609</th>" : "")
+                + (lithium ? "<th>lithium depletion boundary / M\u2609</th><th>bracket / M\u2609</th>"
+                + "<th>its luminosity / L\u2609</th>" : "")
                 + "<th>method</th><th>tolerance / M\u2609</th><th>notes</th></tr>\n");
         for (TransitionRow t : run.transitions()) {
             b.append("<tr>").append(ironCell(names, t.slice().zInit())).append("<td class=\"num\">")
@@ -352,6 +369,25 @@ public final class ReportPage {
                 } else {
                     b.append("<td>").append(ALL_ON_THE_MAIN_SEQUENCE).append("</td><td></td>");
                 }
+            }
+            if (lithium) {
+                // a slice too young for any star to have burnt its lithium has no boundary because none has:
+                // "not found" there read as a search that failed, as for the turn-off
+                // and one burnt already at its lowest mass has it below the grid, which the cell says
+                CatalogueRow lowest = lowestWithLithium.get(t.slice());
+                if (t.lithiumDepletion().found()) {
+                    estimate(b, t.lithiumDepletion().boundary(), t.toleranceMsun());
+                } else if (allKeep.getOrDefault(t.slice(), false)) {
+                    b.append("<td>").append(ALL_KEEP_LITHIUM).append("</td><td></td>");
+                } else if (lowest != null && !TransitionFinder.keepsLithium(lowest)) {
+                    b.append("<td>below ").append(SliceLabels.number(lowest.massMsun()))
+                            .append(": burnt at the lowest mass</td><td></td>");
+                } else {
+                    estimate(b, t.lithiumDepletion().boundary(), t.toleranceMsun());
+                }
+                double luminosity = t.lithiumDepletion().luminosityLsun();
+                b.append("<td class=\"num\">").append(Double.isFinite(luminosity)
+                        ? SliceLabels.number(luminosity) : "").append("</td>");
             }
             b.append("<td>").append(t.method().label()).append("</td><td class=\"num\">")
                     .append(Double.isFinite(t.toleranceMsun()) ? SliceLabels.number(t.toleranceMsun()) : "")

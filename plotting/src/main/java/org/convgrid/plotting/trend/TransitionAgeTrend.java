@@ -21,7 +21,7 @@ public final class TransitionAgeTrend {
 
     /**
      * The chart data of the rows whose physics is {@code physics}: per transition, Z and method the found masses in
-     * age order, fully convective limit, then core onset, then main-sequence turn-off (unbracketed transitions are left out, so a series may have gaps in age; refined and grid values make
+     * age order, fully convective limit, then core onset, then main-sequence turn-off, then lithium depletion boundary (unbracketed transitions are left out, so a series may have gaps in age; refined and grid values make
      * separate series, never one line), and every transient core window.
      */
     public static TransitionAgeTrendData build(PhysicsKey physics, List<TransitionRow> rows) {
@@ -36,6 +36,8 @@ public final class TransitionAgeTrend {
         addAll(series, TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT, TransitionRow::fullyConvective, mine, zs);
         addAll(series, TransitionMarker.Kind.CONV_CORE_ONSET, TransitionRow::convCoreOnset, mine, zs);
         addAll(series, TransitionMarker.Kind.MAIN_SEQUENCE_TURNOFF, TransitionRow::turnoff, mine, zs);
+        addAll(series, TransitionMarker.Kind.LITHIUM_DEPLETION_BOUNDARY, r -> r.lithiumDepletion().boundary(), mine,
+                zs);
         List<Double> ages = mine.stream().map(r -> r.slice().ageGyr()).distinct().sorted().toList();
         List<TransientWindow> windows = mine.stream().flatMap(r -> TransientWindow.allOf(r).stream()).toList();
         return new TransitionAgeTrendData(physics, ages, zs, series, windows, coolCoreCaveats(mine, names));

@@ -143,15 +143,20 @@ public final class TransitionAgeTrendRenderer {
             case FULLY_CONVECTIVE_LIMIT -> 0;
             case CONV_CORE_ONSET -> 1;
             case MAIN_SEQUENCE_TURNOFF -> 2;
+            case LITHIUM_DEPLETION_BOUNDARY -> 3;
         };
     }
 
-    /** The marker of a transition: a circle, a diamond, and a downward triangle for the turn-off. */
+    /**
+     * The marker of a transition: a circle, a diamond, a downward triangle for the turn-off and an upward one for the
+     * lithium depletion boundary.
+     */
     static Marker marker(TransitionMarker.Kind kind) {
         return switch (kind) {
             case FULLY_CONVECTIVE_LIMIT -> SeriesMarkers.CIRCLE;
             case CONV_CORE_ONSET -> SeriesMarkers.DIAMOND;
             case MAIN_SEQUENCE_TURNOFF -> SeriesMarkers.TRIANGLE_DOWN;
+            case LITHIUM_DEPLETION_BOUNDARY -> SeriesMarkers.TRIANGLE_UP;
         };
     }
 

@@ -19,8 +19,8 @@ public final class TransitionTrend {
 
     /**
      * The chart data of the rows whose physics is {@code physics}: the fully convective limit, the mass above which
-     * every star has a core and the main-sequence turn-off; unbracketed transitions are left out; refined and grid
-     * values make separate series, never one line; every transient core window.
+     * every star has a core, the main-sequence turn-off and the lithium depletion boundary; unbracketed transitions
+     * are left out; refined and grid values make separate series, never one line; every transient core window.
      */
     public static TransitionTrendData build(PhysicsKey physics, List<TransitionRow> rows) {
         return build(physics, rows, MetallicityNames.Z_ONLY);
@@ -34,6 +34,8 @@ public final class TransitionTrend {
         addAll(series, TransitionMarker.Kind.FULLY_CONVECTIVE_LIMIT, TransitionRow::fullyConvective, mine, ages);
         addAll(series, TransitionMarker.Kind.CONV_CORE_ONSET, TransitionRow::convCoreOnset, mine, ages);
         addAll(series, TransitionMarker.Kind.MAIN_SEQUENCE_TURNOFF, TransitionRow::turnoff, mine, ages);
+        addAll(series, TransitionMarker.Kind.LITHIUM_DEPLETION_BOUNDARY, r -> r.lithiumDepletion().boundary(), mine,
+                ages);
         List<Double> zs = mine.stream().map(r -> r.slice().zInit()).distinct().sorted().toList();
         List<TransientWindow> windows = mine.stream().flatMap(r -> TransientWindow.allOf(r).stream()).toList();
         return new TransitionTrendData(physics, zs, series, windows, TransitionAgeTrend.coolCoreCaveats(mine, names));

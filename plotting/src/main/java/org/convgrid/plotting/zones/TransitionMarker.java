@@ -14,14 +14,16 @@ public record TransitionMarker(Kind kind, double massMsun, Span bracket, double 
 
     /**
      * The transitions of transitions.csv (README, "Transition masses"). Zone maps mark the first two; the
-     * transitions-against-age chart draws the turn-off too.
+     * transition charts draw the turn-off and the lithium depletion boundary too.
      */
     public enum Kind {
         FULLY_CONVECTIVE_LIMIT("fully convective limit", "fully convective\nup to "),
         /** The lowest mass above which every star of the slice has a convective core at its age. */
         CONV_CORE_ONSET("core in every star above", "core in every star\nabove "),
         /** The highest mass still on the main sequence at the slice's age. */
-        MAIN_SEQUENCE_TURNOFF("main-sequence turn-off", "on the main sequence\nup to ");
+        MAIN_SEQUENCE_TURNOFF("main-sequence turn-off", "on the main sequence\nup to "),
+        /** The highest mass that keeps over 1 % of its birth lithium below the stars that have burnt it. */
+        LITHIUM_DEPLETION_BOUNDARY("lithium depletion boundary", "lithium kept\nup to ");
 
         private final String label;
         private final String legendPrefix;

@@ -155,4 +155,33 @@ class ReportPageTest {
         String html = Files.readString(ReportPage.write(dir));
         assertThat(html).contains("Transition masses").doesNotContain("main-sequence turn-off");
     }
+
+    @Test
+    void theLithiumDepletionBoundaryGetsItsColumnsAndSaysWhyASliceHasNone(@TempDir Path dir) throws Exception {
+        // synthetic lithium (the shape of young published tracks, invented values): at 0.02 Gyr the stars below
+        // 0.3 Msun keep it, 0.3-1 Msun have burnt it, heavier ones keep it; at 0.15 Gyr every star below 1 Msun has
+        // burnt it (the boundary lies below the grid); at 0.005 Gyr every star keeps it
+        List<CatalogueRow> rows = TestRuns.rows(TestRuns.masses(0.1, 2.0, 12), new double[] {0.014},
+                new double[] {0.005, 0.02, 0.15}).stream().map(r -> r.toBuilder().surfaceLiRel(
+                        r.ageGyr() < 0.01 || r.massMsun() >= 1.0 ? 0.6
+                                : r.ageGyr() < 0.05 && r.massMsun() < 0.3 ? 0.9 : 1e-4).build()).toList();
+        TestRuns.write(dir, rows);
+        String html = Files.readString(ReportPage.write(dir));
+        assertThat(html).contains("<th>lithium depletion boundary / M\u2609</th><th>bracket / M\u2609</th>"
+                + "<th>its luminosity / L\u2609</th>");
+        assertThat(html).contains("below 0.1: burnt at the lowest mass");
+        // every star of the 0.005 Gyr slice keeps its lithium, which its cell says instead of "not found"
+        assertThat(html.split(ReportPage.ALL_KEEP_LITHIUM, -1)).hasSize(2);
+        TransitionRow young = TransitionFinder.withDefaults().find(rows).stream()
+                .filter(t -> t.slice().ageGyr() == 0.02).findFirst().orElseThrow();
+        assertThat(young.lithiumDepletion().found()).isTrue();
+        assertThat(html).contains("<td class=\"num\">" + org.convgrid.plotting.label.SliceLabels.number(
+                young.lithiumDepletion().luminosityLsun()) + "</td>");
+    }
+
+    @Test
+    void aGridWithoutLithiumHasNoColumnForIt(@TempDir Path dir) throws Exception {
+        TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.1, 2.0, 12), new double[] {0.014}, new double[] {0}));
+        assertThat(Files.readString(ReportPage.write(dir))).doesNotContain("lithium depletion boundary");
+    }
 }

@@ -39,6 +39,7 @@ class TransitionAgeTrendTest {
                     case FULLY_CONVECTIVE_LIMIT -> t.fullyConvective();
                     case CONV_CORE_ONSET -> t.convCoreOnset();
                     case MAIN_SEQUENCE_TURNOFF -> t.turnoff();
+                    case LITHIUM_DEPLETION_BOUNDARY -> t.lithiumDepletion().boundary();
                 };
                 assertThat(p.massMsun()).isEqualTo(estimate.massMsun());
                 assertThat(p.bracket()).isEqualTo(estimate.bracket());

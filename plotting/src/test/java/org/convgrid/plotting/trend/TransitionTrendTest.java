@@ -36,6 +36,7 @@ class TransitionTrendTest {
                     case FULLY_CONVECTIVE_LIMIT -> t.fullyConvective();
                     case CONV_CORE_ONSET -> t.convCoreOnset();
                     case MAIN_SEQUENCE_TURNOFF -> t.turnoff();
+                    case LITHIUM_DEPLETION_BOUNDARY -> t.lithiumDepletion().boundary();
                 };
                 assertThat(p.massMsun()).isEqualTo(estimate.massMsun());
                 assertThat(p.bracket()).isEqualTo(estimate.bracket());

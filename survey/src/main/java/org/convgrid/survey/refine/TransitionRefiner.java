@@ -69,7 +69,8 @@ public final class TransitionRefiner {
     }
 
     private enum Kind {
-        FULLY_CONVECTIVE("fully convective"), CONV_CORE("convective core"), TURNOFF("turn-off");
+        FULLY_CONVECTIVE("fully convective"), CONV_CORE("convective core"), TURNOFF("turn-off"),
+        LITHIUM_DEPLETION("lithium depletion");
 
         final String label;
 
@@ -79,7 +80,8 @@ public final class TransitionRefiner {
     }
 
     /**
-     * One bisection; {@code lowState} is the kind's state (fully convective, has a core, on the main sequence) below
+     * One bisection; {@code lowState} is the kind's state (fully convective, has a core, on the main sequence, keeps
+     * its lithium) below
      * the crossing;
      * {@code failed} the slice's catalogue rows that are not usable, by mass in g.
      */
@@ -159,6 +161,7 @@ public final class TransitionRefiner {
                     case FULLY_CONVECTIVE -> row.fullyConvective();
                     case CONV_CORE -> row.convCoreOnset();
                     case TURNOFF -> row.turnoff();
+                    case LITHIUM_DEPLETION -> row.lithiumDepletion().boundary();
                 };
                 for (Span span : allCrossings ? e.crossings() : reported(kind, row)) {
                     if (span.hi() - span.lo() >= bisection.tolerance() / Constants.M_SUN) {
@@ -185,8 +188,9 @@ public final class TransitionRefiner {
     }
 
     /**
-     * The crossings the table reports: the fully convective limit, or, for the core, the two crossings that bound the
-     * transient window and the mass above which every star has a core, in mass order without repeats.
+     * The crossings the table reports: the fully convective limit, the turn-off or the lithium depletion boundary, or,
+     * for the core, the two crossings that bound the transient window and the mass above which every star has a core,
+     * in mass order without repeats.
      */
     private static List<Span> reported(Kind kind, TransitionRow row) {
         if (kind == Kind.FULLY_CONVECTIVE) {
@@ -194,6 +198,9 @@ public final class TransitionRefiner {
         }
         if (kind == Kind.TURNOFF) {
             return row.turnoff().found() ? List.of(row.turnoff().bracket()) : List.of();
+        }
+        if (kind == Kind.LITHIUM_DEPLETION) {
+            return row.lithiumDepletion().found() ? List.of(row.lithiumDepletion().boundary().bracket()) : List.of();
         }
         List<Span> spans = new ArrayList<>(row.transientCoreCrossings());
         if (row.convCoreOnset().found() && !spans.contains(row.convCoreOnset().bracket())) {
@@ -242,7 +249,7 @@ public final class TransitionRefiner {
     /**
      * The side of a new model in search {@code s}: the turn-off's by the status alone (ok is on the main sequence,
      * {@code past_main_sequence} past it, any other status stops the search), the other kinds' by the solved model's
-     * structure (an unsolved model stops the search).
+     * structure or surface lithium (an unsolved model stops the search).
      */
     private BracketSide side(Search s, ModelOutcome o) {
         if (s.kind() == Kind.TURNOFF) {
@@ -252,8 +259,13 @@ public final class TransitionRefiner {
                 case FAILED, NOT_CONVERGED -> BracketSide.UNUSABLE;
             };
         }
-        return o instanceof ModelOutcome.Solved solved ? sideOf(inState(s.kind(), OutcomeRows.toRow(solved)), s)
-                : BracketSide.UNUSABLE;
+        if (!(o instanceof ModelOutcome.Solved solved)) {
+            return BracketSide.UNUSABLE;
+        }
+        CatalogueRow row = OutcomeRows.toRow(solved);
+        // a model without a lithium value cannot say which side of the lithium depletion boundary it lies on
+        return s.kind() == Kind.LITHIUM_DEPLETION && Double.isNaN(row.surfaceLiRel()) ? BracketSide.UNUSABLE
+                : sideOf(inState(s.kind(), row), s);
     }
 
     /** The low side when a model is in the state the search's bracket has below its crossing, else the high side. */
@@ -298,6 +310,7 @@ public final class TransitionRefiner {
             case FULLY_CONVECTIVE -> TransitionFinder.isFullyConvective(row);
             case CONV_CORE -> finder.hasConvectiveCore(row);
             case TURNOFF -> row.isOk();
+            case LITHIUM_DEPLETION -> TransitionFinder.keepsLithium(row);
         };
     }
 

@@ -200,6 +200,8 @@ public final class TransitionTables {
                 moved("fully convective limit", old.fullyConvective(), row.fullyConvective(), all);
                 moved("convective core onset", old.convCoreOnset(), row.convCoreOnset(), all);
                 moved("turn-off", old.turnoff(), row.turnoff(), all);
+                moved("lithium depletion boundary", old.lithiumDepletion().boundary(), row.lithiumDepletion().boundary(),
+                        all);
                 if (old.transientCore() == null && row.transientCore() != null) {
                     // one mass when a single refinement model found the cores: "at 0.2875", not "0.2875-0.2875"
                     all.add("the window of small transient cores " + (MassRangeText.isOneMass(row.transientCore())
@@ -221,6 +223,7 @@ public final class TransitionTables {
         wide("fully convective", t.fullyConvective(), List.of(), toleranceMsun, notes);
         wide("convective core", t.convCoreOnset(), t.transientCoreCrossings(), toleranceMsun, notes);
         wide("turn-off", t.turnoff(), List.of(), toleranceMsun, notes);
+        wide("lithium depletion", t.lithiumDepletion().boundary(), List.of(), toleranceMsun, notes);
         return t.withNotes(String.join("; ", notes));
     }
 
