@@ -76,9 +76,10 @@ public final class TransitionReader {
                 ? estimate(r, TransitionColumns.TURNOFF_MASS_MSUN, TransitionColumns.TURNOFF_BRACKET_LO_MSUN,
                 TransitionColumns.TURNOFF_BRACKET_HI_MSUN) : TransitionEstimate.NONE;
         // a table written before the lithium columns reads as one without a boundary
-        LithiumDepletion lithium = r.isMapped(TransitionColumns.LI_DEPLETION_BOUNDARY_MSUN)
-                ? new LithiumDepletion(estimate(r, TransitionColumns.LI_DEPLETION_BOUNDARY_MSUN,
-                TransitionColumns.LI_DEPLETION_BRACKET_LO_MSUN, TransitionColumns.LI_DEPLETION_BRACKET_HI_MSUN),
+        TransitionEstimate boundary = r.isMapped(TransitionColumns.LI_DEPLETION_BOUNDARY_MSUN)
+                ? estimate(r, TransitionColumns.LI_DEPLETION_BOUNDARY_MSUN, TransitionColumns.LI_DEPLETION_BRACKET_LO_MSUN,
+                TransitionColumns.LI_DEPLETION_BRACKET_HI_MSUN) : TransitionEstimate.NONE;
+        LithiumDepletion lithium = boundary.found() ? new LithiumDepletion(boundary,
                 number(r, TransitionColumns.LI_DEPLETION_BOUNDARY_LUMINOSITY_LSUN)) : LithiumDepletion.NONE;
         return new TransitionRow(slice, number(r, TransitionColumns.Y_INIT), fc, core, window, turnoff, lithium,
                 TransitionMethod.fromLabel(r.get(TransitionColumns.METHOD)), number(r, TransitionColumns.TOLERANCE_MSUN),
