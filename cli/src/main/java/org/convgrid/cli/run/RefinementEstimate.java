@@ -22,15 +22,44 @@ import org.convgrid.grids.words.MessageNumbers;
 public record RefinementEstimate(long models, double seconds, String basis) {
 
     /**
-     * Searches per (Z, age, physics) slice: the fully convective limit, the mass above which every star has a core
-     * and, where small cores come and go, that window's two ends (the turn-off, where there is one, is counted apart:
-     * {@link #oldAges}). Measured: the demo grid
-     * (grids/demo-cluster.yaml, 9 slices, brackets of 0.2 Msun bisected 7 times to 0.002 Msun) added 155 models,
-     * 2.5 searches per slice; the 200-model zero-age
-     * grid (benchmarks/grids/two-hundred-zero-age.yaml with refinement on, 4 slices, log-spaced masses) added 59,
-     * where this count, from its median bracket of 0.16 Msun (7 halvings), gives 70.
+     * Searches per (Z, age, physics) slice when the grid's masses reach the fully convective limit and the mass above
+     * which every star has a core: the two, and where small cores come and go, that window's two ends (the turn-off
+     * and the lithium depletion boundary, where there is one, are counted apart: {@link #oldAges},
+     * {@link #lithiumAges}). Measured: the demo grid (grids/demo-cluster.yaml, 9 slices, brackets of 0.2 Msun
+     * bisected 7 times to 0.002 Msun) added 155 models, 2.5 searches per slice; the 200-model zero-age grid
+     * (benchmarks/grids/two-hundred-zero-age.yaml with refinement on, 4 slices, log-spaced masses) added 59, where
+     * this count, from its median bracket of 0.16 Msun (7 halvings), gives 70. A grid that reaches only one of the
+     * two gets {@link #FULLY_CONVECTIVE_SEARCHES} or {@link #CORE_SEARCHES} alone.
      */
     static final double SEARCHES_PER_SLICE = 2.5;
+    /** The fully convective limit's share of {@link #SEARCHES_PER_SLICE}: one search. */
+    static final double FULLY_CONVECTIVE_SEARCHES = 1.0;
+    /** The core onset's and its windows' share of {@link #SEARCHES_PER_SLICE}. */
+    static final double CORE_SEARCHES = SEARCHES_PER_SLICE - FULLY_CONVECTIVE_SEARCHES;
+    /**
+     * Masses, Msun, between which the fully convective limit lies at the ages a grid asks for (ours: 0.25 Msun at 70
+     * Myr, 0.31-0.37 on the main sequence, 0.45-0.48 at 10 Myr): a grid whose masses do not reach into this range
+     * has no search for it.
+     */
+    static final double FULLY_CONVECTIVE_LOW_MSUN = 0.25;
+    static final double FULLY_CONVECTIVE_HIGH_MSUN = 0.5;
+    /** As {@link #FULLY_CONVECTIVE_LOW_MSUN} for the core onset (ours: 1.03-1.2 Msun but for 3He cores at 150 Myr). */
+    static final double CORE_ONSET_LOW_MSUN = 1.0;
+    static final double CORE_ONSET_HIGH_MSUN = 1.3;
+
+    /**
+     * Age, Myr, at which a 0.2 Msun star from birth has burnt 99 % of its lithium, in the scaling t = this x (M / 0.2
+     * Msun)^-{@value #LITHIUM_MASS_EXPONENT} by which {@code check} guesses which slices have a lithium depletion
+     * boundary among their masses. Fitted to ours (a 0.1-0.6 Msun grid, Z = 0.014 and 0.02, 2026-12-05: 0.15 / 0.2 /
+     * 0.3 / 0.45 Msun at 43-44 / 31-32 / 19-20 / 12 Myr; the scaling gives 45, 31, 18.5 and 11.6).
+     */
+    static final double LITHIUM_GONE_AT_0_2_MSUN_MYR = 31.0;
+    static final double LITHIUM_MASS_EXPONENT = 1.3;
+    /**
+     * The highest mass, Msun, that burns 99 % of its lithium early enough to bound the boundary from above: heavier
+     * stars burn theirs no sooner (ours: 0.6 Msun at 10-13 Myr, 0.8 Msun at 20 Myr at Z = 0.02, none at Z = 0.008).
+     */
+    static final double LITHIUM_FASTEST_BURNER_MSUN = 0.6;
 
     /**
      * One-thread seconds of one new model whose star is evolved from birth to its slice's age. Measured (one quiet
@@ -91,8 +120,9 @@ public record RefinementEstimate(long models, double seconds, String basis) {
     }
 
     /**
-     * From the assumed costs above: {@link #SEARCHES_PER_SLICE} searches per slice, each halving the grid's median mass
-     * bracket down to the tolerance.
+     * From the assumed costs above: per slice, a search for each transition the grid's masses reach (up to
+     * {@link #SEARCHES_PER_SLICE}, one more for a turn-off or a lithium depletion boundary), each halving the grid's
+     * median mass bracket down to the tolerance.
      */
     public static RefinementEstimate assumed(GridSpec grid, int threads) {
         if (!grid.transitions().refine()) {
@@ -122,11 +152,19 @@ public record RefinementEstimate(long models, double seconds, String basis) {
         long perAge = (long) grid.metallicities().size() * grid.physics().size();
         long slices = perAge * grid.ages().values().size();
         long turnoffSlices = perAge * oldAges(grid);
-        long models = Math.round((slices * SEARCHES_PER_SLICE + turnoffSlices) * halvings);
+        long lithiumSlices = perAge * lithiumAges(grid);
+        double perSlice = searchesPerSlice(masses);
+        long models = Math.round((slices * perSlice + turnoffSlices + lithiumSlices) * halvings);
+        if (models == 0) {
+            return none("none expected (the grid's masses, " + MessageNumbers.format(masses.get(0)) + "-"
+                    + MessageNumbers.format(masses.get(masses.size() - 1)) + " Msun, reach none of the transitions)");
+        }
         double perModel = modelSeconds(grid);
-        return new RefinementEstimate(models, models * perModel / threads, MessageNumbers.format(SEARCHES_PER_SLICE)
-                + " searches per (Z, age, physics) slice" + (turnoffSlices == 0 ? ""
+        return new RefinementEstimate(models, models * perModel / threads, MessageNumbers.format(perSlice)
+                + (perSlice == 1.0 ? " search" : " searches") + " per (Z, age, physics) slice" + (turnoffSlices == 0 ? ""
                 : ", one more for the turn-off in " + Counts.of(turnoffSlices, "slice") + " old enough to have one")
+                + (lithiumSlices == 0 ? "" : ", one more for the lithium depletion boundary in "
+                + Counts.of(lithiumSlices, "slice") + " young enough to have one")
                 + ", " + Counts.of(halvings, "halving") + " of a "
                 + MessageNumbers.format(RunTimeEstimate.twoDigits(medianGap)) + " Msun bracket each, about "
                 + MessageNumbers.format(RunTimeEstimate.twoDigits(perModel)) + " s per model");
@@ -143,6 +181,35 @@ public record RefinementEstimate(long models, double seconds, String basis) {
         double heaviest = grid.massesMsun().stream().mapToDouble(Double::doubleValue).max().orElse(0.0);
         double lifetimeGyr = SOLAR_LIFETIME_GYR * Math.pow(heaviest, -LIFETIME_MASS_EXPONENT);
         return grid.ages().values().stream().filter(age -> age >= lifetimeGyr).count();
+    }
+
+    /** The searches of a slice whose masses are {@code masses} (increasing), by the transitions they reach. */
+    private static double searchesPerSlice(List<Double> masses) {
+        double lowest = masses.get(0);
+        double highest = masses.get(masses.size() - 1);
+        return (lowest <= FULLY_CONVECTIVE_HIGH_MSUN && highest >= FULLY_CONVECTIVE_LOW_MSUN
+                ? FULLY_CONVECTIVE_SEARCHES : 0.0)
+                + (lowest <= CORE_ONSET_HIGH_MSUN && highest >= CORE_ONSET_LOW_MSUN ? CORE_SEARCHES : 0.0);
+    }
+
+    /**
+     * The grid's ages at which its lowest star still keeps its lithium but a heavier one of its masses has burnt it
+     * ({@link #LITHIUM_GONE_AT_0_2_MSUN_MYR}), so that the slice has a lithium depletion boundary to refine; none when
+     * lithium is not followed (ages from the ZAMS, main-sequence fractions).
+     */
+    private static long lithiumAges(GridSpec grid) {
+        if (!grid.ages().evolves() || grid.ages().fractions() || grid.ages().origin() != AgeOrigin.BIRTH) {
+            return 0;
+        }
+        List<Double> masses = grid.massesMsun();
+        double lowestGoneGyr = lithiumGoneGyr(masses.get(0));
+        double fastestGoneGyr = lithiumGoneGyr(Math.min(masses.get(masses.size() - 1), LITHIUM_FASTEST_BURNER_MSUN));
+        return grid.ages().values().stream().filter(age -> age < lowestGoneGyr && age >= fastestGoneGyr).count();
+    }
+
+    /** Roughly when a star of {@code massMsun} from birth has burnt 99 % of its lithium, Gyr. */
+    static double lithiumGoneGyr(double massMsun) {
+        return 1e-3 * LITHIUM_GONE_AT_0_2_MSUN_MYR * Math.pow(massMsun / 0.2, -LITHIUM_MASS_EXPONENT);
     }
 
     /** One-thread seconds of one new model evolved from birth to {@code ageGyr}. */
