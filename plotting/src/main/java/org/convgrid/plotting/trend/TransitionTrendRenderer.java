@@ -29,6 +29,13 @@ public final class TransitionTrendRenderer {
 
     /** Sideways nudge between ages, dex of Z. */
     private static final double DODGE_DEX = 0.03;
+    /**
+     * The widest the nudges of all ages may spread one metallicity's markers, dex: within the room the axis leaves
+     * either side ({@link #Z_PAD}, 0.097 dex). A young cluster's grid with one Z and ten ages, nudged 0.03 dex apart,
+     * spread them over 0.27 dex: its youngest and oldest markers fell outside the plot, and a transient window of the
+     * oldest age was drawn over the legend.
+     */
+    private static final double MAX_SPREAD_DEX = 0.15;
     /** Room either side of a linear Z range (one holding Z = 0), as a share of it. */
     private static final double LINEAR_PAD_SHARE = 0.06;
     /** Grid (unrefined) markers are paler than refined ones, so the two read apart. */
@@ -202,7 +209,9 @@ public final class TransitionTrendRenderer {
 
     /**
      * Where a metallicity is drawn: nudged sideways per age (by {@link #DODGE_DEX} dex on a log axis, by the same
-     * share of the range on a linear one) so that markers of different ages do not hide each other.
+     * share of the range on a linear one, less when that would spread the ages wider than {@link #MAX_SPREAD_DEX}) so
+     * that markers of different ages do not hide each other; the ages with transient windows alone take places after
+     * the others'.
      *
      * @param ages the ages of the series, increasing: each one's colour and nudge
      * @param windowAges the ages of the transient windows; one with no series comes after the series' ages
@@ -222,7 +231,9 @@ public final class TransitionTrendRenderer {
         }
 
         double x(double z, int ageIndex) {
-            double offsetDex = DODGE_DEX * (ageIndex - (ages.size() - 1) / 2.0);
+            int slots = ages.size() + windowOnlyAges().size();
+            double step = slots > 1 ? Math.min(DODGE_DEX, MAX_SPREAD_DEX / (slots - 1)) : 0.0;
+            double offsetDex = step * (ageIndex - (slots - 1) / 2.0);
             if (inIron()) {
                 return ironByZ.get(z) + offsetDex;
             }

@@ -39,4 +39,26 @@ class NudgeNoteTest {
         TransitionAgeTrendData one = TransitionAgeTrend.build(PhysicsKey.of(oneZ.get(0).slice()), oneZ);
         assertThat(TransitionAgeTrendRenderer.placement(one).x(1.0, 0)).isEqualTo(1.0);
     }
+
+    @Test
+    void manyAgesStayInsideTheAxisRoomBesideTheirZ() {
+        // one Z and ten ages (a young cluster's grid): nudged 0.03 dex apart they spread over 0.27 dex and the
+        // outer ones fell off the plot, which leaves 0.097 dex either side of the Z
+        double[] ages = {0.005, 0.01, 0.015, 0.02, 0.025, 0.035, 0.05, 0.08, 0.125, 0.2};
+        List<TransitionRow> rows = transitions(new double[] {0.014}, ages);
+        TransitionTrendData data = TransitionTrend.build(PhysicsKey.of(rows.get(0).slice()), rows);
+        TransitionTrendRenderer.Placement at = TransitionTrendRenderer.placement(data);
+        int slots = at.ages().size() + at.windowOnlyAges().size();
+        assertThat(slots).isGreaterThan(6);
+        double room = Math.log10(1.25);
+        for (int i = 0; i < slots; i++) {
+            assertThat(Math.abs(Math.log10(at.x(0.014, i) / 0.014))).as("age slot " + i).isLessThan(room);
+        }
+        // three ages keep their 0.03 dex apart
+        List<TransitionRow> three = transitions(new double[] {0.014}, new double[] {0, 1, 4.57});
+        TransitionTrendRenderer.Placement few = TransitionTrendRenderer.placement(
+                TransitionTrend.build(PhysicsKey.of(three.get(0).slice()), three));
+        assertThat(Math.log10(few.x(0.014, 1) / few.x(0.014, 0))).isCloseTo(0.03, org.assertj.core.api.Assertions
+                .within(1e-12));
+    }
 }
