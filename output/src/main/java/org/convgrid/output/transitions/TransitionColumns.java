@@ -62,8 +62,9 @@ public final class TransitionColumns {
     /** The lowest model that keeps 1 % or less of its lithium above it. */
     public static final String LI_DEPLETION_BRACKET_HI_MSUN = "li_depletion_bracket_hi_msun";
     /**
-     * The luminosity of the model at {@link #LI_DEPLETION_BOUNDARY_MSUN}, solar units: the faintest luminosity at
-     * which the slice's stars have burnt their lithium, what a cluster's photometry locates.
+     * The luminosity of the model at {@link #LI_DEPLETION_BOUNDARY_MSUN}, solar units: the brightest star of the
+     * slice that still keeps its lithium (the faintest that has burnt it is the bracket's upper model, a refinement
+     * tolerance heavier), where a cluster's photometry locates the boundary.
      */
     public static final String LI_DEPLETION_BOUNDARY_LUMINOSITY_LSUN = "li_depletion_boundary_luminosity_lsun";
 

@@ -314,8 +314,12 @@ public final class ReportPage {
     /** The turn-off's cell in a slice none of whose models is past the main sequence. */
     static final String ALL_ON_THE_MAIN_SEQUENCE = "none: no star past the main sequence";
 
-    /** The lithium depletion boundary's cell in a slice every star of which keeps over 1 % of its lithium. */
-    static final String ALL_KEEP_LITHIUM = "none: every star keeps its lithium";
+    /**
+     * The lithium depletion boundary's cell in a slice every star of which keeps over 1 % of its lithium. Not "every
+     * star keeps its lithium": at 10 Myr a 0.5 Msun star keeping 5 % has burnt most of it, and a grid starting above
+     * 0.55 Msun has stars below its masses that have burnt theirs.
+     */
+    static final String ALL_KEEP_LITHIUM = "none: no star here has burnt 99 % of its lithium";
 
     private static void transitions(StringBuilder b, RunData run) {
         MetallicityNames names = run.metallicityNames();
