@@ -28,6 +28,9 @@ final class LithiumDepletionBoundary {
 
     private static final Predicate<CatalogueRow> KEEPS_LITHIUM = LithiumDepletionBoundary::keepsLithium;
 
+    /** The words of the note of a slice whose lowest mass has burnt its lithium, by which a chart finds it. */
+    static final String BELOW_GRID_WORDS = "the lithium depletion boundary lies below it";
+
     private LithiumDepletionBoundary() {
     }
 
@@ -73,7 +76,7 @@ final class LithiumDepletionBoundary {
         if (!boundary.found() && !keepsLithium(searched.get(0))) {
             notes.add("lithium below " + Math.round(100.0 * DEPLETED_LI_REL) + " % of its birth value already at the "
                     + "lowest usable mass (" + MassRangeText.of(new Span(searched.get(0).massMsun(),
-                    searched.get(0).massMsun())) + " Msun): the lithium depletion boundary lies below it");
+                    searched.get(0).massMsun())) + " Msun): " + BELOW_GRID_WORDS);
         }
         if (boundary.skippedInBracket() > 0) {
             notes.add("lithium depletion bracket widened past " + SkippedModelsText.of(byMass, boundary.bracket()));

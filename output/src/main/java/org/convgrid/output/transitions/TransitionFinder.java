@@ -109,6 +109,11 @@ public record TransitionFinder(double coreMassFractionThreshold) {
     public static final String COOL_CORES_CAUSE = "out-of-equilibrium burning drives them (3He on the main sequence, "
             + "12C before it)";
 
+    /** Whether a slice's notes say that its lowest mass has burnt its lithium (the boundary lies below the grid). */
+    public static boolean notesLithiumBelowGrid(String notes) {
+        return notes != null && notes.contains(LithiumDepletionBoundary.BELOW_GRID_WORDS);
+    }
+
     /** Whether a slice's notes say that cores above its onset are too cool for the CNO cycle. */
     public static boolean notesCoolCores(String notes) {
         return notes != null && notes.contains(COOL_CORES_WORDS);

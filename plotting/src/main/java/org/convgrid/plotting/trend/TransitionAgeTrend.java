@@ -40,7 +40,9 @@ public final class TransitionAgeTrend {
                 zs);
         List<Double> ages = mine.stream().map(r -> r.slice().ageGyr()).distinct().sorted().toList();
         List<TransientWindow> windows = mine.stream().flatMap(r -> TransientWindow.allOf(r).stream()).toList();
-        return new TransitionAgeTrendData(physics, ages, zs, series, windows, coolCoreCaveats(mine, names));
+        List<String> caveats = new ArrayList<>(coolCoreCaveats(mine, names));
+        caveats.addAll(lithiumBelowGridCaveats(mine, series, names));
+        return new TransitionAgeTrendData(physics, ages, zs, series, windows, caveats);
     }
 
     /**
@@ -68,6 +70,36 @@ public final class TransitionAgeTrend {
                 + "cycle gives under " + TransitionFinder.COOL_CORE_SHARE_WORDS + " of the energy, "
                 + TransitionFinder.COOL_CORES_WORDS
                 + ": " + TransitionFinder.COOL_CORES_CAUSE + "; see the notes of transitions.csv.");
+    }
+
+    /**
+     * One sentence naming the ages at which the lithium depletion boundary lies below the grid's lowest mass (every
+     * star has burnt its lithium), where the chart's boundary line stops; only when the chart draws a boundary
+     * somewhere, each age once when every metallicity has it there, else per metallicity.
+     */
+    static List<String> lithiumBelowGridCaveats(List<TransitionRow> rows, List<TransitionAgeTrendData.Series> drawn,
+                                                MetallicityNames names) {
+        if (drawn.stream().noneMatch(s -> s.kind() == TransitionMarker.Kind.LITHIUM_DEPLETION_BOUNDARY)) {
+            return List.of();
+        }
+        java.util.Map<Double, List<Double>> agesByZ = new java.util.TreeMap<>();
+        rows.stream().filter(r -> TransitionFinder.notesLithiumBelowGrid(r.notes()))
+                .sorted(Comparator.comparingDouble((TransitionRow r) -> r.slice().ageGyr()))
+                .forEach(r -> agesByZ.computeIfAbsent(r.slice().zInit(), z -> new ArrayList<>()).add(r.slice().ageGyr()));
+        if (agesByZ.isEmpty()) {
+            return List.of();
+        }
+        long zs = rows.stream().map(r -> r.slice().zInit()).distinct().count();
+        boolean same = agesByZ.size() == zs && agesByZ.values().stream().distinct().count() == 1;
+        String where = same ? ages(agesByZ.values().iterator().next())
+                : String.join("; ", agesByZ.entrySet().stream().map(e -> ages(e.getValue()) + " ("
+                + names.of(e.getKey()) + ")").toList());
+        return List.of("Lithium depletion boundary below the lowest mass at " + where + ": every star there has burnt "
+                + "99 % of its lithium.");
+    }
+
+    private static String ages(List<Double> agesGyr) {
+        return String.join(", ", agesGyr.stream().map(SliceLabels::age).toList());
     }
 
     private static void addAll(List<TransitionAgeTrendData.Series> out, TransitionMarker.Kind kind,

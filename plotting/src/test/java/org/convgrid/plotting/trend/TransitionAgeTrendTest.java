@@ -139,4 +139,24 @@ class TransitionAgeTrendTest {
                 new TransientWindow(z, age, new Span(0.326562, 0.575)), new TransientWindow(z, age, new Span(0.7, 0.7)));
         assertThat(TransitionTrend.build(PhysicsKey.of(rows.get(0)), withWindows).windows()).hasSize(3);
     }
+
+    @Test
+    void theAgesWhoseLithiumBoundaryLiesBelowTheGridAreNamedWhereTheLineStops() {
+        // synthetic lithium (invented, the shape of young tracks): at 0.02 Gyr the stars below 0.3 Msun keep it and
+        // 0.3-1 Msun have burnt it; at 0.15 and 0.6 Gyr every star below 1 Msun has burnt it
+        List<CatalogueRow> rows = TestRuns.rows(TestRuns.masses(0.1, 2.0, 12), new double[] {0.008, 0.02},
+                new double[] {0.02, 0.15, 0.6}).stream().map(r -> r.toBuilder().surfaceLiRel(
+                        r.massMsun() >= 1.0 ? 0.6 : r.ageGyr() < 0.05 && r.massMsun() < 0.3 ? 0.9 : 1e-4).build())
+                .toList();
+        List<TransitionRow> transitions = TransitionFinder.withDefaults().find(rows);
+        TransitionAgeTrendData data = TransitionAgeTrend.build(PhysicsKey.of(rows.get(0)), transitions);
+        assertThat(data.series()).anyMatch(s -> s.kind() == TransitionMarker.Kind.LITHIUM_DEPLETION_BOUNDARY);
+        // both Z at both ages: the ages once
+        assertThat(data.caveats()).contains("Lithium depletion boundary below the lowest mass at 150 Myr, 600 Myr: "
+                + "every star there has burnt 99 % of its lithium.");
+        // a chart that draws no boundary says nothing about one
+        List<TransitionRow> old = transitions.stream().filter(t -> t.slice().ageGyr() > 0.1).toList();
+        assertThat(TransitionAgeTrend.build(PhysicsKey.of(rows.get(0)), old).caveats())
+                .noneMatch(c -> c.startsWith("Lithium"));
+    }
 }
