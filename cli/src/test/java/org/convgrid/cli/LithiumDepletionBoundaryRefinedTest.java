@@ -12,8 +12,6 @@ import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.output.transitions.TransitionReader;
 import org.convgrid.output.transitions.TransitionRow;
-import org.convgrid.survey.ProductionSolvers;
-import org.convgrid.survey.refine.SolverMassLines;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -38,9 +36,7 @@ class LithiumDepletionBoundaryRefinedTest {
     @Test
     void theBoundaryIsRefinedBetweenAStarKeepingItsLithiumAndOneThatBurntIt() throws Exception {
         Path grid = CliHarness.writeGrid(work, "young.yaml", GRID);
-        CliHarness plain = CliHarness.in(work, FakeChunkSolver.fast());
-        CliHarness real = plain.with(plain.context().withSolvers(ProductionSolvers.factory())
-                .withLines(SolverMassLines.production()));
+        CliHarness real = CliHarness.real(work);
         CliHarness.Execution done = real.execute("run", grid.toString(), "--out", "young");
         assertThat(done.code()).as(done.err()).isZero();
         Path dir = work.resolve("young");

@@ -13,8 +13,6 @@ import org.convgrid.output.transitions.TransitionColumns;
 import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.output.transitions.TransitionReader;
 import org.convgrid.output.transitions.TransitionRow;
-import org.convgrid.survey.ProductionSolvers;
-import org.convgrid.survey.refine.SolverMassLines;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -39,9 +37,7 @@ class RealSolverTransitionsTest {
 
     private Path run(String out, int threads) throws Exception {
         Path grid = CliHarness.writeGrid(work, "at-an-age.yaml", GRID);
-        CliHarness plain = CliHarness.in(work, FakeChunkSolver.fast());
-        CliHarness real = plain.with(plain.context().withSolvers(ProductionSolvers.factory())
-                .withLines(SolverMassLines.production()));
+        CliHarness real = CliHarness.real(work);
         CliHarness.Execution done = real.execute("run", grid.toString(), "--out", out, "--threads",
                 Integer.toString(threads));
         assertThat(done.code()).as(done.err()).isZero();

@@ -13,8 +13,6 @@ import org.convgrid.output.transitions.RefinedModelIds;
 import org.convgrid.output.transitions.TransitionMethod;
 import org.convgrid.output.transitions.TransitionReader;
 import org.convgrid.output.transitions.TransitionRow;
-import org.convgrid.survey.ProductionSolvers;
-import org.convgrid.survey.refine.SolverMassLines;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -41,9 +39,7 @@ class TurnoffLiteratureTest {
     @Test
     void theTurnoffOfAnOldMetalPoorPopulationIsNearEightTenthsOfASolarMass() throws Exception {
         Path grid = CliHarness.writeGrid(work, "old-metal-poor.yaml", GRID);
-        CliHarness plain = CliHarness.in(work, FakeChunkSolver.fast());
-        CliHarness real = plain.with(plain.context().withSolvers(ProductionSolvers.factory())
-                .withLines(SolverMassLines.production()));
+        CliHarness real = CliHarness.real(work);
         CliHarness.Execution done = real.execute("run", grid.toString(), "--out", "old", "--threads", "2");
         // models past the main sequence are answers here, not failures: the exit code stays 0
         assertThat(done.code()).as(done.err()).isZero();
