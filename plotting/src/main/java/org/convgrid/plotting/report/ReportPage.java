@@ -314,6 +314,11 @@ public final class ReportPage {
     /** The turn-off's cell in a slice none of whose models is past the main sequence. */
     static final String ALL_ON_THE_MAIN_SEQUENCE = "none: no star past the main sequence";
 
+    /** What the lithium depletion boundary's columns mean, above the table when it has them. */
+    static final String LITHIUM_BOUNDARY_CAPTION = "Lithium depletion boundary: the highest mass that keeps over 1 % of "
+            + "its birth lithium below the stars that have burnt 99 % of it; its luminosity is that star's, the "
+            + "brightest that still shows lithium.";
+
     /**
      * The lithium depletion boundary's cell in a slice every star of which keeps over 1 % of its lithium. Not "every
      * star keeps its lithium": at 10 Myr a 0.5 Msun star keeping 5 % has burnt most of it, and a grid starting above
@@ -345,7 +350,11 @@ public final class ReportPage {
                 .filter(r -> r.isOk() && !Double.isNaN(r.surfaceLiRel()))
                 .collect(java.util.stream.Collectors.toMap(Slice::of, r -> r,
                         (a, c) -> a.massMsun() <= c.massMsun() ? a : c));
-        b.append("<h2 id=\"transitions\">Transition masses</h2>\n<table>\n<tr>" + ironHeading(names)
+        b.append("<h2 id=\"transitions\">Transition masses</h2>\n");
+        if (lithium) {
+            b.append("<p>").append(Html.escape(LITHIUM_BOUNDARY_CAPTION)).append("</p>\n");
+        }
+        b.append("<table>\n<tr>" + ironHeading(names)
                 + "<th>Z</th><th>age</th><th>physics</th>"
                 + "<th>fully convective up to / M\u2609</th><th>bracket / M\u2609</th>"
                 + "<th>core in every star above / M\u2609</th><th>bracket / M\u2609</th>"
