@@ -170,7 +170,7 @@ class ReportPageTest {
         assertThat(html).contains("<th>lithium depletion boundary / M\u2609</th><th>bracket / M\u2609</th>"
                 + "<th>its luminosity / L\u2609</th>");
         assertThat(html).contains("below 0.1: burnt at the lowest mass");
-        assertThat(html).contains(ReportPage.LITHIUM_BOUNDARY_CAPTION);
+        assertThat(html).contains(Html.escape(ReportPage.LITHIUM_BOUNDARY_CAPTION));
         // every star of the 0.005 Gyr slice keeps its lithium, which its cell says instead of "not found"
         assertThat(html.split(ReportPage.ALL_KEEP_LITHIUM, -1)).hasSize(2);
         TransitionRow young = TransitionFinder.withDefaults().find(rows).stream()
@@ -184,6 +184,6 @@ class ReportPageTest {
     void aGridWithoutLithiumHasNoColumnForIt(@TempDir Path dir) throws Exception {
         TestRuns.write(dir, TestRuns.rows(TestRuns.masses(0.1, 2.0, 12), new double[] {0.014}, new double[] {0}));
         assertThat(Files.readString(ReportPage.write(dir))).doesNotContain("lithium depletion boundary")
-                .doesNotContain(ReportPage.LITHIUM_BOUNDARY_CAPTION);
+                .doesNotContain(Html.escape(ReportPage.LITHIUM_BOUNDARY_CAPTION));
     }
 }
