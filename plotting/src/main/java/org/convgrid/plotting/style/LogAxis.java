@@ -26,6 +26,8 @@ public final class LogAxis {
         "2", "2.2", "2.4", "2.6", "2.8", "3", "4", "5", "6", "7", "8", "9"};
     /** An axis spanning less than this factor gets the fine labels. */
     private static final double NARROW_RANGE = 3.0;
+    /** The largest share of a log axis, at either end, left without a label before finer labels are added there. */
+    private static final double BARE_END_SHARE = 0.25;
     /** Fewer round values than this inside an axis, and every mantissa is offered as a label. */
     private static final int FEWEST_LABELS = 3;
     private static final Color TRANSPARENT = new Color(0, 0, 0, 0);
@@ -99,10 +101,30 @@ public final class LogAxis {
         }
         List<Double> round = roundValues(min, max);
         if (round.size() >= FEWEST_LABELS) {
-            return round;
+            return withEndsLabelled(round, min, max);
         }
         List<Double> every = valuesWith(EVERY_MANTISSA, min, max);
-        return every.size() >= FEWEST_LABELS ? every : valuesWith(FINE_MANTISSAS, min, max);
+        return every.size() >= FEWEST_LABELS ? withEndsLabelled(every, min, max)
+                : valuesWith(FINE_MANTISSAS, min, max);
+    }
+
+    /**
+     * {@code ticks} with {@link #FINE_MANTISSAS} values added at an end of the range that holds none of them over more
+     * than {@link #BARE_END_SHARE} of the range (in log): a 0.5-1.4 Msun axis was labelled 0.5, 0.6, ..., 0.9, 1 and
+     * nothing above 1, a third of its width, where its F stars lie.
+     */
+    private static List<Double> withEndsLabelled(List<Double> ticks, double min, double max) {
+        double range = Math.log10(max / min);
+        double first = ticks.get(0);
+        double last = ticks.get(ticks.size() - 1);
+        List<Double> out = new ArrayList<>(ticks);
+        if (Math.log10(max / last) > BARE_END_SHARE * range) {
+            valuesWith(FINE_MANTISSAS, min, max).stream().filter(v -> v > last).forEach(out::add);
+        }
+        if (Math.log10(first / min) > BARE_END_SHARE * range) {
+            valuesWith(FINE_MANTISSAS, min, max).stream().filter(v -> v < first).forEach(out::add);
+        }
+        return out.stream().sorted().toList();
     }
 
     private static List<Double> valuesWith(String[] mantissas, double min, double max) {

@@ -6,8 +6,11 @@ package org.convgrid.plotting.style;
  */
 public final class MassAxis {
 
-    /** Axis title with unit. */
-    public static final String TITLE = "stellar mass M / M\u2609";
+    /**
+     * Axis title with unit, saying the axis is logarithmic as the age axes do: a 0.5-1.4 Msun chart's unequal steps
+     * between its labels otherwise read as a linear axis drawn wrong.
+     */
+    public static final String TITLE = "stellar mass M / M\u2609 (logarithmic)";
 
     private MassAxis() {
     }

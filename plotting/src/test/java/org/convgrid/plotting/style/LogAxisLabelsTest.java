@@ -29,4 +29,12 @@ class LogAxisLabelsTest {
         // 1.2-2.4 Msun by 0.2 (the columns' outer edges 1.1 and 2.6): 2.2 and 2.4 were left without a label
         assertThat(LogAxis.labelValues(1.1, 2.62)).contains(2.2, 2.4);
     }
+
+    @Test
+    void anEndOfTheRangeWithoutALabelGetsFinerOnes() {
+        // 0.5-1.4 Msun by 0.1 (outer edges 0.45 and 1.45): labelled 0.5 ... 0.9, 1 and nothing over its F stars above
+        assertThat(LogAxis.labelValues(0.45, 1.45)).contains(0.5, 0.9, 1.0, 1.2, 1.4);
+        // the demo's axis keeps its round values alone: no end is bare
+        assertThat(LogAxis.labelValues(0.18, 2.2)).containsExactly(0.2, 0.3, 0.5, 1.0, 2.0);
+    }
 }
