@@ -14,6 +14,7 @@ import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.request.OvershootScheme;
 import org.convgrid.engine.request.PhysicsOptions;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
+import org.convgrid.grids.yaml.PhysicsPreset;
 import org.convgrid.engine.convection.StabilityCriterion;
 import org.convgrid.engine.state.Composition;
 import org.convgrid.engine.structure.StellarModel;
@@ -108,9 +109,17 @@ final class StarCommand implements Callable<Integer> {
                     + "zero-age main-sequence model).")
     String ageOrigin;
 
-    @Option(names = "--mixing-length", defaultValue = "1.8", paramLabel = "ALPHA",
-            description = "Mixing length, pressure scale heights (default ${DEFAULT-VALUE}).")
-    double mixingLength;
+    /** Null when not given: the grid's default ({@link PhysicsOptions#DEFAULT}), or the preset's. */
+    @Option(names = "--mixing-length", paramLabel = "ALPHA",
+            description = "Mixing length, pressure scale heights (default 1.8, or the --preset's).")
+    Double mixingLength;
+
+    /** Null when not given: the defaults of --mixing-length and --atmosphere. */
+    @Option(names = "--preset", paramLabel = "FILE",
+            description = "Take the mixing length and its atmosphere from a physics preset written by calibrate-sun "
+                    + "(e.g. calibrated-sun.yaml), as the grid key physics: {preset: FILE} does; not with "
+                    + "--mixing-length or --atmosphere.")
+    Path preset;
 
     @Option(names = "--criterion", defaultValue = "schwarzschild", paramLabel = "schwarzschild|ledoux",
             description = "Convective stability criterion (default ${DEFAULT-VALUE}).")
@@ -141,8 +150,9 @@ final class StarCommand implements Callable<Integer> {
                     + "conduction added.")
     Path opacityTable;
 
-    @Option(names = "--atmosphere", defaultValue = "krishna_swamy", paramLabel = "eddington|krishna_swamy",
-            description = "Grey T(tau) relation of the surface boundary (default ${DEFAULT-VALUE}).")
+    /** Null when not given: krishna_swamy, or the preset's. */
+    @Option(names = "--atmosphere", paramLabel = "eddington|krishna_swamy",
+            description = "Grey T(tau) relation of the surface boundary (default krishna_swamy, or the --preset's).")
     AtmosphereChoice atmosphere;
 
     @Option(names = "--profile", paramLabel = "FILE",
@@ -347,9 +357,26 @@ final class StarCommand implements Callable<Integer> {
             throw new UsageException("--z must be at least 0 and below 0.1 (got " + MessageNumbers.format(metals)
                     + ")");
         }
-        if (!(mixingLength > 0 && mixingLength < 10)) {
+        if (preset != null && (mixingLength != null || atmosphere != null)) {
+            // the preset's mixing length belongs to its atmosphere: one of them changed alone is another physics
+            throw new UsageException("--preset sets the mixing length and its atmosphere; give --preset or "
+                    + (mixingLength != null ? "--mixing-length" : "--atmosphere") + ", not both");
+        }
+        double alpha = mixingLength != null ? mixingLength : PhysicsOptions.DEFAULT.mixingLength();
+        AtmosphereChoice surface = atmosphere != null ? atmosphere : AtmosphereChoice.DEFAULT;
+        if (preset != null) {
+            try {
+                PhysicsPreset read = PhysicsPreset.read(main.context().resolve(preset));
+                alpha = read.mixingLength();
+                surface = read.atmosphere() != null ? read.atmosphere() : surface;
+            } catch (ConvgridException e) {
+                // a file that is not a preset is bad input, as the same file named in a grid is
+                throw new UsageException("--preset: " + e.getMessage());
+            }
+        }
+        if (!(alpha > 0 && alpha < 10)) {
             throw new UsageException("--mixing-length must be above 0 and below 10 pressure scale heights (got "
-                    + MessageNumbers.format(mixingLength) + ")");
+                    + MessageNumbers.format(alpha) + ")");
         }
         if (!(opacityScale > 0 && opacityScale <= 100)) {
             throw new UsageException("--opacity-scale must be above 0 and at most 100 (got "
@@ -383,6 +410,6 @@ final class StarCommand implements Callable<Integer> {
             throw new UsageException("--overshoot-hp must be at least 0 pressure scale heights (got "
                     + MessageNumbers.format(length) + ")");
         }
-        return new PhysicsOptions(mixingLength, length, criterion, opacityScale, table, atmosphere, scheme);
+        return new PhysicsOptions(alpha, length, criterion, opacityScale, table, surface, scheme);
     }
 }

@@ -89,6 +89,31 @@ class StarCommandTest {
     }
 
     @Test
+    void aPresetGivesItsMixingLengthAndAtmosphereAsTheTwoOptionsWould() throws Exception {
+        Files.writeString(dir.resolve("p.yaml"), "mixing_length: 2.0\natmosphere: eddington\n");
+        assertThat(run("star", "--mass", "1", "--z", "0.02", "--format", "csv", "--preset", "p.yaml"))
+                .as(err.toString()).isZero();
+        String withPreset = out.toString();
+        out.getBuffer().setLength(0);
+        assertThat(run("star", "--mass", "1", "--z", "0.02", "--format", "csv", "--mixing-length", "2.0",
+                "--atmosphere", "eddington")).as(err.toString()).isZero();
+        assertThat(withPreset).isEqualTo(out.toString());
+        String[] lines = withPreset.lines().filter(l -> !l.startsWith("#")).toArray(String[]::new);
+        int alpha = Arrays.asList(lines[0].split(",")).indexOf(CatalogueColumns.MIXING_LENGTH);
+        assertThat(lines[1].split(",", -1)[alpha]).isEqualTo("2.0");
+        // the preset's mixing length belongs to its atmosphere: either one given beside it is refused
+        assertThat(run("star", "--mass", "1", "--z", "0.02", "--preset", "p.yaml", "--atmosphere", "eddington"))
+                .isEqualTo(2);
+        assertThat(err.toString()).contains("give --preset or --atmosphere, not both");
+        // a file that is not a preset, and one that is not there
+        assertThat(run("star", "--mass", "1", "--z", "0.02", "--preset", "p.csv")).isEqualTo(2);
+        assertThat(err.toString()).contains("--preset: cannot read").contains("p.csv");
+        Files.writeString(dir.resolve("grid.yaml"), "mass: {values: [1]}\n");
+        assertThat(run("star", "--mass", "1", "--z", "0.02", "--preset", "grid.yaml")).isEqualTo(2);
+        assertThat(err.toString()).contains("unknown key 'mass' in the preset");
+    }
+
+    @Test
     void impossibleRequestsAreUsageErrors() {
         assertThat(run("star", "--mass", "-1", "--z", "0.02")).isEqualTo(2);
         assertThat(run("star", "--mass", "1", "--z", "0.02", "--age-gyr", "-1")).isEqualTo(2);

@@ -51,7 +51,7 @@ final class PhysicsReader {
         List<Double> alphas = fields.has("mixing_length")
                 ? AxisValues.distinctNamed(fields.value("mixing_length"), "mixing_length", POSITIVE, reader)
                 : List.of(d.mixingLength());
-        PresetReader.Preset preset = null;
+        PhysicsPreset preset = null;
         if (fields.has("preset")) {
             preset = PresetReader.read(fields.value("preset"), reader);
             if (fields.has("mixing_length")) {

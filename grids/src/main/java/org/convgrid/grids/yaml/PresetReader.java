@@ -30,15 +30,11 @@ final class PresetReader {
     private PresetReader() {
     }
 
-    /** What a preset sets: the mixing length, and the atmosphere it belongs to (null when the preset names none). */
-    record Preset(double mixingLength, AtmosphereChoice atmosphere) {
-    }
-
     /** Largest preset file read, bytes (a preset is a few lines). */
     public static final long MAX_FILE_BYTES = 64L * 1024;
 
     /** The preset, or null when it has problems (recorded at {@code node}). */
-    static Preset read(Node node, NodeReader reader) {
+    static PhysicsPreset read(Node node, NodeReader reader) {
         String name = reader.text(node, "preset");
         if (name == null) {
             return null;
@@ -66,14 +62,15 @@ final class PresetReader {
             return null;
         }
         NodeReader inner = new NodeReader(file.toString());
-        Preset preset = parse(text, inner);
+        PhysicsPreset preset = parse(text, inner);
         for (GridProblem p : inner.problems()) {
             reader.problem(node, p.kind(), "preset " + p);
         }
         return inner.problems().isEmpty() ? preset : null;
     }
 
-    private static Preset parse(String text, NodeReader inner) {
+    /** The preset in {@code text}, or null when it has problems (recorded in {@code inner}). */
+    static PhysicsPreset parse(String text, NodeReader inner) {
         Optional<Node> root;
         try {
             LoadSettings settings = LoadSettings.builder().setLabel(inner.file()).setMaxAliasesForCollections(0)
@@ -126,6 +123,6 @@ final class PresetReader {
                 return null;
             }
         }
-        return alpha == null ? null : new Preset(alpha.get(0), atmosphere);
+        return alpha == null ? null : new PhysicsPreset(alpha.get(0), atmosphere);
     }
 }
