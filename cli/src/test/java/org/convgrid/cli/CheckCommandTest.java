@@ -90,13 +90,13 @@ class CheckCommandTest {
     void theRefinementAfterTheSweepIsEstimatedApart() throws Exception {
         CliHarness cli = CliHarness.in(work, FakeChunkSolver.fast());
         // one slice (one Z, one age, one physics), one 1 Msun bracket halved 9 times to 0.002 Msun (2^9 = 512 >
-        // 500); 1-2 Msun reach the core onset but not the fully convective limit: 1.5 searches x 9 = 13.5, 14 new
-        // zero-age models at 0.05 s each on 1 thread: 0.7 s
+        // 500); 1-2 Msun reach the core onset but not the fully convective limit with its window: 1 search x 9, 9
+        // new zero-age models (a run added 9) at 0.05 s each on 1 thread: 0.45 s
         Path zeroAge = CliHarness.writeGrid(work, "zams.yaml",
                 "mass: {values: [1.0, 2.0]}\nmetallicity: {z: 0.014, y: 0.27}\nage: {gyr: [0], origin: zams}\n");
         assertThat(cli.execute("check", zeroAge.toString(), "--threads", "1").out())
-                .contains("refinement:    about 14 new models after them to narrow the transition masses, about 1 s"
-                        + " more (1.5 searches per (Z, age, physics) slice, 9 halvings of a 1 Msun bracket each,"
+                .contains("refinement:    about 9 new models after them to narrow the transition masses, about 1 s"
+                        + " more (1 search per (Z, age, physics) slice, 9 halvings of a 1 Msun bracket each,"
                         + " about 0.05 s per model; run --no-refine skips them)");
         // the demo's shape from birth: 3 Z x 3 ages, 0.2 Msun brackets halved 7 times (2^7 = 128 > 100):
         // 9 x 2.5 x 7 = 157.5, and at 20 Myr (before 0.2 Msun burns its lithium at ~31 Myr, after 0.6 Msun at ~7)
@@ -108,15 +108,20 @@ class CheckCommandTest {
         assertThat(cli.execute("check", birth.toString(), "--threads", "2").out())
                 .contains("about 179 new models after them").contains("about 27 s more")
                 .contains("one more for the lithium depletion boundary in 3 slices young enough to have one");
-        // a young cluster's low masses: 0.1-0.6 Msun reach the fully convective limit only (1 search), and every age
-        // from 10 to 70 Myr has a lithium depletion boundary among them (0.1 Msun keeps its lithium to ~76 Myr):
-        // 14 slices x 2 x 5 halvings = 140 (a run of it added 134)
+        // a young cluster's low masses: 0.1-0.6 Msun reach the fully convective limit only (1.5 searches with its
+        // window, which such young stars lack), and every age from 10 to 70 Myr has a lithium depletion boundary
+        // among them (0.1 Msun keeps its lithium to ~76 Myr): 14 slices x 2.5 x 5 halvings = 175 (a run added 134)
         Path young = CliHarness.writeGrid(work, "young.yaml", "mass: {from: 0.1, to: 0.6, step: 0.05}\n"
                 + "metallicity: {z: [0.014, 0.02], helium: {primordial: 0.2471, enrichment: 1.5}}\n"
                 + "age: {myr: [10, 15, 20, 30, 40, 50, 70]}\n");
         assertThat(cli.execute("check", young.toString(), "--threads", "2").out())
-                .contains("about 140 new models after them").contains("(1 search per (Z, age, physics) slice, one "
-                        + "more for the lithium depletion boundary in 14 slices young enough to have one");
+                .contains("about 175 new models after them").contains("(1.5 searches per (Z, age, physics) slice, "
+                        + "one more for the lithium depletion boundary in 14 slices young enough to have one");
+        // below the fully convective limit's masses, the lithium depletion boundary alone: no per-slice searches
+        Path lowest = CliHarness.writeGrid(work, "lowest.yaml", "mass: {values: [0.1, 0.2]}\n"
+                + "metallicity: {z: [0.02], helium: {primordial: 0.2471, enrichment: 1.5}}\nage: {myr: [40]}\n");
+        assertThat(cli.execute("check", lowest.toString(), "--threads", "1").out())
+                .contains("(one for the lithium depletion boundary in 1 slice young enough to have one, 6 halvings");
         // masses that reach no transition: nothing to refine
         Path heavy = CliHarness.writeGrid(work, "heavy.yaml",
                 "mass: {values: [2.0, 3.0]}\nmetallicity: {z: 0.014, y: 0.27}\nage: {gyr: [0], origin: zams}\n");

@@ -50,8 +50,9 @@ class LithiumDepletionBoundaryRefinedTest {
         assertThat(t.lithiumDepletion().boundary().massMsun()).isEqualTo(bracket.lo());
         // Baraffe et al. 2015 (A&A 577, A42), their tracks near 25 Myr (the rows shipped in the engine's test
         // resources, reference/premainsequence/baraffe2015-tracks-subset.csv): 0.2 Msun keeps its lithium (log Li/Li0
-        // -0.32 at 23.9 Myr, -2.18 only at 30.1 Myr), 0.3 Msun has burnt it (-6.75 at 30.4 Myr, -0.34 already at
-        // 15.8 Myr), so their boundary at 25 Myr lies between 0.2 and 0.3 Msun; ours must too
+        // -0.32 at 23.9 Myr, -2.18 only at 30.1 Myr), 0.3 Msun has burnt it (about -4.8 at 25 Myr, interpolated in
+        // log age between -0.34 at 15.8 Myr and -6.75 at 30.4 Myr), so their boundary at 25 Myr lies between 0.2 and
+        // 0.3 Msun; ours must too
         assertThat(bracket.lo()).isGreaterThanOrEqualTo(0.2);
         assertThat(bracket.hi()).isLessThanOrEqualTo(0.3);
 

@@ -14,6 +14,10 @@ public final class Durations {
             return "unknown time";
         }
         long s = Math.round(seconds);
+        if (s == 0 && seconds > 0) {
+            // every caller says "about": "about 0 s" for an estimate of 0.45 s read as nothing to do
+            return "1 s";
+        }
         if (s < 60) {
             return s + " s";
         }

@@ -32,9 +32,12 @@ public record RefinementEstimate(long models, double seconds, String basis) {
      * two gets {@link #FULLY_CONVECTIVE_SEARCHES} or {@link #CORE_SEARCHES} alone.
      */
     static final double SEARCHES_PER_SLICE = 2.5;
-    /** The fully convective limit's share of {@link #SEARCHES_PER_SLICE}: one search. */
-    static final double FULLY_CONVECTIVE_SEARCHES = 1.0;
-    /** The core onset's and its windows' share of {@link #SEARCHES_PER_SLICE}. */
+    /**
+     * The fully convective limit's share of {@link #SEARCHES_PER_SLICE}, with the window of small cores just above it
+     * (half a search on average: not every slice has one).
+     */
+    static final double FULLY_CONVECTIVE_SEARCHES = 1.5;
+    /** The core onset's share of {@link #SEARCHES_PER_SLICE}: one search (a zero-age 1-2 Msun grid added 9 models). */
     static final double CORE_SEARCHES = SEARCHES_PER_SLICE - FULLY_CONVECTIVE_SEARCHES;
     /**
      * Masses, Msun, between which the fully convective limit lies at the ages a grid asks for (ours: 0.25 Msun at 70
@@ -60,6 +63,12 @@ public record RefinementEstimate(long models, double seconds, String basis) {
      * stars burn theirs no sooner (ours: 0.6 Msun at 10-13 Myr, 0.8 Msun at 20 Myr at Z = 0.02, none at Z = 0.008).
      */
     static final double LITHIUM_FASTEST_BURNER_MSUN = 0.6;
+    /**
+     * The earliest age, Myr, at which any star from birth has burnt 99 % of its lithium (ours: 10.0 Myr, 0.6 Msun at
+     * Z = 0.02; 11.1 Myr, 0.5 Msun at Z = 0.014): the scaling above, fitted at 0.15-0.45 Msun, gives 7.4 Myr at 0.6
+     * Msun, too early.
+     */
+    static final double EARLIEST_LITHIUM_GONE_MYR = 10.0;
 
     /**
      * One-thread seconds of one new model whose star is evolved from birth to its slice's age. Measured (one quiet
@@ -160,11 +169,20 @@ public record RefinementEstimate(long models, double seconds, String basis) {
                     + MessageNumbers.format(masses.get(masses.size() - 1)) + " Msun, reach none of the transitions)");
         }
         double perModel = modelSeconds(grid);
-        return new RefinementEstimate(models, models * perModel / threads, MessageNumbers.format(perSlice)
-                + (perSlice == 1.0 ? " search" : " searches") + " per (Z, age, physics) slice" + (turnoffSlices == 0 ? ""
-                : ", one more for the turn-off in " + Counts.of(turnoffSlices, "slice") + " old enough to have one")
-                + (lithiumSlices == 0 ? "" : ", one more for the lithium depletion boundary in "
-                + Counts.of(lithiumSlices, "slice") + " young enough to have one")
+        List<String> searches = new ArrayList<>();
+        if (perSlice > 0) {
+            searches.add(MessageNumbers.format(perSlice) + (perSlice == 1.0 ? " search" : " searches")
+                    + " per (Z, age, physics) slice");
+        }
+        if (turnoffSlices > 0) {
+            searches.add((searches.isEmpty() ? "one" : "one more") + " for the turn-off in "
+                    + Counts.of(turnoffSlices, "slice") + " old enough to have one");
+        }
+        if (lithiumSlices > 0) {
+            searches.add((searches.isEmpty() ? "one" : "one more") + " for the lithium depletion boundary in "
+                    + Counts.of(lithiumSlices, "slice") + " young enough to have one");
+        }
+        return new RefinementEstimate(models, models * perModel / threads, String.join(", ", searches)
                 + ", " + Counts.of(halvings, "halving") + " of a "
                 + MessageNumbers.format(RunTimeEstimate.twoDigits(medianGap)) + " Msun bracket each, about "
                 + MessageNumbers.format(RunTimeEstimate.twoDigits(perModel)) + " s per model");
@@ -203,7 +221,8 @@ public record RefinementEstimate(long models, double seconds, String basis) {
         }
         List<Double> masses = grid.massesMsun();
         double lowestGoneGyr = lithiumGoneGyr(masses.get(0));
-        double fastestGoneGyr = lithiumGoneGyr(Math.min(masses.get(masses.size() - 1), LITHIUM_FASTEST_BURNER_MSUN));
+        double fastestGoneGyr = Math.max(1e-3 * EARLIEST_LITHIUM_GONE_MYR,
+                lithiumGoneGyr(Math.min(masses.get(masses.size() - 1), LITHIUM_FASTEST_BURNER_MSUN)));
         return grid.ages().values().stream().filter(age -> age < lowestGoneGyr && age >= fastestGoneGyr).count();
     }
 

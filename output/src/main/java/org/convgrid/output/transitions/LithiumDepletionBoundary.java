@@ -39,19 +39,27 @@ final class LithiumDepletionBoundary {
         return row.surfaceLiRel() > DEPLETED_LI_REL;
     }
 
-    /** Whether a model can say whether it keeps its lithium: status ok with a surface lithium value. */
+    /**
+     * Whether a model can say whether it keeps its lithium: status ok with a surface lithium value ({@link
+     * #keepsLithium} is false for a model without one, so read it among these models only).
+     */
     static boolean followsLithium(CatalogueRow row) {
         return row.isOk() && !Double.isNaN(row.surfaceLiRel());
     }
 
     /**
      * The boundary of a slice, the lowest of its crossings into depletion (a model keeping its lithium below a
-     * depleted one); not found when there is none.
+     * depleted one); not found when there is none, and when the slice's lowest mass has burnt its lithium.
      *
      * @param byMass every model of the slice in increasing mass
      */
     static LithiumDepletion of(List<CatalogueRow> byMass) {
         List<CatalogueRow> searched = byMass.stream().filter(LithiumDepletionBoundary::followsLithium).toList();
+        if (!searched.isEmpty() && !keepsLithium(searched.get(0))) {
+            // burnt already at the lowest mass: no star keeps its lithium below the depleted ones, whatever a heavier
+            // star near 1 % does (0.7 Msun hovers there for ~100 Myr); the boundary lies below the grid
+            return LithiumDepletion.NONE;
+        }
         // only the crossings into depletion: the band's upper edge, where heavier stars keep their lithium again, is
         // another transition, not a second boundary to note or refine
         List<Span> crossings = StateCrossings.of(searched, KEEPS_LITHIUM).stream()

@@ -109,6 +109,11 @@ public record TransitionFinder(double coreMassFractionThreshold) {
     public static final String COOL_CORES_CAUSE = "out-of-equilibrium burning drives them (3He on the main sequence, "
             + "12C before it)";
 
+    /** Whether a row can tell whether it keeps its lithium: status ok with a surface lithium value. */
+    public static boolean followsLithium(CatalogueRow row) {
+        return LithiumDepletionBoundary.followsLithium(row);
+    }
+
     /** Whether a slice's notes say that its lowest mass has burnt its lithium (the boundary lies below the grid). */
     public static boolean notesLithiumBelowGrid(String notes) {
         return notes != null && notes.contains(LithiumDepletionBoundary.BELOW_GRID_WORDS);
@@ -148,7 +153,7 @@ public record TransitionFinder(double coreMassFractionThreshold) {
 
     /**
      * Whether a row keeps more than 1 % of its birth lithium (the low side of the lithium depletion boundary); false
-     * for a row without a lithium value.
+     * for a row without a lithium value, so ask it of rows that {@link #followsLithium} only.
      */
     public static boolean keepsLithium(CatalogueRow row) {
         return LithiumDepletionBoundary.keepsLithium(row);

@@ -79,8 +79,11 @@ public final class TransitionReader {
         TransitionEstimate boundary = r.isMapped(TransitionColumns.LI_DEPLETION_BOUNDARY_MSUN)
                 ? estimate(r, TransitionColumns.LI_DEPLETION_BOUNDARY_MSUN, TransitionColumns.LI_DEPLETION_BRACKET_LO_MSUN,
                 TransitionColumns.LI_DEPLETION_BRACKET_HI_MSUN) : TransitionEstimate.NONE;
+        // each added column is optional on its own: a table edited to drop the luminosity keeps its boundary
         LithiumDepletion lithium = boundary.found() ? new LithiumDepletion(boundary,
-                number(r, TransitionColumns.LI_DEPLETION_BOUNDARY_LUMINOSITY_LSUN)) : LithiumDepletion.NONE;
+                r.isMapped(TransitionColumns.LI_DEPLETION_BOUNDARY_LUMINOSITY_LSUN)
+                        ? number(r, TransitionColumns.LI_DEPLETION_BOUNDARY_LUMINOSITY_LSUN) : Double.NaN)
+                : LithiumDepletion.NONE;
         return new TransitionRow(slice, number(r, TransitionColumns.Y_INIT), fc, core, window, turnoff, lithium,
                 TransitionMethod.fromLabel(r.get(TransitionColumns.METHOD)), number(r, TransitionColumns.TOLERANCE_MSUN),
                 r.get(TransitionColumns.NOTES));

@@ -64,6 +64,12 @@ class LithiumDepletionBoundaryTest {
         assertThat(t.lithiumDepletion().luminosityLsun()).isNaN();
         assertThat(t.notes()).contains("lithium below 1 % of its birth value already at the lowest usable mass (0.2 "
                 + "Msun): the lithium depletion boundary lies below it");
+        // a heavier star hovering near 1 % above a burnt lowest mass is no boundary either (it was taken for one)
+        TransitionRow hovering = finder.find(List.of(withLithium(0.5, 1e-5), withLithium(0.6, 1e-3),
+                withLithium(0.7, 0.0103), withLithium(0.75, 0.009), withLithium(1.0, 0.3))).get(0);
+        assertThat(hovering.lithiumDepletion().found()).isFalse();
+        assertThat(hovering.lithiumDepletion().boundary().crossings()).isEmpty();
+        assertThat(hovering.notes()).contains("already at the lowest usable mass (0.5 Msun)");
     }
 
     @Test

@@ -117,6 +117,11 @@ class TransitionFileTest {
         // a table written before the lithium columns (with the turn-off's) reads as one without a boundary
         String earlier = text.replace(HEADER, BEFORE_LITHIUM_HEADER).replace(",0.1,0.1,0.2,0.0013", "");
         assertThat(TransitionReader.read(new StringReader(earlier)).get(0).lithiumDepletion().found()).isFalse();
+        // a table whose luminosity column was dropped (the added columns are optional one by one) keeps its boundary
+        String noLuminosity = text.replace(",li_depletion_boundary_luminosity_lsun", "").replace(",0.0013", "");
+        TransitionRow without = TransitionReader.read(new StringReader(noLuminosity)).get(0);
+        assertThat(without.lithiumDepletion().boundary().bracket()).isEqualTo(new Span(0.1, 0.2));
+        assertThat(without.lithiumDepletion().luminosityLsun()).isNaN();
     }
 
     @Test

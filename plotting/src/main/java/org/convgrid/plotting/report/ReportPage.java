@@ -346,8 +346,7 @@ public final class ReportPage {
         // a lithium value
         Map<Slice, Boolean> allKeep = run.catalogue().stream().collect(java.util.stream.Collectors.toMap(Slice::of,
                 r -> r.status() == ModelStatus.OK && TransitionFinder.keepsLithium(r), Boolean::logicalAnd));
-        Map<Slice, CatalogueRow> lowestWithLithium = run.catalogue().stream()
-                .filter(r -> r.isOk() && !Double.isNaN(r.surfaceLiRel()))
+        Map<Slice, CatalogueRow> lowestWithLithium = run.catalogue().stream().filter(TransitionFinder::followsLithium)
                 .collect(java.util.stream.Collectors.toMap(Slice::of, r -> r,
                         (a, c) -> a.massMsun() <= c.massMsun() ? a : c));
         b.append("<h2 id=\"transitions\">Transition masses</h2>\n");
@@ -384,15 +383,16 @@ public final class ReportPage {
                 }
             }
             if (lithium) {
-                // a slice too young for any star to have burnt its lithium has no boundary because none has:
-                // "not found" there read as a search that failed, as for the turn-off
-                // and one burnt already at its lowest mass has it below the grid, which the cell says
+                // A slice too young for any of its stars to have burnt its lithium has no boundary because none
+                // has: "not found" there read as a search that failed, so the cell says why, as the turn-off's
+                // does, and only when every model of the slice is ok (a failed one may be the star that had burnt
+                // it). A slice whose lowest mass has burnt it has its boundary below the grid, as its notes say.
                 CatalogueRow lowest = lowestWithLithium.get(t.slice());
                 if (t.lithiumDepletion().found()) {
                     estimate(b, t.lithiumDepletion().boundary(), t.toleranceMsun());
                 } else if (allKeep.getOrDefault(t.slice(), false)) {
                     b.append("<td>").append(ALL_KEEP_LITHIUM).append("</td><td></td>");
-                } else if (lowest != null && !TransitionFinder.keepsLithium(lowest)) {
+                } else if (lowest != null && TransitionFinder.notesLithiumBelowGrid(t.notes())) {
                     b.append("<td>below ").append(SliceLabels.number(lowest.massMsun()))
                             .append(": burnt at the lowest mass</td><td></td>");
                 } else {

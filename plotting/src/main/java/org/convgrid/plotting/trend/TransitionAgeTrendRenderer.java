@@ -21,7 +21,9 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  * Turns {@link TransitionAgeTrendData} into a chart: age along x (logarithmic when the ages are all above zero and
  * span a decade or more, as ages from birth do), transition mass up, colour per Z; solid lines with circles for the
  * fully convective limit (before the zero-age main sequence also the mass above which a radiative core has
- * appeared), dashed with diamonds for the mass above which every star has a convective core at its age; each bracket
+ * appeared), dashed with diamonds for the mass above which every star has a convective core at its age, dotted with downward
+ * triangles for the main-sequence turn-off, dash-dotted with upward triangles for the lithium depletion boundary; each
+ * bracket
  * a shaded box; refined and grid values are separate series, never joined (grid markers paler); each transient window
  * of small cores a faint dashed box with a square at its middle. With few metallicities every marker carries its
  * mass, rounded to the stated accuracy (the refinement's tolerance, else the bracket), clear of every marker, line

@@ -264,7 +264,7 @@ public final class TransitionRefiner {
         }
         CatalogueRow row = OutcomeRows.toRow(solved);
         // a model without a lithium value cannot say which side of the lithium depletion boundary it lies on
-        return s.kind() == Kind.LITHIUM_DEPLETION && Double.isNaN(row.surfaceLiRel()) ? BracketSide.UNUSABLE
+        return s.kind() == Kind.LITHIUM_DEPLETION && !TransitionFinder.followsLithium(row) ? BracketSide.UNUSABLE
                 : sideOf(inState(s.kind(), row), s);
     }
 
