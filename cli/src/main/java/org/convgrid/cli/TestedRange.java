@@ -160,8 +160,8 @@ final class TestedRange {
                     + MessageNumbers.format(max(irons)) + ", give Z = " + derivedZ(min(zs)) + " to " + derivedZ(max(zs));
         }
         // the ends in [Fe/H] under the helium of the first point beyond each (the grid's law gives them all the same)
-        String lowEnd = below.isEmpty() ? "" : ironAtEdge(below.get(0), MIN_Z);
-        String highEnd = above.isEmpty() ? "" : ironAtEdge(above.get(above.size() - 1), MAX_Z);
+        String lowEnd = below.isEmpty() ? "" : ironAtEdge(below.get(0), MIN_Z, irons);
+        String highEnd = above.isEmpty() ? "" : ironAtEdge(above.get(above.size() - 1), MAX_Z, irons);
         String where;
         if (above.isEmpty()) {
             where = "below the tested Z = " + MessageNumbers.format(MIN_Z) + " ([Fe/H] = " + lowEnd + " here)";
@@ -181,10 +181,15 @@ final class TestedRange {
 
     /**
      * The [Fe/H] of the tested range's end {@code edgeZ} in the grid of {@code point}: signed, to 0.01 dex, as the
-     * charts and the report write [Fe/H] ({@code -2.27}, {@code +0.40}).
+     * charts and the report write [Fe/H] ({@code -2.27}, {@code +0.40}), to 0.001 dex when that would read as one
+     * of the [Fe/H] asked ({@code asked}): [Fe/H] = +0.4 gives Z = 0.04016, past the end at +0.398, and "above the
+     * tested Z = 0.04 ([Fe/H] = +0.40 here)" read as if +0.4 were inside.
      */
-    private static String ironAtEdge(MetallicityPoint point, double edgeZ) {
-        return String.format(java.util.Locale.ROOT, "%+.2f", point.ironDexAt(edgeZ));
+    private static String ironAtEdge(MetallicityPoint point, double edgeZ, List<Double> asked) {
+        String edge = String.format(java.util.Locale.ROOT, "%+.2f", point.ironDexAt(edgeZ));
+        boolean readsAsAsked = asked.stream()
+                .anyMatch(dex -> String.format(java.util.Locale.ROOT, "%+.2f", dex).equals(edge));
+        return readsAsAsked ? String.format(java.util.Locale.ROOT, "%+.3f", point.ironDexAt(edgeZ)) : edge;
     }
 
     private static double min(List<Double> values) {

@@ -116,6 +116,11 @@ class TestedRangeTest {
         assertThat(star.code()).as(star.err()).isZero();
         assertThat(star.err()).contains("convgrid: warning: metallicity [Fe/H] = 0.5 gives Z = 0.04887, above the "
                 + "tested Z = 0.04 ([Fe/H] = +0.40 here); results there are untested");
+        // an [Fe/H] that rounds like the end itself is told apart from it by a third decimal
+        CliHarness.Execution edge = CliHarness.in(work, FakeChunkSolver.fast())
+                .execute("star", "--mass", "1", "--fe-h-dex", "0.4", "--format", "csv");
+        assertThat(edge.err()).contains("[Fe/H] = 0.4 gives Z = 0.04016, above the tested Z = 0.04 ([Fe/H] = "
+                + "+0.398 here)");
 
         // both ends at once, under another Sun: each end in that Sun's [Fe/H]
         Path both = CliHarness.writeGrid(work, "both.yaml", """
