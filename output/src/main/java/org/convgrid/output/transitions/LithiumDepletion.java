@@ -10,8 +10,8 @@ import java.util.Objects;
  *
  * @param boundary where the boundary lies among the slice's masses
  * @param luminosityLsun the luminosity of the model at the boundary mass (the bracket's lower model, the brightest
- *     that keeps its lithium), solar units;
- *     NaN when the boundary is not found, or the table it was read from had no such column
+ *     that keeps its lithium), solar units; NaN when the boundary is not found, or the table it was read from had no
+ *     such column
  */
 public record LithiumDepletion(TransitionEstimate boundary, double luminosityLsun) {
 

@@ -46,7 +46,7 @@ import org.convgrid.output.catalogue.CatalogueRow;
  * at the slice's age, as the fully convective limit is the last mass still fully convective. A slice without a
  * model past the main sequence has no turn-off, and no note says so (every young slice is one); a slice whose
  * statuses change more than once with mass (models on the main sequence above ones past it) says so in its notes.
-
+ *
  * <p>The lithium depletion boundary ({@link LithiumDepletionBoundary}) is read off the surface lithium of the usable
  * models that follow it: the highest mass that keeps more than 1 % of its birth lithium below the lowest one that
  * has burnt 99 % of it.

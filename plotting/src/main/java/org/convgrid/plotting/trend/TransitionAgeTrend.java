@@ -21,7 +21,8 @@ public final class TransitionAgeTrend {
 
     /**
      * The chart data of the rows whose physics is {@code physics}: per transition, Z and method the found masses in
-     * age order, fully convective limit, then core onset, then main-sequence turn-off, then lithium depletion boundary (unbracketed transitions are left out, so a series may have gaps in age; refined and grid values make
+     * age order, fully convective limit, then core onset, then main-sequence turn-off, then lithium depletion
+     * boundary (unbracketed transitions are left out, so a series may have gaps in age; refined and grid values make
      * separate series, never one line), and every transient core window.
      */
     public static TransitionAgeTrendData build(PhysicsKey physics, List<TransitionRow> rows) {
