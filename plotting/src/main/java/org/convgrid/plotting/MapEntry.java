@@ -8,7 +8,7 @@ import org.convgrid.plotting.style.StyledChart;
  *
  * @param fileName PNG file name (ASCII, no directory)
  * @param section report section: {@link #ZONES_MASS}, {@link #ZONES_RADIUS}, {@link #HR}, {@link #TRENDS},
- *     {@link #TRENDS_AGE}, {@link #TURNOVER}, {@link #ZONES_AGE} or {@link #PERIOD_SPACING}
+ *     {@link #TRENDS_AGE}, {@link #TURNOVER}, {@link #ENVELOPE_MASS}, {@link #ZONES_AGE} or {@link #PERIOD_SPACING}
  * @param group where it sits within its section, so a reader finds one metallicity or one mass quickly (e.g.
  *     {@code Z = 0.014}); empty when the section has no groups
  * @param caption one sentence for people
@@ -27,6 +27,7 @@ public record MapEntry(String fileName, String section, String group, String cap
     public static final String TRENDS = "Transition masses against metallicity";
     public static final String TRENDS_AGE = "Transition masses against age";
     public static final String TURNOVER = "Convective turnover time against mass";
+    public static final String ENVELOPE_MASS = "Convective envelope mass against effective temperature";
     public static final String ZONES_AGE = "Convective zones against age";
     public static final String PERIOD_SPACING = "Dipole g-mode period spacing against age";
 

@@ -44,6 +44,9 @@ import org.convgrid.plotting.trend.TransitionAgeTrendRenderer;
 import org.convgrid.plotting.trend.TransitionTrend;
 import org.convgrid.plotting.trend.TransitionTrendData;
 import org.convgrid.plotting.trend.TransitionTrendRenderer;
+import org.convgrid.plotting.envelope.EnvelopeMassAgainstTeff;
+import org.convgrid.plotting.envelope.EnvelopeMassData;
+import org.convgrid.plotting.envelope.EnvelopeMassRenderer;
 import org.convgrid.plotting.turnover.TurnoverAgainstMass;
 import org.convgrid.plotting.turnover.TurnoverAgainstMassRenderer;
 import org.convgrid.plotting.turnover.TurnoverData;
@@ -57,7 +60,9 @@ import org.convgrid.plotting.zones.ZoneMapRenderer;
  * diagram ({@code hr_<physics>.png}) and, when the run has transitions, the transition masses against Z
  * ({@code transitions-vs-z_<physics>.png}); when the run has several ages, the transition masses against age
  * ({@code transitions-vs-age_<physics>.png}); per Z and physics, when at least two models have a turnover time, the
- * convective turnover times against mass ({@code turnover-vs-mass_z<Z>_<physics>.png}); for a bounded selection of
+ * convective turnover times against mass ({@code turnover-vs-mass_z<Z>_<physics>.png}) and, when at least two have
+ * a convective envelope, its mass against Teff ({@code envelope-mass-vs-teff_z<Z>_<physics>.png}); for a bounded
+ * selection of
  * the evolution tracks in tracks/ ({@link AgeChartSelection}), their convective zones against age
  * ({@code zones-age_m<mass>_z<Z>_<physics>.png}); per Z and physics, when some track has a g-mode cavity, the dipole
  * period spacing of up to {@link PeriodSpacingAgainstAge#MAX_LINES} of them against age
@@ -78,9 +83,10 @@ public final class RunMaps {
     private static final String ZONES_AGE_FILES = "zones-age";
     private static final String ZONES_AGE_DEPTH_FILES = "zones-age-depth";
     private static final String TURNOVER_FILES = "turnover-vs-mass";
+    private static final String ENVELOPE_FILES = "envelope-mass-vs-teff";
     private static final String PERIOD_SPACING_FILES = "period-spacing-vs-age";
     private static final Set<String> CHART_FILE_KINDS = Set.of(ZONES_MASS_FILES, ZONES_RADIUS_FILES, HR_FILES,
-            TRENDS_FILES, TRENDS_AGE_FILES, TURNOVER_FILES, ZONES_AGE_FILES, ZONES_AGE_DEPTH_FILES,
+            TRENDS_FILES, TRENDS_AGE_FILES, TURNOVER_FILES, ENVELOPE_FILES, ZONES_AGE_FILES, ZONES_AGE_DEPTH_FILES,
             PERIOD_SPACING_FILES);
     /** Fewer models with a turnover time than this and a metallicity gets no turnover chart: one point is no trend. */
     static final int TURNOVER_MIN_MODELS = 2;
@@ -299,6 +305,7 @@ public final class RunMaps {
             // transitions.csv finds its masses across the stars of one age in Gyr, and here every star has its own:
             // each of its rows holds one star, so there is no transition to chart (the report says why)
             entries.addAll(turnoverAgainstMass(run, physics));
+        entries.addAll(envelopeMassAgainstTeff(run, physics));
             entries.addAll(zonesAgainstAge(run));
             entries.addAll(periodSpacingAgainstAge(run, physics));
             return entries;
@@ -334,6 +341,7 @@ public final class RunMaps {
             }
         }
         entries.addAll(turnoverAgainstMass(run, physics));
+        entries.addAll(envelopeMassAgainstTeff(run, physics));
         entries.addAll(zonesAgainstAge(run));
         entries.addAll(periodSpacingAgainstAge(run, physics));
         return entries;
@@ -429,6 +437,33 @@ public final class RunMaps {
                         MapEntry.TURNOVER, groupOf(z, p, run),
                         turnoverCaption(data, names),
                         () -> TurnoverAgainstMassRenderer.render(data, names)));
+            }
+        }
+        return entries;
+    }
+
+    /**
+     * One envelope-mass chart per physics and Z that has at least {@link #TURNOVER_MIN_MODELS} grid models with a
+     * convective envelope; grouped by Z.
+     */
+    private static List<MapEntry> envelopeMassAgainstTeff(RunData run, Set<PhysicsKey> physics) {
+        List<MapEntry> entries = new ArrayList<>();
+        MetallicityNames names = run.metallicityNames();
+        for (PhysicsKey p : physics) {
+            List<Double> zs = run.catalogue().stream().filter(r -> PhysicsKey.of(r).equals(p))
+                    .map(CatalogueRow::zInit).distinct().sorted().toList();
+            for (double z : zs) {
+                EnvelopeMassData data = EnvelopeMassAgainstTeff.build(p, z, run.catalogue());
+                if (data.modelCount() < TURNOVER_MIN_MODELS) {
+                    continue;
+                }
+                entries.add(new MapEntry(ENVELOPE_FILES + "_z" + SliceLabels.number(z) + "_" + p.fileStem() + ".png",
+                        MapEntry.ENVELOPE_MASS, groupOf(z, p, run),
+                        "Mass of the convective envelope against effective temperature, one colour per age, for the "
+                                + "grid's models with a convective envelope (hollow: fully convective, the envelope "
+                                + "the whole star). " + names.of(z) + ", " + p.describe() + ". env_cz_mass_msun of "
+                                + "catalogue.ecsv: the mass into which accreted material mixes.",
+                        () -> EnvelopeMassRenderer.render(data, names)));
             }
         }
         return entries;

@@ -27,8 +27,9 @@ class RunMapsTest {
     void drawsEveryChartAsAPngOfTheStatedSize(@TempDir Path dir) throws Exception {
         TestRuns.write(dir, TestRuns.demoRows());
         List<Path> files = RunMaps.drawAll(dir).written();
-        // 9 slices x (mass + radius) + 1 HR diagram + transitions against Z and against age + turnover times per Z.
-        assertThat(files).hasSize(24).allSatisfy(f -> {
+        // 9 slices x (mass + radius) + 1 HR diagram + transitions against Z and against age + turnover times and
+        // envelope masses per Z.
+        assertThat(files).hasSize(27).allSatisfy(f -> {
             assertThat(f.getParent()).isEqualTo(dir.resolve("maps"));
             BufferedImage image = ImageIO.read(f.toFile());
             assertThat(image).as(f.toString()).isNotNull();
@@ -40,7 +41,8 @@ class RunMapsTest {
                 "zones-radius_z0.004_zams_a1.8_ov0_schwarzschild.png", "hr_a1.8_ov0_schwarzschild.png",
                 "transitions-vs-z_a1.8_ov0_schwarzschild.png", "transitions-vs-age_a1.8_ov0_schwarzschild.png",
                 "turnover-vs-mass_z0.004_a1.8_ov0_schwarzschild.png", "turnover-vs-mass_z0.014_a1.8_ov0_schwarzschild.png",
-                "turnover-vs-mass_z0.02_a1.8_ov0_schwarzschild.png");
+                "turnover-vs-mass_z0.02_a1.8_ov0_schwarzschild.png",
+                "envelope-mass-vs-teff_z0.004_a1.8_ov0_schwarzschild.png");
         try (var left = Files.list(dir.resolve("maps"))) {
             assertThat(left.filter(f -> f.getFileName().toString().endsWith(".tmp"))).isEmpty();
         }
@@ -150,7 +152,7 @@ class RunMapsTest {
         long start = System.nanoTime();
         List<Path> files = RunMaps.drawAll(dir).written();
         double seconds = (System.nanoTime() - start) / 1e9;
-        assertThat(files).hasSize(2 * 18 + 3 + 6);
+        assertThat(files).hasSize(2 * 18 + 3 + 6 + 6);
         assertThat(seconds).as("seconds for %d maps", files.size()).isLessThan(THOUSAND_MODEL_BUDGET_SECONDS);
     }
 
@@ -171,9 +173,9 @@ class RunMapsTest {
         assertThat(run.trackedModels()).hasSize(1000);
         assertThat(plan.stream().filter(e -> e.section().equals(MapEntry.ZONES_AGE)))
                 .hasSizeLessThanOrEqualTo(org.convgrid.plotting.tracks.AgeChartSelection.MAX_CHARTS);
-        // per slice a mass and a radius map, one HR diagram, a turnover chart per Z, and the bounded zones-against-age
-        // selection
-        assertThat(plan).hasSizeLessThanOrEqualTo(2 * 100 + 1 + 10
+        // per slice a mass and a radius map, one HR diagram, a turnover and an envelope chart per Z, and the bounded
+        // zones-against-age selection
+        assertThat(plan).hasSizeLessThanOrEqualTo(2 * 100 + 1 + 10 + 10
                 + org.convgrid.plotting.tracks.AgeChartSelection.MAX_CHARTS);
     }
 }

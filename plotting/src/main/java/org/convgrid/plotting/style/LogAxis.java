@@ -74,12 +74,35 @@ public final class LogAxis {
      * way: right-aligned left of the axis, bottom up, a label that would touch the one below it left out.
      */
     public static void applyY(StyledChart chart, double min, double max, List<Double> labelled) {
+        applyY(chart, min, max, labelled, SliceLabels::number);
+    }
+
+    /** As {@link #applyY(StyledChart, double, double, List)}, each label written by {@code label}. */
+    public static void applyY(StyledChart chart, double min, double max, List<Double> labelled,
+                              DoubleFunction<String> label) {
         chart.getStyler().setYAxisLogarithmic(true);
         chart.getStyler().setYAxisLogarithmicDecadeOnly(false);
         chart.getStyler().setYAxisMin(min).setYAxisMax(max);
         chart.getStyler().setYAxisTickLabelsColor(TRANSPARENT);
         List<Double> inside = labelled.stream().filter(v -> v >= min && v <= max).sorted().toList();
-        chart.addOverlay((g, c) -> paintYLabels(g, c, inside));
+        chart.addOverlay((g, c) -> paintYLabels(g, c, inside, label));
+    }
+
+    /** The powers of ten in [min, max]: labels for an axis over many decades, where 2 and 5 x 10^n crowd. */
+    public static List<Double> decadeValues(double min, double max) {
+        return valuesWith(new String[] {"1"}, min, max);
+    }
+
+    /**
+     * A power of ten as {@code 1e-5} below 0.001 (0.00001 is hard to count), as {@link SliceLabels#number} above;
+     * other values as {@link SliceLabels#number}.
+     */
+    public static String powerOfTen(double value) {
+        if (value >= 1e-3 || value <= 0) {
+            return SliceLabels.number(value);
+        }
+        long exponent = Math.round(Math.log10(value));
+        return Math.abs(value / Math.pow(10, exponent) - 1) < 1e-9 ? "1e" + exponent : SliceLabels.number(value);
     }
 
     /** The round values 1, 2, 3 and 5 x 10^n in [min, max]. */
@@ -140,7 +163,8 @@ public final class LogAxis {
         return ticks;
     }
 
-    private static void paintYLabels(Graphics2D g, StyledChart chart, List<Double> ticks) {
+    private static void paintYLabels(Graphics2D g, StyledChart chart, List<Double> ticks,
+                                     DoubleFunction<String> label) {
         g.setFont(ChartStyle.TICK_FONT);
         g.setColor(ChartStyle.TEXT);
         FontMetrics fm = g.getFontMetrics();
@@ -148,7 +172,7 @@ public final class LogAxis {
                 - chart.getStyler().getAxisTickMarkLength() - chart.getStyler().getAxisTickPadding();
         double lastTop = Double.POSITIVE_INFINITY;
         for (double tick : ticks) {
-            String text = SliceLabels.number(tick);
+            String text = label.apply(tick);
             double y = chart.getScreenYFromChart(tick);
             double baseline = y + fm.getAscent() / 2.0 - 2;
             if (baseline > lastTop - fm.getDescent()) {

@@ -48,8 +48,9 @@ class ReportPageTest {
             assertThat(m.group(1)).startsWith("maps/");
             assertThat(dir.resolve(m.group(1))).isRegularFile();
         }
-        // per slice two zone maps; the HR diagram and the transitions against Z and age; per Z the turnover times
-        assertThat(images).isEqualTo(2 * 4 + 3 + 2);
+        // per slice two zone maps; the HR diagram and the transitions against Z and age; per Z the turnover times and
+        // the envelope masses
+        assertThat(images).isEqualTo(2 * 4 + 3 + 2 + 2);
         assertThat(html).contains("<h2 id=\"convective-turnover-time-against-mass\">Convective turnover time against "
                 + "mass</h2>", "maps/turnover-vs-mass_z0.004_a1.8_ov0_schwarzschild.png");
         for (CatalogueRow failed : rows.stream().filter(r -> !r.isOk()).toList()) {
