@@ -321,7 +321,7 @@ final class RunCommand implements Callable<Integer> {
         RefinementEstimate expected = RefinementEstimate.assumed(grid, threads);
         return "refining the transition masses to " + MessageNumbers.format(grid.transitions().toleranceMsun())
                 + " Msun by bisection" + (expected.models() > 0 ? " (about " + Counts.of(expected.models(), "new model")
-                + ", about " + Durations.describe(expected.seconds()) + ")" : "") + "; --no-refine skips this";
+                + ", about " + Durations.describeEstimate(expected.seconds()) + ")" : "") + "; --no-refine skips this";
     }
 
     /**
@@ -388,7 +388,7 @@ final class RunCommand implements Callable<Integer> {
         if (seconds < LONG_RUN_SECONDS) {
             return "";
         }
-        return "; expected to take about " + Durations.describe(seconds) + " (check's rough estimate; Ctrl-C stops "
+        return "; expected to take about " + Durations.describeEstimate(seconds) + " (check's rough estimate; Ctrl-C stops "
                 + "it and --resume continues it)";
     }
 

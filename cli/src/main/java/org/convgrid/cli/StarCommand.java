@@ -375,8 +375,8 @@ final class StarCommand implements Callable<Integer> {
             }
         }
         if (!(alpha > 0 && alpha < 10)) {
-            throw new UsageException("--mixing-length must be above 0 and below 10 pressure scale heights (got "
-                    + MessageNumbers.format(alpha) + ")");
+            throw new UsageException((preset != null ? "--preset " + preset + ": its mixing_length" : "--mixing-length")
+                    + " must be above 0 and below 10 pressure scale heights (got " + MessageNumbers.format(alpha) + ")");
         }
         if (!(opacityScale > 0 && opacityScale <= 100)) {
             throw new UsageException("--opacity-scale must be above 0 and at most 100 (got "

@@ -62,8 +62,7 @@ import org.convgrid.plotting.zones.ZoneMapRenderer;
  * ({@code transitions-vs-age_<physics>.png}); per Z and physics, when at least two models have a turnover time, the
  * convective turnover times against mass ({@code turnover-vs-mass_z<Z>_<physics>.png}) and, when at least two have
  * a convective envelope, its mass against Teff ({@code envelope-mass-vs-teff_z<Z>_<physics>.png}); for a bounded
- * selection of
- * the evolution tracks in tracks/ ({@link AgeChartSelection}), their convective zones against age
+ * selection of the evolution tracks in tracks/ ({@link AgeChartSelection}), their convective zones against age
  * ({@code zones-age_m<mass>_z<Z>_<physics>.png}); per Z and physics, when some track has a g-mode cavity, the dipole
  * period spacing of up to {@link PeriodSpacingAgainstAge#MAX_LINES} of them against age
  * ({@code period-spacing-vs-age_z<Z>_<physics>.png}). With tracks, the HR diagrams also show the tracks and the
@@ -89,7 +88,7 @@ public final class RunMaps {
             TRENDS_FILES, TRENDS_AGE_FILES, TURNOVER_FILES, ENVELOPE_FILES, ZONES_AGE_FILES, ZONES_AGE_DEPTH_FILES,
             PERIOD_SPACING_FILES);
     /** Fewer models with a turnover time than this and a metallicity gets no turnover chart: one point is no trend. */
-    static final int TURNOVER_MIN_MODELS = 2;
+    static final int LINE_CHART_MIN_MODELS = 2;
 
     private RunMaps() {
     }
@@ -303,9 +302,9 @@ public final class RunMaps {
         }
         if (groups.byFraction()) {
             // transitions.csv finds its masses across the stars of one age in Gyr, and here every star has its own:
-            // each of its rows holds one star, so there is no transition to chart (the report says why)
+            // each of its rows holds one star, so there is no transition to chart (the report says why), nor a line
+            // per age of the envelope chart
             entries.addAll(turnoverAgainstMass(run, physics));
-        entries.addAll(envelopeMassAgainstTeff(run, physics));
             entries.addAll(zonesAgainstAge(run));
             entries.addAll(periodSpacingAgainstAge(run, physics));
             return entries;
@@ -419,7 +418,7 @@ public final class RunMaps {
     }
 
     /**
-     * One turnover-time chart per physics and Z that has at least {@link #TURNOVER_MIN_MODELS} grid models with a
+     * One turnover-time chart per physics and Z that has at least {@link #LINE_CHART_MIN_MODELS} grid models with a
      * turnover time (a Z of hot stars only, without convective envelopes, has none); grouped by Z.
      */
     private static List<MapEntry> turnoverAgainstMass(RunData run, Set<PhysicsKey> physics) {
@@ -430,7 +429,7 @@ public final class RunMaps {
                     .map(CatalogueRow::zInit).distinct().sorted().toList();
             for (double z : zs) {
                 TurnoverData data = TurnoverAgainstMass.build(p, z, run.catalogue(), run.transitions());
-                if (data.modelCount() < TURNOVER_MIN_MODELS) {
+                if (data.modelCount() < LINE_CHART_MIN_MODELS) {
                     continue;
                 }
                 entries.add(new MapEntry(TURNOVER_FILES + "_z" + SliceLabels.number(z) + "_" + p.fileStem() + ".png",
@@ -443,7 +442,7 @@ public final class RunMaps {
     }
 
     /**
-     * One envelope-mass chart per physics and Z that has at least {@link #TURNOVER_MIN_MODELS} grid models with a
+     * One envelope-mass chart per physics and Z that has at least {@link #LINE_CHART_MIN_MODELS} grid models with a
      * convective envelope; grouped by Z.
      */
     private static List<MapEntry> envelopeMassAgainstTeff(RunData run, Set<PhysicsKey> physics) {
@@ -454,7 +453,7 @@ public final class RunMaps {
                     .map(CatalogueRow::zInit).distinct().sorted().toList();
             for (double z : zs) {
                 EnvelopeMassData data = EnvelopeMassAgainstTeff.build(p, z, run.catalogue());
-                if (data.modelCount() < TURNOVER_MIN_MODELS) {
+                if (data.modelCount() < LINE_CHART_MIN_MODELS) {
                     continue;
                 }
                 entries.add(new MapEntry(ENVELOPE_FILES + "_z" + SliceLabels.number(z) + "_" + p.fileStem() + ".png",

@@ -10,13 +10,24 @@ public final class Durations {
 
     /** @param seconds a duration, s */
     public static String describe(double seconds) {
+        return describe(seconds, false);
+    }
+
+    /**
+     * An estimate's duration, as {@link #describe(double)} but at least 1 s when above zero: "about 0 s" for an
+     * estimate of 0.45 s read as nothing to do (a measured time keeps its 0 s).
+     */
+    public static String describeEstimate(double seconds) {
+        return describe(seconds, true);
+    }
+
+    private static String describe(double seconds, boolean atLeastOneSecond) {
         if (!Double.isFinite(seconds) || seconds < 0) {
             return "unknown time";
         }
         long s = Math.round(seconds);
-        if (s == 0 && seconds > 0) {
-            // every caller says "about": "about 0 s" for an estimate of 0.45 s read as nothing to do
-            return "1 s";
+        if (atLeastOneSecond && s == 0 && seconds > 0) {
+            s = 1;
         }
         if (s < 60) {
             return s + " s";

@@ -55,11 +55,11 @@ public final class GridSummary {
                     + ", " + p.atmosphere().label() + " atmosphere");
         }
         lines.add("models:        " + g.count());
-        lines.add("estimate:      about " + Durations.describe(estimate.seconds()) + " on "
+        lines.add("estimate:      about " + Durations.describeEstimate(estimate.seconds()) + " on "
                 + Counts.of(threads, "thread") + " for these models, at " + estimate.basis());
         lines.add(refinement.models() == 0 ? "refinement:    " + refinement.basis()
                 : "refinement:    about " + Counts.of(refinement.models(), "new model") + " after them to narrow the transition"
-                        + " masses, about " + Durations.describe(refinement.seconds()) + " more ("
+                        + " masses, about " + Durations.describeEstimate(refinement.seconds()) + " more ("
                         + refinement.basis() + "; run --no-refine skips them)");
         lines.add("run directory: " + runDirectory);
         return lines;

@@ -1,14 +1,10 @@
 package org.convgrid.grids.yaml;
 
-import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Optional;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
 import org.convgrid.grids.GridFileException;
-import org.convgrid.grids.InputFileCheck;
 
 /**
  * What a physics preset written by {@code convgrid calibrate-sun} sets: the mixing length and the atmosphere it was
@@ -28,19 +24,12 @@ public record PhysicsPreset(double mixingLength, AtmosphereChoice atmosphere) {
      */
     public static PhysicsPreset read(Path file) {
         // a file that cannot be read has no line to point at: said plainly, as a missing grid file is
-        Optional<String> unreadable = InputFileCheck.problem(file, PresetReader.MAX_FILE_BYTES);
-        if (unreadable.isPresent()) {
-            throw new ConvgridException(ErrorKind.BAD_USAGE, "cannot read " + file + ": " + unreadable.get());
-        }
-        String text;
-        try {
-            text = Files.readString(file);
-        } catch (IOException e) {
-            throw new ConvgridException(ErrorKind.BAD_USAGE, "cannot read " + file
-                    + (e instanceof java.nio.charset.CharacterCodingException ? ": it is not UTF-8 text" : ""), e);
+        PresetReader.FileText loaded = PresetReader.FileText.of(file);
+        if (loaded.text() == null) {
+            throw new ConvgridException(ErrorKind.BAD_USAGE, loaded.problem());
         }
         NodeReader reader = new NodeReader(file.toString());
-        PhysicsPreset preset = PresetReader.parse(text, reader);
+        PhysicsPreset preset = PresetReader.parse(loaded.text(), reader);
         if (preset == null || !reader.problems().isEmpty()) {
             throw new GridFileException(reader.problems());
         }

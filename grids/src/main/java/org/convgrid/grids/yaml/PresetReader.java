@@ -47,26 +47,41 @@ final class PresetReader {
             reader.problem(node, GridProblemKind.UNREADABLE_FILE, "preset: not a valid file name");
             return null;
         }
-        Optional<String> unreadable = org.convgrid.grids.InputFileCheck.problem(file, MAX_FILE_BYTES);
-        if (unreadable.isPresent()) {
-            reader.problem(node, GridProblemKind.UNREADABLE_FILE, "preset: cannot read " + file + ": "
-                    + unreadable.get());
+        FileText loaded = FileText.of(file);
+        if (loaded.text() == null) {
+            reader.problem(node, GridProblemKind.UNREADABLE_FILE, "preset: " + loaded.problem());
             return null;
         }
-        String text;
-        try {
-            text = Files.readString(file);
-        } catch (IOException e) {
-            reader.problem(node, GridProblemKind.UNREADABLE_FILE, "preset: cannot read " + file
-                    + (e instanceof java.nio.charset.CharacterCodingException ? ": it is not UTF-8 text" : ""));
-            return null;
-        }
+        String text = loaded.text();
         NodeReader inner = new NodeReader(file.toString());
         PhysicsPreset preset = parse(text, inner);
         for (GridProblem p : inner.problems()) {
             reader.problem(node, p.kind(), "preset " + p);
         }
         return inner.problems().isEmpty() ? preset : null;
+    }
+
+    /**
+     * A preset file's text, or why it cannot be read ({@code cannot read FILE: no such file}); the one reading of a
+     * preset file that a grid's {@code preset:} and {@code star --preset} share.
+     *
+     * @param text the file's text, null when it cannot be read
+     * @param problem why not, null when it can
+     */
+    record FileText(String text, String problem) {
+
+        static FileText of(Path file) {
+            Optional<String> unreadable = org.convgrid.grids.InputFileCheck.problem(file, MAX_FILE_BYTES);
+            if (unreadable.isPresent()) {
+                return new FileText(null, "cannot read " + file + ": " + unreadable.get());
+            }
+            try {
+                return new FileText(Files.readString(file), null);
+            } catch (IOException e) {
+                return new FileText(null, "cannot read " + file
+                        + (e instanceof java.nio.charset.CharacterCodingException ? ": it is not UTF-8 text" : ""));
+            }
+        }
     }
 
     /** The preset in {@code text}, or null when it has problems (recorded in {@code inner}). */

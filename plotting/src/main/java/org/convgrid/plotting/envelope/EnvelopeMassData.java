@@ -13,9 +13,11 @@ import org.convgrid.plotting.label.PhysicsKey;
  * @param lines one line per age that has a model to show, youngest first
  * @param withoutEnvelope grid models of this metallicity and physics with status ok and no convective envelope (hot
  *     stars): not drawn, so a line stops at the hottest star that has one
+ * @param pastMainSequence grid models of this metallicity and physics past the main sequence at their age: not drawn
+ *     either, so a line may stop short of the highest masses for that reason instead
  */
 public record EnvelopeMassData(PhysicsKey physics, double zInit, List<Double> ages, List<AgeLine> lines,
-                               long withoutEnvelope) {
+                               long withoutEnvelope, long pastMainSequence) {
 
     public EnvelopeMassData {
         ages = List.copyOf(ages);

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Locale;
 import org.convgrid.plotting.label.MetallicityNames;
 import org.convgrid.plotting.label.SliceLabels;
+import org.convgrid.plotting.style.AgeLineWords;
 import org.convgrid.plotting.style.ChartNotes;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.HollowMarker;
@@ -27,15 +28,11 @@ public final class EnvelopeMassRenderer {
 
     static final String TITLE = "Convective envelope mass against Teff, ";
     static final String X_TITLE = "effective temperature Teff / K   (hotter to the left)";
-    static final String Y_TITLE = "convective envelope mass / M\u2609";
-    static final String FULLY_CONVECTIVE_LABEL = "fully convective (hollow)";
-    static final String GRID_ONLY_NOTE = "Grid models only: the refinement's models near the transition masses are "
-            + "left out.";
+    static final String Y_TITLE = "convective envelope mass / M\u2609 (logarithmic)";
     /** Room either side of the temperatures, as a share of their range. */
     private static final double TEFF_PAD_SHARE = 0.05;
     /** Room above and below the envelope masses, as a factor. */
     private static final double MASS_PAD_FACTOR = 2.0;
-    private static final Color KEY_GREY = new Color(90, 90, 90);
 
     private EnvelopeMassRenderer() {
     }
@@ -66,12 +63,13 @@ public final class EnvelopeMassRenderer {
         chart.getStyler().setxAxisTickLabelsFormattingFunction(v -> String.format(Locale.ROOT, "%.0f", -v + 0.0));
         double yMin = mass.getMin() / MASS_PAD_FACTOR;
         double yMax = mass.getMax() * MASS_PAD_FACTOR;
-        // over more than three decades (F to K stars) labels at each power of ten only, small ones as 1e-5
-        LogAxis.applyY(chart, yMin, yMax, yMax / yMin > 1e3 ? LogAxis.decadeValues(yMin, yMax)
-                : LogAxis.roundValues(yMin, yMax), LogAxis::powerOfTen);
-        List<String> notes = new ArrayList<>(List.of(GRID_ONLY_NOTE));
+        LogAxis.applyY(chart, yMin, yMax, LogAxis.sparseRoundValues(yMin, yMax), LogAxis::compact);
+        List<String> notes = new ArrayList<>(List.of(AgeLineWords.GRID_ONLY_NOTE));
         if (data.withoutEnvelope() > 0) {
             notes.add(withoutEnvelopeNote(data.withoutEnvelope()));
+        }
+        if (data.pastMainSequence() > 0) {
+            notes.add(AgeLineWords.pastMainSequenceNote(data.pastMainSequence()));
         }
         ChartNotes.addRightOfPlot(chart, notes);
 
@@ -85,11 +83,11 @@ public final class EnvelopeMassRenderer {
             s.setMarkerColor(colour(data, line.ageGyr()));
         }
         all.stream().filter(EnvelopePoint::fullyConvective).findFirst().ifPresent(p -> {
-            XYSeries key = chart.addSeries(FULLY_CONVECTIVE_LABEL, new double[] {-p.teffK()},
+            XYSeries key = chart.addSeries(AgeLineWords.FULLY_CONVECTIVE_LABEL, new double[] {-p.teffK()},
                     new double[] {p.envelopeMassMsun()});
             key.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
             key.setMarker(new HollowMarker(SeriesMarkers.CIRCLE));
-            key.setMarkerColor(KEY_GREY);
+            key.setMarkerColor(ChartStyle.KEY_GREY);
         });
         int n = 0;
         for (EnvelopeMassData.AgeLine line : data.lines()) {

@@ -32,7 +32,6 @@ public final class PeriodSpacingAgainstAgeRenderer {
     /** Why a line is jagged: README, "Profiles and the g-mode period scale" (the fixed mesh). */
     static final String SCATTER_NOTE = "Steps scatter by 1-3 % about the trend: the composition step above a "
             + "receding core is not resolved by the fixed mesh (README).";
-    private static final Color KEY_GREY = new Color(90, 90, 90);
     /** The dotted pattern of {@link ChartStyle#dashed}. */
     private static final int DOTTED = 2;
     /** Room above and below the spacings, as a factor. */
@@ -102,12 +101,12 @@ public final class PeriodSpacingAgainstAgeRenderer {
             s.setShowInLegend(true);
         }
         XYSeries solid = series(chart, MAIN_SEQUENCE_LABEL, List.of(anchor), scale);
-        solid.setLineColor(KEY_GREY);
+        solid.setLineColor(ChartStyle.KEY_GREY);
         solid.setShowInLegend(true);
         boolean anyPreMainSequence = all.stream().anyMatch(SpacingPoint::preMainSequence);
         if (anyPreMainSequence) {
             XYSeries dotted = series(chart, PRE_MAIN_SEQUENCE_LABEL, List.of(anchor), scale);
-            dotted.setLineColor(KEY_GREY);
+            dotted.setLineColor(ChartStyle.KEY_GREY);
             dotted.setLineStyle(ChartStyle.dashed(DOTTED, ChartStyle.LINE_WIDTH));
             dotted.setShowInLegend(true);
         }

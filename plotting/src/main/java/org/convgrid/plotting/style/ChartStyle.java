@@ -40,6 +40,11 @@ public final class ChartStyle {
     public static final Color REDDISH_PURPLE = new Color(204, 121, 167);
     /** Neutral grey for "no result", not part of the hue palette on purpose. */
     public static final Color NO_RESULT_GREY = new Color(200, 200, 200);
+    /**
+     * Grey of legend keys that say what a line style or marker means whatever the colour, where colour stands for an
+     * age or a metallicity.
+     */
+    public static final Color KEY_GREY = new Color(90, 90, 90);
     /** Darker neutral grey for masses past the main sequence at the asked age: known, so told apart from failures. */
     public static final Color PAST_MAIN_SEQUENCE_GREY = new Color(120, 120, 120);
     private static final Color GRID_GREY = new Color(225, 225, 225);

@@ -28,6 +28,8 @@ public final class LogAxis {
     private static final double NARROW_RANGE = 3.0;
     /** The largest share of a log axis, at either end, left without a label before finer labels are added there. */
     private static final double BARE_END_SHARE = 0.25;
+    /** The most round values {@link #sparseRoundValues} labels an axis with before it keeps the powers of ten only. */
+    private static final int MOST_ROUND_LABELS = 9;
     /** Fewer round values than this inside an axis, and every mantissa is offered as a label. */
     private static final int FEWEST_LABELS = 3;
     private static final Color TRANSPARENT = new Color(0, 0, 0, 0);
@@ -88,21 +90,31 @@ public final class LogAxis {
         chart.addOverlay((g, c) -> paintYLabels(g, c, inside, label));
     }
 
-    /** The powers of ten in [min, max]: labels for an axis over many decades, where 2 and 5 x 10^n crowd. */
-    public static List<Double> decadeValues(double min, double max) {
-        return valuesWith(new String[] {"1"}, min, max);
+    /**
+     * {@link #roundValues}, or the powers of ten alone when those would be more than {@link #MOST_ROUND_LABELS}: over
+     * many decades (an F star's 1e-6 Msun envelope beside a K dwarf's 0.1) 1, 2, 3 and 5 x 10^n crowd.
+     */
+    public static List<Double> sparseRoundValues(double min, double max) {
+        List<Double> round = roundValues(min, max);
+        return round.size() <= MOST_ROUND_LABELS ? round : valuesWith(new String[] {"1"}, min, max);
     }
 
     /**
-     * A power of ten as {@code 1e-5} below 0.001 (0.00001 is hard to count), as {@link SliceLabels#number} above;
-     * other values as {@link SliceLabels#number}.
+     * A label that stays short: below 0.001 as mantissa and exponent ({@code 5e-6}: 0.000005 is hard to count, and
+     * ran off the chart beside the axis title), otherwise as {@link SliceLabels#number}.
      */
-    public static String powerOfTen(double value) {
-        if (value >= 1e-3 || value <= 0) {
+    public static String compact(double value) {
+        if (value >= 1e-3 || value <= 0 || !Double.isFinite(value)) {
             return SliceLabels.number(value);
         }
-        long exponent = Math.round(Math.log10(value));
-        return Math.abs(value / Math.pow(10, exponent) - 1) < 1e-9 ? "1e" + exponent : SliceLabels.number(value);
+        int exponent = (int) Math.floor(Math.log10(value));
+        double mantissa = value / Math.pow(10, exponent);
+        if (mantissa >= 9.9995) {
+            // 1e-5 computed as 9.9999e-6
+            exponent++;
+            mantissa /= 10;
+        }
+        return SliceLabels.number(Math.round(mantissa * 1000) / 1000.0) + "e" + exponent;
     }
 
     /** The round values 1, 2, 3 and 5 x 10^n in [min, max]. */

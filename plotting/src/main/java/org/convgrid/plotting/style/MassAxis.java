@@ -2,7 +2,8 @@ package org.convgrid.plotting.style;
 
 /**
  * The logarithmic stellar-mass axis shared by the mass charts, labelled at 1, 2, 3 and 5 x 10^n, or at every
- * 1..9 x 10^n when the range holds fewer than three of those ({@link LogAxis#labelValues}).
+ * 1..9 x 10^n when the range holds fewer than three of those, with finer labels at an end left bare
+ * ({@link LogAxis#labelValues}).
  */
 public final class MassAxis {
 

@@ -21,7 +21,7 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
 final class TrendLegend {
 
     /** The keys' neutral colour: darker than the grid lines, lighter than the text, no series colour. */
-    static final Color KEY_GREY = new Color(90, 90, 90);
+    static final Color KEY_GREY = ChartStyle.KEY_GREY;
     /** The label of the transient windows' key. */
     static final String WINDOWS = "small transient cores";
     /** The label suffix of a grid value's key when a chart holds both kinds ({@link MethodNote}). */

@@ -68,7 +68,7 @@ public final class TurnoverAgainstMass {
      * ages would hold one star each (one unconnected dot per star and age). Such grids get
      * no turnover chart.
      */
-    public static boolean eachStarItsOwnAge(List<CatalogueRow> gridRows) {
+    static boolean eachStarItsOwnAge(List<CatalogueRow> gridRows) {
         Map<String, Set<Double>> agesByIndex = new HashMap<>();
         for (CatalogueRow r : gridRows) {
             String agePart = Track.agePartOf(r.modelId());

@@ -7,6 +7,7 @@ import java.util.DoubleSummaryStatistics;
 import java.util.List;
 import org.convgrid.plotting.label.MetallicityNames;
 import org.convgrid.plotting.label.SliceLabels;
+import org.convgrid.plotting.style.AgeLineWords;
 import org.convgrid.plotting.style.ChartNotes;
 import org.convgrid.plotting.style.ChartStyle;
 import org.convgrid.plotting.style.HollowMarker;
@@ -31,20 +32,15 @@ public final class TurnoverAgainstMassRenderer {
     static final String Y_TITLE = "convective turnover time \u03c4c / days";
     static final String LOCAL_LABEL = "local time (solid)";
     static final String GLOBAL_LABEL = "global time (dashed)";
-    static final String FULLY_CONVECTIVE_LABEL = "fully convective (hollow)";
     static final String LIMIT_LABEL = "fully convective limit (dotted)";
     /** What the two times are and what they are not: the chart shows model quantities, nothing more. */
     static final String DEFINITION_NOTE = "Local: l_m / v_c half a pressure scale height above the envelope base "
             + "(r = R/2 when fully convective); global: \u222b dr / v_c across the envelope. Model values, not "
             + "empirical \u03c4c.";
-    static final String GRID_ONLY_NOTE = "Grid models only: the refinement's models near the transition masses "
-            + "are left out.";
     /** Room either side of the mass range, as a factor. */
     private static final double MASS_PAD_FACTOR = 1.12;
     /** Room above and below the times, as a factor. */
     private static final double TIME_PAD_FACTOR = 1.35;
-    /** Key entries (what a line style or marker means, whatever the age) are grey: colour stands for age. */
-    private static final Color KEY_GREY = new Color(90, 90, 90);
     private static final float LIMIT_WIDTH = 2.0f;
     private static final BasicStroke LIMIT_STROKE = new BasicStroke(LIMIT_WIDTH, BasicStroke.CAP_BUTT,
             BasicStroke.JOIN_MITER, 10f, new float[] {3f, 5f}, 0f);
@@ -52,12 +48,6 @@ public final class TurnoverAgainstMassRenderer {
     private static final int GLOBAL_DASH = 1;
 
     private TurnoverAgainstMassRenderer() {
-    }
-
-    /** Says why an age's line stops short of the highest masses (without it they just vanished). */
-    static String pastMainSequenceNote(long models) {
-        return models + (models == 1 ? " model lies" : " models lie") + " past the main sequence at its age: not"
-                + " drawn, so a line may stop short of the highest masses.";
     }
 
     /** The chart of one metallicity's turnover times, named by Z; {@code data} must hold at least one model. */
@@ -80,9 +70,9 @@ public final class TurnoverAgainstMassRenderer {
         // the y axis first: the mass axis's labels are written at its minimum
         LogAxis.applyY(chart, yMin, yMax, LogAxis.roundValues(yMin, yMax));
         MassAxis.apply(chart, masses.getMin() / MASS_PAD_FACTOR, masses.getMax() * MASS_PAD_FACTOR);
-        List<String> notes = new ArrayList<>(List.of(DEFINITION_NOTE, GRID_ONLY_NOTE));
+        List<String> notes = new ArrayList<>(List.of(DEFINITION_NOTE, AgeLineWords.GRID_ONLY_NOTE));
         if (data.pastMainSequence() > 0) {
-            notes.add(pastMainSequenceNote(data.pastMainSequence()));
+            notes.add(AgeLineWords.pastMainSequenceNote(data.pastMainSequence()));
         }
         ChartNotes.addRightOfPlot(chart, notes);
 
@@ -95,27 +85,27 @@ public final class TurnoverAgainstMassRenderer {
         }
         TurnoverData.AgeLine first = data.lines().get(0);
         XYSeries localKey = line(chart, LOCAL_LABEL, masses(first.points()), locals(first.points()));
-        localKey.setLineColor(KEY_GREY);
+        localKey.setLineColor(ChartStyle.KEY_GREY);
         localKey.setLineStyle(ChartStyle.dashed(0, ChartStyle.LINE_WIDTH));
         localKey.setShowInLegend(true);
         data.lines().stream().filter(l -> l.points().stream().anyMatch(TurnoverPoint::hasGlobal)).findFirst()
                 .ifPresent(l -> {
                     List<TurnoverPoint> global = l.points().stream().filter(TurnoverPoint::hasGlobal).toList();
                     XYSeries key = line(chart, GLOBAL_LABEL, masses(global), globals(global));
-                    key.setLineColor(KEY_GREY);
+                    key.setLineColor(ChartStyle.KEY_GREY);
                     key.setLineStyle(ChartStyle.dashed(GLOBAL_DASH, ChartStyle.LINE_WIDTH));
                     key.setShowInLegend(true);
                 });
         all.stream().filter(TurnoverPoint::fullyConvective).findFirst().ifPresent(p -> {
-            XYSeries key = chart.addSeries(FULLY_CONVECTIVE_LABEL, new double[] {p.massMsun()},
+            XYSeries key = chart.addSeries(AgeLineWords.FULLY_CONVECTIVE_LABEL, new double[] {p.massMsun()},
                     new double[] {p.localDays()});
             key.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
             key.setMarker(new HollowMarker(SeriesMarkers.CIRCLE));
-            key.setMarkerColor(KEY_GREY);
+            key.setMarkerColor(ChartStyle.KEY_GREY);
         });
         if (!data.limits().isEmpty()) {
             XYSeries key = limitLine(chart, LIMIT_LABEL, data.limits().get(0).massMsun(), yMin, yMax);
-            key.setLineColor(KEY_GREY);
+            key.setLineColor(ChartStyle.KEY_GREY);
             key.setShowInLegend(true);
         }
 

@@ -31,6 +31,18 @@ class LogAxisLabelsTest {
     }
 
     @Test
+    void manyDecadesKeepThePowersOfTenAndSmallValuesAreWrittenShort() {
+        // an envelope axis from an F star's 3e-6 Msun to a K dwarf's 0.4: 1, 2, 3, 5 x 10^n would be 18 labels
+        assertThat(LogAxis.sparseRoundValues(3e-6, 0.4)).containsExactly(1e-5, 1e-4, 1e-3, 1e-2, 0.1);
+        assertThat(LogAxis.sparseRoundValues(0.02, 0.4)).containsExactly(0.02, 0.03, 0.05, 0.1, 0.2, 0.3);
+        // 0.000005 ran off the chart beside the axis title
+        assertThat(LogAxis.compact(5e-6)).isEqualTo("5e-6");
+        assertThat(LogAxis.compact(1e-5)).isEqualTo("1e-5");
+        assertThat(LogAxis.compact(3e-4)).isEqualTo("3e-4");
+        assertThat(LogAxis.compact(0.01)).isEqualTo("0.01");
+    }
+
+    @Test
     void anEndOfTheRangeWithoutALabelGetsFinerOnes() {
         // 0.5-1.4 Msun by 0.1 (outer edges 0.45 and 1.45): labelled 0.5 ... 0.9, 1 and nothing over its F stars above
         assertThat(LogAxis.labelValues(0.45, 1.45)).contains(0.5, 0.9, 1.0, 1.2, 1.4);

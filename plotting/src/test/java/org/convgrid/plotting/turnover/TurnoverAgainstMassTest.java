@@ -79,7 +79,7 @@ class TurnoverAgainstMassTest {
         List<CatalogueRow> rows = TestRuns.rows(MASSES, new double[] {Z}, new double[] {4.0});
         TurnoverData data = TurnoverAgainstMass.build(defaultPhysics(rows), Z, rows, List.of());
         assertThat(data.pastMainSequence()).isEqualTo(1);
-        assertThat(TurnoverAgainstMassRenderer.pastMainSequenceNote(1))
+        assertThat(org.convgrid.plotting.style.AgeLineWords.pastMainSequenceNote(1))
                 .startsWith("1 model lies past the main sequence");
         assertThat(TurnoverAgainstMass.build(defaultPhysics(rows()), Z, rows(), List.of()).pastMainSequence()).isZero();
     }
@@ -148,7 +148,7 @@ class TurnoverAgainstMassTest {
         StyledChart chart = TurnoverAgainstMassRenderer.render(data);
         assertThat(chart.getSeriesMap().values().stream().filter(s -> s.isShowInLegend()).map(s -> s.getName()))
                 .containsExactly("ZAMS", "1 Gyr", TurnoverAgainstMassRenderer.LOCAL_LABEL,
-                        TurnoverAgainstMassRenderer.GLOBAL_LABEL, TurnoverAgainstMassRenderer.FULLY_CONVECTIVE_LABEL,
+                        TurnoverAgainstMassRenderer.GLOBAL_LABEL, org.convgrid.plotting.style.AgeLineWords.FULLY_CONVECTIVE_LABEL,
                         TurnoverAgainstMassRenderer.LIMIT_LABEL);
         assertThat(chart.getYAxisTitle()).contains("days");
         assertThat(chart.getStyler().isYAxisLogarithmic()).isTrue();
