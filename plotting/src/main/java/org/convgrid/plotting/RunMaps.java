@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeMap;
+import java.util.function.BiFunction;
 import java.util.stream.Collectors;
 import org.convgrid.engine.request.AgeOrigin;
 import org.convgrid.output.RunLayout;
@@ -422,20 +423,31 @@ public final class RunMaps {
      * turnover time (a Z of hot stars only, without convective envelopes, has none); grouped by Z.
      */
     private static List<MapEntry> turnoverAgainstMass(RunData run, Set<PhysicsKey> physics) {
-        List<MapEntry> entries = new ArrayList<>();
         MetallicityNames names = run.metallicityNames();
+        return perCatalogueMetallicity(run, physics, (p, z) -> {
+            TurnoverData data = TurnoverAgainstMass.build(p, z, run.catalogue(), run.transitions());
+            return data.modelCount() < LINE_CHART_MIN_MODELS ? null
+                    : new MapEntry(TURNOVER_FILES + "_z" + SliceLabels.number(z) + "_" + p.fileStem() + ".png",
+                    MapEntry.TURNOVER, groupOf(z, p, run), turnoverCaption(data, names),
+                    () -> TurnoverAgainstMassRenderer.render(data, names));
+        });
+    }
+
+    /**
+     * The entries {@code chart} gives (null: none) for each physics and each Z of the catalogue under it, in that
+     * order: the per-Z charts drawn from the catalogue's rows.
+     */
+    private static List<MapEntry> perCatalogueMetallicity(RunData run, Set<PhysicsKey> physics,
+                                                          BiFunction<PhysicsKey, Double, MapEntry> chart) {
+        List<MapEntry> entries = new ArrayList<>();
         for (PhysicsKey p : physics) {
             List<Double> zs = run.catalogue().stream().filter(r -> PhysicsKey.of(r).equals(p))
                     .map(CatalogueRow::zInit).distinct().sorted().toList();
             for (double z : zs) {
-                TurnoverData data = TurnoverAgainstMass.build(p, z, run.catalogue(), run.transitions());
-                if (data.modelCount() < LINE_CHART_MIN_MODELS) {
-                    continue;
+                MapEntry entry = chart.apply(p, z);
+                if (entry != null) {
+                    entries.add(entry);
                 }
-                entries.add(new MapEntry(TURNOVER_FILES + "_z" + SliceLabels.number(z) + "_" + p.fileStem() + ".png",
-                        MapEntry.TURNOVER, groupOf(z, p, run),
-                        turnoverCaption(data, names),
-                        () -> TurnoverAgainstMassRenderer.render(data, names)));
             }
         }
         return entries;
@@ -446,26 +458,18 @@ public final class RunMaps {
      * convective envelope; grouped by Z.
      */
     private static List<MapEntry> envelopeMassAgainstTeff(RunData run, Set<PhysicsKey> physics) {
-        List<MapEntry> entries = new ArrayList<>();
         MetallicityNames names = run.metallicityNames();
-        for (PhysicsKey p : physics) {
-            List<Double> zs = run.catalogue().stream().filter(r -> PhysicsKey.of(r).equals(p))
-                    .map(CatalogueRow::zInit).distinct().sorted().toList();
-            for (double z : zs) {
-                EnvelopeMassData data = EnvelopeMassAgainstTeff.build(p, z, run.catalogue());
-                if (data.modelCount() < LINE_CHART_MIN_MODELS) {
-                    continue;
-                }
-                entries.add(new MapEntry(ENVELOPE_FILES + "_z" + SliceLabels.number(z) + "_" + p.fileStem() + ".png",
-                        MapEntry.ENVELOPE_MASS, groupOf(z, p, run),
-                        "Mass of the convective envelope against effective temperature, one colour per age, for the "
-                                + "grid's models with a convective envelope (hollow: fully convective, the envelope "
-                                + "the whole star). " + names.of(z) + ", " + p.describe() + ". env_cz_mass_msun of "
-                                + "catalogue.ecsv: the mass into which accreted material mixes.",
-                        () -> EnvelopeMassRenderer.render(data, names)));
-            }
-        }
-        return entries;
+        return perCatalogueMetallicity(run, physics, (p, z) -> {
+            EnvelopeMassData data = EnvelopeMassAgainstTeff.build(p, z, run.catalogue());
+            return data.modelCount() < LINE_CHART_MIN_MODELS ? null
+                    : new MapEntry(ENVELOPE_FILES + "_z" + SliceLabels.number(z) + "_" + p.fileStem() + ".png",
+                    MapEntry.ENVELOPE_MASS, groupOf(z, p, run),
+                    "Mass of the convective envelope against effective temperature, one colour per age, for the "
+                            + "grid's models with a convective envelope (hollow: fully convective, the envelope "
+                            + "the whole star). " + names.of(z) + ", " + p.describe() + ". env_cz_mass_msun of "
+                            + "catalogue.ecsv: the mass into which accreted material mixes.",
+                    () -> EnvelopeMassRenderer.render(data, names));
+        });
     }
 
     /** {@link #turnoverCaption(TurnoverData, MetallicityNames)} of a run whose metallicities are named by Z. */
