@@ -63,7 +63,8 @@ public final class EnvelopeMassRenderer {
         chart.getStyler().setxAxisTickLabelsFormattingFunction(v -> String.format(Locale.ROOT, "%.0f", -v + 0.0));
         double yMin = mass.getMin() / MASS_PAD_FACTOR;
         double yMax = mass.getMax() * MASS_PAD_FACTOR;
-        LogAxis.applyY(chart, yMin, yMax, LogAxis.sparseRoundValues(yMin, yMax), LogAxis::compact);
+        List<Double> labels = LogAxis.sparseRoundValues(yMin, yMax);
+        LogAxis.applyY(chart, yMin, yMax, labels, LogAxis.compactLabels(labels));
         List<String> notes = new ArrayList<>(List.of(AgeLineWords.GRID_ONLY_NOTE));
         if (data.withoutEnvelope() > 0) {
             notes.add(withoutEnvelopeNote(data.withoutEnvelope()));

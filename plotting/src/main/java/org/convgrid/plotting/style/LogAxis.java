@@ -100,11 +100,18 @@ public final class LogAxis {
     }
 
     /**
-     * A label that stays short: below 0.001 as mantissa and exponent ({@code 5e-6}: 0.000005 is hard to count, and
-     * ran off the chart beside the axis title), otherwise as {@link SliceLabels#number}.
+     * How the labels {@code labelled} of one axis are written so that they stay short and alike: when one of them lies
+     * below 0.001, every one below 1 as mantissa and exponent ({@code 5e-6}: 0.000005 is hard to count and ran off the
+     * chart beside the axis title; {@code 1e-3} beside it, not 0.001), otherwise as {@link SliceLabels#number}.
      */
-    public static String compact(double value) {
-        if (value >= 1e-3 || value <= 0 || !Double.isFinite(value)) {
+    public static DoubleFunction<String> compactLabels(List<Double> labelled) {
+        boolean tiny = labelled.stream().anyMatch(v -> v > 0 && v < 1e-3);
+        return v -> tiny && v < 1 ? exponentForm(v) : SliceLabels.number(v);
+    }
+
+    /** {@code value} as mantissa and exponent, {@code 5e-6}; as {@link SliceLabels#number} when not above zero. */
+    public static String exponentForm(double value) {
+        if (value <= 0 || !Double.isFinite(value)) {
             return SliceLabels.number(value);
         }
         int exponent = (int) Math.floor(Math.log10(value));

@@ -2,6 +2,7 @@ package org.convgrid.plotting.style;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.util.List;
 import org.junit.jupiter.api.Test;
 
 /** Which values a logarithmic axis offers as labels (the painter then leaves out those that would touch). */
@@ -35,11 +36,16 @@ class LogAxisLabelsTest {
         // an envelope axis from an F star's 3e-6 Msun to a K dwarf's 0.4: 1, 2, 3, 5 x 10^n would be 18 labels
         assertThat(LogAxis.sparseRoundValues(3e-6, 0.4)).containsExactly(1e-5, 1e-4, 1e-3, 1e-2, 0.1);
         assertThat(LogAxis.sparseRoundValues(0.02, 0.4)).containsExactly(0.02, 0.03, 0.05, 0.1, 0.2, 0.3);
-        // 0.000005 ran off the chart beside the axis title
-        assertThat(LogAxis.compact(5e-6)).isEqualTo("5e-6");
-        assertThat(LogAxis.compact(1e-5)).isEqualTo("1e-5");
-        assertThat(LogAxis.compact(3e-4)).isEqualTo("3e-4");
-        assertThat(LogAxis.compact(0.01)).isEqualTo("0.01");
+        // 0.000005 ran off the chart beside the axis title; with one such label every one below 1 is written alike
+        var tiny = LogAxis.compactLabels(List.of(5e-6, 1e-5, 1e-3, 0.01, 0.1, 2.0));
+        assertThat(tiny.apply(5e-6)).isEqualTo("5e-6");
+        assertThat(tiny.apply(1e-5)).isEqualTo("1e-5");
+        assertThat(tiny.apply(1e-3)).isEqualTo("1e-3");
+        assertThat(tiny.apply(0.1)).isEqualTo("1e-1");
+        assertThat(tiny.apply(2.0)).isEqualTo("2");
+        assertThat(LogAxis.exponentForm(3e-4)).isEqualTo("3e-4");
+        // without one, plain decimals
+        assertThat(LogAxis.compactLabels(List.of(0.01, 0.1)).apply(0.01)).isEqualTo("0.01");
     }
 
     @Test
