@@ -388,11 +388,10 @@ public final class ReportPage {
                 // does, and only when every model of the slice is ok (a failed one may be the star that had burnt
                 // it). A slice whose lowest mass has burnt it has its boundary below the grid, as its notes say.
                 CatalogueRow lowest = lowestWithLithium.get(t.slice());
-                if (t.lithiumDepletion().found()) {
-                    estimate(b, t.lithiumDepletion().boundary(), t.toleranceMsun());
-                } else if (allKeep.getOrDefault(t.slice(), false)) {
+                boolean none = !t.lithiumDepletion().found();
+                if (none && allKeep.getOrDefault(t.slice(), false)) {
                     b.append("<td>").append(ALL_KEEP_LITHIUM).append("</td><td></td>");
-                } else if (lowest != null && TransitionFinder.notesLithiumBelowGrid(t.notes())) {
+                } else if (none && lowest != null && TransitionFinder.notesLithiumBelowGrid(t.notes())) {
                     b.append("<td>below ").append(SliceLabels.number(lowest.massMsun()))
                             .append(": burnt at the lowest mass</td><td></td>");
                 } else {

@@ -163,7 +163,7 @@ public final class TransitionRefiner {
                     case TURNOFF -> row.turnoff();
                     case LITHIUM_DEPLETION -> row.lithiumDepletion().boundary();
                 };
-                for (Span span : allCrossings ? e.crossings() : reported(kind, row)) {
+                for (Span span : allCrossings ? e.crossings() : reported(kind, e, row)) {
                     if (span.hi() - span.lo() >= bisection.tolerance() / Constants.M_SUN) {
                         // the turn-off's ends are told apart by status alone; the others need a structure
                         CatalogueRow below = members.get(slice).stream().filter(r -> r.massMsun() == span.lo()
@@ -188,23 +188,17 @@ public final class TransitionRefiner {
     }
 
     /**
-     * The crossings the table reports: the fully convective limit, the turn-off or the lithium depletion boundary, or,
-     * for the core, the two crossings that bound the transient window and the mass above which every star has a core,
-     * in mass order without repeats.
+     * The crossings the table reports of the transition {@code estimate} of kind {@code kind}: its bracket, or, for the
+     * core, the two crossings that bound the transient window and the mass above which every star has a core, in mass
+     * order without repeats.
      */
-    private static List<Span> reported(Kind kind, TransitionRow row) {
-        if (kind == Kind.FULLY_CONVECTIVE) {
-            return row.fullyConvective().found() ? List.of(row.fullyConvective().bracket()) : List.of();
-        }
-        if (kind == Kind.TURNOFF) {
-            return row.turnoff().found() ? List.of(row.turnoff().bracket()) : List.of();
-        }
-        if (kind == Kind.LITHIUM_DEPLETION) {
-            return row.lithiumDepletion().found() ? List.of(row.lithiumDepletion().boundary().bracket()) : List.of();
+    private static List<Span> reported(Kind kind, TransitionEstimate estimate, TransitionRow row) {
+        if (kind != Kind.CONV_CORE) {
+            return estimate.found() ? List.of(estimate.bracket()) : List.of();
         }
         List<Span> spans = new ArrayList<>(row.transientCoreCrossings());
-        if (row.convCoreOnset().found() && !spans.contains(row.convCoreOnset().bracket())) {
-            spans.add(row.convCoreOnset().bracket());
+        if (estimate.found() && !spans.contains(estimate.bracket())) {
+            spans.add(estimate.bracket());
         }
         return spans;
     }
