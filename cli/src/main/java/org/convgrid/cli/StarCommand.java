@@ -209,10 +209,7 @@ final class StarCommand implements Callable<Integer> {
                 writer.write(OutcomeRows.toRow(outcome));
             }
         } else {
-            // the outcome's Pi_0, which the catalogue row (--format csv, a grid's catalogue) carries too
-            double buoyancyTravelTime = outcome instanceof ModelOutcome.Solved solved ? solved.buoyancyTravelTime()
-                    : Double.NaN;
-            StarReport.write(outcome, composition, buoyancyTravelTime, main.out());
+            StarReport.write(outcome, composition, main.out());
         }
         main.out().flush();
         String merged = mergeNote(lifeEvents.get(), outcome);

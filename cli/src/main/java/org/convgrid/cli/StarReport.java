@@ -10,7 +10,6 @@ import org.convgrid.engine.request.GlobalProperties;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.state.Composition;
-import org.convgrid.engine.structure.BuoyancyTravelTime;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.grids.words.Counts;
 import org.convgrid.plotting.label.SliceLabels;
@@ -28,11 +27,8 @@ final class StarReport {
     private StarReport() {
     }
 
-    /**
-     * @param buoyancyTravelTime Pi_0 of the solved model, s ({@link BuoyancyTravelTime}); NaN without a g-mode cavity
-     *     or a model
-     */
-    static void write(ModelOutcome outcome, Composition composition, double buoyancyTravelTime, PrintWriter out) {
+    /** The report of one outcome; its seismic scales are the ones its catalogue row carries. */
+    static void write(ModelOutcome outcome, Composition composition, PrintWriter out) {
         var r = outcome.request();
         String title;
         if (r.age() instanceof Age.SinceBirth since) {
@@ -85,9 +81,11 @@ final class StarReport {
         line(out, "turnover time, global", row.turnoverTimeGlobalDays(), "days");
         out.println();
         // the g-mode period scale gamma Dor and SPB observers compare with (asymptotic; see the README's caveats)
-        line(out, "buoyancy travel time Pi_0", buoyancyTravelTime, "s");
-        line(out, "dipole period spacing Delta Pi_1", Double.isNaN(buoyancyTravelTime) ? Double.NaN
-                : BuoyancyTravelTime.periodSpacing(buoyancyTravelTime, 1), "s");
+        line(out, "buoyancy travel time Pi_0", row.buoyancyPeriodPi0S(), "s");
+        line(out, "dipole period spacing Delta Pi_1", row.periodSpacingL1S(), "s");
+        // the p-mode scales of solar-like oscillators: Delta nu and where the envelope's glitch lies
+        line(out, "large separation Delta nu", row.largeSeparationUhz(), "uHz");
+        line(out, "envelope base, acoustic depth", row.envCzBaseAcousticDepthS(), "s");
         out.println();
         // the zones as zones.csv lists them, with their kind (without it a reader could not tell a central zone below
         // the core threshold from a core, nor see the mass of a surface zone whose m/M ends both print 1.000000)

@@ -10,6 +10,7 @@ import org.convgrid.engine.request.LifeStage;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.SeismicScales;
 import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.convection.StructureClass;
@@ -66,7 +67,8 @@ final class FakeChunkSolver implements ChunkSolver {
                 ConvectiveStructure convection = convection(r);
                 outcomes.add(new ModelOutcome.Solved(r, global(r, seed), convection, iterations,
                         LifeStage.MAIN_SEQUENCE_UNTRACED, Double.NaN,
-                        periodScale ? buoyancyTravelTime(r, convection) : Double.NaN));
+                        periodScale ? new SeismicScales(buoyancyTravelTime(r, convection), Double.NaN, Double.NaN)
+                                : SeismicScales.UNKNOWN));
             }
         }
         return outcomes;

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import org.convgrid.output.catalogue.CatalogueColumns;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -131,10 +132,10 @@ class IronAbundanceRunTest {
         assertThat(Files.readString(work.resolve("z/report.html"))).doesNotContain("[Fe/H]");
     }
 
-    /** The fe_h_dex cell of a catalogue row: the third from the end (the g-mode period scale follows it). */
+    /** The fe_h_dex cell of a catalogue row, at its place in the header. */
     private static String ironCell(String line) {
         String[] cells = line.split(",", -1);
-        return cells[cells.length - 3];
+        return cells[CatalogueColumns.HEADER.indexOf(CatalogueColumns.FE_H_DEX)];
     }
 
     /** A catalogue as the version before fe_h_dex wrote it, its first {@code rows} rows only. */

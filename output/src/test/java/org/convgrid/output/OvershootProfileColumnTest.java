@@ -20,6 +20,7 @@ import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.engine.physics.atmosphere.AtmosphereChoice;
 import org.convgrid.engine.request.OpacityChoice;
 import org.convgrid.engine.units.Constants;
+import org.convgrid.output.catalogue.CatalogueColumns;
 import org.convgrid.output.catalogue.CatalogueReader;
 import org.convgrid.output.catalogue.CatalogueRow;
 import org.convgrid.output.catalogue.CatalogueWriter;
@@ -58,8 +59,7 @@ class OvershootProfileColumnTest {
     /** The overshoot_profile cell, which fe_h_dex and the g-mode period scale follow. */
     private static String profileCell(String line) {
         String[] cells = line.split(",", -1);
-        // fe_h_dex and the g-mode period scale's two columns follow it
-        return cells[cells.length - 4];
+        return cells[CatalogueColumns.HEADER.indexOf(CatalogueColumns.OVERSHOOT_PROFILE)];
     }
 
     @Test
@@ -88,10 +88,11 @@ class OvershootProfileColumnTest {
         writer.flush();
         List<String> lines = out.toString().lines().filter(l -> !l.startsWith("#")).toList();
         // the layout before overshoot_profile had none of the columns added after it (fe_h_dex, the g-mode period
-        // scale's two): its rows end four cells earlier
+        // scale's two, the p-mode scales' two): its rows end that many cells earlier, the column's own included
+        int dropped = CatalogueColumns.HEADER.size() - CatalogueColumns.HEADER.indexOf(CatalogueColumns.OVERSHOOT_PROFILE);
         String withoutColumn = lines.stream().map(l -> {
             int cut = l.length();
-            for (int i = 0; i < 4; i++) {
+            for (int i = 0; i < dropped; i++) {
                 cut = l.lastIndexOf(',', cut - 1);
             }
             return l.substring(0, cut) + "\n";

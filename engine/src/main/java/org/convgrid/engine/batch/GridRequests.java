@@ -22,7 +22,7 @@ import org.convgrid.engine.evolution.TrackSink;
 import org.convgrid.engine.physics.PhysicsBundles;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.state.Composition;
-import org.convgrid.engine.structure.BuoyancyTravelTime;
+import org.convgrid.engine.structure.ModelSeismicScales;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.engine.zams.ZamsBuilder;
@@ -313,7 +313,7 @@ public final class GridRequests implements ChunkSolver {
             double mixedTop = request.physics().overshootScheme().model(request.physics().overshoot())
                     .mixedCoreTop(m.profile()) / request.mass();
             return new Answer(new ModelOutcome.Solved(request, m.global(), m.convection(),
-                    startIterations + iterationsUpTo(result, aged.age()), stage, mixedTop, BuoyancyTravelTime.of(m)),
+                    startIterations + iterationsUpTo(result, aged.age()), stage, mixedTop, ModelSeismicScales.of(m)),
                     m);
         }
         String detail = aged.detail();

@@ -8,7 +8,7 @@ import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.error.ErrorKind;
 import org.convgrid.engine.state.Composition;
-import org.convgrid.engine.structure.BuoyancyTravelTime;
+import org.convgrid.engine.structure.ModelSeismicScales;
 import org.convgrid.engine.units.Constants;
 
 /**
@@ -147,7 +147,7 @@ public final class SolarCalibration {
                 settings.age(), SolarTrack.options(t.mixingLength(), settings));
         var m = t.model();
         ModelOutcome outcome = new ModelOutcome.Solved(request, m.global(), m.convection(), t.iterationsToAge(),
-                LifeStage.MAIN_SEQUENCE_UNTRACED, Double.NaN, BuoyancyTravelTime.of(m));
+                LifeStage.MAIN_SEQUENCE_UNTRACED, Double.NaN, ModelSeismicScales.of(m));
         Composition envelope = EnvelopeComposition.of(m);
         return new CalibratedSun(t.mixingLength(), t.helium(), t.metals(), target,
                 settings.age(), outcome, m, t.radiusResidual(), t.luminosityResidual(), t.zeroAgeLuminosity(),

@@ -1,8 +1,10 @@
 package org.convgrid.engine.evolution;
 
 import java.util.List;
+import java.util.Objects;
 
 import org.convgrid.engine.convection.ConvectiveZone;
+import org.convgrid.engine.request.SeismicScales;
 
 /**
  * Summary of one accepted evolution step (one row of a track), cgs units.
@@ -20,8 +22,8 @@ import org.convgrid.engine.convection.ConvectiveZone;
  *                     {@link MainSequenceEvolver#BURNING_THRESHOLD} times its maximum
  * @param burningOuter m/M of the outermost such point
  * @param iterations Newton iterations of the structure relaxation of this step (failed tries included)
- * @param buoyancyTravelTime the g-mode period scale Pi_0 of the step's model, s ({@link
- *     org.convgrid.engine.structure.BuoyancyTravelTime#of}); NaN without a g-mode cavity (fully convective)
+ * @param seismic the g-mode period scale, acoustic radius and envelope-base acoustic depth of the step's model ({@link
+ *     org.convgrid.engine.structure.ModelSeismicScales#of})
  * @param mixedCoreTop m/M up to which the evolution's overshoot mixes the central convective zone
  *     ({@link org.convgrid.engine.overshoot.Overshoot#mixedCoreTop}, the catalogue's {@code core_mixed_mass_frac}); NaN
  *     when it mixes no further than the zone, or when there is no central zone
@@ -29,20 +31,22 @@ import org.convgrid.engine.convection.ConvectiveZone;
 public record EvolutionStep(double age, double timeStep, double luminosity, double radius,
                             double effectiveTemperature, double centralTemperature, double centralDensity,
                             double centralHydrogen, List<ConvectiveZone> convectiveZones, double burningInner,
-                            double burningOuter, int iterations, double buoyancyTravelTime, double mixedCoreTop) {
+                            double burningOuter, int iterations, SeismicScales seismic, double mixedCoreTop) {
 
 
     public EvolutionStep {
         convectiveZones = List.copyOf(convectiveZones);
+        Objects.requireNonNull(seismic, "seismic");
     }
 
-    /** A step whose Pi_0 and overshoot-mixed core top are not known (made without its model). */
+    /** A step whose seismic scales and overshoot-mixed core top are not known (made without its model). */
     public EvolutionStep(double age, double timeStep, double luminosity, double radius,
                          double effectiveTemperature, double centralTemperature, double centralDensity,
                          double centralHydrogen, List<ConvectiveZone> convectiveZones, double burningInner,
                          double burningOuter, int iterations) {
         this(age, timeStep, luminosity, radius, effectiveTemperature, centralTemperature, centralDensity,
-                centralHydrogen, convectiveZones, burningInner, burningOuter, iterations, Double.NaN, Double.NaN);
+                centralHydrogen, convectiveZones, burningInner, burningOuter, iterations, SeismicScales.UNKNOWN,
+                Double.NaN);
     }
 
     /** m/M at the top of the convective core, 0 when the centre is radiative. */

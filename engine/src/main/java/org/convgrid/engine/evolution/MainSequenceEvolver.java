@@ -13,7 +13,7 @@ import org.convgrid.engine.error.ConvgridException;
 import org.convgrid.engine.overshoot.Overshoot;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.state.Composition;
-import org.convgrid.engine.structure.BuoyancyTravelTime;
+import org.convgrid.engine.structure.ModelSeismicScales;
 import org.convgrid.engine.structure.HenyeySolver;
 import org.convgrid.engine.structure.MassMesh;
 import org.convgrid.engine.structure.MeshPlanner;
@@ -1105,7 +1105,7 @@ public final class MainSequenceEvolver {
         var g = model.global();
         return new EvolutionStep(age, dt, g.luminosity(), g.radius(), g.effectiveTemperature(),
                 g.centralTemperature(), g.centralDensity(), g.centralHydrogen(), model.convection().zones(), inner,
-                outer, iterations, BuoyancyTravelTime.of(model),
+                outer, iterations, ModelSeismicScales.of(model),
                 physics.overshoot().mixedCoreTop(model.profile()) / mass);
     }
 }

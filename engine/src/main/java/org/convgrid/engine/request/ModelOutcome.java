@@ -49,12 +49,12 @@ public sealed interface ModelOutcome permits ModelOutcome.Solved, ModelOutcome.F
      * @param stage the phase and surface lithium of the model
      * @param mixedCoreMassFraction m/M up to which the evolution's overshoot mixes the central convective zone
      *     instantaneously; NaN when it mixes no further than the zone (no overshoot, decaying overshoot, no evolution)
-     * @param buoyancyTravelTime the g-mode period scale Pi_0 of the model, s, as {@code BuoyancyTravelTime.of} gives
-     *     it (carried here because the catalogue row is made after the model itself is gone); NaN when the star has
-     *     no g-mode cavity (fully convective) or the outcome was made without its model
+     * @param seismic the model's g-mode period scale, acoustic radius and envelope-base acoustic depth, as {@code
+     *     structure.ModelSeismicScales} gives them (carried here because the catalogue row is made after the model
+     *     itself is gone); {@link SeismicScales#UNKNOWN} when the outcome was made without its model
      */
     record Solved(ModelRequest request, GlobalProperties global, ConvectiveStructure convection,
-                  int solverIterations, LifeStage stage, double mixedCoreMassFraction, double buoyancyTravelTime)
+                  int solverIterations, LifeStage stage, double mixedCoreMassFraction, SeismicScales seismic)
             implements ModelOutcome {
 
         public Solved {
@@ -62,12 +62,13 @@ public sealed interface ModelOutcome permits ModelOutcome.Solved, ModelOutcome.F
             Objects.requireNonNull(global, "global");
             Objects.requireNonNull(convection, "convection");
             Objects.requireNonNull(stage, "stage");
+            Objects.requireNonNull(seismic, "seismic");
         }
 
-        /** A model whose Pi_0 is not known. */
+        /** A model whose seismic scales are not known. */
         public Solved(ModelRequest request, GlobalProperties global, ConvectiveStructure convection,
                       int solverIterations, LifeStage stage, double mixedCoreMassFraction) {
-            this(request, global, convection, solverIterations, stage, mixedCoreMassFraction, Double.NaN);
+            this(request, global, convection, solverIterations, stage, mixedCoreMassFraction, SeismicScales.UNKNOWN);
         }
 
         /** A model whose central zone is mixed no further than itself. */
@@ -94,8 +95,7 @@ public sealed interface ModelOutcome permits ModelOutcome.Solved, ModelOutcome.F
 
         @Override
         public Solved withRequest(ModelRequest other) {
-            return new Solved(other, global, convection, solverIterations, stage, mixedCoreMassFraction,
-                    buoyancyTravelTime);
+            return new Solved(other, global, convection, solverIterations, stage, mixedCoreMassFraction, seismic);
         }
 
         @Override

@@ -52,8 +52,11 @@ public final class BuoyancyTravelTime {
         return of(radius, BuoyancyFrequency.squaredOf(model));
     }
 
-    /** Whether the radii are all above 0 and strictly increasing, as {@link #cavityIntegral} needs them. */
-    private static boolean increasingFromAboveZero(double[] radius) {
+    /**
+     * Whether the radii are all above 0 and strictly increasing, as {@link #cavityIntegral} and {@link
+     * AcousticTravelTime} need them.
+     */
+    static boolean increasingFromAboveZero(double[] radius) {
         if (radius.length == 0 || !(radius[0] > 0.0)) {
             return false;
         }

@@ -5,7 +5,7 @@ import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.ModelStatus;
 import org.convgrid.engine.state.Composition;
-import org.convgrid.engine.structure.BuoyancyTravelTime;
+import org.convgrid.engine.structure.ModelSeismicScales;
 
 /**
  * How a grid request becomes a zero-age model and how a zero-age result becomes a catalogue outcome; shared by
@@ -34,7 +34,7 @@ public final class ZeroAgeRequests {
         if (result.converged()) {
             var model = result.model().model();
             return new ModelOutcome.Solved(request, model.global(), model.convection(), result.iterations(),
-                    LifeStage.MAIN_SEQUENCE_UNTRACED, Double.NaN, BuoyancyTravelTime.of(model));
+                    LifeStage.MAIN_SEQUENCE_UNTRACED, Double.NaN, ModelSeismicScales.of(model));
         }
         return new ModelOutcome.Failed(request, ModelStatus.NOT_CONVERGED, result.failure().toString(),
                 result.iterations());

@@ -60,6 +60,10 @@ public final class CatalogueColumns {
     public static final String BUOYANCY_PERIOD_PI0_S = "buoyancy_period_pi0_s";
     /** Extension: the dipole g-mode period spacing Delta Pi_1 = Pi_0 / sqrt(2), s; the profiles' meta name. */
     public static final String PERIOD_SPACING_L1_S = "period_spacing_l1_s";
+    /** Extension: the asymptotic large separation of p modes, Delta nu = 1 / (2 integral of dr / c), microHz. */
+    public static final String LARGE_SEPARATION_UHZ = "large_separation_uhz";
+    /** Extension: the sound's travel time from the convective envelope's base up to the photosphere, s. */
+    public static final String ENV_CZ_BASE_ACOUSTIC_DEPTH_S = "env_cz_base_acoustic_depth_s";
 
     private static final String REAL = "float64";
     private static final String TEXT = "string";
@@ -126,7 +130,19 @@ public final class CatalogueColumns {
                             + " convective), when status is not ok, or in rows written before the column"),
             new EcsvColumn(PERIOD_SPACING_L1_S, "s", REAL,
                     "asymptotic period spacing of dipole g modes Delta Pi_1 = Pi_0 / sqrt(2), in seconds, rotation"
-                            + " ignored; empty when buoyancy_period_pi0_s is"));
+                            + " ignored; empty when buoyancy_period_pi0_s is"),
+            new EcsvColumn(LARGE_SEPARATION_UHZ, "uHz", REAL,
+                    "asymptotic large frequency separation of high-order p modes, Delta nu = 1 / (2 T), T the"
+                            + " acoustic radius (integral of dr / c from the centre to the photosphere, c the adiabatic"
+                            + " sound speed); no surface term, so a few per cent from the separation of computed or"
+                            + " observed frequencies; empty when status is not ok, or in rows written before the"
+                            + " column"),
+            new EcsvColumn(ENV_CZ_BASE_ACOUSTIC_DEPTH_S, "s", REAL,
+                    "acoustic depth of the base of the convective envelope (integral of dr / c from it up to the"
+                            + " photosphere), where glitch fits of the frequencies locate it; measured from the"
+                            + " photosphere, not from the acoustic surface above it; the acoustic radius when fully"
+                            + " convective; empty when no envelope, when status is not ok, or in rows written before"
+                            + " the column"));
 
     /** Every column convgrid writes for a run whose [Fe/H] is measured against the default Sun. */
     public static final List<EcsvColumn> DESCRIBED = described(IronAbundance.DEFAULT);

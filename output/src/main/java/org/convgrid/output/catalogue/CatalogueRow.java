@@ -55,6 +55,11 @@ import org.convgrid.output.Span;
  *     from a catalogue written before the column
  * @param periodSpacingL1S the dipole period spacing Delta Pi_1 = Pi_0 / sqrt(2), s, NaN when Pi_0 is; kept beside
  *     Pi_0 rather than derived from it, so that a row read and written again keeps both cells' digits
+ * @param largeSeparationUhz the asymptotic large separation Delta nu = 1 / (2 T) of p modes, microHz, T the acoustic
+ *     radius; NaN when not ok, or for rows read from a catalogue written before the column
+ * @param envCzBaseAcousticDepthS the acoustic depth of the convective envelope's base below the photosphere, s; the
+ *     acoustic radius when fully convective; NaN without an envelope, when not ok, or for rows read from a catalogue
+ *     written before the column
  */
 public record CatalogueRow(String modelId, double massMsun, double zInit, double yInit, double mixingLength,
                            double overshootHp, double ageGyr, String phase, ModelStatus status, String statusDetail,
@@ -65,7 +70,7 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
                            double turnoverTimeDays, List<CatalogueZone> zones, int solverIterations,
                            StabilityCriterion criterion, double opacityScale, double turnoverTimeGlobalDays,
                            double coreMixedMassFrac, OvershootScheme overshootProfile, double buoyancyPeriodPi0S,
-                           double periodSpacingL1S) {
+                           double periodSpacingL1S, double largeSeparationUhz, double envCzBaseAcousticDepthS) {
 
     /** The {@code phase} of a model on the main sequence. */
     public static final String MAIN_SEQUENCE = "main_sequence";
@@ -158,6 +163,8 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
         private OvershootScheme overshootProfile;
         private double buoyancyPeriodPi0S = Double.NaN;
         private double periodSpacingL1S = Double.NaN;
+        private double largeSeparationUhz = Double.NaN;
+        private double envCzBaseAcousticDepthS = Double.NaN;
 
         private Builder(String modelId, ModelStatus status) {
             this.modelId = Objects.requireNonNull(modelId, "modelId");
@@ -198,6 +205,8 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
             overshootProfile = row.overshootProfile;
             buoyancyPeriodPi0S = row.buoyancyPeriodPi0S;
             periodSpacingL1S = row.periodSpacingL1S;
+            largeSeparationUhz = row.largeSeparationUhz;
+            envCzBaseAcousticDepthS = row.envCzBaseAcousticDepthS;
         }
 
         public Builder modelId(String value) {
@@ -370,13 +379,24 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
             return this;
         }
 
+        public Builder largeSeparationUhz(double value) {
+            largeSeparationUhz = value;
+            return this;
+        }
+
+        public Builder envCzBaseAcousticDepthS(double value) {
+            envCzBaseAcousticDepthS = value;
+            return this;
+        }
+
         public CatalogueRow build() {
             return new CatalogueRow(modelId, massMsun, zInit, yInit, mixingLength, overshootHp, ageGyr, phase,
                     status, statusDetail, luminosityLsun, radiusRsun, teffK, logGCgs, centralTempK,
                     centralDensityCgs, centralHFrac, surfaceLiRel, structureClass, coreCzMassFrac, coreCzRadiusFrac,
                     envCzBaseMassFrac, envCzBaseRadiusFrac, envCzMassMsun, turnoverTimeDays, zones,
                     solverIterations, criterion, opacityScale, turnoverTimeGlobalDays, coreMixedMassFrac,
-                    overshootProfile, buoyancyPeriodPi0S, periodSpacingL1S);
+                    overshootProfile, buoyancyPeriodPi0S, periodSpacingL1S, largeSeparationUhz,
+                    envCzBaseAcousticDepthS);
         }
     }
 }

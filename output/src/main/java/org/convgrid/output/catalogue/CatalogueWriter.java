@@ -114,6 +114,8 @@ public final class CatalogueWriter implements Flushable, Closeable {
         cells.add(iron.cell(r.zInit(), r.yInit()));
         cells.add(CsvNumbers.format(r.buoyancyPeriodPi0S()));
         cells.add(CsvNumbers.format(r.periodSpacingL1S()));
+        cells.add(CsvNumbers.format(r.largeSeparationUhz()));
+        cells.add(CsvNumbers.format(r.envCzBaseAcousticDepthS()));
         return cells;
     }
 

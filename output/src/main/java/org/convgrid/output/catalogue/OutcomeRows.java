@@ -10,6 +10,7 @@ import org.convgrid.engine.request.GlobalProperties;
 import org.convgrid.engine.request.ModelOutcome;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.ModelStatus;
+import org.convgrid.engine.request.SeismicScales;
 import org.convgrid.engine.structure.BuoyancyTravelTime;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.output.CsvNumbers;
@@ -21,7 +22,8 @@ import org.convgrid.output.catalogue.CatalogueZone.ZoneKind;
  * M_sun, ages over the Julian gigayear, times over the day, log g = log10(g). Whatever does not apply is NaN (an
  * empty cell): every column of a failed outcome, the core columns of a star without a convective core (a fully
  * convective star included: its one zone is the whole star), the envelope columns of a star without a convective
- * envelope, the g-mode period scale of a star without a g-mode cavity. A fully convective star's envelope base is
+ * envelope, the g-mode period scale of a star without a g-mode cavity, the envelope base's acoustic depth of a
+ * star without an envelope. Frequencies are written in microHz. A fully convective star's envelope base is
  * the centre (0) and its envelope mass the whole star.
  */
 public final class OutcomeRows {
@@ -41,7 +43,8 @@ public final class OutcomeRows {
                 || kind == StructureClass.FULLY_CONVECTIVE;
         ConvectiveZone innermost = c == null || c.zones().isEmpty() ? null : c.zones().get(0);
         // the very double star prints and the profile's meta carries: the same function of the same model
-        double pi0 = outcome instanceof ModelOutcome.Solved s ? s.buoyancyTravelTime() : nan;
+        SeismicScales seismic = outcome instanceof ModelOutcome.Solved s ? s.seismic() : SeismicScales.UNKNOWN;
+        double pi0 = seismic.buoyancyTravelTime();
         return CatalogueRow.builder(request.modelId(), outcome.status())
                 .massMsun(request.mass() / Constants.M_SUN)
                 .zInit(request.initialMetals())
@@ -75,6 +78,8 @@ public final class OutcomeRows {
                 .overshootProfile(request.physics().overshootScheme())
                 .buoyancyPeriodPi0S(pi0)
                 .periodSpacingL1S(Double.isNaN(pi0) ? nan : BuoyancyTravelTime.periodSpacing(pi0, 1))
+                .largeSeparationUhz(seismic.largeSeparation() * 1e6)
+                .envCzBaseAcousticDepthS(seismic.envelopeBaseAcousticDepth())
                 .build();
     }
 

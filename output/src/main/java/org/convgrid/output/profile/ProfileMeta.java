@@ -6,7 +6,9 @@ import java.util.Map;
 import org.convgrid.engine.request.Age;
 import org.convgrid.engine.request.ModelRequest;
 import org.convgrid.engine.request.PhysicsOptions;
+import org.convgrid.engine.request.SeismicScales;
 import org.convgrid.engine.structure.BuoyancyTravelTime;
+import org.convgrid.engine.structure.ModelSeismicScales;
 import org.convgrid.engine.structure.StellarModel;
 import org.convgrid.engine.structure.StellarProfile;
 import org.convgrid.engine.units.Constants;
@@ -30,13 +32,14 @@ import org.convgrid.engine.units.Constants;
  * @param settling whether helium and metals settled (calibrate-sun only; grids and star evolve without it)
  * @param toolVersion the convgrid version that wrote the file
  * @param toolCommit the git commit it was built from
- * @param buoyancyTravelTime Pi_0, s ({@link BuoyancyTravelTime}); NaN (and its keys left out) for a star with no
- *     g-mode cavity
+ * @param seismic the model's seismic scales ({@link ModelSeismicScales}): Pi_0 (NaN, and its keys left out, for a star
+ *     with no g-mode cavity), the acoustic radius, the envelope base's acoustic depth (NaN and left out without an
+ *     envelope)
  */
 public record ProfileMeta(String modelId, double mass, double radius, double luminosity, double effectiveTemperature,
                           double ageGyr, String ageOrigin, double initialMetals, double initialHelium,
                           PhysicsOptions physics, boolean settling, String toolVersion, String toolCommit,
-                          double buoyancyTravelTime) {
+                          SeismicScales seismic) {
 
     public static final String MODEL_ID = "model_id";
     public static final String MASS_G = "mass_g";
@@ -75,6 +78,10 @@ public record ProfileMeta(String modelId, double mass, double radius, double lum
     public static final String BUOYANCY_PERIOD_PI0_S = "buoyancy_period_pi0_s";
     /** The asymptotic dipole g-mode period spacing Pi_0 / sqrt 2, s; absent with Pi_0. */
     public static final String PERIOD_SPACING_L1_S = "period_spacing_l1_s";
+    /** The asymptotic large separation 1 / (2 integral of dr / c), microHz; the catalogue's column of that name. */
+    public static final String LARGE_SEPARATION_UHZ = "large_separation_uhz";
+    /** The envelope base's acoustic depth below the photosphere, s; absent without a convective envelope. */
+    public static final String ENV_CZ_BASE_ACOUSTIC_DEPTH_S = "env_cz_base_acoustic_depth_s";
 
     /**
      * The meta of a solved model.
@@ -92,7 +99,7 @@ public record ProfileMeta(String modelId, double mass, double radius, double lum
         return new ProfileMeta(request.modelId(), p.mass(surface), p.radius(surface), p.luminosity(surface),
                 model.global().effectiveTemperature(), seconds / Constants.GYR, age.origin().label(),
                 request.initialMetals(), request.initialHelium(), request.physics(), settling, toolVersion,
-                toolCommit, BuoyancyTravelTime.of(model));
+                toolCommit, ModelSeismicScales.of(model));
     }
 
     /** The mapping as written: the star, its age and composition, the physics, the constants, the tool. */
@@ -131,9 +138,18 @@ public record ProfileMeta(String modelId, double mass, double radius, double lum
         m.put(TOOL_VERSION, toolVersion);
         m.put(TOOL_COMMIT, toolCommit);
         // after the tool's keys, so that the keys of earlier profiles keep their places
-        if (!Double.isNaN(buoyancyTravelTime)) {
-            m.put(BUOYANCY_PERIOD_PI0_S, buoyancyTravelTime);
-            m.put(PERIOD_SPACING_L1_S, BuoyancyTravelTime.periodSpacing(buoyancyTravelTime, 1));
+        double pi0 = seismic.buoyancyTravelTime();
+        if (!Double.isNaN(pi0)) {
+            m.put(BUOYANCY_PERIOD_PI0_S, pi0);
+            m.put(PERIOD_SPACING_L1_S, BuoyancyTravelTime.periodSpacing(pi0, 1));
+        }
+        // after Pi_0's keys, for the same reason; the catalogue's very doubles (OutcomeRows)
+        double largeSeparationUhz = seismic.largeSeparation() * 1e6;
+        if (!Double.isNaN(largeSeparationUhz)) {
+            m.put(LARGE_SEPARATION_UHZ, largeSeparationUhz);
+        }
+        if (!Double.isNaN(seismic.envelopeBaseAcousticDepth())) {
+            m.put(ENV_CZ_BASE_ACOUSTIC_DEPTH_S, seismic.envelopeBaseAcousticDepth());
         }
         return m;
     }

@@ -50,7 +50,7 @@ public final class TrackWriter {
             boolean fullyConvective = central != null && central == surface;
             boolean burns = !Double.isNaN(s.burningInner());
             double burnLo = burns ? clamp(s.burningInner()) : Double.NaN;
-            double pi0 = s.buoyancyTravelTime();
+            double pi0 = s.seismic().buoyancyTravelTime();
             out.append(CsvNumbers.format(s.age() / Constants.GYR)).append(',')
                     .append(p.phase().label()).append(',')
                     .append(CsvNumbers.format(s.luminosity() / Constants.L_SUN)).append(',')

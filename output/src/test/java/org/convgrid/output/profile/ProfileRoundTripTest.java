@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import org.convgrid.engine.request.PhysicsOptions;
+import org.convgrid.engine.request.SeismicScales;
 import org.convgrid.engine.units.Constants;
 import org.junit.jupiter.api.Test;
 import org.snakeyaml.engine.v2.api.Load;
@@ -19,7 +20,7 @@ class ProfileRoundTripTest {
     /** An illustrative star (a Sun-like model), not computed values. */
     private static final ProfileMeta ILLUSTRATIVE_META = new ProfileMeta("illustrative", Constants.M_SUN,
             Constants.R_SUN, Constants.L_SUN, 5772.0, 4.57, "birth", 0.02, 0.27, PhysicsOptions.DEFAULT, false,
-            "1.2.3", "unknown", 2216.9);
+            "1.2.3", "unknown", new SeismicScales(2216.9, 3529.3, 2086.3));
 
     /** The ECSV header describes the columns the name row lists, in its order: two lists kept in step by hand. */
     @Test
@@ -99,21 +100,34 @@ class ProfileRoundTripTest {
         assertThat(meta.get(ProfileMeta.BUOYANCY_PERIOD_PI0_S)).isEqualTo(2216.9);
         // Delta Pi_1 = Pi_0 / sqrt(1 * 2) (Tassoul 1980; Aerts, Christensen-Dalsgaard & Kurtz 2010, ch. 3; from memory)
         assertThat(meta.get(ProfileMeta.PERIOD_SPACING_L1_S)).isEqualTo(2216.9 / Math.sqrt(2.0));
-        // the earlier keys keep their order; the new two follow them, last
+        // the earlier keys keep their order; the g-mode two follow them, then the p-mode two
         List<String> keys = new ArrayList<>(meta.keySet());
-        assertThat(keys.subList(keys.size() - 3, keys.size())).containsExactly(ProfileMeta.TOOL_COMMIT,
-                ProfileMeta.BUOYANCY_PERIOD_PI0_S, ProfileMeta.PERIOD_SPACING_L1_S);
+        assertThat(keys.subList(keys.size() - 5, keys.size())).containsExactly(ProfileMeta.TOOL_COMMIT,
+                ProfileMeta.BUOYANCY_PERIOD_PI0_S, ProfileMeta.PERIOD_SPACING_L1_S, ProfileMeta.LARGE_SEPARATION_UHZ,
+                ProfileMeta.ENV_CZ_BASE_ACOUSTIC_DEPTH_S);
+    }
+
+    @Test
+    void theLargeSeparationIsHalfTheInverseAcousticRadiusInMicrohertz() throws IOException {
+        StringBuilder out = new StringBuilder();
+        ProfileWriter.write(ILLUSTRATIVE_META, List.of(), out);
+        Map<String, Object> meta = metaOf(out.toString());
+        // Delta nu = 1 / (2 T) (Tassoul 1980, ApJS 43, 469; from memory): T = 3529.3 s gives 141.671 microHz
+        assertThat((Double) meta.get(ProfileMeta.LARGE_SEPARATION_UHZ)).isCloseTo(141.67115, within(1e-4));
+        assertThat(meta.get(ProfileMeta.ENV_CZ_BASE_ACOUSTIC_DEPTH_S)).isEqualTo(2086.3);
     }
 
     @Test
     void aStarWithoutAGModeCavityLeavesBothKeysOut() throws IOException {
         ProfileMeta fullyConvective = new ProfileMeta("illustrative", 0.2 * Constants.M_SUN, 0.2 * Constants.R_SUN,
                 0.005 * Constants.L_SUN, 3200.0, 1.0, "birth", 0.02, 0.27, PhysicsOptions.DEFAULT, false, "1.2.3",
-                "unknown", Double.NaN);
+                "unknown", new SeismicScales(Double.NaN, 1500.0, 1500.0));
         StringBuilder out = new StringBuilder();
         ProfileWriter.write(fullyConvective, List.of(), out);
         Map<String, Object> meta = metaOf(out.toString());
         assertThat(meta).doesNotContainKeys(ProfileMeta.BUOYANCY_PERIOD_PI0_S, ProfileMeta.PERIOD_SPACING_L1_S);
         assertThat(meta).containsKey(ProfileMeta.TOOL_COMMIT);
+        // its p modes have a cavity: the whole star, the envelope reaching the centre
+        assertThat(meta).containsKeys(ProfileMeta.LARGE_SEPARATION_UHZ, ProfileMeta.ENV_CZ_BASE_ACOUSTIC_DEPTH_S);
     }
 }

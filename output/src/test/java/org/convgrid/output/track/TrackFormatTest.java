@@ -13,6 +13,7 @@ import org.convgrid.engine.birth.TrackPoint;
 import org.convgrid.engine.convection.ConvectiveZone;
 import org.convgrid.engine.error.ErrorKind;
 import org.convgrid.engine.evolution.EvolutionStep;
+import org.convgrid.engine.request.SeismicScales;
 import org.convgrid.engine.units.Constants;
 import org.convgrid.output.OutputFormatException;
 import org.convgrid.output.Span;
@@ -47,7 +48,7 @@ class TrackFormatTest {
         EvolutionStep overshot = new EvolutionStep(plain.age(), plain.timeStep(), plain.luminosity(), plain.radius(),
                 plain.effectiveTemperature(), plain.centralTemperature(), plain.centralDensity(),
                 plain.centralHydrogen(), cored, plain.burningInner(), plain.burningOuter(), plain.iterations(),
-                Double.NaN, 0.095);
+                SeismicScales.UNKNOWN, 0.095);
         StringBuilder text = new StringBuilder();
         TrackWriter.write(Constants.M_SUN, List.of(
                 new TrackPoint(step(0.001, List.of(new ConvectiveZone(0.0, 1.0, 0.0, 1.0))), Phase.PRE_MAIN_SEQUENCE,
