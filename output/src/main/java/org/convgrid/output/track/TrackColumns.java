@@ -53,12 +53,23 @@ public final class TrackColumns {
      * written before the column.
      */
     public static final String CORE_MIXED = "core_mixed_mass_frac";
+    /**
+     * The step's asymptotic large separation Delta nu = 1 / (2 T) of p modes, microHz, as the catalogue's column of the
+     * same name; empty in track files written before the column.
+     */
+    public static final String LARGE_SEPARATION = "large_separation_uhz";
+    /**
+     * The acoustic depth of the step's convective-envelope base below the photosphere, s, as the catalogue's column of
+     * the same name (the acoustic radius when fully convective); empty without an envelope and in track files written
+     * before the column.
+     */
+    public static final String ENV_CZ_BASE_ACOUSTIC_DEPTH = "env_cz_base_acoustic_depth_s";
 
     /** Every column of a track file, in the order the writer writes them; new ones only ever at the end. */
     public static final List<String> ALL = List.of(AGE_GYR, PHASE, LUMINOSITY, RADIUS, TEFF, LOG_G, CENTRAL_TEMP,
             CENTRAL_DENSITY, CENTRAL_H, SURFACE_LI, CENTRAL_CZ_TOP, ENV_CZ_BASE, CONV_ZONE_COUNT, BURNING_INNER,
             BURNING_OUTER, NUCLEAR_FRACTION, TIME_STEP, SOLVER_ITERATIONS, BUOYANCY_PERIOD_PI0, PERIOD_SPACING_L1,
-            CORE_MIXED);
+            CORE_MIXED, LARGE_SEPARATION, ENV_CZ_BASE_ACOUSTIC_DEPTH);
 
     /** Row of the step in its track file, 0 = the first step. */
     public static final String STEP_INDEX = "step_index";

@@ -78,7 +78,9 @@ public final class TrackWriter {
                     .append(CsvNumbers.format(Double.isNaN(pi0) ? Double.NaN
                             : BuoyancyTravelTime.periodSpacing(pi0, 1))).append(',')
                     .append(CsvNumbers.format(central == null || fullyConvective ? Double.NaN
-                            : MixedCoreEdge.of(s.mixedCoreTop(), clamp(central.outerMassFraction())))).append('\n');
+                            : MixedCoreEdge.of(s.mixedCoreTop(), clamp(central.outerMassFraction())))).append(',')
+                    .append(CsvNumbers.format(s.seismic().largeSeparation() * 1e6)).append(',')
+                    .append(CsvNumbers.format(s.seismic().envelopeBaseAcousticDepth())).append('\n');
         }
     }
 
