@@ -84,8 +84,9 @@ final class StarReport {
         line(out, "buoyancy travel time Pi_0", row.buoyancyPeriodPi0S(), "s");
         line(out, "dipole period spacing Delta Pi_1", row.periodSpacingL1S(), "s");
         // the p-mode scales of solar-like oscillators: Delta nu and where the envelope's glitch lies
-        line(out, "large separation Delta nu", row.largeSeparationUhz(), "uHz");
-        line(out, "envelope base, acoustic depth", row.envCzBaseAcousticDepthS(), "s");
+        line(out, "asymptotic Delta nu = 1/(2T)", row.largeSeparationUhz(), "uHz");
+        line(out, "surface zone, acoustic depth", row.surfaceCzBaseAcousticDepthS(), "s");
+        line(out, "He II dip, acoustic depth", row.heIiIonisationAcousticDepthS(), "s");
         out.println();
         // the zones as zones.csv lists them, with their kind (without it a reader could not tell a central zone below
         // the core threshold from a core, nor see the mass of a surface zone whose m/M ends both print 1.000000)

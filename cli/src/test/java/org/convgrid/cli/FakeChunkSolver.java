@@ -67,7 +67,8 @@ final class FakeChunkSolver implements ChunkSolver {
                 ConvectiveStructure convection = convection(r);
                 outcomes.add(new ModelOutcome.Solved(r, global(r, seed), convection, iterations,
                         LifeStage.MAIN_SEQUENCE_UNTRACED, Double.NaN,
-                        periodScale ? new SeismicScales(buoyancyTravelTime(r, convection), Double.NaN, Double.NaN)
+                        periodScale ? new SeismicScales(buoyancyTravelTime(r, convection), Double.NaN, Double.NaN,
+                                Double.NaN)
                                 : SeismicScales.UNKNOWN));
             }
         }

@@ -112,7 +112,7 @@ class ZamsOriginTest {
         // the catalogue has since gained core_mixed_mass_frac (empty: these stars have no core), overshoot_profile
         // and fe_h_dex (log10(0.02 / 0.70 / 0.0245) = 0.0668 against the default Sun), then the g-mode period scale
         // (buoyancy_period_pi0_s, period_spacing_l1_s: empty for the fully convective 0.3 Msun, GModePeriodColumnsTest
-        // checks their values) and the p-mode scales (large_separation_uhz, env_cz_base_acoustic_depth_s,
+        // checks their values) and the p-mode scales (large_separation_uhz, surface_cz_base_acoustic_depth_s,
         // AcousticColumnsTest), cut off here
         int pi0 = CatalogueColumns.HEADER.indexOf(CatalogueColumns.BUOYANCY_PERIOD_PI0_S);
         List<String> data = rows.subList(1, rows.size());

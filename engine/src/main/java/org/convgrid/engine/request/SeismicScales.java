@@ -8,14 +8,18 @@ package org.convgrid.engine.request;
  *     g-mode cavity (fully convective)
  * @param acousticRadius the sound's travel time from the centre to the photosphere, T = integral of dr / c, s
  *     ({@code structure.AcousticTravelTime})
- * @param envelopeBaseAcousticDepth the sound's travel time from the base of the convective envelope to the
- *     photosphere, s; the acoustic radius when the star is fully convective (its envelope reaches the centre); NaN
- *     without a convective envelope
+ * @param surfaceZoneBaseAcousticDepth the sound's travel time from the base of the convective zone that reaches the
+ *     surface up to the photosphere, s, however little mass the zone holds (the base a glitch fit sees, where the
+ *     catalogue's envelope also needs 1e-6 of the mass); the acoustic radius when the star is fully convective (its
+ *     zone reaches the centre); NaN when the surface is radiative
+ * @param heliumSecondIonisationAcousticDepth the travel time from the minimum of Gamma1 that helium's second
+ *     ionisation makes in the outer layers up to the photosphere, s; NaN when the model shows no such minimum
  */
-public record SeismicScales(double buoyancyTravelTime, double acousticRadius, double envelopeBaseAcousticDepth) {
+public record SeismicScales(double buoyancyTravelTime, double acousticRadius, double surfaceZoneBaseAcousticDepth,
+                            double heliumSecondIonisationAcousticDepth) {
 
     /** Nothing known: an outcome made without its model. */
-    public static final SeismicScales UNKNOWN = new SeismicScales(Double.NaN, Double.NaN, Double.NaN);
+    public static final SeismicScales UNKNOWN = new SeismicScales(Double.NaN, Double.NaN, Double.NaN, Double.NaN);
 
     /**
      * The asymptotic large frequency separation of high-order p modes, Delta nu = 1 / (2 T), Hz (Tassoul 1980, ApJS
@@ -23,5 +27,10 @@ public record SeismicScales(double buoyancyTravelTime, double acousticRadius, do
      */
     public double largeSeparation() {
         return 0.5 / acousticRadius;
+    }
+
+    /** {@link #largeSeparation()} in microHz, the unit every table and report gives it in. */
+    public double largeSeparationMicrohertz() {
+        return largeSeparation() * 1e6;
     }
 }

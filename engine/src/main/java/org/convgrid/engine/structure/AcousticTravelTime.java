@@ -71,8 +71,8 @@ public final class AcousticTravelTime {
         // r lies in (radius[k - 1], radius[k]]: the part of that interval above r, then every interval above it
         double slownessBelow = 1.0 / soundSpeed[k - 1];
         double slownessAbove = 1.0 / soundSpeed[k];
-        double share = (r - radius[k - 1]) / (radius[k] - radius[k - 1]);
-        double slownessAtR = slownessBelow + share * (slownessAbove - slownessBelow);
+        double weight = (r - radius[k - 1]) / (radius[k] - radius[k - 1]);
+        double slownessAtR = slownessBelow + weight * (slownessAbove - slownessBelow);
         return 0.5 * (slownessAtR + slownessAbove) * (radius[k] - r) + depthFrom(radius, soundSpeed, k);
     }
 
@@ -83,6 +83,23 @@ public final class AcousticTravelTime {
             sum += 0.5 * (1.0 / soundSpeed[j - 1] + 1.0 / soundSpeed[j]) * (radius[j] - radius[j - 1]);
         }
         return sum;
+    }
+
+    /**
+     * Whether the integrals can be formed: as many sound speeds as radii, the radii all above 0 and strictly
+     * increasing, the sound speeds all above 0. A caller that must not fail (every step of an evolution asks for the
+     * travel times) asks this first; the integrals themselves throw, saying which point is wrong.
+     */
+    public static boolean integrable(double[] radius, double[] soundSpeed) {
+        if (radius.length != soundSpeed.length || !BuoyancyTravelTime.increasingFromAboveZero(radius)) {
+            return false;
+        }
+        for (double c : soundSpeed) {
+            if (!(c > 0.0)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private static void check(double[] radius, double[] soundSpeed) {

@@ -1,12 +1,17 @@
 package org.convgrid.engine.structure;
 
+import java.util.List;
+import org.convgrid.engine.convection.ConvectiveZone;
+import org.convgrid.engine.convection.ConvectiveZoneFinder;
 import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.engine.request.SeismicScales;
 
 /**
  * The {@link SeismicScales} of a solved model: its buoyancy travel time ({@link BuoyancyTravelTime}), its acoustic
- * radius and the acoustic depth of its convective envelope's base ({@link AcousticTravelTime}). Every catalogue row,
- * track row, `star` report and profile header takes them from here, so the four never disagree. Stateless.
+ * radius, and the acoustic depths ({@link AcousticTravelTime}) of the two sharp features of the outer sound speed that
+ * glitch fits of solar-like oscillators locate: the base of the surface convection zone and helium's second
+ * ionisation ({@link HeliumIonisationDip}). Every catalogue row, track row, {@code star} report and profile header
+ * takes them from here, so the four never disagree. Stateless.
  */
 public final class ModelSeismicScales {
 
@@ -23,37 +28,36 @@ public final class ModelSeismicScales {
         double pi0 = BuoyancyTravelTime.of(model);
         double[] radius = model.profile().radii();
         double[] soundSpeed = AcousticTravelTime.soundSpeeds(model);
-        if (!integrable(radius, soundSpeed)) {
-            return new SeismicScales(pi0, Double.NaN, Double.NaN);
+        if (!AcousticTravelTime.integrable(radius, soundSpeed)) {
+            return new SeismicScales(pi0, Double.NaN, Double.NaN, Double.NaN);
         }
         double acousticRadius = AcousticTravelTime.acousticRadius(radius, soundSpeed);
-        return new SeismicScales(pi0, acousticRadius, envelopeBaseDepth(model, radius, soundSpeed, acousticRadius));
+        double dip = HeliumIonisationDip.radiusOf(model);
+        return new SeismicScales(pi0, acousticRadius, surfaceZoneBaseDepth(model, radius, soundSpeed, acousticRadius),
+                Double.isNaN(dip) ? Double.NaN : AcousticTravelTime.depthAt(radius, soundSpeed, dip));
     }
 
-    /** NaN without a convective envelope; the whole acoustic radius when the envelope reaches the centre. */
-    private static double envelopeBaseDepth(StellarModel model, double[] radius, double[] soundSpeed,
-                                            double acousticRadius) {
-        StructureClass kind = model.convection().structureClass();
-        if (kind == StructureClass.FULLY_CONVECTIVE) {
+    /**
+     * The depth of the base of the zone that reaches the surface, however thin; the whole acoustic radius when the
+     * star is one zone from the centre; NaN when the surface is radiative.
+     */
+    private static double surfaceZoneBaseDepth(StellarModel model, double[] radius, double[] soundSpeed,
+                                               double acousticRadius) {
+        if (model.convection().structureClass() == StructureClass.FULLY_CONVECTIVE) {
             return acousticRadius;
         }
-        if (kind != StructureClass.CONV_ENVELOPE && kind != StructureClass.CONV_CORE_AND_ENVELOPE) {
+        List<ConvectiveZone> zones = model.convection().zones();
+        if (zones.isEmpty()) {
+            return Double.NaN;
+        }
+        ConvectiveZone outermost = zones.get(zones.size() - 1);
+        double fraction = outermost.innerRadiusFraction();
+        if (!ConvectiveZoneFinder.reachesSurface(outermost.outerMassFraction(),
+                ConvectiveZoneFinder.DEFAULT_SURFACE_SKIN_MASS_FRACTION) || Double.isNaN(fraction)) {
+            // a radiative surface; or no base to measure from (Math.min and max below would pass NaN through)
             return Double.NaN;
         }
         double surface = radius[radius.length - 1];
-        double base = Math.min(1.0, Math.max(0.0, model.convection().envelopeBaseRadiusFraction())) * surface;
-        return AcousticTravelTime.depthAt(radius, soundSpeed, base);
-    }
-
-    private static boolean integrable(double[] radius, double[] soundSpeed) {
-        if (!BuoyancyTravelTime.increasingFromAboveZero(radius)) {
-            return false;
-        }
-        for (double c : soundSpeed) {
-            if (!(c > 0.0)) {
-                return false;
-            }
-        }
-        return true;
+        return AcousticTravelTime.depthAt(radius, soundSpeed, Math.min(1.0, Math.max(0.0, fraction)) * surface);
     }
 }

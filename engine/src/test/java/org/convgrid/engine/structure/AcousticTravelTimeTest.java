@@ -53,19 +53,53 @@ class AcousticTravelTimeTest {
         assertThat(AcousticTravelTime.acousticRadius(r, c)).isCloseTo(exactRadius, within(1e-9 * exactRadius));
     }
 
-    @Test
-    void depthsAddUpToTheAcousticRadius() {
-        double[] r = evenRadii(5e7, 7e10, 300);
+    /** Radii crowding towards the surface like a star's mesh: x = 1 - (1 - k / (n - 1))^3, from x0 up to 1. */
+    private static double[] surfaceCrowdedRadii(double surface, int points) {
+        double[] r = new double[points];
+        for (int k = 0; k < points; k++) {
+            double u = 1.0 - (double) k / (points - 1);
+            r[k] = surface * (1e-3 + (1.0 - 1e-3) * (1.0 - u * u * u));
+        }
+        return r;
+    }
+
+    /** 1 / c = a + b / (1 - x + e), x = r / R: slow near the surface as in a star, and integrable in closed form. */
+    private static double[] steepSoundSpeeds(double[] r, double surface) {
         double[] c = new double[r.length];
         for (int k = 0; k < r.length; k++) {
-            // a speed falling steeply to the surface, as in a star (c ~ 5e7 cm/s at the centre, ~1e6 at the top)
-            c[k] = 5e7 * Math.pow(1.0 - 0.98 * r[k] / 7e10, 1.5) + 1e5;
+            c[k] = 1.0 / (2e-8 + 1e-9 / (1.0 - r[k] / surface + 1e-3));
         }
+        return c;
+    }
+
+    /** The closed form of the integral of that 1 / c from r1 to r2, s. */
+    private static double steepTravelTime(double r1, double r2, double surface) {
+        return 2e-8 * (r2 - r1) + 1e-9 * surface
+                * Math.log((1.0 - r1 / surface + 1e-3) / (1.0 - r2 / surface + 1e-3));
+    }
+
+    @Test
+    void aSpeedFallingSteeplyToTheSurfaceIsIntegratedToATenthOfAPerCentAndDepthsAdd() {
+        double surface = 7e10;
+        double[] r = surfaceCrowdedRadii(surface, 500);
+        double[] c = steepSoundSpeeds(r, surface);
         double total = AcousticTravelTime.acousticRadius(r, c);
-        double deep = AcousticTravelTime.depthAt(r, c, 0.5 * 7e10);
-        double shallow = AcousticTravelTime.depthAt(r, c, 0.9 * 7e10);
-        assertThat(deep).isGreaterThan(shallow).isLessThan(total);
-        assertThat(AcousticTravelTime.depthAt(r, c, r[0])).isCloseTo(total - r[0] / c[0], within(1e-9 * total));
+        // the part below the innermost point (r0 = 1e-3 R) at that point's speed, the rest in closed form
+        double exact = r[0] * (2e-8 + 1e-9 / (1.0 - r[0] / surface + 1e-3)) + steepTravelTime(r[0], surface, surface);
+        assertThat(total).isCloseTo(exact, within(1e-3 * exact));
+        double base = 0.713 * surface;
+        assertThat(AcousticTravelTime.depthAt(r, c, base))
+                .isCloseTo(steepTravelTime(base, surface, surface), within(1e-3 * exact));
+        // half the points: the error grows about fourfold (second order), still small
+        double[] half = surfaceCrowdedRadii(surface, 250);
+        double coarse = AcousticTravelTime.acousticRadius(half, steepSoundSpeeds(half, surface));
+        assertThat(Math.abs(coarse - exact)).isGreaterThan(2.0 * Math.abs(total - exact))
+                .isLessThan(5e-3 * exact);
+        // depths add: from 0.5 R up equals from 0.5 R to 0.9 R plus from 0.9 R up
+        double deep = AcousticTravelTime.depthAt(r, c, 0.5 * surface);
+        double shallow = AcousticTravelTime.depthAt(r, c, 0.9 * surface);
+        assertThat(deep - shallow).isCloseTo(steepTravelTime(0.5 * surface, 0.9 * surface, surface),
+                within(1e-3 * exact));
     }
 
     @Test

@@ -62,8 +62,10 @@ public final class CatalogueColumns {
     public static final String PERIOD_SPACING_L1_S = "period_spacing_l1_s";
     /** Extension: the asymptotic large separation of p modes, Delta nu = 1 / (2 integral of dr / c), microHz. */
     public static final String LARGE_SEPARATION_UHZ = "large_separation_uhz";
-    /** Extension: the sound's travel time from the convective envelope's base up to the photosphere, s. */
-    public static final String ENV_CZ_BASE_ACOUSTIC_DEPTH_S = "env_cz_base_acoustic_depth_s";
+    /** Extension: the sound's travel time from the base of the surface convection zone up to the photosphere, s. */
+    public static final String SURFACE_CZ_BASE_ACOUSTIC_DEPTH_S = "surface_cz_base_acoustic_depth_s";
+    /** Extension: the sound's travel time from helium's second-ionisation dip of Gamma1 up to the photosphere, s. */
+    public static final String HE_II_IONISATION_ACOUSTIC_DEPTH_S = "he_ii_ionisation_acoustic_depth_s";
 
     private static final String REAL = "float64";
     private static final String TEXT = "string";
@@ -137,12 +139,18 @@ public final class CatalogueColumns {
                             + " sound speed); no surface term, so a few per cent from the separation of computed or"
                             + " observed frequencies; empty when status is not ok, or in rows written before the"
                             + " column"),
-            new EcsvColumn(ENV_CZ_BASE_ACOUSTIC_DEPTH_S, "s", REAL,
-                    "acoustic depth of the base of the convective envelope (integral of dr / c from it up to the"
-                            + " photosphere), where glitch fits of the frequencies locate it; measured from the"
-                            + " photosphere, not from the acoustic surface above it; the acoustic radius when fully"
-                            + " convective; empty when no envelope, when status is not ok, or in rows written before"
-                            + " the column"));
+            new EcsvColumn(SURFACE_CZ_BASE_ACOUSTIC_DEPTH_S, "s", REAL,
+                    "acoustic depth of the base of the convective zone that reaches the surface (integral of dr / c"
+                            + " from it up to the photosphere), however thin the zone (F stars' envelopes under the"
+                            + " 1e-6 of the mass that env_cz_* need included), where glitch fits of the frequencies"
+                            + " locate it; measured from the photosphere, not from the acoustic surface above it; the"
+                            + " acoustic radius when fully convective; empty when the surface is radiative, when status"
+                            + " is not ok, or in rows written before the column"),
+            new EcsvColumn(HE_II_IONISATION_ACOUSTIC_DEPTH_S, "s", REAL,
+                    "acoustic depth of the minimum of Gamma1 that helium's second ionisation makes between 3e4 and"
+                            + " 4e5 K, the other glitch of solar-like oscillators, measured from the photosphere; empty"
+                            + " when the model shows no such dip, when status is not ok, or in rows written before the"
+                            + " column"));
 
     /** Every column convgrid writes for a run whose [Fe/H] is measured against the default Sun. */
     public static final List<EcsvColumn> DESCRIBED = described(IronAbundance.DEFAULT);

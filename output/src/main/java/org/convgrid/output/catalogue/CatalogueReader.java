@@ -160,7 +160,8 @@ public final class CatalogueReader {
                     .buoyancyPeriodPi0S(c.number(CatalogueColumns.BUOYANCY_PERIOD_PI0_S))
                     .periodSpacingL1S(c.number(CatalogueColumns.PERIOD_SPACING_L1_S))
                     .largeSeparationUhz(c.number(CatalogueColumns.LARGE_SEPARATION_UHZ))
-                    .envCzBaseAcousticDepthS(c.number(CatalogueColumns.ENV_CZ_BASE_ACOUSTIC_DEPTH_S))
+                    .surfaceCzBaseAcousticDepthS(c.number(CatalogueColumns.SURFACE_CZ_BASE_ACOUSTIC_DEPTH_S))
+                    .heIiIonisationAcousticDepthS(c.number(CatalogueColumns.HE_II_IONISATION_ACOUSTIC_DEPTH_S))
                     .build();
         } catch (IllegalArgumentException e) {
             throw new OutputFormatException("catalogue row " + r.getRecordNumber() + " (line "

@@ -57,9 +57,11 @@ import org.convgrid.output.Span;
  *     Pi_0 rather than derived from it, so that a row read and written again keeps both cells' digits
  * @param largeSeparationUhz the asymptotic large separation Delta nu = 1 / (2 T) of p modes, microHz, T the acoustic
  *     radius; NaN when not ok, or for rows read from a catalogue written before the column
- * @param envCzBaseAcousticDepthS the acoustic depth of the convective envelope's base below the photosphere, s; the
- *     acoustic radius when fully convective; NaN without an envelope, when not ok, or for rows read from a catalogue
- *     written before the column
+ * @param surfaceCzBaseAcousticDepthS the acoustic depth of the surface convection zone's base below the photosphere,
+ *     s, however thin the zone; the acoustic radius when fully convective; NaN with a radiative surface, when not ok,
+ *     or for rows read from a catalogue written before the column
+ * @param heIiIonisationAcousticDepthS the acoustic depth of helium's second-ionisation dip of Gamma1, s; NaN without
+ *     a dip, when not ok, or for rows read from a catalogue written before the column
  */
 public record CatalogueRow(String modelId, double massMsun, double zInit, double yInit, double mixingLength,
                            double overshootHp, double ageGyr, String phase, ModelStatus status, String statusDetail,
@@ -70,7 +72,8 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
                            double turnoverTimeDays, List<CatalogueZone> zones, int solverIterations,
                            StabilityCriterion criterion, double opacityScale, double turnoverTimeGlobalDays,
                            double coreMixedMassFrac, OvershootScheme overshootProfile, double buoyancyPeriodPi0S,
-                           double periodSpacingL1S, double largeSeparationUhz, double envCzBaseAcousticDepthS) {
+                           double periodSpacingL1S, double largeSeparationUhz, double surfaceCzBaseAcousticDepthS,
+                           double heIiIonisationAcousticDepthS) {
 
     /** The {@code phase} of a model on the main sequence. */
     public static final String MAIN_SEQUENCE = "main_sequence";
@@ -164,7 +167,8 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
         private double buoyancyPeriodPi0S = Double.NaN;
         private double periodSpacingL1S = Double.NaN;
         private double largeSeparationUhz = Double.NaN;
-        private double envCzBaseAcousticDepthS = Double.NaN;
+        private double surfaceCzBaseAcousticDepthS = Double.NaN;
+        private double heIiIonisationAcousticDepthS = Double.NaN;
 
         private Builder(String modelId, ModelStatus status) {
             this.modelId = Objects.requireNonNull(modelId, "modelId");
@@ -206,7 +210,8 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
             buoyancyPeriodPi0S = row.buoyancyPeriodPi0S;
             periodSpacingL1S = row.periodSpacingL1S;
             largeSeparationUhz = row.largeSeparationUhz;
-            envCzBaseAcousticDepthS = row.envCzBaseAcousticDepthS;
+            surfaceCzBaseAcousticDepthS = row.surfaceCzBaseAcousticDepthS;
+            heIiIonisationAcousticDepthS = row.heIiIonisationAcousticDepthS;
         }
 
         public Builder modelId(String value) {
@@ -384,8 +389,13 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
             return this;
         }
 
-        public Builder envCzBaseAcousticDepthS(double value) {
-            envCzBaseAcousticDepthS = value;
+        public Builder surfaceCzBaseAcousticDepthS(double value) {
+            surfaceCzBaseAcousticDepthS = value;
+            return this;
+        }
+
+        public Builder heIiIonisationAcousticDepthS(double value) {
+            heIiIonisationAcousticDepthS = value;
             return this;
         }
 
@@ -396,7 +406,7 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
                     envCzBaseMassFrac, envCzBaseRadiusFrac, envCzMassMsun, turnoverTimeDays, zones,
                     solverIterations, criterion, opacityScale, turnoverTimeGlobalDays, coreMixedMassFrac,
                     overshootProfile, buoyancyPeriodPi0S, periodSpacingL1S, largeSeparationUhz,
-                    envCzBaseAcousticDepthS);
+                    surfaceCzBaseAcousticDepthS, heIiIonisationAcousticDepthS);
         }
     }
 }

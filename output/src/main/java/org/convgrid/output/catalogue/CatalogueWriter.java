@@ -115,7 +115,8 @@ public final class CatalogueWriter implements Flushable, Closeable {
         cells.add(CsvNumbers.format(r.buoyancyPeriodPi0S()));
         cells.add(CsvNumbers.format(r.periodSpacingL1S()));
         cells.add(CsvNumbers.format(r.largeSeparationUhz()));
-        cells.add(CsvNumbers.format(r.envCzBaseAcousticDepthS()));
+        cells.add(CsvNumbers.format(r.surfaceCzBaseAcousticDepthS()));
+        cells.add(CsvNumbers.format(r.heIiIonisationAcousticDepthS()));
         return cells;
     }
 

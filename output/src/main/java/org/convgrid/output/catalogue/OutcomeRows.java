@@ -22,9 +22,9 @@ import org.convgrid.output.catalogue.CatalogueZone.ZoneKind;
  * M_sun, ages over the Julian gigayear, times over the day, log g = log10(g). Whatever does not apply is NaN (an
  * empty cell): every column of a failed outcome, the core columns of a star without a convective core (a fully
  * convective star included: its one zone is the whole star), the envelope columns of a star without a convective
- * envelope, the g-mode period scale of a star without a g-mode cavity, the envelope base's acoustic depth of a
- * star without an envelope. Frequencies are written in microHz. A fully convective star's envelope base is
- * the centre (0) and its envelope mass the whole star.
+ * envelope, the g-mode period scale of a star without a g-mode cavity, the surface zone's acoustic depth of a
+ * star with a radiative surface, helium's ionisation depth where no dip shows. Frequencies are written in microHz.
+ * A fully convective star's envelope base is the centre (0) and its envelope mass the whole star.
  */
 public final class OutcomeRows {
 
@@ -78,8 +78,9 @@ public final class OutcomeRows {
                 .overshootProfile(request.physics().overshootScheme())
                 .buoyancyPeriodPi0S(pi0)
                 .periodSpacingL1S(Double.isNaN(pi0) ? nan : BuoyancyTravelTime.periodSpacing(pi0, 1))
-                .largeSeparationUhz(seismic.largeSeparation() * 1e6)
-                .envCzBaseAcousticDepthS(seismic.envelopeBaseAcousticDepth())
+                .largeSeparationUhz(seismic.largeSeparationMicrohertz())
+                .surfaceCzBaseAcousticDepthS(seismic.surfaceZoneBaseAcousticDepth())
+                .heIiIonisationAcousticDepthS(seismic.heliumSecondIonisationAcousticDepth())
                 .build();
     }
 

@@ -33,8 +33,8 @@ import org.convgrid.engine.units.Constants;
  * @param toolVersion the convgrid version that wrote the file
  * @param toolCommit the git commit it was built from
  * @param seismic the model's seismic scales ({@link ModelSeismicScales}): Pi_0 (NaN, and its keys left out, for a star
- *     with no g-mode cavity), the acoustic radius, the envelope base's acoustic depth (NaN and left out without an
- *     envelope)
+ *     with no g-mode cavity), the acoustic radius, the acoustic depths of the surface zone's base and of helium's
+ *     second ionisation (each NaN and left out where it has no meaning)
  */
 public record ProfileMeta(String modelId, double mass, double radius, double luminosity, double effectiveTemperature,
                           double ageGyr, String ageOrigin, double initialMetals, double initialHelium,
@@ -80,8 +80,10 @@ public record ProfileMeta(String modelId, double mass, double radius, double lum
     public static final String PERIOD_SPACING_L1_S = "period_spacing_l1_s";
     /** The asymptotic large separation 1 / (2 integral of dr / c), microHz; the catalogue's column of that name. */
     public static final String LARGE_SEPARATION_UHZ = "large_separation_uhz";
-    /** The envelope base's acoustic depth below the photosphere, s; absent without a convective envelope. */
-    public static final String ENV_CZ_BASE_ACOUSTIC_DEPTH_S = "env_cz_base_acoustic_depth_s";
+    /** The acoustic depth of the surface convection zone's base, s; absent when the surface is radiative. */
+    public static final String SURFACE_CZ_BASE_ACOUSTIC_DEPTH_S = "surface_cz_base_acoustic_depth_s";
+    /** The acoustic depth of helium's second-ionisation dip of Gamma1, s; absent without a dip. */
+    public static final String HE_II_IONISATION_ACOUSTIC_DEPTH_S = "he_ii_ionisation_acoustic_depth_s";
 
     /**
      * The meta of a solved model.
@@ -144,12 +146,15 @@ public record ProfileMeta(String modelId, double mass, double radius, double lum
             m.put(PERIOD_SPACING_L1_S, BuoyancyTravelTime.periodSpacing(pi0, 1));
         }
         // after Pi_0's keys, for the same reason; the catalogue's very doubles (OutcomeRows)
-        double largeSeparationUhz = seismic.largeSeparation() * 1e6;
+        double largeSeparationUhz = seismic.largeSeparationMicrohertz();
         if (!Double.isNaN(largeSeparationUhz)) {
             m.put(LARGE_SEPARATION_UHZ, largeSeparationUhz);
         }
-        if (!Double.isNaN(seismic.envelopeBaseAcousticDepth())) {
-            m.put(ENV_CZ_BASE_ACOUSTIC_DEPTH_S, seismic.envelopeBaseAcousticDepth());
+        if (!Double.isNaN(seismic.surfaceZoneBaseAcousticDepth())) {
+            m.put(SURFACE_CZ_BASE_ACOUSTIC_DEPTH_S, seismic.surfaceZoneBaseAcousticDepth());
+        }
+        if (!Double.isNaN(seismic.heliumSecondIonisationAcousticDepth())) {
+            m.put(HE_II_IONISATION_ACOUSTIC_DEPTH_S, seismic.heliumSecondIonisationAcousticDepth());
         }
         return m;
     }

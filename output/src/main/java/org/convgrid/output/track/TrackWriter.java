@@ -26,7 +26,8 @@ import org.convgrid.output.MixedCoreEdge;
  * {@link ConvectiveZoneFinder#DEFAULT_MIN_ENVELOPE_MASS_FRACTION} of the mass; one zone from the centre that is
  * also the envelope makes the star fully convective (central top 1, envelope base 0). The central zone is any zone
  * holding the centre, however small (the catalogue's core also needs the run's core threshold). The g-mode period
- * scale (Pi_0 and Delta Pi_1) is the catalogue's, of each step's model. Numbers in the
+ * scale (Pi_0 and Delta Pi_1) and the p-mode scales (Delta nu, the acoustic depths of the surface zone's base and
+ * of helium's second ionisation) are the catalogue's, of each step's model. Numbers in the
  * {@link CsvNumbers} form, so the same track always gives the same bytes.
  */
 public final class TrackWriter {
@@ -79,8 +80,9 @@ public final class TrackWriter {
                             : BuoyancyTravelTime.periodSpacing(pi0, 1))).append(',')
                     .append(CsvNumbers.format(central == null || fullyConvective ? Double.NaN
                             : MixedCoreEdge.of(s.mixedCoreTop(), clamp(central.outerMassFraction())))).append(',')
-                    .append(CsvNumbers.format(s.seismic().largeSeparation() * 1e6)).append(',')
-                    .append(CsvNumbers.format(s.seismic().envelopeBaseAcousticDepth())).append('\n');
+                    .append(CsvNumbers.format(s.seismic().largeSeparationMicrohertz())).append(',')
+                    .append(CsvNumbers.format(s.seismic().surfaceZoneBaseAcousticDepth())).append(',')
+                    .append(CsvNumbers.format(s.seismic().heliumSecondIonisationAcousticDepth())).append('\n');
         }
     }
 

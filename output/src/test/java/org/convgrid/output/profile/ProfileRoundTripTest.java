@@ -20,7 +20,7 @@ class ProfileRoundTripTest {
     /** An illustrative star (a Sun-like model), not computed values. */
     private static final ProfileMeta ILLUSTRATIVE_META = new ProfileMeta("illustrative", Constants.M_SUN,
             Constants.R_SUN, Constants.L_SUN, 5772.0, 4.57, "birth", 0.02, 0.27, PhysicsOptions.DEFAULT, false,
-            "1.2.3", "unknown", new SeismicScales(2216.9, 3529.3, 2086.3));
+            "1.2.3", "unknown", new SeismicScales(2216.9, 3529.3, 2086.3, 630.0));
 
     /** The ECSV header describes the columns the name row lists, in its order: two lists kept in step by hand. */
     @Test
@@ -102,9 +102,9 @@ class ProfileRoundTripTest {
         assertThat(meta.get(ProfileMeta.PERIOD_SPACING_L1_S)).isEqualTo(2216.9 / Math.sqrt(2.0));
         // the earlier keys keep their order; the g-mode two follow them, then the p-mode two
         List<String> keys = new ArrayList<>(meta.keySet());
-        assertThat(keys.subList(keys.size() - 5, keys.size())).containsExactly(ProfileMeta.TOOL_COMMIT,
+        assertThat(keys.subList(keys.size() - 6, keys.size())).containsExactly(ProfileMeta.TOOL_COMMIT,
                 ProfileMeta.BUOYANCY_PERIOD_PI0_S, ProfileMeta.PERIOD_SPACING_L1_S, ProfileMeta.LARGE_SEPARATION_UHZ,
-                ProfileMeta.ENV_CZ_BASE_ACOUSTIC_DEPTH_S);
+                ProfileMeta.SURFACE_CZ_BASE_ACOUSTIC_DEPTH_S, ProfileMeta.HE_II_IONISATION_ACOUSTIC_DEPTH_S);
     }
 
     @Test
@@ -114,20 +114,21 @@ class ProfileRoundTripTest {
         Map<String, Object> meta = metaOf(out.toString());
         // Delta nu = 1 / (2 T) (Tassoul 1980, ApJS 43, 469; from memory): T = 3529.3 s gives 141.671 microHz
         assertThat((Double) meta.get(ProfileMeta.LARGE_SEPARATION_UHZ)).isCloseTo(141.67115, within(1e-4));
-        assertThat(meta.get(ProfileMeta.ENV_CZ_BASE_ACOUSTIC_DEPTH_S)).isEqualTo(2086.3);
+        assertThat(meta.get(ProfileMeta.SURFACE_CZ_BASE_ACOUSTIC_DEPTH_S)).isEqualTo(2086.3);
+        assertThat(meta.get(ProfileMeta.HE_II_IONISATION_ACOUSTIC_DEPTH_S)).isEqualTo(630.0);
     }
 
     @Test
     void aStarWithoutAGModeCavityLeavesBothKeysOut() throws IOException {
         ProfileMeta fullyConvective = new ProfileMeta("illustrative", 0.2 * Constants.M_SUN, 0.2 * Constants.R_SUN,
                 0.005 * Constants.L_SUN, 3200.0, 1.0, "birth", 0.02, 0.27, PhysicsOptions.DEFAULT, false, "1.2.3",
-                "unknown", new SeismicScales(Double.NaN, 1500.0, 1500.0));
+                "unknown", new SeismicScales(Double.NaN, 1500.0, 1500.0, Double.NaN));
         StringBuilder out = new StringBuilder();
         ProfileWriter.write(fullyConvective, List.of(), out);
         Map<String, Object> meta = metaOf(out.toString());
         assertThat(meta).doesNotContainKeys(ProfileMeta.BUOYANCY_PERIOD_PI0_S, ProfileMeta.PERIOD_SPACING_L1_S);
         assertThat(meta).containsKey(ProfileMeta.TOOL_COMMIT);
         // its p modes have a cavity: the whole star, the envelope reaching the centre
-        assertThat(meta).containsKeys(ProfileMeta.LARGE_SEPARATION_UHZ, ProfileMeta.ENV_CZ_BASE_ACOUSTIC_DEPTH_S);
+        assertThat(meta).containsKeys(ProfileMeta.LARGE_SEPARATION_UHZ, ProfileMeta.SURFACE_CZ_BASE_ACOUSTIC_DEPTH_S);
     }
 }

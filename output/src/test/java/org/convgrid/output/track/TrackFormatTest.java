@@ -49,7 +49,7 @@ class TrackFormatTest {
         EvolutionStep overshot = new EvolutionStep(plain.age(), plain.timeStep(), plain.luminosity(), plain.radius(),
                 plain.effectiveTemperature(), plain.centralTemperature(), plain.centralDensity(),
                 plain.centralHydrogen(), cored, plain.burningInner(), plain.burningOuter(), plain.iterations(),
-                new SeismicScales(3000.0, 3529.3, 2086.3), 0.095);
+                new SeismicScales(3000.0, 3529.3, 2086.3, 630.0), 0.095);
         StringBuilder text = new StringBuilder();
         TrackWriter.write(Constants.M_SUN, List.of(
                 new TrackPoint(step(0.001, List.of(new ConvectiveZone(0.0, 1.0, 0.0, 1.0))), Phase.PRE_MAIN_SEQUENCE,
@@ -58,8 +58,8 @@ class TrackFormatTest {
                 new TrackPoint(overshot, Phase.MAIN_SEQUENCE, 1.0, 0.25, 0.0)), text);
         String[] lines = text.toString().split("\n");
         int column = TrackColumns.ALL.indexOf(TrackColumns.CORE_MIXED);
-        // the p-mode scales' two columns follow it
-        assertThat(column).isEqualTo(TrackColumns.ALL.size() - 3);
+        // the p-mode scales' three columns follow it
+        assertThat(column).isEqualTo(TrackColumns.ALL.size() - 4);
         // fully convective: no core to mix; no overshoot: the zone's own top; overshoot: the mixed edge above it
         assertThat(lines[1].split(",", -1)[column]).isEmpty();
         assertThat(lines[2].split(",", -1)[column]).isEqualTo("0.08");
@@ -67,9 +67,10 @@ class TrackFormatTest {
         // the step's p-mode scales, as the catalogue writes them: Delta nu = 1 / (2 T) in microHz (Tassoul 1980, ApJS
         // 43, 469; from memory), the envelope base's depth in s; empty for a step made without its model
         int separation = TrackColumns.ALL.indexOf(TrackColumns.LARGE_SEPARATION);
-        assertThat(List.of(lines[3].split(",", -1)).subList(separation, separation + 2))
-                .containsExactly(CsvNumbers.format(0.5e6 / 3529.3), "2086.3");
-        assertThat(List.of(lines[2].split(",", -1)).subList(separation, separation + 2)).containsExactly("", "");
+        assertThat(List.of(lines[3].split(",", -1)).subList(separation, separation + 3))
+                .containsExactly(CsvNumbers.format(0.5e6 / 3529.3), "2086.3", "630.0");
+        assertThat(List.of(lines[2].split(",", -1)).subList(separation, separation + 3))
+                .containsExactly("", "", "");
     }
 
     @Test
