@@ -10,8 +10,8 @@ package org.convgrid.engine.request;
  *     ({@code structure.AcousticTravelTime})
  * @param surfaceZoneBaseAcousticDepth the sound's travel time from the base of the convective zone that reaches the
  *     surface up to the photosphere, s, however little mass the zone holds (the base a glitch fit sees, where the
- *     catalogue's envelope also needs 1e-6 of the mass); the acoustic radius when the star is fully convective (its
- *     zone reaches the centre); NaN when the surface is radiative
+ *     catalogue's envelope also needs 1e-6 of the mass); NaN when the surface is radiative and when the star is fully
+ *     convective (no base, no glitch)
  * @param heliumSecondIonisationAcousticDepth the travel time from the minimum of Gamma1 that helium's second
  *     ionisation makes in the outer layers up to the photosphere, s; NaN when the model shows no such minimum
  */

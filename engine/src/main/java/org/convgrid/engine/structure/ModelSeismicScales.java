@@ -33,18 +33,18 @@ public final class ModelSeismicScales {
         }
         double acousticRadius = AcousticTravelTime.acousticRadius(radius, soundSpeed);
         double dip = HeliumIonisationDip.radiusOf(model);
-        return new SeismicScales(pi0, acousticRadius, surfaceZoneBaseDepth(model, radius, soundSpeed, acousticRadius),
+        return new SeismicScales(pi0, acousticRadius, surfaceZoneBaseDepth(model, radius, soundSpeed),
                 Double.isNaN(dip) ? Double.NaN : AcousticTravelTime.depthAt(radius, soundSpeed, dip));
     }
 
     /**
-     * The depth of the base of the zone that reaches the surface, however thin; the whole acoustic radius when the
-     * star is one zone from the centre; NaN when the surface is radiative.
+     * The depth of the base of the zone that reaches the surface, however thin; NaN when the surface is radiative,
+     * and when the star is one zone from the centre: it has no base, so no glitch (its envelope columns say 0, the
+     * centre, but a depth equal to the acoustic radius would read in a table or chart as a feature of the star).
      */
-    private static double surfaceZoneBaseDepth(StellarModel model, double[] radius, double[] soundSpeed,
-                                               double acousticRadius) {
+    private static double surfaceZoneBaseDepth(StellarModel model, double[] radius, double[] soundSpeed) {
         if (model.convection().structureClass() == StructureClass.FULLY_CONVECTIVE) {
-            return acousticRadius;
+            return Double.NaN;
         }
         List<ConvectiveZone> zones = model.convection().zones();
         if (zones.isEmpty()) {

@@ -143,8 +143,8 @@ public final class CatalogueColumns {
                     "acoustic depth of the base of the convective zone that reaches the surface (integral of dr / c"
                             + " from it up to the photosphere), however thin the zone (F stars' envelopes under the"
                             + " 1e-6 of the mass that env_cz_* need included), where glitch fits of the frequencies"
-                            + " locate it; measured from the photosphere, not from the acoustic surface above it; the"
-                            + " acoustic radius when fully convective; empty when the surface is radiative, when status"
+                            + " locate it; measured from the photosphere, not from the acoustic surface above it; empty"
+                            + " when fully convective (no base, no glitch), when the surface is radiative, when status"
                             + " is not ok, or in rows written before the column"),
             new EcsvColumn(HE_II_IONISATION_ACOUSTIC_DEPTH_S, "s", REAL,
                     "acoustic depth of the minimum of Gamma1 that helium's second ionisation makes between 3e4 and"

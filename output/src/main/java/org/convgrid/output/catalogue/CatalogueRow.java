@@ -58,7 +58,7 @@ import org.convgrid.output.Span;
  * @param largeSeparationUhz the asymptotic large separation Delta nu = 1 / (2 T) of p modes, microHz, T the acoustic
  *     radius; NaN when not ok, or for rows read from a catalogue written before the column
  * @param surfaceCzBaseAcousticDepthS the acoustic depth of the surface convection zone's base below the photosphere,
- *     s, however thin the zone; the acoustic radius when fully convective; NaN with a radiative surface, when not ok,
+ *     s, however thin the zone; NaN when fully convective, with a radiative surface, when not ok,
  *     or for rows read from a catalogue written before the column
  * @param heIiIonisationAcousticDepthS the acoustic depth of helium's second-ionisation dip of Gamma1, s; NaN without
  *     a dip, when not ok, or for rows read from a catalogue written before the column

@@ -60,7 +60,7 @@ public final class TrackColumns {
     public static final String LARGE_SEPARATION = "large_separation_uhz";
     /**
      * The acoustic depth of the base of the step's surface convection zone below the photosphere, s, as the
-     * catalogue's column of the same name (the acoustic radius when fully convective); empty with a radiative surface
+     * catalogue's column of the same name; empty when fully convective or with a radiative surface
      * and in track files written before the column.
      */
     public static final String SURFACE_CZ_BASE_ACOUSTIC_DEPTH = "surface_cz_base_acoustic_depth_s";
