@@ -1,6 +1,7 @@
 package org.convgrid.engine.batch;
 
 import java.util.ArrayList;
+import java.util.Iterator;
 import java.util.List;
 import java.util.Locale;
 
@@ -123,13 +124,41 @@ final class BirthAges {
         double zams = life.events().zeroAgeMainSequence();
         double exhaustion = life.result().exhaustionAge();
         if (!Double.isFinite(zams) || !Double.isFinite(exhaustion)) {
-            return failedAll(star, ModelStatus.NOT_CONVERGED, unknownLifetime(life.result(), Double.isFinite(zams),
-                    solver.settings().maxAge()));
+            String reason = unknownLifetime(life.result(), Double.isFinite(zams), solver.settings().maxAge());
+            return Double.isFinite(zams) ? zeroFractionsOnly(solver, star, zams, reason)
+                    : failedAll(star, ModelStatus.NOT_CONVERGED, reason);
         }
         List<ModelRequest> sinceBirth = star.stream().map(r -> r.withAge(new Age.SinceBirth(
-                zams + ((Age.MainSequenceFraction) r.age()).fraction() * (exhaustion - zams)))).toList();
+                zams + fractionOf(r) * (exhaustion - zams)))).toList();
         return answers(solver, sinceBirth, LifetimeSearch.landing(solver.settings()),
                 new MainSequence(zams, exhaustion));
+    }
+
+    /**
+     * A star that reached the zero-age main sequence but whose lifetime is unknown (a 0.8 Msun star at Z = 0.014 has
+     * not exhausted its core hydrogen by the 20 Gyr limit): fraction 0 is the zero-age main sequence all the same, so
+     * those rows get that model (from an evolution from birth to it, with its track and life events); every other
+     * fraction fails with the reason.
+     */
+    private static List<GridRequests.Answer> zeroFractionsOnly(GridRequests solver, List<ModelRequest> star,
+                                                               double zams, String reason) {
+        List<ModelRequest> zeros = star.stream().filter(r -> fractionOf(r) == 0.0)
+                .map(r -> r.withAge(new Age.SinceBirth(zams))).toList();
+        if (zeros.isEmpty()) {
+            return failedAll(star, ModelStatus.NOT_CONVERGED, reason);
+        }
+        Iterator<GridRequests.Answer> solved = answers(solver, zeros, LifetimeSearch.landing(solver.settings()),
+                new MainSequence(zams, Double.NaN)).iterator();
+        List<GridRequests.Answer> out = new ArrayList<>(star.size());
+        for (ModelRequest r : star) {
+            out.add(fractionOf(r) == 0.0 ? solved.next() : new GridRequests.Answer(GridRequests.failed(
+                    r.withAge(new Age.SinceBirth(Double.NaN)), ModelStatus.NOT_CONVERGED, reason), null));
+        }
+        return out;
+    }
+
+    private static double fractionOf(ModelRequest r) {
+        return ((Age.MainSequenceFraction) r.age()).fraction();
     }
 
     /**

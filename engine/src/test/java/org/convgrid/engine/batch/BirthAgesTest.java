@@ -61,4 +61,22 @@ class BirthAgesTest {
         assertThat(AgeOrigin.ofLabel("birth")).isEqualTo(AgeOrigin.BIRTH);
         assertThat(AgeOrigin.ofLabel("Birth")).isNull();
     }
+
+    @Test
+    void aStarOutlivingTheAgeLimitStillAnswersFractionZeroAtItsZeroAgeMainSequence() {
+        // 0.8 Msun at Z = 0.014 keeps core hydrogen beyond the 20 Gyr limit (its lifetime is some 25-30 Gyr at solar
+        // metallicity: the main-sequence lifetime scales roughly as M^-2.5, 10 Gyr for the Sun; common practice, no
+        // single source), so fraction 0.5 has no age; fraction 0, the zero-age main sequence, does
+        List<ModelOutcome> out = solver.solve(List.of(
+                new ModelRequest("f0", 0.8 * Constants.M_SUN, 0.014, 0.2681,
+                        new Age.MainSequenceFraction(0.0, AgeOrigin.BIRTH), PhysicsOptions.DEFAULT),
+                new ModelRequest("f1", 0.8 * Constants.M_SUN, 0.014, 0.2681,
+                        new Age.MainSequenceFraction(0.5, AgeOrigin.BIRTH), PhysicsOptions.DEFAULT)));
+        assertThat(out.get(0).status()).as(out.get(0).statusDetail()).isEqualTo(ModelStatus.OK);
+        assertThat(out.get(0).request().age()).isInstanceOfSatisfying(Age.SinceBirth.class,
+                a -> assertThat(a.seconds() / Constants.YEAR).isBetween(2e7, 2e8));
+        assertThat(out.get(0).solved().stage().preMainSequence()).isFalse();
+        assertThat(out.get(1).status()).isEqualTo(ModelStatus.NOT_CONVERGED);
+        assertThat(out.get(1).statusDetail()).contains("main-sequence lifetime unknown");
+    }
 }
