@@ -90,6 +90,25 @@ class EvolvedRunTest {
         assertThat(dir.resolve("one/life_events.csv")).as("no life events from the zero-age main sequence")
                 .doesNotExist();
         assertThat(dir.resolve("one/tracks/p0-z00-m001.csv")).exists();
+        // at a requested age the track's row and the catalogue's are the same model: the cells they share by name
+        // are the same text (the turnover times and seismic scales come from the same model in both)
+        List<String> catalogueLines = CliHarness.tableLines(dir.resolve("one/catalogue.ecsv"));
+        List<String> header = List.of(catalogueLines.get(0).split(",", -1));
+        for (String shared : List.of("luminosity_lsun", "radius_rsun", "teff_k", "central_h_frac",
+                "turnover_time_days", "turnover_time_global_days", "buoyancy_period_pi0_s", "period_spacing_l1_s",
+                "large_separation_uhz", "surface_cz_base_acoustic_depth_s", "he_ii_ionisation_acoustic_depth_s")) {
+            int inTrack = TrackColumns.ALL.indexOf(shared);
+            assertThat(inTrack).as(shared).isNotNegative();
+            for (String row : catalogueLines.subList(1, 4)) {
+                String[] rowCells = row.split(",", -1);
+                String age = rowCells[header.indexOf("age_gyr")];
+                String[] step = lines.stream().skip(1).map(l -> l.split(",", -1)).filter(c -> c[0].equals(age))
+                        .reduce((a, b) -> b).orElseThrow();
+                assertThat(step[inTrack]).as(shared + " at " + age + " Gyr")
+                        .isEqualTo(rowCells[header.indexOf(shared)]);
+            }
+        }
+        assertThat(lines.get(1).split(",", -1)[TrackColumns.ALL.indexOf(TrackColumns.TURNOVER_TIME)]).isNotEmpty();
 
         CliHarness.Execution two = run("two", 2);
         assertThat(two.code()).isZero();

@@ -1106,6 +1106,7 @@ public final class MainSequenceEvolver {
         return new EvolutionStep(age, dt, g.luminosity(), g.radius(), g.effectiveTemperature(),
                 g.centralTemperature(), g.centralDensity(), g.centralHydrogen(), model.convection().zones(), inner,
                 outer, iterations, ModelSeismicScales.of(model),
-                physics.overshoot().mixedCoreTop(model.profile()) / mass);
+                physics.overshoot().mixedCoreTop(model.profile()) / mass, model.convection().turnoverTimeLocal(),
+                model.convection().turnoverTimeGlobal());
     }
 }

@@ -66,13 +66,21 @@ public final class TrackColumns {
     public static final String SURFACE_CZ_BASE_ACOUSTIC_DEPTH = "surface_cz_base_acoustic_depth_s";
     /** The acoustic depth of the step's helium second-ionisation dip of Gamma1, s, as the catalogue's column. */
     public static final String HE_II_IONISATION_ACOUSTIC_DEPTH = "he_ii_ionisation_acoustic_depth_s";
+    /**
+     * The step's local convective turnover time, days, as the catalogue's column of the same name (half a pressure
+     * scale height above the envelope's base, at R/2 when fully convective); empty without an envelope and in track
+     * files written before the column.
+     */
+    public static final String TURNOVER_TIME = "turnover_time_days";
+    /** The step's integral of dr / v_c across the envelope, days, as the catalogue's column; empty with it. */
+    public static final String TURNOVER_TIME_GLOBAL = "turnover_time_global_days";
 
     /** Every column of a track file, in the order the writer writes them; new ones only ever at the end. */
     public static final List<String> ALL = List.of(AGE_GYR, PHASE, LUMINOSITY, RADIUS, TEFF, LOG_G, CENTRAL_TEMP,
             CENTRAL_DENSITY, CENTRAL_H, SURFACE_LI, CENTRAL_CZ_TOP, ENV_CZ_BASE, CONV_ZONE_COUNT, BURNING_INNER,
             BURNING_OUTER, NUCLEAR_FRACTION, TIME_STEP, SOLVER_ITERATIONS, BUOYANCY_PERIOD_PI0, PERIOD_SPACING_L1,
             CORE_MIXED, LARGE_SEPARATION, SURFACE_CZ_BASE_ACOUSTIC_DEPTH,
-            HE_II_IONISATION_ACOUSTIC_DEPTH);
+            HE_II_IONISATION_ACOUSTIC_DEPTH, TURNOVER_TIME, TURNOVER_TIME_GLOBAL);
 
     /** Row of the step in its track file, 0 = the first step. */
     public static final String STEP_INDEX = "step_index";

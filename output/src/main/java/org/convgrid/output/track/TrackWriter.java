@@ -82,7 +82,9 @@ public final class TrackWriter {
                             : MixedCoreEdge.of(s.mixedCoreTop(), clamp(central.outerMassFraction())))).append(',')
                     .append(CsvNumbers.format(s.seismic().largeSeparationMicrohertz())).append(',')
                     .append(CsvNumbers.format(s.seismic().surfaceZoneBaseAcousticDepth())).append(',')
-                    .append(CsvNumbers.format(s.seismic().heliumSecondIonisationAcousticDepth())).append('\n');
+                    .append(CsvNumbers.format(s.seismic().heliumSecondIonisationAcousticDepth())).append(',')
+                    .append(CsvNumbers.format(s.turnoverTimeLocal() / Constants.DAY)).append(',')
+                    .append(CsvNumbers.format(s.turnoverTimeGlobal() / Constants.DAY)).append('\n');
         }
     }
 

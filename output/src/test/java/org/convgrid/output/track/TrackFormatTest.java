@@ -49,7 +49,8 @@ class TrackFormatTest {
         EvolutionStep overshot = new EvolutionStep(plain.age(), plain.timeStep(), plain.luminosity(), plain.radius(),
                 plain.effectiveTemperature(), plain.centralTemperature(), plain.centralDensity(),
                 plain.centralHydrogen(), cored, plain.burningInner(), plain.burningOuter(), plain.iterations(),
-                new SeismicScales(3000.0, 3529.3, 2086.3, 630.0), 0.095);
+                new SeismicScales(3000.0, 3529.3, 2086.3, 630.0), 0.095, 25.0 * Constants.DAY,
+                38.5 * Constants.DAY);
         StringBuilder text = new StringBuilder();
         TrackWriter.write(Constants.M_SUN, List.of(
                 new TrackPoint(step(0.001, List.of(new ConvectiveZone(0.0, 1.0, 0.0, 1.0))), Phase.PRE_MAIN_SEQUENCE,
@@ -58,8 +59,8 @@ class TrackFormatTest {
                 new TrackPoint(overshot, Phase.MAIN_SEQUENCE, 1.0, 0.25, 0.0)), text);
         String[] lines = text.toString().split("\n");
         int column = TrackColumns.ALL.indexOf(TrackColumns.CORE_MIXED);
-        // the p-mode scales' three columns follow it
-        assertThat(column).isEqualTo(TrackColumns.ALL.size() - 4);
+        // the p-mode scales' three columns and the turnover times follow it
+        assertThat(column).isEqualTo(TrackColumns.ALL.size() - 6);
         // fully convective: no core to mix; no overshoot: the zone's own top; overshoot: the mixed edge above it
         assertThat(lines[1].split(",", -1)[column]).isEmpty();
         assertThat(lines[2].split(",", -1)[column]).isEqualTo("0.08");
@@ -71,6 +72,10 @@ class TrackFormatTest {
                 .containsExactly(CsvNumbers.format(0.5e6 / 3529.3), "2086.3", "630.0");
         assertThat(List.of(lines[2].split(",", -1)).subList(separation, separation + 3))
                 .containsExactly("", "", "");
+        // the envelope's turnover times in days, as the catalogue gives them; empty for a step made without its model
+        int turnover = TrackColumns.ALL.indexOf(TrackColumns.TURNOVER_TIME);
+        assertThat(List.of(lines[3].split(",", -1)).subList(turnover, turnover + 2)).containsExactly("25.0", "38.5");
+        assertThat(List.of(lines[2].split(",", -1)).subList(turnover, turnover + 2)).containsExactly("", "");
     }
 
     @Test

@@ -62,7 +62,7 @@ public final class HrDiagramRenderer {
      * How the note on lines that stop below the turn-off ends, after their names: why, and what computes the
      * turn-off models.
      */
-    static final String BELOW_TURNOFF_NOTE_END = " stop at the last grid mass on the main sequence, up to a grid step "
+    static final String BELOW_TURNOFF_NOTE_END = " at the last grid mass on the main sequence, up to a grid step "
             + "below the turn-off: no transition refinement found the turn-off model (run without --no-refine, or "
             + "convgrid transitions RUN_DIR --refine, then plot).";
     /** Margin added around the data range, in dex. */
@@ -294,7 +294,7 @@ public final class HrDiagramRenderer {
         String lines = named.size() == 1 ? named.get(0)
                 : String.join(", ", named.subList(0, named.size() - 1)) + " and " + named.get(named.size() - 1);
         return java.util.Optional.of((named.size() == 1 ? "The isochrone of " : "The isochrones of ") + lines
-                + BELOW_TURNOFF_NOTE_END);
+                + (named.size() == 1 ? " stops" : " stop") + BELOW_TURNOFF_NOTE_END);
     }
 
     /**

@@ -122,7 +122,7 @@ class HrTurnoffEndTest {
         StyledChart chart = HrDiagramRenderer.render(data);
         assertThat(chart.getSeriesMap()).doesNotContainKey(HrDiagramRenderer.TURNOFF_LABEL);
         assertThat(HrDiagramRenderer.notes(data, chart)).doesNotContain(HrDiagramRenderer.TURNOFF_NOTE)
-                .contains("The isochrone of 4 Gyr" + HrDiagramRenderer.BELOW_TURNOFF_NOTE_END);
+                .contains("The isochrone of 4 Gyr stops" + HrDiagramRenderer.BELOW_TURNOFF_NOTE_END);
     }
 
     @Test
