@@ -88,6 +88,10 @@ final class StarReport {
         line(out, "surface zone, acoustic depth", row.surfaceCzBaseAcousticDepthS(), "s");
         line(out, "He II dip, acoustic depth", row.heIiIonisationAcousticDepthS(), "s");
         out.println();
+        // what spin-evolution models need beside the turnover time
+        line(out, "moment of inertia", row.momentOfInertiaGCm2(), "g cm^2");
+        line(out, "convective envelope, inertia", row.envCzMomentOfInertiaGCm2(), "g cm^2");
+        out.println();
         // the zones as zones.csv lists them, with their kind (without it a reader could not tell a central zone below
         // the core threshold from a core, nor see the mass of a surface zone whose m/M ends both print 1.000000)
         List<CatalogueZone> zones = row.zones();

@@ -91,12 +91,13 @@ class EvolvedRunTest {
                 .doesNotExist();
         assertThat(dir.resolve("one/tracks/p0-z00-m001.csv")).exists();
         // at a requested age the track's row and the catalogue's are the same model: the cells they share by name
-        // are the same text (the turnover times and seismic scales come from the same model in both)
+        // are the same text (turnover times, seismic scales and moments of inertia come from that model in both)
         List<String> catalogueLines = CliHarness.tableLines(dir.resolve("one/catalogue.ecsv"));
         List<String> header = List.of(catalogueLines.get(0).split(",", -1));
         for (String shared : List.of("luminosity_lsun", "radius_rsun", "teff_k", "central_h_frac",
                 "turnover_time_days", "turnover_time_global_days", "buoyancy_period_pi0_s", "period_spacing_l1_s",
-                "large_separation_uhz", "surface_cz_base_acoustic_depth_s", "he_ii_ionisation_acoustic_depth_s")) {
+                "large_separation_uhz", "surface_cz_base_acoustic_depth_s", "he_ii_ionisation_acoustic_depth_s",
+                "moment_of_inertia_g_cm2", "env_cz_moment_of_inertia_g_cm2")) {
             int inTrack = TrackColumns.ALL.indexOf(shared);
             assertThat(inTrack).as(shared).isNotNegative();
             for (String row : catalogueLines.subList(1, 4)) {

@@ -57,7 +57,8 @@ class GModePeriodRunTest {
     void everyRowWithACavityHasBothCellsAndTheFullyConvectiveOnesNone() throws Exception {
         List<String> lines = CliHarness.tableLines(sweep("run").resolve("catalogue.ecsv"));
         assertThat(lines.get(0)).endsWith(",fe_h_dex," + PERIOD_COLUMNS
-                + ",large_separation_uhz,surface_cz_base_acoustic_depth_s,he_ii_ionisation_acoustic_depth_s");
+                + ",large_separation_uhz,surface_cz_base_acoustic_depth_s,he_ii_ionisation_acoustic_depth_s"
+                + ",moment_of_inertia_g_cm2,env_cz_moment_of_inertia_g_cm2");
         for (String line : lines.subList(1, lines.size())) {
             String[] c = cells(line);
             String pi0 = c[PI0];

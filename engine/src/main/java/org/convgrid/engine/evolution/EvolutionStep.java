@@ -30,12 +30,15 @@ import org.convgrid.engine.request.SeismicScales;
  * @param turnoverTimeLocal the convective envelope's local turnover time, s, as the catalogue's ({@link
  *     org.convgrid.engine.convection.ConvectiveStructure#turnoverTimeLocal}); NaN without an envelope
  * @param turnoverTimeGlobal the integral of dr / v_c across the envelope, s; NaN without an envelope
+ * @param momentOfInertia the step's moment of inertia, g cm^2; NaN when not known
+ * @param envelopeMomentOfInertia the convective envelope's part of it, g cm^2; NaN without an envelope
  */
 public record EvolutionStep(double age, double timeStep, double luminosity, double radius,
                             double effectiveTemperature, double centralTemperature, double centralDensity,
                             double centralHydrogen, List<ConvectiveZone> convectiveZones, double burningInner,
                             double burningOuter, int iterations, SeismicScales seismic, double mixedCoreTop,
-                            double turnoverTimeLocal, double turnoverTimeGlobal) {
+                            double turnoverTimeLocal, double turnoverTimeGlobal, double momentOfInertia,
+                            double envelopeMomentOfInertia) {
 
 
     public EvolutionStep {
@@ -43,14 +46,14 @@ public record EvolutionStep(double age, double timeStep, double luminosity, doub
         Objects.requireNonNull(seismic, "seismic");
     }
 
-    /** A step whose seismic scales, overshoot-mixed core top and turnover times are not known (made without its model). */
+    /** A step whose seismic scales, mixed core top, turnover times and inertia are not known (made without its model). */
     public EvolutionStep(double age, double timeStep, double luminosity, double radius,
                          double effectiveTemperature, double centralTemperature, double centralDensity,
                          double centralHydrogen, List<ConvectiveZone> convectiveZones, double burningInner,
                          double burningOuter, int iterations) {
         this(age, timeStep, luminosity, radius, effectiveTemperature, centralTemperature, centralDensity,
                 centralHydrogen, convectiveZones, burningInner, burningOuter, iterations, SeismicScales.UNKNOWN,
-                Double.NaN, Double.NaN, Double.NaN);
+                Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN);
     }
 
     /** m/M at the top of the convective core, 0 when the centre is radiative. */

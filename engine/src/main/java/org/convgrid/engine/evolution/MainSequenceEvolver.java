@@ -1107,6 +1107,6 @@ public final class MainSequenceEvolver {
                 g.centralTemperature(), g.centralDensity(), g.centralHydrogen(), model.convection().zones(), inner,
                 outer, iterations, ModelSeismicScales.of(model),
                 physics.overshoot().mixedCoreTop(model.profile()) / mass, model.convection().turnoverTimeLocal(),
-                model.convection().turnoverTimeGlobal());
+                model.convection().turnoverTimeGlobal(), g.momentOfInertia(), g.envelopeMomentOfInertia());
     }
 }

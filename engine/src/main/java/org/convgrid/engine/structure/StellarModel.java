@@ -3,6 +3,7 @@ package org.convgrid.engine.structure;
 import org.convgrid.engine.request.GlobalProperties;
 import org.convgrid.engine.convection.ConvectiveStructure;
 import org.convgrid.engine.convection.ConvectiveZoneFinder;
+import org.convgrid.engine.convection.StructureClass;
 import org.convgrid.engine.convection.ZoneProfile;
 import org.convgrid.engine.physics.PhysicsSet;
 import org.convgrid.engine.units.Constants;
@@ -28,11 +29,30 @@ public record StellarModel(ModelState state, StellarProfile profile, GlobalPrope
         double lum = p.luminosity(s);
         double teff = Math.pow(lum / (4.0 * Math.PI * radius * radius * Constants.SIGMA_SB), 0.25);
         double gravity = Constants.G * p.mass(s) / (radius * radius);
-        GlobalProperties g = new GlobalProperties(lum, radius, teff, gravity, p.temperature(0), p.density(0),
-                p.hydrogen(0));
         ZoneProfile zones = new ZoneProfile(p.mass(s), radius, p.masses(), p.radii(), p.stabilityExcesses(),
                 p.convectiveVelocities(), p.pressureScaleHeights(), physics.convection().alpha());
-        return new StellarModel(eq.state(y), p, g, new ConvectiveZoneFinder().find(zones), report);
+        ConvectiveStructure convection = new ConvectiveZoneFinder().find(zones);
+        double[] masses = p.masses();
+        double[] radii = p.radii();
+        GlobalProperties g = new GlobalProperties(lum, radius, teff, gravity, p.temperature(0), p.density(0),
+                p.hydrogen(0), MomentOfInertia.outside(masses, radii, 0.0),
+                envelopeMomentOfInertia(convection, masses, radii));
+        return new StellarModel(eq.state(y), p, g, convection, report);
+    }
+
+    /** The convective envelope's moment of inertia, g cm^2: outside its base (the centre when fully convective). */
+    private static double envelopeMomentOfInertia(ConvectiveStructure convection, double[] masses, double[] radii) {
+        StructureClass kind = convection.structureClass();
+        if (kind == StructureClass.FULLY_CONVECTIVE) {
+            return MomentOfInertia.outside(masses, radii, 0.0);
+        }
+        if (kind != StructureClass.CONV_ENVELOPE && kind != StructureClass.CONV_CORE_AND_ENVELOPE) {
+            return Double.NaN;
+        }
+        double total = masses[masses.length - 1];
+        double base = Math.min(1.0, Math.max(0.0, convection.envelopeBaseMassFraction())) * total;
+        return Double.isNaN(convection.envelopeBaseMassFraction()) ? Double.NaN
+                : MomentOfInertia.outside(masses, radii, base);
     }
 
     /** Total mass, g. */

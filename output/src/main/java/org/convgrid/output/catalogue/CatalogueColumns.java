@@ -66,6 +66,10 @@ public final class CatalogueColumns {
     public static final String SURFACE_CZ_BASE_ACOUSTIC_DEPTH_S = "surface_cz_base_acoustic_depth_s";
     /** Extension: the sound's travel time from helium's second-ionisation dip of Gamma1 up to the photosphere, s. */
     public static final String HE_II_IONISATION_ACOUSTIC_DEPTH_S = "he_ii_ionisation_acoustic_depth_s";
+    /** Extension: the star's moment of inertia about a diameter, g cm^2. */
+    public static final String MOMENT_OF_INERTIA_G_CM2 = "moment_of_inertia_g_cm2";
+    /** Extension: the convective envelope's moment of inertia, g cm^2. */
+    public static final String ENV_CZ_MOMENT_OF_INERTIA_G_CM2 = "env_cz_moment_of_inertia_g_cm2";
 
     private static final String REAL = "float64";
     private static final String TEXT = "string";
@@ -150,7 +154,14 @@ public final class CatalogueColumns {
                     "acoustic depth of the minimum of Gamma1 that helium's second ionisation makes between 3e4 and"
                             + " 4e5 K, the other glitch of solar-like oscillators, measured from the photosphere; empty"
                             + " when the model shows no such dip, when status is not ok, or in rows written before the"
-                            + " column"));
+                            + " column"),
+            new EcsvColumn(MOMENT_OF_INERTIA_G_CM2, "g cm2", REAL,
+                    "moment of inertia about a diameter, (2/3) integral of r^2 dm over the star, non-rotating;"
+                            + " empty when status is not ok, or in rows written before the column"),
+            new EcsvColumn(ENV_CZ_MOMENT_OF_INERTIA_G_CM2, "g cm2", REAL,
+                    "the convective envelope's part of moment_of_inertia_g_cm2, outside env_cz_base_mass_frac (the"
+                            + " whole star when fully convective); the radiative interior's is the difference; empty"
+                            + " when no envelope, when status is not ok, or in rows written before the column"));
 
     /** Every column convgrid writes for a run whose [Fe/H] is measured against the default Sun. */
     public static final List<EcsvColumn> DESCRIBED = described(IronAbundance.DEFAULT);

@@ -162,6 +162,8 @@ public final class CatalogueReader {
                     .largeSeparationUhz(c.number(CatalogueColumns.LARGE_SEPARATION_UHZ))
                     .surfaceCzBaseAcousticDepthS(c.number(CatalogueColumns.SURFACE_CZ_BASE_ACOUSTIC_DEPTH_S))
                     .heIiIonisationAcousticDepthS(c.number(CatalogueColumns.HE_II_IONISATION_ACOUSTIC_DEPTH_S))
+                    .momentOfInertiaGCm2(c.number(CatalogueColumns.MOMENT_OF_INERTIA_G_CM2))
+                    .envCzMomentOfInertiaGCm2(c.number(CatalogueColumns.ENV_CZ_MOMENT_OF_INERTIA_G_CM2))
                     .build();
         } catch (IllegalArgumentException e) {
             throw new OutputFormatException("catalogue row " + r.getRecordNumber() + " (line "

@@ -62,6 +62,9 @@ import org.convgrid.output.Span;
  *     or for rows read from a catalogue written before the column
  * @param heIiIonisationAcousticDepthS the acoustic depth of helium's second-ionisation dip of Gamma1, s; NaN without
  *     a dip, when not ok, or for rows read from a catalogue written before the column
+ * @param momentOfInertiaGCm2 the moment of inertia, g cm^2; NaN when not ok or for rows written before the column
+ * @param envCzMomentOfInertiaGCm2 the convective envelope's moment of inertia, g cm^2; NaN without an envelope, when
+ *     not ok, or for rows written before the column
  */
 public record CatalogueRow(String modelId, double massMsun, double zInit, double yInit, double mixingLength,
                            double overshootHp, double ageGyr, String phase, ModelStatus status, String statusDetail,
@@ -73,7 +76,8 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
                            StabilityCriterion criterion, double opacityScale, double turnoverTimeGlobalDays,
                            double coreMixedMassFrac, OvershootScheme overshootProfile, double buoyancyPeriodPi0S,
                            double periodSpacingL1S, double largeSeparationUhz, double surfaceCzBaseAcousticDepthS,
-                           double heIiIonisationAcousticDepthS) {
+                           double heIiIonisationAcousticDepthS, double momentOfInertiaGCm2,
+                           double envCzMomentOfInertiaGCm2) {
 
     /** The {@code phase} of a model on the main sequence. */
     public static final String MAIN_SEQUENCE = "main_sequence";
@@ -169,6 +173,8 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
         private double largeSeparationUhz = Double.NaN;
         private double surfaceCzBaseAcousticDepthS = Double.NaN;
         private double heIiIonisationAcousticDepthS = Double.NaN;
+        private double momentOfInertiaGCm2 = Double.NaN;
+        private double envCzMomentOfInertiaGCm2 = Double.NaN;
 
         private Builder(String modelId, ModelStatus status) {
             this.modelId = Objects.requireNonNull(modelId, "modelId");
@@ -212,6 +218,8 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
             largeSeparationUhz = row.largeSeparationUhz;
             surfaceCzBaseAcousticDepthS = row.surfaceCzBaseAcousticDepthS;
             heIiIonisationAcousticDepthS = row.heIiIonisationAcousticDepthS;
+            momentOfInertiaGCm2 = row.momentOfInertiaGCm2;
+            envCzMomentOfInertiaGCm2 = row.envCzMomentOfInertiaGCm2;
         }
 
         public Builder modelId(String value) {
@@ -399,6 +407,16 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
             return this;
         }
 
+        public Builder momentOfInertiaGCm2(double value) {
+            momentOfInertiaGCm2 = value;
+            return this;
+        }
+
+        public Builder envCzMomentOfInertiaGCm2(double value) {
+            envCzMomentOfInertiaGCm2 = value;
+            return this;
+        }
+
         public CatalogueRow build() {
             return new CatalogueRow(modelId, massMsun, zInit, yInit, mixingLength, overshootHp, ageGyr, phase,
                     status, statusDetail, luminosityLsun, radiusRsun, teffK, logGCgs, centralTempK,
@@ -406,7 +424,8 @@ public record CatalogueRow(String modelId, double massMsun, double zInit, double
                     envCzBaseMassFrac, envCzBaseRadiusFrac, envCzMassMsun, turnoverTimeDays, zones,
                     solverIterations, criterion, opacityScale, turnoverTimeGlobalDays, coreMixedMassFrac,
                     overshootProfile, buoyancyPeriodPi0S, periodSpacingL1S, largeSeparationUhz,
-                    surfaceCzBaseAcousticDepthS, heIiIonisationAcousticDepthS);
+                    surfaceCzBaseAcousticDepthS, heIiIonisationAcousticDepthS, momentOfInertiaGCm2,
+                    envCzMomentOfInertiaGCm2);
         }
     }
 }

@@ -117,6 +117,8 @@ public final class CatalogueWriter implements Flushable, Closeable {
         cells.add(CsvNumbers.format(r.largeSeparationUhz()));
         cells.add(CsvNumbers.format(r.surfaceCzBaseAcousticDepthS()));
         cells.add(CsvNumbers.format(r.heIiIonisationAcousticDepthS()));
+        cells.add(CsvNumbers.format(r.momentOfInertiaGCm2()));
+        cells.add(CsvNumbers.format(r.envCzMomentOfInertiaGCm2()));
         return cells;
     }
 

@@ -81,6 +81,8 @@ public final class OutcomeRows {
                 .largeSeparationUhz(seismic.largeSeparationMicrohertz())
                 .surfaceCzBaseAcousticDepthS(seismic.surfaceZoneBaseAcousticDepth())
                 .heIiIonisationAcousticDepthS(seismic.heliumSecondIonisationAcousticDepth())
+                .momentOfInertiaGCm2(g == null ? nan : g.momentOfInertia())
+                .envCzMomentOfInertiaGCm2(envelope && g != null ? g.envelopeMomentOfInertia() : nan)
                 .build();
     }
 

@@ -74,13 +74,18 @@ public final class TrackColumns {
     public static final String TURNOVER_TIME = "turnover_time_days";
     /** The step's integral of dr / v_c across the envelope, days, as the catalogue's column; empty with it. */
     public static final String TURNOVER_TIME_GLOBAL = "turnover_time_global_days";
+    /** The step's moment of inertia, g cm^2, as the catalogue's column of the same name. */
+    public static final String MOMENT_OF_INERTIA = "moment_of_inertia_g_cm2";
+    /** The convective envelope's moment of inertia, g cm^2, as the catalogue's column; empty without an envelope. */
+    public static final String ENV_CZ_MOMENT_OF_INERTIA = "env_cz_moment_of_inertia_g_cm2";
 
     /** Every column of a track file, in the order the writer writes them; new ones only ever at the end. */
     public static final List<String> ALL = List.of(AGE_GYR, PHASE, LUMINOSITY, RADIUS, TEFF, LOG_G, CENTRAL_TEMP,
             CENTRAL_DENSITY, CENTRAL_H, SURFACE_LI, CENTRAL_CZ_TOP, ENV_CZ_BASE, CONV_ZONE_COUNT, BURNING_INNER,
             BURNING_OUTER, NUCLEAR_FRACTION, TIME_STEP, SOLVER_ITERATIONS, BUOYANCY_PERIOD_PI0, PERIOD_SPACING_L1,
             CORE_MIXED, LARGE_SEPARATION, SURFACE_CZ_BASE_ACOUSTIC_DEPTH,
-            HE_II_IONISATION_ACOUSTIC_DEPTH, TURNOVER_TIME, TURNOVER_TIME_GLOBAL);
+            HE_II_IONISATION_ACOUSTIC_DEPTH, TURNOVER_TIME, TURNOVER_TIME_GLOBAL, MOMENT_OF_INERTIA,
+            ENV_CZ_MOMENT_OF_INERTIA);
 
     /** Row of the step in its track file, 0 = the first step. */
     public static final String STEP_INDEX = "step_index";

@@ -84,7 +84,9 @@ public final class TrackWriter {
                     .append(CsvNumbers.format(s.seismic().surfaceZoneBaseAcousticDepth())).append(',')
                     .append(CsvNumbers.format(s.seismic().heliumSecondIonisationAcousticDepth())).append(',')
                     .append(CsvNumbers.format(s.turnoverTimeLocal() / Constants.DAY)).append(',')
-                    .append(CsvNumbers.format(s.turnoverTimeGlobal() / Constants.DAY)).append('\n');
+                    .append(CsvNumbers.format(s.turnoverTimeGlobal() / Constants.DAY)).append(',')
+                    .append(CsvNumbers.format(s.momentOfInertia())).append(',')
+                    .append(CsvNumbers.format(s.envelopeMomentOfInertia())).append('\n');
         }
     }
 

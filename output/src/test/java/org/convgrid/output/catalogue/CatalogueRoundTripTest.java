@@ -74,14 +74,15 @@ class CatalogueRoundTripTest {
                 + "core_cz_radius_frac,env_cz_base_mass_frac,env_cz_base_radius_frac,env_cz_mass_msun,"
                 + "turnover_time_days,solver_iterations,criterion,opacity_scale,turnover_time_global_days,"
                 + "core_mixed_mass_frac,overshoot_profile,fe_h_dex,buoyancy_period_pi0_s,period_spacing_l1_s,"
-                + "large_separation_uhz,surface_cz_base_acoustic_depth_s,he_ii_ionisation_acoustic_depth_s");
+                + "large_separation_uhz,surface_cz_base_acoustic_depth_s,he_ii_ionisation_acoustic_depth_s,"
+                + "moment_of_inertia_g_cm2,env_cz_moment_of_inertia_g_cm2");
         // no core: its two columns empty; reals keep their point; an outcome made without its model has no Pi_0
         assertThat(lines[1]).isEqualTo("p0-z01-m009-a00,1.0,0.014,0.268,1.8,0.0,4.57,main_sequence,ok,,1.0,1.0,"
                 + "5772.0,4.438068,1.57e+07,150.0,0.34,,conv_envelope,,,0.9755,0.713,0.0245,25.0,7,schwarzschild,"
-                + "1.0,40.0,,uniform,-0.0992,,,,,");
+                + "1.0,40.0,,uniform,-0.0992,,,,,,,");
         assertThat(lines[2]).isEqualTo("p0-z01-m010-a00,1.1,0.014,0.268,2.0,0.1,0.0,,not_converged,"
                 + "\"residual 3e-2 after 40 iterations, shell 512\",,,,,,,,,,,,,,,,40,ledoux,1.0,,,uniform,-0.0992,"
-                + ",,,,");
+                + ",,,,,,");
     }
 
     @Test

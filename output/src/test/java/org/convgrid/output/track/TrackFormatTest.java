@@ -50,7 +50,7 @@ class TrackFormatTest {
                 plain.effectiveTemperature(), plain.centralTemperature(), plain.centralDensity(),
                 plain.centralHydrogen(), cored, plain.burningInner(), plain.burningOuter(), plain.iterations(),
                 new SeismicScales(3000.0, 3529.3, 2086.3, 630.0), 0.095, 25.0 * Constants.DAY,
-                38.5 * Constants.DAY);
+                38.5 * Constants.DAY, 7.0e53, 1.5e52);
         StringBuilder text = new StringBuilder();
         TrackWriter.write(Constants.M_SUN, List.of(
                 new TrackPoint(step(0.001, List.of(new ConvectiveZone(0.0, 1.0, 0.0, 1.0))), Phase.PRE_MAIN_SEQUENCE,
@@ -59,8 +59,8 @@ class TrackFormatTest {
                 new TrackPoint(overshot, Phase.MAIN_SEQUENCE, 1.0, 0.25, 0.0)), text);
         String[] lines = text.toString().split("\n");
         int column = TrackColumns.ALL.indexOf(TrackColumns.CORE_MIXED);
-        // the p-mode scales' three columns and the turnover times follow it
-        assertThat(column).isEqualTo(TrackColumns.ALL.size() - 6);
+        // the p-mode scales' three columns, the turnover times and the moments of inertia follow it
+        assertThat(column).isEqualTo(TrackColumns.ALL.size() - 8);
         // fully convective: no core to mix; no overshoot: the zone's own top; overshoot: the mixed edge above it
         assertThat(lines[1].split(",", -1)[column]).isEmpty();
         assertThat(lines[2].split(",", -1)[column]).isEqualTo("0.08");
