@@ -54,6 +54,21 @@ class IronAbundanceTest {
     }
 
     @Test
+    void checkSaysWhatIronAGridInZWillHave() throws Exception {
+        Path grid = CliHarness.writeGrid(dir, "inz.yaml", """
+                title: Z check
+                mass: {values: [1.0]}
+                metallicity: {z: [0.0, 0.014], helium: {primordial: 0.2471, enrichment: 1.5}}
+                age: {gyr: [0], origin: zams}
+                """);
+        CliHarness.Execution check = run("check", grid.toString());
+        assertThat(check.code()).as(check.err()).isZero();
+        // log10((0.014 / 0.7179) / 0.0245) = -0.0991 (Y = 0.2681, X = 0.7179), by hand; Z = 0 has none
+        assertThat(check.out()).contains("metallicities: 2: Z=0 Y=0.2471, Z=0.014 Y=0.2681 ([Fe/H] -0.0991); [Fe/H]"
+                + " against solar Z/X 0.0245");
+    }
+
+    @Test
     void starsCsvMeasuresIronAgainstItsOwnSun() {
         CliHarness.Execution star = run("star", "--mass", "1", "--fe-h-dex", "-0.35", "--solar-z-over-x", "0.0181",
                 "--format", "csv");

@@ -10,6 +10,8 @@ import org.convgrid.grids.GridFile;
 import org.convgrid.grids.GridSpec;
 import org.convgrid.grids.words.Counts;
 import org.convgrid.grids.words.MessageNumbers;
+import org.convgrid.output.IronAbundance;
+import org.convgrid.survey.GridIronAbundance;
 
 /** The text {@code convgrid check} prints about a valid grid: its axes, model count and a run-time estimate. */
 public final class GridSummary {
@@ -33,10 +35,16 @@ public final class GridSummary {
         List<String> lines = new ArrayList<>();
         lines.add("grid:          " + TerminalText.clean(g.title() + " (" + file.name() + ")"));
         lines.add("masses:        " + axis(g.massesMsun(), "Msun"));
+        IronAbundance iron = GridIronAbundance.of(g);
         lines.add("metallicities: " + g.metallicities().size() + ": " + g.metallicities().stream()
                 .map(p -> (Double.isNaN(p.ironDex()) ? "" : "[Fe/H]=" + MessageNumbers.format(p.ironDex()) + " ")
-                        + "Z=" + MessageNumbers.format(p.z()) + " Y=" + MessageNumbers.format(p.y()))
-                .collect(Collectors.joining(", ")));
+                        + "Z=" + MessageNumbers.format(p.z()) + " Y=" + MessageNumbers.format(p.y())
+                        // what the catalogue's fe_h_dex will read for a Z given as such (Z = 0.014 is not [Fe/H] 0
+                        // against the default Sun), so that no run is needed to see it
+                        + (Double.isNaN(p.ironDex()) && p.z() > 0.0 ? " ([Fe/H] " + iron.cell(p.z(), p.y()) + ")"
+                                : ""))
+                .collect(Collectors.joining(", "))
+                + (g.givesIron() ? "" : "; [Fe/H] against solar Z/X " + MessageNumbers.format(iron.solarZOverX())));
         boolean birth = g.ages().origin() == AgeOrigin.BIRTH;
         lines.add(g.ages().fractions()
                 ? "ages:          " + axis(g.ages().values(), "of each star's main-sequence lifetime")
