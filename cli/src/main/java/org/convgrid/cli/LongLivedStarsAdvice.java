@@ -8,8 +8,7 @@ import org.convgrid.grids.words.MessageNumbers;
  * A warning for {@code ms_fraction} grids with stars that may outlive the evolution's 20 Gyr age limit: such a
  * star has no main-sequence lifetime to take a fraction of, so every row of it but fraction 0 (its zero-age main
  * sequence, which is known) fails (a 0.7 Msun star at Z = 0.02 lost two of its three rows, and {@code check} had said
- * nothing). Printed on stderr by
- * {@code check} and {@code run} like {@link TestedRange}'s lines; never an error.
+ * nothing). Printed on stderr by {@code check} and {@code run} like {@link TestedRange}'s lines; never an error.
  */
 final class LongLivedStarsAdvice {
 
@@ -37,7 +36,7 @@ final class LongLivedStarsAdvice {
         return List.of("convgrid: warning: ms_fraction ages for stars of " + masses + ": below "
                 + MessageNumbers.format(MAY_OUTLIVE_LIMIT_MSUN) + " Msun a star may stay on the main sequence beyond "
                 + "the evolution's 20 Gyr age limit (0.85 Msun does at Z = 0.04), and then has no lifetime to take a "
-                + "fraction of: its rows fail but for fraction 0, the zero-age main sequence; give such stars ages in gyr or "
-                + "myr");
+                + "fraction of: its rows fail but for fraction 0, the zero-age main sequence; give such stars ages in "
+                + "gyr or myr");
     }
 }

@@ -15,8 +15,8 @@ import org.snakeyaml.engine.v2.api.LoadSettings;
 
 /**
  * {@code star} gives one model's g-mode period scale and p-mode scales three ways: its table, its catalogue row
- * ({@code --format csv}) and its profile's meta ({@code --profile}). All three are the same doubles (the row and the table to their own
- * digits), for a gamma Dor-like 1.5 Msun star at 1 Gyr (README: Pi_0 4195 s, Delta Pi_1 2967 s).
+ * ({@code --format csv}) and its profile's meta ({@code --profile}). All three are the same doubles (the row and the
+ * table to their own digits), for a gamma Dor-like 1.5 Msun star at 1 Gyr (README: Pi_0 4195 s, Delta Pi_1 2967 s).
  */
 class StarPeriodScaleTest {
 

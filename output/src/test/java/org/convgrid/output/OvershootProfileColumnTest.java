@@ -89,7 +89,8 @@ class OvershootProfileColumnTest {
         List<String> lines = out.toString().lines().filter(l -> !l.startsWith("#")).toList();
         // the layout before overshoot_profile had none of the columns added after it (fe_h_dex, the g-mode period
         // scale's two, the p-mode scales' two): its rows end that many cells earlier, the column's own included
-        int dropped = CatalogueColumns.HEADER.size() - CatalogueColumns.HEADER.indexOf(CatalogueColumns.OVERSHOOT_PROFILE);
+        int dropped = CatalogueColumns.HEADER.size()
+                - CatalogueColumns.HEADER.indexOf(CatalogueColumns.OVERSHOOT_PROFILE);
         String withoutColumn = lines.stream().map(l -> {
             int cut = l.length();
             for (int i = 0; i < dropped; i++) {

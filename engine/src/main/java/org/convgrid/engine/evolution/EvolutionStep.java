@@ -22,7 +22,7 @@ import org.convgrid.engine.request.SeismicScales;
  *                     {@link MainSequenceEvolver#BURNING_THRESHOLD} times its maximum
  * @param burningOuter m/M of the outermost such point
  * @param iterations Newton iterations of the structure relaxation of this step (failed tries included)
- * @param seismic the g-mode period scale, acoustic radius and envelope-base acoustic depth of the step's model ({@link
+ * @param seismic the seismic scales of the step's model: Pi_0, the acoustic radius, the glitch depths ({@link
  *     org.convgrid.engine.structure.ModelSeismicScales#of})
  * @param mixedCoreTop m/M up to which the evolution's overshoot mixes the central convective zone
  *     ({@link org.convgrid.engine.overshoot.Overshoot#mixedCoreTop}, the catalogue's {@code core_mixed_mass_frac}); NaN
@@ -46,7 +46,7 @@ public record EvolutionStep(double age, double timeStep, double luminosity, doub
         Objects.requireNonNull(seismic, "seismic");
     }
 
-    /** A step whose seismic scales, mixed core top, turnover times and inertia are not known (made without its model). */
+    /** A step whose seismic scales, mixed core top, turnover times and inertia are unknown (made without its model). */
     public EvolutionStep(double age, double timeStep, double luminosity, double radius,
                          double effectiveTemperature, double centralTemperature, double centralDensity,
                          double centralHydrogen, List<ConvectiveZone> convectiveZones, double burningInner,

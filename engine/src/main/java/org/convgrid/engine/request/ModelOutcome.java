@@ -49,7 +49,7 @@ public sealed interface ModelOutcome permits ModelOutcome.Solved, ModelOutcome.F
      * @param stage the phase and surface lithium of the model
      * @param mixedCoreMassFraction m/M up to which the evolution's overshoot mixes the central convective zone
      *     instantaneously; NaN when it mixes no further than the zone (no overshoot, decaying overshoot, no evolution)
-     * @param seismic the model's g-mode period scale, acoustic radius and envelope-base acoustic depth, as {@code
+     * @param seismic the model's g-mode period scale, acoustic radius and glitch depths, as {@code
      *     structure.ModelSeismicScales} gives them (carried here because the catalogue row is made after the model
      *     itself is gone); {@link SeismicScales#UNKNOWN} when the outcome was made without its model
      */

@@ -34,25 +34,28 @@ public record StellarModel(ModelState state, StellarProfile profile, GlobalPrope
         ConvectiveStructure convection = new ConvectiveZoneFinder().find(zones);
         double[] masses = p.masses();
         double[] radii = p.radii();
+        double inertia = MomentOfInertia.outside(masses, radii, 0.0);
         GlobalProperties g = new GlobalProperties(lum, radius, teff, gravity, p.temperature(0), p.density(0),
-                p.hydrogen(0), MomentOfInertia.outside(masses, radii, 0.0),
-                envelopeMomentOfInertia(convection, masses, radii));
+                p.hydrogen(0), inertia, envelopeMomentOfInertia(convection, masses, radii, inertia));
         return new StellarModel(eq.state(y), p, g, convection, report);
     }
 
-    /** The convective envelope's moment of inertia, g cm^2: outside its base (the centre when fully convective). */
-    private static double envelopeMomentOfInertia(ConvectiveStructure convection, double[] masses, double[] radii) {
+    /**
+     * The convective envelope's moment of inertia, g cm^2: outside its base; the star's own ({@code whole}) when
+     * fully convective; NaN without an envelope.
+     */
+    private static double envelopeMomentOfInertia(ConvectiveStructure convection, double[] masses, double[] radii,
+                                                  double whole) {
         StructureClass kind = convection.structureClass();
         if (kind == StructureClass.FULLY_CONVECTIVE) {
-            return MomentOfInertia.outside(masses, radii, 0.0);
+            return whole;
         }
-        if (kind != StructureClass.CONV_ENVELOPE && kind != StructureClass.CONV_CORE_AND_ENVELOPE) {
+        double base = convection.envelopeBaseMassFraction();
+        if ((kind != StructureClass.CONV_ENVELOPE && kind != StructureClass.CONV_CORE_AND_ENVELOPE)
+                || Double.isNaN(base)) {
             return Double.NaN;
         }
-        double total = masses[masses.length - 1];
-        double base = Math.min(1.0, Math.max(0.0, convection.envelopeBaseMassFraction())) * total;
-        return Double.isNaN(convection.envelopeBaseMassFraction()) ? Double.NaN
-                : MomentOfInertia.outside(masses, radii, base);
+        return MomentOfInertia.outside(masses, radii, Math.min(1.0, Math.max(0.0, base)) * masses[masses.length - 1]);
     }
 
     /** Total mass, g. */

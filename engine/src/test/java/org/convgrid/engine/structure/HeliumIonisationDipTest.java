@@ -13,7 +13,7 @@ class HeliumIonisationDipTest {
 
     private static final int POINTS = 400;
 
-    /** Radii of the outer layers, cm, increasing outwards; temperature falling from 1e6 to 5e3 K as a power of depth. */
+    /** Radii of the outer layers, cm, increasing outwards. */
     private static double[] radii() {
         double[] r = new double[POINTS];
         for (int k = 0; k < POINTS; k++) {
@@ -22,6 +22,7 @@ class HeliumIonisationDipTest {
         return r;
     }
 
+    /** Temperature falling from 1e6 K at the innermost point to 5e3 K at the top, as a power of the depth. */
     private static double[] temperatures(double[] r) {
         double[] t = new double[r.length];
         for (int k = 0; k < r.length; k++) {
